@@ -1,0 +1,23 @@
+// Two projects: `node` for server, harness, shared and external checks (real
+// PostgreSQL through tests/setup); `web` for screens under jest-expo/web.
+// End-to-end tests have their own config (jest.e2e.config.js), run by scripts/test.sh
+// once the server is up.
+module.exports = {
+  projects: [
+    {
+      displayName: 'node',
+      testEnvironment: 'node',
+      roots: ['<rootDir>/tests'],
+      testMatch: ['<rootDir>/tests/{server,harness,shared,scripts,external}/**/*.test.ts'],
+      transform: { '\\.[jt]sx?$': 'babel-jest' },
+      setupFiles: ['<rootDir>/tests/setup/node-setup.ts'],
+    },
+    {
+      displayName: 'web',
+      preset: 'jest-expo/web',
+      roots: ['<rootDir>/tests'],
+      testMatch: ['<rootDir>/tests/{app,components,client}/**/*.test.tsx'],
+      setupFiles: ['<rootDir>/tests/setup/web-setup.ts'],
+    },
+  ],
+};

@@ -1,0 +1,57 @@
+import { randomBytes } from 'node:crypto';
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
+
+export const PROJECT_ROOT = path.resolve(__dirname, '..');
+const DATA_DIR = path.join(PROJECT_ROOT, '.data');
+
+export interface ServerConfig {
+  /** Always a loopback address: Sheetkeeper never listens elsewhere. */
+  host: string;
+  port: number;
+  databaseUrl: string;
+  sessionSecret: string;
+  /** Secure cookies only when the app is served over HTTPS by a proxy. */
+  secureCookies: boolean;
+  webDir: string;
+}
+
+const LOOPBACK = /^(127\.\d+\.\d+\.\d+|::1|localhost)$/;
+
+/**
+ * The database URL: DATABASE_URL when set, otherwise the cluster that the start and
+ * test scripts made (`.data/pg-url`) with the database SHEETKEEPER_DB.
+ */
+export function databaseUrl(): string {
+  if (process.env.DATABASE_URL) return process.env.DATABASE_URL;
+  const urlFile = path.join(DATA_DIR, 'pg-url');
+  const base = process.env.SHEETKEEPER_PG_URL ?? (existsSync(urlFile) ? readFileSync(urlFile, 'utf8').trim() : '');
+  if (!base) throw new Error('No database: set DATABASE_URL, or run `npm start` once to create the local cluster.');
+  return `${base}/${process.env.SHEETKEEPER_DB ?? 'sheetkeeper'}`;
+}
+
+/** A stable secret kept in `.data/` so sessions survive restarts; SESSION_SECRET wins. */
+function sessionSecret(): string {
+  if (process.env.SESSION_SECRET) return process.env.SESSION_SECRET;
+  const file = path.join(DATA_DIR, 'session-secret');
+  if (!existsSync(file)) {
+    mkdirSync(DATA_DIR, { recursive: true });
+    writeFileSync(file, randomBytes(32).toString('hex'), { mode: 0o600 });
+  }
+  return readFileSync(file, 'utf8').trim();
+}
+
+export function loadConfig(): ServerConfig {
+  const host = process.env.SHEETKEEPER_HOST ?? '127.0.0.1';
+  if (!LOOPBACK.test(host)) throw new Error(`SHEETKEEPER_HOST must be a loopback address, got ${host}`);
+  const port = Number(process.env.SHEETKEEPER_PORT ?? 8460);
+  if (!Number.isInteger(port) || port < 0 || port > 65535) throw new Error(`SHEETKEEPER_PORT is not a port: ${process.env.SHEETKEEPER_PORT}`);
+  return {
+    host,
+    port,
+    databaseUrl: databaseUrl(),
+    sessionSecret: sessionSecret(),
+    secureCookies: process.env.SHEETKEEPER_SECURE_COOKIES === '1',
+    webDir: path.join(PROJECT_ROOT, 'dist'),
+  };
+}

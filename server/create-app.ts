@@ -1,0 +1,101 @@
+import connectPgSimple from 'connect-pg-simple';
+import express, { type Express } from 'express';
+import session from 'express-session';
+import helmet from 'helmet';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import { Pool } from 'pg';
+import type { DataSource } from 'typeorm';
+import type { ApiError } from '../shared/api-error';
+import { errorHandler } from './middleware/error-handler';
+import { authRouter } from './routes/auth-router';
+import { meRouter } from './routes/me-router';
+import { usersRouter } from './routes/users-router';
+import { configurePassport } from './services/configure-passport';
+import { DEFAULT_SIGN_IN_LIMITS, SignInLimiter, type SignInLimits } from './services/sign-in-limiter';
+
+export interface AppOptions {
+  dataSource: DataSource;
+  databaseUrl: string;
+  sessionSecret: string;
+  secureCookies?: boolean;
+  /** The exported web app; when missing, only the API is served. */
+  webDir?: string;
+  signInLimits?: SignInLimits;
+}
+
+export interface SheetkeeperApp {
+  app: Express;
+  /** Ends the pool behind sessions and sign-in limits (the data source is the caller's). */
+  close(): Promise<void>;
+}
+
+export const SESSION_COOKIE = 'sheetkeeper.sid';
+
+/** The Express app: API under /api, the exported web app everywhere else. */
+export function createApp(options: AppOptions): SheetkeeperApp {
+  const pool = new Pool({ connectionString: options.databaseUrl, max: 5 });
+  const passport = configurePassport(options.dataSource);
+  const limiter = new SignInLimiter(pool, options.signInLimits ?? DEFAULT_SIGN_IN_LIMITS);
+  const PgStore = connectPgSimple(session);
+
+  const app = express();
+  app.disable('x-powered-by');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          // react-native-web and expo-font write <style> elements at run time.
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'font-src': ["'self'", 'data:'],
+        },
+      },
+    }),
+  );
+
+  const api = express.Router();
+  api.use((_req, res, next) => {
+    res.set('Cache-Control', 'no-store');
+    next();
+  });
+  api.use(express.json({ limit: '100kb', strict: true }));
+  api.use(
+    session({
+      name: SESSION_COOKIE,
+      store: new PgStore({ pool, tableName: 'sessions', createTableIfMissing: false, pruneSessionInterval: 15 * 60 }),
+      secret: options.sessionSecret,
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      cookie: { httpOnly: true, sameSite: 'lax', secure: options.secureCookies ?? false, maxAge: 7 * 24 * 3600 * 1000, path: '/' },
+    }),
+  );
+  api.use(passport.initialize());
+  api.use(passport.session());
+
+  api.use('/auth', authRouter(passport, limiter));
+  api.use('/me', meRouter());
+  api.use('/users', usersRouter(options.dataSource));
+  api.use((_req, res) => {
+    res.status(404).json({ kind: 'not-found', message: 'No such API route.' } satisfies ApiError);
+  });
+  api.use(errorHandler);
+  app.use('/api', api);
+
+  const webDir = options.webDir;
+  if (webDir && existsSync(path.join(webDir, 'index.html'))) {
+    app.use(express.static(webDir, { index: 'index.html', maxAge: '1h' }));
+    // Expo Router's single-page export: every other path is a client route.
+    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(webDir, 'index.html')));
+  } else {
+    app.get('/{*splat}', (_req, res) => res.status(503).type('text').send('The web app is not exported yet: run `npm start`.'));
+  }
+
+  return {
+    app,
+    close: async () => {
+      await pool.end();
+    },
+  };
+}

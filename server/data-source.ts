@@ -1,0 +1,21 @@
+import 'reflect-metadata';
+import { DataSource } from 'typeorm';
+import { User } from './entities/user';
+import { UsersSessionsSignInLimits1764626400000 } from './migrations/1764626400000-users-sessions-sign-in-limits';
+
+/** Entities and migrations are listed, not globbed, so tsx, jest and tsc builds all find them. */
+export const ENTITIES = [User];
+export const MIGRATIONS = [UsersSessionsSignInLimits1764626400000];
+
+export function createDataSource(url: string): DataSource {
+  return new DataSource({
+    type: 'postgres',
+    url,
+    entities: ENTITIES,
+    migrations: MIGRATIONS,
+    migrationsTableName: 'migrations',
+    synchronize: false,
+    logging: ['error'],
+    extra: { max: 10 },
+  });
+}

@@ -1,0 +1,27 @@
+import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import type { Role } from '../../shared/roles';
+
+@Entity({ name: 'users' })
+export class User {
+  @PrimaryGeneratedColumn('uuid')
+  id!: string;
+
+  /** Stored lower-cased; unique. */
+  @Column({ type: 'text', unique: true })
+  email!: string;
+
+  @Column({ type: 'text', name: 'display_name' })
+  displayName!: string;
+
+  @Column({ type: 'text', name: 'password_hash' })
+  passwordHash!: string;
+
+  @Column({ type: 'text' })
+  role!: Role;
+
+  @CreateDateColumn({ type: 'timestamptz', name: 'created_at' })
+  createdAt!: Date;
+
+  @UpdateDateColumn({ type: 'timestamptz', name: 'updated_at' })
+  updatedAt!: Date;
+}

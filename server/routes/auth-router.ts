@@ -1,0 +1,51 @@
+import { Router } from 'express';
+import type { configurePassport } from '../services/configure-passport';
+import type { ApiError } from '../../shared/api-error';
+import { signInBody } from '../../shared/schemas/sign-in-body';
+import type { User } from '../entities/user';
+import { parseInput } from '../services/parse-input';
+import type { SignInLimiter } from '../services/sign-in-limiter';
+import { toPublicUser } from '../services/to-public-user';
+
+const WRONG: ApiError = { kind: 'wrong-credentials', message: 'That e-mail and password do not match an account.' };
+
+export function authRouter(passport: ReturnType<typeof configurePassport>, limiter: SignInLimiter): Router {
+  const router = Router();
+
+  router.post('/sign-in', async (req, res, next) => {
+    const body = parseInput(signInBody, req.body, 'body');
+    req.body = body;
+    const address = req.ip ?? 'unknown';
+    const wait = await limiter.retryAfter(body.email, address);
+    if (wait > 0) {
+      res.set('Retry-After', String(wait));
+      res.status(429).json({ kind: 'too-many-attempts', message: `Too many failed attempts. Try again in ${Math.ceil(wait / 60)} min.`, retryAfterSeconds: wait } satisfies ApiError);
+      return;
+    }
+    passport.authenticate('local', { session: false }, (err: unknown, user: User | false) => {
+      if (err) return next(err);
+      if (!user) {
+        limiter.recordFailure(body.email, address).then(() => res.status(401).json(WRONG), next);
+        return;
+      }
+      // req.logIn regenerates the session id (passport ≥ 0.6) before storing the user.
+      req.logIn(user, (loginErr) => {
+        if (loginErr) return next(loginErr);
+        limiter.recordSuccess(body.email, address).then(() => res.json({ user: toPublicUser(user) }), next);
+      });
+    })(req, res, next);
+  });
+
+  router.post('/sign-out', (req, res, next) => {
+    req.logout((logoutErr) => {
+      if (logoutErr) return next(logoutErr);
+      req.session.destroy((destroyErr) => {
+        if (destroyErr) return next(destroyErr);
+        res.clearCookie('sheetkeeper.sid', { path: '/' });
+        res.status(204).end();
+      });
+    });
+  });
+
+  return router;
+}

@@ -1,0 +1,40 @@
+import { Router } from 'express';
+import type { DataSource } from 'typeorm';
+import type { ApiError } from '../../shared/api-error';
+import { idParams } from '../../shared/schemas/id-params';
+import { roleChangeBody } from '../../shared/schemas/role-change-body';
+import { User } from '../entities/user';
+import { requireRole } from '../middleware/require-role';
+import { parseInput } from '../services/parse-input';
+import { toPublicUser } from '../services/to-public-user';
+
+export function usersRouter(dataSource: DataSource): Router {
+  const router = Router();
+  const users = dataSource.getRepository(User);
+
+  router.get('/', requireRole('admin'), async (_req, res) => {
+    const all = await users.find({ order: { createdAt: 'ASC', email: 'ASC' } });
+    res.json({ users: all.map(toPublicUser) });
+  });
+
+  router.patch('/:id', requireRole('admin'), async (req, res) => {
+    const { id } = parseInput(idParams, req.params, 'params');
+    const { role } = parseInput(roleChangeBody, req.body, 'body');
+    // Read, check and write in one transaction that locks the admins, so two admins
+    // demoting each other at once cannot leave the team without one.
+    const outcome = await dataSource.transaction(async (tx) => {
+      const repo = tx.getRepository(User);
+      const admins = await repo.find({ where: { role: 'admin' }, lock: { mode: 'pessimistic_write' } });
+      const user = await repo.findOneBy({ id });
+      if (!user) return { status: 404, body: { kind: 'not-found', message: 'No user with that id.' } satisfies ApiError };
+      if (user.role === 'admin' && role !== 'admin' && admins.length <= 1) {
+        return { status: 409, body: { kind: 'conflict', message: 'This is the last admin; make someone else admin first.' } satisfies ApiError };
+      }
+      user.role = role;
+      return { status: 200, body: { user: toPublicUser(await repo.save(user)) } };
+    });
+    res.status(outcome.status).json(outcome.body);
+  });
+
+  return router;
+}

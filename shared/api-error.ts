@@ -1,0 +1,21 @@
+/** One broken rule of an input: the dotted field path and what the rule says. */
+export interface FieldIssue {
+  field: string;
+  rule: string;
+}
+
+/**
+ * Every error body the API sends. `kind` tells the app how to show it; `issues`
+ * is present for `invalid-input` only.
+ */
+export type ApiError =
+  | { kind: 'invalid-input'; message: string; issues: FieldIssue[] }
+  | { kind: 'signed-out'; message: string }
+  | { kind: 'forbidden'; message: string }
+  | { kind: 'not-found'; message: string }
+  | { kind: 'wrong-credentials'; message: string }
+  | { kind: 'too-many-attempts'; message: string; retryAfterSeconds: number }
+  | { kind: 'conflict'; message: string }
+  | { kind: 'payload-too-large'; message: string }
+  | { kind: 'unsupported-media-type'; message: string }
+  | { kind: 'server-error'; message: string };

@@ -1,0 +1,2 @@
+// Screen tests run under jest-expo/web with @testing-library/react.
+export {};
