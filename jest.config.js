@@ -11,6 +11,7 @@ module.exports = {
       testMatch: ['<rootDir>/tests/{server,harness,shared,scripts,external}/**/*.test.ts'],
       transform: { '\\.[jt]sx?$': 'babel-jest' },
       setupFiles: ['<rootDir>/tests/setup/node-setup.ts'],
+      globalSetup: '<rootDir>/tests/setup/global-setup.ts',
     },
     {
       displayName: 'web',

@@ -24,7 +24,7 @@ async function main(): Promise<void> {
     server.close(() => {
       void close().then(() => dataSource.destroy()).then(() => process.exit(0));
     });
-    setTimeout(() => process.exit(0), 5000).unref();
+    setTimeout(() => process.exit(0), 5000);
   };
   process.on('SIGTERM', shutdown);
   process.on('SIGINT', shutdown);

@@ -1,7 +1,9 @@
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Check, Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
 import type { Role } from '../../shared/roles';
 
 @Entity({ name: 'users' })
+@Check('users_email_lower', 'email = lower(email)')
+@Check('users_role_known', "role IN ('admin', 'maintainer', 'reviewer', 'contributor')")
 export class User {
   @PrimaryGeneratedColumn('uuid')
   id!: string;

@@ -7,6 +7,7 @@ export const signInBody = jsonObject({
     .string({ error: 'is required' })
     .trim()
     .toLowerCase()
+    .min(1, { error: 'is required' })
     .max(254, { error: 'must be at most 254 characters' })
     .pipe(z.email({ error: 'must be an e-mail address' })),
   password: z

@@ -1,4 +1,2 @@
+// TypeORM's decorators read metadata through reflect-metadata.
 import 'reflect-metadata';
-
-// Node tests use the test database unless the caller chose one.
-process.env.SHEETKEEPER_DB ??= 'sheetkeeper_test';

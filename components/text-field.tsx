@@ -1,0 +1,52 @@
+import { StyleSheet, Text, TextInput, View, type TextInputProps } from 'react-native';
+import { theme } from '../constants/theme';
+
+interface Props extends Pick<TextInputProps, 'secureTextEntry' | 'autoComplete' | 'keyboardType' | 'onSubmitEditing' | 'autoCapitalize'> {
+  label: string;
+  value: string;
+  onChangeText: (text: string) => void;
+  /** The broken rule, shown under the field and announced to screen readers. */
+  error?: string;
+  testID?: string;
+}
+
+export function TextField({ label, value, onChangeText, error, testID, ...inputProps }: Props) {
+  return (
+    <View style={styles.field}>
+      <Text style={styles.label}>{label}</Text>
+      <TextInput
+        accessibilityLabel={label}
+        aria-invalid={error ? true : undefined}
+        value={value}
+        onChangeText={onChangeText}
+        style={[styles.input, error ? styles.inputError : null]}
+        testID={testID}
+        autoCorrect={false}
+        {...inputProps}
+      />
+      {error ? (
+        <Text accessibilityRole="alert" style={styles.error}>
+          ✕ {label} {error}
+        </Text>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  field: { gap: theme.space(1) },
+  label: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft, letterSpacing: 0.3 },
+  input: {
+    minHeight: theme.touch,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    paddingHorizontal: theme.space(3),
+    fontFamily: theme.font.regular,
+    fontSize: theme.size.body,
+    color: theme.color.ink,
+    backgroundColor: theme.color.panel,
+  },
+  inputError: { borderColor: theme.color.danger, borderWidth: 2 },
+  error: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.danger },
+});

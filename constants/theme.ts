@@ -1,0 +1,36 @@
+/**
+ * Sheetkeeper's look: warm paper, slate ink, one verdigris accent. Meaning is never
+ * carried by colour alone: every coloured state also has a word or a glyph.
+ */
+export const theme = {
+  color: {
+    paper: '#F4F1EA',
+    panel: '#FFFDF8',
+    ink: '#1F2A36',
+    inkSoft: '#4D5A68',
+    inkFaint: '#7C8692',
+    rule: '#D9D3C5',
+    accent: '#2E6B5E',
+    accentInk: '#FFFFFF',
+    accentSoft: '#DCEBE6',
+    danger: '#A8432E',
+    dangerSoft: '#F6E1DA',
+    focus: '#C58B1B',
+    nav: '#1F2A36',
+    navInk: '#E9E4D8',
+    navActive: '#F4F1EA',
+  },
+  font: {
+    regular: 'IBMPlexSans_400Regular',
+    medium: 'IBMPlexSans_500Medium',
+    bold: 'IBMPlexSans_700Bold',
+    mono: 'IBMPlexMono_400Regular',
+  },
+  size: { small: 13, body: 16, large: 20, title: 26 },
+  space: (n: number) => n * 4,
+  radius: 6,
+  /** Touch targets are at least this tall (WCAG 2.5.5 asks for 44 px). */
+  touch: 48,
+  /** From this width on, side navigation and multi-column layouts. */
+  wide: 1024,
+} as const;

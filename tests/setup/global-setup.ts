@@ -1,0 +1,29 @@
+import 'reflect-metadata';
+import { Client } from 'pg';
+import { createDataSource } from '../../server/data-source';
+import { seedDemo } from '../../server/seed/seed-demo';
+import { pgBaseUrl } from './pg-base-url';
+import { TEMPLATE_DATABASE } from './template-database';
+
+/**
+ * Builds the template database once per jest run: migrated with the real
+ * migrations and seeded with the demo users (so bcrypt runs once, not per file).
+ */
+export default async function globalSetup(): Promise<void> {
+  const admin = new Client({ connectionString: `${pgBaseUrl()}/postgres` });
+  await admin.connect();
+  try {
+    await admin.query(`DROP DATABASE IF EXISTS ${TEMPLATE_DATABASE} WITH (FORCE)`);
+    await admin.query(`CREATE DATABASE ${TEMPLATE_DATABASE}`);
+  } finally {
+    await admin.end();
+  }
+  const dataSource = createDataSource(`${pgBaseUrl()}/${TEMPLATE_DATABASE}`);
+  await dataSource.initialize();
+  try {
+    await dataSource.runMigrations({ transaction: 'each' });
+    await seedDemo(dataSource);
+  } finally {
+    await dataSource.destroy();
+  }
+}
