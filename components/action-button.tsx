@@ -16,7 +16,8 @@ export function ActionButton({ label, onPress, busy = false, disabled = false, t
     <Pressable
       accessibilityRole="button"
       accessibilityLabel={accessibilityLabel ?? label}
-      accessibilityState={{ disabled: inactive, busy }}
+      aria-disabled={inactive}
+      aria-busy={busy}
       disabled={inactive}
       onPress={onPress}
       style={({ pressed }) => [styles.base, tone === 'primary' ? styles.primary : styles.quiet, pressed && styles.pressed, inactive && styles.inactive]}

@@ -23,7 +23,7 @@ export function AppFrame({ user, children }: { user: PublicUser; children: React
       <Pressable
         accessibilityRole="link"
         accessibilityLabel={item.label}
-        accessibilityState={{ selected: isActive(item.href) }}
+        aria-current={isActive(item.href) ? 'page' : undefined}
         // Link's asChild merges styles as objects: hand it a flat one (an array breaks on web).
         style={StyleSheet.flatten([wide ? styles.railItem : styles.tabItem, isActive(item.href) && (wide ? styles.railItemActive : styles.tabItemActive)])}
       >

@@ -50,7 +50,7 @@ export function UsersList({ me }: { me: PublicUser }) {
                   key={role}
                   accessibilityRole="radio"
                   accessibilityLabel={`Make ${user.displayName} ${role}`}
-                  accessibilityState={{ checked: user.role === role }}
+                  aria-checked={user.role === role}
                   onPress={() => user.role !== role && changeRole.mutate({ id: user.id, role })}
                   style={[styles.chip, user.role === role && styles.chipOn]}
                 >

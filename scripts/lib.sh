@@ -2,7 +2,7 @@
 # Infrastructure shared by start, test and stop: npm dependencies, a PostgreSQL
 # cluster on loopback, databases, and the web export. Every step is idempotent,
 # so a second run reuses what the first one made.
-set -euo pipefail
+set -Eeuo pipefail
 
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 cd "$ROOT"
@@ -13,6 +13,7 @@ PG_PORT="${SHEETKEEPER_PG_PORT:-55432}"
 PG_USER=sheetkeeper
 
 log() { printf '[sheetkeeper] %s\n' "$*" >&2; }
+trap 'log "stopped: \"$BASH_COMMAND\" failed (${BASH_SOURCE[0]}:$LINENO)"' ERR
 
 as_root() {
   if [ "$(id -u)" -eq 0 ]; then "$@"; elif command -v sudo >/dev/null; then sudo -n "$@"; else
@@ -121,8 +122,10 @@ stop_postgres() {
 
 # Hash of everything that goes into the web export.
 web_sources_hash() {
-  { find app components constants client shared assets -type f 2>/dev/null | LC_ALL=C sort | xargs sha256sum
-    sha256sum app.json babel.config.js metro.config.js package-lock.json tsconfig.json 2>/dev/null; } | sha256sum | cut -d' ' -f1
+  local f
+  { find app components constants client shared assets -type f 2>/dev/null | LC_ALL=C sort | xargs -r sha256sum
+    for f in app.json babel.config.js metro.config.js package-lock.json tsconfig.json; do [ -f "$f" ] && sha256sum "$f"; done
+    true; } | sha256sum | cut -d' ' -f1
 }
 
 # Rebuilds dist/ only when the app's sources changed since the last export.

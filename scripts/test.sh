@@ -1,0 +1,48 @@
+#!/usr/bin/env bash
+# `npm test`: the same infrastructure as `npm start` (own databases), then the type
+# check, jest (node + web projects), and end-to-end tests in Chromium against the
+# exported app served by the real server. Ends with one line "Tests: N passed, N failed".
+source "$(dirname "$0")/lib.sh"
+began=$(date +%s)
+
+ensure_node_modules
+ensure_postgres
+ensure_python_references
+ensure_chromium
+
+OUT="$ROOT/.data/test-output"
+rm -rf "$OUT" && mkdir -p "$OUT" "$ROOT/test-results"
+
+log "type check (tsc --noEmit)"
+tsc_status=0
+npx tsc --noEmit -p tsconfig.json || tsc_status=$?
+
+log "jest: node and web projects"
+npx jest --ci --json --outputFile="$OUT/unit.json" || true
+
+log "end-to-end: preparing the e2e database, the web export and the server"
+E2E_DB=sheetkeeper_e2e
+ensure_database "$E2E_DB" fresh
+SHEETKEEPER_DB="$E2E_DB" node --import tsx scripts/migrate.ts
+SHEETKEEPER_DB="$E2E_DB" node --import tsx scripts/seed.ts
+ensure_web_export
+E2E_PORT="${SHEETKEEPER_E2E_PORT:-8461}"
+if (echo >"/dev/tcp/127.0.0.1/$E2E_PORT") 2>/dev/null; then
+  log "port $E2E_PORT is taken; set SHEETKEEPER_E2E_PORT to a free port"; exit 2
+fi
+SHEETKEEPER_DB="$E2E_DB" SHEETKEEPER_PORT="$E2E_PORT" node --import tsx server/main.ts >"$OUT/e2e-server.log" 2>&1 &
+server_pid=$!
+trap 'kill "$server_pid" 2>/dev/null || true' EXIT
+for _ in $(seq 1 120); do
+  code=$(curl -s -o /dev/null -w '%{http_code}' "http://127.0.0.1:$E2E_PORT/api/me" || true)
+  [ "$code" = 401 ] && break
+  kill -0 "$server_pid" 2>/dev/null || { cat "$OUT/e2e-server.log" >&2; break; }
+  sleep 0.25
+done
+log "jest: end-to-end project against http://127.0.0.1:$E2E_PORT"
+SHEETKEEPER_E2E_URL="http://127.0.0.1:$E2E_PORT" npx jest -c jest.e2e.config.js --ci --json --outputFile="$OUT/e2e.json" || true
+kill "$server_pid" 2>/dev/null || true
+
+log "finished in $(( $(date +%s) - began )) s"
+trap - ERR
+node --import tsx scripts/summarize-tests.ts --tsc-status "$tsc_status" "$OUT/unit.json" "$OUT/e2e.json"

@@ -1,0 +1,89 @@
+import { DEMO_USERS } from '../../server/seed/demo-users';
+import { ROLES } from '../../shared/roles';
+import { BASE_URL, openBrowser, type OpenBrowser } from './support/open-browser';
+import { saveScreenshots } from './support/save-screenshots';
+import { signIn } from './support/sign-in';
+
+let b: OpenBrowser;
+beforeEach(async () => {
+  b = await openBrowser();
+});
+afterEach(async () => {
+  const errors = [...b.pageErrors];
+  await b.close();
+  expect(errors).toEqual([]);
+});
+
+const demo = (role: string) => DEMO_USERS.find((u) => u.role === role)!;
+
+describe('signing in and out', () => {
+  it('sends a signed-out visitor to the sign-in screen', async () => {
+    await b.page.goto(`${BASE_URL}/users`);
+    await b.page.getByRole('button', { name: 'Sign in' }).waitFor();
+    expect(new URL(b.page.url()).pathname).toBe('/sign-in');
+    await saveScreenshots(b.page, 'sign-in', () => b.page.getByRole('button', { name: 'Sign in' }).waitFor());
+  });
+
+  it('shows the inline rules and then the wrong-password message', async () => {
+    await b.page.goto(`${BASE_URL}/sign-in`);
+    await b.page.getByRole('button', { name: 'Sign in' }).click();
+    await b.page.getByText('✕ E-mail is required').waitFor();
+    await b.page.getByLabel('E-mail').fill('ravi@sheetkeeper.test');
+    await b.page.getByLabel('Password').fill('not-the-password');
+    await b.page.getByRole('button', { name: 'Sign in' }).click();
+    await b.page.getByText('✕ That e-mail and password do not match an account.').waitFor();
+    expect(await b.page.getByLabel('E-mail').inputValue()).toBe('ravi@sheetkeeper.test');
+    await saveScreenshots(b.page, 'sign-in-wrong-password', () => b.page.getByText('✕ That e-mail and password').waitFor());
+  });
+
+  it.each(ROLES)('signs in as %s, shows who and which role, and signs out', async (role) => {
+    const user = demo(role);
+    await signIn(b.page, user.email, user.password);
+    expect(await b.page.getByTestId('home-email').textContent()).toBe(user.email);
+    await b.page.getByLabel(`role ${role}`).first().waitFor();
+    // Only admins see Users in the navigation.
+    expect(await b.page.getByRole('link', { name: 'Users' }).count()).toBe(role === 'admin' ? 1 : 0);
+    await saveScreenshots(b.page, `home-${role}`, () => b.page.getByTestId('home-email').waitFor());
+    await b.page.getByRole('button', { name: 'Sign out' }).click();
+    await b.page.getByRole('button', { name: 'Sign in' }).waitFor();
+    expect(await b.page.evaluate(() => fetch('/api/me').then((r) => r.status))).toBe(401);
+  });
+
+  it('shows a not-found screen for an unknown address', async () => {
+    await b.page.goto(`${BASE_URL}/no/such/screen`);
+    await b.page.getByText('No page here').waitFor();
+    await saveScreenshots(b.page, 'not-found', () => b.page.getByText('No page here').waitFor());
+  });
+});
+
+describe('roles', () => {
+  it('keeps Users from a contributor: no link, a refusal on the screen, and 403 from the API', async () => {
+    const ravi = demo('contributor');
+    await signIn(b.page, ravi.email, ravi.password);
+    expect(await b.page.getByRole('link', { name: 'Users' }).count()).toBe(0);
+    await b.page.goto(`${BASE_URL}/users`);
+    await b.page.getByText('Only admins can see users.').waitFor();
+    expect(await b.page.evaluate(() => fetch('/api/users').then((r) => r.status))).toBe(403);
+  });
+
+  it("lets an admin change a contributor's role, which shows when that user signs in again", async () => {
+    const odile = demo('admin');
+    await signIn(b.page, odile.email, odile.password);
+    await b.page.getByRole('link', { name: 'Users' }).click();
+    const mei = b.page.getByTestId('user-mei@sheetkeeper.test');
+    await mei.waitFor();
+    await saveScreenshots(b.page, 'users', () => mei.waitFor());
+    const [patch] = await Promise.all([
+      b.page.waitForResponse((r) => r.url().includes('/api/users/') && r.request().method() === 'PATCH'),
+      mei.getByRole('radio', { name: 'Make Mei Okonkwo reviewer' }).click(),
+    ]);
+    expect(patch.status()).toBe(200);
+    await mei.getByRole('radio', { name: 'Make Mei Okonkwo reviewer', checked: true }).waitFor();
+    await b.page.getByRole('button', { name: 'Sign out' }).click();
+    await b.page.getByRole('button', { name: 'Sign in' }).waitFor();
+
+    await signIn(b.page, 'mei@sheetkeeper.test', 'mei-demo-2026');
+    await b.page.getByLabel('role reviewer').waitFor();
+    expect(await b.page.getByLabel('role contributor').count()).toBe(0);
+  });
+});
