@@ -1,0 +1,35 @@
+import { answerReference } from './reference/answer-reference';
+import { jsonLines } from './json-lines';
+
+const USAGE = `usage: sheetkeeper <command>
+
+commands:
+  reference   principal values: JSON lines {"fn","z","convention",["w"|"n"]} on stdin, one answer per line
+  continue    regular branches of g(z)^nu along a path: JSON lines {"g","nu","z0","f0"|"k","path","at"}
+`;
+
+/** The `sheetkeeper` command: dispatches a subcommand; unknown ones print the usage and exit 2. */
+async function main(argv: string[]): Promise<number> {
+  const [command] = argv;
+  if (command === 'reference') {
+    await jsonLines(process.stdin, process.stdout, answerReference);
+    return 0;
+  }
+  if (command === 'continue') {
+    const { answerContinue } = await import('./reference/continuation/answer-continue');
+    await jsonLines(process.stdin, process.stdout, answerContinue);
+    return 0;
+  }
+  process.stderr.write(command ? `sheetkeeper: unknown command "${command}"\n${USAGE}` : USAGE);
+  return 2;
+}
+
+main(process.argv.slice(2)).then(
+  (code) => {
+    process.exitCode = code;
+  },
+  (e: unknown) => {
+    process.stderr.write(`sheetkeeper: ${e instanceof Error ? e.message : String(e)}\n`);
+    process.exitCode = 2;
+  },
+);

@@ -1,0 +1,21 @@
+import { z } from 'zod';
+import { complexString, numberString } from './complex-string';
+import { conventionSchema } from './convention-schema';
+
+/** One request line of `sheetkeeper reference` (DESIGN.md §5). */
+export const referenceRequest = z.strictObject(
+  {
+    fn: z.string({ error: 'is required' }).max(20),
+    z: complexString,
+    convention: conventionSchema.default('signed-zero'),
+    w: z.union([complexString, numberString], { error: 'must be {"re","im"} or a number string such as "1/3"' }).optional(),
+    n: z.union([z.number().int(), z.string().regex(/^[+-]?\d+$/)], { error: 'must be an integer' }).optional(),
+    digits: z.number().int().min(1).max(200).optional(),
+  },
+  {
+    error: (issue) =>
+      issue.code === 'unrecognized_keys' ? `has unknown fields: ${issue.keys.join(', ')}` : 'must be a JSON object',
+  },
+);
+
+export type ReferenceRequest = z.infer<typeof referenceRequest>;
