@@ -86,6 +86,10 @@ ensure_postgres() {
     pg_as_owner "$PG_BIN/initdb" -D "$PGDATA" -U "$PG_USER" --pwfile="$pwfile" \
       --auth-host=scram-sha-256 --auth-local=reject -E UTF8 --locale=C.UTF-8 >/dev/null
   fi
+  if "$PG_BIN/pg_isready" -q -h 127.0.0.1 -p "$PG_PORT" && ! pg_as_owner "$PG_BIN/pg_ctl" -D "$PGDATA" status >/dev/null 2>&1; then
+    log "port $PG_PORT answers, but not with this checkout's cluster ($PGDATA): set SHEETKEEPER_PG_PORT to a free port"
+    return 1
+  fi
   if ! "$PG_BIN/pg_isready" -q -h 127.0.0.1 -p "$PG_PORT"; then
     log "starting PostgreSQL on 127.0.0.1:$PG_PORT"
     pg_as_owner "$PG_BIN/pg_ctl" -D "$PGDATA" -l "$PGROOT/postgres.log" -w -t 60 start \
