@@ -9,7 +9,19 @@ cd "$ROOT"
 
 PG_VERSION=15
 PG_BIN="/usr/lib/postgresql/${PG_VERSION}/bin"
-PG_PORT="${SHEETKEEPER_PG_PORT:-55432}"
+# The cluster's port: SHEETKEEPER_PG_PORT, else the one this checkout chose before
+# (.data/pg-port), else the first of 55432… that nothing answers on.
+port_answers() { (echo >"/dev/tcp/127.0.0.1/$1") 2>/dev/null; }
+choose_pg_port() {
+  if [ -n "${SHEETKEEPER_PG_PORT:-}" ]; then echo "$SHEETKEEPER_PG_PORT"; return; fi
+  if [ -f "$ROOT/.data/pg-port" ]; then cat "$ROOT/.data/pg-port"; return; fi
+  local port
+  for port in $(seq 55432 55499); do
+    if ! port_answers "$port"; then mkdir -p "$ROOT/.data"; echo "$port" > "$ROOT/.data/pg-port"; echo "$port"; return; fi
+  done
+  echo 55432
+}
+PG_PORT="$(choose_pg_port)"
 PG_USER=sheetkeeper
 
 log() { printf '[sheetkeeper] %s\n' "$*" >&2; }

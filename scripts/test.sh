@@ -27,15 +27,16 @@ SHEETKEEPER_DB="$E2E_DB" node --import tsx scripts/migrate.ts
 SHEETKEEPER_DB="$E2E_DB" node --import tsx scripts/seed.ts
 ensure_web_export
 E2E_PORT="${SHEETKEEPER_E2E_PORT:-8461}"
-if (echo >"/dev/tcp/127.0.0.1/$E2E_PORT") 2>/dev/null; then
-  log "port $E2E_PORT is taken; set SHEETKEEPER_E2E_PORT to a free port"; exit 2
+if port_answers "$E2E_PORT"; then
+  [ -n "${SHEETKEEPER_E2E_PORT:-}" ] && { log "port $E2E_PORT is taken"; exit 2; }
+  E2E_PORT="$(node -e "const s = require('net').createServer(); s.listen(0, '127.0.0.1', () => { console.log(s.address().port); s.close(); })")"
+  log "port 8461 is taken; the e2e server uses $E2E_PORT"
 fi
 SHEETKEEPER_DB="$E2E_DB" SHEETKEEPER_PORT="$E2E_PORT" node --import tsx server/main.ts >"$OUT/e2e-server.log" 2>&1 &
 server_pid=$!
 trap 'kill "$server_pid" 2>/dev/null || true' EXIT
 for _ in $(seq 1 120); do
-  code=$(curl -s -o /dev/null -w '%{http_code}' "http://127.0.0.1:$E2E_PORT/api/me" || true)
-  [ "$code" = 401 ] && break
+  node -e "fetch('http://127.0.0.1:$E2E_PORT/api/me').then((r) => process.exit(r.status === 401 ? 0 : 1), () => process.exit(1))" && break
   kill -0 "$server_pid" 2>/dev/null || { cat "$OUT/e2e-server.log" >&2; break; }
   sleep 0.25
 done
