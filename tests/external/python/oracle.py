@@ -1,0 +1,75 @@
+"""Answers batches of requests from Python's cmath and mpmath (Debian's python3-mpmath).
+
+Reads one JSON document on stdin: {"source": "cmath"|"mpmath", "dps": 60, "points": [...]},
+each point {"fn", "z": [re, im] as float.hex strings, "w"?: [re, im] hex | "p/q", "n"?: int}.
+Writes one JSON document: a list of results, each {"re", "im"} as float.hex (cmath) or as
+decimal strings with dps digits plus "re_double"/"im_double" float.hex (mpmath), or
+{"raises": "ValueError"} when cmath raises instead of returning a value.
+"""
+import cmath
+import json
+import sys
+from fractions import Fraction
+
+
+def parse_float(text):
+    return float.fromhex(text) if "0x" in text.lower() else float(text)
+
+
+def run_cmath(points):
+    out = []
+    for p in points:
+        z = complex(parse_float(p["z"][0]), parse_float(p["z"][1]))
+        try:
+            v = getattr(cmath, p["fn"])(z)
+            out.append({"re": v.real.hex(), "im": v.imag.hex()})
+        except (ValueError, OverflowError) as e:
+            out.append({"raises": type(e).__name__})
+    return out
+
+
+def run_mpmath(points, dps):
+    import mpmath
+    from mpmath import mp, mpc, mpf
+
+    # mpmath's complex inverse functions are accurate to about 10^-dps relative to |f(z)|, not
+    # to each part: at 60 digits asin(1e-300 + 1e-300j) comes back with imaginary part 0.0.
+    # Working at dps + 660 digits keeps parts down to 1e-600 correct to dps digits.
+    mp.dps = dps + 660
+    names = {"pow": "power", "nthroot": "root"}
+    out = []
+    for p in points:
+        z = mpc(mpf(parse_float(p["z"][0])), mpf(parse_float(p["z"][1])))
+        fn = p["fn"]
+        if fn == "pow":
+            w = p["w"]
+            if isinstance(w, str):
+                q = Fraction(w)
+                arg = mpf(q.numerator) / q.denominator
+            else:
+                arg = mpc(mpf(parse_float(w[0])), mpf(parse_float(w[1])))
+            v = mpmath.power(z, arg)
+        elif fn == "nthroot":
+            v = mpmath.root(z, int(p["n"]))
+        else:
+            v = getattr(mpmath, names.get(fn, fn))(z)
+        v = mpc(v)
+        out.append({
+            "re": mpmath.nstr(v.real, dps, min_fixed=1, max_fixed=0),
+            "im": mpmath.nstr(v.imag, dps, min_fixed=1, max_fixed=0),
+            "re_double": float(v.real).hex(),
+            "im_double": float(v.imag).hex(),
+        })
+    return out
+
+
+def main():
+    req = json.load(sys.stdin)
+    if req["source"] == "cmath":
+        result = run_cmath(req["points"])
+    else:
+        result = run_mpmath(req["points"], int(req.get("dps", 60)))
+    json.dump(result, sys.stdout)
+
+
+main()
