@@ -138,10 +138,11 @@ stop_postgres() {
 
 # Hash of everything that goes into the web export.
 web_sources_hash() {
-  local f
-  { find app components constants client shared assets -type f 2>/dev/null | LC_ALL=C sort | xargs -r sha256sum
-    for f in app.json babel.config.js metro.config.js package-lock.json tsconfig.json; do [ -f "$f" ] && sha256sum "$f"; done
-    true; } | sha256sum | cut -d' ' -f1
+  local f dirs=()
+  for f in app components constants client shared assets; do [ -d "$f" ] && dirs+=("$f"); done
+  { find "${dirs[@]}" -type f -print0 | LC_ALL=C sort -z | xargs -0 -r sha256sum
+    for f in app.json babel.config.js metro.config.js package-lock.json tsconfig.json; do if [ -f "$f" ]; then sha256sum "$f"; fi; done
+  } | sha256sum | cut -d' ' -f1
 }
 
 # Rebuilds dist/ only when the app's sources changed since the last export.
