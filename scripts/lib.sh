@@ -55,7 +55,8 @@ ensure_node_modules() {
 # Runs a command as the owner of the cluster: the postgres user when we are root
 # (initdb refuses root), ourselves otherwise.
 pg_as_owner() {
-  if [ "$(id -u)" -eq 0 ]; then runuser -u postgres -- "$@"; else "$@"; fi
+  # From / so that a checkout postgres cannot enter does not trigger warnings.
+  if [ "$(id -u)" -eq 0 ]; then (cd / && runuser -u postgres -- "$@"); else "$@"; fi
 }
 
 # Where the cluster lives: .data/ in the checkout when the cluster's owner can reach
