@@ -111,12 +111,14 @@ function exactAngle(turns: Rational, w: Rational, z: BigComplex, F: number): [Bi
 }
 
 function integerPower(z: BigComplex, n: number, bits: number): Approximation {
-  let result = BigComplex.ONE;
+  // Starting from null rather than 1 + 0i: (1 + 0i)·(x − 0i) would turn the −0 into +0.
+  let result: BigComplex | null = null;
   let base = z;
   for (let k = Math.abs(n); k > 0; k >>= 1) {
-    if (k & 1) result = result.mul(base);
+    if (k & 1) result = result ? result.mul(base) : base;
     if (k > 1) base = base.mul(base);
   }
+  if (!result) return new Approximation(BigFloat.ONE, BigFloat.ZERO, -Infinity, -Infinity);
   if (n < 0) {
     const r = result.reciprocal(bits + 8);
     return Approximation.relative(r.re, r.im, bits);
