@@ -1,3 +1,4 @@
+import { answerContinue } from './reference/continuation/answer-continue';
 import { answerReference } from './reference/answer-reference';
 import { jsonLines } from './json-lines';
 
@@ -16,7 +17,6 @@ async function main(argv: string[]): Promise<number> {
     return 0;
   }
   if (command === 'continue') {
-    const { answerContinue } = await import('./reference/continuation/answer-continue');
     await jsonLines(process.stdin, process.stdout, answerContinue);
     return 0;
   }

@@ -65,19 +65,15 @@ function walk(e: SubjectExpr, z: BigComplex, convention: Convention, bits: numbe
     }
     case 'power': {
       const base = applyConvention(walk(e.base, z, convention, bits), NEGATIVE_REAL_AXIS, convention);
-      return asComplex(pow(base, { kind: 'rational', value: e.exponent }, w));
+      return pow(base, { kind: 'rational', value: e.exponent }, w).toComplex();
     }
     case 'complexPower': {
       const base = applyConvention(walk(e.base, z, convention, bits), NEGATIVE_REAL_AXIS, convention);
-      return asComplex(pow(base, { kind: 'complex', value: walk(e.exponent, z, convention, bits) }, w));
+      return pow(base, { kind: 'complex', value: walk(e.exponent, z, convention, bits) }, w).toComplex();
     }
     case 'nthroot':
-      return asComplex(evaluateFunction({ fn: 'nthroot', z: walk(e.arg, z, convention, bits), n: e.n, convention }, w));
+      return evaluateFunction({ fn: 'nthroot', z: walk(e.arg, z, convention, bits), n: e.n, convention }, w).toComplex();
     case 'call':
-      return asComplex(evaluateFunction({ fn: e.fn, z: walk(e.arg, z, convention, bits), convention }, w));
+      return evaluateFunction({ fn: e.fn, z: walk(e.arg, z, convention, bits), convention }, w).toComplex();
   }
-}
-
-function asComplex(a: Approximation): BigComplex {
-  return new BigComplex(a.re, a.im);
 }

@@ -1,4 +1,5 @@
-import { all, create, type MathNode } from 'mathjs';
+import type * as MathJs from 'mathjs';
+import type { MathNode } from 'mathjs';
 import { parseNumber } from '../reference/numbers/parse-number';
 import { Rational } from '../reference/numbers/rational';
 import { SubjectError } from './subject-error';
@@ -20,9 +21,14 @@ const OPERATORS: Record<string, 'add' | 'sub' | 'mul' | 'div'> = {
 
 let parser: ((text: string) => MathNode) | null = null;
 
-/** mathjs's parser with BigNumber constants, so "0.1" reaches us as the decimal it was written as. */
+/**
+ * mathjs's parser with BigNumber constants, so "0.1" reaches us as the decimal it was written as.
+ * Loaded on first use: `require('mathjs')` costs ~1.1 s (STACK.md), which `sheetkeeper reference` never needs.
+ */
 function mathParse(text: string): MathNode {
   if (!parser) {
+    // eslint-disable-next-line @typescript-eslint/no-require-imports
+    const { all, create } = require('mathjs') as typeof MathJs;
     const math = create(all as NonNullable<typeof all>, { number: 'BigNumber', precision: 64 });
     parser = (t) => math.parse(t);
   }

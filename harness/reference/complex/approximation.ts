@@ -1,4 +1,5 @@
 import { BigFloat } from '../numbers/big-float';
+import { BigComplex } from './big-complex';
 
 /**
  * A computed complex value with a bound on the error of each part:
@@ -16,6 +17,11 @@ export class Approximation {
   /** Parts each with relative error below 2^−bits; zeros are taken as exact. */
   static relative(re: BigFloat, im: BigFloat, bits: number): Approximation {
     return new Approximation(re, im, errorOf(re, bits), errorOf(im, bits));
+  }
+
+  /** The value, without its bounds. */
+  toComplex(): BigComplex {
+    return new BigComplex(this.re, this.im);
   }
 
   /**

@@ -1,0 +1,44 @@
+import { z } from 'zod';
+import { complexString, numberString } from './complex-string';
+
+const objectError = (issue: { code: string; keys?: string[] }) =>
+  issue.code === 'unrecognized_keys' ? `has unknown fields: ${(issue.keys ?? []).join(', ')}` : 'must be a JSON object';
+
+const circlePath = z.strictObject(
+  {
+    kind: z.literal('circle'),
+    center: complexString,
+    radius: numberString,
+    start_angle: numberString.default('0'),
+    turns: z.number({ error: 'must be a number' }).refine((n) => n !== 0 && Math.abs(n) <= 64, { error: 'must be non-zero and at most 64' }).default(1),
+    direction: z.enum(['ccw', 'cw'], { error: 'must be ccw or cw' }).default('ccw'),
+  },
+  { error: objectError },
+);
+
+const polylinePath = z.strictObject(
+  { kind: z.literal('polyline'), points: z.array(complexString).min(2, { error: 'needs at least two points' }).max(200) },
+  { error: objectError },
+);
+
+/** One request line of `sheetkeeper continue` (DESIGN.md §5), plus an optional cut layout. */
+export const continueRequest = z
+  .strictObject(
+    {
+      g: z.string({ error: 'is required' }).max(400),
+      nu: z.union([numberString, complexString], { error: 'must be a number string or {"re","im"}' }),
+      z0: complexString,
+      f0: complexString.optional(),
+      k: z.number().int({ error: 'must be an integer' }).optional(),
+      path: z.discriminatedUnion('kind', [circlePath, polylinePath], { error: 'must be a circle or a polyline' }),
+      at: z.array(numberString).min(1, { error: 'needs at least one t' }).max(1000),
+      cuts: z
+        .array(z.strictObject({ points: z.array(complexString).min(2).max(200), to_infinity: z.boolean().default(false) }, { error: objectError }))
+        .max(50)
+        .optional(),
+    },
+    { error: objectError },
+  )
+  .refine((r) => (r.f0 === undefined) !== (r.k === undefined), { error: 'give exactly one of f0 and k' });
+
+export type ContinueRequest = z.infer<typeof continueRequest>;
