@@ -1,0 +1,103 @@
+/**
+ * `npm run bench:reference`: throughput of the reference engine against mpmath on the same
+ * 10,000 seeded points, for correctly rounded doubles and for 40-digit strings.
+ *
+ * mpmath runs in Debian's /usr/bin/python3 (python3-mpmath with the gmpy2 backend). Its
+ * "doubles" mode is mp.prec = 53 and complex(f(z)) — mpmath's cheapest way to a double,
+ * which is not even guaranteed correctly rounded, so the ratio is, if anything, unkind to us.
+ * Its "strings" mode is mp.dps = 40 and nstr(part, 40). Both sides convert the input from the
+ * same doubles and produce both parts. Bounded: fixed counts, and Python is killed after 300 s.
+ */
+import { spawnSync } from 'node:child_process';
+import { BigComplex } from '../harness/reference/complex/big-complex';
+import { principalValue } from '../harness/reference/principal-value';
+
+const N = 10_000;
+const WARM_UP = 1_000;
+const SEED = 12345;
+const FUNCTIONS = ['sqrt', 'exp', 'log', 'asin', 'acos', 'atan', 'asinh', 'acosh', 'atanh'];
+const TARGET_DOUBLES = 10;
+const TARGET_STRINGS = 1;
+
+function seeded(seed: number): () => number {
+  let s = seed;
+  return () => {
+    s = (s * 16807) % 2147483647;
+    return s / 2147483647;
+  };
+}
+
+const random = seeded(SEED);
+const points = Array.from({ length: N }, (_, i) => ({
+  fn: FUNCTIONS[i % FUNCTIONS.length] as string,
+  x: (random() - 0.5) * 8,
+  y: (random() - 0.5) * 8,
+}));
+
+function ours(mode: 'doubles' | 'strings', count: number): number {
+  const start = process.hrtime.bigint();
+  for (let i = 0; i < count; i++) {
+    const p = points[i] as (typeof points)[number];
+    const request = { fn: p.fn, z: BigComplex.fromDoubles(p.x, p.y), convention: 'signed-zero' as const };
+    if (mode === 'doubles') {
+      principalValue(request, { double: true, digits: 0 });
+    } else {
+      const r = principalValue(request, { double: false, digits: 40 });
+      r.approximation.re.toDecimal(40);
+      r.approximation.im.toDecimal(40);
+    }
+  }
+  return Number(process.hrtime.bigint() - start) / 1e9;
+}
+
+const PYTHON = `
+import json, sys, time
+import mpmath
+from mpmath import mp, mpc, mpf
+pts = json.load(sys.stdin)
+fns = [(getattr(mpmath, p[0]), float(p[1]), float(p[2])) for p in pts]
+mp.prec = 53
+t = time.perf_counter()
+for f, x, y in fns:
+    complex(f(mpc(x, y)))
+doubles = time.perf_counter() - t
+mp.dps = 40
+t = time.perf_counter()
+for f, x, y in fns:
+    v = f(mpc(x, y))
+    mpmath.nstr(v.real, 40); mpmath.nstr(v.imag, 40)
+strings = time.perf_counter() - t
+print(json.dumps({"doubles": doubles, "strings": strings, "backend": mpmath.libmp.BACKEND, "version": mpmath.__version__}))
+`;
+
+function main(): void {
+  ours('doubles', WARM_UP);
+  ours('strings', WARM_UP);
+  const oursDoubles = ours('doubles', N);
+  const oursStrings = ours('strings', N);
+  const run = spawnSync('/usr/bin/python3', ['-c', PYTHON], {
+    input: JSON.stringify(points.map((p) => [p.fn, String(p.x), String(p.y)])),
+    encoding: 'utf8',
+    timeout: 300_000,
+  });
+  if (run.status !== 0) {
+    process.stderr.write(`mpmath run failed: ${run.stderr || run.error?.message}\n`);
+    process.exitCode = 1;
+    return;
+  }
+  const mp = JSON.parse(run.stdout) as { doubles: number; strings: number; backend: string; version: string };
+  const rate = (seconds: number) => Math.round(N / seconds);
+  const rows = [
+    ['correctly rounded doubles', rate(oursDoubles), rate(mp.doubles), mp.doubles / oursDoubles, TARGET_DOUBLES],
+    ['40-digit strings', rate(oursStrings), rate(mp.strings), mp.strings / oursStrings, TARGET_STRINGS],
+  ] as const;
+  process.stdout.write(`reference engine vs mpmath ${mp.version} (${mp.backend}), ${N} seeded points (seed ${SEED}), ${FUNCTIONS.join(', ')}\n`);
+  process.stdout.write('mode                         ours (pts/s)   mpmath (pts/s)   ratio   target\n');
+  for (const [mode, a, b, ratio, target] of rows) {
+    process.stdout.write(
+      `${mode.padEnd(28)} ${String(a).padStart(12)}   ${String(b).padStart(14)}   ${ratio.toFixed(2).padStart(5)}   ≥ ${target}  ${ratio >= target ? 'met' : 'NOT met'}\n`,
+    );
+  }
+}
+
+main();
