@@ -1,0 +1,58 @@
+import type { ComplexPair } from './complex-pair';
+import { evaluateEach } from './evaluate-each';
+import { OP_ARITY } from './op-arity';
+import type { Target } from './target';
+
+interface ComplexJsValue {
+  re: number;
+  im: number;
+  [method: string]: unknown;
+}
+type ComplexJsClass = { new (re: number, im: number): ComplexJsValue; prototype: Record<string, unknown> };
+
+/** complex.js names its methods after the catalogue, except negation. */
+const METHOD: Readonly<Record<string, string>> = { neg: 'neg' };
+
+/**
+ * complex.js at one installed version (`alias` is the package name or its npm alias,
+ * e.g. "complex.js-2.4.1"). The package is required on first use, not before.
+ *
+ * Arguments are built with `new Complex(re, im)` and then given their exact parts:
+ * the function under test must see the input as sent, and a constructor that drops
+ * a −0 is reported by the entry-point probes instead. An operation whose method the
+ * version lacks (every version from 2.0.11 to 2.4.3 lacks cbrt and nthroot) is
+ * unsupported and answers an error per call.
+ */
+export function complexJsTarget(alias: string, version: string): Target {
+  let Complex: ComplexJsClass | undefined;
+  const load = (): ComplexJsClass => {
+    if (Complex) return Complex;
+    // Required here, not imported: a run that never uses this target never loads it.
+    const mod = require(alias) as ComplexJsClass & { default?: ComplexJsClass };
+    Complex = mod.default ?? mod;
+    return Complex;
+  };
+  const methodOf = (op: string): string => METHOD[op] ?? op;
+  const has = (op: string): boolean => op in OP_ARITY && typeof load().prototype[methodOf(op)] === 'function';
+  const make = ([re, im]: ComplexPair): ComplexJsValue => {
+    const z = new (load())(re, im);
+    z.re = re;
+    z.im = im;
+    return z;
+  };
+  return {
+    name: `complex.js@${version}`,
+    library: 'complex.js',
+    version,
+    settings: { package: alias },
+    supports: async (op) => has(op),
+    evaluate: async (op, calls) => {
+      if (!has(op)) return calls.map(() => ({ error: `complex.js ${version} has no ${op}` }));
+      return evaluateEach(op, calls, (args) => {
+        const [z, ...rest] = args.map(make) as [ComplexJsValue, ...ComplexJsValue[]];
+        return (z[methodOf(op)] as (...a: ComplexJsValue[]) => unknown).apply(z, rest);
+      });
+    },
+    close: async () => undefined,
+  };
+}

@@ -1,0 +1,2 @@
+/** A complex double as [re, im]; zero signs, infinities and NaN are meaningful. */
+export type ComplexPair = [number, number];

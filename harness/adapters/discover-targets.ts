@@ -1,0 +1,72 @@
+import { existsSync, readFileSync } from 'node:fs';
+import path from 'node:path';
+import { complexJsTarget } from './complex-js-target';
+import { installedVersion } from './installed-version';
+import { jsMathTarget } from './js-math-target';
+import { mathjsTarget } from './mathjs-target';
+import { pythonVersion } from './python-version';
+import { stdioTarget } from './stdio-target';
+import type { TargetDescriptor } from './target-descriptor';
+
+/** Debian's interpreter (STACK.md): the python3 first on PATH may be another one. */
+const DEBIAN_PYTHON = '/usr/bin/python3';
+const PROJECT_ROOT = path.resolve(__dirname, '..', '..');
+
+/**
+ * The targets installed in the project, without loading any library: complex.js and
+ * mathjs under their own name and every npm alias of them in package.json's
+ * dependencies (versions read from each installed package.json), mathjs four ways
+ * (complex and number entry points, predictable off and on), JavaScript's Math, and
+ * Python's cmath through the stdio protocol when /usr/bin/python3 runs. Sorted by
+ * library, then version (numerically), then name.
+ */
+export function discoverTargets(root: string = PROJECT_ROOT, python: string = DEBIAN_PYTHON): TargetDescriptor[] {
+  const manifest = JSON.parse(readFileSync(path.join(root, 'package.json'), 'utf8')) as { dependencies?: Record<string, string> };
+  const targets: TargetDescriptor[] = [];
+  for (const alias of Object.keys(manifest.dependencies ?? {})) {
+    const installed = installedVersion(root, alias);
+    if (!installed) continue;
+    const { name, version } = installed;
+    if (name === 'complex.js') {
+      targets.push({ ...describe(complexJsTarget(alias, version)), open: () => complexJsTarget(alias, version) });
+    } else if (name === 'mathjs') {
+      // mathjs brings its own complex.js; which one it resolves to is part of the target.
+      // Node looks in the package's own node_modules first, then the project's.
+      const own = installedVersion(path.join(root, 'node_modules', alias), 'complex.js');
+      const complexJs = (own ?? installedVersion(root, 'complex.js'))?.version ?? 'unknown';
+      for (const entry of ['complex', 'number'] as const) {
+        for (const predictable of [false, true]) {
+          const open = () => mathjsTarget(alias, version, entry, predictable, complexJs);
+          targets.push({ ...describe(open()), open });
+        }
+      }
+    }
+  }
+  targets.push({ ...describe(jsMathTarget()), open: jsMathTarget });
+  const cmathVersion = existsSync(python) ? pythonVersion(python) : null;
+  if (cmathVersion) {
+    const script = path.join(root, 'harness', 'adapters', 'python', 'cmath_adapter.py');
+    const open = () =>
+      stdioTarget({
+        name: `cmath@${cmathVersion}`,
+        library: 'cmath',
+        version: cmathVersion,
+        settings: { protocol: 'stdio', command: `${python} ${path.relative(root, script)}` },
+        command: python,
+        args: [script],
+      });
+    targets.push({ ...describe(open()), open });
+  }
+  const numeric = (v: string): number[] => v.split(/[.-]/).map((x) => Number(x) || 0);
+  const byVersion = (a: string, b: string): number => {
+    const [x, y] = [numeric(a), numeric(b)];
+    for (let i = 0; i < Math.max(x.length, y.length); i++) if ((x[i] ?? 0) !== (y[i] ?? 0)) return (x[i] ?? 0) - (y[i] ?? 0);
+    return 0;
+  };
+  return targets.sort((a, b) => a.library.localeCompare(b.library) || byVersion(a.version, b.version) || a.name.localeCompare(b.name));
+}
+
+/** The naming fields of a target; creating a target object loads nothing. */
+function describe(t: { name: string; library: string; version: string; settings: Record<string, string | number | boolean> }) {
+  return { name: t.name, library: t.library, version: t.version, settings: t.settings };
+}

@@ -1,0 +1,7 @@
+import type { Target } from './target';
+import type { TargetInfo } from './target-info';
+
+/** An installed target that has not been loaded: `open` loads it (lazily, on first use). */
+export interface TargetDescriptor extends TargetInfo {
+  open(): Target;
+}
