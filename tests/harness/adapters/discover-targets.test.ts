@@ -1,0 +1,65 @@
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
+import { discoverTargets } from '../../../harness/adapters/discover-targets';
+import { listTargets } from '../../../harness/adapters/list-targets';
+
+const ROOT = path.join(__dirname, '..', '..', '..');
+const declaredVersion = (alias: string): string =>
+  (JSON.parse(readFileSync(path.join(ROOT, 'node_modules', alias, 'package.json'), 'utf8')) as { version: string }).version;
+
+describe('discoverTargets', () => {
+  const targets = discoverTargets();
+
+  it('finds at least five complex.js versions from 2.0.x to 2.4.3, including 2.4.1, 2.4.2 and 2.4.3', () => {
+    const versions = targets.filter((t) => t.library === 'complex.js').map((t) => t.version);
+    expect(versions.length).toBeGreaterThanOrEqual(5);
+    expect(versions.some((v) => v.startsWith('2.0.'))).toBe(true);
+    expect(versions).toEqual(expect.arrayContaining(['2.4.1', '2.4.2', '2.4.3']));
+  });
+
+  it('finds at least three mathjs versions over at least two majors, including 15.2.0', () => {
+    const versions = [...new Set(targets.filter((t) => t.library === 'mathjs').map((t) => t.version))];
+    expect(versions.length).toBeGreaterThanOrEqual(3);
+    expect(new Set(versions.map((v) => v.split('.')[0])).size).toBeGreaterThanOrEqual(2);
+    expect(versions).toContain('15.2.0');
+  });
+
+  it('takes each version from the installed package.json of its alias', () => {
+    for (const t of targets.filter((x) => x.library === 'complex.js' || x.library === 'mathjs')) {
+      expect(`${t.name} ${declaredVersion(t.settings.package as string)}`).toBe(`${t.name} ${t.version}`);
+    }
+  });
+
+  it('gives every target a unique name', () => {
+    expect(new Set(targets.map((t) => t.name)).size).toBe(targets.length);
+  });
+
+  it('opens every target on this Node and computes sqrt(4) = 2 with each', async () => {
+    for (const descriptor of targets) {
+      const target = descriptor.open();
+      try {
+        expect({ name: target.name, result: await target.evaluate('sqrt', [[[4, 0]]]) }).toEqual({ name: target.name, result: [{ value: [2, 0] }] });
+      } finally {
+        await target.close();
+      }
+    }
+  }, 60_000);
+
+  it('lists only JavaScript Math when no library is installed and Python does not run', () => {
+    const empty = discoverTargets(path.join(__dirname, 'fixtures', 'empty-project'), '/nonexistent/python3');
+    expect(empty.map((t) => t.library)).toEqual(['JavaScript Math']);
+  });
+});
+
+describe('listTargets', () => {
+  it('returns JSON-ready name, library, version and settings for each target', () => {
+    const listed = listTargets();
+    expect(JSON.parse(JSON.stringify(listed))).toEqual(listed);
+    expect(listed.find((t) => t.name === 'mathjs@15.2.0/number/predictable')).toEqual({
+      name: 'mathjs@15.2.0/number/predictable',
+      library: 'mathjs',
+      version: '15.2.0',
+      settings: { package: 'mathjs', entry: 'number', predictable: true, 'complex.js': declaredVersion('complex.js') },
+    });
+  });
+});

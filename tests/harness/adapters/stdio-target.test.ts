@@ -1,0 +1,118 @@
+import path from 'node:path';
+import { stdioTarget, type StdioTarget } from '../../../harness/adapters/stdio-target';
+import type { ComplexPair } from '../../../harness/adapters/complex-pair';
+
+const FIXTURE = path.join(__dirname, 'fixtures', 'misbehaving-adapter.ts');
+
+/** One node process running the TypeScript fixture (STACK.md: killing `npx tsx` would leave its child). */
+function misbehaving(timeLimitMs = 5000): StdioTarget {
+  return stdioTarget({
+    name: 'misbehaving@0.0.1',
+    library: 'misbehaving',
+    version: '0.0.1',
+    settings: {},
+    command: process.execPath,
+    args: ['--import', 'tsx', FIXTURE],
+    timeLimitMs,
+  });
+}
+
+const alive = (pid: number): boolean => {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch {
+    return false;
+  }
+};
+
+describe('stdioTarget', () => {
+  let target: StdioTarget;
+  afterEach(async () => {
+    await target.close();
+  });
+
+  it('starts no program before it is first used', async () => {
+    target = misbehaving();
+    expect(target.processId()).toBeNull();
+    expect(await target.supports('sqrt')).toBe(true);
+    expect(target.processId()).not.toBeNull();
+  });
+
+  it('sends numbers as strings so −0, ±inf and NaN survive the round trip, in batch order', async () => {
+    target = misbehaving();
+    const points: ComplexPair[] = [
+      [-0, 0],
+      [0, -0],
+      [Infinity, -Infinity],
+      [NaN, 5e-324],
+      [0.1, -1.7976931348623157e308],
+      ...Array.from({ length: 200 }, (_, k): ComplexPair => [k, -k / 7]),
+    ];
+    const results = await target.evaluate('sqrt', points.map((p) => [p]));
+    expect(results).toEqual(points.map((p) => ({ value: p })));
+    // toEqual treats −0 and +0 as different (Object.is), so the signs were checked; say so for the first two.
+    expect(Object.is((results[0] as { value: ComplexPair }).value[0], -0)).toBe(true);
+    expect(Object.is((results[1] as { value: ComplexPair }).value[1], -0)).toBe(true);
+  });
+
+  it('turns a crash into error results quoting stderr, and starts a fresh program for the next batch', async () => {
+    target = misbehaving();
+    const crashed = await target.evaluate('exp', [[[1, 0]], [[2, 0]]]);
+    expect(crashed).toHaveLength(2);
+    for (const r of crashed) expect(r).toEqual({ error: expect.stringMatching(/exited with code 3.*crashing on purpose/) });
+    expect(await target.evaluate('sqrt', [[[4, 0]]])).toEqual([{ value: [4, 0] }]);
+  });
+
+  it('turns a hang into error results after the time limit and kills the program', async () => {
+    target = misbehaving(400);
+    await target.supports('log');
+    const pid = target.processId() as number;
+    const began = Date.now();
+    const hung = await target.evaluate('log', [[[1, 0]]]);
+    const waited = Date.now() - began;
+    expect(hung).toEqual([{ error: 'no answer within 400 ms' }]);
+    expect(waited).toBeGreaterThanOrEqual(390);
+    expect(waited).toBeLessThan(3000);
+    await new Promise((r) => setTimeout(r, 100));
+    expect(alive(pid)).toBe(false);
+    expect(await target.evaluate('sqrt', [[[9, 0]]])).toEqual([{ value: [9, 0] }]);
+  }, 20_000);
+
+  it('turns a line that is not JSON, a wrong id and a short result list into error results', async () => {
+    target = misbehaving();
+    expect(await target.evaluate('asin', [[[0, 0]]])).toEqual([{ error: 'program wrote a line that is not JSON: this is not JSON' }]);
+    expect(await target.evaluate('acos', [[[0, 0]]])).toEqual([{ error: expect.stringMatching(/^program answered id \d+ while \d+ was pending$/) }]);
+    expect(await target.evaluate('atan', [[[0, 0]], [[1, 0]]])).toEqual([
+      { error: 'program answered 1 results for 2 calls' },
+      { error: 'program answered 1 results for 2 calls' },
+    ]);
+    expect(await target.evaluate('sqrt', [[[1, 0]]])).toEqual([{ value: [1, 0] }]);
+  }, 20_000);
+
+  it('answers an op the program does not list as unsupported without sending it', async () => {
+    target = misbehaving();
+    expect(await target.supports('pow')).toBe(false);
+    expect(await target.evaluate('pow', [[[1, 0], [2, 0]]])).toEqual([{ error: 'misbehaving has no pow' }]);
+  });
+
+  it('gives a call with the wrong number of arguments its own error and sends the rest', async () => {
+    target = misbehaving();
+    expect(await target.evaluate('sqrt', [[[1, 0], [2, 0]], [[3, 0]]])).toEqual([{ error: 'sqrt takes 1 argument(s), got 2' }, { value: [3, 0] }]);
+  });
+
+  it('reports a program that cannot start as error results', async () => {
+    target = stdioTarget({ name: 'none', library: 'none', version: '0', settings: {}, command: '/nonexistent/program', args: [] });
+    expect(await target.evaluate('sqrt', [[[1, 0]]])).toEqual([{ error: expect.stringMatching(/could not run.*ENOENT/) }]);
+  });
+
+  it('ends the program on close', async () => {
+    target = misbehaving();
+    await target.supports('sqrt');
+    const pid = target.processId() as number;
+    expect(alive(pid)).toBe(true);
+    await target.close();
+    expect(alive(pid)).toBe(false);
+    expect(target.processId()).toBeNull();
+  });
+});

@@ -1,0 +1,101 @@
+import { BigFloat } from '../../../../harness/reference/numbers/big-float';
+import { formatDouble } from '../../../../harness/reference/numbers/format-double';
+import { parseDouble } from '../../../../harness/reference/numbers/parse-double';
+import { parseNumber } from '../../../../harness/reference/numbers/parse-number';
+import { Rational } from '../../../../harness/reference/numbers/rational';
+import { ulpDistance } from '../../../../harness/reference/numbers/ulp-distance';
+
+const two = (k: number) => BigFloat.of(false, 1n, k);
+
+describe('BigFloat', () => {
+  it('holds the exact value of the double 0.1, 3602879701896397/2^55', () => {
+    // IEEE 754 binary64: 0.1 rounds to 0x1.999999999999ap-4 (common practice, checkable with float.hex).
+    const b = BigFloat.fromDouble(0.1);
+    expect(new Rational(b.m, 1n << BigInt(-b.e)).toString()).toBe(`3602879701896397/${1n << 55n}`);
+    expect(b.toDecimal(40)).toBe('0.1000000000000000055511151231257827021182');
+  });
+
+  it('keeps the sign of −0 and the smallest subnormal 2^−1074 exactly', () => {
+    expect(Object.is(BigFloat.fromDouble(-0).toDouble(), -0)).toBe(true);
+    const tiny = BigFloat.fromDouble(5e-324);
+    expect([tiny.m, tiny.e]).toEqual([1n, -1074]);
+  });
+
+  it('rounds to nearest with ties to even, as IEEE 754 roundTiesToEven', () => {
+    // 1 + 2^−53 is halfway between 1 and 1 + 2^−52: ties go to the even significand, 1.
+    expect(BigFloat.ONE.add(two(-53)).toDouble()).toBe(1);
+    // 1 + 3·2^−53 is halfway between 1 + 2^−52 and 1 + 2^−51: the even one is 1 + 2^−51.
+    expect(BigFloat.ONE.add(BigFloat.of(false, 3n, -53)).toDouble()).toBe(1 + 2 ** -51);
+    expect(BigFloat.ONE.add(two(-53)).add(two(-200)).toDouble()).toBe(1 + 2 ** -52);
+  });
+
+  it('underflows gradually: 2^−1075 rounds to +0 (tie to even) and 3·2^−1076 to 2^−1074', () => {
+    expect(Object.is(two(-1075).toDouble(), 0)).toBe(true);
+    expect(Object.is(two(-1075).negate().toDouble(), -0)).toBe(true);
+    expect(BigFloat.of(false, 3n, -1076).toDouble()).toBe(5e-324);
+  });
+
+  it('overflows to ∞ exactly at the rounding threshold (2^1024 − 2^970)', () => {
+    // IEEE 754: values ≥ 2^1024 − 2^970 round to infinity under roundTiesToEven.
+    const threshold = two(1024).sub(two(970));
+    expect(threshold.toDouble()).toBe(Infinity);
+    expect(threshold.sub(two(900)).toDouble()).toBe(Number.MAX_VALUE);
+  });
+
+  it('gives exact sums with IEEE zero signs: x − x = +0, −0 + −0 = −0', () => {
+    const x = BigFloat.fromDouble(1.5);
+    expect(Object.is(x.sub(x).toDouble(), 0)).toBe(true);
+    expect(Object.is(BigFloat.NEG_ZERO.add(BigFloat.NEG_ZERO).toDouble(), -0)).toBe(true);
+    expect(BigFloat.fromDouble(1e300).add(BigFloat.fromDouble(1e-300)).sub(BigFloat.fromDouble(1e300)).toDouble()).toBe(1e-300);
+  });
+
+  it('takes square roots to the requested bits and knows a perfect square', () => {
+    expect(BigFloat.fromDouble(2).sqrt(140).toDecimal(40)).toBe('1.41421356237309504880168872420969807857');
+    expect(BigFloat.fromDouble(6.25).isPerfectSquare()).toBe(true);
+    expect(BigFloat.fromDouble(2).isPerfectSquare()).toBe(false);
+  });
+});
+
+describe('number parsing and formatting', () => {
+  it('reads a decimal string as the nearest double and "-0", "inf", "nan", hex floats as such', () => {
+    expect(parseDouble('0.1')).toBe(0.1);
+    expect(Object.is(parseDouble('-0'), -0)).toBe(true);
+    expect(parseDouble('-0x1.8p+1')).toBe(-3);
+    expect(parseDouble('-inf')).toBe(-Infinity);
+    expect(parseDouble('nan')).toBeNaN();
+    expect(parseDouble('2.4703282292062328e-324')).toBe(5e-324);
+  });
+
+  it('rounds a ratio p/q to the nearest double: 1/3 is 0x1.5555555555555p-2', () => {
+    expect(parseDouble('1/3')).toBe(1 / 3);
+    expect(parseDouble('2/3')).toBe(2 / 3);
+  });
+
+  it('keeps decimals and ratios exact where the wire says they are exact', () => {
+    const tenth = parseNumber('0.1');
+    expect(tenth.kind === 'exact' && tenth.value.compare(new Rational(1n, 10n))).toBe(0);
+    const third = parseNumber('1/3');
+    expect(third.kind === 'exact' && third.value.toString()).toBe('1/3');
+  });
+
+  it('refuses text that is not a number, naming it', () => {
+    expect(() => parseNumber('1e')).toThrow('"1e" is not a number');
+    expect(() => parseNumber('')).toThrow('is not a number');
+    expect(() => parseNumber('1/0')).toThrow('zero denominator');
+  });
+
+  it('writes doubles as the shortest round-trip decimal with -0, inf and nan', () => {
+    expect([0.1, -0, Infinity, -Infinity, NaN, 1e-300].map(formatDouble)).toEqual(['0.1', '-0', 'inf', '-inf', 'nan', '1e-300']);
+  });
+});
+
+describe('ulpDistance', () => {
+  it('counts the doubles between two values, across zero and into the subnormals', () => {
+    expect(ulpDistance(1, 1 + 2 ** -52)).toBe(1);
+    expect(ulpDistance(-5e-324, 5e-324)).toBe(2);
+    expect(ulpDistance(0, -0)).toBe(0);
+    expect(ulpDistance(Number.MAX_VALUE, Infinity)).toBe(1);
+    expect(ulpDistance(NaN, 1)).toBe(Infinity);
+    expect(ulpDistance(NaN, NaN)).toBe(0);
+  });
+});
