@@ -25,6 +25,8 @@ export interface StdioTargetOptions extends TargetInfo {
 /** A stdio target, with the raw request for operations beyond the catalogue (`entry-points`). */
 export interface StdioTarget extends Target {
   request(op: string, args: unknown[]): Promise<Reply>;
+  /** The running program's pid, or null when none runs (not started yet, or ended). */
+  processId(): number | null;
 }
 
 const wirePair = ([re, im]: ComplexPair): [string, string] => [formatDouble(re), formatDouble(im)];
@@ -147,6 +149,7 @@ export function stdioTarget(options: StdioTargetOptions): StdioTarget {
     version: options.version,
     settings: options.settings,
     request,
+    processId: () => child?.pid ?? null,
     supports: async (op) => {
       const known = await describe();
       return typeof known !== 'string' && known.has(op) && op in OP_ARITY;
