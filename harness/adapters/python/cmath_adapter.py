@@ -73,7 +73,6 @@ def entry_points(pair):
         "string": lambda: complex(repr(complex(re_, im_))),
         "mixed-arithmetic": lambda: re_ + im_ * 1j,
         "imaginary-literal-first": lambda: im_ * 1j + re_,
-        "rect": lambda: cmath.rect(abs(complex(re_, im_)), cmath.phase(complex(re_, im_))),
     }
     out = {}
     for name, build in ways.items():
