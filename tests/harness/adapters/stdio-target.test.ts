@@ -56,6 +56,13 @@ describe('stdioTarget', () => {
     expect(Object.is((results[1] as { value: ComplexPair }).value[1], -0)).toBe(true);
   });
 
+  it('answers batches asked for at once one after another, each with its own results', async () => {
+    target = misbehaving();
+    const batches = Array.from({ length: 5 }, (_, b) => Array.from({ length: 20 }, (__, k): ComplexPair[] => [[b, k]]));
+    const answers = await Promise.all(batches.map((batch) => target.evaluate('sqrt', batch)));
+    expect(answers).toEqual(batches.map((batch) => batch.map(([p]) => ({ value: p }))));
+  });
+
   it('turns a crash into error results quoting stderr, and starts a fresh program for the next batch', async () => {
     target = misbehaving();
     const crashed = await target.evaluate('exp', [[[1, 0]], [[2, 0]]]);

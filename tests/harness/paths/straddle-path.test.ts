@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { straddlePath } from '../../../harness/paths/straddle-path';
 import { nextDouble } from '../../../harness/paths/next-double';
 
@@ -64,6 +65,26 @@ describe('straddlePath', () => {
     expect((left?.z.im as number) - (left?.z.re as number)).toBeGreaterThan(0);
     expect((right?.z.im as number) - (right?.z.re as number)).toBeLessThan(0);
     expect(points.filter((p) => p.label === 'on')).toHaveLength(1);
+  });
+
+  it('puts every "above" point strictly above a horizontal cut and every "below" point strictly below it (seed 7501)', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: -1e6, max: 1e6, noNaN: true }),
+        fc.double({ min: -1e6, max: 1e6, noNaN: true }),
+        fc.array(fc.double({ min: 5e-324, max: 1, noNaN: true }), { minLength: 1, maxLength: 6 }),
+        (height, start, offsets) => {
+          const points = straddlePath({ kind: 'straddle', cut: { kind: 'ray', from: { re: start, im: height }, through: { re: start - 1, im: height } }, along: [0, 3], offsets });
+          return points.every((p) => {
+            const side = p.label?.split(' ')[0];
+            if (side === 'above') return p.z.im > height;
+            if (side === 'below') return p.z.im < height;
+            return side === 'on' && p.z.im === height;
+          });
+        },
+      ),
+      { seed: 7501, numRuns: 1000 },
+    );
   });
 
   it('refuses a degenerate cut, a non-positive offset and a position off the segment', () => {
