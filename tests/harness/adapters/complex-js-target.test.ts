@@ -6,6 +6,7 @@ type ComplexJs = { new (re: number, im: number): { re: number; im: number; [m: s
 
 const installed = discoverTargets().filter((t) => t.library === 'complex.js');
 
+// Annex G clauses cited here are quoted from memory of ISO/IEC 9899:2011; the other values are exact arithmetic.
 describe('complexJsTarget', () => {
   it.each(installed.map((t) => [t.name, t] as const))('%s returns the principal values off the cuts', async (_name, descriptor) => {
     const target = descriptor.open();

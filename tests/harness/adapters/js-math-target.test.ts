@@ -1,5 +1,6 @@
 import { jsMathTarget } from '../../../harness/adapters/js-math-target';
 
+// IEEE 754 and ECMA-262 clause numbers below are quoted from memory.
 describe('jsMathTarget', () => {
   const target = jsMathTarget();
 

@@ -10,6 +10,8 @@ const find = (version: string, entry: string, predictable: boolean) =>
 const close = (r: CallResult | undefined, re: number, im: number): boolean =>
   !!r && 'value' in r && Math.abs(r.value[0] - re) <= 4e-16 * Math.max(1, Math.abs(re)) && Math.abs(r.value[1] - im) <= 4e-16 * Math.max(1, Math.abs(im));
 
+// The mathjs behaviour cited is from its own documentation (sqrt's examples, the `predictable` option);
+// the Annex G clause is quoted from memory of ISO/IEC 9899:2011.
 describe('mathjsTarget', () => {
   it('offers four targets per installed version: complex and number entry, predictable off and on', () => {
     for (const version of versions) {
