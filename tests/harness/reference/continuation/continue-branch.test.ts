@@ -1,0 +1,185 @@
+import { all, create } from 'mathjs';
+import { answerContinue } from '../../../../harness/reference/continuation/answer-continue';
+import { c, circle, num, run } from './continue-helpers';
+
+const math = create(all as NonNullable<typeof all>);
+
+describe('monodromy of closed paths equals e^{2πiν(Z−P)} (argument principle)', () => {
+  // Z and P are counted by hand from each g's factorisation; the argument principle says
+  // Δarg g around a simple positively oriented loop is 2π(Z − P), so the factor is e^{2πiν(Z−P)}.
+  const cases: [string, string, ReturnType<typeof circle>, number, string][] = [
+    ['z^3 - 1', '1/3', circle(c(0), '2'), 3, 'all three cube roots of 1 inside'],
+    ['z^3 - 1', '1/3', circle(c(1), '0.5'), 1, 'only the root 1 inside'],
+    ['(z - 1)/(z + 1)^2', '1/2', circle(c(0), '3'), 1 - 2, 'one simple zero, one double pole'],
+    ['z^2 - 1', '1/2', circle(c(0), '3', 2, 'cw'), -4, 'two zeros, two turns clockwise'],
+    ['z*exp(z)', '1/4', circle(c(0), '1'), 1, 'exp factors have no zeros'],
+  ];
+  it.each(cases)('gives e^{2πiν(Z−P)} for %s^%s around %#', (g, nu, path, windings) => {
+    const answer = run({ g, nu, z0: path.center.re === '0' ? c(num(path.radius)) : c(num(path.center.re) + num(path.radius)), k: 0, path, at: ['1'] });
+    const nuValue = math.fraction(nu).valueOf() as number;
+    const angle = 2 * Math.PI * nuValue * windings;
+    expect(num(answer.monodromy?.re ?? 'nan')).toBeCloseTo(Math.cos(angle), 12);
+    expect(num(answer.monodromy?.im ?? 'nan')).toBeCloseTo(Math.sin(angle), 12);
+  });
+
+  it('gives e^{2πiν} for complex ν = 1/3 + i/5 once around a simple zero', () => {
+    const answer = run({ g: 'z - 1', nu: c('1/3', '1/5'), z0: c(2), k: 0, path: circle(c(1), '1'), at: ['1'] });
+    const modulus = Math.exp(-2 * Math.PI * 0.2);
+    expect(num(answer.monodromy?.re ?? 'nan')).toBeCloseTo(modulus * Math.cos((2 * Math.PI) / 3), 12);
+    expect(num(answer.monodromy?.im ?? 'nan')).toBeCloseTo(modulus * Math.sin((2 * Math.PI) / 3), 12);
+  });
+});
+
+/** f0 · exp(ν ∫ g'/g dz) along the path by Gauss–Legendre quadrature in doubles, with g' from mathjs's symbolic derivative. */
+function byQuadrature(
+  g: string,
+  nu: [number, number],
+  f0: [number, number],
+  point: (t: number) => [number, number],
+  velocity: (t: number) => [number, number],
+  t1: number,
+): [number, number] {
+  const ratio = math.parse(`(${math.derivative(g, 'z').toString()}) / (${g})`).compile();
+  // 5-point Gauss–Legendre nodes and weights on [−1, 1] (Abramowitz & Stegun table 25.4, from memory).
+  const nodes = [0, -0.5384693101056831, 0.5384693101056831, -0.906179845938664, 0.906179845938664];
+  const weights = [0.5688888888888889, 0.47862867049936647, 0.47862867049936647, 0.23692688505618908, 0.23692688505618908];
+  const panels = 400;
+  let acc = math.complex(0, 0);
+  for (let k = 0; k < panels; k++) {
+    const a = (k / panels) * t1;
+    const b = ((k + 1) / panels) * t1;
+    nodes.forEach((x, i) => {
+      const t = (a + b) / 2 + ((b - a) / 2) * x;
+      const [zr, zi] = point(t);
+      const [vr, vi] = velocity(t);
+      const dz = math.complex(vr, vi);
+      const value = ratio.evaluate({ z: math.complex(zr, zi) });
+      acc = math.add(acc, math.multiply(value, dz, ((b - a) / 2) * (weights[i] as number))) as math.Complex;
+    });
+  }
+  const w = math.multiply(math.complex(nu[0], nu[1]), acc) as math.Complex;
+  const v = math.multiply(math.complex(f0[0], f0[1]), math.exp(w)) as math.Complex;
+  return [v.re, v.im];
+}
+
+describe('continuation endpoints against quadrature of g′/g', () => {
+  const cases: [string, [string, string], number][] = [
+    ['z^2 - 1', ['1/2', '0'], 0.8],
+    ['(z^2 + 1)/(z - 3)', ['1/3', '0'], 1],
+    ['z^3 - 2*z + 1', ['2/5', '1/7'], 1],
+    ['(z - 1/2)*exp(z^2)', ['-3/4', '0'], 0.6],
+  ];
+  it.each(cases)('agrees for %s^ν around the circle |z| = 2 to 10 digits', (g, nu, t1) => {
+    const answer = run({ g, nu: c(nu[0], nu[1]), z0: c(2), f0: c(1), path: circle(c(0), '2'), at: [String(t1)] });
+    const point = (t: number): [number, number] => [2 * Math.cos(2 * Math.PI * t), 2 * Math.sin(2 * Math.PI * t)];
+    const nuD: [number, number] = [math.fraction(nu[0]).valueOf() as number, math.fraction(nu[1]).valueOf() as number];
+    const velocity = (t: number): [number, number] => [-4 * Math.PI * Math.sin(2 * Math.PI * t), 4 * Math.PI * Math.cos(2 * Math.PI * t)];
+    const [re, im] = byQuadrature(g, nuD, [1, 0], point, velocity, t1);
+    const f = answer.values[0]?.f ?? c('nan', 'nan');
+    expect(num(f.re)).toBeCloseTo(re, 10);
+    expect(num(f.im)).toBeCloseTo(im, 10);
+  });
+});
+
+describe('regular branches with cut layouts', () => {
+  it('reproduces the principal square root on the plane cut along (−∞, 0] (f0 = 1 at z0 = 1)', () => {
+    const answer = run({
+      g: 'z',
+      nu: '1/2',
+      z0: c(1),
+      f0: c(1),
+      path: circle(c(0), '1', 1),
+      at: ['1/8', '3/8', '5/8', '7/8'],
+      cuts: [{ points: [c(0), c(-1)], to_infinity: true }],
+    });
+    // Principal √ at e^{iθ} is e^{iθ/2} with θ ∈ (−π, π] (DLMF 4.2.2).
+    const expected = [Math.PI / 4, (3 * Math.PI) / 4, (-3 * Math.PI) / 4, -Math.PI / 4].map((theta) => [Math.cos(theta / 2), Math.sin(theta / 2)]);
+    answer.values.forEach((v, i) => {
+      expect(num(v.f.re)).toBeCloseTo((expected[i] as number[])[0] as number, 14);
+      expect(num(v.f.im)).toBeCloseTo((expected[i] as number[])[1] as number, 14);
+    });
+  });
+
+  it('follows a cut along the positive imaginary axis: arg taken in (−3π/2, π/2]', () => {
+    const answer = run({
+      g: 'z',
+      nu: '1/2',
+      z0: c(1),
+      f0: c(1),
+      path: circle(c(0), '1', 1),
+      at: ['1/8', '3/8', '5/8', '7/8'],
+      cuts: [{ points: [c(0), c(0, 1)], to_infinity: true }],
+    });
+    const expected = [Math.PI / 4, (3 * Math.PI) / 4 - 2 * Math.PI, (5 * Math.PI) / 4 - 2 * Math.PI, (7 * Math.PI) / 4 - 2 * Math.PI].map((theta) => [
+      Math.cos(theta / 2),
+      Math.sin(theta / 2),
+    ]);
+    answer.values.forEach((v, i) => {
+      expect(num(v.f.re)).toBeCloseTo((expected[i] as number[])[0] as number, 14);
+      expect(num(v.f.im)).toBeCloseTo((expected[i] as number[])[1] as number, 14);
+    });
+  });
+
+  it('returns to f0 around a loop that crosses the cut between the branch points of √(z²−1)', () => {
+    const answer = run({
+      g: 'z^2 - 1',
+      nu: '1/2',
+      z0: c(0, 1),
+      k: 0,
+      path: circle(c(1), '1'),
+      at: ['0', '1'],
+      cuts: [{ points: [c(-1), c(1)], to_infinity: false }],
+    });
+    expect(answer.values[1]?.f).toEqual(answer.values[0]?.f);
+    expect(num(answer.monodromy?.re ?? 'nan')).toBeCloseTo(-1, 14);
+  });
+
+  it('takes f0 as the k-th value principal·e^{2πiνk}: (−1)^{1/3} with k = 1 is −1', () => {
+    const answer = run({ g: 'z', nu: '1/3', z0: c(-1), k: 1, path: { kind: 'polyline', points: [c(-1), c(-1, 1)] }, at: ['0'] });
+    expect(num(answer.values[0]?.f.re ?? 'nan')).toBeCloseTo(-1, 30);
+    expect(num(answer.values[0]?.f.im ?? 'nan')).toBeCloseTo(0, 30);
+  });
+});
+
+describe('refusals', () => {
+  const base = { nu: '1/2', z0: c(2), k: 0, path: circle(c(0), '1'), at: ['1'] };
+
+  it('refuses a path through a zero of g, naming where', () => {
+    expect(answerContinue({ ...base, g: 'z - 1', z0: c(2), path: { kind: 'polyline', points: [c(2), c(0)] } })).toEqual({
+      error: 'the path near t = 0.5 passes through a zero of g of order 1 at (1, 0)',
+    });
+  });
+
+  it('refuses z0 at a pole of g', () => {
+    expect(answerContinue({ ...base, g: '1/(z - 2)' })).toEqual({ error: 'z0 is a pole of g of order 1 at (2, 0)' });
+  });
+
+  it('names a branch point that lies on no cut', () => {
+    expect(answerContinue({ ...base, g: 'z^2 - 1', cuts: [{ points: [c(1), c(5)], to_infinity: true }] })).toEqual({
+      error: 'the branch point at (-1, 0) (zero of g of order 1, ν·m = 1/2) lies on no cut',
+    });
+  });
+
+  it('names the loop whose monodromy is not 1 when a finite cut ends at only one branch point', () => {
+    const answer = answerContinue({ ...base, g: 'z*(z - 1)*(z + 3)', nu: '1/3', cuts: [{ points: [c(0), c(1)] }, { points: [c(-3), c(-4)], to_infinity: true }] });
+    expect(answer).toEqual({
+      error:
+        'the loop around the cut through (0, 0), (1, 0) crosses no cut but has monodromy e^{2πi·2/3} ≠ 1 (ν·(Z−P) = 2/3 is not an integer): extend that cut to another branch point or to infinity',
+    });
+  });
+
+  it('refuses cuts that close a loop', () => {
+    const answer = answerContinue({ ...base, g: 'z', cuts: [{ points: [c(0), c(-1), c(-1, -1), c(0)] }] });
+    expect(String(answer.error)).toMatch(/^the cuts close a loop at/);
+  });
+
+  it('refuses z0 on a cut', () => {
+    expect(answerContinue({ ...base, g: 'z', z0: c(-2), path: circle(c(-2), '0.5'), cuts: [{ points: [c(0), c(-1)], to_infinity: true }] })).toEqual({
+      error: 'z0 = (-2, 0) lies on a cut, where the branch is not fixed',
+    });
+  });
+
+  it('refuses a g outside rational functions times exp factors', () => {
+    expect(answerContinue({ ...base, g: 'sqrt(z)' })).toEqual({ error: 'g must be built from z, numbers, i, + − × ÷, integer powers and exp of such terms; "sqrt" is not allowed' });
+  });
+});
