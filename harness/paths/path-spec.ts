@@ -1,6 +1,6 @@
 /**
- * A number of path geometry: a double, or a decimal string read as the nearest
- * double (see geometry-number.ts).
+ * A number of path geometry: a double, or a string (decimal, C hex float or p/q)
+ * read as the nearest double (see geometry-number.ts).
  */
 type GeometryNumber = number | string;
 

@@ -21,8 +21,17 @@ describe('geometryNumber', () => {
     expect(geometryNumber('5e-324')).toBe(2 ** -1074);
   });
 
-  it('refuses hex, Infinity, empty and other text that Number() accepts or turns into 0', () => {
-    for (const text of ['0x10', 'Infinity', '', '  ', '1e999', 'pi', '1/3']) {
+  it('reads a C hex float exactly and a ratio p/q as the nearest double', () => {
+    // ISO/IEC 9899:2011 6.4.4.2: 0x1.8p+1 is 1.5 · 2^1 = 3; 0x1p-1074 is the least subnormal.
+    expect(geometryNumber('0x1.8p+1')).toBe(3);
+    expect(geometryNumber('-0x1p-1074')).toBe(-(2 ** -1074));
+    // 1/3 in JavaScript is the correctly rounded quotient (IEEE 754 division), the nearest double to ⅓.
+    expect(geometryNumber('1/3')).toBe(1 / 3);
+    expect(geometryNumber('-2/4')).toBe(-0.5);
+  });
+
+  it('refuses Infinity, empty and other text that Number() accepts or turns into 0', () => {
+    for (const text of ['Infinity', 'inf', 'nan', '', '  ', '1e999', 'pi', '0b101', '1/0']) {
       expect(() => geometryNumber(text)).toThrow(RangeError);
     }
   });
