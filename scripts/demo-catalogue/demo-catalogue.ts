@@ -1,0 +1,9 @@
+import type { SuiteInput } from '../../shared/schemas/suite-schema';
+import { DEMO_PRINCIPAL_FUNCTIONS } from './demo-principal-functions';
+import { DEMO_REGULAR_SUITES } from './demo-regular-suites';
+import { principalSuite } from './principal-suite';
+
+/** The whole demo catalogue: every catalogue function under both conventions, then the regular branches. */
+export function demoCatalogue(): SuiteInput[] {
+  return [...DEMO_PRINCIPAL_FUNCTIONS.flatMap((fn) => [principalSuite(fn, 'signed-zero'), principalSuite(fn, 'counter-clockwise')]), ...DEMO_REGULAR_SUITES];
+}

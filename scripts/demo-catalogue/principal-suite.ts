@@ -1,0 +1,46 @@
+import { createHash } from 'node:crypto';
+import type { Convention } from '../../shared/schemas/convention-schema';
+import type { SuiteInput } from '../../shared/schemas/suite-schema';
+import type { SuitePath } from '../../shared/schemas/suite-path-schema';
+import type { DemoCut, DemoPrincipalFunction } from './demo-principal-function';
+
+const c = (p: [string, string]) => ({ re: p[0], im: p[1] });
+
+/** A pinned seed per (suite, law), so re-generating the catalogue changes no seed. */
+const seedOf = (text: string) => createHash('sha256').update(text).digest().readUInt32BE(0) & 0x7fffffff;
+
+function straddle(cut: DemoCut, index: number): SuitePath {
+  return cut.kind === 'ray'
+    ? { kind: 'straddle', name: `straddle cut ${index + 1}`, cut: { kind: 'ray', from: c(cut.from), through: c(cut.through) }, along: ['0.5', '1', '3', '1e6'] }
+    : { kind: 'straddle', name: `straddle cut ${index + 1}`, cut: { kind: 'segment', from: c(cut.from), to: c(cut.to) }, along: ['0.125', '0.25', '0.5', '0.75', '0.875'] };
+}
+
+/**
+ * A principal-branch suite for one function under one convention: a straddle on every cut
+ * (offsets 1e-3, 1e-9, 1e-300, 5e-324 on both sides, and the cut itself with +0 and −0), a
+ * circle around every finite branch point (65 samples, so quarter turns land exactly on the
+ * axes), a wide circle, and the function's property laws.
+ */
+export function principalSuite(fn: DemoPrincipalFunction, convention: Convention): SuiteInput {
+  const short = convention === 'signed-zero' ? 'sz' : 'ccw';
+  const id = `${fn.slug}-principal-${short}`;
+  const paths: SuitePath[] = [
+    ...fn.cuts.map(straddle),
+    ...fn.branchPoints.map(
+      (bp, i): SuitePath => ({ kind: 'circle', name: `around branch point ${i + 1}`, center: c(bp), radius: fn.radius, start_angle: '0', turns: '1', direction: 'ccw', samples: 65 }),
+    ),
+    { kind: 'circle', name: 'wide circle', center: { re: '0', im: '0' }, radius: '3', start_angle: 'pi/8', turns: '1', direction: 'ccw', samples: 49 },
+  ];
+  return {
+    id,
+    version: 1,
+    title: `${fn.title}, principal branch, ${convention === 'signed-zero' ? 'signed zeros (Annex G)' : 'counter-clockwise continuity'}`,
+    story: fn.story,
+    subject: fn.subject,
+    branch: { kind: 'principal' },
+    convention,
+    paths,
+    tolerances: { values: { ulps: 4 }, properties: { ulps: 16 } },
+    properties: fn.laws.map((law) => ({ ...law, runs: 300, seed: seedOf(`${id}/${law.law}`) })),
+  };
+}

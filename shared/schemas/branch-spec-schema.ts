@@ -1,0 +1,41 @@
+import { z } from 'zod';
+import { complexString, numberString } from './complex-string';
+import { objectError } from './object-error';
+
+const cut = z.strictObject(
+  {
+    points: z.array(complexString).min(1, { error: 'needs at least one point' }).max(200),
+    /** Continue the last segment's direction to ∞ (a single point with this flag is not allowed). */
+    to_infinity: z.boolean().default(false),
+  },
+  { error: objectError },
+);
+
+const principal = z.strictObject({ kind: z.literal('principal') }, { error: objectError });
+
+const regular = z
+  .strictObject(
+    {
+      kind: z.literal('regular'),
+      /** g(z), a rational function of z (optionally with exp factors) written like a subject. */
+      g: z.string({ error: 'is required' }).min(1, { error: 'is required' }).max(400),
+      nu: z.union([numberString, complexString], { error: 'must be a number string or {"re","im"}' }),
+      z0: complexString,
+      /** The value at z0, or… */
+      f0: complexString.optional(),
+      /** …the k-th value principal·e^{2πiνk} at z0. */
+      k: z.number().int({ error: 'must be a whole number' }).min(-1000).max(1000).optional(),
+      cuts: z.array(cut).max(50),
+    },
+    { error: objectError },
+  )
+  .refine((b) => (b.f0 === undefined) !== (b.k === undefined), { error: 'give exactly one of f0 and k', path: ['f0'] })
+  .refine((b) => b.cuts.every((c) => c.points.length >= 2 || c.to_infinity), { error: 'a cut of one point must go to infinity', path: ['cuts'] });
+
+/**
+ * What the subject should equal (DESIGN.md §2): the principal branch of every function in it,
+ * or a regular branch of g(z)^ν fixed at z0 with its cut layout.
+ */
+export const branchSpecSchema = z.discriminatedUnion('kind', [principal, regular], { error: 'kind must be principal or regular' });
+
+export type BranchSpec = z.infer<typeof branchSpecSchema>;
