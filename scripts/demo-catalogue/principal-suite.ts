@@ -1,7 +1,7 @@
 import { createHash } from 'node:crypto';
 import type { Convention } from '../../shared/schemas/convention-schema';
 import type { SuiteInput } from '../../shared/schemas/suite-schema';
-import type { SuitePath } from '../../shared/schemas/suite-path-schema';
+import type { SuitePathInput } from '../../shared/schemas/suite-path-schema';
 import type { DemoCut, DemoPrincipalFunction } from './demo-principal-function';
 
 const c = (p: [string, string]) => ({ re: p[0], im: p[1] });
@@ -9,7 +9,7 @@ const c = (p: [string, string]) => ({ re: p[0], im: p[1] });
 /** A pinned seed per (suite, law), so re-generating the catalogue changes no seed. */
 const seedOf = (text: string) => createHash('sha256').update(text).digest().readUInt32BE(0) & 0x7fffffff;
 
-function straddle(cut: DemoCut, index: number): SuitePath {
+function straddle(cut: DemoCut, index: number): SuitePathInput {
   return cut.kind === 'ray'
     ? { kind: 'straddle', name: `straddle cut ${index + 1}`, cut: { kind: 'ray', from: c(cut.from), through: c(cut.through) }, along: ['0.5', '1', '3', '1e6'] }
     : { kind: 'straddle', name: `straddle cut ${index + 1}`, cut: { kind: 'segment', from: c(cut.from), to: c(cut.to) }, along: ['0.125', '0.25', '0.5', '0.75', '0.875'] };
@@ -24,10 +24,10 @@ function straddle(cut: DemoCut, index: number): SuitePath {
 export function principalSuite(fn: DemoPrincipalFunction, convention: Convention): SuiteInput {
   const short = convention === 'signed-zero' ? 'sz' : 'ccw';
   const id = `${fn.slug}-principal-${short}`;
-  const paths: SuitePath[] = [
+  const paths: SuitePathInput[] = [
     ...fn.cuts.map(straddle),
     ...fn.branchPoints.map(
-      (bp, i): SuitePath => ({ kind: 'circle', name: `around branch point ${i + 1}`, center: c(bp), radius: fn.radius, start_angle: '0', turns: '1', direction: 'ccw', samples: 65 }),
+      (bp, i): SuitePathInput => ({ kind: 'circle', name: `around branch point ${i + 1}`, center: c(bp), radius: fn.radius, start_angle: '0', turns: '1', direction: 'ccw', samples: 65 }),
     ),
     { kind: 'circle', name: 'wide circle', center: { re: '0', im: '0' }, radius: '3', start_angle: 'pi/8', turns: '1', direction: 'ccw', samples: 49 },
   ];

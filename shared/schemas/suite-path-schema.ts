@@ -81,3 +81,5 @@ export const suitePathSchema = z.discriminatedUnion('kind', [circle, segment, po
 });
 
 export type SuitePath = z.infer<typeof suitePathSchema>;
+/** A path as written in a file or a form, before defaults are filled in. */
+export type SuitePathInput = z.input<typeof suitePathSchema>;
