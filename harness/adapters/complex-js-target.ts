@@ -2,6 +2,7 @@ import type { ComplexPair } from './complex-pair';
 import { evaluateEach } from './evaluate-each';
 import { OP_ARITY } from './op-arity';
 import type { Target } from './target';
+import { withExactParts } from './with-exact-parts';
 
 interface ComplexJsValue {
   re: number;
@@ -17,9 +18,8 @@ const METHOD: Readonly<Record<string, string>> = { neg: 'neg' };
  * complex.js at one installed version (`alias` is the package name or its npm alias,
  * e.g. "complex.js-2.4.1"). The package is required on first use, not before.
  *
- * Arguments are built with `new Complex(re, im)` and then given their exact parts:
- * the function under test must see the input as sent, and a constructor that drops
- * a −0 is reported by the entry-point probes instead. An operation whose method the
+ * Arguments are built with `new Complex(re, im)` and then given their exact parts
+ * (with-exact-parts.ts). An operation whose method the
  * version lacks (every version from 2.0.11 to 2.4.3 lacks cbrt and nthroot) is
  * unsupported and answers an error per call.
  */
@@ -34,12 +34,7 @@ export function complexJsTarget(alias: string, version: string): Target {
   };
   const methodOf = (op: string): string => METHOD[op] ?? op;
   const has = (op: string): boolean => op in OP_ARITY && typeof load().prototype[methodOf(op)] === 'function';
-  const make = ([re, im]: ComplexPair): ComplexJsValue => {
-    const z = new (load())(re, im);
-    z.re = re;
-    z.im = im;
-    return z;
-  };
+  const make = (z: ComplexPair): ComplexJsValue => withExactParts(new (load())(z[0], z[1]), z);
   return {
     name: `complex.js@${version}`,
     library: 'complex.js',

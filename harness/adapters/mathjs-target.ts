@@ -2,6 +2,7 @@ import type { ComplexPair } from './complex-pair';
 import { evaluateEach } from './evaluate-each';
 import { OP_ARITY } from './op-arity';
 import type { Target } from './target';
+import { withExactParts } from './with-exact-parts';
 
 type MathFunction = (...args: unknown[]) => unknown;
 type MathInstance = Record<string, unknown> & { complex(re: number, im: number): { re: number; im: number } };
@@ -20,7 +21,7 @@ const FUNCTION: Readonly<Record<string, string>> = {
  * mathjs at one installed version, in its own instance `create(all, { predictable })`.
  *
  * Entry point `complex`: every argument goes in as `math.complex(re, im)` (parts set
- * exactly afterwards, as in complex-js-target.ts). Entry point `number`: an argument
+ * exactly afterwards, with-exact-parts.ts). Entry point `number`: an argument
  * with a zero imaginary part (either sign) goes in as the plain number re, the way
  * real-line code calls mathjs; others still go in as complex. So the number entry
  * point cannot see the sign of a zero imaginary part, which is the point of testing
@@ -39,13 +40,7 @@ export function mathjsTarget(alias: string, version: string, entry: 'complex' | 
   };
   const functionOf = (op: string): string => FUNCTION[op] ?? op;
   const has = (op: string): boolean => op in OP_ARITY && typeof load()[functionOf(op)] === 'function';
-  const argument = ([re, im]: ComplexPair): unknown => {
-    if (entry === 'number' && im === 0) return re;
-    const z = load().complex(re, im);
-    z.re = re;
-    z.im = im;
-    return z;
-  };
+  const argument = (z: ComplexPair): unknown => (entry === 'number' && z[1] === 0 ? z[0] : withExactParts(load().complex(z[0], z[1]), z));
   return {
     name: `mathjs@${version}/${entry}${predictable ? '/predictable' : ''}`,
     library: 'mathjs',

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { circlePath } from '../../../harness/paths/circle-path';
 
-const sign = (x: number): string => (Object.is(x, -0) ? '-0' : Object.is(x, 0) ? '+0' : String(x));
+import { zeroText as sign } from './zero-text';
 
 describe('circlePath', () => {
   it('puts quarter-turn points exactly on the axes', () => {

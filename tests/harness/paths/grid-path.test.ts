@@ -1,6 +1,6 @@
 import { gridPath } from '../../../harness/paths/grid-path';
 
-const show = (x: number): string => (Object.is(x, -0) ? '-0' : Object.is(x, 0) ? '+0' : String(x));
+import { zeroText as show } from './zero-text';
 
 describe('gridPath', () => {
   it('samples the box row by row from the bottom left, t running over the point index', () => {

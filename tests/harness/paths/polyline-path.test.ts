@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { polylinePath } from '../../../harness/paths/polyline-path';
 
-const sign = (x: number): string => (Object.is(x, -0) ? '-0' : Object.is(x, 0) ? '+0' : String(x));
+import { zeroText as sign } from './zero-text';
 
 describe('polylinePath', () => {
   it('takes t as the fraction of arc length: a 3-then-4 path has its corner at t = 3/7', () => {

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { segmentPath } from '../../../harness/paths/segment-path';
 
-const sign = (x: number): string => (Object.is(x, -0) ? '-0' : Object.is(x, 0) ? '+0' : String(x));
+import { zeroText as sign } from './zero-text';
 
 describe('segmentPath', () => {
   it('returns both ends exactly, zero signs included', () => {

@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { straddlePath } from '../../../harness/paths/straddle-path';
 import { nextDouble } from '../../../harness/paths/next-double';
 
-const show = (x: number): string => (Object.is(x, -0) ? '-0' : Object.is(x, 0) ? '+0' : String(x));
+import { zeroText as show } from './zero-text';
 
 describe('straddlePath', () => {
   // The principal cut of sqrt and log: the negative real axis (ISO/IEC 9899:2011 G.6.4.2, G.6.3.2).
