@@ -11,17 +11,14 @@ interface ComplexJsValue {
 }
 type ComplexJsClass = { new (re: number, im: number): ComplexJsValue; prototype: Record<string, unknown> };
 
-/** complex.js names its methods after the catalogue, except negation. */
-const METHOD: Readonly<Record<string, string>> = { neg: 'neg' };
-
 /**
  * complex.js at one installed version (`alias` is the package name or its npm alias,
  * e.g. "complex.js-2.4.1"). The package is required on first use, not before.
  *
  * Arguments are built with `new Complex(re, im)` and then given their exact parts
- * (with-exact-parts.ts). An operation whose method the
- * version lacks (every version from 2.0.11 to 2.4.3 lacks cbrt and nthroot) is
- * unsupported and answers an error per call.
+ * (with-exact-parts.ts). An operation whose method the version lacks (every
+ * version from 2.0.11 to 2.4.3 lacks cbrt and nthroot) is unsupported and answers
+ * an error per call.
  */
 export function complexJsTarget(alias: string, version: string): Target {
   let Complex: ComplexJsClass | undefined;
@@ -32,8 +29,8 @@ export function complexJsTarget(alias: string, version: string): Target {
     Complex = mod.default ?? mod;
     return Complex;
   };
-  const methodOf = (op: string): string => METHOD[op] ?? op;
-  const has = (op: string): boolean => op in OP_ARITY && typeof load().prototype[methodOf(op)] === 'function';
+  // complex.js names its methods after the catalogue's operations (sqrt, acoth, add, neg, …).
+  const has = (op: string): boolean => op in OP_ARITY && typeof load().prototype[op] === 'function';
   const make = (z: ComplexPair): ComplexJsValue => withExactParts(new (load())(z[0], z[1]), z);
   return {
     name: `complex.js@${version}`,
@@ -45,7 +42,7 @@ export function complexJsTarget(alias: string, version: string): Target {
       if (!has(op)) return calls.map(() => ({ error: `complex.js ${version} has no ${op}` }));
       return evaluateEach(op, calls, (args) => {
         const [z, ...rest] = args.map(make) as [ComplexJsValue, ...ComplexJsValue[]];
-        return (z[methodOf(op)] as (...a: ComplexJsValue[]) => unknown).apply(z, rest);
+        return (z[op] as (...a: ComplexJsValue[]) => unknown).apply(z, rest);
       });
     },
     close: async () => undefined,
