@@ -47,14 +47,14 @@ export function straddlePath(spec: Extract<PathSpec, { kind: 'straddle' }>): Pat
   });
   const along = spec.along.map((a, i) => geometryNumber(a, `along[${i}]`));
   if (along.length === 0) throw new RangeError('along needs at least one position');
+  const lo = Math.min(...along);
+  const hi = Math.max(...along);
   const bases = along.map((a, i): { t: number; base: Point } => {
     if (spec.cut.kind === 'segment') {
       if (a < 0 || a > 1) throw new RangeError(`along[${i}] = ${a} is outside [0, 1] for a cut segment`);
       return { t: a, base: { re: lerpComponent(from.re, towards.re, a), im: lerpComponent(from.im, towards.im, a) } };
     }
     if (a < 0) throw new RangeError(`along[${i}] = ${a} is a negative distance along a ray`);
-    const lo = Math.min(...along);
-    const hi = Math.max(...along);
     const t = hi === lo ? 0 : (a - lo) / (hi - lo);
     const base = horizontal
       ? { re: from.re + Math.sign(d.re) * a, im: from.im }
