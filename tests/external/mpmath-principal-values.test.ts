@@ -2,6 +2,7 @@ import Decimal from 'decimal.js';
 import { BigComplex } from '../../harness/reference/complex/big-complex';
 import { formatDouble } from '../../harness/reference/numbers/format-double';
 import { parseNumber } from '../../harness/reference/numbers/parse-number';
+import { principalDouble } from '../../harness/reference/principal-double';
 import { principalValue, type PrincipalRequest } from '../../harness/reference/principal-value';
 import { askPython, unhex, type OraclePoint } from './python-oracle';
 import { sameDouble } from './same-double';
@@ -10,7 +11,7 @@ import { seededRandom } from './seeded-random';
 // mpmath, 60 digits (evaluated at 720 so tiny parts keep their digits; Debian python3-mpmath with gmpy2, /usr/bin/python3): every point of every
 // function of the catalogue, off the axes so that no zero sign is involved (cmath covers those).
 // Agreement: each part to 38 significant digits, and the double sign-exactly equal to mpmath's
-// 60-digit value rounded to nearest.
+// 60-digit value rounded to nearest — from the bigint engine and from principalDouble (double-double tier).
 
 const SEED = 20261201;
 const DIGITS = 38;
@@ -167,6 +168,12 @@ describe('principal values against mpmath at 60 digits', () => {
       if (!agrees(re, mp.re) || !agrees(im, mp.im)) failures.push(`${where}: ours ${re} + ${im}i, mpmath ${mp.re} + ${mp.im}i`);
       if (!sameDouble(r.double[0], unhex(mp.re_double)) || !sameDouble(r.double[1], unhex(mp.im_double))) {
         failures.push(`${where}: double ${r.double.map(formatDouble).join(' + ')}i, mpmath rounds to ${mp.re_double} + ${mp.im_double}i`);
+      }
+      if (spec.w === undefined && spec.n === undefined) {
+        const fast = principalDouble(spec.fn, x, y, 'signed-zero');
+        if (!sameDouble(fast[0], unhex(mp.re_double)) || !sameDouble(fast[1], unhex(mp.im_double))) {
+          failures.push(`${where}: principalDouble ${fast.map(formatDouble).join(' + ')}i, mpmath rounds to ${mp.re_double} + ${mp.im_double}i`);
+        }
       }
     });
     expect(checked).toBeGreaterThanOrEqual(20);

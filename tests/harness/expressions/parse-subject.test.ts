@@ -42,8 +42,10 @@ describe('evaluateSubject', () => {
   it('returns x + x²/2 for exp(z) − 1 at the double x nearest 1e−20, settling the cancellation by raising precision', () => {
     const r = at('exp(z) - 1', 1e-20, 0);
     expect(r.double[0]).toBe(1e-20);
-    // x²/2 ≈ 5e−41 changes nothing in the first 20 digits of the exact x; a naive exp(x) − 1
-    // at 40 digits would have lost everything but noise.
-    expect(r.approximation.re.toDecimal(20)).toBe(BigFloat.fromDouble(1e-20).toDecimal(20));
+    // e^x − 1 = x + x²/2 + x³/6 + … (DLMF 4.2.19); with x ≈ 1e−20, x³/6 ≈ 2e−61 is below the 20th
+    // digit but x²/2 ≈ 5e−41 is not. A naive exp(x) − 1 at 40 digits would have kept only noise.
+    const x = BigFloat.fromDouble(1e-20);
+    expect(r.approximation.re.toDecimal(20)).toBe(x.add(x.mul(x).scale(-1)).toDecimal(20));
+    expect(r.approximation.re.toDecimal(20)).not.toBe(x.toDecimal(20));
   });
 });
