@@ -1,5 +1,6 @@
 import { referenceRequest } from '../../shared/schemas/reference-request';
 import { BigComplex } from './complex/big-complex';
+import { describeRequestError } from './describe-request-error';
 import type { PowerExponent } from './complex/power-exponent';
 import { formatDouble } from './numbers/format-double';
 import { parseDouble } from './numbers/parse-double';
@@ -18,11 +19,7 @@ const DEFAULT_DIGITS = 40;
  */
 export function answerReference(input: unknown): Record<string, unknown> {
   const parsed = referenceRequest.safeParse(input);
-  if (!parsed.success) {
-    const issue = parsed.error.issues[0];
-    const where = issue && issue.path.length > 0 ? `${issue.path.join('.')} ` : '';
-    return { error: `${where}${issue?.message ?? 'is invalid'}` };
-  }
+  if (!parsed.success) return describeRequestError(parsed.error);
   const req = parsed.data;
   try {
     const z = BigComplex.fromDoubles(parseDouble(req.z.re), parseDouble(req.z.im));

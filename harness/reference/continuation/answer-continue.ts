@@ -5,6 +5,7 @@ import { BigComplex } from '../complex/big-complex';
 import { BigFloat } from '../numbers/big-float';
 import { parseNumber } from '../numbers/parse-number';
 import type { Rational } from '../numbers/rational';
+import { describeRequestError } from '../describe-request-error';
 import { continueBranch } from './continue-branch';
 import { ContinuationPath, type ExactPoint, type Point } from './continuation-path';
 import { CutLayout } from './cut-layout';
@@ -21,11 +22,7 @@ const DIGITS = 40;
  */
 export function answerContinue(input: unknown): Record<string, unknown> {
   const parsed = continueRequest.safeParse(input);
-  if (!parsed.success) {
-    const issue = parsed.error.issues[0];
-    const where = issue && issue.path.length > 0 ? `${issue.path.join('.')} ` : '';
-    return { error: `${where}${issue?.message ?? 'is invalid'}` };
-  }
+  if (!parsed.success) return describeRequestError(parsed.error);
   const req = parsed.data;
   try {
     const g = FactoredFunction.fromSubject(parseSubject(req.g));

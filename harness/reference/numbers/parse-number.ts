@@ -32,33 +32,33 @@ export function parseNumber(text: string): ParsedNumber {
     return { kind: 'exact', value: new Rational(num, den), negativeZero: num === 0n && t.startsWith('-') };
   }
   const dec = DECIMAL.exec(t);
-  if (dec) {
-    const [, sign, body, exp] = dec as unknown as [string, string, string, string | undefined];
-    if (exp !== undefined && exp.replace(/^[+-]/, '').length > MAX_EXPONENT_DIGITS) {
-      throw new RangeError(`"${text}" has an exponent out of range`);
-    }
-    const [whole = '', frac = ''] = body.split('.');
-    let num = BigInt((whole + frac).replace(/^0+(?=\d)/, '') || '0');
-    const e10 = Number(exp ?? '0') - frac.length;
-    let den = 1n;
-    if (e10 >= 0) num *= 10n ** BigInt(e10);
-    else den = 10n ** BigInt(-e10);
-    const negative = sign === '-';
-    return { kind: 'exact', value: new Rational(negative ? -num : num, den), negativeZero: negative && num === 0n };
-  }
+  if (dec) return positional(text, dec, 10);
   const hex = HEX.exec(t);
-  if (hex) {
-    const [, sign, body, exp] = hex as unknown as [string, string, string, string | undefined];
-    if (exp !== undefined && exp.replace(/^[+-]/, '').length > MAX_EXPONENT_DIGITS) {
-      throw new RangeError(`"${text}" has an exponent out of range`);
-    }
-    const [whole = '', frac = ''] = body.split('.');
-    const num = BigInt('0x' + ((whole + frac).replace(/^0+(?=.)/, '') || '0'));
-    const e2 = Number(exp ?? '0') - 4 * frac.length;
-    const negative = sign === '-';
-    const signed = negative ? -num : num;
-    const value = e2 >= 0 ? new Rational(signed << BigInt(e2)) : new Rational(signed, 1n << BigInt(-e2));
-    return { kind: 'exact', value, negativeZero: negative && num === 0n };
-  }
+  if (hex) return positional(text, hex, 16);
   throw new RangeError(`"${text}" is not a number (expected decimal, hex float, p/q, inf, -inf or nan)`);
+}
+
+/**
+ * The exact value of digits in base 10 (exponent of 10) or base 16 (C hex float, exponent of 2):
+ * sign, digits with an optional point, exponent.
+ */
+function positional(text: string, match: RegExpExecArray, radix: 10 | 16): ParsedNumber {
+  const [, sign, body, exp] = match as unknown as [string, string, string, string | undefined];
+  if (exp !== undefined && exp.replace(/^[+-]/, '').length > MAX_EXPONENT_DIGITS) {
+    throw new RangeError(`"${text}" has an exponent out of range`);
+  }
+  const [whole = '', frac = ''] = body.split('.');
+  const digits = (whole + frac).replace(/^0+(?=.)/, '') || '0';
+  const num = radix === 10 ? BigInt(digits) : BigInt('0x' + digits);
+  const negative = sign === '-';
+  const signed = negative ? -num : num;
+  let value: Rational;
+  if (radix === 10) {
+    const e10 = Number(exp ?? '0') - frac.length;
+    value = e10 >= 0 ? new Rational(signed * 10n ** BigInt(e10)) : new Rational(signed, 10n ** BigInt(-e10));
+  } else {
+    const e2 = Number(exp ?? '0') - 4 * frac.length;
+    value = e2 >= 0 ? new Rational(signed << BigInt(e2)) : new Rational(signed, 1n << BigInt(-e2));
+  }
+  return { kind: 'exact', value, negativeZero: negative && num === 0n };
 }

@@ -37,19 +37,25 @@ const RAYS: Ray[] = [
 const distance = fc.double({ min: 1e-6, max: 1e6, noNaN: true });
 const EPS = 1e-300;
 
+/** The point at distance d along the ray, with its zero part signed, and f there under a convention. */
+function onCut(ray: Ray, d: number, negative: boolean, convention: 'signed-zero' | 'counter-clockwise') {
+  const zero = negative ? -0 : 0;
+  const x = ray.end[0] + d * ray.direction[0];
+  const y = ray.end[1] + d * ray.direction[1];
+  return ray.direction[1] === 0 ? referenceValue(ray.fn, x, zero, convention) : referenceValue(ray.fn, zero, y, convention);
+}
+
 describe('values on branch cuts', () => {
   it.each(RAYS.map((r) => [`${r.fn} from (${r.end.join(', ')})`, r]))(
     'takes on the %s cut, with the zero signed, the limit from the side that sign names (Annex G)',
     (_, ray) => {
       fc.assert(
         fc.property(distance, fc.boolean(), (d, negative) => {
-          const onReal = ray.direction[1] === 0;
+          const side = negative ? -EPS : EPS;
+          const on = onCut(ray, d, negative, 'signed-zero');
           const x = ray.end[0] + d * ray.direction[0];
           const y = ray.end[1] + d * ray.direction[1];
-          const zero = negative ? -0 : 0;
-          const side = negative ? -EPS : EPS;
-          const on = onReal ? referenceValue(ray.fn, x, zero) : referenceValue(ray.fn, zero, y);
-          const off = onReal ? referenceValue(ray.fn, x, side) : referenceValue(ray.fn, side, y);
+          const off = ray.direction[1] === 0 ? referenceValue(ray.fn, x, side) : referenceValue(ray.fn, side, y);
           return close(on.re, off.re, 30) && close(on.im, off.im, 30);
         }),
         { seed: SEED, numRuns: RUNS },
@@ -62,14 +68,10 @@ describe('values on branch cuts', () => {
     (_, ray) => {
       fc.assert(
         fc.property(distance, fc.boolean(), (d, negative) => {
-          const onReal = ray.direction[1] === 0;
-          const x = ray.end[0] + d * ray.direction[0];
-          const y = ray.end[1] + d * ray.direction[1];
-          const zero = negative ? -0 : 0;
           // (z − b)·e^{−iε} with z − b = d·direction: the point just clockwise of z about b.
           const rx = ray.end[0] + d * (ray.direction[0] + ray.direction[1] * 1e-20);
           const ry = ray.end[1] + d * (ray.direction[1] - ray.direction[0] * 1e-20);
-          const on = onReal ? referenceValue(ray.fn, x, zero, 'counter-clockwise') : referenceValue(ray.fn, zero, y, 'counter-clockwise');
+          const on = onCut(ray, d, negative, 'counter-clockwise');
           const rotated = referenceValue(ray.fn, rx, ry);
           return close(on.re, rotated.re, 12) && close(on.im, rotated.im, 12);
         }),

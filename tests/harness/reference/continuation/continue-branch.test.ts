@@ -81,6 +81,15 @@ describe('continuation endpoints against quadrature of g′/g', () => {
   });
 });
 
+/** √ on the unit circle with f0 = 1 at 1 is e^{iθ/2}, θ the argument measured continuously from 0 inside the cut plane. */
+function expectHalfAngles(answer: ReturnType<typeof run>, thetas: number[]): void {
+  answer.values.forEach((v, i) => {
+    const theta = thetas[i] as number;
+    expect(num(v.f.re)).toBeCloseTo(Math.cos(theta / 2), 14);
+    expect(num(v.f.im)).toBeCloseTo(Math.sin(theta / 2), 14);
+  });
+}
+
 describe('regular branches with cut layouts', () => {
   it('reproduces the principal square root on the plane cut along (−∞, 0] (f0 = 1 at z0 = 1)', () => {
     const answer = run({
@@ -93,11 +102,7 @@ describe('regular branches with cut layouts', () => {
       cuts: [{ points: [c(0), c(-1)], to_infinity: true }],
     });
     // Principal √ at e^{iθ} is e^{iθ/2} with θ ∈ (−π, π] (DLMF 4.2.2).
-    const expected = [Math.PI / 4, (3 * Math.PI) / 4, (-3 * Math.PI) / 4, -Math.PI / 4].map((theta) => [Math.cos(theta / 2), Math.sin(theta / 2)]);
-    answer.values.forEach((v, i) => {
-      expect(num(v.f.re)).toBeCloseTo((expected[i] as number[])[0] as number, 14);
-      expect(num(v.f.im)).toBeCloseTo((expected[i] as number[])[1] as number, 14);
-    });
+    expectHalfAngles(answer, [Math.PI / 4, (3 * Math.PI) / 4, (-3 * Math.PI) / 4, -Math.PI / 4]);
   });
 
   it('follows a cut along the positive imaginary axis: arg taken in (−3π/2, π/2]', () => {
@@ -110,14 +115,7 @@ describe('regular branches with cut layouts', () => {
       at: ['1/8', '3/8', '5/8', '7/8'],
       cuts: [{ points: [c(0), c(0, 1)], to_infinity: true }],
     });
-    const expected = [Math.PI / 4, (3 * Math.PI) / 4 - 2 * Math.PI, (5 * Math.PI) / 4 - 2 * Math.PI, (7 * Math.PI) / 4 - 2 * Math.PI].map((theta) => [
-      Math.cos(theta / 2),
-      Math.sin(theta / 2),
-    ]);
-    answer.values.forEach((v, i) => {
-      expect(num(v.f.re)).toBeCloseTo((expected[i] as number[])[0] as number, 14);
-      expect(num(v.f.im)).toBeCloseTo((expected[i] as number[])[1] as number, 14);
-    });
+    expectHalfAngles(answer, [Math.PI / 4, (3 * Math.PI) / 4 - 2 * Math.PI, (5 * Math.PI) / 4 - 2 * Math.PI, (7 * Math.PI) / 4 - 2 * Math.PI]);
   });
 
   it('returns to f0 around a loop that crosses the cut between the branch points of √(z²−1)', () => {
