@@ -90,31 +90,20 @@ function expectHalfAngles(answer: ReturnType<typeof run>, thetas: number[]): voi
   });
 }
 
+/** √z from f0 = 1 at z0 = 1 once around the unit circle, on the plane cut from 0 along the ray through `cut`. */
+function sqrtAroundUnitCircle(cut: ReturnType<typeof c>[]) {
+  return run({ g: 'z', nu: '1/2', z0: c(1), f0: c(1), path: circle(c(0), '1', 1), at: ['1/8', '3/8', '5/8', '7/8'], cuts: [{ points: cut, to_infinity: true }] });
+}
+
 describe('regular branches with cut layouts', () => {
   it('reproduces the principal square root on the plane cut along (−∞, 0] (f0 = 1 at z0 = 1)', () => {
-    const answer = run({
-      g: 'z',
-      nu: '1/2',
-      z0: c(1),
-      f0: c(1),
-      path: circle(c(0), '1', 1),
-      at: ['1/8', '3/8', '5/8', '7/8'],
-      cuts: [{ points: [c(0), c(-1)], to_infinity: true }],
-    });
+    const answer = sqrtAroundUnitCircle([c(0), c(-1)]);
     // Principal √ at e^{iθ} is e^{iθ/2} with θ ∈ (−π, π] (DLMF 4.2.2).
     expectHalfAngles(answer, [Math.PI / 4, (3 * Math.PI) / 4, (-3 * Math.PI) / 4, -Math.PI / 4]);
   });
 
   it('follows a cut along the positive imaginary axis: arg taken in (−3π/2, π/2]', () => {
-    const answer = run({
-      g: 'z',
-      nu: '1/2',
-      z0: c(1),
-      f0: c(1),
-      path: circle(c(0), '1', 1),
-      at: ['1/8', '3/8', '5/8', '7/8'],
-      cuts: [{ points: [c(0), c(0, 1)], to_infinity: true }],
-    });
+    const answer = sqrtAroundUnitCircle([c(0), c(0, 1)]);
     expectHalfAngles(answer, [Math.PI / 4, (3 * Math.PI) / 4 - 2 * Math.PI, (5 * Math.PI) / 4 - 2 * Math.PI, (7 * Math.PI) / 4 - 2 * Math.PI]);
   });
 
