@@ -4,10 +4,11 @@ import { Approximation } from './complex/approximation';
 import type { BigComplex } from './complex/big-complex';
 import type { PowerExponent } from './complex/power-exponent';
 import { applyConvention } from './functions/apply-convention';
+import { CBRT_EXPONENT } from './functions/cbrt';
+import { nthrootExponent } from './functions/nthroot';
 import type { CatalogueFunction } from './functions/catalogue-function';
 import { pow } from './functions/pow';
 import type { ReciprocalFunction } from './functions/reciprocal-function';
-import { Rational } from './numbers/rational';
 
 /** A request for one principal value. `w` is for pow, `n` for nthroot. */
 export interface PrincipalRequest {
@@ -38,12 +39,8 @@ export function evaluateFunction(request: PrincipalRequest, bits: number): Appro
 }
 
 function exponentOf(request: PrincipalRequest, convention: Convention): PowerExponent {
-  if (request.fn === 'cbrt') return { kind: 'rational', value: new Rational(1n, 3n) };
-  if (request.fn === 'nthroot') {
-    const n = request.n;
-    if (n === undefined || !Number.isInteger(n) || n === 0) throw new RangeError('nthroot needs a non-zero integer "n"');
-    return { kind: 'rational', value: new Rational(1n, BigInt(n)) };
-  }
+  if (request.fn === 'cbrt') return { kind: 'rational', value: CBRT_EXPONENT };
+  if (request.fn === 'nthroot') return { kind: 'rational', value: nthrootExponent(request.n) };
   if (!request.w) throw new RangeError('pow needs an exponent "w"');
   if (request.w.kind === 'complex' && convention === 'counter-clockwise') {
     return { kind: 'complex', value: applyConvention(request.w.value, [], convention) };
