@@ -9,10 +9,12 @@ export interface OraclePoint {
   z: [string, string];
   w?: [string, string] | string;
   n?: number;
+  /** For source "cmath-formula": the subject written as a Python expression over z. */
+  formula?: string;
 }
 
 /** Sends one batch of points to tests/external/python/oracle.py and returns its answers, in order. */
-export function askPython<T>(source: 'cmath' | 'mpmath', points: OraclePoint[], dps = 60): T[] {
+export function askPython<T>(source: 'cmath' | 'cmath-formula' | 'mpmath', points: OraclePoint[], dps = 60): T[] {
   const script = path.join(__dirname, 'python', 'oracle.py');
   const run = spawnSync(DEBIAN_PYTHON, [script], {
     input: JSON.stringify({ source, dps, points }),

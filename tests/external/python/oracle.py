@@ -1,6 +1,6 @@
 """Answers batches of requests from Python's cmath and mpmath (Debian's python3-mpmath).
 
-Reads one JSON document on stdin: {"source": "cmath"|"mpmath", "dps": 60, "points": [...]},
+Reads one JSON document on stdin: {"source": "cmath"|"cmath-formula"|"mpmath", "dps": 60, "points": [...]},
 each point {"fn", "z": [re, im] as float.hex strings, "w"?: [re, im] hex | "p/q", "n"?: int}.
 Writes one JSON document: a list of results, each {"re", "im"} as float.hex (cmath) or as
 decimal strings with dps digits plus "re_double"/"im_double" float.hex (mpmath), or
@@ -24,6 +24,20 @@ def run_cmath(points):
             v = getattr(cmath, p["fn"])(z)
             out.append({"re": v.real.hex(), "im": v.imag.hex()})
         except (ValueError, OverflowError) as e:
+            out.append({"raises": type(e).__name__})
+    return out
+
+
+def run_cmath_formula(points):
+    """Each point carries "formula", a Python expression over z using cmath's functions."""
+    names = {name: getattr(cmath, name) for name in ("sqrt", "exp", "log", "asin", "acos", "atan", "asinh", "acosh", "atanh")}
+    out = []
+    for p in points:
+        z = complex(parse_float(p["z"][0]), parse_float(p["z"][1]))
+        try:
+            v = eval(p["formula"], {"__builtins__": {}}, dict(names, z=z))
+            out.append({"re": v.real.hex(), "im": v.imag.hex()})
+        except (ValueError, OverflowError, ZeroDivisionError) as e:
             out.append({"raises": type(e).__name__})
     return out
 
@@ -67,6 +81,8 @@ def main():
     req = json.load(sys.stdin)
     if req["source"] == "cmath":
         result = run_cmath(req["points"])
+    elif req["source"] == "cmath-formula":
+        result = run_cmath_formula(req["points"])
     else:
         result = run_mpmath(req["points"], int(req.get("dps", 60)))
     json.dump(result, sys.stdout)
