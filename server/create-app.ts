@@ -10,6 +10,7 @@ import type { ApiError } from '../shared/api-error';
 import { errorHandler } from './middleware/error-handler';
 import { authRouter } from './routes/auth-router';
 import { meRouter } from './routes/me-router';
+import { suitesRouter } from './routes/suites-router';
 import { usersRouter } from './routes/users-router';
 import { configurePassport } from './services/configure-passport';
 import { DEFAULT_SIGN_IN_LIMITS, SignInLimiter, type SignInLimits } from './services/sign-in-limiter';
@@ -59,7 +60,8 @@ export function createApp(options: AppOptions): SheetkeeperApp {
     res.set('Cache-Control', 'no-store');
     next();
   });
-  api.use(express.json({ limit: '100kb', strict: true }));
+  // Suite bodies from the form reach ~4 KB for the demo catalogue; 256 KB matches the upload limit.
+  api.use(express.json({ limit: '256kb', strict: true }));
   api.use(
     session({
       name: SESSION_COOKIE,
@@ -77,6 +79,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   api.use('/auth', authRouter(passport, limiter));
   api.use('/me', meRouter());
   api.use('/users', usersRouter(options.dataSource));
+  api.use('/suites', suitesRouter(options.dataSource));
   api.use((_req, res) => {
     res.status(404).json({ kind: 'not-found', message: 'No such API route.' } satisfies ApiError);
   });

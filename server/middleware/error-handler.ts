@@ -1,5 +1,6 @@
 import type { NextFunction, Request, Response } from 'express';
 import type { ApiError } from '../../shared/api-error';
+import { HttpError } from '../services/http-error';
 import { InputError } from '../services/input-error';
 
 interface HttpishError {
@@ -19,6 +20,7 @@ export function errorHandler(err: unknown, _req: Request, res: Response, next: N
   }
   const send = (status: number, body: ApiError) => void res.status(status).json(body);
   if (err instanceof InputError) return send(400, { kind: 'invalid-input', message: err.message, issues: err.issues });
+  if (err instanceof HttpError) return send(err.status, err.body);
   const e = (err ?? {}) as HttpishError;
   switch (e.type) {
     case 'entity.parse.failed':

@@ -1,13 +1,19 @@
 import request from 'supertest';
+import { User } from '../../../server/entities/user';
+import { SuiteService } from '../../../server/services/suite-service';
+import { validateSuite } from '../../../shared/validate-suite';
 import { ROLES, type Role } from '../../../shared/roles';
+import { demoSuiteBody } from '../../setup/demo-suite-body';
 import { signInAs } from '../../setup/sign-in-as';
 import { startTestApp, type TestApp } from '../../setup/test-app';
 
 type Who = 'signed-out' | Role;
 const WHO: Who[] = ['signed-out', ...ROLES];
+type Caller = request.Agent | ReturnType<typeof request>;
 
 let t: TestApp;
 let contributorId: string;
+let serial = 0;
 
 beforeAll(async () => {
   t = await startTestApp();
@@ -16,28 +22,74 @@ beforeAll(async () => {
 });
 afterAll(() => t.stop());
 
+/** A fresh suite by Mei (a contributor), optionally submitted or approved, so each case acts on its own. */
+async function freshSuite(state: 'draft' | 'submitted' | 'approved'): Promise<string> {
+  serial += 1;
+  const slug = `table-suite-${serial}`;
+  const users = t.db.dataSource.getRepository(User);
+  const mei = await users.findOneByOrFail({ email: 'mei@sheetkeeper.test' });
+  const hanne = await users.findOneByOrFail({ email: 'hanne@sheetkeeper.test' });
+  const checked = validateSuite(demoSuiteBody(slug), slug);
+  if (!checked.ok) throw new Error('demo suite invalid');
+  const service = new SuiteService(t.db.dataSource);
+  await service.save(mei, checked.suite, 'create');
+  if (state !== 'draft') await service.submit(mei, slug);
+  if (state === 'approved') await service.review(hanne, slug, 1, 'approve', '');
+  return slug;
+}
+
 interface RouteCase {
   name: string;
-  call: (agent: request.Agent | ReturnType<typeof request>) => request.Test;
+  call: (caller: Caller, who: Who) => Promise<request.Response>;
   expect: Record<Who, number>;
 }
 
+const all = (status: number) => ({ 'signed-out': status, admin: status, maintainer: status, reviewer: status, contributor: status });
+const signedIn = (status: number) => ({ ...all(status), 'signed-out': 401 });
+
 /** Every API route, with the status each kind of caller must get. */
 const ROUTES: RouteCase[] = [
-  {
-    name: 'POST /api/auth/sign-in',
-    call: (a) => a.post('/api/auth/sign-in').send({ email: 'ravi@sheetkeeper.test', password: 'ravi-demo-2026' }),
-    expect: { 'signed-out': 200, admin: 200, maintainer: 200, reviewer: 200, contributor: 200 },
-  },
-  { name: 'GET /api/me', call: (a) => a.get('/api/me'), expect: { 'signed-out': 401, admin: 200, maintainer: 200, reviewer: 200, contributor: 200 } },
+  { name: 'POST /api/auth/sign-in', call: (a) => a.post('/api/auth/sign-in').send({ email: 'ravi@sheetkeeper.test', password: 'ravi-demo-2026' }), expect: all(200) },
+  { name: 'GET /api/me', call: (a) => a.get('/api/me'), expect: signedIn(200) },
   { name: 'GET /api/users', call: (a) => a.get('/api/users'), expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 } },
   {
     name: 'PATCH /api/users/:id',
     call: (a) => a.patch(`/api/users/${contributorId}`).send({ role: 'contributor' }),
     expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 },
   },
-  { name: 'GET /api/unknown-route', call: (a) => a.get('/api/unknown-route'), expect: { 'signed-out': 404, admin: 404, maintainer: 404, reviewer: 404, contributor: 404 } },
-  { name: 'POST /api/auth/sign-out', call: (a) => a.post('/api/auth/sign-out'), expect: { 'signed-out': 204, admin: 204, maintainer: 204, reviewer: 204, contributor: 204 } },
+  { name: 'GET /api/suites', call: (a) => a.get('/api/suites'), expect: signedIn(200) },
+  { name: 'GET /api/suites/:slug', call: async (a) => a.get(`/api/suites/${await freshSuite('draft')}`), expect: signedIn(200) },
+  { name: 'POST /api/suites', call: (a, who) => a.post('/api/suites').send(demoSuiteBody(`table-new-${who}`)), expect: signedIn(201) },
+  {
+    name: 'PUT /api/suites/:slug (a new version of an approved suite)',
+    call: async (a) => {
+      const slug = await freshSuite('approved');
+      return a.put(`/api/suites/${slug}`).send(demoSuiteBody(slug));
+    },
+    expect: signedIn(201),
+  },
+  {
+    name: 'POST /api/suites/upload',
+    call: (a, who) => a.post('/api/suites/upload').attach('file', Buffer.from(JSON.stringify(demoSuiteBody(`table-upload-${who}`))), 'suite.json'),
+    expect: signedIn(201),
+  },
+  {
+    name: "POST /api/suites/:slug/submit (someone else's draft)",
+    call: async (a) => a.post(`/api/suites/${await freshSuite('draft')}/submit`),
+    expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 },
+  },
+  {
+    name: 'POST /api/suites/:slug/versions/:version/review',
+    call: async (a) => a.post(`/api/suites/${await freshSuite('submitted')}/versions/1/review`).send({ decision: 'approve' }),
+    expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 200, contributor: 403 },
+  },
+  {
+    name: 'POST /api/suites/:slug/versions/:version/retire',
+    call: async (a) => a.post(`/api/suites/${await freshSuite('approved')}/versions/1/retire`),
+    expect: { 'signed-out': 401, admin: 200, maintainer: 200, reviewer: 200, contributor: 403 },
+  },
+  { name: 'GET /api/unknown-route', call: (a) => a.get('/api/unknown-route'), expect: all(404) },
+  { name: 'POST /api/auth/sign-out', call: (a) => a.post('/api/auth/sign-out'), expect: all(204) },
 ];
 
 describe('route × caller table', () => {
@@ -45,8 +97,8 @@ describe('route × caller table', () => {
 
   it.each(cases)('%s answers %s with %i', async (_name, who, status, route) => {
     const caller = who === 'signed-out' ? request(t.app) : await signInAs(t.app, who);
-    const res = await route.call(caller);
-    expect(res.status).toBe(status);
+    const res = await route.call(caller, who);
+    expect({ status: res.status, body: res.status >= 400 ? res.body : undefined }).toEqual({ status, body: res.status >= 400 ? expect.anything() : undefined });
     if (status === 401) expect(res.body.kind).toBe('signed-out');
     if (status === 403) expect(res.body.kind).toBe('forbidden');
   });

@@ -1,0 +1,98 @@
+import { Router, type NextFunction, type Request, type Response } from 'express';
+import multer from 'multer';
+import type { DataSource } from 'typeorm';
+import { ROLES } from '../../shared/roles';
+import { reviewBody } from '../../shared/schemas/review-body';
+import { suiteListQuery } from '../../shared/schemas/suite-list-query';
+import { suiteSlugParams, suiteVersionParams } from '../../shared/schemas/suite-slug-params';
+import { requireRole } from '../middleware/require-role';
+import { HttpError } from '../services/http-error';
+import { InputError } from '../services/input-error';
+import { parseInput } from '../services/parse-input';
+import { SuiteService } from '../services/suite-service';
+import { validateSuiteInput } from '../services/validate-suite-input';
+
+/** Suite files are small: the largest demo suite is under 4 KB, so 256 KB leaves room without inviting abuse. */
+const MAX_UPLOAD_BYTES = 256 * 1024;
+
+const upload = multer({
+  storage: multer.memoryStorage(),
+  limits: { fileSize: MAX_UPLOAD_BYTES, files: 1, fields: 4, parts: 6 },
+  fileFilter: (_req, file, done) => {
+    const json = file.mimetype === 'application/json' || file.originalname.toLowerCase().endsWith('.json');
+    if (json) done(null, true);
+    else done(new HttpError(415, { kind: 'unsupported-media-type', message: 'A suite file must be JSON (.json).' }));
+  },
+});
+
+/** multer's own errors are the client's: too large is 413, the rest 400 naming the rule. */
+function receiveFile(req: Request, res: Response, next: NextFunction): void {
+  upload.single('file')(req, res, (err: unknown) => {
+    if (err instanceof multer.MulterError) {
+      if (err.code === 'LIMIT_FILE_SIZE') return next(new HttpError(413, { kind: 'payload-too-large', message: `A suite file may be at most ${MAX_UPLOAD_BYTES / 1024} KB.` }));
+      return next(new InputError([{ field: err.field ?? 'file', rule: err.message.toLowerCase() }]));
+    }
+    next(err);
+  });
+}
+
+export function suitesRouter(dataSource: DataSource): Router {
+  const router = Router();
+  const suites = new SuiteService(dataSource);
+  const anyone = requireRole(...ROLES);
+
+  router.get('/', anyone, async (req, res) => {
+    res.json({ suites: await suites.list(parseInput(suiteListQuery, req.query, 'query')) });
+  });
+
+  router.get('/:slug', anyone, async (req, res) => {
+    const { slug } = parseInput(suiteSlugParams, req.params, 'params');
+    res.json({ versions: await suites.versions(slug) });
+  });
+
+  router.post('/', anyone, async (req, res) => {
+    const body = validateSuiteInput(req.body, 'body', 'the suite');
+    const { view } = await suites.save(req.user!, body, 'create');
+    res.status(201).json({ version: view });
+  });
+
+  router.put('/:slug', anyone, async (req, res) => {
+    const { slug } = parseInput(suiteSlugParams, req.params, 'params');
+    const body = validateSuiteInput(req.body, 'body', slug);
+    if (body.id !== slug) throw new InputError([{ field: 'body.id', rule: `must stay "${slug}": a suite keeps its id across versions` }]);
+    const { created, view } = await suites.save(req.user!, body, 'edit');
+    res.status(created ? 201 : 200).json({ version: view });
+  });
+
+  router.post('/upload', anyone, receiveFile, async (req, res) => {
+    const file = req.file;
+    if (!file) throw new InputError([{ field: 'file', rule: 'is required (a .json suite file in the field "file")' }]);
+    let data: unknown;
+    try {
+      data = JSON.parse(file.buffer.toString('utf8'));
+    } catch {
+      throw new InputError([{ field: 'file', rule: 'must be valid JSON' }]);
+    }
+    const body = validateSuiteInput(data, 'file', file.originalname);
+    const { created, view } = await suites.save(req.user!, body, 'upsert');
+    res.status(created ? 201 : 200).json({ version: view });
+  });
+
+  router.post('/:slug/submit', anyone, async (req, res) => {
+    const { slug } = parseInput(suiteSlugParams, req.params, 'params');
+    res.json({ version: await suites.submit(req.user!, slug) });
+  });
+
+  router.post('/:slug/versions/:version/review', requireRole('reviewer', 'admin'), async (req, res) => {
+    const { slug, version } = parseInput(suiteVersionParams, req.params, 'params');
+    const { decision, comment } = parseInput(reviewBody, req.body, 'body');
+    res.json({ version: await suites.review(req.user!, slug, version, decision, comment) });
+  });
+
+  router.post('/:slug/versions/:version/retire', requireRole('reviewer', 'maintainer', 'admin'), async (req, res) => {
+    const { slug, version } = parseInput(suiteVersionParams, req.params, 'params');
+    res.json({ version: await suites.retire(slug, version) });
+  });
+
+  return router;
+}

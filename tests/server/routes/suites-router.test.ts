@@ -1,0 +1,125 @@
+import request from 'supertest';
+import { demoSuiteBody } from '../../setup/demo-suite-body';
+import { signInAs } from '../../setup/sign-in-as';
+import { startTestApp, type TestApp } from '../../setup/test-app';
+
+describe('suites routes and review', () => {
+  let t: TestApp;
+  let ravi: request.Agent; // contributor
+  let hanne: request.Agent; // reviewer
+  let kwame: request.Agent; // maintainer
+  const rows = async () => (await t.db.dataSource.query(`SELECT (SELECT count(*) FROM suites)::int AS s, (SELECT count(*) FROM suite_versions)::int AS v`))[0];
+
+  beforeAll(async () => {
+    t = await startTestApp();
+    [ravi, hanne, kwame] = await Promise.all([signInAs(t.app, 'contributor'), signInAs(t.app, 'reviewer'), signInAs(t.app, 'maintainer')]);
+  });
+  afterAll(() => t.stop());
+
+  it('takes a suite from draft through changes requested to approved, and a later edit makes version 2', async () => {
+    const created = await ravi.post('/api/suites').send(demoSuiteBody('flow-sqrt'));
+    expect(created.status).toBe(201);
+    expect(created.body.version).toMatchObject({ slug: 'flow-sqrt', version: 1, status: 'draft', author: { displayName: 'Ravi Dutta' } });
+
+    expect((await ravi.post('/api/suites/flow-sqrt/submit')).body.version.status).toBe('submitted');
+    const asked = await hanne.post('/api/suites/flow-sqrt/versions/1/review').send({ decision: 'request-changes', comment: 'Add a straddle at 1e-300.' });
+    expect(asked.body.version).toMatchObject({ status: 'changes-requested', reviewComment: 'Add a straddle at 1e-300.', reviewer: { displayName: 'Hanne Lindqvist' } });
+
+    const edited = await ravi.put('/api/suites/flow-sqrt').send({ ...demoSuiteBody('flow-sqrt'), title: 'Square root, edited after review' });
+    expect(edited.status).toBe(200);
+    expect(edited.body.version).toMatchObject({ version: 1, status: 'draft' });
+    await ravi.post('/api/suites/flow-sqrt/submit');
+    expect((await hanne.post('/api/suites/flow-sqrt/versions/1/review').send({ decision: 'approve' })).body.version.status).toBe('approved');
+
+    const next = await ravi.put('/api/suites/flow-sqrt').send({ ...demoSuiteBody('flow-sqrt'), title: 'Square root, second edition' });
+    expect(next.status).toBe(201);
+    expect(next.body.version).toMatchObject({ version: 2, status: 'draft', body: { version: 2 } });
+    const all = await kwame.get('/api/suites/flow-sqrt');
+    expect(all.body.versions.map((v: { version: number; status: string }) => [v.version, v.status])).toEqual([
+      [2, 'draft'],
+      [1, 'approved'],
+    ]);
+    const listed = (await kwame.get('/api/suites?q=flow-sqrt')).body.suites;
+    expect(listed).toEqual([expect.objectContaining({ slug: 'flow-sqrt', latestVersion: 2, latestStatus: 'draft', approvedVersion: 1 })]);
+  });
+
+  it('lets nobody review their own suite', async () => {
+    await hanne.post('/api/suites').send(demoSuiteBody('hanne-own'));
+    await hanne.post('/api/suites/hanne-own/submit');
+    const res = await hanne.post('/api/suites/hanne-own/versions/1/review').send({ decision: 'approve' });
+    expect(res.status).toBe(403);
+  });
+
+  it('needs a comment to request changes', async () => {
+    const res = await hanne.post('/api/suites/flow-sqrt/versions/2/review').send({ decision: 'request-changes' });
+    expect(res.status).toBe(400);
+    expect(res.body.issues).toEqual([{ field: 'body.comment', rule: 'is required when requesting changes' }]);
+  });
+
+  it('refuses to review a version that is not submitted, and to edit one under review', async () => {
+    expect((await hanne.post('/api/suites/flow-sqrt/versions/2/review').send({ decision: 'approve' })).status).toBe(409);
+    await ravi.post('/api/suites').send(demoSuiteBody('under-review'));
+    await ravi.post('/api/suites/under-review/submit');
+    expect((await ravi.put('/api/suites/under-review').send(demoSuiteBody('under-review'))).status).toBe(409);
+  });
+
+  it("keeps one author's draft from another contributor", async () => {
+    const mei = request.agent(t.app);
+    await mei.post('/api/auth/sign-in').send({ email: 'mei@sheetkeeper.test', password: 'mei-demo-2026' });
+    await ravi.post('/api/suites').send(demoSuiteBody('ravi-draft'));
+    expect((await mei.put('/api/suites/ravi-draft').send(demoSuiteBody('ravi-draft'))).status).toBe(403);
+    expect((await mei.post('/api/suites/ravi-draft/submit')).status).toBe(403);
+  });
+
+  it('refuses a second suite with the same id, and an edit that changes the id', async () => {
+    expect((await ravi.post('/api/suites').send(demoSuiteBody('flow-sqrt'))).status).toBe(409);
+    const res = await ravi.put('/api/suites/ravi-draft').send(demoSuiteBody('another-id'));
+    expect(res.status).toBe(400);
+    expect(res.body.issues[0].field).toBe('body.id');
+  });
+
+  it('names the field and the rule for a suite the schema refuses, and for an invalid cut layout', async () => {
+    const bad = { ...demoSuiteBody('bad-radius'), paths: [{ kind: 'circle', name: 'c', center: { re: '0', im: '0' }, radius: 2, samples: 8 }] };
+    const res = await ravi.post('/api/suites').send(bad);
+    expect(res.status).toBe(400);
+    expect(res.body.issues).toEqual([{ field: 'body.paths.0.radius', rule: 'must be a number written as a string' }]);
+
+    const regular = demoSuiteBody('bad-layout', 'sqrt-z2-minus-1-finite-cut');
+    if (regular.branch.kind !== 'regular') throw new Error('expected a regular demo suite');
+    regular.branch.cuts = [{ points: [{ re: '1', im: '0' }, { re: '2', im: '0' }], to_infinity: true }];
+    const layout = await ravi.post('/api/suites').send(regular);
+    expect(layout.status).toBe(400);
+    expect(layout.body.issues[0].field).toBe('body.branch.cuts');
+  });
+
+  it('creates a suite from an uploaded file and updates it from the next upload', async () => {
+    const file = Buffer.from(JSON.stringify(demoSuiteBody('uploaded-log', 'log-principal-sz')));
+    const first = await ravi.post('/api/suites/upload').attach('file', file, { filename: 'uploaded-log.json', contentType: 'application/json' });
+    expect(first.status).toBe(201);
+    const again = await ravi.post('/api/suites/upload').attach('file', Buffer.from(JSON.stringify({ ...demoSuiteBody('uploaded-log', 'log-principal-sz'), title: 'Log, uploaded twice' })), 'uploaded-log.json');
+    expect(again.status).toBe(200);
+    expect(again.body.version).toMatchObject({ version: 1, body: { title: 'Log, uploaded twice' } });
+  });
+
+  it('refuses uploads that are not JSON, not valid, too large or missing, leaving no rows behind', async () => {
+    const before = await rows();
+    const notJson = await ravi.post('/api/suites/upload').attach('file', Buffer.from('{"id": '), 'broken.json');
+    expect(notJson.status).toBe(400);
+    expect(notJson.body.issues).toEqual([{ field: 'file', rule: 'must be valid JSON' }]);
+    const wrongType = await ravi.post('/api/suites/upload').attach('file', Buffer.from('id,subject'), { filename: 'suite.csv', contentType: 'text/csv' });
+    expect(wrongType.status).toBe(415);
+    const tooLarge = await ravi.post('/api/suites/upload').attach('file', Buffer.alloc(300 * 1024, 32), 'big.json');
+    expect(tooLarge.status).toBe(413);
+    const missing = await ravi.post('/api/suites/upload').field('note', 'no file');
+    expect(missing.status).toBe(400);
+    expect(missing.body.issues[0].field).toBe('file');
+    const invalid = await ravi.post('/api/suites/upload').attach('file', Buffer.from(JSON.stringify({ ...demoSuiteBody('x-y'), convention: 'sideways' })), 'x-y.json');
+    expect(invalid.body.issues).toEqual([{ field: 'file.convention', rule: 'must be signed-zero or counter-clockwise' }]);
+    expect(await rows()).toEqual(before);
+  });
+
+  it('lets a maintainer retire an approved version', async () => {
+    expect((await kwame.post('/api/suites/flow-sqrt/versions/1/retire')).body.version.status).toBe('retired');
+    expect((await kwame.post('/api/suites/flow-sqrt/versions/1/retire')).status).toBe(409);
+  });
+});
