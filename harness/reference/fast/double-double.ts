@@ -51,7 +51,17 @@ export const dd = {
   },
 
   sub(a: DD, b: DD): DD {
-    return dd.add(a, [-b[0], -b[1]]);
+    const s1 = a[0] - b[0];
+    let bb = s1 - a[0];
+    const s2 = a[0] - (s1 - bb) - (b[0] + bb);
+    const t1 = a[1] - b[1];
+    bb = t1 - a[1];
+    const t2 = a[1] - (t1 - bb) - (b[1] + bb);
+    const v = s2 + t1;
+    const u1 = s1 + v;
+    const u2 = v - (u1 - s1) + t2;
+    const h = u1 + u2;
+    return [h, u2 - (h - u1)];
   },
 
   mul(a: DD, b: DD): DD {

@@ -26,15 +26,19 @@ const words = new Uint32Array(scratch.buffer);
 const HIGH = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1 ? 1 : 0;
 
 /**
- * The gap from |x| (a normal double) to the next double above, and to the one below: one ulp,
- * or half of it below an exact power of two. Read from the exponent bits, so it is exact.
+ * Half the gap from |x| (a normal double) to the next double above, and to the one below: half
+ * an ulp, or a quarter of one below an exact power of two. The power of two 2^E ≤ |x| is read by
+ * clearing the significand bits, so everything here is exact.
  */
-function gaps(x: number): [number, number] {
+let halfUp = 0;
+let halfDown = 0;
+function halfGaps(x: number): void {
   scratch[0] = x;
-  const high = words[HIGH] as number;
-  const ulp = 2 ** (((high >>> 20) & 0x7ff) - 1075);
-  const powerOfTwo = (high & 0xfffff) === 0 && words[1 - HIGH] === 0;
-  return [ulp, powerOfTwo ? ulp / 2 : ulp];
+  const powerOfTwo = ((words[HIGH] as number) & 0xfffff) === 0 && words[1 - HIGH] === 0;
+  words[HIGH] = (words[HIGH] as number) & 0x7ff00000;
+  words[1 - HIGH] = 0;
+  halfUp = (scratch[0] as number) * 2 ** -53;
+  halfDown = powerOfTwo ? halfUp / 2 : halfUp;
 }
 
 /** hi when every value within 2^−70 relative of hi + lo rounds to hi; else null. */
@@ -42,10 +46,10 @@ function settle(v: DD): number | null {
   const [hi, lo] = v;
   if (!Number.isFinite(hi) || hi === 0) return null;
   const e = Math.abs(hi) * RELATIVE_BOUND;
-  const [up, down] = gaps(hi);
+  halfGaps(hi);
   const towardUp = hi > 0 ? lo + e : -(lo - e);
   const towardDown = hi > 0 ? -(lo - e) : lo + e;
-  return towardUp < up / 2 && towardDown < down / 2 ? hi : null;
+  return towardUp < halfUp && towardDown < halfDown ? hi : null;
 }
 
 function inRange(v: number): boolean {
