@@ -15,8 +15,9 @@ import { fastReal } from './fast-real';
  * Measured here (npm run bench:reference, 9 functions × 10,000 points, 2 cores shared with other
  * work, load average ~3): the bigint engine alone gave 69,333 doubles/s, 1.49× mpmath at 53 bits,
  * far from the 10× wanted; with this tier 254,000–603,000 doubles/s, 11–23× mpmath over six runs.
- * Writing the double-double add, subtract, multiply and Horner loop on scalars (one allocation per
- * operation instead of up to four) took a warm mixed call from ~2.7 µs to ~1.7 µs.
+ * Writing the Horner loop (then add, subtract and multiply) on scalars, one allocation per
+ * operation instead of up to four, took the per-function times of a first run from 0.9–6.1 µs
+ * to 0.9–3.2 µs; a warm call on the bench's mix measured ~1.7 µs.
  */
 const RELATIVE_BOUND = 2 ** -70;
 const RANGE_LOW = 2 ** -400;
