@@ -2,6 +2,8 @@ import { spawnSync } from 'node:child_process';
 import path from 'node:path';
 
 const BIN = path.join(__dirname, '..', '..', 'bin', 'sheetkeeper.mjs');
+/** Each test starts Node with tsx (and, for continue, mathjs: ~1.1 s); a loaded machine can take several times that. */
+const SLOW = 30_000;
 
 function cli(args: string[], input = '') {
   return spawnSync(process.execPath, [BIN, ...args], { input, encoding: 'utf8', timeout: 60_000 });
@@ -23,7 +25,7 @@ describe('sheetkeeper CLI', () => {
     expect(answers[1].error).toMatch(/^not JSON/);
     expect(answers[2]).toEqual({ error: 'unknown function "sin"' });
     expect(answers[3].double).toEqual({ re: '1', im: '1.7320508075688772' });
-  });
+  }, SLOW);
 
   it('answers continue requests with values and the monodromy of a closed path', () => {
     const request = { g: 'z', nu: '1/2', z0: { re: '1', im: '0' }, f0: { re: '1', im: '0' }, path: { kind: 'circle', center: { re: '0', im: '0' }, radius: '1' }, at: ['1/2'] };
@@ -31,11 +33,11 @@ describe('sheetkeeper CLI', () => {
     const answer = JSON.parse(run.stdout);
     expect(answer.values[0].f).toEqual({ re: '0', im: '1' });
     expect(answer.monodromy).toEqual({ re: '-1', im: '0' });
-  });
+  }, SLOW);
 
   it('prints the usage on stderr and exits 2 for an unknown subcommand', () => {
     const run = cli(['frobnicate']);
     expect(run.status).toBe(2);
     expect(run.stderr).toContain('usage: sheetkeeper <command>');
-  });
+  }, SLOW);
 });
