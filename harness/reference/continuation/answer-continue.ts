@@ -58,7 +58,10 @@ export function answerContinue(input: unknown): Record<string, unknown> {
       return { re: c2.re.toDecimal(DIGITS), im: c2.im.toDecimal(DIGITS) };
     };
     return {
-      values: result.values.map((v, i) => ({ t: req.at[at.indexOf(v.t)] ?? v.t.toString(), z: show(v.z), f: show(v.f), index: i })).map(({ index: _index, ...rest }) => rest),
+      values: at.map((t, i) => {
+        const v = result.values.find((r) => r.t.compare(t) === 0) as (typeof result.values)[number];
+        return { t: req.at[i] as string, z: show(v.z), f: show(v.f) };
+      }),
       monodromy: result.monodromy ? show(result.monodromy) : null,
     };
   } catch (e) {

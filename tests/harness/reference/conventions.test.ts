@@ -80,6 +80,26 @@ describe('values on branch cuts', () => {
     },
   );
 
+  // Reciprocal functions have segment cuts, where Kahan's rule (about a single finite end) does not
+  // apply; they inherit the rule of g at 1/z. These rows are the sides their files document.
+  it.each([
+    ['acot', 0, 0.5, 'left'],
+    ['acot', 0, -0.5, 'right'],
+    ['acsc', 0.5, 0, 'upper'],
+    ['acsc', -0.5, 0, 'lower'],
+    ['asec', 0.5, 0, 'upper'],
+    ['acoth', -0.5, 0, 'lower'],
+    ['asech', 2, 0, 'lower'],
+    ['asech', -2, 0, 'lower'],
+    ['acsch', 0, 0.5, 'left'],
+    ['acsch', 0, -0.5, 'right'],
+  ] as const)('takes %s at %d + %di under counter-clockwise from the %s side, as its file documents', (fn, x, y, side) => {
+    const on = referenceValue(fn, x, y, 'counter-clockwise');
+    const step = { upper: [0, EPS], lower: [0, -EPS], left: [-EPS, 0], right: [EPS, 0] }[side];
+    const near = referenceValue(fn, x + (step[0] as number), y + (step[1] as number));
+    expect(close(on.re, near.re, 30) && close(on.im, near.im, 30)).toBe(true);
+  });
+
   it('returns −2i for sqrt(−4 − 0i) under signed-zero and 2i under counter-clockwise', () => {
     expect(referenceValue('sqrt', -4, -0).double).toEqual([0, -2]);
     expect(referenceValue('sqrt', -4, -0, 'counter-clockwise').double).toEqual([0, 2]);

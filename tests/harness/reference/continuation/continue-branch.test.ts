@@ -170,3 +170,11 @@ describe('refusals', () => {
     expect(answerContinue({ ...base, g: 'sqrt(z)' })).toEqual({ error: 'g must be built from z, numbers, i, + − × ÷, integer powers and exp of such terms; "sqrt" is not allowed' });
   });
 });
+
+describe('answer shape', () => {
+  it('answers the requested t values in the order given, echoing each as written', () => {
+    const answer = run({ g: 'z', nu: '1/2', z0: c(1), f0: c(1), path: circle(c(0), '1'), at: ['0.5', '1/4', '0'] });
+    expect(answer.values.map((v) => v.t)).toEqual(['0.5', '1/4', '0']);
+    expect(answer.values[2]?.f).toEqual(c(1));
+  });
+});
