@@ -194,15 +194,6 @@ export class BigFloat {
     return new BigFloat(FINITE, false, root, (this.e - shift) / 2);
   }
 
-  /** Whether the square root of this value is exactly representable (needed for exact-zero decisions). */
-  isPerfectSquare(): boolean {
-    if (this.kind !== FINITE || this.neg) return false;
-    if (this.m === 0n) return true;
-    const m = this.e % 2 === 0 ? this.m : this.m << 1n;
-    const root = integerSqrt(m);
-    return root * root === m;
-  }
-
   /** −1, 0 or 1 comparing |this| with |b| (finite values). */
   compareAbs(b: BigFloat): number {
     if (this.m === 0n) return b.m === 0n ? 0 : -1;
