@@ -12,6 +12,8 @@ PG_BIN="/usr/lib/postgresql/${PG_VERSION}/bin"
 # The cluster's port: SHEETKEEPER_PG_PORT, else the one this checkout chose before
 # (.data/pg-port), else the first of 55432… that nothing answers on.
 port_answers() { (echo >"/dev/tcp/127.0.0.1/$1") 2>/dev/null; }
+# A port nothing listens on right now, chosen by the kernel.
+free_port() { node -e "const s = require('net').createServer(); s.listen(0, '127.0.0.1', () => { console.log(s.address().port); s.close(); })"; }
 choose_pg_port() {
   if [ -n "${SHEETKEEPER_PG_PORT:-}" ]; then echo "$SHEETKEEPER_PG_PORT"; return; fi
   if [ -f "$ROOT/.data/pg-port" ]; then cat "$ROOT/.data/pg-port"; return; fi

@@ -29,10 +29,11 @@ ensure_web_export
 E2E_PORT="${SHEETKEEPER_E2E_PORT:-8461}"
 if port_answers "$E2E_PORT"; then
   [ -n "${SHEETKEEPER_E2E_PORT:-}" ] && { log "port $E2E_PORT is taken"; exit 2; }
-  E2E_PORT="$(node -e "const s = require('net').createServer(); s.listen(0, '127.0.0.1', () => { console.log(s.address().port); s.close(); })")"
+  E2E_PORT="$(free_port)"
   log "port 8461 is taken; the e2e server uses $E2E_PORT"
 fi
-SHEETKEEPER_DB="$E2E_DB" SHEETKEEPER_PORT="$E2E_PORT" node --import tsx server/main.ts >"$OUT/e2e-server.log" 2>&1 &
+E2E_SMTP_PORT="${SHEETKEEPER_E2E_SMTP_PORT:-$(free_port)}"
+SHEETKEEPER_DB="$E2E_DB" SHEETKEEPER_PORT="$E2E_PORT" SHEETKEEPER_SMTP_PORT="$E2E_SMTP_PORT" node --import tsx server/main.ts >"$OUT/e2e-server.log" 2>&1 &
 server_pid=$!
 trap 'kill "$server_pid" 2>/dev/null || true' EXIT
 for _ in $(seq 1 120); do

@@ -14,6 +14,10 @@ export interface ServerConfig {
   /** Secure cookies only when the app is served over HTTPS by a proxy. */
   secureCookies: boolean;
   webDir: string;
+  /** Where mail is sent (SMTP on loopback). */
+  smtpPort: number;
+  /** Run the local fake SMTP server in this process (on unless SHEETKEEPER_FAKE_SMTP=0). */
+  fakeSmtp: boolean;
 }
 
 const LOOPBACK = /^(127\.\d+\.\d+\.\d+|::1|localhost)$/;
@@ -41,11 +45,16 @@ function sessionSecret(): string {
   return readFileSync(file, 'utf8').trim();
 }
 
+function portFrom(variable: string, fallback: number): number {
+  const port = Number(process.env[variable] ?? fallback);
+  if (!Number.isInteger(port) || port < 0 || port > 65535) throw new Error(`${variable} is not a port: ${process.env[variable]}`);
+  return port;
+}
+
 export function loadConfig(): ServerConfig {
   const host = process.env.SHEETKEEPER_HOST ?? '127.0.0.1';
   if (!LOOPBACK.test(host)) throw new Error(`SHEETKEEPER_HOST must be a loopback address, got ${host}`);
-  const port = Number(process.env.SHEETKEEPER_PORT ?? 8460);
-  if (!Number.isInteger(port) || port < 0 || port > 65535) throw new Error(`SHEETKEEPER_PORT is not a port: ${process.env.SHEETKEEPER_PORT}`);
+  const port = portFrom('SHEETKEEPER_PORT', 8460);
   return {
     host,
     port,
@@ -53,5 +62,7 @@ export function loadConfig(): ServerConfig {
     sessionSecret: sessionSecret(),
     secureCookies: process.env.SHEETKEEPER_SECURE_COOKIES === '1',
     webDir: path.join(PROJECT_ROOT, 'dist'),
+    smtpPort: portFrom('SHEETKEEPER_SMTP_PORT', 8525),
+    fakeSmtp: process.env.SHEETKEEPER_FAKE_SMTP !== '0',
   };
 }

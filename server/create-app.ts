@@ -10,6 +10,7 @@ import type { ApiError } from '../shared/api-error';
 import { errorHandler } from './middleware/error-handler';
 import { authRouter } from './routes/auth-router';
 import { meRouter } from './routes/me-router';
+import { outboxRouter } from './routes/outbox-router';
 import { suitesRouter } from './routes/suites-router';
 import { usersRouter } from './routes/users-router';
 import { configurePassport } from './services/configure-passport';
@@ -80,6 +81,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   api.use('/me', meRouter());
   api.use('/users', usersRouter(options.dataSource));
   api.use('/suites', suitesRouter(options.dataSource));
+  api.use('/outbox', outboxRouter(options.dataSource));
   api.use((_req, res) => {
     res.status(404).json({ kind: 'not-found', message: 'No such API route.' } satisfies ApiError);
   });

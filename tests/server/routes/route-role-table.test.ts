@@ -88,6 +88,15 @@ const ROUTES: RouteCase[] = [
     call: async (a) => a.post(`/api/suites/${await freshSuite('approved')}/versions/1/retire`),
     expect: { 'signed-out': 401, admin: 200, maintainer: 200, reviewer: 200, contributor: 403 },
   },
+  { name: 'GET /api/outbox', call: (a) => a.get('/api/outbox'), expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 } },
+  {
+    name: 'GET /api/outbox/:id',
+    call: async (a) => {
+      const [row] = await t.db.dataSource.query(`INSERT INTO received_mail (envelope_from, envelope_to, subject, text_body, raw) VALUES ('a@x.test', '{b@x.test}', 's', 't', 'r') RETURNING id`);
+      return a.get(`/api/outbox/${row.id}`);
+    },
+    expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 },
+  },
   { name: 'GET /api/unknown-route', call: (a) => a.get('/api/unknown-route'), expect: all(404) },
   { name: 'POST /api/auth/sign-out', call: (a) => a.post('/api/auth/sign-out'), expect: all(204) },
 ];

@@ -1,0 +1,38 @@
+import { Router } from 'express';
+import type { DataSource } from 'typeorm';
+import { idParams } from '../../shared/schemas/id-params';
+import { outboxListQuery } from '../../shared/schemas/outbox-list-query';
+import type { ReceivedMailView } from '../../shared/received-mail-view';
+import { ReceivedMail } from '../entities/received-mail';
+import { requireRole } from '../middleware/require-role';
+import { HttpError } from '../services/http-error';
+import { parseInput } from '../services/parse-input';
+
+const summary = (m: ReceivedMail): ReceivedMailView => ({ id: m.id, from: m.envelopeFrom, to: m.envelopeTo, subject: m.subject, receivedAt: m.receivedAt.toISOString() });
+
+/** What the local mail server received (admins): a page of messages, and one message rendered. */
+export function outboxRouter(dataSource: DataSource): Router {
+  const router = Router();
+  const mails = dataSource.getRepository(ReceivedMail);
+
+  router.get('/', requireRole('admin'), async (req, res) => {
+    const { limit, before } = parseInput(outboxListQuery, req.query, 'query');
+    const rows: ReceivedMail[] = await mails
+      .createQueryBuilder('m')
+      .where(before ? '(m.received_at, m.id) < (SELECT received_at, id FROM received_mail WHERE id = :before)' : 'true', { before })
+      .orderBy('m.received_at', 'DESC')
+      .addOrderBy('m.id', 'DESC')
+      .limit(limit)
+      .getMany();
+    res.json({ messages: rows.map(summary), next: rows.length === limit ? rows[rows.length - 1]!.id : null });
+  });
+
+  router.get('/:id', requireRole('admin'), async (req, res) => {
+    const { id } = parseInput(idParams, req.params, 'params');
+    const mail = await mails.findOneBy({ id });
+    if (!mail) throw new HttpError(404, { kind: 'not-found', message: 'No message with that id.' });
+    res.json({ message: { ...summary(mail), text: mail.textBody, html: mail.htmlBody } satisfies ReceivedMailView });
+  });
+
+  return router;
+}
