@@ -95,6 +95,25 @@ function sqrtAroundUnitCircle(cut: ReturnType<typeof c>[]) {
   return run({ g: 'z', nu: '1/2', z0: c(1), f0: c(1), path: circle(c(0), '1', 1), at: ['1/8', '3/8', '5/8', '7/8'], cuts: [{ points: cut, to_infinity: true }] });
 }
 
+describe('continuation along a polyline against quadrature of g′/g', () => {
+  it('agrees for ((z² + 1)·exp(z/3))^(1/3) from 2 to −2 by way of 2i, around the zero at i (10 digits)', () => {
+    const answer = run({
+      g: '(z^2 + 1)*exp(z/3)',
+      nu: '1/3',
+      z0: c(2),
+      f0: c(1),
+      path: { kind: 'polyline', points: [c(2), c(0, 2), c(-2)] },
+      at: ['1'],
+    });
+    // Two segments of equal length: t ∈ [0, ½] on the first, [½, 1] on the second.
+    const point = (t: number): [number, number] => (t <= 0.5 ? [2 - 4 * t, 4 * t] : [2 - 4 * t, 4 - 4 * t]);
+    const velocity = (t: number): [number, number] => (t < 0.5 ? [-4, 4] : [-4, -4]);
+    const [re, im] = byQuadrature('(z^2 + 1)*exp(z/3)', [1 / 3, 0], [1, 0], point, velocity, 1);
+    expect(num(answer.values[0]?.f.re ?? 'nan')).toBeCloseTo(re, 10);
+    expect(num(answer.values[0]?.f.im ?? 'nan')).toBeCloseTo(im, 10);
+  });
+});
+
 describe('regular branches with cut layouts', () => {
   it('reproduces the principal square root on the plane cut along (−∞, 0] (f0 = 1 at z0 = 1)', () => {
     const answer = sqrtAroundUnitCircle([c(0), c(-1)]);
