@@ -53,14 +53,15 @@ export function answerContinue(input: unknown): Record<string, unknown> {
       : null;
     const f0 = req.f0 ? toComplex(point(req.f0, 'f0')) : { k: req.k as number };
     const result = continueBranch({ g, nu, z0: point(req.z0, 'z0'), f0, path, at, layout });
-    const show = (c: BigComplex) => {
-      const c2 = settleZeros(c);
+    const show = (c: BigComplex, scale = 0) => {
+      const c2 = settleZeros(c, scale);
       return { re: c2.re.toDecimal(DIGITS), im: c2.im.toDecimal(DIGITS) };
     };
+    const pathScale = path.scale();
     return {
       values: at.map((t, i) => {
         const v = result.values.find((r) => r.t.compare(t) === 0) as (typeof result.values)[number];
-        return { t: req.at[i] as string, z: show(v.z), f: show(v.f) };
+        return { t: req.at[i] as string, z: show(v.z, pathScale), f: show(v.f) };
       }),
       monodromy: result.monodromy ? show(result.monodromy) : null,
     };
@@ -71,11 +72,12 @@ export function answerContinue(input: unknown): Record<string, unknown> {
 }
 
 /**
- * A part below |c|·2^−160 is noise of the 192-bit working precision (e.g. Re √i after a quarter
- * turn comes out ~1e−60, not 0): it is reported as 0 rather than as 40 meaningless digits.
+ * A part below max(|c|, scale)·2^−160 is noise of the 192-bit working precision (e.g. Re √i after a
+ * quarter turn comes out ~1e−60, not 0): it is reported as 0 rather than as 40 meaningless digits.
+ * For points of the path, `scale` is the path's size, since a point may itself be 0.
  */
-function settleZeros(c: BigComplex): BigComplex {
-  const top = Math.max(c.re.exponent(), c.im.exponent());
+function settleZeros(c: BigComplex, scale: number): BigComplex {
+  const top = Math.max(c.re.exponent(), c.im.exponent(), scale > 0 ? Math.ceil(Math.log2(scale)) : -Infinity);
   const small = (x: BigFloat) => x.isFinite() && !x.isZero() && x.exponent() < top - 160;
   return new BigComplex(small(c.re) ? BigFloat.ZERO : c.re, small(c.im) ? BigFloat.ZERO : c.im);
 }

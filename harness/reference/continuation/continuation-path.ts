@@ -48,6 +48,8 @@ export class ContinuationPath {
       return new BigComplex(s.center[0].toBigFloat(bits).add(r.mul(cos)), s.center[1].toBigFloat(bits).add(r.mul(sin))).truncate(bits);
     }
     const pts = s.points.map(([x, y]) => new BigComplex(x.toBigFloat(bits), y.toBigFloat(bits)));
+    if (t.isZero()) return pts[0] as BigComplex;
+    if (t.compare(Rational.ONE) === 0) return pts[pts.length - 1] as BigComplex;
     const lengths = this.segmentLengths(pts, bits);
     const total = lengths.reduce((a, b) => a.add(b), BigFloat.ZERO);
     let target = total.mul(t.toBigFloat(bits)).truncate(bits);
@@ -89,6 +91,14 @@ export class ContinuationPath {
       acc += len;
       return piece;
     });
+  }
+
+  /** A length typical of the path (|center| + radius, or the largest |point|), for deciding what is zero in its points. */
+  scale(): number {
+    const s = this.spec;
+    const d = (r: Rational) => Math.abs(Number(r.num) / Number(r.den));
+    if (s.kind === 'circle') return Math.hypot(d(s.center[0]), d(s.center[1])) + d(s.radius);
+    return Math.max(...s.points.map(([x, y]) => Math.hypot(d(x), d(y))));
   }
 
   /** Number of pieces to start the step grid with, by geometry: 64 per turn, 16 per segment. */
