@@ -9,7 +9,7 @@ export const SPECIAL = [0, -0, 1, -1, 2.5, -2.5, Infinity, -Infinity, NaN];
 export const CMATH_ULPS = 2;
 
 /**
- * Parts whose sign ISO/IEC 9899:2011 G.6 leaves unspecified ("where the sign of the … part of
+ * Parts whose sign ISO/IEC 9899:2011 G.6 leaves unspecified (from memory of G.6) ("where the sign of the … part of
  * the result is unspecified"); there only the magnitude (or NaN-ness) is compared.
  */
 function unspecifiedSign(fn: string, x: number, y: number): { re: boolean; im: boolean } {
@@ -37,7 +37,7 @@ function unspecifiedSign(fn: string, x: number, y: number): { re: boolean; im: b
   }
 }
 
-/** Where cmath raises, the value C returns (ISO/IEC 9899:2011 clause beside each). */
+/** Where cmath raises, the value C returns (ISO/IEC 9899:2011 clause beside each; rules written from memory of G.6). */
 export const C_RULE: Record<string, (x: number, y: number) => [number, number] | undefined> = {
   // G.6.3.2: clog(−0 + i0) = −∞ + iπ, clog(+0 + i0) = −∞ + i0; conjugate symmetric.
   log: (x, y) => (x === 0 && y === 0 ? [-Infinity, Object.is(x, -0) ? Math.sign(1 / y) * Math.PI : y] : undefined),
