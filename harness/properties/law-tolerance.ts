@@ -1,0 +1,14 @@
+import type { Tolerance } from '../../shared/schemas/tolerance-schema';
+
+/** 2^−52, one ulp of 1. */
+const ULP_OF_ONE = 2 ** -52;
+
+/**
+ * A suite's property tolerance as a relative error for laws that compose several operations
+ * (a root raised to its power, exp of log, a sum of logs): n ulps is read as n·2^−52 relative,
+ * since a per-part ulp count means nothing for a part that cancels; a relative tolerance is
+ * used as written. The law scales it by its own condition number.
+ */
+export function lawTolerance(tolerance: Tolerance): number {
+  return 'ulps' in tolerance ? tolerance.ulps * ULP_OF_ONE : tolerance.relative;
+}

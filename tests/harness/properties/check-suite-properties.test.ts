@@ -1,0 +1,47 @@
+import { readdirSync, readFileSync } from 'node:fs';
+import path from 'node:path';
+import { suiteSchema } from '../../../shared/schemas/suite-schema';
+import { discoverTargets } from '../../../harness/adapters/discover-targets';
+import { checkSuiteProperties } from '../../../harness/properties/check-suite-properties';
+import { referenceTarget } from '../support/reference-target';
+
+const DEMO = path.join(__dirname, '..', '..', '..', 'suites', 'demo');
+const demo = (id: string) => suiteSchema.parse(JSON.parse(readFileSync(path.join(DEMO, `${id}.json`), 'utf8')));
+
+describe('checkSuiteProperties', () => {
+  it("holds every applicable property check of the demo catalogue on the reference's own values, with the demo's pinned seeds", async () => {
+    const failures: unknown[] = [];
+    const notChecked: string[] = [];
+    for (const file of readdirSync(DEMO).filter((f) => f.endsWith('.json'))) {
+      const suite = suiteSchema.parse(JSON.parse(readFileSync(path.join(DEMO, file), 'utf8')));
+      for (const outcome of await checkSuiteProperties(suite, referenceTarget(suite.convention))) {
+        if (outcome.kind === 'failed') failures.push(outcome);
+        if (outcome.kind === 'not-checked') notChecked.push(`${suite.id}/${outcome.law}`);
+      }
+    }
+    expect(failures).toEqual([]);
+    // (conj z)^w = conj(z^conj(w)): conjugate symmetry does not apply to pow(z, 0.5 + 2i), and nothing else is skipped.
+    expect(notChecked.sort()).toEqual(['pow-complex-principal-ccw/conjugate-symmetry', 'pow-complex-principal-sz/conjugate-symmetry']);
+  }, 30_000);
+
+  it("fails conjugate symmetry for complex.js 2.4.3's sqrt under signed-zero, on the cut (complex.js ignores the sign of a zero imaginary part in sqrt)", async () => {
+    const descriptor = discoverTargets().find((d) => d.name === 'complex.js@2.4.3');
+    if (!descriptor) throw new Error('complex.js 2.4.3 is a dependency of the project and must be installed');
+    const [conjugate] = await checkSuiteProperties(demo('sqrt-principal-sz'), descriptor.open());
+    expect(conjugate).toMatchObject({ kind: 'failed', law: 'conjugate-symmetry', seed: 1330520191 });
+    // ISO/IEC 9899:2011 G.6.4.2: csqrt(conj z) = conj csqrt(z); on the cut the −0 must give −i√|x|.
+    if (conjugate?.kind === 'failed') expect(conjugate.counterexample[0]!.im).toMatch(/^-?0$/);
+  });
+
+  it("holds conjugate symmetry and the range for Python's cmath sqrt near its cut under signed-zero (cmath follows Annex G, common practice)", async () => {
+    const descriptor = discoverTargets().find((d) => d.library === 'cmath');
+    if (!descriptor) throw new Error('Debian python3 at /usr/bin/python3 runs the cmath target');
+    const target = descriptor.open();
+    try {
+      const outcomes = await checkSuiteProperties(demo('sqrt-principal-sz'), target);
+      expect(outcomes.filter((o) => o.law !== 'root-power').map((o) => o.kind)).toEqual(['held', 'held']);
+    } finally {
+      await target.close();
+    }
+  }, 20_000);
+});
