@@ -1,7 +1,7 @@
 import type { Convention } from '../../shared/schemas/convention-schema';
 import { catalogue } from './catalogue';
 import { Approximation } from './complex/approximation';
-import type { BigComplex } from './complex/big-complex';
+import { BigComplex } from './complex/big-complex';
 import type { PowerExponent } from './complex/power-exponent';
 import { applyConvention } from './functions/apply-convention';
 import { CBRT_EXPONENT } from './functions/cbrt';
@@ -9,6 +9,7 @@ import { nthrootExponent } from './functions/nthroot';
 import type { CatalogueFunction } from './functions/catalogue-function';
 import { pow } from './functions/pow';
 import type { ReciprocalFunction } from './functions/reciprocal-function';
+import { BigFloat } from './numbers/big-float';
 
 /** A request for one principal value. `w` is for pow, `n` for nthroot. */
 export interface PrincipalRequest {
@@ -19,14 +20,14 @@ export interface PrincipalRequest {
   convention: Convention;
 }
 
-/** Extra precision for the second evaluation of a reciprocal function. */
-const RECIPROCAL_STEP = 40;
+/** Extra bits for 1/z, so that rounding it costs little of the reciprocal function's budget. */
+const RECIPROCAL_GUARD = 16;
 
 /**
  * One evaluation of a catalogue function at a working precision, with its error bound:
  * the convention applied to the input, Annex G special values, else the function's formula.
- * Reciprocal functions evaluate g(1/z) with 1/z rounded, so their bound is the difference
- * between two evaluations 40 bits apart (a heuristic, as mpmath's own precision escalation is).
+ * Reciprocal functions evaluate g(1/z) with 1/z rounded; their bound adds what that rounding can
+ * cost, from a bound on |g′| near 1/z (see {@link reciprocalError}).
  */
 export function evaluateFunction(request: PrincipalRequest, bits: number): Approximation {
   const entry = catalogue[request.fn];
@@ -54,9 +55,34 @@ function evaluatePlain(fn: CatalogueFunction, z: BigComplex, bits: number): Appr
 
 function evaluateReciprocal(fn: ReciprocalFunction, z: BigComplex, convention: Convention, bits: number): Approximation {
   const base = applyConvention(z, [], convention);
-  const at = (b: number) => evaluatePlain(fn.inner, applyConvention(base.reciprocal(b + 16), fn.inner.cuts, convention), b);
-  const coarse = at(bits);
-  const fine = at(bits + RECIPROCAL_STEP);
-  return Approximation.agreement(coarse, fine);
+  const rounding = bits + RECIPROCAL_GUARD;
+  const w = applyConvention(base.reciprocal(rounding), fn.inner.cuts, convention);
+  const a = evaluatePlain(fn.inner, w, bits);
+  if (!base.isFinite() || base.isZero()) return a;
+  const extra = reciprocalError(w, rounding, fn.derivative);
+  const widen = (err: number) => (err === -Infinity ? err : Math.max(err, extra) + 1);
+  return new Approximation(a.re, a.im, widen(a.reErr), widen(a.imErr));
+}
+
+/**
+ * log2 of a bound on |g(w′) − g(w)| for the exact w′ = 1/z, when each part of the computed w has
+ * relative error below 2^−rounding: |w′ − w| ≤ ρ = |w|·2^−rounding, and on that disc
+ * |1 + s·w′²| ≥ |1 + s·w²| − 2|w|ρ − ρ² ≥ |1 + s·w²|/2 once the subtracted terms are at most half,
+ * so |g′| ≤ (|1 + s·w²|/2)^−power and the error is at most ρ times that. Infinity when the disc
+ * comes too near a branch point to say (the caller then raises the precision). A part of g(w) that
+ * is exactly zero stays so: w's parts keep their signs and zeros, so w′ lies on the same side of
+ * every cut and on the same axis.
+ */
+function reciprocalError(w: BigComplex, rounding: number, derivative: ReciprocalFunction['derivative']): number {
+  const top = Math.max(w.re.exponent(), w.im.exponent()) + 1;
+  const rho = top - rounding;
+  const q = w.mul(w);
+  const one = new BigComplex(BigFloat.ONE, BigFloat.ZERO);
+  const norm = (derivative.sign > 0 ? one.add(q) : one.sub(q)).norm();
+  if (norm.isZero()) return Infinity;
+  const lowLog = (norm.exponent() - 1) / 2;
+  const perturbation = top + rho + 3;
+  if (lowLog - 1 < perturbation) return Infinity;
+  return Math.ceil(rho - derivative.power * (lowLog - 1)) + 1;
 }
 

@@ -15,4 +15,5 @@ export const acot: ReciprocalFunction = {
   name: 'acot',
   inner: atan,
   cuts: [{ axis: 'imaginary', from: -1, to: 1 }],
+  derivative: { sign: 1, power: 1 },
 };

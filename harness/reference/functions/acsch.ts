@@ -15,4 +15,5 @@ export const acsch: ReciprocalFunction = {
   name: 'acsch',
   inner: asinh,
   cuts: [{ axis: 'imaginary', from: -1, to: 1 }],
+  derivative: { sign: 1, power: 0.5 },
 };

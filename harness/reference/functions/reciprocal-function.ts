@@ -11,4 +11,9 @@ export interface ReciprocalFunction {
   name: string;
   inner: CatalogueFunction;
   cuts: readonly Omit<Cut, 'ccwSide'>[];
+  /**
+   * g's derivative as |g′(w)| = |1 + sign·w²|^(−power) (DLMF 4.24.1–4.24.3 for asin, acos, atan;
+   * 4.38.1–4.38.3 for asinh, acosh, atanh), used to bound what rounding 1/z costs.
+   */
+  derivative: { sign: 1 | -1; power: 0.5 | 1 };
 }
