@@ -11,7 +11,10 @@ import { errorHandler } from './middleware/error-handler';
 import { authRouter } from './routes/auth-router';
 import { meRouter } from './routes/me-router';
 import { outboxRouter } from './routes/outbox-router';
+import { plansRouter } from './routes/plans-router';
+import { schedulesRouter } from './routes/schedules-router';
 import { suitesRouter } from './routes/suites-router';
+import { targetsRouter } from './routes/targets-router';
 import { usersRouter } from './routes/users-router';
 import { configurePassport } from './services/configure-passport';
 import { DEFAULT_SIGN_IN_LIMITS, SignInLimiter, type SignInLimits } from './services/sign-in-limiter';
@@ -82,6 +85,9 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   api.use('/users', usersRouter(options.dataSource));
   api.use('/suites', suitesRouter(options.dataSource));
   api.use('/outbox', outboxRouter(options.dataSource));
+  api.use('/targets', targetsRouter(options.dataSource));
+  api.use('/plans', plansRouter(options.dataSource));
+  api.use('/schedules', schedulesRouter(options.dataSource));
   api.use((_req, res) => {
     res.status(404).json({ kind: 'not-found', message: 'No such API route.' } satisfies ApiError);
   });

@@ -1,6 +1,10 @@
 import 'reflect-metadata';
 import { DataSource } from 'typeorm';
 import { OutboxMail } from './entities/outbox-mail';
+import { Plan } from './entities/plan';
+import { Schedule } from './entities/schedule';
+import { ScheduleFiring } from './entities/schedule-firing';
+import { Target } from './entities/target';
 import { ReceivedMail } from './entities/received-mail';
 import { Suite } from './entities/suite';
 import { SuiteVersion } from './entities/suite-version';
@@ -8,10 +12,11 @@ import { User } from './entities/user';
 import { UsersSessionsSignInLimits1764626400000 } from './migrations/1764626400000-users-sessions-sign-in-limits';
 import { SuitesAndVersions1764700000000 } from './migrations/1764700000000-suites-and-versions';
 import { MailOutboxAndReceivedMail1764710000000 } from './migrations/1764710000000-mail-outbox-and-received-mail';
+import { TargetsPlansSchedules1764720000000 } from './migrations/1764720000000-targets-plans-schedules';
 
 /** Entities and migrations are listed, not globbed, so tsx, jest and tsc builds all find them. */
-export const ENTITIES = [User, Suite, SuiteVersion, OutboxMail, ReceivedMail];
-export const MIGRATIONS = [UsersSessionsSignInLimits1764626400000, SuitesAndVersions1764700000000, MailOutboxAndReceivedMail1764710000000];
+export const ENTITIES = [User, Suite, SuiteVersion, OutboxMail, ReceivedMail, Target, Plan, Schedule, ScheduleFiring];
+export const MIGRATIONS = [UsersSessionsSignInLimits1764626400000, SuitesAndVersions1764700000000, MailOutboxAndReceivedMail1764710000000, TargetsPlansSchedules1764720000000];
 
 export function createDataSource(url: string): DataSource {
   return new DataSource({

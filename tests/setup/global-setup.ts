@@ -2,12 +2,14 @@ import 'reflect-metadata';
 import { Client } from 'pg';
 import { createDataSource } from '../../server/data-source';
 import { seedDemo } from '../../server/seed/seed-demo';
+import { syncTargets } from '../../server/services/sync-targets';
 import { pgBaseUrl } from './pg-base-url';
 import { TEMPLATE_DATABASE } from './template-database';
 
 /**
  * Builds the template database once per jest run: migrated with the real
- * migrations and seeded with the demo users (so bcrypt runs once, not per file).
+ * migrations and seeded with the demo users and the installed targets (so bcrypt and target
+ * discovery run once, not per file). Suites and plans are left to each test.
  */
 export default async function globalSetup(): Promise<void> {
   const admin = new Client({ connectionString: `${pgBaseUrl()}/postgres` });
@@ -23,6 +25,7 @@ export default async function globalSetup(): Promise<void> {
   try {
     await dataSource.runMigrations({ transaction: 'each' });
     await seedDemo(dataSource);
+    await syncTargets(dataSource);
   } finally {
     await dataSource.destroy();
   }

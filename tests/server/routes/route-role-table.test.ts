@@ -3,6 +3,7 @@ import { User } from '../../../server/entities/user';
 import { SuiteService } from '../../../server/services/suite-service';
 import { validateSuite } from '../../../shared/validate-suite';
 import { ROLES, type Role } from '../../../shared/roles';
+import { approvedSuite } from '../../setup/approved-suite';
 import { demoSuiteBody } from '../../setup/demo-suite-body';
 import { signInAs } from '../../setup/sign-in-as';
 import { startTestApp, type TestApp } from '../../setup/test-app';
@@ -14,12 +15,30 @@ type Caller = request.Agent | ReturnType<typeof request>;
 let t: TestApp;
 let contributorId: string;
 let serial = 0;
+let targetName: string;
 
 beforeAll(async () => {
   t = await startTestApp();
   const row = await t.db.dataSource.query(`SELECT id FROM users WHERE email = 'mei@sheetkeeper.test'`);
   contributorId = row[0].id;
+  targetName = (await t.db.dataSource.query(`SELECT name FROM targets WHERE library = 'complex.js' AND installed LIMIT 1`))[0].name;
+  await approvedSuite(t.db.dataSource, 'table-plan-suite');
 });
+
+/** A fresh plan over one approved suite and one installed target. */
+async function freshPlan(): Promise<string> {
+  serial += 1;
+  const admin = await signInAs(t.app, 'admin');
+  const res = await admin.post('/api/plans').send({ name: `table plan ${serial}`, recipients: [], suites: ['table-plan-suite'], targets: [targetName] });
+  return res.body.plan.id;
+}
+
+/** A fresh schedule of a fresh plan. */
+async function freshSchedule(): Promise<string> {
+  const admin = await signInAs(t.app, 'admin');
+  const res = await admin.post('/api/schedules').send({ planId: await freshPlan(), cron: '0 3 * * *', timeZone: 'UTC' });
+  return res.body.schedule.id;
+}
 afterAll(() => t.stop());
 
 /** A fresh suite by Mei (a contributor), optionally submitted or approved, so each case acts on its own. */
@@ -97,6 +116,29 @@ const ROUTES: RouteCase[] = [
     },
     expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 },
   },
+  { name: 'GET /api/targets', call: (a) => a.get('/api/targets'), expect: signedIn(200) },
+  { name: 'GET /api/plans', call: (a) => a.get('/api/plans'), expect: signedIn(200) },
+  { name: 'GET /api/plans/:id', call: async (a) => a.get(`/api/plans/${await freshPlan()}`), expect: signedIn(200) },
+  {
+    name: 'POST /api/plans',
+    call: (a, who) => a.post('/api/plans').send({ name: `table new plan ${who}`, recipients: [], suites: ['table-plan-suite'], targets: [targetName] }),
+    expect: { 'signed-out': 401, admin: 201, maintainer: 201, reviewer: 403, contributor: 403 },
+  },
+  {
+    name: 'PUT /api/plans/:id',
+    call: async (a, who) => a.put(`/api/plans/${await freshPlan()}`).send({ name: `table renamed ${who}`, recipients: [], suites: ['table-plan-suite'], targets: [targetName] }),
+    expect: { 'signed-out': 401, admin: 200, maintainer: 200, reviewer: 403, contributor: 403 },
+  },
+  { name: 'DELETE /api/plans/:id', call: async (a) => a.delete(`/api/plans/${await freshPlan()}`), expect: { 'signed-out': 401, admin: 204, maintainer: 204, reviewer: 403, contributor: 403 } },
+  { name: 'GET /api/schedules', call: (a) => a.get('/api/schedules'), expect: signedIn(200) },
+  { name: 'POST /api/schedules/preview', call: (a) => a.post('/api/schedules/preview').send({ cron: '0 3 * * *', timeZone: 'UTC' }), expect: signedIn(200) },
+  {
+    name: 'POST /api/schedules',
+    call: async (a) => a.post('/api/schedules').send({ planId: await freshPlan(), cron: '0 3 * * *', timeZone: 'UTC' }),
+    expect: { 'signed-out': 401, admin: 201, maintainer: 201, reviewer: 403, contributor: 403 },
+  },
+  { name: 'PATCH /api/schedules/:id', call: async (a) => a.patch(`/api/schedules/${await freshSchedule()}`).send({ enabled: false }), expect: { 'signed-out': 401, admin: 200, maintainer: 200, reviewer: 403, contributor: 403 } },
+  { name: 'DELETE /api/schedules/:id', call: async (a) => a.delete(`/api/schedules/${await freshSchedule()}`), expect: { 'signed-out': 401, admin: 204, maintainer: 204, reviewer: 403, contributor: 403 } },
   { name: 'GET /api/unknown-route', call: (a) => a.get('/api/unknown-route'), expect: all(404) },
   { name: 'POST /api/auth/sign-out', call: (a) => a.post('/api/auth/sign-out'), expect: all(204) },
 ];
