@@ -3,10 +3,9 @@ import type { MathNode } from 'mathjs';
 import { parseNumber } from '../reference/numbers/parse-number';
 import { Rational } from '../reference/numbers/rational';
 import { SubjectError } from './subject-error';
+import { SUBJECT_LIMITS } from './subject-limits';
 import type { SubjectExpr } from './subject-expr';
 
-/** Limits on a subject, so a request cannot make the parser or evaluator work without bound. */
-export const SUBJECT_LIMITS = { length: 400, depth: 24, nodes: 200 } as const;
 
 const ONE_ARGUMENT = new Set([
   'sqrt', 'cbrt', 'exp', 'log', 'asin', 'acos', 'atan', 'asinh', 'acosh', 'atanh',

@@ -2,7 +2,8 @@ import { evaluateSubject } from '../../harness/expressions/evaluate-subject';
 import { parseSubject } from '../../harness/expressions/parse-subject';
 import { BigComplex } from '../../harness/reference/complex/big-complex';
 import { formatDouble } from '../../harness/reference/numbers/format-double';
-import { askPython, unhex, type OraclePoint } from './python-oracle';
+import { askPython, type OraclePoint } from './python-oracle';
+import { unhex } from './unhex';
 import { sameDouble } from './same-double';
 
 // Subjects against the same formula in Python with cmath (Debian python3, /usr/bin/python3):

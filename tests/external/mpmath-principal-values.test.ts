@@ -4,7 +4,8 @@ import { formatDouble } from '../../harness/reference/numbers/format-double';
 import { parseNumber } from '../../harness/reference/numbers/parse-number';
 import { principalDouble } from '../../harness/reference/principal-double';
 import { principalValue, type PrincipalRequest } from '../../harness/reference/principal-value';
-import { askPython, unhex, type OraclePoint } from './python-oracle';
+import { askPython, type OraclePoint } from './python-oracle';
+import { unhex } from './unhex';
 import { sameDouble } from './same-double';
 import { seededRandom } from './seeded-random';
 

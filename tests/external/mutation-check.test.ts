@@ -1,7 +1,11 @@
 import { formatDouble } from '../../harness/reference/numbers/format-double';
 import { parseDouble } from '../../harness/reference/numbers/parse-double';
-import { CMATH_ULPS, compareWithCmath, CUTS, cutPointsOf, type CmathAnswer } from './cmath-compare';
-import { askPython, unhex, type OraclePoint } from './python-oracle';
+import type { CmathAnswer } from './cmath-answer';
+import { CMATH_CASES } from './cmath-cases';
+import { compareWithCmath } from './cmath-compare';
+import { cutPointsOf } from './cut-points-of';
+import { askPython, type OraclePoint } from './python-oracle';
+import { unhex } from './unhex';
 import { referenceDouble } from './reference-double';
 import { sameDouble } from './same-double';
 
@@ -33,7 +37,7 @@ const OTHER_SHEET: Record<string, (v: [number, number]) => [number, number]> = {
 };
 
 describe('mutation check of the outside-source comparisons', () => {
-  const points = cutPointsOf(CUTS);
+  const points = cutPointsOf(CMATH_CASES.cuts);
   const cmath = askPython<CmathAnswer>('cmath', points);
   const offCut: OraclePoint[] = Object.keys(OTHER_SHEET).flatMap((fn) => [
     { fn, z: ['0.75', '0.5'] as [string, string] },
@@ -42,14 +46,14 @@ describe('mutation check of the outside-source comparisons', () => {
   const mp = askPython<{ re_double: string; im_double: string }>('mpmath', offCut, 60);
 
   it('passes the reference itself, so the mutants below fail for their mutation alone', () => {
-    const failures = points.map((p, i) => compareWithCmath(p.fn, parseDouble(p.z[0]), parseDouble(p.z[1]), cmath[i] as CmathAnswer, CMATH_ULPS)).filter(Boolean);
+    const failures = points.map((p, i) => compareWithCmath(p.fn, parseDouble(p.z[0]), parseDouble(p.z[1]), cmath[i] as CmathAnswer, CMATH_CASES.ulps)).filter(Boolean);
     expect(failures).toEqual([]);
   });
 
   it.each(Object.entries(MUTANTS).map(([name, f]) => [name, f]))('catches a variant with a %s on the cuts of every function', (_, mutant) => {
-    for (const fn of Object.keys(CUTS)) {
+    for (const fn of Object.keys(CMATH_CASES.cuts)) {
       const caught = points.some(
-        (p, i) => p.fn === fn && compareWithCmath(fn, parseDouble(p.z[0]), parseDouble(p.z[1]), cmath[i] as CmathAnswer, CMATH_ULPS, mutant) !== null,
+        (p, i) => p.fn === fn && compareWithCmath(fn, parseDouble(p.z[0]), parseDouble(p.z[1]), cmath[i] as CmathAnswer, CMATH_CASES.ulps, mutant) !== null,
       );
       expect({ fn, caught }).toEqual({ fn, caught: true });
     }

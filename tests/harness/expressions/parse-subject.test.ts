@@ -1,5 +1,6 @@
 import { evaluateSubject } from '../../../harness/expressions/evaluate-subject';
-import { parseSubject, SUBJECT_LIMITS } from '../../../harness/expressions/parse-subject';
+import { parseSubject } from '../../../harness/expressions/parse-subject';
+import { SUBJECT_LIMITS } from '../../../harness/expressions/subject-limits';
 import { BigComplex } from '../../../harness/reference/complex/big-complex';
 import { BigFloat } from '../../../harness/reference/numbers/big-float';
 

@@ -1,5 +1,6 @@
 import fc from 'fast-check';
-import { close, referenceValue } from './reference-value';
+import { close } from './close';
+import { referenceValue } from './reference-value';
 
 // The two conventions for values on a cut, checked as laws rather than against our tables:
 // - signed-zero (ISO/IEC 9899:2011 G.6, IEC 60559): f(x ± 0i) is the limit of f from the side the

@@ -1,6 +1,8 @@
 import Decimal from 'decimal.js';
 import fc from 'fast-check';
-import { close, exactDecimal, referenceValue } from './reference-value';
+import { close } from './close';
+import { exactDecimal } from './exact-decimal';
+import { referenceValue } from './reference-value';
 
 // Identities and range conditions of the principal branches from the NIST DLMF, checked as
 // properties over seeded points off the cuts. Each run's seed is pinned and printed on failure.

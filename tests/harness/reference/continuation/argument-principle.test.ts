@@ -1,5 +1,7 @@
 import fc from 'fast-check';
-import { c, circle, num, run } from './continue-helpers';
+import { c } from './c';
+import { circle } from './circle';
+import { run } from './run-continue';
 
 // The argument principle: around a circle (positively oriented, `turns` times) the argument of
 // g = Π (z − a_j)^{m_j} changes by 2π·turns·Σ_{|a_j − c| < r} m_j, so g^ν comes back multiplied by
@@ -31,7 +33,7 @@ describe('continuation around random circles', () => {
           const inside = roots.filter((a) => Math.hypot(a.re / 10, a.im / 10) < r).reduce((s, a) => s + a.m, 0);
           const angle = 2 * Math.PI * (p / q) * turns * inside;
           const m = answer.monodromy ?? c('nan', 'nan');
-          return Math.abs(num(m.re) - Math.cos(angle)) < 1e-12 && Math.abs(num(m.im) - Math.sin(angle)) < 1e-12;
+          return Math.abs(Number(m.re) - Math.cos(angle)) < 1e-12 && Math.abs(Number(m.im) - Math.sin(angle)) < 1e-12;
         },
       ),
       { seed: SEED, numRuns: 25 },

@@ -1,6 +1,8 @@
 import { all, create } from 'mathjs';
 import { answerContinue } from '../../../../harness/reference/continuation/answer-continue';
-import { c, circle, num, run } from './continue-helpers';
+import { c } from './c';
+import { circle } from './circle';
+import { run } from './run-continue';
 
 const math = create(all as NonNullable<typeof all>);
 
@@ -15,18 +17,18 @@ describe('monodromy of closed paths equals e^{2πiν(Z−P)} (argument principle
     ['z*exp(z)', '1/4', circle(c(0), '1'), 1, 'exp factors have no zeros'],
   ];
   it.each(cases)('gives e^{2πiν(Z−P)} for %s^%s around %#', (g, nu, path, windings) => {
-    const answer = run({ g, nu, z0: path.center.re === '0' ? c(num(path.radius)) : c(num(path.center.re) + num(path.radius)), k: 0, path, at: ['1'] });
+    const answer = run({ g, nu, z0: path.center.re === '0' ? c(Number(path.radius)) : c(Number(path.center.re) + Number(path.radius)), k: 0, path, at: ['1'] });
     const nuValue = math.fraction(nu).valueOf() as number;
     const angle = 2 * Math.PI * nuValue * windings;
-    expect(num(answer.monodromy?.re ?? 'nan')).toBeCloseTo(Math.cos(angle), 12);
-    expect(num(answer.monodromy?.im ?? 'nan')).toBeCloseTo(Math.sin(angle), 12);
+    expect(Number(answer.monodromy?.re ?? 'nan')).toBeCloseTo(Math.cos(angle), 12);
+    expect(Number(answer.monodromy?.im ?? 'nan')).toBeCloseTo(Math.sin(angle), 12);
   });
 
   it('gives e^{2πiν} for complex ν = 1/3 + i/5 once around a simple zero', () => {
     const answer = run({ g: 'z - 1', nu: c('1/3', '1/5'), z0: c(2), k: 0, path: circle(c(1), '1'), at: ['1'] });
     const modulus = Math.exp(-2 * Math.PI * 0.2);
-    expect(num(answer.monodromy?.re ?? 'nan')).toBeCloseTo(modulus * Math.cos((2 * Math.PI) / 3), 12);
-    expect(num(answer.monodromy?.im ?? 'nan')).toBeCloseTo(modulus * Math.sin((2 * Math.PI) / 3), 12);
+    expect(Number(answer.monodromy?.re ?? 'nan')).toBeCloseTo(modulus * Math.cos((2 * Math.PI) / 3), 12);
+    expect(Number(answer.monodromy?.im ?? 'nan')).toBeCloseTo(modulus * Math.sin((2 * Math.PI) / 3), 12);
   });
 });
 
@@ -76,8 +78,8 @@ describe('continuation endpoints against quadrature of g′/g', () => {
     const velocity = (t: number): [number, number] => [-4 * Math.PI * Math.sin(2 * Math.PI * t), 4 * Math.PI * Math.cos(2 * Math.PI * t)];
     const [re, im] = byQuadrature(g, nuD, [1, 0], point, velocity, t1);
     const f = answer.values[0]?.f ?? c('nan', 'nan');
-    expect(num(f.re)).toBeCloseTo(re, 10);
-    expect(num(f.im)).toBeCloseTo(im, 10);
+    expect(Number(f.re)).toBeCloseTo(re, 10);
+    expect(Number(f.im)).toBeCloseTo(im, 10);
   });
 });
 
@@ -85,8 +87,8 @@ describe('continuation endpoints against quadrature of g′/g', () => {
 function expectHalfAngles(answer: ReturnType<typeof run>, thetas: number[]): void {
   answer.values.forEach((v, i) => {
     const theta = thetas[i] as number;
-    expect(num(v.f.re)).toBeCloseTo(Math.cos(theta / 2), 14);
-    expect(num(v.f.im)).toBeCloseTo(Math.sin(theta / 2), 14);
+    expect(Number(v.f.re)).toBeCloseTo(Math.cos(theta / 2), 14);
+    expect(Number(v.f.im)).toBeCloseTo(Math.sin(theta / 2), 14);
   });
 }
 
@@ -109,8 +111,8 @@ describe('continuation along a polyline against quadrature of g′/g', () => {
     const point = (t: number): [number, number] => (t <= 0.5 ? [2 - 4 * t, 4 * t] : [2 - 4 * t, 4 - 4 * t]);
     const velocity = (t: number): [number, number] => (t < 0.5 ? [-4, 4] : [-4, -4]);
     const [re, im] = byQuadrature('(z^2 + 1)*exp(z/3)', [1 / 3, 0], [1, 0], point, velocity, 1);
-    expect(num(answer.values[0]?.f.re ?? 'nan')).toBeCloseTo(re, 10);
-    expect(num(answer.values[0]?.f.im ?? 'nan')).toBeCloseTo(im, 10);
+    expect(Number(answer.values[0]?.f.re ?? 'nan')).toBeCloseTo(re, 10);
+    expect(Number(answer.values[0]?.f.im ?? 'nan')).toBeCloseTo(im, 10);
   });
 });
 
@@ -137,13 +139,13 @@ describe('regular branches with cut layouts', () => {
       cuts: [{ points: [c(-1), c(1)], to_infinity: false }],
     });
     expect(answer.values[1]?.f).toEqual(answer.values[0]?.f);
-    expect(num(answer.monodromy?.re ?? 'nan')).toBeCloseTo(-1, 14);
+    expect(Number(answer.monodromy?.re ?? 'nan')).toBeCloseTo(-1, 14);
   });
 
   it('takes f0 as the k-th value principal·e^{2πiνk}: (−1)^{1/3} with k = 1 is −1', () => {
     const answer = run({ g: 'z', nu: '1/3', z0: c(-1), k: 1, path: { kind: 'polyline', points: [c(-1), c(-1, 1)] }, at: ['0'] });
-    expect(num(answer.values[0]?.f.re ?? 'nan')).toBeCloseTo(-1, 30);
-    expect(num(answer.values[0]?.f.im ?? 'nan')).toBeCloseTo(0, 30);
+    expect(Number(answer.values[0]?.f.re ?? 'nan')).toBeCloseTo(-1, 30);
+    expect(Number(answer.values[0]?.f.im ?? 'nan')).toBeCloseTo(0, 30);
   });
 });
 
