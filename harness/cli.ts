@@ -1,5 +1,6 @@
 import { answerContinue } from './reference/continuation/answer-continue';
 import { answerReference } from './reference/answer-reference';
+import { fingerprintCommand } from './fingerprint/fingerprint-command';
 import { jsonLines } from './json-lines';
 
 const USAGE = `usage: sheetkeeper <command>
@@ -7,6 +8,7 @@ const USAGE = `usage: sheetkeeper <command>
 commands:
   reference   principal values: JSON lines {"fn","z","convention",["w"|"n"]} on stdin, one answer per line
   continue    regular branches of g(z)^nu along a path: JSON lines {"g","nu","z0","f0"|"k","path","at"}
+  fingerprint which convention a target follows on each cut: --target NAME@VERSION [--fn a,b] [--format table|json] [--out FILE]
 `;
 
 /** The `sheetkeeper` command: dispatches a subcommand; unknown ones print the usage and exit 2. */
@@ -20,6 +22,7 @@ async function main(argv: string[]): Promise<number> {
     await jsonLines(process.stdin, process.stdout, answerContinue);
     return 0;
   }
+  if (command === 'fingerprint') return fingerprintCommand(argv.slice(1));
   process.stderr.write(command ? `sheetkeeper: unknown command "${command}"\n${USAGE}` : USAGE);
   return 2;
 }

@@ -1,8 +1,6 @@
 import type { Convention } from '../../../shared/schemas/convention-schema';
 import type { ComplexPair } from '../../../harness/adapters/complex-pair';
-import { BigComplex } from '../../../harness/reference/complex/big-complex';
-import { principalDouble } from '../../../harness/reference/principal-double';
-import { principalValue } from '../../../harness/reference/principal-value';
+import { referenceValue } from '../../../harness/fingerprint/reference-value';
 
 /**
  * One call of a catalogue operation answered by the reference engine (correctly rounded
@@ -25,19 +23,7 @@ export function referenceCall(op: string, args: readonly ComplexPair[], conventi
     }
     case 'neg':
       return [-z[0], -z[1]];
-    case 'pow':
-    case 'cbrt':
-    case 'nthroot': {
-      const request = {
-        fn: op,
-        z: BigComplex.fromDoubles(z[0], z[1]),
-        w: op === 'pow' ? { kind: 'complex' as const, value: BigComplex.fromDoubles(w![0], w![1]) } : undefined,
-        n: op === 'nthroot' ? w![0] : undefined,
-        convention,
-      };
-      return principalValue(request, { double: true, digits: 0 }).double;
-    }
     default:
-      return principalDouble(op, z[0], z[1], convention);
+      return referenceValue(op, args, convention);
   }
 }

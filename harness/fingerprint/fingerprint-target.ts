@@ -1,0 +1,125 @@
+import type { ConventionFingerprint } from '../../shared/convention-fingerprint';
+import type { ComplexPair } from '../adapters/complex-pair';
+import type { Target } from '../adapters/target';
+import { relativeError } from '../checks/relative-error';
+import type { PlaneCut } from '../cuts/plane-cut';
+import { buildPath } from '../paths/build-path';
+import type { PathPoint } from '../paths/path-point';
+import { formatDouble } from '../reference/numbers/format-double';
+import type { FingerprintFunction } from './fingerprint-function';
+import { FINGERPRINT_FUNCTIONS } from './fingerprint-functions';
+import { referenceValue } from './reference-value';
+
+type CutEntry = ConventionFingerprint['cuts'][number];
+type Probe = CutEntry['probes'][number];
+
+/**
+ * Two values are the same side of a cut when they agree to 1e-6 relative: the two sides differ
+ * by O(1) (a conjugate, ±2πi), while libraries that are merely inaccurate near a cut were seen
+ * up to ~1e-10 off (complex.js acos at 2 ± 0i).
+ */
+const SAME = 1e-6;
+/** "Just off" the cut: far enough that every double part changes, near enough to see the one-sided limit. */
+const OFF = '1e-9';
+/**
+ * Distances along a ray from its finite end; fractions along a finite cut, chosen to miss the
+ * branch points and 0 (the middle of acot's cut [−i, i], where 1/z is infinite). Places stay
+ * within 100 of the end: further out, complex.js 2.0.11's asin was off by more than 1e-6 at
+ * 1e6 — an accuracy finding, not a convention.
+ */
+const ALONG_RAY = ['0.5', '1', '3', '100'];
+const ALONG_SEGMENT = ['0.2', '0.4', '0.7', '0.9'];
+
+const wire = ([re, im]: ComplexPair) => ({ re: formatDouble(re), im: formatDouble(im) });
+const same = (a: ComplexPair | null, b: ComplexPair): boolean => a !== null && relativeError(a, b) <= SAME;
+
+function straddle(cut: PlaneCut): PathPoint[] {
+  const geometry = (p: ComplexPair) => ({ re: p[0], im: p[1] });
+  return buildPath({
+    kind: 'straddle',
+    cut: cut.toInfinity ? { kind: 'ray', from: geometry(cut.from), through: geometry(cut.to) } : { kind: 'segment', from: geometry(cut.from), to: geometry(cut.to) },
+    along: cut.toInfinity ? ALONG_RAY : ALONG_SEGMENT,
+    offsets: [OFF],
+  });
+}
+
+/**
+ * The convention fingerprint of one target (shared/convention-fingerprint.ts). For each
+ * function and each of its cuts (from the reference catalogue), at a few places along the
+ * cut (straddle paths: exactly on it with +0 and with −0 in the across part, and 1e-9 off it on
+ * both sides), the target's values are compared with the reference under signed-zero and under
+ * counter-clockwise. A place votes `signed-zero` when +0 and −0 give the two Annex G values,
+ * `counter-clockwise` when both give Kahan's value, `neither` otherwise — and also when a value
+ * just off the cut differs from the principal branch (then the cut is not where the function
+ * has it, and what happens on it says nothing about a convention). Functions sharing a cut are
+ * then compared.
+ */
+export async function fingerprintTarget(target: Target, functions: readonly FingerprintFunction[] = FINGERPRINT_FUNCTIONS): Promise<ConventionFingerprint> {
+  const missing: string[] = [];
+  const cuts: CutEntry[] = [];
+  let points = 0;
+  for (const fn of functions) {
+    if (!(await target.supports(fn.op))) {
+      missing.push(fn.label);
+      continue;
+    }
+    for (const cut of fn.cuts) {
+      const path = straddle(cut);
+      const answers = await target.evaluate(fn.op, path.map((p) => [[p.z.re, p.z.im] as ComplexPair, ...fn.extra]));
+      points += path.length;
+      const value = (i: number): ComplexPair | null => {
+        const a = answers[i]!;
+        return 'value' in a ? a.value : null;
+      };
+      const errorAt = (i: number): string | null => {
+        const a = answers[i]!;
+        return 'error' in a ? a.error : null;
+      };
+      const probes: Probe[] = [];
+      for (const t of [...new Set(path.map((p) => p.t))]) {
+        const at = (label: string): number => path.findIndex((p) => p.t === t && p.label === label);
+        const [plus, minus] = [at('on +0'), at('on -0')];
+        const off = path.flatMap((p, i) => (p.t === t && p.label !== 'on +0' && p.label !== 'on -0' ? [i] : []));
+        if (plus < 0 || minus < 0) continue;
+        const z = (i: number): ComplexPair => [path[i]!.z.re, path[i]!.z.im];
+        const ref = (i: number, convention: 'signed-zero' | 'counter-clockwise') => referenceValue(fn.op, [z(i), ...fn.extra], convention);
+        const [szPlus, szMinus, ccw] = [ref(plus, 'signed-zero'), ref(minus, 'signed-zero'), ref(plus, 'counter-clockwise')];
+        // Where the two Annex G values agree (a finite end of the cut), the place tells the conventions apart by nothing.
+        if (relativeError(szPlus, szMinus) <= SAME) continue;
+        const [vPlus, vMinus] = [value(plus), value(minus)];
+        const probe: Probe = { at: wire(z(plus)), verdict: 'neither', plusZero: vPlus && wire(vPlus), minusZero: vMinus && wire(vMinus) };
+        const failedCall = [plus, minus, ...off].map(errorAt).find((e) => e !== null);
+        const offWrong = off.find((i) => !same(value(i), ref(i, 'signed-zero')));
+        if (failedCall) probe.note = `no value: ${failedCall}`;
+        else if (offWrong !== undefined) {
+          const w = path[offWrong]!.z;
+          probe.note = `just off the cut, at ${formatDouble(w.re)} ${formatDouble(w.im)}i, the value is not the principal one: the cut is elsewhere here, or the value is inaccurate`;
+        }
+        else if (same(vPlus, szPlus) && same(vMinus, szMinus)) probe.verdict = 'signed-zero';
+        else if (same(vPlus, ccw) && same(vMinus, ccw)) probe.verdict = 'counter-clockwise';
+        else if (same(vPlus, szMinus) && same(vMinus, szPlus)) probe.note = '+0 and -0 give the sides the other way round';
+        else if (vMinus !== null && same(vPlus, vMinus)) probe.note = 'both zero signs give the limit from the side the counter-clockwise rule leaves open';
+        else probe.note = 'the values on the cut are neither one-sided limit';
+        probes.push(probe);
+      }
+      const verdicts = new Set(probes.map((p) => p.verdict));
+      const alone: CutEntry['alone'] = verdicts.size === 1 ? [...verdicts][0]! : verdicts.size === 0 ? 'neither' : 'inconsistent';
+      cuts.push({ function: fn.label, cut: cut.label, behaviour: alone, alone, disagreesWith: [], probes });
+    }
+  }
+  for (const entry of cuts) {
+    if (entry.alone !== 'signed-zero' && entry.alone !== 'counter-clockwise') continue;
+    const other = entry.alone === 'signed-zero' ? 'counter-clockwise' : 'signed-zero';
+    entry.disagreesWith = cuts.filter((e) => e.cut === entry.cut && e.alone === other).map((e) => e.function);
+    if (entry.disagreesWith.length > 0) entry.behaviour = 'inconsistent';
+  }
+  return {
+    target: target.name,
+    statement:
+      `Evidence at ${points} points: on each cut at the places listed, exactly on it with +0 and -0 and ${OFF} off it on both sides, ` +
+      `compared with the reference to a relative ${SAME.toExponential()}. It says which side each zero sign selects there; it is not a check of accuracy ` +
+      `and not a certification of the library elsewhere on the cut or off it.`,
+    missing,
+    cuts,
+  };
+}

@@ -1,0 +1,36 @@
+/** A complex number on the wire (DESIGN.md §5). */
+type Wire = { re: string; im: string };
+
+/**
+ * Which convention a target follows on each cut of each function (DESIGN.md §2, "Sheetkeeper
+ * also reports which one a library appears to follow"). Per (function, cut):
+ * - `signed-zero`: on the cut, +0 and −0 in the across part give the two one-sided limits (Annex G);
+ * - `counter-clockwise`: both give the limit from the side Kahan's rule closes;
+ * - `neither`: something else (the other side closed, the signs swapped, the cut elsewhere, no value);
+ * - `inconsistent`: the points along this cut disagree among themselves, or functions sharing the
+ *   cut (sqrt, pow(z, 1/2) and log on (−∞, 0]) follow different conventions.
+ * `alone` is the function's own verdict before comparing with the functions that share its cut.
+ * `statement` says what was and was not checked: this is evidence at the listed points, not a certification.
+ */
+export interface ConventionFingerprint {
+  target: string;
+  statement: string;
+  /** Functions the target does not have, so not fingerprinted. */
+  missing: string[];
+  cuts: {
+    function: string;
+    cut: string;
+    behaviour: 'signed-zero' | 'counter-clockwise' | 'neither' | 'inconsistent';
+    alone: 'signed-zero' | 'counter-clockwise' | 'neither' | 'inconsistent';
+    /** Functions on the same cut that follow the other convention. */
+    disagreesWith: string[];
+    probes: {
+      /** The point on the cut (with +0 in the across part; the −0 twin is implied). */
+      at: Wire;
+      verdict: 'signed-zero' | 'counter-clockwise' | 'neither';
+      plusZero: Wire | null;
+      minusZero: Wire | null;
+      note?: string;
+    }[];
+  }[];
+}

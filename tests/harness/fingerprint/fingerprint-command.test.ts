@@ -1,0 +1,49 @@
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { discoverTargets } from '../../../harness/adapters/discover-targets';
+import { BadInput } from '../../../harness/command-support/bad-input';
+import { fingerprintCommand } from '../../../harness/fingerprint/fingerprint-command';
+
+const BIN = path.join(__dirname, '..', '..', '..', 'bin', 'sheetkeeper.mjs');
+let dir: string;
+beforeAll(() => {
+  dir = mkdtempSync(path.join(os.tmpdir(), 'fingerprint-'));
+});
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+describe('fingerprintCommand', () => {
+  it('writes JSON to --out and exits 1 for complex.js 2.4.3, whose sqrt and log disagree on (-inf, 0]', async () => {
+    const out = path.join(dir, 'cjs.json');
+    expect(await fingerprintCommand(['--target', 'complex.js@2.4.3', '--fn', 'sqrt,log', '--format', 'json', '--out', out])).toBe(1);
+    const fp = JSON.parse(readFileSync(out, 'utf8'));
+    expect(fp.cuts.map((c: { function: string; behaviour: string }) => `${c.function}: ${c.behaviour}`)).toEqual(['sqrt: inconsistent', 'log: inconsistent']);
+  });
+
+  it("writes a table that states what was checked and exits 0 for cmath's sqrt and pow(z, 1/2)", async () => {
+    const out = path.join(dir, 'cmath.txt');
+    expect(await fingerprintCommand(['--target', findCmath(), '--fn', 'sqrt,pow(z, 1/2)', '--out', out])).toBe(0);
+    const text = readFileSync(out, 'utf8');
+    expect(text).toContain('not a certification');
+    expect(text).toMatch(/pow\(z, 1\/2\)\s+\(-inf, 0\]\s+signed-zero/);
+  }, 20_000);
+
+  it('refuses an unknown function, format or flag as bad input', async () => {
+    await expect(fingerprintCommand(['--target', 'complex.js@2.4.3', '--fn', 'sin'])).rejects.toThrow(BadInput);
+    await expect(fingerprintCommand(['--target', 'complex.js@2.4.3', '--format', 'svg'])).rejects.toThrow(/--format: must be json or table/);
+    await expect(fingerprintCommand(['--target', 'complex.js@2.4.3', '--colour', 'red'])).rejects.toThrow(BadInput);
+  });
+
+  it('exits 2 through the sheetkeeper command for a target that is not installed', () => {
+    const run = spawnSync(process.execPath, [BIN, 'fingerprint', '--target', 'complex.js@0.0.1'], { encoding: 'utf8', timeout: 60_000 });
+    expect(run.status).toBe(2);
+    expect(run.stderr).toContain('no installed target "complex.js@0.0.1"');
+  });
+});
+
+function findCmath(): string {
+  const cmath = discoverTargets().find((d) => d.library === 'cmath');
+  if (!cmath) throw new Error('Debian python3 at /usr/bin/python3 runs the cmath target');
+  return cmath.name;
+}

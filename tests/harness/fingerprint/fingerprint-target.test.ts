@@ -1,0 +1,78 @@
+import type { ConventionFingerprint } from '../../../shared/convention-fingerprint';
+import type { ComplexPair } from '../../../harness/adapters/complex-pair';
+import { discoverTargets } from '../../../harness/adapters/discover-targets';
+import { FINGERPRINT_FUNCTIONS } from '../../../harness/fingerprint/fingerprint-functions';
+import { fingerprintTarget } from '../../../harness/fingerprint/fingerprint-target';
+import { referenceTarget } from '../support/reference-target';
+
+const only = (...labels: string[]) => FINGERPRINT_FUNCTIONS.filter((f) => labels.includes(f.label));
+const rows = (fp: ConventionFingerprint) => fp.cuts.map((c) => `${c.function} ${c.cut}: ${c.behaviour}`);
+/** A sqrt or log that treats −0 as +0, as a library without signed zeros does. */
+const ignoringZeroSigns = (op: string) => ([z]: ComplexPair[], ref: (op: string, args: ComplexPair[]) => ComplexPair) => ref(op, [[z![0] || 0, z![1] || 0]]);
+
+describe('fingerprintTarget', () => {
+  it("classifies Python's cmath as signed-zero on every cut of every function it has", async () => {
+    // Python documents that cmath follows C99 Annex G for branch cuts and signed zeros (common practice).
+    const descriptor = discoverTargets().find((d) => d.library === 'cmath');
+    if (!descriptor) throw new Error('Debian python3 at /usr/bin/python3 runs the cmath target');
+    const target = descriptor.open();
+    try {
+      const fp = await fingerprintTarget(target);
+      expect(fp.cuts.length).toBeGreaterThanOrEqual(15);
+      expect(fp.cuts.filter((c) => c.behaviour !== 'signed-zero')).toEqual([]);
+      expect(fp.missing).toEqual(expect.arrayContaining(['cbrt', 'acot']));
+    } finally {
+      await target.close();
+    }
+  }, 20_000);
+
+  it('classifies the reference under each convention as that convention on every cut, reciprocal functions included', async () => {
+    for (const convention of ['signed-zero', 'counter-clockwise'] as const) {
+      const fp = await fingerprintTarget(referenceTarget(convention));
+      expect(fp.cuts).toHaveLength(27);
+      expect(fp.cuts.filter((c) => c.behaviour !== convention).map((c) => `${c.function} ${c.cut}`)).toEqual([]);
+    }
+  }, 20_000);
+
+  it('classifies a sqrt and a log that ignore zero signs as counter-clockwise on (-inf, 0]', async () => {
+    // Kahan 1987: the negative real axis belongs to the upper side, which is where +0 puts it.
+    const mutant = referenceTarget('signed-zero', { sqrt: ignoringZeroSigns('sqrt'), log: ignoringZeroSigns('log') }, 'mutant/ignores-zero-signs');
+    const fp = await fingerprintTarget(mutant, only('sqrt', 'log'));
+    expect(rows(fp)).toEqual(['sqrt (-inf, 0]: counter-clockwise', 'log (-inf, 0]: counter-clockwise']);
+  });
+
+  it("calls an asin that ignores zero signs neither on [1, +inf), where Kahan's rule closes the cut from below", async () => {
+    // Kahan 1987: turning counter-clockwise about 1 reaches [1, ∞) from below; +0 picks the upper side instead.
+    const mutant = referenceTarget('signed-zero', { asin: ignoringZeroSigns('asin') });
+    const fp = await fingerprintTarget(mutant, only('asin'));
+    expect(rows(fp)).toEqual(['asin (-inf, -1]: counter-clockwise', 'asin [1, +inf): neither']);
+    expect(fp.cuts[1]!.probes[0]!.note).toContain('leaves open');
+  });
+
+  it('marks sqrt, pow(z, 1/2) and log inconsistent when only sqrt ignores zero signs on their shared cut', async () => {
+    const mutant = referenceTarget('signed-zero', { sqrt: ignoringZeroSigns('sqrt') });
+    const fp = await fingerprintTarget(mutant, only('sqrt', 'pow(z, 1/2)', 'log'));
+    expect(fp.cuts.map((c) => [c.function, c.behaviour, c.alone, c.disagreesWith])).toEqual([
+      ['sqrt', 'inconsistent', 'counter-clockwise', ['pow(z, 1/2)', 'log']],
+      ['pow(z, 1/2)', 'inconsistent', 'signed-zero', ['sqrt']],
+      ['log', 'inconsistent', 'signed-zero', ['sqrt']],
+    ]);
+  });
+
+  it('calls a square root cut along the positive real axis neither on (-inf, 0], saying the cut is not there', async () => {
+    // i·√(−z) squares to z, but its cut is [0, ∞): just below −4 it gives 2i where the principal root is −2i.
+    const mutant = referenceTarget('signed-zero', { sqrt: ([z], ref) => { const [re, im] = ref('sqrt', [[-z![0], -z![1]]]); return [-im, re]; } });
+    const fp = await fingerprintTarget(mutant, only('sqrt'));
+    expect(rows(fp)).toEqual(['sqrt (-inf, 0]: neither']);
+    expect(fp.cuts[0]!.probes.every((p) => p.note?.includes('just off the cut'))).toBe(true);
+  });
+
+  it("finds complex.js 2.4.3's sqrt counter-clockwise but its log and pow(z, 1/2) signed-zero on (-inf, 0]", async () => {
+    // ISO/IEC 9899:2011 G.6.4.2: csqrt(−4 − 0i) = 0 − 2i; complex.js gives 0 + 2i (measured), while its log keeps Im = −π.
+    const descriptor = discoverTargets().find((d) => d.name === 'complex.js@2.4.3');
+    if (!descriptor) throw new Error('complex.js 2.4.3 is a dependency of the project');
+    const fp = await fingerprintTarget(descriptor.open(), only('sqrt', 'pow(z, 1/2)', 'log'));
+    expect(fp.cuts.map((c) => `${c.function}: ${c.alone}`)).toEqual(['sqrt: counter-clockwise', 'pow(z, 1/2): signed-zero', 'log: signed-zero']);
+    expect(fp.statement).toContain('not a certification');
+  });
+});
