@@ -31,37 +31,32 @@ function twoProd(a: number, b: number): DD {
   return [p, ah * bh - p + ah * bl + al * bh + al * bl];
 }
 
+/** a + (b0 + b1) in double-double with two two-sums (the accurate "IEEE" addition). */
+function addParts(a: DD, b0: number, b1: number): DD {
+  const s1 = a[0] + b0;
+  let bb = s1 - a[0];
+  const s2 = a[0] - (s1 - bb) + (b0 - bb);
+  const t1 = a[1] + b1;
+  bb = t1 - a[1];
+  const t2 = a[1] - (t1 - bb) + (b1 - bb);
+  const v = s2 + t1;
+  const u1 = s1 + v;
+  const u2 = v - (u1 - s1) + t2;
+  const h = u1 + u2;
+  return [h, u2 - (h - u1)];
+}
+
 export const dd = {
   twoSum,
   twoProd,
 
   /** Accurate addition (two two-sums), written on scalars: one allocation instead of four. */
   add(a: DD, b: DD): DD {
-    const s1 = a[0] + b[0];
-    let bb = s1 - a[0];
-    const s2 = a[0] - (s1 - bb) + (b[0] - bb);
-    const t1 = a[1] + b[1];
-    bb = t1 - a[1];
-    const t2 = a[1] - (t1 - bb) + (b[1] - bb);
-    const v = s2 + t1;
-    const u1 = s1 + v;
-    const u2 = v - (u1 - s1) + t2;
-    const h = u1 + u2;
-    return [h, u2 - (h - u1)];
+    return addParts(a, b[0], b[1]);
   },
 
   sub(a: DD, b: DD): DD {
-    const s1 = a[0] - b[0];
-    let bb = s1 - a[0];
-    const s2 = a[0] - (s1 - bb) - (b[0] + bb);
-    const t1 = a[1] - b[1];
-    bb = t1 - a[1];
-    const t2 = a[1] - (t1 - bb) - (b[1] + bb);
-    const v = s2 + t1;
-    const u1 = s1 + v;
-    const u2 = v - (u1 - s1) + t2;
-    const h = u1 + u2;
-    return [h, u2 - (h - u1)];
+    return addParts(a, -b[0], -b[1]);
   },
 
   mul(a: DD, b: DD): DD {
