@@ -20,15 +20,20 @@ function quickTwoSum(a: number, b: number): DD {
   return [s, b - (s - a)];
 }
 
-function twoProd(a: number, b: number): DD {
-  const p = a * b;
+/** The rounding error of p = fl(a·b), exactly: a·b − p, by Veltkamp's split (Dekker). */
+function productError(a: number, b: number, p: number): number {
   let t = SPLITTER * a;
   const ah = t - (t - a);
   const al = a - ah;
   t = SPLITTER * b;
   const bh = t - (t - b);
   const bl = b - bh;
-  return [p, ah * bh - p + ah * bl + al * bh + al * bl];
+  return ah * bh - p + ah * bl + al * bh + al * bl;
+}
+
+function twoProd(a: number, b: number): DD {
+  const p = a * b;
+  return [p, productError(a, b, p)];
 }
 
 /** a + (b0 + b1) in double-double with two two-sums (the accurate "IEEE" addition). */
@@ -60,16 +65,8 @@ export const dd = {
   },
 
   mul(a: DD, b: DD): DD {
-    const x = a[0];
-    const y = b[0];
-    const p = x * y;
-    let t = SPLITTER * x;
-    const xh = t - (t - x);
-    const xl = x - xh;
-    t = SPLITTER * y;
-    const yh = t - (t - y);
-    const yl = y - yh;
-    const e = xh * yh - p + xh * yl + xl * yh + xl * yl + (x * b[1] + a[1] * y);
+    const p = a[0] * b[0];
+    const e = productError(a[0], b[0], p) + (a[0] * b[1] + a[1] * b[0]);
     const h = p + e;
     return [h, e - (h - p)];
   },
