@@ -1,0 +1,131 @@
+import type { DiagnosisKind } from './diagnosis';
+import type { PointOutcome } from './point-outcome';
+
+/** A complex number on the wire (DESIGN.md §5): shortest round-trip decimals, "-0", "inf", "nan". */
+export interface WireComplex {
+  re: string;
+  im: string;
+}
+
+/** How many points of a path, a suite × target pair or a run came out each way. */
+export interface OutcomeCounts {
+  pass: number;
+  fail: number;
+  error: number;
+  skipped: number;
+}
+
+/**
+ * One point that did not pass, with everything a reviewer needs to see it again: the exact
+ * input (decimal and C hex float), both values, the diagnosis, both one-sided limits when the
+ * point lies on a cut, the rule that fixes the expected value, and a reproducer to paste into
+ * the target's language.
+ */
+export interface PointFinding {
+  path: string;
+  /** Index of the point in its path. */
+  index: number;
+  t: number;
+  /** The path's own name for the point ("above 1e-9", "on -0"), when it has one. */
+  label?: string;
+  z: WireComplex;
+  /** The input's exact bits as C99 hex floats ("-0x1.8p+1", "-0x0p+0"). */
+  zHex: WireComplex;
+  expected: WireComplex | null;
+  actual: WireComplex | null;
+  outcome: PointOutcome;
+  /** For a point on a cut: the limits from both sides, named ("from above", "from below"). */
+  limits?: { sides: [string, string]; values: [WireComplex, WireComplex] };
+  /** The standard clause or rule that fixes the expected value here. */
+  rule: string;
+  /** Copy-paste code in the target's language that computes `actual`. */
+  reproducer: string;
+}
+
+/**
+ * The library's monodromy along a closed path: its values followed across each of their own
+ * jumps (each jump taken as the nearest factor e^{2πiνk}) come back multiplied by `library`;
+ * the continued branch says `expected`.
+ */
+export interface MonodromyCheck {
+  expected: WireComplex;
+  library: WireComplex | null;
+  relativeError: number | null;
+  pass: boolean;
+  /** Why the library's factor could not be read (a missing value, a jump that is no e^{2πiνk}). */
+  note?: string;
+}
+
+export interface PathResult {
+  name: string;
+  kind: 'circle' | 'segment' | 'polyline' | 'straddle' | 'grid';
+  points: number;
+  counts: OutcomeCounts;
+  byDiagnosis: Partial<Record<DiagnosisKind, number>>;
+  /** Jumps along a continuous path (circle, segment, polyline): mid-step values of t. */
+  jumps: { expected: number[]; library: number[] } | null;
+  /** For a closed path of a regular branch; null where it does not apply. */
+  monodromy: MonodromyCheck | null;
+  findings: PointFinding[];
+  /** Failing points beyond the detail limit: counted above, not listed. */
+  findingsOmitted: number;
+  /** Why points were skipped (no such operation, no reference value there), with how many each. */
+  skipped: { reason: string; count: number }[];
+  /** An error that stopped the whole path (its points count as errors). */
+  error?: string;
+}
+
+/** The minimal shape of a property outcome (shared/property-outcome.ts of the properties work). */
+export interface PropertyOutcomeSummary {
+  kind: string;
+  law: string;
+  title: string;
+  seed: number;
+  reason?: string;
+}
+
+/** What a suite × target result covered, stated in every output format. */
+export interface CheckedScope {
+  convention: string;
+  branch: string;
+  tolerance: string;
+  paths: number;
+  points: number;
+  /** Property laws the suite lists, and whether this run checked them. */
+  properties: { listed: string[]; run: boolean; note: string };
+}
+
+export type PairStatus = 'pass' | 'fail' | 'error' | 'cancelled';
+
+/** One suite against one target. */
+export interface SuiteTargetResult {
+  suite: { id: string; version: number; title: string; subject: string };
+  target: { name: string; library: string; version: string; settings: Record<string, string | number | boolean> };
+  status: PairStatus;
+  checked: CheckedScope;
+  counts: OutcomeCounts;
+  byDiagnosis: Partial<Record<DiagnosisKind, number>>;
+  paths: PathResult[];
+  properties: PropertyOutcomeSummary[] | null;
+  /** Shard-level errors: a target that hung past the time limit, crashed, or a suite that could not be evaluated. */
+  errors: string[];
+  durationMs: number;
+  /** Reference values computed in this run and taken from the cache. */
+  reference: { computed: number; cached: number };
+}
+
+/** The JSON result of `sheetkeeper run` (DESIGN.md §5). */
+export interface RunResult {
+  tool: { name: 'sheetkeeper'; version: string };
+  startedAt: string;
+  finishedAt: string;
+  seed: number | null;
+  status: 'pass' | 'fail' | 'error' | 'cancelled';
+  /** Always present: what a pass means and does not mean. */
+  disclaimer: string;
+  plan: { suites: { id: string; version: number }[]; targets: string[]; shards: number };
+  counts: OutcomeCounts;
+  byDiagnosis: Partial<Record<DiagnosisKind, number>>;
+  results: SuiteTargetResult[];
+  reference: { computed: number; cached: number };
+}
