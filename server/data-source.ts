@@ -1,11 +1,15 @@
 import 'reflect-metadata';
 import { DataSource } from 'typeorm';
+import { Failure } from './entities/failure';
 import { OutboxMail } from './entities/outbox-mail';
+import { PathSummary } from './entities/path-summary';
 import { Plan } from './entities/plan';
 import { Schedule } from './entities/schedule';
 import { ScheduleFiring } from './entities/schedule-firing';
+import { Shard } from './entities/shard';
 import { Target } from './entities/target';
 import { ReceivedMail } from './entities/received-mail';
+import { Run } from './entities/run';
 import { Suite } from './entities/suite';
 import { SuiteVersion } from './entities/suite-version';
 import { User } from './entities/user';
@@ -13,10 +17,11 @@ import { UsersSessionsSignInLimits1764626400000 } from './migrations/17646264000
 import { SuitesAndVersions1764700000000 } from './migrations/1764700000000-suites-and-versions';
 import { MailOutboxAndReceivedMail1764710000000 } from './migrations/1764710000000-mail-outbox-and-received-mail';
 import { TargetsPlansSchedules1764720000000 } from './migrations/1764720000000-targets-plans-schedules';
+import { RunsShardsFailures1764730000000 } from './migrations/1764730000000-runs-shards-failures';
 
 /** Entities and migrations are listed, not globbed, so tsx, jest and tsc builds all find them. */
-export const ENTITIES = [User, Suite, SuiteVersion, OutboxMail, ReceivedMail, Target, Plan, Schedule, ScheduleFiring];
-export const MIGRATIONS = [UsersSessionsSignInLimits1764626400000, SuitesAndVersions1764700000000, MailOutboxAndReceivedMail1764710000000, TargetsPlansSchedules1764720000000];
+export const ENTITIES = [User, Suite, SuiteVersion, OutboxMail, ReceivedMail, Target, Plan, Schedule, ScheduleFiring, Run, Shard, Failure, PathSummary];
+export const MIGRATIONS = [UsersSessionsSignInLimits1764626400000, SuitesAndVersions1764700000000, MailOutboxAndReceivedMail1764710000000, TargetsPlansSchedules1764720000000, RunsShardsFailures1764730000000];
 
 export function createDataSource(url: string): DataSource {
   return new DataSource({
