@@ -1,5 +1,6 @@
 import { answerContinue } from './reference/continuation/answer-continue';
 import { answerReference } from './reference/answer-reference';
+import { cutmapCommand } from './cutmap/cutmap-command';
 import { fingerprintCommand } from './fingerprint/fingerprint-command';
 import { jsonLines } from './json-lines';
 
@@ -9,6 +10,7 @@ commands:
   reference   principal values: JSON lines {"fn","z","convention",["w"|"n"]} on stdin, one answer per line
   continue    regular branches of g(z)^nu along a path: JSON lines {"g","nu","z0","f0"|"k","path","at"}
   fingerprint which convention a target follows on each cut: --target NAME@VERSION [--fn a,b] [--format table|json] [--out FILE]
+  cutmap      where a target's function is discontinuous over a box: --target NAME@VERSION --fn sqrt [--box re0,im0,re1,im1] [--grid 81x81] [--format json|svg|table] [--out FILE]
 `;
 
 /** The `sheetkeeper` command: dispatches a subcommand; unknown ones print the usage and exit 2. */
@@ -23,6 +25,7 @@ async function main(argv: string[]): Promise<number> {
     return 0;
   }
   if (command === 'fingerprint') return fingerprintCommand(argv.slice(1));
+  if (command === 'cutmap') return cutmapCommand(argv.slice(1));
   process.stderr.write(command ? `sheetkeeper: unknown command "${command}"\n${USAGE}` : USAGE);
   return 2;
 }
