@@ -1,0 +1,75 @@
+import type { DataSource } from 'typeorm';
+import type { RunTrigger } from '../../shared/run-status';
+import type { RunView } from '../../shared/run-view';
+import { Plan } from '../entities/plan';
+import { Run } from '../entities/run';
+import { Shard } from '../entities/shard';
+import { SuiteVersion } from '../entities/suite-version';
+import type { User } from '../entities/user';
+import { HttpError } from './http-error';
+import type { ShardQueue } from './shard-queue';
+import { toRunView } from './to-run-view';
+
+const RUN_RELATIONS = { plan: true, requestedBy: true } as const;
+
+/**
+ * Starting, reading and cancelling runs. A run takes each plan suite's newest approved version
+ * at the moment it starts (recorded per shard) and every installed target of the plan; one
+ * shard per suite × target goes onto the queue once the run is committed.
+ */
+export class RunService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly queue: ShardQueue,
+  ) {}
+
+  async start(planId: string, trigger: RunTrigger, user: User | null): Promise<RunView> {
+    const { run, shardIds } = await this.dataSource.transaction(async (tx) => {
+      const plan = await tx.getRepository(Plan).findOne({ where: { id: planId }, relations: { suites: true, targets: true } });
+      if (!plan) throw new HttpError(404, { kind: 'not-found', message: 'No plan with that id.' });
+      const versions: SuiteVersion[] = [];
+      for (const suite of plan.suites) {
+        const approved = await tx.getRepository(SuiteVersion).findOne({ where: { suite: { id: suite.id }, status: 'approved' }, relations: { suite: true }, order: { version: 'DESC' } });
+        if (approved) versions.push(approved);
+      }
+      const targets = plan.targets.filter((t) => t.installed);
+      if (versions.length === 0 || targets.length === 0) {
+        throw new HttpError(409, { kind: 'conflict', message: `Plan "${plan.name}" has nothing to run: ${versions.length} approved suite(s), ${targets.length} installed target(s).` });
+      }
+      const run = await tx.getRepository(Run).save(
+        tx.getRepository(Run).create({ plan, planName: plan.name, trigger, requestedBy: user, status: 'queued', shardsTotal: versions.length * targets.length, shardsDone: 0, counts: { pass: 0, fail: 0, error: 0, skipped: 0 }, regressions: null }),
+      );
+      const shards = await tx.getRepository(Shard).save(
+        versions.flatMap((v) =>
+          targets.map((t) => tx.getRepository(Shard).create({ run, suiteVersion: v, suiteSlug: v.suite.slug, targetName: t.name, targetLibrary: t.library, targetVersion: t.version, status: 'queued', outcome: null, attempts: 0, errors: [] })),
+        ),
+      );
+      return { run, shardIds: shards.map((s) => s.id) };
+    });
+    await this.queue.enqueue(shardIds);
+    return this.get(run.id);
+  }
+
+  async get(id: string): Promise<RunView> {
+    const run = await this.dataSource.getRepository(Run).findOne({ where: { id }, relations: RUN_RELATIONS });
+    if (!run) throw new HttpError(404, { kind: 'not-found', message: 'No run with that id.' });
+    return toRunView(run);
+  }
+
+  async list(limit = 50): Promise<RunView[]> {
+    const runs = await this.dataSource.getRepository(Run).find({ relations: RUN_RELATIONS, order: { createdAt: 'DESC' }, take: limit });
+    return runs.map(toRunView);
+  }
+
+  /** Cancels a queued or running run: shards not yet done are skipped; a shard in flight stops at its next path. */
+  async cancel(id: string): Promise<RunView> {
+    await this.dataSource.transaction(async (tx) => {
+      const run = await tx.getRepository(Run).findOne({ where: { id }, lock: { mode: 'pessimistic_write' } });
+      if (!run) throw new HttpError(404, { kind: 'not-found', message: 'No run with that id.' });
+      if (run.status !== 'queued' && run.status !== 'running') throw new HttpError(409, { kind: 'conflict', message: `The run is ${run.status} already.` });
+      await tx.getRepository(Run).update(id, { status: 'cancelled', finishedAt: new Date() });
+      await tx.query(`UPDATE shards SET status = 'cancelled' WHERE run_id = $1 AND status IN ('queued', 'running')`, [id]);
+    });
+    return this.get(id);
+  }
+}

@@ -1,0 +1,21 @@
+import type { RunView } from '../../shared/run-view';
+import type { Run } from '../entities/run';
+
+/** `plan` and `requestedBy` must be loaded. */
+export function toRunView(run: Run): RunView {
+  return {
+    id: run.id,
+    planId: run.plan?.id ?? null,
+    planName: run.planName,
+    trigger: run.trigger,
+    status: run.status,
+    shardsTotal: run.shardsTotal,
+    shardsDone: run.shardsDone,
+    counts: run.counts,
+    regressions: run.regressions,
+    requestedBy: run.requestedBy?.displayName ?? null,
+    createdAt: run.createdAt.toISOString(),
+    startedAt: run.startedAt?.toISOString() ?? null,
+    finishedAt: run.finishedAt?.toISOString() ?? null,
+  };
+}

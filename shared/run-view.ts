@@ -1,0 +1,19 @@
+import type { OutcomeCounts } from './run-result';
+import type { RunStatus, RunTrigger } from './run-status';
+
+/** A run as lists and the progress bar show it. */
+export interface RunView {
+  id: string;
+  planId: string | null;
+  planName: string;
+  trigger: RunTrigger;
+  status: RunStatus;
+  shardsTotal: number;
+  shardsDone: number;
+  counts: OutcomeCounts;
+  regressions: number | null;
+  requestedBy: string | null;
+  createdAt: string;
+  startedAt: string | null;
+  finishedAt: string | null;
+}
