@@ -3,12 +3,16 @@ import { answerReference } from './reference/answer-reference';
 import { cutmapCommand } from './cutmap/cutmap-command';
 import { fingerprintCommand } from './fingerprint/fingerprint-command';
 import { jsonLines } from './json-lines';
+import { runCommand } from './runner/commands/run-command';
+import { targetsCommand } from './runner/commands/targets-command';
 
 const USAGE = `usage: sheetkeeper <command>
 
 commands:
   reference   principal values: JSON lines {"fn","z","convention",["w"|"n"]} on stdin, one answer per line
   continue    regular branches of g(z)^nu along a path: JSON lines {"g","nu","z0","f0"|"k","path","at"}
+  run         check suites against targets: --suite FILE|ID --target NAME@VERSION [--format table|json|junit] [--out FILE] [--seed N]; exit 0 pass, 1 fail, 2 bad input
+  targets     the installed targets, versions and settings [--format json|table]
   fingerprint which convention a target follows on each cut: --target NAME@VERSION [--fn a,b] [--format table|json] [--out FILE]
   cutmap      where a target's function is discontinuous over a box: --target NAME@VERSION --fn sqrt [--box re0,im0,re1,im1] [--grid 81x81] [--format json|svg|table] [--out FILE]
 `;
@@ -24,6 +28,8 @@ async function main(argv: string[]): Promise<number> {
     await jsonLines(process.stdin, process.stdout, answerContinue);
     return 0;
   }
+  if (command === 'run') return runCommand(argv.slice(1));
+  if (command === 'targets') return targetsCommand(argv.slice(1));
   if (command === 'fingerprint') return fingerprintCommand(argv.slice(1));
   if (command === 'cutmap') return cutmapCommand(argv.slice(1));
   process.stderr.write(command ? `sheetkeeper: unknown command "${command}"\n${USAGE}` : USAGE);

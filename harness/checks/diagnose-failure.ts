@@ -18,7 +18,8 @@ const sameSigned = (a: ComplexDouble, b: ComplexDouble) => relativeError(a, b) <
 /**
  * Chooses the diagnosis of a failing point (DESIGN.md §2), in this order: a non-finite part;
  * the value the reference gives with an input zero flipped; a right value with a wrong output
- * zero sign; the other side of the cut; another sheet; and then the nearest of all these
+ * zero sign; the other side of the cut or another sheet, whichever is nearer when both match
+ * to 1e-6; and then the nearest of all these
  * candidates — the expected value itself meaning `inaccurate` — if any is within 10 %.
  * `misplaced-cut` is decided along a path (findMisplacedCuts), not here.
  */
@@ -36,7 +37,12 @@ export function diagnoseFailure(ctx: FailureContext): Diagnosis {
   ];
   if (ctx.otherSide) candidates.push({ diagnosis: { kind: 'cut-side' }, distance: relativeError(actual, ctx.otherSide) });
   for (const sheet of ctx.otherSheets ?? []) candidates.push({ diagnosis: { kind: 'other-sheet', k: sheet.k }, distance: relativeError(actual, sheet.value) });
-  const exact = candidates.slice(1).find((c) => c.distance <= SAME);
+  // Near a cut several alternatives can be within 1e-6 of each other (at 1e-9 from the cut of
+  // acot, the other side's limit and v + π differ by 1e-9): the nearest is the better account.
+  const exact = candidates
+    .slice(1)
+    .filter((c) => c.distance <= SAME)
+    .reduce<(typeof candidates)[number] | null>((best, c) => (!best || c.distance < best.distance ? c : best), null);
   if (exact) return exact.diagnosis;
   const nearest = candidates.reduce((best, c) => (c.distance < best.distance ? c : best));
   return nearest.distance <= RECOGNISABLE ? nearest.diagnosis : { kind: 'unexplained', relativeError: check.relativeError };

@@ -4,13 +4,17 @@ import { detectJumps } from './detect-jumps';
 
 /** Point-level diagnoses that a wrong jump explains better: the values between a wrong cut and the right one sit on another sheet. */
 const OVERRIDABLE = new Set<Diagnosis['kind']>(['other-sheet', 'unexplained', 'inaccurate']);
+/** An `inaccurate` point closer than this (relative) to the expected value is just inaccurate, even beside a wrong jump. */
+const MERELY_INACCURATE = 1e-6;
+const overridable = (d: Diagnosis): boolean => OVERRIDABLE.has(d.kind) && !(d.kind === 'inaccurate' && d.relativeError <= MERELY_INACCURATE);
 
 /**
  * Compares the jumps of the library's values along a continuous path with the jumps of the
  * expected values. Every run of failing points that touches a step where one jumps and the
  * other does not is a misplaced cut; its points are re-diagnosed `misplaced-cut` with where the
  * library jumped and where it should have (mid-step values of t, null when there is no jump),
- * unless a point's own diagnosis is more specific (zero-sign, cut-side, not-finite).
+ * unless a point's own diagnosis is more specific (zero-sign, cut-side, not-finite) or it is
+ * merely inaccurate (within 1e-6 of the expected value: a neighbour of the wrong jump, not beyond it).
  * Returns the diagnoses to use, index by index (null for passing points).
  */
 export function findMisplacedCuts(
@@ -41,7 +45,7 @@ export function findMisplacedCuts(
         libraryJumpAt: libraryStep === undefined ? null : midT(libraryStep),
         expectedJumpAt: expectedStep === undefined ? null : midT(expectedStep),
       };
-      for (let i = start; i <= end; i += 1) if (OVERRIDABLE.has(result[i]!.kind)) result[i] = misplaced;
+      for (let i = start; i <= end; i += 1) if (overridable(result[i]!)) result[i] = misplaced;
     }
     start = end + 1;
   }

@@ -121,6 +121,13 @@ export async function evaluateSuite(suite: Suite, target: Target, options: Evalu
   for (let k = 0; k < paths.length; k++) {
     const path = paths[k] as SuitePath;
     const points = built[k] as PathPoint[] | Error;
+    if (options.signal?.aborted) {
+      // Stopped (cancelled or out of time): the remaining paths are not evaluated.
+      const n = Array.isArray(points) ? points.length : 0;
+      const reason = options.signal.reason instanceof Error ? options.signal.reason.message : String(options.signal.reason ?? 'cancelled');
+      result.paths.push({ name: path.name, kind: path.kind, points: n, counts: { pass: 0, fail: 0, error: 0, skipped: n }, byDiagnosis: {}, jumps: null, monodromy: null, findings: [], findingsOmitted: 0, skipped: [{ reason, count: n }] });
+      continue;
+    }
     const pathResult = await evaluatePath(suite, target, program, expectation, path, points, unsupported, maxFindings, options.signal);
     result.paths.push(pathResult);
     done += Array.isArray(points) ? points.length : 0;

@@ -1,0 +1,74 @@
+import { mkdirSync, writeFileSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { discoverTargets } from '../../adapters/discover-targets';
+import { buildPlan } from '../build-plan';
+import { formatJson } from '../format-json';
+import { formatJunit } from '../format-junit';
+import { formatTable } from '../format-table';
+import { loadSuites } from '../load-suites';
+import { resolveTargets } from '../resolve-targets';
+import { runPlan } from '../run-plan';
+import { parseRunArgs } from './parse-run-args';
+
+const PROJECT_ROOT = path.resolve(__dirname, '..', '..', '..');
+/** Below this many points, starting worker threads (~1 s each to load tsx and the engine) costs more than it saves. */
+const WORKER_THRESHOLD = 50_000;
+
+const USAGE = 'usage: sheetkeeper run --suite FILE|ID|FOLDER --target NAME@VERSION [--format table|json|junit] [--out FILE] [--seed N] [--workers N|auto] [--shard-time-limit MS] [--cache DIR | --no-cache] [--max-findings N] [--progress]';
+
+/**
+ * `sheetkeeper run` (DESIGN.md §5): loads and validates the suites, resolves the targets, runs
+ * the plan and writes the result as a table, JSON or JUnit XML (to --out or stdout). Exit 0
+ * when nothing failed, 1 when a point failed, errored or the run was cancelled (Ctrl-C), 2 for
+ * bad input: unknown flags, suites or targets, and invalid suite files (each issue printed as
+ * `suite: field rule`).
+ */
+export async function runCommand(argv: string[]): Promise<number> {
+  const args = parseRunArgs(argv);
+  if ('error' in args) {
+    process.stderr.write(`sheetkeeper run: ${args.error}\n${USAGE}\n`);
+    return 2;
+  }
+  const loaded = loadSuites(args.suites, path.join(PROJECT_ROOT, 'suites'));
+  if (!loaded.ok) {
+    for (const i of loaded.issues) process.stderr.write(`sheetkeeper run: ${i.suite}: ${i.field} ${i.rule}\n`);
+    return 2;
+  }
+  const targets = resolveTargets(args.targets, discoverTargets());
+  if (!targets.ok) {
+    process.stderr.write(`sheetkeeper run: ${targets.message}\n`);
+    return 2;
+  }
+  const plan = buildPlan(loaded.suites, targets.targets);
+  const points = plan.shards.reduce((s, sh) => s + sh.points, 0);
+  const workers = args.workers === 'auto' ? (points >= WORKER_THRESHOLD ? Math.min(4, os.availableParallelism()) : 0) : args.workers;
+  const controller = new AbortController();
+  const onSigint = () => controller.abort(new Error('interrupted (SIGINT)'));
+  process.once('SIGINT', onSigint);
+  const result = await runPlan(plan, {
+    workers,
+    signal: controller.signal,
+    seed: args.seed,
+    ...(args.cacheDir !== undefined ? { cacheDir: args.cacheDir === null ? null : path.resolve(args.cacheDir) } : {}),
+    ...(args.shardTimeLimitMs !== null ? { shardTimeLimitMs: args.shardTimeLimitMs } : {}),
+    ...(args.maxFindings !== null ? { maxFindings: args.maxFindings } : {}),
+    onEvent: args.progress
+      ? (e) => {
+          if (e.type === 'progress') process.stderr.write(`sheetkeeper run: ${e.done}/${e.total} points\n`);
+          else if (e.type === 'shard-end') process.stderr.write(`sheetkeeper run: shard ${e.shard} ${e.suite} × ${e.target}: ${e.status} (${e.durationMs} ms)\n`);
+          else if (e.type === 'cancelled') process.stderr.write(`sheetkeeper run: ${e.reason}\n`);
+        }
+      : undefined,
+  });
+  process.off('SIGINT', onSigint);
+  const text = args.format === 'json' ? formatJson(result) : args.format === 'junit' ? formatJunit(result) : formatTable(result);
+  if (args.out) {
+    mkdirSync(path.dirname(path.resolve(args.out)), { recursive: true });
+    writeFileSync(args.out, text);
+    process.stderr.write(`sheetkeeper run: ${result.status}; ${result.counts.pass} pass, ${result.counts.fail} fail, ${result.counts.error} error, ${result.counts.skipped} skipped; written to ${args.out}\n`);
+  } else {
+    process.stdout.write(text);
+  }
+  return result.status === 'pass' ? 0 : 1;
+}
