@@ -8,11 +8,11 @@ import type { Target } from '../adapters/target';
 import type { PlaneCut } from '../cuts/plane-cut';
 import type { SubjectExpr } from '../expressions/subject-expr';
 import { formatDouble } from '../reference/numbers/format-double';
+import { subjectProgram } from '../runner/subject-program';
 import type { LawContext } from './law-context';
 import { PROPERTY_LAW_CHECKS } from './property-laws';
 import { propertyTitle } from './property-title';
 import { regionArbitrary } from './region-arbitrary';
-import { subjectOps } from './subject-ops';
 
 const wire = ([re, im]: ComplexPair) => ({ re: formatDouble(re), im: formatDouble(im) });
 
@@ -40,7 +40,7 @@ export async function checkProperty(check: PropertyCheck, subject: PropertySubje
   const ctx: LawContext = { target, expr: subject.expr, convention: subject.convention, tolerance: subject.tolerance, cuts: subject.cuts, power: check.power };
   const notApplicable = law.notApplicable(ctx);
   if (notApplicable) return { kind: 'not-checked', ...base, reason: notApplicable };
-  for (const op of [...subjectOps(subject.expr), ...law.ops(ctx)]) {
+  for (const op of [...subjectProgram(subject.expr).ops, ...law.ops(ctx)]) {
     if (!(await target.supports(op))) return { kind: 'not-checked', ...base, reason: `${target.name} has no ${op}` };
   }
   const region = regionArbitrary(check.region, subject.cuts);
