@@ -3,6 +3,7 @@ import { answerReference } from './reference/answer-reference';
 import { cutmapCommand } from './cutmap/cutmap-command';
 import { fingerprintCommand } from './fingerprint/fingerprint-command';
 import { jsonLines } from './json-lines';
+import { matrixCommand } from './matrix/matrix-command';
 import { runCommand } from './runner/commands/run-command';
 import { targetsCommand } from './runner/commands/targets-command';
 
@@ -15,6 +16,7 @@ commands:
   targets     the installed targets, versions and settings [--format json|table]
   fingerprint which convention a target follows on each cut: --target NAME@VERSION [--fn a,b] [--format table|json] [--out FILE]
   cutmap      where a target's function is discontinuous over a box: --target NAME@VERSION --fn sqrt [--box re0,im0,re1,im1] [--grid 81x81] [--format json|svg|table] [--out FILE]
+  matrix      the same suites over every installed version of a library: --suite FILE|ID[,...] --library complex.js [--format table|json] [--out FILE]
 `;
 
 /** The `sheetkeeper` command: dispatches a subcommand; unknown ones print the usage and exit 2. */
@@ -32,6 +34,7 @@ async function main(argv: string[]): Promise<number> {
   if (command === 'targets') return targetsCommand(argv.slice(1));
   if (command === 'fingerprint') return fingerprintCommand(argv.slice(1));
   if (command === 'cutmap') return cutmapCommand(argv.slice(1));
+  if (command === 'matrix') return matrixCommand(argv.slice(1));
   process.stderr.write(command ? `sheetkeeper: unknown command "${command}"\n${USAGE}` : USAGE);
   return 2;
 }

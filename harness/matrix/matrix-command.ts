@@ -1,0 +1,30 @@
+import path from 'node:path';
+import { versionMatrixRequest } from '../../shared/schemas/version-matrix-request';
+import { BadInput } from '../command-support/bad-input';
+import { readFlags } from '../command-support/read-flags';
+import { writeOutput } from '../command-support/write-output';
+import { loadSuites } from '../runner/load-suites';
+import { libraryVersions } from './library-versions';
+import { versionMatrix } from './version-matrix';
+import { versionMatrixTable } from './version-matrix-table';
+
+const SUITES = path.resolve(__dirname, '..', '..', 'suites');
+
+/**
+ * `sheetkeeper matrix --suite FILE|ID[,…] --library complex.js [--format table|json] [--out FILE]`:
+ * the suites over every installed version of the library. Exits 0 when no value changed between
+ * versions, 1 when some did, 2 for bad input (a suite that does not load, a library with fewer
+ * than two installed versions).
+ */
+export async function matrixCommand(argv: readonly string[]): Promise<number> {
+  const request = readFlags(argv, ['suite', 'library', 'format', 'out'], versionMatrixRequest);
+  const loaded = loadSuites(request.suite, SUITES);
+  if (!loaded.ok) throw new BadInput(loaded.issues.map((i) => `${i.suite}: ${i.field} ${i.rule}`).join('; '));
+  const targets = libraryVersions(request.library);
+  if (targets.length < 2) {
+    throw new BadInput(`--library: "${request.library}" has ${targets.length} installed version(s); a matrix needs two or more (names as \`sheetkeeper targets\` lists them, without "@version")`);
+  }
+  const matrix = await versionMatrix(request.library, loaded.suites, targets);
+  writeOutput(request.format === 'json' ? JSON.stringify(matrix, null, 2) : versionMatrixTable(matrix), request.out);
+  return matrix.suites.some((s) => s.changes.length > 0) ? 1 : 0;
+}

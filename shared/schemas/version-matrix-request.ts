@@ -1,0 +1,19 @@
+import { z } from 'zod';
+
+/**
+ * The input of `sheetkeeper matrix` (flags as strings): the suites (comma-separated suite
+ * files, folders or ids, as `run --suite` takes them), the library to compare across its
+ * installed versions — its target name without the version ("complex.js", "mathjs/complex",
+ * "mathjs/number/predictable") — and the output.
+ */
+export const versionMatrixRequest = z.strictObject({
+  suite: z
+    .string({ error: 'is required (suite files, folders or ids, comma-separated)' })
+    .transform((s) => s.split(',').map((x) => x.trim()).filter(Boolean))
+    .refine((list) => list.length > 0, { error: 'names no suite' }),
+  library: z.string({ error: 'is required (a target name without its version, e.g. complex.js)' }).min(1),
+  format: z.enum(['json', 'table'], { error: 'must be json or table' }).default('table'),
+  out: z.string().min(1).optional(),
+});
+
+export type VersionMatrixRequest = z.infer<typeof versionMatrixRequest>;
