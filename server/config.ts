@@ -18,6 +18,10 @@ export interface ServerConfig {
   smtpPort: number;
   /** Run the local fake SMTP server in this process (on unless SHEETKEEPER_FAKE_SMTP=0). */
   fakeSmtp: boolean;
+  /** Shard workers in the server process (SHEETKEEPER_WORKERS, default 1; `npm run worker` adds more). */
+  workers: number;
+  /** Base of links in mail (SHEETKEEPER_APP_URL, default the server's own address). */
+  appUrl: string;
 }
 
 const LOOPBACK = /^(127\.\d+\.\d+\.\d+|::1|localhost)$/;
@@ -64,5 +68,7 @@ export function loadConfig(): ServerConfig {
     webDir: path.join(PROJECT_ROOT, 'dist'),
     smtpPort: portFrom('SHEETKEEPER_SMTP_PORT', 8525),
     fakeSmtp: process.env.SHEETKEEPER_FAKE_SMTP !== '0',
+    workers: Math.max(0, Number(process.env.SHEETKEEPER_WORKERS ?? 1) || 0),
+    appUrl: (process.env.SHEETKEEPER_APP_URL ?? `http://${host}:${port}`).replace(/\/$/, ''),
   };
 }

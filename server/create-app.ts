@@ -9,14 +9,18 @@ import type { DataSource } from 'typeorm';
 import type { ApiError } from '../shared/api-error';
 import { errorHandler } from './middleware/error-handler';
 import { authRouter } from './routes/auth-router';
+import { failuresRouter } from './routes/failures-router';
 import { meRouter } from './routes/me-router';
 import { outboxRouter } from './routes/outbox-router';
 import { plansRouter } from './routes/plans-router';
+import { runsRouter } from './routes/runs-router';
 import { schedulesRouter } from './routes/schedules-router';
 import { suitesRouter } from './routes/suites-router';
 import { targetsRouter } from './routes/targets-router';
 import { usersRouter } from './routes/users-router';
 import { configurePassport } from './services/configure-passport';
+import { RunService } from './services/run-service';
+import type { ShardQueue } from './services/shard-queue';
 import { DEFAULT_SIGN_IN_LIMITS, SignInLimiter, type SignInLimits } from './services/sign-in-limiter';
 
 export interface AppOptions {
@@ -27,6 +31,8 @@ export interface AppOptions {
   /** The exported web app; when missing, only the API is served. */
   webDir?: string;
   signInLimits?: SignInLimits;
+  /** Where the shards of a started run go (pg-boss in the server). */
+  shardQueue: ShardQueue;
 }
 
 export interface SheetkeeperApp {
@@ -88,6 +94,8 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   api.use('/targets', targetsRouter(options.dataSource));
   api.use('/plans', plansRouter(options.dataSource));
   api.use('/schedules', schedulesRouter(options.dataSource));
+  api.use('/runs', runsRouter(options.dataSource, new RunService(options.dataSource, options.shardQueue)));
+  api.use('/failures', failuresRouter(options.dataSource));
   api.use((_req, res) => {
     res.status(404).json({ kind: 'not-found', message: 'No such API route.' } satisfies ApiError);
   });

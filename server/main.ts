@@ -3,11 +3,10 @@ import { loadConfig } from './config';
 import { createApp } from './create-app';
 import { createDataSource } from './data-source';
 import { DEMO_USERS } from './seed/demo-users';
-import { FakeSmtpServer } from './services/fake-smtp-server';
-import { MailOutbox } from './services/mail-outbox';
-
-/** How often due mail is sent; a regression mail waits at most this long after its run ends. */
-const MAIL_INTERVAL_MS = 5000;
+import { PlanScheduler } from './services/plan-scheduler';
+import { RunService } from './services/run-service';
+import { syncTargets } from './services/sync-targets';
+import { startServices } from './start-services';
 
 async function main(): Promise<void> {
   const config = loadConfig();
@@ -15,42 +14,31 @@ async function main(): Promise<void> {
   await dataSource.initialize();
   const pending = await dataSource.showMigrations();
   if (pending) throw new Error('The database has pending migrations: run `npm run migrate` (npm start does).');
+  await syncTargets(dataSource);
 
-  const smtp = config.fakeSmtp ? new FakeSmtpServer(dataSource, config.host) : null;
-  const smtpPort = smtp ? await smtp.start(config.smtpPort) : config.smtpPort;
-  const outbox = new MailOutbox(dataSource, { host: config.host, port: smtpPort });
-  let delivering = false;
-  const mailTimer = setInterval(() => {
-    if (delivering) return;
-    delivering = true;
-    outbox
-      .deliverDue()
-      .catch((err: unknown) => console.error('[sheetkeeper] mail delivery failed', err))
-      .finally(() => {
-        delivering = false;
-      });
-  }, MAIL_INTERVAL_MS);
+  const services = await startServices(dataSource, config, { workers: config.workers, deliverMail: true });
+  const runs = new RunService(dataSource, services.queue);
+  const scheduler = new PlanScheduler(dataSource, async (planId) => (await runs.start(planId, 'schedule', null)).id);
+  await scheduler.start();
 
-  const { app, close } = createApp({ dataSource, databaseUrl: config.databaseUrl, sessionSecret: config.sessionSecret, secureCookies: config.secureCookies, webDir: config.webDir });
+  const { app, close } = createApp({ dataSource, databaseUrl: config.databaseUrl, sessionSecret: config.sessionSecret, secureCookies: config.secureCookies, webDir: config.webDir, shardQueue: services.queue });
   const server = app.listen(config.port, config.host, () => {
     const address = server.address();
     const port = typeof address === 'object' && address ? address.port : config.port;
-    const url = `http://${config.host}:${port}/`;
-    console.log(`\nSheetkeeper is serving ${url}`);
-    console.log(smtp ? `Mail goes to the local mail store on ${config.host}:${smtpPort} (Outbox screen, admins).` : `Mail goes to SMTP on ${config.host}:${smtpPort}.`);
+    console.log(`\nSheetkeeper is serving http://${config.host}:${port}/`);
+    console.log(services.fakeSmtp ? `Mail goes to the local mail store on ${config.host}:${services.smtpPort} (Outbox screen, admins).` : `Mail goes to SMTP on ${config.host}:${services.smtpPort}.`);
+    console.log(`Shard workers in this process: ${config.workers} (add more with \`npm run worker\`).`);
     console.log('Demo sign-ins:');
     for (const u of DEMO_USERS) console.log(`  ${u.role.padEnd(11)} ${u.email.padEnd(28)} ${u.password}`);
     console.log('');
   });
   const shutdown = () => {
-    clearInterval(mailTimer);
     server.close(() => {
-      outbox.close();
-      void Promise.all([close(), smtp?.stop()])
+      void Promise.all([scheduler.stop(), services.stop(), close()])
         .then(() => dataSource.destroy())
         .then(() => process.exit(0));
     });
-    setTimeout(() => process.exit(0), 5000);
+    setTimeout(() => process.exit(0), 10_000);
   };
   process.on('SIGTERM', shutdown);
   process.on('SIGINT', shutdown);

@@ -4,7 +4,11 @@ import type { MailOutbox } from './mail-outbox';
 import { regressionMail } from './regression-mail';
 import type { RegressionRow } from './regression-row';
 
-/** Strips the version from a target name in SQL, as targetKey does in TypeScript. */
+/**
+ * A target without its version, in SQL: "complex.js@2.4.1" → "complex.js",
+ * "mathjs@15.2.0/number" → "mathjs/number". Runs are compared per key, so an upgrade of a
+ * library compares the new version with the old one and shows as a version change.
+ */
 const KEY = (column: string) => `regexp_replace(${column}, '@[^/]+', '')`;
 
 /**

@@ -1,4 +1,5 @@
 import { createApp, type AppOptions, type SheetkeeperApp } from '../../server/create-app';
+import { idleShardQueue } from './idle-shard-queue';
 import { createTestDatabase, type TestDatabase } from './test-database';
 
 export interface TestApp extends SheetkeeperApp {
@@ -9,7 +10,7 @@ export interface TestApp extends SheetkeeperApp {
 /** The real app over a private test database; call `stop()` in afterAll. */
 export async function startTestApp(overrides: Partial<AppOptions> = {}): Promise<TestApp> {
   const db = await createTestDatabase();
-  const built = createApp({ dataSource: db.dataSource, databaseUrl: db.url, sessionSecret: 'test-secret', ...overrides });
+  const built = createApp({ dataSource: db.dataSource, databaseUrl: db.url, sessionSecret: 'test-secret', shardQueue: idleShardQueue(), ...overrides });
   return {
     ...built,
     db,

@@ -33,6 +33,12 @@ async function freshPlan(): Promise<string> {
   return res.body.plan.id;
 }
 
+/** A fresh queued run of a fresh plan (the test queue runs nothing). */
+async function freshRun(): Promise<string> {
+  const admin = await signInAs(t.app, 'admin');
+  return (await admin.post('/api/runs').send({ planId: await freshPlan() })).body.run.id;
+}
+
 /** A fresh schedule of a fresh plan. */
 async function freshSchedule(): Promise<string> {
   const admin = await signInAs(t.app, 'admin');
@@ -139,6 +145,14 @@ const ROUTES: RouteCase[] = [
   },
   { name: 'PATCH /api/schedules/:id', call: async (a) => a.patch(`/api/schedules/${await freshSchedule()}`).send({ enabled: false }), expect: { 'signed-out': 401, admin: 200, maintainer: 200, reviewer: 403, contributor: 403 } },
   { name: 'DELETE /api/schedules/:id', call: async (a) => a.delete(`/api/schedules/${await freshSchedule()}`), expect: { 'signed-out': 401, admin: 204, maintainer: 204, reviewer: 403, contributor: 403 } },
+  { name: 'GET /api/runs', call: (a) => a.get('/api/runs'), expect: signedIn(200) },
+  { name: 'POST /api/runs', call: async (a) => a.post('/api/runs').send({ planId: await freshPlan() }), expect: { 'signed-out': 401, admin: 202, maintainer: 202, reviewer: 403, contributor: 403 } },
+  { name: 'GET /api/runs/:id', call: async (a) => a.get(`/api/runs/${await freshRun()}`), expect: signedIn(200) },
+  { name: 'GET /api/runs/:id/matrix', call: async (a) => a.get(`/api/runs/${await freshRun()}/matrix`), expect: signedIn(200) },
+  { name: 'POST /api/runs/:id/cancel', call: async (a) => a.post(`/api/runs/${await freshRun()}/cancel`), expect: { 'signed-out': 401, admin: 200, maintainer: 200, reviewer: 403, contributor: 403 } },
+  { name: 'GET /api/failures', call: (a) => a.get('/api/failures'), expect: signedIn(200) },
+  { name: 'GET /api/failures/export.csv', call: async (a) => a.get(`/api/failures/export.csv?run=${await freshRun()}`), expect: signedIn(200) },
+  { name: 'GET /api/failures/:id (none stored)', call: (a) => a.get('/api/failures/1'), expect: signedIn(404) },
   { name: 'GET /api/unknown-route', call: (a) => a.get('/api/unknown-route'), expect: all(404) },
   { name: 'POST /api/auth/sign-out', call: (a) => a.post('/api/auth/sign-out'), expect: all(204) },
 ];

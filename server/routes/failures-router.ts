@@ -1,0 +1,72 @@
+import { stringify } from 'csv-stringify/sync';
+import { Router } from 'express';
+import type { DataSource } from 'typeorm';
+import { ROLES } from '../../shared/roles';
+import { failureQuery } from '../../shared/schemas/failure-query';
+import { requireRole } from '../middleware/require-role';
+import { HttpError } from '../services/http-error';
+import { InputError } from '../services/input-error';
+import { parseInput } from '../services/parse-input';
+import { searchFailures } from '../services/failure-search';
+
+/** Rows per CSV export: enough for a whole demo run; larger tables are filtered first. */
+const CSV_MAX_ROWS = 50_000;
+
+/** The failure table with filters and keyed pages, its CSV export, and one failure with its history. */
+export function failuresRouter(dataSource: DataSource): Router {
+  const router = Router();
+  const anyone = requireRole(...ROLES);
+
+  router.get('/', anyone, async (req, res) => {
+    const { rows, next } = await searchFailures(dataSource, parseInput(failureQuery, req.query, 'query'));
+    res.json({ failures: rows, next });
+  });
+
+  router.get('/export.csv', anyone, async (req, res) => {
+    const q = { ...parseInput(failureQuery, req.query, 'query'), limit: CSV_MAX_ROWS };
+    if (!q.run && !q.suite && !q.target) throw new InputError([{ field: 'query', rule: 'needs run, suite or target to export' }]);
+    const { rows } = await searchFailures(dataSource, q);
+    const csv = stringify(
+      rows.map((r) => ({
+        run: r.runId,
+        suite: `${r.suiteSlug}@${r.suiteVersion}`,
+        target: r.targetName,
+        convention: r.convention,
+        path: r.pathName,
+        t: r.t,
+        z_re: r.z.re,
+        z_im: r.z.im,
+        z_hex_re: r.zHex.re,
+        z_hex_im: r.zHex.im,
+        expected_re: r.expected?.re ?? '',
+        expected_im: r.expected?.im ?? '',
+        actual_re: r.actual?.re ?? '',
+        actual_im: r.actual?.im ?? '',
+        outcome: r.outcomeKind,
+        diagnosis: (r.diagnosis as { kind?: string } | null)?.kind ?? '',
+        ulps: r.ulps ?? '',
+        relative_error: r.relativeError ?? '',
+        regression: r.isRegression ? 'yes' : 'no',
+        rule: r.rule,
+      })),
+      { header: true },
+    );
+    res.type('text/csv').attachment('sheetkeeper-failures.csv').send(csv);
+  });
+
+  router.get('/:id', anyone, async (req, res) => {
+    const id = String(req.params.id);
+    if (!/^\d{1,18}$/.test(id)) throw new InputError([{ field: 'params.id', rule: 'must be a failure number' }]);
+    const [row] = await dataSource.query(`SELECT point_key, target_name FROM failures WHERE id = $1`, [id]);
+    if (!row) throw new HttpError(404, { kind: 'not-found', message: 'No failure with that number.' });
+    const { rows } = await searchFailures(dataSource, { sort: 'id', limit: 1, after: String(BigInt(id) - 1n) });
+    const history = await dataSource.query(
+      `SELECT f.id::text AS "id", f.run_id AS "runId", r.created_at AS "runAt", f.target_name AS "targetName", f.target_version AS "targetVersion",
+              f.diagnosis_kind AS "diagnosisKind", f.is_regression AS "isRegression"
+         FROM failures f JOIN runs r ON r.id = f.run_id WHERE f.point_key = $1 ORDER BY r.created_at DESC LIMIT 100`,
+      [row.point_key],
+    );
+    res.json({ failure: rows[0], history });
+  });
+  return router;
+}

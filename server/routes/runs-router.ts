@@ -1,0 +1,41 @@
+import { Router } from 'express';
+import type { DataSource } from 'typeorm';
+import { ROLES } from '../../shared/roles';
+import { idParams } from '../../shared/schemas/id-params';
+import { runBody } from '../../shared/schemas/run-body';
+import { requireRole } from '../middleware/require-role';
+import { parseInput } from '../services/parse-input';
+import type { RunService } from '../services/run-service';
+
+/** Runs: everyone reads them and their matrix; maintainers (and admins) start and cancel them. */
+export function runsRouter(dataSource: DataSource, runs: RunService): Router {
+  const router = Router();
+  const anyone = requireRole(...ROLES);
+  const runners = requireRole('maintainer', 'admin');
+
+  router.get('/', anyone, async (_req, res) => {
+    res.json({ runs: await runs.list() });
+  });
+  router.post('/', runners, async (req, res) => {
+    const { planId } = parseInput(runBody, req.body, 'body');
+    res.status(202).json({ run: await runs.start(planId, 'manual', req.user!) });
+  });
+  router.get('/:id', anyone, async (req, res) => {
+    res.json({ run: await runs.get(parseInput(idParams, req.params, 'params').id) });
+  });
+  router.post('/:id/cancel', runners, async (req, res) => {
+    res.json({ run: await runs.cancel(parseInput(idParams, req.params, 'params').id) });
+  });
+  /** Suite × target → counts, with what each pair checked. */
+  router.get('/:id/matrix', anyone, async (req, res) => {
+    const { id } = parseInput(idParams, req.params, 'params');
+    await runs.get(id);
+    const cells = await dataSource.query(
+      `SELECT suite_slug AS "suite", target_name AS "target", status, outcome, counts, by_diagnosis AS "byDiagnosis", checked, errors
+         FROM shards WHERE run_id = $1 ORDER BY suite_slug, target_name`,
+      [id],
+    );
+    res.json({ cells });
+  });
+  return router;
+}

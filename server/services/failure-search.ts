@@ -1,0 +1,71 @@
+import type { DataSource } from 'typeorm';
+import type { FailureQuery } from '../../shared/schemas/failure-query';
+
+export interface FailureRow {
+  id: string;
+  runId: string;
+  suiteSlug: string;
+  suiteVersion: number;
+  targetName: string;
+  convention: string;
+  pathName: string;
+  pointIndex: number;
+  t: number;
+  label: string | null;
+  z: { re: string; im: string };
+  zHex: { re: string; im: string };
+  expected: { re: string; im: string } | null;
+  actual: { re: string; im: string } | null;
+  outcomeKind: string;
+  diagnosis: unknown;
+  ulps: number | null;
+  relativeError: number | null;
+  rule: string;
+  reproducer: string;
+  limits: unknown;
+  isRegression: boolean;
+}
+
+const COLUMNS = `id::text AS "id", run_id AS "runId", suite_slug AS "suiteSlug", suite_version AS "suiteVersion", target_name AS "targetName",
+  convention, path_name AS "pathName", point_index AS "pointIndex", t, label, z, z_hex AS "zHex", expected, actual,
+  outcome_kind AS "outcomeKind", diagnosis, ulps, relative_error AS "relativeError", rule, reproducer, limits, is_regression AS "isRegression"`;
+
+/**
+ * The failure table: filters become one parameterised WHERE over indexed columns, and pages are
+ * keyed (never OFFSET), so page 1,000 costs what page 1 does.
+ */
+export async function searchFailures(dataSource: DataSource, q: FailureQuery): Promise<{ rows: FailureRow[]; next: string | null }> {
+  const where: string[] = [];
+  const params: unknown[] = [];
+  const add = (sql: string, value: unknown) => {
+    params.push(value);
+    where.push(sql.replace('?', `$${params.length}`));
+  };
+  if (q.run) add('run_id = ?', q.run);
+  if (q.suite) add('suite_slug = ?', q.suite);
+  if (q.target) add('target_name = ?', q.target);
+  if (q.convention) add('convention = ?', q.convention);
+  if (q.fn) add(`suite_slug IN (SELECT s.slug FROM suites s JOIN suite_versions v ON v.suite_id = s.id WHERE v.body->>'subject' LIKE ? )`, `%${q.fn}(%`);
+  if (q.diagnosis === 'error' || q.diagnosis === 'skipped') add('outcome_kind = ?', q.diagnosis);
+  else if (q.diagnosis) add('diagnosis_kind = ?', q.diagnosis);
+  if (q.status === 'new') where.push('is_regression');
+  if (q.status === 'known') where.push('NOT is_regression');
+  // Qualified: the select list names its text copy of the id "id" too, and ORDER BY would sort that as text.
+  let order = 'f.id ASC';
+  if (q.sort === 'ulps') {
+    order = 'coalesce(f.ulps, 0) DESC, f.id ASC';
+    if (q.after) {
+      const [id, ulps] = q.after.split(':');
+      params.push(Number(ulps ?? 0), id);
+      where.push(`(coalesce(ulps, 0) < $${params.length - 1} OR (coalesce(ulps, 0) = $${params.length - 1} AND id > $${params.length}))`);
+    }
+  } else if (q.after) add('id > ?', q.after.split(':')[0]);
+  params.push(q.limit);
+  const rows: FailureRow[] = await dataSource.query(
+    `SELECT ${COLUMNS} FROM failures f ${where.length ? `WHERE ${where.join(' AND ')}` : ''} ORDER BY ${order} LIMIT $${params.length}`,
+    params,
+  );
+  const last = rows[rows.length - 1];
+  const next = rows.length === q.limit && last ? (q.sort === 'ulps' ? `${last.id}:${last.ulps ?? 0}` : last.id) : null;
+  return { rows, next };
+}

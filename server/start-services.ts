@@ -1,0 +1,56 @@
+import type { DataSource } from 'typeorm';
+import type { ServerConfig } from './config';
+import { FakeSmtpServer } from './services/fake-smtp-server';
+import { MailOutbox } from './services/mail-outbox';
+import { openInstalledTarget } from './services/open-installed-target';
+import { PgBossShardQueue } from './services/pg-boss-shard-queue';
+import { ShardExecutor } from './services/shard-executor';
+
+/** How often due mail is sent; a regression mail waits at most this long after its run ends. */
+const MAIL_INTERVAL_MS = 5000;
+
+export interface RunningServices {
+  queue: PgBossShardQueue;
+  outbox: MailOutbox;
+  smtpPort: number;
+  fakeSmtp: boolean;
+  stop(): Promise<void>;
+}
+
+/**
+ * What runs beside the HTTP server (and in `npm run worker`): the local mail store when asked
+ * for, mail delivery, and `workers` shard workers on the pg-boss queue (0 for none).
+ */
+export async function startServices(dataSource: DataSource, config: ServerConfig, options: { workers: number; deliverMail: boolean }): Promise<RunningServices> {
+  const smtp = config.fakeSmtp && options.deliverMail ? new FakeSmtpServer(dataSource, config.host) : null;
+  const smtpPort = smtp ? await smtp.start(config.smtpPort) : config.smtpPort;
+  const outbox = new MailOutbox(dataSource, { host: config.host, port: smtpPort });
+  const queue = new PgBossShardQueue(config.databaseUrl);
+  const executor = new ShardExecutor(dataSource, { openTarget: openInstalledTarget, outbox, appUrl: config.appUrl });
+  for (let i = 0; i < options.workers; i += 1) await queue.work((id) => executor.execute(id));
+  let delivering = false;
+  const mailTimer = options.deliverMail
+    ? setInterval(() => {
+        if (delivering) return;
+        delivering = true;
+        outbox
+          .deliverDue()
+          .catch((err: unknown) => console.error('[sheetkeeper] mail delivery failed', err))
+          .finally(() => {
+            delivering = false;
+          });
+      }, MAIL_INTERVAL_MS)
+    : null;
+  return {
+    queue,
+    outbox,
+    smtpPort,
+    fakeSmtp: smtp !== null,
+    stop: async () => {
+      if (mailTimer) clearInterval(mailTimer);
+      await queue.stop();
+      outbox.close();
+      await smtp?.stop();
+    },
+  };
+}

@@ -1,0 +1,89 @@
+import request from 'supertest';
+import { approvedSuite } from '../../setup/approved-suite';
+import { signInAs } from '../../setup/sign-in-as';
+import { startTestApp, type TestApp } from '../../setup/test-app';
+
+describe('runs and the failure table', () => {
+  let t: TestApp;
+  let kwame: request.Agent;
+  let runId: string;
+
+  beforeAll(async () => {
+    t = await startTestApp();
+    await approvedSuite(t.db.dataSource, 'runs-sqrt');
+    kwame = await signInAs(t.app, 'maintainer');
+    const target = (await t.db.dataSource.query(`SELECT name FROM targets WHERE library = 'complex.js' AND installed ORDER BY name LIMIT 2`)).map((r: { name: string }) => r.name);
+    const plan = await kwame.post('/api/plans').send({ name: 'runs plan', recipients: [], suites: ['runs-sqrt'], targets: target });
+    const run = await kwame.post('/api/runs').send({ planId: plan.body.plan.id });
+    expect(run.status).toBe(202);
+    runId = run.body.run.id;
+    // 120 synthetic failing points over two diagnoses, to exercise filters and keyed pages.
+    const [shard] = await t.db.dataSource.query(`SELECT id, suite_slug FROM shards WHERE run_id = $1 LIMIT 1`, [runId]);
+    for (let i = 0; i < 120; i += 1) {
+      const diagnosis = i % 3 === 0 ? { kind: 'zero-sign', part: 'im', of: 'input' } : { kind: 'inaccurate', ulps: i, relativeError: i * 1e-16 };
+      await t.db.dataSource.query(
+        `INSERT INTO failures (run_id, shard_id, suite_slug, suite_version, target_name, target_library, target_version, convention, path_name, point_index, t, z, z_hex, point_key, expected, actual, outcome_kind, diagnosis_kind, diagnosis, ulps, rule, reproducer, is_regression)
+         VALUES ($1, $2, 'runs-sqrt', 1, 'complex.js@2.4.3', 'complex.js', '2.4.3', 'signed-zero', 'p', $3, $4, '{"re":"-4","im":"-0"}', '{"re":"-0x1p+2","im":"-0x0p+0"}', $5, '{"re":"0","im":"-2"}', '{"re":"0","im":"2"}', 'fail', $6, $7, $8, 'ISO/IEC 9899:2011 G.6.4.2', 'x', $9)`,
+        [runId, shard.id, i, i / 120, `k${i}`, diagnosis.kind, JSON.stringify(diagnosis), diagnosis.kind === 'inaccurate' ? i : null, i % 10 === 0],
+      );
+    }
+  });
+  afterAll(() => t.stop());
+
+  it('starts a run of one shard per suite × target and shows it queued', async () => {
+    const run = (await kwame.get(`/api/runs/${runId}`)).body.run;
+    expect(run).toMatchObject({ planName: 'runs plan', trigger: 'manual', status: 'queued', shardsTotal: 2, shardsDone: 0, requestedBy: 'Kwame Asante' });
+    const matrix = (await kwame.get(`/api/runs/${runId}/matrix`)).body.cells;
+    expect(matrix).toHaveLength(2);
+    expect(matrix[0]).toMatchObject({ suite: 'runs-sqrt', status: 'queued' });
+  });
+
+  it('filters by diagnosis and by new, and pages without repeating a row', async () => {
+    const zero = (await kwame.get(`/api/failures?run=${runId}&diagnosis=zero-sign&limit=500`)).body.failures;
+    expect(zero).toHaveLength(40);
+    expect((await kwame.get(`/api/failures?run=${runId}&status=new&limit=500`)).body.failures).toHaveLength(12);
+    const seen = new Set<string>();
+    let after: string | null = null;
+    do {
+      const page: { body: { failures: { id: string }[]; next: string | null } } = await kwame.get(`/api/failures?run=${runId}&limit=50${after ? `&after=${after}` : ''}`);
+      for (const f of page.body.failures) seen.add(f.id);
+      after = page.body.next;
+    } while (after);
+    expect(seen.size).toBe(120);
+  });
+
+  it('sorts by ulps, largest first, across pages', async () => {
+    const first = (await kwame.get(`/api/failures?run=${runId}&diagnosis=inaccurate&sort=ulps&limit=30`)).body;
+    const second = (await kwame.get(`/api/failures?run=${runId}&diagnosis=inaccurate&sort=ulps&limit=30&after=${first.next}`)).body;
+    const ulps = [...first.failures, ...second.failures].map((f: { ulps: number }) => f.ulps);
+    expect(ulps).toHaveLength(60);
+    expect([...ulps].sort((a, b) => b - a)).toEqual(ulps);
+    expect(new Set(ulps).size).toBe(60);
+  });
+
+  it('exports the filtered table as CSV with a header', async () => {
+    const res = await kwame.get(`/api/failures/export.csv?run=${runId}&diagnosis=zero-sign`);
+    expect(res.headers['content-type']).toMatch(/text\/csv/);
+    const lines = res.text.trim().split('\n');
+    expect(lines[0]).toMatch(/^run,suite,target,convention,path,t,z_re,z_im,z_hex_re,z_hex_im/);
+    expect(lines).toHaveLength(41);
+  });
+
+  it('shows one failure with the history of its point', async () => {
+    const [first] = (await kwame.get(`/api/failures?run=${runId}&limit=1`)).body.failures;
+    const res = await kwame.get(`/api/failures/${first.id}`);
+    expect(res.body.failure).toMatchObject({ id: first.id, rule: 'ISO/IEC 9899:2011 G.6.4.2' });
+    expect(res.body.history).toEqual([expect.objectContaining({ id: first.id, targetVersion: '2.4.3' })]);
+  });
+
+  it('names the bad filter', async () => {
+    const res = await kwame.get(`/api/failures?diagnosis=wrong&limit=9999`);
+    expect(res.status).toBe(400);
+    expect(res.body.issues.map((i: { field: string }) => i.field).sort()).toEqual(['query.diagnosis', 'query.limit']);
+  });
+
+  it('cancels the run', async () => {
+    expect((await kwame.post(`/api/runs/${runId}/cancel`)).body.run.status).toBe('cancelled');
+    expect((await kwame.post(`/api/runs/${runId}/cancel`)).status).toBe(409);
+  });
+});
