@@ -9,12 +9,14 @@ const DEMO = path.join(__dirname, '..', '..', '..', 'suites', 'demo');
 const demo = (id: string) => suiteSchema.parse(JSON.parse(readFileSync(path.join(DEMO, `${id}.json`), 'utf8')));
 
 describe('checkSuiteProperties', () => {
-  it("holds every applicable property check of the demo catalogue on the reference's own values, with the demo's pinned seeds", async () => {
+  it("holds every applicable property check of the demo catalogue on the reference's own values, with the demo's pinned seeds (first 100 runs each)", async () => {
     const failures: unknown[] = [];
     const notChecked: string[] = [];
     for (const file of readdirSync(DEMO).filter((f) => f.endsWith('.json'))) {
       const suite = suiteSchema.parse(JSON.parse(readFileSync(path.join(DEMO, file), 'utf8')));
-      for (const outcome of await checkSuiteProperties(suite, referenceTarget(suite.convention))) {
+      // The same seeds draw the same first points; 100 of the catalogue's 300 runs keep this file to a few seconds on 2 cores.
+      const shorter = { ...suite, properties: suite.properties.map((p) => ({ ...p, runs: Math.min(p.runs, 100) })) };
+      for (const outcome of await checkSuiteProperties(shorter, referenceTarget(suite.convention))) {
         if (outcome.kind === 'failed') failures.push(outcome);
         if (outcome.kind === 'not-checked') notChecked.push(`${suite.id}/${outcome.law}`);
       }
