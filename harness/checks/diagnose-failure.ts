@@ -9,6 +9,8 @@ import { relativeError } from './relative-error';
  * on the wrong side). The nearest-candidate rule below catches what falls between.
  */
 const SAME = 1e-6;
+/** Candidates this close (relative) are equally exact: the difference is round-off. */
+const ROUND_OFF = 1e-12;
 /** Beyond this relative error from every candidate, we do not pretend to know which value it is. */
 const RECOGNISABLE = 0.1;
 
@@ -39,10 +41,12 @@ export function diagnoseFailure(ctx: FailureContext): Diagnosis {
   for (const sheet of ctx.otherSheets ?? []) candidates.push({ diagnosis: { kind: 'other-sheet', k: sheet.k }, distance: relativeError(actual, sheet.value) });
   // Near a cut several alternatives can be within 1e-6 of each other (at 1e-9 from the cut of
   // acot, the other side's limit and v + π differ by 1e-9): the nearest is the better account.
+  // Alternatives that both match to round-off (on the cut of ∛, the other side's limit is the
+  // sheet k = −1) are taken in the order above: the cut side says more about the point.
   const exact = candidates
     .slice(1)
     .filter((c) => c.distance <= SAME)
-    .reduce<(typeof candidates)[number] | null>((best, c) => (!best || c.distance < best.distance ? c : best), null);
+    .reduce<(typeof candidates)[number] | null>((best, c) => (!best || Math.max(c.distance, ROUND_OFF) < Math.max(best.distance, ROUND_OFF) ? c : best), null);
   if (exact) return exact.diagnosis;
   const nearest = candidates.reduce((best, c) => (c.distance < best.distance ? c : best));
   return nearest.distance <= RECOGNISABLE ? nearest.diagnosis : { kind: 'unexplained', relativeError: check.relativeError };

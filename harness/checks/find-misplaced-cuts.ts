@@ -10,11 +10,15 @@ const overridable = (d: Diagnosis): boolean => OVERRIDABLE.has(d.kind) && !(d.ki
 
 /**
  * Compares the jumps of the library's values along a continuous path with the jumps of the
- * expected values. Every run of failing points that touches a step where one jumps and the
- * other does not is a misplaced cut; its points are re-diagnosed `misplaced-cut` with where the
- * library jumped and where it should have (mid-step values of t, null when there is no jump),
- * unless a point's own diagnosis is more specific (zero-sign, cut-side, not-finite) or it is
- * merely inaccurate (within 1e-6 of the expected value: a neighbour of the wrong jump, not beyond it).
+ * expected values. Within each run of failing points, the steps where one jumps and the other
+ * does not are paired in order; the points between a pair sit on another sheet because of a
+ * misplaced cut, and are re-diagnosed `misplaced-cut` with where the library jumped and where it
+ * should have (mid-step values of t, null when there is no jump). A mismatch left unpaired
+ * reaches to the nearer end of the run. A point keeps its own diagnosis when that is more
+ * specific (zero-sign, cut-side, not-finite) or when it is merely inaccurate (within 1e-6 of the
+ * expected value: a neighbour of the wrong jump, not beyond it). Pairing, rather than relabelling
+ * the whole run, matters when every point fails for another reason (a library rotated onto
+ * another sheet everywhere) and only one point is also on the wrong side of a cut.
  * Returns the diagnoses to use, index by index (null for passing points).
  */
 export function findMisplacedCuts(
@@ -27,6 +31,16 @@ export function findMisplacedCuts(
   const actualJumps = detectJumps(actual);
   const result = [...pointDiagnoses];
   const midT = (i: number) => (t[i]! + t[i + 1]!) / 2;
+  const relabel = (from: number, to: number, steps: number[]) => {
+    const libraryStep = steps.find((i) => actualJumps[i]);
+    const expectedStep = steps.find((i) => expectedJumps[i]);
+    const misplaced: Diagnosis = {
+      kind: 'misplaced-cut',
+      libraryJumpAt: libraryStep === undefined ? null : midT(libraryStep),
+      expectedJumpAt: expectedStep === undefined ? null : midT(expectedStep),
+    };
+    for (let i = from; i <= to; i += 1) if (result[i] && overridable(result[i]!)) result[i] = misplaced;
+  };
   for (let start = 0; start < result.length; ) {
     if (!pointDiagnoses[start]) {
       start += 1;
@@ -34,18 +48,18 @@ export function findMisplacedCuts(
     }
     let end = start;
     while (end + 1 < result.length && pointDiagnoses[end + 1]) end += 1;
-    // Steps touching the run: from the one entering it to the one leaving it.
-    const steps: number[] = [];
-    for (let i = Math.max(0, start - 1); i <= Math.min(end, expectedJumps.length - 1); i += 1) steps.push(i);
-    if (steps.some((i) => expectedJumps[i] !== actualJumps[i])) {
-      const libraryStep = steps.find((i) => actualJumps[i]);
-      const expectedStep = steps.find((i) => expectedJumps[i]);
-      const misplaced: Diagnosis = {
-        kind: 'misplaced-cut',
-        libraryJumpAt: libraryStep === undefined ? null : midT(libraryStep),
-        expectedJumpAt: expectedStep === undefined ? null : midT(expectedStep),
-      };
-      for (let i = start; i <= end; i += 1) if (overridable(result[i]!)) result[i] = misplaced;
+    // Steps touching the run, from the one entering it to the one leaving it, where the two disagree.
+    const mismatched: number[] = [];
+    for (let i = Math.max(0, start - 1); i <= Math.min(end, expectedJumps.length - 1); i += 1) if (expectedJumps[i] !== actualJumps[i]) mismatched.push(i);
+    for (let k = 0; k + 1 < mismatched.length; k += 2) {
+      const a = mismatched[k]!;
+      const b = mismatched[k + 1]!;
+      relabel(a + 1, b, [a, b]);
+    }
+    if (mismatched.length % 2 === 1) {
+      const m = mismatched[mismatched.length - 1]!;
+      if (end - m <= m + 1 - start) relabel(m + 1, end, [m]);
+      else relabel(start, m, [m]);
     }
     start = end + 1;
   }

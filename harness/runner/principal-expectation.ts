@@ -152,8 +152,10 @@ export function principalExpectation(suite: Suite, expr: SubjectExpr, cache: Ref
         if (flipped) alt.flippedZero = { part, value: flipped };
       }
       let onCut = false;
-      if ((re === 0) !== (im === 0) && Number.isFinite(re) && Number.isFinite(im)) {
-        const imZero = im === 0;
+      // On an axis (0 included: it lies on acosh's cut), the one-sided limits are the signed-zero
+      // values with that zero's sign set each way; where they differ the point is on a cut.
+      for (const imZero of [true, false]) {
+        if (onCut || !Number.isFinite(re) || !Number.isFinite(im) || (imZero ? im !== 0 : re !== 0)) continue;
         const plus = imZero ? tryValue(re, 0, 'signed-zero') : tryValue(0, im, 'signed-zero');
         const minus = imZero ? tryValue(re, -0, 'signed-zero') : tryValue(-0, im, 'signed-zero');
         if (plus && minus && relativeError(plus, minus) > 1e-9) {

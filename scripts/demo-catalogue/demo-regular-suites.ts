@@ -103,12 +103,12 @@ export const DEMO_REGULAR_SUITES: SuiteInput[] = [
   },
   {
     id: 'sqrt-z2-minus-1-other-sheet',
-    version: 1,
+    version: 2,
     title: '−√(z²−1): the same cut, the other value at z0 (k = 1)',
     story:
-      'The finite-cut branch again, fixed by k = 1: the value at 2 is −√3 = principal·e^{2πi·½·1}. Under counter-clockwise continuity, so zero signs on the cut are ignored and the cut belongs to its upper side.',
+      'The finite-cut branch again, fixed by k = 1: the value at 2 is −√3 = principal·e^{2πi·½·1}. Under counter-clockwise continuity, so zero signs on the cut are ignored and the cut belongs to the side reached turning counter-clockwise about its first point: written from 1 to −1, that is its upper side, where −√(z−1)·√(z+1) of principal roots puts it. (Version 2 writes the cut from 1, which is what makes the upper side the closed one.)',
     subject: '-sqrt(z - 1) * sqrt(z + 1)',
-    branch: { kind: 'regular', g: 'z^2 - 1', nu: '1/2', z0: z('2', '0'), k: 1, cuts: [{ points: [z('-1', '0'), z('1', '0')], to_infinity: false }] },
+    branch: { kind: 'regular', g: 'z^2 - 1', nu: '1/2', z0: z('2', '0'), k: 1, cuts: [{ points: [z('1', '0'), z('-1', '0')], to_infinity: false }] },
     convention: 'counter-clockwise',
     paths: [
       { kind: 'polyline', name: 'a loop through the upper half-plane', points: [z('2', '0'), z('0', '2'), z('-2', '0'), z('0', '-2'), z('2', '0')], samples: 81 },
