@@ -14,7 +14,16 @@ export interface NamedValue {
  * not a proof; `excluded` counts points where the law makes no claim.
  */
 export type PropertyOutcome =
-  | { kind: 'held'; law: PropertyCheck['law']; title: string; seed: number; runs: number; excluded: number }
+  | {
+      kind: 'held';
+      law: PropertyCheck['law'];
+      title: string;
+      seed: number;
+      runs: number;
+      excluded: number;
+      /** What a pass shows: the law at these drawn points, not everywhere. */
+      statement: string;
+    }
   | {
       kind: 'failed';
       law: PropertyCheck['law'];

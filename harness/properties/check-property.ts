@@ -51,7 +51,13 @@ export async function checkProperty(check: PropertyCheck, subject: PropertySubje
     return (await law.check(ctx, zs)) === null;
   });
   const details = await fc.check(property, { seed: check.seed, numRuns: check.runs });
-  if (!details.failed) return { kind: 'held', ...base, runs: details.numRuns, excluded: details.numSkips };
+  if (!details.failed) {
+    const statement =
+      `The law held at ${details.numRuns} points drawn with seed ${check.seed}` +
+      (details.numSkips > 0 ? ` (${details.numSkips} more drawn where it makes no claim were excluded)` : '') +
+      `: evidence for these points under this convention and tolerance, not a proof for the region.`;
+    return { kind: 'held', ...base, runs: details.numRuns, excluded: details.numSkips, statement };
+  }
   const counterexample = (details.counterexample?.[0] ?? []) as ComplexPair[];
   let reason: string;
   let values: NamedValue[] = [];

@@ -63,11 +63,14 @@ export function regionArbitrary(region: PropertyCheck['region'], cuts: readonly 
   const offset = fc.oneof({ arbitrary: fc.constant(0), weight: 1 }, { arbitrary: fc.double({ min: 0, max: distance, noNaN: true }), weight: 3 });
   const arbitrary = fc
     .tuple(fc.integer({ min: 0, max: cuts.length - 1 }), along, fraction, offset, fc.boolean())
-    .map(([index, a, f, delta, below]): ComplexPair => {
+    .map(([index, a, f, delta, below]): ComplexPair | null => {
       const cut = cuts[index]!;
       const [dx, dy] = [cut.to[0] - cut.from[0], cut.to[1] - cut.from[1]];
       const length = Math.hypot(dx, dy);
       const s = cut.toInfinity ? a / length : f;
+      // Near a finite end at ±1 a tiny distance rounds back onto the end itself, which is a
+      // branch point, not a point of the cut: such draws are dropped.
+      if (cut.from[0] + s * dx === cut.from[0] && cut.from[1] + s * dy === cut.from[1]) return null;
       const side = below ? -1 : 1;
       if (dy === 0) {
         // On a horizontal cut the across part is exact: ±δ, or ±0 on the cut itself.
@@ -80,6 +83,7 @@ export function regionArbitrary(region: PropertyCheck['region'], cuts: readonly 
       }
       // Oblique cuts: the left normal (−dy, dx)/|d|; "below" is the right-hand side walking from `from`.
       return [cut.from[0] + s * dx - (side * delta * dy) / length, cut.from[1] + s * dy + (side * delta * dx) / length];
-    });
+    })
+    .filter((z): z is ComplexPair => z !== null);
   return { arbitrary };
 }
