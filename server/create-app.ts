@@ -9,6 +9,7 @@ import type { DataSource } from 'typeorm';
 import type { ApiError } from '../shared/api-error';
 import { errorHandler } from './middleware/error-handler';
 import { authRouter } from './routes/auth-router';
+import { deviationsRouter } from './routes/deviations-router';
 import { failuresRouter } from './routes/failures-router';
 import { meRouter } from './routes/me-router';
 import { outboxRouter } from './routes/outbox-router';
@@ -96,6 +97,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   api.use('/schedules', schedulesRouter(options.dataSource));
   api.use('/runs', runsRouter(options.dataSource, new RunService(options.dataSource, options.shardQueue)));
   api.use('/failures', failuresRouter(options.dataSource));
+  api.use('/deviations', deviationsRouter(options.dataSource));
   api.use((_req, res) => {
     res.status(404).json({ kind: 'not-found', message: 'No such API route.' } satisfies ApiError);
   });

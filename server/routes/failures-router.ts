@@ -2,8 +2,10 @@ import { stringify } from 'csv-stringify/sync';
 import { Router } from 'express';
 import type { DataSource } from 'typeorm';
 import { ROLES } from '../../shared/roles';
+import { classifyBody } from '../../shared/schemas/classify-body';
 import { failureQuery } from '../../shared/schemas/failure-query';
 import { requireRole } from '../middleware/require-role';
+import { classifyFailure } from '../services/classify-failure';
 import { HttpError } from '../services/http-error';
 import { InputError } from '../services/input-error';
 import { parseInput } from '../services/parse-input';
@@ -54,9 +56,14 @@ export function failuresRouter(dataSource: DataSource): Router {
     res.type('text/csv').attachment('sheetkeeper-failures.csv').send(csv);
   });
 
+  router.post('/:id/classify', requireRole('reviewer', 'admin'), async (req, res) => {
+    const id = failureNumber(req.params.id);
+    const deviation = await classifyFailure(dataSource, req.user!, id, parseInput(classifyBody, req.body, 'body'));
+    res.status(201).json({ deviation: { id: deviation.id, classification: deviation.classification, scope: deviation.scope, expiresAt: deviation.expiresAt?.toISOString() ?? null } });
+  });
+
   router.get('/:id', anyone, async (req, res) => {
-    const id = String(req.params.id);
-    if (!/^\d{1,18}$/.test(id)) throw new InputError([{ field: 'params.id', rule: 'must be a failure number' }]);
+    const id = failureNumber(req.params.id);
     const [row] = await dataSource.query(`SELECT point_key, target_name FROM failures WHERE id = $1`, [id]);
     if (!row) throw new HttpError(404, { kind: 'not-found', message: 'No failure with that number.' });
     const { rows } = await searchFailures(dataSource, { sort: 'id', limit: 1, after: String(BigInt(id) - 1n) });
@@ -69,4 +76,10 @@ export function failuresRouter(dataSource: DataSource): Router {
     res.json({ failure: rows[0], history });
   });
   return router;
+}
+
+function failureNumber(raw: unknown): string {
+  const id = String(raw);
+  if (!/^\d{1,18}$/.test(id)) throw new InputError([{ field: 'params.id', rule: 'must be a failure number' }]);
+  return id;
 }

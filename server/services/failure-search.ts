@@ -1,5 +1,6 @@
 import type { DataSource } from 'typeorm';
 import type { FailureQuery } from '../../shared/schemas/failure-query';
+import { coveredByDeviationSql } from './covered-by-deviation-sql';
 
 export interface FailureRow {
   id: string;
@@ -49,7 +50,8 @@ export async function searchFailures(dataSource: DataSource, q: FailureQuery): P
   if (q.diagnosis === 'error' || q.diagnosis === 'skipped') add('outcome_kind = ?', q.diagnosis);
   else if (q.diagnosis) add('diagnosis_kind = ?', q.diagnosis);
   if (q.status === 'new') where.push('is_regression');
-  if (q.status === 'known') where.push('NOT is_regression');
+  if (q.status === 'known') where.push(`NOT is_regression AND NOT ${coveredByDeviationSql('f')}`);
+  if (q.status === 'accepted') where.push(coveredByDeviationSql('f'));
   // Qualified: the select list names its text copy of the id "id" too, and ORDER BY would sort that as text.
   let order = 'f.id ASC';
   if (q.sort === 'ulps') {

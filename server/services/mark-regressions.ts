@@ -1,22 +1,19 @@
 import type { EntityManager } from 'typeorm';
 import { Run } from '../entities/run';
+import { coveredByDeviationSql } from './covered-by-deviation-sql';
 import type { MailOutbox } from './mail-outbox';
 import { regressionMail } from './regression-mail';
 import type { RegressionRow } from './regression-row';
+import { targetKeySql } from './target-key-sql';
 
-/**
- * A target without its version, in SQL: "complex.js@2.4.1" → "complex.js",
- * "mathjs@15.2.0/number" → "mathjs/number". Runs are compared per key, so an upgrade of a
- * library compares the new version with the old one and shows as a version change.
- */
-const KEY = (column: string) => `regexp_replace(${column}, '@[^/]+', '')`;
+const KEY = targetKeySql;
 
 /**
  * Completes a run: marks as regressions the failing points that passed in the previous
  * completed run of the same plan — the same suite, path and input bits, on the same target
- * up to its version, on a path that run evaluated without a path error — and queues one mail
- * to the plan's recipients when there are any. Accepted deviations are not modelled yet, so
- * none is subtracted. Runs inside the caller's transaction.
+ * up to its version, on a path that run evaluated without a path error, and not covered by an
+ * unexpired accepted deviation — and queues one mail to the plan's recipients when there are
+ * any. Runs inside the caller's transaction.
  */
 export async function markRegressions(tx: EntityManager, runId: string, mail: { outbox: MailOutbox; appUrl: string }): Promise<number> {
   const run = await tx.getRepository(Run).findOneOrFail({ where: { id: runId }, relations: { plan: true } });
@@ -30,18 +27,20 @@ export async function markRegressions(tx: EntityManager, runId: string, mail: { 
     : null;
   let count = 0;
   if (previous) {
-    const marked: unknown[] = await tx.query(
-      `UPDATE failures f SET is_regression = true
+    // Counted through a CTE: TypeORM answers a bare UPDATE … RETURNING with [rows, affected].
+    const [marked] = await tx.query(
+      `WITH marked AS (UPDATE failures f SET is_regression = true
         WHERE f.run_id = $1 AND f.outcome_kind = 'fail'
           AND EXISTS (SELECT 1 FROM shards ps JOIN path_summaries pp ON pp.shard_id = ps.id
                        WHERE ps.run_id = $2 AND ps.suite_slug = f.suite_slug AND ${KEY('ps.target_name')} = ${KEY('f.target_name')}
                          AND pp.path_name = f.path_name AND pp.error IS NULL)
           AND NOT EXISTS (SELECT 1 FROM failures pf
                            WHERE pf.run_id = $2 AND pf.point_key = f.point_key AND ${KEY('pf.target_name')} = ${KEY('f.target_name')})
-        RETURNING f.id`,
+          AND NOT ${coveredByDeviationSql('f')}
+        RETURNING f.id) SELECT count(*)::int AS n FROM marked`,
       [run.id, previous.id],
     );
-    count = marked.length;
+    count = marked.n;
   }
   await tx.getRepository(Run).update(run.id, { status: 'completed', finishedAt: new Date(), regressions: count });
   if (count > 0 && run.plan && run.plan.recipients.length > 0) {

@@ -153,6 +153,32 @@ const ROUTES: RouteCase[] = [
   { name: 'GET /api/failures', call: (a) => a.get('/api/failures'), expect: signedIn(200) },
   { name: 'GET /api/failures/export.csv', call: async (a) => a.get(`/api/failures/export.csv?run=${await freshRun()}`), expect: signedIn(200) },
   { name: 'GET /api/failures/:id (none stored)', call: (a) => a.get('/api/failures/1'), expect: signedIn(404) },
+  {
+    name: 'POST /api/failures/:id/classify',
+    call: async (a) => {
+      const runId = await freshRun();
+      const [shard] = await t.db.dataSource.query(`SELECT id FROM shards WHERE run_id = $1 LIMIT 1`, [runId]);
+      const [row] = await t.db.dataSource.query(
+        `INSERT INTO failures (run_id, shard_id, suite_slug, suite_version, target_name, target_library, target_version, convention, path_name, point_index, t, z, z_hex, point_key, outcome_kind, diagnosis_kind, rule, reproducer)
+         VALUES ($1, $2, 'table-plan-suite', 1, $3, 'complex.js', '2.4.3', 'signed-zero', 'p', 0, 0, '{"re":"1","im":"0"}', '{"re":"0x1p+0","im":"0x0p+0"}', 'k', 'fail', 'inaccurate', 'r', 'x') RETURNING id::text`,
+        [runId, shard.id, targetName],
+      );
+      return a.post(`/api/failures/${row.id}/classify`).send({ classification: 'bug', reason: 'seen upstream' });
+    },
+    expect: { 'signed-out': 401, admin: 201, maintainer: 403, reviewer: 201, contributor: 403 },
+  },
+  { name: 'GET /api/deviations', call: (a) => a.get('/api/deviations'), expect: signedIn(200) },
+  {
+    name: 'POST /api/deviations/:id/revoke',
+    call: async (a) => {
+      const [row] = await t.db.dataSource.query(
+        `INSERT INTO deviations (classification, scope, target_key, suite_slug, reason, expires_at, created_by) VALUES ('accepted', 'suite', 'complex.js', 'x', 'r', now() + interval '1 day', $1) RETURNING id`,
+        [contributorId],
+      );
+      return a.post(`/api/deviations/${row.id}/revoke`);
+    },
+    expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 200, contributor: 403 },
+  },
   { name: 'GET /api/unknown-route', call: (a) => a.get('/api/unknown-route'), expect: all(404) },
   { name: 'POST /api/auth/sign-out', call: (a) => a.post('/api/auth/sign-out'), expect: all(204) },
 ];

@@ -87,3 +87,55 @@ describe('runs and the failure table', () => {
     expect((await kwame.post(`/api/runs/${runId}/cancel`)).status).toBe(409);
   });
 });
+
+describe('verdicts on failures', () => {
+  let t: TestApp;
+  let runId: string;
+  beforeAll(async () => {
+    t = await startTestApp();
+    await approvedSuite(t.db.dataSource, 'verdict-sqrt');
+    const admin = await signInAs(t.app, 'admin');
+    const target = (await t.db.dataSource.query(`SELECT name FROM targets WHERE library = 'complex.js' AND installed LIMIT 1`))[0].name;
+    const plan = await admin.post('/api/plans').send({ name: 'verdict plan', recipients: [], suites: ['verdict-sqrt'], targets: [target] });
+    runId = (await admin.post('/api/runs').send({ planId: plan.body.plan.id })).body.run.id;
+    const [shard] = await t.db.dataSource.query(`SELECT id FROM shards WHERE run_id = $1`, [runId]);
+    for (const [i, path] of ['a', 'a', 'b'].entries()) {
+      await t.db.dataSource.query(
+        `INSERT INTO failures (run_id, shard_id, suite_slug, suite_version, target_name, target_library, target_version, convention, path_name, point_index, t, z, z_hex, point_key, outcome_kind, diagnosis_kind, diagnosis, rule, reproducer)
+         VALUES ($1, $2, 'verdict-sqrt', 1, 'complex.js@2.4.3', 'complex.js', '2.4.3', 'signed-zero', $3, $4, 0, '{"re":"-4","im":"-0"}', '{"re":"-0x1p+2","im":"-0x0p+0"}', $5, 'fail', 'zero-sign', '{"kind":"zero-sign","part":"im","of":"input"}', 'ISO/IEC 9899:2011 G.6.4.2', 'x')`,
+        [runId, shard.id, path, i, `verdict-sqrt|${path}|${i}`],
+      );
+    }
+  });
+  afterAll(() => t.stop());
+
+  it('accepts a deviation for a path until it expires, moving its failures from known to accepted', async () => {
+    const hanne = await signInAs(t.app, 'reviewer');
+    const [first] = (await hanne.get(`/api/failures?run=${runId}&limit=1`)).body.failures;
+    const res = await hanne.post(`/api/failures/${first.id}/classify`).send({ classification: 'accepted', scope: 'path', reason: 'complex.js documents that it ignores the sign of zero.', expiresAt: '2099-01-01T00:00:00Z' });
+    expect(res.status).toBe(201);
+    expect((await hanne.get(`/api/failures?run=${runId}&status=accepted`)).body.failures.map((f: { pathName: string }) => f.pathName)).toEqual(['a', 'a']);
+    expect((await hanne.get(`/api/failures?run=${runId}&status=known`)).body.failures.map((f: { pathName: string }) => f.pathName)).toEqual(['b']);
+
+    const revoked = await hanne.post(`/api/deviations/${res.body.deviation.id}/revoke`);
+    expect(revoked.body.deviation.revokedAt).not.toBeNull();
+    expect((await hanne.get(`/api/failures?run=${runId}&status=accepted`)).body.failures).toHaveLength(0);
+  });
+
+  it('needs an expiry in the future for an accepted deviation, and a reason', async () => {
+    const hanne = await signInAs(t.app, 'reviewer');
+    const [first] = (await hanne.get(`/api/failures?run=${runId}&limit=1`)).body.failures;
+    const res = await hanne.post(`/api/failures/${first.id}/classify`).send({ classification: 'accepted', reason: '' });
+    expect(res.status).toBe(400);
+    expect(res.body.issues.map((i: { field: string }) => i.field).sort()).toEqual(['body.expiresAt', 'body.reason']);
+    const past = await hanne.post(`/api/failures/${first.id}/classify`).send({ classification: 'accepted', reason: 'old news', expiresAt: '2001-01-01T00:00:00Z' });
+    expect(past.body.issues).toEqual([{ field: 'body.expiresAt', rule: 'must lie in the future' }]);
+  });
+
+  it('records a bug verdict without an expiry', async () => {
+    const hanne = await signInAs(t.app, 'reviewer');
+    const [first] = (await hanne.get(`/api/failures?run=${runId}&limit=1`)).body.failures;
+    const res = await hanne.post(`/api/failures/${first.id}/classify`).send({ classification: 'bug', scope: 'point', reason: 'Reported upstream.' });
+    expect(res.body.deviation).toMatchObject({ classification: 'bug', scope: 'point', expiresAt: null });
+  });
+});

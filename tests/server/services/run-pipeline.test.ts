@@ -91,6 +91,7 @@ describe('a plan run through the queue, with regressions and their mail', () => 
     expect(second.status).toBe('completed');
     expect(second.regressions).toBeGreaterThan(0);
     const regressions: { suite_slug: string; z: { im: string } }[] = await db.dataSource.query(`SELECT suite_slug, z FROM failures WHERE run_id = $1 AND is_regression`, [second.id]);
+    expect(regressions).toHaveLength(second.regressions!);
     // Only √z changed, and only in the upper half-plane.
     expect(new Set(regressions.map((r) => r.suite_slug))).toEqual(new Set(['run-sqrt']));
     expect(regressions.every((r) => Number(r.z.im) > 0)).toBe(true);
@@ -102,6 +103,21 @@ describe('a plan run through the queue, with regressions and their mail', () => 
     expect(mails[0]!.subject).toBe(`[Sheetkeeper] ${second.regressions} regressions in fakelib nightly`);
     expect(mails[0]!.textBody).toContain('fakelib: 1 → 2');
     expect(mails[0]!.htmlBody).toContain('open case');
+  }, 90_000);
+
+  it('keeps failures covered by an accepted deviation out of the regressions', async () => {
+    // Accept √z's failures on fakelib (any version) for now; a fresh run of version 1 then version 2 finds no regression in it.
+    const [failure] = await db.dataSource.query(`SELECT id::text FROM failures WHERE suite_slug = 'run-sqrt' AND is_regression LIMIT 1`);
+    await db.dataSource.query(
+      `INSERT INTO deviations (classification, scope, target_key, suite_slug, reason, expires_at, failure_id, created_by) VALUES ('accepted', 'suite', 'fakelib', 'run-sqrt', 'known upstream', now() + interval '30 days', $1, $2)`,
+      [failure.id, kwame.id],
+    );
+    await new PlanService(db.dataSource).save(kwame, { name: 'fakelib nightly', description: '', recipients: ['kwame@sheetkeeper.test'], suites: ['run-sqrt', 'run-log'], targets: ['fakelib@1'] }, planId);
+    await finished((await runs.start(planId, 'manual', kwame)).id);
+    await new PlanService(db.dataSource).save(kwame, { name: 'fakelib nightly', description: '', recipients: ['kwame@sheetkeeper.test'], suites: ['run-sqrt', 'run-log'], targets: ['fakelib@2'] }, planId);
+    const again = await finished((await runs.start(planId, 'manual', kwame)).id);
+    const left = await db.dataSource.query(`SELECT suite_slug, path_name, z, diagnosis_kind FROM failures WHERE run_id = $1 AND is_regression`, [again.id]);
+    expect({ regressions: again.regressions, left }).toEqual({ regressions: 0, left: [] });
   }, 90_000);
 
   it('cancels a queued run and skips its shards', async () => {

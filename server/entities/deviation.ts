@@ -1,0 +1,54 @@
+import { Check, Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { User } from './user';
+
+/** A reviewer's verdict on failures of one target (any version) within a scope; `accepted` ones expire. */
+@Entity({ name: 'deviations' })
+@Index('deviations_match_idx', ['targetKey', 'suiteSlug'])
+@Check('deviations_classification_known', "classification IN ('bug', 'convention-difference', 'accepted')")
+@Check('deviations_scope_known', "scope IN ('point', 'path', 'suite', 'diagnosis')")
+export class Deviation {
+  @PrimaryGeneratedColumn('uuid')
+  id!: string;
+
+  @Column({ type: 'text' })
+  classification!: 'bug' | 'convention-difference' | 'accepted';
+
+  @Column({ type: 'text' })
+  scope!: 'point' | 'path' | 'suite' | 'diagnosis';
+
+  /** The target without its version ("complex.js", "mathjs/number"). */
+  @Column({ type: 'text', name: 'target_key' })
+  targetKey!: string;
+
+  @Column({ type: 'text', name: 'suite_slug' })
+  suiteSlug!: string;
+
+  @Column({ type: 'text', name: 'path_name', nullable: true })
+  pathName!: string | null;
+
+  @Column({ type: 'text', name: 'point_key', nullable: true })
+  pointKey!: string | null;
+
+  @Column({ type: 'text', name: 'diagnosis_kind', nullable: true })
+  diagnosisKind!: string | null;
+
+  @Column({ type: 'text' })
+  reason!: string;
+
+  @Column({ type: 'timestamptz', name: 'expires_at', nullable: true })
+  expiresAt!: Date | null;
+
+  /** The failure the verdict was given on. */
+  @Column({ type: 'bigint', name: 'failure_id', nullable: true })
+  failureId!: string | null;
+
+  @ManyToOne(() => User, { nullable: false, onDelete: 'RESTRICT' })
+  @JoinColumn({ name: 'created_by', foreignKeyConstraintName: 'FK_deviations_created_by' })
+  createdBy!: User;
+
+  @CreateDateColumn({ type: 'timestamptz', name: 'created_at' })
+  createdAt!: Date;
+
+  @Column({ type: 'timestamptz', name: 'revoked_at', nullable: true })
+  revokedAt!: Date | null;
+}
