@@ -1,24 +1,19 @@
-import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
+import { readFileSync } from 'node:fs';
 import { BadInput } from '../../../harness/command-support/bad-input';
 import { cutmapCommand } from '../../../harness/cutmap/cutmap-command';
+import { tempFolder } from '../support/temp-folder';
 
-let dir: string;
-beforeAll(() => {
-  dir = mkdtempSync(path.join(os.tmpdir(), 'cutmap-'));
-});
-afterAll(() => rmSync(dir, { recursive: true, force: true }));
+const file = tempFolder('cutmap');
 
 describe('cutmapCommand', () => {
   it("writes an SVG of complex.js 2.4.3's sqrt and exits 0, its cut being where it belongs", async () => {
-    const out = path.join(dir, 'sqrt.svg');
+    const out = file('sqrt.svg');
     expect(await cutmapCommand(['--target', 'complex.js@2.4.3', '--fn', 'sqrt', '--format', 'svg', '--out', out])).toBe(0);
     expect(readFileSync(out, 'utf8')).toContain('matches the expected cuts');
   });
 
   it("writes JSON for complex.js 2.4.3's acot over a smaller box and grid and exits 1", async () => {
-    const out = path.join(dir, 'acot.json');
+    const out = file('acot.json');
     expect(await cutmapCommand(['--target', 'complex.js@2.4.3', '--fn', 'acot', '--box', '-2,-2,2,2', '--grid', '41x41', '--out', out])).toBe(1);
     const map = JSON.parse(readFileSync(out, 'utf8'));
     expect([map.columns, map.rows, map.verdict]).toEqual([41, 41, 'differs']);

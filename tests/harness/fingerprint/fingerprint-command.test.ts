@@ -1,28 +1,24 @@
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
-import os from 'node:os';
+import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { discoverTargets } from '../../../harness/adapters/discover-targets';
 import { BadInput } from '../../../harness/command-support/bad-input';
 import { fingerprintCommand } from '../../../harness/fingerprint/fingerprint-command';
+import { tempFolder } from '../support/temp-folder';
 
 const BIN = path.join(__dirname, '..', '..', '..', 'bin', 'sheetkeeper.mjs');
-let dir: string;
-beforeAll(() => {
-  dir = mkdtempSync(path.join(os.tmpdir(), 'fingerprint-'));
-});
-afterAll(() => rmSync(dir, { recursive: true, force: true }));
+const file = tempFolder('fingerprint');
 
 describe('fingerprintCommand', () => {
   it('writes JSON to --out and exits 1 for complex.js 2.4.3, whose sqrt and log disagree on (-inf, 0]', async () => {
-    const out = path.join(dir, 'cjs.json');
+    const out = file('cjs.json');
     expect(await fingerprintCommand(['--target', 'complex.js@2.4.3', '--fn', 'sqrt,log', '--format', 'json', '--out', out])).toBe(1);
     const fp = JSON.parse(readFileSync(out, 'utf8'));
     expect(fp.cuts.map((c: { function: string; behaviour: string }) => `${c.function}: ${c.behaviour}`)).toEqual(['sqrt: inconsistent', 'log: inconsistent']);
   });
 
   it("writes a table that states what was checked and exits 0 for cmath's sqrt and pow(z, 1/2)", async () => {
-    const out = path.join(dir, 'cmath.txt');
+    const out = file('cmath.txt');
     expect(await fingerprintCommand(['--target', findCmath(), '--fn', 'sqrt,pow(z, 1/2)', '--out', out])).toBe(0);
     const text = readFileSync(out, 'utf8');
     expect(text).toContain('not a certification');

@@ -1,17 +1,12 @@
-import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
+import { readFileSync } from 'node:fs';
 import { matrixCommand } from '../../../harness/matrix/matrix-command';
+import { tempFolder } from '../support/temp-folder';
 
-let dir: string;
-beforeAll(() => {
-  dir = mkdtempSync(path.join(os.tmpdir(), 'matrix-'));
-});
-afterAll(() => rmSync(dir, { recursive: true, force: true }));
+const file = tempFolder('matrix');
 
 describe('matrixCommand', () => {
   it('writes a table for a suite id over every complex.js and exits 1, since atan changed in 2.4.1', async () => {
-    const out = path.join(dir, 'atan.txt');
+    const out = file('atan.txt');
     expect(await matrixCommand(['--suite', 'atan-principal-sz', '--library', 'complex.js', '--out', out])).toBe(1);
     const text = readFileSync(out, 'utf8');
     expect(text).toContain('first changed in 2.4.1');
@@ -19,7 +14,7 @@ describe('matrixCommand', () => {
   }, 30_000);
 
   it('exits 0 with JSON when no value changed (cbrt: no complex.js version has it, so every point is skipped alike)', async () => {
-    const out = path.join(dir, 'cbrt.json');
+    const out = file('cbrt.json');
     expect(await matrixCommand(['--suite', 'cbrt-principal-sz', '--library', 'complex.js', '--format', 'json', '--out', out])).toBe(0);
     expect(JSON.parse(readFileSync(out, 'utf8')).suites[0].changes).toEqual([]);
   });
