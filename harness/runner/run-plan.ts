@@ -20,6 +20,8 @@ export const DISCLAIMER =
 export const DEFAULT_CACHE_DIR = path.resolve(__dirname, '..', '..', '.data', 'reference-cache');
 /** A shard gets two minutes: the largest demo shard takes under 2 s cold (bench:harness). */
 export const DEFAULT_SHARD_TIME_LIMIT_MS = 120_000;
+/** How long a worker thread may take to load tsx, the engine and mathjs (~1–2 s here) before it counts as failed. */
+const STARTUP_MS = 60_000;
 /** After aborting a shard, how long to wait for it to wind down before giving up on it (and, in a worker, terminating it). */
 const GRACE_MS = 2_000;
 
@@ -226,7 +228,26 @@ async function runInWorkers(
   const entry = path.join(__dirname, 'shard-worker-entry.cjs');
   const lane = async (): Promise<void> => {
     let worker: Worker | null = null;
-    const spawn = () => new Worker(entry, { workerData: { cacheDir } });
+    // A worker counts as started once it has loaded the engine and said so; start-up is not part of any shard's time.
+    const spawn = async (): Promise<Worker> => {
+      const w = new Worker(entry, { workerData: { cacheDir } });
+      const ready = await new Promise<true | string>((resolve) => {
+        const timer = setTimeout(() => resolve(`the worker did not start within ${STARTUP_MS} ms`), STARTUP_MS);
+        w.once('message', (m: WorkerReply) => {
+          clearTimeout(timer);
+          resolve(m.type === 'ready' ? true : `the worker said ${m.type} before it was ready`);
+        });
+        w.once('error', (e) => {
+          clearTimeout(timer);
+          resolve(`the worker failed to start: ${e.message}`);
+        });
+      });
+      if (ready !== true) {
+        await w.terminate().catch(() => undefined);
+        throw new Error(ready);
+      }
+      return w;
+    };
     try {
       for (let shard = queue.shift(); shard; shard = queue.shift()) {
         const suite = plan.suites[shard.suite] as Suite;
@@ -238,7 +259,12 @@ async function runInWorkers(
         }
         emit({ type: 'shard-start', shard: shard.id, suite: suite.id, target: ref.name, points: shard.points });
         const started = Date.now();
-        worker ??= spawn();
+        try {
+          worker ??= await spawn();
+        } catch (e) {
+          finish(shard, shardFailure(suite, ref, shard.paths, pathPoints, e instanceof Error ? e.message : String(e), 'error'), Date.now() - started);
+          continue;
+        }
         const w: Worker = worker;
         const request: WorkerRequest = { type: 'shard', shard: shard.id, suite, paths: shard.paths, target: { name: ref.name, spec: ref.worker as NonNullable<TargetRef['worker']> }, maxFindings: options.maxFindings };
         const outcome = await new Promise<{ kind: 'result'; result: SuiteTargetResult; records: CacheRecords[] } | { kind: 'failed'; reason: string; terminate: boolean; status: 'error' | 'cancelled' }>((resolve) => {

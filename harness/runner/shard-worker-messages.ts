@@ -11,6 +11,7 @@ export type WorkerRequest =
 
 /** Shard worker → main thread: a result with the reference values it computed, a failure, or that it has aborted. */
 export type WorkerReply =
+  | { type: 'ready' }
   | { type: 'result'; shard: number; result: SuiteTargetResult; records: CacheRecords[] }
   | { type: 'failed'; shard: number; error: string }
   | { type: 'aborted' };

@@ -1,6 +1,7 @@
 import { parentPort, workerData } from 'node:worker_threads';
 import type { Target } from '../adapters/target';
 import { discoverTargets } from '../adapters/discover-targets';
+import { parseSubject } from '../expressions/parse-subject';
 import { evaluateSuite } from './evaluate-suite';
 import { ReferenceCache } from './reference-cache';
 import type { WorkerReply, WorkerRequest } from './shard-worker-messages';
@@ -69,3 +70,7 @@ port.on('message', (m: WorkerRequest) => {
     }
   })();
 });
+
+// Load the subject parser (mathjs, ~1 s) before saying ready, so a shard's time limit measures its work, not start-up.
+parseSubject('z');
+port.postMessage({ type: 'ready' } satisfies WorkerReply);
