@@ -59,6 +59,14 @@ describe('fingerprintTarget', () => {
     ]);
   });
 
+  it('calls a log that reads the zero sign backwards neither, saying the sides are swapped', async () => {
+    // Annex G (ISO/IEC 9899:2011 G.6.3.2): clog(−1 + 0i) = iπ and clog(−1 − 0i) = −iπ; this mutant gives them the other way round.
+    const mutant = referenceTarget('signed-zero', { log: ([z], ref) => ref('log', [[z![0], z![1] === 0 ? (Object.is(z![1], -0) ? 0 : -0) : z![1]]]) });
+    const fp = await fingerprintTarget(mutant, only('log'));
+    expect(rows(fp)).toEqual(['log (-inf, 0]: neither']);
+    expect(fp.cuts[0]!.probes.every((p) => p.note === '+0 and -0 give the sides the other way round')).toBe(true);
+  });
+
   it('calls a square root cut along the positive real axis neither on (-inf, 0], saying the cut is not there', async () => {
     // i·√(−z) squares to z, but its cut is [0, ∞): just below −4 it gives 2i where the principal root is −2i.
     const mutant = referenceTarget('signed-zero', { sqrt: ([z], ref) => { const [re, im] = ref('sqrt', [[-z![0], -z![1]]]); return [-im, re]; } });
