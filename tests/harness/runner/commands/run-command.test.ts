@@ -1,0 +1,100 @@
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { XMLParser, XMLValidator } from 'fast-xml-parser';
+
+const BIN = path.join(__dirname, '..', '..', '..', '..', 'bin', 'sheetkeeper.mjs');
+let dir: string;
+const cli = (args: string[]) => spawnSync(process.execPath, [BIN, ...args], { encoding: 'utf8', timeout: 120_000 });
+const run = (args: string[]) => cli(['run', '--cache', path.join(dir, 'cache'), ...args]);
+
+beforeAll(() => {
+  dir = mkdtempSync(path.join(os.tmpdir(), 'sheetkeeper-cli-'));
+});
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+describe('sheetkeeper run', () => {
+  it('exits 0 when nothing fails, and says what was checked and that a pass is no certification', () => {
+    // complex.js takes the upper side of (−∞, 0] whatever the zero's sign: counter-clockwise continuity.
+    const r = run(['--suite', 'sqrt-principal-ccw', '--target', 'complex.js@2.4.3']);
+    expect(r.stderr).toBe('');
+    expect(r.status).toBe(0);
+    expect(r.stdout).toMatch(/^PASS +sqrt-principal-ccw v1 × complex\.js@2\.4\.3 — 154 pass · 0 fail/m);
+    expect(r.stdout).toContain('checked: principal branch of every function, counter-clockwise; tolerance 4 ulps per part; 3 path(s), 154 point(s); properties: conjugate-symmetry, root-power, range');
+    expect(r.stdout).toContain('it is not a certification');
+  }, 120_000);
+
+  it('exits 1 when a point fails, and writes JSON that names every failure with its diagnosis', () => {
+    const r = run(['--suite', 'sqrt-principal-sz', '--target', 'complex.js', '--format', 'json']);
+    expect(r.status).toBe(1);
+    const result = JSON.parse(r.stdout);
+    expect(result.status).toBe('fail');
+    expect(result.plan).toEqual({ suites: [{ id: 'sqrt-principal-sz', version: 1 }], targets: ['complex.js@2.4.3'], shards: 1 });
+    expect(result.disclaimer).toMatch(/not a certification/);
+    const finding = result.results[0].paths[0].findings[0];
+    expect(finding).toMatchObject({ label: 'on -0', zHex: { re: '-0x1p-1', im: '-0x0p+0' }, outcome: { kind: 'fail', diagnosis: { kind: 'zero-sign', part: 'im', of: 'input' } } });
+    expect(finding.reproducer).toContain("require('complex.js')");
+  }, 120_000);
+
+  it('writes well-formed JUnit XML: one testsuite per suite × target, one testcase per path, failures listing their points', () => {
+    const out = path.join(dir, 'junit.xml');
+    const r = run(['--suite', 'sqrt-principal-sz,log-principal-ccw', '--target', 'complex.js@2.4.3', '--target', 'mathjs@15.2.0', '--format', 'junit', '--out', out]);
+    expect(r.status).toBe(1);
+    expect(r.stdout).toBe('');
+    expect(r.stderr).toMatch(/written to .*junit\.xml/);
+    const xml = readFileSync(out, 'utf8');
+    expect(XMLValidator.validate(xml)).toBe(true);
+    const doc = new XMLParser({ ignoreAttributes: false, attributeNamePrefix: '' }).parse(xml);
+    const suites = doc.testsuites.testsuite as { name: string; testcase: { name: string; failure?: { type: string; '#text': string } }[]; properties: { property: { name: string; value: string }[] } }[];
+    expect(suites.map((s) => s.name)).toEqual([
+      'sqrt-principal-sz@1 × complex.js@2.4.3',
+      'sqrt-principal-sz@1 × mathjs@15.2.0/complex',
+      'log-principal-ccw@1 × complex.js@2.4.3',
+      'log-principal-ccw@1 × mathjs@15.2.0/complex',
+    ]);
+    for (const s of suites) {
+      expect(s.testcase.map((c) => c.name)).toEqual(['straddle cut 1 (straddle, 40 points)', 'around branch point 1 (circle, 65 points)', 'wide circle (circle, 49 points)']);
+      expect(s.properties.property.find((p) => p.name === 'disclaimer')!.value).toMatch(/not a certification/);
+    }
+    const straddle = suites[0]!.testcase[0]!.failure!;
+    expect(straddle.type).toBe('zero-sign');
+    expect(straddle['#text']).toContain('z        = -1 + -0i   [-0x1p+0, -0x0p+0]');
+    expect(straddle['#text']).toContain("const z = c(-1, -0);");
+  }, 120_000);
+
+  it('exits 2 for bad input: an unknown suite or target, a flag it does not know, an invalid suite file', () => {
+    const unknownSuite = run(['--suite', 'no-such-suite', '--target', 'complex.js']);
+    expect(unknownSuite.status).toBe(2);
+    expect(unknownSuite.stderr).toContain('no-such-suite: (suite) is neither a file nor the id of a suite');
+    const unknownTarget = run(['--suite', 'sqrt-principal-sz', '--target', 'numpy@2']);
+    expect(unknownTarget.status).toBe(2);
+    expect(unknownTarget.stderr).toMatch(/unknown target "numpy@2"; installed: .*complex\.js@2\.4\.3/);
+    expect(run(['--suite', 'sqrt-principal-sz', '--target', 'complex.js', '--format', 'xml']).status).toBe(2);
+    expect(run(['--target', 'complex.js']).status).toBe(2);
+    const file = path.join(dir, 'broken.json');
+    const suite = JSON.parse(readFileSync(path.join(__dirname, '..', '..', '..', '..', 'suites', 'demo', 'sqrt-principal-sz.json'), 'utf8'));
+    suite.id = 'broken-suite';
+    suite.paths[1].radius = 1;
+    writeFileSync(file, JSON.stringify(suite));
+    const invalid = run(['--suite', file, '--target', 'complex.js']);
+    expect(invalid.status).toBe(2);
+    expect(invalid.stderr).toBe('sheetkeeper run: broken-suite: paths.1.radius must be a number written as a string\n');
+    suite.paths[1].radius = '1';
+    suite.subject = 'sin(z)';
+    writeFileSync(file, JSON.stringify(suite));
+    const refused = run(['--suite', file, '--target', 'complex.js']);
+    expect(refused.status).toBe(2);
+    expect(refused.stderr).toContain('broken-suite: subject the function "sin" (not in the catalogue) is not allowed in a subject');
+  }, 120_000);
+});
+
+describe('sheetkeeper targets', () => {
+  it('lists the installed targets as JSON with their versions and settings', () => {
+    const r = cli(['targets']);
+    expect(r.status).toBe(0);
+    const targets = JSON.parse(r.stdout) as { name: string; settings: Record<string, unknown> }[];
+    expect(targets.map((t) => t.name)).toEqual(expect.arrayContaining(['complex.js@2.4.3', 'mathjs@15.2.0/complex', 'mathjs@15.2.0/number/predictable']));
+    expect(targets.find((t) => t.name === 'mathjs@15.2.0/complex')!.settings).toMatchObject({ entry: 'complex', predictable: false });
+  });
+});
