@@ -8,6 +8,7 @@ import { Pool } from 'pg';
 import type { DataSource } from 'typeorm';
 import type { ApiError } from '../shared/api-error';
 import { errorHandler } from './middleware/error-handler';
+import { tokenAuth } from './middleware/token-auth';
 import { authRouter } from './routes/auth-router';
 import { deviationsRouter } from './routes/deviations-router';
 import { failuresRouter } from './routes/failures-router';
@@ -18,6 +19,7 @@ import { runsRouter } from './routes/runs-router';
 import { schedulesRouter } from './routes/schedules-router';
 import { suitesRouter } from './routes/suites-router';
 import { targetsRouter } from './routes/targets-router';
+import { tokensRouter } from './routes/tokens-router';
 import { usersRouter } from './routes/users-router';
 import { configurePassport } from './services/configure-passport';
 import { RunService } from './services/run-service';
@@ -86,6 +88,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   );
   api.use(passport.initialize());
   api.use(passport.session());
+  api.use(tokenAuth(options.dataSource));
 
   api.use('/auth', authRouter(passport, limiter));
   api.use('/me', meRouter());
@@ -98,6 +101,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   api.use('/runs', runsRouter(options.dataSource, new RunService(options.dataSource, options.shardQueue)));
   api.use('/failures', failuresRouter(options.dataSource));
   api.use('/deviations', deviationsRouter(options.dataSource));
+  api.use('/tokens', tokensRouter(options.dataSource));
   api.use((_req, res) => {
     res.status(404).json({ kind: 'not-found', message: 'No such API route.' } satisfies ApiError);
   });

@@ -1,5 +1,6 @@
 import 'reflect-metadata';
 import { DataSource } from 'typeorm';
+import { ApiToken } from './entities/api-token';
 import { Deviation } from './entities/deviation';
 import { Failure } from './entities/failure';
 import { OutboxMail } from './entities/outbox-mail';
@@ -20,10 +21,11 @@ import { MailOutboxAndReceivedMail1764710000000 } from './migrations/17647100000
 import { TargetsPlansSchedules1764720000000 } from './migrations/1764720000000-targets-plans-schedules';
 import { RunsShardsFailures1764730000000 } from './migrations/1764730000000-runs-shards-failures';
 import { Deviations1764740000000 } from './migrations/1764740000000-deviations';
+import { ApiTokens1764750000000 } from './migrations/1764750000000-api-tokens';
 
 /** Entities and migrations are listed, not globbed, so tsx, jest and tsc builds all find them. */
-export const ENTITIES = [User, Suite, SuiteVersion, OutboxMail, ReceivedMail, Target, Plan, Schedule, ScheduleFiring, Run, Shard, Failure, PathSummary, Deviation];
-export const MIGRATIONS = [UsersSessionsSignInLimits1764626400000, SuitesAndVersions1764700000000, MailOutboxAndReceivedMail1764710000000, TargetsPlansSchedules1764720000000, RunsShardsFailures1764730000000, Deviations1764740000000];
+export const ENTITIES = [User, Suite, SuiteVersion, OutboxMail, ReceivedMail, Target, Plan, Schedule, ScheduleFiring, Run, Shard, Failure, PathSummary, Deviation, ApiToken];
+export const MIGRATIONS = [UsersSessionsSignInLimits1764626400000, SuitesAndVersions1764700000000, MailOutboxAndReceivedMail1764710000000, TargetsPlansSchedules1764720000000, RunsShardsFailures1764730000000, Deviations1764740000000, ApiTokens1764750000000];
 
 export function createDataSource(url: string): DataSource {
   return new DataSource({

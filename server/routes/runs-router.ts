@@ -18,7 +18,7 @@ export function runsRouter(dataSource: DataSource, runs: RunService): Router {
   });
   router.post('/', runners, async (req, res) => {
     const { planId } = parseInput(runBody, req.body, 'body');
-    res.status(202).json({ run: await runs.start(planId, 'manual', req.user!) });
+    res.status(202).json({ run: await runs.start(planId, res.locals.viaToken ? 'api' : 'manual', req.user!) });
   });
   router.get('/:id', anyone, async (req, res) => {
     res.json({ run: await runs.get(parseInput(idParams, req.params, 'params').id) });

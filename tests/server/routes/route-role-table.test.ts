@@ -16,6 +16,15 @@ let t: TestApp;
 let contributorId: string;
 let serial = 0;
 let targetName: string;
+/** One signed-in agent per role, reused: a bcrypt check at cost 11 per case made this table take minutes. */
+const agents = new Map<Role, request.Agent>();
+async function agentFor(role: Role): Promise<request.Agent> {
+  const known = agents.get(role);
+  if (known) return known;
+  const agent = await signInAs(t.app, role);
+  agents.set(role, agent);
+  return agent;
+}
 
 beforeAll(async () => {
   t = await startTestApp();
@@ -28,20 +37,20 @@ beforeAll(async () => {
 /** A fresh plan over one approved suite and one installed target. */
 async function freshPlan(): Promise<string> {
   serial += 1;
-  const admin = await signInAs(t.app, 'admin');
+  const admin = await agentFor('admin');
   const res = await admin.post('/api/plans').send({ name: `table plan ${serial}`, recipients: [], suites: ['table-plan-suite'], targets: [targetName] });
   return res.body.plan.id;
 }
 
 /** A fresh queued run of a fresh plan (the test queue runs nothing). */
 async function freshRun(): Promise<string> {
-  const admin = await signInAs(t.app, 'admin');
+  const admin = await agentFor('admin');
   return (await admin.post('/api/runs').send({ planId: await freshPlan() })).body.run.id;
 }
 
 /** A fresh schedule of a fresh plan. */
 async function freshSchedule(): Promise<string> {
-  const admin = await signInAs(t.app, 'admin');
+  const admin = await agentFor('admin');
   const res = await admin.post('/api/schedules').send({ planId: await freshPlan(), cron: '0 3 * * *', timeZone: 'UTC' });
   return res.body.schedule.id;
 }
@@ -65,6 +74,8 @@ async function freshSuite(state: 'draft' | 'submitted' | 'approved'): Promise<st
 
 interface RouteCase {
   name: string;
+  /** Sign-in and sign-out change the session, so they get an agent of their own. */
+  ownSession?: true;
   call: (caller: Caller, who: Who) => Promise<request.Response>;
   expect: Record<Who, number>;
 }
@@ -74,7 +85,7 @@ const signedIn = (status: number) => ({ ...all(status), 'signed-out': 401 });
 
 /** Every API route, with the status each kind of caller must get. */
 const ROUTES: RouteCase[] = [
-  { name: 'POST /api/auth/sign-in', call: (a) => a.post('/api/auth/sign-in').send({ email: 'ravi@sheetkeeper.test', password: 'ravi-demo-2026' }), expect: all(200) },
+  { name: 'POST /api/auth/sign-in', ownSession: true, call: (a) => a.post('/api/auth/sign-in').send({ email: 'ravi@sheetkeeper.test', password: 'ravi-demo-2026' }), expect: all(200) },
   { name: 'GET /api/me', call: (a) => a.get('/api/me'), expect: signedIn(200) },
   { name: 'GET /api/users', call: (a) => a.get('/api/users'), expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 } },
   {
@@ -179,15 +190,26 @@ const ROUTES: RouteCase[] = [
     },
     expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 200, contributor: 403 },
   },
+  { name: 'GET /api/tokens', call: (a) => a.get('/api/tokens'), expect: signedIn(200) },
+  { name: 'POST /api/tokens', call: (a) => a.post('/api/tokens').send({ name: 'table token' }), expect: signedIn(201) },
+  {
+    name: 'POST /api/tokens/:id/revoke (own token)',
+    call: async (a, who) => {
+      if (who === 'signed-out') return a.post('/api/tokens/00000000-0000-4000-8000-000000000000/revoke');
+      const created = await a.post('/api/tokens').send({ name: 'to revoke' });
+      return a.post(`/api/tokens/${created.body.token.id}/revoke`);
+    },
+    expect: signedIn(200),
+  },
   { name: 'GET /api/unknown-route', call: (a) => a.get('/api/unknown-route'), expect: all(404) },
-  { name: 'POST /api/auth/sign-out', call: (a) => a.post('/api/auth/sign-out'), expect: all(204) },
+  { name: 'POST /api/auth/sign-out', ownSession: true, call: (a) => a.post('/api/auth/sign-out'), expect: all(204) },
 ];
 
 describe('route × caller table', () => {
   const cases = ROUTES.flatMap((route) => WHO.map((who) => [route.name, who, route.expect[who], route] as const));
 
   it.each(cases)('%s answers %s with %i', async (_name, who, status, route) => {
-    const caller = who === 'signed-out' ? request(t.app) : await signInAs(t.app, who);
+    const caller = who === 'signed-out' ? request(t.app) : route.ownSession ? await signInAs(t.app, who) : await agentFor(who);
     const res = await route.call(caller, who);
     expect({ status: res.status, body: res.status >= 400 ? res.body : undefined }).toEqual({ status, body: res.status >= 400 ? expect.anything() : undefined });
     if (status === 401) expect(res.body.kind).toBe('signed-out');
