@@ -8,10 +8,11 @@ import { fingerprintTable } from './fingerprint-table';
 import { fingerprintTarget } from './fingerprint-target';
 
 /**
- * `sheetkeeper fingerprint --target NAME@VERSION [--fn sqrt,log] [--format table|json] [--out FILE]`:
- * which convention the target follows on each cut of each function. Exits 0 when every
- * (function, cut) follows one convention and agrees with the functions sharing its cut, 1
- * when any is `neither` or `inconsistent`, 2 for bad input.
+ * `sheetkeeper fingerprint --target NAME@VERSION[,…] [--fn sqrt,log] [--format table|json] [--out FILE]`:
+ * which convention each target follows on each cut of each function (one JSON object per
+ * target, in an array when several are named; tables one after the other). Exits 0 when every
+ * (function, cut) of every target follows one convention and agrees with the functions sharing
+ * its cut, 1 when any is `neither` or `inconsistent`, 2 for bad input.
  */
 export async function fingerprintCommand(argv: readonly string[]): Promise<number> {
   const request = readFlags(argv, ['target', 'fn', 'format', 'out'], fingerprintRequest);
@@ -22,12 +23,17 @@ export async function fingerprintCommand(argv: readonly string[]): Promise<numbe
         return found;
       })
     : FINGERPRINT_FUNCTIONS;
-  const target = findTarget(request.target).open();
-  try {
-    const fp = await fingerprintTarget(target, functions);
-    writeOutput(request.format === 'json' ? JSON.stringify(fp, null, 2) : fingerprintTable(fp), request.out);
-    return fp.cuts.some((c) => c.behaviour === 'neither' || c.behaviour === 'inconsistent') ? 1 : 0;
-  } finally {
-    await target.close();
+  const descriptors = request.target.map(findTarget);
+  const fingerprints = [];
+  for (const descriptor of descriptors) {
+    const target = descriptor.open();
+    try {
+      fingerprints.push(await fingerprintTarget(target, functions));
+    } finally {
+      await target.close();
+    }
   }
+  const json = fingerprints.length === 1 ? fingerprints[0] : fingerprints;
+  writeOutput(request.format === 'json' ? JSON.stringify(json, null, 2) : fingerprints.map(fingerprintTable).join('\n\n'), request.out);
+  return fingerprints.some((fp) => fp.cuts.some((c) => c.behaviour === 'neither' || c.behaviour === 'inconsistent')) ? 1 : 0;
 }

@@ -1,12 +1,15 @@
 import { z } from 'zod';
 
 /**
- * The input of `sheetkeeper fingerprint` (flags as strings): which target, optionally which
+ * The input of `sheetkeeper fingerprint` (flags as strings): which targets (comma-separated), optionally which
  * functions (comma-separated labels as the fingerprint names them, "sqrt,pow(z, 1/2),log"), and
  * how to write the result.
  */
 export const fingerprintRequest = z.strictObject({
-  target: z.string({ error: 'is required (NAME@VERSION as `sheetkeeper targets` lists it)' }).min(1),
+  target: z
+    .string({ error: 'is required (NAME@VERSION as `sheetkeeper targets` lists it)' })
+    .transform((s) => s.split(',').map((x) => x.trim()).filter(Boolean))
+    .refine((list) => list.length > 0, { error: 'names no target' }),
   fn: z
     .string()
     .transform((s) => s.split(/,(?![^(]*\))/).map((x) => x.trim()).filter(Boolean))

@@ -25,6 +25,14 @@ describe('fingerprintCommand', () => {
     expect(text).toMatch(/pow\(z, 1\/2\)\s+\(-inf, 0\]\s+signed-zero/);
   }, 20_000);
 
+  it('fingerprints several targets named with commas into one JSON array', async () => {
+    const out = file('two.json');
+    expect(await fingerprintCommand(['--target', `complex.js@2.4.3,${findCmath()}`, '--fn', 'sqrt', '--format', 'json', '--out', out])).toBe(0);
+    const fps = JSON.parse(readFileSync(out, 'utf8'));
+    // complex.js's sqrt alone is counter-clockwise (no other function on its cut is asked for here); cmath's is signed-zero.
+    expect(fps.map((fp: { target: string; cuts: { behaviour: string }[] }) => fp.cuts[0]!.behaviour)).toEqual(['counter-clockwise', 'signed-zero']);
+  }, 20_000);
+
   it('refuses an unknown function, format or flag as bad input', async () => {
     await expect(fingerprintCommand(['--target', 'complex.js@2.4.3', '--fn', 'sin'])).rejects.toThrow(BadInput);
     await expect(fingerprintCommand(['--target', 'complex.js@2.4.3', '--format', 'svg'])).rejects.toThrow(/--format: must be json or table/);
