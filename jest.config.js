@@ -12,6 +12,7 @@ module.exports = {
       transform: { '\\.[jt]sx?$': 'babel-jest' },
       setupFiles: ['<rootDir>/tests/setup/node-setup.ts'],
       globalSetup: '<rootDir>/tests/setup/global-setup.ts',
+      globalTeardown: '<rootDir>/tests/setup/global-teardown.ts',
     },
     {
       displayName: 'web',

@@ -4,7 +4,7 @@ import { createDataSource } from '../../server/data-source';
 import { seedDemo } from '../../server/seed/seed-demo';
 import { syncTargets } from '../../server/services/sync-targets';
 import { pgBaseUrl } from './pg-base-url';
-import { TEMPLATE_DATABASE } from './template-database';
+import { templateDatabase } from './template-database';
 
 /**
  * Builds the template database once per jest run: migrated with the real
@@ -12,15 +12,17 @@ import { TEMPLATE_DATABASE } from './template-database';
  * discovery run once, not per file). Suites and plans are left to each test.
  */
 export default async function globalSetup(): Promise<void> {
+  process.env.SHEETKEEPER_TEST_TEMPLATE = `sheetkeeper_template_${process.pid}`;
+  const template = templateDatabase();
   const admin = new Client({ connectionString: `${pgBaseUrl()}/postgres` });
   await admin.connect();
   try {
-    await admin.query(`DROP DATABASE IF EXISTS ${TEMPLATE_DATABASE} WITH (FORCE)`);
-    await admin.query(`CREATE DATABASE ${TEMPLATE_DATABASE}`);
+    await admin.query(`DROP DATABASE IF EXISTS ${template} WITH (FORCE)`);
+    await admin.query(`CREATE DATABASE ${template}`);
   } finally {
     await admin.end();
   }
-  const dataSource = createDataSource(`${pgBaseUrl()}/${TEMPLATE_DATABASE}`);
+  const dataSource = createDataSource(`${pgBaseUrl()}/${template}`);
   await dataSource.initialize();
   try {
     await dataSource.runMigrations({ transaction: 'each' });

@@ -4,7 +4,7 @@ import { Client } from 'pg';
 import type { DataSource } from 'typeorm';
 import { createDataSource } from '../../server/data-source';
 import { pgBaseUrl } from './pg-base-url';
-import { TEMPLATE_DATABASE } from './template-database';
+import { templateDatabase } from './template-database';
 
 export interface TestDatabase {
   url: string;
@@ -28,7 +28,7 @@ async function withAdmin<T>(work: (client: Client) => Promise<T>): Promise<T> {
  */
 export async function createTestDatabase(options: { empty?: boolean } = {}): Promise<TestDatabase> {
   const name = `sheetkeeper_t_${randomBytes(5).toString('hex')}`;
-  await withAdmin((c) => c.query(options.empty ? `CREATE DATABASE ${name}` : `CREATE DATABASE ${name} TEMPLATE ${TEMPLATE_DATABASE}`));
+  await withAdmin((c) => c.query(options.empty ? `CREATE DATABASE ${name}` : `CREATE DATABASE ${name} TEMPLATE ${templateDatabase()}`));
   const url = `${pgBaseUrl()}/${name}`;
   const dataSource = createDataSource(url);
   await dataSource.initialize();
