@@ -65,9 +65,14 @@ export async function checkProperty(check: PropertyCheck, subject: PropertySubje
     // fast-check gives up without a counterexample when nearly every drawn point is excluded.
     reason = `no verdict: ${details.numSkips} of the drawn points were excluded by the law (too many to reach ${check.runs} runs)`;
   } else {
-    const finding = await law.check(ctx, counterexample);
-    reason = finding?.reason ?? 'failed when drawn, held when checked again (the library is not deterministic)';
-    values = (finding?.values ?? []).map((v) => ({ name: v.name, value: wire(v.value) }));
+    try {
+      const finding = await law.check(ctx, counterexample);
+      reason = finding?.reason ?? 'failed when drawn, held when checked again (the library is not deterministic)';
+      values = (finding?.values ?? []).map((v) => ({ name: v.name, value: wire(v.value) }));
+    } catch (e) {
+      // A target that throws instead of answering an error result; fast-check shrank on the throw.
+      reason = `the check threw: ${e instanceof Error ? e.message : String(e)}`;
+    }
   }
   return {
     kind: 'failed',

@@ -207,6 +207,12 @@ describe('checkProperty', () => {
       expect(o).toMatchObject({ kind: 'not-checked', reason: expect.stringContaining('not known') });
     });
 
+    it('records a target that throws as a failure with the thrown message, shrunk like any other, seed 5', async () => {
+      const throwing: Target = { ...referenceTarget('signed-zero'), evaluate: async () => Promise.reject(new Error('adapter crashed')) };
+      const o = await run('sqrt(z)', 'signed-zero', { law: 'range', region: DISC, runs: 20, seed: 5 }, throwing);
+      expect(o).toMatchObject({ kind: 'failed', reason: 'the check threw: adapter crashed', seed: 5 });
+    });
+
     it('says which operation a target lacks', async () => {
       const lacking: Target = { ...referenceTarget('signed-zero'), name: 'no-cbrt', supports: async (op) => op !== 'cbrt' };
       const o = await run('cbrt(z)', 'signed-zero', { law: 'range', region: DISC, runs: 10, seed: 1 }, lacking);
