@@ -2,10 +2,7 @@ import type { ComplexString } from './schemas/complex-string';
 import type { PropertyCheck } from './schemas/property-check-schema';
 
 /** A library value named as in the law's formula ("f(z)", "log(z1*z2)"), on the wire. */
-export interface NamedValue {
-  name: string;
-  value: ComplexString;
-}
+type NamedValue = { name: string; value: ComplexString };
 
 /**
  * The outcome of one property check of a suite against a target (DESIGN.md §4). Every kind

@@ -1,14 +1,11 @@
 import fc from 'fast-check';
-import type { NamedValue, PropertyOutcome } from '../../shared/property-outcome';
-import type { Convention } from '../../shared/schemas/convention-schema';
+import type { PropertyOutcome } from '../../shared/property-outcome';
 import type { PropertyCheck } from '../../shared/schemas/property-check-schema';
-import type { Tolerance } from '../../shared/schemas/tolerance-schema';
 import type { ComplexPair } from '../adapters/complex-pair';
 import type { Target } from '../adapters/target';
-import type { PlaneCut } from '../cuts/plane-cut';
-import type { SubjectExpr } from '../expressions/subject-expr';
 import { formatDouble } from '../reference/numbers/format-double';
 import { subjectProgram } from '../runner/subject-program';
+import type { PropertySubject } from './property-subject';
 import type { LawContext } from './law-context';
 import { PROPERTY_LAW_CHECKS } from './property-laws';
 import { propertyTitle } from './property-title';
@@ -16,14 +13,6 @@ import { regionArbitrary } from './region-arbitrary';
 
 const wire = ([re, im]: ComplexPair) => ({ re: formatDouble(re), im: formatDouble(im) });
 
-/** What a property check runs on: the suite's subject (text and parsed), its expected cuts, convention and property tolerance. */
-export interface PropertySubject {
-  text: string;
-  expr: SubjectExpr;
-  cuts: readonly PlaneCut[] | null;
-  convention: Convention;
-  tolerance: Tolerance;
-}
 
 /**
  * Runs one property check against a target with fast-check: points drawn from the check's
@@ -60,7 +49,7 @@ export async function checkProperty(check: PropertyCheck, subject: PropertySubje
   }
   const counterexample = (details.counterexample?.[0] ?? []) as ComplexPair[];
   let reason: string;
-  let values: NamedValue[] = [];
+  let values: Extract<PropertyOutcome, { kind: 'failed' }>['values'] = [];
   if (details.counterexample === null) {
     // fast-check gives up without a counterexample when nearly every drawn point is excluded.
     reason = `no verdict: ${details.numSkips} of the drawn points were excluded by the law (too many to reach ${check.runs} runs)`;
