@@ -17,6 +17,7 @@ import { outboxRouter } from './routes/outbox-router';
 import { plansRouter } from './routes/plans-router';
 import { runsRouter } from './routes/runs-router';
 import { schedulesRouter } from './routes/schedules-router';
+import { subscriptionsRouter } from './routes/subscriptions-router';
 import { suitesRouter } from './routes/suites-router';
 import { targetsRouter } from './routes/targets-router';
 import { tokensRouter } from './routes/tokens-router';
@@ -102,6 +103,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   api.use('/failures', failuresRouter(options.dataSource));
   api.use('/deviations', deviationsRouter(options.dataSource));
   api.use('/tokens', tokensRouter(options.dataSource));
+  api.use('/subscriptions', subscriptionsRouter(options.dataSource));
   api.use((_req, res) => {
     res.status(404).json({ kind: 'not-found', message: 'No such API route.' } satisfies ApiError);
   });

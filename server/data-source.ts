@@ -9,6 +9,7 @@ import { Plan } from './entities/plan';
 import { Schedule } from './entities/schedule';
 import { ScheduleFiring } from './entities/schedule-firing';
 import { Shard } from './entities/shard';
+import { Subscription } from './entities/subscription';
 import { Target } from './entities/target';
 import { ReceivedMail } from './entities/received-mail';
 import { Run } from './entities/run';
@@ -22,10 +23,11 @@ import { TargetsPlansSchedules1764720000000 } from './migrations/1764720000000-t
 import { RunsShardsFailures1764730000000 } from './migrations/1764730000000-runs-shards-failures';
 import { Deviations1764740000000 } from './migrations/1764740000000-deviations';
 import { ApiTokens1764750000000 } from './migrations/1764750000000-api-tokens';
+import { Subscriptions1764760000000 } from './migrations/1764760000000-subscriptions';
 
 /** Entities and migrations are listed, not globbed, so tsx, jest and tsc builds all find them. */
-export const ENTITIES = [User, Suite, SuiteVersion, OutboxMail, ReceivedMail, Target, Plan, Schedule, ScheduleFiring, Run, Shard, Failure, PathSummary, Deviation, ApiToken];
-export const MIGRATIONS = [UsersSessionsSignInLimits1764626400000, SuitesAndVersions1764700000000, MailOutboxAndReceivedMail1764710000000, TargetsPlansSchedules1764720000000, RunsShardsFailures1764730000000, Deviations1764740000000, ApiTokens1764750000000];
+export const ENTITIES = [User, Suite, SuiteVersion, OutboxMail, ReceivedMail, Target, Plan, Schedule, ScheduleFiring, Run, Shard, Failure, PathSummary, Deviation, ApiToken, Subscription];
+export const MIGRATIONS = [UsersSessionsSignInLimits1764626400000, SuitesAndVersions1764700000000, MailOutboxAndReceivedMail1764710000000, TargetsPlansSchedules1764720000000, RunsShardsFailures1764730000000, Deviations1764740000000, ApiTokens1764750000000, Subscriptions1764760000000];
 
 export function createDataSource(url: string): DataSource {
   return new DataSource({

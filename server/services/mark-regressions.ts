@@ -12,8 +12,8 @@ const KEY = targetKeySql;
  * Completes a run: marks as regressions the failing points that passed in the previous
  * completed run of the same plan — the same suite, path and input bits, on the same target
  * up to its version, on a path that run evaluated without a path error, and not covered by an
- * unexpired accepted deviation — and queues one mail to the plan's recipients when there are
- * any. Runs inside the caller's transaction.
+ * unexpired accepted deviation — and queues one mail to the plan's recipients and the
+ * subscribers of the libraries that regressed, when there are any. Runs inside the caller's transaction.
  */
 export async function markRegressions(tx: EntityManager, runId: string, mail: { outbox: MailOutbox; appUrl: string }): Promise<number> {
   const run = await tx.getRepository(Run).findOneOrFail({ where: { id: runId }, relations: { plan: true } });
@@ -43,7 +43,17 @@ export async function markRegressions(tx: EntityManager, runId: string, mail: { 
     count = marked.n;
   }
   await tx.getRepository(Run).update(run.id, { status: 'completed', finishedAt: new Date(), regressions: count });
-  if (count > 0 && run.plan && run.plan.recipients.length > 0) {
+  // The plan's recipients, and everyone subscribed to a library that regressed.
+  const subscribers: { email: string }[] =
+    count > 0
+      ? await tx.query(
+          `SELECT DISTINCT u.email FROM subscriptions s JOIN users u ON u.id = s.user_id
+            WHERE s.target_key IN (SELECT DISTINCT ${KEY('target_name')} FROM failures WHERE run_id = $1 AND is_regression)`,
+          [run.id],
+        )
+      : [];
+  const recipients = [...new Set([...(run.plan?.recipients ?? []), ...subscribers.map((s) => s.email)])];
+  if (count > 0 && recipients.length > 0) {
     const rows: RegressionRow[] = (
       await tx.query(
         `SELECT id::text, suite_slug, target_name, path_name, z, z_hex, expected, actual, diagnosis, rule, reproducer
@@ -71,7 +81,7 @@ export async function markRegressions(tx: EntityManager, runId: string, mail: { 
           [run.id, previous.id],
         )
       : [];
-    await mail.outbox.enqueue(regressionMail({ recipients: run.plan.recipients, planName: run.planName, runId: run.id, appUrl: mail.appUrl, rows, total: count, versionChanges }), tx);
+    await mail.outbox.enqueue(regressionMail({ recipients, planName: run.planName, runId: run.id, appUrl: mail.appUrl, rows, total: count, versionChanges }), tx);
   }
   return count;
 }

@@ -201,6 +201,8 @@ const ROUTES: RouteCase[] = [
     },
     expect: signedIn(200),
   },
+  { name: 'GET /api/subscriptions', call: (a) => a.get('/api/subscriptions'), expect: signedIn(200) },
+  { name: 'PUT /api/subscriptions', call: (a) => a.put('/api/subscriptions').send({ targetKeys: ['complex.js'] }), expect: signedIn(200) },
   { name: 'GET /api/unknown-route', call: (a) => a.get('/api/unknown-route'), expect: all(404) },
   { name: 'POST /api/auth/sign-out', ownSession: true, call: (a) => a.post('/api/auth/sign-out'), expect: all(204) },
 ];

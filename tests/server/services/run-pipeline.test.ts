@@ -87,6 +87,8 @@ describe('a plan run through the queue, with regressions and their mail', () => 
 
   it('reports what version 2 broke as regressions with a version change, in exactly one mail', async () => {
     await new PlanService(db.dataSource).save(kwame, { name: 'fakelib nightly', description: '', recipients: ['kwame@sheetkeeper.test'], suites: ['run-sqrt', 'run-log'], targets: ['fakelib@2'] }, planId);
+    // Hanne is not on the plan, but subscribes to the library.
+    await db.dataSource.query(`INSERT INTO subscriptions (user_id, target_key) SELECT id, 'fakelib' FROM users WHERE email = 'hanne@sheetkeeper.test'`);
     const second = await finished((await runs.start(planId, 'manual', kwame)).id);
     expect(second.status).toBe('completed');
     expect(second.regressions).toBeGreaterThan(0);
@@ -100,6 +102,7 @@ describe('a plan run through the queue, with regressions and their mail', () => 
     await outbox.deliverDue();
     const mails = await db.dataSource.getRepository(ReceivedMail).find();
     expect(mails).toHaveLength(1);
+    expect([...mails[0]!.envelopeTo].sort()).toEqual(['hanne@sheetkeeper.test', 'kwame@sheetkeeper.test']);
     expect(mails[0]!.subject).toBe(`[Sheetkeeper] ${second.regressions} regressions in fakelib nightly`);
     expect(mails[0]!.textBody).toContain('fakelib: 1 → 2');
     expect(mails[0]!.htmlBody).toContain('open case');
