@@ -1,4 +1,6 @@
+import { spawnSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
+import path from 'node:path';
 import { BadInput } from '../../../harness/command-support/bad-input';
 import { cutmapCommand } from '../../../harness/cutmap/cutmap-command';
 import { tempFolder } from '../support/temp-folder';
@@ -26,5 +28,11 @@ describe('cutmapCommand', () => {
     await expect(cutmapCommand([...base, '--format', 'png'])).rejects.toThrow(/--format/);
     await expect(cutmapCommand(['--target', 'complex.js@2.4.3', '--fn', 'sin'])).rejects.toThrow(BadInput);
     await expect(cutmapCommand(['--target', 'complex.js@2.4.3', '--fn', 'cbrt'])).rejects.toThrow(/has no cbrt/);
+  });
+
+  it('exits 2 through the sheetkeeper command for bad input', () => {
+    const run = spawnSync(process.execPath, [path.join(__dirname, '..', '..', '..', 'bin', 'sheetkeeper.mjs'), ...['cutmap', '--target', 'complex.js@2.4.3', '--fn', 'sqrt', '--box', '4,4,-4,-4']], { encoding: 'utf8', timeout: 60_000 });
+    expect(run.status).toBe(2);
+    expect(run.stderr).toContain('--box: needs re0 < re1');
   });
 });

@@ -1,4 +1,6 @@
+import { spawnSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
+import path from 'node:path';
 import { matrixCommand } from '../../../harness/matrix/matrix-command';
 import { tempFolder } from '../support/temp-folder';
 
@@ -23,5 +25,11 @@ describe('matrixCommand', () => {
     await expect(matrixCommand(['--suite', 'sqrt-principal-sz', '--library', 'js-math'])).rejects.toThrow(/1 installed version/);
     await expect(matrixCommand(['--suite', 'no-such-suite', '--library', 'complex.js'])).rejects.toThrow(/no-such-suite/);
     await expect(matrixCommand(['--library', 'complex.js'])).rejects.toThrow(/--suite/);
+  });
+
+  it('exits 2 through the sheetkeeper command for bad input', () => {
+    const run = spawnSync(process.execPath, [path.join(__dirname, '..', '..', '..', 'bin', 'sheetkeeper.mjs'), ...['matrix', '--suite', 'sqrt-principal-sz', '--library', 'numpy']], { encoding: 'utf8', timeout: 60_000 });
+    expect(run.status).toBe(2);
+    expect(run.stderr).toContain('"numpy" has 0 installed version(s)');
   });
 });
