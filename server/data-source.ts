@@ -11,6 +11,7 @@ import { ScheduleFiring } from './entities/schedule-firing';
 import { Shard } from './entities/shard';
 import { Subscription } from './entities/subscription';
 import { Target } from './entities/target';
+import { Upload } from './entities/upload';
 import { ReceivedMail } from './entities/received-mail';
 import { Run } from './entities/run';
 import { Suite } from './entities/suite';
@@ -24,10 +25,11 @@ import { RunsShardsFailures1764730000000 } from './migrations/1764730000000-runs
 import { Deviations1764740000000 } from './migrations/1764740000000-deviations';
 import { ApiTokens1764750000000 } from './migrations/1764750000000-api-tokens';
 import { Subscriptions1764760000000 } from './migrations/1764760000000-subscriptions';
+import { Uploads1764770000000 } from './migrations/1764770000000-uploads';
 
 /** Entities and migrations are listed, not globbed, so tsx, jest and tsc builds all find them. */
-export const ENTITIES = [User, Suite, SuiteVersion, OutboxMail, ReceivedMail, Target, Plan, Schedule, ScheduleFiring, Run, Shard, Failure, PathSummary, Deviation, ApiToken, Subscription];
-export const MIGRATIONS = [UsersSessionsSignInLimits1764626400000, SuitesAndVersions1764700000000, MailOutboxAndReceivedMail1764710000000, TargetsPlansSchedules1764720000000, RunsShardsFailures1764730000000, Deviations1764740000000, ApiTokens1764750000000, Subscriptions1764760000000];
+export const ENTITIES = [User, Suite, SuiteVersion, OutboxMail, ReceivedMail, Target, Plan, Schedule, ScheduleFiring, Run, Shard, Failure, PathSummary, Deviation, ApiToken, Subscription, Upload];
+export const MIGRATIONS = [UsersSessionsSignInLimits1764626400000, SuitesAndVersions1764700000000, MailOutboxAndReceivedMail1764710000000, TargetsPlansSchedules1764720000000, RunsShardsFailures1764730000000, Deviations1764740000000, ApiTokens1764750000000, Subscriptions1764760000000, Uploads1764770000000];
 
 export function createDataSource(url: string): DataSource {
   return new DataSource({

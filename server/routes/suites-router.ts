@@ -11,6 +11,9 @@ import { InputError } from '../services/input-error';
 import { parseInput } from '../services/parse-input';
 import { SuiteService } from '../services/suite-service';
 import { validateSuiteInput } from '../services/validate-suite-input';
+import { checkReferenceTable } from '../../harness/suites/check-reference-table';
+import { SuiteVersion } from '../entities/suite-version';
+import { Upload } from '../entities/upload';
 
 /** Suite files are small: the largest demo suite is under 4 KB, so 256 KB leaves room without inviting abuse. */
 const MAX_UPLOAD_BYTES = 256 * 1024;
@@ -25,11 +28,32 @@ const upload = multer({
   },
 });
 
+/** Reference tables: up to 5,000 rows of ~120 bytes. */
+const MAX_TABLE_BYTES = 1024 * 1024;
+
+const tableUpload = multer({
+  storage: multer.memoryStorage(),
+  limits: { fileSize: MAX_TABLE_BYTES, files: 1, fields: 4, parts: 6 },
+  fileFilter: (_req, file, done) => {
+    const csv = ['text/csv', 'application/vnd.ms-excel', 'text/plain'].includes(file.mimetype) || file.originalname.toLowerCase().endsWith('.csv');
+    if (csv) done(null, true);
+    else done(new HttpError(415, { kind: 'unsupported-media-type', message: 'A reference table must be CSV (.csv).' }));
+  },
+});
+
 /** multer's own errors are the client's: too large is 413, the rest 400 naming the rule. */
 function receiveFile(req: Request, res: Response, next: NextFunction): void {
-  upload.single('file')(req, res, (err: unknown) => {
+  receiveWith(upload, MAX_UPLOAD_BYTES, req, res, next);
+}
+
+function receiveTable(req: Request, res: Response, next: NextFunction): void {
+  receiveWith(tableUpload, MAX_TABLE_BYTES, req, res, next);
+}
+
+function receiveWith(m: multer.Multer, maxBytes: number, req: Request, res: Response, next: NextFunction): void {
+  m.single('file')(req, res, (err: unknown) => {
     if (err instanceof multer.MulterError) {
-      if (err.code === 'LIMIT_FILE_SIZE') return next(new HttpError(413, { kind: 'payload-too-large', message: `A suite file may be at most ${MAX_UPLOAD_BYTES / 1024} KB.` }));
+      if (err.code === 'LIMIT_FILE_SIZE') return next(new HttpError(413, { kind: 'payload-too-large', message: `The file may be at most ${maxBytes / 1024} KB.` }));
       return next(new InputError([{ field: err.field ?? 'file', rule: err.message.toLowerCase() }]));
     }
     next(err);
@@ -75,7 +99,20 @@ export function suitesRouter(dataSource: DataSource): Router {
     }
     const body = validateSuiteInput(data, 'file', file.originalname);
     const { created, view } = await suites.save(req.user!, body, 'upsert');
+    await dataSource.getRepository(Upload).save({ kind: 'suite-file', suiteVersion: { id: view.id }, filename: file.originalname, bytes: file.size, summary: { slug: view.slug, version: view.version, created }, uploadedBy: req.user! });
     res.status(created ? 201 : 200).json({ version: view });
+  });
+
+  /** A CSV of reference values computed elsewhere, checked against our reference for the suite's latest version. */
+  router.post('/:slug/reference-table', anyone, receiveTable, async (req, res) => {
+    const { slug } = parseInput(suiteSlugParams, req.params, 'params');
+    const file = req.file;
+    if (!file) throw new InputError([{ field: 'file', rule: 'is required (a .csv table in the field "file")' }]);
+    const version = await dataSource.getRepository(SuiteVersion).findOne({ where: { suite: { slug } }, order: { version: 'DESC' } });
+    if (!version) throw new HttpError(404, { kind: 'not-found', message: `No suite with the id "${slug}".` });
+    const check = checkReferenceTable(version.body, file.buffer.toString('utf8'));
+    await dataSource.getRepository(Upload).save({ kind: 'reference-table', suiteVersion: version, filename: file.originalname, bytes: file.size, summary: { ...check }, uploadedBy: req.user! });
+    res.json({ suite: slug, version: version.version, check });
   });
 
   router.post('/:slug/submit', anyone, async (req, res) => {

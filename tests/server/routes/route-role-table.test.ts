@@ -110,6 +110,11 @@ const ROUTES: RouteCase[] = [
     expect: signedIn(201),
   },
   {
+    name: 'POST /api/suites/:slug/reference-table',
+    call: async (a) => a.post(`/api/suites/${await freshSuite('draft')}/reference-table`).attach('file', Buffer.from('z_re,z_im,expected_re,expected_im,source\n4,0,2,0,x\n'), 'table.csv'),
+    expect: signedIn(200),
+  },
+  {
     name: "POST /api/suites/:slug/submit (someone else's draft)",
     call: async (a) => a.post(`/api/suites/${await freshSuite('draft')}/submit`),
     expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 },

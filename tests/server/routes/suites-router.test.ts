@@ -123,3 +123,30 @@ describe('suites routes and review', () => {
     expect((await kwame.post('/api/suites/flow-sqrt/versions/1/retire')).status).toBe(409);
   });
 });
+
+describe('reference tables uploaded for a suite', () => {
+  let t: TestApp;
+  beforeAll(async () => {
+    t = await startTestApp();
+  });
+  afterAll(() => t.stop());
+
+  it('checks each row against the reference and lists the disagreements', async () => {
+    const ravi = await signInAs(t.app, 'contributor');
+    await ravi.post('/api/suites').send(demoSuiteBody('table-sqrt'));
+    // √(−4 − 0i) = 0 − 2i and √(3 + 4i) = 2 + i: ISO/IEC 9899:2011 G.6.4.2 and common practice; the third row is wrong on purpose.
+    const csv = 'z_re,z_im,expected_re,expected_im,source\n-4,-0,0,-2,Annex G\n3,4,2,1,by hand\n-4,-0,0,2,a library that ignores -0\n';
+    const res = await ravi.post('/api/suites/table-sqrt/reference-table').attach('file', Buffer.from(csv), { filename: 'sqrt.csv', contentType: 'text/csv' });
+    expect(res.status).toBe(200);
+    expect(res.body.check).toMatchObject({ rows: 3, agree: 2, invalid: [] });
+    expect(res.body.check.disagreements).toEqual([expect.objectContaining({ line: 4, source: 'a library that ignores -0', ours: { re: '0', im: '-2' } })]);
+    const [stored] = await t.db.dataSource.query(`SELECT kind, filename, bytes FROM uploads WHERE kind = 'reference-table'`);
+    expect(stored).toEqual({ kind: 'reference-table', filename: 'sqrt.csv', bytes: csv.length });
+  });
+
+  it('refuses a table that is not CSV, and one for a suite that does not exist', async () => {
+    const ravi = await signInAs(t.app, 'contributor');
+    expect((await ravi.post('/api/suites/table-sqrt/reference-table').attach('file', Buffer.from('{}'), { filename: 'x.json', contentType: 'application/json' })).status).toBe(415);
+    expect((await ravi.post('/api/suites/no-such-suite/reference-table').attach('file', Buffer.from('z_re\n'), 'x.csv')).status).toBe(404);
+  });
+});

@@ -1,0 +1,73 @@
+import { parse } from 'csv-parse/sync';
+import type { ReferenceTableCheck } from '../../shared/reference-table-check';
+import type { Suite } from '../../shared/schemas/suite-schema';
+import { evaluateSubject } from '../expressions/evaluate-subject';
+import { parseSubject } from '../expressions/parse-subject';
+import { BigComplex } from '../reference/complex/big-complex';
+import { answerContinue } from '../reference/continuation/answer-continue';
+import { formatDouble } from '../reference/numbers/format-double';
+import { parseDouble } from '../reference/numbers/parse-double';
+import { ulpDistance } from '../reference/numbers/ulp-distance';
+
+/** Uploaded tables are for spot checks: 5,000 rows take ~2 s here. */
+export const MAX_REFERENCE_ROWS = 5000;
+const COLUMNS = ['z_re', 'z_im', 'expected_re', 'expected_im', 'source'];
+
+/**
+ * Checks a CSV of reference values computed elsewhere (`z_re, z_im, expected_re, expected_im,
+ * source`; numbers as decimals, C hex floats, "-0", "inf", "nan") against our reference for the
+ * suite: the subject's principal value under the suite's convention, or the suite's regular
+ * branch continued from z0 along a straight path with the suite's cuts. Values agree when each
+ * part is within 1 ulp and zero signs match.
+ */
+export function checkReferenceTable(suite: Suite, csv: string): ReferenceTableCheck {
+  let records: Record<string, string>[];
+  try {
+    records = parse(csv, { columns: true, skip_empty_lines: true, trim: true, bom: true }) as Record<string, string>[];
+  } catch (e) {
+    return { rows: 0, agree: 0, disagreements: [], invalid: [{ line: 1, reason: `not CSV: ${e instanceof Error ? e.message : String(e)}` }] };
+  }
+  const header = records[0] ? Object.keys(records[0]) : [];
+  const missing = COLUMNS.filter((c) => c !== 'source' && !header.includes(c));
+  if (records.length > 0 && missing.length > 0) return { rows: records.length, agree: 0, disagreements: [], invalid: [{ line: 1, reason: `missing columns: ${missing.join(', ')}` }] };
+  if (records.length > MAX_REFERENCE_ROWS) return { rows: records.length, agree: 0, disagreements: [], invalid: [{ line: 1, reason: `more than ${MAX_REFERENCE_ROWS} rows` }] };
+  const subject = suite.branch.kind === 'principal' ? parseSubject(suite.subject) : null;
+  const result: ReferenceTableCheck = { rows: records.length, agree: 0, disagreements: [], invalid: [] };
+  records.forEach((row, i) => {
+    const line = i + 2;
+    let z: [number, number];
+    let theirs: [number, number];
+    try {
+      z = [parseDouble(row.z_re ?? ''), parseDouble(row.z_im ?? '')];
+      theirs = [parseDouble(row.expected_re ?? ''), parseDouble(row.expected_im ?? '')];
+    } catch (e) {
+      result.invalid.push({ line, reason: e instanceof Error ? e.message : String(e) });
+      return;
+    }
+    let ours: [number, number];
+    if (subject) {
+      ours = evaluateSubject(subject, BigComplex.fromDoubles(z[0], z[1]), suite.convention, { double: true, digits: 0 }).double;
+    } else if (suite.branch.kind === 'regular') {
+      const b = suite.branch;
+      const answer = answerContinue({ g: b.g, nu: b.nu, z0: b.z0, ...(b.f0 ? { f0: b.f0 } : { k: b.k }), path: { kind: 'polyline', points: [b.z0, { re: formatDouble(z[0]), im: formatDouble(z[1]) }] }, at: ['1'], cuts: b.cuts }) as {
+        values?: { f: { re: string; im: string } }[];
+        error?: string;
+      };
+      if (!answer.values) {
+        result.invalid.push({ line, reason: answer.error ?? 'no value there' });
+        return;
+      }
+      ours = [Number(answer.values[0]!.f.re), Number(answer.values[0]!.f.im)];
+    } else {
+      return;
+    }
+    const ulps = Math.max(ulpDistance(theirs[0], ours[0]), ulpDistance(theirs[1], ours[1]));
+    const zeroSigns = theirs.every((x, p) => x !== 0 || ours[p] !== 0 || Object.is(x, -0) === Object.is(ours[p], -0));
+    if (ulps <= 1 && zeroSigns) result.agree += 1;
+    else {
+      const wire = (v: [number, number]) => ({ re: formatDouble(v[0]), im: formatDouble(v[1]) });
+      result.disagreements.push({ line, z: wire(z), theirs: wire(theirs), ours: wire(ours), ulps, source: row.source ?? '' });
+    }
+  });
+  return result;
+}
