@@ -4,8 +4,8 @@ import { objectError } from './object-error';
 
 const cut = z.strictObject(
   {
-    points: z.array(complexString).min(1, { error: 'needs at least one point' }).max(200),
-    /** Continue the last segment's direction to ∞ (a single point with this flag is not allowed). */
+    points: z.array(complexString).min(2, { error: 'needs at least two points' }).max(200),
+    /** Continue the last segment's direction to ∞. */
     to_infinity: z.boolean().default(false),
   },
   { error: objectError },
@@ -29,8 +29,7 @@ const regular = z
     },
     { error: objectError },
   )
-  .refine((b) => (b.f0 === undefined) !== (b.k === undefined), { error: 'give exactly one of f0 and k', path: ['f0'] })
-  .refine((b) => b.cuts.every((c) => c.points.length >= 2 || c.to_infinity), { error: 'a cut of one point must go to infinity', path: ['cuts'] });
+  .refine((b) => (b.f0 === undefined) !== (b.k === undefined), { error: 'give exactly one of f0 and k', path: ['f0'] });
 
 /**
  * What the subject should equal (DESIGN.md §2): the principal branch of every function in it,
