@@ -1,4 +1,5 @@
 import type { ComplexPair } from './complex-pair';
+import { evaluateColumns } from './evaluate-columns';
 import { evaluateEach } from './evaluate-each';
 import { OP_ARITY } from './op-arity';
 import type { Target } from './target';
@@ -42,6 +43,22 @@ export function complexJsTarget(alias: string, version: string): Target {
       if (!has(op)) return calls.map(() => ({ error: `complex.js ${version} has no ${op}` }));
       return evaluateEach(op, calls, (args) => {
         const [z, ...rest] = args.map(make) as [ComplexJsValue, ...ComplexJsValue[]];
+        return (z[op] as (...a: ComplexJsValue[]) => unknown).apply(z, rest);
+      });
+    },
+    evaluateColumns: async (op, args, n, skip) => {
+      if (!has(op)) return evaluateColumns(op, args, n, skip, () => {
+        throw new Error(`complex.js ${version} has no ${op}`);
+      });
+      if (args.length === 1) {
+        // One argument: no array per call.
+        return evaluateColumns(op, args, n, skip, (pairs) => {
+          const z = make(pairs[0] as ComplexPair);
+          return (z[op] as () => unknown).call(z);
+        });
+      }
+      return evaluateColumns(op, args, n, skip, (pairs) => {
+        const [z, ...rest] = pairs.map(make) as [ComplexJsValue, ...ComplexJsValue[]];
         return (z[op] as (...a: ComplexJsValue[]) => unknown).apply(z, rest);
       });
     },

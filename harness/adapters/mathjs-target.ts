@@ -1,4 +1,5 @@
 import type { ComplexPair } from './complex-pair';
+import { evaluateColumns } from './evaluate-columns';
 import { evaluateEach } from './evaluate-each';
 import { OP_ARITY } from './op-arity';
 import type { Target } from './target';
@@ -54,6 +55,17 @@ export function mathjsTarget(alias: string, version: string, entry: 'complex' | 
         const [z, n] = args as [ComplexPair, ComplexPair | undefined];
         if (op === 'nthroot' && n) return fn(argument(z), n[0]);
         return fn(...args.map(argument));
+      });
+    },
+    evaluateColumns: async (op, args, n, skip) => {
+      if (!has(op)) return evaluateColumns(op, args, n, skip, () => {
+        throw new Error(`mathjs ${version} has no ${functionOf(op)}`);
+      });
+      const fn = load()[functionOf(op)] as MathFunction;
+      return evaluateColumns(op, args, n, skip, (pairs) => {
+        const [z, m] = pairs as [ComplexPair, ComplexPair | undefined];
+        if (op === 'nthroot' && m) return fn(argument(z), m[0]);
+        return fn(...pairs.map(argument));
       });
     },
     close: async () => undefined,

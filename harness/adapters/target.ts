@@ -1,4 +1,5 @@
 import type { CallResult } from './call-result';
+import type { ColumnArg, ColumnResult } from './column-args';
 import type { ComplexPair } from './complex-pair';
 import type { TargetInfo } from './target-info';
 
@@ -10,6 +11,12 @@ import type { TargetInfo } from './target-info';
 export interface Target extends TargetInfo {
   supports(op: string): Promise<boolean>;
   evaluate(op: string, calls: ComplexPair[][]): Promise<CallResult[]>;
+  /**
+   * Optional: the same calls column-wise, `n` points, skipping the indices in `skip` (they keep
+   * their error). Same values and errors as `evaluate`; an in-process library answers this way
+   * without an array per call, which keeps the runner's check loop near a bare loop's speed.
+   */
+  evaluateColumns?(op: string, args: ColumnArg[], n: number, skip: ReadonlyMap<number, string>): Promise<ColumnResult>;
   /** Releases what the target holds (a child process); safe to call twice. */
   close(): Promise<void>;
 }

@@ -26,14 +26,16 @@ export function findMisplacedCuts(
   expected: readonly ComplexDouble[],
   actual: readonly ComplexDouble[],
   pointDiagnoses: readonly (Diagnosis | null)[],
+  /** The jumps of both, when the caller has them already (detectJumpsInColumns); then `expected` and `actual` are not read. */
+  jumps?: { expected: ArrayLike<number | boolean>; actual: ArrayLike<number | boolean> },
 ): (Diagnosis | null)[] {
-  const expectedJumps = detectJumps(expected);
-  const actualJumps = detectJumps(actual);
+  const expectedJumps: ArrayLike<number | boolean> = jumps ? jumps.expected : detectJumps(expected);
+  const actualJumps: ArrayLike<number | boolean> = jumps ? jumps.actual : detectJumps(actual);
   const result = [...pointDiagnoses];
   const midT = (i: number) => (t[i]! + t[i + 1]!) / 2;
   const relabel = (from: number, to: number, steps: number[]) => {
-    const libraryStep = steps.find((i) => actualJumps[i]);
-    const expectedStep = steps.find((i) => expectedJumps[i]);
+    const libraryStep = steps.find((i) => Boolean(actualJumps[i]));
+    const expectedStep = steps.find((i) => Boolean(expectedJumps[i]));
     const misplaced: Diagnosis = {
       kind: 'misplaced-cut',
       libraryJumpAt: libraryStep === undefined ? null : midT(libraryStep),
@@ -50,7 +52,7 @@ export function findMisplacedCuts(
     while (end + 1 < result.length && pointDiagnoses[end + 1]) end += 1;
     // Steps touching the run, from the one entering it to the one leaving it, where the two disagree.
     const mismatched: number[] = [];
-    for (let i = Math.max(0, start - 1); i <= Math.min(end, expectedJumps.length - 1); i += 1) if (expectedJumps[i] !== actualJumps[i]) mismatched.push(i);
+    for (let i = Math.max(0, start - 1); i <= Math.min(end, expectedJumps.length - 1); i += 1) if (Boolean(expectedJumps[i]) !== Boolean(actualJumps[i])) mismatched.push(i);
     for (let k = 0; k + 1 < mismatched.length; k += 2) {
       const a = mismatched[k]!;
       const b = mismatched[k + 1]!;

@@ -27,8 +27,17 @@ export async function evaluateProgram(program: SubjectProgram, target: Target, r
       columns.push(step.value);
       continue;
     }
-    const out: ValueColumn = { re: new Float64Array(n), im: new Float64Array(n), errors };
     const args = step.args.map((i) => columns[i] as ValueColumn | ComplexPair);
+    if (target.evaluateColumns && !signal?.aborted) {
+      // In-process libraries answer column-wise: no array per call (bench:harness).
+      const answer = await target.evaluateColumns(step.op, args, n, errors);
+      for (const [i, message] of answer.errors) if (!errors.has(i)) errors.set(i, `${step.op}: ${message}`);
+      const col: ValueColumn = { re: answer.re, im: answer.im, errors };
+      columns.push(col);
+      result = col;
+      continue;
+    }
+    const out: ValueColumn = { re: new Float64Array(n), im: new Float64Array(n), errors };
     const argAt = (a: ValueColumn | ComplexPair, i: number): ComplexPair => (Array.isArray(a) ? (a as ComplexPair) : [(a as ValueColumn).re[i] as number, (a as ValueColumn).im[i] as number]);
     for (let start = 0; start < n; start += BATCH) {
       const end = Math.min(n, start + BATCH);

@@ -120,7 +120,7 @@ export function principalExpectation(suite: Suite, expr: SubjectExpr, cache: Ref
   return {
     zeroSigns: suite.convention === 'signed-zero',
     description: `principal branch of every function, ${suite.convention}`,
-    async expected(_path: SuitePath, points: readonly PathPoint[]): Promise<ExpectedColumn> {
+    expected(_path: SuitePath, points: readonly PathPoint[]): ExpectedColumn {
       const n = points.length;
       const col: ExpectedColumn = { re: new Float64Array(n), im: new Float64Array(n), skipped: new Map() };
       for (let i = 0; i < n; i++) {
@@ -135,7 +135,7 @@ export function principalExpectation(suite: Suite, expr: SubjectExpr, cache: Ref
       }
       return col;
     },
-    async alternatives(path: SuitePath, points: readonly PathPoint[], index: number, expected: ComplexDouble): Promise<PointAlternatives> {
+    alternatives(path: SuitePath, points: readonly PathPoint[], index: number, expected: ComplexDouble): PointAlternatives {
       const p = points[index] as PathPoint;
       const { re, im } = p.z;
       const alt: PointAlternatives = { rule: '' };
@@ -178,7 +178,7 @@ export function principalExpectation(suite: Suite, expr: SubjectExpr, cache: Ref
       alt.rule = rule(p, onCut);
       return alt;
     },
-    async monodromy(): Promise<null> {
+    monodromy(): null {
       return null;
     },
   };

@@ -29,6 +29,11 @@ export class ReferenceCache {
   private pending = new Map<string, number[]>();
   computed = 0;
   cached = 0;
+  /**
+   * Expected values already gathered into columns, by the points array they belong to and the
+   * suite key: checking the same suite against another target reads the column, not the table.
+   */
+  readonly columns = new WeakMap<object, Map<string, unknown>>();
 
   constructor(readonly dir: string | null) {}
 

@@ -281,7 +281,7 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
   return {
     zeroSigns: false,
     description: `${describeBranch}, cut along ${branch.cuts.length} cut(s), ${suite.convention} on the cuts`,
-    async expected(path: SuitePath, points: readonly PathPoint[]): Promise<ExpectedColumn> {
+    expected(path: SuitePath, points: readonly PathPoint[]): ExpectedColumn {
       const n = points.length;
       const col: ExpectedColumn = { re: new Float64Array(n), im: new Float64Array(n), skipped: new Map() };
       let along: (Point | null)[] | null | undefined;
@@ -303,7 +303,7 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
       }
       return col;
     },
-    async alternatives(_path: SuitePath, points: readonly PathPoint[], index: number, expected: ComplexDouble): Promise<PointAlternatives> {
+    alternatives(_path: SuitePath, points: readonly PathPoint[], index: number, expected: ComplexDouble): PointAlternatives {
       const pp = points[index] as PathPoint;
       const p: Point = [pp.z.re, pp.z.im];
       const alt: PointAlternatives = { rule: `${describeBranch}, continued from z0 to z on the plane cut along the layout (DESIGN.md §4)` };
@@ -338,7 +338,7 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
       alt.otherSheets = otherSheets({ kind: 'power', nu: nuD, ks: sheetKs, sign: 1 }, expected);
       return alt;
     },
-    async monodromy(path: SuitePath): Promise<{ factor: ComplexDouble; nu: [number, number] } | null> {
+    monodromy(path: SuitePath): { factor: ComplexDouble; nu: [number, number] } | null {
       let spec: Record<string, unknown> | null = null;
       if (path.kind === 'circle') {
         const turns = parseDouble(path.turns);
