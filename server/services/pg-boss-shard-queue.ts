@@ -8,8 +8,8 @@ export interface PgBossShardQueueOptions {
   expireInSeconds?: number;
   retryLimit?: number;
   pollingIntervalSeconds?: number;
-  /** How often pg-boss looks for expired jobs. */
-  monitorStateIntervalSeconds?: number;
+  /** How often pg-boss gives expired jobs (dead workers' shards) back to the queue; one process does it per interval. */
+  maintenanceIntervalSeconds?: number;
 }
 
 /**
@@ -28,8 +28,7 @@ export class PgBossShardQueue implements ShardQueue {
     this.boss = new PgBoss({
       connectionString,
       max: 4,
-      monitorStateIntervalSeconds: options.monitorStateIntervalSeconds ?? 10,
-      maintenanceIntervalSeconds: 60,
+      maintenanceIntervalSeconds: options.maintenanceIntervalSeconds ?? 30,
     });
     this.boss.on('error', (err) => console.error('[sheetkeeper] queue error', err));
   }

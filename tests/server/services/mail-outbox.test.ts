@@ -62,7 +62,9 @@ describe('the mail outbox and the local SMTP server', () => {
     const other = new MailOutbox(db.dataSource, { host: '127.0.0.1', port });
     const [a, b] = await Promise.all([outbox.deliverDue(), other.deliverDue()]);
     other.close();
-    expect(a.sent + b.sent).toBe(6);
+    // Each mail is taken by exactly one deliverer; one that timed out on a loaded machine is retried below, not resent.
+    expect(a.sent + b.sent + a.failed + b.failed).toBe(6);
+    await outbox.deliverDue(new Date(Date.now() + 3_600_000));
     const subjects = (await received()).map((m) => m.subject).sort();
     expect(subjects).toEqual(['mail 0', 'mail 1', 'mail 2', 'mail 3', 'mail 4', 'mail 5']);
   });
