@@ -1,0 +1,149 @@
+import 'reflect-metadata';
+import { Client } from 'pg';
+import { performance } from 'node:perf_hooks';
+import type { AddressInfo } from 'node:net';
+import request from 'supertest';
+import { createApp } from '../server/create-app';
+import { createDataSource } from '../server/data-source';
+import { Plan } from '../server/entities/plan';
+import { User } from '../server/entities/user';
+import { seedDemo } from '../server/seed/seed-demo';
+import { seedDemoCatalogue } from '../server/seed/seed-demo-catalogue';
+import { FakeSmtpServer } from '../server/services/fake-smtp-server';
+import { MailOutbox } from '../server/services/mail-outbox';
+import { openInstalledTarget } from '../server/services/open-installed-target';
+import { PgBossShardQueue } from '../server/services/pg-boss-shard-queue';
+import { RunService } from '../server/services/run-service';
+import { ShardExecutor } from '../server/services/shard-executor';
+import { syncTargets } from '../server/services/sync-targets';
+import { databaseUrl } from '../server/config';
+
+/**
+ * `npm run bench:server`: on a fresh database of its own (dropped at the end),
+ *  1. the demo nightly plan end to end: queue → two in-process workers → stored → mail;
+ *  2. bytes stored per run of that plan, and a year of nightly runs projected;
+ *  3. the failure-table endpoint under 50 concurrent clients over ≥ 1,000,000 stored failing
+ *     points (generated in SQL), p50/p95/p99 latency.
+ * Bounded: 1,000 table requests in all; every server listens on 127.0.0.1.
+ */
+const DB = 'sheetkeeper_bench';
+const FAILURE_ROWS = Number(process.env.BENCH_FAILURES ?? 1_000_000);
+const CONCURRENCY = 50;
+const REQUESTS = 1000;
+
+async function main(): Promise<void> {
+  const base = databaseUrl().replace(/\/[^/]+$/, '');
+  const admin = new Client({ connectionString: `${base}/postgres` });
+  await admin.connect();
+  await admin.query(`DROP DATABASE IF EXISTS ${DB} WITH (FORCE)`);
+  await admin.query(`CREATE DATABASE ${DB}`);
+  const url = `${base}/${DB}`;
+  const dataSource = createDataSource(url);
+  await dataSource.initialize();
+  const smtp = new FakeSmtpServer(dataSource);
+  const queue = new PgBossShardQueue(url, { pollingIntervalSeconds: 0.25 });
+  try {
+    await dataSource.runMigrations({ transaction: 'each' });
+    await seedDemo(dataSource);
+    await syncTargets(dataSource);
+    await seedDemoCatalogue(dataSource);
+    const smtpPort = await smtp.start(0);
+    const outbox = new MailOutbox(dataSource, { host: '127.0.0.1', port: smtpPort });
+    const executor = new ShardExecutor(dataSource, { openTarget: openInstalledTarget, outbox, appUrl: 'http://127.0.0.1:8460' });
+    await queue.work((id) => executor.execute(id));
+    await queue.work((id) => executor.execute(id));
+    const runs = new RunService(dataSource, queue);
+    const plan = await dataSource.getRepository(Plan).findOneByOrFail({ name: 'complex.js nightly' });
+    const kwame = await dataSource.getRepository(User).findOneByOrFail({ email: 'kwame@sheetkeeper.test' });
+
+    // 1. End to end, twice: the second run has a previous one to compare with (regressions, mail).
+    const timings: number[] = [];
+    let last = '';
+    for (let i = 0; i < 2; i += 1) {
+      const began = performance.now();
+      const run = await runs.start(plan.id, 'manual', kwame);
+      for (;;) {
+        const view = await runs.get(run.id);
+        if (view.status !== 'queued' && view.status !== 'running') break;
+        await new Promise((r) => setTimeout(r, 100));
+      }
+      await outbox.deliverDue();
+      timings.push(performance.now() - began);
+      last = run.id;
+    }
+    const view = await runs.get(last);
+    console.log(`demo nightly plan "${plan.name}": ${view.shardsTotal} shards, ${view.counts.pass + view.counts.fail + view.counts.error + view.counts.skipped} points; end to end ${timings.map((t) => `${(t / 1000).toFixed(1)} s`).join(' and ')} (cold, then warm reference cache)`);
+
+    // 2. Bytes per run.
+    const [bytes] = await dataSource.query(
+      `SELECT (SELECT coalesce(sum(pg_column_size(f.*)), 0) FROM failures f WHERE run_id = $1)
+            + (SELECT coalesce(sum(pg_column_size(p.*)), 0) FROM path_summaries p WHERE run_id = $1)
+            + (SELECT coalesce(sum(pg_column_size(s.*)), 0) FROM shards s WHERE run_id = $1) AS bytes,
+              (SELECT count(*) FROM failures WHERE run_id = $1)::int AS failures`,
+      [last],
+    );
+    const perRun = Number(bytes.bytes);
+    console.log(`stored per run: ${(perRun / 1024).toFixed(0)} KiB in row data (${bytes.failures} failing points in full, passing points as path summaries); a year of nightly runs ≈ ${((perRun * 365) / 1024 / 1024).toFixed(0)} MiB before indexes`);
+
+    // 3. The failure table under load, over ≥ 1,000,000 failing points.
+    const [shard] = await dataSource.query(`SELECT id, run_id FROM shards WHERE run_id = $1 LIMIT 1`, [last]);
+    const began = performance.now();
+    await dataSource.query(
+      `INSERT INTO failures (run_id, shard_id, suite_slug, suite_version, target_name, target_library, target_version, convention, path_name, point_index, t, z, z_hex, point_key, outcome_kind, diagnosis_kind, diagnosis, ulps, rule, reproducer, is_regression)
+       SELECT $1, $2, 'bench-' || (g % 40), 1, 'complex.js@2.4.3', 'complex.js', '2.4.3', 'signed-zero', 'path ' || (g % 7), g, (g % 1000) / 1000.0,
+              '{"re":"-4","im":"-0"}', '{"re":"-0x1p+2","im":"-0x0p+0"}', 'bench|' || g,
+              'fail', (ARRAY['other-sheet','cut-side','zero-sign','inaccurate'])[1 + g % 4], '{"kind":"inaccurate","ulps":5,"relativeError":1e-15}', g % 97, 'rule', 'x', g % 50 = 0
+         FROM generate_series(1, $3) AS g`,
+      [shard.run_id, shard.id, FAILURE_ROWS],
+    );
+    await dataSource.query('ANALYZE failures');
+    const [{ total }] = await dataSource.query(`SELECT count(*)::int AS total FROM failures`);
+    console.log(`generated ${FAILURE_ROWS} failing points in ${((performance.now() - began) / 1000).toFixed(1)} s; ${total} stored in all`);
+
+    const { app, close } = createApp({ dataSource, databaseUrl: url, sessionSecret: 'bench', shardQueue: queue });
+    const server = app.listen(0, '127.0.0.1');
+    await new Promise((r) => server.once('listening', r));
+    const port = (server.address() as AddressInfo).port;
+    const agent = request.agent(`http://127.0.0.1:${port}`);
+    await agent.post('/api/auth/sign-in').send({ email: 'kwame@sheetkeeper.test', password: 'kwame-demo-2026' });
+    const queries = [
+      `run=${last}&limit=50`,
+      `run=${last}&diagnosis=zero-sign&limit=50`,
+      `run=${last}&status=new&limit=50`,
+      `run=${last}&suite=bench-7&limit=50`,
+      `run=${last}&diagnosis=inaccurate&sort=ulps&limit=50`,
+      `run=${last}&limit=50&after=500000`,
+    ];
+    const latencies: number[] = [];
+    let next = 0;
+    const client = async () => {
+      while (next < REQUESTS) {
+        const q = queries[next++ % queries.length]!;
+        const t0 = performance.now();
+        const res = await agent.get(`/api/failures?${q}`);
+        latencies.push(performance.now() - t0);
+        if (res.status !== 200) throw new Error(`GET /api/failures?${q} answered ${res.status}`);
+      }
+    };
+    const loadBegan = performance.now();
+    await Promise.all(Array.from({ length: CONCURRENCY }, client));
+    const wall = performance.now() - loadBegan;
+    latencies.sort((a, b) => a - b);
+    const pct = (p: number) => latencies[Math.min(latencies.length - 1, Math.floor((p / 100) * latencies.length))]!.toFixed(1);
+    console.log(`failure table: ${REQUESTS} requests from ${CONCURRENCY} concurrent clients over ${total} failing points: p50 ${pct(50)} ms, p95 ${pct(95)} ms, p99 ${pct(99)} ms (${((REQUESTS / wall) * 1000).toFixed(0)} requests/s)`);
+    server.close();
+    await close();
+    outbox.close();
+  } finally {
+    await queue.stop();
+    await smtp.stop();
+    await dataSource.destroy();
+    await admin.query(`DROP DATABASE IF EXISTS ${DB} WITH (FORCE)`);
+    await admin.end();
+  }
+}
+
+main().catch((err) => {
+  console.error(err);
+  process.exit(1);
+});
