@@ -1,4 +1,6 @@
 import 'reflect-metadata';
+import { execFile } from 'node:child_process';
+import { promisify } from 'node:util';
 import { Client } from 'pg';
 import { performance } from 'node:perf_hooks';
 import type { AddressInfo } from 'node:net';
@@ -41,7 +43,7 @@ async function main(): Promise<void> {
   const dataSource = createDataSource(url);
   await dataSource.initialize();
   const smtp = new FakeSmtpServer(dataSource);
-  const queue = new PgBossShardQueue(url, { pollingIntervalSeconds: 0.25 });
+  const queue = new PgBossShardQueue(url, { pollingIntervalSeconds: 0.5 });
   try {
     await dataSource.runMigrations({ transaction: 'each' });
     await seedDemo(dataSource);
@@ -114,23 +116,30 @@ async function main(): Promise<void> {
       `run=${last}&diagnosis=inaccurate&sort=ulps&limit=50`,
       `run=${last}&limit=50&after=500000`,
     ];
-    const latencies: number[] = [];
-    let next = 0;
-    const client = async () => {
-      while (next < REQUESTS) {
-        const q = queries[next++ % queries.length]!;
+    if (process.env.BENCH_EXPLAIN) {
+      for (const q of queries) {
         const t0 = performance.now();
-        const res = await agent.get(`/api/failures?${q}`);
-        latencies.push(performance.now() - t0);
-        if (res.status !== 200) throw new Error(`GET /api/failures?${q} answered ${res.status}`);
+        await agent.get(`/api/failures?${q}`);
+        console.log(`  ${q.replace(last, 'RUN')}: ${(performance.now() - t0).toFixed(1)} ms alone`);
       }
-    };
-    const loadBegan = performance.now();
-    await Promise.all(Array.from({ length: CONCURRENCY }, client));
-    const wall = performance.now() - loadBegan;
-    latencies.sort((a, b) => a - b);
+    }
+    // The load comes from another process, so the client's own work does not share the server's event loop.
+    const signIn = await fetch(`http://127.0.0.1:${port}/api/auth/sign-in`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'kwame@sheetkeeper.test', password: 'kwame-demo-2026' }) });
+    const cookie = (signIn.headers.get('set-cookie') ?? '').split(';')[0]!;
+    const clientCode = `
+      const [base, cookie, total, concurrency, ...queries] = process.argv.slice(1);
+      const latencies = []; let next = 0; let bad = 0;
+      const one = async () => { while (next < Number(total)) { const q = queries[next++ % queries.length]; const t0 = performance.now();
+        const res = await fetch(base + '/api/failures?' + q, { headers: { cookie } }); await res.arrayBuffer();
+        latencies.push(performance.now() - t0); if (res.status !== 200) bad++; } };
+      const began = performance.now();
+      Promise.all(Array.from({ length: Number(concurrency) }, one)).then(() => console.log(JSON.stringify({ latencies, bad, wall: performance.now() - began })));`;
+    const { stdout } = await promisify(execFile)(process.execPath, ['-e', clientCode, `http://127.0.0.1:${port}`, cookie, String(REQUESTS), String(CONCURRENCY), ...queries], { encoding: 'utf8', maxBuffer: 1 << 24 });
+    const out = JSON.parse(stdout) as { latencies: number[]; bad: number; wall: number };
+    if (out.bad > 0) throw new Error(`${out.bad} requests did not answer 200`);
+    const latencies = out.latencies.sort((a, b) => a - b);
     const pct = (p: number) => latencies[Math.min(latencies.length - 1, Math.floor((p / 100) * latencies.length))]!.toFixed(1);
-    console.log(`failure table: ${REQUESTS} requests from ${CONCURRENCY} concurrent clients over ${total} failing points: p50 ${pct(50)} ms, p95 ${pct(95)} ms, p99 ${pct(99)} ms (${((REQUESTS / wall) * 1000).toFixed(0)} requests/s)`);
+    console.log(`failure table: ${REQUESTS} requests from ${CONCURRENCY} concurrent clients (another process) over ${total} failing points: p50 ${pct(50)} ms, p95 ${pct(95)} ms, p99 ${pct(99)} ms (${((REQUESTS / out.wall) * 1000).toFixed(0)} requests/s)`);
     server.close();
     await close();
     outbox.close();

@@ -12,7 +12,12 @@ import { Shard } from './shard';
 @Entity({ name: 'failures' })
 @Index('failures_run_idx', ['run', 'id'])
 @Index('failures_point_key_idx', ['pointKey'])
-@Index('failures_run_diagnosis_idx', ['run', 'diagnosisKind'])
+@Index('failures_run_diagnosis_idx', ['run', 'diagnosisKind', 'id'])
+@Index('failures_run_suite_idx', ['run', 'suiteSlug', 'id'])
+// Expression and partial indexes TypeORM cannot describe: kept by the migration, skipped by the schema comparison.
+@Index('failures_run_ulps_idx', { synchronize: false })
+@Index('failures_run_diagnosis_ulps_idx', { synchronize: false })
+@Index('failures_run_new_idx', { synchronize: false })
 export class Failure {
   @PrimaryGeneratedColumn('identity', { type: 'bigint', generatedIdentity: 'ALWAYS' })
   id!: string;

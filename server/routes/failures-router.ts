@@ -27,7 +27,7 @@ export function failuresRouter(dataSource: DataSource): Router {
   router.get('/export.csv', anyone, async (req, res) => {
     const q = { ...parseInput(failureQuery, req.query, 'query'), limit: CSV_MAX_ROWS };
     if (!q.run && !q.suite && !q.target) throw new InputError([{ field: 'query', rule: 'needs run, suite or target to export' }]);
-    const { rows } = await searchFailures(dataSource, q);
+    const { rows } = await searchFailures(dataSource, q, true);
     const csv = stringify(
       rows.map((r) => ({
         run: r.runId,
@@ -66,7 +66,7 @@ export function failuresRouter(dataSource: DataSource): Router {
     const id = failureNumber(req.params.id);
     const [row] = await dataSource.query(`SELECT point_key, target_name FROM failures WHERE id = $1`, [id]);
     if (!row) throw new HttpError(404, { kind: 'not-found', message: 'No failure with that number.' });
-    const { rows } = await searchFailures(dataSource, { sort: 'id', limit: 1, after: String(BigInt(id) - 1n) });
+    const { rows } = await searchFailures(dataSource, { sort: 'id', limit: 1, after: String(BigInt(id) - 1n) }, true);
     const history = await dataSource.query(
       `SELECT f.id::text AS "id", f.run_id AS "runId", r.created_at AS "runAt", f.target_name AS "targetName", f.target_version AS "targetVersion",
               f.diagnosis_kind AS "diagnosisKind", f.is_regression AS "isRegression"

@@ -2,6 +2,7 @@ import type { DataSource } from 'typeorm';
 import type { FailureQuery } from '../../shared/schemas/failure-query';
 import { coveredByDeviationSql } from './covered-by-deviation-sql';
 
+/** A row of the table; `rule`, `reproducer` and `limits` only when asked for (the detail and the CSV). */
 export interface FailureRow {
   id: string;
   runId: string;
@@ -21,21 +22,23 @@ export interface FailureRow {
   diagnosis: unknown;
   ulps: number | null;
   relativeError: number | null;
-  rule: string;
-  reproducer: string;
-  limits: unknown;
+  rule?: string;
+  reproducer?: string;
+  limits?: unknown;
   isRegression: boolean;
 }
 
 const COLUMNS = `id::text AS "id", run_id AS "runId", suite_slug AS "suiteSlug", suite_version AS "suiteVersion", target_name AS "targetName",
   convention, path_name AS "pathName", point_index AS "pointIndex", t, label, z, z_hex AS "zHex", expected, actual,
-  outcome_kind AS "outcomeKind", diagnosis, ulps, relative_error AS "relativeError", rule, reproducer, limits, is_regression AS "isRegression"`;
+  outcome_kind AS "outcomeKind", diagnosis, ulps, relative_error AS "relativeError", is_regression AS "isRegression"`;
+/** The long text a page of the table does not show; the detail view and the CSV ask for it. */
+const DETAIL_COLUMNS = `, rule, reproducer, limits`;
 
 /**
  * The failure table: filters become one parameterised WHERE over indexed columns, and pages are
  * keyed (never OFFSET), so page 1,000 costs what page 1 does.
  */
-export async function searchFailures(dataSource: DataSource, q: FailureQuery): Promise<{ rows: FailureRow[]; next: string | null }> {
+export async function searchFailures(dataSource: DataSource, q: FailureQuery, detail = false): Promise<{ rows: FailureRow[]; next: string | null }> {
   const where: string[] = [];
   const params: unknown[] = [];
   const add = (sql: string, value: unknown) => {
@@ -64,7 +67,7 @@ export async function searchFailures(dataSource: DataSource, q: FailureQuery): P
   } else if (q.after) add('id > ?', q.after.split(':')[0]);
   params.push(q.limit);
   const rows: FailureRow[] = await dataSource.query(
-    `SELECT ${COLUMNS} FROM failures f ${where.length ? `WHERE ${where.join(' AND ')}` : ''} ORDER BY ${order} LIMIT $${params.length}`,
+    `SELECT ${COLUMNS}${detail ? DETAIL_COLUMNS : ''} FROM failures f ${where.length ? `WHERE ${where.join(' AND ')}` : ''} ORDER BY ${order} LIMIT $${params.length}`,
     params,
   );
   const last = rows[rows.length - 1];

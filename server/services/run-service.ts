@@ -64,7 +64,8 @@ export class RunService {
   /** Cancels a queued or running run: shards not yet done are skipped; a shard in flight stops at its next path. */
   async cancel(id: string): Promise<RunView> {
     await this.dataSource.transaction(async (tx) => {
-      const run = await tx.getRepository(Run).findOne({ where: { id }, lock: { mode: 'pessimistic_write' } });
+      const [locked] = await tx.query(`SELECT id FROM runs WHERE id = $1 FOR NO KEY UPDATE`, [id]);
+      const run = locked ? await tx.getRepository(Run).findOneBy({ id }) : null;
       if (!run) throw new HttpError(404, { kind: 'not-found', message: 'No run with that id.' });
       if (run.status !== 'queued' && run.status !== 'running') throw new HttpError(409, { kind: 'conflict', message: `The run is ${run.status} already.` });
       await tx.getRepository(Run).update(id, { status: 'cancelled', finishedAt: new Date() });

@@ -47,10 +47,14 @@ export class ShardExecutor {
 
     const result = await this.evaluate(shard);
     await this.dataSource.transaction(async (tx) => {
+      // Run first, then shard, the order cancel uses too. FOR NO KEY UPDATE, because the failure
+      // rows inserted below take KEY SHARE locks on the run: with FOR UPDATE two shards finishing
+      // at once deadlocked (seen in bench:server with two workers).
+      await tx.query(`SELECT id FROM runs WHERE id = $1 FOR NO KEY UPDATE`, [shard.run.id]);
       const locked = await tx.getRepository(Shard).findOne({ where: { id: shardId }, lock: { mode: 'pessimistic_write' } });
       if (!locked || locked.status === 'done' || locked.status === 'cancelled') return;
       await storeResult(tx, shard, result);
-      const run = await tx.getRepository(Run).findOneOrFail({ where: { id: shard.run.id }, lock: { mode: 'pessimistic_write' } });
+      const run = await tx.getRepository(Run).findOneOrFail({ where: { id: shard.run.id } });
       const counts = { ...run.counts };
       for (const k of ['pass', 'fail', 'error', 'skipped'] as const) counts[k] += result.counts[k];
       const shardsDone = run.shardsDone + 1;
