@@ -13,6 +13,10 @@ function pair(r: SuiteTargetResult, maxRows: number): string[] {
   lines.push(`${r.status.toUpperCase().padEnd(9)} ${r.suite.id} v${r.suite.version} × ${r.target.name} — ${counts(r.counts)}${diagnoses(r.byDiagnosis)}`);
   lines.push(`          checked: ${r.checked.branch}; tolerance ${r.checked.tolerance}; ${r.checked.paths} path(s), ${r.checked.points} point(s); properties: ${r.checked.properties.listed.length ? `${r.checked.properties.listed.join(', ')} (${r.checked.properties.note})` : 'none listed'}`);
   for (const e of r.errors) lines.push(`          error: ${e}`);
+  for (const o of r.properties ?? []) {
+    if (o.kind === 'failed') lines.push(`          property FAILED: ${o.title} — ${o.reason ?? ''}`);
+    else if (o.kind === 'not-checked') lines.push(`          property not checked: ${o.title} — ${o.reason ?? ''}`);
+  }
   let shown = 0;
   for (const p of r.paths) {
     const mono = p.monodromy ? `; monodromy ${p.monodromy.pass ? 'ok' : 'FAILS'}: expected ${c(p.monodromy.expected)}, library ${c(p.monodromy.library)}${p.monodromy.note ? ` (${p.monodromy.note})` : ''}` : '';

@@ -16,13 +16,22 @@ afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
 describe('sheetkeeper run', () => {
   it('exits 0 when nothing fails, and says what was checked and that a pass is no certification', () => {
-    // complex.js takes the upper side of (−∞, 0] whatever the zero's sign: counter-clockwise continuity.
-    const r = run(['--suite', 'sqrt-principal-ccw', '--target', 'complex.js@2.4.3']);
+    // Python's cmath follows Annex G (common practice, documented by Python): every point and property of the signed-zero sqrt suite holds.
+    const r = run(['--suite', 'sqrt-principal-sz', '--target', 'cmath']);
     expect(r.stderr).toBe('');
     expect(r.status).toBe(0);
-    expect(r.stdout).toMatch(/^PASS +sqrt-principal-ccw v1 × complex\.js@2\.4\.3 — 154 pass · 0 fail/m);
-    expect(r.stdout).toContain('checked: principal branch of every function, counter-clockwise; tolerance 4 ulps per part; 3 path(s), 154 point(s); properties: conjugate-symmetry, root-power, range');
+    expect(r.stdout).toMatch(/^PASS +sqrt-principal-sz v1 × cmath@[\d.]+ — 154 pass · 0 fail/m);
+    expect(r.stdout).toContain('checked: principal branch of every function, signed-zero; tolerance 4 ulps per part; 3 path(s), 154 point(s); properties: conjugate-symmetry, root-power, range (3 property check(s) run)');
     expect(r.stdout).toContain('it is not a certification');
+  }, 120_000);
+
+  it('exits 1 when a property fails although every point passes, naming the law, its seed and why', () => {
+    // complex.js takes the upper side of (−∞, 0] whatever the zero's sign (counter-clockwise continuity), so every
+    // point passes; but its √(0 − 2e-323i) is 0 − ∞i, and (√z)² = z fails there.
+    const r = run(['--suite', 'sqrt-principal-ccw', '--target', 'complex.js@2.4.3']);
+    expect(r.status).toBe(1);
+    expect(r.stdout).toMatch(/^FAIL +sqrt-principal-ccw v1 × complex\.js@2\.4\.3 — 154 pass · 0 fail/m);
+    expect(r.stdout).toMatch(/property FAILED: root-power: f\(z\)\^2 = g\(z\) .* seed \d+ — f\(z\)\^2 differs from g\(z\)/);
   }, 120_000);
 
   it('exits 1 when a point fails, and writes JSON that names every failure with its diagnosis', () => {
@@ -54,7 +63,9 @@ describe('sheetkeeper run', () => {
       'log-principal-ccw@1 × mathjs@15.2.0/complex',
     ]);
     for (const s of suites) {
-      expect(s.testcase.map((c) => c.name)).toEqual(['straddle cut 1 (straddle, 40 points)', 'around branch point 1 (circle, 65 points)', 'wide circle (circle, 49 points)']);
+      // One testcase per path, then one per property check (titled by its law and seed).
+      expect(s.testcase.slice(0, 3).map((c) => c.name)).toEqual(['straddle cut 1 (straddle, 40 points)', 'around branch point 1 (circle, 65 points)', 'wide circle (circle, 49 points)']);
+      expect(s.testcase.length).toBe(3 + (s.name.startsWith('sqrt') ? 3 : 4));
       expect(s.properties.property.find((p) => p.name === 'disclaimer')!.value).toMatch(/not a certification/);
     }
     const straddle = suites[0]!.testcase[0]!.failure!;
