@@ -6,6 +6,7 @@ import { Failure } from './entities/failure';
 import { OutboxMail } from './entities/outbox-mail';
 import { PathSummary } from './entities/path-summary';
 import { Plan } from './entities/plan';
+import { PropertyResult } from './entities/property-result';
 import { Schedule } from './entities/schedule';
 import { ScheduleFiring } from './entities/schedule-firing';
 import { Shard } from './entities/shard';
@@ -27,10 +28,11 @@ import { ApiTokens1764750000000 } from './migrations/1764750000000-api-tokens';
 import { Subscriptions1764760000000 } from './migrations/1764760000000-subscriptions';
 import { Uploads1764770000000 } from './migrations/1764770000000-uploads';
 import { FailureTableIndexes1764780000000 } from './migrations/1764780000000-failure-table-indexes';
+import { PropertyResults1764790000000 } from './migrations/1764790000000-property-results';
 
 /** Entities and migrations are listed, not globbed, so tsx, jest and tsc builds all find them. */
-export const ENTITIES = [User, Suite, SuiteVersion, OutboxMail, ReceivedMail, Target, Plan, Schedule, ScheduleFiring, Run, Shard, Failure, PathSummary, Deviation, ApiToken, Subscription, Upload];
-export const MIGRATIONS = [UsersSessionsSignInLimits1764626400000, SuitesAndVersions1764700000000, MailOutboxAndReceivedMail1764710000000, TargetsPlansSchedules1764720000000, RunsShardsFailures1764730000000, Deviations1764740000000, ApiTokens1764750000000, Subscriptions1764760000000, Uploads1764770000000, FailureTableIndexes1764780000000];
+export const ENTITIES = [User, Suite, SuiteVersion, OutboxMail, ReceivedMail, Target, Plan, Schedule, ScheduleFiring, Run, Shard, Failure, PathSummary, Deviation, ApiToken, Subscription, Upload, PropertyResult];
+export const MIGRATIONS = [UsersSessionsSignInLimits1764626400000, SuitesAndVersions1764700000000, MailOutboxAndReceivedMail1764710000000, TargetsPlansSchedules1764720000000, RunsShardsFailures1764730000000, Deviations1764740000000, ApiTokens1764750000000, Subscriptions1764760000000, Uploads1764770000000, FailureTableIndexes1764780000000, PropertyResults1764790000000];
 
 export function createDataSource(url: string): DataSource {
   return new DataSource({

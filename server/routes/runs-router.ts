@@ -37,5 +37,15 @@ export function runsRouter(dataSource: DataSource, runs: RunService): Router {
     );
     res.json({ cells });
   });
+  /** The property checks of a run: law, seed, and for failures the replay path and shrunk counterexample. */
+  router.get('/:id/properties', anyone, async (req, res) => {
+    const { id } = parseInput(idParams, req.params, 'params');
+    await runs.get(id);
+    const rows = await dataSource.query(
+      `SELECT s.suite_slug AS "suite", s.target_name AS "target", p.outcome FROM property_results p JOIN shards s ON s.id = p.shard_id WHERE p.run_id = $1 ORDER BY s.suite_slug, s.target_name, p.law`,
+      [id],
+    );
+    res.json({ properties: rows });
+  });
   return router;
 }

@@ -1,10 +1,13 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import type { Target } from '../../harness/adapters/target';
+import { checkSuiteProperties } from '../../harness/properties/check-suite-properties';
 import { evaluateSuite } from '../../harness/runner/evaluate-suite';
 import { ReferenceCache } from '../../harness/runner/reference-cache';
+import type { PropertyOutcome } from '../../shared/property-outcome';
 import type { SuiteTargetResult } from '../../shared/run-result';
 import { Failure } from '../entities/failure';
 import { PathSummary } from '../entities/path-summary';
+import { PropertyResult } from '../entities/property-result';
 import { Run } from '../entities/run';
 import { Shard } from '../entities/shard';
 import type { MailOutbox } from './mail-outbox';
@@ -72,7 +75,14 @@ export class ShardExecutor {
     const controller = new AbortController();
     const timer = setTimeout(() => controller.abort(new Error(`the shard took longer than ${this.options.shardTimeoutMs} ms`)), this.options.shardTimeoutMs ?? 300_000);
     try {
-      return await evaluateSuite(body, target, { cache: this.cache, signal: controller.signal, maxFindings: Number.MAX_SAFE_INTEGER });
+      const result = await evaluateSuite(body, target, { cache: this.cache, signal: controller.signal, maxFindings: Number.MAX_SAFE_INTEGER });
+      if (body.properties.length > 0 && result.status !== 'cancelled') {
+        const outcomes = await checkSuiteProperties(body, target);
+        result.properties = outcomes;
+        result.checked.properties = { listed: body.properties.map((p) => p.law), run: true, note: `${outcomes.length} property check(s) run` };
+        if (result.status === 'pass' && outcomes.some((o) => o.kind === 'failed')) result.status = 'fail';
+      }
+      return result;
     } catch (err) {
       return errorResult(shard, err instanceof Error ? err.message : String(err));
     } finally {
@@ -148,6 +158,11 @@ async function storeResult(tx: EntityManager, shard: Shard, result: SuiteTargetR
         skipped: p.skipped,
         error: p.error ?? null,
       })),
+    );
+  }
+  if (result.properties && result.properties.length > 0) {
+    await tx.getRepository(PropertyResult).insert(
+      (result.properties as PropertyOutcome[]).map((o) => ({ run: { id: shard.run.id }, shard: { id: shard.id }, law: o.law, kind: o.kind, seed: String(o.seed), outcome: o })),
     );
   }
   const outcome = result.status === 'cancelled' ? 'error' : result.status;

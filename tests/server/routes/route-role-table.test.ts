@@ -165,6 +165,7 @@ const ROUTES: RouteCase[] = [
   { name: 'POST /api/runs', call: async (a) => a.post('/api/runs').send({ planId: await freshPlan() }), expect: { 'signed-out': 401, admin: 202, maintainer: 202, reviewer: 403, contributor: 403 } },
   { name: 'GET /api/runs/:id', call: async (a) => a.get(`/api/runs/${await freshRun()}`), expect: signedIn(200) },
   { name: 'GET /api/runs/:id/matrix', call: async (a) => a.get(`/api/runs/${await freshRun()}/matrix`), expect: signedIn(200) },
+  { name: 'GET /api/runs/:id/properties', call: async (a) => a.get(`/api/runs/${await freshRun()}/properties`), expect: signedIn(200) },
   { name: 'POST /api/runs/:id/cancel', call: async (a) => a.post(`/api/runs/${await freshRun()}/cancel`), expect: { 'signed-out': 401, admin: 200, maintainer: 200, reviewer: 403, contributor: 403 } },
   { name: 'GET /api/failures', call: (a) => a.get('/api/failures'), expect: signedIn(200) },
   { name: 'GET /api/failures/export.csv', call: async (a) => a.get(`/api/failures/export.csv?run=${await freshRun()}`), expect: signedIn(200) },

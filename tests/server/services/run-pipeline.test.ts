@@ -83,6 +83,10 @@ describe('a plan run through the queue, with regressions and their mail', () => 
     const [stored] = await db.dataSource.query(`SELECT count(*)::int AS n FROM failures WHERE run_id = $1`, [first.id]);
     expect(stored.n).toBe(first.counts.fail + first.counts.error + first.counts.skipped);
     expect(await db.dataSource.getRepository(ReceivedMail).count()).toBe(0);
+    // The suites' property checks ran too, each stored with its pinned seed (√z lists 3 laws, log 4).
+    const props: { law: string; kind: string; seed: string }[] = await db.dataSource.query(`SELECT law, kind, seed::text FROM property_results WHERE run_id = $1`, [first.id]);
+    expect(props).toHaveLength(7);
+    expect(props.every((p) => /^\d+$/.test(p.seed) && ['held', 'failed', 'not-checked'].includes(p.kind))).toBe(true);
   }, 90_000);
 
   it('reports what version 2 broke as regressions with a version change, in exactly one mail', async () => {
