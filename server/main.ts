@@ -3,6 +3,7 @@ import { loadConfig } from './config';
 import { createApp } from './create-app';
 import { createDataSource } from './data-source';
 import { DEMO_USERS } from './seed/demo-users';
+import { onShutdown } from './services/on-shutdown';
 import { PlanScheduler } from './services/plan-scheduler';
 import { RunService } from './services/run-service';
 import { syncTargets } from './services/sync-targets';
@@ -32,16 +33,11 @@ async function main(): Promise<void> {
     for (const u of DEMO_USERS) console.log(`  ${u.role.padEnd(11)} ${u.email.padEnd(28)} ${u.password}`);
     console.log('');
   });
-  const shutdown = () => {
-    server.close(() => {
-      void Promise.all([scheduler.stop(), services.stop(), close()])
-        .then(() => dataSource.destroy())
-        .then(() => process.exit(0));
-    });
-    setTimeout(() => process.exit(0), 10_000);
-  };
-  process.on('SIGTERM', shutdown);
-  process.on('SIGINT', shutdown);
+  onShutdown(async () => {
+    await new Promise((resolve) => server.close(resolve));
+    await Promise.all([scheduler.stop(), services.stop(), close()]);
+    await dataSource.destroy();
+  });
 }
 
 main().catch((err) => {

@@ -1,6 +1,7 @@
 import 'reflect-metadata';
 import { loadConfig } from './config';
 import { createDataSource } from './data-source';
+import { onShutdown } from './services/on-shutdown';
 import { startServices } from './start-services';
 
 /**
@@ -13,15 +14,10 @@ async function main(): Promise<void> {
   await dataSource.initialize();
   const services = await startServices(dataSource, config, { workers: Math.max(1, config.workers), deliverMail: false });
   console.log(`[sheetkeeper] worker ${process.pid} is taking shards`);
-  const shutdown = () => {
-    void services
-      .stop()
-      .then(() => dataSource.destroy())
-      .then(() => process.exit(0));
-    setTimeout(() => process.exit(0), 10_000);
-  };
-  process.on('SIGTERM', shutdown);
-  process.on('SIGINT', shutdown);
+  onShutdown(async () => {
+    await services.stop();
+    await dataSource.destroy();
+  });
 }
 
 main().catch((err) => {
