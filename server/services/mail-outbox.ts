@@ -28,13 +28,18 @@ export class MailOutbox {
     return result.identifiers[0]!.id as string;
   }
 
-  /** Sends every pending mail whose time has come (at most `limit`); returns how many were sent and how many failed. */
-  async deliverDue(now = new Date(), limit = 20): Promise<{ sent: number; failed: number }> {
+  /**
+   * Sends every pending mail whose time has come (at most `limit`); returns how many were sent
+   * and how many failed. Without `at`, "now" is the database's clock, the one that stamped the
+   * rows: a JavaScript Date has only milliseconds, and a mail queued in the same millisecond
+   * looked not yet due.
+   */
+  async deliverDue(at?: Date, limit = 20): Promise<{ sent: number; failed: number }> {
     return this.dataSource.transaction(async (tx) => {
       const due = await tx
         .getRepository(OutboxMail)
         .createQueryBuilder('m')
-        .where('m.status = :pending AND m.next_attempt_at <= :now', { pending: 'pending', now })
+        .where('m.status = :pending AND m.next_attempt_at <= coalesce(:at::timestamptz, clock_timestamp())', { pending: 'pending', at: at ?? null })
         .orderBy('m.next_attempt_at', 'ASC')
         .limit(limit)
         .setLock('pessimistic_write')
@@ -49,11 +54,10 @@ export class MailOutbox {
           sent += 1;
         } catch (err) {
           const attempts = mail.attempts + 1;
-          await tx.getRepository(OutboxMail).update(mail.id, {
-            attempts,
-            lastError: err instanceof Error ? err.message : String(err),
-            nextAttemptAt: new Date(now.getTime() + backoffSeconds(attempts) * 1000),
-          });
+          await tx.query(
+            `UPDATE outbox_mail SET attempts = $2, last_error = $3, next_attempt_at = coalesce($4::timestamptz, clock_timestamp()) + make_interval(secs => $5) WHERE id = $1`,
+            [mail.id, attempts, err instanceof Error ? err.message : String(err), at ?? null, backoffSeconds(attempts)],
+          );
           failed += 1;
         }
       }
