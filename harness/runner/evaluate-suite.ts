@@ -22,6 +22,7 @@ import { formatDouble } from '../reference/numbers/format-double';
 import { evaluateProgram } from './evaluate-program';
 import type { ExpectedColumn, Expectation } from './expectation';
 import { principalExpectation } from './principal-expectation';
+import { pairStatus } from './pair-status';
 import { ReferenceCache } from './reference-cache';
 import { regularExpectation } from './regular-expectation';
 import { reproducer } from './reproducer';
@@ -152,7 +153,7 @@ export async function evaluateSuite(suite: Suite, target: Target, options: Evalu
   }
   result.byDiagnosis = countDiagnoses(result.paths);
   const monodromyFailed = result.paths.some((p) => p.monodromy && !p.monodromy.pass);
-  result.status = options.signal?.aborted ? 'cancelled' : result.counts.error > 0 || result.errors.length > 0 ? 'error' : result.counts.fail > 0 || monodromyFailed ? 'fail' : 'pass';
+  result.status = pairStatus(result.counts, result.errors, monodromyFailed, options.signal?.aborted === true);
   result.reference = { computed: cache.computed - computed0, cached: cache.cached - cached0 };
   result.durationMs = Date.now() - started;
   return result;

@@ -1,3 +1,4 @@
+import { NOTHING_CHECKED, pairStatus } from './pair-status';
 import type { DiagnosisKind } from '../../shared/diagnosis';
 import type { OutcomeCounts, PathResult, SuiteTargetResult } from '../../shared/run-result';
 
@@ -31,6 +32,7 @@ export function mergePairResults(parts: { paths: number[]; result: SuiteTargetRe
     if (result.status === 'cancelled') cancelled = true;
   }
   const monodromyFailed = merged.paths.some((p: PathResult) => p.monodromy && !p.monodromy.pass);
-  merged.status = cancelled ? 'cancelled' : merged.counts.error > 0 || merged.errors.length > 0 ? 'error' : merged.counts.fail > 0 || monodromyFailed ? 'fail' : 'pass';
+  merged.errors = merged.errors.filter((e) => e !== NOTHING_CHECKED);
+  merged.status = pairStatus(merged.counts, merged.errors, monodromyFailed, cancelled);
   return merged;
 }

@@ -1,3 +1,4 @@
+import { NOTHING_CHECKED } from '../../../harness/runner/pair-status';
 import type { Diagnosis } from '../../../shared/diagnosis';
 import type { PointFinding, SuiteTargetResult } from '../../../shared/run-result';
 import type { ComplexPair } from '../../../harness/adapters/complex-pair';
@@ -115,7 +116,9 @@ describe('evaluateSuite', () => {
     const r = await evaluateSuite(loadDemoSuite('cbrt-principal-sz'), noCbrt, { cache });
     expect(r.counts).toEqual({ pass: 0, fail: 0, error: 0, skipped: r.checked.points });
     expect(r.paths[0]!.skipped).toEqual([{ reason: 'oracle@1 has no cbrt', count: r.paths[0]!.points }]);
-    expect(r.status).toBe('pass');
+    // Nothing checked is not a pass: a green result for a library without the function would mislead.
+    expect(r.status).toBe('error');
+    expect(r.errors).toEqual([NOTHING_CHECKED]);
   });
 
   it('evaluates a composite subject with the library’s own arithmetic and checks a regular branch and its monodromy', async () => {
