@@ -34,11 +34,7 @@ function complexJs(program: SubjectProgram, target: TargetInfo, z: ComplexPair, 
     `const Complex = require('${pkg}');`,
     `const c = (re, im) => Object.assign(new Complex(0, 0), { re, im }); // exact parts, −0 included`,
   ];
-  const names = program.steps.map((step, i) => {
-    if (step.kind === 'input') return 'z';
-    if (step.kind === 'const') return `c(${jsNumber(step.value[0])}, ${jsNumber(step.value[1])})`;
-    return `s${i}`;
-  });
+  const names = stepNames(program, (v) => `c(${jsNumber(v[0])}, ${jsNumber(v[1])})`);
   lines.push(`const z = c(${jsNumber(z[0])}, ${jsNumber(z[1])});`);
   program.steps.forEach((step, i) => {
     if (step.kind !== 'op') return;
@@ -60,11 +56,7 @@ function mathjs(program: SubjectProgram, target: TargetInfo, z: ComplexPair, hea
   ];
   if (numberEntry) lines.push(`// number entry point: a value with a zero imaginary part goes in as a plain number`, `const arg = (v) => (typeof v === 'number' ? v : v.im === 0 ? v.re : v);`);
   const wrap = (name: string) => (numberEntry ? `arg(${name})` : name);
-  const names = program.steps.map((step, i) => {
-    if (step.kind === 'input') return 'z';
-    if (step.kind === 'const') return `c(${jsNumber(step.value[0])}, ${jsNumber(step.value[1])})`;
-    return `s${i}`;
-  });
+  const names = stepNames(program, (v) => `c(${jsNumber(v[0])}, ${jsNumber(v[1])})`);
   lines.push(`const z = c(${jsNumber(z[0])}, ${jsNumber(z[1])});`);
   program.steps.forEach((step, i) => {
     if (step.kind !== 'op') return;
@@ -83,11 +75,7 @@ function mathjs(program: SubjectProgram, target: TargetInfo, z: ComplexPair, hea
 
 function python(program: SubjectProgram, z: ComplexPair, header: string): string {
   const lines = [`# ${header}`, 'import cmath'];
-  const names = program.steps.map((step, i) => {
-    if (step.kind === 'input') return 'z';
-    if (step.kind === 'const') return `complex(${pyNumber(step.value[0])}, ${pyNumber(step.value[1])})`;
-    return `s${i}`;
-  });
+  const names = stepNames(program, (v) => `complex(${pyNumber(v[0])}, ${pyNumber(v[1])})`);
   lines.push(`z = complex(${pyNumber(z[0])}, ${pyNumber(z[1])})`);
   program.steps.forEach((step, i) => {
     if (step.kind !== 'op') return;
@@ -104,7 +92,7 @@ function python(program: SubjectProgram, z: ComplexPair, header: string): string
 function jsMath(program: SubjectProgram, z: ComplexPair, header: string): string {
   const lines = [`// ${header} (real arguments only)`, `const z = ${jsNumber(z[0])};`];
   const infix: Record<string, string> = { add: '+', sub: '-', mul: '*', div: '/' };
-  const names = program.steps.map((step, i) => (step.kind === 'input' ? 'z' : step.kind === 'const' ? jsNumber(step.value[0]) : `s${i}`));
+  const names = stepNames(program, (v) => jsNumber(v[0]));
   program.steps.forEach((step, i) => {
     if (step.kind !== 'op') return;
     const args = step.args.map((k) => names[k] as string);
@@ -128,4 +116,9 @@ function stdio(program: SubjectProgram, target: TargetInfo, z: ComplexPair, head
     lines.push(`echo '{"id": ${i}, "op": "${step.op}", "args": [${item}]}' | ${command}`);
   });
   return lines.join('\n');
+}
+
+/** What each step of the program is called in the reproducer: the input z, a constant written out, or the intermediate s<i>. */
+function stepNames(program: SubjectProgram, constant: (value: readonly [number, number]) => string): string[] {
+  return program.steps.map((step, i) => (step.kind === 'input' ? 'z' : step.kind === 'const' ? constant(step.value) : `s${i}`));
 }

@@ -6,7 +6,6 @@ import { regressionMail } from './regression-mail';
 import type { RegressionRow } from './regression-row';
 import { targetKeySql } from './target-key-sql';
 
-const KEY = targetKeySql;
 
 /**
  * Completes a run: marks as regressions the failing points that passed in the previous
@@ -32,10 +31,10 @@ export async function markRegressions(tx: EntityManager, runId: string, mail: { 
       `WITH marked AS (UPDATE failures f SET is_regression = true
         WHERE f.run_id = $1 AND f.outcome_kind = 'fail'
           AND EXISTS (SELECT 1 FROM shards ps JOIN path_summaries pp ON pp.shard_id = ps.id
-                       WHERE ps.run_id = $2 AND ps.suite_slug = f.suite_slug AND ${KEY('ps.target_name')} = ${KEY('f.target_name')}
+                       WHERE ps.run_id = $2 AND ps.suite_slug = f.suite_slug AND ${targetKeySql('ps.target_name')} = ${targetKeySql('f.target_name')}
                          AND pp.path_name = f.path_name AND pp.error IS NULL)
           AND NOT EXISTS (SELECT 1 FROM failures pf
-                           WHERE pf.run_id = $2 AND pf.point_key = f.point_key AND ${KEY('pf.target_name')} = ${KEY('f.target_name')})
+                           WHERE pf.run_id = $2 AND pf.point_key = f.point_key AND ${targetKeySql('pf.target_name')} = ${targetKeySql('f.target_name')})
           AND NOT ${coveredByDeviationSql('f')}
         RETURNING f.id) SELECT count(*)::int AS n FROM marked`,
       [run.id, previous.id],
@@ -48,7 +47,7 @@ export async function markRegressions(tx: EntityManager, runId: string, mail: { 
     count > 0
       ? await tx.query(
           `SELECT DISTINCT u.email FROM subscriptions s JOIN users u ON u.id = s.user_id
-            WHERE s.target_key IN (SELECT DISTINCT ${KEY('target_name')} FROM failures WHERE run_id = $1 AND is_regression)`,
+            WHERE s.target_key IN (SELECT DISTINCT ${targetKeySql('target_name')} FROM failures WHERE run_id = $1 AND is_regression)`,
           [run.id],
         )
       : [];
@@ -75,8 +74,8 @@ export async function markRegressions(tx: EntityManager, runId: string, mail: { 
     })) as RegressionRow[];
     const versionChanges: { key: string; from: string; to: string }[] = previous
       ? await tx.query(
-          `SELECT DISTINCT ${KEY('s.target_name')} AS key, p.target_version AS "from", s.target_version AS "to"
-             FROM shards s JOIN shards p ON p.run_id = $2 AND ${KEY('p.target_name')} = ${KEY('s.target_name')}
+          `SELECT DISTINCT ${targetKeySql('s.target_name')} AS key, p.target_version AS "from", s.target_version AS "to"
+             FROM shards s JOIN shards p ON p.run_id = $2 AND ${targetKeySql('p.target_name')} = ${targetKeySql('s.target_name')}
             WHERE s.run_id = $1 AND p.target_version <> s.target_version ORDER BY key`,
           [run.id, previous.id],
         )

@@ -1,4 +1,4 @@
-import type { DataSource } from 'typeorm';
+import { In, type DataSource } from 'typeorm';
 import type { RunTrigger } from '../../shared/run-status';
 import type { RunView } from '../../shared/run-view';
 import { Plan } from '../entities/plan';
@@ -27,11 +27,11 @@ export class RunService {
     const { run, shardIds } = await this.dataSource.transaction(async (tx) => {
       const plan = await tx.getRepository(Plan).findOne({ where: { id: planId }, relations: { suites: true, targets: true } });
       if (!plan) throw new HttpError(404, { kind: 'not-found', message: 'No plan with that id.' });
-      const versions: SuiteVersion[] = [];
-      for (const suite of plan.suites) {
-        const approved = await tx.getRepository(SuiteVersion).findOne({ where: { suite: { id: suite.id }, status: 'approved' }, relations: { suite: true }, order: { version: 'DESC' } });
-        if (approved) versions.push(approved);
-      }
+      // Each suite's newest approved version, in one query rather than one per suite.
+      const newest: { id: string }[] = plan.suites.length
+        ? await tx.query(`SELECT DISTINCT ON (suite_id) id FROM suite_versions WHERE suite_id = ANY($1) AND status = 'approved' ORDER BY suite_id, version DESC`, [plan.suites.map((x) => x.id)])
+        : [];
+      const versions = newest.length ? await tx.getRepository(SuiteVersion).find({ where: { id: In(newest.map((v) => v.id)) }, relations: { suite: true }, order: { suite: { slug: 'ASC' } } }) : [];
       const targets = plan.targets.filter((t) => t.installed);
       if (versions.length === 0 || targets.length === 0) {
         throw new HttpError(409, { kind: 'conflict', message: `Plan "${plan.name}" has nothing to run: ${versions.length} approved suite(s), ${targets.length} installed target(s).` });

@@ -1,8 +1,7 @@
 import { z } from 'zod';
 import { complexString, numberString } from './complex-string';
+import { objectError } from './object-error';
 
-const objectError = (issue: { code: string; keys?: string[] }) =>
-  issue.code === 'unrecognized_keys' ? `has unknown fields: ${(issue.keys ?? []).join(', ')}` : 'must be a JSON object';
 
 const circlePath = z.strictObject(
   {

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { queryObject } from './query-object';
 import { DIAGNOSIS_KINDS } from '../diagnosis-kinds';
 
 const text = z.string().trim().min(1).max(120);
@@ -9,7 +10,7 @@ const text = z.string().trim().min(1).max(120);
  * accepted deviation. Pages are keyed by the last row's id (`after`), or
  * by (ulps, id) when sorted by ulps.
  */
-export const failureQuery = z.strictObject(
+export const failureQuery = queryObject(
   {
     run: z.uuid({ error: 'must be a run id' }).optional(),
     suite: text.optional(),
@@ -21,8 +22,7 @@ export const failureQuery = z.strictObject(
     sort: z.enum(['id', 'ulps'], { error: 'must be id or ulps' }).default('id'),
     after: z.string().regex(/^\d+(:[\d.e+-]+)?$/, { error: 'must be a cursor from a previous page' }).optional(),
     limit: z.coerce.number({ error: 'must be a whole number' }).int().min(1, { error: 'must be at least 1' }).max(500, { error: 'must be at most 500' }).default(50),
-  },
-  { error: (issue) => (issue.code === 'unrecognized_keys' ? `has unknown parameters: ${issue.keys.join(', ')}` : 'is invalid') },
+  }
 );
 
 export type FailureQuery = z.infer<typeof failureQuery>;

@@ -1,9 +1,10 @@
 import { z } from 'zod';
 import { complexString, numberString } from './complex-string';
 import { conventionSchema } from './convention-schema';
+import { jsonObject } from './json-object';
 
 /** One request line of `sheetkeeper reference` (DESIGN.md §5). */
-export const referenceRequest = z.strictObject(
+export const referenceRequest = jsonObject(
   {
     fn: z.string({ error: 'is required' }).max(20),
     z: complexString,
@@ -11,10 +12,6 @@ export const referenceRequest = z.strictObject(
     w: z.union([complexString, numberString], { error: 'must be {"re","im"} or a number string such as "1/3"' }).optional(),
     n: z.union([z.number().int(), z.string().regex(/^[+-]?\d+$/)], { error: 'must be an integer' }).optional(),
     digits: z.number().int().min(1).max(200).optional(),
-  },
-  {
-    error: (issue) =>
-      issue.code === 'unrecognized_keys' ? `has unknown fields: ${issue.keys.join(', ')}` : 'must be a JSON object',
   },
 );
 
