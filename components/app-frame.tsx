@@ -1,7 +1,7 @@
 import { Link, usePathname } from 'expo-router';
 import type { ReactNode } from 'react';
 import { Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
-import { NAV_ITEMS } from '../client/nav-items';
+import { MORE_ITEM, NAV_ITEMS, type NavItem } from '../client/nav-items';
 import { useSignOut } from '../client/use-sign-out';
 import { theme } from '../constants/theme';
 import type { PublicUser } from '../shared/public-user';
@@ -15,10 +15,14 @@ export function AppFrame({ user, children }: { user: PublicUser; children: React
   const wide = width >= theme.wide;
   const pathname = usePathname();
   const signOut = useSignOut();
-  const items = NAV_ITEMS.filter((item) => item.roles.includes(user.role));
-  const isActive = (href: string) => (href === '/' ? pathname === '/' : pathname.startsWith(href));
+  const allowed = NAV_ITEMS.filter((item) => item.roles.includes(user.role));
+  // A phone shows the primary items and "More"; the rest are active under "More" too.
+  const items = wide ? allowed : [...allowed.filter((item) => item.primary), MORE_ITEM];
+  const secondary = allowed.filter((item) => !item.primary).map((item) => item.href);
+  const isActive = (href: string) =>
+    href === '/' ? pathname === '/' : pathname.startsWith(href) || (href === MORE_ITEM.href && secondary.some((h) => pathname.startsWith(h)));
 
-  const links = items.map((item) => (
+  const links = items.map((item: NavItem) => (
     <Link key={item.href} href={item.href} asChild>
       <Pressable
         accessibilityRole="link"
@@ -33,6 +37,7 @@ export function AppFrame({ user, children }: { user: PublicUser; children: React
     </Link>
   ));
 
+  // On a phone, sign-out lives on the "More" screen so the tab bar keeps five large targets.
   const signOutButton = (
     <Pressable accessibilityRole="button" accessibilityLabel="Sign out" onPress={() => signOut.mutate()} style={wide ? styles.railItem : styles.tabItem}>
       <Text style={styles.glyph}>→</Text>
@@ -66,7 +71,6 @@ export function AppFrame({ user, children }: { user: PublicUser; children: React
       <View style={styles.main}>{children}</View>
       <View style={styles.tabBar} role="navigation">
         {links}
-        {signOutButton}
       </View>
     </View>
   );
@@ -90,6 +94,6 @@ const styles = StyleSheet.create({
   tabItem: { flex: 1, minHeight: 60, alignItems: 'center', justifyContent: 'center', gap: 2 },
   tabItemActive: { borderTopWidth: 3, borderTopColor: theme.color.focus },
   tabLabel: { fontFamily: theme.font.medium, fontSize: 12, color: theme.color.navInk },
-  glyph: { fontSize: 18, color: theme.color.navInk },
+  glyph: { fontFamily: theme.font.regular, fontSize: 18, color: theme.color.navInk },
   activeInk: { color: theme.color.navActive },
 });

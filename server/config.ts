@@ -65,7 +65,8 @@ export function loadConfig(): ServerConfig {
     databaseUrl: databaseUrl(),
     sessionSecret: sessionSecret(),
     secureCookies: process.env.SHEETKEEPER_SECURE_COOKIES === '1',
-    webDir: path.join(PROJECT_ROOT, 'dist'),
+    // SHEETKEEPER_WEB_DIR lets a second export (scripts/e2e.sh) be served beside the main one.
+    webDir: process.env.SHEETKEEPER_WEB_DIR ?? path.join(PROJECT_ROOT, 'dist'),
     smtpPort: portFrom('SHEETKEEPER_SMTP_PORT', 8525),
     fakeSmtp: process.env.SHEETKEEPER_FAKE_SMTP !== '0',
     workers: Math.max(0, Number(process.env.SHEETKEEPER_WORKERS ?? 1) || 0),

@@ -3,6 +3,8 @@ import { ROLES } from '../../shared/roles';
 import { BASE_URL, openBrowser, type OpenBrowser } from './support/open-browser';
 import { saveScreenshots } from './support/save-screenshots';
 import { signIn } from './support/sign-in';
+import { signOut } from './support/sign-out';
+import { goTo } from './support/go-to';
 
 let b: OpenBrowser;
 beforeEach(async () => {
@@ -41,11 +43,12 @@ describe('signing in and out', () => {
     await signIn(b.page, user.email, user.password);
     expect(await b.page.getByTestId('home-email').textContent()).toBe(user.email);
     await b.page.getByLabel(`role ${role}`).first().waitFor();
-    // Only admins see Users in the navigation.
-    expect(await b.page.getByRole('link', { name: 'Users' }).count()).toBe(role === 'admin' ? 1 : 0);
     await saveScreenshots(b.page, `home-${role}`, () => b.page.getByTestId('home-email').waitFor());
-    await b.page.getByRole('button', { name: 'Sign out' }).click();
-    await b.page.getByRole('button', { name: 'Sign in' }).waitFor();
+    // Only admins see Users in the navigation (under "More" on a phone).
+    await b.page.getByRole('link', { name: 'More', exact: true }).click();
+    await b.page.getByRole('button', { name: 'Sign out' }).waitFor();
+    expect(await b.page.getByRole('link', { name: 'Users', exact: true }).count()).toBe(role === 'admin' ? 1 : 0);
+    await signOut(b.page);
     expect(await b.page.evaluate(() => fetch('/api/me').then((r) => r.status))).toBe(401);
   });
 
@@ -60,7 +63,9 @@ describe('roles', () => {
   it('keeps Users from a contributor: no link, a refusal on the screen, and 403 from the API', async () => {
     const ravi = demo('contributor');
     await signIn(b.page, ravi.email, ravi.password);
-    expect(await b.page.getByRole('link', { name: 'Users' }).count()).toBe(0);
+    await b.page.getByRole('link', { name: 'More', exact: true }).click();
+    await b.page.getByRole('button', { name: 'Sign out' }).waitFor();
+    expect(await b.page.getByRole('link', { name: 'Users', exact: true }).count()).toBe(0);
     await b.page.goto(`${BASE_URL}/users`);
     await b.page.getByText('Only admins can see users.').waitFor();
     expect(await b.page.evaluate(() => fetch('/api/users').then((r) => r.status))).toBe(403);
@@ -69,7 +74,7 @@ describe('roles', () => {
   it("lets an admin change a contributor's role, which shows when that user signs in again", async () => {
     const odile = demo('admin');
     await signIn(b.page, odile.email, odile.password);
-    await b.page.getByRole('link', { name: 'Users' }).click();
+    await goTo(b.page, 'Users');
     const mei = b.page.getByTestId('user-mei@sheetkeeper.test');
     await mei.waitFor();
     await saveScreenshots(b.page, 'users', () => mei.waitFor());
@@ -79,8 +84,7 @@ describe('roles', () => {
     ]);
     expect(patch.status()).toBe(200);
     await mei.getByRole('radio', { name: 'Make Mei Okonkwo reviewer', checked: true }).waitFor();
-    await b.page.getByRole('button', { name: 'Sign out' }).click();
-    await b.page.getByRole('button', { name: 'Sign in' }).waitFor();
+    await signOut(b.page);
 
     await signIn(b.page, 'mei@sheetkeeper.test', 'mei-demo-2026');
     await b.page.getByLabel('role reviewer').waitFor();

@@ -1,0 +1,49 @@
+import { Link } from 'expo-router';
+import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { NAV_ITEMS } from '../../client/nav-items';
+import { useMe } from '../../client/use-me';
+import { useSignOut } from '../../client/use-sign-out';
+import { ActionButton } from '../../components/action-button';
+import { RoleBadge } from '../../components/role-badge';
+import { ScreenBody } from '../../components/screen-body';
+import { theme } from '../../constants/theme';
+
+/** The phone's "More" tab: every destination the tab bar has no room for, who I am, and sign-out. */
+export default function MoreScreen() {
+  const { data: user } = useMe();
+  const signOut = useSignOut();
+  if (!user) return null;
+  const items = NAV_ITEMS.filter((item) => !item.primary && item.roles.includes(user.role));
+  return (
+    <ScreenBody title="More">
+      <View style={styles.list}>
+        {items.map((item) => (
+          <Link key={item.href} href={item.href as never} asChild>
+            <Pressable accessibilityRole="link" accessibilityLabel={item.label} style={styles.row}>
+              <Text style={styles.glyph}>{item.glyph}</Text>
+              <Text style={styles.label}>{item.label}</Text>
+              <Text style={styles.chevron}>→</Text>
+            </Pressable>
+          </Link>
+        ))}
+      </View>
+      <View style={styles.who}>
+        <Text style={styles.name}>{user.displayName}</Text>
+        <Text style={styles.email}>{user.email}</Text>
+        <RoleBadge role={user.role} />
+      </View>
+      <ActionButton label="Sign out" tone="quiet" busy={signOut.isPending} onPress={() => signOut.mutate()} />
+    </ScreenBody>
+  );
+}
+
+const styles = StyleSheet.create({
+  list: { backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius },
+  row: { minHeight: 56, flexDirection: 'row', alignItems: 'center', gap: theme.space(4), paddingHorizontal: theme.space(4), borderBottomWidth: 1, borderBottomColor: theme.color.rule },
+  glyph: { fontFamily: theme.font.regular, fontSize: 20, color: theme.color.accent, width: 24, textAlign: 'center' },
+  label: { flex: 1, fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
+  chevron: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.inkFaint },
+  who: { gap: theme.space(1) },
+  name: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
+  email: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.inkSoft },
+});
