@@ -4,13 +4,14 @@ import type { DataSource } from 'typeorm';
 import { ROLES } from '../../shared/roles';
 import { idParams } from '../../shared/schemas/id-params';
 import { tokenBody } from '../../shared/schemas/token-body';
+import type { TokenView } from '../../shared/token-view';
 import { ApiToken } from '../entities/api-token';
 import { requireRole } from '../middleware/require-role';
 import { hashToken } from '../services/hash-token';
 import { HttpError } from '../services/http-error';
 import { parseInput } from '../services/parse-input';
 
-const view = (t: ApiToken) => ({ id: t.id, name: t.name, prefix: t.prefix, createdAt: t.createdAt.toISOString(), lastUsedAt: t.lastUsedAt?.toISOString() ?? null, revokedAt: t.revokedAt?.toISOString() ?? null });
+const view = (t: ApiToken): TokenView => ({ id: t.id, name: t.name, prefix: t.prefix, createdAt: t.createdAt.toISOString(), lastUsedAt: t.lastUsedAt?.toISOString() ?? null, revokedAt: t.revokedAt?.toISOString() ?? null });
 
 /** My API tokens: list, create (the secret is shown once) and revoke. Tokens cannot make tokens. */
 export function tokensRouter(dataSource: DataSource): Router {

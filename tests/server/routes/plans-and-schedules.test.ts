@@ -67,7 +67,9 @@ describe('plans and schedules', () => {
   it('names the cron field that is wrong, and the time zone rule', async () => {
     const preview = await kwame.post('/api/schedules/preview').send({ cron: '61 2 * * *', timeZone: 'UTC' });
     expect(preview.status).toBe(400);
-    expect(preview.body.issues).toEqual([{ field: 'body.cron', rule: '61 is a invalid expression for minute' }]);
+    expect(preview.body.issues).toEqual([{ field: 'body.cron', rule: 'has an invalid minute field: "61"' }]);
+    const seven = await kwame.post('/api/schedules/preview').send({ cron: '0 0 2 * * * *', timeZone: 'UTC' });
+    expect(seven.body.issues).toEqual([{ field: 'body.cron', rule: 'must have 5 or 6 fields (it has 7)' }]);
     const zone = await kwame.post('/api/schedules/preview').send({ cron: '0 2 * * *', timeZone: 'Mars/Olympus' });
     expect(zone.body.issues).toEqual([{ field: 'body.timeZone', rule: 'must be a time zone name such as Europe/Oslo or UTC' }]);
   });
