@@ -14,6 +14,7 @@ import { deviationsRouter } from './routes/deviations-router';
 import { failuresRouter } from './routes/failures-router';
 import { meRouter } from './routes/me-router';
 import { outboxRouter } from './routes/outbox-router';
+import { overviewRouter } from './routes/overview-router';
 import { plansRouter } from './routes/plans-router';
 import { runsRouter } from './routes/runs-router';
 import { schedulesRouter } from './routes/schedules-router';
@@ -108,6 +109,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   api.use('/deviations', deviationsRouter(options.dataSource));
   api.use('/tokens', tokensRouter(options.dataSource));
   api.use('/subscriptions', subscriptionsRouter(options.dataSource));
+  api.use('/overview', overviewRouter(options.dataSource));
   api.use((_req, res) => {
     res.status(404).json({ kind: 'not-found', message: 'No such API route.' } satisfies ApiError);
   });

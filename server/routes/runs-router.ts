@@ -1,8 +1,11 @@
 import { Router } from 'express';
 import type { DataSource } from 'typeorm';
 import { ROLES } from '../../shared/roles';
+import type { RunMatrixCell } from '../../shared/run-matrix-cell';
+import type { RunPropertyRow } from '../../shared/run-property-row';
 import { idParams } from '../../shared/schemas/id-params';
 import { runBody } from '../../shared/schemas/run-body';
+import { runListQuery } from '../../shared/schemas/run-list-query';
 import { requireRole } from '../middleware/require-role';
 import { parseInput } from '../services/parse-input';
 import type { RunService } from '../services/run-service';
@@ -13,8 +16,8 @@ export function runsRouter(dataSource: DataSource, runs: RunService): Router {
   const anyone = requireRole(...ROLES);
   const runners = requireRole('maintainer', 'admin');
 
-  router.get('/', anyone, async (_req, res) => {
-    res.json({ runs: await runs.list() });
+  router.get('/', anyone, async (req, res) => {
+    res.json(await runs.list(parseInput(runListQuery, req.query, 'query')));
   });
   router.post('/', runners, async (req, res) => {
     const { planId } = parseInput(runBody, req.body, 'body');
@@ -30,7 +33,7 @@ export function runsRouter(dataSource: DataSource, runs: RunService): Router {
   router.get('/:id/matrix', anyone, async (req, res) => {
     const { id } = parseInput(idParams, req.params, 'params');
     await runs.get(id);
-    const cells = await dataSource.query(
+    const cells: RunMatrixCell[] = await dataSource.query(
       `SELECT suite_slug AS "suite", target_name AS "target", status, outcome, counts, by_diagnosis AS "byDiagnosis", checked, errors
          FROM shards WHERE run_id = $1 ORDER BY suite_slug, target_name`,
       [id],
@@ -41,7 +44,7 @@ export function runsRouter(dataSource: DataSource, runs: RunService): Router {
   router.get('/:id/properties', anyone, async (req, res) => {
     const { id } = parseInput(idParams, req.params, 'params');
     await runs.get(id);
-    const rows = await dataSource.query(
+    const rows: RunPropertyRow[] = await dataSource.query(
       `SELECT s.suite_slug AS "suite", s.target_name AS "target", p.outcome FROM property_results p JOIN shards s ON s.id = p.shard_id WHERE p.run_id = $1 ORDER BY s.suite_slug, s.target_name, p.law`,
       [id],
     );

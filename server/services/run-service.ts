@@ -1,5 +1,6 @@
 import { In, type DataSource } from 'typeorm';
 import type { RunTrigger } from '../../shared/run-status';
+import type { RunListQuery } from '../../shared/schemas/run-list-query';
 import type { RunView } from '../../shared/run-view';
 import { Plan } from '../entities/plan';
 import { Run } from '../entities/run';
@@ -56,9 +57,30 @@ export class RunService {
     return toRunView(run);
   }
 
-  async list(limit = 50): Promise<RunView[]> {
-    const runs = await this.dataSource.getRepository(Run).find({ relations: RUN_RELATIONS, order: { createdAt: 'DESC' }, take: limit });
-    return runs.map(toRunView);
+  /**
+   * Newest first, filtered; one page of `limit` keyed by the last run of the previous page, so
+   * an old page costs what the first one does. `next` is the cursor of the following page.
+   */
+  async list(query: Partial<RunListQuery> = {}): Promise<{ runs: RunView[]; next: string | null }> {
+    const limit = query.limit ?? 50;
+    const qb = this.dataSource
+      .getRepository(Run)
+      .createQueryBuilder('r')
+      .leftJoinAndSelect('r.plan', 'plan')
+      .leftJoinAndSelect('r.requestedBy', 'requestedBy')
+      .orderBy('r.createdAt', 'DESC')
+      .addOrderBy('r.id', 'DESC')
+      // Both joins are many-to-one, so a plain LIMIT cannot cut a run's rows in half.
+      .limit(limit + 1);
+    if (query.plan) qb.andWhere('r.plan_id = :plan', { plan: query.plan });
+    if (query.status) qb.andWhere('r.status = :status', { status: query.status });
+    if (query.trigger) qb.andWhere('r.trigger = :trigger', { trigger: query.trigger });
+    if (query.before) {
+      qb.andWhere('(r.created_at, r.id) < (SELECT b.created_at, b.id FROM runs b WHERE b.id = :before)', { before: query.before });
+    }
+    const rows = await qb.getMany();
+    const page = rows.slice(0, limit);
+    return { runs: page.map(toRunView), next: rows.length > limit ? page[page.length - 1]!.id : null };
   }
 
   /** Cancels a queued or running run: shards not yet done are skipped; a shard in flight stops at its next path. */

@@ -162,6 +162,8 @@ const ROUTES: RouteCase[] = [
   { name: 'PATCH /api/schedules/:id', call: async (a) => a.patch(`/api/schedules/${await freshSchedule()}`).send({ enabled: false }), expect: { 'signed-out': 401, admin: 200, maintainer: 200, reviewer: 403, contributor: 403 } },
   { name: 'DELETE /api/schedules/:id', call: async (a) => a.delete(`/api/schedules/${await freshSchedule()}`), expect: { 'signed-out': 401, admin: 204, maintainer: 204, reviewer: 403, contributor: 403 } },
   { name: 'GET /api/runs', call: (a) => a.get('/api/runs'), expect: signedIn(200) },
+  { name: 'GET /api/runs (filtered, one page)', call: (a) => a.get('/api/runs?status=queued&trigger=manual&limit=5'), expect: signedIn(200) },
+  { name: 'GET /api/overview', call: (a) => a.get('/api/overview'), expect: signedIn(200) },
   { name: 'POST /api/runs', call: async (a) => a.post('/api/runs').send({ planId: await freshPlan() }), expect: { 'signed-out': 401, admin: 202, maintainer: 202, reviewer: 403, contributor: 403 } },
   { name: 'GET /api/runs/:id', call: async (a) => a.get(`/api/runs/${await freshRun()}`), expect: signedIn(200) },
   { name: 'GET /api/runs/:id/matrix', call: async (a) => a.get(`/api/runs/${await freshRun()}/matrix`), expect: signedIn(200) },

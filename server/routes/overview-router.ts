@@ -1,0 +1,14 @@
+import { Router } from 'express';
+import type { DataSource } from 'typeorm';
+import { ROLES } from '../../shared/roles';
+import { requireRole } from '../middleware/require-role';
+import { loadOverview } from '../services/load-overview';
+
+/** The Overview: everyone reads it; what "needs me" depends on who asks. */
+export function overviewRouter(dataSource: DataSource): Router {
+  const router = Router();
+  router.get('/', requireRole(...ROLES), async (req, res) => {
+    res.json({ overview: await loadOverview(dataSource, req.user!) });
+  });
+  return router;
+}

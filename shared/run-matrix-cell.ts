@@ -1,0 +1,18 @@
+import type { DiagnosisKind } from './diagnosis';
+import type { CheckedScope, OutcomeCounts } from './run-result';
+
+/**
+ * One suite × target cell of a run's matrix (`GET /api/runs/:id/matrix`). `counts`, `byDiagnosis`
+ * and `checked` stay null until the shard is done; `outcome` is null until then too.
+ */
+export interface RunMatrixCell {
+  suite: string;
+  target: string;
+  status: 'queued' | 'running' | 'done' | 'cancelled';
+  outcome: 'pass' | 'fail' | 'error' | null;
+  counts: OutcomeCounts | null;
+  byDiagnosis: Partial<Record<DiagnosisKind, number>> | null;
+  checked: CheckedScope | null;
+  /** Shard-level errors: a target that hung or crashed, a suite that could not be evaluated. */
+  errors: string[];
+}
