@@ -15,6 +15,9 @@ export const theme = {
     accentSoft: '#DCEBE6',
     danger: '#A8432E',
     dangerSoft: '#F6E1DA',
+    /** Errors and other "nothing was judged" states: amber ink (5.9:1 on panel, 5.0:1 on its soft ground) and its soft ground. */
+    warn: '#875A08',
+    warnSoft: '#F5EAD0',
     focus: '#C58B1B',
     nav: '#1F2A36',
     navInk: '#E9E4D8',
