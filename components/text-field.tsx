@@ -1,16 +1,18 @@
 import { StyleSheet, Text, TextInput, View, type TextInputProps } from 'react-native';
 import { theme } from '../constants/theme';
 
-interface Props extends Pick<TextInputProps, 'secureTextEntry' | 'autoComplete' | 'keyboardType' | 'onSubmitEditing' | 'autoCapitalize'> {
+interface Props extends Pick<TextInputProps, 'secureTextEntry' | 'autoComplete' | 'keyboardType' | 'onSubmitEditing' | 'autoCapitalize' | 'multiline' | 'placeholder'> {
   label: string;
   value: string;
   onChangeText: (text: string) => void;
   /** The broken rule, shown under the field and announced to screen readers. */
   error?: string;
   testID?: string;
+  /** Monospaced input, for expressions and identifiers. */
+  mono?: boolean;
 }
 
-export function TextField({ label, value, onChangeText, error, testID, ...inputProps }: Props) {
+export function TextField({ label, value, onChangeText, error, testID, mono = false, ...inputProps }: Props) {
   return (
     <View style={styles.field}>
       <Text style={styles.label}>{label}</Text>
@@ -19,7 +21,7 @@ export function TextField({ label, value, onChangeText, error, testID, ...inputP
         aria-invalid={error ? true : undefined}
         value={value}
         onChangeText={onChangeText}
-        style={[styles.input, error ? styles.inputError : null]}
+        style={[styles.input, mono ? styles.mono : null, inputProps.multiline ? styles.multiline : null, error ? styles.inputError : null]}
         testID={testID}
         autoCorrect={false}
         {...inputProps}
@@ -47,6 +49,8 @@ const styles = StyleSheet.create({
     color: theme.color.ink,
     backgroundColor: theme.color.panel,
   },
+  mono: { fontFamily: theme.font.mono },
+  multiline: { minHeight: 96, paddingVertical: theme.space(2), textAlignVertical: 'top' },
   inputError: { borderColor: theme.color.danger, borderWidth: 2 },
   error: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.danger },
 });

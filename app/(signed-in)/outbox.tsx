@@ -1,0 +1,14 @@
+import { useMe } from '../../client/use-me';
+import { MailList } from '../../components/mail-list';
+import { QueryState } from '../../components/query-state';
+import { ScreenBody } from '../../components/screen-body';
+
+export default function OutboxScreen() {
+  const { data: me } = useMe();
+  if (!me) return null;
+  return (
+    <ScreenBody title="Outbox" lead="Every message the local mail server received from Sheetkeeper. Nothing here left this machine.">
+      {me.role === 'admin' ? <MailList /> : <QueryState state="error" message="Only admins can see the outbox." />}
+    </ScreenBody>
+  );
+}

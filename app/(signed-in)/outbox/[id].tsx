@@ -1,0 +1,33 @@
+import { Link, useLocalSearchParams } from 'expo-router';
+import { Pressable, StyleSheet, Text } from 'react-native';
+import { useMe } from '../../../client/use-me';
+import { useOutboxMessage } from '../../../client/use-outbox-message';
+import { MailView } from '../../../components/mail-view';
+import { QueryState } from '../../../components/query-state';
+import { ScreenBody } from '../../../components/screen-body';
+import { theme } from '../../../constants/theme';
+
+export default function OutboxMessageScreen() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  const { data: me } = useMe();
+  const message = useOutboxMessage(String(id));
+  if (!me) return null;
+  return (
+    <ScreenBody title="Message">
+      <Link href={'/outbox' as never} asChild>
+        <Pressable accessibilityRole="link" accessibilityLabel="All messages" style={StyleSheet.flatten(styles.back)}>
+          <Text style={styles.backText}>← All messages</Text>
+        </Pressable>
+      </Link>
+      {me.role !== 'admin' ? <QueryState state="error" message="Only admins can see the outbox." /> : null}
+      {me.role === 'admin' && message.isPending ? <QueryState state="loading" /> : null}
+      {me.role === 'admin' && message.isError ? <QueryState state="error" message={message.error.message} onRetry={() => void message.refetch()} /> : null}
+      {message.data ? <MailView message={message.data} /> : null}
+    </ScreenBody>
+  );
+}
+
+const styles = StyleSheet.create({
+  back: { alignSelf: 'flex-start', minHeight: 44, justifyContent: 'center' },
+  backText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accent },
+});

@@ -1,0 +1,33 @@
+import { Link, useLocalSearchParams } from 'expo-router';
+import { Pressable, StyleSheet, Text } from 'react-native';
+import { canEditPlans } from '../../../client/can-edit-plans';
+import { useMe } from '../../../client/use-me';
+import { usePlan } from '../../../client/use-plan';
+import { PlanDetail } from '../../../components/plan-detail';
+import { QueryState } from '../../../components/query-state';
+import { ScreenBody } from '../../../components/screen-body';
+import { theme } from '../../../constants/theme';
+
+export default function PlanScreen() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  const { data: me } = useMe();
+  const plan = usePlan(String(id));
+  if (!me) return null;
+  return (
+    <ScreenBody title={plan.data?.name ?? 'Plan'}>
+      <Link href={'/plans' as never} asChild>
+        <Pressable accessibilityRole="link" accessibilityLabel="All plans" style={StyleSheet.flatten(styles.back)}>
+          <Text style={styles.backText}>← All plans</Text>
+        </Pressable>
+      </Link>
+      {plan.isPending ? <QueryState state="loading" /> : null}
+      {plan.isError ? <QueryState state="error" message={plan.error.message} onRetry={() => void plan.refetch()} /> : null}
+      {plan.data ? <PlanDetail plan={plan.data} canEdit={canEditPlans(me.role)} /> : null}
+    </ScreenBody>
+  );
+}
+
+const styles = StyleSheet.create({
+  back: { alignSelf: 'flex-start', minHeight: 44, justifyContent: 'center' },
+  backText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accent },
+});

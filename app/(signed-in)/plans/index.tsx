@@ -1,0 +1,29 @@
+import { Link } from 'expo-router';
+import { Pressable, StyleSheet, Text } from 'react-native';
+import { canEditPlans } from '../../../client/can-edit-plans';
+import { useMe } from '../../../client/use-me';
+import { PlanList } from '../../../components/plan-list';
+import { ScreenBody } from '../../../components/screen-body';
+import { theme } from '../../../constants/theme';
+
+export default function PlansScreen() {
+  const { data: me } = useMe();
+  if (!me) return null;
+  return (
+    <ScreenBody title="Plans" lead="Which suites run against which library versions, when, and who hears about regressions.">
+      {canEditPlans(me.role) ? (
+        <Link href={'/plans/new' as never} asChild>
+          <Pressable accessibilityRole="link" accessibilityLabel="New plan" style={StyleSheet.flatten(styles.newPlan)}>
+            <Text style={styles.newPlanText}>+ New plan</Text>
+          </Pressable>
+        </Link>
+      ) : null}
+      <PlanList />
+    </ScreenBody>
+  );
+}
+
+const styles = StyleSheet.create({
+  newPlan: { alignSelf: 'flex-start', minHeight: theme.touch, justifyContent: 'center', paddingHorizontal: theme.space(5), borderRadius: theme.radius, backgroundColor: theme.color.accent },
+  newPlanText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accentInk },
+});
