@@ -14,7 +14,7 @@ import type { SuiteIssue } from '../../shared/suite-issue';
  * every cut-free loop with monodromy 1. Returns the problems in the shared issue form,
  * naming the suite, the field and the rule (e.g. the uncut branch point or the failing loop).
  */
-export function checkSuiteSemantics(suite: Suite): SuiteIssue[] {
+export function checkSuiteSemantics(suite: Pick<Suite, 'id' | 'subject' | 'branch'>): SuiteIssue[] {
   const issues: SuiteIssue[] = [];
   const say = (field: string, rule: string) => issues.push({ suite: suite.id, field, rule });
   try {
