@@ -6,6 +6,7 @@ import { classifyBody } from '../../shared/schemas/classify-body';
 import { failureQuery } from '../../shared/schemas/failure-query';
 import { requireRole } from '../middleware/require-role';
 import { classifyFailure } from '../services/classify-failure';
+import { failurePath } from '../services/failure-path';
 import { HttpError } from '../services/http-error';
 import { InputError } from '../services/input-error';
 import { parseInput } from '../services/parse-input';
@@ -14,7 +15,7 @@ import { searchFailures } from '../services/failure-search';
 /** Rows per CSV export: enough for a whole demo run; larger tables are filtered first. */
 const CSV_MAX_ROWS = 50_000;
 
-/** The failure table with filters and keyed pages, its CSV export, and one failure with its history. */
+/** The failure table with filters and keyed pages, its CSV export, one failure with its history, and its path for the pictures. */
 export function failuresRouter(dataSource: DataSource): Router {
   const router = Router();
   const anyone = requireRole(...ROLES);
@@ -56,10 +57,20 @@ export function failuresRouter(dataSource: DataSource): Router {
     res.type('text/csv').attachment('sheetkeeper-failures.csv').send(csv);
   });
 
-  router.post('/:id/classify', requireRole('reviewer', 'admin'), async (req, res) => {
+  // Maintainers live with their library's deviations, so they may accept one; calling a
+  // failure a bug or a convention difference stays a reviewer's (or admin's) judgement.
+  router.post('/:id/classify', requireRole('reviewer', 'admin', 'maintainer'), async (req, res) => {
     const id = failureNumber(req.params.id);
-    const deviation = await classifyFailure(dataSource, req.user!, id, parseInput(classifyBody, req.body, 'body'));
+    const body = parseInput(classifyBody, req.body, 'body');
+    if (req.user!.role === 'maintainer' && body.classification !== 'accepted') {
+      throw new HttpError(403, { kind: 'forbidden', message: 'A maintainer may accept a deviation; calling a failure a bug or a convention difference needs the role reviewer or admin.' });
+    }
+    const deviation = await classifyFailure(dataSource, req.user!, id, body);
     res.status(201).json({ deviation: { id: deviation.id, classification: deviation.classification, scope: deviation.scope, expiresAt: deviation.expiresAt?.toISOString() ?? null } });
+  });
+
+  router.get('/:id/path', anyone, async (req, res) => {
+    res.json(await failurePath(dataSource, failureNumber(req.params.id)));
   });
 
   router.get('/:id', anyone, async (req, res) => {

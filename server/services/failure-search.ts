@@ -1,32 +1,10 @@
 import type { DataSource } from 'typeorm';
+import type { FailureView } from '../../shared/failure-view';
 import type { FailureQuery } from '../../shared/schemas/failure-query';
 import { coveredByDeviationSql } from './covered-by-deviation-sql';
 
-/** A row of the table; `rule`, `reproducer` and `limits` only when asked for (the detail and the CSV). */
-export interface FailureRow {
-  id: string;
-  runId: string;
-  suiteSlug: string;
-  suiteVersion: number;
-  targetName: string;
-  convention: string;
-  pathName: string;
-  pointIndex: number;
-  t: number;
-  label: string | null;
-  z: { re: string; im: string };
-  zHex: { re: string; im: string };
-  expected: { re: string; im: string } | null;
-  actual: { re: string; im: string } | null;
-  outcomeKind: string;
-  diagnosis: unknown;
-  ulps: number | null;
-  relativeError: number | null;
-  rule?: string;
-  reproducer?: string;
-  limits?: unknown;
-  isRegression: boolean;
-}
+/** A row of the table, as the app reads it. */
+export type FailureRow = FailureView;
 
 const COLUMNS = `id::text AS "id", run_id AS "runId", suite_slug AS "suiteSlug", suite_version AS "suiteVersion", target_name AS "targetName",
   convention, path_name AS "pathName", point_index AS "pointIndex", t, label, z, z_hex AS "zHex", expected, actual,

@@ -48,6 +48,19 @@ async function freshRun(): Promise<string> {
   return (await admin.post('/api/runs').send({ planId: await freshPlan() })).body.run.id;
 }
 
+/** A stored failure of a fresh run, at the first point of the approved suite's first path (so its path can be drawn). */
+async function freshFailure(): Promise<string> {
+  const runId = await freshRun();
+  const [shard] = await t.db.dataSource.query(`SELECT id, suite_version_id FROM shards WHERE run_id = $1 LIMIT 1`, [runId]);
+  const [version] = await t.db.dataSource.query(`SELECT body FROM suite_versions WHERE id = $1`, [shard.suite_version_id]);
+  const [row] = await t.db.dataSource.query(
+    `INSERT INTO failures (run_id, shard_id, suite_slug, suite_version, target_name, target_library, target_version, convention, path_name, point_index, t, z, z_hex, point_key, outcome_kind, diagnosis_kind, rule, reproducer)
+     VALUES ($1, $2, 'table-plan-suite', 1, $3, 'complex.js', '2.4.3', 'signed-zero', $4, 0, 0, '{"re":"1","im":"0"}', '{"re":"0x1p+0","im":"0x0p+0"}', 'k', 'fail', 'inaccurate', 'r', 'x') RETURNING id::text`,
+    [runId, shard.id, targetName, version.body.paths[0].name],
+  );
+  return row.id;
+}
+
 /** A fresh schedule of a fresh plan. */
 async function freshSchedule(): Promise<string> {
   const admin = await agentFor('admin');
@@ -186,6 +199,12 @@ const ROUTES: RouteCase[] = [
     },
     expect: { 'signed-out': 401, admin: 201, maintainer: 403, reviewer: 201, contributor: 403 },
   },
+  {
+    name: 'POST /api/failures/:id/classify (accepted deviation)',
+    call: async (a) => a.post(`/api/failures/${await freshFailure()}/classify`).send({ classification: 'accepted', reason: 'documented upstream', expiresAt: '2099-01-01T00:00:00Z' }),
+    expect: { 'signed-out': 401, admin: 201, maintainer: 201, reviewer: 201, contributor: 403 },
+  },
+  { name: 'GET /api/failures/:id/path', call: async (a) => a.get(`/api/failures/${await freshFailure()}/path`), expect: signedIn(200) },
   { name: 'GET /api/deviations', call: (a) => a.get('/api/deviations'), expect: signedIn(200) },
   {
     name: 'POST /api/deviations/:id/revoke',

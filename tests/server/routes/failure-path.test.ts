@@ -1,0 +1,135 @@
+import request from 'supertest';
+import { complexJsTarget } from '../../../harness/adapters/complex-js-target';
+import { ShardExecutor } from '../../../server/services/shard-executor';
+import type { MailOutbox } from '../../../server/services/mail-outbox';
+import type { FailurePathView } from '../../../shared/failure-path-view';
+import { approvedSuite } from '../../setup/approved-suite';
+import { signInAs } from '../../setup/sign-in-as';
+import { startTestApp, type TestApp } from '../../setup/test-app';
+
+/**
+ * Real runs of complex.js 2.4.3, which ignores the sign of zero: its failures on the
+ * straddle path of √z and on the regular branch of √(z²−1) are what the path pictures draw.
+ */
+describe('the path of a failing case', () => {
+  let t: TestApp;
+  let kwame: request.Agent;
+  const runIds: Record<string, string> = {};
+
+  async function runOf(slug: string): Promise<string> {
+    const target = (await t.db.dataSource.query(`SELECT name FROM targets WHERE name = 'complex.js@2.4.3'`))[0].name;
+    const plan = await kwame.post('/api/plans').send({ name: `path plan ${slug}`, recipients: [], suites: [slug], targets: [target] });
+    const run = (await kwame.post('/api/runs').send({ planId: plan.body.plan.id })).body.run.id as string;
+    const executor = new ShardExecutor(t.db.dataSource, { openTarget: () => complexJsTarget('complex.js', '2.4.3'), outbox: { enqueue: async () => undefined } as unknown as MailOutbox, appUrl: 'http://127.0.0.1' });
+    for (const { id } of await t.db.dataSource.query(`SELECT id FROM shards WHERE run_id = $1`, [run])) await executor.execute(id);
+    return run;
+  }
+
+  beforeAll(async () => {
+    t = await startTestApp();
+    kwame = await signInAs(t.app, 'maintainer');
+    await approvedSuite(t.db.dataSource, 'path-sqrt', 'sqrt-principal-sz');
+    await approvedSuite(t.db.dataSource, 'path-finite-cut', 'sqrt-z2-minus-1-finite-cut');
+    runIds.sqrt = await runOf('path-sqrt');
+    runIds.finite = await runOf('path-finite-cut');
+  }, 120_000);
+  afterAll(() => t.stop());
+
+  it('returns every point of the path with the stored failures in place and the principal cut of sqrt', async () => {
+    const [failure] = (await kwame.get(`/api/failures?run=${runIds.sqrt}&diagnosis=zero-sign&limit=1`)).body.failures;
+    expect(failure).toBeDefined();
+    const res = await kwame.get(`/api/failures/${failure.id}/path`);
+    expect(res.status).toBe(200);
+    const view = res.body as FailurePathView;
+    expect(view.path).toMatchObject({ name: failure.pathName, kind: 'straddle' });
+    expect(view.points).toHaveLength(view.path.points);
+    expect(view.axis).toBe('index');
+    expect(view.points[view.focusIndex]).toMatchObject({ failureId: failure.id, outcome: 'fail', diagnosis: 'zero-sign', actualFrom: 'stored' });
+    // Every stored failure of this path sits at its own index; everything else passed.
+    const stored = (await kwame.get(`/api/failures?run=${runIds.sqrt}&limit=500`)).body.failures.filter((f: { pathName: string }) => f.pathName === failure.pathName);
+    expect(view.points.filter((p) => p.outcome !== 'pass').map((p) => p.failureId).sort()).toEqual(stored.map((f: { id: string }) => f.id).sort());
+    expect(view.counts.fail).toBe(stored.length);
+    // sqrt's principal cut is the ray from 0 along the negative real axis.
+    expect(view.cuts).toEqual([{ points: [{ re: 0, im: 0 }, { re: -1, im: 0 }], toInfinity: true }]);
+    expect(view.branchPoints).toEqual([{ re: 0, im: 0 }]);
+  });
+
+  it('puts the library value of a zero-sign failure on the other side of the cut from the expected one', async () => {
+    const [failure] = (await kwame.get(`/api/failures?run=${runIds.sqrt}&diagnosis=zero-sign&limit=1`)).body.failures;
+    const view = (await kwame.get(`/api/failures/${failure.id}/path`)).body as FailurePathView;
+    const focus = view.points[view.focusIndex]!;
+    // √(−x ∓ 0i) = ±i√x: the arguments are +π/2 and −π/2.
+    expect(Math.abs(focus.expectedArg!)).toBeCloseTo(Math.PI / 2, 12);
+    expect(focus.actualArg).toBeCloseTo(-focus.expectedArg!, 12);
+  });
+
+  it('draws a regular branch with the cut of its layout and the jumps of the run', async () => {
+    const failures = (await kwame.get(`/api/failures?run=${runIds.finite}&limit=500`)).body.failures;
+    expect(failures.length).toBeGreaterThan(0);
+    const circle = failures.find((f: { pathName: string }) => !f.pathName.startsWith('across')) ?? failures[0];
+    const view = (await kwame.get(`/api/failures/${circle.id}/path`)).body as FailurePathView;
+    expect(view.suite).toMatchObject({ branch: 'regular', subject: expect.stringContaining('z') });
+    expect(view.cuts).toEqual([{ points: [{ re: -1, im: 0 }, { re: 1, im: 0 }], toInfinity: false }]);
+    expect(view.branchPoints).toEqual([{ re: -1, im: 0 }, { re: 1, im: 0 }]);
+    expect(view.points.every((p) => p.expectedArg === null || (p.expectedArg > -Math.PI - 1e-12 && p.expectedArg <= Math.PI + 1e-12))).toBe(true);
+  });
+
+  it('answers 404 for a failure that does not exist and 400 for a malformed number', async () => {
+    expect((await kwame.get('/api/failures/999999999/path')).status).toBe(404);
+    const bad = await kwame.get('/api/failures/abc/path');
+    expect(bad.status).toBe(400);
+    expect(bad.body.issues).toEqual([{ field: 'params.id', rule: 'must be a failure number' }]);
+  });
+});
+
+describe('who may classify a failure', () => {
+  let t: TestApp;
+  let failureId: string;
+  beforeAll(async () => {
+    t = await startTestApp();
+    await approvedSuite(t.db.dataSource, 'classify-sqrt');
+    const admin = await signInAs(t.app, 'admin');
+    const target = (await t.db.dataSource.query(`SELECT name FROM targets WHERE library = 'complex.js' AND installed LIMIT 1`))[0].name;
+    const plan = await admin.post('/api/plans').send({ name: 'classify plan', recipients: [], suites: ['classify-sqrt'], targets: [target] });
+    const runId = (await admin.post('/api/runs').send({ planId: plan.body.plan.id })).body.run.id;
+    const [shard] = await t.db.dataSource.query(`SELECT id FROM shards WHERE run_id = $1`, [runId]);
+    const [row] = await t.db.dataSource.query(
+      `INSERT INTO failures (run_id, shard_id, suite_slug, suite_version, target_name, target_library, target_version, convention, path_name, point_index, t, z, z_hex, point_key, outcome_kind, diagnosis_kind, diagnosis, rule, reproducer)
+       VALUES ($1, $2, 'classify-sqrt', 1, $3, 'complex.js', '2.4.3', 'signed-zero', 'p', 0, 0, '{"re":"-4","im":"-0"}', '{"re":"-0x1p+2","im":"-0x0p+0"}', 'classify-sqrt|p|k', 'fail', 'zero-sign', '{"kind":"zero-sign","part":"im","of":"input"}', 'ISO/IEC 9899:2011 G.6.4.2', 'x') RETURNING id::text`,
+      [runId, shard.id, target],
+    );
+    failureId = row.id;
+  });
+  afterAll(() => t.stop());
+
+  it('lets a maintainer accept a deviation with a reason and an expiry, recorded as theirs', async () => {
+    const kwame = await signInAs(t.app, 'maintainer');
+    const res = await kwame.post(`/api/failures/${failureId}/classify`).send({ classification: 'accepted', scope: 'point', reason: 'complex.js documents that it ignores the sign of zero.', expiresAt: '2099-01-01T00:00:00Z' });
+    expect(res.status).toBe(201);
+    expect(res.body.deviation).toMatchObject({ classification: 'accepted', scope: 'point', expiresAt: '2099-01-01T00:00:00.000Z' });
+    const [stored] = await t.db.dataSource.query(`SELECT u.email FROM deviations d JOIN users u ON u.id = d.created_by WHERE d.id = $1`, [res.body.deviation.id]);
+    expect(stored.email).toBe('kwame@sheetkeeper.test');
+    expect((await kwame.get(`/api/failures?status=accepted`)).body.failures.map((f: { id: string }) => f.id)).toContain(failureId);
+  });
+
+  it.each(['bug', 'convention-difference'])('refuses a maintainer who calls a failure %s, and stores nothing', async (classification) => {
+    const kwame = await signInAs(t.app, 'maintainer');
+    const before = (await t.db.dataSource.query(`SELECT count(*)::int AS n FROM deviations`))[0].n;
+    const res = await kwame.post(`/api/failures/${failureId}/classify`).send({ classification, reason: 'looks wrong to me' });
+    expect(res.status).toBe(403);
+    expect(res.body.kind).toBe('forbidden');
+    expect((await t.db.dataSource.query(`SELECT count(*)::int AS n FROM deviations`))[0].n).toBe(before);
+  });
+
+  it('still lets a reviewer call a failure a bug', async () => {
+    const hanne = await signInAs(t.app, 'reviewer');
+    const res = await hanne.post(`/api/failures/${failureId}/classify`).send({ classification: 'bug', reason: 'reported upstream' });
+    expect(res.status).toBe(201);
+  });
+
+  it('still refuses a contributor, even for an accepted deviation', async () => {
+    const ravi = await signInAs(t.app, 'contributor');
+    const res = await ravi.post(`/api/failures/${failureId}/classify`).send({ classification: 'accepted', reason: 'fine by me', expiresAt: '2099-01-01T00:00:00Z' });
+    expect(res.status).toBe(403);
+  });
+});
