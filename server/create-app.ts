@@ -1,4 +1,3 @@
-import connectPgSimple from 'connect-pg-simple';
 import express, { type Express } from 'express';
 import session from 'express-session';
 import helmet from 'helmet';
@@ -21,9 +20,13 @@ import { schedulesRouter } from './routes/schedules-router';
 import { subscriptionsRouter } from './routes/subscriptions-router';
 import { suitesRouter } from './routes/suites-router';
 import { targetsRouter } from './routes/targets-router';
+import { librariesRouter } from './routes/libraries-router';
 import { tokensRouter } from './routes/tokens-router';
 import { usersRouter } from './routes/users-router';
 import { configurePassport } from './services/configure-passport';
+import { createSessionStore } from './services/create-session-store';
+import { ShortLivedCache } from './services/short-lived-cache';
+import type { User } from './entities/user';
 import { RunService } from './services/run-service';
 import type { ShardQueue } from './services/shard-queue';
 import { DEFAULT_SIGN_IN_LIMITS, SignInLimiter, type SignInLimits } from './services/sign-in-limiter';
@@ -48,13 +51,19 @@ export interface SheetkeeperApp {
 
 export const SESSION_COOKIE = 'sheetkeeper.sid';
 
+/**
+ * How long this process trusts a session row and a user row it has read (see
+ * create-session-store.ts for the measurements). Changes made through this process apply at once.
+ */
+const SIGNED_IN_CACHE_MS = 2000;
+
 /** The Express app: API under /api, the exported web app everywhere else. */
 export function createApp(options: AppOptions): SheetkeeperApp {
   // Sessions are read on every API request; with 5 connections 50 concurrent readers queued here.
   const pool = new Pool({ connectionString: options.databaseUrl, max: 10 });
-  const passport = configurePassport(options.dataSource);
+  const userCache = new ShortLivedCache<User>(SIGNED_IN_CACHE_MS);
+  const passport = configurePassport(options.dataSource, userCache);
   const limiter = new SignInLimiter(pool, options.signInLimits ?? DEFAULT_SIGN_IN_LIMITS);
-  const PgStore = connectPgSimple(session);
 
   const app = express();
   app.disable('x-powered-by');
@@ -81,10 +90,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   api.use(
     session({
       name: SESSION_COOKIE,
-      // No touch: express-session would otherwise UPDATE the session row on every request, which
-      // cost the failure table most of its time at 50 concurrent clients (p95 291 ms with touches).
-      // A session therefore lasts seven days from sign-in, not from the last request.
-      store: new PgStore({ pool, tableName: 'sessions', createTableIfMissing: false, pruneSessionInterval: 15 * 60, disableTouch: true }),
+      store: createSessionStore(pool, SIGNED_IN_CACHE_MS),
       secret: options.sessionSecret,
       resave: false,
       saveUninitialized: false,
@@ -98,10 +104,11 @@ export function createApp(options: AppOptions): SheetkeeperApp {
 
   api.use('/auth', authRouter(passport, limiter));
   api.use('/me', meRouter());
-  api.use('/users', usersRouter(options.dataSource));
+  api.use('/users', usersRouter(options.dataSource, userCache));
   api.use('/suites', suitesRouter(options.dataSource));
   api.use('/outbox', outboxRouter(options.dataSource));
   api.use('/targets', targetsRouter(options.dataSource));
+  api.use('/targets', librariesRouter(options.dataSource));
   api.use('/plans', plansRouter(options.dataSource));
   api.use('/schedules', schedulesRouter(options.dataSource));
   api.use('/runs', runsRouter(options.dataSource, new RunService(options.dataSource, options.shardQueue)));

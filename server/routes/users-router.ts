@@ -6,9 +6,11 @@ import { roleChangeBody } from '../../shared/schemas/role-change-body';
 import { User } from '../entities/user';
 import { requireRole } from '../middleware/require-role';
 import { parseInput } from '../services/parse-input';
+import type { ShortLivedCache } from '../services/short-lived-cache';
 import { toPublicUser } from '../services/to-public-user';
 
-export function usersRouter(dataSource: DataSource): Router {
+/** `signedIn` is the app's cache of signed-in users: a role change drops the user's entry so it applies at once. */
+export function usersRouter(dataSource: DataSource, signedIn: ShortLivedCache<User>): Router {
   const router = Router();
   const users = dataSource.getRepository(User);
 
@@ -33,6 +35,8 @@ export function usersRouter(dataSource: DataSource): Router {
       user.role = role;
       return { status: 200, body: { user: toPublicUser(await repo.save(user)) } };
     });
+    // After the commit, so no request can cache the old role again in between.
+    if (outcome.status === 200) signedIn.delete(id);
     res.status(outcome.status).json(outcome.body);
   });
 

@@ -3,13 +3,14 @@ import { Strategy as LocalStrategy } from 'passport-local';
 import type { DataSource } from 'typeorm';
 import { User } from '../entities/user';
 import { passwords } from './passwords';
+import type { ShortLivedCache } from './short-lived-cache';
 
 /**
  * One Passport instance per app (not the global singleton), so tests can build
- * several apps side by side. The session holds only the user id; the user is
- * read again on every request, so a role change applies at once.
+ * several apps side by side. The session holds only the user id; the user is read
+ * again when `cache` has no fresh copy, and a role change drops that copy, so it applies at once.
  */
-export function configurePassport(dataSource: DataSource) {
+export function configurePassport(dataSource: DataSource, cache: ShortLivedCache<User>) {
   const passport = new Authenticator();
   const users = dataSource.getRepository(User);
   passport.use(
@@ -22,9 +23,14 @@ export function configurePassport(dataSource: DataSource) {
   );
   passport.serializeUser((user, done) => done(null, user.id));
   passport.deserializeUser((id: string, done) => {
+    const cached = cache.get(id);
+    if (cached) return done(null, users.create({ ...cached }));
     users
       .findOneBy({ id })
-      .then((user) => done(null, user ?? false))
+      .then((user) => {
+        if (user) cache.set(id, user);
+        done(null, user ? users.create({ ...user }) : false);
+      })
       .catch(done);
   });
   return passport;
