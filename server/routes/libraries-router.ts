@@ -1,0 +1,41 @@
+import { Router } from 'express';
+import type { DataSource } from 'typeorm';
+import { ROLES } from '../../shared/roles';
+import { cutMapQuery } from '../../shared/schemas/cut-map-query';
+import { fingerprintQuery } from '../../shared/schemas/fingerprint-query';
+import { targetNameParams } from '../../shared/schemas/target-name-params';
+import { versionMatrixQuery } from '../../shared/schemas/version-matrix-query';
+import { requireRole } from '../middleware/require-role';
+import { LibraryFindings } from '../services/library-findings';
+import { parseInput } from '../services/parse-input';
+
+/**
+ * What the harness finds out about installed libraries, mounted beside the targets list under
+ * /api/targets: `:name` is a target ("complex.js@2.4.3", percent-encoded when it has a slash) for
+ * the fingerprint and cut maps, and a library without its version ("complex.js") for the
+ * version matrix. Every signed-in role may read them.
+ */
+export function librariesRouter(dataSource: DataSource): Router {
+  const router = Router();
+  const findings = new LibraryFindings(dataSource);
+  const anyone = requireRole(...ROLES);
+
+  router.get('/:name/fingerprint', anyone, async (req, res) => {
+    const { name } = parseInput(targetNameParams, req.params, 'params');
+    const { fn } = parseInput(fingerprintQuery, req.query, 'query');
+    res.json(await findings.fingerprint(name, fn));
+  });
+
+  router.get('/:name/cut-map', anyone, async (req, res) => {
+    const { name } = parseInput(targetNameParams, req.params, 'params');
+    res.json(await findings.cutMap(name, parseInput(cutMapQuery, req.query, 'query')));
+  });
+
+  router.get('/:name/version-matrix', anyone, async (req, res) => {
+    const { name } = parseInput(targetNameParams, req.params, 'params');
+    const { suite } = parseInput(versionMatrixQuery, req.query, 'query');
+    res.json(await findings.versionMatrix(name, suite));
+  });
+
+  return router;
+}
