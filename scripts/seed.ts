@@ -1,11 +1,12 @@
 import 'reflect-metadata';
-import { databaseUrl } from '../server/config';
+import { databaseUrl, loadConfig } from '../server/config';
 import { createDataSource } from '../server/data-source';
 import { seedDemo } from '../server/seed/seed-demo';
 import { seedDemoCatalogue } from '../server/seed/seed-demo-catalogue';
+import { seedDemoRuns } from '../server/seed/seed-demo-runs';
 import { syncTargets } from '../server/services/sync-targets';
 
-/** `npm run seed`: demo users, the installed targets, the demo catalogue and plans — only what is missing. */
+/** `npm run seed`: demo users, the installed targets, the demo catalogue and plans, two completed demo runs — only what is missing. */
 async function main(): Promise<void> {
   const dataSource = createDataSource(databaseUrl());
   await dataSource.initialize();
@@ -13,7 +14,10 @@ async function main(): Promise<void> {
     const users = await seedDemo(dataSource);
     const targets = await syncTargets(dataSource);
     const { suites, plans } = await seedDemoCatalogue(dataSource);
-    console.log(`[sheetkeeper] demo data: ${users} user(s), ${suites} suite(s), ${plans} plan(s) added; ${targets} target(s) installed`);
+    const config = loadConfig();
+    const began = Date.now();
+    const runs = await seedDemoRuns(dataSource, { smtp: { host: config.host, port: config.smtpPort }, appUrl: config.appUrl });
+    console.log(`[sheetkeeper] demo data: ${users} user(s), ${suites} suite(s), ${plans} plan(s), ${runs} run(s) added${runs ? ` (runs took ${((Date.now() - began) / 1000).toFixed(1)} s)` : ''}; ${targets} target(s) installed`);
   } finally {
     await dataSource.destroy();
   }

@@ -24,8 +24,6 @@ log "end-to-end: preparing the e2e database, the web export and the server"
 E2E_DB=sheetkeeper_e2e
 ensure_database "$E2E_DB" fresh
 SHEETKEEPER_DB="$E2E_DB" node --import tsx scripts/migrate.ts
-SHEETKEEPER_DB="$E2E_DB" node --import tsx scripts/seed.ts
-ensure_web_export
 E2E_PORT="${SHEETKEEPER_E2E_PORT:-8461}"
 if port_answers "$E2E_PORT"; then
   [ -n "${SHEETKEEPER_E2E_PORT:-}" ] && { log "port $E2E_PORT is taken"; exit 2; }
@@ -33,6 +31,9 @@ if port_answers "$E2E_PORT"; then
   log "port 8461 is taken; the e2e server uses $E2E_PORT"
 fi
 E2E_SMTP_PORT="${SHEETKEEPER_E2E_SMTP_PORT:-$(free_port)}"
+# Seeded with the e2e ports, so the links in the demo regression mail point at this server.
+SHEETKEEPER_DB="$E2E_DB" SHEETKEEPER_PORT="$E2E_PORT" SHEETKEEPER_SMTP_PORT="$E2E_SMTP_PORT" node --import tsx scripts/seed.ts
+ensure_web_export
 SHEETKEEPER_DB="$E2E_DB" SHEETKEEPER_PORT="$E2E_PORT" SHEETKEEPER_SMTP_PORT="$E2E_SMTP_PORT" node --import tsx server/main.ts >"$OUT/e2e-server.log" 2>&1 &
 server_pid=$!
 trap 'kill "$server_pid" 2>/dev/null || true' EXIT
@@ -42,7 +43,7 @@ for _ in $(seq 1 120); do
   sleep 0.25
 done
 log "jest: end-to-end project against http://127.0.0.1:$E2E_PORT"
-SHEETKEEPER_E2E_URL="http://127.0.0.1:$E2E_PORT" npx jest -c jest.e2e.config.js --ci --json --outputFile="$OUT/e2e.json" || true
+SHEETKEEPER_E2E_URL="http://127.0.0.1:$E2E_PORT" SHEETKEEPER_E2E_SMTP_PORT="$E2E_SMTP_PORT" npx jest -c jest.e2e.config.js --ci --json --outputFile="$OUT/e2e.json" || true
 kill "$server_pid" 2>/dev/null || true
 
 log "finished in $(( $(date +%s) - began )) s"
