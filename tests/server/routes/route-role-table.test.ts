@@ -152,6 +152,9 @@ const ROUTES: RouteCase[] = [
     expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 },
   },
   { name: 'GET /api/targets', call: (a) => a.get('/api/targets'), expect: signedIn(200) },
+  { name: 'GET /api/targets/:name/fingerprint', call: (a) => a.get(`/api/targets/${encodeURIComponent(targetName)}/fingerprint?fn=sqrt`), expect: signedIn(200) },
+  { name: 'GET /api/targets/:name/cut-map', call: (a) => a.get(`/api/targets/${encodeURIComponent(targetName)}/cut-map?fn=sqrt&grid=5x5`), expect: signedIn(200) },
+  { name: 'GET /api/targets/:library/version-matrix', call: (a) => a.get('/api/targets/complex.js/version-matrix?suite=table-plan-suite'), expect: signedIn(200) },
   { name: 'GET /api/plans', call: (a) => a.get('/api/plans'), expect: signedIn(200) },
   { name: 'GET /api/plans/:id', call: async (a) => a.get(`/api/plans/${await freshPlan()}`), expect: signedIn(200) },
   {
