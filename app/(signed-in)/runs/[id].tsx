@@ -1,0 +1,8 @@
+import { useLocalSearchParams } from 'expo-router';
+import { RunDetail } from '../../../components/run-detail';
+
+/** One run, by id: progress, matrix, property checks and what was checked. */
+export default function RunScreen() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  return <RunDetail id={String(id)} />;
+}

@@ -1,0 +1,16 @@
+import { useLocalSearchParams, useRouter } from 'expo-router';
+import { runFiltersFromParams } from '../../../client/run-filters-from-params';
+import { RunsList } from '../../../components/runs-list';
+import { ScreenBody } from '../../../components/screen-body';
+
+/** Every run, newest first; the filters live in the address so a filtered list can be shared. */
+export default function RunsScreen() {
+  const params = useLocalSearchParams<{ plan?: string; status?: string; trigger?: string }>();
+  const router = useRouter();
+  const filters = runFiltersFromParams(params);
+  return (
+    <ScreenBody title="Runs" lead="Each run executes a plan: every approved suite against every installed target of the plan, one shard per pair.">
+      <RunsList filters={filters} onFiltersChange={(next) => router.setParams({ plan: next.plan, status: next.status, trigger: next.trigger })} />
+    </ScreenBody>
+  );
+}

@@ -1,0 +1,4 @@
+/** The failure table filtered to one suite × target of one run: `/failures?run=…&suite=…&target=…`. */
+export function failuresHref(run: string, suite: string, target: string): string {
+  return `/failures?${new URLSearchParams({ run, suite, target }).toString()}`;
+}
