@@ -10,7 +10,10 @@ export function formatTimeInZone(iso: string, timeZone: string, now: Date = new 
   } catch {
     zone = 'UTC';
   }
-  const when = new Intl.DateTimeFormat('en-GB', { timeZone: zone, weekday: 'short', day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(at);
+  // Built from parts: ICU versions (Node, Chromium) disagree on the commas of the whole string.
+  const parts = new Intl.DateTimeFormat('en-GB', { timeZone: zone, weekday: 'short', day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).formatToParts(at);
+  const part = (type: Intl.DateTimeFormatPartTypes) => parts.find((p) => p.type === type)?.value ?? '';
+  const when = `${part('weekday')} ${part('day')} ${part('month')} ${part('year')}, ${part('hour')}:${part('minute')}`;
   const minutes = Math.round((at.getTime() - now.getTime()) / 60_000);
   const span = Math.abs(minutes);
   const amount = span < 1 ? 'less than a minute' : span < 60 ? `${span} min` : span < 48 * 60 ? `${Math.round(span / 60)} h` : `${Math.round(span / (24 * 60))} days`;

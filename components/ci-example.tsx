@@ -19,7 +19,8 @@ export function CiExample({ role }: { role: Role }) {
   const mayStart = role === 'maintainer' || role === 'admin';
 
   const curl = [
-    `# Start a run of “${plan?.name ?? 'a plan'}”; the answer (202) is the queued run as JSON.`,
+    `# Start a run of “${plan?.name ?? 'a plan'}”.`,
+    `# The answer (202) is the queued run as JSON.`,
     `curl --fail -X POST "${origin}/api/runs" \\`,
     `  -H "Authorization: Bearer $SHEETKEEPER_TOKEN" \\`,
     `  -H "Content-Type: application/json" \\`,
@@ -72,5 +73,5 @@ const styles = StyleSheet.create({
   chipOn: { backgroundColor: theme.color.accentSoft, borderColor: theme.color.accent },
   chipText: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink },
   chipTextOn: { fontFamily: theme.font.medium, color: theme.color.accent },
-  code: { fontFamily: theme.font.mono, fontSize: 12, lineHeight: 18, color: theme.color.navInk, backgroundColor: theme.color.nav, padding: theme.space(3), borderRadius: theme.radius, overflow: 'scroll', whiteSpace: 'pre' } as object,
+  code: { fontFamily: theme.font.mono, fontSize: 12, lineHeight: 18, color: theme.color.navInk, backgroundColor: theme.color.nav, padding: theme.space(3), borderRadius: theme.radius, whiteSpace: 'pre-wrap', wordBreak: 'break-word' } as object,
 });

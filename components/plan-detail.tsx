@@ -89,10 +89,18 @@ export function PlanDetail({ plan, canEdit }: { plan: PlanView; canEdit: boolean
           A run checks only the points, paths, conventions and properties written in these suites, on these targets. A clean run is evidence for those checks, not a certificate for the library.
         </Text>
       </View>
-      <View style={[styles.layout, wide && styles.layoutWide]}>
-        <View style={wide ? styles.main : undefined}>{contents}</View>
-        <View style={wide ? styles.aside : undefined}>{side}</View>
-      </View>
+      {/* On a phone, running and scheduling come first: the suite list can be long. */}
+      {wide ? (
+        <View style={[styles.layout, styles.layoutWide]}>
+          <View style={styles.main}>{contents}</View>
+          <View style={styles.aside}>{side}</View>
+        </View>
+      ) : (
+        <View style={styles.layout}>
+          {side}
+          {contents}
+        </View>
+      )}
       {canEdit ? (
         <View style={styles.manage}>
           <ActionButton label="Edit plan" tone="quiet" onPress={() => setEditing(true)} />

@@ -63,7 +63,7 @@ export function PlanForm({ plan, onSaved, onCancel }: { plan?: PlanView; onSaved
     setSubmitted(true);
     const result = validate(values());
     if (!result.success) return;
-    save.mutate(result.data, { onSuccess: onSaved });
+    save.mutate(result.data, { onSuccess: (plan) => onSaved(plan) });
   };
 
   const fromServer = serverFieldErrors(save.error);

@@ -55,7 +55,7 @@ export function ScheduleEditor({ planId, schedule, onDone }: { planId: string; s
       return;
     }
     setSubmitErrors({});
-    save.mutate(checked.data, { onSuccess: onDone });
+    save.mutate(checked.data, { onSuccess: () => onDone() });
   };
 
   return (

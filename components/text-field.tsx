@@ -24,6 +24,7 @@ export function TextField({ label, value, onChangeText, error, testID, mono = fa
         style={[styles.input, mono ? styles.mono : null, inputProps.multiline ? styles.multiline : null, error ? styles.inputError : null]}
         testID={testID}
         autoCorrect={false}
+        placeholderTextColor={theme.color.inkFaint}
         {...inputProps}
       />
       {error ? (
