@@ -15,8 +15,16 @@ export interface PlanePictureProps {
   label: string;
   /** Sampled paths, drawn as lines in the order given, with an arrow for the direction of travel. */
   paths?: { name: string; points: PlanePoint[] }[];
+  /** Separate sample points (a straddle's points on both sides of a cut), drawn as small hollow dots, not joined. */
+  pointSets?: { name: string; points: PlanePoint[] }[];
   /** Expected cuts: polylines, the last segment continued to the edge when `toInfinity`. */
   cuts?: { points: PlanePoint[]; toInfinity: boolean }[];
+  /**
+   * Lines found by sampling (where a target's function is really discontinuous), drawn thin
+   * through their points with a marker at each: a dot, or a cross for what should not be there.
+   * The legend names each distinct `name`.
+   */
+  lines?: { name: string; points: PlanePoint[]; marker: 'dot' | 'cross' }[];
   /** Branch points, drawn as rings. */
   branchPoints?: PlanePoint[];
   /** Evaluated points, each with a tone that has its own shape as well as its own colour. */
@@ -35,10 +43,10 @@ const PAD = 28;
  * axes, so angles and circles look like what they are. Each mark tone has a distinct shape and
  * the legend names it, so colour never carries the meaning alone.
  */
-export function PlanePicture({ label, paths = [], cuts = [], branchPoints = [], marks = [], view, height = 320, testID }: PlanePictureProps) {
+export function PlanePicture({ label, paths = [], pointSets = [], cuts = [], lines = [], branchPoints = [], marks = [], view, height = 320, testID }: PlanePictureProps) {
   const [width, setWidth] = useState(0);
   const onLayout = (e: LayoutChangeEvent) => setWidth(Math.round(e.nativeEvent.layout.width));
-  const box = view ?? fitPlaneView([...paths.flatMap((p) => p.points), ...cuts.flatMap((c) => c.points), ...branchPoints, ...marks.map((m) => m.at)]);
+  const box = view ?? fitPlaneView([...paths.flatMap((p) => p.points), ...pointSets.flatMap((p) => p.points), ...cuts.flatMap((c) => c.points), ...branchPoints, ...marks.map((m) => m.at)]);
   const innerW = Math.max(1, width - 2 * PAD);
   const innerH = Math.max(1, height - 2 * PAD);
   // Equal scale: the box is widened along one axis to the picture's aspect ratio.
@@ -86,6 +94,18 @@ export function PlanePicture({ label, paths = [], cuts = [], branchPoints = [], 
                 />
               );
             })}
+            {lines.map((line, i) => {
+              const pts = line.points.filter(visible);
+              const color = line.marker === 'cross' ? theme.color.danger : theme.color.ink;
+              return (
+                <G key={`line-${i}`}>
+                  {pts.length > 1 ? <Polyline points={pts.map((p) => `${x(p.re)},${y(p.im)}`).join(' ')} fill="none" stroke={color} strokeWidth={1.5} /> : null}
+                  {pts.map((p, k) => (
+                    <LineMarker key={k} cx={x(p.re)} cy={y(p.im)} marker={line.marker} />
+                  ))}
+                </G>
+              );
+            })}
             {paths.map((path, i) => {
               const pts = path.points.filter(visible);
               if (pts.length < 2) return null;
@@ -100,6 +120,13 @@ export function PlanePicture({ label, paths = [], cuts = [], branchPoints = [], 
                 </G>
               );
             })}
+            {pointSets.map((set, i) => (
+              <G key={`set-${i}`}>
+                {set.points.filter(visible).map((p, k) => (
+                  <PointDot key={k} cx={x(p.re)} cy={y(p.im)} />
+                ))}
+              </G>
+            ))}
             {marks.filter((m) => visible(m.at)).map((m, i) => (
               <MarkShape key={`mark-${i}`} cx={x(m.at.re)} cy={y(m.at.im)} tone={m.tone} />
             ))}
@@ -115,6 +142,12 @@ export function PlanePicture({ label, paths = [], cuts = [], branchPoints = [], 
             <Line x1={1} x2={17} y1={8} y2={8} stroke={theme.color.danger} strokeWidth={3} strokeDasharray="5 3" />
           </LegendItem>
         ) : null}
+        {[...new Map(lines.map((l) => [`${l.marker} ${l.name}`, l])).values()].map((l) => (
+          <LegendItem key={`${l.marker} ${l.name}`} text={l.name}>
+            <Line x1={1} x2={17} y1={8} y2={8} stroke={l.marker === 'cross' ? theme.color.danger : theme.color.ink} strokeWidth={1.5} />
+            <LineMarker cx={9} cy={8} marker={l.marker} />
+          </LegendItem>
+        ))}
         {branchPoints.length ? (
           <LegendItem text="branch point">
             <BranchPointShape cx={9} cy={8} />
@@ -123,6 +156,11 @@ export function PlanePicture({ label, paths = [], cuts = [], branchPoints = [], 
         {paths.length ? (
           <LegendItem text={paths.length === 1 ? `path ${paths[0]!.name}` : `${paths.length} paths`}>
             <Line x1={1} x2={17} y1={8} y2={8} stroke={theme.color.ink} strokeWidth={1.5} />
+          </LegendItem>
+        ) : null}
+        {pointSets.length ? (
+          <LegendItem text={pointSets.length === 1 ? `points of ${pointSets[0]!.name}` : `points of ${pointSets.length} straddles`}>
+            <PointDot cx={9} cy={8} />
           </LegendItem>
         ) : null}
         {tonesShown.map((tone) => (
@@ -152,6 +190,15 @@ function MarkShape({ cx, cy, tone }: { cx: number; cy: number; tone: MarkTone })
     case 'focus':
       return <Circle cx={cx} cy={cy} r={10} fill="none" stroke={color} strokeWidth={3} />;
   }
+}
+
+function PointDot({ cx, cy }: { cx: number; cy: number }) {
+  return <Circle cx={cx} cy={cy} r={2.5} fill={theme.color.panel} stroke={theme.color.ink} strokeWidth={1.2} />;
+}
+
+function LineMarker({ cx, cy, marker }: { cx: number; cy: number; marker: 'dot' | 'cross' }) {
+  if (marker === 'dot') return <Circle cx={cx} cy={cy} r={2.5} fill={theme.color.ink} />;
+  return <Path d={`M ${cx - 4} ${cy - 4} L ${cx + 4} ${cy + 4} M ${cx - 4} ${cy + 4} L ${cx + 4} ${cy - 4}`} stroke={theme.color.danger} strokeWidth={2} />;
 }
 
 function BranchPointShape({ cx, cy }: { cx: number; cy: number }) {

@@ -1,0 +1,60 @@
+import { StyleSheet, Text, TextInput, View } from 'react-native';
+import { theme } from '../constants/theme';
+import { RuleLines } from './rule-lines';
+
+interface Props {
+  label: string;
+  value: string;
+  onChangeText: (text: string) => void;
+  /** The rules this field breaks, shown beside it (under it on a phone). */
+  rules?: string[];
+  hint?: string;
+  mono?: boolean;
+  multiline?: boolean;
+  /** Shown inline but kept out of the accessible name when the label repeats context (e.g. "re"). */
+  visibleLabel?: string;
+  testID?: string;
+}
+
+/** A labelled text input of the suite form; what was typed is kept exactly as typed. */
+export function FormTextInput({ label, value, onChangeText, rules = [], hint, mono = false, multiline = false, visibleLabel, testID }: Props) {
+  return (
+    <View style={styles.field}>
+      <Text style={styles.label}>{visibleLabel ?? label}</Text>
+      <TextInput
+        accessibilityLabel={label}
+        aria-invalid={rules.length > 0 ? true : undefined}
+        value={value}
+        onChangeText={onChangeText}
+        multiline={multiline}
+        autoCorrect={false}
+        autoCapitalize="none"
+        style={[styles.input, mono && styles.mono, multiline && styles.multiline, rules.length > 0 && styles.invalid]}
+        testID={testID}
+      />
+      {hint ? <Text style={styles.hint}>{hint}</Text> : null}
+      <RuleLines rules={rules.map((r) => `${visibleLabel ?? label} ${r}`)} />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  field: { gap: theme.space(1), flexGrow: 1, flexBasis: 140, minWidth: 0 },
+  label: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft },
+  input: {
+    minHeight: theme.touch,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    paddingHorizontal: theme.space(3),
+    fontFamily: theme.font.regular,
+    fontSize: theme.size.body,
+    color: theme.color.ink,
+    backgroundColor: theme.color.panel,
+    minWidth: 0,
+  },
+  mono: { fontFamily: theme.font.mono },
+  multiline: { minHeight: 88, paddingVertical: theme.space(2), textAlignVertical: 'top' },
+  invalid: { borderColor: theme.color.danger, borderWidth: 2 },
+  hint: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkFaint },
+});
