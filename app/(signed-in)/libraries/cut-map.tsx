@@ -1,0 +1,20 @@
+import { router, useLocalSearchParams } from 'expo-router';
+import { CrumbLink } from '../../../components/crumb-link';
+import { CutMapView } from '../../../components/cut-map-view';
+import { QueryState } from '../../../components/query-state';
+import { ScreenBody } from '../../../components/screen-body';
+
+/** Where one function of a target is really discontinuous over a box, against the expected cuts. */
+export default function CutMapScreen() {
+  const { name, fn } = useLocalSearchParams<{ name?: string; fn?: string }>();
+  return (
+    <ScreenBody title={name && fn ? `Cut map of ${fn}` : 'Cut map'} lead={name ? `${name}, sampled on a grid: every jump between neighbouring grid points is narrowed down, then compared with where the reference puts the cuts.` : undefined}>
+      {name ? <CrumbLink label={name} onPress={() => router.navigate({ pathname: '/libraries/target', params: { name } })} /> : null}
+      {name && fn ? (
+        <CutMapView name={name} fn={fn} onChooseFn={(next) => router.setParams({ fn: next })} />
+      ) : (
+        <QueryState state="error" message="No target or function named in the address." />
+      )}
+    </ScreenBody>
+  );
+}

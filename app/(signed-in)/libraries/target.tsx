@@ -1,0 +1,20 @@
+import { router, useLocalSearchParams } from 'expo-router';
+import { CrumbLink } from '../../../components/crumb-link';
+import { QueryState } from '../../../components/query-state';
+import { ScreenBody } from '../../../components/screen-body';
+import { TargetFingerprint } from '../../../components/target-fingerprint';
+
+/** One target: which convention it appears to follow on each cut of each function, with the evidence. */
+export default function TargetScreen() {
+  const { name } = useLocalSearchParams<{ name?: string }>();
+  return (
+    <ScreenBody title={name ? `${name}` : 'Library'} lead="Convention fingerprint: on each cut of each function, what this version returns exactly on the cut with +0 and with −0.">
+      <CrumbLink label="Libraries" onPress={() => router.navigate('/libraries')} />
+      {name ? (
+        <TargetFingerprint name={name} onOpenCutMap={(fn) => router.push({ pathname: '/libraries/cut-map', params: { name, fn } })} />
+      ) : (
+        <QueryState state="error" message="No target named in the address." />
+      )}
+    </ScreenBody>
+  );
+}
