@@ -12,6 +12,7 @@ import type { DiagnosisKind } from '../../shared/diagnosis';
 import type { FailurePathPoint, FailurePathView, PlaneXY } from '../../shared/failure-path-view';
 import type { OutcomeCounts, WireComplex } from '../../shared/run-result';
 import type { Suite } from '../../shared/schemas/suite-schema';
+import { wireNumber } from '../../shared/wire-number';
 import type { SuitePath } from '../../shared/schemas/suite-path-schema';
 import type { SubjectExpr } from '../../harness/expressions/subject-expr';
 import type { ExpectedColumn } from '../../harness/runner/expectation';
@@ -23,7 +24,6 @@ const MAX_POINTS = 20_000;
 const RECENT_PATHS = 64;
 const recent = new Map<string, { points: PathPoint[]; expected: ExpectedColumn }>();
 
-const wireNumber = (s: string): number => (s === 'inf' ? Infinity : s === '-inf' ? -Infinity : s === 'nan' ? NaN : s === '-0' ? -0 : Number(s));
 const argOf = (re: number, im: number): number | null => (Number.isFinite(re) && Number.isFinite(im) ? Math.atan2(im, re) : null);
 const xy = (re: number, im: number): PlaneXY | null => (Number.isFinite(re) && Number.isFinite(im) ? { re, im } : null);
 
