@@ -1,0 +1,14 @@
+import { useLocalSearchParams } from 'expo-router';
+import { useSuite } from '../../../../client/use-suite';
+import { ScreenBody } from '../../../../components/screen-body';
+import { SuiteDetail } from '../../../../components/suite-detail';
+
+export default function SuiteScreen() {
+  const { slug } = useLocalSearchParams<{ slug: string }>();
+  const suite = useSuite(slug);
+  return (
+    <ScreenBody title={suite.data?.[0]?.body.title ?? 'Suite'}>
+      <SuiteDetail slug={slug} />
+    </ScreenBody>
+  );
+}
