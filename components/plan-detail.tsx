@@ -89,18 +89,15 @@ export function PlanDetail({ plan, canEdit }: { plan: PlanView; canEdit: boolean
           A run checks only the points, paths, conventions and properties written in these suites, on these targets. A clean run is evidence for those checks, not a certificate for the library.
         </Text>
       </View>
-      {/* On a phone, running and scheduling come first: the suite list can be long. */}
-      {wide ? (
-        <View style={[styles.layout, styles.layoutWide]}>
-          <View style={styles.main}>{contents}</View>
-          <View style={styles.aside}>{side}</View>
-        </View>
-      ) : (
-        <View style={styles.layout}>
-          {side}
-          {contents}
-        </View>
-      )}
+      {/* On a phone, running and scheduling come first: the suite list can be long. Keyed, so turning
+          the screen moves the panels without remounting them (a schedule being edited keeps its text). */}
+      <View style={[styles.layout, wide && styles.layoutWide]}>
+        {(wide ? ['contents', 'side'] : ['side', 'contents']).map((part) => (
+          <View key={part} style={wide ? (part === 'contents' ? styles.main : styles.aside) : undefined}>
+            {part === 'contents' ? contents : side}
+          </View>
+        ))}
+      </View>
       {canEdit ? (
         <View style={styles.manage}>
           <ActionButton label="Edit plan" tone="quiet" onPress={() => setEditing(true)} />
