@@ -28,7 +28,12 @@ const plural = (x: number, word: string) => `${n(x)} ${word}${x === 1 ? '' : 's'
  */
 export function CheckedScopeNote({ scopes, pairsNotChecked = 0, properties, subject = 'matrix' }: CheckedScopeNoteProps) {
   const conventions = [...new Set(scopes.map((s) => s.convention))];
-  const branches = [...new Set(scopes.map((s) => s.branch))];
+  // Each regular branch states its own point and cut layout; here they are counted, the matrix cells name them.
+  const principal = scopes.filter((s) => /^principal/i.test(s.branch)).length;
+  const regular = scopes.length - principal;
+  const branches = [principal ? `principal branches (${plural(principal, 'pair')})` : null, regular ? `regular branches fixed by a value at a point and continued along the paths (${plural(regular, 'pair')})` : null].filter(
+    (b): b is string => b !== null,
+  );
   const tolerances = [...new Set(scopes.map((s) => s.tolerance))];
   const paths = scopes.reduce((sum, s) => sum + s.paths, 0);
   const points = scopes.reduce((sum, s) => sum + s.points, 0);

@@ -46,7 +46,8 @@ export function FilterChips<V extends string>({
 }
 
 const styles = StyleSheet.create({
-  group: { gap: theme.space(1) },
+  // Never wider than its row, so the chips wrap instead of running off a phone's edge.
+  group: { gap: theme.space(1), maxWidth: '100%' },
   label: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkFaint, textTransform: 'uppercase', letterSpacing: 0.8 },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
   chip: { minHeight: 44, justifyContent: 'center', paddingHorizontal: theme.space(3), borderRadius: theme.radius, borderWidth: 1, borderColor: theme.color.rule, backgroundColor: theme.color.panel },

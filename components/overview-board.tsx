@@ -70,7 +70,7 @@ export function OverviewBoard({ user }: { user: PublicUser }) {
       ) : (
         <View style={[styles.cards, wide && styles.cardsWide]}>
           {plans.map((plan) => (
-            <PlanLatestCard key={plan.planId} plan={plan} />
+            <PlanLatestCard key={plan.planId} plan={plan} inRow={wide} />
           ))}
         </View>
       )}

@@ -20,10 +20,10 @@ function change(latest: Counts, previous: Counts): string {
 }
 
 /** A plan on the Overview: its latest finished run (status, counts, regressions, change since the run before), or that it never ran. */
-export function PlanLatestCard({ plan, now }: { plan: OverviewView['plans'][number]; now?: number }) {
+export function PlanLatestCard({ plan, now, inRow = false }: { plan: OverviewView['plans'][number]; now?: number; inRow?: boolean }) {
   const run = plan.latest;
   return (
-    <View style={styles.card} testID={`plan-${plan.planName}`}>
+    <View style={[styles.card, inRow && styles.inRow]} testID={`plan-${plan.planName}`}>
       <Text style={styles.plan}>{plan.planName}</Text>
       {run ? (
         <>
@@ -63,7 +63,9 @@ export function PlanLatestCard({ plan, now }: { plan: OverviewView['plans'][numb
 }
 
 const styles = StyleSheet.create({
-  card: { backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, padding: theme.space(4), gap: theme.space(2), flexGrow: 1, flexBasis: 320 },
+  card: { backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, padding: theme.space(4), gap: theme.space(2) },
+  // Only beside other cards: in a column a basis would set the height.
+  inRow: { flexGrow: 1, flexBasis: 320 },
   plan: { fontFamily: theme.font.bold, fontSize: theme.size.body, color: theme.color.ink },
   meta: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
   regressions: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },

@@ -1,4 +1,5 @@
-import { StyleSheet, View } from 'react-native';
+import { useState } from 'react';
+import { Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import type { RunFilters as Filters } from '../client/use-runs';
 import { theme } from '../constants/theme';
 import { RUN_STATUSES, RUN_TRIGGERS, type RunStatus, type RunTrigger } from '../shared/run-status';
@@ -7,9 +8,19 @@ import { FilterChips } from './filter-chips';
 const STATUS_WORDS: Record<RunStatus, string> = { queued: '… queued', running: '↻ running', completed: 'completed', failed: '◊ run failed', cancelled: '× cancelled' };
 const TRIGGER_WORDS: Record<RunTrigger, string> = { schedule: 'scheduled', manual: 'by hand', api: 'via API' };
 
-/** The Runs list's filters: plan, status and trigger, each "any" or one value. */
+/**
+ * The Runs list's filters: plan, status and trigger, each "any" or one value. On a phone they
+ * fold behind one button that says which filters are on, so the runs start near the top.
+ */
 export function RunFilters({ value, plans, onChange }: { value: Filters; plans: { id: string; name: string }[]; onChange: (next: Filters) => void }) {
-  return (
+  const wide = useWindowDimensions().width >= theme.wide;
+  const [open, setOpen] = useState(false);
+  const planName = plans.find((p) => p.id === value.plan)?.name;
+  const on = [value.plan ? (planName ?? 'one plan') : null, value.status ? STATUS_WORDS[value.status] : null, value.trigger ? TRIGGER_WORDS[value.trigger] : null].filter(
+    (x): x is string => x !== null,
+  );
+
+  const chips = (
     <View style={styles.box}>
       <FilterChips
         label="Plan"
@@ -33,9 +44,34 @@ export function RunFilters({ value, plans, onChange }: { value: Filters; plans: 
       </View>
     </View>
   );
+  if (wide) return chips;
+  return (
+    <View style={styles.box}>
+      <Pressable accessibilityRole="button" accessibilityLabel="Filter runs" aria-expanded={open} onPress={() => setOpen((v) => !v)} style={styles.toggle}>
+        <Text style={styles.toggleText}>{open ? '↑' : '↓'} Filter runs</Text>
+        <Text style={styles.summary} numberOfLines={2}>
+          {on.length ? on.join(' · ') : 'all runs'}
+        </Text>
+      </Pressable>
+      {open ? chips : null}
+    </View>
+  );
 }
 
 const styles = StyleSheet.create({
   box: { gap: theme.space(3) },
   pair: { flexDirection: 'row', flexWrap: 'wrap', columnGap: theme.space(6), rowGap: theme.space(3) },
+  toggle: {
+    minHeight: theme.touch,
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: theme.space(3),
+    paddingHorizontal: theme.space(3),
+    borderRadius: theme.radius,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    backgroundColor: theme.color.panel,
+  },
+  toggleText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
+  summary: { flex: 1, textAlign: 'right', fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
 });

@@ -7,6 +7,8 @@ import { describeMatrixCell, type MatrixCellWords } from './describe-matrix-cell
 import { failuresHref } from './failures-href';
 import { OUTCOME_TONE } from './outcome-tone';
 
+const SUITE_COLUMN = 300;
+const TARGET_COLUMN_MIN = 190;
 const byName = (a: string, b: string) => a.localeCompare(b, 'en', { numeric: true });
 
 /**
@@ -17,6 +19,7 @@ const byName = (a: string, b: string) => a.localeCompare(b, 'en', { numeric: tru
 export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCell[] }) {
   const wide = useWindowDimensions().width >= theme.wide;
   const [onlyProblems, setOnlyProblems] = useState(false);
+  const [boxWidth, setBoxWidth] = useState(0);
   const targets = [...new Set(cells.map((c) => c.target))].sort(byName);
   const described = new Map(cells.map((c) => [`${c.suite}\u0000${c.target}`, { cell: c, words: describeMatrixCell(c) }]));
   const allSuites = [...new Set(cells.map((c) => c.suite))].sort(byName);
@@ -44,8 +47,11 @@ export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCel
     return <MatrixCellView key={target} runId={runId} cell={entry.cell} words={entry.words} layout={layout} />;
   };
 
+  // A definite width for the grid: in a horizontal scroller, flexible columns would otherwise size to their longest text.
+  const gridWidth = Math.max(boxWidth, SUITE_COLUMN + targets.length * TARGET_COLUMN_MIN);
+
   return (
-    <View style={styles.box}>
+    <View style={styles.box} onLayout={(e) => setBoxWidth(e.nativeEvent.layout.width)}>
       <Text style={styles.summary}>
         {allSuites.length} suite{allSuites.length === 1 ? '' : 's'} × {targets.length} target{targets.length === 1 ? '' : 's'}: ✓ {tally.pass} passed · ❌ {tally.fail} with failures · ◊{' '}
         {tally.error} error{tally.other ? ` · ${tally.other} not finished or cancelled` : ''}
@@ -62,7 +68,7 @@ export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCel
       {suites.length === 0 ? <Text style={styles.details}>Every suite passed on every target.</Text> : null}
       {wide ? (
         <ScrollView horizontal contentContainerStyle={styles.gridScroll}>
-          <View style={styles.grid} role="table" aria-label="Run matrix">
+          <View style={[styles.grid, { width: gridWidth }]} role="table" aria-label="Run matrix">
             <View style={styles.gridRow} role="row">
               <Text role="columnheader" style={[styles.gridHead, styles.suiteCol]}>
                 Suite ↓ · target →
@@ -142,11 +148,11 @@ const styles = StyleSheet.create({
   toggleText: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink },
   toggleTextOn: { color: theme.color.accentInk, fontFamily: theme.font.medium },
   gridScroll: { flexGrow: 1 },
-  grid: { flexGrow: 1, backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius },
+  grid: { backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius },
   gridRow: { flexDirection: 'row', alignItems: 'stretch', borderBottomWidth: 1, borderBottomColor: theme.color.rule },
   gridHead: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkFaint, paddingVertical: theme.space(2), paddingHorizontal: theme.space(3) },
-  suiteCol: { width: 300, paddingHorizontal: theme.space(3), paddingVertical: theme.space(2), alignSelf: 'center' },
-  targetCol: { flex: 1, minWidth: 190, padding: theme.space(1) },
+  suiteCol: { width: SUITE_COLUMN, paddingHorizontal: theme.space(3), paddingVertical: theme.space(2), alignSelf: 'center' },
+  targetCol: { flex: 1, flexBasis: 0, minWidth: TARGET_COLUMN_MIN, padding: theme.space(1) },
   suiteName: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.ink },
   gridCell: { flex: 1, minHeight: theme.touch, padding: theme.space(2), borderLeftWidth: 4, borderRadius: 4, justifyContent: 'center' },
   rowCell: { minHeight: theme.touch, flexDirection: 'row', alignItems: 'center', gap: theme.space(3), padding: theme.space(3), borderLeftWidth: 4, borderRadius: 4 },

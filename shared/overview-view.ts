@@ -25,7 +25,7 @@ export interface SubscribedRegression {
 
 /** Everything the Overview screen shows, in one answer (`GET /api/overview`). */
 export interface OverviewView {
-  /** Every plan with its latest finished run and the completed run before it, for the change in counts. */
+  /** Every plan with its latest finished run and the completed run before it, for the change in counts; most recently run first, then plans never run. */
   plans: {
     planId: string;
     planName: string;

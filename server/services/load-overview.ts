@@ -38,7 +38,7 @@ export async function loadOverview(dataSource: DataSource, user: User): Promise<
                            ORDER BY r.created_at DESC LIMIT 1) latest ON true
        LEFT JOIN LATERAL (SELECT r.id FROM runs r WHERE r.plan_id = p.id AND r.status = 'completed' AND r.created_at < latest.created_at
                            ORDER BY r.created_at DESC LIMIT 1) previous ON true
-      ORDER BY p.name`,
+      ORDER BY latest.created_at DESC NULLS LAST, p.name`,
   );
   const runIds = plans.flatMap((p) => [p.latest, p.previous]).filter((id): id is string => id !== null);
   const runs = runIds.length ? await dataSource.getRepository(Run).find({ where: { id: In(runIds) }, relations: RUN_RELATIONS }) : [];

@@ -16,12 +16,16 @@ describe('CheckedScopeNote', () => {
   it('states the conventions, paths, points and properties behind the result, and that green is evidence for those points only', () => {
     render(
       <CheckedScopeNote
-        scopes={[scope({}), scope({ convention: 'counter-clockwise', paths: 2, points: 1000, tolerance: '1e-12 relative' })]}
+        scopes={[
+          scope({}),
+          scope({ convention: 'counter-clockwise', paths: 2, points: 1000, tolerance: '1e-12 relative', branch: 'the regular branch of (z^2 - 1)^(1/2) with k = 0 at z0 = 2 + 0i, cut along 1 cut(s)' }),
+        ]}
         properties={{ held: 3, failed: 1, notChecked: 2 }}
       />,
     );
     expect(screen.getByText('• 2 suite × target pairs, 5 paths, 1,120 points in all.')).toBeTruthy();
     expect(screen.getByText('• Conventions: signed zero (IEC 60559 / ISO C Annex G); counter-clockwise continuity.')).toBeTruthy();
+    expect(screen.getByText('• Branches: principal branches (1 pair); regular branches fixed by a value at a point and continued along the paths (1 pair).')).toBeTruthy();
     expect(screen.getByText('• Tolerances: 4 ulps; 1e-12 relative.')).toBeTruthy();
     expect(screen.getByText('• Property checks: 4 laws run on drawn points (3 held, 1 failed), 2 not checked.')).toBeTruthy();
     expect(screen.getByText('A green matrix is evidence for these 1,120 points under these conventions only — not a certificate that the library is right everywhere.')).toBeTruthy();

@@ -77,6 +77,11 @@ describe('RunsList', () => {
     const calls = api([run(1), run(2, { planId: RELEASE, planName: 'mathjs before release', trigger: 'manual', status: 'cancelled' })]);
     renderWithClient(<Harness />);
     await screen.findByTestId(`run-${run(1).id}`);
+    // On a phone the filters fold behind one button that says which are on.
+    expect(screen.queryByRole('radio', { name: 'Plan: mathjs before release' })).toBeNull();
+    expect(screen.getByText('all runs')).toBeTruthy();
+    await act(() => fireEvent.click(screen.getByRole('button', { name: 'Filter runs' })));
+    expect(screen.getByRole('button', { name: 'Filter runs' }).getAttribute('aria-expanded')).toBe('true');
     await act(() => fireEvent.click(screen.getByRole('radio', { name: 'Plan: mathjs before release' })));
     await waitFor(() => expect(screen.queryByTestId(`run-${run(1).id}`)).toBeNull());
     expect(screen.getByTestId(`run-${run(2).id}`)).toBeTruthy();
@@ -86,6 +91,7 @@ describe('RunsList', () => {
     await act(() => fireEvent.click(screen.getByRole('radio', { name: 'Trigger: by hand' })));
     await screen.findByTestId(`run-${run(2).id}`);
     expect(runCalls(calls).at(-1)).toBe(`/api/runs?limit=25&plan=${RELEASE}&status=cancelled&trigger=manual`);
+    expect(screen.getByText('mathjs before release · × cancelled · by hand')).toBeTruthy();
     await act(() => fireEvent.click(screen.getByRole('radio', { name: 'Plan: any plan' })));
     await waitFor(() => expect(runCalls(calls).at(-1)).toBe('/api/runs?limit=25&status=cancelled&trigger=manual'));
   });

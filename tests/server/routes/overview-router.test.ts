@@ -75,10 +75,12 @@ describe('GET /api/overview', () => {
     expect(view.inProgress.map((r) => r.id)).not.toContain(runs.latest);
   });
 
-  it('shows a plan that never ran with no latest run', async () => {
+  it('shows a plan that never ran with no latest run, after the plans that ran', async () => {
     const plan = await kwame.post('/api/plans').send({ name: 'overview never ran', recipients: [], suites: ['overview-sqrt'], targets: [complexJs] });
     const view = await overview(kwame);
     expect(view.plans.find((p) => p.planId === plan.body.plan.id)).toEqual({ planId: plan.body.plan.id, planName: 'overview never ran', latest: null, previous: null });
+    // Plans that ran come first, most recent first; then those that never ran.
+    expect(view.plans.findIndex((p) => p.planId === planId)).toBeLessThan(view.plans.findIndex((p) => p.planId === plan.body.plan.id));
   });
 
   it('counts regressions on subscribed libraries in the latest completed run, leaving out accepted deviations and other libraries', async () => {

@@ -1,0 +1,108 @@
+import { DEMO_USERS } from '../../server/seed/demo-users';
+import { BASE_URL, openBrowser, type OpenBrowser } from './support/open-browser';
+import { goTo } from './support/go-to';
+import { saveScreenshots } from './support/save-screenshots';
+import { signIn } from './support/sign-in';
+
+let b: OpenBrowser;
+beforeEach(async () => {
+  b = await openBrowser();
+});
+afterEach(async () => {
+  const errors = [...b.pageErrors];
+  await b.close();
+  expect(errors).toEqual([]);
+});
+
+const kwame = DEMO_USERS.find((u) => u.email === 'kwame@sheetkeeper.test')!;
+
+/** The API as the signed-in page sees it (same origin, session cookie). */
+const api = <T>(path: string, method = 'GET', body?: unknown): Promise<T> =>
+  // Plain promise chains: the test's babel would turn async/await and destructuring into helpers the page does not have.
+  b.page.evaluate(
+    (arg) =>
+      fetch('/api' + arg.path, { method: arg.method, headers: arg.body ? { 'content-type': 'application/json' } : {}, body: arg.body ? JSON.stringify(arg.body) : undefined }).then((res) =>
+        res.json().then((json) => ({ status: res.status, body: json })),
+      ),
+    { path, method, body },
+  ) as Promise<T>;
+
+describe('Overview and runs', () => {
+  it('shows the Overview, the Runs list and a finished run with its matrix and what it checked', async () => {
+    await signIn(b.page, kwame.email, kwame.password);
+    const nightly = b.page.getByTestId('plan-complex.js nightly');
+    await nightly.waitFor();
+    await nightly.getByText(/regression|No earlier completed run/).first().waitFor();
+    await b.page.getByText('Latest run of each plan').waitFor();
+    await b.page.getByTestId('needs-me').waitFor();
+    await b.page.getByText('A green result in Sheetkeeper is evidence').waitFor();
+    await saveScreenshots(b.page, 'overview', () => nightly.waitFor());
+
+    await goTo(b.page, 'Runs');
+    const firstRun = b.page.locator('[data-testid^="run-"]').first();
+    await firstRun.waitFor();
+    await saveScreenshots(b.page, 'runs-list', () => firstRun.waitFor());
+
+    // On a phone the filters fold behind one button.
+    await b.page.getByRole('button', { name: 'Filter runs' }).click();
+    await b.page.getByRole('radiogroup', { name: 'Status filter' }).waitFor();
+
+    // Filter to completed runs of the nightly plan: the address carries the filters.
+    await b.page.getByRole('radio', { name: 'Plan: complex.js nightly' }).click();
+    await b.page.getByRole('radio', { name: 'Status: completed' }).click();
+    await b.page.waitForURL(/status=completed/);
+    expect(new URL(b.page.url()).searchParams.get('status')).toBe('completed');
+    const completed = b.page.locator('[data-testid^="run-"]').first();
+    await completed.getByText('complex.js nightly').waitFor();
+    await completed.click();
+
+    await b.page.getByText('Matrix: suite × target').waitFor();
+    const note = b.page.getByTestId('checked-scope-note');
+    await note.getByText(/points in all/).waitFor();
+    await note.getByText(/not a certificate/).waitFor();
+    const cells = b.page.locator('[data-testid^="cell-"]');
+    await cells.first().waitFor();
+    // Every cell says its outcome with a glyph, and a cell with failures links to the filtered failure table.
+    const texts = await cells.allTextContents();
+    expect(texts.length).toBeGreaterThan(0);
+    for (const text of texts) expect(text).toMatch(/[✓❌◊×…↻]/);
+    const failing = b.page.locator('a[data-testid^="cell-"]').first();
+    if ((await failing.count()) > 0) expect(await failing.getAttribute('href')).toMatch(/^\/failures\?run=[0-9a-f-]{36}&suite=[^&]+&target=[^&]+$/);
+    await b.page.getByText('Property checks', { exact: true }).waitFor();
+    await saveScreenshots(b.page, 'run-detail', () => b.page.getByText('Matrix: suite × target').waitFor());
+    await saveScreenshots(b.page, 'run-detail-matrix', () => b.page.getByText('Matrix: suite × target').scrollIntoViewIfNeeded());
+    await saveScreenshots(b.page, 'run-detail-properties', () => b.page.getByText('Property checks', { exact: true }).scrollIntoViewIfNeeded());
+  });
+
+  it('follows a run started through the API live, and cancels it after a confirm step', async () => {
+    await signIn(b.page, kwame.email, kwame.password);
+    const plans = await api<{ body: { plans: { id: string; name: string }[] } }>('/plans');
+    const plan = plans.body.plans.find((p) => p.name === 'complex.js nightly')!;
+    const started = await api<{ status: number; body: { run: { id: string; shardsTotal: number } } }>('/runs', 'POST', { planId: plan.id });
+    expect(started.status).toBe(202);
+    const run = started.body.run;
+
+    // The Overview lists it in progress with its bar.
+    await b.page.goto(`${BASE_URL}/`);
+    await b.page.getByTestId(`run-${run.id}`).getByRole('progressbar', { name: /^Progress:/ }).waitFor();
+    await saveScreenshots(b.page, 'overview-run-in-progress', () => b.page.getByTestId(`run-${run.id}`).waitFor());
+
+    await b.page.getByTestId(`run-${run.id}`).click();
+    const bar = b.page.getByRole('progressbar', { name: /^Progress:/ });
+    await bar.waitFor();
+    expect(await bar.getAttribute('aria-valuetext')).toMatch(new RegExp(`^\\d+ of ${run.shardsTotal} shards$`));
+    // The bar moves by itself: some shard finishes without reloading the page.
+    await b.page.getByText(new RegExp(`^[1-9]\\d* of ${run.shardsTotal} shards`)).waitFor({ timeout: 30_000 });
+    await saveScreenshots(b.page, 'run-detail-in-progress', () => bar.waitFor());
+
+    await b.page.getByRole('button', { name: 'Cancel run…' }).click();
+    await b.page.getByText('Cancel this run?').waitFor();
+    await b.page.getByRole('button', { name: 'Keep it running' }).click();
+    expect((await api<{ body: { run: { status: string } } }>(`/runs/${run.id}`)).body.run.status).toMatch(/queued|running/);
+    await b.page.getByRole('button', { name: 'Cancel run…' }).click();
+    await b.page.getByRole('button', { name: 'Yes, cancel the run' }).click();
+    await b.page.getByText('× cancelled').first().waitFor();
+    expect((await api<{ body: { run: { status: string } } }>(`/runs/${run.id}`)).body.run.status).toBe('cancelled');
+    expect(await b.page.getByRole('progressbar', { name: /^Progress:/ }).count()).toBe(0);
+  });
+});
