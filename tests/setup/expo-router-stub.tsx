@@ -1,5 +1,4 @@
 import { cloneElement, isValidElement, type ReactElement, type ReactNode } from 'react';
-import { Text } from 'react-native';
 
 /**
  * Screen tests render components outside a navigator: this Link renders what expo-router's does
@@ -8,5 +7,5 @@ import { Text } from 'react-native';
  */
 export function Link({ href, asChild, children }: { href: string; asChild?: boolean; children: ReactNode }) {
   if (asChild && isValidElement(children)) return cloneElement(children as ReactElement<{ href?: string }>, { href });
-  return <Text href={href}>{children}</Text>;
+  return <a href={href}>{children}</a>;
 }
