@@ -1,0 +1,71 @@
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { act, renderHook, waitFor } from '@testing-library/react';
+import type { ReactNode } from 'react';
+import { useOverview } from '../../client/use-overview';
+import { useRun } from '../../client/use-run';
+import type { RunView } from '../../shared/run-view';
+import { mockFetchRoutes } from '../setup/mock-fetch-routes';
+
+const RUN: RunView = {
+  id: '7d3f9a52-1c4e-4b8a-9f10-2a6c5e8d4b31',
+  planId: 'p1',
+  planName: 'complex.js nightly',
+  trigger: 'manual',
+  status: 'running',
+  shardsTotal: 4,
+  shardsDone: 1,
+  counts: { pass: 100, fail: 0, error: 0, skipped: 0 },
+  regressions: null,
+  requestedBy: 'Kwame Asante',
+  createdAt: '2026-03-01T02:30:00Z',
+  startedAt: '2026-03-01T02:30:01Z',
+  finishedAt: null,
+};
+
+function wrapper({ children }: { children: ReactNode }) {
+  const client = new QueryClient({ defaultOptions: { queries: { retry: false, gcTime: Infinity } } });
+  return <QueryClientProvider client={client}>{children}</QueryClientProvider>;
+}
+
+/** Answers with the run as the worker moves it on: one shard more per request, completed at the last. */
+function movingRun() {
+  let done = 0;
+  return mockFetchRoutes(() => {
+    done = Math.min(done + 1, RUN.shardsTotal);
+    const status = done === RUN.shardsTotal ? 'completed' : 'running';
+    return { body: { run: { ...RUN, shardsDone: done, status }, overview: { plans: [], inProgress: status === 'running' ? [{ ...RUN, shardsDone: done }] : [], needsMe: {} } } };
+  });
+}
+
+describe('live queries', () => {
+  beforeEach(() => jest.useFakeTimers());
+  afterEach(() => jest.useRealTimers());
+
+  it('asks for a running run again until it completes, then stops', async () => {
+    const calls = movingRun();
+    const { result } = renderHook(() => useRun(RUN.id), { wrapper });
+    await waitFor(() => expect(result.current.data?.shardsDone).toBe(1));
+    for (const expected of [2, 3, 4]) {
+      await act(() => jest.advanceTimersByTimeAsync(1_600));
+      expect(result.current.data?.shardsDone).toBe(expected);
+    }
+    expect(result.current.data?.status).toBe('completed');
+    const asked = calls.length;
+    await act(() => jest.advanceTimersByTimeAsync(30_000));
+    expect(calls).toHaveLength(asked);
+  });
+
+  it('keeps the Overview fresh while a run is in progress, and only then', async () => {
+    const calls = movingRun();
+    const { result } = renderHook(() => useOverview(), { wrapper });
+    await waitFor(() => expect(result.current.data?.inProgress).toHaveLength(1));
+    await act(() => jest.advanceTimersByTimeAsync(2_100));
+    await act(() => jest.advanceTimersByTimeAsync(2_100));
+    await act(() => jest.advanceTimersByTimeAsync(2_100));
+    expect(result.current.data?.inProgress).toHaveLength(0);
+    const asked = calls.length;
+    expect(asked).toBe(4);
+    await act(() => jest.advanceTimersByTimeAsync(30_000));
+    expect(calls).toHaveLength(asked);
+  });
+});
