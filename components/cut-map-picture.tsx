@@ -1,4 +1,5 @@
-import { StyleSheet, Text, View } from 'react-native';
+import { useState } from 'react';
+import { StyleSheet, Text, View, type LayoutChangeEvent } from 'react-native';
 import { theme } from '../constants/theme';
 import type { CutMap } from '../shared/cut-map';
 import { PlanePicture, type PlanePoint } from './plane-picture';
@@ -6,6 +7,8 @@ import { wireNumber } from './wire-number';
 
 const point = (w: { re: string; im: string }): PlanePoint => ({ re: Number(w.re), im: Number(w.im) });
 const percent = (x: number) => `${Math.round(x * 100)} %`;
+/** The plane picture's margin on each side (components/plane-picture.tsx). */
+const PAD = 28;
 
 /**
  * Where one function of a target is really discontinuous over a box, drawn against the expected
@@ -13,8 +16,11 @@ const percent = (x: number) => `${Math.round(x * 100)} %`;
  * crosses named "unexpected". Under the picture, the verdict and each expected cut's coverage in
  * words, and what a grid can miss.
  */
-export function CutMapPicture({ cutMap, height = 360 }: { cutMap: CutMap; height?: number }) {
+export function CutMapPicture({ cutMap }: { cutMap: CutMap }) {
+  const [width, setWidth] = useState(0);
   const [min, max] = [point(cutMap.box.min), point(cutMap.box.max)];
+  // The picture takes the box's own proportions, so nothing outside the sampled box is shown as if it had been looked at.
+  const height = width > 0 ? Math.min(800, Math.max(200, Math.round(((width - 2 * PAD) * (max.im - min.im)) / (max.re - min.re) + 2 * PAD))) : 0;
   const unexpected = cutMap.observed.filter((o) => !o.onExpectedCut);
   const unseen = cutMap.expected.filter((e) => !e.seen);
   const label =
@@ -28,18 +34,22 @@ export function CutMapPicture({ cutMap, height = 360 }: { cutMap: CutMap; height
           ? `✓ Matches: every discontinuity found lies on an expected cut, and every expected cut was seen.`
           : `× Differs: ${[unexpected.length ? `${unexpected.length} stretch(es) of discontinuity off the expected cuts` : null, unseen.length ? `${unseen.length} expected cut(s) not seen` : null].filter(Boolean).join('; ')}.`}
       </Text>
-      <PlanePicture
-        label={label}
-        view={{ minRe: min.re, maxRe: max.re, minIm: min.im, maxIm: max.im }}
-        cuts={cutMap.expected.map((e) => ({ points: [point(e.from), point(e.to)], toInfinity: false }))}
-        lines={cutMap.observed.map((o) => ({
-          name: o.onExpectedCut ? 'discontinuity found on an expected cut' : 'unexpected discontinuity',
-          points: o.points.map(point),
-          marker: o.onExpectedCut ? 'dot' : 'cross',
-        }))}
-        height={height}
-        testID="cut-map-picture"
-      />
+      <View style={styles.frame} onLayout={(e: LayoutChangeEvent) => setWidth(Math.round(e.nativeEvent.layout.width))}>
+        {width > 0 ? (
+          <PlanePicture
+            label={label}
+            view={{ minRe: min.re, maxRe: max.re, minIm: min.im, maxIm: max.im }}
+            cuts={cutMap.expected.map((e) => ({ points: [point(e.from), point(e.to)], toInfinity: false }))}
+            lines={cutMap.observed.map((o) => ({
+              name: o.onExpectedCut ? 'discontinuity found on an expected cut' : 'unexpected discontinuity',
+              points: o.points.map(point),
+              marker: o.onExpectedCut ? 'dot' : 'cross',
+            }))}
+            height={height}
+            testID="cut-map-picture"
+          />
+        ) : null}
+      </View>
       <View style={styles.list}>
         <Text style={styles.head}>Expected cuts in this box</Text>
         {cutMap.expected.length === 0 ? <Text style={styles.line}>None: the reference has no cut of {cutMap.function} inside this box.</Text> : null}
@@ -64,6 +74,7 @@ export function CutMapPicture({ cutMap, height = 360 }: { cutMap: CutMap; height
 
 const styles = StyleSheet.create({
   wrap: { gap: theme.space(3) },
+  frame: { width: '100%', maxWidth: 600 },
   verdict: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accent, lineHeight: 24 },
   differs: { color: theme.color.danger },
   list: { gap: theme.space(1) },

@@ -115,7 +115,7 @@ export function CutMapView({ name, fn, onChooseFn }: { name: string; fn: string;
         <Text style={styles.title}>
           {map.data.cutMap.function} on {map.data.cutMap.target}, {map.data.cutMap.columns}×{map.data.cutMap.rows} grid
         </Text>
-        <CutMapPicture cutMap={map.data.cutMap} height={wide ? 480 : 340} />
+        <CutMapPicture cutMap={map.data.cutMap} />
       </View>
     );
   }

@@ -134,17 +134,19 @@ function CutRow({ entry, wide, onOpenCutMap }: { entry: CutEntry; wide: boolean;
       </View>
       {open ? (
         <View style={styles.probes} accessibilityLabel={`Places probed for ${name}`}>
-          {entry.probes.map((p) => (
-            <View key={`${p.at.re} ${p.at.im}`} style={styles.probe}>
-              <Text style={styles.probeAt}>z = {probePlace(p.at)}</Text>
-              <Text style={styles.mono}>with +0 → {wireNumber(p.plusZero)}</Text>
-              <Text style={styles.mono}>with −0 → {wireNumber(p.minusZero)}</Text>
-              <Text style={styles.small}>
-                votes {CONVENTION_STYLES[p.verdict].glyph} {CONVENTION_STYLES[p.verdict].word}
-                {p.note ? `: ${p.note}` : ''}
-              </Text>
-            </View>
-          ))}
+          <View style={wide ? styles.probeGrid : styles.probeList}>
+            {entry.probes.map((p) => (
+              <View key={`${p.at.re} ${p.at.im}`} style={[styles.probe, wide && styles.probeWide]}>
+                <Text style={styles.probeAt}>z = {probePlace(p.at)}</Text>
+                <Text style={styles.mono}>with +0 → {wireNumber(p.plusZero)}</Text>
+                <Text style={styles.mono}>with −0 → {wireNumber(p.minusZero)}</Text>
+                <Text style={styles.small}>
+                  votes {CONVENTION_STYLES[p.verdict].glyph} {CONVENTION_STYLES[p.verdict].word}
+                  {p.note ? `: ${p.note}` : ''}
+                </Text>
+              </View>
+            ))}
+          </View>
           <Text style={styles.meaning}>
             {CONVENTION_STYLES[entry.behaviour].glyph} {CONVENTION_STYLES[entry.behaviour].word}: {CONVENTION_STYLES[entry.behaviour].meaning}.
           </Text>
@@ -183,6 +185,9 @@ const styles = StyleSheet.create({
   linkButton: { minHeight: 44, justifyContent: 'center', paddingHorizontal: theme.space(3), borderRadius: theme.radius, borderWidth: 1, borderColor: theme.color.rule },
   linkText: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.accent },
   probes: { gap: theme.space(2), paddingBottom: theme.space(3) },
+  probeGrid: { flexDirection: 'row', flexWrap: 'wrap', columnGap: theme.space(4) },
+  probeList: { gap: theme.space(2) },
+  probeWide: { flexBasis: 260, flexGrow: 1, paddingBottom: theme.space(2) },
   probe: { borderTopWidth: 1, borderTopColor: theme.color.rule, paddingTop: theme.space(2), gap: 2 },
   probeAt: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.ink },
   mono: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.inkSoft },

@@ -99,7 +99,8 @@ export function PlanePicture({ label, paths = [], pointSets = [], cuts = [], lin
               const color = line.marker === 'cross' ? theme.color.danger : theme.color.ink;
               return (
                 <G key={`line-${i}`}>
-                  {pts.length > 1 ? <Polyline points={pts.map((p) => `${x(p.re)},${y(p.im)}`).join(' ')} fill="none" stroke={color} strokeWidth={1.5} /> : null}
+                  {/* Dots sit on a cut drawn beneath them: no joining line, so the cut's dashes stay visible between them. */}
+                  {line.marker === 'cross' && pts.length > 1 ? <Polyline points={pts.map((p) => `${x(p.re)},${y(p.im)}`).join(' ')} fill="none" stroke={color} strokeWidth={1.5} /> : null}
                   {pts.map((p, k) => (
                     <LineMarker key={k} cx={x(p.re)} cy={y(p.im)} marker={line.marker} />
                   ))}
@@ -144,8 +145,9 @@ export function PlanePicture({ label, paths = [], pointSets = [], cuts = [], lin
         ) : null}
         {[...new Map(lines.map((l) => [`${l.marker} ${l.name}`, l])).values()].map((l) => (
           <LegendItem key={`${l.marker} ${l.name}`} text={l.name}>
-            <Line x1={1} x2={17} y1={8} y2={8} stroke={l.marker === 'cross' ? theme.color.danger : theme.color.ink} strokeWidth={1.5} />
-            <LineMarker cx={9} cy={8} marker={l.marker} />
+            {l.marker === 'cross' ? <Line x1={1} x2={17} y1={8} y2={8} stroke={theme.color.danger} strokeWidth={1.5} /> : null}
+            <LineMarker cx={4} cy={8} marker={l.marker} />
+            <LineMarker cx={14} cy={8} marker={l.marker} />
           </LegendItem>
         ))}
         {branchPoints.length ? (
@@ -197,7 +199,7 @@ function PointDot({ cx, cy }: { cx: number; cy: number }) {
 }
 
 function LineMarker({ cx, cy, marker }: { cx: number; cy: number; marker: 'dot' | 'cross' }) {
-  if (marker === 'dot') return <Circle cx={cx} cy={cy} r={2.5} fill={theme.color.ink} />;
+  if (marker === 'dot') return <Circle cx={cx} cy={cy} r={1.75} fill={theme.color.ink} />;
   return <Path d={`M ${cx - 4} ${cy - 4} L ${cx + 4} ${cy + 4} M ${cx - 4} ${cy + 4} L ${cx + 4} ${cy - 4}`} stroke={theme.color.danger} strokeWidth={2} />;
 }
 

@@ -12,6 +12,9 @@ export interface TargetListProps {
   onOpenMatrix: (library: string) => void;
 }
 
+/** Libraries with more versions first: they are the ones with a version matrix. */
+const installedCount = (versions: TargetView[]) => versions.filter((v) => v.installed).length;
+
 const settingsWords = (s: TargetView['settings']) =>
   Object.entries(s)
     .map(([k, v]) => `${k}: ${String(v)}`)
@@ -37,7 +40,7 @@ export function TargetList({ onOpenTarget, onOpenMatrix }: TargetListProps) {
 
   return (
     <View style={[styles.grid, wide && styles.gridWide]}>
-      {[...groups.entries()].map(([key, versions]) => {
+      {[...groups.entries()].sort(([a, x], [b, y]) => installedCount(y) - installedCount(x) || a.localeCompare(b)).map(([key, versions]) => {
         const installed = versions.filter((v) => v.installed);
         return (
           <View key={key} style={[styles.card, wide && styles.cardWide]} testID={`library-${key}`}>

@@ -149,10 +149,14 @@ function SuiteRow({ suite, versions, wide }: { suite: SuiteEntry; versions: stri
               </Text>
               <Text style={styles.faint}>first changed in {c.firstChangedIn}</Text>
               {c.steps.map((s) => (
-                <Text key={s.after.version} style={styles.step}>
-                  {s.before.version} → {s.after.version}: {wireNumber(s.before.value)} ({outcomeWords(s.before.outcome)}) → {wireNumber(s.after.value)} (
-                  {outcomeWords(s.after.outcome)})
-                </Text>
+                <View key={s.after.version} style={styles.stepBox}>
+                  <Text style={styles.step}>
+                    {s.before.version}: {wireNumber(s.before.value)} ({outcomeWords(s.before.outcome)})
+                  </Text>
+                  <Text style={styles.step}>
+                    → {s.after.version}: {wireNumber(s.after.value)} ({outcomeWords(s.after.outcome)})
+                  </Text>
+                </View>
               ))}
             </View>
           ))}
@@ -197,5 +201,6 @@ const styles = StyleSheet.create({
   changes: { gap: theme.space(2), paddingBottom: theme.space(2) },
   change: { borderTopWidth: 1, borderTopColor: theme.color.rule, paddingTop: theme.space(2), gap: 2 },
   changeHead: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.ink },
+  stepBox: { gap: 0 },
   step: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.inkSoft, lineHeight: 18 },
 });
