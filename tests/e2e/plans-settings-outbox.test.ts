@@ -175,4 +175,16 @@ describe('outbox', () => {
     expect(await b.page.getByTestId('mail-html-frame').count()).toBe(0);
     await saveScreenshots(b.page, 'outbox-message-text', () => b.page.getByTestId('mail-text').waitFor());
   });
+
+  it("shows the demo data's regression mail rendered, as the team would read it", async () => {
+    const odile = demo('admin');
+    await signIn(b.page, odile.email, odile.password);
+    await goTo(b.page, 'Outbox');
+    const mail = b.page.getByRole('link', { name: /^Message \[Sheetkeeper\] \d+ regressions? in / }).first();
+    await mail.waitFor();
+    await mail.click();
+    const inside = b.page.frameLocator('[data-testid="mail-html-frame"]');
+    await inside.locator('body').getByText(/regression/i).first().waitFor();
+    await saveScreenshots(b.page, 'outbox-regression-mail', () => inside.locator('body').getByText(/regression/i).first().waitFor());
+  });
 });
