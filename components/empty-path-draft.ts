@@ -2,13 +2,13 @@ import type { PathDraft } from './suite-draft';
 
 const origin = () => ({ re: '0', im: '0' });
 
-/** A new path: a counter-clockwise unit circle around 0, the commonest first path. */
+/** A new path: a counter-clockwise circle of radius 2 around 0, the commonest first path. */
 export function emptyPathDraft(name: string): PathDraft {
   return {
     kind: 'circle',
     name,
     center: origin(),
-    radius: '1',
+    radius: '2',
     startAngle: '0',
     turns: '1',
     direction: 'ccw',

@@ -19,7 +19,7 @@ export function emptySuiteDraft(): SuiteDraft {
     k: '0',
     cuts: [],
     convention: 'signed-zero',
-    paths: [emptyPathDraft('unit circle')],
+    paths: [emptyPathDraft('circle of radius 2')],
     tolerances: { values: { kind: 'ulps', value: '2' }, monodromy: null, properties: null },
     properties: [],
   };

@@ -293,7 +293,8 @@ export function SuiteForm({ initial, editing, onDone }: Props) {
 const styles = StyleSheet.create({
   wide: { flexDirection: 'row', gap: theme.space(4), alignItems: 'flex-start' },
   formColumn: { flex: 3, minWidth: 0 },
-  previewColumn: { flex: 2, minWidth: 0 },
+  // On the web the picture stays in view while the long form scrolls beside it (react-native-web passes "sticky" through).
+  previewColumn: { flex: 2, minWidth: 0, position: 'sticky' as 'relative', top: theme.space(4) },
   column: { gap: theme.space(4) },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
   empty: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkFaint },
