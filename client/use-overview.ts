@@ -12,6 +12,8 @@ export function useOverview() {
   return useQuery({
     queryKey: OVERVIEW_KEY,
     queryFn: async () => (await apiFetch<{ overview: OverviewView }>('/overview')).overview,
+    // Runs start elsewhere (Plans, schedules, the API): look again whenever the screen opens after a few seconds.
+    staleTime: 5_000,
     refetchInterval: (query) => ((query.state.data?.inProgress.length ?? 0) > 0 ? LIVE_INTERVAL : false),
   });
 }

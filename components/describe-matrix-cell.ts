@@ -46,7 +46,8 @@ export function describeMatrixCell(cell: RunMatrixCell): MatrixCellWords {
     headline = counts.error > 0 ? `${OUTCOME_GLYPH.error} ${n(counts.error)} error${counts.error === 1 ? '' : 's'}` : `${OUTCOME_GLYPH.error} error`;
     said.push(counts.error > 0 ? `${n(counts.error)} points in error` : 'error');
     if (judged === 0) {
-      details.push('nothing was checked');
+      // The shard's own error may say it already ("nothing was checked: every point was skipped …").
+      if (!cell.errors[0]?.toLowerCase().startsWith('nothing was checked')) details.push('nothing was checked');
       said.push('nothing was checked');
     } else {
       details.push(`${OUTCOME_GLYPH.pass} ${n(counts.pass)} passed${counts.fail ? ` · ${OUTCOME_GLYPH.fail} ${n(counts.fail)} failed` : ''}`);

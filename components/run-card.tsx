@@ -8,6 +8,7 @@ import { OutcomeCounts } from './outcome-counts';
 import { ProgressBar } from './progress-bar';
 import { runDuration } from './run-duration';
 import { RunStatusBadge } from './run-status-badge';
+import { runVerdict } from './run-verdict';
 import { triggerWords } from './trigger-words';
 
 /** One run as a card (phones, and the Overview): plan, status, who and when, counts; progress while live. Opens the run. */
@@ -15,7 +16,7 @@ export function RunCard({ run, now }: { run: RunView; now?: number }) {
   const live = isLiveRun(run);
   return (
     <Link href={`/runs/${run.id}`} asChild>
-      <Pressable accessibilityRole="link" accessibilityLabel={`Run of ${run.planName}, ${formatWhen(run.createdAt, now)}`} style={StyleSheet.flatten(styles.card)} testID={`run-${run.id}`}>
+      <Pressable accessibilityRole="link" accessibilityLabel={`Run of ${run.planName}, ${runVerdict(run).word}, ${formatWhen(run.createdAt, now)}`} style={StyleSheet.flatten(styles.card)} testID={`run-${run.id}`}>
         <View style={styles.head}>
           <Text style={styles.plan} numberOfLines={2}>
             {run.planName}

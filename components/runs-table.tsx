@@ -8,6 +8,7 @@ import { OutcomeCounts } from './outcome-counts';
 import { ProgressBar } from './progress-bar';
 import { runDuration } from './run-duration';
 import { RunStatusBadge } from './run-status-badge';
+import { runVerdict } from './run-verdict';
 import { triggerWords } from './trigger-words';
 
 /** Runs as table rows on a wide screen; each row opens its run. */
@@ -26,7 +27,7 @@ export function RunsTable({ runs, now }: { runs: RunView[]; now?: number }) {
           <Pressable
             role="row"
             accessibilityRole="link"
-            accessibilityLabel={`Run of ${run.planName}, ${formatWhen(run.createdAt, now)}`}
+            accessibilityLabel={`Run of ${run.planName}, ${runVerdict(run).word}, ${formatWhen(run.createdAt, now)}`}
             testID={`run-${run.id}`}
             // Link's asChild merges styles as objects: a flat one (an array breaks on web).
             style={StyleSheet.flatten([styles.row, styles.bodyRow])}

@@ -63,6 +63,15 @@ describe.each([
     expect(within(partly).queryByText('nothing was checked')).toBeNull();
   });
 
+  it('says "nothing was checked" once when every point was skipped and the shard says so itself', () => {
+    const skipped = cell({ suite: 'cbrt-principal-sz', outcome: 'error', counts: { pass: 0, fail: 0, error: 0, skipped: 154 }, byDiagnosis: {}, errors: ['nothing was checked: every point was skipped (see the reasons per path)'] });
+    render(<RunMatrix runId={RUN} cells={[skipped]} />);
+    const only = cellOf('cbrt-principal-sz', 'complex.js@2.4.3');
+    expect(within(only).getAllByText(/nothing was checked/)).toHaveLength(1);
+    expect(within(only).getByText('− 154 skipped')).toBeTruthy();
+    expect(only.getAttribute('href')).toBe(`/failures?run=${RUN}&suite=cbrt-principal-sz&target=complex.js%402.4.3`);
+  });
+
   it('links a cell with failures or errors to the failure table filtered by run, suite and target; a passing cell is no link', () => {
     render(<RunMatrix runId={RUN} cells={CELLS} />);
     expect(cellOf('sqrt-principal-sz', 'complex.js@2.4.2').getAttribute('href')).toBe(`/failures?run=${RUN}&suite=sqrt-principal-sz&target=complex.js%402.4.2`);
