@@ -3,9 +3,9 @@ import { useFailurePath } from '../client/use-failure-path';
 import { theme } from '../constants/theme';
 import type { FailurePathView } from '../shared/failure-path-view';
 import { DIAGNOSIS_STYLES, type DiagnosisTone } from './diagnosis-styles';
-import type { MarkTone } from './mark-styles';
+import { fitPlaneView } from './fit-plane-view';
 import { PathPlots } from './path-plots';
-import { PlanePicture } from './plane-picture';
+import { PlanePicture, type PlanePictureProps } from './plane-picture';
 import { QueryState } from './query-state';
 
 const CONTINUOUS = new Set(['circle', 'segment', 'polyline']);
@@ -30,10 +30,18 @@ export function CasePictures({ failureId }: { failureId: string }) {
 
 function planeProps(v: FailurePathView) {
   const zs = v.points.filter((p) => p.z !== null);
-  const marks: { at: { re: number; im: number }; tone: MarkTone }[] = zs.map((p) => ({ at: p.z!, tone: p.outcome }));
+  const marks: NonNullable<PlanePictureProps['marks']> = zs.map((p) => {
+    if (p.outcome !== 'fail') return { at: p.z!, tone: p.outcome };
+    const style = DIAGNOSIS_STYLES[p.diagnosis ?? 'unexplained'];
+    return { at: p.z!, tone: p.outcome, kind: { word: style.word, glyph: style.glyph, color: style.color } };
+  });
   const focus = v.points.find((p) => p.index === v.focusIndex);
   if (focus?.z) marks.push({ at: focus.z, tone: 'focus' });
+  // A straddle's places along a cut can lie a million apart while its offsets are 1e-3 and less:
+  // the whole path would be one dot per place, so the picture shows this case's place across the cut.
+  const near = v.path.kind === 'straddle' && focus ? zs.filter((p) => p.t === focus.t).map((p) => p.z!) : null;
   return {
+    view: near && near.length > 1 ? fitPlaneView(near) : undefined,
     paths: CONTINUOUS.has(v.path.kind) ? [{ name: v.path.name, points: zs.map((p) => p.z!) }] : [],
     cuts: v.cuts,
     branchPoints: v.branchPoints,
@@ -43,7 +51,8 @@ function planeProps(v: FailurePathView) {
 
 function planeWords(v: FailurePathView): string {
   const failed = v.points.filter((p) => p.outcome !== 'pass').length;
-  return `The complex plane with the path ${v.path.name} (${v.path.kind}, ${v.points.length} points), ${v.cuts.length} expected cut${v.cuts.length === 1 ? '' : 's'} and ${v.branchPoints.length} branch point${v.branchPoints.length === 1 ? '' : 's'}; ${failed} point${failed === 1 ? '' : 's'} did not pass; this case is ringed.`;
+  const near = v.path.kind === 'straddle' ? ', shown around this case’s place along the cut' : '';
+  return `The complex plane with the path ${v.path.name} (${v.path.kind}, ${v.points.length} points${near}), ${v.cuts.length} expected cut${v.cuts.length === 1 ? '' : 's'} and ${v.branchPoints.length} branch point${v.branchPoints.length === 1 ? '' : 's'}; ${failed} point${failed === 1 ? '' : 's'} did not pass; this case is ringed.`;
 }
 
 /** The failing points of the path by diagnosis, each with its glyph and word. */

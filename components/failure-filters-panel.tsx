@@ -16,6 +16,12 @@ const TEXT_FIELDS: { key: TextKey; label: string }[] = [
   { key: 'target', label: 'Target' },
   { key: 'fn', label: 'Function' },
 ];
+/**
+ * Whether the folded panel was last left open on a phone. Each filter change is a new entry in
+ * the history, which mounts the screen afresh; without this the panel would fold after every chip.
+ */
+let openOnPhone: boolean | null = null;
+
 const draftOf = (f: FailureFilters): Record<TextKey, string> => ({ run: f.run ?? '', suite: f.suite ?? '', target: f.target ?? '', fn: f.fn ?? '' });
 
 /**
@@ -24,7 +30,11 @@ const draftOf = (f: FailureFilters): Record<TextKey, string> => ({ run: f.run ??
  * the panel folds away behind a button that says how many filters are on.
  */
 export function FailureFiltersPanel({ filters, onChange, compact }: { filters: FailureFilters; onChange: (next: FailureFilters) => void; compact: boolean }) {
-  const [open, setOpen] = useState(!compact);
+  const [open, setOpenState] = useState(compact ? (openOnPhone ?? false) : true);
+  const setOpen = (next: boolean) => {
+    if (compact) openOnPhone = next;
+    setOpenState(next);
+  };
   const [draft, setDraft] = useState(() => draftOf(filters));
   const [errors, setErrors] = useState<Partial<Record<TextKey, string>>>({});
   // A link or the back button can change the filters under the form: show what applies.

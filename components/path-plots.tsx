@@ -128,7 +128,9 @@ export function PathPlots({ view }: { view: FailurePathView }) {
     </Svg>
   );
 
-  const ulpTicks = Array.from({ length: top + 1 }, (_, k) => ({ y: yU(10 ** k - 1), text: k === 0 ? '0' : k <= 3 ? String(10 ** k) : `1e${k}` }));
+  // At most six labelled decades, so 1e0…1e19 does not crowd the axis.
+  const decade = Math.max(1, Math.ceil(top / 5));
+  const ulpTicks = Array.from({ length: Math.floor(top / decade) + 1 }, (_, i) => i * decade).map((k) => ({ y: yU(10 ** k - 1), text: k === 0 ? '0' : k <= 3 ? String(10 ** k) : `1e${k}` }));
   const argTicks = [
     { a: Math.PI, text: 'π' },
     { a: Math.PI / 2, text: 'π/2' },

@@ -27,8 +27,12 @@ export interface PlanePictureProps {
   lines?: { name: string; points: PlanePoint[]; marker: 'dot' | 'cross' }[];
   /** Branch points, drawn as rings. */
   branchPoints?: PlanePoint[];
-  /** Evaluated points, each with a tone that has its own shape as well as its own colour. */
-  marks?: { at: PlanePoint; tone: MarkTone }[];
+  /**
+   * Evaluated points, each with a tone that has its own shape as well as its own colour.
+   * Optionally a finer `kind` (a diagnosis): its own colour and a legend entry with its word
+   * and glyph, so the colour is never the only sign of it.
+   */
+  marks?: { at: PlanePoint; tone: MarkTone; kind?: { word: string; glyph: string; color: string } }[];
   /** The box to show; fitted to everything drawn when absent. */
   view?: PlaneView;
   /** Height in px; the width follows the container. */
@@ -57,7 +61,8 @@ export function PlanePicture({ label, paths = [], pointSets = [], cuts = [], lin
   const y = (im: number) => height / 2 - (im - midIm) * scale;
   const visible = (p: PlanePoint) => Number.isFinite(p.re) && Number.isFinite(p.im);
   const far = (2 * (width + height)) / scale;
-  const tonesShown = [...new Set(marks.map((m) => m.tone))];
+  const legendOf = (m: (typeof marks)[number]) => (m.kind ? `${m.kind.glyph} ${MARK_STYLES[m.tone].word}: ${m.kind.word}` : MARK_STYLES[m.tone].word);
+  const legendMarks = [...new Map(marks.map((m) => [legendOf(m), m])).values()];
 
   return (
     <View style={styles.frame} onLayout={onLayout} testID={testID}>
@@ -129,7 +134,7 @@ export function PlanePicture({ label, paths = [], pointSets = [], cuts = [], lin
               </G>
             ))}
             {marks.filter((m) => visible(m.at)).map((m, i) => (
-              <MarkShape key={`mark-${i}`} cx={x(m.at.re)} cy={y(m.at.im)} tone={m.tone} />
+              <MarkShape key={`mark-${i}`} cx={x(m.at.re)} cy={y(m.at.im)} tone={m.tone} color={m.kind?.color} />
             ))}
             {branchPoints.filter(visible).map((p, i) => (
               <BranchPointShape key={`bp-${i}`} cx={x(p.re)} cy={y(p.im)} />
@@ -165,9 +170,9 @@ export function PlanePicture({ label, paths = [], pointSets = [], cuts = [], lin
             <PointDot cx={9} cy={8} />
           </LegendItem>
         ) : null}
-        {tonesShown.map((tone) => (
-          <LegendItem key={tone} text={MARK_STYLES[tone].word}>
-            <MarkShape cx={9} cy={8} tone={tone} />
+        {legendMarks.map((m) => (
+          <LegendItem key={legendOf(m)} text={legendOf(m)}>
+            <MarkShape cx={9} cy={8} tone={m.tone} color={m.kind?.color} />
           </LegendItem>
         ))}
         <Text style={styles.scale}>
@@ -178,8 +183,7 @@ export function PlanePicture({ label, paths = [], pointSets = [], cuts = [], lin
   );
 }
 
-function MarkShape({ cx, cy, tone }: { cx: number; cy: number; tone: MarkTone }) {
-  const color = MARK_STYLES[tone].color;
+function MarkShape({ cx, cy, tone, color = MARK_STYLES[tone].color }: { cx: number; cy: number; tone: MarkTone; color?: string }) {
   switch (tone) {
     case 'pass':
       return <Circle cx={cx} cy={cy} r={3} fill={color} />;

@@ -45,7 +45,7 @@ function misplacedJump(): FailurePathView {
 
 /** The x of a value of t in the plot, read from the drawn axis: the first and last tick labels sit at t = 0 and t = 1. */
 function xOfT(svg: Element, t: number): number {
-  const ticks = [...svg.querySelectorAll('text')].filter((el) => el.textContent === '0' || el.textContent === '1');
+  const ticks = Array.from(svg.querySelectorAll('text')).filter((el) => el.textContent === '0' || el.textContent === '1');
   const at0 = Number(ticks.find((el) => el.textContent === '0' && el.getAttribute('text-anchor') === 'middle')!.getAttribute('x'));
   const at1 = Number(ticks.find((el) => el.textContent === '1' && el.getAttribute('text-anchor') === 'middle')!.getAttribute('x'));
   return at0 + t * (at1 - at0);
@@ -64,7 +64,7 @@ describe('PathPlots', () => {
     render(<PathPlots view={misplacedJump()} />);
     const arg = screen.getByRole('img', { name: /Argument of the expected and the library's value/ });
     const svg = arg.querySelector('svg')!;
-    const label = (text: string) => [...svg.querySelectorAll('text')].find((el) => el.textContent === text)!;
+    const label = (text: string) => Array.from(svg.querySelectorAll('text')).find((el) => el.textContent === text)!;
     expect(Number(label('library jump ≠').getAttribute('x'))).toBeCloseTo(xOfT(svg, 0.28125), 6);
     expect(Number(label('reference jump').getAttribute('x'))).toBeCloseTo(xOfT(svg, 0.53125), 6);
     expect(Number(label('this case').getAttribute('x'))).toBeCloseTo(xOfT(svg, 6 / 16) + 4, 6);
@@ -82,7 +82,7 @@ describe('PathPlots', () => {
     render(<PathPlots view={misplacedJump()} />);
     const ulps = screen.getByRole('img', { name: 'Error in ulps along the path unit circle: 4 points over the tolerance, the worst 3.0e+15 ulps.' });
     const svg = ulps.querySelector('svg')!;
-    expect([...svg.querySelectorAll('text')].some((el) => el.textContent === 'tolerance 4 ulps')).toBe(true);
+    expect(Array.from(svg.querySelectorAll('text')).some((el) => el.textContent === 'tolerance 4 ulps')).toBe(true);
     expect(screen.getByText('ulps (log scale)')).toBeTruthy();
   });
 });

@@ -58,11 +58,12 @@ describe('the failure table and a case', () => {
     await b.page.getByRole('img', { name: /Argument of the expected and the library's value/ }).locator('svg').waitFor();
     await b.page.getByRole('img', { name: /Error in ulps along the path/ }).locator('svg').waitFor();
 
+    await b.page.getByRole('button', { name: 'Copy reproducer' }).waitFor();
+    await saveScreenshots(b.page, 'case-detail', () => plane.locator('svg').waitFor());
+
     // Exact bits on demand.
     await b.page.getByRole('button', { name: 'Show exact bits' }).click();
     await b.page.getByText(/re -?0x/).first().waitFor();
-    await b.page.getByRole('button', { name: 'Copy reproducer' }).waitFor();
-    await saveScreenshots(b.page, 'case-detail', () => plane.locator('svg').waitFor());
 
     // Kwame, a maintainer, may accept the deviation (and only that).
     expect(await b.page.getByRole('radio', { name: 'Verdict: bug' }).count()).toBe(0);
