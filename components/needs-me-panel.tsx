@@ -47,7 +47,7 @@ export function NeedsMePanel({ needsMe, role, now }: { needsMe: NeedsMe; role: R
       {needsMe.reviewQueue ? (
         <Group title="Suites to review" count={needsMe.reviewQueue.length} empty="No suite is waiting for review.">
           {needsMe.reviewQueue.map((s) => (
-            <Row key={`${s.slug}-${s.version}`} href="/review" label={`Review ${s.slug} version ${s.version}`}>
+            <Row key={`${s.slug}-${s.version}`} href={`/review/${encodeURIComponent(s.slug)}`} label={`Review ${s.slug} version ${s.version}`}>
               <Text style={styles.main}>{suiteLine(s)}</Text>
               <Text style={styles.sub}>
                 by {s.authorName}, submitted {formatWhen(s.since, now)}

@@ -82,7 +82,7 @@ describe('OverviewBoard', () => {
     renderWithClient(<OverviewBoard user={user('reviewer')} />);
     const panel = await screen.findByTestId('needs-me');
     expect(within(panel).getByText('◊ Waiting for you: 2')).toBeTruthy();
-    expect(within(panel).getByRole('link', { name: 'Review atanh-near-one version 2' }).getAttribute('href')).toBe('/review');
+    expect(within(panel).getByRole('link', { name: 'Review atanh-near-one version 2' }).getAttribute('href')).toBe('/review/atanh-near-one');
     expect(within(panel).getByText('atanh next to ±1 · v2')).toBeTruthy();
     const regression = within(panel).getByRole('link', { name: '5 regressions on complex.js in complex.js nightly' });
     expect(regression.getAttribute('href')).toBe('/failures?run=aaaaaaaa-0000-4000-8000-000000000001&status=new');
