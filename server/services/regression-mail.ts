@@ -39,7 +39,7 @@ export function regressionMail(input: {
   versionChanges: { key: string; from: string; to: string }[];
 }): NewMail {
   const { rows, total } = input;
-  const link = (id: string) => `${input.appUrl}/runs/${input.runId}/failures/${id}`;
+  const link = (id: string) => `${input.appUrl}/failures/${id}`;
   const subject = `[Sheetkeeper] ${total} regression${total === 1 ? '' : 's'} in ${input.planName}`;
   const lead = `${total} point${total === 1 ? '' : 's'} passed in the previous completed run of "${input.planName}" and fail now.`;
   const changes = input.versionChanges.map((v) => `${v.key}: ${v.from} → ${v.to}`);
