@@ -18,8 +18,12 @@ export function ComplexInput({ label, value, onChange, rules }: Props) {
     <View style={styles.box}>
       <Text style={styles.label}>{label}</Text>
       <View style={styles.row}>
-        <FormTextInput label={`${label}, real part`} visibleLabel="re" value={value.re} onChangeText={(re) => onChange({ ...value, re })} rules={rules.re} mono />
-        <FormTextInput label={`${label}, imaginary part`} visibleLabel="im" value={value.im} onChangeText={(im) => onChange({ ...value, im })} rules={rules.im} mono />
+        <View style={styles.part}>
+          <FormTextInput label={`${label}, real part`} visibleLabel="re" value={value.re} onChangeText={(re) => onChange({ ...value, re })} rules={rules.re} mono />
+        </View>
+        <View style={styles.part}>
+          <FormTextInput label={`${label}, imaginary part`} visibleLabel="im" value={value.im} onChangeText={(im) => onChange({ ...value, im })} rules={rules.im} mono />
+        </View>
       </View>
       <RuleLines rules={rules.whole.map((r) => `${label} ${r}`)} />
     </View>
@@ -27,7 +31,8 @@ export function ComplexInput({ label, value, onChange, rules }: Props) {
 }
 
 const styles = StyleSheet.create({
-  box: { gap: theme.space(1), flexGrow: 1, flexBasis: 240, minWidth: 0 },
+  box: { gap: theme.space(1), flexGrow: 1, flexShrink: 1, minWidth: 200 },
   label: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.ink },
   row: { flexDirection: 'row', gap: theme.space(2) },
+  part: { flex: 1, minWidth: 0 },
 });

@@ -39,7 +39,8 @@ export function FormTextInput({ label, value, onChangeText, rules = [], hint, mo
 }
 
 const styles = StyleSheet.create({
-  field: { gap: theme.space(1), flexGrow: 1, flexBasis: 140, minWidth: 0 },
+  // No flexBasis: in a column it would become a height. In a wrapping row, fields grow to share it.
+  field: { gap: theme.space(1), flexGrow: 1, minWidth: 100 },
   label: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft },
   input: {
     minHeight: theme.touch,

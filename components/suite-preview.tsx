@@ -31,7 +31,7 @@ export function SuitePreview({ body, label, height = 320, testID }: { body: unkn
       <Text style={styles.summary} testID={testID ? `${testID}-summary` : undefined}>
         Drawn: {picture.paths.length} {picture.paths.length === 1 ? 'path' : 'paths'} ({pointCount} points), {picture.cuts.length} {picture.cuts.length === 1 ? 'cut' : 'cuts'},{' '}
         {picture.branchPoints.length} {picture.branchPoints.length === 1 ? 'branch point' : 'branch points'}
-        {picture.branchPoints.length > 0 ? `: ${picture.branchPoints.map((p) => `${fmt(p.re)}${p.im < 0 ? ' − ' : ' + '}${fmt(Math.abs(p.im))}i`).join(', ')}` : ''}.
+        {picture.branchPoints.length > 0 ? `: ${picture.branchPoints.map((p) => (Math.abs(p.im) < 1e-12 ? fmt(p.re) : `${fmt(p.re)}${p.im < 0 ? ' − ' : ' + '}${fmt(Math.abs(p.im))}i`)).join(', ')}` : ''}.
       </Text>
       {picture.notes.map((note, i) => (
         <Text key={i} style={styles.note}>

@@ -36,6 +36,16 @@ export function SuiteReview({ slug }: { slug: string }) {
       <SuiteDiff current={current} previous={previous} />
     </FormSection>
   );
+  const picture = (
+    <FormSection title="Plane picture">
+      <SuitePreview body={current.body} label={`Plane picture of ${current.body.title}`} testID="review-picture" height={wide ? 360 : 280} />
+    </FormSection>
+  );
+  const facts = (
+    <FormSection title="What this version checks">
+      <SuiteFacts suite={current.body} />
+    </FormSection>
+  );
   return (
     <View style={styles.column}>
       <View style={styles.head}>
@@ -44,20 +54,26 @@ export function SuiteReview({ slug }: { slug: string }) {
           {slug} · written by {current.author.displayName}
         </Text>
       </View>
-      <View style={wide ? styles.wide : styles.column}>
-        <View style={wide ? styles.mainCol : styles.column}>
+      {wide ? (
+        <View style={styles.wide}>
+          <View style={styles.mainCol}>
+            {changes}
+            {picture}
+          </View>
+          <View style={styles.sideCol}>
+            {decision}
+            {facts}
+          </View>
+        </View>
+      ) : (
+        // On a phone the decision follows the changes, one thumb-scroll from what it decides on.
+        <>
           {changes}
-          <FormSection title="Plane picture">
-            <SuitePreview body={current.body} label={`Plane picture of ${current.body.title}`} testID="review-picture" height={wide ? 360 : 280} />
-          </FormSection>
-        </View>
-        <View style={wide ? styles.sideCol : styles.column}>
           {decision}
-          <FormSection title="What this version checks">
-            <SuiteFacts suite={current.body} />
-          </FormSection>
-        </View>
-      </View>
+          {picture}
+          {facts}
+        </>
+      )}
     </View>
   );
 }
