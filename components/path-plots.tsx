@@ -80,14 +80,20 @@ export function PathPlots({ view }: { view: FailurePathView }) {
   const ceiling = M.top + 6;
 
   const yA = (a: number) => M.top + ((Math.PI - a) / (2 * Math.PI)) * innerH;
-  const expectedJumps = jumpsOf(pts, view.axis, 'expected');
-  const libraryJumps = jumpsOf(pts, view.axis, 'library');
+  // Only a continuous path has jumps: a straddle's or a grid's neighbours lie across a cut or a row apart.
+  const continuous = view.axis === 't';
+  const expectedJumps = continuous ? jumpsOf(pts, view.axis, 'expected') : [];
+  const libraryJumps = continuous ? jumpsOf(pts, view.axis, 'library') : [];
+  // Beyond a few jumps the labels would overprint each other; the dotted lines and the words remain.
+  const labelJumps = expectedJumps.length + libraryJumps.length <= 6;
+  const wrongArg = pts.filter((p) => p.actualFrom === 'stored' && p.actualArg !== null && p.expectedArg !== null && Math.abs(p.actualArg - p.expectedArg) > 1e-6);
   const unexpected = libraryJumps.filter((j) => !expectedJumps.some((e) => e.from === j.from && e.to === j.to));
   const missing = expectedJumps.filter((e) => !libraryJumps.some((j) => e.from === j.from && e.to === j.to));
   const where = (js: { from: number; to: number }[]) => js.map((j) => (view.axis === 't' ? `between t = ${round(j.from)} and ${round(j.to)}` : `between points ${j.from} and ${j.to}`)).join('; ');
 
-  const argWords =
-    `The reference's argument ${expectedJumps.length ? `jumps ${where(expectedJumps)}` : 'does not jump'}; the library's ${libraryJumps.length ? `jumps ${where(libraryJumps)}` : 'does not jump'}.` +
+  const argWords = !continuous
+    ? `These points are not a continuous path (a ${view.path.kind} goes back and forth across the cut), so the argument is compared point by point: ${wrongArg.length ? `the library's value has another argument at ${wrongArg.length} point${wrongArg.length === 1 ? '' : 's'} (${wrongArg.slice(0, 8).map((p) => p.index).join(', ')}${wrongArg.length > 8 ? ', …' : ''}).` : 'the library has the expected argument at every point.'}`
+    : `The reference's argument ${expectedJumps.length ? `jumps ${where(expectedJumps)}` : 'does not jump'}; the library's ${libraryJumps.length ? `jumps ${where(libraryJumps)}` : 'does not jump'}.` +
     (unexpected.length ? ` The library jumps where the reference does not: ${where(unexpected)}.` : '') +
     (missing.length ? ` The library does not jump where the reference does: ${where(missing)}.` : '') +
     (unexpected.length || missing.length ? '' : ' Every jump is where the reference has one.');
@@ -175,9 +181,11 @@ export function PathPlots({ view }: { view: FailurePathView }) {
           <Legend text="passed: within tolerance, error not stored">
             <Circle cx={9} cy={8} r={2.5} fill={EXPECTED_COLOR} />
           </Legend>
-          <Legend text="failed (colour by diagnosis)">
-            <Cross cx={9} cy={8} color={LIBRARY_COLOR} />
-          </Legend>
+          {[...new Set(pts.filter((p) => p.outcome !== 'pass').map((p) => p.diagnosis ?? (p.outcome === 'skipped' ? 'skipped' : p.outcome === 'error' ? 'error' : 'unexplained')))].map((tone) => (
+            <Legend key={tone} text={`${DIAGNOSIS_STYLES[tone].glyph} failed: ${DIAGNOSIS_STYLES[tone].word}`}>
+              <Cross cx={9} cy={8} color={DIAGNOSIS_STYLES[tone].color} />
+            </Legend>
+          ))}
         </View>
       </View>
 
@@ -186,12 +194,16 @@ export function PathPlots({ view }: { view: FailurePathView }) {
         <View accessible accessibilityRole="image" accessibilityLabel={`Argument of the expected and the library's value along the path ${view.path.name}. ${argWords}`}>
           {frame(
             <G>
-              {pieces(pts, (p) => p.expectedArg).map((run, i) => (
-                <Polyline key={`e-${i}`} points={run.map((p) => `${x(xOf(p, view.axis))},${yA(p.expectedArg as number)}`).join(' ')} fill="none" stroke={EXPECTED_COLOR} strokeWidth={2.5} />
-              ))}
-              {pieces(pts, (p) => p.actualArg).map((run, i) => (
-                <Polyline key={`l-${i}`} points={run.map((p) => `${x(xOf(p, view.axis))},${yA(p.actualArg as number)}`).join(' ')} fill="none" stroke={LIBRARY_COLOR} strokeWidth={1.5} strokeDasharray="5 3" />
-              ))}
+              {continuous
+                ? pieces(pts, (p) => p.expectedArg).map((run, i) => (
+                    <Polyline key={`e-${i}`} points={run.map((p) => `${x(xOf(p, view.axis))},${yA(p.expectedArg as number)}`).join(' ')} fill="none" stroke={EXPECTED_COLOR} strokeWidth={2.5} />
+                  ))
+                : pts.filter((p) => p.expectedArg !== null).map((p) => <Circle key={`e-${p.index}`} cx={x(xOf(p, view.axis))} cy={yA(p.expectedArg as number)} r={3} fill={EXPECTED_COLOR} />)}
+              {continuous
+                ? pieces(pts, (p) => p.actualArg).map((run, i) => (
+                    <Polyline key={`l-${i}`} points={run.map((p) => `${x(xOf(p, view.axis))},${yA(p.actualArg as number)}`).join(' ')} fill="none" stroke={LIBRARY_COLOR} strokeWidth={1.5} strokeDasharray="5 3" />
+                  ))
+                : null}
               {pts
                 .filter((p) => p.actualFrom === 'stored' && p.actualArg !== null)
                 .map((p) => (
@@ -200,17 +212,21 @@ export function PathPlots({ view }: { view: FailurePathView }) {
               {expectedJumps.map((j) => (
                 <G key={`ej-${j.at}`}>
                   <Line x1={x(j.at)} x2={x(j.at)} y1={M.top} y2={M.top + innerH} stroke={EXPECTED_COLOR} strokeWidth={1} strokeDasharray="2 3" />
-                  <SvgText x={x(j.at)} y={M.top + innerH - 4} fontSize={10} fill={EXPECTED_COLOR} textAnchor="middle">
-                    reference jump
-                  </SvgText>
+                  {labelJumps ? (
+                    <SvgText x={x(j.at)} y={M.top + innerH - 4} fontSize={10} fill={EXPECTED_COLOR} textAnchor="middle">
+                      reference jump
+                    </SvgText>
+                  ) : null}
                 </G>
               ))}
               {unexpected.map((j) => (
                 <G key={`lj-${j.at}`}>
                   <Line x1={x(j.at)} x2={x(j.at)} y1={M.top} y2={M.top + innerH} stroke={LIBRARY_COLOR} strokeWidth={1.5} strokeDasharray="2 2" />
-                  <SvgText x={x(j.at)} y={M.top + 24} fontSize={10} fill={LIBRARY_COLOR} textAnchor="middle">
-                    library jump ≠
-                  </SvgText>
+                  {labelJumps ? (
+                    <SvgText x={x(j.at)} y={M.top + 24} fontSize={10} fill={LIBRARY_COLOR} textAnchor="middle">
+                      library jump ≠
+                    </SvgText>
+                  ) : null}
                 </G>
               ))}
             </G>,
@@ -220,10 +236,11 @@ export function PathPlots({ view }: { view: FailurePathView }) {
         </View>
         <View style={styles.legend}>
           <Legend text="expected (reference)">
-            <Line x1={1} x2={17} y1={8} y2={8} stroke={EXPECTED_COLOR} strokeWidth={2.5} />
+            {continuous ? <Line x1={1} x2={17} y1={8} y2={8} stroke={EXPECTED_COLOR} strokeWidth={2.5} /> : <Circle cx={9} cy={8} r={3} fill={EXPECTED_COLOR} />}
           </Legend>
-          <Legend text="library (dashed; × where stored)">
-            <Line x1={1} x2={17} y1={8} y2={8} stroke={LIBRARY_COLOR} strokeWidth={1.5} strokeDasharray="4 2" />
+          <Legend text={continuous ? 'library (dashed; × where stored)' : 'library (× where stored)'}>
+            {continuous ? <Line x1={1} x2={17} y1={8} y2={8} stroke={LIBRARY_COLOR} strokeWidth={1.5} strokeDasharray="4 2" /> : null}
+            {continuous ? null : <Cross cx={9} cy={8} color={LIBRARY_COLOR} />}
           </Legend>
         </View>
         <Text style={styles.words} testID="jump-words">

@@ -85,4 +85,16 @@ describe('PathPlots', () => {
     expect(Array.from(svg.querySelectorAll('text')).some((el) => el.textContent === 'tolerance 4 ulps')).toBe(true);
     expect(screen.getByText('ulps (log scale)')).toBeTruthy();
   });
+
+  it('compares a straddle point by point instead of calling its crossings jumps', () => {
+    const view = misplacedJump();
+    view.axis = 'index';
+    view.path = { name: 'straddle cut 1', kind: 'straddle', points: 17 };
+    render(<PathPlots view={view} />);
+    expect(screen.getByTestId('jump-words').textContent).toBe(
+      "These points are not a continuous path (a straddle goes back and forth across the cut), so the argument is compared point by point: the library's value has another argument at 4 points (5, 6, 7, 8).",
+    );
+    expect(screen.queryByText('reference jump')).toBeNull();
+    expect(screen.getAllByText('point number along the path')).toHaveLength(2);
+  });
 });

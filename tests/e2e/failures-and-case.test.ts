@@ -60,6 +60,8 @@ describe('the failure table and a case', () => {
 
     await b.page.getByRole('button', { name: 'Copy reproducer' }).waitFor();
     await saveScreenshots(b.page, 'case-detail', () => plane.locator('svg').waitFor());
+    const argPlot = b.page.getByText('Argument of the value along the path');
+    await saveScreenshots(b.page, 'case-detail-plots', () => argPlot.scrollIntoViewIfNeeded());
 
     // Exact bits on demand.
     await b.page.getByRole('button', { name: 'Show exact bits' }).click();
