@@ -67,6 +67,8 @@ export function createApp(options: AppOptions): SheetkeeperApp {
 
   const app = express();
   app.disable('x-powered-by');
+  // API answers are no-store, so an ETag (a hash of every body, ~0.1 ms for a 34 KB failure page) buys nothing.
+  app.set('etag', false);
   app.use(
     helmet({
       contentSecurityPolicy: {

@@ -10,6 +10,7 @@ import { failurePath } from '../services/failure-path';
 import { HttpError } from '../services/http-error';
 import { InputError } from '../services/input-error';
 import { parseInput } from '../services/parse-input';
+import { failurePageJson } from '../services/failure-page-json';
 import { searchFailures } from '../services/failure-search';
 
 /** Rows per CSV export: enough for a whole demo run; larger tables are filtered first. */
@@ -21,8 +22,7 @@ export function failuresRouter(dataSource: DataSource): Router {
   const anyone = requireRole(...ROLES);
 
   router.get('/', anyone, async (req, res) => {
-    const { rows, next } = await searchFailures(dataSource, parseInput(failureQuery, req.query, 'query'));
-    res.json({ failures: rows, next });
+    res.type('json').send(await failurePageJson(dataSource, parseInput(failureQuery, req.query, 'query')));
   });
 
   router.get('/export.csv', anyone, async (req, res) => {

@@ -1,53 +1,17 @@
 import type { DataSource } from 'typeorm';
 import type { FailureView } from '../../shared/failure-view';
 import type { FailureQuery } from '../../shared/schemas/failure-query';
-import { coveredByDeviationSql } from './covered-by-deviation-sql';
+import { FAILURE_COLUMNS, failureSearchSql } from './failure-search-sql';
 
-/** A row of the table, as the app reads it. */
 export type FailureRow = FailureView;
 
-const COLUMNS = `id::text AS "id", run_id AS "runId", suite_slug AS "suiteSlug", suite_version AS "suiteVersion", target_name AS "targetName",
-  convention, path_name AS "pathName", point_index AS "pointIndex", t, label, z, z_hex AS "zHex", expected, actual,
-  outcome_kind AS "outcomeKind", diagnosis, ulps, relative_error AS "relativeError", is_regression AS "isRegression"`;
 /** The long text a page of the table does not show; the detail view and the CSV ask for it. */
 const DETAIL_COLUMNS = `, rule, reproducer, limits`;
 
-/**
- * The failure table: filters become one parameterised WHERE over indexed columns, and pages are
- * keyed (never OFFSET), so page 1,000 costs what page 1 does.
- */
+/** One page of the failure table as rows, for the CSV export and one failure's detail. */
 export async function searchFailures(dataSource: DataSource, q: FailureQuery, detail = false): Promise<{ rows: FailureRow[]; next: string | null }> {
-  const where: string[] = [];
-  const params: unknown[] = [];
-  const add = (sql: string, value: unknown) => {
-    params.push(value);
-    where.push(sql.replace('?', `$${params.length}`));
-  };
-  if (q.run) add('run_id = ?', q.run);
-  if (q.suite) add('suite_slug = ?', q.suite);
-  if (q.target) add('target_name = ?', q.target);
-  if (q.convention) add('convention = ?', q.convention);
-  if (q.fn) add(`suite_slug IN (SELECT s.slug FROM suites s JOIN suite_versions v ON v.suite_id = s.id WHERE v.body->>'subject' LIKE ? )`, `%${q.fn}(%`);
-  if (q.diagnosis === 'error' || q.diagnosis === 'skipped') add('outcome_kind = ?', q.diagnosis);
-  else if (q.diagnosis) add('diagnosis_kind = ?', q.diagnosis);
-  if (q.status === 'new') where.push('is_regression');
-  if (q.status === 'known') where.push(`NOT is_regression AND NOT ${coveredByDeviationSql('f')}`);
-  if (q.status === 'accepted') where.push(coveredByDeviationSql('f'));
-  // Qualified: the select list names its text copy of the id "id" too, and ORDER BY would sort that as text.
-  let order = 'f.id ASC';
-  if (q.sort === 'ulps') {
-    order = 'coalesce(f.ulps, 0) DESC, f.id ASC';
-    if (q.after) {
-      const [id, ulps] = q.after.split(':');
-      params.push(Number(ulps ?? 0), id);
-      where.push(`(coalesce(ulps, 0) < $${params.length - 1} OR (coalesce(ulps, 0) = $${params.length - 1} AND id > $${params.length}))`);
-    }
-  } else if (q.after) add('id > ?', q.after.split(':')[0]);
-  params.push(q.limit);
-  const rows: FailureRow[] = await dataSource.query(
-    `SELECT ${COLUMNS}${detail ? DETAIL_COLUMNS : ''} FROM failures f ${where.length ? `WHERE ${where.join(' AND ')}` : ''} ORDER BY ${order} LIMIT $${params.length}`,
-    params,
-  );
+  const { where, order, params } = failureSearchSql(q);
+  const rows: FailureRow[] = await dataSource.query(`SELECT ${FAILURE_COLUMNS}${detail ? DETAIL_COLUMNS : ''} FROM failures f ${where} ORDER BY ${order} LIMIT $${params.length}`, params);
   const last = rows[rows.length - 1];
   const next = rows.length === q.limit && last ? (q.sort === 'ulps' ? `${last.id}:${last.ulps ?? 0}` : last.id) : null;
   return { rows, next };

@@ -1,4 +1,6 @@
 import request from 'supertest';
+import { failurePageJson } from '../../../server/services/failure-page-json';
+import { searchFailures } from '../../../server/services/failure-search';
 import { approvedSuite } from '../../setup/approved-suite';
 import { signInAs } from '../../setup/sign-in-as';
 import { startTestApp, type TestApp } from '../../setup/test-app';
@@ -50,6 +52,23 @@ describe('runs and the failure table', () => {
       after = page.body.next;
     } while (after);
     expect(seen.size).toBe(120);
+  });
+
+  it('answers every page with the rows and cursor the row reader gives, key for key', async () => {
+    const queries = [
+      { limit: 50 },
+      { limit: 50, after: '30' },
+      { limit: 7, diagnosis: 'zero-sign' as const },
+      { limit: 25, sort: 'ulps' as const },
+      { limit: 25, sort: 'ulps' as const, after: '100:0' },
+      { limit: 500, status: 'new' as const },
+      { limit: 500, status: 'accepted' as const },
+    ];
+    for (const q of queries) {
+      const query = { sort: 'id' as const, run: runId, ...q };
+      const { rows, next } = await searchFailures(t.db.dataSource, query);
+      expect(JSON.parse(await failurePageJson(t.db.dataSource, query))).toEqual(JSON.parse(JSON.stringify({ failures: rows, next })));
+    }
   });
 
   it('sorts by ulps, largest first, across pages', async () => {
