@@ -8,7 +8,7 @@ module.exports = {
       displayName: 'node',
       testEnvironment: 'node',
       roots: ['<rootDir>/tests'],
-      testMatch: ['<rootDir>/tests/{server,harness,shared,scripts,external}/**/*.test.ts'],
+      testMatch: ['<rootDir>/tests/{server,harness,shared,scripts,external,constants}/**/*.test.ts'],
       transform: { '\\.[jt]sx?$': 'babel-jest' },
       setupFiles: ['<rootDir>/tests/setup/node-setup.ts'],
       globalSetup: '<rootDir>/tests/setup/global-setup.ts',

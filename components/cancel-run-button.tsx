@@ -34,7 +34,7 @@ export function CancelRunButton({ runId }: { runId: string }) {
       )}
       {failure ? (
         <Text accessibilityRole="alert" style={styles.failure}>
-          ✕ {failure}
+          × {failure}
         </Text>
       ) : null}
     </View>

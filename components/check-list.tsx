@@ -95,7 +95,7 @@ export function CheckList({ label, items, selected, onChange, error, filterFrom 
       </View>
       {error ? (
         <Text accessibilityRole="alert" style={styles.error}>
-          ✕ {label} {error}
+          × {label} {error}
         </Text>
       ) : null}
     </View>

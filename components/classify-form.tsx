@@ -82,7 +82,7 @@ export function ClassifyForm({ failureId, role, hasDiagnosis }: { failureId: str
   const fieldError = (f: Field) =>
     errors[f] ? (
       <Text accessibilityRole="alert" style={styles.error}>
-        ✕ {FIELD_NAMES[f]} {errors[f]}
+        × {FIELD_NAMES[f]} {errors[f]}
       </Text>
     ) : null;
 
@@ -135,7 +135,7 @@ export function ClassifyForm({ failureId, role, hasDiagnosis }: { failureId: str
       </View>
       {formError ? (
         <Text accessibilityRole="alert" style={styles.formError}>
-          ✕ {formError}
+          × {formError}
         </Text>
       ) : null}
       {done ? (

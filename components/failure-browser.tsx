@@ -34,7 +34,7 @@ export function FailureBrowser({ filters, onChange, dropped = [] }: { filters: F
     <View style={styles.root}>
       {dropped.length > 0 ? (
         <Text accessibilityRole="alert" style={styles.warning}>
-          ✕ The link's {dropped.join(', ')} could not be read and {dropped.length === 1 ? 'is' : 'are'} not applied.
+          × The link's {dropped.join(', ')} could not be read and {dropped.length === 1 ? 'is' : 'are'} not applied.
         </Text>
       ) : null}
       <FailureFiltersPanel filters={filters} onChange={onChange} compact={!wide} />
@@ -81,7 +81,7 @@ export function FailureBrowser({ filters, onChange, dropped = [] }: { filters: F
               ))}
             </View>
           )}
-          {failures.isFetchNextPageError ? <Text style={styles.warning}>✕ The next page could not be loaded; try again.</Text> : null}
+          {failures.isFetchNextPageError ? <Text style={styles.warning}>× The next page could not be loaded; try again.</Text> : null}
           {failures.hasNextPage ? <ActionButton label="Load more" tone="quiet" busy={failures.isFetchingNextPage} onPress={() => void failures.fetchNextPage()} /> : null}
         </View>
       )}

@@ -8,7 +8,7 @@ export function QueryState({ state, message, onRetry }: { state: 'loading' | 'er
     <View style={styles.box} accessibilityLiveRegion="polite">
       {state === 'loading' ? <ActivityIndicator color={theme.color.accent} accessibilityLabel="Loading" /> : null}
       <Text style={[styles.text, state === 'error' && styles.error]}>
-        {state === 'loading' ? 'Loading…' : state === 'error' ? `✕ ${message ?? 'Could not load this.'}` : (message ?? 'Nothing here yet.')}
+        {state === 'loading' ? 'Loading…' : state === 'error' ? `× ${message ?? 'Could not load this.'}` : (message ?? 'Nothing here yet.')}
       </Text>
       {state === 'error' && onRetry ? <ActionButton label="Try again" tone="quiet" onPress={onRetry} /> : null}
     </View>

@@ -27,7 +27,7 @@ export function ReproducerBox({ code }: { code: string }) {
         </Pressable>
         {copied ? (
           <Text style={copied === 'yes' ? styles.ok : styles.failed} accessibilityLiveRegion="polite">
-            {copied === 'yes' ? '✓ Copied' : '✕ Could not copy here: select the code instead'}
+            {copied === 'yes' ? '✓ Copied' : '× Could not copy here: select the code instead'}
           </Text>
         ) : null}
       </View>

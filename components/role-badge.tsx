@@ -3,7 +3,7 @@ import { theme } from '../constants/theme';
 import type { Role } from '../shared/roles';
 
 /** Each role has its own glyph, so the badge reads without its colour. */
-const GLYPH: Record<Role, string> = { admin: '◆', maintainer: '▲', reviewer: '●', contributor: '■' };
+const GLYPH: Record<Role, string> = { admin: '◊', maintainer: '∆', reviewer: '•', contributor: '+' };
 
 export function RoleBadge({ role }: { role: Role }) {
   return (

@@ -34,7 +34,7 @@ export function RunsList({ filters, onFiltersChange }: { filters: Filters; onFil
 
   return (
     <View style={styles.box}>
-      {plans.isError ? <Text style={styles.note}>✕ Plans could not be loaded, so the plan filter is missing: {plans.error.message}</Text> : null}
+      {plans.isError ? <Text style={styles.note}>× Plans could not be loaded, so the plan filter is missing: {plans.error.message}</Text> : null}
       <RunFilters value={filters} plans={plans.data ?? []} onChange={onFiltersChange} />
       {body}
     </View>

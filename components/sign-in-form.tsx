@@ -70,7 +70,7 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
       />
       {serverError && serverError.kind !== 'invalid-input' ? (
         <Text accessibilityRole="alert" style={styles.serverError} testID="sign-in-server-error">
-          ✕ {serverError.message}
+          × {serverError.message}
         </Text>
       ) : null}
       <ActionButton label="Sign in" onPress={submit} busy={signIn.isPending} />

@@ -29,7 +29,7 @@ export function TextField({ label, value, onChangeText, error, testID, mono = fa
       />
       {error ? (
         <Text accessibilityRole="alert" style={styles.error}>
-          ✕ {label} {error}
+          × {label} {error}
         </Text>
       ) : null}
     </View>

@@ -23,7 +23,7 @@ export function UsersList({ me }: { me: PublicUser }) {
     <View style={styles.list}>
       {failure ? (
         <Text accessibilityRole="alert" style={styles.failure}>
-          ✕ {failure}
+          × {failure}
         </Text>
       ) : null}
       {wide ? (

@@ -51,7 +51,7 @@ describe('CancelRunButton', () => {
     client.setQueryData(runKey(RUN.id), RUN);
     await click('Cancel run…');
     await click('Yes, cancel the run');
-    await waitFor(() => expect(screen.getByText('✕ The run is completed already.')).toBeTruthy());
+    await waitFor(() => expect(screen.getByText('× The run is completed already.')).toBeTruthy());
     expect(client.getQueryData<RunView>(runKey(RUN.id))?.status).toBe('running');
   });
 });

@@ -12,8 +12,8 @@ describe('ClassifyForm', () => {
     renderWithClient(<ClassifyForm failureId="7" role="maintainer" hasDiagnosis />);
     expect(screen.getAllByRole('radio', { name: /^Verdict:/ }).map((r) => r.getAttribute('aria-label'))).toEqual(['Verdict: accepted deviation']);
     await press('Accept deviation');
-    expect(screen.getByText('✕ Reason must say why (at least 3 characters)')).toBeTruthy();
-    expect(screen.getByText('✕ Expiry is required for an accepted deviation')).toBeTruthy();
+    expect(screen.getByText('× Reason must say why (at least 3 characters)')).toBeTruthy();
+    expect(screen.getByText('× Expiry is required for an accepted deviation')).toBeTruthy();
     expect(calls).toHaveLength(0);
   });
 
@@ -24,7 +24,7 @@ describe('ClassifyForm', () => {
     type('Reason', 'documented upstream');
     type(/Expires on/, '2001-01-01');
     await press('Accept deviation');
-    expect(screen.getByText('✕ Expiry must lie in the future')).toBeTruthy();
+    expect(screen.getByText('× Expiry must lie in the future')).toBeTruthy();
     expect(calls).toHaveLength(0);
   });
 
@@ -35,7 +35,7 @@ describe('ClassifyForm', () => {
     expect(screen.queryByRole('radio', { name: 'Covers: this diagnosis in the suite' })).toBeNull();
     type('Reason', 'reported upstream');
     await press('Record verdict');
-    expect(screen.getByText(/✕ Verdict must be bug, convention-difference or accepted/)).toBeTruthy();
+    expect(screen.getByText(/× Verdict must be bug, convention-difference or accepted/)).toBeTruthy();
   });
 
   it('posts a valid verdict with the day as midnight UTC and confirms it', async () => {
@@ -56,7 +56,7 @@ describe('ClassifyForm', () => {
     fireEvent.click(screen.getByRole('radio', { name: 'Verdict: bug' }));
     type('Reason', 'seen before');
     await press('Record verdict');
-    await waitFor(() => expect(screen.getByText('✕ Reason must not repeat an earlier verdict')).toBeTruthy());
+    await waitFor(() => expect(screen.getByText('× Reason must not repeat an earlier verdict')).toBeTruthy());
     expect((screen.getByLabelText('Reason') as HTMLTextAreaElement).value).toBe('seen before');
   });
 
@@ -66,7 +66,7 @@ describe('ClassifyForm', () => {
     fireEvent.click(screen.getByRole('radio', { name: 'Verdict: convention difference' }));
     type('Reason', 'follows the counter-clockwise rule');
     await press('Record verdict');
-    await screen.findByText(/✕ A maintainer may accept a deviation/);
+    await screen.findByText(/× A maintainer may accept a deviation/);
     expect((screen.getByLabelText('Reason') as HTMLTextAreaElement).value).toBe('follows the counter-clockwise rule');
   });
 });

@@ -94,7 +94,7 @@ describe('FailureBrowser', () => {
 
     fireEvent.change(screen.getByLabelText('Run id'), { target: { value: 'not-a-run' } });
     fireEvent.click(screen.getByRole('button', { name: 'Apply filters' }));
-    expect(screen.getByText('✕ Run id must be a run id')).toBeTruthy();
+    expect(screen.getByText('× Run id must be a run id')).toBeTruthy();
     expect(onChange).toHaveBeenCalledTimes(1);
 
     fireEvent.change(screen.getByLabelText('Run id'), { target: { value: RUN } });
@@ -111,7 +111,7 @@ describe('FailureBrowser', () => {
     unmount();
     mockFetchRoutes(() => ({ status: 500, body: { kind: 'server-error', message: 'The database is away.' } }));
     renderWithClient(<FailureBrowser filters={{}} onChange={jest.fn()} />);
-    await screen.findByText('✕ The database is away.');
+    await screen.findByText('× The database is away.');
     expect(screen.getByRole('button', { name: 'Try again' })).toBeTruthy();
   });
 });

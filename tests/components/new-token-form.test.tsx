@@ -50,7 +50,7 @@ describe('NewTokenForm', () => {
     renderWithClient(<NewTokenForm />);
     type('ci');
     await make();
-    expect(screen.getByText('✕ Token name must be at least 3 characters')).toBeTruthy();
+    expect(screen.getByText('× Token name must be at least 3 characters')).toBeTruthy();
     expect(calls).toEqual([]);
   });
 
@@ -59,7 +59,7 @@ describe('NewTokenForm', () => {
     renderWithClient(<NewTokenForm />);
     type('a name the server refuses');
     await make();
-    await waitFor(() => expect(screen.getByText('✕ Token name must be at most 80 characters')).toBeTruthy());
+    await waitFor(() => expect(screen.getByText('× Token name must be at most 80 characters')).toBeTruthy());
     expect((screen.getByLabelText('Token name') as HTMLInputElement).value).toBe('a name the server refuses');
     expect(screen.queryByTestId('new-token-secret')).toBeNull();
   });

@@ -119,7 +119,7 @@ describe('OverviewBoard', () => {
     unmount();
     mockFetch(500, { kind: 'server-error', message: 'The database is not answering.' });
     renderWithClient(<OverviewBoard user={user('maintainer')} />);
-    await waitFor(() => expect(screen.getByText('✕ The database is not answering.')).toBeTruthy());
+    await waitFor(() => expect(screen.getByText('× The database is not answering.')).toBeTruthy());
     expect(screen.getByRole('button', { name: 'Try again' })).toBeTruthy();
     expect(screen.getByTestId('home-email')).toBeTruthy();
   });

@@ -61,15 +61,15 @@ describe('PlanForm', () => {
     type('Name', 'ab');
     type('Recipients', 'kwame@sheetkeeper.test, nobody-at-all');
     await create();
-    expect(screen.getByText('✕ Name must be at least 3 characters')).toBeTruthy();
-    expect(screen.getByText('✕ Recipients “nobody-at-all” must be an e-mail address')).toBeTruthy();
-    expect(screen.getByText('✕ Suites needs at least one suite')).toBeTruthy();
-    expect(screen.getByText('✕ Targets needs at least one target')).toBeTruthy();
+    expect(screen.getByText('× Name must be at least 3 characters')).toBeTruthy();
+    expect(screen.getByText('× Recipients “nobody-at-all” must be an e-mail address')).toBeTruthy();
+    expect(screen.getByText('× Suites needs at least one suite')).toBeTruthy();
+    expect(screen.getByText('× Targets needs at least one target')).toBeTruthy();
     expect(calls.filter((c) => c.method !== 'GET')).toEqual([]);
 
     // Fixing a field clears its rule at once.
     await act(() => fireEvent.click(screen.getByRole('checkbox', { name: 'Square root, signed zeros' })));
-    expect(screen.queryByText(/✕ Suites/)).toBeNull();
+    expect(screen.queryByText(/× Suites/)).toBeNull();
     expect(screen.getByRole('checkbox', { name: 'Square root, signed zeros' }).getAttribute('aria-checked')).toBe('true');
   });
 
@@ -87,7 +87,7 @@ describe('PlanForm', () => {
     await act(() => fireEvent.click(screen.getByRole('checkbox', { name: 'Logarithm, signed zeros' })));
     await act(() => fireEvent.click(screen.getByRole('checkbox', { name: 'complex.js@2.4.3' })));
     await create();
-    await waitFor(() => expect(screen.getByText('✕ Suites has no approved version yet ("log-principal-sz")')).toBeTruthy());
+    await waitFor(() => expect(screen.getByText('× Suites has no approved version yet ("log-principal-sz")')).toBeTruthy());
     expect(calls.find((c) => c.method === 'POST')!.body).toEqual({ name: 'Logs nightly', description: 'Every log suite', recipients: ['kwame@sheetkeeper.test'], suites: ['log-principal-sz'], targets: ['complex.js@2.4.3'] });
     expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Logs nightly');
     expect((screen.getByLabelText('Description') as HTMLInputElement).value).toBe('Every log suite');

@@ -124,7 +124,7 @@ describe('RunsList', () => {
   it('shows the error and a retry when the runs cannot be loaded', async () => {
     mockFetchRoutes((url) => (url.startsWith('/api/plans') ? { body: { plans: PLANS } } : { status: 500, body: { kind: 'server-error', message: 'The database is not answering.' } }));
     renderWithClient(<Harness />);
-    expect(await screen.findByText('✕ The database is not answering.')).toBeTruthy();
+    expect(await screen.findByText('× The database is not answering.')).toBeTruthy();
     expect(screen.getByRole('button', { name: 'Try again' })).toBeTruthy();
   });
 });

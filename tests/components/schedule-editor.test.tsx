@@ -44,7 +44,7 @@ describe('ScheduleEditor', () => {
     renderWithClient(<ScheduleEditor planId={PLAN} schedule={schedule} onDone={jest.fn()} />);
     type('Cron expression', '0 25 * * *');
     await settle();
-    await waitFor(() => expect(screen.getByText('✕ Cron expression has an invalid hour field: "25"')).toBeTruthy());
+    await waitFor(() => expect(screen.getByText('× Cron expression has an invalid hour field: "25"')).toBeTruthy());
     expect(screen.getByLabelText('Cron expression').getAttribute('aria-invalid')).toBe('true');
     expect(screen.getByText('— no times until the expression is valid')).toBeTruthy();
   });
@@ -55,7 +55,7 @@ describe('ScheduleEditor', () => {
     await settle();
     type('Cron expression', '* *');
     await settle();
-    expect(screen.getByText('✕ Cron expression must have 5 or 6 fields')).toBeTruthy();
+    expect(screen.getByText('× Cron expression must have 5 or 6 fields')).toBeTruthy();
     expect(calls.filter((c) => c.body && (c.body as { cron: string }).cron === '* *')).toEqual([]);
     await act(() => fireEvent.click(screen.getByRole('button', { name: 'Save schedule' })));
     expect(calls.some((c) => c.method === 'PATCH')).toBe(false);
@@ -71,7 +71,7 @@ describe('ScheduleEditor', () => {
     type('Cron expression', '15 6 * * 1');
     await settle();
     await act(() => fireEvent.click(screen.getByRole('button', { name: 'Save schedule' })));
-    await waitFor(() => expect(screen.getByText('✕ Time zone must be a time zone name such as Europe/Oslo or UTC')).toBeTruthy());
+    await waitFor(() => expect(screen.getByText('× Time zone must be a time zone name such as Europe/Oslo or UTC')).toBeTruthy());
     expect((screen.getByLabelText('Cron expression') as HTMLInputElement).value).toBe('15 6 * * 1');
     expect(calls.find((c) => c.method === 'PATCH')!.body).toEqual({ cron: '15 6 * * 1', timeZone: 'UTC' });
     expect(onDone).not.toHaveBeenCalled();

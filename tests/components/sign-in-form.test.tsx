@@ -12,8 +12,8 @@ describe('SignInForm', () => {
     renderWithClient(<SignInForm onSignedIn={jest.fn()} />);
     type('E-mail', 'not-an-address');
     await submit();
-    expect(screen.getByText('✕ E-mail must be an e-mail address')).toBeTruthy();
-    expect(screen.getByText('✕ Password is required')).toBeTruthy();
+    expect(screen.getByText('× E-mail must be an e-mail address')).toBeTruthy();
+    expect(screen.getByText('× Password is required')).toBeTruthy();
     expect(calls).toHaveLength(0);
   });
 
@@ -21,9 +21,9 @@ describe('SignInForm', () => {
     mockFetch(200, {});
     renderWithClient(<SignInForm onSignedIn={jest.fn()} />);
     await submit();
-    expect(screen.getByText('✕ E-mail is required')).toBeTruthy();
+    expect(screen.getByText('× E-mail is required')).toBeTruthy();
     type('E-mail', 'ravi@sheetkeeper.test');
-    expect(screen.queryByText(/✕ E-mail/)).toBeNull();
+    expect(screen.queryByText(/× E-mail/)).toBeNull();
   });
 
   it("shows the server's answer when the password is wrong, keeping what was typed", async () => {
@@ -33,7 +33,7 @@ describe('SignInForm', () => {
     type('E-mail', 'ravi@sheetkeeper.test');
     type('Password', 'wrong');
     await submit();
-    await waitFor(() => expect(screen.getByText('✕ That e-mail and password do not match an account.')).toBeTruthy());
+    await waitFor(() => expect(screen.getByText('× That e-mail and password do not match an account.')).toBeTruthy());
     expect((screen.getByLabelText('E-mail') as HTMLInputElement).value).toBe('ravi@sheetkeeper.test');
     expect(onSignedIn).not.toHaveBeenCalled();
   });

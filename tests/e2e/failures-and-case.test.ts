@@ -70,8 +70,8 @@ describe('the failure table and a case', () => {
     // Kwame, a maintainer, may accept the deviation (and only that).
     expect(await b.page.getByRole('radio', { name: 'Verdict: bug' }).count()).toBe(0);
     await b.page.getByRole('button', { name: 'Accept deviation' }).click();
-    await b.page.getByText('✕ Reason must say why (at least 3 characters)').waitFor();
-    await b.page.getByText('✕ Expiry is required for an accepted deviation').waitFor();
+    await b.page.getByText('× Reason must say why (at least 3 characters)').waitFor();
+    await b.page.getByText('× Expiry is required for an accepted deviation').waitFor();
     await b.page.getByLabel('Reason').fill('complex.js documents that it does not keep the sign of zero.');
     await b.page.getByLabel(/Expires on/).fill('2099-06-30');
     await b.page.getByRole('button', { name: 'Accept deviation' }).click();

@@ -41,11 +41,11 @@ describe('plans and schedules', () => {
 
     const cron = b.page.getByLabel('Cron expression', { exact: true });
     await cron.fill('61 2 * * *');
-    await b.page.getByText('✕ Cron expression has an invalid minute field: "61"').waitFor();
+    await b.page.getByText('× Cron expression has an invalid minute field: "61"').waitFor();
     await cron.fill('15 6 * * 1');
     const nextRuns = b.page.getByTestId('schedule-next-runs');
     await nextRuns.getByText(/^Mon .*06:15$/).nth(2).waitFor();
-    expect(await b.page.getByText(/✕ Cron expression/).count()).toBe(0);
+    expect(await b.page.getByText(/× Cron expression/).count()).toBe(0);
     expect(await nextRuns.getByText(/06:15$/).count()).toBe(3);
     await saveScreenshots(b.page, 'schedule-editor', () => nextRuns.getByText(/06:15$/).nth(2).waitFor());
 
@@ -74,10 +74,10 @@ describe('plans and schedules', () => {
     await b.page.getByLabel('Name', { exact: true }).fill('One root on one target');
     await b.page.getByLabel('Recipients', { exact: true }).fill('kwame@sheetkeeper.test, not-an-address');
     await b.page.getByRole('button', { name: 'Create plan' }).click();
-    await b.page.getByText('✕ Recipients “not-an-address” must be an e-mail address').waitFor();
-    await b.page.getByText('✕ Suites needs at least one suite').waitFor();
-    await b.page.getByText('✕ Targets needs at least one target').waitFor();
-    await saveScreenshots(b.page, 'plan-new-invalid', () => b.page.getByText('✕ Suites needs at least one suite').waitFor());
+    await b.page.getByText('× Recipients “not-an-address” must be an e-mail address').waitFor();
+    await b.page.getByText('× Suites needs at least one suite').waitFor();
+    await b.page.getByText('× Targets needs at least one target').waitFor();
+    await saveScreenshots(b.page, 'plan-new-invalid', () => b.page.getByText('× Suites needs at least one suite').waitFor());
 
     await b.page.getByLabel('Recipients', { exact: true }).fill('kwame@sheetkeeper.test');
     await b.page.getByLabel('Filter suites').fill('sqrt-principal-sz');

@@ -29,13 +29,13 @@ describe('signing in and out', () => {
   it('shows the inline rules and then the wrong-password message', async () => {
     await b.page.goto(`${BASE_URL}/sign-in`);
     await b.page.getByRole('button', { name: 'Sign in' }).click();
-    await b.page.getByText('✕ E-mail is required').waitFor();
+    await b.page.getByText('× E-mail is required').waitFor();
     await b.page.getByLabel('E-mail').fill('ravi@sheetkeeper.test');
     await b.page.getByLabel('Password').fill('not-the-password');
     await b.page.getByRole('button', { name: 'Sign in' }).click();
-    await b.page.getByText('✕ That e-mail and password do not match an account.').waitFor();
+    await b.page.getByText('× That e-mail and password do not match an account.').waitFor();
     expect(await b.page.getByLabel('E-mail').inputValue()).toBe('ravi@sheetkeeper.test');
-    await saveScreenshots(b.page, 'sign-in-wrong-password', () => b.page.getByText('✕ That e-mail and password').waitFor());
+    await saveScreenshots(b.page, 'sign-in-wrong-password', () => b.page.getByText('× That e-mail and password').waitFor());
   });
 
   it.each(ROLES)('signs in as %s, shows who and which role, and signs out', async (role) => {

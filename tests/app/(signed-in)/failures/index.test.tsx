@@ -42,7 +42,7 @@ describe('the Failures screen', () => {
     const calls = mockFetchRoutes(() => ({ body: { failures: failureRows(1), next: null } }));
     renderWithClient(<FailuresScreen />);
     await screen.findByRole('table');
-    expect(screen.getByText("✕ The link's run could not be read and is not applied.")).toBeTruthy();
+    expect(screen.getByText("× The link's run could not be read and is not applied.")).toBeTruthy();
     expect(calls[0]!.url).toBe('/api/failures?diagnosis=zero-sign&limit=50');
   });
 });
