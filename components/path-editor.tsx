@@ -1,6 +1,6 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { theme } from '../constants/theme';
-import { ChoiceChips } from './choice-chips';
+import { ChipGroup } from './chip-group';
 import { ComplexInput } from './complex-input';
 import { complexRules } from './complex-rules';
 import type { FieldRules } from './field-rules';
@@ -33,7 +33,7 @@ export function PathEditor({ path, index, onChange, onRemove, rules }: { path: P
       {path.kind === 'grid' ? (
         <Text style={styles.note}>A grid from a suite file: kept as it came; the form does not edit grids.</Text>
       ) : (
-        <ChoiceChips label={`${n} kind`} options={KINDS} value={path.kind} onChange={(kind) => set({ kind })} />
+        <ChipGroup label={`${n} kind`} options={KINDS} value={path.kind} onChange={(kind) => set({ kind })} />
       )}
       {path.kind === 'circle' ? (
         <>
@@ -45,7 +45,7 @@ export function PathEditor({ path, index, onChange, onRemove, rules }: { path: P
             <FormTextInput label={`${n} start angle`} visibleLabel="Start angle" hint='radians, or "3pi/4"' value={path.startAngle} onChangeText={(startAngle) => set({ startAngle })} rules={rules(`${f}.start_angle`)} mono />
             <FormTextInput label={`${n} turns`} visibleLabel="Turns" value={path.turns} onChangeText={(turns) => set({ turns })} rules={rules(`${f}.turns`)} mono />
           </View>
-          <ChoiceChips
+          <ChipGroup
             label={`${n} direction`}
             options={[
               { value: 'ccw', text: '↺ counter-clockwise' },
@@ -70,7 +70,7 @@ export function PathEditor({ path, index, onChange, onRemove, rules }: { path: P
       ) : null}
       {path.kind === 'straddle' ? (
         <>
-          <ChoiceChips
+          <ChipGroup
             label={`${n} straddles`}
             options={[
               { value: 'ray', text: 'a ray' },
@@ -111,7 +111,7 @@ export function PathEditor({ path, index, onChange, onRemove, rules }: { path: P
       ) : null}
       {path.kind === 'circle' || path.kind === 'segment' || path.kind === 'polyline' ? (
         <>
-          <ChoiceChips
+          <ChipGroup
             label={`${n} sampling`}
             options={[
               { value: 'samples', text: 'evenly spaced' },

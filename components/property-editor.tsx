@@ -1,7 +1,7 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { theme } from '../constants/theme';
 import { PROPERTY_LAWS } from '../shared/schemas/property-check-schema';
-import { ChoiceChips } from './choice-chips';
+import { ChipGroup } from './chip-group';
 import { ComplexInput } from './complex-input';
 import { complexRules } from './complex-rules';
 import type { FieldRules } from './field-rules';
@@ -22,9 +22,9 @@ export function PropertyEditor({ value, index, onChange, onRemove, rules }: { va
         <SmallButton label="Remove check" accessibilityLabel={`Remove property ${index + 1}`} onPress={onRemove} danger />
       </View>
       <RuleLines rules={rules(f).map((r) => `${n} ${r}`)} />
-      <ChoiceChips label={`${n} law`} options={PROPERTY_LAWS.map((law) => ({ value: law, text: law }))} value={value.law} onChange={(law) => set({ law })} />
+      <ChipGroup label={`${n} law`} options={PROPERTY_LAWS.map((law) => ({ value: law, text: law }))} value={value.law} onChange={(law) => set({ law })} />
       <RuleLines rules={rules(`${f}.law`)} />
-      <ChoiceChips
+      <ChipGroup
         label={`${n} region`}
         options={[
           { value: 'near-cuts', text: 'near the cuts' },

@@ -5,7 +5,7 @@ import { useReviewSuite } from '../client/use-review-suite';
 import { theme } from '../constants/theme';
 import { reviewBody } from '../shared/schemas/review-body';
 import { ActionButton } from './action-button';
-import { ChoiceChips } from './choice-chips';
+import { ChipGroup } from './chip-group';
 import { FormTextInput } from './form-text-input';
 
 /** Approve a submitted version, or request changes saying what to change; the server's refusal (four eyes) is shown as it says it. */
@@ -27,7 +27,7 @@ export function ReviewForm({ slug, version, onReviewed }: { slug: string; versio
 
   return (
     <View style={styles.box}>
-      <ChoiceChips
+      <ChipGroup
         label="Decision"
         options={[
           { value: 'approve', text: 'approve' },

@@ -3,7 +3,7 @@ import { Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-na
 import type { RunFilters as Filters } from '../client/use-runs';
 import { theme } from '../constants/theme';
 import { RUN_STATUSES, RUN_TRIGGERS, type RunStatus, type RunTrigger } from '../shared/run-status';
-import { FilterChips } from './filter-chips';
+import { ChipGroup } from './chip-group';
 
 const STATUS_WORDS: Record<RunStatus, string> = { queued: '… queued', running: '↻ running', completed: 'completed', failed: '◊ run failed', cancelled: '× cancelled' };
 const TRIGGER_WORDS: Record<RunTrigger, string> = { schedule: 'scheduled', manual: 'by hand', api: 'via API' };
@@ -22,22 +22,25 @@ export function RunFilters({ value, plans, onChange }: { value: Filters; plans: 
 
   const chips = (
     <View style={styles.box}>
-      <FilterChips
+      <ChipGroup
         label="Plan"
-        options={[{ value: undefined, label: 'any plan' }, ...plans.map((p) => ({ value: p.id, label: p.name }))]}
+        groupLabel="Plan filter"
+        options={[{ value: undefined, text: 'any plan' }, ...plans.map((p) => ({ value: p.id, text: p.name }))]}
         value={value.plan}
         onChange={(plan) => onChange({ ...value, plan })}
       />
       <View style={styles.pair}>
-        <FilterChips
+        <ChipGroup
           label="Status"
-          options={[{ value: undefined, label: 'any status' }, ...RUN_STATUSES.map((s) => ({ value: s, label: STATUS_WORDS[s] }))]}
+          groupLabel="Status filter"
+          options={[{ value: undefined, text: 'any status' }, ...RUN_STATUSES.map((s) => ({ value: s, text: STATUS_WORDS[s] }))]}
           value={value.status}
           onChange={(status) => onChange({ ...value, status })}
         />
-        <FilterChips
+        <ChipGroup
           label="Trigger"
-          options={[{ value: undefined, label: 'any trigger' }, ...RUN_TRIGGERS.map((t) => ({ value: t, label: TRIGGER_WORDS[t] }))]}
+          groupLabel="Trigger filter"
+          options={[{ value: undefined, text: 'any trigger' }, ...RUN_TRIGGERS.map((t) => ({ value: t, text: TRIGGER_WORDS[t] }))]}
           value={value.trigger}
           onChange={(trigger) => onChange({ ...value, trigger })}
         />

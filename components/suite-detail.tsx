@@ -7,7 +7,7 @@ import { useSubmitSuite } from '../client/use-submit-suite';
 import { useSuite } from '../client/use-suite';
 import { theme } from '../constants/theme';
 import { ActionButton } from './action-button';
-import { FormSection } from './form-section';
+import { TitledPanel } from './titled-panel';
 import { IssueList } from './issue-list';
 import { QueryState } from './query-state';
 import { ReferenceTableUpload } from './reference-table-upload';
@@ -71,22 +71,22 @@ export function SuiteDetail({ slug }: { slug: string }) {
       {body.story ? <Text style={styles.story}>{body.story}</Text> : null}
       {actions}
       <IssueList error={submit.error ?? retire.error} />
-      <FormSection title="Plane picture" lead="Paths, cuts and branch points of this version, as the runner samples them.">
+      <TitledPanel title="Plane picture" lead="Paths, cuts and branch points of this version, as the runner samples them.">
         <SuitePreview body={body} label={`Plane picture of ${body.title}`} testID="suite-picture" height={wide ? 380 : 300} />
-      </FormSection>
-      <FormSection title="What this version checks">
+      </TitledPanel>
+      <TitledPanel title="What this version checks">
         <SuiteFacts suite={body} />
-      </FormSection>
+      </TitledPanel>
     </View>
   );
   const side = (
     <View style={styles.column}>
-      <FormSection title="Version history">
+      <TitledPanel title="Version history">
         <VersionHistory versions={versions} selected={shown.version} onSelect={setChosen} />
-      </FormSection>
-      <FormSection title="Reference table" lead="Check values computed elsewhere against Sheetkeeper's reference for the latest version.">
+      </TitledPanel>
+      <TitledPanel title="Reference table" lead="Check values computed elsewhere against Sheetkeeper's reference for the latest version.">
         <ReferenceTableUpload slug={slug} />
-      </FormSection>
+      </TitledPanel>
     </View>
   );
   return wide ? (

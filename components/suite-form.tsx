@@ -8,7 +8,7 @@ import { theme } from '../constants/theme';
 import type { SuiteIssue } from '../shared/suite-issue';
 import { validateSuite } from '../shared/validate-suite';
 import { ActionButton } from './action-button';
-import { ChoiceChips } from './choice-chips';
+import { ChipGroup } from './chip-group';
 import { ComplexInput } from './complex-input';
 import { complexRules } from './complex-rules';
 import { CutLayoutEditor } from './cut-layout-editor';
@@ -16,7 +16,7 @@ import { draftToSuiteBody } from './draft-to-suite-body';
 import { emptyPathDraft } from './empty-path-draft';
 import { emptyPropertyDraft } from './empty-property-draft';
 import type { FieldRules } from './field-rules';
-import { FormSection } from './form-section';
+import { TitledPanel } from './titled-panel';
 import { FormTextInput } from './form-text-input';
 import { PathEditor } from './path-editor';
 import { PropertyEditor } from './property-editor';
@@ -133,14 +133,14 @@ export function SuiteForm({ initial, editing, onDone }: Props) {
 
   const regular = draft.branchKind === 'regular';
   const preview = (
-    <FormSection title="Preview" lead="Paths, cuts and branch points as the runner will see them, redrawn as you type.">
+    <TitledPanel title="Preview" lead="Paths, cuts and branch points as the runner will see them, redrawn as you type.">
       <SuitePreview body={deferredBody} label="Preview of the suite" height={wide ? 360 : 300} testID="suite-preview" />
-    </FormSection>
+    </TitledPanel>
   );
 
   const form = (
     <View style={styles.column}>
-      <FormSection title="What it checks">
+      <TitledPanel title="What it checks">
         <FormTextInput label="Id" hint="lower-case words joined by hyphens; it stays the same across versions" value={draft.id} onChangeText={(id) => update('id', { id })} rules={rules('id')} mono testID="suite-id" />
         <FormTextInput label="Title" value={draft.title} onChangeText={(title) => update('title', { title })} rules={rules('title')} />
         <FormTextInput label="Story" hint="why the suite exists: what a maintainer would break, and what the values pin down" value={draft.story} onChangeText={(story) => update('story', { story })} rules={rules('story')} multiline />
@@ -152,10 +152,10 @@ export function SuiteForm({ initial, editing, onDone }: Props) {
           rules={rules('subject')}
           mono
         />
-      </FormSection>
+      </TitledPanel>
 
-      <FormSection title="Branch" lead="What the subject should equal: the principal branch of every function in it, or a regular branch of g(z)^ν fixed by its value at z0.">
-        <ChoiceChips
+      <TitledPanel title="Branch" lead="What the subject should equal: the principal branch of every function in it, or a regular branch of g(z)^ν fixed by its value at z0.">
+        <ChipGroup
           label="Branch spec"
           options={[
             { value: 'principal', text: 'principal' },
@@ -173,7 +173,7 @@ export function SuiteForm({ initial, editing, onDone }: Props) {
               <FormTextInput label="ν, imaginary part" hint="blank for a real ν" value={draft.nuIm} onChangeText={(nuIm) => update('branch.nu', { nuIm })} rules={rules('branch.nu.im')} mono />
             </View>
             <ComplexInput label="Reference point z0" value={draft.z0} onChange={(z0) => update('branch.z0', { z0 })} rules={complexRules(rules, 'branch.z0')} />
-            <ChoiceChips
+            <ChipGroup
               label="Fixed by"
               options={[
                 { value: 'k', text: 'the k-th value principal·e^(2πiνk)' },
@@ -190,7 +190,7 @@ export function SuiteForm({ initial, editing, onDone }: Props) {
             <CutLayoutEditor cuts={draft.cuts} onChange={(cuts) => update('branch.cuts', { cuts })} rules={rules} />
           </>
         ) : null}
-        <ChoiceChips
+        <ChipGroup
           label="Convention on the cuts"
           options={[
             { value: 'signed-zero', text: 'signed zero (Annex G)' },
@@ -200,9 +200,9 @@ export function SuiteForm({ initial, editing, onDone }: Props) {
           onChange={(convention) => update('convention', { convention })}
         />
         <RuleLines rules={rules('convention')} />
-      </FormSection>
+      </TitledPanel>
 
-      <FormSection title="Paths" lead="Where the subject is evaluated. t runs over [0, 1]: the angle on a circle, the fraction of arc length on a polyline.">
+      <TitledPanel title="Paths" lead="Where the subject is evaluated. t runs over [0, 1]: the angle on a circle, the fraction of arc length on a polyline.">
         <RuleLines rules={rules('paths').map((r) => `Paths ${r}`)} />
         {draft.paths.map((p, i) => (
           <PathEditor
@@ -215,11 +215,11 @@ export function SuiteForm({ initial, editing, onDone }: Props) {
           />
         ))}
         <SmallButton label="+ Add a path" onPress={() => update(`paths.${draft.paths.length}`, (d) => ({ ...d, paths: [...d.paths, emptyPathDraft(`path ${d.paths.length + 1}`)] }))} />
-      </FormSection>
+      </TitledPanel>
 
       {wide ? null : preview}
 
-      <FormSection title="Tolerances" lead="How far a value may be from the reference before it fails.">
+      <TitledPanel title="Tolerances" lead="How far a value may be from the reference before it fails.">
         <ToleranceEditor label="Values" value={draft.tolerances.values} onChange={(values) => update('tolerances', (d) => ({ ...d, tolerances: { ...d.tolerances, values } }))} rules={rules} field="tolerances.values" />
         <ToggleChip
           label="Monodromy has its own tolerance"
@@ -237,9 +237,9 @@ export function SuiteForm({ initial, editing, onDone }: Props) {
         {draft.tolerances.properties ? (
           <ToleranceEditor label="Properties" value={draft.tolerances.properties} onChange={(properties) => update('tolerances', (d) => ({ ...d, tolerances: { ...d.tolerances, properties } }))} rules={rules} field="tolerances.properties" />
         ) : null}
-      </FormSection>
+      </TitledPanel>
 
-      <FormSection title="Property checks" lead="Laws checked on the library's own values at random points (seeded, so a failure can be replayed).">
+      <TitledPanel title="Property checks" lead="Laws checked on the library's own values at random points (seeded, so a failure can be replayed).">
         <RuleLines rules={rules('properties').map((r) => `Property checks ${r}`)} />
         {draft.properties.length === 0 ? <Text style={styles.empty}>No property checks.</Text> : null}
         {draft.properties.map((p, i) => (
@@ -253,7 +253,7 @@ export function SuiteForm({ initial, editing, onDone }: Props) {
           />
         ))}
         <SmallButton label="+ Add a property check" onPress={() => update(`properties.${draft.properties.length}`, (d) => ({ ...d, properties: [...d.properties, emptyPropertyDraft()] }))} />
-      </FormSection>
+      </TitledPanel>
 
       <View style={styles.footer}>
         {refused ? (

@@ -3,7 +3,7 @@ import { StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import { useMe } from '../client/use-me';
 import { useSuite } from '../client/use-suite';
 import { theme } from '../constants/theme';
-import { FormSection } from './form-section';
+import { TitledPanel } from './titled-panel';
 import { QueryState } from './query-state';
 import { ReviewForm } from './review-form';
 import { SuiteDiff } from './suite-diff';
@@ -26,25 +26,25 @@ export function SuiteReview({ slug }: { slug: string }) {
   const own = current.author.id === me.id;
 
   const decision = (
-    <FormSection title="Decision">
+    <TitledPanel title="Decision">
       {own ? <Text style={styles.own}>◊ You wrote this version. Four eyes: another reviewer must review it, and the server will refuse your review.</Text> : null}
       <ReviewForm slug={slug} version={current.version} onReviewed={() => router.replace('/review')} />
-    </FormSection>
+    </TitledPanel>
   );
   const changes = (
-    <FormSection title="What changed">
+    <TitledPanel title="What changed">
       <SuiteDiff current={current} previous={previous} />
-    </FormSection>
+    </TitledPanel>
   );
   const picture = (
-    <FormSection title="Plane picture">
+    <TitledPanel title="Plane picture">
       <SuitePreview body={current.body} label={`Plane picture of ${current.body.title}`} testID="review-picture" height={wide ? 360 : 280} />
-    </FormSection>
+    </TitledPanel>
   );
   const facts = (
-    <FormSection title="What this version checks">
+    <TitledPanel title="What this version checks">
       <SuiteFacts suite={current.body} />
-    </FormSection>
+    </TitledPanel>
   );
   return (
     <View style={styles.column}>

@@ -4,7 +4,7 @@ import { Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
 import { useSuites } from '../client/use-suites';
 import { theme } from '../constants/theme';
 import { SUITE_STATUSES, type SuiteStatus } from '../shared/suite-status';
-import { ChoiceChips } from './choice-chips';
+import { ChipGroup } from './chip-group';
 import { QueryState } from './query-state';
 import { SuiteCard } from './suite-card';
 import { SuiteFileUpload } from './suite-file-upload';
@@ -30,7 +30,7 @@ export function SuitesList() {
         <Text style={styles.label}>Search</Text>
         <TextInput accessibilityLabel="Search suites by id, title or subject" placeholder="id, title or subject" value={q} onChangeText={setQ} autoCapitalize="none" autoCorrect={false} style={styles.input} />
       </View>
-      <ChoiceChips label="Latest version" options={STATUS_OPTIONS} value={status} onChange={(v) => setStatus(v as SuiteStatus | 'any')} />
+      <ChipGroup label="Latest version" options={STATUS_OPTIONS} value={status} onChange={(v) => setStatus(v as SuiteStatus | 'any')} />
       {suites.isPending ? <QueryState state="loading" /> : null}
       {suites.isError ? <QueryState state="error" message={suites.error.message} onRetry={() => void suites.refetch()} /> : null}
       {suites.data && suites.data.length === 0 ? <QueryState state="empty" message={q || status !== 'any' ? 'No suite matches this search.' : 'No suites yet: write one or upload a file.'} /> : null}

@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 import { theme } from '../constants/theme';
-import { ChoiceChips } from './choice-chips';
+import { ChipGroup } from './chip-group';
 import type { FieldRules } from './field-rules';
 import { FormTextInput } from './form-text-input';
 import { RuleLines } from './rule-lines';
@@ -10,7 +10,7 @@ import type { ToleranceDraft } from './suite-draft';
 export function ToleranceEditor({ label, value, onChange, rules, field }: { label: string; value: ToleranceDraft; onChange: (t: ToleranceDraft) => void; rules: FieldRules; field: string }) {
   return (
     <View style={styles.box}>
-      <ChoiceChips
+      <ChipGroup
         label={`${label} measured in`}
         options={[
           { value: 'ulps', text: 'ulps per part' },
