@@ -1,18 +1,11 @@
 import { DEMO_USERS } from '../../server/seed/demo-users';
-import { BASE_URL, openBrowser, type OpenBrowser } from './support/open-browser';
+import { BASE_URL } from './support/open-browser';
+import { browserPerTest } from './support/browser-per-test';
 import { goTo } from './support/go-to';
 import { saveScreenshots } from './support/save-screenshots';
 import { signIn } from './support/sign-in';
 
-let b: OpenBrowser;
-beforeEach(async () => {
-  b = await openBrowser();
-});
-afterEach(async () => {
-  const errors = [...b.pageErrors];
-  await b.close();
-  expect(errors).toEqual([]);
-});
+const b = browserPerTest();
 
 const kwame = DEMO_USERS.find((u) => u.email === 'kwame@sheetkeeper.test')!;
 

@@ -1,20 +1,13 @@
 import { DEMO_USERS } from '../../server/seed/demo-users';
 import { ROLES } from '../../shared/roles';
-import { BASE_URL, openBrowser, type OpenBrowser } from './support/open-browser';
+import { BASE_URL } from './support/open-browser';
 import { saveScreenshots } from './support/save-screenshots';
 import { signIn } from './support/sign-in';
 import { signOut } from './support/sign-out';
+import { browserPerTest } from './support/browser-per-test';
 import { goTo } from './support/go-to';
 
-let b: OpenBrowser;
-beforeEach(async () => {
-  b = await openBrowser();
-});
-afterEach(async () => {
-  const errors = [...b.pageErrors];
-  await b.close();
-  expect(errors).toEqual([]);
-});
+const b = browserPerTest();
 
 const demo = (role: string) => DEMO_USERS.find((u) => u.role === role)!;
 
