@@ -172,7 +172,7 @@ export function PlanePicture({ label, paths = [], pointSets = [], cuts = [], lin
         ) : null}
         {legendMarks.map((m) => (
           <LegendItem key={legendOf(m)} text={legendOf(m)}>
-            <MarkShape cx={9} cy={8} tone={m.tone} color={m.kind?.color} />
+            <MarkShape cx={9} cy={8} tone={m.tone} color={m.kind?.color} inLegend />
           </LegendItem>
         ))}
         <Text style={styles.scale}>
@@ -183,7 +183,8 @@ export function PlanePicture({ label, paths = [], pointSets = [], cuts = [], lin
   );
 }
 
-function MarkShape({ cx, cy, tone, color = MARK_STYLES[tone].color }: { cx: number; cy: number; tone: MarkTone; color?: string }) {
+/** `inLegend` draws the ring smaller, so it fits the legend's 18 × 16 swatch. */
+function MarkShape({ cx, cy, tone, color = MARK_STYLES[tone].color, inLegend = false }: { cx: number; cy: number; tone: MarkTone; color?: string; inLegend?: boolean }) {
   switch (tone) {
     case 'pass':
       return <Circle cx={cx} cy={cy} r={3} fill={color} />;
@@ -194,7 +195,7 @@ function MarkShape({ cx, cy, tone, color = MARK_STYLES[tone].color }: { cx: numb
     case 'skipped':
       return <Rect x={cx - 4} y={cy - 4} width={8} height={8} fill="none" stroke={color} strokeWidth={1.5} />;
     case 'focus':
-      return <Circle cx={cx} cy={cy} r={10} fill="none" stroke={color} strokeWidth={3} />;
+      return <Circle cx={cx} cy={cy} r={inLegend ? 5.5 : 10} fill="none" stroke={color} strokeWidth={inLegend ? 2 : 3} />;
   }
 }
 
