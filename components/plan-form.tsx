@@ -7,7 +7,7 @@ import { useSavePlan } from '../client/use-save-plan';
 import { theme } from '../constants/theme';
 import type { PlanView } from '../shared/plan-view';
 import { planBody } from '../shared/schemas/plan-body';
-import { ActionButton } from './action-button';
+import { FormActions } from './form-actions';
 import { CheckList } from './check-list';
 import { QueryState } from './query-state';
 import { TextField } from './text-field';
@@ -169,15 +169,7 @@ export function PlanForm({ plan, onSaved, onCancel }: { plan?: PlanView; onSaved
           />
         </View>
       </View>
-      {other ? (
-        <Text accessibilityRole="alert" style={styles.failure}>
-          ❌ {other}
-        </Text>
-      ) : null}
-      <View style={styles.buttons}>
-        <ActionButton label={plan ? 'Save plan' : 'Create plan'} onPress={submit} busy={save.isPending} />
-        <ActionButton label="Cancel" tone="quiet" onPress={onCancel} />
-      </View>
+      <FormActions failure={other} saveLabel={plan ? 'Save plan' : 'Create plan'} onSave={submit} busy={save.isPending} onCancel={onCancel} />
     </View>
   );
 }
@@ -190,6 +182,4 @@ const styles = StyleSheet.create({
   columnNarrow: { flex: 2 },
   columnWide: { flex: 3 },
   help: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
-  failure: { fontFamily: theme.font.medium, color: theme.color.danger, backgroundColor: theme.color.dangerSoft, padding: theme.space(3), borderRadius: theme.radius },
-  buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
 });

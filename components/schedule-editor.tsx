@@ -7,7 +7,7 @@ import { useSchedulePreview } from '../client/use-schedule-preview';
 import { theme } from '../constants/theme';
 import { cronPreviewBody } from '../shared/schemas/schedule-body';
 import type { ScheduleView } from '../shared/schedule-view';
-import { ActionButton } from './action-button';
+import { FormActions } from './form-actions';
 import { NextRuns } from './next-runs';
 import { TextField } from './text-field';
 
@@ -98,15 +98,7 @@ export function ScheduleEditor({ planId, schedule, onDone }: { planId: string; s
       <View style={styles.preview}>
         <NextRuns nextRuns={preview.nextRuns} timeZone={timeZone} working={preview.working} testID="schedule-next-runs" />
       </View>
-      {other ? (
-        <Text accessibilityRole="alert" style={styles.failure}>
-          ❌ {other}
-        </Text>
-      ) : null}
-      <View style={styles.buttons}>
-        <ActionButton label={schedule ? 'Save schedule' : 'Add schedule'} onPress={submit} busy={save.isPending} />
-        <ActionButton label="Cancel" tone="quiet" onPress={onDone} />
-      </View>
+      <FormActions failure={other} saveLabel={schedule ? 'Save schedule' : 'Add schedule'} onSave={submit} busy={save.isPending} onCancel={onDone} />
     </View>
   );
 }
@@ -120,6 +112,4 @@ const styles = StyleSheet.create({
   chipText: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink },
   chipTextOn: { fontFamily: theme.font.medium, color: theme.color.accent },
   preview: { padding: theme.space(3), borderRadius: theme.radius, backgroundColor: theme.color.paper, borderWidth: 1, borderColor: theme.color.rule },
-  failure: { fontFamily: theme.font.medium, color: theme.color.danger, backgroundColor: theme.color.dangerSoft, padding: theme.space(3), borderRadius: theme.radius },
-  buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
 });
