@@ -33,7 +33,7 @@ import { databaseUrl } from '../server/config';
 const DB = 'sheetkeeper_bench';
 const FAILURE_ROWS = Number(process.env.BENCH_FAILURES ?? 1_000_000);
 const CONCURRENCY = 50;
-const REQUESTS = 1000;
+const REQUESTS = Number(process.env.BENCH_REQUESTS ?? 1000);
 
 async function main(): Promise<void> {
   const base = databaseUrl().replace(/\/[^/]+$/, '');
