@@ -1,6 +1,8 @@
 import { useState } from 'react';
 import { Pressable, StyleSheet, Text, TextInput, useWindowDimensions, View } from 'react-native';
 import { theme } from '../constants/theme';
+import { INPUT_BOX_STYLE } from './input-box-style';
+import { RuleLines } from './rule-lines';
 
 export interface CheckListItem {
   key: string;
@@ -93,11 +95,7 @@ export function CheckList({ label, items, selected, onChange, error, filterFrom 
           );
         })}
       </View>
-      {error ? (
-        <Text accessibilityRole="alert" style={styles.error}>
-          × {label} {error}
-        </Text>
-      ) : null}
+      <RuleLines rules={error ? [`${label} ${error}`] : []} />
     </View>
   );
 }
@@ -111,15 +109,7 @@ const styles = StyleSheet.create({
   filter: {
     flex: 1,
     minWidth: 0,
-    minHeight: 44,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    paddingHorizontal: theme.space(3),
-    fontFamily: theme.font.regular,
-    fontSize: theme.size.body,
-    color: theme.color.ink,
-    backgroundColor: theme.color.panel,
+    ...INPUT_BOX_STYLE,
   },
   tool: { minHeight: 44, justifyContent: 'center', paddingHorizontal: theme.space(3), borderRadius: theme.radius, borderWidth: 1, borderColor: theme.color.rule },
   toolText: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.ink },
@@ -136,5 +126,4 @@ const styles = StyleSheet.create({
   title: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.ink },
   detail: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.inkSoft },
   blocked: { fontFamily: theme.font.regular, fontSize: 12, color: theme.color.danger },
-  error: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.danger },
 });

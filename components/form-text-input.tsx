@@ -1,5 +1,6 @@
 import { StyleSheet, Text, TextInput, View } from 'react-native';
 import { theme } from '../constants/theme';
+import { INPUT_BOX_STYLE } from './input-box-style';
 import { RuleLines } from './rule-lines';
 
 interface Props {
@@ -43,15 +44,7 @@ const styles = StyleSheet.create({
   field: { gap: theme.space(1), flexGrow: 1, minWidth: 100 },
   label: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft },
   input: {
-    minHeight: theme.touch,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    paddingHorizontal: theme.space(3),
-    fontFamily: theme.font.regular,
-    fontSize: theme.size.body,
-    color: theme.color.ink,
-    backgroundColor: theme.color.panel,
+    ...INPUT_BOX_STYLE,
     minWidth: 0,
   },
   mono: { fontFamily: theme.font.mono },

@@ -1,5 +1,7 @@
 import { StyleSheet, Text, TextInput, View, type TextInputProps } from 'react-native';
 import { theme } from '../constants/theme';
+import { INPUT_BOX_STYLE } from './input-box-style';
+import { RuleLines } from './rule-lines';
 
 interface Props extends Pick<TextInputProps, 'secureTextEntry' | 'autoComplete' | 'keyboardType' | 'onSubmitEditing' | 'autoCapitalize' | 'multiline' | 'placeholder'> {
   label: string;
@@ -27,11 +29,7 @@ export function TextField({ label, value, onChangeText, error, testID, mono = fa
         placeholderTextColor={theme.color.inkFaint}
         {...inputProps}
       />
-      {error ? (
-        <Text accessibilityRole="alert" style={styles.error}>
-          × {label} {error}
-        </Text>
-      ) : null}
+      <RuleLines rules={error ? [`${label} ${error}`] : []} />
     </View>
   );
 }
@@ -40,18 +38,9 @@ const styles = StyleSheet.create({
   field: { gap: theme.space(1) },
   label: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft, letterSpacing: 0.3 },
   input: {
-    minHeight: theme.touch,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    paddingHorizontal: theme.space(3),
-    fontFamily: theme.font.regular,
-    fontSize: theme.size.body,
-    color: theme.color.ink,
-    backgroundColor: theme.color.panel,
+    ...INPUT_BOX_STYLE,
   },
   mono: { fontFamily: theme.font.mono },
   multiline: { minHeight: 96, paddingVertical: theme.space(2), textAlignVertical: 'top' },
   inputError: { borderColor: theme.color.danger, borderWidth: 2 },
-  error: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.danger },
 });
