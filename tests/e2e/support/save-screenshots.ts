@@ -9,13 +9,33 @@ export const SCREEN_SIZES = [
 
 const DIR = path.join(__dirname, '..', '..', '..', 'test-results');
 
-/** Saves the current screen at the phone and the wide size: test-results/<name>-<w>x<h>.png. */
+/** The most a screen grows for its picture, so one endless list cannot make a giant file. */
+const MAX_EXTRA_HEIGHT = 5000;
+
+/**
+ * Saves the current screen at the phone and the wide size: test-results/<name>-<w>x<h>.png.
+ * The app scrolls inside its own frame (a ScrollView), so a full-page shot alone would show
+ * only the first screenful: the window is made taller by what the frame hides, the whole
+ * screen is taken, and the window goes back to its size.
+ */
 export async function saveScreenshots(page: Page, name: string, ready: () => Promise<unknown>): Promise<void> {
   mkdirSync(DIR, { recursive: true });
   const original = page.viewportSize();
   for (const size of SCREEN_SIZES) {
     await page.setViewportSize(size);
     await ready();
+    const hidden = await page.evaluate(() =>
+      Math.max(
+        0,
+        ...Array.from(document.querySelectorAll('div'))
+          .filter((el) => /auto|scroll/.test(getComputedStyle(el).overflowY) && el.clientHeight > 200)
+          .map((el) => el.scrollHeight - el.clientHeight),
+      ),
+    );
+    if (hidden > 0) {
+      await page.setViewportSize({ width: size.width, height: size.height + Math.min(hidden, MAX_EXTRA_HEIGHT) });
+      await ready();
+    }
     await page.screenshot({ path: path.join(DIR, `${name}-${size.width}x${size.height}.png`), fullPage: true });
   }
   if (original) await page.setViewportSize(original);
