@@ -5,6 +5,7 @@ import { theme } from '../constants/theme';
 import type { FailurePathPoint, FailurePathView } from '../shared/failure-path-view';
 import { DIAGNOSIS_STYLES } from './diagnosis-styles';
 import { formatUlps } from './format-ulps';
+import { LegendEntry } from './legend-entry';
 
 /** Two neighbouring points whose arguments differ by more than this (radians) are a jump, not a slope: a 65-point circle turns ~0.1 rad a step. */
 const JUMP = 1;
@@ -178,13 +179,13 @@ export function PathPlots({ view }: { view: FailurePathView }) {
           )}
         </View>
         <View style={styles.legend}>
-          <Legend text="passed: within tolerance, error not stored">
+          <LegendEntry text="passed: within tolerance, error not stored">
             <Circle cx={9} cy={8} r={2.5} fill={EXPECTED_COLOR} />
-          </Legend>
+          </LegendEntry>
           {[...new Set(pts.filter((p) => p.outcome !== 'pass').map((p) => p.diagnosis ?? (p.outcome === 'skipped' ? 'skipped' : p.outcome === 'error' ? 'error' : 'unexplained')))].map((tone) => (
-            <Legend key={tone} text={`${DIAGNOSIS_STYLES[tone].glyph} failed: ${DIAGNOSIS_STYLES[tone].word}`}>
+            <LegendEntry key={tone} text={`${DIAGNOSIS_STYLES[tone].glyph} failed: ${DIAGNOSIS_STYLES[tone].word}`}>
               <Cross cx={9} cy={8} color={DIAGNOSIS_STYLES[tone].color} />
-            </Legend>
+            </LegendEntry>
           ))}
         </View>
       </View>
@@ -235,13 +236,13 @@ export function PathPlots({ view }: { view: FailurePathView }) {
           )}
         </View>
         <View style={styles.legend}>
-          <Legend text="expected (reference)">
+          <LegendEntry text="expected (reference)">
             {continuous ? <Line x1={1} x2={17} y1={8} y2={8} stroke={EXPECTED_COLOR} strokeWidth={2.5} /> : <Circle cx={9} cy={8} r={3} fill={EXPECTED_COLOR} />}
-          </Legend>
-          <Legend text={continuous ? 'library (dashed; × where stored)' : 'library (× where stored)'}>
+          </LegendEntry>
+          <LegendEntry text={continuous ? 'library (dashed; × where stored)' : 'library (× where stored)'}>
             {continuous ? <Line x1={1} x2={17} y1={8} y2={8} stroke={LIBRARY_COLOR} strokeWidth={1.5} strokeDasharray="4 2" /> : null}
             {continuous ? null : <Cross cx={9} cy={8} color={LIBRARY_COLOR} />}
-          </Legend>
+          </LegendEntry>
         </View>
         <Text style={styles.words} testID="jump-words">
           {argWords}
@@ -261,23 +262,10 @@ function Cross({ cx, cy, color }: { cx: number; cy: number; color: string }) {
   return <Path d={`M ${cx - 4} ${cy - 4} L ${cx + 4} ${cy + 4} M ${cx - 4} ${cy + 4} L ${cx + 4} ${cy - 4}`} stroke={color} strokeWidth={2} />;
 }
 
-function Legend({ text, children }: { text: string; children: ReactNode }) {
-  return (
-    <View style={styles.legendItem}>
-      <Svg width={18} height={16}>
-        {children}
-      </Svg>
-      <Text style={styles.legendText}>{text}</Text>
-    </View>
-  );
-}
-
 const styles = StyleSheet.create({
   root: { gap: theme.space(4) },
   plot: { borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, overflow: 'hidden', backgroundColor: theme.color.panel },
   title: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.ink, paddingHorizontal: theme.space(3), paddingTop: theme.space(3) },
   legend: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3), paddingHorizontal: theme.space(3), paddingVertical: theme.space(2), borderTopWidth: 1, borderTopColor: theme.color.rule },
-  legendItem: { flexDirection: 'row', alignItems: 'center', gap: theme.space(1) },
-  legendText: { fontFamily: theme.font.regular, fontSize: 12, color: theme.color.inkSoft },
   words: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink, paddingHorizontal: theme.space(3), paddingBottom: theme.space(3), lineHeight: 19 },
 });

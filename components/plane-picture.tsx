@@ -1,8 +1,9 @@
-import { useState, type ReactNode } from 'react';
+import { useState } from 'react';
 import { StyleSheet, Text, View, type LayoutChangeEvent } from 'react-native';
 import Svg, { Circle, G, Line, Path, Polyline, Rect, Text as SvgText } from 'react-native-svg';
 import { theme } from '../constants/theme';
 import { fitPlaneView, type PlaneView } from './fit-plane-view';
+import { LegendEntry } from './legend-entry';
 import { MARK_STYLES, type MarkTone } from './mark-styles';
 
 export interface PlanePoint {
@@ -144,36 +145,36 @@ export function PlanePicture({ label, paths = [], pointSets = [], cuts = [], lin
       </View>
       <View style={styles.legend}>
         {cuts.length ? (
-          <LegendItem text="expected cut">
+          <LegendEntry text="expected cut">
             <Line x1={1} x2={17} y1={8} y2={8} stroke={theme.color.danger} strokeWidth={3} strokeDasharray="5 3" />
-          </LegendItem>
+          </LegendEntry>
         ) : null}
         {[...new Map(lines.map((l) => [`${l.marker} ${l.name}`, l])).values()].map((l) => (
-          <LegendItem key={`${l.marker} ${l.name}`} text={l.name}>
+          <LegendEntry key={`${l.marker} ${l.name}`} text={l.name}>
             {l.marker === 'cross' ? <Line x1={1} x2={17} y1={8} y2={8} stroke={theme.color.danger} strokeWidth={1.5} /> : null}
             <LineMarker cx={4} cy={8} marker={l.marker} />
             <LineMarker cx={14} cy={8} marker={l.marker} />
-          </LegendItem>
+          </LegendEntry>
         ))}
         {branchPoints.length ? (
-          <LegendItem text="branch point">
+          <LegendEntry text="branch point">
             <BranchPointShape cx={9} cy={8} />
-          </LegendItem>
+          </LegendEntry>
         ) : null}
         {paths.length ? (
-          <LegendItem text={paths.length === 1 ? `path ${paths[0]!.name}` : `${paths.length} paths`}>
+          <LegendEntry text={paths.length === 1 ? `path ${paths[0]!.name}` : `${paths.length} paths`}>
             <Line x1={1} x2={17} y1={8} y2={8} stroke={theme.color.ink} strokeWidth={1.5} />
-          </LegendItem>
+          </LegendEntry>
         ) : null}
         {pointSets.length ? (
-          <LegendItem text={pointSets.length === 1 ? `points of ${pointSets[0]!.name}` : `points of ${pointSets.length} straddles`}>
+          <LegendEntry text={pointSets.length === 1 ? `points of ${pointSets[0]!.name}` : `points of ${pointSets.length} straddles`}>
             <PointDot cx={9} cy={8} />
-          </LegendItem>
+          </LegendEntry>
         ) : null}
         {legendMarks.map((m) => (
-          <LegendItem key={legendOf(m)} text={legendOf(m)}>
+          <LegendEntry key={legendOf(m)} text={legendOf(m)}>
             <MarkShape cx={9} cy={8} tone={m.tone} color={m.kind?.color} inLegend />
-          </LegendItem>
+          </LegendEntry>
         ))}
         <Text style={styles.scale}>
           Re {fmt(midRe - innerW / 2 / scale)} … {fmt(midRe + innerW / 2 / scale)}, Im {fmt(midIm - innerH / 2 / scale)} … {fmt(midIm + innerH / 2 / scale)}
@@ -217,18 +218,6 @@ function BranchPointShape({ cx, cy }: { cx: number; cy: number }) {
   );
 }
 
-/** A legend entry whose swatch is drawn with the same shape as in the picture. */
-function LegendItem({ text, children }: { text: string; children: ReactNode }) {
-  return (
-    <View style={styles.legendItem}>
-      <Svg width={18} height={16}>
-        {children}
-      </Svg>
-      <Text style={styles.legendText}>{text}</Text>
-    </View>
-  );
-}
-
 function fmt(v: number): string {
   return Math.abs(v) >= 1000 || (Math.abs(v) < 0.01 && v !== 0) ? v.toExponential(1) : String(Number(v.toFixed(2)));
 }
@@ -236,7 +225,5 @@ function fmt(v: number): string {
 const styles = StyleSheet.create({
   frame: { borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, overflow: 'hidden', backgroundColor: theme.color.panel },
   legend: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3), padding: theme.space(3), borderTopWidth: 1, borderTopColor: theme.color.rule },
-  legendItem: { flexDirection: 'row', alignItems: 'center', gap: theme.space(1) },
-  legendText: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
   scale: { fontFamily: theme.font.mono, fontSize: 11, color: theme.color.inkFaint, width: '100%' },
 });
