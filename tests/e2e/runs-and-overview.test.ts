@@ -93,8 +93,11 @@ describe('Overview and runs', () => {
     await b.page.getByRole('button', { name: 'Keep it running' }).click();
     expect((await api<{ body: { run: { status: string } } }>(`/runs/${run.id}`)).body.run.status).toMatch(/queued|running/);
     await b.page.getByRole('button', { name: 'Cancel run…' }).click();
+    // The screen shows "cancelled" at once (optimistic); the server's answer comes after it.
+    const answered = b.page.waitForResponse((r) => r.url().endsWith(`/api/runs/${run.id}/cancel`) && r.request().method() === 'POST');
     await b.page.getByRole('button', { name: 'Yes, cancel the run' }).click();
     await b.page.getByText('× cancelled').first().waitFor();
+    expect((await answered).status()).toBe(200);
     expect((await api<{ body: { run: { status: string } } }>(`/runs/${run.id}`)).body.run.status).toBe('cancelled');
     expect(await b.page.getByRole('progressbar', { name: /^Progress:/ }).count()).toBe(0);
   });
