@@ -71,6 +71,31 @@ describe('runs and the failure table', () => {
     }
   });
 
+  it('answers null, as the row reader does, for an error measure that is not finite', async () => {
+    const [shard] = await t.db.dataSource.query(`SELECT id FROM shards WHERE run_id = $1 LIMIT 1`, [runId]);
+    const inserted: { id: string }[] = await t.db.dataSource.query(
+      `INSERT INTO failures (run_id, shard_id, suite_slug, suite_version, target_name, target_library, target_version, convention, path_name, point_index, t, z, z_hex, point_key, outcome_kind, diagnosis_kind, diagnosis, ulps, relative_error, rule, reproducer)
+       VALUES ($1, $2, 'non-finite', 1, 'complex.js@2.4.3', 'complex.js', '2.4.3', 'signed-zero', 'p', 0, 0, '{"re":"1","im":"0"}', '{"re":"0x1p+0","im":"0x0p+0"}', 'nf0', 'fail', 'inaccurate', '{"kind":"inaccurate"}', 'Infinity', 'NaN', 'r', 'x'),
+              ($1, $2, 'non-finite', 1, 'complex.js@2.4.3', 'complex.js', '2.4.3', 'signed-zero', 'p', 1, 1, '{"re":"1","im":"0"}', '{"re":"0x1p+0","im":"0x0p+0"}', 'nf1', 'fail', 'inaccurate', '{"kind":"inaccurate"}', '-Infinity', 'Infinity', 'r', 'x')
+       RETURNING id`,
+      [runId, shard.id],
+    );
+    try {
+      for (const sort of ['id', 'ulps'] as const) {
+        const query = { sort, run: runId, suite: 'non-finite', limit: 50 };
+        const page = JSON.parse(await failurePageJson(t.db.dataSource, query));
+        expect(page.failures.map((f: { ulps: unknown; relativeError: unknown }) => [f.ulps, f.relativeError])).toEqual([
+          [null, null],
+          [null, null],
+        ]);
+        const { rows, next } = await searchFailures(t.db.dataSource, query);
+        expect(page).toEqual(JSON.parse(JSON.stringify({ failures: rows, next })));
+      }
+    } finally {
+      await t.db.dataSource.query(`DELETE FROM failures WHERE id = ANY($1)`, [inserted.map((r) => r.id)]);
+    }
+  });
+
   it('sorts by ulps, largest first, across pages', async () => {
     const first = (await kwame.get(`/api/failures?run=${runId}&diagnosis=inaccurate&sort=ulps&limit=30`)).body;
     const second = (await kwame.get(`/api/failures?run=${runId}&diagnosis=inaccurate&sort=ulps&limit=30&after=${first.next}`)).body;
