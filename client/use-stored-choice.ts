@@ -1,13 +1,5 @@
 import { useCallback, useState } from 'react';
-
-/** Reads local storage where there is one (the web); elsewhere, and when storage refuses, the choice lasts for the session. */
-function storage(): Storage | null {
-  try {
-    return typeof window !== 'undefined' && window.localStorage ? window.localStorage : null;
-  } catch {
-    return null;
-  }
-}
+import { localStore } from './local-store';
 
 /**
  * A list of choices remembered in local storage under `key` (e.g. the table's columns).
@@ -16,7 +8,7 @@ function storage(): Storage | null {
  */
 export function useStoredChoice<T extends string>(key: string, options: readonly T[], fallback: readonly T[]): [T[], (next: T[]) => void] {
   const [value, setValue] = useState<T[]>(() => {
-    const raw = storage()?.getItem(key);
+    const raw = localStore()?.getItem(key);
     if (!raw) return [...fallback];
     try {
       const parsed: unknown = JSON.parse(raw);
@@ -31,7 +23,7 @@ export function useStoredChoice<T extends string>(key: string, options: readonly
       const ordered = options.filter((o) => next.includes(o));
       setValue(ordered);
       try {
-        storage()?.setItem(key, JSON.stringify(ordered));
+        localStore()?.setItem(key, JSON.stringify(ordered));
       } catch {
         // Storage full or refused: the choice still holds for this session.
       }

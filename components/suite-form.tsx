@@ -3,6 +3,7 @@ import { StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import { ApiRequestError } from '../client/api-request-error';
 import { useSaveSuite } from '../client/use-save-suite';
 import { useSubmitSuite } from '../client/use-submit-suite';
+import { useKeptDraft } from '../client/use-kept-draft';
 import { useSuiteTools } from '../client/use-suite-tools';
 import { theme } from '../constants/theme';
 import type { SuiteIssue } from '../shared/suite-issue';
@@ -18,6 +19,7 @@ import { emptyPropertyDraft } from './empty-property-draft';
 import type { FieldRules } from './field-rules';
 import { TitledPanel } from './titled-panel';
 import { FormTextInput } from './form-text-input';
+import { KeptDraftNotice } from './kept-draft-notice';
 import { PathEditor } from './path-editor';
 import { PropertyEditor } from './property-editor';
 import { RuleLines } from './rule-lines';
@@ -38,6 +40,8 @@ interface Props {
   initial: SuiteDraft;
   /** The suite's id when editing an existing suite; null for a new one. */
   editing: string | null;
+  /** Where this device keeps unsaved work on this form (per user, and per suite version when editing). */
+  draftKey: string;
   onDone: (slug: string, submitted: boolean) => void;
 }
 
@@ -58,9 +62,10 @@ function valueAt(body: unknown, field: string): string {
  * The suite form: every field with its rule beside it (the shared schema plus the harness's
  * subject and cut-layout checks, the same function the server runs), a live picture of the
  * paths, cuts and branch points, and the server's own refusals beside the fields they name.
- * The draft lives in state, so a refused save loses nothing.
+ * The draft lives in state, so a refused save loses nothing, and on this device until saved, so
+ * a reload or a closed tab loses nothing either.
  */
-export function SuiteForm({ initial, editing, onDone }: Props) {
+export function SuiteForm({ initial, editing, draftKey, onDone }: Props) {
   const [draft, setDraft] = useState<SuiteDraft>(initial);
   const [touched, setTouched] = useState<string[]>([]);
   const [showAll, setShowAll] = useState(false);
@@ -68,6 +73,8 @@ export function SuiteForm({ initial, editing, onDone }: Props) {
   const [serverIssues, setServerIssues] = useState<ServerIssue[]>([]);
   const [serverMessage, setServerMessage] = useState<string | null>(null);
   const [savedSlug, setSavedSlug] = useState<string | null>(editing);
+  const [dirty, setDirty] = useState(false);
+  const kept = useKeptDraft(draftKey, initial, draft, dirty);
   const wide = useWindowDimensions().width >= theme.wide;
   const tools = useSuiteTools();
   const saveSuite = useSaveSuite(savedSlug);
@@ -92,6 +99,13 @@ export function SuiteForm({ initial, editing, onDone }: Props) {
     setDraft((d) => (typeof patch === 'function' ? patch(d) : { ...d, ...patch }));
     setTouched((t) => (t.includes(field) ? t : [...t, field]));
     setRefused(false);
+    setDirty(true);
+  };
+
+  const restore = (value: SuiteDraft) => {
+    setDraft(value);
+    setDirty(true);
+    kept.dismissOffer();
   };
 
   const save = async (thenSubmit: boolean) => {
@@ -120,6 +134,9 @@ export function SuiteForm({ initial, editing, onDone }: Props) {
       }
       return;
     }
+    // Saved on the server: nothing is left for this device to keep.
+    setDirty(false);
+    kept.forget();
     if (thenSubmit) {
       try {
         await submitSuite.mutateAsync(slug);
@@ -140,6 +157,7 @@ export function SuiteForm({ initial, editing, onDone }: Props) {
 
   const form = (
     <View style={styles.column}>
+      {kept.offer ? <KeptDraftNotice savedAt={kept.offer.savedAt} onRestore={() => restore(kept.offer!.value)} onDiscard={kept.forget} /> : null}
       <TitledPanel title="What it checks">
         <FormTextInput label="Id" hint="lower-case words joined by hyphens; it stays the same across versions" value={draft.id} onChangeText={(id) => update('id', { id })} rules={rules('id')} mono testID="suite-id" />
         <FormTextInput label="Title" value={draft.title} onChangeText={(title) => update('title', { title })} rules={rules('title')} />

@@ -27,12 +27,18 @@ const badLayout = (): SuiteDraft => ({
   cuts: [{ points: [{ re: '0', im: '0' }, { re: '1', im: '0' }], toInfinity: false }],
 });
 
+const DRAFT_KEY = 'sheetkeeper.suite-draft.test-user.new';
+/** What the form has kept on this device, as stored. */
+const keptValue = () => JSON.parse(window.localStorage.getItem(DRAFT_KEY) ?? 'null')?.value as SuiteDraft | undefined;
+
+beforeEach(() => window.localStorage.clear());
+
 const savedVersion = { version: { id: 'v1', suiteId: 's1', slug: 'cube-root-of-z-z-minus-1', version: 1, status: 'draft' } };
 
 describe('SuiteForm', () => {
   it('shows a broken rule beside its field as soon as the field is touched', async () => {
     mockFetch(201, savedVersion);
-    renderWithClient(<SuiteForm initial={emptySuiteDraft()} editing={null} onDone={jest.fn()} />);
+    renderWithClient(<SuiteForm initial={emptySuiteDraft()} editing={null} draftKey={DRAFT_KEY} onDone={jest.fn()} />);
     await toolsLoaded();
     type('Title', 'ab');
     await waitFor(() => expect(within(fieldOf('Title')).getByText('× Title must be at least 3 characters')).toBeTruthy());
@@ -44,7 +50,7 @@ describe('SuiteForm', () => {
   it('refuses an invalid cut layout naming the failing loop, sends nothing, and the fix clears it', async () => {
     const calls = mockFetch(201, savedVersion);
     const onDone = jest.fn();
-    renderWithClient(<SuiteForm initial={badLayout()} editing={null} onDone={onDone} />);
+    renderWithClient(<SuiteForm initial={badLayout()} editing={null} draftKey={DRAFT_KEY} onDone={onDone} />);
     await toolsLoaded();
     await press('Save draft');
     const layoutRules = await screen.findByTestId('cut-layout-rules');
@@ -69,7 +75,7 @@ describe('SuiteForm', () => {
 
   it('names an uncut branch point when the cut is removed', async () => {
     mockFetch(201, savedVersion);
-    renderWithClient(<SuiteForm initial={{ ...badLayout(), cuts: [{ points: [{ re: '0', im: '0' }, { re: '1', im: '0' }], toInfinity: true }] }} editing={null} onDone={jest.fn()} />);
+    renderWithClient(<SuiteForm initial={{ ...badLayout(), cuts: [{ points: [{ re: '0', im: '0' }, { re: '1', im: '0' }], toInfinity: true }] }} editing={null} draftKey={DRAFT_KEY} onDone={jest.fn()} />);
     await toolsLoaded();
     await press('Remove cut 1');
     const layoutRules = await screen.findByTestId('cut-layout-rules');
@@ -79,7 +85,7 @@ describe('SuiteForm', () => {
   it('shows the server’s rules beside their fields, keeps everything typed, and drops a rule once its field changes', async () => {
     const calls = mockFetch(400, { kind: 'invalid-input', message: 'invalid', issues: [{ field: 'body.paths.0.radius', rule: 'must not reach the branch point at 0' }] });
     const onDone = jest.fn();
-    renderWithClient(<SuiteForm initial={{ ...badLayout(), cuts: [{ points: [{ re: '0', im: '0' }, { re: '1', im: '0' }], toInfinity: true }] }} editing={null} onDone={onDone} />);
+    renderWithClient(<SuiteForm initial={{ ...badLayout(), cuts: [{ points: [{ re: '0', im: '0' }, { re: '1', im: '0' }], toInfinity: true }] }} editing={null} draftKey={DRAFT_KEY} onDone={onDone} />);
     await toolsLoaded();
     type('Story', 'Ravi wants the cube root continuous across the negative real axis.');
     await press('Save draft');
@@ -96,7 +102,7 @@ describe('SuiteForm', () => {
 
   it('shows a refusal that names no field above the buttons', async () => {
     mockFetch(409, { kind: 'conflict', message: 'A suite with the id "cube-root-of-z-z-minus-1" exists already: edit it instead.' });
-    renderWithClient(<SuiteForm initial={{ ...badLayout(), cuts: [{ points: [{ re: '0', im: '0' }, { re: '1', im: '0' }], toInfinity: true }] }} editing={null} onDone={jest.fn()} />);
+    renderWithClient(<SuiteForm initial={{ ...badLayout(), cuts: [{ points: [{ re: '0', im: '0' }, { re: '1', im: '0' }], toInfinity: true }] }} editing={null} draftKey={DRAFT_KEY} onDone={jest.fn()} />);
     await toolsLoaded();
     await press('Save draft');
     await waitFor(() => expect(screen.getByTestId('suite-form-server-message').textContent).toMatch(/exists already: edit it instead/));
@@ -106,7 +112,7 @@ describe('SuiteForm', () => {
   it('saves and then submits for review', async () => {
     const calls = mockFetch(201, savedVersion);
     const onDone = jest.fn();
-    renderWithClient(<SuiteForm initial={{ ...badLayout(), cuts: [{ points: [{ re: '0', im: '0' }, { re: '1', im: '0' }], toInfinity: true }] }} editing={null} onDone={onDone} />);
+    renderWithClient(<SuiteForm initial={{ ...badLayout(), cuts: [{ points: [{ re: '0', im: '0' }, { re: '1', im: '0' }], toInfinity: true }] }} editing={null} draftKey={DRAFT_KEY} onDone={onDone} />);
     await toolsLoaded();
     await press('Save and submit for review');
     await waitFor(() => expect(onDone).toHaveBeenCalledWith('cube-root-of-z-z-minus-1', true));
@@ -114,5 +120,52 @@ describe('SuiteForm', () => {
       ['POST', '/api/suites'],
       ['POST', '/api/suites/cube-root-of-z-z-minus-1/submit'],
     ]);
+  });
+
+  it('keeps unsaved typing on this device and offers it back when the form opens again', async () => {
+    mockFetch(201, savedVersion);
+    const first = renderWithClient(<SuiteForm initial={emptySuiteDraft()} editing={null} draftKey={DRAFT_KEY} onDone={jest.fn()} />);
+    await toolsLoaded();
+    expect(screen.queryByTestId('kept-draft-notice')).toBeNull();
+    type('Title', 'Square root along the unit circle');
+    await waitFor(() => expect(keptValue()?.title).toBe('Square root along the unit circle'));
+    first.unmount();
+
+    renderWithClient(<SuiteForm initial={emptySuiteDraft()} editing={null} draftKey={DRAFT_KEY} onDone={jest.fn()} />);
+    await toolsLoaded();
+    expect((screen.getByLabelText('Title') as HTMLInputElement).value).toBe('');
+    await press('Restore it');
+    expect((screen.getByLabelText('Title') as HTMLInputElement).value).toBe('Square root along the unit circle');
+    expect(screen.queryByTestId('kept-draft-notice')).toBeNull();
+  });
+
+  it('forgets the kept work once the server has saved it, and when the author discards it', async () => {
+    mockFetch(201, savedVersion);
+    const onDone = jest.fn();
+    const first = renderWithClient(<SuiteForm initial={{ ...badLayout(), cuts: [{ points: [{ re: '0', im: '0' }, { re: '1', im: '0' }], toInfinity: true }] }} editing={null} draftKey={DRAFT_KEY} onDone={onDone} />);
+    await toolsLoaded();
+    type('Title', 'Cube root of z(z−1), kept while typing');
+    await waitFor(() => expect(keptValue()?.title).toBe('Cube root of z(z−1), kept while typing'));
+    await press('Save draft');
+    await waitFor(() => expect(onDone).toHaveBeenCalled());
+    expect(window.localStorage.getItem(DRAFT_KEY)).toBeNull();
+    first.unmount();
+
+    window.localStorage.setItem(DRAFT_KEY, JSON.stringify({ format: 1, savedAt: '2026-11-30T09:15:00.000Z', value: { ...emptySuiteDraft(), title: 'Left behind' } }));
+    renderWithClient(<SuiteForm initial={emptySuiteDraft()} editing={null} draftKey={DRAFT_KEY} onDone={jest.fn()} />);
+    await toolsLoaded();
+    expect(screen.getByTestId('kept-draft-notice').textContent).toMatch(/30 Nov 2026/);
+    await press('Discard it');
+    expect(screen.queryByTestId('kept-draft-notice')).toBeNull();
+    expect(window.localStorage.getItem(DRAFT_KEY)).toBeNull();
+  });
+
+  it("offers nothing when what was kept no longer has the form's shape", async () => {
+    mockFetch(201, savedVersion);
+    const { paths: _paths, ...withoutPaths } = emptySuiteDraft();
+    window.localStorage.setItem(DRAFT_KEY, JSON.stringify({ format: 1, savedAt: '2026-11-30T09:15:00.000Z', value: withoutPaths }));
+    renderWithClient(<SuiteForm initial={emptySuiteDraft()} editing={null} draftKey={DRAFT_KEY} onDone={jest.fn()} />);
+    await toolsLoaded();
+    expect(screen.queryByTestId('kept-draft-notice')).toBeNull();
   });
 });
