@@ -7,7 +7,7 @@ import { SmallButton } from './small-button';
 export function KeptDraftNotice({ savedAt, onRestore, onDiscard }: { savedAt: string; onRestore: () => void; onDiscard: () => void }) {
   return (
     <View style={styles.box} accessibilityRole="summary" testID="kept-draft-notice">
-      <Text style={styles.text}>↺ This device kept work on this form that was never saved, last changed {formatDate(savedAt)}. Restoring it replaces what the form shows now.</Text>
+      <Text style={styles.text}>This device kept work on this form that was never saved, last changed {formatDate(savedAt)}. Restoring it replaces what the form shows now.</Text>
       <View style={styles.buttons}>
         <SmallButton label="Restore it" onPress={onRestore} />
         <SmallButton label="Discard it" onPress={onDiscard} danger />

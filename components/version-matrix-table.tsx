@@ -181,7 +181,8 @@ const styles = StyleSheet.create({
   cardBody: { gap: theme.space(3) },
   rowBox: { backgroundColor: theme.color.panel, borderBottomWidth: 1, borderBottomColor: theme.color.rule, paddingHorizontal: theme.space(3), paddingBottom: theme.space(2), gap: theme.space(1) },
   row: { flexDirection: 'row', alignItems: 'center', gap: theme.space(2), paddingVertical: theme.space(2) },
-  headRow: { paddingHorizontal: theme.space(3) },
+  // On the web the version headings stay in view while a long matrix scrolls under them (react-native-web passes "sticky" through).
+  headRow: { paddingHorizontal: theme.space(3), position: 'sticky' as 'relative', top: 0, zIndex: 1, backgroundColor: theme.color.paper, borderBottomWidth: 1, borderBottomColor: theme.color.rule },
   head: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkFaint, letterSpacing: 0.5 },
   suiteCol: { flex: 3, minWidth: 0 },
   versionCol: { flex: 1, minWidth: 0, paddingVertical: 2, paddingHorizontal: theme.space(1), borderRadius: theme.radius },
