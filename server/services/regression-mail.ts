@@ -28,6 +28,8 @@ const describe = (d: Diagnosis | null): string => {
  * The regression mail of a run: one row per regression with input bits, expected and actual
  * values, the diagnosis, the rule and a reproducer, and a link to each case; plain text and HTML
  * with the same content. It says what a regression is and that it covers only what was checked.
+ * In HTML each regression is a block of label–value rows, two columns wide, so the mail reads on
+ * a phone without scrolling sideways (eight columns side by side did not).
  */
 export function regressionMail(input: {
   recipients: string[];
@@ -67,13 +69,22 @@ export function regressionMail(input: {
   const html = `<!doctype html><html><body style="font-family: sans-serif">
 <p>${escape(lead)}</p>
 <p>${escape(changes.length ? `Version changes since then: ${changes.join('; ')}.` : 'No library version changed since then.')}</p>
-<table cellpadding="6" style="border-collapse: collapse" border="1">
-<thead><tr><th>Suite × target, path</th><th>Input (bits)</th><th>Expected</th><th>Actual</th><th>Diagnosis</th><th>Rule</th><th>Reproducer</th><th></th></tr></thead>
+<table cellpadding="6" style="border-collapse: collapse; width: 100%; max-width: 720px" border="1">
 <tbody>
 ${shown
-  .map(
-    (r) => `<tr><td>${escape(`${r.suiteSlug} × ${r.targetName}`)}<br>${escape(r.pathName)}</td><td><code>${escape(c(r.z))}</code><br><code>${escape(`${r.zHex.re}, ${r.zHex.im}`)}</code></td><td><code>${escape(c(r.expected))}</code></td><td><code>${escape(c(r.actual))}</code></td><td>${escape(describe(r.diagnosis))}</td><td>${escape(r.rule)}</td><td><pre>${escape(r.reproducer)}</pre></td><td><a href="${escape(link(r.id))}">open case</a></td></tr>`,
-  )
+  .map((r) => {
+    const line = (label: string, value: string) => `<tr><th align="left" valign="top" style="width: 6.5em; font-weight: normal; color: #4D5A68">${label}</th><td style="word-break: break-word">${value}</td></tr>`;
+    return [
+      `<tr><th colspan="2" align="left" style="background: #F4F1EA">${escape(`${r.suiteSlug} × ${r.targetName}`)} — ${escape(r.pathName)}</th></tr>`,
+      line('Input', `<code>z = ${escape(c(r.z))}</code><br><code>bits ${escape(`${r.zHex.re}, ${r.zHex.im}`)}</code>`),
+      line('Expected', `<code>${escape(c(r.expected))}</code>`),
+      line('Actual', `<code>${escape(c(r.actual))}</code>`),
+      line('Diagnosis', escape(describe(r.diagnosis))),
+      line('Rule', escape(r.rule)),
+      line('Reproducer', `<pre style="white-space: pre-wrap; word-break: break-all; margin: 0">${escape(r.reproducer)}</pre>`),
+      line('Case', `<a href="${escape(link(r.id))}">open the case</a>`),
+    ].join('\n');
+  })
   .join('\n')}
 </tbody></table>
 ${more > 0 ? `<p>…and ${more} more: <a href="${escape(`${input.appUrl}/runs/${input.runId}`)}">the whole run</a></p>` : ''}

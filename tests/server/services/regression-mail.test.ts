@@ -48,6 +48,12 @@ describe('regressionMail', () => {
     }
   });
 
+  it('lays each regression out in rows of at most two cells, so a phone shows it without scrolling sideways', () => {
+    const rows = [...mail.html.matchAll(/<tr>([\s\S]*?)<\/tr>/g)].map((m) => (m[1]!.match(/<t[hd][ >]/g) ?? []).length);
+    expect(rows.length).toBeGreaterThanOrEqual(2 * 8);
+    expect(Math.max(...rows)).toBeLessThanOrEqual(2);
+  });
+
   it('escapes what it puts into HTML', () => {
     const html = regressionMail({ recipients: ['a@b.test'], planName: '<script>x</script>', runId: 'r', appUrl: 'http://127.0.0.1:8460', rows: [row('1')], total: 1, versionChanges: [] }).html;
     expect(html).not.toContain('<script>');

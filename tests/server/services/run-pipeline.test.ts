@@ -109,7 +109,7 @@ describe('a plan run through the queue, with regressions and their mail', () => 
     expect([...mails[0]!.envelopeTo].sort()).toEqual(['hanne@sheetkeeper.test', 'kwame@sheetkeeper.test']);
     expect(mails[0]!.subject).toBe(`[Sheetkeeper] ${second.regressions} regressions in fakelib nightly`);
     expect(mails[0]!.textBody).toContain('fakelib: 1 → 2');
-    expect(mails[0]!.htmlBody).toContain('open case');
+    expect(mails[0]!.htmlBody).toContain('open the case');
   }, 90_000);
 
   it('keeps failures covered by an accepted deviation out of the regressions', async () => {
