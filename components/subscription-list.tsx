@@ -5,6 +5,7 @@ import { useSubscriptions } from '../client/use-subscriptions';
 import { theme } from '../constants/theme';
 import { OnOffSwitch } from './on-off-switch';
 import { QueryState } from './query-state';
+import { SlashWrappedName } from './slash-wrapped-name';
 
 /** Which libraries' regressions mail me: one switch per library, saved as it is flipped. */
 export function SubscriptionList() {
@@ -30,7 +31,7 @@ export function SubscriptionList() {
         return (
           <View key={key} style={styles.row}>
             <View style={styles.words}>
-              <Text style={styles.name}>{key}</Text>
+              <SlashWrappedName name={key} style={styles.name} />
               {!available.includes(key) ? <Text style={styles.gone}>− no longer among this server&apos;s targets</Text> : null}
             </View>
             <OnOffSwitch

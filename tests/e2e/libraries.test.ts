@@ -65,5 +65,15 @@ describe('Libraries', () => {
     await sqrt.getByRole('button', { name: /^Show the \d+ changed points? of sqrt-principal-sz$/ }).click();
     await sqrt.getByText(/first changed in 2\.\d+\.\d+/).first().waitFor();
     await saveScreenshots(b.page, 'library-version-matrix', () => summary.waitFor());
+
+    // On a wide screen the version headings stay in view while the suites scroll under them.
+    await b.page.setViewportSize({ width: 1440, height: 900 });
+    const heading = b.page.getByText('2.0.11', { exact: true }).first();
+    await heading.waitFor();
+    await b.page.locator('[data-testid^="matrix-"]').last().scrollIntoViewIfNeeded();
+    const box = (await heading.boundingBox())!;
+    expect(box.y).toBeGreaterThanOrEqual(0);
+    expect(box.y + box.height).toBeLessThanOrEqual(900);
+    expect(await b.page.evaluate(() => document.scrollingElement!.scrollTop + Math.max(...Array.from(document.querySelectorAll('div')).map((d) => d.scrollTop)))).toBeGreaterThan(900);
   }, 240_000);
 });

@@ -106,6 +106,10 @@ describe('settings', () => {
     await signIn(b.page, kwame.email, kwame.password);
     await goTo(b.page, 'Settings');
     await b.page.getByTestId('subscription-list').waitFor();
+    // At 390 px a long library name wraps after a slash, never inside a word: each part stays on one line.
+    const heights = await b.page.getByTestId('name-mathjs/number/predictable').locator(':scope > *').evaluateAll((parts) => parts.map((p) => p.getBoundingClientRect().height));
+    expect(heights).toHaveLength(3);
+    expect(Math.max(...heights)).toBeLessThan(1.5 * Math.min(...heights));
     await b.page.getByLabel('Token name', { exact: true }).fill('e2e pipeline');
     await b.page.getByRole('button', { name: 'Make token' }).click();
     const secretText = b.page.getByTestId('new-token-secret-value');

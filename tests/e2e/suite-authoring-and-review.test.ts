@@ -59,6 +59,16 @@ describe('writing a regular-branch suite and reviewing it', () => {
     await layoutRule.waitFor({ state: 'detached' });
     expect(await page.getByLabel('Title', { exact: true }).inputValue()).toBe('Cube root of z(z−1) as cbrt z · cbrt(z−1): one cut (−∞, 1]');
     await page.getByTestId('suite-preview-summary').getByText(/2 branch points/).waitFor();
+
+    // A reload loses nothing: the browser kept the unsaved work and offers it back.
+    await page.waitForFunction(() => Object.keys(window.localStorage).some((k) => k.startsWith('sheetkeeper.suite-draft.') && k.endsWith('.new') && window.localStorage.getItem(k)!.includes('one cut (−∞, 1]')));
+    await page.reload();
+    await page.getByTestId('kept-draft-notice').waitFor();
+    expect(await page.getByLabel('Title', { exact: true }).inputValue()).toBe('');
+    await page.getByRole('button', { name: 'Restore it' }).click();
+    expect(await page.getByLabel('Title', { exact: true }).inputValue()).toBe('Cube root of z(z−1) as cbrt z · cbrt(z−1): one cut (−∞, 1]');
+    expect(await page.getByRole('checkbox', { name: 'Cut 1 continues to infinity' }).isChecked()).toBe(true);
+    await page.getByTestId('suite-preview-summary').getByText(/2 branch points/).waitFor();
     await saveScreenshots(page, 'suite-form', async () => {
       await page.getByTestId('suite-preview-summary').getByText(/2 branch points/).waitFor();
       await page.getByTestId('suite-preview').scrollIntoViewIfNeeded();
