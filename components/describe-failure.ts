@@ -1,5 +1,6 @@
 import type { FailureView } from '../shared/failure-view';
 import type { DiagnosisTone } from './diagnosis-styles';
+import { describeWorstPart } from '../shared/describe-worst-part';
 import { formatUlps } from './format-ulps';
 
 const fmtT = (t: number | null) => (t === null ? 'nowhere' : `t ≈ ${Number(t.toPrecision(3))}`);
@@ -16,7 +17,7 @@ export function describeFailure(f: Pick<FailureView, 'diagnosis' | 'outcomeKind'
     case 'misplaced-cut':
       return { tone: d.kind, detail: `library jumps ${fmtT(d.libraryJumpAt)}, expected ${fmtT(d.expectedJumpAt)}` };
     case 'inaccurate':
-      return { tone: d.kind, detail: `${formatUlps(d.ulps)} ulps` };
+      return { tone: d.kind, detail: [`${formatUlps(d.ulps)} ulps`, describeWorstPart(d, 'short')].filter(Boolean).join(' ') };
     default:
       return { tone: d.kind, detail: undefined };
   }

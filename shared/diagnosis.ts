@@ -14,8 +14,12 @@ export type Diagnosis =
   | { kind: 'zero-sign'; part: 're' | 'im'; of: 'input' | 'output' }
   /** A jump along the path where none is expected, or none where one is. `t` is where the library jumped (null: it did not). */
   | { kind: 'misplaced-cut'; libraryJumpAt: number | null; expectedJumpAt: number | null }
-  /** Right branch, but further from the reference than the tolerance allows. */
-  | { kind: 'inaccurate'; ulps: number; relativeError: number }
+  /**
+   * Right branch, but further from the reference than the tolerance allows. `ulps` is the larger
+   * of the two parts' distances, in `part`; `signDiffers` says that part has the opposite sign
+   * (a tiny part lost to cancellation). Both are missing from diagnoses stored before they were.
+   */
+  | { kind: 'inaccurate'; ulps: number; relativeError: number; part?: 're' | 'im'; signDiffers?: boolean }
   /** An infinite or NaN part where the reference is finite (or the reverse). */
   | { kind: 'not-finite' }
   | { kind: 'unexplained'; relativeError: number };

@@ -2,6 +2,7 @@ import type { Diagnosis } from '../../shared/diagnosis';
 import type { ComplexDouble } from './complex-double';
 import type { FailureContext } from './failure-context';
 import { relativeError } from './relative-error';
+import { worstPart } from './worst-part';
 
 /**
  * Two values are "the same" for diagnosis when they agree to 1e-6: a diagnosis says which
@@ -35,7 +36,7 @@ export function diagnoseFailure(ctx: FailureContext): Diagnosis {
     return { kind: 'zero-sign', part: check.zeroSignDiffers[0]!, of: 'output' };
   }
   const candidates: { diagnosis: Diagnosis; distance: number }[] = [
-    { diagnosis: { kind: 'inaccurate', ulps: check.ulps, relativeError: check.relativeError }, distance: relativeError(actual, expected) },
+    { diagnosis: { kind: 'inaccurate', ulps: check.ulps, relativeError: check.relativeError, ...worstPart(actual, expected) }, distance: relativeError(actual, expected) },
   ];
   if (ctx.otherSide) candidates.push({ diagnosis: { kind: 'cut-side' }, distance: relativeError(actual, ctx.otherSide) });
   for (const sheet of ctx.otherSheets ?? []) candidates.push({ diagnosis: { kind: 'other-sheet', k: sheet.k }, distance: relativeError(actual, sheet.value) });

@@ -1,3 +1,4 @@
+import { describeWorstPart } from '../../shared/describe-worst-part';
 import type { PointOutcome } from '../../shared/point-outcome';
 
 const num = (x: number): string => (Number.isFinite(x) ? (Number.isInteger(x) ? String(x) : x.toPrecision(3)) : String(x));
@@ -23,7 +24,7 @@ export function describeOutcome(o: PointOutcome): string {
         case 'misplaced-cut':
           return `misplaced-cut (library jumps at t ≈ ${d.libraryJumpAt === null ? 'nowhere' : num(d.libraryJumpAt)}, expected ${d.expectedJumpAt === null ? 'none' : `at t ≈ ${num(d.expectedJumpAt)}`})`;
         case 'inaccurate':
-          return `inaccurate, ${num(d.ulps)} ulps, relative error ${num(d.relativeError)}`;
+          return `inaccurate, ${[`${num(d.ulps)} ulps`, describeWorstPart(d, 'short')].filter(Boolean).join(' ')}, relative error ${num(d.relativeError)}`;
         case 'not-finite':
           return 'not-finite';
         case 'unexplained':

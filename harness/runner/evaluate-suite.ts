@@ -15,6 +15,7 @@ import { formatHexDouble } from '../checks/format-hex-double';
 import { libraryMonodromy } from '../checks/library-monodromy';
 import { relativeError } from '../checks/relative-error';
 import { ulpsApart } from '../checks/ulps-apart';
+import { worstPart } from '../checks/worst-part';
 import { parseSubject } from '../expressions/parse-subject';
 import { buildPath } from '../paths/build-path';
 import type { PathPoint } from '../paths/path-point';
@@ -301,7 +302,7 @@ async function evaluatePath(
     // with no zero part and off a straddle. Every alternative (other sheet, other side, flipped
     // zero) is then far further away, so none is computed; the listed findings still get theirs.
     if (!straddle && o.relativeError <= MERELY_INACCURATE && re[i] !== 0 && im[i] !== 0 && are[i] !== 0 && aim[i] !== 0 && ere[i] !== 0 && eim[i] !== 0) {
-      diagnoses[i] = { kind: 'inaccurate', ulps: o.ulps, relativeError: o.relativeError };
+      diagnoses[i] = { kind: 'inaccurate', ulps: o.ulps, relativeError: o.relativeError, ...worstPart(act, exp) };
       continue;
     }
     let alt;

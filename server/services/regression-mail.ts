@@ -1,3 +1,4 @@
+import { describeWorstPart } from '../../shared/describe-worst-part';
 import type { Diagnosis } from '../../shared/diagnosis';
 import type { WireComplex } from '../../shared/run-result';
 import type { NewMail } from './new-mail';
@@ -16,7 +17,7 @@ const describe = (d: Diagnosis | null): string => {
     case 'zero-sign':
       return `ignored zero sign (${d.of} ${d.part})`;
     case 'inaccurate':
-      return `inaccurate (${d.ulps} ulps)`;
+      return `inaccurate (${[`${d.ulps < 1e6 ? Math.round(d.ulps) : d.ulps.toExponential(1)} ulps`, describeWorstPart(d, 'long')].filter(Boolean).join(' ')}; relative error of the whole value ${d.relativeError.toPrecision(2)})`;
     case 'misplaced-cut':
       return 'misplaced cut';
     default:

@@ -41,6 +41,26 @@ describe('diagnoseFailure', () => {
     const d = diagnose([expected[0] * (1 + 1e-10), expected[1]], expected, { otherSide: [-expected[0], expected[1]] });
     expect(d.kind).toBe('inaccurate');
     if (d.kind === 'inaccurate') expect(d.ulps).toBeGreaterThan(4);
+    expect(d).toMatchObject({ part: 're', signDiffers: false });
+  });
+
+  it('calls a tiny real part of asech lost to cancellation inaccurate in re, with the opposite sign', () => {
+    // mpmath, 60 digits: asech(1000001 + 1e−9i) = 9.99998000003500056e−22 − 1.5707953267958966i.
+    // −5.551115123125783e−17 is the real part complex.js 2.4.3 returned there in our demo runs:
+    // the whole value is within 4e−17 relative, the real part 8.7e18 ulps off.
+    const expected = referenceDouble('asech', [1000001, 1e-9]);
+    expect(expected[0]).toBeCloseTo(9.99998000003500056e-22, 36);
+    const d = diagnose([-5.551115123125783e-17, expected[1]], expected);
+    expect(d).toMatchObject({ kind: 'inaccurate', part: 're', signDiffers: true });
+    if (d.kind === 'inaccurate') {
+      expect(d.ulps).toBeGreaterThan(1e18);
+      expect(d.relativeError).toBeLessThan(1e-16);
+    }
+  });
+
+  it('names the imaginary part when it is the one further off', () => {
+    const expected = referenceDouble('asin', [0.3, 0.2]);
+    expect(diagnose([expected[0], expected[1] * (1 + 1e-9)], expected)).toMatchObject({ kind: 'inaccurate', part: 'im', signDiffers: false });
   });
 
   it('calls NaN where the reference is finite not-finite', () => {
