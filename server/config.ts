@@ -22,6 +22,11 @@ export interface ServerConfig {
   workers: number;
   /** Base of links in mail (SHEETKEEPER_APP_URL, default the server's own address). */
   appUrl: string;
+  /**
+   * Where reference values computed for runs are kept on disk (`.data/reference-cache`), so a
+   * case page reads the values its run computed instead of computing them again.
+   */
+  referenceCacheDir: string;
 }
 
 const LOOPBACK = /^(127\.\d+\.\d+\.\d+|::1|localhost)$/;
@@ -71,5 +76,6 @@ export function loadConfig(): ServerConfig {
     fakeSmtp: process.env.SHEETKEEPER_FAKE_SMTP !== '0',
     workers: Math.max(0, Number(process.env.SHEETKEEPER_WORKERS ?? 1) || 0),
     appUrl: (process.env.SHEETKEEPER_APP_URL ?? `http://${host}:${port}`).replace(/\/$/, ''),
+    referenceCacheDir: process.env.SHEETKEEPER_REFERENCE_CACHE ?? path.join(DATA_DIR, 'reference-cache'),
   };
 }

@@ -41,6 +41,8 @@ export interface AppOptions {
   signInLimits?: SignInLimits;
   /** Where the shards of a started run go (pg-boss in the server). */
   shardQueue: ShardQueue;
+  /** The runs' reference values on disk, read by the case pictures (config.referenceCacheDir). */
+  referenceCacheDir?: string | null;
 }
 
 export interface SheetkeeperApp {
@@ -114,7 +116,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   api.use('/plans', plansRouter(options.dataSource));
   api.use('/schedules', schedulesRouter(options.dataSource));
   api.use('/runs', runsRouter(options.dataSource, new RunService(options.dataSource, options.shardQueue)));
-  api.use('/failures', failuresRouter(options.dataSource));
+  api.use('/failures', failuresRouter(options.dataSource, { referenceCacheDir: options.referenceCacheDir }));
   api.use('/deviations', deviationsRouter(options.dataSource));
   api.use('/tokens', tokensRouter(options.dataSource));
   api.use('/subscriptions', subscriptionsRouter(options.dataSource));

@@ -22,7 +22,7 @@ async function main(): Promise<void> {
   const scheduler = new PlanScheduler(dataSource, async (planId) => (await runs.start(planId, 'schedule', null)).id);
   await scheduler.start();
 
-  const { app, close } = createApp({ dataSource, databaseUrl: config.databaseUrl, sessionSecret: config.sessionSecret, secureCookies: config.secureCookies, webDir: config.webDir, shardQueue: services.queue });
+  const { app, close } = createApp({ dataSource, databaseUrl: config.databaseUrl, sessionSecret: config.sessionSecret, secureCookies: config.secureCookies, webDir: config.webDir, shardQueue: services.queue, referenceCacheDir: config.referenceCacheDir });
   const server = app.listen(config.port, config.host, () => {
     const address = server.address();
     const port = typeof address === 'object' && address ? address.port : config.port;

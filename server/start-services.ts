@@ -26,7 +26,7 @@ export async function startServices(dataSource: DataSource, config: ServerConfig
   const smtpPort = smtp ? await smtp.start(config.smtpPort) : config.smtpPort;
   const outbox = new MailOutbox(dataSource, { host: config.host, port: smtpPort });
   const queue = new PgBossShardQueue(config.databaseUrl);
-  const executor = new ShardExecutor(dataSource, { openTarget: openInstalledTarget, outbox, appUrl: config.appUrl });
+  const executor = new ShardExecutor(dataSource, { openTarget: openInstalledTarget, outbox, appUrl: config.appUrl, referenceCacheDir: config.referenceCacheDir });
   for (let i = 0; i < options.workers; i += 1) await queue.work((id) => executor.execute(id));
   let delivering = false;
   const mailTimer = options.deliverMail

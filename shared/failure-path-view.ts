@@ -51,4 +51,6 @@ export interface FailurePathView {
   counts: OutcomeCounts;
   /** What the pictures show and do not show, in words. */
   note: string;
+  /** How the expected values along the path were had: read from the reference values kept on disk by the runs, or computed for this answer. */
+  reference: { cached: number; computed: number };
 }

@@ -17,7 +17,7 @@ import { searchFailures } from '../services/failure-search';
 const CSV_MAX_ROWS = 50_000;
 
 /** The failure table with filters and keyed pages, its CSV export, one failure with its history, and its path for the pictures. */
-export function failuresRouter(dataSource: DataSource): Router {
+export function failuresRouter(dataSource: DataSource, options: { referenceCacheDir?: string | null } = {}): Router {
   const router = Router();
   const anyone = requireRole(...ROLES);
 
@@ -70,7 +70,7 @@ export function failuresRouter(dataSource: DataSource): Router {
   });
 
   router.get('/:id/path', anyone, async (req, res) => {
-    res.json(await failurePath(dataSource, failureNumber(req.params.id)));
+    res.json(await failurePath(dataSource, failureNumber(req.params.id), options.referenceCacheDir ?? null));
   });
 
   router.get('/:id', anyone, async (req, res) => {

@@ -22,7 +22,7 @@ import { HttpError } from './http-error';
 const MAX_POINTS = 20_000;
 /** Paths whose expected values were computed lately, by suite version and path name: a reviewer opens several cases of one path. */
 const RECENT_PATHS = 64;
-const recent = new Map<string, { points: PathPoint[]; expected: ExpectedColumn }>();
+const recent = new Map<string, PathValues>();
 
 const argOf = (re: number, im: number): number | null => (Number.isFinite(re) && Number.isFinite(im) ? Math.atan2(im, re) : null);
 const xy = (re: number, im: number): PlaneXY | null => (Number.isFinite(re) && Number.isFinite(im) ? { re, im } : null);
@@ -50,8 +50,11 @@ interface StoredPoint {
  * pole), 3.6 s (a loop for √(z²−1) on another sheet) and 7–10 s (the straddle of the complex
  * power, whose 1e6-long cut at 5e-324 needs deep precision). Bounded by the path's sample count
  * and MAX_POINTS; the last RECENT_PATHS paths are kept, so the next case of one path is instant.
+ * Runs on this machine keep their reference values on disk (config.referenceCacheDir), and this
+ * reads them: after the demo seed, all 69 failing paths of its two runs answered in 1–8 ms each
+ * with nothing computed again.
  */
-export async function failurePath(dataSource: DataSource, failureId: string): Promise<FailurePathView> {
+export async function failurePath(dataSource: DataSource, failureId: string, referenceCacheDir: string | null = null): Promise<FailurePathView> {
   const [row] = await dataSource.query(
     `SELECT f.id::text AS id, f.shard_id, sh.suite_version_id, f.path_name, f.point_index, f.target_name, f.suite_slug, v.body
        FROM failures f JOIN shards sh ON sh.id = f.shard_id JOIN suite_versions v ON v.id = sh.suite_version_id WHERE f.id = $1`,
@@ -62,7 +65,7 @@ export async function failurePath(dataSource: DataSource, failureId: string): Pr
   const path = suite.paths.find((p) => p.name === row.path_name);
   if (!path) throw new HttpError(404, { kind: 'not-found', message: `The suite version has no path named ${row.path_name}.` });
   const expr = parseSubject(suite.subject);
-  const { points, expected } = pathValues(`${row.suite_version_id}|${path.name}`, suite, expr, path);
+  const { points, expected, reference } = pathValues(`${row.suite_version_id}|${path.name}`, suite, expr, path, referenceCacheDir);
 
   const stored: StoredPoint[] = await dataSource.query(
     `SELECT id::text AS id, point_index, outcome_kind, diagnosis_kind, ulps, actual FROM failures WHERE shard_id = $1 AND path_name = $2 ORDER BY point_index`,
@@ -114,11 +117,18 @@ export async function failurePath(dataSource: DataSource, failureId: string): Pr
     jumps: summary?.jumps ?? null,
     counts,
     note: `Every point of the path “${path.name}” (${points.length}) with its outcome in this run. Failing points show the library's stored value; passing points are within the tolerance of the expected value and are drawn at it, since a run keeps no passing value one by one.`,
+    reference,
   };
 }
 
-/** The path's points and their expected values, as the run computed them. */
-function pathValues(key: string, suite: Suite, expr: SubjectExpr, path: SuitePath): { points: PathPoint[]; expected: ExpectedColumn } {
+type PathValues = { points: PathPoint[]; expected: ExpectedColumn; reference: FailurePathView['reference'] };
+
+/**
+ * The path's points and their expected values, as the run computed them: read from the runs'
+ * reference values on disk where they are there (the complex-power straddle: 7–10 s to compute,
+ * a file read instead), computed otherwise.
+ */
+function pathValues(key: string, suite: Suite, expr: SubjectExpr, path: SuitePath, referenceCacheDir: string | null): PathValues {
   const known = recent.get(key);
   if (known) {
     recent.delete(key);
@@ -132,10 +142,11 @@ function pathValues(key: string, suite: Suite, expr: SubjectExpr, path: SuitePat
     throw new HttpError(409, { kind: 'conflict', message: `The path cannot be built: ${e instanceof Error ? e.message : String(e)}` });
   }
   if (points.length > MAX_POINTS) throw new HttpError(409, { kind: 'conflict', message: `The path has ${points.length} points; pictures are drawn for paths of at most ${MAX_POINTS}.` });
-  const cache = new ReferenceCache(null);
+  // Read only: values computed here are not written back, so the runs' files have one writer per process that runs shards.
+  const cache = new ReferenceCache(referenceCacheDir);
   const cacheKey = suiteCacheKey(suite);
   const expectation = suite.branch.kind === 'principal' ? principalExpectation(suite, expr, cache, cacheKey) : regularExpectation(suite, cache, cacheKey);
-  const value = { points, expected: expectation.expected(path, points) };
+  const value = { points, expected: expectation.expected(path, points), reference: { cached: cache.cached, computed: cache.computed } };
   recent.set(key, value);
   if (recent.size > RECENT_PATHS) recent.delete(recent.keys().next().value as string);
   return value;

@@ -22,6 +22,12 @@ export interface ShardExecutorOptions {
   outbox: MailOutbox;
   /** Base of the links in regression mail. */
   appUrl: string;
+  /**
+   * A folder for reference values, shared by every process on this machine (the server, `npm
+   * run worker`, the seed): values are appended per suite key, whole records per write, and a
+   * torn last record is ignored (reference-cache.ts). None: kept in memory only.
+   */
+  referenceCacheDir?: string | null;
   /** A shard that takes longer is stopped; its remaining points become errors. */
   shardTimeoutMs?: number;
 }
@@ -35,12 +41,14 @@ export interface ShardExecutorOptions {
  * regressions are marked and their mail is queued in the same transaction.
  */
 export class ShardExecutor {
-  private readonly cache = new ReferenceCache(null);
+  private readonly cache: ReferenceCache;
 
   constructor(
     private readonly dataSource: DataSource,
     private readonly options: ShardExecutorOptions,
-  ) {}
+  ) {
+    this.cache = new ReferenceCache(options.referenceCacheDir ?? null);
+  }
 
   async execute(shardId: string): Promise<void> {
     const shard = await this.dataSource.getRepository(Shard).findOne({ where: { id: shardId }, relations: { run: true, suiteVersion: true } });
@@ -88,6 +96,12 @@ export class ShardExecutor {
     } finally {
       clearTimeout(timer);
       await target.close().catch(() => undefined);
+      try {
+        this.cache.flush();
+      } catch (err) {
+        // A cache that cannot be written costs time later, never a result.
+        console.error('[sheetkeeper] reference cache not written:', err instanceof Error ? err.message : err);
+      }
     }
   }
 }

@@ -1,5 +1,9 @@
+import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
 import request from 'supertest';
 import { complexJsTarget } from '../../../harness/adapters/complex-js-target';
+import { failurePath } from '../../../server/services/failure-path';
 import { ShardExecutor } from '../../../server/services/shard-executor';
 import type { MailOutbox } from '../../../server/services/mail-outbox';
 import type { FailurePathView } from '../../../shared/failure-path-view';
@@ -16,11 +20,11 @@ describe('the path of a failing case', () => {
   let kwame: request.Agent;
   const runIds: Record<string, string> = {};
 
-  async function runOf(slug: string): Promise<string> {
+  async function runOf(slug: string, referenceCacheDir: string | null = null): Promise<string> {
     const target = (await t.db.dataSource.query(`SELECT name FROM targets WHERE name = 'complex.js@2.4.3'`))[0].name;
     const plan = await kwame.post('/api/plans').send({ name: `path plan ${slug}`, recipients: [], suites: [slug], targets: [target] });
     const run = (await kwame.post('/api/runs').send({ planId: plan.body.plan.id })).body.run.id as string;
-    const executor = new ShardExecutor(t.db.dataSource, { openTarget: () => complexJsTarget('complex.js', '2.4.3'), outbox: { enqueue: async () => undefined } as unknown as MailOutbox, appUrl: 'http://127.0.0.1' });
+    const executor = new ShardExecutor(t.db.dataSource, { openTarget: () => complexJsTarget('complex.js', '2.4.3'), outbox: { enqueue: async () => undefined } as unknown as MailOutbox, appUrl: 'http://127.0.0.1', referenceCacheDir });
     for (const { id } of await t.db.dataSource.query(`SELECT id FROM shards WHERE run_id = $1`, [run])) await executor.execute(id);
     return run;
   }
@@ -72,6 +76,28 @@ describe('the path of a failing case', () => {
     expect(view.cuts).toEqual([{ points: [{ re: -1, im: 0 }, { re: 1, im: 0 }], toInfinity: false }]);
     expect(view.branchPoints).toEqual([{ re: -1, im: 0 }, { re: 1, im: 0 }]);
     expect(view.points.every((p) => p.expectedArg === null || (p.expectedArg > -Math.PI - 1e-12 && p.expectedArg <= Math.PI + 1e-12))).toBe(true);
+  });
+
+  it('reads the expected values its run kept on disk instead of computing them again', async () => {
+    const dir = mkdtempSync(path.join(os.tmpdir(), 'sheetkeeper-reference-'));
+    try {
+      await approvedSuite(t.db.dataSource, 'path-log', 'log-principal-sz');
+      const run = await runOf('path-log', dir);
+      expect(readdirSync(dir).filter((f) => f.endsWith('.bin')).length).toBeGreaterThan(0);
+      const [failure] = (await kwame.get(`/api/failures?run=${run}&limit=1`)).body.failures;
+      const view = await failurePath(t.db.dataSource, failure.id, dir);
+      expect(view.reference.computed).toBe(0);
+      expect(view.reference.cached).toBeGreaterThan(0);
+      expect(view.points[view.focusIndex]).toMatchObject({ failureId: failure.id, actualFrom: 'stored' });
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  }, 120_000);
+
+  it('computes the expected values when no run kept them', async () => {
+    const [failure] = (await kwame.get(`/api/failures?run=${runIds.finite}&limit=1`)).body.failures;
+    const view = (await kwame.get(`/api/failures/${failure.id}/path`)).body as FailurePathView;
+    expect(view.reference.computed).toBeGreaterThan(0);
   });
 
   it('answers 404 for a failure that does not exist and 400 for a malformed number', async () => {
