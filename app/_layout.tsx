@@ -8,7 +8,10 @@ import { Slot } from 'expo-router';
 import { useState } from 'react';
 import { View } from 'react-native';
 import { createQueryClient } from '../client/create-query-client';
+import { installMarksFont } from '../client/install-marks-font';
 import { theme } from '../constants/theme';
+
+installMarksFont();
 
 export default function RootLayout() {
   const [queryClient] = useState(createQueryClient);

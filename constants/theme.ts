@@ -1,3 +1,12 @@
+import { MARKS_FAMILY } from './marks-family';
+
+/**
+ * On the web, ✓ comes from our own check mark (client/install-marks-font.ts declares it for
+ * U+2713 only) and everything else from IBM Plex, whose ✓ looks like √. Elsewhere (native, and
+ * node, where the end-to-end helpers read the breakpoints) the plain family.
+ */
+const withMarks = (family: string): string => (typeof document === 'undefined' ? family : `${MARKS_FAMILY}, ${family}`);
+
 /**
  * Sheetkeeper's look: warm paper, slate ink, one verdigris accent. Meaning is never
  * carried by colour alone: every coloured state also has a word or a glyph.
@@ -24,10 +33,10 @@ export const theme = {
     navActive: '#F4F1EA',
   },
   font: {
-    regular: 'IBMPlexSans_400Regular',
-    medium: 'IBMPlexSans_500Medium',
-    bold: 'IBMPlexSans_700Bold',
-    mono: 'IBMPlexMono_400Regular',
+    regular: withMarks('IBMPlexSans_400Regular'),
+    medium: withMarks('IBMPlexSans_500Medium'),
+    bold: withMarks('IBMPlexSans_700Bold'),
+    mono: withMarks('IBMPlexMono_400Regular'),
   },
   size: { small: 13, body: 16, large: 20, title: 26 },
   space: (n: number) => n * 4,

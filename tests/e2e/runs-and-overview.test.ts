@@ -59,6 +59,14 @@ describe('Overview and runs', () => {
     const texts = await cells.allTextContents();
     expect(texts.length).toBeGreaterThan(0);
     for (const text of texts) expect(text).toMatch(/[✓❌◊×…↻]/);
+    // ✓ is drawn by our check-mark font, not IBM Plex (whose ✓ looks like √): the face for U+2713 has loaded.
+    await b.page.waitForFunction(() => {
+      let loaded = false;
+      document.fonts.forEach((f) => {
+        if (f.family.replace(/"/g, '') === 'SheetkeeperMarks' && f.unicodeRange === 'U+2713' && f.status === 'loaded') loaded = true;
+      });
+      return loaded;
+    });
     const failing = b.page.locator('a[data-testid^="cell-"]').first();
     if ((await failing.count()) > 0) expect(await failing.getAttribute('href')).toMatch(/^\/failures\?run=[0-9a-f-]{36}&suite=[^&]+&target=[^&]+$/);
     await b.page.getByText('Property checks', { exact: true }).waitFor();
