@@ -24,6 +24,7 @@ import { librariesRouter } from './routes/libraries-router';
 import { tokensRouter } from './routes/tokens-router';
 import { usersRouter } from './routes/users-router';
 import { configurePassport } from './services/configure-passport';
+import { LibraryFindings } from './services/library-findings';
 import { createSessionStore } from './services/create-session-store';
 import { ShortLivedCache } from './services/short-lived-cache';
 import type { User } from './entities/user';
@@ -47,7 +48,7 @@ export interface AppOptions {
 
 export interface SheetkeeperApp {
   app: Express;
-  /** Ends the pool behind sessions and sign-in limits (the data source is the caller's). */
+  /** Ends the pool behind sessions and sign-in limits and the findings thread (the data source is the caller's). */
   close(): Promise<void>;
 }
 
@@ -66,6 +67,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   const userCache = new ShortLivedCache<User>(SIGNED_IN_CACHE_MS);
   const passport = configurePassport(options.dataSource, userCache);
   const limiter = new SignInLimiter(pool, options.signInLimits ?? DEFAULT_SIGN_IN_LIMITS);
+  const findings = new LibraryFindings(options.dataSource);
 
   const app = express();
   app.disable('x-powered-by');
@@ -112,7 +114,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   api.use('/suites', suitesRouter(options.dataSource));
   api.use('/outbox', outboxRouter(options.dataSource));
   api.use('/targets', targetsRouter(options.dataSource));
-  api.use('/targets', librariesRouter(options.dataSource));
+  api.use('/targets', librariesRouter(findings));
   api.use('/plans', plansRouter(options.dataSource));
   api.use('/schedules', schedulesRouter(options.dataSource));
   api.use('/runs', runsRouter(options.dataSource, new RunService(options.dataSource, options.shardQueue)));
@@ -139,6 +141,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   return {
     app,
     close: async () => {
+      await findings.close();
       await pool.end();
     },
   };

@@ -18,4 +18,6 @@ export type ApiError =
   | { kind: 'conflict'; message: string }
   | { kind: 'payload-too-large'; message: string }
   | { kind: 'unsupported-media-type'; message: string }
+  /** The server could not answer now (a library computation stopped after its time limit): try again or ask for less. */
+  | { kind: 'unavailable'; message: string }
   | { kind: 'server-error'; message: string };

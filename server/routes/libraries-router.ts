@@ -1,12 +1,11 @@
 import { Router } from 'express';
-import type { DataSource } from 'typeorm';
 import { ROLES } from '../../shared/roles';
 import { cutMapQuery } from '../../shared/schemas/cut-map-query';
 import { fingerprintQuery } from '../../shared/schemas/fingerprint-query';
 import { targetNameParams } from '../../shared/schemas/target-name-params';
 import { versionMatrixQuery } from '../../shared/schemas/version-matrix-query';
 import { requireRole } from '../middleware/require-role';
-import { LibraryFindings } from '../services/library-findings';
+import type { LibraryFindings } from '../services/library-findings';
 import { parseInput } from '../services/parse-input';
 
 /**
@@ -15,9 +14,8 @@ import { parseInput } from '../services/parse-input';
  * the fingerprint and cut maps, and a library without its version ("complex.js") for the
  * version matrix. Every signed-in role may read them.
  */
-export function librariesRouter(dataSource: DataSource): Router {
+export function librariesRouter(findings: LibraryFindings): Router {
   const router = Router();
-  const findings = new LibraryFindings(dataSource);
   const anyone = requireRole(...ROLES);
 
   router.get('/:name/fingerprint', anyone, async (req, res) => {

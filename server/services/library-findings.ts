@@ -1,19 +1,15 @@
 import type { DataSource } from 'typeorm';
-import type { Target } from '../../harness/adapters/target';
 import type { TargetDescriptor } from '../../harness/adapters/target-descriptor';
-import { mapCuts } from '../../harness/cutmap/map-cuts';
 import { FINGERPRINT_FUNCTIONS } from '../../harness/fingerprint/fingerprint-functions';
-import { fingerprintTarget } from '../../harness/fingerprint/fingerprint-target';
 import { libraryVersions } from '../../harness/matrix/library-versions';
-import { versionMatrix } from '../../harness/matrix/version-matrix';
 import type { ComputedAnswer } from '../../shared/computed-answer';
 import type { ConventionFingerprint } from '../../shared/convention-fingerprint';
 import type { CutMap } from '../../shared/cut-map';
 import type { Suite } from '../../shared/schemas/suite-schema';
 import type { VersionMatrix } from '../../shared/version-matrix';
+import { FindingsThread } from './findings-thread';
 import { HttpError } from './http-error';
 import { InputError } from './input-error';
-import { openInstalledTarget } from './open-installed-target';
 import { ResultCache } from './result-cache';
 
 /**
@@ -27,8 +23,8 @@ import { ResultCache } from './result-cache';
  *   suites 5.7 s (481 KB of JSON); mathjs/complex's three versions 6.9 s for the first suite
  *   (three mathjs loads), 123 ms for three more after. The request allows eight suites at a time.
  * Every one of them passes 300 ms on a first visit somewhere, so every answer is kept. The
- * library code runs on the server's thread: bounding each request is what keeps others waiting
- * at most about a second, except the first load of a library (mathjs ~1.1 s per version).
+ * library code runs on a worker thread of its own (findings-thread.ts), one request at a time,
+ * so the server's thread keeps answering everyone else meanwhile.
  *
  * Answers depend only on the installed library versions (part of every target name, so part
  * of every key), the request, and for the matrix the suites' approved versions (in the key as
@@ -44,28 +40,27 @@ export class LibraryFindings {
   private readonly cache = new ResultCache<Timed<unknown>>(CAPACITY);
   private readonly versionsByLibrary = new Map<string, TargetDescriptor[]>();
 
-  constructor(private readonly dataSource: DataSource) {}
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly thread = new FindingsThread(),
+  ) {}
 
   async fingerprint(name: string, functionLabels: string[] | undefined): Promise<{ fingerprint: ConventionFingerprint } & ComputedAnswer> {
     const functions = functionLabels
       ? functionLabels.map((label) => FINGERPRINT_FUNCTIONS.find((f) => f.label === label) ?? unknownFunction('query.fn', label))
       : FINGERPRINT_FUNCTIONS;
-    const key = `fingerprint|${name}|${functions.map((f) => f.label).join(',')}`;
-    const { value, ms, fromCache } = await this.kept(key, () => this.withTarget(name, (target) => fingerprintTarget(target, functions)));
+    const labels = functions.map((f) => f.label);
+    const key = `fingerprint|${name}|${labels.join(',')}`;
+    const { value, ms, fromCache } = await this.kept(key, () => this.thread.ask({ kind: 'fingerprint', target: name, functions: labels }));
     return { fingerprint: value as ConventionFingerprint, computedMs: ms, fromCache };
   }
 
   async cutMap(name: string, request: { fn: string; box: number[]; grid: number[] }): Promise<{ cutMap: CutMap } & ComputedAnswer> {
     const fn = FINGERPRINT_FUNCTIONS.find((f) => f.label === request.fn) ?? unknownFunction('query.fn', request.fn);
-    const [re0, im0, re1, im1] = request.box as [number, number, number, number];
-    const [columns, rows] = request.grid as [number, number];
-    const key = `cut-map|${name}|${fn.label}|${request.box.join(',')}|${columns}x${rows}`;
-    const { value, ms, fromCache } = await this.kept(key, () =>
-      this.withTarget(name, async (target) => {
-        if (!(await target.supports(fn.op))) throw new InputError([{ field: 'query.fn', rule: `is not a function ${target.name} has (no ${fn.op})` }]);
-        return mapCuts(target, fn, [re0, im0], [re1, im1], columns, rows);
-      }),
-    );
+    const box = request.box as [number, number, number, number];
+    const grid = request.grid as [number, number];
+    const key = `cut-map|${name}|${fn.label}|${box.join(',')}|${grid[0]}x${grid[1]}`;
+    const { value, ms, fromCache } = await this.kept(key, () => this.thread.ask({ kind: 'cut-map', target: name, fn: fn.label, box, grid }));
     return { cutMap: value as CutMap, computedMs: ms, fromCache };
   }
 
@@ -85,8 +80,13 @@ export class LibraryFindings {
     if (absent.length > 0) throw new InputError([{ field: 'query.suite', rule: `has no approved version: ${absent.join(', ')}` }]);
     const suites = [...new Set(slugs)].map((s) => bySlug.get(s)!);
     const key = `matrix|${targets.map((t) => t.name).join(',')}|${suites.map((s) => `${s.id}@${s.version}`).join(',')}`;
-    const { value, ms, fromCache } = await this.kept(key, () => versionMatrix(library, suites, targets));
+    const { value, ms, fromCache } = await this.kept(key, () => this.thread.ask({ kind: 'version-matrix', library, suites }));
     return { matrix: value as VersionMatrix, computedMs: ms, fromCache };
+  }
+
+  /** Ends the findings thread. */
+  close(): Promise<void> {
+    return this.thread.close();
   }
 
   private async kept<T>(key: string, compute: () => Promise<T>): Promise<Timed<T> & { fromCache: boolean }> {
@@ -97,17 +97,6 @@ export class LibraryFindings {
       return { value, ms: Math.round(performance.now() - started) };
     })) as Timed<T>;
     return { ...timed, fromCache };
-  }
-
-  /** Opens the target for one computation and always closes it: cmath is a Python child process. */
-  private async withTarget<T>(name: string, use: (target: Target) => Promise<T>): Promise<T> {
-    const target = openInstalledTarget(name);
-    if (!target) throw new HttpError(404, { kind: 'not-found', message: `No installed target "${name}".` });
-    try {
-      return await use(target);
-    } finally {
-      await target.close();
-    }
   }
 
   /** Discovery reads every installed package.json and starts Python once (~20 ms), so it runs once per library. */
