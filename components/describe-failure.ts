@@ -1,7 +1,7 @@
 import type { FailureView } from '../shared/failure-view';
 import type { DiagnosisTone } from './diagnosis-styles';
 import { describeWorstPart } from '../shared/describe-worst-part';
-import { formatUlps } from './format-ulps';
+import { formatUlps } from '../shared/format-ulps';
 
 const fmtT = (t: number | null) => (t === null ? 'nowhere' : `t ≈ ${Number(t.toPrecision(3))}`);
 

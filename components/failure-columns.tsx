@@ -5,7 +5,7 @@ import type { FailureView } from '../shared/failure-view';
 import { describeFailure } from './describe-failure';
 import { formatComplex } from './format-complex';
 import { DiagnosisLabel } from './diagnosis-label';
-import { formatUlps } from './format-ulps';
+import { formatUlps } from '../shared/format-ulps';
 
 export type FailureColumnId = 'id' | 'suite' | 'target' | 'convention' | 'path' | 't' | 'z' | 'expected' | 'actual' | 'diagnosis' | 'ulps' | 'new';
 

@@ -4,7 +4,7 @@ import Svg, { Circle, G, Line, Path, Polyline, Rect, Text as SvgText } from 'rea
 import { theme } from '../constants/theme';
 import type { FailurePathPoint, FailurePathView } from '../shared/failure-path-view';
 import { DIAGNOSIS_STYLES } from './diagnosis-styles';
-import { formatUlps } from './format-ulps';
+import { formatUlps } from '../shared/format-ulps';
 import { LegendEntry } from './legend-entry';
 
 /** Two neighbouring points whose arguments differ by more than this (radians) are a jump, not a slope: a 65-point circle turns ~0.1 rad a step. */

@@ -1,5 +1,6 @@
 import { describeWorstPart } from '../../shared/describe-worst-part';
 import type { Diagnosis } from '../../shared/diagnosis';
+import { formatUlps } from '../../shared/format-ulps';
 import type { WireComplex } from '../../shared/run-result';
 import type { NewMail } from './new-mail';
 import type { RegressionRow } from './regression-row';
@@ -17,7 +18,7 @@ const describe = (d: Diagnosis | null): string => {
     case 'zero-sign':
       return `ignored zero sign (${d.of} ${d.part})`;
     case 'inaccurate':
-      return `inaccurate (${[`${d.ulps < 1e6 ? Math.round(d.ulps) : d.ulps.toExponential(1)} ulps`, describeWorstPart(d, 'long')].filter(Boolean).join(' ')}; relative error of the whole value ${d.relativeError.toPrecision(2)})`;
+      return `inaccurate (${[`${formatUlps(d.ulps)} ulps`, describeWorstPart(d, 'long')].filter(Boolean).join(' ')}; relative error of the whole value ${d.relativeError.toPrecision(2)})`;
     case 'misplaced-cut':
       return 'misplaced cut';
     default:
