@@ -2,7 +2,7 @@ import { createHash } from 'node:crypto';
 import type { Pool } from 'pg';
 import type { DataSource } from 'typeorm';
 import type { FailureQuery } from '../../shared/schemas/failure-query';
-import { failureSearchSql } from './failure-search-sql';
+import { FAILURE_ROW, failureSearchSql } from './failure-search-sql';
 
 /**
  * One page of the failure table as the response body `{"failures": [...], "next": ...}`,
@@ -18,13 +18,8 @@ export async function failurePageJson(dataSource: DataSource, q: FailureQuery): 
   const pageOrder = byUlps ? 'p._u DESC, p._id ASC' : 'p._id ASC';
   const lastFirst = byUlps ? 'p._u ASC, p._id DESC' : 'p._id DESC';
   const cursor = byUlps ? `p._id::text || ':' || p._u::text` : 'p._id::text';
-  // JSON has no NaN or infinity; the driver's rows turned them into null, and so does this.
-  const finite = (column: string) => `CASE WHEN ${column} IN ('NaN', 'Infinity', '-Infinity') THEN NULL ELSE ${column} END`;
-  // The row type's attribute names are the JSON keys (migration 1764800000000).
   const text = `WITH p AS (
-       SELECT f.id AS _id, coalesce(f.ulps, 0) AS _u,
-              ROW(f.id::text, f.run_id, f.suite_slug, f.suite_version, f.target_name, f.convention, f.path_name, f.point_index, f.t, f.label,
-                  f.z, f.z_hex, f.expected, f.actual, f.outcome_kind, f.diagnosis, ${finite('f.ulps')}, ${finite('f.relative_error')}, f.is_regression)::failure_table_row AS r
+       SELECT f.id AS _id, coalesce(f.ulps, 0) AS _u, ${FAILURE_ROW} AS r
          FROM failures f ${where} ORDER BY ${order} LIMIT $${params.length})
      SELECT json_build_object(
               'failures', coalesce(json_agg(p.r ORDER BY ${pageOrder}), '[]'::json),
