@@ -10,4 +10,4 @@ export type FindingsRequest =
 /** How an error crosses the thread: the answers a service decides keep their status and body. */
 export type FindingsFailure = { kind: 'http'; status: number; body: ApiError } | { kind: 'input'; issues: FieldIssue[] } | { kind: 'error'; message: string };
 
-export type FindingsReply = { id: number; ok: true; value: unknown } | { id: number; ok: false; failure: FindingsFailure } | { id: -1; ok: true; value: 'ready' };
+export type FindingsReply = { id: number; ok: true; value: unknown } | { id: number; ok: false; failure: FindingsFailure };

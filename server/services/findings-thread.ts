@@ -5,8 +5,9 @@ import { HttpError } from './http-error';
 import { InputError } from './input-error';
 
 type Pending = { resolve: (value: unknown) => void; reject: (err: Error) => void; timer: ReturnType<typeof setTimeout> };
-/** What a caller sends: a request without its id. */
-type Ask = FindingsRequest extends infer R ? (R extends FindingsRequest ? Omit<R, 'id'> : never) : never;
+/** What a caller sends: a request without its id (Omit applied to each kind of request). */
+type WithoutId<R> = R extends unknown ? Omit<R, 'id'> : never;
+type Ask = WithoutId<FindingsRequest>;
 
 /**
  * The server's side of the findings thread: one worker thread, started on first use, that runs

@@ -76,4 +76,3 @@ port.on('message', (request: FindingsRequest) => {
     port.postMessage(reply);
   });
 });
-port.postMessage({ id: -1, ok: true, value: 'ready' } satisfies FindingsReply);
