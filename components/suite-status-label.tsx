@@ -1,6 +1,6 @@
-import { StyleSheet, Text } from 'react-native';
 import { theme } from '../constants/theme';
 import type { SuiteStatus } from '../shared/suite-status';
+import { TagPill } from './tag-pill';
 
 /** Each status has a word and a glyph of its own, so the label reads without its colour. */
 const SUITE_STATUS_LOOK: Record<SuiteStatus, { word: string; glyph: string; color: string; background: string }> = {
@@ -14,21 +14,5 @@ const SUITE_STATUS_LOOK: Record<SuiteStatus, { word: string; glyph: string; colo
 export function SuiteStatusLabel({ status, version }: { status: SuiteStatus; version?: number }) {
   const look = SUITE_STATUS_LOOK[status];
   const text = `${look.glyph} ${version !== undefined ? `v${version} ` : ''}${look.word}`;
-  return (
-    <Text style={[styles.label, { color: look.color, backgroundColor: look.background }]} accessibilityLabel={`${version !== undefined ? `version ${version} ` : ''}${look.word}`}>
-      {text}
-    </Text>
-  );
+  return <TagPill text={text} ink={look.color} soft={look.background} accessibilityLabel={`${version !== undefined ? `version ${version} ` : ''}${look.word}`} />;
 }
-
-const styles = StyleSheet.create({
-  label: {
-    alignSelf: 'flex-start',
-    fontFamily: theme.font.medium,
-    fontSize: theme.size.small,
-    paddingHorizontal: theme.space(2),
-    paddingVertical: 2,
-    borderRadius: theme.radius,
-    overflow: 'hidden',
-  },
-});
