@@ -88,7 +88,7 @@ export function ClassifyForm({ failureId, role, hasDiagnosis }: { failureId: str
 
   return (
     <View style={styles.form}>
-      {maintainer ? <Text style={styles.note}>As a maintainer you may accept a deviation your library lives with; calling a failure a bug or a convention difference is a reviewer's call.</Text> : null}
+      {maintainer ? <Text style={styles.note}>As a maintainer you may accept a deviation your library lives with; calling a failure a bug or a convention difference is a reviewer&apos;s call.</Text> : null}
       <View>
         <ChipGroup
           label="Verdict"

@@ -34,7 +34,7 @@ export function FailureBrowser({ filters, onChange, dropped = [] }: { filters: F
     <View style={styles.root}>
       {dropped.length > 0 ? (
         <Text accessibilityRole="alert" style={styles.warning}>
-          × The link's {dropped.join(', ')} could not be read and {dropped.length === 1 ? 'is' : 'are'} not applied.
+          × The link&apos;s {dropped.join(', ')} could not be read and {dropped.length === 1 ? 'is' : 'are'} not applied.
         </Text>
       ) : null}
       <FailureFiltersPanel filters={filters} onChange={onChange} compact={!wide} />

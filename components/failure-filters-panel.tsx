@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { useState } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import type { FailureFilters } from '../client/failure-filters';
 import { theme } from '../constants/theme';
@@ -39,7 +39,12 @@ export function FailureFiltersPanel({ filters, onChange, compact }: { filters: F
   const [errors, setErrors] = useState<Partial<Record<TextKey, string>>>({});
   // A link or the back button can change the filters under the form: show what applies.
   const applied = JSON.stringify(draftOf(filters));
-  useEffect(() => setDraft(JSON.parse(applied) as Record<TextKey, string>), [applied]);
+  // Adjusted while rendering rather than in an effect, so the form never shows a stale draft for one frame.
+  const [shownApplied, setShownApplied] = useState(applied);
+  if (applied !== shownApplied) {
+    setShownApplied(applied);
+    setDraft(JSON.parse(applied) as Record<TextKey, string>);
+  }
 
   const on = (Object.keys(filters) as (keyof FailureFilters)[]).filter((k) => k !== 'sort' && filters[k] !== undefined).length;
   const apply = () => {

@@ -249,7 +249,7 @@ export function PathPlots({ view }: { view: FailurePathView }) {
         </Text>
         {view.jumps ? (
           <Text style={styles.words}>
-            The run's own jump check: reference at {view.jumps.expected.length ? view.jumps.expected.map((t) => `t ≈ ${round(t)}`).join(', ') : 'no t'}; library at{' '}
+            The run&apos;s own jump check: reference at {view.jumps.expected.length ? view.jumps.expected.map((t) => `t ≈ ${round(t)}`).join(', ') : 'no t'}; library at{' '}
             {view.jumps.library.length ? view.jumps.library.map((t) => `t ≈ ${round(t)}`).join(', ') : 'no t'}.
           </Text>
         ) : null}

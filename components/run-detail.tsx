@@ -1,5 +1,5 @@
 import { Link } from 'expo-router';
-import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { Pressable, StyleSheet, Text } from 'react-native';
 import { ApiRequestError } from '../client/api-request-error';
 import { isLiveRun } from '../client/is-live-run';
 import { useMe } from '../client/use-me';

@@ -61,11 +61,11 @@ export function VersionMatrixTable({ library, versions, suites, pending = 0 }: V
       <View style={styles.note} testID="matrix-scope">
         <Text style={styles.noteTitle}>What this shows, and what it does not</Text>
         <Text style={styles.noteLine}>
-          ✓ Compared: each suite's newest approved version run on {versions.join(', ')}; every point's value compared bit for bit (zero signs included) with the
-          previous version's. ∆ counts the points whose value changed at that version.
+          ✓ Compared: each suite&apos;s newest approved version run on {versions.join(', ')}; every point&apos;s value compared bit for bit (zero signs included) with the
+          previous version&apos;s. ∆ counts the points whose value changed at that version.
         </Text>
         <Text style={styles.noteLine}>
-          × Not compared: versions not installed here, points off the suites' paths, and other settings of the library. "No change" means the same values at these
+          × Not compared: versions not installed here, points off the suites&apos; paths, and other settings of the library. &quot;No change&quot; means the same values at these
           points, not the same library.
         </Text>
       </View>

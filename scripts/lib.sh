@@ -139,10 +139,11 @@ stop_postgres() {
   fi
 }
 
-# Hash of everything that goes into the web export.
+# Hash of everything that goes into the web export: every folder the bundle takes code
+# from (the suite form runs the harness's own suite checks, so harness/ is one of them).
 web_sources_hash() {
   local f dirs=()
-  for f in app components constants client shared assets; do [ -d "$f" ] && dirs+=("$f"); done
+  for f in app components constants client shared harness assets; do [ -d "$f" ] && dirs+=("$f"); done
   { find "${dirs[@]}" -type f -print0 | LC_ALL=C sort -z | xargs -0 -r sha256sum
     for f in app.json babel.config.js metro.config.js package-lock.json tsconfig.json; do if [ -f "$f" ]; then sha256sum "$f"; fi; done
   } | sha256sum | cut -d' ' -f1

@@ -1,4 +1,4 @@
-// Adds up jest's JSON reports (and the type check) into the one closing line
+// Adds up jest's JSON reports (and the steps before them: type check, lint, format) into the one closing line
 // "Tests: N passed, N failed", and exits non-zero when anything failed or did not run.
 import { existsSync, readFileSync } from 'node:fs';
 
@@ -13,20 +13,25 @@ interface JestReport {
 }
 
 const args = process.argv.slice(2);
-let tscStatus = 0;
+/** `--step "what it was=exit status"`: a step that ran before jest; each failed one counts as one failure. */
+const steps: { name: string; status: number }[] = [];
 const files: string[] = [];
 for (let i = 0; i < args.length; i += 1) {
-  if (args[i] === '--tsc-status') tscStatus = Number(args[++i] ?? 1);
-  else files.push(args[i]!);
+  if (args[i] === '--step') {
+    const [name = '?', status = '1'] = (args[++i] ?? '').split(/=(?=[^=]*$)/);
+    steps.push({ name, status: Number(status) });
+  } else files.push(args[i]!);
 }
 
 let passed = 0;
 let failed = 0;
 let skipped = 0;
 const problems: string[] = [];
-if (tscStatus !== 0) {
-  failed += 1;
-  problems.push('the type check (tsc --noEmit) failed');
+for (const step of steps) {
+  if (step.status !== 0) {
+    failed += 1;
+    problems.push(`${step.name} failed`);
+  }
 }
 for (const file of files) {
   if (!existsSync(file)) {

@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # `npm test`: the same infrastructure as `npm start` (own databases), then the type
-# check, jest (node + web projects), and end-to-end tests in Chromium against the
+# check, ESLint and Prettier's check, jest (node + web projects), and end-to-end tests in Chromium against the
 # exported app served by the real server. Ends with one line "Tests: N passed, N failed".
 source "$(dirname "$0")/lib.sh"
 began=$(date +%s)
@@ -16,6 +16,12 @@ rm -rf "$OUT" && mkdir -p "$OUT" "$ROOT/test-results"
 log "type check (tsc --noEmit)"
 tsc_status=0
 npx tsc --noEmit -p tsconfig.json || tsc_status=$?
+log "lint (eslint, no warning allowed)"
+lint_status=0
+npx eslint --max-warnings 0 . || lint_status=$?
+log "format (prettier --check)"
+format_status=0
+npx prettier --check --log-level warn . || format_status=$?
 
 log "jest: node and web projects"
 npx jest --ci --json --outputFile="$OUT/unit.json" || true
@@ -48,4 +54,5 @@ kill "$server_pid" 2>/dev/null || true
 
 log "finished in $(( $(date +%s) - began )) s"
 trap - ERR
-node --import tsx scripts/summarize-tests.ts --tsc-status "$tsc_status" "$OUT/unit.json" "$OUT/e2e.json"
+node --import tsx scripts/summarize-tests.ts --step "the type check (tsc --noEmit)=$tsc_status" \
+  --step "the lint (npm run lint)=$lint_status" --step "the format check (npm run format:check)=$format_status" "$OUT/unit.json" "$OUT/e2e.json"

@@ -26,6 +26,7 @@ export function complexJsTarget(alias: string, version: string): Target {
   const load = (): ComplexJsClass => {
     if (Complex) return Complex;
     // Required here, not imported: a run that never uses this target never loads it.
+    // eslint-disable-next-line @typescript-eslint/no-require-imports -- a lazy load of a package chosen at run time
     const mod = require(alias) as ComplexJsClass & { default?: ComplexJsClass };
     Complex = mod.default ?? mod;
     return Complex;

@@ -26,9 +26,11 @@ export async function probeEntryPoints(
   for (const d of descriptors) {
     if (d.library === 'complex.js') {
       // Required only here, when probing is asked for (lazy like the adapters).
+      // eslint-disable-next-line @typescript-eslint/no-require-imports -- a lazy load of a package chosen at run time
       const mod = require(String(d.settings.package)) as { default?: unknown };
       findings.push(...probeWays(d.name, complexJsEntryWays((mod.default ?? mod) as Parameters<typeof complexJsEntryWays>[0]), inputs));
     } else if (d.library === 'mathjs' && d.settings.entry === 'complex' && d.settings.predictable === false) {
+      // eslint-disable-next-line @typescript-eslint/no-require-imports -- a lazy load of a package chosen at run time
       const mod = require(String(d.settings.package)) as { create(all: unknown, config: unknown): unknown; all: unknown };
       const math = mod.create(mod.all, {}) as Parameters<typeof mathjsEntryWays>[0];
       findings.push(...probeWays(`mathjs@${d.version}`, mathjsEntryWays(math), inputs));

@@ -35,6 +35,7 @@ export function mathjsTarget(alias: string, version: string, entry: 'complex' | 
   const load = (): MathInstance => {
     if (math) return math;
     // Required here, not imported: a run against another library never pays for mathjs.
+    // eslint-disable-next-line @typescript-eslint/no-require-imports -- a lazy load of a package chosen at run time
     const mod = require(alias) as { create(factories: unknown, config: unknown): MathInstance; all: unknown };
     math = mod.create(mod.all, { predictable });
     return math;

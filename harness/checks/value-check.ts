@@ -4,6 +4,6 @@ export interface ValueCheck {
   /** The larger of the two parts' ulp distances. */
   ulps: number;
   relativeError: number;
-  zeroSignDiffers: Array<'re' | 'im'>;
+  zeroSignDiffers: ('re' | 'im')[];
   finitenessDiffers: boolean;
 }

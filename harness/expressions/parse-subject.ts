@@ -1,10 +1,11 @@
 import type * as MathJs from 'mathjs';
-import type { MathNode } from 'mathjs';
 import { parseNumber } from '../reference/numbers/parse-number';
 import { Rational } from '../reference/numbers/rational';
 import { SubjectError } from './subject-error';
 import { SUBJECT_LIMITS } from './subject-limits';
 import type { SubjectExpr } from './subject-expr';
+
+type MathNode = MathJs.MathNode;
 
 
 const ONE_ARGUMENT = new Set([

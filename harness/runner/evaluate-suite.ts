@@ -312,7 +312,7 @@ async function evaluatePath(
       alt = { rule: `(alternatives unavailable: ${errorText(e)})` };
     }
     alternatives.set(i, alt);
-    const check = { pass: false, ulps: o.ulps, relativeError: o.relativeError, zeroSignDiffers: [] as Array<'re' | 'im'>, finitenessDiffers: false };
+    const check = { pass: false, ulps: o.ulps, relativeError: o.relativeError, zeroSignDiffers: [] as ('re' | 'im')[], finitenessDiffers: false };
     const full = act.every(Number.isFinite) && exp.every(Number.isFinite) && !act.some((x) => x === 0) ? check : checkValue(act, exp, tol, zeroSigns);
     diagnoses[i] = diagnoseFailure({ actual: act, expected: exp, check: full, flippedZero: alt.flippedZero, otherSide: alt.otherSide, otherSheets: alt.otherSheets });
   }

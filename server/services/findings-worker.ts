@@ -28,11 +28,11 @@ const fn = (label: string) => {
 };
 
 /** Opens the target for one computation and always closes it: cmath is a Python child process. */
-async function withTarget<T>(name: string, use: (target: Target) => Promise<T>): Promise<T> {
+async function withTarget<T>(name: string, work: (target: Target) => Promise<T>): Promise<T> {
   const target = openInstalledTarget(name);
   if (!target) throw new HttpError(404, { kind: 'not-found', message: `No installed target "${name}".` });
   try {
-    return await use(target);
+    return await work(target);
   } finally {
     await target.close();
   }

@@ -19,7 +19,7 @@ export class SuiteService {
   constructor(private readonly dataSource: DataSource) {}
 
   async list(filter: { status?: SuiteStatus; q?: string }): Promise<SuiteSummary[]> {
-    const rows: Array<{ slug: string; title: string; subject: string; version: number; status: SuiteStatus; approved: number | null; author: string; updated: Date }> =
+    const rows: { slug: string; title: string; subject: string; version: number; status: SuiteStatus; approved: number | null; author: string; updated: Date }[] =
       await this.dataSource.query(
         `SELECT s.slug, v.body->>'title' AS title, v.body->>'subject' AS subject, v.version, v.status,
                 (SELECT max(a.version) FROM suite_versions a WHERE a.suite_id = s.id AND a.status = 'approved') AS approved,

@@ -1,4 +1,3 @@
-import { z } from 'zod';
 import { queryObject } from './query-object';
 import { versionMatrixRequest } from './version-matrix-request';
 

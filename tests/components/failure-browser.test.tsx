@@ -1,4 +1,4 @@
-import { act, fireEvent, screen, waitFor, within } from '@testing-library/react';
+import { act, fireEvent, screen, within } from '@testing-library/react';
 import { FailureBrowser } from '../../components/failure-browser';
 import { failureRows } from '../setup/failure-rows';
 import { mockFetchRoutes } from '../setup/mock-fetch-routes';

@@ -1,4 +1,4 @@
-import Decimal from 'decimal.js';
+import { Decimal } from 'decimal.js';
 import { BigComplex } from '../../harness/reference/complex/big-complex';
 import { formatDouble } from '../../harness/reference/numbers/format-double';
 import { parseNumber } from '../../harness/reference/numbers/parse-number';

@@ -1,4 +1,4 @@
-import Decimal from 'decimal.js';
+import { Decimal } from 'decimal.js';
 
 /** |a − b| ≤ 10^−digits · max(1, |b|). */
 export function close(a: Decimal, b: Decimal, digits = 35): boolean {

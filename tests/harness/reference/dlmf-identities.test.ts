@@ -1,4 +1,4 @@
-import Decimal from 'decimal.js';
+import { Decimal } from 'decimal.js';
 import fc from 'fast-check';
 import { close } from './close';
 import { exactDecimal } from './exact-decimal';

@@ -1,4 +1,4 @@
-import Decimal from 'decimal.js';
+import { Decimal } from 'decimal.js';
 import { BigFloat } from '../../../harness/reference/numbers/big-float';
 
 /** The exact value of a double as a decimal.js number (`new Decimal(x)` reads x's shortest decimal, not its value). */

@@ -1,4 +1,4 @@
-import Decimal from 'decimal.js';
+import { Decimal } from 'decimal.js';
 import { BigComplex } from '../../../harness/reference/complex/big-complex';
 import { principalValue } from '../../../harness/reference/principal-value';
 import type { Convention } from '../../../shared/schemas/convention-schema';

@@ -12,7 +12,6 @@ import { referenceTarget } from './support/reference-target';
 const cache = new ReferenceCache(null);
 const findings = (r: SuiteTargetResult): PointFinding[] => r.paths.flatMap((p) => p.findings);
 const diagnosis = (f: PointFinding): Diagnosis | null => (f.outcome.kind === 'fail' ? f.outcome.diagnosis : null);
-const kinds = (r: SuiteTargetResult) => new Set(findings(r).map((f) => diagnosis(f)?.kind ?? f.outcome.kind));
 const ROTATE: ComplexPair = [Math.cos((2 * Math.PI) / 3), Math.sin((2 * Math.PI) / 3)];
 
 describe('evaluateSuite', () => {

@@ -1,5 +1,4 @@
 import fc from 'fast-check';
-import request from 'supertest';
 import { checkSuiteSemantics } from '../../../harness/suites/check-suite-semantics';
 import { demoCatalogue } from '../../../scripts/demo-catalogue/demo-catalogue';
 import { validateSuite } from '../../../shared/validate-suite';
