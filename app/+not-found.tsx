@@ -17,8 +17,22 @@ export default function NotFoundScreen() {
 }
 
 const styles = StyleSheet.create({
-  page: { flex: 1, backgroundColor: theme.color.paper, alignItems: 'center', justifyContent: 'center', gap: theme.space(3), padding: theme.space(6) },
+  page: {
+    flex: 1,
+    backgroundColor: theme.color.paper,
+    alignItems: 'center',
+    justifyContent: 'center',
+    gap: theme.space(3),
+    padding: theme.space(6),
+  },
   title: { fontFamily: theme.font.bold, fontSize: theme.size.title, color: theme.color.ink },
   text: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.inkSoft, textAlign: 'center' },
-  link: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accent, textDecorationLine: 'underline', minHeight: 44, paddingTop: 12 },
+  link: {
+    fontFamily: theme.font.medium,
+    fontSize: theme.size.body,
+    color: theme.color.accent,
+    textDecorationLine: 'underline',
+    minHeight: 44,
+    paddingTop: 12,
+  },
 });

@@ -16,7 +16,12 @@ installMarksFont();
 export default function RootLayout() {
   const [queryClient] = useState(createQueryClient);
   // The fonts ship inside the app (IBM Plex from @expo-google-fonts); only these four files are exported.
-  const [fontsLoaded, fontError] = useFonts({ IBMPlexSans_400Regular, IBMPlexSans_500Medium, IBMPlexSans_700Bold, IBMPlexMono_400Regular });
+  const [fontsLoaded, fontError] = useFonts({
+    IBMPlexSans_400Regular,
+    IBMPlexSans_500Medium,
+    IBMPlexSans_700Bold,
+    IBMPlexMono_400Regular,
+  });
   if (!fontsLoaded && !fontError) return <View style={{ flex: 1, backgroundColor: theme.color.paper }} />;
   return (
     <QueryClientProvider client={queryClient}>

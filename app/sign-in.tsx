@@ -21,8 +21,23 @@ export default function SignInScreen() {
 }
 
 const styles = StyleSheet.create({
-  page: { flex: 1, backgroundColor: theme.color.paper, justifyContent: 'center', alignItems: 'center', padding: theme.space(4) },
-  card: { width: '100%', maxWidth: 420, backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, padding: theme.space(6), gap: theme.space(5) },
+  page: {
+    flex: 1,
+    backgroundColor: theme.color.paper,
+    justifyContent: 'center',
+    alignItems: 'center',
+    padding: theme.space(4),
+  },
+  card: {
+    width: '100%',
+    maxWidth: 420,
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    padding: theme.space(6),
+    gap: theme.space(5),
+  },
   brand: { fontFamily: theme.font.bold, fontSize: theme.size.title, color: theme.color.ink },
   lead: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.inkSoft, lineHeight: 24 },
 });

@@ -11,14 +11,21 @@ export async function apiFetch<T>(path: string, init: { method?: string; body?: 
   const response = await fetch(`/api${path}`, {
     method: init.method ?? 'GET',
     credentials: 'same-origin',
-    headers: init.body === undefined || form ? { accept: 'application/json' } : { accept: 'application/json', 'content-type': 'application/json' },
+    headers:
+      init.body === undefined || form
+        ? { accept: 'application/json' }
+        : { accept: 'application/json', 'content-type': 'application/json' },
     body: init.body === undefined ? undefined : form ? (init.body as FormData) : JSON.stringify(init.body),
   });
   if (response.status === 204) return undefined as T;
   const text = await response.text();
   const parsed: unknown = text ? safeJson(text) : undefined;
   if (!response.ok) {
-    const body = (parsed && typeof parsed === 'object' && 'kind' in parsed ? parsed : { kind: 'server-error', message: `The server answered ${response.status}.` }) as ApiError;
+    const body = (
+      parsed && typeof parsed === 'object' && 'kind' in parsed
+        ? parsed
+        : { kind: 'server-error', message: `The server answered ${response.status}.` }
+    ) as ApiError;
     throw new ApiRequestError(response.status, body);
   }
   return parsed as T;

@@ -1,4 +1,6 @@
 import type { FailureQuery } from '../shared/schemas/failure-query';
 
 /** What the failure table is filtered and sorted by: the query of GET /api/failures without the page. */
-export type FailureFilters = Partial<Pick<FailureQuery, 'run' | 'suite' | 'target' | 'fn' | 'diagnosis' | 'convention' | 'status' | 'sort'>>;
+export type FailureFilters = Partial<
+  Pick<FailureQuery, 'run' | 'suite' | 'target' | 'fn' | 'diagnosis' | 'convention' | 'status' | 'sort'>
+>;

@@ -8,7 +8,10 @@ const KEYS = ['run', 'suite', 'target', 'fn', 'diagnosis', 'convention', 'status
  * server's own schema: a parameter the server would refuse is dropped rather than breaking
  * the whole table, and returned in `dropped` so the screen can say so.
  */
-export function filtersFromParams(params: Record<string, string | string[] | undefined>): { filters: FailureFilters; dropped: string[] } {
+export function filtersFromParams(params: Record<string, string | string[] | undefined>): {
+  filters: FailureFilters;
+  dropped: string[];
+} {
   const filters: FailureFilters = {};
   const dropped: string[] = [];
   for (const key of KEYS) {

@@ -5,7 +5,13 @@
  * object or a null, because optional parts of a form are null until switched on.
  */
 export function hasSameShape(template: unknown, value: unknown): boolean {
-  if (template === null || value === null) return (template === null || typeof template === 'object') && (value === null || typeof value === 'object') && !Array.isArray(template) && !Array.isArray(value);
+  if (template === null || value === null)
+    return (
+      (template === null || typeof template === 'object') &&
+      (value === null || typeof value === 'object') &&
+      !Array.isArray(template) &&
+      !Array.isArray(value)
+    );
   if (Array.isArray(template)) return Array.isArray(value);
   if (typeof template !== 'object') return typeof value === typeof template;
   if (typeof value !== 'object' || Array.isArray(value)) return false;

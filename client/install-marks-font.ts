@@ -9,7 +9,8 @@ import { MARKS_FAMILY } from '../constants/marks-family';
  * range, hence a rule of our own. Does nothing off the web or when already declared.
  */
 export function installMarksFont(): void {
-  if (Platform.OS !== 'web' || typeof document === 'undefined' || document.getElementById('sheetkeeper-marks-font')) return;
+  if (Platform.OS !== 'web' || typeof document === 'undefined' || document.getElementById('sheetkeeper-marks-font'))
+    return;
   const uri = Asset.fromModule(require('../assets/fonts/sheetkeeper-marks.ttf')).uri;
   const style = document.createElement('style');
   style.id = 'sheetkeeper-marks-font';

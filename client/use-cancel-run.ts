@@ -23,6 +23,10 @@ export function useCancelRun(id: string) {
       if (context?.before) queryClient.setQueryData(runKey(id), context.before);
     },
     onSuccess: (run) => queryClient.setQueryData(runKey(id), run),
-    onSettled: () => Promise.all([queryClient.invalidateQueries({ queryKey: RUNS_KEY }), queryClient.invalidateQueries({ queryKey: OVERVIEW_KEY })]),
+    onSettled: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: RUNS_KEY }),
+        queryClient.invalidateQueries({ queryKey: OVERVIEW_KEY }),
+      ]),
   });
 }

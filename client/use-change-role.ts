@@ -8,11 +8,14 @@ import { USERS_KEY } from './use-users';
 export function useChangeRole() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ id, role }: { id: string; role: Role }) => apiFetch<{ user: PublicUser }>(`/users/${id}`, { method: 'PATCH', body: { role } }),
+    mutationFn: ({ id, role }: { id: string; role: Role }) =>
+      apiFetch<{ user: PublicUser }>(`/users/${id}`, { method: 'PATCH', body: { role } }),
     onMutate: async ({ id, role }) => {
       await queryClient.cancelQueries({ queryKey: USERS_KEY });
       const before = queryClient.getQueryData<PublicUser[]>(USERS_KEY);
-      queryClient.setQueryData<PublicUser[]>(USERS_KEY, (users) => users?.map((u) => (u.id === id ? { ...u, role } : u)));
+      queryClient.setQueryData<PublicUser[]>(USERS_KEY, (users) =>
+        users?.map((u) => (u.id === id ? { ...u, role } : u)),
+      );
       return { before };
     },
     onError: (_error, _vars, context) => {

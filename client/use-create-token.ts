@@ -7,7 +7,8 @@ import { TOKENS_KEY } from './use-tokens';
 export function useCreateToken() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (name: string) => apiFetch<{ token: TokenView; secret: string }>('/tokens', { method: 'POST', body: { name } }),
+    mutationFn: (name: string) =>
+      apiFetch<{ token: TokenView; secret: string }>('/tokens', { method: 'POST', body: { name } }),
     onSuccess: ({ token }) => {
       queryClient.setQueryData<TokenView[]>(TOKENS_KEY, (list) => (list ? [token, ...list] : list));
       void queryClient.invalidateQueries({ queryKey: TOKENS_KEY });

@@ -16,7 +16,10 @@ export interface CutMapAsk {
 export function useCutMap(name: string, ask: CutMapAsk | null) {
   return useQuery({
     queryKey: [...TARGETS_KEY, name, 'cut-map', ask],
-    queryFn: () => apiFetch<{ cutMap: CutMap } & ComputedAnswer>(`${targetPath(name, 'cut-map')}?${new URLSearchParams({ ...ask! }).toString()}`),
+    queryFn: () =>
+      apiFetch<{ cutMap: CutMap } & ComputedAnswer>(
+        `${targetPath(name, 'cut-map')}?${new URLSearchParams({ ...ask! }).toString()}`,
+      ),
     staleTime: Infinity,
     enabled: name.length > 0 && ask !== null,
     // Keep the last picture on screen while another box is computed.

@@ -6,5 +6,8 @@ export const failureKey = (id: string) => ['failure', id] as const;
 
 /** One failure in full, with the same point's history across runs and versions. */
 export function useFailure(id: string) {
-  return useQuery({ queryKey: failureKey(id), queryFn: () => apiFetch<FailureDetailView>(`/failures/${encodeURIComponent(id)}`) });
+  return useQuery({
+    queryKey: failureKey(id),
+    queryFn: () => apiFetch<FailureDetailView>(`/failures/${encodeURIComponent(id)}`),
+  });
 }

@@ -13,7 +13,10 @@ export function useFailures(filters: FailureFilters) {
   return useInfiniteQuery({
     queryKey: [...FAILURES_KEY, filters],
     initialPageParam: null as string | null,
-    queryFn: ({ pageParam }) => apiFetch<{ failures: FailureView[]; next: string | null }>(`/failures?${failureQueryString(filters, { after: pageParam, limit: FAILURES_PAGE })}`),
+    queryFn: ({ pageParam }) =>
+      apiFetch<{ failures: FailureView[]; next: string | null }>(
+        `/failures?${failureQueryString(filters, { after: pageParam, limit: FAILURES_PAGE })}`,
+      ),
     getNextPageParam: (last) => last.next,
   });
 }

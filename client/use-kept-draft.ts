@@ -26,7 +26,8 @@ export function useKeptDraft<T>(key: string, template: T, current: T, dirty: boo
     if (!raw) return null;
     try {
       const parsed = JSON.parse(raw) as { format?: unknown; savedAt?: unknown; value?: unknown };
-      if (parsed.format !== FORMAT || typeof parsed.savedAt !== 'string' || !hasSameShape(template, parsed.value)) return null;
+      if (parsed.format !== FORMAT || typeof parsed.savedAt !== 'string' || !hasSameShape(template, parsed.value))
+        return null;
       return { value: parsed.value as T, savedAt: parsed.savedAt };
     } catch {
       return null;
@@ -37,7 +38,10 @@ export function useKeptDraft<T>(key: string, template: T, current: T, dirty: boo
     if (!dirty) return undefined;
     const timer = setTimeout(() => {
       try {
-        localStore()?.setItem(key, JSON.stringify({ format: FORMAT, savedAt: new Date().toISOString(), value: current }));
+        localStore()?.setItem(
+          key,
+          JSON.stringify({ format: FORMAT, savedAt: new Date().toISOString(), value: current }),
+        );
       } catch {
         // Storage full or refused: the draft still lives in the form until the tab closes.
       }

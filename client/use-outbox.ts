@@ -10,7 +10,9 @@ export function useOutbox() {
     queryKey: ['outbox'],
     initialPageParam: null as string | null,
     queryFn: ({ pageParam }) =>
-      apiFetch<{ messages: ReceivedMailView[]; next: string | null }>(`/outbox?limit=${PAGE}${pageParam ? `&before=${encodeURIComponent(pageParam)}` : ''}`),
+      apiFetch<{ messages: ReceivedMailView[]; next: string | null }>(
+        `/outbox?limit=${PAGE}${pageParam ? `&before=${encodeURIComponent(pageParam)}` : ''}`,
+      ),
     getNextPageParam: (last) => last.next,
   });
 }

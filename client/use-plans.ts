@@ -6,5 +6,8 @@ export const PLANS_KEY = ['plans'] as const;
 
 /** Every plan, by name. */
 export function usePlans() {
-  return useQuery({ queryKey: PLANS_KEY, queryFn: async () => (await apiFetch<{ plans: PlanView[] }>('/plans')).plans });
+  return useQuery({
+    queryKey: PLANS_KEY,
+    queryFn: async () => (await apiFetch<{ plans: PlanView[] }>('/plans')).plans,
+  });
 }

@@ -8,7 +8,12 @@ export function useRetireSuite() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: async ({ slug, version }: { slug: string; version: number }) =>
-      (await apiFetch<{ version: SuiteVersionView }>(`/suites/${encodeURIComponent(slug)}/versions/${version}/retire`, { method: 'POST' })).version,
+      (
+        await apiFetch<{ version: SuiteVersionView }>(
+          `/suites/${encodeURIComponent(slug)}/versions/${version}/retire`,
+          { method: 'POST' },
+        )
+      ).version,
     onSuccess: () => void queryClient.invalidateQueries({ queryKey: SUITES_KEY }),
   });
 }

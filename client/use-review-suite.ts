@@ -9,7 +9,12 @@ export function useReviewSuite() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: async ({ slug, version, body }: { slug: string; version: number; body: ReviewBody }) =>
-      (await apiFetch<{ version: SuiteVersionView }>(`/suites/${encodeURIComponent(slug)}/versions/${version}/review`, { method: 'POST', body })).version,
+      (
+        await apiFetch<{ version: SuiteVersionView }>(
+          `/suites/${encodeURIComponent(slug)}/versions/${version}/review`,
+          { method: 'POST', body },
+        )
+      ).version,
     onSuccess: () => void queryClient.invalidateQueries({ queryKey: SUITES_KEY }),
   });
 }

@@ -7,7 +7,8 @@ import { TOKENS_KEY } from './use-tokens';
 export function useRevokeToken() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async (id: string) => (await apiFetch<{ token: TokenView }>(`/tokens/${encodeURIComponent(id)}/revoke`, { method: 'POST' })).token,
+    mutationFn: async (id: string) =>
+      (await apiFetch<{ token: TokenView }>(`/tokens/${encodeURIComponent(id)}/revoke`, { method: 'POST' })).token,
     onSuccess: (token) => {
       queryClient.setQueryData<TokenView[]>(TOKENS_KEY, (list) => list?.map((t) => (t.id === token.id ? token : t)));
       void queryClient.invalidateQueries({ queryKey: TOKENS_KEY });

@@ -30,6 +30,7 @@ export function useRuns(filters: RunFilters) {
     getNextPageParam: (last) => last.next,
     // Runs start elsewhere (Plans, schedules, the API): look again whenever the screen opens after a few seconds.
     staleTime: 5_000,
-    refetchInterval: (query) => (query.state.data?.pages.some((page) => page.runs.some(isLiveRun)) ? LIVE_INTERVAL : false),
+    refetchInterval: (query) =>
+      query.state.data?.pages.some((page) => page.runs.some(isLiveRun)) ? LIVE_INTERVAL : false,
   });
 }

@@ -9,7 +9,12 @@ export function useSavePlan(id: string | null) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: async (body: PlanBody) =>
-      (await apiFetch<{ plan: PlanView }>(id ? `/plans/${encodeURIComponent(id)}` : '/plans', { method: id ? 'PUT' : 'POST', body })).plan,
+      (
+        await apiFetch<{ plan: PlanView }>(id ? `/plans/${encodeURIComponent(id)}` : '/plans', {
+          method: id ? 'PUT' : 'POST',
+          body,
+        })
+      ).plan,
     onSuccess: (plan) => {
       queryClient.setQueryData([...PLANS_KEY, plan.id], plan);
       void queryClient.invalidateQueries({ queryKey: PLANS_KEY, exact: true });

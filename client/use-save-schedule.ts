@@ -15,7 +15,13 @@ export function useSaveSchedule(planId: string, id: string | null) {
         })
       ).schedule,
     onSuccess: (saved) => {
-      queryClient.setQueryData<ScheduleView[]>(SCHEDULES_KEY, (list) => (list ? (list.some((s) => s.id === saved.id) ? list.map((s) => (s.id === saved.id ? saved : s)) : [...list, saved]) : list));
+      queryClient.setQueryData<ScheduleView[]>(SCHEDULES_KEY, (list) =>
+        list
+          ? list.some((s) => s.id === saved.id)
+            ? list.map((s) => (s.id === saved.id ? saved : s))
+            : [...list, saved]
+          : list,
+      );
       void queryClient.invalidateQueries({ queryKey: SCHEDULES_KEY });
     },
   });

@@ -8,7 +8,8 @@ type Subscriptions = { targetKeys: string[]; available: string[] };
 export function useSaveSubscriptions() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (targetKeys: string[]) => apiFetch<{ targetKeys: string[] }>('/subscriptions', { method: 'PUT', body: { targetKeys } }),
+    mutationFn: (targetKeys: string[]) =>
+      apiFetch<{ targetKeys: string[] }>('/subscriptions', { method: 'PUT', body: { targetKeys } }),
     onMutate: async (targetKeys) => {
       await queryClient.cancelQueries({ queryKey: SUBSCRIPTIONS_KEY });
       const before = queryClient.getQueryData<Subscriptions>(SUBSCRIPTIONS_KEY);

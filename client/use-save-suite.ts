@@ -12,7 +12,12 @@ export function useSaveSuite(editing: string | null) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: async (body: unknown) =>
-      (await apiFetch<{ version: SuiteVersionView }>(editing ? `/suites/${encodeURIComponent(editing)}` : '/suites', { method: editing ? 'PUT' : 'POST', body })).version,
+      (
+        await apiFetch<{ version: SuiteVersionView }>(editing ? `/suites/${encodeURIComponent(editing)}` : '/suites', {
+          method: editing ? 'PUT' : 'POST',
+          body,
+        })
+      ).version,
     onSuccess: (version) => {
       void queryClient.invalidateQueries({ queryKey: SUITES_KEY });
       void queryClient.invalidateQueries({ queryKey: suiteKey(version.slug) });

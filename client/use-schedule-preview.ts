@@ -37,7 +37,8 @@ export function useSchedulePreview(cron: string, timeZone: string): SchedulePrev
   }
   const query = useQuery({
     queryKey: ['schedule-preview', parsed.data?.cron, parsed.data?.timeZone],
-    queryFn: async () => (await apiFetch<{ nextRuns: string[] }>('/schedules/preview', { method: 'POST', body: parsed.data })).nextRuns,
+    queryFn: async () =>
+      (await apiFetch<{ nextRuns: string[] }>('/schedules/preview', { method: 'POST', body: parsed.data })).nextRuns,
     enabled: parsed.success,
     staleTime: 60_000,
     retry: false,

@@ -6,5 +6,8 @@ export const SCHEDULES_KEY = ['schedules'] as const;
 
 /** Every schedule of every plan, with the next times each fires. */
 export function useSchedules() {
-  return useQuery({ queryKey: SCHEDULES_KEY, queryFn: async () => (await apiFetch<{ schedules: ScheduleView[] }>('/schedules')).schedules });
+  return useQuery({
+    queryKey: SCHEDULES_KEY,
+    queryFn: async () => (await apiFetch<{ schedules: ScheduleView[] }>('/schedules')).schedules,
+  });
 }

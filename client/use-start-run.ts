@@ -9,7 +9,8 @@ import { RUNS_KEY } from './use-runs';
 export function useStartRun() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async (planId: string) => (await apiFetch<{ run: RunView }>('/runs', { method: 'POST', body: { planId } })).run,
+    mutationFn: async (planId: string) =>
+      (await apiFetch<{ run: RunView }>('/runs', { method: 'POST', body: { planId } })).run,
     onSuccess: (run) => {
       queryClient.setQueryData(runKey(run.id), run);
       void queryClient.invalidateQueries({ queryKey: [...RUNS_KEY, 'list'] });

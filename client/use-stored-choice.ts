@@ -6,7 +6,11 @@ import { localStore } from './local-store';
  * What was stored is kept only where it names known options, so a renamed column cannot
  * leave the table empty.
  */
-export function useStoredChoice<T extends string>(key: string, options: readonly T[], fallback: readonly T[]): [T[], (next: T[]) => void] {
+export function useStoredChoice<T extends string>(
+  key: string,
+  options: readonly T[],
+  fallback: readonly T[],
+): [T[], (next: T[]) => void] {
   const [value, setValue] = useState<T[]>(() => {
     const raw = localStore()?.getItem(key);
     if (!raw) return [...fallback];

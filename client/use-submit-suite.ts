@@ -8,7 +8,9 @@ import { SUITES_KEY } from './use-suites';
 export function useSubmitSuite() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async (slug: string) => (await apiFetch<{ version: SuiteVersionView }>(`/suites/${encodeURIComponent(slug)}/submit`, { method: 'POST' })).version,
+    mutationFn: async (slug: string) =>
+      (await apiFetch<{ version: SuiteVersionView }>(`/suites/${encodeURIComponent(slug)}/submit`, { method: 'POST' }))
+        .version,
     onMutate: async (slug) => {
       await queryClient.cancelQueries({ queryKey: suiteKey(slug) });
       const before = queryClient.getQueryData<SuiteVersionView[]>(suiteKey(slug));

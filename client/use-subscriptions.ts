@@ -5,5 +5,8 @@ export const SUBSCRIPTIONS_KEY = ['subscriptions'] as const;
 
 /** The libraries whose regressions mail me, and the libraries one can choose from. */
 export function useSubscriptions() {
-  return useQuery({ queryKey: SUBSCRIPTIONS_KEY, queryFn: () => apiFetch<{ targetKeys: string[]; available: string[] }>('/subscriptions') });
+  return useQuery({
+    queryKey: SUBSCRIPTIONS_KEY,
+    queryFn: () => apiFetch<{ targetKeys: string[]; available: string[] }>('/subscriptions'),
+  });
 }

@@ -9,7 +9,8 @@ export const suiteKey = (slug: string) => [...SUITES_KEY, 'one', slug] as const;
 export function useSuite(slug: string | undefined) {
   return useQuery({
     queryKey: suiteKey(slug ?? ''),
-    queryFn: async () => (await apiFetch<{ versions: SuiteVersionView[] }>(`/suites/${encodeURIComponent(slug ?? '')}`)).versions,
+    queryFn: async () =>
+      (await apiFetch<{ versions: SuiteVersionView[] }>(`/suites/${encodeURIComponent(slug ?? '')}`)).versions,
     enabled: Boolean(slug),
   });
 }

@@ -6,5 +6,8 @@ export const TARGETS_KEY = ['targets'] as const;
 
 /** The targets the server has seen, installed ones first, with their versions and settings. */
 export function useTargets() {
-  return useQuery({ queryKey: TARGETS_KEY, queryFn: async () => (await apiFetch<{ targets: TargetView[] }>('/targets')).targets });
+  return useQuery({
+    queryKey: TARGETS_KEY,
+    queryFn: async () => (await apiFetch<{ targets: TargetView[] }>('/targets')).targets,
+  });
 }

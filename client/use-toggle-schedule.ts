@@ -8,18 +8,27 @@ export function useToggleSchedule() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: async ({ id, enabled }: { id: string; enabled: boolean }) =>
-      (await apiFetch<{ schedule: ScheduleView }>(`/schedules/${encodeURIComponent(id)}`, { method: 'PATCH', body: { enabled } })).schedule,
+      (
+        await apiFetch<{ schedule: ScheduleView }>(`/schedules/${encodeURIComponent(id)}`, {
+          method: 'PATCH',
+          body: { enabled },
+        })
+      ).schedule,
     onMutate: async ({ id, enabled }) => {
       await queryClient.cancelQueries({ queryKey: SCHEDULES_KEY });
       const before = queryClient.getQueryData<ScheduleView[]>(SCHEDULES_KEY);
-      queryClient.setQueryData<ScheduleView[]>(SCHEDULES_KEY, (list) => list?.map((s) => (s.id === id ? { ...s, enabled } : s)));
+      queryClient.setQueryData<ScheduleView[]>(SCHEDULES_KEY, (list) =>
+        list?.map((s) => (s.id === id ? { ...s, enabled } : s)),
+      );
       return { before };
     },
     onError: (_error, _vars, context) => {
       if (context?.before) queryClient.setQueryData(SCHEDULES_KEY, context.before);
     },
     onSuccess: (saved) => {
-      queryClient.setQueryData<ScheduleView[]>(SCHEDULES_KEY, (list) => list?.map((s) => (s.id === saved.id ? saved : s)));
+      queryClient.setQueryData<ScheduleView[]>(SCHEDULES_KEY, (list) =>
+        list?.map((s) => (s.id === saved.id ? saved : s)),
+      );
     },
     onSettled: () => queryClient.invalidateQueries({ queryKey: SCHEDULES_KEY }),
   });

@@ -6,5 +6,8 @@ export const TOKENS_KEY = ['tokens'] as const;
 
 /** My API tokens, newest first (never their secrets). */
 export function useTokens() {
-  return useQuery({ queryKey: TOKENS_KEY, queryFn: async () => (await apiFetch<{ tokens: TokenView[] }>('/tokens')).tokens });
+  return useQuery({
+    queryKey: TOKENS_KEY,
+    queryFn: async () => (await apiFetch<{ tokens: TokenView[] }>('/tokens')).tokens,
+  });
 }

@@ -8,7 +8,10 @@ export function useUploadReferenceTable(slug: string) {
     mutationFn: async (file: Blob & { name?: string }) => {
       const form = new FormData();
       form.append('file', file, file.name ?? 'reference.csv');
-      return apiFetch<{ suite: string; version: number; check: ReferenceTableCheck }>(`/suites/${encodeURIComponent(slug)}/reference-table`, { method: 'POST', body: form });
+      return apiFetch<{ suite: string; version: number; check: ReferenceTableCheck }>(
+        `/suites/${encodeURIComponent(slug)}/reference-table`,
+        { method: 'POST', body: form },
+      );
     },
   });
 }

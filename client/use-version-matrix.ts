@@ -22,7 +22,10 @@ export function useVersionMatrix(library: string, slugs: string[]) {
   const queries = useQueries({
     queries: groups.map((group) => ({
       queryKey: [...TARGETS_KEY, library, 'version-matrix', group],
-      queryFn: () => apiFetch<{ matrix: VersionMatrix } & ComputedAnswer>(`${targetPath(library, 'version-matrix')}?${new URLSearchParams({ suite: group.join(',') }).toString()}`),
+      queryFn: () =>
+        apiFetch<{ matrix: VersionMatrix } & ComputedAnswer>(
+          `${targetPath(library, 'version-matrix')}?${new URLSearchParams({ suite: group.join(',') }).toString()}`,
+        ),
       staleTime: Infinity,
     })),
   });

@@ -10,7 +10,14 @@ interface Props {
   accessibilityLabel?: string;
 }
 
-export function ActionButton({ label, onPress, busy = false, disabled = false, tone = 'primary', accessibilityLabel }: Props) {
+export function ActionButton({
+  label,
+  onPress,
+  busy = false,
+  disabled = false,
+  tone = 'primary',
+  accessibilityLabel,
+}: Props) {
   const inactive = disabled || busy;
   return (
     <Pressable
@@ -20,7 +27,12 @@ export function ActionButton({ label, onPress, busy = false, disabled = false, t
       aria-busy={busy}
       disabled={inactive}
       onPress={onPress}
-      style={({ pressed }) => [styles.base, tone === 'primary' ? styles.primary : styles.quiet, pressed && styles.pressed, inactive && styles.inactive]}
+      style={({ pressed }) => [
+        styles.base,
+        tone === 'primary' ? styles.primary : styles.quiet,
+        pressed && styles.pressed,
+        inactive && styles.inactive,
+      ]}
     >
       {busy ? <ActivityIndicator color={tone === 'primary' ? theme.color.accentInk : theme.color.accent} /> : null}
       <Text style={[styles.label, tone === 'primary' ? styles.primaryLabel : styles.quietLabel]}>{label}</Text>
@@ -29,7 +41,15 @@ export function ActionButton({ label, onPress, busy = false, disabled = false, t
 }
 
 const styles = StyleSheet.create({
-  base: { minHeight: theme.touch, paddingHorizontal: theme.space(5), borderRadius: theme.radius, flexDirection: 'row', alignItems: 'center', justifyContent: 'center', gap: theme.space(2) },
+  base: {
+    minHeight: theme.touch,
+    paddingHorizontal: theme.space(5),
+    borderRadius: theme.radius,
+    flexDirection: 'row',
+    alignItems: 'center',
+    justifyContent: 'center',
+    gap: theme.space(2),
+  },
   primary: { backgroundColor: theme.color.accent },
   quiet: { backgroundColor: 'transparent', borderWidth: 1, borderColor: theme.color.rule },
   pressed: { opacity: 0.85 },

@@ -19,7 +19,9 @@ export function CancelRunButton({ runId }: { runId: string }) {
       {asking ? (
         <View style={styles.confirm} accessibilityRole="alert">
           <Text style={styles.question}>Cancel this run?</Text>
-          <Text style={styles.explain}>Shards not started are skipped; a shard in progress stops at its next path. Results stored so far stay.</Text>
+          <Text style={styles.explain}>
+            Shards not started are skipped; a shard in progress stops at its next path. Results stored so far stay.
+          </Text>
           <View style={styles.buttons}>
             <ActionButton
               label="Yes, cancel the run"
@@ -43,7 +45,15 @@ export function CancelRunButton({ runId }: { runId: string }) {
 
 const styles = StyleSheet.create({
   box: { gap: theme.space(2), alignItems: 'flex-start' },
-  confirm: { alignSelf: 'stretch', gap: theme.space(2), padding: theme.space(3), borderRadius: theme.radius, borderWidth: 1, borderColor: theme.color.danger, backgroundColor: theme.color.dangerSoft },
+  confirm: {
+    alignSelf: 'stretch',
+    gap: theme.space(2),
+    padding: theme.space(3),
+    borderRadius: theme.radius,
+    borderWidth: 1,
+    borderColor: theme.color.danger,
+    backgroundColor: theme.color.dangerSoft,
+  },
   question: { fontFamily: theme.font.bold, fontSize: theme.size.body, color: theme.color.ink },
   explain: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink, lineHeight: 20 },
   buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },

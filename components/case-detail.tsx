@@ -24,7 +24,8 @@ export function CaseDetail({ id }: { id: string }) {
   const me = useMe();
   const wide = useWindowDimensions().width >= theme.wide;
   if (detail.isPending) return <QueryState state="loading" />;
-  if (detail.isError) return <QueryState state="error" message={detail.error.message} onRetry={() => void detail.refetch()} />;
+  if (detail.isError)
+    return <QueryState state="error" message={detail.error.message} onRetry={() => void detail.refetch()} />;
   const { failure: f, history } = detail.data;
   const { tone, detail: words } = describeFailure(f);
   const role = me.data?.role;
@@ -38,10 +39,18 @@ export function CaseDetail({ id }: { id: string }) {
       <Section title="Rule">
         <Text style={styles.rule}>{f.rule ?? '—'}</Text>
         <Text style={styles.small}>
-          Judged under the {f.convention} convention with suite {f.suiteSlug} v{f.suiteVersion}. {DIAGNOSIS_STYLES[tone].word[0]!.toUpperCase() + DIAGNOSIS_STYLES[tone].word.slice(1)}: {DIAGNOSIS_STYLES[tone].explain}.
+          Judged under the {f.convention} convention with suite {f.suiteSlug} v{f.suiteVersion}.{' '}
+          {DIAGNOSIS_STYLES[tone].word[0]!.toUpperCase() + DIAGNOSIS_STYLES[tone].word.slice(1)}:{' '}
+          {DIAGNOSIS_STYLES[tone].explain}.
         </Text>
       </Section>
-      <Section title="Reproducer">{f.reproducer ? <ReproducerBox code={f.reproducer} /> : <Text style={styles.small}>No reproducer was stored for this point.</Text>}</Section>
+      <Section title="Reproducer">
+        {f.reproducer ? (
+          <ReproducerBox code={f.reproducer} />
+        ) : (
+          <Text style={styles.small}>No reproducer was stored for this point.</Text>
+        )}
+      </Section>
       <Section title="History of this point">
         <FailureHistory history={history} currentId={f.id} />
       </Section>
@@ -66,7 +75,11 @@ export function CaseDetail({ id }: { id: string }) {
           {f.isRegression ? ' · ↑ new: this point passed in the previous run of the plan' : ''}
         </Text>
         <Link href={{ pathname: '/failures', params: { run: f.runId } }} asChild>
-          <Pressable accessibilityRole="link" accessibilityLabel="All failures of this run" style={StyleSheet.flatten(styles.back)}>
+          <Pressable
+            accessibilityRole="link"
+            accessibilityLabel="All failures of this run"
+            style={StyleSheet.flatten(styles.back)}
+          >
             <Text style={styles.backText}>← All failures of this run</Text>
           </Pressable>
         </Link>

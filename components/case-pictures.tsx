@@ -14,7 +14,14 @@ const CONTINUOUS = new Set(['circle', 'segment', 'polyline']);
 export function CasePictures({ failureId }: { failureId: string }) {
   const path = useFailurePath(failureId);
   if (path.isPending) return <QueryState state="loading" />;
-  if (path.isError) return <QueryState state="error" message={`The path could not be drawn: ${path.error.message}`} onRetry={() => void path.refetch()} />;
+  if (path.isError)
+    return (
+      <QueryState
+        state="error"
+        message={`The path could not be drawn: ${path.error.message}`}
+        onRetry={() => void path.refetch()}
+      />
+    );
   const v = path.data;
   if (v.points.length === 0) return <QueryState state="empty" message="This path has no points to draw." />;
   return (
@@ -60,7 +67,8 @@ function DiagnosisTally({ view }: { view: FailurePathView }) {
   const tally = new Map<DiagnosisTone, number>();
   for (const p of view.points) {
     if (p.outcome === 'pass') continue;
-    const tone: DiagnosisTone = p.diagnosis ?? (p.outcome === 'skipped' ? 'skipped' : p.outcome === 'error' ? 'error' : 'unexplained');
+    const tone: DiagnosisTone =
+      p.diagnosis ?? (p.outcome === 'skipped' ? 'skipped' : p.outcome === 'error' ? 'error' : 'unexplained');
     tally.set(tone, (tally.get(tone) ?? 0) + 1);
   }
   const passed = view.points.filter((p) => p.outcome === 'pass').length;
@@ -72,7 +80,9 @@ function DiagnosisTally({ view }: { view: FailurePathView }) {
       </Text>
       {[...tally].map(([tone, n]) => (
         <Text key={tone} style={styles.tallyItem}>
-          <Text style={{ color: DIAGNOSIS_STYLES[tone].color, fontFamily: theme.font.bold }}>{DIAGNOSIS_STYLES[tone].glyph} </Text>
+          <Text style={{ color: DIAGNOSIS_STYLES[tone].color, fontFamily: theme.font.bold }}>
+            {DIAGNOSIS_STYLES[tone].glyph}{' '}
+          </Text>
           {n} {DIAGNOSIS_STYLES[tone].word}
         </Text>
       ))}

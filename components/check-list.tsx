@@ -31,7 +31,9 @@ export function CheckList({ label, items, selected, onChange, error, filterFrom 
   const wide = useWindowDimensions().width >= theme.wide;
   const chosen = new Set(selected);
   const needle = filter.trim().toLowerCase();
-  const shown = needle ? items.filter((i) => `${i.title} ${i.key} ${i.detail ?? ''}`.toLowerCase().includes(needle)) : items;
+  const shown = needle
+    ? items.filter((i) => `${i.title} ${i.key} ${i.detail ?? ''}`.toLowerCase().includes(needle))
+    : items;
   const choosable = shown.filter((i) => !i.blocked).map((i) => i.key);
   const toggle = (key: string) => onChange(chosen.has(key) ? selected.filter((k) => k !== key) : [...selected, key]);
 
@@ -55,16 +57,30 @@ export function CheckList({ label, items, selected, onChange, error, filterFrom 
             autoCorrect={false}
             style={styles.filter}
           />
-          <Pressable accessibilityRole="button" accessibilityLabel={`Choose every ${label.toLowerCase()} shown`} onPress={() => onChange(Array.from(new Set([...selected, ...choosable])))} style={styles.tool}>
+          <Pressable
+            accessibilityRole="button"
+            accessibilityLabel={`Choose every ${label.toLowerCase()} shown`}
+            onPress={() => onChange(Array.from(new Set([...selected, ...choosable])))}
+            style={styles.tool}
+          >
             <Text style={styles.toolText}>All shown</Text>
           </Pressable>
-          <Pressable accessibilityRole="button" accessibilityLabel={`Clear ${label.toLowerCase()}`} onPress={() => onChange([])} style={styles.tool}>
+          <Pressable
+            accessibilityRole="button"
+            accessibilityLabel={`Clear ${label.toLowerCase()}`}
+            onPress={() => onChange([])}
+            style={styles.tool}
+          >
             <Text style={styles.toolText}>Clear</Text>
           </Pressable>
         </View>
       ) : null}
       <View style={[styles.list, error ? styles.listError : null]} accessibilityRole="list" aria-label={label}>
-        {shown.length === 0 ? <Text style={styles.none}>{items.length === 0 ? 'Nothing to choose from yet.' : 'Nothing matches the filter.'}</Text> : null}
+        {shown.length === 0 ? (
+          <Text style={styles.none}>
+            {items.length === 0 ? 'Nothing to choose from yet.' : 'Nothing matches the filter.'}
+          </Text>
+        ) : null}
         {shown.map((item) => {
           const on = chosen.has(item.key);
           const disabled = Boolean(item.blocked) && !on;
@@ -111,15 +127,54 @@ const styles = StyleSheet.create({
     minWidth: 0,
     ...INPUT_BOX_STYLE,
   },
-  tool: { minHeight: 44, justifyContent: 'center', paddingHorizontal: theme.space(3), borderRadius: theme.radius, borderWidth: 1, borderColor: theme.color.rule },
+  tool: {
+    minHeight: 44,
+    justifyContent: 'center',
+    paddingHorizontal: theme.space(3),
+    borderRadius: theme.radius,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+  },
   toolText: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.ink },
-  list: { flexDirection: 'row', flexWrap: 'wrap', borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, backgroundColor: theme.color.panel, maxHeight: 420, overflow: 'scroll' },
+  list: {
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    backgroundColor: theme.color.panel,
+    maxHeight: 420,
+    overflow: 'scroll',
+  },
   listError: { borderColor: theme.color.danger, borderWidth: 2 },
-  none: { padding: theme.space(3), fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
-  item: { width: '100%', minHeight: 48, flexDirection: 'row', alignItems: 'center', gap: theme.space(3), paddingHorizontal: theme.space(3), paddingVertical: theme.space(2), borderBottomWidth: 1, borderBottomColor: theme.color.rule },
+  none: {
+    padding: theme.space(3),
+    fontFamily: theme.font.regular,
+    fontSize: theme.size.small,
+    color: theme.color.inkSoft,
+  },
+  item: {
+    width: '100%',
+    minHeight: 48,
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: theme.space(3),
+    paddingHorizontal: theme.space(3),
+    paddingVertical: theme.space(2),
+    borderBottomWidth: 1,
+    borderBottomColor: theme.color.rule,
+  },
   itemWide: { width: '50%' },
   itemDisabled: { opacity: 0.6 },
-  box: { width: 22, height: 22, borderRadius: 4, borderWidth: 2, borderColor: theme.color.inkFaint, alignItems: 'center', justifyContent: 'center' },
+  box: {
+    width: 22,
+    height: 22,
+    borderRadius: 4,
+    borderWidth: 2,
+    borderColor: theme.color.inkFaint,
+    alignItems: 'center',
+    justifyContent: 'center',
+  },
   boxOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
   tick: { fontFamily: theme.font.bold, fontSize: 14, lineHeight: 16, color: theme.color.accentInk },
   words: { flex: 1, minWidth: 0 },

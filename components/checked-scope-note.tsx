@@ -26,14 +26,22 @@ const plural = (x: number, word: string) => `${n(x)} ${word}${x === 1 ? '' : 's'
  * checks behind it, and that a green result is evidence for those points only — never a
  * certificate. Reusable wherever a green table or matrix could be read as more.
  */
-export function CheckedScopeNote({ scopes, pairsNotChecked = 0, properties, subject = 'matrix' }: CheckedScopeNoteProps) {
+export function CheckedScopeNote({
+  scopes,
+  pairsNotChecked = 0,
+  properties,
+  subject = 'matrix',
+}: CheckedScopeNoteProps) {
   const conventions = [...new Set(scopes.map((s) => s.convention))];
   // Each regular branch states its own point and cut layout; here they are counted, the matrix cells name them.
   const principal = scopes.filter((s) => /^principal/i.test(s.branch)).length;
   const regular = scopes.length - principal;
-  const branches = [principal ? `principal branches (${plural(principal, 'pair')})` : null, regular ? `regular branches fixed by a value at a point and continued along the paths (${plural(regular, 'pair')})` : null].filter(
-    (b): b is string => b !== null,
-  );
+  const branches = [
+    principal ? `principal branches (${plural(principal, 'pair')})` : null,
+    regular
+      ? `regular branches fixed by a value at a point and continued along the paths (${plural(regular, 'pair')})`
+      : null,
+  ].filter((b): b is string => b !== null);
   const tolerances = [...new Set(scopes.map((s) => s.tolerance))];
   const paths = scopes.reduce((sum, s) => sum + s.paths, 0);
   const points = scopes.reduce((sum, s) => sum + s.points, 0);
@@ -41,7 +49,9 @@ export function CheckedScopeNote({ scopes, pairsNotChecked = 0, properties, subj
   const listedNotRun = scopes.filter((s) => s.properties.listed.length > 0 && !s.properties.run).length;
 
   const checked = [
-    scopes.length === 0 ? 'No suite × target pair has finished, so nothing has been checked yet.' : `${plural(scopes.length, 'suite × target pair')}, ${plural(paths, 'path')}, ${plural(points, 'point')} in all.`,
+    scopes.length === 0
+      ? 'No suite × target pair has finished, so nothing has been checked yet.'
+      : `${plural(scopes.length, 'suite × target pair')}, ${plural(paths, 'path')}, ${plural(points, 'point')} in all.`,
     conventions.length ? `Conventions: ${conventions.map((c) => CONVENTION_WORDS[c] ?? c).join('; ')}.` : null,
     branches.length ? `Branches: ${branches.join('; ')}.` : null,
     tolerances.length ? `Tolerances: ${tolerances.join('; ')}.` : null,
@@ -52,7 +62,9 @@ export function CheckedScopeNote({ scopes, pairsNotChecked = 0, properties, subj
 
   const notChecked = [
     'Any point off these paths, and any other convention, tolerance, library version or entry point.',
-    pairsNotChecked > 0 ? `${plural(pairsNotChecked, 'pair')} of this run checked nothing (not finished, cancelled, or stopped by an error).` : null,
+    pairsNotChecked > 0
+      ? `${plural(pairsNotChecked, 'pair')} of this run checked nothing (not finished, cancelled, or stopped by an error).`
+      : null,
     listedNotRun > 0 ? `${plural(listedNotRun, 'pair')} listed property laws that were not run.` : null,
     'A property that held is evidence at the points drawn, not a proof.',
   ].filter((line): line is string => line !== null);
@@ -79,18 +91,32 @@ export function CheckedScopeNote({ scopes, pairsNotChecked = 0, properties, subj
         </View>
       </View>
       <Text style={styles.verdict}>
-        A green {subject} is evidence for these {plural(points, 'point')} under these conventions only — not a certificate that the library is right everywhere.
+        A green {subject} is evidence for these {plural(points, 'point')} under these conventions only — not a
+        certificate that the library is right everywhere.
       </Text>
     </View>
   );
 }
 
 const styles = StyleSheet.create({
-  box: { borderLeftWidth: 3, borderLeftColor: theme.color.focus, backgroundColor: theme.color.panel, borderRadius: theme.radius, padding: theme.space(4), gap: theme.space(3) },
+  box: {
+    borderLeftWidth: 3,
+    borderLeftColor: theme.color.focus,
+    backgroundColor: theme.color.panel,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+    gap: theme.space(3),
+  },
   title: { fontFamily: theme.font.bold, fontSize: theme.size.body, color: theme.color.ink },
   columns: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(4) },
   column: { flexGrow: 1, flexBasis: 300, gap: theme.space(1) },
-  head: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkFaint, textTransform: 'uppercase', letterSpacing: 0.8 },
+  head: {
+    fontFamily: theme.font.medium,
+    fontSize: theme.size.small,
+    color: theme.color.inkFaint,
+    textTransform: 'uppercase',
+    letterSpacing: 0.8,
+  },
   line: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
   verdict: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.ink, lineHeight: 20 },
 });

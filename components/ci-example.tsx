@@ -5,7 +5,8 @@ import { theme } from '../constants/theme';
 import type { Role } from '../shared/roles';
 
 /** The server's address as this browser reaches it; a placeholder elsewhere. */
-const origin = Platform.OS === 'web' && typeof window !== 'undefined' ? window.location.origin : 'https://sheetkeeper.example';
+const origin =
+  Platform.OS === 'web' && typeof window !== 'undefined' ? window.location.origin : 'https://sheetkeeper.example';
 
 /**
  * How to use a token in CI: start a plan's run through the API with the `Authorization: Bearer`
@@ -39,13 +40,21 @@ export function CiExample({ role }: { role: Role }) {
   return (
     <View style={styles.box} testID="ci-example">
       <Text style={styles.text}>
-        Keep the token in your CI&apos;s secret store as <Text style={styles.inline}>SHEETKEEPER_TOKEN</Text>. It acts as you, with your role
+        Keep the token in your CI&apos;s secret store as <Text style={styles.inline}>SHEETKEEPER_TOKEN</Text>. It acts
+        as you, with your role
         {mayStart ? '.' : ': starting runs needs the maintainer or admin role, so ask one of them for a plan run.'}
       </Text>
       {plans.data && plans.data.length > 1 ? (
         <View style={styles.chips} accessibilityRole="radiogroup" accessibilityLabel="Plan in the example">
           {plans.data.map((p) => (
-            <Pressable key={p.id} accessibilityRole="radio" aria-checked={p.id === plan?.id} accessibilityLabel={`Use plan ${p.name} in the example`} onPress={() => setChosen(p.id)} style={[styles.chip, p.id === plan?.id && styles.chipOn]}>
+            <Pressable
+              key={p.id}
+              accessibilityRole="radio"
+              aria-checked={p.id === plan?.id}
+              accessibilityLabel={`Use plan ${p.name} in the example`}
+              onPress={() => setChosen(p.id)}
+              style={[styles.chip, p.id === plan?.id && styles.chipOn]}
+            >
               <Text style={[styles.chipText, p.id === plan?.id && styles.chipTextOn]}>
                 {p.id === plan?.id ? '✓ ' : ''}
                 {p.name}
@@ -69,9 +78,26 @@ const styles = StyleSheet.create({
   text: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
   inline: { fontFamily: theme.font.mono, color: theme.color.ink },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
-  chip: { minHeight: 44, justifyContent: 'center', paddingHorizontal: theme.space(3), borderRadius: theme.radius, borderWidth: 1, borderColor: theme.color.rule },
+  chip: {
+    minHeight: 44,
+    justifyContent: 'center',
+    paddingHorizontal: theme.space(3),
+    borderRadius: theme.radius,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+  },
   chipOn: { backgroundColor: theme.color.accentSoft, borderColor: theme.color.accent },
   chipText: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink },
   chipTextOn: { fontFamily: theme.font.medium, color: theme.color.accent },
-  code: { fontFamily: theme.font.mono, fontSize: 12, lineHeight: 18, color: theme.color.navInk, backgroundColor: theme.color.nav, padding: theme.space(3), borderRadius: theme.radius, whiteSpace: 'pre-wrap', wordBreak: 'break-word' } as object,
+  code: {
+    fontFamily: theme.font.mono,
+    fontSize: 12,
+    lineHeight: 18,
+    color: theme.color.navInk,
+    backgroundColor: theme.color.nav,
+    padding: theme.space(3),
+    borderRadius: theme.radius,
+    whiteSpace: 'pre-wrap',
+    wordBreak: 'break-word',
+  } as object,
 });

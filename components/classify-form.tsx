@@ -23,7 +23,12 @@ const SCOPES: { value: ClassifyBody['scope']; text: string }[] = [
   { value: 'diagnosis', text: 'this diagnosis in the suite' },
 ];
 
-const FIELD_NAMES: Record<Field, string> = { classification: 'Verdict', scope: 'Covers', reason: 'Reason', expiresAt: 'Expiry' };
+const FIELD_NAMES: Record<Field, string> = {
+  classification: 'Verdict',
+  scope: 'Covers',
+  reason: 'Reason',
+  expiresAt: 'Expiry',
+};
 
 /** A typed day becomes midnight UTC; anything else goes to the schema as typed, so its rule is shown. */
 const expiryOf = (text: string): string | undefined => {
@@ -38,9 +43,19 @@ const expiryOf = (text: string): string | undefined => {
  * deviation (the server enforces the same). Checked with the server's schema before sending;
  * the server's rules come back beside the same fields, and nothing typed is lost on a refusal.
  */
-export function ClassifyForm({ failureId, role, hasDiagnosis }: { failureId: string; role: Role; hasDiagnosis: boolean }) {
+export function ClassifyForm({
+  failureId,
+  role,
+  hasDiagnosis,
+}: {
+  failureId: string;
+  role: Role;
+  hasDiagnosis: boolean;
+}) {
   const maintainer = role === 'maintainer';
-  const [classification, setClassification] = useState<ClassifyBody['classification'] | undefined>(maintainer ? 'accepted' : undefined);
+  const [classification, setClassification] = useState<ClassifyBody['classification'] | undefined>(
+    maintainer ? 'accepted' : undefined,
+  );
   const [scope, setScope] = useState<ClassifyBody['scope']>('point');
   const [reason, setReason] = useState('');
   const [expires, setExpires] = useState('');
@@ -64,7 +79,9 @@ export function ClassifyForm({ failureId, role, hasDiagnosis }: { failureId: str
     classify.mutate(parsed.data, {
       onSuccess: (res) => {
         const d = res.deviation;
-        setDone(`✓ Recorded: ${VERDICTS.find((v) => v.value === d.classification)?.text} for ${SCOPES.find((s) => s.value === d.scope)?.text}${d.expiresAt ? `, until ${d.expiresAt.slice(0, 10)}` : ''}.`);
+        setDone(
+          `✓ Recorded: ${VERDICTS.find((v) => v.value === d.classification)?.text} for ${SCOPES.find((s) => s.value === d.scope)?.text}${d.expiresAt ? `, until ${d.expiresAt.slice(0, 10)}` : ''}.`,
+        );
         setReason('');
         setExpires('');
       },
@@ -78,7 +95,10 @@ export function ClassifyForm({ failureId, role, hasDiagnosis }: { failureId: str
     });
   };
 
-  const formError = classify.error && !(classify.error instanceof ApiRequestError && classify.error.body.kind === 'invalid-input') ? classify.error.message : null;
+  const formError =
+    classify.error && !(classify.error instanceof ApiRequestError && classify.error.body.kind === 'invalid-input')
+      ? classify.error.message
+      : null;
   const fieldError = (f: Field) =>
     errors[f] ? (
       <Text accessibilityRole="alert" style={styles.error}>
@@ -88,7 +108,12 @@ export function ClassifyForm({ failureId, role, hasDiagnosis }: { failureId: str
 
   return (
     <View style={styles.form}>
-      {maintainer ? <Text style={styles.note}>As a maintainer you may accept a deviation your library lives with; calling a failure a bug or a convention difference is a reviewer&apos;s call.</Text> : null}
+      {maintainer ? (
+        <Text style={styles.note}>
+          As a maintainer you may accept a deviation your library lives with; calling a failure a bug or a convention
+          difference is a reviewer&apos;s call.
+        </Text>
+      ) : null}
       <View>
         <ChipGroup
           label="Verdict"
@@ -102,7 +127,12 @@ export function ClassifyForm({ failureId, role, hasDiagnosis }: { failureId: str
         {fieldError('classification')}
       </View>
       <View>
-        <ChipGroup label="Covers" value={scope} onChange={(v) => setScope(v ?? 'point')} options={hasDiagnosis ? SCOPES : SCOPES.filter((s) => s.value !== 'diagnosis')} />
+        <ChipGroup
+          label="Covers"
+          value={scope}
+          onChange={(v) => setScope(v ?? 'point')}
+          options={hasDiagnosis ? SCOPES : SCOPES.filter((s) => s.value !== 'diagnosis')}
+        />
         {fieldError('scope')}
       </View>
       <View style={styles.field}>
@@ -123,7 +153,9 @@ export function ClassifyForm({ failureId, role, hasDiagnosis }: { failureId: str
       </View>
       <View>
         <TextField
-          label={classification === 'accepted' ? 'Expires on (YYYY-MM-DD, required)' : 'Expires on (YYYY-MM-DD, optional)'}
+          label={
+            classification === 'accepted' ? 'Expires on (YYYY-MM-DD, required)' : 'Expires on (YYYY-MM-DD, optional)'
+          }
           value={expires}
           onChangeText={(t) => {
             setExpires(t);
@@ -143,7 +175,11 @@ export function ClassifyForm({ failureId, role, hasDiagnosis }: { failureId: str
           {done}
         </Text>
       ) : null}
-      <ActionButton label={classification === 'accepted' ? 'Accept deviation' : 'Record verdict'} busy={classify.isPending} onPress={submit} />
+      <ActionButton
+        label={classification === 'accepted' ? 'Accept deviation' : 'Record verdict'}
+        busy={classify.isPending}
+        onPress={submit}
+      />
     </View>
   );
 }
@@ -166,7 +202,24 @@ const styles = StyleSheet.create({
     textAlignVertical: 'top',
   },
   inputError: { borderColor: theme.color.danger, borderWidth: 2 },
-  error: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.danger, marginTop: theme.space(1) },
-  formError: { fontFamily: theme.font.medium, color: theme.color.danger, backgroundColor: theme.color.dangerSoft, padding: theme.space(3), borderRadius: theme.radius },
-  done: { fontFamily: theme.font.medium, color: theme.color.accent, backgroundColor: theme.color.accentSoft, padding: theme.space(3), borderRadius: theme.radius },
+  error: {
+    fontFamily: theme.font.regular,
+    fontSize: theme.size.small,
+    color: theme.color.danger,
+    marginTop: theme.space(1),
+  },
+  formError: {
+    fontFamily: theme.font.medium,
+    color: theme.color.danger,
+    backgroundColor: theme.color.dangerSoft,
+    padding: theme.space(3),
+    borderRadius: theme.radius,
+  },
+  done: {
+    fontFamily: theme.font.medium,
+    color: theme.color.accent,
+    backgroundColor: theme.color.accentSoft,
+    padding: theme.space(3),
+    borderRadius: theme.radius,
+  },
 });

@@ -10,11 +10,25 @@ export interface ColumnOption<T extends string> {
 }
 
 /** Which columns a table shows: a button that opens a list of checkboxes. */
-export function ColumnChooser<T extends string>({ options, shown, onChange }: { options: ColumnOption<T>[]; shown: T[]; onChange: (next: T[]) => void }) {
+export function ColumnChooser<T extends string>({
+  options,
+  shown,
+  onChange,
+}: {
+  options: ColumnOption<T>[];
+  shown: T[];
+  onChange: (next: T[]) => void;
+}) {
   const [open, setOpen] = useState(false);
   return (
     <View style={styles.root}>
-      <Pressable accessibilityRole="button" accessibilityLabel="Choose columns" aria-expanded={open} onPress={() => setOpen(!open)} style={styles.toggle}>
+      <Pressable
+        accessibilityRole="button"
+        accessibilityLabel="Choose columns"
+        aria-expanded={open}
+        onPress={() => setOpen(!open)}
+        style={styles.toggle}
+      >
         <Text style={styles.toggleText}>
           {open ? '↑' : '↓'} Columns ({shown.length} of {options.length})
         </Text>
@@ -50,11 +64,46 @@ export function ColumnChooser<T extends string>({ options, shown, onChange }: { 
 
 const styles = StyleSheet.create({
   root: { gap: theme.space(2) },
-  toggle: { minHeight: theme.touch, justifyContent: 'center', paddingHorizontal: theme.space(4), borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, alignSelf: 'flex-start' },
+  toggle: {
+    minHeight: theme.touch,
+    justifyContent: 'center',
+    paddingHorizontal: theme.space(4),
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    alignSelf: 'flex-start',
+  },
   toggleText: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.ink },
-  list: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(1), padding: theme.space(2), borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, backgroundColor: theme.color.panel },
-  item: { minHeight: 44, flexDirection: 'row', alignItems: 'center', gap: theme.space(2), paddingHorizontal: theme.space(2), minWidth: 150 },
-  box: { width: 22, height: 22, textAlign: 'center', lineHeight: 20, borderWidth: 1, borderColor: theme.color.inkSoft, borderRadius: 3, fontFamily: theme.font.bold, fontSize: 14, color: theme.color.accentInk },
+  list: {
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    gap: theme.space(1),
+    padding: theme.space(2),
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    backgroundColor: theme.color.panel,
+  },
+  item: {
+    minHeight: 44,
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: theme.space(2),
+    paddingHorizontal: theme.space(2),
+    minWidth: 150,
+  },
+  box: {
+    width: 22,
+    height: 22,
+    textAlign: 'center',
+    lineHeight: 20,
+    borderWidth: 1,
+    borderColor: theme.color.inkSoft,
+    borderRadius: 3,
+    fontFamily: theme.font.bold,
+    fontSize: 14,
+    color: theme.color.accentInk,
+  },
   boxOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
   itemText: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink },
 });

@@ -19,10 +19,24 @@ export function ComplexInput({ label, value, onChange, rules }: Props) {
       <Text style={styles.label}>{label}</Text>
       <View style={styles.row}>
         <View style={styles.part}>
-          <FormTextInput label={`${label}, real part`} visibleLabel="re" value={value.re} onChangeText={(re) => onChange({ ...value, re })} rules={rules.re} mono />
+          <FormTextInput
+            label={`${label}, real part`}
+            visibleLabel="re"
+            value={value.re}
+            onChangeText={(re) => onChange({ ...value, re })}
+            rules={rules.re}
+            mono
+          />
         </View>
         <View style={styles.part}>
-          <FormTextInput label={`${label}, imaginary part`} visibleLabel="im" value={value.im} onChangeText={(im) => onChange({ ...value, im })} rules={rules.im} mono />
+          <FormTextInput
+            label={`${label}, imaginary part`}
+            visibleLabel="im"
+            value={value.im}
+            onChangeText={(im) => onChange({ ...value, im })}
+            rules={rules.im}
+            mono
+          />
         </View>
       </View>
       <RuleLines rules={rules.whole.map((r) => `${label} ${r}`)} />

@@ -19,7 +19,16 @@ interface Props {
 /** A destructive action in two steps on the spot, so one stray tap never deletes or revokes. */
 export function ConfirmAction({ label, accessibilityLabel, question, confirmLabel, onConfirm, busy = false }: Props) {
   const [asking, setAsking] = useState(false);
-  if (!asking) return <ActionButton label={label} accessibilityLabel={accessibilityLabel} tone="quiet" onPress={() => setAsking(true)} busy={busy} />;
+  if (!asking)
+    return (
+      <ActionButton
+        label={label}
+        accessibilityLabel={accessibilityLabel}
+        tone="quiet"
+        onPress={() => setAsking(true)}
+        busy={busy}
+      />
+    );
   return (
     <View style={styles.box} accessibilityLiveRegion="polite">
       <Text style={styles.question}>{question}</Text>
@@ -38,7 +47,12 @@ export function ConfirmAction({ label, accessibilityLabel, question, confirmLabe
 }
 
 const styles = StyleSheet.create({
-  box: { gap: theme.space(2), padding: theme.space(3), borderRadius: theme.radius, backgroundColor: theme.color.dangerSoft },
+  box: {
+    gap: theme.space(2),
+    padding: theme.space(3),
+    borderRadius: theme.radius,
+    backgroundColor: theme.color.dangerSoft,
+  },
   question: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.danger },
   buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
 });

@@ -19,13 +19,15 @@ export const CONVENTION_STYLES: Record<Behaviour, { glyph: string; word: string;
     glyph: '↺',
     word: 'counter-clockwise',
     color: theme.color.accent,
-    meaning: 'on the cut, both zero signs gave the limit from the side counter-clockwise continuity closes; the zero sign was ignored',
+    meaning:
+      'on the cut, both zero signs gave the limit from the side counter-clockwise continuity closes; the zero sign was ignored',
   },
   neither: {
     glyph: '×',
     word: 'neither',
     color: theme.color.danger,
-    meaning: 'the values on the cut follow neither convention (sides swapped, the open side closed, the cut elsewhere, or no value)',
+    meaning:
+      'the values on the cut follow neither convention (sides swapped, the open side closed, the cut elsewhere, or no value)',
   },
   inconsistent: {
     glyph: '≠',

@@ -4,7 +4,12 @@ import { theme } from '../constants/theme';
 /** A way back up from a detail screen ("← Libraries"), a full 44 px target. */
 export function CrumbLink({ label, onPress }: { label: string; onPress: () => void }) {
   return (
-    <Pressable accessibilityRole="link" accessibilityLabel={`Back to ${label}`} onPress={onPress} style={({ pressed }) => [styles.link, pressed && styles.pressed]}>
+    <Pressable
+      accessibilityRole="link"
+      accessibilityLabel={`Back to ${label}`}
+      onPress={onPress}
+      style={({ pressed }) => [styles.link, pressed && styles.pressed]}
+    >
       <Text style={styles.text}>← {label}</Text>
     </Pressable>
   );

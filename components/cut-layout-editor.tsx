@@ -12,28 +12,69 @@ import { ToggleChip } from './toggle-chip';
  * to infinity. The layout's own rule (an uncut branch point, a cut-free loop whose monodromy
  * is not 1) is shown above the cuts, naming the point or the loop.
  */
-export function CutLayoutEditor({ cuts, onChange, rules }: { cuts: CutDraft[]; onChange: (cuts: CutDraft[]) => void; rules: FieldRules }) {
+export function CutLayoutEditor({
+  cuts,
+  onChange,
+  rules,
+}: {
+  cuts: CutDraft[];
+  onChange: (cuts: CutDraft[]) => void;
+  rules: FieldRules;
+}) {
   const set = (i: number, cut: CutDraft) => onChange(cuts.map((c, j) => (j === i ? cut : c)));
   return (
     <View style={styles.box}>
       <Text style={styles.heading}>Cut layout</Text>
-      <Text style={styles.lead}>Each cut is a polyline; its last segment can continue to infinity. Every branch point must lie on a cut, and a loop that crosses no cut must come back to the same value.</Text>
+      <Text style={styles.lead}>
+        Each cut is a polyline; its last segment can continue to infinity. Every branch point must lie on a cut, and a
+        loop that crosses no cut must come back to the same value.
+      </Text>
       <RuleLines rules={rules('branch.cuts').map((r) => `Cut layout: ${r}`)} testID="cut-layout-rules" />
       {cuts.length === 0 ? <Text style={styles.empty}>No cuts yet.</Text> : null}
       {cuts.map((cut, i) => (
         <View key={i} style={styles.cut} accessibilityLabel={`Cut ${i + 1}`}>
           <View style={styles.cutHead}>
             <Text style={styles.cutTitle}>Cut {i + 1}</Text>
-            <SmallButton label="Remove cut" accessibilityLabel={`Remove cut ${i + 1}`} onPress={() => onChange(cuts.filter((_, j) => j !== i))} danger />
+            <SmallButton
+              label="Remove cut"
+              accessibilityLabel={`Remove cut ${i + 1}`}
+              onPress={() => onChange(cuts.filter((_, j) => j !== i))}
+              danger
+            />
           </View>
-          <RuleLines rules={rules(`branch.cuts.${i}`).concat(rules(`branch.cuts.${i}.points`)).map((r) => `Cut ${i + 1} ${r}`)} />
-          <PointListEditor label={`Cut ${i + 1} point`} points={cut.points} onChange={(points) => set(i, { ...cut, points })} rules={rules} field={`branch.cuts.${i}.points`} />
-          <ToggleChip label={`Cut ${i + 1} continues to infinity`} value={cut.toInfinity} onChange={(toInfinity) => set(i, { ...cut, toInfinity })} />
+          <RuleLines
+            rules={rules(`branch.cuts.${i}`)
+              .concat(rules(`branch.cuts.${i}.points`))
+              .map((r) => `Cut ${i + 1} ${r}`)}
+          />
+          <PointListEditor
+            label={`Cut ${i + 1} point`}
+            points={cut.points}
+            onChange={(points) => set(i, { ...cut, points })}
+            rules={rules}
+            field={`branch.cuts.${i}.points`}
+          />
+          <ToggleChip
+            label={`Cut ${i + 1} continues to infinity`}
+            value={cut.toInfinity}
+            onChange={(toInfinity) => set(i, { ...cut, toInfinity })}
+          />
         </View>
       ))}
       <SmallButton
         label="+ Add a cut"
-        onPress={() => onChange([...cuts, { points: [{ re: '0', im: '0' }, { re: '-1', im: '0' }], toInfinity: true }])}
+        onPress={() =>
+          onChange([
+            ...cuts,
+            {
+              points: [
+                { re: '0', im: '0' },
+                { re: '-1', im: '0' },
+              ],
+              toInfinity: true,
+            },
+          ])
+        }
       />
     </View>
   );

@@ -20,7 +20,10 @@ export function CutMapPicture({ cutMap }: { cutMap: CutMap }) {
   const [width, setWidth] = useState(0);
   const [min, max] = [point(cutMap.box.min), point(cutMap.box.max)];
   // The picture takes the box's own proportions, so nothing outside the sampled box is shown as if it had been looked at.
-  const height = width > 0 ? Math.min(800, Math.max(200, Math.round(((width - 2 * PAD) * (max.im - min.im)) / (max.re - min.re) + 2 * PAD))) : 0;
+  const height =
+    width > 0
+      ? Math.min(800, Math.max(200, Math.round(((width - 2 * PAD) * (max.im - min.im)) / (max.re - min.re) + 2 * PAD)))
+      : 0;
   const unexpected = cutMap.observed.filter((o) => !o.onExpectedCut);
   const unseen = cutMap.expected.filter((e) => !e.seen);
   const label =
@@ -52,20 +55,29 @@ export function CutMapPicture({ cutMap }: { cutMap: CutMap }) {
       </View>
       <View style={styles.list}>
         <Text style={styles.head}>Expected cuts in this box</Text>
-        {cutMap.expected.length === 0 ? <Text style={styles.line}>None: the reference has no cut of {cutMap.function} inside this box.</Text> : null}
+        {cutMap.expected.length === 0 ? (
+          <Text style={styles.line}>None: the reference has no cut of {cutMap.function} inside this box.</Text>
+        ) : null}
         {cutMap.expected.map((e) => (
           <Text key={`${e.label} ${e.from.re} ${e.from.im}`} style={styles.line}>
             {e.seen ? '✓' : '×'} {e.label} from {wireNumber(e.from)} to {wireNumber(e.to)}:{' '}
-            {e.coverage === null ? 'crosses no grid line inside the box, so it could not be seen or missed' : `a jump on ${percent(e.coverage)} of the grid lines crossing it — ${e.seen ? 'seen' : 'not seen'}`}
+            {e.coverage === null
+              ? 'crosses no grid line inside the box, so it could not be seen or missed'
+              : `a jump on ${percent(e.coverage)} of the grid lines crossing it — ${e.seen ? 'seen' : 'not seen'}`}
           </Text>
         ))}
         {unexpected.length ? <Text style={styles.head}>Discontinuities off the expected cuts</Text> : null}
         {unexpected.map((o, i) => (
           <Text key={i} style={styles.line}>
-            × {o.points.length} crossing(s) from {wireNumber(o.points[0])} to {wireNumber(o.points[o.points.length - 1])}
+            × {o.points.length} crossing(s) from {wireNumber(o.points[0])} to{' '}
+            {wireNumber(o.points[o.points.length - 1])}
           </Text>
         ))}
-        {cutMap.notFinite > 0 ? <Text style={styles.line}>{cutMap.notFinite} grid point(s) gave no finite value and took part in no comparison.</Text> : null}
+        {cutMap.notFinite > 0 ? (
+          <Text style={styles.line}>
+            {cutMap.notFinite} grid point(s) gave no finite value and took part in no comparison.
+          </Text>
+        ) : null}
       </View>
       <Text style={styles.statement}>{cutMap.statement}</Text>
     </View>
@@ -78,7 +90,22 @@ const styles = StyleSheet.create({
   verdict: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accent, lineHeight: 24 },
   differs: { color: theme.color.danger },
   list: { gap: theme.space(1) },
-  head: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkFaint, textTransform: 'uppercase', letterSpacing: 0.8, marginTop: theme.space(2) },
+  head: {
+    fontFamily: theme.font.medium,
+    fontSize: theme.size.small,
+    color: theme.color.inkFaint,
+    textTransform: 'uppercase',
+    letterSpacing: 0.8,
+    marginTop: theme.space(2),
+  },
   line: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink, lineHeight: 20 },
-  statement: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20, borderLeftWidth: 3, borderLeftColor: theme.color.focus, paddingLeft: theme.space(3) },
+  statement: {
+    fontFamily: theme.font.regular,
+    fontSize: theme.size.small,
+    color: theme.color.inkSoft,
+    lineHeight: 20,
+    borderLeftWidth: 3,
+    borderLeftColor: theme.color.focus,
+    paddingLeft: theme.space(3),
+  },
 });

@@ -43,12 +43,19 @@ export function CutMapView({ name, fn, onChooseFn }: { name: string; fn: string;
   const fingerprint = useFingerprint(name);
   const functions = fingerprint.data ? [...new Set(fingerprint.data.fingerprint.cuts.map((c) => c.function))] : [fn];
 
-  const serverErrors = map.error instanceof ApiRequestError && map.error.body.kind === 'invalid-input' ? errorsOf(map.error.body.issues) : {};
+  const serverErrors =
+    map.error instanceof ApiRequestError && map.error.body.kind === 'invalid-input'
+      ? errorsOf(map.error.body.issues)
+      : {};
   const errors: Errors = { ...serverErrors, ...local };
   const submit = () => {
     const checked = cutMapQuery.safeParse({ fn, box, grid });
     if (!checked.success) {
-      setLocal(errorsOf(fieldIssues(checked.error).map((i) => ({ field: i.field === '(body)' ? 'box' : i.field, rule: i.rule }))));
+      setLocal(
+        errorsOf(
+          fieldIssues(checked.error).map((i) => ({ field: i.field === '(body)' ? 'box' : i.field, rule: i.rule })),
+        ),
+      );
       return;
     }
     setLocal({});
@@ -60,7 +67,14 @@ export function CutMapView({ name, fn, onChooseFn }: { name: string; fn: string;
       <Text style={styles.formHead}>Function</Text>
       <View style={styles.chips} accessibilityRole="radiogroup" accessibilityLabel="Function to map">
         {functions.map((f) => (
-          <Pressable key={f} accessibilityRole="radio" accessibilityLabel={`Map ${f}`} aria-checked={f === fn} onPress={() => onChooseFn(f)} style={[styles.chip, f === fn && styles.chipOn]}>
+          <Pressable
+            key={f}
+            accessibilityRole="radio"
+            accessibilityLabel={`Map ${f}`}
+            aria-checked={f === fn}
+            onPress={() => onChooseFn(f)}
+            style={[styles.chip, f === fn && styles.chipOn]}
+          >
             <Text style={[styles.chipText, f === fn && styles.chipTextOn]}>
               {f === fn ? '✓ ' : ''}
               {f}
@@ -100,7 +114,12 @@ export function CutMapView({ name, fn, onChooseFn }: { name: string; fn: string;
   let result;
   if (map.isPending) result = <QueryState state="loading" />;
   else if (map.isError && !map.data) {
-    result = serverErrors.fn || serverErrors.box || serverErrors.grid ? <QueryState state="error" message="The server refused this request: see the fields." /> : <QueryState state="error" message={map.error.message} onRetry={() => void map.refetch()} />;
+    result =
+      serverErrors.fn || serverErrors.box || serverErrors.grid ? (
+        <QueryState state="error" message="The server refused this request: see the fields." />
+      ) : (
+        <QueryState state="error" message={map.error.message} onRetry={() => void map.refetch()} />
+      );
   } else if (map.data) {
     result = (
       <View style={styles.result}>
@@ -138,10 +157,29 @@ const styles = StyleSheet.create({
   main: { flex: 2, minWidth: 0 },
   side: { flex: 1, minWidth: 280 },
   stack: { gap: theme.space(5) },
-  form: { gap: theme.space(3), backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, padding: theme.space(4) },
-  formHead: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft, letterSpacing: 0.3 },
+  form: {
+    gap: theme.space(3),
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+  },
+  formHead: {
+    fontFamily: theme.font.medium,
+    fontSize: theme.size.small,
+    color: theme.color.inkSoft,
+    letterSpacing: 0.3,
+  },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
-  chip: { minHeight: 44, justifyContent: 'center', paddingHorizontal: theme.space(3), borderRadius: theme.radius, borderWidth: 1, borderColor: theme.color.rule },
+  chip: {
+    minHeight: 44,
+    justifyContent: 'center',
+    paddingHorizontal: theme.space(3),
+    borderRadius: theme.radius,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+  },
   chipOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
   chipText: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.ink },
   chipTextOn: { color: theme.color.accentInk },

@@ -6,9 +6,16 @@ import { formatUlps } from '../shared/format-ulps';
 const fmtT = (t: number | null) => (t === null ? 'nowhere' : `t ≈ ${Number(t.toPrecision(3))}`);
 
 /** The tone of a failure (its diagnosis, or error/skipped) and the diagnosis's own numbers in words. */
-export function describeFailure(f: Pick<FailureView, 'diagnosis' | 'outcomeKind' | 'ulps'>): { tone: DiagnosisTone; detail: string | undefined } {
+export function describeFailure(f: Pick<FailureView, 'diagnosis' | 'outcomeKind' | 'ulps'>): {
+  tone: DiagnosisTone;
+  detail: string | undefined;
+} {
   const d = f.diagnosis;
-  if (!d) return { tone: f.outcomeKind === 'skipped' ? 'skipped' : f.outcomeKind === 'error' ? 'error' : 'unexplained', detail: undefined };
+  if (!d)
+    return {
+      tone: f.outcomeKind === 'skipped' ? 'skipped' : f.outcomeKind === 'error' ? 'error' : 'unexplained',
+      detail: undefined,
+    };
   switch (d.kind) {
     case 'other-sheet':
       return { tone: d.kind, detail: `k = ${d.k}` };
@@ -17,7 +24,10 @@ export function describeFailure(f: Pick<FailureView, 'diagnosis' | 'outcomeKind'
     case 'misplaced-cut':
       return { tone: d.kind, detail: `library jumps ${fmtT(d.libraryJumpAt)}, expected ${fmtT(d.expectedJumpAt)}` };
     case 'inaccurate':
-      return { tone: d.kind, detail: [`${formatUlps(d.ulps)} ulps`, describeWorstPart(d, 'short')].filter(Boolean).join(' ') };
+      return {
+        tone: d.kind,
+        detail: [`${formatUlps(d.ulps)} ulps`, describeWorstPart(d, 'short')].filter(Boolean).join(' '),
+      };
     default:
       return { tone: d.kind, detail: undefined };
   }

@@ -26,13 +26,25 @@ export function describeMatrixCell(cell: RunMatrixCell): MatrixCellWords {
   const pair = `${cell.suite} on ${cell.target}`;
   if (cell.status === 'queued' || cell.status === 'running') {
     const word = cell.status === 'queued' ? 'queued' : 'running';
-    return { tone: 'live', headline: `${cell.status === 'queued' ? '…' : '↻'} ${word}`, details: [], label: `${pair}: ${word}`, hasRows: false };
+    return {
+      tone: 'live',
+      headline: `${cell.status === 'queued' ? '…' : '↻'} ${word}`,
+      details: [],
+      label: `${pair}: ${word}`,
+      hasRows: false,
+    };
   }
   const counts = cell.counts ?? { pass: 0, fail: 0, error: 0, skipped: 0 };
   const judged = counts.pass + counts.fail;
   const hasRows = counts.fail + counts.error + counts.skipped > 0;
   if (cell.status === 'cancelled' && !cell.counts) {
-    return { tone: 'neutral', headline: '× cancelled', details: ['nothing was checked'], label: `${pair}: cancelled before it ran, nothing was checked`, hasRows: false };
+    return {
+      tone: 'neutral',
+      headline: '× cancelled',
+      details: ['nothing was checked'],
+      label: `${pair}: cancelled before it ran, nothing was checked`,
+      hasRows: false,
+    };
   }
   const diagnoses = DIAGNOSIS_KINDS.map((kind) => [kind, cell.byDiagnosis?.[kind] ?? 0] as [DiagnosisKind, number])
     .filter(([, count]) => count > 0)
@@ -43,14 +55,19 @@ export function describeMatrixCell(cell: RunMatrixCell): MatrixCellWords {
   let tone: Tone;
   if (cell.outcome === 'error' || (cell.status === 'done' && judged === 0)) {
     tone = 'error';
-    headline = counts.error > 0 ? `${OUTCOME_GLYPH.error} ${n(counts.error)} error${counts.error === 1 ? '' : 's'}` : `${OUTCOME_GLYPH.error} error`;
+    headline =
+      counts.error > 0
+        ? `${OUTCOME_GLYPH.error} ${n(counts.error)} error${counts.error === 1 ? '' : 's'}`
+        : `${OUTCOME_GLYPH.error} error`;
     said.push(counts.error > 0 ? `${n(counts.error)} points in error` : 'error');
     if (judged === 0) {
       // The shard's own error may say it already ("nothing was checked: every point was skipped …").
       if (!cell.errors[0]?.toLowerCase().startsWith('nothing was checked')) details.push('nothing was checked');
       said.push('nothing was checked');
     } else {
-      details.push(`${OUTCOME_GLYPH.pass} ${n(counts.pass)} passed${counts.fail ? ` · ${OUTCOME_GLYPH.fail} ${n(counts.fail)} failed` : ''}`);
+      details.push(
+        `${OUTCOME_GLYPH.pass} ${n(counts.pass)} passed${counts.fail ? ` · ${OUTCOME_GLYPH.fail} ${n(counts.fail)} failed` : ''}`,
+      );
       said.push(`${n(counts.pass)} passed`, ...(counts.fail ? [`${n(counts.fail)} failed`] : []));
     }
   } else if (counts.fail > 0) {
@@ -80,5 +97,11 @@ export function describeMatrixCell(cell: RunMatrixCell): MatrixCellWords {
   }
   const firstError = cell.errors[0];
   if (firstError) details.push(firstError);
-  return { tone, headline, details, label: `${pair}: ${said.join(', ')}${firstError ? `. ${firstError}` : ''}`, hasRows };
+  return {
+    tone,
+    headline,
+    details,
+    label: `${pair}: ${said.join(', ')}${firstError ? `. ${firstError}` : ''}`,
+    hasRows,
+  };
 }

@@ -32,6 +32,7 @@ export function diffSuiteBodies(before: unknown, after: unknown): SuiteBodyChang
     if (old === undefined) changes.push({ field, change: 'added', before: null, after: value });
     else if (old !== value) changes.push({ field, change: 'changed', before: old, after: value });
   }
-  for (const [field, value] of a) if (field !== 'version' && !b.has(field)) changes.push({ field, change: 'removed', before: value, after: null });
+  for (const [field, value] of a)
+    if (field !== 'version' && !b.has(field)) changes.push({ field, change: 'removed', before: value, after: null });
   return changes;
 }

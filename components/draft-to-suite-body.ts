@@ -23,7 +23,16 @@ function sampling(p: PathDraft) {
 function pathBody(p: PathDraft): Record<string, unknown> {
   switch (p.kind) {
     case 'circle':
-      return { kind: 'circle', name: p.name, center: p.center, radius: p.radius, start_angle: p.startAngle, turns: p.turns, direction: p.direction, ...sampling(p) };
+      return {
+        kind: 'circle',
+        name: p.name,
+        center: p.center,
+        radius: p.radius,
+        start_angle: p.startAngle,
+        turns: p.turns,
+        direction: p.direction,
+        ...sampling(p),
+      };
     case 'segment':
       return { kind: 'segment', name: p.name, from: p.from, to: p.to, ...sampling(p) };
     case 'polyline':
@@ -32,7 +41,10 @@ function pathBody(p: PathDraft): Record<string, unknown> {
       return {
         kind: 'straddle',
         name: p.name,
-        cut: p.cutKind === 'segment' ? { kind: 'segment', from: p.cutFrom, to: p.cutTo } : { kind: 'ray', from: p.cutFrom, through: p.cutTo },
+        cut:
+          p.cutKind === 'segment'
+            ? { kind: 'segment', from: p.cutFrom, to: p.cutTo }
+            : { kind: 'ray', from: p.cutFrom, through: p.cutTo },
         along: list(p.along),
         ...(p.offsets.trim() ? { offsets: list(p.offsets) } : {}),
       };
@@ -47,8 +59,18 @@ function tolerance(t: ToleranceDraft) {
 
 function propertyBody(p: PropertyDraft): Record<string, unknown> {
   const region =
-    p.region === 'disc' ? { kind: 'disc', center: p.center, radius: p.radius } : p.region === 'box' ? { kind: 'box', min: p.min, max: p.max } : { kind: 'near-cuts', distance: p.distance };
-  return { law: p.law, region, ...(p.law === 'root-power' ? { power: num(p.power) } : {}), runs: num(p.runs), seed: num(p.seed) };
+    p.region === 'disc'
+      ? { kind: 'disc', center: p.center, radius: p.radius }
+      : p.region === 'box'
+        ? { kind: 'box', min: p.min, max: p.max }
+        : { kind: 'near-cuts', distance: p.distance };
+  return {
+    law: p.law,
+    region,
+    ...(p.law === 'root-power' ? { power: num(p.power) } : {}),
+    runs: num(p.runs),
+    seed: num(p.seed),
+  };
 }
 
 /**

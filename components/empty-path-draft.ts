@@ -14,7 +14,10 @@ export function emptyPathDraft(name: string): PathDraft {
     direction: 'ccw',
     from: { re: '-1', im: '0' },
     to: { re: '1', im: '0' },
-    points: [{ re: '1', im: '0' }, { re: '0', im: '1' }],
+    points: [
+      { re: '1', im: '0' },
+      { re: '0', im: '1' },
+    ],
     sampling: 'samples',
     samples: '65',
     at: '',

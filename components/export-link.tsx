@@ -25,8 +25,26 @@ export function ExportLink({ href, label, disabledReason }: { href: string; labe
 }
 
 const styles = StyleSheet.create({
-  link: { minHeight: theme.touch, paddingHorizontal: theme.space(4), borderWidth: 1, borderColor: theme.color.accent, borderRadius: theme.radius, fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accent, textAlignVertical: 'center', lineHeight: theme.touch - 2, alignSelf: 'flex-start', textDecorationLine: 'none' },
-  off: { borderColor: theme.color.rule, justifyContent: 'center', paddingVertical: theme.space(1), lineHeight: undefined },
+  link: {
+    minHeight: theme.touch,
+    paddingHorizontal: theme.space(4),
+    borderWidth: 1,
+    borderColor: theme.color.accent,
+    borderRadius: theme.radius,
+    fontFamily: theme.font.medium,
+    fontSize: theme.size.body,
+    color: theme.color.accent,
+    textAlignVertical: 'center',
+    lineHeight: theme.touch - 2,
+    alignSelf: 'flex-start',
+    textDecorationLine: 'none',
+  },
+  off: {
+    borderColor: theme.color.rule,
+    justifyContent: 'center',
+    paddingVertical: theme.space(1),
+    lineHeight: undefined,
+  },
   offText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.inkFaint },
   reason: { fontFamily: theme.font.regular, fontSize: 12, color: theme.color.inkFaint },
 });

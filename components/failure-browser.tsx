@@ -23,7 +23,15 @@ const COLUMNS_STORAGE_KEY = 'sheetkeeper.failure-table.columns';
  * more", the CSV of the same filters, and the rows as a table with chosen columns on a wide
  * screen or as cards on a phone.
  */
-export function FailureBrowser({ filters, onChange, dropped = [] }: { filters: FailureFilters; onChange: (next: FailureFilters) => void; dropped?: string[] }) {
+export function FailureBrowser({
+  filters,
+  onChange,
+  dropped = [],
+}: {
+  filters: FailureFilters;
+  onChange: (next: FailureFilters) => void;
+  dropped?: string[];
+}) {
   const wide = useWindowDimensions().width >= theme.wide;
   const failures = useFailures(filters);
   const [columns, setColumns] = useStoredChoice<FailureColumnId>(COLUMNS_STORAGE_KEY, COLUMN_IDS, DEFAULT_COLUMNS);
@@ -34,7 +42,8 @@ export function FailureBrowser({ filters, onChange, dropped = [] }: { filters: F
     <View style={styles.root}>
       {dropped.length > 0 ? (
         <Text accessibilityRole="alert" style={styles.warning}>
-          × The link&apos;s {dropped.join(', ')} could not be read and {dropped.length === 1 ? 'is' : 'are'} not applied.
+          × The link&apos;s {dropped.join(', ')} could not be read and {dropped.length === 1 ? 'is' : 'are'} not
+          applied.
         </Text>
       ) : null}
       <FailureFiltersPanel filters={filters} onChange={onChange} compact={!wide} />
@@ -54,23 +63,38 @@ export function FailureBrowser({ filters, onChange, dropped = [] }: { filters: F
             href={`/api/failures/export.csv?${failureQueryString({ ...filters, sort: undefined })}`}
             disabledReason={exportable ? undefined : 'Filter by a run, suite or target to export.'}
           />
-          {wide ? <ColumnChooser options={FAILURE_COLUMNS.map((c) => ({ id: c.id, title: c.title, fixed: c.fixed }))} shown={columns} onChange={setColumns} /> : null}
+          {wide ? (
+            <ColumnChooser
+              options={FAILURE_COLUMNS.map((c) => ({ id: c.id, title: c.title, fixed: c.fixed }))}
+              shown={columns}
+              onChange={setColumns}
+            />
+          ) : null}
         </View>
       </View>
       <Text style={styles.note}>
-        Only points that did not pass are listed, each with the suite version, target and convention it was judged under. A short or empty table is evidence about the points and conventions
-        those suites checked, not a certification of the library.
+        Only points that did not pass are listed, each with the suite version, target and convention it was judged
+        under. A short or empty table is evidence about the points and conventions those suites checked, not a
+        certification of the library.
       </Text>
       {failures.isPending ? (
         <QueryState state="loading" />
       ) : failures.isError ? (
         <QueryState state="error" message={failures.error.message} onRetry={() => void failures.refetch()} />
       ) : rows.length === 0 ? (
-        <QueryState state="empty" message={Object.keys(filters).some((k) => k !== 'sort') ? 'No failures match these filters.' : 'No failures stored yet: no run has found a failing point.'} />
+        <QueryState
+          state="empty"
+          message={
+            Object.keys(filters).some((k) => k !== 'sort')
+              ? 'No failures match these filters.'
+              : 'No failures stored yet: no run has found a failing point.'
+          }
+        />
       ) : (
         <View style={styles.results}>
           <Text style={styles.count} accessibilityLiveRegion="polite">
-            {rows.length} {rows.length === 1 ? 'failure' : 'failures'} shown{failures.hasNextPage ? ', more to load' : ', all loaded'}
+            {rows.length} {rows.length === 1 ? 'failure' : 'failures'} shown
+            {failures.hasNextPage ? ', more to load' : ', all loaded'}
           </Text>
           {wide ? (
             <FailureTable failures={rows} columns={columns} />
@@ -81,8 +105,17 @@ export function FailureBrowser({ filters, onChange, dropped = [] }: { filters: F
               ))}
             </View>
           )}
-          {failures.isFetchNextPageError ? <Text style={styles.warning}>× The next page could not be loaded; try again.</Text> : null}
-          {failures.hasNextPage ? <ActionButton label="Load more" tone="quiet" busy={failures.isFetchingNextPage} onPress={() => void failures.fetchNextPage()} /> : null}
+          {failures.isFetchNextPageError ? (
+            <Text style={styles.warning}>× The next page could not be loaded; try again.</Text>
+          ) : null}
+          {failures.hasNextPage ? (
+            <ActionButton
+              label="Load more"
+              tone="quiet"
+              busy={failures.isFetchingNextPage}
+              onPress={() => void failures.fetchNextPage()}
+            />
+          ) : null}
         </View>
       )}
     </View>
@@ -91,11 +124,23 @@ export function FailureBrowser({ filters, onChange, dropped = [] }: { filters: F
 
 const styles = StyleSheet.create({
   root: { gap: theme.space(4) },
-  toolbar: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', alignItems: 'flex-end', gap: theme.space(3) },
+  toolbar: {
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    justifyContent: 'space-between',
+    alignItems: 'flex-end',
+    gap: theme.space(3),
+  },
   tools: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3), alignItems: 'flex-start' },
   note: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 19 },
   results: { gap: theme.space(3) },
   count: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft },
   cards: { gap: theme.space(3) },
-  warning: { fontFamily: theme.font.medium, color: theme.color.danger, backgroundColor: theme.color.dangerSoft, padding: theme.space(3), borderRadius: theme.radius },
+  warning: {
+    fontFamily: theme.font.medium,
+    color: theme.color.danger,
+    backgroundColor: theme.color.dangerSoft,
+    padding: theme.space(3),
+    borderRadius: theme.radius,
+  },
 });

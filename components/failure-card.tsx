@@ -7,7 +7,6 @@ import { formatComplex } from './format-complex';
 import { DiagnosisLabel } from './diagnosis-label';
 import { DIAGNOSIS_STYLES } from './diagnosis-styles';
 
-
 /** One failure on a phone: the diagnosis first, then where it happened and the values, the whole card a link to the case. */
 export function FailureCard({ failure: f }: { failure: FailureView }) {
   const { tone, detail } = describeFailure(f);
@@ -36,7 +35,10 @@ export function FailureCard({ failure: f }: { failure: FailureView }) {
         <View style={styles.values}>
           <Text style={styles.value}>z = {formatComplex(f.z)}</Text>
           <Text style={styles.value}>expected {formatComplex(f.expected)}</Text>
-          <Text style={styles.value}>library {'  '}{formatComplex(f.actual)}</Text>
+          <Text style={styles.value}>
+            library {'  '}
+            {formatComplex(f.actual)}
+          </Text>
         </View>
       </Pressable>
     </Link>
@@ -44,8 +46,22 @@ export function FailureCard({ failure: f }: { failure: FailureView }) {
 }
 
 const styles = StyleSheet.create({
-  card: { backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, padding: theme.space(4), gap: theme.space(2), minHeight: theme.touch },
-  top: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between', gap: theme.space(2), flexWrap: 'wrap' },
+  card: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+    gap: theme.space(2),
+    minHeight: theme.touch,
+  },
+  top: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    justifyContent: 'space-between',
+    gap: theme.space(2),
+    flexWrap: 'wrap',
+  },
   number: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft },
   where: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
   path: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },

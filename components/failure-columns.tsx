@@ -7,13 +7,20 @@ import { formatComplex } from './format-complex';
 import { DiagnosisLabel } from './diagnosis-label';
 import { formatUlps } from '../shared/format-ulps';
 
-export type FailureColumnId = 'id' | 'suite' | 'target' | 'convention' | 'path' | 't' | 'z' | 'expected' | 'actual' | 'diagnosis' | 'ulps' | 'new';
+export type FailureColumnId =
+  'id' | 'suite' | 'target' | 'convention' | 'path' | 't' | 'z' | 'expected' | 'actual' | 'diagnosis' | 'ulps' | 'new';
 
 const mono = (text: string) => <Text style={styles.mono}>{text}</Text>;
 const plain = (text: string) => <Text style={styles.plain}>{text}</Text>;
 
 /** The table's columns in order: title, relative width and how a cell reads. `id` and `diagnosis` cannot be hidden. */
-export const FAILURE_COLUMNS: { id: FailureColumnId; title: string; flex: number; fixed?: true; cell: (f: FailureView) => ReactNode }[] = [
+export const FAILURE_COLUMNS: {
+  id: FailureColumnId;
+  title: string;
+  flex: number;
+  fixed?: true;
+  cell: (f: FailureView) => ReactNode;
+}[] = [
   { id: 'id', title: 'No.', flex: 0.8, fixed: true, cell: (f) => <Text style={styles.link}>#{f.id}</Text> },
   { id: 'suite', title: 'Suite', flex: 2.2, cell: (f) => plain(`${f.suiteSlug} v${f.suiteVersion}`) },
   { id: 'target', title: 'Target', flex: 1.5, cell: (f) => plain(f.targetName) },
@@ -40,5 +47,10 @@ export const FAILURE_COLUMNS: { id: FailureColumnId; title: string; flex: number
 const styles = StyleSheet.create({
   mono: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.ink },
   plain: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink },
-  link: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.accent, textDecorationLine: 'underline' },
+  link: {
+    fontFamily: theme.font.medium,
+    fontSize: theme.size.small,
+    color: theme.color.accent,
+    textDecorationLine: 'underline',
+  },
 });

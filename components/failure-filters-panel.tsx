@@ -22,14 +22,27 @@ const TEXT_FIELDS: { key: TextKey; label: string }[] = [
  */
 let openOnPhone: boolean | null = null;
 
-const draftOf = (f: FailureFilters): Record<TextKey, string> => ({ run: f.run ?? '', suite: f.suite ?? '', target: f.target ?? '', fn: f.fn ?? '' });
+const draftOf = (f: FailureFilters): Record<TextKey, string> => ({
+  run: f.run ?? '',
+  suite: f.suite ?? '',
+  target: f.target ?? '',
+  fn: f.fn ?? '',
+});
 
 /**
  * The failure table's filters. Typed filters apply together ("Apply"), each checked with the
  * server's schema first and its rule shown beside the field; chips apply at once. On a phone
  * the panel folds away behind a button that says how many filters are on.
  */
-export function FailureFiltersPanel({ filters, onChange, compact }: { filters: FailureFilters; onChange: (next: FailureFilters) => void; compact: boolean }) {
+export function FailureFiltersPanel({
+  filters,
+  onChange,
+  compact,
+}: {
+  filters: FailureFilters;
+  onChange: (next: FailureFilters) => void;
+  compact: boolean;
+}) {
   const [open, setOpenState] = useState(compact ? (openOnPhone ?? false) : true);
   const setOpen = (next: boolean) => {
     if (compact) openOnPhone = next;
@@ -46,7 +59,9 @@ export function FailureFiltersPanel({ filters, onChange, compact }: { filters: F
     setDraft(JSON.parse(applied) as Record<TextKey, string>);
   }
 
-  const on = (Object.keys(filters) as (keyof FailureFilters)[]).filter((k) => k !== 'sort' && filters[k] !== undefined).length;
+  const on = (Object.keys(filters) as (keyof FailureFilters)[]).filter(
+    (k) => k !== 'sort' && filters[k] !== undefined,
+  ).length;
   const apply = () => {
     const next: FailureFilters = { ...filters };
     const found: Partial<Record<TextKey, string>> = {};
@@ -73,7 +88,13 @@ export function FailureFiltersPanel({ filters, onChange, compact }: { filters: F
   return (
     <View style={styles.panel}>
       {compact ? (
-        <Pressable accessibilityRole="button" accessibilityLabel={`Filters, ${on} on`} aria-expanded={open} onPress={() => setOpen(!open)} style={styles.toggle}>
+        <Pressable
+          accessibilityRole="button"
+          accessibilityLabel={`Filters, ${on} on`}
+          aria-expanded={open}
+          onPress={() => setOpen(!open)}
+          style={styles.toggle}
+        >
           <Text style={styles.toggleText}>
             {open ? '↑' : '↓'} Filters{on ? ` · ${on} on` : ''}
           </Text>
@@ -115,7 +136,14 @@ export function FailureFiltersPanel({ filters, onChange, compact }: { filters: F
             label="Diagnosis"
             value={filters.diagnosis}
             onChange={(v) => set('diagnosis', v)}
-            options={[{ value: undefined, text: 'any' }, ...[...DIAGNOSIS_KINDS, 'error' as const, 'skipped' as const].map((k) => ({ value: k, text: DIAGNOSIS_STYLES[k].word, glyph: DIAGNOSIS_STYLES[k].glyph }))]}
+            options={[
+              { value: undefined, text: 'any' },
+              ...[...DIAGNOSIS_KINDS, 'error' as const, 'skipped' as const].map((k) => ({
+                value: k,
+                text: DIAGNOSIS_STYLES[k].word,
+                glyph: DIAGNOSIS_STYLES[k].glyph,
+              })),
+            ]}
           />
           <View style={compact ? styles.stack : styles.side}>
             <ChipGroup
@@ -148,9 +176,24 @@ export function FailureFiltersPanel({ filters, onChange, compact }: { filters: F
 
 const styles = StyleSheet.create({
   panel: { gap: theme.space(3) },
-  toggle: { minHeight: theme.touch, justifyContent: 'center', paddingHorizontal: theme.space(4), borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, backgroundColor: theme.color.panel },
+  toggle: {
+    minHeight: theme.touch,
+    justifyContent: 'center',
+    paddingHorizontal: theme.space(4),
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    backgroundColor: theme.color.panel,
+  },
   toggleText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
-  body: { gap: theme.space(4), padding: theme.space(4), borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, backgroundColor: theme.color.panel },
+  body: {
+    gap: theme.space(4),
+    padding: theme.space(4),
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    backgroundColor: theme.color.panel,
+  },
   fields: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
   field: { flexGrow: 1, flexBasis: 200 },
   fieldFull: { width: '100%' },

@@ -39,9 +39,29 @@ export function FailureTable({ failures, columns }: { failures: FailureView[]; c
 }
 
 const styles = StyleSheet.create({
-  table: { borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, overflow: 'hidden', backgroundColor: theme.color.panel },
-  row: { flexDirection: 'row', alignItems: 'center', minHeight: 48, paddingHorizontal: theme.space(3), gap: theme.space(2), borderBottomWidth: 1, borderBottomColor: theme.color.rule },
+  table: {
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    overflow: 'hidden',
+    backgroundColor: theme.color.panel,
+  },
+  row: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    minHeight: 48,
+    paddingHorizontal: theme.space(3),
+    gap: theme.space(2),
+    borderBottomWidth: 1,
+    borderBottomColor: theme.color.rule,
+  },
   head: { backgroundColor: theme.color.paper, minHeight: 40 },
-  headText: { fontFamily: theme.font.medium, fontSize: 12, color: theme.color.inkFaint, textTransform: 'uppercase', letterSpacing: 0.6 },
+  headText: {
+    fontFamily: theme.font.medium,
+    fontSize: 12,
+    color: theme.color.inkFaint,
+    textTransform: 'uppercase',
+    letterSpacing: 0.6,
+  },
   cell: { paddingVertical: theme.space(2), minWidth: 0 },
 });

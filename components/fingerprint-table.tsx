@@ -23,8 +23,11 @@ function probePlace(at: Probe['at']): string {
 /** What the places of one cut say, counted: "signed zero at 4 of 4 places". */
 function evidenceLine(entry: CutEntry): string {
   const n = entry.probes.length;
-  if (n === 0) return 'No place on this cut told the conventions apart (both Annex G values agreed wherever it was probed): this verdict rests on no evidence.';
-  const counts = BEHAVIOURS.map((b) => [b, entry.probes.filter((p) => p.verdict === b).length] as const).filter(([, c]) => c > 0);
+  if (n === 0)
+    return 'No place on this cut told the conventions apart (both Annex G values agreed wherever it was probed): this verdict rests on no evidence.';
+  const counts = BEHAVIOURS.map((b) => [b, entry.probes.filter((p) => p.verdict === b).length] as const).filter(
+    ([, c]) => c > 0,
+  );
   if (counts.length === 1) return `${CONVENTION_STYLES[counts[0]![0]].word} at ${n} of ${plural(n, 'place')}`;
   return `${plural(n, 'place')}: ${counts.map(([b, c]) => `${c} ${CONVENTION_STYLES[b].word}`).join(', ')}`;
 }
@@ -44,7 +47,9 @@ export interface FingerprintTableProps {
 export function FingerprintTable({ fingerprint, onOpenCutMap }: FingerprintTableProps) {
   const wide = useWindowDimensions().width >= theme.wide;
   const places = fingerprint.cuts.reduce((sum, c) => sum + c.probes.length, 0);
-  const byBehaviour = BEHAVIOURS.map((b) => [b, fingerprint.cuts.filter((c) => c.behaviour === b).length] as const).filter(([, n]) => n > 0);
+  const byBehaviour = BEHAVIOURS.map(
+    (b) => [b, fingerprint.cuts.filter((c) => c.behaviour === b).length] as const,
+  ).filter(([, n]) => n > 0);
   const functions = new Set(fingerprint.cuts.map((c) => c.function)).size;
 
   return (
@@ -63,12 +68,15 @@ export function FingerprintTable({ fingerprint, onOpenCutMap }: FingerprintTable
       <View style={styles.note} testID="fingerprint-scope">
         <Text style={styles.noteTitle}>What this shows, and what it does not</Text>
         <Text style={styles.noteLine}>
-          ✓ Checked: {plural(places, 'place')} that separate the conventions, over {plural(fingerprint.cuts.length, 'cut')}. At each, the target was called exactly on the cut
-          with +0 and with −0 in the part across the cut, and 1e-9 off the cut on both sides; values were compared with the reference to a relative 1e-6.
+          ✓ Checked: {plural(places, 'place')} that separate the conventions, over{' '}
+          {plural(fingerprint.cuts.length, 'cut')}. At each, the target was called exactly on the cut with +0 and with
+          −0 in the part across the cut, and 1e-9 off the cut on both sides; values were compared with the reference to
+          a relative 1e-6.
         </Text>
         <Text style={styles.noteLine}>
           × Not checked: the rest of each cut, points further off it, accuracy, and any function the target lacks
-          {fingerprint.missing.length ? ` (${fingerprint.missing.join(', ')})` : ''}. A verdict is evidence at the places listed under it — open them — not a certification.
+          {fingerprint.missing.length ? ` (${fingerprint.missing.join(', ')})` : ''}. A verdict is evidence at the
+          places listed under it — open them — not a certification.
         </Text>
         <Text style={styles.noteSource}>{fingerprint.statement}</Text>
       </View>
@@ -88,7 +96,15 @@ export function FingerprintTable({ fingerprint, onOpenCutMap }: FingerprintTable
   );
 }
 
-function CutRow({ entry, wide, onOpenCutMap }: { entry: CutEntry; wide: boolean; onOpenCutMap?: (fn: string) => void }) {
+function CutRow({
+  entry,
+  wide,
+  onOpenCutMap,
+}: {
+  entry: CutEntry;
+  wide: boolean;
+  onOpenCutMap?: (fn: string) => void;
+}) {
   const [open, setOpen] = useState(false);
   const name = `${entry.function} on ${entry.cut}`;
   return (
@@ -125,7 +141,12 @@ function CutRow({ entry, wide, onOpenCutMap }: { entry: CutEntry; wide: boolean;
               </Pressable>
             ) : null}
             {onOpenCutMap ? (
-              <Pressable accessibilityRole="link" accessibilityLabel={`Cut map of ${entry.function}`} onPress={() => onOpenCutMap(entry.function)} style={styles.linkButton}>
+              <Pressable
+                accessibilityRole="link"
+                accessibilityLabel={`Cut map of ${entry.function}`}
+                onPress={() => onOpenCutMap(entry.function)}
+                style={styles.linkButton}
+              >
                 <Text style={styles.linkText}>Cut map →</Text>
               </Pressable>
             ) : null}
@@ -148,7 +169,8 @@ function CutRow({ entry, wide, onOpenCutMap }: { entry: CutEntry; wide: boolean;
             ))}
           </View>
           <Text style={styles.meaning}>
-            {CONVENTION_STYLES[entry.behaviour].glyph} {CONVENTION_STYLES[entry.behaviour].word}: {CONVENTION_STYLES[entry.behaviour].meaning}.
+            {CONVENTION_STYLES[entry.behaviour].glyph} {CONVENTION_STYLES[entry.behaviour].word}:{' '}
+            {CONVENTION_STYLES[entry.behaviour].meaning}.
           </Text>
         </View>
       ) : null}
@@ -161,17 +183,43 @@ const styles = StyleSheet.create({
   summary: { gap: theme.space(2), marginBottom: theme.space(2) },
   summaryHead: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
-  note: { borderLeftWidth: 3, borderLeftColor: theme.color.focus, backgroundColor: theme.color.panel, borderRadius: theme.radius, padding: theme.space(4), gap: theme.space(2), marginBottom: theme.space(2) },
+  note: {
+    borderLeftWidth: 3,
+    borderLeftColor: theme.color.focus,
+    backgroundColor: theme.color.panel,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+    gap: theme.space(2),
+    marginBottom: theme.space(2),
+  },
   noteTitle: { fontFamily: theme.font.bold, fontSize: theme.size.body, color: theme.color.ink },
   noteLine: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
   noteSource: { fontFamily: theme.font.regular, fontSize: 12, color: theme.color.inkFaint, lineHeight: 18 },
-  card: { backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, padding: theme.space(4), gap: theme.space(3) },
+  card: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+    gap: theme.space(3),
+  },
   cardBody: { gap: theme.space(2) },
   cardHead: { flexDirection: 'row', alignItems: 'baseline', gap: theme.space(3), flexWrap: 'wrap' },
-  rowBox: { backgroundColor: theme.color.panel, borderBottomWidth: 1, borderBottomColor: theme.color.rule, paddingHorizontal: theme.space(3) },
+  rowBox: {
+    backgroundColor: theme.color.panel,
+    borderBottomWidth: 1,
+    borderBottomColor: theme.color.rule,
+    paddingHorizontal: theme.space(3),
+  },
   row: { flexDirection: 'row', alignItems: 'center', gap: theme.space(3), paddingVertical: theme.space(2) },
   headRow: { paddingHorizontal: theme.space(3) },
-  head: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkFaint, textTransform: 'uppercase', letterSpacing: 0.8 },
+  head: {
+    fontFamily: theme.font.medium,
+    fontSize: theme.size.small,
+    color: theme.color.inkFaint,
+    textTransform: 'uppercase',
+    letterSpacing: 0.8,
+  },
   fnCol: { flex: 2 },
   cutCol: { flex: 2 },
   verdictCol: { flex: 4 },
@@ -182,7 +230,14 @@ const styles = StyleSheet.create({
   cut: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.inkSoft },
   small: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
-  linkButton: { minHeight: 44, justifyContent: 'center', paddingHorizontal: theme.space(3), borderRadius: theme.radius, borderWidth: 1, borderColor: theme.color.rule },
+  linkButton: {
+    minHeight: 44,
+    justifyContent: 'center',
+    paddingHorizontal: theme.space(3),
+    borderRadius: theme.radius,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+  },
   linkText: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.accent },
   probes: { gap: theme.space(2), paddingBottom: theme.space(3) },
   probeGrid: { flexDirection: 'row', flexWrap: 'wrap', columnGap: theme.space(4) },

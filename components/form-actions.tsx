@@ -3,7 +3,19 @@ import { theme } from '../constants/theme';
 import { ActionButton } from './action-button';
 
 /** The foot of a form: a refusal that names no field, then save and cancel. */
-export function FormActions({ failure, saveLabel, onSave, busy, onCancel }: { failure?: string | null; saveLabel: string; onSave: () => void; busy: boolean; onCancel: () => void }) {
+export function FormActions({
+  failure,
+  saveLabel,
+  onSave,
+  busy,
+  onCancel,
+}: {
+  failure?: string | null;
+  saveLabel: string;
+  onSave: () => void;
+  busy: boolean;
+  onCancel: () => void;
+}) {
   return (
     <>
       {failure ? (
@@ -20,6 +32,12 @@ export function FormActions({ failure, saveLabel, onSave, busy, onCancel }: { fa
 }
 
 const styles = StyleSheet.create({
-  failure: { fontFamily: theme.font.medium, color: theme.color.danger, backgroundColor: theme.color.dangerSoft, padding: theme.space(3), borderRadius: theme.radius },
+  failure: {
+    fontFamily: theme.font.medium,
+    color: theme.color.danger,
+    backgroundColor: theme.color.dangerSoft,
+    padding: theme.space(3),
+    borderRadius: theme.radius,
+  },
   buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
 });

@@ -18,7 +18,17 @@ interface Props {
 }
 
 /** A labelled text input of the suite form; what was typed is kept exactly as typed. */
-export function FormTextInput({ label, value, onChangeText, rules = [], hint, mono = false, multiline = false, visibleLabel, testID }: Props) {
+export function FormTextInput({
+  label,
+  value,
+  onChangeText,
+  rules = [],
+  hint,
+  mono = false,
+  multiline = false,
+  visibleLabel,
+  testID,
+}: Props) {
   return (
     <View style={styles.field}>
       <Text style={styles.label}>{visibleLabel ?? label}</Text>

@@ -11,11 +11,14 @@ export function IssueList({ error, prefix = '', testID }: { error: Error | null;
   const body = error instanceof ApiRequestError ? error.body : null;
   return (
     <View style={styles.box} accessibilityRole="alert" testID={testID}>
-      <Text style={styles.title}>× {body?.kind === 'invalid-input' ? 'Refused: the file breaks these rules.' : (body?.message ?? error.message)}</Text>
+      <Text style={styles.title}>
+        × {body?.kind === 'invalid-input' ? 'Refused: the file breaks these rules.' : (body?.message ?? error.message)}
+      </Text>
       {body?.kind === 'invalid-input'
         ? body.issues.map((i, k) => (
             <Text key={k} style={styles.line}>
-              • <Text style={styles.field}>{i.field.startsWith(prefix) ? i.field.slice(prefix.length) : i.field}</Text> {i.rule}
+              • <Text style={styles.field}>{i.field.startsWith(prefix) ? i.field.slice(prefix.length) : i.field}</Text>{' '}
+              {i.rule}
             </Text>
           ))
         : null}
@@ -24,7 +27,12 @@ export function IssueList({ error, prefix = '', testID }: { error: Error | null;
 }
 
 const styles = StyleSheet.create({
-  box: { backgroundColor: theme.color.dangerSoft, borderRadius: theme.radius, padding: theme.space(3), gap: theme.space(1) },
+  box: {
+    backgroundColor: theme.color.dangerSoft,
+    borderRadius: theme.radius,
+    padding: theme.space(3),
+    gap: theme.space(1),
+  },
   title: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.danger },
   line: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink, lineHeight: 20 },
   field: { fontFamily: theme.font.mono },

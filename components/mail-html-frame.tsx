@@ -6,7 +6,11 @@ import { theme } from '../constants/theme';
  * installed, so native builds say so and the plain-text part is the way to read the message.
  */
 export function MailHtmlFrame(_props: { html: string; title: string }) {
-  return <Text style={styles.note}>The HTML part is shown in the web app only; switch to the plain text to read this message here.</Text>;
+  return (
+    <Text style={styles.note}>
+      The HTML part is shown in the web app only; switch to the plain text to read this message here.
+    </Text>
+  );
 }
 
 const styles = StyleSheet.create({

@@ -12,7 +12,14 @@ export function MailHtmlFrame({ html, title }: { html: string; title: string }) 
       title={title}
       referrerPolicy="no-referrer"
       data-testid="mail-html-frame"
-      style={{ width: '100%', height: '70vh', minHeight: 360, border: '1px solid #D9D3C5', borderRadius: 6, backgroundColor: '#FFFFFF' }}
+      style={{
+        width: '100%',
+        height: '70vh',
+        minHeight: 360,
+        border: '1px solid #D9D3C5',
+        borderRadius: 6,
+        backgroundColor: '#FFFFFF',
+      }}
     />
   );
 }

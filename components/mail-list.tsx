@@ -11,9 +11,16 @@ export function MailList() {
   const outbox = useOutbox();
   const wide = useWindowDimensions().width >= theme.wide;
   if (outbox.isPending) return <QueryState state="loading" />;
-  if (outbox.isError) return <QueryState state="error" message={outbox.error.message} onRetry={() => void outbox.refetch()} />;
+  if (outbox.isError)
+    return <QueryState state="error" message={outbox.error.message} onRetry={() => void outbox.refetch()} />;
   const messages = outbox.data.pages.flatMap((p) => p.messages);
-  if (messages.length === 0) return <QueryState state="empty" message="No mail received yet. Regression mail appears here once a run finds a regression." />;
+  if (messages.length === 0)
+    return (
+      <QueryState
+        state="empty"
+        message="No mail received yet. Regression mail appears here once a run finds a regression."
+      />
+    );
 
   return (
     <View style={styles.list} testID="mail-list">
@@ -26,7 +33,11 @@ export function MailList() {
       ) : null}
       {messages.map((m) => (
         <Link key={m.id} href={`/outbox/${m.id}` as never} asChild>
-          <Pressable accessibilityRole="link" accessibilityLabel={`Message ${m.subject || '(no subject)'} to ${m.to.join(', ')}`} style={StyleSheet.flatten(wide ? styles.row : styles.card)}>
+          <Pressable
+            accessibilityRole="link"
+            accessibilityLabel={`Message ${m.subject || '(no subject)'} to ${m.to.join(', ')}`}
+            style={StyleSheet.flatten(wide ? styles.row : styles.card)}
+          >
             {wide ? (
               <>
                 <Text style={[styles.when, styles.whenCol]}>{formatDate(m.receivedAt)}</Text>
@@ -52,17 +63,47 @@ export function MailList() {
           </Pressable>
         </Link>
       ))}
-      {outbox.hasNextPage ? <ActionButton label="Older messages" tone="quiet" busy={outbox.isFetchingNextPage} onPress={() => void outbox.fetchNextPage()} /> : null}
+      {outbox.hasNextPage ? (
+        <ActionButton
+          label="Older messages"
+          tone="quiet"
+          busy={outbox.isFetchingNextPage}
+          onPress={() => void outbox.fetchNextPage()}
+        />
+      ) : null}
     </View>
   );
 }
 
 const styles = StyleSheet.create({
   list: { gap: theme.space(2) },
-  card: { backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, padding: theme.space(4), gap: theme.space(1) },
-  row: { flexDirection: 'row', alignItems: 'center', gap: theme.space(3), minHeight: theme.touch, paddingVertical: theme.space(3), paddingHorizontal: theme.space(3), borderBottomWidth: 1, borderBottomColor: theme.color.rule, backgroundColor: theme.color.panel },
+  card: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+    gap: theme.space(1),
+  },
+  row: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: theme.space(3),
+    minHeight: theme.touch,
+    paddingVertical: theme.space(3),
+    paddingHorizontal: theme.space(3),
+    borderBottomWidth: 1,
+    borderBottomColor: theme.color.rule,
+    backgroundColor: theme.color.panel,
+  },
   headRow: { backgroundColor: 'transparent', minHeight: 0 },
-  head: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkFaint, textTransform: 'uppercase', letterSpacing: 0.8 },
+  head: {
+    fontFamily: theme.font.medium,
+    fontSize: theme.size.small,
+    color: theme.color.inkFaint,
+    textTransform: 'uppercase',
+    letterSpacing: 0.8,
+  },
   whenCol: { width: 170 },
   subjectCol: { flex: 3 },
   peopleCol: { flex: 2 },

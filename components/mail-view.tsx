@@ -57,7 +57,10 @@ export function MailView({ message }: { message: ReceivedMailView }) {
       </View>
       {part === 'html' && message.html ? (
         <>
-          <Text style={styles.note}>Shown in a sandbox: scripts, forms and links in the message do nothing here, and remote images are not loaded.</Text>
+          <Text style={styles.note}>
+            Shown in a sandbox: scripts, forms and links in the message do nothing here, and remote images are not
+            loaded.
+          </Text>
           <MailHtmlFrame html={message.html} title={`HTML part of “${message.subject}”`} />
         </>
       ) : (
@@ -71,16 +74,47 @@ export function MailView({ message }: { message: ReceivedMailView }) {
 
 const styles = StyleSheet.create({
   view: { gap: theme.space(3) },
-  envelope: { backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, padding: theme.space(4), gap: theme.space(1) },
-  subject: { fontFamily: theme.font.bold, fontSize: theme.size.large, color: theme.color.ink, marginBottom: theme.space(1) },
+  envelope: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+    gap: theme.space(1),
+  },
+  subject: {
+    fontFamily: theme.font.bold,
+    fontSize: theme.size.large,
+    color: theme.color.ink,
+    marginBottom: theme.space(1),
+  },
   line: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.ink },
   key: { fontFamily: theme.font.medium, color: theme.color.inkFaint },
   tabs: { flexDirection: 'row', gap: theme.space(2), flexWrap: 'wrap' },
-  tab: { minHeight: theme.touch, justifyContent: 'center', paddingHorizontal: theme.space(4), borderRadius: theme.radius, borderWidth: 1, borderColor: theme.color.rule, backgroundColor: theme.color.panel },
+  tab: {
+    minHeight: theme.touch,
+    justifyContent: 'center',
+    paddingHorizontal: theme.space(4),
+    borderRadius: theme.radius,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    backgroundColor: theme.color.panel,
+  },
   tabOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
   tabDisabled: { opacity: 0.6 },
   tabText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
   tabTextOn: { color: theme.color.accentInk },
   note: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
-  text: { fontFamily: theme.font.mono, fontSize: theme.size.small, lineHeight: 20, color: theme.color.ink, backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, padding: theme.space(4), whiteSpace: 'pre-wrap' } as object,
+  text: {
+    fontFamily: theme.font.mono,
+    fontSize: theme.size.small,
+    lineHeight: 20,
+    color: theme.color.ink,
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+    whiteSpace: 'pre-wrap',
+  } as object,
 });

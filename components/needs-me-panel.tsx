@@ -19,7 +19,17 @@ function Row({ href, label, children }: { href: string; label: string; children:
   );
 }
 
-function Group({ title, count, empty, children }: { title: string; count: number; empty: string; children: ReactNode }) {
+function Group({
+  title,
+  count,
+  empty,
+  children,
+}: {
+  title: string;
+  count: number;
+  empty: string;
+  children: ReactNode;
+}) {
   return (
     <View style={styles.group}>
       <Text accessibilityRole="header" style={styles.groupTitle}>
@@ -47,7 +57,11 @@ export function NeedsMePanel({ needsMe, role, now }: { needsMe: NeedsMe; role: R
       {needsMe.reviewQueue ? (
         <Group title="Suites to review" count={needsMe.reviewQueue.length} empty="No suite is waiting for review.">
           {needsMe.reviewQueue.map((s) => (
-            <Row key={`${s.slug}-${s.version}`} href={`/review/${encodeURIComponent(s.slug)}`} label={`Review ${s.slug} version ${s.version}`}>
+            <Row
+              key={`${s.slug}-${s.version}`}
+              href={`/review/${encodeURIComponent(s.slug)}`}
+              label={`Review ${s.slug} version ${s.version}`}
+            >
               <Text style={styles.main}>{suiteLine(s)}</Text>
               <Text style={styles.sub}>
                 by {s.authorName}, submitted {formatWhen(s.since, now)}
@@ -57,9 +71,17 @@ export function NeedsMePanel({ needsMe, role, now }: { needsMe: NeedsMe; role: R
         </Group>
       ) : null}
       {showSentBack ? (
-        <Group title="Your suites sent back" count={needsMe.changesRequested.length} empty="None of your suites needs changes.">
+        <Group
+          title="Your suites sent back"
+          count={needsMe.changesRequested.length}
+          empty="None of your suites needs changes."
+        >
           {needsMe.changesRequested.map((s) => (
-            <Row key={`${s.slug}-${s.version}`} href={`/suites/${encodeURIComponent(s.slug)}`} label={`Open ${s.slug}, changes requested`}>
+            <Row
+              key={`${s.slug}-${s.version}`}
+              href={`/suites/${encodeURIComponent(s.slug)}`}
+              label={`Open ${s.slug}, changes requested`}
+            >
               <Text style={styles.main}>↺ {suiteLine(s)}</Text>
               <Text style={styles.sub}>
                 changes requested by {s.reviewerName ?? 'a reviewer'}, {formatWhen(s.since, now)}
@@ -72,10 +94,18 @@ export function NeedsMePanel({ needsMe, role, now }: { needsMe: NeedsMe; role: R
       <Group
         title="Regressions on your libraries"
         count={needsMe.regressions.length}
-        empty={needsMe.subscriptions.length ? `No regressions on ${needsMe.subscriptions.join(', ')} in the latest runs.` : 'You subscribe to no library (Settings).'}
+        empty={
+          needsMe.subscriptions.length
+            ? `No regressions on ${needsMe.subscriptions.join(', ')} in the latest runs.`
+            : 'You subscribe to no library (Settings).'
+        }
       >
         {needsMe.regressions.map((r) => (
-          <Row key={`${r.runId}-${r.targetKey}`} href={`/failures?${new URLSearchParams({ run: r.runId, status: 'new' }).toString()}`} label={`${r.count} regressions on ${r.targetKey} in ${r.planName}`}>
+          <Row
+            key={`${r.runId}-${r.targetKey}`}
+            href={`/failures?${new URLSearchParams({ run: r.runId, status: 'new' }).toString()}`}
+            label={`${r.count} regressions on ${r.targetKey} in ${r.planName}`}
+          >
             <Text style={[styles.main, styles.danger]}>
               ❌ {r.count} regression{r.count === 1 ? '' : 's'} on {r.targetKey}
             </Text>
@@ -90,13 +120,39 @@ export function NeedsMePanel({ needsMe, role, now }: { needsMe: NeedsMe; role: R
 }
 
 const styles = StyleSheet.create({
-  panel: { backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, padding: theme.space(4), gap: theme.space(4) },
+  panel: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+    gap: theme.space(4),
+  },
   title: { fontFamily: theme.font.bold, fontSize: theme.size.large, color: theme.color.ink },
   group: { gap: theme.space(1) },
-  groupTitle: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkFaint, textTransform: 'uppercase', letterSpacing: 0.8 },
+  groupTitle: {
+    fontFamily: theme.font.medium,
+    fontSize: theme.size.small,
+    color: theme.color.inkFaint,
+    textTransform: 'uppercase',
+    letterSpacing: 0.8,
+  },
   count: { fontFamily: theme.font.mono },
-  empty: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, paddingVertical: theme.space(1) },
-  row: { minHeight: 56, flexDirection: 'row', alignItems: 'center', gap: theme.space(3), paddingVertical: theme.space(2), borderBottomWidth: 1, borderBottomColor: theme.color.rule },
+  empty: {
+    fontFamily: theme.font.regular,
+    fontSize: theme.size.small,
+    color: theme.color.inkSoft,
+    paddingVertical: theme.space(1),
+  },
+  row: {
+    minHeight: 56,
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: theme.space(3),
+    paddingVertical: theme.space(2),
+    borderBottomWidth: 1,
+    borderBottomColor: theme.color.rule,
+  },
   rowBody: { flex: 1, gap: 2 },
   chevron: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.inkFaint },
   main: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },

@@ -16,7 +16,14 @@ export function NewTokenForm() {
   const [made, setMade] = useState<{ name: string; secret: string } | null>(null);
   const create = useCreateToken();
   const serverError = serverFieldErrors(create.error).name;
-  const other = create.error instanceof ApiRequestError ? (create.error.body.kind === 'invalid-input' ? null : create.error.body.message) : create.error ? 'The server could not be reached; no token was made.' : null;
+  const other =
+    create.error instanceof ApiRequestError
+      ? create.error.body.kind === 'invalid-input'
+        ? null
+        : create.error.body.message
+      : create.error
+        ? 'The server could not be reached; no token was made.'
+        : null;
 
   const submit = () => {
     const checked = tokenBody.safeParse({ name });
@@ -57,5 +64,11 @@ export function NewTokenForm() {
 
 const styles = StyleSheet.create({
   form: { gap: theme.space(3) },
-  failure: { fontFamily: theme.font.medium, color: theme.color.danger, backgroundColor: theme.color.dangerSoft, padding: theme.space(3), borderRadius: theme.radius },
+  failure: {
+    fontFamily: theme.font.medium,
+    color: theme.color.danger,
+    backgroundColor: theme.color.dangerSoft,
+    padding: theme.space(3),
+    borderRadius: theme.radius,
+  },
 });

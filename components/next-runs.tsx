@@ -3,12 +3,24 @@ import { formatTimeInZone } from '../client/format-time-in-zone';
 import { theme } from '../constants/theme';
 
 /** The next times a schedule fires, read in its own time zone, with how far away each is. */
-export function NextRuns({ nextRuns, timeZone, working = false, testID }: { nextRuns: string[] | null; timeZone: string; working?: boolean; testID?: string }) {
+export function NextRuns({
+  nextRuns,
+  timeZone,
+  working = false,
+  testID,
+}: {
+  nextRuns: string[] | null;
+  timeZone: string;
+  working?: boolean;
+  testID?: string;
+}) {
   return (
     <View style={styles.box} accessibilityLiveRegion="polite" testID={testID} aria-busy={working}>
       <Text style={styles.head}>Next runs{working ? ' …' : ''}</Text>
       {nextRuns === null ? (
-        <Text style={styles.none}>{working ? 'Working out the next times…' : '— no times until the expression is valid'}</Text>
+        <Text style={styles.none}>
+          {working ? 'Working out the next times…' : '— no times until the expression is valid'}
+        </Text>
       ) : nextRuns.length === 0 ? (
         <Text style={styles.none}>— none: this schedule does not run</Text>
       ) : (
@@ -30,7 +42,13 @@ export function NextRuns({ nextRuns, timeZone, working = false, testID }: { next
 
 const styles = StyleSheet.create({
   box: { gap: theme.space(1) },
-  head: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkFaint, textTransform: 'uppercase', letterSpacing: 0.8 },
+  head: {
+    fontFamily: theme.font.medium,
+    fontSize: theme.size.small,
+    color: theme.color.inkFaint,
+    textTransform: 'uppercase',
+    letterSpacing: 0.8,
+  },
   row: { flexDirection: 'row', alignItems: 'baseline', gap: theme.space(2), flexWrap: 'wrap' },
   bullet: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.accent },
   when: { fontFamily: theme.font.mono, fontSize: theme.size.body, color: theme.color.ink },

@@ -2,7 +2,21 @@ import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { theme } from '../constants/theme';
 
 /** A switch that says its state in words as well as by position and colour. */
-export function OnOffSwitch({ value, onChange, accessibilityLabel, onWord = 'On', offWord = 'Off', disabled = false }: { value: boolean; onChange: (next: boolean) => void; accessibilityLabel: string; onWord?: string; offWord?: string; disabled?: boolean }) {
+export function OnOffSwitch({
+  value,
+  onChange,
+  accessibilityLabel,
+  onWord = 'On',
+  offWord = 'Off',
+  disabled = false,
+}: {
+  value: boolean;
+  onChange: (next: boolean) => void;
+  accessibilityLabel: string;
+  onWord?: string;
+  offWord?: string;
+  disabled?: boolean;
+}) {
   return (
     <Pressable
       accessibilityRole="switch"
@@ -22,7 +36,13 @@ export function OnOffSwitch({ value, onChange, accessibilityLabel, onWord = 'On'
 }
 
 const styles = StyleSheet.create({
-  hit: { minHeight: theme.touch, flexDirection: 'row', alignItems: 'center', gap: theme.space(2), paddingRight: theme.space(1) },
+  hit: {
+    minHeight: theme.touch,
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: theme.space(2),
+    paddingRight: theme.space(1),
+  },
   disabled: { opacity: 0.6 },
   track: { width: 44, height: 26, borderRadius: 13, padding: 3, justifyContent: 'center' },
   trackOn: { backgroundColor: theme.color.accent },

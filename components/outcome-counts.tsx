@@ -15,13 +15,28 @@ const ORDER = [
  * Point counts as "✓ 120 passed · ❌ 3 failed …": each with its glyph and word as well as its
  * colour. Zero counts are left out unless `all`; nothing counted says so.
  */
-export function OutcomeCounts({ counts, all = false, compact = false }: { counts: Counts; all?: boolean; compact?: boolean }) {
+export function OutcomeCounts({
+  counts,
+  all = false,
+  compact = false,
+}: {
+  counts: Counts;
+  all?: boolean;
+  compact?: boolean;
+}) {
   const shown = ORDER.filter((o) => all || counts[o.key] > 0);
   if (shown.length === 0) return <Text style={styles.none}>no points counted yet</Text>;
   return (
     <View style={styles.row} accessibilityLabel={shown.map((o) => `${counts[o.key]} ${o.word}`).join(', ')}>
       {shown.map((o) => (
-        <Text key={o.key} style={[styles.item, compact && styles.compact, { color: counts[o.key] > 0 ? OUTCOME_TONE[o.tone].ink : theme.color.inkFaint }]}>
+        <Text
+          key={o.key}
+          style={[
+            styles.item,
+            compact && styles.compact,
+            { color: counts[o.key] > 0 ? OUTCOME_TONE[o.tone].ink : theme.color.inkFaint },
+          ]}
+        >
           {OUTCOME_GLYPH[o.key]} {counts[o.key].toLocaleString('en-GB')} {o.word}
         </Text>
       ))}

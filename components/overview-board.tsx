@@ -27,7 +27,8 @@ export function OverviewBoard({ user }: { user: PublicUser }) {
   const note = (
     <View style={styles.note}>
       <Text style={styles.noteText}>
-        A green result in Sheetkeeper is evidence for the points, paths and conventions that a suite checked — not a certificate that a library is correct everywhere.
+        A green result in Sheetkeeper is evidence for the points, paths and conventions that a suite checked — not a
+        certificate that a library is correct everywhere.
       </Text>
     </View>
   );
@@ -36,7 +37,11 @@ export function OverviewBoard({ user }: { user: PublicUser }) {
     return (
       <View style={styles.column}>
         {who}
-        {overview.isPending ? <QueryState state="loading" /> : <QueryState state="error" message={overview.error.message} onRetry={() => void overview.refetch()} />}
+        {overview.isPending ? (
+          <QueryState state="loading" />
+        ) : (
+          <QueryState state="error" message={overview.error.message} onRetry={() => void overview.refetch()} />
+        )}
         {note}
       </View>
     );

@@ -18,7 +18,19 @@ const KINDS = [
 ] as const;
 
 /** One path of the suite form; the fields follow the kind, and every rule sits under its field. */
-export function PathEditor({ path, index, onChange, onRemove, rules }: { path: PathDraft; index: number; onChange: (p: PathDraft) => void; onRemove: () => void; rules: FieldRules }) {
+export function PathEditor({
+  path,
+  index,
+  onChange,
+  onRemove,
+  rules,
+}: {
+  path: PathDraft;
+  index: number;
+  onChange: (p: PathDraft) => void;
+  onRemove: () => void;
+  rules: FieldRules;
+}) {
   const f = `paths.${index}`;
   const n = `Path ${index + 1}`;
   const set = (patch: Partial<PathDraft>) => onChange({ ...path, ...patch });
@@ -29,7 +41,13 @@ export function PathEditor({ path, index, onChange, onRemove, rules }: { path: P
         <SmallButton label="Remove path" accessibilityLabel={`Remove path ${index + 1}`} onPress={onRemove} danger />
       </View>
       <RuleLines rules={rules(f).map((r) => `${n} ${r}`)} />
-      <FormTextInput label={`${n} name`} visibleLabel="Name" value={path.name} onChangeText={(name) => set({ name })} rules={rules(`${f}.name`)} />
+      <FormTextInput
+        label={`${n} name`}
+        visibleLabel="Name"
+        value={path.name}
+        onChangeText={(name) => set({ name })}
+        rules={rules(`${f}.name`)}
+      />
       {path.kind === 'grid' ? (
         <Text style={styles.note}>A grid from a suite file: kept as it came; the form does not edit grids.</Text>
       ) : (
@@ -38,12 +56,39 @@ export function PathEditor({ path, index, onChange, onRemove, rules }: { path: P
       {path.kind === 'circle' ? (
         <>
           <View style={styles.row}>
-            <ComplexInput label={`${n} center`} value={path.center} onChange={(center) => set({ center })} rules={complexRules(rules, `${f}.center`)} />
-            <FormTextInput label={`${n} radius`} visibleLabel="Radius" value={path.radius} onChangeText={(radius) => set({ radius })} rules={rules(`${f}.radius`)} mono />
+            <ComplexInput
+              label={`${n} center`}
+              value={path.center}
+              onChange={(center) => set({ center })}
+              rules={complexRules(rules, `${f}.center`)}
+            />
+            <FormTextInput
+              label={`${n} radius`}
+              visibleLabel="Radius"
+              value={path.radius}
+              onChangeText={(radius) => set({ radius })}
+              rules={rules(`${f}.radius`)}
+              mono
+            />
           </View>
           <View style={styles.row}>
-            <FormTextInput label={`${n} start angle`} visibleLabel="Start angle" hint='radians, or "3pi/4"' value={path.startAngle} onChangeText={(startAngle) => set({ startAngle })} rules={rules(`${f}.start_angle`)} mono />
-            <FormTextInput label={`${n} turns`} visibleLabel="Turns" value={path.turns} onChangeText={(turns) => set({ turns })} rules={rules(`${f}.turns`)} mono />
+            <FormTextInput
+              label={`${n} start angle`}
+              visibleLabel="Start angle"
+              hint='radians, or "3pi/4"'
+              value={path.startAngle}
+              onChangeText={(startAngle) => set({ startAngle })}
+              rules={rules(`${f}.start_angle`)}
+              mono
+            />
+            <FormTextInput
+              label={`${n} turns`}
+              visibleLabel="Turns"
+              value={path.turns}
+              onChangeText={(turns) => set({ turns })}
+              rules={rules(`${f}.turns`)}
+              mono
+            />
           </View>
           <ChipGroup
             label={`${n} direction`}
@@ -58,14 +103,30 @@ export function PathEditor({ path, index, onChange, onRemove, rules }: { path: P
       ) : null}
       {path.kind === 'segment' ? (
         <View style={styles.row}>
-          <ComplexInput label={`${n} from`} value={path.from} onChange={(from) => set({ from })} rules={complexRules(rules, `${f}.from`)} />
-          <ComplexInput label={`${n} to`} value={path.to} onChange={(to) => set({ to })} rules={complexRules(rules, `${f}.to`)} />
+          <ComplexInput
+            label={`${n} from`}
+            value={path.from}
+            onChange={(from) => set({ from })}
+            rules={complexRules(rules, `${f}.from`)}
+          />
+          <ComplexInput
+            label={`${n} to`}
+            value={path.to}
+            onChange={(to) => set({ to })}
+            rules={complexRules(rules, `${f}.to`)}
+          />
         </View>
       ) : null}
       {path.kind === 'polyline' ? (
         <>
           <RuleLines rules={rules(`${f}.points`).map((r) => `${n} points ${r}`)} />
-          <PointListEditor label={`${n} point`} points={path.points} onChange={(points) => set({ points })} rules={rules} field={`${f}.points`} />
+          <PointListEditor
+            label={`${n} point`}
+            points={path.points}
+            onChange={(points) => set({ points })}
+            rules={rules}
+            field={`${f}.points`}
+          />
         </>
       ) : null}
       {path.kind === 'straddle' ? (
@@ -80,7 +141,12 @@ export function PathEditor({ path, index, onChange, onRemove, rules }: { path: P
             onChange={(cutKind) => set({ cutKind })}
           />
           <View style={styles.row}>
-            <ComplexInput label={`${n} cut from`} value={path.cutFrom} onChange={(cutFrom) => set({ cutFrom })} rules={complexRules(rules, `${f}.cut.from`)} />
+            <ComplexInput
+              label={`${n} cut from`}
+              value={path.cutFrom}
+              onChange={(cutFrom) => set({ cutFrom })}
+              rules={complexRules(rules, `${f}.cut.from`)}
+            />
             <ComplexInput
               label={path.cutKind === 'ray' ? `${n} cut through` : `${n} cut to`}
               value={path.cutTo}
@@ -92,7 +158,11 @@ export function PathEditor({ path, index, onChange, onRemove, rules }: { path: P
           <FormTextInput
             label={`${n} along`}
             visibleLabel="Along the cut"
-            hint={path.cutKind === 'ray' ? 'distances from its start, separated by commas' : 'fractions of its length in [0, 1], separated by commas'}
+            hint={
+              path.cutKind === 'ray'
+                ? 'distances from its start, separated by commas'
+                : 'fractions of its length in [0, 1], separated by commas'
+            }
             value={path.along}
             onChangeText={(along) => set({ along })}
             rules={rules(`${f}.along`, 'within')}
@@ -121,9 +191,25 @@ export function PathEditor({ path, index, onChange, onRemove, rules }: { path: P
             onChange={(sampling) => set({ sampling })}
           />
           {path.sampling === 'samples' ? (
-            <FormTextInput label={`${n} samples`} visibleLabel="Samples" hint="points at t = i/(samples − 1)" value={path.samples} onChangeText={(samples) => set({ samples })} rules={rules(`${f}.samples`)} mono />
+            <FormTextInput
+              label={`${n} samples`}
+              visibleLabel="Samples"
+              hint="points at t = i/(samples − 1)"
+              value={path.samples}
+              onChangeText={(samples) => set({ samples })}
+              rules={rules(`${f}.samples`)}
+              mono
+            />
           ) : (
-            <FormTextInput label={`${n} at`} visibleLabel="At t" hint="values of t in [0, 1], separated by commas" value={path.at} onChangeText={(at) => set({ at })} rules={rules(`${f}.at`, 'within').concat(rules(`${f}.samples`))} mono />
+            <FormTextInput
+              label={`${n} at`}
+              visibleLabel="At t"
+              hint="values of t in [0, 1], separated by commas"
+              value={path.at}
+              onChangeText={(at) => set({ at })}
+              rules={rules(`${f}.at`, 'within').concat(rules(`${f}.samples`))}
+              mono
+            />
           )}
         </>
       ) : null}

@@ -22,7 +22,12 @@ export function PlanDetail({ plan, canEdit }: { plan: PlanView; canEdit: boolean
   const router = useRouter();
   const [editing, setEditing] = useState(false);
   const remove = useDeletePlan();
-  const removeFailure = remove.error instanceof ApiRequestError ? remove.error.body.message : remove.error ? 'The server could not be reached.' : null;
+  const removeFailure =
+    remove.error instanceof ApiRequestError
+      ? remove.error.body.message
+      : remove.error
+        ? 'The server could not be reached.'
+        : null;
   const missing = plan.targets.filter((t) => !t.installed);
   const pairs = plan.suites.filter((s) => s.approvedVersion !== null).length * (plan.targets.length - missing.length);
 
@@ -36,7 +41,10 @@ export function PlanDetail({ plan, canEdit }: { plan: PlanView; canEdit: boolean
             <View key={s.slug} style={styles.item}>
               <Text style={styles.itemTitle}>{s.title}</Text>
               <Text style={styles.itemDetail}>
-                {s.slug} · {s.approvedVersion === null ? '− no approved version: skipped by runs' : `v${s.approvedVersion} approved`}
+                {s.slug} ·{' '}
+                {s.approvedVersion === null
+                  ? '− no approved version: skipped by runs'
+                  : `v${s.approvedVersion} approved`}
               </Text>
             </View>
           ))}
@@ -47,11 +55,15 @@ export function PlanDetail({ plan, canEdit }: { plan: PlanView; canEdit: boolean
           {plan.targets.map((t) => (
             <View key={t.name} style={styles.targetRow}>
               <Text style={styles.target}>{t.name}</Text>
-              <Text style={[styles.installed, !t.installed && styles.missing]}>{t.installed ? '✓ installed' : '− not installed'}</Text>
+              <Text style={[styles.installed, !t.installed && styles.missing]}>
+                {t.installed ? '✓ installed' : '− not installed'}
+              </Text>
             </View>
           ))}
         </View>
-        {missing.length > 0 ? <Text style={styles.missing}>Runs skip targets that are not installed on this server.</Text> : null}
+        {missing.length > 0 ? (
+          <Text style={styles.missing}>Runs skip targets that are not installed on this server.</Text>
+        ) : null}
       </TitledPanel>
     </View>
   );
@@ -59,14 +71,19 @@ export function PlanDetail({ plan, canEdit }: { plan: PlanView; canEdit: boolean
   const side = (
     <View style={styles.column}>
       {canEdit ? (
-        <TitledPanel title="Run" lead={`Checks ${pairs} suite × target ${pairs === 1 ? 'pair' : 'pairs'} now: approved suites on installed targets.`}>
+        <TitledPanel
+          title="Run"
+          lead={`Checks ${pairs} suite × target ${pairs === 1 ? 'pair' : 'pairs'} now: approved suites on installed targets.`}
+        >
           <StartRunButton planId={plan.id} planName={plan.name} />
         </TitledPanel>
       ) : null}
       <PlanSchedules planId={plan.id} canEdit={canEdit} />
       <TitledPanel title="Regression mail">
         {plan.recipients.length === 0 ? (
-          <Text style={styles.muted}>No recipients named here; people subscribed to these libraries still hear about regressions.</Text>
+          <Text style={styles.muted}>
+            No recipients named here; people subscribed to these libraries still hear about regressions.
+          </Text>
         ) : (
           plan.recipients.map((r) => (
             <Text key={r} style={styles.recipient}>
@@ -86,7 +103,8 @@ export function PlanDetail({ plan, canEdit }: { plan: PlanView; canEdit: boolean
       </Text>
       <View style={styles.note}>
         <Text style={styles.noteText}>
-          A run checks only the points, paths, conventions and properties written in these suites, on these targets. A clean run is evidence for those checks, not a certificate for the library.
+          A run checks only the points, paths, conventions and properties written in these suites, on these targets. A
+          clean run is evidence for those checks, not a certificate for the library.
         </Text>
       </View>
       {/* On a phone, running and scheduling come first: the suite list can be long. Keyed, so turning
@@ -122,7 +140,12 @@ export function PlanDetail({ plan, canEdit }: { plan: PlanView; canEdit: boolean
 
 const styles = StyleSheet.create({
   detail: { gap: theme.space(4) },
-  description: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.inkSoft, lineHeight: 24 },
+  description: {
+    fontFamily: theme.font.regular,
+    fontSize: theme.size.body,
+    color: theme.color.inkSoft,
+    lineHeight: 24,
+  },
   meta: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkFaint },
   mono: { fontFamily: theme.font.mono },
   note: { borderLeftWidth: 3, borderLeftColor: theme.color.focus, paddingLeft: theme.space(3) },

@@ -24,7 +24,15 @@ const splitAddresses = (text: string) => text.split(/[\s,;]+/).filter((a) => a.l
  * approved version, a target no longer installed, a name already taken) shows beside its field,
  * and everything typed stays.
  */
-export function PlanForm({ plan, onSaved, onCancel }: { plan?: PlanView; onSaved: (plan: PlanView) => void; onCancel: () => void }) {
+export function PlanForm({
+  plan,
+  onSaved,
+  onCancel,
+}: {
+  plan?: PlanView;
+  onSaved: (plan: PlanView) => void;
+  onCancel: () => void;
+}) {
   const choices = usePlanChoices();
   const save = useSavePlan(plan?.id ?? null);
   const wide = useWindowDimensions().width >= theme.wide;
@@ -46,7 +54,10 @@ export function PlanForm({ plan, onSaved, onCancel }: { plan?: PlanView; onSaved
         const [field, index] = issue.path;
         if (!FIELDS.includes(field as Field) || errors[field as Field]) continue;
         // An element's rule names the element, so "recipients.1 must be an e-mail address" says which one.
-        const element = typeof index === 'number' ? (body[field as 'recipients' | 'suites' | 'targets'] as string[])[index] : undefined;
+        const element =
+          typeof index === 'number'
+            ? (body[field as 'recipients' | 'suites' | 'targets'] as string[])[index]
+            : undefined;
         errors[field as Field] = element !== undefined ? `“${element}” ${issue.message}` : issue.message;
       }
     }
@@ -85,18 +96,25 @@ export function PlanForm({ plan, onSaved, onCancel }: { plan?: PlanView; onSaved
         : null;
 
   if (choices.isPending) return <QueryState state="loading" />;
-  if (choices.isError) return <QueryState state="error" message={choices.error.message} onRetry={() => void choices.refetch()} />;
+  if (choices.isError)
+    return <QueryState state="error" message={choices.error.message} onRetry={() => void choices.refetch()} />;
 
   const approved = choices.data.suites.filter((s) => s.approvedVersion !== null);
   const waiting = choices.data.suites.length - approved.length;
   const suiteItems = [
     ...approved.map((s) => ({ key: s.slug, title: s.title, detail: `${s.slug} · v${s.approvedVersion} approved` })),
     // A suite already in the plan that lost its approval stays visible, so it can be taken out.
-    ...suites.filter((slug) => !approved.some((s) => s.slug === slug)).map((slug) => ({ key: slug, title: slug, detail: slug, blocked: 'no approved version' })),
+    ...suites
+      .filter((slug) => !approved.some((s) => s.slug === slug))
+      .map((slug) => ({ key: slug, title: slug, detail: slug, blocked: 'no approved version' })),
   ];
   const targetItems = [
-    ...choices.data.targets.filter((t) => t.installed).map((t) => ({ key: t.name, title: t.name, detail: `${t.library} ${t.version}` })),
-    ...targets.filter((name) => !choices.data.targets.some((t) => t.installed && t.name === name)).map((name) => ({ key: name, title: name, blocked: 'not installed on this server' })),
+    ...choices.data.targets
+      .filter((t) => t.installed)
+      .map((t) => ({ key: t.name, title: t.name, detail: `${t.library} ${t.version}` })),
+    ...targets
+      .filter((name) => !choices.data.targets.some((t) => t.installed && t.name === name))
+      .map((name) => ({ key: name, title: name, blocked: 'not installed on this server' })),
   ];
 
   return (
@@ -138,7 +156,10 @@ export function PlanForm({ plan, onSaved, onCancel }: { plan?: PlanView; onSaved
             multiline
             testID="plan-recipients"
           />
-          <Text style={styles.help}>Who gets the regression mail of this plan, separated by commas. People can also subscribe to a library in their Settings.</Text>
+          <Text style={styles.help}>
+            Who gets the regression mail of this plan, separated by commas. People can also subscribe to a library in
+            their Settings.
+          </Text>
         </View>
         <View style={[styles.column, wide && styles.columnWide]}>
           <CheckList
@@ -169,7 +190,13 @@ export function PlanForm({ plan, onSaved, onCancel }: { plan?: PlanView; onSaved
           />
         </View>
       </View>
-      <FormActions failure={other} saveLabel={plan ? 'Save plan' : 'Create plan'} onSave={submit} busy={save.isPending} onCancel={onCancel} />
+      <FormActions
+        failure={other}
+        saveLabel={plan ? 'Save plan' : 'Create plan'}
+        onSave={submit}
+        busy={save.isPending}
+        onCancel={onCancel}
+      />
     </View>
   );
 }

@@ -11,16 +11,29 @@ import { RunStatusBadge } from './run-status-badge';
 /** How failures and errors moved since the previous completed run, in words with arrows. */
 function change(latest: Counts, previous: Counts): string {
   const parts: string[] = [];
-  for (const [key, word] of [['fail', 'failed'], ['error', 'in error']] as const) {
+  for (const [key, word] of [
+    ['fail', 'failed'],
+    ['error', 'in error'],
+  ] as const) {
     const d = latest[key] - previous[key];
     if (d > 0) parts.push(`↑ ${d} more ${word}`);
     if (d < 0) parts.push(`↓ ${-d} fewer ${word}`);
   }
-  return parts.length ? `Since the previous completed run: ${parts.join(', ')}.` : 'Since the previous completed run: no change in failures or errors.';
+  return parts.length
+    ? `Since the previous completed run: ${parts.join(', ')}.`
+    : 'Since the previous completed run: no change in failures or errors.';
 }
 
 /** A plan on the Overview: its latest finished run (status, counts, regressions, change since the run before), or that it never ran. */
-export function PlanLatestCard({ plan, now, inRow = false }: { plan: OverviewView['plans'][number]; now?: number; inRow?: boolean }) {
+export function PlanLatestCard({
+  plan,
+  now,
+  inRow = false,
+}: {
+  plan: OverviewView['plans'][number];
+  now?: number;
+  inRow?: boolean;
+}) {
   const run = plan.latest;
   return (
     <View style={[styles.card, inRow && styles.inRow]} testID={`plan-${plan.planName}`}>
@@ -44,12 +57,20 @@ export function PlanLatestCard({ plan, now, inRow = false }: { plan: OverviewVie
           {plan.previous ? <Text style={styles.meta}>{change(run.counts, plan.previous.counts)}</Text> : null}
           <View style={styles.links}>
             <Link href={`/runs/${run.id}`} asChild>
-              <Pressable accessibilityRole="link" accessibilityLabel={`Open the latest run of ${plan.planName}`} style={StyleSheet.flatten(styles.link)}>
+              <Pressable
+                accessibilityRole="link"
+                accessibilityLabel={`Open the latest run of ${plan.planName}`}
+                style={StyleSheet.flatten(styles.link)}
+              >
                 <Text style={styles.linkText}>Open run →</Text>
               </Pressable>
             </Link>
             <Link href={`/runs?plan=${plan.planId}`} asChild>
-              <Pressable accessibilityRole="link" accessibilityLabel={`Every run of ${plan.planName}`} style={StyleSheet.flatten(styles.link)}>
+              <Pressable
+                accessibilityRole="link"
+                accessibilityLabel={`Every run of ${plan.planName}`}
+                style={StyleSheet.flatten(styles.link)}
+              >
                 <Text style={styles.linkText}>All runs of this plan</Text>
               </Pressable>
             </Link>
@@ -63,12 +84,24 @@ export function PlanLatestCard({ plan, now, inRow = false }: { plan: OverviewVie
 }
 
 const styles = StyleSheet.create({
-  card: { backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, padding: theme.space(4), gap: theme.space(2) },
+  card: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+    gap: theme.space(2),
+  },
   // Only beside other cards: in a column a basis would set the height.
   inRow: { flexGrow: 1, flexBasis: 320 },
   plan: { fontFamily: theme.font.bold, fontSize: theme.size.body, color: theme.color.ink },
   meta: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
-  regressions: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
+  regressions: {
+    fontFamily: theme.font.medium,
+    fontSize: theme.size.small,
+    color: theme.color.inkSoft,
+    lineHeight: 20,
+  },
   danger: { color: theme.color.danger },
   links: { flexDirection: 'row', flexWrap: 'wrap', columnGap: theme.space(5) },
   link: { minHeight: 44, justifyContent: 'center' },

@@ -15,8 +15,15 @@ export function PlanList() {
   const columns = width >= 1400 ? 3 : width >= theme.wide ? 2 : 1;
 
   if (plans.isPending) return <QueryState state="loading" />;
-  if (plans.isError) return <QueryState state="error" message={plans.error.message} onRetry={() => void plans.refetch()} />;
-  if (plans.data.length === 0) return <QueryState state="empty" message="No plans yet. A plan pairs approved suites with targets and says who hears about regressions." />;
+  if (plans.isError)
+    return <QueryState state="error" message={plans.error.message} onRetry={() => void plans.refetch()} />;
+  if (plans.data.length === 0)
+    return (
+      <QueryState
+        state="empty"
+        message="No plans yet. A plan pairs approved suites with targets and says who hears about regressions."
+      />
+    );
 
   const byPlan = new Map<string, ScheduleView[]>();
   for (const s of schedules.data ?? []) byPlan.set(s.planId, [...(byPlan.get(s.planId) ?? []), s]);
@@ -32,7 +39,11 @@ export function PlanList() {
         const when = next ? formatTimeInZone(next.at, next.zone) : null;
         return (
           <Link key={plan.id} href={`/plans/${plan.id}` as never} asChild>
-            <Pressable accessibilityRole="link" accessibilityLabel={`Plan ${plan.name}`} style={StyleSheet.flatten([styles.card, { width: columns === 1 ? '100%' : `${100 / columns - 2}%` }])}>
+            <Pressable
+              accessibilityRole="link"
+              accessibilityLabel={`Plan ${plan.name}`}
+              style={StyleSheet.flatten([styles.card, { width: columns === 1 ? '100%' : `${100 / columns - 2}%` }])}
+            >
               <Text style={styles.name}>{plan.name}</Text>
               {plan.description ? (
                 <Text style={styles.description} numberOfLines={3}>
@@ -40,7 +51,8 @@ export function PlanList() {
                 </Text>
               ) : null}
               <Text style={styles.shape}>
-                {plan.suites.length} {plan.suites.length === 1 ? 'suite' : 'suites'} × {plan.targets.length} {plan.targets.length === 1 ? 'target' : 'targets'}
+                {plan.suites.length} {plan.suites.length === 1 ? 'suite' : 'suites'} × {plan.targets.length}{' '}
+                {plan.targets.length === 1 ? 'target' : 'targets'}
               </Text>
               <Text style={styles.targets} numberOfLines={2}>
                 {plan.targets.map((t) => (t.installed ? t.name : `${t.name} (not installed)`)).join(' · ')}
@@ -69,9 +81,22 @@ export function PlanList() {
 
 const styles = StyleSheet.create({
   grid: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
-  card: { backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, padding: theme.space(4), gap: theme.space(2), minHeight: 44 },
+  card: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+    gap: theme.space(2),
+    minHeight: 44,
+  },
   name: { fontFamily: theme.font.bold, fontSize: theme.size.large, color: theme.color.ink },
-  description: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
+  description: {
+    fontFamily: theme.font.regular,
+    fontSize: theme.size.small,
+    color: theme.color.inkSoft,
+    lineHeight: 20,
+  },
   shape: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accent },
   targets: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.inkSoft },
   foot: { marginTop: 'auto', paddingTop: theme.space(2), borderTopWidth: 1, borderTopColor: theme.color.rule, gap: 2 },

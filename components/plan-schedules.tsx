@@ -14,10 +14,18 @@ export function PlanSchedules({ planId, canEdit }: { planId: string; canEdit: bo
   const [adding, setAdding] = useState(false);
   const mine = schedules.data?.filter((s) => s.planId === planId) ?? [];
   return (
-    <TitledPanel title="Schedules" lead="When this plan runs by itself. Times are cron expressions read in the schedule's time zone." testID="plan-schedules">
+    <TitledPanel
+      title="Schedules"
+      lead="When this plan runs by itself. Times are cron expressions read in the schedule's time zone."
+      testID="plan-schedules"
+    >
       {schedules.isPending ? <QueryState state="loading" /> : null}
-      {schedules.isError ? <QueryState state="error" message={schedules.error.message} onRetry={() => void schedules.refetch()} /> : null}
-      {schedules.isSuccess && mine.length === 0 && !adding ? <Text style={styles.none}>No schedule: this plan runs only when started by hand or through the API.</Text> : null}
+      {schedules.isError ? (
+        <QueryState state="error" message={schedules.error.message} onRetry={() => void schedules.refetch()} />
+      ) : null}
+      {schedules.isSuccess && mine.length === 0 && !adding ? (
+        <Text style={styles.none}>No schedule: this plan runs only when started by hand or through the API.</Text>
+      ) : null}
       {mine.map((s) => (
         <ScheduleCard key={s.id} schedule={s} canEdit={canEdit} />
       ))}

@@ -48,10 +48,29 @@ const PAD = 28;
  * axes, so angles and circles look like what they are. Each mark tone has a distinct shape and
  * the legend names it, so colour never carries the meaning alone.
  */
-export function PlanePicture({ label, paths = [], pointSets = [], cuts = [], lines = [], branchPoints = [], marks = [], view, height = 320, testID }: PlanePictureProps) {
+export function PlanePicture({
+  label,
+  paths = [],
+  pointSets = [],
+  cuts = [],
+  lines = [],
+  branchPoints = [],
+  marks = [],
+  view,
+  height = 320,
+  testID,
+}: PlanePictureProps) {
   const [width, setWidth] = useState(0);
   const onLayout = (e: LayoutChangeEvent) => setWidth(Math.round(e.nativeEvent.layout.width));
-  const box = view ?? fitPlaneView([...paths.flatMap((p) => p.points), ...pointSets.flatMap((p) => p.points), ...cuts.flatMap((c) => c.points), ...branchPoints, ...marks.map((m) => m.at)]);
+  const box =
+    view ??
+    fitPlaneView([
+      ...paths.flatMap((p) => p.points),
+      ...pointSets.flatMap((p) => p.points),
+      ...cuts.flatMap((c) => c.points),
+      ...branchPoints,
+      ...marks.map((m) => m.at),
+    ]);
   const innerW = Math.max(1, width - 2 * PAD);
   const innerH = Math.max(1, height - 2 * PAD);
   // Equal scale: the box is widened along one axis to the picture's aspect ratio.
@@ -62,7 +81,8 @@ export function PlanePicture({ label, paths = [], pointSets = [], cuts = [], lin
   const y = (im: number) => height / 2 - (im - midIm) * scale;
   const visible = (p: PlanePoint) => Number.isFinite(p.re) && Number.isFinite(p.im);
   const far = (2 * (width + height)) / scale;
-  const legendOf = (m: (typeof marks)[number]) => (m.kind ? `${m.kind.glyph} ${MARK_STYLES[m.tone].word}: ${m.kind.word}` : MARK_STYLES[m.tone].word);
+  const legendOf = (m: (typeof marks)[number]) =>
+    m.kind ? `${m.kind.glyph} ${MARK_STYLES[m.tone].word}: ${m.kind.word}` : MARK_STYLES[m.tone].word;
   const legendMarks = [...new Map(marks.map((m) => [legendOf(m), m])).values()];
 
   return (
@@ -106,7 +126,14 @@ export function PlanePicture({ label, paths = [], pointSets = [], cuts = [], lin
               return (
                 <G key={`line-${i}`}>
                   {/* Dots sit on a cut drawn beneath them: no joining line, so the cut's dashes stay visible between them. */}
-                  {line.marker === 'cross' && pts.length > 1 ? <Polyline points={pts.map((p) => `${x(p.re)},${y(p.im)}`).join(' ')} fill="none" stroke={color} strokeWidth={1.5} /> : null}
+                  {line.marker === 'cross' && pts.length > 1 ? (
+                    <Polyline
+                      points={pts.map((p) => `${x(p.re)},${y(p.im)}`).join(' ')}
+                      fill="none"
+                      stroke={color}
+                      strokeWidth={1.5}
+                    />
+                  ) : null}
                   {pts.map((p, k) => (
                     <LineMarker key={k} cx={x(p.re)} cy={y(p.im)} marker={line.marker} />
                   ))}
@@ -122,8 +149,17 @@ export function PlanePicture({ label, paths = [], pointSets = [], cuts = [], lin
               const angle = (Math.atan2(-(b.im - a.im), b.re - a.re) * 180) / Math.PI;
               return (
                 <G key={`path-${i}`}>
-                  <Polyline points={pts.map((p) => `${x(p.re)},${y(p.im)}`).join(' ')} fill="none" stroke={theme.color.ink} strokeWidth={1.5} />
-                  <Path d="M -6 -5 L 4 0 L -6 5 Z" fill={theme.color.ink} transform={`translate(${x(b.re)} ${y(b.im)}) rotate(${angle})`} />
+                  <Polyline
+                    points={pts.map((p) => `${x(p.re)},${y(p.im)}`).join(' ')}
+                    fill="none"
+                    stroke={theme.color.ink}
+                    strokeWidth={1.5}
+                  />
+                  <Path
+                    d="M -6 -5 L 4 0 L -6 5 Z"
+                    fill={theme.color.ink}
+                    transform={`translate(${x(b.re)} ${y(b.im)}) rotate(${angle})`}
+                  />
                 </G>
               );
             })}
@@ -134,9 +170,11 @@ export function PlanePicture({ label, paths = [], pointSets = [], cuts = [], lin
                 ))}
               </G>
             ))}
-            {marks.filter((m) => visible(m.at)).map((m, i) => (
-              <MarkShape key={`mark-${i}`} cx={x(m.at.re)} cy={y(m.at.im)} tone={m.tone} color={m.kind?.color} />
-            ))}
+            {marks
+              .filter((m) => visible(m.at))
+              .map((m, i) => (
+                <MarkShape key={`mark-${i}`} cx={x(m.at.re)} cy={y(m.at.im)} tone={m.tone} color={m.kind?.color} />
+              ))}
             {branchPoints.filter(visible).map((p, i) => (
               <BranchPointShape key={`bp-${i}`} cx={x(p.re)} cy={y(p.im)} />
             ))}
@@ -151,7 +189,9 @@ export function PlanePicture({ label, paths = [], pointSets = [], cuts = [], lin
         ) : null}
         {[...new Map(lines.map((l) => [`${l.marker} ${l.name}`, l])).values()].map((l) => (
           <LegendEntry key={`${l.marker} ${l.name}`} text={l.name}>
-            {l.marker === 'cross' ? <Line x1={1} x2={17} y1={8} y2={8} stroke={theme.color.danger} strokeWidth={1.5} /> : null}
+            {l.marker === 'cross' ? (
+              <Line x1={1} x2={17} y1={8} y2={8} stroke={theme.color.danger} strokeWidth={1.5} />
+            ) : null}
             <LineMarker cx={4} cy={8} marker={l.marker} />
             <LineMarker cx={14} cy={8} marker={l.marker} />
           </LegendEntry>
@@ -167,7 +207,11 @@ export function PlanePicture({ label, paths = [], pointSets = [], cuts = [], lin
           </LegendEntry>
         ) : null}
         {pointSets.length ? (
-          <LegendEntry text={pointSets.length === 1 ? `points of ${pointSets[0]!.name}` : `points of ${pointSets.length} straddles`}>
+          <LegendEntry
+            text={
+              pointSets.length === 1 ? `points of ${pointSets[0]!.name}` : `points of ${pointSets.length} straddles`
+            }
+          >
             <PointDot cx={9} cy={8} />
           </LegendEntry>
         ) : null}
@@ -177,7 +221,8 @@ export function PlanePicture({ label, paths = [], pointSets = [], cuts = [], lin
           </LegendEntry>
         ))}
         <Text style={styles.scale}>
-          Re {fmt(midRe - innerW / 2 / scale)} … {fmt(midRe + innerW / 2 / scale)}, Im {fmt(midIm - innerH / 2 / scale)} … {fmt(midIm + innerH / 2 / scale)}
+          Re {fmt(midRe - innerW / 2 / scale)} … {fmt(midRe + innerW / 2 / scale)}, Im {fmt(midIm - innerH / 2 / scale)}{' '}
+          … {fmt(midIm + innerH / 2 / scale)}
         </Text>
       </View>
     </View>
@@ -185,18 +230,38 @@ export function PlanePicture({ label, paths = [], pointSets = [], cuts = [], lin
 }
 
 /** `inLegend` draws the ring smaller, so it fits the legend's 18 × 16 swatch. */
-function MarkShape({ cx, cy, tone, color = MARK_STYLES[tone].color, inLegend = false }: { cx: number; cy: number; tone: MarkTone; color?: string; inLegend?: boolean }) {
+function MarkShape({
+  cx,
+  cy,
+  tone,
+  color = MARK_STYLES[tone].color,
+  inLegend = false,
+}: {
+  cx: number;
+  cy: number;
+  tone: MarkTone;
+  color?: string;
+  inLegend?: boolean;
+}) {
   switch (tone) {
     case 'pass':
       return <Circle cx={cx} cy={cy} r={3} fill={color} />;
     case 'fail':
-      return <Path d={`M ${cx - 5} ${cy - 5} L ${cx + 5} ${cy + 5} M ${cx - 5} ${cy + 5} L ${cx + 5} ${cy - 5}`} stroke={color} strokeWidth={2.5} />;
+      return (
+        <Path
+          d={`M ${cx - 5} ${cy - 5} L ${cx + 5} ${cy + 5} M ${cx - 5} ${cy + 5} L ${cx + 5} ${cy - 5}`}
+          stroke={color}
+          strokeWidth={2.5}
+        />
+      );
     case 'error':
       return <Path d={`M ${cx} ${cy - 6} L ${cx + 6} ${cy + 5} L ${cx - 6} ${cy + 5} Z`} fill={color} />;
     case 'skipped':
       return <Rect x={cx - 4} y={cy - 4} width={8} height={8} fill="none" stroke={color} strokeWidth={1.5} />;
     case 'focus':
-      return <Circle cx={cx} cy={cy} r={inLegend ? 5.5 : 10} fill="none" stroke={color} strokeWidth={inLegend ? 2 : 3} />;
+      return (
+        <Circle cx={cx} cy={cy} r={inLegend ? 5.5 : 10} fill="none" stroke={color} strokeWidth={inLegend ? 2 : 3} />
+      );
   }
 }
 
@@ -206,7 +271,13 @@ function PointDot({ cx, cy }: { cx: number; cy: number }) {
 
 function LineMarker({ cx, cy, marker }: { cx: number; cy: number; marker: 'dot' | 'cross' }) {
   if (marker === 'dot') return <Circle cx={cx} cy={cy} r={1.75} fill={theme.color.ink} />;
-  return <Path d={`M ${cx - 4} ${cy - 4} L ${cx + 4} ${cy + 4} M ${cx - 4} ${cy + 4} L ${cx + 4} ${cy - 4}`} stroke={theme.color.danger} strokeWidth={2} />;
+  return (
+    <Path
+      d={`M ${cx - 4} ${cy - 4} L ${cx + 4} ${cy + 4} M ${cx - 4} ${cy + 4} L ${cx + 4} ${cy - 4}`}
+      stroke={theme.color.danger}
+      strokeWidth={2}
+    />
+  );
 }
 
 function BranchPointShape({ cx, cy }: { cx: number; cy: number }) {
@@ -223,7 +294,20 @@ function fmt(v: number): string {
 }
 
 const styles = StyleSheet.create({
-  frame: { borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, overflow: 'hidden', backgroundColor: theme.color.panel },
-  legend: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3), padding: theme.space(3), borderTopWidth: 1, borderTopColor: theme.color.rule },
+  frame: {
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    overflow: 'hidden',
+    backgroundColor: theme.color.panel,
+  },
+  legend: {
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    gap: theme.space(3),
+    padding: theme.space(3),
+    borderTopWidth: 1,
+    borderTopColor: theme.color.rule,
+  },
   scale: { fontFamily: theme.font.mono, fontSize: 11, color: theme.color.inkFaint, width: '100%' },
 });

@@ -23,8 +23,18 @@ export function PointListEditor({ label, points, onChange, rules, field }: Props
     <View style={styles.list}>
       {points.map((p, k) => (
         <View key={k} style={styles.row}>
-          <ComplexInput label={`${label} ${k + 1}`} value={p} onChange={(v) => set(k, v)} rules={complexRules(rules, `${field}.${k}`)} />
-          <SmallButton label="−" accessibilityLabel={`Remove ${label.toLowerCase()} ${k + 1}`} onPress={() => onChange(points.filter((_, j) => j !== k))} danger />
+          <ComplexInput
+            label={`${label} ${k + 1}`}
+            value={p}
+            onChange={(v) => set(k, v)}
+            rules={complexRules(rules, `${field}.${k}`)}
+          />
+          <SmallButton
+            label="−"
+            accessibilityLabel={`Remove ${label.toLowerCase()} ${k + 1}`}
+            onPress={() => onChange(points.filter((_, j) => j !== k))}
+            danger
+          />
         </View>
       ))}
       <SmallButton

@@ -11,7 +11,8 @@ const KIND = {
   'not-checked': { glyph: '−', word: 'not checked', tone: 'neutral' },
 } as const satisfies Record<PropertyOutcome['kind'], { glyph: string; word: string; tone: keyof typeof OUTCOME_TONE }>;
 
-const complex = (c: { re: string; im: string }) => `${c.re} ${c.im.startsWith('-') ? '−' : '+'} ${c.im.replace(/^-/, '')}i`;
+const complex = (c: { re: string; im: string }) =>
+  `${c.re} ${c.im.startsWith('-') ? '−' : '+'} ${c.im.replace(/^-/, '')}i`;
 
 const plural = (n: number, word: string) => `${n.toLocaleString('en-GB')} ${word}${n === 1 ? '' : 's'}`;
 
@@ -28,7 +29,8 @@ export function PropertyChecks({ rows }: { rows: RunPropertyRow[] }) {
     const key = `${row.suite} × ${row.target}`;
     groups.set(key, [...(groups.get(key) ?? []), row]);
   }
-  const rank = (checks: RunPropertyRow[]) => (checks.some((r) => r.outcome.kind === 'failed') ? 0 : checks.some((r) => r.outcome.kind === 'not-checked') ? 1 : 2);
+  const rank = (checks: RunPropertyRow[]) =>
+    checks.some((r) => r.outcome.kind === 'failed') ? 0 : checks.some((r) => r.outcome.kind === 'not-checked') ? 1 : 2;
   const ordered = [...groups.entries()].sort(([a, ra], [b, rb]) => rank(ra) - rank(rb) || a.localeCompare(b));
   const count = (kind: PropertyOutcome['kind']) => rows.filter((r) => r.outcome.kind === kind).length;
   const toggle = (pair: string) =>
@@ -42,7 +44,8 @@ export function PropertyChecks({ rows }: { rows: RunPropertyRow[] }) {
   return (
     <View style={styles.list}>
       <Text style={styles.summary} testID="property-summary">
-        {plural(rows.length, 'check')} over {plural(groups.size, 'pair')}: {count('failed')} failed, {count('not-checked')} not checked, {count('held')} held.
+        {plural(rows.length, 'check')} over {plural(groups.size, 'pair')}: {count('failed')} failed,{' '}
+        {count('not-checked')} not checked, {count('held')} held.
       </Text>
       {ordered.map(([pair, checks]) => {
         const allHeld = rank(checks) === 2;
@@ -65,7 +68,9 @@ export function PropertyChecks({ rows }: { rows: RunPropertyRow[] }) {
             ) : (
               <Text style={styles.pair}>{pair}</Text>
             )}
-            {open ? checks.map(({ outcome }) => <PropertyCheckCard key={outcome.law} pair={pair} outcome={outcome} />) : null}
+            {open
+              ? checks.map(({ outcome }) => <PropertyCheckCard key={outcome.law} pair={pair} outcome={outcome} />)
+              : null}
           </View>
         );
       })}
@@ -88,14 +93,17 @@ function PropertyCheckCard({ pair, outcome }: { pair: string; outcome: PropertyO
       <Text style={styles.title}>{outcome.title}</Text>
       {outcome.kind === 'held' ? (
         <Text style={styles.detail}>
-          {outcome.runs.toLocaleString('en-GB')} points drawn{outcome.excluded ? `, ${outcome.excluded} where the law makes no claim` : ''}. {outcome.statement}
+          {outcome.runs.toLocaleString('en-GB')} points drawn
+          {outcome.excluded ? `, ${outcome.excluded} where the law makes no claim` : ''}. {outcome.statement}
         </Text>
       ) : null}
       {outcome.kind === 'not-checked' ? <Text style={styles.detail}>{outcome.reason}</Text> : null}
       {outcome.kind === 'failed' ? (
         <View style={styles.failure}>
           <Text style={styles.detail}>{outcome.reason}</Text>
-          <Text style={styles.label}>Counterexample (after {outcome.shrinks} shrinks, {outcome.runs} runs)</Text>
+          <Text style={styles.label}>
+            Counterexample (after {outcome.shrinks} shrinks, {outcome.runs} runs)
+          </Text>
           {outcome.counterexample.map((z, i) => (
             <Text key={i} style={styles.mono} selectable>
               {outcome.counterexample.length > 1 ? `z${i + 1}` : 'z'} = {complex(z)}
@@ -119,10 +127,30 @@ function PropertyCheckCard({ pair, outcome }: { pair: string; outcome: PropertyO
 const styles = StyleSheet.create({
   list: { gap: theme.space(4) },
   summary: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
-  foldRow: { minHeight: 44, flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between', columnGap: theme.space(3), paddingHorizontal: theme.space(3), borderRadius: theme.radius, borderWidth: 1, borderColor: theme.color.rule, backgroundColor: theme.color.panel },
+  foldRow: {
+    minHeight: 44,
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    alignItems: 'center',
+    justifyContent: 'space-between',
+    columnGap: theme.space(3),
+    paddingHorizontal: theme.space(3),
+    borderRadius: theme.radius,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    backgroundColor: theme.color.panel,
+  },
   group: { gap: theme.space(2) },
   pair: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.ink },
-  check: { backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderLeftWidth: 4, borderRadius: theme.radius, padding: theme.space(3), gap: theme.space(1) },
+  check: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderLeftWidth: 4,
+    borderRadius: theme.radius,
+    padding: theme.space(3),
+    gap: theme.space(1),
+  },
   checkHead: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', columnGap: theme.space(3) },
   kind: { fontFamily: theme.font.medium, fontSize: theme.size.small },
   law: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.ink },
@@ -130,6 +158,11 @@ const styles = StyleSheet.create({
   title: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.ink },
   detail: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
   failure: { gap: 2, marginTop: theme.space(1) },
-  label: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkFaint, marginTop: theme.space(1) },
+  label: {
+    fontFamily: theme.font.medium,
+    fontSize: theme.size.small,
+    color: theme.color.inkFaint,
+    marginTop: theme.space(1),
+  },
   mono: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.ink },
 });

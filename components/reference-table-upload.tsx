@@ -5,7 +5,8 @@ import type { WireComplex } from '../shared/run-result';
 import { FileUploadButton } from './file-upload-button';
 import { IssueList } from './issue-list';
 
-const c = (z: WireComplex) => `${z.re} ${String(z.im).startsWith('-') ? '−' : '+'} ${String(z.im).replace(/^[+-]/, '')}i`;
+const c = (z: WireComplex) =>
+  `${z.re} ${String(z.im).startsWith('-') ? '−' : '+'} ${String(z.im).replace(/^[+-]/, '')}i`;
 
 /**
  * A CSV of reference values computed elsewhere (z, expected value, source), checked against
@@ -16,13 +17,22 @@ export function ReferenceTableUpload({ slug }: { slug: string }) {
   const check = upload.data?.check;
   return (
     <View style={styles.box}>
-      <Text style={styles.lead}>Columns z_re, z_im, expected_re, expected_im, source. Values agree within 1 ulp per part with matching zero signs.</Text>
-      <FileUploadButton label="Upload a reference CSV" types={['text/csv', '.csv']} busy={upload.isPending} onFile={(file) => upload.mutate(file)} />
+      <Text style={styles.lead}>
+        Columns z_re, z_im, expected_re, expected_im, source. Values agree within 1 ulp per part with matching zero
+        signs.
+      </Text>
+      <FileUploadButton
+        label="Upload a reference CSV"
+        types={['text/csv', '.csv']}
+        busy={upload.isPending}
+        onFile={(file) => upload.mutate(file)}
+      />
       <IssueList error={upload.error} prefix="file." />
       {check ? (
         <View style={styles.result} testID="reference-check">
           <Text style={styles.summary}>
-            {check.disagreements.length === 0 && check.invalid.length === 0 ? '✓' : '≠'} v{upload.data?.version}: {check.rows} rows read, {check.agree} agree, {check.disagreements.length} disagree
+            {check.disagreements.length === 0 && check.invalid.length === 0 ? '✓' : '≠'} v{upload.data?.version}:{' '}
+            {check.rows} rows read, {check.agree} agree, {check.disagreements.length} disagree
             {check.invalid.length ? `, ${check.invalid.length} unreadable` : ''}.
           </Text>
           {check.disagreements.map((d) => (
@@ -30,7 +40,9 @@ export function ReferenceTableUpload({ slug }: { slug: string }) {
               <Text style={styles.rowHead}>
                 ≠ line {d.line} · z = {c(d.z)} · {d.ulps === Infinity || d.ulps > 1e15 ? 'far apart' : `${d.ulps} ulps`}
               </Text>
-              <Text style={styles.mono}>theirs ({d.source || 'no source'}): {c(d.theirs)}</Text>
+              <Text style={styles.mono}>
+                theirs ({d.source || 'no source'}): {c(d.theirs)}
+              </Text>
               <Text style={styles.mono}>ours: {c(d.ours)}</Text>
             </View>
           ))}

@@ -22,7 +22,12 @@ export function ReproducerBox({ code }: { code: string }) {
         </Text>
       </ScrollView>
       <View style={styles.row}>
-        <Pressable accessibilityRole="button" accessibilityLabel="Copy reproducer" onPress={() => void copy()} style={styles.button}>
+        <Pressable
+          accessibilityRole="button"
+          accessibilityLabel="Copy reproducer"
+          onPress={() => void copy()}
+          style={styles.button}
+        >
           <Text style={styles.buttonText}>Copy reproducer</Text>
         </Pressable>
         {copied ? (
@@ -41,7 +46,14 @@ const styles = StyleSheet.create({
   inner: { padding: theme.space(3) },
   code: { fontFamily: theme.font.mono, fontSize: 13, lineHeight: 19, color: theme.color.navInk },
   row: { flexDirection: 'row', alignItems: 'center', gap: theme.space(3), flexWrap: 'wrap' },
-  button: { minHeight: theme.touch, justifyContent: 'center', paddingHorizontal: theme.space(4), borderWidth: 1, borderColor: theme.color.accent, borderRadius: theme.radius },
+  button: {
+    minHeight: theme.touch,
+    justifyContent: 'center',
+    paddingHorizontal: theme.space(4),
+    borderWidth: 1,
+    borderColor: theme.color.accent,
+    borderRadius: theme.radius,
+  },
   buttonText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accent },
   ok: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.accent },
   failed: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.danger },

@@ -9,15 +9,30 @@ import { ChipGroup } from './chip-group';
 import { FormTextInput } from './form-text-input';
 
 /** Approve a submitted version, or request changes saying what to change; the server's refusal (four eyes) is shown as it says it. */
-export function ReviewForm({ slug, version, onReviewed }: { slug: string; version: number; onReviewed: (decision: 'approve' | 'request-changes') => void }) {
+export function ReviewForm({
+  slug,
+  version,
+  onReviewed,
+}: {
+  slug: string;
+  version: number;
+  onReviewed: (decision: 'approve' | 'request-changes') => void;
+}) {
   const [decision, setDecision] = useState<'approve' | 'request-changes'>('approve');
   const [comment, setComment] = useState('');
   const [tried, setTried] = useState(false);
   const review = useReviewSuite();
   const parsed = reviewBody.safeParse({ decision, comment });
-  const clientRules = tried && !parsed.success ? parsed.error.issues.filter((i) => i.path[0] === 'comment').map((i) => i.message) : [];
-  const error = review.error instanceof ApiRequestError ? review.error.body : review.error ? { kind: 'server-error' as const, message: review.error.message } : null;
-  const serverRules = error?.kind === 'invalid-input' ? error.issues.filter((i) => i.field === 'body.comment').map((i) => i.rule) : [];
+  const clientRules =
+    tried && !parsed.success ? parsed.error.issues.filter((i) => i.path[0] === 'comment').map((i) => i.message) : [];
+  const error =
+    review.error instanceof ApiRequestError
+      ? review.error.body
+      : review.error
+        ? { kind: 'server-error' as const, message: review.error.message }
+        : null;
+  const serverRules =
+    error?.kind === 'invalid-input' ? error.issues.filter((i) => i.field === 'body.comment').map((i) => i.rule) : [];
 
   const send = () => {
     setTried(true);
@@ -49,12 +64,23 @@ export function ReviewForm({ slug, version, onReviewed }: { slug: string; versio
           × {error.message}
         </Text>
       ) : null}
-      <ActionButton label={decision === 'approve' ? `Approve version ${version}` : `Request changes to version ${version}`} onPress={send} busy={review.isPending} />
+      <ActionButton
+        label={decision === 'approve' ? `Approve version ${version}` : `Request changes to version ${version}`}
+        onPress={send}
+        busy={review.isPending}
+      />
     </View>
   );
 }
 
 const styles = StyleSheet.create({
   box: { gap: theme.space(3) },
-  refusal: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.danger, backgroundColor: theme.color.dangerSoft, padding: theme.space(3), borderRadius: theme.radius },
+  refusal: {
+    fontFamily: theme.font.medium,
+    fontSize: theme.size.body,
+    color: theme.color.danger,
+    backgroundColor: theme.color.dangerSoft,
+    padding: theme.space(3),
+    borderRadius: theme.radius,
+  },
 });

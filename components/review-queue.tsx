@@ -8,12 +8,14 @@ import { SuiteCard } from './suite-card';
 export function ReviewQueue() {
   const queue = useSuites({ status: 'submitted' });
   if (queue.isPending) return <QueryState state="loading" />;
-  if (queue.isError) return <QueryState state="error" message={queue.error.message} onRetry={() => void queue.refetch()} />;
+  if (queue.isError)
+    return <QueryState state="error" message={queue.error.message} onRetry={() => void queue.refetch()} />;
   if (queue.data.length === 0) return <QueryState state="empty" message="Nothing waits for review." />;
   return (
     <View style={styles.box}>
       <Text style={styles.count}>
-        {queue.data.length} {queue.data.length === 1 ? 'version waits' : 'versions wait'} for review. Open one to see what it changes.
+        {queue.data.length} {queue.data.length === 1 ? 'version waits' : 'versions wait'} for review. Open one to see
+        what it changes.
       </Text>
       <View style={styles.grid}>
         {queue.data.map((s) => (

@@ -6,5 +6,12 @@ import { TagPill } from './tag-pill';
 const GLYPH: Record<Role, string> = { admin: '◊', maintainer: '∆', reviewer: '•', contributor: '+' };
 
 export function RoleBadge({ role }: { role: Role }) {
-  return <TagPill text={`${GLYPH[role]} ${role}`} ink={theme.color.accent} soft={theme.color.accentSoft} accessibilityLabel={`role ${role}`} />;
+  return (
+    <TagPill
+      text={`${GLYPH[role]} ${role}`}
+      ink={theme.color.accent}
+      soft={theme.color.accentSoft}
+      accessibilityLabel={`role ${role}`}
+    />
+  );
 }

@@ -16,7 +16,12 @@ export function RunCard({ run, now }: { run: RunView; now?: number }) {
   const live = isLiveRun(run);
   return (
     <Link href={`/runs/${run.id}`} asChild>
-      <Pressable accessibilityRole="link" accessibilityLabel={`Run of ${run.planName}, ${runVerdict(run).word}, ${formatWhen(run.createdAt, now)}`} style={StyleSheet.flatten(styles.card)} testID={`run-${run.id}`}>
+      <Pressable
+        accessibilityRole="link"
+        accessibilityLabel={`Run of ${run.planName}, ${runVerdict(run).word}, ${formatWhen(run.createdAt, now)}`}
+        style={StyleSheet.flatten(styles.card)}
+        testID={`run-${run.id}`}
+      >
         <View style={styles.head}>
           <Text style={styles.plan} numberOfLines={2}>
             {run.planName}

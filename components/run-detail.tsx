@@ -35,7 +35,11 @@ export function RunDetail({ id }: { id: string }) {
     return (
       <ScreenBody title="Run">
         <BackLink />
-        <QueryState state="error" message={missing ? 'There is no run at this address.' : run.error.message} onRetry={missing ? undefined : () => void run.refetch()} />
+        <QueryState
+          state="error"
+          message={missing ? 'There is no run at this address.' : run.error.message}
+          onRetry={missing ? undefined : () => void run.refetch()}
+        />
       </ScreenBody>
     );
   }
@@ -45,14 +49,23 @@ export function RunDetail({ id }: { id: string }) {
   const notChecked = cells.length - scopes.length;
   const outcomes = properties.data?.map((p) => p.outcome.kind) ?? [];
   const propertySummary = properties.data
-    ? { held: outcomes.filter((k) => k === 'held').length, failed: outcomes.filter((k) => k === 'failed').length, notChecked: outcomes.filter((k) => k === 'not-checked').length }
+    ? {
+        held: outcomes.filter((k) => k === 'held').length,
+        failed: outcomes.filter((k) => k === 'failed').length,
+        notChecked: outcomes.filter((k) => k === 'not-checked').length,
+      }
     : undefined;
 
   return (
-    <ScreenBody title={run.data.planName} lead={`Run ${id.slice(0, 8)} of this plan: each suite × target pair is one shard.`}>
+    <ScreenBody
+      title={run.data.planName}
+      lead={`Run ${id.slice(0, 8)} of this plan: each suite × target pair is one shard.`}
+    >
       <BackLink />
       <RunHeader run={run.data} canCancel={me?.role === 'maintainer' || me?.role === 'admin'} />
-      {matrix.data ? <CheckedScopeNote scopes={scopes} pairsNotChecked={notChecked} properties={propertySummary} subject="matrix" /> : null}
+      {matrix.data ? (
+        <CheckedScopeNote scopes={scopes} pairsNotChecked={notChecked} properties={propertySummary} subject="matrix" />
+      ) : null}
 
       <Text accessibilityRole="header" style={styles.section}>
         Matrix: suite × target
@@ -75,7 +88,14 @@ export function RunDetail({ id }: { id: string }) {
       ) : properties.isError ? (
         <QueryState state="error" message={properties.error.message} onRetry={() => void properties.refetch()} />
       ) : properties.data.length === 0 ? (
-        <QueryState state="empty" message={live ? 'No property check has finished yet.' : 'No property checks in this run: its suites list none, or no pair got that far.'} />
+        <QueryState
+          state="empty"
+          message={
+            live
+              ? 'No property check has finished yet.'
+              : 'No property checks in this run: its suites list none, or no pair got that far.'
+          }
+        />
       ) : (
         <PropertyChecks rows={properties.data} />
       )}
@@ -96,5 +116,10 @@ function BackLink() {
 const styles = StyleSheet.create({
   back: { alignSelf: 'flex-start', minHeight: 44, justifyContent: 'center' },
   backText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accent },
-  section: { fontFamily: theme.font.bold, fontSize: theme.size.large, color: theme.color.ink, marginTop: theme.space(2) },
+  section: {
+    fontFamily: theme.font.bold,
+    fontSize: theme.size.large,
+    color: theme.color.ink,
+    marginTop: theme.space(2),
+  },
 });

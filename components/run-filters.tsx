@@ -5,20 +5,36 @@ import { theme } from '../constants/theme';
 import { RUN_STATUSES, RUN_TRIGGERS, type RunStatus, type RunTrigger } from '../shared/run-status';
 import { ChipGroup } from './chip-group';
 
-const STATUS_WORDS: Record<RunStatus, string> = { queued: '… queued', running: '↻ running', completed: 'completed', failed: '◊ run failed', cancelled: '× cancelled' };
+const STATUS_WORDS: Record<RunStatus, string> = {
+  queued: '… queued',
+  running: '↻ running',
+  completed: 'completed',
+  failed: '◊ run failed',
+  cancelled: '× cancelled',
+};
 const TRIGGER_WORDS: Record<RunTrigger, string> = { schedule: 'scheduled', manual: 'by hand', api: 'via API' };
 
 /**
  * The Runs list's filters: plan, status and trigger, each "any" or one value. On a phone they
  * fold behind one button that says which filters are on, so the runs start near the top.
  */
-export function RunFilters({ value, plans, onChange }: { value: Filters; plans: { id: string; name: string }[]; onChange: (next: Filters) => void }) {
+export function RunFilters({
+  value,
+  plans,
+  onChange,
+}: {
+  value: Filters;
+  plans: { id: string; name: string }[];
+  onChange: (next: Filters) => void;
+}) {
   const wide = useWindowDimensions().width >= theme.wide;
   const [open, setOpen] = useState(false);
   const planName = plans.find((p) => p.id === value.plan)?.name;
-  const on = [value.plan ? (planName ?? 'one plan') : null, value.status ? STATUS_WORDS[value.status] : null, value.trigger ? TRIGGER_WORDS[value.trigger] : null].filter(
-    (x): x is string => x !== null,
-  );
+  const on = [
+    value.plan ? (planName ?? 'one plan') : null,
+    value.status ? STATUS_WORDS[value.status] : null,
+    value.trigger ? TRIGGER_WORDS[value.trigger] : null,
+  ].filter((x): x is string => x !== null);
 
   const chips = (
     <View style={styles.box}>
@@ -33,14 +49,20 @@ export function RunFilters({ value, plans, onChange }: { value: Filters; plans: 
         <ChipGroup
           label="Status"
           groupLabel="Status filter"
-          options={[{ value: undefined, text: 'any status' }, ...RUN_STATUSES.map((s) => ({ value: s, text: STATUS_WORDS[s] }))]}
+          options={[
+            { value: undefined, text: 'any status' },
+            ...RUN_STATUSES.map((s) => ({ value: s, text: STATUS_WORDS[s] })),
+          ]}
           value={value.status}
           onChange={(status) => onChange({ ...value, status })}
         />
         <ChipGroup
           label="Trigger"
           groupLabel="Trigger filter"
-          options={[{ value: undefined, text: 'any trigger' }, ...RUN_TRIGGERS.map((t) => ({ value: t, text: TRIGGER_WORDS[t] }))]}
+          options={[
+            { value: undefined, text: 'any trigger' },
+            ...RUN_TRIGGERS.map((t) => ({ value: t, text: TRIGGER_WORDS[t] })),
+          ]}
           value={value.trigger}
           onChange={(trigger) => onChange({ ...value, trigger })}
         />
@@ -50,7 +72,13 @@ export function RunFilters({ value, plans, onChange }: { value: Filters; plans: 
   if (wide) return chips;
   return (
     <View style={styles.box}>
-      <Pressable accessibilityRole="button" accessibilityLabel="Filter runs" aria-expanded={open} onPress={() => setOpen((v) => !v)} style={styles.toggle}>
+      <Pressable
+        accessibilityRole="button"
+        accessibilityLabel="Filter runs"
+        aria-expanded={open}
+        onPress={() => setOpen((v) => !v)}
+        style={styles.toggle}
+      >
         <Text style={styles.toggleText}>{open ? '↑' : '↓'} Filter runs</Text>
         <Text style={styles.summary} numberOfLines={2}>
           {on.length ? on.join(' · ') : 'all runs'}
@@ -76,5 +104,11 @@ const styles = StyleSheet.create({
     backgroundColor: theme.color.panel,
   },
   toggleText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
-  summary: { flex: 1, textAlign: 'right', fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
+  summary: {
+    flex: 1,
+    textAlign: 'right',
+    fontFamily: theme.font.regular,
+    fontSize: theme.size.small,
+    color: theme.color.inkSoft,
+  },
 });

@@ -17,7 +17,14 @@ export function RunHeader({ run, canCancel }: { run: RunView; canCancel: boolean
     ['Started', `${triggerWords(run.trigger, run.requestedBy)}, ${formatWhen(run.createdAt)}`],
     ['Duration', runDuration(run)],
     ['Shards', `${run.shardsDone} of ${run.shardsTotal} done`],
-    ['Regressions', run.regressions === null ? (live ? 'counted when the run completes' : 'not compared') : `${run.regressions} since the previous completed run`],
+    [
+      'Regressions',
+      run.regressions === null
+        ? live
+          ? 'counted when the run completes'
+          : 'not compared'
+        : `${run.regressions} since the previous completed run`,
+    ],
   ];
   return (
     <View style={styles.card}>
@@ -26,7 +33,9 @@ export function RunHeader({ run, canCancel }: { run: RunView; canCancel: boolean
         {facts.map(([label, value]) => (
           <View key={label} style={styles.fact}>
             <Text style={styles.label}>{label}</Text>
-            <Text style={[styles.value, label === 'Regressions' && run.regressions ? styles.danger : null]}>{value}</Text>
+            <Text style={[styles.value, label === 'Regressions' && run.regressions ? styles.danger : null]}>
+              {value}
+            </Text>
           </View>
         ))}
       </View>
@@ -42,10 +51,23 @@ export function RunHeader({ run, canCancel }: { run: RunView; canCancel: boolean
 }
 
 const styles = StyleSheet.create({
-  card: { backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, padding: theme.space(4), gap: theme.space(3) },
+  card: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+    gap: theme.space(3),
+  },
   facts: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(4) },
   fact: { flexBasis: 150, flexGrow: 1, gap: 2 },
-  label: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkFaint, textTransform: 'uppercase', letterSpacing: 0.8 },
+  label: {
+    fontFamily: theme.font.medium,
+    fontSize: theme.size.small,
+    color: theme.color.inkFaint,
+    textTransform: 'uppercase',
+    letterSpacing: 0.8,
+  },
   value: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.ink },
   danger: { color: theme.color.danger, fontFamily: theme.font.medium },
 });

@@ -21,9 +21,15 @@ export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCel
   const [onlyProblems, setOnlyProblems] = useState(false);
   const [boxWidth, setBoxWidth] = useState(0);
   const targets = [...new Set(cells.map((c) => c.target))].sort(byName);
-  const described = new Map(cells.map((c) => [`${c.suite}\u0000${c.target}`, { cell: c, words: describeMatrixCell(c) }]));
+  const described = new Map(
+    cells.map((c) => [`${c.suite}\u0000${c.target}`, { cell: c, words: describeMatrixCell(c) }]),
+  );
   const allSuites = [...new Set(cells.map((c) => c.suite))].sort(byName);
-  const needsLook = (suite: string) => targets.some((t) => { const d = described.get(`${suite}\u0000${t}`); return d !== undefined && d.words.tone !== 'pass'; });
+  const needsLook = (suite: string) =>
+    targets.some((t) => {
+      const d = described.get(`${suite}\u0000${t}`);
+      return d !== undefined && d.words.tone !== 'pass';
+    });
   const suites = onlyProblems ? allSuites.filter(needsLook) : allSuites;
 
   const tally = { pass: 0, fail: 0, error: 0, other: 0 };
@@ -38,7 +44,11 @@ export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCel
     const entry = described.get(`${suite}\u0000${target}`);
     if (!entry) {
       return (
-        <View key={target} style={layout === 'grid' ? [styles.gridCell, styles.absent] : [styles.rowCell, styles.absent]} accessibilityLabel={`${suite} on ${target}: not part of this run`}>
+        <View
+          key={target}
+          style={layout === 'grid' ? [styles.gridCell, styles.absent] : [styles.rowCell, styles.absent]}
+          accessibilityLabel={`${suite} on ${target}: not part of this run`}
+        >
           {layout === 'row' ? <Text style={styles.rowTarget}>{target}</Text> : null}
           <Text style={styles.details}>— not in this run</Text>
         </View>
@@ -53,8 +63,9 @@ export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCel
   return (
     <View style={styles.box} onLayout={(e) => setBoxWidth(e.nativeEvent.layout.width)}>
       <Text style={styles.summary}>
-        {allSuites.length} suite{allSuites.length === 1 ? '' : 's'} × {targets.length} target{targets.length === 1 ? '' : 's'}: ✓ {tally.pass} passed · ❌ {tally.fail} with failures · ◊{' '}
-        {tally.error} error{tally.other ? ` · ${tally.other} not finished or cancelled` : ''}
+        {allSuites.length} suite{allSuites.length === 1 ? '' : 's'} × {targets.length} target
+        {targets.length === 1 ? '' : 's'}: ✓ {tally.pass} passed · ❌ {tally.fail} with failures · ◊ {tally.error} error
+        {tally.other ? ` · ${tally.other} not finished or cancelled` : ''}
       </Text>
       <Pressable
         accessibilityRole="switch"
@@ -63,7 +74,9 @@ export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCel
         onPress={() => setOnlyProblems((v) => !v)}
         style={[styles.toggle, onlyProblems && styles.toggleOn]}
       >
-        <Text style={[styles.toggleText, onlyProblems && styles.toggleTextOn]}>{onlyProblems ? '✓ ' : ''}Only suites that need a look</Text>
+        <Text style={[styles.toggleText, onlyProblems && styles.toggleTextOn]}>
+          {onlyProblems ? '✓ ' : ''}Only suites that need a look
+        </Text>
       </Pressable>
       {suites.length === 0 ? <Text style={styles.details}>Every suite passed on every target.</Text> : null}
       {wide ? (
@@ -107,9 +120,22 @@ export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCel
   );
 }
 
-function MatrixCellView({ runId, cell, words, layout }: { runId: string; cell: RunMatrixCell; words: MatrixCellWords; layout: 'grid' | 'row' }) {
+function MatrixCellView({
+  runId,
+  cell,
+  words,
+  layout,
+}: {
+  runId: string;
+  cell: RunMatrixCell;
+  words: MatrixCellWords;
+  layout: 'grid' | 'row';
+}) {
   const tone = OUTCOME_TONE[words.tone];
-  const frame = StyleSheet.flatten([layout === 'grid' ? styles.gridCell : styles.rowCell, { backgroundColor: tone.soft, borderLeftColor: tone.edge }]);
+  const frame = StyleSheet.flatten([
+    layout === 'grid' ? styles.gridCell : styles.rowCell,
+    { backgroundColor: tone.soft, borderLeftColor: tone.edge },
+  ]);
   const content = (
     <>
       {layout === 'row' ? <Text style={styles.rowTarget}>{cell.target}</Text> : null}
@@ -133,7 +159,12 @@ function MatrixCellView({ runId, cell, words, layout }: { runId: string; cell: R
   }
   return (
     <Link href={failuresHref(runId, cell.suite, cell.target)} asChild>
-      <Pressable accessibilityRole="link" accessibilityLabel={`${words.label}. Open these failures`} style={frame} testID={`cell-${cell.suite}-${cell.target}`}>
+      <Pressable
+        accessibilityRole="link"
+        accessibilityLabel={`${words.label}. Open these failures`}
+        style={frame}
+        testID={`cell-${cell.suite}-${cell.target}`}
+      >
         {content}
       </Pressable>
     </Link>
@@ -143,24 +174,71 @@ function MatrixCellView({ runId, cell, words, layout }: { runId: string; cell: R
 const styles = StyleSheet.create({
   box: { gap: theme.space(3) },
   summary: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
-  toggle: { alignSelf: 'flex-start', minHeight: 44, justifyContent: 'center', paddingHorizontal: theme.space(3), borderRadius: theme.radius, borderWidth: 1, borderColor: theme.color.rule, backgroundColor: theme.color.panel },
+  toggle: {
+    alignSelf: 'flex-start',
+    minHeight: 44,
+    justifyContent: 'center',
+    paddingHorizontal: theme.space(3),
+    borderRadius: theme.radius,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    backgroundColor: theme.color.panel,
+  },
   toggleOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
   toggleText: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink },
   toggleTextOn: { color: theme.color.accentInk, fontFamily: theme.font.medium },
   gridScroll: { flexGrow: 1 },
-  grid: { backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius },
+  grid: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+  },
   gridRow: { flexDirection: 'row', alignItems: 'stretch', borderBottomWidth: 1, borderBottomColor: theme.color.rule },
-  gridHead: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkFaint, paddingVertical: theme.space(2), paddingHorizontal: theme.space(3) },
-  suiteCol: { width: SUITE_COLUMN, paddingHorizontal: theme.space(3), paddingVertical: theme.space(2), alignSelf: 'center' },
+  gridHead: {
+    fontFamily: theme.font.medium,
+    fontSize: theme.size.small,
+    color: theme.color.inkFaint,
+    paddingVertical: theme.space(2),
+    paddingHorizontal: theme.space(3),
+  },
+  suiteCol: {
+    width: SUITE_COLUMN,
+    paddingHorizontal: theme.space(3),
+    paddingVertical: theme.space(2),
+    alignSelf: 'center',
+  },
   targetCol: { flex: 1, flexBasis: 0, minWidth: TARGET_COLUMN_MIN, padding: theme.space(1) },
   suiteName: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.ink },
-  gridCell: { flex: 1, minHeight: theme.touch, padding: theme.space(2), borderLeftWidth: 4, borderRadius: 4, justifyContent: 'center' },
-  rowCell: { minHeight: theme.touch, flexDirection: 'row', alignItems: 'center', gap: theme.space(3), padding: theme.space(3), borderLeftWidth: 4, borderRadius: 4 },
+  gridCell: {
+    flex: 1,
+    minHeight: theme.touch,
+    padding: theme.space(2),
+    borderLeftWidth: 4,
+    borderRadius: 4,
+    justifyContent: 'center',
+  },
+  rowCell: {
+    minHeight: theme.touch,
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: theme.space(3),
+    padding: theme.space(3),
+    borderLeftWidth: 4,
+    borderRadius: 4,
+  },
   absent: { backgroundColor: theme.color.paper, borderLeftColor: theme.color.rule },
   rowTarget: { width: 130, fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.inkSoft },
   cellWords: { flex: 1, gap: 2 },
   headline: { fontFamily: theme.font.medium, fontSize: theme.size.body },
   details: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
   open: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.accent },
-  card: { backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, padding: theme.space(3), gap: theme.space(2) },
+  card: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    padding: theme.space(3),
+    gap: theme.space(2),
+  },
 });

@@ -7,5 +7,13 @@ import { TagPill } from './tag-pill';
 export function RunStatusBadge({ run }: { run: Pick<RunView, 'status' | 'counts'> }) {
   const verdict = runVerdict(run);
   const tone = OUTCOME_TONE[verdict.tone];
-  return <TagPill text={`${verdict.glyph} ${verdict.word}`} ink={tone.ink} soft={tone.soft} edge={tone.edge} accessibilityLabel={`status: ${verdict.word}`} />;
+  return (
+    <TagPill
+      text={`${verdict.glyph} ${verdict.word}`}
+      ink={tone.ink}
+      soft={tone.soft}
+      edge={tone.edge}
+      accessibilityLabel={`status: ${verdict.word}`}
+    />
+  );
 }

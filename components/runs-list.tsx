@@ -18,9 +18,19 @@ export function RunsList({ filters, onFiltersChange }: { filters: Filters; onFil
 
   let body;
   if (runs.isPending) body = <QueryState state="loading" />;
-  else if (runs.isError) body = <QueryState state="error" message={runs.error.message} onRetry={() => void runs.refetch()} />;
+  else if (runs.isError)
+    body = <QueryState state="error" message={runs.error.message} onRetry={() => void runs.refetch()} />;
   else if (all.length === 0)
-    body = <QueryState state="empty" message={filtered ? 'No run matches these filters.' : 'No runs yet. A plan runs on its schedule, or a maintainer starts it from Plans.'} />;
+    body = (
+      <QueryState
+        state="empty"
+        message={
+          filtered
+            ? 'No run matches these filters.'
+            : 'No runs yet. A plan runs on its schedule, or a maintainer starts it from Plans.'
+        }
+      />
+    );
   else
     body = (
       <View style={styles.list}>
@@ -28,13 +38,24 @@ export function RunsList({ filters, onFiltersChange }: { filters: Filters; onFil
           {all.length} run{all.length === 1 ? '' : 's'} shown{runs.hasNextPage ? ', more below' : ''}
         </Text>
         {wide ? <RunsTable runs={all} /> : all.map((run) => <RunCard key={run.id} run={run} />)}
-        {runs.hasNextPage ? <ActionButton label="Show older runs" tone="quiet" busy={runs.isFetchingNextPage} onPress={() => void runs.fetchNextPage()} /> : null}
+        {runs.hasNextPage ? (
+          <ActionButton
+            label="Show older runs"
+            tone="quiet"
+            busy={runs.isFetchingNextPage}
+            onPress={() => void runs.fetchNextPage()}
+          />
+        ) : null}
       </View>
     );
 
   return (
     <View style={styles.box}>
-      {plans.isError ? <Text style={styles.note}>× Plans could not be loaded, so the plan filter is missing: {plans.error.message}</Text> : null}
+      {plans.isError ? (
+        <Text style={styles.note}>
+          × Plans could not be loaded, so the plan filter is missing: {plans.error.message}
+        </Text>
+      ) : null}
       <RunFilters value={filters} plans={plans.data ?? []} onChange={onFiltersChange} />
       {body}
     </View>

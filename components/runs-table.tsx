@@ -16,11 +16,21 @@ export function RunsTable({ runs, now }: { runs: RunView[]; now?: number }) {
   return (
     <View style={styles.table} role="table" aria-label="Runs">
       <View style={[styles.row, styles.headRow]} role="row">
-        <Text role="columnheader" style={[styles.head, styles.status]}>Status</Text>
-        <Text role="columnheader" style={[styles.head, styles.plan]}>Plan</Text>
-        <Text role="columnheader" style={[styles.head, styles.who]}>Started</Text>
-        <Text role="columnheader" style={[styles.head, styles.duration]}>Duration</Text>
-        <Text role="columnheader" style={[styles.head, styles.counts]}>Points</Text>
+        <Text role="columnheader" style={[styles.head, styles.status]}>
+          Status
+        </Text>
+        <Text role="columnheader" style={[styles.head, styles.plan]}>
+          Plan
+        </Text>
+        <Text role="columnheader" style={[styles.head, styles.who]}>
+          Started
+        </Text>
+        <Text role="columnheader" style={[styles.head, styles.duration]}>
+          Duration
+        </Text>
+        <Text role="columnheader" style={[styles.head, styles.counts]}>
+          Points
+        </Text>
       </View>
       {runs.map((run) => (
         <Link key={run.id} href={`/runs/${run.id}`} asChild>
@@ -62,11 +72,31 @@ export function RunsTable({ runs, now }: { runs: RunView[]; now?: number }) {
 }
 
 const styles = StyleSheet.create({
-  table: { backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, overflow: 'hidden' },
-  row: { flexDirection: 'row', alignItems: 'center', gap: theme.space(3), paddingHorizontal: theme.space(4), paddingVertical: theme.space(3), borderBottomWidth: 1, borderBottomColor: theme.color.rule },
+  table: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    overflow: 'hidden',
+  },
+  row: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: theme.space(3),
+    paddingHorizontal: theme.space(4),
+    paddingVertical: theme.space(3),
+    borderBottomWidth: 1,
+    borderBottomColor: theme.color.rule,
+  },
   headRow: { backgroundColor: theme.color.paper, paddingVertical: theme.space(2) },
   bodyRow: { minHeight: 64 },
-  head: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkFaint, textTransform: 'uppercase', letterSpacing: 0.8 },
+  head: {
+    fontFamily: theme.font.medium,
+    fontSize: theme.size.small,
+    color: theme.color.inkFaint,
+    textTransform: 'uppercase',
+    letterSpacing: 0.8,
+  },
   status: { width: 220 },
   plan: { flex: 2, gap: 2 },
   who: { flex: 2, gap: 2 },

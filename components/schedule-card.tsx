@@ -16,7 +16,9 @@ export function ScheduleCard({ schedule, canEdit }: { schedule: ScheduleView; ca
   const [editing, setEditing] = useState(false);
   const toggle = useToggleSchedule();
   const remove = useDeleteSchedule();
-  const failure = [toggle.error, remove.error].map((e) => (e instanceof ApiRequestError ? e.body.message : e ? 'The server could not be reached.' : null)).find(Boolean);
+  const failure = [toggle.error, remove.error]
+    .map((e) => (e instanceof ApiRequestError ? e.body.message : e ? 'The server could not be reached.' : null))
+    .find(Boolean);
 
   if (editing) return <ScheduleEditor planId={schedule.planId} schedule={schedule} onDone={() => setEditing(false)} />;
   return (
@@ -37,10 +39,16 @@ export function ScheduleCard({ schedule, canEdit }: { schedule: ScheduleView; ca
             offWord="Paused"
           />
         ) : (
-          <Text style={[styles.state, schedule.enabled && styles.stateOn]}>{schedule.enabled ? '✓ Runs' : '− Paused'}</Text>
+          <Text style={[styles.state, schedule.enabled && styles.stateOn]}>
+            {schedule.enabled ? '✓ Runs' : '− Paused'}
+          </Text>
         )}
       </View>
-      {schedule.enabled ? <NextRuns nextRuns={schedule.nextRuns} timeZone={schedule.timeZone} /> : <Text style={styles.paused}>Paused: this schedule starts no runs until it is turned on again.</Text>}
+      {schedule.enabled ? (
+        <NextRuns nextRuns={schedule.nextRuns} timeZone={schedule.timeZone} />
+      ) : (
+        <Text style={styles.paused}>Paused: this schedule starts no runs until it is turned on again.</Text>
+      )}
       {failure ? (
         <Text accessibilityRole="alert" style={styles.failure}>
           ❌ {failure}
@@ -48,7 +56,12 @@ export function ScheduleCard({ schedule, canEdit }: { schedule: ScheduleView; ca
       ) : null}
       {canEdit ? (
         <View style={styles.buttons}>
-          <ActionButton label="Edit" accessibilityLabel={`Edit schedule ${schedule.cron}`} tone="quiet" onPress={() => setEditing(true)} />
+          <ActionButton
+            label="Edit"
+            accessibilityLabel={`Edit schedule ${schedule.cron}`}
+            tone="quiet"
+            onPress={() => setEditing(true)}
+          />
           <ConfirmAction
             label="Delete"
             accessibilityLabel={`Delete schedule ${schedule.cron}`}
@@ -65,7 +78,13 @@ export function ScheduleCard({ schedule, canEdit }: { schedule: ScheduleView; ca
 
 const styles = StyleSheet.create({
   card: { gap: theme.space(3), paddingVertical: theme.space(3), borderTopWidth: 1, borderTopColor: theme.color.rule },
-  top: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between', gap: theme.space(3), flexWrap: 'wrap' },
+  top: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    justifyContent: 'space-between',
+    gap: theme.space(3),
+    flexWrap: 'wrap',
+  },
   what: { gap: 2, flexShrink: 1 },
   cron: { fontFamily: theme.font.mono, fontSize: theme.size.large, color: theme.color.ink },
   zone: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },

@@ -32,7 +32,15 @@ type Field = 'cron' | 'timeZone';
  * Creates or changes a plan's schedule. The next three times are worked out by the server as the
  * expression is typed, and a rule it breaks shows beside the field before anything is saved.
  */
-export function ScheduleEditor({ planId, schedule, onDone }: { planId: string; schedule?: ScheduleView; onDone: () => void }) {
+export function ScheduleEditor({
+  planId,
+  schedule,
+  onDone,
+}: {
+  planId: string;
+  schedule?: ScheduleView;
+  onDone: () => void;
+}) {
   const [cron, setCron] = useState(schedule?.cron ?? '30 2 * * *');
   const [timeZone, setTimeZone] = useState(schedule?.timeZone ?? deviceZone);
   const [submitErrors, setSubmitErrors] = useState<Partial<Record<Field, string>>>({});
@@ -40,7 +48,12 @@ export function ScheduleEditor({ planId, schedule, onDone }: { planId: string; s
   const save = useSaveSchedule(planId, schedule?.id ?? null);
   const fromServer = serverFieldErrors(save.error);
   const errorOf = (field: Field) => preview.issues[field] ?? submitErrors[field] ?? fromServer[field];
-  const other = save.error instanceof ApiRequestError && save.error.body.kind !== 'invalid-input' ? save.error.body.message : save.error && !(save.error instanceof ApiRequestError) ? 'The server could not be reached; nothing was saved.' : null;
+  const other =
+    save.error instanceof ApiRequestError && save.error.body.kind !== 'invalid-input'
+      ? save.error.body.message
+      : save.error && !(save.error instanceof ApiRequestError)
+        ? 'The server could not be reached; nothing was saved.'
+        : null;
   const zones = Array.from(new Set(['UTC', deviceZone, ...(schedule ? [schedule.timeZone] : [])]));
 
   const submit = () => {
@@ -72,10 +85,19 @@ export function ScheduleEditor({ planId, schedule, onDone }: { planId: string; s
         mono
         testID="schedule-cron"
       />
-      <Text style={styles.help}>Five fields: minute, hour, day of month, month, day of week (0 or 7 is Sunday). A sixth field in front gives seconds.</Text>
+      <Text style={styles.help}>
+        Five fields: minute, hour, day of month, month, day of week (0 or 7 is Sunday). A sixth field in front gives
+        seconds.
+      </Text>
       <View style={styles.chips}>
         {STARTERS.map((s) => (
-          <Pressable key={s.cron} accessibilityRole="button" accessibilityLabel={`Use ${s.label} (${s.cron})`} onPress={() => setCron(s.cron)} style={[styles.chip, cron.trim() === s.cron && styles.chipOn]}>
+          <Pressable
+            key={s.cron}
+            accessibilityRole="button"
+            accessibilityLabel={`Use ${s.label} (${s.cron})`}
+            onPress={() => setCron(s.cron)}
+            style={[styles.chip, cron.trim() === s.cron && styles.chipOn]}
+          >
             <Text style={[styles.chipText, cron.trim() === s.cron && styles.chipTextOn]}>
               {cron.trim() === s.cron ? '✓ ' : ''}
               {s.label}
@@ -83,10 +105,23 @@ export function ScheduleEditor({ planId, schedule, onDone }: { planId: string; s
           </Pressable>
         ))}
       </View>
-      <TextField label="Time zone" value={timeZone} onChangeText={setTimeZone} error={errorOf('timeZone')} autoCapitalize="none" testID="schedule-time-zone" />
+      <TextField
+        label="Time zone"
+        value={timeZone}
+        onChangeText={setTimeZone}
+        error={errorOf('timeZone')}
+        autoCapitalize="none"
+        testID="schedule-time-zone"
+      />
       <View style={styles.chips}>
         {zones.map((zone) => (
-          <Pressable key={zone} accessibilityRole="button" accessibilityLabel={`Use time zone ${zone}`} onPress={() => setTimeZone(zone)} style={[styles.chip, timeZone === zone && styles.chipOn]}>
+          <Pressable
+            key={zone}
+            accessibilityRole="button"
+            accessibilityLabel={`Use time zone ${zone}`}
+            onPress={() => setTimeZone(zone)}
+            style={[styles.chip, timeZone === zone && styles.chipOn]}
+          >
             <Text style={[styles.chipText, timeZone === zone && styles.chipTextOn]}>
               {timeZone === zone ? '✓ ' : ''}
               {zone}
@@ -96,9 +131,20 @@ export function ScheduleEditor({ planId, schedule, onDone }: { planId: string; s
         ))}
       </View>
       <View style={styles.preview}>
-        <NextRuns nextRuns={preview.nextRuns} timeZone={timeZone} working={preview.working} testID="schedule-next-runs" />
+        <NextRuns
+          nextRuns={preview.nextRuns}
+          timeZone={timeZone}
+          working={preview.working}
+          testID="schedule-next-runs"
+        />
       </View>
-      <FormActions failure={other} saveLabel={schedule ? 'Save schedule' : 'Add schedule'} onSave={submit} busy={save.isPending} onCancel={onDone} />
+      <FormActions
+        failure={other}
+        saveLabel={schedule ? 'Save schedule' : 'Add schedule'}
+        onSave={submit}
+        busy={save.isPending}
+        onCancel={onDone}
+      />
     </View>
   );
 }
@@ -107,9 +153,23 @@ const styles = StyleSheet.create({
   editor: { gap: theme.space(3) },
   help: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
-  chip: { minHeight: 44, justifyContent: 'center', paddingHorizontal: theme.space(3), borderRadius: theme.radius, borderWidth: 1, borderColor: theme.color.rule, backgroundColor: theme.color.panel },
+  chip: {
+    minHeight: 44,
+    justifyContent: 'center',
+    paddingHorizontal: theme.space(3),
+    borderRadius: theme.radius,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    backgroundColor: theme.color.panel,
+  },
   chipOn: { backgroundColor: theme.color.accentSoft, borderColor: theme.color.accent },
   chipText: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink },
   chipTextOn: { fontFamily: theme.font.medium, color: theme.color.accent },
-  preview: { padding: theme.space(3), borderRadius: theme.radius, backgroundColor: theme.color.paper, borderWidth: 1, borderColor: theme.color.rule },
+  preview: {
+    padding: theme.space(3),
+    borderRadius: theme.radius,
+    backgroundColor: theme.color.paper,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+  },
 });

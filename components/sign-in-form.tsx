@@ -37,8 +37,16 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
     signIn.mutate(result.data, { onSuccess: onSignedIn });
   };
 
-  const serverError = signIn.error instanceof ApiRequestError ? signIn.error.body : signIn.error ? { kind: 'server-error' as const, message: 'The server could not be reached.' } : null;
-  const serverFieldErrors = serverError?.kind === 'invalid-input' ? Object.fromEntries(serverError.issues.map((i) => [i.field.replace(/^body\./, ''), i.rule])) : {};
+  const serverError =
+    signIn.error instanceof ApiRequestError
+      ? signIn.error.body
+      : signIn.error
+        ? { kind: 'server-error' as const, message: 'The server could not be reached.' }
+        : null;
+  const serverFieldErrors =
+    serverError?.kind === 'invalid-input'
+      ? Object.fromEntries(serverError.issues.map((i) => [i.field.replace(/^body\./, ''), i.rule]))
+      : {};
 
   return (
     <View style={styles.form}>

@@ -6,10 +6,23 @@ import { theme } from '../constants/theme';
 import { ActionButton } from './action-button';
 
 /** "Run now" for a plan: queues a run and opens it; a refusal shows beside the button. */
-export function StartRunButton({ planId, planName, tone = 'primary' }: { planId: string; planName: string; tone?: 'primary' | 'quiet' }) {
+export function StartRunButton({
+  planId,
+  planName,
+  tone = 'primary',
+}: {
+  planId: string;
+  planName: string;
+  tone?: 'primary' | 'quiet';
+}) {
   const router = useRouter();
   const start = useStartRun();
-  const failure = start.error instanceof ApiRequestError ? start.error.body.message : start.error ? 'The server could not be reached; no run was started.' : null;
+  const failure =
+    start.error instanceof ApiRequestError
+      ? start.error.body.message
+      : start.error
+        ? 'The server could not be reached; no run was started.'
+        : null;
   return (
     <View style={styles.box}>
       <ActionButton

@@ -12,12 +12,23 @@ export function SubscriptionList() {
   const subscriptions = useSubscriptions();
   const save = useSaveSubscriptions();
   if (subscriptions.isPending) return <QueryState state="loading" />;
-  if (subscriptions.isError) return <QueryState state="error" message={subscriptions.error.message} onRetry={() => void subscriptions.refetch()} />;
+  if (subscriptions.isError)
+    return (
+      <QueryState state="error" message={subscriptions.error.message} onRetry={() => void subscriptions.refetch()} />
+    );
   const { targetKeys, available } = subscriptions.data;
   // A library I subscribed to may no longer be installed; it stays listed so I can leave it.
   const libraries = Array.from(new Set([...available, ...targetKeys])).sort();
-  if (libraries.length === 0) return <QueryState state="empty" message="No libraries known yet: they appear once the server has found its targets." />;
-  const failure = save.error instanceof ApiRequestError ? save.error.body.message : save.error ? 'The server could not be reached; the change was undone.' : null;
+  if (libraries.length === 0)
+    return (
+      <QueryState state="empty" message="No libraries known yet: they appear once the server has found its targets." />
+    );
+  const failure =
+    save.error instanceof ApiRequestError
+      ? save.error.body.message
+      : save.error
+        ? 'The server could not be reached; the change was undone.'
+        : null;
 
   return (
     <View style={styles.list} testID="subscription-list">
@@ -32,7 +43,9 @@ export function SubscriptionList() {
           <View key={key} style={styles.row}>
             <View style={styles.words}>
               <SlashWrappedName name={key} style={styles.name} />
-              {!available.includes(key) ? <Text style={styles.gone}>− no longer among this server&apos;s targets</Text> : null}
+              {!available.includes(key) ? (
+                <Text style={styles.gone}>− no longer among this server&apos;s targets</Text>
+              ) : null}
             </View>
             <OnOffSwitch
               value={on}
@@ -50,8 +63,23 @@ export function SubscriptionList() {
 
 const styles = StyleSheet.create({
   list: { gap: 0 },
-  failure: { fontFamily: theme.font.medium, color: theme.color.danger, backgroundColor: theme.color.dangerSoft, padding: theme.space(3), borderRadius: theme.radius, marginBottom: theme.space(2) },
-  row: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between', gap: theme.space(3), borderTopWidth: 1, borderTopColor: theme.color.rule, paddingVertical: theme.space(1) },
+  failure: {
+    fontFamily: theme.font.medium,
+    color: theme.color.danger,
+    backgroundColor: theme.color.dangerSoft,
+    padding: theme.space(3),
+    borderRadius: theme.radius,
+    marginBottom: theme.space(2),
+  },
+  row: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    justifyContent: 'space-between',
+    gap: theme.space(3),
+    borderTopWidth: 1,
+    borderTopColor: theme.color.rule,
+    paddingVertical: theme.space(1),
+  },
   words: { flex: 1, minWidth: 0 },
   name: { fontFamily: theme.font.mono, fontSize: theme.size.body, color: theme.color.ink },
   gone: { fontFamily: theme.font.regular, fontSize: 12, color: theme.color.inkSoft },

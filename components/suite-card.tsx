@@ -6,10 +6,18 @@ import { SuiteStatusLabel } from './suite-status-label';
 
 /** One suite in the list: title, subject, its latest version's status, and which version plans use. */
 export function SuiteCard({ suite, href }: { suite: SuiteSummary; href?: string }) {
-  const inUse = suite.approvedVersion === null ? 'no approved version: plans do not use it yet' : `plans use v${suite.approvedVersion}`;
+  const inUse =
+    suite.approvedVersion === null
+      ? 'no approved version: plans do not use it yet'
+      : `plans use v${suite.approvedVersion}`;
   return (
     <Link href={href ?? `/suites/${suite.slug}`} asChild>
-      <Pressable accessibilityRole="link" accessibilityLabel={`${suite.title}, version ${suite.latestVersion} ${suite.latestStatus.replace('-', ' ')}`} style={StyleSheet.flatten(styles.card)} testID={`suite-${suite.slug}`}>
+      <Pressable
+        accessibilityRole="link"
+        accessibilityLabel={`${suite.title}, version ${suite.latestVersion} ${suite.latestStatus.replace('-', ' ')}`}
+        style={StyleSheet.flatten(styles.card)}
+        testID={`suite-${suite.slug}`}
+      >
         <View style={styles.head}>
           <SuiteStatusLabel status={suite.latestStatus} version={suite.latestVersion} />
           <Text style={styles.use}>{inUse}</Text>
@@ -19,7 +27,8 @@ export function SuiteCard({ suite, href }: { suite: SuiteSummary; href?: string 
           {suite.subject}
         </Text>
         <Text style={styles.meta} numberOfLines={1}>
-          {suite.slug} · {suite.authorName} · {new Date(suite.updatedAt).toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' })}
+          {suite.slug} · {suite.authorName} ·{' '}
+          {new Date(suite.updatedAt).toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' })}
         </Text>
       </Pressable>
     </Link>
@@ -27,7 +36,17 @@ export function SuiteCard({ suite, href }: { suite: SuiteSummary; href?: string 
 }
 
 const styles = StyleSheet.create({
-  card: { backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, padding: theme.space(4), gap: theme.space(2), minHeight: theme.touch, flexGrow: 1, flexBasis: 320 },
+  card: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+    gap: theme.space(2),
+    minHeight: theme.touch,
+    flexGrow: 1,
+    flexBasis: 320,
+  },
   head: { flexDirection: 'row', alignItems: 'center', gap: theme.space(2), flexWrap: 'wrap' },
   use: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkFaint },
   title: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },

@@ -36,7 +36,8 @@ export function SuiteDetail({ slug }: { slug: string }) {
   const [chosen, setChosen] = useState<number | null>(null);
 
   if (suite.isPending) return <QueryState state="loading" />;
-  if (suite.isError) return <QueryState state="error" message={suite.error.message} onRetry={() => void suite.refetch()} />;
+  if (suite.isError)
+    return <QueryState state="error" message={suite.error.message} onRetry={() => void suite.refetch()} />;
   const versions = suite.data;
   const latest = versions[0];
   if (!latest || !me) return <QueryState state="empty" message="This suite has no versions." />;
@@ -49,11 +50,26 @@ export function SuiteDetail({ slug }: { slug: string }) {
   const actions = (
     <View style={styles.actions}>
       {openDraft && mine ? <LinkButton href={`/suites/${slug}/edit`} label="Edit draft" /> : null}
-      {latest.status === 'approved' || latest.status === 'retired' ? <LinkButton href={`/suites/${slug}/edit`} label={`Edit as version ${latest.version + 1}`} /> : null}
-      {openDraft && mine ? <ActionButton label={`Submit version ${latest.version} for review`} onPress={() => submit.mutate(slug)} busy={submit.isPending} /> : null}
-      {latest.status === 'submitted' && (me.role === 'reviewer' || me.role === 'admin') ? <LinkButton href={`/review/${slug}`} label="Review this version" /> : null}
+      {latest.status === 'approved' || latest.status === 'retired' ? (
+        <LinkButton href={`/suites/${slug}/edit`} label={`Edit as version ${latest.version + 1}`} />
+      ) : null}
+      {openDraft && mine ? (
+        <ActionButton
+          label={`Submit version ${latest.version} for review`}
+          onPress={() => submit.mutate(slug)}
+          busy={submit.isPending}
+        />
+      ) : null}
+      {latest.status === 'submitted' && (me.role === 'reviewer' || me.role === 'admin') ? (
+        <LinkButton href={`/review/${slug}`} label="Review this version" />
+      ) : null}
       {shown.status === 'approved' && me.role !== 'contributor' ? (
-        <ActionButton label={`Retire version ${shown.version}`} tone="quiet" onPress={() => retire.mutate({ slug, version: shown.version })} busy={retire.isPending} />
+        <ActionButton
+          label={`Retire version ${shown.version}`}
+          tone="quiet"
+          onPress={() => retire.mutate({ slug, version: shown.version })}
+          busy={retire.isPending}
+        />
       ) : null}
     </View>
   );
@@ -65,14 +81,24 @@ export function SuiteDetail({ slug }: { slug: string }) {
         <Text style={styles.slug}>{slug}</Text>
       </View>
       <Text style={styles.inUse}>
-        {approved ? `Plans use version ${approved.version} (approved).` : 'No approved version yet: plans do not run this suite.'}{' '}
+        {approved
+          ? `Plans use version ${approved.version} (approved).`
+          : 'No approved version yet: plans do not run this suite.'}{' '}
         {shown.version !== latest.version ? `Showing version ${shown.version}; the latest is ${latest.version}.` : ''}
       </Text>
       {body.story ? <Text style={styles.story}>{body.story}</Text> : null}
       {actions}
       <IssueList error={submit.error ?? retire.error} />
-      <TitledPanel title="Plane picture" lead="Paths, cuts and branch points of this version, as the runner samples them.">
-        <SuitePreview body={body} label={`Plane picture of ${body.title}`} testID="suite-picture" height={wide ? 380 : 300} />
+      <TitledPanel
+        title="Plane picture"
+        lead="Paths, cuts and branch points of this version, as the runner samples them."
+      >
+        <SuitePreview
+          body={body}
+          label={`Plane picture of ${body.title}`}
+          testID="suite-picture"
+          height={wide ? 380 : 300}
+        />
       </TitledPanel>
       <TitledPanel title="What this version checks">
         <SuiteFacts suite={body} />
@@ -84,7 +110,10 @@ export function SuiteDetail({ slug }: { slug: string }) {
       <TitledPanel title="Version history">
         <VersionHistory versions={versions} selected={shown.version} onSelect={setChosen} />
       </TitledPanel>
-      <TitledPanel title="Reference table" lead="Check values computed elsewhere against Sheetkeeper's reference for the latest version.">
+      <TitledPanel
+        title="Reference table"
+        lead="Check values computed elsewhere against Sheetkeeper's reference for the latest version."
+      >
         <ReferenceTableUpload slug={slug} />
       </TitledPanel>
     </View>
@@ -112,6 +141,14 @@ const styles = StyleSheet.create({
   inUse: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
   story: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.ink, lineHeight: 24 },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
-  linkButton: { minHeight: theme.touch, paddingHorizontal: theme.space(5), borderRadius: theme.radius, borderWidth: 1, borderColor: theme.color.rule, justifyContent: 'center', backgroundColor: theme.color.panel },
+  linkButton: {
+    minHeight: theme.touch,
+    paddingHorizontal: theme.space(5),
+    borderRadius: theme.radius,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    justifyContent: 'center',
+    backgroundColor: theme.color.panel,
+  },
   linkText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
 });

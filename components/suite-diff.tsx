@@ -11,7 +11,8 @@ export function SuiteDiff({ current, previous }: { current: SuiteVersionView; pr
   if (!previous) {
     return (
       <Text style={styles.first} testID="suite-diff">
-        Version {current.version} is the first version: there is nothing to compare it with, so every field below is new.
+        Version {current.version} is the first version: there is nothing to compare it with, so every field below is
+        new.
       </Text>
     );
   }
@@ -20,9 +21,12 @@ export function SuiteDiff({ current, previous }: { current: SuiteVersionView; pr
   return (
     <View style={styles.box} testID="suite-diff">
       <Text style={styles.summary}>
-        Against version {previous.version} ({previous.status.replace('-', ' ')}): {count('changed')} changed, {count('added')} added, {count('removed')} removed.
+        Against version {previous.version} ({previous.status.replace('-', ' ')}): {count('changed')} changed,{' '}
+        {count('added')} added, {count('removed')} removed.
       </Text>
-      {changes.length === 0 ? <Text style={styles.first}>No field differs from version {previous.version}.</Text> : null}
+      {changes.length === 0 ? (
+        <Text style={styles.first}>No field differs from version {previous.version}.</Text>
+      ) : null}
       {changes.map((c) => (
         <View key={`${c.change} ${c.field}`} style={styles.row} accessibilityLabel={`${c.field} ${c.change}`}>
           <Text style={styles.field}>

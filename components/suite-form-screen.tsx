@@ -16,10 +16,25 @@ export function SuiteFormScreen({ slug }: { slug: string | null }) {
   if (me.isPending) return <QueryState state="loading" />;
   if (!slug) return <SuiteForm initial={emptySuiteDraft()} editing={null} draftKey={keyFor('new')} onDone={done} />;
   if (suite.isPending) return <QueryState state="loading" />;
-  if (suite.isError) return <QueryState state="error" message={suite.error.message} onRetry={() => void suite.refetch()} />;
+  if (suite.isError)
+    return <QueryState state="error" message={suite.error.message} onRetry={() => void suite.refetch()} />;
   const latest = suite.data[0];
   if (!latest) return <QueryState state="empty" message="This suite has no versions." />;
-  if (latest.status === 'submitted') return <QueryState state="error" message={`Version ${latest.version} is waiting for review; it can be edited once reviewed.`} />;
+  if (latest.status === 'submitted')
+    return (
+      <QueryState
+        state="error"
+        message={`Version ${latest.version} is waiting for review; it can be edited once reviewed.`}
+      />
+    );
   // Per version: work begun on version 2 is not offered over version 3.
-  return <SuiteForm key={latest.id} initial={suiteToDraft(latest.body)} editing={slug} draftKey={keyFor(`${slug}.${latest.id}`)} onDone={done} />;
+  return (
+    <SuiteForm
+      key={latest.id}
+      initial={suiteToDraft(latest.body)}
+      editing={slug}
+      draftKey={keyFor(`${slug}.${latest.id}`)}
+      onDone={done}
+    />
+  );
 }

@@ -82,9 +82,12 @@ export function SuiteForm({ initial, editing, draftKey, onDone }: Props) {
 
   const body = useMemo(() => draftToSuiteBody(draft), [draft]);
   const deferredBody = useDeferredValue(body);
-  const check = (b: unknown) => (tools.data ? tools.data.checkSuite(b, draft.id || 'the suite') : validateSuite(b, draft.id || 'the suite'));
+  const check = (b: unknown) =>
+    tools.data ? tools.data.checkSuite(b, draft.id || 'the suite') : validateSuite(b, draft.id || 'the suite');
   const issues: SuiteIssue[] = useMemo(() => {
-    const result = tools.data ? tools.data.checkSuite(deferredBody, 'the suite') : validateSuite(deferredBody, 'the suite');
+    const result = tools.data
+      ? tools.data.checkSuite(deferredBody, 'the suite')
+      : validateSuite(deferredBody, 'the suite');
     return result.ok ? [] : result.issues;
   }, [tools.data, deferredBody]);
   const visible = issues.filter((i) => showAll || touched.some((t) => related(t, i.field)));
@@ -92,7 +95,10 @@ export function SuiteForm({ initial, editing, draftKey, onDone }: Props) {
 
   const rules: FieldRules = (field, mode = 'exact') => {
     const match = (f: string) => f === field || (mode === 'within' && f.startsWith(`${field}.`));
-    return [...visible.filter((i) => match(i.field)).map((i) => i.rule), ...liveServer.filter((s) => match(s.field)).map((s) => s.rule)];
+    return [
+      ...visible.filter((i) => match(i.field)).map((i) => i.rule),
+      ...liveServer.filter((s) => match(s.field)).map((s) => s.rule),
+    ];
   };
 
   const update = (field: string, patch: Partial<SuiteDraft> | ((d: SuiteDraft) => SuiteDraft)) => {
@@ -124,10 +130,12 @@ export function SuiteForm({ initial, editing, draftKey, onDone }: Props) {
       setServerIssues([]);
     } catch (e) {
       if (e instanceof ApiRequestError && e.body.kind === 'invalid-input') {
-        setServerIssues(e.body.issues.map((i) => {
-          const field = i.field.replace(/^body\./, '');
-          return { field, rule: i.rule, snapshot: valueAt(body, field) };
-        }));
+        setServerIssues(
+          e.body.issues.map((i) => {
+            const field = i.field.replace(/^body\./, '');
+            return { field, rule: i.rule, snapshot: valueAt(body, field) };
+          }),
+        );
         setServerMessage('The server refused the suite: the rules it named are beside their fields.');
       } else {
         setServerMessage(e instanceof Error ? e.message : 'The server could not be reached.');
@@ -141,7 +149,9 @@ export function SuiteForm({ initial, editing, draftKey, onDone }: Props) {
       try {
         await submitSuite.mutateAsync(slug);
       } catch (e) {
-        setServerMessage(`Saved as a draft, but not submitted: ${e instanceof Error ? e.message : 'the server could not be reached.'}`);
+        setServerMessage(
+          `Saved as a draft, but not submitted: ${e instanceof Error ? e.message : 'the server could not be reached.'}`,
+        );
         return;
       }
     }
@@ -157,11 +167,37 @@ export function SuiteForm({ initial, editing, draftKey, onDone }: Props) {
 
   const form = (
     <View style={styles.column}>
-      {kept.offer ? <KeptDraftNotice savedAt={kept.offer.savedAt} onRestore={() => restore(kept.offer!.value)} onDiscard={kept.forget} /> : null}
+      {kept.offer ? (
+        <KeptDraftNotice
+          savedAt={kept.offer.savedAt}
+          onRestore={() => restore(kept.offer!.value)}
+          onDiscard={kept.forget}
+        />
+      ) : null}
       <TitledPanel title="What it checks">
-        <FormTextInput label="Id" hint="lower-case words joined by hyphens; it stays the same across versions" value={draft.id} onChangeText={(id) => update('id', { id })} rules={rules('id')} mono testID="suite-id" />
-        <FormTextInput label="Title" value={draft.title} onChangeText={(title) => update('title', { title })} rules={rules('title')} />
-        <FormTextInput label="Story" hint="why the suite exists: what a maintainer would break, and what the values pin down" value={draft.story} onChangeText={(story) => update('story', { story })} rules={rules('story')} multiline />
+        <FormTextInput
+          label="Id"
+          hint="lower-case words joined by hyphens; it stays the same across versions"
+          value={draft.id}
+          onChangeText={(id) => update('id', { id })}
+          rules={rules('id')}
+          mono
+          testID="suite-id"
+        />
+        <FormTextInput
+          label="Title"
+          value={draft.title}
+          onChangeText={(title) => update('title', { title })}
+          rules={rules('title')}
+        />
+        <FormTextInput
+          label="Story"
+          hint="why the suite exists: what a maintainer would break, and what the values pin down"
+          value={draft.story}
+          onChangeText={(story) => update('story', { story })}
+          rules={rules('story')}
+          multiline
+        />
         <FormTextInput
           label="Subject"
           hint="a formula over z: sqrt, cbrt, nthroot, pow, exp, log, inverse trig and hyperbolic functions, + − * / ^"
@@ -172,7 +208,10 @@ export function SuiteForm({ initial, editing, draftKey, onDone }: Props) {
         />
       </TitledPanel>
 
-      <TitledPanel title="Branch" lead="What the subject should equal: the principal branch of every function in it, or a regular branch of g(z)^ν fixed by its value at z0.">
+      <TitledPanel
+        title="Branch"
+        lead="What the subject should equal: the principal branch of every function in it, or a regular branch of g(z)^ν fixed by its value at z0."
+      >
         <ChipGroup
           label="Branch spec"
           options={[
@@ -185,12 +224,38 @@ export function SuiteForm({ initial, editing, draftKey, onDone }: Props) {
         <RuleLines rules={rules('branch').map((r) => `Branch ${r}`)} />
         {regular ? (
           <>
-            <FormTextInput label="g(z)" hint="a rational function of z, e.g. z*(z - 1)" value={draft.g} onChangeText={(g) => update('branch.g', { g })} rules={rules('branch.g')} mono />
+            <FormTextInput
+              label="g(z)"
+              hint="a rational function of z, e.g. z*(z - 1)"
+              value={draft.g}
+              onChangeText={(g) => update('branch.g', { g })}
+              rules={rules('branch.g')}
+              mono
+            />
             <View style={styles.row}>
-              <FormTextInput label="ν" hint='"1/3", "0.5"' value={draft.nuRe} onChangeText={(nuRe) => update('branch.nu', { nuRe })} rules={[...rules('branch.nu'), ...rules('branch.nu.re')]} mono />
-              <FormTextInput label="ν, imaginary part" hint="blank for a real ν" value={draft.nuIm} onChangeText={(nuIm) => update('branch.nu', { nuIm })} rules={rules('branch.nu.im')} mono />
+              <FormTextInput
+                label="ν"
+                hint='"1/3", "0.5"'
+                value={draft.nuRe}
+                onChangeText={(nuRe) => update('branch.nu', { nuRe })}
+                rules={[...rules('branch.nu'), ...rules('branch.nu.re')]}
+                mono
+              />
+              <FormTextInput
+                label="ν, imaginary part"
+                hint="blank for a real ν"
+                value={draft.nuIm}
+                onChangeText={(nuIm) => update('branch.nu', { nuIm })}
+                rules={rules('branch.nu.im')}
+                mono
+              />
             </View>
-            <ComplexInput label="Reference point z0" value={draft.z0} onChange={(z0) => update('branch.z0', { z0 })} rules={complexRules(rules, 'branch.z0')} />
+            <ComplexInput
+              label="Reference point z0"
+              value={draft.z0}
+              onChange={(z0) => update('branch.z0', { z0 })}
+              rules={complexRules(rules, 'branch.z0')}
+            />
             <ChipGroup
               label="Fixed by"
               options={[
@@ -201,9 +266,21 @@ export function SuiteForm({ initial, editing, draftKey, onDone }: Props) {
               onChange={(fixBy) => update('branch.f0', { fixBy })}
             />
             {draft.fixBy === 'k' ? (
-              <FormTextInput label="k" hint="0 is the principal value at z0" value={draft.k} onChangeText={(k) => update('branch.k', { k })} rules={rules('branch.k')} mono />
+              <FormTextInput
+                label="k"
+                hint="0 is the principal value at z0"
+                value={draft.k}
+                onChangeText={(k) => update('branch.k', { k })}
+                rules={rules('branch.k')}
+                mono
+              />
             ) : (
-              <ComplexInput label="Value f0 at z0" value={draft.f0} onChange={(f0) => update('branch.f0', { f0 })} rules={complexRules(rules, 'branch.f0')} />
+              <ComplexInput
+                label="Value f0 at z0"
+                value={draft.f0}
+                onChange={(f0) => update('branch.f0', { f0 })}
+                rules={complexRules(rules, 'branch.f0')}
+              />
             )}
             <CutLayoutEditor cuts={draft.cuts} onChange={(cuts) => update('branch.cuts', { cuts })} rules={rules} />
           </>
@@ -220,7 +297,10 @@ export function SuiteForm({ initial, editing, draftKey, onDone }: Props) {
         <RuleLines rules={rules('convention')} />
       </TitledPanel>
 
-      <TitledPanel title="Paths" lead="Where the subject is evaluated. t runs over [0, 1]: the angle on a circle, the fraction of arc length on a polyline.">
+      <TitledPanel
+        title="Paths"
+        lead="Where the subject is evaluated. t runs over [0, 1]: the angle on a circle, the fraction of arc length on a polyline."
+      >
         <RuleLines rules={rules('paths').map((r) => `Paths ${r}`)} />
         {draft.paths.map((p, i) => (
           <PathEditor
@@ -228,36 +308,81 @@ export function SuiteForm({ initial, editing, draftKey, onDone }: Props) {
             path={p}
             index={i}
             rules={rules}
-            onChange={(next) => update(`paths.${i}`, (d) => ({ ...d, paths: d.paths.map((q, j) => (j === i ? next : q)) }))}
+            onChange={(next) =>
+              update(`paths.${i}`, (d) => ({ ...d, paths: d.paths.map((q, j) => (j === i ? next : q)) }))
+            }
             onRemove={() => update('paths', (d) => ({ ...d, paths: d.paths.filter((_, j) => j !== i) }))}
           />
         ))}
-        <SmallButton label="+ Add a path" onPress={() => update(`paths.${draft.paths.length}`, (d) => ({ ...d, paths: [...d.paths, emptyPathDraft(`path ${d.paths.length + 1}`)] }))} />
+        <SmallButton
+          label="+ Add a path"
+          onPress={() =>
+            update(`paths.${draft.paths.length}`, (d) => ({
+              ...d,
+              paths: [...d.paths, emptyPathDraft(`path ${d.paths.length + 1}`)],
+            }))
+          }
+        />
       </TitledPanel>
 
       {wide ? null : preview}
 
       <TitledPanel title="Tolerances" lead="How far a value may be from the reference before it fails.">
-        <ToleranceEditor label="Values" value={draft.tolerances.values} onChange={(values) => update('tolerances', (d) => ({ ...d, tolerances: { ...d.tolerances, values } }))} rules={rules} field="tolerances.values" />
+        <ToleranceEditor
+          label="Values"
+          value={draft.tolerances.values}
+          onChange={(values) => update('tolerances', (d) => ({ ...d, tolerances: { ...d.tolerances, values } }))}
+          rules={rules}
+          field="tolerances.values"
+        />
         <ToggleChip
           label="Monodromy has its own tolerance"
           value={draft.tolerances.monodromy !== null}
-          onChange={(on) => update('tolerances', (d) => ({ ...d, tolerances: { ...d.tolerances, monodromy: on ? { kind: 'relative', value: '1e-12' } : null } }))}
+          onChange={(on) =>
+            update('tolerances', (d) => ({
+              ...d,
+              tolerances: { ...d.tolerances, monodromy: on ? { kind: 'relative', value: '1e-12' } : null },
+            }))
+          }
         />
         {draft.tolerances.monodromy ? (
-          <ToleranceEditor label="Monodromy" value={draft.tolerances.monodromy} onChange={(monodromy) => update('tolerances', (d) => ({ ...d, tolerances: { ...d.tolerances, monodromy } }))} rules={rules} field="tolerances.monodromy" />
+          <ToleranceEditor
+            label="Monodromy"
+            value={draft.tolerances.monodromy}
+            onChange={(monodromy) =>
+              update('tolerances', (d) => ({ ...d, tolerances: { ...d.tolerances, monodromy } }))
+            }
+            rules={rules}
+            field="tolerances.monodromy"
+          />
         ) : null}
         <ToggleChip
           label="Property checks have their own tolerance"
           value={draft.tolerances.properties !== null}
-          onChange={(on) => update('tolerances', (d) => ({ ...d, tolerances: { ...d.tolerances, properties: on ? { kind: 'ulps', value: '4' } : null } }))}
+          onChange={(on) =>
+            update('tolerances', (d) => ({
+              ...d,
+              tolerances: { ...d.tolerances, properties: on ? { kind: 'ulps', value: '4' } : null },
+            }))
+          }
         />
         {draft.tolerances.properties ? (
-          <ToleranceEditor label="Properties" value={draft.tolerances.properties} onChange={(properties) => update('tolerances', (d) => ({ ...d, tolerances: { ...d.tolerances, properties } }))} rules={rules} field="tolerances.properties" />
+          <ToleranceEditor
+            label="Properties"
+            value={draft.tolerances.properties}
+            onChange={(properties) =>
+              update('tolerances', (d) => ({ ...d, tolerances: { ...d.tolerances, properties } }))
+            }
+            rules={rules}
+            field="tolerances.properties"
+          />
         ) : null}
       </TitledPanel>
 
-      <TitledPanel title="Property checks" lead="Laws checked on the library's own values at random points (seeded, so a failure can be replayed).">
+      <TitledPanel
+        title="Property checks"
+        lead="Laws checked on the library's own values at random points (seeded, so a failure can be replayed)."
+      >
         <RuleLines rules={rules('properties').map((r) => `Property checks ${r}`)} />
         {draft.properties.length === 0 ? <Text style={styles.empty}>No property checks.</Text> : null}
         {draft.properties.map((p, i) => (
@@ -266,18 +391,29 @@ export function SuiteForm({ initial, editing, draftKey, onDone }: Props) {
             value={p}
             index={i}
             rules={rules}
-            onChange={(next) => update(`properties.${i}`, (d) => ({ ...d, properties: d.properties.map((q, j) => (j === i ? next : q)) }))}
+            onChange={(next) =>
+              update(`properties.${i}`, (d) => ({ ...d, properties: d.properties.map((q, j) => (j === i ? next : q)) }))
+            }
             onRemove={() => update('properties', (d) => ({ ...d, properties: d.properties.filter((_, j) => j !== i) }))}
           />
         ))}
-        <SmallButton label="+ Add a property check" onPress={() => update(`properties.${draft.properties.length}`, (d) => ({ ...d, properties: [...d.properties, emptyPropertyDraft()] }))} />
+        <SmallButton
+          label="+ Add a property check"
+          onPress={() =>
+            update(`properties.${draft.properties.length}`, (d) => ({
+              ...d,
+              properties: [...d.properties, emptyPropertyDraft()],
+            }))
+          }
+        />
       </TitledPanel>
 
       <View style={styles.footer}>
         {refused ? (
           <View style={styles.refusal} accessibilityRole="alert" testID="suite-form-refused">
             <Text style={styles.refusalTitle}>
-              × Not saved: {visible.length} {visible.length === 1 ? 'rule is' : 'rules are'} broken. Nothing you typed is lost.
+              × Not saved: {visible.length} {visible.length === 1 ? 'rule is' : 'rules are'} broken. Nothing you typed
+              is lost.
             </Text>
             {visible.map((i, k) => (
               <Text key={k} style={styles.refusalLine}>
@@ -292,8 +428,17 @@ export function SuiteForm({ initial, editing, draftKey, onDone }: Props) {
           </Text>
         ) : null}
         <View style={styles.buttons}>
-          <ActionButton label="Save draft" tone="quiet" onPress={() => void save(false)} busy={saveSuite.isPending && !submitSuite.isPending} />
-          <ActionButton label="Save and submit for review" onPress={() => void save(true)} busy={submitSuite.isPending} />
+          <ActionButton
+            label="Save draft"
+            tone="quiet"
+            onPress={() => void save(false)}
+            busy={saveSuite.isPending && !submitSuite.isPending}
+          />
+          <ActionButton
+            label="Save and submit for review"
+            onPress={() => void save(true)}
+            busy={submitSuite.isPending}
+          />
         </View>
       </View>
     </View>
@@ -318,8 +463,20 @@ const styles = StyleSheet.create({
   empty: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkFaint },
   footer: { gap: theme.space(3) },
   buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
-  refusal: { backgroundColor: theme.color.dangerSoft, borderRadius: theme.radius, padding: theme.space(3), gap: theme.space(1) },
+  refusal: {
+    backgroundColor: theme.color.dangerSoft,
+    borderRadius: theme.radius,
+    padding: theme.space(3),
+    gap: theme.space(1),
+  },
   refusalTitle: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.danger },
   refusalLine: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.ink },
-  serverMessage: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.danger, backgroundColor: theme.color.dangerSoft, padding: theme.space(3), borderRadius: theme.radius },
+  serverMessage: {
+    fontFamily: theme.font.medium,
+    fontSize: theme.size.body,
+    color: theme.color.danger,
+    backgroundColor: theme.color.dangerSoft,
+    padding: theme.space(3),
+    borderRadius: theme.radius,
+  },
 });

@@ -9,11 +9,28 @@ import { QueryState } from './query-state';
  * A suite on the plane — its paths, cuts and branch points, computed by the same harness code
  * the runner uses — with a line saying what is drawn and what is not.
  */
-export function SuitePreview({ body, label, height = 320, testID }: { body: unknown; label: string; height?: number; testID?: string }) {
+export function SuitePreview({
+  body,
+  label,
+  height = 320,
+  testID,
+}: {
+  body: unknown;
+  label: string;
+  height?: number;
+  testID?: string;
+}) {
   const tools = useSuiteTools();
   const picture = useMemo(() => (tools.data ? tools.data.suitePicture(body) : null), [tools.data, body]);
   if (tools.isPending) return <QueryState state="loading" message="Loading the drawing tools…" />;
-  if (tools.isError) return <QueryState state="error" message={`The picture cannot be drawn: ${tools.error.message}`} onRetry={() => void tools.refetch()} />;
+  if (tools.isError)
+    return (
+      <QueryState
+        state="error"
+        message={`The picture cannot be drawn: ${tools.error.message}`}
+        onRetry={() => void tools.refetch()}
+      />
+    );
   if (!picture) return null;
   const lines = picture.paths.filter((p) => p.draw === 'line');
   const sets = picture.paths.filter((p) => p.draw === 'points');
@@ -29,9 +46,13 @@ export function SuitePreview({ body, label, height = 320, testID }: { body: unkn
         height={height}
       />
       <Text style={styles.summary} testID={testID ? `${testID}-summary` : undefined}>
-        Drawn: {picture.paths.length} {picture.paths.length === 1 ? 'path' : 'paths'} ({pointCount} points), {picture.cuts.length} {picture.cuts.length === 1 ? 'cut' : 'cuts'},{' '}
-        {picture.branchPoints.length} {picture.branchPoints.length === 1 ? 'branch point' : 'branch points'}
-        {picture.branchPoints.length > 0 ? `: ${picture.branchPoints.map((p) => (Math.abs(p.im) < 1e-12 ? fmt(p.re) : `${fmt(p.re)}${p.im < 0 ? ' − ' : ' + '}${fmt(Math.abs(p.im))}i`)).join(', ')}` : ''}.
+        Drawn: {picture.paths.length} {picture.paths.length === 1 ? 'path' : 'paths'} ({pointCount} points),{' '}
+        {picture.cuts.length} {picture.cuts.length === 1 ? 'cut' : 'cuts'}, {picture.branchPoints.length}{' '}
+        {picture.branchPoints.length === 1 ? 'branch point' : 'branch points'}
+        {picture.branchPoints.length > 0
+          ? `: ${picture.branchPoints.map((p) => (Math.abs(p.im) < 1e-12 ? fmt(p.re) : `${fmt(p.re)}${p.im < 0 ? ' − ' : ' + '}${fmt(Math.abs(p.im))}i`)).join(', ')}`
+          : ''}
+        .
       </Text>
       {picture.notes.map((note, i) => (
         <Text key={i} style={styles.note}>

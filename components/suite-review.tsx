@@ -17,9 +17,11 @@ export function SuiteReview({ slug }: { slug: string }) {
   const { data: me } = useMe();
   const wide = useWindowDimensions().width >= theme.wide;
   if (!me) return null;
-  if (me.role !== 'reviewer' && me.role !== 'admin') return <QueryState state="error" message="Only reviewers and admins review suites." />;
+  if (me.role !== 'reviewer' && me.role !== 'admin')
+    return <QueryState state="error" message="Only reviewers and admins review suites." />;
   if (suite.isPending) return <QueryState state="loading" />;
-  if (suite.isError) return <QueryState state="error" message={suite.error.message} onRetry={() => void suite.refetch()} />;
+  if (suite.isError)
+    return <QueryState state="error" message={suite.error.message} onRetry={() => void suite.refetch()} />;
   const current = suite.data.find((v) => v.status === 'submitted');
   if (!current) return <QueryState state="empty" message={`No version of ${slug} waits for review.`} />;
   const previous = suite.data.find((v) => v.version === current.version - 1) ?? null;
@@ -27,7 +29,11 @@ export function SuiteReview({ slug }: { slug: string }) {
 
   const decision = (
     <TitledPanel title="Decision">
-      {own ? <Text style={styles.own}>◊ You wrote this version. Four eyes: another reviewer must review it, and the server will refuse your review.</Text> : null}
+      {own ? (
+        <Text style={styles.own}>
+          ◊ You wrote this version. Four eyes: another reviewer must review it, and the server will refuse your review.
+        </Text>
+      ) : null}
       <ReviewForm slug={slug} version={current.version} onReviewed={() => router.replace('/review')} />
     </TitledPanel>
   );
@@ -38,7 +44,12 @@ export function SuiteReview({ slug }: { slug: string }) {
   );
   const picture = (
     <TitledPanel title="Plane picture">
-      <SuitePreview body={current.body} label={`Plane picture of ${current.body.title}`} testID="review-picture" height={wide ? 360 : 280} />
+      <SuitePreview
+        body={current.body}
+        label={`Plane picture of ${current.body.title}`}
+        testID="review-picture"
+        height={wide ? 360 : 280}
+      />
     </TitledPanel>
   );
   const facts = (
@@ -85,5 +96,12 @@ const styles = StyleSheet.create({
   sideCol: { flex: 2, minWidth: 0, gap: theme.space(4) },
   head: { flexDirection: 'row', alignItems: 'center', gap: theme.space(3), flexWrap: 'wrap' },
   meta: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
-  own: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink, backgroundColor: '#F5E7C8', padding: theme.space(2), borderRadius: theme.radius },
+  own: {
+    fontFamily: theme.font.regular,
+    fontSize: theme.size.small,
+    color: theme.color.ink,
+    backgroundColor: '#F5E7C8',
+    padding: theme.space(2),
+    borderRadius: theme.radius,
+  },
 });

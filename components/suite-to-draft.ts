@@ -5,7 +5,8 @@ import { emptyPropertyDraft } from './empty-property-draft';
 import { emptySuiteDraft } from './empty-suite-draft';
 import type { PathDraft, PropertyDraft, SuiteDraft, ToleranceDraft } from './suite-draft';
 
-const toleranceDraft = (t: Tolerance): ToleranceDraft => ('ulps' in t ? { kind: 'ulps', value: String(t.ulps) } : { kind: 'relative', value: String(t.relative) });
+const toleranceDraft = (t: Tolerance): ToleranceDraft =>
+  'ulps' in t ? { kind: 'ulps', value: String(t.ulps) } : { kind: 'relative', value: String(t.relative) };
 
 /** A stored suite as the form holds it, to edit it (a new draft version where the latest is approved). */
 export function suiteToDraft(s: Suite): SuiteDraft {
@@ -22,7 +23,15 @@ export function suiteToDraft(s: Suite): SuiteDraft {
       const d: PathDraft = { ...emptyPathDraft(p.name), kind: p.kind };
       switch (p.kind) {
         case 'circle':
-          return { ...d, center: p.center, radius: p.radius, startAngle: p.start_angle, turns: p.turns, direction: p.direction, ...sampling(p) };
+          return {
+            ...d,
+            center: p.center,
+            radius: p.radius,
+            startAngle: p.start_angle,
+            turns: p.turns,
+            direction: p.direction,
+            ...sampling(p),
+          };
         case 'segment':
           return { ...d, from: p.from, to: p.to, ...sampling(p) };
         case 'polyline':
@@ -46,7 +55,14 @@ export function suiteToDraft(s: Suite): SuiteDraft {
       properties: s.tolerances.properties ? toleranceDraft(s.tolerances.properties) : null,
     },
     properties: s.properties.map((p): PropertyDraft => {
-      const d: PropertyDraft = { ...emptyPropertyDraft(), law: p.law, region: p.region.kind, runs: String(p.runs), seed: String(p.seed), power: p.power !== undefined ? String(p.power) : '2' };
+      const d: PropertyDraft = {
+        ...emptyPropertyDraft(),
+        law: p.law,
+        region: p.region.kind,
+        runs: String(p.runs),
+        seed: String(p.seed),
+        power: p.power !== undefined ? String(p.power) : '2',
+      };
       if (p.region.kind === 'disc') return { ...d, center: p.region.center, radius: p.region.radius };
       if (p.region.kind === 'box') return { ...d, min: p.region.min, max: p.region.max };
       return { ...d, distance: p.region.distance };
@@ -71,5 +87,7 @@ export function suiteToDraft(s: Suite): SuiteDraft {
 }
 
 function sampling(p: { samples?: number; at?: string[] }): Pick<PathDraft, 'sampling' | 'samples' | 'at'> {
-  return p.at !== undefined ? { sampling: 'at', samples: '65', at: p.at.join(', ') } : { sampling: 'samples', samples: String(p.samples ?? ''), at: '' };
+  return p.at !== undefined
+    ? { sampling: 'at', samples: '65', at: p.at.join(', ') }
+    : { sampling: 'samples', samples: String(p.samples ?? ''), at: '' };
 }

@@ -9,7 +9,10 @@ import { QueryState } from './query-state';
 import { SuiteCard } from './suite-card';
 import { SuiteFileUpload } from './suite-file-upload';
 
-const STATUS_OPTIONS = [{ value: 'any', text: 'any status' }, ...SUITE_STATUSES.map((s) => ({ value: s, text: s.replace('-', ' ') }))] as const;
+const STATUS_OPTIONS = [
+  { value: 'any', text: 'any status' },
+  ...SUITE_STATUSES.map((s) => ({ value: s, text: s.replace('-', ' ') })),
+] as const;
 
 /** Every suite with its latest version: search, filter by status, write a new one or upload a file. */
 export function SuitesList() {
@@ -20,7 +23,11 @@ export function SuitesList() {
     <View style={styles.box}>
       <View style={styles.actions}>
         <Link href="/suites/new" asChild>
-          <Pressable accessibilityRole="link" accessibilityLabel="New suite" style={StyleSheet.flatten(styles.newButton)}>
+          <Pressable
+            accessibilityRole="link"
+            accessibilityLabel="New suite"
+            style={StyleSheet.flatten(styles.newButton)}
+          >
             <Text style={styles.newText}>+ New suite</Text>
           </Pressable>
         </Link>
@@ -28,12 +35,34 @@ export function SuitesList() {
       </View>
       <View style={styles.search}>
         <Text style={styles.label}>Search</Text>
-        <TextInput accessibilityLabel="Search suites by id, title or subject" placeholder="id, title or subject" value={q} onChangeText={setQ} autoCapitalize="none" autoCorrect={false} style={styles.input} />
+        <TextInput
+          accessibilityLabel="Search suites by id, title or subject"
+          placeholder="id, title or subject"
+          value={q}
+          onChangeText={setQ}
+          autoCapitalize="none"
+          autoCorrect={false}
+          style={styles.input}
+        />
       </View>
-      <ChipGroup label="Latest version" options={STATUS_OPTIONS} value={status} onChange={(v) => setStatus(v as SuiteStatus | 'any')} />
+      <ChipGroup
+        label="Latest version"
+        options={STATUS_OPTIONS}
+        value={status}
+        onChange={(v) => setStatus(v as SuiteStatus | 'any')}
+      />
       {suites.isPending ? <QueryState state="loading" /> : null}
-      {suites.isError ? <QueryState state="error" message={suites.error.message} onRetry={() => void suites.refetch()} /> : null}
-      {suites.data && suites.data.length === 0 ? <QueryState state="empty" message={q || status !== 'any' ? 'No suite matches this search.' : 'No suites yet: write one or upload a file.'} /> : null}
+      {suites.isError ? (
+        <QueryState state="error" message={suites.error.message} onRetry={() => void suites.refetch()} />
+      ) : null}
+      {suites.data && suites.data.length === 0 ? (
+        <QueryState
+          state="empty"
+          message={
+            q || status !== 'any' ? 'No suite matches this search.' : 'No suites yet: write one or upload a file.'
+          }
+        />
+      ) : null}
       {suites.data && suites.data.length > 0 ? (
         <>
           <Text style={styles.count}>
@@ -53,11 +82,27 @@ export function SuitesList() {
 const styles = StyleSheet.create({
   box: { gap: theme.space(4) },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3), alignItems: 'flex-start' },
-  newButton: { minHeight: theme.touch, paddingHorizontal: theme.space(5), borderRadius: theme.radius, backgroundColor: theme.color.accent, justifyContent: 'center' },
+  newButton: {
+    minHeight: theme.touch,
+    paddingHorizontal: theme.space(5),
+    borderRadius: theme.radius,
+    backgroundColor: theme.color.accent,
+    justifyContent: 'center',
+  },
   newText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accentInk },
   search: { gap: theme.space(1) },
   label: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft },
-  input: { minHeight: theme.touch, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, paddingHorizontal: theme.space(3), fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.ink, backgroundColor: theme.color.panel },
+  input: {
+    minHeight: theme.touch,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    paddingHorizontal: theme.space(3),
+    fontFamily: theme.font.regular,
+    fontSize: theme.size.body,
+    color: theme.color.ink,
+    backgroundColor: theme.color.panel,
+  },
   count: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkFaint },
   grid: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
 });

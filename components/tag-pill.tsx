@@ -6,9 +6,24 @@ import { theme } from '../constants/theme';
  * (with an edge when given), so it reads without the colour. The badges of runs, suites and roles
  * are each one of these.
  */
-export function TagPill({ text, ink, soft, edge, accessibilityLabel }: { text: string; ink: string; soft: string; edge?: string; accessibilityLabel: string }) {
+export function TagPill({
+  text,
+  ink,
+  soft,
+  edge,
+  accessibilityLabel,
+}: {
+  text: string;
+  ink: string;
+  soft: string;
+  edge?: string;
+  accessibilityLabel: string;
+}) {
   return (
-    <Text style={[styles.pill, { color: ink, backgroundColor: soft }, edge ? { borderColor: edge, borderWidth: 1 } : null]} accessibilityLabel={accessibilityLabel}>
+    <Text
+      style={[styles.pill, { color: ink, backgroundColor: soft }, edge ? { borderColor: edge, borderWidth: 1 } : null]}
+      accessibilityLabel={accessibilityLabel}
+    >
       {text}
     </Text>
   );

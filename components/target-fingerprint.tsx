@@ -12,7 +12,12 @@ export function TargetFingerprint({ name, onOpenCutMap }: { name: string; onOpen
   if (fp.isError) return <QueryState state="error" message={fp.error.message} onRetry={() => void fp.refetch()} />;
   const { fingerprint } = fp.data;
   if (fingerprint.cuts.length === 0) {
-    return <QueryState state="empty" message={`${name} has none of the functions with a cut (${fingerprint.missing.join(', ')}), so there is nothing to fingerprint.`} />;
+    return (
+      <QueryState
+        state="empty"
+        message={`${name} has none of the functions with a cut (${fingerprint.missing.join(', ')}), so there is nothing to fingerprint.`}
+      />
+    );
   }
   return (
     <View style={{ gap: theme.space(2) }}>

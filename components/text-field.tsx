@@ -3,7 +3,16 @@ import { theme } from '../constants/theme';
 import { INPUT_BOX_STYLE } from './input-box-style';
 import { RuleLines } from './rule-lines';
 
-interface Props extends Pick<TextInputProps, 'secureTextEntry' | 'autoComplete' | 'keyboardType' | 'onSubmitEditing' | 'autoCapitalize' | 'multiline' | 'placeholder'> {
+interface Props extends Pick<
+  TextInputProps,
+  | 'secureTextEntry'
+  | 'autoComplete'
+  | 'keyboardType'
+  | 'onSubmitEditing'
+  | 'autoCapitalize'
+  | 'multiline'
+  | 'placeholder'
+> {
   label: string;
   value: string;
   onChangeText: (text: string) => void;
@@ -23,7 +32,12 @@ export function TextField({ label, value, onChangeText, error, testID, mono = fa
         aria-invalid={error ? true : undefined}
         value={value}
         onChangeText={onChangeText}
-        style={[styles.input, mono ? styles.mono : null, inputProps.multiline ? styles.multiline : null, error ? styles.inputError : null]}
+        style={[
+          styles.input,
+          mono ? styles.mono : null,
+          inputProps.multiline ? styles.multiline : null,
+          error ? styles.inputError : null,
+        ]}
         testID={testID}
         autoCorrect={false}
         placeholderTextColor={theme.color.inkFaint}

@@ -12,9 +12,21 @@ export function TokenList() {
   const tokens = useTokens();
   const revoke = useRevokeToken();
   if (tokens.isPending) return <QueryState state="loading" />;
-  if (tokens.isError) return <QueryState state="error" message={tokens.error.message} onRetry={() => void tokens.refetch()} />;
-  if (tokens.data.length === 0) return <QueryState state="empty" message="No tokens yet. Make one for each place that starts runs for you, so each can be revoked alone." />;
-  const failure = revoke.error instanceof ApiRequestError ? revoke.error.body.message : revoke.error ? 'The server could not be reached; the token still works.' : null;
+  if (tokens.isError)
+    return <QueryState state="error" message={tokens.error.message} onRetry={() => void tokens.refetch()} />;
+  if (tokens.data.length === 0)
+    return (
+      <QueryState
+        state="empty"
+        message="No tokens yet. Make one for each place that starts runs for you, so each can be revoked alone."
+      />
+    );
+  const failure =
+    revoke.error instanceof ApiRequestError
+      ? revoke.error.body.message
+      : revoke.error
+        ? 'The server could not be reached; the token still works.'
+        : null;
 
   return (
     <View style={styles.list} testID="token-list">
@@ -31,7 +43,9 @@ export function TokenList() {
             <Text style={styles.dates}>
               Made {formatDate(t.createdAt)} · {t.lastUsedAt ? `last used ${formatDate(t.lastUsedAt)}` : 'never used'}
             </Text>
-            <Text style={[styles.state, !t.revokedAt && styles.active]}>{t.revokedAt ? `− Revoked ${formatDate(t.revokedAt)}: refused by the API` : '✓ Active'}</Text>
+            <Text style={[styles.state, !t.revokedAt && styles.active]}>
+              {t.revokedAt ? `− Revoked ${formatDate(t.revokedAt)}: refused by the API` : '✓ Active'}
+            </Text>
           </View>
           {t.revokedAt ? null : (
             <View style={styles.action}>
@@ -53,8 +67,24 @@ export function TokenList() {
 
 const styles = StyleSheet.create({
   list: { gap: 0 },
-  failure: { fontFamily: theme.font.medium, color: theme.color.danger, backgroundColor: theme.color.dangerSoft, padding: theme.space(3), borderRadius: theme.radius, marginBottom: theme.space(2) },
-  row: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-start', justifyContent: 'space-between', gap: theme.space(3), borderTopWidth: 1, borderTopColor: theme.color.rule, paddingVertical: theme.space(3) },
+  failure: {
+    fontFamily: theme.font.medium,
+    color: theme.color.danger,
+    backgroundColor: theme.color.dangerSoft,
+    padding: theme.space(3),
+    borderRadius: theme.radius,
+    marginBottom: theme.space(2),
+  },
+  row: {
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    alignItems: 'flex-start',
+    justifyContent: 'space-between',
+    gap: theme.space(3),
+    borderTopWidth: 1,
+    borderTopColor: theme.color.rule,
+    paddingVertical: theme.space(3),
+  },
   revoked: { opacity: 0.75 },
   words: { flexGrow: 1, flexShrink: 1, flexBasis: 200, gap: 2 },
   name: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },

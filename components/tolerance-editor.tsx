@@ -7,7 +7,19 @@ import { RuleLines } from './rule-lines';
 import type { ToleranceDraft } from './suite-draft';
 
 /** One tolerance: ulps per component or relative error of the whole value. */
-export function ToleranceEditor({ label, value, onChange, rules, field }: { label: string; value: ToleranceDraft; onChange: (t: ToleranceDraft) => void; rules: FieldRules; field: string }) {
+export function ToleranceEditor({
+  label,
+  value,
+  onChange,
+  rules,
+  field,
+}: {
+  label: string;
+  value: ToleranceDraft;
+  onChange: (t: ToleranceDraft) => void;
+  rules: FieldRules;
+  field: string;
+}) {
   return (
     <View style={styles.box}>
       <ChipGroup
@@ -19,7 +31,14 @@ export function ToleranceEditor({ label, value, onChange, rules, field }: { labe
         value={value.kind}
         onChange={(kind) => onChange({ ...value, kind })}
       />
-      <FormTextInput label={`${label} tolerance`} visibleLabel={value.kind === 'ulps' ? 'At most (ulps)' : 'At most (relative)'} value={value.value} onChangeText={(v) => onChange({ ...value, value: v })} rules={rules(`${field}.${value.kind}`)} mono />
+      <FormTextInput
+        label={`${label} tolerance`}
+        visibleLabel={value.kind === 'ulps' ? 'At most (ulps)' : 'At most (relative)'}
+        value={value.value}
+        onChangeText={(v) => onChange({ ...value, value: v })}
+        rules={rules(`${field}.${value.kind}`)}
+        mono
+      />
       <RuleLines rules={rules(field).map((r) => `${label} tolerance ${r}`)} />
     </View>
   );

@@ -14,10 +14,12 @@ export function UsersList({ me }: { me: PublicUser }) {
   const wide = useWindowDimensions().width >= theme.wide;
 
   if (users.isPending) return <QueryState state="loading" />;
-  if (users.isError) return <QueryState state="error" message={users.error.message} onRetry={() => void users.refetch()} />;
+  if (users.isError)
+    return <QueryState state="error" message={users.error.message} onRetry={() => void users.refetch()} />;
   if (users.data.length === 0) return <QueryState state="empty" message="No users yet." />;
 
-  const failure = changeRole.error instanceof ApiRequestError ? changeRole.error.body.message : changeRole.error?.message;
+  const failure =
+    changeRole.error instanceof ApiRequestError ? changeRole.error.body.message : changeRole.error?.message;
 
   return (
     <View style={styles.list}>
@@ -44,7 +46,11 @@ export function UsersList({ me }: { me: PublicUser }) {
           </View>
           {wide ? <Text style={[styles.email, styles.emailCol]}>{user.email}</Text> : null}
           <View style={[styles.roleCol, styles.roleCell]}>
-            <View style={styles.chips} accessibilityRole="radiogroup" accessibilityLabel={`Role of ${user.displayName}`}>
+            <View
+              style={styles.chips}
+              accessibilityRole="radiogroup"
+              accessibilityLabel={`Role of ${user.displayName}`}
+            >
               {ROLES.map((role: Role) => (
                 <Pressable
                   key={role}
@@ -70,11 +76,38 @@ export function UsersList({ me }: { me: PublicUser }) {
 
 const styles = StyleSheet.create({
   list: { gap: theme.space(2) },
-  failure: { fontFamily: theme.font.medium, color: theme.color.danger, backgroundColor: theme.color.dangerSoft, padding: theme.space(3), borderRadius: theme.radius },
-  card: { backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, padding: theme.space(4), gap: theme.space(3) },
-  row: { flexDirection: 'row', alignItems: 'center', paddingVertical: theme.space(3), paddingHorizontal: theme.space(3), borderBottomWidth: 1, borderBottomColor: theme.color.rule, backgroundColor: theme.color.panel },
+  failure: {
+    fontFamily: theme.font.medium,
+    color: theme.color.danger,
+    backgroundColor: theme.color.dangerSoft,
+    padding: theme.space(3),
+    borderRadius: theme.radius,
+  },
+  card: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+    gap: theme.space(3),
+  },
+  row: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    paddingVertical: theme.space(3),
+    paddingHorizontal: theme.space(3),
+    borderBottomWidth: 1,
+    borderBottomColor: theme.color.rule,
+    backgroundColor: theme.color.panel,
+  },
   headRow: { backgroundColor: 'transparent' },
-  head: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkFaint, textTransform: 'uppercase', letterSpacing: 0.8 },
+  head: {
+    fontFamily: theme.font.medium,
+    fontSize: theme.size.small,
+    color: theme.color.inkFaint,
+    textTransform: 'uppercase',
+    letterSpacing: 0.8,
+  },
   nameCol: { flex: 2 },
   emailCol: { flex: 3 },
   roleCol: { flex: 5 },
@@ -82,7 +115,14 @@ const styles = StyleSheet.create({
   name: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
   email: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.inkSoft },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
-  chip: { minHeight: 44, justifyContent: 'center', paddingHorizontal: theme.space(3), borderRadius: theme.radius, borderWidth: 1, borderColor: theme.color.rule },
+  chip: {
+    minHeight: 44,
+    justifyContent: 'center',
+    paddingHorizontal: theme.space(3),
+    borderRadius: theme.radius,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+  },
   chipOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
   chipText: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink },
   chipTextOn: { color: theme.color.accentInk, fontFamily: theme.font.medium },

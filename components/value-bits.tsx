@@ -7,7 +7,10 @@ import type { WireComplex } from '../shared/run-result';
 import { wireNumber } from '../shared/wire-number';
 import { formatComplex } from './format-complex';
 
-const hexOf = (c: WireComplex): WireComplex => ({ re: formatHexDouble(wireNumber(c.re)), im: formatHexDouble(wireNumber(c.im)) });
+const hexOf = (c: WireComplex): WireComplex => ({
+  re: formatHexDouble(wireNumber(c.re)),
+  im: formatHexDouble(wireNumber(c.im)),
+});
 
 /**
  * The case's numbers: z, the expected and the library's value, and both one-sided limits when
@@ -20,7 +23,9 @@ export function ValueBits({ failure: f }: { failure: FailureView }) {
     { name: 'z (input)', value: f.z, hex: f.zHex },
     { name: 'expected', value: f.expected },
     { name: 'library', value: f.actual },
-    ...(f.limits ? f.limits.sides.map((side, i) => ({ name: `limit ${side}`, value: f.limits!.values[i] ?? null })) : []),
+    ...(f.limits
+      ? f.limits.sides.map((side, i) => ({ name: `limit ${side}`, value: f.limits!.values[i] ?? null }))
+      : []),
   ];
   return (
     <View style={styles.root}>
@@ -34,7 +39,13 @@ export function ValueBits({ failure: f }: { failure: FailureView }) {
         </View>
       ))}
       {f.limits ? null : <Text style={styles.note}>Not on a cut: there is one limit, the value itself.</Text>}
-      <Pressable accessibilityRole="button" accessibilityLabel={bits ? 'Hide exact bits' : 'Show exact bits'} aria-expanded={bits} onPress={() => setBits(!bits)} style={styles.toggle}>
+      <Pressable
+        accessibilityRole="button"
+        accessibilityLabel={bits ? 'Hide exact bits' : 'Show exact bits'}
+        aria-expanded={bits}
+        onPress={() => setBits(!bits)}
+        style={styles.toggle}
+      >
         <Text style={styles.toggleText}>{bits ? '↑ Hide exact bits' : '↓ Show exact bits (C hex floats)'}</Text>
       </Pressable>
     </View>
@@ -53,10 +64,31 @@ function HexLine({ hex }: { hex: WireComplex }) {
 const styles = StyleSheet.create({
   root: { gap: theme.space(3) },
   row: { gap: 2, borderBottomWidth: 1, borderBottomColor: theme.color.rule, paddingBottom: theme.space(2) },
-  name: { fontFamily: theme.font.medium, fontSize: 12, color: theme.color.inkFaint, textTransform: 'uppercase', letterSpacing: 0.6 },
+  name: {
+    fontFamily: theme.font.medium,
+    fontSize: 12,
+    color: theme.color.inkFaint,
+    textTransform: 'uppercase',
+    letterSpacing: 0.6,
+  },
   value: { fontFamily: theme.font.mono, fontSize: 15, color: theme.color.ink },
-  hex: { fontFamily: theme.font.mono, fontSize: 13, color: theme.color.inkSoft, backgroundColor: theme.color.paper, padding: theme.space(2), borderRadius: 4 },
+  hex: {
+    fontFamily: theme.font.mono,
+    fontSize: 13,
+    color: theme.color.inkSoft,
+    backgroundColor: theme.color.paper,
+    padding: theme.space(2),
+    borderRadius: 4,
+  },
   note: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
-  toggle: { minHeight: theme.touch, justifyContent: 'center', paddingHorizontal: theme.space(4), borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, alignSelf: 'flex-start' },
+  toggle: {
+    minHeight: theme.touch,
+    justifyContent: 'center',
+    paddingHorizontal: theme.space(4),
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    alignSelf: 'flex-start',
+  },
   toggleText: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.ink },
 });

@@ -55,18 +55,21 @@ export function VersionMatrixTable({ library, versions, suites, pending = 0 }: V
     <View style={styles.wrap}>
       <Text style={styles.summary} testID="matrix-summary">
         {plural(suites.length, 'suite')} over {plural(versions.length, 'version')} of {library}:{' '}
-        {changed.length === 0 ? 'no value changed between consecutive versions.' : `${plural(points, 'point')} in ${plural(changed.length, 'suite')} changed value somewhere.`}
+        {changed.length === 0
+          ? 'no value changed between consecutive versions.'
+          : `${plural(points, 'point')} in ${plural(changed.length, 'suite')} changed value somewhere.`}
         {pending > 0 ? ` ${plural(pending, 'more suite')} still being compared…` : ''}
       </Text>
       <View style={styles.note} testID="matrix-scope">
         <Text style={styles.noteTitle}>What this shows, and what it does not</Text>
         <Text style={styles.noteLine}>
-          ✓ Compared: each suite&apos;s newest approved version run on {versions.join(', ')}; every point&apos;s value compared bit for bit (zero signs included) with the
-          previous version&apos;s. ∆ counts the points whose value changed at that version.
+          ✓ Compared: each suite&apos;s newest approved version run on {versions.join(', ')}; every point&apos;s value
+          compared bit for bit (zero signs included) with the previous version&apos;s. ∆ counts the points whose value
+          changed at that version.
         </Text>
         <Text style={styles.noteLine}>
-          × Not compared: versions not installed here, points off the suites&apos; paths, and other settings of the library. &quot;No change&quot; means the same values at these
-          points, not the same library.
+          × Not compared: versions not installed here, points off the suites&apos; paths, and other settings of the
+          library. &quot;No change&quot; means the same values at these points, not the same library.
         </Text>
       </View>
 
@@ -90,7 +93,8 @@ export function VersionMatrixTable({ library, versions, suites, pending = 0 }: V
 function SuiteRow({ suite, versions, wide }: { suite: SuiteEntry; versions: string[]; wide: boolean }) {
   const [open, setOpen] = useState(false);
   const [all, setAll] = useState(false);
-  const changedAt = (v: string) => suite.changes.reduce((n, c) => n + c.steps.filter((s) => s.after.version === v).length, 0);
+  const changedAt = (v: string) =>
+    suite.changes.reduce((n, c) => n + c.steps.filter((s) => s.after.version === v).length, 0);
   const cells = versions.map((v) => {
     const status = suite.statusByVersion.find((s) => s.version === v);
     const words = status ? statusWords(status) : { glyph: '−', text: 'not run', bad: false };
@@ -161,7 +165,12 @@ function SuiteRow({ suite, versions, wide }: { suite: SuiteEntry; versions: stri
             </View>
           ))}
           {suite.changes.length > FIRST && !all ? (
-            <Pressable accessibilityRole="button" accessibilityLabel={`Show all ${suite.changes.length} changed points of ${suite.id}`} onPress={() => setAll(true)} style={styles.linkButton}>
+            <Pressable
+              accessibilityRole="button"
+              accessibilityLabel={`Show all ${suite.changes.length} changed points of ${suite.id}`}
+              onPress={() => setAll(true)}
+              style={styles.linkButton}
+            >
               <Text style={styles.linkText}>Show all {suite.changes.length}</Text>
             </Pressable>
           ) : null}
@@ -174,21 +183,64 @@ function SuiteRow({ suite, versions, wide }: { suite: SuiteEntry; versions: stri
 const styles = StyleSheet.create({
   wrap: { gap: theme.space(2) },
   summary: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink, lineHeight: 24 },
-  note: { borderLeftWidth: 3, borderLeftColor: theme.color.focus, backgroundColor: theme.color.panel, borderRadius: theme.radius, padding: theme.space(4), gap: theme.space(2), marginBottom: theme.space(2) },
+  note: {
+    borderLeftWidth: 3,
+    borderLeftColor: theme.color.focus,
+    backgroundColor: theme.color.panel,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+    gap: theme.space(2),
+    marginBottom: theme.space(2),
+  },
   noteTitle: { fontFamily: theme.font.bold, fontSize: theme.size.body, color: theme.color.ink },
   noteLine: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
-  card: { backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, padding: theme.space(4), gap: theme.space(3) },
+  card: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+    gap: theme.space(3),
+  },
   cardBody: { gap: theme.space(3) },
-  rowBox: { backgroundColor: theme.color.panel, borderBottomWidth: 1, borderBottomColor: theme.color.rule, paddingHorizontal: theme.space(3), paddingBottom: theme.space(2), gap: theme.space(1) },
+  rowBox: {
+    backgroundColor: theme.color.panel,
+    borderBottomWidth: 1,
+    borderBottomColor: theme.color.rule,
+    paddingHorizontal: theme.space(3),
+    paddingBottom: theme.space(2),
+    gap: theme.space(1),
+  },
   row: { flexDirection: 'row', alignItems: 'center', gap: theme.space(2), paddingVertical: theme.space(2) },
   // On the web the version headings stay in view while a long matrix scrolls under them (react-native-web passes "sticky" through).
-  headRow: { paddingHorizontal: theme.space(3), position: 'sticky' as 'relative', top: 0, zIndex: 1, backgroundColor: theme.color.paper, borderBottomWidth: 1, borderBottomColor: theme.color.rule },
+  headRow: {
+    paddingHorizontal: theme.space(3),
+    position: 'sticky' as 'relative',
+    top: 0,
+    zIndex: 1,
+    backgroundColor: theme.color.paper,
+    borderBottomWidth: 1,
+    borderBottomColor: theme.color.rule,
+  },
   head: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkFaint, letterSpacing: 0.5 },
   suiteCol: { flex: 3, minWidth: 0 },
-  versionCol: { flex: 1, minWidth: 0, paddingVertical: 2, paddingHorizontal: theme.space(1), borderRadius: theme.radius },
+  versionCol: {
+    flex: 1,
+    minWidth: 0,
+    paddingVertical: 2,
+    paddingHorizontal: theme.space(1),
+    borderRadius: theme.radius,
+  },
   cellsWide: { flex: 7, flexDirection: 'row', gap: theme.space(2) },
   cellsPhone: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
-  chip: { minWidth: 96, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius, paddingHorizontal: theme.space(2), paddingVertical: theme.space(1) },
+  chip: {
+    minWidth: 96,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    paddingHorizontal: theme.space(2),
+    paddingVertical: theme.space(1),
+  },
   cellBad: { backgroundColor: theme.color.dangerSoft },
   chipVersion: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.inkFaint },
   cellText: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.accent },
@@ -197,7 +249,15 @@ const styles = StyleSheet.create({
   suiteId: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.ink },
   subject: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.inkSoft },
   faint: { fontFamily: theme.font.regular, fontSize: 12, color: theme.color.inkFaint },
-  linkButton: { minHeight: 44, justifyContent: 'center', alignSelf: 'flex-start', paddingHorizontal: theme.space(3), borderRadius: theme.radius, borderWidth: 1, borderColor: theme.color.rule },
+  linkButton: {
+    minHeight: 44,
+    justifyContent: 'center',
+    alignSelf: 'flex-start',
+    paddingHorizontal: theme.space(3),
+    borderRadius: theme.radius,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+  },
   linkText: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.accent },
   changes: { gap: theme.space(2), paddingBottom: theme.space(2) },
   change: { borderTopWidth: 1, borderTopColor: theme.color.rule, paddingTop: theme.space(2), gap: 2 },

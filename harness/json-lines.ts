@@ -16,7 +16,9 @@ export async function jsonLines(
     try {
       reply = answer(JSON.parse(line));
     } catch (e) {
-      reply = { error: e instanceof SyntaxError ? `not JSON: ${e.message}` : e instanceof Error ? e.message : String(e) };
+      reply = {
+        error: e instanceof SyntaxError ? `not JSON: ${e.message}` : e instanceof Error ? e.message : String(e),
+      };
     }
     output.write(JSON.stringify(reply) + '\n');
   }

@@ -41,8 +41,22 @@ function suiteFor(fn: string, samples: number): Suite {
       branch: { kind: 'principal' },
       convention: 'signed-zero',
       paths: [
-        { kind: 'circle', name: 'radius 2', center: { re: '0', im: '0' }, radius: '2', start_angle: '0.1', samples: samples / 2 },
-        { kind: 'circle', name: 'around 1', center: { re: '1', im: '0' }, radius: '0.75', start_angle: '0.1', samples: samples / 2 },
+        {
+          kind: 'circle',
+          name: 'radius 2',
+          center: { re: '0', im: '0' },
+          radius: '2',
+          start_angle: '0.1',
+          samples: samples / 2,
+        },
+        {
+          kind: 'circle',
+          name: 'around 1',
+          center: { re: '1', im: '0' },
+          radius: '0.75',
+          start_angle: '0.1',
+          samples: samples / 2,
+        },
       ],
       tolerances: { values: { ulps: 4 } },
     },
@@ -53,15 +67,24 @@ function suiteFor(fn: string, samples: number): Suite {
 }
 
 const seconds = (ms: number) => (ms / 1000).toFixed(2);
-const rate = (n: number, ms: number) => `${((n / ms) * 1000 / 1e6).toFixed(2)} M/s`;
+const rate = (n: number, ms: number) => `${(((n / ms) * 1000) / 1e6).toFixed(2)} M/s`;
 
 async function main(): Promise<void> {
   const complexJs = discoverTargets().find((t) => t.name === 'complex.js@2.4.3');
   if (!complexJs) throw new Error('complex.js@2.4.3 is not installed');
-  const ref: TargetRef = { name: complexJs.name, library: complexJs.library, version: complexJs.version, settings: complexJs.settings, open: () => complexJs.open(), worker: { discovered: complexJs.name } };
+  const ref: TargetRef = {
+    name: complexJs.name,
+    library: complexJs.library,
+    version: complexJs.version,
+    settings: complexJs.settings,
+    open: () => complexJs.open(),
+    worker: { discovered: complexJs.name },
+  };
   const dir = mkdtempSync(path.join(os.tmpdir(), 'sheetkeeper-bench-'));
   try {
-    console.log(`bench:harness on ${os.cpus().length} core(s), ${os.cpus()[0]?.model ?? 'unknown CPU'}, Node ${process.versions.node}`);
+    console.log(
+      `bench:harness on ${os.cpus().length} core(s), ${os.cpus()[0]?.model ?? 'unknown CPU'}, Node ${process.versions.node}`,
+    );
 
     // B first: it also fills the cache that A reads.
     const suites = FUNCTIONS.map((fn) => suiteFor(fn, POINTS_PER_SUITE));
@@ -73,17 +96,28 @@ async function main(): Promise<void> {
     t0 = performance.now();
     const warm = await runPlan(buildPlan(suites, [ref]), { cacheDir: dir, workers: 2 });
     const warmMs = performance.now() - t0;
-    console.log(`\nB. ${total.toLocaleString('en')}-point plan (${suites.length} suites × complex.js, ${plan.shards.length} shards), 2 worker threads, no database:`);
-    console.log(`   empty cache: ${seconds(coldMs)} s (${cold.reference.computed.toLocaleString('en')} reference values computed) — target ≤ 30 s`);
-    console.log(`   filled cache: ${seconds(warmMs)} s (${warm.reference.computed} computed, ${warm.reference.cached.toLocaleString('en')} from the cache)`);
+    console.log(
+      `\nB. ${total.toLocaleString('en')}-point plan (${suites.length} suites × complex.js, ${plan.shards.length} shards), 2 worker threads, no database:`,
+    );
+    console.log(
+      `   empty cache: ${seconds(coldMs)} s (${cold.reference.computed.toLocaleString('en')} reference values computed) — target ≤ 30 s`,
+    );
+    console.log(
+      `   filled cache: ${seconds(warmMs)} s (${warm.reference.computed} computed, ${warm.reference.cached.toLocaleString('en')} from the cache)`,
+    );
     console.log(`   outcomes: ${JSON.stringify(warm.counts)} ${JSON.stringify(warm.byDiagnosis)}`);
 
     // A: the same points, harness vs bare loop, in this process, cache filled.
-    console.log('\nA. value checks with cached references (evaluateSuite, in process) vs a bare loop of call + ulp comparison:');
+    console.log(
+      '\nA. value checks with cached references (evaluateSuite, in process) vs a bare loop of call + ulp comparison:',
+    );
     const cache = new ReferenceCache(dir);
     const target = complexJs.open();
     // eslint-disable-next-line @typescript-eslint/no-require-imports
-    const Complex = require('complex.js') as new (re: number, im: number) => Record<string, () => { re: number; im: number }>;
+    const Complex = require('complex.js') as new (
+      re: number,
+      im: number,
+    ) => Record<string, () => { re: number; im: number }>;
     let harnessMs = 0;
     let bareMs = 0;
     let points = 0;
@@ -97,7 +131,8 @@ async function main(): Promise<void> {
       const im = Float64Array.from(pts, (p) => p.z.im);
       const expected = new Float64Array(2 * n);
       const key = suiteCacheKey(suite);
-      for (let i = 0; i < n; i++) if (!cache.get(key, 0, re[i] as number, im[i] as number, expected, 2 * i)) throw new Error('cache miss');
+      for (let i = 0; i < n; i++)
+        if (!cache.get(key, 0, re[i] as number, im[i] as number, expected, 2 * i)) throw new Error('cache miss');
       await evaluateSuite(suite, target, { cache }); // warm-up (JIT, lazy require)
       let best = Infinity;
       for (let k = 0; k < 3; k++) {
@@ -113,7 +148,10 @@ async function main(): Promise<void> {
         let passed = 0;
         for (let i = 0; i < n; i++) {
           const v = new Complex(re[i] as number, im[i] as number)[fn]!();
-          const u = Math.max(ulpsApart(v.re, expected[2 * i] as number), ulpsApart(v.im, expected[2 * i + 1] as number));
+          const u = Math.max(
+            ulpsApart(v.re, expected[2 * i] as number),
+            ulpsApart(v.im, expected[2 * i + 1] as number),
+          );
           if (u <= 4) passed++;
         }
         sink += passed;
@@ -123,11 +161,15 @@ async function main(): Promise<void> {
       harnessMs += best;
       bareMs += bareBest;
       points += n;
-      rows.push(`   ${fn.padEnd(6)} harness ${rate(n, best).padStart(9)}   bare ${rate(n, bareBest).padStart(9)}   ratio ${(bareBest / best).toFixed(2)}`);
+      rows.push(
+        `   ${fn.padEnd(6)} harness ${rate(n, best).padStart(9)}   bare ${rate(n, bareBest).padStart(9)}   ratio ${(bareBest / best).toFixed(2)}`,
+      );
     }
     await target.close();
     console.log(rows.join('\n'));
-    console.log(`   all    harness ${rate(points, harnessMs).padStart(9)}   bare ${rate(points, bareMs).padStart(9)}   ratio ${(bareMs / harnessMs).toFixed(2)} — target ≥ 0.5`);
+    console.log(
+      `   all    harness ${rate(points, harnessMs).padStart(9)}   bare ${rate(points, bareMs).padStart(9)}   ratio ${(bareMs / harnessMs).toFixed(2)} — target ≥ 0.5`,
+    );
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }

@@ -45,7 +45,10 @@ function ours(mode: 'doubles' | 'strings', count: number): number {
     if (mode === 'doubles') {
       principalDouble(p.fn, p.x, p.y, 'signed-zero');
     } else {
-      const r = principalValue({ fn: p.fn, z: BigComplex.fromDoubles(p.x, p.y), convention: 'signed-zero' }, { double: false, digits: 40 });
+      const r = principalValue(
+        { fn: p.fn, z: BigComplex.fromDoubles(p.x, p.y), convention: 'signed-zero' },
+        { double: false, digits: 40 },
+      );
       r.approximation.re.toDecimal(40);
       r.approximation.im.toDecimal(40);
     }
@@ -104,7 +107,9 @@ function main(): void {
     ['correctly rounded doubles', rate(oursDoubles), rate(mp.doubles), mp.doubles / oursDoubles, TARGET_DOUBLES],
     ['40-digit strings', rate(oursStrings), rate(mp.strings), mp.strings / oursStrings, TARGET_STRINGS],
   ] as const;
-  process.stdout.write(`reference engine vs mpmath ${mp.version} (${mp.backend}), ${N} seeded points (seed ${SEED}), best of ${REPEATS}, ${FUNCTIONS.join(', ')}\n`);
+  process.stdout.write(
+    `reference engine vs mpmath ${mp.version} (${mp.backend}), ${N} seeded points (seed ${SEED}), best of ${REPEATS}, ${FUNCTIONS.join(', ')}\n`,
+  );
   process.stdout.write('mode                         ours (pts/s)   mpmath (pts/s)   ratio   target\n');
   for (const [mode, a, b, ratio, target] of rows) {
     process.stdout.write(

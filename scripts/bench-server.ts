@@ -58,7 +58,11 @@ async function main(): Promise<void> {
     await seedDemoCatalogue(dataSource);
     const smtpPort = await smtp.start(0);
     const outbox = new MailOutbox(dataSource, { host: '127.0.0.1', port: smtpPort });
-    const executor = new ShardExecutor(dataSource, { openTarget: openInstalledTarget, outbox, appUrl: 'http://127.0.0.1:8460' });
+    const executor = new ShardExecutor(dataSource, {
+      openTarget: openInstalledTarget,
+      outbox,
+      appUrl: 'http://127.0.0.1:8460',
+    });
     await queue.work((id) => executor.execute(id));
     await queue.work((id) => executor.execute(id));
     const runs = new RunService(dataSource, queue);
@@ -68,7 +72,11 @@ async function main(): Promise<void> {
     let last = '';
     if (process.env.BENCH_TABLE_ONLY) {
       // Only part 3: a run with its shards queued but never executed carries the generated rows.
-      const idle = new RunService(dataSource, { enqueue: async () => undefined, work: async () => undefined, stop: async () => undefined });
+      const idle = new RunService(dataSource, {
+        enqueue: async () => undefined,
+        work: async () => undefined,
+        stop: async () => undefined,
+      });
       last = (await idle.start(plan.id, 'manual', kwame)).id;
     } else {
       // 1. End to end, twice: the second run has a previous one to compare with (regressions, mail).
@@ -86,7 +94,9 @@ async function main(): Promise<void> {
         last = run.id;
       }
       const view = await runs.get(last);
-      console.log(`demo nightly plan "${plan.name}": ${view.shardsTotal} shards, ${view.counts.pass + view.counts.fail + view.counts.error + view.counts.skipped} points; end to end ${timings.map((t) => `${(t / 1000).toFixed(1)} s`).join(' and ')} (cold, then warm reference cache)`);
+      console.log(
+        `demo nightly plan "${plan.name}": ${view.shardsTotal} shards, ${view.counts.pass + view.counts.fail + view.counts.error + view.counts.skipped} points; end to end ${timings.map((t) => `${(t / 1000).toFixed(1)} s`).join(' and ')} (cold, then warm reference cache)`,
+      );
 
       // 2. Bytes per run.
       const [bytes] = await dataSource.query(
@@ -97,7 +107,9 @@ async function main(): Promise<void> {
         [last],
       );
       const perRun = Number(bytes.bytes);
-      console.log(`stored per run: ${(perRun / 1024).toFixed(0)} KiB in row data (${bytes.failures} failing points in full, passing points as path summaries); a year of nightly runs ≈ ${((perRun * 365) / 1024 / 1024).toFixed(0)} MiB before indexes`);
+      console.log(
+        `stored per run: ${(perRun / 1024).toFixed(0)} KiB in row data (${bytes.failures} failing points in full, passing points as path summaries); a year of nightly runs ≈ ${((perRun * 365) / 1024 / 1024).toFixed(0)} MiB before indexes`,
+      );
     }
 
     // 3. The failure table under load, over ≥ 1,000,000 failing points.
@@ -113,7 +125,9 @@ async function main(): Promise<void> {
     );
     await dataSource.query('ANALYZE failures');
     const [{ total }] = await dataSource.query(`SELECT count(*)::int AS total FROM failures`);
-    console.log(`generated ${FAILURE_ROWS} failing points in ${((performance.now() - began) / 1000).toFixed(1)} s; ${total} stored in all`);
+    console.log(
+      `generated ${FAILURE_ROWS} failing points in ${((performance.now() - began) / 1000).toFixed(1)} s; ${total} stored in all`,
+    );
 
     const { app, close } = createApp({ dataSource, databaseUrl: url, sessionSecret: 'bench', shardQueue: queue });
     const server = app.listen(0, '127.0.0.1');
@@ -137,7 +151,11 @@ async function main(): Promise<void> {
       }
     }
     // The load comes from another process, so the client's own work does not share the server's event loop.
-    const signIn = await fetch(`http://127.0.0.1:${port}/api/auth/sign-in`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'kwame@sheetkeeper.test', password: 'kwame-demo-2026' }) });
+    const signIn = await fetch(`http://127.0.0.1:${port}/api/auth/sign-in`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ email: 'kwame@sheetkeeper.test', password: 'kwame-demo-2026' }),
+    });
     const cookie = (signIn.headers.get('set-cookie') ?? '').split(';')[0]!;
     // node:http with a keep-alive agent, not fetch: on this 2-core machine fetch's own CPU (1.4 s
     // for 1,000 requests) saturated the client before the server, even against /api/me.
@@ -156,17 +174,32 @@ async function main(): Promise<void> {
       Promise.all(Array.from({ length: Number(concurrency) }, one)).then(() => console.log(JSON.stringify({ latencies, bad, wall: performance.now() - began, cpu: process.cpuUsage() })));`;
     const load = async (count: number) => {
       const cpuBefore = process.cpuUsage();
-      const { stdout } = await promisify(execFile)(process.execPath, ['-e', clientCode, `http://127.0.0.1:${port}`, cookie, String(count), String(CONCURRENCY), ...queries], { encoding: 'utf8', maxBuffer: 1 << 24 });
+      const { stdout } = await promisify(execFile)(
+        process.execPath,
+        ['-e', clientCode, `http://127.0.0.1:${port}`, cookie, String(count), String(CONCURRENCY), ...queries],
+        { encoding: 'utf8', maxBuffer: 1 << 24 },
+      );
       const serverCpu = process.cpuUsage(cpuBefore);
-      const out = JSON.parse(stdout) as { latencies: number[]; bad: number; wall: number; cpu: { user: number; system: number } };
+      const out = JSON.parse(stdout) as {
+        latencies: number[];
+        bad: number;
+        wall: number;
+        cpu: { user: number; system: number };
+      };
       if (out.bad > 0) throw new Error(`${out.bad} requests did not answer 200`);
       const latencies = out.latencies.sort((a, b) => a - b);
-      const pct = (p: number) => latencies[Math.min(latencies.length - 1, Math.floor((p / 100) * latencies.length))]!.toFixed(1);
+      const pct = (p: number) =>
+        latencies[Math.min(latencies.length - 1, Math.floor((p / 100) * latencies.length))]!.toFixed(1);
       const perRequest = (cpu: { user: number; system: number }) => ((cpu.user + cpu.system) / 1000 / count).toFixed(2);
       return `p50 ${pct(50)} ms, p95 ${pct(95)} ms, p99 ${pct(99)} ms (${((count / out.wall) * 1000).toFixed(0)} requests/s; CPU per request: server ${perRequest(serverCpu)} ms, load client ${perRequest(out.cpu)} ms)`;
     };
-    if (WARMUP > 0) console.log(`failure table, cold: the first ${WARMUP} requests from ${CONCURRENCY} concurrent clients: ${await load(WARMUP)}`);
-    console.log(`failure table: ${REQUESTS} requests from ${CONCURRENCY} concurrent clients (another process) over ${total} failing points, after ${WARMUP} warm-up requests: ${await load(REQUESTS)}`);
+    if (WARMUP > 0)
+      console.log(
+        `failure table, cold: the first ${WARMUP} requests from ${CONCURRENCY} concurrent clients: ${await load(WARMUP)}`,
+      );
+    console.log(
+      `failure table: ${REQUESTS} requests from ${CONCURRENCY} concurrent clients (another process) over ${total} failing points, after ${WARMUP} warm-up requests: ${await load(REQUESTS)}`,
+    );
     server.close();
     await close();
     outbox.close();

@@ -42,7 +42,9 @@ function strokeOutline(a: Point, v: Point, b: Point, half: number): Point[] {
 export function marksFont(): opentype.Font {
   const outline = strokeOutline([170, 400], [370, 150], [770, 690], HALF);
   const check = new opentype.Path();
-  outline.forEach(([x, y], i) => (i === 0 ? check.moveTo(Math.round(x), Math.round(y)) : check.lineTo(Math.round(x), Math.round(y))));
+  outline.forEach(([x, y], i) =>
+    i === 0 ? check.moveTo(Math.round(x), Math.round(y)) : check.lineTo(Math.round(x), Math.round(y)),
+  );
   check.close();
   return new opentype.Font({
     familyName: 'SheetkeeperMarks',

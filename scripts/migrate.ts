@@ -8,14 +8,19 @@ async function main(): Promise<void> {
   await dataSource.initialize();
   try {
     if (process.argv.includes('--revert-all')) {
-      while ((await dataSource.query(`SELECT to_regclass('migrations') AS t`))[0].t && (await dataSource.query('SELECT 1 FROM migrations LIMIT 1')).length > 0) {
+      while (
+        (await dataSource.query(`SELECT to_regclass('migrations') AS t`))[0].t &&
+        (await dataSource.query('SELECT 1 FROM migrations LIMIT 1')).length > 0
+      ) {
         await dataSource.undoLastMigration({ transaction: 'each' });
       }
       console.log('[sheetkeeper] every migration reverted');
       return;
     }
     const applied = await dataSource.runMigrations({ transaction: 'each' });
-    console.log(`[sheetkeeper] migrations: ${applied.length} applied${applied.length ? ` (${applied.map((m) => m.name).join(', ')})` : ', database up to date'}`);
+    console.log(
+      `[sheetkeeper] migrations: ${applied.length} applied${applied.length ? ` (${applied.map((m) => m.name).join(', ')})` : ', database up to date'}`,
+    );
   } finally {
     await dataSource.destroy();
   }

@@ -16,8 +16,14 @@ async function main(): Promise<void> {
     const { suites, plans } = await seedDemoCatalogue(dataSource);
     const config = loadConfig();
     const began = Date.now();
-    const runs = await seedDemoRuns(dataSource, { smtp: { host: config.host, port: config.smtpPort }, appUrl: config.appUrl, referenceCacheDir: config.referenceCacheDir });
-    console.log(`[sheetkeeper] demo data: ${users} user(s), ${suites} suite(s), ${plans} plan(s), ${runs} run(s) added${runs ? ` (runs took ${((Date.now() - began) / 1000).toFixed(1)} s)` : ''}; ${targets} target(s) installed`);
+    const runs = await seedDemoRuns(dataSource, {
+      smtp: { host: config.host, port: config.smtpPort },
+      appUrl: config.appUrl,
+      referenceCacheDir: config.referenceCacheDir,
+    });
+    console.log(
+      `[sheetkeeper] demo data: ${users} user(s), ${suites} suite(s), ${plans} plan(s), ${runs} run(s) added${runs ? ` (runs took ${((Date.now() - began) / 1000).toFixed(1)} s)` : ''}; ${targets} target(s) installed`,
+    );
   } finally {
     await dataSource.destroy();
   }

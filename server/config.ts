@@ -56,7 +56,8 @@ function sessionSecret(): string {
 
 function portFrom(variable: string, fallback: number): number {
   const port = Number(process.env[variable] ?? fallback);
-  if (!Number.isInteger(port) || port < 0 || port > 65535) throw new Error(`${variable} is not a port: ${process.env[variable]}`);
+  if (!Number.isInteger(port) || port < 0 || port > 65535)
+    throw new Error(`${variable} is not a port: ${process.env[variable]}`);
   return port;
 }
 

@@ -101,7 +101,13 @@ export function createApp(options: AppOptions): SheetkeeperApp {
       resave: false,
       saveUninitialized: false,
       rolling: false,
-      cookie: { httpOnly: true, sameSite: 'lax', secure: options.secureCookies ?? false, maxAge: 7 * 24 * 3600 * 1000, path: '/' },
+      cookie: {
+        httpOnly: true,
+        sameSite: 'lax',
+        secure: options.secureCookies ?? false,
+        maxAge: 7 * 24 * 3600 * 1000,
+        path: '/',
+      },
     }),
   );
   api.use(passport.initialize());
@@ -135,7 +141,9 @@ export function createApp(options: AppOptions): SheetkeeperApp {
     // Expo Router's single-page export: every other path is a client route.
     app.get('/{*splat}', (_req, res) => res.sendFile(path.join(webDir, 'index.html')));
   } else {
-    app.get('/{*splat}', (_req, res) => res.status(503).type('text').send('The web app is not exported yet: run `npm start`.'));
+    app.get('/{*splat}', (_req, res) =>
+      res.status(503).type('text').send('The web app is not exported yet: run `npm start`.'),
+    );
   }
 
   return {

@@ -32,8 +32,40 @@ import { PropertyResults1764790000000 } from './migrations/1764790000000-propert
 import { FailureTableRowType1764800000000 } from './migrations/1764800000000-failure-table-row-type';
 
 /** Entities and migrations are listed, not globbed, so tsx, jest and tsc builds all find them. */
-export const ENTITIES = [User, Suite, SuiteVersion, OutboxMail, ReceivedMail, Target, Plan, Schedule, ScheduleFiring, Run, Shard, Failure, PathSummary, Deviation, ApiToken, Subscription, Upload, PropertyResult];
-export const MIGRATIONS = [UsersSessionsSignInLimits1764626400000, SuitesAndVersions1764700000000, MailOutboxAndReceivedMail1764710000000, TargetsPlansSchedules1764720000000, RunsShardsFailures1764730000000, Deviations1764740000000, ApiTokens1764750000000, Subscriptions1764760000000, Uploads1764770000000, FailureTableIndexes1764780000000, PropertyResults1764790000000, FailureTableRowType1764800000000];
+export const ENTITIES = [
+  User,
+  Suite,
+  SuiteVersion,
+  OutboxMail,
+  ReceivedMail,
+  Target,
+  Plan,
+  Schedule,
+  ScheduleFiring,
+  Run,
+  Shard,
+  Failure,
+  PathSummary,
+  Deviation,
+  ApiToken,
+  Subscription,
+  Upload,
+  PropertyResult,
+];
+export const MIGRATIONS = [
+  UsersSessionsSignInLimits1764626400000,
+  SuitesAndVersions1764700000000,
+  MailOutboxAndReceivedMail1764710000000,
+  TargetsPlansSchedules1764720000000,
+  RunsShardsFailures1764730000000,
+  Deviations1764740000000,
+  ApiTokens1764750000000,
+  Subscriptions1764760000000,
+  Uploads1764770000000,
+  FailureTableIndexes1764780000000,
+  PropertyResults1764790000000,
+  FailureTableRowType1764800000000,
+];
 
 export function createDataSource(url: string): DataSource {
   return new DataSource({

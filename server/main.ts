@@ -22,12 +22,24 @@ async function main(): Promise<void> {
   const scheduler = new PlanScheduler(dataSource, async (planId) => (await runs.start(planId, 'schedule', null)).id);
   await scheduler.start();
 
-  const { app, close } = createApp({ dataSource, databaseUrl: config.databaseUrl, sessionSecret: config.sessionSecret, secureCookies: config.secureCookies, webDir: config.webDir, shardQueue: services.queue, referenceCacheDir: config.referenceCacheDir });
+  const { app, close } = createApp({
+    dataSource,
+    databaseUrl: config.databaseUrl,
+    sessionSecret: config.sessionSecret,
+    secureCookies: config.secureCookies,
+    webDir: config.webDir,
+    shardQueue: services.queue,
+    referenceCacheDir: config.referenceCacheDir,
+  });
   const server = app.listen(config.port, config.host, () => {
     const address = server.address();
     const port = typeof address === 'object' && address ? address.port : config.port;
     console.log(`\nSheetkeeper is serving http://${config.host}:${port}/`);
-    console.log(services.fakeSmtp ? `Mail goes to the local mail store on ${config.host}:${services.smtpPort} (Outbox screen, admins).` : `Mail goes to SMTP on ${config.host}:${services.smtpPort}.`);
+    console.log(
+      services.fakeSmtp
+        ? `Mail goes to the local mail store on ${config.host}:${services.smtpPort} (Outbox screen, admins).`
+        : `Mail goes to SMTP on ${config.host}:${services.smtpPort}.`,
+    );
     console.log(`Shard workers in this process: ${config.workers} (add more with \`npm run worker\`).`);
     console.log('Demo sign-ins:');
     for (const u of DEMO_USERS) console.log(`  ${u.role.padEnd(11)} ${u.email.padEnd(28)} ${u.password}`);

@@ -21,12 +21,21 @@ export interface RunningServices {
  * What runs beside the HTTP server (and in `npm run worker`): the local mail store when asked
  * for, mail delivery, and `workers` shard workers on the pg-boss queue (0 for none).
  */
-export async function startServices(dataSource: DataSource, config: ServerConfig, options: { workers: number; deliverMail: boolean }): Promise<RunningServices> {
+export async function startServices(
+  dataSource: DataSource,
+  config: ServerConfig,
+  options: { workers: number; deliverMail: boolean },
+): Promise<RunningServices> {
   const smtp = config.fakeSmtp && options.deliverMail ? new FakeSmtpServer(dataSource, config.host) : null;
   const smtpPort = smtp ? await smtp.start(config.smtpPort) : config.smtpPort;
   const outbox = new MailOutbox(dataSource, { host: config.host, port: smtpPort });
   const queue = new PgBossShardQueue(config.databaseUrl);
-  const executor = new ShardExecutor(dataSource, { openTarget: openInstalledTarget, outbox, appUrl: config.appUrl, referenceCacheDir: config.referenceCacheDir });
+  const executor = new ShardExecutor(dataSource, {
+    openTarget: openInstalledTarget,
+    outbox,
+    appUrl: config.appUrl,
+    referenceCacheDir: config.referenceCacheDir,
+  });
   for (let i = 0; i < options.workers; i += 1) await queue.work((id) => executor.execute(id));
   let delivering = false;
   const mailTimer = options.deliverMail

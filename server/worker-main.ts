@@ -12,7 +12,10 @@ async function main(): Promise<void> {
   const config = loadConfig();
   const dataSource = createDataSource(config.databaseUrl);
   await dataSource.initialize();
-  const services = await startServices(dataSource, config, { workers: Math.max(1, config.workers), deliverMail: false });
+  const services = await startServices(dataSource, config, {
+    workers: Math.max(1, config.workers),
+    deliverMail: false,
+  });
   console.log(`[sheetkeeper] worker ${process.pid} is taking shards`);
   onShutdown(async () => {
     await services.stop();

@@ -5,7 +5,14 @@ export interface ReferenceTableCheck {
   rows: number;
   agree: number;
   /** Rows whose value differs from ours by more than 1 ulp in a part, or in a zero's sign. */
-  disagreements: { line: number; z: WireComplex; theirs: WireComplex; ours: WireComplex; ulps: number; source: string }[];
+  disagreements: {
+    line: number;
+    z: WireComplex;
+    theirs: WireComplex;
+    ours: WireComplex;
+    ulps: number;
+    source: string;
+  }[];
   /** Rows that could not be read. */
   invalid: { line: number; reason: string }[];
 }

@@ -12,6 +12,9 @@ export type SuiteValidation = { ok: true; suite: Suite } | { ok: false; issues: 
 export function validateSuite(data: unknown, fallbackName: string): SuiteValidation {
   const result = suiteSchema.safeParse(data);
   if (result.success) return { ok: true, suite: result.data };
-  const id = data && typeof data === 'object' && 'id' in data && typeof data.id === 'string' && /^[a-z0-9-]{1,80}$/.test(data.id) ? data.id : fallbackName;
+  const id =
+    data && typeof data === 'object' && 'id' in data && typeof data.id === 'string' && /^[a-z0-9-]{1,80}$/.test(data.id)
+      ? data.id
+      : fallbackName;
   return { ok: false, issues: fieldIssues(result.error).map((issue) => ({ suite: id, ...issue })) };
 }

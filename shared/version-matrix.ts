@@ -6,7 +6,11 @@ type Wire = { re: string; im: string };
 type Side = {
   version: string;
   value: Wire | null;
-  outcome: { kind: 'pass' } | { kind: 'fail'; diagnosis: Diagnosis } | { kind: 'error'; message: string } | { kind: 'skipped'; reason: string };
+  outcome:
+    | { kind: 'pass' }
+    | { kind: 'fail'; diagnosis: Diagnosis }
+    | { kind: 'error'; message: string }
+    | { kind: 'skipped'; reason: string };
 };
 
 /**

@@ -38,8 +38,21 @@ export default function MoreScreen() {
 }
 
 const styles = StyleSheet.create({
-  list: { backgroundColor: theme.color.panel, borderWidth: 1, borderColor: theme.color.rule, borderRadius: theme.radius },
-  row: { minHeight: 56, flexDirection: 'row', alignItems: 'center', gap: theme.space(4), paddingHorizontal: theme.space(4), borderBottomWidth: 1, borderBottomColor: theme.color.rule },
+  list: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+  },
+  row: {
+    minHeight: 56,
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: theme.space(4),
+    paddingHorizontal: theme.space(4),
+    borderBottomWidth: 1,
+    borderBottomColor: theme.color.rule,
+  },
   glyph: { fontFamily: theme.font.regular, fontSize: 20, color: theme.color.accent, width: 24, textAlign: 'center' },
   label: { flex: 1, fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
   chevron: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.inkFaint },

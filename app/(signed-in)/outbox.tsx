@@ -7,7 +7,10 @@ export default function OutboxScreen() {
   const { data: me } = useMe();
   if (!me) return null;
   return (
-    <ScreenBody title="Outbox" lead="Every message the local mail server received from Sheetkeeper. Nothing here left this machine.">
+    <ScreenBody
+      title="Outbox"
+      lead="Every message the local mail server received from Sheetkeeper. Nothing here left this machine."
+    >
       {me.role === 'admin' ? <MailList /> : <QueryState state="error" message="Only admins can see the outbox." />}
     </ScreenBody>
   );

@@ -16,12 +16,18 @@ export default function SettingsScreen() {
     <ScreenBody title="Settings" lead={`Your mail and your API tokens, ${me.displayName}.`}>
       <View style={[styles.columns, wide && styles.columnsWide]}>
         <View style={[styles.column, wide && styles.half]}>
-          <TitledPanel title="Regression mail" lead="Mail me when a point that passed in a plan's previous run fails now on one of these libraries (accepted deviations excepted). Plans can also name recipients.">
+          <TitledPanel
+            title="Regression mail"
+            lead="Mail me when a point that passed in a plan's previous run fails now on one of these libraries (accepted deviations excepted). Plans can also name recipients."
+          >
             <SubscriptionList />
           </TitledPanel>
         </View>
         <View style={[styles.column, wide && styles.half]}>
-          <TitledPanel title="API tokens" lead="For CI jobs and scripts: a token signs a request in as you, for that request only.">
+          <TitledPanel
+            title="API tokens"
+            lead="For CI jobs and scripts: a token signs a request in as you, for that request only."
+          >
             <NewTokenForm />
             <TokenList />
           </TitledPanel>

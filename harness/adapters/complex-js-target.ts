@@ -48,9 +48,10 @@ export function complexJsTarget(alias: string, version: string): Target {
       });
     },
     evaluateColumns: async (op, args, n, skip) => {
-      if (!has(op)) return evaluateColumns(op, args, n, skip, () => {
-        throw new Error(`complex.js ${version} has no ${op}`);
-      });
+      if (!has(op))
+        return evaluateColumns(op, args, n, skip, () => {
+          throw new Error(`complex.js ${version} has no ${op}`);
+        });
       if (args.length === 1) {
         // One argument: no array per call.
         return evaluateColumns(op, args, n, skip, (pairs) => {

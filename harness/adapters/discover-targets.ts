@@ -21,7 +21,9 @@ const PROJECT_ROOT = path.resolve(__dirname, '..', '..');
  * library, then version (numerically), then name.
  */
 export function discoverTargets(root: string = PROJECT_ROOT, python: string = DEBIAN_PYTHON): TargetDescriptor[] {
-  const manifest = JSON.parse(readFileSync(path.join(root, 'package.json'), 'utf8')) as { dependencies?: Record<string, string> };
+  const manifest = JSON.parse(readFileSync(path.join(root, 'package.json'), 'utf8')) as {
+    dependencies?: Record<string, string>;
+  };
   const targets: TargetDescriptor[] = [];
   for (const alias of Object.keys(manifest.dependencies ?? {})) {
     const installed = installedVersion(root, alias);
@@ -60,13 +62,21 @@ export function discoverTargets(root: string = PROJECT_ROOT, python: string = DE
   const numeric = (v: string): number[] => v.split(/[.-]/).map((x) => Number(x) || 0);
   const byVersion = (a: string, b: string): number => {
     const [x, y] = [numeric(a), numeric(b)];
-    for (let i = 0; i < Math.max(x.length, y.length); i++) if ((x[i] ?? 0) !== (y[i] ?? 0)) return (x[i] ?? 0) - (y[i] ?? 0);
+    for (let i = 0; i < Math.max(x.length, y.length); i++)
+      if ((x[i] ?? 0) !== (y[i] ?? 0)) return (x[i] ?? 0) - (y[i] ?? 0);
     return 0;
   };
-  return targets.sort((a, b) => a.library.localeCompare(b.library) || byVersion(a.version, b.version) || a.name.localeCompare(b.name));
+  return targets.sort(
+    (a, b) => a.library.localeCompare(b.library) || byVersion(a.version, b.version) || a.name.localeCompare(b.name),
+  );
 }
 
 /** The naming fields of a target; creating a target object loads nothing. */
-function describe(t: { name: string; library: string; version: string; settings: Record<string, string | number | boolean> }) {
+function describe(t: {
+  name: string;
+  library: string;
+  version: string;
+  settings: Record<string, string | number | boolean>;
+}) {
   return { name: t.name, library: t.library, version: t.version, settings: t.settings };
 }

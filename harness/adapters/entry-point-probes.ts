@@ -28,10 +28,19 @@ export async function probeEntryPoints(
       // Required only here, when probing is asked for (lazy like the adapters).
       // eslint-disable-next-line @typescript-eslint/no-require-imports -- a lazy load of a package chosen at run time
       const mod = require(String(d.settings.package)) as { default?: unknown };
-      findings.push(...probeWays(d.name, complexJsEntryWays((mod.default ?? mod) as Parameters<typeof complexJsEntryWays>[0]), inputs));
+      findings.push(
+        ...probeWays(
+          d.name,
+          complexJsEntryWays((mod.default ?? mod) as Parameters<typeof complexJsEntryWays>[0]),
+          inputs,
+        ),
+      );
     } else if (d.library === 'mathjs' && d.settings.entry === 'complex' && d.settings.predictable === false) {
       // eslint-disable-next-line @typescript-eslint/no-require-imports -- a lazy load of a package chosen at run time
-      const mod = require(String(d.settings.package)) as { create(all: unknown, config: unknown): unknown; all: unknown };
+      const mod = require(String(d.settings.package)) as {
+        create(all: unknown, config: unknown): unknown;
+        all: unknown;
+      };
       const math = mod.create(mod.all, {}) as Parameters<typeof mathjsEntryWays>[0];
       findings.push(...probeWays(`mathjs@${d.version}`, mathjsEntryWays(math), inputs));
     } else if (d.settings.protocol === 'stdio') {
@@ -48,15 +57,36 @@ async function probeStdio(target: StdioTarget, inputs: readonly ComplexPair[]): 
     const results = 'reply' in answer ? answer.reply.results : undefined;
     if (!Array.isArray(results) || results.length !== inputs.length) {
       const why = 'error' in answer ? answer.error : String(answer.reply.error ?? 'no results');
-      return wire.map((input) => ({ target: target.name, way: 'entry-points', input, arrived: null, intact: false, error: why }));
+      return wire.map((input) => ({
+        target: target.name,
+        way: 'entry-points',
+        input,
+        arrived: null,
+        intact: false,
+        error: why,
+      }));
     }
     return results.flatMap((byWay: unknown, k) =>
       Object.entries(byWay as Record<string, unknown>).map(([way, got]): EntryPointFinding => {
         const input = wire[k] as [string, string];
         const z = inputs[k] as ComplexPair;
-        if (!Array.isArray(got)) return { target: target.name, way, input, arrived: null, intact: false, error: String((got as { error?: unknown }).error) };
+        if (!Array.isArray(got))
+          return {
+            target: target.name,
+            way,
+            input,
+            arrived: null,
+            intact: false,
+            error: String((got as { error?: unknown }).error),
+          };
         const [re, im] = [parseDouble(String(got[0])), parseDouble(String(got[1]))];
-        return { target: target.name, way, input, arrived: [formatDouble(re), formatDouble(im)], intact: Object.is(re, z[0]) && Object.is(im, z[1]) };
+        return {
+          target: target.name,
+          way,
+          input,
+          arrived: [formatDouble(re), formatDouble(im)],
+          intact: Object.is(re, z[0]) && Object.is(im, z[1]),
+        };
       }),
     );
   } finally {

@@ -7,7 +7,13 @@ import { OP_ARITY } from './op-arity';
  * parts it needs and returns the library's value; a wrong argument count, a throw or a result
  * that is not a number or complex becomes that point's error, exactly as in evaluateEach.
  */
-export function evaluateColumns(op: string, args: ColumnArg[], n: number, skip: ReadonlyMap<number, string>, call: (args: ComplexPair[]) => unknown): ColumnResult {
+export function evaluateColumns(
+  op: string,
+  args: ColumnArg[],
+  n: number,
+  skip: ReadonlyMap<number, string>,
+  call: (args: ComplexPair[]) => unknown,
+): ColumnResult {
   const out: ColumnResult = { re: new Float64Array(n), im: new Float64Array(n), errors: new Map(skip) };
   const arity = OP_ARITY[op];
   const fail = (message: string) => {
@@ -36,7 +42,12 @@ export function evaluateColumns(op: string, args: ColumnArg[], n: number, skip: 
       if (typeof v === 'number') {
         out.re[i] = v;
         out.im[i] = 0;
-      } else if (typeof v === 'object' && v !== null && typeof (v as { re?: unknown }).re === 'number' && typeof (v as { im?: unknown }).im === 'number') {
+      } else if (
+        typeof v === 'object' &&
+        v !== null &&
+        typeof (v as { re?: unknown }).re === 'number' &&
+        typeof (v as { im?: unknown }).im === 'number'
+      ) {
         out.re[i] = (v as { re: number }).re;
         out.im[i] = (v as { im: number }).im;
       } else {

@@ -23,7 +23,8 @@ export function mathjsEntryWays(math: MathInstance): Record<string, (z: ComplexP
     'math.complex({ re, im })': ([re, im]) => math.complex({ re, im }),
     'math.complex("re±im i")': (z) => math.complex(complexString(z)),
     'math.evaluate("re±im i")': (z) => math.evaluate(complexString(z)),
-    'math.evaluate("complex(re, im)")': ([re, im]) => math.evaluate(`complex(${formatDouble(re)}, ${formatDouble(im)})`),
+    'math.evaluate("complex(re, im)")': ([re, im]) =>
+      math.evaluate(`complex(${formatDouble(re)}, ${formatDouble(im)})`),
     'math.evaluate("a + b i", { a: re, b: im })': ([re, im]) => math.evaluate('a + b i', { a: re, b: im }),
     'math.add(re, math.multiply(im, math.i))': ([re, im]) => math.add(re, math.multiply(im, math.i)),
   };

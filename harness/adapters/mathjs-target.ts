@@ -30,7 +30,13 @@ const FUNCTION: Readonly<Record<string, string>> = {
  * nthroot's degree always goes in as a number. Loaded with `require` on first use:
  * `require('mathjs')` costs about a second (STACK.md).
  */
-export function mathjsTarget(alias: string, version: string, entry: 'complex' | 'number', predictable: boolean, complexJsVersion: string): Target {
+export function mathjsTarget(
+  alias: string,
+  version: string,
+  entry: 'complex' | 'number',
+  predictable: boolean,
+  complexJsVersion: string,
+): Target {
   let math: MathInstance | undefined;
   const load = (): MathInstance => {
     if (math) return math;
@@ -42,7 +48,8 @@ export function mathjsTarget(alias: string, version: string, entry: 'complex' | 
   };
   const functionOf = (op: string): string => FUNCTION[op] ?? op;
   const has = (op: string): boolean => op in OP_ARITY && typeof load()[functionOf(op)] === 'function';
-  const argument = (z: ComplexPair): unknown => (entry === 'number' && z[1] === 0 ? z[0] : withExactParts(load().complex(z[0], z[1]), z));
+  const argument = (z: ComplexPair): unknown =>
+    entry === 'number' && z[1] === 0 ? z[0] : withExactParts(load().complex(z[0], z[1]), z);
   return {
     name: `mathjs@${version}/${entry}${predictable ? '/predictable' : ''}`,
     library: 'mathjs',
@@ -59,9 +66,10 @@ export function mathjsTarget(alias: string, version: string, entry: 'complex' | 
       });
     },
     evaluateColumns: async (op, args, n, skip) => {
-      if (!has(op)) return evaluateColumns(op, args, n, skip, () => {
-        throw new Error(`mathjs ${version} has no ${functionOf(op)}`);
-      });
+      if (!has(op))
+        return evaluateColumns(op, args, n, skip, () => {
+          throw new Error(`mathjs ${version} has no ${functionOf(op)}`);
+        });
       const fn = load()[functionOf(op)] as MathFunction;
       return evaluateColumns(op, args, n, skip, (pairs) => {
         const [z, m] = pairs as [ComplexPair, ComplexPair | undefined];

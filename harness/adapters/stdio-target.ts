@@ -165,7 +165,11 @@ export function stdioTarget(options: StdioTargetOptions): StdioTarget {
       if (typeof known === 'string') return calls.map(() => ({ error: known }));
       const arity = OP_ARITY[op];
       if (arity === undefined || !known.has(op)) return calls.map(() => ({ error: `${options.library} has no ${op}` }));
-      const results: CallResult[] = calls.map((args) => (args.length === arity ? { error: 'not sent' } : { error: `${op} takes ${arity} argument(s), got ${args.length}` }));
+      const results: CallResult[] = calls.map((args) =>
+        args.length === arity
+          ? { error: 'not sent' }
+          : { error: `${op} takes ${arity} argument(s), got ${args.length}` },
+      );
       const sent = calls.flatMap((args, i) => (args.length === arity ? [i] : []));
       if (sent.length === 0) return results;
       const wire = sent.map((i) => {
@@ -173,7 +177,8 @@ export function stdioTarget(options: StdioTargetOptions): StdioTarget {
         return arity === 1 ? wirePair(args[0] as ComplexPair) : args.map(wirePair);
       });
       const answer = await request(op, wire);
-      const batchError = 'error' in answer ? answer.error : 'error' in answer.reply ? `program: ${String(answer.reply.error)}` : null;
+      const batchError =
+        'error' in answer ? answer.error : 'error' in answer.reply ? `program: ${String(answer.reply.error)}` : null;
       const items = 'reply' in answer ? answer.reply.results : undefined;
       if (batchError === null && (!Array.isArray(items) || items.length !== sent.length)) {
         const count = Array.isArray(items) ? items.length : 'no';
@@ -181,7 +186,9 @@ export function stdioTarget(options: StdioTargetOptions): StdioTarget {
         if (child) kill(child);
         return results;
       }
-      sent.forEach((i, k) => (results[i] = batchError !== null ? { error: batchError } : readPair((items as unknown[])[k])));
+      sent.forEach(
+        (i, k) => (results[i] = batchError !== null ? { error: batchError } : readPair((items as unknown[])[k])),
+      );
       return results;
     },
     close: async () => {

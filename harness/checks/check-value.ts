@@ -11,13 +11,26 @@ import type { ValueCheck } from './value-check';
  * continuity the sign of a zero result is not part of the contract. Finite parts are then held
  * to the tolerance: ulps per part, or the normwise relative error of the whole value.
  */
-export function checkValue(actual: ComplexDouble, expected: ComplexDouble, tolerance: Tolerance, zeroSigns: boolean): ValueCheck {
+export function checkValue(
+  actual: ComplexDouble,
+  expected: ComplexDouble,
+  tolerance: Tolerance,
+  zeroSigns: boolean,
+): ValueCheck {
   const re = comparePart(actual[0], expected[0]);
   const im = comparePart(actual[1], expected[1]);
-  const zeroSignDiffers = zeroSigns ? (['re', 'im'] as const).filter((p) => (p === 're' ? re : im).zeroSignDiffers) : [];
+  const zeroSignDiffers = zeroSigns
+    ? (['re', 'im'] as const).filter((p) => (p === 're' ? re : im).zeroSignDiffers)
+    : [];
   const finitenessDiffers = re.finitenessDiffers || im.finitenessDiffers;
   const ulps = Math.max(re.ulps, im.ulps);
   const relErr = relativeError(actual, expected);
   const within = 'ulps' in tolerance ? ulps <= tolerance.ulps : relErr <= tolerance.relative;
-  return { pass: !finitenessDiffers && zeroSignDiffers.length === 0 && within, ulps, relativeError: relErr, zeroSignDiffers: [...zeroSignDiffers], finitenessDiffers };
+  return {
+    pass: !finitenessDiffers && zeroSignDiffers.length === 0 && within,
+    ulps,
+    relativeError: relErr,
+    zeroSignDiffers: [...zeroSignDiffers],
+    finitenessDiffers,
+  };
 }

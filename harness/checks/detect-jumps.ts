@@ -77,7 +77,12 @@ export function detectJumpsInColumns(re: Float64Array, im: Float64Array): Uint8A
       }
       around[q + 1] = x;
     }
-    const median = k === 0 ? 0 : k % 2 === 1 ? (around[(k - 1) / 2] as number) : ((around[k / 2 - 1] as number) + (around[k / 2] as number)) / 2;
+    const median =
+      k === 0
+        ? 0
+        : k % 2 === 1
+          ? (around[(k - 1) / 2] as number)
+          : ((around[k / 2 - 1] as number) + (around[k / 2] as number)) / 2;
     if (s > NEIGHBOUR_FACTOR * median) out[i] = 1;
   }
   return out;

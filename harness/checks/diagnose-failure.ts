@@ -16,7 +16,9 @@ const ROUND_OFF = 1e-12;
 const RECOGNISABLE = 0.1;
 
 const signsOfZeros = (v: ComplexDouble) => v.map((x) => (x === 0 ? Object.is(x, -0) : null));
-const sameSigned = (a: ComplexDouble, b: ComplexDouble) => relativeError(a, b) <= SAME && signsOfZeros(a).every((s, i) => s === null || signsOfZeros(b)[i] === null || s === signsOfZeros(b)[i]);
+const sameSigned = (a: ComplexDouble, b: ComplexDouble) =>
+  relativeError(a, b) <= SAME &&
+  signsOfZeros(a).every((s, i) => s === null || signsOfZeros(b)[i] === null || s === signsOfZeros(b)[i]);
 
 /**
  * Chooses the diagnosis of a failing point (DESIGN.md §2), in this order: a non-finite part;
@@ -36,10 +38,20 @@ export function diagnoseFailure(ctx: FailureContext): Diagnosis {
     return { kind: 'zero-sign', part: check.zeroSignDiffers[0]!, of: 'output' };
   }
   const candidates: { diagnosis: Diagnosis; distance: number }[] = [
-    { diagnosis: { kind: 'inaccurate', ulps: check.ulps, relativeError: check.relativeError, ...worstPart(actual, expected) }, distance: relativeError(actual, expected) },
+    {
+      diagnosis: {
+        kind: 'inaccurate',
+        ulps: check.ulps,
+        relativeError: check.relativeError,
+        ...worstPart(actual, expected),
+      },
+      distance: relativeError(actual, expected),
+    },
   ];
-  if (ctx.otherSide) candidates.push({ diagnosis: { kind: 'cut-side' }, distance: relativeError(actual, ctx.otherSide) });
-  for (const sheet of ctx.otherSheets ?? []) candidates.push({ diagnosis: { kind: 'other-sheet', k: sheet.k }, distance: relativeError(actual, sheet.value) });
+  if (ctx.otherSide)
+    candidates.push({ diagnosis: { kind: 'cut-side' }, distance: relativeError(actual, ctx.otherSide) });
+  for (const sheet of ctx.otherSheets ?? [])
+    candidates.push({ diagnosis: { kind: 'other-sheet', k: sheet.k }, distance: relativeError(actual, sheet.value) });
   // Near a cut several alternatives can be within 1e-6 of each other (at 1e-9 from the cut of
   // acot, the other side's limit and v + π differ by 1e-9): the nearest is the better account.
   // Alternatives that both match to round-off (on the cut of ∛, the other side's limit is the
@@ -47,8 +59,13 @@ export function diagnoseFailure(ctx: FailureContext): Diagnosis {
   const exact = candidates
     .slice(1)
     .filter((c) => c.distance <= SAME)
-    .reduce<(typeof candidates)[number] | null>((best, c) => (!best || Math.max(c.distance, ROUND_OFF) < Math.max(best.distance, ROUND_OFF) ? c : best), null);
+    .reduce<(typeof candidates)[number] | null>(
+      (best, c) => (!best || Math.max(c.distance, ROUND_OFF) < Math.max(best.distance, ROUND_OFF) ? c : best),
+      null,
+    );
   if (exact) return exact.diagnosis;
   const nearest = candidates.reduce((best, c) => (c.distance < best.distance ? c : best));
-  return nearest.distance <= RECOGNISABLE ? nearest.diagnosis : { kind: 'unexplained', relativeError: check.relativeError };
+  return nearest.distance <= RECOGNISABLE
+    ? nearest.diagnosis
+    : { kind: 'unexplained', relativeError: check.relativeError };
 }

@@ -6,7 +6,8 @@ import { detectJumps } from './detect-jumps';
 const OVERRIDABLE = new Set<Diagnosis['kind']>(['other-sheet', 'unexplained', 'inaccurate']);
 /** An `inaccurate` point closer than this (relative) to the expected value is just inaccurate, even beside a wrong jump. */
 const MERELY_INACCURATE = 1e-6;
-const overridable = (d: Diagnosis): boolean => OVERRIDABLE.has(d.kind) && !(d.kind === 'inaccurate' && d.relativeError <= MERELY_INACCURATE);
+const overridable = (d: Diagnosis): boolean =>
+  OVERRIDABLE.has(d.kind) && !(d.kind === 'inaccurate' && d.relativeError <= MERELY_INACCURATE);
 
 /**
  * Compares the jumps of the library's values along a continuous path with the jumps of the
@@ -43,7 +44,7 @@ export function findMisplacedCuts(
     };
     for (let i = from; i <= to; i += 1) if (result[i] && overridable(result[i]!)) result[i] = misplaced;
   };
-  for (let start = 0; start < result.length; ) {
+  for (let start = 0; start < result.length;) {
     if (!pointDiagnoses[start]) {
       start += 1;
       continue;
@@ -52,7 +53,8 @@ export function findMisplacedCuts(
     while (end + 1 < result.length && pointDiagnoses[end + 1]) end += 1;
     // Steps touching the run, from the one entering it to the one leaving it, where the two disagree.
     const mismatched: number[] = [];
-    for (let i = Math.max(0, start - 1); i <= Math.min(end, expectedJumps.length - 1); i += 1) if (Boolean(expectedJumps[i]) !== Boolean(actualJumps[i])) mismatched.push(i);
+    for (let i = Math.max(0, start - 1); i <= Math.min(end, expectedJumps.length - 1); i += 1)
+      if (Boolean(expectedJumps[i]) !== Boolean(actualJumps[i])) mismatched.push(i);
     for (let k = 0; k + 1 < mismatched.length; k += 2) {
       const a = mismatched[k]!;
       const b = mismatched[k + 1]!;

@@ -19,22 +19,26 @@ export interface FunctionRule {
 export const FUNCTION_RULES: Readonly<Record<string, FunctionRule>> = {
   sqrt: {
     definition: 'DLMF 4.2.2 with 4.2.7: √z = exp(½ Log z), Re √z ≥ 0',
-    annexG: 'ISO/IEC 9899:2011 G.6.4.2 (csqrt): on (−∞, 0] the sign of the zero imaginary part picks the side, csqrt(conj z) = conj csqrt(z)',
+    annexG:
+      'ISO/IEC 9899:2011 G.6.4.2 (csqrt): on (−∞, 0] the sign of the zero imaginary part picks the side, csqrt(conj z) = conj csqrt(z)',
     counterClockwise: 'Kahan 1987: the cut (−∞, 0] belongs to the upper side, √(−4) = 2i',
   },
   cbrt: {
     definition: 'DLMF 4.2.26 with w = 1/3: ∛z = exp(⅓ Log z), |arg| ≤ π/3',
-    annexG: 'ISO/IEC 9899:2011 G.6.4.1 (cpow, through clog G.6.3.2): on (−∞, 0] the sign of the zero imaginary part picks the side',
+    annexG:
+      'ISO/IEC 9899:2011 G.6.4.1 (cpow, through clog G.6.3.2): on (−∞, 0] the sign of the zero imaginary part picks the side',
     counterClockwise: 'Kahan 1987: the cut (−∞, 0] belongs to the upper side',
   },
   nthroot: {
     definition: 'DLMF 4.2.26 with w = 1/n: z^(1/n) = exp(Log z / n)',
-    annexG: 'ISO/IEC 9899:2011 G.6.4.1 (cpow, through clog G.6.3.2): on (−∞, 0] the sign of the zero imaginary part picks the side',
+    annexG:
+      'ISO/IEC 9899:2011 G.6.4.1 (cpow, through clog G.6.3.2): on (−∞, 0] the sign of the zero imaginary part picks the side',
     counterClockwise: 'Kahan 1987: the cut (−∞, 0] belongs to the upper side',
   },
   pow: {
     definition: 'DLMF 4.2.26: z^w = exp(w Log z)',
-    annexG: 'ISO/IEC 9899:2011 G.6.4.1 (cpow ≈ cexp(w·clog z)): on (−∞, 0] the sign of the zero imaginary part picks the side',
+    annexG:
+      'ISO/IEC 9899:2011 G.6.4.1 (cpow ≈ cexp(w·clog z)): on (−∞, 0] the sign of the zero imaginary part picks the side',
     counterClockwise: 'Kahan 1987: the cut (−∞, 0] belongs to the upper side',
   },
   exp: {
@@ -49,7 +53,8 @@ export const FUNCTION_RULES: Readonly<Record<string, FunctionRule>> = {
   },
   asin: {
     definition: 'DLMF 4.23.19: asin z = −i ln(iz + √(1 − z²)), |Re| ≤ π/2',
-    annexG: 'ISO/IEC 9899:2011 G.6 (casin z = −i casinh(iz)) with G.6.2.2: on (−∞, −1] and [1, ∞) the sign of Im z picks the side',
+    annexG:
+      'ISO/IEC 9899:2011 G.6 (casin z = −i casinh(iz)) with G.6.2.2: on (−∞, −1] and [1, ∞) the sign of Im z picks the side',
     counterClockwise: 'Kahan 1987: (−∞, −1] belongs to the upper side, [1, ∞) to the lower',
   },
   acos: {
@@ -59,7 +64,8 @@ export const FUNCTION_RULES: Readonly<Record<string, FunctionRule>> = {
   },
   atan: {
     definition: 'DLMF 4.23.26: atan z = (i/2) ln((i + z)/(i − z)), |Re| ≤ π/2',
-    annexG: 'ISO/IEC 9899:2011 G.6 (catan z = −i catanh(iz)) with G.6.2.3: on [i, i∞) and (−i∞, −i] the sign of Re z picks the side',
+    annexG:
+      'ISO/IEC 9899:2011 G.6 (catan z = −i catanh(iz)) with G.6.2.3: on [i, i∞) and (−i∞, −i] the sign of Re z picks the side',
     counterClockwise: 'Kahan 1987: [i, i∞) belongs to the right side, (−i∞, −i] to the left',
   },
   asinh: {
@@ -79,32 +85,38 @@ export const FUNCTION_RULES: Readonly<Record<string, FunctionRule>> = {
   },
   acot: {
     definition: 'DLMF 4.23.9: acot z = atan(1/z)',
-    annexG: 'through catan at 1/z (ISO/IEC 9899:2011 G.6): on [−i, 0) and (0, i] the sign of Re z picks the side, as for atan',
+    annexG:
+      'through catan at 1/z (ISO/IEC 9899:2011 G.6): on [−i, 0) and (0, i] the sign of Re z picks the side, as for atan',
     counterClockwise: 'inherited from atan at 1/z (Kahan 1987): (0, i] left, [−i, 0) right',
   },
   asec: {
     definition: 'DLMF 4.23.8: asec z = acos(1/z)',
-    annexG: 'through cacos at 1/z (ISO/IEC 9899:2011 G.6.1.1): on [−1, 0) and (0, 1] the sign of Im z picks the opposite side of acos’s cut',
+    annexG:
+      'through cacos at 1/z (ISO/IEC 9899:2011 G.6.1.1): on [−1, 0) and (0, 1] the sign of Im z picks the opposite side of acos’s cut',
     counterClockwise: 'inherited from acos at 1/z (Kahan 1987): [−1, 0) lower, (0, 1] upper',
   },
   acsc: {
     definition: 'DLMF 4.23.7: acsc z = asin(1/z)',
-    annexG: 'through casin at 1/z (ISO/IEC 9899:2011 G.6): on [−1, 0) and (0, 1] the sign of Im z picks the opposite side of asin’s cut',
+    annexG:
+      'through casin at 1/z (ISO/IEC 9899:2011 G.6): on [−1, 0) and (0, 1] the sign of Im z picks the opposite side of asin’s cut',
     counterClockwise: 'inherited from asin at 1/z (Kahan 1987): [−1, 0) lower, (0, 1] upper',
   },
   acoth: {
     definition: 'DLMF 4.37.9: acoth z = atanh(1/z)',
-    annexG: 'through catanh at 1/z (ISO/IEC 9899:2011 G.6.2.3): on [−1, 0) and (0, 1] the sign of Im z picks the opposite side of atanh’s cut',
+    annexG:
+      'through catanh at 1/z (ISO/IEC 9899:2011 G.6.2.3): on [−1, 0) and (0, 1] the sign of Im z picks the opposite side of atanh’s cut',
     counterClockwise: 'inherited from atanh at 1/z (Kahan 1987): [−1, 0) lower, (0, 1] upper',
   },
   asech: {
     definition: 'DLMF 4.37.8: asech z = acosh(1/z)',
-    annexG: 'through cacosh at 1/z (ISO/IEC 9899:2011 G.6.2.1): on (−∞, 0) and [1, ∞) the sign of Im z picks the opposite side of acosh’s cut',
+    annexG:
+      'through cacosh at 1/z (ISO/IEC 9899:2011 G.6.2.1): on (−∞, 0) and [1, ∞) the sign of Im z picks the opposite side of acosh’s cut',
     counterClockwise: 'inherited from acosh at 1/z (Kahan 1987): both pieces lower',
   },
   acsch: {
     definition: 'DLMF 4.37.7: acsch z = asinh(1/z)',
-    annexG: 'through casinh at 1/z (ISO/IEC 9899:2011 G.6.2.2): on [−i, 0) and (0, i] the sign of Re z picks the side, as for asinh',
+    annexG:
+      'through casinh at 1/z (ISO/IEC 9899:2011 G.6.2.2): on [−i, 0) and (0, i] the sign of Re z picks the side, as for asinh',
     counterClockwise: 'inherited from asinh at 1/z (Kahan 1987): [−i, 0) right, (0, i] left',
   },
 };

@@ -6,7 +6,10 @@ const div = (a: ComplexDouble, b: ComplexDouble): ComplexDouble => {
   const m = b[0] * b[0] + b[1] * b[1];
   return [(a[0] * b[0] + a[1] * b[1]) / m, (a[1] * b[0] - a[0] * b[1]) / m];
 };
-const mul = (a: ComplexDouble, b: ComplexDouble): ComplexDouble => [a[0] * b[0] - a[1] * b[1], a[0] * b[1] + a[1] * b[0]];
+const mul = (a: ComplexDouble, b: ComplexDouble): ComplexDouble => [
+  a[0] * b[0] - a[1] * b[1],
+  a[0] * b[1] + a[1] * b[0],
+];
 /** A jump factor must be this close (relative) to some e^{2πiνk} to be read as that sheet change. */
 const SNAP = 0.1;
 const MAX_K = 64;
@@ -20,7 +23,11 @@ const MAX_K = 64;
  * library's branch structure implies, to compare with the continuation engine's. A jump that
  * is no e^{2πiνk}, or a missing value, makes the factor unreadable, and the note says where.
  */
-export function libraryMonodromy(t: readonly number[], values: readonly (ComplexDouble | null)[], nu: readonly [number, number]): { factor: ComplexDouble; jumps: number } | { note: string } {
+export function libraryMonodromy(
+  t: readonly number[],
+  values: readonly (ComplexDouble | null)[],
+  nu: readonly [number, number],
+): { factor: ComplexDouble; jumps: number } | { note: string } {
   const n = values.length;
   const missing = values.findIndex((v) => !v || !v.every(Number.isFinite) || (v[0] === 0 && v[1] === 0));
   if (missing >= 0) return { note: `no usable library value at t = ${t[missing]}` };
@@ -42,7 +49,9 @@ export function libraryMonodromy(t: readonly number[], values: readonly (Complex
       if (distance < best.distance) best = { k, distance, factor: f };
     }
     if (best.distance > SNAP) {
-      return { note: `the library jumps at t ≈ ${(t[i]! + t[i + 1]!) / 2} by a factor ${jump[0].toPrecision(6)} + ${jump[1].toPrecision(6)}i, which is no e^{2πiνk}` };
+      return {
+        note: `the library jumps at t ≈ ${(t[i]! + t[i + 1]!) / 2} by a factor ${jump[0].toPrecision(6)} + ${jump[1].toPrecision(6)}i, which is no e^{2πiνk}`,
+      };
     }
     total = mul(total, best.factor);
     count++;

@@ -1,7 +1,10 @@
 import type { ComplexDouble } from './complex-double';
 import type { SheetFamily } from './sheet-family';
 
-const mul = (a: ComplexDouble, b: ComplexDouble): ComplexDouble => [a[0] * b[0] - a[1] * b[1], a[0] * b[1] + a[1] * b[0]];
+const mul = (a: ComplexDouble, b: ComplexDouble): ComplexDouble => [
+  a[0] * b[0] - a[1] * b[1],
+  a[0] * b[1] + a[1] * b[0],
+];
 
 /** e^{2πiνk} in doubles (enough for recognising a sheet, not for checking a value). */
 export function sheetFactor(nu: readonly [number, number], k: number): ComplexDouble {

@@ -10,7 +10,8 @@ import { ulpsApart } from './ulps-apart';
  * lost to cancellation, and on the wrong side of zero, not a wild value.
  */
 export function worstPart(actual: ComplexDouble, expected: ComplexDouble): { part: 're' | 'im'; signDiffers: boolean } {
-  const apart = (i: 0 | 1) => (Number.isFinite(actual[i]) && Number.isFinite(expected[i]) ? ulpsApart(actual[i], expected[i]) : Infinity);
+  const apart = (i: 0 | 1) =>
+    Number.isFinite(actual[i]) && Number.isFinite(expected[i]) ? ulpsApart(actual[i], expected[i]) : Infinity;
   const i = apart(1) > apart(0) ? 1 : 0;
   const a = actual[i];
   const e = expected[i];

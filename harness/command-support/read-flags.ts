@@ -7,7 +7,11 @@ import { BadInput } from './bad-input';
  * validates them with the command's one zod schema; anything wrong becomes {@link BadInput}
  * naming the flag and the rule.
  */
-export function readFlags<T extends z.ZodType>(argv: readonly string[], names: readonly string[], schema: T): z.infer<T> {
+export function readFlags<T extends z.ZodType>(
+  argv: readonly string[],
+  names: readonly string[],
+  schema: T,
+): z.infer<T> {
   let values: Record<string, unknown>;
   // parseArgs takes "--box -4,-4,4,4" for a missing value followed by a short flag; a value
   // that starts with "-" (a negative number) is glued to its flag first.
@@ -15,7 +19,14 @@ export function readFlags<T extends z.ZodType>(argv: readonly string[], names: r
   for (let i = 0; i < argv.length; i += 1) {
     const token = argv[i]!;
     const next = argv[i + 1];
-    if (token.startsWith('--') && !token.includes('=') && names.includes(token.slice(2)) && next !== undefined && next.startsWith('-') && !next.startsWith('--')) {
+    if (
+      token.startsWith('--') &&
+      !token.includes('=') &&
+      names.includes(token.slice(2)) &&
+      next !== undefined &&
+      next.startsWith('-') &&
+      !next.startsWith('--')
+    ) {
       args.push(`${token}=${next}`);
       i += 1;
     } else args.push(token);

@@ -8,9 +8,15 @@ export function cutMapTable(map: CutMap): string {
     map.statement,
     '',
     'expected cuts:',
-    ...map.expected.map((e) => `  ${e.label.padEnd(14)} ${w(e.from)} .. ${w(e.to)}  ${e.coverage === null ? 'crosses no grid line' : `found on ${Math.round(e.coverage * 100)}% of the grid lines crossing it`}${e.seen ? '' : '  NOT SEEN'}`),
+    ...map.expected.map(
+      (e) =>
+        `  ${e.label.padEnd(14)} ${w(e.from)} .. ${w(e.to)}  ${e.coverage === null ? 'crosses no grid line' : `found on ${Math.round(e.coverage * 100)}% of the grid lines crossing it`}${e.seen ? '' : '  NOT SEEN'}`,
+    ),
     'observed discontinuities:',
-    ...map.observed.map((o) => `  ${o.onExpectedCut ? 'on an expected cut ' : 'UNEXPECTED         '} ${w(o.points[0]!)} .. ${w(o.points[o.points.length - 1]!)}  (${o.points.length} crossings)`),
+    ...map.observed.map(
+      (o) =>
+        `  ${o.onExpectedCut ? 'on an expected cut ' : 'UNEXPECTED         '} ${w(o.points[0]!)} .. ${w(o.points[o.points.length - 1]!)}  (${o.points.length} crossings)`,
+    ),
     ...(map.observed.length === 0 ? ['  none'] : []),
     ...(map.notFinite > 0 ? [`${map.notFinite} grid point(s) without a finite value`] : []),
   ].join('\n');

@@ -16,14 +16,22 @@ import { mapCuts } from './map-cuts';
 export async function cutmapCommand(argv: readonly string[]): Promise<number> {
   const request = readFlags(argv, ['target', 'fn', 'box', 'grid', 'format', 'out'], cutMapRequest);
   const fn = FINGERPRINT_FUNCTIONS.find((f) => f.label === request.fn);
-  if (!fn) throw new BadInput(`--fn: unknown function "${request.fn}"; known: ${FINGERPRINT_FUNCTIONS.map((f) => f.label).join(', ')}`);
+  if (!fn)
+    throw new BadInput(
+      `--fn: unknown function "${request.fn}"; known: ${FINGERPRINT_FUNCTIONS.map((f) => f.label).join(', ')}`,
+    );
   const target = findTarget(request.target).open();
   try {
     if (!(await target.supports(fn.op))) throw new BadInput(`--fn: ${target.name} has no ${fn.op}`);
     const [re0, im0, re1, im1] = request.box as [number, number, number, number];
     const [columns, rows] = request.grid as [number, number];
     const map = await mapCuts(target, fn, [re0, im0], [re1, im1], columns, rows);
-    const text = request.format === 'svg' ? cutMapSvg(map) : request.format === 'table' ? cutMapTable(map) : JSON.stringify(map, null, 2);
+    const text =
+      request.format === 'svg'
+        ? cutMapSvg(map)
+        : request.format === 'table'
+          ? cutMapTable(map)
+          : JSON.stringify(map, null, 2);
     writeOutput(text, request.out);
     return map.verdict === 'matches' ? 0 : 1;
   } finally {

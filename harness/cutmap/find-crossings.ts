@@ -15,7 +15,8 @@ const LEVELS = 30;
 /** A candidate is a discontinuity when at least this share of its step survives the bisection. */
 const SURVIVES = 0.5;
 
-const finite = (v: ComplexPair | null): v is ComplexPair => v !== null && Number.isFinite(v[0]) && Number.isFinite(v[1]);
+const finite = (v: ComplexPair | null): v is ComplexPair =>
+  v !== null && Number.isFinite(v[0]) && Number.isFinite(v[1]);
 const step = (a: ComplexPair, b: ComplexPair) => Math.hypot(b[0] - a[0], b[1] - a[1]);
 
 /**
@@ -34,26 +35,51 @@ export async function findCrossings(
   zs: readonly (readonly ComplexPair[])[],
   values: readonly (readonly (ComplexPair | null)[])[],
 ): Promise<GridCrossing[]> {
-  type Candidate = { edge: GridCrossing['edge']; a: ComplexPair; b: ComplexPair; fa: ComplexPair; fb: ComplexPair; first: number; alive: boolean };
+  type Candidate = {
+    edge: GridCrossing['edge'];
+    a: ComplexPair;
+    b: ComplexPair;
+    fa: ComplexPair;
+    fb: ComplexPair;
+    first: number;
+    alive: boolean;
+  };
   const pairs: Candidate[] = [];
   for (let row = 0; row < zs.length; row += 1) {
     for (let column = 0; column < zs[row]!.length; column += 1) {
       const here = values[row]![column]!;
-      for (const [kind, r, c] of [['h', row, column + 1], ['v', row + 1, column]] as const) {
+      for (const [kind, r, c] of [
+        ['h', row, column + 1],
+        ['v', row + 1, column],
+      ] as const) {
         const there = values[r]?.[c];
         if (there === undefined || !finite(here) || !finite(there)) continue;
-        pairs.push({ edge: { kind, row, column }, a: zs[row]![column]!, b: zs[r]![c]!, fa: here, fb: there, first: step(here, there), alive: true });
+        pairs.push({
+          edge: { kind, row, column },
+          a: zs[row]![column]!,
+          b: zs[r]![c]!,
+          fa: here,
+          fb: there,
+          first: step(here, there),
+          alive: true,
+        });
       }
     }
   }
   const sorted = pairs.map((p) => p.first).sort((x, y) => x - y);
   const median = sorted.length > 0 ? sorted[Math.floor(sorted.length / 2)]! : 0;
-  const candidates = pairs.filter((p) => p.first > MEDIAN_FACTOR * median && p.first > SIZE_FRACTION * Math.max(Math.hypot(...p.fa), Math.hypot(...p.fb)));
+  const candidates = pairs.filter(
+    (p) =>
+      p.first > MEDIAN_FACTOR * median && p.first > SIZE_FRACTION * Math.max(Math.hypot(...p.fa), Math.hypot(...p.fb)),
+  );
   for (let level = 0; level < LEVELS; level += 1) {
     const live = candidates.filter((c) => c.alive);
     if (live.length === 0) break;
     const mids = live.map((c): ComplexPair => [(c.a[0] + c.b[0]) / 2, (c.a[1] + c.b[1]) / 2]);
-    const answers = await target.evaluate(op, mids.map((m) => [m, ...extra]));
+    const answers = await target.evaluate(
+      op,
+      mids.map((m) => [m, ...extra]),
+    );
     live.forEach((c, i) => {
       const answer = answers[i]!;
       const fm = 'value' in answer ? answer.value : null;

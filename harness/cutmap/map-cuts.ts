@@ -30,9 +30,25 @@ const wire = ([re, im]: ComplexPair) => ({ re: formatDouble(re), im: formatDoubl
  * from its ends (a jump right next to a branch point can fall into either neighbouring cell),
  * and for each whether a crossing lies on the cut within 1e-3 of a cell of that line.
  */
-export async function mapCuts(target: Target, fn: FingerprintFunction, min: ComplexPair, max: ComplexPair, columns: number, rows: number): Promise<CutMap> {
-  const points = buildPath({ kind: 'grid', min: { re: min[0], im: min[1] }, max: { re: max[0], im: max[1] }, columns, rows });
-  const answers = await target.evaluate(fn.op, points.map((p) => [[p.z.re, p.z.im] as ComplexPair, ...fn.extra]));
+export async function mapCuts(
+  target: Target,
+  fn: FingerprintFunction,
+  min: ComplexPair,
+  max: ComplexPair,
+  columns: number,
+  rows: number,
+): Promise<CutMap> {
+  const points = buildPath({
+    kind: 'grid',
+    min: { re: min[0], im: min[1] },
+    max: { re: max[0], im: max[1] },
+    columns,
+    rows,
+  });
+  const answers = await target.evaluate(
+    fn.op,
+    points.map((p) => [[p.z.re, p.z.im] as ComplexPair, ...fn.extra]),
+  );
   const zs: ComplexPair[][] = [];
   const values: (ComplexPair | null)[][] = [];
   let notFinite = 0;
@@ -50,11 +66,15 @@ export async function mapCuts(target: Target, fn: FingerprintFunction, min: Comp
     const clipped = clipCut(cut, min, max);
     return clipped ? [{ label: cut.label, segment: clipped }] : [];
   });
-  const onExpected = (p: ComplexPair) => expected.some((e) => distanceToSegment(p, e.segment[0], e.segment[1]) <= ON_CUT * cell);
+  const onExpected = (p: ComplexPair) =>
+    expected.some((e) => distanceToSegment(p, e.segment[0], e.segment[1]) <= ON_CUT * cell);
   // Crossings on and off the expected cuts are merged separately, so a wrong stretch that
   // touches a right one (complex.js's acot on the negative real axis meets its cut at 0) stays apart.
   const observed = [true, false].flatMap((on) =>
-    mergeCrossings(crossings.filter((c) => onExpected(c.at) === on)).map((line) => ({ points: line.map(wire), onExpectedCut: on })),
+    mergeCrossings(crossings.filter((c) => onExpected(c.at) === on)).map((line) => ({
+      points: line.map(wire),
+      onExpectedCut: on,
+    })),
   );
   const gridRes = zs[0]!.map((z) => z[0]);
   const gridIms = zs.map((r) => r[0]![1]);
@@ -72,7 +92,9 @@ export async function mapCuts(target: Target, fn: FingerprintFunction, min: Comp
     // A cut along the box's own edge has no neighbour pairs across it.
     const inside = (p: ComplexPair) => p[0] > min[0] && p[0] < max[0] && p[1] > min[1] && p[1] < max[1];
     lines = lines.filter(inside);
-    const found = lines.filter((p) => crossings.some((c) => Math.hypot(c.at[0] - p[0], c.at[1] - p[1]) <= ON_CUT * cell));
+    const found = lines.filter((p) =>
+      crossings.some((c) => Math.hypot(c.at[0] - p[0], c.at[1] - p[1]) <= ON_CUT * cell),
+    );
     const coverage = lines.length > 0 ? found.length / lines.length : null;
     return { label, from: wire(a), to: wire(b), coverage, seen: coverage === null || coverage >= SEEN };
   });

@@ -14,7 +14,16 @@ export function mergeCrossings(crossings: readonly GridCrossing[]): ComplexPair[
   crossings.forEach((c, i) => {
     const { kind, row, column } = c.edge;
     // The cells an edge borders: below/above a horizontal edge, left/right of a vertical one.
-    const cells = kind === 'h' ? [[row - 1, column], [row, column]] : [[row, column - 1], [row, column]];
+    const cells =
+      kind === 'h'
+        ? [
+            [row - 1, column],
+            [row, column],
+          ]
+        : [
+            [row, column - 1],
+            [row, column],
+          ];
     for (const [r, k] of cells) {
       const key = `${r},${k}`;
       byCell.set(key, [...(byCell.get(key) ?? []), i]);

@@ -19,7 +19,13 @@ export function subjectCuts(expr: SubjectExpr, branch: BranchSpec): PlaneCut[] |
       const points = cut.points.map((p): [number, number] => [parseDouble(p.re), parseDouble(p.im)]);
       for (let i = 0; i + 1 < points.length; i += 1) {
         const last = i + 2 === points.length;
-        cuts.push({ from: points[i]!, to: points[i + 1]!, toInfinity: last && cut.to_infinity, ccwSide: null, label: `cut ${c + 1} piece ${i + 1}` });
+        cuts.push({
+          from: points[i]!,
+          to: points[i + 1]!,
+          toInfinity: last && cut.to_infinity,
+          ccwSide: null,
+          label: `cut ${c + 1} piece ${i + 1}`,
+        });
       }
     });
     return cuts;

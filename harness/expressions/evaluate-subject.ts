@@ -31,7 +31,10 @@ export function evaluateSubject(
 ): { approximation: Approximation; double: [number, number]; settled: boolean } {
   const wantBits = needs.digits > 0 ? Math.ceil(needs.digits * LOG2_10) + 4 : 0;
   for (let bits = Math.max(64, wantBits + 8); ; bits *= 2) {
-    const a = Approximation.agreement(toApprox(walk(expr, z, convention, bits)), toApprox(walk(expr, z, convention, bits + STEP)));
+    const a = Approximation.agreement(
+      toApprox(walk(expr, z, convention, bits)),
+      toApprox(walk(expr, z, convention, bits + STEP)),
+    );
     const settled = a.decided(needs.double, wantBits);
     if (settled || bits >= MAX_BITS) return { approximation: a, double: [a.re.toDouble(), a.im.toDouble()], settled };
   }
@@ -51,11 +54,17 @@ function walk(e: SubjectExpr, z: BigComplex, convention: Convention, bits: numbe
     case 'neg':
       return walk(e.a, z, convention, bits).negate();
     case 'add':
-      return walk(e.a, z, convention, bits).add(walk(e.b, z, convention, bits)).truncate(w + 32);
+      return walk(e.a, z, convention, bits)
+        .add(walk(e.b, z, convention, bits))
+        .truncate(w + 32);
     case 'sub':
-      return walk(e.a, z, convention, bits).sub(walk(e.b, z, convention, bits)).truncate(w + 32);
+      return walk(e.a, z, convention, bits)
+        .sub(walk(e.b, z, convention, bits))
+        .truncate(w + 32);
     case 'mul':
-      return walk(e.a, z, convention, bits).mul(walk(e.b, z, convention, bits)).truncate(w + 32);
+      return walk(e.a, z, convention, bits)
+        .mul(walk(e.b, z, convention, bits))
+        .truncate(w + 32);
     case 'div': {
       const a = walk(e.a, z, convention, bits);
       const b = walk(e.b, z, convention, bits);
@@ -72,7 +81,10 @@ function walk(e: SubjectExpr, z: BigComplex, convention: Convention, bits: numbe
       return pow(base, { kind: 'complex', value: walk(e.exponent, z, convention, bits) }, w).toComplex();
     }
     case 'nthroot':
-      return evaluateFunction({ fn: 'nthroot', z: walk(e.arg, z, convention, bits), n: e.n, convention }, w).toComplex();
+      return evaluateFunction(
+        { fn: 'nthroot', z: walk(e.arg, z, convention, bits), n: e.n, convention },
+        w,
+      ).toComplex();
     case 'call':
       return evaluateFunction({ fn: e.fn, z: walk(e.arg, z, convention, bits), convention }, w).toComplex();
   }

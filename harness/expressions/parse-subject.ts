@@ -7,10 +7,23 @@ import type { SubjectExpr } from './subject-expr';
 
 type MathNode = MathJs.MathNode;
 
-
 const ONE_ARGUMENT = new Set([
-  'sqrt', 'cbrt', 'exp', 'log', 'asin', 'acos', 'atan', 'asinh', 'acosh', 'atanh',
-  'acot', 'asec', 'acsc', 'acoth', 'asech', 'acsch',
+  'sqrt',
+  'cbrt',
+  'exp',
+  'log',
+  'asin',
+  'acos',
+  'atan',
+  'asinh',
+  'acosh',
+  'atanh',
+  'acot',
+  'asec',
+  'acsc',
+  'acoth',
+  'asech',
+  'acsch',
 ]);
 const OPERATORS: Record<string, 'add' | 'sub' | 'mul' | 'div'> = {
   add: 'add',
@@ -54,7 +67,8 @@ export function parseSubject(text: string): SubjectExpr {
   root.traverse(() => {
     count++;
   });
-  if (count > SUBJECT_LIMITS.nodes) throw new SubjectError(`subject has ${count} nodes; the limit is ${SUBJECT_LIMITS.nodes}`);
+  if (count > SUBJECT_LIMITS.nodes)
+    throw new SubjectError(`subject has ${count} nodes; the limit is ${SUBJECT_LIMITS.nodes}`);
   return convert(root, 0);
 }
 
@@ -63,7 +77,8 @@ function refuse(what: string, node: MathNode): never {
 }
 
 function convert(node: MathNode, depth: number): SubjectExpr {
-  if (depth > SUBJECT_LIMITS.depth) throw new SubjectError(`subject is nested more than ${SUBJECT_LIMITS.depth} deep (at "${node.toString()}")`);
+  if (depth > SUBJECT_LIMITS.depth)
+    throw new SubjectError(`subject is nested more than ${SUBJECT_LIMITS.depth} deep (at "${node.toString()}")`);
   const n = node as MathNode & Record<string, unknown>;
   switch (node.type) {
     case 'ParenthesisNode':
@@ -82,10 +97,12 @@ function convert(node: MathNode, depth: number): SubjectExpr {
       if (fn === 'unaryMinus') return { kind: 'neg', a: convert(args[0] as MathNode, depth + 1) };
       if (fn === 'unaryPlus') return convert(args[0] as MathNode, depth + 1);
       const op = OPERATORS[fn];
-      if (op) return { kind: op, a: convert(args[0] as MathNode, depth + 1), b: convert(args[1] as MathNode, depth + 1) };
+      if (op)
+        return { kind: op, a: convert(args[0] as MathNode, depth + 1), b: convert(args[1] as MathNode, depth + 1) };
       if (fn === 'pow') {
         const exponent = rationalConstant(args[1] as MathNode);
-        if (!exponent) return refuse('a power whose exponent is not an integer or rational constant (use pow(base, w))', node);
+        if (!exponent)
+          return refuse('a power whose exponent is not an integer or rational constant (use pow(base, w))', node);
         return { kind: 'power', base: convert(args[0] as MathNode, depth + 1), exponent };
       }
       return refuse(`the operator "${n.op as string}"`, node);
@@ -95,7 +112,10 @@ function convert(node: MathNode, depth: number): SubjectExpr {
       const name = fnNode.type === 'SymbolNode' ? (fnNode.name as string) : '';
       const args = n.args as MathNode[];
       const arity = (k: number) => {
-        if (args.length !== k) throw new SubjectError(`${name} takes ${k} argument${k > 1 ? 's' : ''}, got ${args.length} (at "${node.toString()}")`);
+        if (args.length !== k)
+          throw new SubjectError(
+            `${name} takes ${k} argument${k > 1 ? 's' : ''}, got ${args.length} (at "${node.toString()}")`,
+          );
       };
       if (ONE_ARGUMENT.has(name)) {
         arity(1);
@@ -125,7 +145,8 @@ function convert(node: MathNode, depth: number): SubjectExpr {
 
 function constantValue(node: MathNode): Rational {
   const value = (node as unknown as { value: unknown }).value;
-  const text = value !== null && typeof value === 'object' ? String(value) : typeof value === 'number' ? String(value) : '';
+  const text =
+    value !== null && typeof value === 'object' ? String(value) : typeof value === 'number' ? String(value) : '';
   const parsed = text ? parseNumber(text) : null;
   if (!parsed || parsed.kind !== 'exact') return refuse('a constant that is not a finite number', node);
   return parsed.value;

@@ -19,7 +19,10 @@ export async function fingerprintCommand(argv: readonly string[]): Promise<numbe
   const functions = request.fn
     ? request.fn.map((label) => {
         const found = FINGERPRINT_FUNCTIONS.find((f) => f.label === label);
-        if (!found) throw new BadInput(`--fn: unknown function "${label}"; known: ${FINGERPRINT_FUNCTIONS.map((f) => f.label).join(', ')}`);
+        if (!found)
+          throw new BadInput(
+            `--fn: unknown function "${label}"; known: ${FINGERPRINT_FUNCTIONS.map((f) => f.label).join(', ')}`,
+          );
         return found;
       })
     : FINGERPRINT_FUNCTIONS;
@@ -34,6 +37,11 @@ export async function fingerprintCommand(argv: readonly string[]): Promise<numbe
     }
   }
   const json = fingerprints.length === 1 ? fingerprints[0] : fingerprints;
-  writeOutput(request.format === 'json' ? JSON.stringify(json, null, 2) : fingerprints.map(fingerprintTable).join('\n\n'), request.out);
-  return fingerprints.some((fp) => fp.cuts.some((c) => c.behaviour === 'neither' || c.behaviour === 'inconsistent')) ? 1 : 0;
+  writeOutput(
+    request.format === 'json' ? JSON.stringify(json, null, 2) : fingerprints.map(fingerprintTable).join('\n\n'),
+    request.out,
+  );
+  return fingerprints.some((fp) => fp.cuts.some((c) => c.behaviour === 'neither' || c.behaviour === 'inconsistent'))
+    ? 1
+    : 0;
 }

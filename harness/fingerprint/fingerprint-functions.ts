@@ -2,7 +2,12 @@ import { catalogueCuts } from '../cuts/catalogue-cuts';
 import type { FingerprintFunction } from './fingerprint-function';
 
 const plain = (op: string): FingerprintFunction => ({ label: op, op, extra: [], cuts: catalogueCuts(op) ?? [] });
-const power = (label: string, op: string, extra: [number, number]): FingerprintFunction => ({ label, op, extra: [extra], cuts: catalogueCuts('pow') ?? [] });
+const power = (label: string, op: string, extra: [number, number]): FingerprintFunction => ({
+  label,
+  op,
+  extra: [extra],
+  cuts: catalogueCuts('pow') ?? [],
+});
 
 /**
  * The functions a fingerprint looks at: every catalogue function with a cut (exp has none),

@@ -16,7 +16,11 @@ export function fingerprintTable(fp: ConventionFingerprint): string {
   ]);
   const header = ['function', 'cut', 'behaviour', 'own', 'shared cut', 'note'];
   const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i]!.length)));
-  const line = (cells: string[]) => cells.map((c, i) => c.padEnd(widths[i]!)).join('  ').trimEnd();
+  const line = (cells: string[]) =>
+    cells
+      .map((c, i) => c.padEnd(widths[i]!))
+      .join('  ')
+      .trimEnd();
   return [
     `convention fingerprint of ${fp.target}`,
     fp.statement,
@@ -24,6 +28,8 @@ export function fingerprintTable(fp: ConventionFingerprint): string {
     line(header),
     line(widths.map((w) => '-'.repeat(w))),
     ...rows.map(line),
-    ...(fp.missing.length > 0 ? ['', `not fingerprinted (the target has no such operation): ${fp.missing.join(', ')}`] : []),
+    ...(fp.missing.length > 0
+      ? ['', `not fingerprinted (the target has no such operation): ${fp.missing.join(', ')}`]
+      : []),
   ].join('\n');
 }

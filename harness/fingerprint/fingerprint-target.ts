@@ -37,7 +37,9 @@ function straddle(cut: PlaneCut): PathPoint[] {
   const geometry = (p: ComplexPair) => ({ re: p[0], im: p[1] });
   return buildPath({
     kind: 'straddle',
-    cut: cut.toInfinity ? { kind: 'ray', from: geometry(cut.from), through: geometry(cut.to) } : { kind: 'segment', from: geometry(cut.from), to: geometry(cut.to) },
+    cut: cut.toInfinity
+      ? { kind: 'ray', from: geometry(cut.from), through: geometry(cut.to) }
+      : { kind: 'segment', from: geometry(cut.from), to: geometry(cut.to) },
     along: cut.toInfinity ? ALONG_RAY : ALONG_SEGMENT,
     offsets: [OFF],
   });
@@ -54,7 +56,10 @@ function straddle(cut: PlaneCut): PathPoint[] {
  * has it, and what happens on it says nothing about a convention). Functions sharing a cut are
  * then compared.
  */
-export async function fingerprintTarget(target: Target, functions: readonly FingerprintFunction[] = FINGERPRINT_FUNCTIONS): Promise<ConventionFingerprint> {
+export async function fingerprintTarget(
+  target: Target,
+  functions: readonly FingerprintFunction[] = FINGERPRINT_FUNCTIONS,
+): Promise<ConventionFingerprint> {
   const missing: string[] = [];
   const cuts: CutEntry[] = [];
   let points = 0;
@@ -65,7 +70,10 @@ export async function fingerprintTarget(target: Target, functions: readonly Fing
     }
     for (const cut of fn.cuts) {
       const path = straddle(cut);
-      const answers = await target.evaluate(fn.op, path.map((p) => [[p.z.re, p.z.im] as ComplexPair, ...fn.extra]));
+      const answers = await target.evaluate(
+        fn.op,
+        path.map((p) => [[p.z.re, p.z.im] as ComplexPair, ...fn.extra]),
+      );
       points += path.length;
       const value = (i: number): ComplexPair | null => {
         const a = answers[i]!;
@@ -82,28 +90,40 @@ export async function fingerprintTarget(target: Target, functions: readonly Fing
         const off = path.flatMap((p, i) => (p.t === t && p.label !== 'on +0' && p.label !== 'on -0' ? [i] : []));
         if (plus < 0 || minus < 0) continue;
         const z = (i: number): ComplexPair => [path[i]!.z.re, path[i]!.z.im];
-        const ref = (i: number, convention: 'signed-zero' | 'counter-clockwise') => referenceValue(fn.op, [z(i), ...fn.extra], convention);
-        const [szPlus, szMinus, ccw] = [ref(plus, 'signed-zero'), ref(minus, 'signed-zero'), ref(plus, 'counter-clockwise')];
+        const ref = (i: number, convention: 'signed-zero' | 'counter-clockwise') =>
+          referenceValue(fn.op, [z(i), ...fn.extra], convention);
+        const [szPlus, szMinus, ccw] = [
+          ref(plus, 'signed-zero'),
+          ref(minus, 'signed-zero'),
+          ref(plus, 'counter-clockwise'),
+        ];
         // Where the two Annex G values agree (a finite end of the cut), the place tells the conventions apart by nothing.
         if (relativeError(szPlus, szMinus) <= SAME) continue;
         const [vPlus, vMinus] = [value(plus), value(minus)];
-        const probe: Probe = { at: wire(z(plus)), verdict: 'neither', plusZero: vPlus && wire(vPlus), minusZero: vMinus && wire(vMinus) };
+        const probe: Probe = {
+          at: wire(z(plus)),
+          verdict: 'neither',
+          plusZero: vPlus && wire(vPlus),
+          minusZero: vMinus && wire(vMinus),
+        };
         const failedCall = [plus, minus, ...off].map(errorAt).find((e) => e !== null);
         const offWrong = off.find((i) => !same(value(i), ref(i, 'signed-zero')));
         if (failedCall) probe.note = `no value: ${failedCall}`;
         else if (offWrong !== undefined) {
           const w = path[offWrong]!.z;
           probe.note = `just off the cut, at ${formatDouble(w.re)} ${formatDouble(w.im)}i, the value is not the principal one: the cut is elsewhere here, or the value is inaccurate`;
-        }
-        else if (same(vPlus, szPlus) && same(vMinus, szMinus)) probe.verdict = 'signed-zero';
+        } else if (same(vPlus, szPlus) && same(vMinus, szMinus)) probe.verdict = 'signed-zero';
         else if (same(vPlus, ccw) && same(vMinus, ccw)) probe.verdict = 'counter-clockwise';
-        else if (same(vPlus, szMinus) && same(vMinus, szPlus)) probe.note = '+0 and -0 give the sides the other way round';
-        else if (vMinus !== null && same(vPlus, vMinus)) probe.note = 'both zero signs give the limit from the side the counter-clockwise rule leaves open';
+        else if (same(vPlus, szMinus) && same(vMinus, szPlus))
+          probe.note = '+0 and -0 give the sides the other way round';
+        else if (vMinus !== null && same(vPlus, vMinus))
+          probe.note = 'both zero signs give the limit from the side the counter-clockwise rule leaves open';
         else probe.note = 'the values on the cut are neither one-sided limit';
         probes.push(probe);
       }
       const verdicts = new Set(probes.map((p) => p.verdict));
-      const alone: CutEntry['alone'] = verdicts.size === 1 ? [...verdicts][0]! : verdicts.size === 0 ? 'neither' : 'inconsistent';
+      const alone: CutEntry['alone'] =
+        verdicts.size === 1 ? [...verdicts][0]! : verdicts.size === 0 ? 'neither' : 'inconsistent';
       cuts.push({ function: fn.label, cut: cut.label, behaviour: alone, alone, disagreesWith: [], probes });
     }
   }

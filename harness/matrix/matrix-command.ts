@@ -22,7 +22,9 @@ export async function matrixCommand(argv: readonly string[]): Promise<number> {
   if (!loaded.ok) throw new BadInput(loaded.issues.map((i) => `${i.suite}: ${i.field} ${i.rule}`).join('; '));
   const targets = libraryVersions(request.library);
   if (targets.length < 2) {
-    throw new BadInput(`--library: "${request.library}" has ${targets.length} installed version(s); a matrix needs two or more (names as \`sheetkeeper targets\` lists them, without "@version")`);
+    throw new BadInput(
+      `--library: "${request.library}" has ${targets.length} installed version(s); a matrix needs two or more (names as \`sheetkeeper targets\` lists them, without "@version")`,
+    );
   }
   const matrix = await versionMatrix(request.library, loaded.suites, targets);
   writeOutput(request.format === 'json' ? JSON.stringify(matrix, null, 2) : versionMatrixTable(matrix), request.out);

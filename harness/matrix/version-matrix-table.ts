@@ -4,7 +4,8 @@ import type { VersionMatrix } from '../../shared/version-matrix';
 const LISTED = 12;
 
 type Side = VersionMatrix['suites'][number]['changes'][number]['steps'][number]['before'];
-const value = (s: Side) => (s.value ? `${s.value.re}${s.value.im.startsWith('-') ? '' : '+'}${s.value.im}i` : 'no value');
+const value = (s: Side) =>
+  s.value ? `${s.value.re}${s.value.im.startsWith('-') ? '' : '+'}${s.value.im}i` : 'no value';
 const outcome = (s: Side) => (s.outcome.kind === 'fail' ? `fail: ${s.outcome.diagnosis.kind}` : s.outcome.kind);
 
 /**
@@ -19,10 +20,16 @@ export function versionMatrixTable(m: VersionMatrix): string {
     lines.push(`  status: ${s.statusByVersion.map((v) => `${v.version} ${v.status} (${v.fail} failing)`).join(', ')}`);
     if (s.changes.length === 0) lines.push('  no value changed');
     for (const c of s.changes.slice(0, LISTED)) {
-      lines.push(`  ${c.path} #${c.index}${c.label ? ` (${c.label})` : ''} at ${c.z.re}${c.z.im.startsWith('-') ? '' : '+'}${c.z.im}i: first changed in ${c.firstChangedIn}`);
-      for (const { before, after } of c.steps) lines.push(`    ${before.version} ${value(before)} [${outcome(before)}] -> ${after.version} ${value(after)} [${outcome(after)}]`);
+      lines.push(
+        `  ${c.path} #${c.index}${c.label ? ` (${c.label})` : ''} at ${c.z.re}${c.z.im.startsWith('-') ? '' : '+'}${c.z.im}i: first changed in ${c.firstChangedIn}`,
+      );
+      for (const { before, after } of c.steps)
+        lines.push(
+          `    ${before.version} ${value(before)} [${outcome(before)}] -> ${after.version} ${value(after)} [${outcome(after)}]`,
+        );
     }
-    if (s.changes.length > LISTED) lines.push(`  … and ${s.changes.length - LISTED} more changed points (see --format json)`);
+    if (s.changes.length > LISTED)
+      lines.push(`  … and ${s.changes.length - LISTED} more changed points (see --format json)`);
   }
   return lines.join('\n');
 }

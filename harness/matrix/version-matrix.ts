@@ -15,7 +15,8 @@ type Side = SuiteEntry['changes'][number]['steps'][number]['before'];
 
 const wire = (re: number, im: number) => ({ re: formatDouble(re), im: formatDouble(im) });
 /** Sign-exact sameness of two values: bit for bit, except that every NaN is the same NaN. */
-const sameValue = (a: Side['value'], b: Side['value']): boolean => (a === null || b === null ? a === b : a.re === b.re && a.im === b.im);
+const sameValue = (a: Side['value'], b: Side['value']): boolean =>
+  a === null || b === null ? a === b : a.re === b.re && a.im === b.im;
 
 /**
  * Runs each suite against each version of one library (`targets`, oldest first) through the
@@ -29,7 +30,11 @@ const sameValue = (a: Side['value'], b: Side['value']): boolean => (a === null |
  * so a point that is neither failing nor an error is `pass` on a path without skips, and
  * `skipped` (with that caveat as the reason) on a path with some.
  */
-export async function versionMatrix(library: string, suites: readonly Suite[], targets: readonly TargetDescriptor[]): Promise<VersionMatrix> {
+export async function versionMatrix(
+  library: string,
+  suites: readonly Suite[],
+  targets: readonly TargetDescriptor[],
+): Promise<VersionMatrix> {
   const cache = new ReferenceCache(null);
   const opened = targets.map((d) => d.open());
   const entries: SuiteEntry[] = [];
@@ -44,15 +49,31 @@ export async function versionMatrix(library: string, suites: readonly Suite[], t
           return null;
         }
       });
-      const entry: SuiteEntry = { id: suite.id, version: suite.version, subject: suite.subject, statusByVersion: [], changes: [] };
+      const entry: SuiteEntry = {
+        id: suite.id,
+        version: suite.version,
+        subject: suite.subject,
+        statusByVersion: [],
+        changes: [],
+      };
       // sides[path][point][version]
       const sides: Side[][][] = built.map((b) => (b ?? []).map(() => []));
       for (const target of opened) {
         const result = await evaluateSuite(suite, target, { cache, maxFindings: Number.MAX_SAFE_INTEGER });
-        entry.statusByVersion.push({ version: target.version, status: result.status, fail: result.counts.fail, pass: result.counts.pass });
+        entry.statusByVersion.push({
+          version: target.version,
+          status: result.status,
+          fail: result.counts.fail,
+          pass: result.counts.pass,
+        });
         for (const [k, points] of built.entries()) {
           if (!points) continue;
-          const column = await evaluateProgram(program, target, Float64Array.from(points, (p) => p.z.re), Float64Array.from(points, (p) => p.z.im));
+          const column = await evaluateProgram(
+            program,
+            target,
+            Float64Array.from(points, (p) => p.z.re),
+            Float64Array.from(points, (p) => p.z.im),
+          );
           const pathResult = result.paths[k];
           const findings = new Map((pathResult?.findings ?? []).map((f) => [f.index, f]));
           const allSkipped = pathResult !== undefined && pathResult.counts.skipped === pathResult.points;
@@ -62,10 +83,20 @@ export async function versionMatrix(library: string, suites: readonly Suite[], t
             const value = error === undefined ? wire(column.re[i]!, column.im[i]!) : null;
             const finding = findings.get(i);
             let outcome: Side['outcome'];
-            if (finding) outcome = finding.outcome.kind === 'fail' ? { kind: 'fail', diagnosis: finding.outcome.diagnosis } : finding.outcome.kind === 'error' ? { kind: 'error', message: finding.outcome.message } : { kind: 'skipped', reason: finding.outcome.kind === 'skipped' ? finding.outcome.reason : '' };
+            if (finding)
+              outcome =
+                finding.outcome.kind === 'fail'
+                  ? { kind: 'fail', diagnosis: finding.outcome.diagnosis }
+                  : finding.outcome.kind === 'error'
+                    ? { kind: 'error', message: finding.outcome.message }
+                    : { kind: 'skipped', reason: finding.outcome.kind === 'skipped' ? finding.outcome.reason : '' };
             else if (allSkipped) outcome = { kind: 'skipped', reason: pathResult.skipped?.[0]?.reason ?? 'skipped' };
             else if (error !== undefined) outcome = { kind: 'error', message: error };
-            else if (someSkipped) outcome = { kind: 'skipped', reason: 'passed or skipped: this path has skipped points, which the runner counts but does not list' };
+            else if (someSkipped)
+              outcome = {
+                kind: 'skipped',
+                reason: 'passed or skipped: this path has skipped points, which the runner counts but does not list',
+              };
             else outcome = { kind: 'pass' };
             sides[k]![i]!.push({ version: target.version, value, outcome });
           });
@@ -75,9 +106,18 @@ export async function versionMatrix(library: string, suites: readonly Suite[], t
         if (!points) continue;
         points.forEach((p, i) => {
           const history = sides[k]![i]!;
-          const steps = history.slice(1).flatMap((after, v) => (sameValue(history[v]!.value, after.value) ? [] : [{ before: history[v]!, after }]));
+          const steps = history
+            .slice(1)
+            .flatMap((after, v) => (sameValue(history[v]!.value, after.value) ? [] : [{ before: history[v]!, after }]));
           if (steps.length === 0) return;
-          entry.changes.push({ path: suite.paths[k]!.name, index: i, ...(p.label ? { label: p.label } : {}), z: wire(p.z.re, p.z.im), firstChangedIn: steps[0]!.after.version, steps });
+          entry.changes.push({
+            path: suite.paths[k]!.name,
+            index: i,
+            ...(p.label ? { label: p.label } : {}),
+            z: wire(p.z.re, p.z.im),
+            firstChangedIn: steps[0]!.after.version,
+            steps,
+          });
         });
       }
       pointCount += built.reduce((s, b) => s + (b?.length ?? 0), 0);

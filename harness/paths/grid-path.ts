@@ -13,7 +13,10 @@ import type { PathSpec } from './path-spec';
 export function gridPath(spec: Extract<PathSpec, { kind: 'grid' }>): PathPoint[] {
   const min = geometryPoint(spec.min, 'min');
   const max = geometryPoint(spec.max, 'max');
-  for (const [name, n] of [['columns', spec.columns], ['rows', spec.rows]] as const) {
+  for (const [name, n] of [
+    ['columns', spec.columns],
+    ['rows', spec.rows],
+  ] as const) {
     if (!Number.isInteger(n) || n < 2) throw new RangeError(`${name} must be an integer ≥ 2, got ${n}`);
   }
   if (!(min.re < max.re) || !(min.im < max.im)) throw new RangeError('min must lie below and left of max');
@@ -38,7 +41,10 @@ export function gridPath(spec: Extract<PathSpec, { kind: 'grid' }>): PathPoint[]
       const imSigns = im === 0 ? [0, -0] : [im];
       for (const r of reSigns) {
         for (const i of imSigns) {
-          const tags = [re === 0 ? `re ${Object.is(r, -0) ? '-0' : '+0'}` : '', im === 0 ? `im ${Object.is(i, -0) ? '-0' : '+0'}` : '']
+          const tags = [
+            re === 0 ? `re ${Object.is(r, -0) ? '-0' : '+0'}` : '',
+            im === 0 ? `im ${Object.is(i, -0) ? '-0' : '+0'}` : '',
+          ]
             .filter(Boolean)
             .join(', ');
           points.push({ t, z: { re: r, im: i }, label: `${label} (${tags})` });

@@ -10,6 +10,6 @@ export function nextDouble(x: number, direction: 1 | -1): number {
   view.setFloat64(0, x);
   const bits = view.getBigUint64(0);
   // Away from zero means one more in the magnitude bits; towards zero one less.
-  view.setBigUint64(0, (x > 0) === (direction > 0) ? bits + 1n : bits - 1n);
+  view.setBigUint64(0, x > 0 === direction > 0 ? bits + 1n : bits - 1n);
   return view.getFloat64(0);
 }

@@ -31,7 +31,9 @@ export type PathSpec =
   | {
       kind: 'straddle';
       /** A cut segment, or a ray from `from` towards `through` (through it and beyond). */
-      cut: { kind: 'segment'; from: GeometryPoint; to: GeometryPoint } | { kind: 'ray'; from: GeometryPoint; through: GeometryPoint };
+      cut:
+        | { kind: 'segment'; from: GeometryPoint; to: GeometryPoint }
+        | { kind: 'ray'; from: GeometryPoint; through: GeometryPoint };
       /**
        * Where along the cut to straddle: for a segment, fractions of its length in [0, 1];
        * for a ray, distances from its start (≥ 0).

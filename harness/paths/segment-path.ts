@@ -8,5 +8,8 @@ import { sampleParameters } from './sample-parameters';
 export function segmentPath(spec: Extract<PathSpec, { kind: 'segment' }>): PathPoint[] {
   const a = geometryPoint(spec.from, 'from');
   const b = geometryPoint(spec.to, 'to');
-  return sampleParameters(spec).map((t) => ({ t, z: { re: lerpComponent(a.re, b.re, t), im: lerpComponent(a.im, b.im, t) } }));
+  return sampleParameters(spec).map((t) => ({
+    t,
+    z: { re: lerpComponent(a.re, b.re, t), im: lerpComponent(a.im, b.im, t) },
+  }));
 }

@@ -31,14 +31,21 @@ const DEFAULT_OFFSETS = ['1e-3', '1e-9', '1e-300', '5e-324'];
  */
 export function straddlePath(spec: Extract<PathSpec, { kind: 'straddle' }>): PathPoint[] {
   const from = geometryPoint(spec.cut.from, 'cut.from');
-  const towards = geometryPoint(spec.cut.kind === 'segment' ? spec.cut.to : spec.cut.through, spec.cut.kind === 'segment' ? 'cut.to' : 'cut.through');
+  const towards = geometryPoint(
+    spec.cut.kind === 'segment' ? spec.cut.to : spec.cut.through,
+    spec.cut.kind === 'segment' ? 'cut.to' : 'cut.through',
+  );
   const d = { re: towards.re - from.re, im: towards.im - from.im };
   const length = Math.hypot(d.re, d.im);
   if (!(length > 0) || !Number.isFinite(length)) throw new RangeError('a cut needs two distinct finite points');
   const horizontal = d.im === 0;
   const vertical = d.re === 0;
   // The left normal (−d.im, d.re)/|d|, exact for axis-parallel cuts.
-  const normal: Point = horizontal ? { re: 0, im: Math.sign(d.re) } : vertical ? { re: -Math.sign(d.im), im: 0 } : { re: -d.im / length, im: d.re / length };
+  const normal: Point = horizontal
+    ? { re: 0, im: Math.sign(d.re) }
+    : vertical
+      ? { re: -Math.sign(d.im), im: 0 }
+      : { re: -d.im / length, im: d.re / length };
   const offsetTexts = (spec.offsets ?? DEFAULT_OFFSETS).map(String);
   const offsets = offsetTexts.map((o, i) => {
     const x = geometryNumber(o, `offsets[${i}]`);

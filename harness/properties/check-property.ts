@@ -13,7 +13,6 @@ import { regionArbitrary } from './region-arbitrary';
 
 const wire = ([re, im]: ComplexPair) => ({ re: formatDouble(re), im: formatDouble(im) });
 
-
 /**
  * Runs one property check against a target with fast-check: points drawn from the check's
  * region with the pinned seed, the law checked on the library's own values at each, and on
@@ -22,11 +21,22 @@ const wire = ([re, im]: ComplexPair) => ({ re: formatDouble(re), im: formatDoubl
  * region that cannot be sampled, or an operation the target lacks gives `not-checked` with
  * the reason; nothing is silently passed.
  */
-export async function checkProperty(check: PropertyCheck, subject: PropertySubject, target: Target): Promise<PropertyOutcome> {
+export async function checkProperty(
+  check: PropertyCheck,
+  subject: PropertySubject,
+  target: Target,
+): Promise<PropertyOutcome> {
   const law = PROPERTY_LAW_CHECKS[check.law];
   const title = propertyTitle(check, subject.text, subject.convention);
   const base = { law: check.law, title, seed: check.seed };
-  const ctx: LawContext = { target, expr: subject.expr, convention: subject.convention, tolerance: subject.tolerance, cuts: subject.cuts, power: check.power };
+  const ctx: LawContext = {
+    target,
+    expr: subject.expr,
+    convention: subject.convention,
+    tolerance: subject.tolerance,
+    cuts: subject.cuts,
+    power: check.power,
+  };
   const notApplicable = law.notApplicable(ctx);
   if (notApplicable) return { kind: 'not-checked', ...base, reason: notApplicable };
   for (const op of [...subjectProgram(subject.expr).ops, ...law.ops(ctx)]) {

@@ -10,8 +10,17 @@ import { subjectProgram } from '../runner/subject-program';
  * the target's own operations, exactly as the runner evaluates suites (subject-program.ts,
  * evaluate-program.ts), one result per point: the value, or why there is none.
  */
-export async function evaluateOnTarget(expr: SubjectExpr, target: Target, points: readonly ComplexPair[]): Promise<CallResult[]> {
-  const column = await evaluateProgram(subjectProgram(expr), target, Float64Array.from(points, (p) => p[0]), Float64Array.from(points, (p) => p[1]));
+export async function evaluateOnTarget(
+  expr: SubjectExpr,
+  target: Target,
+  points: readonly ComplexPair[],
+): Promise<CallResult[]> {
+  const column = await evaluateProgram(
+    subjectProgram(expr),
+    target,
+    Float64Array.from(points, (p) => p[0]),
+    Float64Array.from(points, (p) => p[1]),
+  );
   return points.map((_, i) => {
     const error = column.errors.get(i);
     return error !== undefined ? { error } : { value: [column.re[i]!, column.im[i]!] };

@@ -31,6 +31,13 @@ export const expLogLaw: PropertyLaw = {
     const [back, gz] = [e.values[0]!, g.values[0]!];
     const size = Number.isFinite(logZ[0]) && Number.isFinite(logZ[1]) ? Math.max(1, Math.hypot(...logZ)) : 1;
     if (composedClose(back, gz, size * lawTolerance(ctx.tolerance), 1)) return null;
-    return { reason: 'exp(log z) differs from z', values: [{ name: 'log z', value: logZ }, { name: 'exp(log z)', value: back }, { name: 'z', value: gz }] };
+    return {
+      reason: 'exp(log z) differs from z',
+      values: [
+        { name: 'log z', value: logZ },
+        { name: 'exp(log z)', value: back },
+        { name: 'z', value: gz },
+      ],
+    };
   },
 };

@@ -7,10 +7,19 @@ import type { LawFinding } from './law-finding';
  * law could not be checked because the library gave no value there (a throw is a finding too:
  * Annex G gives these functions a value everywhere).
  */
-export function libraryValues(results: readonly CallResult[], names: readonly string[]): { values: ComplexPair[] } | { finding: LawFinding } {
+export function libraryValues(
+  results: readonly CallResult[],
+  names: readonly string[],
+): { values: ComplexPair[] } | { finding: LawFinding } {
   const values: ComplexPair[] = [];
   for (const [i, r] of results.entries()) {
-    if ('error' in r) return { finding: { reason: `the library gave no value for ${names[i] ?? 'a call'}: ${r.error}`, values: values.map((value, k) => ({ name: names[k] ?? 'value', value })) } };
+    if ('error' in r)
+      return {
+        finding: {
+          reason: `the library gave no value for ${names[i] ?? 'a call'}: ${r.error}`,
+          values: values.map((value, k) => ({ name: names[k] ?? 'value', value })),
+        },
+      };
     values.push(r.value);
   }
   return { values };

@@ -3,8 +3,10 @@ import type { Convention } from '../../shared/schemas/convention-schema';
 import { PROPERTY_LAW_CHECKS } from './property-laws';
 
 function regionText(region: PropertyCheck['region']): string {
-  if (region.kind === 'disc') return `the disc |z - (${region.center.re}${region.center.im.startsWith('-') ? '' : '+'}${region.center.im}i)| <= ${region.radius}`;
-  if (region.kind === 'box') return `the box ${region.min.re}${region.min.im.startsWith('-') ? '' : '+'}${region.min.im}i .. ${region.max.re}${region.max.im.startsWith('-') ? '' : '+'}${region.max.im}i`;
+  if (region.kind === 'disc')
+    return `the disc |z - (${region.center.re}${region.center.im.startsWith('-') ? '' : '+'}${region.center.im}i)| <= ${region.radius}`;
+  if (region.kind === 'box')
+    return `the box ${region.min.re}${region.min.im.startsWith('-') ? '' : '+'}${region.min.im}i .. ${region.max.re}${region.max.im.startsWith('-') ? '' : '+'}${region.max.im}i`;
   return `points within ${region.distance} of the expected cuts`;
 }
 

@@ -11,7 +11,9 @@ import type { PropertyLaw } from './property-law';
 import type { RangeCondition } from './range-condition';
 
 /** The range conditions of the subject's outermost function, its argument g and its cuts; null when it has no principal range. */
-function rangeOf(expr: SubjectExpr): { conditions: readonly RangeCondition[]; g: SubjectExpr; cuts: PlaneCut[] } | null {
+function rangeOf(
+  expr: SubjectExpr,
+): { conditions: readonly RangeCondition[]; g: SubjectExpr; cuts: PlaneCut[] } | null {
   const powerRange = (w: number, g: SubjectExpr) => ({
     // arg z^w = w·Arg z with |Arg z| ≤ π, a range only while |w| < 1 (DLMF 4.2.26 with 4.2(i), from memory).
     conditions: [{ part: 'arg' as const, min: -Math.PI * Math.abs(w), max: Math.PI * Math.abs(w), ccwOpenMin: true }],
@@ -19,7 +21,8 @@ function rangeOf(expr: SubjectExpr): { conditions: readonly RangeCondition[]; g:
     cuts: catalogueCuts('pow') ?? [],
   });
   if (expr.kind === 'call' && expr.fn === 'cbrt') return powerRange(1 / 3, expr.arg);
-  if (expr.kind === 'call' && PRINCIPAL_RANGE[expr.fn]) return { conditions: PRINCIPAL_RANGE[expr.fn]!, g: expr.arg, cuts: catalogueCuts(expr.fn) ?? [] };
+  if (expr.kind === 'call' && PRINCIPAL_RANGE[expr.fn])
+    return { conditions: PRINCIPAL_RANGE[expr.fn]!, g: expr.arg, cuts: catalogueCuts(expr.fn) ?? [] };
   if (expr.kind === 'nthroot' && Math.abs(expr.n) >= 2) return powerRange(1 / expr.n, expr.arg);
   if (expr.kind === 'power') {
     const w = Number(expr.exponent.num) / Number(expr.exponent.den);
@@ -49,7 +52,10 @@ export const rangeLaw: PropertyLaw = {
   source: 'DLMF 4.2(i), 4.23(ii), 4.37(ii) (from memory); half-open edges per Kahan (1987) under counter-clockwise',
   arity: 1,
   ops: () => [],
-  notApplicable: (ctx) => (rangeOf(ctx.expr) ? null : 'the outermost function of the subject has no principal range to check (not a catalogue inverse, log, root or power |w| < 1)'),
+  notApplicable: (ctx) =>
+    rangeOf(ctx.expr)
+      ? null
+      : 'the outermost function of the subject has no principal range to check (not a catalogue inverse, log, root or power |w| < 1)',
   excludes: () => false,
   check: async (ctx, [z]) => {
     const range = rangeOf(ctx.expr)!;
@@ -68,9 +74,16 @@ export const rangeLaw: PropertyLaw = {
       if (x === null) continue;
       const slack = (edge: number) => (Number.isFinite(edge) ? Math.abs(edge) * tol + tol : 0);
       const inside = x >= c.min - slack(c.min) && x <= c.max + slack(c.max);
-      if (!inside) return { reason: `${c.part} f(z) = ${x} lies outside [${c.min}, ${c.max}]`, values: [{ name: 'f(z)', value }] };
+      if (!inside)
+        return { reason: `${c.part} f(z) = ${x} lies outside [${c.min}, ${c.max}]`, values: [{ name: 'f(z)', value }] };
       if (onCut && c.ccwOpenMin && x <= c.min + slack(c.min)) {
-        return { reason: `${c.part} f(z) = ${x} is the lower edge, which the counter-clockwise rule leaves open on the cut`, values: [{ name: 'g(z)', value: onCut }, { name: 'f(z)', value }] };
+        return {
+          reason: `${c.part} f(z) = ${x} is the lower edge, which the counter-clockwise rule leaves open on the cut`,
+          values: [
+            { name: 'g(z)', value: onCut },
+            { name: 'f(z)', value },
+          ],
+        };
       }
     }
     return null;

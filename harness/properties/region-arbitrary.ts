@@ -30,10 +30,14 @@ function withZero([re, im]: ComplexPair, part: 'none' | 're' | 'im', negative: b
  *   offset of zero puts it exactly on the cut, with +0 or −0 in the across part for a cut on
  *   an axis. Needs the expected cuts; without them (or with none) gives the reason instead.
  */
-export function regionArbitrary(region: PropertyCheck['region'], cuts: readonly PlaneCut[] | null): { arbitrary: fc.Arbitrary<ComplexPair> } | { reason: string } {
+export function regionArbitrary(
+  region: PropertyCheck['region'],
+  cuts: readonly PlaneCut[] | null,
+): { arbitrary: fc.Arbitrary<ComplexPair> } | { reason: string } {
   if (region.kind === 'disc') {
     const [cx, cy, r] = [parseDouble(region.center.re), parseDouble(region.center.im), parseDouble(region.radius)];
-    if (!(r > 0) || !Number.isFinite(r) || !Number.isFinite(cx) || !Number.isFinite(cy)) return { reason: 'the disc needs a finite centre and a positive finite radius' };
+    if (!(r > 0) || !Number.isFinite(r) || !Number.isFinite(cx) || !Number.isFinite(cy))
+      return { reason: 'the disc needs a finite centre and a positive finite radius' };
     const arbitrary = fc
       .tuple(unit, unit, zeroPart, fc.boolean())
       .filter(([u, v]) => u * u + v * v <= 1)
@@ -44,23 +48,36 @@ export function regionArbitrary(region: PropertyCheck['region'], cuts: readonly 
   if (region.kind === 'box') {
     const lo: ComplexPair = [parseDouble(region.min.re), parseDouble(region.min.im)];
     const hi: ComplexPair = [parseDouble(region.max.re), parseDouble(region.max.im)];
-    if (![...lo, ...hi].every(Number.isFinite) || !(lo[0] < hi[0] && lo[1] < hi[1])) return { reason: 'the box needs finite corners with min below and left of max' };
+    if (![...lo, ...hi].every(Number.isFinite) || !(lo[0] < hi[0] && lo[1] < hi[1]))
+      return { reason: 'the box needs finite corners with min below and left of max' };
     const arbitrary = fc
-      .tuple(fc.double({ min: lo[0], max: hi[0], noNaN: true }), fc.double({ min: lo[1], max: hi[1], noNaN: true }), zeroPart, fc.boolean())
+      .tuple(
+        fc.double({ min: lo[0], max: hi[0], noNaN: true }),
+        fc.double({ min: lo[1], max: hi[1], noNaN: true }),
+        zeroPart,
+        fc.boolean(),
+      )
       .map(([x, y, part, negative]) => withZero([x, y], part, negative))
       .filter(([x, y]) => x >= lo[0] && x <= hi[0] && y >= lo[1] && y <= hi[1]);
     return { arbitrary };
   }
   const distance = parseDouble(region.distance);
   if (!(distance > 0) || !Number.isFinite(distance)) return { reason: 'near-cuts needs a positive finite distance' };
-  if (cuts === null) return { reason: 'the expected cuts of this subject are not known (a principal subject that is not one catalogue function of z)' };
+  if (cuts === null)
+    return {
+      reason:
+        'the expected cuts of this subject are not known (a principal subject that is not one catalogue function of z)',
+    };
   if (cuts.length === 0) return { reason: 'the subject has no cuts to sample near' };
   const along = fc.oneof(
     { arbitrary: fc.double({ min: Number.MIN_VALUE, max: NEAR_ALONG, noNaN: true }), weight: 3 },
     { arbitrary: fc.double({ min: NEAR_ALONG, max: FAR_ALONG, noNaN: true }), weight: 1 },
   );
   const fraction = fc.double({ min: Number.MIN_VALUE, max: 1, maxExcluded: true, noNaN: true });
-  const offset = fc.oneof({ arbitrary: fc.constant(0), weight: 1 }, { arbitrary: fc.double({ min: 0, max: distance, noNaN: true }), weight: 3 });
+  const offset = fc.oneof(
+    { arbitrary: fc.constant(0), weight: 1 },
+    { arbitrary: fc.double({ min: 0, max: distance, noNaN: true }), weight: 3 },
+  );
   const arbitrary = fc
     .tuple(fc.integer({ min: 0, max: cuts.length - 1 }), along, fraction, offset, fc.boolean())
     .map(([index, a, f, delta, below]): ComplexPair | null => {

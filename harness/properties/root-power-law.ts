@@ -53,8 +53,18 @@ export const rootPowerLaw: PropertyLaw = {
       power = product.values[0]!;
     }
     const gz = g.values[0]!;
-    const exponentError = ctx.expr.kind === 'power' && (gz[0] !== 0 || gz[1] !== 0) ? powerMismatch(ctx.expr.exponent, root.n) * (Math.abs(Math.log(Math.hypot(...gz))) + Math.PI) : 0;
+    const exponentError =
+      ctx.expr.kind === 'power' && (gz[0] !== 0 || gz[1] !== 0)
+        ? powerMismatch(ctx.expr.exponent, root.n) * (Math.abs(Math.log(Math.hypot(...gz))) + Math.PI)
+        : 0;
     if (composedClose(power, gz, root.n * lawTolerance(ctx.tolerance) + exponentError, root.n)) return null;
-    return { reason: `f(z)^${root.n} differs from g(z)`, values: [{ name: 'f(z)', value: fz }, { name: `f(z)^${root.n}`, value: power }, { name: 'g(z)', value: gz }] };
+    return {
+      reason: `f(z)^${root.n} differs from g(z)`,
+      values: [
+        { name: 'f(z)', value: fz },
+        { name: `f(z)^${root.n}`, value: power },
+        { name: 'g(z)', value: gz },
+      ],
+    };
   },
 };

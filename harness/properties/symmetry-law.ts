@@ -62,21 +62,37 @@ export function symmetryLaw(symmetry: Symmetry): PropertyLaw {
     arity: 1,
     ops: () => [],
     notApplicable: (ctx) =>
-      symmetry.needsRealConstants && hasNonRealConstant(ctx.expr) ? `the subject has a non-real constant, so ${symmetry.formula} need not hold` : null,
+      symmetry.needsRealConstants && hasNonRealConstant(ctx.expr)
+        ? `the subject has a non-real constant, so ${symmetry.formula} need not hold`
+        : null,
     excludes: (ctx, [z]) => {
       if (ctx.convention !== 'counter-clockwise' || !hasZeroPart(z!)) return false;
       if (symmetry.brokenOnCutsByCcw || ctx.cuts === null) return true;
       return ctx.cuts.some((cut) => cut.ccwSide === null && onPlaneCut(cut, z!, true));
     },
     check: async (ctx, [z]) => {
-      const got = libraryValues(await evaluateOnTarget(ctx.expr, ctx.target, [symmetry.input(z!), z!]), ['f(T z)', 'f(z)']);
+      const got = libraryValues(await evaluateOnTarget(ctx.expr, ctx.target, [symmetry.input(z!), z!]), [
+        'f(T z)',
+        'f(z)',
+      ]);
       if ('finding' in got) return got.finding;
       const [left, fz] = got.values as [ComplexPair, ComplexPair];
       const right = symmetry.value(fz);
       const check = checkValue(left, right, ctx.tolerance, ctx.convention === 'signed-zero');
       if (check.pass) return null;
-      const why = check.zeroSignDiffers.length > 0 ? `zero sign of ${check.zeroSignDiffers.join(' and ')} differs` : check.finitenessDiffers ? 'one side is not finite' : `${check.ulps} ulps apart`;
-      return { reason: `${symmetry.formula} fails: ${why}`, values: [{ name: 'left', value: left }, { name: 'right', value: right }] };
+      const why =
+        check.zeroSignDiffers.length > 0
+          ? `zero sign of ${check.zeroSignDiffers.join(' and ')} differs`
+          : check.finitenessDiffers
+            ? 'one side is not finite'
+            : `${check.ulps} ulps apart`;
+      return {
+        reason: `${symmetry.formula} fails: ${why}`,
+        values: [
+          { name: 'left', value: left },
+          { name: 'right', value: right },
+        ],
+      };
     },
   };
 }

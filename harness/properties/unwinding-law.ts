@@ -33,14 +33,21 @@ export const unwindingLaw: PropertyLaw = {
   source: 'Corless & Jeffrey 1996, the unwinding number K(w) = ceil((Im w - pi)/(2 pi)) (from memory)',
   arity: 2,
   ops: () => [],
-  notApplicable: (ctx) => (ctx.expr.kind === 'call' && ctx.expr.fn === 'log' && ctx.expr.arg.kind === 'z' ? null : 'the unwinding identity is stated for the subject log(z)'),
+  notApplicable: (ctx) =>
+    ctx.expr.kind === 'call' && ctx.expr.fn === 'log' && ctx.expr.arg.kind === 'z'
+      ? null
+      : 'the unwinding identity is stated for the subject log(z)',
   excludes: (_ctx, [z1, z2]) => {
     const p = exactProduct(z1!, z2!);
     return !(Number.isFinite(p[0]) && Number.isFinite(p[1])) || Math.hypot(...p) < MIN_NORMAL;
   },
   check: async (ctx, [z1, z2]) => {
     const p = exactProduct(z1!, z2!);
-    const got = libraryValues(await ctx.target.evaluate('log', [[z1!], [z2!], [p]]), ['log z1', 'log z2', 'log(z1*z2)']);
+    const got = libraryValues(await ctx.target.evaluate('log', [[z1!], [z2!], [p]]), [
+      'log z1',
+      'log z2',
+      'log(z1*z2)',
+    ]);
     if ('finding' in got) return got.finding;
     const [l1, l2, lp] = got.values as [ComplexPair, ComplexPair, ComplexPair];
     const sum: ComplexPair = [l1[0] + l2[0], l1[1] + l2[1]];
@@ -52,7 +59,14 @@ export const unwindingLaw: PropertyLaw = {
       im = upper ? Math.abs(im) : -Math.abs(im);
     }
     const expected: ComplexPair = [sum[0], im];
-    if (![...lp, ...expected].every(Number.isFinite)) return { reason: 'a logarithm is not finite', values: [{ name: 'log(z1*z2)', value: lp }, { name: 'expected', value: expected }] };
+    if (![...lp, ...expected].every(Number.isFinite))
+      return {
+        reason: 'a logarithm is not finite',
+        values: [
+          { name: 'log(z1*z2)', value: lp },
+          { name: 'expected', value: expected },
+        ],
+      };
     if (Math.hypot(lp[0] - expected[0], lp[1] - expected[1]) <= tol) return null;
     return {
       reason: `log(z1*z2) differs from log z1 + log z2 - 2*pi*i*K with K = ${k}`,

@@ -31,7 +31,8 @@ export function answerReference(input: unknown): Record<string, unknown> {
     } else if (req.w) {
       w = { kind: 'complex', value: BigComplex.fromDoubles(parseDouble(req.w.re), parseDouble(req.w.im)) };
     }
-    if ((req.fn === 'pow') !== (w !== undefined)) return { error: req.fn === 'pow' ? 'pow needs "w"' : `"w" is only for pow` };
+    if ((req.fn === 'pow') !== (w !== undefined))
+      return { error: req.fn === 'pow' ? 'pow needs "w"' : `"w" is only for pow` };
     if ((req.fn === 'nthroot') !== (req.n !== undefined)) {
       return { error: req.fn === 'nthroot' ? 'nthroot needs "n"' : `"n" is only for nthroot` };
     }

@@ -21,7 +21,10 @@ import { sqrt } from './functions/sqrt';
  * nthroot) take an exponent and are listed as `power`.
  */
 export const catalogue: Readonly<
-  Record<string, { kind: 'plain'; fn: CatalogueFunction } | { kind: 'reciprocal'; fn: ReciprocalFunction } | { kind: 'power' }>
+  Record<
+    string,
+    { kind: 'plain'; fn: CatalogueFunction } | { kind: 'reciprocal'; fn: ReciprocalFunction } | { kind: 'power' }
+  >
 > = {
   sqrt: { kind: 'plain', fn: sqrt },
   exp: { kind: 'plain', fn: exp },

@@ -53,7 +53,12 @@ function evaluatePlain(fn: CatalogueFunction, z: BigComplex, bits: number): Appr
   return fn.special(z)?.toApproximation(bits) ?? fn.evaluate(z, bits);
 }
 
-function evaluateReciprocal(fn: ReciprocalFunction, z: BigComplex, convention: Convention, bits: number): Approximation {
+function evaluateReciprocal(
+  fn: ReciprocalFunction,
+  z: BigComplex,
+  convention: Convention,
+  bits: number,
+): Approximation {
   const base = applyConvention(z, [], convention);
   const rounding = bits + RECIPROCAL_GUARD;
   const w = applyConvention(base.reciprocal(rounding), fn.inner.cuts, convention);
@@ -85,4 +90,3 @@ function reciprocalError(w: BigComplex, rounding: number, derivative: Reciprocal
   if (lowLog - 1 < perturbation) return Infinity;
   return Math.ceil(rho - derivative.power * (lowLog - 1)) + 1;
 }
-

@@ -9,5 +9,8 @@ import { principalValue } from './principal-value';
  * The fast tier only takes inputs with both parts non-zero, where the two conventions agree.
  */
 export function principalDouble(fn: string, x: number, y: number, convention: Convention): [number, number] {
-  return fastPrincipal(fn, x, y) ?? principalValue({ fn, z: BigComplex.fromDoubles(x, y), convention }, { double: true, digits: 0 }).double;
+  return (
+    fastPrincipal(fn, x, y) ??
+    principalValue({ fn, z: BigComplex.fromDoubles(x, y), convention }, { double: true, digits: 0 }).double
+  );
 }

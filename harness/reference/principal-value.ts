@@ -46,4 +46,3 @@ export function principalValue(request: PrincipalRequest, needs: PrincipalNeeds)
     bits *= 2;
   }
 }
-

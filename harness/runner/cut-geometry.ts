@@ -47,7 +47,13 @@ export class CutGeometry {
       if (cut.to_infinity && pts.length >= 2) {
         const last = pts[pts.length - 1] as Point;
         const prev = pts[pts.length - 2] as Point;
-        this.edges.push({ a: last, d: [last[0] - prev[0], last[1] - prev[1]], ray: true, cut: c + 1, piece: pts.length });
+        this.edges.push({
+          a: last,
+          d: [last[0] - prev[0], last[1] - prev[1]],
+          ray: true,
+          cut: c + 1,
+          piece: pts.length,
+        });
       }
     });
   }
@@ -75,16 +81,22 @@ function proximity(edge: CutEdge, p: Point): CutProximity | null {
   if (dy === 0) {
     // Horizontal: exact in the imaginary part; the left of an eastward edge is up.
     const off = p[1] - edge.a[1];
-    const side = off === 0 ? 0 : (Math.sign(off) * Math.sign(dx)) as -1 | 1;
+    const side = off === 0 ? 0 : ((Math.sign(off) * Math.sign(dx)) as -1 | 1);
     return { edge, foot: [p[0], edge.a[1]], distance: Math.abs(off), side, normal };
   }
   if (dx === 0) {
     // Vertical: exact in the real part; the left of a northward edge is west.
     const off = p[0] - edge.a[0];
-    const side = off === 0 ? 0 : (-Math.sign(off) * Math.sign(dy)) as -1 | 1;
+    const side = off === 0 ? 0 : ((-Math.sign(off) * Math.sign(dy)) as -1 | 1);
     return { edge, foot: [edge.a[0], p[1]], distance: Math.abs(off), side, normal };
   }
   const cross = dx * ry - dy * rx;
   const foot: Point = [edge.a[0] + u * dx, edge.a[1] + u * dy];
-  return { edge, foot, distance: Math.abs(cross) / length, side: cross === 0 ? 0 : (Math.sign(cross) as -1 | 1), normal };
+  return {
+    edge,
+    foot,
+    distance: Math.abs(cross) / length,
+    side: cross === 0 ? 0 : (Math.sign(cross) as -1 | 1),
+    normal,
+  };
 }

@@ -1,7 +1,8 @@
 import { describeWorstPart } from '../../shared/describe-worst-part';
 import type { PointOutcome } from '../../shared/point-outcome';
 
-const num = (x: number): string => (Number.isFinite(x) ? (Number.isInteger(x) ? String(x) : x.toPrecision(3)) : String(x));
+const num = (x: number): string =>
+  Number.isFinite(x) ? (Number.isInteger(x) ? String(x) : x.toPrecision(3)) : String(x);
 
 /** One line for a point's outcome: "zero-sign (input im)", "other-sheet k = 1", "inaccurate, 7 ulps", "error: …". */
 export function describeOutcome(o: PointOutcome): string {

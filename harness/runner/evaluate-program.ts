@@ -12,11 +12,18 @@ const BATCH = 2048;
  * the other points go on. Between batches it checks `signal`: once aborted, the points not yet
  * evaluated get the abort reason as their error and no more calls are made.
  */
-export async function evaluateProgram(program: SubjectProgram, target: Target, re: Float64Array, im: Float64Array, signal?: AbortSignal): Promise<ValueColumn> {
+export async function evaluateProgram(
+  program: SubjectProgram,
+  target: Target,
+  re: Float64Array,
+  im: Float64Array,
+  signal?: AbortSignal,
+): Promise<ValueColumn> {
   const n = re.length;
   const errors = new Map<number, string>();
   const columns: (ValueColumn | ComplexPair)[] = [];
-  const abortMessage = (): string => (signal?.reason instanceof Error ? signal.reason.message : String(signal?.reason ?? 'cancelled'));
+  const abortMessage = (): string =>
+    signal?.reason instanceof Error ? signal.reason.message : String(signal?.reason ?? 'cancelled');
   let result: ValueColumn = { re, im, errors };
   for (const step of program.steps) {
     if (step.kind === 'input') {
@@ -38,7 +45,8 @@ export async function evaluateProgram(program: SubjectProgram, target: Target, r
       continue;
     }
     const out: ValueColumn = { re: new Float64Array(n), im: new Float64Array(n), errors };
-    const argAt = (a: ValueColumn | ComplexPair, i: number): ComplexPair => (Array.isArray(a) ? (a as ComplexPair) : [(a as ValueColumn).re[i] as number, (a as ValueColumn).im[i] as number]);
+    const argAt = (a: ValueColumn | ComplexPair, i: number): ComplexPair =>
+      Array.isArray(a) ? (a as ComplexPair) : [(a as ValueColumn).re[i] as number, (a as ValueColumn).im[i] as number];
     for (let start = 0; start < n; start += BATCH) {
       const end = Math.min(n, start + BATCH);
       if (signal?.aborted) {
@@ -71,7 +79,11 @@ export async function evaluateProgram(program: SubjectProgram, target: Target, r
   const last = columns[columns.length - 1];
   if (Array.isArray(last)) {
     // A constant subject: the same value everywhere.
-    return { re: new Float64Array(n).fill((last as ComplexPair)[0]), im: new Float64Array(n).fill((last as ComplexPair)[1]), errors };
+    return {
+      re: new Float64Array(n).fill((last as ComplexPair)[0]),
+      im: new Float64Array(n).fill((last as ComplexPair)[1]),
+      errors,
+    };
   }
   return last === undefined ? result : (last as ValueColumn);
 }

@@ -1,6 +1,13 @@
 import type { Diagnosis, DiagnosisKind } from '../../shared/diagnosis';
 import type { PointOutcome } from '../../shared/point-outcome';
-import type { MonodromyCheck, OutcomeCounts, PathResult, PointFinding, SuiteTargetResult, WireComplex } from '../../shared/run-result';
+import type {
+  MonodromyCheck,
+  OutcomeCounts,
+  PathResult,
+  PointFinding,
+  SuiteTargetResult,
+  WireComplex,
+} from '../../shared/run-result';
 import type { Suite } from '../../shared/schemas/suite-schema';
 import type { SuitePath } from '../../shared/schemas/suite-path-schema';
 import type { Tolerance } from '../../shared/schemas/tolerance-schema';
@@ -71,7 +78,11 @@ const errorText = (e: unknown): string => (e instanceof Error ? e.message : Stri
  *
  * This is the API the cut map, fingerprint and version matrix build on; its signature is kept stable.
  */
-export async function evaluateSuite(suite: Suite, target: Target, options: EvaluateSuiteOptions = {}): Promise<SuiteTargetResult> {
+export async function evaluateSuite(
+  suite: Suite,
+  target: Target,
+  options: EvaluateSuiteOptions = {},
+): Promise<SuiteTargetResult> {
   const started = Date.now();
   const cache = options.cache ?? new ReferenceCache(null);
   const computed0 = cache.computed;
@@ -85,10 +96,19 @@ export async function evaluateSuite(suite: Suite, target: Target, options: Evalu
     checked: {
       convention: suite.convention,
       branch: suite.branch.kind,
-      tolerance: 'ulps' in suite.tolerances.values ? `${suite.tolerances.values.ulps} ulps per part` : `relative error ${suite.tolerances.values.relative}`,
+      tolerance:
+        'ulps' in suite.tolerances.values
+          ? `${suite.tolerances.values.ulps} ulps per part`
+          : `relative error ${suite.tolerances.values.relative}`,
       paths: selected.length,
       points: 0,
-      properties: { listed: suite.properties.map((p) => p.law), run: false, note: suite.properties.length ? 'property checks are not run by evaluateSuite' : 'the suite lists no property checks' },
+      properties: {
+        listed: suite.properties.map((p) => p.law),
+        run: false,
+        note: suite.properties.length
+          ? 'property checks are not run by evaluateSuite'
+          : 'the suite lists no property checks',
+      },
     },
     counts: emptyCounts(),
     byDiagnosis: {},
@@ -106,7 +126,10 @@ export async function evaluateSuite(suite: Suite, target: Target, options: Evalu
     program = subjectProgram(expr);
     cacheKey = suiteCacheKey(suite);
     const key = cacheKey;
-    expectation = suite.branch.kind === 'principal' ? principalExpectation(suite, expr, cache, key) : regularExpectation(suite, cache, key);
+    expectation =
+      suite.branch.kind === 'principal'
+        ? principalExpectation(suite, expr, cache, key)
+        : regularExpectation(suite, cache, key);
     result.checked.branch = expectation.description;
   } catch (e) {
     result.errors.push(`the suite cannot be evaluated: ${errorText(e)}`);
@@ -139,11 +162,37 @@ export async function evaluateSuite(suite: Suite, target: Target, options: Evalu
     if (options.signal?.aborted) {
       // Stopped (cancelled or out of time): the remaining paths are not evaluated.
       const n = Array.isArray(points) ? points.length : 0;
-      const reason = options.signal.reason instanceof Error ? options.signal.reason.message : String(options.signal.reason ?? 'cancelled');
-      result.paths.push({ name: path.name, kind: path.kind, points: n, counts: { pass: 0, fail: 0, error: 0, skipped: n }, byDiagnosis: {}, jumps: null, monodromy: null, findings: [], findingsOmitted: 0, skipped: [{ reason, count: n }] });
+      const reason =
+        options.signal.reason instanceof Error
+          ? options.signal.reason.message
+          : String(options.signal.reason ?? 'cancelled');
+      result.paths.push({
+        name: path.name,
+        kind: path.kind,
+        points: n,
+        counts: { pass: 0, fail: 0, error: 0, skipped: n },
+        byDiagnosis: {},
+        jumps: null,
+        monodromy: null,
+        findings: [],
+        findingsOmitted: 0,
+        skipped: [{ reason, count: n }],
+      });
       continue;
     }
-    const pathResult = await evaluatePath(suite, cache, cacheKey, target, program, expectation, path, points, unsupported, maxFindings, options.signal);
+    const pathResult = await evaluatePath(
+      suite,
+      cache,
+      cacheKey,
+      target,
+      program,
+      expectation,
+      path,
+      points,
+      unsupported,
+      maxFindings,
+      options.signal,
+    );
     result.paths.push(pathResult);
     done += Array.isArray(points) ? points.length : 0;
     options.onProgress?.(done, total);
@@ -162,7 +211,9 @@ export async function evaluateSuite(suite: Suite, target: Target, options: Evalu
 
 function countDiagnoses(paths: PathResult[]): Partial<Record<DiagnosisKind, number>> {
   const out: Partial<Record<DiagnosisKind, number>> = {};
-  for (const p of paths) for (const [kind, n] of Object.entries(p.byDiagnosis)) out[kind as DiagnosisKind] = (out[kind as DiagnosisKind] ?? 0) + (n ?? 0);
+  for (const p of paths)
+    for (const [kind, n] of Object.entries(p.byDiagnosis))
+      out[kind as DiagnosisKind] = (out[kind as DiagnosisKind] ?? 0) + (n ?? 0);
   return out;
 }
 
@@ -264,11 +315,21 @@ async function evaluatePath(
     const ai = aim[i] as number;
     const er = ere[i] as number;
     const ei = eim[i] as number;
-    if (ar === er && ai === ei && (!zeroSigns || ((ar !== 0 || Object.is(ar, er)) && (ai !== 0 || Object.is(ai, ei))))) {
+    if (
+      ar === er &&
+      ai === ei &&
+      (!zeroSigns || ((ar !== 0 || Object.is(ar, er)) && (ai !== 0 || Object.is(ai, ei))))
+    ) {
       out.counts.pass++;
       continue;
     }
-    if (ar - ar === 0 && ai - ai === 0 && er - er === 0 && ei - ei === 0 && !(zeroSigns && ((ar === 0 && er === 0 && !Object.is(ar, er)) || (ai === 0 && ei === 0 && !Object.is(ai, ei))))) {
+    if (
+      ar - ar === 0 &&
+      ai - ai === 0 &&
+      er - er === 0 &&
+      ei - ei === 0 &&
+      !(zeroSigns && ((ar === 0 && er === 0 && !Object.is(ar, er)) || (ai === 0 && ei === 0 && !Object.is(ai, ei))))
+    ) {
       // Finite, zero signs right: ulps without BigInt, and the outcome of a failure without checkValue.
       const u = Math.max(ulpsApart(ar, er), ulpsApart(ai, ei));
       const rel = tolUlps >= 0 && u <= tolUlps ? 0 : relativeError([ar, ai], [er, ei]);
@@ -277,7 +338,12 @@ async function evaluatePath(
         continue;
       }
       failing.push(i);
-      outcomes[i] = { kind: 'fail', diagnosis: { kind: 'unexplained', relativeError: rel }, ulps: u, relativeError: rel };
+      outcomes[i] = {
+        kind: 'fail',
+        diagnosis: { kind: 'unexplained', relativeError: rel },
+        ulps: u,
+        relativeError: rel,
+      };
       continue;
     }
     const check = checkValue([ar, ai], [er, ei], tol, zeroSigns);
@@ -286,7 +352,12 @@ async function evaluatePath(
       continue;
     }
     failing.push(i);
-    outcomes[i] = { kind: 'fail', diagnosis: { kind: 'unexplained', relativeError: check.relativeError }, ulps: check.ulps, relativeError: check.relativeError };
+    outcomes[i] = {
+      kind: 'fail',
+      diagnosis: { kind: 'unexplained', relativeError: check.relativeError },
+      ulps: check.ulps,
+      relativeError: check.relativeError,
+    };
   }
   out.counts.fail = failing.length;
 
@@ -301,7 +372,16 @@ async function evaluatePath(
     // Merely inaccurate: within 1e-9 of the expected value, finite, zero signs right, at an input
     // with no zero part and off a straddle. Every alternative (other sheet, other side, flipped
     // zero) is then far further away, so none is computed; the listed findings still get theirs.
-    if (!straddle && o.relativeError <= MERELY_INACCURATE && re[i] !== 0 && im[i] !== 0 && are[i] !== 0 && aim[i] !== 0 && ere[i] !== 0 && eim[i] !== 0) {
+    if (
+      !straddle &&
+      o.relativeError <= MERELY_INACCURATE &&
+      re[i] !== 0 &&
+      im[i] !== 0 &&
+      are[i] !== 0 &&
+      aim[i] !== 0 &&
+      ere[i] !== 0 &&
+      eim[i] !== 0
+    ) {
       diagnoses[i] = { kind: 'inaccurate', ulps: o.ulps, relativeError: o.relativeError, ...worstPart(act, exp) };
       continue;
     }
@@ -312,9 +392,25 @@ async function evaluatePath(
       alt = { rule: `(alternatives unavailable: ${errorText(e)})` };
     }
     alternatives.set(i, alt);
-    const check = { pass: false, ulps: o.ulps, relativeError: o.relativeError, zeroSignDiffers: [] as ('re' | 'im')[], finitenessDiffers: false };
-    const full = act.every(Number.isFinite) && exp.every(Number.isFinite) && !act.some((x) => x === 0) ? check : checkValue(act, exp, tol, zeroSigns);
-    diagnoses[i] = diagnoseFailure({ actual: act, expected: exp, check: full, flippedZero: alt.flippedZero, otherSide: alt.otherSide, otherSheets: alt.otherSheets });
+    const check = {
+      pass: false,
+      ulps: o.ulps,
+      relativeError: o.relativeError,
+      zeroSignDiffers: [] as ('re' | 'im')[],
+      finitenessDiffers: false,
+    };
+    const full =
+      act.every(Number.isFinite) && exp.every(Number.isFinite) && !act.some((x) => x === 0)
+        ? check
+        : checkValue(act, exp, tol, zeroSigns);
+    diagnoses[i] = diagnoseFailure({
+      actual: act,
+      expected: exp,
+      check: full,
+      flippedZero: alt.flippedZero,
+      otherSide: alt.otherSide,
+      otherSheets: alt.otherSheets,
+    });
   }
 
   // Along a continuous path, compare where the values jump.
@@ -328,7 +424,8 @@ async function evaluatePath(
       return [cr, ci] as const;
     };
     const [xr, xi] = hasSkips ? column(ere, eim, (i) => expected.skipped.has(i)) : [ere, eim];
-    const [yr, yi] = hasSkips || hasErrors ? column(are, aim, (i) => actual.errors.has(i) || expected.skipped.has(i)) : [are, aim];
+    const [yr, yi] =
+      hasSkips || hasErrors ? column(are, aim, (i) => actual.errors.has(i) || expected.skipped.has(i)) : [are, aim];
     const ej = detectJumpsInColumns(xr, xi);
     const aj = detectJumpsInColumns(yr, yi);
     const mid = (i: number) => ((t[i] as number) + (t[i + 1] as number)) / 2;
@@ -345,9 +442,22 @@ async function evaluatePath(
     try {
       const mono = expectation.monodromy(path);
       const actPairs = mono ? points.map((_, i): ComplexDouble => [yr[i] as number, yi[i] as number]) : [];
-      if (mono) out.monodromy = monodromyCheck(t, actPairs, actual.errors, mono, suite.tolerances.monodromy ?? DEFAULT_MONODROMY);
+      if (mono)
+        out.monodromy = monodromyCheck(
+          t,
+          actPairs,
+          actual.errors,
+          mono,
+          suite.tolerances.monodromy ?? DEFAULT_MONODROMY,
+        );
     } catch (e) {
-      out.monodromy = { expected: { re: 'nan', im: 'nan' }, library: null, relativeError: null, pass: false, note: errorText(e) };
+      out.monodromy = {
+        expected: { re: 'nan', im: 'nan' },
+        library: null,
+        relativeError: null,
+        pass: false,
+        note: errorText(e),
+      };
     }
   }
 
@@ -382,7 +492,8 @@ async function evaluatePath(
       rule: alt?.rule ?? '',
       reproducer: reproducer(program, target, z, suite.subject),
     };
-    if (alt?.limits) finding.limits = { sides: alt.limits.sides, values: [wire(alt.limits.values[0]), wire(alt.limits.values[1])] };
+    if (alt?.limits)
+      finding.limits = { sides: alt.limits.sides, values: [wire(alt.limits.values[0]), wire(alt.limits.values[1])] };
     if (!alt) {
       try {
         finding.rule = expectation.alternatives(path, points, i, [ere[i] as number, eim[i] as number]).rule;
@@ -409,8 +520,10 @@ function monodromyCheck(
     values.map((v, i) => (errors.has(i) ? null : v)),
     mono.nu,
   );
-  if ('note' in lib) return { expected: wire(mono.factor), library: null, relativeError: null, pass: false, note: lib.note };
+  if ('note' in lib)
+    return { expected: wire(mono.factor), library: null, relativeError: null, pass: false, note: lib.note };
   const err = relativeError(lib.factor, mono.factor);
-  const pass = 'relative' in tolerance ? err <= tolerance.relative : checkValue(lib.factor, mono.factor, tolerance, false).pass;
+  const pass =
+    'relative' in tolerance ? err <= tolerance.relative : checkValue(lib.factor, mono.factor, tolerance, false).pass;
   return { expected: wire(mono.factor), library: wire(lib.factor), relativeError: err, pass };
 }

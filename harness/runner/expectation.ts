@@ -31,7 +31,12 @@ export interface Expectation {
   /** Describes the expectation in one line ("principal, signed-zero" or the regular branch). */
   readonly description: string;
   expected(path: SuitePath, points: readonly PathPoint[]): ExpectedColumn;
-  alternatives(path: SuitePath, points: readonly PathPoint[], index: number, expected: ComplexDouble): PointAlternatives;
+  alternatives(
+    path: SuitePath,
+    points: readonly PathPoint[],
+    index: number,
+    expected: ComplexDouble,
+  ): PointAlternatives;
   /** The monodromy factor the branch has along a closed path, and ν to read a library's jumps; null when it does not apply. */
   monodromy(path: SuitePath): { factor: ComplexDouble; nu: [number, number] } | null;
 }

@@ -10,7 +10,9 @@ export type SuiteLoad = { ok: true; suites: Suite[] } | { ok: false; issues: Sui
 /** Every .json file under a folder, sorted, recursively. */
 function jsonFiles(dir: string): string[] {
   return readdirSync(dir, { withFileTypes: true })
-    .flatMap((e) => (e.isDirectory() ? jsonFiles(path.join(dir, e.name)) : e.name.endsWith('.json') ? [path.join(dir, e.name)] : []))
+    .flatMap((e) =>
+      e.isDirectory() ? jsonFiles(path.join(dir, e.name)) : e.name.endsWith('.json') ? [path.join(dir, e.name)] : [],
+    )
     .sort();
 }
 
@@ -46,7 +48,11 @@ export function loadSuites(names: string[], suitesDir: string): SuiteLoad {
     try {
       data = JSON.parse(readFileSync(file, 'utf8'));
     } catch (e) {
-      issues.push({ suite: name, field: '(file)', rule: `is not readable JSON: ${e instanceof Error ? e.message : String(e)}` });
+      issues.push({
+        suite: name,
+        field: '(file)',
+        rule: `is not readable JSON: ${e instanceof Error ? e.message : String(e)}`,
+      });
       return;
     }
     const checked = validateSuite(data, name);
@@ -71,7 +77,12 @@ export function loadSuites(names: string[], suitesDir: string): SuiteLoad {
     } else {
       const file = byId(name);
       if (file) loadFile(file);
-      else issues.push({ suite: name, field: '(suite)', rule: `is neither a file nor the id of a suite under ${path.relative(process.cwd(), suitesDir) || suitesDir}` });
+      else
+        issues.push({
+          suite: name,
+          field: '(suite)',
+          rule: `is neither a file nor the id of a suite under ${path.relative(process.cwd(), suitesDir) || suitesDir}`,
+        });
     }
   }
   const seen = new Set<string>();

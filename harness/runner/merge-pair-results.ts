@@ -7,7 +7,11 @@ import type { OutcomeCounts, PathResult, SuiteTargetResult } from '../../shared/
  * order, counts, diagnoses, errors and reference figures summed, and the status decided again
  * (error before fail before pass; cancelled when any shard was).
  */
-export function mergePairResults(parts: { paths: number[]; result: SuiteTargetResult }[], totalPaths: number, totalPoints: number): SuiteTargetResult {
+export function mergePairResults(
+  parts: { paths: number[]; result: SuiteTargetResult }[],
+  totalPaths: number,
+  totalPoints: number,
+): SuiteTargetResult {
   const sorted = [...parts].sort((a, b) => (a.paths[0] ?? 0) - (b.paths[0] ?? 0));
   const first = sorted[0]?.result as SuiteTargetResult;
   const merged: SuiteTargetResult = {
@@ -24,7 +28,8 @@ export function mergePairResults(parts: { paths: number[]; result: SuiteTargetRe
   for (const { result } of sorted) {
     merged.paths.push(...result.paths);
     for (const k of Object.keys(merged.counts) as (keyof OutcomeCounts)[]) merged.counts[k] += result.counts[k];
-    for (const [kind, n] of Object.entries(result.byDiagnosis)) merged.byDiagnosis[kind as DiagnosisKind] = (merged.byDiagnosis[kind as DiagnosisKind] ?? 0) + (n ?? 0);
+    for (const [kind, n] of Object.entries(result.byDiagnosis))
+      merged.byDiagnosis[kind as DiagnosisKind] = (merged.byDiagnosis[kind as DiagnosisKind] ?? 0) + (n ?? 0);
     merged.errors.push(...result.errors);
     merged.durationMs += result.durationMs;
     merged.reference.computed += result.reference.computed;

@@ -36,7 +36,8 @@ const up4 = (x: number): number => nextDouble(nextDouble(nextDouble(nextDouble(x
 
 /** A target that is `base` with one planted fault; its name says which. */
 export function mutantTarget(base: Target, mutation: Mutation): Target {
-  const mapValues = (results: CallResult[], f: (v: ComplexPair) => ComplexPair): CallResult[] => results.map((r) => ('value' in r ? { value: f(r.value) } : r));
+  const mapValues = (results: CallResult[], f: (v: ComplexPair) => ComplexPair): CallResult[] =>
+    results.map((r) => ('value' in r ? { value: f(r.value) } : r));
   return {
     name: `${base.name}+${mutation}`,
     library: base.library,
@@ -59,7 +60,10 @@ export function mutantTarget(base: Target, mutation: Mutation): Target {
         case 'conjugate':
           return mapValues(await base.evaluate(op, calls), ([re, im]) => [re, -im]);
         case 'rotate':
-          return mapValues(await base.evaluate(op, calls), ([re, im]) => [re * ROTATION[0] - im * ROTATION[1], re * ROTATION[1] + im * ROTATION[0]]);
+          return mapValues(await base.evaluate(op, calls), ([re, im]) => [
+            re * ROTATION[0] - im * ROTATION[1],
+            re * ROTATION[1] + im * ROTATION[0],
+          ]);
         case 'add-4-ulps':
           return mapValues(await base.evaluate(op, calls), ([re, im]) => [up4(re), up4(im)]);
         case 'swap-cut-side': {

@@ -8,8 +8,14 @@ export const NOTHING_CHECKED = 'nothing was checked: every point was skipped (se
  * the function, say) is an error, not a pass: a green result with nothing checked would mislead.
  * Adds the NOTHING_CHECKED note to `errors` when that is why.
  */
-export function pairStatus(counts: OutcomeCounts, errors: string[], monodromyFailed: boolean, cancelled: boolean): PairStatus {
-  if (counts.pass + counts.fail + counts.error === 0 && counts.skipped > 0 && !errors.includes(NOTHING_CHECKED)) errors.push(NOTHING_CHECKED);
+export function pairStatus(
+  counts: OutcomeCounts,
+  errors: string[],
+  monodromyFailed: boolean,
+  cancelled: boolean,
+): PairStatus {
+  if (counts.pass + counts.fail + counts.error === 0 && counts.skipped > 0 && !errors.includes(NOTHING_CHECKED))
+    errors.push(NOTHING_CHECKED);
   if (cancelled) return 'cancelled';
   if (counts.error > 0 || errors.length > 0) return 'error';
   return counts.fail > 0 || monodromyFailed ? 'fail' : 'pass';

@@ -40,7 +40,8 @@ export class PointTable {
       if (!this.used[i]) return ~i;
       const k = i * KEY;
       const keys = this.keys;
-      if (keys[k] === kind && keys[k + 1] === a && keys[k + 2] === b && keys[k + 3] === c && keys[k + 4] === d) return i;
+      if (keys[k] === kind && keys[k + 1] === a && keys[k + 2] === b && keys[k + 3] === c && keys[k + 4] === d)
+        return i;
     }
   }
 
@@ -89,7 +90,13 @@ export class PointTable {
       w[1] = keys[k + 2] as number;
       w[2] = keys[k + 3] as number;
       w[3] = keys[k + 4] as number;
-      this.set(keys[k] as number, bits[0] as number, bits[1] as number, values[2 * i] as number, values[2 * i + 1] as number);
+      this.set(
+        keys[k] as number,
+        bits[0] as number,
+        bits[1] as number,
+        values[2 * i] as number,
+        values[2 * i + 1] as number,
+      );
     }
   }
 }

@@ -42,7 +42,8 @@ function computeFor(expr: SubjectExpr): Compute {
   }
   if (expr.kind === 'nthroot' && onZ(expr.arg)) {
     const n = expr.n;
-    return (re, im, convention) => principalValue({ fn: 'nthroot', z: fromDoubles(re, im), n, convention }, needs).double;
+    return (re, im, convention) =>
+      principalValue({ fn: 'nthroot', z: fromDoubles(re, im), n, convention }, needs).double;
   }
   if (expr.kind === 'power' && onZ(expr.base)) {
     const w = { kind: 'rational' as const, value: expr.exponent };
@@ -51,7 +52,8 @@ function computeFor(expr: SubjectExpr): Compute {
   if (expr.kind === 'complexPower' && onZ(expr.base) && expr.exponent.kind === 'const') {
     const c = expr.exponent;
     const value = BigComplex.fromDoubles(parseDouble(c.re.toString()), parseDouble(c.im.toString()));
-    return (re, im, convention) => principalValue({ fn: 'pow', z: fromDoubles(re, im), w: { kind: 'complex', value }, convention }, needs).double;
+    return (re, im, convention) =>
+      principalValue({ fn: 'pow', z: fromDoubles(re, im), w: { kind: 'complex', value }, convention }, needs).double;
   }
   return (re, im, convention) => evaluateSubject(expr, fromDoubles(re, im), convention, needs).double;
 }
@@ -82,19 +84,29 @@ function outerFunction(expr: SubjectExpr): string | null {
  * signed-zero reference at +0 and at −0); on a straddle path the value at the mirror point
  * across the cut; and the other sheets of the outermost function.
  */
-export function principalExpectation(suite: Suite, expr: SubjectExpr, cache: ReferenceCache, cacheKey: string): Expectation {
+export function principalExpectation(
+  suite: Suite,
+  expr: SubjectExpr,
+  cache: ReferenceCache,
+  cacheKey: string,
+): Expectation {
   const compute = computeFor(expr);
   const family = subjectSheetFamily(expr);
   const outer = outerFunction(expr);
   const simple =
-    expr.kind === 'call' || expr.kind === 'nthroot' ? expr.arg.kind === 'z' : expr.kind === 'power' || expr.kind === 'complexPower' ? expr.base.kind === 'z' : false;
+    expr.kind === 'call' || expr.kind === 'nthroot'
+      ? expr.arg.kind === 'z'
+      : expr.kind === 'power' || expr.kind === 'complexPower'
+        ? expr.base.kind === 'z'
+        : false;
   const refusals = new Map<string, string>();
   const out = [0, 0];
 
   const value = (re: number, im: number, convention: Convention): ComplexDouble => {
     const kind = convention === suite.convention ? KIND_SUITE : KIND_SIGNED_ZERO;
     if (cache.get(cacheKey, kind, re, im, out)) return [out[0] as number, out[1] as number];
-    if (cache.get(cacheKey, KIND_REFUSED + kind, re, im, out)) throw new Error(refusals.get(`${re},${im}`) ?? 'the reference engine has no value here');
+    if (cache.get(cacheKey, KIND_REFUSED + kind, re, im, out))
+      throw new Error(refusals.get(`${re},${im}`) ?? 'the reference engine has no value here');
     try {
       const v = compute(re, im, convention);
       cache.put(cacheKey, kind, re, im, v[0], v[1]);
@@ -109,9 +121,13 @@ export function principalExpectation(suite: Suite, expr: SubjectExpr, cache: Ref
 
   const rule = (p: PathPoint, onCut: boolean): string => {
     const r = outer ? FUNCTION_RULES[outer] : undefined;
-    const whole = simple ? '' : `; the subject ${suite.subject} with every function on its principal branch, + − × exact and ÷ rounded, rounded once`;
-    if (![p.z.re, p.z.im].every(Number.isFinite)) return `${r?.annexG ?? CUT_CONVENTION_RULE['signed-zero']} (special values)${whole}`;
-    if (onCut) return `${suite.convention === 'signed-zero' ? (r?.annexG ?? CUT_CONVENTION_RULE['signed-zero']) : (r?.counterClockwise ?? CUT_CONVENTION_RULE['counter-clockwise'])}${whole}`;
+    const whole = simple
+      ? ''
+      : `; the subject ${suite.subject} with every function on its principal branch, + − × exact and ÷ rounded, rounded once`;
+    if (![p.z.re, p.z.im].every(Number.isFinite))
+      return `${r?.annexG ?? CUT_CONVENTION_RULE['signed-zero']} (special values)${whole}`;
+    if (onCut)
+      return `${suite.convention === 'signed-zero' ? (r?.annexG ?? CUT_CONVENTION_RULE['signed-zero']) : (r?.counterClockwise ?? CUT_CONVENTION_RULE['counter-clockwise'])}${whole}`;
     return `${r?.definition ?? 'principal branch of every function in the subject'}${whole}`;
   };
 
@@ -135,7 +151,12 @@ export function principalExpectation(suite: Suite, expr: SubjectExpr, cache: Ref
       }
       return col;
     },
-    alternatives(path: SuitePath, points: readonly PathPoint[], index: number, expected: ComplexDouble): PointAlternatives {
+    alternatives(
+      path: SuitePath,
+      points: readonly PathPoint[],
+      index: number,
+      expected: ComplexDouble,
+    ): PointAlternatives {
       const p = points[index] as PathPoint;
       const { re, im } = p.z;
       const alt: PointAlternatives = { rule: '' };
@@ -160,7 +181,12 @@ export function principalExpectation(suite: Suite, expr: SubjectExpr, cache: Ref
         const minus = imZero ? tryValue(re, -0, 'signed-zero') : tryValue(-0, im, 'signed-zero');
         if (plus && minus && relativeError(plus, minus) > 1e-9) {
           onCut = true;
-          alt.limits = { sides: imZero ? ['from above (Im z = +0)', 'from below (Im z = −0)'] : ['from the right (Re z = +0)', 'from the left (Re z = −0)'], values: [plus, minus] };
+          alt.limits = {
+            sides: imZero
+              ? ['from above (Im z = +0)', 'from below (Im z = −0)']
+              : ['from the right (Re z = +0)', 'from the left (Re z = −0)'],
+            values: [plus, minus],
+          };
           alt.otherSide = relativeError(plus, expected) >= relativeError(minus, expected) ? plus : minus;
         }
       }

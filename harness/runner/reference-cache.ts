@@ -79,8 +79,20 @@ export class ReferenceCache {
       let list = this.pending.get(key);
       if (!list) this.pending.set(key, (list = []));
       for (let i = 0; i + 4 < records.length; i += 5) {
-        t.set(records[i] as number, records[i + 1] as number, records[i + 2] as number, records[i + 3] as number, records[i + 4] as number);
-        list.push(records[i] as number, records[i + 1] as number, records[i + 2] as number, records[i + 3] as number, records[i + 4] as number);
+        t.set(
+          records[i] as number,
+          records[i + 1] as number,
+          records[i + 2] as number,
+          records[i + 3] as number,
+          records[i + 4] as number,
+        );
+        list.push(
+          records[i] as number,
+          records[i + 1] as number,
+          records[i + 2] as number,
+          records[i + 3] as number,
+          records[i + 4] as number,
+        );
       }
     }
   }
@@ -136,6 +148,12 @@ function readInto(buf: Buffer, table: PointTable): void {
   const count = Math.floor((buf.length - HEADER_BYTES) / RECORD_BYTES);
   for (let r = 0; r < count; r++) {
     const o = HEADER_BYTES + r * RECORD_BYTES;
-    table.set(buf.readUInt32LE(o), buf.readDoubleLE(o + 8), buf.readDoubleLE(o + 16), buf.readDoubleLE(o + 24), buf.readDoubleLE(o + 32));
+    table.set(
+      buf.readUInt32LE(o),
+      buf.readDoubleLE(o + 8),
+      buf.readDoubleLE(o + 16),
+      buf.readDoubleLE(o + 24),
+      buf.readDoubleLE(o + 32),
+    );
   }
 }

@@ -85,7 +85,13 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
     : { kind: 'complexPower', base: gExpr, exponent: { kind: 'const', re: nuRe, im: nuIm } };
   const singular = FactoredFunction.fromSubject(gExpr).singularities();
   const geometry = new CutGeometry(branch);
-  const request = { g: branch.g, nu: branch.nu, z0: branch.z0, ...(branch.f0 ? { f0: branch.f0 } : { k: branch.k }), cuts: branch.cuts };
+  const request = {
+    g: branch.g,
+    nu: branch.nu,
+    z0: branch.z0,
+    ...(branch.f0 ? { f0: branch.f0 } : { k: branch.k }),
+    cuts: branch.cuts,
+  };
   const z0: Point = [parseDouble(branch.z0.re), parseDouble(branch.z0.im)];
 
   // One Ziv round (64 and 112 bits agreeing, ~2^−60 relative): asking for digits would escalate
@@ -95,7 +101,8 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
   // √(x² − 1) is purely imaginary) must not round to a tiny non-zero double.
   const principalPow = (z: BigComplex): BigComplex => {
     const a = evaluateSubject(gPow, z, 'signed-zero', { double: false, digits: 0 }).approximation;
-    const settle = (x: BigFloat, err: number) => (x.isFinite() && !x.isZero() && err > -Infinity && x.exponent() <= err ? BigFloat.ZERO : x);
+    const settle = (x: BigFloat, err: number) =>
+      x.isFinite() && !x.isZero() && err > -Infinity && x.exponent() <= err ? BigFloat.ZERO : x;
     return new BigComplex(settle(a.re, a.reErr), settle(a.im, a.imErr));
   };
   // C = f0 / P(z0), exactly enough; 1 when the branch is named by k (the continuation then carries the k).
@@ -142,7 +149,9 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
       const x = (Math.atan2(rho[1], rho[0]) * Number(b)) / (2 * Math.PI);
       const m = Math.round(x);
       if (Math.abs(x - m) > 0.2 || Math.abs(Math.hypot(...rho) - 1) > 1e-3) {
-        throw new Error(`the continued value at ${where} is no value of (${branch.g})^(${nuWire.re}) (ratio ${rho[0]} + ${rho[1]}i)`);
+        throw new Error(
+          `the continued value at ${where} is no value of (${branch.g})^(${nuWire.re}) (ratio ${rho[0]} + ${rho[1]}i)`,
+        );
       }
       const inv = modInverse(((a % b) + b) % b, b);
       let k = Number((((BigInt(m) * inv) % b) + b) % b);
@@ -150,8 +159,12 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
       return k;
     }
     const k = Math.round(-Math.log(Math.hypot(...rho)) / (2 * Math.PI * nuD[1]));
-    const f: Point = [Math.exp(-2 * Math.PI * nuD[1] * k) * Math.cos(2 * Math.PI * nuD[0] * k), Math.exp(-2 * Math.PI * nuD[1] * k) * Math.sin(2 * Math.PI * nuD[0] * k)];
-    if (Math.hypot(f[0] - rho[0], f[1] - rho[1]) > 1e-3 * Math.hypot(...f)) throw new Error(`the continued value at ${where} is no value of the branch (ratio ${rho[0]} + ${rho[1]}i)`);
+    const f: Point = [
+      Math.exp(-2 * Math.PI * nuD[1] * k) * Math.cos(2 * Math.PI * nuD[0] * k),
+      Math.exp(-2 * Math.PI * nuD[1] * k) * Math.sin(2 * Math.PI * nuD[0] * k),
+    ];
+    if (Math.hypot(f[0] - rho[0], f[1] - rho[1]) > 1e-3 * Math.hypot(...f))
+      throw new Error(`the continued value at ${where} is no value of the branch (ratio ${rho[0]} + ${rho[1]}i)`);
     return k;
   };
 
@@ -165,10 +178,15 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
     const mid: Point = [(q[0] + z0[0]) / 2, (q[1] + z0[1]) / 2];
     const normal: Point = span > 0 ? [-(q[1] - z0[1]) / span, (q[0] - z0[0]) / span] : [0, 1];
     const routes: Point[][] = [[]];
-    for (const s of [0.3, -0.3, 0.7, -0.7, 1.3]) routes.push([[mid[0] + s * span * normal[0], mid[1] + s * span * normal[1]]]);
+    for (const s of [0.3, -0.3, 0.7, -0.7, 1.3])
+      routes.push([[mid[0] + s * span * normal[0], mid[1] + s * span * normal[1]]]);
     let lastError = '';
     for (const via of routes) {
-      const answer = answerContinue({ ...request, path: { kind: 'polyline', points: [branch.z0, ...via.map(wireOf), wireOf(q)] }, at: ['1'] }) as {
+      const answer = answerContinue({
+        ...request,
+        path: { kind: 'polyline', points: [branch.z0, ...via.map(wireOf), wireOf(q)] },
+        at: ['1'],
+      }) as {
         values?: { f: Wire }[];
         error?: string;
       };
@@ -201,9 +219,13 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
                 turns: Number(parseDouble(path.turns)),
                 direction: path.direction,
               }
-            : { kind: 'polyline', points: path.kind === 'segment' ? [path.from, path.to] : (path as { points: Wire[] }).points };
+            : {
+                kind: 'polyline',
+                points: path.kind === 'segment' ? [path.from, path.to] : (path as { points: Wire[] }).points,
+              };
         const answer = answerContinue({ ...request, path: spec, at: ats }) as { values?: { f: Wire }[] };
-        if (answer.values && answer.values.length === points.length) result = answer.values.map((v) => [Number(v.f.re), Number(v.f.im)]);
+        if (answer.values && answer.values.length === points.length)
+          result = answer.values.map((v) => [Number(v.f.re), Number(v.f.im)]);
       }
     } catch {
       result = null;
@@ -226,15 +248,26 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
     const { a, d } = prox.edge;
     if (suite.convention === 'signed-zero' && d[1] === 0 && a[1] === 0) {
       const up = Object.is(p[1], -0) ? -1 : 1;
-      return { side: (up * Math.sign(d[0])) as 1 | -1, why: `the sign of the zero imaginary part picks the side (signed-zero; ${CUT_CONVENTION_RULE['signed-zero']})` };
+      return {
+        side: (up * Math.sign(d[0])) as 1 | -1,
+        why: `the sign of the zero imaginary part picks the side (signed-zero; ${CUT_CONVENTION_RULE['signed-zero']})`,
+      };
     }
     if (suite.convention === 'signed-zero' && d[0] === 0 && a[0] === 0) {
       const right = Object.is(p[0], -0) ? -1 : 1;
-      return { side: (-right * Math.sign(d[1])) as 1 | -1, why: `the sign of the zero real part picks the side (signed-zero; ${CUT_CONVENTION_RULE['signed-zero']})` };
+      return {
+        side: (-right * Math.sign(d[1])) as 1 | -1,
+        why: `the sign of the zero real part picks the side (signed-zero; ${CUT_CONVENTION_RULE['signed-zero']})`,
+      };
     }
     const reason =
-      suite.convention === 'signed-zero' ? 'no zero part can pick the side of a cut off the axes, so' : 'counter-clockwise continuity (Kahan 1987; ISO/IEC 9899:2011 7.3.3):';
-    return { side: -1, why: `${reason} the cut belongs to the side reached turning counter-clockwise about its first point (the right-hand side walking from it)` };
+      suite.convention === 'signed-zero'
+        ? 'no zero part can pick the side of a cut off the axes, so'
+        : 'counter-clockwise continuity (Kahan 1987; ISO/IEC 9899:2011 7.3.3):';
+    return {
+      side: -1,
+      why: `${reason} the cut belongs to the side reached turning counter-clockwise about its first point (the right-hand side walking from it)`,
+    };
   };
 
   /** Which point the continuation aims at for p, on the side wanted (`flip`: the other side of the nearest cut). */
@@ -252,7 +285,8 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
   /** The value at p (kind 0) or continued from the other side of its nearest cut (kind 2); `along` is the path continuation's value there. */
   const valueAt = (p: Point, kind: number, along: Point | null): Point => {
     if (cache.get(cacheKey, kind, p[0], p[1], out)) return [out[0] as number, out[1] as number];
-    if (cache.get(cacheKey, KIND_REFUSED + kind, p[0], p[1], out)) throw new Error(refusals.get(`${kind}:${p[0]},${p[1]}`) ?? 'the branch has no value here (cached)');
+    if (cache.get(cacheKey, KIND_REFUSED + kind, p[0], p[1], out))
+      throw new Error(refusals.get(`${kind}:${p[0]},${p[1]}`) ?? 'the branch has no value here (cached)');
     try {
       if (![p[0], p[1]].every(Number.isFinite)) throw new Error('the branch is checked at finite points only');
       const at = singularAt(p);
@@ -276,7 +310,11 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
   };
 
   const describeBranch = `the regular branch of (${branch.g})^(${nuWire.im === '0' ? nuWire.re : `${nuWire.re} + ${nuWire.im}i`}) with ${branch.f0 ? `f0 = ${branch.f0.re} + ${branch.f0.im}i` : `k = ${branch.k}`} at z0 = ${branch.z0.re} + ${branch.z0.im}i`;
-  const sheetKs = nuIm.isZero() ? (nuRe.den <= 64n ? rootSheets(Number(nuRe.den)) : [-3, -2, -1, 1, 2, 3]) : [-3, -2, -1, 1, 2, 3];
+  const sheetKs = nuIm.isZero()
+    ? nuRe.den <= 64n
+      ? rootSheets(Number(nuRe.den))
+      : [-3, -2, -1, 1, 2, 3]
+    : [-3, -2, -1, 1, 2, 3];
 
   return {
     zeroSigns: false,
@@ -303,10 +341,17 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
       }
       return col;
     },
-    alternatives(_path: SuitePath, points: readonly PathPoint[], index: number, expected: ComplexDouble): PointAlternatives {
+    alternatives(
+      _path: SuitePath,
+      points: readonly PathPoint[],
+      index: number,
+      expected: ComplexDouble,
+    ): PointAlternatives {
       const pp = points[index] as PathPoint;
       const p: Point = [pp.z.re, pp.z.im];
-      const alt: PointAlternatives = { rule: `${describeBranch}, continued from z0 to z on the plane cut along the layout (DESIGN.md §4)` };
+      const alt: PointAlternatives = {
+        rule: `${describeBranch}, continued from z0 to z on the plane cut along the layout (DESIGN.md §4)`,
+      };
       const tryValue = (x: Point, kind: number): Point | null => {
         try {
           return valueAt(x, kind, null);
@@ -327,9 +372,21 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
         if (prox.side === 0 && other) {
           const { side, why } = sideOnCut(prox, p);
           const [dx, dy] = prox.edge.d;
-          const [left, right] = dy === 0 ? (dx > 0 ? ['above', 'below'] : ['below', 'above']) : dx === 0 ? (dy > 0 ? ['the left', 'the right'] : ['the right', 'the left']) : ['the left (walking from its first point)', 'the right'];
+          const [left, right] =
+            dy === 0
+              ? dx > 0
+                ? ['above', 'below']
+                : ['below', 'above']
+              : dx === 0
+                ? dy > 0
+                  ? ['the left', 'the right']
+                  : ['the right', 'the left']
+                : ['the left (walking from its first point)', 'the right'];
           const values: [ComplexDouble, ComplexDouble] = side === 1 ? [expected, other] : [other, expected];
-          alt.limits = { sides: [`from ${left} of cut ${prox.edge.cut}`, `from ${right} of cut ${prox.edge.cut}`], values };
+          alt.limits = {
+            sides: [`from ${left} of cut ${prox.edge.cut}`, `from ${right} of cut ${prox.edge.cut}`],
+            values,
+          };
           alt.rule += `; z lies on cut ${prox.edge.cut}: ${why}`;
         } else if (prox.side !== 0) {
           alt.rule += `; z lies ${prox.distance} from cut ${prox.edge.cut}, on its ${prox.side === 1 ? 'left' : 'right'}-hand side walking from its first point`;
@@ -343,18 +400,33 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
       if (path.kind === 'circle') {
         const turns = parseDouble(path.turns);
         if (Number.isInteger(turns) && turns > 0 && turns <= 64) {
-          spec = { kind: 'circle', center: path.center, radius: path.radius, start_angle: String(parseTurns(path.start_angle) * 2 * Math.PI), turns, direction: path.direction };
+          spec = {
+            kind: 'circle',
+            center: path.center,
+            radius: path.radius,
+            start_angle: String(parseTurns(path.start_angle) * 2 * Math.PI),
+            turns,
+            direction: path.direction,
+          };
         }
       } else if (path.kind === 'polyline') {
         const first = path.points[0] as Wire;
         const last = path.points[path.points.length - 1] as Wire;
-        if (parseDouble(first.re) === parseDouble(last.re) && parseDouble(first.im) === parseDouble(last.im)) spec = { kind: 'polyline', points: path.points };
+        if (parseDouble(first.re) === parseDouble(last.re) && parseDouble(first.im) === parseDouble(last.im))
+          spec = { kind: 'polyline', points: path.points };
       }
       if (!spec) return null;
       // The loop's monodromy does not depend on where the branch was fixed, so the continuation
       // starts on the loop itself: a lead-in from z0 could pass through a zero or pole.
       const start = buildPath(toPathSpec(path))[0] as PathPoint;
-      const answer = answerContinue({ g: branch.g, nu: branch.nu, z0: wireOf([start.z.re, start.z.im]), k: 0, path: spec, at: ['1'] }) as {
+      const answer = answerContinue({
+        g: branch.g,
+        nu: branch.nu,
+        z0: wireOf([start.z.re, start.z.im]),
+        k: 0,
+        path: spec,
+        at: ['1'],
+      }) as {
         monodromy?: Wire | null;
         error?: string;
       };

@@ -4,10 +4,26 @@ import { formatHexDouble } from '../checks/format-hex-double';
 import type { SubjectProgram } from './subject-program';
 
 /** A double as a JavaScript literal that reads back to exactly the same double ("-0" kept). */
-const jsNumber = (x: number): string => (Number.isNaN(x) ? 'NaN' : x === Infinity ? 'Infinity' : x === -Infinity ? '-Infinity' : Object.is(x, -0) ? '-0' : String(x));
+const jsNumber = (x: number): string =>
+  Number.isNaN(x)
+    ? 'NaN'
+    : x === Infinity
+      ? 'Infinity'
+      : x === -Infinity
+        ? '-Infinity'
+        : Object.is(x, -0)
+          ? '-0'
+          : String(x);
 const pyNumber = (x: number): string => `float.fromhex('${formatHexDouble(x)}')`;
 
-const MATHJS_FUNCTION: Readonly<Record<string, string>> = { nthroot: 'nthRoot', add: 'add', sub: 'subtract', mul: 'multiply', div: 'divide', neg: 'unaryMinus' };
+const MATHJS_FUNCTION: Readonly<Record<string, string>> = {
+  nthroot: 'nthRoot',
+  add: 'add',
+  sub: 'subtract',
+  mul: 'multiply',
+  div: 'divide',
+  neg: 'unaryMinus',
+};
 const PYTHON_OPERATOR: Readonly<Record<string, string>> = { add: '+', sub: '-', mul: '*', div: '/', pow: '**' };
 
 /**
@@ -54,7 +70,11 @@ function mathjs(program: SubjectProgram, target: TargetInfo, z: ComplexPair, hea
     `const math = create(all, { predictable: ${target.settings.predictable === true} });`,
     `const c = (re, im) => Object.assign(math.complex(0, 0), { re, im }); // exact parts, −0 included`,
   ];
-  if (numberEntry) lines.push(`// number entry point: a value with a zero imaginary part goes in as a plain number`, `const arg = (v) => (typeof v === 'number' ? v : v.im === 0 ? v.re : v);`);
+  if (numberEntry)
+    lines.push(
+      `// number entry point: a value with a zero imaginary part goes in as a plain number`,
+      `const arg = (v) => (typeof v === 'number' ? v : v.im === 0 ? v.re : v);`,
+    );
   const wrap = (name: string) => (numberEntry ? `arg(${name})` : name);
   const names = stepNames(program, (v) => `c(${jsNumber(v[0])}, ${jsNumber(v[1])})`);
   lines.push(`const z = c(${jsNumber(z[0])}, ${jsNumber(z[1])});`);
@@ -81,7 +101,11 @@ function python(program: SubjectProgram, z: ComplexPair, header: string): string
     if (step.kind !== 'op') return;
     const args = step.args.map((k) => names[k] as string);
     const operator = PYTHON_OPERATOR[step.op];
-    const expr = operator ? `${args[0]} ${operator} ${args[1]}` : step.op === 'neg' ? `-${args[0]}` : `cmath.${step.op}(${args.join(', ')})`;
+    const expr = operator
+      ? `${args[0]} ${operator} ${args[1]}`
+      : step.op === 'neg'
+        ? `-${args[0]}`
+        : `cmath.${step.op}(${args.join(', ')})`;
     lines.push(`s${i} = ${expr}`);
   });
   const last = names[names.length - 1];
@@ -96,7 +120,11 @@ function jsMath(program: SubjectProgram, z: ComplexPair, header: string): string
   program.steps.forEach((step, i) => {
     if (step.kind !== 'op') return;
     const args = step.args.map((k) => names[k] as string);
-    const expr = infix[step.op] ? `${args[0]} ${infix[step.op]} ${args[1]}` : step.op === 'neg' ? `-${args[0]}` : `Math.${step.op}(${args.join(', ')})`;
+    const expr = infix[step.op]
+      ? `${args[0]} ${infix[step.op]} ${args[1]}`
+      : step.op === 'neg'
+        ? `-${args[0]}`
+        : `Math.${step.op}(${args.join(', ')})`;
     lines.push(`const s${i} = ${expr};`);
   });
   lines.push(`console.log(${names[names.length - 1]});`);
@@ -111,7 +139,9 @@ function stdio(program: SubjectProgram, target: TargetInfo, z: ComplexPair, head
   program.steps.forEach((step, i) => {
     if (step.kind === 'const') known.set(i, step.value);
     if (step.kind !== 'op') return;
-    const args = step.args.map((k) => (known.has(k) ? JSON.stringify(wire(known.get(k) as ComplexPair)) : `<result of step ${k}>`));
+    const args = step.args.map((k) =>
+      known.has(k) ? JSON.stringify(wire(known.get(k) as ComplexPair)) : `<result of step ${k}>`,
+    );
     const item = args.length === 1 ? args[0] : `[${args.join(', ')}]`;
     lines.push(`echo '{"id": ${i}, "op": "${step.op}", "args": [${item}]}' | ${command}`);
   });
@@ -120,5 +150,7 @@ function stdio(program: SubjectProgram, target: TargetInfo, z: ComplexPair, head
 
 /** What each step of the program is called in the reproducer: the input z, a constant written out, or the intermediate s<i>. */
 function stepNames(program: SubjectProgram, constant: (value: readonly [number, number]) => string): string[] {
-  return program.steps.map((step, i) => (step.kind === 'input' ? 'z' : step.kind === 'const' ? constant(step.value) : `s${i}`));
+  return program.steps.map((step, i) =>
+    step.kind === 'input' ? 'z' : step.kind === 'const' ? constant(step.value) : `s${i}`,
+  );
 }

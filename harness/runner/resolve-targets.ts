@@ -6,7 +6,8 @@ export type TargetResolution = { ok: true; targets: TargetRef[] } | { ok: false;
 const numeric = (v: string): number[] => v.split(/[.-]/).map((x) => Number(x) || 0);
 const newer = (a: string, b: string): number => {
   const [x, y] = [numeric(a), numeric(b)];
-  for (let i = 0; i < Math.max(x.length, y.length); i++) if ((x[i] ?? 0) !== (y[i] ?? 0)) return (x[i] ?? 0) - (y[i] ?? 0);
+  for (let i = 0; i < Math.max(x.length, y.length); i++)
+    if ((x[i] ?? 0) !== (y[i] ?? 0)) return (x[i] ?? 0) - (y[i] ?? 0);
   return 0;
 };
 
@@ -24,14 +25,31 @@ export function resolveTargets(names: string[], installed: TargetDescriptor[]): 
     let found = installed.find((t) => t.name === name);
     if (!found) {
       const [library, version] = name.split('@') as [string, string | undefined];
-      const same = installed.filter((t) => t.library === library && (version === undefined || version === 'latest' || t.version === version));
-      const newest = same.reduce<string | null>((best, t) => (best === null || newer(t.version, best) > 0 ? t.version : best), null);
+      const same = installed.filter(
+        (t) => t.library === library && (version === undefined || version === 'latest' || t.version === version),
+      );
+      const newest = same.reduce<string | null>(
+        (best, t) => (best === null || newer(t.version, best) > 0 ? t.version : best),
+        null,
+      );
       const candidates = same.filter((t) => t.version === newest);
-      found = candidates.length === 1 ? candidates[0] : candidates.find((t) => t.settings.entry === 'complex' && t.settings.predictable === false);
+      found =
+        candidates.length === 1
+          ? candidates[0]
+          : candidates.find((t) => t.settings.entry === 'complex' && t.settings.predictable === false);
     }
-    if (!found) return { ok: false, message: `unknown target "${name}"; installed: ${installed.map((t) => t.name).join(', ')}` };
+    if (!found)
+      return { ok: false, message: `unknown target "${name}"; installed: ${installed.map((t) => t.name).join(', ')}` };
     const d: TargetDescriptor = found;
-    if (!out.some((t) => t.name === d.name)) out.push({ name: d.name, library: d.library, version: d.version, settings: d.settings, open: () => d.open(), worker: { discovered: d.name } });
+    if (!out.some((t) => t.name === d.name))
+      out.push({
+        name: d.name,
+        library: d.library,
+        version: d.version,
+        settings: d.settings,
+        open: () => d.open(),
+        worker: { discovered: d.name },
+      });
   }
   return { ok: true, targets: out };
 }

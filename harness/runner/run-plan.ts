@@ -28,7 +28,15 @@ const GRACE_MS = 2_000;
 export type RunEvent =
   | { type: 'plan'; shards: number; points: number; suites: number; targets: number }
   | { type: 'shard-start'; shard: number; suite: string; target: string; points: number }
-  | { type: 'shard-end'; shard: number; suite: string; target: string; status: SuiteTargetResult['status']; counts: OutcomeCounts; durationMs: number }
+  | {
+      type: 'shard-end';
+      shard: number;
+      suite: string;
+      target: string;
+      status: SuiteTargetResult['status'];
+      counts: OutcomeCounts;
+      durationMs: number;
+    }
   | { type: 'progress'; done: number; total: number }
   | { type: 'cancelled'; reason: string };
 
@@ -73,16 +81,31 @@ export async function runPlan(plan: Plan, options: RunOptions = {}): Promise<Run
   const cache = options.cache ?? new ReferenceCache(cacheDir);
   const limit = options.shardTimeLimitMs ?? DEFAULT_SHARD_TIME_LIMIT_MS;
   const total = plan.shards.reduce((s, sh) => s + sh.points, 0);
-  emit({ type: 'plan', shards: plan.shards.length, points: total, suites: plan.suites.length, targets: plan.targets.length });
+  emit({
+    type: 'plan',
+    shards: plan.shards.length,
+    points: total,
+    suites: plan.suites.length,
+    targets: plan.targets.length,
+  });
   let done = 0;
   const outcomes: ShardOutcome[] = [];
   const finish = (shard: Shard, result: SuiteTargetResult, ms: number) => {
     outcomes.push({ shard, result });
     done += shard.points;
-    emit({ type: 'shard-end', shard: shard.id, suite: result.suite.id, target: result.target.name, status: result.status, counts: result.counts, durationMs: ms });
+    emit({
+      type: 'shard-end',
+      shard: shard.id,
+      suite: result.suite.id,
+      target: result.target.name,
+      status: result.status,
+      counts: result.counts,
+      durationMs: ms,
+    });
     emit({ type: 'progress', done, total });
   };
-  const cancelledReason = () => `cancelled: ${options.signal?.reason instanceof Error ? options.signal.reason.message : String(options.signal?.reason ?? 'the run was cancelled')}`;
+  const cancelledReason = () =>
+    `cancelled: ${options.signal?.reason instanceof Error ? options.signal.reason.message : String(options.signal?.reason ?? 'the run was cancelled')}`;
   let cancelEmitted = false;
   const onCancel = () => {
     if (!cancelEmitted) emit({ type: 'cancelled', reason: cancelledReason() });
@@ -102,15 +125,25 @@ export async function runPlan(plan: Plan, options: RunOptions = {}): Promise<Run
   const results: SuiteTargetResult[] = [];
   for (let s = 0; s < plan.suites.length; s++) {
     for (let t = 0; t < plan.targets.length; t++) {
-      const parts = outcomes.filter((o) => o.shard.suite === s && o.shard.target === t).map((o) => ({ paths: o.shard.paths, result: o.result }));
+      const parts = outcomes
+        .filter((o) => o.shard.suite === s && o.shard.target === t)
+        .map((o) => ({ paths: o.shard.paths, result: o.result }));
       if (parts.length === 0) continue;
       const suite = plan.suites[s] as Suite;
-      const merged = mergePairResults(parts, suite.paths.length, (plan.pathPoints[s] ?? []).reduce((a, b) => a + b, 0));
+      const merged = mergePairResults(
+        parts,
+        suite.paths.length,
+        (plan.pathPoints[s] ?? []).reduce((a, b) => a + b, 0),
+      );
       if (options.properties && !options.signal?.aborted && merged.status !== 'cancelled') {
         const target = (plan.targets[t] as TargetRef).open();
         try {
           merged.properties = await options.properties(suite, target, options.seed ?? null);
-          merged.checked.properties = { listed: suite.properties.map((p) => p.law), run: true, note: `${merged.properties.length} property check(s) run` };
+          merged.checked.properties = {
+            listed: suite.properties.map((p) => p.law),
+            run: true,
+            note: `${merged.properties.length} property check(s) run`,
+          };
           if (merged.status === 'pass' && merged.properties.some((p) => p.kind === 'failed')) merged.status = 'fail';
         } catch (e) {
           merged.errors.push(`property checks: ${e instanceof Error ? e.message : String(e)}`);
@@ -119,7 +152,11 @@ export async function runPlan(plan: Plan, options: RunOptions = {}): Promise<Run
           await target.close();
         }
       } else if (suite.properties.length > 0) {
-        merged.checked.properties = { listed: suite.properties.map((p) => p.law), run: false, note: 'listed in the suite but not run by this run' };
+        merged.checked.properties = {
+          listed: suite.properties.map((p) => p.law),
+          run: false,
+          note: 'listed in the suite but not run by this run',
+        };
       }
       results.push(merged);
     }
@@ -128,7 +165,8 @@ export async function runPlan(plan: Plan, options: RunOptions = {}): Promise<Run
   const byDiagnosis: Partial<Record<DiagnosisKind, number>> = {};
   for (const r of results) {
     for (const k of Object.keys(counts) as (keyof OutcomeCounts)[]) counts[k] += r.counts[k];
-    for (const [kind, n] of Object.entries(r.byDiagnosis)) byDiagnosis[kind as DiagnosisKind] = (byDiagnosis[kind as DiagnosisKind] ?? 0) + (n ?? 0);
+    for (const [kind, n] of Object.entries(r.byDiagnosis))
+      byDiagnosis[kind as DiagnosisKind] = (byDiagnosis[kind as DiagnosisKind] ?? 0) + (n ?? 0);
   }
   const statuses = results.map((r) => r.status);
   return {
@@ -136,13 +174,27 @@ export async function runPlan(plan: Plan, options: RunOptions = {}): Promise<Run
     startedAt: startedAt.toISOString(),
     finishedAt: new Date().toISOString(),
     seed: options.seed ?? null,
-    status: options.signal?.aborted || statuses.includes('cancelled') ? 'cancelled' : statuses.includes('error') ? 'error' : statuses.includes('fail') ? 'fail' : 'pass',
+    status:
+      options.signal?.aborted || statuses.includes('cancelled')
+        ? 'cancelled'
+        : statuses.includes('error')
+          ? 'error'
+          : statuses.includes('fail')
+            ? 'fail'
+            : 'pass',
     disclaimer: DISCLAIMER,
-    plan: { suites: plan.suites.map((s) => ({ id: s.id, version: s.version })), targets: plan.targets.map((t) => t.name), shards: plan.shards.length },
+    plan: {
+      suites: plan.suites.map((s) => ({ id: s.id, version: s.version })),
+      targets: plan.targets.map((t) => t.name),
+      shards: plan.shards.length,
+    },
     counts,
     byDiagnosis,
     results,
-    reference: { computed: results.reduce((s, r) => s + r.reference.computed, 0), cached: results.reduce((s, r) => s + r.reference.cached, 0) },
+    reference: {
+      computed: results.reduce((s, r) => s + r.reference.computed, 0),
+      cached: results.reduce((s, r) => s + r.reference.cached, 0),
+    },
   };
 }
 
@@ -181,11 +233,18 @@ async function runInProcess(
         controller.abort(new Error(`the shard exceeded its time limit of ${limit} ms`));
       }, limit);
       const target = targetFor(shard.target);
-      const work = evaluateSuite(suite, target, { cache, signal: controller.signal, paths: shard.paths, maxFindings: options.maxFindings }).then(
+      const work = evaluateSuite(suite, target, {
+        cache,
+        signal: controller.signal,
+        paths: shard.paths,
+        maxFindings: options.maxFindings,
+      }).then(
         (r) => ({ ok: true as const, r }),
         (e: unknown) => ({ ok: false as const, e }),
       );
-      const aborted = new Promise<'aborted'>((resolve) => controller.signal.addEventListener('abort', () => resolve('aborted'), { once: true }));
+      const aborted = new Promise<'aborted'>((resolve) =>
+        controller.signal.addEventListener('abort', () => resolve('aborted'), { once: true }),
+      );
       const first = await Promise.race([work, aborted]);
       clearTimeout(timer);
       options.signal?.removeEventListener('abort', onRunAbort);
@@ -196,12 +255,21 @@ async function runInProcess(
         await Promise.race([target.close(), delay(GRACE_MS)]);
         await Promise.race([work, delay(GRACE_MS)]);
         open.delete(shard.target);
-        const reason = timedOut ? `${ref.name} did not finish within the shard time limit of ${limit} ms; the shard was stopped and the target restarted` : cancelledReason();
+        const reason = timedOut
+          ? `${ref.name} did not finish within the shard time limit of ${limit} ms; the shard was stopped and the target restarted`
+          : cancelledReason();
         result = shardFailure(suite, ref, shard.paths, pathPoints, reason, timedOut ? 'error' : 'cancelled');
       } else if (!first.ok) {
         await target.close().catch(() => undefined);
         open.delete(shard.target);
-        result = shardFailure(suite, ref, shard.paths, pathPoints, `the shard failed: ${first.e instanceof Error ? first.e.message : String(first.e)}`, 'error');
+        result = shardFailure(
+          suite,
+          ref,
+          shard.paths,
+          pathPoints,
+          `the shard failed: ${first.e instanceof Error ? first.e.message : String(first.e)}`,
+          'error',
+        );
       } else {
         result = first.r;
       }
@@ -262,12 +330,26 @@ async function runInWorkers(
         try {
           worker ??= await spawn();
         } catch (e) {
-          finish(shard, shardFailure(suite, ref, shard.paths, pathPoints, e instanceof Error ? e.message : String(e), 'error'), Date.now() - started);
+          finish(
+            shard,
+            shardFailure(suite, ref, shard.paths, pathPoints, e instanceof Error ? e.message : String(e), 'error'),
+            Date.now() - started,
+          );
           continue;
         }
         const w: Worker = worker;
-        const request: WorkerRequest = { type: 'shard', shard: shard.id, suite, paths: shard.paths, target: { name: ref.name, spec: ref.worker as NonNullable<TargetRef['worker']> }, maxFindings: options.maxFindings };
-        const outcome = await new Promise<{ kind: 'result'; result: SuiteTargetResult; records: CacheRecords[] } | { kind: 'failed'; reason: string; terminate: boolean; status: 'error' | 'cancelled' }>((resolve) => {
+        const request: WorkerRequest = {
+          type: 'shard',
+          shard: shard.id,
+          suite,
+          paths: shard.paths,
+          target: { name: ref.name, spec: ref.worker as NonNullable<TargetRef['worker']> },
+          maxFindings: options.maxFindings,
+        };
+        const outcome = await new Promise<
+          | { kind: 'result'; result: SuiteTargetResult; records: CacheRecords[] }
+          | { kind: 'failed'; reason: string; terminate: boolean; status: 'error' | 'cancelled' }
+        >((resolve) => {
           let settled = false;
           const settle = (v: Parameters<typeof resolve>[0]) => {
             if (settled) return;
@@ -280,14 +362,26 @@ async function runInWorkers(
             w.off('exit', onExit);
             resolve(v);
           };
-          let stopping: { reason: string; status: 'error' | 'cancelled'; grace: ReturnType<typeof setTimeout> } | null = null;
+          let stopping: { reason: string; status: 'error' | 'cancelled'; grace: ReturnType<typeof setTimeout> } | null =
+            null;
           const stop = (reason: string, status: 'error' | 'cancelled') => {
             if (stopping) return;
             // Ask the worker to abort and close its targets (killing a stdio program); terminate it if it does not answer.
             w.postMessage({ type: 'abort' } satisfies WorkerRequest);
-            stopping = { reason, status, grace: setTimeout(() => settle({ kind: 'failed', reason, terminate: true, status }), GRACE_MS) };
+            stopping = {
+              reason,
+              status,
+              grace: setTimeout(() => settle({ kind: 'failed', reason, terminate: true, status }), GRACE_MS),
+            };
           };
-          const timer = setTimeout(() => stop(`${ref.name} did not finish within the shard time limit of ${limit} ms; the shard was stopped and the target restarted`, 'error'), limit);
+          const timer = setTimeout(
+            () =>
+              stop(
+                `${ref.name} did not finish within the shard time limit of ${limit} ms; the shard was stopped and the target restarted`,
+                'error',
+              ),
+            limit,
+          );
           const onRunAbort = () => stop(cancelledReason(), 'cancelled');
           options.signal?.addEventListener('abort', onRunAbort, { once: true });
           const onMessage = (m: WorkerReply) => {
@@ -298,11 +392,15 @@ async function runInWorkers(
               }
               return;
             }
-            if (m.type === 'result' && m.shard === shard.id) settle({ kind: 'result', result: m.result, records: m.records });
-            else if (m.type === 'failed' && m.shard === shard.id) settle({ kind: 'failed', reason: `the shard failed: ${m.error}`, terminate: false, status: 'error' });
+            if (m.type === 'result' && m.shard === shard.id)
+              settle({ kind: 'result', result: m.result, records: m.records });
+            else if (m.type === 'failed' && m.shard === shard.id)
+              settle({ kind: 'failed', reason: `the shard failed: ${m.error}`, terminate: false, status: 'error' });
           };
-          const onError = (e: Error) => settle({ kind: 'failed', reason: `the worker crashed: ${e.message}`, terminate: true, status: 'error' });
-          const onExit = (code: number) => settle({ kind: 'failed', reason: `the worker exited with code ${code}`, terminate: true, status: 'error' });
+          const onError = (e: Error) =>
+            settle({ kind: 'failed', reason: `the worker crashed: ${e.message}`, terminate: true, status: 'error' });
+          const onExit = (code: number) =>
+            settle({ kind: 'failed', reason: `the worker exited with code ${code}`, terminate: true, status: 'error' });
           w.on('message', onMessage);
           w.on('error', onError);
           w.on('exit', onExit);
@@ -319,7 +417,11 @@ async function runInWorkers(
             await w.terminate().catch(() => undefined);
             worker = null;
           }
-          finish(shard, shardFailure(suite, ref, shard.paths, pathPoints, outcome.reason, outcome.status), Date.now() - started);
+          finish(
+            shard,
+            shardFailure(suite, ref, shard.paths, pathPoints, outcome.reason, outcome.status),
+            Date.now() - started,
+          );
         }
       }
     } finally {

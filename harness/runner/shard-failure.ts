@@ -7,7 +7,14 @@ import type { TargetInfo } from '../adapters/target-info';
  * crashed the worker, or the run was cancelled first: every point of its paths becomes an
  * error (or, when cancelled, skipped) with the reason, so the run goes on and says what happened.
  */
-export function shardFailure(suite: Suite, target: TargetInfo, paths: number[], pathPoints: number[], reason: string, kind: 'error' | 'cancelled'): SuiteTargetResult {
+export function shardFailure(
+  suite: Suite,
+  target: TargetInfo,
+  paths: number[],
+  pathPoints: number[],
+  reason: string,
+  kind: 'error' | 'cancelled',
+): SuiteTargetResult {
   const pathResults: PathResult[] = paths.map((p) => {
     const path = suite.paths[p];
     const n = pathPoints[p] ?? 0;
@@ -33,7 +40,10 @@ export function shardFailure(suite: Suite, target: TargetInfo, paths: number[], 
     checked: {
       convention: suite.convention,
       branch: suite.branch.kind,
-      tolerance: 'ulps' in suite.tolerances.values ? `${suite.tolerances.values.ulps} ulps per part` : `relative error ${suite.tolerances.values.relative}`,
+      tolerance:
+        'ulps' in suite.tolerances.values
+          ? `${suite.tolerances.values.ulps} ulps per part`
+          : `relative error ${suite.tolerances.values.relative}`,
       paths: paths.length,
       points,
       properties: { listed: suite.properties.map((p) => p.law), run: false, note: 'not run' },

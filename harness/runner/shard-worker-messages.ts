@@ -5,7 +5,14 @@ import type { TargetRef } from './target-ref';
 
 /** Main thread → shard worker. */
 export type WorkerRequest =
-  | { type: 'shard'; shard: number; suite: Suite; paths: number[]; target: { name: string; spec: NonNullable<TargetRef['worker']> }; maxFindings?: number }
+  | {
+      type: 'shard';
+      shard: number;
+      suite: Suite;
+      paths: number[];
+      target: { name: string; spec: NonNullable<TargetRef['worker']> };
+      maxFindings?: number;
+    }
   | { type: 'abort' }
   | { type: 'close' };
 

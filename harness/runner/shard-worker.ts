@@ -59,12 +59,25 @@ port.on('message', (m: WorkerRequest) => {
   void (async () => {
     try {
       const target = openTarget(m.target.name, m.target.spec);
-      const result = await evaluateSuite(m.suite, target, { cache, signal: controller.signal, paths: m.paths, maxFindings: m.maxFindings });
+      const result = await evaluateSuite(m.suite, target, {
+        cache,
+        signal: controller.signal,
+        paths: m.paths,
+        maxFindings: m.maxFindings,
+      });
       if (controller.signal.aborted) return;
       const records = cache.takePending();
-      port.postMessage({ type: 'result', shard: m.shard, result, records } satisfies WorkerReply, records.map((r) => r.records.buffer as ArrayBuffer));
+      port.postMessage(
+        { type: 'result', shard: m.shard, result, records } satisfies WorkerReply,
+        records.map((r) => r.records.buffer as ArrayBuffer),
+      );
     } catch (e) {
-      if (!controller.signal.aborted) port.postMessage({ type: 'failed', shard: m.shard, error: e instanceof Error ? e.message : String(e) } satisfies WorkerReply);
+      if (!controller.signal.aborted)
+        port.postMessage({
+          type: 'failed',
+          shard: m.shard,
+          error: e instanceof Error ? e.message : String(e),
+        } satisfies WorkerReply);
     } finally {
       if (current === controller) current = null;
     }

@@ -4,9 +4,7 @@ import { parseDouble } from '../reference/numbers/parse-double';
 
 /** One step of a subject as a library computes it; `args` index earlier steps. */
 export type ProgramStep =
-  | { kind: 'input' }
-  | { kind: 'const'; value: ComplexPair }
-  | { kind: 'op'; op: string; args: number[] };
+  { kind: 'input' } | { kind: 'const'; value: ComplexPair } | { kind: 'op'; op: string; args: number[] };
 
 /**
  * A subject flattened into library operations, in evaluation order; the last step is the

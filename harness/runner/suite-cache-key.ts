@@ -14,7 +14,14 @@ export const REFERENCE_CACHE_GENERATION = 1;
  */
 export function suiteCacheKey(suite: Suite): string {
   const hash = createHash('sha256')
-    .update(JSON.stringify({ subject: suite.subject, branch: suite.branch, convention: suite.convention, generation: REFERENCE_CACHE_GENERATION }))
+    .update(
+      JSON.stringify({
+        subject: suite.subject,
+        branch: suite.branch,
+        convention: suite.convention,
+        generation: REFERENCE_CACHE_GENERATION,
+      }),
+    )
     .digest('hex')
     .slice(0, 12);
   return `${suite.id}@${suite.version}-${hash}`;

@@ -7,7 +7,12 @@ import type { PathSpec } from '../paths/path-spec';
  * them exactly (decimal, hex float, p/q; angles also as multiples of π).
  */
 export function toPathSpec(path: SuitePath): PathSpec {
-  const sampling = path.kind === 'straddle' || path.kind === 'grid' ? null : path.at !== undefined ? { at: path.at } : { samples: path.samples as number };
+  const sampling =
+    path.kind === 'straddle' || path.kind === 'grid'
+      ? null
+      : path.at !== undefined
+        ? { at: path.at }
+        : { samples: path.samples as number };
   switch (path.kind) {
     case 'circle':
       return {
@@ -26,6 +31,13 @@ export function toPathSpec(path: SuitePath): PathSpec {
     case 'straddle':
       return { kind: 'straddle', cut: path.cut, along: path.along, offsets: path.offsets };
     case 'grid':
-      return { kind: 'grid', min: path.min, max: path.max, columns: path.columns, rows: path.rows, bothZeroSigns: path.both_zero_signs };
+      return {
+        kind: 'grid',
+        min: path.min,
+        max: path.max,
+        columns: path.columns,
+        rows: path.rows,
+        bothZeroSigns: path.both_zero_signs,
+      };
   }
 }

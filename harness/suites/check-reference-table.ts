@@ -25,12 +25,29 @@ export function checkReferenceTable(suite: Suite, csv: string): ReferenceTableCh
   try {
     records = parse(csv, { columns: true, skip_empty_lines: true, trim: true, bom: true }) as Record<string, string>[];
   } catch (e) {
-    return { rows: 0, agree: 0, disagreements: [], invalid: [{ line: 1, reason: `not CSV: ${e instanceof Error ? e.message : String(e)}` }] };
+    return {
+      rows: 0,
+      agree: 0,
+      disagreements: [],
+      invalid: [{ line: 1, reason: `not CSV: ${e instanceof Error ? e.message : String(e)}` }],
+    };
   }
   const header = records[0] ? Object.keys(records[0]) : [];
   const missing = COLUMNS.filter((c) => c !== 'source' && !header.includes(c));
-  if (records.length > 0 && missing.length > 0) return { rows: records.length, agree: 0, disagreements: [], invalid: [{ line: 1, reason: `missing columns: ${missing.join(', ')}` }] };
-  if (records.length > MAX_REFERENCE_ROWS) return { rows: records.length, agree: 0, disagreements: [], invalid: [{ line: 1, reason: `more than ${MAX_REFERENCE_ROWS} rows` }] };
+  if (records.length > 0 && missing.length > 0)
+    return {
+      rows: records.length,
+      agree: 0,
+      disagreements: [],
+      invalid: [{ line: 1, reason: `missing columns: ${missing.join(', ')}` }],
+    };
+  if (records.length > MAX_REFERENCE_ROWS)
+    return {
+      rows: records.length,
+      agree: 0,
+      disagreements: [],
+      invalid: [{ line: 1, reason: `more than ${MAX_REFERENCE_ROWS} rows` }],
+    };
   const subject = suite.branch.kind === 'principal' ? parseSubject(suite.subject) : null;
   const result: ReferenceTableCheck = { rows: records.length, agree: 0, disagreements: [], invalid: [] };
   records.forEach((row, i) => {
@@ -46,10 +63,21 @@ export function checkReferenceTable(suite: Suite, csv: string): ReferenceTableCh
     }
     let ours: [number, number];
     if (subject) {
-      ours = evaluateSubject(subject, BigComplex.fromDoubles(z[0], z[1]), suite.convention, { double: true, digits: 0 }).double;
+      ours = evaluateSubject(subject, BigComplex.fromDoubles(z[0], z[1]), suite.convention, {
+        double: true,
+        digits: 0,
+      }).double;
     } else if (suite.branch.kind === 'regular') {
       const b = suite.branch;
-      const answer = answerContinue({ g: b.g, nu: b.nu, z0: b.z0, ...(b.f0 ? { f0: b.f0 } : { k: b.k }), path: { kind: 'polyline', points: [b.z0, { re: formatDouble(z[0]), im: formatDouble(z[1]) }] }, at: ['1'], cuts: b.cuts }) as {
+      const answer = answerContinue({
+        g: b.g,
+        nu: b.nu,
+        z0: b.z0,
+        ...(b.f0 ? { f0: b.f0 } : { k: b.k }),
+        path: { kind: 'polyline', points: [b.z0, { re: formatDouble(z[0]), im: formatDouble(z[1]) }] },
+        at: ['1'],
+        cuts: b.cuts,
+      }) as {
         values?: { f: { re: string; im: string } }[];
         error?: string;
       };
@@ -66,7 +94,14 @@ export function checkReferenceTable(suite: Suite, csv: string): ReferenceTableCh
     if (ulps <= 1 && zeroSigns) result.agree += 1;
     else {
       const wire = (v: [number, number]) => ({ re: formatDouble(v[0]), im: formatDouble(v[1]) });
-      result.disagreements.push({ line, z: wire(z), theirs: wire(theirs), ours: wire(ours), ulps, source: row.source ?? '' });
+      result.disagreements.push({
+        line,
+        z: wire(z),
+        theirs: wire(theirs),
+        ours: wire(ours),
+        ulps,
+        source: row.source ?? '',
+      });
     }
   });
   return result;

@@ -33,7 +33,10 @@ export function checkSuiteSemantics(suite: Pick<Suite, 'id' | 'subject' | 'branc
     say('branch.g', e.message);
     return issues;
   }
-  const nu = typeof branch.nu === 'string' ? { re: exact(branch.nu), im: exact('0') } : { re: exact(branch.nu.re), im: exact(branch.nu.im) };
+  const nu =
+    typeof branch.nu === 'string'
+      ? { re: exact(branch.nu), im: exact('0') }
+      : { re: exact(branch.nu.re), im: exact(branch.nu.im) };
   if (!nu.re || !nu.im) {
     say('branch.nu', 'must be finite');
     return issues;
@@ -44,7 +47,10 @@ export function checkSuiteSemantics(suite: Pick<Suite, 'id' | 'subject' | 'branc
   };
   try {
     CutLayout.build(
-      branch.cuts.map((c) => ({ points: c.points.map((p) => [toDouble(p.re), toDouble(p.im)] as [number, number]), toInfinity: c.to_infinity })),
+      branch.cuts.map((c) => ({
+        points: c.points.map((p) => [toDouble(p.re), toDouble(p.im)] as [number, number]),
+        toInfinity: c.to_infinity,
+      })),
       g.singularities(),
       { re: nu.re, im: nu.im },
     );

@@ -25,7 +25,11 @@ export function checkSuite(data: unknown, fallbackName: string): SuiteValidation
   const subject = typeof record.subject === 'string' && !faulted('subject') ? record.subject : null;
   const branch = faulted('branch') ? null : branchSpecSchema.safeParse(record.branch);
   if (subject === null && !branch?.success) return shallow;
-  const deeper = checkSuiteSemantics({ id: name, subject: subject ?? 'z', branch: branch?.success ? branch.data : { kind: 'principal' } });
+  const deeper = checkSuiteSemantics({
+    id: name,
+    subject: subject ?? 'z',
+    branch: branch?.success ? branch.data : { kind: 'principal' },
+  });
   for (const issue of deeper) if (!faulted(issue.field)) issues.push(issue);
   return { ok: false, issues };
 }

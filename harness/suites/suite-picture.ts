@@ -49,7 +49,10 @@ export function suitePicture(data: unknown): SuitePictureData {
       out.notes.push(`${label} (${path.name}) is a grid; grids are not drawn.`);
       return;
     }
-    const drawn = path.kind !== 'straddle' && path.samples !== undefined && path.samples > MAX_DRAWN_SAMPLES ? { ...path, samples: MAX_DRAWN_SAMPLES } : path;
+    const drawn =
+      path.kind !== 'straddle' && path.samples !== undefined && path.samples > MAX_DRAWN_SAMPLES
+        ? { ...path, samples: MAX_DRAWN_SAMPLES }
+        : path;
     try {
       const points = buildPath(toPathSpec(drawn)).map((p) => ({ re: p.z.re, im: p.z.im }));
       out.paths.push({ name: path.name, draw: path.kind === 'straddle' ? 'points' : 'line', points });
@@ -70,7 +73,10 @@ export function suitePicture(data: unknown): SuitePictureData {
       if (points.length >= 2) out.cuts.push({ points, toInfinity: cut.to_infinity });
     }
     try {
-      const nu = typeof spec.nu === 'string' ? { re: exact(spec.nu), im: Rational.ZERO } : { re: exact(spec.nu.re), im: exact(spec.nu.im) };
+      const nu =
+        typeof spec.nu === 'string'
+          ? { re: exact(spec.nu), im: Rational.ZERO }
+          : { re: exact(spec.nu.re), im: exact(spec.nu.im) };
       const g = FactoredFunction.fromSubject(parseSubject(spec.g));
       for (const s of g.singularities()) {
         const m = new Rational(BigInt(s.order));
@@ -92,7 +98,8 @@ export function suitePicture(data: unknown): SuitePictureData {
     }
     for (const cut of cuts) {
       out.cuts.push({ points: [toPoint(cut.from), toPoint(cut.to)], toInfinity: cut.toInfinity });
-      if (!out.branchPoints.some((p) => p.re === cut.from[0] && p.im === cut.from[1])) out.branchPoints.push(toPoint(cut.from));
+      if (!out.branchPoints.some((p) => p.re === cut.from[0] && p.im === cut.from[1]))
+        out.branchPoints.push(toPoint(cut.from));
     }
   } catch (e) {
     out.notes.push(`Cuts are not drawn: ${e instanceof Error ? e.message : String(e)}.`);

@@ -5,5 +5,11 @@ import { principalSuite } from './principal-suite';
 
 /** The whole demo catalogue: every catalogue function under both conventions, then the regular branches. */
 export function demoCatalogue(): SuiteInput[] {
-  return [...DEMO_PRINCIPAL_FUNCTIONS.flatMap((fn) => [principalSuite(fn, 'signed-zero'), principalSuite(fn, 'counter-clockwise')]), ...DEMO_REGULAR_SUITES];
+  return [
+    ...DEMO_PRINCIPAL_FUNCTIONS.flatMap((fn) => [
+      principalSuite(fn, 'signed-zero'),
+      principalSuite(fn, 'counter-clockwise'),
+    ]),
+    ...DEMO_REGULAR_SUITES,
+  ];
 }

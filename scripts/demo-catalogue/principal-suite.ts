@@ -11,8 +11,18 @@ const seedOf = (text: string) => createHash('sha256').update(text).digest().read
 
 function straddle(cut: DemoCut, index: number): SuitePathInput {
   return cut.kind === 'ray'
-    ? { kind: 'straddle', name: `straddle cut ${index + 1}`, cut: { kind: 'ray', from: c(cut.from), through: c(cut.through) }, along: ['0.5', '1', '3', '1e6'] }
-    : { kind: 'straddle', name: `straddle cut ${index + 1}`, cut: { kind: 'segment', from: c(cut.from), to: c(cut.to) }, along: ['0.125', '0.25', '0.5', '0.75', '0.875'] };
+    ? {
+        kind: 'straddle',
+        name: `straddle cut ${index + 1}`,
+        cut: { kind: 'ray', from: c(cut.from), through: c(cut.through) },
+        along: ['0.5', '1', '3', '1e6'],
+      }
+    : {
+        kind: 'straddle',
+        name: `straddle cut ${index + 1}`,
+        cut: { kind: 'segment', from: c(cut.from), to: c(cut.to) },
+        along: ['0.125', '0.25', '0.5', '0.75', '0.875'],
+      };
 }
 
 /**
@@ -26,10 +36,26 @@ export function principalSuite(fn: DemoPrincipalFunction, convention: Convention
   const id = `${fn.slug}-principal-${short}`;
   const paths: SuitePathInput[] = [
     ...fn.cuts.map(straddle),
-    ...fn.branchPoints.map(
-      (bp, i): SuitePathInput => ({ kind: 'circle', name: `around branch point ${i + 1}`, center: c(bp), radius: fn.radius, start_angle: '0', turns: '1', direction: 'ccw', samples: 65 }),
-    ),
-    { kind: 'circle', name: 'wide circle', center: { re: '0', im: '0' }, radius: '3', start_angle: 'pi/8', turns: '1', direction: 'ccw', samples: 49 },
+    ...fn.branchPoints.map((bp, i): SuitePathInput => ({
+      kind: 'circle',
+      name: `around branch point ${i + 1}`,
+      center: c(bp),
+      radius: fn.radius,
+      start_angle: '0',
+      turns: '1',
+      direction: 'ccw',
+      samples: 65,
+    })),
+    {
+      kind: 'circle',
+      name: 'wide circle',
+      center: { re: '0', im: '0' },
+      radius: '3',
+      start_angle: 'pi/8',
+      turns: '1',
+      direction: 'ccw',
+      samples: 49,
+    },
   ];
   return {
     id,

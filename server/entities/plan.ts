@@ -1,4 +1,14 @@
-import { Column, CreateDateColumn, Entity, JoinColumn, JoinTable, ManyToMany, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  JoinColumn,
+  JoinTable,
+  ManyToMany,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  UpdateDateColumn,
+} from 'typeorm';
 import { Suite } from './suite';
 import { Target } from './target';
 import { User } from './user';
@@ -25,7 +35,11 @@ export class Plan {
   @JoinTable({
     name: 'plan_suites',
     joinColumn: { name: 'plan_id', referencedColumnName: 'id', foreignKeyConstraintName: 'FK_plan_suites_plan' },
-    inverseJoinColumn: { name: 'suite_id', referencedColumnName: 'id', foreignKeyConstraintName: 'FK_plan_suites_suite' },
+    inverseJoinColumn: {
+      name: 'suite_id',
+      referencedColumnName: 'id',
+      foreignKeyConstraintName: 'FK_plan_suites_suite',
+    },
   })
   suites!: Suite[];
 
@@ -33,7 +47,11 @@ export class Plan {
   @JoinTable({
     name: 'plan_targets',
     joinColumn: { name: 'plan_id', referencedColumnName: 'id', foreignKeyConstraintName: 'FK_plan_targets_plan' },
-    inverseJoinColumn: { name: 'target_name', referencedColumnName: 'name', foreignKeyConstraintName: 'FK_plan_targets_target' },
+    inverseJoinColumn: {
+      name: 'target_name',
+      referencedColumnName: 'name',
+      foreignKeyConstraintName: 'FK_plan_targets_target',
+    },
   })
   targets!: Target[];
 

@@ -24,17 +24,29 @@ export function errorHandler(err: unknown, _req: Request, res: Response, next: N
   const e = (err ?? {}) as HttpishError;
   switch (e.type) {
     case 'entity.parse.failed':
-      return send(400, { kind: 'invalid-input', message: 'The body is not valid JSON.', issues: [{ field: 'body', rule: 'must be valid JSON' }] });
+      return send(400, {
+        kind: 'invalid-input',
+        message: 'The body is not valid JSON.',
+        issues: [{ field: 'body', rule: 'must be valid JSON' }],
+      });
     case 'entity.too.large':
       return send(413, { kind: 'payload-too-large', message: 'The body is too large.' });
     case 'encoding.unsupported':
     case 'charset.unsupported':
       return send(415, { kind: 'unsupported-media-type', message: e.message ?? 'Unsupported encoding.' });
     case 'request.aborted':
-      return send(400, { kind: 'invalid-input', message: 'The request was aborted.', issues: [{ field: 'body', rule: 'must arrive complete' }] });
+      return send(400, {
+        kind: 'invalid-input',
+        message: 'The request was aborted.',
+        issues: [{ field: 'body', rule: 'must arrive complete' }],
+      });
   }
   if (typeof e.status === 'number' && e.status >= 400 && e.status < 500) {
-    return send(e.status, { kind: 'invalid-input', message: e.message ?? 'Bad request.', issues: [{ field: 'body', rule: e.message ?? 'is not acceptable' }] });
+    return send(e.status, {
+      kind: 'invalid-input',
+      message: e.message ?? 'Bad request.',
+      issues: [{ field: 'body', rule: e.message ?? 'is not acceptable' }],
+    });
   }
   console.error('[sheetkeeper] unhandled error', err);
   send(500, { kind: 'server-error', message: 'Something went wrong on the server.' });

@@ -13,7 +13,9 @@ export function requireRole(...roles: Role[]) {
       return;
     }
     if (!roles.includes(req.user.role)) {
-      res.status(403).json({ kind: 'forbidden', message: `This needs the role ${roles.join(' or ')}.` } satisfies ApiError);
+      res
+        .status(403)
+        .json({ kind: 'forbidden', message: `This needs the role ${roles.join(' or ')}.` } satisfies ApiError);
       return;
     }
     next();

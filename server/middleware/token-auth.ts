@@ -15,7 +15,9 @@ export function tokenAuth(dataSource: DataSource) {
     const header = req.get('authorization');
     if (!header) return next();
     const match = /^Bearer (skt_[A-Za-z0-9_-]{20,100})$/.exec(header);
-    const found = match ? await tokens.findOne({ where: { tokenHash: hashToken(match[1]!) }, relations: { user: true } }) : null;
+    const found = match
+      ? await tokens.findOne({ where: { tokenHash: hashToken(match[1]!) }, relations: { user: true } })
+      : null;
     if (!found || found.revokedAt) {
       res.status(401).json({ kind: 'signed-out', message: 'That API token is not valid.' } satisfies ApiError);
       return;

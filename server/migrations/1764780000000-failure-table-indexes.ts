@@ -13,7 +13,9 @@ export class FailureTableIndexes1764780000000 implements MigrationInterface {
     await q.query(`CREATE INDEX failures_run_diagnosis_idx ON failures (run_id, diagnosis_kind, id)`);
     await q.query(`CREATE INDEX failures_run_suite_idx ON failures (run_id, suite_slug, id)`);
     await q.query(`CREATE INDEX failures_run_ulps_idx ON failures (run_id, (coalesce(ulps, 0)) DESC, id)`);
-    await q.query(`CREATE INDEX failures_run_diagnosis_ulps_idx ON failures (run_id, diagnosis_kind, (coalesce(ulps, 0)) DESC, id)`);
+    await q.query(
+      `CREATE INDEX failures_run_diagnosis_ulps_idx ON failures (run_id, diagnosis_kind, (coalesce(ulps, 0)) DESC, id)`,
+    );
     await q.query(`CREATE INDEX failures_run_new_idx ON failures (run_id, id) WHERE is_regression`);
   }
 

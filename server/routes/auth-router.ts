@@ -19,7 +19,13 @@ export function authRouter(passport: ReturnType<typeof configurePassport>, limit
     const wait = await limiter.retryAfter(body.email, address);
     if (wait > 0) {
       res.set('Retry-After', String(wait));
-      res.status(429).json({ kind: 'too-many-attempts', message: `Too many failed attempts. Try again in ${Math.ceil(wait / 60)} min.`, retryAfterSeconds: wait } satisfies ApiError);
+      res
+        .status(429)
+        .json({
+          kind: 'too-many-attempts',
+          message: `Too many failed attempts. Try again in ${Math.ceil(wait / 60)} min.`,
+          retryAfterSeconds: wait,
+        } satisfies ApiError);
       return;
     }
     passport.authenticate('local', { session: false }, (err: unknown, user: User | false) => {

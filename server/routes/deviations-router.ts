@@ -29,7 +29,11 @@ export function deviationsRouter(dataSource: DataSource): Router {
   const router = Router();
   const deviations = dataSource.getRepository(Deviation);
   router.get('/', requireRole(...ROLES), async (_req, res) => {
-    res.json({ deviations: (await deviations.find({ relations: { createdBy: true }, order: { createdAt: 'DESC' }, take: 500 })).map(view) });
+    res.json({
+      deviations: (
+        await deviations.find({ relations: { createdBy: true }, order: { createdAt: 'DESC' }, take: 500 })
+      ).map(view),
+    });
   });
   router.post('/:id/revoke', requireRole('reviewer', 'admin'), async (req, res) => {
     const { id } = parseInput(idParams, req.params, 'params');

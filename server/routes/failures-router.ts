@@ -27,7 +27,8 @@ export function failuresRouter(dataSource: DataSource, options: { referenceCache
 
   router.get('/export.csv', anyone, async (req, res) => {
     const q = { ...parseInput(failureQuery, req.query, 'query'), limit: CSV_MAX_ROWS };
-    if (!q.run && !q.suite && !q.target) throw new InputError([{ field: 'query', rule: 'needs run, suite or target to export' }]);
+    if (!q.run && !q.suite && !q.target)
+      throw new InputError([{ field: 'query', rule: 'needs run, suite or target to export' }]);
     const { rows } = await searchFailures(dataSource, q, true);
     const csv = stringify(
       rows.map((r) => ({
@@ -63,10 +64,23 @@ export function failuresRouter(dataSource: DataSource, options: { referenceCache
     const id = failureNumber(req.params.id);
     const body = parseInput(classifyBody, req.body, 'body');
     if (req.user!.role === 'maintainer' && body.classification !== 'accepted') {
-      throw new HttpError(403, { kind: 'forbidden', message: 'A maintainer may accept a deviation; calling a failure a bug or a convention difference needs the role reviewer or admin.' });
+      throw new HttpError(403, {
+        kind: 'forbidden',
+        message:
+          'A maintainer may accept a deviation; calling a failure a bug or a convention difference needs the role reviewer or admin.',
+      });
     }
     const deviation = await classifyFailure(dataSource, req.user!, id, body);
-    res.status(201).json({ deviation: { id: deviation.id, classification: deviation.classification, scope: deviation.scope, expiresAt: deviation.expiresAt?.toISOString() ?? null } });
+    res
+      .status(201)
+      .json({
+        deviation: {
+          id: deviation.id,
+          classification: deviation.classification,
+          scope: deviation.scope,
+          expiresAt: deviation.expiresAt?.toISOString() ?? null,
+        },
+      });
   });
 
   router.get('/:id/path', anyone, async (req, res) => {

@@ -8,7 +8,13 @@ import { requireRole } from '../middleware/require-role';
 import { HttpError } from '../services/http-error';
 import { parseInput } from '../services/parse-input';
 
-const summary = (m: ReceivedMail): ReceivedMailView => ({ id: m.id, from: m.envelopeFrom, to: m.envelopeTo, subject: m.subject, receivedAt: m.receivedAt.toISOString() });
+const summary = (m: ReceivedMail): ReceivedMailView => ({
+  id: m.id,
+  from: m.envelopeFrom,
+  to: m.envelopeTo,
+  subject: m.subject,
+  receivedAt: m.receivedAt.toISOString(),
+});
 
 /** What the local mail server received (admins): a page of messages, and one message rendered. */
 export function outboxRouter(dataSource: DataSource): Router {
@@ -19,7 +25,10 @@ export function outboxRouter(dataSource: DataSource): Router {
     const { limit, before } = parseInput(outboxListQuery, req.query, 'query');
     const rows: ReceivedMail[] = await mails
       .createQueryBuilder('m')
-      .where(before ? '(m.received_at, m.id) < (SELECT received_at, id FROM received_mail WHERE id = :before)' : 'true', { before })
+      .where(
+        before ? '(m.received_at, m.id) < (SELECT received_at, id FROM received_mail WHERE id = :before)' : 'true',
+        { before },
+      )
       .orderBy('m.received_at', 'DESC')
       .addOrderBy('m.id', 'DESC')
       .limit(limit)

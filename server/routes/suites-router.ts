@@ -35,7 +35,9 @@ const tableUpload = multer({
   storage: multer.memoryStorage(),
   limits: { fileSize: MAX_TABLE_BYTES, files: 1, fields: 4, parts: 6 },
   fileFilter: (_req, file, done) => {
-    const csv = ['text/csv', 'application/vnd.ms-excel', 'text/plain'].includes(file.mimetype) || file.originalname.toLowerCase().endsWith('.csv');
+    const csv =
+      ['text/csv', 'application/vnd.ms-excel', 'text/plain'].includes(file.mimetype) ||
+      file.originalname.toLowerCase().endsWith('.csv');
     if (csv) done(null, true);
     else done(new HttpError(415, { kind: 'unsupported-media-type', message: 'A reference table must be CSV (.csv).' }));
   },
@@ -53,7 +55,10 @@ function receiveTable(req: Request, res: Response, next: NextFunction): void {
 function receiveWith(m: multer.Multer, maxBytes: number, req: Request, res: Response, next: NextFunction): void {
   m.single('file')(req, res, (err: unknown) => {
     if (err instanceof multer.MulterError) {
-      if (err.code === 'LIMIT_FILE_SIZE') return next(new HttpError(413, { kind: 'payload-too-large', message: `The file may be at most ${maxBytes / 1024} KB.` }));
+      if (err.code === 'LIMIT_FILE_SIZE')
+        return next(
+          new HttpError(413, { kind: 'payload-too-large', message: `The file may be at most ${maxBytes / 1024} KB.` }),
+        );
       return next(new InputError([{ field: err.field ?? 'file', rule: err.message.toLowerCase() }]));
     }
     next(err);
@@ -83,7 +88,8 @@ export function suitesRouter(dataSource: DataSource): Router {
   router.put('/:slug', anyone, async (req, res) => {
     const { slug } = parseInput(suiteSlugParams, req.params, 'params');
     const body = validateSuiteInput(req.body, 'body', slug);
-    if (body.id !== slug) throw new InputError([{ field: 'body.id', rule: `must stay "${slug}": a suite keeps its id across versions` }]);
+    if (body.id !== slug)
+      throw new InputError([{ field: 'body.id', rule: `must stay "${slug}": a suite keeps its id across versions` }]);
     const { created, view } = await suites.save(req.user!, body, 'edit');
     res.status(created ? 201 : 200).json({ version: view });
   });
@@ -99,7 +105,16 @@ export function suitesRouter(dataSource: DataSource): Router {
     }
     const body = validateSuiteInput(data, 'file', file.originalname);
     const { created, view } = await suites.save(req.user!, body, 'upsert');
-    await dataSource.getRepository(Upload).save({ kind: 'suite-file', suiteVersion: { id: view.id }, filename: file.originalname, bytes: file.size, summary: { slug: view.slug, version: view.version, created }, uploadedBy: req.user! });
+    await dataSource
+      .getRepository(Upload)
+      .save({
+        kind: 'suite-file',
+        suiteVersion: { id: view.id },
+        filename: file.originalname,
+        bytes: file.size,
+        summary: { slug: view.slug, version: view.version, created },
+        uploadedBy: req.user!,
+      });
     res.status(created ? 201 : 200).json({ version: view });
   });
 
@@ -108,10 +123,21 @@ export function suitesRouter(dataSource: DataSource): Router {
     const { slug } = parseInput(suiteSlugParams, req.params, 'params');
     const file = req.file;
     if (!file) throw new InputError([{ field: 'file', rule: 'is required (a .csv table in the field "file")' }]);
-    const version = await dataSource.getRepository(SuiteVersion).findOne({ where: { suite: { slug } }, order: { version: 'DESC' } });
+    const version = await dataSource
+      .getRepository(SuiteVersion)
+      .findOne({ where: { suite: { slug } }, order: { version: 'DESC' } });
     if (!version) throw new HttpError(404, { kind: 'not-found', message: `No suite with the id "${slug}".` });
     const check = checkReferenceTable(version.body, file.buffer.toString('utf8'));
-    await dataSource.getRepository(Upload).save({ kind: 'reference-table', suiteVersion: version, filename: file.originalname, bytes: file.size, summary: { ...check }, uploadedBy: req.user! });
+    await dataSource
+      .getRepository(Upload)
+      .save({
+        kind: 'reference-table',
+        suiteVersion: version,
+        filename: file.originalname,
+        bytes: file.size,
+        summary: { ...check },
+        uploadedBy: req.user!,
+      });
     res.json({ suite: slug, version: version.version, check });
   });
 

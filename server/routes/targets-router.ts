@@ -8,8 +8,18 @@ import { requireRole } from '../middleware/require-role';
 export function targetsRouter(dataSource: DataSource): Router {
   const router = Router();
   router.get('/', requireRole(...ROLES), async (_req, res) => {
-    const targets = await dataSource.getRepository(Target).find({ order: { installed: 'DESC', library: 'ASC', name: 'ASC' } });
-    res.json({ targets: targets.map(({ name, library, version, settings, installed }) => ({ name, library, version, settings, installed })) });
+    const targets = await dataSource
+      .getRepository(Target)
+      .find({ order: { installed: 'DESC', library: 'ASC', name: 'ASC' } });
+    res.json({
+      targets: targets.map(({ name, library, version, settings, installed }) => ({
+        name,
+        library,
+        version,
+        settings,
+        installed,
+      })),
+    });
   });
   return router;
 }

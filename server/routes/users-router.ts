@@ -28,9 +28,16 @@ export function usersRouter(dataSource: DataSource, signedIn: ShortLivedCache<Us
       const repo = tx.getRepository(User);
       const admins = await repo.find({ where: { role: 'admin' }, lock: { mode: 'pessimistic_write' } });
       const user = await repo.findOneBy({ id });
-      if (!user) return { status: 404, body: { kind: 'not-found', message: 'No user with that id.' } satisfies ApiError };
+      if (!user)
+        return { status: 404, body: { kind: 'not-found', message: 'No user with that id.' } satisfies ApiError };
       if (user.role === 'admin' && role !== 'admin' && admins.length <= 1) {
-        return { status: 409, body: { kind: 'conflict', message: 'This is the last admin; make someone else admin first.' } satisfies ApiError };
+        return {
+          status: 409,
+          body: {
+            kind: 'conflict',
+            message: 'This is the last admin; make someone else admin first.',
+          } satisfies ApiError,
+        };
       }
       user.role = role;
       return { status: 200, body: { user: toPublicUser(await repo.save(user)) } };

@@ -11,12 +11,16 @@ export interface DemoPlan {
 }
 
 const newest = (prefix: string, count: number) => (names: string[]) =>
-  names.filter((n) => n.startsWith(prefix)).sort((a, b) => a.localeCompare(b, 'en', { numeric: true })).slice(-count);
+  names
+    .filter((n) => n.startsWith(prefix))
+    .sort((a, b) => a.localeCompare(b, 'en', { numeric: true }))
+    .slice(-count);
 
 export const DEMO_PLANS: DemoPlan[] = [
   {
     name: 'complex.js nightly',
-    description: 'Every signed-zero suite and every regular branch against the two newest complex.js releases, so a change between them shows as a version change.',
+    description:
+      'Every signed-zero suite and every regular branch against the two newest complex.js releases, so a change between them shows as a version change.',
     recipients: ['kwame@sheetkeeper.test', 'hanne@sheetkeeper.test'],
     suites: (id) => id.endsWith('-sz') || !id.includes('-principal-'),
     targets: newest('complex.js@', 2),
@@ -24,7 +28,8 @@ export const DEMO_PLANS: DemoPlan[] = [
   },
   {
     name: 'mathjs before release',
-    description: 'The counter-clockwise suites against the current and the previous mathjs major through the Complex entry point.',
+    description:
+      'The counter-clockwise suites against the current and the previous mathjs major through the Complex entry point.',
     recipients: ['kwame@sheetkeeper.test'],
     suites: (id) => id.endsWith('-ccw'),
     targets: (names) => names.filter((n) => /^mathjs@1[45]\.[\d.]+\/complex$/.test(n)),
@@ -32,7 +37,8 @@ export const DEMO_PLANS: DemoPlan[] = [
   },
   {
     name: 'Python binding cross-check',
-    description: "Python's cmath is the team's Annex G yardstick: if it fails a suite, the suite is suspect before the library is.",
+    description:
+      "Python's cmath is the team's Annex G yardstick: if it fails a suite, the suite is suspect before the library is.",
     recipients: ['hanne@sheetkeeper.test'],
     suites: (id) => id.endsWith('-sz'),
     targets: newest('cmath@', 1),

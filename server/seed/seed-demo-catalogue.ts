@@ -27,9 +27,12 @@ export async function seedDemoCatalogue(dataSource: DataSource): Promise<{ suite
   const suites = new SuiteService(dataSource);
   let addedSuites = 0;
   const ids: string[] = [];
-  for (const file of readdirSync(DEMO_DIR).filter((f) => f.endsWith('.json')).sort()) {
+  for (const file of readdirSync(DEMO_DIR)
+    .filter((f) => f.endsWith('.json'))
+    .sort()) {
     const checked = validateSuite(JSON.parse(readFileSync(path.join(DEMO_DIR, file), 'utf8')), file);
-    if (!checked.ok) throw new Error(`demo suite ${file} is invalid: ${checked.issues.map((i) => `${i.field} ${i.rule}`).join('; ')}`);
+    if (!checked.ok)
+      throw new Error(`demo suite ${file} is invalid: ${checked.issues.map((i) => `${i.field} ${i.rule}`).join('; ')}`);
     ids.push(checked.suite.id);
     if (await dataSource.getRepository(Suite).existsBy({ slug: checked.suite.id })) continue;
     await suites.save(author, checked.suite, 'create');
@@ -44,8 +47,26 @@ export async function seedDemoCatalogue(dataSource: DataSource): Promise<{ suite
     if (await dataSource.getRepository(Plan).existsBy({ name: demo.name })) continue;
     const targets = demo.targets(installed);
     if (targets.length === 0) continue;
-    const view = await plans.save(maintainer, { name: demo.name, description: demo.description, recipients: demo.recipients, suites: ids.filter(demo.suites), targets }, null);
-    await dataSource.getRepository(Schedule).save({ plan: { id: view.id }, cron: demo.schedule.cron, timeZone: demo.schedule.timeZone, enabled: true, createdBy: maintainer });
+    const view = await plans.save(
+      maintainer,
+      {
+        name: demo.name,
+        description: demo.description,
+        recipients: demo.recipients,
+        suites: ids.filter(demo.suites),
+        targets,
+      },
+      null,
+    );
+    await dataSource
+      .getRepository(Schedule)
+      .save({
+        plan: { id: view.id },
+        cron: demo.schedule.cron,
+        timeZone: demo.schedule.timeZone,
+        enabled: true,
+        createdBy: maintainer,
+      });
     addedPlans += 1;
   }
   return { suites: addedSuites, plans: addedPlans };

@@ -22,16 +22,36 @@ const PLAN = 'complex.js nightly';
  * regression mail in the outbox. Shards run here one after another, not through the queue.
  * Does nothing when the plan already has a run. Returns the number of runs added.
  */
-export async function seedDemoRuns(dataSource: DataSource, options: { smtp: { host: string; port: number }; appUrl: string; referenceCacheDir?: string | null }): Promise<number> {
-  const plan = await dataSource.getRepository(Plan).findOne({ where: { name: PLAN }, relations: { suites: true, targets: true } });
+export async function seedDemoRuns(
+  dataSource: DataSource,
+  options: { smtp: { host: string; port: number }; appUrl: string; referenceCacheDir?: string | null },
+): Promise<number> {
+  const plan = await dataSource
+    .getRepository(Plan)
+    .findOne({ where: { name: PLAN }, relations: { suites: true, targets: true } });
   if (!plan || (await dataSource.getRepository(Run).existsBy({ plan: { id: plan.id } }))) return 0;
   const kwame = await dataSource.getRepository(User).findOneByOrFail({ email: 'kwame@sheetkeeper.test' });
   const plans = new PlanService(dataSource);
-  const executor = new ShardExecutor(dataSource, { openTarget: openInstalledTarget, outbox: new MailOutbox(dataSource, options.smtp), appUrl: options.appUrl, referenceCacheDir: options.referenceCacheDir });
+  const executor = new ShardExecutor(dataSource, {
+    openTarget: openInstalledTarget,
+    outbox: new MailOutbox(dataSource, options.smtp),
+    appUrl: options.appUrl,
+    referenceCacheDir: options.referenceCacheDir,
+  });
   const pending: string[] = [];
-  const inline: ShardQueue = { enqueue: async (ids) => void pending.push(...ids), work: async () => undefined, stop: async () => undefined };
+  const inline: ShardQueue = {
+    enqueue: async (ids) => void pending.push(...ids),
+    work: async () => undefined,
+    stop: async () => undefined,
+  };
   const runs = new RunService(dataSource, inline);
-  const body = { name: plan.name, description: plan.description, recipients: plan.recipients, suites: plan.suites.map((s) => s.slug), targets: plan.targets.map((t) => t.name) };
+  const body = {
+    name: plan.name,
+    description: plan.description,
+    recipients: plan.recipients,
+    suites: plan.suites.map((s) => s.slug),
+    targets: plan.targets.map((t) => t.name),
+  };
   const runOnce = async () => {
     await runs.start(plan.id, 'schedule', kwame);
     for (const id of pending.splice(0)) await executor.execute(id);

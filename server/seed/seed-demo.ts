@@ -12,7 +12,12 @@ export async function seedDemo(dataSource: DataSource): Promise<number> {
   let added = 0;
   for (const demo of DEMO_USERS) {
     if (await users.existsBy({ email: demo.email })) continue;
-    await users.insert({ email: demo.email, displayName: demo.displayName, role: demo.role, passwordHash: await passwords.hash(demo.password) });
+    await users.insert({
+      email: demo.email,
+      displayName: demo.displayName,
+      role: demo.role,
+      passwordHash: await passwords.hash(demo.password),
+    });
     added += 1;
   }
   return added;

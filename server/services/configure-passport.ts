@@ -17,7 +17,9 @@ export function configurePassport(dataSource: DataSource, cache: ShortLivedCache
     new LocalStrategy({ usernameField: 'email', passwordField: 'password' }, (email, password, done) => {
       users
         .findOneBy({ email })
-        .then(async (user) => ((await passwords.verify(password, user?.passwordHash)) && user ? done(null, user) : done(null, false)))
+        .then(async (user) =>
+          (await passwords.verify(password, user?.passwordHash)) && user ? done(null, user) : done(null, false),
+        )
         .catch(done);
     }),
   );

@@ -16,7 +16,13 @@ export function createSessionStore(pool: Pool, ttlMs: number): session.Store {
   const cache = new ShortLivedCache<string>(ttlMs);
   // No touch: express-session would otherwise UPDATE the session row on every request; a
   // session therefore lasts its cookie's maxAge from sign-in, not from the last request.
-  const store = new PgStore({ pool, tableName: 'sessions', createTableIfMissing: false, pruneSessionInterval: 15 * 60, disableTouch: true });
+  const store = new PgStore({
+    pool,
+    tableName: 'sessions',
+    createTableIfMissing: false,
+    pruneSessionInterval: 15 * 60,
+    disableTouch: true,
+  });
   const get = store.get.bind(store);
   const set = store.set.bind(store);
   const destroy = store.destroy.bind(store);

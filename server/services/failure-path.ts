@@ -24,7 +24,8 @@ const MAX_POINTS = 20_000;
 const RECENT_PATHS = 64;
 const recent = new Map<string, PathValues>();
 
-const argOf = (re: number, im: number): number | null => (Number.isFinite(re) && Number.isFinite(im) ? Math.atan2(im, re) : null);
+const argOf = (re: number, im: number): number | null =>
+  Number.isFinite(re) && Number.isFinite(im) ? Math.atan2(im, re) : null;
 const xy = (re: number, im: number): PlaneXY | null => (Number.isFinite(re) && Number.isFinite(im) ? { re, im } : null);
 
 interface StoredPoint {
@@ -54,7 +55,11 @@ interface StoredPoint {
  * reads them: after the demo seed, all 69 failing paths of its two runs answered in 1–8 ms each
  * with nothing computed again.
  */
-export async function failurePath(dataSource: DataSource, failureId: string, referenceCacheDir: string | null = null): Promise<FailurePathView> {
+export async function failurePath(
+  dataSource: DataSource,
+  failureId: string,
+  referenceCacheDir: string | null = null,
+): Promise<FailurePathView> {
   const [row] = await dataSource.query(
     `SELECT f.id::text AS id, f.shard_id, sh.suite_version_id, f.path_name, f.point_index, f.target_name, f.suite_slug, v.body
        FROM failures f JOIN shards sh ON sh.id = f.shard_id JOIN suite_versions v ON v.id = sh.suite_version_id WHERE f.id = $1`,
@@ -63,22 +68,44 @@ export async function failurePath(dataSource: DataSource, failureId: string, ref
   if (!row) throw new HttpError(404, { kind: 'not-found', message: 'No failure with that number.' });
   const suite = row.body as Suite;
   const path = suite.paths.find((p) => p.name === row.path_name);
-  if (!path) throw new HttpError(404, { kind: 'not-found', message: `The suite version has no path named ${row.path_name}.` });
+  if (!path)
+    throw new HttpError(404, { kind: 'not-found', message: `The suite version has no path named ${row.path_name}.` });
   const expr = parseSubject(suite.subject);
-  const { points, expected, reference } = pathValues(`${row.suite_version_id}|${path.name}`, suite, expr, path, referenceCacheDir);
+  const { points, expected, reference } = pathValues(
+    `${row.suite_version_id}|${path.name}`,
+    suite,
+    expr,
+    path,
+    referenceCacheDir,
+  );
 
   const stored: StoredPoint[] = await dataSource.query(
     `SELECT id::text AS id, point_index, outcome_kind, diagnosis_kind, ulps, actual FROM failures WHERE shard_id = $1 AND path_name = $2 ORDER BY point_index`,
     [row.shard_id, row.path_name],
   );
   const byIndex = new Map(stored.map((s) => [s.point_index, s]));
-  const [summary] = await dataSource.query(`SELECT jumps, counts FROM path_summaries WHERE shard_id = $1 AND path_name = $2 LIMIT 1`, [row.shard_id, row.path_name]);
+  const [summary] = await dataSource.query(
+    `SELECT jumps, counts FROM path_summaries WHERE shard_id = $1 AND path_name = $2 LIMIT 1`,
+    [row.shard_id, row.path_name],
+  );
 
   const out: FailurePathPoint[] = points.map((p, i) => {
     const failed = byIndex.get(i);
     const hasExpected = !expected.skipped.has(i);
     const expectedArg = hasExpected ? argOf(expected.re[i] as number, expected.im[i] as number) : null;
-    if (!failed) return { index: i, t: p.t, z: xy(p.z.re, p.z.im), outcome: 'pass', diagnosis: null, ulps: null, expectedArg, actualArg: expectedArg, actualFrom: expectedArg === null ? 'none' : 'expected-within-tolerance', failureId: null };
+    if (!failed)
+      return {
+        index: i,
+        t: p.t,
+        z: xy(p.z.re, p.z.im),
+        outcome: 'pass',
+        diagnosis: null,
+        ulps: null,
+        expectedArg,
+        actualArg: expectedArg,
+        actualFrom: expectedArg === null ? 'none' : 'expected-within-tolerance',
+        failureId: null,
+      };
     const actualArg = failed.actual ? argOf(wireNumber(failed.actual.re), wireNumber(failed.actual.im)) : null;
     return {
       index: i,
@@ -105,7 +132,13 @@ export async function failurePath(dataSource: DataSource, failureId: string, ref
   return {
     failureId: row.id,
     focusIndex: row.point_index,
-    suite: { slug: row.suite_slug, version: suite.version, subject: suite.subject, branch: suite.branch.kind, convention: suite.convention },
+    suite: {
+      slug: row.suite_slug,
+      version: suite.version,
+      subject: suite.subject,
+      branch: suite.branch.kind,
+      convention: suite.convention,
+    },
     target: row.target_name,
     path: { name: path.name, kind: path.kind, points: points.length },
     axis: path.kind === 'straddle' || path.kind === 'grid' ? 'index' : 't',
@@ -128,7 +161,13 @@ type PathValues = { points: PathPoint[]; expected: ExpectedColumn; reference: Fa
  * reference values on disk where they are there (the complex-power straddle: 7–10 s to compute,
  * a file read instead), computed otherwise.
  */
-function pathValues(key: string, suite: Suite, expr: SubjectExpr, path: SuitePath, referenceCacheDir: string | null): PathValues {
+function pathValues(
+  key: string,
+  suite: Suite,
+  expr: SubjectExpr,
+  path: SuitePath,
+  referenceCacheDir: string | null,
+): PathValues {
   const known = recent.get(key);
   if (known) {
     recent.delete(key);
@@ -139,14 +178,28 @@ function pathValues(key: string, suite: Suite, expr: SubjectExpr, path: SuitePat
   try {
     points = buildPath(toPathSpec(path));
   } catch (e) {
-    throw new HttpError(409, { kind: 'conflict', message: `The path cannot be built: ${e instanceof Error ? e.message : String(e)}` });
+    throw new HttpError(409, {
+      kind: 'conflict',
+      message: `The path cannot be built: ${e instanceof Error ? e.message : String(e)}`,
+    });
   }
-  if (points.length > MAX_POINTS) throw new HttpError(409, { kind: 'conflict', message: `The path has ${points.length} points; pictures are drawn for paths of at most ${MAX_POINTS}.` });
+  if (points.length > MAX_POINTS)
+    throw new HttpError(409, {
+      kind: 'conflict',
+      message: `The path has ${points.length} points; pictures are drawn for paths of at most ${MAX_POINTS}.`,
+    });
   // Read only: values computed here are not written back, so the runs' files have one writer per process that runs shards.
   const cache = new ReferenceCache(referenceCacheDir);
   const cacheKey = suiteCacheKey(suite);
-  const expectation = suite.branch.kind === 'principal' ? principalExpectation(suite, expr, cache, cacheKey) : regularExpectation(suite, cache, cacheKey);
-  const value = { points, expected: expectation.expected(path, points), reference: { cached: cache.cached, computed: cache.computed } };
+  const expectation =
+    suite.branch.kind === 'principal'
+      ? principalExpectation(suite, expr, cache, cacheKey)
+      : regularExpectation(suite, cache, cacheKey);
+  const value = {
+    points,
+    expected: expectation.expected(path, points),
+    reference: { cached: cache.cached, computed: cache.computed },
+  };
   recent.set(key, value);
   if (recent.size > RECENT_PATHS) recent.delete(recent.keys().next().value as string);
   return value;
@@ -166,7 +219,11 @@ function expectedCuts(suite: Suite, expr: SubjectExpr): Pick<FailurePathView, 'c
   } else {
     const planeCuts = subjectCuts(expr, suite.branch);
     if (planeCuts === null) {
-      return { cuts: [], branchPoints: [], cutsNote: `The cuts of ${suite.subject} are preimages of its functions' cuts, which are not computed here; the jumps along the path still show where the library and the reference jump.` };
+      return {
+        cuts: [],
+        branchPoints: [],
+        cutsNote: `The cuts of ${suite.subject} are preimages of its functions' cuts, which are not computed here; the jumps along the path still show where the library and the reference jump.`,
+      };
     }
     for (const c of planeCuts) {
       const from = { re: c.from[0], im: c.from[1] };
@@ -176,6 +233,9 @@ function expectedCuts(suite: Suite, expr: SubjectExpr): Pick<FailurePathView, 'c
       if (!c.toInfinity) ends.push(to);
     }
   }
-  const branchPoints = ends.filter((p, i) => Number.isFinite(p.re) && Number.isFinite(p.im) && ends.findIndex((q) => q.re === p.re && q.im === p.im) === i);
+  const branchPoints = ends.filter(
+    (p, i) =>
+      Number.isFinite(p.re) && Number.isFinite(p.im) && ends.findIndex((q) => q.re === p.re && q.im === p.im) === i,
+  );
   return { cuts, branchPoints, cutsNote: cuts.length === 0 ? `${suite.subject} has no cuts.` : null };
 }

@@ -53,7 +53,11 @@ export function failureSearchSql(q: FailureQuery): { where: string; order: strin
   if (q.suite) add('suite_slug = ?', q.suite);
   if (q.target) add('target_name = ?', q.target);
   if (q.convention) add('convention = ?', q.convention);
-  if (q.fn) add(`suite_slug IN (SELECT s.slug FROM suites s JOIN suite_versions v ON v.suite_id = s.id WHERE v.body->>'subject' LIKE ? )`, `%${q.fn}(%`);
+  if (q.fn)
+    add(
+      `suite_slug IN (SELECT s.slug FROM suites s JOIN suite_versions v ON v.suite_id = s.id WHERE v.body->>'subject' LIKE ? )`,
+      `%${q.fn}(%`,
+    );
   if (q.diagnosis === 'error' || q.diagnosis === 'skipped') add('outcome_kind = ?', q.diagnosis);
   else if (q.diagnosis) add('diagnosis_kind = ?', q.diagnosis);
   if (q.status === 'new') where.push('is_regression');
@@ -66,7 +70,9 @@ export function failureSearchSql(q: FailureQuery): { where: string; order: strin
     if (q.after) {
       const [id, ulps] = q.after.split(':');
       params.push(Number(ulps ?? 0), id);
-      where.push(`(coalesce(ulps, 0) < $${params.length - 1} OR (coalesce(ulps, 0) = $${params.length - 1} AND id > $${params.length}))`);
+      where.push(
+        `(coalesce(ulps, 0) < $${params.length - 1} OR (coalesce(ulps, 0) = $${params.length - 1} AND id > $${params.length}))`,
+      );
     }
   } else if (q.after) add('id > ?', q.after.split(':')[0]);
   params.push(q.limit);

@@ -9,9 +9,16 @@ export type FailureRow = FailureView;
 const DETAIL_COLUMNS = `, rule, reproducer, limits`;
 
 /** One page of the failure table as rows, for the CSV export and one failure's detail. */
-export async function searchFailures(dataSource: DataSource, q: FailureQuery, detail = false): Promise<{ rows: FailureRow[]; next: string | null }> {
+export async function searchFailures(
+  dataSource: DataSource,
+  q: FailureQuery,
+  detail = false,
+): Promise<{ rows: FailureRow[]; next: string | null }> {
   const { where, order, params } = failureSearchSql(q);
-  const rows: FailureRow[] = await dataSource.query(`SELECT ${FAILURE_COLUMNS}${detail ? DETAIL_COLUMNS : ''} FROM failures f ${where} ORDER BY ${order} LIMIT $${params.length}`, params);
+  const rows: FailureRow[] = await dataSource.query(
+    `SELECT ${FAILURE_COLUMNS}${detail ? DETAIL_COLUMNS : ''} FROM failures f ${where} ORDER BY ${order} LIMIT $${params.length}`,
+    params,
+  );
   const last = rows[rows.length - 1];
   const next = rows.length === q.limit && last ? (q.sort === 'ulps' ? `${last.id}:${last.ulps ?? 0}` : last.id) : null;
   return { rows, next };

@@ -38,7 +38,11 @@ export class FakeSmtpServer {
             return;
           }
           const raw = Buffer.concat(chunks);
-          this.store(raw, session.envelope.mailFrom ? session.envelope.mailFrom.address : '', session.envelope.rcptTo.map((r) => r.address))
+          this.store(
+            raw,
+            session.envelope.mailFrom ? session.envelope.mailFrom.address : '',
+            session.envelope.rcptTo.map((r) => r.address),
+          )
             .then(() => callback())
             .catch((err: unknown) => callback(err instanceof Error ? err : new Error(String(err))));
         });

@@ -4,7 +4,11 @@ import type { FindingsReply, FindingsRequest } from './findings-messages';
 import { HttpError } from './http-error';
 import { InputError } from './input-error';
 
-type Pending = { resolve: (value: unknown) => void; reject: (err: Error) => void; timer: ReturnType<typeof setTimeout> };
+type Pending = {
+  resolve: (value: unknown) => void;
+  reject: (err: Error) => void;
+  timer: ReturnType<typeof setTimeout>;
+};
 /** What a caller sends: a request without its id (Omit applied to each kind of request). */
 type WithoutId<R> = R extends unknown ? Omit<R, 'id'> : never;
 type Ask = WithoutId<FindingsRequest>;
@@ -26,7 +30,16 @@ export class FindingsThread {
     const worker = this.start();
     const id = this.nextId++;
     return new Promise((resolve, reject) => {
-      const timer = setTimeout(() => this.stop(new HttpError(503, { kind: 'unavailable', message: `The library took longer than ${this.limitMs / 1000} s; it was stopped. Try a smaller request.` })), this.limitMs);
+      const timer = setTimeout(
+        () =>
+          this.stop(
+            new HttpError(503, {
+              kind: 'unavailable',
+              message: `The library took longer than ${this.limitMs / 1000} s; it was stopped. Try a smaller request.`,
+            }),
+          ),
+        this.limitMs,
+      );
       this.pending.set(id, { resolve, reject, timer });
       worker.postMessage({ ...request, id } as FindingsRequest);
     });
@@ -51,9 +64,12 @@ export class FindingsThread {
       else if (reply.failure.kind === 'input') waiting.reject(new InputError(reply.failure.issues));
       else waiting.reject(new Error(reply.failure.message));
     });
-    worker.on('error', (err) => this.stop(new HttpError(503, { kind: 'unavailable', message: `The findings thread failed: ${err.message}` })));
+    worker.on('error', (err) =>
+      this.stop(new HttpError(503, { kind: 'unavailable', message: `The findings thread failed: ${err.message}` })),
+    );
     worker.on('exit', () => {
-      if (this.worker === worker) this.stop(new HttpError(503, { kind: 'unavailable', message: 'The findings thread stopped.' }));
+      if (this.worker === worker)
+        this.stop(new HttpError(503, { kind: 'unavailable', message: 'The findings thread stopped.' }));
     });
     this.worker = worker;
     return worker;

@@ -23,7 +23,8 @@ const versionsByLibrary = new Map<string, TargetDescriptor[]>();
 
 const fn = (label: string) => {
   const found = FINGERPRINT_FUNCTIONS.find((f) => f.label === label);
-  if (!found) throw new InputError([{ field: 'query.fn', rule: `is not a function the fingerprint knows ("${label}")` }]);
+  if (!found)
+    throw new InputError([{ field: 'query.fn', rule: `is not a function the fingerprint knows ("${label}")` }]);
   return found;
 };
 
@@ -46,7 +47,8 @@ async function compute(request: FindingsRequest): Promise<unknown> {
       const f = fn(request.fn);
       const [re0, im0, re1, im1] = request.box;
       return withTarget(request.target, async (target) => {
-        if (!(await target.supports(f.op))) throw new InputError([{ field: 'query.fn', rule: `is not a function ${target.name} has (no ${f.op})` }]);
+        if (!(await target.supports(f.op)))
+          throw new InputError([{ field: 'query.fn', rule: `is not a function ${target.name} has (no ${f.op})` }]);
         return mapCuts(target, f, [re0, im0], [re1, im1], request.grid[0], request.grid[1]);
       });
     }

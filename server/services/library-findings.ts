@@ -45,29 +45,49 @@ export class LibraryFindings {
     private readonly thread = new FindingsThread(),
   ) {}
 
-  async fingerprint(name: string, functionLabels: string[] | undefined): Promise<{ fingerprint: ConventionFingerprint } & ComputedAnswer> {
+  async fingerprint(
+    name: string,
+    functionLabels: string[] | undefined,
+  ): Promise<{ fingerprint: ConventionFingerprint } & ComputedAnswer> {
     const functions = functionLabels
-      ? functionLabels.map((label) => FINGERPRINT_FUNCTIONS.find((f) => f.label === label) ?? unknownFunction('query.fn', label))
+      ? functionLabels.map(
+          (label) => FINGERPRINT_FUNCTIONS.find((f) => f.label === label) ?? unknownFunction('query.fn', label),
+        )
       : FINGERPRINT_FUNCTIONS;
     const labels = functions.map((f) => f.label);
     const key = `fingerprint|${name}|${labels.join(',')}`;
-    const { value, ms, fromCache } = await this.kept(key, () => this.thread.ask({ kind: 'fingerprint', target: name, functions: labels }));
+    const { value, ms, fromCache } = await this.kept(key, () =>
+      this.thread.ask({ kind: 'fingerprint', target: name, functions: labels }),
+    );
     return { fingerprint: value as ConventionFingerprint, computedMs: ms, fromCache };
   }
 
-  async cutMap(name: string, request: { fn: string; box: number[]; grid: number[] }): Promise<{ cutMap: CutMap } & ComputedAnswer> {
+  async cutMap(
+    name: string,
+    request: { fn: string; box: number[]; grid: number[] },
+  ): Promise<{ cutMap: CutMap } & ComputedAnswer> {
     const fn = FINGERPRINT_FUNCTIONS.find((f) => f.label === request.fn) ?? unknownFunction('query.fn', request.fn);
     const box = request.box as [number, number, number, number];
     const grid = request.grid as [number, number];
     const key = `cut-map|${name}|${fn.label}|${box.join(',')}|${grid[0]}x${grid[1]}`;
-    const { value, ms, fromCache } = await this.kept(key, () => this.thread.ask({ kind: 'cut-map', target: name, fn: fn.label, box, grid }));
+    const { value, ms, fromCache } = await this.kept(key, () =>
+      this.thread.ask({ kind: 'cut-map', target: name, fn: fn.label, box, grid }),
+    );
     return { cutMap: value as CutMap, computedMs: ms, fromCache };
   }
 
   async versionMatrix(library: string, slugs: string[]): Promise<{ matrix: VersionMatrix } & ComputedAnswer> {
     const targets = this.versionsOf(library);
-    if (targets.length === 0) throw new HttpError(404, { kind: 'not-found', message: `No installed library "${library}" (a target name without "@version", e.g. complex.js).` });
-    if (targets.length < 2) throw new HttpError(409, { kind: 'conflict', message: `"${library}" has one installed version (${targets[0]!.version}); a version matrix needs two or more.` });
+    if (targets.length === 0)
+      throw new HttpError(404, {
+        kind: 'not-found',
+        message: `No installed library "${library}" (a target name without "@version", e.g. complex.js).`,
+      });
+    if (targets.length < 2)
+      throw new HttpError(409, {
+        kind: 'conflict',
+        message: `"${library}" has one installed version (${targets[0]!.version}); a version matrix needs two or more.`,
+      });
     const rows: { slug: string; body: Suite }[] = await this.dataSource.query(
       `SELECT DISTINCT ON (s.slug) s.slug, v.body
          FROM suites s JOIN suite_versions v ON v.suite_id = s.id
@@ -77,10 +97,13 @@ export class LibraryFindings {
     );
     const bySlug = new Map(rows.map((r) => [r.slug, r.body]));
     const absent = slugs.filter((s) => !bySlug.has(s));
-    if (absent.length > 0) throw new InputError([{ field: 'query.suite', rule: `has no approved version: ${absent.join(', ')}` }]);
+    if (absent.length > 0)
+      throw new InputError([{ field: 'query.suite', rule: `has no approved version: ${absent.join(', ')}` }]);
     const suites = [...new Set(slugs)].map((s) => bySlug.get(s)!);
     const key = `matrix|${targets.map((t) => t.name).join(',')}|${suites.map((s) => `${s.id}@${s.version}`).join(',')}`;
-    const { value, ms, fromCache } = await this.kept(key, () => this.thread.ask({ kind: 'version-matrix', library, suites }));
+    const { value, ms, fromCache } = await this.kept(key, () =>
+      this.thread.ask({ kind: 'version-matrix', library, suites }),
+    );
     return { matrix: value as VersionMatrix, computedMs: ms, fromCache };
   }
 
@@ -112,5 +135,10 @@ export class LibraryFindings {
 }
 
 function unknownFunction(field: string, label: string): never {
-  throw new InputError([{ field, rule: `is not a function the fingerprint knows ("${label}"); known: ${FINGERPRINT_FUNCTIONS.map((f) => f.label).join(', ')}` }]);
+  throw new InputError([
+    {
+      field,
+      rule: `is not a function the fingerprint knows ("${label}"); known: ${FINGERPRINT_FUNCTIONS.map((f) => f.label).join(', ')}`,
+    },
+  ]);
 }

@@ -22,7 +22,10 @@ const waitingSql = (where: string) => `
    WHERE ${where}
    ORDER BY since ASC, s.slug`;
 
-const toWaiting = (row: Omit<WaitingSuite, 'since'> & { since: Date }): WaitingSuite => ({ ...row, since: new Date(row.since).toISOString() });
+const toWaiting = (row: Omit<WaitingSuite, 'since'> & { since: Date }): WaitingSuite => ({
+  ...row,
+  since: new Date(row.since).toISOString(),
+});
 
 /**
  * The Overview in one answer, so the screen makes one round trip: the latest finished run of
@@ -41,7 +44,9 @@ export async function loadOverview(dataSource: DataSource, user: User): Promise<
       ORDER BY latest.created_at DESC NULLS LAST, p.name`,
   );
   const runIds = plans.flatMap((p) => [p.latest, p.previous]).filter((id): id is string => id !== null);
-  const runs = runIds.length ? await dataSource.getRepository(Run).find({ where: { id: In(runIds) }, relations: RUN_RELATIONS }) : [];
+  const runs = runIds.length
+    ? await dataSource.getRepository(Run).find({ where: { id: In(runIds) }, relations: RUN_RELATIONS })
+    : [];
   const byId = new Map(runs.map((r) => [r.id, r]));
 
   const inProgress = await dataSource.getRepository(Run).find({
@@ -53,11 +58,13 @@ export async function loadOverview(dataSource: DataSource, user: User): Promise<
 
   const canReview = user.role === 'reviewer' || user.role === 'admin';
   const reviewQueue = canReview ? (await dataSource.query(waitingSql(`v.status = 'submitted'`))).map(toWaiting) : null;
-  const changesRequested = (await dataSource.query(waitingSql(`v.status = 'changes-requested' AND v.author_id = $1`), [user.id])).map(toWaiting);
+  const changesRequested = (
+    await dataSource.query(waitingSql(`v.status = 'changes-requested' AND v.author_id = $1`), [user.id])
+  ).map(toWaiting);
 
-  const subscriptions: string[] = (await dataSource.query(`SELECT target_key FROM subscriptions WHERE user_id = $1 ORDER BY target_key`, [user.id])).map(
-    (r: { target_key: string }) => r.target_key,
-  );
+  const subscriptions: string[] = (
+    await dataSource.query(`SELECT target_key FROM subscriptions WHERE user_id = $1 ORDER BY target_key`, [user.id])
+  ).map((r: { target_key: string }) => r.target_key);
   const regressions: SubscribedRegression[] = subscriptions.length
     ? (
         await dataSource.query(
@@ -70,7 +77,10 @@ export async function loadOverview(dataSource: DataSource, user: User): Promise<
             ORDER BY l.finished_at DESC, 1`,
           [subscriptions],
         )
-      ).map((r: Omit<SubscribedRegression, 'finishedAt'> & { finishedAt: Date }) => ({ ...r, finishedAt: new Date(r.finishedAt).toISOString() }))
+      ).map((r: Omit<SubscribedRegression, 'finishedAt'> & { finishedAt: Date }) => ({
+        ...r,
+        finishedAt: new Date(r.finishedAt).toISOString(),
+      }))
     : [];
 
   return {
@@ -81,7 +91,13 @@ export async function loadOverview(dataSource: DataSource, user: User): Promise<
         planId: p.id,
         planName: p.name,
         latest: latest ? toRunView(latest) : null,
-        previous: previous ? { id: previous.id, counts: previous.counts as OutcomeCounts, finishedAt: previous.finishedAt?.toISOString() ?? null } : null,
+        previous: previous
+          ? {
+              id: previous.id,
+              counts: previous.counts as OutcomeCounts,
+              finishedAt: previous.finishedAt?.toISOString() ?? null,
+            }
+          : null,
       };
     }),
     inProgress: inProgress.map(toRunView),

@@ -19,12 +19,28 @@ export class MailOutbox {
     smtp: { host: string; port: number },
     private readonly from = 'Sheetkeeper <sheetkeeper@localhost>',
   ) {
-    this.transport = nodemailer.createTransport({ host: smtp.host, port: smtp.port, secure: false, ignoreTLS: true, connectionTimeout: 5000, greetingTimeout: 5000, socketTimeout: 10000 });
+    this.transport = nodemailer.createTransport({
+      host: smtp.host,
+      port: smtp.port,
+      secure: false,
+      ignoreTLS: true,
+      connectionTimeout: 5000,
+      greetingTimeout: 5000,
+      socketTimeout: 10000,
+    });
   }
 
   async enqueue(mail: NewMail, tx: EntityManager = this.dataSource.manager): Promise<string> {
     if (mail.recipients.length === 0) throw new Error('a mail needs at least one recipient');
-    const result = await tx.getRepository(OutboxMail).insert({ kind: mail.kind, recipients: mail.recipients, subject: mail.subject, textBody: mail.text, htmlBody: mail.html });
+    const result = await tx
+      .getRepository(OutboxMail)
+      .insert({
+        kind: mail.kind,
+        recipients: mail.recipients,
+        subject: mail.subject,
+        textBody: mail.text,
+        htmlBody: mail.html,
+      });
     return result.identifiers[0]!.id as string;
   }
 
@@ -39,7 +55,10 @@ export class MailOutbox {
       const due = await tx
         .getRepository(OutboxMail)
         .createQueryBuilder('m')
-        .where('m.status = :pending AND m.next_attempt_at <= coalesce(:at::timestamptz, clock_timestamp())', { pending: 'pending', at: at ?? null })
+        .where('m.status = :pending AND m.next_attempt_at <= coalesce(:at::timestamptz, clock_timestamp())', {
+          pending: 'pending',
+          at: at ?? null,
+        })
         .orderBy('m.next_attempt_at', 'ASC')
         .limit(limit)
         .setLock('pessimistic_write')
@@ -49,8 +68,17 @@ export class MailOutbox {
       let failed = 0;
       for (const mail of due) {
         try {
-          await this.transport.sendMail({ from: this.from, to: mail.recipients, subject: mail.subject, text: mail.textBody, html: mail.htmlBody, messageId: `<${mail.id}@sheetkeeper.local>` });
-          await tx.getRepository(OutboxMail).update(mail.id, { status: 'sent', sentAt: new Date(), attempts: mail.attempts + 1, lastError: null });
+          await this.transport.sendMail({
+            from: this.from,
+            to: mail.recipients,
+            subject: mail.subject,
+            text: mail.textBody,
+            html: mail.htmlBody,
+            messageId: `<${mail.id}@sheetkeeper.local>`,
+          });
+          await tx
+            .getRepository(OutboxMail)
+            .update(mail.id, { status: 'sent', sentAt: new Date(), attempts: mail.attempts + 1, lastError: null });
           sent += 1;
         } catch (err) {
           const attempts = mail.attempts + 1;

@@ -6,7 +6,6 @@ import { regressionMail } from './regression-mail';
 import type { RegressionRow } from './regression-row';
 import { targetKeySql } from './target-key-sql';
 
-
 /**
  * Completes a run: marks as regressions the failing points that passed in the previous
  * completed run of the same plan — the same suite, path and input bits, on the same target
@@ -14,13 +13,22 @@ import { targetKeySql } from './target-key-sql';
  * unexpired accepted deviation — and queues one mail to the plan's recipients and the
  * subscribers of the libraries that regressed, when there are any. Runs inside the caller's transaction.
  */
-export async function markRegressions(tx: EntityManager, runId: string, mail: { outbox: MailOutbox; appUrl: string }): Promise<number> {
+export async function markRegressions(
+  tx: EntityManager,
+  runId: string,
+  mail: { outbox: MailOutbox; appUrl: string },
+): Promise<number> {
   const run = await tx.getRepository(Run).findOneOrFail({ where: { id: runId }, relations: { plan: true } });
   const previous = run.plan
     ? await tx
         .getRepository(Run)
         .createQueryBuilder('r')
-        .where('r.plan_id = :plan AND r.status = :done AND r.created_at < :at AND r.id <> :id', { plan: run.plan.id, done: 'completed', at: run.createdAt, id: run.id })
+        .where('r.plan_id = :plan AND r.status = :done AND r.created_at < :at AND r.id <> :id', {
+          plan: run.plan.id,
+          done: 'completed',
+          at: run.createdAt,
+          id: run.id,
+        })
         .orderBy('r.created_at', 'DESC')
         .getOne()
     : null;
@@ -80,7 +88,18 @@ export async function markRegressions(tx: EntityManager, runId: string, mail: { 
           [run.id, previous.id],
         )
       : [];
-    await mail.outbox.enqueue(regressionMail({ recipients, planName: run.planName, runId: run.id, appUrl: mail.appUrl, rows, total: count, versionChanges }), tx);
+    await mail.outbox.enqueue(
+      regressionMail({
+        recipients,
+        planName: run.planName,
+        runId: run.id,
+        appUrl: mail.appUrl,
+        rows,
+        total: count,
+        versionChanges,
+      }),
+      tx,
+    );
   }
   return count;
 }

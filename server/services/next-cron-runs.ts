@@ -2,7 +2,14 @@ import { createTask, validateDetailed } from 'node-cron';
 import { InputError } from './input-error';
 
 /** node-cron's names for the parts of an expression, as a person says them. */
-const PART_NAMES: Record<string, string> = { second: 'second', minute: 'minute', hour: 'hour', dayOfMonth: 'day-of-month', month: 'month', dayOfWeek: 'day-of-week' };
+const PART_NAMES: Record<string, string> = {
+  second: 'second',
+  minute: 'minute',
+  hour: 'hour',
+  dayOfMonth: 'day-of-month',
+  month: 'month',
+  dayOfWeek: 'day-of-week',
+};
 
 /**
  * Checks a cron expression field by field with node-cron and answers the next `count` times it

@@ -11,5 +11,6 @@ const DECOY_HASH = bcrypt.hashSync(`decoy-${Math.random()}`, BCRYPT_COST);
 
 export const passwords = {
   hash: (plain: string): Promise<string> => bcrypt.hash(plain, BCRYPT_COST),
-  verify: (plain: string, hash: string | undefined): Promise<boolean> => bcrypt.compare(plain, hash ?? DECOY_HASH).then((ok) => ok && hash !== undefined),
+  verify: (plain: string, hash: string | undefined): Promise<boolean> =>
+    bcrypt.compare(plain, hash ?? DECOY_HASH).then((ok) => ok && hash !== undefined),
 };

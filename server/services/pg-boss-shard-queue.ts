@@ -53,9 +53,13 @@ export class PgBossShardQueue implements ShardQueue {
 
   async work(handle: (shardId: string) => Promise<void>): Promise<void> {
     await this.start();
-    await this.boss.work<{ shardId: string }>(QUEUE, { batchSize: 1, pollingIntervalSeconds: this.options.pollingIntervalSeconds ?? 1 }, async ([job]) => {
-      if (job) await handle(job.data.shardId);
-    });
+    await this.boss.work<{ shardId: string }>(
+      QUEUE,
+      { batchSize: 1, pollingIntervalSeconds: this.options.pollingIntervalSeconds ?? 1 },
+      async ([job]) => {
+        if (job) await handle(job.data.shardId);
+      },
+    );
   }
 
   async stop(): Promise<void> {

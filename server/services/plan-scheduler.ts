@@ -37,7 +37,9 @@ export class PlanScheduler {
 
   /** Brings the node-cron tasks in line with the enabled schedules in the database. */
   async reload(): Promise<void> {
-    const schedules = await this.dataSource.getRepository(Schedule).find({ where: { enabled: true }, relations: { plan: true } });
+    const schedules = await this.dataSource
+      .getRepository(Schedule)
+      .find({ where: { enabled: true }, relations: { plan: true } });
     const wanted = new Map(schedules.map((s) => [s.id, s]));
     for (const [id, entry] of this.tasks) {
       const s = wanted.get(id);
@@ -48,7 +50,11 @@ export class PlanScheduler {
     }
     for (const s of schedules) {
       if (this.tasks.has(s.id)) continue;
-      const task = createTask(s.cron, (ctx) => this.fire(s.id, s.plan.id, ctx.date).then(() => undefined, this.onError), { timezone: s.timeZone, name: `schedule ${s.id}`, noOverlap: true });
+      const task = createTask(
+        s.cron,
+        (ctx) => this.fire(s.id, s.plan.id, ctx.date).then(() => undefined, this.onError),
+        { timezone: s.timeZone, name: `schedule ${s.id}`, noOverlap: true },
+      );
       await task.start();
       this.tasks.set(s.id, { task, signature: signatureOf(s) });
     }
@@ -67,10 +73,18 @@ export class PlanScheduler {
     if (claimed.length === 0) return null;
     try {
       const runId = await this.startRun(planId, scheduleId, due);
-      await this.dataSource.query(`UPDATE schedule_firings SET outcome = $3 WHERE schedule_id = $1 AND due_at = $2`, [scheduleId, due, `run ${runId}`]);
+      await this.dataSource.query(`UPDATE schedule_firings SET outcome = $3 WHERE schedule_id = $1 AND due_at = $2`, [
+        scheduleId,
+        due,
+        `run ${runId}`,
+      ]);
       return runId;
     } catch (err) {
-      await this.dataSource.query(`UPDATE schedule_firings SET outcome = $3 WHERE schedule_id = $1 AND due_at = $2`, [scheduleId, due, `no run: ${err instanceof Error ? err.message : String(err)}`]);
+      await this.dataSource.query(`UPDATE schedule_firings SET outcome = $3 WHERE schedule_id = $1 AND due_at = $2`, [
+        scheduleId,
+        due,
+        `no run: ${err instanceof Error ? err.message : String(err)}`,
+      ]);
       throw err;
     }
   }

@@ -25,7 +25,9 @@ export class PlanService {
     return this.dataSource
       .transaction(async (tx) => {
         const plans = tx.getRepository(Plan);
-        const plan = id ? await plans.findOne({ where: { id }, lock: { mode: 'pessimistic_write' } }) : plans.create({ createdBy: user });
+        const plan = id
+          ? await plans.findOne({ where: { id }, lock: { mode: 'pessimistic_write' } })
+          : plans.create({ createdBy: user });
         if (!plan) throw notFound();
         plan.name = body.name;
         plan.description = body.description;
@@ -36,7 +38,8 @@ export class PlanService {
         return this.view(tx, saved.id);
       })
       .catch((e: unknown) => {
-        if ((e as { driverError?: { code?: string } }).driverError?.code === '23505') throw new InputError([{ field: 'body.name', rule: 'is taken by another plan' }]);
+        if ((e as { driverError?: { code?: string } }).driverError?.code === '23505')
+          throw new InputError([{ field: 'body.name', rule: 'is taken by another plan' }]);
         throw e;
       });
   }
@@ -55,7 +58,8 @@ export class PlanService {
     const issues = slugs.flatMap((slug, i) => {
       const row = bySlug.get(slug);
       if (!row) return [{ field: `body.suites.${i}`, rule: `names no suite ("${slug}")` }];
-      if (row.approved === null) return [{ field: `body.suites.${i}`, rule: `has no approved version yet ("${slug}")` }];
+      if (row.approved === null)
+        return [{ field: `body.suites.${i}`, rule: `has no approved version yet ("${slug}")` }];
       return [];
     });
     if (issues.length > 0) throw new InputError(issues);
@@ -68,7 +72,8 @@ export class PlanService {
     const issues = names.flatMap((name, i) => {
       const target = known.get(name);
       if (!target) return [{ field: `body.targets.${i}`, rule: `names no known target ("${name}")` }];
-      if (!target.installed) return [{ field: `body.targets.${i}`, rule: `is not installed on this server ("${name}")` }];
+      if (!target.installed)
+        return [{ field: `body.targets.${i}`, rule: `is not installed on this server ("${name}")` }];
       return [];
     });
     if (issues.length > 0) throw new InputError(issues);
@@ -76,7 +81,9 @@ export class PlanService {
   }
 
   private async view(tx: EntityManager, id: string): Promise<PlanView> {
-    const plan = await tx.getRepository(Plan).findOne({ where: { id }, relations: { suites: true, targets: true, createdBy: true } });
+    const plan = await tx
+      .getRepository(Plan)
+      .findOne({ where: { id }, relations: { suites: true, targets: true, createdBy: true } });
     if (!plan) throw notFound();
     const suiteRows: { slug: string; title: string | null; approved: number | null }[] = plan.suites.length
       ? await tx.query(
@@ -93,7 +100,9 @@ export class PlanService {
       description: plan.description,
       recipients: plan.recipients,
       suites: suiteRows.map((r) => ({ slug: r.slug, title: r.title ?? r.slug, approvedVersion: r.approved })),
-      targets: plan.targets.map((t) => ({ name: t.name, installed: t.installed })).sort((a, b) => a.name.localeCompare(b.name)),
+      targets: plan.targets
+        .map((t) => ({ name: t.name, installed: t.installed }))
+        .sort((a, b) => a.name.localeCompare(b.name)),
       createdBy: plan.createdBy.displayName,
       updatedAt: plan.updatedAt.toISOString(),
     };

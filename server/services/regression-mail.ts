@@ -8,8 +8,10 @@ import type { RegressionRow } from './regression-row';
 /** At most this many rows in one mail; the rest are counted and linked. */
 const MAX_ROWS = 50;
 
-const c = (v: WireComplex | null) => (v ? `${v.re} ${v.im.startsWith('-') ? '−' : '+'} ${v.im.replace(/^-/, '')}i` : '—');
-const escape = (s: string) => s.replace(/[&<>"']/g, (ch) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[ch]!);
+const c = (v: WireComplex | null) =>
+  v ? `${v.re} ${v.im.startsWith('-') ? '−' : '+'} ${v.im.replace(/^-/, '')}i` : '—';
+const escape = (s: string) =>
+  s.replace(/[&<>"']/g, (ch) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[ch]!);
 const describe = (d: Diagnosis | null): string => {
   if (!d) return 'error';
   switch (d.kind) {
@@ -47,7 +49,8 @@ export function regressionMail(input: {
   const subject = `[Sheetkeeper] ${total} regression${total === 1 ? '' : 's'} in ${input.planName}`;
   const lead = `${total} point${total === 1 ? '' : 's'} passed in the previous completed run of "${input.planName}" and fail now.`;
   const changes = input.versionChanges.map((v) => `${v.key}: ${v.from} → ${v.to}`);
-  const scope = 'A regression is judged only at the points, paths and conventions the suites check; points outside them were not looked at.';
+  const scope =
+    'A regression is judged only at the points, paths and conventions the suites check; points outside them were not looked at.';
   const shown = rows.slice(0, MAX_ROWS);
   const more = total - shown.length;
   const text = [
@@ -75,7 +78,8 @@ export function regressionMail(input: {
 <tbody>
 ${shown
   .map((r) => {
-    const line = (label: string, value: string) => `<tr><th align="left" valign="top" style="width: 6.5em; font-weight: normal; color: #4D5A68">${label}</th><td style="word-break: break-word">${value}</td></tr>`;
+    const line = (label: string, value: string) =>
+      `<tr><th align="left" valign="top" style="width: 6.5em; font-weight: normal; color: #4D5A68">${label}</th><td style="word-break: break-word">${value}</td></tr>`;
     return [
       `<tr><th colspan="2" align="left" style="background: #F4F1EA">${escape(`${r.suiteSlug} × ${r.targetName}`)} — ${escape(r.pathName)}</th></tr>`,
       line('Input', `<code>z = ${escape(c(r.z))}</code><br><code>bits ${escape(`${r.zHex.re}, ${r.zHex.im}`)}</code>`),
@@ -83,7 +87,10 @@ ${shown
       line('Actual', `<code>${escape(c(r.actual))}</code>`),
       line('Diagnosis', escape(describe(r.diagnosis))),
       line('Rule', escape(r.rule)),
-      line('Reproducer', `<pre style="white-space: pre-wrap; word-break: break-all; margin: 0">${escape(r.reproducer)}</pre>`),
+      line(
+        'Reproducer',
+        `<pre style="white-space: pre-wrap; word-break: break-all; margin: 0">${escape(r.reproducer)}</pre>`,
+      ),
       line('Case', `<a href="${escape(link(r.id))}">open the case</a>`),
     ].join('\n');
   })

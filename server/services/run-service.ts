@@ -26,25 +26,72 @@ export class RunService {
 
   async start(planId: string, trigger: RunTrigger, user: User | null): Promise<RunView> {
     const { run, shardIds } = await this.dataSource.transaction(async (tx) => {
-      const plan = await tx.getRepository(Plan).findOne({ where: { id: planId }, relations: { suites: true, targets: true } });
+      const plan = await tx
+        .getRepository(Plan)
+        .findOne({ where: { id: planId }, relations: { suites: true, targets: true } });
       if (!plan) throw new HttpError(404, { kind: 'not-found', message: 'No plan with that id.' });
       // Each suite's newest approved version, in one query rather than one per suite.
       const newest: { id: string }[] = plan.suites.length
-        ? await tx.query(`SELECT DISTINCT ON (suite_id) id FROM suite_versions WHERE suite_id = ANY($1) AND status = 'approved' ORDER BY suite_id, version DESC`, [plan.suites.map((x) => x.id)])
+        ? await tx.query(
+            `SELECT DISTINCT ON (suite_id) id FROM suite_versions WHERE suite_id = ANY($1) AND status = 'approved' ORDER BY suite_id, version DESC`,
+            [plan.suites.map((x) => x.id)],
+          )
         : [];
-      const versions = newest.length ? await tx.getRepository(SuiteVersion).find({ where: { id: In(newest.map((v) => v.id)) }, relations: { suite: true }, order: { suite: { slug: 'ASC' } } }) : [];
+      const versions = newest.length
+        ? await tx
+            .getRepository(SuiteVersion)
+            .find({
+              where: { id: In(newest.map((v) => v.id)) },
+              relations: { suite: true },
+              order: { suite: { slug: 'ASC' } },
+            })
+        : [];
       const targets = plan.targets.filter((t) => t.installed);
       if (versions.length === 0 || targets.length === 0) {
-        throw new HttpError(409, { kind: 'conflict', message: `Plan "${plan.name}" has nothing to run: ${versions.length} approved suite(s), ${targets.length} installed target(s).` });
+        throw new HttpError(409, {
+          kind: 'conflict',
+          message: `Plan "${plan.name}" has nothing to run: ${versions.length} approved suite(s), ${targets.length} installed target(s).`,
+        });
       }
-      const run = await tx.getRepository(Run).save(
-        tx.getRepository(Run).create({ plan, planName: plan.name, trigger, requestedBy: user, status: 'queued', shardsTotal: versions.length * targets.length, shardsDone: 0, counts: { pass: 0, fail: 0, error: 0, skipped: 0 }, regressions: null }),
-      );
-      const shards = await tx.getRepository(Shard).save(
-        versions.flatMap((v) =>
-          targets.map((t) => tx.getRepository(Shard).create({ run, suiteVersion: v, suiteSlug: v.suite.slug, targetName: t.name, targetLibrary: t.library, targetVersion: t.version, status: 'queued', outcome: null, attempts: 0, errors: [] })),
-        ),
-      );
+      const run = await tx
+        .getRepository(Run)
+        .save(
+          tx
+            .getRepository(Run)
+            .create({
+              plan,
+              planName: plan.name,
+              trigger,
+              requestedBy: user,
+              status: 'queued',
+              shardsTotal: versions.length * targets.length,
+              shardsDone: 0,
+              counts: { pass: 0, fail: 0, error: 0, skipped: 0 },
+              regressions: null,
+            }),
+        );
+      const shards = await tx
+        .getRepository(Shard)
+        .save(
+          versions.flatMap((v) =>
+            targets.map((t) =>
+              tx
+                .getRepository(Shard)
+                .create({
+                  run,
+                  suiteVersion: v,
+                  suiteSlug: v.suite.slug,
+                  targetName: t.name,
+                  targetLibrary: t.library,
+                  targetVersion: t.version,
+                  status: 'queued',
+                  outcome: null,
+                  attempts: 0,
+                  errors: [],
+                }),
+            ),
+          ),
+        );
       return { run, shardIds: shards.map((s) => s.id) };
     });
     await this.queue.enqueue(shardIds);
@@ -76,7 +123,9 @@ export class RunService {
     if (query.status) qb.andWhere('r.status = :status', { status: query.status });
     if (query.trigger) qb.andWhere('r.trigger = :trigger', { trigger: query.trigger });
     if (query.before) {
-      qb.andWhere('(r.created_at, r.id) < (SELECT b.created_at, b.id FROM runs b WHERE b.id = :before)', { before: query.before });
+      qb.andWhere('(r.created_at, r.id) < (SELECT b.created_at, b.id FROM runs b WHERE b.id = :before)', {
+        before: query.before,
+      });
     }
     const rows = await qb.getMany();
     const page = rows.slice(0, limit);
@@ -89,9 +138,12 @@ export class RunService {
       const [locked] = await tx.query(`SELECT id FROM runs WHERE id = $1 FOR NO KEY UPDATE`, [id]);
       const run = locked ? await tx.getRepository(Run).findOneBy({ id }) : null;
       if (!run) throw new HttpError(404, { kind: 'not-found', message: 'No run with that id.' });
-      if (run.status !== 'queued' && run.status !== 'running') throw new HttpError(409, { kind: 'conflict', message: `The run is ${run.status} already.` });
+      if (run.status !== 'queued' && run.status !== 'running')
+        throw new HttpError(409, { kind: 'conflict', message: `The run is ${run.status} already.` });
       await tx.getRepository(Run).update(id, { status: 'cancelled', finishedAt: new Date() });
-      await tx.query(`UPDATE shards SET status = 'cancelled' WHERE run_id = $1 AND status IN ('queued', 'running')`, [id]);
+      await tx.query(`UPDATE shards SET status = 'cancelled' WHERE run_id = $1 AND status IN ('queued', 'running')`, [
+        id,
+      ]);
     });
     return this.get(id);
   }

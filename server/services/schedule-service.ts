@@ -12,15 +12,22 @@ export class ScheduleService {
   constructor(private readonly dataSource: DataSource) {}
 
   async list(): Promise<ScheduleView[]> {
-    const rows = await this.dataSource.getRepository(Schedule).find({ relations: { plan: true }, order: { createdAt: 'ASC' } });
+    const rows = await this.dataSource
+      .getRepository(Schedule)
+      .find({ relations: { plan: true }, order: { createdAt: 'ASC' } });
     return rows.map(toView);
   }
 
-  async create(user: User, body: { planId: string; cron: string; timeZone: string; enabled: boolean }): Promise<ScheduleView> {
+  async create(
+    user: User,
+    body: { planId: string; cron: string; timeZone: string; enabled: boolean },
+  ): Promise<ScheduleView> {
     nextCronRuns(body.cron, body.timeZone);
     const plan = await this.dataSource.getRepository(Plan).findOneBy({ id: body.planId });
     if (!plan) throw new InputError([{ field: 'body.planId', rule: 'names no plan' }]);
-    const saved = await this.dataSource.getRepository(Schedule).save({ plan, cron: body.cron, timeZone: body.timeZone, enabled: body.enabled, createdBy: user });
+    const saved = await this.dataSource
+      .getRepository(Schedule)
+      .save({ plan, cron: body.cron, timeZone: body.timeZone, enabled: body.enabled, createdBy: user });
     return toView({ ...saved, plan } as Schedule);
   }
 
@@ -28,7 +35,11 @@ export class ScheduleService {
     const schedules = this.dataSource.getRepository(Schedule);
     const schedule = await schedules.findOne({ where: { id }, relations: { plan: true } });
     if (!schedule) throw notFound();
-    const next = { cron: patch.cron ?? schedule.cron, timeZone: patch.timeZone ?? schedule.timeZone, enabled: patch.enabled ?? schedule.enabled };
+    const next = {
+      cron: patch.cron ?? schedule.cron,
+      timeZone: patch.timeZone ?? schedule.timeZone,
+      enabled: patch.enabled ?? schedule.enabled,
+    };
     nextCronRuns(next.cron, next.timeZone);
     await schedules.update(id, next);
     return toView({ ...schedule, ...next } as Schedule);

@@ -51,10 +51,17 @@ export class ShardExecutor {
   }
 
   async execute(shardId: string): Promise<void> {
-    const shard = await this.dataSource.getRepository(Shard).findOne({ where: { id: shardId }, relations: { run: true, suiteVersion: true } });
+    const shard = await this.dataSource
+      .getRepository(Shard)
+      .findOne({ where: { id: shardId }, relations: { run: true, suiteVersion: true } });
     if (!shard || shard.status === 'done' || shard.status === 'cancelled' || shard.run.status === 'cancelled') return;
-    await this.dataSource.query(`UPDATE shards SET status = 'running', attempts = attempts + 1 WHERE id = $1`, [shardId]);
-    await this.dataSource.query(`UPDATE runs SET status = 'running', started_at = coalesce(started_at, now()) WHERE id = $1 AND status = 'queued'`, [shard.run.id]);
+    await this.dataSource.query(`UPDATE shards SET status = 'running', attempts = attempts + 1 WHERE id = $1`, [
+      shardId,
+    ]);
+    await this.dataSource.query(
+      `UPDATE runs SET status = 'running', started_at = coalesce(started_at, now()) WHERE id = $1 AND status = 'queued'`,
+      [shard.run.id],
+    );
 
     const result = await this.evaluate(shard);
     await this.dataSource.transaction(async (tx) => {
@@ -62,7 +69,9 @@ export class ShardExecutor {
       // rows inserted below take KEY SHARE locks on the run: with FOR UPDATE two shards finishing
       // at once deadlocked (seen in bench:server with two workers).
       await tx.query(`SELECT id FROM runs WHERE id = $1 FOR NO KEY UPDATE`, [shard.run.id]);
-      const locked = await tx.getRepository(Shard).findOne({ where: { id: shardId }, lock: { mode: 'pessimistic_write' } });
+      const locked = await tx
+        .getRepository(Shard)
+        .findOne({ where: { id: shardId }, lock: { mode: 'pessimistic_write' } });
       if (!locked || locked.status === 'done' || locked.status === 'cancelled') return;
       await storeResult(tx, shard, result);
       const run = await tx.getRepository(Run).findOneOrFail({ where: { id: shard.run.id } });
@@ -81,13 +90,24 @@ export class ShardExecutor {
     const body = shard.suiteVersion.body;
     if (!target) return errorResult(shard, `target ${shard.targetName} is not installed on this worker`);
     const controller = new AbortController();
-    const timer = setTimeout(() => controller.abort(new Error(`the shard took longer than ${this.options.shardTimeoutMs} ms`)), this.options.shardTimeoutMs ?? 300_000);
+    const timer = setTimeout(
+      () => controller.abort(new Error(`the shard took longer than ${this.options.shardTimeoutMs} ms`)),
+      this.options.shardTimeoutMs ?? 300_000,
+    );
     try {
-      const result = await evaluateSuite(body, target, { cache: this.cache, signal: controller.signal, maxFindings: Number.MAX_SAFE_INTEGER });
+      const result = await evaluateSuite(body, target, {
+        cache: this.cache,
+        signal: controller.signal,
+        maxFindings: Number.MAX_SAFE_INTEGER,
+      });
       if (body.properties.length > 0 && result.status !== 'cancelled') {
         const outcomes = await checkSuiteProperties(body, target);
         result.properties = outcomes;
-        result.checked.properties = { listed: body.properties.map((p) => p.law), run: true, note: `${outcomes.length} property check(s) run` };
+        result.checked.properties = {
+          listed: body.properties.map((p) => p.law),
+          run: true,
+          note: `${outcomes.length} property check(s) run`,
+        };
         if (result.status === 'pass' && outcomes.some((o) => o.kind === 'failed')) result.status = 'fail';
       }
       return result;
@@ -112,7 +132,14 @@ function errorResult(shard: Shard, message: string): SuiteTargetResult {
     suite: { id: body.id, version: body.version, title: body.title, subject: body.subject },
     target: { name: shard.targetName, library: shard.targetLibrary, version: shard.targetVersion, settings: {} },
     status: 'error',
-    checked: { convention: body.convention, branch: body.branch.kind, tolerance: '', paths: 0, points: 0, properties: { listed: [], run: false, note: 'not run' } },
+    checked: {
+      convention: body.convention,
+      branch: body.branch.kind,
+      tolerance: '',
+      paths: 0,
+      points: 0,
+      properties: { listed: [], run: false, note: 'not run' },
+    },
     counts: { pass: 0, fail: 0, error: 0, skipped: 0 },
     byDiagnosis: {},
     paths: [],
@@ -149,14 +176,16 @@ async function storeResult(tx: EntityManager, shard: Shard, result: SuiteTargetR
         diagnosisKind: f.outcome.kind === 'fail' ? f.outcome.diagnosis.kind : null,
         diagnosis: f.outcome.kind === 'fail' ? f.outcome.diagnosis : null,
         ulps: f.outcome.kind === 'fail' && Number.isFinite(f.outcome.ulps) ? f.outcome.ulps : null,
-        relativeError: f.outcome.kind === 'fail' && Number.isFinite(f.outcome.relativeError) ? f.outcome.relativeError : null,
+        relativeError:
+          f.outcome.kind === 'fail' && Number.isFinite(f.outcome.relativeError) ? f.outcome.relativeError : null,
         rule: f.rule,
         reproducer: f.reproducer,
         limits: f.limits ?? null,
       }),
     ),
   );
-  for (let i = 0; i < rows.length; i += INSERT_CHUNK) await tx.getRepository(Failure).insert(rows.slice(i, i + INSERT_CHUNK));
+  for (let i = 0; i < rows.length; i += INSERT_CHUNK)
+    await tx.getRepository(Failure).insert(rows.slice(i, i + INSERT_CHUNK));
   if (result.paths.length > 0) {
     await tx.getRepository(PathSummary).insert(
       result.paths.map((p) => ({
@@ -175,9 +204,18 @@ async function storeResult(tx: EntityManager, shard: Shard, result: SuiteTargetR
     );
   }
   if (result.properties && result.properties.length > 0) {
-    await tx.getRepository(PropertyResult).insert(
-      (result.properties as PropertyOutcome[]).map((o) => ({ run: { id: shard.run.id }, shard: { id: shard.id }, law: o.law, kind: o.kind, seed: String(o.seed), outcome: o })),
-    );
+    await tx
+      .getRepository(PropertyResult)
+      .insert(
+        (result.properties as PropertyOutcome[]).map((o) => ({
+          run: { id: shard.run.id },
+          shard: { id: shard.id },
+          law: o.law,
+          kind: o.kind,
+          seed: String(o.seed),
+          outcome: o,
+        })),
+      );
   }
   const outcome = result.status === 'cancelled' ? 'error' : result.status;
   await tx.getRepository(Shard).update(shard.id, {

@@ -10,7 +10,11 @@ export interface SignInLimits {
   windowSeconds: number;
 }
 
-export const DEFAULT_SIGN_IN_LIMITS: SignInLimits = { perAccountAndAddress: 10, perAddress: 100, windowSeconds: 15 * 60 };
+export const DEFAULT_SIGN_IN_LIMITS: SignInLimits = {
+  perAccountAndAddress: 10,
+  perAddress: 100,
+  windowSeconds: 15 * 60,
+};
 
 /**
  * Counts failed sign-ins in PostgreSQL (so several server processes share the
@@ -22,7 +26,15 @@ export class SignInLimiter {
   private readonly byAddress: RateLimiterPostgres;
 
   constructor(pool: Pool, limits: SignInLimits = DEFAULT_SIGN_IN_LIMITS) {
-    const common = { storeClient: pool, storeType: 'pool', tableName: 'sign_in_limits', tableCreated: true, duration: limits.windowSeconds, blockDuration: limits.windowSeconds, clearExpiredByTimeout: false };
+    const common = {
+      storeClient: pool,
+      storeType: 'pool',
+      tableName: 'sign_in_limits',
+      tableCreated: true,
+      duration: limits.windowSeconds,
+      blockDuration: limits.windowSeconds,
+      clearExpiredByTimeout: false,
+    };
     this.byAccount = new RateLimiterPostgres({ ...common, keyPrefix: 'account', points: limits.perAccountAndAddress });
     this.byAddress = new RateLimiterPostgres({ ...common, keyPrefix: 'address', points: limits.perAddress });
   }

@@ -19,9 +19,17 @@ export class SuiteService {
   constructor(private readonly dataSource: DataSource) {}
 
   async list(filter: { status?: SuiteStatus; q?: string }): Promise<SuiteSummary[]> {
-    const rows: { slug: string; title: string; subject: string; version: number; status: SuiteStatus; approved: number | null; author: string; updated: Date }[] =
-      await this.dataSource.query(
-        `SELECT s.slug, v.body->>'title' AS title, v.body->>'subject' AS subject, v.version, v.status,
+    const rows: {
+      slug: string;
+      title: string;
+      subject: string;
+      version: number;
+      status: SuiteStatus;
+      approved: number | null;
+      author: string;
+      updated: Date;
+    }[] = await this.dataSource.query(
+      `SELECT s.slug, v.body->>'title' AS title, v.body->>'subject' AS subject, v.version, v.status,
                 (SELECT max(a.version) FROM suite_versions a WHERE a.suite_id = s.id AND a.status = 'approved') AS approved,
                 u.display_name AS author, greatest(v.created_at, v.submitted_at, v.reviewed_at) AS updated
            FROM suites s
@@ -30,8 +38,8 @@ export class SuiteService {
           WHERE ($1::text IS NULL OR v.status = $1)
             AND ($2::text IS NULL OR s.slug ILIKE '%' || $2 || '%' OR v.body->>'title' ILIKE '%' || $2 || '%' OR v.body->>'subject' ILIKE '%' || $2 || '%')
           ORDER BY updated DESC, s.slug`,
-        [filter.status ?? null, filter.q ? filter.q.replace(/[\\%_]/g, (c) => `\\${c}`) : null],
-      );
+      [filter.status ?? null, filter.q ? filter.q.replace(/[\\%_]/g, (c) => `\\${c}`) : null],
+    );
     return rows.map((r) => ({
       slug: r.slug,
       title: r.title,
@@ -45,7 +53,9 @@ export class SuiteService {
   }
 
   async versions(slug: string): Promise<SuiteVersionView[]> {
-    const versions = await this.dataSource.getRepository(SuiteVersion).find({ where: { suite: { slug } }, relations: RELATIONS, order: { version: 'DESC' } });
+    const versions = await this.dataSource
+      .getRepository(SuiteVersion)
+      .find({ where: { suite: { slug } }, relations: RELATIONS, order: { version: 'DESC' } });
     if (versions.length === 0) throw notFound(slug);
     return versions.map(toSuiteVersionView);
   }
@@ -55,36 +65,92 @@ export class SuiteService {
    * refuses a missing one; `'upsert'` (uploads) does either. An edit changes the latest draft in
    * place, or starts a new draft version after an approved or retired one.
    */
-  async save(user: User, body: SuiteBody, mode: 'create' | 'edit' | 'upsert'): Promise<{ created: boolean; view: SuiteVersionView }> {
+  async save(
+    user: User,
+    body: SuiteBody,
+    mode: 'create' | 'edit' | 'upsert',
+  ): Promise<{ created: boolean; view: SuiteVersionView }> {
     // Two first saves of one new slug at once both find no row to lock; the unique index stops the second.
     return this.saveLocked(user, body, mode).catch((e: unknown) => {
-      if ((e as { driverError?: { code?: string } }).driverError?.code === '23505') throw new HttpError(409, { kind: 'conflict', message: `A suite with the id "${body.id}" was just created by someone else.` });
+      if ((e as { driverError?: { code?: string } }).driverError?.code === '23505')
+        throw new HttpError(409, {
+          kind: 'conflict',
+          message: `A suite with the id "${body.id}" was just created by someone else.`,
+        });
       throw e;
     });
   }
 
-  private async saveLocked(user: User, body: SuiteBody, mode: 'create' | 'edit' | 'upsert'): Promise<{ created: boolean; view: SuiteVersionView }> {
+  private async saveLocked(
+    user: User,
+    body: SuiteBody,
+    mode: 'create' | 'edit' | 'upsert',
+  ): Promise<{ created: boolean; view: SuiteVersionView }> {
     return this.dataSource.transaction(async (tx) => {
       const suite = await lockSuite(tx, body.id);
       if (!suite) {
         if (mode === 'edit') throw notFound(body.id);
-        const created = await tx.getRepository(Suite).save(tx.getRepository(Suite).create({ slug: body.id, createdBy: user }));
-        const version = await tx.getRepository(SuiteVersion).save(
-          tx.getRepository(SuiteVersion).create({ suite: created, version: 1, status: 'draft', body: { ...body, version: 1 }, author: user, reviewer: null, reviewComment: null, submittedAt: null, reviewedAt: null }),
-        );
+        const created = await tx
+          .getRepository(Suite)
+          .save(tx.getRepository(Suite).create({ slug: body.id, createdBy: user }));
+        const version = await tx
+          .getRepository(SuiteVersion)
+          .save(
+            tx
+              .getRepository(SuiteVersion)
+              .create({
+                suite: created,
+                version: 1,
+                status: 'draft',
+                body: { ...body, version: 1 },
+                author: user,
+                reviewer: null,
+                reviewComment: null,
+                submittedAt: null,
+                reviewedAt: null,
+              }),
+          );
         return { created: true, view: await this.view(tx, version.id) };
       }
-      if (mode === 'create') throw new HttpError(409, { kind: 'conflict', message: `A suite with the id "${body.id}" exists already: edit it instead.` });
+      if (mode === 'create')
+        throw new HttpError(409, {
+          kind: 'conflict',
+          message: `A suite with the id "${body.id}" exists already: edit it instead.`,
+        });
       const latest = await latestVersion(tx, suite.id);
-      if (latest.status === 'submitted') throw new HttpError(409, { kind: 'conflict', message: `Version ${latest.version} is waiting for review; it can be edited once reviewed.` });
+      if (latest.status === 'submitted')
+        throw new HttpError(409, {
+          kind: 'conflict',
+          message: `Version ${latest.version} is waiting for review; it can be edited once reviewed.`,
+        });
       if (latest.status === 'draft' || latest.status === 'changes-requested') {
-        if (latest.author.id !== user.id && user.role !== 'admin') throw new HttpError(403, { kind: 'forbidden', message: `Version ${latest.version} is ${latest.author.displayName}'s draft.` });
-        await tx.getRepository(SuiteVersion).update(latest.id, { body: { ...body, version: latest.version }, status: 'draft' });
+        if (latest.author.id !== user.id && user.role !== 'admin')
+          throw new HttpError(403, {
+            kind: 'forbidden',
+            message: `Version ${latest.version} is ${latest.author.displayName}'s draft.`,
+          });
+        await tx
+          .getRepository(SuiteVersion)
+          .update(latest.id, { body: { ...body, version: latest.version }, status: 'draft' });
         return { created: false, view: await this.view(tx, latest.id) };
       }
-      const next = await tx.getRepository(SuiteVersion).save(
-        tx.getRepository(SuiteVersion).create({ suite, version: latest.version + 1, status: 'draft', body: { ...body, version: latest.version + 1 }, author: user, reviewer: null, reviewComment: null, submittedAt: null, reviewedAt: null }),
-      );
+      const next = await tx
+        .getRepository(SuiteVersion)
+        .save(
+          tx
+            .getRepository(SuiteVersion)
+            .create({
+              suite,
+              version: latest.version + 1,
+              status: 'draft',
+              body: { ...body, version: latest.version + 1 },
+              author: user,
+              reviewer: null,
+              reviewComment: null,
+              submittedAt: null,
+              reviewedAt: null,
+            }),
+        );
       return { created: true, view: await this.view(tx, next.id) };
     });
   }
@@ -94,19 +160,38 @@ export class SuiteService {
       const suite = await lockSuite(tx, slug);
       if (!suite) throw notFound(slug);
       const latest = await latestVersion(tx, suite.id);
-      if (latest.status !== 'draft' && latest.status !== 'changes-requested') throw new HttpError(409, { kind: 'conflict', message: `Version ${latest.version} is ${latest.status}; only a draft can be submitted.` });
-      if (latest.author.id !== user.id && user.role !== 'admin') throw new HttpError(403, { kind: 'forbidden', message: 'Only the author (or an admin) can submit this draft.' });
+      if (latest.status !== 'draft' && latest.status !== 'changes-requested')
+        throw new HttpError(409, {
+          kind: 'conflict',
+          message: `Version ${latest.version} is ${latest.status}; only a draft can be submitted.`,
+        });
+      if (latest.author.id !== user.id && user.role !== 'admin')
+        throw new HttpError(403, {
+          kind: 'forbidden',
+          message: 'Only the author (or an admin) can submit this draft.',
+        });
       await tx.getRepository(SuiteVersion).update(latest.id, { status: 'submitted', submittedAt: new Date() });
       return this.view(tx, latest.id);
     });
   }
 
-  async review(user: User, slug: string, version: number, decision: 'approve' | 'request-changes', comment: string): Promise<SuiteVersionView> {
+  async review(
+    user: User,
+    slug: string,
+    version: number,
+    decision: 'approve' | 'request-changes',
+    comment: string,
+  ): Promise<SuiteVersionView> {
     return this.dataSource.transaction(async (tx) => {
       const target = await this.lockedVersion(tx, slug, version);
-      if (target.status !== 'submitted') throw new HttpError(409, { kind: 'conflict', message: `Version ${version} is ${target.status}; only a submitted version can be reviewed.` });
+      if (target.status !== 'submitted')
+        throw new HttpError(409, {
+          kind: 'conflict',
+          message: `Version ${version} is ${target.status}; only a submitted version can be reviewed.`,
+        });
       // Four eyes: nobody approves their own suite, whatever their role.
-      if (target.author.id === user.id) throw new HttpError(403, { kind: 'forbidden', message: 'You cannot review a suite version you wrote.' });
+      if (target.author.id === user.id)
+        throw new HttpError(403, { kind: 'forbidden', message: 'You cannot review a suite version you wrote.' });
       await tx.getRepository(SuiteVersion).update(target.id, {
         status: decision === 'approve' ? 'approved' : 'changes-requested',
         reviewer: user,
@@ -120,7 +205,11 @@ export class SuiteService {
   async retire(slug: string, version: number): Promise<SuiteVersionView> {
     return this.dataSource.transaction(async (tx) => {
       const target = await this.lockedVersion(tx, slug, version);
-      if (target.status !== 'approved') throw new HttpError(409, { kind: 'conflict', message: `Version ${version} is ${target.status}; only an approved version can be retired.` });
+      if (target.status !== 'approved')
+        throw new HttpError(409, {
+          kind: 'conflict',
+          message: `Version ${version} is ${target.status}; only an approved version can be retired.`,
+        });
       await tx.getRepository(SuiteVersion).update(target.id, { status: 'retired' });
       return this.view(tx, target.id);
     });
@@ -129,13 +218,17 @@ export class SuiteService {
   private async lockedVersion(tx: EntityManager, slug: string, version: number): Promise<SuiteVersion> {
     const suite = await lockSuite(tx, slug);
     if (!suite) throw notFound(slug);
-    const found = await tx.getRepository(SuiteVersion).findOne({ where: { suite: { id: suite.id }, version }, relations: RELATIONS });
+    const found = await tx
+      .getRepository(SuiteVersion)
+      .findOne({ where: { suite: { id: suite.id }, version }, relations: RELATIONS });
     if (!found) throw new HttpError(404, { kind: 'not-found', message: `Suite "${slug}" has no version ${version}.` });
     return found;
   }
 
   private async view(tx: EntityManager, id: string): Promise<SuiteVersionView> {
-    return toSuiteVersionView(await tx.getRepository(SuiteVersion).findOneOrFail({ where: { id }, relations: RELATIONS }));
+    return toSuiteVersionView(
+      await tx.getRepository(SuiteVersion).findOneOrFail({ where: { id }, relations: RELATIONS }),
+    );
   }
 }
 
@@ -148,5 +241,7 @@ async function lockSuite(tx: EntityManager, slug: string): Promise<Suite | null>
 }
 
 async function latestVersion(tx: EntityManager, suiteId: string): Promise<SuiteVersion> {
-  return tx.getRepository(SuiteVersion).findOneOrFail({ where: { suite: { id: suiteId } }, relations: { author: true }, order: { version: 'DESC' } });
+  return tx
+    .getRepository(SuiteVersion)
+    .findOneOrFail({ where: { suite: { id: suiteId } }, relations: { author: true }, order: { version: 'DESC' } });
 }

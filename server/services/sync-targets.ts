@@ -13,7 +13,14 @@ export async function syncTargets(dataSource: DataSource, found: TargetInfo[] = 
     await tx.query('UPDATE targets SET installed = false');
     if (found.length > 0) {
       await tx.getRepository(Target).upsert(
-        found.map((t) => ({ name: t.name, library: t.library, version: t.version, settings: t.settings, installed: true, lastSeenAt: now })),
+        found.map((t) => ({
+          name: t.name,
+          library: t.library,
+          version: t.version,
+          settings: t.settings,
+          installed: true,
+          lastSeenAt: now,
+        })),
         ['name'],
       );
     }

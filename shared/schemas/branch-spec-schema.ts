@@ -35,6 +35,8 @@ const regular = z
  * What the subject should equal (DESIGN.md §2): the principal branch of every function in it,
  * or a regular branch of g(z)^ν fixed at z0 with its cut layout.
  */
-export const branchSpecSchema = z.discriminatedUnion('kind', [principal, regular], { error: 'kind must be principal or regular' });
+export const branchSpecSchema = z.discriminatedUnion('kind', [principal, regular], {
+  error: 'kind must be principal or regular',
+});
 
 export type BranchSpec = z.infer<typeof branchSpecSchema>;

@@ -14,7 +14,9 @@ export const complexString = z.strictObject(
   { re: numberString, im: numberString },
   {
     error: (issue) =>
-      issue.code === 'unrecognized_keys' ? `has unknown fields: ${issue.keys.join(', ')}` : 'must be {"re": "...", "im": "..."}',
+      issue.code === 'unrecognized_keys'
+        ? `has unknown fields: ${issue.keys.join(', ')}`
+        : 'must be {"re": "...", "im": "..."}',
   },
 );
 

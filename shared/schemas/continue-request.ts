@@ -2,21 +2,26 @@ import { z } from 'zod';
 import { complexString, numberString } from './complex-string';
 import { objectError } from './object-error';
 
-
 const circlePath = z.strictObject(
   {
     kind: z.literal('circle'),
     center: complexString,
     radius: numberString,
     start_angle: numberString.default('0'),
-    turns: z.number({ error: 'must be a number' }).refine((n) => n !== 0 && Math.abs(n) <= 64, { error: 'must be non-zero and at most 64' }).default(1),
+    turns: z
+      .number({ error: 'must be a number' })
+      .refine((n) => n !== 0 && Math.abs(n) <= 64, { error: 'must be non-zero and at most 64' })
+      .default(1),
     direction: z.enum(['ccw', 'cw'], { error: 'must be ccw or cw' }).default('ccw'),
   },
   { error: objectError },
 );
 
 const polylinePath = z.strictObject(
-  { kind: z.literal('polyline'), points: z.array(complexString).min(2, { error: 'needs at least two points' }).max(200) },
+  {
+    kind: z.literal('polyline'),
+    points: z.array(complexString).min(2, { error: 'needs at least two points' }).max(200),
+  },
   { error: objectError },
 );
 
@@ -32,7 +37,12 @@ export const continueRequest = z
       path: z.discriminatedUnion('kind', [circlePath, polylinePath], { error: 'must be a circle or a polyline' }),
       at: z.array(numberString).min(1, { error: 'needs at least one t' }).max(1000),
       cuts: z
-        .array(z.strictObject({ points: z.array(complexString).min(2).max(200), to_infinity: z.boolean().default(false) }, { error: objectError }))
+        .array(
+          z.strictObject(
+            { points: z.array(complexString).min(2).max(200), to_infinity: z.boolean().default(false) },
+            { error: objectError },
+          ),
+        )
         .max(50)
         .optional(),
     },

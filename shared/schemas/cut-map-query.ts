@@ -19,7 +19,13 @@ const MIN_SIDE = 1e-6;
 export const cutMapQuery = queryObject({
   fn: cutMapRequest.shape.fn,
   box: cutMapRequest.shape.box
-    .refine((b) => b.every((x) => Math.abs(x) <= MAX_COORDINATE), { error: `needs every coordinate between -${MAX_COORDINATE} and ${MAX_COORDINATE}` })
-    .refine((b) => b[2]! - b[0]! >= MIN_SIDE && b[3]! - b[1]! >= MIN_SIDE, { error: `needs sides of at least ${MIN_SIDE}` }),
-  grid: cutMapRequest.shape.grid.refine((g) => g.every((k) => k <= MAX_GRID), { error: `allows at most ${MAX_GRID} columns and rows on the server` }),
+    .refine((b) => b.every((x) => Math.abs(x) <= MAX_COORDINATE), {
+      error: `needs every coordinate between -${MAX_COORDINATE} and ${MAX_COORDINATE}`,
+    })
+    .refine((b) => b[2]! - b[0]! >= MIN_SIDE && b[3]! - b[1]! >= MIN_SIDE, {
+      error: `needs sides of at least ${MIN_SIDE}`,
+    }),
+  grid: cutMapRequest.shape.grid.refine((g) => g.every((k) => k <= MAX_GRID), {
+    error: `allows at most ${MAX_GRID} columns and rows on the server`,
+  }),
 });

@@ -10,19 +10,35 @@ const text = z.string().trim().min(1).max(120);
  * accepted deviation. Pages are keyed by the last row's id (`after`), or
  * by (ulps, id) when sorted by ulps.
  */
-export const failureQuery = queryObject(
-  {
-    run: z.uuid({ error: 'must be a run id' }).optional(),
-    suite: text.optional(),
-    target: text.optional(),
-    fn: z.string().regex(/^[a-z]+$/, { error: 'must be a function name' }).max(20).optional(),
-    diagnosis: z.enum([...DIAGNOSIS_KINDS, 'error', 'skipped'], { error: `must be one of ${[...DIAGNOSIS_KINDS, 'error', 'skipped'].join(', ')}` }).optional(),
-    convention: z.enum(['signed-zero', 'counter-clockwise'], { error: 'must be signed-zero or counter-clockwise' }).optional(),
-    status: z.enum(['new', 'known', 'accepted'], { error: 'must be new, known or accepted' }).optional(),
-    sort: z.enum(['id', 'ulps'], { error: 'must be id or ulps' }).default('id'),
-    after: z.string().regex(/^\d+(:[\d.e+-]+)?$/, { error: 'must be a cursor from a previous page' }).optional(),
-    limit: z.coerce.number({ error: 'must be a whole number' }).int().min(1, { error: 'must be at least 1' }).max(500, { error: 'must be at most 500' }).default(50),
-  }
-);
+export const failureQuery = queryObject({
+  run: z.uuid({ error: 'must be a run id' }).optional(),
+  suite: text.optional(),
+  target: text.optional(),
+  fn: z
+    .string()
+    .regex(/^[a-z]+$/, { error: 'must be a function name' })
+    .max(20)
+    .optional(),
+  diagnosis: z
+    .enum([...DIAGNOSIS_KINDS, 'error', 'skipped'], {
+      error: `must be one of ${[...DIAGNOSIS_KINDS, 'error', 'skipped'].join(', ')}`,
+    })
+    .optional(),
+  convention: z
+    .enum(['signed-zero', 'counter-clockwise'], { error: 'must be signed-zero or counter-clockwise' })
+    .optional(),
+  status: z.enum(['new', 'known', 'accepted'], { error: 'must be new, known or accepted' }).optional(),
+  sort: z.enum(['id', 'ulps'], { error: 'must be id or ulps' }).default('id'),
+  after: z
+    .string()
+    .regex(/^\d+(:[\d.e+-]+)?$/, { error: 'must be a cursor from a previous page' })
+    .optional(),
+  limit: z.coerce
+    .number({ error: 'must be a whole number' })
+    .int()
+    .min(1, { error: 'must be at least 1' })
+    .max(500, { error: 'must be at most 500' })
+    .default(50),
+});
 
 export type FailureQuery = z.infer<typeof failureQuery>;

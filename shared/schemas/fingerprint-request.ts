@@ -8,11 +8,21 @@ import { z } from 'zod';
 export const fingerprintRequest = z.strictObject({
   target: z
     .string({ error: 'is required (NAME@VERSION as `sheetkeeper targets` lists it)' })
-    .transform((s) => s.split(',').map((x) => x.trim()).filter(Boolean))
+    .transform((s) =>
+      s
+        .split(',')
+        .map((x) => x.trim())
+        .filter(Boolean),
+    )
     .refine((list) => list.length > 0, { error: 'names no target' }),
   fn: z
     .string()
-    .transform((s) => s.split(/,(?![^(]*\))/).map((x) => x.trim()).filter(Boolean))
+    .transform((s) =>
+      s
+        .split(/,(?![^(]*\))/)
+        .map((x) => x.trim())
+        .filter(Boolean),
+    )
     .optional(),
   format: z.enum(['json', 'table'], { error: 'must be json or table' }).default('table'),
   out: z.string().min(1).optional(),

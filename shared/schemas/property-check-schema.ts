@@ -12,7 +12,15 @@ import { objectError } from './object-error';
  * - `range`: the value lies in the principal range of the outermost function;
  * - `unwinding`: log(z1·z2) = log z1 + log z2 − 2πi·K(log z1 + log z2), K the unwinding number.
  */
-export const PROPERTY_LAWS = ['conjugate-symmetry', 'odd-symmetry', 'even-symmetry', 'root-power', 'exp-log', 'range', 'unwinding'] as const;
+export const PROPERTY_LAWS = [
+  'conjugate-symmetry',
+  'odd-symmetry',
+  'even-symmetry',
+  'root-power',
+  'exp-log',
+  'range',
+  'unwinding',
+] as const;
 
 const region = z.discriminatedUnion(
   'kind',
@@ -38,6 +46,9 @@ export const propertyCheckSchema = z
     },
     { error: objectError },
   )
-  .refine((p) => (p.law === 'root-power') === (p.power !== undefined), { error: 'power goes with root-power, and only with it', path: ['power'] });
+  .refine((p) => (p.law === 'root-power') === (p.power !== undefined), {
+    error: 'power goes with root-power, and only with it',
+    path: ['power'],
+  });
 
 export type PropertyCheck = z.infer<typeof propertyCheckSchema>;

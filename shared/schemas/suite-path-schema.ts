@@ -3,13 +3,26 @@ import { complexString, numberString } from './complex-string';
 import { objectError } from './object-error';
 
 /** An angle: a number string (radians) or an exact rational multiple of π ("pi", "-pi/2", "3pi/4"). */
-export const angleString = z.union([numberString, z.string().regex(/^\s*[+-]?(\d+(\.\d+)?)?\s*\*?\s*pi(\s*\/\s*\d+)?\s*$/i)], {
-  error: 'must be a number string (radians) or a multiple of pi such as "3pi/4"',
-});
+export const angleString = z.union(
+  [numberString, z.string().regex(/^\s*[+-]?(\d+(\.\d+)?)?\s*\*?\s*pi(\s*\/\s*\d+)?\s*$/i)],
+  {
+    error: 'must be a number string (radians) or a multiple of pi such as "3pi/4"',
+  },
+);
 
-const name = z.string({ error: 'is required' }).min(1, { error: 'is required' }).max(80, { error: 'must be at most 80 characters' });
-const samples = z.number({ error: 'must be a whole number' }).int({ error: 'must be a whole number' }).min(2, { error: 'must be at least 2' }).max(100_000, { error: 'must be at most 100000' });
-const at = z.array(numberString).min(1, { error: 'needs at least one t' }).max(10_000, { error: 'must have at most 10000 values' });
+const name = z
+  .string({ error: 'is required' })
+  .min(1, { error: 'is required' })
+  .max(80, { error: 'must be at most 80 characters' });
+const samples = z
+  .number({ error: 'must be a whole number' })
+  .int({ error: 'must be a whole number' })
+  .min(2, { error: 'must be at least 2' })
+  .max(100_000, { error: 'must be at most 100000' });
+const at = z
+  .array(numberString)
+  .min(1, { error: 'needs at least one t' })
+  .max(10_000, { error: 'must have at most 10000 values' });
 
 /**
  * Where to sample a path: `samples` evenly spaced values of t, or the explicit values `at`.
@@ -35,10 +48,26 @@ const circle = z
   )
   .refine(oneSampling, ONE_SAMPLING);
 
-const segment = z.strictObject({ kind: z.literal('segment'), name, from: complexString, to: complexString, ...sampling }, { error: objectError }).refine(oneSampling, ONE_SAMPLING);
+const segment = z
+  .strictObject(
+    { kind: z.literal('segment'), name, from: complexString, to: complexString, ...sampling },
+    { error: objectError },
+  )
+  .refine(oneSampling, ONE_SAMPLING);
 
 const polyline = z
-  .strictObject({ kind: z.literal('polyline'), name, points: z.array(complexString).min(2, { error: 'needs at least two points' }).max(200, { error: 'must have at most 200 points' }), ...sampling }, { error: objectError })
+  .strictObject(
+    {
+      kind: z.literal('polyline'),
+      name,
+      points: z
+        .array(complexString)
+        .min(2, { error: 'needs at least two points' })
+        .max(200, { error: 'must have at most 200 points' }),
+      ...sampling,
+    },
+    { error: objectError },
+  )
   .refine(oneSampling, ONE_SAMPLING);
 
 const straddle = z.strictObject(

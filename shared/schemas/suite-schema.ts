@@ -13,36 +13,49 @@ import { toleranceSchema } from './tolerance-schema';
  */
 export const suiteSchema = z
   .strictObject(
-  {
-    id: z
-      .string({ error: 'is required' })
-      .regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, { error: 'must be lower-case words joined by hyphens' })
-      .max(80, { error: 'must be at most 80 characters' }),
-    version: z.number({ error: 'must be a whole number' }).int({ error: 'must be a whole number' }).min(1, { error: 'must be at least 1' }),
-    title: z.string({ error: 'is required' }).min(3, { error: 'must be at least 3 characters' }).max(120, { error: 'must be at most 120 characters' }),
-    /** Why the suite exists: what a maintainer would break, and what the values pin down. */
-    story: z.string().max(4000, { error: 'must be at most 4000 characters' }).default(''),
-    subject: z.string({ error: 'is required' }).min(1, { error: 'is required' }).max(400, { error: 'must be at most 400 characters' }),
-    branch: branchSpecSchema,
-    convention: conventionSchema,
-    paths: z.array(suitePathSchema).min(1, { error: 'needs at least one path' }).max(50, { error: 'must have at most 50 paths' }),
-    tolerances: z.strictObject(
-      {
-        values: toleranceSchema,
-        monodromy: toleranceSchema.optional(),
-        properties: toleranceSchema.optional(),
-      },
-      { error: objectError },
-    ),
-    properties: z.array(propertyCheckSchema).max(20, { error: 'must have at most 20 property checks' }).default([]),
-  },
-  { error: objectError },
+    {
+      id: z
+        .string({ error: 'is required' })
+        .regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, { error: 'must be lower-case words joined by hyphens' })
+        .max(80, { error: 'must be at most 80 characters' }),
+      version: z
+        .number({ error: 'must be a whole number' })
+        .int({ error: 'must be a whole number' })
+        .min(1, { error: 'must be at least 1' }),
+      title: z
+        .string({ error: 'is required' })
+        .min(3, { error: 'must be at least 3 characters' })
+        .max(120, { error: 'must be at most 120 characters' }),
+      /** Why the suite exists: what a maintainer would break, and what the values pin down. */
+      story: z.string().max(4000, { error: 'must be at most 4000 characters' }).default(''),
+      subject: z
+        .string({ error: 'is required' })
+        .min(1, { error: 'is required' })
+        .max(400, { error: 'must be at most 400 characters' }),
+      branch: branchSpecSchema,
+      convention: conventionSchema,
+      paths: z
+        .array(suitePathSchema)
+        .min(1, { error: 'needs at least one path' })
+        .max(50, { error: 'must have at most 50 paths' }),
+      tolerances: z.strictObject(
+        {
+          values: toleranceSchema,
+          monodromy: toleranceSchema.optional(),
+          properties: toleranceSchema.optional(),
+        },
+        { error: objectError },
+      ),
+      properties: z.array(propertyCheckSchema).max(20, { error: 'must have at most 20 property checks' }).default([]),
+    },
+    { error: objectError },
   )
   .superRefine((suite, ctx) => {
     // Path names identify results ("the straddle at -2 failed"), so they must be unique.
     const seen = new Set<string>();
     suite.paths.forEach((path, i) => {
-      if (seen.has(path.name)) ctx.addIssue({ code: 'custom', message: `repeats the path name "${path.name}"`, path: ['paths', i, 'name'] });
+      if (seen.has(path.name))
+        ctx.addIssue({ code: 'custom', message: `repeats the path name "${path.name}"`, path: ['paths', i, 'name'] });
       seen.add(path.name);
     });
   });

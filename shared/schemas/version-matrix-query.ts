@@ -16,5 +16,7 @@ const MAX_SUITES = 8;
 export const versionMatrixQuery = queryObject({
   suite: versionMatrixRequest.shape.suite
     .refine((list) => list.length <= MAX_SUITES, { error: `names more than ${MAX_SUITES} suites; ask in groups` })
-    .refine((list) => list.every((s) => /^[a-z0-9]+(-[a-z0-9]+)*$/.test(s)), { error: 'must be suite slugs (lower-case words joined by hyphens)' }),
+    .refine((list) => list.every((s) => /^[a-z0-9]+(-[a-z0-9]+)*$/.test(s)), {
+      error: 'must be suite slugs (lower-case words joined by hyphens)',
+    }),
 });

@@ -9,7 +9,12 @@ import { z } from 'zod';
 export const versionMatrixRequest = z.strictObject({
   suite: z
     .string({ error: 'is required (suite files, folders or ids, comma-separated)' })
-    .transform((s) => s.split(',').map((x) => x.trim()).filter(Boolean))
+    .transform((s) =>
+      s
+        .split(',')
+        .map((x) => x.trim())
+        .filter(Boolean),
+    )
     .refine((list) => list.length > 0, { error: 'names no suite' }),
   library: z.string({ error: 'is required (a target name without its version, e.g. complex.js)' }).min(1),
   format: z.enum(['json', 'table'], { error: 'must be json or table' }).default('table'),

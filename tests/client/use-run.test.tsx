@@ -33,7 +33,12 @@ function movingRun() {
   return mockFetchRoutes(() => {
     done = Math.min(done + 1, RUN.shardsTotal);
     const status = done === RUN.shardsTotal ? 'completed' : 'running';
-    return { body: { run: { ...RUN, shardsDone: done, status }, overview: { plans: [], inProgress: status === 'running' ? [{ ...RUN, shardsDone: done }] : [], needsMe: {} } } };
+    return {
+      body: {
+        run: { ...RUN, shardsDone: done, status },
+        overview: { plans: [], inProgress: status === 'running' ? [{ ...RUN, shardsDone: done }] : [], needsMe: {} },
+      },
+    };
   });
 }
 

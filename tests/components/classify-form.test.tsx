@@ -3,14 +3,17 @@ import { ClassifyForm } from '../../components/classify-form';
 import { mockFetch } from '../setup/mock-fetch';
 import { renderWithClient } from '../setup/render-with-client';
 
-const type = (label: string | RegExp, value: string) => fireEvent.change(screen.getByLabelText(label), { target: { value } });
+const type = (label: string | RegExp, value: string) =>
+  fireEvent.change(screen.getByLabelText(label), { target: { value } });
 const press = (name: string) => act(() => fireEvent.click(screen.getByRole('button', { name })));
 
 describe('ClassifyForm', () => {
   it('offers a maintainer only an accepted deviation, and names each missing field beside it without sending', async () => {
     const calls = mockFetch(201, {});
     renderWithClient(<ClassifyForm failureId="7" role="maintainer" hasDiagnosis />);
-    expect(screen.getAllByRole('radio', { name: /^Verdict:/ }).map((r) => r.getAttribute('aria-label'))).toEqual(['Verdict: accepted deviation']);
+    expect(screen.getAllByRole('radio', { name: /^Verdict:/ }).map((r) => r.getAttribute('aria-label'))).toEqual([
+      'Verdict: accepted deviation',
+    ]);
     await press('Accept deviation');
     expect(screen.getByText('× Reason must say why (at least 3 characters)')).toBeTruthy();
     expect(screen.getByText('× Expiry is required for an accepted deviation')).toBeTruthy();
@@ -39,7 +42,9 @@ describe('ClassifyForm', () => {
   });
 
   it('posts a valid verdict with the day as midnight UTC and confirms it', async () => {
-    const calls = mockFetch(201, { deviation: { id: 'd1', classification: 'accepted', scope: 'path', expiresAt: '2099-06-30T00:00:00.000Z' } });
+    const calls = mockFetch(201, {
+      deviation: { id: 'd1', classification: 'accepted', scope: 'path', expiresAt: '2099-06-30T00:00:00.000Z' },
+    });
     renderWithClient(<ClassifyForm failureId="7" role="maintainer" hasDiagnosis />);
     fireEvent.click(screen.getByRole('radio', { name: 'Covers: this path' }));
     type('Reason', '  complex.js drops the sign of zero  ');
@@ -47,11 +52,20 @@ describe('ClassifyForm', () => {
     await press('Accept deviation');
     await screen.findByText('✓ Recorded: accepted deviation for this path, until 2099-06-30.');
     expect(calls[0]!.url).toBe('/api/failures/7/classify');
-    expect(JSON.parse(String(calls[0]!.init.body))).toEqual({ classification: 'accepted', scope: 'path', reason: 'complex.js drops the sign of zero', expiresAt: '2099-06-30T00:00:00Z' });
+    expect(JSON.parse(String(calls[0]!.init.body))).toEqual({
+      classification: 'accepted',
+      scope: 'path',
+      reason: 'complex.js drops the sign of zero',
+      expiresAt: '2099-06-30T00:00:00Z',
+    });
   });
 
   it("shows the server's rule beside its field and keeps what was typed", async () => {
-    mockFetch(400, { kind: 'invalid-input', message: 'Invalid input.', issues: [{ field: 'body.reason', rule: 'must not repeat an earlier verdict' }] });
+    mockFetch(400, {
+      kind: 'invalid-input',
+      message: 'Invalid input.',
+      issues: [{ field: 'body.reason', rule: 'must not repeat an earlier verdict' }],
+    });
     renderWithClient(<ClassifyForm failureId="7" role="reviewer" hasDiagnosis />);
     fireEvent.click(screen.getByRole('radio', { name: 'Verdict: bug' }));
     type('Reason', 'seen before');
@@ -61,7 +75,11 @@ describe('ClassifyForm', () => {
   });
 
   it('shows a refusal that belongs to no field above the button', async () => {
-    mockFetch(403, { kind: 'forbidden', message: 'A maintainer may accept a deviation; calling a failure a bug or a convention difference needs the role reviewer or admin.' });
+    mockFetch(403, {
+      kind: 'forbidden',
+      message:
+        'A maintainer may accept a deviation; calling a failure a bug or a convention difference needs the role reviewer or admin.',
+    });
     renderWithClient(<ClassifyForm failureId="7" role="reviewer" hasDiagnosis />);
     fireEvent.click(screen.getByRole('radio', { name: 'Verdict: convention difference' }));
     type('Reason', 'follows the counter-clockwise rule');

@@ -52,7 +52,16 @@ describe('FailureBrowser', () => {
     twoPages();
     const first = renderWithClient(<FailureBrowser filters={{}} onChange={jest.fn()} />);
     await screen.findByRole('table', { name: 'Failures' });
-    expect(screen.getAllByRole('columnheader').map((h) => h.textContent)).toEqual(['No.', 'Suite', 'Target', 'Path', 'z', 'Diagnosis', 'Ulps', 'New']);
+    expect(screen.getAllByRole('columnheader').map((h) => h.textContent)).toEqual([
+      'No.',
+      'Suite',
+      'Target',
+      'Path',
+      'z',
+      'Diagnosis',
+      'Ulps',
+      'New',
+    ]);
     expect(screen.getByTestId('failure-row-2').getAttribute('href')).toBe('/failures/2');
     expect(within(screen.getByTestId('failure-row-2')).getByText('1.0e+18')).toBeTruthy();
 
@@ -60,8 +69,26 @@ describe('FailureBrowser', () => {
     expect(screen.getByRole('checkbox', { name: 'Show column Diagnosis' }).getAttribute('aria-disabled')).toBe('true');
     fireEvent.click(screen.getByRole('checkbox', { name: 'Show column Library' }));
     fireEvent.click(screen.getByRole('checkbox', { name: 'Show column Suite' }));
-    expect(screen.getAllByRole('columnheader').map((h) => h.textContent)).toEqual(['No.', 'Target', 'Path', 'z', 'Library', 'Diagnosis', 'Ulps', 'New']);
-    expect(JSON.parse(window.localStorage.getItem('sheetkeeper.failure-table.columns')!)).toEqual(['id', 'target', 'path', 'z', 'actual', 'diagnosis', 'ulps', 'new']);
+    expect(screen.getAllByRole('columnheader').map((h) => h.textContent)).toEqual([
+      'No.',
+      'Target',
+      'Path',
+      'z',
+      'Library',
+      'Diagnosis',
+      'Ulps',
+      'New',
+    ]);
+    expect(JSON.parse(window.localStorage.getItem('sheetkeeper.failure-table.columns')!)).toEqual([
+      'id',
+      'target',
+      'path',
+      'z',
+      'actual',
+      'diagnosis',
+      'ulps',
+      'new',
+    ]);
 
     first.unmount();
     renderWithClient(<FailureBrowser filters={{}} onChange={jest.fn()} />);

@@ -7,7 +7,8 @@ const r = (re: string, im: string) => ({ re, im });
 /** complex.js 2.4.3 as the harness fingerprints it on sqrt and log (two of the four places each), and a cut no place could separate. */
 const FINGERPRINT: ConventionFingerprint = {
   target: 'complex.js@2.4.3',
-  statement: 'Evidence at 48 points: on each cut at the places listed … not a certification of the library elsewhere on the cut or off it.',
+  statement:
+    'Evidence at 48 points: on each cut at the places listed … not a certification of the library elsewhere on the cut or off it.',
   missing: ['cbrt', 'nthroot(z, 3)'],
   cuts: [
     {
@@ -17,7 +18,12 @@ const FINGERPRINT: ConventionFingerprint = {
       alone: 'counter-clockwise',
       disagreesWith: ['log'],
       probes: [
-        { at: r('-0.5', '0'), verdict: 'counter-clockwise', plusZero: r('0', '0.7071067811865476'), minusZero: r('0', '0.7071067811865476') },
+        {
+          at: r('-0.5', '0'),
+          verdict: 'counter-clockwise',
+          plusZero: r('0', '0.7071067811865476'),
+          minusZero: r('0', '0.7071067811865476'),
+        },
         { at: r('-1', '0'), verdict: 'counter-clockwise', plusZero: r('0', '1'), minusZero: r('0', '1') },
       ],
     },
@@ -28,8 +34,18 @@ const FINGERPRINT: ConventionFingerprint = {
       alone: 'signed-zero',
       disagreesWith: ['sqrt'],
       probes: [
-        { at: r('-0.5', '0'), verdict: 'signed-zero', plusZero: r('-0.6931471805599453', '3.141592653589793'), minusZero: r('-0.6931471805599453', '-3.141592653589793') },
-        { at: r('-1', '0'), verdict: 'signed-zero', plusZero: r('0', '3.141592653589793'), minusZero: r('0', '-3.141592653589793') },
+        {
+          at: r('-0.5', '0'),
+          verdict: 'signed-zero',
+          plusZero: r('-0.6931471805599453', '3.141592653589793'),
+          minusZero: r('-0.6931471805599453', '-3.141592653589793'),
+        },
+        {
+          at: r('-1', '0'),
+          verdict: 'signed-zero',
+          plusZero: r('0', '3.141592653589793'),
+          minusZero: r('0', '-3.141592653589793'),
+        },
       ],
     },
     {
@@ -38,7 +54,14 @@ const FINGERPRINT: ConventionFingerprint = {
       behaviour: 'signed-zero',
       alone: 'signed-zero',
       disagreesWith: [],
-      probes: [{ at: r('0', '2'), verdict: 'signed-zero', plusZero: r('1.5707963267948966', '0.5493061443340549'), minusZero: r('-1.5707963267948966', '0.5493061443340549') }],
+      probes: [
+        {
+          at: r('0', '2'),
+          verdict: 'signed-zero',
+          plusZero: r('1.5707963267948966', '0.5493061443340549'),
+          minusZero: r('-1.5707963267948966', '0.5493061443340549'),
+        },
+      ],
     },
     { function: 'acot', cut: '[-1, 1]·i', behaviour: 'neither', alone: 'neither', disagreesWith: [], probes: [] },
   ],
@@ -50,7 +73,9 @@ describe('FingerprintTable', () => {
     const sqrt = screen.getByTestId('fingerprint-sqrt-(-inf, 0]');
     expect(sqrt.textContent).toContain('≠inconsistent');
     expect(sqrt.textContent).toContain('On its own ↺ counter-clockwise; disagrees with log on the same cut');
-    expect(screen.getByTestId('fingerprint-log-(-inf, 0]').textContent).toContain('On its own ± signed zero; disagrees with sqrt on the same cut');
+    expect(screen.getByTestId('fingerprint-log-(-inf, 0]').textContent).toContain(
+      'On its own ± signed zero; disagrees with sqrt on the same cut',
+    );
     expect(screen.getByTestId('fingerprint-atan-[1, +inf)·i').textContent).toContain('±signed zero');
     expect(screen.getAllByLabelText('inconsistent')).toHaveLength(2);
     expect(screen.getByLabelText('signed zero')).toBeTruthy();
@@ -58,7 +83,9 @@ describe('FingerprintTable', () => {
 
   it('says how many places each verdict rests on, and when it rests on none', () => {
     render(<FingerprintTable fingerprint={FINGERPRINT} />);
-    expect(screen.getByTestId('fingerprint-sqrt-(-inf, 0]').textContent).toContain('counter-clockwise at 2 of 2 places');
+    expect(screen.getByTestId('fingerprint-sqrt-(-inf, 0]').textContent).toContain(
+      'counter-clockwise at 2 of 2 places',
+    );
     expect(screen.getByTestId('fingerprint-atan-[1, +inf)·i').textContent).toContain('signed zero at 1 of 1 place');
     const acot = screen.getByTestId('fingerprint-acot-[-1, 1]·i');
     expect(acot.textContent).toContain('this verdict rests on no evidence');
@@ -71,7 +98,11 @@ describe('FingerprintTable', () => {
     expect(toggle.getAttribute('aria-expanded')).toBe('false');
     expect(screen.queryByText('z = −0.5 ± 0i')).toBeNull();
     fireEvent.click(toggle);
-    expect(screen.getByRole('button', { name: 'Hide the 2 places probed for log on (-inf, 0]' }).getAttribute('aria-expanded')).toBe('true');
+    expect(
+      screen
+        .getByRole('button', { name: 'Hide the 2 places probed for log on (-inf, 0]' })
+        .getAttribute('aria-expanded'),
+    ).toBe('true');
     const places = screen.getByLabelText('Places probed for log on (-inf, 0]');
     expect(places.textContent).toContain('z = −0.5 ± 0i');
     expect(places.textContent).toContain('with +0 → −0.6931471805599453 + 3.141592653589793i');

@@ -5,7 +5,14 @@ import { fakeApiRoutes } from '../setup/fake-api-routes';
 import { renderWithClient } from '../setup/render-with-client';
 
 const SECRET = 'skt_Q2hvb3NlIGEgbG9uZyByYW5kb20gc2VjcmV0IGhlcmU';
-const token: TokenView = { id: '0b5e2a7c-3f41-4d6e-9a8b-7c6d5e4f3a21', name: 'complex.js CI', prefix: SECRET.slice(0, 10), createdAt: '2026-03-01T10:00:00.000Z', lastUsedAt: null, revokedAt: null };
+const token: TokenView = {
+  id: '0b5e2a7c-3f41-4d6e-9a8b-7c6d5e4f3a21',
+  name: 'complex.js CI',
+  prefix: SECRET.slice(0, 10),
+  createdAt: '2026-03-01T10:00:00.000Z',
+  lastUsedAt: null,
+  revokedAt: null,
+};
 
 const type = (value: string) => fireEvent.change(screen.getByLabelText('Token name'), { target: { value } });
 const make = () => act(() => fireEvent.click(screen.getByRole('button', { name: 'Make token' })));
@@ -35,7 +42,10 @@ describe('NewTokenForm', () => {
 
   it('says how to copy by hand when the browser refuses the clipboard', async () => {
     fakeApiRoutes({ 'POST /api/tokens': { status: 201, body: { token, secret: SECRET } } });
-    Object.defineProperty(navigator, 'clipboard', { value: { writeText: jest.fn(async () => Promise.reject(new Error('denied'))) }, configurable: true });
+    Object.defineProperty(navigator, 'clipboard', {
+      value: { writeText: jest.fn(async () => Promise.reject(new Error('denied'))) },
+      configurable: true,
+    });
     renderWithClient(<NewTokenForm />);
     type('complex.js CI');
     await make();
@@ -55,7 +65,16 @@ describe('NewTokenForm', () => {
   });
 
   it("shows the server's rule beside the field and keeps the name typed", async () => {
-    fakeApiRoutes({ 'POST /api/tokens': { status: 400, body: { kind: 'invalid-input', message: 'invalid input', issues: [{ field: 'body.name', rule: 'must be at most 80 characters' }] } } });
+    fakeApiRoutes({
+      'POST /api/tokens': {
+        status: 400,
+        body: {
+          kind: 'invalid-input',
+          message: 'invalid input',
+          issues: [{ field: 'body.name', rule: 'must be at most 80 characters' }],
+        },
+      },
+    });
     renderWithClient(<NewTokenForm />);
     type('a name the server refuses');
     await make();

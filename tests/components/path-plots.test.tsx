@@ -46,9 +46,15 @@ function misplacedJump(): FailurePathView {
 
 /** The x of a value of t in the plot, read from the drawn axis: the first and last tick labels sit at t = 0 and t = 1. */
 function xOfT(svg: Element, t: number): number {
-  const ticks = Array.from(svg.querySelectorAll('text')).filter((el) => el.textContent === '0' || el.textContent === '1');
-  const at0 = Number(ticks.find((el) => el.textContent === '0' && el.getAttribute('text-anchor') === 'middle')!.getAttribute('x'));
-  const at1 = Number(ticks.find((el) => el.textContent === '1' && el.getAttribute('text-anchor') === 'middle')!.getAttribute('x'));
+  const ticks = Array.from(svg.querySelectorAll('text')).filter(
+    (el) => el.textContent === '0' || el.textContent === '1',
+  );
+  const at0 = Number(
+    ticks.find((el) => el.textContent === '0' && el.getAttribute('text-anchor') === 'middle')!.getAttribute('x'),
+  );
+  const at1 = Number(
+    ticks.find((el) => el.textContent === '1' && el.getAttribute('text-anchor') === 'middle')!.getAttribute('x'),
+  );
   return at0 + t * (at1 - at0);
 }
 
@@ -73,7 +79,14 @@ describe('PathPlots', () => {
 
   it('says every jump is where the reference has one when the library follows it', () => {
     const view = misplacedJump();
-    view.points = view.points.map((p) => ({ ...p, outcome: 'pass', diagnosis: null, ulps: null, actualArg: p.expectedArg, actualFrom: 'expected-within-tolerance' }));
+    view.points = view.points.map((p) => ({
+      ...p,
+      outcome: 'pass',
+      diagnosis: null,
+      ulps: null,
+      actualArg: p.expectedArg,
+      actualFrom: 'expected-within-tolerance',
+    }));
     render(<PathPlots view={view} />);
     expect(screen.getByTestId('jump-words').textContent).toMatch(/Every jump is where the reference has one\.$/);
     expect(screen.queryByText('library jump ≠')).toBeNull();
@@ -81,7 +94,9 @@ describe('PathPlots', () => {
 
   it('plots failing points above the tolerance line on the ulps scale and names the worst in its label', () => {
     render(<PathPlots view={misplacedJump()} />);
-    const ulps = screen.getByRole('img', { name: 'Error in ulps along the path unit circle: 4 points over the tolerance, the worst 3.0e+15 ulps.' });
+    const ulps = screen.getByRole('img', {
+      name: 'Error in ulps along the path unit circle: 4 points over the tolerance, the worst 3.0e+15 ulps.',
+    });
     const svg = ulps.querySelector('svg')!;
     expect(Array.from(svg.querySelectorAll('text')).some((el) => el.textContent === 'tolerance 4 ulps')).toBe(true);
     expect(screen.getByText('ulps (log scale)')).toBeTruthy();

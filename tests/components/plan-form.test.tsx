@@ -17,7 +17,16 @@ const suite = (slug: string, title: string, approvedVersion: number | null): Sui
 });
 
 const CHOICES = {
-  'GET /api/suites': { status: 200, body: { suites: [suite('sqrt-principal-sz', 'Square root, signed zeros', 2), suite('log-principal-sz', 'Logarithm, signed zeros', 1), suite('acos-draft', 'Arc cosine draft', null)] } },
+  'GET /api/suites': {
+    status: 200,
+    body: {
+      suites: [
+        suite('sqrt-principal-sz', 'Square root, signed zeros', 2),
+        suite('log-principal-sz', 'Logarithm, signed zeros', 1),
+        suite('acos-draft', 'Arc cosine draft', null),
+      ],
+    },
+  },
   'GET /api/targets': {
     status: 200,
     body: {
@@ -70,13 +79,22 @@ describe('PlanForm', () => {
     // Fixing a field clears its rule at once.
     await act(() => fireEvent.click(screen.getByRole('checkbox', { name: 'Square root, signed zeros' })));
     expect(screen.queryByText(/× Suites/)).toBeNull();
-    expect(screen.getByRole('checkbox', { name: 'Square root, signed zeros' }).getAttribute('aria-checked')).toBe('true');
+    expect(screen.getByRole('checkbox', { name: 'Square root, signed zeros' }).getAttribute('aria-checked')).toBe(
+      'true',
+    );
   });
 
   it("puts the server's refusal of a suite beside the suites and keeps everything typed", async () => {
     const calls = fakeApiRoutes({
       ...CHOICES,
-      'POST /api/plans': { status: 400, body: { kind: 'invalid-input', message: 'invalid input', issues: [{ field: 'body.suites.0', rule: 'has no approved version yet ("log-principal-sz")' }] } },
+      'POST /api/plans': {
+        status: 400,
+        body: {
+          kind: 'invalid-input',
+          message: 'invalid input',
+          issues: [{ field: 'body.suites.0', rule: 'has no approved version yet ("log-principal-sz")' }],
+        },
+      },
     });
     const onSaved = jest.fn();
     renderWithClient(<PlanForm onSaved={onSaved} onCancel={jest.fn()} />);
@@ -87,8 +105,16 @@ describe('PlanForm', () => {
     await act(() => fireEvent.click(screen.getByRole('checkbox', { name: 'Logarithm, signed zeros' })));
     await act(() => fireEvent.click(screen.getByRole('checkbox', { name: 'complex.js@2.4.3' })));
     await create();
-    await waitFor(() => expect(screen.getByText('× Suites has no approved version yet ("log-principal-sz")')).toBeTruthy());
-    expect(calls.find((c) => c.method === 'POST')!.body).toEqual({ name: 'Logs nightly', description: 'Every log suite', recipients: ['kwame@sheetkeeper.test'], suites: ['log-principal-sz'], targets: ['complex.js@2.4.3'] });
+    await waitFor(() =>
+      expect(screen.getByText('× Suites has no approved version yet ("log-principal-sz")')).toBeTruthy(),
+    );
+    expect(calls.find((c) => c.method === 'POST')!.body).toEqual({
+      name: 'Logs nightly',
+      description: 'Every log suite',
+      recipients: ['kwame@sheetkeeper.test'],
+      suites: ['log-principal-sz'],
+      targets: ['complex.js@2.4.3'],
+    });
     expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Logs nightly');
     expect((screen.getByLabelText('Description') as HTMLInputElement).value).toBe('Every log suite');
     expect(screen.getByRole('checkbox', { name: 'Logarithm, signed zeros' }).getAttribute('aria-checked')).toBe('true');
@@ -96,14 +122,25 @@ describe('PlanForm', () => {
   });
 
   it('replaces an existing plan with PUT and hands back the saved plan', async () => {
-    const calls = fakeApiRoutes({ ...CHOICES, [`PUT /api/plans/${saved.id}`]: { status: 200, body: { plan: { ...saved, name: 'Roots every night' } } } });
+    const calls = fakeApiRoutes({
+      ...CHOICES,
+      [`PUT /api/plans/${saved.id}`]: { status: 200, body: { plan: { ...saved, name: 'Roots every night' } } },
+    });
     const onSaved = jest.fn();
     renderWithClient(<PlanForm plan={saved} onSaved={onSaved} onCancel={jest.fn()} />);
     await waitFor(() => screen.getByRole('checkbox', { name: 'Square root, signed zeros' }));
-    expect(screen.getByRole('checkbox', { name: 'Square root, signed zeros' }).getAttribute('aria-checked')).toBe('true');
+    expect(screen.getByRole('checkbox', { name: 'Square root, signed zeros' }).getAttribute('aria-checked')).toBe(
+      'true',
+    );
     type('Name', 'Roots every night');
     await act(() => fireEvent.click(screen.getByRole('button', { name: 'Save plan' })));
     await waitFor(() => expect(onSaved).toHaveBeenCalledWith(expect.objectContaining({ name: 'Roots every night' })));
-    expect(calls.find((c) => c.method === 'PUT')!.body).toEqual({ name: 'Roots every night', description: '', recipients: ['kwame@sheetkeeper.test'], suites: ['sqrt-principal-sz'], targets: ['complex.js@2.4.3'] });
+    expect(calls.find((c) => c.method === 'PUT')!.body).toEqual({
+      name: 'Roots every night',
+      description: '',
+      recipients: ['kwame@sheetkeeper.test'],
+      suites: ['sqrt-principal-sz'],
+      targets: ['complex.js@2.4.3'],
+    });
   });
 });

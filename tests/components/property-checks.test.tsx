@@ -6,7 +6,15 @@ import type { RunPropertyRow } from '../../shared/run-property-row';
 const held = (suite: string, law: RunPropertyRow['outcome']['law']): RunPropertyRow => ({
   suite,
   target: 'complex.js@2.4.3',
-  outcome: { kind: 'held', law, title: `${law} holds`, seed: 42, runs: 200, excluded: 0, statement: 'At the drawn points only.' },
+  outcome: {
+    kind: 'held',
+    law,
+    title: `${law} holds`,
+    seed: 42,
+    runs: 200,
+    excluded: 0,
+    statement: 'At the drawn points only.',
+  },
 });
 
 const rows: RunPropertyRow[] = [
@@ -29,13 +37,25 @@ const rows: RunPropertyRow[] = [
       values: [{ name: 'log(conj z)', value: { re: '0', im: '3.141592653589793' } }],
     },
   },
-  { suite: 'acos-principal-sz', target: 'complex.js@2.4.3', outcome: { kind: 'not-checked', law: 'range', title: 'acos lands in its range', seed: 9, reason: 'the run was cancelled first' } },
+  {
+    suite: 'acos-principal-sz',
+    target: 'complex.js@2.4.3',
+    outcome: {
+      kind: 'not-checked',
+      law: 'range',
+      title: 'acos lands in its range',
+      seed: 9,
+      reason: 'the run was cancelled first',
+    },
+  },
 ];
 
 describe('PropertyChecks', () => {
   it('counts the checks by outcome and lists pairs with a failure first, then unchecked, then held', () => {
     render(<PropertyChecks rows={rows} />);
-    expect(screen.getByTestId('property-summary').textContent).toBe('5 checks over 3 pairs: 1 failed, 1 not checked, 3 held.');
+    expect(screen.getByTestId('property-summary').textContent).toBe(
+      '5 checks over 3 pairs: 1 failed, 1 not checked, 3 held.',
+    );
     const pairs = screen.getAllByTestId(/^property-pair-/).map((el) => el.getAttribute('data-testid'));
     expect(pairs).toEqual([
       'property-pair-log-principal-sz × complex.js@2.4.3',
@@ -57,10 +77,16 @@ describe('PropertyChecks', () => {
   it('folds a pair whose every law held into one line, and opens it on a tap', async () => {
     render(<PropertyChecks rows={rows} />);
     expect(screen.queryByTestId('property-sqrt-principal-sz × complex.js@2.4.3-root-power')).toBeNull();
-    const fold = screen.getByRole('button', { name: 'Show the 2 laws that held for sqrt-principal-sz × complex.js@2.4.3' });
+    const fold = screen.getByRole('button', {
+      name: 'Show the 2 laws that held for sqrt-principal-sz × complex.js@2.4.3',
+    });
     expect(fold.textContent).toMatch(/✓ all 2 laws held/);
     await act(() => fireEvent.click(fold));
     expect(screen.getByTestId('property-sqrt-principal-sz × complex.js@2.4.3-root-power')).toBeTruthy();
-    expect(screen.getByRole('button', { name: 'Hide the 2 laws that held for sqrt-principal-sz × complex.js@2.4.3' }).getAttribute('aria-expanded')).toBe('true');
+    expect(
+      screen
+        .getByRole('button', { name: 'Hide the 2 laws that held for sqrt-principal-sz × complex.js@2.4.3' })
+        .getAttribute('aria-expanded'),
+    ).toBe('true');
   });
 });

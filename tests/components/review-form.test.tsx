@@ -18,7 +18,9 @@ describe('ReviewForm', () => {
     const onReviewed = jest.fn();
     renderWithClient(<ReviewForm slug="cube-root-demo" version={2} onReviewed={onReviewed} />);
     await act(() => fireEvent.click(screen.getByRole('button', { name: 'Approve version 2' })));
-    await waitFor(() => expect(screen.getByTestId('review-refusal').textContent).toBe('× You cannot review a suite version you wrote.'));
+    await waitFor(() =>
+      expect(screen.getByTestId('review-refusal').textContent).toBe('× You cannot review a suite version you wrote.'),
+    );
     expect(onReviewed).not.toHaveBeenCalled();
     expect(calls[0]!.url).toBe('/api/suites/cube-root-demo/versions/2/review');
     expect(JSON.parse(String(calls[0]!.init.body))).toEqual({ decision: 'approve', comment: '' });
@@ -31,6 +33,9 @@ describe('ReviewForm', () => {
     fireEvent.change(screen.getByLabelText('Comment'), { target: { value: ' Checked the loop around both ends. ' } });
     await act(() => fireEvent.click(screen.getByRole('button', { name: 'Approve version 2' })));
     await waitFor(() => expect(onReviewed).toHaveBeenCalledWith('approve'));
-    expect(JSON.parse(String(calls[0]!.init.body))).toEqual({ decision: 'approve', comment: 'Checked the loop around both ends.' });
+    expect(JSON.parse(String(calls[0]!.init.body))).toEqual({
+      decision: 'approve',
+      comment: 'Checked the loop around both ends.',
+    });
   });
 });

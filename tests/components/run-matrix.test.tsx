@@ -6,7 +6,14 @@ import { setScreenWidth } from '../setup/set-screen-width';
 jest.mock('expo-router', () => require('../setup/expo-router-stub'));
 
 const RUN = '7d3f9a52-1c4e-4b8a-9f10-2a6c5e8d4b31';
-const scope = { convention: 'signed-zero', branch: 'principal', tolerance: '4 ulps', paths: 3, points: 123, properties: { listed: [], run: true, note: '' } };
+const scope = {
+  convention: 'signed-zero',
+  branch: 'principal',
+  tolerance: '4 ulps',
+  paths: 3,
+  points: 123,
+  properties: { listed: [], run: true, note: '' },
+};
 
 const cell = (over: Partial<RunMatrixCell>): RunMatrixCell => ({
   suite: 'sqrt-principal-sz',
@@ -22,10 +29,38 @@ const cell = (over: Partial<RunMatrixCell>): RunMatrixCell => ({
 
 const CELLS: RunMatrixCell[] = [
   cell({}),
-  cell({ target: 'complex.js@2.4.2', outcome: 'fail', counts: { pass: 117, fail: 3, error: 0, skipped: 4 }, byDiagnosis: { 'other-sheet': 2, 'cut-side': 1 } }),
-  cell({ suite: 'log-principal-sz', target: 'complex.js@2.4.3', outcome: 'error', counts: null, byDiagnosis: null, checked: null, errors: ['The target did not answer within 30 s.'] }),
-  cell({ suite: 'log-principal-sz', target: 'complex.js@2.4.2', outcome: 'error', counts: { pass: 80, fail: 0, error: 2, skipped: 0 }, byDiagnosis: {}, errors: ['path "circle r=2" threw: RangeError'] }),
-  cell({ suite: 'acos-principal-sz', target: 'complex.js@2.4.3', status: 'running', outcome: null, counts: null, byDiagnosis: null, checked: null }),
+  cell({
+    target: 'complex.js@2.4.2',
+    outcome: 'fail',
+    counts: { pass: 117, fail: 3, error: 0, skipped: 4 },
+    byDiagnosis: { 'other-sheet': 2, 'cut-side': 1 },
+  }),
+  cell({
+    suite: 'log-principal-sz',
+    target: 'complex.js@2.4.3',
+    outcome: 'error',
+    counts: null,
+    byDiagnosis: null,
+    checked: null,
+    errors: ['The target did not answer within 30 s.'],
+  }),
+  cell({
+    suite: 'log-principal-sz',
+    target: 'complex.js@2.4.2',
+    outcome: 'error',
+    counts: { pass: 80, fail: 0, error: 2, skipped: 0 },
+    byDiagnosis: {},
+    errors: ['path "circle r=2" threw: RangeError'],
+  }),
+  cell({
+    suite: 'acos-principal-sz',
+    target: 'complex.js@2.4.3',
+    status: 'running',
+    outcome: null,
+    counts: null,
+    byDiagnosis: null,
+    checked: null,
+  }),
   cell({ suite: 'acos-principal-sz', target: 'complex.js@2.4.2' }),
 ];
 
@@ -64,7 +99,13 @@ describe.each([
   });
 
   it('says "nothing was checked" once when every point was skipped and the shard says so itself', () => {
-    const skipped = cell({ suite: 'cbrt-principal-sz', outcome: 'error', counts: { pass: 0, fail: 0, error: 0, skipped: 154 }, byDiagnosis: {}, errors: ['nothing was checked: every point was skipped (see the reasons per path)'] });
+    const skipped = cell({
+      suite: 'cbrt-principal-sz',
+      outcome: 'error',
+      counts: { pass: 0, fail: 0, error: 0, skipped: 154 },
+      byDiagnosis: {},
+      errors: ['nothing was checked: every point was skipped (see the reasons per path)'],
+    });
     render(<RunMatrix runId={RUN} cells={[skipped]} />);
     const only = cellOf('cbrt-principal-sz', 'complex.js@2.4.3');
     expect(within(only).getAllByText(/nothing was checked/)).toHaveLength(1);
@@ -74,27 +115,50 @@ describe.each([
 
   it('links a cell with failures or errors to the failure table filtered by run, suite and target; a passing cell is no link', () => {
     render(<RunMatrix runId={RUN} cells={CELLS} />);
-    expect(cellOf('sqrt-principal-sz', 'complex.js@2.4.2').getAttribute('href')).toBe(`/failures?run=${RUN}&suite=sqrt-principal-sz&target=complex.js%402.4.2`);
-    expect(cellOf('log-principal-sz', 'complex.js@2.4.2').getAttribute('href')).toBe(`/failures?run=${RUN}&suite=log-principal-sz&target=complex.js%402.4.2`);
+    expect(cellOf('sqrt-principal-sz', 'complex.js@2.4.2').getAttribute('href')).toBe(
+      `/failures?run=${RUN}&suite=sqrt-principal-sz&target=complex.js%402.4.2`,
+    );
+    expect(cellOf('log-principal-sz', 'complex.js@2.4.2').getAttribute('href')).toBe(
+      `/failures?run=${RUN}&suite=log-principal-sz&target=complex.js%402.4.2`,
+    );
     expect(cellOf('sqrt-principal-sz', 'complex.js@2.4.3').getAttribute('href')).toBeNull();
     expect(cellOf('log-principal-sz', 'complex.js@2.4.3').getAttribute('href')).toBeNull();
   });
 
   it('counts the cells by outcome and can hide the suites that passed everywhere', () => {
-    render(<RunMatrix runId={RUN} cells={[...CELLS, cell({ suite: 'exp-principal-sz' }), cell({ suite: 'exp-principal-sz', target: 'complex.js@2.4.2' })]} />);
-    expect(screen.getByText(/4 suites × 2 targets: ✓ 4 passed · ❌ 1 with failures · ◊ 2 error · 1 not finished or cancelled/)).toBeTruthy();
+    render(
+      <RunMatrix
+        runId={RUN}
+        cells={[
+          ...CELLS,
+          cell({ suite: 'exp-principal-sz' }),
+          cell({ suite: 'exp-principal-sz', target: 'complex.js@2.4.2' }),
+        ]}
+      />,
+    );
+    expect(
+      screen.getByText(
+        /4 suites × 2 targets: ✓ 4 passed · ❌ 1 with failures · ◊ 2 error · 1 not finished or cancelled/,
+      ),
+    ).toBeTruthy();
     expect(screen.queryByText('exp-principal-sz')).not.toBeNull();
     fireEvent.click(screen.getByRole('switch', { name: 'Show only suites that need a look' }));
     expect(screen.queryByText('exp-principal-sz')).toBeNull();
     expect(screen.getByText('sqrt-principal-sz')).toBeTruthy();
-    expect(screen.getByRole('switch', { name: 'Show only suites that need a look' }).getAttribute('aria-checked')).toBe('true');
+    expect(screen.getByRole('switch', { name: 'Show only suites that need a look' }).getAttribute('aria-checked')).toBe(
+      'true',
+    );
   });
 });
 
 it('lays the matrix out as a grid with a column per target on a wide screen, and as cards on a phone', () => {
   setScreenWidth(1440);
   const { unmount } = render(<RunMatrix runId={RUN} cells={CELLS} />);
-  expect(screen.getAllByRole('columnheader').map((h) => h.textContent)).toEqual(['Suite ↓ · target →', 'complex.js@2.4.2', 'complex.js@2.4.3']);
+  expect(screen.getAllByRole('columnheader').map((h) => h.textContent)).toEqual([
+    'Suite ↓ · target →',
+    'complex.js@2.4.2',
+    'complex.js@2.4.3',
+  ]);
   unmount();
   setScreenWidth(390);
   render(<RunMatrix runId={RUN} cells={CELLS} />);

@@ -44,7 +44,12 @@ function api(runs: RunView[], pageSize = 25) {
   return mockFetchRoutes((url) => {
     if (url.startsWith('/api/plans')) return { body: { plans: PLANS } };
     const q = new URL(url, 'http://x').searchParams;
-    let rows = runs.filter((r) => (!q.get('plan') || r.planId === q.get('plan')) && (!q.get('status') || r.status === q.get('status')) && (!q.get('trigger') || r.trigger === q.get('trigger')));
+    let rows = runs.filter(
+      (r) =>
+        (!q.get('plan') || r.planId === q.get('plan')) &&
+        (!q.get('status') || r.status === q.get('status')) &&
+        (!q.get('trigger') || r.trigger === q.get('trigger')),
+    );
     const before = q.get('before');
     if (before) rows = rows.slice(rows.findIndex((r) => r.id === before) + 1);
     const page = rows.slice(0, pageSize);
@@ -58,7 +63,19 @@ describe('RunsList', () => {
   beforeEach(() => setScreenWidth(390));
 
   it('shows each run with its plan, trigger, who, when, duration, counts and status in words', async () => {
-    api([run(1), run(2, { trigger: 'manual', requestedBy: 'Kwame Asante', status: 'running', shardsDone: 1, finishedAt: null, regressions: null, counts: { pass: 120, fail: 0, error: 0, skipped: 0 }, startedAt: new Date(Date.now() - 42_000).toISOString() })]);
+    api([
+      run(1),
+      run(2, {
+        trigger: 'manual',
+        requestedBy: 'Kwame Asante',
+        status: 'running',
+        shardsDone: 1,
+        finishedAt: null,
+        regressions: null,
+        counts: { pass: 120, fail: 0, error: 0, skipped: 0 },
+        startedAt: new Date(Date.now() - 42_000).toISOString(),
+      }),
+    ]);
     renderWithClient(<Harness />);
     const first = await screen.findByTestId(`run-${run(1).id}`);
     expect(within(first).getByText('complex.js nightly')).toBeTruthy();
@@ -74,7 +91,10 @@ describe('RunsList', () => {
   });
 
   it('asks the API again with each filter chosen, and shows the chosen chip ticked', async () => {
-    const calls = api([run(1), run(2, { planId: RELEASE, planName: 'mathjs before release', trigger: 'manual', status: 'cancelled' })]);
+    const calls = api([
+      run(1),
+      run(2, { planId: RELEASE, planName: 'mathjs before release', trigger: 'manual', status: 'cancelled' }),
+    ]);
     renderWithClient(<Harness />);
     await screen.findByTestId(`run-${run(1).id}`);
     // On a phone the filters fold behind one button that says which are on.
@@ -85,7 +105,9 @@ describe('RunsList', () => {
     await act(() => fireEvent.click(screen.getByRole('radio', { name: 'Plan: mathjs before release' })));
     await waitFor(() => expect(screen.queryByTestId(`run-${run(1).id}`)).toBeNull());
     expect(screen.getByTestId(`run-${run(2).id}`)).toBeTruthy();
-    expect(screen.getByRole('radio', { name: 'Plan: mathjs before release' }).getAttribute('aria-checked')).toBe('true');
+    expect(screen.getByRole('radio', { name: 'Plan: mathjs before release' }).getAttribute('aria-checked')).toBe(
+      'true',
+    );
     expect(screen.getByText('✓ mathjs before release')).toBeTruthy();
     await act(() => fireEvent.click(screen.getByRole('radio', { name: 'Status: × cancelled' })));
     await act(() => fireEvent.click(screen.getByRole('radio', { name: 'Trigger: by hand' })));
@@ -118,11 +140,21 @@ describe('RunsList', () => {
     api([run(1)]);
     renderWithClient(<Harness />);
     await screen.findByTestId(`run-${run(1).id}`);
-    expect(screen.getAllByRole('columnheader').map((h) => h.textContent)).toEqual(['Status', 'Plan', 'Started', 'Duration', 'Points']);
+    expect(screen.getAllByRole('columnheader').map((h) => h.textContent)).toEqual([
+      'Status',
+      'Plan',
+      'Started',
+      'Duration',
+      'Points',
+    ]);
   });
 
   it('shows the error and a retry when the runs cannot be loaded', async () => {
-    mockFetchRoutes((url) => (url.startsWith('/api/plans') ? { body: { plans: PLANS } } : { status: 500, body: { kind: 'server-error', message: 'The database is not answering.' } }));
+    mockFetchRoutes((url) =>
+      url.startsWith('/api/plans')
+        ? { body: { plans: PLANS } }
+        : { status: 500, body: { kind: 'server-error', message: 'The database is not answering.' } },
+    );
     renderWithClient(<Harness />);
     expect(await screen.findByText('× The database is not answering.')).toBeTruthy();
     expect(screen.getByRole('button', { name: 'Try again' })).toBeTruthy();

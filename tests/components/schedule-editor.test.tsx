@@ -5,14 +5,37 @@ import { fakeApiRoutes } from '../setup/fake-api-routes';
 import { renderWithClient } from '../setup/render-with-client';
 
 const PLAN = '6f1d7a52-0c1e-4b7e-9f5a-2d3c4b5a6e7f';
-const schedule: ScheduleView = { id: 'a1f0c7e2-5b1d-4c3e-8f9a-0b1c2d3e4f50', planId: PLAN, planName: 'complex.js nightly', cron: '30 2 * * *', timeZone: 'UTC', enabled: true, nextRuns: [] };
+const schedule: ScheduleView = {
+  id: 'a1f0c7e2-5b1d-4c3e-8f9a-0b1c2d3e4f50',
+  planId: PLAN,
+  planName: 'complex.js nightly',
+  cron: '30 2 * * *',
+  timeZone: 'UTC',
+  enabled: true,
+  nextRuns: [],
+};
 
 /** The server's preview, computed here only for the two expressions the tests type. */
 const preview = (body: unknown) => {
   const { cron } = body as { cron: string };
-  if (cron === '0 25 * * *') return { status: 400, body: { kind: 'invalid-input', message: 'invalid input', issues: [{ field: 'body.cron', rule: 'has an invalid hour field: "25"' }] } };
-  if (cron === '15 6 * * 1') return { status: 200, body: { nextRuns: ['2031-03-03T06:15:00.000Z', '2031-03-10T06:15:00.000Z', '2031-03-17T06:15:00.000Z'] } };
-  return { status: 200, body: { nextRuns: ['2031-03-01T02:30:00.000Z', '2031-03-02T02:30:00.000Z', '2031-03-03T02:30:00.000Z'] } };
+  if (cron === '0 25 * * *')
+    return {
+      status: 400,
+      body: {
+        kind: 'invalid-input',
+        message: 'invalid input',
+        issues: [{ field: 'body.cron', rule: 'has an invalid hour field: "25"' }],
+      },
+    };
+  if (cron === '15 6 * * 1')
+    return {
+      status: 200,
+      body: { nextRuns: ['2031-03-03T06:15:00.000Z', '2031-03-10T06:15:00.000Z', '2031-03-17T06:15:00.000Z'] },
+    };
+  return {
+    status: 200,
+    body: { nextRuns: ['2031-03-01T02:30:00.000Z', '2031-03-02T02:30:00.000Z', '2031-03-03T02:30:00.000Z'] },
+  };
 };
 
 const type = (label: string, value: string) => fireEvent.change(screen.getByLabelText(label), { target: { value } });
@@ -64,14 +87,23 @@ describe('ScheduleEditor', () => {
   it('keeps what was typed and shows the rule beside the field when saving is refused', async () => {
     const calls = fakeApiRoutes({
       'POST /api/schedules/preview': preview,
-      [`PATCH /api/schedules/${schedule.id}`]: { status: 400, body: { kind: 'invalid-input', message: 'invalid input', issues: [{ field: 'body.timeZone', rule: 'must be a time zone name such as Europe/Oslo or UTC' }] } },
+      [`PATCH /api/schedules/${schedule.id}`]: {
+        status: 400,
+        body: {
+          kind: 'invalid-input',
+          message: 'invalid input',
+          issues: [{ field: 'body.timeZone', rule: 'must be a time zone name such as Europe/Oslo or UTC' }],
+        },
+      },
     });
     const onDone = jest.fn();
     renderWithClient(<ScheduleEditor planId={PLAN} schedule={schedule} onDone={onDone} />);
     type('Cron expression', '15 6 * * 1');
     await settle();
     await act(() => fireEvent.click(screen.getByRole('button', { name: 'Save schedule' })));
-    await waitFor(() => expect(screen.getByText('× Time zone must be a time zone name such as Europe/Oslo or UTC')).toBeTruthy());
+    await waitFor(() =>
+      expect(screen.getByText('× Time zone must be a time zone name such as Europe/Oslo or UTC')).toBeTruthy(),
+    );
     expect((screen.getByLabelText('Cron expression') as HTMLInputElement).value).toBe('15 6 * * 1');
     expect(calls.find((c) => c.method === 'PATCH')!.body).toEqual({ cron: '15 6 * * 1', timeZone: 'UTC' });
     expect(onDone).not.toHaveBeenCalled();
@@ -79,7 +111,10 @@ describe('ScheduleEditor', () => {
 
   it('creates a schedule for the plan, switched on', async () => {
     const created: ScheduleView = { ...schedule, cron: '15 6 * * 1', nextRuns: [] };
-    const calls = fakeApiRoutes({ 'POST /api/schedules/preview': preview, 'POST /api/schedules': { status: 201, body: { schedule: created } } });
+    const calls = fakeApiRoutes({
+      'POST /api/schedules/preview': preview,
+      'POST /api/schedules': { status: 201, body: { schedule: created } },
+    });
     const onDone = jest.fn();
     renderWithClient(<ScheduleEditor planId={PLAN} onDone={onDone} />);
     type('Cron expression', '15 6 * * 1');
@@ -87,6 +122,11 @@ describe('ScheduleEditor', () => {
     await settle();
     await act(() => fireEvent.click(screen.getByRole('button', { name: 'Add schedule' })));
     await waitFor(() => expect(onDone).toHaveBeenCalled());
-    expect(calls.find((c) => c.path === '/api/schedules')!.body).toEqual({ planId: PLAN, cron: '15 6 * * 1', timeZone: 'UTC', enabled: true });
+    expect(calls.find((c) => c.path === '/api/schedules')!.body).toEqual({
+      planId: PLAN,
+      cron: '15 6 * * 1',
+      timeZone: 'UTC',
+      enabled: true,
+    });
   });
 });

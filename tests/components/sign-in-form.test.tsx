@@ -39,7 +39,15 @@ describe('SignInForm', () => {
   });
 
   it('posts the normalised body and reports success', async () => {
-    const calls = mockFetch(200, { user: { id: 'u1', email: 'ravi@sheetkeeper.test', displayName: 'Ravi Dutta', role: 'contributor', createdAt: '2026-12-01T00:00:00Z' } });
+    const calls = mockFetch(200, {
+      user: {
+        id: 'u1',
+        email: 'ravi@sheetkeeper.test',
+        displayName: 'Ravi Dutta',
+        role: 'contributor',
+        createdAt: '2026-12-01T00:00:00Z',
+      },
+    });
     const onSignedIn = jest.fn();
     renderWithClient(<SignInForm onSignedIn={onSignedIn} />);
     type('E-mail', ' Ravi@Sheetkeeper.test ');
@@ -47,6 +55,9 @@ describe('SignInForm', () => {
     await submit();
     await waitFor(() => expect(onSignedIn).toHaveBeenCalled());
     expect(calls[0]!.url).toBe('/api/auth/sign-in');
-    expect(JSON.parse(String(calls[0]!.init.body))).toEqual({ email: 'ravi@sheetkeeper.test', password: 'ravi-demo-2026' });
+    expect(JSON.parse(String(calls[0]!.init.body))).toEqual({
+      email: 'ravi@sheetkeeper.test',
+      password: 'ravi-demo-2026',
+    });
   });
 });

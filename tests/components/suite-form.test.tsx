@@ -24,7 +24,15 @@ const badLayout = (): SuiteDraft => ({
   z0: { re: '2', im: '0' },
   fixBy: 'k',
   k: '0',
-  cuts: [{ points: [{ re: '0', im: '0' }, { re: '1', im: '0' }], toInfinity: false }],
+  cuts: [
+    {
+      points: [
+        { re: '0', im: '0' },
+        { re: '1', im: '0' },
+      ],
+      toInfinity: false,
+    },
+  ],
 });
 
 const DRAFT_KEY = 'sheetkeeper.suite-draft.test-user.new';
@@ -33,7 +41,9 @@ const keptValue = () => JSON.parse(window.localStorage.getItem(DRAFT_KEY) ?? 'nu
 
 beforeEach(() => window.localStorage.clear());
 
-const savedVersion = { version: { id: 'v1', suiteId: 's1', slug: 'cube-root-of-z-z-minus-1', version: 1, status: 'draft' } };
+const savedVersion = {
+  version: { id: 'v1', suiteId: 's1', slug: 'cube-root-of-z-z-minus-1', version: 1, status: 'draft' },
+};
 
 describe('SuiteForm', () => {
   it('shows a broken rule beside its field as soon as the field is touched', async () => {
@@ -41,7 +51,9 @@ describe('SuiteForm', () => {
     renderWithClient(<SuiteForm initial={emptySuiteDraft()} editing={null} draftKey={DRAFT_KEY} onDone={jest.fn()} />);
     await toolsLoaded();
     type('Title', 'ab');
-    await waitFor(() => expect(within(fieldOf('Title')).getByText('× Title must be at least 3 characters')).toBeTruthy());
+    await waitFor(() =>
+      expect(within(fieldOf('Title')).getByText('× Title must be at least 3 characters')).toBeTruthy(),
+    );
     expect(screen.queryByText(/× Id /)).toBeNull();
     type('Title', 'Square root along the unit circle');
     await waitFor(() => expect(within(fieldOf('Title')).queryByText(/× Title/)).toBeNull());
@@ -54,7 +66,9 @@ describe('SuiteForm', () => {
     await toolsLoaded();
     await press('Save draft');
     const layoutRules = await screen.findByTestId('cut-layout-rules');
-    expect(layoutRules.textContent).toMatch(/the loop around the cut through \(0, 0\), \(1, 0\) crosses no cut but has monodromy e\^\{2πi·2\/3\} ≠ 1/);
+    expect(layoutRules.textContent).toMatch(
+      /the loop around the cut through \(0, 0\), \(1, 0\) crosses no cut but has monodromy e\^\{2πi·2\/3\} ≠ 1/,
+    );
     expect(screen.getByTestId('suite-form-refused').textContent).toMatch(/Not saved: 1 rule is broken/);
     expect(calls).toHaveLength(0);
 
@@ -69,13 +83,39 @@ describe('SuiteForm', () => {
       nu: '1/3',
       z0: { re: '2', im: '0' },
       k: 0,
-      cuts: [{ points: [{ re: '0', im: '0' }, { re: '1', im: '0' }], to_infinity: true }],
+      cuts: [
+        {
+          points: [
+            { re: '0', im: '0' },
+            { re: '1', im: '0' },
+          ],
+          to_infinity: true,
+        },
+      ],
     });
   });
 
   it('names an uncut branch point when the cut is removed', async () => {
     mockFetch(201, savedVersion);
-    renderWithClient(<SuiteForm initial={{ ...badLayout(), cuts: [{ points: [{ re: '0', im: '0' }, { re: '1', im: '0' }], toInfinity: true }] }} editing={null} draftKey={DRAFT_KEY} onDone={jest.fn()} />);
+    renderWithClient(
+      <SuiteForm
+        initial={{
+          ...badLayout(),
+          cuts: [
+            {
+              points: [
+                { re: '0', im: '0' },
+                { re: '1', im: '0' },
+              ],
+              toInfinity: true,
+            },
+          ],
+        }}
+        editing={null}
+        draftKey={DRAFT_KEY}
+        onDone={jest.fn()}
+      />,
+    );
     await toolsLoaded();
     await press('Remove cut 1');
     const layoutRules = await screen.findByTestId('cut-layout-rules');
@@ -83,16 +123,42 @@ describe('SuiteForm', () => {
   });
 
   it('shows the server’s rules beside their fields, keeps everything typed, and drops a rule once its field changes', async () => {
-    const calls = mockFetch(400, { kind: 'invalid-input', message: 'invalid', issues: [{ field: 'body.paths.0.radius', rule: 'must not reach the branch point at 0' }] });
+    const calls = mockFetch(400, {
+      kind: 'invalid-input',
+      message: 'invalid',
+      issues: [{ field: 'body.paths.0.radius', rule: 'must not reach the branch point at 0' }],
+    });
     const onDone = jest.fn();
-    renderWithClient(<SuiteForm initial={{ ...badLayout(), cuts: [{ points: [{ re: '0', im: '0' }, { re: '1', im: '0' }], toInfinity: true }] }} editing={null} draftKey={DRAFT_KEY} onDone={onDone} />);
+    renderWithClient(
+      <SuiteForm
+        initial={{
+          ...badLayout(),
+          cuts: [
+            {
+              points: [
+                { re: '0', im: '0' },
+                { re: '1', im: '0' },
+              ],
+              toInfinity: true,
+            },
+          ],
+        }}
+        editing={null}
+        draftKey={DRAFT_KEY}
+        onDone={onDone}
+      />,
+    );
     await toolsLoaded();
     type('Story', 'Ravi wants the cube root continuous across the negative real axis.');
     await press('Save draft');
-    await waitFor(() => expect(within(fieldOf('Path 1 radius')).getByText('× Radius must not reach the branch point at 0')).toBeTruthy());
+    await waitFor(() =>
+      expect(within(fieldOf('Path 1 radius')).getByText('× Radius must not reach the branch point at 0')).toBeTruthy(),
+    );
     expect(calls).toHaveLength(1);
     expect(onDone).not.toHaveBeenCalled();
-    expect((screen.getByLabelText('Story') as HTMLTextAreaElement).value).toBe('Ravi wants the cube root continuous across the negative real axis.');
+    expect((screen.getByLabelText('Story') as HTMLTextAreaElement).value).toBe(
+      'Ravi wants the cube root continuous across the negative real axis.',
+    );
     expect((screen.getByLabelText('g(z)') as HTMLInputElement).value).toBe('z*(z - 1)');
     expect((screen.getByLabelText('Cut 1 point 2, real part') as HTMLInputElement).value).toBe('1');
     expect(screen.getByTestId('suite-form-server-message').textContent).toMatch(/beside their fields/);
@@ -101,18 +167,59 @@ describe('SuiteForm', () => {
   });
 
   it('shows a refusal that names no field above the buttons', async () => {
-    mockFetch(409, { kind: 'conflict', message: 'A suite with the id "cube-root-of-z-z-minus-1" exists already: edit it instead.' });
-    renderWithClient(<SuiteForm initial={{ ...badLayout(), cuts: [{ points: [{ re: '0', im: '0' }, { re: '1', im: '0' }], toInfinity: true }] }} editing={null} draftKey={DRAFT_KEY} onDone={jest.fn()} />);
+    mockFetch(409, {
+      kind: 'conflict',
+      message: 'A suite with the id "cube-root-of-z-z-minus-1" exists already: edit it instead.',
+    });
+    renderWithClient(
+      <SuiteForm
+        initial={{
+          ...badLayout(),
+          cuts: [
+            {
+              points: [
+                { re: '0', im: '0' },
+                { re: '1', im: '0' },
+              ],
+              toInfinity: true,
+            },
+          ],
+        }}
+        editing={null}
+        draftKey={DRAFT_KEY}
+        onDone={jest.fn()}
+      />,
+    );
     await toolsLoaded();
     await press('Save draft');
-    await waitFor(() => expect(screen.getByTestId('suite-form-server-message').textContent).toMatch(/exists already: edit it instead/));
+    await waitFor(() =>
+      expect(screen.getByTestId('suite-form-server-message').textContent).toMatch(/exists already: edit it instead/),
+    );
     expect((screen.getByLabelText('Id') as HTMLInputElement).value).toBe('cube-root-of-z-z-minus-1');
   });
 
   it('saves and then submits for review', async () => {
     const calls = mockFetch(201, savedVersion);
     const onDone = jest.fn();
-    renderWithClient(<SuiteForm initial={{ ...badLayout(), cuts: [{ points: [{ re: '0', im: '0' }, { re: '1', im: '0' }], toInfinity: true }] }} editing={null} draftKey={DRAFT_KEY} onDone={onDone} />);
+    renderWithClient(
+      <SuiteForm
+        initial={{
+          ...badLayout(),
+          cuts: [
+            {
+              points: [
+                { re: '0', im: '0' },
+                { re: '1', im: '0' },
+              ],
+              toInfinity: true,
+            },
+          ],
+        }}
+        editing={null}
+        draftKey={DRAFT_KEY}
+        onDone={onDone}
+      />,
+    );
     await toolsLoaded();
     await press('Save and submit for review');
     await waitFor(() => expect(onDone).toHaveBeenCalledWith('cube-root-of-z-z-minus-1', true));
@@ -124,7 +231,9 @@ describe('SuiteForm', () => {
 
   it('keeps unsaved typing on this device and offers it back when the form opens again', async () => {
     mockFetch(201, savedVersion);
-    const first = renderWithClient(<SuiteForm initial={emptySuiteDraft()} editing={null} draftKey={DRAFT_KEY} onDone={jest.fn()} />);
+    const first = renderWithClient(
+      <SuiteForm initial={emptySuiteDraft()} editing={null} draftKey={DRAFT_KEY} onDone={jest.fn()} />,
+    );
     await toolsLoaded();
     expect(screen.queryByTestId('kept-draft-notice')).toBeNull();
     type('Title', 'Square root along the unit circle');
@@ -142,7 +251,25 @@ describe('SuiteForm', () => {
   it('forgets the kept work once the server has saved it, and when the author discards it', async () => {
     mockFetch(201, savedVersion);
     const onDone = jest.fn();
-    const first = renderWithClient(<SuiteForm initial={{ ...badLayout(), cuts: [{ points: [{ re: '0', im: '0' }, { re: '1', im: '0' }], toInfinity: true }] }} editing={null} draftKey={DRAFT_KEY} onDone={onDone} />);
+    const first = renderWithClient(
+      <SuiteForm
+        initial={{
+          ...badLayout(),
+          cuts: [
+            {
+              points: [
+                { re: '0', im: '0' },
+                { re: '1', im: '0' },
+              ],
+              toInfinity: true,
+            },
+          ],
+        }}
+        editing={null}
+        draftKey={DRAFT_KEY}
+        onDone={onDone}
+      />,
+    );
     await toolsLoaded();
     type('Title', 'Cube root of z(z−1), kept while typing');
     await waitFor(() => expect(keptValue()?.title).toBe('Cube root of z(z−1), kept while typing'));
@@ -151,7 +278,14 @@ describe('SuiteForm', () => {
     expect(window.localStorage.getItem(DRAFT_KEY)).toBeNull();
     first.unmount();
 
-    window.localStorage.setItem(DRAFT_KEY, JSON.stringify({ format: 1, savedAt: '2026-11-30T09:15:00.000Z', value: { ...emptySuiteDraft(), title: 'Left behind' } }));
+    window.localStorage.setItem(
+      DRAFT_KEY,
+      JSON.stringify({
+        format: 1,
+        savedAt: '2026-11-30T09:15:00.000Z',
+        value: { ...emptySuiteDraft(), title: 'Left behind' },
+      }),
+    );
     renderWithClient(<SuiteForm initial={emptySuiteDraft()} editing={null} draftKey={DRAFT_KEY} onDone={jest.fn()} />);
     await toolsLoaded();
     expect(screen.getByTestId('kept-draft-notice').textContent).toMatch(/30 Nov 2026/);
@@ -163,7 +297,10 @@ describe('SuiteForm', () => {
   it("offers nothing when what was kept no longer has the form's shape", async () => {
     mockFetch(201, savedVersion);
     const { paths: _paths, ...withoutPaths } = emptySuiteDraft();
-    window.localStorage.setItem(DRAFT_KEY, JSON.stringify({ format: 1, savedAt: '2026-11-30T09:15:00.000Z', value: withoutPaths }));
+    window.localStorage.setItem(
+      DRAFT_KEY,
+      JSON.stringify({ format: 1, savedAt: '2026-11-30T09:15:00.000Z', value: withoutPaths }),
+    );
     renderWithClient(<SuiteForm initial={emptySuiteDraft()} editing={null} draftKey={DRAFT_KEY} onDone={jest.fn()} />);
     await toolsLoaded();
     expect(screen.queryByTestId('kept-draft-notice')).toBeNull();

@@ -4,7 +4,14 @@ import type { TokenView } from '../../shared/token-view';
 import { fakeApiRoutes } from '../setup/fake-api-routes';
 import { renderWithClient } from '../setup/render-with-client';
 
-const active: TokenView = { id: '9d8c7b6a-5f4e-4d3c-8b2a-1f0e9d8c7b6a', name: 'complex.js CI', prefix: 'skt_AbCdEf', createdAt: '2026-03-01T10:00:00.000Z', lastUsedAt: null, revokedAt: null };
+const active: TokenView = {
+  id: '9d8c7b6a-5f4e-4d3c-8b2a-1f0e9d8c7b6a',
+  name: 'complex.js CI',
+  prefix: 'skt_AbCdEf',
+  createdAt: '2026-03-01T10:00:00.000Z',
+  lastUsedAt: null,
+  revokedAt: null,
+};
 
 describe('TokenList', () => {
   it('revokes a token only after the confirm step, then shows it revoked', async () => {

@@ -24,7 +24,11 @@ const SUITES: VersionMatrix['suites'] = [
         firstChangedIn: '2.4.1',
         steps: [
           {
-            before: { version: '2.3.0', value: { re: '0', im: '2' }, outcome: { kind: 'fail', diagnosis: { kind: 'zero-sign', part: 'im', of: 'input' } } },
+            before: {
+              version: '2.3.0',
+              value: { re: '0', im: '2' },
+              outcome: { kind: 'fail', diagnosis: { kind: 'zero-sign', part: 'im', of: 'input' } },
+            },
             after: { version: '2.4.1', value: { re: '0', im: '-2' }, outcome: { kind: 'pass' } },
           },
         ],
@@ -48,7 +52,9 @@ describe('VersionMatrixTable', () => {
     expect(screen.getByLabelText('sqrt-principal-sz at 2.4.3: 1 failed')).toBeTruthy();
     expect(screen.getByLabelText('exp-principal-sz at 2.4.3: pass (30)').textContent).toBe('2.4.3✓ pass (30)');
     expect(screen.getByTestId('matrix-sqrt-principal-sz').textContent).toContain('∆ 1 changed');
-    expect(screen.getByTestId('matrix-summary').textContent).toBe('2 suites over 3 versions of complex.js: 1 point in 1 suite changed value somewhere.');
+    expect(screen.getByTestId('matrix-summary').textContent).toBe(
+      '2 suites over 3 versions of complex.js: 1 point in 1 suite changed value somewhere.',
+    );
   });
 
   it('lists a changed point with its value and outcome on both sides, zero signs kept', () => {
@@ -65,7 +71,9 @@ describe('VersionMatrixTable', () => {
 
   it('says that no change means the same values at these points, not the same library', () => {
     render(<VersionMatrixTable library="complex.js" versions={VERSIONS} suites={[SUITES[1]!]} pending={4} />);
-    expect(screen.getByTestId('matrix-summary').textContent).toBe('1 suite over 3 versions of complex.js: no value changed between consecutive versions. 4 more suites still being compared…');
+    expect(screen.getByTestId('matrix-summary').textContent).toBe(
+      '1 suite over 3 versions of complex.js: no value changed between consecutive versions. 4 more suites still being compared…',
+    );
     const scope = screen.getByTestId('matrix-scope').textContent!;
     expect(scope).toContain('run on 2.3.0, 2.4.1, 2.4.3');
     expect(scope).toContain('bit for bit (zero signs included)');

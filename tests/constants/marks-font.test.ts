@@ -4,8 +4,11 @@ import { marksFont } from '../../scripts/marks-font';
 
 const ROOT = path.resolve(__dirname, '..', '..');
 const committed = opentype.loadSync(path.join(ROOT, 'assets', 'fonts', 'sheetkeeper-marks.ttf'));
-const plex = opentype.loadSync(path.join(ROOT, 'node_modules', '@expo-google-fonts', 'ibm-plex-sans', '400Regular', 'IBMPlexSans_400Regular.ttf'));
-const mapped = (font: opentype.Font) => Object.keys((font.tables.cmap as unknown as { glyphIndexMap: Record<string, number> }).glyphIndexMap).map(Number);
+const plex = opentype.loadSync(
+  path.join(ROOT, 'node_modules', '@expo-google-fonts', 'ibm-plex-sans', '400Regular', 'IBMPlexSans_400Regular.ttf'),
+);
+const mapped = (font: opentype.Font) =>
+  Object.keys((font.tables.cmap as unknown as { glyphIndexMap: Record<string, number> }).glyphIndexMap).map(Number);
 
 describe('the check-mark font', () => {
   it('maps U+2713 and nothing else, so every other character still comes from IBM Plex', () => {
@@ -13,7 +16,11 @@ describe('the check-mark font', () => {
   });
 
   it('has IBM Plex Sans’s metrics and ✓ width, so lines and widths do not move when it loads', () => {
-    expect([committed.unitsPerEm, committed.ascender, committed.descender]).toEqual([plex.unitsPerEm, plex.ascender, plex.descender]);
+    expect([committed.unitsPerEm, committed.ascender, committed.descender]).toEqual([
+      plex.unitsPerEm,
+      plex.ascender,
+      plex.descender,
+    ]);
     expect(committed.charToGlyph('✓').advanceWidth).toBe(plex.charToGlyph('✓').advanceWidth);
   });
 

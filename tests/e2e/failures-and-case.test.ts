@@ -10,7 +10,8 @@ const b = browserPerTest();
 const kwame = DEMO_USERS.find((u) => u.email === 'kwame@sheetkeeper.test')!;
 
 /** The API as the signed-in page sees it (plain promise chains: the page has no babel helpers). */
-const api = <T>(path: string): Promise<T> => b.page.evaluate((p) => fetch('/api' + p).then((res) => res.json()), path) as Promise<T>;
+const api = <T>(path: string): Promise<T> =>
+  b.page.evaluate((p) => fetch('/api' + p).then((res) => res.json()), path) as Promise<T>;
 
 describe('the failure table and a case', () => {
   it('filters the table in the address, opens a zero-sign case with its pictures and accepts the deviation as a maintainer', async () => {
@@ -31,7 +32,9 @@ describe('the failure table and a case', () => {
     await saveScreenshots(b.page, 'failure-table', () => b.page.getByText(/failures? shown/).waitFor());
 
     // A link from elsewhere opens the table filtered by run and target.
-    const { failures } = await api<{ failures: { id: string; runId: string; targetName: string; suiteSlug: string }[] }>('/failures?diagnosis=zero-sign&limit=1');
+    const { failures } = await api<{
+      failures: { id: string; runId: string; targetName: string; suiteSlug: string }[];
+    }>('/failures?diagnosis=zero-sign&limit=1');
     const f = failures[0]!;
     await b.page.goto(`${BASE_URL}/failures?run=${f.runId}&target=${encodeURIComponent(f.targetName)}`);
     await b.page.getByText(/failures? shown/).waitFor();
@@ -48,8 +51,14 @@ describe('the failure table and a case', () => {
     const plane = b.page.getByRole('img', { name: /The complex plane with the path/ });
     await plane.waitFor({ timeout: 30_000 });
     expect(await plane.locator('svg').count()).toBe(1);
-    await b.page.getByRole('img', { name: /Argument of the expected and the library's value/ }).locator('svg').waitFor();
-    await b.page.getByRole('img', { name: /Error in ulps along the path/ }).locator('svg').waitFor();
+    await b.page
+      .getByRole('img', { name: /Argument of the expected and the library's value/ })
+      .locator('svg')
+      .waitFor();
+    await b.page
+      .getByRole('img', { name: /Error in ulps along the path/ })
+      .locator('svg')
+      .waitFor();
 
     await b.page.getByRole('button', { name: 'Copy reproducer' }).waitFor();
     await saveScreenshots(b.page, 'case-detail', () => plane.locator('svg').waitFor());
@@ -58,7 +67,10 @@ describe('the failure table and a case', () => {
 
     // Exact bits on demand.
     await b.page.getByRole('button', { name: 'Show exact bits' }).click();
-    await b.page.getByText(/re -?0x/).first().waitFor();
+    await b.page
+      .getByText(/re -?0x/)
+      .first()
+      .waitFor();
 
     // Kwame, a maintainer, may accept the deviation (and only that).
     expect(await b.page.getByRole('radio', { name: 'Verdict: bug' }).count()).toBe(0);

@@ -35,7 +35,10 @@ describe('first screen', () => {
     const fontBytes = sizes.filter((s) => s.type === 'font').reduce((sum, s) => sum + s.bytes, 0);
     const dir = path.join(__dirname, '..', '..', 'test-results');
     mkdirSync(dir, { recursive: true });
-    writeFileSync(path.join(dir, 'first-screen.json'), JSON.stringify({ firstScreenMs, scriptBytes, fontBytes, files: sizes }, null, 2));
+    writeFileSync(
+      path.join(dir, 'first-screen.json'),
+      JSON.stringify({ firstScreenMs, scriptBytes, fontBytes, files: sizes }, null, 2),
+    );
     expect(scriptBytes).toBeGreaterThan(0);
     expect(scriptBytes).toBeLessThan(MAX_SCRIPT_BYTES);
     expect(firstScreenMs).toBeLessThan(MAX_FIRST_SCREEN_MS);

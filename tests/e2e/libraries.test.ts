@@ -17,16 +17,24 @@ describe('Libraries', () => {
     await complexJs.waitFor();
     // complex.js 2.0.11 … 2.4.3 are installed side by side under npm aliases.
     for (const version of ['2.0.11', '2.4.3']) await complexJs.getByText(version, { exact: true }).waitFor();
-    await b.page.getByTestId('library-cmath').getByText('One installed version: nothing to compare across versions.').waitFor();
+    await b.page
+      .getByTestId('library-cmath')
+      .getByText('One installed version: nothing to compare across versions.')
+      .waitFor();
     await saveScreenshots(b.page, 'libraries', () => complexJs.waitFor());
 
     await b.page.getByRole('link', { name: 'complex.js@2.4.3: convention fingerprint and cut maps' }).click();
     const sqrt = b.page.getByTestId('fingerprint-sqrt-(-inf, 0]');
     await sqrt.waitFor({ timeout: 30_000 });
     // Its √ closes the cut counter-clockwise while log and the powers follow the zero sign.
-    await sqrt.getByText('On its own ↺ counter-clockwise; disagrees with pow(z, 1/2), log, pow(z, 1/3) on the same cut').waitFor();
+    await sqrt
+      .getByText('On its own ↺ counter-clockwise; disagrees with pow(z, 1/2), log, pow(z, 1/3) on the same cut')
+      .waitFor();
     await sqrt.getByText('counter-clockwise at 4 of 4 places').waitFor();
-    await b.page.getByTestId('fingerprint-scope').getByText(/Not checked: the rest of each cut/).waitFor();
+    await b.page
+      .getByTestId('fingerprint-scope')
+      .getByText(/Not checked: the rest of each cut/)
+      .waitFor();
     await b.page.getByRole('button', { name: 'Show the 4 places probed for sqrt on (-inf, 0]' }).click();
     await b.page.getByLabel('Places probed for sqrt on (-inf, 0]').getByText('z = −0.5 ± 0i').waitFor();
     await saveScreenshots(b.page, 'library-fingerprint', () => sqrt.waitFor());
@@ -47,7 +55,9 @@ describe('Libraries', () => {
     await b.page.getByLabel('Box (re0,im0,re1,im1)').fill('-2,-2,2,2');
     await b.page.getByRole('radio', { name: 'Map acot', exact: true }).click();
     await b.page.getByRole('button', { name: 'Map this box' }).click();
-    await verdict.getByText(/× Differs: \d+ stretch\(es\) of discontinuity off the expected cuts/).waitFor({ timeout: 30_000 });
+    await verdict
+      .getByText(/× Differs: \d+ stretch\(es\) of discontinuity off the expected cuts/)
+      .waitFor({ timeout: 30_000 });
     expect(new URL(b.page.url()).searchParams.get('fn')).toBe('acot');
     await saveScreenshots(b.page, 'library-cut-map-acot', () => verdict.getByText(/× Differs/).waitFor());
   }, 180_000);
@@ -59,11 +69,19 @@ describe('Libraries', () => {
     // The first visit runs all approved demo suites on seven versions (~6 s of server time), in groups.
     await b.page.getByText(/All \d+ approved suites compared\./).waitFor({ timeout: 150_000 });
     const summary = b.page.getByTestId('matrix-summary');
-    expect(await summary.textContent()).toMatch(/suites over 7 versions of complex\.js: [\d,]+ points? in \d+ suites? changed value somewhere\./);
+    expect(await summary.textContent()).toMatch(
+      /suites over 7 versions of complex\.js: [\d,]+ points? in \d+ suites? changed value somewhere\./,
+    );
     const sqrt = b.page.getByTestId('matrix-sqrt-principal-sz');
-    await sqrt.getByText(/∆ \d+ changed/).first().waitFor();
+    await sqrt
+      .getByText(/∆ \d+ changed/)
+      .first()
+      .waitFor();
     await sqrt.getByRole('button', { name: /^Show the \d+ changed points? of sqrt-principal-sz$/ }).click();
-    await sqrt.getByText(/first changed in 2\.\d+\.\d+/).first().waitFor();
+    await sqrt
+      .getByText(/first changed in 2\.\d+\.\d+/)
+      .first()
+      .waitFor();
     await saveScreenshots(b.page, 'library-version-matrix', () => summary.waitFor());
 
     // On a wide screen the version headings stay in view while the suites scroll under them.
@@ -74,6 +92,12 @@ describe('Libraries', () => {
     const box = (await heading.boundingBox())!;
     expect(box.y).toBeGreaterThanOrEqual(0);
     expect(box.y + box.height).toBeLessThanOrEqual(900);
-    expect(await b.page.evaluate(() => document.scrollingElement!.scrollTop + Math.max(...Array.from(document.querySelectorAll('div')).map((d) => d.scrollTop)))).toBeGreaterThan(900);
+    expect(
+      await b.page.evaluate(
+        () =>
+          document.scrollingElement!.scrollTop +
+          Math.max(...Array.from(document.querySelectorAll('div')).map((d) => d.scrollTop)),
+      ),
+    ).toBeGreaterThan(900);
   }, 240_000);
 });

@@ -20,7 +20,10 @@ describe("a maintainer's day, one journey through the screens", () => {
     // Progress while it runs, then the verdict without a reload (50 shards on one worker).
     await b.page.getByRole('progressbar', { name: /^Progress: \d+ of 50 shards/ }).waitFor();
     await b.page.getByLabel('status: completed with failures').first().waitFor({ timeout: 150_000 });
-    await b.page.getByTestId('checked-scope-note').getByText(/not a certificate/).waitFor();
+    await b.page
+      .getByTestId('checked-scope-note')
+      .getByText(/not a certificate/)
+      .waitFor();
 
     // A failing cell leads to the failure table of that suite and target in this run.
     const cell = b.page.locator('a[data-testid^="cell-"]').first();
@@ -40,7 +43,10 @@ describe("a maintainer's day, one journey through the screens", () => {
     await b.page.getByLabel(/Expires on/).fill('2099-12-31');
     await b.page.getByRole('button', { name: 'Accept deviation' }).click();
     await b.page.getByText(/✓ Recorded: accepted deviation/).waitFor();
-    const accepted: { failures: { id: string }[] } = await b.page.evaluate((run) => fetch(`/api/failures?status=accepted&run=${run}&limit=500`).then((r) => r.json()), runId);
+    const accepted: { failures: { id: string }[] } = await b.page.evaluate(
+      (run) => fetch(`/api/failures?status=accepted&run=${run}&limit=500`).then((r) => r.json()),
+      runId,
+    );
     expect(accepted.failures.map((f) => f.id)).toContain(failureId);
     await signOut(b.page);
 
@@ -48,9 +54,16 @@ describe("a maintainer's day, one journey through the screens", () => {
     const odile = user('odile@sheetkeeper.test');
     await signIn(b.page, odile.email, odile.password);
     await goTo(b.page, 'Outbox');
-    await b.page.getByRole('link', { name: /^Message \[Sheetkeeper\] \d+ regressions? in complex\.js nightly/ }).first().click();
+    await b.page
+      .getByRole('link', { name: /^Message \[Sheetkeeper\] \d+ regressions? in complex\.js nightly/ })
+      .first()
+      .click();
     const inside = b.page.frameLocator('[data-testid="mail-html-frame"]');
-    await inside.locator('body').getByText(/regression/i).first().waitFor();
+    await inside
+      .locator('body')
+      .getByText(/regression/i)
+      .first()
+      .waitFor();
     await inside.locator('a[href*="/failures/"]').first().waitFor();
   }, 240_000);
 });

@@ -44,10 +44,18 @@ describe('plans and schedules', () => {
     await b.page.getByText('× Cron expression has an invalid minute field: "61"').waitFor();
     await cron.fill('15 6 * * 1');
     const nextRuns = b.page.getByTestId('schedule-next-runs');
-    await nextRuns.getByText(/^Mon .*06:15$/).nth(2).waitFor();
+    await nextRuns
+      .getByText(/^Mon .*06:15$/)
+      .nth(2)
+      .waitFor();
     expect(await b.page.getByText(/× Cron expression/).count()).toBe(0);
     expect(await nextRuns.getByText(/06:15$/).count()).toBe(3);
-    await saveScreenshots(b.page, 'schedule-editor', () => nextRuns.getByText(/06:15$/).nth(2).waitFor());
+    await saveScreenshots(b.page, 'schedule-editor', () =>
+      nextRuns
+        .getByText(/06:15$/)
+        .nth(2)
+        .waitFor(),
+    );
 
     const [patch] = await Promise.all([
       b.page.waitForResponse((r) => r.url().includes('/api/schedules/') && r.request().method() === 'PATCH'),
@@ -58,7 +66,10 @@ describe('plans and schedules', () => {
 
     // Pausing shows at once and reaches the server.
     const toggle = b.page.getByRole('switch', { name: 'Schedule 15 6 * * 1 runs' });
-    const [paused] = await Promise.all([b.page.waitForResponse((r) => r.url().includes('/api/schedules/') && r.request().method() === 'PATCH'), toggle.click()]);
+    const [paused] = await Promise.all([
+      b.page.waitForResponse((r) => r.url().includes('/api/schedules/') && r.request().method() === 'PATCH'),
+      toggle.click(),
+    ]);
     expect(paused.status()).toBe(200);
     await b.page.getByRole('switch', { name: 'Schedule 15 6 * * 1 runs', checked: false }).waitFor();
     await schedules.getByText('Paused: this schedule starts no runs until it is turned on again.').waitFor();
@@ -77,7 +88,9 @@ describe('plans and schedules', () => {
     await b.page.getByText('× Recipients “not-an-address” must be an e-mail address').waitFor();
     await b.page.getByText('× Suites needs at least one suite').waitFor();
     await b.page.getByText('× Targets needs at least one target').waitFor();
-    await saveScreenshots(b.page, 'plan-new-invalid', () => b.page.getByText('× Suites needs at least one suite').waitFor());
+    await saveScreenshots(b.page, 'plan-new-invalid', () =>
+      b.page.getByText('× Suites needs at least one suite').waitFor(),
+    );
 
     await b.page.getByLabel('Recipients', { exact: true }).fill('kwame@sheetkeeper.test');
     await b.page.getByLabel('Filter suites').fill('sqrt-principal-sz');
@@ -107,7 +120,10 @@ describe('settings', () => {
     await goTo(b.page, 'Settings');
     await b.page.getByTestId('subscription-list').waitFor();
     // At 390 px a long library name wraps after a slash, never inside a word: each part stays on one line.
-    const heights = await b.page.getByTestId('name-mathjs/number/predictable').locator(':scope > *').evaluateAll((parts) => parts.map((p) => p.getBoundingClientRect().height));
+    const heights = await b.page
+      .getByTestId('name-mathjs/number/predictable')
+      .locator(':scope > *')
+      .evaluateAll((parts) => parts.map((p) => p.getBoundingClientRect().height));
     expect(heights).toHaveLength(3);
     expect(Math.max(...heights)).toBeLessThan(1.5 * Math.min(...heights));
     await b.page.getByLabel('Token name', { exact: true }).fill('e2e pipeline');
@@ -121,15 +137,21 @@ describe('settings', () => {
     await saveScreenshots(b.page, 'settings-new-token', () => secretText.waitFor());
 
     // The CI example names the header the server reads.
-    expect(await b.page.getByTestId('ci-example-curl').textContent()).toContain('Authorization: Bearer $SHEETKEEPER_TOKEN');
-    const withToken = (token: string) => fetch(`${BASE_URL}/api/runs`, { headers: { authorization: `Bearer ${token}` } }).then((r) => r.status);
+    expect(await b.page.getByTestId('ci-example-curl').textContent()).toContain(
+      'Authorization: Bearer $SHEETKEEPER_TOKEN',
+    );
+    const withToken = (token: string) =>
+      fetch(`${BASE_URL}/api/runs`, { headers: { authorization: `Bearer ${token}` } }).then((r) => r.status);
     expect(await withToken(secret)).toBe(200);
 
     await b.page.getByRole('button', { name: 'I have stored it' }).click();
     await b.page.reload();
     await b.page.getByTestId('token-e2e pipeline').waitFor();
     expect(await b.page.content()).not.toContain(secret);
-    await b.page.getByTestId('token-e2e pipeline').getByText(/· last used /).waitFor();
+    await b.page
+      .getByTestId('token-e2e pipeline')
+      .getByText(/· last used /)
+      .waitFor();
     await saveScreenshots(b.page, 'settings', () => b.page.getByTestId('token-e2e pipeline').waitFor());
 
     await b.page.getByRole('button', { name: 'Revoke token e2e pipeline' }).click();
@@ -138,7 +160,10 @@ describe('settings', () => {
       b.page.getByRole('button', { name: 'Yes, revoke' }).click(),
     ]);
     expect(revoked.status()).toBe(200);
-    await b.page.getByTestId('token-e2e pipeline').getByText(/^− Revoked /).waitFor();
+    await b.page
+      .getByTestId('token-e2e pipeline')
+      .getByText(/^− Revoked /)
+      .waitFor();
     expect(await withToken(secret)).toBe(401);
   });
 });
@@ -188,7 +213,17 @@ describe('outbox', () => {
     await mail.waitFor();
     await mail.click();
     const inside = b.page.frameLocator('[data-testid="mail-html-frame"]');
-    await inside.locator('body').getByText(/regression/i).first().waitFor();
-    await saveScreenshots(b.page, 'outbox-regression-mail', () => inside.locator('body').getByText(/regression/i).first().waitFor());
+    await inside
+      .locator('body')
+      .getByText(/regression/i)
+      .first()
+      .waitFor();
+    await saveScreenshots(b.page, 'outbox-regression-mail', () =>
+      inside
+        .locator('body')
+        .getByText(/regression/i)
+        .first()
+        .waitFor(),
+    );
   });
 });

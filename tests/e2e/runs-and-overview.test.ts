@@ -14,9 +14,11 @@ const api = <T>(path: string, method = 'GET', body?: unknown): Promise<T> =>
   // Plain promise chains: the test's babel would turn async/await and destructuring into helpers the page does not have.
   b.page.evaluate(
     (arg) =>
-      fetch('/api' + arg.path, { method: arg.method, headers: arg.body ? { 'content-type': 'application/json' } : {}, body: arg.body ? JSON.stringify(arg.body) : undefined }).then((res) =>
-        res.json().then((json) => ({ status: res.status, body: json })),
-      ),
+      fetch('/api' + arg.path, {
+        method: arg.method,
+        headers: arg.body ? { 'content-type': 'application/json' } : {},
+        body: arg.body ? JSON.stringify(arg.body) : undefined,
+      }).then((res) => res.json().then((json) => ({ status: res.status, body: json }))),
     { path, method, body },
   ) as Promise<T>;
 
@@ -25,7 +27,10 @@ describe('Overview and runs', () => {
     await signIn(b.page, kwame.email, kwame.password);
     const nightly = b.page.getByTestId('plan-complex.js nightly');
     await nightly.waitFor();
-    await nightly.getByText(/regression|No earlier completed run/).first().waitFor();
+    await nightly
+      .getByText(/regression|No earlier completed run/)
+      .first()
+      .waitFor();
     await b.page.getByText('Latest run of each plan').waitFor();
     await b.page.getByTestId('needs-me').waitFor();
     await b.page.getByText('A green result in Sheetkeeper is evidence').waitFor();
@@ -63,29 +68,40 @@ describe('Overview and runs', () => {
     await b.page.waitForFunction(() => {
       let loaded = false;
       document.fonts.forEach((f) => {
-        if (f.family.replace(/"/g, '') === 'SheetkeeperMarks' && f.unicodeRange === 'U+2713' && f.status === 'loaded') loaded = true;
+        if (f.family.replace(/"/g, '') === 'SheetkeeperMarks' && f.unicodeRange === 'U+2713' && f.status === 'loaded')
+          loaded = true;
       });
       return loaded;
     });
     const failing = b.page.locator('a[data-testid^="cell-"]').first();
-    if ((await failing.count()) > 0) expect(await failing.getAttribute('href')).toMatch(/^\/failures\?run=[0-9a-f-]{36}&suite=[^&]+&target=[^&]+$/);
+    if ((await failing.count()) > 0)
+      expect(await failing.getAttribute('href')).toMatch(/^\/failures\?run=[0-9a-f-]{36}&suite=[^&]+&target=[^&]+$/);
     await b.page.getByText('Property checks', { exact: true }).waitFor();
     await saveScreenshots(b.page, 'run-detail', () => b.page.getByText('Matrix: suite × target').waitFor());
-    await saveScreenshots(b.page, 'run-detail-matrix', () => b.page.getByText('Matrix: suite × target').scrollIntoViewIfNeeded());
-    await saveScreenshots(b.page, 'run-detail-properties', () => b.page.getByText('Property checks', { exact: true }).scrollIntoViewIfNeeded());
+    await saveScreenshots(b.page, 'run-detail-matrix', () =>
+      b.page.getByText('Matrix: suite × target').scrollIntoViewIfNeeded(),
+    );
+    await saveScreenshots(b.page, 'run-detail-properties', () =>
+      b.page.getByText('Property checks', { exact: true }).scrollIntoViewIfNeeded(),
+    );
   });
 
   it('follows a run started through the API live, and cancels it after a confirm step', async () => {
     await signIn(b.page, kwame.email, kwame.password);
     const plans = await api<{ body: { plans: { id: string; name: string }[] } }>('/plans');
     const plan = plans.body.plans.find((p) => p.name === 'complex.js nightly')!;
-    const started = await api<{ status: number; body: { run: { id: string; shardsTotal: number } } }>('/runs', 'POST', { planId: plan.id });
+    const started = await api<{ status: number; body: { run: { id: string; shardsTotal: number } } }>('/runs', 'POST', {
+      planId: plan.id,
+    });
     expect(started.status).toBe(202);
     const run = started.body.run;
 
     // The Overview lists it in progress with its bar.
     await b.page.goto(`${BASE_URL}/`);
-    await b.page.getByTestId(`run-${run.id}`).getByRole('progressbar', { name: /^Progress:/ }).waitFor();
+    await b.page
+      .getByTestId(`run-${run.id}`)
+      .getByRole('progressbar', { name: /^Progress:/ })
+      .waitFor();
     await saveScreenshots(b.page, 'overview-run-in-progress', () => b.page.getByTestId(`run-${run.id}`).waitFor());
 
     await b.page.getByTestId(`run-${run.id}`).click();
@@ -99,10 +115,14 @@ describe('Overview and runs', () => {
     await b.page.getByRole('button', { name: 'Cancel run…' }).click();
     await b.page.getByText('Cancel this run?').waitFor();
     await b.page.getByRole('button', { name: 'Keep it running' }).click();
-    expect((await api<{ body: { run: { status: string } } }>(`/runs/${run.id}`)).body.run.status).toMatch(/queued|running/);
+    expect((await api<{ body: { run: { status: string } } }>(`/runs/${run.id}`)).body.run.status).toMatch(
+      /queued|running/,
+    );
     await b.page.getByRole('button', { name: 'Cancel run…' }).click();
     // The screen shows "cancelled" at once (optimistic); the server's answer comes after it.
-    const answered = b.page.waitForResponse((r) => r.url().endsWith(`/api/runs/${run.id}/cancel`) && r.request().method() === 'POST');
+    const answered = b.page.waitForResponse(
+      (r) => r.url().endsWith(`/api/runs/${run.id}/cancel`) && r.request().method() === 'POST',
+    );
     await b.page.getByRole('button', { name: 'Yes, cancel the run' }).click();
     await b.page.getByText('× cancelled').first().waitFor();
     expect((await answered).status()).toBe(200);

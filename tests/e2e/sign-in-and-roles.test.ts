@@ -28,7 +28,9 @@ describe('signing in and out', () => {
     await b.page.getByRole('button', { name: 'Sign in' }).click();
     await b.page.getByText('× That e-mail and password do not match an account.').waitFor();
     expect(await b.page.getByLabel('E-mail').inputValue()).toBe('ravi@sheetkeeper.test');
-    await saveScreenshots(b.page, 'sign-in-wrong-password', () => b.page.getByText('× That e-mail and password').waitFor());
+    await saveScreenshots(b.page, 'sign-in-wrong-password', () =>
+      b.page.getByText('× That e-mail and password').waitFor(),
+    );
   });
 
   it.each(ROLES)('signs in as %s, shows who and which role, and signs out', async (role) => {
@@ -42,7 +44,10 @@ describe('signing in and out', () => {
     await b.page.getByRole('button', { name: 'Sign out' }).waitFor();
     expect(await b.page.getByRole('link', { name: 'Users', exact: true }).count()).toBe(role === 'admin' ? 1 : 0);
     // The phone's More screen (on a wide screen the rail shows the same destinations).
-    if (role === 'admin') await saveScreenshots(b.page, 'more', () => b.page.getByRole('link', { name: 'Outbox', exact: true }).first().waitFor());
+    if (role === 'admin')
+      await saveScreenshots(b.page, 'more', () =>
+        b.page.getByRole('link', { name: 'Outbox', exact: true }).first().waitFor(),
+      );
     await signOut(b.page);
     expect(await b.page.evaluate(() => fetch('/api/me').then((r) => r.status))).toBe(401);
   });

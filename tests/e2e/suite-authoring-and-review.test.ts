@@ -36,7 +36,11 @@ describe('writing a regular-branch suite and reviewing it', () => {
     await page.getByRole('link', { name: 'New suite' }).click();
     await fill(page, 'Id', SLUG);
     await fill(page, 'Title', 'Cube root of z(z−1) as cbrt z · cbrt(z−1): one cut (−∞, 1]');
-    await fill(page, 'Story', 'Mei’s users take cube roots of products. The product of principal cube roots is the branch of (z(z−1))^(1/3) that equals the real cube root of 2 at z = 2 with a single cut from 1 through 0 to −∞.');
+    await fill(
+      page,
+      'Story',
+      'Mei’s users take cube roots of products. The product of principal cube roots is the branch of (z(z−1))^(1/3) that equals the real cube root of 2 at z = 2 with a single cut from 1 through 0 to −∞.',
+    );
     await fill(page, 'Subject', 'cbrt(z) * cbrt(z - 1)');
     await page.getByRole('radio', { name: 'Branch spec: regular branch of g(z)^ν' }).click();
     await fill(page, 'g(z)', 'z*(z - 1)');
@@ -50,27 +54,49 @@ describe('writing a regular-branch suite and reviewing it', () => {
     await page.getByRole('button', { name: 'Save draft' }).click();
     const layoutRule = page.getByTestId('cut-layout-rules');
     await layoutRule.waitFor();
-    expect(await layoutRule.textContent()).toMatch(/the loop around the cut through \(1, 0\), \(0, 0\) crosses no cut but has monodromy e\^\{2πi·2\/3\} ≠ 1/);
+    expect(await layoutRule.textContent()).toMatch(
+      /the loop around the cut through \(1, 0\), \(0, 0\) crosses no cut but has monodromy e\^\{2πi·2\/3\} ≠ 1/,
+    );
     await page.getByTestId('suite-form-refused').waitFor();
     expect(await page.evaluate((slug) => fetch(`/api/suites/${slug}`).then((r) => r.status), SLUG)).toBe(404);
 
     // The fix: the cut continues from 0 to infinity, so no cut-free loop encloses a branch point alone.
     await page.getByRole('checkbox', { name: 'Cut 1 continues to infinity' }).click();
     await layoutRule.waitFor({ state: 'detached' });
-    expect(await page.getByLabel('Title', { exact: true }).inputValue()).toBe('Cube root of z(z−1) as cbrt z · cbrt(z−1): one cut (−∞, 1]');
-    await page.getByTestId('suite-preview-summary').getByText(/2 branch points/).waitFor();
+    expect(await page.getByLabel('Title', { exact: true }).inputValue()).toBe(
+      'Cube root of z(z−1) as cbrt z · cbrt(z−1): one cut (−∞, 1]',
+    );
+    await page
+      .getByTestId('suite-preview-summary')
+      .getByText(/2 branch points/)
+      .waitFor();
 
     // A reload loses nothing: the browser kept the unsaved work and offers it back.
-    await page.waitForFunction(() => Object.keys(window.localStorage).some((k) => k.startsWith('sheetkeeper.suite-draft.') && k.endsWith('.new') && window.localStorage.getItem(k)!.includes('one cut (−∞, 1]')));
+    await page.waitForFunction(() =>
+      Object.keys(window.localStorage).some(
+        (k) =>
+          k.startsWith('sheetkeeper.suite-draft.') &&
+          k.endsWith('.new') &&
+          window.localStorage.getItem(k)!.includes('one cut (−∞, 1]'),
+      ),
+    );
     await page.reload();
     await page.getByTestId('kept-draft-notice').waitFor();
     expect(await page.getByLabel('Title', { exact: true }).inputValue()).toBe('');
     await page.getByRole('button', { name: 'Restore it' }).click();
-    expect(await page.getByLabel('Title', { exact: true }).inputValue()).toBe('Cube root of z(z−1) as cbrt z · cbrt(z−1): one cut (−∞, 1]');
+    expect(await page.getByLabel('Title', { exact: true }).inputValue()).toBe(
+      'Cube root of z(z−1) as cbrt z · cbrt(z−1): one cut (−∞, 1]',
+    );
     expect(await page.getByRole('checkbox', { name: 'Cut 1 continues to infinity' }).isChecked()).toBe(true);
-    await page.getByTestId('suite-preview-summary').getByText(/2 branch points/).waitFor();
+    await page
+      .getByTestId('suite-preview-summary')
+      .getByText(/2 branch points/)
+      .waitFor();
     await saveScreenshots(page, 'suite-form', async () => {
-      await page.getByTestId('suite-preview-summary').getByText(/2 branch points/).waitFor();
+      await page
+        .getByTestId('suite-preview-summary')
+        .getByText(/2 branch points/)
+        .waitFor();
       await page.getByTestId('suite-preview').scrollIntoViewIfNeeded();
     });
 
@@ -92,10 +118,17 @@ describe('writing a regular-branch suite and reviewing it', () => {
     await saveScreenshots(page, 'review-queue', () => page.getByTestId(`suite-${SLUG}`).waitFor());
     await phoneLayout(page);
     await page.getByTestId(`suite-${SLUG}`).click();
-    await page.getByTestId('suite-diff').getByText(/first version/).waitFor();
+    await page
+      .getByTestId('suite-diff')
+      .getByText(/first version/)
+      .waitFor();
     await page.getByLabel('Comment', { exact: true }).fill('Layout checked: both branch points on the one cut.');
     await page.getByRole('button', { name: 'Approve version 1' }).click();
-    await page.getByText('Nothing waits for review.').or(page.getByRole('heading', { name: 'Review', exact: true })).first().waitFor();
+    await page
+      .getByText('Nothing waits for review.')
+      .or(page.getByRole('heading', { name: 'Review', exact: true }))
+      .first()
+      .waitFor();
     await signOut(page);
   });
 

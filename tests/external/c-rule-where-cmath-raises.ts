@@ -9,4 +9,3 @@ export const C_RULE: Record<string, (x: number, y: number) => [number, number] |
   // catan z = −i catanh(iz): catan(±0 ± i) is −i·catanh(∓1 ± 0i) = ±0 ± i∞.
   atan: (x, y) => (x === 0 && Math.abs(y) === 1 ? [x, y * Infinity] : undefined),
 };
-

@@ -13,7 +13,9 @@ import { askPython, type OraclePoint } from './python-oracle';
 // from one batch, except the rows cmath refuses, which are checked against the C rule itself.
 
 const grid: OraclePoint[] = [];
-for (const fn of CMATH_CASES.functions) for (const x of CMATH_CASES.special) for (const y of CMATH_CASES.special) grid.push({ fn, z: [formatDouble(x), formatDouble(y)] });
+for (const fn of CMATH_CASES.functions)
+  for (const x of CMATH_CASES.special)
+    for (const y of CMATH_CASES.special) grid.push({ fn, z: [formatDouble(x), formatDouble(y)] });
 
 const cutPoints = cutPointsOf(CMATH_CASES.cuts);
 
@@ -25,21 +27,36 @@ describe('principal values against Python cmath (ISO/IEC 9899 Annex G)', () => {
     const failures: string[] = [];
     grid.forEach((p, i) => {
       if (p.fn !== fn) return;
-      const result = compareWithCmath(fn, parseDouble(p.z[0]), parseDouble(p.z[1]), specialAnswers[i] as CmathAnswer, CMATH_CASES.ulps);
+      const result = compareWithCmath(
+        fn,
+        parseDouble(p.z[0]),
+        parseDouble(p.z[1]),
+        specialAnswers[i] as CmathAnswer,
+        CMATH_CASES.ulps,
+      );
       if (result) failures.push(result);
     });
     expect(failures).toEqual([]);
   });
 
-  it.each(Object.keys(CMATH_CASES.cuts).map((fn) => [fn]))('takes the side of each %s cut that the zero sign names, as cmath does', (fn) => {
-    const failures: string[] = [];
-    cutPoints.forEach((p, i) => {
-      if (p.fn !== fn) return;
-      const result = compareWithCmath(fn, parseDouble(p.z[0]), parseDouble(p.z[1]), cutAnswers[i] as CmathAnswer, CMATH_CASES.ulps);
-      if (result) failures.push(result);
-    });
-    expect(failures).toEqual([]);
-  });
+  it.each(Object.keys(CMATH_CASES.cuts).map((fn) => [fn]))(
+    'takes the side of each %s cut that the zero sign names, as cmath does',
+    (fn) => {
+      const failures: string[] = [];
+      cutPoints.forEach((p, i) => {
+        if (p.fn !== fn) return;
+        const result = compareWithCmath(
+          fn,
+          parseDouble(p.z[0]),
+          parseDouble(p.z[1]),
+          cutAnswers[i] as CmathAnswer,
+          CMATH_CASES.ulps,
+        );
+        if (result) failures.push(result);
+      });
+      expect(failures).toEqual([]);
+    },
+  );
 
   it('records which rows cmath refuses, so the C rules above are exercised', () => {
     const refused = grid.filter((_, i) => specialAnswers[i]?.raises).map((p) => `${p.fn}(${p.z.join(', ')})`);

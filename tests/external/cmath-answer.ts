@@ -4,4 +4,3 @@ export interface CmathAnswer {
   im?: string;
   raises?: string;
 }
-

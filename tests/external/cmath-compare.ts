@@ -56,7 +56,8 @@ export function compareWithCmath(
     expected = [unhex(answer.re as string), unhex(answer.im as string)];
   }
   const loose = unspecifiedSign(fn, x, y);
-  const ok = (a: number, b: number, free: boolean) => (free ? sameDouble(Math.abs(a), Math.abs(b), ulps) : sameDouble(a, b, ulps));
+  const ok = (a: number, b: number, free: boolean) =>
+    free ? sameDouble(Math.abs(a), Math.abs(b), ulps) : sameDouble(a, b, ulps);
   if (ok(re, expected[0], loose.re) && ok(im, expected[1], loose.im)) return null;
   return `${fn}(${formatDouble(x)} + ${formatDouble(y)}i): ours ${formatDouble(re)} + ${formatDouble(im)}i, expected ${formatDouble(expected[0])} + ${formatDouble(expected[1])}i${answer.raises ? ' (C rule; cmath raises)' : ''}`;
 }

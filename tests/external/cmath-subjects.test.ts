@@ -20,28 +20,57 @@ const SUBJECTS: [string, string][] = [
   ['asinh(i*z)', 'asinh(1j*z)'],
 ];
 const POINTS: [number, number][] = [
-  [-0.5, 0], [-0.5, -0], [0.5, 0], [0.5, -0], [3, 0], [3, -0], [-3, 0], [-3, -0],
-  [0, 2], [-0, 2], [0, -2], [-0, -2], [0.75, 1.25], [-2.5, -0.125], [1.5, 1e-9], [1.5, -1e-9],
+  [-0.5, 0],
+  [-0.5, -0],
+  [0.5, 0],
+  [0.5, -0],
+  [3, 0],
+  [3, -0],
+  [-3, 0],
+  [-3, -0],
+  [0, 2],
+  [-0, 2],
+  [0, -2],
+  [-0, -2],
+  [0.75, 1.25],
+  [-2.5, -0.125],
+  [1.5, 1e-9],
+  [1.5, -1e-9],
 ];
 
 describe('subjects against the same formula with Python cmath', () => {
   const cases = SUBJECTS.flatMap(([subject, formula]) => POINTS.map(([x, y]) => ({ subject, formula, x, y })));
-  const points: OraclePoint[] = cases.map((c) => ({ fn: 'formula', formula: c.formula, z: [formatDouble(c.x), formatDouble(c.y)] }));
+  const points: OraclePoint[] = cases.map((c) => ({
+    fn: 'formula',
+    formula: c.formula,
+    z: [formatDouble(c.x), formatDouble(c.y)],
+  }));
   const answers = askPython<{ re?: string; im?: string; raises?: string }>('cmath-formula', points);
 
-  it.each(SUBJECTS.map(([subject]) => [subject]))('matches cmath sign-exactly for %s on and beside the cuts', (subject) => {
-    const expr = parseSubject(subject);
-    const failures: string[] = [];
-    cases.forEach((c, i) => {
-      if (c.subject !== subject) return;
-      const answer = answers[i];
-      if (!answer?.re || !answer.im) return failures.push(`cmath raised ${answer?.raises} at ${formatDouble(c.x)} + ${formatDouble(c.y)}i`) && undefined;
-      const ours = evaluateSubject(expr, BigComplex.fromDoubles(c.x, c.y), 'signed-zero', { double: true, digits: 0 }).double;
-      const theirs = [unhex(answer.re), unhex(answer.im)];
-      if (!sameDouble(ours[0], theirs[0] as number, 64) || !sameDouble(ours[1], theirs[1] as number, 64)) {
-        failures.push(`at ${formatDouble(c.x)} + ${formatDouble(c.y)}i: ours ${ours.map(formatDouble).join(' + ')}i, cmath ${answer.re} + ${answer.im}i`);
-      }
-    });
-    expect(failures).toEqual([]);
-  });
+  it.each(SUBJECTS.map(([subject]) => [subject]))(
+    'matches cmath sign-exactly for %s on and beside the cuts',
+    (subject) => {
+      const expr = parseSubject(subject);
+      const failures: string[] = [];
+      cases.forEach((c, i) => {
+        if (c.subject !== subject) return;
+        const answer = answers[i];
+        if (!answer?.re || !answer.im)
+          return (
+            failures.push(`cmath raised ${answer?.raises} at ${formatDouble(c.x)} + ${formatDouble(c.y)}i`) && undefined
+          );
+        const ours = evaluateSubject(expr, BigComplex.fromDoubles(c.x, c.y), 'signed-zero', {
+          double: true,
+          digits: 0,
+        }).double;
+        const theirs = [unhex(answer.re), unhex(answer.im)];
+        if (!sameDouble(ours[0], theirs[0] as number, 64) || !sameDouble(ours[1], theirs[1] as number, 64)) {
+          failures.push(
+            `at ${formatDouble(c.x)} + ${formatDouble(c.y)}i: ours ${ours.map(formatDouble).join(' + ')}i, cmath ${answer.re} + ${answer.im}i`,
+          );
+        }
+      });
+      expect(failures).toEqual([]);
+    },
+  );
 });

@@ -60,18 +60,120 @@ const SPECS: Spec[] = [
   { fn: 'pow', w: ['0.3', '-1.7'], branchPoints: [[0, 0]], cuts: NEGATIVE_AXIS, big: false },
   { fn: 'exp', branchPoints: [], cuts: [], big: false },
   { fn: 'log', branchPoints: [[0, 0]], cuts: NEGATIVE_AXIS, big: true },
-  { fn: 'asin', branchPoints: [[1, 0], [-1, 0]], cuts: REAL_CUTS_PM1, big: true },
-  { fn: 'acos', branchPoints: [[1, 0], [-1, 0]], cuts: REAL_CUTS_PM1, big: true },
-  { fn: 'atan', branchPoints: [[0, 1], [0, -1]], cuts: IMAG_CUTS_PM1, big: true },
-  { fn: 'asinh', branchPoints: [[0, 1], [0, -1]], cuts: IMAG_CUTS_PM1, big: true },
-  { fn: 'acosh', branchPoints: [[1, 0], [-1, 0]], cuts: [...NEGATIVE_AXIS, { at: [0.5, 0], across: [0, 1] }], big: true },
-  { fn: 'atanh', branchPoints: [[1, 0], [-1, 0]], cuts: REAL_CUTS_PM1, big: true },
-  { fn: 'acot', branchPoints: [[0, 1], [0, -1]], cuts: UNIT_IMAG_SEGMENT, big: true },
-  { fn: 'asec', branchPoints: [[1, 0], [-1, 0], [0, 0]], cuts: UNIT_REAL_SEGMENT, big: true },
-  { fn: 'acsc', branchPoints: [[1, 0], [-1, 0], [0, 0]], cuts: UNIT_REAL_SEGMENT, big: true },
-  { fn: 'acoth', branchPoints: [[1, 0], [-1, 0]], cuts: UNIT_REAL_SEGMENT, big: true },
-  { fn: 'asech', branchPoints: [[1, 0], [-1, 0], [0, 0]], cuts: [{ at: [-2, 0], across: [0, 1] }, { at: [3, 0], across: [0, 1] }], big: true },
-  { fn: 'acsch', branchPoints: [[0, 1], [0, -1]], cuts: UNIT_IMAG_SEGMENT, big: true },
+  {
+    fn: 'asin',
+    branchPoints: [
+      [1, 0],
+      [-1, 0],
+    ],
+    cuts: REAL_CUTS_PM1,
+    big: true,
+  },
+  {
+    fn: 'acos',
+    branchPoints: [
+      [1, 0],
+      [-1, 0],
+    ],
+    cuts: REAL_CUTS_PM1,
+    big: true,
+  },
+  {
+    fn: 'atan',
+    branchPoints: [
+      [0, 1],
+      [0, -1],
+    ],
+    cuts: IMAG_CUTS_PM1,
+    big: true,
+  },
+  {
+    fn: 'asinh',
+    branchPoints: [
+      [0, 1],
+      [0, -1],
+    ],
+    cuts: IMAG_CUTS_PM1,
+    big: true,
+  },
+  {
+    fn: 'acosh',
+    branchPoints: [
+      [1, 0],
+      [-1, 0],
+    ],
+    cuts: [...NEGATIVE_AXIS, { at: [0.5, 0], across: [0, 1] }],
+    big: true,
+  },
+  {
+    fn: 'atanh',
+    branchPoints: [
+      [1, 0],
+      [-1, 0],
+    ],
+    cuts: REAL_CUTS_PM1,
+    big: true,
+  },
+  {
+    fn: 'acot',
+    branchPoints: [
+      [0, 1],
+      [0, -1],
+    ],
+    cuts: UNIT_IMAG_SEGMENT,
+    big: true,
+  },
+  {
+    fn: 'asec',
+    branchPoints: [
+      [1, 0],
+      [-1, 0],
+      [0, 0],
+    ],
+    cuts: UNIT_REAL_SEGMENT,
+    big: true,
+  },
+  {
+    fn: 'acsc',
+    branchPoints: [
+      [1, 0],
+      [-1, 0],
+      [0, 0],
+    ],
+    cuts: UNIT_REAL_SEGMENT,
+    big: true,
+  },
+  {
+    fn: 'acoth',
+    branchPoints: [
+      [1, 0],
+      [-1, 0],
+    ],
+    cuts: UNIT_REAL_SEGMENT,
+    big: true,
+  },
+  {
+    fn: 'asech',
+    branchPoints: [
+      [1, 0],
+      [-1, 0],
+      [0, 0],
+    ],
+    cuts: [
+      { at: [-2, 0], across: [0, 1] },
+      { at: [3, 0], across: [0, 1] },
+    ],
+    big: true,
+  },
+  {
+    fn: 'acsch',
+    branchPoints: [
+      [0, 1],
+      [0, -1],
+    ],
+    cuts: UNIT_IMAG_SEGMENT,
+    big: true,
+  },
 ];
 
 function label(spec: Spec): string {
@@ -129,7 +231,10 @@ function agrees(ours: string, theirs: string): boolean {
   const a = new Decimal(ours);
   const b = new Decimal(theirs);
   if (b.isZero()) return a.isZero();
-  return a.minus(b).abs().lte(b.abs().times(new Decimal(10).pow(-DIGITS)));
+  return a
+    .minus(b)
+    .abs()
+    .lte(b.abs().times(new Decimal(10).pow(-DIGITS)));
 }
 
 interface MpAnswer {
@@ -155,29 +260,37 @@ describe('principal values against mpmath at 60 digits', () => {
     expect(cases.length).toBeGreaterThanOrEqual(600);
   });
 
-  it.each(SPECS.map((spec) => [label(spec), spec]))('agrees with mpmath to 38 digits and sign-exact doubles for %s', (_, spec) => {
-    const failures: string[] = [];
-    let checked = 0;
-    cases.forEach(({ spec: s, x, y }, i) => {
-      if (s !== spec) return;
-      checked++;
-      const mp = answers[i] as MpAnswer;
-      const r = principalValue(request(spec, x, y), { double: true, digits: 40 });
-      const re = r.approximation.re.toDecimal(40);
-      const im = r.approximation.im.toDecimal(40);
-      const where = `${label(spec)} at ${formatDouble(x)} + ${formatDouble(y)}i`;
-      if (!agrees(re, mp.re) || !agrees(im, mp.im)) failures.push(`${where}: ours ${re} + ${im}i, mpmath ${mp.re} + ${mp.im}i`);
-      if (!sameDouble(r.double[0], unhex(mp.re_double)) || !sameDouble(r.double[1], unhex(mp.im_double))) {
-        failures.push(`${where}: double ${r.double.map(formatDouble).join(' + ')}i, mpmath rounds to ${mp.re_double} + ${mp.im_double}i`);
-      }
-      if (spec.w === undefined && spec.n === undefined) {
-        const fast = principalDouble(spec.fn, x, y, 'signed-zero');
-        if (!sameDouble(fast[0], unhex(mp.re_double)) || !sameDouble(fast[1], unhex(mp.im_double))) {
-          failures.push(`${where}: principalDouble ${fast.map(formatDouble).join(' + ')}i, mpmath rounds to ${mp.re_double} + ${mp.im_double}i`);
+  it.each(SPECS.map((spec) => [label(spec), spec]))(
+    'agrees with mpmath to 38 digits and sign-exact doubles for %s',
+    (_, spec) => {
+      const failures: string[] = [];
+      let checked = 0;
+      cases.forEach(({ spec: s, x, y }, i) => {
+        if (s !== spec) return;
+        checked++;
+        const mp = answers[i] as MpAnswer;
+        const r = principalValue(request(spec, x, y), { double: true, digits: 40 });
+        const re = r.approximation.re.toDecimal(40);
+        const im = r.approximation.im.toDecimal(40);
+        const where = `${label(spec)} at ${formatDouble(x)} + ${formatDouble(y)}i`;
+        if (!agrees(re, mp.re) || !agrees(im, mp.im))
+          failures.push(`${where}: ours ${re} + ${im}i, mpmath ${mp.re} + ${mp.im}i`);
+        if (!sameDouble(r.double[0], unhex(mp.re_double)) || !sameDouble(r.double[1], unhex(mp.im_double))) {
+          failures.push(
+            `${where}: double ${r.double.map(formatDouble).join(' + ')}i, mpmath rounds to ${mp.re_double} + ${mp.im_double}i`,
+          );
         }
-      }
-    });
-    expect(checked).toBeGreaterThanOrEqual(20);
-    expect(failures).toEqual([]);
-  });
+        if (spec.w === undefined && spec.n === undefined) {
+          const fast = principalDouble(spec.fn, x, y, 'signed-zero');
+          if (!sameDouble(fast[0], unhex(mp.re_double)) || !sameDouble(fast[1], unhex(mp.im_double))) {
+            failures.push(
+              `${where}: principalDouble ${fast.map(formatDouble).join(' + ')}i, mpmath rounds to ${mp.re_double} + ${mp.im_double}i`,
+            );
+          }
+        }
+      });
+      expect(checked).toBeGreaterThanOrEqual(20);
+      expect(failures).toEqual([]);
+    },
+  );
 });

@@ -46,31 +46,57 @@ describe('mutation check of the outside-source comparisons', () => {
   const mp = askPython<{ re_double: string; im_double: string }>('mpmath', offCut, 60);
 
   it('passes the reference itself, so the mutants below fail for their mutation alone', () => {
-    const failures = points.map((p, i) => compareWithCmath(p.fn, parseDouble(p.z[0]), parseDouble(p.z[1]), cmath[i] as CmathAnswer, CMATH_CASES.ulps)).filter(Boolean);
+    const failures = points
+      .map((p, i) =>
+        compareWithCmath(p.fn, parseDouble(p.z[0]), parseDouble(p.z[1]), cmath[i] as CmathAnswer, CMATH_CASES.ulps),
+      )
+      .filter(Boolean);
     expect(failures).toEqual([]);
   });
 
-  it.each(Object.entries(MUTANTS).map(([name, f]) => [name, f]))('catches a variant with a %s on the cuts of every function', (_, mutant) => {
-    for (const fn of Object.keys(CMATH_CASES.cuts)) {
-      const caught = points.some(
-        (p, i) => p.fn === fn && compareWithCmath(fn, parseDouble(p.z[0]), parseDouble(p.z[1]), cmath[i] as CmathAnswer, CMATH_CASES.ulps, mutant) !== null,
-      );
-      expect({ fn, caught }).toEqual({ fn, caught: true });
-    }
-  });
+  it.each(Object.entries(MUTANTS).map(([name, f]) => [name, f]))(
+    'catches a variant with a %s on the cuts of every function',
+    (_, mutant) => {
+      for (const fn of Object.keys(CMATH_CASES.cuts)) {
+        const caught = points.some(
+          (p, i) =>
+            p.fn === fn &&
+            compareWithCmath(
+              fn,
+              parseDouble(p.z[0]),
+              parseDouble(p.z[1]),
+              cmath[i] as CmathAnswer,
+              CMATH_CASES.ulps,
+              mutant,
+            ) !== null,
+        );
+        expect({ fn, caught }).toEqual({ fn, caught: true });
+      }
+    },
+  );
 
-  it.each(Object.keys(OTHER_SHEET).map((fn) => [fn]))('catches %s returning a value on another sheet, against mpmath', (fn) => {
-    offCut.forEach((p, i) => {
-      if (p.fn !== fn) return;
-      const answer = mp[i] as { re_double: string; im_double: string };
-      const wrong = (OTHER_SHEET[fn] as (v: [number, number]) => [number, number])(referenceDouble(fn, parseDouble(p.z[0]), parseDouble(p.z[1])));
-      const right = referenceDouble(fn, parseDouble(p.z[0]), parseDouble(p.z[1]));
-      const matches = (v: [number, number]) => sameDouble(v[0], unhex(answer.re_double)) && sameDouble(v[1], unhex(answer.im_double));
-      expect({ at: p.z.map((s) => formatDouble(parseDouble(s))), right: matches(right), wrong: matches(wrong) }).toEqual({
-        at: p.z.map((s) => formatDouble(parseDouble(s))),
-        right: true,
-        wrong: false,
+  it.each(Object.keys(OTHER_SHEET).map((fn) => [fn]))(
+    'catches %s returning a value on another sheet, against mpmath',
+    (fn) => {
+      offCut.forEach((p, i) => {
+        if (p.fn !== fn) return;
+        const answer = mp[i] as { re_double: string; im_double: string };
+        const wrong = (OTHER_SHEET[fn] as (v: [number, number]) => [number, number])(
+          referenceDouble(fn, parseDouble(p.z[0]), parseDouble(p.z[1])),
+        );
+        const right = referenceDouble(fn, parseDouble(p.z[0]), parseDouble(p.z[1]));
+        const matches = (v: [number, number]) =>
+          sameDouble(v[0], unhex(answer.re_double)) && sameDouble(v[1], unhex(answer.im_double));
+        expect({
+          at: p.z.map((s) => formatDouble(parseDouble(s))),
+          right: matches(right),
+          wrong: matches(wrong),
+        }).toEqual({
+          at: p.z.map((s) => formatDouble(parseDouble(s))),
+          right: true,
+          wrong: false,
+        });
       });
-    });
-  });
+    },
+  );
 });

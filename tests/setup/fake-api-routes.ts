@@ -17,8 +17,15 @@ export function fakeApiRoutes(routes: Record<string, FakeAnswer | ((body: unknow
     const body = typeof init?.body === 'string' ? JSON.parse(init.body) : undefined;
     calls.push({ method, path, body });
     const route = routes[`${method} ${path}`];
-    const answer = typeof route === 'function' ? route(body) : (route ?? { status: 404, body: { kind: 'not-found', message: `No fake for ${method} ${path}` } });
-    return { ok: answer.status >= 200 && answer.status < 300, status: answer.status, text: async () => (answer.status === 204 ? '' : JSON.stringify(answer.body)) } as Response;
+    const answer =
+      typeof route === 'function'
+        ? route(body)
+        : (route ?? { status: 404, body: { kind: 'not-found', message: `No fake for ${method} ${path}` } });
+    return {
+      ok: answer.status >= 200 && answer.status < 300,
+      status: answer.status,
+      text: async () => (answer.status === 204 ? '' : JSON.stringify(answer.body)),
+    } as Response;
   }) as typeof fetch;
   return calls;
 }

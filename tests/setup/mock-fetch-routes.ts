@@ -7,7 +7,11 @@ export function mockFetchRoutes(answer: (url: string, method: string) => { statu
   global.fetch = jest.fn(async (url: string | URL | Request, init?: RequestInit) => {
     calls.push({ url: String(url), init: init ?? {} });
     const { status = 200, body } = answer(String(url), init?.method ?? 'GET');
-    return { ok: status >= 200 && status < 300, status, text: async () => (status === 204 ? '' : JSON.stringify(body)) } as Response;
+    return {
+      ok: status >= 200 && status < 300,
+      status,
+      text: async () => (status === 204 ? '' : JSON.stringify(body)),
+    } as Response;
   }) as typeof fetch;
   return calls;
 }

@@ -6,7 +6,11 @@ export function mockFetch(status: number, body: unknown) {
   const calls: { url: string; init: RequestInit }[] = [];
   global.fetch = jest.fn(async (url: string | URL | Request, init?: RequestInit) => {
     calls.push({ url: String(url), init: init ?? {} });
-    return { ok: status >= 200 && status < 300, status, text: async () => (status === 204 ? '' : JSON.stringify(body)) } as Response;
+    return {
+      ok: status >= 200 && status < 300,
+      status,
+      text: async () => (status === 204 ? '' : JSON.stringify(body)),
+    } as Response;
   }) as typeof fetch;
   return calls;
 }

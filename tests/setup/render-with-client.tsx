@@ -4,6 +4,8 @@ import type { ReactElement } from 'react';
 
 /** Renders inside a fresh QueryClient that neither retries nor keeps Jest alive (STACK.md). */
 export function renderWithClient(ui: ReactElement) {
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false, gcTime: Infinity }, mutations: { retry: false } } });
+  const client = new QueryClient({
+    defaultOptions: { queries: { retry: false, gcTime: Infinity }, mutations: { retry: false } },
+  });
   return { client, ...render(<QueryClientProvider client={client}>{ui}</QueryClientProvider>) };
 }

@@ -5,6 +5,9 @@
  */
 export function templateDatabase(): string {
   const name = process.env.SHEETKEEPER_TEST_TEMPLATE;
-  if (!name) throw new Error('SHEETKEEPER_TEST_TEMPLATE is unset: run the node tests through jest (tests/setup/global-setup.ts)');
+  if (!name)
+    throw new Error(
+      'SHEETKEEPER_TEST_TEMPLATE is unset: run the node tests through jest (tests/setup/global-setup.ts)',
+    );
   return name;
 }

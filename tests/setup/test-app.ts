@@ -10,7 +10,13 @@ export interface TestApp extends SheetkeeperApp {
 /** The real app over a private test database; call `stop()` in afterAll. */
 export async function startTestApp(overrides: Partial<AppOptions> = {}): Promise<TestApp> {
   const db = await createTestDatabase();
-  const built = createApp({ dataSource: db.dataSource, databaseUrl: db.url, sessionSecret: 'test-secret', shardQueue: idleShardQueue(), ...overrides });
+  const built = createApp({
+    dataSource: db.dataSource,
+    databaseUrl: db.url,
+    sessionSecret: 'test-secret',
+    shardQueue: idleShardQueue(),
+    ...overrides,
+  });
   return {
     ...built,
     db,

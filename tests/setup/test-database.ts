@@ -28,7 +28,9 @@ async function withAdmin<T>(work: (client: Client) => Promise<T>): Promise<T> {
  */
 export async function createTestDatabase(options: { empty?: boolean } = {}): Promise<TestDatabase> {
   const name = `sheetkeeper_t_${randomBytes(5).toString('hex')}`;
-  await withAdmin((c) => c.query(options.empty ? `CREATE DATABASE ${name}` : `CREATE DATABASE ${name} TEMPLATE ${templateDatabase()}`));
+  await withAdmin((c) =>
+    c.query(options.empty ? `CREATE DATABASE ${name}` : `CREATE DATABASE ${name} TEMPLATE ${templateDatabase()}`),
+  );
   const url = `${pgBaseUrl()}/${name}`;
   const dataSource = createDataSource(url);
   await dataSource.initialize();

@@ -13,7 +13,10 @@ describe('validateSuite', () => {
     const suite = base();
     suite.paths[1].radius = 2;
     const checked = validateSuite(suite, 'x.json');
-    expect(checked).toEqual({ ok: false, issues: [{ suite: suite.id, field: 'paths.1.radius', rule: 'must be a number written as a string' }] });
+    expect(checked).toEqual({
+      ok: false,
+      issues: [{ suite: suite.id, field: 'paths.1.radius', rule: 'must be a number written as a string' }],
+    });
   });
 
   it('names the file when the id itself is unusable', () => {
@@ -21,7 +24,12 @@ describe('validateSuite', () => {
     suite.id = 'Not An Id';
     const checked = validateSuite(suite, 'upload.json');
     expect(checked.ok).toBe(false);
-    if (!checked.ok) expect(checked.issues[0]).toEqual({ suite: 'upload.json', field: 'id', rule: 'must be lower-case words joined by hyphens' });
+    if (!checked.ok)
+      expect(checked.issues[0]).toEqual({
+        suite: 'upload.json',
+        field: 'id',
+        rule: 'must be lower-case words joined by hyphens',
+      });
   });
 
   it('refuses a regular branch with both f0 and k', () => {
@@ -30,7 +38,12 @@ describe('validateSuite', () => {
     broken.branch.f0 = { re: '1', im: '0' };
     const checked = validateSuite(broken, 'x.json');
     expect(checked.ok).toBe(false);
-    if (!checked.ok) expect(checked.issues).toContainEqual({ suite: suite.id, field: 'branch.f0', rule: 'give exactly one of f0 and k' });
+    if (!checked.ok)
+      expect(checked.issues).toContainEqual({
+        suite: suite.id,
+        field: 'branch.f0',
+        rule: 'give exactly one of f0 and k',
+      });
   });
 
   it('refuses two paths with the same name', () => {
@@ -46,6 +59,7 @@ describe('validateSuite', () => {
     delete suite.paths[1].samples;
     const checked = validateSuite(suite, 'x.json');
     expect(checked.ok).toBe(false);
-    if (!checked.ok) expect(checked.issues[0]).toMatchObject({ field: 'paths.1.samples', rule: 'give exactly one of samples and at' });
+    if (!checked.ok)
+      expect(checked.issues[0]).toMatchObject({ field: 'paths.1.samples', rule: 'give exactly one of samples and at' });
   });
 });

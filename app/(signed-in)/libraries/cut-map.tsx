@@ -8,8 +8,17 @@ import { ScreenBody } from '../../../components/screen-body';
 export default function CutMapScreen() {
   const { name, fn } = useLocalSearchParams<{ name?: string; fn?: string }>();
   return (
-    <ScreenBody title={name && fn ? `Cut map of ${fn}` : 'Cut map'} lead={name ? `${name}, sampled on a grid: every jump between neighbouring grid points is narrowed down, then compared with where the reference puts the cuts.` : undefined}>
-      {name ? <CrumbLink label={name} onPress={() => router.navigate({ pathname: '/libraries/target', params: { name } })} /> : null}
+    <ScreenBody
+      title={name && fn ? `Cut map of ${fn}` : 'Cut map'}
+      lead={
+        name
+          ? `${name}, sampled on a grid: every jump between neighbouring grid points is narrowed down, then compared with where the reference puts the cuts.`
+          : undefined
+      }
+    >
+      {name ? (
+        <CrumbLink label={name} onPress={() => router.navigate({ pathname: '/libraries/target', params: { name } })} />
+      ) : null}
       {name && fn ? (
         <CutMapView name={name} fn={fn} onChooseFn={(next) => router.setParams({ fn: next })} />
       ) : (

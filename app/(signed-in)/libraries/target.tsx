@@ -8,10 +8,16 @@ import { TargetFingerprint } from '../../../components/target-fingerprint';
 export default function TargetScreen() {
   const { name } = useLocalSearchParams<{ name?: string }>();
   return (
-    <ScreenBody title={name ? `${name}` : 'Library'} lead="Convention fingerprint: on each cut of each function, what this version returns exactly on the cut with +0 and with −0.">
+    <ScreenBody
+      title={name ? `${name}` : 'Library'}
+      lead="Convention fingerprint: on each cut of each function, what this version returns exactly on the cut with +0 and with −0."
+    >
       <CrumbLink label="Libraries" onPress={() => router.navigate('/libraries')} />
       {name ? (
-        <TargetFingerprint name={name} onOpenCutMap={(fn) => router.push({ pathname: '/libraries/cut-map', params: { name, fn } })} />
+        <TargetFingerprint
+          name={name}
+          onOpenCutMap={(fn) => router.push({ pathname: '/libraries/cut-map', params: { name, fn } })}
+        />
       ) : (
         <QueryState state="error" message="No target named in the address." />
       )}

@@ -8,9 +8,16 @@ import { ScreenBody } from '../../../components/screen-body';
 export default function VersionsScreen() {
   const { library } = useLocalSearchParams<{ library?: string }>();
   return (
-    <ScreenBody title={library ? `${library}: version matrix` : 'Version matrix'} lead="Every approved suite run on every installed version of this library, oldest first, and each point whose value changed from one version to the next.">
+    <ScreenBody
+      title={library ? `${library}: version matrix` : 'Version matrix'}
+      lead="Every approved suite run on every installed version of this library, oldest first, and each point whose value changed from one version to the next."
+    >
       <CrumbLink label="Libraries" onPress={() => router.navigate('/libraries')} />
-      {library ? <LibraryVersionMatrix library={library} /> : <QueryState state="error" message="No library named in the address." />}
+      {library ? (
+        <LibraryVersionMatrix library={library} />
+      ) : (
+        <QueryState state="error" message="No library named in the address." />
+      )}
     </ScreenBody>
   );
 }

@@ -21,7 +21,9 @@ export default function OutboxMessageScreen() {
       </Link>
       {me.role !== 'admin' ? <QueryState state="error" message="Only admins can see the outbox." /> : null}
       {me.role === 'admin' && message.isPending ? <QueryState state="loading" /> : null}
-      {me.role === 'admin' && message.isError ? <QueryState state="error" message={message.error.message} onRetry={() => void message.refetch()} /> : null}
+      {me.role === 'admin' && message.isError ? (
+        <QueryState state="error" message={message.error.message} onRetry={() => void message.refetch()} />
+      ) : null}
       {message.data ? <MailView message={message.data} /> : null}
     </ScreenBody>
   );

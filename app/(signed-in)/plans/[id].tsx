@@ -21,7 +21,9 @@ export default function PlanScreen() {
         </Pressable>
       </Link>
       {plan.isPending ? <QueryState state="loading" /> : null}
-      {plan.isError ? <QueryState state="error" message={plan.error.message} onRetry={() => void plan.refetch()} /> : null}
+      {plan.isError ? (
+        <QueryState state="error" message={plan.error.message} onRetry={() => void plan.refetch()} />
+      ) : null}
       {plan.data ? <PlanDetail plan={plan.data} canEdit={canEditPlans(me.role)} /> : null}
     </ScreenBody>
   );

@@ -10,7 +10,10 @@ export default function PlansScreen() {
   const { data: me } = useMe();
   if (!me) return null;
   return (
-    <ScreenBody title="Plans" lead="Which suites run against which library versions, when, and who hears about regressions.">
+    <ScreenBody
+      title="Plans"
+      lead="Which suites run against which library versions, when, and who hears about regressions."
+    >
       {canEditPlans(me.role) ? (
         <Link href={'/plans/new' as never} asChild>
           <Pressable accessibilityRole="link" accessibilityLabel="New plan" style={StyleSheet.flatten(styles.newPlan)}>
@@ -24,6 +27,13 @@ export default function PlansScreen() {
 }
 
 const styles = StyleSheet.create({
-  newPlan: { alignSelf: 'flex-start', minHeight: theme.touch, justifyContent: 'center', paddingHorizontal: theme.space(5), borderRadius: theme.radius, backgroundColor: theme.color.accent },
+  newPlan: {
+    alignSelf: 'flex-start',
+    minHeight: theme.touch,
+    justifyContent: 'center',
+    paddingHorizontal: theme.space(5),
+    borderRadius: theme.radius,
+    backgroundColor: theme.color.accent,
+  },
   newPlanText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accentInk },
 });

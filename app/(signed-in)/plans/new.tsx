@@ -12,7 +12,10 @@ export default function NewPlanScreen() {
   return (
     <ScreenBody title="New plan" lead="Choose approved suites and installed targets; every suite runs on every target.">
       {canEditPlans(me.role) ? (
-        <PlanForm onSaved={(plan) => router.replace(`/plans/${plan.id}` as never)} onCancel={() => router.replace('/plans' as never)} />
+        <PlanForm
+          onSaved={(plan) => router.replace(`/plans/${plan.id}` as never)}
+          onCancel={() => router.replace('/plans' as never)}
+        />
       ) : (
         <QueryState state="error" message="Only maintainers and admins can make plans." />
       )}

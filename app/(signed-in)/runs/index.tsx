@@ -9,8 +9,14 @@ export default function RunsScreen() {
   const router = useRouter();
   const filters = runFiltersFromParams(params);
   return (
-    <ScreenBody title="Runs" lead="Each run executes a plan: every approved suite against every installed target of the plan, one shard per pair.">
-      <RunsList filters={filters} onFiltersChange={(next) => router.setParams({ plan: next.plan, status: next.status, trigger: next.trigger })} />
+    <ScreenBody
+      title="Runs"
+      lead="Each run executes a plan: every approved suite against every installed target of the plan, one shard per pair."
+    >
+      <RunsList
+        filters={filters}
+        onFiltersChange={(next) => router.setParams({ plan: next.plan, status: next.status, trigger: next.trigger })}
+      />
     </ScreenBody>
   );
 }

@@ -3,7 +3,10 @@ import { SuiteFormScreen } from '../../../components/suite-form-screen';
 
 export default function NewSuiteScreen() {
   return (
-    <ScreenBody title="New suite" lead="Every rule shows beside its field as you type; the picture shows what the runner will sample. Saving keeps a draft until you submit it for review.">
+    <ScreenBody
+      title="New suite"
+      lead="Every rule shows beside its field as you type; the picture shows what the runner will sample. Saving keeps a draft until you submit it for review."
+    >
       <SuiteFormScreen slug={null} />
     </ScreenBody>
   );

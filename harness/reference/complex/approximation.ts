@@ -30,7 +30,12 @@ export class Approximation {
    * the input of a formula is itself rounded.
    */
   static agreement(coarse: Approximation, fine: Approximation): Approximation {
-    return new Approximation(fine.re, fine.im, agree(coarse.re, fine.re, fine.reErr), agree(coarse.im, fine.im, fine.imErr));
+    return new Approximation(
+      fine.re,
+      fine.im,
+      agree(coarse.re, fine.re, fine.reErr),
+      agree(coarse.im, fine.im, fine.imErr),
+    );
   }
 
   /**

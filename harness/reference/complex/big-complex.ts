@@ -16,7 +16,6 @@ export class BigComplex {
     return new BigComplex(BigFloat.fromDouble(re), BigFloat.fromDouble(im));
   }
 
-
   isFinite(): boolean {
     return this.re.isFinite() && this.im.isFinite();
   }

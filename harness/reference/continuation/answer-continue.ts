@@ -26,8 +26,14 @@ export function answerContinue(input: unknown): Record<string, unknown> {
   const req = parsed.data;
   try {
     const g = FactoredFunction.fromSubject(parseSubject(req.g));
-    const nu = typeof req.nu === 'string' ? { re: exact(req.nu, 'nu'), im: exact('0', 'nu') } : { re: exact(req.nu.re, 'nu.re'), im: exact(req.nu.im, 'nu.im') };
-    const point = (c: { re: string; im: string }, name: string): ExactPoint => [exact(c.re, `${name}.re`), exact(c.im, `${name}.im`)];
+    const nu =
+      typeof req.nu === 'string'
+        ? { re: exact(req.nu, 'nu'), im: exact('0', 'nu') }
+        : { re: exact(req.nu.re, 'nu.re'), im: exact(req.nu.im, 'nu.im') };
+    const point = (c: { re: string; im: string }, name: string): ExactPoint => [
+      exact(c.re, `${name}.re`),
+      exact(c.im, `${name}.im`),
+    ];
     const path =
       req.path.kind === 'circle'
         ? new ContinuationPath({
@@ -38,15 +44,22 @@ export function answerContinue(input: unknown): Record<string, unknown> {
             turns: req.path.turns,
             ccw: req.path.direction === 'ccw',
           })
-        : new ContinuationPath({ kind: 'polyline', points: req.path.points.map((p, i) => point(p, `path.points.${i}`)) });
+        : new ContinuationPath({
+            kind: 'polyline',
+            points: req.path.points.map((p, i) => point(p, `path.points.${i}`)),
+          });
     const at = req.at.map((t, i) => {
       const r = exact(t, `at.${i}`);
-      if (r.compare(exact('0', 't')) < 0 || r.compare(exact('1', 't')) > 0) throw new RangeError(`at.${i} must lie in [0, 1]`);
+      if (r.compare(exact('0', 't')) < 0 || r.compare(exact('1', 't')) > 0)
+        throw new RangeError(`at.${i} must lie in [0, 1]`);
       return r;
     });
     const layout = req.cuts
       ? CutLayout.build(
-          req.cuts.map((c) => ({ points: c.points.map((p, i) => toPoint(point(p, `cuts.points.${i}`))), toInfinity: c.to_infinity })),
+          req.cuts.map((c) => ({
+            points: c.points.map((p, i) => toPoint(point(p, `cuts.points.${i}`))),
+            toInfinity: c.to_infinity,
+          })),
           g.singularities(),
           nu,
         )

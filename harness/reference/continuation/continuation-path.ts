@@ -45,7 +45,10 @@ export class ContinuationPath {
       const theta = s.startAngle.toBigFloat(bits).add(piTimes(q, bits));
       const [sin, cos] = realSinCos(theta.truncate(bits + 16), bits);
       const r = s.radius.toBigFloat(bits);
-      return new BigComplex(s.center[0].toBigFloat(bits).add(r.mul(cos)), s.center[1].toBigFloat(bits).add(r.mul(sin))).truncate(bits);
+      return new BigComplex(
+        s.center[0].toBigFloat(bits).add(r.mul(cos)),
+        s.center[1].toBigFloat(bits).add(r.mul(sin)),
+      ).truncate(bits);
     }
     const pts = s.points.map(([x, y]) => new BigComplex(x.toBigFloat(bits), y.toBigFloat(bits)));
     if (t.isZero()) return pts[0] as BigComplex;
@@ -87,7 +90,13 @@ export class ContinuationPath {
     const total = lens.reduce((a, b) => a + b, 0) || 1;
     let acc = 0;
     return lens.map((len, i) => {
-      const piece: PathPiece = { kind: 'segment', a: pts[i] as Point, b: pts[i + 1] as Point, t0: acc / total, t1: (acc + len) / total };
+      const piece: PathPiece = {
+        kind: 'segment',
+        a: pts[i] as Point,
+        b: pts[i + 1] as Point,
+        t0: acc / total,
+        t1: (acc + len) / total,
+      };
       acc += len;
       return piece;
     });
@@ -103,12 +112,19 @@ export class ContinuationPath {
 
   /** Number of pieces to start the step grid with, by geometry: 64 per turn, 16 per segment. */
   initialSteps(): number {
-    return this.spec.kind === 'circle' ? 64 * Math.max(1, Math.ceil(Math.abs(this.spec.turns))) : 16 * (this.spec.points.length - 1);
+    return this.spec.kind === 'circle'
+      ? 64 * Math.max(1, Math.ceil(Math.abs(this.spec.turns)))
+      : 16 * (this.spec.points.length - 1);
   }
 
   private segmentLengths(pts: BigComplex[], bits: number): BigFloat[] {
     if (!this.lengths || this.lengthBits < bits) {
-      this.lengths = pts.slice(1).map((p, i) => p.sub(pts[i] as BigComplex).norm().sqrt(bits + 8));
+      this.lengths = pts.slice(1).map((p, i) =>
+        p
+          .sub(pts[i] as BigComplex)
+          .norm()
+          .sqrt(bits + 8),
+      );
       this.lengthBits = bits;
     }
     return this.lengths;

@@ -79,12 +79,14 @@ export function continueBranch(input: ContinueInput): ContinueResult {
     for (const piece of [...leadIn, ...pieces]) {
       const hit = closestApproach(piece, s.at);
       if (hit.distance <= 1e-12 * Math.max(1, Math.hypot(s.at[0], s.at[1]))) {
-        const where = piece.t0 < 0 ? 'the segment from z0 to the path start' : `the path near t = ${+hit.t.toPrecision(6)}`;
+        const where =
+          piece.t0 < 0 ? 'the segment from z0 to the path start' : `the path near t = ${+hit.t.toPrecision(6)}`;
         throw new LayoutError(`${where} passes through ${s.what} at (${s.at[0]}, ${s.at[1]})`);
       }
     }
   }
-  if (layout?.onCut(z0)) throw new LayoutError(`z0 = (${z0[0]}, ${z0[1]}) lies on a cut, where the branch is not fixed`);
+  if (layout?.onCut(z0))
+    throw new LayoutError(`z0 = (${z0[0]}, ${z0[1]}) lies on a cut, where the branch is not fixed`);
 
   const z0c = new BigComplex(input.z0[0].toBigFloat(BITS), input.z0[1].toBigFloat(BITS));
   const nodeAt = (t: Rational | null, u: Rational): Node => {
@@ -98,11 +100,17 @@ export function continueBranch(input: ContinueInput): ContinueResult {
   if (leadIn.length) for (let i = 1; i < 16; i++) grid.push(nodeAt(null, new Rational(BigInt(i), 16n)));
   const n0 = path.initialSteps();
   const ts = new Map<string, Rational>();
-  for (let i = 0; i <= n0; i++) ts.set(new Rational(BigInt(i), BigInt(n0)).toString(), new Rational(BigInt(i), BigInt(n0)));
+  for (let i = 0; i <= n0; i++)
+    ts.set(new Rational(BigInt(i), BigInt(n0)).toString(), new Rational(BigInt(i), BigInt(n0)));
   for (const t of ats) ts.set(t.toString(), t);
-  for (const t of [...ts.values()].sort((a, b) => a.compare(b))) if (leadIn.length || !t.isZero()) grid.push(nodeAt(t, t));
+  for (const t of [...ts.values()].sort((a, b) => a.compare(b)))
+    if (leadIn.length || !t.isZero()) grid.push(nodeAt(t, t));
 
-  grid = refine(grid, singular.map((s) => s.at), nodeAt);
+  grid = refine(
+    grid,
+    singular.map((s) => s.at),
+    nodeAt,
+  );
   let deltas = accumulate(grid);
   for (let round = 0; ; round++) {
     const finer = halve(grid, nodeAt);
@@ -112,7 +120,8 @@ export function continueBranch(input: ContinueInput): ContinueResult {
       deltas = finerDeltas;
       break;
     }
-    if (round >= MAX_REFINEMENTS || finer.length > MAX_NODES) throw new LayoutError('the argument of g could not be followed along the path (steps kept disagreeing)');
+    if (round >= MAX_REFINEMENTS || finer.length > MAX_NODES)
+      throw new LayoutError('the argument of g could not be followed along the path (steps kept disagreeing)');
     grid = finer;
     deltas = finerDeltas;
   }
@@ -163,8 +172,16 @@ function closestApproach(piece: PathPiece, p: Point): { distance: number; t: num
   const phi = Math.atan2(p[1] - piece.center[1], p[0] - piece.center[0]);
   const s = Math.sign(piece.sweep);
   const angle = (((s * (phi - piece.theta0)) % (2 * Math.PI)) + 2 * Math.PI) % (2 * Math.PI);
-  if (angle <= Math.abs(piece.sweep)) return { distance: Math.abs(r - piece.radius), t: piece.t0 + (angle / Math.abs(piece.sweep)) * (piece.t1 - piece.t0) };
-  const end = (theta: number) => Math.hypot(p[0] - piece.center[0] - piece.radius * Math.cos(theta), p[1] - piece.center[1] - piece.radius * Math.sin(theta));
+  if (angle <= Math.abs(piece.sweep))
+    return {
+      distance: Math.abs(r - piece.radius),
+      t: piece.t0 + (angle / Math.abs(piece.sweep)) * (piece.t1 - piece.t0),
+    };
+  const end = (theta: number) =>
+    Math.hypot(
+      p[0] - piece.center[0] - piece.radius * Math.cos(theta),
+      p[1] - piece.center[1] - piece.radius * Math.sin(theta),
+    );
   const a = end(piece.theta0);
   const b = end(piece.theta0 + piece.sweep);
   return a <= b ? { distance: a, t: piece.t0 } : { distance: b, t: piece.t1 };
@@ -182,7 +199,9 @@ function stepOk(a: Node, b: Node, singular: Point[]): boolean {
   const pa: Point = [a.z.re.toDouble(), a.z.im.toDouble()];
   const pb: Point = [b.z.re.toDouble(), b.z.im.toDouble()];
   const h = Math.hypot(pa[0] - pb[0], pa[1] - pb[1]);
-  return singular.every((s) => h <= 0.5 * Math.min(Math.hypot(s[0] - pa[0], s[1] - pa[1]), Math.hypot(s[0] - pb[0], s[1] - pb[1])));
+  return singular.every(
+    (s) => h <= 0.5 * Math.min(Math.hypot(s[0] - pa[0], s[1] - pa[1]), Math.hypot(s[0] - pb[0], s[1] - pb[1])),
+  );
 }
 
 function midpoint(a: Node, b: Node, nodeAt: (t: Rational | null, u: Rational) => Node): Node {
@@ -209,7 +228,8 @@ function refine(grid: Node[], singular: Point[], nodeAt: (t: Rational | null, u:
 
 function halve(grid: Node[], nodeAt: (t: Rational | null, u: Rational) => Node): Node[] {
   const out: Node[] = [grid[0] as Node];
-  for (let i = 1; i < grid.length; i++) out.push(midpoint(grid[i - 1] as Node, grid[i] as Node, nodeAt), grid[i] as Node);
+  for (let i = 1; i < grid.length; i++)
+    out.push(midpoint(grid[i - 1] as Node, grid[i] as Node, nodeAt), grid[i] as Node);
   return out;
 }
 
@@ -220,7 +240,11 @@ function accumulate(grid: Node[]): BigFloat[] {
   for (let i = 1; i < grid.length; i++) {
     const a = grid[i - 1] as Node;
     const b = grid[i] as Node;
-    sum = sum.add(argChange(a.P, b.P)).sub(argChange(a.Q, b.Q)).add(b.E.im.sub(a.E.im)).truncate(BITS + 16);
+    sum = sum
+      .add(argChange(a.P, b.P))
+      .sub(argChange(a.Q, b.Q))
+      .add(b.E.im.sub(a.E.im))
+      .truncate(BITS + 16);
     out.push(sum);
   }
   return out;
@@ -240,7 +264,10 @@ function agree(coarse: Node[], cd: BigFloat[], fine: Node[], fd: BigFloat[]): bo
 /** ln|g(z)/g(z0)| = ½ ln(|P|²/|P0|²) − ½ ln(|Q|²/|Q0|²) + Re(E − E0). */
 function logModulusRatio(node: Node, first: Node): BigFloat {
   const half = (x: BigComplex, y: BigComplex) => realLog(x.norm().div(y.norm(), BITS + 8), BITS).scale(-1);
-  return half(node.P, first.P).sub(half(node.Q, first.Q)).add(node.E.re.sub(first.E.re)).truncate(BITS + 8);
+  return half(node.P, first.P)
+    .sub(half(node.Q, first.Q))
+    .add(node.E.re.sub(first.E.re))
+    .truncate(BITS + 8);
 }
 
 /** ν·(L + iΔ) for ν = νr + iνi: (νr L − νi Δ) + i(νr Δ + νi L). */
@@ -255,7 +282,12 @@ function jump(sigma: 1 | -1, flow: ExactNu): BigComplex {
   const twoPi = BigFloat.fromBigInt(FixedTables.pi(BITS + 8), 1 - (BITS + 8));
   const s = BigFloat.fromBigInt(BigInt(-sigma));
   const angle = twoPi.mul(s);
-  return exp.evaluate(new BigComplex(angle.mul(flow.im.toBigFloat(BITS + 8)).negate(), angle.mul(flow.re.toBigFloat(BITS + 8))), BITS).toComplex();
+  return exp
+    .evaluate(
+      new BigComplex(angle.mul(flow.im.toBigFloat(BITS + 8)).negate(), angle.mul(flow.re.toBigFloat(BITS + 8))),
+      BITS,
+    )
+    .toComplex();
 }
 
 function initialValue(input: ContinueInput, first: Node): BigComplex {

@@ -66,7 +66,8 @@ export class CutLayout {
 
   static build(cuts: CutSpec[], singularities: Singularity[], nu: ExactNu, tolerance = 1e-9): CutLayout {
     const nodes: Point[] = [[Infinity, Infinity]];
-    const near = (p: Point, q: Point) => Math.hypot(p[0] - q[0], p[1] - q[1]) <= tolerance * Math.max(1, Math.hypot(p[0], p[1]));
+    const near = (p: Point, q: Point) =>
+      Math.hypot(p[0] - q[0], p[1] - q[1]) <= tolerance * Math.max(1, Math.hypot(p[0], p[1]));
     const nodeAt = (p: Point) => {
       const i = nodes.findIndex((q, k) => k !== INFINITY_NODE && near(p, q));
       if (i >= 0) return i;
@@ -91,12 +92,25 @@ export class CutLayout {
       for (let i = 1; i < ids.length; i++) {
         const from = vertices[i - 1] as Point;
         const to = vertices[i] as Point;
-        if (ids[i - 1] !== ids[i]) edges.push({ a: ids[i - 1] as number, b: ids[i] as number, from, dir: [to[0] - from[0], to[1] - from[1]], ray: false });
+        if (ids[i - 1] !== ids[i])
+          edges.push({
+            a: ids[i - 1] as number,
+            b: ids[i] as number,
+            from,
+            dir: [to[0] - from[0], to[1] - from[1]],
+            ray: false,
+          });
       }
       if (cut.toInfinity) {
         const last = cut.points[cut.points.length - 1] as Point;
         const prev = cut.points[cut.points.length - 2] as Point;
-        edges.push({ a: ids[ids.length - 1] as number, b: INFINITY_NODE, from: last, dir: [last[0] - prev[0], last[1] - prev[1]], ray: true });
+        edges.push({
+          a: ids[ids.length - 1] as number,
+          b: INFINITY_NODE,
+          from: last,
+          dir: [last[0] - prev[0], last[1] - prev[1]],
+          ray: true,
+        });
       }
     }
     const charge: ExactNu[] = nodes.map(() => ({ re: Rational.ZERO, im: Rational.ZERO }));
@@ -120,7 +134,8 @@ export class CutLayout {
     for (const e of edges) {
       const ra = find(e.a);
       const rb = find(e.b);
-      if (ra === rb) throw new LayoutError(`the cuts close a loop at ${fmt(e.from)}: they would split the plane in two`);
+      if (ra === rb)
+        throw new LayoutError(`the cuts close a loop at ${fmt(e.from)}: they would split the plane in two`);
       parent[ra] = rb;
     }
     const layout = new CutLayout(nodes, edges);
@@ -131,7 +146,9 @@ export class CutLayout {
   /** Whether p lies on a cut (within the tolerance). */
   onCut(p: Point, tolerance = 1e-12): boolean {
     return this.edges.some((e) => {
-      const u = e.ray ? Math.max(0, projectionRay(p, e.from, e.dir)) : Math.min(1, Math.max(0, projection(p, e.from, [e.from[0] + e.dir[0], e.from[1] + e.dir[1]])));
+      const u = e.ray
+        ? Math.max(0, projectionRay(p, e.from, e.dir))
+        : Math.min(1, Math.max(0, projection(p, e.from, [e.from[0] + e.dir[0], e.from[1] + e.dir[1]])));
       const x: Point = [e.from[0] + u * e.dir[0], e.from[1] + u * e.dir[1]];
       return Math.hypot(p[0] - x[0], p[1] - x[1]) <= tolerance * Math.max(1, Math.hypot(p[0], p[1]));
     });

@@ -36,7 +36,12 @@ export class FactoredFunction {
     const Q = r.Q.divmod(g)[0];
     if (P.isZero()) throw new SubjectError('g is identically zero');
     if (Math.max(P.degree(), Q.degree()) > MAX_DEGREE) throw new SubjectError(`g has degree above ${MAX_DEGREE}`);
-    return new FactoredFunction(P, Q, r.A.isZero() ? r.A : r.A.divmod(e)[0], r.A.isZero() ? Polynomial.ONE : r.B.divmod(e)[0]);
+    return new FactoredFunction(
+      P,
+      Q,
+      r.A.isZero() ? r.A : r.A.divmod(e)[0],
+      r.A.isZero() ? Polynomial.ONE : r.B.divmod(e)[0],
+    );
   }
 
   /** Zeros and poles of g with exact orders (square-free parts of P and Q, each root located numerically). */
@@ -83,7 +88,12 @@ function build(e: SubjectExpr): Parts {
     case 'z':
       return { P: Polynomial.Z, Q: Polynomial.ONE, A: ZERO_POLY, B: Polynomial.ONE };
     case 'const':
-      return { P: Polynomial.constant(new GaussianRational(e.re, e.im)), Q: Polynomial.ONE, A: ZERO_POLY, B: Polynomial.ONE };
+      return {
+        P: Polynomial.constant(new GaussianRational(e.re, e.im)),
+        Q: Polynomial.ONE,
+        A: ZERO_POLY,
+        B: Polynomial.ONE,
+      };
     case 'neg': {
       const a = build(e.a);
       return { ...a, P: a.P.scale(GaussianRational.ONE.negate()) };

@@ -71,7 +71,10 @@ export class Polynomial {
       const k = rem.degree() - b.degree();
       const f = rem.lead().div(b.lead());
       q[k] = f;
-      const shifted = new Polynomial([...Array.from({ length: k }, () => GaussianRational.ZERO), ...b.c.map((x) => x.mul(f))]);
+      const shifted = new Polynomial([
+        ...Array.from({ length: k }, () => GaussianRational.ZERO),
+        ...b.c.map((x) => x.mul(f)),
+      ]);
       rem = rem.sub(shifted);
     }
     return [new Polynomial(Array.from({ length: q.length }, (_, i) => q[i] ?? GaussianRational.ZERO)), rem];
@@ -114,7 +117,11 @@ export class Polynomial {
   /** p(z) by Horner's rule, truncating to `bits` after each step. */
   evaluate(z: BigComplex, bits: number): BigComplex {
     let r = new BigComplex(this.lead().re.toBigFloat(bits), this.lead().im.toBigFloat(bits));
-    for (let i = this.c.length - 2; i >= 0; i--) r = r.mul(z).add((this.c[i] as GaussianRational).toBigComplex(bits)).truncate(bits);
+    for (let i = this.c.length - 2; i >= 0; i--)
+      r = r
+        .mul(z)
+        .add((this.c[i] as GaussianRational).toBigComplex(bits))
+        .truncate(bits);
     return r;
   }
 

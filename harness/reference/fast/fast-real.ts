@@ -30,8 +30,13 @@ const PI = toDD(FixedTables.pi(F));
 const HALF_PI: DD = [PI[0] / 2, PI[1] / 2];
 const PIO2_BITS = FixedTables.pi(F + 64) >> 1n;
 const P1 = BigFloat.fromBigInt(PIO2_BITS, -(F + 64)).toDouble();
-const P2 = BigFloat.fromBigInt(PIO2_BITS, -(F + 64)).sub(BigFloat.fromDouble(P1)).toDouble();
-const P3 = BigFloat.fromBigInt(PIO2_BITS, -(F + 64)).sub(BigFloat.fromDouble(P1)).sub(BigFloat.fromDouble(P2)).toDouble();
+const P2 = BigFloat.fromBigInt(PIO2_BITS, -(F + 64))
+  .sub(BigFloat.fromDouble(P1))
+  .toDouble();
+const P3 = BigFloat.fromBigInt(PIO2_BITS, -(F + 64))
+  .sub(BigFloat.fromDouble(P1))
+  .sub(BigFloat.fromDouble(P2))
+  .toDouble();
 const TWO_M30 = 2 ** -30;
 
 /**

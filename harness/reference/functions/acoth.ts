@@ -14,6 +14,9 @@ import type { ReciprocalFunction } from './reciprocal-function';
 export const acoth: ReciprocalFunction = {
   name: 'acoth',
   inner: atanh,
-  cuts: [{ axis: 'real', from: -1, to: 0 }, { axis: 'real', from: 0, to: 1 }],
+  cuts: [
+    { axis: 'real', from: -1, to: 0 },
+    { axis: 'real', from: 0, to: 1 },
+  ],
   derivative: { sign: -1, power: 1 },
 };

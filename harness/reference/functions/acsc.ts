@@ -14,6 +14,9 @@ import type { ReciprocalFunction } from './reciprocal-function';
 export const acsc: ReciprocalFunction = {
   name: 'acsc',
   inner: asin,
-  cuts: [{ axis: 'real', from: -1, to: 0 }, { axis: 'real', from: 0, to: 1 }],
+  cuts: [
+    { axis: 'real', from: -1, to: 0 },
+    { axis: 'real', from: 0, to: 1 },
+  ],
   derivative: { sign: -1, power: 0.5 },
 };

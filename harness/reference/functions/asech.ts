@@ -14,6 +14,9 @@ import type { ReciprocalFunction } from './reciprocal-function';
 export const asech: ReciprocalFunction = {
   name: 'asech',
   inner: acosh,
-  cuts: [{ axis: 'real', from: -Infinity, to: 0 }, { axis: 'real', from: 1, to: Infinity }],
+  cuts: [
+    { axis: 'real', from: -Infinity, to: 0 },
+    { axis: 'real', from: 1, to: Infinity },
+  ],
   derivative: { sign: -1, power: 0.5 },
 };

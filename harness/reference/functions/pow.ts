@@ -41,7 +41,9 @@ export function pow(z: BigComplex, w: PowerExponent, bits: number): Approximatio
   if (z.isZero()) return zeroBase(z, exponent ? exponent.compare(Rational.ZERO) : realSign(wc as BigComplex), bits);
   const approxLog = Math.abs(Math.log(Math.hypot(z.re.toDouble(), z.im.toDouble()) || Number.MIN_VALUE)) + 4;
   const wr = exponent ? exponent : null;
-  const wMag = wr ? Math.abs(Number(wr.num) / Number(wr.den)) || 1 : Math.hypot((wc as BigComplex).re.toDouble(), (wc as BigComplex).im.toDouble());
+  const wMag = wr
+    ? Math.abs(Number(wr.num) / Number(wr.den)) || 1
+    : Math.hypot((wc as BigComplex).re.toDouble(), (wc as BigComplex).im.toDouble());
   const scale = Math.max(0, Math.ceil(Math.log2(wMag * approxLog + 1)));
   const F = bits + 24 + scale;
   const L = log.evaluate(z, F);
@@ -53,8 +55,14 @@ export function pow(z: BigComplex, w: PowerExponent, bits: number): Approximatio
     Pi = r.mul(L.im).truncate(F + 8);
   } else {
     const c = wc as BigComplex;
-    Pr = c.re.mul(L.re).sub(c.im.mul(L.im)).truncate(F + 8);
-    Pi = c.re.mul(L.im).add(c.im.mul(L.re)).truncate(F + 8);
+    Pr = c.re
+      .mul(L.re)
+      .sub(c.im.mul(L.im))
+      .truncate(F + 8);
+    Pi = c.re
+      .mul(L.im)
+      .add(c.im.mul(L.re))
+      .truncate(F + 8);
   }
   const M = realExp(Pr, F);
   const quarterTurns = wr ? axisQuarterTurns(z) : null;
@@ -96,7 +104,7 @@ function axisQuarterTurns(z: BigComplex): number | null {
 function exactAngle(turns: Rational, w: Rational, z: BigComplex, F: number): [BigFloat, BigFloat] {
   if (turns.isZero()) {
     // θ = w · (±0): IEEE gives the zero the product sign of w and Im z.
-    return [BigFloat.zero((w.num < 0n) !== z.im.signbit()), BigFloat.ONE];
+    return [BigFloat.zero(w.num < 0n !== z.im.signbit()), BigFloat.ONE];
   }
   const twice = turns.mul(new Rational(2n));
   if (twice.isInteger()) {

@@ -3,8 +3,7 @@ import { Rational } from './rational';
 
 /** A parsed wire number: special values stay IEEE, everything else is exact. */
 export type ParsedNumber =
-  | { kind: 'special'; value: BigFloat }
-  | { kind: 'exact'; value: Rational; negativeZero: boolean };
+  { kind: 'special'; value: BigFloat } | { kind: 'exact'; value: Rational; negativeZero: boolean };
 
 const DECIMAL = /^([+-]?)(\d+\.?\d*|\.\d+)(?:[eE]([+-]?\d+))?$/;
 const HEX = /^([+-]?)0[xX]([0-9a-fA-F]+\.?[0-9a-fA-F]*|\.[0-9a-fA-F]+)(?:[pP]([+-]?\d+))?$/;

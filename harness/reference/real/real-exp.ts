@@ -22,7 +22,7 @@ export function realExp(x: BigFloat, bits: number): BigFloat {
   const extra = Math.max(0, x.exponent()) + 8;
   const G = F + extra;
   const k = Math.round(approx / Math.LN2);
-  const R = (x.toFixed(G) - BigInt(k) * FixedTables.ln2(G + 48) / (1n << 48n)) >> BigInt(extra);
+  const R = (x.toFixed(G) - (BigInt(k) * FixedTables.ln2(G + 48)) / (1n << 48n)) >> BigInt(extra);
   const j = Math.max(-32, Math.min(32, Math.round(Number(R >> BigInt(F - 20)) / 2 ** 14)));
   const D = R - (BigInt(j) << BigInt(F - 6));
   const n = Math.min(Math.ceil(F / 7) + 2, T.inverseFactorial.length - 1);

@@ -12,7 +12,17 @@ export interface RunArgs {
   progress: boolean;
 }
 
-const VALUE_FLAGS = new Set(['--suite', '--target', '--format', '--out', '--seed', '--workers', '--shard-time-limit', '--cache', '--max-findings']);
+const VALUE_FLAGS = new Set([
+  '--suite',
+  '--target',
+  '--format',
+  '--out',
+  '--seed',
+  '--workers',
+  '--shard-time-limit',
+  '--cache',
+  '--max-findings',
+]);
 
 /**
  * Reads `run --suite FILE|ID --target NAME@VERSION --format table|json|junit --out FILE --seed N`
@@ -20,7 +30,18 @@ const VALUE_FLAGS = new Set(['--suite', '--target', '--format', '--out', '--seed
  * and `--progress`. `--suite` and `--target` may repeat (or take comma-separated lists).
  */
 export function parseRunArgs(argv: string[]): RunArgs | { error: string } {
-  const args: RunArgs = { suites: [], targets: [], format: 'table', out: null, seed: null, workers: 'auto', shardTimeLimitMs: null, cacheDir: undefined, maxFindings: null, progress: false };
+  const args: RunArgs = {
+    suites: [],
+    targets: [],
+    format: 'table',
+    out: null,
+    seed: null,
+    workers: 'auto',
+    shardTimeLimitMs: null,
+    cacheDir: undefined,
+    maxFindings: null,
+    progress: false,
+  };
   for (let i = 0; i < argv.length; i++) {
     const raw = argv[i] as string;
     const eq = raw.indexOf('=');
@@ -32,7 +53,9 @@ export function parseRunArgs(argv: string[]): RunArgs | { error: string } {
     }
     const whole = (what: string, min: number): number | { error: string } => {
       const n = Number(value);
-      return Number.isInteger(n) && n >= min ? n : { error: `${flag} must be a whole number of at least ${min}, got "${value}"` };
+      return Number.isInteger(n) && n >= min
+        ? n
+        : { error: `${flag} must be a whole number of at least ${min}, got "${value}"` };
     };
     switch (flag) {
       case '--suite':
@@ -42,7 +65,8 @@ export function parseRunArgs(argv: string[]): RunArgs | { error: string } {
         args.targets.push(...(value as string).split(',').filter(Boolean));
         break;
       case '--format':
-        if (value !== 'table' && value !== 'json' && value !== 'junit') return { error: `--format must be table, json or junit, got "${value}"` };
+        if (value !== 'table' && value !== 'json' && value !== 'junit')
+          return { error: `--format must be table, json or junit, got "${value}"` };
         args.format = value;
         break;
       case '--out':

@@ -16,7 +16,8 @@ const PROJECT_ROOT = path.resolve(__dirname, '..', '..', '..');
 /** Below this many points, starting worker threads (~1 s each to load tsx and the engine) costs more than it saves. */
 const WORKER_THRESHOLD = 50_000;
 
-const USAGE = 'usage: sheetkeeper run --suite FILE|ID|FOLDER --target NAME@VERSION [--format table|json|junit] [--out FILE] [--seed N] [--workers N|auto] [--shard-time-limit MS] [--cache DIR | --no-cache] [--max-findings N] [--progress]';
+const USAGE =
+  'usage: sheetkeeper run --suite FILE|ID|FOLDER --target NAME@VERSION [--format table|json|junit] [--out FILE] [--seed N] [--workers N|auto] [--shard-time-limit MS] [--cache DIR | --no-cache] [--max-findings N] [--progress]';
 
 /**
  * `sheetkeeper run` (DESIGN.md §5): loads and validates the suites, resolves the targets, runs
@@ -43,7 +44,8 @@ export async function runCommand(argv: string[]): Promise<number> {
   }
   const plan = buildPlan(loaded.suites, targets.targets);
   const points = plan.shards.reduce((s, sh) => s + sh.points, 0);
-  const workers = args.workers === 'auto' ? (points >= WORKER_THRESHOLD ? Math.min(4, os.availableParallelism()) : 0) : args.workers;
+  const workers =
+    args.workers === 'auto' ? (points >= WORKER_THRESHOLD ? Math.min(4, os.availableParallelism()) : 0) : args.workers;
   const controller = new AbortController();
   const onSigint = () => controller.abort(new Error('interrupted (SIGINT)'));
   process.once('SIGINT', onSigint);
@@ -55,21 +57,31 @@ export async function runCommand(argv: string[]): Promise<number> {
     ...(args.shardTimeLimitMs !== null ? { shardTimeLimitMs: args.shardTimeLimitMs } : {}),
     ...(args.maxFindings !== null ? { maxFindings: args.maxFindings } : {}),
     // Property checks run with each suite's pinned seeds; `--seed N` replaces them all, to explore.
-    properties: (suite, target, seed) => checkSuiteProperties(seed === null ? suite : { ...suite, properties: suite.properties.map((p) => ({ ...p, seed })) }, target),
+    properties: (suite, target, seed) =>
+      checkSuiteProperties(
+        seed === null ? suite : { ...suite, properties: suite.properties.map((p) => ({ ...p, seed })) },
+        target,
+      ),
     onEvent: args.progress
       ? (e) => {
           if (e.type === 'progress') process.stderr.write(`sheetkeeper run: ${e.done}/${e.total} points\n`);
-          else if (e.type === 'shard-end') process.stderr.write(`sheetkeeper run: shard ${e.shard} ${e.suite} × ${e.target}: ${e.status} (${e.durationMs} ms)\n`);
+          else if (e.type === 'shard-end')
+            process.stderr.write(
+              `sheetkeeper run: shard ${e.shard} ${e.suite} × ${e.target}: ${e.status} (${e.durationMs} ms)\n`,
+            );
           else if (e.type === 'cancelled') process.stderr.write(`sheetkeeper run: ${e.reason}\n`);
         }
       : undefined,
   });
   process.off('SIGINT', onSigint);
-  const text = args.format === 'json' ? formatJson(result) : args.format === 'junit' ? formatJunit(result) : formatTable(result);
+  const text =
+    args.format === 'json' ? formatJson(result) : args.format === 'junit' ? formatJunit(result) : formatTable(result);
   if (args.out) {
     mkdirSync(path.dirname(path.resolve(args.out)), { recursive: true });
     writeFileSync(args.out, text);
-    process.stderr.write(`sheetkeeper run: ${result.status}; ${result.counts.pass} pass, ${result.counts.fail} fail, ${result.counts.error} error, ${result.counts.skipped} skipped; written to ${args.out}\n`);
+    process.stderr.write(
+      `sheetkeeper run: ${result.status}; ${result.counts.pass} pass, ${result.counts.fail} fail, ${result.counts.error} error, ${result.counts.skipped} skipped; written to ${args.out}\n`,
+    );
   } else {
     process.stdout.write(text);
   }

@@ -23,7 +23,15 @@ export async function openBrowser(viewport = { width: 390, height: 844 }): Promi
     executablePath: '/usr/bin/chromium',
     headless: true,
     viewport,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   });
   const page = context.pages()[0] ?? (await context.newPage());
   const pageErrors: string[] = [];

@@ -92,7 +92,12 @@ describe('cmath through the stdio protocol', () => {
   });
 
   it('takes pow as a batch of (z, w) pairs: (−8 + 0i)^(1/3) is the principal cube root 1 + √3 i', async () => {
-    const [root] = await cmath.evaluate('pow', [[[-8, 0], [1 / 3, 0]]]);
+    const [root] = await cmath.evaluate('pow', [
+      [
+        [-8, 0],
+        [1 / 3, 0],
+      ],
+    ]);
     const [re, im] = value(root);
     expect(re).toBeCloseTo(1, 15);
     expect(im).toBeCloseTo(Math.sqrt(3), 15);
@@ -107,9 +112,14 @@ describe('cmath through the stdio protocol', () => {
     const child = spawn('/usr/bin/python3', [SCRIPT], { stdio: ['pipe', 'pipe', 'inherit'] });
     let out = '';
     child.stdout.on('data', (chunk: Buffer) => (out += chunk.toString()));
-    child.stdin.end('not json\n{"id": 9, "op": "sqrt", "args": [["4", "-0"]]}\n{"id": 10, "op": "sqrt", "args": [[4, 0]]}\n{"id": 11, "op": "frobnicate", "args": []}\n');
+    child.stdin.end(
+      'not json\n{"id": 9, "op": "sqrt", "args": [["4", "-0"]]}\n{"id": 10, "op": "sqrt", "args": [[4, 0]]}\n{"id": 11, "op": "frobnicate", "args": []}\n',
+    );
     await new Promise((resolve) => child.on('exit', resolve));
-    const lines = out.trim().split('\n').map((l) => JSON.parse(l) as Record<string, unknown>);
+    const lines = out
+      .trim()
+      .split('\n')
+      .map((l) => JSON.parse(l) as Record<string, unknown>);
     expect(lines).toEqual([
       { id: null, error: expect.stringMatching(/^not JSON/) },
       { id: 9, results: [['2.0', '-0.0']] },

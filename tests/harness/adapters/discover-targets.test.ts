@@ -5,7 +5,8 @@ import { listTargets } from '../../../harness/adapters/list-targets';
 
 const ROOT = path.join(__dirname, '..', '..', '..');
 const declaredVersion = (alias: string): string =>
-  (JSON.parse(readFileSync(path.join(ROOT, 'node_modules', alias, 'package.json'), 'utf8')) as { version: string }).version;
+  (JSON.parse(readFileSync(path.join(ROOT, 'node_modules', alias, 'package.json'), 'utf8')) as { version: string })
+    .version;
 
 describe('discoverTargets', () => {
   const targets = discoverTargets();
@@ -38,7 +39,10 @@ describe('discoverTargets', () => {
     for (const descriptor of targets) {
       const target = descriptor.open();
       try {
-        expect({ name: target.name, result: await target.evaluate('sqrt', [[[4, 0]]]) }).toEqual({ name: target.name, result: [{ value: [2, 0] }] });
+        expect({ name: target.name, result: await target.evaluate('sqrt', [[[4, 0]]]) }).toEqual({
+          name: target.name,
+          result: [{ value: [2, 0] }],
+        });
       } finally {
         await target.close();
       }

@@ -7,7 +7,10 @@ import { parseDouble } from '../../../harness/reference/numbers/parse-double';
 
 type Value = { re: number; im: number };
 type ComplexJs = new (...a: unknown[]) => Value;
-type MathJs = { create(all: unknown, config: unknown): { complex(...a: unknown[]): Value; evaluate(s: string): unknown }; all: unknown };
+type MathJs = {
+  create(all: unknown, config: unknown): { complex(...a: unknown[]): Value; evaluate(s: string): unknown };
+  all: unknown;
+};
 
 const descriptors = discoverTargets();
 let findings: EntryPointFinding[];
@@ -16,7 +19,9 @@ beforeAll(async () => {
 }, 60_000);
 
 const finding = (target: string, way: string, input: [string, string]): EntryPointFinding => {
-  const found = findings.find((f) => f.target === target && f.way === way && f.input[0] === input[0] && f.input[1] === input[1]);
+  const found = findings.find(
+    (f) => f.target === target && f.way === way && f.input[0] === input[0] && f.input[1] === input[1],
+  );
   if (!found) throw new Error(`no finding for ${target} ${way} ${input.join(' ')}`);
   return found;
 };
@@ -26,7 +31,8 @@ describe('probeEntryPoints', () => {
   it('reports every input for every way of every complex.js version, mathjs version and cmath', () => {
     const targets = new Set(findings.map((f) => f.target));
     for (const d of descriptors.filter((x) => x.library === 'complex.js')) expect(targets).toContain(d.name);
-    for (const v of new Set(descriptors.filter((x) => x.library === 'mathjs').map((x) => x.version))) expect(targets).toContain(`mathjs@${v}`);
+    for (const v of new Set(descriptors.filter((x) => x.library === 'mathjs').map((x) => x.version)))
+      expect(targets).toContain(`mathjs@${v}`);
     expect([...targets].some((t) => t.startsWith('cmath@'))).toBe(true);
     const perWay = new Map<string, number>();
     for (const f of findings) perWay.set(`${f.target} ${f.way}`, (perWay.get(`${f.target} ${f.way}`) ?? 0) + 1);
@@ -35,8 +41,12 @@ describe('probeEntryPoints', () => {
 
   it('calls a finding intact exactly when both parts read back with the input value and zero sign', () => {
     for (const f of findings) {
-      const same = f.arrived !== null && f.arrived.every((part, k) => Object.is(parseDouble(part), parseDouble(f.input[k] as string)));
-      expect(`${f.target} ${f.way} ${f.input.join(',')}: ${f.intact}`).toBe(`${f.target} ${f.way} ${f.input.join(',')}: ${same}`);
+      const same =
+        f.arrived !== null &&
+        f.arrived.every((part, k) => Object.is(parseDouble(part), parseDouble(f.input[k] as string)));
+      expect(`${f.target} ${f.way} ${f.input.join(',')}: ${f.intact}`).toBe(
+        `${f.target} ${f.way} ${f.input.join(',')}: ${same}`,
+      );
     }
   });
 
@@ -51,7 +61,8 @@ describe('probeEntryPoints', () => {
         'new Complex([re, im])': both(new Complex([0, -0]), 0, -0),
         'new Complex("re±im i")': both(new Complex('0-0i'), 0, -0),
       };
-      for (const [way, intact] of Object.entries(observed)) expect(`${way}: ${finding(name, way, ['0', '-0']).intact}`).toBe(`${way}: ${intact}`);
+      for (const [way, intact] of Object.entries(observed))
+        expect(`${way}: ${finding(name, way, ['0', '-0']).intact}`).toBe(`${way}: ${intact}`);
     },
   );
 
@@ -83,7 +94,14 @@ describe('probeEntryPoints', () => {
 
   it('reports cmath as Python itself builds the numbers: the constructor and mixed arithmetic for 0 − 0i', () => {
     const target = findings.find((f) => f.target.startsWith('cmath@'))?.target as string;
-    const out = execFileSync('/usr/bin/python3', ['-c', 'import math; a = complex(0.0, -0.0); b = 0.0 + -0.0 * 1j; print(math.copysign(1, a.imag), math.copysign(1, b.imag))'], { encoding: 'utf8' });
+    const out = execFileSync(
+      '/usr/bin/python3',
+      [
+        '-c',
+        'import math; a = complex(0.0, -0.0); b = 0.0 + -0.0 * 1j; print(math.copysign(1, a.imag), math.copysign(1, b.imag))',
+      ],
+      { encoding: 'utf8' },
+    );
     const [constructorSign, mixedSign] = out.trim().split(' ').map(Number);
     expect(finding(target, 'constructor', ['0', '-0']).intact).toBe(constructorSign === -1);
     expect(finding(target, 'mixed-arithmetic', ['0', '-0']).intact).toBe(mixedSign === -1);

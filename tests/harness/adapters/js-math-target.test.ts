@@ -17,7 +17,11 @@ describe('jsMathTarget', () => {
       target.evaluate('log', [[[0, 0]]]),
       target.evaluate('atanh', [[[1, -0]]]),
     ]);
-    expect(results).toEqual([[{ value: [-0, 0] }, { value: [NaN, 0] }], [{ value: [-Infinity, 0] }], [{ value: [Infinity, 0] }]]);
+    expect(results).toEqual([
+      [{ value: [-0, 0] }, { value: [NaN, 0] }],
+      [{ value: [-Infinity, 0] }],
+      [{ value: [Infinity, 0] }],
+    ]);
   });
 
   it('refuses an argument off the real line with an error result', async () => {
@@ -35,7 +39,14 @@ describe('jsMathTarget', () => {
 
   it('computes pow(−8, 1/3) as NaN: Math.pow has no real cube root of a negative base', async () => {
     // ECMA-262 Number::exponentiate: a finite negative base with a non-integer exponent gives NaN.
-    expect(await target.evaluate('pow', [[[-8, 0], [1 / 3, 0]]])).toEqual([{ value: [NaN, 0] }]);
+    expect(
+      await target.evaluate('pow', [
+        [
+          [-8, 0],
+          [1 / 3, 0],
+        ],
+      ]),
+    ).toEqual([{ value: [NaN, 0] }]);
     expect(await target.evaluate('cbrt', [[[-8, 0]]])).toEqual([{ value: [-2, 0] }]);
   });
 });

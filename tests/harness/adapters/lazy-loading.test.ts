@@ -5,7 +5,10 @@ const FIXTURE = path.join(__dirname, 'fixtures', 'loaded-libraries.ts');
 
 /** The math packages in a fresh Node process's require.cache after using `target` (or nothing). */
 function loadedAfter(target?: string): string[] {
-  const out = execFileSync(process.execPath, ['--import', 'tsx', FIXTURE, ...(target ? [target] : [])], { encoding: 'utf8', timeout: 30_000 });
+  const out = execFileSync(process.execPath, ['--import', 'tsx', FIXTURE, ...(target ? [target] : [])], {
+    encoding: 'utf8',
+    timeout: 30_000,
+  });
   return JSON.parse(out) as string[];
 }
 
@@ -25,7 +28,9 @@ describe('lazy loading of target libraries', () => {
   });
 
   it('loads no JavaScript library for a run against cmath', () => {
-    const cmath = execFileSync('/usr/bin/python3', ['-c', 'import platform; print(platform.python_version())'], { encoding: 'utf8' }).trim();
+    const cmath = execFileSync('/usr/bin/python3', ['-c', 'import platform; print(platform.python_version())'], {
+      encoding: 'utf8',
+    }).trim();
     expect(loadedAfter(`cmath@${cmath}`)).toEqual([]);
   });
 });

@@ -49,7 +49,10 @@ describe('stdioTarget', () => {
       [0.1, -1.7976931348623157e308],
       ...Array.from({ length: 200 }, (_, k): ComplexPair => [k, -k / 7]),
     ];
-    const results = await target.evaluate('sqrt', points.map((p) => [p]));
+    const results = await target.evaluate(
+      'sqrt',
+      points.map((p) => [p]),
+    );
     expect(results).toEqual(points.map((p) => ({ value: p })));
     // toEqual treats −0 and +0 as different (Object.is), so the signs were checked; say so for the first two.
     expect(Object.is((results[0] as { value: ComplexPair }).value[0], -0)).toBe(true);
@@ -67,7 +70,8 @@ describe('stdioTarget', () => {
     target = misbehaving();
     const crashed = await target.evaluate('exp', [[[1, 0]], [[2, 0]]]);
     expect(crashed).toHaveLength(2);
-    for (const r of crashed) expect(r).toEqual({ error: expect.stringMatching(/exited with code 3.*crashing on purpose/) });
+    for (const r of crashed)
+      expect(r).toEqual({ error: expect.stringMatching(/exited with code 3.*crashing on purpose/) });
     expect(await target.evaluate('sqrt', [[[4, 0]]])).toEqual([{ value: [4, 0] }]);
   });
 
@@ -88,8 +92,12 @@ describe('stdioTarget', () => {
 
   it('turns a line that is not JSON, a wrong id and a short result list into error results', async () => {
     target = misbehaving();
-    expect(await target.evaluate('asin', [[[0, 0]]])).toEqual([{ error: 'program wrote a line that is not JSON: this is not JSON' }]);
-    expect(await target.evaluate('acos', [[[0, 0]]])).toEqual([{ error: expect.stringMatching(/^program answered id \d+ while \d+ was pending$/) }]);
+    expect(await target.evaluate('asin', [[[0, 0]]])).toEqual([
+      { error: 'program wrote a line that is not JSON: this is not JSON' },
+    ]);
+    expect(await target.evaluate('acos', [[[0, 0]]])).toEqual([
+      { error: expect.stringMatching(/^program answered id \d+ while \d+ was pending$/) },
+    ]);
     expect(await target.evaluate('atan', [[[0, 0]], [[1, 0]]])).toEqual([
       { error: 'program answered 1 results for 2 calls' },
       { error: 'program answered 1 results for 2 calls' },
@@ -100,17 +108,41 @@ describe('stdioTarget', () => {
   it('answers an op the program does not list as unsupported without sending it', async () => {
     target = misbehaving();
     expect(await target.supports('pow')).toBe(false);
-    expect(await target.evaluate('pow', [[[1, 0], [2, 0]]])).toEqual([{ error: 'misbehaving has no pow' }]);
+    expect(
+      await target.evaluate('pow', [
+        [
+          [1, 0],
+          [2, 0],
+        ],
+      ]),
+    ).toEqual([{ error: 'misbehaving has no pow' }]);
   });
 
   it('gives a call with the wrong number of arguments its own error and sends the rest', async () => {
     target = misbehaving();
-    expect(await target.evaluate('sqrt', [[[1, 0], [2, 0]], [[3, 0]]])).toEqual([{ error: 'sqrt takes 1 argument(s), got 2' }, { value: [3, 0] }]);
+    expect(
+      await target.evaluate('sqrt', [
+        [
+          [1, 0],
+          [2, 0],
+        ],
+        [[3, 0]],
+      ]),
+    ).toEqual([{ error: 'sqrt takes 1 argument(s), got 2' }, { value: [3, 0] }]);
   });
 
   it('reports a program that cannot start as error results', async () => {
-    target = stdioTarget({ name: 'none', library: 'none', version: '0', settings: {}, command: '/nonexistent/program', args: [] });
-    expect(await target.evaluate('sqrt', [[[1, 0]]])).toEqual([{ error: expect.stringMatching(/could not run.*ENOENT/) }]);
+    target = stdioTarget({
+      name: 'none',
+      library: 'none',
+      version: '0',
+      settings: {},
+      command: '/nonexistent/program',
+      args: [],
+    });
+    expect(await target.evaluate('sqrt', [[[1, 0]]])).toEqual([
+      { error: expect.stringMatching(/could not run.*ENOENT/) },
+    ]);
   });
 
   it('ends the program on close', async () => {

@@ -1,7 +1,12 @@
 import type { EntryPointFinding } from '../../../harness/adapters/entry-point-finding';
 import { summarizeEntryPoints } from '../../../harness/adapters/summarize-entry-points';
 
-const finding = (way: string, input: [string, string], arrived: [string, string] | null, error?: string): EntryPointFinding => ({
+const finding = (
+  way: string,
+  input: [string, string],
+  arrived: [string, string] | null,
+  error?: string,
+): EntryPointFinding => ({
   target: 'lib@1.0.0',
   way,
   input,

@@ -10,7 +10,8 @@ describe('formatHexDouble', () => {
     expect(formatHexDouble(0)).toBe('0x0p+0');
     expect(formatHexDouble(5e-324)).toBe('0x0.0000000000001p-1022');
     expect(formatHexDouble(Infinity)).toBe('inf');
-    for (const x of [0.1, -1e-300, 1.7976931348623157e308, 2.2250738585072014e-308, -5e-324, Math.PI]) expect(Object.is(parseDouble(formatHexDouble(x)), x)).toBe(true);
+    for (const x of [0.1, -1e-300, 1.7976931348623157e308, 2.2250738585072014e-308, -5e-324, Math.PI])
+      expect(Object.is(parseDouble(formatHexDouble(x)), x)).toBe(true);
   });
 });
 

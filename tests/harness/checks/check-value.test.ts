@@ -28,8 +28,14 @@ describe('checkValue', () => {
     const nanValue = referenceDouble('sqrt', [NaN, 1]);
     expect(nanValue.every(Number.isNaN)).toBe(true);
     expect(checkValue([NaN, NaN], nanValue, { ulps: 0 }, true).pass).toBe(true);
-    expect(checkValue([NaN, NaN], expected, { ulps: 1e9 }, true)).toMatchObject({ pass: false, finitenessDiffers: true });
-    expect(checkValue([0, -2], nanValue, { relative: 1 }, true)).toMatchObject({ pass: false, finitenessDiffers: true });
+    expect(checkValue([NaN, NaN], expected, { ulps: 1e9 }, true)).toMatchObject({
+      pass: false,
+      finitenessDiffers: true,
+    });
+    expect(checkValue([0, -2], nanValue, { relative: 1 }, true)).toMatchObject({
+      pass: false,
+      finitenessDiffers: true,
+    });
   });
 
   it('holds the larger part to the ulp tolerance', () => {

@@ -4,16 +4,27 @@ import { diagnoseFailure } from '../../../harness/checks/diagnose-failure';
 import { referenceDouble } from './reference-double';
 
 const TOL = { ulps: 4 };
-const rotate = (v: ComplexDouble, angle: number): ComplexDouble => [v[0] * Math.cos(angle) - v[1] * Math.sin(angle), v[0] * Math.sin(angle) + v[1] * Math.cos(angle)];
-const diagnose = (actual: ComplexDouble, expected: ComplexDouble, extra: Omit<Parameters<typeof diagnoseFailure>[0], 'actual' | 'expected' | 'check'> = {}, zeroSigns = true) =>
-  diagnoseFailure({ actual, expected, check: checkValue(actual, expected, TOL, zeroSigns), ...extra });
+const rotate = (v: ComplexDouble, angle: number): ComplexDouble => [
+  v[0] * Math.cos(angle) - v[1] * Math.sin(angle),
+  v[0] * Math.sin(angle) + v[1] * Math.cos(angle),
+];
+const diagnose = (
+  actual: ComplexDouble,
+  expected: ComplexDouble,
+  extra: Omit<Parameters<typeof diagnoseFailure>[0], 'actual' | 'expected' | 'check'> = {},
+  zeroSigns = true,
+) => diagnoseFailure({ actual, expected, check: checkValue(actual, expected, TOL, zeroSigns), ...extra });
 
 describe('diagnoseFailure', () => {
   it('calls 0 + 2i for sqrt(−4 − 0i) an ignored −0 of the input', () => {
     // ISO/IEC 9899:2011 G.6.4.2: csqrt(−4 − 0i) = +0 − 2i, csqrt(−4 + 0i) = +0 + 2i.
     const expected = referenceDouble('sqrt', [-4, -0]);
     const flipped = referenceDouble('sqrt', [-4, 0]);
-    expect(diagnose([0, 2], expected, { flippedZero: { part: 'im', value: flipped }, otherSide: flipped })).toEqual({ kind: 'zero-sign', part: 'im', of: 'input' });
+    expect(diagnose([0, 2], expected, { flippedZero: { part: 'im', value: flipped }, otherSide: flipped })).toEqual({
+      kind: 'zero-sign',
+      part: 'im',
+      of: 'input',
+    });
   });
 
   it('calls the upper-side value just below the cut of log the wrong side', () => {
@@ -27,13 +38,22 @@ describe('diagnoseFailure', () => {
     // cbrt(8) = 2 on the principal branch (common practice); the next sheet is 2·e^{2πi/3}.
     const expected = referenceDouble('cbrt', [8, 0]);
     const sheets = [-1, 1].map((k) => ({ k, value: rotate(expected, (2 * Math.PI * k) / 3) }));
-    expect(diagnose(rotate(expected, (2 * Math.PI) / 3), expected, { otherSheets: sheets })).toEqual({ kind: 'other-sheet', k: 1 });
+    expect(diagnose(rotate(expected, (2 * Math.PI) / 3), expected, { otherSheets: sheets })).toEqual({
+      kind: 'other-sheet',
+      k: 1,
+    });
   });
 
   it('calls log z + 2πi the sheet k = 1', () => {
     const expected = referenceDouble('log', [0.5, 0.5]);
-    const sheets = [-2, -1, 1, 2].map((k) => ({ k, value: [expected[0], expected[1] + 2 * Math.PI * k] as ComplexDouble }));
-    expect(diagnose([expected[0], expected[1] + 2 * Math.PI], expected, { otherSheets: sheets })).toEqual({ kind: 'other-sheet', k: 1 });
+    const sheets = [-2, -1, 1, 2].map((k) => ({
+      k,
+      value: [expected[0], expected[1] + 2 * Math.PI * k] as ComplexDouble,
+    }));
+    expect(diagnose([expected[0], expected[1] + 2 * Math.PI], expected, { otherSheets: sheets })).toEqual({
+      kind: 'other-sheet',
+      k: 1,
+    });
   });
 
   it('calls a right-branch value 1e-10 off inaccurate, with its ulps', () => {
@@ -60,7 +80,11 @@ describe('diagnoseFailure', () => {
 
   it('names the imaginary part when it is the one further off', () => {
     const expected = referenceDouble('asin', [0.3, 0.2]);
-    expect(diagnose([expected[0], expected[1] * (1 + 1e-9)], expected)).toMatchObject({ kind: 'inaccurate', part: 'im', signDiffers: false });
+    expect(diagnose([expected[0], expected[1] * (1 + 1e-9)], expected)).toMatchObject({
+      kind: 'inaccurate',
+      part: 'im',
+      signDiffers: false,
+    });
   });
 
   it('calls NaN where the reference is finite not-finite', () => {
@@ -79,6 +103,8 @@ describe('diagnoseFailure', () => {
   it('ignores the zero-sign candidate when it is the expected value too', () => {
     // sqrt(4 ± 0i) differ only in the sign of a zero; a value that is far off is not a zero-sign failure.
     const expected = referenceDouble('sqrt', [4, 0]);
-    expect(diagnose([3, 0], expected, { flippedZero: { part: 'im', value: referenceDouble('sqrt', [4, -0]) } }).kind).toBe('unexplained');
+    expect(
+      diagnose([3, 0], expected, { flippedZero: { part: 'im', value: referenceDouble('sqrt', [4, -0]) } }).kind,
+    ).toBe('unexplained');
   });
 });

@@ -5,12 +5,22 @@ import { buildPath } from '../../../harness/paths/build-path';
 import type { Diagnosis } from '../../../shared/diagnosis';
 import { referenceDouble } from './reference-double';
 
-const circle = buildPath({ kind: 'circle', center: { re: 0, im: 0 }, radius: 1, startAngle: 'pi/8', turns: 1, direction: 'ccw', samples: 65 });
+const circle = buildPath({
+  kind: 'circle',
+  center: { re: 0, im: 0 },
+  radius: 1,
+  startAngle: 'pi/8',
+  turns: 1,
+  direction: 'ccw',
+  samples: 65,
+});
 const t = circle.map((p) => p.t);
 const z = circle.map((p): ComplexDouble => [p.z.re, p.z.im]);
 const expected = z.map((p) => referenceDouble('sqrt', p));
 /** A square root with its cut on the positive real axis: arg z taken in [0, 2π), i.e. −(principal) below the real axis. */
-const cutOnPositiveAxis = z.map((p, i): ComplexDouble => (p[1] < 0 || Object.is(p[1], -0) ? [-expected[i]![0], -expected[i]![1]] : expected[i]!));
+const cutOnPositiveAxis = z.map((p, i): ComplexDouble =>
+  p[1] < 0 || Object.is(p[1], -0) ? [-expected[i]![0], -expected[i]![1]] : expected[i]!,
+);
 
 describe('detectJumps', () => {
   it('finds the one jump of the principal square root on the unit circle, where it crosses (−∞, 0]', () => {
@@ -30,11 +40,15 @@ describe('detectJumps', () => {
 
 describe('findMisplacedCuts', () => {
   it('re-diagnoses the points between a cut on the positive axis and the expected cut as a misplaced cut', () => {
-    const pointDiagnoses = cutOnPositiveAxis.map((v, i): Diagnosis | null => (v[0] === expected[i]![0] && v[1] === expected[i]![1] ? null : { kind: 'other-sheet', k: 1 }));
+    const pointDiagnoses = cutOnPositiveAxis.map((v, i): Diagnosis | null =>
+      v[0] === expected[i]![0] && v[1] === expected[i]![1] ? null : { kind: 'other-sheet', k: 1 },
+    );
     const failing = pointDiagnoses.filter(Boolean).length;
     expect(failing).toBeGreaterThan(10);
     const result = findMisplacedCuts(t, expected, cutOnPositiveAxis, pointDiagnoses);
-    const misplaced = result.filter((d): d is Extract<Diagnosis, { kind: 'misplaced-cut' }> => d?.kind === 'misplaced-cut');
+    const misplaced = result.filter(
+      (d): d is Extract<Diagnosis, { kind: 'misplaced-cut' }> => d?.kind === 'misplaced-cut',
+    );
     expect(misplaced).toHaveLength(failing);
     const jumpAt = misplaced[0]!.expectedJumpAt!;
     // The expected jump is where the circle (starting at π/8) crosses angle π: t = (1 − 1/8)/2.

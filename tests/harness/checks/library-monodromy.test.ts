@@ -12,7 +12,11 @@ const principalPow = (z: ComplexDouble, nu: number): ComplexDouble => {
 
 describe('libraryMonodromy', () => {
   it('reads e^{2πi/3} from principal cube roots around 0 (one jump by e^{−2πi/3} across the negative axis)', () => {
-    const m = libraryMonodromy(t, circle.map((z) => principalPow(z, 1 / 3)), [1 / 3, 0]);
+    const m = libraryMonodromy(
+      t,
+      circle.map((z) => principalPow(z, 1 / 3)),
+      [1 / 3, 0],
+    );
     expect('factor' in m && m.jumps).toBe(1);
     if ('factor' in m) {
       expect(m.factor[0]).toBeCloseTo(Math.cos((2 * Math.PI) / 3), 12);

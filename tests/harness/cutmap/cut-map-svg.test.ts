@@ -11,8 +11,20 @@ const map: CutMap = {
   verdict: 'differs',
   statement: 'Evidence from a grid. Not a certification of the library.',
   observed: [
-    { points: [{ re: '-4', im: '0' }, { re: '-0.1', im: '0' }], onExpectedCut: true },
-    { points: [{ re: '0.1', im: '0' }, { re: '4', im: '0' }], onExpectedCut: false },
+    {
+      points: [
+        { re: '-4', im: '0' },
+        { re: '-0.1', im: '0' },
+      ],
+      onExpectedCut: true,
+    },
+    {
+      points: [
+        { re: '0.1', im: '0' },
+        { re: '4', im: '0' },
+      ],
+      onExpectedCut: false,
+    },
   ],
   expected: [
     { label: '(-inf, 0]', from: { re: '0', im: '0' }, to: { re: '-4', im: '0' }, coverage: 1, seen: true },
@@ -27,7 +39,9 @@ describe('cutMapSvg', () => {
   it('is one svg element with an accessible title and a description that carries the statement', () => {
     expect(svg.startsWith('<svg xmlns="http://www.w3.org/2000/svg"')).toBe(true);
     expect(svg.trimEnd().endsWith('</svg>')).toBe(true);
-    expect(svg).toContain('<title id="title">Cut map of sqrt for lib@1 &lt;test&gt;: differs from the expected cuts</title>');
+    expect(svg).toContain(
+      '<title id="title">Cut map of sqrt for lib@1 &lt;test&gt;: differs from the expected cuts</title>',
+    );
     expect(svg).toContain('<desc id="desc">Evidence from a grid. Not a certification of the library.</desc>');
   });
 
@@ -40,7 +54,8 @@ describe('cutMapSvg', () => {
   });
 
   it('names every mark of the legend in words', () => {
-    for (const words of ['thick dashed line', 'thin line, round markers', 'thin line, × markers']) expect(svg).toContain(words);
+    for (const words of ['thick dashed line', 'thin line, round markers', 'thin line, × markers'])
+      expect(svg).toContain(words);
   });
 
   it('maps the box onto the plot with the imaginary axis upwards', () => {

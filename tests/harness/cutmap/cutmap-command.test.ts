@@ -10,13 +10,28 @@ const file = tempFolder('cutmap');
 describe('cutmapCommand', () => {
   it("writes an SVG of complex.js 2.4.3's sqrt and exits 0, its cut being where it belongs", async () => {
     const out = file('sqrt.svg');
-    expect(await cutmapCommand(['--target', 'complex.js@2.4.3', '--fn', 'sqrt', '--format', 'svg', '--out', out])).toBe(0);
+    expect(await cutmapCommand(['--target', 'complex.js@2.4.3', '--fn', 'sqrt', '--format', 'svg', '--out', out])).toBe(
+      0,
+    );
     expect(readFileSync(out, 'utf8')).toContain('matches the expected cuts');
   });
 
   it("writes JSON for complex.js 2.4.3's acot over a smaller box and grid and exits 1", async () => {
     const out = file('acot.json');
-    expect(await cutmapCommand(['--target', 'complex.js@2.4.3', '--fn', 'acot', '--box', '-2,-2,2,2', '--grid', '41x41', '--out', out])).toBe(1);
+    expect(
+      await cutmapCommand([
+        '--target',
+        'complex.js@2.4.3',
+        '--fn',
+        'acot',
+        '--box',
+        '-2,-2,2,2',
+        '--grid',
+        '41x41',
+        '--out',
+        out,
+      ]),
+    ).toBe(1);
     const map = JSON.parse(readFileSync(out, 'utf8'));
     expect([map.columns, map.rows, map.verdict]).toEqual([41, 41, 'differs']);
   });
@@ -31,7 +46,14 @@ describe('cutmapCommand', () => {
   });
 
   it('exits 2 through the sheetkeeper command for bad input', () => {
-    const run = spawnSync(process.execPath, [path.join(__dirname, '..', '..', '..', 'bin', 'sheetkeeper.mjs'), ...['cutmap', '--target', 'complex.js@2.4.3', '--fn', 'sqrt', '--box', '4,4,-4,-4']], { encoding: 'utf8', timeout: 60_000 });
+    const run = spawnSync(
+      process.execPath,
+      [
+        path.join(__dirname, '..', '..', '..', 'bin', 'sheetkeeper.mjs'),
+        ...['cutmap', '--target', 'complex.js@2.4.3', '--fn', 'sqrt', '--box', '4,4,-4,-4'],
+      ],
+      { encoding: 'utf8', timeout: 60_000 },
+    );
     expect(run.status).toBe(2);
     expect(run.stderr).toContain('--box: needs re0 < re1');
   });

@@ -5,13 +5,18 @@ import { functionTarget } from '../support/function-target';
 import { referenceCall } from '../support/reference-call';
 
 /** √(z − 0.37i): the principal root's cut moved up to the line Im z = 0.37, left of 0.37i — between grid rows. */
-const shifted = functionTarget('shifted-sqrt', ['sqrt'], (_op, [z]) => referenceCall('sqrt', [[z![0], z![1] - 0.37]], 'signed-zero'));
+const shifted = functionTarget('shifted-sqrt', ['sqrt'], (_op, [z]) =>
+  referenceCall('sqrt', [[z![0], z![1] - 0.37]], 'signed-zero'),
+);
 
 async function crossings(columns: number, rows: number) {
   const grid = buildPath({ kind: 'grid', min: { re: -2, im: -2 }, max: { re: 2, im: 2 }, columns, rows });
   const zs: ComplexPair[][] = [];
   const values: ComplexPair[][] = [];
-  const answers = await shifted.evaluate('sqrt', grid.map((p) => [[p.z.re, p.z.im]]));
+  const answers = await shifted.evaluate(
+    'sqrt',
+    grid.map((p) => [[p.z.re, p.z.im]]),
+  );
   grid.forEach((p, i) => {
     const [r, c] = [Math.floor(i / columns), i % columns];
     (zs[r] ??= [])[c] = [p.z.re, p.z.im];

@@ -59,7 +59,10 @@ describe('mapCuts', () => {
     try {
       const map = await mapCuts(target, fn('asinh'), [-3, -3], [3, 3], 61, 61);
       expect(map.verdict).toBe('matches');
-      expect(map.expected.map((e) => [e.label, e.coverage])).toEqual([['[1, +inf)·i', 1], ['(-inf, -1]·i', 1]]);
+      expect(map.expected.map((e) => [e.label, e.coverage])).toEqual([
+        ['[1, +inf)·i', 1],
+        ['(-inf, -1]·i', 1],
+      ]);
     } finally {
       await target.close();
     }

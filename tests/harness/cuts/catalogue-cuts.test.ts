@@ -10,7 +10,9 @@ describe('catalogueCuts', () => {
   });
 
   it('gives every power the cut (-inf, 0] and exp none', () => {
-    expect(catalogueCuts('pow')).toEqual([{ from: [0, 0], to: [-1, 0], toInfinity: true, ccwSide: 'upper', label: '(-inf, 0]' }]);
+    expect(catalogueCuts('pow')).toEqual([
+      { from: [0, 0], to: [-1, 0], toInfinity: true, ccwSide: 'upper', label: '(-inf, 0]' },
+    ]);
     expect(catalogueCuts('exp')).toEqual([]);
     expect(catalogueCuts('sin')).toBeNull();
   });

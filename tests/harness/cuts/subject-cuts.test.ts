@@ -18,7 +18,23 @@ describe('subjectCuts', () => {
       nu: '1/2',
       z0: { re: '2', im: '0' },
       k: 0,
-      cuts: [{ points: [{ re: '-1', im: '0' }, { re: '0', im: '0' }, { re: '1', im: '0' }], to_infinity: false }, { points: [{ re: '0', im: '1' }, { re: '0', im: '2' }], to_infinity: true }],
+      cuts: [
+        {
+          points: [
+            { re: '-1', im: '0' },
+            { re: '0', im: '0' },
+            { re: '1', im: '0' },
+          ],
+          to_infinity: false,
+        },
+        {
+          points: [
+            { re: '0', im: '1' },
+            { re: '0', im: '2' },
+          ],
+          to_infinity: true,
+        },
+      ],
     };
     expect(subjectCuts(parseSubject('sqrt(z - 1) * sqrt(z + 1)'), branch)).toEqual([
       { from: [-1, 0], to: [0, 0], toInfinity: false, ccwSide: null, label: 'cut 1 piece 1' },

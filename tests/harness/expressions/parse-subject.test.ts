@@ -15,7 +15,10 @@ describe('parseSubject', () => {
     ['x + 1', 'the symbol "x" (only z and i are known) is not allowed in a subject (at "x")'],
     ['z[1]', 'a AccessorNode is not allowed in a subject (at "z[1]")'],
     ['a = 1', 'a AssignmentNode is not allowed in a subject (at "a = 1")'],
-    ['z ^ z', 'a power whose exponent is not an integer or rational constant (use pow(base, w)) is not allowed in a subject (at "z ^ z")'],
+    [
+      'z ^ z',
+      'a power whose exponent is not an integer or rational constant (use pow(base, w)) is not allowed in a subject (at "z ^ z")',
+    ],
     ['nthroot(z, 2.5)', 'nthroot needs a non-zero integer degree of at most 1000 (at "nthroot(z, 2.5)")'],
     ['sqrt(z, 2)', 'sqrt takes 1 argument, got 2 (at "sqrt(z, 2)")'],
     ['sqrt(z', 'syntax error: Parenthesis ) expected (char 7)'],
@@ -26,8 +29,12 @@ describe('parseSubject', () => {
 
   it('refuses subjects over the length, depth and node limits', () => {
     expect(() => parseSubject('z+'.repeat(250) + 'z')).toThrow(`the limit is ${SUBJECT_LIMITS.length}`);
-    expect(() => parseSubject('sqrt('.repeat(30) + 'z' + ')'.repeat(30))).toThrow(`nested more than ${SUBJECT_LIMITS.depth} deep`);
-    expect(() => parseSubject(Array.from({ length: 120 }, () => 'z').join('*'))).toThrow(`the limit is ${SUBJECT_LIMITS.nodes}`);
+    expect(() => parseSubject('sqrt('.repeat(30) + 'z' + ')'.repeat(30))).toThrow(
+      `nested more than ${SUBJECT_LIMITS.depth} deep`,
+    );
+    expect(() => parseSubject(Array.from({ length: 120 }, () => 'z').join('*'))).toThrow(
+      `the limit is ${SUBJECT_LIMITS.nodes}`,
+    );
   });
 });
 

@@ -12,9 +12,14 @@ const file = tempFolder('fingerprint');
 describe('fingerprintCommand', () => {
   it('writes JSON to --out and exits 1 for complex.js 2.4.3, whose sqrt and log disagree on (-inf, 0]', async () => {
     const out = file('cjs.json');
-    expect(await fingerprintCommand(['--target', 'complex.js@2.4.3', '--fn', 'sqrt,log', '--format', 'json', '--out', out])).toBe(1);
+    expect(
+      await fingerprintCommand(['--target', 'complex.js@2.4.3', '--fn', 'sqrt,log', '--format', 'json', '--out', out]),
+    ).toBe(1);
     const fp = JSON.parse(readFileSync(out, 'utf8'));
-    expect(fp.cuts.map((c: { function: string; behaviour: string }) => `${c.function}: ${c.behaviour}`)).toEqual(['sqrt: inconsistent', 'log: inconsistent']);
+    expect(fp.cuts.map((c: { function: string; behaviour: string }) => `${c.function}: ${c.behaviour}`)).toEqual([
+      'sqrt: inconsistent',
+      'log: inconsistent',
+    ]);
   });
 
   it("writes a table that states what was checked and exits 0 for cmath's sqrt and pow(z, 1/2)", async () => {
@@ -27,20 +32,39 @@ describe('fingerprintCommand', () => {
 
   it('fingerprints several targets named with commas into one JSON array', async () => {
     const out = file('two.json');
-    expect(await fingerprintCommand(['--target', `complex.js@2.4.3,${findCmath()}`, '--fn', 'sqrt', '--format', 'json', '--out', out])).toBe(0);
+    expect(
+      await fingerprintCommand([
+        '--target',
+        `complex.js@2.4.3,${findCmath()}`,
+        '--fn',
+        'sqrt',
+        '--format',
+        'json',
+        '--out',
+        out,
+      ]),
+    ).toBe(0);
     const fps = JSON.parse(readFileSync(out, 'utf8'));
     // complex.js's sqrt alone is counter-clockwise (no other function on its cut is asked for here); cmath's is signed-zero.
-    expect(fps.map((fp: { target: string; cuts: { behaviour: string }[] }) => fp.cuts[0]!.behaviour)).toEqual(['counter-clockwise', 'signed-zero']);
+    expect(fps.map((fp: { target: string; cuts: { behaviour: string }[] }) => fp.cuts[0]!.behaviour)).toEqual([
+      'counter-clockwise',
+      'signed-zero',
+    ]);
   }, 20_000);
 
   it('refuses an unknown function, format or flag as bad input', async () => {
     await expect(fingerprintCommand(['--target', 'complex.js@2.4.3', '--fn', 'sin'])).rejects.toThrow(BadInput);
-    await expect(fingerprintCommand(['--target', 'complex.js@2.4.3', '--format', 'svg'])).rejects.toThrow(/--format: must be json or table/);
+    await expect(fingerprintCommand(['--target', 'complex.js@2.4.3', '--format', 'svg'])).rejects.toThrow(
+      /--format: must be json or table/,
+    );
     await expect(fingerprintCommand(['--target', 'complex.js@2.4.3', '--colour', 'red'])).rejects.toThrow(BadInput);
   });
 
   it('exits 2 through the sheetkeeper command for a target that is not installed', () => {
-    const run = spawnSync(process.execPath, [BIN, 'fingerprint', '--target', 'complex.js@0.0.1'], { encoding: 'utf8', timeout: 60_000 });
+    const run = spawnSync(process.execPath, [BIN, 'fingerprint', '--target', 'complex.js@0.0.1'], {
+      encoding: 'utf8',
+      timeout: 60_000,
+    });
     expect(run.status).toBe(2);
     expect(run.stderr).toContain('no installed target "complex.js@0.0.1"');
   });

@@ -8,7 +8,10 @@ import { referenceTarget } from '../support/reference-target';
 const only = (...labels: string[]) => FINGERPRINT_FUNCTIONS.filter((f) => labels.includes(f.label));
 const rows = (fp: ConventionFingerprint) => fp.cuts.map((c) => `${c.function} ${c.cut}: ${c.behaviour}`);
 /** A sqrt or log that treats −0 as +0, as a library without signed zeros does. */
-const ignoringZeroSigns = (op: string) => ([z]: ComplexPair[], ref: (op: string, args: ComplexPair[]) => ComplexPair) => ref(op, [[z![0] || 0, z![1] || 0]]);
+const ignoringZeroSigns =
+  (op: string) =>
+  ([z]: ComplexPair[], ref: (op: string, args: ComplexPair[]) => ComplexPair) =>
+    ref(op, [[z![0] || 0, z![1] || 0]]);
 
 describe('fingerprintTarget', () => {
   it("classifies Python's cmath as signed-zero on every cut of every function it has", async () => {
@@ -36,7 +39,11 @@ describe('fingerprintTarget', () => {
 
   it('classifies a sqrt and a log that ignore zero signs as counter-clockwise on (-inf, 0]', async () => {
     // Kahan 1987: the negative real axis belongs to the upper side, which is where +0 puts it.
-    const mutant = referenceTarget('signed-zero', { sqrt: ignoringZeroSigns('sqrt'), log: ignoringZeroSigns('log') }, 'mutant/ignores-zero-signs');
+    const mutant = referenceTarget(
+      'signed-zero',
+      { sqrt: ignoringZeroSigns('sqrt'), log: ignoringZeroSigns('log') },
+      'mutant/ignores-zero-signs',
+    );
     const fp = await fingerprintTarget(mutant, only('sqrt', 'log'));
     expect(rows(fp)).toEqual(['sqrt (-inf, 0]: counter-clockwise', 'log (-inf, 0]: counter-clockwise']);
   });
@@ -61,7 +68,9 @@ describe('fingerprintTarget', () => {
 
   it('calls a log that reads the zero sign backwards neither, saying the sides are swapped', async () => {
     // Annex G (ISO/IEC 9899:2011 G.6.3.2): clog(−1 + 0i) = iπ and clog(−1 − 0i) = −iπ; this mutant gives them the other way round.
-    const mutant = referenceTarget('signed-zero', { log: ([z], ref) => ref('log', [[z![0], z![1] === 0 ? (Object.is(z![1], -0) ? 0 : -0) : z![1]]]) });
+    const mutant = referenceTarget('signed-zero', {
+      log: ([z], ref) => ref('log', [[z![0], z![1] === 0 ? (Object.is(z![1], -0) ? 0 : -0) : z![1]]]),
+    });
     const fp = await fingerprintTarget(mutant, only('log'));
     expect(rows(fp)).toEqual(['log (-inf, 0]: neither']);
     expect(fp.cuts[0]!.probes.every((p) => p.note === '+0 and -0 give the sides the other way round')).toBe(true);
@@ -69,7 +78,12 @@ describe('fingerprintTarget', () => {
 
   it('calls a square root cut along the positive real axis neither on (-inf, 0], saying the cut is not there', async () => {
     // i·√(−z) squares to z, but its cut is [0, ∞): just below −4 it gives 2i where the principal root is −2i.
-    const mutant = referenceTarget('signed-zero', { sqrt: ([z], ref) => { const [re, im] = ref('sqrt', [[-z![0], -z![1]]]); return [-im, re]; } });
+    const mutant = referenceTarget('signed-zero', {
+      sqrt: ([z], ref) => {
+        const [re, im] = ref('sqrt', [[-z![0], -z![1]]]);
+        return [-im, re];
+      },
+    });
     const fp = await fingerprintTarget(mutant, only('sqrt'));
     expect(rows(fp)).toEqual(['sqrt (-inf, 0]: neither']);
     expect(fp.cuts[0]!.probes.every((p) => p.note?.includes('just off the cut'))).toBe(true);
@@ -80,7 +94,11 @@ describe('fingerprintTarget', () => {
     const descriptor = discoverTargets().find((d) => d.name === 'complex.js@2.4.3');
     if (!descriptor) throw new Error('complex.js 2.4.3 is a dependency of the project');
     const fp = await fingerprintTarget(descriptor.open(), only('sqrt', 'pow(z, 1/2)', 'log'));
-    expect(fp.cuts.map((c) => `${c.function}: ${c.alone}`)).toEqual(['sqrt: counter-clockwise', 'pow(z, 1/2): signed-zero', 'log: signed-zero']);
+    expect(fp.cuts.map((c) => `${c.function}: ${c.alone}`)).toEqual([
+      'sqrt: counter-clockwise',
+      'pow(z, 1/2): signed-zero',
+      'log: signed-zero',
+    ]);
     expect(fp.statement).toContain('not a certification');
   });
 });

@@ -17,18 +17,40 @@ describe('matrixCommand', () => {
 
   it('exits 0 with JSON when no value changed (cbrt: no complex.js version has it, so every point is skipped alike)', async () => {
     const out = file('cbrt.json');
-    expect(await matrixCommand(['--suite', 'cbrt-principal-sz', '--library', 'complex.js', '--format', 'json', '--out', out])).toBe(0);
+    expect(
+      await matrixCommand([
+        '--suite',
+        'cbrt-principal-sz',
+        '--library',
+        'complex.js',
+        '--format',
+        'json',
+        '--out',
+        out,
+      ]),
+    ).toBe(0);
     expect(JSON.parse(readFileSync(out, 'utf8')).suites[0].changes).toEqual([]);
   });
 
   it('refuses a library with one installed version, an unknown suite and a missing flag as bad input', async () => {
-    await expect(matrixCommand(['--suite', 'sqrt-principal-sz', '--library', 'js-math'])).rejects.toThrow(/1 installed version/);
-    await expect(matrixCommand(['--suite', 'no-such-suite', '--library', 'complex.js'])).rejects.toThrow(/no-such-suite/);
+    await expect(matrixCommand(['--suite', 'sqrt-principal-sz', '--library', 'js-math'])).rejects.toThrow(
+      /1 installed version/,
+    );
+    await expect(matrixCommand(['--suite', 'no-such-suite', '--library', 'complex.js'])).rejects.toThrow(
+      /no-such-suite/,
+    );
     await expect(matrixCommand(['--library', 'complex.js'])).rejects.toThrow(/--suite/);
   });
 
   it('exits 2 through the sheetkeeper command for bad input', () => {
-    const run = spawnSync(process.execPath, [path.join(__dirname, '..', '..', '..', 'bin', 'sheetkeeper.mjs'), ...['matrix', '--suite', 'sqrt-principal-sz', '--library', 'numpy']], { encoding: 'utf8', timeout: 60_000 });
+    const run = spawnSync(
+      process.execPath,
+      [
+        path.join(__dirname, '..', '..', '..', 'bin', 'sheetkeeper.mjs'),
+        ...['matrix', '--suite', 'sqrt-principal-sz', '--library', 'numpy'],
+      ],
+      { encoding: 'utf8', timeout: 60_000 },
+    );
     expect(run.status).toBe(2);
     expect(run.stderr).toContain('"numpy" has 0 installed version(s)');
   });

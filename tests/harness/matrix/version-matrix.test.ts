@@ -9,15 +9,25 @@ import { versionMatrix } from '../../../harness/matrix/version-matrix';
 import { parseDouble } from '../../../harness/reference/numbers/parse-double';
 import { referenceTarget } from '../support/reference-target';
 
-const demo = (id: string) => suiteSchema.parse(JSON.parse(readFileSync(path.join(__dirname, '..', '..', '..', 'suites', 'demo', `${id}.json`), 'utf8')));
-const complexJs = (...versions: string[]) => versions.map((v) => {
-  const d = discoverTargets().find((t) => t.name === `complex.js@${v}`);
-  if (!d) throw new Error(`complex.js ${v} is installed with the project`);
-  return d;
-});
+const demo = (id: string) =>
+  suiteSchema.parse(
+    JSON.parse(readFileSync(path.join(__dirname, '..', '..', '..', 'suites', 'demo', `${id}.json`), 'utf8')),
+  );
+const complexJs = (...versions: string[]) =>
+  versions.map((v) => {
+    const d = discoverTargets().find((t) => t.name === `complex.js@${v}`);
+    if (!d) throw new Error(`complex.js ${v} is installed with the project`);
+    return d;
+  });
 const asVersion = (version: string, make: () => Target): TargetDescriptor => {
   const info = { ...make(), version };
-  return { name: `${info.name}@${version}`, library: info.library, version, settings: {}, open: () => ({ ...make(), version }) };
+  return {
+    name: `${info.name}@${version}`,
+    library: info.library,
+    version,
+    settings: {},
+    open: () => ({ ...make(), version }),
+  };
 };
 const num = (w: { re: string; im: string } | null): ComplexPair => [parseDouble(w!.re), parseDouble(w!.im)];
 
@@ -40,7 +50,12 @@ describe('versionMatrix', () => {
     const change = m.suites[0]!.changes.find((c) => c.z.re === '0' && c.z.im === '2' && c.label === 'on +0');
     expect(change?.firstChangedIn).toBe('2.4.1');
     const [worse, better] = change!.steps;
-    expect([worse!.before.version, worse!.before.outcome, worse!.after.version, worse!.after.outcome]).toEqual(['2.3.0', { kind: 'pass' }, '2.4.1', { kind: 'fail', diagnosis: { kind: 'zero-sign', part: 're', of: 'input' } }]);
+    expect([worse!.before.version, worse!.before.outcome, worse!.after.version, worse!.after.outcome]).toEqual([
+      '2.3.0',
+      { kind: 'pass' },
+      '2.4.1',
+      { kind: 'fail', diagnosis: { kind: 'zero-sign', part: 're', of: 'input' } },
+    ]);
     expect([better!.after.version, better!.after.outcome]).toEqual(['2.4.2', { kind: 'pass' }]);
     // Python's cmath (Annex G, G.6.2.3 via catanh, from memory): catan(+0 + 2i) = π/2 + 0.549…i, the value 2.3.0 and 2.4.2 give.
     const cmath = await cmathValue('atan', [0, 2]);
@@ -61,16 +76,33 @@ describe('versionMatrix', () => {
   }, 20_000);
 
   it('reports exactly the points where a later "version" differs: a sqrt that starts ignoring zero signs changes only at inputs with a -0 imaginary part', async () => {
-    const ignoring = () => referenceTarget('signed-zero', { sqrt: ([z], ref) => ref('sqrt', [[z![0] || 0, z![1] || 0]]) });
-    const m = await versionMatrix('reference', [demo('sqrt-principal-sz')], [asVersion('1', () => referenceTarget('signed-zero')), asVersion('2', ignoring)]);
+    const ignoring = () =>
+      referenceTarget('signed-zero', { sqrt: ([z], ref) => ref('sqrt', [[z![0] || 0, z![1] || 0]]) });
+    const m = await versionMatrix(
+      'reference',
+      [demo('sqrt-principal-sz')],
+      [asVersion('1', () => referenceTarget('signed-zero')), asVersion('2', ignoring)],
+    );
     const changes = m.suites[0]!.changes;
     expect(changes.length).toBeGreaterThan(0);
     // ISO/IEC 9899:2011 G.6.4.2: csqrt(conj z) = conj csqrt(z), so at x − 0i the mutant gives the conjugate of the right value
     // (±i√|x| swapped for x < 0, a zero sign for x > 0), and nothing else may change.
     expect(changes.every((c) => c.z.im === '-0')).toBe(true);
-    expect(changes.every((c) => { const [b, a] = [num(c.steps[0]!.before.value), num(c.steps[0]!.after.value)]; return Object.is(a[0], b[0]) && Object.is(a[1], -b[1]); })).toBe(true);
+    expect(
+      changes.every((c) => {
+        const [b, a] = [num(c.steps[0]!.before.value), num(c.steps[0]!.after.value)];
+        return Object.is(a[0], b[0]) && Object.is(a[1], -b[1]);
+      }),
+    ).toBe(true);
     expect(changes.some((c) => parseDouble(c.z.re) < 0) && changes.some((c) => parseDouble(c.z.re) > 0)).toBe(true);
-    expect(changes.every((c) => c.firstChangedIn === '2' && c.steps[0]!.before.outcome.kind === 'pass' && c.steps[0]!.after.outcome.kind === 'fail')).toBe(true);
+    expect(
+      changes.every(
+        (c) =>
+          c.firstChangedIn === '2' &&
+          c.steps[0]!.before.outcome.kind === 'pass' &&
+          c.steps[0]!.after.outcome.kind === 'fail',
+      ),
+    ).toBe(true);
     expect(m.suites[0]!.statusByVersion.map((s) => s.status)).toEqual(['pass', 'fail']);
   });
 

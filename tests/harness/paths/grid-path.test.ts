@@ -22,7 +22,14 @@ describe('gridPath', () => {
   });
 
   it('emits points with a zero part with both signs when asked, +0 first', () => {
-    const points = gridPath({ kind: 'grid', min: { re: -1, im: -1 }, max: { re: 1, im: 1 }, columns: 3, rows: 3, bothZeroSigns: true });
+    const points = gridPath({
+      kind: 'grid',
+      min: { re: -1, im: -1 },
+      max: { re: 1, im: 1 },
+      columns: 3,
+      rows: 3,
+      bothZeroSigns: true,
+    });
     expect(points).toHaveLength(9 + 2 * 2 + 3);
     const center = points.filter((p) => p.label?.startsWith('column 1 row 1'));
     expect(center.map((p) => `${show(p.z.re)} ${show(p.z.im)}`)).toEqual(['+0 +0', '+0 -0', '-0 +0', '-0 -0']);
@@ -34,7 +41,11 @@ describe('gridPath', () => {
   });
 
   it('refuses fewer than two columns or rows and an empty box', () => {
-    expect(() => gridPath({ kind: 'grid', min: { re: 0, im: 0 }, max: { re: 1, im: 1 }, columns: 1, rows: 2 })).toThrow(RangeError);
-    expect(() => gridPath({ kind: 'grid', min: { re: 1, im: 0 }, max: { re: 1, im: 1 }, columns: 2, rows: 2 })).toThrow(RangeError);
+    expect(() => gridPath({ kind: 'grid', min: { re: 0, im: 0 }, max: { re: 1, im: 1 }, columns: 1, rows: 2 })).toThrow(
+      RangeError,
+    );
+    expect(() => gridPath({ kind: 'grid', min: { re: 1, im: 0 }, max: { re: 1, im: 1 }, columns: 2, rows: 2 })).toThrow(
+      RangeError,
+    );
   });
 });

@@ -5,7 +5,15 @@ import { zeroText as sign } from './zero-text';
 
 describe('polylinePath', () => {
   it('takes t as the fraction of arc length: a 3-then-4 path has its corner at t = 3/7', () => {
-    const points = polylinePath({ kind: 'polyline', points: [{ re: 0, im: 0 }, { re: 3, im: 0 }, { re: 3, im: 4 }], samples: 8 });
+    const points = polylinePath({
+      kind: 'polyline',
+      points: [
+        { re: 0, im: 0 },
+        { re: 3, im: 0 },
+        { re: 3, im: 4 },
+      ],
+      samples: 8,
+    });
     expect(points.map((p) => [p.z.re, p.z.im])).toEqual([
       [0, 0],
       [1, 0],
@@ -20,19 +28,41 @@ describe('polylinePath', () => {
 
   it('returns vertices exactly as written, zero signs included, where t·L lands on them', () => {
     // Edges of length 3 and 1: the corner (1, −0) sits at t = 3/4 exactly.
-    const points = polylinePath({ kind: 'polyline', points: [{ re: 1, im: 3 }, { re: 1, im: '-0' }, { re: 0, im: '-0' }], at: [0, 0.75, 0.875, 1] });
+    const points = polylinePath({
+      kind: 'polyline',
+      points: [
+        { re: 1, im: 3 },
+        { re: 1, im: '-0' },
+        { re: 0, im: '-0' },
+      ],
+      at: [0, 0.75, 0.875, 1],
+    });
     expect(points.map((p) => `${sign(p.z.re)} ${sign(p.z.im)}`)).toEqual(['1 3', '1 -0', '0.5 -0', '+0 -0']);
   });
 
   it('skips zero-length edges', () => {
-    const points = polylinePath({ kind: 'polyline', points: [{ re: 0, im: 0 }, { re: 0, im: 0 }, { re: 2, im: 0 }], samples: 3 });
+    const points = polylinePath({
+      kind: 'polyline',
+      points: [
+        { re: 0, im: 0 },
+        { re: 0, im: 0 },
+        { re: 2, im: 0 },
+      ],
+      samples: 3,
+    });
     expect(points.map((p) => p.z.re)).toEqual([0, 1, 2]);
   });
 
   it('puts the point at t a distance t·L along the path (seed 7401)', () => {
-    const vertices = [{ re: 0, im: 0 }, { re: 2, im: 0 }, { re: 2, im: 1 }, { re: -1, im: 1 }];
+    const vertices = [
+      { re: 0, im: 0 },
+      { re: 2, im: 0 },
+      { re: 2, im: 1 },
+      { re: -1, im: 1 },
+    ];
     // Along this path, the distance walked to a point is readable from its coordinates.
-    const walked = (z: { re: number; im: number }): number => (z.im === 0 ? z.re : z.re === 2 && z.im < 1 ? 2 + z.im : 3 + (2 - z.re));
+    const walked = (z: { re: number; im: number }): number =>
+      z.im === 0 ? z.re : z.re === 2 && z.im < 1 ? 2 + z.im : 3 + (2 - z.re);
     fc.assert(
       fc.property(fc.double({ min: 0, max: 1, noNaN: true }), (t) => {
         const [p] = polylinePath({ kind: 'polyline', points: vertices, at: [t] });
@@ -44,6 +74,15 @@ describe('polylinePath', () => {
 
   it('refuses fewer than two points and a path of zero length', () => {
     expect(() => polylinePath({ kind: 'polyline', points: [{ re: 0, im: 0 }], samples: 2 })).toThrow(RangeError);
-    expect(() => polylinePath({ kind: 'polyline', points: [{ re: 1, im: 1 }, { re: 1, im: 1 }], samples: 2 })).toThrow(RangeError);
+    expect(() =>
+      polylinePath({
+        kind: 'polyline',
+        points: [
+          { re: 1, im: 1 },
+          { re: 1, im: 1 },
+        ],
+        samples: 2,
+      }),
+    ).toThrow(RangeError);
   });
 });

@@ -26,26 +26,41 @@ describe('segmentPath', () => {
   });
 
   it('maps t to evenly spaced parameters i/(n − 1)', () => {
-    expect(segmentPath({ kind: 'segment', from: { re: 0, im: 0 }, to: { re: 1, im: 2 }, samples: 5 }).map((p) => p.t)).toEqual([0, 0.25, 0.5, 0.75, 1]);
+    expect(
+      segmentPath({ kind: 'segment', from: { re: 0, im: 0 }, to: { re: 1, im: 2 }, samples: 5 }).map((p) => p.t),
+    ).toEqual([0, 0.25, 0.5, 0.75, 1]);
   });
 
   it('stays between its ends and is monotone in t (seed 7301)', () => {
     fc.assert(
-      fc.property(fc.double({ min: -1e3, max: 1e3, noNaN: true }), fc.double({ min: -1e3, max: 1e3, noNaN: true }), fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: 2, maxLength: 20 }), (a, b, ts) => {
-        const sorted = [...ts].sort((x, y) => x - y);
-        const xs = segmentPath({ kind: 'segment', from: { re: a, im: 0 }, to: { re: b, im: 0 }, at: sorted }).map((p) => p.z.re);
-        const lo = Math.min(a, b);
-        const hi = Math.max(a, b);
-        const inRange = xs.every((x) => x >= lo && x <= hi);
-        const monotone = xs.every((x, i) => i === 0 || (b >= a ? x >= (xs[i - 1] as number) : x <= (xs[i - 1] as number)));
-        return inRange && monotone;
-      }),
+      fc.property(
+        fc.double({ min: -1e3, max: 1e3, noNaN: true }),
+        fc.double({ min: -1e3, max: 1e3, noNaN: true }),
+        fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: 2, maxLength: 20 }),
+        (a, b, ts) => {
+          const sorted = [...ts].sort((x, y) => x - y);
+          const xs = segmentPath({ kind: 'segment', from: { re: a, im: 0 }, to: { re: b, im: 0 }, at: sorted }).map(
+            (p) => p.z.re,
+          );
+          const lo = Math.min(a, b);
+          const hi = Math.max(a, b);
+          const inRange = xs.every((x) => x >= lo && x <= hi);
+          const monotone = xs.every(
+            (x, i) => i === 0 || (b >= a ? x >= (xs[i - 1] as number) : x <= (xs[i - 1] as number)),
+          );
+          return inRange && monotone;
+        },
+      ),
       { seed: 7301, numRuns: 1000 },
     );
   });
 
   it('refuses a parameter outside [0, 1] and giving both samples and at', () => {
-    expect(() => segmentPath({ kind: 'segment', from: { re: 0, im: 0 }, to: { re: 1, im: 0 }, at: [1.5] })).toThrow(RangeError);
-    expect(() => segmentPath({ kind: 'segment', from: { re: 0, im: 0 }, to: { re: 1, im: 0 }, at: [0.5], samples: 3 } as never)).toThrow(RangeError);
+    expect(() => segmentPath({ kind: 'segment', from: { re: 0, im: 0 }, to: { re: 1, im: 0 }, at: [1.5] })).toThrow(
+      RangeError,
+    );
+    expect(() =>
+      segmentPath({ kind: 'segment', from: { re: 0, im: 0 }, to: { re: 1, im: 0 }, at: [0.5], samples: 3 } as never),
+    ).toThrow(RangeError);
   });
 });

@@ -31,7 +31,12 @@ describe('straddlePath', () => {
 
   it('straddles a cut on the imaginary axis with ±0 in the real part, labelled right and left', () => {
     // asin's cuts lie on the real axis; atan's lie on the imaginary axis beyond ±i (ISO/IEC 9899:2011 G.6.2.3 by conjugation from catanh).
-    const points = straddlePath({ kind: 'straddle', cut: { kind: 'ray', from: { re: 0, im: 1 }, through: { re: 0, im: 2 } }, along: ['0.5'], offsets: [1e-9] });
+    const points = straddlePath({
+      kind: 'straddle',
+      cut: { kind: 'ray', from: { re: 0, im: 1 }, through: { re: 0, im: 2 } },
+      along: ['0.5'],
+      offsets: [1e-9],
+    });
     expect(points.map((p) => `${p.label}: ${show(p.z.re)} ${show(p.z.im)}`)).toEqual([
       'left 1e-9: -1e-9 1.5',
       'on +0: +0 1.5',
@@ -41,7 +46,12 @@ describe('straddlePath', () => {
   });
 
   it('replaces an offset that rounds back onto an off-axis cut by the next double on that side', () => {
-    const points = straddlePath({ kind: 'straddle', cut: { kind: 'segment', from: { re: -1, im: 1 }, to: { re: 1, im: 1 } }, along: [0.5], offsets: ['1e-300'] });
+    const points = straddlePath({
+      kind: 'straddle',
+      cut: { kind: 'segment', from: { re: -1, im: 1 }, to: { re: 1, im: 1 } },
+      along: [0.5],
+      offsets: ['1e-300'],
+    });
     // The midpoint of −1 … 1 is reached from the left, so its real part is −0 (lerp-component.ts).
     expect(points.map((p) => [p.label, p.z.re, p.z.im])).toEqual([
       ['below 1e-300 (nearest double)', -0, nextDouble(1, -1)],
@@ -51,14 +61,24 @@ describe('straddlePath', () => {
   });
 
   it('takes t as the fraction along a cut segment and of the sampled distances along a ray', () => {
-    const seg = straddlePath({ kind: 'straddle', cut: { kind: 'segment', from: { re: 1, im: 0 }, to: { re: 3, im: 0 } }, along: [0, 0.5, 1], offsets: [1e-3] });
+    const seg = straddlePath({
+      kind: 'straddle',
+      cut: { kind: 'segment', from: { re: 1, im: 0 }, to: { re: 3, im: 0 } },
+      along: [0, 0.5, 1],
+      offsets: [1e-3],
+    });
     expect([...new Set(seg.map((p) => `${p.t}@${p.z.re}`))]).toEqual(['0@1', '0.5@2', '1@3']);
     const ray = straddlePath({ kind: 'straddle', cut: negativeRealAxis, along: [1, 2, 5], offsets: [1e-3] });
     expect([...new Set(ray.map((p) => `${p.t}@${p.z.re}`))]).toEqual(['0@-1', '0.25@-2', '1@-5']);
   });
 
   it('labels the sides of an oblique cut left and right as seen walking from its start', () => {
-    const points = straddlePath({ kind: 'straddle', cut: { kind: 'segment', from: { re: 0, im: 0 }, to: { re: 1, im: 1 } }, along: [0.5], offsets: [0.25] });
+    const points = straddlePath({
+      kind: 'straddle',
+      cut: { kind: 'segment', from: { re: 0, im: 0 }, to: { re: 1, im: 1 } },
+      along: [0.5],
+      offsets: [0.25],
+    });
     const left = points.find((p) => p.label === 'left 0.25');
     const right = points.find((p) => p.label === 'right 0.25');
     // Left of the direction (1, 1) is where im − re > 0.
@@ -74,7 +94,12 @@ describe('straddlePath', () => {
         fc.double({ min: -1e6, max: 1e6, noNaN: true }),
         fc.array(fc.double({ min: 5e-324, max: 1, noNaN: true }), { minLength: 1, maxLength: 6 }),
         (height, start, offsets) => {
-          const points = straddlePath({ kind: 'straddle', cut: { kind: 'ray', from: { re: start, im: height }, through: { re: start - 1, im: height } }, along: [0, 3], offsets });
+          const points = straddlePath({
+            kind: 'straddle',
+            cut: { kind: 'ray', from: { re: start, im: height }, through: { re: start - 1, im: height } },
+            along: [0, 3],
+            offsets,
+          });
           return points.every((p) => {
             const side = p.label?.split(' ')[0];
             if (side === 'above') return p.z.im > height;
@@ -88,8 +113,22 @@ describe('straddlePath', () => {
   });
 
   it('refuses a degenerate cut, a non-positive offset and a position off the segment', () => {
-    expect(() => straddlePath({ kind: 'straddle', cut: { kind: 'segment', from: { re: 1, im: 0 }, to: { re: 1, im: 0 } }, along: [0] })).toThrow(RangeError);
-    expect(() => straddlePath({ kind: 'straddle', cut: negativeRealAxis, along: [1], offsets: [0] })).toThrow(RangeError);
-    expect(() => straddlePath({ kind: 'straddle', cut: { kind: 'segment', from: { re: 1, im: 0 }, to: { re: 2, im: 0 } }, along: [2] })).toThrow(RangeError);
+    expect(() =>
+      straddlePath({
+        kind: 'straddle',
+        cut: { kind: 'segment', from: { re: 1, im: 0 }, to: { re: 1, im: 0 } },
+        along: [0],
+      }),
+    ).toThrow(RangeError);
+    expect(() => straddlePath({ kind: 'straddle', cut: negativeRealAxis, along: [1], offsets: [0] })).toThrow(
+      RangeError,
+    );
+    expect(() =>
+      straddlePath({
+        kind: 'straddle',
+        cut: { kind: 'segment', from: { re: 1, im: 0 }, to: { re: 2, im: 0 } },
+        along: [2],
+      }),
+    ).toThrow(RangeError);
   });
 });

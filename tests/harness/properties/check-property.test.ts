@@ -13,15 +13,27 @@ const check = (input: Record<string, unknown>): PropertyCheck => propertyCheckSc
 const NEAR_CUTS = { kind: 'near-cuts', distance: '1e-6' };
 const DISC = { kind: 'disc', center: { re: '0', im: '0' }, radius: '4' };
 
-async function run(subject: string, convention: Convention, input: Record<string, unknown>, target: Target): Promise<PropertyOutcome> {
+async function run(
+  subject: string,
+  convention: Convention,
+  input: Record<string, unknown>,
+  target: Target,
+): Promise<PropertyOutcome> {
   const expr = parseSubject(subject);
-  return checkProperty(check(input), { text: subject, expr, cuts: subjectCuts(expr, { kind: 'principal' }), convention, tolerance: { ulps: 16 } }, target);
+  return checkProperty(
+    check(input),
+    { text: subject, expr, cuts: subjectCuts(expr, { kind: 'principal' }), convention, tolerance: { ulps: 16 } },
+    target,
+  );
 }
 
 /** The reference's own values hold the law under both conventions (its failure message is the whole outcome: title, seed, path). */
 async function expectHeldOnTheReference(subject: string, input: Record<string, unknown>): Promise<void> {
   for (const convention of ['signed-zero', 'counter-clockwise'] as const) {
-    expect(await run(subject, convention, input, referenceTarget(convention))).toMatchObject({ kind: 'held', title: expect.stringContaining(convention) });
+    expect(await run(subject, convention, input, referenceTarget(convention))).toMatchObject({
+      kind: 'held',
+      title: expect.stringContaining(convention),
+    });
   }
 }
 
@@ -36,8 +48,10 @@ const isNegativeZero = (x: number) => Object.is(x, -0);
 
 // Mutants: each is a deliberately wrong function a library could plausibly ship.
 /** Ignores the sign of a zero imaginary part, as a library without signed-zero support does. */
-const ignoreZeroSigns = (op: string) => ([z]: ComplexPair[], ref: (op: string, args: ComplexPair[]) => ComplexPair) =>
-  ref(op, [[z![0] === 0 ? 0 : z![0], z![1] === 0 ? 0 : z![1]]]);
+const ignoreZeroSigns =
+  (op: string) =>
+  ([z]: ComplexPair[], ref: (op: string, args: ComplexPair[]) => ComplexPair) =>
+    ref(op, [[z![0] === 0 ? 0 : z![0], z![1] === 0 ? 0 : z![1]]]);
 /** The argument from atan(y/x) instead of atan2(y, x): wrong by π in the left half-plane. */
 const naiveArg = ([x, y]: ComplexPair) => Math.atan(y / x);
 const naiveSqrt = ([z]: ComplexPair[]): ComplexPair => {
@@ -56,7 +70,12 @@ describe('checkProperty', () => {
   describe('conjugate-symmetry: f(conj z) = conj f(z)', () => {
     // ISO/IEC 9899:2011 G.6 para 3 (from memory): conjugate symmetry, zero signs included, under Annex G.
     it('holds for the reference sqrt near its cut under signed-zero, seed 1330520191', async () => {
-      const o = await run('sqrt(z)', 'signed-zero', { law: 'conjugate-symmetry', region: NEAR_CUTS, runs: 300, seed: 1330520191 }, referenceTarget('signed-zero'));
+      const o = await run(
+        'sqrt(z)',
+        'signed-zero',
+        { law: 'conjugate-symmetry', region: NEAR_CUTS, runs: 300, seed: 1330520191 },
+        referenceTarget('signed-zero'),
+      );
       expect(o).toMatchObject({ kind: 'held' });
       expect(o.title).toContain('f(conj z) = conj f(z)');
       expect(o.title).toContain('seed 1330520191');
@@ -64,7 +83,12 @@ describe('checkProperty', () => {
 
     it('fails for a sqrt that ignores zero signs under signed-zero, shrinking to a point on the cut, seed 1330520191', async () => {
       const mutant = referenceTarget('signed-zero', { sqrt: ignoreZeroSigns('sqrt') }, 'mutant/ignores-zero-signs');
-      const o = await run('sqrt(z)', 'signed-zero', { law: 'conjugate-symmetry', region: NEAR_CUTS, runs: 300, seed: 1330520191 }, mutant);
+      const o = await run(
+        'sqrt(z)',
+        'signed-zero',
+        { law: 'conjugate-symmetry', region: NEAR_CUTS, runs: 300, seed: 1330520191 },
+        mutant,
+      );
       const [re, im] = point(o);
       // The mutant differs from Annex G only where a zero imaginary part meets the cut (−∞, 0].
       expect(re < 0 && im === 0).toBe(true);
@@ -75,13 +99,23 @@ describe('checkProperty', () => {
     it('holds for a sqrt that ignores zero signs under counter-clockwise, where the law says nothing on the cut, seed 1573653495', async () => {
       // Kahan 1987: zero signs carry no meaning; points with a zero part are excluded, and the rest are off the cut.
       const mutant = referenceTarget('signed-zero', { sqrt: ignoreZeroSigns('sqrt') });
-      const o = await run('sqrt(z)', 'counter-clockwise', { law: 'conjugate-symmetry', region: NEAR_CUTS, runs: 300, seed: 1573653495 }, mutant);
+      const o = await run(
+        'sqrt(z)',
+        'counter-clockwise',
+        { law: 'conjugate-symmetry', region: NEAR_CUTS, runs: 300, seed: 1573653495 },
+        mutant,
+      );
       expect(o).toMatchObject({ kind: 'held' });
       expect(o.kind === 'held' && o.excluded).toBeGreaterThan(0);
     });
 
     it('is not checked for a subject with a non-real constant, since (conj z)^w = conj(z^conj(w))', async () => {
-      const o = await run('pow(z, 0.5 + 2i)', 'signed-zero', { law: 'conjugate-symmetry', region: NEAR_CUTS, runs: 10, seed: 1 }, referenceTarget('signed-zero'));
+      const o = await run(
+        'pow(z, 0.5 + 2i)',
+        'signed-zero',
+        { law: 'conjugate-symmetry', region: NEAR_CUTS, runs: 10, seed: 1 },
+        referenceTarget('signed-zero'),
+      );
       expect(o).toMatchObject({ kind: 'not-checked', reason: expect.stringContaining('non-real constant') });
     });
   });
@@ -99,22 +133,38 @@ describe('checkProperty', () => {
           return z![0] < 0 ? [Math.PI - re, -im] : [re, im];
         },
       });
-      const o = await run('asin(z)', 'signed-zero', { law: 'odd-symmetry', region: DISC, runs: 300, seed: 735059753 }, mutant);
+      const o = await run(
+        'asin(z)',
+        'signed-zero',
+        { law: 'odd-symmetry', region: DISC, runs: 300, seed: 735059753 },
+        mutant,
+      );
       expect(o).toMatchObject({ kind: 'failed' });
     });
   });
 
   describe('even-symmetry: f(-z) = f(z)', () => {
     it('holds for sqrt(z^2 - 1) on the reference under signed-zero, seed 20261201', async () => {
-      const o = await run('sqrt(z^2 - 1)', 'signed-zero', { law: 'even-symmetry', region: DISC, runs: 200, seed: 20261201 }, referenceTarget('signed-zero'));
+      const o = await run(
+        'sqrt(z^2 - 1)',
+        'signed-zero',
+        { law: 'even-symmetry', region: DISC, runs: 200, seed: 20261201 },
+        referenceTarget('signed-zero'),
+      );
       expect(o).toMatchObject({ kind: 'held' });
     });
 
     it('fails when the library squares z as z*|z|, seed 20261201', async () => {
       const mutant = referenceTarget('signed-zero', {
-        pow: ([z, w], ref) => (w![0] === 2 && w![1] === 0 ? [z![0] * Math.hypot(...z!), z![1] * Math.hypot(...z!)] : ref('pow', [z!, w!])),
+        pow: ([z, w], ref) =>
+          w![0] === 2 && w![1] === 0 ? [z![0] * Math.hypot(...z!), z![1] * Math.hypot(...z!)] : ref('pow', [z!, w!]),
       });
-      const o = await run('sqrt(z^2 - 1)', 'signed-zero', { law: 'even-symmetry', region: DISC, runs: 200, seed: 20261201 }, mutant);
+      const o = await run(
+        'sqrt(z^2 - 1)',
+        'signed-zero',
+        { law: 'even-symmetry', region: DISC, runs: 200, seed: 20261201 },
+        mutant,
+      );
       expect(o).toMatchObject({ kind: 'failed' });
     });
   });
@@ -122,20 +172,40 @@ describe('checkProperty', () => {
   describe('root-power: f(z)^n = g(z)', () => {
     // Definition of the n-th root (DLMF 4.2(iv), from memory): every root raised to n returns g.
     it('holds for the reference sqrt, cbrt, nthroot(z, 5) and pow(z, 1/3) in a disc, seed 2136471502', async () => {
-      for (const [subject, power] of [['sqrt(z)', 2], ['cbrt(z)', 3], ['nthroot(z, 5)', 5], ['pow(z, 1/3)', 3]] as const) {
-        const o = await run(subject, 'signed-zero', { law: 'root-power', power, region: DISC, runs: 200, seed: 2136471502 }, referenceTarget('signed-zero'));
+      for (const [subject, power] of [
+        ['sqrt(z)', 2],
+        ['cbrt(z)', 3],
+        ['nthroot(z, 5)', 5],
+        ['pow(z, 1/3)', 3],
+      ] as const) {
+        const o = await run(
+          subject,
+          'signed-zero',
+          { law: 'root-power', power, region: DISC, runs: 200, seed: 2136471502 },
+          referenceTarget('signed-zero'),
+        );
         expect({ subject, outcome: o.kind }).toEqual({ subject, outcome: 'held' });
       }
     });
 
     it('fails for a sqrt whose half-angle comes from atan(y/x), with a counterexample in the left half-plane, seed 2136471502', async () => {
-      const o = await run('sqrt(z)', 'signed-zero', { law: 'root-power', power: 2, region: DISC, runs: 300, seed: 2136471502 }, referenceTarget('signed-zero', { sqrt: naiveSqrt }));
+      const o = await run(
+        'sqrt(z)',
+        'signed-zero',
+        { law: 'root-power', power: 2, region: DISC, runs: 300, seed: 2136471502 },
+        referenceTarget('signed-zero', { sqrt: naiveSqrt }),
+      );
       // atan(y/x) and atan2(y, x) differ by ±π exactly when x < 0; then the "root" squares to −z.
       expect(point(o)[0]).toBeLessThan(0);
     });
 
     it('is not checked when the power does not match the root', async () => {
-      const o = await run('sqrt(z)', 'signed-zero', { law: 'root-power', power: 3, region: DISC, runs: 10, seed: 1 }, referenceTarget('signed-zero'));
+      const o = await run(
+        'sqrt(z)',
+        'signed-zero',
+        { law: 'root-power', power: 3, region: DISC, runs: 10, seed: 1 },
+        referenceTarget('signed-zero'),
+      );
       expect(o).toMatchObject({ kind: 'not-checked', reason: expect.stringContaining('degree 2') });
     });
   });
@@ -146,7 +216,12 @@ describe('checkProperty', () => {
     });
 
     it('fails for a log whose imaginary part is atan(y/x), with a counterexample in the left half-plane, seed 849994939', async () => {
-      const o = await run('log(z)', 'signed-zero', { law: 'exp-log', region: DISC, runs: 300, seed: 849994939 }, referenceTarget('signed-zero', { log: naiveLog }));
+      const o = await run(
+        'log(z)',
+        'signed-zero',
+        { law: 'exp-log', region: DISC, runs: 300, seed: 849994939 },
+        referenceTarget('signed-zero', { log: naiveLog }),
+      );
       expect(point(o)[0]).toBeLessThan(0);
     });
   });
@@ -158,14 +233,24 @@ describe('checkProperty', () => {
     });
 
     it('fails for a log on the branch 0 <= Im < 2pi, with a counterexample below the real axis, seed 531763507', async () => {
-      const o = await run('log(z)', 'signed-zero', { law: 'range', region: NEAR_CUTS, runs: 300, seed: 531763507 }, referenceTarget('signed-zero', { log: logFromZeroToTwoPi }));
+      const o = await run(
+        'log(z)',
+        'signed-zero',
+        { law: 'range', region: NEAR_CUTS, runs: 300, seed: 531763507 },
+        referenceTarget('signed-zero', { log: logFromZeroToTwoPi }),
+      );
       const [, im] = point(o);
       expect(im < 0 || isNegativeZero(im)).toBe(true);
     });
 
     it('fails under counter-clockwise for an Annex G log, at a point on the cut with a -0 imaginary part, seed 531763507', async () => {
       // Annex G gives Log(x − 0i) = ln|x| − iπ; Kahan's rule leaves −π out of the range on the cut.
-      const o = await run('log(z)', 'counter-clockwise', { law: 'range', region: NEAR_CUTS, runs: 300, seed: 531763507 }, referenceTarget('signed-zero'));
+      const o = await run(
+        'log(z)',
+        'counter-clockwise',
+        { law: 'range', region: NEAR_CUTS, runs: 300, seed: 531763507 },
+        referenceTarget('signed-zero'),
+      );
       const [re, im] = point(o);
       expect(re < 0 && isNegativeZero(im)).toBe(true);
     });
@@ -178,12 +263,22 @@ describe('checkProperty', () => {
     });
 
     it('holds for the reference log in a disc, seed 77002', async () => {
-      const o = await run('log(z)', 'signed-zero', { law: 'unwinding', region: DISC, runs: 300, seed: 77002 }, referenceTarget('signed-zero'));
+      const o = await run(
+        'log(z)',
+        'signed-zero',
+        { law: 'unwinding', region: DISC, runs: 300, seed: 77002 },
+        referenceTarget('signed-zero'),
+      );
       expect(o).toMatchObject({ kind: 'held' });
     });
 
     it('fails for a log on the branch 0 <= Im < 2pi and keeps both points of the shrunk counterexample, seed 77002', async () => {
-      const o = await run('log(z)', 'signed-zero', { law: 'unwinding', region: DISC, runs: 300, seed: 77002 }, referenceTarget('signed-zero', { log: logFromZeroToTwoPi }));
+      const o = await run(
+        'log(z)',
+        'signed-zero',
+        { law: 'unwinding', region: DISC, runs: 300, seed: 77002 },
+        referenceTarget('signed-zero', { log: logFromZeroToTwoPi }),
+      );
       expect(o.kind === 'failed' && o.counterexample).toHaveLength(2);
     });
   });
@@ -192,29 +287,49 @@ describe('checkProperty', () => {
     it('gives the same shrunk counterexample and path for the same pinned seed', async () => {
       const mutant = referenceTarget('signed-zero', { log: naiveLog });
       const input = { law: 'exp-log', region: DISC, runs: 300, seed: 4242 };
-      const [a, b] = [await run('log(z)', 'signed-zero', input, mutant), await run('log(z)', 'signed-zero', input, mutant)];
+      const [a, b] = [
+        await run('log(z)', 'signed-zero', input, mutant),
+        await run('log(z)', 'signed-zero', input, mutant),
+      ];
       expect(a.kind).toBe('failed');
       expect(b).toEqual(a);
     });
 
     it('says a law does not apply rather than passing it', async () => {
-      const o = await run('sqrt(z)', 'signed-zero', { law: 'exp-log', region: DISC, runs: 10, seed: 1 }, referenceTarget('signed-zero'));
+      const o = await run(
+        'sqrt(z)',
+        'signed-zero',
+        { law: 'exp-log', region: DISC, runs: 10, seed: 1 },
+        referenceTarget('signed-zero'),
+      );
       expect(o.kind).toBe('not-checked');
     });
 
     it('says near-cuts cannot be sampled for a principal subject whose cuts are preimages', async () => {
-      const o = await run('sqrt(z^2 - 1)', 'signed-zero', { law: 'conjugate-symmetry', region: NEAR_CUTS, runs: 10, seed: 1 }, referenceTarget('signed-zero'));
+      const o = await run(
+        'sqrt(z^2 - 1)',
+        'signed-zero',
+        { law: 'conjugate-symmetry', region: NEAR_CUTS, runs: 10, seed: 1 },
+        referenceTarget('signed-zero'),
+      );
       expect(o).toMatchObject({ kind: 'not-checked', reason: expect.stringContaining('not known') });
     });
 
     it('records a target that throws as a failure with the thrown message, shrunk like any other, seed 5', async () => {
-      const throwing: Target = { ...referenceTarget('signed-zero'), evaluate: async () => Promise.reject(new Error('adapter crashed')) };
+      const throwing: Target = {
+        ...referenceTarget('signed-zero'),
+        evaluate: async () => Promise.reject(new Error('adapter crashed')),
+      };
       const o = await run('sqrt(z)', 'signed-zero', { law: 'range', region: DISC, runs: 20, seed: 5 }, throwing);
       expect(o).toMatchObject({ kind: 'failed', reason: 'the check threw: adapter crashed', seed: 5 });
     });
 
     it('says which operation a target lacks', async () => {
-      const lacking: Target = { ...referenceTarget('signed-zero'), name: 'no-cbrt', supports: async (op) => op !== 'cbrt' };
+      const lacking: Target = {
+        ...referenceTarget('signed-zero'),
+        name: 'no-cbrt',
+        supports: async (op) => op !== 'cbrt',
+      };
       const o = await run('cbrt(z)', 'signed-zero', { law: 'range', region: DISC, runs: 10, seed: 1 }, lacking);
       expect(o).toMatchObject({ kind: 'not-checked', reason: 'no-cbrt has no cbrt' });
     });

@@ -43,7 +43,9 @@ function onCut(ray: Ray, d: number, negative: boolean, convention: 'signed-zero'
   const zero = negative ? -0 : 0;
   const x = ray.end[0] + d * ray.direction[0];
   const y = ray.end[1] + d * ray.direction[1];
-  return ray.direction[1] === 0 ? referenceValue(ray.fn, x, zero, convention) : referenceValue(ray.fn, zero, y, convention);
+  return ray.direction[1] === 0
+    ? referenceValue(ray.fn, x, zero, convention)
+    : referenceValue(ray.fn, zero, y, convention);
 }
 
 describe('values on branch cuts', () => {
@@ -94,12 +96,15 @@ describe('values on branch cuts', () => {
     ['asech', -2, 0, 'lower'],
     ['acsch', 0, 0.5, 'left'],
     ['acsch', 0, -0.5, 'right'],
-  ] as const)('takes %s at %d + %di under counter-clockwise from the %s side, as its file documents', (fn, x, y, side) => {
-    const on = referenceValue(fn, x, y, 'counter-clockwise');
-    const step = { upper: [0, EPS], lower: [0, -EPS], left: [-EPS, 0], right: [EPS, 0] }[side];
-    const near = referenceValue(fn, x + (step[0] as number), y + (step[1] as number));
-    expect(close(on.re, near.re, 30) && close(on.im, near.im, 30)).toBe(true);
-  });
+  ] as const)(
+    'takes %s at %d + %di under counter-clockwise from the %s side, as its file documents',
+    (fn, x, y, side) => {
+      const on = referenceValue(fn, x, y, 'counter-clockwise');
+      const step = { upper: [0, EPS], lower: [0, -EPS], left: [-EPS, 0], right: [EPS, 0] }[side];
+      const near = referenceValue(fn, x + (step[0] as number), y + (step[1] as number));
+      expect(close(on.re, near.re, 30) && close(on.im, near.im, 30)).toBe(true);
+    },
+  );
 
   it('returns −2i for sqrt(−4 − 0i) under signed-zero and 2i under counter-clockwise', () => {
     expect(referenceValue('sqrt', -4, -0).double).toEqual([0, -2]);

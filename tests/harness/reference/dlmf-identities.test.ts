@@ -15,20 +15,40 @@ const HALF_PI = PI.div(2);
 const part = fc.double({ min: -4, max: 4, noNaN: true }).filter((v) => Math.abs(v) > 1e-3);
 const offAxis = fc.tuple(part, part);
 
-const CONJUGATE_SYMMETRIC = ['sqrt', 'exp', 'log', 'asin', 'acos', 'atan', 'asinh', 'acosh', 'atanh', 'acot', 'asec', 'acsc', 'acoth', 'asech', 'acsch', 'cbrt'];
+const CONJUGATE_SYMMETRIC = [
+  'sqrt',
+  'exp',
+  'log',
+  'asin',
+  'acos',
+  'atan',
+  'asinh',
+  'acosh',
+  'atanh',
+  'acot',
+  'asec',
+  'acsc',
+  'acoth',
+  'asech',
+  'acsch',
+  'cbrt',
+];
 const ODD = ['asin', 'atan', 'asinh', 'atanh', 'acot', 'acsc', 'acoth', 'acsch'];
 
 describe('DLMF identities of the principal branches', () => {
-  it.each(CONJUGATE_SYMMETRIC.map((fn) => [fn]))('satisfies %s(conj z) = conj %s(z) off the cuts (DLMF 4.2.4, 4.23 and 4.37 symmetry)', (fn) => {
-    fc.assert(
-      fc.property(offAxis, ([x, y]) => {
-        const a = referenceValue(fn, x, y);
-        const b = referenceValue(fn, x, -y);
-        return close(a.re, b.re) && close(a.im, b.im.neg());
-      }),
-      { seed: SEED, numRuns: RUNS },
-    );
-  });
+  it.each(CONJUGATE_SYMMETRIC.map((fn) => [fn]))(
+    'satisfies %s(conj z) = conj %s(z) off the cuts (DLMF 4.2.4, 4.23 and 4.37 symmetry)',
+    (fn) => {
+      fc.assert(
+        fc.property(offAxis, ([x, y]) => {
+          const a = referenceValue(fn, x, y);
+          const b = referenceValue(fn, x, -y);
+          return close(a.re, b.re) && close(a.im, b.im.neg());
+        }),
+        { seed: SEED, numRuns: RUNS },
+      );
+    },
+  );
 
   it.each(ODD.map((fn) => [fn]))('satisfies %s(−z) = −%s(z) (DLMF 4.23.10–12, 4.37.10–12)', (fn) => {
     fc.assert(
@@ -76,7 +96,12 @@ describe('DLMF identities of the principal branches', () => {
         const acos = referenceValue('acos', x, y);
         const asinh = referenceValue('asinh', x, y);
         const asinIz = referenceValue('asin', -y, x);
-        return close(acos.re, HALF_PI.minus(asin.re)) && close(acos.im, asin.im.neg()) && close(asinh.re, asinIz.im) && close(asinh.im, asinIz.re.neg());
+        return (
+          close(acos.re, HALF_PI.minus(asin.re)) &&
+          close(acos.im, asin.im.neg()) &&
+          close(asinh.re, asinIz.im) &&
+          close(asinh.im, asinIz.re.neg())
+        );
       }),
       { seed: SEED, numRuns: RUNS },
     );
@@ -92,7 +117,12 @@ describe('DLMF identities of the principal branches', () => {
         const square = [s.re.times(s.re).minus(s.im.times(s.im)), s.re.times(s.im).times(2)];
         const zx = exactDecimal(x);
         const zy = exactDecimal(y);
-        return close(back[0] as Decimal, zx) && close(back[1] as Decimal, zy) && close(square[0] as Decimal, zx) && close(square[1] as Decimal, zy);
+        return (
+          close(back[0] as Decimal, zx) &&
+          close(back[1] as Decimal, zy) &&
+          close(square[0] as Decimal, zx) &&
+          close(square[1] as Decimal, zy)
+        );
       }),
       { seed: SEED, numRuns: RUNS },
     );
@@ -103,7 +133,10 @@ describe('DLMF identities of the principal branches', () => {
       fc.property(offAxis, ([x, y]) => {
         const c = referenceValue('cbrt', x, y);
         const log = referenceValue('log', x, y);
-        return close(Decimal.atan2(c.im, c.re), log.im.div(3), 33) && close(c.re.pow(2).plus(c.im.pow(2)).ln().div(2), log.re.div(3), 33);
+        return (
+          close(Decimal.atan2(c.im, c.re), log.im.div(3), 33) &&
+          close(c.re.pow(2).plus(c.im.pow(2)).ln().div(2), log.re.div(3), 33)
+        );
       }),
       { seed: SEED, numRuns: RUNS },
     );

@@ -11,8 +11,15 @@ export function referenceValue(
   x: number,
   y: number,
   convention: Convention = 'signed-zero',
-  extra: { w?: { kind: 'rational'; value: import('../../../harness/reference/numbers/rational').Rational }; n?: number } = {},
+  extra: {
+    w?: { kind: 'rational'; value: import('../../../harness/reference/numbers/rational').Rational };
+    n?: number;
+  } = {},
 ): { re: Decimal; im: Decimal; double: [number, number] } {
   const r = principalValue({ fn, z: BigComplex.fromDoubles(x, y), convention, ...extra }, { double: true, digits: 40 });
-  return { re: new Decimal(r.approximation.re.toDecimal(40)), im: new Decimal(r.approximation.im.toDecimal(40)), double: r.double };
+  return {
+    re: new Decimal(r.approximation.re.toDecimal(40)),
+    im: new Decimal(r.approximation.im.toDecimal(40)),
+    double: r.double,
+  };
 }

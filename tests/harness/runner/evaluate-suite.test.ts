@@ -18,13 +18,19 @@ describe('evaluateSuite', () => {
   it('passes a correctly rounded Annex G library on every point of the sqrt and log demo suites', async () => {
     for (const id of ['sqrt-principal-sz', 'log-principal-sz', 'asin-principal-sz']) {
       const r = await evaluateSuite(loadDemoSuite(id), referenceTarget(), { cache });
-      expect({ id, status: r.status, counts: r.counts }).toEqual({ id, status: 'pass', counts: { pass: r.checked.points, fail: 0, error: 0, skipped: 0 } });
+      expect({ id, status: r.status, counts: r.counts }).toEqual({
+        id,
+        status: 'pass',
+        counts: { pass: r.checked.points, fail: 0, error: 0, skipped: 0 },
+      });
     }
   });
 
   it('calls an ignored −0 on the cut of sqrt a zero sign of the input, with the exact bits, both limits, the Annex G clause and a reproducer', async () => {
     // ISO/IEC 9899:2011 G.6.4.2: csqrt(x − 0i) = +0 − i√|x| for x < 0; this library computes at +0.
-    const ignoresMinusZero = referenceTarget('loses-minus-zero@1', (op, [z], v) => (op === 'sqrt' && Object.is(z![1], -0) ? [v[0], -v[1]] : v));
+    const ignoresMinusZero = referenceTarget('loses-minus-zero@1', (op, [z], v) =>
+      op === 'sqrt' && Object.is(z![1], -0) ? [v[0], -v[1]] : v,
+    );
     const r = await evaluateSuite(loadDemoSuite('sqrt-principal-sz'), ignoresMinusZero, { cache });
     expect(r.status).toBe('fail');
     const onCut = findings(r).find((f) => f.label === 'on -0' && f.z.re === '-1')!;
@@ -32,14 +38,22 @@ describe('evaluateSuite', () => {
     expect(onCut.zHex).toEqual({ re: '-0x1p+0', im: '-0x0p+0' });
     expect(onCut.expected).toEqual({ re: '0', im: '-1' });
     expect(onCut.actual).toEqual({ re: '0', im: '1' });
-    expect(onCut.limits).toEqual({ sides: ['from above (Im z = +0)', 'from below (Im z = −0)'], values: [{ re: '0', im: '1' }, { re: '0', im: '-1' }] });
+    expect(onCut.limits).toEqual({
+      sides: ['from above (Im z = +0)', 'from below (Im z = −0)'],
+      values: [
+        { re: '0', im: '1' },
+        { re: '0', im: '-1' },
+      ],
+    });
     expect(onCut.rule).toContain('G.6.4.2');
     expect(onCut.reproducer).toContain('sqrt');
     expect(r.byDiagnosis).toEqual({ 'zero-sign': r.counts.fail });
   });
 
   it('calls a right value with a zero part of the wrong sign a zero sign of the output', async () => {
-    const flipsZeroRe = referenceTarget('flips-output@1', (op, _args, v) => (op === 'sqrt' && v[0] === 0 ? [-v[0], v[1]] : v));
+    const flipsZeroRe = referenceTarget('flips-output@1', (op, _args, v) =>
+      op === 'sqrt' && v[0] === 0 ? [-v[0], v[1]] : v,
+    );
     const r = await evaluateSuite(loadDemoSuite('sqrt-principal-sz'), flipsZeroRe, { cache });
     const f = findings(r).find((x) => x.label === 'on +0' && x.z.re === '-1')!;
     expect(diagnosis(f)).toEqual({ kind: 'zero-sign', part: 're', of: 'output' });
@@ -55,24 +69,34 @@ describe('evaluateSuite', () => {
   });
 
   it('calls a cube root turned by e^{2πi/3} the sheet k = 1, and log + 2πi the sheet k = 1', async () => {
-    const rotated = referenceTarget('rotated@1', (op, _args, v) => (op === 'pow' ? [v[0] * ROTATE[0] - v[1] * ROTATE[1], v[0] * ROTATE[1] + v[1] * ROTATE[0]] : v));
+    const rotated = referenceTarget('rotated@1', (op, _args, v) =>
+      op === 'pow' ? [v[0] * ROTATE[0] - v[1] * ROTATE[1], v[0] * ROTATE[1] + v[1] * ROTATE[0]] : v,
+    );
     const r = await evaluateSuite(loadDemoSuite('pow-third-principal-sz'), rotated, { cache });
     expect(r.counts.pass).toBe(0);
     // Off the cut every value is on the sheet k = 1. Across the cut of a cube root the other
     // side's limit is itself the sheet k = ±1 away, so there the cut side (or the zero sign) is named.
     const off = findings(r).filter((f) => f.path !== 'straddle cut 1');
     expect(off.length).toBeGreaterThan(100);
-    expect(off.every((f) => diagnosis(f)?.kind === 'other-sheet' && (diagnosis(f) as { k: number }).k === 1)).toBe(true);
+    expect(off.every((f) => diagnosis(f)?.kind === 'other-sheet' && (diagnosis(f) as { k: number }).k === 1)).toBe(
+      true,
+    );
     const across = findings(r).filter((f) => f.path === 'straddle cut 1');
     expect(new Set(across.map((f) => diagnosis(f)?.kind))).toEqual(new Set(['other-sheet', 'cut-side', 'zero-sign']));
     const shifted = referenceTarget('shifted@1', (op, _args, v) => (op === 'log' ? [v[0], v[1] + 2 * Math.PI] : v));
     const log = await evaluateSuite(loadDemoSuite('log-principal-sz'), shifted, { cache });
-    expect(findings(log).filter((f) => f.path === 'wide circle').map(diagnosis)).toContainEqual({ kind: 'other-sheet', k: 1 });
+    expect(
+      findings(log)
+        .filter((f) => f.path === 'wide circle')
+        .map(diagnosis),
+    ).toContainEqual({ kind: 'other-sheet', k: 1 });
   });
 
   it('calls the points between a cut on the positive axis and the expected one a misplaced cut, with both jumps', async () => {
     // √z with arg z taken in [0, 2π): −(principal) below the real axis.
-    const cutOnPositiveAxis = referenceTarget('positive-cut@1', (op, [z], v) => (op === 'sqrt' && (z![1] < 0 || Object.is(z![1], -0)) ? [-v[0], -v[1]] : v));
+    const cutOnPositiveAxis = referenceTarget('positive-cut@1', (op, [z], v) =>
+      op === 'sqrt' && (z![1] < 0 || Object.is(z![1], -0)) ? [-v[0], -v[1]] : v,
+    );
     const r = await evaluateSuite(loadDemoSuite('sqrt-principal-sz'), cutOnPositiveAxis, { cache });
     const wide = r.paths.find((p) => p.name === 'wide circle')!;
     expect(wide.jumps!.expected).toHaveLength(1);
@@ -87,7 +111,19 @@ describe('evaluateSuite', () => {
 
   it('calls a value 1e-13 off inaccurate with its ulps, NaN not-finite, nonsense unexplained, and a throw an error', async () => {
     // A grid is not a continuous path, so no jump analysis relabels the nonsense values.
-    const suite = makeSuite({ subject: 'asin(z)', paths: [{ kind: 'grid', name: 'box', min: { re: '0.1', im: '0.5' }, max: { re: '0.9', im: '0.6' }, columns: 9, rows: 2 }] });
+    const suite = makeSuite({
+      subject: 'asin(z)',
+      paths: [
+        {
+          kind: 'grid',
+          name: 'box',
+          min: { re: '0.1', im: '0.5' },
+          max: { re: '0.9', im: '0.6' },
+          columns: 9,
+          rows: 2,
+        },
+      ],
+    });
     const wobble = (op: string, [z]: ComplexPair[], v: [number, number]): [number, number] => {
       if (op !== 'asin') return v;
       if (z![0] < 0.2) return [v[0] * (1 + 1e-13), v[1]];
@@ -136,7 +172,11 @@ describe('evaluateSuite', () => {
       tolerance: '4 ulps per part',
       paths: 3,
       points: 154,
-      properties: { listed: ['conjugate-symmetry', 'root-power', 'range'], run: false, note: 'property checks are not run by evaluateSuite' },
+      properties: {
+        listed: ['conjugate-symmetry', 'root-power', 'range'],
+        run: false,
+        note: 'property checks are not run by evaluateSuite',
+      },
     });
   });
 });

@@ -27,14 +27,25 @@ describe('output formats', () => {
           return v;
         }),
     };
-    result = await runPlan(buildPlan([loadDemoSuite('exp-principal-sz'), loadDemoSuite('log-principal-sz'), loadDemoSuite('sqrt-principal-sz')], [nasty]), { cache: new ReferenceCache(null) });
+    result = await runPlan(
+      buildPlan(
+        [loadDemoSuite('exp-principal-sz'), loadDemoSuite('log-principal-sz'), loadDemoSuite('sqrt-principal-sz')],
+        [nasty],
+      ),
+      { cache: new ReferenceCache(null) },
+    );
   });
 
   it('JUnit XML stays well-formed whatever the target says, and keeps the text', () => {
     const xml = formatJunit(result);
     expect(XMLValidator.validate(xml)).toBe(true);
     const doc = new XMLParser({ ignoreAttributes: false, attributeNamePrefix: '' }).parse(xml);
-    const [exp, log, sqrt] = doc.testsuites.testsuite as { name: string; failures: string; errors: string; testcase: { failure?: unknown; error?: { message: string; '#text': string } }[] }[];
+    const [exp, log, sqrt] = doc.testsuites.testsuite as {
+      name: string;
+      failures: string;
+      errors: string;
+      testcase: { failure?: unknown; error?: { message: string; '#text': string } }[];
+    }[];
     expect(exp!.name).toBe('exp-principal-sz@1 × oraclea<b>&"c\'[31m@1');
     expect(exp!.failures).toBe('1');
     expect(log!.errors).toBe('3');
@@ -48,7 +59,12 @@ describe('output formats', () => {
     const back = JSON.parse(text);
     expect(back.status).toBe('error');
     const notFinite = back.results[0].paths[0].findings[0];
-    expect(notFinite.outcome).toEqual({ kind: 'fail', diagnosis: { kind: 'not-finite' }, ulps: 'inf', relativeError: 'inf' });
+    expect(notFinite.outcome).toEqual({
+      kind: 'fail',
+      diagnosis: { kind: 'not-finite' },
+      ulps: 'inf',
+      relativeError: 'inf',
+    });
     expect(notFinite.actual.re).toBe('nan');
     expect(back.results[2]).toEqual(JSON.parse(JSON.stringify(result.results[2])));
   });

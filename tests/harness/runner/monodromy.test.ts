@@ -7,7 +7,22 @@ import { referenceTarget } from './support/reference-target';
 /** √z as the branch of z^(1/2) with f(1) = 1 and the cut (−∞, 0]; a unit circle around 0 has monodromy e^{iπ} = −1. */
 const suite = makeSuite({
   subject: 'sqrt(z)',
-  branch: { kind: 'regular', g: 'z', nu: '1/2', z0: { re: '1', im: '0' }, k: 0, cuts: [{ points: [{ re: '0', im: '0' }, { re: '-1', im: '0' }], to_infinity: true }] },
+  branch: {
+    kind: 'regular',
+    g: 'z',
+    nu: '1/2',
+    z0: { re: '1', im: '0' },
+    k: 0,
+    cuts: [
+      {
+        points: [
+          { re: '0', im: '0' },
+          { re: '-1', im: '0' },
+        ],
+        to_infinity: true,
+      },
+    ],
+  },
   tolerances: { values: { relative: 1e-14 }, monodromy: { relative: 1e-12 } },
   paths: [{ kind: 'circle', name: 'unit circle', center: { re: '0', im: '0' }, radius: '1', samples: 65 }],
 });
@@ -38,7 +53,9 @@ describe('monodromy along closed paths', () => {
 
   it('fails a library whose jump is no value of e^{2πiνk}, and says where it jumped', async () => {
     const turn: [number, number] = [Math.cos(Math.PI / 3), Math.sin(Math.PI / 3)];
-    const m = await monodromyOf((op, [z], v) => (op === 'sqrt' && below(z!) ? [v[0] * turn[0] - v[1] * turn[1], v[0] * turn[1] + v[1] * turn[0]] : v));
+    const m = await monodromyOf((op, [z], v) =>
+      op === 'sqrt' && below(z!) ? [v[0] * turn[0] - v[1] * turn[1], v[0] * turn[1] + v[1] * turn[0]] : v,
+    );
     expect(m.pass).toBe(false);
     expect(m.library).toBeNull();
     expect(m.note).toMatch(/jumps at t ≈ 0\.5\d* by a factor .* which is no e\^\{2πiνk\}/);

@@ -20,8 +20,16 @@ describe('the reference cache', () => {
 
   it('lets a repeated run compute no reference value, failures and their alternatives included', async () => {
     // A library that ignores −0 fails on the cut, so the second run also needs the alternatives (flipped zero, limits).
-    const lossy: TargetRef = { name: 'lossy@1', library: 'oracle', version: '1', settings: {}, open: () => referenceTarget('lossy@1', (op, [z], v) => (Object.is(z![1], -0) && op !== 'mul' ? [v[0], -v[1]] : v)) };
-    const plan = () => buildPlan([loadDemoSuite('sqrt-principal-sz'), loadDemoSuite('sqrt-z2-minus-1-finite-cut')], [lossy]);
+    const lossy: TargetRef = {
+      name: 'lossy@1',
+      library: 'oracle',
+      version: '1',
+      settings: {},
+      open: () =>
+        referenceTarget('lossy@1', (op, [z], v) => (Object.is(z![1], -0) && op !== 'mul' ? [v[0], -v[1]] : v)),
+    };
+    const plan = () =>
+      buildPlan([loadDemoSuite('sqrt-principal-sz'), loadDemoSuite('sqrt-z2-minus-1-finite-cut')], [lossy]);
     const first = await runPlan(plan(), { cacheDir: dir });
     expect(first.counts.fail).toBeGreaterThan(0);
     expect(first.reference.computed).toBeGreaterThan(300);

@@ -33,20 +33,37 @@ describe('reproducers', () => {
     await Promise.all(opened.map((t) => t.close()));
   });
 
-  it.each(targets)('%s: pasted as printed, computes exactly the value the harness got, zero signs included', async (name) => {
-    const descriptor = discoverTargets().find((t) => t.name === name)!;
-    const target = descriptor.open();
-    opened.push(target);
-    for (const subject of SUBJECTS) {
-      const program = subjectProgram(parseSubject(subject));
-      const got = await evaluateProgram(program, target, Float64Array.from(POINTS.map((p) => p[0])), Float64Array.from(POINTS.map((p) => p[1])));
-      POINTS.forEach((z, i) => {
-        const code = reproducer(program, descriptor, z, subject);
-        const run = descriptor.library === 'cmath' ? spawnSync('/usr/bin/python3', ['-c', code], { encoding: 'utf8' }) : spawnSync(process.execPath, ['-e', code], { encoding: 'utf8', cwd: ROOT });
-        expect({ subject, z, stderr: run.stderr }).toEqual({ subject, z, stderr: '' });
-        const [re, im] = printed(descriptor.library, run.stdout);
-        expect({ subject, z, re: Object.is(re, got.re[i]), im: Object.is(im, got.im[i]) }).toEqual({ subject, z, re: true, im: true });
-      });
-    }
-  }, 60_000);
+  it.each(targets)(
+    '%s: pasted as printed, computes exactly the value the harness got, zero signs included',
+    async (name) => {
+      const descriptor = discoverTargets().find((t) => t.name === name)!;
+      const target = descriptor.open();
+      opened.push(target);
+      for (const subject of SUBJECTS) {
+        const program = subjectProgram(parseSubject(subject));
+        const got = await evaluateProgram(
+          program,
+          target,
+          Float64Array.from(POINTS.map((p) => p[0])),
+          Float64Array.from(POINTS.map((p) => p[1])),
+        );
+        POINTS.forEach((z, i) => {
+          const code = reproducer(program, descriptor, z, subject);
+          const run =
+            descriptor.library === 'cmath'
+              ? spawnSync('/usr/bin/python3', ['-c', code], { encoding: 'utf8' })
+              : spawnSync(process.execPath, ['-e', code], { encoding: 'utf8', cwd: ROOT });
+          expect({ subject, z, stderr: run.stderr }).toEqual({ subject, z, stderr: '' });
+          const [re, im] = printed(descriptor.library, run.stdout);
+          expect({ subject, z, re: Object.is(re, got.re[i]), im: Object.is(im, got.im[i]) }).toEqual({
+            subject,
+            z,
+            re: true,
+            im: true,
+          });
+        });
+      }
+    },
+    60_000,
+  );
 });

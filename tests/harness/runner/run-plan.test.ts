@@ -8,7 +8,13 @@ import type { TargetRef } from '../../../harness/runner/target-ref';
 import { loadDemoSuite } from './support/load-demo-suite';
 import { referenceTarget } from './support/reference-target';
 
-const oracle: TargetRef = { name: 'oracle@1', library: 'oracle', version: '1', settings: {}, open: () => referenceTarget() };
+const oracle: TargetRef = {
+  name: 'oracle@1',
+  library: 'oracle',
+  version: '1',
+  settings: {},
+  open: () => referenceTarget(),
+};
 const misbehaving = (opened: StdioTarget[]): TargetRef => ({
   name: 'misbehaving@1',
   library: 'misbehaving',
@@ -43,7 +49,9 @@ describe('runPlan', () => {
     expect(events[0]).toEqual({ type: 'plan', shards: 6, points: 308, suites: 2, targets: 1 });
     expect(events.filter((e) => e.type === 'shard-start')).toHaveLength(6);
     expect(events.filter((e) => e.type === 'shard-end')).toHaveLength(6);
-    const progress = events.filter((e): e is Extract<RunEvent, { type: 'progress' }> => e.type === 'progress').map((e) => e.done);
+    const progress = events
+      .filter((e): e is Extract<RunEvent, { type: 'progress' }> => e.type === 'progress')
+      .map((e) => e.done);
     expect(progress).toEqual([...progress].sort((a, b) => a - b));
     expect(progress[progress.length - 1]).toBe(308);
     expect(result.results.map((r) => [r.suite.id, r.paths.map((p) => p.name)])).toEqual([
@@ -77,7 +85,11 @@ describe('runPlan', () => {
 
   it('turns a hanging stdio target into errors at the shard time limit, kills it, and goes on with the next shard; a crash becomes errors too', async () => {
     const opened: StdioTarget[] = [];
-    const suites = [loadDemoSuite('sqrt-principal-sz'), loadDemoSuite('exp-principal-sz'), loadDemoSuite('log-principal-sz')];
+    const suites = [
+      loadDemoSuite('sqrt-principal-sz'),
+      loadDemoSuite('exp-principal-sz'),
+      loadDemoSuite('log-principal-sz'),
+    ];
     const started = Date.now();
     const result = await runPlan(buildPlan(suites, [misbehaving(opened)]), { cache, shardTimeLimitMs: 1500 });
     expect(Date.now() - started).toBeLessThan(15_000);
@@ -86,7 +98,10 @@ describe('runPlan', () => {
     expect(sqrt!.counts.error).toBe(sqrt!.checked.points);
     expect(sqrt!.errors[0]).toMatch(/did not finish within the shard time limit of 1500 ms/);
     expect(exp!.status).toBe('error');
-    expect(exp!.paths[0]!.findings[0]!.outcome).toMatchObject({ kind: 'error', message: expect.stringMatching(/program exited with code 3/) });
+    expect(exp!.paths[0]!.findings[0]!.outcome).toMatchObject({
+      kind: 'error',
+      message: expect.stringMatching(/program exited with code 3/),
+    });
     // The run went on: log was evaluated (and is wrong: the adapter answers zeros).
     expect(log!.counts.fail).toBeGreaterThan(0);
     expect(log!.counts.error).toBe(0);
@@ -110,12 +125,19 @@ describe('runPlan', () => {
     const suites = [loadDemoSuite('sqrt-principal-sz'), loadDemoSuite('log-principal-sz')];
     const inProcess = await runPlan(buildPlan(suites, [{ ...ref, worker: undefined }]), { cache, cacheDir: null });
     const started = Date.now();
-    const inWorkers = await runPlan(buildPlan(suites, [blocking, ref]), { cacheDir: null, workers: 2, shardTimeLimitMs: 4000 });
+    const inWorkers = await runPlan(buildPlan(suites, [blocking, ref]), {
+      cacheDir: null,
+      workers: 2,
+      shardTimeLimitMs: 4000,
+    });
     expect(Date.now() - started).toBeLessThan(40_000);
-    const byName = (r: typeof inWorkers, suite: string, target: string) => r.results.find((x) => x.suite.id === suite && x.target.name === target)!;
+    const byName = (r: typeof inWorkers, suite: string, target: string) =>
+      r.results.find((x) => x.suite.id === suite && x.target.name === target)!;
     for (const id of ['sqrt-principal-sz', 'log-principal-sz']) {
       expect(byName(inWorkers, id, complexJs.name).counts).toEqual(byName(inProcess, id, complexJs.name).counts);
-      expect(byName(inWorkers, id, complexJs.name).byDiagnosis).toEqual(byName(inProcess, id, complexJs.name).byDiagnosis);
+      expect(byName(inWorkers, id, complexJs.name).byDiagnosis).toEqual(
+        byName(inProcess, id, complexJs.name).byDiagnosis,
+      );
     }
     const blocked = byName(inWorkers, 'sqrt-principal-sz', 'blocking@1');
     expect(blocked.status).toBe('error');

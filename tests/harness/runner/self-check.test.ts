@@ -34,11 +34,20 @@ interface Caught {
 
 async function run(mutation: Mutation | null): Promise<RunResult> {
   const d = cmath!;
-  const ref: TargetRef = { name: d.name, library: d.library, version: d.version, settings: d.settings, open: () => (mutation ? mutantTarget(d.open(), mutation) : d.open()) };
+  const ref: TargetRef = {
+    name: d.name,
+    library: d.library,
+    version: d.version,
+    settings: d.settings,
+    open: () => (mutation ? mutantTarget(d.open(), mutation) : d.open()),
+  };
   return runPlan(buildPlan(suites, [ref]), { cache, maxFindings: 1_000_000 });
 }
 
-const failingPoints = (r: RunResult) => new Set(r.results.flatMap((x) => x.paths.flatMap((p) => p.findings.map((f) => `${x.suite.id}|${p.name}|${f.index}`))));
+const failingPoints = (r: RunResult) =>
+  new Set(
+    r.results.flatMap((x) => x.paths.flatMap((p) => p.findings.map((f) => `${x.suite.id}|${p.name}|${f.index}`))),
+  );
 
 let base: Set<string>;
 const caughtBy = new Map<Mutation, Caught[]>();
@@ -55,7 +64,15 @@ beforeAll(async () => {
         for (const f of p.findings) {
           if (base.has(`${x.suite.id}|${p.name}|${f.index}`) || f.outcome.kind !== 'fail') continue;
           const d = f.outcome.diagnosis;
-          caught.push({ suite: x.suite.id, convention, path: p.name, label: f.label, kind: d.kind, ...(d.kind === 'other-sheet' ? { k: d.k } : {}), ...(d.kind === 'inaccurate' ? { ulps: d.ulps } : {}) });
+          caught.push({
+            suite: x.suite.id,
+            convention,
+            path: p.name,
+            label: f.label,
+            kind: d.kind,
+            ...(d.kind === 'other-sheet' ? { k: d.k } : {}),
+            ...(d.kind === 'inaccurate' ? { ulps: d.ulps } : {}),
+          });
         }
       }
     }
@@ -63,7 +80,8 @@ beforeAll(async () => {
   }
 }, 600_000);
 
-const tally = (c: Caught[]) => c.reduce<Record<string, number>>((acc, x) => ({ ...acc, [x.kind]: (acc[x.kind] ?? 0) + 1 }), {});
+const tally = (c: Caught[]) =>
+  c.reduce<Record<string, number>>((acc, x) => ({ ...acc, [x.kind]: (acc[x.kind] ?? 0) + 1 }), {});
 
 (cmath ? describe : describe.skip)('self-check: planted faults against the demo catalogue', () => {
   it('flipping a zero sign of the input is caught as zero-sign under signed zeros, and as the wrong cut side under counter-clockwise continuity', () => {
@@ -79,7 +97,11 @@ const tally = (c: Caught[]) => c.reduce<Record<string, number>>((acc, x) => ({ .
   it('conjugating the result is caught, as the other side of the cut next to real-axis cuts and as a zero sign on them', () => {
     const c = caughtBy.get('conjugate')!;
     expect(c.length).toBeGreaterThan(1000);
-    const realAxisCut = c.filter((x) => ['sqrt-principal-sz', 'log-principal-sz', 'acosh-principal-sz', 'atanh-principal-sz'].includes(x.suite) && x.path.startsWith('straddle'));
+    const realAxisCut = c.filter(
+      (x) =>
+        ['sqrt-principal-sz', 'log-principal-sz', 'acosh-principal-sz', 'atanh-principal-sz'].includes(x.suite) &&
+        x.path.startsWith('straddle'),
+    );
     const off = realAxisCut.filter((x) => !x.label?.startsWith('on'));
     const on = realAxisCut.filter((x) => x.label?.startsWith('on'));
     expect(off.length).toBeGreaterThan(20);

@@ -6,7 +6,10 @@ import type { Suite } from '../../../shared/schemas/suite-schema';
 import { validateSuite } from '../../../shared/validate-suite';
 
 const load = (id: string): Suite => {
-  const checked = validateSuite(JSON.parse(readFileSync(path.join(__dirname, '..', '..', '..', 'suites', 'demo', `${id}.json`), 'utf8')), id);
+  const checked = validateSuite(
+    JSON.parse(readFileSync(path.join(__dirname, '..', '..', '..', 'suites', 'demo', `${id}.json`), 'utf8')),
+    id,
+  );
   if (!checked.ok) throw new Error(`${id} invalid`);
   return checked.suite;
 };
@@ -55,8 +58,12 @@ describe('checkReferenceTable', () => {
   });
 
   it('reports unreadable rows and missing columns', () => {
-    expect(checkReferenceTable(load('asin-principal-sz'), 'z_re,z_im,expected_re,expected_im\n1,two,0,0\n').invalid).toEqual([expect.objectContaining({ line: 2 })]);
-    expect(checkReferenceTable(load('asin-principal-sz'), 'a,b\n1,2\n').invalid).toEqual([{ line: 1, reason: 'missing columns: z_re, z_im, expected_re, expected_im' }]);
+    expect(
+      checkReferenceTable(load('asin-principal-sz'), 'z_re,z_im,expected_re,expected_im\n1,two,0,0\n').invalid,
+    ).toEqual([expect.objectContaining({ line: 2 })]);
+    expect(checkReferenceTable(load('asin-principal-sz'), 'a,b\n1,2\n').invalid).toEqual([
+      { line: 1, reason: 'missing columns: z_re, z_im, expected_re, expected_im' },
+    ]);
   });
 
   it('checks a regular branch by continuing it to each point', () => {

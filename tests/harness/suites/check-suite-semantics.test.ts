@@ -30,7 +30,21 @@ describe('checkSuiteSemantics', () => {
     // √(z²−1) has branch points ±1 (ν·m = ½ ∉ ℤ): a single ray from +1 leaves −1 uncut.
     const base = load('sqrt-z2-minus-1-finite-cut');
     if (base.branch.kind !== 'regular') throw new Error('expected a regular suite');
-    const suite: Suite = { ...base, branch: { ...base.branch, cuts: [{ points: [{ re: '1', im: '0' }, { re: '2', im: '0' }], to_infinity: true }] } };
+    const suite: Suite = {
+      ...base,
+      branch: {
+        ...base.branch,
+        cuts: [
+          {
+            points: [
+              { re: '1', im: '0' },
+              { re: '2', im: '0' },
+            ],
+            to_infinity: true,
+          },
+        ],
+      },
+    };
     const [issue] = checkSuiteSemantics(suite);
     expect(issue).toMatchObject({ suite: base.id, field: 'branch.cuts' });
     expect(issue!.rule).toMatch(/-1|−1/);
@@ -43,7 +57,27 @@ describe('checkSuiteSemantics', () => {
     if (base.branch.kind !== 'regular') throw new Error('expected a regular suite');
     const suite: Suite = {
       ...base,
-      branch: { ...base.branch, g: 'z^3 - z', nu: '1/3', cuts: [{ points: [{ re: '0', im: '0' }, { re: '1', im: '0' }], to_infinity: false }, { points: [{ re: '-1', im: '0' }, { re: '-2', im: '0' }], to_infinity: true }] },
+      branch: {
+        ...base.branch,
+        g: 'z^3 - z',
+        nu: '1/3',
+        cuts: [
+          {
+            points: [
+              { re: '0', im: '0' },
+              { re: '1', im: '0' },
+            ],
+            to_infinity: false,
+          },
+          {
+            points: [
+              { re: '-1', im: '0' },
+              { re: '-2', im: '0' },
+            ],
+            to_infinity: true,
+          },
+        ],
+      },
     };
     const issues = checkSuiteSemantics(suite);
     expect(issues).toHaveLength(1);

@@ -6,8 +6,18 @@ const find = (id: string) => JSON.parse(JSON.stringify(demoCatalogue().find((s) 
 describe('suitePicture', () => {
   it('draws a regular branch with its layout and the branch points ±1 of √(z²−1)', () => {
     const picture = suitePicture(find('sqrt-z2-minus-1-finite-cut'));
-    expect(picture.cuts).toEqual([{ points: [{ re: -1, im: 0 }, { re: 1, im: 0 }], toInfinity: false }]);
-    expect(picture.branchPoints.map((p) => [Math.round(p.re * 1e9) / 1e9, Math.round(p.im * 1e9) / 1e9]).sort()).toEqual([
+    expect(picture.cuts).toEqual([
+      {
+        points: [
+          { re: -1, im: 0 },
+          { re: 1, im: 0 },
+        ],
+        toInfinity: false,
+      },
+    ]);
+    expect(
+      picture.branchPoints.map((p) => [Math.round(p.re * 1e9) / 1e9, Math.round(p.im * 1e9) / 1e9]).sort(),
+    ).toEqual([
       [-1, 0],
       [1, 0],
     ]);
@@ -28,7 +38,15 @@ describe('suitePicture', () => {
 
   it('draws the catalogue cut of a principal root and says when a composite subject has cuts it does not compute', () => {
     const sqrt = suitePicture(find('sqrt-principal-sz'));
-    expect(sqrt.cuts).toEqual([{ points: [{ re: 0, im: 0 }, { re: -1, im: 0 }], toInfinity: true }]);
+    expect(sqrt.cuts).toEqual([
+      {
+        points: [
+          { re: 0, im: 0 },
+          { re: -1, im: 0 },
+        ],
+        toInfinity: true,
+      },
+    ]);
     expect(sqrt.branchPoints).toEqual([{ re: 0, im: 0 }]);
     const composite = find('sqrt-principal-sz');
     composite.subject = 'sqrt(z^2 - 1)';

@@ -3,7 +3,11 @@ import type { ComplexPair } from '../../../harness/adapters/complex-pair';
 import type { Target } from '../../../harness/adapters/target';
 
 /** A test target answering each call with `call` (a throw becomes that call's error), supporting exactly `ops`. */
-export function functionTarget(name: string, ops: readonly string[], call: (op: string, args: ComplexPair[]) => ComplexPair): Target {
+export function functionTarget(
+  name: string,
+  ops: readonly string[],
+  call: (op: string, args: ComplexPair[]) => ComplexPair,
+): Target {
   return {
     name,
     library: name,

@@ -5,8 +5,29 @@ import { functionTarget } from './function-target';
 import { referenceCall } from './reference-call';
 
 const REFERENCE_OPS = [
-  'sqrt', 'cbrt', 'nthroot', 'pow', 'exp', 'log', 'asin', 'acos', 'atan', 'asinh', 'acosh', 'atanh',
-  'acot', 'asec', 'acsc', 'acoth', 'asech', 'acsch', 'add', 'sub', 'mul', 'div', 'neg',
+  'sqrt',
+  'cbrt',
+  'nthroot',
+  'pow',
+  'exp',
+  'log',
+  'asin',
+  'acos',
+  'atan',
+  'asinh',
+  'acosh',
+  'atanh',
+  'acot',
+  'asec',
+  'acsc',
+  'acoth',
+  'asech',
+  'acsch',
+  'add',
+  'sub',
+  'mul',
+  'div',
+  'neg',
 ] as const;
 
 /**
@@ -15,9 +36,14 @@ const REFERENCE_OPS = [
  */
 export function referenceTarget(
   convention: Convention,
-  replace: Record<string, (args: ComplexPair[], reference: (op: string, args: ComplexPair[]) => ComplexPair) => ComplexPair> = {},
+  replace: Record<
+    string,
+    (args: ComplexPair[], reference: (op: string, args: ComplexPair[]) => ComplexPair) => ComplexPair
+  > = {},
   name = `reference/${convention}`,
 ): Target {
   const reference = (op: string, args: ComplexPair[]) => referenceCall(op, args, convention);
-  return functionTarget(name, REFERENCE_OPS, (op, args) => (replace[op] ? replace[op]!(args, reference) : reference(op, args)));
+  return functionTarget(name, REFERENCE_OPS, (op, args) =>
+    replace[op] ? replace[op]!(args, reference) : reference(op, args),
+  );
 }

@@ -9,7 +9,26 @@ const files = readdirSync(DIR).filter((f) => f.endsWith('.json'));
 const onDisk = files.map((f) => ({ file: f, data: JSON.parse(readFileSync(path.join(DIR, f), 'utf8')) as unknown }));
 
 /** Every function of the catalogue (DESIGN.md §2); each must appear under both conventions. */
-const CATALOGUE = ['sqrt', 'cbrt', 'nthroot', 'pow', 'exp', 'log', 'asin', 'acos', 'atan', 'asinh', 'acosh', 'atanh', 'acot', 'asec', 'acsc', 'acoth', 'asech', 'acsch'];
+const CATALOGUE = [
+  'sqrt',
+  'cbrt',
+  'nthroot',
+  'pow',
+  'exp',
+  'log',
+  'asin',
+  'acos',
+  'atan',
+  'asinh',
+  'acosh',
+  'atanh',
+  'acot',
+  'asec',
+  'acsc',
+  'acoth',
+  'asech',
+  'acsch',
+];
 
 describe('the demo catalogue in suites/demo', () => {
   it('validates every file with the shared schema, under a file name equal to its id', () => {
@@ -22,7 +41,9 @@ describe('the demo catalogue in suites/demo', () => {
 
   it('is exactly what `npm run suites:demo` writes', () => {
     const generated = Object.fromEntries(demoCatalogue().map((s) => [`${s.id}.json`, s]));
-    expect(Object.fromEntries(onDisk.map(({ file, data }) => [file, data]))).toEqual(JSON.parse(JSON.stringify(generated)));
+    expect(Object.fromEntries(onDisk.map(({ file, data }) => [file, data]))).toEqual(
+      JSON.parse(JSON.stringify(generated)),
+    );
   });
 
   it('holds at least 15 suites, at least 5 of them regular branches', () => {
@@ -32,10 +53,16 @@ describe('the demo catalogue in suites/demo', () => {
   });
 
   it('tests every catalogue function under both conventions', () => {
-    const principal = onDisk.map(({ data }) => data as { subject: string; convention: string; branch: { kind: string } }).filter((s) => s.branch.kind === 'principal');
+    const principal = onDisk
+      .map(({ data }) => data as { subject: string; convention: string; branch: { kind: string } })
+      .filter((s) => s.branch.kind === 'principal');
     for (const fn of CATALOGUE) {
       for (const convention of ['signed-zero', 'counter-clockwise']) {
-        expect({ fn, convention, found: principal.some((s) => s.subject.startsWith(`${fn}(`) && s.convention === convention) }).toEqual({ fn, convention, found: true });
+        expect({
+          fn,
+          convention,
+          found: principal.some((s) => s.subject.startsWith(`${fn}(`) && s.convention === convention),
+        }).toEqual({ fn, convention, found: true });
       }
     }
   });
@@ -47,7 +74,8 @@ describe('the demo catalogue in suites/demo', () => {
       expect(straddles.length).toBeGreaterThan(0);
       const parsed = validateSuite(s, s.id);
       if (!parsed.ok) throw new Error('invalid');
-      for (const p of parsed.suite.paths) if (p.kind === 'straddle') expect(p.offsets).toEqual(['1e-3', '1e-9', '1e-300', '5e-324']);
+      for (const p of parsed.suite.paths)
+        if (p.kind === 'straddle') expect(p.offsets).toEqual(['1e-3', '1e-9', '1e-300', '5e-324']);
     }
   });
 

@@ -17,7 +17,8 @@ const POINTS: [number, number][] = [
 
 function branchValue(suite: (typeof DEMO_REGULAR_SUITES)[number], p: [number, number]): [number, number] {
   const checked = validateSuite(suite, suite.id);
-  if (!checked.ok || checked.suite.branch.kind !== 'regular') throw new Error(`${suite.id} is not a valid regular suite`);
+  if (!checked.ok || checked.suite.branch.kind !== 'regular')
+    throw new Error(`${suite.id} is not a valid regular suite`);
   const b = checked.suite.branch;
   const answer = answerContinue({
     g: b.g,
@@ -34,10 +35,14 @@ function branchValue(suite: (typeof DEMO_REGULAR_SUITES)[number], p: [number, nu
 }
 
 function subjectValue(suite: (typeof DEMO_REGULAR_SUITES)[number], p: [number, number]): [number, number] {
-  return evaluateSubject(parseSubject(suite.subject), BigComplex.fromDoubles(p[0], p[1]), suite.convention, { double: true, digits: 0 }).double;
+  return evaluateSubject(parseSubject(suite.subject), BigComplex.fromDoubles(p[0], p[1]), suite.convention, {
+    double: true,
+    digits: 0,
+  }).double;
 }
 
-const distance = (a: [number, number], b: [number, number]) => Math.hypot(a[0] - b[0], a[1] - b[1]) / Math.hypot(b[0], b[1]);
+const distance = (a: [number, number], b: [number, number]) =>
+  Math.hypot(a[0] - b[0], a[1] - b[1]) / Math.hypot(b[0], b[1]);
 
 describe('regular-branch demo suites', () => {
   // Each suite claims its subject *is* the branch it specifies; the continuation (an
@@ -45,11 +50,17 @@ describe('regular-branch demo suites', () => {
   // the reference off the cuts. The naive formula is the one meant to disagree.
   const meant = DEMO_REGULAR_SUITES.filter((s) => s.id !== 'sqrt-z2-minus-1-naive-formula');
 
-  it.each(meant.map((s) => [s.id, s] as const))('%s: the subject equals the continued branch off the cuts', (_id, suite) => {
-    for (const p of POINTS) {
-      expect({ p, error: distance(subjectValue(suite, p), branchValue(suite, p)) < 1e-12 }).toEqual({ p, error: true });
-    }
-  });
+  it.each(meant.map((s) => [s.id, s] as const))(
+    '%s: the subject equals the continued branch off the cuts',
+    (_id, suite) => {
+      for (const p of POINTS) {
+        expect({ p, error: distance(subjectValue(suite, p), branchValue(suite, p)) < 1e-12 }).toEqual({
+          p,
+          error: true,
+        });
+      }
+    },
+  );
 
   it('finds the naive √(z²−1) on the other sheet in the left half of the upper half-plane', () => {
     const naive = DEMO_REGULAR_SUITES.find((s) => s.id === 'sqrt-z2-minus-1-naive-formula')!;

@@ -2,7 +2,9 @@ import { MIGRATIONS } from '../../../server/data-source';
 import { createTestDatabase, type TestDatabase } from '../../setup/test-database';
 
 const tables = async (db: TestDatabase): Promise<string[]> =>
-  (await db.dataSource.query(`SELECT tablename FROM pg_tables WHERE schemaname = 'public' ORDER BY tablename`)).map((r: { tablename: string }) => r.tablename);
+  (await db.dataSource.query(`SELECT tablename FROM pg_tables WHERE schemaname = 'public' ORDER BY tablename`)).map(
+    (r: { tablename: string }) => r.tablename,
+  );
 
 describe('migrations', () => {
   let db: TestDatabase;
@@ -22,7 +24,11 @@ describe('migrations', () => {
 
   it('declares an explicit type on every column of every entity', () => {
     for (const entity of db.dataSource.entityMetadatas) {
-      for (const column of entity.columns) expect({ column: `${entity.tableName}.${column.databaseName}`, typed: typeof column.type === 'string' }).toEqual({ column: `${entity.tableName}.${column.databaseName}`, typed: true });
+      for (const column of entity.columns)
+        expect({
+          column: `${entity.tableName}.${column.databaseName}`,
+          typed: typeof column.type === 'string',
+        }).toEqual({ column: `${entity.tableName}.${column.databaseName}`, typed: true });
     }
   });
 

@@ -27,7 +27,9 @@ describe('auth routes', () => {
   });
 
   it('accepts the e-mail in any case and with spaces around it', async () => {
-    const res = await request(t.app).post('/api/auth/sign-in').send({ email: '  RAVI@Sheetkeeper.test ', password: RAVI.password });
+    const res = await request(t.app)
+      .post('/api/auth/sign-in')
+      .send({ email: '  RAVI@Sheetkeeper.test ', password: RAVI.password });
     expect(res.status).toBe(200);
   });
 
@@ -46,13 +48,19 @@ describe('auth routes', () => {
     expect((await request(t.app).get('/api/me').set('Cookie', cookie)).status).toBe(200);
     expect((await request(t.app).post('/api/auth/sign-out').set('Cookie', cookie)).status).toBe(204);
     expect((await request(t.app).get('/api/me').set('Cookie', cookie)).status).toBe(401);
-    const rows = await t.db.dataSource.query(`SELECT count(*)::int AS n FROM sessions WHERE sid = $1`, [decodeURIComponent(cookie.split('=')[1]!).slice(2).split('.')[0]]);
+    const rows = await t.db.dataSource.query(`SELECT count(*)::int AS n FROM sessions WHERE sid = $1`, [
+      decodeURIComponent(cookie.split('=')[1]!).slice(2).split('.')[0],
+    ]);
     expect(rows[0].n).toBe(0);
   });
 
   it('answers an unknown account and a wrong password with the same status and body', async () => {
-    const unknown = await request(t.app).post('/api/auth/sign-in').send({ email: 'nobody@sheetkeeper.test', password: 'whatever' });
-    const wrong = await request(t.app).post('/api/auth/sign-in').send({ email: 'hanne@sheetkeeper.test', password: 'not-her-password' });
+    const unknown = await request(t.app)
+      .post('/api/auth/sign-in')
+      .send({ email: 'nobody@sheetkeeper.test', password: 'whatever' });
+    const wrong = await request(t.app)
+      .post('/api/auth/sign-in')
+      .send({ email: 'hanne@sheetkeeper.test', password: 'not-her-password' });
     expect(unknown.status).toBe(401);
     expect(wrong.status).toBe(401);
     expect(unknown.body).toEqual(wrong.body);
@@ -62,7 +70,13 @@ describe('auth routes', () => {
   it('blocks an account from one address after the allowed failures, even with the right password', async () => {
     const kwame = { email: 'kwame@sheetkeeper.test', password: 'kwame-demo-2026' };
     for (let i = 0; i < 3; i += 1) {
-      expect((await request(t.app).post('/api/auth/sign-in').send({ ...kwame, password: `guess-${i}` })).status).toBe(401);
+      expect(
+        (
+          await request(t.app)
+            .post('/api/auth/sign-in')
+            .send({ ...kwame, password: `guess-${i}` })
+        ).status,
+      ).toBe(401);
     }
     const blocked = await request(t.app).post('/api/auth/sign-in').send(kwame);
     expect(blocked.status).toBe(429);
@@ -73,7 +87,14 @@ describe('auth routes', () => {
   it('forgets earlier failures after a successful sign-in', async () => {
     const odile = { email: 'odile@sheetkeeper.test', password: 'odile-demo-2026' };
     for (let round = 0; round < 2; round += 1) {
-      for (let i = 0; i < 2; i += 1) expect((await request(t.app).post('/api/auth/sign-in').send({ ...odile, password: 'nope' })).status).toBe(401);
+      for (let i = 0; i < 2; i += 1)
+        expect(
+          (
+            await request(t.app)
+              .post('/api/auth/sign-in')
+              .send({ ...odile, password: 'nope' })
+          ).status,
+        ).toBe(401);
       expect((await request(t.app).post('/api/auth/sign-in').send(odile)).status).toBe(200);
     }
   });
@@ -88,7 +109,13 @@ describe('sign-in limit per address', () => {
 
   it('blocks the address after failures spread over many accounts', async () => {
     for (let i = 0; i < 4; i += 1) {
-      expect((await request(t.app).post('/api/auth/sign-in').send({ email: `someone${i}@sheetkeeper.test`, password: 'x' })).status).toBe(401);
+      expect(
+        (
+          await request(t.app)
+            .post('/api/auth/sign-in')
+            .send({ email: `someone${i}@sheetkeeper.test`, password: 'x' })
+        ).status,
+      ).toBe(401);
     }
     const res = await request(t.app).post('/api/auth/sign-in').send(RAVI);
     expect(res.status).toBe(429);

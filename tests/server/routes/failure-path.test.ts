@@ -22,10 +22,18 @@ describe('the path of a failing case', () => {
 
   async function runOf(slug: string, referenceCacheDir: string | null = null): Promise<string> {
     const target = (await t.db.dataSource.query(`SELECT name FROM targets WHERE name = 'complex.js@2.4.3'`))[0].name;
-    const plan = await kwame.post('/api/plans').send({ name: `path plan ${slug}`, recipients: [], suites: [slug], targets: [target] });
+    const plan = await kwame
+      .post('/api/plans')
+      .send({ name: `path plan ${slug}`, recipients: [], suites: [slug], targets: [target] });
     const run = (await kwame.post('/api/runs').send({ planId: plan.body.plan.id })).body.run.id as string;
-    const executor = new ShardExecutor(t.db.dataSource, { openTarget: () => complexJsTarget('complex.js', '2.4.3'), outbox: { enqueue: async () => undefined } as unknown as MailOutbox, appUrl: 'http://127.0.0.1', referenceCacheDir });
-    for (const { id } of await t.db.dataSource.query(`SELECT id FROM shards WHERE run_id = $1`, [run])) await executor.execute(id);
+    const executor = new ShardExecutor(t.db.dataSource, {
+      openTarget: () => complexJsTarget('complex.js', '2.4.3'),
+      outbox: { enqueue: async () => undefined } as unknown as MailOutbox,
+      appUrl: 'http://127.0.0.1',
+      referenceCacheDir,
+    });
+    for (const { id } of await t.db.dataSource.query(`SELECT id FROM shards WHERE run_id = $1`, [run]))
+      await executor.execute(id);
     return run;
   }
 
@@ -48,13 +56,33 @@ describe('the path of a failing case', () => {
     expect(view.path).toMatchObject({ name: failure.pathName, kind: 'straddle' });
     expect(view.points).toHaveLength(view.path.points);
     expect(view.axis).toBe('index');
-    expect(view.points[view.focusIndex]).toMatchObject({ failureId: failure.id, outcome: 'fail', diagnosis: 'zero-sign', actualFrom: 'stored' });
+    expect(view.points[view.focusIndex]).toMatchObject({
+      failureId: failure.id,
+      outcome: 'fail',
+      diagnosis: 'zero-sign',
+      actualFrom: 'stored',
+    });
     // Every stored failure of this path sits at its own index; everything else passed.
-    const stored = (await kwame.get(`/api/failures?run=${runIds.sqrt}&limit=500`)).body.failures.filter((f: { pathName: string }) => f.pathName === failure.pathName);
-    expect(view.points.filter((p) => p.outcome !== 'pass').map((p) => p.failureId).sort()).toEqual(stored.map((f: { id: string }) => f.id).sort());
+    const stored = (await kwame.get(`/api/failures?run=${runIds.sqrt}&limit=500`)).body.failures.filter(
+      (f: { pathName: string }) => f.pathName === failure.pathName,
+    );
+    expect(
+      view.points
+        .filter((p) => p.outcome !== 'pass')
+        .map((p) => p.failureId)
+        .sort(),
+    ).toEqual(stored.map((f: { id: string }) => f.id).sort());
     expect(view.counts.fail).toBe(stored.length);
     // sqrt's principal cut is the ray from 0 along the negative real axis.
-    expect(view.cuts).toEqual([{ points: [{ re: 0, im: 0 }, { re: -1, im: 0 }], toInfinity: true }]);
+    expect(view.cuts).toEqual([
+      {
+        points: [
+          { re: 0, im: 0 },
+          { re: -1, im: 0 },
+        ],
+        toInfinity: true,
+      },
+    ]);
     expect(view.branchPoints).toEqual([{ re: 0, im: 0 }]);
   });
 
@@ -73,9 +101,24 @@ describe('the path of a failing case', () => {
     const circle = failures.find((f: { pathName: string }) => !f.pathName.startsWith('across')) ?? failures[0];
     const view = (await kwame.get(`/api/failures/${circle.id}/path`)).body as FailurePathView;
     expect(view.suite).toMatchObject({ branch: 'regular', subject: expect.stringContaining('z') });
-    expect(view.cuts).toEqual([{ points: [{ re: -1, im: 0 }, { re: 1, im: 0 }], toInfinity: false }]);
-    expect(view.branchPoints).toEqual([{ re: -1, im: 0 }, { re: 1, im: 0 }]);
-    expect(view.points.every((p) => p.expectedArg === null || (p.expectedArg > -Math.PI - 1e-12 && p.expectedArg <= Math.PI + 1e-12))).toBe(true);
+    expect(view.cuts).toEqual([
+      {
+        points: [
+          { re: -1, im: 0 },
+          { re: 1, im: 0 },
+        ],
+        toInfinity: false,
+      },
+    ]);
+    expect(view.branchPoints).toEqual([
+      { re: -1, im: 0 },
+      { re: 1, im: 0 },
+    ]);
+    expect(
+      view.points.every(
+        (p) => p.expectedArg === null || (p.expectedArg > -Math.PI - 1e-12 && p.expectedArg <= Math.PI + 1e-12),
+      ),
+    ).toBe(true);
   });
 
   it('reads the expected values its run kept on disk instead of computing them again', async () => {
@@ -115,8 +158,12 @@ describe('who may classify a failure', () => {
     t = await startTestApp();
     await approvedSuite(t.db.dataSource, 'classify-sqrt');
     const admin = await signInAs(t.app, 'admin');
-    const target = (await t.db.dataSource.query(`SELECT name FROM targets WHERE library = 'complex.js' AND installed LIMIT 1`))[0].name;
-    const plan = await admin.post('/api/plans').send({ name: 'classify plan', recipients: [], suites: ['classify-sqrt'], targets: [target] });
+    const target = (
+      await t.db.dataSource.query(`SELECT name FROM targets WHERE library = 'complex.js' AND installed LIMIT 1`)
+    )[0].name;
+    const plan = await admin
+      .post('/api/plans')
+      .send({ name: 'classify plan', recipients: [], suites: ['classify-sqrt'], targets: [target] });
     const runId = (await admin.post('/api/runs').send({ planId: plan.body.plan.id })).body.run.id;
     const [shard] = await t.db.dataSource.query(`SELECT id FROM shards WHERE run_id = $1`, [runId]);
     const [row] = await t.db.dataSource.query(
@@ -130,32 +177,57 @@ describe('who may classify a failure', () => {
 
   it('lets a maintainer accept a deviation with a reason and an expiry, recorded as theirs', async () => {
     const kwame = await signInAs(t.app, 'maintainer');
-    const res = await kwame.post(`/api/failures/${failureId}/classify`).send({ classification: 'accepted', scope: 'point', reason: 'complex.js documents that it ignores the sign of zero.', expiresAt: '2099-01-01T00:00:00Z' });
+    const res = await kwame
+      .post(`/api/failures/${failureId}/classify`)
+      .send({
+        classification: 'accepted',
+        scope: 'point',
+        reason: 'complex.js documents that it ignores the sign of zero.',
+        expiresAt: '2099-01-01T00:00:00Z',
+      });
     expect(res.status).toBe(201);
-    expect(res.body.deviation).toMatchObject({ classification: 'accepted', scope: 'point', expiresAt: '2099-01-01T00:00:00.000Z' });
-    const [stored] = await t.db.dataSource.query(`SELECT u.email FROM deviations d JOIN users u ON u.id = d.created_by WHERE d.id = $1`, [res.body.deviation.id]);
+    expect(res.body.deviation).toMatchObject({
+      classification: 'accepted',
+      scope: 'point',
+      expiresAt: '2099-01-01T00:00:00.000Z',
+    });
+    const [stored] = await t.db.dataSource.query(
+      `SELECT u.email FROM deviations d JOIN users u ON u.id = d.created_by WHERE d.id = $1`,
+      [res.body.deviation.id],
+    );
     expect(stored.email).toBe('kwame@sheetkeeper.test');
-    expect((await kwame.get(`/api/failures?status=accepted`)).body.failures.map((f: { id: string }) => f.id)).toContain(failureId);
+    expect((await kwame.get(`/api/failures?status=accepted`)).body.failures.map((f: { id: string }) => f.id)).toContain(
+      failureId,
+    );
   });
 
-  it.each(['bug', 'convention-difference'])('refuses a maintainer who calls a failure %s, and stores nothing', async (classification) => {
-    const kwame = await signInAs(t.app, 'maintainer');
-    const before = (await t.db.dataSource.query(`SELECT count(*)::int AS n FROM deviations`))[0].n;
-    const res = await kwame.post(`/api/failures/${failureId}/classify`).send({ classification, reason: 'looks wrong to me' });
-    expect(res.status).toBe(403);
-    expect(res.body.kind).toBe('forbidden');
-    expect((await t.db.dataSource.query(`SELECT count(*)::int AS n FROM deviations`))[0].n).toBe(before);
-  });
+  it.each(['bug', 'convention-difference'])(
+    'refuses a maintainer who calls a failure %s, and stores nothing',
+    async (classification) => {
+      const kwame = await signInAs(t.app, 'maintainer');
+      const before = (await t.db.dataSource.query(`SELECT count(*)::int AS n FROM deviations`))[0].n;
+      const res = await kwame
+        .post(`/api/failures/${failureId}/classify`)
+        .send({ classification, reason: 'looks wrong to me' });
+      expect(res.status).toBe(403);
+      expect(res.body.kind).toBe('forbidden');
+      expect((await t.db.dataSource.query(`SELECT count(*)::int AS n FROM deviations`))[0].n).toBe(before);
+    },
+  );
 
   it('still lets a reviewer call a failure a bug', async () => {
     const hanne = await signInAs(t.app, 'reviewer');
-    const res = await hanne.post(`/api/failures/${failureId}/classify`).send({ classification: 'bug', reason: 'reported upstream' });
+    const res = await hanne
+      .post(`/api/failures/${failureId}/classify`)
+      .send({ classification: 'bug', reason: 'reported upstream' });
     expect(res.status).toBe(201);
   });
 
   it('still refuses a contributor, even for an accepted deviation', async () => {
     const ravi = await signInAs(t.app, 'contributor');
-    const res = await ravi.post(`/api/failures/${failureId}/classify`).send({ classification: 'accepted', reason: 'fine by me', expiresAt: '2099-01-01T00:00:00Z' });
+    const res = await ravi
+      .post(`/api/failures/${failureId}/classify`)
+      .send({ classification: 'accepted', reason: 'fine by me', expiresAt: '2099-01-01T00:00:00Z' });
     expect(res.status).toBe(403);
   });
 });

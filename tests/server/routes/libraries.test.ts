@@ -19,7 +19,7 @@ beforeAll(async () => {
 afterAll(() => t.stop());
 
 describe('GET /api/targets/:name/fingerprint', () => {
-  it("says cmath follows Annex G on every cut it has, with the +0 and −0 values at each place", async () => {
+  it('says cmath follows Annex G on every cut it has, with the +0 and −0 values at each place', async () => {
     const res = await reader.get(`${at('cmath@3.11.2')}/fingerprint`);
     expect(res.status).toBe(200);
     const fp = res.body.fingerprint as ConventionFingerprint;
@@ -95,7 +95,9 @@ describe('GET /api/targets/:name/cut-map', () => {
     const map = res.body.cutMap as CutMap;
     expect(map).toMatchObject({ target: 'cmath@3.11.2', function: 'sqrt', columns: 81, rows: 81, verdict: 'matches' });
     expect(map.box).toEqual({ min: { re: '-4', im: '-4' }, max: { re: '4', im: '4' } });
-    expect(map.expected).toEqual([{ label: '(-inf, 0]', from: { re: '0', im: '0' }, to: { re: '-4', im: '0' }, coverage: 1, seen: true }]);
+    expect(map.expected).toEqual([
+      { label: '(-inf, 0]', from: { re: '0', im: '0' }, to: { re: '-4', im: '0' }, coverage: 1, seen: true },
+    ]);
     expect(map.observed.length).toBeGreaterThan(0);
     for (const segment of map.observed) {
       expect(segment.onExpectedCut).toBe(true);
@@ -104,7 +106,9 @@ describe('GET /api/targets/:name/cut-map', () => {
   });
 
   it("finds complex.js 2.4.3's acot discontinuous off its expected cut", async () => {
-    const res = await reader.get(`${at('complex.js@2.4.3')}/cut-map`).query({ fn: 'acot', box: '-2,-2,2,2', grid: '41x41' });
+    const res = await reader
+      .get(`${at('complex.js@2.4.3')}/cut-map`)
+      .query({ fn: 'acot', box: '-2,-2,2,2', grid: '41x41' });
     expect(res.status).toBe(200);
     const map = res.body.cutMap as CutMap;
     expect(map.verdict).toBe('differs');
@@ -113,7 +117,9 @@ describe('GET /api/targets/:name/cut-map', () => {
   });
 
   it('refuses a grid beyond 201×201 and a box beyond ±1000, naming both fields', async () => {
-    const res = await reader.get(`${at('complex.js@2.4.3')}/cut-map`).query({ fn: 'sqrt', grid: '401x401', box: '-5000,-1,1,1' });
+    const res = await reader
+      .get(`${at('complex.js@2.4.3')}/cut-map`)
+      .query({ fn: 'sqrt', grid: '401x401', box: '-5000,-1,1,1' });
     expect(res.status).toBe(400);
     expect(res.body.issues).toEqual(
       expect.arrayContaining([
@@ -138,7 +144,9 @@ describe('GET /api/targets/:name/cut-map', () => {
   it('accepts the largest grid allowed and refuses one column more', async () => {
     const over = await reader.get(`${at('complex.js@2.4.3')}/cut-map`).query({ fn: 'asin', grid: '202x201' });
     expect(over.status).toBe(400);
-    expect(over.body.issues).toEqual([{ field: 'query.grid', rule: 'allows at most 201 columns and rows on the server' }]);
+    expect(over.body.issues).toEqual([
+      { field: 'query.grid', rule: 'allows at most 201 columns and rows on the server' },
+    ]);
     const largest = await reader.get(`${at('complex.js@2.4.3')}/cut-map`).query({ fn: 'asin', grid: '201x201' });
     expect(largest.status).toBe(200);
     expect(largest.body.cutMap).toMatchObject({ columns: 201, rows: 201, verdict: 'matches' });
@@ -146,7 +154,7 @@ describe('GET /api/targets/:name/cut-map', () => {
 });
 
 describe('GET /api/targets/:name/version-matrix', () => {
-  it("shows every installed complex.js version and the points whose √ changed between them", async () => {
+  it('shows every installed complex.js version and the points whose √ changed between them', async () => {
     const res = await reader.get('/api/targets/complex.js/version-matrix').query({ suite: 'lib-sqrt' });
     expect(res.status).toBe(200);
     const matrix = res.body.matrix as VersionMatrix;

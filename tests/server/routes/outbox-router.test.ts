@@ -28,12 +28,19 @@ describe('outbox routes', () => {
     const admin = await signInAs(t.app, 'admin');
     const [{ id }] = (await admin.get('/api/outbox?limit=1')).body.messages;
     const res = await admin.get(`/api/outbox/${id}`);
-    expect(res.body.message).toMatchObject({ subject: 'mail 4', text: 'text', html: '<p>html</p>', to: ['kwame@sheetkeeper.test'] });
+    expect(res.body.message).toMatchObject({
+      subject: 'mail 4',
+      text: 'text',
+      html: '<p>html</p>',
+      to: ['kwame@sheetkeeper.test'],
+    });
   });
 
   it('refuses a bad page size and an unknown message', async () => {
     const admin = await signInAs(t.app, 'admin');
-    expect((await admin.get('/api/outbox?limit=0')).body.issues).toEqual([{ field: 'query.limit', rule: 'must be at least 1' }]);
+    expect((await admin.get('/api/outbox?limit=0')).body.issues).toEqual([
+      { field: 'query.limit', rule: 'must be at least 1' },
+    ]);
     expect((await admin.get('/api/outbox/00000000-0000-4000-8000-000000000000')).status).toBe(404);
   });
 });

@@ -23,7 +23,13 @@ describe('GET /api/overview', () => {
   };
 
   /** Finishes a queued run as a worker would have, `minutes` ago, with these counts and regressions. */
-  const finish = async (runId: string, minutes: number, counts: { pass: number; fail: number }, regressions: number | null, status = 'completed') => {
+  const finish = async (
+    runId: string,
+    minutes: number,
+    counts: { pass: number; fail: number },
+    regressions: number | null,
+    status = 'completed',
+  ) => {
     await t.db.dataSource.query(
       `UPDATE runs SET status = $2, counts = $3, regressions = $4, shards_done = shards_total,
               created_at = now() - make_interval(mins => $5), started_at = now() - make_interval(mins => $5), finished_at = now() - make_interval(mins => $5 - 1)
@@ -49,11 +55,22 @@ describe('GET /api/overview', () => {
     t = await startTestApp();
     await approvedSuite(t.db.dataSource, 'overview-sqrt');
     kwame = await signInAs(t.app, 'maintainer');
-    complexJs = (await t.db.dataSource.query(`SELECT name FROM targets WHERE library = 'complex.js' AND installed ORDER BY name LIMIT 1`))[0].name;
-    mathjs = (await t.db.dataSource.query(`SELECT name FROM targets WHERE library = 'mathjs' AND installed ORDER BY name LIMIT 1`))[0].name;
-    const plan = await kwame.post('/api/plans').send({ name: 'overview plan', recipients: [], suites: ['overview-sqrt'], targets: [complexJs, mathjs] });
+    complexJs = (
+      await t.db.dataSource.query(
+        `SELECT name FROM targets WHERE library = 'complex.js' AND installed ORDER BY name LIMIT 1`,
+      )
+    )[0].name;
+    mathjs = (
+      await t.db.dataSource.query(
+        `SELECT name FROM targets WHERE library = 'mathjs' AND installed ORDER BY name LIMIT 1`,
+      )
+    )[0].name;
+    const plan = await kwame
+      .post('/api/plans')
+      .send({ name: 'overview plan', recipients: [], suites: ['overview-sqrt'], targets: [complexJs, mathjs] });
     planId = plan.body.plan.id;
-    for (const key of ['old', 'previous', 'latest', 'live'] as const) runs[key] = (await kwame.post('/api/runs').send({ planId })).body.run.id;
+    for (const key of ['old', 'previous', 'latest', 'live'] as const)
+      runs[key] = (await kwame.post('/api/runs').send({ planId })).body.run.id;
     await finish(runs.old, 90, { pass: 100, fail: 9 }, 0);
     await finish(runs.previous, 60, { pass: 110, fail: 2 }, 0);
     await finish(runs.latest, 30, { pass: 105, fail: 7 }, 5);
@@ -69,31 +86,65 @@ describe('GET /api/overview', () => {
   it('gives each plan its latest finished run, the completed run before it, and lists a queued run as in progress', async () => {
     const view = await overview(kwame);
     const mine = view.plans.find((p) => p.planId === planId)!;
-    expect(mine.latest).toMatchObject({ id: runs.latest, status: 'completed', regressions: 5, counts: { pass: 105, fail: 7, error: 0, skipped: 0 } });
-    expect(mine.previous).toEqual({ id: runs.previous, counts: { pass: 110, fail: 2, error: 0, skipped: 0 }, finishedAt: expect.any(String) });
+    expect(mine.latest).toMatchObject({
+      id: runs.latest,
+      status: 'completed',
+      regressions: 5,
+      counts: { pass: 105, fail: 7, error: 0, skipped: 0 },
+    });
+    expect(mine.previous).toEqual({
+      id: runs.previous,
+      counts: { pass: 110, fail: 2, error: 0, skipped: 0 },
+      finishedAt: expect.any(String),
+    });
     expect(view.inProgress.map((r) => r.id)).toContain(runs.live);
     expect(view.inProgress.map((r) => r.id)).not.toContain(runs.latest);
   });
 
   it('shows a plan that never ran with no latest run, after the plans that ran', async () => {
-    const plan = await kwame.post('/api/plans').send({ name: 'overview never ran', recipients: [], suites: ['overview-sqrt'], targets: [complexJs] });
+    const plan = await kwame
+      .post('/api/plans')
+      .send({ name: 'overview never ran', recipients: [], suites: ['overview-sqrt'], targets: [complexJs] });
     const view = await overview(kwame);
-    expect(view.plans.find((p) => p.planId === plan.body.plan.id)).toEqual({ planId: plan.body.plan.id, planName: 'overview never ran', latest: null, previous: null });
+    expect(view.plans.find((p) => p.planId === plan.body.plan.id)).toEqual({
+      planId: plan.body.plan.id,
+      planName: 'overview never ran',
+      latest: null,
+      previous: null,
+    });
     // Plans that ran come first, most recent first; then those that never ran.
-    expect(view.plans.findIndex((p) => p.planId === planId)).toBeLessThan(view.plans.findIndex((p) => p.planId === plan.body.plan.id));
+    expect(view.plans.findIndex((p) => p.planId === planId)).toBeLessThan(
+      view.plans.findIndex((p) => p.planId === plan.body.plan.id),
+    );
   });
 
   it('counts regressions on subscribed libraries in the latest completed run, leaving out accepted deviations and other libraries', async () => {
     const hanne = await signInAs(t.app, 'reviewer');
     await hanne.put('/api/subscriptions').send({ targetKeys: ['complex.js'] });
-    const [failureRow] = await t.db.dataSource.query(`SELECT id::text FROM failures WHERE run_id = $1 AND path_name = 'accepted-path'`, [runs.latest]);
+    const [failureRow] = await t.db.dataSource.query(
+      `SELECT id::text FROM failures WHERE run_id = $1 AND path_name = 'accepted-path'`,
+      [runs.latest],
+    );
     const accepted = await hanne
       .post(`/api/failures/${failureRow.id}/classify`)
-      .send({ classification: 'accepted', scope: 'path', reason: 'Documented behaviour on this path.', expiresAt: '2099-01-01T00:00:00Z' });
+      .send({
+        classification: 'accepted',
+        scope: 'path',
+        reason: 'Documented behaviour on this path.',
+        expiresAt: '2099-01-01T00:00:00Z',
+      });
     expect(accepted.status).toBe(201);
     const view = await overview(hanne);
     expect(view.needsMe.subscriptions).toEqual(['complex.js']);
-    expect(view.needsMe.regressions).toEqual([{ targetKey: 'complex.js', runId: runs.latest, planName: 'overview plan', finishedAt: expect.any(String), count: 3 }]);
+    expect(view.needsMe.regressions).toEqual([
+      {
+        targetKey: 'complex.js',
+        runId: runs.latest,
+        planName: 'overview plan',
+        finishedAt: expect.any(String),
+        count: 3,
+      },
+    ]);
     // Kwame subscribes to nothing: no regressions are his to see here.
     expect((await overview(kwame)).needsMe).toMatchObject({ subscriptions: [], regressions: [] });
   });
@@ -119,11 +170,20 @@ describe('GET /api/overview', () => {
     expect((await overview(kwame)).needsMe.reviewQueue).toBeNull();
 
     const meiAgent = request.agent(t.app);
-    expect((await meiAgent.post('/api/auth/sign-in').send({ email: 'mei@sheetkeeper.test', password: 'mei-demo-2026' })).status).toBe(200);
+    expect(
+      (await meiAgent.post('/api/auth/sign-in').send({ email: 'mei@sheetkeeper.test', password: 'mei-demo-2026' }))
+        .status,
+    ).toBe(200);
     const forMei = await overview(meiAgent);
     expect(forMei.needsMe.reviewQueue).toBeNull();
     expect(forMei.needsMe.changesRequested).toEqual([
-      expect.objectContaining({ slug: 'overview-sent-back', version: 1, authorName: 'Mei Okonkwo', reviewerName: hanneUser.displayName, reviewComment: 'Add a straddle at 5e-324.' }),
+      expect.objectContaining({
+        slug: 'overview-sent-back',
+        version: 1,
+        authorName: 'Mei Okonkwo',
+        reviewerName: hanneUser.displayName,
+        reviewComment: 'Add a straddle at 5e-324.',
+      }),
     ]);
     // Ravi, another contributor, wrote neither suite.
     expect((await overview(await signInAs(t.app, 'contributor'))).needsMe.changesRequested).toEqual([]);

@@ -8,26 +8,43 @@ describe('plans and schedules', () => {
   let t: TestApp;
   let kwame: request.Agent;
   let target: string;
-  const plan = (over: Record<string, unknown> = {}) => ({ name: 'Nightly roots', recipients: ['kwame@sheetkeeper.test'], suites: ['plan-sqrt'], targets: [target], ...over });
+  const plan = (over: Record<string, unknown> = {}) => ({
+    name: 'Nightly roots',
+    recipients: ['kwame@sheetkeeper.test'],
+    suites: ['plan-sqrt'],
+    targets: [target],
+    ...over,
+  });
 
   beforeAll(async () => {
     t = await startTestApp();
     await approvedSuite(t.db.dataSource, 'plan-sqrt');
     kwame = await signInAs(t.app, 'maintainer');
-    const targets = (await kwame.get('/api/targets')).body.targets as { name: string; library: string; installed: boolean }[];
+    const targets = (await kwame.get('/api/targets')).body.targets as {
+      name: string;
+      library: string;
+      installed: boolean;
+    }[];
     target = targets.find((x) => x.library === 'complex.js' && x.installed)!.name;
   });
   afterAll(() => t.stop());
 
   it('lists the installed targets the harness finds, complex.js and cmath among them', async () => {
-    const libraries = new Set(((await kwame.get('/api/targets')).body.targets as { library: string }[]).map((x) => x.library));
+    const libraries = new Set(
+      ((await kwame.get('/api/targets')).body.targets as { library: string }[]).map((x) => x.library),
+    );
     expect([...libraries]).toEqual(expect.arrayContaining(['complex.js', 'mathjs', 'cmath']));
   });
 
   it('creates a plan of approved suites and installed targets, and edits it', async () => {
     const created = await kwame.post('/api/plans').send(plan());
     expect(created.status).toBe(201);
-    expect(created.body.plan).toMatchObject({ name: 'Nightly roots', suites: [{ slug: 'plan-sqrt', approvedVersion: 1 }], targets: [{ name: target, installed: true }], createdBy: 'Kwame Asante' });
+    expect(created.body.plan).toMatchObject({
+      name: 'Nightly roots',
+      suites: [{ slug: 'plan-sqrt', approvedVersion: 1 }],
+      targets: [{ name: target, installed: true }],
+      createdBy: 'Kwame Asante',
+    });
     const edited = await kwame.put(`/api/plans/${created.body.plan.id}`).send(plan({ description: 'Roots only.' }));
     expect(edited.body.plan.description).toBe('Roots only.');
   });
@@ -35,7 +52,15 @@ describe('plans and schedules', () => {
   it('refuses a suite without an approved version, an unknown suite and an unknown target, naming each', async () => {
     const ravi = await signInAs(t.app, 'contributor');
     expect((await ravi.post('/api/suites').send(demoSuiteBody('draft-only'))).status).toBe(201);
-    const res = await kwame.post('/api/plans').send(plan({ name: 'Broken plan', suites: ['plan-sqrt', 'draft-only', 'no-such-suite'], targets: [target, 'nolib@0.0.0'] }));
+    const res = await kwame
+      .post('/api/plans')
+      .send(
+        plan({
+          name: 'Broken plan',
+          suites: ['plan-sqrt', 'draft-only', 'no-such-suite'],
+          targets: [target, 'nolib@0.0.0'],
+        }),
+      );
     expect(res.status).toBe(400);
     expect(res.body.issues).toEqual([
       { field: 'body.suites.1', rule: 'has no approved version yet ("draft-only")' },
@@ -59,7 +84,9 @@ describe('plans and schedules', () => {
     expect(next).toHaveLength(3);
     for (const d of next) {
       // 02:30 in Oslo is 01:30 UTC in winter (CET) and 00:30 UTC in summer (CEST) — IANA tz database.
-      expect(new Intl.DateTimeFormat('en-GB', { timeZone: 'Europe/Oslo', hour: '2-digit', minute: '2-digit' }).format(d)).toBe('02:30');
+      expect(
+        new Intl.DateTimeFormat('en-GB', { timeZone: 'Europe/Oslo', hour: '2-digit', minute: '2-digit' }).format(d),
+      ).toBe('02:30');
     }
     expect(next[1].getTime() - next[0].getTime()).toBeGreaterThanOrEqual(23 * 3600 * 1000);
   });
@@ -71,7 +98,9 @@ describe('plans and schedules', () => {
     const seven = await kwame.post('/api/schedules/preview').send({ cron: '0 0 2 * * * *', timeZone: 'UTC' });
     expect(seven.body.issues).toEqual([{ field: 'body.cron', rule: 'must have 5 or 6 fields (it has 7)' }]);
     const zone = await kwame.post('/api/schedules/preview').send({ cron: '0 2 * * *', timeZone: 'Mars/Olympus' });
-    expect(zone.body.issues).toEqual([{ field: 'body.timeZone', rule: 'must be a time zone name such as Europe/Oslo or UTC' }]);
+    expect(zone.body.issues).toEqual([
+      { field: 'body.timeZone', rule: 'must be a time zone name such as Europe/Oslo or UTC' },
+    ]);
   });
 
   it('disables a schedule, which then has no next times', async () => {

@@ -30,7 +30,9 @@ beforeAll(async () => {
   t = await startTestApp();
   const row = await t.db.dataSource.query(`SELECT id FROM users WHERE email = 'mei@sheetkeeper.test'`);
   contributorId = row[0].id;
-  targetName = (await t.db.dataSource.query(`SELECT name FROM targets WHERE library = 'complex.js' AND installed LIMIT 1`))[0].name;
+  targetName = (
+    await t.db.dataSource.query(`SELECT name FROM targets WHERE library = 'complex.js' AND installed LIMIT 1`)
+  )[0].name;
   await approvedSuite(t.db.dataSource, 'table-plan-suite');
 });
 
@@ -38,7 +40,9 @@ beforeAll(async () => {
 async function freshPlan(): Promise<string> {
   serial += 1;
   const admin = await agentFor('admin');
-  const res = await admin.post('/api/plans').send({ name: `table plan ${serial}`, recipients: [], suites: ['table-plan-suite'], targets: [targetName] });
+  const res = await admin
+    .post('/api/plans')
+    .send({ name: `table plan ${serial}`, recipients: [], suites: ['table-plan-suite'], targets: [targetName] });
   return res.body.plan.id;
 }
 
@@ -51,8 +55,12 @@ async function freshRun(): Promise<string> {
 /** A stored failure of a fresh run, at the first point of the approved suite's first path (so its path can be drawn). */
 async function freshFailure(): Promise<string> {
   const runId = await freshRun();
-  const [shard] = await t.db.dataSource.query(`SELECT id, suite_version_id FROM shards WHERE run_id = $1 LIMIT 1`, [runId]);
-  const [version] = await t.db.dataSource.query(`SELECT body FROM suite_versions WHERE id = $1`, [shard.suite_version_id]);
+  const [shard] = await t.db.dataSource.query(`SELECT id, suite_version_id FROM shards WHERE run_id = $1 LIMIT 1`, [
+    runId,
+  ]);
+  const [version] = await t.db.dataSource.query(`SELECT body FROM suite_versions WHERE id = $1`, [
+    shard.suite_version_id,
+  ]);
   const [row] = await t.db.dataSource.query(
     `INSERT INTO failures (run_id, shard_id, suite_slug, suite_version, target_name, target_library, target_version, convention, path_name, point_index, t, z, z_hex, point_key, outcome_kind, diagnosis_kind, rule, reproducer)
      VALUES ($1, $2, 'table-plan-suite', 1, $3, 'complex.js', '2.4.3', 'signed-zero', $4, 0, 0, '{"re":"1","im":"0"}', '{"re":"0x1p+0","im":"0x0p+0"}', 'k', 'fail', 'inaccurate', 'r', 'x') RETURNING id::text`,
@@ -64,7 +72,9 @@ async function freshFailure(): Promise<string> {
 /** A fresh schedule of a fresh plan. */
 async function freshSchedule(): Promise<string> {
   const admin = await agentFor('admin');
-  const res = await admin.post('/api/schedules').send({ planId: await freshPlan(), cron: '0 3 * * *', timeZone: 'UTC' });
+  const res = await admin
+    .post('/api/schedules')
+    .send({ planId: await freshPlan(), cron: '0 3 * * *', timeZone: 'UTC' });
   return res.body.schedule.id;
 }
 afterAll(() => t.stop());
@@ -93,22 +103,45 @@ interface RouteCase {
   expect: Record<Who, number>;
 }
 
-const all = (status: number) => ({ 'signed-out': status, admin: status, maintainer: status, reviewer: status, contributor: status });
+const all = (status: number) => ({
+  'signed-out': status,
+  admin: status,
+  maintainer: status,
+  reviewer: status,
+  contributor: status,
+});
 const signedIn = (status: number) => ({ ...all(status), 'signed-out': 401 });
 
 /** Every API route, with the status each kind of caller must get. */
 const ROUTES: RouteCase[] = [
-  { name: 'POST /api/auth/sign-in', ownSession: true, call: (a) => a.post('/api/auth/sign-in').send({ email: 'ravi@sheetkeeper.test', password: 'ravi-demo-2026' }), expect: all(200) },
+  {
+    name: 'POST /api/auth/sign-in',
+    ownSession: true,
+    call: (a) => a.post('/api/auth/sign-in').send({ email: 'ravi@sheetkeeper.test', password: 'ravi-demo-2026' }),
+    expect: all(200),
+  },
   { name: 'GET /api/me', call: (a) => a.get('/api/me'), expect: signedIn(200) },
-  { name: 'GET /api/users', call: (a) => a.get('/api/users'), expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 } },
+  {
+    name: 'GET /api/users',
+    call: (a) => a.get('/api/users'),
+    expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 },
+  },
   {
     name: 'PATCH /api/users/:id',
     call: (a) => a.patch(`/api/users/${contributorId}`).send({ role: 'contributor' }),
     expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 },
   },
   { name: 'GET /api/suites', call: (a) => a.get('/api/suites'), expect: signedIn(200) },
-  { name: 'GET /api/suites/:slug', call: async (a) => a.get(`/api/suites/${await freshSuite('draft')}`), expect: signedIn(200) },
-  { name: 'POST /api/suites', call: (a, who) => a.post('/api/suites').send(demoSuiteBody(`table-new-${who}`)), expect: signedIn(201) },
+  {
+    name: 'GET /api/suites/:slug',
+    call: async (a) => a.get(`/api/suites/${await freshSuite('draft')}`),
+    expect: signedIn(200),
+  },
+  {
+    name: 'POST /api/suites',
+    call: (a, who) => a.post('/api/suites').send(demoSuiteBody(`table-new-${who}`)),
+    expect: signedIn(201),
+  },
   {
     name: 'PUT /api/suites/:slug (a new version of an approved suite)',
     call: async (a) => {
@@ -119,12 +152,18 @@ const ROUTES: RouteCase[] = [
   },
   {
     name: 'POST /api/suites/upload',
-    call: (a, who) => a.post('/api/suites/upload').attach('file', Buffer.from(JSON.stringify(demoSuiteBody(`table-upload-${who}`))), 'suite.json'),
+    call: (a, who) =>
+      a
+        .post('/api/suites/upload')
+        .attach('file', Buffer.from(JSON.stringify(demoSuiteBody(`table-upload-${who}`))), 'suite.json'),
     expect: signedIn(201),
   },
   {
     name: 'POST /api/suites/:slug/reference-table',
-    call: async (a) => a.post(`/api/suites/${await freshSuite('draft')}/reference-table`).attach('file', Buffer.from('z_re,z_im,expected_re,expected_im,source\n4,0,2,0,x\n'), 'table.csv'),
+    call: async (a) =>
+      a
+        .post(`/api/suites/${await freshSuite('draft')}/reference-table`)
+        .attach('file', Buffer.from('z_re,z_im,expected_re,expected_im,source\n4,0,2,0,x\n'), 'table.csv'),
     expect: signedIn(200),
   },
   {
@@ -134,7 +173,8 @@ const ROUTES: RouteCase[] = [
   },
   {
     name: 'POST /api/suites/:slug/versions/:version/review',
-    call: async (a) => a.post(`/api/suites/${await freshSuite('submitted')}/versions/1/review`).send({ decision: 'approve' }),
+    call: async (a) =>
+      a.post(`/api/suites/${await freshSuite('submitted')}/versions/1/review`).send({ decision: 'approve' }),
     expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 200, contributor: 403 },
   },
   {
@@ -142,51 +182,115 @@ const ROUTES: RouteCase[] = [
     call: async (a) => a.post(`/api/suites/${await freshSuite('approved')}/versions/1/retire`),
     expect: { 'signed-out': 401, admin: 200, maintainer: 200, reviewer: 200, contributor: 403 },
   },
-  { name: 'GET /api/outbox', call: (a) => a.get('/api/outbox'), expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 } },
+  {
+    name: 'GET /api/outbox',
+    call: (a) => a.get('/api/outbox'),
+    expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 },
+  },
   {
     name: 'GET /api/outbox/:id',
     call: async (a) => {
-      const [row] = await t.db.dataSource.query(`INSERT INTO received_mail (envelope_from, envelope_to, subject, text_body, raw) VALUES ('a@x.test', '{b@x.test}', 's', 't', 'r') RETURNING id`);
+      const [row] = await t.db.dataSource.query(
+        `INSERT INTO received_mail (envelope_from, envelope_to, subject, text_body, raw) VALUES ('a@x.test', '{b@x.test}', 's', 't', 'r') RETURNING id`,
+      );
       return a.get(`/api/outbox/${row.id}`);
     },
     expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 },
   },
   { name: 'GET /api/targets', call: (a) => a.get('/api/targets'), expect: signedIn(200) },
-  { name: 'GET /api/targets/:name/fingerprint', call: (a) => a.get(`/api/targets/${encodeURIComponent(targetName)}/fingerprint?fn=sqrt`), expect: signedIn(200) },
-  { name: 'GET /api/targets/:name/cut-map', call: (a) => a.get(`/api/targets/${encodeURIComponent(targetName)}/cut-map?fn=sqrt&grid=5x5`), expect: signedIn(200) },
-  { name: 'GET /api/targets/:library/version-matrix', call: (a) => a.get('/api/targets/complex.js/version-matrix?suite=table-plan-suite'), expect: signedIn(200) },
+  {
+    name: 'GET /api/targets/:name/fingerprint',
+    call: (a) => a.get(`/api/targets/${encodeURIComponent(targetName)}/fingerprint?fn=sqrt`),
+    expect: signedIn(200),
+  },
+  {
+    name: 'GET /api/targets/:name/cut-map',
+    call: (a) => a.get(`/api/targets/${encodeURIComponent(targetName)}/cut-map?fn=sqrt&grid=5x5`),
+    expect: signedIn(200),
+  },
+  {
+    name: 'GET /api/targets/:library/version-matrix',
+    call: (a) => a.get('/api/targets/complex.js/version-matrix?suite=table-plan-suite'),
+    expect: signedIn(200),
+  },
   { name: 'GET /api/plans', call: (a) => a.get('/api/plans'), expect: signedIn(200) },
   { name: 'GET /api/plans/:id', call: async (a) => a.get(`/api/plans/${await freshPlan()}`), expect: signedIn(200) },
   {
     name: 'POST /api/plans',
-    call: (a, who) => a.post('/api/plans').send({ name: `table new plan ${who}`, recipients: [], suites: ['table-plan-suite'], targets: [targetName] }),
+    call: (a, who) =>
+      a
+        .post('/api/plans')
+        .send({ name: `table new plan ${who}`, recipients: [], suites: ['table-plan-suite'], targets: [targetName] }),
     expect: { 'signed-out': 401, admin: 201, maintainer: 201, reviewer: 403, contributor: 403 },
   },
   {
     name: 'PUT /api/plans/:id',
-    call: async (a, who) => a.put(`/api/plans/${await freshPlan()}`).send({ name: `table renamed ${who}`, recipients: [], suites: ['table-plan-suite'], targets: [targetName] }),
+    call: async (a, who) =>
+      a
+        .put(`/api/plans/${await freshPlan()}`)
+        .send({ name: `table renamed ${who}`, recipients: [], suites: ['table-plan-suite'], targets: [targetName] }),
     expect: { 'signed-out': 401, admin: 200, maintainer: 200, reviewer: 403, contributor: 403 },
   },
-  { name: 'DELETE /api/plans/:id', call: async (a) => a.delete(`/api/plans/${await freshPlan()}`), expect: { 'signed-out': 401, admin: 204, maintainer: 204, reviewer: 403, contributor: 403 } },
+  {
+    name: 'DELETE /api/plans/:id',
+    call: async (a) => a.delete(`/api/plans/${await freshPlan()}`),
+    expect: { 'signed-out': 401, admin: 204, maintainer: 204, reviewer: 403, contributor: 403 },
+  },
   { name: 'GET /api/schedules', call: (a) => a.get('/api/schedules'), expect: signedIn(200) },
-  { name: 'POST /api/schedules/preview', call: (a) => a.post('/api/schedules/preview').send({ cron: '0 3 * * *', timeZone: 'UTC' }), expect: signedIn(200) },
+  {
+    name: 'POST /api/schedules/preview',
+    call: (a) => a.post('/api/schedules/preview').send({ cron: '0 3 * * *', timeZone: 'UTC' }),
+    expect: signedIn(200),
+  },
   {
     name: 'POST /api/schedules',
     call: async (a) => a.post('/api/schedules').send({ planId: await freshPlan(), cron: '0 3 * * *', timeZone: 'UTC' }),
     expect: { 'signed-out': 401, admin: 201, maintainer: 201, reviewer: 403, contributor: 403 },
   },
-  { name: 'PATCH /api/schedules/:id', call: async (a) => a.patch(`/api/schedules/${await freshSchedule()}`).send({ enabled: false }), expect: { 'signed-out': 401, admin: 200, maintainer: 200, reviewer: 403, contributor: 403 } },
-  { name: 'DELETE /api/schedules/:id', call: async (a) => a.delete(`/api/schedules/${await freshSchedule()}`), expect: { 'signed-out': 401, admin: 204, maintainer: 204, reviewer: 403, contributor: 403 } },
+  {
+    name: 'PATCH /api/schedules/:id',
+    call: async (a) => a.patch(`/api/schedules/${await freshSchedule()}`).send({ enabled: false }),
+    expect: { 'signed-out': 401, admin: 200, maintainer: 200, reviewer: 403, contributor: 403 },
+  },
+  {
+    name: 'DELETE /api/schedules/:id',
+    call: async (a) => a.delete(`/api/schedules/${await freshSchedule()}`),
+    expect: { 'signed-out': 401, admin: 204, maintainer: 204, reviewer: 403, contributor: 403 },
+  },
   { name: 'GET /api/runs', call: (a) => a.get('/api/runs'), expect: signedIn(200) },
-  { name: 'GET /api/runs (filtered, one page)', call: (a) => a.get('/api/runs?status=queued&trigger=manual&limit=5'), expect: signedIn(200) },
+  {
+    name: 'GET /api/runs (filtered, one page)',
+    call: (a) => a.get('/api/runs?status=queued&trigger=manual&limit=5'),
+    expect: signedIn(200),
+  },
   { name: 'GET /api/overview', call: (a) => a.get('/api/overview'), expect: signedIn(200) },
-  { name: 'POST /api/runs', call: async (a) => a.post('/api/runs').send({ planId: await freshPlan() }), expect: { 'signed-out': 401, admin: 202, maintainer: 202, reviewer: 403, contributor: 403 } },
+  {
+    name: 'POST /api/runs',
+    call: async (a) => a.post('/api/runs').send({ planId: await freshPlan() }),
+    expect: { 'signed-out': 401, admin: 202, maintainer: 202, reviewer: 403, contributor: 403 },
+  },
   { name: 'GET /api/runs/:id', call: async (a) => a.get(`/api/runs/${await freshRun()}`), expect: signedIn(200) },
-  { name: 'GET /api/runs/:id/matrix', call: async (a) => a.get(`/api/runs/${await freshRun()}/matrix`), expect: signedIn(200) },
-  { name: 'GET /api/runs/:id/properties', call: async (a) => a.get(`/api/runs/${await freshRun()}/properties`), expect: signedIn(200) },
-  { name: 'POST /api/runs/:id/cancel', call: async (a) => a.post(`/api/runs/${await freshRun()}/cancel`), expect: { 'signed-out': 401, admin: 200, maintainer: 200, reviewer: 403, contributor: 403 } },
+  {
+    name: 'GET /api/runs/:id/matrix',
+    call: async (a) => a.get(`/api/runs/${await freshRun()}/matrix`),
+    expect: signedIn(200),
+  },
+  {
+    name: 'GET /api/runs/:id/properties',
+    call: async (a) => a.get(`/api/runs/${await freshRun()}/properties`),
+    expect: signedIn(200),
+  },
+  {
+    name: 'POST /api/runs/:id/cancel',
+    call: async (a) => a.post(`/api/runs/${await freshRun()}/cancel`),
+    expect: { 'signed-out': 401, admin: 200, maintainer: 200, reviewer: 403, contributor: 403 },
+  },
   { name: 'GET /api/failures', call: (a) => a.get('/api/failures'), expect: signedIn(200) },
-  { name: 'GET /api/failures/export.csv', call: async (a) => a.get(`/api/failures/export.csv?run=${await freshRun()}`), expect: signedIn(200) },
+  {
+    name: 'GET /api/failures/export.csv',
+    call: async (a) => a.get(`/api/failures/export.csv?run=${await freshRun()}`),
+    expect: signedIn(200),
+  },
   { name: 'GET /api/failures/:id (none stored)', call: (a) => a.get('/api/failures/1'), expect: signedIn(404) },
   {
     name: 'POST /api/failures/:id/classify',
@@ -204,10 +308,17 @@ const ROUTES: RouteCase[] = [
   },
   {
     name: 'POST /api/failures/:id/classify (accepted deviation)',
-    call: async (a) => a.post(`/api/failures/${await freshFailure()}/classify`).send({ classification: 'accepted', reason: 'documented upstream', expiresAt: '2099-01-01T00:00:00Z' }),
+    call: async (a) =>
+      a
+        .post(`/api/failures/${await freshFailure()}/classify`)
+        .send({ classification: 'accepted', reason: 'documented upstream', expiresAt: '2099-01-01T00:00:00Z' }),
     expect: { 'signed-out': 401, admin: 201, maintainer: 201, reviewer: 201, contributor: 403 },
   },
-  { name: 'GET /api/failures/:id/path', call: async (a) => a.get(`/api/failures/${await freshFailure()}/path`), expect: signedIn(200) },
+  {
+    name: 'GET /api/failures/:id/path',
+    call: async (a) => a.get(`/api/failures/${await freshFailure()}/path`),
+    expect: signedIn(200),
+  },
   { name: 'GET /api/deviations', call: (a) => a.get('/api/deviations'), expect: signedIn(200) },
   {
     name: 'POST /api/deviations/:id/revoke',
@@ -232,7 +343,11 @@ const ROUTES: RouteCase[] = [
     expect: signedIn(200),
   },
   { name: 'GET /api/subscriptions', call: (a) => a.get('/api/subscriptions'), expect: signedIn(200) },
-  { name: 'PUT /api/subscriptions', call: (a) => a.put('/api/subscriptions').send({ targetKeys: ['complex.js'] }), expect: signedIn(200) },
+  {
+    name: 'PUT /api/subscriptions',
+    call: (a) => a.put('/api/subscriptions').send({ targetKeys: ['complex.js'] }),
+    expect: signedIn(200),
+  },
   { name: 'GET /api/unknown-route', call: (a) => a.get('/api/unknown-route'), expect: all(404) },
   { name: 'POST /api/auth/sign-out', ownSession: true, call: (a) => a.post('/api/auth/sign-out'), expect: all(204) },
 ];
@@ -241,9 +356,13 @@ describe('route × caller table', () => {
   const cases = ROUTES.flatMap((route) => WHO.map((who) => [route.name, who, route.expect[who], route] as const));
 
   it.each(cases)('%s answers %s with %i', async (_name, who, status, route) => {
-    const caller = who === 'signed-out' ? request(t.app) : route.ownSession ? await signInAs(t.app, who) : await agentFor(who);
+    const caller =
+      who === 'signed-out' ? request(t.app) : route.ownSession ? await signInAs(t.app, who) : await agentFor(who);
     const res = await route.call(caller, who);
-    expect({ status: res.status, body: res.status >= 400 ? res.body : undefined }).toEqual({ status, body: res.status >= 400 ? expect.anything() : undefined });
+    expect({ status: res.status, body: res.status >= 400 ? res.body : undefined }).toEqual({
+      status,
+      body: res.status >= 400 ? expect.anything() : undefined,
+    });
     if (status === 401) expect(res.body.kind).toBe('signed-out');
     if (status === 403) expect(res.body.kind).toBe('forbidden');
   });

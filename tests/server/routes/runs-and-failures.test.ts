@@ -14,19 +14,38 @@ describe('runs and the failure table', () => {
     t = await startTestApp();
     await approvedSuite(t.db.dataSource, 'runs-sqrt');
     kwame = await signInAs(t.app, 'maintainer');
-    const target = (await t.db.dataSource.query(`SELECT name FROM targets WHERE library = 'complex.js' AND installed ORDER BY name LIMIT 2`)).map((r: { name: string }) => r.name);
-    const plan = await kwame.post('/api/plans').send({ name: 'runs plan', recipients: [], suites: ['runs-sqrt'], targets: target });
+    const target = (
+      await t.db.dataSource.query(
+        `SELECT name FROM targets WHERE library = 'complex.js' AND installed ORDER BY name LIMIT 2`,
+      )
+    ).map((r: { name: string }) => r.name);
+    const plan = await kwame
+      .post('/api/plans')
+      .send({ name: 'runs plan', recipients: [], suites: ['runs-sqrt'], targets: target });
     const run = await kwame.post('/api/runs').send({ planId: plan.body.plan.id });
     expect(run.status).toBe(202);
     runId = run.body.run.id;
     // 120 synthetic failing points over two diagnoses, to exercise filters and keyed pages.
     const [shard] = await t.db.dataSource.query(`SELECT id, suite_slug FROM shards WHERE run_id = $1 LIMIT 1`, [runId]);
     for (let i = 0; i < 120; i += 1) {
-      const diagnosis = i % 3 === 0 ? { kind: 'zero-sign', part: 'im', of: 'input' } : { kind: 'inaccurate', ulps: i, relativeError: i * 1e-16 };
+      const diagnosis =
+        i % 3 === 0
+          ? { kind: 'zero-sign', part: 'im', of: 'input' }
+          : { kind: 'inaccurate', ulps: i, relativeError: i * 1e-16 };
       await t.db.dataSource.query(
         `INSERT INTO failures (run_id, shard_id, suite_slug, suite_version, target_name, target_library, target_version, convention, path_name, point_index, t, z, z_hex, point_key, expected, actual, outcome_kind, diagnosis_kind, diagnosis, ulps, rule, reproducer, is_regression)
          VALUES ($1, $2, 'runs-sqrt', 1, 'complex.js@2.4.3', 'complex.js', '2.4.3', 'signed-zero', 'p', $3, $4, '{"re":"-4","im":"-0"}', '{"re":"-0x1p+2","im":"-0x0p+0"}', $5, '{"re":"0","im":"-2"}', '{"re":"0","im":"2"}', 'fail', $6, $7, $8, 'ISO/IEC 9899:2011 G.6.4.2', 'x', $9)`,
-        [runId, shard.id, i, i / 120, `k${i}`, diagnosis.kind, JSON.stringify(diagnosis), diagnosis.kind === 'inaccurate' ? i : null, i % 10 === 0],
+        [
+          runId,
+          shard.id,
+          i,
+          i / 120,
+          `k${i}`,
+          diagnosis.kind,
+          JSON.stringify(diagnosis),
+          diagnosis.kind === 'inaccurate' ? i : null,
+          i % 10 === 0,
+        ],
       );
     }
   });
@@ -34,7 +53,14 @@ describe('runs and the failure table', () => {
 
   it('starts a run of one shard per suite × target and shows it queued', async () => {
     const run = (await kwame.get(`/api/runs/${runId}`)).body.run;
-    expect(run).toMatchObject({ planName: 'runs plan', trigger: 'manual', status: 'queued', shardsTotal: 2, shardsDone: 0, requestedBy: 'Kwame Asante' });
+    expect(run).toMatchObject({
+      planName: 'runs plan',
+      trigger: 'manual',
+      status: 'queued',
+      shardsTotal: 2,
+      shardsDone: 0,
+      requestedBy: 'Kwame Asante',
+    });
     const matrix = (await kwame.get(`/api/runs/${runId}/matrix`)).body.cells;
     expect(matrix).toHaveLength(2);
     expect(matrix[0]).toMatchObject({ suite: 'runs-sqrt', status: 'queued' });
@@ -47,7 +73,9 @@ describe('runs and the failure table', () => {
     const seen = new Set<string>();
     let after: string | null = null;
     do {
-      const page: { body: { failures: { id: string }[]; next: string | null } } = await kwame.get(`/api/failures?run=${runId}&limit=50${after ? `&after=${after}` : ''}`);
+      const page: { body: { failures: { id: string }[]; next: string | null } } = await kwame.get(
+        `/api/failures?run=${runId}&limit=50${after ? `&after=${after}` : ''}`,
+      );
       for (const f of page.body.failures) seen.add(f.id);
       after = page.body.next;
     } while (after);
@@ -67,7 +95,9 @@ describe('runs and the failure table', () => {
     for (const q of queries) {
       const query = { sort: 'id' as const, run: runId, ...q };
       const { rows, next } = await searchFailures(t.db.dataSource, query);
-      expect(JSON.parse(await failurePageJson(t.db.dataSource, query))).toEqual(JSON.parse(JSON.stringify({ failures: rows, next })));
+      expect(JSON.parse(await failurePageJson(t.db.dataSource, query))).toEqual(
+        JSON.parse(JSON.stringify({ failures: rows, next })),
+      );
     }
   });
 
@@ -98,7 +128,9 @@ describe('runs and the failure table', () => {
 
   it('sorts by ulps, largest first, across pages', async () => {
     const first = (await kwame.get(`/api/failures?run=${runId}&diagnosis=inaccurate&sort=ulps&limit=30`)).body;
-    const second = (await kwame.get(`/api/failures?run=${runId}&diagnosis=inaccurate&sort=ulps&limit=30&after=${first.next}`)).body;
+    const second = (
+      await kwame.get(`/api/failures?run=${runId}&diagnosis=inaccurate&sort=ulps&limit=30&after=${first.next}`)
+    ).body;
     const ulps = [...first.failures, ...second.failures].map((f: { ulps: number }) => f.ulps);
     expect(ulps).toHaveLength(60);
     expect([...ulps].sort((a, b) => b - a)).toEqual(ulps);
@@ -139,8 +171,12 @@ describe('verdicts on failures', () => {
     t = await startTestApp();
     await approvedSuite(t.db.dataSource, 'verdict-sqrt');
     const admin = await signInAs(t.app, 'admin');
-    const target = (await t.db.dataSource.query(`SELECT name FROM targets WHERE library = 'complex.js' AND installed LIMIT 1`))[0].name;
-    const plan = await admin.post('/api/plans').send({ name: 'verdict plan', recipients: [], suites: ['verdict-sqrt'], targets: [target] });
+    const target = (
+      await t.db.dataSource.query(`SELECT name FROM targets WHERE library = 'complex.js' AND installed LIMIT 1`)
+    )[0].name;
+    const plan = await admin
+      .post('/api/plans')
+      .send({ name: 'verdict plan', recipients: [], suites: ['verdict-sqrt'], targets: [target] });
     runId = (await admin.post('/api/runs').send({ planId: plan.body.plan.id })).body.run.id;
     const [shard] = await t.db.dataSource.query(`SELECT id FROM shards WHERE run_id = $1`, [runId]);
     for (const [i, path] of ['a', 'a', 'b'].entries()) {
@@ -156,10 +192,25 @@ describe('verdicts on failures', () => {
   it('accepts a deviation for a path until it expires, moving its failures from known to accepted', async () => {
     const hanne = await signInAs(t.app, 'reviewer');
     const [first] = (await hanne.get(`/api/failures?run=${runId}&limit=1`)).body.failures;
-    const res = await hanne.post(`/api/failures/${first.id}/classify`).send({ classification: 'accepted', scope: 'path', reason: 'complex.js documents that it ignores the sign of zero.', expiresAt: '2099-01-01T00:00:00Z' });
+    const res = await hanne
+      .post(`/api/failures/${first.id}/classify`)
+      .send({
+        classification: 'accepted',
+        scope: 'path',
+        reason: 'complex.js documents that it ignores the sign of zero.',
+        expiresAt: '2099-01-01T00:00:00Z',
+      });
     expect(res.status).toBe(201);
-    expect((await hanne.get(`/api/failures?run=${runId}&status=accepted`)).body.failures.map((f: { pathName: string }) => f.pathName)).toEqual(['a', 'a']);
-    expect((await hanne.get(`/api/failures?run=${runId}&status=known`)).body.failures.map((f: { pathName: string }) => f.pathName)).toEqual(['b']);
+    expect(
+      (await hanne.get(`/api/failures?run=${runId}&status=accepted`)).body.failures.map(
+        (f: { pathName: string }) => f.pathName,
+      ),
+    ).toEqual(['a', 'a']);
+    expect(
+      (await hanne.get(`/api/failures?run=${runId}&status=known`)).body.failures.map(
+        (f: { pathName: string }) => f.pathName,
+      ),
+    ).toEqual(['b']);
 
     const revoked = await hanne.post(`/api/deviations/${res.body.deviation.id}/revoke`);
     expect(revoked.body.deviation.revokedAt).not.toBeNull();
@@ -172,14 +223,18 @@ describe('verdicts on failures', () => {
     const res = await hanne.post(`/api/failures/${first.id}/classify`).send({ classification: 'accepted', reason: '' });
     expect(res.status).toBe(400);
     expect(res.body.issues.map((i: { field: string }) => i.field).sort()).toEqual(['body.expiresAt', 'body.reason']);
-    const past = await hanne.post(`/api/failures/${first.id}/classify`).send({ classification: 'accepted', reason: 'old news', expiresAt: '2001-01-01T00:00:00Z' });
+    const past = await hanne
+      .post(`/api/failures/${first.id}/classify`)
+      .send({ classification: 'accepted', reason: 'old news', expiresAt: '2001-01-01T00:00:00Z' });
     expect(past.body.issues).toEqual([{ field: 'body.expiresAt', rule: 'must lie in the future' }]);
   });
 
   it('records a bug verdict without an expiry', async () => {
     const hanne = await signInAs(t.app, 'reviewer');
     const [first] = (await hanne.get(`/api/failures?run=${runId}&limit=1`)).body.failures;
-    const res = await hanne.post(`/api/failures/${first.id}/classify`).send({ classification: 'bug', scope: 'point', reason: 'Reported upstream.' });
+    const res = await hanne
+      .post(`/api/failures/${first.id}/classify`)
+      .send({ classification: 'bug', scope: 'point', reason: 'Reported upstream.' });
     expect(res.body.deviation).toMatchObject({ classification: 'bug', scope: 'point', expiresAt: null });
   });
 });

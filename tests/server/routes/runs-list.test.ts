@@ -22,32 +22,53 @@ describe('GET /api/runs filters and pages', () => {
     t = await startTestApp();
     await approvedSuite(t.db.dataSource, 'list-sqrt');
     kwame = await signInAs(t.app, 'maintainer');
-    const target = (await t.db.dataSource.query(`SELECT name FROM targets WHERE installed ORDER BY name LIMIT 1`))[0].name;
+    const target = (await t.db.dataSource.query(`SELECT name FROM targets WHERE installed ORDER BY name LIMIT 1`))[0]
+      .name;
     for (const name of ['list nightly', 'list release']) {
-      const plan = await kwame.post('/api/plans').send({ name, recipients: [], suites: ['list-sqrt'], targets: [target] });
+      const plan = await kwame
+        .post('/api/plans')
+        .send({ name, recipients: [], suites: ['list-sqrt'], targets: [target] });
       started[plan.body.plan.id] = [];
-      for (let i = 0; i < 4; i += 1) started[plan.body.plan.id]!.push((await kwame.post('/api/runs').send({ planId: plan.body.plan.id })).body.run.id);
+      for (let i = 0; i < 4; i += 1)
+        started[plan.body.plan.id]!.push(
+          (await kwame.post('/api/runs').send({ planId: plan.body.plan.id })).body.run.id,
+        );
     }
     [nightly, release] = Object.keys(started) as [string, string];
     // Two of the nightly runs finished, one of them started by the schedule.
-    await t.db.dataSource.query(`UPDATE runs SET status = 'completed' WHERE id = ANY($1)`, [started[nightly]!.slice(0, 2)]);
-    await t.db.dataSource.query(`UPDATE runs SET trigger = 'schedule', requested_by = NULL WHERE id = $1`, [started[nightly]![0]]);
+    await t.db.dataSource.query(`UPDATE runs SET status = 'completed' WHERE id = ANY($1)`, [
+      started[nightly]!.slice(0, 2),
+    ]);
+    await t.db.dataSource.query(`UPDATE runs SET trigger = 'schedule', requested_by = NULL WHERE id = $1`, [
+      started[nightly]![0],
+    ]);
   });
   afterAll(() => t.stop());
 
   it('lists the newest runs first, with the plan and who started them', async () => {
     const { runs, next } = await list('');
     expect(runs.map((r) => r.id)).toEqual([...started[release]!].reverse().concat([...started[nightly]!].reverse()));
-    expect(runs[0]).toMatchObject({ planName: 'list release', trigger: 'manual', requestedBy: 'Kwame Asante', status: 'queued' });
+    expect(runs[0]).toMatchObject({
+      planName: 'list release',
+      trigger: 'manual',
+      requestedBy: 'Kwame Asante',
+      status: 'queued',
+    });
     expect(next).toBeNull();
   });
 
   it('filters by plan, by status and by trigger, alone and together', async () => {
     expect((await list(`?plan=${nightly}`)).runs.map((r) => r.id)).toEqual([...started[nightly]!].reverse());
-    expect((await list('?status=completed')).runs.map((r) => r.id)).toEqual([started[nightly]![1], started[nightly]![0]]);
+    expect((await list('?status=completed')).runs.map((r) => r.id)).toEqual([
+      started[nightly]![1],
+      started[nightly]![0],
+    ]);
     expect((await list('?trigger=schedule')).runs.map((r) => r.id)).toEqual([started[nightly]![0]]);
     expect((await list(`?plan=${release}&status=completed`)).runs).toEqual([]);
-    expect((await list(`?plan=${nightly}&status=queued&trigger=manual`)).runs.map((r) => r.id)).toEqual([started[nightly]![3], started[nightly]![2]]);
+    expect((await list(`?plan=${nightly}&status=queued&trigger=manual`)).runs.map((r) => r.id)).toEqual([
+      started[nightly]![3],
+      started[nightly]![2],
+    ]);
   });
 
   it('pages by the last run of the previous page without repeating or losing a run', async () => {
@@ -69,6 +90,12 @@ describe('GET /api/runs filters and pages', () => {
     const res = await kwame.get('/api/runs?plan=nightly&status=done&trigger=cron&limit=0&colour=green');
     expect(res.status).toBe(400);
     expect(res.body.kind).toBe('invalid-input');
-    expect(res.body.issues.map((i: { field: string }) => i.field).sort()).toEqual(['query', 'query.limit', 'query.plan', 'query.status', 'query.trigger']);
+    expect(res.body.issues.map((i: { field: string }) => i.field).sort()).toEqual([
+      'query',
+      'query.limit',
+      'query.plan',
+      'query.status',
+      'query.trigger',
+    ]);
   });
 });

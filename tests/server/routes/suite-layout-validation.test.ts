@@ -14,9 +14,24 @@ describe('suite validation on save and upload', () => {
   afterAll(() => t.stop());
 
   const finiteCut = (id: string) => {
-    const body = demoSuiteBody(id, 'sqrt-z2-minus-1-finite-cut') as Record<string, unknown> & { branch: Record<string, unknown> };
+    const body = demoSuiteBody(id, 'sqrt-z2-minus-1-finite-cut') as Record<string, unknown> & {
+      branch: Record<string, unknown>;
+    };
     // (z(z−1))^{1/3} with the one finite cut [0, 1]: the loop around it has monodromy e^{2πi·2/3}.
-    body.branch = { ...body.branch, g: 'z*(z - 1)', nu: '1/3', cuts: [{ points: [{ re: '0', im: '0' }, { re: '1', im: '0' }], to_infinity: false }] };
+    body.branch = {
+      ...body.branch,
+      g: 'z*(z - 1)',
+      nu: '1/3',
+      cuts: [
+        {
+          points: [
+            { re: '0', im: '0' },
+            { re: '1', im: '0' },
+          ],
+          to_infinity: false,
+        },
+      ],
+    };
     return body;
   };
 
@@ -25,13 +40,20 @@ describe('suite validation on save and upload', () => {
     expect(res.status).toBe(400);
     expect(res.body.issues).toEqual([
       { field: 'body.title', rule: 'must be at least 3 characters' },
-      { field: 'body.branch.cuts', rule: expect.stringMatching(/^the loop around the cut through \(0, 0\), \(1, 0\) crosses no cut but has monodromy e\^\{2πi·2\/3\} ≠ 1/) },
+      {
+        field: 'body.branch.cuts',
+        rule: expect.stringMatching(
+          /^the loop around the cut through \(0, 0\), \(1, 0\) crosses no cut but has monodromy e\^\{2πi·2\/3\} ≠ 1/,
+        ),
+      },
     ]);
     expect((await ravi.get('/api/suites/layout-and-title')).status).toBe(404);
   });
 
   it('refuses the same layout in an uploaded file under file.branch.cuts', async () => {
-    const res = await ravi.post('/api/suites/upload').attach('file', Buffer.from(JSON.stringify(finiteCut('layout-upload'))), 'layout-upload.json');
+    const res = await ravi
+      .post('/api/suites/upload')
+      .attach('file', Buffer.from(JSON.stringify(finiteCut('layout-upload'))), 'layout-upload.json');
     expect(res.status).toBe(400);
     expect(res.body.issues).toEqual([{ field: 'file.branch.cuts', rule: expect.stringMatching(/monodromy/) }]);
   });

@@ -8,30 +8,56 @@ describe('suites routes and review', () => {
   let ravi: request.Agent; // contributor
   let hanne: request.Agent; // reviewer
   let kwame: request.Agent; // maintainer
-  const rows = async () => (await t.db.dataSource.query(`SELECT (SELECT count(*) FROM suites)::int AS s, (SELECT count(*) FROM suite_versions)::int AS v`))[0];
+  const rows = async () =>
+    (
+      await t.db.dataSource.query(
+        `SELECT (SELECT count(*) FROM suites)::int AS s, (SELECT count(*) FROM suite_versions)::int AS v`,
+      )
+    )[0];
 
   beforeAll(async () => {
     t = await startTestApp();
-    [ravi, hanne, kwame] = await Promise.all([signInAs(t.app, 'contributor'), signInAs(t.app, 'reviewer'), signInAs(t.app, 'maintainer')]);
+    [ravi, hanne, kwame] = await Promise.all([
+      signInAs(t.app, 'contributor'),
+      signInAs(t.app, 'reviewer'),
+      signInAs(t.app, 'maintainer'),
+    ]);
   });
   afterAll(() => t.stop());
 
   it('takes a suite from draft through changes requested to approved, and a later edit makes version 2', async () => {
     const created = await ravi.post('/api/suites').send(demoSuiteBody('flow-sqrt'));
     expect(created.status).toBe(201);
-    expect(created.body.version).toMatchObject({ slug: 'flow-sqrt', version: 1, status: 'draft', author: { displayName: 'Ravi Dutta' } });
+    expect(created.body.version).toMatchObject({
+      slug: 'flow-sqrt',
+      version: 1,
+      status: 'draft',
+      author: { displayName: 'Ravi Dutta' },
+    });
 
     expect((await ravi.post('/api/suites/flow-sqrt/submit')).body.version.status).toBe('submitted');
-    const asked = await hanne.post('/api/suites/flow-sqrt/versions/1/review').send({ decision: 'request-changes', comment: 'Add a straddle at 1e-300.' });
-    expect(asked.body.version).toMatchObject({ status: 'changes-requested', reviewComment: 'Add a straddle at 1e-300.', reviewer: { displayName: 'Hanne Lindqvist' } });
+    const asked = await hanne
+      .post('/api/suites/flow-sqrt/versions/1/review')
+      .send({ decision: 'request-changes', comment: 'Add a straddle at 1e-300.' });
+    expect(asked.body.version).toMatchObject({
+      status: 'changes-requested',
+      reviewComment: 'Add a straddle at 1e-300.',
+      reviewer: { displayName: 'Hanne Lindqvist' },
+    });
 
-    const edited = await ravi.put('/api/suites/flow-sqrt').send({ ...demoSuiteBody('flow-sqrt'), title: 'Square root, edited after review' });
+    const edited = await ravi
+      .put('/api/suites/flow-sqrt')
+      .send({ ...demoSuiteBody('flow-sqrt'), title: 'Square root, edited after review' });
     expect(edited.status).toBe(200);
     expect(edited.body.version).toMatchObject({ version: 1, status: 'draft' });
     await ravi.post('/api/suites/flow-sqrt/submit');
-    expect((await hanne.post('/api/suites/flow-sqrt/versions/1/review').send({ decision: 'approve' })).body.version.status).toBe('approved');
+    expect(
+      (await hanne.post('/api/suites/flow-sqrt/versions/1/review').send({ decision: 'approve' })).body.version.status,
+    ).toBe('approved');
 
-    const next = await ravi.put('/api/suites/flow-sqrt').send({ ...demoSuiteBody('flow-sqrt'), title: 'Square root, second edition' });
+    const next = await ravi
+      .put('/api/suites/flow-sqrt')
+      .send({ ...demoSuiteBody('flow-sqrt'), title: 'Square root, second edition' });
     expect(next.status).toBe(201);
     expect(next.body.version).toMatchObject({ version: 2, status: 'draft', body: { version: 2 } });
     const all = await kwame.get('/api/suites/flow-sqrt');
@@ -40,7 +66,9 @@ describe('suites routes and review', () => {
       [1, 'approved'],
     ]);
     const listed = (await kwame.get('/api/suites?q=flow-sqrt')).body.suites;
-    expect(listed).toEqual([expect.objectContaining({ slug: 'flow-sqrt', latestVersion: 2, latestStatus: 'draft', approvedVersion: 1 })]);
+    expect(listed).toEqual([
+      expect.objectContaining({ slug: 'flow-sqrt', latestVersion: 2, latestStatus: 'draft', approvedVersion: 1 }),
+    ]);
   });
 
   it('lets nobody review their own suite', async () => {
@@ -57,7 +85,9 @@ describe('suites routes and review', () => {
   });
 
   it('refuses to review a version that is not submitted, and to edit one under review', async () => {
-    expect((await hanne.post('/api/suites/flow-sqrt/versions/2/review').send({ decision: 'approve' })).status).toBe(409);
+    expect((await hanne.post('/api/suites/flow-sqrt/versions/2/review').send({ decision: 'approve' })).status).toBe(
+      409,
+    );
     await ravi.post('/api/suites').send(demoSuiteBody('under-review'));
     await ravi.post('/api/suites/under-review/submit');
     expect((await ravi.put('/api/suites/under-review').send(demoSuiteBody('under-review'))).status).toBe(409);
@@ -79,14 +109,25 @@ describe('suites routes and review', () => {
   });
 
   it('names the field and the rule for a suite the schema refuses, and for an invalid cut layout', async () => {
-    const bad = { ...demoSuiteBody('bad-radius'), paths: [{ kind: 'circle', name: 'c', center: { re: '0', im: '0' }, radius: 2, samples: 8 }] };
+    const bad = {
+      ...demoSuiteBody('bad-radius'),
+      paths: [{ kind: 'circle', name: 'c', center: { re: '0', im: '0' }, radius: 2, samples: 8 }],
+    };
     const res = await ravi.post('/api/suites').send(bad);
     expect(res.status).toBe(400);
     expect(res.body.issues).toEqual([{ field: 'body.paths.0.radius', rule: 'must be a number written as a string' }]);
 
     const regular = demoSuiteBody('bad-layout', 'sqrt-z2-minus-1-finite-cut');
     if (regular.branch.kind !== 'regular') throw new Error('expected a regular demo suite');
-    regular.branch.cuts = [{ points: [{ re: '1', im: '0' }, { re: '2', im: '0' }], to_infinity: true }];
+    regular.branch.cuts = [
+      {
+        points: [
+          { re: '1', im: '0' },
+          { re: '2', im: '0' },
+        ],
+        to_infinity: true,
+      },
+    ];
     const layout = await ravi.post('/api/suites').send(regular);
     expect(layout.status).toBe(400);
     expect(layout.body.issues[0].field).toBe('body.branch.cuts');
@@ -94,9 +135,19 @@ describe('suites routes and review', () => {
 
   it('creates a suite from an uploaded file and updates it from the next upload', async () => {
     const file = Buffer.from(JSON.stringify(demoSuiteBody('uploaded-log', 'log-principal-sz')));
-    const first = await ravi.post('/api/suites/upload').attach('file', file, { filename: 'uploaded-log.json', contentType: 'application/json' });
+    const first = await ravi
+      .post('/api/suites/upload')
+      .attach('file', file, { filename: 'uploaded-log.json', contentType: 'application/json' });
     expect(first.status).toBe(201);
-    const again = await ravi.post('/api/suites/upload').attach('file', Buffer.from(JSON.stringify({ ...demoSuiteBody('uploaded-log', 'log-principal-sz'), title: 'Log, uploaded twice' })), 'uploaded-log.json');
+    const again = await ravi
+      .post('/api/suites/upload')
+      .attach(
+        'file',
+        Buffer.from(
+          JSON.stringify({ ...demoSuiteBody('uploaded-log', 'log-principal-sz'), title: 'Log, uploaded twice' }),
+        ),
+        'uploaded-log.json',
+      );
     expect(again.status).toBe(200);
     expect(again.body.version).toMatchObject({ version: 1, body: { title: 'Log, uploaded twice' } });
   });
@@ -106,15 +157,21 @@ describe('suites routes and review', () => {
     const notJson = await ravi.post('/api/suites/upload').attach('file', Buffer.from('{"id": '), 'broken.json');
     expect(notJson.status).toBe(400);
     expect(notJson.body.issues).toEqual([{ field: 'file', rule: 'must be valid JSON' }]);
-    const wrongType = await ravi.post('/api/suites/upload').attach('file', Buffer.from('id,subject'), { filename: 'suite.csv', contentType: 'text/csv' });
+    const wrongType = await ravi
+      .post('/api/suites/upload')
+      .attach('file', Buffer.from('id,subject'), { filename: 'suite.csv', contentType: 'text/csv' });
     expect(wrongType.status).toBe(415);
     const tooLarge = await ravi.post('/api/suites/upload').attach('file', Buffer.alloc(300 * 1024, 32), 'big.json');
     expect(tooLarge.status).toBe(413);
     const missing = await ravi.post('/api/suites/upload').field('note', 'no file');
     expect(missing.status).toBe(400);
     expect(missing.body.issues[0].field).toBe('file');
-    const invalid = await ravi.post('/api/suites/upload').attach('file', Buffer.from(JSON.stringify({ ...demoSuiteBody('x-y'), convention: 'sideways' })), 'x-y.json');
-    expect(invalid.body.issues).toEqual([{ field: 'file.convention', rule: 'must be signed-zero or counter-clockwise' }]);
+    const invalid = await ravi
+      .post('/api/suites/upload')
+      .attach('file', Buffer.from(JSON.stringify({ ...demoSuiteBody('x-y'), convention: 'sideways' })), 'x-y.json');
+    expect(invalid.body.issues).toEqual([
+      { field: 'file.convention', rule: 'must be signed-zero or counter-clockwise' },
+    ]);
     expect(await rows()).toEqual(before);
   });
 
@@ -135,18 +192,34 @@ describe('reference tables uploaded for a suite', () => {
     const ravi = await signInAs(t.app, 'contributor');
     await ravi.post('/api/suites').send(demoSuiteBody('table-sqrt'));
     // √(−4 − 0i) = 0 − 2i and √(3 + 4i) = 2 + i: ISO/IEC 9899:2011 G.6.4.2 and common practice; the third row is wrong on purpose.
-    const csv = 'z_re,z_im,expected_re,expected_im,source\n-4,-0,0,-2,Annex G\n3,4,2,1,by hand\n-4,-0,0,2,a library that ignores -0\n';
-    const res = await ravi.post('/api/suites/table-sqrt/reference-table').attach('file', Buffer.from(csv), { filename: 'sqrt.csv', contentType: 'text/csv' });
+    const csv =
+      'z_re,z_im,expected_re,expected_im,source\n-4,-0,0,-2,Annex G\n3,4,2,1,by hand\n-4,-0,0,2,a library that ignores -0\n';
+    const res = await ravi
+      .post('/api/suites/table-sqrt/reference-table')
+      .attach('file', Buffer.from(csv), { filename: 'sqrt.csv', contentType: 'text/csv' });
     expect(res.status).toBe(200);
     expect(res.body.check).toMatchObject({ rows: 3, agree: 2, invalid: [] });
-    expect(res.body.check.disagreements).toEqual([expect.objectContaining({ line: 4, source: 'a library that ignores -0', ours: { re: '0', im: '-2' } })]);
-    const [stored] = await t.db.dataSource.query(`SELECT kind, filename, bytes FROM uploads WHERE kind = 'reference-table'`);
+    expect(res.body.check.disagreements).toEqual([
+      expect.objectContaining({ line: 4, source: 'a library that ignores -0', ours: { re: '0', im: '-2' } }),
+    ]);
+    const [stored] = await t.db.dataSource.query(
+      `SELECT kind, filename, bytes FROM uploads WHERE kind = 'reference-table'`,
+    );
     expect(stored).toEqual({ kind: 'reference-table', filename: 'sqrt.csv', bytes: csv.length });
   });
 
   it('refuses a table that is not CSV, and one for a suite that does not exist', async () => {
     const ravi = await signInAs(t.app, 'contributor');
-    expect((await ravi.post('/api/suites/table-sqrt/reference-table').attach('file', Buffer.from('{}'), { filename: 'x.json', contentType: 'application/json' })).status).toBe(415);
-    expect((await ravi.post('/api/suites/no-such-suite/reference-table').attach('file', Buffer.from('z_re\n'), 'x.csv')).status).toBe(404);
+    expect(
+      (
+        await ravi
+          .post('/api/suites/table-sqrt/reference-table')
+          .attach('file', Buffer.from('{}'), { filename: 'x.json', contentType: 'application/json' })
+      ).status,
+    ).toBe(415);
+    expect(
+      (await ravi.post('/api/suites/no-such-suite/reference-table').attach('file', Buffer.from('z_re\n'), 'x.csv'))
+        .status,
+    ).toBe(404);
   });
 });

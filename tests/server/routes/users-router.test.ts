@@ -5,7 +5,8 @@ import { startTestApp, type TestApp } from '../../setup/test-app';
 describe('users routes', () => {
   let t: TestApp;
   let admin: request.Agent;
-  const idOf = async (email: string): Promise<string> => (await t.db.dataSource.query(`SELECT id FROM users WHERE email = $1`, [email]))[0].id;
+  const idOf = async (email: string): Promise<string> =>
+    (await t.db.dataSource.query(`SELECT id FROM users WHERE email = $1`, [email]))[0].id;
 
   beforeAll(async () => {
     t = await startTestApp();
@@ -16,7 +17,9 @@ describe('users routes', () => {
   it('lists every user without password hashes', async () => {
     const res = await admin.get('/api/users');
     expect(res.status).toBe(200);
-    expect(res.body.users.map((u: { email: string }) => u.email)).toEqual(expect.arrayContaining(['odile@sheetkeeper.test', 'mei@sheetkeeper.test']));
+    expect(res.body.users.map((u: { email: string }) => u.email)).toEqual(
+      expect.arrayContaining(['odile@sheetkeeper.test', 'mei@sheetkeeper.test']),
+    );
     expect(JSON.stringify(res.body)).not.toMatch(/password|\$2[aby]\$/);
   });
 
@@ -50,7 +53,9 @@ describe('users routes', () => {
   it('refuses an unknown role with the field and rule', async () => {
     const res = await admin.patch(`/api/users/${await idOf('ravi@sheetkeeper.test')}`).send({ role: 'owner' });
     expect(res.status).toBe(400);
-    expect(res.body.issues).toEqual([{ field: 'body.role', rule: 'must be one of admin, maintainer, reviewer, contributor' }]);
+    expect(res.body.issues).toEqual([
+      { field: 'body.role', rule: 'must be one of admin, maintainer, reviewer, contributor' },
+    ]);
   });
 
   it('answers 404 for a user that does not exist', async () => {

@@ -3,7 +3,9 @@ import path from 'node:path';
 import { seedDemoCatalogue } from '../../../server/seed/seed-demo-catalogue';
 import { createTestDatabase, type TestDatabase } from '../../setup/test-database';
 
-const DEMO_FILES = readdirSync(path.join(__dirname, '..', '..', '..', 'suites', 'demo')).filter((f) => f.endsWith('.json')).length;
+const DEMO_FILES = readdirSync(path.join(__dirname, '..', '..', '..', 'suites', 'demo')).filter((f) =>
+  f.endsWith('.json'),
+).length;
 
 describe('seedDemoCatalogue', () => {
   let db: TestDatabase;

@@ -13,17 +13,23 @@ describe('seedDemoRuns', () => {
   it('adds two completed nightly runs, the second with regressions from the complex.js upgrade and one regression mail, then nothing the second time', async () => {
     const options = { smtp: { host: '127.0.0.1', port: 9 }, appUrl: 'http://127.0.0.1:8460' };
     expect(await seedDemoRuns(db.dataSource, options)).toBe(2);
-    const runs = await db.dataSource.query(`SELECT status, shards_total AS "shards", regressions FROM runs ORDER BY created_at`);
+    const runs = await db.dataSource.query(
+      `SELECT status, shards_total AS "shards", regressions FROM runs ORDER BY created_at`,
+    );
     expect(runs.map((r: { status: string }) => r.status)).toEqual(['completed', 'completed']);
     // complex.js 2.4.1 started giving +0 where 2.3.0 gave the Annex G −0 (exp(3 − 0i), log(1 − 0i)):
     // seen with `sheetkeeper matrix --library complex.js`, so the upgrade must show as regressions.
     expect(runs[1].regressions).toBeGreaterThan(0);
-    const [{ failures }] = await db.dataSource.query(`SELECT count(*)::int AS failures FROM failures WHERE is_regression AND target_version <> '2.3.0'`);
+    const [{ failures }] = await db.dataSource.query(
+      `SELECT count(*)::int AS failures FROM failures WHERE is_regression AND target_version <> '2.3.0'`,
+    );
     expect(failures).toBe(runs[1].regressions);
     const mail = await db.dataSource.query(`SELECT subject FROM outbox_mail`);
     expect(mail).toHaveLength(1);
     expect(mail[0].subject).toMatch(/regression/);
-    const [plan] = await db.dataSource.query(`SELECT array_agg(target_name ORDER BY target_name) AS targets FROM plan_targets pt JOIN plans p ON p.id = pt.plan_id WHERE p.name = 'complex.js nightly'`);
+    const [plan] = await db.dataSource.query(
+      `SELECT array_agg(target_name ORDER BY target_name) AS targets FROM plan_targets pt JOIN plans p ON p.id = pt.plan_id WHERE p.name = 'complex.js nightly'`,
+    );
     expect(plan.targets).not.toContain('complex.js@2.3.0');
     expect(await seedDemoRuns(db.dataSource, options)).toBe(0);
   }, 180_000);

@@ -29,8 +29,16 @@ describe('FindingsThread', () => {
   });
 
   it('brings back the answers a service decides: 404 for a target that is not installed, 400 naming the field', async () => {
-    await expect(thread.ask({ kind: 'fingerprint', target: 'no-such-library@1.0.0', functions: ['sqrt'] })).rejects.toMatchObject({ status: 404, body: { kind: 'not-found' } });
-    const refused = thread.ask({ kind: 'cut-map', target: 'complex.js@2.4.3', fn: 'no-such-function', box: [-1, -1, 1, 1], grid: [3, 3] });
+    await expect(
+      thread.ask({ kind: 'fingerprint', target: 'no-such-library@1.0.0', functions: ['sqrt'] }),
+    ).rejects.toMatchObject({ status: 404, body: { kind: 'not-found' } });
+    const refused = thread.ask({
+      kind: 'cut-map',
+      target: 'complex.js@2.4.3',
+      fn: 'no-such-function',
+      box: [-1, -1, 1, 1],
+      grid: [3, 3],
+    });
     await expect(refused).rejects.toBeInstanceOf(InputError);
   });
 
@@ -44,6 +52,8 @@ describe('FindingsThread', () => {
       await hasty.close();
     }
     await thread.close();
-    await expect(thread.ask({ kind: 'fingerprint', target: 'complex.js@2.4.3', functions: ['sqrt'] })).resolves.toBeDefined();
+    await expect(
+      thread.ask({ kind: 'fingerprint', target: 'complex.js@2.4.3', functions: ['sqrt'] }),
+    ).resolves.toBeDefined();
   });
 });

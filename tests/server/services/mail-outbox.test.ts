@@ -5,7 +5,13 @@ import { FakeSmtpServer } from '../../../server/services/fake-smtp-server';
 import { MailOutbox } from '../../../server/services/mail-outbox';
 import { createTestDatabase, type TestDatabase } from '../../setup/test-database';
 
-const MAIL = { kind: 'regression', recipients: ['kwame@sheetkeeper.test'], subject: 'sqrt regressed', text: 'sqrt(−4 − 0i) now gives +2i', html: '<p>sqrt(−4 − 0i) now gives <b>+2i</b></p>' };
+const MAIL = {
+  kind: 'regression',
+  recipients: ['kwame@sheetkeeper.test'],
+  subject: 'sqrt regressed',
+  text: 'sqrt(−4 − 0i) now gives +2i',
+  html: '<p>sqrt(−4 − 0i) now gives <b>+2i</b></p>',
+};
 
 describe('the mail outbox and the local SMTP server', () => {
   let db: TestDatabase;
@@ -35,7 +41,11 @@ describe('the mail outbox and the local SMTP server', () => {
     expect(await outbox.deliverDue()).toEqual({ sent: 0, failed: 0 });
     const [mail, ...rest] = await received();
     expect(rest).toHaveLength(0);
-    expect(mail).toMatchObject({ envelopeTo: ['kwame@sheetkeeper.test'], subject: 'sqrt regressed', textBody: 'sqrt(−4 − 0i) now gives +2i' });
+    expect(mail).toMatchObject({
+      envelopeTo: ['kwame@sheetkeeper.test'],
+      subject: 'sqrt regressed',
+      textBody: 'sqrt(−4 − 0i) now gives +2i',
+    });
     expect(mail!.htmlBody).toContain('<b>+2i</b>');
   });
 

@@ -12,10 +12,14 @@ describe('PlanScheduler', () => {
   beforeAll(async () => {
     db = await createTestDatabase();
     const kwame = await db.dataSource.getRepository(User).findOneByOrFail({ email: 'kwame@sheetkeeper.test' });
-    const plan = await db.dataSource.getRepository(Plan).save({ name: 'scheduler test', description: '', recipients: [], suites: [], targets: [], createdBy: kwame });
+    const plan = await db.dataSource
+      .getRepository(Plan)
+      .save({ name: 'scheduler test', description: '', recipients: [], suites: [], targets: [], createdBy: kwame });
     planId = plan.id;
     // Six fields: every second, so the test sees firings within a few seconds.
-    const schedule = await db.dataSource.getRepository(Schedule).save({ plan, cron: '* * * * * *', timeZone: 'UTC', enabled: true, createdBy: kwame });
+    const schedule = await db.dataSource
+      .getRepository(Schedule)
+      .save({ plan, cron: '* * * * * *', timeZone: 'UTC', enabled: true, createdBy: kwame });
     scheduleId = schedule.id;
   });
   afterAll(() => db.drop());
@@ -32,7 +36,10 @@ describe('PlanScheduler', () => {
     const results = await Promise.all([a.fire(scheduleId, planId, due), b.fire(scheduleId, planId, due)]);
     expect(results.filter((r) => r !== null)).toHaveLength(1);
     expect(started).toEqual(['2026-12-02T01:30:00.000Z']);
-    const [row] = await db.dataSource.query(`SELECT outcome FROM schedule_firings WHERE schedule_id = $1 AND due_at = $2`, [scheduleId, new Date('2026-12-02T01:30:00Z')]);
+    const [row] = await db.dataSource.query(
+      `SELECT outcome FROM schedule_firings WHERE schedule_id = $1 AND due_at = $2`,
+      [scheduleId, new Date('2026-12-02T01:30:00Z')],
+    );
     expect(row.outcome).toBe('run run-1');
   });
 
@@ -63,7 +70,9 @@ describe('PlanScheduler', () => {
       throw new Error('the plan has no approved suite');
     });
     await expect(s.fire(scheduleId, planId, new Date('2026-12-03T00:00:00Z'))).rejects.toThrow('no approved suite');
-    const [row] = await db.dataSource.query(`SELECT outcome FROM schedule_firings WHERE due_at = $1`, [new Date('2026-12-03T00:00:00Z')]);
+    const [row] = await db.dataSource.query(`SELECT outcome FROM schedule_firings WHERE due_at = $1`, [
+      new Date('2026-12-03T00:00:00Z'),
+    ]);
     expect(row.outcome).toBe('no run: the plan has no approved suite');
   });
 });

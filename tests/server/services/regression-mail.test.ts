@@ -14,7 +14,7 @@ const row = (id: string): RegressionRow => ({
   actual: { re: '20.085536923187668', im: '0' },
   diagnosis: { kind: 'zero-sign', of: 'input', part: 'im' } as RegressionRow['diagnosis'],
   rule: 'ISO/IEC 9899:2011 G.6.3.1: cexp(conj(z)) = conj(cexp(z))',
-  reproducer: "new Complex(3, -0).exp()",
+  reproducer: 'new Complex(3, -0).exp()',
 });
 
 describe('regressionMail', () => {
@@ -56,13 +56,41 @@ describe('regressionMail', () => {
 
   it('says which part of an inaccurate value is off, and when its sign is the opposite', () => {
     // mpmath, 60 digits: Re asech(1000001 + 1e−9i) = 9.99998e−22; −5.55e−17 is what complex.js 2.4.3 returned in our demo runs.
-    const inaccurate: RegressionRow = { ...row('7'), diagnosis: { kind: 'inaccurate', ulps: 8.656731785528058e18, relativeError: 3.534e-17, part: 're', signDiffers: true } };
-    const m = regressionMail({ recipients: ['a@b.test'], planName: 'p', runId: 'r', appUrl: 'http://127.0.0.1:8460', rows: [inaccurate], total: 1, versionChanges: [] });
-    for (const part of [m.text, m.html]) expect(part).toContain('inaccurate (8.7e+18 ulps in the real part, which has the opposite sign; relative error of the whole value 3.5e-17)');
+    const inaccurate: RegressionRow = {
+      ...row('7'),
+      diagnosis: {
+        kind: 'inaccurate',
+        ulps: 8.656731785528058e18,
+        relativeError: 3.534e-17,
+        part: 're',
+        signDiffers: true,
+      },
+    };
+    const m = regressionMail({
+      recipients: ['a@b.test'],
+      planName: 'p',
+      runId: 'r',
+      appUrl: 'http://127.0.0.1:8460',
+      rows: [inaccurate],
+      total: 1,
+      versionChanges: [],
+    });
+    for (const part of [m.text, m.html])
+      expect(part).toContain(
+        'inaccurate (8.7e+18 ulps in the real part, which has the opposite sign; relative error of the whole value 3.5e-17)',
+      );
   });
 
   it('escapes what it puts into HTML', () => {
-    const html = regressionMail({ recipients: ['a@b.test'], planName: '<script>x</script>', runId: 'r', appUrl: 'http://127.0.0.1:8460', rows: [row('1')], total: 1, versionChanges: [] }).html;
+    const html = regressionMail({
+      recipients: ['a@b.test'],
+      planName: '<script>x</script>',
+      runId: 'r',
+      appUrl: 'http://127.0.0.1:8460',
+      rows: [row('1')],
+      total: 1,
+      versionChanges: [],
+    }).html;
     expect(html).not.toContain('<script>');
     expect(html).toContain('&lt;script&gt;');
   });

@@ -53,10 +53,24 @@ describe('a plan run through the queue, with regressions and their mail', () => 
     await approvedSuite(db.dataSource, 'run-sqrt', 'sqrt-principal-sz');
     await approvedSuite(db.dataSource, 'run-log', 'log-principal-sz');
     kwame = await db.dataSource.getRepository(User).findOneByOrFail({ email: 'kwame@sheetkeeper.test' });
-    const plan = await new PlanService(db.dataSource).save(kwame, { name: 'fakelib nightly', description: '', recipients: ['kwame@sheetkeeper.test'], suites: ['run-sqrt', 'run-log'], targets: ['fakelib@1'] }, null);
+    const plan = await new PlanService(db.dataSource).save(
+      kwame,
+      {
+        name: 'fakelib nightly',
+        description: '',
+        recipients: ['kwame@sheetkeeper.test'],
+        suites: ['run-sqrt', 'run-log'],
+        targets: ['fakelib@1'],
+      },
+      null,
+    );
     planId = plan.id;
     queue = new PgBossShardQueue(db.url, { pollingIntervalSeconds: 0.5 });
-    const executor = new ShardExecutor(db.dataSource, { openTarget: (name) => (name.startsWith('fakelib@') ? fakeLibrary(name.endsWith('2') ? '2' : '1') : null), outbox, appUrl: 'http://127.0.0.1:8460' });
+    const executor = new ShardExecutor(db.dataSource, {
+      openTarget: (name) => (name.startsWith('fakelib@') ? fakeLibrary(name.endsWith('2') ? '2' : '1') : null),
+      outbox,
+      appUrl: 'http://127.0.0.1:8460',
+    });
     await queue.work((id) => executor.execute(id));
     runs = new RunService(db.dataSource, queue);
   }, 60_000);
@@ -84,19 +98,37 @@ describe('a plan run through the queue, with regressions and their mail', () => 
     expect(stored.n).toBe(first.counts.fail + first.counts.error + first.counts.skipped);
     expect(await db.dataSource.getRepository(ReceivedMail).count()).toBe(0);
     // The suites' property checks ran too, each stored with its pinned seed (√z lists 3 laws, log 4).
-    const props: { law: string; kind: string; seed: string }[] = await db.dataSource.query(`SELECT law, kind, seed::text FROM property_results WHERE run_id = $1`, [first.id]);
+    const props: { law: string; kind: string; seed: string }[] = await db.dataSource.query(
+      `SELECT law, kind, seed::text FROM property_results WHERE run_id = $1`,
+      [first.id],
+    );
     expect(props).toHaveLength(7);
     expect(props.every((p) => /^\d+$/.test(p.seed) && ['held', 'failed', 'not-checked'].includes(p.kind))).toBe(true);
   }, 90_000);
 
   it('reports what version 2 broke as regressions with a version change, in exactly one mail', async () => {
-    await new PlanService(db.dataSource).save(kwame, { name: 'fakelib nightly', description: '', recipients: ['kwame@sheetkeeper.test'], suites: ['run-sqrt', 'run-log'], targets: ['fakelib@2'] }, planId);
+    await new PlanService(db.dataSource).save(
+      kwame,
+      {
+        name: 'fakelib nightly',
+        description: '',
+        recipients: ['kwame@sheetkeeper.test'],
+        suites: ['run-sqrt', 'run-log'],
+        targets: ['fakelib@2'],
+      },
+      planId,
+    );
     // Hanne is not on the plan, but subscribes to the library.
-    await db.dataSource.query(`INSERT INTO subscriptions (user_id, target_key) SELECT id, 'fakelib' FROM users WHERE email = 'hanne@sheetkeeper.test'`);
+    await db.dataSource.query(
+      `INSERT INTO subscriptions (user_id, target_key) SELECT id, 'fakelib' FROM users WHERE email = 'hanne@sheetkeeper.test'`,
+    );
     const second = await finished((await runs.start(planId, 'manual', kwame)).id);
     expect(second.status).toBe('completed');
     expect(second.regressions).toBeGreaterThan(0);
-    const regressions: { suite_slug: string; z: { im: string } }[] = await db.dataSource.query(`SELECT suite_slug, z FROM failures WHERE run_id = $1 AND is_regression`, [second.id]);
+    const regressions: { suite_slug: string; z: { im: string } }[] = await db.dataSource.query(
+      `SELECT suite_slug, z FROM failures WHERE run_id = $1 AND is_regression`,
+      [second.id],
+    );
     expect(regressions).toHaveLength(second.regressions!);
     // Only √z changed, and only in the upper half-plane.
     expect(new Set(regressions.map((r) => r.suite_slug))).toEqual(new Set(['run-sqrt']));
@@ -114,25 +146,57 @@ describe('a plan run through the queue, with regressions and their mail', () => 
 
   it('keeps failures covered by an accepted deviation out of the regressions', async () => {
     // Accept √z's failures on fakelib (any version) for now; a fresh run of version 1 then version 2 finds no regression in it.
-    const [failure] = await db.dataSource.query(`SELECT id::text FROM failures WHERE suite_slug = 'run-sqrt' AND is_regression LIMIT 1`);
+    const [failure] = await db.dataSource.query(
+      `SELECT id::text FROM failures WHERE suite_slug = 'run-sqrt' AND is_regression LIMIT 1`,
+    );
     await db.dataSource.query(
       `INSERT INTO deviations (classification, scope, target_key, suite_slug, reason, expires_at, failure_id, created_by) VALUES ('accepted', 'suite', 'fakelib', 'run-sqrt', 'known upstream', now() + interval '30 days', $1, $2)`,
       [failure.id, kwame.id],
     );
-    await new PlanService(db.dataSource).save(kwame, { name: 'fakelib nightly', description: '', recipients: ['kwame@sheetkeeper.test'], suites: ['run-sqrt', 'run-log'], targets: ['fakelib@1'] }, planId);
+    await new PlanService(db.dataSource).save(
+      kwame,
+      {
+        name: 'fakelib nightly',
+        description: '',
+        recipients: ['kwame@sheetkeeper.test'],
+        suites: ['run-sqrt', 'run-log'],
+        targets: ['fakelib@1'],
+      },
+      planId,
+    );
     await finished((await runs.start(planId, 'manual', kwame)).id);
-    await new PlanService(db.dataSource).save(kwame, { name: 'fakelib nightly', description: '', recipients: ['kwame@sheetkeeper.test'], suites: ['run-sqrt', 'run-log'], targets: ['fakelib@2'] }, planId);
+    await new PlanService(db.dataSource).save(
+      kwame,
+      {
+        name: 'fakelib nightly',
+        description: '',
+        recipients: ['kwame@sheetkeeper.test'],
+        suites: ['run-sqrt', 'run-log'],
+        targets: ['fakelib@2'],
+      },
+      planId,
+    );
     const again = await finished((await runs.start(planId, 'manual', kwame)).id);
-    const left = await db.dataSource.query(`SELECT suite_slug, path_name, z, diagnosis_kind FROM failures WHERE run_id = $1 AND is_regression`, [again.id]);
+    const left = await db.dataSource.query(
+      `SELECT suite_slug, path_name, z, diagnosis_kind FROM failures WHERE run_id = $1 AND is_regression`,
+      [again.id],
+    );
     expect({ regressions: again.regressions, left }).toEqual({ regressions: 0, left: [] });
   }, 90_000);
 
   it('cancels a queued run and skips its shards', async () => {
-    const paused = new RunService(db.dataSource, { enqueue: async () => undefined, work: async () => undefined, stop: async () => undefined });
+    const paused = new RunService(db.dataSource, {
+      enqueue: async () => undefined,
+      work: async () => undefined,
+      stop: async () => undefined,
+    });
     const run = await paused.start(planId, 'manual', kwame);
     const cancelled = await paused.cancel(run.id);
     expect(cancelled.status).toBe('cancelled');
-    const [{ n }] = await db.dataSource.query(`SELECT count(*)::int AS n FROM shards WHERE run_id = $1 AND status = 'cancelled'`, [run.id]);
+    const [{ n }] = await db.dataSource.query(
+      `SELECT count(*)::int AS n FROM shards WHERE run_id = $1 AND status = 'cancelled'`,
+      [run.id],
+    );
     expect(n).toBe(2);
   });
 });

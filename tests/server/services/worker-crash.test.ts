@@ -10,7 +10,14 @@ import { demoSuiteBody } from '../../setup/demo-suite-body';
 import { createTestDatabase, type TestDatabase } from '../../setup/test-database';
 
 const ROOT = path.join(__dirname, '..', '..', '..');
-const DEMO = ['asin-principal-sz', 'acos-principal-sz', 'atan-principal-sz', 'asinh-principal-sz', 'acosh-principal-sz', 'atanh-principal-sz'];
+const DEMO = [
+  'asin-principal-sz',
+  'acos-principal-sz',
+  'atan-principal-sz',
+  'asinh-principal-sz',
+  'acosh-principal-sz',
+  'atanh-principal-sz',
+];
 
 /** `npm run worker` as its own process against the test database. */
 function startWorker(db: TestDatabase): ChildProcess {
@@ -40,19 +47,38 @@ describe('a worker killed mid-shard', () => {
   beforeAll(async () => {
     db = await createTestDatabase();
     const users = db.dataSource.getRepository(User);
-    const [ravi, hanne, kwame] = await Promise.all(['ravi', 'hanne', 'kwame'].map((n) => users.findOneByOrFail({ email: `${n}@sheetkeeper.test` })));
+    const [ravi, hanne, kwame] = await Promise.all(
+      ['ravi', 'hanne', 'kwame'].map((n) => users.findOneByOrFail({ email: `${n}@sheetkeeper.test` })),
+    );
     const suites = new SuiteService(db.dataSource);
     for (const id of DEMO) {
       // A 50 × 50 grid on top of the demo paths makes each shard last seconds, long enough to be killed in.
       const body = demoSuiteBody(`crash-${id}`, id);
-      body.paths.push({ kind: 'grid', name: 'box', min: { re: '-3', im: '-3' }, max: { re: '3', im: '3' }, columns: 50, rows: 50 });
+      body.paths.push({
+        kind: 'grid',
+        name: 'box',
+        min: { re: '-3', im: '-3' },
+        max: { re: '3', im: '3' },
+        columns: 50,
+        rows: 50,
+      });
       const checked = validateSuite(body, id);
       if (!checked.ok) throw new Error(`invalid ${id}`);
       await suites.save(ravi!, checked.suite, 'create');
       await suites.submit(ravi!, checked.suite.id);
       await suites.review(hanne!, checked.suite.id, 1, 'approve', '');
     }
-    const plan = await new PlanService(db.dataSource).save(kwame!, { name: 'crash plan', description: '', recipients: [], suites: DEMO.map((id) => `crash-${id}`), targets: ['complex.js@2.4.3'] }, null);
+    const plan = await new PlanService(db.dataSource).save(
+      kwame!,
+      {
+        name: 'crash plan',
+        description: '',
+        recipients: [],
+        suites: DEMO.map((id) => `crash-${id}`),
+        targets: ['complex.js@2.4.3'],
+      },
+      null,
+    );
     // Short expiry and maintenance, so the dead worker's shard comes back within seconds.
     queue = new PgBossShardQueue(db.url, { expireInSeconds: 6, maintenanceIntervalSeconds: 1, retryLimit: 5 });
     planId = plan.id;
@@ -71,14 +97,27 @@ describe('a worker killed mid-shard', () => {
     workers.push(startWorker(db), startWorker(db));
 
     // Both workers busy: then the first one is certainly in the middle of a shard.
-    await until('both workers to run a shard', async () => (await db.dataSource.query(`SELECT count(*)::int AS n FROM shards WHERE run_id = $1 AND status = 'running'`, [run.id]))[0].n >= 2, 60_000);
+    await until(
+      'both workers to run a shard',
+      async () =>
+        (
+          await db.dataSource.query(`SELECT count(*)::int AS n FROM shards WHERE run_id = $1 AND status = 'running'`, [
+            run.id,
+          ])
+        )[0].n >= 2,
+      60_000,
+    );
     workers[0]!.kill('SIGKILL');
     workers.push(startWorker(db));
 
-    const done = await until('the run to complete', async () => {
-      const v = await runs.get(run.id);
-      return v.status === 'completed' ? v : null;
-    }, 120_000);
+    const done = await until(
+      'the run to complete',
+      async () => {
+        const v = await runs.get(run.id);
+        return v.status === 'completed' ? v : null;
+      },
+      120_000,
+    );
     expect(done.shardsDone).toBe(DEMO.length);
 
     const [dupes] = await db.dataSource.query(
@@ -86,12 +125,16 @@ describe('a worker killed mid-shard', () => {
       [run.id],
     );
     expect(dupes.n).toBe(0);
-    const [summaries] = await db.dataSource.query(`SELECT count(*)::int AS n FROM path_summaries WHERE run_id = $1`, [run.id]);
+    const [summaries] = await db.dataSource.query(`SELECT count(*)::int AS n FROM path_summaries WHERE run_id = $1`, [
+      run.id,
+    ]);
     const paths = DEMO.reduce((sum, id) => sum + demoSuiteBody('x', id).paths.length + 1, 0);
     expect(summaries.n).toBe(paths);
     const [stored] = await db.dataSource.query(`SELECT count(*)::int AS n FROM failures WHERE run_id = $1`, [run.id]);
     expect(stored.n).toBe(done.counts.fail + done.counts.error + done.counts.skipped);
-    const [retried] = await db.dataSource.query(`SELECT max(attempts)::int AS n FROM shards WHERE run_id = $1`, [run.id]);
+    const [retried] = await db.dataSource.query(`SELECT max(attempts)::int AS n FROM shards WHERE run_id = $1`, [
+      run.id,
+    ]);
     expect(retried.n).toBeGreaterThanOrEqual(2);
   }, 240_000);
 });

@@ -2,7 +2,10 @@ import { signInBody } from '../../../shared/schemas/sign-in-body';
 
 describe('signInBody', () => {
   it('lower-cases and trims the e-mail', () => {
-    expect(signInBody.parse({ email: '  Odile@Example.TEST ', password: 'x' })).toEqual({ email: 'odile@example.test', password: 'x' });
+    expect(signInBody.parse({ email: '  Odile@Example.TEST ', password: 'x' })).toEqual({
+      email: 'odile@example.test',
+      password: 'x',
+    });
   });
 
   it('names unknown fields', () => {

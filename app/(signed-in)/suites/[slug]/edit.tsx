@@ -5,7 +5,10 @@ import { SuiteFormScreen } from '../../../../components/suite-form-screen';
 export default function EditSuiteScreen() {
   const { slug } = useLocalSearchParams<{ slug: string }>();
   return (
-    <ScreenBody title={`Edit ${slug}`} lead="Editing an approved suite starts a new draft version; the approved one stays in use until the new one is approved.">
+    <ScreenBody
+      title={`Edit ${slug}`}
+      lead="Editing an approved suite starts a new draft version; the approved one stays in use until the new one is approved."
+    >
       <SuiteFormScreen slug={slug} />
     </ScreenBody>
   );

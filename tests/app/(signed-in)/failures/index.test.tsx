@@ -7,7 +7,11 @@ import { setScreenWidth } from '../../../setup/set-screen-width';
 
 let mockParams: Record<string, string> = {};
 const mockPush = jest.fn();
-jest.mock('expo-router', () => ({ ...jest.requireActual('../../../setup/expo-router-stub'), useLocalSearchParams: () => mockParams, router: { push: (to: unknown) => mockPush(to) } }));
+jest.mock('expo-router', () => ({
+  ...jest.requireActual('../../../setup/expo-router-stub'),
+  useLocalSearchParams: () => mockParams,
+  router: { push: (to: unknown) => mockPush(to) },
+}));
 
 const RUN = '22222222-2222-4222-8222-222222222222';
 
@@ -32,7 +36,10 @@ describe('the Failures screen', () => {
     renderWithClient(<FailuresScreen />);
     await screen.findByRole('table');
     fireEvent.click(screen.getByRole('radio', { name: 'Diagnosis: cut side' }));
-    expect(mockPush).toHaveBeenCalledWith({ pathname: '/failures', params: { run: RUN, sort: 'ulps', diagnosis: 'cut-side' } });
+    expect(mockPush).toHaveBeenCalledWith({
+      pathname: '/failures',
+      params: { run: RUN, sort: 'ulps', diagnosis: 'cut-side' },
+    });
     fireEvent.click(screen.getByRole('radio', { name: 'Order: oldest first' }));
     expect(mockPush).toHaveBeenLastCalledWith({ pathname: '/failures', params: { run: RUN } });
   });

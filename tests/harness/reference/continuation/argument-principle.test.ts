@@ -29,7 +29,14 @@ describe('continuation around random circles', () => {
           // Keep every zero and pole at least 0.05 away from the circle.
           if (roots.some((a) => Math.abs(Math.hypot(a.re / 10, a.im / 10) - r) < 0.05)) return true;
           const g = roots.map((a) => `(z - (${a.re}/10 + ${a.im}/10*i))^${a.m}`).join(' * ');
-          const answer = run({ g, nu: `${p}/${q}`, z0: c(String(r)), k: 0, path: circle(c(0), String(r), Math.abs(turns), turns > 0 ? 'ccw' : 'cw'), at: ['1'] });
+          const answer = run({
+            g,
+            nu: `${p}/${q}`,
+            z0: c(String(r)),
+            k: 0,
+            path: circle(c(0), String(r), Math.abs(turns), turns > 0 ? 'ccw' : 'cw'),
+            at: ['1'],
+          });
           const inside = roots.filter((a) => Math.hypot(a.re / 10, a.im / 10) < r).reduce((s, a) => s + a.m, 0);
           const angle = 2 * Math.PI * (p / q) * turns * inside;
           const m = answer.monodromy ?? c('nan', 'nan');

@@ -1,6 +1,12 @@
 import type { WireComplex } from './wire-complex';
 
 /** A circle path of a `continue` request. */
-export function circle(center: WireComplex, radius: string, turns = 1, direction: 'ccw' | 'cw' = 'ccw', startAngle = '0') {
+export function circle(
+  center: WireComplex,
+  radius: string,
+  turns = 1,
+  direction: 'ccw' | 'cw' = 'ccw',
+  startAngle = '0',
+) {
   return { kind: 'circle', center, radius, turns, direction, start_angle: startAngle };
 }

@@ -17,7 +17,14 @@ describe('monodromy of closed paths equals e^{2πiν(Z−P)} (argument principle
     ['z*exp(z)', '1/4', circle(c(0), '1'), 1, 'exp factors have no zeros'],
   ];
   it.each(cases)('gives e^{2πiν(Z−P)} for %s^%s around %#', (g, nu, path, windings) => {
-    const answer = run({ g, nu, z0: path.center.re === '0' ? c(Number(path.radius)) : c(Number(path.center.re) + Number(path.radius)), k: 0, path, at: ['1'] });
+    const answer = run({
+      g,
+      nu,
+      z0: path.center.re === '0' ? c(Number(path.radius)) : c(Number(path.center.re) + Number(path.radius)),
+      k: 0,
+      path,
+      at: ['1'],
+    });
     const nuValue = math.fraction(nu).valueOf() as number;
     const angle = 2 * Math.PI * nuValue * windings;
     expect(Number(answer.monodromy?.re ?? 'nan')).toBeCloseTo(Math.cos(angle), 12);
@@ -44,7 +51,9 @@ function byQuadrature(
   const ratio = math.parse(`(${math.derivative(g, 'z').toString()}) / (${g})`).compile();
   // 5-point Gauss–Legendre nodes and weights on [−1, 1] (Abramowitz & Stegun table 25.4, from memory).
   const nodes = [0, -0.5384693101056831, 0.5384693101056831, -0.906179845938664, 0.906179845938664];
-  const weights = [0.5688888888888889, 0.47862867049936647, 0.47862867049936647, 0.23692688505618908, 0.23692688505618908];
+  const weights = [
+    0.5688888888888889, 0.47862867049936647, 0.47862867049936647, 0.23692688505618908, 0.23692688505618908,
+  ];
   const panels = 400;
   let acc = math.complex(0, 0);
   for (let k = 0; k < panels; k++) {
@@ -75,7 +84,10 @@ describe('continuation endpoints against quadrature of g′/g', () => {
     const answer = run({ g, nu: c(nu[0], nu[1]), z0: c(2), f0: c(1), path: circle(c(0), '2'), at: [String(t1)] });
     const point = (t: number): [number, number] => [2 * Math.cos(2 * Math.PI * t), 2 * Math.sin(2 * Math.PI * t)];
     const nuD: [number, number] = [math.fraction(nu[0]).valueOf() as number, math.fraction(nu[1]).valueOf() as number];
-    const velocity = (t: number): [number, number] => [-4 * Math.PI * Math.sin(2 * Math.PI * t), 4 * Math.PI * Math.cos(2 * Math.PI * t)];
+    const velocity = (t: number): [number, number] => [
+      -4 * Math.PI * Math.sin(2 * Math.PI * t),
+      4 * Math.PI * Math.cos(2 * Math.PI * t),
+    ];
     const [re, im] = byQuadrature(g, nuD, [1, 0], point, velocity, t1);
     const f = answer.values[0]?.f ?? c('nan', 'nan');
     expect(Number(f.re)).toBeCloseTo(re, 10);
@@ -94,7 +106,15 @@ function expectHalfAngles(answer: ReturnType<typeof run>, thetas: number[]): voi
 
 /** √z from f0 = 1 at z0 = 1 once around the unit circle, on the plane cut from 0 along the ray through `cut`. */
 function sqrtAroundUnitCircle(cut: ReturnType<typeof c>[]) {
-  return run({ g: 'z', nu: '1/2', z0: c(1), f0: c(1), path: circle(c(0), '1', 1), at: ['1/8', '3/8', '5/8', '7/8'], cuts: [{ points: cut, to_infinity: true }] });
+  return run({
+    g: 'z',
+    nu: '1/2',
+    z0: c(1),
+    f0: c(1),
+    path: circle(c(0), '1', 1),
+    at: ['1/8', '3/8', '5/8', '7/8'],
+    cuts: [{ points: cut, to_infinity: true }],
+  });
 }
 
 describe('continuation along a polyline against quadrature of g′/g', () => {
@@ -125,7 +145,12 @@ describe('regular branches with cut layouts', () => {
 
   it('follows a cut along the positive imaginary axis: arg taken in (−3π/2, π/2]', () => {
     const answer = sqrtAroundUnitCircle([c(0), c(0, 1)]);
-    expectHalfAngles(answer, [Math.PI / 4, (3 * Math.PI) / 4 - 2 * Math.PI, (5 * Math.PI) / 4 - 2 * Math.PI, (7 * Math.PI) / 4 - 2 * Math.PI]);
+    expectHalfAngles(answer, [
+      Math.PI / 4,
+      (3 * Math.PI) / 4 - 2 * Math.PI,
+      (5 * Math.PI) / 4 - 2 * Math.PI,
+      (7 * Math.PI) / 4 - 2 * Math.PI,
+    ]);
   });
 
   it('returns to f0 around a loop that crosses the cut between the branch points of √(z²−1)', () => {
@@ -143,7 +168,14 @@ describe('regular branches with cut layouts', () => {
   });
 
   it('takes f0 as the k-th value principal·e^{2πiνk}: (−1)^{1/3} with k = 1 is −1', () => {
-    const answer = run({ g: 'z', nu: '1/3', z0: c(-1), k: 1, path: { kind: 'polyline', points: [c(-1), c(-1, 1)] }, at: ['0'] });
+    const answer = run({
+      g: 'z',
+      nu: '1/3',
+      z0: c(-1),
+      k: 1,
+      path: { kind: 'polyline', points: [c(-1), c(-1, 1)] },
+      at: ['0'],
+    });
     expect(Number(answer.values[0]?.f.re ?? 'nan')).toBeCloseTo(-1, 30);
     expect(Number(answer.values[0]?.f.im ?? 'nan')).toBeCloseTo(0, 30);
   });
@@ -153,9 +185,11 @@ describe('refusals', () => {
   const base = { nu: '1/2', z0: c(2), k: 0, path: circle(c(0), '1'), at: ['1'] };
 
   it('refuses a path through a zero of g, naming where', () => {
-    expect(answerContinue({ ...base, g: 'z - 1', z0: c(2), path: { kind: 'polyline', points: [c(2), c(0)] } })).toEqual({
-      error: 'the path near t = 0.5 passes through a zero of g of order 1 at (1, 0)',
-    });
+    expect(answerContinue({ ...base, g: 'z - 1', z0: c(2), path: { kind: 'polyline', points: [c(2), c(0)] } })).toEqual(
+      {
+        error: 'the path near t = 0.5 passes through a zero of g of order 1 at (1, 0)',
+      },
+    );
   });
 
   it('refuses z0 at a pole of g', () => {
@@ -169,7 +203,12 @@ describe('refusals', () => {
   });
 
   it('names the loop whose monodromy is not 1 when a finite cut ends at only one branch point', () => {
-    const answer = answerContinue({ ...base, g: 'z*(z - 1)*(z + 3)', nu: '1/3', cuts: [{ points: [c(0), c(1)] }, { points: [c(-3), c(-4)], to_infinity: true }] });
+    const answer = answerContinue({
+      ...base,
+      g: 'z*(z - 1)*(z + 3)',
+      nu: '1/3',
+      cuts: [{ points: [c(0), c(1)] }, { points: [c(-3), c(-4)], to_infinity: true }],
+    });
     expect(answer).toEqual({
       error:
         'the loop around the cut through (0, 0), (1, 0) crosses no cut but has monodromy e^{2πi·2/3} ≠ 1 (ν·(Z−P) = 2/3 is not an integer): extend that cut to another branch point or to infinity',
@@ -182,13 +221,23 @@ describe('refusals', () => {
   });
 
   it('refuses z0 on a cut', () => {
-    expect(answerContinue({ ...base, g: 'z', z0: c(-2), path: circle(c(-2), '0.5'), cuts: [{ points: [c(0), c(-1)], to_infinity: true }] })).toEqual({
+    expect(
+      answerContinue({
+        ...base,
+        g: 'z',
+        z0: c(-2),
+        path: circle(c(-2), '0.5'),
+        cuts: [{ points: [c(0), c(-1)], to_infinity: true }],
+      }),
+    ).toEqual({
       error: 'z0 = (-2, 0) lies on a cut, where the branch is not fixed',
     });
   });
 
   it('refuses a g outside rational functions times exp factors', () => {
-    expect(answerContinue({ ...base, g: 'sqrt(z)' })).toEqual({ error: 'g must be built from z, numbers, i, + − × ÷, integer powers and exp of such terms; "sqrt" is not allowed' });
+    expect(answerContinue({ ...base, g: 'sqrt(z)' })).toEqual({
+      error: 'g must be built from z, numbers, i, + − × ÷, integer powers and exp of such terms; "sqrt" is not allowed',
+    });
   });
 });
 

@@ -2,7 +2,10 @@ import { answerContinue } from '../../../../harness/reference/continuation/answe
 import type { WireComplex } from './wire-complex';
 
 /** Runs one `continue` request and returns the answer, throwing if it is an error. */
-export function run(request: Record<string, unknown>): { values: { t: string; z: WireComplex; f: WireComplex }[]; monodromy: WireComplex | null } {
+export function run(request: Record<string, unknown>): {
+  values: { t: string; z: WireComplex; f: WireComplex }[];
+  monodromy: WireComplex | null;
+} {
   const answer = answerContinue(request);
   if ('error' in answer) throw new Error(String(answer.error));
   return answer as never;

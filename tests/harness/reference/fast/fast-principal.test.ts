@@ -9,7 +9,8 @@ const FUNCTIONS = ['sqrt', 'exp', 'log', 'asin', 'acos', 'atan', 'asinh', 'acosh
 const SEED = 31337;
 
 function slow(fn: string, x: number, y: number): [number, number] {
-  return principalValue({ fn, z: BigComplex.fromDoubles(x, y), convention: 'signed-zero' }, { double: true, digits: 0 }).double;
+  return principalValue({ fn, z: BigComplex.fromDoubles(x, y), convention: 'signed-zero' }, { double: true, digits: 0 })
+    .double;
 }
 
 const box = fc.tuple(fc.double({ min: -8, max: 8, noNaN: true }), fc.double({ min: -8, max: 8, noNaN: true }));
@@ -17,30 +18,43 @@ const wide = fc.tuple(
   fc.double({ min: -1e120, max: 1e120, noNaN: true, noDefaultInfinity: true }),
   fc.double({ min: -1e120, max: 1e120, noNaN: true, noDefaultInfinity: true }),
 );
-const nearUnitCircle = fc.tuple(fc.double({ min: 0, max: 2 * Math.PI, noNaN: true }), fc.integer({ min: -60, max: 60 })).map(([a, k]) => {
-  const r = 1 + k * 2 ** -52;
-  return [r * Math.cos(a), r * Math.sin(a)] as [number, number];
-});
-const nearAxes = fc.tuple(fc.double({ min: -8, max: 8, noNaN: true }), fc.integer({ min: 20, max: 300 }), fc.boolean()).map(([v, k, flip]) => {
-  const tiny = 10 ** -k;
-  return (flip ? [tiny, v] : [v, tiny]) as [number, number];
-});
-
-describe('the double-double tier', () => {
-  it.each(FUNCTIONS.map((fn) => [fn]))('returns the bigint engine’s correctly rounded double for %s whenever it answers', (fn) => {
-    fc.assert(
-      fc.property(fc.oneof(box, wide, nearUnitCircle, nearAxes), ([x, y]) => {
-        const fast = fastPrincipal(fn, x, y);
-        if (fast === null) return true;
-        const ref = slow(fn, x, y);
-        return Object.is(fast[0], ref[0]) && Object.is(fast[1], ref[1]);
-      }),
-      { seed: SEED, numRuns: 400 },
-    );
+const nearUnitCircle = fc
+  .tuple(fc.double({ min: 0, max: 2 * Math.PI, noNaN: true }), fc.integer({ min: -60, max: 60 }))
+  .map(([a, k]) => {
+    const r = 1 + k * 2 ** -52;
+    return [r * Math.cos(a), r * Math.sin(a)] as [number, number];
+  });
+const nearAxes = fc
+  .tuple(fc.double({ min: -8, max: 8, noNaN: true }), fc.integer({ min: 20, max: 300 }), fc.boolean())
+  .map(([v, k, flip]) => {
+    const tiny = 10 ** -k;
+    return (flip ? [tiny, v] : [v, tiny]) as [number, number];
   });
 
+describe('the double-double tier', () => {
+  it.each(FUNCTIONS.map((fn) => [fn]))(
+    'returns the bigint engine’s correctly rounded double for %s whenever it answers',
+    (fn) => {
+      fc.assert(
+        fc.property(fc.oneof(box, wide, nearUnitCircle, nearAxes), ([x, y]) => {
+          const fast = fastPrincipal(fn, x, y);
+          if (fast === null) return true;
+          const ref = slow(fn, x, y);
+          return Object.is(fast[0], ref[0]) && Object.is(fast[1], ref[1]);
+        }),
+        { seed: SEED, numRuns: 400 },
+      );
+    },
+  );
+
   it('declines inputs with a zero, infinite or NaN part, leaving signed zeros and Annex G to the bigint engine', () => {
-    for (const [x, y] of [[0, 1], [-0, 1], [1, -0], [Infinity, 1], [1, NaN]] as [number, number][]) {
+    for (const [x, y] of [
+      [0, 1],
+      [-0, 1],
+      [1, -0],
+      [Infinity, 1],
+      [1, NaN],
+    ] as [number, number][]) {
       expect(fastPrincipal('sqrt', x, y)).toBeNull();
     }
   });

@@ -46,14 +46,22 @@ describe('BigFloat', () => {
     const x = BigFloat.fromDouble(1.5);
     expect(Object.is(x.sub(x).toDouble(), 0)).toBe(true);
     expect(Object.is(BigFloat.NEG_ZERO.add(BigFloat.NEG_ZERO).toDouble(), -0)).toBe(true);
-    expect(BigFloat.fromDouble(1e300).add(BigFloat.fromDouble(1e-300)).sub(BigFloat.fromDouble(1e300)).toDouble()).toBe(1e-300);
+    expect(BigFloat.fromDouble(1e300).add(BigFloat.fromDouble(1e-300)).sub(BigFloat.fromDouble(1e300)).toDouble()).toBe(
+      1e-300,
+    );
   });
 
   it('takes square roots to the requested bits: √2 to 40 digits, √6.25 = 2.5 exactly', () => {
     // √2 = 1.41421356237309504880168872420969807856967… (common knowledge; also DLMF-independent: squared below).
     const root = BigFloat.fromDouble(2).sqrt(140);
     expect(root.toDecimal(40)).toBe('1.41421356237309504880168872420969807857');
-    expect(root.mul(root).sub(BigFloat.fromDouble(2)).abs().compare(BigFloat.of(false, 1n, -138))).toBeLessThan(0);
+    expect(
+      root
+        .mul(root)
+        .sub(BigFloat.fromDouble(2))
+        .abs()
+        .compare(BigFloat.of(false, 1n, -138)),
+    ).toBeLessThan(0);
     expect(BigFloat.fromDouble(6.25).sqrt(60).toDouble()).toBe(2.5);
   });
 });
@@ -87,7 +95,14 @@ describe('number parsing and formatting', () => {
   });
 
   it('writes doubles as the shortest round-trip decimal with -0, inf and nan', () => {
-    expect([0.1, -0, Infinity, -Infinity, NaN, 1e-300].map(formatDouble)).toEqual(['0.1', '-0', 'inf', '-inf', 'nan', '1e-300']);
+    expect([0.1, -0, Infinity, -Infinity, NaN, 1e-300].map(formatDouble)).toEqual([
+      '0.1',
+      '-0',
+      'inf',
+      '-inf',
+      'nan',
+      '1e-300',
+    ]);
   });
 });
 

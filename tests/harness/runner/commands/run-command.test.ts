@@ -21,7 +21,9 @@ describe('sheetkeeper run', () => {
     expect(r.stderr).toBe('');
     expect(r.status).toBe(0);
     expect(r.stdout).toMatch(/^PASS +sqrt-principal-sz v1 × cmath@[\d.]+ — 154 pass · 0 fail/m);
-    expect(r.stdout).toContain('checked: principal branch of every function, signed-zero; tolerance 4 ulps per part; 3 path(s), 154 point(s); properties: conjugate-symmetry, root-power, range (3 property check(s) run)');
+    expect(r.stdout).toContain(
+      'checked: principal branch of every function, signed-zero; tolerance 4 ulps per part; 3 path(s), 154 point(s); properties: conjugate-symmetry, root-power, range (3 property check(s) run)',
+    );
     expect(r.stdout).toContain('it is not a certification');
   }, 120_000);
 
@@ -31,7 +33,9 @@ describe('sheetkeeper run', () => {
     const r = run(['--suite', 'sqrt-principal-ccw', '--target', 'complex.js@2.4.3']);
     expect(r.status).toBe(1);
     expect(r.stdout).toMatch(/^FAIL +sqrt-principal-ccw v1 × complex\.js@2\.4\.3 — 154 pass · 0 fail/m);
-    expect(r.stdout).toMatch(/property FAILED: root-power: f\(z\)\^2 = g\(z\) .* seed \d+ — f\(z\)\^2 differs from g\(z\)/);
+    expect(r.stdout).toMatch(
+      /property FAILED: root-power: f\(z\)\^2 = g\(z\) .* seed \d+ — f\(z\)\^2 differs from g\(z\)/,
+    );
   }, 120_000);
 
   it('exits 1 when a point fails, and writes JSON that names every failure with its diagnosis', () => {
@@ -39,23 +43,46 @@ describe('sheetkeeper run', () => {
     expect(r.status).toBe(1);
     const result = JSON.parse(r.stdout);
     expect(result.status).toBe('fail');
-    expect(result.plan).toEqual({ suites: [{ id: 'sqrt-principal-sz', version: 1 }], targets: ['complex.js@2.4.3'], shards: 1 });
+    expect(result.plan).toEqual({
+      suites: [{ id: 'sqrt-principal-sz', version: 1 }],
+      targets: ['complex.js@2.4.3'],
+      shards: 1,
+    });
     expect(result.disclaimer).toMatch(/not a certification/);
     const finding = result.results[0].paths[0].findings[0];
-    expect(finding).toMatchObject({ label: 'on -0', zHex: { re: '-0x1p-1', im: '-0x0p+0' }, outcome: { kind: 'fail', diagnosis: { kind: 'zero-sign', part: 'im', of: 'input' } } });
+    expect(finding).toMatchObject({
+      label: 'on -0',
+      zHex: { re: '-0x1p-1', im: '-0x0p+0' },
+      outcome: { kind: 'fail', diagnosis: { kind: 'zero-sign', part: 'im', of: 'input' } },
+    });
     expect(finding.reproducer).toContain("require('complex.js')");
   }, 120_000);
 
   it('writes well-formed JUnit XML: one testsuite per suite × target, one testcase per path, failures listing their points', () => {
     const out = path.join(dir, 'junit.xml');
-    const r = run(['--suite', 'sqrt-principal-sz,log-principal-ccw', '--target', 'complex.js@2.4.3', '--target', 'mathjs@15.2.0', '--format', 'junit', '--out', out]);
+    const r = run([
+      '--suite',
+      'sqrt-principal-sz,log-principal-ccw',
+      '--target',
+      'complex.js@2.4.3',
+      '--target',
+      'mathjs@15.2.0',
+      '--format',
+      'junit',
+      '--out',
+      out,
+    ]);
     expect(r.status).toBe(1);
     expect(r.stdout).toBe('');
     expect(r.stderr).toMatch(/written to .*junit\.xml/);
     const xml = readFileSync(out, 'utf8');
     expect(XMLValidator.validate(xml)).toBe(true);
     const doc = new XMLParser({ ignoreAttributes: false, attributeNamePrefix: '' }).parse(xml);
-    const suites = doc.testsuites.testsuite as { name: string; testcase: { name: string; failure?: { type: string; '#text': string } }[]; properties: { property: { name: string; value: string }[] } }[];
+    const suites = doc.testsuites.testsuite as {
+      name: string;
+      testcase: { name: string; failure?: { type: string; '#text': string } }[];
+      properties: { property: { name: string; value: string }[] };
+    }[];
     expect(suites.map((s) => s.name)).toEqual([
       'sqrt-principal-sz@1 × complex.js@2.4.3',
       'sqrt-principal-sz@1 × mathjs@15.2.0/complex',
@@ -64,14 +91,18 @@ describe('sheetkeeper run', () => {
     ]);
     for (const s of suites) {
       // One testcase per path, then one per property check (titled by its law and seed).
-      expect(s.testcase.slice(0, 3).map((c) => c.name)).toEqual(['straddle cut 1 (straddle, 40 points)', 'around branch point 1 (circle, 65 points)', 'wide circle (circle, 49 points)']);
+      expect(s.testcase.slice(0, 3).map((c) => c.name)).toEqual([
+        'straddle cut 1 (straddle, 40 points)',
+        'around branch point 1 (circle, 65 points)',
+        'wide circle (circle, 49 points)',
+      ]);
       expect(s.testcase.length).toBe(3 + (s.name.startsWith('sqrt') ? 3 : 4));
       expect(s.properties.property.find((p) => p.name === 'disclaimer')!.value).toMatch(/not a certification/);
     }
     const straddle = suites[0]!.testcase[0]!.failure!;
     expect(straddle.type).toBe('zero-sign');
     expect(straddle['#text']).toContain('z        = -1 + -0i   [-0x1p+0, -0x0p+0]');
-    expect(straddle['#text']).toContain("const z = c(-1, -0);");
+    expect(straddle['#text']).toContain('const z = c(-1, -0);');
   }, 120_000);
 
   it('exits 2 for bad input: an unknown suite or target, a flag it does not know, an invalid suite file', () => {
@@ -84,7 +115,9 @@ describe('sheetkeeper run', () => {
     expect(run(['--suite', 'sqrt-principal-sz', '--target', 'complex.js', '--format', 'xml']).status).toBe(2);
     expect(run(['--target', 'complex.js']).status).toBe(2);
     const file = path.join(dir, 'broken.json');
-    const suite = JSON.parse(readFileSync(path.join(__dirname, '..', '..', '..', '..', 'suites', 'demo', 'sqrt-principal-sz.json'), 'utf8'));
+    const suite = JSON.parse(
+      readFileSync(path.join(__dirname, '..', '..', '..', '..', 'suites', 'demo', 'sqrt-principal-sz.json'), 'utf8'),
+    );
     suite.id = 'broken-suite';
     suite.paths[1].radius = 1;
     writeFileSync(file, JSON.stringify(suite));
@@ -96,7 +129,9 @@ describe('sheetkeeper run', () => {
     writeFileSync(file, JSON.stringify(suite));
     const refused = run(['--suite', file, '--target', 'complex.js']);
     expect(refused.status).toBe(2);
-    expect(refused.stderr).toContain('broken-suite: subject the function "sin" (not in the catalogue) is not allowed in a subject');
+    expect(refused.stderr).toContain(
+      'broken-suite: subject the function "sin" (not in the catalogue) is not allowed in a subject',
+    );
   }, 120_000);
 });
 
@@ -105,7 +140,12 @@ describe('sheetkeeper targets', () => {
     const r = cli(['targets']);
     expect(r.status).toBe(0);
     const targets = JSON.parse(r.stdout) as { name: string; settings: Record<string, unknown> }[];
-    expect(targets.map((t) => t.name)).toEqual(expect.arrayContaining(['complex.js@2.4.3', 'mathjs@15.2.0/complex', 'mathjs@15.2.0/number/predictable']));
-    expect(targets.find((t) => t.name === 'mathjs@15.2.0/complex')!.settings).toMatchObject({ entry: 'complex', predictable: false });
+    expect(targets.map((t) => t.name)).toEqual(
+      expect.arrayContaining(['complex.js@2.4.3', 'mathjs@15.2.0/complex', 'mathjs@15.2.0/number/predictable']),
+    );
+    expect(targets.find((t) => t.name === 'mathjs@15.2.0/complex')!.settings).toMatchObject({
+      entry: 'complex',
+      predictable: false,
+    });
   });
 });

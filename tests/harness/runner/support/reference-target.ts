@@ -22,14 +22,31 @@ const ARITHMETIC: Record<string, (a: Pair, b: Pair) => Pair> = {
  * arithmetic is done in doubles;
  * `fault` may change any answer, to plant exactly one kind of failure.
  */
-export function referenceTarget(name = 'oracle@1', fault?: (op: string, args: ComplexPair[], value: Pair) => Pair, convention: 'signed-zero' | 'counter-clockwise' = 'signed-zero'): Target {
+export function referenceTarget(
+  name = 'oracle@1',
+  fault?: (op: string, args: ComplexPair[], value: Pair) => Pair,
+  convention: 'signed-zero' | 'counter-clockwise' = 'signed-zero',
+): Target {
   const value = (op: string, args: ComplexPair[]): Pair => {
     const [z, w] = args as [Pair, Pair | undefined];
     if (op === 'neg') return [-z[0], -z[1]];
     const arith = ARITHMETIC[op];
     if (arith) return arith(z, w as Pair);
-    if (op === 'pow') return principalValue({ fn: 'pow', z: BigComplex.fromDoubles(z[0], z[1]), w: { kind: 'complex', value: BigComplex.fromDoubles((w as Pair)[0], (w as Pair)[1]) }, convention }, { double: true, digits: 0 }).double;
-    if (op === 'nthroot') return principalValue({ fn: 'nthroot', z: BigComplex.fromDoubles(z[0], z[1]), n: (w as Pair)[0], convention }, { double: true, digits: 0 }).double;
+    if (op === 'pow')
+      return principalValue(
+        {
+          fn: 'pow',
+          z: BigComplex.fromDoubles(z[0], z[1]),
+          w: { kind: 'complex', value: BigComplex.fromDoubles((w as Pair)[0], (w as Pair)[1]) },
+          convention,
+        },
+        { double: true, digits: 0 },
+      ).double;
+    if (op === 'nthroot')
+      return principalValue(
+        { fn: 'nthroot', z: BigComplex.fromDoubles(z[0], z[1]), n: (w as Pair)[0], convention },
+        { double: true, digits: 0 },
+      ).double;
     return principalDouble(op, z[0], z[1], convention);
   };
   return {
