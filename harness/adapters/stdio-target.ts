@@ -46,7 +46,7 @@ function readPair(item: unknown): CallResult {
 }
 
 /**
- * A library behind the stdio JSON-lines protocol (stdio-protocol.md): one long-lived
+ * A library behind the stdio JSON-lines protocol (docs/stdio-protocol.md): one long-lived
  * program per target, started on first use, one request in flight at a time. A
  * request that gets no answer within the time limit, a program that exits, or a line
  * that is not the answer to the pending request turns the batch into error results

@@ -133,7 +133,7 @@ function jsMath(program: SubjectProgram, z: ComplexPair, header: string): string
 
 function stdio(program: SubjectProgram, target: TargetInfo, z: ComplexPair, header: string): string {
   const wire = (p: ComplexPair) => [formatHexDouble(p[0]), formatHexDouble(p[1])];
-  const lines = [`# ${header}: stdio protocol requests, one per step (harness/adapters/stdio-protocol.md)`];
+  const lines = [`# ${header}: stdio protocol requests, one per step (docs/stdio-protocol.md)`];
   const command = String(target.settings.command ?? '<adapter command>');
   const known = new Map<number, ComplexPair>([[0, z]]);
   program.steps.forEach((step, i) => {

@@ -1,7 +1,7 @@
 """Python's cmath behind Sheetkeeper's stdio JSON-lines protocol.
 
 Written in Python on purpose: the protocol exists so libraries in other languages
-can be tested (see ../stdio-protocol.md). Run with Debian's /usr/bin/python3.
+can be tested (see docs/stdio-protocol.md). Run with Debian's /usr/bin/python3.
 cmath follows ISO C Annex G for special values and signed zeros, but raises
 ValueError / OverflowError where C returns a value and signals an exception.
 """
