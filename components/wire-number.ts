@@ -1,4 +1,4 @@
-/** A complex number on the wire (DESIGN.md §5). */
+/** A complex number on the wire (docs/suite-format.md). */
 type Wire = { re: string; im: string };
 
 const minus = (s: string) => s.replace(/^-/, '−');

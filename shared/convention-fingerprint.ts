@@ -1,9 +1,9 @@
-/** A complex number on the wire (DESIGN.md §5). */
+/** A complex number on the wire (docs/suite-format.md). */
 type Wire = { re: string; im: string };
 
 /**
- * Which convention a target follows on each cut of each function (DESIGN.md §2, "Sheetkeeper
- * also reports which one a library appears to follow"). Per (function, cut):
+ * Which convention a target follows on each cut of each function (docs/vocabulary.md, "fingerprint";
+ * docs/conventions.md). Per (function, cut):
  * - `signed-zero`: on the cut, +0 and −0 in the across part give the two one-sided limits (Annex G);
  * - `counter-clockwise`: both give the limit from the side Kahan's rule closes;
  * - `neither`: something else (the other side closed, the signs swapped, the cut elsewhere, no value);

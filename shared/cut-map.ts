@@ -1,9 +1,9 @@
-/** A complex number on the wire (DESIGN.md §5). */
+/** A complex number on the wire (docs/suite-format.md). */
 type Wire = { re: string; im: string };
 
 /**
  * Where one function of a target is discontinuous over a box, against where the reference
- * catalogue puts its cuts (DESIGN.md §4, cut map). `observed` are the discontinuities found
+ * catalogue puts its cuts (docs/architecture.md, library findings). `observed` are the discontinuities found
  * between grid neighbours, merged into polylines; `expected` are the catalogue's cuts clipped
  * to the box, with the share of grid lines crossing them where a discontinuity was found.
  * `verdict` is `matches` when every observed discontinuity lies on an expected cut and every

@@ -1,5 +1,5 @@
 /**
- * Why a point failed (DESIGN.md §2). `unexplained` is said honestly when a value is none of
+ * Why a point failed (docs/vocabulary.md). `unexplained` is said honestly when a value is none of
  * the others: far from the expected value and from every alternative we know how to compute.
  */
 export type Diagnosis =

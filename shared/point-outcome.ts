@@ -1,6 +1,6 @@
 import type { Diagnosis } from './diagnosis';
 
-/** The outcome of one point (DESIGN.md §2), shared by harness, server and app. */
+/** The outcome of one point (docs/vocabulary.md), shared by harness, server and app. */
 export type PointOutcome =
   | { kind: 'pass'; ulps: number; relativeError: number }
   | { kind: 'fail'; diagnosis: Diagnosis; ulps: number; relativeError: number }

@@ -5,7 +5,7 @@ import type { PropertyCheck } from './schemas/property-check-schema';
 type NamedValue = { name: string; value: ComplexString };
 
 /**
- * The outcome of one property check of a suite against a target (DESIGN.md §4). Every kind
+ * The outcome of one property check of a suite against a target (docs/architecture.md). Every kind
  * names the law, the title (which states the law) and the pinned seed, so a failure can be
  * replayed with fast-check's `seed` and `path`. `held` is evidence for `runs` generated points,
  * not a proof; `excluded` counts points where the law makes no claim.

@@ -1,7 +1,7 @@
 import type { DiagnosisKind } from './diagnosis';
 import type { PointOutcome } from './point-outcome';
 
-/** A complex number on the wire (DESIGN.md §5): shortest round-trip decimals, "-0", "inf", "nan". */
+/** A complex number on the wire (docs/suite-format.md): shortest round-trip decimals, "-0", "inf", "nan". */
 export interface WireComplex {
   re: string;
   im: string;
@@ -114,7 +114,7 @@ export interface SuiteTargetResult {
   reference: { computed: number; cached: number };
 }
 
-/** The JSON result of `sheetkeeper run` (DESIGN.md §5). */
+/** The JSON result of `sheetkeeper run` (docs/suite-format.md). */
 export interface RunResult {
   tool: { name: 'sheetkeeper'; version: string };
   startedAt: string;

@@ -1,4 +1,4 @@
-/** One target as `GET /api/targets` lists it: a library at one version with its settings (DESIGN.md §2). */
+/** One target as `GET /api/targets` lists it: a library at one version with its settings (docs/vocabulary.md). */
 export interface TargetView {
   /** The harness's name, e.g. "complex.js@2.4.1" or "mathjs@15.2.0/number/predictable". */
   name: string;

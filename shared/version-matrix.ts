@@ -1,6 +1,6 @@
 import type { Diagnosis } from './diagnosis';
 
-/** A complex number on the wire (DESIGN.md §5). */
+/** A complex number on the wire (docs/suite-format.md). */
 type Wire = { re: string; im: string };
 /** How a point came out at one version: its value (null when the library gave none) and its outcome. */
 type Side = {
@@ -14,7 +14,7 @@ type Side = {
 };
 
 /**
- * The same suites over every installed version of one library (DESIGN.md §2, "version
+ * The same suites over every installed version of one library (docs/vocabulary.md, "version
  * change"): per suite the status at each version, and every point whose value changed between
  * two consecutive versions (sign-exactly: a zero that changes sign is a change), with the
  * first version where it changed and, for each change, the value and outcome on both sides.

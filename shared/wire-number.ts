@@ -1,5 +1,5 @@
 /**
- * A wire number (DESIGN.md §5) as the double it names: "-0", "inf", "-inf", "nan", or a
+ * A wire number (docs/suite-format.md) as the double it names: "-0", "inf", "-inf", "nan", or a
  * shortest round-trip decimal, which reads back as exactly the double that was written.
  */
 export function wireNumber(s: string): number {

@@ -8,7 +8,7 @@ import { pythonVersion } from './python-version';
 import { stdioTarget } from './stdio-target';
 import type { TargetDescriptor } from './target-descriptor';
 
-/** Debian's interpreter (STACK.md): the python3 first on PATH may be another one. */
+/** Debian's interpreter (docs/conventions.md): the python3 first on PATH may be another one. */
 const DEBIAN_PYTHON = '/usr/bin/python3';
 const PROJECT_ROOT = path.resolve(__dirname, '..', '..');
 

@@ -28,7 +28,7 @@ const FUNCTION: Readonly<Record<string, string>> = {
  * point cannot see the sign of a zero imaginary part, which is the point of testing
  * it: `sqrt(-4)` is 2i with predictable off and NaN with predictable on.
  * nthroot's degree always goes in as a number. Loaded with `require` on first use:
- * `require('mathjs')` costs about a second (STACK.md).
+ * `require('mathjs')` costs about a second (docs/conventions.md).
  */
 export function mathjsTarget(
   alias: string,

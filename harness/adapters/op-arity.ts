@@ -1,5 +1,5 @@
 /**
- * The operations of the catalogue (DESIGN.md §2) and how many complex arguments each
+ * The operations of the catalogue (docs/vocabulary.md) and how many complex arguments each
  * takes. nthroot's second argument is the integer n as n + 0i.
  */
 export const OP_ARITY: Readonly<Record<string, number>> = {

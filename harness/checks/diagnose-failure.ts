@@ -21,7 +21,7 @@ const sameSigned = (a: ComplexDouble, b: ComplexDouble) =>
   signsOfZeros(a).every((s, i) => s === null || signsOfZeros(b)[i] === null || s === signsOfZeros(b)[i]);
 
 /**
- * Chooses the diagnosis of a failing point (DESIGN.md §2), in this order: a non-finite part;
+ * Chooses the diagnosis of a failing point (docs/vocabulary.md), in this order: a non-finite part;
  * the value the reference gives with an input zero flipped; a right value with a wrong output
  * zero sign; the other side of the cut or another sheet, whichever is nearer when both match
  * to 1e-6; and then the nearest of all these

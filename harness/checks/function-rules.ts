@@ -11,75 +11,81 @@ export interface FunctionRule {
 /**
  * The rule table behind every finding's `rule`. Clause numbers are those of ISO/IEC 9899:2011
  * Annex G (G.6.1.1 cacos, G.6.2.1–3 cacosh/casinh/catanh, G.6.3.1–2 cexp/clog, G.6.4.1–2
- * cpow/csqrt; casin and catan through the identities at the head of G.6) and of the DLMF
+ * cpow/csqrt; casin and catan through the identities of G.6 paragraph 7) and of the DLMF
  * equations the reference engine implements (harness/reference/functions); the side rules are
- * Kahan's (1987) as each reference function states them. Quoted from memory, as in the
- * reference engine's own TSDoc.
+ * Kahan's (1987) as each reference function states them. docs/sources.md lists which clause
+ * and equation was checked against which published text; a rule whose equation number could
+ * not be checked says so in its own text.
  */
 export const FUNCTION_RULES: Readonly<Record<string, FunctionRule>> = {
   sqrt: {
-    definition: 'DLMF 4.2.2 with 4.2.7: √z = exp(½ Log z), Re √z ≥ 0',
+    definition: 'DLMF §4.2(iv) with 4.2.7: √z = exp(½ Log z), Re √z ≥ 0',
     annexG:
       'ISO/IEC 9899:2011 G.6.4.2 (csqrt): on (−∞, 0] the sign of the zero imaginary part picks the side, csqrt(conj z) = conj csqrt(z)',
     counterClockwise: 'Kahan 1987: the cut (−∞, 0] belongs to the upper side, √(−4) = 2i',
   },
   cbrt: {
-    definition: 'DLMF 4.2.26 with w = 1/3: ∛z = exp(⅓ Log z), |arg| ≤ π/3',
+    definition:
+      'DLMF 4.2.26 with w = 1/3: ∛z = exp(⅓ Log z), |arg| ≤ π/3 (equation number not checked against the DLMF text)',
     annexG:
       'ISO/IEC 9899:2011 G.6.4.1 (cpow, through clog G.6.3.2): on (−∞, 0] the sign of the zero imaginary part picks the side',
     counterClockwise: 'Kahan 1987: the cut (−∞, 0] belongs to the upper side',
   },
   nthroot: {
-    definition: 'DLMF 4.2.26 with w = 1/n: z^(1/n) = exp(Log z / n)',
+    definition:
+      'DLMF 4.2.26 with w = 1/n: z^(1/n) = exp(Log z / n) (equation number not checked against the DLMF text)',
     annexG:
       'ISO/IEC 9899:2011 G.6.4.1 (cpow, through clog G.6.3.2): on (−∞, 0] the sign of the zero imaginary part picks the side',
     counterClockwise: 'Kahan 1987: the cut (−∞, 0] belongs to the upper side',
   },
   pow: {
-    definition: 'DLMF 4.2.26: z^w = exp(w Log z)',
+    definition: 'DLMF 4.2.26: z^w = exp(w Log z) (equation number not checked against the DLMF text)',
     annexG:
       'ISO/IEC 9899:2011 G.6.4.1 (cpow ≈ cexp(w·clog z)): on (−∞, 0] the sign of the zero imaginary part picks the side',
     counterClockwise: 'Kahan 1987: the cut (−∞, 0] belongs to the upper side',
   },
   exp: {
-    definition: 'DLMF 4.2.19: e^z = e^x (cos y + i sin y), single-valued',
+    definition: 'DLMF §4.2(iii): e^z = e^x (cos y + i sin y), single-valued',
     annexG: 'ISO/IEC 9899:2011 G.6.3.1 (cexp): special values and the sign of a zero imaginary part',
     counterClockwise: 'no cut',
   },
   log: {
-    definition: 'DLMF 4.2.2–4.2.3: Log z = ln|z| + i Arg z, −π < Arg ≤ π',
+    definition: 'DLMF 4.2.5, with 4.2.7 on the cut: Log z = ln|z| + i Arg z, −π < Arg ≤ π',
     annexG: 'ISO/IEC 9899:2011 G.6.3.2 (clog): Log(x ± 0i) = ln|x| ± iπ for x < 0, clog(conj z) = conj clog(z)',
     counterClockwise: 'Kahan 1987: the cut (−∞, 0] belongs to the upper side, Log(−1) = iπ',
   },
   asin: {
     definition: 'DLMF 4.23.19: asin z = −i ln(iz + √(1 − z²)), |Re| ≤ π/2',
     annexG:
-      'ISO/IEC 9899:2011 G.6 (casin z = −i casinh(iz)) with G.6.2.2: on (−∞, −1] and [1, ∞) the sign of Im z picks the side',
+      'ISO/IEC 9899:2011 G.6 paragraph 7 (casin z = −i casinh(iz)) with G.6.2.2: on (−∞, −1] and [1, ∞) the sign of Im z picks the side',
     counterClockwise: 'Kahan 1987: (−∞, −1] belongs to the upper side, [1, ∞) to the lower',
   },
   acos: {
-    definition: 'DLMF 4.23.20: acos z = π/2 − asin z, 0 ≤ Re ≤ π',
+    definition: 'DLMF 4.23.22: acos z = π/2 + i ln((1 − z²)^½ + iz) = π/2 − asin z, 0 ≤ Re ≤ π',
     annexG: 'ISO/IEC 9899:2011 G.6.1.1 (cacos): on (−∞, −1] and [1, ∞) the sign of Im z picks the side',
     counterClockwise: 'Kahan 1987: (−∞, −1] belongs to the upper side, [1, ∞) to the lower',
   },
   atan: {
     definition: 'DLMF 4.23.26: atan z = (i/2) ln((i + z)/(i − z)), |Re| ≤ π/2',
     annexG:
-      'ISO/IEC 9899:2011 G.6 (catan z = −i catanh(iz)) with G.6.2.3: on [i, i∞) and (−i∞, −i] the sign of Re z picks the side',
+      'ISO/IEC 9899:2011 G.6 paragraph 7 (catan z = −i catanh(iz)) with G.6.2.3: on [i, i∞) and (−i∞, −i] the sign of Re z picks the side',
     counterClockwise: 'Kahan 1987: [i, i∞) belongs to the right side, (−i∞, −i] to the left',
   },
   asinh: {
-    definition: 'DLMF 4.37.16: asinh z = ln(z + √(1 + z²)), |Im| ≤ π/2',
+    definition:
+      'DLMF 4.37.16: asinh z = ln(z + √(1 + z²)), |Im| ≤ π/2 (equation number not checked against the DLMF text)',
     annexG: 'ISO/IEC 9899:2011 G.6.2.2 (casinh): on [i, i∞) and (−i∞, −i] the sign of Re z picks the side',
     counterClockwise: 'Kahan 1987: [i, i∞) belongs to the right side, (−i∞, −i] to the left',
   },
   acosh: {
-    definition: 'DLMF 4.37.17: acosh z = ln(z + (z + 1)√((z − 1)/(z + 1))), Re ≥ 0',
+    definition:
+      'DLMF 4.37.17: acosh z = ln(z + (z + 1)√((z − 1)/(z + 1))), Re ≥ 0 (equation number not checked against the DLMF text)',
     annexG: 'ISO/IEC 9899:2011 G.6.2.1 (cacosh): on (−∞, 1] the sign of Im z picks the side',
     counterClockwise: 'Kahan 1987: the cut (−∞, 1] belongs to the upper side',
   },
   atanh: {
-    definition: 'DLMF 4.37.24: atanh z = ½ ln((1 + z)/(1 − z)), |Im| ≤ π/2',
+    definition:
+      'DLMF 4.37.24: atanh z = ½ ln((1 + z)/(1 − z)), |Im| ≤ π/2 (equation number not checked against the DLMF text)',
     annexG: 'ISO/IEC 9899:2011 G.6.2.3 (catanh): on (−∞, −1] and [1, ∞) the sign of Im z picks the side',
     counterClockwise: 'Kahan 1987: (−∞, −1] belongs to the upper side, [1, ∞) to the lower',
   },
@@ -121,7 +127,7 @@ export const FUNCTION_RULES: Readonly<Record<string, FunctionRule>> = {
   },
 };
 
-/** ISO/IEC 9899:2011 7.3.3 (from memory): how the two conventions treat cuts in general. */
+/** ISO/IEC 9899:2011 7.3.3 (branch cuts): how the two conventions treat cuts in general. */
 export const CUT_CONVENTION_RULE = {
   'signed-zero': 'ISO/IEC 9899:2011 7.3.3 and Annex G: the sign of a zero part distinguishes the sides of a cut',
   'counter-clockwise':

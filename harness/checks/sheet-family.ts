@@ -1,6 +1,7 @@
 /**
  * How the other values of a multivalued function relate to its principal value v
- * (DLMF 4.2(i), 4.2(iv), 4.23(ii), 4.37(ii), from memory):
+ * (DLMF §4.2(i) and 4.2.6 for log; §4.2(iv), §4.23(i)–(ii), §4.37(i)–(ii) for the others,
+ * whose general-value formulas were not checked equation by equation against the text):
  * - `power`: v·e^{2πiνk} for z^ν (roots, powers, regular branches of g^ν);
  * - `log`: v + 2πik;
  * - `asin`: (−1)^k v + kπ; `acos`: v + 2kπ; `atan`: v + kπ;

@@ -36,7 +36,7 @@ let parser: ((text: string) => MathNode) | null = null;
 
 /**
  * mathjs's parser with BigNumber constants, so "0.1" reaches us as the decimal it was written as.
- * Loaded on first use: `require('mathjs')` costs ~1.1 s (STACK.md), which `sheetkeeper reference` never needs.
+ * Loaded on first use: `require('mathjs')` costs ~1.1 s (docs/conventions.md), which `sheetkeeper reference` never needs.
  */
 function mathParse(text: string): MathNode {
   if (!parser) {

@@ -8,7 +8,7 @@ const HEX_OR_RATIO = /^[+-]?(0[xX]([0-9a-fA-F]+\.?[0-9a-fA-F]*|\.[0-9a-fA-F]+)([
  * (ties to even): ECMAScript's StringToNumber is correctly rounded for decimal
  * literals of any length (ECMA-262 §7.1.4.1.1, round-to-nearest of the exact
  * mathematical value), so Number() is exact conversion here. "-0" stays −0.
- * The other forms of the wire format (DESIGN.md §5), a C hex float or a ratio "p/q",
+ * The other forms of the wire format (docs/suite-format.md), a C hex float or a ratio "p/q",
  * go through the reference engine's parseDouble, which rounds them exactly too.
  * "Infinity", empty strings and other text that Number() would accept or turn into 0
  * are refused, as are non-finite values: geometry is finite.

@@ -14,7 +14,7 @@ type GeometryPoint = { re: GeometryNumber; im: GeometryNumber };
 type Sampling = { samples: number; at?: undefined } | { at: GeometryNumber[]; samples?: undefined };
 
 /**
- * The description of a path (DESIGN.md §2). Angles are in radians, or a rational
+ * The description of a path (docs/vocabulary.md). Angles are in radians, or a rational
  * multiple of π written "pi", "-pi/2", "3pi/4", which is exact (see parse-turns.ts).
  */
 export type PathSpec =

@@ -7,7 +7,7 @@ import type { PathSpec } from './path-spec';
 
 type Point = { re: number; im: number };
 
-/** The offsets of DESIGN.md §2; 5e-324 is the least subnormal, which only survives next to 0. */
+/** The default offsets (docs/suite-format.md); 5e-324 is the least subnormal, which only survives next to 0. */
 const DEFAULT_OFFSETS = ['1e-3', '1e-9', '1e-300', '5e-324'];
 
 /**

@@ -15,7 +15,8 @@ import type { PropertyLaw } from './property-law';
  */
 export const expLogLaw: PropertyLaw = {
   formula: 'exp(log z) = z',
-  source: 'DLMF 4.2(iii): exp inverts every branch of log (from memory)',
+  source:
+    "DLMF 4.2(iii) and 4.2.6: exp inverts every branch of log (the identity's equation number was not checked against the DLMF text)",
   arity: 1,
   ops: () => ['exp'],
   notApplicable: (ctx) => (logOf(ctx.expr) ? null : 'the subject is not a logarithm log(g)'),

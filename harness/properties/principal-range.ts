@@ -7,8 +7,8 @@ const im = (min: number, max: number, ccwOpenMin = false): RangeCondition => ({ 
 /**
  * The principal ranges of the catalogue's functions, closed (the signed-zero convention
  * reaches both edges, one from each side of the cut): DLMF §4.2(i) for log, §4.23(ii) for
- * the inverse trigonometric and §4.37(ii) for the inverse hyperbolic functions (all quoted
- * from memory; the reciprocal cousins share the range of the function they invert through
+ * the inverse trigonometric and §4.37(ii) for the inverse hyperbolic functions (the ranges
+ * themselves are drawn in the DLMF's figures, not checked here; the reciprocal cousins share the range of the function they invert through
  * 1/z). `ccwOpenMin` is set where DLMF writes the range half-open (−π < Im log z ≤ π), which
  * is Kahan's counter-clockwise choice. Powers and roots have their own rule (powerRange).
  */

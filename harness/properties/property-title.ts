@@ -13,7 +13,7 @@ function regionText(region: PropertyCheck['region']): string {
 /**
  * The title of a property check: the law as a formula with its source, the subject, the
  * region, the convention and the pinned seed — everything needed to read a failure and replay it.
- * "conjugate-symmetry: f(conj z) = conj f(z) [ISO/IEC 9899:2011 G.6 para 3 …] for f(z) = sqrt(z)
+ * "conjugate-symmetry: f(conj z) = conj f(z) [ISO/IEC 9899:2011 G.6, each function's subclause …] for f(z) = sqrt(z)
  * over points within 1e-6 of the expected cuts, signed-zero, 300 runs, seed 1330520191".
  */
 export function propertyTitle(check: PropertyCheck, subject: string, convention: Convention): string {

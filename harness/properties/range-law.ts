@@ -15,7 +15,7 @@ function rangeOf(
   expr: SubjectExpr,
 ): { conditions: readonly RangeCondition[]; g: SubjectExpr; cuts: PlaneCut[] } | null {
   const powerRange = (w: number, g: SubjectExpr) => ({
-    // arg z^w = w·Arg z with |Arg z| ≤ π, a range only while |w| < 1 (DLMF 4.2.26 with 4.2(i), from memory).
+    // arg z^w = w·Arg z with |Arg z| ≤ π, a range only while |w| < 1 (DLMF 4.2.26 with 4.2(i); 4.2.26 not checked against the text).
     conditions: [{ part: 'arg' as const, min: -Math.PI * Math.abs(w), max: Math.PI * Math.abs(w), ccwOpenMin: true }],
     g,
     cuts: catalogueCuts('pow') ?? [],
@@ -49,7 +49,7 @@ function partOf([re, im]: ComplexPair, part: RangeCondition['part']): number | n
  */
 export const rangeLaw: PropertyLaw = {
   formula: 'f(z) in the principal range of f',
-  source: 'DLMF 4.2(i), 4.23(ii), 4.37(ii) (from memory); half-open edges per Kahan (1987) under counter-clockwise',
+  source: 'DLMF 4.2(i), 4.23(ii), 4.37(ii); half-open edges per Kahan (1987) under counter-clockwise',
   arity: 1,
   ops: () => [],
   notApplicable: (ctx) =>

@@ -9,7 +9,7 @@ import { rootOf } from './root-of';
 
 /**
  * f(z)^n = g(z) for a root f = g^(1/n): the defining property of every n-th root (DLMF
- * §4.2(iv), from memory), whichever branch. It cannot tell branches apart; it catches a
+ * §4.2(iv)), whichever branch. It cannot tell branches apart; it catches a
  * "root" that is not one (a half-angle from atan(y/x), a mixed-up conjugate). The power is
  * taken with the library's own multiplication, n − 1 products, and g(z) with its own
  * arithmetic. Each product and the root's own rounding add relative error, so the tolerance
@@ -29,7 +29,7 @@ function powerMismatch(exponent: Rational, n: number): number {
 
 export const rootPowerLaw: PropertyLaw = {
   formula: 'f(z)^n = g(z)',
-  source: 'definition of the n-th root, DLMF 4.2(iv) (from memory)',
+  source: 'definition of the n-th root, DLMF 4.2(iv)',
   arity: 1,
   ops: () => ['mul'],
   notApplicable: (ctx) => {

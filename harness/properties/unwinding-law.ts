@@ -8,7 +8,7 @@ const TWO_PI = 2 * Math.PI;
 /** Below the least normal double a rounded product carries more than 2^−53 relative error. */
 const MIN_NORMAL = 2 ** -1022;
 
-/** The unwinding number K(w) = ⌈(Im w − π) / 2π⌉ (Corless and Jeffrey, "The unwinding number", SIGSAM Bulletin 30(2), 1996; from memory). */
+/** The unwinding number K(w) = ⌈(Im w − π) / 2π⌉ (Corless and Jeffrey, "The unwinding number", SIGSAM Bulletin 30(2), 1996; the paper was not read, the formula not checked against it). */
 function unwinding(w: ComplexPair): number {
   return Math.ceil((w[1] - Math.PI) / TWO_PI);
 }
@@ -30,7 +30,8 @@ function unwinding(w: ComplexPair): number {
  */
 export const unwindingLaw: PropertyLaw = {
   formula: 'log(z1*z2) = log z1 + log z2 - 2*pi*i*K(log z1 + log z2)',
-  source: 'Corless & Jeffrey 1996, the unwinding number K(w) = ceil((Im w - pi)/(2 pi)) (from memory)',
+  source:
+    'Corless & Jeffrey 1996, the unwinding number K(w) = ceil((Im w - pi)/(2 pi)) (formula not checked against the paper)',
   arity: 2,
   ops: () => [],
   notApplicable: (ctx) =>

@@ -12,7 +12,7 @@ const RATIO = /^\s*[+-]?\d+\/\d+\s*$/;
 const DEFAULT_DIGITS = 40;
 
 /**
- * The answer to one `reference` request (DESIGN.md §5): the principal value to 40
+ * The answer to one `reference` request (docs/suite-format.md): the principal value to 40
  * significant digits and the correctly rounded double, or `{error}` naming what is wrong.
  * z and a decimal w are library inputs, so they name the nearest binary64; a w written
  * "p/q" is that exact rational.

@@ -30,7 +30,7 @@ const LOG2_10 = Math.log2(10);
  * kernels correct to 2^−bits relative); see {@link evaluateFunction}.
  *
  * Why bigints rather than decimal.js: a naive decimal.js complex log at 34 digits cost ~0.8 ms,
- * 25× slower than mpmath (STACK.md). This engine, with table-reduced series on bigint fixed point,
+ * 25× slower than mpmath (docs/conventions.md). This engine, with table-reduced series on bigint fixed point,
  * produced 40-digit strings at 34,000–75,000 points/s on the bench's 9-function mix, 1.3–2.9× mpmath
  * at 40 digits over six runs on a loaded 2-core machine. For doubles alone see principalDouble.
  */

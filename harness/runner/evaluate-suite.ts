@@ -67,7 +67,7 @@ const emptyCounts = (): OutcomeCounts => ({ pass: 0, fail: 0, error: 0, skipped:
 const errorText = (e: unknown): string => (e instanceof Error ? e.message : String(e));
 
 /**
- * One suite against one target (DESIGN.md §2, §4): every point of every path evaluated with
+ * One suite against one target (docs/vocabulary.md, docs/architecture.md): every point of every path evaluated with
  * the library's own operations and compared sign-exactly with the expected value (principal:
  * the reference of the whole subject under the suite's convention; regular: the continued
  * branch on the cut plane); each failure diagnosed (zero-sign, cut-side, other-sheet,

@@ -20,7 +20,7 @@ export interface ExpectedColumn {
 }
 
 /**
- * What a suite's subject should equal (DESIGN.md §2) at the points of its paths, with the
+ * What a suite's subject should equal (docs/vocabulary.md) at the points of its paths, with the
  * alternatives to diagnose a failure. Principal suites: the reference value of the whole
  * subject under the suite's convention. Regular suites: the continued branch on the plane cut
  * along the layout. All values come through the reference cache.

@@ -11,7 +11,7 @@ export interface Shard {
   points: number;
 }
 
-/** Suites × targets, split into shards (DESIGN.md §2). `pathPoints[s][p]` is the size of path p of suite s. */
+/** Suites × targets, split into shards (docs/vocabulary.md). `pathPoints[s][p]` is the size of path p of suite s. */
 export interface Plan {
   suites: Suite[];
   targets: TargetRef[];

@@ -64,7 +64,7 @@ interface ShardOutcome {
 }
 
 /**
- * Runs a plan (DESIGN.md §2): shards taken from a queue, in this process or by worker threads,
+ * Runs a plan (docs/vocabulary.md): shards taken from a queue, in this process or by worker threads,
  * with progress events, cancellation and a time limit per shard. A target that hangs past the
  * limit, throws or crashes its worker turns that shard's points into errors naming what
  * happened; the run goes on with the next shard (a fresh target, a fresh worker). Reference

@@ -1,6 +1,6 @@
 import { Column, Entity, PrimaryColumn } from 'typeorm';
 
-/** One library at one version with its settings (DESIGN.md §2), as found installed by the harness. */
+/** One library at one version with its settings (docs/vocabulary.md), as found installed by the harness. */
 @Entity({ name: 'targets' })
 export class Target {
   /** The harness's name for it, e.g. "complex.js@2.4.1" or "mathjs@15.2.0/number/predictable". */

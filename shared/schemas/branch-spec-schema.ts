@@ -32,7 +32,7 @@ const regular = z
   .refine((b) => (b.f0 === undefined) !== (b.k === undefined), { error: 'give exactly one of f0 and k', path: ['f0'] });
 
 /**
- * What the subject should equal (DESIGN.md §2): the principal branch of every function in it,
+ * What the subject should equal (docs/vocabulary.md): the principal branch of every function in it,
  * or a regular branch of g(z)^ν fixed at z0 with its cut layout.
  */
 export const branchSpecSchema = z.discriminatedUnion('kind', [principal, regular], {

@@ -9,7 +9,7 @@ export const numberString = z
     { error: 'must be a decimal, a hex float, p/q, inf, -inf or nan' },
   );
 
-/** A complex number on the wire, DESIGN.md §5: `{"re": "...", "im": "..."}`. */
+/** A complex number on the wire, docs/suite-format.md: `{"re": "...", "im": "..."}`. */
 export const complexString = z.strictObject(
   { re: numberString, im: numberString },
   {

@@ -25,7 +25,7 @@ const polylinePath = z.strictObject(
   { error: objectError },
 );
 
-/** One request line of `sheetkeeper continue` (DESIGN.md §5), plus an optional cut layout. */
+/** One request line of `sheetkeeper continue` (docs/suite-format.md), plus an optional cut layout. */
 export const continueRequest = z
   .strictObject(
     {

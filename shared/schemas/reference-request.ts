@@ -3,7 +3,7 @@ import { complexString, numberString } from './complex-string';
 import { conventionSchema } from './convention-schema';
 import { jsonObject } from './json-object';
 
-/** One request line of `sheetkeeper reference` (DESIGN.md §5). */
+/** One request line of `sheetkeeper reference` (docs/suite-format.md). */
 export const referenceRequest = jsonObject({
   fn: z.string({ error: 'is required' }).max(20),
   z: complexString,

@@ -104,7 +104,7 @@ const grid = z.strictObject(
   { error: objectError },
 );
 
-/** One path of a suite, DESIGN.md §2. Numbers are strings (DESIGN.md §5); t runs over [0, 1]. */
+/** One path of a suite, docs/vocabulary.md. Numbers are strings (docs/suite-format.md); t runs over [0, 1]. */
 export const suitePathSchema = z.discriminatedUnion('kind', [circle, segment, polyline, straddle, grid], {
   error: 'kind must be circle, segment, polyline, straddle or grid',
 });

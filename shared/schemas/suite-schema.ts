@@ -7,7 +7,7 @@ import { suitePathSchema } from './suite-path-schema';
 import { toleranceSchema } from './tolerance-schema';
 
 /**
- * A suite (DESIGN.md §2): a subject, what it should equal, the convention on the cuts, the
+ * A suite (docs/vocabulary.md): a subject, what it should equal, the convention on the cuts, the
  * paths to evaluate it along, tolerances per check and property checks. Results always name
  * the suite's id and version. The same schema validates suite files, the suite form and the API.
  */

@@ -1,4 +1,4 @@
-/** Where cmath raises, the value C returns (ISO/IEC 9899:2011 clause beside each; rules written from memory of G.6). */
+/** Where cmath raises, the value C returns (ISO/IEC 9899:2011 clause beside each; G.6.3.1–2 and G.6.2.3 read in the C99 text). */
 export const C_RULE: Record<string, (x: number, y: number) => [number, number] | undefined> = {
   // G.6.3.2: clog(−0 + i0) = −∞ + iπ, clog(+0 + i0) = −∞ + i0; conjugate symmetric.
   log: (x, y) => (x === 0 && y === 0 ? [-Infinity, Object.is(x, -0) ? Math.sign(1 / y) * Math.PI : y] : undefined),

@@ -6,7 +6,7 @@ import { sameDouble } from './same-double';
 import { unhex } from './unhex';
 
 /**
- * Parts whose sign ISO/IEC 9899:2011 G.6 leaves unspecified (from memory of G.6) ("where the sign of the … part of
+ * Parts whose sign ISO/IEC 9899:2011 G.6 leaves unspecified ("where the sign of the … part of
  * the result is unspecified"); there only the magnitude (or NaN-ness) is compared.
  */
 function unspecifiedSign(fn: string, x: number, y: number): { re: boolean; im: boolean } {

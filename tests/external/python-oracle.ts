@@ -1,7 +1,7 @@
 import { spawnSync } from 'node:child_process';
 import path from 'node:path';
 
-/** Debian's interpreter, which sees python3-mpmath and python3-gmpy2 (STACK.md). */
+/** Debian's interpreter, which sees python3-mpmath and python3-gmpy2 (docs/conventions.md). */
 const DEBIAN_PYTHON = '/usr/bin/python3';
 
 export interface OraclePoint {

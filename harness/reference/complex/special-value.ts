@@ -9,7 +9,8 @@ export type SpecialPart = BigFloat | { quarterPi: number };
  * A result fixed by a special-value rule (ISO/IEC 9899:2011 G.6) rather than computed:
  * each part is an IEEE special, a signed zero, or a multiple of π/4.
  *
- * The tables in the function files are written from memory of G.6, not copied from the text;
+ * The tables in the function files restate G.6 in our own words, not copied from the text (see
+ * docs/sources.md for the subclauses read);
  * every row is checked against Python's cmath in tests/external/cmath-annex-g.test.ts, and the
  * rows cmath refuses against the C rule stated there.
  */

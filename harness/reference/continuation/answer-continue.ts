@@ -15,7 +15,7 @@ import { LayoutError } from './layout-error';
 const DIGITS = 40;
 
 /**
- * The answer to one `continue` request (DESIGN.md §5): the regular branch of g(z)^ν fixed by f0
+ * The answer to one `continue` request (docs/suite-format.md): the regular branch of g(z)^ν fixed by f0
  * at z0 (or by k, f0 = principal·e^{2πiνk}), at each requested t of the path, and the monodromy
  * factor of a closed path; with `cuts`, the values of the branch on that cut plane. Every number
  * here is exact: "0.1" is one tenth, "1/3" a third.

@@ -19,7 +19,7 @@ export type PathSpec =
 const toDouble = (r: Rational) => Number(r.num) / Number(r.den);
 
 /**
- * A path of DESIGN.md §2 with parameter t ∈ [0, 1]: on a circle the angle is
+ * A path (docs/vocabulary.md) with parameter t ∈ [0, 1]: on a circle the angle is
  * start + s·2π·turns·t (s = +1 counter-clockwise), on a polyline t is the fraction of arc length.
  * Points are computed at working precision from the exact geometry; pieces give the same path in doubles.
  */

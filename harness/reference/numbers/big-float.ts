@@ -24,7 +24,7 @@ const NAN: Kind = 2;
  * Binary rather than decimal because every input is a double (an exact dyadic
  * rational) and because bigint arithmetic here is far cheaper than decimal.js:
  * a 150-bit multiply and shift measured ~50 ns against ~130 µs for one decimal.js
- * `ln` at 34 digits (STACK.md).
+ * `ln` at 34 digits (docs/conventions.md).
  */
 export class BigFloat {
   private constructor(

@@ -11,7 +11,7 @@ const RATIO = /^([+-]?\d+)\/(\d+)$/;
 const MAX_EXPONENT_DIGITS = 6;
 
 /**
- * Reads a number in the wire format of DESIGN.md §5 exactly: decimal strings,
+ * Reads a number in the wire format of docs/suite-format.md exactly: decimal strings,
  * C hex floats ("-0x1.8p+1"), ratios "p/q", and "inf", "-inf", "nan", "-0".
  * Throws a RangeError naming the text when it is none of these.
  */

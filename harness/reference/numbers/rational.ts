@@ -10,7 +10,7 @@ function gcd(a: bigint, b: bigint): bigint {
 /**
  * An exact rational number num/den in lowest terms (den > 0).
  *
- * Used where DESIGN.md §5 says a value is exact: an exponent written "1/3", and
+ * Used where docs/suite-format.md says a value is exact: an exponent written "1/3", and
  * z0, f0, ν and path geometry of `continue`, where "0.1" means one tenth and not
  * the double nearest to it.
  */

@@ -1,4 +1,4 @@
-/** What `sheetkeeper run` was asked (DESIGN.md §5), or why the arguments are bad input. */
+/** What `sheetkeeper run` was asked (docs/suite-format.md), or why the arguments are bad input. */
 export interface RunArgs {
   suites: string[];
   targets: string[];

@@ -20,7 +20,7 @@ const USAGE =
   'usage: sheetkeeper run --suite FILE|ID|FOLDER --target NAME@VERSION [--format table|json|junit] [--out FILE] [--seed N] [--workers N|auto] [--shard-time-limit MS] [--cache DIR | --no-cache] [--max-findings N] [--progress]';
 
 /**
- * `sheetkeeper run` (DESIGN.md §5): loads and validates the suites, resolves the targets, runs
+ * `sheetkeeper run` (docs/suite-format.md): loads and validates the suites, resolves the targets, runs
  * the plan and writes the result as a table, JSON or JUnit XML (to --out or stdout). Exit 0
  * when nothing failed, 1 when a point failed, errored or the run was cancelled (Ctrl-C), 2 for
  * bad input: unknown flags, suites or targets, and invalid suite files (each issue printed as

@@ -1,7 +1,7 @@
 import { listTargets } from '../../adapters/list-targets';
 
 /**
- * `sheetkeeper targets` (DESIGN.md §5): the installed targets, versions and settings, loading
+ * `sheetkeeper targets` (docs/suite-format.md): the installed targets, versions and settings, loading
  * no library. JSON by default (as list-targets.ts prints it); `--format table` for a person.
  */
 export async function targetsCommand(argv: string[]): Promise<number> {

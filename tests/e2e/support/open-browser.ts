@@ -15,7 +15,7 @@ export interface OpenBrowser {
 
 /**
  * Debian's Chromium through playwright-core, in a fresh profile. The flags keep it
- * off the network (this machine refuses outside connections) — see STACK.md.
+ * off the network (this machine refuses outside connections) — see docs/conventions.md.
  */
 export async function openBrowser(viewport = { width: 390, height: 844 }): Promise<OpenBrowser> {
   const profile = mkdtempSync(path.join(os.tmpdir(), 'sheetkeeper-e2e-'));

@@ -19,9 +19,10 @@ const value = (r: CallResult | undefined): ComplexPair => {
 };
 
 // Python's cmath follows ISO C Annex G for special values and signed zeros (its documentation
-// says so; STACK.md records where it raises instead of returning a value). The Annex G clause
-// numbers and special values below are quoted from memory of ISO/IEC 9899:2011; cmath agreeing
-// with each of them is the cross-check.
+// says so, and raises ValueError or OverflowError where C returns a value: docs/conventions.md).
+// The Annex G rules below were checked against the C99 text for G.6.2.2, G.6.2.3, G.6.3.1 and
+// G.6.3.2; those for G.6.1.1, G.6.2.1 and G.6.4.2 only against manual pages that restate them
+// (docs/sources.md). cmath agreeing with each of them is the cross-check.
 describe('cmath through the stdio protocol', () => {
   let cmath: StdioTarget;
   beforeAll(() => {

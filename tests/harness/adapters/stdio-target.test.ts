@@ -4,7 +4,7 @@ import type { ComplexPair } from '../../../harness/adapters/complex-pair';
 
 const FIXTURE = path.join(__dirname, 'fixtures', 'misbehaving-adapter.ts');
 
-/** One node process running the TypeScript fixture (STACK.md: killing `npx tsx` would leave its child). */
+/** One node process running the TypeScript fixture (docs/conventions.md: killing `npx tsx` would leave its child). */
 function misbehaving(timeLimitMs = 5000): StdioTarget {
   return stdioTarget({
     name: 'misbehaving@0.0.1',

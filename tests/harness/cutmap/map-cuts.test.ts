@@ -17,7 +17,7 @@ const num = (w: { re: string; im: string }): ComplexPair => [parseDouble(w.re), 
 
 describe('mapCuts', () => {
   it("finds complex.js 2.4.3's sqrt discontinuous along (-inf, 0] and nowhere else", async () => {
-    // DLMF 4.2(i) with 4.2.7 (from memory): the principal square root is cut along (−∞, 0].
+    // DLMF Figure 4.2.1 (§4.2(i)): the principal square root is cut along (−∞, 0].
     const map = await mapCuts(open('complex.js@2.4.3'), fn('sqrt'), [-4, -4], [4, 4], 81, 81);
     expect(map.verdict).toBe('matches');
     expect(map.expected).toEqual([expect.objectContaining({ label: '(-inf, 0]', coverage: 1, seen: true })]);
@@ -43,7 +43,7 @@ describe('mapCuts', () => {
   });
 
   it("finds complex.js 2.4.3's acot discontinuous along the negative real axis, where its values on the axis are no limit of either side", async () => {
-    // acot z = atan(1/z) (DLMF 4.23.9, from memory) is continuous across (−∞, 0): acot(−2) = atan(−1/2).
+    // acot z = atan(1/z) (DLMF 4.23.9) is continuous across (−∞, 0): acot(−2) = atan(−1/2).
     expect(referenceCall('acot', [[-2, 0]], 'signed-zero')[0]).toBeCloseTo(Math.atan(-0.5), 15);
     const map = await mapCuts(open('complex.js@2.4.3'), fn('acot'), [-4, -4], [4, 4], 81, 81);
     expect(map.verdict).toBe('differs');
@@ -54,7 +54,7 @@ describe('mapCuts', () => {
   });
 
   it("finds Python's cmath asinh cut along the imaginary axis beyond ±i", async () => {
-    // ISO/IEC 9899:2011 G.6.2.2 (from memory): casinh has its cuts on the imaginary axis outside [−i, i].
+    // casinh has its cuts on the imaginary axis outside [−i, i] (the casinh manual page; ISO/IEC 9899:2011 G.6.2.2 gives its special values).
     const target = open('cmath');
     try {
       const map = await mapCuts(target, fn('asinh'), [-3, -3], [3, 3], 61, 61);

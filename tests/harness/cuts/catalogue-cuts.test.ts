@@ -1,7 +1,7 @@
 import { catalogueCuts } from '../../../harness/cuts/catalogue-cuts';
 
 describe('catalogueCuts', () => {
-  // DLMF 4.23(ii) (from memory): arcsin is cut along (−∞, −1] and [1, ∞); ISO/IEC 9899:2011 G.6.2.2 the same for casin.
+  // DLMF 4.23.19: arcsin is cut along (−∞, −1] and [1, ∞); casin z = −i casinh(iz) (ISO/IEC 9899:2011 G.6 paragraph 7) the same.
   it('gives asin two rays from -1 and 1 outwards, closed from above and from below under Kahan', () => {
     expect(catalogueCuts('asin')).toEqual([
       { from: [-1, 0], to: [-2, 0], toInfinity: true, ccwSide: 'upper', label: '(-inf, -1]' },

@@ -5,7 +5,7 @@ const [negativeAxis] = catalogueCuts('sqrt')!;
 const acotCut = catalogueCuts('acot')![0]!;
 
 describe('onPlaneCut', () => {
-  // DLMF 4.2(i) (from memory): the principal branch of √ and Log is cut along (−∞, 0].
+  // DLMF 4.2.2 and Figure 4.2.1: the principal branch of √ and Log is cut along (−∞, 0].
   it('puts -4 + 0i and -4 - 0i on the cut (-inf, 0] and -4 + 1e-300i off it', () => {
     expect(onPlaneCut(negativeAxis!, [-4, 0])).toBe(true);
     expect(onPlaneCut(negativeAxis!, [-4, -0])).toBe(true);

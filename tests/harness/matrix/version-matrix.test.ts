@@ -57,7 +57,7 @@ describe('versionMatrix', () => {
       { kind: 'fail', diagnosis: { kind: 'zero-sign', part: 're', of: 'input' } },
     ]);
     expect([better!.after.version, better!.after.outcome]).toEqual(['2.4.2', { kind: 'pass' }]);
-    // Python's cmath (Annex G, G.6.2.3 via catanh, from memory): catan(+0 + 2i) = π/2 + 0.549…i, the value 2.3.0 and 2.4.2 give.
+    // Python's cmath (Annex G, G.6.2.3 via catanh and G.6 paragraph 7): catan(+0 + 2i) = π/2 + 0.549…i, the value 2.3.0 and 2.4.2 give.
     const cmath = await cmathValue('atan', [0, 2]);
     const [before, after] = [num(worse!.before.value), num(worse!.after.value)];
     expect(before[0]).toBe(cmath[0]);

@@ -1,6 +1,6 @@
 import { geometryNumber } from '../../../harness/paths/geometry-number';
 
-// Round-to-nearest-even decimal conversion is common practice (IEEE 754, ECMA-262); clause numbers from memory.
+// Round-to-nearest-even decimal conversion is common practice (IEEE 754, ECMA-262); the clause numbers below were not checked against the standards' text.
 describe('geometryNumber', () => {
   it('reads "-0" as −0 and "0" as +0', () => {
     expect(Object.is(geometryNumber('-0'), -0)).toBe(true);

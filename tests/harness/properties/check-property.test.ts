@@ -68,7 +68,7 @@ const logFromZeroToTwoPi = ([z]: ComplexPair[], ref: (op: string, args: ComplexP
 
 describe('checkProperty', () => {
   describe('conjugate-symmetry: f(conj z) = conj f(z)', () => {
-    // ISO/IEC 9899:2011 G.6 para 3 (from memory): conjugate symmetry, zero signs included, under Annex G.
+    // ISO/IEC 9899:2011 G.6.4.2 (csqrt(conj(z)) = conj(csqrt(z))): conjugate symmetry, zero signs included, under Annex G.
     it('holds for the reference sqrt near its cut under signed-zero, seed 1330520191', async () => {
       const o = await run(
         'sqrt(z)',
@@ -121,7 +121,7 @@ describe('checkProperty', () => {
   });
 
   describe('odd-symmetry: f(-z) = -f(z)', () => {
-    // DLMF 4.23.10 (arcsin is odd; equation number from memory); Annex G casin is odd (G.6.2.2 via casinh).
+    // DLMF §4.23(iii) (arcsin is odd; the equation number 4.23.10 not checked); Annex G casin is odd (G.6.2.2 via casinh).
     it('holds for the reference asin in a disc under both conventions, seed 735059753', async () => {
       await expectHeldOnTheReference('asin(z)', { law: 'odd-symmetry', region: DISC, runs: 300, seed: 735059753 });
     });
@@ -170,7 +170,7 @@ describe('checkProperty', () => {
   });
 
   describe('root-power: f(z)^n = g(z)', () => {
-    // Definition of the n-th root (DLMF 4.2(iv), from memory): every root raised to n returns g.
+    // Definition of the n-th root (DLMF §4.2(iv)): every root raised to n returns g.
     it('holds for the reference sqrt, cbrt, nthroot(z, 5) and pow(z, 1/3) in a disc, seed 2136471502', async () => {
       for (const [subject, power] of [
         ['sqrt(z)', 2],
@@ -227,7 +227,7 @@ describe('checkProperty', () => {
   });
 
   describe('range: f(z) in the principal range of f', () => {
-    // DLMF 4.2(i) (from memory): −π ≤ Im Log z ≤ π; half-open (−π, π] under Kahan's rule.
+    // DLMF 4.2.5 and 4.2.7: −π ≤ Im Log z ≤ π; half-open (−π, π] under Kahan's rule.
     it('holds for the reference log near its cut under both conventions, seed 531763507', async () => {
       await expectHeldOnTheReference('log(z)', { law: 'range', region: NEAR_CUTS, runs: 300, seed: 531763507 });
     });
@@ -257,7 +257,7 @@ describe('checkProperty', () => {
   });
 
   describe('unwinding: log(z1*z2) = log z1 + log z2 - 2*pi*i*K(log z1 + log z2)', () => {
-    // Corless & Jeffrey 1996 (from memory): K(w) = ceil((Im w − π) / 2π).
+    // Corless & Jeffrey 1996 (the paper was not read): K(w) = ceil((Im w − π) / 2π).
     it('holds for the reference log near its cut under both conventions, seed 77001', async () => {
       await expectHeldOnTheReference('log(z)', { law: 'unwinding', region: NEAR_CUTS, runs: 300, seed: 77001 });
     });

@@ -8,7 +8,7 @@ const DIR = path.join(__dirname, '..', '..', '..', 'suites', 'demo');
 const files = readdirSync(DIR).filter((f) => f.endsWith('.json'));
 const onDisk = files.map((f) => ({ file: f, data: JSON.parse(readFileSync(path.join(DIR, f), 'utf8')) as unknown }));
 
-/** Every function of the catalogue (DESIGN.md §2); each must appear under both conventions. */
+/** Every function of the catalogue (docs/vocabulary.md); each must appear under both conventions. */
 const CATALOGUE = [
   'sqrt',
   'cbrt',

@@ -49,7 +49,8 @@ function byQuadrature(
   t1: number,
 ): [number, number] {
   const ratio = math.parse(`(${math.derivative(g, 'z').toString()}) / (${g})`).compile();
-  // 5-point Gauss–Legendre nodes and weights on [−1, 1] (Abramowitz & Stegun table 25.4, from memory).
+  // 5-point Gauss–Legendre nodes and weights on [−1, 1]: the closed forms 0, ±⅓√(5 ∓ 2√(10/7)) with weights
+  // 128/225 and (322 ± 13√70)/900, rounded to double (the usual source, Abramowitz & Stegun table 25.4, was not read).
   const nodes = [0, -0.5384693101056831, 0.5384693101056831, -0.906179845938664, 0.906179845938664];
   const weights = [
     0.5688888888888889, 0.47862867049936647, 0.47862867049936647, 0.23692688505618908, 0.23692688505618908,
