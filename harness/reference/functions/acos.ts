@@ -9,7 +9,7 @@ import { realAtan2 } from '../real/real-atan2';
 import type { CatalogueFunction } from './catalogue-function';
 
 /**
- * Principal inverse cosine acos z = π/2 − asin z (DLMF 4.23.20), by Kahan's formulas:
+ * Principal inverse cosine acos z = π/2 − asin z (DLMF 4.23.22), by Kahan's formulas:
  * with s1 = √(1 − z), s2 = √(1 + z), Re = 2 atan2(Re s1, Re s2), Im = asinh(Im(conj(s2)·s1)).
  *
  * - Range: 0 ≤ Re ≤ π.

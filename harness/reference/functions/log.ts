@@ -8,7 +8,7 @@ import { realLog } from '../real/real-log';
 import type { CatalogueFunction } from './catalogue-function';
 
 /**
- * Principal logarithm Log z = ln|z| + i·Arg z (DLMF 4.2.2–4.2.3).
+ * Principal logarithm Log z = ln|z| + i·Arg z (DLMF 4.2.5; 4.2.7 on the cut).
  *
  * - Range: −π < Im ≤ π under counter-clockwise; −π ≤ Im ≤ π under signed-zero.
  * - Cut: (−∞, 0]; branch point 0 (a logarithmic singularity).

@@ -7,7 +7,7 @@ import { BigFloat } from '../numbers/big-float';
 import type { CatalogueFunction } from './catalogue-function';
 
 /**
- * Principal square root √z = exp(½ Log z) (DLMF 4.2.2 with 4.2.7 for the power).
+ * Principal square root √z = exp(½ Log z) (DLMF §4.2(iv), with 4.2.7 on the cut).
  *
  * - Range: Re √z ≥ 0 (the right half-plane with the imaginary axis).
  * - Cut: (−∞, 0] on the real axis; branch point 0.
