@@ -140,7 +140,7 @@ describe('continuation along a polyline against quadrature of g′/g', () => {
 describe('regular branches with cut layouts', () => {
   it('reproduces the principal square root on the plane cut along (−∞, 0] (f0 = 1 at z0 = 1)', () => {
     const answer = sqrtAroundUnitCircle([c(0), c(-1)]);
-    // Principal √ at e^{iθ} is e^{iθ/2} with θ ∈ (−π, π] (DLMF 4.2.2).
+    // Principal √ at e^{iθ} is e^{iθ/2} with θ ∈ (−π, π] (DLMF 4.2.5).
     expectHalfAngles(answer, [Math.PI / 4, (3 * Math.PI) / 4, (-3 * Math.PI) / 4, -Math.PI / 4]);
   });
 
