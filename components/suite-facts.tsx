@@ -1,12 +1,11 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { theme } from '../constants/theme';
+import { describeTolerance } from '../shared/describe-tolerance';
 import type { Suite } from '../shared/schemas/suite-schema';
-import type { Tolerance } from '../shared/schemas/tolerance-schema';
 import { describeSuitePath } from './describe-suite-path';
 
 const c = (z: { re: string; im: string }) =>
   `${z.re} ${z.im.startsWith('-') ? '−' : '+'} ${z.im.replace(/^[+-]/, '')}i`;
-const tol = (t: Tolerance) => ('ulps' in t ? `${t.ulps} ulps per part` : `relative error ${t.relative}`);
 
 function Fact({ label, children, mono = false }: { label: string; children: string; mono?: boolean }) {
   return (
@@ -60,9 +59,9 @@ export function SuiteFacts({ suite }: { suite: Suite }) {
       </View>
       <Fact label="Tolerances">
         {[
-          `values ${tol(suite.tolerances.values)}`,
-          suite.tolerances.monodromy ? `monodromy ${tol(suite.tolerances.monodromy)}` : null,
-          suite.tolerances.properties ? `properties ${tol(suite.tolerances.properties)}` : null,
+          `values ${describeTolerance(suite.tolerances.values)}`,
+          suite.tolerances.monodromy ? `monodromy ${describeTolerance(suite.tolerances.monodromy)}` : null,
+          suite.tolerances.properties ? `properties ${describeTolerance(suite.tolerances.properties)}` : null,
         ]
           .filter(Boolean)
           .join('; ')}

@@ -8,9 +8,14 @@ import { checkProperty } from './check-property';
 /**
  * Every property check of a suite against one target, in the suite's order. The subject is
  * parsed once; the expected cuts come from the branch spec (subject-cuts.ts); the tolerance is
- * the suite's `properties` tolerance, or its `values` tolerance when it gives none.
+ * the suite's `properties` tolerance, or its `values` tolerance when it gives none. Once
+ * `signal` is aborted (the evaluation ran out of time) no further check is started.
  */
-export async function checkSuiteProperties(suite: Suite, target: Target): Promise<PropertyOutcome[]> {
+export async function checkSuiteProperties(
+  suite: Suite,
+  target: Target,
+  signal?: AbortSignal,
+): Promise<PropertyOutcome[]> {
   const expr = parseSubject(suite.subject);
   const subject = {
     text: suite.subject,
@@ -20,6 +25,9 @@ export async function checkSuiteProperties(suite: Suite, target: Target): Promis
     tolerance: suite.tolerances.properties ?? suite.tolerances.values,
   };
   const outcomes: PropertyOutcome[] = [];
-  for (const check of suite.properties) outcomes.push(await checkProperty(check, subject, target));
+  for (const check of suite.properties) {
+    if (signal?.aborted) break;
+    outcomes.push(await checkProperty(check, subject, target));
+  }
   return outcomes;
 }

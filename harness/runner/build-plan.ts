@@ -1,8 +1,7 @@
 import type { Suite } from '../../shared/schemas/suite-schema';
-import { buildPath } from '../paths/build-path';
 import type { Plan, Shard } from './plan';
+import { suitePathPoints } from './suite-path-points';
 import type { TargetRef } from './target-ref';
-import { toPathSpec } from './to-path-spec';
 
 /**
  * Points per shard: a shard of 20,000 points takes ~0.1 s against complex.js with cached
@@ -18,15 +17,7 @@ export const DEFAULT_SHARD_POINTS = 20_000;
  * counts as 0 points here; evaluating it reports why.
  */
 export function buildPlan(suites: Suite[], targets: TargetRef[], shardPoints = DEFAULT_SHARD_POINTS): Plan {
-  const pathPoints = suites.map((suite) =>
-    suite.paths.map((path) => {
-      try {
-        return buildPath(toPathSpec(path)).length;
-      } catch {
-        return 0;
-      }
-    }),
-  );
+  const pathPoints = suites.map(suitePathPoints);
   const shards: Shard[] = [];
   suites.forEach((suite, s) => {
     targets.forEach((_, t) => {

@@ -1,3 +1,4 @@
+import { describeTolerance } from '../../shared/describe-tolerance';
 import type { Diagnosis, DiagnosisKind } from '../../shared/diagnosis';
 import type { PointOutcome } from '../../shared/point-outcome';
 import type {
@@ -96,10 +97,7 @@ export async function evaluateSuite(
     checked: {
       convention: suite.convention,
       branch: suite.branch.kind,
-      tolerance:
-        'ulps' in suite.tolerances.values
-          ? `${suite.tolerances.values.ulps} ulps per part`
-          : `relative error ${suite.tolerances.values.relative}`,
+      tolerance: describeTolerance(suite.tolerances.values),
       paths: selected.length,
       points: 0,
       properties: {
@@ -202,8 +200,7 @@ export async function evaluateSuite(
     if (p.error) result.errors.push(`${p.name}: ${p.error}`);
   }
   result.byDiagnosis = countDiagnoses(result.paths);
-  const monodromyFailed = result.paths.some((p) => p.monodromy && !p.monodromy.pass);
-  result.status = pairStatus(result.counts, result.errors, monodromyFailed, options.signal?.aborted === true);
+  result.status = pairStatus(result, options.signal?.aborted === true);
   result.reference = { computed: cache.computed - computed0, cached: cache.cached - cached0 };
   result.durationMs = Date.now() - started;
   return result;

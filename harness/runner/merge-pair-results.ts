@@ -1,6 +1,6 @@
 import { NOTHING_CHECKED, pairStatus } from './pair-status';
 import type { DiagnosisKind } from '../../shared/diagnosis';
-import type { OutcomeCounts, PathResult, SuiteTargetResult } from '../../shared/run-result';
+import type { OutcomeCounts, SuiteTargetResult } from '../../shared/run-result';
 
 /**
  * Joins the shard results of one suite × target pair into one result: paths in the suite's
@@ -36,8 +36,7 @@ export function mergePairResults(
     merged.reference.cached += result.reference.cached;
     if (result.status === 'cancelled') cancelled = true;
   }
-  const monodromyFailed = merged.paths.some((p: PathResult) => p.monodromy && !p.monodromy.pass);
   merged.errors = merged.errors.filter((e) => e !== NOTHING_CHECKED);
-  merged.status = pairStatus(merged.counts, merged.errors, monodromyFailed, cancelled);
+  merged.status = pairStatus(merged, cancelled);
   return merged;
 }

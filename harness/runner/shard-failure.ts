@@ -1,17 +1,21 @@
+import { describeTolerance } from '../../shared/describe-tolerance';
 import type { PathResult, SuiteTargetResult } from '../../shared/run-result';
 import type { Suite } from '../../shared/schemas/suite-schema';
 import type { TargetInfo } from '../adapters/target-info';
+import { propertiesNotRun } from './properties-not-run';
 
 /**
- * The result of a shard that produced none of its own — the target hung past the time limit,
- * crashed the worker, or the run was cancelled first: every point of its paths becomes an
- * error (or, when cancelled, skipped) with the reason, so the run goes on and says what happened.
+ * The one error result of a suite × target evaluation that produced none of its own — the
+ * target could not be opened, threw, hung past the time limit, crashed its worker, or the run
+ * was cancelled first: every point of its paths becomes an error (or, when cancelled, skipped)
+ * with the reason, so the run goes on and says what happened. Suite, target and what was to be
+ * checked (convention, branch, tolerance, paths, points) read as in a result of its own.
  */
 export function shardFailure(
   suite: Suite,
   target: TargetInfo,
-  paths: number[],
-  pathPoints: number[],
+  paths: readonly number[],
+  pathPoints: readonly number[],
   reason: string,
   kind: 'error' | 'cancelled',
 ): SuiteTargetResult {
@@ -40,13 +44,10 @@ export function shardFailure(
     checked: {
       convention: suite.convention,
       branch: suite.branch.kind,
-      tolerance:
-        'ulps' in suite.tolerances.values
-          ? `${suite.tolerances.values.ulps} ulps per part`
-          : `relative error ${suite.tolerances.values.relative}`,
+      tolerance: describeTolerance(suite.tolerances.values),
       paths: paths.length,
       points,
-      properties: { listed: suite.properties.map((p) => p.law), run: false, note: 'not run' },
+      properties: propertiesNotRun(suite),
     },
     counts: { pass: 0, fail: 0, error: kind === 'error' ? points : 0, skipped: kind === 'cancelled' ? points : 0 },
     byDiagnosis: {},

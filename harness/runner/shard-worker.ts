@@ -2,17 +2,18 @@ import { parentPort, workerData } from 'node:worker_threads';
 import type { Target } from '../adapters/target';
 import { discoverTargets } from '../adapters/discover-targets';
 import { parseSubject } from '../expressions/parse-subject';
-import { evaluateSuite } from './evaluate-suite';
+import { evaluatePair } from './evaluate-pair';
 import { ReferenceCache } from './reference-cache';
 import type { WorkerReply, WorkerRequest } from './shard-worker-messages';
 import type { TargetRef } from './target-ref';
 
 /**
- * The body of a shard worker thread (run-plan.ts): takes one shard at a time, opens its
- * target once per worker (a discovered target by name, or a module's `openTarget(...args)`),
- * evaluates the shard's paths with its own read-only view of the reference cache, and sends
- * the result with the values it computed, which the main thread writes to the cache. On
- * `abort` it stops the shard and closes its targets (so a hung stdio program is killed).
+ * The body of a shard worker thread (worker-lane.ts): takes one shard at a time and evaluates
+ * it with evaluatePair — values, property checks when asked, the time limit — with its own
+ * read-only view of the reference cache, keeping each target open for later shards (a
+ * discovered target by name, or a module's `openTarget(...args)`). It sends the result with
+ * the values it computed, which the main thread writes to the cache. On `abort` the shard is
+ * cancelled (evaluatePair closes its target, so a hung stdio program is killed).
  */
 const port = parentPort;
 if (!port) throw new Error('shard-worker.ts runs in a worker thread');
@@ -20,22 +21,16 @@ const cache = new ReferenceCache((workerData as { cacheDir: string | null }).cac
 const targets = new Map<string, Target>();
 let current: AbortController | null = null;
 
-function openTarget(name: string, spec: NonNullable<TargetRef['worker']>): Target {
-  const known = targets.get(name);
-  if (known) return known;
-  let target: Target;
+function openTarget(spec: NonNullable<TargetRef['worker']>): Target {
   if ('discovered' in spec) {
     const found = discoverTargets().find((d) => d.name === spec.discovered);
     if (!found) throw new Error(`no installed target named ${spec.discovered}`);
-    target = found.open();
-  } else {
-    // eslint-disable-next-line @typescript-eslint/no-require-imports
-    const mod = require(spec.module) as { openTarget?: (...args: unknown[]) => Target };
-    if (typeof mod.openTarget !== 'function') throw new Error(`${spec.module} has no openTarget export`);
-    target = mod.openTarget(...(spec.args ?? []));
+    return found.open();
   }
-  targets.set(name, target);
-  return target;
+  // eslint-disable-next-line @typescript-eslint/no-require-imports
+  const mod = require(spec.module) as { openTarget?: (...args: unknown[]) => Target };
+  if (typeof mod.openTarget !== 'function') throw new Error(`${spec.module} has no openTarget export`);
+  return mod.openTarget(...(spec.args ?? []));
 }
 
 async function closeAll(): Promise<void> {
@@ -46,8 +41,7 @@ async function closeAll(): Promise<void> {
 
 port.on('message', (m: WorkerRequest) => {
   if (m.type === 'abort') {
-    current?.abort(new Error('aborted by the runner'));
-    void closeAll().then(() => port.postMessage({ type: 'aborted' } satisfies WorkerReply));
+    current?.abort(new Error(m.reason));
     return;
   }
   if (m.type === 'close') {
@@ -58,26 +52,25 @@ port.on('message', (m: WorkerRequest) => {
   current = controller;
   void (async () => {
     try {
-      const target = openTarget(m.target.name, m.target.spec);
-      const result = await evaluateSuite(m.suite, target, {
-        cache,
-        signal: controller.signal,
-        paths: m.paths,
-        maxFindings: m.maxFindings,
-      });
-      if (controller.signal.aborted) return;
+      const { spec, ...info } = m.target;
+      const { result, target } = await evaluatePair(
+        m.suite,
+        { ...info, open: () => targets.get(info.name) ?? openTarget(spec) },
+        { ...m.evaluation, cache, signal: controller.signal, paths: m.paths, pathPoints: m.pathPoints },
+      );
+      if (target) targets.set(info.name, target);
+      else targets.delete(info.name);
       const records = cache.takePending();
       port.postMessage(
         { type: 'result', shard: m.shard, result, records } satisfies WorkerReply,
         records.map((r) => r.records.buffer as ArrayBuffer),
       );
     } catch (e) {
-      if (!controller.signal.aborted)
-        port.postMessage({
-          type: 'failed',
-          shard: m.shard,
-          error: e instanceof Error ? e.message : String(e),
-        } satisfies WorkerReply);
+      port.postMessage({
+        type: 'failed',
+        shard: m.shard,
+        error: e instanceof Error ? e.message : String(e),
+      } satisfies WorkerReply);
     } finally {
       if (current === controller) current = null;
     }

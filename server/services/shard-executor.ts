@@ -1,7 +1,6 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import type { Target } from '../../harness/adapters/target';
-import { checkSuiteProperties } from '../../harness/properties/check-suite-properties';
-import { evaluateSuite } from '../../harness/runner/evaluate-suite';
+import { evaluatePair } from '../../harness/runner/evaluate-pair';
 import { ReferenceCache } from '../../harness/runner/reference-cache';
 import type { PropertyOutcome } from '../../shared/property-outcome';
 import type { SuiteTargetResult } from '../../shared/run-result';
@@ -28,7 +27,7 @@ export interface ShardExecutorOptions {
    * torn last record is ignored (reference-cache.ts). None: kept in memory only.
    */
   referenceCacheDir?: string | null;
-  /** A shard that takes longer is stopped; its remaining points become errors. */
+  /** A shard that takes longer is stopped and its points become errors (evaluate-pair.ts's DEFAULT_TIME_LIMIT_MS by default). */
   shardTimeoutMs?: number;
 }
 
@@ -86,68 +85,36 @@ export class ShardExecutor {
   }
 
   private async evaluate(shard: Shard): Promise<SuiteTargetResult> {
-    const target = this.options.openTarget(shard.targetName);
-    const body = shard.suiteVersion.body;
-    if (!target) return errorResult(shard, `target ${shard.targetName} is not installed on this worker`);
-    const controller = new AbortController();
-    const timer = setTimeout(
-      () => controller.abort(new Error(`the shard took longer than ${this.options.shardTimeoutMs} ms`)),
-      this.options.shardTimeoutMs ?? 300_000,
-    );
-    try {
-      const result = await evaluateSuite(body, target, {
+    const name = shard.targetName;
+    const { result, target } = await evaluatePair(
+      shard.suiteVersion.body,
+      {
+        name,
+        library: shard.targetLibrary,
+        version: shard.targetVersion,
+        settings: {},
+        open: () => {
+          const opened = this.options.openTarget(name);
+          if (!opened) throw new Error(`target ${name} is not installed on this worker`);
+          return opened;
+        },
+      },
+      {
         cache: this.cache,
-        signal: controller.signal,
         maxFindings: Number.MAX_SAFE_INTEGER,
-      });
-      if (body.properties.length > 0 && result.status !== 'cancelled') {
-        const outcomes = await checkSuiteProperties(body, target);
-        result.properties = outcomes;
-        result.checked.properties = {
-          listed: body.properties.map((p) => p.law),
-          run: true,
-          note: `${outcomes.length} property check(s) run`,
-        };
-        if (result.status === 'pass' && outcomes.some((o) => o.kind === 'failed')) result.status = 'fail';
-      }
-      return result;
+        properties: { seed: null },
+        timeLimitMs: this.options.shardTimeoutMs,
+      },
+    );
+    await target?.close().catch(() => undefined);
+    try {
+      this.cache.flush();
     } catch (err) {
-      return errorResult(shard, err instanceof Error ? err.message : String(err));
-    } finally {
-      clearTimeout(timer);
-      await target.close().catch(() => undefined);
-      try {
-        this.cache.flush();
-      } catch (err) {
-        // A cache that cannot be written costs time later, never a result.
-        console.error('[sheetkeeper] reference cache not written:', err instanceof Error ? err.message : err);
-      }
+      // A cache that cannot be written costs time later, never a result.
+      console.error('[sheetkeeper] reference cache not written:', err instanceof Error ? err.message : err);
     }
+    return result;
   }
-}
-
-function errorResult(shard: Shard, message: string): SuiteTargetResult {
-  const body = shard.suiteVersion.body;
-  return {
-    suite: { id: body.id, version: body.version, title: body.title, subject: body.subject },
-    target: { name: shard.targetName, library: shard.targetLibrary, version: shard.targetVersion, settings: {} },
-    status: 'error',
-    checked: {
-      convention: body.convention,
-      branch: body.branch.kind,
-      tolerance: '',
-      paths: 0,
-      points: 0,
-      properties: { listed: [], run: false, note: 'not run' },
-    },
-    counts: { pass: 0, fail: 0, error: 0, skipped: 0 },
-    byDiagnosis: {},
-    paths: [],
-    properties: null,
-    errors: [message],
-    durationMs: 0,
-    reference: { computed: 0, cached: 0 },
-  };
 }
 
 async function storeResult(tx: EntityManager, shard: Shard, result: SuiteTargetResult): Promise<void> {
@@ -204,18 +171,16 @@ async function storeResult(tx: EntityManager, shard: Shard, result: SuiteTargetR
     );
   }
   if (result.properties && result.properties.length > 0) {
-    await tx
-      .getRepository(PropertyResult)
-      .insert(
-        (result.properties as PropertyOutcome[]).map((o) => ({
-          run: { id: shard.run.id },
-          shard: { id: shard.id },
-          law: o.law,
-          kind: o.kind,
-          seed: String(o.seed),
-          outcome: o,
-        })),
-      );
+    await tx.getRepository(PropertyResult).insert(
+      (result.properties as PropertyOutcome[]).map((o) => ({
+        run: { id: shard.run.id },
+        shard: { id: shard.id },
+        law: o.law,
+        kind: o.kind,
+        seed: String(o.seed),
+        outcome: o,
+      })),
+    );
   }
   const outcome = result.status === 'cancelled' ? 'error' : result.status;
   await tx.getRepository(Shard).update(shard.id, {

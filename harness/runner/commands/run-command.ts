@@ -1,4 +1,3 @@
-import { checkSuiteProperties } from '../../properties/check-suite-properties';
 import { mkdirSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -57,11 +56,7 @@ export async function runCommand(argv: string[]): Promise<number> {
     ...(args.shardTimeLimitMs !== null ? { shardTimeLimitMs: args.shardTimeLimitMs } : {}),
     ...(args.maxFindings !== null ? { maxFindings: args.maxFindings } : {}),
     // Property checks run with each suite's pinned seeds; `--seed N` replaces them all, to explore.
-    properties: (suite, target, seed) =>
-      checkSuiteProperties(
-        seed === null ? suite : { ...suite, properties: suite.properties.map((p) => ({ ...p, seed })) },
-        target,
-      ),
+    properties: true,
     onEvent: args.progress
       ? (e) => {
           if (e.type === 'progress') process.stderr.write(`sheetkeeper run: ${e.done}/${e.total} points\n`);
