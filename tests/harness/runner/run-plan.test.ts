@@ -145,4 +145,26 @@ describe('runPlan', () => {
     // The blocking target answers log with zeros: wrong, but it ran in a fresh worker.
     expect(byName(inWorkers, 'log-principal-sz', 'blocking@1').counts.fail).toBeGreaterThan(0);
   }, 60_000);
+
+  it("runs each pair's property checks once, with its first shard, alike in process and on worker threads", async () => {
+    const complexJs = discoverTargets().find((t) => t.name === 'complex.js@2.4.3')!;
+    const ref: TargetRef = { ...complexJs, open: () => complexJs.open(), worker: { discovered: complexJs.name } };
+    const suites = [loadDemoSuite('sqrt-principal-sz'), loadDemoSuite('log-principal-sz')];
+    // Three shards per pair (see the first test).
+    const inProcess = await runPlan(buildPlan(suites, [ref], 60), { cache, properties: true });
+    const inWorkers = await runPlan(buildPlan(suites, [ref], 60), { cacheDir: null, workers: 2, properties: true });
+    for (const result of [inProcess, inWorkers]) {
+      expect(result.results.map((r) => r.properties?.map((p) => p.law))).toEqual([
+        ['conjugate-symmetry', 'root-power', 'range'],
+        ['exp-log', 'conjugate-symmetry', 'range', 'unwinding'],
+      ]);
+      expect(result.results.map((r) => r.checked.properties.run)).toEqual([true, true]);
+    }
+    expect(inWorkers.results.map((r) => [r.status, r.properties])).toEqual(
+      inProcess.results.map((r) => [r.status, r.properties]),
+    );
+    // complex.js ignores the sign of a zero imaginary part in sqrt: conjugate symmetry fails on the cut.
+    expect(inProcess.results[0]!.properties![0]!.kind).toBe('failed');
+    expect(inProcess.results[0]!.status).toBe('fail');
+  }, 60_000);
 });
