@@ -75,7 +75,7 @@ const errorText = (e: unknown): string => (e instanceof Error ? e.message : Stri
  * inaccurate, not-finite, and along continuous paths misplaced-cut from the jumps of both);
  * closed paths of regular branches checked for their monodromy. Failures carry the input's
  * exact bits, both one-sided limits on a cut, the rule that fixes the expected value and a
- * reproducer. Property checks are not run here (runPlan's `properties` option does that).
+ * reproducer. Property checks are not run here (evaluatePair runs them after the values).
  *
  * This is the API the cut map, fingerprint and version matrix build on; its signature is kept stable.
  */

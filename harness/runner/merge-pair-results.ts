@@ -4,8 +4,9 @@ import type { OutcomeCounts, SuiteTargetResult } from '../../shared/run-result';
 
 /**
  * Joins the shard results of one suite × target pair into one result: paths in the suite's
- * order, counts, diagnoses, errors and reference figures summed, and the status decided again
- * (error before fail before pass; cancelled when any shard was).
+ * order, counts, diagnoses, errors and reference figures summed, the property checks as the
+ * first shard ran them, and the status decided again (error before fail before pass; cancelled
+ * when any shard was).
  */
 export function mergePairResults(
   parts: { paths: number[]; result: SuiteTargetResult }[],
