@@ -113,14 +113,14 @@ export async function runPlan(plan: Plan, options: RunOptions = {}): Promise<Run
   options.signal?.addEventListener('abort', onCancel, { once: true });
   if (options.signal?.aborted) onCancel();
 
-  // A pair's property checks run once, with its first shard (the one merged first).
-  const withProperties = new Set<number>();
-  const pairs = new Set<string>();
+  // A pair's property checks run once, with the shard of its first paths: the one mergePairResults takes them from.
+  const firstShards = new Map<string, Shard>();
   for (const shard of plan.shards) {
     const pair = `${shard.suite}×${shard.target}`;
-    if (!pairs.has(pair)) withProperties.add(shard.id);
-    pairs.add(pair);
+    const known = firstShards.get(pair);
+    if (!known || (shard.paths[0] ?? 0) < (known.paths[0] ?? 0)) firstShards.set(pair, shard);
   }
+  const withProperties = new Set([...firstShards.values()].map((shard) => shard.id));
   const workers = Math.max(0, Math.floor(options.workers ?? 0));
   const lanes =
     workers > 0 && plan.targets.every((t) => t.worker)
