@@ -1,8 +1,8 @@
 import { Redirect, useRouter } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
 import { useMe } from '../client/use-me';
-import { QueryState } from '../components/query-state';
-import { SignInForm } from '../components/sign-in-form';
+import { QueryState } from '../components/ui/query-state';
+import { SignInForm } from '../components/settings/sign-in-form';
 import { theme } from '../constants/theme';
 
 export default function SignInScreen() {

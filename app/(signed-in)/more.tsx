@@ -3,9 +3,9 @@ import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { NAV_ITEMS } from '../../client/nav-items';
 import { useMe } from '../../client/use-me';
 import { useSignOut } from '../../client/use-sign-out';
-import { ActionButton } from '../../components/action-button';
-import { RoleBadge } from '../../components/role-badge';
-import { ScreenBody } from '../../components/screen-body';
+import { ActionButton } from '../../components/ui/action-button';
+import { RoleBadge } from '../../components/settings/role-badge';
+import { ScreenBody } from '../../components/ui/screen-body';
 import { theme } from '../../constants/theme';
 
 /** The phone's "More" tab: every destination the tab bar has no room for, who I am, and sign-out. */

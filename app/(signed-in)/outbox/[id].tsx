@@ -2,9 +2,9 @@ import { Link, useLocalSearchParams } from 'expo-router';
 import { Pressable, StyleSheet, Text } from 'react-native';
 import { useMe } from '../../../client/use-me';
 import { useOutboxMessage } from '../../../client/use-outbox-message';
-import { MailView } from '../../../components/mail-view';
-import { QueryState } from '../../../components/query-state';
-import { ScreenBody } from '../../../components/screen-body';
+import { MailView } from '../../../components/mail/mail-view';
+import { QueryState } from '../../../components/ui/query-state';
+import { ScreenBody } from '../../../components/ui/screen-body';
 import { theme } from '../../../constants/theme';
 
 export default function OutboxMessageScreen() {

@@ -3,9 +3,9 @@ import { Pressable, StyleSheet, Text } from 'react-native';
 import { canEditPlans } from '../../../client/can-edit-plans';
 import { useMe } from '../../../client/use-me';
 import { usePlan } from '../../../client/use-plan';
-import { PlanDetail } from '../../../components/plan-detail';
-import { QueryState } from '../../../components/query-state';
-import { ScreenBody } from '../../../components/screen-body';
+import { PlanDetail } from '../../../components/plans/plan-detail';
+import { QueryState } from '../../../components/ui/query-state';
+import { ScreenBody } from '../../../components/ui/screen-body';
 import { theme } from '../../../constants/theme';
 
 export default function PlanScreen() {

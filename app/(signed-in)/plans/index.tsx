@@ -2,8 +2,8 @@ import { Link } from 'expo-router';
 import { Pressable, StyleSheet, Text } from 'react-native';
 import { canEditPlans } from '../../../client/can-edit-plans';
 import { useMe } from '../../../client/use-me';
-import { PlanList } from '../../../components/plan-list';
-import { ScreenBody } from '../../../components/screen-body';
+import { PlanList } from '../../../components/plans/plan-list';
+import { ScreenBody } from '../../../components/ui/screen-body';
 import { theme } from '../../../constants/theme';
 
 export default function PlansScreen() {

@@ -1,0 +1,111 @@
+import { useState } from 'react';
+import { StyleSheet, Text, View, type LayoutChangeEvent } from 'react-native';
+import { theme } from '../../constants/theme';
+import type { CutMap } from '../../shared/cut-map';
+import { PlanePicture, type PlanePoint } from './plane-picture';
+import { wireNumber } from '../libraries/wire-number';
+
+const point = (w: { re: string; im: string }): PlanePoint => ({ re: Number(w.re), im: Number(w.im) });
+const percent = (x: number) => `${Math.round(x * 100)} %`;
+/** The plane picture's margin on each side (components/pictures/plane-picture.tsx). */
+const PAD = 28;
+
+/**
+ * Where one function of a target is really discontinuous over a box, drawn against the expected
+ * cuts: expected cuts dashed, discontinuities found on them as dots, discontinuities elsewhere as
+ * crosses named "unexpected". Under the picture, the verdict and each expected cut's coverage in
+ * words, and what a grid can miss.
+ */
+export function CutMapPicture({ cutMap }: { cutMap: CutMap }) {
+  const [width, setWidth] = useState(0);
+  const [min, max] = [point(cutMap.box.min), point(cutMap.box.max)];
+  // The picture takes the box's own proportions, so nothing outside the sampled box is shown as if it had been looked at.
+  const height =
+    width > 0
+      ? Math.min(800, Math.max(200, Math.round(((width - 2 * PAD) * (max.im - min.im)) / (max.re - min.re) + 2 * PAD)))
+      : 0;
+  const unexpected = cutMap.observed.filter((o) => !o.onExpectedCut);
+  const unseen = cutMap.expected.filter((e) => !e.seen);
+  const label =
+    `Cut map of ${cutMap.function} on ${cutMap.target} over Re ${min.re} to ${max.re}, Im ${min.im} to ${max.im}: ` +
+    `${cutMap.expected.length} expected cut(s), ${cutMap.observed.length - unexpected.length} stretch(es) of discontinuity on them, ${unexpected.length} elsewhere.`;
+
+  return (
+    <View style={styles.wrap}>
+      <Text style={[styles.verdict, cutMap.verdict === 'differs' && styles.differs]} testID="cut-map-verdict">
+        {cutMap.verdict === 'matches'
+          ? `✓ Matches: every discontinuity found lies on an expected cut, and every expected cut was seen.`
+          : `× Differs: ${[unexpected.length ? `${unexpected.length} stretch(es) of discontinuity off the expected cuts` : null, unseen.length ? `${unseen.length} expected cut(s) not seen` : null].filter(Boolean).join('; ')}.`}
+      </Text>
+      <View style={styles.frame} onLayout={(e: LayoutChangeEvent) => setWidth(Math.round(e.nativeEvent.layout.width))}>
+        {width > 0 ? (
+          <PlanePicture
+            label={label}
+            view={{ minRe: min.re, maxRe: max.re, minIm: min.im, maxIm: max.im }}
+            cuts={cutMap.expected.map((e) => ({ points: [point(e.from), point(e.to)], toInfinity: false }))}
+            lines={cutMap.observed.map((o) => ({
+              name: o.onExpectedCut ? 'discontinuity found on an expected cut' : 'unexpected discontinuity',
+              points: o.points.map(point),
+              marker: o.onExpectedCut ? 'dot' : 'cross',
+            }))}
+            height={height}
+            testID="cut-map-picture"
+          />
+        ) : null}
+      </View>
+      <View style={styles.list}>
+        <Text style={styles.head}>Expected cuts in this box</Text>
+        {cutMap.expected.length === 0 ? (
+          <Text style={styles.line}>None: the reference has no cut of {cutMap.function} inside this box.</Text>
+        ) : null}
+        {cutMap.expected.map((e) => (
+          <Text key={`${e.label} ${e.from.re} ${e.from.im}`} style={styles.line}>
+            {e.seen ? '✓' : '×'} {e.label} from {wireNumber(e.from)} to {wireNumber(e.to)}:{' '}
+            {e.coverage === null
+              ? 'crosses no grid line inside the box, so it could not be seen or missed'
+              : `a jump on ${percent(e.coverage)} of the grid lines crossing it — ${e.seen ? 'seen' : 'not seen'}`}
+          </Text>
+        ))}
+        {unexpected.length ? <Text style={styles.head}>Discontinuities off the expected cuts</Text> : null}
+        {unexpected.map((o, i) => (
+          <Text key={i} style={styles.line}>
+            × {o.points.length} crossing(s) from {wireNumber(o.points[0])} to{' '}
+            {wireNumber(o.points[o.points.length - 1])}
+          </Text>
+        ))}
+        {cutMap.notFinite > 0 ? (
+          <Text style={styles.line}>
+            {cutMap.notFinite} grid point(s) gave no finite value and took part in no comparison.
+          </Text>
+        ) : null}
+      </View>
+      <Text style={styles.statement}>{cutMap.statement}</Text>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: theme.space(3) },
+  frame: { width: '100%', maxWidth: 600 },
+  verdict: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accent, lineHeight: 24 },
+  differs: { color: theme.color.danger },
+  list: { gap: theme.space(1) },
+  head: {
+    fontFamily: theme.font.medium,
+    fontSize: theme.size.small,
+    color: theme.color.inkFaint,
+    textTransform: 'uppercase',
+    letterSpacing: 0.8,
+    marginTop: theme.space(2),
+  },
+  line: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink, lineHeight: 20 },
+  statement: {
+    fontFamily: theme.font.regular,
+    fontSize: theme.size.small,
+    color: theme.color.inkSoft,
+    lineHeight: 20,
+    borderLeftWidth: 3,
+    borderLeftColor: theme.color.focus,
+    paddingLeft: theme.space(3),
+  },
+});

@@ -1,0 +1,97 @@
+import { StyleSheet, Text, View } from 'react-native';
+import { theme } from '../../constants/theme';
+import type { Suite } from '../../shared/schemas/suite-schema';
+import type { Tolerance } from '../../shared/schemas/tolerance-schema';
+import { describeSuitePath } from './describe-suite-path';
+
+const c = (z: { re: string; im: string }) =>
+  `${z.re} ${z.im.startsWith('-') ? '−' : '+'} ${z.im.replace(/^[+-]/, '')}i`;
+const tol = (t: Tolerance) => ('ulps' in t ? `${t.ulps} ulps per part` : `relative error ${t.relative}`);
+
+function Fact({ label, children, mono = false }: { label: string; children: string; mono?: boolean }) {
+  return (
+    <View style={styles.fact}>
+      <Text style={styles.label}>{label}</Text>
+      <Text style={[styles.value, mono && styles.mono]}>{children}</Text>
+    </View>
+  );
+}
+
+/** What a suite version checks, field by field, in words. */
+export function SuiteFacts({ suite }: { suite: Suite }) {
+  const b = suite.branch;
+  return (
+    <View style={styles.box}>
+      <Fact label="Subject" mono>
+        {suite.subject}
+      </Fact>
+      {b.kind === 'principal' ? (
+        <Fact label="Branch">principal branch of every function in the subject</Fact>
+      ) : (
+        <>
+          <Fact
+            label="Branch"
+            mono
+          >{`regular branch of (${b.g})^${typeof b.nu === 'string' ? b.nu : `(${c(b.nu)})`}`}</Fact>
+          <Fact label="Fixed by" mono>
+            {b.f0 ? `f(${c(b.z0)}) = ${c(b.f0)}` : `value k = ${b.k} at z0 = ${c(b.z0)} (principal·e^(2πiνk))`}
+          </Fact>
+          <Fact label="Cut layout" mono>
+            {b.cuts.length === 0
+              ? 'no cuts'
+              : b.cuts
+                  .map((cut, i) => `${i + 1}. ${cut.points.map(c).join(' → ')}${cut.to_infinity ? ' → ∞' : ''}`)
+                  .join('\n')}
+          </Fact>
+        </>
+      )}
+      <Fact label="Convention">
+        {suite.convention === 'signed-zero'
+          ? 'signed zero (IEC 60559 / Annex G): a zero part’s sign picks the side of a cut'
+          : 'counter-clockwise continuity: zero signs ignored'}
+      </Fact>
+      <View style={styles.fact}>
+        <Text style={styles.label}>Paths ({suite.paths.length})</Text>
+        {suite.paths.map((p) => (
+          <Text key={p.name} style={styles.value}>
+            • <Text style={styles.strong}>{p.name}</Text>: {describeSuitePath(p)}
+          </Text>
+        ))}
+      </View>
+      <Fact label="Tolerances">
+        {[
+          `values ${tol(suite.tolerances.values)}`,
+          suite.tolerances.monodromy ? `monodromy ${tol(suite.tolerances.monodromy)}` : null,
+          suite.tolerances.properties ? `properties ${tol(suite.tolerances.properties)}` : null,
+        ]
+          .filter(Boolean)
+          .join('; ')}
+      </Fact>
+      <Fact label={`Property checks (${suite.properties.length})`}>
+        {suite.properties.length === 0
+          ? 'none: this suite checks values only'
+          : suite.properties
+              .map(
+                (p) =>
+                  `${p.law}${p.power ? ` (n = ${p.power})` : ''} over ${p.region.kind === 'near-cuts' ? `points within ${p.region.distance} of the cuts` : p.region.kind === 'disc' ? `the disc |z − (${c(p.region.center)})| ≤ ${p.region.radius}` : `the box ${c(p.region.min)} to ${c(p.region.max)}`}, ${p.runs} runs, seed ${p.seed}`,
+              )
+              .join('\n')}
+      </Fact>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  box: { gap: theme.space(3) },
+  fact: { gap: 2 },
+  label: {
+    fontFamily: theme.font.medium,
+    fontSize: theme.size.small,
+    color: theme.color.inkFaint,
+    textTransform: 'uppercase',
+    letterSpacing: 0.6,
+  },
+  value: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.ink, lineHeight: 22 },
+  mono: { fontFamily: theme.font.mono, fontSize: 14 },
+  strong: { fontFamily: theme.font.medium },
+});
