@@ -4,6 +4,7 @@ import { Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-na
 import { useFailure } from '../../client/use-failure';
 import { useMe } from '../../client/use-me';
 import { theme } from '../../constants/theme';
+import { SkText } from '../ui/sk-text';
 import { CasePictures } from './case-pictures';
 import { ClassifyForm } from './classify-form';
 import { describeFailure } from './describe-failure';
@@ -38,17 +39,19 @@ export function CaseDetail({ id }: { id: string }) {
       </Section>
       <Section title="Rule">
         <Text style={styles.rule}>{f.rule ?? '—'}</Text>
-        <Text style={styles.small}>
+        <SkText variant="caption" style={styles.small}>
           Judged under the {f.convention} convention with suite {f.suiteSlug} v{f.suiteVersion}.{' '}
           {DIAGNOSIS_STYLES[tone].word[0]!.toUpperCase() + DIAGNOSIS_STYLES[tone].word.slice(1)}:{' '}
           {DIAGNOSIS_STYLES[tone].explain}.
-        </Text>
+        </SkText>
       </Section>
       <Section title="Reproducer">
         {f.reproducer ? (
           <ReproducerBox code={f.reproducer} />
         ) : (
-          <Text style={styles.small}>No reproducer was stored for this point.</Text>
+          <SkText variant="caption" style={styles.small}>
+            No reproducer was stored for this point.
+          </SkText>
         )}
       </Section>
       <Section title="History of this point">
@@ -69,18 +72,20 @@ export function CaseDetail({ id }: { id: string }) {
         <Text style={styles.where}>
           {f.suiteSlug} v{f.suiteVersion} · {f.targetName} · {f.convention}
         </Text>
-        <Text style={styles.small}>
+        <SkText variant="caption" style={styles.small}>
           Path {f.pathName}
           {f.label ? ` · ${f.label}` : ''} · point {f.pointIndex} · t = {Number(f.t.toPrecision(6))}
           {f.isRegression ? ' · ↑ new: this point passed in the previous run of the plan' : ''}
-        </Text>
+        </SkText>
         <Link href={{ pathname: '/failures', params: { run: f.runId } }} asChild>
           <Pressable
             accessibilityRole="link"
             accessibilityLabel="All failures of this run"
             style={StyleSheet.flatten(styles.back)}
           >
-            <Text style={styles.backText}>← All failures of this run</Text>
+            <SkText variant="label" tone="accent">
+              ← All failures of this run
+            </SkText>
           </Pressable>
         </Link>
       </View>
@@ -99,9 +104,9 @@ export function CaseDetail({ id }: { id: string }) {
 function Section({ title, children }: { title: string; children: ReactNode }) {
   return (
     <View style={styles.section}>
-      <Text accessibilityRole="header" aria-level={2} style={styles.sectionTitle}>
+      <SkText variant="heading" accessibilityRole="header" aria-level={2}>
         {title}
-      </Text>
+      </SkText>
       {children}
     </View>
   );
@@ -111,14 +116,12 @@ const styles = StyleSheet.create({
   root: { gap: theme.space(5) },
   head: { gap: theme.space(2) },
   where: { fontFamily: theme.font.medium, fontSize: theme.size.large, color: theme.color.ink },
-  small: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 19 },
+  small: { lineHeight: 19 },
   back: { minHeight: 44, justifyContent: 'center', alignSelf: 'flex-start' },
-  backText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accent },
   columns: { flexDirection: 'row', gap: theme.space(6), alignItems: 'flex-start' },
   stack: { gap: theme.space(5) },
   left: { flex: 3, minWidth: 0 },
   right: { flex: 2, minWidth: 0 },
   section: { gap: theme.space(3) },
-  sectionTitle: { fontFamily: theme.font.bold, fontSize: theme.size.large, color: theme.color.ink },
   rule: { fontFamily: theme.font.mono, fontSize: 14, color: theme.color.ink, lineHeight: 20 },
 });

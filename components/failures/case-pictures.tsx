@@ -2,6 +2,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import { useFailurePath } from '../../client/use-failure-path';
 import { theme } from '../../constants/theme';
 import type { FailurePathView } from '../../shared/failure-path-view';
+import { SkText } from '../ui/sk-text';
 import { DIAGNOSIS_STYLES, type DiagnosisTone } from './diagnosis-styles';
 import { fitPlaneView } from '../pictures/fit-plane-view';
 import { PathPlots } from '../pictures/path-plots';
@@ -28,8 +29,14 @@ export function CasePictures({ failureId }: { failureId: string }) {
     <View style={styles.root}>
       <PlanePicture label={planeWords(v)} height={340} {...planeProps(v)} testID="case-plane" />
       <DiagnosisTally view={v} />
-      {v.cutsNote ? <Text style={styles.note}>{v.cutsNote}</Text> : null}
-      <Text style={styles.note}>{v.note}</Text>
+      {v.cutsNote ? (
+        <SkText variant="caption" style={styles.note}>
+          {v.cutsNote}
+        </SkText>
+      ) : null}
+      <SkText variant="caption" style={styles.note}>
+        {v.note}
+      </SkText>
       <PathPlots view={v} />
     </View>
   );
@@ -74,17 +81,17 @@ function DiagnosisTally({ view }: { view: FailurePathView }) {
   const passed = view.points.filter((p) => p.outcome === 'pass').length;
   return (
     <View style={styles.tally}>
-      <Text style={styles.tallyItem}>
+      <SkText variant="smallLabel" tone="ink">
         <Text style={{ color: theme.color.accent }}>• </Text>
         {passed} passed
-      </Text>
+      </SkText>
       {[...tally].map(([tone, n]) => (
-        <Text key={tone} style={styles.tallyItem}>
+        <SkText variant="smallLabel" tone="ink" key={tone}>
           <Text style={{ color: DIAGNOSIS_STYLES[tone].color, fontFamily: theme.font.bold }}>
             {DIAGNOSIS_STYLES[tone].glyph}{' '}
           </Text>
           {n} {DIAGNOSIS_STYLES[tone].word}
-        </Text>
+        </SkText>
       ))}
     </View>
   );
@@ -92,7 +99,6 @@ function DiagnosisTally({ view }: { view: FailurePathView }) {
 
 const styles = StyleSheet.create({
   root: { gap: theme.space(3) },
-  note: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 19 },
+  note: { lineHeight: 19 },
   tally: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(4) },
-  tallyItem: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.ink },
 });

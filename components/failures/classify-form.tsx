@@ -7,6 +7,8 @@ import type { Role } from '../../shared/roles';
 import { classifyBody, type ClassifyBody } from '../../shared/schemas/classify-body';
 import { ActionButton } from '../ui/action-button';
 import { ChipGroup } from '../ui/chip-group';
+import { INPUT_BOX_STYLE } from '../ui/input-box-style';
+import { SkText } from '../ui/sk-text';
 import { TextField } from '../ui/text-field';
 
 type Field = 'classification' | 'scope' | 'reason' | 'expiresAt';
@@ -101,18 +103,18 @@ export function ClassifyForm({
       : null;
   const fieldError = (f: Field) =>
     errors[f] ? (
-      <Text accessibilityRole="alert" style={styles.error}>
+      <SkText variant="caption" tone="danger" accessibilityRole="alert" style={styles.error}>
         × {FIELD_NAMES[f]} {errors[f]}
-      </Text>
+      </SkText>
     ) : null;
 
   return (
     <View style={styles.form}>
       {maintainer ? (
-        <Text style={styles.note}>
+        <SkText variant="caption" style={styles.note}>
           As a maintainer you may accept a deviation your library lives with; calling a failure a bug or a convention
           difference is a reviewer&apos;s call.
-        </Text>
+        </SkText>
       ) : null}
       <View>
         <ChipGroup
@@ -136,7 +138,9 @@ export function ClassifyForm({
         {fieldError('scope')}
       </View>
       <View style={styles.field}>
-        <Text style={styles.label}>Reason</Text>
+        <SkText variant="smallLabel" style={styles.label}>
+          Reason
+        </SkText>
         <TextInput
           accessibilityLabel="Reason"
           aria-invalid={errors.reason ? true : undefined}
@@ -186,28 +190,12 @@ export function ClassifyForm({
 
 const styles = StyleSheet.create({
   form: { gap: theme.space(4) },
-  note: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 19 },
+  note: { lineHeight: 19 },
   field: { gap: theme.space(1) },
-  label: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft, letterSpacing: 0.3 },
-  input: {
-    minHeight: 88,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    padding: theme.space(3),
-    fontFamily: theme.font.regular,
-    fontSize: theme.size.body,
-    color: theme.color.ink,
-    backgroundColor: theme.color.panel,
-    textAlignVertical: 'top',
-  },
+  label: { letterSpacing: 0.3 },
+  input: { ...INPUT_BOX_STYLE, minHeight: 88, padding: theme.space(3), textAlignVertical: 'top' },
   inputError: { borderColor: theme.color.danger, borderWidth: 2 },
-  error: {
-    fontFamily: theme.font.regular,
-    fontSize: theme.size.small,
-    color: theme.color.danger,
-    marginTop: theme.space(1),
-  },
+  error: { marginTop: theme.space(1) },
   formError: {
     fontFamily: theme.font.medium,
     color: theme.color.danger,

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { theme } from '../../constants/theme';
+import { SkText } from '../ui/sk-text';
 
 export interface ColumnOption<T extends string> {
   id: T;
@@ -29,9 +30,9 @@ export function ColumnChooser<T extends string>({
         onPress={() => setOpen(!open)}
         style={styles.toggle}
       >
-        <Text style={styles.toggleText}>
+        <SkText variant="smallLabel" tone="ink">
           {open ? '↑' : '↓'} Columns ({shown.length} of {options.length})
-        </Text>
+        </SkText>
       </Pressable>
       {open ? (
         <View style={styles.list} accessibilityLabel="Columns">
@@ -49,10 +50,10 @@ export function ColumnChooser<T extends string>({
                 style={styles.item}
               >
                 <Text style={[styles.box, on && styles.boxOn]}>{on ? '✓' : ' '}</Text>
-                <Text style={styles.itemText}>
+                <SkText variant="caption" tone="ink">
                   {o.title}
                   {o.fixed ? ' (always)' : ''}
-                </Text>
+                </SkText>
               </Pressable>
             );
           })}
@@ -73,7 +74,6 @@ const styles = StyleSheet.create({
     borderRadius: theme.radius,
     alignSelf: 'flex-start',
   },
-  toggleText: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.ink },
   list: {
     flexDirection: 'row',
     flexWrap: 'wrap',
@@ -105,5 +105,4 @@ const styles = StyleSheet.create({
     color: theme.color.accentInk,
   },
   boxOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
-  itemText: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink },
 });

@@ -1,5 +1,6 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { theme } from '../../constants/theme';
+import { SkText } from '../ui/sk-text';
 
 /**
  * A download link to a file the server makes (the CSV export). On the web, react-native-web
@@ -10,7 +11,9 @@ export function ExportLink({ href, label, disabledReason }: { href: string; labe
   if (disabledReason) {
     return (
       <View style={[styles.link, styles.off]} aria-disabled>
-        <Text style={styles.offText}>↓ {label}</Text>
+        <SkText variant="label" tone="inkFaint">
+          ↓ {label}
+        </SkText>
         <Text style={styles.reason}>{disabledReason}</Text>
       </View>
     );
@@ -45,6 +48,5 @@ const styles = StyleSheet.create({
     paddingVertical: theme.space(1),
     lineHeight: undefined,
   },
-  offText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.inkFaint },
   reason: { fontFamily: theme.font.regular, fontSize: 12, color: theme.color.inkFaint },
 });

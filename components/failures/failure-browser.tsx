@@ -6,6 +6,7 @@ import { useStoredChoice } from '../../client/use-stored-choice';
 import { theme } from '../../constants/theme';
 import { ActionButton } from '../ui/action-button';
 import { ChipGroup } from '../ui/chip-group';
+import { SkText } from '../ui/sk-text';
 import { ColumnChooser } from './column-chooser';
 import { ExportLink } from './export-link';
 import { FailureCard } from './failure-card';
@@ -72,11 +73,11 @@ export function FailureBrowser({
           ) : null}
         </View>
       </View>
-      <Text style={styles.note}>
+      <SkText variant="caption" style={styles.note}>
         Only points that did not pass are listed, each with the suite version, target and convention it was judged
         under. A short or empty table is evidence about the points and conventions those suites checked, not a
         certification of the library.
-      </Text>
+      </SkText>
       {failures.isPending ? (
         <QueryState state="loading" />
       ) : failures.isError ? (
@@ -92,10 +93,10 @@ export function FailureBrowser({
         />
       ) : (
         <View style={styles.results}>
-          <Text style={styles.count} accessibilityLiveRegion="polite">
+          <SkText variant="smallLabel" accessibilityLiveRegion="polite">
             {rows.length} {rows.length === 1 ? 'failure' : 'failures'} shown
             {failures.hasNextPage ? ', more to load' : ', all loaded'}
-          </Text>
+          </SkText>
           {wide ? (
             <FailureTable failures={rows} columns={columns} />
           ) : (
@@ -132,9 +133,8 @@ const styles = StyleSheet.create({
     gap: theme.space(3),
   },
   tools: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3), alignItems: 'flex-start' },
-  note: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 19 },
+  note: { lineHeight: 19 },
   results: { gap: theme.space(3) },
-  count: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft },
   cards: { gap: theme.space(3) },
   warning: {
     fontFamily: theme.font.medium,

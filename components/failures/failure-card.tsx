@@ -2,6 +2,7 @@ import { Link } from 'expo-router';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { FailureView } from '../../shared/failure-view';
+import { SkText } from '../ui/sk-text';
 import { describeFailure } from './describe-failure';
 import { formatComplex } from './format-complex';
 import { DiagnosisLabel } from './diagnosis-label';
@@ -20,18 +21,18 @@ export function FailureCard({ failure: f }: { failure: FailureView }) {
       >
         <View style={styles.top}>
           <DiagnosisLabel tone={tone} detail={detail} />
-          <Text style={styles.number}>
+          <SkText variant="smallLabel">
             #{f.id}
             {f.isRegression ? ' · ↑ new' : ''}
-          </Text>
+          </SkText>
         </View>
-        <Text style={styles.where} numberOfLines={2}>
+        <SkText variant="label" numberOfLines={2}>
           {f.suiteSlug} v{f.suiteVersion} · {f.targetName}
-        </Text>
-        <Text style={styles.path} numberOfLines={1}>
+        </SkText>
+        <SkText variant="caption" numberOfLines={1}>
           {f.pathName}
           {f.label ? ` · ${f.label}` : ''} · t = {Number(f.t.toPrecision(4))}
-        </Text>
+        </SkText>
         <View style={styles.values}>
           <Text style={styles.value}>z = {formatComplex(f.z)}</Text>
           <Text style={styles.value}>expected {formatComplex(f.expected)}</Text>
@@ -62,9 +63,6 @@ const styles = StyleSheet.create({
     gap: theme.space(2),
     flexWrap: 'wrap',
   },
-  number: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft },
-  where: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
-  path: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
   values: { gap: 2 },
   value: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.ink },
 });

@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import { StyleSheet, Text } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { FailureView } from '../../shared/failure-view';
+import { SkText } from '../ui/sk-text';
 import { describeFailure } from './describe-failure';
 import { formatComplex } from './format-complex';
 import { DiagnosisLabel } from './diagnosis-label';
@@ -11,7 +12,11 @@ export type FailureColumnId =
   'id' | 'suite' | 'target' | 'convention' | 'path' | 't' | 'z' | 'expected' | 'actual' | 'diagnosis' | 'ulps' | 'new';
 
 const mono = (text: string) => <Text style={styles.mono}>{text}</Text>;
-const plain = (text: string) => <Text style={styles.plain}>{text}</Text>;
+const plain = (text: string) => (
+  <SkText variant="caption" tone="ink">
+    {text}
+  </SkText>
+);
 
 /** The table's columns in order: title, relative width and how a cell reads. `id` and `diagnosis` cannot be hidden. */
 export const FAILURE_COLUMNS: {
@@ -21,7 +26,17 @@ export const FAILURE_COLUMNS: {
   fixed?: true;
   cell: (f: FailureView) => ReactNode;
 }[] = [
-  { id: 'id', title: 'No.', flex: 0.8, fixed: true, cell: (f) => <Text style={styles.link}>#{f.id}</Text> },
+  {
+    id: 'id',
+    title: 'No.',
+    flex: 0.8,
+    fixed: true,
+    cell: (f) => (
+      <SkText variant="smallLabel" tone="accent" style={styles.link}>
+        #{f.id}
+      </SkText>
+    ),
+  },
   { id: 'suite', title: 'Suite', flex: 2.2, cell: (f) => plain(`${f.suiteSlug} v${f.suiteVersion}`) },
   { id: 'target', title: 'Target', flex: 1.5, cell: (f) => plain(f.targetName) },
   { id: 'convention', title: 'Convention', flex: 1.2, cell: (f) => plain(f.convention) },
@@ -46,11 +61,5 @@ export const FAILURE_COLUMNS: {
 
 const styles = StyleSheet.create({
   mono: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.ink },
-  plain: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink },
-  link: {
-    fontFamily: theme.font.medium,
-    fontSize: theme.size.small,
-    color: theme.color.accent,
-    textDecorationLine: 'underline',
-  },
+  link: { textDecorationLine: 'underline' },
 });

@@ -1,11 +1,12 @@
 import { useState } from 'react';
-import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { Pressable, StyleSheet, View } from 'react-native';
 import type { FailureFilters } from '../../client/failure-filters';
 import { theme } from '../../constants/theme';
 import { DIAGNOSIS_KINDS } from '../../shared/diagnosis-kinds';
 import { failureQuery } from '../../shared/schemas/failure-query';
 import { ActionButton } from '../ui/action-button';
 import { ChipGroup } from '../ui/chip-group';
+import { SkText } from '../ui/sk-text';
 import { DIAGNOSIS_STYLES } from './diagnosis-styles';
 import { TextField } from '../ui/text-field';
 
@@ -95,9 +96,9 @@ export function FailureFiltersPanel({
           onPress={() => setOpen(!open)}
           style={styles.toggle}
         >
-          <Text style={styles.toggleText}>
+          <SkText variant="label">
             {open ? '↑' : '↓'} Filters{on ? ` · ${on} on` : ''}
-          </Text>
+          </SkText>
         </Pressable>
       ) : null}
       {open ? (
@@ -185,7 +186,6 @@ const styles = StyleSheet.create({
     borderRadius: theme.radius,
     backgroundColor: theme.color.panel,
   },
-  toggleText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
   body: {
     gap: theme.space(4),
     padding: theme.space(4),

@@ -2,27 +2,32 @@ import { Link } from 'expo-router';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { FailureDetailView } from '../../shared/failure-detail-view';
+import { SkText } from '../ui/sk-text';
 import { DiagnosisLabel } from './diagnosis-label';
 
 /** The same point (suite, path, input bits) in every run that failed it, newest first, across targets and versions. */
 export function FailureHistory({ history, currentId }: { history: FailureDetailView['history']; currentId: string }) {
   if (history.length <= 1)
     return (
-      <Text style={styles.note}>
+      <SkText variant="caption" style={styles.note}>
         This point has failed in this run only; the runs before it passed it or did not check it.
-      </Text>
+      </SkText>
     );
   return (
     <View style={styles.list}>
-      <Text style={styles.note}>Runs in which this point failed. A run that passed it is not listed.</Text>
+      <SkText variant="caption" style={styles.note}>
+        Runs in which this point failed. A run that passed it is not listed.
+      </SkText>
       {history.map((h) => {
         const current = h.id === currentId;
         const body = (
           <>
             <Text style={styles.when}>{new Date(h.runAt).toISOString().slice(0, 16).replace('T', ' ')} UTC</Text>
-            <Text style={styles.target}>{h.targetName}</Text>
+            <SkText variant="smallLabel" tone="ink">
+              {h.targetName}
+            </SkText>
             <DiagnosisLabel tone={h.diagnosisKind ?? 'error'} />
-            <Text style={styles.flag}>{current ? '• this case' : h.isRegression ? '↑ new in that run' : ''}</Text>
+            <SkText variant="caption">{current ? '• this case' : h.isRegression ? '↑ new in that run' : ''}</SkText>
           </>
         );
         return current ? (
@@ -47,7 +52,7 @@ export function FailureHistory({ history, currentId }: { history: FailureDetailV
 
 const styles = StyleSheet.create({
   list: { gap: theme.space(2) },
-  note: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 19 },
+  note: { lineHeight: 19 },
   row: {
     flexDirection: 'row',
     flexWrap: 'wrap',
@@ -63,6 +68,4 @@ const styles = StyleSheet.create({
   },
   current: { borderColor: theme.color.focus, borderWidth: 2 },
   when: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.inkSoft },
-  target: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.ink },
-  flag: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
 });

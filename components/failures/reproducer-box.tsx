@@ -1,6 +1,7 @@
 import { useState } from 'react';
-import { Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
+import { Pressable, ScrollView, StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
+import { SkText } from '../ui/sk-text';
 
 /** The reproducer as code to paste, with a copy button that says whether the copy worked. */
 export function ReproducerBox({ code }: { code: string }) {
@@ -17,9 +18,9 @@ export function ReproducerBox({ code }: { code: string }) {
   return (
     <View style={styles.root}>
       <ScrollView horizontal style={styles.box} contentContainerStyle={styles.inner}>
-        <Text style={styles.code} selectable accessibilityLabel="Reproducer code">
+        <SkText variant="mono" tone="navInk" style={styles.code} selectable accessibilityLabel="Reproducer code">
           {code}
-        </Text>
+        </SkText>
       </ScrollView>
       <View style={styles.row}>
         <Pressable
@@ -28,12 +29,14 @@ export function ReproducerBox({ code }: { code: string }) {
           onPress={() => void copy()}
           style={styles.button}
         >
-          <Text style={styles.buttonText}>Copy reproducer</Text>
+          <SkText variant="label" tone="accent">
+            Copy reproducer
+          </SkText>
         </Pressable>
         {copied ? (
-          <Text style={copied === 'yes' ? styles.ok : styles.failed} accessibilityLiveRegion="polite">
+          <SkText variant="smallLabel" tone={copied === 'yes' ? 'accent' : 'danger'} accessibilityLiveRegion="polite">
             {copied === 'yes' ? '✓ Copied' : '× Could not copy here: select the code instead'}
-          </Text>
+          </SkText>
         ) : null}
       </View>
     </View>
@@ -44,7 +47,7 @@ const styles = StyleSheet.create({
   root: { gap: theme.space(2) },
   box: { backgroundColor: theme.color.nav, borderRadius: theme.radius, maxHeight: 320 },
   inner: { padding: theme.space(3) },
-  code: { fontFamily: theme.font.mono, fontSize: 13, lineHeight: 19, color: theme.color.navInk },
+  code: { lineHeight: 19 },
   row: { flexDirection: 'row', alignItems: 'center', gap: theme.space(3), flexWrap: 'wrap' },
   button: {
     minHeight: theme.touch,
@@ -54,7 +57,4 @@ const styles = StyleSheet.create({
     borderColor: theme.color.accent,
     borderRadius: theme.radius,
   },
-  buttonText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accent },
-  ok: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.accent },
-  failed: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.danger },
 });

@@ -5,6 +5,7 @@ import { theme } from '../../constants/theme';
 import type { FailureView } from '../../shared/failure-view';
 import type { WireComplex } from '../../shared/run-result';
 import { wireNumber } from '../../shared/wire-number';
+import { SkText } from '../ui/sk-text';
 import { formatComplex } from './format-complex';
 
 const hexOf = (c: WireComplex): WireComplex => ({
@@ -38,7 +39,7 @@ export function ValueBits({ failure: f }: { failure: FailureView }) {
           {bits && r.value ? <HexLine hex={r.hex ?? hexOf(r.value)} /> : null}
         </View>
       ))}
-      {f.limits ? null : <Text style={styles.note}>Not on a cut: there is one limit, the value itself.</Text>}
+      {f.limits ? null : <SkText variant="caption">Not on a cut: there is one limit, the value itself.</SkText>}
       <Pressable
         accessibilityRole="button"
         accessibilityLabel={bits ? 'Hide exact bits' : 'Show exact bits'}
@@ -46,7 +47,9 @@ export function ValueBits({ failure: f }: { failure: FailureView }) {
         onPress={() => setBits(!bits)}
         style={styles.toggle}
       >
-        <Text style={styles.toggleText}>{bits ? '↑ Hide exact bits' : '↓ Show exact bits (C hex floats)'}</Text>
+        <SkText variant="smallLabel" tone="ink">
+          {bits ? '↑ Hide exact bits' : '↓ Show exact bits (C hex floats)'}
+        </SkText>
       </Pressable>
     </View>
   );
@@ -54,10 +57,10 @@ export function ValueBits({ failure: f }: { failure: FailureView }) {
 
 function HexLine({ hex }: { hex: WireComplex }) {
   return (
-    <Text style={styles.hex} selectable>
+    <SkText variant="mono" tone="inkSoft" style={styles.hex} selectable>
       re {hex.re}
       {'\n'}im {hex.im}
-    </Text>
+    </SkText>
   );
 }
 
@@ -72,15 +75,7 @@ const styles = StyleSheet.create({
     letterSpacing: 0.6,
   },
   value: { fontFamily: theme.font.mono, fontSize: 15, color: theme.color.ink },
-  hex: {
-    fontFamily: theme.font.mono,
-    fontSize: 13,
-    color: theme.color.inkSoft,
-    backgroundColor: theme.color.paper,
-    padding: theme.space(2),
-    borderRadius: 4,
-  },
-  note: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
+  hex: { backgroundColor: theme.color.paper, padding: theme.space(2), borderRadius: 4 },
   toggle: {
     minHeight: theme.touch,
     justifyContent: 'center',
@@ -90,5 +85,4 @@ const styles = StyleSheet.create({
     borderRadius: theme.radius,
     alignSelf: 'flex-start',
   },
-  toggleText: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.ink },
 });

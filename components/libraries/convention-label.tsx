@@ -1,5 +1,6 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { theme } from '../../constants/theme';
+import { SkText } from '../ui/sk-text';
 import { CONVENTION_STYLES, type Behaviour } from './convention-styles';
 
 /** A fingerprint verdict as a glyph and a word on an outlined chip: readable without the colour. */
@@ -11,10 +12,10 @@ export function ConventionLabel({ behaviour, prefix }: { behaviour: Behaviour; p
       accessibilityLabel={`${prefix ? `${prefix} ` : ''}${style.word}`}
     >
       <Text style={[styles.glyph, { color: style.color }]}>{style.glyph}</Text>
-      <Text style={styles.word}>
+      <SkText variant="smallLabel" tone="ink">
         {prefix ? <Text style={styles.prefix}>{prefix} </Text> : null}
         {style.word}
-      </Text>
+      </SkText>
     </View>
   );
 }
@@ -32,6 +33,5 @@ const styles = StyleSheet.create({
     backgroundColor: theme.color.panel,
   },
   glyph: { fontFamily: theme.font.bold, fontSize: theme.size.body, lineHeight: 20 },
-  word: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.ink },
   prefix: { fontFamily: theme.font.regular, color: theme.color.inkSoft },
 });

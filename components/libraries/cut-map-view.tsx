@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { ActivityIndicator, Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
+import { ActivityIndicator, Pressable, StyleSheet, useWindowDimensions, View } from 'react-native';
 import { ApiRequestError } from '../../client/api-request-error';
 import { useCutMap, type CutMapAsk } from '../../client/use-cut-map';
 import { useFingerprint } from '../../client/use-fingerprint';
@@ -7,6 +7,7 @@ import { theme } from '../../constants/theme';
 import { fieldIssues } from '../../shared/field-issues';
 import { cutMapQuery } from '../../shared/schemas/cut-map-query';
 import { ActionButton } from '../ui/action-button';
+import { SkText } from '../ui/sk-text';
 import { ComputedNote } from './computed-note';
 import { CutMapPicture } from '../pictures/cut-map-picture';
 import { QueryState } from '../ui/query-state';
@@ -64,7 +65,9 @@ export function CutMapView({ name, fn, onChooseFn }: { name: string; fn: string;
 
   const form = (
     <View style={styles.form}>
-      <Text style={styles.formHead}>Function</Text>
+      <SkText variant="smallLabel" style={styles.formHead}>
+        Function
+      </SkText>
       <View style={styles.chips} accessibilityRole="radiogroup" accessibilityLabel="Function to map">
         {functions.map((f) => (
           <Pressable
@@ -75,17 +78,17 @@ export function CutMapView({ name, fn, onChooseFn }: { name: string; fn: string;
             onPress={() => onChooseFn(f)}
             style={[styles.chip, f === fn && styles.chipOn]}
           >
-            <Text style={[styles.chipText, f === fn && styles.chipTextOn]}>
+            <SkText variant="mono" style={f === fn && styles.chipTextOn}>
               {f === fn ? '✓ ' : ''}
               {f}
-            </Text>
+            </SkText>
           </Pressable>
         ))}
       </View>
       {errors.fn ? (
-        <Text accessibilityRole="alert" style={styles.error}>
+        <SkText variant="caption" tone="danger" accessibilityRole="alert">
           × Function {errors.fn}
-        </Text>
+        </SkText>
       ) : null}
       <TextField
         label="Box (re0,im0,re1,im1)"
@@ -126,14 +129,14 @@ export function CutMapView({ name, fn, onChooseFn }: { name: string; fn: string;
         {map.isPlaceholderData ? (
           <View style={styles.busy} accessibilityLiveRegion="polite">
             <ActivityIndicator color={theme.color.accent} />
-            <Text style={styles.busyText}>Mapping the new request… the picture below is still the previous one.</Text>
+            <SkText variant="caption">Mapping the new request… the picture below is still the previous one.</SkText>
           </View>
         ) : (
           <ComputedNote answer={map.data} />
         )}
-        <Text style={styles.title}>
+        <SkText variant="heading">
           {map.data.cutMap.function} on {map.data.cutMap.target}, {map.data.cutMap.columns}×{map.data.cutMap.rows} grid
-        </Text>
+        </SkText>
         <CutMapPicture cutMap={map.data.cutMap} />
       </View>
     );
@@ -165,12 +168,7 @@ const styles = StyleSheet.create({
     borderRadius: theme.radius,
     padding: theme.space(4),
   },
-  formHead: {
-    fontFamily: theme.font.medium,
-    fontSize: theme.size.small,
-    color: theme.color.inkSoft,
-    letterSpacing: 0.3,
-  },
+  formHead: { letterSpacing: 0.3 },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
   chip: {
     minHeight: 44,
@@ -181,11 +179,7 @@ const styles = StyleSheet.create({
     borderColor: theme.color.rule,
   },
   chipOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
-  chipText: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.ink },
   chipTextOn: { color: theme.color.accentInk },
-  error: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.danger },
   result: { gap: theme.space(3) },
-  title: { fontFamily: theme.font.bold, fontSize: theme.size.large, color: theme.color.ink },
   busy: { flexDirection: 'row', alignItems: 'center', gap: theme.space(2) },
-  busyText: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
 });

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { ConventionFingerprint } from '../../shared/convention-fingerprint';
+import { SkText } from '../ui/sk-text';
 import { ConventionLabel } from './convention-label';
 import { CONVENTION_STYLES, type Behaviour } from './convention-styles';
 import { wireNumber } from './wire-number';
@@ -55,9 +56,9 @@ export function FingerprintTable({ fingerprint, onOpenCutMap }: FingerprintTable
   return (
     <View style={styles.wrap}>
       <View style={styles.summary} testID="fingerprint-summary">
-        <Text style={styles.summaryHead}>
+        <SkText variant="label">
           {plural(fingerprint.cuts.length, 'function–cut pair')} of {plural(functions, 'function')}
-        </Text>
+        </SkText>
         <View style={styles.chips}>
           {byBehaviour.map(([b, n]) => (
             <ConventionLabel key={b} behaviour={b} prefix={String(n)} />
@@ -66,27 +67,35 @@ export function FingerprintTable({ fingerprint, onOpenCutMap }: FingerprintTable
       </View>
 
       <View style={styles.note} testID="fingerprint-scope">
-        <Text style={styles.noteTitle}>What this shows, and what it does not</Text>
-        <Text style={styles.noteLine}>
+        <SkText variant="strong">What this shows, and what it does not</SkText>
+        <SkText variant="caption" style={styles.noteLine}>
           ✓ Checked: {plural(places, 'place')} that separate the conventions, over{' '}
           {plural(fingerprint.cuts.length, 'cut')}. At each, the target was called exactly on the cut with +0 and with
           −0 in the part across the cut, and 1e-9 off the cut on both sides; values were compared with the reference to
           a relative 1e-6.
-        </Text>
-        <Text style={styles.noteLine}>
+        </SkText>
+        <SkText variant="caption" style={styles.noteLine}>
           × Not checked: the rest of each cut, points further off it, accuracy, and any function the target lacks
           {fingerprint.missing.length ? ` (${fingerprint.missing.join(', ')})` : ''}. A verdict is evidence at the
           places listed under it — open them — not a certification.
-        </Text>
+        </SkText>
         <Text style={styles.noteSource}>{fingerprint.statement}</Text>
       </View>
 
       {wide ? (
         <View style={[styles.row, styles.headRow]}>
-          <Text style={[styles.head, styles.fnCol]}>Function</Text>
-          <Text style={[styles.head, styles.cutCol]}>Cut</Text>
-          <Text style={[styles.head, styles.verdictCol]}>Convention</Text>
-          <Text style={[styles.head, styles.evidenceCol]}>Evidence</Text>
+          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.fnCol]}>
+            Function
+          </SkText>
+          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.cutCol]}>
+            Cut
+          </SkText>
+          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.verdictCol]}>
+            Convention
+          </SkText>
+          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.evidenceCol]}>
+            Evidence
+          </SkText>
         </View>
       ) : null}
       {fingerprint.cuts.map((entry) => (
@@ -111,21 +120,31 @@ function CutRow({
     <View style={wide ? styles.rowBox : styles.card} testID={`fingerprint-${entry.function}-${entry.cut}`}>
       <View style={wide ? styles.row : styles.cardBody}>
         <View style={wide ? styles.fnCol : styles.cardHead}>
-          <Text style={styles.fn}>{entry.function}</Text>
-          {wide ? null : <Text style={styles.cut}>cut {entry.cut}</Text>}
+          <SkText variant="monoBody">{entry.function}</SkText>
+          {wide ? null : (
+            <SkText variant="mono" tone="inkSoft">
+              cut {entry.cut}
+            </SkText>
+          )}
         </View>
-        {wide ? <Text style={[styles.cut, styles.cutCol]}>{entry.cut}</Text> : null}
+        {wide ? (
+          <SkText variant="mono" tone="inkSoft" style={styles.cutCol}>
+            {entry.cut}
+          </SkText>
+        ) : null}
         <View style={[wide ? styles.verdictCol : null, styles.verdictCell]}>
           <ConventionLabel behaviour={entry.behaviour} />
           {entry.alone !== entry.behaviour ? (
-            <Text style={styles.small}>
+            <SkText variant="caption" style={styles.small}>
               On its own {CONVENTION_STYLES[entry.alone].glyph} {CONVENTION_STYLES[entry.alone].word}
               {entry.disagreesWith.length ? `; disagrees with ${entry.disagreesWith.join(', ')} on the same cut` : ''}
-            </Text>
+            </SkText>
           ) : null}
         </View>
         <View style={[wide ? styles.evidenceCol : null, styles.evidenceCell]}>
-          <Text style={styles.small}>{evidenceLine(entry)}</Text>
+          <SkText variant="caption" style={styles.small}>
+            {evidenceLine(entry)}
+          </SkText>
           <View style={styles.actions}>
             {entry.probes.length > 0 ? (
               <Pressable
@@ -135,9 +154,9 @@ function CutRow({
                 onPress={() => setOpen(!open)}
                 style={styles.linkButton}
               >
-                <Text style={styles.linkText}>
+                <SkText variant="smallLabel" tone="accent">
                   {open ? '↑ Hide' : '↓ Show'} {plural(entry.probes.length, 'place')}
-                </Text>
+                </SkText>
               </Pressable>
             ) : null}
             {onOpenCutMap ? (
@@ -147,7 +166,9 @@ function CutRow({
                 onPress={() => onOpenCutMap(entry.function)}
                 style={styles.linkButton}
               >
-                <Text style={styles.linkText}>Cut map →</Text>
+                <SkText variant="smallLabel" tone="accent">
+                  Cut map →
+                </SkText>
               </Pressable>
             ) : null}
           </View>
@@ -158,20 +179,20 @@ function CutRow({
           <View style={wide ? styles.probeGrid : styles.probeList}>
             {entry.probes.map((p) => (
               <View key={`${p.at.re} ${p.at.im}`} style={[styles.probe, wide && styles.probeWide]}>
-                <Text style={styles.probeAt}>z = {probePlace(p.at)}</Text>
+                <SkText variant="mono">z = {probePlace(p.at)}</SkText>
                 <Text style={styles.mono}>with +0 → {wireNumber(p.plusZero)}</Text>
                 <Text style={styles.mono}>with −0 → {wireNumber(p.minusZero)}</Text>
-                <Text style={styles.small}>
+                <SkText variant="caption" style={styles.small}>
                   votes {CONVENTION_STYLES[p.verdict].glyph} {CONVENTION_STYLES[p.verdict].word}
                   {p.note ? `: ${p.note}` : ''}
-                </Text>
+                </SkText>
               </View>
             ))}
           </View>
-          <Text style={styles.meaning}>
+          <SkText variant="caption" tone="ink" style={styles.meaning}>
             {CONVENTION_STYLES[entry.behaviour].glyph} {CONVENTION_STYLES[entry.behaviour].word}:{' '}
             {CONVENTION_STYLES[entry.behaviour].meaning}.
-          </Text>
+          </SkText>
         </View>
       ) : null}
     </View>
@@ -181,7 +202,6 @@ function CutRow({
 const styles = StyleSheet.create({
   wrap: { gap: theme.space(2) },
   summary: { gap: theme.space(2), marginBottom: theme.space(2) },
-  summaryHead: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
   note: {
     borderLeftWidth: 3,
@@ -192,8 +212,7 @@ const styles = StyleSheet.create({
     gap: theme.space(2),
     marginBottom: theme.space(2),
   },
-  noteTitle: { fontFamily: theme.font.bold, fontSize: theme.size.body, color: theme.color.ink },
-  noteLine: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
+  noteLine: { lineHeight: 20 },
   noteSource: { fontFamily: theme.font.regular, fontSize: 12, color: theme.color.inkFaint, lineHeight: 18 },
   card: {
     backgroundColor: theme.color.panel,
@@ -213,22 +232,14 @@ const styles = StyleSheet.create({
   },
   row: { flexDirection: 'row', alignItems: 'center', gap: theme.space(3), paddingVertical: theme.space(2) },
   headRow: { paddingHorizontal: theme.space(3) },
-  head: {
-    fontFamily: theme.font.medium,
-    fontSize: theme.size.small,
-    color: theme.color.inkFaint,
-    textTransform: 'uppercase',
-    letterSpacing: 0.8,
-  },
+  head: { textTransform: 'uppercase', letterSpacing: 0.8 },
   fnCol: { flex: 2 },
   cutCol: { flex: 2 },
   verdictCol: { flex: 4 },
   evidenceCol: { flex: 5 },
   verdictCell: { gap: theme.space(1) },
   evidenceCell: { gap: theme.space(1) },
-  fn: { fontFamily: theme.font.mono, fontSize: theme.size.body, color: theme.color.ink },
-  cut: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.inkSoft },
-  small: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
+  small: { lineHeight: 20 },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
   linkButton: {
     minHeight: 44,
@@ -238,13 +249,11 @@ const styles = StyleSheet.create({
     borderWidth: 1,
     borderColor: theme.color.rule,
   },
-  linkText: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.accent },
   probes: { gap: theme.space(2), paddingBottom: theme.space(3) },
   probeGrid: { flexDirection: 'row', flexWrap: 'wrap', columnGap: theme.space(4) },
   probeList: { gap: theme.space(2) },
   probeWide: { flexBasis: 260, flexGrow: 1, paddingBottom: theme.space(2) },
   probe: { borderTopWidth: 1, borderTopColor: theme.color.rule, paddingTop: theme.space(2), gap: 2 },
-  probeAt: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.ink },
   mono: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.inkSoft },
-  meaning: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink, lineHeight: 20 },
+  meaning: { lineHeight: 20 },
 });

@@ -1,9 +1,10 @@
-import { Text, View } from 'react-native';
+import { View } from 'react-native';
 import { useSuites } from '../../client/use-suites';
 import { useVersionMatrix } from '../../client/use-version-matrix';
 import { theme } from '../../constants/theme';
 import { ActionButton } from '../ui/action-button';
 import { QueryState } from '../ui/query-state';
+import { SkText } from '../ui/sk-text';
 import { VersionMatrixTable } from './version-matrix-table';
 
 /**
@@ -32,14 +33,11 @@ export function LibraryVersionMatrix({ library }: { library: string }) {
   const firstError = matrix.failed[0]?.error;
   return (
     <View style={{ gap: theme.space(3) }}>
-      <Text
-        accessibilityLiveRegion="polite"
-        style={{ fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft }}
-      >
+      <SkText variant="caption" accessibilityLiveRegion="polite">
         {matrix.done === matrix.groups
           ? `All ${slugs.length} approved suites compared.`
           : `Compared ${matrix.done} of ${matrix.groups} groups of suites… The first visit runs every suite on every installed version; the server keeps the answers for the next.`}
-      </Text>
+      </SkText>
       {firstError ? (
         <View style={{ gap: theme.space(2) }}>
           <QueryState

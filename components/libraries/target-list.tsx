@@ -4,6 +4,7 @@ import { theme } from '../../constants/theme';
 import { libraryKey } from '../../shared/library-key';
 import type { TargetView } from '../../shared/target-view';
 import { QueryState } from '../ui/query-state';
+import { SkText } from '../ui/sk-text';
 
 export interface TargetListProps {
   /** Opens one target's fingerprint and cut maps. */
@@ -54,12 +55,12 @@ export function TargetList({ onOpenTarget, onOpenMatrix }: TargetListProps) {
           return (
             <View key={key} style={[styles.card, wide && styles.cardWide]} testID={`library-${key}`}>
               <View style={styles.cardHead}>
-                <Text accessibilityRole="header" aria-level={2} style={styles.library}>
+                <SkText variant="heading" accessibilityRole="header" aria-level={2}>
                   {key}
-                </Text>
-                <Text style={styles.count}>
+                </SkText>
+                <SkText variant="caption" tone="inkFaint">
                   {installed.length} installed version{installed.length === 1 ? '' : 's'}
-                </Text>
+                </SkText>
               </View>
               {versions.map((t) => (
                 <Pressable
@@ -71,13 +72,19 @@ export function TargetList({ onOpenTarget, onOpenMatrix }: TargetListProps) {
                   style={({ pressed }) => [styles.version, pressed && styles.pressed]}
                 >
                   <View style={styles.versionText}>
-                    <Text style={[styles.versionNumber, !t.installed && styles.gone]}>{t.version}</Text>
+                    <SkText variant="monoBody" style={!t.installed && styles.gone}>
+                      {t.version}
+                    </SkText>
                     <Text style={styles.settings}>{settingsWords(t.settings) || 'no settings'}</Text>
                     {t.installed ? null : (
                       <Text style={styles.settings}>× not installed any more: nothing can be computed for it</Text>
                     )}
                   </View>
-                  {t.installed ? <Text style={styles.go}>Fingerprint →</Text> : null}
+                  {t.installed ? (
+                    <SkText variant="smallLabel" tone="accent">
+                      Fingerprint →
+                    </SkText>
+                  ) : null}
                 </Pressable>
               ))}
               {installed.length >= 2 ? (
@@ -87,9 +94,9 @@ export function TargetList({ onOpenTarget, onOpenMatrix }: TargetListProps) {
                   onPress={() => onOpenMatrix(key)}
                   style={({ pressed }) => [styles.matrix, pressed && styles.pressed]}
                 >
-                  <Text style={styles.matrixText}>
+                  <SkText variant="smallLabel" tone="ink">
                     ∆ Version matrix: what changed between these {installed.length} versions →
-                  </Text>
+                  </SkText>
                 </Pressable>
               ) : (
                 <Text style={styles.single}>One installed version: nothing to compare across versions.</Text>
@@ -121,8 +128,6 @@ const styles = StyleSheet.create({
     gap: theme.space(2),
     marginBottom: theme.space(2),
   },
-  library: { fontFamily: theme.font.bold, fontSize: theme.size.large, color: theme.color.ink },
-  count: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkFaint },
   version: {
     minHeight: theme.touch,
     flexDirection: 'row',
@@ -134,10 +139,8 @@ const styles = StyleSheet.create({
   },
   pressed: { backgroundColor: theme.color.paper },
   versionText: { flex: 1, gap: 2 },
-  versionNumber: { fontFamily: theme.font.mono, fontSize: theme.size.body, color: theme.color.ink },
   gone: { color: theme.color.inkFaint, textDecorationLine: 'line-through' },
   settings: { fontFamily: theme.font.regular, fontSize: 12, color: theme.color.inkSoft },
-  go: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.accent },
   matrix: {
     minHeight: theme.touch,
     justifyContent: 'center',
@@ -146,6 +149,5 @@ const styles = StyleSheet.create({
     borderRadius: theme.radius,
     backgroundColor: theme.color.accentSoft,
   },
-  matrixText: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.ink },
   single: { fontFamily: theme.font.regular, fontSize: 12, color: theme.color.inkFaint, marginTop: theme.space(2) },
 });

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { VersionMatrix } from '../../shared/version-matrix';
+import { SkText } from '../ui/sk-text';
 import { wireNumber } from './wire-number';
 
 type SuiteEntry = VersionMatrix['suites'][number];
@@ -53,33 +54,35 @@ export function VersionMatrixTable({ library, versions, suites, pending = 0 }: V
 
   return (
     <View style={styles.wrap}>
-      <Text style={styles.summary} testID="matrix-summary">
+      <SkText variant="label" style={styles.summary} testID="matrix-summary">
         {plural(suites.length, 'suite')} over {plural(versions.length, 'version')} of {library}:{' '}
         {changed.length === 0
           ? 'no value changed between consecutive versions.'
           : `${plural(points, 'point')} in ${plural(changed.length, 'suite')} changed value somewhere.`}
         {pending > 0 ? ` ${plural(pending, 'more suite')} still being compared…` : ''}
-      </Text>
+      </SkText>
       <View style={styles.note} testID="matrix-scope">
-        <Text style={styles.noteTitle}>What this shows, and what it does not</Text>
-        <Text style={styles.noteLine}>
+        <SkText variant="strong">What this shows, and what it does not</SkText>
+        <SkText variant="caption" style={styles.noteLine}>
           ✓ Compared: each suite&apos;s newest approved version run on {versions.join(', ')}; every point&apos;s value
           compared bit for bit (zero signs included) with the previous version&apos;s. ∆ counts the points whose value
           changed at that version.
-        </Text>
-        <Text style={styles.noteLine}>
+        </SkText>
+        <SkText variant="caption" style={styles.noteLine}>
           × Not compared: versions not installed here, points off the suites&apos; paths, and other settings of the
           library. &quot;No change&quot; means the same values at these points, not the same library.
-        </Text>
+        </SkText>
       </View>
 
       {wide ? (
         <View style={[styles.row, styles.headRow]}>
-          <Text style={[styles.head, styles.suiteCol]}>Suite</Text>
+          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.suiteCol]}>
+            Suite
+          </SkText>
           {versions.map((v) => (
-            <Text key={v} style={[styles.head, styles.versionCol]}>
+            <SkText variant="smallLabel" tone="inkFaint" key={v} style={[styles.head, styles.versionCol]}>
               {v}
-            </Text>
+            </SkText>
           ))}
         </View>
       ) : null}
@@ -107,9 +110,9 @@ function SuiteRow({ suite, versions, wide }: { suite: SuiteEntry; versions: stri
     <View style={wide ? styles.rowBox : styles.card} testID={`matrix-${suite.id}`}>
       <View style={wide ? styles.row : styles.cardBody}>
         <View style={wide ? styles.suiteCol : null}>
-          <Text style={styles.suiteId}>
+          <SkText variant="mono">
             {suite.id} <Text style={styles.faint}>v{suite.version}</Text>
-          </Text>
+          </SkText>
           <Text style={styles.subject}>{suite.subject}</Text>
         </View>
         <View style={wide ? styles.cellsWide : styles.cellsPhone}>
@@ -120,9 +123,9 @@ function SuiteRow({ suite, versions, wide }: { suite: SuiteEntry; versions: stri
               accessibilityLabel={`${suite.id} at ${v}: ${words.text}${delta ? `, ${delta} changed` : ''}`}
             >
               {wide ? null : <Text style={styles.chipVersion}>{v}</Text>}
-              <Text style={[styles.cellText, words.bad && styles.badText]}>
+              <SkText variant="smallLabel" tone="accent" style={words.bad && styles.badText}>
                 {words.glyph} {words.text}
-              </Text>
+              </SkText>
               {delta ? <Text style={styles.delta}>∆ {delta} changed</Text> : null}
             </View>
           ))}
@@ -136,9 +139,9 @@ function SuiteRow({ suite, versions, wide }: { suite: SuiteEntry; versions: stri
           onPress={() => setOpen(!open)}
           style={styles.linkButton}
         >
-          <Text style={styles.linkText}>
+          <SkText variant="smallLabel" tone="accent">
             {open ? '↑ Hide' : '↓ Show'} {plural(suite.changes.length, 'changed point')}
-          </Text>
+          </SkText>
         </Pressable>
       ) : (
         <Text style={styles.faint}>No point of this suite changed value between these versions.</Text>
@@ -171,7 +174,9 @@ function SuiteRow({ suite, versions, wide }: { suite: SuiteEntry; versions: stri
               onPress={() => setAll(true)}
               style={styles.linkButton}
             >
-              <Text style={styles.linkText}>Show all {suite.changes.length}</Text>
+              <SkText variant="smallLabel" tone="accent">
+                Show all {suite.changes.length}
+              </SkText>
             </Pressable>
           ) : null}
         </View>
@@ -182,7 +187,7 @@ function SuiteRow({ suite, versions, wide }: { suite: SuiteEntry; versions: stri
 
 const styles = StyleSheet.create({
   wrap: { gap: theme.space(2) },
-  summary: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink, lineHeight: 24 },
+  summary: { lineHeight: 24 },
   note: {
     borderLeftWidth: 3,
     borderLeftColor: theme.color.focus,
@@ -192,8 +197,7 @@ const styles = StyleSheet.create({
     gap: theme.space(2),
     marginBottom: theme.space(2),
   },
-  noteTitle: { fontFamily: theme.font.bold, fontSize: theme.size.body, color: theme.color.ink },
-  noteLine: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
+  noteLine: { lineHeight: 20 },
   card: {
     backgroundColor: theme.color.panel,
     borderWidth: 1,
@@ -222,7 +226,7 @@ const styles = StyleSheet.create({
     borderBottomWidth: 1,
     borderBottomColor: theme.color.rule,
   },
-  head: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkFaint, letterSpacing: 0.5 },
+  head: { letterSpacing: 0.5 },
   suiteCol: { flex: 3, minWidth: 0 },
   versionCol: {
     flex: 1,
@@ -243,10 +247,8 @@ const styles = StyleSheet.create({
   },
   cellBad: { backgroundColor: theme.color.dangerSoft },
   chipVersion: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.inkFaint },
-  cellText: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.accent },
   badText: { color: theme.color.danger },
   delta: { fontFamily: theme.font.medium, fontSize: 12, color: theme.color.ink },
-  suiteId: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.ink },
   subject: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.inkSoft },
   faint: { fontFamily: theme.font.regular, fontSize: 12, color: theme.color.inkFaint },
   linkButton: {
@@ -258,7 +260,6 @@ const styles = StyleSheet.create({
     borderWidth: 1,
     borderColor: theme.color.rule,
   },
-  linkText: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.accent },
   changes: { gap: theme.space(2), paddingBottom: theme.space(2) },
   change: { borderTopWidth: 1, borderTopColor: theme.color.rule, paddingTop: theme.space(2), gap: 2 },
   changeHead: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.ink },

@@ -1,5 +1,4 @@
-import { StyleSheet, Text } from 'react-native';
-import { theme } from '../../constants/theme';
+import { SkText } from '../ui/sk-text';
 
 /**
  * Outside the web there is no sandboxed frame to put a stranger's HTML in, and no HTML renderer is
@@ -7,12 +6,8 @@ import { theme } from '../../constants/theme';
  */
 export function MailHtmlFrame(_props: { html: string; title: string }) {
   return (
-    <Text style={styles.note}>
+    <SkText variant="caption">
       The HTML part is shown in the web app only; switch to the plain text to read this message here.
-    </Text>
+    </SkText>
   );
 }
-
-const styles = StyleSheet.create({
-  note: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
-});

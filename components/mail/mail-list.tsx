@@ -5,6 +5,7 @@ import { useOutbox } from '../../client/use-outbox';
 import { theme } from '../../constants/theme';
 import { ActionButton } from '../ui/action-button';
 import { QueryState } from '../ui/query-state';
+import { SkText } from '../ui/sk-text';
 
 /** What the local mail server received, newest first: cards on a phone, rows on a wide screen. */
 export function MailList() {
@@ -26,9 +27,15 @@ export function MailList() {
     <View style={styles.list} testID="mail-list">
       {wide ? (
         <View style={[styles.row, styles.headRow]}>
-          <Text style={[styles.head, styles.whenCol]}>Received</Text>
-          <Text style={[styles.head, styles.subjectCol]}>Subject</Text>
-          <Text style={[styles.head, styles.peopleCol]}>From → to</Text>
+          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.whenCol]}>
+            Received
+          </SkText>
+          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.subjectCol]}>
+            Subject
+          </SkText>
+          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.peopleCol]}>
+            From → to
+          </SkText>
         </View>
       ) : null}
       {messages.map((m) => (
@@ -40,24 +47,26 @@ export function MailList() {
           >
             {wide ? (
               <>
-                <Text style={[styles.when, styles.whenCol]}>{formatDate(m.receivedAt)}</Text>
-                <Text style={[styles.subject, styles.subjectCol]} numberOfLines={2}>
+                <SkText variant="caption" style={styles.whenCol}>
+                  {formatDate(m.receivedAt)}
+                </SkText>
+                <SkText variant="label" style={styles.subjectCol} numberOfLines={2}>
                   {m.subject || '(no subject)'}
-                </Text>
+                </SkText>
                 <Text style={[styles.people, styles.peopleCol]} numberOfLines={2}>
                   {m.from} → {m.to.join(', ')}
                 </Text>
               </>
             ) : (
               <>
-                <Text style={styles.subject}>{m.subject || '(no subject)'}</Text>
+                <SkText variant="label">{m.subject || '(no subject)'}</SkText>
                 <Text style={styles.people} numberOfLines={2}>
                   To {m.to.join(', ')}
                 </Text>
                 <Text style={styles.people} numberOfLines={1}>
                   From {m.from}
                 </Text>
-                <Text style={styles.when}>{formatDate(m.receivedAt)}</Text>
+                <SkText variant="caption">{formatDate(m.receivedAt)}</SkText>
               </>
             )}
           </Pressable>
@@ -97,17 +106,9 @@ const styles = StyleSheet.create({
     backgroundColor: theme.color.panel,
   },
   headRow: { backgroundColor: 'transparent', minHeight: 0 },
-  head: {
-    fontFamily: theme.font.medium,
-    fontSize: theme.size.small,
-    color: theme.color.inkFaint,
-    textTransform: 'uppercase',
-    letterSpacing: 0.8,
-  },
+  head: { textTransform: 'uppercase', letterSpacing: 0.8 },
   whenCol: { width: 170 },
   subjectCol: { flex: 3 },
   peopleCol: { flex: 2 },
-  subject: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
   people: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.inkSoft },
-  when: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
 });

@@ -3,6 +3,7 @@ import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { formatDate } from '../../client/format-date';
 import { theme } from '../../constants/theme';
 import type { ReceivedMailView } from '../../shared/received-mail-view';
+import { SkText } from '../ui/sk-text';
 import { MailHtmlFrame } from './mail-html-frame';
 
 type Part = 'html' | 'text';
@@ -18,19 +19,21 @@ export function MailView({ message }: { message: ReceivedMailView }) {
   return (
     <View style={styles.view} testID="mail-view">
       <View style={styles.envelope}>
-        <Text style={styles.subject}>{message.subject || '(no subject)'}</Text>
-        <Text style={styles.line}>
+        <SkText variant="heading" style={styles.subject}>
+          {message.subject || '(no subject)'}
+        </SkText>
+        <SkText variant="mono">
           <Text style={styles.key}>From </Text>
           {message.from}
-        </Text>
-        <Text style={styles.line}>
+        </SkText>
+        <SkText variant="mono">
           <Text style={styles.key}>To </Text>
           {message.to.join(', ')}
-        </Text>
-        <Text style={styles.line}>
+        </SkText>
+        <SkText variant="mono">
           <Text style={styles.key}>Received </Text>
           {formatDate(message.receivedAt)}
-        </Text>
+        </SkText>
       </View>
       <View style={styles.tabs} accessibilityRole="tablist" aria-label="Part of the message">
         {parts.map((p) => {
@@ -46,27 +49,27 @@ export function MailView({ message }: { message: ReceivedMailView }) {
               onPress={() => setPart(p.key)}
               style={[styles.tab, part === p.key && styles.tabOn, disabled && styles.tabDisabled]}
             >
-              <Text style={[styles.tabText, part === p.key && styles.tabTextOn]}>
+              <SkText variant="label" style={part === p.key && styles.tabTextOn}>
                 {part === p.key ? '✓ ' : ''}
                 {p.label}
                 {disabled ? ' (none)' : ''}
-              </Text>
+              </SkText>
             </Pressable>
           );
         })}
       </View>
       {part === 'html' && message.html ? (
         <>
-          <Text style={styles.note}>
+          <SkText variant="caption">
             Shown in a sandbox: scripts, forms and links in the message do nothing here, and remote images are not
             loaded.
-          </Text>
+          </SkText>
           <MailHtmlFrame html={message.html} title={`HTML part of “${message.subject}”`} />
         </>
       ) : (
-        <Text selectable style={styles.text} testID="mail-text">
+        <SkText variant="mono" selectable style={styles.text} testID="mail-text">
           {message.text || '(the plain-text part is empty)'}
-        </Text>
+        </SkText>
       )}
     </View>
   );
@@ -82,13 +85,7 @@ const styles = StyleSheet.create({
     padding: theme.space(4),
     gap: theme.space(1),
   },
-  subject: {
-    fontFamily: theme.font.bold,
-    fontSize: theme.size.large,
-    color: theme.color.ink,
-    marginBottom: theme.space(1),
-  },
-  line: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.ink },
+  subject: { marginBottom: theme.space(1) },
   key: { fontFamily: theme.font.medium, color: theme.color.inkFaint },
   tabs: { flexDirection: 'row', gap: theme.space(2), flexWrap: 'wrap' },
   tab: {
@@ -102,14 +99,9 @@ const styles = StyleSheet.create({
   },
   tabOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
   tabDisabled: { opacity: 0.6 },
-  tabText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
   tabTextOn: { color: theme.color.accentInk },
-  note: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
   text: {
-    fontFamily: theme.font.mono,
-    fontSize: theme.size.small,
     lineHeight: 20,
-    color: theme.color.ink,
     backgroundColor: theme.color.panel,
     borderWidth: 1,
     borderColor: theme.color.rule,

@@ -5,6 +5,7 @@ import { theme } from '../../constants/theme';
 import type { OverviewView, WaitingSuite } from '../../shared/overview-view';
 import type { Role } from '../../shared/roles';
 import { formatWhen } from '../runs/format-when';
+import { SkText } from '../ui/sk-text';
 
 type NeedsMe = OverviewView['needsMe'];
 
@@ -13,7 +14,9 @@ function Row({ href, label, children }: { href: string; label: string; children:
     <Link href={href} asChild>
       <Pressable accessibilityRole="link" accessibilityLabel={label} style={StyleSheet.flatten(styles.row)}>
         <View style={styles.rowBody}>{children}</View>
-        <Text style={styles.chevron}>→</Text>
+        <SkText variant="body" tone="inkFaint">
+          →
+        </SkText>
       </Pressable>
     </Link>
   );
@@ -32,10 +35,16 @@ function Group({
 }) {
   return (
     <View style={styles.group}>
-      <Text accessibilityRole="header" style={styles.groupTitle}>
+      <SkText variant="smallLabel" tone="inkFaint" accessibilityRole="header" style={styles.groupTitle}>
         {title} <Text style={styles.count}>({count})</Text>
-      </Text>
-      {count === 0 ? <Text style={styles.empty}>✓ {empty}</Text> : children}
+      </SkText>
+      {count === 0 ? (
+        <SkText variant="caption" style={styles.empty}>
+          ✓ {empty}
+        </SkText>
+      ) : (
+        children
+      )}
     </View>
   );
 }
@@ -51,9 +60,9 @@ export function NeedsMePanel({ needsMe, role, now }: { needsMe: NeedsMe; role: R
   const total = (needsMe.reviewQueue?.length ?? 0) + needsMe.changesRequested.length + needsMe.regressions.length;
   return (
     <View style={styles.panel} testID="needs-me">
-      <Text accessibilityRole="header" style={styles.title}>
+      <SkText variant="heading" accessibilityRole="header">
         {total > 0 ? `◊ Waiting for you: ${total}` : '✓ Nothing is waiting for you'}
-      </Text>
+      </SkText>
       {needsMe.reviewQueue ? (
         <Group title="Suites to review" count={needsMe.reviewQueue.length} empty="No suite is waiting for review.">
           {needsMe.reviewQueue.map((s) => (
@@ -62,10 +71,10 @@ export function NeedsMePanel({ needsMe, role, now }: { needsMe: NeedsMe; role: R
               href={`/review/${encodeURIComponent(s.slug)}`}
               label={`Review ${s.slug} version ${s.version}`}
             >
-              <Text style={styles.main}>{suiteLine(s)}</Text>
-              <Text style={styles.sub}>
+              <SkText variant="label">{suiteLine(s)}</SkText>
+              <SkText variant="caption">
                 by {s.authorName}, submitted {formatWhen(s.since, now)}
-              </Text>
+              </SkText>
             </Row>
           ))}
         </Group>
@@ -82,11 +91,15 @@ export function NeedsMePanel({ needsMe, role, now }: { needsMe: NeedsMe; role: R
               href={`/suites/${encodeURIComponent(s.slug)}`}
               label={`Open ${s.slug}, changes requested`}
             >
-              <Text style={styles.main}>↺ {suiteLine(s)}</Text>
-              <Text style={styles.sub}>
+              <SkText variant="label">↺ {suiteLine(s)}</SkText>
+              <SkText variant="caption">
                 changes requested by {s.reviewerName ?? 'a reviewer'}, {formatWhen(s.since, now)}
-              </Text>
-              {s.reviewComment ? <Text style={styles.quote}>“{s.reviewComment}”</Text> : null}
+              </SkText>
+              {s.reviewComment ? (
+                <SkText variant="caption" tone="ink" style={styles.quote}>
+                  “{s.reviewComment}”
+                </SkText>
+              ) : null}
             </Row>
           ))}
         </Group>
@@ -106,12 +119,12 @@ export function NeedsMePanel({ needsMe, role, now }: { needsMe: NeedsMe; role: R
             href={`/failures?${new URLSearchParams({ run: r.runId, status: 'new' }).toString()}`}
             label={`${r.count} regressions on ${r.targetKey} in ${r.planName}`}
           >
-            <Text style={[styles.main, styles.danger]}>
+            <SkText variant="label" style={styles.danger}>
               ❌ {r.count} regression{r.count === 1 ? '' : 's'} on {r.targetKey}
-            </Text>
-            <Text style={styles.sub}>
+            </SkText>
+            <SkText variant="caption">
               {r.planName}, finished {formatWhen(r.finishedAt, now)}
-            </Text>
+            </SkText>
           </Row>
         ))}
       </Group>
@@ -128,22 +141,10 @@ const styles = StyleSheet.create({
     padding: theme.space(4),
     gap: theme.space(4),
   },
-  title: { fontFamily: theme.font.bold, fontSize: theme.size.large, color: theme.color.ink },
   group: { gap: theme.space(1) },
-  groupTitle: {
-    fontFamily: theme.font.medium,
-    fontSize: theme.size.small,
-    color: theme.color.inkFaint,
-    textTransform: 'uppercase',
-    letterSpacing: 0.8,
-  },
+  groupTitle: { textTransform: 'uppercase', letterSpacing: 0.8 },
   count: { fontFamily: theme.font.mono },
-  empty: {
-    fontFamily: theme.font.regular,
-    fontSize: theme.size.small,
-    color: theme.color.inkSoft,
-    paddingVertical: theme.space(1),
-  },
+  empty: { paddingVertical: theme.space(1) },
   row: {
     minHeight: 56,
     flexDirection: 'row',
@@ -154,9 +155,6 @@ const styles = StyleSheet.create({
     borderBottomColor: theme.color.rule,
   },
   rowBody: { flex: 1, gap: 2 },
-  chevron: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.inkFaint },
-  main: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
-  sub: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
-  quote: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink, fontStyle: 'italic' },
+  quote: { fontStyle: 'italic' },
   danger: { color: theme.color.danger },
 });

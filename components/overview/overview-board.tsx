@@ -1,7 +1,8 @@
-import { StyleSheet, Text, useWindowDimensions, View } from 'react-native';
+import { StyleSheet, useWindowDimensions, View } from 'react-native';
 import { useOverview } from '../../client/use-overview';
 import { theme } from '../../constants/theme';
 import type { PublicUser } from '../../shared/public-user';
+import { SkText } from '../ui/sk-text';
 import { NeedsMePanel } from './needs-me-panel';
 import { PlanLatestCard } from './plan-latest-card';
 import { QueryState } from '../ui/query-state';
@@ -18,18 +19,18 @@ export function OverviewBoard({ user }: { user: PublicUser }) {
 
   const who = (
     <View style={styles.who}>
-      <Text style={styles.email} testID="home-email">
+      <SkText variant="monoBody" tone="inkSoft" testID="home-email">
         {user.email}
-      </Text>
+      </SkText>
       <RoleBadge role={user.role} />
     </View>
   );
   const note = (
     <View style={styles.note}>
-      <Text style={styles.noteText}>
+      <SkText variant="caption" style={styles.noteText}>
         A green result in Sheetkeeper is evidence for the points, paths and conventions that a suite checked — not a
         certificate that a library is correct everywhere.
-      </Text>
+      </SkText>
     </View>
   );
 
@@ -51,11 +52,14 @@ export function OverviewBoard({ user }: { user: PublicUser }) {
   const needs = <NeedsMePanel needsMe={needsMe} role={user.role} />;
   const running = (
     <View style={styles.section}>
-      <Text accessibilityRole="header" style={styles.heading}>
-        ↻ In progress <Text style={styles.count}>({inProgress.length})</Text>
-      </Text>
+      <SkText variant="heading" accessibilityRole="header">
+        ↻ In progress{' '}
+        <SkText variant="monoBody" tone="inkSoft">
+          ({inProgress.length})
+        </SkText>
+      </SkText>
       {inProgress.length === 0 ? (
-        <Text style={styles.quiet}>No run is queued or running.</Text>
+        <SkText variant="caption">No run is queued or running.</SkText>
       ) : (
         <View style={styles.cards}>
           {inProgress.map((run) => (
@@ -67,9 +71,9 @@ export function OverviewBoard({ user }: { user: PublicUser }) {
   );
   const latest = (
     <View style={styles.section}>
-      <Text accessibilityRole="header" style={styles.heading}>
+      <SkText variant="heading" accessibilityRole="header">
         Latest run of each plan
-      </Text>
+      </SkText>
       {plans.length === 0 ? (
         <QueryState state="empty" message="No plans yet. A maintainer makes one under Plans." />
       ) : (
@@ -113,16 +117,12 @@ export function OverviewBoard({ user }: { user: PublicUser }) {
 const styles = StyleSheet.create({
   column: { gap: theme.space(5) },
   who: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: theme.space(3) },
-  email: { fontFamily: theme.font.mono, fontSize: theme.size.body, color: theme.color.inkSoft },
   twoColumns: { flexDirection: 'row', alignItems: 'flex-start', gap: theme.space(6) },
   main: { flex: 3, gap: theme.space(6) },
   side: { flex: 2, gap: theme.space(4) },
   section: { gap: theme.space(3) },
-  heading: { fontFamily: theme.font.bold, fontSize: theme.size.large, color: theme.color.ink },
-  count: { fontFamily: theme.font.mono, fontSize: theme.size.body, color: theme.color.inkSoft },
-  quiet: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
   cards: { gap: theme.space(3) },
   cardsWide: { flexDirection: 'row', flexWrap: 'wrap' },
   note: { borderLeftWidth: 3, borderLeftColor: theme.color.focus, paddingLeft: theme.space(3) },
-  noteText: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
+  noteText: { lineHeight: 20 },
 });

@@ -1,5 +1,5 @@
 import { Link } from 'expo-router';
-import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { Pressable, StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { OverviewView } from '../../shared/overview-view';
 import type { OutcomeCounts as Counts } from '../../shared/run-result';
@@ -7,6 +7,7 @@ import { formatWhen } from '../runs/format-when';
 import { OutcomeCounts } from '../runs/outcome-counts';
 import { runDuration } from '../runs/run-duration';
 import { RunStatusBadge } from '../runs/run-status-badge';
+import { SkText } from '../ui/sk-text';
 
 /** How failures and errors moved since the previous completed run, in words with arrows. */
 function change(latest: Counts, previous: Counts): string {
@@ -37,15 +38,15 @@ export function PlanLatestCard({
   const run = plan.latest;
   return (
     <View style={[styles.card, inRow && styles.inRow]} testID={`plan-${plan.planName}`}>
-      <Text style={styles.plan}>{plan.planName}</Text>
+      <SkText variant="strong">{plan.planName}</SkText>
       {run ? (
         <>
           <RunStatusBadge run={run} />
-          <Text style={styles.meta}>
+          <SkText variant="caption" style={styles.meta}>
             Finished {formatWhen(run.finishedAt ?? run.createdAt, now)} · took {runDuration(run, now)}
-          </Text>
+          </SkText>
           <OutcomeCounts counts={run.counts} compact />
-          <Text style={[styles.regressions, run.regressions ? styles.danger : null]}>
+          <SkText variant="smallLabel" style={[styles.regressions, run.regressions ? styles.danger : null]}>
             {run.regressions === null
               ? 'Regressions not compared (the run did not complete).'
               : run.regressions === 0
@@ -53,8 +54,12 @@ export function PlanLatestCard({
                   ? '✓ No regressions since the previous completed run.'
                   : 'No earlier completed run to compare with.'
                 : `❌ ${run.regressions} regression${run.regressions === 1 ? '' : 's'}: passed in the previous completed run, fail now.`}
-          </Text>
-          {plan.previous ? <Text style={styles.meta}>{change(run.counts, plan.previous.counts)}</Text> : null}
+          </SkText>
+          {plan.previous ? (
+            <SkText variant="caption" style={styles.meta}>
+              {change(run.counts, plan.previous.counts)}
+            </SkText>
+          ) : null}
           <View style={styles.links}>
             <Link href={`/runs/${run.id}`} asChild>
               <Pressable
@@ -62,7 +67,9 @@ export function PlanLatestCard({
                 accessibilityLabel={`Open the latest run of ${plan.planName}`}
                 style={StyleSheet.flatten(styles.link)}
               >
-                <Text style={styles.linkText}>Open run →</Text>
+                <SkText variant="label" tone="accent">
+                  Open run →
+                </SkText>
               </Pressable>
             </Link>
             <Link href={`/runs?plan=${plan.planId}`} asChild>
@@ -71,13 +78,17 @@ export function PlanLatestCard({
                 accessibilityLabel={`Every run of ${plan.planName}`}
                 style={StyleSheet.flatten(styles.link)}
               >
-                <Text style={styles.linkText}>All runs of this plan</Text>
+                <SkText variant="label" tone="accent">
+                  All runs of this plan
+                </SkText>
               </Pressable>
             </Link>
           </View>
         </>
       ) : (
-        <Text style={styles.meta}>− Not run yet: nothing checked for this plan.</Text>
+        <SkText variant="caption" style={styles.meta}>
+          − Not run yet: nothing checked for this plan.
+        </SkText>
       )}
     </View>
   );
@@ -94,16 +105,9 @@ const styles = StyleSheet.create({
   },
   // Only beside other cards: in a column a basis would set the height.
   inRow: { flexGrow: 1, flexBasis: 320 },
-  plan: { fontFamily: theme.font.bold, fontSize: theme.size.body, color: theme.color.ink },
-  meta: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
-  regressions: {
-    fontFamily: theme.font.medium,
-    fontSize: theme.size.small,
-    color: theme.color.inkSoft,
-    lineHeight: 20,
-  },
+  meta: { lineHeight: 20 },
+  regressions: { lineHeight: 20 },
   danger: { color: theme.color.danger },
   links: { flexDirection: 'row', flexWrap: 'wrap', columnGap: theme.space(5) },
   link: { minHeight: 44, justifyContent: 'center' },
-  linkText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accent },
 });

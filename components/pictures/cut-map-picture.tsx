@@ -1,7 +1,8 @@
 import { useState } from 'react';
-import { StyleSheet, Text, View, type LayoutChangeEvent } from 'react-native';
+import { StyleSheet, View, type LayoutChangeEvent } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { CutMap } from '../../shared/cut-map';
+import { SkText } from '../ui/sk-text';
 import { PlanePicture, type PlanePoint } from './plane-picture';
 import { wireNumber } from '../libraries/wire-number';
 
@@ -32,11 +33,16 @@ export function CutMapPicture({ cutMap }: { cutMap: CutMap }) {
 
   return (
     <View style={styles.wrap}>
-      <Text style={[styles.verdict, cutMap.verdict === 'differs' && styles.differs]} testID="cut-map-verdict">
+      <SkText
+        variant="label"
+        tone="accent"
+        style={[styles.verdict, cutMap.verdict === 'differs' && styles.differs]}
+        testID="cut-map-verdict"
+      >
         {cutMap.verdict === 'matches'
           ? `✓ Matches: every discontinuity found lies on an expected cut, and every expected cut was seen.`
           : `× Differs: ${[unexpected.length ? `${unexpected.length} stretch(es) of discontinuity off the expected cuts` : null, unseen.length ? `${unseen.length} expected cut(s) not seen` : null].filter(Boolean).join('; ')}.`}
-      </Text>
+      </SkText>
       <View style={styles.frame} onLayout={(e: LayoutChangeEvent) => setWidth(Math.round(e.nativeEvent.layout.width))}>
         {width > 0 ? (
           <PlanePicture
@@ -54,32 +60,42 @@ export function CutMapPicture({ cutMap }: { cutMap: CutMap }) {
         ) : null}
       </View>
       <View style={styles.list}>
-        <Text style={styles.head}>Expected cuts in this box</Text>
+        <SkText variant="smallLabel" tone="inkFaint" style={styles.head}>
+          Expected cuts in this box
+        </SkText>
         {cutMap.expected.length === 0 ? (
-          <Text style={styles.line}>None: the reference has no cut of {cutMap.function} inside this box.</Text>
+          <SkText variant="caption" tone="ink" style={styles.line}>
+            None: the reference has no cut of {cutMap.function} inside this box.
+          </SkText>
         ) : null}
         {cutMap.expected.map((e) => (
-          <Text key={`${e.label} ${e.from.re} ${e.from.im}`} style={styles.line}>
+          <SkText variant="caption" tone="ink" key={`${e.label} ${e.from.re} ${e.from.im}`} style={styles.line}>
             {e.seen ? '✓' : '×'} {e.label} from {wireNumber(e.from)} to {wireNumber(e.to)}:{' '}
             {e.coverage === null
               ? 'crosses no grid line inside the box, so it could not be seen or missed'
               : `a jump on ${percent(e.coverage)} of the grid lines crossing it — ${e.seen ? 'seen' : 'not seen'}`}
-          </Text>
+          </SkText>
         ))}
-        {unexpected.length ? <Text style={styles.head}>Discontinuities off the expected cuts</Text> : null}
+        {unexpected.length ? (
+          <SkText variant="smallLabel" tone="inkFaint" style={styles.head}>
+            Discontinuities off the expected cuts
+          </SkText>
+        ) : null}
         {unexpected.map((o, i) => (
-          <Text key={i} style={styles.line}>
+          <SkText variant="caption" tone="ink" key={i} style={styles.line}>
             × {o.points.length} crossing(s) from {wireNumber(o.points[0])} to{' '}
             {wireNumber(o.points[o.points.length - 1])}
-          </Text>
+          </SkText>
         ))}
         {cutMap.notFinite > 0 ? (
-          <Text style={styles.line}>
+          <SkText variant="caption" tone="ink" style={styles.line}>
             {cutMap.notFinite} grid point(s) gave no finite value and took part in no comparison.
-          </Text>
+          </SkText>
         ) : null}
       </View>
-      <Text style={styles.statement}>{cutMap.statement}</Text>
+      <SkText variant="caption" style={styles.statement}>
+        {cutMap.statement}
+      </SkText>
     </View>
   );
 }
@@ -87,25 +103,10 @@ export function CutMapPicture({ cutMap }: { cutMap: CutMap }) {
 const styles = StyleSheet.create({
   wrap: { gap: theme.space(3) },
   frame: { width: '100%', maxWidth: 600 },
-  verdict: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accent, lineHeight: 24 },
+  verdict: { lineHeight: 24 },
   differs: { color: theme.color.danger },
   list: { gap: theme.space(1) },
-  head: {
-    fontFamily: theme.font.medium,
-    fontSize: theme.size.small,
-    color: theme.color.inkFaint,
-    textTransform: 'uppercase',
-    letterSpacing: 0.8,
-    marginTop: theme.space(2),
-  },
-  line: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink, lineHeight: 20 },
-  statement: {
-    fontFamily: theme.font.regular,
-    fontSize: theme.size.small,
-    color: theme.color.inkSoft,
-    lineHeight: 20,
-    borderLeftWidth: 3,
-    borderLeftColor: theme.color.focus,
-    paddingLeft: theme.space(3),
-  },
+  head: { textTransform: 'uppercase', letterSpacing: 0.8, marginTop: theme.space(2) },
+  line: { lineHeight: 20 },
+  statement: { lineHeight: 20, borderLeftWidth: 3, borderLeftColor: theme.color.focus, paddingLeft: theme.space(3) },
 });

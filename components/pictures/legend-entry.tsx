@@ -1,7 +1,8 @@
 import type { ReactNode } from 'react';
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import Svg from 'react-native-svg';
 import { theme } from '../../constants/theme';
+import { SkText } from '../ui/sk-text';
 
 /** A legend entry whose swatch (the SVG children) is drawn with the same shape as in the picture, so the legend never relies on colour alone. */
 export function LegendEntry({ text, children }: { text: string; children: ReactNode }) {
@@ -10,12 +11,11 @@ export function LegendEntry({ text, children }: { text: string; children: ReactN
       <Svg width={18} height={16}>
         {children}
       </Svg>
-      <Text style={styles.text}>{text}</Text>
+      <SkText variant="caption">{text}</SkText>
     </View>
   );
 }
 
 const styles = StyleSheet.create({
   item: { flexDirection: 'row', alignItems: 'center', gap: theme.space(1) },
-  text: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
 });

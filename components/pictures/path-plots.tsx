@@ -1,10 +1,11 @@
 import { useState, type ReactNode } from 'react';
-import { StyleSheet, Text, View, type LayoutChangeEvent } from 'react-native';
+import { StyleSheet, View, type LayoutChangeEvent } from 'react-native';
 import Svg, { Circle, G, Line, Path, Polyline, Rect, Text as SvgText } from 'react-native-svg';
 import { theme } from '../../constants/theme';
 import type { FailurePathPoint, FailurePathView } from '../../shared/failure-path-view';
 import { DIAGNOSIS_STYLES } from '../failures/diagnosis-styles';
 import { formatUlps } from '../../shared/format-ulps';
+import { SkText } from '../ui/sk-text';
 import { LegendEntry } from './legend-entry';
 
 /** Two neighbouring points whose arguments differ by more than this (radians) are a jump, not a slope: a 65-point circle turns ~0.1 rad a step. */
@@ -203,7 +204,9 @@ export function PathPlots({ view }: { view: FailurePathView }) {
   return (
     <View style={styles.root} onLayout={onLayout}>
       <View style={styles.plot}>
-        <Text style={styles.title}>Error in ulps at each point</Text>
+        <SkText variant="smallLabel" tone="ink" style={styles.title}>
+          Error in ulps at each point
+        </SkText>
         <View
           accessible
           accessibilityRole="image"
@@ -283,7 +286,9 @@ export function PathPlots({ view }: { view: FailurePathView }) {
       </View>
 
       <View style={styles.plot}>
-        <Text style={styles.title}>Argument of the value along the path</Text>
+        <SkText variant="smallLabel" tone="ink" style={styles.title}>
+          Argument of the value along the path
+        </SkText>
         <View
           accessible
           accessibilityRole="image"
@@ -390,16 +395,16 @@ export function PathPlots({ view }: { view: FailurePathView }) {
             {continuous ? null : <Cross cx={9} cy={8} color={LIBRARY_COLOR} />}
           </LegendEntry>
         </View>
-        <Text style={styles.words} testID="jump-words">
+        <SkText variant="caption" tone="ink" style={styles.words} testID="jump-words">
           {argWords}
-        </Text>
+        </SkText>
         {view.jumps ? (
-          <Text style={styles.words}>
+          <SkText variant="caption" tone="ink" style={styles.words}>
             The run&apos;s own jump check: reference at{' '}
             {view.jumps.expected.length ? view.jumps.expected.map((t) => `t ≈ ${round(t)}`).join(', ') : 'no t'};
             library at{' '}
             {view.jumps.library.length ? view.jumps.library.map((t) => `t ≈ ${round(t)}`).join(', ') : 'no t'}.
-          </Text>
+          </SkText>
         ) : null}
       </View>
     </View>
@@ -425,13 +430,7 @@ const styles = StyleSheet.create({
     overflow: 'hidden',
     backgroundColor: theme.color.panel,
   },
-  title: {
-    fontFamily: theme.font.medium,
-    fontSize: theme.size.small,
-    color: theme.color.ink,
-    paddingHorizontal: theme.space(3),
-    paddingTop: theme.space(3),
-  },
+  title: { paddingHorizontal: theme.space(3), paddingTop: theme.space(3) },
   legend: {
     flexDirection: 'row',
     flexWrap: 'wrap',
@@ -441,12 +440,5 @@ const styles = StyleSheet.create({
     borderTopWidth: 1,
     borderTopColor: theme.color.rule,
   },
-  words: {
-    fontFamily: theme.font.regular,
-    fontSize: theme.size.small,
-    color: theme.color.ink,
-    paddingHorizontal: theme.space(3),
-    paddingBottom: theme.space(3),
-    lineHeight: 19,
-  },
+  words: { paddingHorizontal: theme.space(3), paddingBottom: theme.space(3), lineHeight: 19 },
 });

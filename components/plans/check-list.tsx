@@ -3,6 +3,7 @@ import { Pressable, StyleSheet, Text, TextInput, useWindowDimensions, View } fro
 import { theme } from '../../constants/theme';
 import { INPUT_BOX_STYLE } from '../ui/input-box-style';
 import { RuleLines } from '../ui/rule-lines';
+import { SkText } from '../ui/sk-text';
 
 export interface CheckListItem {
   key: string;
@@ -40,10 +41,12 @@ export function CheckList({ label, items, selected, onChange, error, filterFrom 
   return (
     <View style={styles.field} testID={testID}>
       <View style={styles.head}>
-        <Text style={styles.label}>{label}</Text>
-        <Text style={styles.count}>
+        <SkText variant="smallLabel" style={styles.label}>
+          {label}
+        </SkText>
+        <SkText variant="caption" tone="inkFaint">
           {selected.length} of {items.filter((i) => !i.blocked).length} chosen
-        </Text>
+        </SkText>
       </View>
       {items.length > filterFrom ? (
         <View style={styles.tools}>
@@ -63,7 +66,9 @@ export function CheckList({ label, items, selected, onChange, error, filterFrom 
             onPress={() => onChange(Array.from(new Set([...selected, ...choosable])))}
             style={styles.tool}
           >
-            <Text style={styles.toolText}>All shown</Text>
+            <SkText variant="smallLabel" tone="ink">
+              All shown
+            </SkText>
           </Pressable>
           <Pressable
             accessibilityRole="button"
@@ -71,15 +76,17 @@ export function CheckList({ label, items, selected, onChange, error, filterFrom 
             onPress={() => onChange([])}
             style={styles.tool}
           >
-            <Text style={styles.toolText}>Clear</Text>
+            <SkText variant="smallLabel" tone="ink">
+              Clear
+            </SkText>
           </Pressable>
         </View>
       ) : null}
       <View style={[styles.list, error ? styles.listError : null]} accessibilityRole="list" aria-label={label}>
         {shown.length === 0 ? (
-          <Text style={styles.none}>
+          <SkText variant="caption" style={styles.none}>
             {items.length === 0 ? 'Nothing to choose from yet.' : 'Nothing matches the filter.'}
-          </Text>
+          </SkText>
         ) : null}
         {shown.map((item) => {
           const on = chosen.has(item.key);
@@ -97,9 +104,9 @@ export function CheckList({ label, items, selected, onChange, error, filterFrom 
             >
               <View style={[styles.box, on && styles.boxOn]}>{on ? <Text style={styles.tick}>✓</Text> : null}</View>
               <View style={styles.words}>
-                <Text style={styles.title} numberOfLines={2}>
+                <SkText variant="body" numberOfLines={2}>
                   {item.title}
-                </Text>
+                </SkText>
                 {item.detail ? (
                   <Text style={styles.detail} numberOfLines={1}>
                     {item.detail}
@@ -119,8 +126,7 @@ export function CheckList({ label, items, selected, onChange, error, filterFrom 
 const styles = StyleSheet.create({
   field: { gap: theme.space(2) },
   head: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'baseline', gap: theme.space(2) },
-  label: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft, letterSpacing: 0.3 },
-  count: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkFaint },
+  label: { letterSpacing: 0.3 },
   tools: { flexDirection: 'row', gap: theme.space(2), alignItems: 'center' },
   filter: {
     flex: 1,
@@ -135,7 +141,6 @@ const styles = StyleSheet.create({
     borderWidth: 1,
     borderColor: theme.color.rule,
   },
-  toolText: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.ink },
   list: {
     flexDirection: 'row',
     flexWrap: 'wrap',
@@ -147,12 +152,7 @@ const styles = StyleSheet.create({
     overflow: 'scroll',
   },
   listError: { borderColor: theme.color.danger, borderWidth: 2 },
-  none: {
-    padding: theme.space(3),
-    fontFamily: theme.font.regular,
-    fontSize: theme.size.small,
-    color: theme.color.inkSoft,
-  },
+  none: { padding: theme.space(3) },
   item: {
     width: '100%',
     minHeight: 48,
@@ -178,7 +178,6 @@ const styles = StyleSheet.create({
   boxOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
   tick: { fontFamily: theme.font.bold, fontSize: 14, lineHeight: 16, color: theme.color.accentInk },
   words: { flex: 1, minWidth: 0 },
-  title: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.ink },
   detail: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.inkSoft },
   blocked: { fontFamily: theme.font.regular, fontSize: 12, color: theme.color.danger },
 });

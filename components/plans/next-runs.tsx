@@ -1,6 +1,7 @@
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { formatTimeInZone } from '../../client/format-time-in-zone';
 import { theme } from '../../constants/theme';
+import { SkText } from '../ui/sk-text';
 
 /** The next times a schedule fires, read in its own time zone, with how far away each is. */
 export function NextRuns({
@@ -16,44 +17,43 @@ export function NextRuns({
 }) {
   return (
     <View style={styles.box} accessibilityLiveRegion="polite" testID={testID} aria-busy={working}>
-      <Text style={styles.head}>Next runs{working ? ' …' : ''}</Text>
+      <SkText variant="smallLabel" tone="inkFaint" style={styles.head}>
+        Next runs{working ? ' …' : ''}
+      </SkText>
       {nextRuns === null ? (
-        <Text style={styles.none}>
+        <SkText variant="caption">
           {working ? 'Working out the next times…' : '— no times until the expression is valid'}
-        </Text>
+        </SkText>
       ) : nextRuns.length === 0 ? (
-        <Text style={styles.none}>— none: this schedule does not run</Text>
+        <SkText variant="caption">— none: this schedule does not run</SkText>
       ) : (
         nextRuns.map((iso) => {
           const { when, distance } = formatTimeInZone(iso, timeZone);
           return (
             <View key={iso} style={styles.row}>
-              <Text style={styles.bullet}>•</Text>
-              <Text style={[styles.when, working && styles.stale]}>{when}</Text>
-              <Text style={styles.distance}>{distance}</Text>
+              <SkText variant="body" tone="accent">
+                •
+              </SkText>
+              <SkText variant="monoBody" style={working && styles.stale}>
+                {when}
+              </SkText>
+              <SkText variant="caption">{distance}</SkText>
             </View>
           );
         })
       )}
-      {nextRuns && nextRuns.length > 0 ? <Text style={styles.zone}>Times in {timeZone}</Text> : null}
+      {nextRuns && nextRuns.length > 0 ? (
+        <SkText variant="caption" tone="inkFaint">
+          Times in {timeZone}
+        </SkText>
+      ) : null}
     </View>
   );
 }
 
 const styles = StyleSheet.create({
   box: { gap: theme.space(1) },
-  head: {
-    fontFamily: theme.font.medium,
-    fontSize: theme.size.small,
-    color: theme.color.inkFaint,
-    textTransform: 'uppercase',
-    letterSpacing: 0.8,
-  },
+  head: { textTransform: 'uppercase', letterSpacing: 0.8 },
   row: { flexDirection: 'row', alignItems: 'baseline', gap: theme.space(2), flexWrap: 'wrap' },
-  bullet: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.accent },
-  when: { fontFamily: theme.font.mono, fontSize: theme.size.body, color: theme.color.ink },
   stale: { color: theme.color.inkFaint },
-  distance: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
-  none: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
-  zone: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkFaint },
 });

@@ -8,6 +8,7 @@ import { theme } from '../../constants/theme';
 import type { PlanView } from '../../shared/plan-view';
 import { ActionButton } from '../ui/action-button';
 import { ConfirmAction } from '../ui/confirm-action';
+import { SkText } from '../ui/sk-text';
 import { PlanForm } from './plan-form';
 import { PlanSchedules } from './plan-schedules';
 import { StartRunButton } from './start-run-button';
@@ -39,7 +40,7 @@ export function PlanDetail({ plan, canEdit }: { plan: PlanView; canEdit: boolean
         <View style={styles.items}>
           {plan.suites.map((s) => (
             <View key={s.slug} style={styles.item}>
-              <Text style={styles.itemTitle}>{s.title}</Text>
+              <SkText variant="label">{s.title}</SkText>
               <Text style={styles.itemDetail}>
                 {s.slug} ·{' '}
                 {s.approvedVersion === null
@@ -54,15 +55,17 @@ export function PlanDetail({ plan, canEdit }: { plan: PlanView; canEdit: boolean
         <View style={styles.items}>
           {plan.targets.map((t) => (
             <View key={t.name} style={styles.targetRow}>
-              <Text style={styles.target}>{t.name}</Text>
-              <Text style={[styles.installed, !t.installed && styles.missing]}>
+              <SkText variant="mono">{t.name}</SkText>
+              <SkText variant="caption" tone={t.installed ? 'accent' : 'danger'}>
                 {t.installed ? '✓ installed' : '− not installed'}
-              </Text>
+              </SkText>
             </View>
           ))}
         </View>
         {missing.length > 0 ? (
-          <Text style={styles.missing}>Runs skip targets that are not installed on this server.</Text>
+          <SkText variant="caption" tone="danger">
+            Runs skip targets that are not installed on this server.
+          </SkText>
         ) : null}
       </TitledPanel>
     </View>
@@ -81,14 +84,14 @@ export function PlanDetail({ plan, canEdit }: { plan: PlanView; canEdit: boolean
       <PlanSchedules planId={plan.id} canEdit={canEdit} />
       <TitledPanel title="Regression mail">
         {plan.recipients.length === 0 ? (
-          <Text style={styles.muted}>
+          <SkText variant="caption">
             No recipients named here; people subscribed to these libraries still hear about regressions.
-          </Text>
+          </SkText>
         ) : (
           plan.recipients.map((r) => (
-            <Text key={r} style={styles.recipient}>
+            <SkText variant="mono" key={r}>
               • {r}
-            </Text>
+            </SkText>
           ))
         )}
       </TitledPanel>
@@ -97,15 +100,19 @@ export function PlanDetail({ plan, canEdit }: { plan: PlanView; canEdit: boolean
 
   return (
     <View style={styles.detail} testID="plan-detail">
-      {plan.description ? <Text style={styles.description}>{plan.description}</Text> : null}
-      <Text style={styles.meta}>
+      {plan.description ? (
+        <SkText variant="body" tone="inkSoft" style={styles.description}>
+          {plan.description}
+        </SkText>
+      ) : null}
+      <SkText variant="caption" tone="inkFaint">
         By {plan.createdBy} · changed {formatDate(plan.updatedAt)} · id <Text style={styles.mono}>{plan.id}</Text>
-      </Text>
+      </SkText>
       <View style={styles.note}>
-        <Text style={styles.noteText}>
+        <SkText variant="caption" style={styles.noteText}>
           A run checks only the points, paths, conventions and properties written in these suites, on these targets. A
           clean run is evidence for those checks, not a certificate for the library.
-        </Text>
+        </SkText>
       </View>
       {/* On a phone, running and scheduling come first: the suite list can be long. Keyed, so turning
           the screen moves the panels without remounting them (a schedule being edited keeps its text). */}
@@ -128,9 +135,9 @@ export function PlanDetail({ plan, canEdit }: { plan: PlanView; canEdit: boolean
             onConfirm={() => remove.mutate(plan.id, { onSuccess: () => router.replace('/plans' as never) })}
           />
           {removeFailure ? (
-            <Text accessibilityRole="alert" style={styles.missing}>
+            <SkText variant="caption" tone="danger" accessibilityRole="alert">
               ❌ {removeFailure}
-            </Text>
+            </SkText>
           ) : null}
         </View>
       ) : null}
@@ -140,16 +147,10 @@ export function PlanDetail({ plan, canEdit }: { plan: PlanView; canEdit: boolean
 
 const styles = StyleSheet.create({
   detail: { gap: theme.space(4) },
-  description: {
-    fontFamily: theme.font.regular,
-    fontSize: theme.size.body,
-    color: theme.color.inkSoft,
-    lineHeight: 24,
-  },
-  meta: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkFaint },
+  description: { lineHeight: 24 },
   mono: { fontFamily: theme.font.mono },
   note: { borderLeftWidth: 3, borderLeftColor: theme.color.focus, paddingLeft: theme.space(3) },
-  noteText: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
+  noteText: { lineHeight: 20 },
   layout: { gap: theme.space(4) },
   layoutWide: { flexDirection: 'row', alignItems: 'flex-start' },
   main: { flex: 3 },
@@ -157,13 +158,7 @@ const styles = StyleSheet.create({
   column: { gap: theme.space(4) },
   items: { gap: theme.space(2) },
   item: { gap: 2 },
-  itemTitle: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
   itemDetail: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.inkSoft },
   targetRow: { flexDirection: 'row', justifyContent: 'space-between', gap: theme.space(2), flexWrap: 'wrap' },
-  target: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.ink },
-  installed: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.accent },
-  missing: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.danger },
-  muted: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
-  recipient: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.ink },
   manage: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2), alignItems: 'flex-start' },
 });

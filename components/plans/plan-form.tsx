@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { StyleSheet, Text, useWindowDimensions, View } from 'react-native';
+import { StyleSheet, useWindowDimensions, View } from 'react-native';
 import { ApiRequestError } from '../../client/api-request-error';
 import { serverFieldErrors } from '../../client/server-field-errors';
 import { usePlanChoices } from '../../client/use-plan-choices';
@@ -8,6 +8,7 @@ import { theme } from '../../constants/theme';
 import type { PlanView } from '../../shared/plan-view';
 import { planBody } from '../../shared/schemas/plan-body';
 import { FormActions } from '../ui/form-actions';
+import { SkText } from '../ui/sk-text';
 import { CheckList } from './check-list';
 import { QueryState } from '../ui/query-state';
 import { TextField } from '../ui/text-field';
@@ -156,10 +157,10 @@ export function PlanForm({
             multiline
             testID="plan-recipients"
           />
-          <Text style={styles.help}>
+          <SkText variant="caption" style={styles.help}>
             Who gets the regression mail of this plan, separated by commas. People can also subscribe to a library in
             their Settings.
-          </Text>
+          </SkText>
         </View>
         <View style={[styles.column, wide && styles.columnWide]}>
           <CheckList
@@ -173,10 +174,10 @@ export function PlanForm({
             error={errorOf('suites')}
             testID="plan-suites"
           />
-          <Text style={styles.help}>
+          <SkText variant="caption" style={styles.help}>
             Only suites with an approved version can join; a run uses each suite&apos;s newest approved version.
             {waiting > 0 ? ` ${waiting} ${waiting === 1 ? 'suite is' : 'suites are'} still waiting for review.` : ''}
-          </Text>
+          </SkText>
           <CheckList
             label="Targets"
             items={targetItems}
@@ -208,5 +209,5 @@ const styles = StyleSheet.create({
   column: { gap: theme.space(3) },
   columnNarrow: { flex: 2 },
   columnWide: { flex: 3 },
-  help: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
+  help: { lineHeight: 20 },
 });

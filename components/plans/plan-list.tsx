@@ -6,6 +6,7 @@ import { useSchedules } from '../../client/use-schedules';
 import { theme } from '../../constants/theme';
 import type { ScheduleView } from '../../shared/schedule-view';
 import { QueryState } from '../ui/query-state';
+import { SkText } from '../ui/sk-text';
 
 /** Every plan as a card (a grid on a wide screen): what it checks, who hears, and when it runs next. */
 export function PlanList() {
@@ -44,21 +45,21 @@ export function PlanList() {
               accessibilityLabel={`Plan ${plan.name}`}
               style={StyleSheet.flatten([styles.card, { width: columns === 1 ? '100%' : `${100 / columns - 2}%` }])}
             >
-              <Text style={styles.name}>{plan.name}</Text>
+              <SkText variant="heading">{plan.name}</SkText>
               {plan.description ? (
-                <Text style={styles.description} numberOfLines={3}>
+                <SkText variant="caption" style={styles.description} numberOfLines={3}>
                   {plan.description}
-                </Text>
+                </SkText>
               ) : null}
-              <Text style={styles.shape}>
+              <SkText variant="label" tone="accent">
                 {plan.suites.length} {plan.suites.length === 1 ? 'suite' : 'suites'} × {plan.targets.length}{' '}
                 {plan.targets.length === 1 ? 'target' : 'targets'}
-              </Text>
+              </SkText>
               <Text style={styles.targets} numberOfLines={2}>
                 {plan.targets.map((t) => (t.installed ? t.name : `${t.name} (not installed)`)).join(' · ')}
               </Text>
               <View style={styles.foot}>
-                <Text style={styles.when}>
+                <SkText variant="caption" tone="ink">
                   {schedules.isPending
                     ? 'Schedules loading…'
                     : when
@@ -66,10 +67,10 @@ export function PlanList() {
                       : own.length > 0
                         ? '− every schedule paused'
                         : '− no schedule'}
-                </Text>
-                <Text style={styles.recipients}>
+                </SkText>
+                <SkText variant="caption" tone="inkFaint">
                   {plan.recipients.length} {plan.recipients.length === 1 ? 'recipient' : 'recipients'}
-                </Text>
+                </SkText>
               </View>
             </Pressable>
           </Link>
@@ -90,16 +91,7 @@ const styles = StyleSheet.create({
     gap: theme.space(2),
     minHeight: 44,
   },
-  name: { fontFamily: theme.font.bold, fontSize: theme.size.large, color: theme.color.ink },
-  description: {
-    fontFamily: theme.font.regular,
-    fontSize: theme.size.small,
-    color: theme.color.inkSoft,
-    lineHeight: 20,
-  },
-  shape: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accent },
+  description: { lineHeight: 20 },
   targets: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.inkSoft },
   foot: { marginTop: 'auto', paddingTop: theme.space(2), borderTopWidth: 1, borderTopColor: theme.color.rule, gap: 2 },
-  when: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink },
-  recipients: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkFaint },
 });

@@ -1,9 +1,10 @@
 import { useState } from 'react';
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { useSchedules } from '../../client/use-schedules';
 import { theme } from '../../constants/theme';
 import { ActionButton } from '../ui/action-button';
 import { QueryState } from '../ui/query-state';
+import { SkText } from '../ui/sk-text';
 import { ScheduleCard } from './schedule-card';
 import { ScheduleEditor } from './schedule-editor';
 import { TitledPanel } from '../ui/titled-panel';
@@ -24,7 +25,9 @@ export function PlanSchedules({ planId, canEdit }: { planId: string; canEdit: bo
         <QueryState state="error" message={schedules.error.message} onRetry={() => void schedules.refetch()} />
       ) : null}
       {schedules.isSuccess && mine.length === 0 && !adding ? (
-        <Text style={styles.none}>No schedule: this plan runs only when started by hand or through the API.</Text>
+        <SkText variant="body" tone="inkSoft">
+          No schedule: this plan runs only when started by hand or through the API.
+        </SkText>
       ) : null}
       {mine.map((s) => (
         <ScheduleCard key={s.id} schedule={s} canEdit={canEdit} />
@@ -43,6 +46,5 @@ export function PlanSchedules({ planId, canEdit }: { planId: string; canEdit: bo
 }
 
 const styles = StyleSheet.create({
-  none: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.inkSoft },
   adding: { paddingTop: theme.space(3), borderTopWidth: 1, borderTopColor: theme.color.rule },
 });

@@ -7,6 +7,7 @@ import { theme } from '../../constants/theme';
 import type { ScheduleView } from '../../shared/schedule-view';
 import { ActionButton } from '../ui/action-button';
 import { ConfirmAction } from '../ui/confirm-action';
+import { SkText } from '../ui/sk-text';
 import { NextRuns } from './next-runs';
 import { OnOffSwitch } from '../ui/on-off-switch';
 import { ScheduleEditor } from './schedule-editor';
@@ -28,7 +29,7 @@ export function ScheduleCard({ schedule, canEdit }: { schedule: ScheduleView; ca
           <Text style={styles.cron} accessibilityLabel={`Cron expression ${schedule.cron}`}>
             {schedule.cron}
           </Text>
-          <Text style={styles.zone}>{schedule.timeZone}</Text>
+          <SkText variant="caption">{schedule.timeZone}</SkText>
         </View>
         {canEdit ? (
           <OnOffSwitch
@@ -39,20 +40,20 @@ export function ScheduleCard({ schedule, canEdit }: { schedule: ScheduleView; ca
             offWord="Paused"
           />
         ) : (
-          <Text style={[styles.state, schedule.enabled && styles.stateOn]}>
+          <SkText variant="smallLabel" style={schedule.enabled && styles.stateOn}>
             {schedule.enabled ? '✓ Runs' : '− Paused'}
-          </Text>
+          </SkText>
         )}
       </View>
       {schedule.enabled ? (
         <NextRuns nextRuns={schedule.nextRuns} timeZone={schedule.timeZone} />
       ) : (
-        <Text style={styles.paused}>Paused: this schedule starts no runs until it is turned on again.</Text>
+        <SkText variant="caption">Paused: this schedule starts no runs until it is turned on again.</SkText>
       )}
       {failure ? (
-        <Text accessibilityRole="alert" style={styles.failure}>
+        <SkText variant="caption" tone="danger" accessibilityRole="alert">
           ❌ {failure}
-        </Text>
+        </SkText>
       ) : null}
       {canEdit ? (
         <View style={styles.buttons}>
@@ -87,10 +88,6 @@ const styles = StyleSheet.create({
   },
   what: { gap: 2, flexShrink: 1 },
   cron: { fontFamily: theme.font.mono, fontSize: theme.size.large, color: theme.color.ink },
-  zone: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
-  state: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft },
   stateOn: { color: theme.color.accent },
-  paused: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
-  failure: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.danger },
   buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2), alignItems: 'flex-start' },
 });

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { Pressable, StyleSheet, View } from 'react-native';
 import { ApiRequestError } from '../../client/api-request-error';
 import { serverFieldErrors } from '../../client/server-field-errors';
 import { useSaveSchedule } from '../../client/use-save-schedule';
@@ -8,6 +8,7 @@ import { theme } from '../../constants/theme';
 import { cronPreviewBody } from '../../shared/schemas/schedule-body';
 import type { ScheduleView } from '../../shared/schedule-view';
 import { FormActions } from '../ui/form-actions';
+import { SkText } from '../ui/sk-text';
 import { NextRuns } from './next-runs';
 import { TextField } from '../ui/text-field';
 
@@ -85,10 +86,10 @@ export function ScheduleEditor({
         mono
         testID="schedule-cron"
       />
-      <Text style={styles.help}>
+      <SkText variant="caption" style={styles.help}>
         Five fields: minute, hour, day of month, month, day of week (0 or 7 is Sunday). A sixth field in front gives
         seconds.
-      </Text>
+      </SkText>
       <View style={styles.chips}>
         {STARTERS.map((s) => (
           <Pressable
@@ -98,10 +99,10 @@ export function ScheduleEditor({
             onPress={() => setCron(s.cron)}
             style={[styles.chip, cron.trim() === s.cron && styles.chipOn]}
           >
-            <Text style={[styles.chipText, cron.trim() === s.cron && styles.chipTextOn]}>
+            <SkText variant="caption" tone="ink" style={cron.trim() === s.cron && styles.chipTextOn}>
               {cron.trim() === s.cron ? '✓ ' : ''}
               {s.label}
-            </Text>
+            </SkText>
           </Pressable>
         ))}
       </View>
@@ -122,11 +123,11 @@ export function ScheduleEditor({
             onPress={() => setTimeZone(zone)}
             style={[styles.chip, timeZone === zone && styles.chipOn]}
           >
-            <Text style={[styles.chipText, timeZone === zone && styles.chipTextOn]}>
+            <SkText variant="caption" tone="ink" style={timeZone === zone && styles.chipTextOn}>
               {timeZone === zone ? '✓ ' : ''}
               {zone}
               {zone === deviceZone && zone !== 'UTC' ? ' (this device)' : ''}
-            </Text>
+            </SkText>
           </Pressable>
         ))}
       </View>
@@ -151,7 +152,7 @@ export function ScheduleEditor({
 
 const styles = StyleSheet.create({
   editor: { gap: theme.space(3) },
-  help: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
+  help: { lineHeight: 20 },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
   chip: {
     minHeight: 44,
@@ -163,7 +164,6 @@ const styles = StyleSheet.create({
     backgroundColor: theme.color.panel,
   },
   chipOn: { backgroundColor: theme.color.accentSoft, borderColor: theme.color.accent },
-  chipText: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink },
   chipTextOn: { fontFamily: theme.font.medium, color: theme.color.accent },
   preview: {
     padding: theme.space(3),

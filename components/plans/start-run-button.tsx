@@ -1,9 +1,10 @@
 import { useRouter } from 'expo-router';
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { ApiRequestError } from '../../client/api-request-error';
 import { useStartRun } from '../../client/use-start-run';
 import { theme } from '../../constants/theme';
 import { ActionButton } from '../ui/action-button';
+import { SkText } from '../ui/sk-text';
 
 /** "Run now" for a plan: queues a run and opens it; a refusal shows beside the button. */
 export function StartRunButton({
@@ -33,9 +34,9 @@ export function StartRunButton({
         onPress={() => start.mutate(planId, { onSuccess: (run) => router.push(`/runs/${run.id}` as never) })}
       />
       {failure ? (
-        <Text accessibilityRole="alert" style={styles.failure}>
+        <SkText variant="caption" tone="danger" accessibilityRole="alert">
           ❌ {failure}
-        </Text>
+        </SkText>
       ) : null}
     </View>
   );
@@ -43,5 +44,4 @@ export function StartRunButton({
 
 const styles = StyleSheet.create({
   box: { gap: theme.space(2) },
-  failure: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.danger },
 });

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { ApiRequestError } from '../../client/api-request-error';
 import { useReviewSuite } from '../../client/use-review-suite';
 import { theme } from '../../constants/theme';
@@ -7,6 +7,7 @@ import { reviewBody } from '../../shared/schemas/review-body';
 import { ActionButton } from '../ui/action-button';
 import { ChipGroup } from '../ui/chip-group';
 import { FormTextInput } from '../ui/form-text-input';
+import { SkText } from '../ui/sk-text';
 
 /** Approve a submitted version, or request changes saying what to change; the server's refusal (four eyes) is shown as it says it. */
 export function ReviewForm({
@@ -60,9 +61,9 @@ export function ReviewForm({
         multiline
       />
       {error && error.kind !== 'invalid-input' ? (
-        <Text accessibilityRole="alert" style={styles.refusal} testID="review-refusal">
+        <SkText variant="label" tone="danger" accessibilityRole="alert" style={styles.refusal} testID="review-refusal">
           × {error.message}
-        </Text>
+        </SkText>
       ) : null}
       <ActionButton
         label={decision === 'approve' ? `Approve version ${version}` : `Request changes to version ${version}`}
@@ -75,12 +76,5 @@ export function ReviewForm({
 
 const styles = StyleSheet.create({
   box: { gap: theme.space(3) },
-  refusal: {
-    fontFamily: theme.font.medium,
-    fontSize: theme.size.body,
-    color: theme.color.danger,
-    backgroundColor: theme.color.dangerSoft,
-    padding: theme.space(3),
-    borderRadius: theme.radius,
-  },
+  refusal: { backgroundColor: theme.color.dangerSoft, padding: theme.space(3), borderRadius: theme.radius },
 });

@@ -1,8 +1,9 @@
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { useSuites } from '../../client/use-suites';
 import { theme } from '../../constants/theme';
 import { QueryState } from '../ui/query-state';
 import { SuiteCard } from '../suites/suite-card';
+import { SkText } from '../ui/sk-text';
 
 /** Suites whose latest version waits for review, oldest activity last; each opens its diff and the review form. */
 export function ReviewQueue() {
@@ -13,10 +14,10 @@ export function ReviewQueue() {
   if (queue.data.length === 0) return <QueryState state="empty" message="Nothing waits for review." />;
   return (
     <View style={styles.box}>
-      <Text style={styles.count}>
+      <SkText variant="body" tone="inkSoft">
         {queue.data.length} {queue.data.length === 1 ? 'version waits' : 'versions wait'} for review. Open one to see
         what it changes.
-      </Text>
+      </SkText>
       <View style={styles.grid}>
         {queue.data.map((s) => (
           <SuiteCard key={s.slug} suite={s} href={`/review/${s.slug}`} />
@@ -28,6 +29,5 @@ export function ReviewQueue() {
 
 const styles = StyleSheet.create({
   box: { gap: theme.space(3) },
-  count: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.inkSoft },
   grid: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
 });

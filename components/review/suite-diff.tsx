@@ -1,6 +1,7 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { SuiteVersionView } from '../../shared/suite-version-view';
+import { SkText } from '../ui/sk-text';
 import { diffSuiteBodies } from './diff-suite-bodies';
 
 /**
@@ -10,28 +11,30 @@ import { diffSuiteBodies } from './diff-suite-bodies';
 export function SuiteDiff({ current, previous }: { current: SuiteVersionView; previous: SuiteVersionView | null }) {
   if (!previous) {
     return (
-      <Text style={styles.first} testID="suite-diff">
+      <SkText variant="body" tone="inkSoft" testID="suite-diff">
         Version {current.version} is the first version: there is nothing to compare it with, so every field below is
         new.
-      </Text>
+      </SkText>
     );
   }
   const changes = diffSuiteBodies(previous.body, current.body);
   const count = (k: string) => changes.filter((c) => c.change === k).length;
   return (
     <View style={styles.box} testID="suite-diff">
-      <Text style={styles.summary}>
+      <SkText variant="label">
         Against version {previous.version} ({previous.status.replace('-', ' ')}): {count('changed')} changed,{' '}
         {count('added')} added, {count('removed')} removed.
-      </Text>
+      </SkText>
       {changes.length === 0 ? (
-        <Text style={styles.first}>No field differs from version {previous.version}.</Text>
+        <SkText variant="body" tone="inkSoft">
+          No field differs from version {previous.version}.
+        </SkText>
       ) : null}
       {changes.map((c) => (
         <View key={`${c.change} ${c.field}`} style={styles.row} accessibilityLabel={`${c.field} ${c.change}`}>
-          <Text style={styles.field}>
+          <SkText variant="mono">
             {c.field} <Text style={styles.word}>· {c.change}</Text>
-          </Text>
+          </SkText>
           {c.before !== null ? (
             <Text style={[styles.value, styles.before]} accessibilityLabel={`was ${c.before}`}>
               − was {c.before}
@@ -50,10 +53,7 @@ export function SuiteDiff({ current, previous }: { current: SuiteVersionView; pr
 
 const styles = StyleSheet.create({
   box: { gap: theme.space(2) },
-  summary: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
-  first: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.inkSoft },
   row: { gap: 2, borderLeftWidth: 3, borderLeftColor: theme.color.focus, paddingLeft: theme.space(2) },
-  field: { fontFamily: theme.font.mono, fontSize: 13, color: theme.color.ink },
   word: { fontFamily: theme.font.regular, color: theme.color.inkFaint },
   value: { fontFamily: theme.font.mono, fontSize: 13, paddingHorizontal: theme.space(1), borderRadius: 3 },
   before: { backgroundColor: theme.color.dangerSoft, color: theme.color.ink, textDecorationLine: 'line-through' },

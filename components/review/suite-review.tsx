@@ -1,8 +1,9 @@
 import { router } from 'expo-router';
-import { StyleSheet, Text, useWindowDimensions, View } from 'react-native';
+import { StyleSheet, useWindowDimensions, View } from 'react-native';
 import { useMe } from '../../client/use-me';
 import { useSuite } from '../../client/use-suite';
 import { theme } from '../../constants/theme';
+import { SkText } from '../ui/sk-text';
 import { TitledPanel } from '../ui/titled-panel';
 import { QueryState } from '../ui/query-state';
 import { ReviewForm } from './review-form';
@@ -30,9 +31,9 @@ export function SuiteReview({ slug }: { slug: string }) {
   const decision = (
     <TitledPanel title="Decision">
       {own ? (
-        <Text style={styles.own}>
+        <SkText variant="caption" tone="ink" style={styles.own}>
           ◊ You wrote this version. Four eyes: another reviewer must review it, and the server will refuse your review.
-        </Text>
+        </SkText>
       ) : null}
       <ReviewForm slug={slug} version={current.version} onReviewed={() => router.replace('/review')} />
     </TitledPanel>
@@ -61,9 +62,9 @@ export function SuiteReview({ slug }: { slug: string }) {
     <View style={styles.column}>
       <View style={styles.head}>
         <SuiteStatusLabel status={current.status} version={current.version} />
-        <Text style={styles.meta}>
+        <SkText variant="caption">
           {slug} · written by {current.author.displayName}
-        </Text>
+        </SkText>
       </View>
       {wide ? (
         <View style={styles.wide}>
@@ -95,13 +96,5 @@ const styles = StyleSheet.create({
   mainCol: { flex: 3, minWidth: 0, gap: theme.space(4) },
   sideCol: { flex: 2, minWidth: 0, gap: theme.space(4) },
   head: { flexDirection: 'row', alignItems: 'center', gap: theme.space(3), flexWrap: 'wrap' },
-  meta: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
-  own: {
-    fontFamily: theme.font.regular,
-    fontSize: theme.size.small,
-    color: theme.color.ink,
-    backgroundColor: '#F5E7C8',
-    padding: theme.space(2),
-    borderRadius: theme.radius,
-  },
+  own: { backgroundColor: '#F5E7C8', padding: theme.space(2), borderRadius: theme.radius },
 });

@@ -4,6 +4,7 @@ import { ApiRequestError } from '../../client/api-request-error';
 import { useCancelRun } from '../../client/use-cancel-run';
 import { theme } from '../../constants/theme';
 import { ActionButton } from '../ui/action-button';
+import { SkText } from '../ui/sk-text';
 
 /**
  * Cancelling a run, in two steps: the button asks, and says what cancelling does, before
@@ -18,10 +19,10 @@ export function CancelRunButton({ runId }: { runId: string }) {
     <View style={styles.box}>
       {asking ? (
         <View style={styles.confirm} accessibilityRole="alert">
-          <Text style={styles.question}>Cancel this run?</Text>
-          <Text style={styles.explain}>
+          <SkText variant="strong">Cancel this run?</SkText>
+          <SkText variant="caption" tone="ink" style={styles.explain}>
             Shards not started are skipped; a shard in progress stops at its next path. Results stored so far stay.
-          </Text>
+          </SkText>
           <View style={styles.buttons}>
             <ActionButton
               label="Yes, cancel the run"
@@ -54,8 +55,7 @@ const styles = StyleSheet.create({
     borderColor: theme.color.danger,
     backgroundColor: theme.color.dangerSoft,
   },
-  question: { fontFamily: theme.font.bold, fontSize: theme.size.body, color: theme.color.ink },
-  explain: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink, lineHeight: 20 },
+  explain: { lineHeight: 20 },
   buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
   failure: { fontFamily: theme.font.medium, color: theme.color.danger },
 });

@@ -1,6 +1,7 @@
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { CheckedScope } from '../../shared/run-result';
+import { SkText } from '../ui/sk-text';
 
 const CONVENTION_WORDS: Record<string, string> = {
   'signed-zero': 'signed zero (IEC 60559 / ISO C Annex G)',
@@ -71,29 +72,33 @@ export function CheckedScopeNote({
 
   return (
     <View style={styles.box} testID="checked-scope-note">
-      <Text style={styles.title}>What this {subject} shows, and what it does not</Text>
+      <SkText variant="strong">What this {subject} shows, and what it does not</SkText>
       <View style={styles.columns}>
         <View style={styles.column}>
-          <Text style={styles.head}>✓ Checked</Text>
+          <SkText variant="smallLabel" tone="inkFaint" style={styles.head}>
+            ✓ Checked
+          </SkText>
           {checked.map((line) => (
-            <Text key={line} style={styles.line}>
+            <SkText variant="caption" key={line} style={styles.line}>
               • {line}
-            </Text>
+            </SkText>
           ))}
         </View>
         <View style={styles.column}>
-          <Text style={styles.head}>× Not checked</Text>
+          <SkText variant="smallLabel" tone="inkFaint" style={styles.head}>
+            × Not checked
+          </SkText>
           {notChecked.map((line) => (
-            <Text key={line} style={styles.line}>
+            <SkText variant="caption" key={line} style={styles.line}>
               • {line}
-            </Text>
+            </SkText>
           ))}
         </View>
       </View>
-      <Text style={styles.verdict}>
+      <SkText variant="smallLabel" tone="ink" style={styles.verdict}>
         A green {subject} is evidence for these {plural(points, 'point')} under these conventions only — not a
         certificate that the library is right everywhere.
-      </Text>
+      </SkText>
     </View>
   );
 }
@@ -107,16 +112,9 @@ const styles = StyleSheet.create({
     padding: theme.space(4),
     gap: theme.space(3),
   },
-  title: { fontFamily: theme.font.bold, fontSize: theme.size.body, color: theme.color.ink },
   columns: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(4) },
   column: { flexGrow: 1, flexBasis: 300, gap: theme.space(1) },
-  head: {
-    fontFamily: theme.font.medium,
-    fontSize: theme.size.small,
-    color: theme.color.inkFaint,
-    textTransform: 'uppercase',
-    letterSpacing: 0.8,
-  },
-  line: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
-  verdict: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.ink, lineHeight: 20 },
+  head: { textTransform: 'uppercase', letterSpacing: 0.8 },
+  line: { lineHeight: 20 },
+  verdict: { lineHeight: 20 },
 });

@@ -1,6 +1,7 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { OutcomeCounts as Counts } from '../../shared/run-result';
+import { SkText } from '../ui/sk-text';
 import { OUTCOME_GLYPH } from './outcome-glyph';
 import { OUTCOME_TONE, type Tone } from './outcome-tone';
 
@@ -25,7 +26,12 @@ export function OutcomeCounts({
   compact?: boolean;
 }) {
   const shown = ORDER.filter((o) => all || counts[o.key] > 0);
-  if (shown.length === 0) return <Text style={styles.none}>no points counted yet</Text>;
+  if (shown.length === 0)
+    return (
+      <SkText variant="caption" tone="inkFaint">
+        no points counted yet
+      </SkText>
+    );
   return (
     <View style={styles.row} accessibilityLabel={shown.map((o) => `${counts[o.key]} ${o.word}`).join(', ')}>
       {shown.map((o) => (
@@ -48,5 +54,4 @@ const styles = StyleSheet.create({
   row: { flexDirection: 'row', flexWrap: 'wrap', columnGap: theme.space(3), rowGap: theme.space(1) },
   item: { fontFamily: theme.font.medium, fontSize: theme.size.body },
   compact: { fontSize: theme.size.small },
-  none: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkFaint },
 });

@@ -1,5 +1,6 @@
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
+import { SkText } from '../ui/sk-text';
 
 /**
  * A run's progress: a bar and the words "n of m shards" (the bar alone would say nothing to a
@@ -21,9 +22,9 @@ export function ProgressBar({ done, total, label = 'shards' }: { done: number; t
       >
         <View testID="progress-fill" style={[styles.fill, { width: `${fraction * 100}%` }]} />
       </View>
-      <Text style={styles.words}>
+      <SkText variant="mono" tone="inkSoft">
         {words} · {Math.floor(fraction * 100)}%
-      </Text>
+      </SkText>
     </View>
   );
 }
@@ -32,5 +33,4 @@ const styles = StyleSheet.create({
   box: { gap: theme.space(1) },
   track: { height: 10, borderRadius: 5, backgroundColor: theme.color.rule, overflow: 'hidden' },
   fill: { height: '100%', backgroundColor: theme.color.accent, borderRadius: 5 },
-  words: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.inkSoft },
 });

@@ -3,6 +3,7 @@ import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { PropertyOutcome } from '../../shared/property-outcome';
 import type { RunPropertyRow } from '../../shared/run-property-row';
+import { SkText } from '../ui/sk-text';
 import { OUTCOME_TONE } from './outcome-tone';
 
 const KIND = {
@@ -43,10 +44,10 @@ export function PropertyChecks({ rows }: { rows: RunPropertyRow[] }) {
 
   return (
     <View style={styles.list}>
-      <Text style={styles.summary} testID="property-summary">
+      <SkText variant="label" testID="property-summary">
         {plural(rows.length, 'check')} over {plural(groups.size, 'pair')}: {count('failed')} failed,{' '}
         {count('not-checked')} not checked, {count('held')} held.
-      </Text>
+      </SkText>
       {ordered.map(([pair, checks]) => {
         const allHeld = rank(checks) === 2;
         const open = !allHeld || opened.has(pair);
@@ -60,13 +61,13 @@ export function PropertyChecks({ rows }: { rows: RunPropertyRow[] }) {
                 onPress={() => toggle(pair)}
                 style={styles.foldRow}
               >
-                <Text style={styles.pair}>{pair}</Text>
+                <SkText variant="mono">{pair}</SkText>
                 <Text style={[styles.kind, { color: OUTCOME_TONE.pass.ink }]}>
                   {KIND.held.glyph} all {plural(checks.length, 'law')} held {open ? '↑' : '↓'}
                 </Text>
               </Pressable>
             ) : (
-              <Text style={styles.pair}>{pair}</Text>
+              <SkText variant="mono">{pair}</SkText>
             )}
             {open
               ? checks.map(({ outcome }) => <PropertyCheckCard key={outcome.law} pair={pair} outcome={outcome} />)
@@ -87,37 +88,47 @@ function PropertyCheckCard({ pair, outcome }: { pair: string; outcome: PropertyO
         <Text style={[styles.kind, { color: tone.ink }]}>
           {kind.glyph} {kind.word}
         </Text>
-        <Text style={styles.law}>{outcome.law}</Text>
-        <Text style={styles.seed}>seed {outcome.seed}</Text>
+        <SkText variant="mono">{outcome.law}</SkText>
+        <SkText variant="mono" tone="inkFaint">
+          seed {outcome.seed}
+        </SkText>
       </View>
-      <Text style={styles.title}>{outcome.title}</Text>
+      <SkText variant="body">{outcome.title}</SkText>
       {outcome.kind === 'held' ? (
-        <Text style={styles.detail}>
+        <SkText variant="caption" style={styles.detail}>
           {outcome.runs.toLocaleString('en-GB')} points drawn
           {outcome.excluded ? `, ${outcome.excluded} where the law makes no claim` : ''}. {outcome.statement}
-        </Text>
+        </SkText>
       ) : null}
-      {outcome.kind === 'not-checked' ? <Text style={styles.detail}>{outcome.reason}</Text> : null}
+      {outcome.kind === 'not-checked' ? (
+        <SkText variant="caption" style={styles.detail}>
+          {outcome.reason}
+        </SkText>
+      ) : null}
       {outcome.kind === 'failed' ? (
         <View style={styles.failure}>
-          <Text style={styles.detail}>{outcome.reason}</Text>
-          <Text style={styles.label}>
+          <SkText variant="caption" style={styles.detail}>
+            {outcome.reason}
+          </SkText>
+          <SkText variant="smallLabel" tone="inkFaint" style={styles.label}>
             Counterexample (after {outcome.shrinks} shrinks, {outcome.runs} runs)
-          </Text>
+          </SkText>
           {outcome.counterexample.map((z, i) => (
-            <Text key={i} style={styles.mono} selectable>
+            <SkText variant="mono" key={i} selectable>
               {outcome.counterexample.length > 1 ? `z${i + 1}` : 'z'} = {complex(z)}
-            </Text>
+            </SkText>
           ))}
           {outcome.values.map((v) => (
-            <Text key={v.name} style={styles.mono} selectable>
+            <SkText variant="mono" key={v.name} selectable>
               {v.name} = {complex(v.value)}
-            </Text>
+            </SkText>
           ))}
-          <Text style={styles.label}>Replay with fast-check: seed {outcome.seed}, path</Text>
-          <Text style={styles.mono} selectable>
+          <SkText variant="smallLabel" tone="inkFaint" style={styles.label}>
+            Replay with fast-check: seed {outcome.seed}, path
+          </SkText>
+          <SkText variant="mono" selectable>
             {outcome.path}
-          </Text>
+          </SkText>
         </View>
       ) : null}
     </View>
@@ -126,7 +137,6 @@ function PropertyCheckCard({ pair, outcome }: { pair: string; outcome: PropertyO
 
 const styles = StyleSheet.create({
   list: { gap: theme.space(4) },
-  summary: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
   foldRow: {
     minHeight: 44,
     flexDirection: 'row',
@@ -141,7 +151,6 @@ const styles = StyleSheet.create({
     backgroundColor: theme.color.panel,
   },
   group: { gap: theme.space(2) },
-  pair: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.ink },
   check: {
     backgroundColor: theme.color.panel,
     borderWidth: 1,
@@ -153,16 +162,7 @@ const styles = StyleSheet.create({
   },
   checkHead: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', columnGap: theme.space(3) },
   kind: { fontFamily: theme.font.medium, fontSize: theme.size.small },
-  law: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.ink },
-  seed: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.inkFaint },
-  title: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.ink },
-  detail: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
+  detail: { lineHeight: 20 },
   failure: { gap: 2, marginTop: theme.space(1) },
-  label: {
-    fontFamily: theme.font.medium,
-    fontSize: theme.size.small,
-    color: theme.color.inkFaint,
-    marginTop: theme.space(1),
-  },
-  mono: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.ink },
+  label: { marginTop: theme.space(1) },
 });

@@ -1,8 +1,9 @@
 import { Link } from 'expo-router';
-import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { Pressable, StyleSheet, View } from 'react-native';
 import { isLiveRun } from '../../client/is-live-run';
 import { theme } from '../../constants/theme';
 import type { RunView } from '../../shared/run-view';
+import { SkText } from '../ui/sk-text';
 import { formatWhen } from './format-when';
 import { OutcomeCounts } from './outcome-counts';
 import { ProgressBar } from './progress-bar';
@@ -23,21 +24,23 @@ export function RunCard({ run, now }: { run: RunView; now?: number }) {
         testID={`run-${run.id}`}
       >
         <View style={styles.head}>
-          <Text style={styles.plan} numberOfLines={2}>
+          <SkText variant="label" style={styles.plan} numberOfLines={2}>
             {run.planName}
-          </Text>
-          <Text style={styles.chevron}>→</Text>
+          </SkText>
+          <SkText variant="body" tone="inkFaint">
+            →
+          </SkText>
         </View>
         <RunStatusBadge run={run} />
-        <Text style={styles.meta}>
+        <SkText variant="caption">
           {triggerWords(run.trigger, run.requestedBy)} · {formatWhen(run.createdAt, now)} · {runDuration(run, now)}
-        </Text>
+        </SkText>
         {live ? <ProgressBar done={run.shardsDone} total={run.shardsTotal} /> : null}
         <OutcomeCounts counts={run.counts} compact />
         {run.regressions ? (
-          <Text style={styles.regressions}>
+          <SkText variant="smallLabel" tone="danger">
             ↓ {run.regressions} regression{run.regressions === 1 ? '' : 's'} since the previous run
-          </Text>
+          </SkText>
         ) : null}
       </Pressable>
     </Link>
@@ -55,8 +58,5 @@ const styles = StyleSheet.create({
     minHeight: theme.touch,
   },
   head: { flexDirection: 'row', alignItems: 'flex-start', gap: theme.space(2) },
-  plan: { flex: 1, fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
-  chevron: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.inkFaint },
-  meta: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
-  regressions: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.danger },
+  plan: { flex: 1 },
 });

@@ -1,5 +1,5 @@
 import { Link } from 'expo-router';
-import { Pressable, StyleSheet, Text } from 'react-native';
+import { Pressable, StyleSheet } from 'react-native';
 import { ApiRequestError } from '../../client/api-request-error';
 import { isLiveRun } from '../../client/is-live-run';
 import { useMe } from '../../client/use-me';
@@ -8,6 +8,7 @@ import { useRunMatrix } from '../../client/use-run-matrix';
 import { useRunProperties } from '../../client/use-run-properties';
 import { theme } from '../../constants/theme';
 import type { CheckedScope } from '../../shared/run-result';
+import { SkText } from '../ui/sk-text';
 import { CheckedScopeNote } from './checked-scope-note';
 import { PropertyChecks } from './property-checks';
 import { QueryState } from '../ui/query-state';
@@ -67,9 +68,9 @@ export function RunDetail({ id }: { id: string }) {
         <CheckedScopeNote scopes={scopes} pairsNotChecked={notChecked} properties={propertySummary} subject="matrix" />
       ) : null}
 
-      <Text accessibilityRole="header" style={styles.section}>
+      <SkText variant="heading" accessibilityRole="header" style={styles.section}>
         Matrix: suite × target
-      </Text>
+      </SkText>
       {matrix.isPending ? (
         <QueryState state="loading" />
       ) : matrix.isError ? (
@@ -80,9 +81,9 @@ export function RunDetail({ id }: { id: string }) {
         <RunMatrix runId={id} cells={cells} />
       )}
 
-      <Text accessibilityRole="header" style={styles.section}>
+      <SkText variant="heading" accessibilityRole="header" style={styles.section}>
         Property checks
-      </Text>
+      </SkText>
       {properties.isPending ? (
         <QueryState state="loading" />
       ) : properties.isError ? (
@@ -107,7 +108,9 @@ function BackLink() {
   return (
     <Link href="/runs" asChild>
       <Pressable accessibilityRole="link" accessibilityLabel="All runs" style={StyleSheet.flatten(styles.back)}>
-        <Text style={styles.backText}>← All runs</Text>
+        <SkText variant="label" tone="accent">
+          ← All runs
+        </SkText>
       </Pressable>
     </Link>
   );
@@ -115,11 +118,5 @@ function BackLink() {
 
 const styles = StyleSheet.create({
   back: { alignSelf: 'flex-start', minHeight: 44, justifyContent: 'center' },
-  backText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accent },
-  section: {
-    fontFamily: theme.font.bold,
-    fontSize: theme.size.large,
-    color: theme.color.ink,
-    marginTop: theme.space(2),
-  },
+  section: { marginTop: theme.space(2) },
 });

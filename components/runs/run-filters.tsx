@@ -1,9 +1,10 @@
 import { useState } from 'react';
-import { Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
+import { Pressable, StyleSheet, useWindowDimensions, View } from 'react-native';
 import type { RunFilters as Filters } from '../../client/use-runs';
 import { theme } from '../../constants/theme';
 import { RUN_STATUSES, RUN_TRIGGERS, type RunStatus, type RunTrigger } from '../../shared/run-status';
 import { ChipGroup } from '../ui/chip-group';
+import { SkText } from '../ui/sk-text';
 
 const STATUS_WORDS: Record<RunStatus, string> = {
   queued: '… queued',
@@ -79,10 +80,10 @@ export function RunFilters({
         onPress={() => setOpen((v) => !v)}
         style={styles.toggle}
       >
-        <Text style={styles.toggleText}>{open ? '↑' : '↓'} Filter runs</Text>
-        <Text style={styles.summary} numberOfLines={2}>
+        <SkText variant="label">{open ? '↑' : '↓'} Filter runs</SkText>
+        <SkText variant="caption" style={styles.summary} numberOfLines={2}>
           {on.length ? on.join(' · ') : 'all runs'}
-        </Text>
+        </SkText>
       </Pressable>
       {open ? chips : null}
     </View>
@@ -103,12 +104,5 @@ const styles = StyleSheet.create({
     borderColor: theme.color.rule,
     backgroundColor: theme.color.panel,
   },
-  toggleText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
-  summary: {
-    flex: 1,
-    textAlign: 'right',
-    fontFamily: theme.font.regular,
-    fontSize: theme.size.small,
-    color: theme.color.inkSoft,
-  },
+  summary: { flex: 1, textAlign: 'right' },
 });

@@ -1,7 +1,8 @@
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { isLiveRun } from '../../client/is-live-run';
 import { theme } from '../../constants/theme';
 import type { RunView } from '../../shared/run-view';
+import { SkText } from '../ui/sk-text';
 import { CancelRunButton } from './cancel-run-button';
 import { formatWhen } from './format-when';
 import { OutcomeCounts } from './outcome-counts';
@@ -32,10 +33,12 @@ export function RunHeader({ run, canCancel }: { run: RunView; canCancel: boolean
       <View style={styles.facts}>
         {facts.map(([label, value]) => (
           <View key={label} style={styles.fact}>
-            <Text style={styles.label}>{label}</Text>
-            <Text style={[styles.value, label === 'Regressions' && run.regressions ? styles.danger : null]}>
+            <SkText variant="smallLabel" tone="inkFaint" style={styles.label}>
+              {label}
+            </SkText>
+            <SkText variant="body" style={label === 'Regressions' && run.regressions ? styles.danger : null}>
               {value}
-            </Text>
+            </SkText>
           </View>
         ))}
       </View>
@@ -61,13 +64,6 @@ const styles = StyleSheet.create({
   },
   facts: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(4) },
   fact: { flexBasis: 150, flexGrow: 1, gap: 2 },
-  label: {
-    fontFamily: theme.font.medium,
-    fontSize: theme.size.small,
-    color: theme.color.inkFaint,
-    textTransform: 'uppercase',
-    letterSpacing: 0.8,
-  },
-  value: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.ink },
+  label: { textTransform: 'uppercase', letterSpacing: 0.8 },
   danger: { color: theme.color.danger, fontFamily: theme.font.medium },
 });

@@ -3,6 +3,7 @@ import { useState } from 'react';
 import { Pressable, ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { RunMatrixCell } from '../../shared/run-matrix-cell';
+import { SkText } from '../ui/sk-text';
 import { describeMatrixCell, type MatrixCellWords } from './describe-matrix-cell';
 import { failuresHref } from './failures-href';
 import { OUTCOME_TONE } from './outcome-tone';
@@ -49,8 +50,12 @@ export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCel
           style={layout === 'grid' ? [styles.gridCell, styles.absent] : [styles.rowCell, styles.absent]}
           accessibilityLabel={`${suite} on ${target}: not part of this run`}
         >
-          {layout === 'row' ? <Text style={styles.rowTarget}>{target}</Text> : null}
-          <Text style={styles.details}>— not in this run</Text>
+          {layout === 'row' ? (
+            <SkText variant="mono" tone="inkSoft" style={styles.rowTarget}>
+              {target}
+            </SkText>
+          ) : null}
+          <SkText variant="caption">— not in this run</SkText>
         </View>
       );
     }
@@ -62,11 +67,11 @@ export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCel
 
   return (
     <View style={styles.box} onLayout={(e) => setBoxWidth(e.nativeEvent.layout.width)}>
-      <Text style={styles.summary}>
+      <SkText variant="caption" style={styles.summary}>
         {allSuites.length} suite{allSuites.length === 1 ? '' : 's'} × {targets.length} target
         {targets.length === 1 ? '' : 's'}: ✓ {tally.pass} passed · ❌ {tally.fail} with failures · ◊ {tally.error} error
         {tally.other ? ` · ${tally.other} not finished or cancelled` : ''}
-      </Text>
+      </SkText>
       <Pressable
         accessibilityRole="switch"
         accessibilityLabel="Show only suites that need a look"
@@ -74,29 +79,40 @@ export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCel
         onPress={() => setOnlyProblems((v) => !v)}
         style={[styles.toggle, onlyProblems && styles.toggleOn]}
       >
-        <Text style={[styles.toggleText, onlyProblems && styles.toggleTextOn]}>
+        <SkText variant="caption" tone="ink" style={onlyProblems && styles.toggleTextOn}>
           {onlyProblems ? '✓ ' : ''}Only suites that need a look
-        </Text>
+        </SkText>
       </Pressable>
-      {suites.length === 0 ? <Text style={styles.details}>Every suite passed on every target.</Text> : null}
+      {suites.length === 0 ? <SkText variant="caption">Every suite passed on every target.</SkText> : null}
       {wide ? (
         <ScrollView horizontal contentContainerStyle={styles.gridScroll}>
           <View style={[styles.grid, { width: gridWidth }]} role="table" aria-label="Run matrix">
             <View style={styles.gridRow} role="row">
-              <Text role="columnheader" style={[styles.gridHead, styles.suiteCol]}>
+              <SkText
+                variant="smallLabel"
+                tone="inkFaint"
+                role="columnheader"
+                style={[styles.gridHead, styles.suiteCol]}
+              >
                 Suite ↓ · target →
-              </Text>
+              </SkText>
               {targets.map((t) => (
-                <Text key={t} role="columnheader" style={[styles.gridHead, styles.targetCol]}>
+                <SkText
+                  variant="smallLabel"
+                  tone="inkFaint"
+                  key={t}
+                  role="columnheader"
+                  style={[styles.gridHead, styles.targetCol]}
+                >
                   {t}
-                </Text>
+                </SkText>
               ))}
             </View>
             {suites.map((suite) => (
               <View key={suite} style={styles.gridRow} role="row">
-                <Text role="rowheader" style={[styles.suiteName, styles.suiteCol]}>
+                <SkText variant="mono" role="rowheader" style={styles.suiteCol}>
                   {suite}
-                </Text>
+                </SkText>
                 {targets.map((t) => (
                   <View key={t} role="cell" style={styles.targetCol}>
                     {cellView(suite, t, 'grid')}
@@ -109,9 +125,9 @@ export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCel
       ) : (
         suites.map((suite) => (
           <View key={suite} style={styles.card}>
-            <Text accessibilityRole="header" style={styles.suiteName}>
+            <SkText variant="mono" accessibilityRole="header">
               {suite}
-            </Text>
+            </SkText>
             {targets.map((t) => cellView(suite, t, 'row'))}
           </View>
         ))
@@ -138,15 +154,23 @@ function MatrixCellView({
   ]);
   const content = (
     <>
-      {layout === 'row' ? <Text style={styles.rowTarget}>{cell.target}</Text> : null}
+      {layout === 'row' ? (
+        <SkText variant="mono" tone="inkSoft" style={styles.rowTarget}>
+          {cell.target}
+        </SkText>
+      ) : null}
       <View style={styles.cellWords}>
         <Text style={[styles.headline, { color: tone.ink }]}>{words.headline}</Text>
         {words.details.map((line, i) => (
-          <Text key={i} style={styles.details} numberOfLines={3}>
+          <SkText variant="caption" key={i} numberOfLines={3}>
             {line}
-          </Text>
+          </SkText>
         ))}
-        {words.hasRows ? <Text style={styles.open}>failures →</Text> : null}
+        {words.hasRows ? (
+          <SkText variant="smallLabel" tone="accent">
+            failures →
+          </SkText>
+        ) : null}
       </View>
     </>
   );
@@ -173,7 +197,7 @@ function MatrixCellView({
 
 const styles = StyleSheet.create({
   box: { gap: theme.space(3) },
-  summary: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
+  summary: { lineHeight: 20 },
   toggle: {
     alignSelf: 'flex-start',
     minHeight: 44,
@@ -185,7 +209,6 @@ const styles = StyleSheet.create({
     backgroundColor: theme.color.panel,
   },
   toggleOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
-  toggleText: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink },
   toggleTextOn: { color: theme.color.accentInk, fontFamily: theme.font.medium },
   gridScroll: { flexGrow: 1 },
   grid: {
@@ -195,13 +218,7 @@ const styles = StyleSheet.create({
     borderRadius: theme.radius,
   },
   gridRow: { flexDirection: 'row', alignItems: 'stretch', borderBottomWidth: 1, borderBottomColor: theme.color.rule },
-  gridHead: {
-    fontFamily: theme.font.medium,
-    fontSize: theme.size.small,
-    color: theme.color.inkFaint,
-    paddingVertical: theme.space(2),
-    paddingHorizontal: theme.space(3),
-  },
+  gridHead: { paddingVertical: theme.space(2), paddingHorizontal: theme.space(3) },
   suiteCol: {
     width: SUITE_COLUMN,
     paddingHorizontal: theme.space(3),
@@ -209,7 +226,6 @@ const styles = StyleSheet.create({
     alignSelf: 'center',
   },
   targetCol: { flex: 1, flexBasis: 0, minWidth: TARGET_COLUMN_MIN, padding: theme.space(1) },
-  suiteName: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.ink },
   gridCell: {
     flex: 1,
     minHeight: theme.touch,
@@ -228,11 +244,9 @@ const styles = StyleSheet.create({
     borderRadius: 4,
   },
   absent: { backgroundColor: theme.color.paper, borderLeftColor: theme.color.rule },
-  rowTarget: { width: 130, fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.inkSoft },
+  rowTarget: { width: 130 },
   cellWords: { flex: 1, gap: 2 },
   headline: { fontFamily: theme.font.medium, fontSize: theme.size.body },
-  details: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
-  open: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.accent },
   card: {
     backgroundColor: theme.color.panel,
     borderWidth: 1,

@@ -1,9 +1,10 @@
-import { StyleSheet, Text, useWindowDimensions, View } from 'react-native';
+import { StyleSheet, useWindowDimensions, View } from 'react-native';
 import { usePlanNames } from '../../client/use-plan-names';
 import { useRuns, type RunFilters as Filters } from '../../client/use-runs';
 import { theme } from '../../constants/theme';
 import { ActionButton } from '../ui/action-button';
 import { QueryState } from '../ui/query-state';
+import { SkText } from '../ui/sk-text';
 import { RunCard } from './run-card';
 import { RunFilters } from './run-filters';
 import { RunsTable } from './runs-table';
@@ -34,9 +35,9 @@ export function RunsList({ filters, onFiltersChange }: { filters: Filters; onFil
   else
     body = (
       <View style={styles.list}>
-        <Text style={styles.count} accessibilityLiveRegion="polite">
+        <SkText variant="caption" accessibilityLiveRegion="polite">
           {all.length} run{all.length === 1 ? '' : 's'} shown{runs.hasNextPage ? ', more below' : ''}
-        </Text>
+        </SkText>
         {wide ? <RunsTable runs={all} /> : all.map((run) => <RunCard key={run.id} run={run} />)}
         {runs.hasNextPage ? (
           <ActionButton
@@ -52,9 +53,9 @@ export function RunsList({ filters, onFiltersChange }: { filters: Filters; onFil
   return (
     <View style={styles.box}>
       {plans.isError ? (
-        <Text style={styles.note}>
+        <SkText variant="caption" tone="danger">
           × Plans could not be loaded, so the plan filter is missing: {plans.error.message}
-        </Text>
+        </SkText>
       ) : null}
       <RunFilters value={filters} plans={plans.data ?? []} onChange={onFiltersChange} />
       {body}
@@ -65,6 +66,4 @@ export function RunsList({ filters, onFiltersChange }: { filters: Filters; onFil
 const styles = StyleSheet.create({
   box: { gap: theme.space(4) },
   list: { gap: theme.space(3) },
-  count: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
-  note: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.danger },
 });

@@ -1,8 +1,9 @@
 import { Link } from 'expo-router';
-import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { Pressable, StyleSheet, View } from 'react-native';
 import { isLiveRun } from '../../client/is-live-run';
 import { theme } from '../../constants/theme';
 import type { RunView } from '../../shared/run-view';
+import { SkText } from '../ui/sk-text';
 import { formatWhen } from './format-when';
 import { OutcomeCounts } from './outcome-counts';
 import { ProgressBar } from './progress-bar';
@@ -16,21 +17,21 @@ export function RunsTable({ runs, now }: { runs: RunView[]; now?: number }) {
   return (
     <View style={styles.table} role="table" aria-label="Runs">
       <View style={[styles.row, styles.headRow]} role="row">
-        <Text role="columnheader" style={[styles.head, styles.status]}>
+        <SkText variant="smallLabel" tone="inkFaint" role="columnheader" style={[styles.head, styles.status]}>
           Status
-        </Text>
-        <Text role="columnheader" style={[styles.head, styles.plan]}>
+        </SkText>
+        <SkText variant="smallLabel" tone="inkFaint" role="columnheader" style={[styles.head, styles.plan]}>
           Plan
-        </Text>
-        <Text role="columnheader" style={[styles.head, styles.who]}>
+        </SkText>
+        <SkText variant="smallLabel" tone="inkFaint" role="columnheader" style={[styles.head, styles.who]}>
           Started
-        </Text>
-        <Text role="columnheader" style={[styles.head, styles.duration]}>
+        </SkText>
+        <SkText variant="smallLabel" tone="inkFaint" role="columnheader" style={[styles.head, styles.duration]}>
           Duration
-        </Text>
-        <Text role="columnheader" style={[styles.head, styles.counts]}>
+        </SkText>
+        <SkText variant="smallLabel" tone="inkFaint" role="columnheader" style={[styles.head, styles.counts]}>
           Points
-        </Text>
+        </SkText>
       </View>
       {runs.map((run) => (
         <Link key={run.id} href={`/runs/${run.id}`} asChild>
@@ -46,20 +47,24 @@ export function RunsTable({ runs, now }: { runs: RunView[]; now?: number }) {
               <RunStatusBadge run={run} />
             </View>
             <View style={styles.plan}>
-              <Text style={styles.planName} numberOfLines={2}>
+              <SkText variant="label" numberOfLines={2}>
                 {run.planName}
-              </Text>
+              </SkText>
               {run.regressions ? (
-                <Text style={styles.regressions}>
+                <SkText variant="smallLabel" tone="danger">
                   ↓ {run.regressions} regression{run.regressions === 1 ? '' : 's'}
-                </Text>
+                </SkText>
               ) : null}
             </View>
             <View style={styles.who}>
-              <Text style={styles.cell}>{formatWhen(run.createdAt, now)}</Text>
-              <Text style={styles.sub}>{triggerWords(run.trigger, run.requestedBy)}</Text>
+              <SkText variant="caption" tone="ink">
+                {formatWhen(run.createdAt, now)}
+              </SkText>
+              <SkText variant="caption">{triggerWords(run.trigger, run.requestedBy)}</SkText>
             </View>
-            <Text style={[styles.cell, styles.duration]}>{runDuration(run, now)}</Text>
+            <SkText variant="caption" tone="ink" style={styles.duration}>
+              {runDuration(run, now)}
+            </SkText>
             <View style={[styles.counts, styles.countsCell]}>
               {isLiveRun(run) ? <ProgressBar done={run.shardsDone} total={run.shardsTotal} /> : null}
               <OutcomeCounts counts={run.counts} compact />
@@ -90,21 +95,11 @@ const styles = StyleSheet.create({
   },
   headRow: { backgroundColor: theme.color.paper, paddingVertical: theme.space(2) },
   bodyRow: { minHeight: 64 },
-  head: {
-    fontFamily: theme.font.medium,
-    fontSize: theme.size.small,
-    color: theme.color.inkFaint,
-    textTransform: 'uppercase',
-    letterSpacing: 0.8,
-  },
+  head: { textTransform: 'uppercase', letterSpacing: 0.8 },
   status: { width: 220 },
   plan: { flex: 2, gap: 2 },
   who: { flex: 2, gap: 2 },
   duration: { width: 110 },
   counts: { flex: 3 },
   countsCell: { gap: theme.space(1) },
-  planName: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
-  cell: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink },
-  sub: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
-  regressions: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.danger },
 });

@@ -3,6 +3,7 @@ import { Platform, Pressable, StyleSheet, Text, View } from 'react-native';
 import { usePlans } from '../../client/use-plans';
 import { theme } from '../../constants/theme';
 import type { Role } from '../../shared/roles';
+import { SkText } from '../ui/sk-text';
 
 /** The server's address as this browser reaches it; a placeholder elsewhere. */
 const origin =
@@ -39,11 +40,11 @@ export function CiExample({ role }: { role: Role }) {
 
   return (
     <View style={styles.box} testID="ci-example">
-      <Text style={styles.text}>
+      <SkText variant="caption" style={styles.text}>
         Keep the token in your CI&apos;s secret store as <Text style={styles.inline}>SHEETKEEPER_TOKEN</Text>. It acts
         as you, with your role
         {mayStart ? '.' : ': starting runs needs the maintainer or admin role, so ask one of them for a plan run.'}
-      </Text>
+      </SkText>
       {plans.data && plans.data.length > 1 ? (
         <View style={styles.chips} accessibilityRole="radiogroup" accessibilityLabel="Plan in the example">
           {plans.data.map((p) => (
@@ -55,10 +56,10 @@ export function CiExample({ role }: { role: Role }) {
               onPress={() => setChosen(p.id)}
               style={[styles.chip, p.id === plan?.id && styles.chipOn]}
             >
-              <Text style={[styles.chipText, p.id === plan?.id && styles.chipTextOn]}>
+              <SkText variant="caption" tone="ink" style={p.id === plan?.id && styles.chipTextOn}>
                 {p.id === plan?.id ? '✓ ' : ''}
                 {p.name}
-              </Text>
+              </SkText>
             </Pressable>
           ))}
         </View>
@@ -75,7 +76,7 @@ export function CiExample({ role }: { role: Role }) {
 
 const styles = StyleSheet.create({
   box: { gap: theme.space(3) },
-  text: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
+  text: { lineHeight: 20 },
   inline: { fontFamily: theme.font.mono, color: theme.color.ink },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
   chip: {
@@ -87,7 +88,6 @@ const styles = StyleSheet.create({
     borderColor: theme.color.rule,
   },
   chipOn: { backgroundColor: theme.color.accentSoft, borderColor: theme.color.accent },
-  chipText: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink },
   chipTextOn: { fontFamily: theme.font.medium, color: theme.color.accent },
   code: {
     fontFamily: theme.font.mono,

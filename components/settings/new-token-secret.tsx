@@ -1,7 +1,8 @@
 import { useState } from 'react';
-import { Platform, StyleSheet, Text, View } from 'react-native';
+import { Platform, StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import { ActionButton } from '../ui/action-button';
+import { SkText } from '../ui/sk-text';
 
 /**
  * A freshly made token's secret, shown this once: the server keeps only its hash, so once this
@@ -19,16 +20,19 @@ export function NewTokenSecret({ name, secret, onDismiss }: { name: string; secr
   };
   return (
     <View style={styles.box} testID="new-token-secret" accessibilityLiveRegion="polite">
-      <Text style={styles.title}>✓ Token “{name}” made</Text>
-      <Text style={styles.warning}>Copy it now: you will not see this again. Sheetkeeper keeps only a hash of it.</Text>
-      <Text
+      <SkText variant="strong">✓ Token “{name}” made</SkText>
+      <SkText variant="label" style={styles.warning}>
+        Copy it now: you will not see this again. Sheetkeeper keeps only a hash of it.
+      </SkText>
+      <SkText
+        variant="mono"
         selectable
         style={styles.secret}
         testID="new-token-secret-value"
         accessibilityLabel="The new token's secret"
       >
         {secret}
-      </Text>
+      </SkText>
       <View style={styles.buttons}>
         <ActionButton
           label={copied === 'yes' ? '✓ Copied' : 'Copy'}
@@ -38,7 +42,9 @@ export function NewTokenSecret({ name, secret, onDismiss }: { name: string; secr
         <ActionButton label="I have stored it" tone="quiet" onPress={onDismiss} />
       </View>
       {copied === 'failed' ? (
-        <Text style={styles.note}>This browser did not allow copying: select the text above and copy it by hand.</Text>
+        <SkText variant="caption">
+          This browser did not allow copying: select the text above and copy it by hand.
+        </SkText>
       ) : null}
     </View>
   );
@@ -53,12 +59,8 @@ const styles = StyleSheet.create({
     borderColor: theme.color.focus,
     backgroundColor: '#FBF3E2',
   },
-  title: { fontFamily: theme.font.bold, fontSize: theme.size.body, color: theme.color.ink },
-  warning: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink, lineHeight: 22 },
+  warning: { lineHeight: 22 },
   secret: {
-    fontFamily: theme.font.mono,
-    fontSize: theme.size.small,
-    color: theme.color.ink,
     backgroundColor: theme.color.panel,
     padding: theme.space(3),
     borderRadius: theme.radius,
@@ -67,5 +69,4 @@ const styles = StyleSheet.create({
     wordBreak: 'break-all',
   } as object,
   buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
-  note: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
 });

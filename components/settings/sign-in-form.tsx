@@ -1,10 +1,11 @@
 import { useState } from 'react';
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { ApiRequestError } from '../../client/api-request-error';
 import { useSignIn } from '../../client/use-sign-in';
 import { theme } from '../../constants/theme';
 import { signInBody } from '../../shared/schemas/sign-in-body';
 import { ActionButton } from '../ui/action-button';
+import { SkText } from '../ui/sk-text';
 import { TextField } from '../ui/text-field';
 
 type Field = 'email' | 'password';
@@ -77,9 +78,15 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
         testID="sign-in-password"
       />
       {serverError && serverError.kind !== 'invalid-input' ? (
-        <Text accessibilityRole="alert" style={styles.serverError} testID="sign-in-server-error">
+        <SkText
+          variant="label"
+          tone="danger"
+          accessibilityRole="alert"
+          style={styles.serverError}
+          testID="sign-in-server-error"
+        >
           × {serverError.message}
-        </Text>
+        </SkText>
       ) : null}
       <ActionButton label="Sign in" onPress={submit} busy={signIn.isPending} />
     </View>
@@ -88,12 +95,5 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
 
 const styles = StyleSheet.create({
   form: { gap: theme.space(4) },
-  serverError: {
-    fontFamily: theme.font.medium,
-    fontSize: theme.size.body,
-    color: theme.color.danger,
-    backgroundColor: theme.color.dangerSoft,
-    padding: theme.space(3),
-    borderRadius: theme.radius,
-  },
+  serverError: { backgroundColor: theme.color.dangerSoft, padding: theme.space(3), borderRadius: theme.radius },
 });

@@ -6,6 +6,7 @@ import { useTokens } from '../../client/use-tokens';
 import { theme } from '../../constants/theme';
 import { ConfirmAction } from '../ui/confirm-action';
 import { QueryState } from '../ui/query-state';
+import { SkText } from '../ui/sk-text';
 
 /** My API tokens: name, first characters, made, last used, and revoke (asked twice). Revoked ones stay listed. */
 export function TokenList() {
@@ -38,14 +39,16 @@ export function TokenList() {
       {tokens.data.map((t) => (
         <View key={t.id} style={[styles.row, t.revokedAt ? styles.revoked : null]} testID={`token-${t.name}`}>
           <View style={styles.words}>
-            <Text style={styles.name}>{t.name}</Text>
-            <Text style={styles.prefix}>{t.prefix}…</Text>
-            <Text style={styles.dates}>
+            <SkText variant="label">{t.name}</SkText>
+            <SkText variant="mono" tone="inkSoft">
+              {t.prefix}…
+            </SkText>
+            <SkText variant="caption">
               Made {formatDate(t.createdAt)} · {t.lastUsedAt ? `last used ${formatDate(t.lastUsedAt)}` : 'never used'}
-            </Text>
-            <Text style={[styles.state, !t.revokedAt && styles.active]}>
+            </SkText>
+            <SkText variant="smallLabel" style={!t.revokedAt && styles.active}>
               {t.revokedAt ? `− Revoked ${formatDate(t.revokedAt)}: refused by the API` : '✓ Active'}
-            </Text>
+            </SkText>
           </View>
           {t.revokedAt ? null : (
             <View style={styles.action}>
@@ -87,10 +90,6 @@ const styles = StyleSheet.create({
   },
   revoked: { opacity: 0.75 },
   words: { flexGrow: 1, flexShrink: 1, flexBasis: 200, gap: 2 },
-  name: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
-  prefix: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.inkSoft },
-  dates: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
-  state: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft },
   active: { color: theme.color.accent },
   action: { flexShrink: 0, maxWidth: '100%' },
 });

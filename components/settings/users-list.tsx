@@ -6,6 +6,7 @@ import { theme } from '../../constants/theme';
 import { ROLES, type Role } from '../../shared/roles';
 import type { PublicUser } from '../../shared/public-user';
 import { QueryState } from '../ui/query-state';
+import { SkText } from '../ui/sk-text';
 
 /** Admin list of users: cards on a phone, rows on a wide screen; the role is changed in place. */
 export function UsersList({ me }: { me: PublicUser }) {
@@ -30,21 +31,35 @@ export function UsersList({ me }: { me: PublicUser }) {
       ) : null}
       {wide ? (
         <View style={[styles.row, styles.headRow]}>
-          <Text style={[styles.head, styles.nameCol]}>Name</Text>
-          <Text style={[styles.head, styles.emailCol]}>E-mail</Text>
-          <Text style={[styles.head, styles.roleCol]}>Role</Text>
+          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.nameCol]}>
+            Name
+          </SkText>
+          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.emailCol]}>
+            E-mail
+          </SkText>
+          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.roleCol]}>
+            Role
+          </SkText>
         </View>
       ) : null}
       {users.data.map((user) => (
         <View key={user.id} style={wide ? styles.row : styles.card} testID={`user-${user.email}`}>
           <View style={wide ? styles.nameCol : undefined}>
-            <Text style={styles.name}>
+            <SkText variant="label">
               {user.displayName}
               {user.id === me.id ? ' (you)' : ''}
-            </Text>
-            {wide ? null : <Text style={styles.email}>{user.email}</Text>}
+            </SkText>
+            {wide ? null : (
+              <SkText variant="mono" tone="inkSoft">
+                {user.email}
+              </SkText>
+            )}
           </View>
-          {wide ? <Text style={[styles.email, styles.emailCol]}>{user.email}</Text> : null}
+          {wide ? (
+            <SkText variant="mono" tone="inkSoft" style={styles.emailCol}>
+              {user.email}
+            </SkText>
+          ) : null}
           <View style={[styles.roleCol, styles.roleCell]}>
             <View
               style={styles.chips}
@@ -60,10 +75,10 @@ export function UsersList({ me }: { me: PublicUser }) {
                   onPress={() => user.role !== role && changeRole.mutate({ id: user.id, role })}
                   style={[styles.chip, user.role === role && styles.chipOn]}
                 >
-                  <Text style={[styles.chipText, user.role === role && styles.chipTextOn]}>
+                  <SkText variant="caption" tone="ink" style={user.role === role && styles.chipTextOn}>
                     {user.role === role ? '✓ ' : ''}
                     {role}
-                  </Text>
+                  </SkText>
                 </Pressable>
               ))}
             </View>
@@ -101,19 +116,11 @@ const styles = StyleSheet.create({
     backgroundColor: theme.color.panel,
   },
   headRow: { backgroundColor: 'transparent' },
-  head: {
-    fontFamily: theme.font.medium,
-    fontSize: theme.size.small,
-    color: theme.color.inkFaint,
-    textTransform: 'uppercase',
-    letterSpacing: 0.8,
-  },
+  head: { textTransform: 'uppercase', letterSpacing: 0.8 },
   nameCol: { flex: 2 },
   emailCol: { flex: 3 },
   roleCol: { flex: 5 },
   roleCell: { gap: theme.space(2) },
-  name: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
-  email: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.inkSoft },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
   chip: {
     minHeight: 44,
@@ -124,6 +131,5 @@ const styles = StyleSheet.create({
     borderColor: theme.color.rule,
   },
   chipOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
-  chipText: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink },
   chipTextOn: { color: theme.color.accentInk, fontFamily: theme.font.medium },
 });

@@ -1,6 +1,7 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { ApiRequestError } from '../../client/api-request-error';
 import { theme } from '../../constants/theme';
+import { SkText } from '../ui/sk-text';
 
 /**
  * A refused request, in words: the message, and for invalid input every field with its rule
@@ -11,15 +12,15 @@ export function IssueList({ error, prefix = '', testID }: { error: Error | null;
   const body = error instanceof ApiRequestError ? error.body : null;
   return (
     <View style={styles.box} accessibilityRole="alert" testID={testID}>
-      <Text style={styles.title}>
+      <SkText variant="label" tone="danger">
         × {body?.kind === 'invalid-input' ? 'Refused: the file breaks these rules.' : (body?.message ?? error.message)}
-      </Text>
+      </SkText>
       {body?.kind === 'invalid-input'
         ? body.issues.map((i, k) => (
-            <Text key={k} style={styles.line}>
+            <SkText variant="caption" tone="ink" key={k} style={styles.line}>
               • <Text style={styles.field}>{i.field.startsWith(prefix) ? i.field.slice(prefix.length) : i.field}</Text>{' '}
               {i.rule}
-            </Text>
+            </SkText>
           ))
         : null}
     </View>
@@ -33,7 +34,6 @@ const styles = StyleSheet.create({
     padding: theme.space(3),
     gap: theme.space(1),
   },
-  title: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.danger },
-  line: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink, lineHeight: 20 },
+  line: { lineHeight: 20 },
   field: { fontFamily: theme.font.mono },
 });

@@ -1,8 +1,9 @@
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { useUploadReferenceTable } from '../../client/use-upload-reference-table';
 import { theme } from '../../constants/theme';
 import type { WireComplex } from '../../shared/run-result';
 import { FileUploadButton } from '../ui/file-upload-button';
+import { SkText } from '../ui/sk-text';
 import { IssueList } from './issue-list';
 
 const c = (z: WireComplex) =>
@@ -17,10 +18,10 @@ export function ReferenceTableUpload({ slug }: { slug: string }) {
   const check = upload.data?.check;
   return (
     <View style={styles.box}>
-      <Text style={styles.lead}>
+      <SkText variant="caption" style={styles.lead}>
         Columns z_re, z_im, expected_re, expected_im, source. Values agree within 1 ulp per part with matching zero
         signs.
-      </Text>
+      </SkText>
       <FileUploadButton
         label="Upload a reference CSV"
         types={['text/csv', '.csv']}
@@ -30,26 +31,26 @@ export function ReferenceTableUpload({ slug }: { slug: string }) {
       <IssueList error={upload.error} prefix="file." />
       {check ? (
         <View style={styles.result} testID="reference-check">
-          <Text style={styles.summary}>
+          <SkText variant="label">
             {check.disagreements.length === 0 && check.invalid.length === 0 ? '✓' : '≠'} v{upload.data?.version}:{' '}
             {check.rows} rows read, {check.agree} agree, {check.disagreements.length} disagree
             {check.invalid.length ? `, ${check.invalid.length} unreadable` : ''}.
-          </Text>
+          </SkText>
           {check.disagreements.map((d) => (
             <View key={d.line} style={styles.row}>
-              <Text style={styles.rowHead}>
+              <SkText variant="smallLabel" tone="danger">
                 ≠ line {d.line} · z = {c(d.z)} · {d.ulps === Infinity || d.ulps > 1e15 ? 'far apart' : `${d.ulps} ulps`}
-              </Text>
-              <Text style={styles.mono}>
+              </SkText>
+              <SkText variant="mono">
                 theirs ({d.source || 'no source'}): {c(d.theirs)}
-              </Text>
-              <Text style={styles.mono}>ours: {c(d.ours)}</Text>
+              </SkText>
+              <SkText variant="mono">ours: {c(d.ours)}</SkText>
             </View>
           ))}
           {check.invalid.map((i) => (
-            <Text key={`x${i.line}`} style={styles.invalid}>
+            <SkText variant="caption" tone="danger" key={`x${i.line}`}>
               × line {i.line}: {i.reason}
-            </Text>
+            </SkText>
           ))}
         </View>
       ) : null}
@@ -59,11 +60,7 @@ export function ReferenceTableUpload({ slug }: { slug: string }) {
 
 const styles = StyleSheet.create({
   box: { gap: theme.space(2) },
-  lead: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
+  lead: { lineHeight: 20 },
   result: { gap: theme.space(2) },
-  summary: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
   row: { borderLeftWidth: 3, borderLeftColor: theme.color.danger, paddingLeft: theme.space(2), gap: 2 },
-  rowHead: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.danger },
-  mono: { fontFamily: theme.font.mono, fontSize: 13, color: theme.color.ink },
-  invalid: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.danger },
 });

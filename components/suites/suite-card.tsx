@@ -1,7 +1,8 @@
 import { Link } from 'expo-router';
-import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { Pressable, StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { SuiteSummary } from '../../shared/suite-summary';
+import { SkText } from '../ui/sk-text';
 import { SuiteStatusLabel } from './suite-status-label';
 
 /** One suite in the list: title, subject, its latest version's status, and which version plans use. */
@@ -20,16 +21,18 @@ export function SuiteCard({ suite, href }: { suite: SuiteSummary; href?: string 
       >
         <View style={styles.head}>
           <SuiteStatusLabel status={suite.latestStatus} version={suite.latestVersion} />
-          <Text style={styles.use}>{inUse}</Text>
+          <SkText variant="caption" tone="inkFaint">
+            {inUse}
+          </SkText>
         </View>
-        <Text style={styles.title}>{suite.title}</Text>
-        <Text style={styles.subject} numberOfLines={2}>
+        <SkText variant="label">{suite.title}</SkText>
+        <SkText variant="mono" tone="inkSoft" numberOfLines={2}>
           {suite.subject}
-        </Text>
-        <Text style={styles.meta} numberOfLines={1}>
+        </SkText>
+        <SkText variant="caption" tone="inkFaint" numberOfLines={1}>
           {suite.slug} · {suite.authorName} ·{' '}
           {new Date(suite.updatedAt).toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' })}
-        </Text>
+        </SkText>
       </Pressable>
     </Link>
   );
@@ -48,8 +51,4 @@ const styles = StyleSheet.create({
     flexBasis: 320,
   },
   head: { flexDirection: 'row', alignItems: 'center', gap: theme.space(2), flexWrap: 'wrap' },
-  use: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkFaint },
-  title: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
-  subject: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.inkSoft },
-  meta: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkFaint },
 });

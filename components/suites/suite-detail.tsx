@@ -1,12 +1,13 @@
 import { Link } from 'expo-router';
 import { useState } from 'react';
-import { Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
+import { Pressable, StyleSheet, useWindowDimensions, View } from 'react-native';
 import { useMe } from '../../client/use-me';
 import { useRetireSuite } from '../../client/use-retire-suite';
 import { useSubmitSuite } from '../../client/use-submit-suite';
 import { useSuite } from '../../client/use-suite';
 import { theme } from '../../constants/theme';
 import { ActionButton } from '../ui/action-button';
+import { SkText } from '../ui/sk-text';
 import { TitledPanel } from '../ui/titled-panel';
 import { IssueList } from './issue-list';
 import { QueryState } from '../ui/query-state';
@@ -20,7 +21,7 @@ function LinkButton({ href, label }: { href: string; label: string }) {
   return (
     <Link href={href} asChild>
       <Pressable accessibilityRole="link" accessibilityLabel={label} style={StyleSheet.flatten(styles.linkButton)}>
-        <Text style={styles.linkText}>{label}</Text>
+        <SkText variant="label">{label}</SkText>
       </Pressable>
     </Link>
   );
@@ -78,15 +79,21 @@ export function SuiteDetail({ slug }: { slug: string }) {
     <View style={styles.column}>
       <View style={styles.head}>
         <SuiteStatusLabel status={shown.status} version={shown.version} />
-        <Text style={styles.slug}>{slug}</Text>
+        <SkText variant="mono" tone="inkSoft">
+          {slug}
+        </SkText>
       </View>
-      <Text style={styles.inUse}>
+      <SkText variant="caption">
         {approved
           ? `Plans use version ${approved.version} (approved).`
           : 'No approved version yet: plans do not run this suite.'}{' '}
         {shown.version !== latest.version ? `Showing version ${shown.version}; the latest is ${latest.version}.` : ''}
-      </Text>
-      {body.story ? <Text style={styles.story}>{body.story}</Text> : null}
+      </SkText>
+      {body.story ? (
+        <SkText variant="body" style={styles.story}>
+          {body.story}
+        </SkText>
+      ) : null}
       {actions}
       <IssueList error={submit.error ?? retire.error} />
       <TitledPanel
@@ -137,9 +144,7 @@ const styles = StyleSheet.create({
   sideCol: { flex: 2, minWidth: 0 },
   column: { gap: theme.space(4) },
   head: { flexDirection: 'row', alignItems: 'center', gap: theme.space(3), flexWrap: 'wrap' },
-  slug: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.inkSoft },
-  inUse: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
-  story: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.ink, lineHeight: 24 },
+  story: { lineHeight: 24 },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
   linkButton: {
     minHeight: theme.touch,
@@ -150,5 +155,4 @@ const styles = StyleSheet.create({
     justifyContent: 'center',
     backgroundColor: theme.color.panel,
   },
-  linkText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
 });

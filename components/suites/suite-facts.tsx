@@ -2,6 +2,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { Suite } from '../../shared/schemas/suite-schema';
 import type { Tolerance } from '../../shared/schemas/tolerance-schema';
+import { SkText } from '../ui/sk-text';
 import { describeSuitePath } from './describe-suite-path';
 
 const c = (z: { re: string; im: string }) =>
@@ -11,8 +12,12 @@ const tol = (t: Tolerance) => ('ulps' in t ? `${t.ulps} ulps per part` : `relati
 function Fact({ label, children, mono = false }: { label: string; children: string; mono?: boolean }) {
   return (
     <View style={styles.fact}>
-      <Text style={styles.label}>{label}</Text>
-      <Text style={[styles.value, mono && styles.mono]}>{children}</Text>
+      <SkText variant="smallLabel" tone="inkFaint" style={styles.label}>
+        {label}
+      </SkText>
+      <SkText variant="body" style={[styles.value, mono && styles.mono]}>
+        {children}
+      </SkText>
     </View>
   );
 }
@@ -51,11 +56,13 @@ export function SuiteFacts({ suite }: { suite: Suite }) {
           : 'counter-clockwise continuity: zero signs ignored'}
       </Fact>
       <View style={styles.fact}>
-        <Text style={styles.label}>Paths ({suite.paths.length})</Text>
+        <SkText variant="smallLabel" tone="inkFaint" style={styles.label}>
+          Paths ({suite.paths.length})
+        </SkText>
         {suite.paths.map((p) => (
-          <Text key={p.name} style={styles.value}>
+          <SkText variant="body" key={p.name} style={styles.value}>
             • <Text style={styles.strong}>{p.name}</Text>: {describeSuitePath(p)}
-          </Text>
+          </SkText>
         ))}
       </View>
       <Fact label="Tolerances">
@@ -84,14 +91,8 @@ export function SuiteFacts({ suite }: { suite: Suite }) {
 const styles = StyleSheet.create({
   box: { gap: theme.space(3) },
   fact: { gap: 2 },
-  label: {
-    fontFamily: theme.font.medium,
-    fontSize: theme.size.small,
-    color: theme.color.inkFaint,
-    textTransform: 'uppercase',
-    letterSpacing: 0.6,
-  },
-  value: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.ink, lineHeight: 22 },
+  label: { textTransform: 'uppercase', letterSpacing: 0.6 },
+  value: { lineHeight: 22 },
   mono: { fontFamily: theme.font.mono, fontSize: 14 },
   strong: { fontFamily: theme.font.medium },
 });

@@ -1,9 +1,10 @@
 import { useMemo } from 'react';
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { useSuiteTools } from '../../client/use-suite-tools';
 import { theme } from '../../constants/theme';
 import { PlanePicture } from '../pictures/plane-picture';
 import { QueryState } from '../ui/query-state';
+import { SkText } from '../ui/sk-text';
 
 /**
  * A suite on the plane — its paths, cuts and branch points, computed by the same harness code
@@ -45,7 +46,7 @@ export function SuitePreview({
         branchPoints={picture.branchPoints}
         height={height}
       />
-      <Text style={styles.summary} testID={testID ? `${testID}-summary` : undefined}>
+      <SkText variant="caption" style={styles.summary} testID={testID ? `${testID}-summary` : undefined}>
         Drawn: {picture.paths.length} {picture.paths.length === 1 ? 'path' : 'paths'} ({pointCount} points),{' '}
         {picture.cuts.length} {picture.cuts.length === 1 ? 'cut' : 'cuts'}, {picture.branchPoints.length}{' '}
         {picture.branchPoints.length === 1 ? 'branch point' : 'branch points'}
@@ -53,11 +54,11 @@ export function SuitePreview({
           ? `: ${picture.branchPoints.map((p) => (Math.abs(p.im) < 1e-12 ? fmt(p.re) : `${fmt(p.re)}${p.im < 0 ? ' − ' : ' + '}${fmt(Math.abs(p.im))}i`)).join(', ')}`
           : ''}
         .
-      </Text>
+      </SkText>
       {picture.notes.map((note, i) => (
-        <Text key={i} style={styles.note}>
+        <SkText variant="caption" tone="inkFaint" key={i} style={styles.note}>
           • {note}
-        </Text>
+        </SkText>
       ))}
     </View>
   );
@@ -69,6 +70,6 @@ function fmt(v: number): string {
 
 const styles = StyleSheet.create({
   box: { gap: theme.space(2) },
-  summary: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
-  note: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkFaint, lineHeight: 20 },
+  summary: { lineHeight: 20 },
+  note: { lineHeight: 20 },
 });

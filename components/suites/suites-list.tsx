@@ -1,11 +1,13 @@
 import { Link } from 'expo-router';
 import { useState } from 'react';
-import { Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
+import { Pressable, StyleSheet, TextInput, View } from 'react-native';
 import { useSuites } from '../../client/use-suites';
 import { theme } from '../../constants/theme';
 import { SUITE_STATUSES, type SuiteStatus } from '../../shared/suite-status';
 import { ChipGroup } from '../ui/chip-group';
+import { INPUT_BOX_STYLE } from '../ui/input-box-style';
 import { QueryState } from '../ui/query-state';
+import { SkText } from '../ui/sk-text';
 import { SuiteCard } from './suite-card';
 import { SuiteFileUpload } from './suite-file-upload';
 
@@ -28,13 +30,15 @@ export function SuitesList() {
             accessibilityLabel="New suite"
             style={StyleSheet.flatten(styles.newButton)}
           >
-            <Text style={styles.newText}>+ New suite</Text>
+            <SkText variant="label" tone="accentInk">
+              + New suite
+            </SkText>
           </Pressable>
         </Link>
         <SuiteFileUpload />
       </View>
       <View style={styles.search}>
-        <Text style={styles.label}>Search</Text>
+        <SkText variant="smallLabel">Search</SkText>
         <TextInput
           accessibilityLabel="Search suites by id, title or subject"
           placeholder="id, title or subject"
@@ -65,9 +69,9 @@ export function SuitesList() {
       ) : null}
       {suites.data && suites.data.length > 0 ? (
         <>
-          <Text style={styles.count}>
+          <SkText variant="caption" tone="inkFaint">
             {suites.data.length} {suites.data.length === 1 ? 'suite' : 'suites'}
-          </Text>
+          </SkText>
           <View style={styles.grid}>
             {suites.data.map((s) => (
               <SuiteCard key={s.slug} suite={s} />
@@ -89,20 +93,7 @@ const styles = StyleSheet.create({
     backgroundColor: theme.color.accent,
     justifyContent: 'center',
   },
-  newText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accentInk },
   search: { gap: theme.space(1) },
-  label: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft },
-  input: {
-    minHeight: theme.touch,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    paddingHorizontal: theme.space(3),
-    fontFamily: theme.font.regular,
-    fontSize: theme.size.body,
-    color: theme.color.ink,
-    backgroundColor: theme.color.panel,
-  },
-  count: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkFaint },
+  input: INPUT_BOX_STYLE,
   grid: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
 });

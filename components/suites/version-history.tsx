@@ -1,6 +1,7 @@
-import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { Pressable, StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { SuiteVersionView } from '../../shared/suite-version-view';
+import { SkText } from '../ui/sk-text';
 import { SuiteStatusLabel } from './suite-status-label';
 
 const when = (iso: string | null) =>
@@ -38,18 +39,26 @@ export function VersionHistory({
         >
           <View style={styles.head}>
             <SuiteStatusLabel status={v.status} version={v.version} />
-            {v.version === selected ? <Text style={styles.showing}>← shown</Text> : null}
+            {v.version === selected ? (
+              <SkText variant="smallLabel" tone="accent">
+                ← shown
+              </SkText>
+            ) : null}
           </View>
-          <Text style={styles.line}>
+          <SkText variant="caption">
             written by {v.author.displayName} · {when(v.createdAt)}
             {v.submittedAt ? ` · submitted ${when(v.submittedAt)}` : ''}
-          </Text>
+          </SkText>
           {v.reviewer ? (
-            <Text style={styles.line}>
+            <SkText variant="caption">
               reviewed by {v.reviewer.displayName} · {when(v.reviewedAt)}
-            </Text>
+            </SkText>
           ) : null}
-          {v.reviewComment ? <Text style={styles.comment}>“{v.reviewComment}”</Text> : null}
+          {v.reviewComment ? (
+            <SkText variant="caption" tone="ink" style={styles.comment}>
+              “{v.reviewComment}”
+            </SkText>
+          ) : null}
         </Pressable>
       ))}
     </View>
@@ -69,15 +78,5 @@ const styles = StyleSheet.create({
   },
   selected: { borderColor: theme.color.accent, borderWidth: 2 },
   head: { flexDirection: 'row', alignItems: 'center', gap: theme.space(2) },
-  showing: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.accent },
-  line: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
-  comment: {
-    fontFamily: theme.font.regular,
-    fontSize: theme.size.small,
-    color: theme.color.ink,
-    fontStyle: 'italic',
-    borderLeftWidth: 3,
-    borderLeftColor: theme.color.focus,
-    paddingLeft: theme.space(2),
-  },
+  comment: { fontStyle: 'italic', borderLeftWidth: 3, borderLeftColor: theme.color.focus, paddingLeft: theme.space(2) },
 });

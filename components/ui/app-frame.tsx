@@ -5,6 +5,7 @@ import { MORE_ITEM, NAV_ITEMS, type NavItem } from '../../client/nav-items';
 import { useSignOut } from '../../client/use-sign-out';
 import { theme } from '../../constants/theme';
 import type { PublicUser } from '../../shared/public-user';
+import { SkText } from './sk-text';
 
 /**
  * The signed-in frame: a bottom tab bar for one-handed use below `theme.wide`,
@@ -61,13 +62,17 @@ export function AppFrame({ user, children }: { user: PublicUser; children: React
     return (
       <View style={styles.wideRoot}>
         <View style={styles.rail} role="navigation">
-          <Text style={styles.brand}>Sheetkeeper</Text>
+          <SkText variant="heading" tone="navActive" style={styles.brand}>
+            Sheetkeeper
+          </SkText>
           <View style={styles.railItems}>{links}</View>
           <View style={styles.railFoot}>
-            <Text style={styles.railUser} numberOfLines={1}>
+            <SkText variant="label" tone="navActive" style={styles.railUser} numberOfLines={1}>
               {user.displayName}
-            </Text>
-            <Text style={styles.railRole}>{user.role}</Text>
+            </SkText>
+            <SkText variant="mono" tone="navInk" style={styles.railRole}>
+              {user.role}
+            </SkText>
             {signOutButton}
           </View>
         </View>
@@ -78,7 +83,9 @@ export function AppFrame({ user, children }: { user: PublicUser; children: React
   return (
     <View style={styles.narrowRoot}>
       <View style={styles.topBar}>
-        <Text style={styles.brand}>Sheetkeeper</Text>
+        <SkText variant="heading" tone="navActive" style={styles.brand}>
+          Sheetkeeper
+        </SkText>
       </View>
       <View style={styles.main}>{children}</View>
       <View style={styles.tabBar} role="navigation">
@@ -98,13 +105,7 @@ const styles = StyleSheet.create({
     paddingVertical: theme.space(6),
     paddingHorizontal: theme.space(3),
   },
-  brand: {
-    fontFamily: theme.font.bold,
-    fontSize: theme.size.large,
-    color: theme.color.navActive,
-    paddingHorizontal: theme.space(3),
-    letterSpacing: 0.5,
-  },
+  brand: { paddingHorizontal: theme.space(3), letterSpacing: 0.5 },
   railItems: { marginTop: theme.space(8), gap: theme.space(1) },
   railItem: {
     minHeight: theme.touch,
@@ -123,19 +124,8 @@ const styles = StyleSheet.create({
     borderTopColor: '#3A4756',
     paddingTop: theme.space(4),
   },
-  railUser: {
-    fontFamily: theme.font.medium,
-    fontSize: theme.size.body,
-    color: theme.color.navActive,
-    paddingHorizontal: theme.space(3),
-  },
-  railRole: {
-    fontFamily: theme.font.mono,
-    fontSize: theme.size.small,
-    color: theme.color.navInk,
-    paddingHorizontal: theme.space(3),
-    marginBottom: theme.space(2),
-  },
+  railUser: { paddingHorizontal: theme.space(3) },
+  railRole: { paddingHorizontal: theme.space(3), marginBottom: theme.space(2) },
   topBar: { backgroundColor: theme.color.nav, paddingVertical: theme.space(3) },
   tabBar: { flexDirection: 'row', backgroundColor: theme.color.nav, borderTopWidth: 1, borderTopColor: '#3A4756' },
   tabItem: { flex: 1, minHeight: 60, alignItems: 'center', justifyContent: 'center', gap: 2 },

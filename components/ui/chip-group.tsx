@@ -1,5 +1,6 @@
-import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { Pressable, StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
+import { SkText } from './sk-text';
 
 interface Props<V extends string | undefined> {
   label: string;
@@ -15,7 +16,9 @@ interface Props<V extends string | undefined> {
 export function ChipGroup<V extends string | undefined>({ label, options, value, onChange, groupLabel }: Props<V>) {
   return (
     <View style={styles.group}>
-      <Text style={styles.label}>{label}</Text>
+      <SkText variant="smallLabel" style={styles.label}>
+        {label}
+      </SkText>
       <View style={styles.chips} accessibilityRole="radiogroup" accessibilityLabel={groupLabel ?? label}>
         {options.map((o) => {
           const on = o.value === value;
@@ -28,10 +31,10 @@ export function ChipGroup<V extends string | undefined>({ label, options, value,
               onPress={() => onChange(o.value)}
               style={[styles.chip, on && styles.chipOn]}
             >
-              <Text style={[styles.chipText, on && styles.chipTextOn]}>
+              <SkText variant="caption" tone="ink" style={on && styles.chipTextOn}>
                 {on ? '✓ ' : o.glyph ? `${o.glyph} ` : ''}
                 {o.text}
-              </Text>
+              </SkText>
             </Pressable>
           );
         })}
@@ -43,7 +46,7 @@ export function ChipGroup<V extends string | undefined>({ label, options, value,
 const styles = StyleSheet.create({
   // Never wider than its row, so the chips wrap instead of running off a phone's edge.
   group: { gap: theme.space(1), maxWidth: '100%' },
-  label: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft, letterSpacing: 0.3 },
+  label: { letterSpacing: 0.3 },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
   chip: {
     minHeight: 44,
@@ -55,6 +58,5 @@ const styles = StyleSheet.create({
     backgroundColor: theme.color.panel,
   },
   chipOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
-  chipText: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink },
   chipTextOn: { color: theme.color.accentInk, fontFamily: theme.font.medium },
 });

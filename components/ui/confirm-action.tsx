@@ -1,7 +1,8 @@
 import { useState } from 'react';
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import { ActionButton } from './action-button';
+import { SkText } from './sk-text';
 
 interface Props {
   /** The button that asks, e.g. "Revoke". */
@@ -31,7 +32,9 @@ export function ConfirmAction({ label, accessibilityLabel, question, confirmLabe
     );
   return (
     <View style={styles.box} accessibilityLiveRegion="polite">
-      <Text style={styles.question}>{question}</Text>
+      <SkText variant="label" tone="danger">
+        {question}
+      </SkText>
       <View style={styles.buttons}>
         <ActionButton
           label={confirmLabel}
@@ -53,6 +56,5 @@ const styles = StyleSheet.create({
     borderRadius: theme.radius,
     backgroundColor: theme.color.dangerSoft,
   },
-  question: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.danger },
   buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
 });

@@ -1,5 +1,6 @@
-import { Pressable, StyleSheet, Text } from 'react-native';
+import { Pressable, StyleSheet } from 'react-native';
 import { theme } from '../../constants/theme';
+import { SkText } from './sk-text';
 
 /** A way back up from a detail screen ("← Libraries"), a full 44 px target. */
 export function CrumbLink({ label, onPress }: { label: string; onPress: () => void }) {
@@ -10,7 +11,9 @@ export function CrumbLink({ label, onPress }: { label: string; onPress: () => vo
       onPress={onPress}
       style={({ pressed }) => [styles.link, pressed && styles.pressed]}
     >
-      <Text style={styles.text}>← {label}</Text>
+      <SkText variant="smallLabel" tone="accent">
+        ← {label}
+      </SkText>
     </Pressable>
   );
 }
@@ -18,5 +21,4 @@ export function CrumbLink({ label, onPress }: { label: string; onPress: () => vo
 const styles = StyleSheet.create({
   link: { minHeight: 44, justifyContent: 'center', alignSelf: 'flex-start', paddingRight: theme.space(3) },
   pressed: { opacity: 0.7 },
-  text: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.accent },
 });

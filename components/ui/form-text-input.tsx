@@ -1,7 +1,8 @@
-import { StyleSheet, Text, TextInput, View } from 'react-native';
+import { StyleSheet, TextInput, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import { INPUT_BOX_STYLE } from './input-box-style';
 import { RuleLines } from './rule-lines';
+import { SkText } from './sk-text';
 
 interface Props {
   label: string;
@@ -31,7 +32,7 @@ export function FormTextInput({
 }: Props) {
   return (
     <View style={styles.field}>
-      <Text style={styles.label}>{visibleLabel ?? label}</Text>
+      <SkText variant="smallLabel">{visibleLabel ?? label}</SkText>
       <TextInput
         accessibilityLabel={label}
         aria-invalid={rules.length > 0 ? true : undefined}
@@ -43,7 +44,11 @@ export function FormTextInput({
         style={[styles.input, mono && styles.mono, multiline && styles.multiline, rules.length > 0 && styles.invalid]}
         testID={testID}
       />
-      {hint ? <Text style={styles.hint}>{hint}</Text> : null}
+      {hint ? (
+        <SkText variant="caption" tone="inkFaint">
+          {hint}
+        </SkText>
+      ) : null}
       <RuleLines rules={rules.map((r) => `${visibleLabel ?? label} ${r}`)} />
     </View>
   );
@@ -52,7 +57,6 @@ export function FormTextInput({
 const styles = StyleSheet.create({
   // No flexBasis: in a column it would become a height. In a wrapping row, fields grow to share it.
   field: { gap: theme.space(1), flexGrow: 1, minWidth: 100 },
-  label: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft },
   input: {
     ...INPUT_BOX_STYLE,
     minWidth: 0,
@@ -60,5 +64,4 @@ const styles = StyleSheet.create({
   mono: { fontFamily: theme.font.mono },
   multiline: { minHeight: 88, paddingVertical: theme.space(2), textAlignVertical: 'top' },
   invalid: { borderColor: theme.color.danger, borderWidth: 2 },
-  hint: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkFaint },
 });

@@ -1,4 +1,5 @@
 import { theme } from '../../constants/theme';
+import { textVariants } from './text-variants';
 
 /** The look of every text box in the app: one touch target tall, ruled, on the panel colour. */
 export const INPUT_BOX_STYLE = {
@@ -7,8 +8,6 @@ export const INPUT_BOX_STYLE = {
   borderColor: theme.color.rule,
   borderRadius: theme.radius,
   paddingHorizontal: theme.space(3),
-  fontFamily: theme.font.regular,
-  fontSize: theme.size.body,
-  color: theme.color.ink,
+  ...textVariants.body,
   backgroundColor: theme.color.panel,
 } as const;

@@ -1,5 +1,6 @@
-import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { Pressable, StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
+import { SkText } from './sk-text';
 
 /** A switch that says its state in words as well as by position and colour. */
 export function OnOffSwitch({
@@ -30,7 +31,9 @@ export function OnOffSwitch({
       <View style={[styles.track, value ? styles.trackOn : styles.trackOff]}>
         <View style={[styles.knob, value ? styles.knobOn : null]} />
       </View>
-      <Text style={[styles.word, value ? styles.wordOn : null]}>{value ? onWord : offWord}</Text>
+      <SkText variant="smallLabel" style={[styles.word, value ? styles.wordOn : null]}>
+        {value ? onWord : offWord}
+      </SkText>
     </Pressable>
   );
 }
@@ -49,6 +52,6 @@ const styles = StyleSheet.create({
   trackOff: { backgroundColor: theme.color.rule },
   knob: { width: 20, height: 20, borderRadius: 10, backgroundColor: theme.color.panel },
   knobOn: { alignSelf: 'flex-end' },
-  word: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft, minWidth: 48 },
+  word: { minWidth: 48 },
   wordOn: { color: theme.color.accent },
 });

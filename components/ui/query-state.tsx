@@ -1,6 +1,7 @@
-import { ActivityIndicator, StyleSheet, Text, View } from 'react-native';
+import { ActivityIndicator, StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import { ActionButton } from './action-button';
+import { SkText } from './sk-text';
 
 /** Loading, error and empty states, worded the same on every screen. */
 export function QueryState({
@@ -15,13 +16,13 @@ export function QueryState({
   return (
     <View style={styles.box} accessibilityLiveRegion="polite">
       {state === 'loading' ? <ActivityIndicator color={theme.color.accent} accessibilityLabel="Loading" /> : null}
-      <Text style={[styles.text, state === 'error' && styles.error]}>
+      <SkText variant="body" tone="inkSoft" style={[styles.text, state === 'error' && styles.error]}>
         {state === 'loading'
           ? 'Loading…'
           : state === 'error'
             ? `× ${message ?? 'Could not load this.'}`
             : (message ?? 'Nothing here yet.')}
-      </Text>
+      </SkText>
       {state === 'error' && onRetry ? <ActionButton label="Try again" tone="quiet" onPress={onRetry} /> : null}
     </View>
   );
@@ -37,6 +38,6 @@ const styles = StyleSheet.create({
     borderStyle: 'dashed',
     borderRadius: theme.radius,
   },
-  text: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.inkSoft, textAlign: 'center' },
+  text: { textAlign: 'center' },
   error: { color: theme.color.danger },
 });

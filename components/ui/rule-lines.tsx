@@ -1,5 +1,5 @@
-import { StyleSheet, Text, View } from 'react-native';
-import { theme } from '../../constants/theme';
+import { StyleSheet, View } from 'react-native';
+import { SkText } from './sk-text';
 
 /** The rules a field breaks, right under it, each with a glyph so the danger colour is never alone. */
 export function RuleLines({ rules, testID }: { rules: string[]; testID?: string }) {
@@ -7,9 +7,9 @@ export function RuleLines({ rules, testID }: { rules: string[]; testID?: string 
   return (
     <View style={styles.box} testID={testID}>
       {rules.map((rule, i) => (
-        <Text key={i} accessibilityRole="alert" style={styles.rule}>
+        <SkText variant="caption" tone="danger" key={i} accessibilityRole="alert" style={styles.rule}>
           × {rule}
-        </Text>
+        </SkText>
       ))}
     </View>
   );
@@ -17,5 +17,5 @@ export function RuleLines({ rules, testID }: { rules: string[]; testID?: string 
 
 const styles = StyleSheet.create({
   box: { gap: 2 },
-  rule: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.danger, lineHeight: 18 },
+  rule: { lineHeight: 18 },
 });

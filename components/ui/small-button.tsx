@@ -1,5 +1,6 @@
-import { Pressable, StyleSheet, Text } from 'react-native';
+import { Pressable, StyleSheet } from 'react-native';
 import { theme } from '../../constants/theme';
+import { SkText } from './sk-text';
 
 /** A secondary action inside a form (add a point, remove a path): quiet, but still a 44 px target. */
 export function SmallButton({
@@ -20,7 +21,9 @@ export function SmallButton({
       onPress={onPress}
       style={({ pressed }) => [styles.button, pressed && styles.pressed]}
     >
-      <Text style={[styles.text, danger && styles.danger]}>{label}</Text>
+      <SkText variant="smallLabel" tone="ink" style={danger && styles.danger}>
+        {label}
+      </SkText>
     </Pressable>
   );
 }
@@ -38,6 +41,5 @@ const styles = StyleSheet.create({
     alignSelf: 'flex-start',
   },
   pressed: { backgroundColor: theme.color.paper },
-  text: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.ink },
   danger: { color: theme.color.danger },
 });

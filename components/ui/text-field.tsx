@@ -1,7 +1,8 @@
-import { StyleSheet, Text, TextInput, View, type TextInputProps } from 'react-native';
+import { StyleSheet, TextInput, View, type TextInputProps } from 'react-native';
 import { theme } from '../../constants/theme';
 import { INPUT_BOX_STYLE } from './input-box-style';
 import { RuleLines } from './rule-lines';
+import { SkText } from './sk-text';
 
 interface Props extends Pick<
   TextInputProps,
@@ -26,7 +27,9 @@ interface Props extends Pick<
 export function TextField({ label, value, onChangeText, error, testID, mono = false, ...inputProps }: Props) {
   return (
     <View style={styles.field}>
-      <Text style={styles.label}>{label}</Text>
+      <SkText variant="smallLabel" style={styles.label}>
+        {label}
+      </SkText>
       <TextInput
         accessibilityLabel={label}
         aria-invalid={error ? true : undefined}
@@ -50,7 +53,7 @@ export function TextField({ label, value, onChangeText, error, testID, mono = fa
 
 const styles = StyleSheet.create({
   field: { gap: theme.space(1) },
-  label: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.inkSoft, letterSpacing: 0.3 },
+  label: { letterSpacing: 0.3 },
   input: {
     ...INPUT_BOX_STYLE,
   },

@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
+import { SkText } from './sk-text';
 
 /** A panel with a heading and an optional line saying what it is for. */
 export function TitledPanel({
@@ -16,10 +17,14 @@ export function TitledPanel({
 }) {
   return (
     <View style={styles.panel} testID={testID}>
-      <Text accessibilityRole="header" aria-level={2} style={styles.title}>
+      <SkText variant="heading" accessibilityRole="header" aria-level={2}>
         {title}
-      </Text>
-      {lead ? <Text style={styles.lead}>{lead}</Text> : null}
+      </SkText>
+      {lead ? (
+        <SkText variant="caption" style={styles.lead}>
+          {lead}
+        </SkText>
+      ) : null}
       {children}
     </View>
   );
@@ -34,6 +39,5 @@ const styles = StyleSheet.create({
     padding: theme.space(4),
     gap: theme.space(3),
   },
-  title: { fontFamily: theme.font.bold, fontSize: theme.size.large, color: theme.color.ink },
-  lead: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
+  lead: { lineHeight: 20 },
 });

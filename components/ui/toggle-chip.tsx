@@ -1,5 +1,6 @@
-import { Pressable, StyleSheet, Text } from 'react-native';
+import { Pressable, StyleSheet } from 'react-native';
 import { theme } from '../../constants/theme';
+import { SkText } from './sk-text';
 
 /** An on/off choice with a box that shows a tick when on, so the state reads without colour. */
 export function ToggleChip({
@@ -19,9 +20,9 @@ export function ToggleChip({
       onPress={() => onChange(!value)}
       style={[styles.chip, value && styles.on]}
     >
-      <Text style={[styles.text, value && styles.textOn]}>
+      <SkText variant="caption" tone="ink" style={value && styles.textOn}>
         {value ? '✓' : '◊'} {label}
-      </Text>
+      </SkText>
     </Pressable>
   );
 }
@@ -38,6 +39,5 @@ const styles = StyleSheet.create({
     backgroundColor: theme.color.panel,
   },
   on: { borderColor: theme.color.accent, backgroundColor: theme.color.accentSoft },
-  text: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.ink },
   textOn: { fontFamily: theme.font.medium, color: theme.color.accent },
 });

@@ -1,7 +1,8 @@
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { theme } from '../../../constants/theme';
 import { FormTextInput } from '../../ui/form-text-input';
 import { RuleLines } from '../../ui/rule-lines';
+import { SkText } from '../../ui/sk-text';
 import type { ComplexDraft } from './suite-draft';
 
 interface Props {
@@ -16,7 +17,9 @@ interface Props {
 export function ComplexInput({ label, value, onChange, rules }: Props) {
   return (
     <View style={styles.box}>
-      <Text style={styles.label}>{label}</Text>
+      <SkText variant="smallLabel" tone="ink">
+        {label}
+      </SkText>
       <View style={styles.row}>
         <View style={styles.part}>
           <FormTextInput
@@ -46,7 +49,6 @@ export function ComplexInput({ label, value, onChange, rules }: Props) {
 
 const styles = StyleSheet.create({
   box: { gap: theme.space(1), flexGrow: 1, flexShrink: 1, minWidth: 200 },
-  label: { fontFamily: theme.font.medium, fontSize: theme.size.small, color: theme.color.ink },
   row: { flexDirection: 'row', gap: theme.space(2) },
   part: { flex: 1, minWidth: 0 },
 });

@@ -1,5 +1,6 @@
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { theme } from '../../../constants/theme';
+import { SkText } from '../../ui/sk-text';
 import type { FieldRules } from './field-rules';
 import { PointListEditor } from './point-list-editor';
 import { RuleLines } from '../../ui/rule-lines';
@@ -24,17 +25,21 @@ export function CutLayoutEditor({
   const set = (i: number, cut: CutDraft) => onChange(cuts.map((c, j) => (j === i ? cut : c)));
   return (
     <View style={styles.box}>
-      <Text style={styles.heading}>Cut layout</Text>
-      <Text style={styles.lead}>
+      <SkText variant="label">Cut layout</SkText>
+      <SkText variant="caption" style={styles.lead}>
         Each cut is a polyline; its last segment can continue to infinity. Every branch point must lie on a cut, and a
         loop that crosses no cut must come back to the same value.
-      </Text>
+      </SkText>
       <RuleLines rules={rules('branch.cuts').map((r) => `Cut layout: ${r}`)} testID="cut-layout-rules" />
-      {cuts.length === 0 ? <Text style={styles.empty}>No cuts yet.</Text> : null}
+      {cuts.length === 0 ? (
+        <SkText variant="caption" tone="inkFaint">
+          No cuts yet.
+        </SkText>
+      ) : null}
       {cuts.map((cut, i) => (
         <View key={i} style={styles.cut} accessibilityLabel={`Cut ${i + 1}`}>
           <View style={styles.cutHead}>
-            <Text style={styles.cutTitle}>Cut {i + 1}</Text>
+            <SkText variant="label">Cut {i + 1}</SkText>
             <SmallButton
               label="Remove cut"
               accessibilityLabel={`Remove cut ${i + 1}`}
@@ -82,10 +87,7 @@ export function CutLayoutEditor({
 
 const styles = StyleSheet.create({
   box: { gap: theme.space(2) },
-  heading: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
-  lead: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft, lineHeight: 20 },
-  empty: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkFaint },
+  lead: { lineHeight: 20 },
   cut: { gap: theme.space(2), borderLeftWidth: 3, borderLeftColor: theme.color.danger, paddingLeft: theme.space(3) },
   cutHead: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between' },
-  cutTitle: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
 });

@@ -1,6 +1,7 @@
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { formatDate } from '../../../client/format-date';
 import { theme } from '../../../constants/theme';
+import { SkText } from '../../ui/sk-text';
 import { SmallButton } from '../../ui/small-button';
 
 /** Offers the unsaved work this device kept for a form: bring it back, or throw it away. */
@@ -15,10 +16,10 @@ export function KeptDraftNotice({
 }) {
   return (
     <View style={styles.box} accessibilityRole="summary" testID="kept-draft-notice">
-      <Text style={styles.text}>
+      <SkText variant="body">
         This device kept work on this form that was never saved, last changed {formatDate(savedAt)}. Restoring it
         replaces what the form shows now.
-      </Text>
+      </SkText>
       <View style={styles.buttons}>
         <SmallButton label="Restore it" onPress={onRestore} />
         <SmallButton label="Discard it" onPress={onDiscard} danger />
@@ -34,6 +35,5 @@ const styles = StyleSheet.create({
     padding: theme.space(3),
     gap: theme.space(2),
   },
-  text: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.ink },
   buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
 });

@@ -1,6 +1,7 @@
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { theme } from '../../../constants/theme';
 import { ChipGroup } from '../../ui/chip-group';
+import { SkText } from '../../ui/sk-text';
 import { ComplexInput } from './complex-input';
 import { complexRules } from './complex-rules';
 import type { FieldRules } from './field-rules';
@@ -37,7 +38,7 @@ export function PathEditor({
   return (
     <View style={styles.path} accessibilityLabel={n}>
       <View style={styles.head}>
-        <Text style={styles.title}>{n}</Text>
+        <SkText variant="label">{n}</SkText>
         <SmallButton label="Remove path" accessibilityLabel={`Remove path ${index + 1}`} onPress={onRemove} danger />
       </View>
       <RuleLines rules={rules(f).map((r) => `${n} ${r}`)} />
@@ -49,7 +50,7 @@ export function PathEditor({
         rules={rules(`${f}.name`)}
       />
       {path.kind === 'grid' ? (
-        <Text style={styles.note}>A grid from a suite file: kept as it came; the form does not edit grids.</Text>
+        <SkText variant="caption">A grid from a suite file: kept as it came; the form does not edit grids.</SkText>
       ) : (
         <ChipGroup label={`${n} kind`} options={KINDS} value={path.kind} onChange={(kind) => set({ kind })} />
       )}
@@ -220,7 +221,5 @@ export function PathEditor({
 const styles = StyleSheet.create({
   path: { gap: theme.space(3), borderTopWidth: 1, borderTopColor: theme.color.rule, paddingTop: theme.space(3) },
   head: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between' },
-  title: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
-  note: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkSoft },
 });

@@ -1,7 +1,8 @@
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { theme } from '../../../constants/theme';
 import { PROPERTY_LAWS } from '../../../shared/schemas/property-check-schema';
 import { ChipGroup } from '../../ui/chip-group';
+import { SkText } from '../../ui/sk-text';
 import { ComplexInput } from './complex-input';
 import { complexRules } from './complex-rules';
 import type { FieldRules } from './field-rules';
@@ -30,7 +31,7 @@ export function PropertyEditor({
   return (
     <View style={styles.box} accessibilityLabel={n}>
       <View style={styles.head}>
-        <Text style={styles.title}>{n}</Text>
+        <SkText variant="label">{n}</SkText>
         <SmallButton
           label="Remove check"
           accessibilityLabel={`Remove property ${index + 1}`}
@@ -137,6 +138,5 @@ export function PropertyEditor({
 const styles = StyleSheet.create({
   box: { gap: theme.space(3), borderTopWidth: 1, borderTopColor: theme.color.rule, paddingTop: theme.space(3) },
   head: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between' },
-  title: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
 });

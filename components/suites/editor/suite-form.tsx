@@ -1,5 +1,5 @@
 import { useDeferredValue, useMemo, useState } from 'react';
-import { StyleSheet, Text, useWindowDimensions, View } from 'react-native';
+import { StyleSheet, useWindowDimensions, View } from 'react-native';
 import { ApiRequestError } from '../../../client/api-request-error';
 import { useSaveSuite } from '../../../client/use-save-suite';
 import { useSubmitSuite } from '../../../client/use-submit-suite';
@@ -10,6 +10,7 @@ import type { SuiteIssue } from '../../../shared/suite-issue';
 import { validateSuite } from '../../../shared/validate-suite';
 import { ActionButton } from '../../ui/action-button';
 import { ChipGroup } from '../../ui/chip-group';
+import { SkText } from '../../ui/sk-text';
 import { ComplexInput } from './complex-input';
 import { complexRules } from './complex-rules';
 import { CutLayoutEditor } from './cut-layout-editor';
@@ -384,7 +385,11 @@ export function SuiteForm({ initial, editing, draftKey, onDone }: Props) {
         lead="Laws checked on the library's own values at random points (seeded, so a failure can be replayed)."
       >
         <RuleLines rules={rules('properties').map((r) => `Property checks ${r}`)} />
-        {draft.properties.length === 0 ? <Text style={styles.empty}>No property checks.</Text> : null}
+        {draft.properties.length === 0 ? (
+          <SkText variant="caption" tone="inkFaint">
+            No property checks.
+          </SkText>
+        ) : null}
         {draft.properties.map((p, i) => (
           <PropertyEditor
             key={i}
@@ -411,21 +416,27 @@ export function SuiteForm({ initial, editing, draftKey, onDone }: Props) {
       <View style={styles.footer}>
         {refused ? (
           <View style={styles.refusal} accessibilityRole="alert" testID="suite-form-refused">
-            <Text style={styles.refusalTitle}>
+            <SkText variant="label" tone="danger">
               × Not saved: {visible.length} {visible.length === 1 ? 'rule is' : 'rules are'} broken. Nothing you typed
               is lost.
-            </Text>
+            </SkText>
             {visible.map((i, k) => (
-              <Text key={k} style={styles.refusalLine}>
+              <SkText variant="mono" key={k}>
                 • {i.field}: {i.rule}
-              </Text>
+              </SkText>
             ))}
           </View>
         ) : null}
         {serverMessage ? (
-          <Text accessibilityRole="alert" style={styles.serverMessage} testID="suite-form-server-message">
+          <SkText
+            variant="label"
+            tone="danger"
+            accessibilityRole="alert"
+            style={styles.serverMessage}
+            testID="suite-form-server-message"
+          >
             × {serverMessage}
-          </Text>
+          </SkText>
         ) : null}
         <View style={styles.buttons}>
           <ActionButton
@@ -460,7 +471,6 @@ const styles = StyleSheet.create({
   previewColumn: { flex: 2, minWidth: 0, position: 'sticky' as 'relative', top: theme.space(4) },
   column: { gap: theme.space(4) },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
-  empty: { fontFamily: theme.font.regular, fontSize: theme.size.small, color: theme.color.inkFaint },
   footer: { gap: theme.space(3) },
   buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
   refusal: {
@@ -469,14 +479,5 @@ const styles = StyleSheet.create({
     padding: theme.space(3),
     gap: theme.space(1),
   },
-  refusalTitle: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.danger },
-  refusalLine: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.ink },
-  serverMessage: {
-    fontFamily: theme.font.medium,
-    fontSize: theme.size.body,
-    color: theme.color.danger,
-    backgroundColor: theme.color.dangerSoft,
-    padding: theme.space(3),
-    borderRadius: theme.radius,
-  },
+  serverMessage: { backgroundColor: theme.color.dangerSoft, padding: theme.space(3), borderRadius: theme.radius },
 });
