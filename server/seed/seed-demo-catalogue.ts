@@ -7,8 +7,8 @@ import { Schedule } from '../entities/schedule';
 import { Suite } from '../entities/suite';
 import { Target } from '../entities/target';
 import { User } from '../entities/user';
-import { PlanService } from '../services/plan-service';
-import { SuiteService } from '../services/suite-service';
+import { PlanService } from '../plans/plan-service';
+import { SuiteService } from '../suites/suite-service';
 import { DEMO_PLANS } from './demo-plans';
 
 const DEMO_DIR = path.join(__dirname, '..', '..', 'suites', 'demo');
@@ -58,15 +58,13 @@ export async function seedDemoCatalogue(dataSource: DataSource): Promise<{ suite
       },
       null,
     );
-    await dataSource
-      .getRepository(Schedule)
-      .save({
-        plan: { id: view.id },
-        cron: demo.schedule.cron,
-        timeZone: demo.schedule.timeZone,
-        enabled: true,
-        createdBy: maintainer,
-      });
+    await dataSource.getRepository(Schedule).save({
+      plan: { id: view.id },
+      cron: demo.schedule.cron,
+      timeZone: demo.schedule.timeZone,
+      enabled: true,
+      createdBy: maintainer,
+    });
     addedPlans += 1;
   }
   return { suites: addedSuites, plans: addedPlans };

@@ -3,12 +3,12 @@ import { Plan } from '../entities/plan';
 import { Run } from '../entities/run';
 import { Target } from '../entities/target';
 import { User } from '../entities/user';
-import { MailOutbox } from '../services/mail-outbox';
-import { openInstalledTarget } from '../services/open-installed-target';
-import { PlanService } from '../services/plan-service';
-import { RunService } from '../services/run-service';
-import { ShardExecutor } from '../services/shard-executor';
-import type { ShardQueue } from '../services/shard-queue';
+import { MailOutbox } from '../mail/mail-outbox';
+import { openInstalledTarget } from '../targets/open-installed-target';
+import { PlanService } from '../plans/plan-service';
+import { RunService } from '../runs/run-service';
+import { ShardExecutor } from '../runs/shard-executor';
+import type { ShardQueue } from '../runs/shard-queue';
 
 /** The release the demo team's nightly plan followed before it moved to the two newest ones (invented story). */
 const EARLIER_RELEASE = 'complex.js@2.3.0';
