@@ -1,5 +1,5 @@
 import { discoverTargets } from './discover-targets';
-import type { TargetInfo } from './target-info';
+import type { TargetInfo } from '../../shared/target-identity';
 
 /**
  * The installed targets as JSON-ready data for `npx sheetkeeper targets`: name,

@@ -6,7 +6,7 @@ import type { CallResult } from './call-result';
 import type { ComplexPair } from './complex-pair';
 import { OP_ARITY } from './op-arity';
 import type { Target } from './target';
-import type { TargetInfo } from './target-info';
+import type { TargetInfo } from '../../shared/target-identity';
 
 /** A reply line from the program, parsed, or why the batch failed. */
 type Reply = { reply: Record<string, unknown> } | { error: string };

@@ -1,7 +1,7 @@
 import type { CallResult } from './call-result';
 import type { ColumnArg, ColumnResult } from './column-args';
 import type { ComplexPair } from './complex-pair';
-import type { TargetInfo } from './target-info';
+import type { TargetInfo } from '../../shared/target-identity';
 
 /**
  * A library under test. `evaluate` takes a batch: one item per call, each the list of

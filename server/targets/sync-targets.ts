@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm';
 import { discoverTargets } from '../../harness/adapters/discover-targets';
-import type { TargetInfo } from '../../harness/adapters/target-info';
+import type { TargetInfo } from '../../shared/target-identity';
 import { Target } from '../entities/target';
 
 /**

@@ -1,5 +1,5 @@
 import type { ComplexPair } from '../../adapters/complex-pair';
-import type { TargetInfo } from '../../adapters/target-info';
+import type { TargetInfo } from '../../../shared/target-identity';
 import { formatHexDouble } from '../../checks/format-hex-double';
 import type { SubjectProgram } from './subject-program';
 

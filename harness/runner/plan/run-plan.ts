@@ -8,8 +8,8 @@ import { evaluateSuite } from '../evaluation/evaluate-suite';
 import { mergePairResults } from './merge-pair-results';
 import type { Plan, Shard } from './plan';
 import { ReferenceCache, type CacheRecords } from '../reference-cache/reference-cache';
-import { shardFailure } from './shard-failure';
-import type { WorkerReply, WorkerRequest } from '../shard-worker/shard-worker-messages';
+import { shardFailure } from './slice-failure';
+import type { WorkerReply, WorkerRequest } from '../slice-worker/slice-worker-messages';
 import type { TargetRef } from './target-ref';
 
 /** What a pass means, in every output. */
@@ -293,7 +293,7 @@ async function runInWorkers(
   cancelledReason: () => string,
 ): Promise<void> {
   const queue = [...plan.shards];
-  const entry = path.join(__dirname, '..', 'shard-worker', 'shard-worker-entry.cjs');
+  const entry = path.join(__dirname, '..', 'slice-worker', 'slice-worker-entry.cjs');
   const lane = async (): Promise<void> => {
     let worker: Worker | null = null;
     // A worker counts as started once it has loaded the engine and said so; start-up is not part of any shard's time.

@@ -1,5 +1,5 @@
 import type { Target } from '../../adapters/target';
-import type { TargetInfo } from '../../adapters/target-info';
+import type { TargetInfo } from '../../../shared/target-identity';
 
 /**
  * A target a plan names: how to open it in this process, and how a worker thread opens it —

@@ -4,7 +4,7 @@ import { discoverTargets } from '../../adapters/discover-targets';
 import { parseSubject } from '../../expressions/parse-subject';
 import { evaluateSuite } from '../evaluation/evaluate-suite';
 import { ReferenceCache } from '../reference-cache/reference-cache';
-import type { WorkerReply, WorkerRequest } from './shard-worker-messages';
+import type { WorkerReply, WorkerRequest } from './slice-worker-messages';
 import type { TargetRef } from '../plan/target-ref';
 
 /**

@@ -1,6 +1,6 @@
 import type { PathResult, SuiteTargetResult } from '../../../shared/run-result';
 import type { Suite } from '../../../shared/schemas/suite-schema';
-import type { TargetInfo } from '../../adapters/target-info';
+import type { TargetInfo } from '../../../shared/target-identity';
 
 /**
  * The result of a shard that produced none of its own — the target hung past the time limit,
