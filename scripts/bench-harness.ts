@@ -23,7 +23,7 @@ import { evaluateSuite } from '../harness/runner/evaluation/evaluate-suite';
 import { ReferenceCache } from '../harness/runner/reference-cache/reference-cache';
 import { runPlan } from '../harness/runner/plan/run-plan';
 import { suiteCacheKey } from '../harness/runner/reference-cache/suite-cache-key';
-import type { TargetRef } from '../harness/runner/plan/target-ref';
+import type { TargetDescriptor } from '../harness/adapters/target-descriptor';
 import { toPathSpec } from '../harness/runner/evaluation/to-path-spec';
 import type { Suite } from '../shared/schemas/suite-schema';
 import { validateSuite } from '../shared/validate-suite';
@@ -72,7 +72,7 @@ const rate = (n: number, ms: number) => `${(((n / ms) * 1000) / 1e6).toFixed(2)}
 async function main(): Promise<void> {
   const complexJs = discoverTargets().find((t) => t.name === 'complex.js@2.4.3');
   if (!complexJs) throw new Error('complex.js@2.4.3 is not installed');
-  const ref: TargetRef = {
+  const ref: TargetDescriptor = {
     name: complexJs.name,
     library: complexJs.library,
     version: complexJs.version,
@@ -89,7 +89,7 @@ async function main(): Promise<void> {
     // B first: it also fills the cache that A reads.
     const suites = FUNCTIONS.map((fn) => suiteFor(fn, POINTS_PER_SUITE));
     const plan = buildPlan(suites, [ref]);
-    const total = plan.shards.reduce((s, sh) => s + sh.points, 0);
+    const total = plan.slices.reduce((s, sh) => s + sh.points, 0);
     let t0 = performance.now();
     const cold = await runPlan(plan, { cacheDir: dir, workers: 2 });
     const coldMs = performance.now() - t0;
@@ -97,7 +97,7 @@ async function main(): Promise<void> {
     const warm = await runPlan(buildPlan(suites, [ref]), { cacheDir: dir, workers: 2 });
     const warmMs = performance.now() - t0;
     console.log(
-      `\nB. ${total.toLocaleString('en')}-point plan (${suites.length} suites × complex.js, ${plan.shards.length} shards), 2 worker threads, no database:`,
+      `\nB. ${total.toLocaleString('en')}-point plan (${suites.length} suites × complex.js, ${plan.slices.length} slices), 2 worker threads, no database:`,
     );
     console.log(
       `   empty cache: ${seconds(coldMs)} s (${cold.reference.computed.toLocaleString('en')} reference values computed) — target ≤ 30 s`,

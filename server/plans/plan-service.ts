@@ -3,7 +3,7 @@ import type { PlanView } from '../../shared/plan-view';
 import type { PlanBody } from '../../shared/schemas/plan-body';
 import { Plan } from '../entities/plan';
 import { Suite } from '../entities/suite';
-import { Target } from '../entities/target';
+import { TargetRow } from '../entities/target-row';
 import type { User } from '../entities/user';
 import { HttpError } from '../http/http-error';
 import { InputError } from '../http/input-error';
@@ -66,8 +66,8 @@ export class PlanService {
     return tx.getRepository(Suite).findBy({ slug: In(slugs) });
   }
 
-  private async knownTargets(tx: EntityManager, names: string[]): Promise<Target[]> {
-    const found = await tx.getRepository(Target).findBy({ name: In(names) });
+  private async knownTargets(tx: EntityManager, names: string[]): Promise<TargetRow[]> {
+    const found = await tx.getRepository(TargetRow).findBy({ name: In(names) });
     const known = new Map(found.map((t) => [t.name, t]));
     const issues = names.flatMap((name, i) => {
       const target = known.get(name);

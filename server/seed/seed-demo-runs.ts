@@ -1,7 +1,7 @@
 import type { DataSource } from 'typeorm';
 import { Plan } from '../entities/plan';
 import { Run } from '../entities/run';
-import { Target } from '../entities/target';
+import { TargetRow } from '../entities/target-row';
 import { User } from '../entities/user';
 import { MailOutbox } from '../mail/mail-outbox';
 import { openInstalledTarget } from '../targets/open-installed-target';
@@ -58,7 +58,7 @@ export async function seedDemoRuns(
   };
 
   let added = 0;
-  if (await dataSource.getRepository(Target).existsBy({ name: EARLIER_RELEASE, installed: true })) {
+  if (await dataSource.getRepository(TargetRow).existsBy({ name: EARLIER_RELEASE, installed: true })) {
     await plans.save(kwame, { ...body, targets: [EARLIER_RELEASE] }, plan.id);
     try {
       await runOnce();

@@ -1,18 +1,21 @@
 import type { DataSource } from 'typeorm';
 import { discoverTargets } from '../../harness/adapters/discover-targets';
-import type { TargetInfo } from '../../shared/target-identity';
-import { Target } from '../entities/target';
+import type { TargetIdentity } from '../../shared/target-identity';
+import { TargetRow } from '../entities/target-row';
 
 /**
  * Records the targets installed on this machine (loading no library) and marks the ones
  * no longer found as not installed, so plans keep naming them and say so. Returns the count.
  */
-export async function syncTargets(dataSource: DataSource, found: TargetInfo[] = discoverTargets()): Promise<number> {
+export async function syncTargets(
+  dataSource: DataSource,
+  found: TargetIdentity[] = discoverTargets(),
+): Promise<number> {
   const now = new Date();
   await dataSource.transaction(async (tx) => {
     await tx.query('UPDATE targets SET installed = false');
     if (found.length > 0) {
-      await tx.getRepository(Target).upsert(
+      await tx.getRepository(TargetRow).upsert(
         found.map((t) => ({
           name: t.name,
           library: t.library,

@@ -1,5 +1,5 @@
 import type { ComplexPair } from '../../adapters/complex-pair';
-import type { TargetInfo } from '../../../shared/target-identity';
+import type { TargetIdentity } from '../../../shared/target-identity';
 import { formatHexDouble } from '../../checks/format-hex-double';
 import type { SubjectProgram } from './subject-program';
 
@@ -34,7 +34,7 @@ const PYTHON_OPERATOR: Readonly<Record<string, string>> = { add: '+', sub: '-', 
  * adapters do, because some versions' constructors drop a −0 (see with-exact-parts.ts).
  * Stdio targets other than cmath get the request lines of the stdio protocol.
  */
-export function reproducer(program: SubjectProgram, target: TargetInfo, z: ComplexPair, subject: string): string {
+export function reproducer(program: SubjectProgram, target: TargetIdentity, z: ComplexPair, subject: string): string {
   const header = `${target.name}: ${subject} at z = ${jsNumber(z[0])} + ${jsNumber(z[1])}i`;
   if (target.library === 'complex.js') return complexJs(program, target, z, header);
   if (target.library === 'mathjs') return mathjs(program, target, z, header);
@@ -43,7 +43,7 @@ export function reproducer(program: SubjectProgram, target: TargetInfo, z: Compl
   return stdio(program, target, z, header);
 }
 
-function complexJs(program: SubjectProgram, target: TargetInfo, z: ComplexPair, header: string): string {
+function complexJs(program: SubjectProgram, target: TargetIdentity, z: ComplexPair, header: string): string {
   const pkg = String(target.settings.package ?? 'complex.js');
   const lines = [
     `// ${header}`,
@@ -61,7 +61,7 @@ function complexJs(program: SubjectProgram, target: TargetInfo, z: ComplexPair, 
   return lines.join('\n');
 }
 
-function mathjs(program: SubjectProgram, target: TargetInfo, z: ComplexPair, header: string): string {
+function mathjs(program: SubjectProgram, target: TargetIdentity, z: ComplexPair, header: string): string {
   const pkg = String(target.settings.package ?? 'mathjs');
   const numberEntry = target.settings.entry === 'number';
   const lines = [
@@ -131,7 +131,7 @@ function jsMath(program: SubjectProgram, z: ComplexPair, header: string): string
   return lines.join('\n');
 }
 
-function stdio(program: SubjectProgram, target: TargetInfo, z: ComplexPair, header: string): string {
+function stdio(program: SubjectProgram, target: TargetIdentity, z: ComplexPair, header: string): string {
   const wire = (p: ComplexPair) => [formatHexDouble(p[0]), formatHexDouble(p[1])];
   const lines = [`# ${header}: stdio protocol requests, one per step (docs/stdio-protocol.md)`];
   const command = String(target.settings.command ?? '<adapter command>');

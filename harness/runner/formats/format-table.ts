@@ -56,7 +56,7 @@ function pair(r: SuiteTargetResult, maxRows: number): string[] {
  */
 export function formatTable(result: RunResult, maxRows = 12): string {
   const lines = [
-    `sheetkeeper run: ${result.plan.suites.length} suite(s) × ${result.plan.targets.length} target(s), ${result.plan.shards} shard(s); status ${result.status.toUpperCase()}`,
+    `sheetkeeper run: ${result.plan.suites.length} suite(s) × ${result.plan.targets.length} target(s), ${result.plan.slices} slice(s); status ${result.status.toUpperCase()}`,
     `points: ${counts(result.counts)}${diagnoses(result.byDiagnosis)}; reference values computed ${result.reference.computed}, from the cache ${result.reference.cached}`,
     '',
   ];

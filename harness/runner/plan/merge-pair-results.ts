@@ -3,9 +3,9 @@ import type { DiagnosisKind } from '../../../shared/diagnosis';
 import type { OutcomeCounts, PathResult, SuiteTargetResult } from '../../../shared/run-result';
 
 /**
- * Joins the shard results of one suite × target pair into one result: paths in the suite's
+ * Joins the slice results of one suite × target pair into one result: paths in the suite's
  * order, counts, diagnoses, errors and reference figures summed, and the status decided again
- * (error before fail before pass; cancelled when any shard was).
+ * (error before fail before pass; cancelled when any slice was).
  */
 export function mergePairResults(
   parts: { paths: number[]; result: SuiteTargetResult }[],

@@ -1,8 +1,8 @@
 import type { Suite } from '../../../shared/schemas/suite-schema';
-import type { TargetRef } from './target-ref';
+import type { TargetDescriptor } from '../../adapters/target-descriptor';
 
 /** A unit of work a worker takes from the queue: some paths of one suite against one target. */
-export interface Shard {
+export interface Slice {
   id: number;
   suite: number;
   target: number;
@@ -11,10 +11,10 @@ export interface Shard {
   points: number;
 }
 
-/** Suites × targets, split into shards (docs/vocabulary.md). `pathPoints[s][p]` is the size of path p of suite s. */
+/** Suites × targets, split into slices (docs/vocabulary.md). `pathPoints[s][p]` is the size of path p of suite s. */
 export interface Plan {
   suites: Suite[];
-  targets: TargetRef[];
+  targets: TargetDescriptor[];
   pathPoints: number[][];
-  shards: Shard[];
+  slices: Slice[];
 }

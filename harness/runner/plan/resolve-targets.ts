@@ -1,7 +1,6 @@
 import type { TargetDescriptor } from '../../adapters/target-descriptor';
-import type { TargetRef } from './target-ref';
 
-export type TargetResolution = { ok: true; targets: TargetRef[] } | { ok: false; message: string };
+export type TargetResolution = { ok: true; targets: TargetDescriptor[] } | { ok: false; message: string };
 
 const numeric = (v: string): number[] => v.split(/[.-]/).map((x) => Number(x) || 0);
 const newer = (a: string, b: string): number => {
@@ -19,7 +18,7 @@ const newer = (a: string, b: string): number => {
  * its newest installed version. Anything else is bad input, answered with the names known.
  */
 export function resolveTargets(names: string[], installed: TargetDescriptor[]): TargetResolution {
-  const out: TargetRef[] = [];
+  const out: TargetDescriptor[] = [];
   for (const raw of names) {
     const name = raw.trim();
     let found = installed.find((t) => t.name === name);

@@ -6,11 +6,11 @@ import type { Suite } from '../../../shared/schemas/suite-schema';
 import type { Target } from '../../adapters/target';
 import { evaluateSuite } from '../evaluation/evaluate-suite';
 import { mergePairResults } from './merge-pair-results';
-import type { Plan, Shard } from './plan';
+import type { Plan, Slice } from './plan';
 import { ReferenceCache, type CacheRecords } from '../reference-cache/reference-cache';
-import { shardFailure } from './slice-failure';
+import { sliceFailure } from './slice-failure';
 import type { WorkerReply, WorkerRequest } from '../slice-worker/slice-worker-messages';
-import type { TargetRef } from './target-ref';
+import type { TargetDescriptor } from '../../adapters/target-descriptor';
 
 /** What a pass means, in every output. */
 export const DISCLAIMER =
@@ -18,19 +18,19 @@ export const DISCLAIMER =
 
 /** Where the reference cache lives unless told otherwise (the project's ignored data folder). */
 export const DEFAULT_CACHE_DIR = path.resolve(__dirname, '..', '..', '..', '.data', 'reference-cache');
-/** A shard gets two minutes: the largest demo shard takes under 2 s cold (bench:harness). */
-export const DEFAULT_SHARD_TIME_LIMIT_MS = 120_000;
+/** A slice gets two minutes: the largest demo slice takes under 2 s cold (bench:harness). */
+export const DEFAULT_SLICE_TIME_LIMIT_MS = 120_000;
 /** How long a worker thread may take to load tsx, the engine and mathjs (~1–2 s here) before it counts as failed. */
 const STARTUP_MS = 60_000;
-/** After aborting a shard, how long to wait for it to wind down before giving up on it (and, in a worker, terminating it). */
+/** After aborting a slice, how long to wait for it to wind down before giving up on it (and, in a worker, terminating it). */
 const GRACE_MS = 2_000;
 
 export type RunEvent =
-  | { type: 'plan'; shards: number; points: number; suites: number; targets: number }
-  | { type: 'shard-start'; shard: number; suite: string; target: string; points: number }
+  | { type: 'plan'; slices: number; points: number; suites: number; targets: number }
+  | { type: 'slice-start'; slice: number; suite: string; target: string; points: number }
   | {
-      type: 'shard-end';
-      shard: number;
+      type: 'slice-end';
+      slice: number;
       suite: string;
       target: string;
       status: SuiteTargetResult['status'];
@@ -45,29 +45,29 @@ export interface RunOptions {
   cacheDir?: string | null;
   /** A cache object to use instead (tests count its reference calls); its folder is ignored for workers. */
   cache?: ReferenceCache;
-  /** Worker threads; 0 (default) runs shards one after another in this process. */
+  /** Worker threads; 0 (default) runs slices one after another in this process. */
   workers?: number;
-  shardTimeLimitMs?: number;
+  sliceTimeLimitMs?: number;
   signal?: AbortSignal;
   onEvent?: (event: RunEvent) => void;
   maxFindings?: number;
   seed?: number | null;
-  /** Property checks per suite × target, run in this process after its shards (the properties work plugs in here). */
+  /** Property checks per suite × target, run in this process after its slices (the properties work plugs in here). */
   properties?: (suite: Suite, target: Target, seed: number | null) => Promise<PropertyOutcomeSummary[]>;
   /** Version string of the tool, for the result. */
   toolVersion?: string;
 }
 
-interface ShardOutcome {
-  shard: Shard;
+interface SliceOutcome {
+  slice: Slice;
   result: SuiteTargetResult;
 }
 
 /**
- * Runs a plan (docs/vocabulary.md): shards taken from a queue, in this process or by worker threads,
- * with progress events, cancellation and a time limit per shard. A target that hangs past the
- * limit, throws or crashes its worker turns that shard's points into errors naming what
- * happened; the run goes on with the next shard (a fresh target, a fresh worker). Reference
+ * Runs a plan (docs/vocabulary.md): slices taken from a queue, in this process or by worker threads,
+ * with progress events, cancellation and a time limit per slice. A target that hangs past the
+ * limit, throws or crashes its worker turns that slice's points into errors naming what
+ * happened; the run goes on with the next slice (a fresh target, a fresh worker). Reference
  * values come from the cache and what is computed is added to it, so a repeated run computes none.
  *
  * In process, a time limit can stop a target that waits (a stdio program that does not answer:
@@ -79,23 +79,23 @@ export async function runPlan(plan: Plan, options: RunOptions = {}): Promise<Run
   const emit = options.onEvent ?? (() => undefined);
   const cacheDir = options.cacheDir === undefined ? DEFAULT_CACHE_DIR : options.cacheDir;
   const cache = options.cache ?? new ReferenceCache(cacheDir);
-  const limit = options.shardTimeLimitMs ?? DEFAULT_SHARD_TIME_LIMIT_MS;
-  const total = plan.shards.reduce((s, sh) => s + sh.points, 0);
+  const limit = options.sliceTimeLimitMs ?? DEFAULT_SLICE_TIME_LIMIT_MS;
+  const total = plan.slices.reduce((s, sh) => s + sh.points, 0);
   emit({
     type: 'plan',
-    shards: plan.shards.length,
+    slices: plan.slices.length,
     points: total,
     suites: plan.suites.length,
     targets: plan.targets.length,
   });
   let done = 0;
-  const outcomes: ShardOutcome[] = [];
-  const finish = (shard: Shard, result: SuiteTargetResult, ms: number) => {
-    outcomes.push({ shard, result });
-    done += shard.points;
+  const outcomes: SliceOutcome[] = [];
+  const finish = (slice: Slice, result: SuiteTargetResult, ms: number) => {
+    outcomes.push({ slice, result });
+    done += slice.points;
     emit({
-      type: 'shard-end',
-      shard: shard.id,
+      type: 'slice-end',
+      slice: slice.id,
       suite: result.suite.id,
       target: result.target.name,
       status: result.status,
@@ -126,8 +126,8 @@ export async function runPlan(plan: Plan, options: RunOptions = {}): Promise<Run
   for (let s = 0; s < plan.suites.length; s++) {
     for (let t = 0; t < plan.targets.length; t++) {
       const parts = outcomes
-        .filter((o) => o.shard.suite === s && o.shard.target === t)
-        .map((o) => ({ paths: o.shard.paths, result: o.result }));
+        .filter((o) => o.slice.suite === s && o.slice.target === t)
+        .map((o) => ({ paths: o.slice.paths, result: o.result }));
       if (parts.length === 0) continue;
       const suite = plan.suites[s] as Suite;
       const merged = mergePairResults(
@@ -136,7 +136,7 @@ export async function runPlan(plan: Plan, options: RunOptions = {}): Promise<Run
         (plan.pathPoints[s] ?? []).reduce((a, b) => a + b, 0),
       );
       if (options.properties && !options.signal?.aborted && merged.status !== 'cancelled') {
-        const target = (plan.targets[t] as TargetRef).open();
+        const target = (plan.targets[t] as TargetDescriptor).open();
         try {
           merged.properties = await options.properties(suite, target, options.seed ?? null);
           merged.checked.properties = {
@@ -186,7 +186,7 @@ export async function runPlan(plan: Plan, options: RunOptions = {}): Promise<Run
     plan: {
       suites: plan.suites.map((s) => ({ id: s.id, version: s.version })),
       targets: plan.targets.map((t) => t.name),
-      shards: plan.shards.length,
+      slices: plan.slices.length,
     },
     counts,
     byDiagnosis,
@@ -204,25 +204,25 @@ async function runInProcess(
   cache: ReferenceCache,
   options: RunOptions,
   emit: (e: RunEvent) => void,
-  finish: (shard: Shard, result: SuiteTargetResult, ms: number) => void,
+  finish: (slice: Slice, result: SuiteTargetResult, ms: number) => void,
   cancelledReason: () => string,
 ): Promise<void> {
   const open = new Map<number, Target>();
   const targetFor = (t: number): Target => {
     let target = open.get(t);
-    if (!target) open.set(t, (target = (plan.targets[t] as TargetRef).open()));
+    if (!target) open.set(t, (target = (plan.targets[t] as TargetDescriptor).open()));
     return target;
   };
   try {
-    for (const shard of plan.shards) {
-      const suite = plan.suites[shard.suite] as Suite;
-      const ref = plan.targets[shard.target] as TargetRef;
-      const pathPoints = plan.pathPoints[shard.suite] ?? [];
+    for (const slice of plan.slices) {
+      const suite = plan.suites[slice.suite] as Suite;
+      const ref = plan.targets[slice.target] as TargetDescriptor;
+      const pathPoints = plan.pathPoints[slice.suite] ?? [];
       if (options.signal?.aborted) {
-        finish(shard, shardFailure(suite, ref, shard.paths, pathPoints, cancelledReason(), 'cancelled'), 0);
+        finish(slice, sliceFailure(suite, ref, slice.paths, pathPoints, cancelledReason(), 'cancelled'), 0);
         continue;
       }
-      emit({ type: 'shard-start', shard: shard.id, suite: suite.id, target: ref.name, points: shard.points });
+      emit({ type: 'slice-start', slice: slice.id, suite: suite.id, target: ref.name, points: slice.points });
       const started = Date.now();
       const controller = new AbortController();
       const onRunAbort = () => controller.abort(new Error(cancelledReason()));
@@ -230,13 +230,13 @@ async function runInProcess(
       let timedOut = false;
       const timer = setTimeout(() => {
         timedOut = true;
-        controller.abort(new Error(`the shard exceeded its time limit of ${limit} ms`));
+        controller.abort(new Error(`the slice exceeded its time limit of ${limit} ms`));
       }, limit);
-      const target = targetFor(shard.target);
+      const target = targetFor(slice.target);
       const work = evaluateSuite(suite, target, {
         cache,
         signal: controller.signal,
-        paths: shard.paths,
+        paths: slice.paths,
         maxFindings: options.maxFindings,
       }).then(
         (r) => ({ ok: true as const, r }),
@@ -251,30 +251,30 @@ async function runInProcess(
       let result: SuiteTargetResult;
       if (first === 'aborted' || controller.signal.aborted) {
         // Kill what the target holds (a stdio program that does not answer), let the work wind
-        // down for a moment, and give later shards a fresh target.
+        // down for a moment, and give later slices a fresh target.
         await Promise.race([target.close(), delay(GRACE_MS)]);
         await Promise.race([work, delay(GRACE_MS)]);
-        open.delete(shard.target);
+        open.delete(slice.target);
         const reason = timedOut
-          ? `${ref.name} did not finish within the shard time limit of ${limit} ms; the shard was stopped and the target restarted`
+          ? `${ref.name} did not finish within the slice time limit of ${limit} ms; the slice was stopped and the target restarted`
           : cancelledReason();
-        result = shardFailure(suite, ref, shard.paths, pathPoints, reason, timedOut ? 'error' : 'cancelled');
+        result = sliceFailure(suite, ref, slice.paths, pathPoints, reason, timedOut ? 'error' : 'cancelled');
       } else if (!first.ok) {
         await target.close().catch(() => undefined);
-        open.delete(shard.target);
-        result = shardFailure(
+        open.delete(slice.target);
+        result = sliceFailure(
           suite,
           ref,
-          shard.paths,
+          slice.paths,
           pathPoints,
-          `the shard failed: ${first.e instanceof Error ? first.e.message : String(first.e)}`,
+          `the slice failed: ${first.e instanceof Error ? first.e.message : String(first.e)}`,
           'error',
         );
       } else {
         result = first.r;
       }
       cache.flush();
-      finish(shard, result, Date.now() - started);
+      finish(slice, result, Date.now() - started);
     }
   } finally {
     await Promise.all([...open.values()].map((t) => Promise.race([t.close(), delay(GRACE_MS)]).catch(() => undefined)));
@@ -289,14 +289,14 @@ async function runInWorkers(
   cache: ReferenceCache,
   options: RunOptions,
   emit: (e: RunEvent) => void,
-  finish: (shard: Shard, result: SuiteTargetResult, ms: number) => void,
+  finish: (slice: Slice, result: SuiteTargetResult, ms: number) => void,
   cancelledReason: () => string,
 ): Promise<void> {
-  const queue = [...plan.shards];
+  const queue = [...plan.slices];
   const entry = path.join(__dirname, '..', 'slice-worker', 'slice-worker-entry.cjs');
   const lane = async (): Promise<void> => {
     let worker: Worker | null = null;
-    // A worker counts as started once it has loaded the engine and said so; start-up is not part of any shard's time.
+    // A worker counts as started once it has loaded the engine and said so; start-up is not part of any slice's time.
     const spawn = async (): Promise<Worker> => {
       const w = new Worker(entry, { workerData: { cacheDir } });
       const ready = await new Promise<true | string>((resolve) => {
@@ -317,33 +317,33 @@ async function runInWorkers(
       return w;
     };
     try {
-      for (let shard = queue.shift(); shard; shard = queue.shift()) {
-        const suite = plan.suites[shard.suite] as Suite;
-        const ref = plan.targets[shard.target] as TargetRef;
-        const pathPoints = plan.pathPoints[shard.suite] ?? [];
+      for (let slice = queue.shift(); slice; slice = queue.shift()) {
+        const suite = plan.suites[slice.suite] as Suite;
+        const ref = plan.targets[slice.target] as TargetDescriptor;
+        const pathPoints = plan.pathPoints[slice.suite] ?? [];
         if (options.signal?.aborted) {
-          finish(shard, shardFailure(suite, ref, shard.paths, pathPoints, cancelledReason(), 'cancelled'), 0);
+          finish(slice, sliceFailure(suite, ref, slice.paths, pathPoints, cancelledReason(), 'cancelled'), 0);
           continue;
         }
-        emit({ type: 'shard-start', shard: shard.id, suite: suite.id, target: ref.name, points: shard.points });
+        emit({ type: 'slice-start', slice: slice.id, suite: suite.id, target: ref.name, points: slice.points });
         const started = Date.now();
         try {
           worker ??= await spawn();
         } catch (e) {
           finish(
-            shard,
-            shardFailure(suite, ref, shard.paths, pathPoints, e instanceof Error ? e.message : String(e), 'error'),
+            slice,
+            sliceFailure(suite, ref, slice.paths, pathPoints, e instanceof Error ? e.message : String(e), 'error'),
             Date.now() - started,
           );
           continue;
         }
         const w: Worker = worker;
         const request: WorkerRequest = {
-          type: 'shard',
-          shard: shard.id,
+          type: 'slice',
+          slice: slice.id,
           suite,
-          paths: shard.paths,
-          target: { name: ref.name, spec: ref.worker as NonNullable<TargetRef['worker']> },
+          paths: slice.paths,
+          target: { name: ref.name, spec: ref.worker as NonNullable<TargetDescriptor['worker']> },
           maxFindings: options.maxFindings,
         };
         const outcome = await new Promise<
@@ -377,7 +377,7 @@ async function runInWorkers(
           const timer = setTimeout(
             () =>
               stop(
-                `${ref.name} did not finish within the shard time limit of ${limit} ms; the shard was stopped and the target restarted`,
+                `${ref.name} did not finish within the slice time limit of ${limit} ms; the slice was stopped and the target restarted`,
                 'error',
               ),
             limit,
@@ -392,10 +392,10 @@ async function runInWorkers(
               }
               return;
             }
-            if (m.type === 'result' && m.shard === shard.id)
+            if (m.type === 'result' && m.slice === slice.id)
               settle({ kind: 'result', result: m.result, records: m.records });
-            else if (m.type === 'failed' && m.shard === shard.id)
-              settle({ kind: 'failed', reason: `the shard failed: ${m.error}`, terminate: false, status: 'error' });
+            else if (m.type === 'failed' && m.slice === slice.id)
+              settle({ kind: 'failed', reason: `the slice failed: ${m.error}`, terminate: false, status: 'error' });
           };
           const onError = (e: Error) =>
             settle({ kind: 'failed', reason: `the worker crashed: ${e.message}`, terminate: true, status: 'error' });
@@ -411,15 +411,15 @@ async function runInWorkers(
           cache.computed += outcome.result.reference.computed;
           cache.cached += outcome.result.reference.cached;
           cache.flush();
-          finish(shard, outcome.result, Date.now() - started);
+          finish(slice, outcome.result, Date.now() - started);
         } else {
           if (outcome.terminate) {
             await w.terminate().catch(() => undefined);
             worker = null;
           }
           finish(
-            shard,
-            shardFailure(suite, ref, shard.paths, pathPoints, outcome.reason, outcome.status),
+            slice,
+            sliceFailure(suite, ref, slice.paths, pathPoints, outcome.reason, outcome.status),
             Date.now() - started,
           );
         }
@@ -433,7 +433,7 @@ async function runInWorkers(
       }
     }
   };
-  await Promise.all(Array.from({ length: Math.min(count, Math.max(1, plan.shards.length)) }, lane));
+  await Promise.all(Array.from({ length: Math.min(count, Math.max(1, plan.slices.length)) }, lane));
 }
 
 function delay(ms: number): Promise<void> {

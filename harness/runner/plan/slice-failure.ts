@@ -1,15 +1,15 @@
 import type { PathResult, SuiteTargetResult } from '../../../shared/run-result';
 import type { Suite } from '../../../shared/schemas/suite-schema';
-import type { TargetInfo } from '../../../shared/target-identity';
+import type { TargetIdentity } from '../../../shared/target-identity';
 
 /**
- * The result of a shard that produced none of its own — the target hung past the time limit,
+ * The result of a slice that produced none of its own — the target hung past the time limit,
  * crashed the worker, or the run was cancelled first: every point of its paths becomes an
  * error (or, when cancelled, skipped) with the reason, so the run goes on and says what happened.
  */
-export function shardFailure(
+export function sliceFailure(
   suite: Suite,
-  target: TargetInfo,
+  target: TargetIdentity,
   paths: number[],
   pathPoints: number[],
   reason: string,

@@ -5,22 +5,22 @@ import { parseSubject } from '../../expressions/parse-subject';
 import { evaluateSuite } from '../evaluation/evaluate-suite';
 import { ReferenceCache } from '../reference-cache/reference-cache';
 import type { WorkerReply, WorkerRequest } from './slice-worker-messages';
-import type { TargetRef } from '../plan/target-ref';
+import type { TargetDescriptor } from '../../adapters/target-descriptor';
 
 /**
- * The body of a shard worker thread (run-plan.ts): takes one shard at a time, opens its
+ * The body of a slice worker thread (run-plan.ts): takes one slice at a time, opens its
  * target once per worker (a discovered target by name, or a module's `openTarget(...args)`),
- * evaluates the shard's paths with its own read-only view of the reference cache, and sends
+ * evaluates the slice's paths with its own read-only view of the reference cache, and sends
  * the result with the values it computed, which the main thread writes to the cache. On
- * `abort` it stops the shard and closes its targets (so a hung stdio program is killed).
+ * `abort` it stops the slice and closes its targets (so a hung stdio program is killed).
  */
 const port = parentPort;
-if (!port) throw new Error('shard-worker.ts runs in a worker thread');
+if (!port) throw new Error('slice-worker.ts runs in a worker thread');
 const cache = new ReferenceCache((workerData as { cacheDir: string | null }).cacheDir);
 const targets = new Map<string, Target>();
 let current: AbortController | null = null;
 
-function openTarget(name: string, spec: NonNullable<TargetRef['worker']>): Target {
+function openTarget(name: string, spec: NonNullable<TargetDescriptor['worker']>): Target {
   const known = targets.get(name);
   if (known) return known;
   let target: Target;
@@ -68,14 +68,14 @@ port.on('message', (m: WorkerRequest) => {
       if (controller.signal.aborted) return;
       const records = cache.takePending();
       port.postMessage(
-        { type: 'result', shard: m.shard, result, records } satisfies WorkerReply,
+        { type: 'result', slice: m.slice, result, records } satisfies WorkerReply,
         records.map((r) => r.records.buffer as ArrayBuffer),
       );
     } catch (e) {
       if (!controller.signal.aborted)
         port.postMessage({
           type: 'failed',
-          shard: m.shard,
+          slice: m.slice,
           error: e instanceof Error ? e.message : String(e),
         } satisfies WorkerReply);
     } finally {
@@ -84,6 +84,6 @@ port.on('message', (m: WorkerRequest) => {
   })();
 });
 
-// Load the subject parser (mathjs, ~1 s) before saying ready, so a shard's time limit measures its work, not start-up.
+// Load the subject parser (mathjs, ~1 s) before saying ready, so a slice's time limit measures its work, not start-up.
 parseSubject('z');
 port.postMessage({ type: 'ready' } satisfies WorkerReply);

@@ -7,7 +7,7 @@ import { loadSuites } from '../../../../harness/runner/plan/load-suites';
 import { mutantTarget, type Mutation } from '../../../../harness/runner/evaluation/mutant-target';
 import { ReferenceCache } from '../../../../harness/runner/reference-cache/reference-cache';
 import { runPlan } from '../../../../harness/runner/plan/run-plan';
-import type { TargetRef } from '../../../../harness/runner/plan/target-ref';
+import type { TargetDescriptor } from '../../../../harness/adapters/target-descriptor';
 
 /**
  * The self-check (issue item 12): faults planted in a good library must each be caught by the
@@ -34,7 +34,7 @@ interface Caught {
 
 async function run(mutation: Mutation | null): Promise<RunResult> {
   const d = cmath!;
-  const ref: TargetRef = {
+  const ref: TargetDescriptor = {
     name: d.name,
     library: d.library,
     version: d.version,

@@ -5,7 +5,7 @@ import { formatJunit } from '../../../../harness/runner/formats/format-junit';
 import { formatTable } from '../../../../harness/runner/formats/format-table';
 import { ReferenceCache } from '../../../../harness/runner/reference-cache/reference-cache';
 import { runPlan } from '../../../../harness/runner/plan/run-plan';
-import type { TargetRef } from '../../../../harness/runner/plan/target-ref';
+import type { TargetDescriptor } from '../../../../harness/adapters/target-descriptor';
 import { loadDemoSuite } from '../support/load-demo-suite';
 import { referenceTarget } from '../support/reference-target';
 
@@ -15,7 +15,7 @@ describe('output formats', () => {
   let result: Awaited<ReturnType<typeof runPlan>>;
   beforeAll(async () => {
     // A target with a name no XML document can hold as it is, that answers NaN for one function and throws with control characters for another.
-    const nasty: TargetRef = {
+    const nasty: TargetDescriptor = {
       name: `oracle${NASTY}@1`,
       library: 'oracle',
       version: '1',

@@ -4,18 +4,18 @@ import { stdioTarget, type StdioTarget } from '../../../../harness/adapters/stdi
 import { buildPlan } from '../../../../harness/runner/plan/build-plan';
 import { ReferenceCache } from '../../../../harness/runner/reference-cache/reference-cache';
 import { runPlan, type RunEvent } from '../../../../harness/runner/plan/run-plan';
-import type { TargetRef } from '../../../../harness/runner/plan/target-ref';
+import type { TargetDescriptor } from '../../../../harness/adapters/target-descriptor';
 import { loadDemoSuite } from '../support/load-demo-suite';
 import { referenceTarget } from '../support/reference-target';
 
-const oracle: TargetRef = {
+const oracle: TargetDescriptor = {
   name: 'oracle@1',
   library: 'oracle',
   version: '1',
   settings: {},
   open: () => referenceTarget(),
 };
-const misbehaving = (opened: StdioTarget[]): TargetRef => ({
+const misbehaving = (opened: StdioTarget[]): TargetDescriptor => ({
   name: 'misbehaving@1',
   library: 'misbehaving',
   version: '1',
@@ -28,7 +28,7 @@ const misbehaving = (opened: StdioTarget[]): TargetRef => ({
       settings: {},
       command: process.execPath,
       args: [path.join(__dirname, 'fixtures', 'misbehaving-adapter.mjs')],
-      // Longer than the shard limit below, so it is the runner's limit that stops the hang.
+      // Longer than the slice limit below, so it is the runner's limit that stops the hang.
       timeLimitMs: 60_000,
     });
     opened.push(t);
@@ -39,16 +39,16 @@ const misbehaving = (opened: StdioTarget[]): TargetRef => ({
 describe('runPlan', () => {
   const cache = new ReferenceCache(null);
 
-  it('splits suites × targets into shards, reports progress, and joins the shards into one result per pair', async () => {
+  it('splits suites × targets into slices, reports progress, and joins the slices into one result per pair', async () => {
     const suites = [loadDemoSuite('sqrt-principal-sz'), loadDemoSuite('log-principal-ccw')];
     const plan = buildPlan(suites, [oracle], 60);
-    // 40 + 65 + 49 points per suite, at most 60 per shard unless one path is larger: three shards each.
-    expect(plan.shards.map((s) => s.paths)).toEqual([[0], [1], [2], [0], [1], [2]]);
+    // 40 + 65 + 49 points per suite, at most 60 per slice unless one path is larger: three slices each.
+    expect(plan.slices.map((s) => s.paths)).toEqual([[0], [1], [2], [0], [1], [2]]);
     const events: RunEvent[] = [];
     const result = await runPlan(plan, { cache, onEvent: (e) => events.push(e) });
-    expect(events[0]).toEqual({ type: 'plan', shards: 6, points: 308, suites: 2, targets: 1 });
-    expect(events.filter((e) => e.type === 'shard-start')).toHaveLength(6);
-    expect(events.filter((e) => e.type === 'shard-end')).toHaveLength(6);
+    expect(events[0]).toEqual({ type: 'plan', slices: 6, points: 308, suites: 2, targets: 1 });
+    expect(events.filter((e) => e.type === 'slice-start')).toHaveLength(6);
+    expect(events.filter((e) => e.type === 'slice-end')).toHaveLength(6);
     const progress = events
       .filter((e): e is Extract<RunEvent, { type: 'progress' }> => e.type === 'progress')
       .map((e) => e.done);
@@ -65,14 +65,14 @@ describe('runPlan', () => {
     expect(result.disclaimer).toMatch(/not a certification/);
   });
 
-  it('stops at cancellation: the shard running and the ones not started are reported cancelled, and the result says so', async () => {
+  it('stops at cancellation: the slice running and the ones not started are reported cancelled, and the result says so', async () => {
     const controller = new AbortController();
     const plan = buildPlan([loadDemoSuite('sqrt-principal-sz'), loadDemoSuite('exp-principal-sz')], [oracle], 60);
     const result = await runPlan(plan, {
       cache,
       signal: controller.signal,
       onEvent: (e) => {
-        if (e.type === 'shard-end' && e.shard === 0) controller.abort(new Error('the reviewer stopped it'));
+        if (e.type === 'slice-end' && e.slice === 0) controller.abort(new Error('the reviewer stopped it'));
       },
     });
     expect(result.status).toBe('cancelled');
@@ -83,7 +83,7 @@ describe('runPlan', () => {
     expect(exp!.counts.skipped).toBe(exp!.checked.points);
   });
 
-  it('turns a hanging stdio target into errors at the shard time limit, kills it, and goes on with the next shard; a crash becomes errors too', async () => {
+  it('turns a hanging stdio target into errors at the slice time limit, kills it, and goes on with the next slice; a crash becomes errors too', async () => {
     const opened: StdioTarget[] = [];
     const suites = [
       loadDemoSuite('sqrt-principal-sz'),
@@ -91,12 +91,12 @@ describe('runPlan', () => {
       loadDemoSuite('log-principal-sz'),
     ];
     const started = Date.now();
-    const result = await runPlan(buildPlan(suites, [misbehaving(opened)]), { cache, shardTimeLimitMs: 1500 });
+    const result = await runPlan(buildPlan(suites, [misbehaving(opened)]), { cache, sliceTimeLimitMs: 1500 });
     expect(Date.now() - started).toBeLessThan(15_000);
     const [sqrt, exp, log] = result.results;
     expect(sqrt!.status).toBe('error');
     expect(sqrt!.counts.error).toBe(sqrt!.checked.points);
-    expect(sqrt!.errors[0]).toMatch(/did not finish within the shard time limit of 1500 ms/);
+    expect(sqrt!.errors[0]).toMatch(/did not finish within the slice time limit of 1500 ms/);
     expect(exp!.status).toBe('error');
     expect(exp!.paths[0]!.findings[0]!.outcome).toMatchObject({
       kind: 'error',
@@ -105,14 +105,18 @@ describe('runPlan', () => {
     // The run went on: log was evaluated (and is wrong: the adapter answers zeros).
     expect(log!.counts.fail).toBeGreaterThan(0);
     expect(log!.counts.error).toBe(0);
-    // The hung program was killed when the shard ran out of time, not left behind.
+    // The hung program was killed when the slice ran out of time, not left behind.
     expect(opened[0]!.processId()).toBeNull();
   }, 30_000);
 
-  it('runs shards on worker threads with the same results, and terminates a worker whose library blocks its thread', async () => {
+  it('runs slices on worker threads with the same results, and terminates a worker whose library blocks its thread', async () => {
     const complexJs = discoverTargets().find((t) => t.name === 'complex.js@2.4.3')!;
-    const ref: TargetRef = { ...complexJs, open: () => complexJs.open(), worker: { discovered: complexJs.name } };
-    const blocking: TargetRef = {
+    const ref: TargetDescriptor = {
+      ...complexJs,
+      open: () => complexJs.open(),
+      worker: { discovered: complexJs.name },
+    };
+    const blocking: TargetDescriptor = {
       name: 'blocking@1',
       library: 'blocking',
       version: '1',
@@ -128,7 +132,7 @@ describe('runPlan', () => {
     const inWorkers = await runPlan(buildPlan(suites, [blocking, ref]), {
       cacheDir: null,
       workers: 2,
-      shardTimeLimitMs: 4000,
+      sliceTimeLimitMs: 4000,
     });
     expect(Date.now() - started).toBeLessThan(40_000);
     const byName = (r: typeof inWorkers, suite: string, target: string) =>

@@ -7,7 +7,7 @@ import { PointTable } from '../../../../harness/runner/reference-cache/point-tab
 import { ReferenceCache } from '../../../../harness/runner/reference-cache/reference-cache';
 import { runPlan } from '../../../../harness/runner/plan/run-plan';
 import { suiteCacheKey } from '../../../../harness/runner/reference-cache/suite-cache-key';
-import type { TargetRef } from '../../../../harness/runner/plan/target-ref';
+import type { TargetDescriptor } from '../../../../harness/adapters/target-descriptor';
 import { loadDemoSuite } from '../support/load-demo-suite';
 import { referenceTarget } from '../support/reference-target';
 
@@ -20,7 +20,7 @@ describe('the reference cache', () => {
 
   it('lets a repeated run compute no reference value, failures and their alternatives included', async () => {
     // A library that ignores −0 fails on the cut, so the second run also needs the alternatives (flipped zero, limits).
-    const lossy: TargetRef = {
+    const lossy: TargetDescriptor = {
       name: 'lossy@1',
       library: 'oracle',
       version: '1',

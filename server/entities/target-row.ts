@@ -1,8 +1,8 @@
 import { Column, Entity, PrimaryColumn } from 'typeorm';
 
-/** One library at one version with its settings (docs/vocabulary.md), as found installed by the harness. */
+/** A row of the `targets` table: one library at one version with its settings (docs/vocabulary.md), as found installed by the harness. */
 @Entity({ name: 'targets' })
-export class Target {
+export class TargetRow {
   /** The harness's name for it, e.g. "complex.js@2.4.1" or "mathjs@15.2.0/number/predictable". */
   @PrimaryColumn({ type: 'text' })
   name!: string;
