@@ -15,16 +15,18 @@
 import { mkdtempSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import { discoverTargets } from '../harness/adapters/discover-targets';
-import { ulpsApart } from '../harness/checks/ulps-apart';
-import { buildPath } from '../harness/paths/build-path';
-import { buildPlan } from '../harness/runner/plan/build-plan';
-import { evaluateSuite } from '../harness/runner/evaluation/evaluate-suite';
-import { ReferenceCache } from '../harness/runner/reference-cache/reference-cache';
-import { runPlan } from '../harness/runner/plan/run-plan';
-import { suiteCacheKey } from '../harness/runner/reference-cache/suite-cache-key';
-import type { TargetDescriptor } from '../harness/adapters/target-descriptor';
-import { toPathSpec } from '../harness/runner/evaluation/to-path-spec';
+import {
+  buildPath,
+  buildPlan,
+  discoverTargets,
+  evaluateSuite,
+  ReferenceCache,
+  runPlan,
+  suiteCacheKey,
+  type TargetDescriptor,
+  toPathSpec,
+  ulpsApart,
+} from '../harness';
 import type { Suite } from '../shared/schemas/suite-schema';
 import { validateSuite } from '../shared/validate-suite';
 

@@ -1,21 +1,22 @@
 import type { DataSource } from 'typeorm';
-import { parseSubject } from '../../harness/expressions/parse-subject';
-import { subjectCuts } from '../../harness/cuts/subject-cuts';
-import { buildPath } from '../../harness/paths/build-path';
-import type { PathPoint } from '../../harness/paths/path-point';
-import { principalExpectation } from '../../harness/runner/expectations/principal-expectation';
-import { ReferenceCache } from '../../harness/runner/reference-cache/reference-cache';
-import { regularExpectation } from '../../harness/runner/expectations/regular-expectation';
-import { suiteCacheKey } from '../../harness/runner/reference-cache/suite-cache-key';
-import { toPathSpec } from '../../harness/runner/evaluation/to-path-spec';
+import {
+  buildPath,
+  type ExpectedColumn,
+  parseSubject,
+  type PathPoint,
+  ReferenceCache,
+  subjectCuts,
+  type SubjectExpr,
+  suiteCacheKey,
+  suiteExpectation,
+  toPathSpec,
+} from '../../harness';
 import type { DiagnosisKind } from '../../shared/diagnosis';
 import type { FailurePathPoint, FailurePathView, PlaneXY } from '../../shared/failure-path-view';
 import type { OutcomeCounts, WireComplex } from '../../shared/run-result';
 import type { Suite } from '../../shared/schemas/suite-schema';
 import { wireNumber } from '../../shared/wire-number';
 import type { SuitePath } from '../../shared/schemas/suite-path-schema';
-import type { SubjectExpr } from '../../harness/expressions/subject-expr';
-import type { ExpectedColumn } from '../../harness/runner/expectations/expectation';
 import { HttpError } from '../http/http-error';
 
 /** A grid path can hold 4 million points; the pictures need far fewer, and the reference costs ~10 µs–200 ms a point. */
@@ -191,10 +192,7 @@ function pathValues(
   // Read only: values computed here are not written back, so the runs' files have one writer per process that runs shards.
   const cache = new ReferenceCache(referenceCacheDir);
   const cacheKey = suiteCacheKey(suite);
-  const expectation =
-    suite.branch.kind === 'principal'
-      ? principalExpectation(suite, expr, cache, cacheKey)
-      : regularExpectation(suite, cache, cacheKey);
+  const expectation = suiteExpectation(suite, expr, cache, cacheKey);
   const value = {
     points,
     expected: expectation.expected(path, points),

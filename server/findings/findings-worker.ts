@@ -1,11 +1,13 @@
 import { parentPort } from 'node:worker_threads';
-import type { Target } from '../../harness/adapters/target';
-import type { TargetDescriptor } from '../../harness/adapters/target-descriptor';
-import { mapCuts } from '../../harness/cutmap/map-cuts';
-import { FINGERPRINT_FUNCTIONS } from '../../harness/fingerprint/fingerprint-functions';
-import { fingerprintTarget } from '../../harness/fingerprint/fingerprint-target';
-import { libraryVersions } from '../../harness/matrix/library-versions';
-import { versionMatrix } from '../../harness/matrix/version-matrix';
+import {
+  FINGERPRINT_FUNCTIONS,
+  fingerprintTarget,
+  libraryVersions,
+  mapCuts,
+  type Target,
+  type TargetDescriptor,
+  versionMatrix,
+} from '../../harness';
 import type { FindingsFailure, FindingsReply, FindingsRequest } from './findings-messages';
 import { HttpError } from '../http/http-error';
 import { InputError } from '../http/input-error';

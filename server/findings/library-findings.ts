@@ -1,7 +1,5 @@
 import type { DataSource } from 'typeorm';
-import type { TargetDescriptor } from '../../harness/adapters/target-descriptor';
-import { FINGERPRINT_FUNCTIONS } from '../../harness/fingerprint/fingerprint-functions';
-import { libraryVersions } from '../../harness/matrix/library-versions';
+import { FINGERPRINT_FUNCTIONS, libraryVersions, type TargetDescriptor } from '../../harness';
 import type { ComputedAnswer } from '../../shared/computed-answer';
 import type { ConventionFingerprint } from '../../shared/convention-fingerprint';
 import type { CutMap } from '../../shared/cut-map';

@@ -11,7 +11,7 @@ import { InputError } from '../http/input-error';
 import { parseInput } from '../http/parse-input';
 import { SuiteService } from '../suites/suite-service';
 import { validateSuiteInput } from '../suites/validate-suite-input';
-import { checkReferenceTable } from '../../harness/suites/check-reference-table';
+import { checkReferenceTable } from '../../harness';
 import { SuiteVersion } from '../entities/suite-version';
 import { Upload } from '../entities/upload';
 

@@ -1,8 +1,5 @@
 import type { DataSource, EntityManager } from 'typeorm';
-import type { Target } from '../../harness/adapters/target';
-import { checkSuiteProperties } from '../../harness/properties/check-suite-properties';
-import { evaluateSuite } from '../../harness/runner/evaluation/evaluate-suite';
-import { ReferenceCache } from '../../harness/runner/reference-cache/reference-cache';
+import { checkSuiteProperties, evaluateSuite, ReferenceCache, type Target } from '../../harness';
 import type { PropertyOutcome } from '../../shared/property-outcome';
 import type { SuiteTargetResult } from '../../shared/run-result';
 import { Failure } from '../entities/failure';

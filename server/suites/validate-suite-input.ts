@@ -1,4 +1,4 @@
-import { checkSuite } from '../../harness/suites/check-suite';
+import { checkSuite } from '../../harness';
 import type { Suite } from '../../shared/schemas/suite-schema';
 import { InputError } from '../http/input-error';
 

@@ -1,6 +1,4 @@
-import { discoverTargets } from '../../harness/adapters/discover-targets';
-import type { Target } from '../../harness/adapters/target';
-import type { TargetDescriptor } from '../../harness/adapters/target-descriptor';
+import { discoverTargets, type Target, type TargetDescriptor } from '../../harness';
 
 let installed: Map<string, TargetDescriptor> | null = null;
 

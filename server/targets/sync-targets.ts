@@ -1,5 +1,5 @@
 import type { DataSource } from 'typeorm';
-import { discoverTargets } from '../../harness/adapters/discover-targets';
+import { discoverTargets } from '../../harness';
 import type { TargetIdentity } from '../../shared/target-identity';
 import { TargetRow } from '../entities/target-row';
 

@@ -29,10 +29,9 @@ import type { PathPoint } from '../../paths/path-point';
 import { formatDouble } from '../../reference/numbers/format-double';
 import { evaluateProgram } from './evaluate-program';
 import type { ExpectedColumn, Expectation } from '../expectations/expectation';
-import { principalExpectation } from '../expectations/principal-expectation';
 import { pairStatus } from './pair-status';
 import { ReferenceCache } from '../reference-cache/reference-cache';
-import { regularExpectation } from '../expectations/regular-expectation';
+import { suiteExpectation } from '../expectations/suite-expectation';
 import { reproducer } from './reproducer';
 import { subjectProgram, type SubjectProgram } from './subject-program';
 import { suiteCacheKey } from '../reference-cache/suite-cache-key';
@@ -126,10 +125,7 @@ export async function evaluateSuite(
     program = subjectProgram(expr);
     cacheKey = suiteCacheKey(suite);
     const key = cacheKey;
-    expectation =
-      suite.branch.kind === 'principal'
-        ? principalExpectation(suite, expr, cache, key)
-        : regularExpectation(suite, cache, key);
+    expectation = suiteExpectation(suite, expr, cache, key);
     result.checked.branch = expectation.description;
   } catch (e) {
     result.errors.push(`the suite cannot be evaluated: ${errorText(e)}`);
