@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
-import { formatHexDouble } from '../../harness/checks/format-hex-double';
+import { formatHexDouble } from '../../harness/web';
 import { theme } from '../../constants/theme';
 import type { FailureView } from '../../shared/failure-view';
 import type { WireComplex } from '../../shared/run-result';

@@ -5,13 +5,13 @@ import { ROLES } from '../../shared/roles';
 import { classifyBody } from '../../shared/schemas/classify-body';
 import { failureQuery } from '../../shared/schemas/failure-query';
 import { requireRole } from '../middleware/require-role';
-import { classifyFailure } from '../services/classify-failure';
-import { failurePath } from '../services/failure-path';
-import { HttpError } from '../services/http-error';
-import { InputError } from '../services/input-error';
-import { parseInput } from '../services/parse-input';
-import { failurePageJson } from '../services/failure-page-json';
-import { searchFailures } from '../services/failure-search';
+import { classifyFailure } from '../failures/classify-failure';
+import { failurePath } from '../failures/failure-path';
+import { HttpError } from '../http/http-error';
+import { InputError } from '../http/input-error';
+import { parseInput } from '../http/parse-input';
+import { failurePageJson } from '../failures/failure-page-json';
+import { searchFailures } from '../failures/failure-search';
 
 /** Rows per CSV export: enough for a whole demo run; larger tables are filtered first. */
 const CSV_MAX_ROWS = 50_000;
@@ -71,16 +71,14 @@ export function failuresRouter(dataSource: DataSource, options: { referenceCache
       });
     }
     const deviation = await classifyFailure(dataSource, req.user!, id, body);
-    res
-      .status(201)
-      .json({
-        deviation: {
-          id: deviation.id,
-          classification: deviation.classification,
-          scope: deviation.scope,
-          expiresAt: deviation.expiresAt?.toISOString() ?? null,
-        },
-      });
+    res.status(201).json({
+      deviation: {
+        id: deviation.id,
+        classification: deviation.classification,
+        scope: deviation.scope,
+        expiresAt: deviation.expiresAt?.toISOString() ?? null,
+      },
+    });
   });
 
   router.get('/:id/path', anyone, async (req, res) => {

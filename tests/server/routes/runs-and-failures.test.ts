@@ -1,6 +1,6 @@
 import request from 'supertest';
-import { failurePageJson } from '../../../server/services/failure-page-json';
-import { searchFailures } from '../../../server/services/failure-search';
+import { failurePageJson } from '../../../server/failures/failure-page-json';
+import { searchFailures } from '../../../server/failures/failure-search';
 import { approvedSuite } from '../../setup/approved-suite';
 import { signInAs } from '../../setup/sign-in-as';
 import { startTestApp, type TestApp } from '../../setup/test-app';
@@ -192,14 +192,12 @@ describe('verdicts on failures', () => {
   it('accepts a deviation for a path until it expires, moving its failures from known to accepted', async () => {
     const hanne = await signInAs(t.app, 'reviewer');
     const [first] = (await hanne.get(`/api/failures?run=${runId}&limit=1`)).body.failures;
-    const res = await hanne
-      .post(`/api/failures/${first.id}/classify`)
-      .send({
-        classification: 'accepted',
-        scope: 'path',
-        reason: 'complex.js documents that it ignores the sign of zero.',
-        expiresAt: '2099-01-01T00:00:00Z',
-      });
+    const res = await hanne.post(`/api/failures/${first.id}/classify`).send({
+      classification: 'accepted',
+      scope: 'path',
+      reason: 'complex.js documents that it ignores the sign of zero.',
+      expiresAt: '2099-01-01T00:00:00Z',
+    });
     expect(res.status).toBe(201);
     expect(
       (await hanne.get(`/api/failures?run=${runId}&status=accepted`)).body.failures.map(

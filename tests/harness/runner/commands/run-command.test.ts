@@ -46,7 +46,7 @@ describe('sheetkeeper run', () => {
     expect(result.plan).toEqual({
       suites: [{ id: 'sqrt-principal-sz', version: 1 }],
       targets: ['complex.js@2.4.3'],
-      shards: 1,
+      slices: 1,
     });
     expect(result.disclaimer).toMatch(/not a certification/);
     const finding = result.results[0].paths[0].findings[0];
