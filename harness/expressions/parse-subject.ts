@@ -1,4 +1,5 @@
 import type * as MathJs from 'mathjs';
+import { FUNCTION_NAMES, type FunctionName } from '../../shared/function-names';
 import { parseNumber } from '../reference/numbers/parse-number';
 import { Rational } from '../reference/numbers/rational';
 import { SubjectError } from './subject-error';
@@ -7,24 +8,10 @@ import type { SubjectExpr } from './subject-expr';
 
 type MathNode = MathJs.MathNode;
 
-const ONE_ARGUMENT = new Set([
-  'sqrt',
-  'cbrt',
-  'exp',
-  'log',
-  'asin',
-  'acos',
-  'atan',
-  'asinh',
-  'acosh',
-  'atanh',
-  'acot',
-  'asec',
-  'acsc',
-  'acoth',
-  'asech',
-  'acsch',
-]);
+/** The catalogue functions the parser reads with arguments after z, each by its own rule below. */
+const WITH_EXPONENT: readonly FunctionName[] = ['pow', 'nthroot'];
+/** Every other catalogue function is called on one argument (shared/function-names.ts). */
+const ONE_ARGUMENT: ReadonlySet<string> = new Set(FUNCTION_NAMES.filter((name) => !WITH_EXPONENT.includes(name)));
 const OPERATORS: Record<string, 'add' | 'sub' | 'mul' | 'div'> = {
   add: 'add',
   subtract: 'sub',
