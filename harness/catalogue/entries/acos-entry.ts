@@ -22,10 +22,7 @@ export const acosEntry: FunctionEntry = {
       slug: 'acos',
       title: 'Inverse cosine',
       cuts: DEMO_SHAPES.realRaysFromOne,
-      branchPoints: [
-        ['1', '0'],
-        ['-1', '0'],
-      ],
+      branchPoints: DEMO_SHAPES.branchPointsOne,
       radius: '0.5',
       laws: [
         { law: 'conjugate-symmetry', region: DEMO_SHAPES.nearCuts },

@@ -23,10 +23,7 @@ export const acoshEntry: FunctionEntry = {
       slug: 'acosh',
       title: 'Inverse hyperbolic cosine',
       cuts: [{ kind: 'ray', from: ['1', '0'], through: ['0', '0'] }],
-      branchPoints: [
-        ['1', '0'],
-        ['-1', '0'],
-      ],
+      branchPoints: DEMO_SHAPES.branchPointsOne,
       radius: '0.5',
       laws: [
         { law: 'conjugate-symmetry', region: DEMO_SHAPES.nearCuts },

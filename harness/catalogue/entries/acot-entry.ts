@@ -25,10 +25,7 @@ export const acotEntry: FunctionEntry = {
       slug: 'acot',
       title: 'Inverse cotangent',
       cuts: [DEMO_SHAPES.imaginaryUnitSegment],
-      branchPoints: [
-        ['0', '1'],
-        ['0', '-1'],
-      ],
+      branchPoints: DEMO_SHAPES.branchPointsI,
       radius: '0.5',
       laws: [{ law: 'odd-symmetry', region: DEMO_SHAPES.disc }],
       story:

@@ -25,10 +25,7 @@ export const acothEntry: FunctionEntry = {
       slug: 'acoth',
       title: 'Inverse hyperbolic cotangent',
       cuts: [DEMO_SHAPES.realUnitSegment],
-      branchPoints: [
-        ['1', '0'],
-        ['-1', '0'],
-      ],
+      branchPoints: DEMO_SHAPES.branchPointsOne,
       radius: '0.5',
       laws: [{ law: 'odd-symmetry', region: DEMO_SHAPES.disc }],
       story: 'acoth z = atanh(1/z) (DLMF 4.37.9): its cut is [−1, 1], the complement of atanh’s.',

@@ -25,10 +25,7 @@ export const acscEntry: FunctionEntry = {
       slug: 'acsc',
       title: 'Inverse cosecant',
       cuts: [DEMO_SHAPES.realUnitSegment],
-      branchPoints: [
-        ['1', '0'],
-        ['-1', '0'],
-      ],
+      branchPoints: DEMO_SHAPES.branchPointsOne,
       radius: '0.5',
       laws: [{ law: 'odd-symmetry', region: DEMO_SHAPES.disc }],
       story:

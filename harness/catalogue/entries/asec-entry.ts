@@ -23,10 +23,7 @@ export const asecEntry: FunctionEntry = {
       slug: 'asec',
       title: 'Inverse secant',
       cuts: [DEMO_SHAPES.realUnitSegment],
-      branchPoints: [
-        ['1', '0'],
-        ['-1', '0'],
-      ],
+      branchPoints: DEMO_SHAPES.branchPointsOne,
       radius: '0.5',
       laws: [{ law: 'conjugate-symmetry', region: DEMO_SHAPES.nearCuts }],
       story:

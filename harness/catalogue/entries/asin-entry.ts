@@ -25,10 +25,7 @@ export const asinEntry: FunctionEntry = {
       slug: 'asin',
       title: 'Inverse sine',
       cuts: DEMO_SHAPES.realRaysFromOne,
-      branchPoints: [
-        ['1', '0'],
-        ['-1', '0'],
-      ],
+      branchPoints: DEMO_SHAPES.branchPointsOne,
       radius: '0.5',
       laws: [
         { law: 'odd-symmetry', region: DEMO_SHAPES.disc },

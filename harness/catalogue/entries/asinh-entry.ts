@@ -25,10 +25,7 @@ export const asinhEntry: FunctionEntry = {
       slug: 'asinh',
       title: 'Inverse hyperbolic sine',
       cuts: DEMO_SHAPES.imaginaryRaysFromI,
-      branchPoints: [
-        ['0', '1'],
-        ['0', '-1'],
-      ],
+      branchPoints: DEMO_SHAPES.branchPointsI,
       radius: '0.5',
       laws: [
         { law: 'odd-symmetry', region: DEMO_SHAPES.disc },

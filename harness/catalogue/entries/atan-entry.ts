@@ -25,10 +25,7 @@ export const atanEntry: FunctionEntry = {
       slug: 'atan',
       title: 'Inverse tangent',
       cuts: DEMO_SHAPES.imaginaryRaysFromI,
-      branchPoints: [
-        ['0', '1'],
-        ['0', '-1'],
-      ],
+      branchPoints: DEMO_SHAPES.branchPointsI,
       radius: '0.5',
       laws: [
         { law: 'odd-symmetry', region: DEMO_SHAPES.disc },

@@ -25,10 +25,7 @@ export const atanhEntry: FunctionEntry = {
       slug: 'atanh',
       title: 'Inverse hyperbolic tangent',
       cuts: DEMO_SHAPES.realRaysFromOne,
-      branchPoints: [
-        ['1', '0'],
-        ['-1', '0'],
-      ],
+      branchPoints: DEMO_SHAPES.branchPointsOne,
       radius: '0.5',
       laws: [
         { law: 'odd-symmetry', region: DEMO_SHAPES.disc },
