@@ -1,12 +1,12 @@
-import { CATALOGUE_ENTRIES } from '../catalogue/catalogue-entries';
+import { FUNCTION_ARITY } from '../../shared/function-arity';
 
 /**
  * The operations a library target is asked for and how many complex arguments each takes: the
- * catalogue's functions (each entry's `arity`; nthroot's second argument is the integer n as
+ * catalogue's functions (shared/function-arity.ts; nthroot's second argument is the integer n as
  * n + 0i) and the arithmetic subjects are built with.
  */
 export const OP_ARITY: Readonly<Record<string, number>> = {
-  ...Object.fromEntries(CATALOGUE_ENTRIES.map((entry) => [entry.name, entry.arity])),
+  ...FUNCTION_ARITY,
   add: 2,
   sub: 2,
   mul: 2,

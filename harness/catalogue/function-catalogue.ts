@@ -1,4 +1,4 @@
-import type { FunctionName } from '../../shared/function-names';
+import type { FunctionName } from '../../shared/function-arity';
 import { sqrtEntry } from './entries/sqrt-entry';
 import { logEntry } from './entries/log-entry';
 import { cbrtEntry } from './entries/cbrt-entry';
@@ -21,14 +21,15 @@ import type { FunctionEntry } from './function-entry';
 
 /**
  * The function catalogue: one entry per maths function a subject may call, keyed by the names
- * of shared/function-names.ts (the type makes the two sets equal). Every table keyed by function
- * name is computed from it: the reference engine's dispatch (harness/reference/catalogue.ts) and
- * cuts (harness/cuts/catalogue-cuts.ts), the rules of findings (harness/checks/function-rules.ts),
- * principal ranges (harness/properties/principal-range.ts), operation arities
- * (harness/adapters/op-arity.ts), sheet families (harness/runner/subject-sheet-family.ts), the
- * fingerprint's functions (harness/fingerprint/fingerprint-functions.ts) and the demo catalogue's
- * principal suites (scripts/demo-catalogue/demo-principal-functions.ts). The order here is the
- * order of the fingerprint's rows.
+ * of shared/function-arity.ts (the type makes the two sets equal; that light table also holds
+ * each function's arity, for the adapters and the subject parser). Every other table keyed by
+ * function name is computed from it: the reference engine's dispatch (harness/reference/catalogue.ts)
+ * and cuts (harness/cuts/catalogue-cuts.ts), the rules of findings (harness/checks/function-rules.ts),
+ * principal ranges (harness/properties/principal-range.ts), sheet families
+ * (harness/runner/subject-sheet-family.ts), the fingerprint's functions
+ * (harness/fingerprint/fingerprint-functions.ts) and the demo catalogue's principal suites
+ * (scripts/demo-catalogue/demo-principal-functions.ts). The order here is the order of the
+ * fingerprint's rows.
  */
 export const FUNCTION_CATALOGUE: Readonly<Record<FunctionName, FunctionEntry>> = {
   sqrt: sqrtEntry,

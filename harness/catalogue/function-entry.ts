@@ -1,4 +1,4 @@
-import type { FunctionName } from '../../shared/function-names';
+import type { FunctionName } from '../../shared/function-arity';
 import type { FunctionRule } from '../checks/function-rule';
 import type { RangeCondition } from '../properties/range-condition';
 import type { DemoPrincipalFunction } from './demo-principal-function';
@@ -7,14 +7,13 @@ import type { FunctionSheets } from './function-sheets';
 import type { ReferenceEvaluation } from './reference-evaluation';
 
 /**
- * Everything the harness knows about one maths function, in one place; the tables the rest of
- * the code reads (reference dispatch, cuts, rules, ranges, arities, sheet families, fingerprint,
- * demo suites) are computed from these entries (harness/catalogue/function-catalogue.ts).
+ * Everything the harness knows about one maths function, in one place but its arity (in the light
+ * table shared/function-arity.ts, keyed by the same name); the tables the rest of the code reads
+ * (reference dispatch, cuts, rules, ranges, sheet families, fingerprint, demo suites) are
+ * computed from these entries (harness/catalogue/function-catalogue.ts).
  */
 export interface FunctionEntry {
   name: FunctionName;
-  /** How many complex arguments a library's operation takes (nthroot's n arrives as n + 0i). */
-  arity: 1 | 2;
   /** How the reference engine evaluates it; its file in harness/reference/functions states the branch policy. */
   reference: ReferenceEvaluation;
   /** The published definition, Annex G clause and Kahan side behind every finding's `rule`. */

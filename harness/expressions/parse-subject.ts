@@ -1,5 +1,6 @@
 import type * as MathJs from 'mathjs';
-import { FUNCTION_NAMES, type FunctionName } from '../../shared/function-names';
+import { FUNCTION_ARITY } from '../../shared/function-arity';
+import { FUNCTION_NAMES } from '../../shared/function-names';
 import { parseNumber } from '../reference/numbers/parse-number';
 import { Rational } from '../reference/numbers/rational';
 import { SubjectError } from './subject-error';
@@ -8,10 +9,8 @@ import type { SubjectExpr } from './subject-expr';
 
 type MathNode = MathJs.MathNode;
 
-/** The catalogue functions the parser reads with arguments after z, each by its own rule below. */
-const WITH_EXPONENT: readonly FunctionName[] = ['pow', 'nthroot'];
-/** Every other catalogue function is called on one argument (shared/function-names.ts). */
-const ONE_ARGUMENT: ReadonlySet<string> = new Set(FUNCTION_NAMES.filter((name) => !WITH_EXPONENT.includes(name)));
+/** The catalogue functions of one argument (shared/function-arity.ts); pow and nthroot have their own rules below. */
+const ONE_ARGUMENT: ReadonlySet<string> = new Set(FUNCTION_NAMES.filter((name) => FUNCTION_ARITY[name] === 1));
 const OPERATORS: Record<string, 'add' | 'sub' | 'mul' | 'div'> = {
   add: 'add',
   subtract: 'sub',

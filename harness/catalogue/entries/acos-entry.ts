@@ -6,7 +6,6 @@ import { principalRangePart } from '../principal-range-part';
 /** acos in the function catalogue; its branch policy is stated in harness/reference/functions/acos.ts. */
 export const acosEntry: FunctionEntry = {
   name: 'acos',
-  arity: 1,
   reference: { kind: 'plain', fn: acos },
   rule: {
     definition: 'DLMF 4.23.22: acos z = π/2 + i ln((1 − z²)^½ + iz) = π/2 − asin z, 0 ≤ Re ≤ π',

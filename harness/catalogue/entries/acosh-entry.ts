@@ -6,7 +6,6 @@ import { principalRangePart } from '../principal-range-part';
 /** acosh in the function catalogue; its branch policy is stated in harness/reference/functions/acosh.ts. */
 export const acoshEntry: FunctionEntry = {
   name: 'acosh',
-  arity: 1,
   reference: { kind: 'plain', fn: acosh },
   rule: {
     definition:

@@ -8,7 +8,6 @@ const HALF_PI = Math.PI / 2;
 /** acot in the function catalogue; its branch policy is stated in harness/reference/functions/acot.ts. */
 export const acotEntry: FunctionEntry = {
   name: 'acot',
-  arity: 1,
   reference: { kind: 'reciprocal', fn: acot },
   rule: {
     definition: 'DLMF 4.23.9: acot z = atan(1/z)',

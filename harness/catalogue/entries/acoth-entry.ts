@@ -8,7 +8,6 @@ const HALF_PI = Math.PI / 2;
 /** acoth in the function catalogue; its branch policy is stated in harness/reference/functions/acoth.ts. */
 export const acothEntry: FunctionEntry = {
   name: 'acoth',
-  arity: 1,
   reference: { kind: 'reciprocal', fn: acoth },
   rule: {
     definition: 'DLMF 4.37.9: acoth z = atanh(1/z)',

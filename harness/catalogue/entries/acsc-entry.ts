@@ -8,7 +8,6 @@ const HALF_PI = Math.PI / 2;
 /** acsc in the function catalogue; its branch policy is stated in harness/reference/functions/acsc.ts. */
 export const acscEntry: FunctionEntry = {
   name: 'acsc',
-  arity: 1,
   reference: { kind: 'reciprocal', fn: acsc },
   rule: {
     definition: 'DLMF 4.23.7: acsc z = asin(1/z)',

@@ -8,7 +8,6 @@ const HALF_PI = Math.PI / 2;
 /** acsch in the function catalogue; its branch policy is stated in harness/reference/functions/acsch.ts. */
 export const acschEntry: FunctionEntry = {
   name: 'acsch',
-  arity: 1,
   reference: { kind: 'reciprocal', fn: acsch },
   rule: {
     definition: 'DLMF 4.37.7: acsch z = asinh(1/z)',

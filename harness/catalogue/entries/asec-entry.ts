@@ -6,7 +6,6 @@ import { principalRangePart } from '../principal-range-part';
 /** asec in the function catalogue; its branch policy is stated in harness/reference/functions/asec.ts. */
 export const asecEntry: FunctionEntry = {
   name: 'asec',
-  arity: 1,
   reference: { kind: 'reciprocal', fn: asec },
   rule: {
     definition: 'DLMF 4.23.8: asec z = acos(1/z)',

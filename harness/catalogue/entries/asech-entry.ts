@@ -6,7 +6,6 @@ import { principalRangePart } from '../principal-range-part';
 /** asech in the function catalogue; its branch policy is stated in harness/reference/functions/asech.ts. */
 export const asechEntry: FunctionEntry = {
   name: 'asech',
-  arity: 1,
   reference: { kind: 'reciprocal', fn: asech },
   rule: {
     definition: 'DLMF 4.37.8: asech z = acosh(1/z)',

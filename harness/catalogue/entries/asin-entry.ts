@@ -8,7 +8,6 @@ const HALF_PI = Math.PI / 2;
 /** asin in the function catalogue; its branch policy is stated in harness/reference/functions/asin.ts. */
 export const asinEntry: FunctionEntry = {
   name: 'asin',
-  arity: 1,
   reference: { kind: 'plain', fn: asin },
   rule: {
     definition: 'DLMF 4.23.19: asin z = −i ln(iz + √(1 − z²)), |Re| ≤ π/2',

@@ -8,7 +8,6 @@ const HALF_PI = Math.PI / 2;
 /** asinh in the function catalogue; its branch policy is stated in harness/reference/functions/asinh.ts. */
 export const asinhEntry: FunctionEntry = {
   name: 'asinh',
-  arity: 1,
   reference: { kind: 'plain', fn: asinh },
   rule: {
     definition:

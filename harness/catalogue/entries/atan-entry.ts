@@ -8,7 +8,6 @@ const HALF_PI = Math.PI / 2;
 /** atan in the function catalogue; its branch policy is stated in harness/reference/functions/atan.ts. */
 export const atanEntry: FunctionEntry = {
   name: 'atan',
-  arity: 1,
   reference: { kind: 'plain', fn: atan },
   rule: {
     definition: 'DLMF 4.23.26: atan z = (i/2) ln((i + z)/(i − z)), |Re| ≤ π/2',

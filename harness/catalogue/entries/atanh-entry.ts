@@ -8,7 +8,6 @@ const HALF_PI = Math.PI / 2;
 /** atanh in the function catalogue; its branch policy is stated in harness/reference/functions/atanh.ts. */
 export const atanhEntry: FunctionEntry = {
   name: 'atanh',
-  arity: 1,
   reference: { kind: 'plain', fn: atanh },
   rule: {
     definition:

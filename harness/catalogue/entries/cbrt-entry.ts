@@ -6,7 +6,6 @@ import type { FunctionEntry } from '../function-entry';
 /** cbrt in the function catalogue; its branch policy is stated in harness/reference/functions/cbrt.ts. */
 export const cbrtEntry: FunctionEntry = {
   name: 'cbrt',
-  arity: 1,
   reference: {
     kind: 'power',
     cuts: POWER_CUTS,

@@ -5,7 +5,6 @@ import type { FunctionEntry } from '../function-entry';
 /** exp in the function catalogue; its branch policy is stated in harness/reference/functions/exp.ts. */
 export const expEntry: FunctionEntry = {
   name: 'exp',
-  arity: 1,
   reference: { kind: 'plain', fn: exp },
   rule: {
     definition: 'DLMF §4.2(iii): e^z = e^x (cos y + i sin y), single-valued',

@@ -6,7 +6,6 @@ import { principalRangePart } from '../principal-range-part';
 /** log in the function catalogue; its branch policy is stated in harness/reference/functions/log.ts. */
 export const logEntry: FunctionEntry = {
   name: 'log',
-  arity: 1,
   reference: { kind: 'plain', fn: log },
   rule: {
     definition: 'DLMF 4.2.5, with 4.2.7 on the cut: Log z = ln|z| + i Arg z, −π < Arg ≤ π',

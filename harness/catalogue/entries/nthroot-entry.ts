@@ -6,7 +6,6 @@ import type { FunctionEntry } from '../function-entry';
 /** nthroot in the function catalogue; its branch policy is stated in harness/reference/functions/nthroot.ts. */
 export const nthrootEntry: FunctionEntry = {
   name: 'nthroot',
-  arity: 2,
   reference: {
     kind: 'power',
     cuts: POWER_CUTS,

@@ -5,7 +5,6 @@ import type { FunctionEntry } from '../function-entry';
 /** pow in the function catalogue; its branch policy is stated in harness/reference/functions/pow.ts. */
 export const powEntry: FunctionEntry = {
   name: 'pow',
-  arity: 2,
   reference: {
     kind: 'power',
     cuts: POWER_CUTS,

@@ -8,7 +8,6 @@ const HALF_PI = Math.PI / 2;
 /** sqrt in the function catalogue; its branch policy is stated in harness/reference/functions/sqrt.ts. */
 export const sqrtEntry: FunctionEntry = {
   name: 'sqrt',
-  arity: 1,
   reference: { kind: 'plain', fn: sqrt },
   rule: {
     definition: 'DLMF §4.2(iv) with 4.2.7: √z = exp(½ Log z), Re √z ≥ 0',

@@ -4,6 +4,7 @@ import type { ComplexDouble } from '../../../harness/checks/complex-double';
 import { otherSheets } from '../../../harness/checks/other-sheets';
 import type { SheetFamily } from '../../../harness/checks/sheet-family';
 import { principalDouble } from '../../../harness/reference/principal-double';
+import { FUNCTION_ARITY } from '../../../shared/function-arity';
 import type { Convention } from '../../../shared/schemas/convention-schema';
 
 /** A grid over |Re|, |Im| ≤ 3 with both zeros, so every cut, branch point and axis is crossed and sat on. */
@@ -39,7 +40,7 @@ const close = (a: ComplexDouble, b: ComplexDouble): boolean =>
   Math.hypot(a[0] - b[0], a[1] - b[1]) <= 1e-9 * Math.max(1, Math.hypot(b[0], b[1]));
 
 const single = (kind: FunctionEntry['sheets']['kind']) =>
-  CATALOGUE_ENTRIES.filter((e) => e.arity === 1 && e.sheets.kind === kind);
+  CATALOGUE_ENTRIES.filter((e) => FUNCTION_ARITY[e.name] === 1 && e.sheets.kind === kind);
 
 describe('the laws each catalogue entry states about its function', () => {
   it.each(
