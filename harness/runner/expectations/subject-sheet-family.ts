@@ -1,22 +1,7 @@
+import { catalogueEntry } from '../../catalogue/catalogue-entry';
 import type { SheetFamily } from '../../checks/sheet-family';
 import type { SubjectExpr } from '../../expressions/subject-expr';
 import { parseDouble } from '../../reference/numbers/parse-double';
-
-const FAMILY_OF: Readonly<Record<string, Exclude<SheetFamily['kind'], 'power'>>> = {
-  log: 'log',
-  asin: 'asin',
-  acsc: 'asin',
-  acos: 'acos',
-  asec: 'acos',
-  atan: 'atan',
-  acot: 'atan',
-  asinh: 'asinh',
-  acsch: 'asinh',
-  acosh: 'acosh',
-  asech: 'acosh',
-  atanh: 'atanh',
-  acoth: 'atanh',
-};
 
 /** Sheets worth trying for a root of degree q: each distinct e^{2πik/q}, k in (−q/2, q/2], at most six away. */
 export function rootSheets(q: number): number[] {
@@ -39,10 +24,10 @@ export function subjectSheetFamily(expr: SubjectExpr, sign: 1 | -1 = 1): SheetFa
     case 'neg':
       return subjectSheetFamily(expr.a, sign === 1 ? -1 : 1);
     case 'call': {
-      if (expr.fn === 'sqrt') return { kind: 'power', nu: [0.5, 0], ks: rootSheets(2), sign };
-      if (expr.fn === 'cbrt') return { kind: 'power', nu: [1 / 3, 0], ks: rootSheets(3), sign };
-      const kind = FAMILY_OF[expr.fn];
-      return kind ? { kind, ks: ADDITIVE, sign } : null;
+      const sheets = catalogueEntry(expr.fn)?.sheets;
+      if (sheets?.kind === 'root')
+        return { kind: 'power', nu: [1 / sheets.degree, 0], ks: rootSheets(sheets.degree), sign };
+      return sheets?.kind === 'additive' ? { kind: sheets.family, ks: ADDITIVE, sign } : null;
     }
     case 'nthroot':
       return { kind: 'power', nu: [1 / expr.n, 0], ks: rootSheets(Math.abs(expr.n)), sign };

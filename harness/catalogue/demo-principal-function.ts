@@ -5,7 +5,7 @@ type Point = [string, string];
 /** A cut of a principal branch as DLMF §4.23/§4.37 place it: a ray or a segment. */
 export type DemoCut = { kind: 'ray'; from: Point; through: Point } | { kind: 'segment'; from: Point; to: Point };
 
-/** One catalogue function as the demo catalogue tests it. */
+/** One principal-branch suite of the demo catalogue (scripts/demo-catalogue): the subject, its cuts and branch points, the laws and the story. */
 export interface DemoPrincipalFunction {
   /** The subject, e.g. `asin(z)` or `nthroot(z, 5)`. */
   subject: string;
