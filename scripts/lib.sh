@@ -162,6 +162,24 @@ ensure_web_export() {
   fi
 }
 
+# Steps run side by side: start_step NAME COMMAND… runs the command in the background with
+# its output in $OUT/NAME.log; finish_step NAME waits for it, prints its log with the time it
+# took, and returns its exit status (so a failed background step fails the caller like any other).
+declare -A step_pid=() step_began=()
+start_step() {
+  local name="$1"; shift
+  step_began[$name]=$(date +%s)
+  ( trap - ERR; "$@" ) >"$OUT/$name.log" 2>&1 &
+  step_pid[$name]=$!
+}
+finish_step() {
+  local name="$1" status=0
+  wait "${step_pid[$name]}" || status=$?
+  log "$name: exit $status after $(( $(date +%s) - step_began[$name] )) s"
+  cat "$OUT/$name.log" >&2
+  return "$status"
+}
+
 ensure_chromium() {
   if [ ! -x /usr/bin/chromium ]; then apt_install chromium; fi
 }
