@@ -8,10 +8,6 @@ import { demoSuiteBody } from '../../setup/demo-suite-body';
 import { signInAs } from '../../setup/sign-in-as';
 import { startTestApp, type TestApp } from '../../setup/test-app';
 
-// The first caller of a route pays its cold start (POST /api/suites loads the suite checks, the version
-// matrix computes every version): 5.6 s and 5.0 s with the load at 20, past jest's default 5 s.
-jest.setTimeout(30_000);
-
 type Who = 'signed-out' | Role;
 const WHO: Who[] = ['signed-out', ...ROLES];
 type Caller = request.Agent | ReturnType<typeof request>;
