@@ -163,20 +163,25 @@ ensure_web_export() {
 }
 
 # Steps run side by side: start_step NAME COMMAND… runs the command in the background with
-# its output in $OUT/NAME.log; finish_step NAME waits for it, prints its log with the time it
-# took, and returns its exit status (so a failed background step fails the caller like any other).
-declare -A step_pid=() step_began=()
+# its output in $OUT/NAME.log, which ends with the step's exit status and its own duration;
+# finish_step NAME waits for it, prints that log and returns the exit status (so a failed
+# background step fails the caller like any other).
+declare -A step_pid=()
 start_step() {
   local name="$1"; shift
-  step_began[$name]=$(date +%s)
-  ( trap - ERR; "$@" ) >"$OUT/$name.log" 2>&1 &
+  (
+    trap - ERR
+    began=$(date +%s) status=0
+    "$@" || status=$?
+    log "$name: exit $status after $(( $(date +%s) - began )) s"
+    exit "$status"
+  ) >"$OUT/$name.log" 2>&1 &
   step_pid[$name]=$!
 }
 finish_step() {
-  local name="$1" status=0
-  wait "${step_pid[$name]}" || status=$?
-  log "$name: exit $status after $(( $(date +%s) - step_began[$name] )) s"
-  cat "$OUT/$name.log" >&2
+  local status=0
+  wait "${step_pid[$1]}" || status=$?
+  cat "$OUT/$1.log" >&2
   return "$status"
 }
 
