@@ -11,7 +11,7 @@ const os = require('node:os');
 
 module.exports = {
   maxWorkers: os.availableParallelism(),
-  // A hang guard, not a speed budget: with the load at 20, 29 tests and hooks of ordinary files
+  // A hang guard, not a speed budget: with the load at 20, 32 tests in 9 ordinary files
   // (starting the app, a bcrypt sign-in, a first render) passed jest's default 5 s.
   testTimeout: 30_000,
   projects: [
