@@ -4,12 +4,15 @@ describe('ResultCache', () => {
   it('runs one computation for two requests of the same key made at once', async () => {
     const cache = new ResultCache<number>(4);
     let runs = 0;
-    const compute = async () => {
+    // The computation finishes only when the test says so: both requests are made while it is pending.
+    let finish: (value: number) => void = () => undefined;
+    const compute = () => {
       runs += 1;
-      await new Promise((r) => setTimeout(r, 10));
-      return 42;
+      return new Promise<number>((resolve) => (finish = resolve));
     };
-    const [a, b] = await Promise.all([cache.get('k', compute), cache.get('k', compute)]);
+    const both = Promise.all([cache.get('k', compute), cache.get('k', compute)]);
+    finish(42);
+    const [a, b] = await both;
     expect([a, b, runs]).toEqual([42, 42, 1]);
   });
 

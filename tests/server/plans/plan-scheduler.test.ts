@@ -16,7 +16,7 @@ describe('PlanScheduler', () => {
       .getRepository(Plan)
       .save({ name: 'scheduler test', description: '', recipients: [], suites: [], targets: [], createdBy: kwame });
     planId = plan.id;
-    // Six fields: every second, so the test sees firings within a few seconds.
+    // Six fields: every second, so each advance of the fake clock by a second is one due time.
     const schedule = await db.dataSource
       .getRepository(Schedule)
       .save({ plan, cron: '* * * * * *', timeZone: 'UTC', enabled: true, createdBy: kwame });
@@ -52,18 +52,35 @@ describe('PlanScheduler', () => {
     };
     const a = new PlanScheduler(db.dataSource, startRun);
     const b = new PlanScheduler(db.dataSource, startRun);
-    await Promise.all([a.start(), b.start()]);
-    await new Promise((resolve) => setTimeout(resolve, 3200));
-    await Promise.all([a.stop(), b.stop()]);
-    await new Promise((resolve) => setTimeout(resolve, 300));
-    const seen = started.length;
-    expect(seen).toBeGreaterThanOrEqual(2);
-    expect(new Set(started).size).toBe(seen);
-    const [{ n }] = await db.dataSource.query(`SELECT count(*)::int AS n FROM schedule_firings`);
-    expect(n).toBe(seen);
-    await new Promise((resolve) => setTimeout(resolve, 1200));
-    expect(started).toHaveLength(seen);
-  }, 15_000);
+    // Every claim either scheduler makes, so the test can wait for the database work a tick starts.
+    const claims = [jest.spyOn(a, 'fire'), jest.spyOn(b, 'fire')];
+    const settled = () => Promise.allSettled(claims.flatMap((spy) => spy.mock.results.map((r) => r.value)));
+    // node-cron arms setTimeout from new Date(); faking both makes each second a step of the test, not a wait.
+    // Promises, process.nextTick and setImmediate stay real so that pg's socket work goes on.
+    jest.useFakeTimers({
+      now: new Date('2026-12-04T10:00:00.500Z'),
+      doNotFake: ['nextTick', 'setImmediate', 'queueMicrotask'],
+    });
+    try {
+      await Promise.all([a.start(), b.start()]);
+      for (let second = 0; second < 3; second++) {
+        await jest.advanceTimersByTimeAsync(1000);
+        await settled();
+      }
+      // Each scheduler saw each of the three due seconds; each second started one run.
+      for (const spy of claims) expect(spy).toHaveBeenCalledTimes(3);
+      expect(started).toEqual(['2026-12-04T10:00:01.000Z', '2026-12-04T10:00:02.000Z', '2026-12-04T10:00:03.000Z']);
+      const [{ n }] = await db.dataSource.query(`SELECT count(*)::int AS n FROM schedule_firings`);
+      expect(n).toBe(3);
+      await Promise.all([a.stop(), b.stop()]);
+      await jest.advanceTimersByTimeAsync(5000);
+      await settled();
+      for (const spy of claims) expect(spy).toHaveBeenCalledTimes(3);
+      expect(started).toHaveLength(3);
+    } finally {
+      jest.useRealTimers();
+    }
+  });
 
   it('records why no run started when starting fails', async () => {
     const s = new PlanScheduler(db.dataSource, async () => {
