@@ -1,0 +1,75 @@
+import type { Suite } from '../../shared/schemas/suite-schema';
+import { parseSubject } from '../expressions/parse-subject';
+import type { SubjectExpr } from '../expressions/subject-expr';
+import { BigComplex } from '../reference/complex/big-complex';
+import type { ExactPoint, Point } from '../reference/continuation/continuation-path';
+import { FactoredFunction } from '../reference/continuation/factored-function';
+import { parseExact } from '../reference/continuation/parse-exact';
+import { parseDouble } from '../reference/numbers/parse-double';
+import { CutGeometry } from './cut-geometry';
+import { principalPower } from './principal-power';
+import type { ReferenceCache } from './reference-cache';
+import type { RegularBranch } from './regular-branch';
+import { REGULAR_TUNING } from './regular-tuning';
+import { rootSheets } from './subject-sheet-family';
+
+/** The first step of a regular expectation: the suite's branch read exactly, with C = f0/P(z0) and its description. */
+export function resolveRegularBranch(suite: Suite, cache: ReferenceCache, cacheKey: string): RegularBranch {
+  const branch = suite.branch;
+  if (branch.kind !== 'regular') throw new TypeError('regularExpectation needs a regular branch');
+  const gExpr = parseSubject(branch.g);
+  const g = FactoredFunction.fromSubject(gExpr);
+  const nuText = typeof branch.nu === 'string' ? { re: branch.nu, im: '0' } : branch.nu;
+  const nu = { re: parseExact(nuText.re, 'nu.re'), im: parseExact(nuText.im, 'nu.im') };
+  const gPow: SubjectExpr = nu.im.isZero()
+    ? { kind: 'power', base: gExpr, exponent: nu.re }
+    : { kind: 'complexPower', base: gExpr, exponent: { kind: 'const', re: nu.re, im: nu.im } };
+  const exactPoint = (c: { re: string; im: string }, name: string): ExactPoint => [
+    parseExact(c.re, `${name}.re`),
+    parseExact(c.im, `${name}.im`),
+  ];
+  const z0 = exactPoint(branch.z0, 'z0');
+  const f0 = branch.f0 ? exactPoint(branch.f0, 'f0') : null;
+
+  // C = f0 / P(z0), exactly enough; none when the branch is named by k (the continuation then carries the k).
+  let C: BigComplex | null = null;
+  if (f0) {
+    const p0 = principalPower({ gPow }, new BigComplex(z0[0].toBigFloat(256), z0[1].toBigFloat(256)));
+    const n = p0.norm();
+    const num = new BigComplex(f0[0].toBigFloat(256), f0[1].toBigFloat(256)).mul(p0.conj());
+    C = new BigComplex(num.re.div(n, REGULAR_TUNING.bits), num.im.div(n, REGULAR_TUNING.bits));
+  }
+  const nuShown = nuText.im === '0' ? nuText.re : `${nuText.re} + ${nuText.im}i`;
+  const fixedBy = branch.f0 ? `f0 = ${branch.f0.re} + ${branch.f0.im}i` : `k = ${branch.k}`;
+  return {
+    suite,
+    branch,
+    cache,
+    cacheKey,
+    nuText,
+    nu,
+    nuDouble: [parseDouble(nuText.re), parseDouble(nuText.im)],
+    gPow,
+    singular: g.singularities(),
+    geometry: new CutGeometry(branch),
+    continuation: {
+      g,
+      nu,
+      z0,
+      start: f0 ? { kind: 'value', f0 } : { kind: 'sheet', k: branch.k as number },
+      cuts: branch.cuts.map((c, i) => ({
+        points: c.points.map((p, j) => exactPoint(p, `cuts.${i}.points.${j}`)),
+        toInfinity: c.to_infinity,
+      })),
+    },
+    z0: [parseDouble(branch.z0.re), parseDouble(branch.z0.im)] as Point,
+    C,
+    CDouble: C ? [C.re.toDouble(), C.im.toDouble()] : [1, 0],
+    description: `the regular branch of (${branch.g})^(${nuShown}) with ${fixedBy} at z0 = ${branch.z0.re} + ${branch.z0.im}i`,
+    sheetKs: nu.im.isZero() && nu.re.den <= 64n ? rootSheets(Number(nu.re.den)) : [-3, -2, -1, 1, 2, 3],
+    factors: new Map(),
+    continued: new Map(),
+    pathValues: new WeakMap(),
+    refusals: new Map(),
+  };
+}
