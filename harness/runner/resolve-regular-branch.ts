@@ -2,10 +2,9 @@ import type { Suite } from '../../shared/schemas/suite-schema';
 import { parseSubject } from '../expressions/parse-subject';
 import type { SubjectExpr } from '../expressions/subject-expr';
 import { BigComplex } from '../reference/complex/big-complex';
-import type { ExactPoint, Point } from '../reference/continuation/continuation-path';
-import { FactoredFunction } from '../reference/continuation/factored-function';
-import { parseExact } from '../reference/continuation/parse-exact';
+import type { Point } from '../reference/continuation/continuation-path';
 import { parseDouble } from '../reference/numbers/parse-double';
+import { branchContinuation } from './branch-continuation';
 import { CutGeometry } from './cut-geometry';
 import { principalPower } from './principal-power';
 import type { ReferenceCache } from './reference-cache';
@@ -17,19 +16,14 @@ import { rootSheets } from './subject-sheet-family';
 export function resolveRegularBranch(suite: Suite, cache: ReferenceCache, cacheKey: string): RegularBranch {
   const branch = suite.branch;
   if (branch.kind !== 'regular') throw new TypeError('regularExpectation needs a regular branch');
+  const continuation = branchContinuation(branch);
+  const { g, nu, z0, start } = continuation;
   const gExpr = parseSubject(branch.g);
-  const g = FactoredFunction.fromSubject(gExpr);
   const nuText = typeof branch.nu === 'string' ? { re: branch.nu, im: '0' } : branch.nu;
-  const nu = { re: parseExact(nuText.re, 'nu.re'), im: parseExact(nuText.im, 'nu.im') };
   const gPow: SubjectExpr = nu.im.isZero()
     ? { kind: 'power', base: gExpr, exponent: nu.re }
     : { kind: 'complexPower', base: gExpr, exponent: { kind: 'const', re: nu.re, im: nu.im } };
-  const exactPoint = (c: { re: string; im: string }, name: string): ExactPoint => [
-    parseExact(c.re, `${name}.re`),
-    parseExact(c.im, `${name}.im`),
-  ];
-  const z0 = exactPoint(branch.z0, 'z0');
-  const f0 = branch.f0 ? exactPoint(branch.f0, 'f0') : null;
+  const f0 = start.kind === 'value' ? start.f0 : null;
 
   // C = f0 / P(z0), exactly enough; none when the branch is named by k (the continuation then carries the k).
   let C: BigComplex | null = null;
@@ -52,16 +46,7 @@ export function resolveRegularBranch(suite: Suite, cache: ReferenceCache, cacheK
     gPow,
     singular: g.singularities(),
     geometry: new CutGeometry(branch),
-    continuation: {
-      g,
-      nu,
-      z0,
-      start: f0 ? { kind: 'value', f0 } : { kind: 'sheet', k: branch.k as number },
-      cuts: branch.cuts.map((c, i) => ({
-        points: c.points.map((p, j) => exactPoint(p, `cuts.${i}.points.${j}`)),
-        toInfinity: c.to_infinity,
-      })),
-    },
+    continuation,
     z0: [parseDouble(branch.z0.re), parseDouble(branch.z0.im)] as Point,
     C,
     CDouble: C ? [C.re.toDouble(), C.im.toDouble()] : [1, 0],
