@@ -4,6 +4,7 @@ import { regularExpectation } from '../../../harness/runner/regular-expectation'
 import { toPathSpec } from '../../../harness/runner/to-path-spec';
 import type { SuitePathInput } from '../../../shared/schemas/suite-path-schema';
 import { makeSuite } from './support/make-suite';
+import { sqrtBranch } from './support/sqrt-branch';
 
 /** √z as the branch of z^(1/2) with k = 0 at z0 = 1, cut along (−∞, 0], on a circle of radius 2 starting at `start_angle`. */
 function sqrtOnCircle(start_angle: string) {
@@ -17,22 +18,7 @@ function sqrtOnCircle(start_angle: string) {
   };
   const suite = makeSuite({
     subject: 'sqrt(z)',
-    branch: {
-      kind: 'regular',
-      g: 'z',
-      nu: '1/2',
-      z0: { re: '1', im: '0' },
-      k: 0,
-      cuts: [
-        {
-          points: [
-            { re: '0', im: '0' },
-            { re: '-1', im: '0' },
-          ],
-          to_infinity: true,
-        },
-      ],
-    },
+    branch: sqrtBranch,
     paths: [path],
   });
   const built = suite.paths[0]!;

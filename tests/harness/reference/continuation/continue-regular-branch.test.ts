@@ -7,14 +7,21 @@ import { Rational } from '../../../../harness/reference/numbers/rational';
 
 const r = (n: bigint, d = 1n) => new Rational(n, d);
 
-/** √z (k = 0 at z0 = 1) at the start of the unit circle that begins at `startAngle`. */
+/** √z with k = 0 at z0 = 1, no cuts, along `path` at `at`. */
+const sqrtRequest = (path: ContinuationRequest['path'], at: Rational[]): ContinuationRequest => ({
+  g: FactoredFunction.fromSubject(parseSubject('z')),
+  nu: { re: r(1n, 2n), im: Rational.ZERO },
+  z0: [Rational.ONE, Rational.ZERO],
+  start: { kind: 'sheet', k: 0 },
+  path,
+  at,
+  cuts: null,
+});
+
+/** √z at the start of the unit circle that begins at `startAngle`. */
 function atCircleStart(startAngle: ExactAngle) {
-  const request: ContinuationRequest = {
-    g: FactoredFunction.fromSubject(parseSubject('z')),
-    nu: { re: r(1n, 2n), im: Rational.ZERO },
-    z0: [Rational.ONE, Rational.ZERO],
-    start: { kind: 'sheet', k: 0 },
-    path: {
+  const request = sqrtRequest(
+    {
       kind: 'circle',
       center: [Rational.ZERO, Rational.ZERO],
       radius: Rational.ONE,
@@ -22,9 +29,8 @@ function atCircleStart(startAngle: ExactAngle) {
       turns: Rational.ONE,
       ccw: true,
     },
-    at: [Rational.ZERO],
-    cuts: null,
-  };
+    [Rational.ZERO],
+  );
   const result = continueRegularBranch(request);
   if (result.kind !== 'continued') throw new Error(result.reason);
   return result.values[0]!;
