@@ -52,42 +52,22 @@ describe('continueRegularBranch (the typed continuation API)', () => {
     expect(f.re.toDecimal(40)).not.toBe(f.im.toDecimal(40));
   });
 
+  /** The segment from 1 to `to` on the real axis. */
+  const alongReal = (to: bigint): ContinuationRequest['path'] => ({
+    kind: 'polyline',
+    points: [
+      [Rational.ONE, Rational.ZERO],
+      [r(to), Rational.ZERO],
+    ],
+  });
+
   it('refuses a t outside [0, 1], naming it, instead of throwing', () => {
-    const g = FactoredFunction.fromSubject(parseSubject('z'));
-    const result = continueRegularBranch({
-      g,
-      nu: { re: r(1n, 2n), im: Rational.ZERO },
-      z0: [Rational.ONE, Rational.ZERO],
-      start: { kind: 'sheet', k: 0 },
-      path: {
-        kind: 'polyline',
-        points: [
-          [Rational.ONE, Rational.ZERO],
-          [r(2n), Rational.ZERO],
-        ],
-      },
-      at: [Rational.ZERO, r(3n, 2n)],
-      cuts: null,
-    });
+    const result = continueRegularBranch(sqrtRequest(alongReal(2n), [Rational.ZERO, r(3n, 2n)]));
     expect(result).toEqual({ kind: 'refused', reason: 'at.1 must lie in [0, 1]' });
   });
 
   it('refuses a path through a zero of g with the place, as a typed refusal', () => {
-    const result = continueRegularBranch({
-      g: FactoredFunction.fromSubject(parseSubject('z')),
-      nu: { re: r(1n, 2n), im: Rational.ZERO },
-      z0: [Rational.ONE, Rational.ZERO],
-      start: { kind: 'sheet', k: 0 },
-      path: {
-        kind: 'polyline',
-        points: [
-          [Rational.ONE, Rational.ZERO],
-          [r(-1n), Rational.ZERO],
-        ],
-      },
-      at: [Rational.ONE],
-      cuts: null,
-    });
+    const result = continueRegularBranch(sqrtRequest(alongReal(-1n), [Rational.ONE]));
     expect(result.kind).toBe('refused');
     expect(result.kind === 'refused' && result.reason).toMatch(/passes through a zero of g .* at \(0, 0\)/);
   });
