@@ -3,26 +3,12 @@ import { evaluateSuite } from '../../../../harness/runner/evaluation/evaluate-su
 import { ReferenceCache } from '../../../../harness/runner/reference-cache/reference-cache';
 import { makeSuite } from '../support/make-suite';
 import { referenceTarget } from '../support/reference-target';
+import { sqrtBranch } from '../support/sqrt-branch';
 
 /** √z as the branch of z^(1/2) with f(1) = 1 and the cut (−∞, 0]; a unit circle around 0 has monodromy e^{iπ} = −1. */
 const suite = makeSuite({
   subject: 'sqrt(z)',
-  branch: {
-    kind: 'regular',
-    g: 'z',
-    nu: '1/2',
-    z0: { re: '1', im: '0' },
-    k: 0,
-    cuts: [
-      {
-        points: [
-          { re: '0', im: '0' },
-          { re: '-1', im: '0' },
-        ],
-        to_infinity: true,
-      },
-    ],
-  },
+  branch: sqrtBranch,
   tolerances: { values: { relative: 1e-14 }, monodromy: { relative: 1e-12 } },
   paths: [{ kind: 'circle', name: 'unit circle', center: { re: '0', im: '0' }, radius: '1', samples: 65 }],
 });
