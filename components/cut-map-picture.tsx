@@ -4,8 +4,9 @@ import { theme } from '../constants/theme';
 import type { CutMap } from '../shared/cut-map';
 import { PlanePicture, type PlanePoint } from './plane-picture';
 import { wireNumber } from './wire-number';
+import type { WireComplex } from '../shared/wire-complex';
 
-const point = (w: { re: string; im: string }): PlanePoint => ({ re: Number(w.re), im: Number(w.im) });
+const point = (w: WireComplex): PlanePoint => ({ re: Number(w.re), im: Number(w.im) });
 const percent = (x: number) => `${Math.round(x * 100)} %`;
 /** The plane picture's margin on each side (components/plane-picture.tsx). */
 const PAD = 28;

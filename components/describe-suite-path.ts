@@ -1,7 +1,7 @@
 import type { SuitePath } from '../shared/schemas/suite-path-schema';
+import type { WireComplex } from '../shared/wire-complex';
 
-const c = (z: { re: string; im: string }) =>
-  `${z.re} ${z.im.startsWith('-') ? '−' : '+'} ${z.im.replace(/^[+-]/, '')}i`;
+const c = (z: WireComplex) => `${z.re} ${z.im.startsWith('-') ? '−' : '+'} ${z.im.replace(/^[+-]/, '')}i`;
 
 /** A path in one line of words, e.g. "circle around 0 + 0i, radius 2, from angle 0, 1 turn ↺, 65 samples". */
 export function describeSuitePath(p: SuitePath): string {

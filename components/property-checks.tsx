@@ -4,6 +4,7 @@ import { theme } from '../constants/theme';
 import type { PropertyOutcome } from '../shared/property-outcome';
 import type { RunPropertyRow } from '../shared/run-property-row';
 import { OUTCOME_TONE } from './outcome-tone';
+import type { WireComplex } from '../shared/wire-complex';
 
 const KIND = {
   held: { glyph: '✓', word: 'held', tone: 'pass' },
@@ -11,8 +12,7 @@ const KIND = {
   'not-checked': { glyph: '−', word: 'not checked', tone: 'neutral' },
 } as const satisfies Record<PropertyOutcome['kind'], { glyph: string; word: string; tone: keyof typeof OUTCOME_TONE }>;
 
-const complex = (c: { re: string; im: string }) =>
-  `${c.re} ${c.im.startsWith('-') ? '−' : '+'} ${c.im.replace(/^-/, '')}i`;
+const complex = (c: WireComplex) => `${c.re} ${c.im.startsWith('-') ? '−' : '+'} ${c.im.replace(/^-/, '')}i`;
 
 const plural = (n: number, word: string) => `${n.toLocaleString('en-GB')} ${word}${n === 1 ? '' : 's'}`;
 

@@ -1,7 +1,7 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { useUploadReferenceTable } from '../client/use-upload-reference-table';
 import { theme } from '../constants/theme';
-import type { WireComplex } from '../shared/run-result';
+import type { WireComplex } from '../shared/wire-complex';
 import { FileUploadButton } from './file-upload-button';
 import { IssueList } from './issue-list';
 

@@ -3,9 +3,9 @@ import { theme } from '../constants/theme';
 import type { Suite } from '../shared/schemas/suite-schema';
 import type { Tolerance } from '../shared/schemas/tolerance-schema';
 import { describeSuitePath } from './describe-suite-path';
+import type { WireComplex } from '../shared/wire-complex';
 
-const c = (z: { re: string; im: string }) =>
-  `${z.re} ${z.im.startsWith('-') ? '−' : '+'} ${z.im.replace(/^[+-]/, '')}i`;
+const c = (z: WireComplex) => `${z.re} ${z.im.startsWith('-') ? '−' : '+'} ${z.im.replace(/^[+-]/, '')}i`;
 const tol = (t: Tolerance) => ('ulps' in t ? `${t.ulps} ulps per part` : `relative error ${t.relative}`);
 
 function Fact({ label, children, mono = false }: { label: string; children: string; mono?: boolean }) {

@@ -3,7 +3,7 @@ import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { formatHexDouble } from '../harness/checks/format-hex-double';
 import { theme } from '../constants/theme';
 import type { FailureView } from '../shared/failure-view';
-import type { WireComplex } from '../shared/run-result';
+import type { WireComplex } from '../shared/wire-complex';
 import { wireNumber } from '../shared/wire-number';
 import { formatComplex } from './format-complex';
 

@@ -1,5 +1,5 @@
 import type { Diagnosis } from './diagnosis';
-import type { WireComplex } from './run-result';
+import type { WireComplex } from './wire-complex';
 
 /**
  * A row of the failure table (GET /api/failures). `rule`, `reproducer` and `limits` come only

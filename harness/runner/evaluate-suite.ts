@@ -6,8 +6,8 @@ import type {
   PathResult,
   PointFinding,
   SuiteTargetResult,
-  WireComplex,
 } from '../../shared/run-result';
+import type { WireComplex } from '../../shared/wire-complex';
 import type { Suite } from '../../shared/schemas/suite-schema';
 import type { SuitePath } from '../../shared/schemas/suite-path-schema';
 import type { Tolerance } from '../../shared/schemas/tolerance-schema';

@@ -1,4 +1,5 @@
-import type { PathResult, PointFinding, RunResult, SuiteTargetResult, WireComplex } from '../../shared/run-result';
+import type { PathResult, PointFinding, RunResult, SuiteTargetResult } from '../../shared/run-result';
+import type { WireComplex } from '../../shared/wire-complex';
 import { describeOutcome } from './describe-outcome';
 
 // XML 1.0 allows tab, LF, CR and the ranges below; anything else (other control characters) is dropped.

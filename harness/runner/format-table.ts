@@ -1,4 +1,5 @@
-import type { RunResult, SuiteTargetResult, WireComplex } from '../../shared/run-result';
+import type { RunResult, SuiteTargetResult } from '../../shared/run-result';
+import type { WireComplex } from '../../shared/wire-complex';
 import { describeOutcome } from './describe-outcome';
 
 const c = (w: WireComplex | null): string =>

@@ -25,9 +25,9 @@ import type { ExpectedColumn, Expectation, PointAlternatives } from './expectati
 import type { ReferenceCache } from './reference-cache';
 import { rootSheets } from './subject-sheet-family';
 import { toPathSpec } from './to-path-spec';
+import type { WireComplex } from '../../shared/wire-complex';
 
 type Point = [number, number];
-type Wire = { re: string; im: string };
 
 /** Cache kinds: the branch's value at a point, the value continued from the other side of the nearest cut, a refusal marker. */
 const KIND_VALUE = 0;
@@ -42,7 +42,7 @@ const BITS = 192;
 /** The continuation engine takes at most this many values of t per request. */
 const MAX_AT = 1000;
 
-const wireOf = ([re, im]: Point): Wire => ({ re: formatHexDouble(re), im: formatHexDouble(im) });
+const wireOf = ([re, im]: Point): WireComplex => ({ re: formatHexDouble(re), im: formatHexDouble(im) });
 const exact = (text: string): Rational => {
   const p = parseNumber(text);
   if (p.kind !== 'exact') throw new RangeError(`${text} must be finite`);
@@ -76,7 +76,7 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
   const branch = suite.branch;
   if (branch.kind !== 'regular') throw new TypeError('regularExpectation needs a regular branch');
   const gExpr = parseSubject(branch.g);
-  const nuWire: Wire = typeof branch.nu === 'string' ? { re: branch.nu, im: '0' } : branch.nu;
+  const nuWire: WireComplex = typeof branch.nu === 'string' ? { re: branch.nu, im: '0' } : branch.nu;
   const nuRe = exact(nuWire.re);
   const nuIm = exact(nuWire.im);
   const nuD: [number, number] = [parseDouble(nuWire.re), parseDouble(nuWire.im)];
@@ -187,7 +187,7 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
         path: { kind: 'polyline', points: [branch.z0, ...via.map(wireOf), wireOf(q)] },
         at: ['1'],
       }) as {
-        values?: { f: Wire }[];
+        values?: { f: WireComplex }[];
         error?: string;
       };
       const f = answer.values?.[0]?.f;
@@ -221,9 +221,9 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
               }
             : {
                 kind: 'polyline',
-                points: path.kind === 'segment' ? [path.from, path.to] : (path as { points: Wire[] }).points,
+                points: path.kind === 'segment' ? [path.from, path.to] : (path as { points: WireComplex[] }).points,
               };
-        const answer = answerContinue({ ...request, path: spec, at: ats }) as { values?: { f: Wire }[] };
+        const answer = answerContinue({ ...request, path: spec, at: ats }) as { values?: { f: WireComplex }[] };
         if (answer.values && answer.values.length === points.length)
           result = answer.values.map((v) => [Number(v.f.re), Number(v.f.im)]);
       }
@@ -410,8 +410,8 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
           };
         }
       } else if (path.kind === 'polyline') {
-        const first = path.points[0] as Wire;
-        const last = path.points[path.points.length - 1] as Wire;
+        const first = path.points[0] as WireComplex;
+        const last = path.points[path.points.length - 1] as WireComplex;
         if (parseDouble(first.re) === parseDouble(last.re) && parseDouble(first.im) === parseDouble(last.im))
           spec = { kind: 'polyline', points: path.points };
       }
@@ -427,7 +427,7 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
         path: spec,
         at: ['1'],
       }) as {
-        monodromy?: Wire | null;
+        monodromy?: WireComplex | null;
         error?: string;
       };
       if (!answer.monodromy) {

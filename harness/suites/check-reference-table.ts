@@ -8,6 +8,7 @@ import { answerContinue } from '../reference/continuation/answer-continue';
 import { formatDouble } from '../reference/numbers/format-double';
 import { parseDouble } from '../reference/numbers/parse-double';
 import { ulpDistance } from '../reference/numbers/ulp-distance';
+import type { WireComplex } from '../../shared/wire-complex';
 
 /** Uploaded tables are for spot checks: 5,000 rows take ~2 s here. */
 export const MAX_REFERENCE_ROWS = 5000;
@@ -78,7 +79,7 @@ export function checkReferenceTable(suite: Suite, csv: string): ReferenceTableCh
         at: ['1'],
         cuts: b.cuts,
       }) as {
-        values?: { f: { re: string; im: string } }[];
+        values?: { f: WireComplex }[];
         error?: string;
       };
       if (!answer.values) {

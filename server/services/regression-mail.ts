@@ -1,7 +1,7 @@
 import { describeWorstPart } from '../../shared/describe-worst-part';
 import type { Diagnosis } from '../../shared/diagnosis';
 import { formatUlps } from '../../shared/format-ulps';
-import type { WireComplex } from '../../shared/run-result';
+import type { WireComplex } from '../../shared/wire-complex';
 import type { NewMail } from './new-mail';
 import type { RegressionRow } from './regression-row';
 

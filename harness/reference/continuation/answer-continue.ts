@@ -11,6 +11,7 @@ import { ContinuationPath, type ExactPoint, type Point } from './continuation-pa
 import { CutLayout } from './cut-layout';
 import { FactoredFunction } from './factored-function';
 import { LayoutError } from './layout-error';
+import type { WireComplex } from '../../../shared/wire-complex';
 
 const DIGITS = 40;
 
@@ -30,10 +31,7 @@ export function answerContinue(input: unknown): Record<string, unknown> {
       typeof req.nu === 'string'
         ? { re: exact(req.nu, 'nu'), im: exact('0', 'nu') }
         : { re: exact(req.nu.re, 'nu.re'), im: exact(req.nu.im, 'nu.im') };
-    const point = (c: { re: string; im: string }, name: string): ExactPoint => [
-      exact(c.re, `${name}.re`),
-      exact(c.im, `${name}.im`),
-    ];
+    const point = (c: WireComplex, name: string): ExactPoint => [exact(c.re, `${name}.re`), exact(c.im, `${name}.im`)];
     const path =
       req.path.kind === 'circle'
         ? new ContinuationPath({
