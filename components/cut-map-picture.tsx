@@ -3,7 +3,7 @@ import { StyleSheet, Text, View, type LayoutChangeEvent } from 'react-native';
 import { theme } from '../constants/theme';
 import type { CutMap } from '../shared/cut-map';
 import { PlanePicture, type PlanePoint } from './plane-picture';
-import { wireNumber } from './wire-number';
+import { formatComplexText } from '../shared/format-complex-text';
 import type { WireComplex } from '../shared/wire-complex';
 
 const point = (w: WireComplex): PlanePoint => ({ re: Number(w.re), im: Number(w.im) });
@@ -61,7 +61,7 @@ export function CutMapPicture({ cutMap }: { cutMap: CutMap }) {
         ) : null}
         {cutMap.expected.map((e) => (
           <Text key={`${e.label} ${e.from.re} ${e.from.im}`} style={styles.line}>
-            {e.seen ? '✓' : '×'} {e.label} from {wireNumber(e.from)} to {wireNumber(e.to)}:{' '}
+            {e.seen ? '✓' : '×'} {e.label} from {formatComplexText(e.from)} to {formatComplexText(e.to)}:{' '}
             {e.coverage === null
               ? 'crosses no grid line inside the box, so it could not be seen or missed'
               : `a jump on ${percent(e.coverage)} of the grid lines crossing it — ${e.seen ? 'seen' : 'not seen'}`}
@@ -70,8 +70,8 @@ export function CutMapPicture({ cutMap }: { cutMap: CutMap }) {
         {unexpected.length ? <Text style={styles.head}>Discontinuities off the expected cuts</Text> : null}
         {unexpected.map((o, i) => (
           <Text key={i} style={styles.line}>
-            × {o.points.length} crossing(s) from {wireNumber(o.points[0])} to{' '}
-            {wireNumber(o.points[o.points.length - 1])}
+            × {o.points.length} crossing(s) from {formatComplexText(o.points[0])} to{' '}
+            {formatComplexText(o.points[o.points.length - 1])}
           </Text>
         ))}
         {cutMap.notFinite > 0 ? (

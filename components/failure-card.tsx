@@ -3,7 +3,7 @@ import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { theme } from '../constants/theme';
 import type { FailureView } from '../shared/failure-view';
 import { describeFailure } from './describe-failure';
-import { formatComplex } from './format-complex';
+import { formatComplexText } from '../shared/format-complex-text';
 import { DiagnosisLabel } from './diagnosis-label';
 import { DIAGNOSIS_STYLES } from './diagnosis-styles';
 
@@ -33,11 +33,11 @@ export function FailureCard({ failure: f }: { failure: FailureView }) {
           {f.label ? ` · ${f.label}` : ''} · t = {Number(f.t.toPrecision(4))}
         </Text>
         <View style={styles.values}>
-          <Text style={styles.value}>z = {formatComplex(f.z)}</Text>
-          <Text style={styles.value}>expected {formatComplex(f.expected)}</Text>
+          <Text style={styles.value}>z = {formatComplexText(f.z)}</Text>
+          <Text style={styles.value}>expected {formatComplexText(f.expected)}</Text>
           <Text style={styles.value}>
             library {'  '}
-            {formatComplex(f.actual)}
+            {formatComplexText(f.actual)}
           </Text>
         </View>
       </Pressable>

@@ -4,15 +4,13 @@ import { theme } from '../constants/theme';
 import type { PropertyOutcome } from '../shared/property-outcome';
 import type { RunPropertyRow } from '../shared/run-property-row';
 import { OUTCOME_TONE } from './outcome-tone';
-import type { WireComplex } from '../shared/wire-complex';
+import { formatComplexText } from '../shared/format-complex-text';
 
 const KIND = {
   held: { glyph: '✓', word: 'held', tone: 'pass' },
   failed: { glyph: '❌', word: 'failed', tone: 'fail' },
   'not-checked': { glyph: '−', word: 'not checked', tone: 'neutral' },
 } as const satisfies Record<PropertyOutcome['kind'], { glyph: string; word: string; tone: keyof typeof OUTCOME_TONE }>;
-
-const complex = (c: WireComplex) => `${c.re} ${c.im.startsWith('-') ? '−' : '+'} ${c.im.replace(/^-/, '')}i`;
 
 const plural = (n: number, word: string) => `${n.toLocaleString('en-GB')} ${word}${n === 1 ? '' : 's'}`;
 
@@ -106,12 +104,12 @@ function PropertyCheckCard({ pair, outcome }: { pair: string; outcome: PropertyO
           </Text>
           {outcome.counterexample.map((z, i) => (
             <Text key={i} style={styles.mono} selectable>
-              {outcome.counterexample.length > 1 ? `z${i + 1}` : 'z'} = {complex(z)}
+              {outcome.counterexample.length > 1 ? `z${i + 1}` : 'z'} = {formatComplexText(z)}
             </Text>
           ))}
           {outcome.values.map((v) => (
             <Text key={v.name} style={styles.mono} selectable>
-              {v.name} = {complex(v.value)}
+              {v.name} = {formatComplexText(v.value)}
             </Text>
           ))}
           <Text style={styles.label}>Replay with fast-check: seed {outcome.seed}, path</Text>

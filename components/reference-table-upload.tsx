@@ -1,12 +1,9 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { useUploadReferenceTable } from '../client/use-upload-reference-table';
 import { theme } from '../constants/theme';
-import type { WireComplex } from '../shared/wire-complex';
 import { FileUploadButton } from './file-upload-button';
 import { IssueList } from './issue-list';
-
-const c = (z: WireComplex) =>
-  `${z.re} ${String(z.im).startsWith('-') ? '−' : '+'} ${String(z.im).replace(/^[+-]/, '')}i`;
+import { formatComplexText } from '../shared/format-complex-text';
 
 /**
  * A CSV of reference values computed elsewhere (z, expected value, source), checked against
@@ -38,12 +35,13 @@ export function ReferenceTableUpload({ slug }: { slug: string }) {
           {check.disagreements.map((d) => (
             <View key={d.line} style={styles.row}>
               <Text style={styles.rowHead}>
-                ≠ line {d.line} · z = {c(d.z)} · {d.ulps === Infinity || d.ulps > 1e15 ? 'far apart' : `${d.ulps} ulps`}
+                ≠ line {d.line} · z = {formatComplexText(d.z)} ·{' '}
+                {d.ulps === Infinity || d.ulps > 1e15 ? 'far apart' : `${d.ulps} ulps`}
               </Text>
               <Text style={styles.mono}>
-                theirs ({d.source || 'no source'}): {c(d.theirs)}
+                theirs ({d.source || 'no source'}): {formatComplexText(d.theirs)}
               </Text>
-              <Text style={styles.mono}>ours: {c(d.ours)}</Text>
+              <Text style={styles.mono}>ours: {formatComplexText(d.ours)}</Text>
             </View>
           ))}
           {check.invalid.map((i) => (

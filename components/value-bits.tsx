@@ -4,12 +4,12 @@ import { formatHexDouble } from '../harness/checks/format-hex-double';
 import { theme } from '../constants/theme';
 import type { FailureView } from '../shared/failure-view';
 import type { WireComplex } from '../shared/wire-complex';
-import { wireNumber } from '../shared/wire-number';
-import { formatComplex } from './format-complex';
+import { parseWireNumber } from '../shared/parse-wire-number';
+import { formatComplexText } from '../shared/format-complex-text';
 
 const hexOf = (c: WireComplex): WireComplex => ({
-  re: formatHexDouble(wireNumber(c.re)),
-  im: formatHexDouble(wireNumber(c.im)),
+  re: formatHexDouble(parseWireNumber(c.re)),
+  im: formatHexDouble(parseWireNumber(c.im)),
 });
 
 /**
@@ -33,7 +33,7 @@ export function ValueBits({ failure: f }: { failure: FailureView }) {
         <View key={r.name} style={styles.row}>
           <Text style={styles.name}>{r.name}</Text>
           <Text style={styles.value} selectable>
-            {formatComplex(r.value)}
+            {formatComplexText(r.value)}
           </Text>
           {bits && r.value ? <HexLine hex={r.hex ?? hexOf(r.value)} /> : null}
         </View>

@@ -13,7 +13,7 @@ import type { FailurePathPoint, FailurePathView, PlaneXY } from '../../shared/fa
 import type { OutcomeCounts } from '../../shared/run-result';
 import type { WireComplex } from '../../shared/wire-complex';
 import type { Suite } from '../../shared/schemas/suite-schema';
-import { wireNumber } from '../../shared/wire-number';
+import { parseWireNumber } from '../../shared/parse-wire-number';
 import type { SuitePath } from '../../shared/schemas/suite-path-schema';
 import type { SubjectExpr } from '../../harness/expressions/subject-expr';
 import type { ExpectedColumn } from '../../harness/runner/expectation';
@@ -107,7 +107,9 @@ export async function failurePath(
         actualFrom: expectedArg === null ? 'none' : 'expected-within-tolerance',
         failureId: null,
       };
-    const actualArg = failed.actual ? argOf(wireNumber(failed.actual.re), wireNumber(failed.actual.im)) : null;
+    const actualArg = failed.actual
+      ? argOf(parseWireNumber(failed.actual.re), parseWireNumber(failed.actual.im))
+      : null;
     return {
       index: i,
       t: p.t,
@@ -212,7 +214,7 @@ function expectedCuts(suite: Suite, expr: SubjectExpr): Pick<FailurePathView, 'c
   const ends: PlaneXY[] = [];
   if (suite.branch.kind === 'regular') {
     for (const cut of suite.branch.cuts) {
-      const pts = cut.points.map((p) => ({ re: wireNumber(p.re), im: wireNumber(p.im) }));
+      const pts = cut.points.map((p) => ({ re: parseWireNumber(p.re), im: parseWireNumber(p.im) }));
       cuts.push({ points: pts, toInfinity: cut.to_infinity });
       if (pts[0]) ends.push(pts[0]);
       if (!cut.to_infinity && pts.length > 1) ends.push(pts[pts.length - 1] as PlaneXY);
