@@ -25,6 +25,7 @@ import type { ExpectedColumn, Expectation, PointAlternatives } from './expectati
 import type { ReferenceCache } from './reference-cache';
 import { rootSheets } from './subject-sheet-family';
 import { toPathSpec } from './to-path-spec';
+import { formatComplexText } from '../../shared/format-complex-text';
 import type { WireComplex } from '../../shared/wire-complex';
 
 type Point = [number, number];
@@ -309,7 +310,9 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
     }
   };
 
-  const describeBranch = `the regular branch of (${branch.g})^(${nuWire.im === '0' ? nuWire.re : `${nuWire.re} + ${nuWire.im}i`}) with ${branch.f0 ? `f0 = ${branch.f0.re} + ${branch.f0.im}i` : `k = ${branch.k}`} at z0 = ${branch.z0.re} + ${branch.z0.im}i`;
+  // ASCII signs: this text is also each finding's rule, which the CSV and JUnit outputs carry.
+  const text = (w: WireComplex) => formatComplexText(w, { ascii: true });
+  const describeBranch = `the regular branch of (${branch.g})^(${nuWire.im === '0' ? nuWire.re : text(nuWire)}) with ${branch.f0 ? `f0 = ${text(branch.f0)}` : `k = ${branch.k}`} at z0 = ${text(branch.z0)}`;
   const sheetKs = nuIm.isZero()
     ? nuRe.den <= 64n
       ? rootSheets(Number(nuRe.den))
