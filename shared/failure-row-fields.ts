@@ -8,6 +8,8 @@ const typed = <T>(): T => undefined as T;
 /** One cell of the CSV export: its header and how it reads the row (missing values are ''). */
 type CsvCell<R> = readonly [header: string, read: (row: R) => string | number];
 
+const cell = <K extends string>(header: string, key: K): CsvCell<Record<K, string | number>> => [header, (r) => r[key]];
+
 const complexCells = <K extends string>(key: K, prefix: string): readonly CsvCell<Record<K, WireComplex | null>>[] => [
   [`${prefix}_re`, (r) => r[key]?.re ?? ''],
   [`${prefix}_im`, (r) => r[key]?.im ?? ''],
@@ -44,7 +46,7 @@ export const FAILURE_ROW_FIELDS = [
     columnType: 'uuid',
     shown: 'row',
     value: typed<string>(),
-    csv: [['run', (r: { runId: string }) => r.runId]],
+    csv: [cell('run', 'runId')],
   },
   { key: 'shardId', column: 'shard_id', columnType: 'uuid', shown: 'stored', value: typed<string>() },
   {
@@ -62,7 +64,7 @@ export const FAILURE_ROW_FIELDS = [
     columnType: 'text',
     shown: 'row',
     value: typed<string>(),
-    csv: [['target', (r: { targetName: string }) => r.targetName]],
+    csv: [cell('target', 'targetName')],
   },
   { key: 'targetLibrary', column: 'target_library', columnType: 'text', shown: 'stored', value: typed<string>() },
   { key: 'targetVersion', column: 'target_version', columnType: 'text', shown: 'stored', value: typed<string>() },
@@ -72,7 +74,7 @@ export const FAILURE_ROW_FIELDS = [
     columnType: 'text',
     shown: 'row',
     value: typed<string>(),
-    csv: [['convention', (r: { convention: string }) => r.convention]],
+    csv: [cell('convention', 'convention')],
   },
   {
     key: 'pathName',
@@ -80,7 +82,7 @@ export const FAILURE_ROW_FIELDS = [
     columnType: 'text',
     shown: 'row',
     value: typed<string>(),
-    csv: [['path', (r: { pathName: string }) => r.pathName]],
+    csv: [cell('path', 'pathName')],
   },
   {
     key: 'pointIndex',
@@ -97,7 +99,7 @@ export const FAILURE_ROW_FIELDS = [
     shown: 'row',
     value: typed<number>(),
     fromFinding: (f: PointFinding) => f.t,
-    csv: [['t', (r: { t: number }) => r.t]],
+    csv: [cell('t', 't')],
   },
   {
     key: 'label',
@@ -155,7 +157,7 @@ export const FAILURE_ROW_FIELDS = [
     shown: 'row',
     value: typed<'fail' | 'error' | 'skipped'>(),
     fromFinding: (f: PointFinding) => (f.outcome.kind === 'pass' ? 'fail' : f.outcome.kind),
-    csv: [['outcome', (r: { outcomeKind: string }) => r.outcomeKind]],
+    csv: [cell('outcome', 'outcomeKind')],
   },
   {
     key: 'diagnosisKind',
