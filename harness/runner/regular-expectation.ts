@@ -16,6 +16,7 @@ import { answerContinue } from '../reference/continuation/answer-continue';
 import { FactoredFunction } from '../reference/continuation/factored-function';
 import { exp } from '../reference/functions/exp';
 import { BigFloat } from '../reference/numbers/big-float';
+import { formatDouble } from '../reference/numbers/format-double';
 import { parseDouble } from '../reference/numbers/parse-double';
 import { parseNumber } from '../reference/numbers/parse-number';
 import type { Rational } from '../reference/numbers/rational';
@@ -44,6 +45,9 @@ const BITS = 192;
 const MAX_AT = 1000;
 
 const wireOf = ([re, im]: Point): WireComplex => ({ re: formatHexDouble(re), im: formatHexDouble(im) });
+/** A point in messages, sign-exact with ASCII signs: "-1 - 0i", not "-1 + -0i". */
+const pointText = ([re, im]: Point): string =>
+  formatComplexText({ re: formatDouble(re), im: formatDouble(im) }, { ascii: true });
 const exact = (text: string): Rational => {
   const p = parseNumber(text);
   if (p.kind !== 'exact') throw new RangeError(`${text} must be finite`);
@@ -151,7 +155,7 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
       const m = Math.round(x);
       if (Math.abs(x - m) > 0.2 || Math.abs(Math.hypot(...rho) - 1) > 1e-3) {
         throw new Error(
-          `the continued value at ${where} is no value of (${branch.g})^(${nuWire.re}) (ratio ${rho[0]} + ${rho[1]}i)`,
+          `the continued value at ${where} is no value of (${branch.g})^(${nuWire.re}) (ratio ${pointText(rho)})`,
         );
       }
       const inv = modInverse(((a % b) + b) % b, b);
@@ -165,7 +169,7 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
       Math.exp(-2 * Math.PI * nuD[1] * k) * Math.sin(2 * Math.PI * nuD[0] * k),
     ];
     if (Math.hypot(f[0] - rho[0], f[1] - rho[1]) > 1e-3 * Math.hypot(...f))
-      throw new Error(`the continued value at ${where} is no value of the branch (ratio ${rho[0]} + ${rho[1]}i)`);
+      throw new Error(`the continued value at ${where} is no value of the branch (ratio ${pointText(rho)})`);
     return k;
   };
 
@@ -199,7 +203,7 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
       }
       lastError = answer.error ?? 'no value';
     }
-    throw new Error(`the branch could not be continued to ${q[0]} + ${q[1]}i: ${lastError}`);
+    throw new Error(`the branch could not be continued to ${pointText(q)}: ${lastError}`);
   };
 
   /** Continued values at the points of a whole path, by one continuation along it (null when it cannot be done that way). */
@@ -296,7 +300,7 @@ export function regularExpectation(suite: Suite, cache: ReferenceCache, cacheKey
       if (kind === KIND_OTHER_SIDE && !prox) throw new Error('not near a cut');
       const F = q === p && along ? along : continueTo(q);
       const P = principalPow(BigComplex.fromDoubles(p[0], p[1]));
-      const k = sheetOf(F, [P.re.toDouble(), P.im.toDouble()], `${p[0]} + ${p[1]}i`);
+      const k = sheetOf(F, [P.re.toDouble(), P.im.toDouble()], pointText(p));
       let f = P.mul(factor(k)).truncate(BITS);
       if (C) f = f.mul(C).truncate(BITS);
       const v: Point = [f.re.toDouble(), f.im.toDouble()];
