@@ -38,3 +38,7 @@ export { BigComplex } from './reference/complex/big-complex';
 export { principalDouble } from './reference/principal-double';
 export { principalValue } from './reference/principal-value';
 export { ulpsApart } from './checks/ulps-apart';
+
+// The function catalogue, for the demo-suite generator.
+export { CATALOGUE_ENTRIES } from './catalogue/catalogue-entries';
+export type { DemoCut, DemoPrincipalFunction } from './catalogue/demo-principal-function';

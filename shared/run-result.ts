@@ -1,12 +1,7 @@
 import type { TargetIdentity } from './target-identity';
 import type { DiagnosisKind } from './diagnosis';
 import type { PointOutcome } from './point-outcome';
-
-/** A complex number on the wire (docs/suite-format.md): shortest round-trip decimals, "-0", "inf", "nan". */
-export interface WireComplex {
-  re: string;
-  im: string;
-}
+import type { WireComplex } from './wire-complex';
 
 /** How many points of a path, a suite × target pair or a run came out each way. */
 export interface OutcomeCounts {

@@ -4,7 +4,7 @@ import { theme } from '../../constants/theme';
 import type { FailureView } from '../../shared/failure-view';
 import { SkText } from '../ui/sk-text';
 import { describeFailure } from './describe-failure';
-import { formatComplex } from './format-complex';
+import { formatComplexText } from '../../shared/format-complex-text';
 import { DiagnosisLabel } from './diagnosis-label';
 import { DIAGNOSIS_STYLES } from './diagnosis-styles';
 
@@ -34,11 +34,11 @@ export function FailureCard({ failure: f }: { failure: FailureView }) {
           {f.label ? ` · ${f.label}` : ''} · t = {Number(f.t.toPrecision(4))}
         </SkText>
         <View style={styles.values}>
-          <Text style={styles.value}>z = {formatComplex(f.z)}</Text>
-          <Text style={styles.value}>expected {formatComplex(f.expected)}</Text>
+          <Text style={styles.value}>z = {formatComplexText(f.z)}</Text>
+          <Text style={styles.value}>expected {formatComplexText(f.expected)}</Text>
           <Text style={styles.value}>
             library {'  '}
-            {formatComplex(f.actual)}
+            {formatComplexText(f.actual)}
           </Text>
         </View>
       </Pressable>

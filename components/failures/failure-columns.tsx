@@ -4,7 +4,7 @@ import { theme } from '../../constants/theme';
 import type { FailureView } from '../../shared/failure-view';
 import { SkText } from '../ui/sk-text';
 import { describeFailure } from './describe-failure';
-import { formatComplex } from './format-complex';
+import { formatComplexText } from '../../shared/format-complex-text';
 import { DiagnosisLabel } from './diagnosis-label';
 import { formatUlps } from '../../shared/format-ulps';
 
@@ -42,9 +42,9 @@ export const FAILURE_COLUMNS: {
   { id: 'convention', title: 'Convention', flex: 1.2, cell: (f) => plain(f.convention) },
   { id: 'path', title: 'Path', flex: 1.8, cell: (f) => plain(`${f.pathName}${f.label ? ` · ${f.label}` : ''}`) },
   { id: 't', title: 't', flex: 0.7, cell: (f) => mono(String(Number(f.t.toPrecision(4)))) },
-  { id: 'z', title: 'z', flex: 2, cell: (f) => mono(formatComplex(f.z)) },
-  { id: 'expected', title: 'Expected', flex: 2, cell: (f) => mono(formatComplex(f.expected)) },
-  { id: 'actual', title: 'Library', flex: 2, cell: (f) => mono(formatComplex(f.actual)) },
+  { id: 'z', title: 'z', flex: 2, cell: (f) => mono(formatComplexText(f.z)) },
+  { id: 'expected', title: 'Expected', flex: 2, cell: (f) => mono(formatComplexText(f.expected)) },
+  { id: 'actual', title: 'Library', flex: 2, cell: (f) => mono(formatComplexText(f.actual)) },
   {
     id: 'diagnosis',
     title: 'Diagnosis',

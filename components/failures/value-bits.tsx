@@ -3,14 +3,14 @@ import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { formatHexDouble } from '../../harness/web';
 import { theme } from '../../constants/theme';
 import type { FailureView } from '../../shared/failure-view';
-import type { WireComplex } from '../../shared/run-result';
-import { wireNumber } from '../../shared/wire-number';
+import type { WireComplex } from '../../shared/wire-complex';
+import { parseWireNumber } from '../../shared/parse-wire-number';
 import { SkText } from '../ui/sk-text';
-import { formatComplex } from './format-complex';
+import { formatComplexText } from '../../shared/format-complex-text';
 
 const hexOf = (c: WireComplex): WireComplex => ({
-  re: formatHexDouble(wireNumber(c.re)),
-  im: formatHexDouble(wireNumber(c.im)),
+  re: formatHexDouble(parseWireNumber(c.re)),
+  im: formatHexDouble(parseWireNumber(c.im)),
 });
 
 /**
@@ -34,7 +34,7 @@ export function ValueBits({ failure: f }: { failure: FailureView }) {
         <View key={r.name} style={styles.row}>
           <Text style={styles.name}>{r.name}</Text>
           <Text style={styles.value} selectable>
-            {formatComplex(r.value)}
+            {formatComplexText(r.value)}
           </Text>
           {bits && r.value ? <HexLine hex={r.hex ?? hexOf(r.value)} /> : null}
         </View>

@@ -5,7 +5,7 @@ import type { ConventionFingerprint } from '../../shared/convention-fingerprint'
 import { SkText } from '../ui/sk-text';
 import { ConventionLabel } from './convention-label';
 import { CONVENTION_STYLES, type Behaviour } from './convention-styles';
-import { wireNumber } from './wire-number';
+import { formatComplexText } from '../../shared/format-complex-text';
 
 type CutEntry = ConventionFingerprint['cuts'][number];
 type Probe = CutEntry['probes'][number];
@@ -15,10 +15,10 @@ const BEHAVIOURS: Behaviour[] = ['signed-zero', 'counter-clockwise', 'neither', 
 
 /** Where a probe sits, with both zero signs: "−0.5 ± 0i" on a cut along the real axis, "±0 + 2i" on one along the imaginary axis. */
 function probePlace(at: Probe['at']): string {
-  const m = (s: string) => s.replace(/^-/, '−');
-  if (at.im === '0') return `${m(at.re)} ± 0i`;
-  if (at.re === '0') return `±0 ${at.im.startsWith('-') ? '−' : '+'} ${at.im.replace(/^-/, '')}i`;
-  return wireNumber(at);
+  const text = formatComplexText(at);
+  if (at.im === '0') return text.replace(/ \+ 0i$/, ' ± 0i');
+  if (at.re === '0') return `±${text}`;
+  return text;
 }
 
 /** What the places of one cut say, counted: "signed zero at 4 of 4 places". */
@@ -180,8 +180,8 @@ function CutRow({
             {entry.probes.map((p) => (
               <View key={`${p.at.re} ${p.at.im}`} style={[styles.probe, wide && styles.probeWide]}>
                 <SkText variant="mono">z = {probePlace(p.at)}</SkText>
-                <Text style={styles.mono}>with +0 → {wireNumber(p.plusZero)}</Text>
-                <Text style={styles.mono}>with −0 → {wireNumber(p.minusZero)}</Text>
+                <Text style={styles.mono}>with +0 → {formatComplexText(p.plusZero)}</Text>
+                <Text style={styles.mono}>with −0 → {formatComplexText(p.minusZero)}</Text>
                 <SkText variant="caption" style={styles.small}>
                   votes {CONVENTION_STYLES[p.verdict].glyph} {CONVENTION_STYLES[p.verdict].word}
                   {p.note ? `: ${p.note}` : ''}

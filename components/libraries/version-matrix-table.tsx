@@ -3,7 +3,7 @@ import { Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-na
 import { theme } from '../../constants/theme';
 import type { VersionMatrix } from '../../shared/version-matrix';
 import { SkText } from '../ui/sk-text';
-import { wireNumber } from './wire-number';
+import { formatComplexText } from '../../shared/format-complex-text';
 
 type SuiteEntry = VersionMatrix['suites'][number];
 type Change = SuiteEntry['changes'][number];
@@ -152,16 +152,16 @@ function SuiteRow({ suite, versions, wide }: { suite: SuiteEntry; versions: stri
             <View key={`${c.path} ${c.index}`} style={styles.change}>
               <Text style={styles.changeHead}>
                 {c.path} · point {c.index}
-                {c.label ? ` (${c.label})` : ''} · z = {wireNumber(c.z)}
+                {c.label ? ` (${c.label})` : ''} · z = {formatComplexText(c.z)}
               </Text>
               <Text style={styles.faint}>first changed in {c.firstChangedIn}</Text>
               {c.steps.map((s) => (
                 <View key={s.after.version} style={styles.stepBox}>
                   <Text style={styles.step}>
-                    {s.before.version}: {wireNumber(s.before.value)} ({outcomeWords(s.before.outcome)})
+                    {s.before.version}: {formatComplexText(s.before.value)} ({outcomeWords(s.before.outcome)})
                   </Text>
                   <Text style={styles.step}>
-                    → {s.after.version}: {wireNumber(s.after.value)} ({outcomeWords(s.after.outcome)})
+                    → {s.after.version}: {formatComplexText(s.after.value)} ({outcomeWords(s.after.outcome)})
                   </Text>
                 </View>
               ))}

@@ -4,9 +4,10 @@ import { theme } from '../../constants/theme';
 import type { CutMap } from '../../shared/cut-map';
 import { SkText } from '../ui/sk-text';
 import { PlanePicture, type PlanePoint } from './plane-picture';
-import { wireNumber } from '../libraries/wire-number';
+import { formatComplexText } from '../../shared/format-complex-text';
+import type { WireComplex } from '../../shared/wire-complex';
 
-const point = (w: { re: string; im: string }): PlanePoint => ({ re: Number(w.re), im: Number(w.im) });
+const point = (w: WireComplex): PlanePoint => ({ re: Number(w.re), im: Number(w.im) });
 const percent = (x: number) => `${Math.round(x * 100)} %`;
 /** The plane picture's margin on each side (components/pictures/plane-picture.tsx). */
 const PAD = 28;
@@ -70,7 +71,7 @@ export function CutMapPicture({ cutMap }: { cutMap: CutMap }) {
         ) : null}
         {cutMap.expected.map((e) => (
           <SkText variant="caption" tone="ink" key={`${e.label} ${e.from.re} ${e.from.im}`} style={styles.line}>
-            {e.seen ? '✓' : '×'} {e.label} from {wireNumber(e.from)} to {wireNumber(e.to)}:{' '}
+            {e.seen ? '✓' : '×'} {e.label} from {formatComplexText(e.from)} to {formatComplexText(e.to)}:{' '}
             {e.coverage === null
               ? 'crosses no grid line inside the box, so it could not be seen or missed'
               : `a jump on ${percent(e.coverage)} of the grid lines crossing it — ${e.seen ? 'seen' : 'not seen'}`}
@@ -83,8 +84,8 @@ export function CutMapPicture({ cutMap }: { cutMap: CutMap }) {
         ) : null}
         {unexpected.map((o, i) => (
           <SkText variant="caption" tone="ink" key={i} style={styles.line}>
-            × {o.points.length} crossing(s) from {wireNumber(o.points[0])} to{' '}
-            {wireNumber(o.points[o.points.length - 1])}
+            × {o.points.length} crossing(s) from {formatComplexText(o.points[0])} to{' '}
+            {formatComplexText(o.points[o.points.length - 1])}
           </SkText>
         ))}
         {cutMap.notFinite > 0 ? (

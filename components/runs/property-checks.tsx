@@ -5,15 +5,13 @@ import type { PropertyOutcome } from '../../shared/property-outcome';
 import type { RunPropertyRow } from '../../shared/run-property-row';
 import { SkText } from '../ui/sk-text';
 import { OUTCOME_TONE } from './outcome-tone';
+import { formatComplexText } from '../../shared/format-complex-text';
 
 const KIND = {
   held: { glyph: '✓', word: 'held', tone: 'pass' },
   failed: { glyph: '❌', word: 'failed', tone: 'fail' },
   'not-checked': { glyph: '−', word: 'not checked', tone: 'neutral' },
 } as const satisfies Record<PropertyOutcome['kind'], { glyph: string; word: string; tone: keyof typeof OUTCOME_TONE }>;
-
-const complex = (c: { re: string; im: string }) =>
-  `${c.re} ${c.im.startsWith('-') ? '−' : '+'} ${c.im.replace(/^-/, '')}i`;
 
 const plural = (n: number, word: string) => `${n.toLocaleString('en-GB')} ${word}${n === 1 ? '' : 's'}`;
 
@@ -115,12 +113,12 @@ function PropertyCheckCard({ pair, outcome }: { pair: string; outcome: PropertyO
           </SkText>
           {outcome.counterexample.map((z, i) => (
             <SkText variant="mono" key={i} selectable>
-              {outcome.counterexample.length > 1 ? `z${i + 1}` : 'z'} = {complex(z)}
+              {outcome.counterexample.length > 1 ? `z${i + 1}` : 'z'} = {formatComplexText(z)}
             </SkText>
           ))}
           {outcome.values.map((v) => (
             <SkText variant="mono" key={v.name} selectable>
-              {v.name} = {complex(v.value)}
+              {v.name} = {formatComplexText(v.value)}
             </SkText>
           ))}
           <SkText variant="smallLabel" tone="inkFaint" style={styles.label}>

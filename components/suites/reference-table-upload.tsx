@@ -1,13 +1,10 @@
 import { StyleSheet, View } from 'react-native';
 import { useUploadReferenceTable } from '../../client/use-upload-reference-table';
 import { theme } from '../../constants/theme';
-import type { WireComplex } from '../../shared/run-result';
 import { FileUploadButton } from '../ui/file-upload-button';
 import { SkText } from '../ui/sk-text';
 import { IssueList } from './issue-list';
-
-const c = (z: WireComplex) =>
-  `${z.re} ${String(z.im).startsWith('-') ? '−' : '+'} ${String(z.im).replace(/^[+-]/, '')}i`;
+import { formatComplexText } from '../../shared/format-complex-text';
 
 /**
  * A CSV of reference values computed elsewhere (z, expected value, source), checked against
@@ -39,12 +36,13 @@ export function ReferenceTableUpload({ slug }: { slug: string }) {
           {check.disagreements.map((d) => (
             <View key={d.line} style={styles.row}>
               <SkText variant="smallLabel" tone="danger">
-                ≠ line {d.line} · z = {c(d.z)} · {d.ulps === Infinity || d.ulps > 1e15 ? 'far apart' : `${d.ulps} ulps`}
+                ≠ line {d.line} · z = {formatComplexText(d.z)} ·{' '}
+                {d.ulps === Infinity || d.ulps > 1e15 ? 'far apart' : `${d.ulps} ulps`}
               </SkText>
               <SkText variant="mono">
-                theirs ({d.source || 'no source'}): {c(d.theirs)}
+                theirs ({d.source || 'no source'}): {formatComplexText(d.theirs)}
               </SkText>
-              <SkText variant="mono">ours: {c(d.ours)}</SkText>
+              <SkText variant="mono">ours: {formatComplexText(d.ours)}</SkText>
             </View>
           ))}
           {check.invalid.map((i) => (

@@ -4,9 +4,8 @@ import type { Suite } from '../../shared/schemas/suite-schema';
 import type { Tolerance } from '../../shared/schemas/tolerance-schema';
 import { SkText } from '../ui/sk-text';
 import { describeSuitePath } from './describe-suite-path';
+import { formatComplexText } from '../../shared/format-complex-text';
 
-const c = (z: { re: string; im: string }) =>
-  `${z.re} ${z.im.startsWith('-') ? '−' : '+'} ${z.im.replace(/^[+-]/, '')}i`;
 const tol = (t: Tolerance) => ('ulps' in t ? `${t.ulps} ulps per part` : `relative error ${t.relative}`);
 
 function Fact({ label, children, mono = false }: { label: string; children: string; mono?: boolean }) {
@@ -37,15 +36,20 @@ export function SuiteFacts({ suite }: { suite: Suite }) {
           <Fact
             label="Branch"
             mono
-          >{`regular branch of (${b.g})^${typeof b.nu === 'string' ? b.nu : `(${c(b.nu)})`}`}</Fact>
+          >{`regular branch of (${b.g})^${typeof b.nu === 'string' ? b.nu : `(${formatComplexText(b.nu)})`}`}</Fact>
           <Fact label="Fixed by" mono>
-            {b.f0 ? `f(${c(b.z0)}) = ${c(b.f0)}` : `value k = ${b.k} at z0 = ${c(b.z0)} (principal·e^(2πiνk))`}
+            {b.f0
+              ? `f(${formatComplexText(b.z0)}) = ${formatComplexText(b.f0)}`
+              : `value k = ${b.k} at z0 = ${formatComplexText(b.z0)} (principal·e^(2πiνk))`}
           </Fact>
           <Fact label="Cut layout" mono>
             {b.cuts.length === 0
               ? 'no cuts'
               : b.cuts
-                  .map((cut, i) => `${i + 1}. ${cut.points.map(c).join(' → ')}${cut.to_infinity ? ' → ∞' : ''}`)
+                  .map(
+                    (cut, i) =>
+                      `${i + 1}. ${cut.points.map((z) => formatComplexText(z)).join(' → ')}${cut.to_infinity ? ' → ∞' : ''}`,
+                  )
                   .join('\n')}
           </Fact>
         </>
@@ -80,7 +84,7 @@ export function SuiteFacts({ suite }: { suite: Suite }) {
           : suite.properties
               .map(
                 (p) =>
-                  `${p.law}${p.power ? ` (n = ${p.power})` : ''} over ${p.region.kind === 'near-cuts' ? `points within ${p.region.distance} of the cuts` : p.region.kind === 'disc' ? `the disc |z − (${c(p.region.center)})| ≤ ${p.region.radius}` : `the box ${c(p.region.min)} to ${c(p.region.max)}`}, ${p.runs} runs, seed ${p.seed}`,
+                  `${p.law}${p.power ? ` (n = ${p.power})` : ''} over ${p.region.kind === 'near-cuts' ? `points within ${p.region.distance} of the cuts` : p.region.kind === 'disc' ? `the disc |z − (${formatComplexText(p.region.center)})| ≤ ${p.region.radius}` : `the box ${formatComplexText(p.region.min)} to ${formatComplexText(p.region.max)}`}, ${p.runs} runs, seed ${p.seed}`,
               )
               .join('\n')}
       </Fact>

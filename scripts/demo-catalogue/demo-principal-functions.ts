@@ -1,5 +1,4 @@
-import type { DemoPrincipalFunction } from '../../harness/catalogue/demo-principal-function';
-import { CATALOGUE_ENTRIES } from '../../harness/catalogue/catalogue-entries';
+import { CATALOGUE_ENTRIES, type DemoPrincipalFunction } from '../../harness';
 
 /**
  * The cuts and branch points of every catalogue function's principal branch, from the DLMF

@@ -13,9 +13,10 @@ import {
 } from '../../harness';
 import type { DiagnosisKind } from '../../shared/diagnosis';
 import type { FailurePathPoint, FailurePathView, PlaneXY } from '../../shared/failure-path-view';
-import type { OutcomeCounts, WireComplex } from '../../shared/run-result';
+import type { OutcomeCounts } from '../../shared/run-result';
+import type { WireComplex } from '../../shared/wire-complex';
 import type { Suite } from '../../shared/schemas/suite-schema';
-import { wireNumber } from '../../shared/wire-number';
+import { parseWireNumber } from '../../shared/parse-wire-number';
 import type { SuitePath } from '../../shared/schemas/suite-path-schema';
 import { HttpError } from '../http/http-error';
 
@@ -107,7 +108,9 @@ export async function failurePath(
         actualFrom: expectedArg === null ? 'none' : 'expected-within-tolerance',
         failureId: null,
       };
-    const actualArg = failed.actual ? argOf(wireNumber(failed.actual.re), wireNumber(failed.actual.im)) : null;
+    const actualArg = failed.actual
+      ? argOf(parseWireNumber(failed.actual.re), parseWireNumber(failed.actual.im))
+      : null;
     return {
       index: i,
       t: p.t,
@@ -209,7 +212,7 @@ function expectedCuts(suite: Suite, expr: SubjectExpr): Pick<FailurePathView, 'c
   const ends: PlaneXY[] = [];
   if (suite.branch.kind === 'regular') {
     for (const cut of suite.branch.cuts) {
-      const pts = cut.points.map((p) => ({ re: wireNumber(p.re), im: wireNumber(p.im) }));
+      const pts = cut.points.map((p) => ({ re: parseWireNumber(p.re), im: parseWireNumber(p.im) }));
       cuts.push({ points: pts, toInfinity: cut.to_infinity });
       if (pts[0]) ends.push(pts[0]);
       if (!cut.to_infinity && pts.length > 1) ends.push(pts[pts.length - 1] as PlaneXY);

@@ -1,4 +1,5 @@
 import type { DataSource } from 'typeorm';
+import { FAILURE_ROW_FIELDS } from '../../shared/failure-row-fields';
 import type { FailureView } from '../../shared/failure-view';
 import type { FailureQuery } from '../../shared/schemas/failure-query';
 import { FAILURE_COLUMNS, failureSearchSql } from '../sql/failure-search-sql';
@@ -6,7 +7,9 @@ import { FAILURE_COLUMNS, failureSearchSql } from '../sql/failure-search-sql';
 export type FailureRow = FailureView;
 
 /** The long text a page of the table does not show; the detail view and the CSV ask for it. */
-const DETAIL_COLUMNS = `, rule, reproducer, limits`;
+const DETAIL_COLUMNS = FAILURE_ROW_FIELDS.filter((f) => f.shown === 'detail')
+  .map((f) => `, ${f.column}`)
+  .join('');
 
 /** One page of the failure table as rows, for the CSV export and one failure's detail. */
 export async function searchFailures(

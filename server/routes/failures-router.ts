@@ -1,6 +1,8 @@
 import { stringify } from 'csv-stringify/sync';
 import { Router } from 'express';
 import type { DataSource } from 'typeorm';
+import { FAILURE_ROW_FIELDS } from '../../shared/failure-row-fields';
+import type { FailureView } from '../../shared/failure-view';
 import { ROLES } from '../../shared/roles';
 import { classifyBody } from '../../shared/schemas/classify-body';
 import { failureQuery } from '../../shared/schemas/failure-query';
@@ -12,6 +14,11 @@ import { InputError } from '../http/input-error';
 import { parseInput } from '../http/parse-input';
 import { failurePageJson } from '../failures/failure-page-json';
 import { searchFailures } from '../failures/failure-search';
+
+/** The export's cells in order, from the one list of the failure row's fields. */
+const CSV_CELLS = FAILURE_ROW_FIELDS.flatMap(
+  (f): readonly (readonly [string, (row: FailureView) => string | number])[] => ('csv' in f ? f.csv : []),
+);
 
 /** Rows per CSV export: enough for a whole demo run; larger tables are filtered first. */
 const CSV_MAX_ROWS = 50_000;
@@ -31,28 +38,7 @@ export function failuresRouter(dataSource: DataSource, options: { referenceCache
       throw new InputError([{ field: 'query', rule: 'needs run, suite or target to export' }]);
     const { rows } = await searchFailures(dataSource, q, true);
     const csv = stringify(
-      rows.map((r) => ({
-        run: r.runId,
-        suite: `${r.suiteSlug}@${r.suiteVersion}`,
-        target: r.targetName,
-        convention: r.convention,
-        path: r.pathName,
-        t: r.t,
-        z_re: r.z.re,
-        z_im: r.z.im,
-        z_hex_re: r.zHex.re,
-        z_hex_im: r.zHex.im,
-        expected_re: r.expected?.re ?? '',
-        expected_im: r.expected?.im ?? '',
-        actual_re: r.actual?.re ?? '',
-        actual_im: r.actual?.im ?? '',
-        outcome: r.outcomeKind,
-        diagnosis: (r.diagnosis as { kind?: string } | null)?.kind ?? '',
-        ulps: r.ulps ?? '',
-        relative_error: r.relativeError ?? '',
-        regression: r.isRegression ? 'yes' : 'no',
-        rule: r.rule,
-      })),
+      rows.map((r) => Object.fromEntries(CSV_CELLS.map(([header, read]) => [header, read(r)]))),
       { header: true },
     );
     res.type('text/csv').attachment('sheetkeeper-failures.csv').send(csv);

@@ -1,15 +1,15 @@
 import { describeWorstPart } from '../../shared/describe-worst-part';
 import type { Diagnosis } from '../../shared/diagnosis';
 import { formatUlps } from '../../shared/format-ulps';
-import type { WireComplex } from '../../shared/run-result';
+import type { WireComplex } from '../../shared/wire-complex';
 import type { NewMail } from '../mail/new-mail';
 import type { RegressionRow } from './regression-row';
+import { formatComplexText } from '../../shared/format-complex-text';
 
 /** At most this many rows in one mail; the rest are counted and linked. */
 const MAX_ROWS = 50;
 
-const c = (v: WireComplex | null) =>
-  v ? `${v.re} ${v.im.startsWith('-') ? '−' : '+'} ${v.im.replace(/^-/, '')}i` : '—';
+const c = (v: WireComplex | null) => formatComplexText(v);
 const escape = (s: string) =>
   s.replace(/[&<>"']/g, (ch) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[ch]!);
 const describe = (d: Diagnosis | null): string => {

@@ -1,5 +1,5 @@
 import type { Diagnosis } from '../../shared/diagnosis';
-import type { WireComplex } from '../../shared/run-result';
+import type { WireComplex } from '../../shared/wire-complex';
 
 /** One regression as the mail lists it. */
 export interface RegressionRow {

@@ -1,7 +1,8 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { checkSuiteProperties, evaluateSuite, ReferenceCache, type Target } from '../../harness';
 import type { PropertyOutcome } from '../../shared/property-outcome';
-import type { SuiteTargetResult } from '../../shared/run-result';
+import { FAILURE_ROW_FIELDS } from '../../shared/failure-row-fields';
+import type { PointFinding, SuiteTargetResult } from '../../shared/run-result';
 import { Failure } from '../entities/failure';
 import { PathSummary } from '../entities/path-summary';
 import { PropertyResult } from '../entities/property-result';
@@ -147,6 +148,14 @@ function errorResult(shard: Shard, message: string): SuiteTargetResult {
   };
 }
 
+type FindingField = Extract<(typeof FAILURE_ROW_FIELDS)[number], { fromFinding: unknown }>;
+
+/** The columns a finding fills by itself, as the one list of the failure row's fields reads them. */
+const columnsOfFinding = (f: PointFinding) =>
+  Object.fromEntries(FAILURE_ROW_FIELDS.flatMap((d) => ('fromFinding' in d ? [[d.key, d.fromFinding(f)]] : []))) as {
+    [D in FindingField as D['key']]: ReturnType<D['fromFinding']>;
+  };
+
 async function storeResult(tx: EntityManager, shard: Shard, result: SuiteTargetResult): Promise<void> {
   const body = shard.suiteVersion.body;
   const rows = result.paths.flatMap((path) =>
@@ -161,23 +170,8 @@ async function storeResult(tx: EntityManager, shard: Shard, result: SuiteTargetR
         targetVersion: shard.targetVersion,
         convention: body.convention,
         pathName: path.name,
-        pointIndex: f.index,
-        t: f.t,
-        label: f.label ?? null,
-        z: f.z,
-        zHex: f.zHex,
+        ...columnsOfFinding(f),
         pointKey: `${shard.suiteSlug}|${path.name}|${f.zHex.re}|${f.zHex.im}`,
-        expected: f.expected,
-        actual: f.actual,
-        outcomeKind: f.outcome.kind === 'pass' ? 'fail' : f.outcome.kind,
-        diagnosisKind: f.outcome.kind === 'fail' ? f.outcome.diagnosis.kind : null,
-        diagnosis: f.outcome.kind === 'fail' ? f.outcome.diagnosis : null,
-        ulps: f.outcome.kind === 'fail' && Number.isFinite(f.outcome.ulps) ? f.outcome.ulps : null,
-        relativeError:
-          f.outcome.kind === 'fail' && Number.isFinite(f.outcome.relativeError) ? f.outcome.relativeError : null,
-        rule: f.rule,
-        reproducer: f.reproducer,
-        limits: f.limits ?? null,
       }),
     ),
   );

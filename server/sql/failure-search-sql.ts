@@ -1,41 +1,20 @@
+import { FAILURE_ROW_FIELDS } from '../../shared/failure-row-fields';
 import type { FailureQuery } from '../../shared/schemas/failure-query';
 import { coveredByDeviationSql } from './covered-by-deviation-sql';
 
-/**
- * A table row's fields as `FailureView` names them, with the SQL of each, in the order of the
- * composite type `failure_table_row` (migration 1764800000000). Both forms below come from it.
- */
-const FIELDS = [
-  ['id', 'id::text'],
-  ['runId', 'run_id'],
-  ['suiteSlug', 'suite_slug'],
-  ['suiteVersion', 'suite_version'],
-  ['targetName', 'target_name'],
-  ['convention', 'convention'],
-  ['pathName', 'path_name'],
-  ['pointIndex', 'point_index'],
-  ['t', 't'],
-  ['label', 'label'],
-  ['z', 'z'],
-  ['zHex', 'z_hex'],
-  ['expected', 'expected'],
-  ['actual', 'actual'],
-  ['outcomeKind', 'outcome_kind'],
-  ['diagnosis', 'diagnosis'],
-  ['ulps', 'ulps'],
-  ['relativeError', 'relative_error'],
-  ['isRegression', 'is_regression'],
-] as const;
+/** A page row's fields in the order of the composite type `failure_table_row`, with the SQL that reads each. */
+const ROW_FIELDS = FAILURE_ROW_FIELDS.filter((f) => f.shown === 'row');
+const sqlOf = (f: (typeof ROW_FIELDS)[number]): string => ('select' in f ? f.select : f.column);
 
 /** The columns of a table row, for reading rows into objects. */
-export const FAILURE_COLUMNS = FIELDS.map(([key, sql]) => `${sql} AS "${key}"`).join(', ');
+export const FAILURE_COLUMNS = ROW_FIELDS.map((f) => `${sqlOf(f)} AS "${f.key}"`).join(', ');
 
 /**
  * The same row as one `failure_table_row` value, for PostgreSQL to write as JSON with the
  * type's attribute names as keys. JSON has no NaN or infinity: those errors become null, as the
  * row reader's numbers do once stringified.
  */
-export const FAILURE_ROW = `ROW(${FIELDS.map(([key, sql]) => (key === 'ulps' || key === 'relativeError' ? `CASE WHEN ${sql} IN ('NaN', 'Infinity', '-Infinity') THEN NULL ELSE ${sql} END` : sql)).join(', ')})::failure_table_row`;
+export const FAILURE_ROW = `ROW(${ROW_FIELDS.map((f) => ('nonFiniteAsNull' in f ? `CASE WHEN ${sqlOf(f)} IN ('NaN', 'Infinity', '-Infinity') THEN NULL ELSE ${sqlOf(f)} END` : sqlOf(f))).join(', ')})::failure_table_row`;
 
 /**
  * The WHERE, ORDER BY and parameters of one page of the failure table: filters become one

@@ -9,6 +9,7 @@ import type { ContinuationRequest } from './continuation-request';
 import { continueRegularBranch } from './continue-regular-branch';
 import { FactoredFunction } from './factored-function';
 import { parseExact } from './parse-exact';
+import type { WireComplex } from '../../../shared/wire-complex';
 
 const DIGITS = 40;
 
@@ -43,7 +44,7 @@ export function answerContinue(input: unknown): Record<string, unknown> {
 
 /** The JSON request read exactly into the typed request; a number that is not finite is refused naming its field. */
 function toRequest(req: ContinueRequest): ContinuationRequest {
-  const point = (c: { re: string; im: string }, name: string): ExactPoint => [
+  const point = (c: WireComplex, name: string): ExactPoint => [
     parseExact(c.re, `${name}.re`),
     parseExact(c.im, `${name}.im`),
   ];

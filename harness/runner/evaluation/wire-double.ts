@@ -1,4 +1,4 @@
-import type { WireComplex } from '../../../shared/run-result';
+import type { WireComplex } from '../../../shared/wire-complex';
 import type { ComplexDouble } from '../../checks/complex-double';
 import { formatDouble } from '../../reference/numbers/format-double';
 

@@ -4,6 +4,7 @@ import type { ExactPoint } from '../../reference/continuation/continuation-path'
 import type { ContinuationRequest } from '../../reference/continuation/continuation-request';
 import { FactoredFunction } from '../../reference/continuation/factored-function';
 import { parseExact } from '../../reference/continuation/parse-exact';
+import type { WireComplex } from '../../../shared/wire-complex';
 
 /**
  * What every continuation of a suite's regular branch shares — g factored, ν, z0, the value or
@@ -12,7 +13,7 @@ import { parseExact } from '../../reference/continuation/parse-exact';
 export function branchContinuation(
   branch: Extract<BranchSpec, { kind: 'regular' }>,
 ): Omit<ContinuationRequest, 'path' | 'at'> {
-  const exactPoint = (c: { re: string; im: string }, name: string): ExactPoint => [
+  const exactPoint = (c: WireComplex, name: string): ExactPoint => [
     parseExact(c.re, `${name}.re`),
     parseExact(c.im, `${name}.im`),
   ];

@@ -2,6 +2,7 @@ import type { SuitePath } from '../../../shared/schemas/suite-path-schema';
 import { exactTurns } from '../../paths/exact-turns';
 import type { ExactPoint, PathSpec } from '../../reference/continuation/continuation-path';
 import { parseExact } from '../../reference/continuation/parse-exact';
+import type { WireComplex } from '../../../shared/wire-complex';
 
 /**
  * A continuous suite path as the continuation engine's exact path, or null for a straddle or a
@@ -10,7 +11,7 @@ import { parseExact } from '../../reference/continuation/parse-exact';
  * centre, radius and points as the exact numbers written.
  */
 export function continuationPathOf(path: SuitePath): PathSpec | null {
-  const point = (c: { re: string; im: string }, name: string): ExactPoint => [
+  const point = (c: WireComplex, name: string): ExactPoint => [
     parseExact(c.re, `${path.name}: ${name}.re`),
     parseExact(c.im, `${path.name}: ${name}.im`),
   ];

@@ -2,6 +2,7 @@ import type { ExactPoint, Point } from '../../reference/continuation/continuatio
 import { continueRegularBranch } from '../../reference/continuation/continue-regular-branch';
 import { Rational } from '../../reference/numbers/rational';
 import type { RegularBranch } from './regular-branch';
+import { pointText } from './point-text';
 
 /** A double as an exact point coordinate (every double is a dyadic rational). */
 const exactPoint = ([re, im]: Point): ExactPoint => [Rational.fromDouble(re), Rational.fromDouble(im)];
@@ -37,5 +38,5 @@ export function continueToPoint(branch: Pick<RegularBranch, 'continued' | 'conti
     }
     lastError = result.reason;
   }
-  throw new Error(`the branch could not be continued to ${q[0]} + ${q[1]}i: ${lastError}`);
+  throw new Error(`the branch could not be continued to ${pointText(q)}: ${lastError}`);
 }

@@ -1,6 +1,7 @@
 import type { Point } from '../../reference/continuation/continuation-path';
 import { modInverse } from './mod-inverse';
 import type { RegularBranch } from './regular-branch';
+import { pointText } from './point-text';
 
 /**
  * The sheet k whose value C·P·e^{2πiνk} is nearest the continued value F (P: the principal
@@ -25,7 +26,7 @@ export function nearestSheet(
     const m = Math.round(x);
     if (Math.abs(x - m) > 0.2 || Math.abs(Math.hypot(...rho) - 1) > 1e-3) {
       throw new Error(
-        `the continued value at ${where} is no value of (${branch.branch.g})^(${branch.nuText.re}) (ratio ${rho[0]} + ${rho[1]}i)`,
+        `the continued value at ${where} is no value of (${branch.branch.g})^(${branch.nuText.re}) (ratio ${pointText(rho)})`,
       );
     }
     const inv = modInverse(((a % b) + b) % b, b);
@@ -40,6 +41,6 @@ export function nearestSheet(
     Math.exp(-2 * Math.PI * nuIm * k) * Math.sin(2 * Math.PI * nuRe * k),
   ];
   if (Math.hypot(f[0] - rho[0], f[1] - rho[1]) > 1e-3 * Math.hypot(...f))
-    throw new Error(`the continued value at ${where} is no value of the branch (ratio ${rho[0]} + ${rho[1]}i)`);
+    throw new Error(`the continued value at ${where} is no value of the branch (ratio ${pointText(rho)})`);
   return k;
 }

@@ -8,6 +8,7 @@ import type { ExactNu } from '../../reference/continuation/cut-layout';
 import type { Singularity } from '../../reference/continuation/factored-function';
 import type { CutGeometry } from './cut-geometry';
 import type { ReferenceCache } from '../reference-cache/reference-cache';
+import type { WireComplex } from '../../../shared/wire-complex';
 
 /**
  * Everything the steps of a regular suite's expectation share: the branch resolved from the
@@ -19,7 +20,7 @@ export interface RegularBranch {
   cache: ReferenceCache;
   cacheKey: string;
   /** ν as written, for messages. */
-  nuText: { re: string; im: string };
+  nuText: WireComplex;
   nu: ExactNu;
   /** ν in doubles, for telling sheets apart and for the library's monodromy. */
   nuDouble: [number, number];

@@ -7,6 +7,7 @@ import { probePoint } from './probe-point';
 import type { RegularBranch } from './regular-branch';
 import { REGULAR_TUNING } from './regular-tuning';
 import { sheetFactor } from './sheet-factor';
+import { pointText } from './point-text';
 
 const { kindOtherSide, kindRefused, bits } = REGULAR_TUNING;
 
@@ -29,7 +30,7 @@ export function regularValueAt(branch: RegularBranch, p: Point, kind: number, al
     if (kind === kindOtherSide && !prox) throw new Error('not near a cut');
     const F = q === p && along ? along : continueToPoint(branch, q);
     const P = principalPower(branch, BigComplex.fromDoubles(p[0], p[1]));
-    const k = nearestSheet(branch, F, [P.re.toDouble(), P.im.toDouble()], `${p[0]} + ${p[1]}i`);
+    const k = nearestSheet(branch, F, [P.re.toDouble(), P.im.toDouble()], pointText(p));
     let f = P.mul(sheetFactor(branch, k)).truncate(bits);
     if (branch.C) f = f.mul(branch.C).truncate(bits);
     const v: Point = [f.re.toDouble(), f.im.toDouble()];

@@ -11,6 +11,8 @@ import type { ReferenceCache } from '../reference-cache/reference-cache';
 import type { RegularBranch } from './regular-branch';
 import { REGULAR_TUNING } from './regular-tuning';
 import { rootSheets } from './subject-sheet-family';
+import type { WireComplex } from '../../../shared/wire-complex';
+import { formatComplexText } from '../../../shared/format-complex-text';
 
 /** The first step of a regular expectation: the suite's branch read exactly, with C = f0/P(z0) and its description. */
 export function resolveRegularBranch(suite: Suite, cache: ReferenceCache, cacheKey: string): RegularBranch {
@@ -33,8 +35,10 @@ export function resolveRegularBranch(suite: Suite, cache: ReferenceCache, cacheK
     const num = new BigComplex(f0[0].toBigFloat(256), f0[1].toBigFloat(256)).mul(p0.conj());
     C = new BigComplex(num.re.div(n, REGULAR_TUNING.bits), num.im.div(n, REGULAR_TUNING.bits));
   }
-  const nuShown = nuText.im === '0' ? nuText.re : `${nuText.re} + ${nuText.im}i`;
-  const fixedBy = branch.f0 ? `f0 = ${branch.f0.re} + ${branch.f0.im}i` : `k = ${branch.k}`;
+  // ASCII signs: this text is also each finding's rule, which the CSV and JUnit outputs carry.
+  const text = (w: WireComplex) => formatComplexText(w, { ascii: true });
+  const nuShown = nuText.im === '0' ? nuText.re : text(nuText);
+  const fixedBy = branch.f0 ? `f0 = ${text(branch.f0)}` : `k = ${branch.k}`;
   return {
     suite,
     branch,
@@ -50,7 +54,7 @@ export function resolveRegularBranch(suite: Suite, cache: ReferenceCache, cacheK
     z0: [parseDouble(branch.z0.re), parseDouble(branch.z0.im)] as Point,
     C,
     CDouble: C ? [C.re.toDouble(), C.im.toDouble()] : [1, 0],
-    description: `the regular branch of (${branch.g})^(${nuShown}) with ${fixedBy} at z0 = ${branch.z0.re} + ${branch.z0.im}i`,
+    description: `the regular branch of (${branch.g})^(${nuShown}) with ${fixedBy} at z0 = ${text(branch.z0)}`,
     sheetKs: nu.im.isZero() && nu.re.den <= 64n ? rootSheets(Number(nu.re.den)) : [-3, -2, -1, 1, 2, 3],
     factors: new Map(),
     continued: new Map(),

@@ -1,5 +1,7 @@
-import type { PathResult, PointFinding, RunResult, SuiteTargetResult, WireComplex } from '../../../shared/run-result';
+import type { PathResult, PointFinding, RunResult, SuiteTargetResult } from '../../../shared/run-result';
+import type { WireComplex } from '../../../shared/wire-complex';
 import { describeOutcome } from './describe-outcome';
+import { formatComplexText } from '../../../shared/format-complex-text';
 
 // XML 1.0 allows tab, LF, CR and the ranges below; anything else (other control characters) is dropped.
 const INVALID_XML = /[^\t\n\r\u0020-\uD7FF\uE000-\uFFFD\u{10000}-\u{10FFFF}]/gu;
@@ -12,7 +14,7 @@ const attr = (s: string | number): string =>
     .replace(/\n/g, '&#10;')
     .replace(/\r/g, '&#13;')
     .replace(/\t/g, '&#9;');
-const c = (w: WireComplex | null): string => (w ? `${w.re} + ${w.im}i` : '—');
+const c = (w: WireComplex | null): string => formatComplexText(w, { ascii: true });
 const seconds = (ms: number) => (ms / 1000).toFixed(3);
 
 function findingText(f: PointFinding): string {

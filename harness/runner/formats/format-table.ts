@@ -1,8 +1,9 @@
-import type { RunResult, SuiteTargetResult, WireComplex } from '../../../shared/run-result';
+import type { RunResult, SuiteTargetResult } from '../../../shared/run-result';
+import type { WireComplex } from '../../../shared/wire-complex';
 import { describeOutcome } from './describe-outcome';
+import { formatComplexText } from '../../../shared/format-complex-text';
 
-const c = (w: WireComplex | null): string =>
-  w ? `${w.re} ${w.im.startsWith('-') ? '−' : '+'} ${w.im.replace(/^-/, '')}i` : '—';
+const c = (w: WireComplex | null): string => formatComplexText(w);
 const counts = (r: { pass: number; fail: number; error: number; skipped: number }) =>
   `${r.pass} pass · ${r.fail} fail · ${r.error} error · ${r.skipped} skipped`;
 const diagnoses = (d: Record<string, number | undefined>) => {

@@ -1,6 +1,7 @@
 import { fireEvent, render, screen } from '@testing-library/react';
 import { ValueBits } from '../../../components/failures/value-bits';
 import { failureRows } from '../../setup/failure-rows';
+import type { WireComplex } from '../../../shared/wire-complex';
 
 describe('ValueBits', () => {
   it('shows the values in decimal and their exact bits only on demand', () => {
@@ -26,7 +27,7 @@ describe('ValueBits', () => {
         values: [
           { re: '0', im: '2' },
           { re: '0', im: '-2' },
-        ] as [{ re: string; im: string }, { re: string; im: string }],
+        ] as [WireComplex, WireComplex],
       },
     };
     render(<ValueBits failure={f} />);

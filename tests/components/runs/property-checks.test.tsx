@@ -67,7 +67,7 @@ describe('PropertyChecks', () => {
   it('shows a failing pair open, with its counterexample, seed and replay path', () => {
     render(<PropertyChecks rows={rows} />);
     const failed = screen.getByTestId('property-log-principal-sz × complex.js@2.4.3-conjugate-symmetry');
-    expect(within(failed).getByText('z = -1 − 0i')).toBeTruthy();
+    expect(within(failed).getByText('z = −1 − 0i')).toBeTruthy();
     expect(within(failed).getByText('12:0:0')).toBeTruthy();
     expect(within(failed).getByText('seed 7')).toBeTruthy();
     // Its held law stays visible beside the failure: the pair is open as a whole.

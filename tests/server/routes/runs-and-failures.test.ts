@@ -141,8 +141,15 @@ describe('runs and the failure table', () => {
     const res = await kwame.get(`/api/failures/export.csv?run=${runId}&diagnosis=zero-sign`);
     expect(res.headers['content-type']).toMatch(/text\/csv/);
     const lines = res.text.trim().split('\n');
-    expect(lines[0]).toMatch(/^run,suite,target,convention,path,t,z_re,z_im,z_hex_re,z_hex_im/);
+    expect(lines[0]).toBe(
+      'run,suite,target,convention,path,t,z_re,z_im,z_hex_re,z_hex_im,expected_re,expected_im,actual_re,actual_im,outcome,diagnosis,ulps,relative_error,regression,rule',
+    );
     expect(lines).toHaveLength(41);
+    const cells = lines[1]!.split(',');
+    expect(cells[0]).toBe(runId);
+    expect(cells[1]).toMatch(/^[a-z0-9-]+@\d+$/);
+    expect(cells.slice(14, 16)).toEqual(['fail', 'zero-sign']);
+    expect(cells[18]).toMatch(/^(yes|no)$/);
   });
 
   it('shows one failure with the history of its point', async () => {

@@ -41,6 +41,25 @@ describe('regressionMail', () => {
     expect(mail.subject).toBe('[Sheetkeeper] 2 regressions in complex.js nightly');
   });
 
+  it('writes inputs such as 3 − 0i and −0 − 2i and the values with their zero signs, one U+2212 minus per part, as the app does', () => {
+    for (const part of [mail.text, mail.html]) {
+      expect(part).toContain('z = 3 − 0i');
+      expect(part).toContain('20.085536923187668 − 0i');
+      expect(part).toContain('20.085536923187668 + 0i');
+      expect(part).not.toContain('+ -');
+    }
+    const onAxis = regressionMail({
+      recipients: ['a@b.test'],
+      planName: 'p',
+      runId: 'r',
+      appUrl: 'http://127.0.0.1:8460',
+      rows: [{ ...row('9'), z: { re: '-0', im: '-2' } }],
+      total: 1,
+      versionChanges: [],
+    });
+    for (const part of [onAxis.text, onAxis.html]) expect(part).toContain('z = −0 − 2i');
+  });
+
   it("links each case to the app's case page", () => {
     for (const id of ['41', '42']) {
       expect(mail.text).toContain(`http://127.0.0.1:8460/failures/${id}`);

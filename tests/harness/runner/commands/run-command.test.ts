@@ -101,7 +101,7 @@ describe('sheetkeeper run', () => {
     }
     const straddle = suites[0]!.testcase[0]!.failure!;
     expect(straddle.type).toBe('zero-sign');
-    expect(straddle['#text']).toContain('z        = -1 + -0i   [-0x1p+0, -0x0p+0]');
+    expect(straddle['#text']).toContain('z        = -1 - 0i   [-0x1p+0, -0x0p+0]');
     expect(straddle['#text']).toContain('const z = c(-1, -0);');
   }, 120_000);
 

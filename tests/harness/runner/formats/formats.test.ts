@@ -76,5 +76,10 @@ describe('output formats', () => {
     expect(table).toContain('ERROR     log-principal-sz v1');
     expect(table).toContain('PASS      sqrt-principal-sz v1');
     expect(table.trimEnd().endsWith(result.disclaimer)).toBe(true);
+    // Each value is sign-exact text with one U+2212 minus per negative part (shared/format-complex-text.ts).
+    const part = '(?:nan|inf|[0-9.]+(?:e[+-][0-9]+)?)';
+    const values = [...table.matchAll(/(?:z =|expected|got) (\S+ [+−] \S+i)/g)].map((m) => m[1]);
+    expect(values.some((v) => v!.startsWith('−'))).toBe(true);
+    for (const v of values) expect(v).toMatch(new RegExp(`^−?${part} [+−] ${part}·?i$`));
   });
 });

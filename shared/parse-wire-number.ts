@@ -2,7 +2,7 @@
  * A wire number (docs/suite-format.md) as the double it names: "-0", "inf", "-inf", "nan", or a
  * shortest round-trip decimal, which reads back as exactly the double that was written.
  */
-export function wireNumber(s: string): number {
+export function parseWireNumber(s: string): number {
   if (s === 'inf' || s === '+inf') return Infinity;
   if (s === '-inf') return -Infinity;
   if (s === 'nan') return NaN;
