@@ -8,8 +8,8 @@ const PROBES: [filePath: string, code: string][] = [
   ['server/runs/probe.ts', "import { mapCuts } from '../../harness/cutmap/map-cuts';\nexport const probe = mapCuts;\n"],
   ['server/runs/probe.ts', "import { mapCuts } from '../../harness';\nexport const probe = mapCuts;\n"],
   ['client/probe.ts', "import { buildPath } from '../harness';\nexport const probe = buildPath;\n"],
-  ['client/probe.ts', "export const probe = () => import('../../harness/suites/suite-tools');\n"],
-  ['client/probe.ts', "import { loadSuiteTools } from '../../harness/web';\nexport const probe = loadSuiteTools;\n"],
+  ['client/probe.ts', "export const probe = () => import('../harness/suites/suite-tools');\n"],
+  ['client/probe.ts', "import { loadSuiteTools } from '../harness/web';\nexport const probe = loadSuiteTools;\n"],
 ];
 
 // ESLint loads its config with import(), which jest's module sandbox does not run: lint in a child process.
