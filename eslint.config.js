@@ -15,6 +15,43 @@ module.exports = defineConfig([
     },
   },
   {
+    // The harness's public surface: outside harness/ (and tests/, which mirror the tree), the
+    // harness is imported only through harness/index.ts (server, scripts) and harness/web.ts
+    // (the web app, which must not pull index.ts's mathjs and node-only modules into its bundle).
+    files: ['{app,bin,client,components,constants,scripts,server,shared}/**/*.{js,cjs,mjs,ts,tsx}'],
+    rules: {
+      'import/no-restricted-paths': [
+        'error',
+        {
+          zones: [
+            {
+              target: [
+                './app',
+                './bin',
+                './client',
+                './components',
+                './constants',
+                './scripts',
+                './server',
+                './shared',
+              ],
+              from: './harness',
+              except: ['./index.ts', './web.ts'],
+              message:
+                'harness-surface: import the harness through harness/index.ts (or harness/web.ts in the web app).',
+            },
+            {
+              target: ['./app', './client', './components', './constants'],
+              from: './harness/index.ts',
+              message:
+                'harness-surface: the web app imports harness/web.ts; harness/index.ts would pull mathjs and node-only modules into the bundle.',
+            },
+          ],
+        },
+      ],
+    },
+  },
+  {
     // jest.mock factories and isolated module loads need require().
     files: ['tests/**'],
     rules: { '@typescript-eslint/no-require-imports': 'off' },

@@ -1,14 +1,17 @@
 import { Link } from 'expo-router';
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
+import { SkText } from '../components/ui/sk-text';
 import { theme } from '../constants/theme';
 
 export default function NotFoundScreen() {
   return (
     <View style={styles.page}>
-      <Text accessibilityRole="header" style={styles.title}>
+      <SkText variant="title" accessibilityRole="header">
         No page here
-      </Text>
-      <Text style={styles.text}>This address does not lead to any Sheetkeeper screen.</Text>
+      </SkText>
+      <SkText variant="body" tone="inkSoft" style={styles.text}>
+        This address does not lead to any Sheetkeeper screen.
+      </SkText>
       <Link href="/" style={styles.link}>
         Go to the home screen
       </Link>
@@ -25,8 +28,7 @@ const styles = StyleSheet.create({
     gap: theme.space(3),
     padding: theme.space(6),
   },
-  title: { fontFamily: theme.font.bold, fontSize: theme.size.title, color: theme.color.ink },
-  text: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.inkSoft, textAlign: 'center' },
+  text: { textAlign: 'center' },
   link: {
     fontFamily: theme.font.medium,
     fontSize: theme.size.body,

@@ -1,8 +1,9 @@
 import { Redirect, useRouter } from 'expo-router';
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { useMe } from '../client/use-me';
-import { QueryState } from '../components/query-state';
-import { SignInForm } from '../components/sign-in-form';
+import { QueryState } from '../components/ui/query-state';
+import { SignInForm } from '../components/settings/sign-in-form';
+import { SkText } from '../components/ui/sk-text';
 import { theme } from '../constants/theme';
 
 export default function SignInScreen() {
@@ -12,8 +13,10 @@ export default function SignInScreen() {
   return (
     <View style={styles.page}>
       <View style={styles.card}>
-        <Text style={styles.brand}>Sheetkeeper</Text>
-        <Text style={styles.lead}>Branch values of complex functions, checked every night.</Text>
+        <SkText variant="title">Sheetkeeper</SkText>
+        <SkText variant="body" tone="inkSoft" style={styles.lead}>
+          Branch values of complex functions, checked every night.
+        </SkText>
         {me.isPending ? <QueryState state="loading" /> : <SignInForm onSignedIn={() => router.replace('/')} />}
       </View>
     </View>
@@ -38,6 +41,5 @@ const styles = StyleSheet.create({
     padding: theme.space(6),
     gap: theme.space(5),
   },
-  brand: { fontFamily: theme.font.bold, fontSize: theme.size.title, color: theme.color.ink },
-  lead: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.inkSoft, lineHeight: 24 },
+  lead: { lineHeight: 24 },
 });

@@ -1,5 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import type { SuiteTools } from '../harness/suites/suite-tools';
+import { loadSuiteTools } from '../harness/web';
 
 /**
  * The harness's suite check and picture, loaded on demand: they carry mathjs's parser, so the
@@ -8,7 +8,7 @@ import type { SuiteTools } from '../harness/suites/suite-tools';
 export function useSuiteTools() {
   return useQuery({
     queryKey: ['suite-tools'],
-    queryFn: async (): Promise<SuiteTools> => (await import('../harness/suites/suite-tools')).suiteTools,
+    queryFn: loadSuiteTools,
     staleTime: Infinity,
     gcTime: Infinity,
   });

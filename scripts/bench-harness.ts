@@ -15,16 +15,18 @@
 import { mkdtempSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import { discoverTargets } from '../harness/adapters/discover-targets';
-import { ulpsApart } from '../harness/checks/ulps-apart';
-import { buildPath } from '../harness/paths/build-path';
-import { buildPlan } from '../harness/runner/build-plan';
-import { evaluateSuite } from '../harness/runner/evaluate-suite';
-import { ReferenceCache } from '../harness/runner/reference-cache';
-import { runPlan } from '../harness/runner/run-plan';
-import { suiteCacheKey } from '../harness/runner/suite-cache-key';
-import type { TargetRef } from '../harness/runner/target-ref';
-import { toPathSpec } from '../harness/runner/to-path-spec';
+import {
+  buildPath,
+  buildPlan,
+  discoverTargets,
+  evaluateSuite,
+  ReferenceCache,
+  runPlan,
+  suiteCacheKey,
+  type TargetDescriptor,
+  toPathSpec,
+  ulpsApart,
+} from '../harness';
 import type { Suite } from '../shared/schemas/suite-schema';
 import { validateSuite } from '../shared/validate-suite';
 
@@ -72,7 +74,7 @@ const rate = (n: number, ms: number) => `${(((n / ms) * 1000) / 1e6).toFixed(2)}
 async function main(): Promise<void> {
   const complexJs = discoverTargets().find((t) => t.name === 'complex.js@2.4.3');
   if (!complexJs) throw new Error('complex.js@2.4.3 is not installed');
-  const ref: TargetRef = {
+  const ref: TargetDescriptor = {
     name: complexJs.name,
     library: complexJs.library,
     version: complexJs.version,
@@ -89,7 +91,7 @@ async function main(): Promise<void> {
     // B first: it also fills the cache that A reads.
     const suites = FUNCTIONS.map((fn) => suiteFor(fn, POINTS_PER_SUITE));
     const plan = buildPlan(suites, [ref]);
-    const total = plan.shards.reduce((s, sh) => s + sh.points, 0);
+    const total = plan.slices.reduce((s, sh) => s + sh.points, 0);
     let t0 = performance.now();
     const cold = await runPlan(plan, { cacheDir: dir, workers: 2 });
     const coldMs = performance.now() - t0;
@@ -97,7 +99,7 @@ async function main(): Promise<void> {
     const warm = await runPlan(buildPlan(suites, [ref]), { cacheDir: dir, workers: 2 });
     const warmMs = performance.now() - t0;
     console.log(
-      `\nB. ${total.toLocaleString('en')}-point plan (${suites.length} suites × complex.js, ${plan.shards.length} shards), 2 worker threads, no database:`,
+      `\nB. ${total.toLocaleString('en')}-point plan (${suites.length} suites × complex.js, ${plan.slices.length} slices), 2 worker threads, no database:`,
     );
     console.log(
       `   empty cache: ${seconds(coldMs)} s (${cold.reference.computed.toLocaleString('en')} reference values computed) — target ≤ 30 s`,

@@ -11,9 +11,7 @@
  * of which the fastest counts. Bounded: fixed counts, and Python is killed after 300 s.
  */
 import { spawnSync } from 'node:child_process';
-import { BigComplex } from '../harness/reference/complex/big-complex';
-import { principalDouble } from '../harness/reference/principal-double';
-import { principalValue } from '../harness/reference/principal-value';
+import { BigComplex, principalDouble, principalValue } from '../harness';
 
 const N = 10_000;
 const SEED = 12345;

@@ -11,13 +11,13 @@ import { Plan } from '../server/entities/plan';
 import { User } from '../server/entities/user';
 import { seedDemo } from '../server/seed/seed-demo';
 import { seedDemoCatalogue } from '../server/seed/seed-demo-catalogue';
-import { FakeSmtpServer } from '../server/services/fake-smtp-server';
-import { MailOutbox } from '../server/services/mail-outbox';
-import { openInstalledTarget } from '../server/services/open-installed-target';
-import { PgBossShardQueue } from '../server/services/pg-boss-shard-queue';
-import { RunService } from '../server/services/run-service';
-import { ShardExecutor } from '../server/services/shard-executor';
-import { syncTargets } from '../server/services/sync-targets';
+import { FakeSmtpServer } from '../server/mail/fake-smtp-server';
+import { MailOutbox } from '../server/mail/mail-outbox';
+import { openInstalledTarget } from '../server/targets/open-installed-target';
+import { PgBossShardQueue } from '../server/runs/pg-boss-shard-queue';
+import { RunService } from '../server/runs/run-service';
+import { ShardExecutor } from '../server/runs/shard-executor';
+import { syncTargets } from '../server/targets/sync-targets';
 import { databaseUrl } from '../server/config';
 
 /**

@@ -162,6 +162,29 @@ ensure_web_export() {
   fi
 }
 
+# Steps run side by side: start_step NAME COMMAND… runs the command in the background with
+# its output in $OUT/NAME.log, which ends with the step's exit status and its own duration;
+# finish_step NAME waits for it, prints that log and returns the exit status (so a failed
+# background step fails the caller like any other).
+declare -A step_pid=()
+start_step() {
+  local name="$1"; shift
+  (
+    trap - ERR
+    began=$(date +%s) status=0
+    "$@" || status=$?
+    log "$name: exit $status after $(( $(date +%s) - began )) s"
+    exit "$status"
+  ) >"$OUT/$name.log" 2>&1 &
+  step_pid[$name]=$!
+}
+finish_step() {
+  local status=0
+  wait "${step_pid[$1]}" || status=$?
+  cat "$OUT/$1.log" >&2
+  return "$status"
+}
+
 ensure_chromium() {
   if [ ! -x /usr/bin/chromium ]; then apt_install chromium; fi
 }

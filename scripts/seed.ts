@@ -4,7 +4,7 @@ import { createDataSource } from '../server/data-source';
 import { seedDemo } from '../server/seed/seed-demo';
 import { seedDemoCatalogue } from '../server/seed/seed-demo-catalogue';
 import { seedDemoRuns } from '../server/seed/seed-demo-runs';
-import { syncTargets } from '../server/services/sync-targets';
+import { syncTargets } from '../server/targets/sync-targets';
 
 /** `npm run seed`: demo users, the installed targets, the demo catalogue and plans, two completed demo runs — only what is missing. */
 async function main(): Promise<void> {

@@ -13,15 +13,18 @@ ensure_chromium
 OUT="$ROOT/.data/test-output"
 rm -rf "$OUT" && mkdir -p "$OUT" "$ROOT/test-results"
 
-log "type check (tsc --noEmit)"
-tsc_status=0
-npx tsc --noEmit -p tsconfig.json || tsc_status=$?
-log "lint (eslint, no warning allowed)"
-lint_status=0
-npx eslint --max-warnings 0 . || lint_status=$?
-log "format (prettier --check)"
-format_status=0
-npx prettier --check --log-level warn . || format_status=$?
+# tsc, ESLint and Prettier each use one core, and the web export for the end-to-end part needs
+# nothing from them: all four run side by side, each into its own log, shown whole once it ends.
+log "type check, lint, format check and the web export, side by side"
+start_step typecheck npx tsc --noEmit -p tsconfig.json
+start_step lint npx eslint --max-warnings 0 --cache --cache-strategy content --cache-location "$ROOT/.data/eslint-cache" .
+start_step format npx prettier --check --log-level warn .
+start_step web-export ensure_web_export
+tsc_status=0 lint_status=0 format_status=0
+finish_step typecheck || tsc_status=$?
+finish_step lint || lint_status=$?
+finish_step format || format_status=$?
+finish_step web-export
 
 log "jest: node and web projects"
 npx jest --ci --json --outputFile="$OUT/unit.json" || true
@@ -39,7 +42,6 @@ fi
 E2E_SMTP_PORT="${SHEETKEEPER_E2E_SMTP_PORT:-$(free_port)}"
 # Seeded with the e2e ports, so the links in the demo regression mail point at this server.
 SHEETKEEPER_DB="$E2E_DB" SHEETKEEPER_PORT="$E2E_PORT" SHEETKEEPER_SMTP_PORT="$E2E_SMTP_PORT" node --import tsx scripts/seed.ts
-ensure_web_export
 SHEETKEEPER_DB="$E2E_DB" SHEETKEEPER_PORT="$E2E_PORT" SHEETKEEPER_SMTP_PORT="$E2E_SMTP_PORT" node --import tsx server/main.ts >"$OUT/e2e-server.log" 2>&1 &
 server_pid=$!
 trap 'kill "$server_pid" 2>/dev/null || true' EXIT

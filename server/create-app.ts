@@ -23,14 +23,14 @@ import { targetsRouter } from './routes/targets-router';
 import { librariesRouter } from './routes/libraries-router';
 import { tokensRouter } from './routes/tokens-router';
 import { usersRouter } from './routes/users-router';
-import { configurePassport } from './services/configure-passport';
-import { LibraryFindings } from './services/library-findings';
-import { createSessionStore } from './services/create-session-store';
-import { ShortLivedCache } from './services/short-lived-cache';
+import { configurePassport } from './auth/configure-passport';
+import { LibraryFindings } from './findings/library-findings';
+import { createSessionStore } from './auth/create-session-store';
+import { ShortLivedCache } from './auth/short-lived-cache';
 import type { User } from './entities/user';
-import { RunService } from './services/run-service';
-import type { ShardQueue } from './services/shard-queue';
-import { DEFAULT_SIGN_IN_LIMITS, SignInLimiter, type SignInLimits } from './services/sign-in-limiter';
+import { RunService } from './runs/run-service';
+import type { ShardQueue } from './runs/shard-queue';
+import { DEFAULT_SIGN_IN_LIMITS, SignInLimiter, type SignInLimits } from './auth/sign-in-limiter';
 
 export interface AppOptions {
   dataSource: DataSource;

@@ -11,7 +11,7 @@ import { Schedule } from './entities/schedule';
 import { ScheduleFiring } from './entities/schedule-firing';
 import { Shard } from './entities/shard';
 import { Subscription } from './entities/subscription';
-import { Target } from './entities/target';
+import { TargetRow } from './entities/target-row';
 import { Upload } from './entities/upload';
 import { ReceivedMail } from './entities/received-mail';
 import { Run } from './entities/run';
@@ -38,7 +38,7 @@ export const ENTITIES = [
   SuiteVersion,
   OutboxMail,
   ReceivedMail,
-  Target,
+  TargetRow,
   Plan,
   Schedule,
   ScheduleFiring,

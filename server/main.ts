@@ -3,10 +3,10 @@ import { loadConfig } from './config';
 import { createApp } from './create-app';
 import { createDataSource } from './data-source';
 import { DEMO_USERS } from './seed/demo-users';
-import { onShutdown } from './services/on-shutdown';
-import { PlanScheduler } from './services/plan-scheduler';
-import { RunService } from './services/run-service';
-import { syncTargets } from './services/sync-targets';
+import { onShutdown } from './on-shutdown';
+import { PlanScheduler } from './plans/plan-scheduler';
+import { RunService } from './runs/run-service';
+import { syncTargets } from './targets/sync-targets';
 import { startServices } from './start-services';
 
 async function main(): Promise<void> {

@@ -1,10 +1,10 @@
 import type { DataSource } from 'typeorm';
 import type { ServerConfig } from './config';
-import { FakeSmtpServer } from './services/fake-smtp-server';
-import { MailOutbox } from './services/mail-outbox';
-import { openInstalledTarget } from './services/open-installed-target';
-import { PgBossShardQueue } from './services/pg-boss-shard-queue';
-import { ShardExecutor } from './services/shard-executor';
+import { FakeSmtpServer } from './mail/fake-smtp-server';
+import { MailOutbox } from './mail/mail-outbox';
+import { openInstalledTarget } from './targets/open-installed-target';
+import { PgBossShardQueue } from './runs/pg-boss-shard-queue';
+import { ShardExecutor } from './runs/shard-executor';
 
 /** How often due mail is sent; a regression mail waits at most this long after its run ends. */
 const MAIL_INTERVAL_MS = 5000;

@@ -1,7 +1,7 @@
 import 'reflect-metadata';
 import { loadConfig } from './config';
 import { createDataSource } from './data-source';
-import { onShutdown } from './services/on-shutdown';
+import { onShutdown } from './on-shutdown';
 import { startServices } from './start-services';
 
 /**

@@ -1,6 +1,4 @@
-/** A complex number on the wire (docs/suite-format.md). */
-type Wire = { re: string; im: string };
-
+import type { WireComplex } from './wire-complex';
 /**
  * Which convention a target follows on each cut of each function (docs/vocabulary.md, "fingerprint";
  * docs/conventions.md). Per (function, cut):
@@ -26,10 +24,10 @@ export interface ConventionFingerprint {
     disagreesWith: string[];
     probes: {
       /** The point on the cut (with +0 in the across part; the −0 twin is implied). */
-      at: Wire;
+      at: WireComplex;
       verdict: 'signed-zero' | 'counter-clockwise' | 'neither';
-      plusZero: Wire | null;
-      minusZero: Wire | null;
+      plusZero: WireComplex | null;
+      minusZero: WireComplex | null;
       note?: string;
     }[];
   }[];

@@ -1,6 +1,4 @@
-/** A complex number on the wire (docs/suite-format.md). */
-type Wire = { re: string; im: string };
-
+import type { WireComplex } from './wire-complex';
 /**
  * Where one function of a target is discontinuous over a box, against where the reference
  * catalogue puts its cuts (docs/architecture.md, library findings). `observed` are the discontinuities found
@@ -12,21 +10,21 @@ type Wire = { re: string; im: string };
 export interface CutMap {
   target: string;
   function: string;
-  box: { min: Wire; max: Wire };
+  box: { min: WireComplex; max: WireComplex };
   columns: number;
   rows: number;
   verdict: 'matches' | 'differs';
   statement: string;
   observed: {
     /** The crossings of grid lines, in order along the segment. */
-    points: Wire[];
+    points: WireComplex[];
     /** True when every crossing lies on an expected cut. */
     onExpectedCut: boolean;
   }[];
   expected: {
     label: string;
-    from: Wire;
-    to: Wire;
+    from: WireComplex;
+    to: WireComplex;
     /** Share of the grid lines crossing this cut inside the box where a discontinuity was found (null: the cut crosses none). */
     coverage: number | null;
     seen: boolean;

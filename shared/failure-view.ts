@@ -1,34 +1,12 @@
-import type { Diagnosis } from './diagnosis';
-import type { WireComplex } from './run-result';
+import type { FAILURE_ROW_FIELDS } from './failure-row-fields';
+
+type Field = (typeof FAILURE_ROW_FIELDS)[number];
 
 /**
- * A row of the failure table (GET /api/failures). `rule`, `reproducer` and `limits` come only
- * with one failure (GET /api/failures/:id) and in the CSV.
+ * A row of the failure table (GET /api/failures), derived from `FAILURE_ROW_FIELDS`: its `row`
+ * fields always, its `detail` fields (`rule`, `reproducer`, `limits`) only with one failure
+ * (GET /api/failures/:id) and in the CSV.
  */
-export interface FailureView {
-  id: string;
-  runId: string;
-  suiteSlug: string;
-  suiteVersion: number;
-  targetName: string;
-  convention: string;
-  pathName: string;
-  pointIndex: number;
-  t: number;
-  label: string | null;
-  z: WireComplex;
-  /** The input's exact bits as C99 hex floats. */
-  zHex: WireComplex;
-  expected: WireComplex | null;
-  actual: WireComplex | null;
-  outcomeKind: 'fail' | 'error' | 'skipped';
-  diagnosis: Diagnosis | null;
-  ulps: number | null;
-  relativeError: number | null;
-  rule?: string;
-  reproducer?: string;
-  /** For a point on a cut: the limits from both sides, named. */
-  limits?: { sides: [string, string]; values: [WireComplex, WireComplex] } | null;
-  /** This point passed in the previous completed run of the plan. */
-  isRegression: boolean;
-}
+export type FailureView = { [F in Extract<Field, { shown: 'row' }> as F['key']]: F['value'] } & {
+  [F in Extract<Field, { shown: 'detail' }> as F['key']]?: F['value'];
+};

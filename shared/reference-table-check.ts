@@ -1,4 +1,4 @@
-import type { WireComplex } from './run-result';
+import type { WireComplex } from './wire-complex';
 
 /** What checking an uploaded table of reference values against our reference engine found. */
 export interface ReferenceTableCheck {

@@ -1,11 +1,7 @@
+import type { TargetIdentity } from './target-identity';
 import type { DiagnosisKind } from './diagnosis';
 import type { PointOutcome } from './point-outcome';
-
-/** A complex number on the wire (docs/suite-format.md): shortest round-trip decimals, "-0", "inf", "nan". */
-export interface WireComplex {
-  re: string;
-  im: string;
-}
+import type { WireComplex } from './wire-complex';
 
 /** How many points of a path, a suite × target pair or a run came out each way. */
 export interface OutcomeCounts {
@@ -100,14 +96,14 @@ export type PairStatus = 'pass' | 'fail' | 'error' | 'cancelled';
 /** One suite against one target. */
 export interface SuiteTargetResult {
   suite: { id: string; version: number; title: string; subject: string };
-  target: { name: string; library: string; version: string; settings: Record<string, string | number | boolean> };
+  target: TargetIdentity;
   status: PairStatus;
   checked: CheckedScope;
   counts: OutcomeCounts;
   byDiagnosis: Partial<Record<DiagnosisKind, number>>;
   paths: PathResult[];
   properties: PropertyOutcomeSummary[] | null;
-  /** Shard-level errors: a target that hung past the time limit, crashed, or a suite that could not be evaluated. */
+  /** Errors of the pair as a whole (no single point): a target that hung past the time limit, crashed, or a suite that could not be evaluated. */
   errors: string[];
   durationMs: number;
   /** Reference values computed in this run and taken from the cache. */
@@ -123,7 +119,7 @@ export interface RunResult {
   status: 'pass' | 'fail' | 'error' | 'cancelled';
   /** Always present: what a pass means and does not mean. */
   disclaimer: string;
-  plan: { suites: { id: string; version: number }[]; targets: string[]; shards: number };
+  plan: { suites: { id: string; version: number }[]; targets: string[]; slices: number };
   counts: OutcomeCounts;
   byDiagnosis: Partial<Record<DiagnosisKind, number>>;
   results: SuiteTargetResult[];

@@ -1,11 +1,10 @@
 import type { Diagnosis } from './diagnosis';
+import type { WireComplex } from './wire-complex';
 
-/** A complex number on the wire (docs/suite-format.md). */
-type Wire = { re: string; im: string };
 /** How a point came out at one version: its value (null when the library gave none) and its outcome. */
 type Side = {
   version: string;
-  value: Wire | null;
+  value: WireComplex | null;
   outcome:
     | { kind: 'pass' }
     | { kind: 'fail'; diagnosis: Diagnosis }
@@ -35,7 +34,7 @@ export interface VersionMatrix {
       path: string;
       index: number;
       label?: string;
-      z: Wire;
+      z: WireComplex;
       firstChangedIn: string;
       steps: { before: Side; after: Side }[];
     }[];

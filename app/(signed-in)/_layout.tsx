@@ -1,8 +1,8 @@
 import { Redirect, Slot } from 'expo-router';
 import { View } from 'react-native';
 import { useMe } from '../../client/use-me';
-import { AppFrame } from '../../components/app-frame';
-import { QueryState } from '../../components/query-state';
+import { AppFrame } from '../../components/ui/app-frame';
+import { QueryState } from '../../components/ui/query-state';
 import { theme } from '../../constants/theme';
 
 /** The auth guard: signed-out visitors go to sign-in; everyone else gets the frame. */

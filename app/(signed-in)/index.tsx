@@ -1,6 +1,6 @@
 import { useMe } from '../../client/use-me';
-import { OverviewBoard } from '../../components/overview-board';
-import { ScreenBody } from '../../components/screen-body';
+import { OverviewBoard } from '../../components/overview/overview-board';
+import { ScreenBody } from '../../components/ui/screen-body';
 
 /** The Overview: what waits on me, what is running, and how each plan's latest run went. */
 export default function OverviewScreen() {

@@ -3,9 +3,10 @@ import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { NAV_ITEMS } from '../../client/nav-items';
 import { useMe } from '../../client/use-me';
 import { useSignOut } from '../../client/use-sign-out';
-import { ActionButton } from '../../components/action-button';
-import { RoleBadge } from '../../components/role-badge';
-import { ScreenBody } from '../../components/screen-body';
+import { ActionButton } from '../../components/ui/action-button';
+import { RoleBadge } from '../../components/settings/role-badge';
+import { ScreenBody } from '../../components/ui/screen-body';
+import { SkText } from '../../components/ui/sk-text';
 import { theme } from '../../constants/theme';
 
 /** The phone's "More" tab: every destination the tab bar has no room for, who I am, and sign-out. */
@@ -21,15 +22,21 @@ export default function MoreScreen() {
           <Link key={item.href} href={item.href as never} asChild>
             <Pressable accessibilityRole="link" accessibilityLabel={item.label} style={styles.row}>
               <Text style={styles.glyph}>{item.glyph}</Text>
-              <Text style={styles.label}>{item.label}</Text>
-              <Text style={styles.chevron}>→</Text>
+              <SkText variant="label" style={styles.label}>
+                {item.label}
+              </SkText>
+              <SkText variant="body" tone="inkFaint">
+                →
+              </SkText>
             </Pressable>
           </Link>
         ))}
       </View>
       <View style={styles.who}>
-        <Text style={styles.name}>{user.displayName}</Text>
-        <Text style={styles.email}>{user.email}</Text>
+        <SkText variant="label">{user.displayName}</SkText>
+        <SkText variant="mono" tone="inkSoft">
+          {user.email}
+        </SkText>
         <RoleBadge role={user.role} />
       </View>
       <ActionButton label="Sign out" tone="quiet" busy={signOut.isPending} onPress={() => signOut.mutate()} />
@@ -54,9 +61,6 @@ const styles = StyleSheet.create({
     borderBottomColor: theme.color.rule,
   },
   glyph: { fontFamily: theme.font.regular, fontSize: 20, color: theme.color.accent, width: 24, textAlign: 'center' },
-  label: { flex: 1, fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
-  chevron: { fontFamily: theme.font.regular, fontSize: theme.size.body, color: theme.color.inkFaint },
+  label: { flex: 1 },
   who: { gap: theme.space(1) },
-  name: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.ink },
-  email: { fontFamily: theme.font.mono, fontSize: theme.size.small, color: theme.color.inkSoft },
 });

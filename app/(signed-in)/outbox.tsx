@@ -1,7 +1,7 @@
 import { useMe } from '../../client/use-me';
-import { MailList } from '../../components/mail-list';
-import { QueryState } from '../../components/query-state';
-import { ScreenBody } from '../../components/screen-body';
+import { MailList } from '../../components/mail/mail-list';
+import { QueryState } from '../../components/ui/query-state';
+import { ScreenBody } from '../../components/ui/screen-body';
 
 export default function OutboxScreen() {
   const { data: me } = useMe();

@@ -1,11 +1,11 @@
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 import { useMe } from '../../client/use-me';
-import { CiExample } from '../../components/ci-example';
-import { NewTokenForm } from '../../components/new-token-form';
-import { ScreenBody } from '../../components/screen-body';
-import { SubscriptionList } from '../../components/subscription-list';
-import { TitledPanel } from '../../components/titled-panel';
-import { TokenList } from '../../components/token-list';
+import { CiExample } from '../../components/settings/ci-example';
+import { NewTokenForm } from '../../components/settings/new-token-form';
+import { ScreenBody } from '../../components/ui/screen-body';
+import { SubscriptionList } from '../../components/settings/subscription-list';
+import { TitledPanel } from '../../components/ui/titled-panel';
+import { TokenList } from '../../components/settings/token-list';
 import { theme } from '../../constants/theme';
 
 export default function SettingsScreen() {

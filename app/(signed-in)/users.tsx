@@ -1,7 +1,7 @@
 import { useMe } from '../../client/use-me';
-import { QueryState } from '../../components/query-state';
-import { ScreenBody } from '../../components/screen-body';
-import { UsersList } from '../../components/users-list';
+import { QueryState } from '../../components/ui/query-state';
+import { ScreenBody } from '../../components/ui/screen-body';
+import { UsersList } from '../../components/settings/users-list';
 
 export default function UsersScreen() {
   const { data: me } = useMe();

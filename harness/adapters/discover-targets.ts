@@ -6,6 +6,7 @@ import { jsMathTarget } from './js-math-target';
 import { mathjsTarget } from './mathjs-target';
 import { pythonVersion } from './python-version';
 import { stdioTarget } from './stdio-target';
+import type { TargetIdentity } from '../../shared/target-identity';
 import type { TargetDescriptor } from './target-descriptor';
 
 /** Debian's interpreter (docs/conventions.md): the python3 first on PATH may be another one. */
@@ -72,11 +73,6 @@ export function discoverTargets(root: string = PROJECT_ROOT, python: string = DE
 }
 
 /** The naming fields of a target; creating a target object loads nothing. */
-function describe(t: {
-  name: string;
-  library: string;
-  version: string;
-  settings: Record<string, string | number | boolean>;
-}) {
+function describe(t: TargetIdentity): TargetIdentity {
   return { name: t.name, library: t.library, version: t.version, settings: t.settings };
 }

@@ -1,26 +1,12 @@
+import { FUNCTION_ARITY } from '../../shared/function-arity';
+
 /**
- * The operations of the catalogue (docs/vocabulary.md) and how many complex arguments each
- * takes. nthroot's second argument is the integer n as n + 0i.
+ * The operations a library target is asked for and how many complex arguments each takes: the
+ * catalogue's functions (shared/function-arity.ts; nthroot's second argument is the integer n as
+ * n + 0i) and the arithmetic subjects are built with.
  */
 export const OP_ARITY: Readonly<Record<string, number>> = {
-  sqrt: 1,
-  cbrt: 1,
-  nthroot: 2,
-  pow: 2,
-  exp: 1,
-  log: 1,
-  asin: 1,
-  acos: 1,
-  atan: 1,
-  asinh: 1,
-  acosh: 1,
-  atanh: 1,
-  acot: 1,
-  asec: 1,
-  acsc: 1,
-  acoth: 1,
-  asech: 1,
-  acsch: 1,
+  ...FUNCTION_ARITY,
   add: 2,
   sub: 2,
   mul: 2,

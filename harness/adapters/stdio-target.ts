@@ -6,7 +6,7 @@ import type { CallResult } from './call-result';
 import type { ComplexPair } from './complex-pair';
 import { OP_ARITY } from './op-arity';
 import type { Target } from './target';
-import type { TargetInfo } from './target-info';
+import type { TargetIdentity } from '../../shared/target-identity';
 
 /** A reply line from the program, parsed, or why the batch failed. */
 type Reply = { reply: Record<string, unknown> } | { error: string };
@@ -15,7 +15,7 @@ type Reply = { reply: Record<string, unknown> } | { error: string };
 const DEFAULT_TIME_LIMIT_MS = 10_000;
 const STDERR_TAIL = 2048;
 
-export interface StdioTargetOptions extends TargetInfo {
+export interface StdioTargetOptions extends TargetIdentity {
   command: string;
   args: string[];
   cwd?: string;

@@ -1,7 +1,14 @@
+import type { TargetIdentity } from '../../shared/target-identity';
 import type { Target } from './target';
-import type { TargetInfo } from './target-info';
 
-/** An installed target that has not been loaded: `open` loads it (lazily, on first use). */
-export interface TargetDescriptor extends TargetInfo {
+/**
+ * A target not yet opened: what names it, how to open it in this process (lazily, on first
+ * use), and how a worker thread opens it — by a discovered target's name (discover-targets.ts),
+ * or from a module whose `openTarget` export builds it from `args` (for targets that are not
+ * installed libraries, such as the self-check mutants or a deliberately hanging test target).
+ * Without `worker` the target runs in process only.
+ */
+export interface TargetDescriptor extends TargetIdentity {
   open(): Target;
+  worker?: { discovered: string } | { module: string; args?: unknown[] };
 }

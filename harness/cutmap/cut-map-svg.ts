@@ -1,5 +1,6 @@
 import type { CutMap } from '../../shared/cut-map';
 import { parseDouble } from '../reference/numbers/parse-double';
+import type { WireComplex } from '../../shared/wire-complex';
 
 const PLOT = 480;
 const MARGIN = 56;
@@ -41,7 +42,7 @@ export function cutMapSvg(map: CutMap): string {
   const [x1, y1] = [parseDouble(map.box.max.re), parseDouble(map.box.max.im)];
   const px = (re: number) => MARGIN + ((re - x0) / (x1 - x0)) * PLOT;
   const py = (im: number) => MARGIN + ((y1 - im) / (y1 - y0)) * PLOT;
-  const at = (w: { re: string; im: string }) => [px(parseDouble(w.re)), py(parseDouble(w.im))] as const;
+  const at = (w: WireComplex) => [px(parseDouble(w.re)), py(parseDouble(w.im))] as const;
   const out: string[] = [];
   const title = `Cut map of ${map.function} for ${map.target}: ${map.verdict === 'matches' ? 'matches the expected cuts' : 'differs from the expected cuts'}`;
   out.push(

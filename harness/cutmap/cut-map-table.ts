@@ -1,8 +1,10 @@
 import type { CutMap } from '../../shared/cut-map';
+import type { WireComplex } from '../../shared/wire-complex';
+import { formatComplexText } from '../../shared/format-complex-text';
 
 /** A cut map as plain text: the verdict and statement, each expected cut with its coverage, each observed segment with its ends. */
 export function cutMapTable(map: CutMap): string {
-  const w = (p: { re: string; im: string }) => `${p.re}${p.im.startsWith('-') ? '' : '+'}${p.im}i`;
+  const w = (p: WireComplex) => formatComplexText(p, { ascii: true });
   return [
     `cut map of ${map.function} for ${map.target} over ${w(map.box.min)} .. ${w(map.box.max)}: ${map.verdict}`,
     map.statement,

@@ -1,21 +1,19 @@
-import { catalogue } from '../reference/catalogue';
+import { catalogueEntry } from '../catalogue/catalogue-entry';
+import type { Cut } from '../reference/functions/cut';
 import type { PlaneCut } from './plane-cut';
-
-/** The cut of every power and root with a non-integer exponent: (−∞, 0], closed from above under Kahan's rule (DLMF 4.2.26 with 4.2.2). */
-const POWER_CUT = { axis: 'real', from: -Infinity, to: 0, ccwSide: 'upper' } as const;
 
 const text = (x: number): string => (x === -Infinity ? '-inf' : x === Infinity ? '+inf' : String(x));
 
 /**
  * The cuts of a catalogue function as the reference engine declares them (each function's
- * `cuts` in harness/reference/functions), as segments and rays in the plane. An axis cut with
- * an infinite end becomes a ray from its finite end; a cut infinite at both ends is not in the
- * catalogue. Returns null for a name the catalogue does not know; exp has no cuts.
+ * `cuts` in harness/reference/functions, POWER_CUTS for powers and roots), as segments and rays
+ * in the plane. An axis cut with an infinite end becomes a ray from its finite end; a cut
+ * infinite at both ends is not in the catalogue. Returns null for a name the catalogue does not know; exp has no cuts.
  */
 export function catalogueCuts(fn: string): PlaneCut[] | null {
-  const entry = catalogue[fn];
+  const entry = catalogueEntry(fn)?.reference;
   if (!entry) return null;
-  const cuts = entry.kind === 'power' ? [POWER_CUT] : entry.fn.cuts;
+  const cuts: readonly (Cut | Omit<Cut, 'ccwSide'>)[] = entry.kind === 'power' ? entry.cuts : entry.fn.cuts;
   return cuts.map((cut) => {
     const at = (x: number): [number, number] => (cut.axis === 'real' ? [x, 0] : [0, x]);
     const unit = cut.axis === 'real' ? '' : '·i';

@@ -1,4 +1,6 @@
 import type * as MathJs from 'mathjs';
+import { FUNCTION_ARITY } from '../../shared/function-arity';
+import { FUNCTION_NAMES } from '../../shared/function-names';
 import { parseNumber } from '../reference/numbers/parse-number';
 import { Rational } from '../reference/numbers/rational';
 import { SubjectError } from './subject-error';
@@ -7,24 +9,8 @@ import type { SubjectExpr } from './subject-expr';
 
 type MathNode = MathJs.MathNode;
 
-const ONE_ARGUMENT = new Set([
-  'sqrt',
-  'cbrt',
-  'exp',
-  'log',
-  'asin',
-  'acos',
-  'atan',
-  'asinh',
-  'acosh',
-  'atanh',
-  'acot',
-  'asec',
-  'acsc',
-  'acoth',
-  'asech',
-  'acsch',
-]);
+/** The catalogue functions of one argument (shared/function-arity.ts); pow and nthroot have their own rules below. */
+const ONE_ARGUMENT: ReadonlySet<string> = new Set(FUNCTION_NAMES.filter((name) => FUNCTION_ARITY[name] === 1));
 const OPERATORS: Record<string, 'add' | 'sub' | 'mul' | 'div'> = {
   add: 'add',
   subtract: 'sub',

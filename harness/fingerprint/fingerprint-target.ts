@@ -1,4 +1,5 @@
 import type { ConventionFingerprint } from '../../shared/convention-fingerprint';
+import { formatComplexText } from '../../shared/format-complex-text';
 import type { ComplexPair } from '../adapters/complex-pair';
 import type { Target } from '../adapters/target';
 import { relativeError } from '../checks/relative-error';
@@ -111,7 +112,7 @@ export async function fingerprintTarget(
         if (failedCall) probe.note = `no value: ${failedCall}`;
         else if (offWrong !== undefined) {
           const w = path[offWrong]!.z;
-          probe.note = `just off the cut, at ${formatDouble(w.re)} ${formatDouble(w.im)}i, the value is not the principal one: the cut is elsewhere here, or the value is inaccurate`;
+          probe.note = `just off the cut, at ${formatComplexText(wire([w.re, w.im]), { ascii: true })}, the value is not the principal one: the cut is elsewhere here, or the value is inaccurate`;
         } else if (same(vPlus, szPlus) && same(vMinus, szMinus)) probe.verdict = 'signed-zero';
         else if (same(vPlus, ccw) && same(vMinus, ccw)) probe.verdict = 'counter-clockwise';
         else if (same(vPlus, szMinus) && same(vMinus, szPlus))

@@ -3,7 +3,7 @@ import { versionMatrixRequest } from '../../shared/schemas/version-matrix-reques
 import { BadInput } from '../command-support/bad-input';
 import { readFlags } from '../command-support/read-flags';
 import { writeOutput } from '../command-support/write-output';
-import { loadSuites } from '../runner/load-suites';
+import { loadSuites } from '../runner/plan/load-suites';
 import { libraryVersions } from './library-versions';
 import { versionMatrix } from './version-matrix';
 import { versionMatrixTable } from './version-matrix-table';

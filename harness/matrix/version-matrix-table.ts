@@ -1,11 +1,11 @@
 import type { VersionMatrix } from '../../shared/version-matrix';
+import { formatComplexText } from '../../shared/format-complex-text';
 
 /** Changed points listed per suite in the table; the JSON output has them all. */
 const LISTED = 12;
 
 type Side = VersionMatrix['suites'][number]['changes'][number]['steps'][number]['before'];
-const value = (s: Side) =>
-  s.value ? `${s.value.re}${s.value.im.startsWith('-') ? '' : '+'}${s.value.im}i` : 'no value';
+const value = (s: Side) => (s.value ? formatComplexText(s.value, { ascii: true }) : 'no value');
 const outcome = (s: Side) => (s.outcome.kind === 'fail' ? `fail: ${s.outcome.diagnosis.kind}` : s.outcome.kind);
 
 /**
@@ -21,7 +21,7 @@ export function versionMatrixTable(m: VersionMatrix): string {
     if (s.changes.length === 0) lines.push('  no value changed');
     for (const c of s.changes.slice(0, LISTED)) {
       lines.push(
-        `  ${c.path} #${c.index}${c.label ? ` (${c.label})` : ''} at ${c.z.re}${c.z.im.startsWith('-') ? '' : '+'}${c.z.im}i: first changed in ${c.firstChangedIn}`,
+        `  ${c.path} #${c.index}${c.label ? ` (${c.label})` : ''} at ${formatComplexText(c.z, { ascii: true })}: first changed in ${c.firstChangedIn}`,
       );
       for (const { before, after } of c.steps)
         lines.push(

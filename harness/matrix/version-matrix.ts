@@ -4,11 +4,11 @@ import type { TargetDescriptor } from '../adapters/target-descriptor';
 import { parseSubject } from '../expressions/parse-subject';
 import { buildPath } from '../paths/build-path';
 import { formatDouble } from '../reference/numbers/format-double';
-import { evaluateProgram } from '../runner/evaluate-program';
-import { evaluateSuite } from '../runner/evaluate-suite';
-import { ReferenceCache } from '../runner/reference-cache';
-import { subjectProgram } from '../runner/subject-program';
-import { toPathSpec } from '../runner/to-path-spec';
+import { evaluateProgram } from '../runner/evaluation/evaluate-program';
+import { evaluateSuite } from '../runner/evaluation/evaluate-suite';
+import { ReferenceCache } from '../runner/reference-cache/reference-cache';
+import { subjectProgram } from '../runner/evaluation/subject-program';
+import { toPathSpec } from '../runner/evaluation/to-path-spec';
 
 type SuiteEntry = VersionMatrix['suites'][number];
 type Side = SuiteEntry['changes'][number]['steps'][number]['before'];

@@ -1,6 +1,5 @@
 import { geometryNumber } from './geometry-number';
-
-const PI_MULTIPLE = /^([+-]?)(\d+(?:\.\d+)?)?\s*\*?\s*pi(?:\s*\/\s*(\d+))?$/i;
+import { PI_MULTIPLE } from './pi-multiple';
 
 /**
  * An angle as a fraction of a full turn. A rational multiple of π written "pi",

@@ -4,7 +4,7 @@ import type { PropertyCheck } from '../../shared/schemas/property-check-schema';
 import type { ComplexPair } from '../adapters/complex-pair';
 import type { Target } from '../adapters/target';
 import { formatDouble } from '../reference/numbers/format-double';
-import { subjectProgram } from '../runner/subject-program';
+import { subjectProgram } from '../runner/evaluation/subject-program';
 import type { PropertySubject } from './property-subject';
 import type { LawContext } from './law-context';
 import { PROPERTY_LAW_CHECKS } from './property-laws';

@@ -2,8 +2,8 @@ import type { CallResult } from '../adapters/call-result';
 import type { ComplexPair } from '../adapters/complex-pair';
 import type { Target } from '../adapters/target';
 import type { SubjectExpr } from '../expressions/subject-expr';
-import { evaluateProgram } from '../runner/evaluate-program';
-import { subjectProgram } from '../runner/subject-program';
+import { evaluateProgram } from '../runner/evaluation/evaluate-program';
+import { subjectProgram } from '../runner/evaluation/subject-program';
 
 /**
  * A subject (or a part of one, such as the argument g of a root) evaluated at a few points with

@@ -1,12 +1,13 @@
 import type { PropertyCheck } from '../../shared/schemas/property-check-schema';
 import type { Convention } from '../../shared/schemas/convention-schema';
 import { PROPERTY_LAW_CHECKS } from './property-laws';
+import { formatComplexText } from '../../shared/format-complex-text';
 
 function regionText(region: PropertyCheck['region']): string {
   if (region.kind === 'disc')
-    return `the disc |z - (${region.center.re}${region.center.im.startsWith('-') ? '' : '+'}${region.center.im}i)| <= ${region.radius}`;
+    return `the disc |z - (${formatComplexText(region.center, { ascii: true })})| <= ${region.radius}`;
   if (region.kind === 'box')
-    return `the box ${region.min.re}${region.min.im.startsWith('-') ? '' : '+'}${region.min.im}i .. ${region.max.re}${region.max.im.startsWith('-') ? '' : '+'}${region.max.im}i`;
+    return `the box ${formatComplexText(region.min, { ascii: true })} .. ${formatComplexText(region.max, { ascii: true })}`;
   return `points within ${region.distance} of the expected cuts`;
 }
 

@@ -1,11 +1,9 @@
 import type { Convention } from '../../shared/schemas/convention-schema';
-import { catalogue } from './catalogue';
+import { catalogueEntry } from '../catalogue/catalogue-entry';
 import { Approximation } from './complex/approximation';
 import { BigComplex } from './complex/big-complex';
 import type { PowerExponent } from './complex/power-exponent';
 import { applyConvention } from './functions/apply-convention';
-import { CBRT_EXPONENT } from './functions/cbrt';
-import { nthrootExponent } from './functions/nthroot';
 import type { CatalogueFunction } from './functions/catalogue-function';
 import { pow } from './functions/pow';
 import type { ReciprocalFunction } from './functions/reciprocal-function';
@@ -30,23 +28,21 @@ const RECIPROCAL_GUARD = 16;
  * cost, from a bound on |g′| near 1/z (see {@link reciprocalError}).
  */
 export function evaluateFunction(request: PrincipalRequest, bits: number): Approximation {
-  const entry = catalogue[request.fn];
+  const entry = catalogueEntry(request.fn)?.reference;
   if (!entry) throw new RangeError(`unknown function "${request.fn}"`);
   const { z, convention } = request;
   if (entry.kind === 'plain') return evaluatePlain(entry.fn, applyConvention(z, entry.fn.cuts, convention), bits);
   if (entry.kind === 'reciprocal') return evaluateReciprocal(entry.fn, z, convention, bits);
-  const base = applyConvention(z, [{ axis: 'real', from: -Infinity, to: 0, ccwSide: 'upper' }], convention);
-  return pow(base, exponentOf(request, convention), bits);
+  const base = applyConvention(z, entry.cuts, convention);
+  return pow(base, withConvention(entry.exponent(request), convention), bits);
 }
 
-function exponentOf(request: PrincipalRequest, convention: Convention): PowerExponent {
-  if (request.fn === 'cbrt') return { kind: 'rational', value: CBRT_EXPONENT };
-  if (request.fn === 'nthroot') return { kind: 'rational', value: nthrootExponent(request.n) };
-  if (!request.w) throw new RangeError('pow needs an exponent "w"');
-  if (request.w.kind === 'complex' && convention === 'counter-clockwise') {
-    return { kind: 'complex', value: applyConvention(request.w.value, [], convention) };
+/** Under counter-clockwise, a complex exponent's zero parts count as +0, as z's do. */
+function withConvention(w: PowerExponent, convention: Convention): PowerExponent {
+  if (w.kind === 'complex' && convention === 'counter-clockwise') {
+    return { kind: 'complex', value: applyConvention(w.value, [], convention) };
   }
-  return request.w;
+  return w;
 }
 
 function evaluatePlain(fn: CatalogueFunction, z: BigComplex, bits: number): Approximation {

@@ -3,11 +3,14 @@ import type { ReferenceTableCheck } from '../../shared/reference-table-check';
 import type { Suite } from '../../shared/schemas/suite-schema';
 import { evaluateSubject } from '../expressions/evaluate-subject';
 import { parseSubject } from '../expressions/parse-subject';
+import { SubjectError } from '../expressions/subject-error';
 import { BigComplex } from '../reference/complex/big-complex';
-import { answerContinue } from '../reference/continuation/answer-continue';
+import { continueRegularBranch } from '../reference/continuation/continue-regular-branch';
 import { formatDouble } from '../reference/numbers/format-double';
+import { Rational } from '../reference/numbers/rational';
 import { parseDouble } from '../reference/numbers/parse-double';
 import { ulpDistance } from '../reference/numbers/ulp-distance';
+import { branchContinuation } from '../runner/expectations/branch-continuation';
 
 /** Uploaded tables are for spot checks: 5,000 rows take ~2 s here. */
 export const MAX_REFERENCE_ROWS = 5000;
@@ -49,6 +52,7 @@ export function checkReferenceTable(suite: Suite, csv: string): ReferenceTableCh
       invalid: [{ line: 1, reason: `more than ${MAX_REFERENCE_ROWS} rows` }],
     };
   const subject = suite.branch.kind === 'principal' ? parseSubject(suite.subject) : null;
+  const regular = suite.branch.kind === 'regular' ? regularContinuation(suite.branch) : null;
   const result: ReferenceTableCheck = { rows: records.length, agree: 0, disagreements: [], invalid: [] };
   records.forEach((row, i) => {
     const line = i + 2;
@@ -67,25 +71,26 @@ export function checkReferenceTable(suite: Suite, csv: string): ReferenceTableCh
         double: true,
         digits: 0,
       }).double;
-    } else if (suite.branch.kind === 'regular') {
-      const b = suite.branch;
-      const answer = answerContinue({
-        g: b.g,
-        nu: b.nu,
-        z0: b.z0,
-        ...(b.f0 ? { f0: b.f0 } : { k: b.k }),
-        path: { kind: 'polyline', points: [b.z0, { re: formatDouble(z[0]), im: formatDouble(z[1]) }] },
-        at: ['1'],
-        cuts: b.cuts,
-      }) as {
-        values?: { f: { re: string; im: string } }[];
-        error?: string;
-      };
-      if (!answer.values) {
-        result.invalid.push({ line, reason: answer.error ?? 'no value there' });
+    } else if (regular) {
+      if (regular instanceof Error) {
+        result.invalid.push({ line, reason: regular.message });
         return;
       }
-      ours = [Number(answer.values[0]!.f.re), Number(answer.values[0]!.f.im)];
+      if (!z.every(Number.isFinite)) {
+        result.invalid.push({ line, reason: 'z must be finite' });
+        return;
+      }
+      const answer = continueRegularBranch({
+        ...regular,
+        path: { kind: 'polyline', points: [regular.z0, [Rational.fromDouble(z[0]), Rational.fromDouble(z[1])]] },
+        at: [Rational.ONE],
+      });
+      if (answer.kind === 'refused') {
+        result.invalid.push({ line, reason: answer.reason });
+        return;
+      }
+      const f = (answer.values[0] as (typeof answer.values)[number]).f;
+      ours = [f.re.toDouble(), f.im.toDouble()];
     } else {
       return;
     }
@@ -105,4 +110,14 @@ export function checkReferenceTable(suite: Suite, csv: string): ReferenceTableCh
     }
   });
   return result;
+}
+
+/** The suite's branch read exactly for the continuation engine, or why it cannot be (then every row says so). */
+function regularContinuation(branch: Extract<Suite['branch'], { kind: 'regular' }>) {
+  try {
+    return branchContinuation(branch);
+  } catch (e) {
+    if (e instanceof SubjectError || e instanceof RangeError) return e;
+    throw e;
+  }
 }

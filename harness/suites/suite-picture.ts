@@ -5,7 +5,7 @@ import { FactoredFunction } from '../reference/continuation/factored-function';
 import { parseDouble } from '../reference/numbers/parse-double';
 import { parseNumber } from '../reference/numbers/parse-number';
 import { Rational } from '../reference/numbers/rational';
-import { toPathSpec } from '../runner/to-path-spec';
+import { toPathSpec } from '../runner/evaluation/to-path-spec';
 import { branchSpecSchema } from '../../shared/schemas/branch-spec-schema';
 import { suitePathSchema } from '../../shared/schemas/suite-path-schema';
 

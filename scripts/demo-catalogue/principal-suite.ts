@@ -2,7 +2,7 @@ import { createHash } from 'node:crypto';
 import type { Convention } from '../../shared/schemas/convention-schema';
 import type { SuiteInput } from '../../shared/schemas/suite-schema';
 import type { SuitePathInput } from '../../shared/schemas/suite-path-schema';
-import type { DemoCut, DemoPrincipalFunction } from './demo-principal-function';
+import type { DemoCut, DemoPrincipalFunction } from '../../harness';
 
 const c = (p: [string, string]) => ({ re: p[0], im: p[1] });
 

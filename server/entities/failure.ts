@@ -1,6 +1,6 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import type { Diagnosis, DiagnosisKind } from '../../shared/diagnosis';
-import type { WireComplex } from '../../shared/run-result';
+import type { WireComplex } from '../../shared/wire-complex';
 import { Run } from './run';
 import { Shard } from './shard';
 

@@ -10,7 +10,7 @@ import {
   UpdateDateColumn,
 } from 'typeorm';
 import { Suite } from './suite';
-import { Target } from './target';
+import { TargetRow } from './target-row';
 import { User } from './user';
 
 /**
@@ -43,7 +43,7 @@ export class Plan {
   })
   suites!: Suite[];
 
-  @ManyToMany(() => Target)
+  @ManyToMany(() => TargetRow)
   @JoinTable({
     name: 'plan_targets',
     joinColumn: { name: 'plan_id', referencedColumnName: 'id', foreignKeyConstraintName: 'FK_plan_targets_plan' },
@@ -53,7 +53,7 @@ export class Plan {
       foreignKeyConstraintName: 'FK_plan_targets_target',
     },
   })
-  targets!: Target[];
+  targets!: TargetRow[];
 
   @ManyToOne(() => User, { nullable: false, onDelete: 'RESTRICT' })
   @JoinColumn({ name: 'created_by', foreignKeyConstraintName: 'FK_plans_created_by' })

@@ -1,7 +1,7 @@
 import type { NextFunction, Request, Response } from 'express';
 import type { ApiError } from '../../shared/api-error';
-import { HttpError } from '../services/http-error';
-import { InputError } from '../services/input-error';
+import { HttpError } from '../http/http-error';
+import { InputError } from '../http/input-error';
 
 interface HttpishError {
   status?: number;

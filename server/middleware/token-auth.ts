@@ -2,7 +2,7 @@ import type { NextFunction, Request, Response } from 'express';
 import type { DataSource } from 'typeorm';
 import type { ApiError } from '../../shared/api-error';
 import { ApiToken } from '../entities/api-token';
-import { hashToken } from '../services/hash-token';
+import { hashToken } from '../auth/hash-token';
 
 /**
  * `Authorization: Bearer skt_…` signs the request in as the token's owner, for this request

@@ -1,11 +1,11 @@
 import { Router } from 'express';
-import type { configurePassport } from '../services/configure-passport';
+import type { configurePassport } from '../auth/configure-passport';
 import type { ApiError } from '../../shared/api-error';
 import { signInBody } from '../../shared/schemas/sign-in-body';
 import type { User } from '../entities/user';
-import { parseInput } from '../services/parse-input';
-import type { SignInLimiter } from '../services/sign-in-limiter';
-import { toPublicUser } from '../services/to-public-user';
+import { parseInput } from '../http/parse-input';
+import type { SignInLimiter } from '../auth/sign-in-limiter';
+import { toPublicUser } from '../views/to-public-user';
 
 const WRONG: ApiError = { kind: 'wrong-credentials', message: 'That e-mail and password do not match an account.' };
 
@@ -19,13 +19,11 @@ export function authRouter(passport: ReturnType<typeof configurePassport>, limit
     const wait = await limiter.retryAfter(body.email, address);
     if (wait > 0) {
       res.set('Retry-After', String(wait));
-      res
-        .status(429)
-        .json({
-          kind: 'too-many-attempts',
-          message: `Too many failed attempts. Try again in ${Math.ceil(wait / 60)} min.`,
-          retryAfterSeconds: wait,
-        } satisfies ApiError);
+      res.status(429).json({
+        kind: 'too-many-attempts',
+        message: `Too many failed attempts. Try again in ${Math.ceil(wait / 60)} min.`,
+        retryAfterSeconds: wait,
+      } satisfies ApiError);
       return;
     }
     passport.authenticate('local', { session: false }, (err: unknown, user: User | false) => {

@@ -4,8 +4,8 @@ import { ROLES } from '../../shared/roles';
 import { idParams } from '../../shared/schemas/id-params';
 import { Deviation } from '../entities/deviation';
 import { requireRole } from '../middleware/require-role';
-import { HttpError } from '../services/http-error';
-import { parseInput } from '../services/parse-input';
+import { HttpError } from '../http/http-error';
+import { parseInput } from '../http/parse-input';
 
 const view = (d: Deviation) => ({
   id: d.id,

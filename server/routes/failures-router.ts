@@ -1,17 +1,24 @@
 import { stringify } from 'csv-stringify/sync';
 import { Router } from 'express';
 import type { DataSource } from 'typeorm';
+import { FAILURE_ROW_FIELDS } from '../../shared/failure-row-fields';
+import type { FailureView } from '../../shared/failure-view';
 import { ROLES } from '../../shared/roles';
 import { classifyBody } from '../../shared/schemas/classify-body';
 import { failureQuery } from '../../shared/schemas/failure-query';
 import { requireRole } from '../middleware/require-role';
-import { classifyFailure } from '../services/classify-failure';
-import { failurePath } from '../services/failure-path';
-import { HttpError } from '../services/http-error';
-import { InputError } from '../services/input-error';
-import { parseInput } from '../services/parse-input';
-import { failurePageJson } from '../services/failure-page-json';
-import { searchFailures } from '../services/failure-search';
+import { classifyFailure } from '../failures/classify-failure';
+import { failurePath } from '../failures/failure-path';
+import { HttpError } from '../http/http-error';
+import { InputError } from '../http/input-error';
+import { parseInput } from '../http/parse-input';
+import { failurePageJson } from '../failures/failure-page-json';
+import { searchFailures } from '../failures/failure-search';
+
+/** The export's cells in order, from the one list of the failure row's fields. */
+const CSV_CELLS = FAILURE_ROW_FIELDS.flatMap(
+  (f): readonly (readonly [string, (row: FailureView) => string | number])[] => ('csv' in f ? f.csv : []),
+);
 
 /** Rows per CSV export: enough for a whole demo run; larger tables are filtered first. */
 const CSV_MAX_ROWS = 50_000;
@@ -31,28 +38,7 @@ export function failuresRouter(dataSource: DataSource, options: { referenceCache
       throw new InputError([{ field: 'query', rule: 'needs run, suite or target to export' }]);
     const { rows } = await searchFailures(dataSource, q, true);
     const csv = stringify(
-      rows.map((r) => ({
-        run: r.runId,
-        suite: `${r.suiteSlug}@${r.suiteVersion}`,
-        target: r.targetName,
-        convention: r.convention,
-        path: r.pathName,
-        t: r.t,
-        z_re: r.z.re,
-        z_im: r.z.im,
-        z_hex_re: r.zHex.re,
-        z_hex_im: r.zHex.im,
-        expected_re: r.expected?.re ?? '',
-        expected_im: r.expected?.im ?? '',
-        actual_re: r.actual?.re ?? '',
-        actual_im: r.actual?.im ?? '',
-        outcome: r.outcomeKind,
-        diagnosis: (r.diagnosis as { kind?: string } | null)?.kind ?? '',
-        ulps: r.ulps ?? '',
-        relative_error: r.relativeError ?? '',
-        regression: r.isRegression ? 'yes' : 'no',
-        rule: r.rule,
-      })),
+      rows.map((r) => Object.fromEntries(CSV_CELLS.map(([header, read]) => [header, read(r)]))),
       { header: true },
     );
     res.type('text/csv').attachment('sheetkeeper-failures.csv').send(csv);
@@ -71,16 +57,14 @@ export function failuresRouter(dataSource: DataSource, options: { referenceCache
       });
     }
     const deviation = await classifyFailure(dataSource, req.user!, id, body);
-    res
-      .status(201)
-      .json({
-        deviation: {
-          id: deviation.id,
-          classification: deviation.classification,
-          scope: deviation.scope,
-          expiresAt: deviation.expiresAt?.toISOString() ?? null,
-        },
-      });
+    res.status(201).json({
+      deviation: {
+        id: deviation.id,
+        classification: deviation.classification,
+        scope: deviation.scope,
+        expiresAt: deviation.expiresAt?.toISOString() ?? null,
+      },
+    });
   });
 
   router.get('/:id/path', anyone, async (req, res) => {

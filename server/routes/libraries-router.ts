@@ -5,8 +5,8 @@ import { fingerprintQuery } from '../../shared/schemas/fingerprint-query';
 import { targetNameParams } from '../../shared/schemas/target-name-params';
 import { versionMatrixQuery } from '../../shared/schemas/version-matrix-query';
 import { requireRole } from '../middleware/require-role';
-import type { LibraryFindings } from '../services/library-findings';
-import { parseInput } from '../services/parse-input';
+import type { LibraryFindings } from '../findings/library-findings';
+import { parseInput } from '../http/parse-input';
 
 /**
  * What the harness finds out about installed libraries, mounted beside the targets list under

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { ROLES } from '../../shared/roles';
 import { requireRole } from '../middleware/require-role';
-import { toPublicUser } from '../services/to-public-user';
+import { toPublicUser } from '../views/to-public-user';
 
 export function meRouter(): Router {
   const router = Router();

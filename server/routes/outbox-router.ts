@@ -5,8 +5,8 @@ import { outboxListQuery } from '../../shared/schemas/outbox-list-query';
 import type { ReceivedMailView } from '../../shared/received-mail-view';
 import { ReceivedMail } from '../entities/received-mail';
 import { requireRole } from '../middleware/require-role';
-import { HttpError } from '../services/http-error';
-import { parseInput } from '../services/parse-input';
+import { HttpError } from '../http/http-error';
+import { parseInput } from '../http/parse-input';
 
 const summary = (m: ReceivedMail): ReceivedMailView => ({
   id: m.id,

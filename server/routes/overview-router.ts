@@ -2,7 +2,7 @@ import { Router } from 'express';
 import type { DataSource } from 'typeorm';
 import { ROLES } from '../../shared/roles';
 import { requireRole } from '../middleware/require-role';
-import { loadOverview } from '../services/load-overview';
+import { loadOverview } from '../views/load-overview';
 
 /** The Overview: everyone reads it; what "needs me" depends on who asks. */
 export function overviewRouter(dataSource: DataSource): Router {

@@ -4,8 +4,8 @@ import { ROLES } from '../../shared/roles';
 import { idParams } from '../../shared/schemas/id-params';
 import { planBody } from '../../shared/schemas/plan-body';
 import { requireRole } from '../middleware/require-role';
-import { parseInput } from '../services/parse-input';
-import { PlanService } from '../services/plan-service';
+import { parseInput } from '../http/parse-input';
+import { PlanService } from '../plans/plan-service';
 
 /** Plans: everyone reads them; maintainers (and admins) shape them. */
 export function plansRouter(dataSource: DataSource): Router {

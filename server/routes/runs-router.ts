@@ -7,8 +7,8 @@ import { idParams } from '../../shared/schemas/id-params';
 import { runBody } from '../../shared/schemas/run-body';
 import { runListQuery } from '../../shared/schemas/run-list-query';
 import { requireRole } from '../middleware/require-role';
-import { parseInput } from '../services/parse-input';
-import type { RunService } from '../services/run-service';
+import { parseInput } from '../http/parse-input';
+import type { RunService } from '../runs/run-service';
 
 /** Runs: everyone reads them and their matrix; maintainers (and admins) start and cancel them. */
 export function runsRouter(dataSource: DataSource, runs: RunService): Router {

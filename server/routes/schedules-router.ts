@@ -4,9 +4,9 @@ import { ROLES } from '../../shared/roles';
 import { idParams } from '../../shared/schemas/id-params';
 import { cronPreviewBody, scheduleBody, schedulePatchBody } from '../../shared/schemas/schedule-body';
 import { requireRole } from '../middleware/require-role';
-import { nextCronRuns } from '../services/next-cron-runs';
-import { parseInput } from '../services/parse-input';
-import { ScheduleService } from '../services/schedule-service';
+import { nextCronRuns } from '../plans/next-cron-runs';
+import { parseInput } from '../http/parse-input';
+import { ScheduleService } from '../plans/schedule-service';
 
 /** Schedules: everyone reads them; maintainers (and admins) edit them. `preview` answers the next three times of an expression. */
 export function schedulesRouter(dataSource: DataSource): Router {

@@ -4,8 +4,8 @@ import { ROLES } from '../../shared/roles';
 import { subscriptionsBody } from '../../shared/schemas/subscriptions-body';
 import { Subscription } from '../entities/subscription';
 import { requireRole } from '../middleware/require-role';
-import { parseInput } from '../services/parse-input';
-import { targetKeySql } from '../services/target-key-sql';
+import { parseInput } from '../http/parse-input';
+import { targetKeySql } from '../sql/target-key-sql';
 
 /** My subscriptions, and the libraries one can subscribe to (from the known targets). */
 export function subscriptionsRouter(dataSource: DataSource): Router {

@@ -6,12 +6,12 @@ import { reviewBody } from '../../shared/schemas/review-body';
 import { suiteListQuery } from '../../shared/schemas/suite-list-query';
 import { suiteSlugParams, suiteVersionParams } from '../../shared/schemas/suite-slug-params';
 import { requireRole } from '../middleware/require-role';
-import { HttpError } from '../services/http-error';
-import { InputError } from '../services/input-error';
-import { parseInput } from '../services/parse-input';
-import { SuiteService } from '../services/suite-service';
-import { validateSuiteInput } from '../services/validate-suite-input';
-import { checkReferenceTable } from '../../harness/suites/check-reference-table';
+import { HttpError } from '../http/http-error';
+import { InputError } from '../http/input-error';
+import { parseInput } from '../http/parse-input';
+import { SuiteService } from '../suites/suite-service';
+import { validateSuiteInput } from '../suites/validate-suite-input';
+import { checkReferenceTable } from '../../harness';
 import { SuiteVersion } from '../entities/suite-version';
 import { Upload } from '../entities/upload';
 
@@ -105,16 +105,14 @@ export function suitesRouter(dataSource: DataSource): Router {
     }
     const body = validateSuiteInput(data, 'file', file.originalname);
     const { created, view } = await suites.save(req.user!, body, 'upsert');
-    await dataSource
-      .getRepository(Upload)
-      .save({
-        kind: 'suite-file',
-        suiteVersion: { id: view.id },
-        filename: file.originalname,
-        bytes: file.size,
-        summary: { slug: view.slug, version: view.version, created },
-        uploadedBy: req.user!,
-      });
+    await dataSource.getRepository(Upload).save({
+      kind: 'suite-file',
+      suiteVersion: { id: view.id },
+      filename: file.originalname,
+      bytes: file.size,
+      summary: { slug: view.slug, version: view.version, created },
+      uploadedBy: req.user!,
+    });
     res.status(created ? 201 : 200).json({ version: view });
   });
 
@@ -128,16 +126,14 @@ export function suitesRouter(dataSource: DataSource): Router {
       .findOne({ where: { suite: { slug } }, order: { version: 'DESC' } });
     if (!version) throw new HttpError(404, { kind: 'not-found', message: `No suite with the id "${slug}".` });
     const check = checkReferenceTable(version.body, file.buffer.toString('utf8'));
-    await dataSource
-      .getRepository(Upload)
-      .save({
-        kind: 'reference-table',
-        suiteVersion: version,
-        filename: file.originalname,
-        bytes: file.size,
-        summary: { ...check },
-        uploadedBy: req.user!,
-      });
+    await dataSource.getRepository(Upload).save({
+      kind: 'reference-table',
+      suiteVersion: version,
+      filename: file.originalname,
+      bytes: file.size,
+      summary: { ...check },
+      uploadedBy: req.user!,
+    });
     res.json({ suite: slug, version: version.version, check });
   });
 

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import type { DataSource } from 'typeorm';
 import { ROLES } from '../../shared/roles';
-import { Target } from '../entities/target';
+import { TargetRow } from '../entities/target-row';
 import { requireRole } from '../middleware/require-role';
 
 /** The targets this server has seen, installed ones first. */
@@ -9,7 +9,7 @@ export function targetsRouter(dataSource: DataSource): Router {
   const router = Router();
   router.get('/', requireRole(...ROLES), async (_req, res) => {
     const targets = await dataSource
-      .getRepository(Target)
+      .getRepository(TargetRow)
       .find({ order: { installed: 'DESC', library: 'ASC', name: 'ASC' } });
     res.json({
       targets: targets.map(({ name, library, version, settings, installed }) => ({

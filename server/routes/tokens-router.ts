@@ -7,9 +7,9 @@ import { tokenBody } from '../../shared/schemas/token-body';
 import type { TokenView } from '../../shared/token-view';
 import { ApiToken } from '../entities/api-token';
 import { requireRole } from '../middleware/require-role';
-import { hashToken } from '../services/hash-token';
-import { HttpError } from '../services/http-error';
-import { parseInput } from '../services/parse-input';
+import { hashToken } from '../auth/hash-token';
+import { HttpError } from '../http/http-error';
+import { parseInput } from '../http/parse-input';
 
 const view = (t: ApiToken): TokenView => ({
   id: t.id,

@@ -5,9 +5,9 @@ import { idParams } from '../../shared/schemas/id-params';
 import { roleChangeBody } from '../../shared/schemas/role-change-body';
 import { User } from '../entities/user';
 import { requireRole } from '../middleware/require-role';
-import { parseInput } from '../services/parse-input';
-import type { ShortLivedCache } from '../services/short-lived-cache';
-import { toPublicUser } from '../services/to-public-user';
+import { parseInput } from '../http/parse-input';
+import type { ShortLivedCache } from '../auth/short-lived-cache';
+import { toPublicUser } from '../views/to-public-user';
 
 /** `signedIn` is the app's cache of signed-in users: a role change drops the user's entry so it applies at once. */
 export function usersRouter(dataSource: DataSource, signedIn: ShortLivedCache<User>): Router {

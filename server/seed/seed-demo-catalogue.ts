@@ -5,10 +5,10 @@ import { validateSuite } from '../../shared/validate-suite';
 import { Plan } from '../entities/plan';
 import { Schedule } from '../entities/schedule';
 import { Suite } from '../entities/suite';
-import { Target } from '../entities/target';
+import { TargetRow } from '../entities/target-row';
 import { User } from '../entities/user';
-import { PlanService } from '../services/plan-service';
-import { SuiteService } from '../services/suite-service';
+import { PlanService } from '../plans/plan-service';
+import { SuiteService } from '../suites/suite-service';
 import { DEMO_PLANS } from './demo-plans';
 
 const DEMO_DIR = path.join(__dirname, '..', '..', 'suites', 'demo');
@@ -40,7 +40,7 @@ export async function seedDemoCatalogue(dataSource: DataSource): Promise<{ suite
     await suites.review(reviewer, checked.suite.id, 1, 'approve', 'Demo catalogue: approved at seeding.');
     addedSuites += 1;
   }
-  const installed = (await dataSource.getRepository(Target).findBy({ installed: true })).map((t) => t.name);
+  const installed = (await dataSource.getRepository(TargetRow).findBy({ installed: true })).map((t) => t.name);
   const plans = new PlanService(dataSource);
   let addedPlans = 0;
   for (const demo of DEMO_PLANS) {
@@ -58,15 +58,13 @@ export async function seedDemoCatalogue(dataSource: DataSource): Promise<{ suite
       },
       null,
     );
-    await dataSource
-      .getRepository(Schedule)
-      .save({
-        plan: { id: view.id },
-        cron: demo.schedule.cron,
-        timeZone: demo.schedule.timeZone,
-        enabled: true,
-        createdBy: maintainer,
-      });
+    await dataSource.getRepository(Schedule).save({
+      plan: { id: view.id },
+      cron: demo.schedule.cron,
+      timeZone: demo.schedule.timeZone,
+      enabled: true,
+      createdBy: maintainer,
+    });
     addedPlans += 1;
   }
   return { suites: addedSuites, plans: addedPlans };

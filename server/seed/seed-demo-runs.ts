@@ -1,14 +1,14 @@
 import type { DataSource } from 'typeorm';
 import { Plan } from '../entities/plan';
 import { Run } from '../entities/run';
-import { Target } from '../entities/target';
+import { TargetRow } from '../entities/target-row';
 import { User } from '../entities/user';
-import { MailOutbox } from '../services/mail-outbox';
-import { openInstalledTarget } from '../services/open-installed-target';
-import { PlanService } from '../services/plan-service';
-import { RunService } from '../services/run-service';
-import { ShardExecutor } from '../services/shard-executor';
-import type { ShardQueue } from '../services/shard-queue';
+import { MailOutbox } from '../mail/mail-outbox';
+import { openInstalledTarget } from '../targets/open-installed-target';
+import { PlanService } from '../plans/plan-service';
+import { RunService } from '../runs/run-service';
+import { ShardExecutor } from '../runs/shard-executor';
+import type { ShardQueue } from '../runs/shard-queue';
 
 /** The release the demo team's nightly plan followed before it moved to the two newest ones (invented story). */
 const EARLIER_RELEASE = 'complex.js@2.3.0';
@@ -58,7 +58,7 @@ export async function seedDemoRuns(
   };
 
   let added = 0;
-  if (await dataSource.getRepository(Target).existsBy({ name: EARLIER_RELEASE, installed: true })) {
+  if (await dataSource.getRepository(TargetRow).existsBy({ name: EARLIER_RELEASE, installed: true })) {
     await plans.save(kwame, { ...body, targets: [EARLIER_RELEASE] }, plan.id);
     try {
       await runOnce();

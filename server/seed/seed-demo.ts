@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm';
 import { User } from '../entities/user';
-import { passwords } from '../services/passwords';
+import { passwords } from '../auth/passwords';
 import { DEMO_USERS } from './demo-users';
 
 /**

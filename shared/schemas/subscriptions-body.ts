@@ -5,11 +5,9 @@ import { jsonObject } from './json-object';
 export const subscriptionsBody = jsonObject({
   targetKeys: z
     .array(
-      z
-        .string()
-        .regex(/^[A-Za-z0-9._-]+(\/[A-Za-z0-9._-]+)*$/, {
-          error: 'must be a library name such as complex.js or mathjs/number',
-        }),
+      z.string().regex(/^[A-Za-z0-9._-]+(\/[A-Za-z0-9._-]+)*$/, {
+        error: 'must be a library name such as complex.js or mathjs/number',
+      }),
       { error: 'must be a list' },
     )
     .max(100, { error: 'must have at most 100 entries' })

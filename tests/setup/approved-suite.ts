@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm';
 import { User } from '../../server/entities/user';
-import { SuiteService } from '../../server/services/suite-service';
+import { SuiteService } from '../../server/suites/suite-service';
 import { validateSuite } from '../../shared/validate-suite';
 import { demoSuiteBody } from './demo-suite-body';
 

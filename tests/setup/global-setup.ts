@@ -2,7 +2,7 @@ import 'reflect-metadata';
 import { Client } from 'pg';
 import { createDataSource } from '../../server/data-source';
 import { seedDemo } from '../../server/seed/seed-demo';
-import { syncTargets } from '../../server/services/sync-targets';
+import { syncTargets } from '../../server/targets/sync-targets';
 import { pgBaseUrl } from './pg-base-url';
 import { templateDatabase } from './template-database';
 

@@ -1,4 +1,4 @@
-import type { ShardQueue } from '../../server/services/shard-queue';
+import type { ShardQueue } from '../../server/runs/shard-queue';
 
 /** A queue that keeps what it is given and runs nothing: for route tests, where runs only need to start. */
 export function idleShardQueue(): ShardQueue & { enqueued: string[] } {

@@ -1,6 +1,6 @@
 import { useLocalSearchParams } from 'expo-router';
-import { CaseDetail } from '../../../components/case-detail';
-import { ScreenBody } from '../../../components/screen-body';
+import { CaseDetail } from '../../../components/failures/case-detail';
+import { ScreenBody } from '../../../components/ui/screen-body';
 
 export default function FailureCaseScreen() {
   const { id } = useLocalSearchParams<{ id: string }>();

@@ -1,8 +1,8 @@
 import { router, useLocalSearchParams } from 'expo-router';
 import type { FailureFilters } from '../../../client/failure-filters';
 import { filtersFromParams } from '../../../client/filters-from-params';
-import { FailureBrowser } from '../../../components/failure-browser';
-import { ScreenBody } from '../../../components/screen-body';
+import { FailureBrowser } from '../../../components/failures/failure-browser';
+import { ScreenBody } from '../../../components/ui/screen-body';
 
 /** The failure table; its filters live in the address, so `/failures?run=…&suite=…` opens filtered and the back button undoes a filter. */
 export default function FailuresScreen() {

@@ -1,8 +1,8 @@
 import { router, useLocalSearchParams } from 'expo-router';
-import { CrumbLink } from '../../../components/crumb-link';
-import { CutMapView } from '../../../components/cut-map-view';
-import { QueryState } from '../../../components/query-state';
-import { ScreenBody } from '../../../components/screen-body';
+import { CrumbLink } from '../../../components/ui/crumb-link';
+import { CutMapView } from '../../../components/libraries/cut-map-view';
+import { QueryState } from '../../../components/ui/query-state';
+import { ScreenBody } from '../../../components/ui/screen-body';
 
 /** Where one function of a target is really discontinuous over a box, against the expected cuts. */
 export default function CutMapScreen() {

@@ -1,6 +1,6 @@
 import { router } from 'expo-router';
-import { ScreenBody } from '../../../components/screen-body';
-import { TargetList } from '../../../components/target-list';
+import { ScreenBody } from '../../../components/ui/screen-body';
+import { TargetList } from '../../../components/libraries/target-list';
 
 /** Libraries: the installed targets by library, each version with its settings. */
 export default function LibrariesScreen() {

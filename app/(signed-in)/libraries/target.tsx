@@ -1,8 +1,8 @@
 import { router, useLocalSearchParams } from 'expo-router';
-import { CrumbLink } from '../../../components/crumb-link';
-import { QueryState } from '../../../components/query-state';
-import { ScreenBody } from '../../../components/screen-body';
-import { TargetFingerprint } from '../../../components/target-fingerprint';
+import { CrumbLink } from '../../../components/ui/crumb-link';
+import { QueryState } from '../../../components/ui/query-state';
+import { ScreenBody } from '../../../components/ui/screen-body';
+import { TargetFingerprint } from '../../../components/libraries/target-fingerprint';
 
 /** One target: which convention it appears to follow on each cut of each function, with the evidence. */
 export default function TargetScreen() {

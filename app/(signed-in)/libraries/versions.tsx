@@ -1,8 +1,8 @@
 import { router, useLocalSearchParams } from 'expo-router';
-import { CrumbLink } from '../../../components/crumb-link';
-import { LibraryVersionMatrix } from '../../../components/library-version-matrix';
-import { QueryState } from '../../../components/query-state';
-import { ScreenBody } from '../../../components/screen-body';
+import { CrumbLink } from '../../../components/ui/crumb-link';
+import { LibraryVersionMatrix } from '../../../components/libraries/library-version-matrix';
+import { QueryState } from '../../../components/ui/query-state';
+import { ScreenBody } from '../../../components/ui/screen-body';
 
 /** The version matrix of one library: which values changed in which installed version. */
 export default function VersionsScreen() {

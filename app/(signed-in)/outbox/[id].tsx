@@ -1,11 +1,11 @@
 import { Link, useLocalSearchParams } from 'expo-router';
-import { Pressable, StyleSheet, Text } from 'react-native';
+import { Pressable, StyleSheet } from 'react-native';
 import { useMe } from '../../../client/use-me';
 import { useOutboxMessage } from '../../../client/use-outbox-message';
-import { MailView } from '../../../components/mail-view';
-import { QueryState } from '../../../components/query-state';
-import { ScreenBody } from '../../../components/screen-body';
-import { theme } from '../../../constants/theme';
+import { MailView } from '../../../components/mail/mail-view';
+import { QueryState } from '../../../components/ui/query-state';
+import { ScreenBody } from '../../../components/ui/screen-body';
+import { SkText } from '../../../components/ui/sk-text';
 
 export default function OutboxMessageScreen() {
   const { id } = useLocalSearchParams<{ id: string }>();
@@ -16,7 +16,9 @@ export default function OutboxMessageScreen() {
     <ScreenBody title="Message">
       <Link href={'/outbox' as never} asChild>
         <Pressable accessibilityRole="link" accessibilityLabel="All messages" style={StyleSheet.flatten(styles.back)}>
-          <Text style={styles.backText}>← All messages</Text>
+          <SkText variant="label" tone="accent">
+            ← All messages
+          </SkText>
         </Pressable>
       </Link>
       {me.role !== 'admin' ? <QueryState state="error" message="Only admins can see the outbox." /> : null}
@@ -31,5 +33,4 @@ export default function OutboxMessageScreen() {
 
 const styles = StyleSheet.create({
   back: { alignSelf: 'flex-start', minHeight: 44, justifyContent: 'center' },
-  backText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accent },
 });

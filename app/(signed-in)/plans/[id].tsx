@@ -1,12 +1,12 @@
 import { Link, useLocalSearchParams } from 'expo-router';
-import { Pressable, StyleSheet, Text } from 'react-native';
+import { Pressable, StyleSheet } from 'react-native';
 import { canEditPlans } from '../../../client/can-edit-plans';
 import { useMe } from '../../../client/use-me';
 import { usePlan } from '../../../client/use-plan';
-import { PlanDetail } from '../../../components/plan-detail';
-import { QueryState } from '../../../components/query-state';
-import { ScreenBody } from '../../../components/screen-body';
-import { theme } from '../../../constants/theme';
+import { PlanDetail } from '../../../components/plans/plan-detail';
+import { QueryState } from '../../../components/ui/query-state';
+import { ScreenBody } from '../../../components/ui/screen-body';
+import { SkText } from '../../../components/ui/sk-text';
 
 export default function PlanScreen() {
   const { id } = useLocalSearchParams<{ id: string }>();
@@ -17,7 +17,9 @@ export default function PlanScreen() {
     <ScreenBody title={plan.data?.name ?? 'Plan'}>
       <Link href={'/plans' as never} asChild>
         <Pressable accessibilityRole="link" accessibilityLabel="All plans" style={StyleSheet.flatten(styles.back)}>
-          <Text style={styles.backText}>← All plans</Text>
+          <SkText variant="label" tone="accent">
+            ← All plans
+          </SkText>
         </Pressable>
       </Link>
       {plan.isPending ? <QueryState state="loading" /> : null}
@@ -31,5 +33,4 @@ export default function PlanScreen() {
 
 const styles = StyleSheet.create({
   back: { alignSelf: 'flex-start', minHeight: 44, justifyContent: 'center' },
-  backText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accent },
 });

@@ -1,9 +1,10 @@
 import { Link } from 'expo-router';
-import { Pressable, StyleSheet, Text } from 'react-native';
+import { Pressable, StyleSheet } from 'react-native';
 import { canEditPlans } from '../../../client/can-edit-plans';
 import { useMe } from '../../../client/use-me';
-import { PlanList } from '../../../components/plan-list';
-import { ScreenBody } from '../../../components/screen-body';
+import { PlanList } from '../../../components/plans/plan-list';
+import { ScreenBody } from '../../../components/ui/screen-body';
+import { SkText } from '../../../components/ui/sk-text';
 import { theme } from '../../../constants/theme';
 
 export default function PlansScreen() {
@@ -17,7 +18,9 @@ export default function PlansScreen() {
       {canEditPlans(me.role) ? (
         <Link href={'/plans/new' as never} asChild>
           <Pressable accessibilityRole="link" accessibilityLabel="New plan" style={StyleSheet.flatten(styles.newPlan)}>
-            <Text style={styles.newPlanText}>+ New plan</Text>
+            <SkText variant="label" tone="accentInk">
+              + New plan
+            </SkText>
           </Pressable>
         </Link>
       ) : null}
@@ -35,5 +38,4 @@ const styles = StyleSheet.create({
     borderRadius: theme.radius,
     backgroundColor: theme.color.accent,
   },
-  newPlanText: { fontFamily: theme.font.medium, fontSize: theme.size.body, color: theme.color.accentInk },
 });

@@ -1,9 +1,9 @@
 import { useRouter } from 'expo-router';
 import { canEditPlans } from '../../../client/can-edit-plans';
 import { useMe } from '../../../client/use-me';
-import { PlanForm } from '../../../components/plan-form';
-import { QueryState } from '../../../components/query-state';
-import { ScreenBody } from '../../../components/screen-body';
+import { PlanForm } from '../../../components/plans/plan-form';
+import { QueryState } from '../../../components/ui/query-state';
+import { ScreenBody } from '../../../components/ui/screen-body';
 
 export default function NewPlanScreen() {
   const { data: me } = useMe();

@@ -1,6 +1,6 @@
 import { useLocalSearchParams } from 'expo-router';
-import { ScreenBody } from '../../../components/screen-body';
-import { SuiteReview } from '../../../components/suite-review';
+import { ScreenBody } from '../../../components/ui/screen-body';
+import { SuiteReview } from '../../../components/review/suite-review';
 import { useSuite } from '../../../client/use-suite';
 
 export default function ReviewSuiteScreen() {

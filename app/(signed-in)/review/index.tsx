@@ -1,7 +1,7 @@
 import { useMe } from '../../../client/use-me';
-import { QueryState } from '../../../components/query-state';
-import { ReviewQueue } from '../../../components/review-queue';
-import { ScreenBody } from '../../../components/screen-body';
+import { QueryState } from '../../../components/ui/query-state';
+import { ReviewQueue } from '../../../components/review/review-queue';
+import { ScreenBody } from '../../../components/ui/screen-body';
 
 export default function ReviewScreen() {
   const { data: me } = useMe();

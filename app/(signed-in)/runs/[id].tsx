@@ -1,5 +1,5 @@
 import { useLocalSearchParams } from 'expo-router';
-import { RunDetail } from '../../../components/run-detail';
+import { RunDetail } from '../../../components/runs/run-detail';
 
 /** One run, by id: progress, matrix, property checks and what was checked. */
 export default function RunScreen() {

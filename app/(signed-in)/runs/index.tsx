@@ -1,7 +1,7 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { runFiltersFromParams } from '../../../client/run-filters-from-params';
-import { RunsList } from '../../../components/runs-list';
-import { ScreenBody } from '../../../components/screen-body';
+import { RunsList } from '../../../components/runs/runs-list';
+import { ScreenBody } from '../../../components/ui/screen-body';
 
 /** Every run, newest first; the filters live in the address so a filtered list can be shared. */
 export default function RunsScreen() {

@@ -1,5 +1,5 @@
-import { ScreenBody } from '../../../components/screen-body';
-import { SuitesList } from '../../../components/suites-list';
+import { ScreenBody } from '../../../components/ui/screen-body';
+import { SuitesList } from '../../../components/suites/suites-list';
 
 export default function SuitesScreen() {
   return (

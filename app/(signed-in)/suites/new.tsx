@@ -1,5 +1,5 @@
-import { ScreenBody } from '../../../components/screen-body';
-import { SuiteFormScreen } from '../../../components/suite-form-screen';
+import { ScreenBody } from '../../../components/ui/screen-body';
+import { SuiteFormScreen } from '../../../components/suites/editor/suite-form-screen';
 
 export default function NewSuiteScreen() {
   return (

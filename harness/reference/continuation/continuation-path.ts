@@ -3,6 +3,7 @@ import { BigFloat } from '../numbers/big-float';
 import { Rational } from '../numbers/rational';
 import { FixedTables } from '../real/fixed-tables';
 import { realSinCos } from '../real/real-sin-cos';
+import type { ExactAngle } from './exact-angle';
 
 export type Point = [number, number];
 export type ExactPoint = [Rational, Rational];
@@ -13,15 +14,17 @@ export type PathPiece =
   | { kind: 'arc'; center: Point; radius: number; theta0: number; sweep: number; t0: number; t1: number };
 
 export type PathSpec =
-  | { kind: 'circle'; center: ExactPoint; radius: Rational; startAngle: Rational; turns: number; ccw: boolean }
+  | { kind: 'circle'; center: ExactPoint; radius: Rational; startAngle: ExactAngle; turns: Rational; ccw: boolean }
   | { kind: 'polyline'; points: ExactPoint[] };
 
 const toDouble = (r: Rational) => Number(r.num) / Number(r.den);
+const startRadians = (a: ExactAngle) => (a.kind === 'turns' ? 2 * Math.PI * toDouble(a.turns) : toDouble(a.radians));
 
 /**
- * A path (docs/vocabulary.md) with parameter t ∈ [0, 1]: on a circle the angle is
+ * A path of a suite (docs/vocabulary.md) with parameter t ∈ [0, 1]: on a circle the angle is
  * start + s·2π·turns·t (s = +1 counter-clockwise), on a polyline t is the fraction of arc length.
- * Points are computed at working precision from the exact geometry; pieces give the same path in doubles.
+ * Points are computed at working precision from the exact geometry (a start angle in turns joins
+ * the sweep before the one multiplication by π); pieces give the same path in doubles.
  */
 export class ContinuationPath {
   private lengths: BigFloat[] | null = null;
@@ -31,7 +34,7 @@ export class ContinuationPath {
 
   /** Whether the path ends where it starts (a circle with whole turns, or a polyline whose last point is its first). */
   closed(): boolean {
-    if (this.spec.kind === 'circle') return Number.isInteger(this.spec.turns) && this.spec.turns !== 0;
+    if (this.spec.kind === 'circle') return this.spec.turns.isInteger() && !this.spec.turns.isZero();
     const pts = this.spec.points;
     const a = pts[0] as ExactPoint;
     const b = pts[pts.length - 1] as ExactPoint;
@@ -41,8 +44,11 @@ export class ContinuationPath {
   point(t: Rational, bits: number): BigComplex {
     const s = this.spec;
     if (s.kind === 'circle') {
-      const q = t.mul(Rational.fromDouble(2 * s.turns * (s.ccw ? 1 : -1)));
-      const theta = s.startAngle.toBigFloat(bits).add(piTimes(q, bits));
+      const q = t.mul(s.turns).mul(new Rational(s.ccw ? 2n : -2n));
+      const theta =
+        s.startAngle.kind === 'turns'
+          ? piTimes(s.startAngle.turns.mul(new Rational(2n)).add(q), bits)
+          : s.startAngle.radians.toBigFloat(bits).add(piTimes(q, bits));
       const [sin, cos] = realSinCos(theta.truncate(bits + 16), bits);
       const r = s.radius.toBigFloat(bits);
       return new BigComplex(
@@ -78,8 +84,8 @@ export class ContinuationPath {
           kind: 'arc',
           center: [toDouble(s.center[0]), toDouble(s.center[1])],
           radius: toDouble(s.radius),
-          theta0: toDouble(s.startAngle),
-          sweep: (s.ccw ? 1 : -1) * 2 * Math.PI * s.turns,
+          theta0: startRadians(s.startAngle),
+          sweep: (s.ccw ? 1 : -1) * 2 * Math.PI * toDouble(s.turns),
           t0: 0,
           t1: 1,
         },
@@ -113,7 +119,7 @@ export class ContinuationPath {
   /** Number of pieces to start the step grid with, by geometry: 64 per turn, 16 per segment. */
   initialSteps(): number {
     return this.spec.kind === 'circle'
-      ? 64 * Math.max(1, Math.ceil(Math.abs(this.spec.turns)))
+      ? 64 * Math.max(1, Math.ceil(Math.abs(toDouble(this.spec.turns))))
       : 16 * (this.spec.points.length - 1);
   }
 

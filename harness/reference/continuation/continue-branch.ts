@@ -45,7 +45,7 @@ interface Node {
 }
 
 /**
- * A regular branch of g(z)^ν continued along a path (docs/vocabulary.md, "regular branch"):
+ * A regular branch of g(z)^ν continued along a path (docs/regular-branches.md):
  * f(z) = f0 · exp(ν·(ln|g(z)/g(z0)| + i·Δarg g)), with Δarg g accumulated step by step as
  * Σ Arg(P_{k+1}·conj P_k) − Σ Arg(Q_{k+1}·conj Q_k) + Δ Im(A/B) — each principal Arg is the true
  * change of that factor's argument as long as the step turns it by less than π, and the exp

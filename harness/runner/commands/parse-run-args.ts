@@ -6,7 +6,7 @@ export interface RunArgs {
   out: string | null;
   seed: number | null;
   workers: number | 'auto';
-  shardTimeLimitMs: number | null;
+  sliceTimeLimitMs: number | null;
   cacheDir: string | null | undefined;
   maxFindings: number | null;
   progress: boolean;
@@ -19,14 +19,14 @@ const VALUE_FLAGS = new Set([
   '--out',
   '--seed',
   '--workers',
-  '--shard-time-limit',
+  '--slice-time-limit',
   '--cache',
   '--max-findings',
 ]);
 
 /**
  * Reads `run --suite FILE|ID --target NAME@VERSION --format table|json|junit --out FILE --seed N`
- * plus `--workers N|auto`, `--shard-time-limit MS`, `--cache DIR`, `--no-cache`, `--max-findings N`
+ * plus `--workers N|auto`, `--slice-time-limit MS`, `--cache DIR`, `--no-cache`, `--max-findings N`
  * and `--progress`. `--suite` and `--target` may repeat (or take comma-separated lists).
  */
 export function parseRunArgs(argv: string[]): RunArgs | { error: string } {
@@ -37,7 +37,7 @@ export function parseRunArgs(argv: string[]): RunArgs | { error: string } {
     out: null,
     seed: null,
     workers: 'auto',
-    shardTimeLimitMs: null,
+    sliceTimeLimitMs: null,
     cacheDir: undefined,
     maxFindings: null,
     progress: false,
@@ -85,10 +85,10 @@ export function parseRunArgs(argv: string[]): RunArgs | { error: string } {
         args.workers = n;
         break;
       }
-      case '--shard-time-limit': {
-        const n = whole('shard-time-limit', 1);
+      case '--slice-time-limit': {
+        const n = whole('slice-time-limit', 1);
         if (typeof n !== 'number') return n;
-        args.shardTimeLimitMs = n;
+        args.sliceTimeLimitMs = n;
         break;
       }
       case '--cache':

@@ -2,13 +2,13 @@ import { mkdirSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { discoverTargets } from '../../adapters/discover-targets';
-import { buildPlan } from '../build-plan';
-import { formatJson } from '../format-json';
-import { formatJunit } from '../format-junit';
-import { formatTable } from '../format-table';
-import { loadSuites } from '../load-suites';
-import { resolveTargets } from '../resolve-targets';
-import { runPlan } from '../run-plan';
+import { buildPlan } from '../plan/build-plan';
+import { formatJson } from '../formats/format-json';
+import { formatJunit } from '../formats/format-junit';
+import { formatTable } from '../formats/format-table';
+import { loadSuites } from '../plan/load-suites';
+import { resolveTargets } from '../plan/resolve-targets';
+import { runPlan } from '../plan/run-plan';
 import { parseRunArgs } from './parse-run-args';
 
 const PROJECT_ROOT = path.resolve(__dirname, '..', '..', '..');
@@ -16,7 +16,7 @@ const PROJECT_ROOT = path.resolve(__dirname, '..', '..', '..');
 const WORKER_THRESHOLD = 50_000;
 
 const USAGE =
-  'usage: sheetkeeper run --suite FILE|ID|FOLDER --target NAME@VERSION [--format table|json|junit] [--out FILE] [--seed N] [--workers N|auto] [--shard-time-limit MS] [--cache DIR | --no-cache] [--max-findings N] [--progress]';
+  'usage: sheetkeeper run --suite FILE|ID|FOLDER --target NAME@VERSION [--format table|json|junit] [--out FILE] [--seed N] [--workers N|auto] [--slice-time-limit MS] [--cache DIR | --no-cache] [--max-findings N] [--progress]';
 
 /**
  * `sheetkeeper run` (docs/suite-format.md): loads and validates the suites, resolves the targets, runs
@@ -42,7 +42,7 @@ export async function runCommand(argv: string[]): Promise<number> {
     return 2;
   }
   const plan = buildPlan(loaded.suites, targets.targets);
-  const points = plan.shards.reduce((s, sh) => s + sh.points, 0);
+  const points = plan.slices.reduce((s, sh) => s + sh.points, 0);
   const workers =
     args.workers === 'auto' ? (points >= WORKER_THRESHOLD ? Math.min(4, os.availableParallelism()) : 0) : args.workers;
   const controller = new AbortController();
@@ -53,16 +53,16 @@ export async function runCommand(argv: string[]): Promise<number> {
     signal: controller.signal,
     seed: args.seed,
     ...(args.cacheDir !== undefined ? { cacheDir: args.cacheDir === null ? null : path.resolve(args.cacheDir) } : {}),
-    ...(args.shardTimeLimitMs !== null ? { shardTimeLimitMs: args.shardTimeLimitMs } : {}),
+    ...(args.sliceTimeLimitMs !== null ? { sliceTimeLimitMs: args.sliceTimeLimitMs } : {}),
     ...(args.maxFindings !== null ? { maxFindings: args.maxFindings } : {}),
     // Property checks run with each suite's pinned seeds; `--seed N` replaces them all, to explore.
     properties: true,
     onEvent: args.progress
       ? (e) => {
           if (e.type === 'progress') process.stderr.write(`sheetkeeper run: ${e.done}/${e.total} points\n`);
-          else if (e.type === 'shard-end')
+          else if (e.type === 'slice-end')
             process.stderr.write(
-              `sheetkeeper run: shard ${e.shard} ${e.suite} × ${e.target}: ${e.status} (${e.durationMs} ms)\n`,
+              `sheetkeeper run: slice ${e.slice} ${e.suite} × ${e.target}: ${e.status} (${e.durationMs} ms)\n`,
             );
           else if (e.type === 'cancelled') process.stderr.write(`sheetkeeper run: ${e.reason}\n`);
         }

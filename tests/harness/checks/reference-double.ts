@@ -1,5 +1,6 @@
 import { answerReference } from '../../../harness/reference/answer-reference';
 import type { ComplexDouble } from '../../../harness/checks/complex-double';
+import type { WireComplex } from '../../../shared/wire-complex';
 
 const wire = (x: number) =>
   Object.is(x, -0) ? '-0' : Number.isNaN(x) ? 'nan' : x === Infinity ? 'inf' : x === -Infinity ? '-inf' : String(x);
@@ -13,7 +14,7 @@ export function referenceDouble(
   convention: 'signed-zero' | 'counter-clockwise' = 'signed-zero',
 ): ComplexDouble {
   const answer = answerReference({ fn, z: { re: wire(z[0]), im: wire(z[1]) }, convention }) as {
-    double?: { re: string; im: string };
+    double?: WireComplex;
     error?: string;
   };
   if (!answer.double) throw new Error(`reference ${fn}: ${answer.error}`);

@@ -6,6 +6,7 @@ import { FINGERPRINT_FUNCTIONS } from '../../../harness/fingerprint/fingerprint-
 import { parseDouble } from '../../../harness/reference/numbers/parse-double';
 import { functionTarget } from '../support/function-target';
 import { referenceCall } from '../support/reference-call';
+import type { WireComplex } from '../../../shared/wire-complex';
 
 const fn = (label: string) => FINGERPRINT_FUNCTIONS.find((f) => f.label === label)!;
 const open = (name: string): Target => {
@@ -13,7 +14,7 @@ const open = (name: string): Target => {
   if (!descriptor) throw new Error(`${name} is installed with the project`);
   return descriptor.open();
 };
-const num = (w: { re: string; im: string }): ComplexPair => [parseDouble(w.re), parseDouble(w.im)];
+const num = (w: WireComplex): ComplexPair => [parseDouble(w.re), parseDouble(w.im)];
 
 describe('mapCuts', () => {
   it("finds complex.js 2.4.3's sqrt discontinuous along (-inf, 0] and nowhere else", async () => {

@@ -87,6 +87,8 @@ describe('fingerprintTarget', () => {
     const fp = await fingerprintTarget(mutant, only('sqrt'));
     expect(rows(fp)).toEqual(['sqrt (-inf, 0]: neither']);
     expect(fp.cuts[0]!.probes.every((p) => p.note?.includes('just off the cut'))).toBe(true);
+    // The point is written with one sign per part, "-4 - 1e-9i", never "-4 -1e-9i".
+    for (const p of fp.cuts[0]!.probes) expect(p.note).toMatch(/^just off the cut, at -[0-9.e-]+ [+-] [0-9.e-]+i, /);
   });
 
   it("finds complex.js 2.4.3's sqrt counter-clockwise but its log and pow(z, 1/2) signed-zero on (-inf, 0]", async () => {

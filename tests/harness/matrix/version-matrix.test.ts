@@ -8,6 +8,7 @@ import type { TargetDescriptor } from '../../../harness/adapters/target-descript
 import { versionMatrix } from '../../../harness/matrix/version-matrix';
 import { parseDouble } from '../../../harness/reference/numbers/parse-double';
 import { referenceTarget } from '../support/reference-target';
+import type { WireComplex } from '../../../shared/wire-complex';
 
 const demo = (id: string) =>
   suiteSchema.parse(
@@ -29,7 +30,7 @@ const asVersion = (version: string, make: () => Target): TargetDescriptor => {
     open: () => ({ ...make(), version }),
   };
 };
-const num = (w: { re: string; im: string } | null): ComplexPair => [parseDouble(w!.re), parseDouble(w!.im)];
+const num = (w: WireComplex | null): ComplexPair => [parseDouble(w!.re), parseDouble(w!.im)];
 
 async function cmathValue(op: string, z: ComplexPair): Promise<ComplexPair> {
   const d = discoverTargets().find((t) => t.library === 'cmath');

@@ -1,34 +1,12 @@
 import type { Convention } from '../../../shared/schemas/convention-schema';
+import { OP_ARITY } from '../../../harness/adapters/op-arity';
 import type { ComplexPair } from '../../../harness/adapters/complex-pair';
 import type { Target } from '../../../harness/adapters/target';
 import { functionTarget } from './function-target';
 import { referenceCall } from './reference-call';
 
-const REFERENCE_OPS = [
-  'sqrt',
-  'cbrt',
-  'nthroot',
-  'pow',
-  'exp',
-  'log',
-  'asin',
-  'acos',
-  'atan',
-  'asinh',
-  'acosh',
-  'atanh',
-  'acot',
-  'asec',
-  'acsc',
-  'acoth',
-  'asech',
-  'acsch',
-  'add',
-  'sub',
-  'mul',
-  'div',
-  'neg',
-] as const;
+/** Every operation a library target may offer: the catalogue's functions and the arithmetic. */
+const REFERENCE_OPS = Object.keys(OP_ARITY);
 
 /**
  * The reference engine as a target, with `replace` overriding some operations to make a

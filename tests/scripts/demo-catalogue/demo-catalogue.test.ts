@@ -1,34 +1,13 @@
 import { readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { demoCatalogue } from '../../../scripts/demo-catalogue/demo-catalogue';
+import { FUNCTION_NAMES } from '../../../shared/function-names';
 import { suiteJsonSchema } from '../../../shared/suite-json-schema';
 import { validateSuite } from '../../../shared/validate-suite';
 
 const DIR = path.join(__dirname, '..', '..', '..', 'suites', 'demo');
 const files = readdirSync(DIR).filter((f) => f.endsWith('.json'));
 const onDisk = files.map((f) => ({ file: f, data: JSON.parse(readFileSync(path.join(DIR, f), 'utf8')) as unknown }));
-
-/** Every function of the catalogue (docs/vocabulary.md); each must appear under both conventions. */
-const CATALOGUE = [
-  'sqrt',
-  'cbrt',
-  'nthroot',
-  'pow',
-  'exp',
-  'log',
-  'asin',
-  'acos',
-  'atan',
-  'asinh',
-  'acosh',
-  'atanh',
-  'acot',
-  'asec',
-  'acsc',
-  'acoth',
-  'asech',
-  'acsch',
-];
 
 describe('the demo catalogue in suites/demo', () => {
   it('validates every file with the shared schema, under a file name equal to its id', () => {
@@ -56,7 +35,7 @@ describe('the demo catalogue in suites/demo', () => {
     const principal = onDisk
       .map(({ data }) => data as { subject: string; convention: string; branch: { kind: string } })
       .filter((s) => s.branch.kind === 'principal');
-    for (const fn of CATALOGUE) {
+    for (const fn of FUNCTION_NAMES) {
       for (const convention of ['signed-zero', 'counter-clockwise']) {
         expect({
           fn,

@@ -4,6 +4,7 @@ import { parseSubject } from '../../../harness/expressions/parse-subject';
 import { BigComplex } from '../../../harness/reference/complex/big-complex';
 import { answerContinue } from '../../../harness/reference/continuation/answer-continue';
 import { validateSuite } from '../../../shared/validate-suite';
+import type { WireComplex } from '../../../shared/wire-complex';
 
 /** Points off every demo layout's cuts, in all four quadrants. */
 const POINTS: [number, number][] = [
@@ -28,7 +29,7 @@ function branchValue(suite: (typeof DEMO_REGULAR_SUITES)[number], p: [number, nu
     path: { kind: 'polyline', points: [b.z0, { re: String(p[0]), im: String(p[1]) }] },
     at: ['1'],
     cuts: b.cuts,
-  }) as { values?: { f: { re: string; im: string } }[]; error?: string };
+  }) as { values?: { f: WireComplex }[]; error?: string };
   if (!answer.values) throw new Error(`${suite.id}: ${answer.error}`);
   const f = answer.values[0]!.f;
   return [Number(f.re), Number(f.im)];

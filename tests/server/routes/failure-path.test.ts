@@ -3,9 +3,9 @@ import os from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
 import { complexJsTarget } from '../../../harness/adapters/complex-js-target';
-import { failurePath } from '../../../server/services/failure-path';
-import { ShardExecutor } from '../../../server/services/shard-executor';
-import type { MailOutbox } from '../../../server/services/mail-outbox';
+import { failurePath } from '../../../server/failures/failure-path';
+import { ShardExecutor } from '../../../server/runs/shard-executor';
+import type { MailOutbox } from '../../../server/mail/mail-outbox';
 import type { FailurePathView } from '../../../shared/failure-path-view';
 import { approvedSuite } from '../../setup/approved-suite';
 import { signInAs } from '../../setup/sign-in-as';
@@ -177,14 +177,12 @@ describe('who may classify a failure', () => {
 
   it('lets a maintainer accept a deviation with a reason and an expiry, recorded as theirs', async () => {
     const kwame = await signInAs(t.app, 'maintainer');
-    const res = await kwame
-      .post(`/api/failures/${failureId}/classify`)
-      .send({
-        classification: 'accepted',
-        scope: 'point',
-        reason: 'complex.js documents that it ignores the sign of zero.',
-        expiresAt: '2099-01-01T00:00:00Z',
-      });
+    const res = await kwame.post(`/api/failures/${failureId}/classify`).send({
+      classification: 'accepted',
+      scope: 'point',
+      reason: 'complex.js documents that it ignores the sign of zero.',
+      expiresAt: '2099-01-01T00:00:00Z',
+    });
     expect(res.status).toBe(201);
     expect(res.body.deviation).toMatchObject({
       classification: 'accepted',

@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { User } from '../../../server/entities/user';
-import { SuiteService } from '../../../server/services/suite-service';
+import { SuiteService } from '../../../server/suites/suite-service';
 import type { OverviewView } from '../../../shared/overview-view';
 import { validateSuite } from '../../../shared/validate-suite';
 import { approvedSuite } from '../../setup/approved-suite';
@@ -125,14 +125,12 @@ describe('GET /api/overview', () => {
       `SELECT id::text FROM failures WHERE run_id = $1 AND path_name = 'accepted-path'`,
       [runs.latest],
     );
-    const accepted = await hanne
-      .post(`/api/failures/${failureRow.id}/classify`)
-      .send({
-        classification: 'accepted',
-        scope: 'path',
-        reason: 'Documented behaviour on this path.',
-        expiresAt: '2099-01-01T00:00:00Z',
-      });
+    const accepted = await hanne.post(`/api/failures/${failureRow.id}/classify`).send({
+      classification: 'accepted',
+      scope: 'path',
+      reason: 'Documented behaviour on this path.',
+      expiresAt: '2099-01-01T00:00:00Z',
+    });
     expect(accepted.status).toBe(201);
     const view = await overview(hanne);
     expect(view.needsMe.subscriptions).toEqual(['complex.js']);

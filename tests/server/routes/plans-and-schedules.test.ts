@@ -52,15 +52,13 @@ describe('plans and schedules', () => {
   it('refuses a suite without an approved version, an unknown suite and an unknown target, naming each', async () => {
     const ravi = await signInAs(t.app, 'contributor');
     expect((await ravi.post('/api/suites').send(demoSuiteBody('draft-only'))).status).toBe(201);
-    const res = await kwame
-      .post('/api/plans')
-      .send(
-        plan({
-          name: 'Broken plan',
-          suites: ['plan-sqrt', 'draft-only', 'no-such-suite'],
-          targets: [target, 'nolib@0.0.0'],
-        }),
-      );
+    const res = await kwame.post('/api/plans').send(
+      plan({
+        name: 'Broken plan',
+        suites: ['plan-sqrt', 'draft-only', 'no-such-suite'],
+        targets: [target, 'nolib@0.0.0'],
+      }),
+    );
     expect(res.status).toBe(400);
     expect(res.body.issues).toEqual([
       { field: 'body.suites.1', rule: 'has no approved version yet ("draft-only")' },

@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { User } from '../../../server/entities/user';
-import { SuiteService } from '../../../server/services/suite-service';
+import { SuiteService } from '../../../server/suites/suite-service';
 import { validateSuite } from '../../../shared/validate-suite';
 import { ROLES, type Role } from '../../../shared/roles';
 import { approvedSuite } from '../../setup/approved-suite';

@@ -1,6 +1,6 @@
 import request from 'supertest';
-import { failurePageJson } from '../../../server/services/failure-page-json';
-import { searchFailures } from '../../../server/services/failure-search';
+import { failurePageJson } from '../../../server/failures/failure-page-json';
+import { searchFailures } from '../../../server/failures/failure-search';
 import { approvedSuite } from '../../setup/approved-suite';
 import { signInAs } from '../../setup/sign-in-as';
 import { startTestApp, type TestApp } from '../../setup/test-app';
@@ -141,8 +141,15 @@ describe('runs and the failure table', () => {
     const res = await kwame.get(`/api/failures/export.csv?run=${runId}&diagnosis=zero-sign`);
     expect(res.headers['content-type']).toMatch(/text\/csv/);
     const lines = res.text.trim().split('\n');
-    expect(lines[0]).toMatch(/^run,suite,target,convention,path,t,z_re,z_im,z_hex_re,z_hex_im/);
+    expect(lines[0]).toBe(
+      'run,suite,target,convention,path,t,z_re,z_im,z_hex_re,z_hex_im,expected_re,expected_im,actual_re,actual_im,outcome,diagnosis,ulps,relative_error,regression,rule',
+    );
     expect(lines).toHaveLength(41);
+    const cells = lines[1]!.split(',');
+    expect(cells[0]).toBe(runId);
+    expect(cells[1]).toMatch(/^[a-z0-9-]+@\d+$/);
+    expect(cells.slice(14, 16)).toEqual(['fail', 'zero-sign']);
+    expect(cells[18]).toMatch(/^(yes|no)$/);
   });
 
   it('shows one failure with the history of its point', async () => {
@@ -192,14 +199,12 @@ describe('verdicts on failures', () => {
   it('accepts a deviation for a path until it expires, moving its failures from known to accepted', async () => {
     const hanne = await signInAs(t.app, 'reviewer');
     const [first] = (await hanne.get(`/api/failures?run=${runId}&limit=1`)).body.failures;
-    const res = await hanne
-      .post(`/api/failures/${first.id}/classify`)
-      .send({
-        classification: 'accepted',
-        scope: 'path',
-        reason: 'complex.js documents that it ignores the sign of zero.',
-        expiresAt: '2099-01-01T00:00:00Z',
-      });
+    const res = await hanne.post(`/api/failures/${first.id}/classify`).send({
+      classification: 'accepted',
+      scope: 'path',
+      reason: 'complex.js documents that it ignores the sign of zero.',
+      expiresAt: '2099-01-01T00:00:00Z',
+    });
     expect(res.status).toBe(201);
     expect(
       (await hanne.get(`/api/failures?run=${runId}&status=accepted`)).body.failures.map(

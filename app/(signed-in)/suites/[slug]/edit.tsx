@@ -1,6 +1,6 @@
 import { useLocalSearchParams } from 'expo-router';
-import { ScreenBody } from '../../../../components/screen-body';
-import { SuiteFormScreen } from '../../../../components/suite-form-screen';
+import { ScreenBody } from '../../../../components/ui/screen-body';
+import { SuiteFormScreen } from '../../../../components/suites/editor/suite-form-screen';
 
 export default function EditSuiteScreen() {
   const { slug } = useLocalSearchParams<{ slug: string }>();

@@ -1,7 +1,7 @@
 import { useLocalSearchParams } from 'expo-router';
 import { useSuite } from '../../../../client/use-suite';
-import { ScreenBody } from '../../../../components/screen-body';
-import { SuiteDetail } from '../../../../components/suite-detail';
+import { ScreenBody } from '../../../../components/ui/screen-body';
+import { SuiteDetail } from '../../../../components/suites/suite-detail';
 
 export default function SuiteScreen() {
   const { slug } = useLocalSearchParams<{ slug: string }>();

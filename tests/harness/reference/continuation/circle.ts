@@ -1,4 +1,4 @@
-import type { WireComplex } from './wire-complex';
+import type { WireComplex } from '../../../../shared/wire-complex';
 
 /** A circle path of a `continue` request. */
 export function circle(

@@ -1,5 +1,5 @@
 import { answerContinue } from '../../../../harness/reference/continuation/answer-continue';
-import type { WireComplex } from './wire-complex';
+import type { WireComplex } from '../../../../shared/wire-complex';
 
 /** Runs one `continue` request and returns the answer, throwing if it is an error. */
 export function run(request: Record<string, unknown>): {

@@ -46,7 +46,7 @@ describe('sheetkeeper run', () => {
     expect(result.plan).toEqual({
       suites: [{ id: 'sqrt-principal-sz', version: 1 }],
       targets: ['complex.js@2.4.3'],
-      shards: 1,
+      slices: 1,
     });
     expect(result.disclaimer).toMatch(/not a certification/);
     const finding = result.results[0].paths[0].findings[0];
@@ -101,7 +101,7 @@ describe('sheetkeeper run', () => {
     }
     const straddle = suites[0]!.testcase[0]!.failure!;
     expect(straddle.type).toBe('zero-sign');
-    expect(straddle['#text']).toContain('z        = -1 + -0i   [-0x1p+0, -0x0p+0]');
+    expect(straddle['#text']).toContain('z        = -1 - 0i   [-0x1p+0, -0x0p+0]');
     expect(straddle['#text']).toContain('const z = c(-1, -0);');
   }, 120_000);
 

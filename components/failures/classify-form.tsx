@@ -1,0 +1,213 @@
+import { useState } from 'react';
+import { StyleSheet, Text, TextInput, View } from 'react-native';
+import { ApiRequestError } from '../../client/api-request-error';
+import { useClassifyFailure } from '../../client/use-classify-failure';
+import { theme } from '../../constants/theme';
+import type { Role } from '../../shared/roles';
+import { classifyBody, type ClassifyBody } from '../../shared/schemas/classify-body';
+import { ActionButton } from '../ui/action-button';
+import { ChipGroup } from '../ui/chip-group';
+import { INPUT_BOX_STYLE } from '../ui/input-box-style';
+import { SkText } from '../ui/sk-text';
+import { TextField } from '../ui/text-field';
+
+type Field = 'classification' | 'scope' | 'reason' | 'expiresAt';
+
+const VERDICTS: { value: ClassifyBody['classification']; text: string; glyph: string }[] = [
+  { value: 'bug', text: 'bug', glyph: '❌' },
+  { value: 'convention-difference', text: 'convention difference', glyph: '⇄' },
+  { value: 'accepted', text: 'accepted deviation', glyph: '✓' },
+];
+const SCOPES: { value: ClassifyBody['scope']; text: string }[] = [
+  { value: 'point', text: 'this point' },
+  { value: 'path', text: 'this path' },
+  { value: 'suite', text: 'this suite' },
+  { value: 'diagnosis', text: 'this diagnosis in the suite' },
+];
+
+const FIELD_NAMES: Record<Field, string> = {
+  classification: 'Verdict',
+  scope: 'Covers',
+  reason: 'Reason',
+  expiresAt: 'Expiry',
+};
+
+/** A typed day becomes midnight UTC; anything else goes to the schema as typed, so its rule is shown. */
+const expiryOf = (text: string): string | undefined => {
+  const t = text.trim();
+  if (!t) return undefined;
+  return /^\d{4}-\d{2}-\d{2}$/.test(t) ? `${t}T00:00:00Z` : t;
+};
+
+/**
+ * A verdict on a failure, for the same target at any version: reviewers and admins call it a
+ * bug, a convention difference or an accepted deviation; maintainers may only accept a
+ * deviation (the server enforces the same). Checked with the server's schema before sending;
+ * the server's rules come back beside the same fields, and nothing typed is lost on a refusal.
+ */
+export function ClassifyForm({
+  failureId,
+  role,
+  hasDiagnosis,
+}: {
+  failureId: string;
+  role: Role;
+  hasDiagnosis: boolean;
+}) {
+  const maintainer = role === 'maintainer';
+  const [classification, setClassification] = useState<ClassifyBody['classification'] | undefined>(
+    maintainer ? 'accepted' : undefined,
+  );
+  const [scope, setScope] = useState<ClassifyBody['scope']>('point');
+  const [reason, setReason] = useState('');
+  const [expires, setExpires] = useState('');
+  const [errors, setErrors] = useState<Partial<Record<Field, string>>>({});
+  const classify = useClassifyFailure(failureId);
+  const [done, setDone] = useState<string | null>(null);
+
+  const submit = () => {
+    setDone(null);
+    const parsed = classifyBody.safeParse({ classification, scope, reason, expiresAt: expiryOf(expires) });
+    if (!parsed.success) {
+      const found: Partial<Record<Field, string>> = {};
+      for (const issue of parsed.error.issues) {
+        const field = String(issue.path[0] ?? 'reason') as Field;
+        found[field] ??= issue.message;
+      }
+      setErrors(found);
+      return;
+    }
+    setErrors({});
+    classify.mutate(parsed.data, {
+      onSuccess: (res) => {
+        const d = res.deviation;
+        setDone(
+          `✓ Recorded: ${VERDICTS.find((v) => v.value === d.classification)?.text} for ${SCOPES.find((s) => s.value === d.scope)?.text}${d.expiresAt ? `, until ${d.expiresAt.slice(0, 10)}` : ''}.`,
+        );
+        setReason('');
+        setExpires('');
+      },
+      onError: (error) => {
+        if (error instanceof ApiRequestError && error.body.kind === 'invalid-input') {
+          const found: Partial<Record<Field, string>> = {};
+          for (const issue of error.body.issues) found[issue.field.replace(/^body\./, '') as Field] ??= issue.rule;
+          setErrors(found);
+        }
+      },
+    });
+  };
+
+  const formError =
+    classify.error && !(classify.error instanceof ApiRequestError && classify.error.body.kind === 'invalid-input')
+      ? classify.error.message
+      : null;
+  const fieldError = (f: Field) =>
+    errors[f] ? (
+      <SkText variant="caption" tone="danger" accessibilityRole="alert" style={styles.error}>
+        × {FIELD_NAMES[f]} {errors[f]}
+      </SkText>
+    ) : null;
+
+  return (
+    <View style={styles.form}>
+      {maintainer ? (
+        <SkText variant="caption" style={styles.note}>
+          As a maintainer you may accept a deviation your library lives with; calling a failure a bug or a convention
+          difference is a reviewer&apos;s call.
+        </SkText>
+      ) : null}
+      <View>
+        <ChipGroup
+          label="Verdict"
+          value={classification}
+          onChange={(v) => {
+            setClassification(v);
+            setErrors({ ...errors, classification: undefined });
+          }}
+          options={maintainer ? VERDICTS.filter((v) => v.value === 'accepted') : VERDICTS}
+        />
+        {fieldError('classification')}
+      </View>
+      <View>
+        <ChipGroup
+          label="Covers"
+          value={scope}
+          onChange={(v) => setScope(v ?? 'point')}
+          options={hasDiagnosis ? SCOPES : SCOPES.filter((s) => s.value !== 'diagnosis')}
+        />
+        {fieldError('scope')}
+      </View>
+      <View style={styles.field}>
+        <SkText variant="smallLabel" style={styles.label}>
+          Reason
+        </SkText>
+        <TextInput
+          accessibilityLabel="Reason"
+          aria-invalid={errors.reason ? true : undefined}
+          multiline
+          numberOfLines={3}
+          value={reason}
+          onChangeText={(t) => {
+            setReason(t);
+            if (errors.reason) setErrors({ ...errors, reason: undefined });
+          }}
+          style={[styles.input, errors.reason ? styles.inputError : null]}
+        />
+        {fieldError('reason')}
+      </View>
+      <View>
+        <TextField
+          label={
+            classification === 'accepted' ? 'Expires on (YYYY-MM-DD, required)' : 'Expires on (YYYY-MM-DD, optional)'
+          }
+          value={expires}
+          onChangeText={(t) => {
+            setExpires(t);
+            if (errors.expiresAt) setErrors({ ...errors, expiresAt: undefined });
+          }}
+          autoCapitalize="none"
+        />
+        {fieldError('expiresAt')}
+      </View>
+      {formError ? (
+        <Text accessibilityRole="alert" style={styles.formError}>
+          × {formError}
+        </Text>
+      ) : null}
+      {done ? (
+        <Text style={styles.done} accessibilityLiveRegion="polite">
+          {done}
+        </Text>
+      ) : null}
+      <ActionButton
+        label={classification === 'accepted' ? 'Accept deviation' : 'Record verdict'}
+        busy={classify.isPending}
+        onPress={submit}
+      />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: theme.space(4) },
+  note: { lineHeight: 19 },
+  field: { gap: theme.space(1) },
+  label: { letterSpacing: 0.3 },
+  input: { ...INPUT_BOX_STYLE, minHeight: 88, padding: theme.space(3), textAlignVertical: 'top' },
+  inputError: { borderColor: theme.color.danger, borderWidth: 2 },
+  error: { marginTop: theme.space(1) },
+  formError: {
+    fontFamily: theme.font.medium,
+    color: theme.color.danger,
+    backgroundColor: theme.color.dangerSoft,
+    padding: theme.space(3),
+    borderRadius: theme.radius,
+  },
+  done: {
+    fontFamily: theme.font.medium,
+    color: theme.color.accent,
+    backgroundColor: theme.color.accentSoft,
+    padding: theme.space(3),
+    borderRadius: theme.radius,
+  },
+});

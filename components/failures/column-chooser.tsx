@@ -1,0 +1,108 @@
+import { useState } from 'react';
+import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { theme } from '../../constants/theme';
+import { SkText } from '../ui/sk-text';
+
+export interface ColumnOption<T extends string> {
+  id: T;
+  title: string;
+  /** Always shown: the chooser lists it as on and cannot turn it off. */
+  fixed?: boolean;
+}
+
+/** Which columns a table shows: a button that opens a list of checkboxes. */
+export function ColumnChooser<T extends string>({
+  options,
+  shown,
+  onChange,
+}: {
+  options: ColumnOption<T>[];
+  shown: T[];
+  onChange: (next: T[]) => void;
+}) {
+  const [open, setOpen] = useState(false);
+  return (
+    <View style={styles.root}>
+      <Pressable
+        accessibilityRole="button"
+        accessibilityLabel="Choose columns"
+        aria-expanded={open}
+        onPress={() => setOpen(!open)}
+        style={styles.toggle}
+      >
+        <SkText variant="smallLabel" tone="ink">
+          {open ? '↑' : '↓'} Columns ({shown.length} of {options.length})
+        </SkText>
+      </Pressable>
+      {open ? (
+        <View style={styles.list} accessibilityLabel="Columns">
+          {options.map((o) => {
+            const on = o.fixed || shown.includes(o.id);
+            return (
+              <Pressable
+                key={o.id}
+                accessibilityRole="checkbox"
+                accessibilityLabel={`Show column ${o.title}`}
+                aria-checked={on}
+                aria-disabled={o.fixed ? true : undefined}
+                disabled={o.fixed}
+                onPress={() => onChange(on ? shown.filter((s) => s !== o.id) : [...shown, o.id])}
+                style={styles.item}
+              >
+                <Text style={[styles.box, on && styles.boxOn]}>{on ? '✓' : ' '}</Text>
+                <SkText variant="caption" tone="ink">
+                  {o.title}
+                  {o.fixed ? ' (always)' : ''}
+                </SkText>
+              </Pressable>
+            );
+          })}
+        </View>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  root: { gap: theme.space(2) },
+  toggle: {
+    minHeight: theme.touch,
+    justifyContent: 'center',
+    paddingHorizontal: theme.space(4),
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    alignSelf: 'flex-start',
+  },
+  list: {
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    gap: theme.space(1),
+    padding: theme.space(2),
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    backgroundColor: theme.color.panel,
+  },
+  item: {
+    minHeight: 44,
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: theme.space(2),
+    paddingHorizontal: theme.space(2),
+    minWidth: 150,
+  },
+  box: {
+    width: 22,
+    height: 22,
+    textAlign: 'center',
+    lineHeight: 20,
+    borderWidth: 1,
+    borderColor: theme.color.inkSoft,
+    borderRadius: 3,
+    fontFamily: theme.font.bold,
+    fontSize: 14,
+    color: theme.color.accentInk,
+  },
+  boxOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
+});

@@ -1,0 +1,67 @@
+import { Link } from 'expo-router';
+import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { theme } from '../../constants/theme';
+import type { FailureView } from '../../shared/failure-view';
+import { describeFailure } from './describe-failure';
+import { DIAGNOSIS_STYLES } from './diagnosis-styles';
+import { FAILURE_COLUMNS, type FailureColumnId } from './failure-columns';
+
+/** The failure table for a wide screen: the chosen columns, each row a link to its case. */
+export function FailureTable({ failures, columns }: { failures: FailureView[]; columns: FailureColumnId[] }) {
+  const shown = FAILURE_COLUMNS.filter((c) => c.fixed || columns.includes(c.id));
+  return (
+    <View style={styles.table} role="table" aria-label="Failures">
+      <View style={[styles.row, styles.head]} role="row">
+        {shown.map((c) => (
+          <Text key={c.id} role="columnheader" style={[styles.headText, { flex: c.flex }]}>
+            {c.title}
+          </Text>
+        ))}
+      </View>
+      {failures.map((f) => (
+        <Link key={f.id} href={`/failures/${f.id}`} asChild>
+          <Pressable
+            accessibilityRole="link"
+            accessibilityLabel={`Failure ${f.id}: ${DIAGNOSIS_STYLES[describeFailure(f).tone].word} in ${f.suiteSlug} on ${f.targetName}, path ${f.pathName}`}
+            style={StyleSheet.flatten(styles.row)}
+            testID={`failure-row-${f.id}`}
+          >
+            {shown.map((c) => (
+              <View key={c.id} role="cell" style={[styles.cell, { flex: c.flex }]}>
+                {c.cell(f)}
+              </View>
+            ))}
+          </Pressable>
+        </Link>
+      ))}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  table: {
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    overflow: 'hidden',
+    backgroundColor: theme.color.panel,
+  },
+  row: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    minHeight: 48,
+    paddingHorizontal: theme.space(3),
+    gap: theme.space(2),
+    borderBottomWidth: 1,
+    borderBottomColor: theme.color.rule,
+  },
+  head: { backgroundColor: theme.color.paper, minHeight: 40 },
+  headText: {
+    fontFamily: theme.font.medium,
+    fontSize: 12,
+    color: theme.color.inkFaint,
+    textTransform: 'uppercase',
+    letterSpacing: 0.6,
+  },
+  cell: { paddingVertical: theme.space(2), minWidth: 0 },
+});

@@ -1,0 +1,88 @@
+import { useState } from 'react';
+import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { formatHexDouble } from '../../harness/web';
+import { theme } from '../../constants/theme';
+import type { FailureView } from '../../shared/failure-view';
+import type { WireComplex } from '../../shared/wire-complex';
+import { parseWireNumber } from '../../shared/parse-wire-number';
+import { SkText } from '../ui/sk-text';
+import { formatComplexText } from '../../shared/format-complex-text';
+
+const hexOf = (c: WireComplex): WireComplex => ({
+  re: formatHexDouble(parseWireNumber(c.re)),
+  im: formatHexDouble(parseWireNumber(c.im)),
+});
+
+/**
+ * The case's numbers: z, the expected and the library's value, and both one-sided limits when
+ * the point lies on a cut, in decimal; the exact bits (C99 hex floats) on demand, since two
+ * decimals can hide a last-bit or zero-sign difference.
+ */
+export function ValueBits({ failure: f }: { failure: FailureView }) {
+  const [bits, setBits] = useState(false);
+  const rows: { name: string; value: WireComplex | null; hex?: WireComplex }[] = [
+    { name: 'z (input)', value: f.z, hex: f.zHex },
+    { name: 'expected', value: f.expected },
+    { name: 'library', value: f.actual },
+    ...(f.limits
+      ? f.limits.sides.map((side, i) => ({ name: `limit ${side}`, value: f.limits!.values[i] ?? null }))
+      : []),
+  ];
+  return (
+    <View style={styles.root}>
+      {rows.map((r) => (
+        <View key={r.name} style={styles.row}>
+          <Text style={styles.name}>{r.name}</Text>
+          <Text style={styles.value} selectable>
+            {formatComplexText(r.value)}
+          </Text>
+          {bits && r.value ? <HexLine hex={r.hex ?? hexOf(r.value)} /> : null}
+        </View>
+      ))}
+      {f.limits ? null : <SkText variant="caption">Not on a cut: there is one limit, the value itself.</SkText>}
+      <Pressable
+        accessibilityRole="button"
+        accessibilityLabel={bits ? 'Hide exact bits' : 'Show exact bits'}
+        aria-expanded={bits}
+        onPress={() => setBits(!bits)}
+        style={styles.toggle}
+      >
+        <SkText variant="smallLabel" tone="ink">
+          {bits ? '↑ Hide exact bits' : '↓ Show exact bits (C hex floats)'}
+        </SkText>
+      </Pressable>
+    </View>
+  );
+}
+
+function HexLine({ hex }: { hex: WireComplex }) {
+  return (
+    <SkText variant="mono" tone="inkSoft" style={styles.hex} selectable>
+      re {hex.re}
+      {'\n'}im {hex.im}
+    </SkText>
+  );
+}
+
+const styles = StyleSheet.create({
+  root: { gap: theme.space(3) },
+  row: { gap: 2, borderBottomWidth: 1, borderBottomColor: theme.color.rule, paddingBottom: theme.space(2) },
+  name: {
+    fontFamily: theme.font.medium,
+    fontSize: 12,
+    color: theme.color.inkFaint,
+    textTransform: 'uppercase',
+    letterSpacing: 0.6,
+  },
+  value: { fontFamily: theme.font.mono, fontSize: 15, color: theme.color.ink },
+  hex: { backgroundColor: theme.color.paper, padding: theme.space(2), borderRadius: 4 },
+  toggle: {
+    minHeight: theme.touch,
+    justifyContent: 'center',
+    paddingHorizontal: theme.space(4),
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    alignSelf: 'flex-start',
+  },
+});

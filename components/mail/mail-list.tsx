@@ -1,0 +1,114 @@
+import { Link } from 'expo-router';
+import { Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
+import { formatDate } from '../../client/format-date';
+import { useOutbox } from '../../client/use-outbox';
+import { theme } from '../../constants/theme';
+import { ActionButton } from '../ui/action-button';
+import { QueryState } from '../ui/query-state';
+import { SkText } from '../ui/sk-text';
+
+/** What the local mail server received, newest first: cards on a phone, rows on a wide screen. */
+export function MailList() {
+  const outbox = useOutbox();
+  const wide = useWindowDimensions().width >= theme.wide;
+  if (outbox.isPending) return <QueryState state="loading" />;
+  if (outbox.isError)
+    return <QueryState state="error" message={outbox.error.message} onRetry={() => void outbox.refetch()} />;
+  const messages = outbox.data.pages.flatMap((p) => p.messages);
+  if (messages.length === 0)
+    return (
+      <QueryState
+        state="empty"
+        message="No mail received yet. Regression mail appears here once a run finds a regression."
+      />
+    );
+
+  return (
+    <View style={styles.list} testID="mail-list">
+      {wide ? (
+        <View style={[styles.row, styles.headRow]}>
+          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.whenCol]}>
+            Received
+          </SkText>
+          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.subjectCol]}>
+            Subject
+          </SkText>
+          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.peopleCol]}>
+            From → to
+          </SkText>
+        </View>
+      ) : null}
+      {messages.map((m) => (
+        <Link key={m.id} href={`/outbox/${m.id}` as never} asChild>
+          <Pressable
+            accessibilityRole="link"
+            accessibilityLabel={`Message ${m.subject || '(no subject)'} to ${m.to.join(', ')}`}
+            style={StyleSheet.flatten(wide ? styles.row : styles.card)}
+          >
+            {wide ? (
+              <>
+                <SkText variant="caption" style={styles.whenCol}>
+                  {formatDate(m.receivedAt)}
+                </SkText>
+                <SkText variant="label" style={styles.subjectCol} numberOfLines={2}>
+                  {m.subject || '(no subject)'}
+                </SkText>
+                <Text style={[styles.people, styles.peopleCol]} numberOfLines={2}>
+                  {m.from} → {m.to.join(', ')}
+                </Text>
+              </>
+            ) : (
+              <>
+                <SkText variant="label">{m.subject || '(no subject)'}</SkText>
+                <Text style={styles.people} numberOfLines={2}>
+                  To {m.to.join(', ')}
+                </Text>
+                <Text style={styles.people} numberOfLines={1}>
+                  From {m.from}
+                </Text>
+                <SkText variant="caption">{formatDate(m.receivedAt)}</SkText>
+              </>
+            )}
+          </Pressable>
+        </Link>
+      ))}
+      {outbox.hasNextPage ? (
+        <ActionButton
+          label="Older messages"
+          tone="quiet"
+          busy={outbox.isFetchingNextPage}
+          onPress={() => void outbox.fetchNextPage()}
+        />
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  list: { gap: theme.space(2) },
+  card: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+    gap: theme.space(1),
+  },
+  row: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: theme.space(3),
+    minHeight: theme.touch,
+    paddingVertical: theme.space(3),
+    paddingHorizontal: theme.space(3),
+    borderBottomWidth: 1,
+    borderBottomColor: theme.color.rule,
+    backgroundColor: theme.color.panel,
+  },
+  headRow: { backgroundColor: 'transparent', minHeight: 0 },
+  head: { textTransform: 'uppercase', letterSpacing: 0.8 },
+  whenCol: { width: 170 },
+  subjectCol: { flex: 3 },
+  peopleCol: { flex: 2 },
+  people: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.inkSoft },
+});

@@ -1,0 +1,160 @@
+import { Link } from 'expo-router';
+import type { ReactNode } from 'react';
+import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { theme } from '../../constants/theme';
+import type { OverviewView, WaitingSuite } from '../../shared/overview-view';
+import type { Role } from '../../shared/roles';
+import { formatWhen } from '../runs/format-when';
+import { SkText } from '../ui/sk-text';
+
+type NeedsMe = OverviewView['needsMe'];
+
+function Row({ href, label, children }: { href: string; label: string; children: ReactNode }) {
+  return (
+    <Link href={href} asChild>
+      <Pressable accessibilityRole="link" accessibilityLabel={label} style={StyleSheet.flatten(styles.row)}>
+        <View style={styles.rowBody}>{children}</View>
+        <SkText variant="body" tone="inkFaint">
+          →
+        </SkText>
+      </Pressable>
+    </Link>
+  );
+}
+
+function Group({
+  title,
+  count,
+  empty,
+  children,
+}: {
+  title: string;
+  count: number;
+  empty: string;
+  children: ReactNode;
+}) {
+  return (
+    <View style={styles.group}>
+      <SkText variant="smallLabel" tone="inkFaint" accessibilityRole="header" style={styles.groupTitle}>
+        {title} <Text style={styles.count}>({count})</Text>
+      </SkText>
+      {count === 0 ? (
+        <SkText variant="caption" style={styles.empty}>
+          ✓ {empty}
+        </SkText>
+      ) : (
+        children
+      )}
+    </View>
+  );
+}
+
+const suiteLine = (s: WaitingSuite) => `${s.title || s.slug} · v${s.version}`;
+
+/**
+ * What waits on the signed-in person: suites to review (reviewers, admins), their own suites
+ * sent back with changes requested, and regressions on the libraries they subscribe to.
+ */
+export function NeedsMePanel({ needsMe, role, now }: { needsMe: NeedsMe; role: Role; now?: number }) {
+  const showSentBack = role === 'contributor' || needsMe.changesRequested.length > 0;
+  const total = (needsMe.reviewQueue?.length ?? 0) + needsMe.changesRequested.length + needsMe.regressions.length;
+  return (
+    <View style={styles.panel} testID="needs-me">
+      <SkText variant="heading" accessibilityRole="header">
+        {total > 0 ? `◊ Waiting for you: ${total}` : '✓ Nothing is waiting for you'}
+      </SkText>
+      {needsMe.reviewQueue ? (
+        <Group title="Suites to review" count={needsMe.reviewQueue.length} empty="No suite is waiting for review.">
+          {needsMe.reviewQueue.map((s) => (
+            <Row
+              key={`${s.slug}-${s.version}`}
+              href={`/review/${encodeURIComponent(s.slug)}`}
+              label={`Review ${s.slug} version ${s.version}`}
+            >
+              <SkText variant="label">{suiteLine(s)}</SkText>
+              <SkText variant="caption">
+                by {s.authorName}, submitted {formatWhen(s.since, now)}
+              </SkText>
+            </Row>
+          ))}
+        </Group>
+      ) : null}
+      {showSentBack ? (
+        <Group
+          title="Your suites sent back"
+          count={needsMe.changesRequested.length}
+          empty="None of your suites needs changes."
+        >
+          {needsMe.changesRequested.map((s) => (
+            <Row
+              key={`${s.slug}-${s.version}`}
+              href={`/suites/${encodeURIComponent(s.slug)}`}
+              label={`Open ${s.slug}, changes requested`}
+            >
+              <SkText variant="label">↺ {suiteLine(s)}</SkText>
+              <SkText variant="caption">
+                changes requested by {s.reviewerName ?? 'a reviewer'}, {formatWhen(s.since, now)}
+              </SkText>
+              {s.reviewComment ? (
+                <SkText variant="caption" tone="ink" style={styles.quote}>
+                  “{s.reviewComment}”
+                </SkText>
+              ) : null}
+            </Row>
+          ))}
+        </Group>
+      ) : null}
+      <Group
+        title="Regressions on your libraries"
+        count={needsMe.regressions.length}
+        empty={
+          needsMe.subscriptions.length
+            ? `No regressions on ${needsMe.subscriptions.join(', ')} in the latest runs.`
+            : 'You subscribe to no library (Settings).'
+        }
+      >
+        {needsMe.regressions.map((r) => (
+          <Row
+            key={`${r.runId}-${r.targetKey}`}
+            href={`/failures?${new URLSearchParams({ run: r.runId, status: 'new' }).toString()}`}
+            label={`${r.count} regressions on ${r.targetKey} in ${r.planName}`}
+          >
+            <SkText variant="label" style={styles.danger}>
+              ❌ {r.count} regression{r.count === 1 ? '' : 's'} on {r.targetKey}
+            </SkText>
+            <SkText variant="caption">
+              {r.planName}, finished {formatWhen(r.finishedAt, now)}
+            </SkText>
+          </Row>
+        ))}
+      </Group>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  panel: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+    gap: theme.space(4),
+  },
+  group: { gap: theme.space(1) },
+  groupTitle: { textTransform: 'uppercase', letterSpacing: 0.8 },
+  count: { fontFamily: theme.font.mono },
+  empty: { paddingVertical: theme.space(1) },
+  row: {
+    minHeight: 56,
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: theme.space(3),
+    paddingVertical: theme.space(2),
+    borderBottomWidth: 1,
+    borderBottomColor: theme.color.rule,
+  },
+  rowBody: { flex: 1, gap: 2 },
+  quote: { fontStyle: 'italic' },
+  danger: { color: theme.color.danger },
+});

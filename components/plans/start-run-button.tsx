@@ -1,0 +1,47 @@
+import { useRouter } from 'expo-router';
+import { StyleSheet, View } from 'react-native';
+import { ApiRequestError } from '../../client/api-request-error';
+import { useStartRun } from '../../client/use-start-run';
+import { theme } from '../../constants/theme';
+import { ActionButton } from '../ui/action-button';
+import { SkText } from '../ui/sk-text';
+
+/** "Run now" for a plan: queues a run and opens it; a refusal shows beside the button. */
+export function StartRunButton({
+  planId,
+  planName,
+  tone = 'primary',
+}: {
+  planId: string;
+  planName: string;
+  tone?: 'primary' | 'quiet';
+}) {
+  const router = useRouter();
+  const start = useStartRun();
+  const failure =
+    start.error instanceof ApiRequestError
+      ? start.error.body.message
+      : start.error
+        ? 'The server could not be reached; no run was started.'
+        : null;
+  return (
+    <View style={styles.box}>
+      <ActionButton
+        label="↻ Run now"
+        accessibilityLabel={`Run ${planName} now`}
+        tone={tone}
+        busy={start.isPending}
+        onPress={() => start.mutate(planId, { onSuccess: (run) => router.push(`/runs/${run.id}` as never) })}
+      />
+      {failure ? (
+        <SkText variant="caption" tone="danger" accessibilityRole="alert">
+          ❌ {failure}
+        </SkText>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  box: { gap: theme.space(2) },
+});

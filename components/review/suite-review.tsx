@@ -1,0 +1,100 @@
+import { router } from 'expo-router';
+import { StyleSheet, useWindowDimensions, View } from 'react-native';
+import { useMe } from '../../client/use-me';
+import { useSuite } from '../../client/use-suite';
+import { theme } from '../../constants/theme';
+import { SkText } from '../ui/sk-text';
+import { TitledPanel } from '../ui/titled-panel';
+import { QueryState } from '../ui/query-state';
+import { ReviewForm } from './review-form';
+import { SuiteDiff } from './suite-diff';
+import { SuiteFacts } from '../suites/suite-facts';
+import { SuitePreview } from '../suites/suite-preview';
+import { SuiteStatusLabel } from '../suites/suite-status-label';
+
+/** Reviewing one submitted version: what it changes against the previous version, its picture, what it checks, and the decision. */
+export function SuiteReview({ slug }: { slug: string }) {
+  const suite = useSuite(slug);
+  const { data: me } = useMe();
+  const wide = useWindowDimensions().width >= theme.wide;
+  if (!me) return null;
+  if (me.role !== 'reviewer' && me.role !== 'admin')
+    return <QueryState state="error" message="Only reviewers and admins review suites." />;
+  if (suite.isPending) return <QueryState state="loading" />;
+  if (suite.isError)
+    return <QueryState state="error" message={suite.error.message} onRetry={() => void suite.refetch()} />;
+  const current = suite.data.find((v) => v.status === 'submitted');
+  if (!current) return <QueryState state="empty" message={`No version of ${slug} waits for review.`} />;
+  const previous = suite.data.find((v) => v.version === current.version - 1) ?? null;
+  const own = current.author.id === me.id;
+
+  const decision = (
+    <TitledPanel title="Decision">
+      {own ? (
+        <SkText variant="caption" tone="ink" style={styles.own}>
+          ◊ You wrote this version. Four eyes: another reviewer must review it, and the server will refuse your review.
+        </SkText>
+      ) : null}
+      <ReviewForm slug={slug} version={current.version} onReviewed={() => router.replace('/review')} />
+    </TitledPanel>
+  );
+  const changes = (
+    <TitledPanel title="What changed">
+      <SuiteDiff current={current} previous={previous} />
+    </TitledPanel>
+  );
+  const picture = (
+    <TitledPanel title="Plane picture">
+      <SuitePreview
+        body={current.body}
+        label={`Plane picture of ${current.body.title}`}
+        testID="review-picture"
+        height={wide ? 360 : 280}
+      />
+    </TitledPanel>
+  );
+  const facts = (
+    <TitledPanel title="What this version checks">
+      <SuiteFacts suite={current.body} />
+    </TitledPanel>
+  );
+  return (
+    <View style={styles.column}>
+      <View style={styles.head}>
+        <SuiteStatusLabel status={current.status} version={current.version} />
+        <SkText variant="caption">
+          {slug} · written by {current.author.displayName}
+        </SkText>
+      </View>
+      {wide ? (
+        <View style={styles.wide}>
+          <View style={styles.mainCol}>
+            {changes}
+            {picture}
+          </View>
+          <View style={styles.sideCol}>
+            {decision}
+            {facts}
+          </View>
+        </View>
+      ) : (
+        // On a phone the decision follows the changes, one thumb-scroll from what it decides on.
+        <>
+          {changes}
+          {decision}
+          {picture}
+          {facts}
+        </>
+      )}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  column: { gap: theme.space(4) },
+  wide: { flexDirection: 'row', gap: theme.space(4), alignItems: 'flex-start' },
+  mainCol: { flex: 3, minWidth: 0, gap: theme.space(4) },
+  sideCol: { flex: 2, minWidth: 0, gap: theme.space(4) },
+  head: { flexDirection: 'row', alignItems: 'center', gap: theme.space(3), flexWrap: 'wrap' },
+  own: { backgroundColor: '#F5E7C8', padding: theme.space(2), borderRadius: theme.radius },
+});

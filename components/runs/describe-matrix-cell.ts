@@ -1,0 +1,107 @@
+import type { DiagnosisKind } from '../../shared/diagnosis';
+import { DIAGNOSIS_KINDS } from '../../shared/diagnosis-kinds';
+import type { RunMatrixCell } from '../../shared/run-matrix-cell';
+import { OUTCOME_GLYPH } from './outcome-glyph';
+import type { Tone } from './outcome-tone';
+
+export interface MatrixCellWords {
+  tone: Tone;
+  /** The first line, glyph first: "✓ 120", "❌ 3 · 2 other-sheet", "◊ error". */
+  headline: string;
+  /** Further lines: other diagnoses, passes beside failures, skips, "nothing was checked", the first error. */
+  details: string[];
+  /** Everything above as one sentence for a screen reader. */
+  label: string;
+  /** Whether the failure table has rows for this cell (fails, errors or skips). */
+  hasRows: boolean;
+}
+
+const n = (x: number) => x.toLocaleString('en-GB');
+
+/**
+ * A matrix cell in words and glyphs, so it reads without its colour: the outcome and its counts,
+ * the failures by diagnosis (largest first), and for an error whether anything was checked at all.
+ */
+export function describeMatrixCell(cell: RunMatrixCell): MatrixCellWords {
+  const pair = `${cell.suite} on ${cell.target}`;
+  if (cell.status === 'queued' || cell.status === 'running') {
+    const word = cell.status === 'queued' ? 'queued' : 'running';
+    return {
+      tone: 'live',
+      headline: `${cell.status === 'queued' ? '…' : '↻'} ${word}`,
+      details: [],
+      label: `${pair}: ${word}`,
+      hasRows: false,
+    };
+  }
+  const counts = cell.counts ?? { pass: 0, fail: 0, error: 0, skipped: 0 };
+  const judged = counts.pass + counts.fail;
+  const hasRows = counts.fail + counts.error + counts.skipped > 0;
+  if (cell.status === 'cancelled' && !cell.counts) {
+    return {
+      tone: 'neutral',
+      headline: '× cancelled',
+      details: ['nothing was checked'],
+      label: `${pair}: cancelled before it ran, nothing was checked`,
+      hasRows: false,
+    };
+  }
+  const diagnoses = DIAGNOSIS_KINDS.map((kind) => [kind, cell.byDiagnosis?.[kind] ?? 0] as [DiagnosisKind, number])
+    .filter(([, count]) => count > 0)
+    .sort((a, b) => b[1] - a[1]);
+  const details: string[] = [];
+  const said: string[] = [];
+  let headline: string;
+  let tone: Tone;
+  if (cell.outcome === 'error' || (cell.status === 'done' && judged === 0)) {
+    tone = 'error';
+    headline =
+      counts.error > 0
+        ? `${OUTCOME_GLYPH.error} ${n(counts.error)} error${counts.error === 1 ? '' : 's'}`
+        : `${OUTCOME_GLYPH.error} error`;
+    said.push(counts.error > 0 ? `${n(counts.error)} points in error` : 'error');
+    if (judged === 0) {
+      // The shard's own error may say it already ("nothing was checked: every point was skipped …").
+      if (!cell.errors[0]?.toLowerCase().startsWith('nothing was checked')) details.push('nothing was checked');
+      said.push('nothing was checked');
+    } else {
+      details.push(
+        `${OUTCOME_GLYPH.pass} ${n(counts.pass)} passed${counts.fail ? ` · ${OUTCOME_GLYPH.fail} ${n(counts.fail)} failed` : ''}`,
+      );
+      said.push(`${n(counts.pass)} passed`, ...(counts.fail ? [`${n(counts.fail)} failed`] : []));
+    }
+  } else if (counts.fail > 0) {
+    tone = 'fail';
+    const [top, ...rest] = diagnoses;
+    headline = `${OUTCOME_GLYPH.fail} ${n(counts.fail)}${top ? ` · ${n(top[1])} ${top[0]}` : ''}`;
+    said.push(`${n(counts.fail)} failed`, ...diagnoses.map(([kind, count]) => `${n(count)} ${kind}`));
+    for (const [kind, count] of rest) details.push(`${n(count)} ${kind}`);
+    details.push(`${OUTCOME_GLYPH.pass} ${n(counts.pass)} passed`);
+    said.push(`${n(counts.pass)} passed`);
+    if (counts.error > 0) {
+      details.push(`${OUTCOME_GLYPH.error} ${n(counts.error)} error`);
+      said.push(`${n(counts.error)} in error`);
+    }
+  } else {
+    tone = cell.status === 'cancelled' ? 'neutral' : 'pass';
+    headline = `${OUTCOME_GLYPH.pass} ${n(counts.pass)}`;
+    said.push(`${n(counts.pass)} passed, none failed`);
+    if (cell.status === 'cancelled') {
+      details.push('× cancelled part way');
+      said.push('cancelled part way');
+    }
+  }
+  if (counts.skipped > 0) {
+    details.push(`${OUTCOME_GLYPH.skipped} ${n(counts.skipped)} skipped`);
+    said.push(`${n(counts.skipped)} skipped`);
+  }
+  const firstError = cell.errors[0];
+  if (firstError) details.push(firstError);
+  return {
+    tone,
+    headline,
+    details,
+    label: `${pair}: ${said.join(', ')}${firstError ? `. ${firstError}` : ''}`,
+    hasRows,
+  };
+}

@@ -1,0 +1,62 @@
+import { Link } from 'expo-router';
+import { Pressable, StyleSheet, View } from 'react-native';
+import { isLiveRun } from '../../client/is-live-run';
+import { theme } from '../../constants/theme';
+import type { RunView } from '../../shared/run-view';
+import { SkText } from '../ui/sk-text';
+import { formatWhen } from './format-when';
+import { OutcomeCounts } from './outcome-counts';
+import { ProgressBar } from './progress-bar';
+import { runDuration } from './run-duration';
+import { RunStatusBadge } from './run-status-badge';
+import { runVerdict } from './run-verdict';
+import { triggerWords } from './trigger-words';
+
+/** One run as a card (phones, and the Overview): plan, status, who and when, counts; progress while live. Opens the run. */
+export function RunCard({ run, now }: { run: RunView; now?: number }) {
+  const live = isLiveRun(run);
+  return (
+    <Link href={`/runs/${run.id}`} asChild>
+      <Pressable
+        accessibilityRole="link"
+        accessibilityLabel={`Run of ${run.planName}, ${runVerdict(run).word}, ${formatWhen(run.createdAt, now)}`}
+        style={StyleSheet.flatten(styles.card)}
+        testID={`run-${run.id}`}
+      >
+        <View style={styles.head}>
+          <SkText variant="label" style={styles.plan} numberOfLines={2}>
+            {run.planName}
+          </SkText>
+          <SkText variant="body" tone="inkFaint">
+            →
+          </SkText>
+        </View>
+        <RunStatusBadge run={run} />
+        <SkText variant="caption">
+          {triggerWords(run.trigger, run.requestedBy)} · {formatWhen(run.createdAt, now)} · {runDuration(run, now)}
+        </SkText>
+        {live ? <ProgressBar done={run.shardsDone} total={run.shardsTotal} /> : null}
+        <OutcomeCounts counts={run.counts} compact />
+        {run.regressions ? (
+          <SkText variant="smallLabel" tone="danger">
+            ↓ {run.regressions} regression{run.regressions === 1 ? '' : 's'} since the previous run
+          </SkText>
+        ) : null}
+      </Pressable>
+    </Link>
+  );
+}
+
+const styles = StyleSheet.create({
+  card: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+    gap: theme.space(2),
+    minHeight: theme.touch,
+  },
+  head: { flexDirection: 'row', alignItems: 'flex-start', gap: theme.space(2) },
+  plan: { flex: 1 },
+});

@@ -1,0 +1,122 @@
+import { Link } from 'expo-router';
+import { Pressable, StyleSheet } from 'react-native';
+import { ApiRequestError } from '../../client/api-request-error';
+import { isLiveRun } from '../../client/is-live-run';
+import { useMe } from '../../client/use-me';
+import { useRun } from '../../client/use-run';
+import { useRunMatrix } from '../../client/use-run-matrix';
+import { useRunProperties } from '../../client/use-run-properties';
+import { theme } from '../../constants/theme';
+import type { CheckedScope } from '../../shared/run-result';
+import { SkText } from '../ui/sk-text';
+import { CheckedScopeNote } from './checked-scope-note';
+import { PropertyChecks } from './property-checks';
+import { QueryState } from '../ui/query-state';
+import { RunHeader } from './run-header';
+import { RunMatrix } from './run-matrix';
+import { ScreenBody } from '../ui/screen-body';
+
+/** One run: its header and progress, what it checked, its suite × target matrix and its property checks; live while it runs. */
+export function RunDetail({ id }: { id: string }) {
+  const run = useRun(id);
+  const { data: me } = useMe();
+  const live = run.data ? isLiveRun(run.data) : false;
+  const matrix = useRunMatrix(id, live);
+  const properties = useRunProperties(id, live);
+
+  if (run.isPending) {
+    return (
+      <ScreenBody title="Run">
+        <QueryState state="loading" />
+      </ScreenBody>
+    );
+  }
+  if (run.isError) {
+    const missing = run.error instanceof ApiRequestError && (run.error.status === 404 || run.error.status === 400);
+    return (
+      <ScreenBody title="Run">
+        <BackLink />
+        <QueryState
+          state="error"
+          message={missing ? 'There is no run at this address.' : run.error.message}
+          onRetry={missing ? undefined : () => void run.refetch()}
+        />
+      </ScreenBody>
+    );
+  }
+
+  const cells = matrix.data ?? [];
+  const scopes = cells.map((c) => c.checked).filter((s): s is CheckedScope => s !== null && s.points > 0);
+  const notChecked = cells.length - scopes.length;
+  const outcomes = properties.data?.map((p) => p.outcome.kind) ?? [];
+  const propertySummary = properties.data
+    ? {
+        held: outcomes.filter((k) => k === 'held').length,
+        failed: outcomes.filter((k) => k === 'failed').length,
+        notChecked: outcomes.filter((k) => k === 'not-checked').length,
+      }
+    : undefined;
+
+  return (
+    <ScreenBody
+      title={run.data.planName}
+      lead={`Run ${id.slice(0, 8)} of this plan: each suite × target pair is one shard.`}
+    >
+      <BackLink />
+      <RunHeader run={run.data} canCancel={me?.role === 'maintainer' || me?.role === 'admin'} />
+      {matrix.data ? (
+        <CheckedScopeNote scopes={scopes} pairsNotChecked={notChecked} properties={propertySummary} subject="matrix" />
+      ) : null}
+
+      <SkText variant="heading" accessibilityRole="header" style={styles.section}>
+        Matrix: suite × target
+      </SkText>
+      {matrix.isPending ? (
+        <QueryState state="loading" />
+      ) : matrix.isError ? (
+        <QueryState state="error" message={matrix.error.message} onRetry={() => void matrix.refetch()} />
+      ) : cells.length === 0 ? (
+        <QueryState state="empty" message="This run has no suite × target pairs." />
+      ) : (
+        <RunMatrix runId={id} cells={cells} />
+      )}
+
+      <SkText variant="heading" accessibilityRole="header" style={styles.section}>
+        Property checks
+      </SkText>
+      {properties.isPending ? (
+        <QueryState state="loading" />
+      ) : properties.isError ? (
+        <QueryState state="error" message={properties.error.message} onRetry={() => void properties.refetch()} />
+      ) : properties.data.length === 0 ? (
+        <QueryState
+          state="empty"
+          message={
+            live
+              ? 'No property check has finished yet.'
+              : 'No property checks in this run: its suites list none, or no pair got that far.'
+          }
+        />
+      ) : (
+        <PropertyChecks rows={properties.data} />
+      )}
+    </ScreenBody>
+  );
+}
+
+function BackLink() {
+  return (
+    <Link href="/runs" asChild>
+      <Pressable accessibilityRole="link" accessibilityLabel="All runs" style={StyleSheet.flatten(styles.back)}>
+        <SkText variant="label" tone="accent">
+          ← All runs
+        </SkText>
+      </Pressable>
+    </Link>
+  );
+}
+
+const styles = StyleSheet.create({
+  back: { alignSelf: 'flex-start', minHeight: 44, justifyContent: 'center' },
+  section: { marginTop: theme.space(2) },
+});

@@ -1,0 +1,105 @@
+import { Link } from 'expo-router';
+import { Pressable, StyleSheet, View } from 'react-native';
+import { isLiveRun } from '../../client/is-live-run';
+import { theme } from '../../constants/theme';
+import type { RunView } from '../../shared/run-view';
+import { SkText } from '../ui/sk-text';
+import { formatWhen } from './format-when';
+import { OutcomeCounts } from './outcome-counts';
+import { ProgressBar } from './progress-bar';
+import { runDuration } from './run-duration';
+import { RunStatusBadge } from './run-status-badge';
+import { runVerdict } from './run-verdict';
+import { triggerWords } from './trigger-words';
+
+/** Runs as table rows on a wide screen; each row opens its run. */
+export function RunsTable({ runs, now }: { runs: RunView[]; now?: number }) {
+  return (
+    <View style={styles.table} role="table" aria-label="Runs">
+      <View style={[styles.row, styles.headRow]} role="row">
+        <SkText variant="smallLabel" tone="inkFaint" role="columnheader" style={[styles.head, styles.status]}>
+          Status
+        </SkText>
+        <SkText variant="smallLabel" tone="inkFaint" role="columnheader" style={[styles.head, styles.plan]}>
+          Plan
+        </SkText>
+        <SkText variant="smallLabel" tone="inkFaint" role="columnheader" style={[styles.head, styles.who]}>
+          Started
+        </SkText>
+        <SkText variant="smallLabel" tone="inkFaint" role="columnheader" style={[styles.head, styles.duration]}>
+          Duration
+        </SkText>
+        <SkText variant="smallLabel" tone="inkFaint" role="columnheader" style={[styles.head, styles.counts]}>
+          Points
+        </SkText>
+      </View>
+      {runs.map((run) => (
+        <Link key={run.id} href={`/runs/${run.id}`} asChild>
+          <Pressable
+            role="row"
+            accessibilityRole="link"
+            accessibilityLabel={`Run of ${run.planName}, ${runVerdict(run).word}, ${formatWhen(run.createdAt, now)}`}
+            testID={`run-${run.id}`}
+            // Link's asChild merges styles as objects: a flat one (an array breaks on web).
+            style={StyleSheet.flatten([styles.row, styles.bodyRow])}
+          >
+            <View style={styles.status}>
+              <RunStatusBadge run={run} />
+            </View>
+            <View style={styles.plan}>
+              <SkText variant="label" numberOfLines={2}>
+                {run.planName}
+              </SkText>
+              {run.regressions ? (
+                <SkText variant="smallLabel" tone="danger">
+                  ↓ {run.regressions} regression{run.regressions === 1 ? '' : 's'}
+                </SkText>
+              ) : null}
+            </View>
+            <View style={styles.who}>
+              <SkText variant="caption" tone="ink">
+                {formatWhen(run.createdAt, now)}
+              </SkText>
+              <SkText variant="caption">{triggerWords(run.trigger, run.requestedBy)}</SkText>
+            </View>
+            <SkText variant="caption" tone="ink" style={styles.duration}>
+              {runDuration(run, now)}
+            </SkText>
+            <View style={[styles.counts, styles.countsCell]}>
+              {isLiveRun(run) ? <ProgressBar done={run.shardsDone} total={run.shardsTotal} /> : null}
+              <OutcomeCounts counts={run.counts} compact />
+            </View>
+          </Pressable>
+        </Link>
+      ))}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  table: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    overflow: 'hidden',
+  },
+  row: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: theme.space(3),
+    paddingHorizontal: theme.space(4),
+    paddingVertical: theme.space(3),
+    borderBottomWidth: 1,
+    borderBottomColor: theme.color.rule,
+  },
+  headRow: { backgroundColor: theme.color.paper, paddingVertical: theme.space(2) },
+  bodyRow: { minHeight: 64 },
+  head: { textTransform: 'uppercase', letterSpacing: 0.8 },
+  status: { width: 220 },
+  plan: { flex: 2, gap: 2 },
+  who: { flex: 2, gap: 2 },
+  duration: { width: 110 },
+  counts: { flex: 3 },
+  countsCell: { gap: theme.space(1) },
+});

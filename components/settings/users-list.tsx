@@ -1,0 +1,135 @@
+import { Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
+import { ApiRequestError } from '../../client/api-request-error';
+import { useChangeRole } from '../../client/use-change-role';
+import { useUsers } from '../../client/use-users';
+import { theme } from '../../constants/theme';
+import { ROLES, type Role } from '../../shared/roles';
+import type { PublicUser } from '../../shared/public-user';
+import { QueryState } from '../ui/query-state';
+import { SkText } from '../ui/sk-text';
+
+/** Admin list of users: cards on a phone, rows on a wide screen; the role is changed in place. */
+export function UsersList({ me }: { me: PublicUser }) {
+  const users = useUsers();
+  const changeRole = useChangeRole();
+  const wide = useWindowDimensions().width >= theme.wide;
+
+  if (users.isPending) return <QueryState state="loading" />;
+  if (users.isError)
+    return <QueryState state="error" message={users.error.message} onRetry={() => void users.refetch()} />;
+  if (users.data.length === 0) return <QueryState state="empty" message="No users yet." />;
+
+  const failure =
+    changeRole.error instanceof ApiRequestError ? changeRole.error.body.message : changeRole.error?.message;
+
+  return (
+    <View style={styles.list}>
+      {failure ? (
+        <Text accessibilityRole="alert" style={styles.failure}>
+          × {failure}
+        </Text>
+      ) : null}
+      {wide ? (
+        <View style={[styles.row, styles.headRow]}>
+          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.nameCol]}>
+            Name
+          </SkText>
+          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.emailCol]}>
+            E-mail
+          </SkText>
+          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.roleCol]}>
+            Role
+          </SkText>
+        </View>
+      ) : null}
+      {users.data.map((user) => (
+        <View key={user.id} style={wide ? styles.row : styles.card} testID={`user-${user.email}`}>
+          <View style={wide ? styles.nameCol : undefined}>
+            <SkText variant="label">
+              {user.displayName}
+              {user.id === me.id ? ' (you)' : ''}
+            </SkText>
+            {wide ? null : (
+              <SkText variant="mono" tone="inkSoft">
+                {user.email}
+              </SkText>
+            )}
+          </View>
+          {wide ? (
+            <SkText variant="mono" tone="inkSoft" style={styles.emailCol}>
+              {user.email}
+            </SkText>
+          ) : null}
+          <View style={[styles.roleCol, styles.roleCell]}>
+            <View
+              style={styles.chips}
+              accessibilityRole="radiogroup"
+              accessibilityLabel={`Role of ${user.displayName}`}
+            >
+              {ROLES.map((role: Role) => (
+                <Pressable
+                  key={role}
+                  accessibilityRole="radio"
+                  accessibilityLabel={`Make ${user.displayName} ${role}`}
+                  aria-checked={user.role === role}
+                  onPress={() => user.role !== role && changeRole.mutate({ id: user.id, role })}
+                  style={[styles.chip, user.role === role && styles.chipOn]}
+                >
+                  <SkText variant="caption" tone="ink" style={user.role === role && styles.chipTextOn}>
+                    {user.role === role ? '✓ ' : ''}
+                    {role}
+                  </SkText>
+                </Pressable>
+              ))}
+            </View>
+          </View>
+        </View>
+      ))}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  list: { gap: theme.space(2) },
+  failure: {
+    fontFamily: theme.font.medium,
+    color: theme.color.danger,
+    backgroundColor: theme.color.dangerSoft,
+    padding: theme.space(3),
+    borderRadius: theme.radius,
+  },
+  card: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+    gap: theme.space(3),
+  },
+  row: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    paddingVertical: theme.space(3),
+    paddingHorizontal: theme.space(3),
+    borderBottomWidth: 1,
+    borderBottomColor: theme.color.rule,
+    backgroundColor: theme.color.panel,
+  },
+  headRow: { backgroundColor: 'transparent' },
+  head: { textTransform: 'uppercase', letterSpacing: 0.8 },
+  nameCol: { flex: 2 },
+  emailCol: { flex: 3 },
+  roleCol: { flex: 5 },
+  roleCell: { gap: theme.space(2) },
+  chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
+  chip: {
+    minHeight: 44,
+    justifyContent: 'center',
+    paddingHorizontal: theme.space(3),
+    borderRadius: theme.radius,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+  },
+  chipOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
+  chipTextOn: { color: theme.color.accentInk, fontFamily: theme.font.medium },
+});

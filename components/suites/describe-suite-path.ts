@@ -1,0 +1,20 @@
+import type { SuitePath } from '../../shared/schemas/suite-path-schema';
+import { formatComplexText } from '../../shared/format-complex-text';
+
+/** A path in one line of words, e.g. "circle around 0 + 0i, radius 2, from angle 0, 1 turn ↺, 65 samples". */
+export function describeSuitePath(p: SuitePath): string {
+  const sampled = (s: { samples?: number; at?: string[] }) =>
+    s.at ? `at t = ${s.at.join(', ')}` : `${s.samples} samples`;
+  switch (p.kind) {
+    case 'circle':
+      return `circle around ${formatComplexText(p.center)}, radius ${p.radius}, from angle ${p.start_angle}, ${p.turns} ${p.turns === '1' ? 'turn' : 'turns'} ${p.direction === 'ccw' ? '↺ counter-clockwise' : '↻ clockwise'}, ${sampled(p)}`;
+    case 'segment':
+      return `segment from ${formatComplexText(p.from)} to ${formatComplexText(p.to)}, ${sampled(p)}`;
+    case 'polyline':
+      return `polyline through ${p.points.map((z) => formatComplexText(z)).join(' → ')}, ${sampled(p)}`;
+    case 'straddle':
+      return `straddles the ${p.cut.kind === 'segment' ? `segment ${formatComplexText(p.cut.from)} to ${formatComplexText(p.cut.to)}` : `ray from ${formatComplexText(p.cut.from)} through ${formatComplexText(p.cut.through)}`} at ${p.along.join(', ')}, offsets ${p.offsets.join(', ')} on both sides and ±0 on it`;
+    case 'grid':
+      return `grid ${p.columns} × ${p.rows} from ${formatComplexText(p.min)} to ${formatComplexText(p.max)}`;
+  }
+}

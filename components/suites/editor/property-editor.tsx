@@ -1,0 +1,142 @@
+import { StyleSheet, View } from 'react-native';
+import { theme } from '../../../constants/theme';
+import { PROPERTY_LAWS } from '../../../shared/schemas/property-check-schema';
+import { ChipGroup } from '../../ui/chip-group';
+import { SkText } from '../../ui/sk-text';
+import { ComplexInput } from './complex-input';
+import { complexRules } from './complex-rules';
+import type { FieldRules } from './field-rules';
+import { FormTextInput } from '../../ui/form-text-input';
+import { RuleLines } from '../../ui/rule-lines';
+import { SmallButton } from '../../ui/small-button';
+import type { PropertyDraft } from './suite-draft';
+
+/** One property check: a law, the region its random points come from, runs and a pinned seed. */
+export function PropertyEditor({
+  value,
+  index,
+  onChange,
+  onRemove,
+  rules,
+}: {
+  value: PropertyDraft;
+  index: number;
+  onChange: (p: PropertyDraft) => void;
+  onRemove: () => void;
+  rules: FieldRules;
+}) {
+  const f = `properties.${index}`;
+  const n = `Property ${index + 1}`;
+  const set = (patch: Partial<PropertyDraft>) => onChange({ ...value, ...patch });
+  return (
+    <View style={styles.box} accessibilityLabel={n}>
+      <View style={styles.head}>
+        <SkText variant="label">{n}</SkText>
+        <SmallButton
+          label="Remove check"
+          accessibilityLabel={`Remove property ${index + 1}`}
+          onPress={onRemove}
+          danger
+        />
+      </View>
+      <RuleLines rules={rules(f).map((r) => `${n} ${r}`)} />
+      <ChipGroup
+        label={`${n} law`}
+        options={PROPERTY_LAWS.map((law) => ({ value: law, text: law }))}
+        value={value.law}
+        onChange={(law) => set({ law })}
+      />
+      <RuleLines rules={rules(`${f}.law`)} />
+      <ChipGroup
+        label={`${n} region`}
+        options={[
+          { value: 'near-cuts', text: 'near the cuts' },
+          { value: 'disc', text: 'a disc' },
+          { value: 'box', text: 'a box' },
+        ]}
+        value={value.region}
+        onChange={(region) => set({ region })}
+      />
+      <View style={styles.row}>
+        {value.region === 'disc' ? (
+          <>
+            <ComplexInput
+              label={`${n} disc center`}
+              value={value.center}
+              onChange={(center) => set({ center })}
+              rules={complexRules(rules, `${f}.region.center`)}
+            />
+            <FormTextInput
+              label={`${n} disc radius`}
+              visibleLabel="Radius"
+              value={value.radius}
+              onChangeText={(radius) => set({ radius })}
+              rules={rules(`${f}.region.radius`)}
+              mono
+            />
+          </>
+        ) : null}
+        {value.region === 'box' ? (
+          <>
+            <ComplexInput
+              label={`${n} box corner min`}
+              value={value.min}
+              onChange={(min) => set({ min })}
+              rules={complexRules(rules, `${f}.region.min`)}
+            />
+            <ComplexInput
+              label={`${n} box corner max`}
+              value={value.max}
+              onChange={(max) => set({ max })}
+              rules={complexRules(rules, `${f}.region.max`)}
+            />
+          </>
+        ) : null}
+        {value.region === 'near-cuts' ? (
+          <FormTextInput
+            label={`${n} distance from the cuts`}
+            visibleLabel="Within distance"
+            value={value.distance}
+            onChangeText={(distance) => set({ distance })}
+            rules={rules(`${f}.region.distance`)}
+            mono
+          />
+        ) : null}
+      </View>
+      <View style={styles.row}>
+        {value.law === 'root-power' ? (
+          <FormTextInput
+            label={`${n} power`}
+            visibleLabel="Power n"
+            value={value.power}
+            onChangeText={(power) => set({ power })}
+            rules={rules(`${f}.power`)}
+            mono
+          />
+        ) : null}
+        <FormTextInput
+          label={`${n} runs`}
+          visibleLabel="Runs"
+          value={value.runs}
+          onChangeText={(runs) => set({ runs })}
+          rules={rules(`${f}.runs`)}
+          mono
+        />
+        <FormTextInput
+          label={`${n} seed`}
+          visibleLabel="Seed"
+          value={value.seed}
+          onChangeText={(seed) => set({ seed })}
+          rules={rules(`${f}.seed`)}
+          mono
+        />
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  box: { gap: theme.space(3), borderTopWidth: 1, borderTopColor: theme.color.rule, paddingTop: theme.space(3) },
+  head: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between' },
+  row: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
+});

@@ -1,0 +1,54 @@
+import { Link } from 'expo-router';
+import { Pressable, StyleSheet, View } from 'react-native';
+import { theme } from '../../constants/theme';
+import type { SuiteSummary } from '../../shared/suite-summary';
+import { SkText } from '../ui/sk-text';
+import { SuiteStatusLabel } from './suite-status-label';
+
+/** One suite in the list: title, subject, its latest version's status, and which version plans use. */
+export function SuiteCard({ suite, href }: { suite: SuiteSummary; href?: string }) {
+  const inUse =
+    suite.approvedVersion === null
+      ? 'no approved version: plans do not use it yet'
+      : `plans use v${suite.approvedVersion}`;
+  return (
+    <Link href={href ?? `/suites/${suite.slug}`} asChild>
+      <Pressable
+        accessibilityRole="link"
+        accessibilityLabel={`${suite.title}, version ${suite.latestVersion} ${suite.latestStatus.replace('-', ' ')}`}
+        style={StyleSheet.flatten(styles.card)}
+        testID={`suite-${suite.slug}`}
+      >
+        <View style={styles.head}>
+          <SuiteStatusLabel status={suite.latestStatus} version={suite.latestVersion} />
+          <SkText variant="caption" tone="inkFaint">
+            {inUse}
+          </SkText>
+        </View>
+        <SkText variant="label">{suite.title}</SkText>
+        <SkText variant="mono" tone="inkSoft" numberOfLines={2}>
+          {suite.subject}
+        </SkText>
+        <SkText variant="caption" tone="inkFaint" numberOfLines={1}>
+          {suite.slug} · {suite.authorName} ·{' '}
+          {new Date(suite.updatedAt).toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' })}
+        </SkText>
+      </Pressable>
+    </Link>
+  );
+}
+
+const styles = StyleSheet.create({
+  card: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+    gap: theme.space(2),
+    minHeight: theme.touch,
+    flexGrow: 1,
+    flexBasis: 320,
+  },
+  head: { flexDirection: 'row', alignItems: 'center', gap: theme.space(2), flexWrap: 'wrap' },
+});

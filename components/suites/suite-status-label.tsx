@@ -1,0 +1,30 @@
+import { theme } from '../../constants/theme';
+import type { SuiteStatus } from '../../shared/suite-status';
+import { TagPill } from '../ui/tag-pill';
+
+/** Each status has a word and a glyph of its own, so the label reads without its colour. */
+const SUITE_STATUS_LOOK: Record<SuiteStatus, { word: string; glyph: string; color: string; background: string }> = {
+  draft: { word: 'draft', glyph: '◊', color: theme.color.inkSoft, background: '#ECE7DC' },
+  submitted: { word: 'submitted', glyph: '↗', color: '#7A5310', background: '#F5E7C8' },
+  approved: { word: 'approved', glyph: '✓', color: theme.color.accent, background: theme.color.accentSoft },
+  'changes-requested': {
+    word: 'changes requested',
+    glyph: '↺',
+    color: theme.color.danger,
+    background: theme.color.dangerSoft,
+  },
+  retired: { word: 'retired', glyph: '−', color: theme.color.inkFaint, background: '#E9E6E0' },
+};
+
+export function SuiteStatusLabel({ status, version }: { status: SuiteStatus; version?: number }) {
+  const look = SUITE_STATUS_LOOK[status];
+  const text = `${look.glyph} ${version !== undefined ? `v${version} ` : ''}${look.word}`;
+  return (
+    <TagPill
+      text={text}
+      ink={look.color}
+      soft={look.background}
+      accessibilityLabel={`${version !== undefined ? `version ${version} ` : ''}${look.word}`}
+    />
+  );
+}

@@ -1,0 +1,21 @@
+import { StyleSheet, View } from 'react-native';
+import { SkText } from './sk-text';
+
+/** The rules a field breaks, right under it, each with a glyph so the danger colour is never alone. */
+export function RuleLines({ rules, testID }: { rules: string[]; testID?: string }) {
+  if (rules.length === 0) return null;
+  return (
+    <View style={styles.box} testID={testID}>
+      {rules.map((rule, i) => (
+        <SkText variant="caption" tone="danger" key={i} accessibilityRole="alert" style={styles.rule}>
+          × {rule}
+        </SkText>
+      ))}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  box: { gap: 2 },
+  rule: { lineHeight: 18 },
+});

@@ -1,0 +1,43 @@
+import type { ReactNode } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { theme } from '../../constants/theme';
+import { SkText } from './sk-text';
+
+/** A panel with a heading and an optional line saying what it is for. */
+export function TitledPanel({
+  title,
+  lead,
+  children,
+  testID,
+}: {
+  title: string;
+  lead?: string;
+  children: ReactNode;
+  testID?: string;
+}) {
+  return (
+    <View style={styles.panel} testID={testID}>
+      <SkText variant="heading" accessibilityRole="header" aria-level={2}>
+        {title}
+      </SkText>
+      {lead ? (
+        <SkText variant="caption" style={styles.lead}>
+          {lead}
+        </SkText>
+      ) : null}
+      {children}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  panel: {
+    backgroundColor: theme.color.panel,
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+    padding: theme.space(4),
+    gap: theme.space(3),
+  },
+  lead: { lineHeight: 20 },
+});

@@ -1,8 +1,0 @@
-/** What names a target: one installed library at one version with its settings (docs/vocabulary.md). */
-export interface TargetInfo {
-  /** Unique, usable as `--target`: "complex.js@2.4.1", "mathjs@15.2.0/number/predictable", "cmath@3.11.2". */
-  name: string;
-  library: string;
-  version: string;
-  settings: Record<string, string | number | boolean>;
-}

@@ -1,0 +1,75 @@
+import type { PathResult } from '../../../shared/run-result';
+import { checkPoints } from './check-points';
+import { compareAlongPath } from './compare-along-path';
+import { diagnoseFailures } from './diagnose-failures';
+import { emptyCounts } from './empty-counts';
+import { errorText } from './error-text';
+import { evaluateProgram } from './evaluate-program';
+import { expectedColumnOf } from './expected-column-of';
+import { listFindings } from './list-findings';
+import { pathInputs } from './path-inputs';
+import type { PathEvaluation } from './path-evaluation';
+import type { PathRun } from './path-run';
+
+/**
+ * One path of a suite against one target, in named steps: the expected values (expectedColumnOf)
+ * and the library's (evaluateProgram) at every point; checkPoints compares them; diagnoseFailures
+ * explains each failure; compareAlongPath finds jumps, misplaced cuts and the monodromy along a
+ * continuous path; listFindings writes the failures out. A path that cannot be built is an error,
+ * and every point is skipped when the target lacks an operation of the subject.
+ */
+export async function evaluatePath(evaluation: PathEvaluation): Promise<PathResult> {
+  const { path, points } = evaluation;
+  const out: PathResult = {
+    name: path.name,
+    kind: path.kind,
+    points: Array.isArray(points) ? points.length : 0,
+    counts: emptyCounts(),
+    jumps: null,
+    monodromy: null,
+    findings: [],
+    findingsOmitted: 0,
+    skipped: [],
+    byDiagnosis: {},
+  };
+  if (points instanceof Error) {
+    out.error = `the path cannot be built: ${points.message}`;
+    return out;
+  }
+  const n = points.length;
+  if (evaluation.unsupported.length > 0) {
+    out.counts.skipped = n;
+    out.skipped = [{ reason: `${evaluation.target.name} has no ${evaluation.unsupported.join(', ')}`, count: n }];
+    return out;
+  }
+  const inputs = pathInputs(points);
+  let expected;
+  try {
+    expected = expectedColumnOf(evaluation, points);
+  } catch (e) {
+    out.error = `no expected values: ${errorText(e)}`;
+    out.counts.error = n;
+    return out;
+  }
+  const actual = await evaluateProgram(evaluation.program, evaluation.target, inputs.re, inputs.im, evaluation.signal);
+  const run: PathRun = {
+    ...evaluation,
+    points,
+    inputs,
+    expected,
+    actual,
+    out,
+    skipReasons: new Map(),
+    outcomes: new Array(n).fill(null),
+    failing: [],
+    errored: [],
+    diagnoses: new Array(n).fill(null),
+    alternatives: new Map(),
+  };
+  checkPoints(run);
+  diagnoseFailures(run);
+  compareAlongPath(run);
+  listFindings(run);
+  out.skipped = [...run.skipReasons].map(([reason, count]) => ({ reason, count }));
+  return out;
+}

@@ -1,0 +1,180 @@
+import { describeTolerance } from '../../../shared/describe-tolerance';
+import type { DiagnosisKind } from '../../../shared/diagnosis';
+import type { OutcomeCounts, PathResult, SuiteTargetResult } from '../../../shared/run-result';
+import type { Suite } from '../../../shared/schemas/suite-schema';
+import type { SuitePath } from '../../../shared/schemas/suite-path-schema';
+import type { Target } from '../../adapters/target';
+import { parseSubject } from '../../expressions/parse-subject';
+import { buildPath } from '../../paths/build-path';
+import type { PathPoint } from '../../paths/path-point';
+import { emptyCounts } from './empty-counts';
+import { errorText } from './error-text';
+import { evaluatePath } from './evaluate-path';
+import type { Expectation } from '../expectations/expectation';
+import { pairStatus } from './pair-status';
+import { ReferenceCache } from '../reference-cache/reference-cache';
+import { suiteExpectation } from '../expectations/suite-expectation';
+import { subjectProgram, type SubjectProgram } from './subject-program';
+import { suiteCacheKey } from '../reference-cache/suite-cache-key';
+import { toPathSpec } from './to-path-spec';
+
+export interface EvaluateSuiteOptions {
+  /** Reference values by point bits; without one, a private in-memory cache is used. */
+  cache?: ReferenceCache;
+  /** Stops between batches; the points not yet evaluated become errors with the abort reason. */
+  signal?: AbortSignal;
+  /** Evaluate only these paths (indices into suite.paths); all by default. */
+  paths?: readonly number[];
+  /** Failing points listed in full per path (all are counted); 200 by default. */
+  maxFindings?: number;
+  /** Called after each path with the number of points done so far in this call. */
+  onProgress?: (done: number, total: number) => void;
+}
+
+const DEFAULT_MAX_FINDINGS = 200;
+/** Points of each path object already built: a suite checked against several targets builds its paths once. */
+const BUILT = new WeakMap<SuitePath, PathPoint[] | Error>();
+
+/**
+ * One suite against one target (docs/vocabulary.md, docs/architecture.md): every point of every path evaluated with
+ * the library's own operations and compared sign-exactly with the expected value (principal:
+ * the reference of the whole subject under the suite's convention; regular: the continued
+ * branch on the cut plane); each failure diagnosed (zero-sign, cut-side, other-sheet,
+ * inaccurate, not-finite, and along continuous paths misplaced-cut from the jumps of both);
+ * closed paths of regular branches checked for their monodromy. Failures carry the input's
+ * exact bits, both one-sided limits on a cut, the rule that fixes the expected value and a
+ * reproducer. Property checks are not run here (evaluatePair runs them after the values).
+ *
+ * This is the API the cut map, fingerprint and version matrix build on; its signature is kept stable.
+ */
+export async function evaluateSuite(
+  suite: Suite,
+  target: Target,
+  options: EvaluateSuiteOptions = {},
+): Promise<SuiteTargetResult> {
+  const started = Date.now();
+  const cache = options.cache ?? new ReferenceCache(null);
+  const computed0 = cache.computed;
+  const cached0 = cache.cached;
+  const selected = options.paths ?? suite.paths.map((_, i) => i);
+  const maxFindings = options.maxFindings ?? DEFAULT_MAX_FINDINGS;
+  const result: SuiteTargetResult = {
+    suite: { id: suite.id, version: suite.version, title: suite.title, subject: suite.subject },
+    target: { name: target.name, library: target.library, version: target.version, settings: target.settings },
+    status: 'pass',
+    checked: {
+      convention: suite.convention,
+      branch: suite.branch.kind,
+      tolerance: describeTolerance(suite.tolerances.values),
+      paths: selected.length,
+      points: 0,
+      properties: {
+        listed: suite.properties.map((p) => p.law),
+        run: false,
+        note: suite.properties.length
+          ? 'property checks are not run by evaluateSuite'
+          : 'the suite lists no property checks',
+      },
+    },
+    counts: emptyCounts(),
+    byDiagnosis: {},
+    paths: [],
+    properties: null,
+    errors: [],
+    durationMs: 0,
+    reference: { computed: 0, cached: 0 },
+  };
+  let program: SubjectProgram;
+  let expectation: Expectation;
+  let cacheKey = '';
+  try {
+    const expr = parseSubject(suite.subject);
+    program = subjectProgram(expr);
+    cacheKey = suiteCacheKey(suite);
+    const key = cacheKey;
+    expectation = suiteExpectation(suite, expr, cache, key);
+    result.checked.branch = expectation.description;
+  } catch (e) {
+    result.errors.push(`the suite cannot be evaluated: ${errorText(e)}`);
+    result.status = 'error';
+    result.durationMs = Date.now() - started;
+    return result;
+  }
+  const unsupported: string[] = [];
+  for (const op of program.ops) if (!(await target.supports(op))) unsupported.push(op);
+
+  const paths = selected.map((i) => suite.paths[i] as SuitePath);
+  const built = paths.map((path) => {
+    const known = BUILT.get(path);
+    if (known) return known;
+    let points: PathPoint[] | Error;
+    try {
+      points = buildPath(toPathSpec(path));
+    } catch (e) {
+      points = e instanceof Error ? e : new Error(String(e));
+    }
+    BUILT.set(path, points);
+    return points;
+  });
+  const total = built.reduce((s, b) => s + (Array.isArray(b) ? b.length : 0), 0);
+  result.checked.points = total;
+  let done = 0;
+  for (let k = 0; k < paths.length; k++) {
+    const path = paths[k] as SuitePath;
+    const points = built[k] as PathPoint[] | Error;
+    if (options.signal?.aborted) {
+      // Stopped (cancelled or out of time): the remaining paths are not evaluated.
+      const n = Array.isArray(points) ? points.length : 0;
+      const reason =
+        options.signal.reason instanceof Error
+          ? options.signal.reason.message
+          : String(options.signal.reason ?? 'cancelled');
+      result.paths.push({
+        name: path.name,
+        kind: path.kind,
+        points: n,
+        counts: { pass: 0, fail: 0, error: 0, skipped: n },
+        byDiagnosis: {},
+        jumps: null,
+        monodromy: null,
+        findings: [],
+        findingsOmitted: 0,
+        skipped: [{ reason, count: n }],
+      });
+      continue;
+    }
+    const pathResult = await evaluatePath({
+      suite,
+      cache,
+      cacheKey,
+      target,
+      program,
+      expectation,
+      path,
+      points,
+      unsupported,
+      maxFindings,
+      signal: options.signal,
+    });
+    result.paths.push(pathResult);
+    done += Array.isArray(points) ? points.length : 0;
+    options.onProgress?.(done, total);
+  }
+  for (const p of result.paths) {
+    for (const key of Object.keys(result.counts) as (keyof OutcomeCounts)[]) result.counts[key] += p.counts[key];
+    if (p.error) result.errors.push(`${p.name}: ${p.error}`);
+  }
+  result.byDiagnosis = countDiagnoses(result.paths);
+  result.status = pairStatus(result, options.signal?.aborted === true);
+  result.reference = { computed: cache.computed - computed0, cached: cache.cached - cached0 };
+  result.durationMs = Date.now() - started;
+  return result;
+}
+
+function countDiagnoses(paths: PathResult[]): Partial<Record<DiagnosisKind, number>> {
+  const out: Partial<Record<DiagnosisKind, number>> = {};
+  for (const p of paths)
+    for (const [kind, n] of Object.entries(p.byDiagnosis))
+      out[kind as DiagnosisKind] = (out[kind as DiagnosisKind] ?? 0) + (n ?? 0);
+  return out;
+}

@@ -1,0 +1,64 @@
+import type { Diagnosis } from '../../../shared/diagnosis';
+import type { PointOutcome } from '../../../shared/point-outcome';
+import type { PointFinding } from '../../../shared/run-result';
+import type { ComplexPair } from '../../adapters/complex-pair';
+import { formatHexDouble } from '../../checks/format-hex-double';
+import type { PathPoint } from '../../paths/path-point';
+import type { PathRun } from './path-run';
+import { reproducer } from './reproducer';
+import { wireDouble } from './wire-double';
+
+/**
+ * Puts each failure's diagnosis on its outcome and counts it, then lists the failing and erring
+ * points in index order, up to `maxFindings`, each with its input's exact bits, both values, the
+ * rule that fixes the expected value, the one-sided limits on a cut and a reproducer.
+ */
+export function listFindings(run: PathRun): void {
+  const { out, outcomes, expected, actual, expectation, path, points } = run;
+  for (const i of run.failing) {
+    const o = outcomes[i] as Extract<PointOutcome, { kind: 'fail' }>;
+    o.diagnosis = run.diagnoses[i] as Diagnosis;
+    out.byDiagnosis[o.diagnosis.kind] = (out.byDiagnosis[o.diagnosis.kind] ?? 0) + 1;
+  }
+  const expectedAt = (i: number): [number, number] => [expected.re[i] as number, expected.im[i] as number];
+  const listed = [...run.failing, ...run.errored].sort((a, b) => a - b);
+  for (const i of listed.slice(0, run.maxFindings)) {
+    const p = points[i] as PathPoint;
+    const z: ComplexPair = [p.z.re, p.z.im];
+    let alt = run.alternatives.get(i);
+    if (!alt && outcomes[i]?.kind === 'fail') {
+      try {
+        alt = expectation.alternatives(path, points, i, expectedAt(i));
+      } catch {
+        alt = undefined;
+      }
+    }
+    const finding: PointFinding = {
+      path: path.name,
+      index: i,
+      t: p.t,
+      ...(p.label ? { label: p.label } : {}),
+      z: wireDouble(z),
+      zHex: { re: formatHexDouble(z[0]), im: formatHexDouble(z[1]) },
+      expected: expected.skipped.has(i) ? null : wireDouble(expectedAt(i)),
+      actual: actual.errors.has(i) ? null : wireDouble([actual.re[i] as number, actual.im[i] as number]),
+      outcome: outcomes[i] as PointOutcome,
+      rule: alt?.rule ?? '',
+      reproducer: reproducer(run.program, run.target, z, run.suite.subject),
+    };
+    if (alt?.limits)
+      finding.limits = {
+        sides: alt.limits.sides,
+        values: [wireDouble(alt.limits.values[0]), wireDouble(alt.limits.values[1])],
+      };
+    if (!alt) {
+      try {
+        finding.rule = expectation.alternatives(path, points, i, expectedAt(i)).rule;
+      } catch {
+        finding.rule = '';
+      }
+    }
+    out.findings.push(finding);
+  }
+  out.findingsOmitted = Math.max(0, listed.length - run.maxFindings);
+}

@@ -1,0 +1,26 @@
+import type { SuitePath } from '../../../shared/schemas/suite-path-schema';
+import type { Suite } from '../../../shared/schemas/suite-schema';
+import type { Target } from '../../adapters/target';
+import type { PathPoint } from '../../paths/path-point';
+import type { Expectation } from '../expectations/expectation';
+import type { ReferenceCache } from '../reference-cache/reference-cache';
+import type { SubjectProgram } from './subject-program';
+
+/** What evaluating one path of a suite against one target needs. */
+export interface PathEvaluation {
+  suite: Suite;
+  cache: ReferenceCache;
+  /** The suite's key in the reference cache. */
+  cacheKey: string;
+  target: Target;
+  program: SubjectProgram;
+  expectation: Expectation;
+  path: SuitePath;
+  /** The path's points, or why it could not be built. */
+  points: PathPoint[] | Error;
+  /** Operations of the subject the target does not have: every point is then skipped. */
+  unsupported: string[];
+  /** Failing points listed in full (all are counted). */
+  maxFindings: number;
+  signal?: AbortSignal;
+}

@@ -1,0 +1,27 @@
+import type { Diagnosis } from '../../../shared/diagnosis';
+import type { PointOutcome } from '../../../shared/point-outcome';
+import type { PathResult } from '../../../shared/run-result';
+import type { PathPoint } from '../../paths/path-point';
+import type { ExpectedColumn, PointAlternatives } from '../expectations/expectation';
+import type { PathEvaluation } from './path-evaluation';
+import type { ValueColumn } from './value-column';
+
+/** One path's evaluation under way: its inputs, both value columns, and what the steps have found so far. */
+export interface PathRun extends PathEvaluation {
+  points: PathPoint[];
+  /** The points column-wise, with their t. */
+  inputs: { re: Float64Array; im: Float64Array; t: number[] };
+  expected: ExpectedColumn;
+  actual: ValueColumn;
+  /** The result being filled in. */
+  out: PathResult;
+  /** Skipped points by reason. */
+  skipReasons: Map<string, number>;
+  /** Each point's outcome when it did not simply pass. */
+  outcomes: (PointOutcome | null)[];
+  failing: number[];
+  errored: number[];
+  diagnoses: (Diagnosis | null)[];
+  /** The alternatives computed for a failure's diagnosis, by point. */
+  alternatives: Map<number, PointAlternatives>;
+}

@@ -1,3 +1,0 @@
-// A shard worker thread: tsx's require hook (as bin/sheetkeeper.mjs uses), then the TypeScript worker.
-require('tsx/cjs/api').register();
-require('./shard-worker.ts');

@@ -1,0 +1,82 @@
+import { parentPort } from 'node:worker_threads';
+import {
+  FINGERPRINT_FUNCTIONS,
+  fingerprintTarget,
+  libraryVersions,
+  mapCuts,
+  type Target,
+  type TargetDescriptor,
+  versionMatrix,
+} from '../../harness';
+import type { FindingsFailure, FindingsReply, FindingsRequest } from './findings-messages';
+import { HttpError } from '../http/http-error';
+import { InputError } from '../http/input-error';
+import { openInstalledTarget } from '../targets/open-installed-target';
+
+/**
+ * The body of the findings thread (findings-thread.ts): runs the library code behind the
+ * fingerprint, cut map and version matrix, one request at a time, so loading mathjs (~1.1 s a
+ * version) or a 201×201 cut map (up to ~0.7 s) never holds up the server's own thread.
+ */
+const port = parentPort;
+if (!port) throw new Error('findings-worker.ts runs in a worker thread');
+
+const versionsByLibrary = new Map<string, TargetDescriptor[]>();
+
+const fn = (label: string) => {
+  const found = FINGERPRINT_FUNCTIONS.find((f) => f.label === label);
+  if (!found)
+    throw new InputError([{ field: 'query.fn', rule: `is not a function the fingerprint knows ("${label}")` }]);
+  return found;
+};
+
+/** Opens the target for one computation and always closes it: cmath is a Python child process. */
+async function withTarget<T>(name: string, work: (target: Target) => Promise<T>): Promise<T> {
+  const target = openInstalledTarget(name);
+  if (!target) throw new HttpError(404, { kind: 'not-found', message: `No installed target "${name}".` });
+  try {
+    return await work(target);
+  } finally {
+    await target.close();
+  }
+}
+
+async function compute(request: FindingsRequest): Promise<unknown> {
+  switch (request.kind) {
+    case 'fingerprint':
+      return withTarget(request.target, (target) => fingerprintTarget(target, request.functions.map(fn)));
+    case 'cut-map': {
+      const f = fn(request.fn);
+      const [re0, im0, re1, im1] = request.box;
+      return withTarget(request.target, async (target) => {
+        if (!(await target.supports(f.op)))
+          throw new InputError([{ field: 'query.fn', rule: `is not a function ${target.name} has (no ${f.op})` }]);
+        return mapCuts(target, f, [re0, im0], [re1, im1], request.grid[0], request.grid[1]);
+      });
+    }
+    case 'version-matrix': {
+      let targets = versionsByLibrary.get(request.library);
+      if (!targets) versionsByLibrary.set(request.library, (targets = libraryVersions(request.library)));
+      return versionMatrix(request.library, request.suites, targets);
+    }
+  }
+}
+
+function failureOf(err: unknown): FindingsFailure {
+  if (err instanceof HttpError) return { kind: 'http', status: err.status, body: err.body };
+  if (err instanceof InputError) return { kind: 'input', issues: err.issues };
+  return { kind: 'error', message: err instanceof Error ? err.message : String(err) };
+}
+
+let chain = Promise.resolve();
+port.on('message', (request: FindingsRequest) => {
+  chain = chain.then(async () => {
+    let reply: FindingsReply;
+    try {
+      reply = { id: request.id, ok: true, value: await compute(request) };
+    } catch (err) {
+      reply = { id: request.id, ok: false, failure: failureOf(err) };
+    }
+    port.postMessage(reply);
+  });
+});

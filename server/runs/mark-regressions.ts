@@ -1,0 +1,105 @@
+import type { EntityManager } from 'typeorm';
+import { Run } from '../entities/run';
+import { coveredByDeviationSql } from '../sql/covered-by-deviation-sql';
+import type { MailOutbox } from '../mail/mail-outbox';
+import { regressionMail } from './regression-mail';
+import type { RegressionRow } from './regression-row';
+import { targetKeySql } from '../sql/target-key-sql';
+
+/**
+ * Completes a run: marks as regressions the failing points that passed in the previous
+ * completed run of the same plan — the same suite, path and input bits, on the same target
+ * up to its version, on a path that run evaluated without a path error, and not covered by an
+ * unexpired accepted deviation — and queues one mail to the plan's recipients and the
+ * subscribers of the libraries that regressed, when there are any. Runs inside the caller's transaction.
+ */
+export async function markRegressions(
+  tx: EntityManager,
+  runId: string,
+  mail: { outbox: MailOutbox; appUrl: string },
+): Promise<number> {
+  const run = await tx.getRepository(Run).findOneOrFail({ where: { id: runId }, relations: { plan: true } });
+  const previous = run.plan
+    ? await tx
+        .getRepository(Run)
+        .createQueryBuilder('r')
+        .where('r.plan_id = :plan AND r.status = :done AND r.created_at < :at AND r.id <> :id', {
+          plan: run.plan.id,
+          done: 'completed',
+          at: run.createdAt,
+          id: run.id,
+        })
+        .orderBy('r.created_at', 'DESC')
+        .getOne()
+    : null;
+  let count = 0;
+  if (previous) {
+    // Counted through a CTE: TypeORM answers a bare UPDATE … RETURNING with [rows, affected].
+    const [marked] = await tx.query(
+      `WITH marked AS (UPDATE failures f SET is_regression = true
+        WHERE f.run_id = $1 AND f.outcome_kind = 'fail'
+          AND EXISTS (SELECT 1 FROM shards ps JOIN path_summaries pp ON pp.shard_id = ps.id
+                       WHERE ps.run_id = $2 AND ps.suite_slug = f.suite_slug AND ${targetKeySql('ps.target_name')} = ${targetKeySql('f.target_name')}
+                         AND pp.path_name = f.path_name AND pp.error IS NULL)
+          AND NOT EXISTS (SELECT 1 FROM failures pf
+                           WHERE pf.run_id = $2 AND pf.point_key = f.point_key AND ${targetKeySql('pf.target_name')} = ${targetKeySql('f.target_name')})
+          AND NOT ${coveredByDeviationSql('f')}
+        RETURNING f.id) SELECT count(*)::int AS n FROM marked`,
+      [run.id, previous.id],
+    );
+    count = marked.n;
+  }
+  await tx.getRepository(Run).update(run.id, { status: 'completed', finishedAt: new Date(), regressions: count });
+  // The plan's recipients, and everyone subscribed to a library that regressed.
+  const subscribers: { email: string }[] =
+    count > 0
+      ? await tx.query(
+          `SELECT DISTINCT u.email FROM subscriptions s JOIN users u ON u.id = s.user_id
+            WHERE s.target_key IN (SELECT DISTINCT ${targetKeySql('target_name')} FROM failures WHERE run_id = $1 AND is_regression)`,
+          [run.id],
+        )
+      : [];
+  const recipients = [...new Set([...(run.plan?.recipients ?? []), ...subscribers.map((s) => s.email)])];
+  if (count > 0 && recipients.length > 0) {
+    const rows: RegressionRow[] = (
+      await tx.query(
+        `SELECT id::text, suite_slug, target_name, path_name, z, z_hex, expected, actual, diagnosis, rule, reproducer
+           FROM failures WHERE run_id = $1 AND is_regression ORDER BY suite_slug, target_name, path_name, point_index LIMIT 50`,
+        [run.id],
+      )
+    ).map((r: Record<string, unknown>) => ({
+      id: r.id,
+      suiteSlug: r.suite_slug,
+      targetName: r.target_name,
+      pathName: r.path_name,
+      z: r.z,
+      zHex: r.z_hex,
+      expected: r.expected,
+      actual: r.actual,
+      diagnosis: r.diagnosis,
+      rule: r.rule,
+      reproducer: r.reproducer,
+    })) as RegressionRow[];
+    const versionChanges: { key: string; from: string; to: string }[] = previous
+      ? await tx.query(
+          `SELECT DISTINCT ${targetKeySql('s.target_name')} AS key, p.target_version AS "from", s.target_version AS "to"
+             FROM shards s JOIN shards p ON p.run_id = $2 AND ${targetKeySql('p.target_name')} = ${targetKeySql('s.target_name')}
+            WHERE s.run_id = $1 AND p.target_version <> s.target_version ORDER BY key`,
+          [run.id, previous.id],
+        )
+      : [];
+    await mail.outbox.enqueue(
+      regressionMail({
+        recipients,
+        planName: run.planName,
+        runId: run.id,
+        appUrl: mail.appUrl,
+        rows,
+        total: count,
+        versionChanges,
+      }),
+      tx,
+    );
+  }
+  return count;
+}

@@ -1,3 +1,0 @@
-// The findings thread: tsx's require hook (as the shard workers use), then the TypeScript worker.
-require('tsx/cjs/api').register();
-require('./findings-worker.ts');

@@ -1,0 +1,106 @@
+import { In, type DataSource } from 'typeorm';
+import type { OutcomeCounts } from '../../shared/run-result';
+import type { OverviewView, SubscribedRegression, WaitingSuite } from '../../shared/overview-view';
+import { Run } from '../entities/run';
+import type { User } from '../entities/user';
+import { coveredByDeviationSql } from '../sql/covered-by-deviation-sql';
+import { targetKeySql } from '../sql/target-key-sql';
+import { toRunView } from './to-run-view';
+
+const RUN_RELATIONS = { plan: true, requestedBy: true } as const;
+/** The runs in progress the screen lists; more than this are on the Runs screen. */
+const IN_PROGRESS_LIMIT = 20;
+
+/** The newest version of every suite, with who wrote it and who reviewed it, filtered by `where` over `v`. */
+const waitingSql = (where: string) => `
+  SELECT s.slug, v.version, v.body->>'title' AS title, v.body->>'subject' AS subject, a.display_name AS "authorName",
+         coalesce(v.reviewed_at, v.submitted_at, v.created_at) AS since, r.display_name AS "reviewerName", v.review_comment AS "reviewComment"
+    FROM suites s
+    JOIN LATERAL (SELECT * FROM suite_versions x WHERE x.suite_id = s.id ORDER BY x.version DESC LIMIT 1) v ON true
+    JOIN users a ON a.id = v.author_id
+    LEFT JOIN users r ON r.id = v.reviewer_id
+   WHERE ${where}
+   ORDER BY since ASC, s.slug`;
+
+const toWaiting = (row: Omit<WaitingSuite, 'since'> & { since: Date }): WaitingSuite => ({
+  ...row,
+  since: new Date(row.since).toISOString(),
+});
+
+/**
+ * The Overview in one answer, so the screen makes one round trip: the latest finished run of
+ * every plan (and the completed one before it), the runs in progress, and what waits on the
+ * caller — suites to review (reviewers and admins), their own suites sent back, and regressions
+ * on the libraries they subscribe to, in the latest completed run of each plan.
+ */
+export async function loadOverview(dataSource: DataSource, user: User): Promise<OverviewView> {
+  const plans: { id: string; name: string; latest: string | null; previous: string | null }[] = await dataSource.query(
+    `SELECT p.id, p.name, latest.id AS latest, previous.id AS previous
+       FROM plans p
+       LEFT JOIN LATERAL (SELECT r.id, r.created_at FROM runs r WHERE r.plan_id = p.id AND r.status IN ('completed', 'failed', 'cancelled')
+                           ORDER BY r.created_at DESC LIMIT 1) latest ON true
+       LEFT JOIN LATERAL (SELECT r.id FROM runs r WHERE r.plan_id = p.id AND r.status = 'completed' AND r.created_at < latest.created_at
+                           ORDER BY r.created_at DESC LIMIT 1) previous ON true
+      ORDER BY latest.created_at DESC NULLS LAST, p.name`,
+  );
+  const runIds = plans.flatMap((p) => [p.latest, p.previous]).filter((id): id is string => id !== null);
+  const runs = runIds.length
+    ? await dataSource.getRepository(Run).find({ where: { id: In(runIds) }, relations: RUN_RELATIONS })
+    : [];
+  const byId = new Map(runs.map((r) => [r.id, r]));
+
+  const inProgress = await dataSource.getRepository(Run).find({
+    where: { status: In(['queued', 'running']) },
+    relations: RUN_RELATIONS,
+    order: { createdAt: 'DESC' },
+    take: IN_PROGRESS_LIMIT,
+  });
+
+  const canReview = user.role === 'reviewer' || user.role === 'admin';
+  const reviewQueue = canReview ? (await dataSource.query(waitingSql(`v.status = 'submitted'`))).map(toWaiting) : null;
+  const changesRequested = (
+    await dataSource.query(waitingSql(`v.status = 'changes-requested' AND v.author_id = $1`), [user.id])
+  ).map(toWaiting);
+
+  const subscriptions: string[] = (
+    await dataSource.query(`SELECT target_key FROM subscriptions WHERE user_id = $1 ORDER BY target_key`, [user.id])
+  ).map((r: { target_key: string }) => r.target_key);
+  const regressions: SubscribedRegression[] = subscriptions.length
+    ? (
+        await dataSource.query(
+          `WITH latest AS (SELECT DISTINCT ON (plan_id) id, plan_name, finished_at FROM runs
+                            WHERE plan_id IS NOT NULL AND status = 'completed' ORDER BY plan_id, created_at DESC)
+           SELECT ${targetKeySql('f.target_name')} AS "targetKey", l.id AS "runId", l.plan_name AS "planName", l.finished_at AS "finishedAt", count(*)::int AS count
+             FROM latest l JOIN failures f ON f.run_id = l.id AND f.is_regression
+            WHERE ${targetKeySql('f.target_name')} = ANY($1) AND NOT ${coveredByDeviationSql('f')}
+            GROUP BY 1, 2, 3, 4
+            ORDER BY l.finished_at DESC, 1`,
+          [subscriptions],
+        )
+      ).map((r: Omit<SubscribedRegression, 'finishedAt'> & { finishedAt: Date }) => ({
+        ...r,
+        finishedAt: new Date(r.finishedAt).toISOString(),
+      }))
+    : [];
+
+  return {
+    plans: plans.map((p) => {
+      const latest = p.latest ? byId.get(p.latest) : undefined;
+      const previous = p.previous ? byId.get(p.previous) : undefined;
+      return {
+        planId: p.id,
+        planName: p.name,
+        latest: latest ? toRunView(latest) : null,
+        previous: previous
+          ? {
+              id: previous.id,
+              counts: previous.counts as OutcomeCounts,
+              finishedAt: previous.finishedAt?.toISOString() ?? null,
+            }
+          : null,
+      };
+    }),
+    inProgress: inProgress.map(toRunView),
+    needsMe: { reviewQueue, changesRequested, subscriptions, regressions },
+  };
+}

@@ -1,0 +1,198 @@
+import { screen, waitFor, within } from '@testing-library/react';
+import { OverviewBoard } from '../../../components/overview/overview-board';
+import type { OverviewView } from '../../../shared/overview-view';
+import type { PublicUser } from '../../../shared/public-user';
+import type { Role } from '../../../shared/roles';
+import type { RunView } from '../../../shared/run-view';
+import { mockFetch } from '../../setup/mock-fetch';
+import { renderWithClient } from '../../setup/render-with-client';
+import { setScreenWidth } from '../../setup/set-screen-width';
+
+jest.mock('expo-router', () => require('../../setup/expo-router-stub'));
+
+const user = (role: Role): PublicUser => ({
+  id: 'u1',
+  email: `${role}@sheetkeeper.test`,
+  displayName: 'Some One',
+  role,
+  createdAt: '2026-01-01T00:00:00Z',
+});
+const hoursAgo = (h: number) => new Date(Date.now() - h * 3_600_000).toISOString();
+
+const run = (over: Partial<RunView>): RunView => ({
+  id: 'aaaaaaaa-0000-4000-8000-000000000001',
+  planId: 'p1',
+  planName: 'complex.js nightly',
+  trigger: 'schedule',
+  status: 'completed',
+  shardsTotal: 4,
+  shardsDone: 4,
+  counts: { pass: 480, fail: 7, error: 0, skipped: 0 },
+  regressions: 5,
+  requestedBy: null,
+  createdAt: hoursAgo(3),
+  startedAt: hoursAgo(3),
+  finishedAt: hoursAgo(2.9),
+  ...over,
+});
+
+const OVERVIEW: OverviewView = {
+  plans: [
+    {
+      planId: 'p1',
+      planName: 'complex.js nightly',
+      latest: run({}),
+      previous: { id: 'r0', counts: { pass: 485, fail: 2, error: 0, skipped: 0 }, finishedAt: hoursAgo(27) },
+    },
+    { planId: 'p2', planName: 'mathjs before release', latest: null, previous: null },
+  ],
+  inProgress: [
+    run({
+      id: 'aaaaaaaa-0000-4000-8000-000000000002',
+      status: 'running',
+      shardsDone: 1,
+      counts: { pass: 120, fail: 0, error: 0, skipped: 0 },
+      regressions: null,
+      finishedAt: null,
+      trigger: 'manual',
+      requestedBy: 'Kwame Asante',
+      createdAt: hoursAgo(0.01),
+      startedAt: hoursAgo(0.01),
+    }),
+  ],
+  needsMe: {
+    reviewQueue: [
+      {
+        slug: 'atanh-near-one',
+        version: 2,
+        title: 'atanh next to ±1',
+        subject: 'atanh(z)',
+        authorName: 'Mei Okonkwo',
+        since: hoursAgo(5),
+        reviewerName: null,
+        reviewComment: null,
+      },
+    ],
+    changesRequested: [],
+    subscriptions: ['complex.js'],
+    regressions: [
+      {
+        targetKey: 'complex.js',
+        runId: 'aaaaaaaa-0000-4000-8000-000000000001',
+        planName: 'complex.js nightly',
+        finishedAt: hoursAgo(2.9),
+        count: 5,
+      },
+    ],
+  },
+};
+
+describe('OverviewBoard', () => {
+  beforeEach(() => setScreenWidth(390));
+
+  it('shows who is signed in and the note that green is evidence, not a certificate, while it loads', () => {
+    global.fetch = jest.fn(() => new Promise<Response>(() => undefined)) as typeof fetch;
+    renderWithClient(<OverviewBoard user={user('maintainer')} />);
+    expect(screen.getByTestId('home-email').textContent).toBe('maintainer@sheetkeeper.test');
+    expect(screen.getByText('Loading…')).toBeTruthy();
+    expect(
+      screen.getByText(/evidence for the points, paths and conventions that a suite checked — not a certificate/),
+    ).toBeTruthy();
+  });
+
+  it('shows the latest run of each plan with its regressions and what changed since the run before, and a plan that never ran', async () => {
+    mockFetch(200, { overview: OVERVIEW });
+    renderWithClient(<OverviewBoard user={user('maintainer')} />);
+    const nightly = await screen.findByTestId('plan-complex.js nightly');
+    expect(within(nightly).getByText('❌ completed with failures')).toBeTruthy();
+    expect(within(nightly).getByText('❌ 7 failed')).toBeTruthy();
+    expect(within(nightly).getByText('❌ 5 regressions: passed in the previous completed run, fail now.')).toBeTruthy();
+    expect(within(nightly).getByText('Since the previous completed run: ↑ 5 more failed.')).toBeTruthy();
+    expect(
+      within(nightly).getByRole('link', { name: 'Open the latest run of complex.js nightly' }).getAttribute('href'),
+    ).toBe('/runs/aaaaaaaa-0000-4000-8000-000000000001');
+    expect(within(nightly).getByRole('link', { name: 'Every run of complex.js nightly' }).getAttribute('href')).toBe(
+      '/runs?plan=p1',
+    );
+    expect(
+      within(screen.getByTestId('plan-mathjs before release')).getByText(
+        '− Not run yet: nothing checked for this plan.',
+      ),
+    ).toBeTruthy();
+  });
+
+  it('shows a run in progress with its bar in words', async () => {
+    mockFetch(200, { overview: OVERVIEW });
+    renderWithClient(<OverviewBoard user={user('maintainer')} />);
+    const live = await screen.findByTestId('run-aaaaaaaa-0000-4000-8000-000000000002');
+    expect(within(live).getByText('1 of 4 shards · 25%')).toBeTruthy();
+    expect(within(live).getByText('↻ running')).toBeTruthy();
+    expect(screen.getByRole('heading', { name: /In progress/ }).textContent).toBe('↻ In progress (1)');
+  });
+
+  it('gives a reviewer the suites to review and the regressions on subscribed libraries, each a link', async () => {
+    mockFetch(200, { overview: OVERVIEW });
+    renderWithClient(<OverviewBoard user={user('reviewer')} />);
+    const panel = await screen.findByTestId('needs-me');
+    expect(within(panel).getByText('◊ Waiting for you: 2')).toBeTruthy();
+    expect(within(panel).getByRole('link', { name: 'Review atanh-near-one version 2' }).getAttribute('href')).toBe(
+      '/review/atanh-near-one',
+    );
+    expect(within(panel).getByText('atanh next to ±1 · v2')).toBeTruthy();
+    const regression = within(panel).getByRole('link', { name: '5 regressions on complex.js in complex.js nightly' });
+    expect(regression.getAttribute('href')).toBe('/failures?run=aaaaaaaa-0000-4000-8000-000000000001&status=new');
+    expect(within(panel).queryByText(/Your suites sent back/)).toBeNull();
+  });
+
+  it("gives a contributor their suites sent back with the reviewer's comment, and no review queue", async () => {
+    mockFetch(200, {
+      overview: {
+        ...OVERVIEW,
+        needsMe: {
+          reviewQueue: null,
+          changesRequested: [
+            {
+              slug: 'log-branch',
+              version: 1,
+              title: 'log above the cut',
+              subject: 'log(z)',
+              authorName: 'Ravi Dutta',
+              since: hoursAgo(1),
+              reviewerName: 'Hanne Lindqvist',
+              reviewComment: 'Add a straddle at 5e-324.',
+            },
+          ],
+          subscriptions: [],
+          regressions: [],
+        },
+      },
+    });
+    renderWithClient(<OverviewBoard user={user('contributor')} />);
+    const panel = await screen.findByTestId('needs-me');
+    expect(within(panel).queryByText(/Suites to review/)).toBeNull();
+    const sentBack = within(panel).getByRole('link', { name: 'Open log-branch, changes requested' });
+    expect(sentBack.getAttribute('href')).toBe('/suites/log-branch');
+    expect(within(sentBack).getByText('“Add a straddle at 5e-324.”')).toBeTruthy();
+    expect(within(panel).getByText('✓ You subscribe to no library (Settings).')).toBeTruthy();
+  });
+
+  it('says so when nothing waits, and shows an error with a retry when the overview cannot be loaded', async () => {
+    mockFetch(200, {
+      overview: {
+        plans: [],
+        inProgress: [],
+        needsMe: { reviewQueue: null, changesRequested: [], subscriptions: ['mathjs'], regressions: [] },
+      },
+    });
+    const { unmount } = renderWithClient(<OverviewBoard user={user('maintainer')} />);
+    expect(await screen.findByText('✓ Nothing is waiting for you')).toBeTruthy();
+    expect(screen.getByText('✓ No regressions on mathjs in the latest runs.')).toBeTruthy();
+    expect(screen.getByText('No plans yet. A maintainer makes one under Plans.')).toBeTruthy();
+    unmount();
+    mockFetch(500, { kind: 'server-error', message: 'The database is not answering.' });
+    renderWithClient(<OverviewBoard user={user('maintainer')} />);
+    await waitFor(() => expect(screen.getByText('× The database is not answering.')).toBeTruthy());
+    expect(screen.getByRole('button', { name: 'Try again' })).toBeTruthy();
+    expect(screen.getByTestId('home-email')).toBeTruthy();
+  });
+});

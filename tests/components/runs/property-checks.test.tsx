@@ -1,0 +1,92 @@
+import { act, fireEvent, render, screen, within } from '@testing-library/react';
+import { PropertyChecks } from '../../../components/runs/property-checks';
+import type { RunPropertyRow } from '../../../shared/run-property-row';
+
+// Invented rows for the screen only; the laws' own checks are tested under tests/harness.
+const held = (suite: string, law: RunPropertyRow['outcome']['law']): RunPropertyRow => ({
+  suite,
+  target: 'complex.js@2.4.3',
+  outcome: {
+    kind: 'held',
+    law,
+    title: `${law} holds`,
+    seed: 42,
+    runs: 200,
+    excluded: 0,
+    statement: 'At the drawn points only.',
+  },
+});
+
+const rows: RunPropertyRow[] = [
+  held('sqrt-principal-sz', 'conjugate-symmetry'),
+  held('sqrt-principal-sz', 'root-power'),
+  held('log-principal-sz', 'exp-log'),
+  {
+    suite: 'log-principal-sz',
+    target: 'complex.js@2.4.3',
+    outcome: {
+      kind: 'failed',
+      law: 'conjugate-symmetry',
+      title: 'log(conj z) = conj(log z) off the cut',
+      seed: 7,
+      runs: 13,
+      path: '12:0:0',
+      shrinks: 3,
+      counterexample: [{ re: '-1', im: '-0' }],
+      reason: 'the imaginary parts differ in sign',
+      values: [{ name: 'log(conj z)', value: { re: '0', im: '3.141592653589793' } }],
+    },
+  },
+  {
+    suite: 'acos-principal-sz',
+    target: 'complex.js@2.4.3',
+    outcome: {
+      kind: 'not-checked',
+      law: 'range',
+      title: 'acos lands in its range',
+      seed: 9,
+      reason: 'the run was cancelled first',
+    },
+  },
+];
+
+describe('PropertyChecks', () => {
+  it('counts the checks by outcome and lists pairs with a failure first, then unchecked, then held', () => {
+    render(<PropertyChecks rows={rows} />);
+    expect(screen.getByTestId('property-summary').textContent).toBe(
+      '5 checks over 3 pairs: 1 failed, 1 not checked, 3 held.',
+    );
+    const pairs = screen.getAllByTestId(/^property-pair-/).map((el) => el.getAttribute('data-testid'));
+    expect(pairs).toEqual([
+      'property-pair-log-principal-sz × complex.js@2.4.3',
+      'property-pair-acos-principal-sz × complex.js@2.4.3',
+      'property-pair-sqrt-principal-sz × complex.js@2.4.3',
+    ]);
+  });
+
+  it('shows a failing pair open, with its counterexample, seed and replay path', () => {
+    render(<PropertyChecks rows={rows} />);
+    const failed = screen.getByTestId('property-log-principal-sz × complex.js@2.4.3-conjugate-symmetry');
+    expect(within(failed).getByText('z = −1 − 0i')).toBeTruthy();
+    expect(within(failed).getByText('12:0:0')).toBeTruthy();
+    expect(within(failed).getByText('seed 7')).toBeTruthy();
+    // Its held law stays visible beside the failure: the pair is open as a whole.
+    expect(screen.getByTestId('property-log-principal-sz × complex.js@2.4.3-exp-log')).toBeTruthy();
+  });
+
+  it('folds a pair whose every law held into one line, and opens it on a tap', async () => {
+    render(<PropertyChecks rows={rows} />);
+    expect(screen.queryByTestId('property-sqrt-principal-sz × complex.js@2.4.3-root-power')).toBeNull();
+    const fold = screen.getByRole('button', {
+      name: 'Show the 2 laws that held for sqrt-principal-sz × complex.js@2.4.3',
+    });
+    expect(fold.textContent).toMatch(/✓ all 2 laws held/);
+    await act(() => fireEvent.click(fold));
+    expect(screen.getByTestId('property-sqrt-principal-sz × complex.js@2.4.3-root-power')).toBeTruthy();
+    expect(
+      screen
+        .getByRole('button', { name: 'Hide the 2 laws that held for sqrt-principal-sz × complex.js@2.4.3' })
+        .getAttribute('aria-expanded'),
+    ).toBe('true');
+  });
+});

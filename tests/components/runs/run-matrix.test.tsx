@@ -1,0 +1,168 @@
+import { fireEvent, render, screen, within } from '@testing-library/react';
+import { RunMatrix } from '../../../components/runs/run-matrix';
+import type { RunMatrixCell } from '../../../shared/run-matrix-cell';
+import { setScreenWidth } from '../../setup/set-screen-width';
+
+jest.mock('expo-router', () => require('../../setup/expo-router-stub'));
+
+const RUN = '7d3f9a52-1c4e-4b8a-9f10-2a6c5e8d4b31';
+const scope = {
+  convention: 'signed-zero',
+  branch: 'principal',
+  tolerance: '4 ulps',
+  paths: 3,
+  points: 123,
+  properties: { listed: [], run: true, note: '' },
+};
+
+const cell = (over: Partial<RunMatrixCell>): RunMatrixCell => ({
+  suite: 'sqrt-principal-sz',
+  target: 'complex.js@2.4.3',
+  status: 'done',
+  outcome: 'pass',
+  counts: { pass: 120, fail: 0, error: 0, skipped: 0 },
+  byDiagnosis: {},
+  checked: scope,
+  errors: [],
+  ...over,
+});
+
+const CELLS: RunMatrixCell[] = [
+  cell({}),
+  cell({
+    target: 'complex.js@2.4.2',
+    outcome: 'fail',
+    counts: { pass: 117, fail: 3, error: 0, skipped: 4 },
+    byDiagnosis: { 'other-sheet': 2, 'cut-side': 1 },
+  }),
+  cell({
+    suite: 'log-principal-sz',
+    target: 'complex.js@2.4.3',
+    outcome: 'error',
+    counts: null,
+    byDiagnosis: null,
+    checked: null,
+    errors: ['The target did not answer within 30 s.'],
+  }),
+  cell({
+    suite: 'log-principal-sz',
+    target: 'complex.js@2.4.2',
+    outcome: 'error',
+    counts: { pass: 80, fail: 0, error: 2, skipped: 0 },
+    byDiagnosis: {},
+    errors: ['path "circle r=2" threw: RangeError'],
+  }),
+  cell({
+    suite: 'acos-principal-sz',
+    target: 'complex.js@2.4.3',
+    status: 'running',
+    outcome: null,
+    counts: null,
+    byDiagnosis: null,
+    checked: null,
+  }),
+  cell({ suite: 'acos-principal-sz', target: 'complex.js@2.4.2' }),
+];
+
+const cellOf = (suite: string, target: string) => screen.getByTestId(`cell-${suite}-${target}`);
+
+describe.each([
+  ['phone', 390],
+  ['wide screen', 1440],
+])('RunMatrix on a %s', (_name, width) => {
+  beforeEach(() => setScreenWidth(width));
+
+  it('says each outcome in glyphs and words, not only in colour', () => {
+    render(<RunMatrix runId={RUN} cells={CELLS} />);
+    expect(within(cellOf('sqrt-principal-sz', 'complex.js@2.4.3')).getByText('✓ 120')).toBeTruthy();
+    const failing = cellOf('sqrt-principal-sz', 'complex.js@2.4.2');
+    expect(within(failing).getByText('❌ 3 · 2 other-sheet')).toBeTruthy();
+    expect(within(failing).getByText('1 cut-side')).toBeTruthy();
+    expect(within(failing).getByText('✓ 117 passed')).toBeTruthy();
+    expect(within(failing).getByText('− 4 skipped')).toBeTruthy();
+    expect(failing.getAttribute('aria-label')).toBe(
+      'sqrt-principal-sz on complex.js@2.4.2: 3 failed, 2 other-sheet, 1 cut-side, 117 passed, 4 skipped. Open these failures',
+    );
+    expect(within(cellOf('acos-principal-sz', 'complex.js@2.4.3')).getByText('↻ running')).toBeTruthy();
+  });
+
+  it('says "nothing was checked" for an error cell that checked no point, with the error', () => {
+    render(<RunMatrix runId={RUN} cells={CELLS} />);
+    const nothing = cellOf('log-principal-sz', 'complex.js@2.4.3');
+    expect(within(nothing).getByText('◊ error')).toBeTruthy();
+    expect(within(nothing).getByText('nothing was checked')).toBeTruthy();
+    expect(within(nothing).getByText('The target did not answer within 30 s.')).toBeTruthy();
+    const partly = cellOf('log-principal-sz', 'complex.js@2.4.2');
+    expect(within(partly).getByText('◊ 2 errors')).toBeTruthy();
+    expect(within(partly).getByText('✓ 80 passed')).toBeTruthy();
+    expect(within(partly).queryByText('nothing was checked')).toBeNull();
+  });
+
+  it('says "nothing was checked" once when every point was skipped and the shard says so itself', () => {
+    const skipped = cell({
+      suite: 'cbrt-principal-sz',
+      outcome: 'error',
+      counts: { pass: 0, fail: 0, error: 0, skipped: 154 },
+      byDiagnosis: {},
+      errors: ['nothing was checked: every point was skipped (see the reasons per path)'],
+    });
+    render(<RunMatrix runId={RUN} cells={[skipped]} />);
+    const only = cellOf('cbrt-principal-sz', 'complex.js@2.4.3');
+    expect(within(only).getAllByText(/nothing was checked/)).toHaveLength(1);
+    expect(within(only).getByText('− 154 skipped')).toBeTruthy();
+    expect(only.getAttribute('href')).toBe(`/failures?run=${RUN}&suite=cbrt-principal-sz&target=complex.js%402.4.3`);
+  });
+
+  it('links a cell with failures or errors to the failure table filtered by run, suite and target; a passing cell is no link', () => {
+    render(<RunMatrix runId={RUN} cells={CELLS} />);
+    expect(cellOf('sqrt-principal-sz', 'complex.js@2.4.2').getAttribute('href')).toBe(
+      `/failures?run=${RUN}&suite=sqrt-principal-sz&target=complex.js%402.4.2`,
+    );
+    expect(cellOf('log-principal-sz', 'complex.js@2.4.2').getAttribute('href')).toBe(
+      `/failures?run=${RUN}&suite=log-principal-sz&target=complex.js%402.4.2`,
+    );
+    expect(cellOf('sqrt-principal-sz', 'complex.js@2.4.3').getAttribute('href')).toBeNull();
+    expect(cellOf('log-principal-sz', 'complex.js@2.4.3').getAttribute('href')).toBeNull();
+  });
+
+  it('counts the cells by outcome and can hide the suites that passed everywhere', () => {
+    render(
+      <RunMatrix
+        runId={RUN}
+        cells={[
+          ...CELLS,
+          cell({ suite: 'exp-principal-sz' }),
+          cell({ suite: 'exp-principal-sz', target: 'complex.js@2.4.2' }),
+        ]}
+      />,
+    );
+    expect(
+      screen.getByText(
+        /4 suites × 2 targets: ✓ 4 passed · ❌ 1 with failures · ◊ 2 error · 1 not finished or cancelled/,
+      ),
+    ).toBeTruthy();
+    expect(screen.queryByText('exp-principal-sz')).not.toBeNull();
+    fireEvent.click(screen.getByRole('switch', { name: 'Show only suites that need a look' }));
+    expect(screen.queryByText('exp-principal-sz')).toBeNull();
+    expect(screen.getByText('sqrt-principal-sz')).toBeTruthy();
+    expect(screen.getByRole('switch', { name: 'Show only suites that need a look' }).getAttribute('aria-checked')).toBe(
+      'true',
+    );
+  });
+});
+
+it('lays the matrix out as a grid with a column per target on a wide screen, and as cards on a phone', () => {
+  setScreenWidth(1440);
+  const { unmount } = render(<RunMatrix runId={RUN} cells={CELLS} />);
+  expect(screen.getAllByRole('columnheader').map((h) => h.textContent)).toEqual([
+    'Suite ↓ · target →',
+    'complex.js@2.4.2',
+    'complex.js@2.4.3',
+  ]);
+  unmount();
+  setScreenWidth(390);
+  render(<RunMatrix runId={RUN} cells={CELLS} />);
+  expect(screen.queryAllByRole('columnheader')).toHaveLength(0);
+  // Each card names its target beside the outcome, since there is no column header.
+  expect(within(cellOf('sqrt-principal-sz', 'complex.js@2.4.2')).getByText('complex.js@2.4.2')).toBeTruthy();
+});

@@ -1,5 +1,0 @@
-/** A complex number as the CLI writes it. */
-export interface WireComplex {
-  re: string;
-  im: string;
-}

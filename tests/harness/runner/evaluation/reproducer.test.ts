@@ -1,0 +1,69 @@
+import { spawnSync } from 'node:child_process';
+import path from 'node:path';
+import { discoverTargets } from '../../../../harness/adapters/discover-targets';
+import type { Target } from '../../../../harness/adapters/target';
+import { parseSubject } from '../../../../harness/expressions/parse-subject';
+import { parseDouble } from '../../../../harness/reference/numbers/parse-double';
+import { evaluateProgram } from '../../../../harness/runner/evaluation/evaluate-program';
+import { reproducer } from '../../../../harness/runner/evaluation/reproducer';
+import { subjectProgram } from '../../../../harness/runner/evaluation/subject-program';
+
+const ROOT = path.join(__dirname, '..', '..', '..', '..');
+const POINTS: [number, number][] = [
+  [-0.8, -0],
+  [-3, 0],
+  [0.30000000000000004, 0.7],
+];
+const SUBJECTS = ['sqrt(z - 1) * sqrt(z + 1)', 'log(-i * z) * (0.5 + i)', 'pow(z, 1/3)'];
+
+/** The two parts a reproducer printed, as doubles with their zero signs. */
+function printed(library: string, stdout: string): [number, number] {
+  if (library === 'cmath') {
+    const [, re, im] = stdout.trim().split(/\s+/);
+    return [parseDouble(re!), parseDouble(im!)];
+  }
+  const numbers = stdout.match(/-?(Infinity|NaN|\d[\d.e+-]*)/g)!.map(Number);
+  return [numbers[0]!, numbers[1]!];
+}
+
+describe('reproducers', () => {
+  const targets = ['complex.js@2.4.3', 'mathjs@15.2.0/complex', 'mathjs@15.2.0/number', 'cmath@3.11.2'];
+  let opened: Target[] = [];
+  afterAll(async () => {
+    await Promise.all(opened.map((t) => t.close()));
+  });
+
+  it.each(targets)(
+    '%s: pasted as printed, computes exactly the value the harness got, zero signs included',
+    async (name) => {
+      const descriptor = discoverTargets().find((t) => t.name === name)!;
+      const target = descriptor.open();
+      opened.push(target);
+      for (const subject of SUBJECTS) {
+        const program = subjectProgram(parseSubject(subject));
+        const got = await evaluateProgram(
+          program,
+          target,
+          Float64Array.from(POINTS.map((p) => p[0])),
+          Float64Array.from(POINTS.map((p) => p[1])),
+        );
+        POINTS.forEach((z, i) => {
+          const code = reproducer(program, descriptor, z, subject);
+          const run =
+            descriptor.library === 'cmath'
+              ? spawnSync('/usr/bin/python3', ['-c', code], { encoding: 'utf8' })
+              : spawnSync(process.execPath, ['-e', code], { encoding: 'utf8', cwd: ROOT });
+          expect({ subject, z, stderr: run.stderr }).toEqual({ subject, z, stderr: '' });
+          const [re, im] = printed(descriptor.library, run.stdout);
+          expect({ subject, z, re: Object.is(re, got.re[i]), im: Object.is(im, got.im[i]) }).toEqual({
+            subject,
+            z,
+            re: true,
+            im: true,
+          });
+        });
+      }
+    },
+    60_000,
+  );
+});

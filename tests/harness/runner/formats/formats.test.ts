@@ -1,0 +1,85 @@
+import { XMLParser, XMLValidator } from 'fast-xml-parser';
+import { buildPlan } from '../../../../harness/runner/plan/build-plan';
+import { formatJson } from '../../../../harness/runner/formats/format-json';
+import { formatJunit } from '../../../../harness/runner/formats/format-junit';
+import { formatTable } from '../../../../harness/runner/formats/format-table';
+import { ReferenceCache } from '../../../../harness/runner/reference-cache/reference-cache';
+import { runPlan } from '../../../../harness/runner/plan/run-plan';
+import type { TargetDescriptor } from '../../../../harness/adapters/target-descriptor';
+import { loadDemoSuite } from '../support/load-demo-suite';
+import { referenceTarget } from '../support/reference-target';
+
+const NASTY = 'a<b>&"c\'\u0001\u001b[31m';
+
+describe('output formats', () => {
+  let result: Awaited<ReturnType<typeof runPlan>>;
+  beforeAll(async () => {
+    // A target with a name no XML document can hold as it is, that answers NaN for one function and throws with control characters for another.
+    const nasty: TargetDescriptor = {
+      name: `oracle${NASTY}@1`,
+      library: 'oracle',
+      version: '1',
+      settings: { note: NASTY },
+      open: () =>
+        referenceTarget(`oracle${NASTY}@1`, (op, _args, v) => {
+          if (op === 'exp') return [NaN, v[1]];
+          if (op === 'log') throw new Error(`log said ${NASTY}`);
+          return v;
+        }),
+    };
+    result = await runPlan(
+      buildPlan(
+        [loadDemoSuite('exp-principal-sz'), loadDemoSuite('log-principal-sz'), loadDemoSuite('sqrt-principal-sz')],
+        [nasty],
+      ),
+      { cache: new ReferenceCache(null) },
+    );
+  });
+
+  it('JUnit XML stays well-formed whatever the target says, and keeps the text', () => {
+    const xml = formatJunit(result);
+    expect(XMLValidator.validate(xml)).toBe(true);
+    const doc = new XMLParser({ ignoreAttributes: false, attributeNamePrefix: '' }).parse(xml);
+    const [exp, log, sqrt] = doc.testsuites.testsuite as {
+      name: string;
+      failures: string;
+      errors: string;
+      testcase: { failure?: unknown; error?: { message: string; '#text': string } }[];
+    }[];
+    expect(exp!.name).toBe('exp-principal-sz@1 × oraclea<b>&"c\'[31m@1');
+    expect(exp!.failures).toBe('1');
+    expect(log!.errors).toBe('3');
+    expect(log!.testcase[0]!.error!['#text']).toContain('error: log: log said a<b>&"c\'[31m');
+    expect(sqrt!.failures).toBe('0');
+    expect(doc.testsuites.tests).toBe('7');
+  });
+
+  it('JSON writes a non-finite number as the wire strings and reads back as the same result otherwise', () => {
+    const text = formatJson(result);
+    const back = JSON.parse(text);
+    expect(back.status).toBe('error');
+    const notFinite = back.results[0].paths[0].findings[0];
+    expect(notFinite.outcome).toEqual({
+      kind: 'fail',
+      diagnosis: { kind: 'not-finite' },
+      ulps: 'inf',
+      relativeError: 'inf',
+    });
+    expect(notFinite.actual.re).toBe('nan');
+    expect(back.results[2]).toEqual(JSON.parse(JSON.stringify(result.results[2])));
+  });
+
+  it('the table names each pair, its counts and diagnoses, the first failures, and ends with the disclaimer', () => {
+    const table = formatTable(result);
+    expect(table).toContain('FAIL      exp-principal-sz v1 × oracle');
+    expect(table).toContain('[not-finite 49]');
+    expect(table).toContain('ERROR     log-principal-sz v1');
+    expect(table).toContain('PASS      sqrt-principal-sz v1');
+    expect(table.trimEnd().endsWith(result.disclaimer)).toBe(true);
+    // Each value is sign-exact text with one U+2212 minus per negative part (shared/format-complex-text.ts).
+    const part = '(?:nan|inf|[0-9.]+(?:e[+-][0-9]+)?)';
+    const values = [...table.matchAll(/(?:z =|expected|got) (\S+ [+−] \S+i)/g)].map((m) => m[1]);
+    expect(values.some((v) => v!.startsWith('−'))).toBe(true);
+    for (const v of values) expect(v).toMatch(new RegExp(`^−?${part} [+−] ${part}·?i$`));
+  });
+});

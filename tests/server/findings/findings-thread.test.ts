@@ -1,0 +1,59 @@
+import { monitorEventLoopDelay } from 'node:perf_hooks';
+import { FindingsThread } from '../../../server/findings/findings-thread';
+import { HttpError } from '../../../server/http/http-error';
+import { InputError } from '../../../server/http/input-error';
+
+jest.setTimeout(60_000);
+
+describe('FindingsThread', () => {
+  const thread = new FindingsThread();
+  afterAll(() => thread.close());
+
+  it('runs the library on its own thread, so the server’s thread is free meanwhile', async () => {
+    // Opening mathjs is a synchronous require of ~1 s (library-findings.ts), then the fingerprint of √.
+    const fresh = new FindingsThread();
+    try {
+      const lag = monitorEventLoopDelay({ resolution: 10 });
+      lag.enable();
+      const started = performance.now();
+      const answer = await fresh.ask({ kind: 'fingerprint', target: 'mathjs@15.2.0/complex', functions: ['sqrt'] });
+      const took = performance.now() - started;
+      lag.disable();
+      expect(answer).toBeDefined();
+      expect(took).toBeGreaterThan(300);
+      // Had it run here, the event loop would have stalled for about the whole computation.
+      expect(lag.max / 1e6).toBeLessThan(took / 2);
+    } finally {
+      await fresh.close();
+    }
+  });
+
+  it('brings back the answers a service decides: 404 for a target that is not installed, 400 naming the field', async () => {
+    await expect(
+      thread.ask({ kind: 'fingerprint', target: 'no-such-library@1.0.0', functions: ['sqrt'] }),
+    ).rejects.toMatchObject({ status: 404, body: { kind: 'not-found' } });
+    const refused = thread.ask({
+      kind: 'cut-map',
+      target: 'complex.js@2.4.3',
+      fn: 'no-such-function',
+      box: [-1, -1, 1, 1],
+      grid: [3, 3],
+    });
+    await expect(refused).rejects.toBeInstanceOf(InputError);
+  });
+
+  it('stops a request that passes its time limit with 503, and answers the next on a fresh thread', async () => {
+    const hasty = new FindingsThread(1);
+    try {
+      const late = hasty.ask({ kind: 'fingerprint', target: 'complex.js@2.4.3', functions: ['sqrt'] });
+      await expect(late).rejects.toBeInstanceOf(HttpError);
+      await expect(late).rejects.toMatchObject({ status: 503, body: { kind: 'unavailable' } });
+    } finally {
+      await hasty.close();
+    }
+    await thread.close();
+    await expect(
+      thread.ask({ kind: 'fingerprint', target: 'complex.js@2.4.3', functions: ['sqrt'] }),
+    ).resolves.toBeDefined();
+  });
+});

@@ -1,0 +1,204 @@
+import { complexJsTarget } from '../../../harness/adapters/complex-js-target';
+import type { Target } from '../../../harness/adapters/target';
+import { ReceivedMail } from '../../../server/entities/received-mail';
+import { User } from '../../../server/entities/user';
+import { FakeSmtpServer } from '../../../server/mail/fake-smtp-server';
+import { MailOutbox } from '../../../server/mail/mail-outbox';
+import { PgBossShardQueue } from '../../../server/runs/pg-boss-shard-queue';
+import { PlanService } from '../../../server/plans/plan-service';
+import { RunService } from '../../../server/runs/run-service';
+import { ShardExecutor } from '../../../server/runs/shard-executor';
+import { approvedSuite } from '../../setup/approved-suite';
+import { createTestDatabase, type TestDatabase } from '../../setup/test-database';
+
+/**
+ * A library under test whose version 2 breaks √z in the upper half-plane (it returns the
+ * conjugate), built on complex.js 2.4.3: what it got right in version 1 and wrong in
+ * version 2 must come back as regressions, in exactly one mail.
+ */
+function fakeLibrary(version: '1' | '2'): Target {
+  const base = complexJsTarget('complex.js', '2.4.3');
+  return {
+    name: `fakelib@${version}`,
+    library: 'fakelib',
+    version,
+    settings: {},
+    supports: (op) => base.supports(op),
+    close: () => base.close(),
+    evaluate: async (op, calls) => {
+      const results = await base.evaluate(op, calls);
+      if (version === '1' || op !== 'sqrt') return results;
+      return results.map((r, i) => ('value' in r && calls[i]![0]![1] > 0 ? { value: [r.value[0], -r.value[1]] } : r));
+    },
+  };
+}
+
+describe('a plan run through the queue, with regressions and their mail', () => {
+  let db: TestDatabase;
+  let smtp: FakeSmtpServer;
+  let outbox: MailOutbox;
+  let queue: PgBossShardQueue;
+  let runs: RunService;
+  let planId: string;
+  let kwame: User;
+
+  beforeAll(async () => {
+    db = await createTestDatabase();
+    smtp = new FakeSmtpServer(db.dataSource);
+    const port = await smtp.start(0);
+    outbox = new MailOutbox(db.dataSource, { host: '127.0.0.1', port });
+    await db.dataSource.query(
+      `INSERT INTO targets (name, library, version, settings, installed, last_seen_at) VALUES ('fakelib@1', 'fakelib', '1', '{}', true, now()), ('fakelib@2', 'fakelib', '2', '{}', true, now())`,
+    );
+    await approvedSuite(db.dataSource, 'run-sqrt', 'sqrt-principal-sz');
+    await approvedSuite(db.dataSource, 'run-log', 'log-principal-sz');
+    kwame = await db.dataSource.getRepository(User).findOneByOrFail({ email: 'kwame@sheetkeeper.test' });
+    const plan = await new PlanService(db.dataSource).save(
+      kwame,
+      {
+        name: 'fakelib nightly',
+        description: '',
+        recipients: ['kwame@sheetkeeper.test'],
+        suites: ['run-sqrt', 'run-log'],
+        targets: ['fakelib@1'],
+      },
+      null,
+    );
+    planId = plan.id;
+    queue = new PgBossShardQueue(db.url, { pollingIntervalSeconds: 0.5 });
+    const executor = new ShardExecutor(db.dataSource, {
+      openTarget: (name) => (name.startsWith('fakelib@') ? fakeLibrary(name.endsWith('2') ? '2' : '1') : null),
+      outbox,
+      appUrl: 'http://127.0.0.1:8460',
+    });
+    await queue.work((id) => executor.execute(id));
+    runs = new RunService(db.dataSource, queue);
+  }, 60_000);
+  afterAll(async () => {
+    await queue.stop();
+    outbox.close();
+    await smtp.stop();
+    await db.drop();
+  });
+
+  async function finished(runId: string) {
+    // Nothing announces the end of a run but its row, so it is read every 50 ms (a 250 ms step lost
+    // 125 ms per run on average), at most 1200 times.
+    for (let i = 0; i < 1200; i += 1) {
+      const view = await runs.get(runId);
+      if (view.status === 'completed' || view.status === 'failed' || view.status === 'cancelled') return view;
+      await new Promise((resolve) => setTimeout(resolve, 50));
+    }
+    throw new Error('the run did not finish within 60 s');
+  }
+
+  it('runs every suite × target shard and stores the failures it found', async () => {
+    const first = await finished((await runs.start(planId, 'manual', kwame)).id);
+    expect(first).toMatchObject({ status: 'completed', shardsTotal: 2, shardsDone: 2, regressions: 0 });
+    expect(first.counts.pass).toBeGreaterThan(0);
+    const [stored] = await db.dataSource.query(`SELECT count(*)::int AS n FROM failures WHERE run_id = $1`, [first.id]);
+    expect(stored.n).toBe(first.counts.fail + first.counts.error + first.counts.skipped);
+    expect(await db.dataSource.getRepository(ReceivedMail).count()).toBe(0);
+    // The suites' property checks ran too, each stored with its pinned seed (√z lists 3 laws, log 4).
+    const props: { law: string; kind: string; seed: string }[] = await db.dataSource.query(
+      `SELECT law, kind, seed::text FROM property_results WHERE run_id = $1`,
+      [first.id],
+    );
+    expect(props).toHaveLength(7);
+    expect(props.every((p) => /^\d+$/.test(p.seed) && ['held', 'failed', 'not-checked'].includes(p.kind))).toBe(true);
+  }, 90_000);
+
+  it('reports what version 2 broke as regressions with a version change, in exactly one mail', async () => {
+    await new PlanService(db.dataSource).save(
+      kwame,
+      {
+        name: 'fakelib nightly',
+        description: '',
+        recipients: ['kwame@sheetkeeper.test'],
+        suites: ['run-sqrt', 'run-log'],
+        targets: ['fakelib@2'],
+      },
+      planId,
+    );
+    // Hanne is not on the plan, but subscribes to the library.
+    await db.dataSource.query(
+      `INSERT INTO subscriptions (user_id, target_key) SELECT id, 'fakelib' FROM users WHERE email = 'hanne@sheetkeeper.test'`,
+    );
+    const second = await finished((await runs.start(planId, 'manual', kwame)).id);
+    expect(second.status).toBe('completed');
+    expect(second.regressions).toBeGreaterThan(0);
+    const regressions: { suite_slug: string; z: { im: string } }[] = await db.dataSource.query(
+      `SELECT suite_slug, z FROM failures WHERE run_id = $1 AND is_regression`,
+      [second.id],
+    );
+    expect(regressions).toHaveLength(second.regressions!);
+    // Only √z changed, and only in the upper half-plane.
+    expect(new Set(regressions.map((r) => r.suite_slug))).toEqual(new Set(['run-sqrt']));
+    expect(regressions.every((r) => Number(r.z.im) > 0)).toBe(true);
+
+    await outbox.deliverDue();
+    await outbox.deliverDue();
+    const mails = await db.dataSource.getRepository(ReceivedMail).find();
+    expect(mails).toHaveLength(1);
+    expect([...mails[0]!.envelopeTo].sort()).toEqual(['hanne@sheetkeeper.test', 'kwame@sheetkeeper.test']);
+    expect(mails[0]!.subject).toBe(`[Sheetkeeper] ${second.regressions} regressions in fakelib nightly`);
+    expect(mails[0]!.textBody).toContain('fakelib: 1 → 2');
+    expect(mails[0]!.htmlBody).toContain('open the case');
+  }, 90_000);
+
+  it('keeps failures covered by an accepted deviation out of the regressions', async () => {
+    // Accept √z's failures on fakelib (any version) for now; a fresh run of version 1 then version 2 finds no regression in it.
+    const [failure] = await db.dataSource.query(
+      `SELECT id::text FROM failures WHERE suite_slug = 'run-sqrt' AND is_regression LIMIT 1`,
+    );
+    await db.dataSource.query(
+      `INSERT INTO deviations (classification, scope, target_key, suite_slug, reason, expires_at, failure_id, created_by) VALUES ('accepted', 'suite', 'fakelib', 'run-sqrt', 'known upstream', now() + interval '30 days', $1, $2)`,
+      [failure.id, kwame.id],
+    );
+    await new PlanService(db.dataSource).save(
+      kwame,
+      {
+        name: 'fakelib nightly',
+        description: '',
+        recipients: ['kwame@sheetkeeper.test'],
+        suites: ['run-sqrt', 'run-log'],
+        targets: ['fakelib@1'],
+      },
+      planId,
+    );
+    await finished((await runs.start(planId, 'manual', kwame)).id);
+    await new PlanService(db.dataSource).save(
+      kwame,
+      {
+        name: 'fakelib nightly',
+        description: '',
+        recipients: ['kwame@sheetkeeper.test'],
+        suites: ['run-sqrt', 'run-log'],
+        targets: ['fakelib@2'],
+      },
+      planId,
+    );
+    const again = await finished((await runs.start(planId, 'manual', kwame)).id);
+    const left = await db.dataSource.query(
+      `SELECT suite_slug, path_name, z, diagnosis_kind FROM failures WHERE run_id = $1 AND is_regression`,
+      [again.id],
+    );
+    expect({ regressions: again.regressions, left }).toEqual({ regressions: 0, left: [] });
+  }, 90_000);
+
+  it('cancels a queued run and skips its shards', async () => {
+    const paused = new RunService(db.dataSource, {
+      enqueue: async () => undefined,
+      work: async () => undefined,
+      stop: async () => undefined,
+    });
+    const run = await paused.start(planId, 'manual', kwame);
+    const cancelled = await paused.cancel(run.id);
+    expect(cancelled.status).toBe('cancelled');
+    const [{ n }] = await db.dataSource.query(
+      `SELECT count(*)::int AS n FROM shards WHERE run_id = $1 AND status = 'cancelled'`,
+      [run.id],
+    );
+    expect(n).toBe(2);
+  });
+});

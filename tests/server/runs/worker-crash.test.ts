@@ -1,0 +1,140 @@
+import { spawn, type ChildProcess } from 'node:child_process';
+import path from 'node:path';
+import { User } from '../../../server/entities/user';
+import { PgBossShardQueue } from '../../../server/runs/pg-boss-shard-queue';
+import { PlanService } from '../../../server/plans/plan-service';
+import { RunService } from '../../../server/runs/run-service';
+import { SuiteService } from '../../../server/suites/suite-service';
+import { validateSuite } from '../../../shared/validate-suite';
+import { demoSuiteBody } from '../../setup/demo-suite-body';
+import { createTestDatabase, type TestDatabase } from '../../setup/test-database';
+
+const ROOT = path.join(__dirname, '..', '..', '..');
+const DEMO = [
+  'asin-principal-sz',
+  'acos-principal-sz',
+  'atan-principal-sz',
+  'asinh-principal-sz',
+  'acosh-principal-sz',
+  'atanh-principal-sz',
+];
+
+/** `npm run worker` as its own process against the test database. */
+function startWorker(db: TestDatabase): ChildProcess {
+  return spawn(process.execPath, ['--import', 'tsx', 'server/worker-main.ts'], {
+    cwd: ROOT,
+    env: { ...process.env, DATABASE_URL: db.url, SHEETKEEPER_FAKE_SMTP: '0', SHEETKEEPER_WORKERS: '1' },
+    stdio: 'ignore',
+  });
+}
+
+async function until<T>(what: string, probe: () => Promise<T | null | false>, timeoutMs: number): Promise<T> {
+  const end = Date.now() + timeoutMs;
+  while (Date.now() < end) {
+    const got = await probe();
+    if (got) return got;
+    await new Promise((r) => setTimeout(r, 50));
+  }
+  throw new Error(`waited ${timeoutMs} ms for ${what}`);
+}
+
+describe('a worker killed mid-shard', () => {
+  let db: TestDatabase;
+  let queue: PgBossShardQueue;
+  let planId: string;
+  const workers: ChildProcess[] = [];
+
+  beforeAll(async () => {
+    db = await createTestDatabase();
+    const users = db.dataSource.getRepository(User);
+    const [ravi, hanne, kwame] = await Promise.all(
+      ['ravi', 'hanne', 'kwame'].map((n) => users.findOneByOrFail({ email: `${n}@sheetkeeper.test` })),
+    );
+    const suites = new SuiteService(db.dataSource);
+    for (const id of DEMO) {
+      // A 50 × 50 grid on top of the demo paths makes each shard last seconds, long enough to be killed in.
+      const body = demoSuiteBody(`crash-${id}`, id);
+      body.paths.push({
+        kind: 'grid',
+        name: 'box',
+        min: { re: '-3', im: '-3' },
+        max: { re: '3', im: '3' },
+        columns: 50,
+        rows: 50,
+      });
+      const checked = validateSuite(body, id);
+      if (!checked.ok) throw new Error(`invalid ${id}`);
+      await suites.save(ravi!, checked.suite, 'create');
+      await suites.submit(ravi!, checked.suite.id);
+      await suites.review(hanne!, checked.suite.id, 1, 'approve', '');
+    }
+    const plan = await new PlanService(db.dataSource).save(
+      kwame!,
+      {
+        name: 'crash plan',
+        description: '',
+        recipients: [],
+        suites: DEMO.map((id) => `crash-${id}`),
+        targets: ['complex.js@2.4.3'],
+      },
+      null,
+    );
+    // Short expiry and maintenance, so the dead worker's shard comes back within seconds.
+    queue = new PgBossShardQueue(db.url, { expireInSeconds: 6, maintenanceIntervalSeconds: 1, retryLimit: 5 });
+    planId = plan.id;
+  }, 60_000);
+
+  afterAll(async () => {
+    for (const w of workers) w.kill('SIGKILL');
+    await queue.stop();
+    await db.drop();
+  });
+
+  it('leaves no partial results, and the run completes with every outcome stored once', async () => {
+    const kwame = await db.dataSource.getRepository(User).findOneByOrFail({ email: 'kwame@sheetkeeper.test' });
+    const runs = new RunService(db.dataSource, queue);
+    const run = await runs.start(planId, 'manual', kwame);
+    workers.push(startWorker(db), startWorker(db));
+
+    // Both workers busy: then the first one is certainly in the middle of a shard.
+    await until(
+      'both workers to run a shard',
+      async () =>
+        (
+          await db.dataSource.query(`SELECT count(*)::int AS n FROM shards WHERE run_id = $1 AND status = 'running'`, [
+            run.id,
+          ])
+        )[0].n >= 2,
+      60_000,
+    );
+    workers[0]!.kill('SIGKILL');
+    workers.push(startWorker(db));
+
+    const done = await until(
+      'the run to complete',
+      async () => {
+        const v = await runs.get(run.id);
+        return v.status === 'completed' ? v : null;
+      },
+      120_000,
+    );
+    expect(done.shardsDone).toBe(DEMO.length);
+
+    const [dupes] = await db.dataSource.query(
+      `SELECT count(*)::int AS n FROM (SELECT shard_id, path_name, point_index FROM failures WHERE run_id = $1 GROUP BY 1, 2, 3 HAVING count(*) > 1) d`,
+      [run.id],
+    );
+    expect(dupes.n).toBe(0);
+    const [summaries] = await db.dataSource.query(`SELECT count(*)::int AS n FROM path_summaries WHERE run_id = $1`, [
+      run.id,
+    ]);
+    const paths = DEMO.reduce((sum, id) => sum + demoSuiteBody('x', id).paths.length + 1, 0);
+    expect(summaries.n).toBe(paths);
+    const [stored] = await db.dataSource.query(`SELECT count(*)::int AS n FROM failures WHERE run_id = $1`, [run.id]);
+    expect(stored.n).toBe(done.counts.fail + done.counts.error + done.counts.skipped);
+    const [retried] = await db.dataSource.query(`SELECT max(attempts)::int AS n FROM shards WHERE run_id = $1`, [
+      run.id,
+    ]);
+    expect(retried.n).toBeGreaterThanOrEqual(2);
+  }, 240_000);
+});
