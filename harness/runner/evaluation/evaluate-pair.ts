@@ -68,7 +68,7 @@ export async function evaluatePair(
   try {
     target = descriptor.open();
   } catch (e) {
-    return failed(`the slice failed: ${errorText(e)}`, 'error');
+    return failed(`the evaluation failed: ${errorText(e)}`, 'error');
   }
 
   const controller = new AbortController();
@@ -101,7 +101,7 @@ export async function evaluatePair(
   }
   if (!first.ok) {
     await target.close().catch(() => undefined);
-    return failed(`the slice failed: ${errorText(first.e)}`, 'error');
+    return failed(`the evaluation failed: ${errorText(first.e)}`, 'error');
   }
   return { result: first.r, target };
 }

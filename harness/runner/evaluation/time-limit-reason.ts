@@ -4,5 +4,5 @@
  * evaluates each shard as one slice of all its paths.
  */
 export function timeLimitReason(targetName: string, limitMs: number): string {
-  return `${targetName} did not finish within the slice time limit of ${limitMs} ms; the slice was stopped and the target restarted`;
+  return `${targetName} did not finish within the time limit of ${limitMs} ms; the evaluation was stopped and the target restarted`;
 }

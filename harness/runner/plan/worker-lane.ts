@@ -89,7 +89,7 @@ export function workerLane(cacheDir: string | null, cache: ReferenceCache): Slic
           if (m.type === 'result' && m.slice === slice.id)
             settle({ kind: 'result', result: m.result, records: m.records });
           else if (m.type === 'failed' && m.slice === slice.id)
-            settle({ kind: 'failed', reason: `the slice failed: ${m.error}`, status: 'error', terminate: false });
+            settle({ kind: 'failed', reason: `the evaluation failed: ${m.error}`, status: 'error', terminate: false });
         };
         const onError = (e: Error) =>
           settle({ kind: 'failed', reason: `the worker crashed: ${e.message}`, status: 'error', terminate: true });

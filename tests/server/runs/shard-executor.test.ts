@@ -97,13 +97,13 @@ describe('the shard executor', () => {
 
   it('names a target that is not installed on this worker', () => {
     expect(rows.find((r) => r.target_name === 'ghost@1')!.errors).toEqual([
-      'the slice failed: target ghost@1 is not installed on this worker',
+      'the evaluation failed: target ghost@1 is not installed on this worker',
     ]);
   });
 
   it('stops a target that does not answer at the time limit, with the words the CLI uses, and closes it', () => {
     expect(rows.find((r) => r.target_name === 'hung@1')!.errors).toEqual([
-      'hung@1 did not finish within the slice time limit of 500 ms; the slice was stopped and the target restarted',
+      'hung@1 did not finish within the time limit of 500 ms; the evaluation was stopped and the target restarted',
     ]);
     expect(closed).toEqual(['hung@1']);
   });

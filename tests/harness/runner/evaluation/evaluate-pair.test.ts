@@ -107,7 +107,7 @@ describe('evaluatePair', () => {
     expect(Date.now() - started).toBeLessThan(5_000);
     expect(result.status).toBe('error');
     expect(result.errors).toEqual([
-      'oracle@1 did not finish within the slice time limit of 300 ms; the slice was stopped and the target restarted',
+      'oracle@1 did not finish within the time limit of 300 ms; the evaluation was stopped and the target restarted',
     ]);
     expect(result.checked.points).toBe(154);
     expect(result.counts).toEqual({ pass: 0, fail: 0, error: 154, skipped: 0 });
@@ -125,9 +125,9 @@ describe('evaluatePair', () => {
       }),
       { cache, paths: [1], pathPoints: [40, 65, 49] },
     );
-    expect(result.errors).toEqual(['the slice failed: no such library']);
+    expect(result.errors).toEqual(['the evaluation failed: no such library']);
     expect(result.paths.map((p) => [p.name, p.counts.error, p.error])).toEqual([
-      ['around branch point 1', 65, 'the slice failed: no such library'],
+      ['around branch point 1', 65, 'the evaluation failed: no such library'],
     ]);
     expect(result.checked.tolerance).toBe('4 ulps per part');
     expect(target).toBeNull();

@@ -98,7 +98,7 @@ describe('runPlan', () => {
     const [sqrt, exp, log] = result.results;
     expect(sqrt!.status).toBe('error');
     expect(sqrt!.counts.error).toBe(sqrt!.checked.points);
-    expect(sqrt!.errors[0]).toMatch(/did not finish within the slice time limit of 1500 ms/);
+    expect(sqrt!.errors[0]).toMatch(/did not finish within the time limit of 1500 ms/);
     expect(exp!.status).toBe('error');
     expect(exp!.paths[0]!.findings[0]!.outcome).toMatchObject({
       kind: 'error',
