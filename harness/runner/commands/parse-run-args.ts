@@ -20,6 +20,8 @@ const VALUE_FLAGS = new Set([
   '--seed',
   '--workers',
   '--slice-time-limit',
+  // The flag's name before slices and shards got separate words; CI scripts written then keep working.
+  '--shard-time-limit',
   '--cache',
   '--max-findings',
 ]);
@@ -85,6 +87,7 @@ export function parseRunArgs(argv: string[]): RunArgs | { error: string } {
         args.workers = n;
         break;
       }
+      case '--shard-time-limit':
       case '--slice-time-limit': {
         const n = whole('slice-time-limit', 1);
         if (typeof n !== 'number') return n;
