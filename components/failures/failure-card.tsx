@@ -7,6 +7,7 @@ import { describeFailure } from './describe-failure';
 import { formatComplexText } from '../../shared/format-complex-text';
 import { DiagnosisLabel } from './diagnosis-label';
 import { DIAGNOSIS_STYLES } from './diagnosis-styles';
+import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
 /** One failure on a phone: the diagnosis first, then where it happened and the values, the whole card a link to the case. */
 export function FailureCard({ failure: f }: { failure: FailureView }) {
@@ -48,11 +49,7 @@ export function FailureCard({ failure: f }: { failure: FailureView }) {
 
 const styles = StyleSheet.create({
   card: {
-    backgroundColor: theme.color.panel,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    padding: theme.space(4),
+    ...PANEL_BOX_STYLE,
     gap: theme.space(2),
     minHeight: theme.touch,
   },

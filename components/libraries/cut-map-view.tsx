@@ -12,6 +12,7 @@ import { ComputedNote } from './computed-note';
 import { CutMapPicture } from '../pictures/cut-map-picture';
 import { QueryState } from '../ui/query-state';
 import { TextField } from '../ui/text-field';
+import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
 const DEFAULT_BOX = '-4,-4,4,4';
 const DEFAULT_GRID = '81x81';
@@ -162,11 +163,7 @@ const styles = StyleSheet.create({
   stack: { gap: theme.space(5) },
   form: {
     gap: theme.space(3),
-    backgroundColor: theme.color.panel,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    padding: theme.space(4),
+    ...PANEL_BOX_STYLE,
   },
   formHead: { letterSpacing: 0.3 },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },

@@ -6,6 +6,7 @@ import { SkText } from '../ui/sk-text';
 import { ConventionLabel } from './convention-label';
 import { CONVENTION_STYLES, type Behaviour } from './convention-styles';
 import { formatComplexText } from '../../shared/format-complex-text';
+import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
 type CutEntry = ConventionFingerprint['cuts'][number];
 type Probe = CutEntry['probes'][number];
@@ -215,11 +216,7 @@ const styles = StyleSheet.create({
   noteLine: { lineHeight: 20 },
   noteSource: { fontFamily: theme.font.regular, fontSize: 12, color: theme.color.inkFaint, lineHeight: 18 },
   card: {
-    backgroundColor: theme.color.panel,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    padding: theme.space(4),
+    ...PANEL_BOX_STYLE,
     gap: theme.space(3),
   },
   cardBody: { gap: theme.space(2) },

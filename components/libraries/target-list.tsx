@@ -5,6 +5,7 @@ import { libraryKey } from '../../shared/library-key';
 import type { TargetView } from '../../shared/target-view';
 import { QueryState } from '../ui/query-state';
 import { SkText } from '../ui/sk-text';
+import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
 export interface TargetListProps {
   /** Opens one target's fingerprint and cut maps. */
@@ -112,11 +113,7 @@ const styles = StyleSheet.create({
   grid: { gap: theme.space(4) },
   gridWide: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-start' },
   card: {
-    backgroundColor: theme.color.panel,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    padding: theme.space(4),
+    ...PANEL_BOX_STYLE,
     gap: theme.space(1),
   },
   cardWide: { flexBasis: '48%', flexGrow: 1 },

@@ -4,6 +4,7 @@ import { theme } from '../../constants/theme';
 import type { VersionMatrix } from '../../shared/version-matrix';
 import { SkText } from '../ui/sk-text';
 import { formatComplexText } from '../../shared/format-complex-text';
+import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
 type SuiteEntry = VersionMatrix['suites'][number];
 type Change = SuiteEntry['changes'][number];
@@ -199,11 +200,7 @@ const styles = StyleSheet.create({
   },
   noteLine: { lineHeight: 20 },
   card: {
-    backgroundColor: theme.color.panel,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    padding: theme.space(4),
+    ...PANEL_BOX_STYLE,
     gap: theme.space(3),
   },
   cardBody: { gap: theme.space(3) },

@@ -6,6 +6,7 @@ import { theme } from '../../constants/theme';
 import { ActionButton } from '../ui/action-button';
 import { QueryState } from '../ui/query-state';
 import { SkText } from '../ui/sk-text';
+import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
 /** What the local mail server received, newest first: cards on a phone, rows on a wide screen. */
 export function MailList() {
@@ -87,11 +88,7 @@ export function MailList() {
 const styles = StyleSheet.create({
   list: { gap: theme.space(2) },
   card: {
-    backgroundColor: theme.color.panel,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    padding: theme.space(4),
+    ...PANEL_BOX_STYLE,
     gap: theme.space(1),
   },
   row: {

@@ -5,6 +5,7 @@ import { theme } from '../../constants/theme';
 import type { ReceivedMailView } from '../../shared/received-mail-view';
 import { SkText } from '../ui/sk-text';
 import { MailHtmlFrame } from './mail-html-frame';
+import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
 type Part = 'html' | 'text';
 
@@ -78,11 +79,7 @@ export function MailView({ message }: { message: ReceivedMailView }) {
 const styles = StyleSheet.create({
   view: { gap: theme.space(3) },
   envelope: {
-    backgroundColor: theme.color.panel,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    padding: theme.space(4),
+    ...PANEL_BOX_STYLE,
     gap: theme.space(1),
   },
   subject: { marginBottom: theme.space(1) },
@@ -102,11 +99,7 @@ const styles = StyleSheet.create({
   tabTextOn: { color: theme.color.accentInk },
   text: {
     lineHeight: 20,
-    backgroundColor: theme.color.panel,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    padding: theme.space(4),
+    ...PANEL_BOX_STYLE,
     whiteSpace: 'pre-wrap',
   } as object,
 });

@@ -6,6 +6,7 @@ import type { OverviewView, WaitingSuite } from '../../shared/overview-view';
 import type { Role } from '../../shared/roles';
 import { formatWhen } from '../runs/format-when';
 import { SkText } from '../ui/sk-text';
+import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
 type NeedsMe = OverviewView['needsMe'];
 
@@ -134,11 +135,7 @@ export function NeedsMePanel({ needsMe, role, now }: { needsMe: NeedsMe; role: R
 
 const styles = StyleSheet.create({
   panel: {
-    backgroundColor: theme.color.panel,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    padding: theme.space(4),
+    ...PANEL_BOX_STYLE,
     gap: theme.space(4),
   },
   group: { gap: theme.space(1) },

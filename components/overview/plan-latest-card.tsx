@@ -8,6 +8,7 @@ import { OutcomeCounts } from '../runs/outcome-counts';
 import { runDuration } from '../runs/run-duration';
 import { RunStatusBadge } from '../runs/run-status-badge';
 import { SkText } from '../ui/sk-text';
+import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
 /** How failures and errors moved since the previous completed run, in words with arrows. */
 function change(latest: Counts, previous: Counts): string {
@@ -96,11 +97,7 @@ export function PlanLatestCard({
 
 const styles = StyleSheet.create({
   card: {
-    backgroundColor: theme.color.panel,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    padding: theme.space(4),
+    ...PANEL_BOX_STYLE,
     gap: theme.space(2),
   },
   // Only beside other cards: in a column a basis would set the height.

@@ -7,6 +7,7 @@ import { theme } from '../../constants/theme';
 import type { ScheduleView } from '../../shared/schedule-view';
 import { QueryState } from '../ui/query-state';
 import { SkText } from '../ui/sk-text';
+import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
 /** Every plan as a card (a grid on a wide screen): what it checks, who hears, and when it runs next. */
 export function PlanList() {
@@ -83,11 +84,7 @@ export function PlanList() {
 const styles = StyleSheet.create({
   grid: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
   card: {
-    backgroundColor: theme.color.panel,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    padding: theme.space(4),
+    ...PANEL_BOX_STYLE,
     gap: theme.space(2),
     minHeight: 44,
   },

@@ -11,6 +11,7 @@ import { runDuration } from './run-duration';
 import { RunStatusBadge } from './run-status-badge';
 import { runVerdict } from './run-verdict';
 import { triggerWords } from './trigger-words';
+import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
 /** One run as a card (phones, and the Overview): plan, status, who and when, counts; progress while live. Opens the run. */
 export function RunCard({ run, now }: { run: RunView; now?: number }) {
@@ -49,11 +50,7 @@ export function RunCard({ run, now }: { run: RunView; now?: number }) {
 
 const styles = StyleSheet.create({
   card: {
-    backgroundColor: theme.color.panel,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    padding: theme.space(4),
+    ...PANEL_BOX_STYLE,
     gap: theme.space(2),
     minHeight: theme.touch,
   },

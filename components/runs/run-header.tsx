@@ -10,6 +10,7 @@ import { ProgressBar } from './progress-bar';
 import { runDuration } from './run-duration';
 import { RunStatusBadge } from './run-status-badge';
 import { triggerWords } from './trigger-words';
+import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
 /** The top of a run: its status, who started it and when, how long, its point counts, and progress and cancel while it is live. */
 export function RunHeader({ run, canCancel }: { run: RunView; canCancel: boolean }) {
@@ -55,11 +56,7 @@ export function RunHeader({ run, canCancel }: { run: RunView; canCancel: boolean
 
 const styles = StyleSheet.create({
   card: {
-    backgroundColor: theme.color.panel,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    padding: theme.space(4),
+    ...PANEL_BOX_STYLE,
     gap: theme.space(3),
   },
   facts: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(4) },

@@ -7,6 +7,7 @@ import { ROLES, type Role } from '../../shared/roles';
 import type { PublicUser } from '../../shared/public-user';
 import { QueryState } from '../ui/query-state';
 import { SkText } from '../ui/sk-text';
+import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
 /** Admin list of users: cards on a phone, rows on a wide screen; the role is changed in place. */
 export function UsersList({ me }: { me: PublicUser }) {
@@ -99,11 +100,7 @@ const styles = StyleSheet.create({
     borderRadius: theme.radius,
   },
   card: {
-    backgroundColor: theme.color.panel,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    padding: theme.space(4),
+    ...PANEL_BOX_STYLE,
     gap: theme.space(3),
   },
   row: {

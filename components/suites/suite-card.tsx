@@ -4,6 +4,7 @@ import { theme } from '../../constants/theme';
 import type { SuiteSummary } from '../../shared/suite-summary';
 import { SkText } from '../ui/sk-text';
 import { SuiteStatusLabel } from './suite-status-label';
+import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
 /** One suite in the list: title, subject, its latest version's status, and which version plans use. */
 export function SuiteCard({ suite, href }: { suite: SuiteSummary; href?: string }) {
@@ -40,11 +41,7 @@ export function SuiteCard({ suite, href }: { suite: SuiteSummary; href?: string 
 
 const styles = StyleSheet.create({
   card: {
-    backgroundColor: theme.color.panel,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    padding: theme.space(4),
+    ...PANEL_BOX_STYLE,
     gap: theme.space(2),
     minHeight: theme.touch,
     flexGrow: 1,

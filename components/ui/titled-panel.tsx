@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import { SkText } from './sk-text';
+import { PANEL_BOX_STYLE } from './panel-box-style';
 
 /** A panel with a heading and an optional line saying what it is for. */
 export function TitledPanel({
@@ -32,11 +33,7 @@ export function TitledPanel({
 
 const styles = StyleSheet.create({
   panel: {
-    backgroundColor: theme.color.panel,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    padding: theme.space(4),
+    ...PANEL_BOX_STYLE,
     gap: theme.space(3),
   },
   lead: { lineHeight: 20 },
