@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { theme } from '../../constants/theme';
+import { DisclosureToggle } from '../ui/disclosure-toggle';
 import { SkText } from '../ui/sk-text';
 
 export interface ColumnOption<T extends string> {
@@ -23,17 +24,16 @@ export function ColumnChooser<T extends string>({
   const [open, setOpen] = useState(false);
   return (
     <View style={styles.root}>
-      <Pressable
-        accessibilityRole="button"
+      <DisclosureToggle
+        open={open}
+        onToggle={() => setOpen(!open)}
         accessibilityLabel="Choose columns"
-        aria-expanded={open}
-        onPress={() => setOpen(!open)}
         style={styles.toggle}
       >
         <SkText variant="smallLabel" tone="ink">
           {open ? '↑' : '↓'} Columns ({shown.length} of {options.length})
         </SkText>
-      </Pressable>
+      </DisclosureToggle>
       {open ? (
         <View style={styles.list} accessibilityLabel="Columns">
           {options.map((o) => {
@@ -65,15 +65,7 @@ export function ColumnChooser<T extends string>({
 
 const styles = StyleSheet.create({
   root: { gap: theme.space(2) },
-  toggle: {
-    minHeight: theme.touch,
-    justifyContent: 'center',
-    paddingHorizontal: theme.space(4),
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    alignSelf: 'flex-start',
-  },
+  toggle: { alignSelf: 'flex-start' },
   list: {
     flexDirection: 'row',
     flexWrap: 'wrap',

@@ -1,11 +1,12 @@
 import { useState } from 'react';
-import { Pressable, StyleSheet, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import type { FailureFilters } from '../../client/failure-filters';
 import { theme } from '../../constants/theme';
 import { DIAGNOSIS_KINDS } from '../../shared/diagnosis-kinds';
 import { failureQuery } from '../../shared/schemas/failure-query';
 import { ActionButton } from '../ui/action-button';
 import { ChipGroup } from '../ui/chip-group';
+import { DisclosureToggle } from '../ui/disclosure-toggle';
 import { SkText } from '../ui/sk-text';
 import { DIAGNOSIS_STYLES } from './diagnosis-styles';
 import { TextField } from '../ui/text-field';
@@ -89,17 +90,16 @@ export function FailureFiltersPanel({
   return (
     <View style={styles.panel}>
       {compact ? (
-        <Pressable
-          accessibilityRole="button"
+        <DisclosureToggle
+          open={open}
+          onToggle={() => setOpen(!open)}
           accessibilityLabel={`Filters, ${on} on`}
-          aria-expanded={open}
-          onPress={() => setOpen(!open)}
           style={styles.toggle}
         >
           <SkText variant="label">
             {open ? '↑' : '↓'} Filters{on ? ` · ${on} on` : ''}
           </SkText>
-        </Pressable>
+        </DisclosureToggle>
       ) : null}
       {open ? (
         <View style={styles.body}>
@@ -177,15 +177,7 @@ export function FailureFiltersPanel({
 
 const styles = StyleSheet.create({
   panel: { gap: theme.space(3) },
-  toggle: {
-    minHeight: theme.touch,
-    justifyContent: 'center',
-    paddingHorizontal: theme.space(4),
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    backgroundColor: theme.color.panel,
-  },
+  toggle: { backgroundColor: theme.color.panel },
   body: {
     gap: theme.space(4),
     padding: theme.space(4),

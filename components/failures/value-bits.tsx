@@ -1,10 +1,11 @@
 import { useState } from 'react';
-import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, Text, View } from 'react-native';
 import { formatHexDouble } from '../../harness/web';
 import { theme } from '../../constants/theme';
 import type { FailureView } from '../../shared/failure-view';
 import type { WireComplex } from '../../shared/wire-complex';
 import { parseWireNumber } from '../../shared/parse-wire-number';
+import { DisclosureToggle } from '../ui/disclosure-toggle';
 import { SkText } from '../ui/sk-text';
 import { formatComplexText } from '../../shared/format-complex-text';
 
@@ -40,17 +41,16 @@ export function ValueBits({ failure: f }: { failure: FailureView }) {
         </View>
       ))}
       {f.limits ? null : <SkText variant="caption">Not on a cut: there is one limit, the value itself.</SkText>}
-      <Pressable
-        accessibilityRole="button"
+      <DisclosureToggle
+        open={bits}
+        onToggle={() => setBits(!bits)}
         accessibilityLabel={bits ? 'Hide exact bits' : 'Show exact bits'}
-        aria-expanded={bits}
-        onPress={() => setBits(!bits)}
         style={styles.toggle}
       >
         <SkText variant="smallLabel" tone="ink">
           {bits ? '↑ Hide exact bits' : '↓ Show exact bits (C hex floats)'}
         </SkText>
-      </Pressable>
+      </DisclosureToggle>
     </View>
   );
 }
@@ -76,13 +76,5 @@ const styles = StyleSheet.create({
   },
   value: { fontFamily: theme.font.mono, fontSize: 15, color: theme.color.ink },
   hex: { backgroundColor: theme.color.paper, padding: theme.space(2), borderRadius: 4 },
-  toggle: {
-    minHeight: theme.touch,
-    justifyContent: 'center',
-    paddingHorizontal: theme.space(4),
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    alignSelf: 'flex-start',
-  },
+  toggle: { alignSelf: 'flex-start' },
 });

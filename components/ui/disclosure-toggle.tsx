@@ -1,0 +1,45 @@
+import type { ReactNode } from 'react';
+import { Pressable, StyleSheet, type StyleProp, type ViewStyle } from 'react-native';
+import { theme } from '../../constants/theme';
+
+/**
+ * A ruled button that opens and closes a part of the screen below it: one touch target tall, it tells
+ * assistive tech whether that part is open. The words (with their ↓ / ↑ arrow) are the caller's.
+ */
+export function DisclosureToggle({
+  open,
+  onToggle,
+  accessibilityLabel,
+  style,
+  children,
+}: {
+  open: boolean;
+  onToggle: () => void;
+  accessibilityLabel: string;
+  /** Additions to the ruled box, e.g. a background or how it sits in its row. */
+  style?: StyleProp<ViewStyle>;
+  children: ReactNode;
+}) {
+  return (
+    <Pressable
+      accessibilityRole="button"
+      accessibilityLabel={accessibilityLabel}
+      aria-expanded={open}
+      onPress={onToggle}
+      style={[styles.toggle, style]}
+    >
+      {children}
+    </Pressable>
+  );
+}
+
+const styles = StyleSheet.create({
+  toggle: {
+    minHeight: theme.touch,
+    justifyContent: 'center',
+    paddingHorizontal: theme.space(4),
+    borderWidth: 1,
+    borderColor: theme.color.rule,
+    borderRadius: theme.radius,
+  },
+});
