@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { ConventionFingerprint } from '../../shared/convention-fingerprint';
+import { ColumnHead } from '../ui/column-head';
 import { SkText } from '../ui/sk-text';
 import { ConventionLabel } from './convention-label';
 import { CONVENTION_STYLES, type Behaviour } from './convention-styles';
@@ -85,18 +86,10 @@ export function FingerprintTable({ fingerprint, onOpenCutMap }: FingerprintTable
 
       {wide ? (
         <View style={[styles.row, styles.headRow]}>
-          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.fnCol]}>
-            Function
-          </SkText>
-          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.cutCol]}>
-            Cut
-          </SkText>
-          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.verdictCol]}>
-            Convention
-          </SkText>
-          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.evidenceCol]}>
-            Evidence
-          </SkText>
+          <ColumnHead style={styles.fnCol}>Function</ColumnHead>
+          <ColumnHead style={styles.cutCol}>Cut</ColumnHead>
+          <ColumnHead style={styles.verdictCol}>Convention</ColumnHead>
+          <ColumnHead style={styles.evidenceCol}>Evidence</ColumnHead>
         </View>
       ) : null}
       {fingerprint.cuts.map((entry) => (
@@ -229,7 +222,6 @@ const styles = StyleSheet.create({
   },
   row: { flexDirection: 'row', alignItems: 'center', gap: theme.space(3), paddingVertical: theme.space(2) },
   headRow: { paddingHorizontal: theme.space(3) },
-  head: { textTransform: 'uppercase', letterSpacing: 0.8 },
   fnCol: { flex: 2 },
   cutCol: { flex: 2 },
   verdictCol: { flex: 4 },

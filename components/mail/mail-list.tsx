@@ -5,6 +5,7 @@ import { useOutbox } from '../../client/use-outbox';
 import { theme } from '../../constants/theme';
 import { ActionButton } from '../ui/action-button';
 import { QueryState } from '../ui/query-state';
+import { ColumnHead } from '../ui/column-head';
 import { SkText } from '../ui/sk-text';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
@@ -28,15 +29,9 @@ export function MailList() {
     <View style={styles.list} testID="mail-list">
       {wide ? (
         <View style={[styles.row, styles.headRow]}>
-          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.whenCol]}>
-            Received
-          </SkText>
-          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.subjectCol]}>
-            Subject
-          </SkText>
-          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.peopleCol]}>
-            From → to
-          </SkText>
+          <ColumnHead style={styles.whenCol}>Received</ColumnHead>
+          <ColumnHead style={styles.subjectCol}>Subject</ColumnHead>
+          <ColumnHead style={styles.peopleCol}>From → to</ColumnHead>
         </View>
       ) : null}
       {messages.map((m) => (
@@ -103,7 +98,6 @@ const styles = StyleSheet.create({
     backgroundColor: theme.color.panel,
   },
   headRow: { backgroundColor: 'transparent', minHeight: 0 },
-  head: { textTransform: 'uppercase', letterSpacing: 0.8 },
   whenCol: { width: 170 },
   subjectCol: { flex: 3 },
   peopleCol: { flex: 2 },

@@ -6,6 +6,7 @@ import { theme } from '../../constants/theme';
 import { ROLES, type Role } from '../../shared/roles';
 import type { PublicUser } from '../../shared/public-user';
 import { QueryState } from '../ui/query-state';
+import { ColumnHead } from '../ui/column-head';
 import { SkText } from '../ui/sk-text';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
@@ -32,15 +33,9 @@ export function UsersList({ me }: { me: PublicUser }) {
       ) : null}
       {wide ? (
         <View style={[styles.row, styles.headRow]}>
-          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.nameCol]}>
-            Name
-          </SkText>
-          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.emailCol]}>
-            E-mail
-          </SkText>
-          <SkText variant="smallLabel" tone="inkFaint" style={[styles.head, styles.roleCol]}>
-            Role
-          </SkText>
+          <ColumnHead style={styles.nameCol}>Name</ColumnHead>
+          <ColumnHead style={styles.emailCol}>E-mail</ColumnHead>
+          <ColumnHead style={styles.roleCol}>Role</ColumnHead>
         </View>
       ) : null}
       {users.data.map((user) => (
@@ -113,7 +108,6 @@ const styles = StyleSheet.create({
     backgroundColor: theme.color.panel,
   },
   headRow: { backgroundColor: 'transparent' },
-  head: { textTransform: 'uppercase', letterSpacing: 0.8 },
   nameCol: { flex: 2 },
   emailCol: { flex: 3 },
   roleCol: { flex: 5 },
