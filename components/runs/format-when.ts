@@ -1,3 +1,5 @@
+import { formatDate } from '../../client/format-date';
+
 /**
  * When something happened, relative to `now` for the recent past ("just now", "12 min ago",
  * "5 h ago") and as a date after a day ("3 Feb 2026, 14:05", in the device's zone).
@@ -8,12 +10,5 @@ export function formatWhen(iso: string, now: number = Date.now()): string {
   if (minutes < 1) return 'just now';
   if (minutes < 60) return `${minutes} min ago`;
   if (minutes < 24 * 60) return `${Math.round(minutes / 60)} h ago`;
-  return new Intl.DateTimeFormat('en-GB', {
-    day: 'numeric',
-    month: 'short',
-    year: 'numeric',
-    hour: '2-digit',
-    minute: '2-digit',
-    hourCycle: 'h23',
-  }).format(new Date(then));
+  return formatDate(iso);
 }
