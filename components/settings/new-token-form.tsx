@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { ApiRequestError } from '../../client/api-request-error';
 import { serverFieldErrors } from '../../client/server-field-errors';
 import { useCreateToken } from '../../client/use-create-token';
@@ -8,6 +8,7 @@ import { tokenBody } from '../../shared/schemas/token-body';
 import { ActionButton } from '../ui/action-button';
 import { NewTokenSecret } from './new-token-secret';
 import { TextField } from '../ui/text-field';
+import { FailureAlert } from '../ui/failure-alert';
 
 /** Makes an API token from a name, then shows its secret once. */
 export function NewTokenForm() {
@@ -52,11 +53,7 @@ export function NewTokenForm() {
         onSubmitEditing={submit}
         testID="token-name"
       />
-      {other ? (
-        <Text accessibilityRole="alert" style={styles.failure}>
-          ❌ {other}
-        </Text>
-      ) : null}
+      {other ? <FailureAlert message={other} /> : null}
       <ActionButton label="Make token" onPress={submit} busy={create.isPending} />
     </View>
   );
@@ -64,11 +61,4 @@ export function NewTokenForm() {
 
 const styles = StyleSheet.create({
   form: { gap: theme.space(3) },
-  failure: {
-    fontFamily: theme.font.medium,
-    color: theme.color.danger,
-    backgroundColor: theme.color.dangerSoft,
-    padding: theme.space(3),
-    borderRadius: theme.radius,
-  },
 });

@@ -6,6 +6,7 @@ import { theme } from '../../constants/theme';
 import { OnOffSwitch } from '../ui/on-off-switch';
 import { QueryState } from '../ui/query-state';
 import { SlashWrappedName } from './slash-wrapped-name';
+import { FailureAlert } from '../ui/failure-alert';
 
 /** Which libraries' regressions mail me: one switch per library, saved as it is flipped. */
 export function SubscriptionList() {
@@ -32,11 +33,7 @@ export function SubscriptionList() {
 
   return (
     <View style={styles.list} testID="subscription-list">
-      {failure ? (
-        <Text accessibilityRole="alert" style={styles.failure}>
-          ❌ {failure}
-        </Text>
-      ) : null}
+      {failure ? <FailureAlert message={failure} style={styles.failure} /> : null}
       {libraries.map((key) => {
         const on = targetKeys.includes(key);
         return (
@@ -63,14 +60,7 @@ export function SubscriptionList() {
 
 const styles = StyleSheet.create({
   list: { gap: 0 },
-  failure: {
-    fontFamily: theme.font.medium,
-    color: theme.color.danger,
-    backgroundColor: theme.color.dangerSoft,
-    padding: theme.space(3),
-    borderRadius: theme.radius,
-    marginBottom: theme.space(2),
-  },
+  failure: { marginBottom: theme.space(2) },
   row: {
     flexDirection: 'row',
     alignItems: 'center',

@@ -1,4 +1,4 @@
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { ApiRequestError } from '../../client/api-request-error';
 import { formatDate } from '../../client/format-date';
 import { useRevokeToken } from '../../client/use-revoke-token';
@@ -7,6 +7,7 @@ import { theme } from '../../constants/theme';
 import { ConfirmAction } from '../ui/confirm-action';
 import { QueryState } from '../ui/query-state';
 import { SkText } from '../ui/sk-text';
+import { FailureAlert } from '../ui/failure-alert';
 
 /** My API tokens: name, first characters, made, last used, and revoke (asked twice). Revoked ones stay listed. */
 export function TokenList() {
@@ -31,11 +32,7 @@ export function TokenList() {
 
   return (
     <View style={styles.list} testID="token-list">
-      {failure ? (
-        <Text accessibilityRole="alert" style={styles.failure}>
-          ❌ {failure}
-        </Text>
-      ) : null}
+      {failure ? <FailureAlert message={failure} style={styles.failure} /> : null}
       {tokens.data.map((t) => (
         <View key={t.id} style={[styles.row, t.revokedAt ? styles.revoked : null]} testID={`token-${t.name}`}>
           <View style={styles.words}>
@@ -70,14 +67,7 @@ export function TokenList() {
 
 const styles = StyleSheet.create({
   list: { gap: 0 },
-  failure: {
-    fontFamily: theme.font.medium,
-    color: theme.color.danger,
-    backgroundColor: theme.color.dangerSoft,
-    padding: theme.space(3),
-    borderRadius: theme.radius,
-    marginBottom: theme.space(2),
-  },
+  failure: { marginBottom: theme.space(2) },
   row: {
     flexDirection: 'row',
     flexWrap: 'wrap',

@@ -1,4 +1,4 @@
-import { Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
+import { Pressable, StyleSheet, useWindowDimensions, View } from 'react-native';
 import { ApiRequestError } from '../../client/api-request-error';
 import { useChangeRole } from '../../client/use-change-role';
 import { useUsers } from '../../client/use-users';
@@ -9,6 +9,7 @@ import { QueryState } from '../ui/query-state';
 import { ColumnHead } from '../ui/column-head';
 import { SkText } from '../ui/sk-text';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
+import { FailureAlert } from '../ui/failure-alert';
 
 /** Admin list of users: cards on a phone, rows on a wide screen; the role is changed in place. */
 export function UsersList({ me }: { me: PublicUser }) {
@@ -26,11 +27,7 @@ export function UsersList({ me }: { me: PublicUser }) {
 
   return (
     <View style={styles.list}>
-      {failure ? (
-        <Text accessibilityRole="alert" style={styles.failure}>
-          × {failure}
-        </Text>
-      ) : null}
+      {failure ? <FailureAlert message={failure} glyph="×" /> : null}
       {wide ? (
         <View style={[styles.row, styles.headRow]}>
           <ColumnHead style={styles.nameCol}>Name</ColumnHead>
@@ -87,13 +84,6 @@ export function UsersList({ me }: { me: PublicUser }) {
 
 const styles = StyleSheet.create({
   list: { gap: theme.space(2) },
-  failure: {
-    fontFamily: theme.font.medium,
-    color: theme.color.danger,
-    backgroundColor: theme.color.dangerSoft,
-    padding: theme.space(3),
-    borderRadius: theme.radius,
-  },
   card: {
     ...PANEL_BOX_STYLE,
     gap: theme.space(3),

@@ -1,6 +1,7 @@
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import { ActionButton } from './action-button';
+import { FailureAlert } from './failure-alert';
 
 /** The foot of a form: a refusal that names no field, then save and cancel. */
 export function FormActions({
@@ -18,11 +19,7 @@ export function FormActions({
 }) {
   return (
     <>
-      {failure ? (
-        <Text accessibilityRole="alert" style={styles.failure}>
-          ❌ {failure}
-        </Text>
-      ) : null}
+      {failure ? <FailureAlert message={failure} /> : null}
       <View style={styles.buttons}>
         <ActionButton label={saveLabel} onPress={onSave} busy={busy} />
         <ActionButton label="Cancel" tone="quiet" onPress={onCancel} />
@@ -32,12 +29,5 @@ export function FormActions({
 }
 
 const styles = StyleSheet.create({
-  failure: {
-    fontFamily: theme.font.medium,
-    color: theme.color.danger,
-    backgroundColor: theme.color.dangerSoft,
-    padding: theme.space(3),
-    borderRadius: theme.radius,
-  },
   buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
 });
