@@ -3,6 +3,7 @@ import { Pressable, StyleSheet, View } from 'react-native';
 import { isLiveRun } from '../../client/is-live-run';
 import { theme } from '../../constants/theme';
 import type { RunView } from '../../shared/run-view';
+import { ColumnHead } from '../ui/column-head';
 import { SkText } from '../ui/sk-text';
 import { formatWhen } from './format-when';
 import { OutcomeCounts } from './outcome-counts';
@@ -17,21 +18,21 @@ export function RunsTable({ runs, now }: { runs: RunView[]; now?: number }) {
   return (
     <View style={styles.table} role="table" aria-label="Runs">
       <View style={[styles.row, styles.headRow]} role="row">
-        <SkText variant="smallLabel" tone="inkFaint" role="columnheader" style={[styles.head, styles.status]}>
+        <ColumnHead role="columnheader" style={styles.status}>
           Status
-        </SkText>
-        <SkText variant="smallLabel" tone="inkFaint" role="columnheader" style={[styles.head, styles.plan]}>
+        </ColumnHead>
+        <ColumnHead role="columnheader" style={styles.plan}>
           Plan
-        </SkText>
-        <SkText variant="smallLabel" tone="inkFaint" role="columnheader" style={[styles.head, styles.who]}>
+        </ColumnHead>
+        <ColumnHead role="columnheader" style={styles.who}>
           Started
-        </SkText>
-        <SkText variant="smallLabel" tone="inkFaint" role="columnheader" style={[styles.head, styles.duration]}>
+        </ColumnHead>
+        <ColumnHead role="columnheader" style={styles.duration}>
           Duration
-        </SkText>
-        <SkText variant="smallLabel" tone="inkFaint" role="columnheader" style={[styles.head, styles.counts]}>
+        </ColumnHead>
+        <ColumnHead role="columnheader" style={styles.counts}>
           Points
-        </SkText>
+        </ColumnHead>
       </View>
       {runs.map((run) => (
         <Link key={run.id} href={`/runs/${run.id}`} asChild>
@@ -95,7 +96,6 @@ const styles = StyleSheet.create({
   },
   headRow: { backgroundColor: theme.color.paper, paddingVertical: theme.space(2) },
   bodyRow: { minHeight: 64 },
-  head: { textTransform: 'uppercase', letterSpacing: 0.8 },
   status: { width: 220 },
   plan: { flex: 2, gap: 2 },
   who: { flex: 2, gap: 2 },

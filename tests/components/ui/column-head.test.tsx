@@ -13,4 +13,15 @@ describe('ColumnHead', () => {
     expect(style.fontFamily).toContain(theme.font.medium);
     expect(style.flexGrow).toBe('3');
   });
+
+  it('is a column header for assistive tech when asked to be', () => {
+    render(
+      <>
+        <ColumnHead role="columnheader">Status</ColumnHead>
+        <ColumnHead>Name</ColumnHead>
+      </>,
+    );
+    expect(screen.getByRole('columnheader', { name: 'Status' })).toBeTruthy();
+    expect(screen.queryByRole('columnheader', { name: 'Name' })).toBeNull();
+  });
 });
