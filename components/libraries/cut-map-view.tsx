@@ -13,6 +13,7 @@ import { CutMapPicture } from '../pictures/cut-map-picture';
 import { QueryState } from '../ui/query-state';
 import { TextField } from '../ui/text-field';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
+import { CHIP_BOX_STYLE } from '../ui/chip-box-style';
 
 const DEFAULT_BOX = '-4,-4,4,4';
 const DEFAULT_GRID = '81x81';
@@ -168,12 +169,7 @@ const styles = StyleSheet.create({
   formHead: { letterSpacing: 0.3 },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
   chip: {
-    minHeight: 44,
-    justifyContent: 'center',
-    paddingHorizontal: theme.space(3),
-    borderRadius: theme.radius,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
+    ...CHIP_BOX_STYLE,
   },
   chipOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
   chipTextOn: { color: theme.color.accentInk },

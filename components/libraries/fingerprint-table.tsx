@@ -8,6 +8,7 @@ import { ConventionLabel } from './convention-label';
 import { CONVENTION_STYLES, type Behaviour } from './convention-styles';
 import { formatComplexText } from '../../shared/format-complex-text';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
+import { CHIP_BOX_STYLE } from '../ui/chip-box-style';
 
 type CutEntry = ConventionFingerprint['cuts'][number];
 type Probe = CutEntry['probes'][number];
@@ -231,12 +232,7 @@ const styles = StyleSheet.create({
   small: { lineHeight: 20 },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
   linkButton: {
-    minHeight: 44,
-    justifyContent: 'center',
-    paddingHorizontal: theme.space(3),
-    borderRadius: theme.radius,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
+    ...CHIP_BOX_STYLE,
   },
   probes: { gap: theme.space(2), paddingBottom: theme.space(3) },
   probeGrid: { flexDirection: 'row', flexWrap: 'wrap', columnGap: theme.space(4) },

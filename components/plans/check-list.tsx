@@ -4,6 +4,7 @@ import { theme } from '../../constants/theme';
 import { INPUT_BOX_STYLE } from '../ui/input-box-style';
 import { RuleLines } from '../ui/rule-lines';
 import { SkText } from '../ui/sk-text';
+import { CHIP_BOX_STYLE } from '../ui/chip-box-style';
 
 export interface CheckListItem {
   key: string;
@@ -134,12 +135,7 @@ const styles = StyleSheet.create({
     ...INPUT_BOX_STYLE,
   },
   tool: {
-    minHeight: 44,
-    justifyContent: 'center',
-    paddingHorizontal: theme.space(3),
-    borderRadius: theme.radius,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
+    ...CHIP_BOX_STYLE,
   },
   list: {
     flexDirection: 'row',

@@ -11,6 +11,7 @@ import { FormActions } from '../ui/form-actions';
 import { SkText } from '../ui/sk-text';
 import { NextRuns } from './next-runs';
 import { TextField } from '../ui/text-field';
+import { CHIP_BOX_STYLE } from '../ui/chip-box-style';
 
 /** Common shapes to start from; each is plain cron, so what is saved is what is shown. */
 const STARTERS = [
@@ -155,12 +156,7 @@ const styles = StyleSheet.create({
   help: { lineHeight: 20 },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
   chip: {
-    minHeight: 44,
-    justifyContent: 'center',
-    paddingHorizontal: theme.space(3),
-    borderRadius: theme.radius,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
+    ...CHIP_BOX_STYLE,
     backgroundColor: theme.color.panel,
   },
   chipOn: { backgroundColor: theme.color.accentSoft, borderColor: theme.color.accent },

@@ -7,6 +7,7 @@ import { SkText } from '../ui/sk-text';
 import { describeMatrixCell, type MatrixCellWords } from './describe-matrix-cell';
 import { failuresHref } from './failures-href';
 import { OUTCOME_TONE } from './outcome-tone';
+import { CHIP_BOX_STYLE } from '../ui/chip-box-style';
 
 const SUITE_COLUMN = 300;
 const TARGET_COLUMN_MIN = 190;
@@ -200,12 +201,7 @@ const styles = StyleSheet.create({
   summary: { lineHeight: 20 },
   toggle: {
     alignSelf: 'flex-start',
-    minHeight: 44,
-    justifyContent: 'center',
-    paddingHorizontal: theme.space(3),
-    borderRadius: theme.radius,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
+    ...CHIP_BOX_STYLE,
     backgroundColor: theme.color.panel,
   },
   toggleOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },

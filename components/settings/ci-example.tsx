@@ -4,6 +4,7 @@ import { usePlans } from '../../client/use-plans';
 import { theme } from '../../constants/theme';
 import type { Role } from '../../shared/roles';
 import { SkText } from '../ui/sk-text';
+import { CHIP_BOX_STYLE } from '../ui/chip-box-style';
 
 /** The server's address as this browser reaches it; a placeholder elsewhere. */
 const origin =
@@ -80,12 +81,7 @@ const styles = StyleSheet.create({
   inline: { fontFamily: theme.font.mono, color: theme.color.ink },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
   chip: {
-    minHeight: 44,
-    justifyContent: 'center',
-    paddingHorizontal: theme.space(3),
-    borderRadius: theme.radius,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
+    ...CHIP_BOX_STYLE,
   },
   chipOn: { backgroundColor: theme.color.accentSoft, borderColor: theme.color.accent },
   chipTextOn: { fontFamily: theme.font.medium, color: theme.color.accent },

@@ -10,6 +10,7 @@ import { ColumnHead } from '../ui/column-head';
 import { SkText } from '../ui/sk-text';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 import { FailureAlert } from '../ui/failure-alert';
+import { CHIP_BOX_STYLE } from '../ui/chip-box-style';
 
 /** Admin list of users: cards on a phone, rows on a wide screen; the role is changed in place. */
 export function UsersList({ me }: { me: PublicUser }) {
@@ -104,12 +105,7 @@ const styles = StyleSheet.create({
   roleCell: { gap: theme.space(2) },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
   chip: {
-    minHeight: 44,
-    justifyContent: 'center',
-    paddingHorizontal: theme.space(3),
-    borderRadius: theme.radius,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
+    ...CHIP_BOX_STYLE,
   },
   chipOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
   chipTextOn: { color: theme.color.accentInk, fontFamily: theme.font.medium },

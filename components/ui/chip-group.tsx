@@ -1,6 +1,7 @@
 import { Pressable, StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import { SkText } from './sk-text';
+import { CHIP_BOX_STYLE } from './chip-box-style';
 
 interface Props<V extends string | undefined> {
   label: string;
@@ -49,12 +50,7 @@ const styles = StyleSheet.create({
   label: { letterSpacing: 0.3 },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
   chip: {
-    minHeight: 44,
-    justifyContent: 'center',
-    paddingHorizontal: theme.space(3),
-    borderRadius: theme.radius,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
+    ...CHIP_BOX_STYLE,
     backgroundColor: theme.color.panel,
   },
   chipOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },

@@ -1,6 +1,7 @@
 import { Pressable, StyleSheet } from 'react-native';
 import { theme } from '../../constants/theme';
 import { SkText } from './sk-text';
+import { CHIP_BOX_STYLE } from './chip-box-style';
 
 /** An on/off choice with a box that shows a tick when on, so the state reads without colour. */
 export function ToggleChip({
@@ -29,12 +30,7 @@ export function ToggleChip({
 
 const styles = StyleSheet.create({
   chip: {
-    minHeight: 44,
-    justifyContent: 'center',
-    paddingHorizontal: theme.space(3),
-    borderRadius: theme.radius,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
+    ...CHIP_BOX_STYLE,
     alignSelf: 'flex-start',
     backgroundColor: theme.color.panel,
   },
