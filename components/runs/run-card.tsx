@@ -1,5 +1,4 @@
-import { Link } from 'expo-router';
-import { Pressable, StyleSheet, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { isLiveRun } from '../../client/is-live-run';
 import { theme } from '../../constants/theme';
 import type { RunView } from '../../shared/run-view';
@@ -11,49 +10,41 @@ import { runDuration } from './run-duration';
 import { RunStatusBadge } from './run-status-badge';
 import { runVerdict } from './run-verdict';
 import { triggerWords } from './trigger-words';
-import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
+import { LinkCard } from '../ui/link-card';
 
 /** One run as a card (phones, and the Overview): plan, status, who and when, counts; progress while live. Opens the run. */
 export function RunCard({ run, now }: { run: RunView; now?: number }) {
   const live = isLiveRun(run);
   return (
-    <Link href={`/runs/${run.id}`} asChild>
-      <Pressable
-        accessibilityRole="link"
-        accessibilityLabel={`Run of ${run.planName}, ${runVerdict(run).word}, ${formatWhen(run.createdAt, now)}`}
-        style={StyleSheet.flatten(styles.card)}
-        testID={`run-${run.id}`}
-      >
-        <View style={styles.head}>
-          <SkText variant="label" style={styles.plan} numberOfLines={2}>
-            {run.planName}
-          </SkText>
-          <SkText variant="body" tone="inkFaint">
-            →
-          </SkText>
-        </View>
-        <RunStatusBadge run={run} />
-        <SkText variant="caption">
-          {triggerWords(run.trigger, run.requestedBy)} · {formatWhen(run.createdAt, now)} · {runDuration(run, now)}
+    <LinkCard
+      href={`/runs/${run.id}`}
+      accessibilityLabel={`Run of ${run.planName}, ${runVerdict(run).word}, ${formatWhen(run.createdAt, now)}`}
+      testID={`run-${run.id}`}
+    >
+      <View style={styles.head}>
+        <SkText variant="label" style={styles.plan} numberOfLines={2}>
+          {run.planName}
         </SkText>
-        {live ? <ProgressBar done={run.shardsDone} total={run.shardsTotal} /> : null}
-        <OutcomeCounts counts={run.counts} compact />
-        {run.regressions ? (
-          <SkText variant="smallLabel" tone="danger">
-            ↓ {run.regressions} regression{run.regressions === 1 ? '' : 's'} since the previous run
-          </SkText>
-        ) : null}
-      </Pressable>
-    </Link>
+        <SkText variant="body" tone="inkFaint">
+          →
+        </SkText>
+      </View>
+      <RunStatusBadge run={run} />
+      <SkText variant="caption">
+        {triggerWords(run.trigger, run.requestedBy)} · {formatWhen(run.createdAt, now)} · {runDuration(run, now)}
+      </SkText>
+      {live ? <ProgressBar done={run.shardsDone} total={run.shardsTotal} /> : null}
+      <OutcomeCounts counts={run.counts} compact />
+      {run.regressions ? (
+        <SkText variant="smallLabel" tone="danger">
+          ↓ {run.regressions} regression{run.regressions === 1 ? '' : 's'} since the previous run
+        </SkText>
+      ) : null}
+    </LinkCard>
   );
 }
 
 const styles = StyleSheet.create({
-  card: {
-    ...PANEL_BOX_STYLE,
-    gap: theme.space(2),
-    minHeight: theme.touch,
-  },
   head: { flexDirection: 'row', alignItems: 'flex-start', gap: theme.space(2) },
   plan: { flex: 1 },
 });

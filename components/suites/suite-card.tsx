@@ -1,10 +1,9 @@
-import { Link } from 'expo-router';
-import { Pressable, StyleSheet, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { SuiteSummary } from '../../shared/suite-summary';
 import { SkText } from '../ui/sk-text';
 import { SuiteStatusLabel } from './suite-status-label';
-import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
+import { LinkCard } from '../ui/link-card';
 
 /** One suite in the list: title, subject, its latest version's status, and which version plans use. */
 export function SuiteCard({ suite, href }: { suite: SuiteSummary; href?: string }) {
@@ -13,37 +12,32 @@ export function SuiteCard({ suite, href }: { suite: SuiteSummary; href?: string 
       ? 'no approved version: plans do not use it yet'
       : `plans use v${suite.approvedVersion}`;
   return (
-    <Link href={href ?? `/suites/${suite.slug}`} asChild>
-      <Pressable
-        accessibilityRole="link"
-        accessibilityLabel={`${suite.title}, version ${suite.latestVersion} ${suite.latestStatus.replace('-', ' ')}`}
-        style={StyleSheet.flatten(styles.card)}
-        testID={`suite-${suite.slug}`}
-      >
-        <View style={styles.head}>
-          <SuiteStatusLabel status={suite.latestStatus} version={suite.latestVersion} />
-          <SkText variant="caption" tone="inkFaint">
-            {inUse}
-          </SkText>
-        </View>
-        <SkText variant="label">{suite.title}</SkText>
-        <SkText variant="mono" tone="inkSoft" numberOfLines={2}>
-          {suite.subject}
+    <LinkCard
+      href={href ?? `/suites/${suite.slug}`}
+      accessibilityLabel={`${suite.title}, version ${suite.latestVersion} ${suite.latestStatus.replace('-', ' ')}`}
+      testID={`suite-${suite.slug}`}
+      style={styles.card}
+    >
+      <View style={styles.head}>
+        <SuiteStatusLabel status={suite.latestStatus} version={suite.latestVersion} />
+        <SkText variant="caption" tone="inkFaint">
+          {inUse}
         </SkText>
-        <SkText variant="caption" tone="inkFaint" numberOfLines={1}>
-          {suite.slug} · {suite.authorName} ·{' '}
-          {new Date(suite.updatedAt).toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' })}
-        </SkText>
-      </Pressable>
-    </Link>
+      </View>
+      <SkText variant="label">{suite.title}</SkText>
+      <SkText variant="mono" tone="inkSoft" numberOfLines={2}>
+        {suite.subject}
+      </SkText>
+      <SkText variant="caption" tone="inkFaint" numberOfLines={1}>
+        {suite.slug} · {suite.authorName} ·{' '}
+        {new Date(suite.updatedAt).toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' })}
+      </SkText>
+    </LinkCard>
   );
 }
 
 const styles = StyleSheet.create({
   card: {
-    ...PANEL_BOX_STYLE,
-    gap: theme.space(2),
-    minHeight: theme.touch,
     flexGrow: 1,
     flexBasis: 320,
   },
