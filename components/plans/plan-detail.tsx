@@ -1,7 +1,7 @@
 import { useRouter } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, Text, useWindowDimensions, View } from 'react-native';
-import { ApiRequestError } from '../../client/api-request-error';
+import { refusalMessage } from '../../client/refusal-message';
 import { formatDate } from '../../client/format-date';
 import { useDeletePlan } from '../../client/use-delete-plan';
 import { theme } from '../../constants/theme';
@@ -23,12 +23,7 @@ export function PlanDetail({ plan, canEdit }: { plan: PlanView; canEdit: boolean
   const router = useRouter();
   const [editing, setEditing] = useState(false);
   const remove = useDeletePlan();
-  const removeFailure =
-    remove.error instanceof ApiRequestError
-      ? remove.error.body.message
-      : remove.error
-        ? 'The server could not be reached.'
-        : null;
+  const removeFailure = refusalMessage(remove.error, 'The server could not be reached.');
   const missing = plan.targets.filter((t) => !t.installed);
   const pairs = plan.suites.filter((s) => s.approvedVersion !== null).length * (plan.targets.length - missing.length);
 

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import { ApiRequestError } from '../../client/api-request-error';
+import { refusalMessage } from '../../client/refusal-message';
 import { useDeleteSchedule } from '../../client/use-delete-schedule';
 import { useToggleSchedule } from '../../client/use-toggle-schedule';
 import { theme } from '../../constants/theme';
@@ -18,7 +18,7 @@ export function ScheduleCard({ schedule, canEdit }: { schedule: ScheduleView; ca
   const toggle = useToggleSchedule();
   const remove = useDeleteSchedule();
   const failure = [toggle.error, remove.error]
-    .map((e) => (e instanceof ApiRequestError ? e.body.message : e ? 'The server could not be reached.' : null))
+    .map((e) => refusalMessage(e, 'The server could not be reached.'))
     .find(Boolean);
 
   if (editing) return <ScheduleEditor planId={schedule.planId} schedule={schedule} onDone={() => setEditing(false)} />;

@@ -1,6 +1,6 @@
 import { useRouter } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
-import { ApiRequestError } from '../../client/api-request-error';
+import { refusalMessage } from '../../client/refusal-message';
 import { useStartRun } from '../../client/use-start-run';
 import { theme } from '../../constants/theme';
 import { ActionButton } from '../ui/action-button';
@@ -18,12 +18,7 @@ export function StartRunButton({
 }) {
   const router = useRouter();
   const start = useStartRun();
-  const failure =
-    start.error instanceof ApiRequestError
-      ? start.error.body.message
-      : start.error
-        ? 'The server could not be reached; no run was started.'
-        : null;
+  const failure = refusalMessage(start.error, 'The server could not be reached; no run was started.');
   return (
     <View style={styles.box}>
       <ActionButton

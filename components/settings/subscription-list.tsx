@@ -1,5 +1,5 @@
 import { StyleSheet, Text, View } from 'react-native';
-import { ApiRequestError } from '../../client/api-request-error';
+import { refusalMessage } from '../../client/refusal-message';
 import { useSaveSubscriptions } from '../../client/use-save-subscriptions';
 import { useSubscriptions } from '../../client/use-subscriptions';
 import { theme } from '../../constants/theme';
@@ -24,12 +24,7 @@ export function SubscriptionList() {
     return (
       <QueryState state="empty" message="No libraries known yet: they appear once the server has found its targets." />
     );
-  const failure =
-    save.error instanceof ApiRequestError
-      ? save.error.body.message
-      : save.error
-        ? 'The server could not be reached; the change was undone.'
-        : null;
+  const failure = refusalMessage(save.error, 'The server could not be reached; the change was undone.');
 
   return (
     <View style={styles.list} testID="subscription-list">

@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import { ApiRequestError } from '../../client/api-request-error';
+import { refusalMessage } from '../../client/refusal-message';
 import { formatDate } from '../../client/format-date';
 import { useRevokeToken } from '../../client/use-revoke-token';
 import { useTokens } from '../../client/use-tokens';
@@ -23,12 +23,7 @@ export function TokenList() {
         message="No tokens yet. Make one for each place that starts runs for you, so each can be revoked alone."
       />
     );
-  const failure =
-    revoke.error instanceof ApiRequestError
-      ? revoke.error.body.message
-      : revoke.error
-        ? 'The server could not be reached; the token still works.'
-        : null;
+  const failure = refusalMessage(revoke.error, 'The server could not be reached; the token still works.');
 
   return (
     <View style={styles.list} testID="token-list">
