@@ -9,6 +9,7 @@ import { CONVENTION_STYLES, type Behaviour } from './convention-styles';
 import { formatComplexText } from '../../shared/format-complex-text';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 import { CHIP_BOX_STYLE } from '../ui/chip-box-style';
+import { NOTE_BOX_STYLE } from '../ui/note-box-style';
 
 type CutEntry = ConventionFingerprint['cuts'][number];
 type Probe = CutEntry['probes'][number];
@@ -199,11 +200,7 @@ const styles = StyleSheet.create({
   summary: { gap: theme.space(2), marginBottom: theme.space(2) },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
   note: {
-    borderLeftWidth: 3,
-    borderLeftColor: theme.color.focus,
-    backgroundColor: theme.color.panel,
-    borderRadius: theme.radius,
-    padding: theme.space(4),
+    ...NOTE_BOX_STYLE,
     gap: theme.space(2),
     marginBottom: theme.space(2),
   },

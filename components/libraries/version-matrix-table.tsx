@@ -5,6 +5,7 @@ import type { VersionMatrix } from '../../shared/version-matrix';
 import { SkText } from '../ui/sk-text';
 import { formatComplexText } from '../../shared/format-complex-text';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
+import { NOTE_BOX_STYLE } from '../ui/note-box-style';
 
 type SuiteEntry = VersionMatrix['suites'][number];
 type Change = SuiteEntry['changes'][number];
@@ -190,11 +191,7 @@ const styles = StyleSheet.create({
   wrap: { gap: theme.space(2) },
   summary: { lineHeight: 24 },
   note: {
-    borderLeftWidth: 3,
-    borderLeftColor: theme.color.focus,
-    backgroundColor: theme.color.panel,
-    borderRadius: theme.radius,
-    padding: theme.space(4),
+    ...NOTE_BOX_STYLE,
     gap: theme.space(2),
     marginBottom: theme.space(2),
   },

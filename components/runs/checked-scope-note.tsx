@@ -2,6 +2,7 @@ import { StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { CheckedScope } from '../../shared/run-result';
 import { SkText } from '../ui/sk-text';
+import { NOTE_BOX_STYLE } from '../ui/note-box-style';
 
 const CONVENTION_WORDS: Record<string, string> = {
   'signed-zero': 'signed zero (IEC 60559 / ISO C Annex G)',
@@ -105,11 +106,7 @@ export function CheckedScopeNote({
 
 const styles = StyleSheet.create({
   box: {
-    borderLeftWidth: 3,
-    borderLeftColor: theme.color.focus,
-    backgroundColor: theme.color.panel,
-    borderRadius: theme.radius,
-    padding: theme.space(4),
+    ...NOTE_BOX_STYLE,
     gap: theme.space(3),
   },
   columns: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(4) },
