@@ -5,6 +5,7 @@ import type { FailureView } from '../../shared/failure-view';
 import { describeFailure } from './describe-failure';
 import { DIAGNOSIS_STYLES } from './diagnosis-styles';
 import { FAILURE_COLUMNS, type FailureColumnId } from './failure-columns';
+import { TABLE_BOX_STYLE } from '../ui/table-box-style';
 
 /** The failure table for a wide screen: the chosen columns, each row a link to its case. */
 export function FailureTable({ failures, columns }: { failures: FailureView[]; columns: FailureColumnId[] }) {
@@ -39,13 +40,7 @@ export function FailureTable({ failures, columns }: { failures: FailureView[]; c
 }
 
 const styles = StyleSheet.create({
-  table: {
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    overflow: 'hidden',
-    backgroundColor: theme.color.panel,
-  },
+  table: TABLE_BOX_STYLE,
   row: {
     flexDirection: 'row',
     alignItems: 'center',

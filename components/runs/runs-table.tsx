@@ -12,6 +12,7 @@ import { runDuration } from './run-duration';
 import { RunStatusBadge } from './run-status-badge';
 import { runVerdict } from './run-verdict';
 import { triggerWords } from './trigger-words';
+import { TABLE_BOX_STYLE } from '../ui/table-box-style';
 
 /** Runs as table rows on a wide screen; each row opens its run. */
 export function RunsTable({ runs, now }: { runs: RunView[]; now?: number }) {
@@ -78,13 +79,7 @@ export function RunsTable({ runs, now }: { runs: RunView[]; now?: number }) {
 }
 
 const styles = StyleSheet.create({
-  table: {
-    backgroundColor: theme.color.panel,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    overflow: 'hidden',
-  },
+  table: TABLE_BOX_STYLE,
   row: {
     flexDirection: 'row',
     alignItems: 'center',
