@@ -24,7 +24,6 @@ export { evaluateSuite } from './runner/evaluation/evaluate-suite';
 export { evaluatePair } from './runner/evaluation/evaluate-pair';
 export { suiteExpectation } from './runner/expectations/suite-expectation';
 export type { ExpectedColumn } from './runner/expectations/expectation';
-export { checkSuiteProperties } from './properties/check-suite-properties';
 export { ReferenceCache } from './runner/reference-cache/reference-cache';
 export { suiteCacheKey } from './runner/reference-cache/suite-cache-key';
 // Plans (the CLI's runs; the server runs shards of its own).

@@ -115,7 +115,7 @@ async function main(): Promise<void> {
     );
     const cache = new ReferenceCache(dir);
     const target = complexJs.open();
-    // eslint-disable-next-line @typescript-eslint/no-require-imports
+    // eslint-disable-next-line @typescript-eslint/no-require-imports -- the bare loop uses the library as a plain CommonJS module
     const Complex = require('complex.js') as new (
       re: number,
       im: number,

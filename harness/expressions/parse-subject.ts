@@ -26,7 +26,7 @@ let parser: ((text: string) => MathNode) | null = null;
  */
 function mathParse(text: string): MathNode {
   if (!parser) {
-    // eslint-disable-next-line @typescript-eslint/no-require-imports
+    // eslint-disable-next-line @typescript-eslint/no-require-imports -- loaded on first use: mathjs costs ~1.1 s
     const { all, create } = require('mathjs') as typeof MathJs;
     const math = create(all as NonNullable<typeof all>, { number: 'BigNumber', precision: 64 });
     parser = (t) => math.parse(t);

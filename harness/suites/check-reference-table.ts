@@ -6,7 +6,7 @@ import { parseSubject } from '../expressions/parse-subject';
 import { SubjectError } from '../expressions/subject-error';
 import { BigComplex } from '../reference/complex/big-complex';
 import { continueRegularBranch } from '../reference/continuation/continue-regular-branch';
-import { formatDouble } from '../reference/numbers/format-double';
+import { wireDouble } from '../runner/evaluation/wire-double';
 import { Rational } from '../reference/numbers/rational';
 import { parseDouble } from '../reference/numbers/parse-double';
 import { ulpDistance } from '../reference/numbers/ulp-distance';
@@ -98,12 +98,11 @@ export function checkReferenceTable(suite: Suite, csv: string): ReferenceTableCh
     const zeroSigns = theirs.every((x, p) => x !== 0 || ours[p] !== 0 || Object.is(x, -0) === Object.is(ours[p], -0));
     if (ulps <= 1 && zeroSigns) result.agree += 1;
     else {
-      const wire = (v: [number, number]) => ({ re: formatDouble(v[0]), im: formatDouble(v[1]) });
       result.disagreements.push({
         line,
-        z: wire(z),
-        theirs: wire(theirs),
-        ours: wire(ours),
+        z: wireDouble(z),
+        theirs: wireDouble(theirs),
+        ours: wireDouble(ours),
         ulps,
         source: row.source ?? '',
       });

@@ -1,8 +1,7 @@
 import type { ComplexPair } from '../../adapters/complex-pair';
 import type { TargetIdentity } from '../../../shared/target-identity';
-import { formatComplexText } from '../../../shared/format-complex-text';
 import { formatHexDouble } from '../../checks/format-hex-double';
-import { formatDouble } from '../../reference/numbers/format-double';
+import { pointText } from '../formats/point-text';
 import type { SubjectProgram } from './subject-program';
 
 /** A double as a JavaScript literal that reads back to exactly the same double ("-0" kept). */
@@ -37,7 +36,7 @@ const PYTHON_OPERATOR: Readonly<Record<string, string>> = { add: '+', sub: '-', 
  * Stdio targets other than cmath get the request lines of the stdio protocol.
  */
 export function reproducer(program: SubjectProgram, target: TargetIdentity, z: ComplexPair, subject: string): string {
-  const header = `${target.name}: ${subject} at z = ${formatComplexText({ re: formatDouble(z[0]), im: formatDouble(z[1]) }, { ascii: true })}`;
+  const header = `${target.name}: ${subject} at z = ${pointText(z)}`;
   if (target.library === 'complex.js') return complexJs(program, target, z, header);
   if (target.library === 'mathjs') return mathjs(program, target, z, header);
   if (target.library === 'cmath') return python(program, z, header);

@@ -2,7 +2,7 @@ import type { ExactPoint, Point } from '../../reference/continuation/continuatio
 import { continueRegularBranch } from '../../reference/continuation/continue-regular-branch';
 import { Rational } from '../../reference/numbers/rational';
 import type { RegularBranch } from './regular-branch';
-import { pointText } from './point-text';
+import { pointText } from '../formats/point-text';
 
 /** A double as an exact point coordinate (every double is a dyadic rational). */
 const exactPoint = ([re, im]: Point): ExactPoint => [Rational.fromDouble(re), Rational.fromDouble(im)];

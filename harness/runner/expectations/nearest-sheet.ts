@@ -1,7 +1,7 @@
 import type { Point } from '../../reference/continuation/continuation-path';
 import { modInverse } from './mod-inverse';
 import type { RegularBranch } from './regular-branch';
-import { pointText } from './point-text';
+import { pointText } from '../formats/point-text';
 
 /**
  * The sheet k whose value C·P·e^{2πiνk} is nearest the continued value F (P: the principal

@@ -7,7 +7,7 @@ import { probePoint } from './probe-point';
 import type { RegularBranch } from './regular-branch';
 import { REGULAR_TUNING } from './regular-tuning';
 import { sheetFactor } from './sheet-factor';
-import { pointText } from './point-text';
+import { pointText } from '../formats/point-text';
 
 const { kindOtherSide, kindRefused, bits } = REGULAR_TUNING;
 

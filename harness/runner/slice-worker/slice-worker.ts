@@ -27,7 +27,7 @@ function openTarget(spec: NonNullable<TargetDescriptor['worker']>): Target {
     if (!found) throw new Error(`no installed target named ${spec.discovered}`);
     return found.open();
   }
-  // eslint-disable-next-line @typescript-eslint/no-require-imports
+  // eslint-disable-next-line @typescript-eslint/no-require-imports -- a module named at run time by the slice's target
   const mod = require(spec.module) as { openTarget?: (...args: unknown[]) => Target };
   if (typeof mod.openTarget !== 'function') throw new Error(`${spec.module} has no openTarget export`);
   return mod.openTarget(...(spec.args ?? []));
