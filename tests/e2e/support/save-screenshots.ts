@@ -18,11 +18,21 @@ const MAX_EXTRA_HEIGHT = 5000;
  * only the first screenful: the window is made taller by what the frame hides, the whole
  * screen is taken, and the window goes back to its size.
  */
+/**
+ * Resizes the window and waits two frames: crossing the wide breakpoint swaps the app's frame,
+ * which mounts the screen again, and an element found before that swap is detached under the
+ * caller (seen once in four runs: "Element is not attached to the DOM" on the suite preview).
+ */
+async function resize(page: Page, size: { width: number; height: number }): Promise<void> {
+  await page.setViewportSize(size);
+  await page.evaluate(() => new Promise((done) => requestAnimationFrame(() => requestAnimationFrame(done))));
+}
+
 export async function saveScreenshots(page: Page, name: string, ready: () => Promise<unknown>): Promise<void> {
   mkdirSync(DIR, { recursive: true });
   const original = page.viewportSize();
   for (const size of SCREEN_SIZES) {
-    await page.setViewportSize(size);
+    await resize(page, size);
     await ready();
     const hidden = await page.evaluate(() =>
       Math.max(
@@ -33,7 +43,7 @@ export async function saveScreenshots(page: Page, name: string, ready: () => Pro
       ),
     );
     if (hidden > 0) {
-      await page.setViewportSize({ width: size.width, height: size.height + Math.min(hidden, MAX_EXTRA_HEIGHT) });
+      await resize(page, { width: size.width, height: size.height + Math.min(hidden, MAX_EXTRA_HEIGHT) });
       await ready();
     }
     await page.screenshot({ path: path.join(DIR, `${name}-${size.width}x${size.height}.png`), fullPage: true });
