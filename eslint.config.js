@@ -12,6 +12,9 @@ module.exports = defineConfig([
     rules: {
       // `fc.assert`, `fc.property`: fast-check is meant to be used as a namespace.
       'import/no-named-as-default-member': 'off',
+      // tsc (run beside ESLint in `npm test`) already checks every `import * as` member; this rule
+      // parsed the imported modules again, node_modules included: 9.8 s of ESLint's 23.6 s of rules.
+      'import/namespace': 'off',
     },
   },
   {

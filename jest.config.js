@@ -8,6 +8,7 @@
 // default is one worker fewer than the cores, which on a 2-core machine is a single
 // worker: the node and web files then took 245 s one after another (lead's measure).
 const os = require('node:os');
+const NODE_TRANSFORM = require('./tests/setup/node-transform');
 
 module.exports = {
   maxWorkers: os.availableParallelism(),
@@ -20,7 +21,7 @@ module.exports = {
       testEnvironment: 'node',
       roots: ['<rootDir>/tests'],
       testMatch: ['<rootDir>/tests/{server,harness,shared,scripts,external,constants}/**/*.test.ts'],
-      transform: { '\\.[jt]sx?$': 'babel-jest' },
+      transform: NODE_TRANSFORM,
       setupFiles: ['<rootDir>/tests/setup/node-setup.ts'],
       globalSetup: '<rootDir>/tests/setup/global-setup.ts',
       globalTeardown: '<rootDir>/tests/setup/global-teardown.ts',

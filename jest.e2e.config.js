@@ -1,11 +1,11 @@
-// End-to-end tests: playwright-core driving Debian's Chromium against the server
-// that scripts/test.sh started (SHEETKEEPER_E2E_URL).
+// End-to-end tests: playwright-core driving Debian's Chromium against the server that
+// scripts/test.sh started (SHEETKEEPER_E2E_URL). Compiled like the node project.
 module.exports = {
   displayName: 'e2e',
   testEnvironment: 'node',
   roots: ['<rootDir>/tests/e2e'],
   testMatch: ['<rootDir>/tests/e2e/**/*.test.ts'],
-  transform: { '\\.[jt]sx?$': 'babel-jest' },
+  transform: require('./tests/setup/node-transform'),
   testTimeout: 60000,
   maxWorkers: 1,
 };
