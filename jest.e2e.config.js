@@ -6,6 +6,7 @@ module.exports = {
   roots: ['<rootDir>/tests/e2e'],
   testMatch: ['<rootDir>/tests/e2e/**/*.test.ts'],
   transform: require('./tests/setup/node-transform'),
+  setupFilesAfterEnv: ['<rootDir>/tests/e2e/support/close-browser-after-file.ts'],
   testTimeout: 60000,
   maxWorkers: 1,
 };

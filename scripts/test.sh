@@ -13,26 +13,7 @@ ensure_chromium
 OUT="$ROOT/.data/test-output"
 rm -rf "$OUT" && mkdir -p "$OUT" "$ROOT/test-results"
 
-# tsc, ESLint and Prettier each use one core, and the web export for the end-to-end part needs
-# nothing from them: all four run side by side, each into its own log, shown whole once it ends.
-log "type check, lint, format check and the web export, side by side"
-start_step typecheck npx tsc --noEmit -p tsconfig.json
-start_step lint npx eslint --max-warnings 0 --cache --cache-strategy content --cache-location "$ROOT/.data/eslint-cache" .
-start_step format npx prettier --check --log-level warn .
-start_step web-export ensure_web_export
-tsc_status=0 lint_status=0 format_status=0
-finish_step typecheck || tsc_status=$?
-finish_step lint || lint_status=$?
-finish_step format || format_status=$?
-finish_step web-export
-
-log "jest: node and web projects"
-npx jest --ci --json --outputFile="$OUT/unit.json" || true
-
-log "end-to-end: preparing the e2e database, the web export and the server"
 E2E_DB=sheetkeeper_e2e
-ensure_database "$E2E_DB" fresh
-SHEETKEEPER_DB="$E2E_DB" node --import tsx scripts/migrate.ts
 E2E_PORT="${SHEETKEEPER_E2E_PORT:-8461}"
 if port_answers "$E2E_PORT"; then
   [ -n "${SHEETKEEPER_E2E_PORT:-}" ] && { log "port $E2E_PORT is taken"; exit 2; }
@@ -40,9 +21,32 @@ if port_answers "$E2E_PORT"; then
   log "port 8461 is taken; the e2e server uses $E2E_PORT"
 fi
 E2E_SMTP_PORT="${SHEETKEEPER_E2E_SMTP_PORT:-$(free_port)}"
-# Seeded with the e2e ports, so the links in the demo regression mail point at this server.
-SHEETKEEPER_DB="$E2E_DB" SHEETKEEPER_PORT="$E2E_PORT" SHEETKEEPER_SMTP_PORT="$E2E_SMTP_PORT" node --import tsx scripts/seed.ts
-SHEETKEEPER_DB="$E2E_DB" SHEETKEEPER_PORT="$E2E_PORT" SHEETKEEPER_SMTP_PORT="$E2E_SMTP_PORT" node --import tsx server/main.ts >"$OUT/e2e-server.log" 2>&1 &
+e2e_env=(env SHEETKEEPER_DB="$E2E_DB" SHEETKEEPER_PORT="$E2E_PORT" SHEETKEEPER_SMTP_PORT="$E2E_SMTP_PORT")
+# A fresh e2e database, migrated and seeded with the e2e ports (so the links in the demo
+# regression mail point at the e2e server).
+prepare_e2e_database() {
+  ensure_database "$E2E_DB" fresh
+  "${e2e_env[@]}" node --import tsx scripts/migrate.ts
+  "${e2e_env[@]}" node --import tsx scripts/seed.ts
+}
+
+# tsc, ESLint and Prettier each use one core, and neither the web export nor the e2e database
+# needs anything from them: all five run side by side, each into its own log, shown whole once
+# it ends.
+log "type check, lint, format check, the web export and the e2e database, side by side"
+start_step typecheck npx tsc --noEmit -p tsconfig.json
+start_step lint npx eslint --max-warnings 0 --cache --cache-strategy content --cache-location "$ROOT/.data/eslint-cache" .
+start_step format npx prettier --check --log-level warn .
+start_step web-export ensure_web_export
+start_step e2e-database prepare_e2e_database
+tsc_status=0 lint_status=0 format_status=0
+finish_step typecheck || tsc_status=$?
+finish_step lint || lint_status=$?
+finish_step format || format_status=$?
+finish_step web-export
+finish_step e2e-database
+
+"${e2e_env[@]}" node --import tsx server/main.ts >"$OUT/e2e-server.log" 2>&1 &
 server_pid=$!
 trap 'kill "$server_pid" 2>/dev/null || true' EXIT
 for _ in $(seq 1 120); do
@@ -50,8 +54,14 @@ for _ in $(seq 1 120); do
   kill -0 "$server_pid" 2>/dev/null || { cat "$OUT/e2e-server.log" >&2; break; }
   sleep 0.25
 done
-log "jest: end-to-end project against http://127.0.0.1:$E2E_PORT"
-SHEETKEEPER_E2E_URL="http://127.0.0.1:$E2E_PORT" SHEETKEEPER_E2E_SMTP_PORT="$E2E_SMTP_PORT" npx jest -c jest.e2e.config.js --ci --json --outputFile="$OUT/e2e.json" || true
+
+# The end-to-end files (one at a time against one server, mostly waiting on Chromium and the
+# server) run beside jest's node and web projects; their log is shown when both have ended.
+log "jest: node and web projects, and beside them the end-to-end project against http://127.0.0.1:$E2E_PORT"
+start_step e2e env SHEETKEEPER_E2E_URL="http://127.0.0.1:$E2E_PORT" SHEETKEEPER_E2E_SMTP_PORT="$E2E_SMTP_PORT" \
+  npx jest -c jest.e2e.config.js --ci --json --outputFile="$OUT/e2e.json"
+npx jest --ci --json --outputFile="$OUT/unit.json" || true
+finish_step e2e || true
 kill "$server_pid" 2>/dev/null || true
 
 log "finished in $(( $(date +%s) - began )) s"

@@ -1,7 +1,4 @@
-import { mkdtempSync, rmSync } from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
-import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 
 export const BASE_URL = process.env.SHEETKEEPER_E2E_URL ?? 'http://127.0.0.1:8461';
 
@@ -13,16 +10,13 @@ export interface OpenBrowser {
   close(): Promise<void>;
 }
 
-/**
- * Debian's Chromium through playwright-core, in a fresh profile. The flags keep it
- * off the network (this machine refuses outside connections) — see docs/conventions.md.
- */
-export async function openBrowser(viewport = { width: 390, height: 844 }): Promise<OpenBrowser> {
-  const profile = mkdtempSync(path.join(os.tmpdir(), 'sheetkeeper-e2e-'));
-  const context = await chromium.launchPersistentContext(profile, {
+let shared: Promise<Browser> | null = null;
+
+/** The test file's one Chromium, started on first use (tests/e2e/support/close-browser-after-file.ts ends it). */
+function sharedBrowser(): Promise<Browser> {
+  shared ??= chromium.launch({
     executablePath: '/usr/bin/chromium',
     headless: true,
-    viewport,
     args: [
       '--no-sandbox',
       '--disable-gpu',
@@ -33,16 +27,31 @@ export async function openBrowser(viewport = { width: 390, height: 844 }): Promi
       '--disable-sync',
     ],
   });
-  const page = context.pages()[0] ?? (await context.newPage());
+  return shared;
+}
+
+/** Ends the test file's Chromium, if it started one. */
+export async function closeSharedBrowser(): Promise<void> {
+  const browser = shared;
+  shared = null;
+  if (browser) await (await browser).close();
+}
+
+/**
+ * A fresh browser context (its own cookies, storage and cache, like a new profile) in Debian's
+ * Chromium through playwright-core. One Chromium serves a test file: starting one per test was
+ * 26 launches for the e2e run. The flags keep it off the network (this machine refuses outside
+ * connections) — see docs/conventions.md.
+ */
+export async function openBrowser(viewport = { width: 390, height: 844 }): Promise<OpenBrowser> {
+  const context = await (await sharedBrowser()).newContext({ viewport });
+  const page = await context.newPage();
   const pageErrors: string[] = [];
   page.on('pageerror', (error) => pageErrors.push(error.message));
   return {
     context,
     page,
     pageErrors,
-    close: async () => {
-      await context.close();
-      rmSync(profile, { recursive: true, force: true });
-    },
+    close: () => context.close(),
   };
 }
