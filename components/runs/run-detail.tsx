@@ -20,7 +20,7 @@ import { ScreenBody } from '../ui/screen-body';
 export function RunDetail({ id }: { id: string }) {
   const run = useRun(id);
   const { data: me } = useMe();
-  const live = run.data ? isLiveRun(run.data) : false;
+  const live = run.data ? isLiveRun(run.data) : undefined;
   const matrix = useRunMatrix(id, live);
   const properties = useRunProperties(id, live);
 

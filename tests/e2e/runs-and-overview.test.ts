@@ -11,7 +11,7 @@ const kwame = DEMO_USERS.find((u) => u.email === 'kwame@sheetkeeper.test')!;
 
 /** The API as the signed-in page sees it (same origin, session cookie). */
 const api = <T>(path: string, method = 'GET', body?: unknown): Promise<T> =>
-  // Plain promise chains: the test's babel would turn async/await and destructuring into helpers the page does not have.
+  // Plain promise chains: the test's compiler may turn async/await and destructuring into helpers the page does not have.
   b.page.evaluate(
     (arg) =>
       fetch('/api' + arg.path, {
@@ -88,13 +88,26 @@ describe('Overview and runs', () => {
 
   it('follows a run started through the API live, and cancels it after a confirm step', async () => {
     await signIn(b.page, kwame.email, kwame.password);
-    const plans = await api<{ body: { plans: { id: string; name: string }[] } }>('/plans');
-    const plan = plans.body.plans.find((p) => p.name === 'complex.js nightly')!;
+    // A plan big enough to be caught running: every approved suite against every installed
+    // complex.js release (~300 shards). The demo nightly's 50 shards end within seconds.
+    const suites = await api<{ body: { suites: { slug: string }[] } }>('/suites?status=approved');
+    const targets = await api<{ body: { targets: { name: string; library: string; installed: boolean }[] } }>(
+      '/targets',
+    );
+    const made = await api<{ status: number; body: { plan: { id: string } } }>('/plans', 'POST', {
+      name: 'complex.js every release',
+      description: 'Every approved suite against every installed complex.js release, run on demand.',
+      recipients: [kwame.email],
+      suites: suites.body.suites.map((s) => s.slug),
+      targets: targets.body.targets.filter((t) => t.installed && t.library === 'complex.js').map((t) => t.name),
+    });
+    expect(made.status).toBe(201);
     const started = await api<{ status: number; body: { run: { id: string; shardsTotal: number } } }>('/runs', 'POST', {
-      planId: plan.id,
+      planId: made.body.plan.id,
     });
     expect(started.status).toBe(202);
     const run = started.body.run;
+    expect(run.shardsTotal).toBeGreaterThan(200);
 
     // The Overview lists it in progress with its bar.
     await b.page.goto(`${BASE_URL}/`);
