@@ -39,13 +39,12 @@ start_step lint npx eslint --max-warnings 0 --cache --cache-strategy content --c
 start_step format npx prettier --check --log-level warn .
 start_step web-export ensure_web_export
 start_step e2e-database prepare_e2e_database
-tsc_status=0 lint_status=0 format_status=0
-finish_step typecheck || tsc_status=$?
-finish_step lint || lint_status=$?
-finish_step format || format_status=$?
 finish_step web-export
 finish_step e2e-database
 
+# The end-to-end files (one at a time against one server, much of it waiting on Chromium and the
+# server) start as soon as their server is up, beside the static checks' tail and then jest's node
+# and web projects; their log is shown when all have ended.
 "${e2e_env[@]}" node --import tsx server/main.ts >"$OUT/e2e-server.log" 2>&1 &
 server_pid=$!
 trap 'kill "$server_pid" 2>/dev/null || true' EXIT
@@ -54,12 +53,16 @@ for _ in $(seq 1 120); do
   kill -0 "$server_pid" 2>/dev/null || { cat "$OUT/e2e-server.log" >&2; break; }
   sleep 0.25
 done
-
-# The end-to-end files (one at a time against one server, mostly waiting on Chromium and the
-# server) run beside jest's node and web projects; their log is shown when both have ended.
-log "jest: node and web projects, and beside them the end-to-end project against http://127.0.0.1:$E2E_PORT"
+log "end-to-end project against http://127.0.0.1:$E2E_PORT, in the background"
 start_step e2e env SHEETKEEPER_E2E_URL="http://127.0.0.1:$E2E_PORT" SHEETKEEPER_E2E_SMTP_PORT="$E2E_SMTP_PORT" \
   npx jest -c jest.e2e.config.js --ci --json --outputFile="$OUT/e2e.json"
+
+tsc_status=0 lint_status=0 format_status=0
+finish_step typecheck || tsc_status=$?
+finish_step lint || lint_status=$?
+finish_step format || format_status=$?
+
+log "jest: node and web projects"
 npx jest --ci --json --outputFile="$OUT/unit.json" || true
 finish_step e2e || true
 kill "$server_pid" 2>/dev/null || true
