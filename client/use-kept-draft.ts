@@ -5,7 +5,7 @@ import { localStore } from './local-store';
 /** Bump when the stored draft's shape changes in a way `hasSameShape` would not catch. */
 const FORMAT = 1;
 
-/** How long typing must pause before the draft is written: a keystroke costs nothing, and a reload loses at most this much. */
+/** How long typing must pause before the draft is written: a keystroke costs nothing (leaving the page writes it at once). */
 const WRITE_DELAY_MS = 400;
 
 export interface KeptDraft<T> {
@@ -36,7 +36,7 @@ export function useKeptDraft<T>(key: string, template: T, current: T, dirty: boo
 
   useEffect(() => {
     if (!dirty) return undefined;
-    const timer = setTimeout(() => {
+    const write = () => {
       try {
         localStore()?.setItem(
           key,
@@ -45,8 +45,17 @@ export function useKeptDraft<T>(key: string, template: T, current: T, dirty: boo
       } catch {
         // Storage full or refused: the draft still lives in the form until the tab closes.
       }
-    }, WRITE_DELAY_MS);
-    return () => clearTimeout(timer);
+    };
+    const timer = setTimeout(write, WRITE_DELAY_MS);
+    // A reload or a closed tab within the pause would lose the changes since the last write (an
+    // end-to-end journey on a loaded machine restored a draft from before its branch settings):
+    // the page being hidden writes them at once.
+    const target = typeof window !== 'undefined' && window.addEventListener ? window : null;
+    target?.addEventListener('pagehide', write);
+    return () => {
+      clearTimeout(timer);
+      target?.removeEventListener('pagehide', write);
+    };
   }, [key, current, dirty]);
 
   const forget = useCallback(() => {
