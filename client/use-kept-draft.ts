@@ -50,7 +50,7 @@ export function useKeptDraft<T>(key: string, template: T, current: T, dirty: boo
     // A reload or a closed tab within the pause would lose the changes since the last write (an
     // end-to-end journey on a loaded machine restored a draft from before its branch settings):
     // the page being hidden writes them at once.
-    const target = typeof window !== 'undefined' && window.addEventListener ? window : null;
+    const target = typeof window !== 'undefined' && typeof window.addEventListener === 'function' ? window : null;
     target?.addEventListener('pagehide', write);
     return () => {
       clearTimeout(timer);
