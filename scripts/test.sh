@@ -21,7 +21,12 @@ if port_answers "$E2E_PORT"; then
   log "port 8461 is taken; the e2e server uses $E2E_PORT"
 fi
 E2E_SMTP_PORT="${SHEETKEEPER_E2E_SMTP_PORT:-$(free_port)}"
-e2e_env=(env SHEETKEEPER_DB="$E2E_DB" SHEETKEEPER_PORT="$E2E_PORT" SHEETKEEPER_SMTP_PORT="$E2E_SMTP_PORT")
+# The e2e seed and server keep their reference values in a cache of this run's own, made from this
+# code; the node tests that run demo suites end to end start from a copy of it
+# (tests/setup/seeded-reference-cache-dir.ts) instead of computing the same values again.
+REFERENCE_CACHE="$OUT/reference-cache"
+e2e_env=(env SHEETKEEPER_DB="$E2E_DB" SHEETKEEPER_PORT="$E2E_PORT" SHEETKEEPER_SMTP_PORT="$E2E_SMTP_PORT"
+  SHEETKEEPER_REFERENCE_CACHE="$REFERENCE_CACHE")
 # A fresh e2e database, migrated and seeded with the e2e ports (so the links in the demo
 # regression mail point at the e2e server).
 prepare_e2e_database() {
@@ -63,7 +68,7 @@ finish_step lint || lint_status=$?
 finish_step format || format_status=$?
 
 log "jest: node and web projects"
-npx jest --ci --json --outputFile="$OUT/unit.json" || true
+SHEETKEEPER_TEST_REFERENCE_SEED="$REFERENCE_CACHE" npx jest --ci --json --outputFile="$OUT/unit.json" || true
 finish_step e2e || true
 kill "$server_pid" 2>/dev/null || true
 

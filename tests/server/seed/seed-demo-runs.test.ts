@@ -1,17 +1,23 @@
 import { seedDemoCatalogue } from '../../../server/seed/seed-demo-catalogue';
 import { seedDemoRuns } from '../../../server/seed/seed-demo-runs';
+import { rmSync } from 'node:fs';
+import { seededReferenceCacheDir } from '../../setup/seeded-reference-cache-dir';
 import { createTestDatabase, type TestDatabase } from '../../setup/test-database';
 
 describe('seedDemoRuns', () => {
   let db: TestDatabase;
+  const referenceCacheDir = seededReferenceCacheDir();
   beforeAll(async () => {
     db = await createTestDatabase();
     await seedDemoCatalogue(db.dataSource);
   }, 60_000);
-  afterAll(() => db.drop());
+  afterAll(async () => {
+    await db.drop();
+    rmSync(referenceCacheDir, { recursive: true, force: true });
+  });
 
   it('adds two completed nightly runs, the second with regressions from the complex.js upgrade and one regression mail, then nothing the second time', async () => {
-    const options = { smtp: { host: '127.0.0.1', port: 9 }, appUrl: 'http://127.0.0.1:8460' };
+    const options = { smtp: { host: '127.0.0.1', port: 9 }, appUrl: 'http://127.0.0.1:8460', referenceCacheDir };
     expect(await seedDemoRuns(db.dataSource, options)).toBe(2);
     const runs = await db.dataSource.query(
       `SELECT status, shards_total AS "shards", regressions FROM runs ORDER BY created_at`,

@@ -3,16 +3,22 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { XMLParser, XMLValidator } from 'fast-xml-parser';
+import { seededReferenceCacheDir } from '../../../setup/seeded-reference-cache-dir';
 
 const BIN = path.join(__dirname, '..', '..', '..', '..', 'bin', 'sheetkeeper.mjs');
 let dir: string;
+let cacheDir: string;
 const cli = (args: string[]) => spawnSync(process.execPath, [BIN, ...args], { encoding: 'utf8', timeout: 120_000 });
-const run = (args: string[]) => cli(['run', '--cache', path.join(dir, 'cache'), ...args]);
+const run = (args: string[]) => cli(['run', '--cache', cacheDir, ...args]);
 
 beforeAll(() => {
   dir = mkdtempSync(path.join(os.tmpdir(), 'sheetkeeper-cli-'));
+  cacheDir = seededReferenceCacheDir();
 });
-afterAll(() => rmSync(dir, { recursive: true, force: true }));
+afterAll(() => {
+  rmSync(dir, { recursive: true, force: true });
+  rmSync(cacheDir, { recursive: true, force: true });
+});
 
 describe('sheetkeeper run', () => {
   it('exits 0 when nothing fails, and says what was checked and that a pass is no certification', () => {

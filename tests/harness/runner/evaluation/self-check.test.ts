@@ -1,3 +1,4 @@
+import { rmSync } from 'node:fs';
 import path from 'node:path';
 import type { DiagnosisKind } from '../../../../shared/diagnosis';
 import type { RunResult } from '../../../../shared/run-result';
@@ -8,6 +9,7 @@ import { mutantTarget, type Mutation } from '../../../../harness/runner/evaluati
 import { ReferenceCache } from '../../../../harness/runner/reference-cache/reference-cache';
 import { runPlan } from '../../../../harness/runner/plan/run-plan';
 import type { TargetDescriptor } from '../../../../harness/adapters/target-descriptor';
+import { seededReferenceCacheDir } from '../../../setup/seeded-reference-cache-dir';
 
 /**
  * The self-check (issue item 12): faults planted in a good library must each be caught by the
@@ -20,7 +22,9 @@ const loaded = loadSuites([path.join(ROOT, 'suites', 'demo')], path.join(ROOT, '
 if (!loaded.ok) throw new Error('the demo catalogue does not load');
 const suites = loaded.suites;
 const cmath = discoverTargets().find((t) => t.library === 'cmath');
-const cache = new ReferenceCache(null);
+const cacheDir = seededReferenceCacheDir();
+const cache = new ReferenceCache(cacheDir);
+afterAll(() => rmSync(cacheDir, { recursive: true, force: true }));
 
 interface Caught {
   suite: string;
