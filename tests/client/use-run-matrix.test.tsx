@@ -8,21 +8,14 @@ import { useRunProperties } from '../../client/use-run-properties';
 import type { RunMatrixCell } from '../../shared/run-matrix-cell';
 import type { RunView } from '../../shared/run-view';
 import { mockFetchRoutes } from '../setup/mock-fetch-routes';
+import { RUNNING_RUN } from '../setup/running-run';
 
+/** A running run with two shards, neither done. */
 const RUN: RunView = {
-  id: '7d3f9a52-1c4e-4b8a-9f10-2a6c5e8d4b31',
-  planId: 'p1',
-  planName: 'complex.js nightly',
-  trigger: 'manual',
-  status: 'running',
+  ...RUNNING_RUN,
   shardsTotal: 2,
   shardsDone: 0,
   counts: { pass: 0, fail: 0, error: 0, skipped: 0 },
-  regressions: null,
-  requestedBy: 'Kwame Asante',
-  createdAt: '2026-03-01T02:30:00Z',
-  startedAt: '2026-03-01T02:30:01Z',
-  finishedAt: null,
 };
 
 const cell = (suite: string, done: boolean): RunMatrixCell => ({

@@ -3,24 +3,10 @@ import { act, renderHook, waitFor } from '@testing-library/react';
 import type { ReactNode } from 'react';
 import { useOverview } from '../../client/use-overview';
 import { useRun } from '../../client/use-run';
-import type { RunView } from '../../shared/run-view';
 import { mockFetchRoutes } from '../setup/mock-fetch-routes';
+import { RUNNING_RUN } from '../setup/running-run';
 
-const RUN: RunView = {
-  id: '7d3f9a52-1c4e-4b8a-9f10-2a6c5e8d4b31',
-  planId: 'p1',
-  planName: 'complex.js nightly',
-  trigger: 'manual',
-  status: 'running',
-  shardsTotal: 4,
-  shardsDone: 1,
-  counts: { pass: 100, fail: 0, error: 0, skipped: 0 },
-  regressions: null,
-  requestedBy: 'Kwame Asante',
-  createdAt: '2026-03-01T02:30:00Z',
-  startedAt: '2026-03-01T02:30:01Z',
-  finishedAt: null,
-};
+const RUN = RUNNING_RUN;
 
 function wrapper({ children }: { children: ReactNode }) {
   const client = new QueryClient({ defaultOptions: { queries: { retry: false, gcTime: Infinity } } });
