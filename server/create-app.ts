@@ -3,7 +3,6 @@ import session from 'express-session';
 import helmet from 'helmet';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
-import { Pool } from 'pg';
 import type { DataSource } from 'typeorm';
 import type { ApiError } from '../shared/api-error';
 import { errorHandler } from './middleware/error-handler';
@@ -24,6 +23,7 @@ import { librariesRouter } from './routes/libraries-router';
 import { tokensRouter } from './routes/tokens-router';
 import { usersRouter } from './routes/users-router';
 import { configurePassport } from './auth/configure-passport';
+import { createPgPool } from './database/create-pg-pool';
 import { LibraryFindings } from './findings/library-findings';
 import { createSessionStore } from './auth/create-session-store';
 import { ShortLivedCache } from './auth/short-lived-cache';
@@ -63,7 +63,7 @@ const SIGNED_IN_CACHE_MS = 2000;
 /** The Express app: API under /api, the exported web app everywhere else. */
 export function createApp(options: AppOptions): SheetkeeperApp {
   // Sessions are read on every API request; with 5 connections 50 concurrent readers queued here.
-  const pool = new Pool({ connectionString: options.databaseUrl, max: 10 });
+  const pool = createPgPool(options.databaseUrl, 10);
   const userCache = new ShortLivedCache<User>(SIGNED_IN_CACHE_MS);
   const passport = configurePassport(options.dataSource, userCache);
   const limiter = new SignInLimiter(pool, options.signInLimits ?? DEFAULT_SIGN_IN_LIMITS);

@@ -18,6 +18,9 @@ import { Run } from './entities/run';
 import { Suite } from './entities/suite';
 import { SuiteVersion } from './entities/suite-version';
 import { User } from './entities/user';
+import { DATABASE_CONNECT_TIMEOUT_MS } from './database/database-connect-timeout-ms';
+import { logPoolError } from './database/log-pool-error';
+import { RedactingQueryLogger } from './database/redacting-query-logger';
 import { UsersSessionsSignInLimits1764626400000 } from './migrations/1764626400000-users-sessions-sign-in-limits';
 import { SuitesAndVersions1764700000000 } from './migrations/1764700000000-suites-and-versions';
 import { MailOutboxAndReceivedMail1764710000000 } from './migrations/1764710000000-mail-outbox-and-received-mail';
@@ -75,7 +78,10 @@ export function createDataSource(url: string): DataSource {
     migrations: MIGRATIONS,
     migrationsTableName: 'migrations',
     synchronize: false,
-    logging: ['error'],
+    // Failed queries are logged without their parameters (token hashes, bodies): see the logger.
+    logger: new RedactingQueryLogger(),
+    poolErrorHandler: logPoolError,
+    connectTimeoutMS: DATABASE_CONNECT_TIMEOUT_MS,
     extra: { max: 10 },
   });
 }

@@ -2,12 +2,17 @@ import type { NextFunction, Request, Response } from 'express';
 import type { ApiError } from '../../shared/api-error';
 import { HttpError } from '../http/http-error';
 import { InputError } from '../http/input-error';
+import { describeError } from '../database/describe-error';
+import { isDatabaseUnavailable } from '../database/is-database-unavailable';
 
 interface HttpishError {
   status?: number;
   type?: string;
   message?: string;
 }
+
+/** What a 503 for an unreachable database suggests; a restarted PostgreSQL accepts connections within seconds. */
+const DATABASE_RETRY_AFTER_SECONDS = 5;
 
 /**
  * Turns every thrown error into an ApiError body. Body-parser failures are the
@@ -48,6 +53,15 @@ export function errorHandler(err: unknown, _req: Request, res: Response, next: N
       issues: [{ field: 'body', rule: e.message ?? 'is not acceptable' }],
     });
   }
-  console.error('[sheetkeeper] unhandled error', err);
+  if (isDatabaseUnavailable(err)) {
+    // Not the request's fault and not a bug: PostgreSQL is down or dropped the connection. The
+    // pools open new connections on the next request, so the server serves again once it is back.
+    res.set('Retry-After', String(DATABASE_RETRY_AFTER_SECONDS));
+    return send(503, {
+      kind: 'unavailable',
+      message: 'The database cannot be reached right now, so nothing was read or saved. Try again in a moment.',
+    });
+  }
+  console.error('[sheetkeeper] unhandled error', describeError(err));
   send(500, { kind: 'server-error', message: 'Something went wrong on the server.' });
 }
