@@ -1,6 +1,7 @@
 import 'reflect-metadata';
 import { databaseUrl } from '../server/config';
 import { createDataSource } from '../server/data-source';
+import { describeError } from '../server/database/describe-error';
 
 /** `npm run migrate`: applies pending migrations; `--revert-all` undoes every one (used by the migration test). */
 async function main(): Promise<void> {
@@ -27,6 +28,6 @@ async function main(): Promise<void> {
 }
 
 main().catch((err) => {
-  console.error(err);
+  console.error(describeError(err));
   process.exit(1);
 });

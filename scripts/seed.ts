@@ -5,6 +5,7 @@ import { seedDemo } from '../server/seed/seed-demo';
 import { seedDemoCatalogue } from '../server/seed/seed-demo-catalogue';
 import { seedDemoRuns } from '../server/seed/seed-demo-runs';
 import { syncTargets } from '../server/targets/sync-targets';
+import { describeError } from '../server/database/describe-error';
 
 /** `npm run seed`: demo users, the installed targets, the demo catalogue and plans, two completed demo runs — only what is missing. */
 async function main(): Promise<void> {
@@ -30,6 +31,6 @@ async function main(): Promise<void> {
 }
 
 main().catch((err) => {
-  console.error(err);
+  console.error(describeError(err));
   process.exit(1);
 });

@@ -1,3 +1,5 @@
+import { describeError } from './database/describe-error';
+
 /** Longest a process waits for its parts to stop after SIGTERM or SIGINT before it exits anyway. */
 const GRACE_MS = 10_000;
 
@@ -11,7 +13,7 @@ export function onShutdown(stop: () => Promise<unknown>): void {
     stop().then(
       () => process.exit(0),
       (err: unknown) => {
-        console.error('[sheetkeeper] stopping failed', err);
+        console.error('[sheetkeeper] stopping failed', describeError(err));
         process.exit(1);
       },
     );

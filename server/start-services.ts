@@ -5,6 +5,7 @@ import { MailOutbox } from './mail/mail-outbox';
 import { openInstalledTarget } from './targets/open-installed-target';
 import { PgBossShardQueue } from './runs/pg-boss-shard-queue';
 import { ShardExecutor } from './runs/shard-executor';
+import { describeError } from './database/describe-error';
 
 /** How often due mail is sent; a regression mail waits at most this long after its run ends. */
 const MAIL_INTERVAL_MS = 5000;
@@ -44,7 +45,7 @@ export async function startServices(
         delivering = true;
         outbox
           .deliverDue()
-          .catch((err: unknown) => console.error('[sheetkeeper] mail delivery failed', err))
+          .catch((err: unknown) => console.error('[sheetkeeper] mail delivery failed', describeError(err)))
           .finally(() => {
             delivering = false;
           });

@@ -1,6 +1,7 @@
 import { createTask, type ScheduledTask } from 'node-cron';
 import type { DataSource } from 'typeorm';
 import { Schedule } from '../entities/schedule';
+import { describeError } from '../database/describe-error';
 
 /** Starts a run of a plan for a schedule's firing and answers the run's id. */
 export type StartScheduledRun = (planId: string, scheduleId: string, dueAt: Date) => Promise<string>;
@@ -20,7 +21,8 @@ export class PlanScheduler {
   constructor(
     private readonly dataSource: DataSource,
     private readonly startRun: StartScheduledRun,
-    private readonly onError: (err: unknown) => void = (err) => console.error('[sheetkeeper] schedule failed', err),
+    private readonly onError: (err: unknown) => void = (err) =>
+      console.error('[sheetkeeper] schedule failed', describeError(err)),
   ) {}
 
   async start(): Promise<void> {

@@ -1,5 +1,6 @@
 import PgBoss from 'pg-boss';
 import type { ShardQueue } from './shard-queue';
+import { describeError } from '../database/describe-error';
 
 const QUEUE = 'run-shard';
 
@@ -30,7 +31,7 @@ export class PgBossShardQueue implements ShardQueue {
       max: 4,
       maintenanceIntervalSeconds: options.maintenanceIntervalSeconds ?? 30,
     });
-    this.boss.on('error', (err) => console.error('[sheetkeeper] queue error', err));
+    this.boss.on('error', (err) => console.error('[sheetkeeper] queue error', describeError(err)));
   }
 
   private start(): Promise<void> {
