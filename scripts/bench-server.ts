@@ -2,6 +2,7 @@ import 'reflect-metadata';
 import { execFile } from 'node:child_process';
 import { promisify } from 'node:util';
 import { Client } from 'pg';
+import { clusterUrl } from '../server/database/cluster-url';
 import { performance } from 'node:perf_hooks';
 import type { AddressInfo } from 'node:net';
 import request from 'supertest';
@@ -42,10 +43,11 @@ const REQUESTS = Number(process.env.BENCH_REQUESTS ?? 2000);
 
 async function main(): Promise<void> {
   const base = databaseUrl().replace(/\/[^/]+$/, '');
-  const admin = new Client({ connectionString: `${base}/postgres` });
+  // Made by the administrative role, owned by and used as the application's (scripts/lib.sh).
+  const admin = new Client({ connectionString: `${clusterUrl('admin')}/postgres` });
   await admin.connect();
   await admin.query(`DROP DATABASE IF EXISTS ${DB} WITH (FORCE)`);
-  await admin.query(`CREATE DATABASE ${DB}`);
+  await admin.query(`CREATE DATABASE ${DB} OWNER ${decodeURIComponent(new URL(base).username)}`);
   const url = `${base}/${DB}`;
   const dataSource = createDataSource(url);
   await dataSource.initialize();

@@ -15,7 +15,7 @@ mkdir -p "$LOGS"
 cleanup() {
   kill "${server_pid:-0}" 2>/dev/null || true
   rm -rf "$WEB" "$LOGS"
-  PGPASSWORD="$(cat "$PGROOT/pg-password")" "$PG_BIN/psql" -h 127.0.0.1 -p "$PG_PORT" -U "$PG_USER" -d postgres -qtAX -c "DROP DATABASE IF EXISTS \"$DB\" WITH (FORCE)" >/dev/null 2>&1 || true
+  admin_psql postgres -c "DROP DATABASE IF EXISTS \"$DB\" WITH (FORCE)" >/dev/null 2>&1 || true
 }
 trap cleanup EXIT
 ensure_database "$DB" fresh

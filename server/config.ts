@@ -1,6 +1,7 @@
 import { randomBytes } from 'node:crypto';
-import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { chmodSync, existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
+import { clusterUrl } from './database/cluster-url';
 
 export const PROJECT_ROOT = path.resolve(__dirname, '..');
 const DATA_DIR = path.join(PROJECT_ROOT, '.data');
@@ -33,17 +34,19 @@ const LOOPBACK = /^(127\.\d+\.\d+\.\d+|::1|localhost)$/;
 
 /**
  * The database URL: DATABASE_URL when set, otherwise the cluster that the start and
- * test scripts made (`.data/pg-url`) with the database SHEETKEEPER_DB.
+ * test scripts made (`.data/pg-url`, the least-privilege role) with the database SHEETKEEPER_DB.
  */
 export function databaseUrl(): string {
   if (process.env.DATABASE_URL) return process.env.DATABASE_URL;
-  const urlFile = path.join(DATA_DIR, 'pg-url');
-  const base = process.env.SHEETKEEPER_PG_URL ?? (existsSync(urlFile) ? readFileSync(urlFile, 'utf8').trim() : '');
+  const base = clusterUrl('app');
   if (!base) throw new Error('No database: set DATABASE_URL, or run `npm start` once to create the local cluster.');
   return `${base}/${process.env.SHEETKEEPER_DB ?? 'sheetkeeper'}`;
 }
 
-/** A stable secret kept in `.data/` so sessions survive restarts; SESSION_SECRET wins. */
+/**
+ * A stable secret kept in `.data/` so sessions survive restarts; SESSION_SECRET wins. Readable by
+ * its owner only: created 0600, and one left wider by an older version is narrowed on start.
+ */
 function sessionSecret(): string {
   if (process.env.SESSION_SECRET) return process.env.SESSION_SECRET;
   const file = path.join(DATA_DIR, 'session-secret');
@@ -51,6 +54,7 @@ function sessionSecret(): string {
     mkdirSync(DATA_DIR, { recursive: true });
     writeFileSync(file, randomBytes(32).toString('hex'), { mode: 0o600 });
   }
+  chmodSync(file, 0o600);
   return readFileSync(file, 'utf8').trim();
 }
 

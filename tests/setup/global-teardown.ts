@@ -1,10 +1,10 @@
 import { Client } from 'pg';
-import { pgBaseUrl } from './pg-base-url';
+import { pgAdminUrl } from './pg-admin-url';
 import { templateDatabase } from './template-database';
 
 /** Drops this run's template database. */
 export default async function globalTeardown(): Promise<void> {
-  const admin = new Client({ connectionString: `${pgBaseUrl()}/postgres` });
+  const admin = new Client({ connectionString: `${pgAdminUrl()}/postgres` });
   await admin.connect();
   try {
     await admin.query(`DROP DATABASE IF EXISTS ${templateDatabase()} WITH (FORCE)`);

@@ -1,9 +1,9 @@
-import { readClusterUrl } from './read-cluster-url';
+import { requiredClusterUrl } from './required-cluster-url';
 
 /**
  * The local cluster's administrative role (no database), as written by scripts/lib.sh: it
  * creates and drops the test databases. The app under test connects with pgBaseUrl() instead.
  */
 export function pgAdminUrl(): string {
-  return readClusterUrl(process.env.SHEETKEEPER_PG_ADMIN_URL, 'pg-admin-url');
+  return requiredClusterUrl('admin');
 }

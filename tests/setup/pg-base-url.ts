@@ -1,6 +1,6 @@
-import { readClusterUrl } from './read-cluster-url';
+import { requiredClusterUrl } from './required-cluster-url';
 
-/** The local cluster's URL without a database, for the application's least-privilege role, as written by scripts/lib.sh. */
+/** The local cluster's URL without a database, for the application's least-privilege role (scripts/lib.sh). */
 export function pgBaseUrl(): string {
-  return readClusterUrl(process.env.SHEETKEEPER_PG_URL, 'pg-url');
+  return requiredClusterUrl('app');
 }

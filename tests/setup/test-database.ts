@@ -3,6 +3,8 @@ import { randomBytes } from 'node:crypto';
 import { Client } from 'pg';
 import type { DataSource } from 'typeorm';
 import { createDataSource } from '../../server/data-source';
+import { appRole } from './app-role';
+import { pgAdminUrl } from './pg-admin-url';
 import { pgBaseUrl } from './pg-base-url';
 import { templateDatabase } from './template-database';
 
@@ -13,7 +15,7 @@ export interface TestDatabase {
 }
 
 async function withAdmin<T>(work: (client: Client) => Promise<T>): Promise<T> {
-  const client = new Client({ connectionString: `${pgBaseUrl()}/postgres` });
+  const client = new Client({ connectionString: `${pgAdminUrl()}/postgres` });
   await client.connect();
   try {
     return await work(client);
@@ -24,12 +26,17 @@ async function withAdmin<T>(work: (client: Client) => Promise<T>): Promise<T> {
 
 /**
  * A private copy of the template database for one test file, so files can run in
- * parallel and change data freely. `empty: true` gives a database with no tables.
+ * parallel and change data freely. `empty: true` gives a database with no tables. Created by the
+ * administrative role, owned by and connected to as the application's least-privilege role.
  */
 export async function createTestDatabase(options: { empty?: boolean } = {}): Promise<TestDatabase> {
   const name = `sheetkeeper_t_${randomBytes(5).toString('hex')}`;
   await withAdmin((c) =>
-    c.query(options.empty ? `CREATE DATABASE ${name}` : `CREATE DATABASE ${name} TEMPLATE ${templateDatabase()}`),
+    c.query(
+      options.empty
+        ? `CREATE DATABASE ${name} OWNER ${appRole()}`
+        : `CREATE DATABASE ${name} TEMPLATE ${templateDatabase()} OWNER ${appRole()}`,
+    ),
   );
   const url = `${pgBaseUrl()}/${name}`;
   const dataSource = createDataSource(url);
