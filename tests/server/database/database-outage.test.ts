@@ -1,6 +1,5 @@
-import { Client } from 'pg';
 import request from 'supertest';
-import { pgAdminUrl } from '../../setup/pg-admin-url';
+import { databaseOutage, type DatabaseOutage } from '../../setup/database-outage';
 import { signInAs } from '../../setup/sign-in-as';
 import { startTestApp, type TestApp } from '../../setup/test-app';
 
@@ -10,37 +9,17 @@ import { startTestApp, type TestApp } from '../../setup/test-app';
  * and it refuses new connections until it is let back in.
  */
 let app: TestApp;
+let outage: DatabaseOutage;
 
 beforeAll(async () => {
   app = await startTestApp();
+  outage = databaseOutage(app.db.url);
 });
 
 afterAll(async () => {
-  await setAllowConnections(true);
+  await outage.end();
   await app.stop();
 });
-
-const databaseName = () => new URL(app.db.url).pathname.slice(1);
-
-async function asAdmin(sql: string): Promise<void> {
-  const admin = new Client({ connectionString: `${pgAdminUrl()}/postgres` });
-  await admin.connect();
-  try {
-    await admin.query(sql);
-  } finally {
-    await admin.end();
-  }
-}
-
-async function setAllowConnections(allow: boolean): Promise<void> {
-  await asAdmin(`ALTER DATABASE "${databaseName()}" WITH ALLOW_CONNECTIONS ${allow}`);
-}
-
-async function terminateBackends(): Promise<void> {
-  await asAdmin(
-    `SELECT pg_terminate_backend(pid) FROM pg_stat_activity WHERE datname = '${databaseName()}' AND pid <> pg_backend_pid()`,
-  );
-}
 
 /** Past the 2 s for which the app trusts a session row it has read, so the next request reads it again. */
 const SESSION_CACHE_WAIT_MS = 2100;
@@ -51,8 +30,7 @@ test('a database outage answers 503 with a plain message, and the app serves aga
   // Both pools (sessions and TypeORM's) now hold idle connections, which the termination kills.
   expect((await agent.get('/api/suites')).status).toBe(200);
 
-  await setAllowConnections(false);
-  await terminateBackends();
+  await outage.begin();
   // node-postgres reports the killed idle connections as 'error' events on their pools; without a
   // listener that event ended the process. Give them time to arrive.
   await new Promise((resolve) => setTimeout(resolve, SESSION_CACHE_WAIT_MS));
@@ -70,7 +48,7 @@ test('a database outage answers 503 with a plain message, and the app serves aga
   // Each lost connection is a log line, not an exception.
   expect(logged.mock.calls.map((c) => String(c[0])).join('\n')).toMatch(/a database connection was lost.*57P01/);
 
-  await setAllowConnections(true);
+  await outage.end();
   const back = await agent.get('/api/suites');
   expect(back.status).toBe(200);
   expect((await agent.get('/api/me')).status).toBe(200);
