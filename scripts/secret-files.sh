@@ -6,10 +6,14 @@
 SECRET_FILES=(pg-password pg-admin-url pg-app-password pg-url session-secret)
 
 # write_secret FILE: stdin into FILE, mode 0600 from the moment it exists (umask 077 before the
-# write; the chmod covers a file that already existed with a wider mode).
+# write). Written beside and renamed over FILE, so a reader (a jest worker reading pg-url while
+# npm start runs) sees the old or the new content, never an empty file, and a FILE that existed
+# with a wider mode is replaced by a 0600 one.
 write_secret() {
-  (umask 077 && cat >"$1")
-  chmod 600 "$1"
+  local tmp="$1.$$.tmp"
+  (umask 077 && cat >"$tmp")
+  chmod 600 "$tmp"
+  mv -f "$tmp" "$1"
 }
 
 # protect_secrets DIR…: makes DIR 0700 and every secret file in it 0600. Clusters made before
