@@ -1,6 +1,7 @@
 import connectPgSimple from 'connect-pg-simple';
 import session from 'express-session';
 import type { Pool } from 'pg';
+import { describeError } from '../database/describe-error';
 import { ShortLivedCache } from './short-lived-cache';
 
 /**
@@ -22,6 +23,9 @@ export function createSessionStore(pool: Pool, ttlMs: number): session.Store {
     createTableIfMissing: false,
     pruneSessionInterval: 15 * 60,
     disableTouch: true,
+    // Pruning expired sessions fails while PostgreSQL is down; logged without the error's values.
+    errorLog: (message: unknown, err?: unknown) =>
+      console.error(`[sheetkeeper] sessions: ${String(message)}`, describeError(err)),
   });
   const get = store.get.bind(store);
   const set = store.set.bind(store);
