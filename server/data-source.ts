@@ -18,6 +18,7 @@ import { Run } from './entities/run';
 import { Suite } from './entities/suite';
 import { SuiteVersion } from './entities/suite-version';
 import { User } from './entities/user';
+import { SuiteVersionTakenOverFrom1764887400000 } from './migrations/1764887400000-suite-version-taken-over-from';
 import { UsersSessionsSignInLimits1764626400000 } from './migrations/1764626400000-users-sessions-sign-in-limits';
 import { SuitesAndVersions1764700000000 } from './migrations/1764700000000-suites-and-versions';
 import { MailOutboxAndReceivedMail1764710000000 } from './migrations/1764710000000-mail-outbox-and-received-mail';
@@ -65,6 +66,7 @@ export const MIGRATIONS = [
   FailureTableIndexes1764780000000,
   PropertyResults1764790000000,
   FailureTableRowType1764800000000,
+  SuiteVersionTakenOverFrom1764887400000,
 ];
 
 export function createDataSource(url: string): DataSource {

@@ -78,6 +78,33 @@ describe('suites routes and review', () => {
     expect(res.status).toBe(403);
   });
 
+  it("makes an admin who edits ravi's draft its author: the admin cannot approve it, another reviewer can", async () => {
+    const odile = await signInAs(t.app, 'admin');
+    await ravi.post('/api/suites').send(demoSuiteBody('taken-over'));
+    const edited = await odile.put('/api/suites/taken-over').send({ ...demoSuiteBody('taken-over'), title: 'Edited' });
+    expect(edited.status).toBe(200);
+    expect(edited.body.version.author.displayName).toBe('Odile Marchetti');
+    expect(edited.body.version.takenOverFrom.displayName).toBe('Ravi Dutta');
+    expect((await odile.post('/api/suites/taken-over/submit')).status).toBe(200);
+    const own = await odile.post('/api/suites/taken-over/versions/1/review').send({ decision: 'approve' });
+    expect(own.status).toBe(403);
+    expect(own.body.message).toBe('You cannot review a suite version you wrote.');
+    const other = await hanne.post('/api/suites/taken-over/versions/1/review').send({ decision: 'approve' });
+    expect(other.status).toBe(200);
+    expect(other.body.version).toMatchObject({ status: 'approved', reviewer: { displayName: 'Hanne Lindqvist' } });
+  });
+
+  it('keeps the person whose draft was taken over from reviewing it too, and leaves a draft its author edits alone', async () => {
+    const odile = await signInAs(t.app, 'admin');
+    await hanne.post('/api/suites').send(demoSuiteBody('hanne-taken-over'));
+    const own = await hanne.put('/api/suites/hanne-taken-over').send(demoSuiteBody('hanne-taken-over'));
+    expect(own.body.version.takenOverFrom).toBeNull();
+    await odile.put('/api/suites/hanne-taken-over').send(demoSuiteBody('hanne-taken-over'));
+    await odile.post('/api/suites/hanne-taken-over/submit');
+    const res = await hanne.post('/api/suites/hanne-taken-over/versions/1/review').send({ decision: 'approve' });
+    expect(res.status).toBe(403);
+  });
+
   it('needs a comment to request changes', async () => {
     const res = await hanne.post('/api/suites/flow-sqrt/versions/2/review').send({ decision: 'request-changes' });
     expect(res.status).toBe(400);
