@@ -27,6 +27,15 @@ const preview = (body: unknown) => {
         issues: [{ field: 'body.cron', rule: 'has an invalid hour field: "25"' }],
       },
     };
+  if (cron === '*/5 * * * *')
+    return {
+      status: 400,
+      body: {
+        kind: 'invalid-input',
+        message: 'invalid input',
+        issues: [{ field: 'body.cron', rule: 'must leave at least 15 min between runs (this one runs 5 min apart)' }],
+      },
+    };
   if (cron === '15 6 * * 1')
     return {
       status: 200,
@@ -69,6 +78,20 @@ describe('ScheduleEditor', () => {
     await settle();
     await waitFor(() => expect(screen.getByText('× Cron expression has an invalid hour field: "25"')).toBeTruthy());
     expect(screen.getByLabelText('Cron expression').getAttribute('aria-invalid')).toBe('true');
+    expect(screen.getByText('— no times until the expression is valid')).toBeTruthy();
+  });
+
+  it('states the minimum time between runs, and shows the server refusing a schedule that runs more often', async () => {
+    fakeApiRoutes({ 'POST /api/schedules/preview': preview });
+    renderWithClient(<ScheduleEditor planId={PLAN} schedule={schedule} onDone={jest.fn()} />);
+    expect(screen.getByText(/Runs must be at least 15 minutes apart; use Run now for anything sooner\./)).toBeTruthy();
+    type('Cron expression', '*/5 * * * *');
+    await settle();
+    await waitFor(() =>
+      expect(
+        screen.getByText('× Cron expression must leave at least 15 min between runs (this one runs 5 min apart)'),
+      ).toBeTruthy(),
+    );
     expect(screen.getByText('— no times until the expression is valid')).toBeTruthy();
   });
 
