@@ -15,26 +15,20 @@ const schedule: ScheduleView = {
   nextRuns: [],
 };
 
-/** The server's preview, computed here only for the two expressions the tests type. */
+/** The server's rules for the expressions the tests type that it refuses. */
+const REFUSED: Record<string, string> = {
+  '0 25 * * *': 'has an invalid hour field: "25"',
+  '*/5 * * * *': 'must leave at least 15 min between runs (this one runs 5 min apart)',
+};
+
+/** The server's preview, computed here only for the expressions the tests type. */
 const preview = (body: unknown) => {
   const { cron } = body as { cron: string };
-  if (cron === '0 25 * * *')
+  const rule = REFUSED[cron];
+  if (rule)
     return {
       status: 400,
-      body: {
-        kind: 'invalid-input',
-        message: 'invalid input',
-        issues: [{ field: 'body.cron', rule: 'has an invalid hour field: "25"' }],
-      },
-    };
-  if (cron === '*/5 * * * *')
-    return {
-      status: 400,
-      body: {
-        kind: 'invalid-input',
-        message: 'invalid input',
-        issues: [{ field: 'body.cron', rule: 'must leave at least 15 min between runs (this one runs 5 min apart)' }],
-      },
+      body: { kind: 'invalid-input', message: 'invalid input', issues: [{ field: 'body.cron', rule }] },
     };
   if (cron === '15 6 * * 1')
     return {
