@@ -2,6 +2,7 @@ import { randomBytes } from 'node:crypto';
 import { chmodSync, existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { clusterUrl } from './database/cluster-url';
+import { ownOrigins } from './http/own-origins';
 
 export const PROJECT_ROOT = path.resolve(__dirname, '..');
 const DATA_DIR = path.join(PROJECT_ROOT, '.data');
@@ -28,6 +29,13 @@ export interface ServerConfig {
    * case page reads the values its run computed instead of computing them again.
    */
   referenceCacheDir: string;
+  /** Origins whose pages may change data (SHEETKEEPER_ORIGINS, default the app URL and this address's loopback names). */
+  allowedOrigins: string[];
+  /**
+   * Express's `trust proxy` (SHEETKEEPER_TRUST_PROXY, default off): which peers' X-Forwarded-For
+   * names the client for the sign-in limiter. Off, the peer of the loopback listener is the client.
+   */
+  trustProxy: string | number | false;
 }
 
 const LOOPBACK = /^(127\.\d+\.\d+\.\d+|::1|localhost)$/;
@@ -69,6 +77,7 @@ export function loadConfig(): ServerConfig {
   const host = process.env.SHEETKEEPER_HOST ?? '127.0.0.1';
   if (!LOOPBACK.test(host)) throw new Error(`SHEETKEEPER_HOST must be a loopback address, got ${host}`);
   const port = portFrom('SHEETKEEPER_PORT', 8460);
+  const appUrl = (process.env.SHEETKEEPER_APP_URL ?? `http://${host}:${port}`).replace(/\/$/, '');
   return {
     host,
     port,
@@ -80,7 +89,16 @@ export function loadConfig(): ServerConfig {
     smtpPort: portFrom('SHEETKEEPER_SMTP_PORT', 8525),
     fakeSmtp: process.env.SHEETKEEPER_FAKE_SMTP !== '0',
     workers: Math.max(0, Number(process.env.SHEETKEEPER_WORKERS ?? 1) || 0),
-    appUrl: (process.env.SHEETKEEPER_APP_URL ?? `http://${host}:${port}`).replace(/\/$/, ''),
+    appUrl,
     referenceCacheDir: process.env.SHEETKEEPER_REFERENCE_CACHE ?? path.join(DATA_DIR, 'reference-cache'),
+    allowedOrigins: ownOrigins(appUrl, port, process.env.SHEETKEEPER_ORIGINS),
+    trustProxy: trustProxyFrom(process.env.SHEETKEEPER_TRUST_PROXY),
   };
+}
+
+/** Express reads a number as a count of hops and a string as addresses or names ('loopback', '10.0.0.0/8'). */
+function trustProxyFrom(value: string | undefined): string | number | false {
+  const trimmed = value?.trim() ?? '';
+  if (trimmed === '' || trimmed === '0' || trimmed === 'false') return false;
+  return /^\d+$/.test(trimmed) ? Number(trimmed) : trimmed;
 }

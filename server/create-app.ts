@@ -6,6 +6,7 @@ import path from 'node:path';
 import type { DataSource } from 'typeorm';
 import type { ApiError } from '../shared/api-error';
 import { errorHandler } from './middleware/error-handler';
+import { sameOriginGuard } from './middleware/same-origin-guard';
 import { tokenAuth } from './middleware/token-auth';
 import { authRouter } from './routes/auth-router';
 import { deviationsRouter } from './routes/deviations-router';
@@ -44,6 +45,10 @@ export interface AppOptions {
   shardQueue: ShardQueue;
   /** The runs' reference values on disk, read by the case pictures (config.referenceCacheDir). */
   referenceCacheDir?: string | null;
+  /** Origins whose pages may change data (config.allowedOrigins); see same-origin-guard.ts. */
+  allowedOrigins: readonly string[];
+  /** Express's `trust proxy` (config.trustProxy); off unless a proxy in front sets X-Forwarded-For. */
+  trustProxy?: string | number | false;
 }
 
 export interface SheetkeeperApp {
@@ -71,6 +76,8 @@ export function createApp(options: AppOptions): SheetkeeperApp {
 
   const app = express();
   app.disable('x-powered-by');
+  // req.ip is the sign-in limiter's client: the peer address unless a trusted proxy names another.
+  app.set('trust proxy', options.trustProxy ?? false);
   // API answers are no-store, so an ETag (a hash of every body, ~0.1 ms for a 34 KB failure page) buys nothing.
   app.set('etag', false);
   app.use(
@@ -91,6 +98,8 @@ export function createApp(options: AppOptions): SheetkeeperApp {
     res.set('Cache-Control', 'no-store');
     next();
   });
+  // Before the body, the session and the routes: a foreign page's request reads and changes nothing.
+  api.use(sameOriginGuard(options.allowedOrigins));
   // Suite bodies from the form reach ~4 KB for the demo catalogue; 256 KB matches the upload limit.
   api.use(express.json({ limit: '256kb', strict: true }));
   api.use(

@@ -21,6 +21,7 @@ import { User } from './entities/user';
 import { DATABASE_CONNECT_TIMEOUT_MS } from './database/database-connect-timeout-ms';
 import { logPoolError } from './database/log-pool-error';
 import { RedactingQueryLogger } from './database/redacting-query-logger';
+import { SuiteVersionTakenOverFrom1764887400000 } from './migrations/1764887400000-suite-version-taken-over-from';
 import { UsersSessionsSignInLimits1764626400000 } from './migrations/1764626400000-users-sessions-sign-in-limits';
 import { SuitesAndVersions1764700000000 } from './migrations/1764700000000-suites-and-versions';
 import { MailOutboxAndReceivedMail1764710000000 } from './migrations/1764710000000-mail-outbox-and-received-mail';
@@ -68,6 +69,7 @@ export const MIGRATIONS = [
   FailureTableIndexes1764780000000,
   PropertyResults1764790000000,
   FailureTableRowType1764800000000,
+  SuiteVersionTakenOverFrom1764887400000,
 ];
 
 export function createDataSource(url: string): DataSource {

@@ -30,6 +30,8 @@ async function main(): Promise<void> {
     webDir: config.webDir,
     shardQueue: services.queue,
     referenceCacheDir: config.referenceCacheDir,
+    allowedOrigins: config.allowedOrigins,
+    trustProxy: config.trustProxy,
   });
   const server = app.listen(config.port, config.host, () => {
     const address = server.address();

@@ -6,6 +6,7 @@ import { useSaveSchedule } from '../../client/use-save-schedule';
 import { useSchedulePreview } from '../../client/use-schedule-preview';
 import { theme } from '../../constants/theme';
 import { cronPreviewBody } from '../../shared/schemas/schedule-body';
+import { MIN_SCHEDULE_INTERVAL_MINUTES } from '../../shared/min-schedule-interval-minutes';
 import type { ScheduleView } from '../../shared/schedule-view';
 import { FormActions } from '../ui/form-actions';
 import { SkText } from '../ui/sk-text';
@@ -89,7 +90,7 @@ export function ScheduleEditor({
       />
       <SkText variant="caption" style={styles.help}>
         Five fields: minute, hour, day of month, month, day of week (0 or 7 is Sunday). A sixth field in front gives
-        seconds.
+        seconds. Runs must be at least {MIN_SCHEDULE_INTERVAL_MINUTES} minutes apart; use Run now for anything sooner.
       </SkText>
       <View style={styles.chips}>
         {STARTERS.map((s) => (

@@ -11,6 +11,7 @@ import { SuiteDiff } from './suite-diff';
 import { SuiteFacts } from '../suites/suite-facts';
 import { SuitePreview } from '../suites/suite-preview';
 import { SuiteStatusLabel } from '../suites/suite-status-label';
+import { authorshipText } from '../suites/authorship-text';
 
 /** Reviewing one submitted version: what it changes against the previous version, its picture, what it checks, and the decision. */
 export function SuiteReview({ slug }: { slug: string }) {
@@ -26,13 +27,15 @@ export function SuiteReview({ slug }: { slug: string }) {
   const current = suite.data.find((v) => v.status === 'submitted');
   if (!current) return <QueryState state="empty" message={`No version of ${slug} waits for review.`} />;
   const previous = suite.data.find((v) => v.version === current.version - 1) ?? null;
+  // The server refuses a review from either (suite-service.ts): both wrote words in this version.
   const own = current.author.id === me.id;
+  const takenFromMe = current.takenOverFrom?.id === me.id;
 
   const decision = (
     <TitledPanel title="Decision">
-      {own ? (
+      {own || takenFromMe ? (
         <SkText variant="caption" tone="ink" style={styles.own}>
-          ◊ You wrote this version. Four eyes: another reviewer must review it, and the server will refuse your review.
+          {`◊ ${own ? 'You wrote this version' : `You wrote this draft before ${current.author.displayName} edited it and took it over`}. Four eyes: another reviewer must review it, and the server will refuse your review.`}
         </SkText>
       ) : null}
       <ReviewForm slug={slug} version={current.version} onReviewed={() => router.replace('/review')} />
@@ -63,7 +66,7 @@ export function SuiteReview({ slug }: { slug: string }) {
       <View style={styles.head}>
         <SuiteStatusLabel status={current.status} version={current.version} />
         <SkText variant="caption">
-          {slug} · written by {current.author.displayName}
+          {slug} · {authorshipText(current)}
         </SkText>
       </View>
       {wide ? (

@@ -2,6 +2,7 @@ import { Pressable, StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { SuiteVersionView } from '../../shared/suite-version-view';
 import { SkText } from '../ui/sk-text';
+import { authorshipText } from './authorship-text';
 import { SuiteStatusLabel } from './suite-status-label';
 
 const when = (iso: string | null) =>
@@ -46,7 +47,7 @@ export function VersionHistory({
             ) : null}
           </View>
           <SkText variant="caption">
-            written by {v.author.displayName} · {when(v.createdAt)}
+            {authorshipText(v)} · {when(v.createdAt)}
             {v.submittedAt ? ` · submitted ${when(v.submittedAt)}` : ''}
           </SkText>
           {v.reviewer ? (

@@ -4,7 +4,7 @@ import type { SuiteStatus } from '../../shared/suite-status';
 import { Suite } from './suite';
 import { User } from './user';
 
-/** One version of a suite: the validated suite body, its review state, author and reviewer. */
+/** One version of a suite: the validated suite body, its review state, author (its last editor) and reviewer. */
 @Entity({ name: 'suite_versions' })
 @Index('suite_versions_suite_version_unique', ['suite', 'version'], { unique: true })
 @Index('suite_versions_status_idx', ['status'])
@@ -31,6 +31,15 @@ export class SuiteVersion {
   @ManyToOne(() => User, { nullable: false, onDelete: 'RESTRICT' })
   @JoinColumn({ name: 'author_id', foreignKeyConstraintName: 'FK_suite_versions_author' })
   author!: User;
+
+  /**
+   * The author this version had before its last editor, when that editor was someone else: editing
+   * another person's draft makes you its author (four eyes follow the last editor). Null when the
+   * author wrote it alone.
+   */
+  @ManyToOne(() => User, { nullable: true, onDelete: 'SET NULL' })
+  @JoinColumn({ name: 'taken_over_from_id', foreignKeyConstraintName: 'FK_suite_versions_taken_over_from' })
+  takenOverFrom!: User | null;
 
   @ManyToOne(() => User, { nullable: true, onDelete: 'SET NULL' })
   @JoinColumn({ name: 'reviewer_id', foreignKeyConstraintName: 'FK_suite_versions_reviewer' })

@@ -5,6 +5,7 @@ import { Schedule } from '../entities/schedule';
 import type { User } from '../entities/user';
 import { HttpError } from '../http/http-error';
 import { InputError } from '../http/input-error';
+import { checkScheduleInterval } from './check-schedule-interval';
 import { nextCronRuns } from './next-cron-runs';
 
 /** Schedules of plans. Every change bumps `updated_at`, which the scheduler of every server process polls. */
@@ -23,6 +24,7 @@ export class ScheduleService {
     body: { planId: string; cron: string; timeZone: string; enabled: boolean },
   ): Promise<ScheduleView> {
     nextCronRuns(body.cron, body.timeZone);
+    checkScheduleInterval(body.cron);
     const plan = await this.dataSource.getRepository(Plan).findOneBy({ id: body.planId });
     if (!plan) throw new InputError([{ field: 'body.planId', rule: 'names no plan' }]);
     const saved = await this.dataSource
@@ -41,6 +43,8 @@ export class ScheduleService {
       enabled: patch.enabled ?? schedule.enabled,
     };
     nextCronRuns(next.cron, next.timeZone);
+    // Only a new expression is held to the minimum, so a schedule saved before it can still be paused.
+    if (patch.cron !== undefined) checkScheduleInterval(patch.cron);
     await schedules.update(id, next);
     return toView({ ...schedule, ...next } as Schedule);
   }

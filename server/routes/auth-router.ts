@@ -15,13 +15,14 @@ export function authRouter(passport: ReturnType<typeof configurePassport>, limit
   router.post('/sign-in', async (req, res, next) => {
     const body = parseInput(signInBody, req.body, 'body');
     req.body = body;
-    const address = req.ip ?? 'unknown';
-    const wait = await limiter.retryAfter(body.email, address);
+    // The client as the listener sees it, or as a trusted proxy names it (`trust proxy`, off by default).
+    const client = req.ip ?? req.socket.remoteAddress ?? 'unknown';
+    const wait = await limiter.admit(body.email, client);
     if (wait > 0) {
       res.set('Retry-After', String(wait));
       res.status(429).json({
         kind: 'too-many-attempts',
-        message: `Too many failed attempts. Try again in ${Math.ceil(wait / 60)} min.`,
+        message: `Too many failed attempts. Try again in ${wait < 60 ? `${wait} s` : `${Math.ceil(wait / 60)} min`}.`,
         retryAfterSeconds: wait,
       } satisfies ApiError);
       return;
@@ -29,13 +30,13 @@ export function authRouter(passport: ReturnType<typeof configurePassport>, limit
     passport.authenticate('local', { session: false }, (err: unknown, user: User | false) => {
       if (err) return next(err);
       if (!user) {
-        limiter.recordFailure(body.email, address).then(() => res.status(401).json(WRONG), next);
+        limiter.recordFailure(body.email, client).then(() => res.status(401).json(WRONG), next);
         return;
       }
       // req.logIn regenerates the session id (passport ≥ 0.6) before storing the user.
       req.logIn(user, (loginErr) => {
         if (loginErr) return next(loginErr);
-        limiter.recordSuccess(body.email, address).then(() => res.json({ user: toPublicUser(user) }), next);
+        limiter.recordSuccess(body.email, client).then(() => res.json({ user: toPublicUser(user) }), next);
       });
     })(req, res, next);
   });

@@ -4,6 +4,7 @@ import { ROLES } from '../../shared/roles';
 import { idParams } from '../../shared/schemas/id-params';
 import { cronPreviewBody, scheduleBody, schedulePatchBody } from '../../shared/schemas/schedule-body';
 import { requireRole } from '../middleware/require-role';
+import { checkScheduleInterval } from '../plans/check-schedule-interval';
 import { nextCronRuns } from '../plans/next-cron-runs';
 import { parseInput } from '../http/parse-input';
 import { ScheduleService } from '../plans/schedule-service';
@@ -19,7 +20,10 @@ export function schedulesRouter(dataSource: DataSource): Router {
   });
   router.post('/preview', requireRole(...ROLES), (req, res) => {
     const { cron, timeZone } = parseInput(cronPreviewBody, req.body, 'body');
-    res.json({ nextRuns: nextCronRuns(cron, timeZone).map((d) => d.toISOString()) });
+    // The form previews as the expression is typed, so the minimum shows before anything is saved.
+    const nextRuns = nextCronRuns(cron, timeZone);
+    checkScheduleInterval(cron);
+    res.json({ nextRuns: nextRuns.map((d) => d.toISOString()) });
   });
   router.post('/', editors, async (req, res) => {
     res.status(201).json({ schedule: await schedules.create(req.user!, parseInput(scheduleBody, req.body, 'body')) });

@@ -4,6 +4,7 @@ import type { DataSource } from 'typeorm';
 import { ROLES } from '../../shared/roles';
 import { reviewBody } from '../../shared/schemas/review-body';
 import { suiteListQuery } from '../../shared/schemas/suite-list-query';
+import { uploadFileName } from '../../shared/schemas/upload-file-name';
 import { suiteSlugParams, suiteVersionParams } from '../../shared/schemas/suite-slug-params';
 import { requireRole } from '../middleware/require-role';
 import { HttpError } from '../http/http-error';
@@ -22,6 +23,8 @@ const upload = multer({
   storage: multer.memoryStorage(),
   limits: { fileSize: MAX_UPLOAD_BYTES, files: 1, fields: 4, parts: 6 },
   fileFilter: (_req, file, done) => {
+    const badName = fileNameIssue(file.originalname);
+    if (badName) return done(badName);
     const json = file.mimetype === 'application/json' || file.originalname.toLowerCase().endsWith('.json');
     if (json) done(null, true);
     else done(new HttpError(415, { kind: 'unsupported-media-type', message: 'A suite file must be JSON (.json).' }));
@@ -35,6 +38,8 @@ const tableUpload = multer({
   storage: multer.memoryStorage(),
   limits: { fileSize: MAX_TABLE_BYTES, files: 1, fields: 4, parts: 6 },
   fileFilter: (_req, file, done) => {
+    const badName = fileNameIssue(file.originalname);
+    if (badName) return done(badName);
     const csv =
       ['text/csv', 'application/vnd.ms-excel', 'text/plain'].includes(file.mimetype) ||
       file.originalname.toLowerCase().endsWith('.csv');
@@ -42,6 +47,12 @@ const tableUpload = multer({
     else done(new HttpError(415, { kind: 'unsupported-media-type', message: 'A reference table must be CSV (.csv).' }));
   },
 });
+
+/** A bad file name is refused before the file is read (and long before a row could keep it). */
+function fileNameIssue(name: string): InputError | null {
+  const checked = uploadFileName.safeParse(name);
+  return checked.success ? null : new InputError([{ field: 'file.name', rule: checked.error.issues[0]!.message }]);
+}
 
 /** multer's own errors are the client's: too large is 413, the rest 400 naming the rule. */
 function receiveFile(req: Request, res: Response, next: NextFunction): void {
@@ -61,7 +72,10 @@ function receiveWith(m: multer.Multer, maxBytes: number, req: Request, res: Resp
         );
       return next(new InputError([{ field: err.field ?? 'file', rule: err.message.toLowerCase() }]));
     }
-    next(err);
+    if (err instanceof InputError || err instanceof HttpError || !(err instanceof Error)) return next(err);
+    // Anything else was thrown by busboy reading the body (a NUL in a part header gives "Malformed part
+    // header"): the client sent a broken multipart body, which is a 400, not a server error.
+    next(new InputError([{ field: 'file', rule: `must be sent as well-formed multipart/form-data (${err.message})` }]));
   });
 }
 

@@ -9,7 +9,7 @@ import type { User } from '../entities/user';
 import { HttpError } from '../http/http-error';
 import { toSuiteVersionView } from '../views/to-suite-version-view';
 
-const RELATIONS = { suite: true, author: true, reviewer: true } as const;
+const RELATIONS = { suite: true, author: true, takenOverFrom: true, reviewer: true } as const;
 
 /**
  * Suites and their review. Every change runs in one transaction that locks the suite row,
@@ -100,6 +100,7 @@ export class SuiteService {
             status: 'draft',
             body: { ...body, version: 1 },
             author: user,
+            takenOverFrom: null,
             reviewer: null,
             reviewComment: null,
             submittedAt: null,
@@ -125,9 +126,15 @@ export class SuiteService {
             kind: 'forbidden',
             message: `Version ${latest.version} is ${latest.author.displayName}'s draft.`,
           });
-        await tx
-          .getRepository(SuiteVersion)
-          .update(latest.id, { body: { ...body, version: latest.version }, status: 'draft' });
+        // The last editor is the author: an admin who edits Ravi's draft answers for its words and
+        // cannot approve them; the draft records whose it was.
+        const takenOver = latest.author.id !== user.id;
+        await tx.getRepository(SuiteVersion).update(latest.id, {
+          body: { ...body, version: latest.version },
+          status: 'draft',
+          author: user,
+          ...(takenOver ? { takenOverFrom: latest.author } : {}),
+        });
         return { created: false, view: await this.view(tx, latest.id) };
       }
       const next = await tx.getRepository(SuiteVersion).save(
@@ -137,6 +144,7 @@ export class SuiteService {
           status: 'draft',
           body: { ...body, version: latest.version + 1 },
           author: user,
+          takenOverFrom: null,
           reviewer: null,
           reviewComment: null,
           submittedAt: null,
@@ -181,8 +189,9 @@ export class SuiteService {
           kind: 'conflict',
           message: `Version ${version} is ${target.status}; only a submitted version can be reviewed.`,
         });
-      // Four eyes: nobody approves their own suite, whatever their role.
-      if (target.author.id === user.id)
+      // Four eyes: nobody reviews words they wrote, whatever their role: neither the last editor
+      // (the author) nor the person whose draft that editor took over.
+      if (target.author.id === user.id || target.takenOverFrom?.id === user.id)
         throw new HttpError(403, { kind: 'forbidden', message: 'You cannot review a suite version you wrote.' });
       await tx.getRepository(SuiteVersion).update(target.id, {
         status: decision === 'approve' ? 'approved' : 'changes-requested',

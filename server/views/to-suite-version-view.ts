@@ -1,7 +1,7 @@
 import type { SuiteVersionView } from '../../shared/suite-version-view';
 import type { SuiteVersion } from '../entities/suite-version';
 
-/** The API view of a version; `suite`, `author` and `reviewer` must be loaded. */
+/** The API view of a version; `suite`, `author`, `takenOverFrom` and `reviewer` must be loaded. */
 export function toSuiteVersionView(v: SuiteVersion): SuiteVersionView {
   return {
     id: v.id,
@@ -11,6 +11,7 @@ export function toSuiteVersionView(v: SuiteVersion): SuiteVersionView {
     status: v.status,
     body: v.body,
     author: { id: v.author.id, displayName: v.author.displayName },
+    takenOverFrom: v.takenOverFrom ? { id: v.takenOverFrom.id, displayName: v.takenOverFrom.displayName } : null,
     reviewer: v.reviewer ? { id: v.reviewer.id, displayName: v.reviewer.displayName } : null,
     reviewComment: v.reviewComment,
     createdAt: v.createdAt.toISOString(),

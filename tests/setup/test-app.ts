@@ -1,4 +1,5 @@
 import { createApp, type AppOptions, type SheetkeeperApp } from '../../server/create-app';
+import { ownOrigins } from '../../server/http/own-origins';
 import { idleShardQueue } from './idle-shard-queue';
 import { createTestDatabase, type TestDatabase } from './test-database';
 
@@ -6,6 +7,9 @@ export interface TestApp extends SheetkeeperApp {
   db: TestDatabase;
   stop(): Promise<void>;
 }
+
+/** The origins the test app accepts pages from: the default for a server on 127.0.0.1:8460. */
+export const TEST_APP_ORIGINS = ownOrigins('http://127.0.0.1:8460', 8460, undefined);
 
 /** The real app over a private test database; call `stop()` in afterAll. */
 export async function startTestApp(overrides: Partial<AppOptions> = {}): Promise<TestApp> {
@@ -15,6 +19,7 @@ export async function startTestApp(overrides: Partial<AppOptions> = {}): Promise
     databaseUrl: db.url,
     sessionSecret: 'test-secret',
     shardQueue: idleShardQueue(),
+    allowedOrigins: TEST_APP_ORIGINS,
     ...overrides,
   });
   return {

@@ -15,17 +15,20 @@ const schedule: ScheduleView = {
   nextRuns: [],
 };
 
-/** The server's preview, computed here only for the two expressions the tests type. */
+/** The server's rules for the expressions the tests type that it refuses. */
+const REFUSED: Record<string, string> = {
+  '0 25 * * *': 'has an invalid hour field: "25"',
+  '*/5 * * * *': 'must leave at least 15 min between runs (this one runs 5 min apart)',
+};
+
+/** The server's preview, computed here only for the expressions the tests type. */
 const preview = (body: unknown) => {
   const { cron } = body as { cron: string };
-  if (cron === '0 25 * * *')
+  const rule = REFUSED[cron];
+  if (rule)
     return {
       status: 400,
-      body: {
-        kind: 'invalid-input',
-        message: 'invalid input',
-        issues: [{ field: 'body.cron', rule: 'has an invalid hour field: "25"' }],
-      },
+      body: { kind: 'invalid-input', message: 'invalid input', issues: [{ field: 'body.cron', rule }] },
     };
   if (cron === '15 6 * * 1')
     return {
@@ -69,6 +72,20 @@ describe('ScheduleEditor', () => {
     await settle();
     await waitFor(() => expect(screen.getByText('× Cron expression has an invalid hour field: "25"')).toBeTruthy());
     expect(screen.getByLabelText('Cron expression').getAttribute('aria-invalid')).toBe('true');
+    expect(screen.getByText('— no times until the expression is valid')).toBeTruthy();
+  });
+
+  it('states the minimum time between runs, and shows the server refusing a schedule that runs more often', async () => {
+    fakeApiRoutes({ 'POST /api/schedules/preview': preview });
+    renderWithClient(<ScheduleEditor planId={PLAN} schedule={schedule} onDone={jest.fn()} />);
+    expect(screen.getByText(/Runs must be at least 15 minutes apart; use Run now for anything sooner\./)).toBeTruthy();
+    type('Cron expression', '*/5 * * * *');
+    await settle();
+    await waitFor(() =>
+      expect(
+        screen.getByText('× Cron expression must leave at least 15 min between runs (this one runs 5 min apart)'),
+      ).toBeTruthy(),
+    );
     expect(screen.getByText('— no times until the expression is valid')).toBeTruthy();
   });
 

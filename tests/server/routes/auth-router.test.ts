@@ -12,7 +12,15 @@ function sessionCookie(res: request.Response): string | undefined {
 describe('auth routes', () => {
   let t: TestApp;
   beforeAll(async () => {
-    t = await startTestApp({ signInLimits: { perAccountAndAddress: 3, perAddress: 50, windowSeconds: 60 } });
+    t = await startTestApp({
+      signInLimits: {
+        perAccountAndClient: 3,
+        perClient: 50,
+        perAccountBeforeSpacing: 50,
+        accountSpacingSeconds: 1,
+        windowSeconds: 60,
+      },
+    });
   });
   afterAll(() => t.stop());
 
@@ -67,7 +75,7 @@ describe('auth routes', () => {
     expect(sessionCookie(wrong)).toBeUndefined();
   });
 
-  it('blocks an account from one address after the allowed failures, even with the right password', async () => {
+  it('blocks an account from one client after the allowed failures, even with the right password', async () => {
     const kwame = { email: 'kwame@sheetkeeper.test', password: 'kwame-demo-2026' };
     for (let i = 0; i < 3; i += 1) {
       expect(
@@ -100,14 +108,22 @@ describe('auth routes', () => {
   });
 });
 
-describe('sign-in limit per address', () => {
+describe('sign-in limit per client', () => {
   let t: TestApp;
   beforeAll(async () => {
-    t = await startTestApp({ signInLimits: { perAccountAndAddress: 100, perAddress: 4, windowSeconds: 60 } });
+    t = await startTestApp({
+      signInLimits: {
+        perAccountAndClient: 100,
+        perClient: 4,
+        perAccountBeforeSpacing: 100,
+        accountSpacingSeconds: 1,
+        windowSeconds: 60,
+      },
+    });
   });
   afterAll(() => t.stop());
 
-  it('blocks the address after failures spread over many accounts', async () => {
+  it('blocks the client after failures spread over many accounts', async () => {
     for (let i = 0; i < 4; i += 1) {
       expect(
         (

@@ -101,6 +101,34 @@ describe('plans and schedules', () => {
     ]);
   });
 
+  it('refuses a schedule that runs more often than every 15 minutes, in the preview, on create and on change', async () => {
+    const planId = (await kwame.get('/api/plans')).body.plans[0].id;
+    const before = (await kwame.get('/api/schedules')).body.schedules.length;
+    const cases: [string, string][] = [
+      ['* * * * * *', '1 s'],
+      ['*/1 * * * *', '1 min'],
+      ['0,5 * * * *', '5 min'],
+      ['0 0,10 3 * * *', '10 min'],
+    ];
+    for (const [cron, apart] of cases) {
+      const issues = [
+        { field: 'body.cron', rule: `must leave at least 15 min between runs (this one runs ${apart} apart)` },
+      ];
+      const preview = await kwame.post('/api/schedules/preview').send({ cron, timeZone: 'UTC' });
+      expect([cron, preview.status, preview.body.issues]).toEqual([cron, 400, issues]);
+      const created = await kwame.post('/api/schedules').send({ planId, cron, timeZone: 'UTC' });
+      expect([cron, created.status, created.body.issues]).toEqual([cron, 400, issues]);
+    }
+    expect((await kwame.get('/api/schedules')).body.schedules).toHaveLength(before);
+    const [schedule] = (await kwame.get('/api/schedules')).body.schedules;
+    const changed = await kwame.patch(`/api/schedules/${schedule.id}`).send({ cron: '*/5 * * * *' });
+    expect(changed.status).toBe(400);
+    expect((await kwame.get('/api/schedules')).body.schedules[0].cron).toBe(schedule.cron);
+    expect((await kwame.post('/api/schedules/preview').send({ cron: '*/15 * * * *', timeZone: 'UTC' })).status).toBe(
+      200,
+    );
+  });
+
   it('disables a schedule, which then has no next times', async () => {
     const [schedule] = (await kwame.get('/api/schedules')).body.schedules;
     const res = await kwame.patch(`/api/schedules/${schedule.id}`).send({ enabled: false });

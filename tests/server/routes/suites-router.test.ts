@@ -78,6 +78,33 @@ describe('suites routes and review', () => {
     expect(res.status).toBe(403);
   });
 
+  it("makes an admin who edits ravi's draft its author: the admin cannot approve it, another reviewer can", async () => {
+    const odile = await signInAs(t.app, 'admin');
+    await ravi.post('/api/suites').send(demoSuiteBody('taken-over'));
+    const edited = await odile.put('/api/suites/taken-over').send({ ...demoSuiteBody('taken-over'), title: 'Edited' });
+    expect(edited.status).toBe(200);
+    expect(edited.body.version.author.displayName).toBe('Odile Marchetti');
+    expect(edited.body.version.takenOverFrom.displayName).toBe('Ravi Dutta');
+    expect((await odile.post('/api/suites/taken-over/submit')).status).toBe(200);
+    const own = await odile.post('/api/suites/taken-over/versions/1/review').send({ decision: 'approve' });
+    expect(own.status).toBe(403);
+    expect(own.body.message).toBe('You cannot review a suite version you wrote.');
+    const other = await hanne.post('/api/suites/taken-over/versions/1/review').send({ decision: 'approve' });
+    expect(other.status).toBe(200);
+    expect(other.body.version).toMatchObject({ status: 'approved', reviewer: { displayName: 'Hanne Lindqvist' } });
+  });
+
+  it('keeps the person whose draft was taken over from reviewing it too, and leaves a draft its author edits alone', async () => {
+    const odile = await signInAs(t.app, 'admin');
+    await hanne.post('/api/suites').send(demoSuiteBody('hanne-taken-over'));
+    const own = await hanne.put('/api/suites/hanne-taken-over').send(demoSuiteBody('hanne-taken-over'));
+    expect(own.body.version.takenOverFrom).toBeNull();
+    await odile.put('/api/suites/hanne-taken-over').send(demoSuiteBody('hanne-taken-over'));
+    await odile.post('/api/suites/hanne-taken-over/submit');
+    const res = await hanne.post('/api/suites/hanne-taken-over/versions/1/review').send({ decision: 'approve' });
+    expect(res.status).toBe(403);
+  });
+
   it('needs a comment to request changes', async () => {
     const res = await hanne.post('/api/suites/flow-sqrt/versions/2/review').send({ decision: 'request-changes' });
     expect(res.status).toBe(400);
@@ -206,6 +233,60 @@ describe('reference tables uploaded for a suite', () => {
       `SELECT kind, filename, bytes FROM uploads WHERE kind = 'reference-table'`,
     );
     expect(stored).toEqual({ kind: 'reference-table', filename: 'sqrt.csv', bytes: csv.length });
+  });
+
+  it('refuses upload file names that are too long or hold control characters, with 400 on file.name and no row', async () => {
+    const ravi = await signInAs(t.app, 'contributor');
+    await ravi.post('/api/suites').send(demoSuiteBody('named-sqrt'));
+    const suiteFile = Buffer.from(JSON.stringify(demoSuiteBody('named-upload')));
+    const csv = Buffer.from('z_re,z_im,expected_re,expected_im,source\n3,4,2,1,by hand\n');
+    const count = async () =>
+      (
+        await t.db.dataSource.query(
+          `SELECT (SELECT count(*) FROM uploads)::int AS u, (SELECT count(*) FROM suites)::int AS s`,
+        )
+      )[0];
+    const before = await count();
+    const cases: [string, { field: string; rule: string }][] = [
+      [`${'a'.repeat(5000)}.json`, { field: 'file.name', rule: 'must be at most 200 characters' }],
+      // busboy itself refuses raw control characters in a part header.
+      [
+        'bell\u0007.json',
+        { field: 'file', rule: 'must be sent as well-formed multipart/form-data (Malformed part header)' },
+      ],
+      [
+        'nul\u0000name.json',
+        { field: 'file', rule: 'must be sent as well-formed multipart/form-data (Malformed part header)' },
+      ],
+      ['tab\tname.json', { field: 'file.name', rule: 'must not contain control characters' }],
+    ];
+    for (const [name, issue] of cases) {
+      const suite = await ravi
+        .post('/api/suites/upload')
+        .attach('file', suiteFile, { filename: name, contentType: 'application/json' });
+      expect([name.slice(0, 20), suite.status, suite.body.issues]).toEqual([name.slice(0, 20), 400, [issue]]);
+      const table = await ravi
+        .post('/api/suites/named-sqrt/reference-table')
+        .attach('file', csv, { filename: name.replace('.json', '.csv'), contentType: 'text/csv' });
+      expect([table.status, table.body.issues]).toEqual([400, [issue]]);
+    }
+    // A NUL can also arrive percent-encoded in RFC 5987's filename*, which busboy decodes.
+    for (const [encoded, rule] of [['nul%00name.json', 'must not contain control characters']]) {
+      const body =
+        `--b0undary\r\nContent-Disposition: form-data; name="file"; filename*=UTF-8''${encoded}\r\n` +
+        `Content-Type: application/json\r\n\r\n${suiteFile.toString()}\r\n--b0undary--\r\n`;
+      const res = await ravi
+        .post('/api/suites/upload')
+        .set('Content-Type', 'multipart/form-data; boundary=b0undary')
+        .send(body);
+      expect([encoded, res.status, res.body.issues]).toEqual([encoded, 400, [{ field: 'file.name', rule }]]);
+    }
+    expect(await count()).toEqual(before);
+    const longest = `${'b'.repeat(195)}.json`;
+    const fine = await ravi
+      .post('/api/suites/upload')
+      .attach('file', suiteFile, { filename: longest, contentType: 'application/json' });
+    expect(fine.status).toBe(201);
   });
 
   it('refuses a table that is not CSV, and one for a suite that does not exist', async () => {
