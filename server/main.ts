@@ -1,6 +1,7 @@
 import 'reflect-metadata';
 import { loadConfig } from './config';
 import { createApp } from './create-app';
+import { ownOrigins } from './http/own-origins';
 import { createDataSource } from './data-source';
 import { DEMO_USERS } from './seed/demo-users';
 import { onShutdown } from './on-shutdown';
@@ -22,6 +23,7 @@ async function main(): Promise<void> {
   const scheduler = new PlanScheduler(dataSource, async (planId) => (await runs.start(planId, 'schedule', null)).id);
   await scheduler.start();
 
+  const origins = [...config.allowedOrigins];
   const { app, close } = createApp({
     dataSource,
     databaseUrl: config.databaseUrl,
@@ -30,12 +32,15 @@ async function main(): Promise<void> {
     webDir: config.webDir,
     shardQueue: services.queue,
     referenceCacheDir: config.referenceCacheDir,
-    allowedOrigins: config.allowedOrigins,
+    allowedOrigins: origins,
     trustProxy: config.trustProxy,
   });
   const server = app.listen(config.port, config.host, () => {
     const address = server.address();
     const port = typeof address === 'object' && address ? address.port : config.port;
+    // Port 0: the origins made from the configured port name no real address; add the bound one's.
+    if (config.port === 0 && !process.env.SHEETKEEPER_ORIGINS)
+      origins.push(...ownOrigins(config.appUrl, port, undefined));
     console.log(`\nSheetkeeper is serving http://${config.host}:${port}/`);
     console.log(
       services.fakeSmtp

@@ -22,8 +22,10 @@ const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
  *   user's browser was steered to.
  */
 export function sameOriginGuard(allowed: readonly string[]) {
-  const own = new Set(allowed.map((o) => originOf(o) ?? o));
+  // Read at each request: a server on an OS-chosen port (SHEETKEEPER_PORT=0) learns its own
+  // origins only once it listens (server/main.ts adds them to this list then).
   return (req: Request, res: Response, next: NextFunction): void => {
+    const own = new Set(allowed.map((o) => originOf(o) ?? o));
     if (SAFE_METHODS.has(req.method)) return next();
     if (/^Bearer\s/i.test(req.get('authorization') ?? '')) return next();
     const origin = req.get('origin');
