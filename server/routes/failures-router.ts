@@ -15,10 +15,12 @@ import { InputError } from '../http/input-error';
 import { parseInput } from '../http/parse-input';
 import { failurePageJson } from '../failures/failure-page-json';
 import { searchFailures } from '../failures/failure-search';
+import { spreadsheetSafeCell } from '../failures/spreadsheet-safe-cell';
 
 /** The export's cells in order, from the one list of the failure row's fields. */
 const CSV_CELLS = FAILURE_ROW_FIELDS.flatMap(
-  (f): readonly (readonly [string, (row: FailureView) => string | number])[] => ('csv' in f ? f.csv : []),
+  (f): readonly (readonly [string, (row: FailureView) => string | number, 'text' | 'number'])[] =>
+    'csv' in f ? f.csv : [],
 );
 
 /** Rows per CSV export: enough for a whole demo run; larger tables are filtered first. */
@@ -39,7 +41,9 @@ export function failuresRouter(dataSource: DataSource, options: { referenceCache
       throw new InputError([{ field: 'query', rule: 'needs run, suite or target to export' }]);
     const { rows } = await searchFailures(dataSource, q, true);
     const csv = stringify(
-      rows.map((r) => Object.fromEntries(CSV_CELLS.map(([header, read]) => [header, read(r)]))),
+      rows.map((r) =>
+        Object.fromEntries(CSV_CELLS.map(([header, read, kind]) => [header, spreadsheetSafeCell(read(r), kind)])),
+      ),
       { header: true },
     );
     res.type('text/csv').attachment('sheetkeeper-failures.csv').send(csv);
