@@ -231,6 +231,12 @@ const hostileJson: fc.Arbitrary<unknown> = fc.oneof(
 
 /** Strings for the query and the path, already percent-encoded: NUL, CESU-8 surrogates, bad escapes, huge numbers. */
 const hostileUrlText: fc.Arbitrary<string> = fc.oneof(
+  {
+    weight: 2,
+    arbitrary: fc
+      .tuple(fc.constantFrom('%00', '%ED%A0%80', '%ED%B0%80'), fc.constantFrom('', 'sqrt', 'complex.js@2.4.3', '12'))
+      .map(([bad, text]) => text + bad),
+  },
   fc.constantFrom(
     '%00',
     'a%00b',
@@ -270,13 +276,44 @@ function replaced(value: unknown, path: (string | number)[], by: unknown): unkno
   return copy;
 }
 
-/** A valid body with one field (or the whole body) replaced by a hostile value, or with an unknown field. */
+function valueAt(value: unknown, path: (string | number)[]): unknown {
+  return path.reduce<unknown>((v, k) => (v as Record<string | number, unknown>)[k], value);
+}
+
+/** Characters PostgreSQL or JSON cannot store: U+0000 and lone surrogates of either half. */
+const unstorable = fc.constantFrom('\u0000', '\ud800', '\udc00');
+
+/**
+ * A valid body broken in one place: most often one text field with an unstorable character
+ * slipped in (the rest stays valid, so the value reaches the database unless validation stops
+ * it), else one field (or the whole body) replaced by a hostile value, or an unknown field.
+ * Text fields are the string leaves that are not numbers, so a title or a path name is picked
+ * about as often as a complex number's parts.
+ */
 function brokenBody(valid: unknown): fc.Arbitrary<unknown> {
   const paths = leafPaths(valid);
+  const texts = paths.filter((p) => {
+    const v = valueAt(valid, p);
+    return typeof v === 'string' && !/^\s*[+-]?(\d|\.\d|inf|nan|0x)/i.test(v);
+  });
+  const slipped =
+    texts.length === 0
+      ? []
+      : [
+          {
+            weight: 4,
+            arbitrary: fc.tuple(fc.constantFrom(...texts), unstorable, fc.nat()).map(([p, bad, at]) => {
+              const text = valueAt(valid, p) as string;
+              const i = at % (text.length + 1);
+              return replaced(valid, p, text.slice(0, i) + bad + text.slice(i));
+            }),
+          },
+        ];
   return fc.oneof(
-    fc.tuple(fc.constantFrom(...paths), hostileJson).map(([p, v]) => replaced(valid, p, v)),
-    hostileJson.map((v) => ({ ...(valid as object), ['unknown\u0000field']: v })),
-    fc.constant(valid),
+    ...slipped,
+    { weight: 3, arbitrary: fc.tuple(fc.constantFrom(...paths), hostileJson).map(([p, v]) => replaced(valid, p, v)) },
+    { weight: 1, arbitrary: hostileJson.map((v) => ({ ...(valid as object), ['unknown\u0000field']: v })) },
+    { weight: 1, arbitrary: fc.constant(valid) },
   );
 }
 
