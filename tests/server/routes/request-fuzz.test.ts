@@ -11,9 +11,9 @@ import { startTestApp, type TestApp } from '../../setup/test-app';
 
 /**
  * Issue 11: hostile requests on every write route and every query and path parameter, signed in
- * as each role that may call the route. Law: no request answers 5xx, and a refused request (4xx)
- * leaves every table of the public schema with the rows it had. The seed is pinned and fast-check
- * prints it with the failing request.
+ * as each role that may call the route. Law: no request answers 5xx, a 400 names its fields, and
+ * a refused request (4xx) leaves every table of the public schema with the rows it had. The seed
+ * is pinned and fast-check prints it with the failing request.
  */
 const SEED = 11_2026;
 /**
@@ -443,6 +443,12 @@ describe('a fuzz of every route', () => {
         const res = await send(r);
         statuses.set(res.status, (statuses.get(res.status) ?? 0) + 1);
         if (res.status >= 500) throw new Error(`${r.path} answered ${res.status}: ${res.text.slice(0, 300)}`);
+        // A 400 names the field it refuses, so the form (or the caller) can say where.
+        if (
+          res.status === 400 &&
+          !(res.body.issues?.length > 0 && res.body.issues.every((i: { field?: string }) => i.field))
+        )
+          throw new Error(`${r.path} answered 400 without naming a field: ${res.text.slice(0, 300)}`);
         // Nothing else writes while the fuzz runs (the test's shard queue runs nothing), so the
         // counts after the previous request are the counts before this one: one query a request.
         const after = await rowCounts();
