@@ -5,14 +5,24 @@ import type { WireComplex } from './wire-complex';
 /** Carries a field's TypeScript type in the list; it has no value at run time. */
 const typed = <T>(): T => undefined as T;
 
-/** One cell of the CSV export: its header and how it reads the row (missing values are ''). */
-type CsvCell<R> = readonly [header: string, read: (row: R) => string | number];
+/**
+ * One cell of the CSV export: its header, how it reads the row (missing values are ''), and
+ * whether it is a `number` the product writes itself (a double, or a wire number such as "-0",
+ * "-1.5e-300", "-0x1p-1074", "-inf") or `text` someone could have typed (a path name, a target
+ * name). The export neutralises text that a spreadsheet would run as a formula, and leaves a
+ * number column's numbers as they are, since a quote would turn "-0" into text and lose it.
+ */
+type CsvCell<R> = readonly [header: string, read: (row: R) => string | number, kind: 'text' | 'number'];
 
-const cell = <K extends string>(header: string, key: K): CsvCell<Record<K, string | number>> => [header, (r) => r[key]];
+const cell = <K extends string>(
+  header: string,
+  key: K,
+  kind: 'text' | 'number' = 'text',
+): CsvCell<Record<K, string | number>> => [header, (r) => r[key], kind];
 
 const complexCells = <K extends string>(key: K, prefix: string): readonly CsvCell<Record<K, WireComplex | null>>[] => [
-  [`${prefix}_re`, (r) => r[key]?.re ?? ''],
-  [`${prefix}_im`, (r) => r[key]?.im ?? ''],
+  [`${prefix}_re`, (r) => r[key]?.re ?? '', 'number'],
+  [`${prefix}_im`, (r) => r[key]?.im ?? '', 'number'],
 ];
 
 /**
@@ -55,7 +65,7 @@ export const FAILURE_ROW_FIELDS = [
     columnType: 'text',
     shown: 'row',
     value: typed<string>(),
-    csv: [['suite', (r: { suiteSlug: string; suiteVersion: number }) => `${r.suiteSlug}@${r.suiteVersion}`]],
+    csv: [['suite', (r: { suiteSlug: string; suiteVersion: number }) => `${r.suiteSlug}@${r.suiteVersion}`, 'text']],
   },
   { key: 'suiteVersion', column: 'suite_version', columnType: 'integer', shown: 'row', value: typed<number>() },
   {
@@ -99,7 +109,7 @@ export const FAILURE_ROW_FIELDS = [
     shown: 'row',
     value: typed<number>(),
     fromFinding: (f: PointFinding) => f.t,
-    csv: [cell('t', 't')],
+    csv: [cell('t', 't', 'number')],
   },
   {
     key: 'label',
@@ -176,7 +186,7 @@ export const FAILURE_ROW_FIELDS = [
     shown: 'row',
     value: typed<Diagnosis | null>(),
     fromFinding: (f: PointFinding) => (f.outcome.kind === 'fail' ? f.outcome.diagnosis : null),
-    csv: [['diagnosis', (r: { diagnosis: Diagnosis | null }) => r.diagnosis?.kind ?? '']],
+    csv: [['diagnosis', (r: { diagnosis: Diagnosis | null }) => r.diagnosis?.kind ?? '', 'text']],
   },
   {
     key: 'ulps',
@@ -188,7 +198,7 @@ export const FAILURE_ROW_FIELDS = [
     value: typed<number | null>(),
     fromFinding: (f: PointFinding) =>
       f.outcome.kind === 'fail' && Number.isFinite(f.outcome.ulps) ? f.outcome.ulps : null,
-    csv: [['ulps', (r: { ulps: number | null }) => r.ulps ?? '']],
+    csv: [['ulps', (r: { ulps: number | null }) => r.ulps ?? '', 'number']],
   },
   {
     key: 'relativeError',
@@ -200,7 +210,7 @@ export const FAILURE_ROW_FIELDS = [
     value: typed<number | null>(),
     fromFinding: (f: PointFinding) =>
       f.outcome.kind === 'fail' && Number.isFinite(f.outcome.relativeError) ? f.outcome.relativeError : null,
-    csv: [['relative_error', (r: { relativeError: number | null }) => r.relativeError ?? '']],
+    csv: [['relative_error', (r: { relativeError: number | null }) => r.relativeError ?? '', 'number']],
   },
   /** Set when the run completes: this point passed in the previous completed run of the plan. */
   {
@@ -209,7 +219,7 @@ export const FAILURE_ROW_FIELDS = [
     columnType: 'boolean',
     shown: 'row',
     value: typed<boolean>(),
-    csv: [['regression', (r: { isRegression: boolean }) => (r.isRegression ? 'yes' : 'no')]],
+    csv: [['regression', (r: { isRegression: boolean }) => (r.isRegression ? 'yes' : 'no'), 'text']],
   },
   /** The standard clause or rule that fixes the expected value here. */
   {
@@ -219,7 +229,7 @@ export const FAILURE_ROW_FIELDS = [
     shown: 'detail',
     value: typed<string>(),
     fromFinding: (f: PointFinding) => f.rule,
-    csv: [['rule', (r: { rule?: string }) => r.rule ?? '']],
+    csv: [['rule', (r: { rule?: string }) => r.rule ?? '', 'text']],
   },
   /** Copy-paste code in the target's language that computes `actual`. */
   {

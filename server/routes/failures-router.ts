@@ -5,6 +5,7 @@ import { FAILURE_ROW_FIELDS } from '../../shared/failure-row-fields';
 import type { FailureView } from '../../shared/failure-view';
 import { ROLES } from '../../shared/roles';
 import { classifyBody } from '../../shared/schemas/classify-body';
+import { failureIdParams } from '../../shared/schemas/failure-id-params';
 import { failureQuery } from '../../shared/schemas/failure-query';
 import { requireRole } from '../middleware/require-role';
 import { classifyFailure } from '../failures/classify-failure';
@@ -14,10 +15,12 @@ import { InputError } from '../http/input-error';
 import { parseInput } from '../http/parse-input';
 import { failurePageJson } from '../failures/failure-page-json';
 import { searchFailures } from '../failures/failure-search';
+import { spreadsheetSafeCell } from '../failures/spreadsheet-safe-cell';
 
 /** The export's cells in order, from the one list of the failure row's fields. */
 const CSV_CELLS = FAILURE_ROW_FIELDS.flatMap(
-  (f): readonly (readonly [string, (row: FailureView) => string | number])[] => ('csv' in f ? f.csv : []),
+  (f): readonly (readonly [string, (row: FailureView) => string | number, 'text' | 'number'])[] =>
+    'csv' in f ? f.csv : [],
 );
 
 /** Rows per CSV export: enough for a whole demo run; larger tables are filtered first. */
@@ -38,7 +41,9 @@ export function failuresRouter(dataSource: DataSource, options: { referenceCache
       throw new InputError([{ field: 'query', rule: 'needs run, suite or target to export' }]);
     const { rows } = await searchFailures(dataSource, q, true);
     const csv = stringify(
-      rows.map((r) => Object.fromEntries(CSV_CELLS.map(([header, read]) => [header, read(r)]))),
+      rows.map((r) =>
+        Object.fromEntries(CSV_CELLS.map(([header, read, kind]) => [header, spreadsheetSafeCell(read(r), kind)])),
+      ),
       { header: true },
     );
     res.type('text/csv').attachment('sheetkeeper-failures.csv').send(csv);
@@ -47,7 +52,7 @@ export function failuresRouter(dataSource: DataSource, options: { referenceCache
   // Maintainers live with their library's deviations, so they may accept one; calling a
   // failure a bug or a convention difference stays a reviewer's (or admin's) judgement.
   router.post('/:id/classify', requireRole('reviewer', 'admin', 'maintainer'), async (req, res) => {
-    const id = failureNumber(req.params.id);
+    const id = parseInput(failureIdParams, req.params, 'params').id;
     const body = parseInput(classifyBody, req.body, 'body');
     if (req.user!.role === 'maintainer' && body.classification !== 'accepted') {
       throw new HttpError(403, {
@@ -68,11 +73,17 @@ export function failuresRouter(dataSource: DataSource, options: { referenceCache
   });
 
   router.get('/:id/path', anyone, async (req, res) => {
-    res.json(await failurePath(dataSource, failureNumber(req.params.id), options.referenceCacheDir ?? null));
+    res.json(
+      await failurePath(
+        dataSource,
+        parseInput(failureIdParams, req.params, 'params').id,
+        options.referenceCacheDir ?? null,
+      ),
+    );
   });
 
   router.get('/:id', anyone, async (req, res) => {
-    const id = failureNumber(req.params.id);
+    const id = parseInput(failureIdParams, req.params, 'params').id;
     const [row] = await dataSource.query(`SELECT point_key, target_name FROM failures WHERE id = $1`, [id]);
     if (!row) throw new HttpError(404, { kind: 'not-found', message: 'No failure with that number.' });
     const { rows } = await searchFailures(dataSource, { sort: 'id', limit: 1, after: String(BigInt(id) - 1n) }, true);
@@ -85,10 +96,4 @@ export function failuresRouter(dataSource: DataSource, options: { referenceCache
     res.json({ failure: rows[0], history });
   });
   return router;
-}
-
-function failureNumber(raw: unknown): string {
-  const id = String(raw);
-  if (!/^\d{1,18}$/.test(id)) throw new InputError([{ field: 'params.id', rule: 'must be a failure number' }]);
-  return id;
 }

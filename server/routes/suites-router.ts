@@ -11,6 +11,7 @@ import { HttpError } from '../http/http-error';
 import { InputError } from '../http/input-error';
 import { parseInput } from '../http/parse-input';
 import { SuiteService } from '../suites/suite-service';
+import { receivedFile } from '../suites/received-file';
 import { validateSuiteInput } from '../suites/validate-suite-input';
 import { checkReferenceTable } from '../../harness';
 import { SuiteVersion } from '../entities/suite-version';
@@ -111,18 +112,19 @@ export function suitesRouter(dataSource: DataSource): Router {
   router.post('/upload', anyone, receiveFile, async (req, res) => {
     const file = req.file;
     if (!file) throw new InputError([{ field: 'file', rule: 'is required (a .json suite file in the field "file")' }]);
+    const { name, text } = receivedFile(file);
     let data: unknown;
     try {
-      data = JSON.parse(file.buffer.toString('utf8'));
+      data = JSON.parse(text);
     } catch {
       throw new InputError([{ field: 'file', rule: 'must be valid JSON' }]);
     }
-    const body = validateSuiteInput(data, 'file', file.originalname);
+    const body = validateSuiteInput(data, 'file', name);
     const { created, view } = await suites.save(req.user!, body, 'upsert');
     await dataSource.getRepository(Upload).save({
       kind: 'suite-file',
       suiteVersion: { id: view.id },
-      filename: file.originalname,
+      filename: name,
       bytes: file.size,
       summary: { slug: view.slug, version: view.version, created },
       uploadedBy: req.user!,
@@ -135,15 +137,16 @@ export function suitesRouter(dataSource: DataSource): Router {
     const { slug } = parseInput(suiteSlugParams, req.params, 'params');
     const file = req.file;
     if (!file) throw new InputError([{ field: 'file', rule: 'is required (a .csv table in the field "file")' }]);
+    const { name, text } = receivedFile(file);
     const version = await dataSource
       .getRepository(SuiteVersion)
       .findOne({ where: { suite: { slug } }, order: { version: 'DESC' } });
     if (!version) throw new HttpError(404, { kind: 'not-found', message: `No suite with the id "${slug}".` });
-    const check = checkReferenceTable(version.body, file.buffer.toString('utf8'));
+    const check = checkReferenceTable(version.body, text);
     await dataSource.getRepository(Upload).save({
       kind: 'reference-table',
       suiteVersion: version,
-      filename: file.originalname,
+      filename: name,
       bytes: file.size,
       summary: { ...check },
       uploadedBy: req.user!,

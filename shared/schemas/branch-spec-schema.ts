@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textSchema } from './text-schema';
 import { complexString, numberString } from './complex-string';
 import { objectError } from './object-error';
 
@@ -18,7 +19,7 @@ const regular = z
     {
       kind: z.literal('regular'),
       /** g(z), a rational function of z (optionally with exp factors) written like a subject. */
-      g: z.string({ error: 'is required' }).min(1, { error: 'is required' }).max(400),
+      g: textSchema('is required').min(1, { error: 'is required' }).max(400),
       nu: z.union([numberString, complexString], { error: 'must be a number string or {"re","im"}' }),
       z0: complexString,
       /** The value at z0, or… */

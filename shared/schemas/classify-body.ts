@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textSchema } from './text-schema';
 import { jsonObject } from './json-object';
 
 /**
@@ -14,8 +15,7 @@ export const classifyBody = jsonObject({
   scope: z
     .enum(['point', 'path', 'suite', 'diagnosis'], { error: 'must be point, path, suite or diagnosis' })
     .default('point'),
-  reason: z
-    .string({ error: 'is required' })
+  reason: textSchema('is required')
     .trim()
     .min(3, { error: 'must say why (at least 3 characters)' })
     .max(2000, { error: 'must be at most 2000 characters' }),

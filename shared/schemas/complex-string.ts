@@ -1,8 +1,8 @@
 import { z } from 'zod';
+import { textSchema } from './text-schema';
 
 /** A real number on the wire: decimal, C hex float, p/q, "inf", "-inf", "nan" or "-0". */
-export const numberString = z
-  .string({ error: 'must be a number written as a string' })
+export const numberString = textSchema('must be a number written as a string')
   .max(400, { error: 'must be at most 400 characters' })
   .regex(
     /^\s*([+-]?(inf|infinity|nan)|[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?|[+-]?0[xX]([0-9a-fA-F]+\.?[0-9a-fA-F]*|\.[0-9a-fA-F]+)([pP][+-]?\d+)?|[+-]?\d+\/\d+)\s*$/i,

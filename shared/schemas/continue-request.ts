@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textSchema } from './text-schema';
 import { complexString, numberString } from './complex-string';
 import { objectError } from './object-error';
 
@@ -29,7 +30,7 @@ const polylinePath = z.strictObject(
 export const continueRequest = z
   .strictObject(
     {
-      g: z.string({ error: 'is required' }).max(400),
+      g: textSchema('is required').max(400),
       nu: z.union([numberString, complexString], { error: 'must be a number string or {"re","im"}' }),
       z0: complexString,
       f0: complexString.optional(),

@@ -1,8 +1,16 @@
 import { z } from 'zod';
+import { textSchema } from './text-schema';
+import { failureNumberSchema } from './failure-number-schema';
 import { queryObject } from './query-object';
 import { DIAGNOSIS_KINDS } from '../diagnosis-kinds';
 
-const text = z.string().trim().min(1).max(120);
+const text = textSchema().trim().min(1).max(120);
+
+/** A page cursor as the server writes it: a failure number, and after sorting by ulps `:<ulps>`, a finite number. */
+function isCursor(cursor: string): boolean {
+  const [id, ulps] = cursor.split(':');
+  return failureNumberSchema.safeParse(id).success && (ulps === undefined || Number.isFinite(Number(ulps)));
+}
 
 /**
  * Filters of the failure table. `status`: `new` = a regression (passed in the previous run of
@@ -14,8 +22,7 @@ export const failureQuery = queryObject({
   run: z.uuid({ error: 'must be a run id' }).optional(),
   suite: text.optional(),
   target: text.optional(),
-  fn: z
-    .string()
+  fn: textSchema()
     .regex(/^[a-z]+$/, { error: 'must be a function name' })
     .max(20)
     .optional(),
@@ -29,9 +36,9 @@ export const failureQuery = queryObject({
     .optional(),
   status: z.enum(['new', 'known', 'accepted'], { error: 'must be new, known or accepted' }).optional(),
   sort: z.enum(['id', 'ulps'], { error: 'must be id or ulps' }).default('id'),
-  after: z
-    .string()
-    .regex(/^\d+(:[\d.e+-]+)?$/, { error: 'must be a cursor from a previous page' })
+  after: textSchema()
+    .regex(/^\d+(:[\d.e+-]+)?$/, { error: 'must be a cursor from a previous page', abort: true })
+    .refine(isCursor, { error: 'must be a cursor from a previous page' })
     .optional(),
   limit: z.coerce
     .number({ error: 'must be a whole number' })

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textSchema } from './text-schema';
 
 /**
  * The input of `sheetkeeper fingerprint` (flags as strings): which targets (comma-separated), optionally which
@@ -6,8 +7,7 @@ import { z } from 'zod';
  * how to write the result.
  */
 export const fingerprintRequest = z.strictObject({
-  target: z
-    .string({ error: 'is required (NAME@VERSION as `sheetkeeper targets` lists it)' })
+  target: textSchema('is required (NAME@VERSION as `sheetkeeper targets` lists it)')
     .transform((s) =>
       s
         .split(',')
@@ -15,8 +15,7 @@ export const fingerprintRequest = z.strictObject({
         .filter(Boolean),
     )
     .refine((list) => list.length > 0, { error: 'names no target' }),
-  fn: z
-    .string()
+  fn: textSchema()
     .transform((s) =>
       s
         .split(/,(?![^(]*\))/)
@@ -25,7 +24,7 @@ export const fingerprintRequest = z.strictObject({
     )
     .optional(),
   format: z.enum(['json', 'table'], { error: 'must be json or table' }).default('table'),
-  out: z.string().min(1).optional(),
+  out: textSchema().min(1).optional(),
 });
 
 export type FingerprintRequest = z.infer<typeof fingerprintRequest>;

@@ -1,10 +1,10 @@
 import { z } from 'zod';
+import { textSchema } from './text-schema';
 import { jsonObject } from './json-object';
 import { timeZoneSchema } from './time-zone-schema';
 
 /** A cron expression (5 or 6 fields); the server checks each field and answers the next run times. */
-export const cronSchema = z
-  .string({ error: 'is required' })
+export const cronSchema = textSchema('is required')
   .trim()
   .min(9, { error: 'must have 5 or 6 fields' })
   .max(100, { error: 'must be at most 100 characters' });

@@ -1,17 +1,16 @@
 import { z } from 'zod';
+import { textSchema } from './text-schema';
 import { jsonObject } from './json-object';
 
 /** Body of `POST /api/auth/sign-in`; the sign-in form validates with the same schema. */
 export const signInBody = jsonObject({
-  email: z
-    .string({ error: 'is required' })
+  email: textSchema('is required')
     .trim()
     .toLowerCase()
     .min(1, { error: 'is required' })
     .max(254, { error: 'must be at most 254 characters' })
     .pipe(z.email({ error: 'must be an e-mail address' })),
-  password: z
-    .string({ error: 'is required' })
+  password: textSchema('is required')
     .min(1, { error: 'is required' })
     .max(200, { error: 'must be at most 200 characters' }),
 });

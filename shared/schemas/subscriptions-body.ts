@@ -1,11 +1,12 @@
 import { z } from 'zod';
+import { textSchema } from './text-schema';
 import { jsonObject } from './json-object';
 
 /** Body of replacing my subscriptions: the libraries (target names without versions) I want regression mail about. */
 export const subscriptionsBody = jsonObject({
   targetKeys: z
     .array(
-      z.string().regex(/^[A-Za-z0-9._-]+(\/[A-Za-z0-9._-]+)*$/, {
+      textSchema().regex(/^[A-Za-z0-9._-]+(\/[A-Za-z0-9._-]+)*$/, {
         error: 'must be a library name such as complex.js or mathjs/number',
       }),
       { error: 'must be a list' },

@@ -1,17 +1,17 @@
 import { z } from 'zod';
+import { textSchema } from './text-schema';
 import { complexString, numberString } from './complex-string';
 import { objectError } from './object-error';
 
 /** An angle: a number string (radians) or an exact rational multiple of π ("pi", "-pi/2", "3pi/4"). */
 export const angleString = z.union(
-  [numberString, z.string().regex(/^\s*[+-]?(\d+(\.\d+)?)?\s*\*?\s*pi(\s*\/\s*\d+)?\s*$/i)],
+  [numberString, textSchema().regex(/^\s*[+-]?(\d+(\.\d+)?)?\s*\*?\s*pi(\s*\/\s*\d+)?\s*$/i)],
   {
     error: 'must be a number string (radians) or a multiple of pi such as "3pi/4"',
   },
 );
 
-const name = z
-  .string({ error: 'is required' })
+const name = textSchema('is required')
   .min(1, { error: 'is required' })
   .max(80, { error: 'must be at most 80 characters' });
 const samples = z

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textSchema } from './text-schema';
 import { branchSpecSchema } from './branch-spec-schema';
 import { conventionSchema } from './convention-schema';
 import { objectError } from './object-error';
@@ -14,22 +15,19 @@ import { toleranceSchema } from './tolerance-schema';
 export const suiteSchema = z
   .strictObject(
     {
-      id: z
-        .string({ error: 'is required' })
+      id: textSchema('is required')
         .regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, { error: 'must be lower-case words joined by hyphens' })
         .max(80, { error: 'must be at most 80 characters' }),
       version: z
         .number({ error: 'must be a whole number' })
         .int({ error: 'must be a whole number' })
         .min(1, { error: 'must be at least 1' }),
-      title: z
-        .string({ error: 'is required' })
+      title: textSchema('is required')
         .min(3, { error: 'must be at least 3 characters' })
         .max(120, { error: 'must be at most 120 characters' }),
       /** Why the suite exists: what a maintainer would break, and what the values pin down. */
-      story: z.string().max(4000, { error: 'must be at most 4000 characters' }).default(''),
-      subject: z
-        .string({ error: 'is required' })
+      story: textSchema().max(4000, { error: 'must be at most 4000 characters' }).default(''),
+      subject: textSchema('is required')
         .min(1, { error: 'is required' })
         .max(400, { error: 'must be at most 400 characters' }),
       branch: branchSpecSchema,

@@ -1,17 +1,16 @@
 import { z } from 'zod';
+import { textSchema } from './text-schema';
 import { jsonObject } from './json-object';
 
 /** Route parameters `/:slug` and `/:slug/versions/:version`. */
 export const suiteSlugParams = jsonObject({
-  slug: z
-    .string()
+  slug: textSchema()
     .regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, { error: 'must be lower-case words joined by hyphens' })
     .max(80),
 });
 
 export const suiteVersionParams = jsonObject({
-  slug: z
-    .string()
+  slug: textSchema()
     .regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, { error: 'must be lower-case words joined by hyphens' })
     .max(80),
   version: z.coerce

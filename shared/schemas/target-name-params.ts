@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import { textSchema } from './text-schema';
 import { jsonObject } from './json-object';
 
 /**
@@ -7,5 +7,5 @@ import { jsonObject } from './json-object';
  * Names with a slash travel percent-encoded in one path segment.
  */
 export const targetNameParams = jsonObject({
-  name: z.string().min(1, { error: 'is required' }).max(200, { error: 'must be at most 200 characters' }),
+  name: textSchema().min(1, { error: 'is required' }).max(200, { error: 'must be at most 200 characters' }),
 });

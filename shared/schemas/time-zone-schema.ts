@@ -1,8 +1,7 @@
-import { z } from 'zod';
+import { textSchema } from './text-schema';
 
 /** An IANA time zone name ("Europe/Oslo", "UTC") that this runtime's Intl knows. */
-export const timeZoneSchema = z
-  .string({ error: 'is required' })
+export const timeZoneSchema = textSchema('is required')
   .max(64, { error: 'must be at most 64 characters' })
   .refine(
     (tz) => {

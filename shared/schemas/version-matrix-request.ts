@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textSchema } from './text-schema';
 
 /**
  * The input of `sheetkeeper matrix` (flags as strings): the suites (comma-separated suite
@@ -7,8 +8,7 @@ import { z } from 'zod';
  * "mathjs/number/predictable") — and the output.
  */
 export const versionMatrixRequest = z.strictObject({
-  suite: z
-    .string({ error: 'is required (suite files, folders or ids, comma-separated)' })
+  suite: textSchema('is required (suite files, folders or ids, comma-separated)')
     .transform((s) =>
       s
         .split(',')
@@ -16,9 +16,9 @@ export const versionMatrixRequest = z.strictObject({
         .filter(Boolean),
     )
     .refine((list) => list.length > 0, { error: 'names no suite' }),
-  library: z.string({ error: 'is required (a target name without its version, e.g. complex.js)' }).min(1),
+  library: textSchema('is required (a target name without its version, e.g. complex.js)').min(1),
   format: z.enum(['json', 'table'], { error: 'must be json or table' }).default('table'),
-  out: z.string().min(1).optional(),
+  out: textSchema().min(1).optional(),
 });
 
 export type VersionMatrixRequest = z.infer<typeof versionMatrixRequest>;

@@ -1,5 +1,6 @@
 import { act, fireEvent, screen, waitFor } from '@testing-library/react';
 import { NewTokenForm } from '../../../components/settings/new-token-form';
+import { STORABLE_TEXT_RULE } from '../../../shared/schemas/text-schema';
 import type { TokenView } from '../../../shared/token-view';
 import { fakeApiRoutes } from '../../setup/fake-api-routes';
 import { renderWithClient } from '../../setup/render-with-client';
@@ -61,6 +62,15 @@ describe('NewTokenForm', () => {
     type('ci');
     await make();
     expect(screen.getByText('× Token name must be at least 3 characters')).toBeTruthy();
+    expect(calls).toEqual([]);
+  });
+
+  it('refuses a NUL character beside the field with the rule the server states, sending nothing', async () => {
+    const calls = fakeApiRoutes({});
+    renderWithClient(<NewTokenForm />);
+    type('complex.js\u0000CI');
+    await make();
+    expect(screen.getByText(`× Token name ${STORABLE_TEXT_RULE}`)).toBeTruthy();
     expect(calls).toEqual([]);
   });
 
