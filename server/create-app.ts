@@ -25,6 +25,7 @@ import { tokensRouter } from './routes/tokens-router';
 import { usersRouter } from './routes/users-router';
 import { configurePassport } from './auth/configure-passport';
 import { LibraryFindings } from './findings/library-findings';
+import { ReferenceTableChecks } from './suites/reference-table-checks';
 import { createSessionStore } from './auth/create-session-store';
 import { ShortLivedCache } from './auth/short-lived-cache';
 import type { User } from './entities/user';
@@ -44,11 +45,13 @@ export interface AppOptions {
   shardQueue: ShardQueue;
   /** The runs' reference values on disk, read by the case pictures (config.referenceCacheDir). */
   referenceCacheDir?: string | null;
+  /** How long checking one uploaded reference table may take (REFERENCE_TABLE_BUDGET_MS). */
+  referenceTableBudgetMs?: number;
 }
 
 export interface SheetkeeperApp {
   app: Express;
-  /** Ends the pool behind sessions and sign-in limits and the findings thread (the data source is the caller's). */
+  /** Ends the pool behind sessions and sign-in limits and the findings and reference-table threads (the data source is the caller's). */
   close(): Promise<void>;
 }
 
@@ -68,6 +71,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   const passport = configurePassport(options.dataSource, userCache);
   const limiter = new SignInLimiter(pool, options.signInLimits ?? DEFAULT_SIGN_IN_LIMITS);
   const findings = new LibraryFindings(options.dataSource);
+  const referenceTables = new ReferenceTableChecks(options.referenceTableBudgetMs);
 
   const app = express();
   app.disable('x-powered-by');
@@ -117,7 +121,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   api.use('/auth', authRouter(passport, limiter));
   api.use('/me', meRouter());
   api.use('/users', usersRouter(options.dataSource, userCache));
-  api.use('/suites', suitesRouter(options.dataSource));
+  api.use('/suites', suitesRouter(options.dataSource, referenceTables));
   api.use('/outbox', outboxRouter(options.dataSource));
   api.use('/targets', targetsRouter(options.dataSource));
   api.use('/targets', librariesRouter(findings));
@@ -150,6 +154,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
     app,
     close: async () => {
       await findings.close();
+      await referenceTables.close();
       await pool.end();
     },
   };

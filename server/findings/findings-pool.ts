@@ -53,6 +53,11 @@ export class FindingsPool {
     );
   }
 
+  /** Threads started and ready for a request. */
+  get ready(): number {
+    return this.pool.ready;
+  }
+
   /** Threads computing now. */
   get busy(): number {
     return this.pool.busy;

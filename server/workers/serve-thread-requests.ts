@@ -6,7 +6,7 @@ import type { ThreadReply } from './thread-reply';
 /**
  * The body of a pool thread (thread-pool.ts): answers each `{ id, ...request }` with
  * `compute(request)`. The pool gives a thread one request at a time; should two arrive, they run
- * in turn, so a thread never holds two computations' memory at once.
+ * in turn, so a thread never holds two computations' memory at once. It says 'ready' first.
  */
 export function serveThreadRequests<R extends { id: number }>(
   compute: (request: R) => Promise<unknown> | unknown,
@@ -25,6 +25,8 @@ export function serveThreadRequests<R extends { id: number }>(
       port.postMessage(reply);
     });
   });
+  // Everything this thread imports is loaded by now: the pool may start the clock on its requests.
+  port.postMessage('ready');
 }
 
 function failureOf(err: unknown): Extract<ThreadReply, { ok: false }>['failure'] {

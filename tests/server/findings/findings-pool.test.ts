@@ -64,7 +64,10 @@ describe('FindingsPool concurrency', () => {
     try {
       const ask = (fn: string) =>
         pool.ask({ kind: 'cut-map', target: 'complex.js@2.4.3', fn, box: [-2, -2, 2, 2], grid: [81, 81] });
-      const both = Promise.all([ask('sqrt'), ask('log')]);
+      // Two requests at once start two threads; wait until both have loaded the harness.
+      await Promise.all([ask('sqrt'), ask('log')]);
+      for (let i = 0; i < 200 && pool.ready < 2; i += 1) await new Promise((r) => setTimeout(r, 50));
+      const both = Promise.all([ask('asin'), ask('acos')]);
       // With one thread the second waited in line (a reviewer waited 13.3 s behind 12 cut maps).
       expect(pool.busy).toBe(2);
       await expect(both).resolves.toHaveLength(2);

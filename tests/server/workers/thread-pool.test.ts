@@ -35,6 +35,7 @@ describe('ThreadPool', () => {
   it('keeps further requests in its bounded queue and refuses one beyond it at once', async () => {
     const pool = new ThreadPool<Busy>({ entry, size: 1, queueLimit: 2, full });
     try {
+      await pool.run({ ms: 1 }, 20_000, overLimit);
       const running = [1, 2, 3].map(() => pool.run({ ms: 300 }, 20_000, overLimit));
       expect(pool.busy).toBe(1);
       expect(pool.waiting).toBe(2);
