@@ -26,6 +26,7 @@ import { usersRouter } from './routes/users-router';
 import { configurePassport } from './auth/configure-passport';
 import { LibraryFindings } from './findings/library-findings';
 import { ReferenceTableChecks } from './suites/reference-table-checks';
+import { OverviewMemo } from './views/overview-memo';
 import { createSessionStore } from './auth/create-session-store';
 import { ShortLivedCache } from './auth/short-lived-cache';
 import type { User } from './entities/user';
@@ -72,6 +73,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   const limiter = new SignInLimiter(pool, options.signInLimits ?? DEFAULT_SIGN_IN_LIMITS);
   const findings = new LibraryFindings(options.dataSource);
   const referenceTables = new ReferenceTableChecks(options.referenceTableBudgetMs);
+  const overviewMemo = new OverviewMemo();
 
   const app = express();
   app.disable('x-powered-by');
@@ -117,6 +119,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   api.use(passport.initialize());
   api.use(passport.session());
   api.use(tokenAuth(options.dataSource));
+  api.use(overviewMemo.forgetOnWrite);
 
   api.use('/auth', authRouter(passport, limiter));
   api.use('/me', meRouter());
@@ -132,7 +135,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   api.use('/deviations', deviationsRouter(options.dataSource));
   api.use('/tokens', tokensRouter(options.dataSource));
   api.use('/subscriptions', subscriptionsRouter(options.dataSource));
-  api.use('/overview', overviewRouter(options.dataSource));
+  api.use('/overview', overviewRouter(options.dataSource, overviewMemo));
   api.use((_req, res) => {
     res.status(404).json({ kind: 'not-found', message: 'No such API route.' } satisfies ApiError);
   });
