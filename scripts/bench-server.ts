@@ -10,6 +10,7 @@ import { createDataSource } from '../server/data-source';
 import { Plan } from '../server/entities/plan';
 import { User } from '../server/entities/user';
 import { seedDemo } from '../server/seed/seed-demo';
+import { DEMO_USERS } from '../server/seed/demo-users';
 import { seedDemoCatalogue } from '../server/seed/seed-demo-catalogue';
 import { FakeSmtpServer } from '../server/mail/fake-smtp-server';
 import { MailOutbox } from '../server/mail/mail-outbox';
@@ -25,8 +26,8 @@ import { databaseUrl } from '../server/config';
  * `npm run bench:server`: on a fresh database of its own (dropped at the end),
  *  1. the demo nightly plan end to end: queue → two in-process workers → stored → mail;
  *  2. bytes stored per run of that plan, and a year of nightly runs projected;
- *  3. 50 concurrent clients, each alternating `/api/overview` (as a maintainer who subscribes to
- *     complex.js) with a failure-table page under the usual filters, over ≥ 1,000,000 stored
+ *  3. 50 concurrent clients, signed in as the five demo users in turn (all subscribed to
+ *     complex.js), each alternating `/api/overview` with a failure-table page under the usual filters, over ≥ 1,000,000 stored
  *     failing points (generated in SQL) in the plan's latest completed run: p50/p95/p99 and
  *     errors per endpoint. The first BENCH_WARMUP_SECONDS (10) warm the server's JIT and
  *     PostgreSQL's caches and are reported apart; the next BENCH_SECONDS (30) are measured.
@@ -135,8 +136,7 @@ async function main(): Promise<void> {
     );
     await writeRegressionGroups(dataSource, last);
     await dataSource.query(
-      `INSERT INTO subscriptions (user_id, target_key) VALUES ($1, 'complex.js') ON CONFLICT DO NOTHING`,
-      [kwame.id],
+      `INSERT INTO subscriptions (user_id, target_key) SELECT id, 'complex.js' FROM users ON CONFLICT DO NOTHING`,
     );
     await dataSource.query('ANALYZE');
     const [{ total }] = await dataSource.query(`SELECT count(*)::int AS total FROM failures`);
@@ -166,30 +166,37 @@ async function main(): Promise<void> {
       }
     }
     // The load comes from another process, so the client's own work does not share the server's event loop.
-    const signIn = await fetch(`http://127.0.0.1:${port}/api/auth/sign-in`, {
-      method: 'POST',
-      headers: { 'content-type': 'application/json' },
-      body: JSON.stringify({ email: 'kwame@sheetkeeper.test', password: 'kwame-demo-2026' }),
-    });
-    const cookie = (signIn.headers.get('set-cookie') ?? '').split(';')[0]!;
+    // Every demo user signs in, and the clients take their cookies in turn, so the overview is
+    // asked for by five accounts of four roles, as on a team's morning.
+    const cookies: string[] = [];
+    for (const user of DEMO_USERS) {
+      const signIn = await fetch(`http://127.0.0.1:${port}/api/auth/sign-in`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify({ email: user.email, password: user.password }),
+      });
+      cookies.push((signIn.headers.get('set-cookie') ?? '').split(';')[0]!);
+    }
+    const cookie = cookies.join('|');
     // node:http with a keep-alive agent, not fetch: on this 2-core machine fetch's own CPU (1.4 s
     // for 1,000 requests) saturated the client before the server, even against /api/me.
     // Each client alternates the overview with a failure page; the load stops after `seconds`.
     const clientCode = `
       const http = require('node:http');
-      const [base, cookie, seconds, concurrency, ...pages] = process.argv.slice(1);
+      const [base, cookieList, seconds, concurrency, ...pages] = process.argv.slice(1);
+      const cookies = cookieList.split('|');
       const agent = new http.Agent({ keepAlive: true, maxSockets: Number(concurrency) });
-      const get = (path) => new Promise((resolve) => {
+      const get = (path, cookie) => new Promise((resolve) => {
         http.get(base + path, { agent, headers: { cookie } }, (res) => { res.on('data', () => {}); res.on('end', () => resolve(res.statusCode)); })
           .on('error', () => resolve(0));
       });
       const byEndpoint = { overview: { latencies: [], errors: 0 }, failures: { latencies: [], errors: 0 } };
       const began = performance.now(); const until = began + Number(seconds) * 1000; let next = 0;
-      const one = async () => { while (performance.now() < until) { const n = next++;
+      const one = async (client) => { const cookie = cookies[client % cookies.length]; while (performance.now() < until) { const n = next++;
         const overview = n % 2 === 0; const path = overview ? '/api/overview' : pages[(n >> 1) % pages.length];
-        const t0 = performance.now(); const status = await get(path);
+        const t0 = performance.now(); const status = await get(path, cookie);
         const e = byEndpoint[overview ? 'overview' : 'failures']; e.latencies.push(performance.now() - t0); if (status !== 200) e.errors++; } };
-      Promise.all(Array.from({ length: Number(concurrency) }, one)).then(() => console.log(JSON.stringify({ byEndpoint, wall: performance.now() - began, cpu: process.cpuUsage() })));`;
+      Promise.all(Array.from({ length: Number(concurrency) }, (_, i) => one(i))).then(() => console.log(JSON.stringify({ byEndpoint, wall: performance.now() - began, cpu: process.cpuUsage() })));`;
     const load = async (seconds: number) => {
       const cpuBefore = process.cpuUsage();
       const { stdout } = await promisify(execFile)(
