@@ -26,6 +26,8 @@ import { usersRouter } from './routes/users-router';
 import { configurePassport } from './auth/configure-passport';
 import { createPgPool } from './database/create-pg-pool';
 import { LibraryFindings } from './findings/library-findings';
+import { ReferenceTableChecks } from './suites/reference-table-checks';
+import { OverviewMemo } from './views/overview-memo';
 import { createSessionStore } from './auth/create-session-store';
 import { ShortLivedCache } from './auth/short-lived-cache';
 import type { User } from './entities/user';
@@ -49,11 +51,13 @@ export interface AppOptions {
   allowedOrigins: readonly string[];
   /** Express's `trust proxy` (config.trustProxy); off unless a proxy in front sets X-Forwarded-For. */
   trustProxy?: string | number | false;
+  /** How long checking one uploaded reference table may take (REFERENCE_TABLE_BUDGET_MS). */
+  referenceTableBudgetMs?: number;
 }
 
 export interface SheetkeeperApp {
   app: Express;
-  /** Ends the pool behind sessions and sign-in limits and the findings thread (the data source is the caller's). */
+  /** Ends the pool behind sessions and sign-in limits and the findings and reference-table threads (the data source is the caller's). */
   close(): Promise<void>;
 }
 
@@ -73,6 +77,8 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   const passport = configurePassport(options.dataSource, userCache);
   const limiter = new SignInLimiter(pool, options.signInLimits ?? DEFAULT_SIGN_IN_LIMITS);
   const findings = new LibraryFindings(options.dataSource);
+  const referenceTables = new ReferenceTableChecks(options.referenceTableBudgetMs);
+  const overviewMemo = new OverviewMemo();
 
   const app = express();
   app.disable('x-powered-by');
@@ -122,11 +128,12 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   api.use(passport.initialize());
   api.use(passport.session());
   api.use(tokenAuth(options.dataSource));
+  api.use(overviewMemo.forgetOnWrite);
 
   api.use('/auth', authRouter(passport, limiter));
   api.use('/me', meRouter());
   api.use('/users', usersRouter(options.dataSource, userCache));
-  api.use('/suites', suitesRouter(options.dataSource));
+  api.use('/suites', suitesRouter(options.dataSource, referenceTables));
   api.use('/outbox', outboxRouter(options.dataSource));
   api.use('/targets', targetsRouter(options.dataSource));
   api.use('/targets', librariesRouter(findings));
@@ -137,7 +144,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   api.use('/deviations', deviationsRouter(options.dataSource));
   api.use('/tokens', tokensRouter(options.dataSource));
   api.use('/subscriptions', subscriptionsRouter(options.dataSource));
-  api.use('/overview', overviewRouter(options.dataSource));
+  api.use('/overview', overviewRouter(options.dataSource, overviewMemo));
   api.use((_req, res) => {
     res.status(404).json({ kind: 'not-found', message: 'No such API route.' } satisfies ApiError);
   });
@@ -159,6 +166,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
     app,
     close: async () => {
       await findings.close();
+      await referenceTables.close();
       await pool.end();
     },
   };

@@ -7,6 +7,7 @@ import { OutboxMail } from './entities/outbox-mail';
 import { PathSummary } from './entities/path-summary';
 import { Plan } from './entities/plan';
 import { PropertyResult } from './entities/property-result';
+import { RegressionGroup } from './entities/regression-group';
 import { Schedule } from './entities/schedule';
 import { ScheduleFiring } from './entities/schedule-firing';
 import { Shard } from './entities/shard';
@@ -33,6 +34,7 @@ import { Subscriptions1764760000000 } from './migrations/1764760000000-subscript
 import { Uploads1764770000000 } from './migrations/1764770000000-uploads';
 import { FailureTableIndexes1764780000000 } from './migrations/1764780000000-failure-table-indexes';
 import { PropertyResults1764790000000 } from './migrations/1764790000000-property-results';
+import { RegressionGroups1764811100000 } from './migrations/1764811100000-regression-groups';
 import { FailureTableRowType1764800000000 } from './migrations/1764800000000-failure-table-row-type';
 
 /** Entities and migrations are listed, not globbed, so tsx, jest and tsc builds all find them. */
@@ -55,6 +57,7 @@ export const ENTITIES = [
   Subscription,
   Upload,
   PropertyResult,
+  RegressionGroup,
 ];
 export const MIGRATIONS = [
   UsersSessionsSignInLimits1764626400000,
@@ -69,6 +72,7 @@ export const MIGRATIONS = [
   FailureTableIndexes1764780000000,
   PropertyResults1764790000000,
   FailureTableRowType1764800000000,
+  RegressionGroups1764811100000,
   SuiteVersionTakenOverFrom1764887400000,
 ];
 

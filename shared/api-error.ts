@@ -20,4 +20,6 @@ export type ApiError =
   | { kind: 'unsupported-media-type'; message: string }
   /** The server could not answer now (a library computation stopped after its time limit): try again or ask for less. */
   | { kind: 'unavailable'; message: string }
+  /** 422: the work asked for passed its time budget and was stopped; the message says what was checked and how to ask for less. */
+  | { kind: 'over-time-budget'; message: string; budgetSeconds: number }
   | { kind: 'server-error'; message: string };

@@ -1,4 +1,3 @@
-import type { ApiError, FieldIssue } from '../../shared/api-error';
 import type { Suite } from '../../shared/schemas/suite-schema';
 
 /** One computation for the findings thread (findings-worker.ts); functions are named by their fingerprint labels. */
@@ -13,12 +12,3 @@ export type FindingsRequest =
       grid: [number, number];
     }
   | { id: number; kind: 'version-matrix'; library: string; suites: Suite[] };
-
-/** How an error crosses the thread: the answers a service decides keep their status and body. */
-export type FindingsFailure =
-  | { kind: 'http'; status: number; body: ApiError }
-  | { kind: 'input'; issues: FieldIssue[] }
-  | { kind: 'error'; message: string };
-
-export type FindingsReply =
-  { id: number; ok: true; value: unknown } | { id: number; ok: false; failure: FindingsFailure };

@@ -1,4 +1,3 @@
-import { parentPort } from 'node:worker_threads';
 import {
   FINGERPRINT_FUNCTIONS,
   fingerprintTarget,
@@ -8,19 +7,17 @@ import {
   type TargetDescriptor,
   versionMatrix,
 } from '../../harness';
-import type { FindingsFailure, FindingsReply, FindingsRequest } from './findings-messages';
+import type { FindingsRequest } from './findings-messages';
 import { HttpError } from '../http/http-error';
 import { InputError } from '../http/input-error';
 import { openInstalledTarget } from '../targets/open-installed-target';
+import { serveThreadRequests } from '../workers/serve-thread-requests';
 
 /**
  * The body of the findings thread (findings-thread.ts): runs the library code behind the
- * fingerprint, cut map and version matrix, one request at a time, so loading mathjs (~1.1 s a
- * version) or a 201×201 cut map (up to ~0.7 s) never holds up the server's own thread.
+ * fingerprint, cut map and version matrix, one request at a time per thread, so loading mathjs
+ * (~1.1 s a version) or a 201×201 cut map (up to ~0.7 s) never holds up the server's own thread.
  */
-const port = parentPort;
-if (!port) throw new Error('findings-worker.ts runs in a worker thread');
-
 const versionsByLibrary = new Map<string, TargetDescriptor[]>();
 
 const fn = (label: string) => {
@@ -62,21 +59,4 @@ async function compute(request: FindingsRequest): Promise<unknown> {
   }
 }
 
-function failureOf(err: unknown): FindingsFailure {
-  if (err instanceof HttpError) return { kind: 'http', status: err.status, body: err.body };
-  if (err instanceof InputError) return { kind: 'input', issues: err.issues };
-  return { kind: 'error', message: err instanceof Error ? err.message : String(err) };
-}
-
-let chain = Promise.resolve();
-port.on('message', (request: FindingsRequest) => {
-  chain = chain.then(async () => {
-    let reply: FindingsReply;
-    try {
-      reply = { id: request.id, ok: true, value: await compute(request) };
-    } catch (err) {
-      reply = { id: request.id, ok: false, failure: failureOf(err) };
-    }
-    port.postMessage(reply);
-  });
-});
+serveThreadRequests<FindingsRequest>(compute);

@@ -5,7 +5,7 @@ import type { ConventionFingerprint } from '../../shared/convention-fingerprint'
 import type { CutMap } from '../../shared/cut-map';
 import type { Suite } from '../../shared/schemas/suite-schema';
 import type { VersionMatrix } from '../../shared/version-matrix';
-import { FindingsThread } from './findings-thread';
+import { FindingsPool } from './findings-pool';
 import { HttpError } from '../http/http-error';
 import { InputError } from '../http/input-error';
 import { ResultCache } from './result-cache';
@@ -21,7 +21,7 @@ import { ResultCache } from './result-cache';
  *   suites 5.7 s (481 KB of JSON); mathjs/complex's three versions 6.9 s for the first suite
  *   (three mathjs loads), 123 ms for three more after. The request allows eight suites at a time.
  * Every one of them passes 300 ms on a first visit somewhere, so every answer is kept. The
- * library code runs on a worker thread of its own (findings-thread.ts), one request at a time,
+ * library code runs on a small pool of worker threads (findings-pool.ts), one request per thread,
  * so the server's thread keeps answering everyone else meanwhile.
  *
  * Answers depend only on the installed library versions (part of every target name, so part
@@ -40,7 +40,7 @@ export class LibraryFindings {
 
   constructor(
     private readonly dataSource: DataSource,
-    private readonly thread = new FindingsThread(),
+    private readonly thread = new FindingsPool(),
   ) {}
 
   async fingerprint(
@@ -105,7 +105,7 @@ export class LibraryFindings {
     return { matrix: value as VersionMatrix, computedMs: ms, fromCache };
   }
 
-  /** Ends the findings thread. */
+  /** Ends the findings threads. */
   close(): Promise<void> {
     return this.thread.close();
   }

@@ -13,7 +13,7 @@ import { parseInput } from '../http/parse-input';
 import { SuiteService } from '../suites/suite-service';
 import { receivedFile } from '../suites/received-file';
 import { validateSuiteInput } from '../suites/validate-suite-input';
-import { checkReferenceTable } from '../../harness';
+import type { ReferenceTableChecks } from '../suites/reference-table-checks';
 import { SuiteVersion } from '../entities/suite-version';
 import { Upload } from '../entities/upload';
 
@@ -80,7 +80,7 @@ function receiveWith(m: multer.Multer, maxBytes: number, req: Request, res: Resp
   });
 }
 
-export function suitesRouter(dataSource: DataSource): Router {
+export function suitesRouter(dataSource: DataSource, tables: ReferenceTableChecks): Router {
   const router = Router();
   const suites = new SuiteService(dataSource);
   const anyone = requireRole(...ROLES);
@@ -132,7 +132,11 @@ export function suitesRouter(dataSource: DataSource): Router {
     res.status(created ? 201 : 200).json({ version: view });
   });
 
-  /** A CSV of reference values computed elsewhere, checked against our reference for the suite's latest version. */
+  /**
+   * A CSV of reference values computed elsewhere, checked against our reference for the suite's
+   * latest version on a reference-table thread within its time budget (422 over it); the upload
+   * is recorded only once the check has answered.
+   */
   router.post('/:slug/reference-table', anyone, receiveTable, async (req, res) => {
     const { slug } = parseInput(suiteSlugParams, req.params, 'params');
     const file = req.file;
@@ -142,7 +146,7 @@ export function suitesRouter(dataSource: DataSource): Router {
       .getRepository(SuiteVersion)
       .findOne({ where: { suite: { slug } }, order: { version: 'DESC' } });
     if (!version) throw new HttpError(404, { kind: 'not-found', message: `No suite with the id "${slug}".` });
-    const check = checkReferenceTable(version.body, text);
+    const check = await tables.check(version.body, text);
     await dataSource.getRepository(Upload).save({
       kind: 'reference-table',
       suiteVersion: version,

@@ -5,6 +5,7 @@ import type { MailOutbox } from '../mail/mail-outbox';
 import { regressionMail } from './regression-mail';
 import type { RegressionRow } from './regression-row';
 import { targetKeySql } from '../sql/target-key-sql';
+import { writeRegressionGroups } from './write-regression-groups';
 
 /**
  * Completes a run: marks as regressions the failing points that passed in the previous
@@ -48,6 +49,8 @@ export async function markRegressions(
       [run.id, previous.id],
     );
     count = marked.n;
+    // The Overview's counts (entities/regression-group.ts), written with the marks they count.
+    if (count > 0) await writeRegressionGroups(tx, run.id);
   }
   await tx.getRepository(Run).update(run.id, { status: 'completed', finishedAt: new Date(), regressions: count });
   // The plan's recipients, and everyone subscribed to a library that regressed.

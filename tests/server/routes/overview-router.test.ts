@@ -1,3 +1,4 @@
+import { writeRegressionGroups } from '../../../server/runs/write-regression-groups';
 import request from 'supertest';
 import { User } from '../../../server/entities/user';
 import { SuiteService } from '../../../server/suites/suite-service';
@@ -80,6 +81,8 @@ describe('GET /api/overview', () => {
     await failure(runs.latest, complexJs, true, 'accepted-path');
     await failure(runs.latest, complexJs, false);
     await failure(runs.latest, mathjs, true);
+    // As markRegressions does when a run completes.
+    for (const runId of [runs.old, runs.latest]) await writeRegressionGroups(t.db.dataSource, runId);
   });
   afterAll(() => t.stop());
 

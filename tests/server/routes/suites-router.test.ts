@@ -304,3 +304,53 @@ describe('reference tables uploaded for a suite', () => {
     ).toBe(404);
   });
 });
+
+describe('an expensive reference table', () => {
+  let t: TestApp;
+  // 1.5 s instead of 10 s keeps the test short; the table below needs 9–22 s (0.23–0.55 s a row).
+  const BUDGET_MS = 1500;
+  beforeAll(async () => {
+    t = await startTestApp({ referenceTableBudgetMs: BUDGET_MS });
+  });
+  afterAll(() => t.stop());
+
+  it('is checked off the request thread: everyone else is answered meanwhile, and over its budget it gets 422 and stores nothing', async () => {
+    const ravi = await signInAs(t.app, 'contributor');
+    const hanne = await signInAs(t.app, 'reviewer');
+    const draft = { ...demoSuiteBody('table-slow'), subject: 'pow(z,z)*pow(z,-z)-1' };
+    expect((await ravi.post('/api/suites').send(draft)).status).toBe(201);
+    expect((await hanne.get('/api/me')).status).toBe(200);
+    const lines = Array.from({ length: 40 }, (_, i) => `${(i % 9) / 2 - 2},${(i % 5) / 3 - 0.5},0,0,row ${i}`);
+    const csv = `z_re,z_im,expected_re,expected_im,source\n${lines.join('\n')}\n`;
+    let done = false;
+    const upload = ravi
+      .post('/api/suites/table-slow/reference-table')
+      .attach('file', Buffer.from(csv), { filename: 'slow.csv', contentType: 'text/csv' })
+      .then((res) => {
+        done = true;
+        return res;
+      });
+    const waits: number[] = [];
+    // Give the upload time to reach its thread, then ask as someone else while the table is checked.
+    await new Promise((r) => setTimeout(r, 300));
+    while (!done && waits.length < 8) {
+      const started = performance.now();
+      expect((await hanne.get('/api/me')).status).toBe(200);
+      waits.push(performance.now() - started);
+      await new Promise((r) => setTimeout(r, 100));
+    }
+    const res = await upload;
+    // On the request thread one /api/me waited 12 s behind such a table.
+    expect(waits.length).toBeGreaterThanOrEqual(3);
+    expect(Math.max(...waits)).toBeLessThan(100);
+    expect(res.status).toBe(422);
+    expect(res.body).toMatchObject({ kind: 'over-time-budget', budgetSeconds: BUDGET_MS / 1000 });
+    expect(res.body.message).toContain('40 rows');
+    expect(res.body.message).toContain('pow(z,z)*pow(z,-z)-1');
+    expect(res.body.message).toContain('fewer rows');
+    const [{ n }] = await t.db.dataSource.query(
+      `SELECT count(*)::int AS n FROM uploads WHERE kind = 'reference-table'`,
+    );
+    expect(n).toBe(0);
+  });
+});

@@ -1,17 +1,17 @@
 import { monitorEventLoopDelay } from 'node:perf_hooks';
-import { FindingsThread } from '../../../server/findings/findings-thread';
+import { FINDINGS_THREADS, FindingsPool } from '../../../server/findings/findings-pool';
 import { HttpError } from '../../../server/http/http-error';
 import { InputError } from '../../../server/http/input-error';
 
 jest.setTimeout(60_000);
 
-describe('FindingsThread', () => {
-  const thread = new FindingsThread();
+describe('FindingsPool', () => {
+  const thread = new FindingsPool();
   afterAll(() => thread.close());
 
   it('runs the library on its own thread, so the server’s thread is free meanwhile', async () => {
     // Opening mathjs is a synchronous require of ~1 s (library-findings.ts), then the fingerprint of √.
-    const fresh = new FindingsThread();
+    const fresh = new FindingsPool();
     try {
       const lag = monitorEventLoopDelay({ resolution: 10 });
       lag.enable();
@@ -43,7 +43,7 @@ describe('FindingsThread', () => {
   });
 
   it('stops a request that passes its time limit with 503, and answers the next on a fresh thread', async () => {
-    const hasty = new FindingsThread(1);
+    const hasty = new FindingsPool(1);
     try {
       const late = hasty.ask({ kind: 'fingerprint', target: 'complex.js@2.4.3', functions: ['sqrt'] });
       await expect(late).rejects.toBeInstanceOf(HttpError);
@@ -55,5 +55,28 @@ describe('FindingsThread', () => {
     await expect(
       thread.ask({ kind: 'fingerprint', target: 'complex.js@2.4.3', functions: ['sqrt'] }),
     ).resolves.toBeDefined();
+  });
+});
+
+describe('FindingsPool concurrency', () => {
+  it('runs a cut map beside another instead of behind it', async () => {
+    const pool = new FindingsPool(120_000, 2, 4);
+    try {
+      const ask = (fn: string) =>
+        pool.ask({ kind: 'cut-map', target: 'complex.js@2.4.3', fn, box: [-2, -2, 2, 2], grid: [81, 81] });
+      // Two requests at once start two threads; wait until both have loaded the harness.
+      await Promise.all([ask('sqrt'), ask('log')]);
+      for (let i = 0; i < 200 && pool.ready < 2; i += 1) await new Promise((r) => setTimeout(r, 50));
+      const both = Promise.all([ask('asin'), ask('acos')]);
+      // With one thread the second waited in line (a reviewer waited 13.3 s behind 12 cut maps).
+      expect(pool.busy).toBe(2);
+      await expect(both).resolves.toHaveLength(2);
+    } finally {
+      await pool.close();
+    }
+  });
+
+  it('has at least two threads on any machine', () => {
+    expect(FINDINGS_THREADS).toBeGreaterThanOrEqual(2);
   });
 });
