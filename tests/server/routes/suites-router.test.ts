@@ -1,4 +1,5 @@
 import request from 'supertest';
+import { STORABLE_TEXT_RULE } from '../../../shared/schemas/text-schema';
 import { demoSuiteBody } from '../../setup/demo-suite-body';
 import { signInAs } from '../../setup/sign-in-as';
 import { startTestApp, type TestApp } from '../../setup/test-app';
@@ -271,7 +272,7 @@ describe('reference tables uploaded for a suite', () => {
       expect([table.status, table.body.issues]).toEqual([400, [issue]]);
     }
     // A NUL can also arrive percent-encoded in RFC 5987's filename*, which busboy decodes.
-    for (const [encoded, rule] of [['nul%00name.json', 'must not contain control characters']]) {
+    for (const [encoded, rule] of [['nul%00name.json', STORABLE_TEXT_RULE]]) {
       const body =
         `--b0undary\r\nContent-Disposition: form-data; name="file"; filename*=UTF-8''${encoded}\r\n` +
         `Content-Type: application/json\r\n\r\n${suiteFile.toString()}\r\n--b0undary--\r\n`;

@@ -1,3 +1,4 @@
+import { STORABLE_TEXT_RULE } from '../../../shared/schemas/text-schema';
 import { uploadFileName } from '../../../shared/schemas/upload-file-name';
 
 const rule = (name: string) => {
@@ -17,8 +18,9 @@ describe('uploadFileName', () => {
     expect(rule(`${'a'.repeat(196)}.json`)).toBe('must be at most 200 characters');
   });
 
-  it('refuses NUL, other C0 and C1 controls and DEL', () => {
-    for (const c of ['\u0000', '\u0007', '\t', '\n', '\u007f', '\u0085'])
+  it('refuses NUL with the rule every text field shares, and other C0 and C1 controls and DEL', () => {
+    expect(rule('a\u0000b.json')).toBe(STORABLE_TEXT_RULE);
+    for (const c of ['\u0007', '\t', '\n', '\u007f', '\u0085'])
       expect([JSON.stringify(c), rule(`a${c}b.json`)]).toEqual([
         JSON.stringify(c),
         'must not contain control characters',
@@ -26,8 +28,8 @@ describe('uploadFileName', () => {
   });
 
   it('refuses a lone high or low surrogate but not a pair', () => {
-    expect(rule('a\ud835.json')).toBe('must not contain a lone surrogate');
-    expect(rule('a\udc00.json')).toBe('must not contain a lone surrogate');
+    expect(rule('a\ud835.json')).toBe(STORABLE_TEXT_RULE);
+    expect(rule('a\udc00.json')).toBe(STORABLE_TEXT_RULE);
     expect(rule('\ud835\udc67.json')).toBeNull();
   });
 });
