@@ -30,6 +30,7 @@ import { Uploads1764770000000 } from './migrations/1764770000000-uploads';
 import { FailureTableIndexes1764780000000 } from './migrations/1764780000000-failure-table-indexes';
 import { PropertyResults1764790000000 } from './migrations/1764790000000-property-results';
 import { FailureTableRowType1764800000000 } from './migrations/1764800000000-failure-table-row-type';
+import { OneActiveRunHeartbeatsMailOnce1764810000000 } from './migrations/1764810000000-one-active-run-heartbeats-mail-once';
 
 /** Entities and migrations are listed, not globbed, so tsx, jest and tsc builds all find them. */
 export const ENTITIES = [
@@ -65,6 +66,7 @@ export const MIGRATIONS = [
   FailureTableIndexes1764780000000,
   PropertyResults1764790000000,
   FailureTableRowType1764800000000,
+  OneActiveRunHeartbeatsMailOnce1764810000000,
 ];
 
 export function createDataSource(url: string): DataSource {

@@ -19,7 +19,10 @@ async function main(): Promise<void> {
 
   const services = await startServices(dataSource, config, { workers: config.workers, deliverMail: true });
   const runs = new RunService(dataSource, services.queue);
-  const scheduler = new PlanScheduler(dataSource, async (planId) => (await runs.start(planId, 'schedule', null)).id);
+  const scheduler = new PlanScheduler(
+    dataSource,
+    async (planId) => (await runs.start(planId, 'schedule', null)).run.id,
+  );
   await scheduler.start();
 
   const { app, close } = createApp({

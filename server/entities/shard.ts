@@ -58,6 +58,10 @@ export class Shard {
   @Column({ type: 'integer', name: 'duration_ms', nullable: true })
   durationMs!: number | null;
 
+  /** Written every few seconds by the worker running the shard; a stale one means the worker died (shard-heartbeat.ts). */
+  @Column({ type: 'timestamptz', name: 'heartbeat_at', nullable: true })
+  heartbeatAt!: Date | null;
+
   @Column({ type: 'timestamptz', name: 'finished_at', nullable: true })
   finishedAt!: Date | null;
 }

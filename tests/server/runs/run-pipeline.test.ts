@@ -93,7 +93,7 @@ describe('a plan run through the queue, with regressions and their mail', () => 
   }
 
   it('runs every suite × target shard and stores the failures it found', async () => {
-    const first = await finished((await runs.start(planId, 'manual', kwame)).id);
+    const first = await finished((await runs.start(planId, 'manual', kwame)).run.id);
     expect(first).toMatchObject({ status: 'completed', shardsTotal: 2, shardsDone: 2, regressions: 0 });
     expect(first.counts.pass).toBeGreaterThan(0);
     const [stored] = await db.dataSource.query(`SELECT count(*)::int AS n FROM failures WHERE run_id = $1`, [first.id]);
@@ -124,7 +124,7 @@ describe('a plan run through the queue, with regressions and their mail', () => 
     await db.dataSource.query(
       `INSERT INTO subscriptions (user_id, target_key) SELECT id, 'fakelib' FROM users WHERE email = 'hanne@sheetkeeper.test'`,
     );
-    const second = await finished((await runs.start(planId, 'manual', kwame)).id);
+    const second = await finished((await runs.start(planId, 'manual', kwame)).run.id);
     expect(second.status).toBe('completed');
     expect(second.regressions).toBeGreaterThan(0);
     const regressions: { suite_slug: string; z: { im: string } }[] = await db.dataSource.query(
@@ -166,7 +166,7 @@ describe('a plan run through the queue, with regressions and their mail', () => 
       },
       planId,
     );
-    await finished((await runs.start(planId, 'manual', kwame)).id);
+    await finished((await runs.start(planId, 'manual', kwame)).run.id);
     await new PlanService(db.dataSource).save(
       kwame,
       {
@@ -178,7 +178,7 @@ describe('a plan run through the queue, with regressions and their mail', () => 
       },
       planId,
     );
-    const again = await finished((await runs.start(planId, 'manual', kwame)).id);
+    const again = await finished((await runs.start(planId, 'manual', kwame)).run.id);
     const left = await db.dataSource.query(
       `SELECT suite_slug, path_name, z, diagnosis_kind FROM failures WHERE run_id = $1 AND is_regression`,
       [again.id],
@@ -192,7 +192,7 @@ describe('a plan run through the queue, with regressions and their mail', () => 
       work: async () => undefined,
       stop: async () => undefined,
     });
-    const run = await paused.start(planId, 'manual', kwame);
+    const { run } = await paused.start(planId, 'manual', kwame);
     const cancelled = await paused.cancel(run.id);
     expect(cancelled.status).toBe('cancelled');
     const [{ n }] = await db.dataSource.query(

@@ -93,7 +93,7 @@ describe('a worker killed mid-shard', () => {
   it('leaves no partial results, and the run completes with every outcome stored once', async () => {
     const kwame = await db.dataSource.getRepository(User).findOneByOrFail({ email: 'kwame@sheetkeeper.test' });
     const runs = new RunService(db.dataSource, queue);
-    const run = await runs.start(planId, 'manual', kwame);
+    const { run } = await runs.start(planId, 'manual', kwame);
     workers.push(startWorker(db), startWorker(db));
 
     // Both workers busy: then the first one is certainly in the middle of a shard.
