@@ -6,6 +6,7 @@ import { FakeSmtpServer } from '../../../server/mail/fake-smtp-server';
 import { MailOutbox } from '../../../server/mail/mail-outbox';
 import { PgBossShardQueue } from '../../../server/runs/pg-boss-shard-queue';
 import { PlanService } from '../../../server/plans/plan-service';
+import { markRegressions } from '../../../server/runs/mark-regressions';
 import { RunService } from '../../../server/runs/run-service';
 import { ShardExecutor } from '../../../server/runs/shard-executor';
 import { approvedSuite } from '../../setup/approved-suite';
@@ -144,6 +145,32 @@ describe('a plan run through the queue, with regressions and their mail', () => 
     expect(mails[0]!.subject).toBe(`[Sheetkeeper] ${second.regressions} regressions in fakelib nightly`);
     expect(mails[0]!.textBody).toContain('fakelib: 1 → 2');
     expect(mails[0]!.htmlBody).toContain('open the case');
+
+    // A second run that found the same regressions against the same baseline (issue 11: two runs
+    // of one plan both mailed a regression): its failures are the second run's, and it started
+    // just before it, so the first run is its baseline too. Completing it queues no second mail.
+    const [twin] = await db.dataSource.query(
+      `INSERT INTO runs (plan_id, plan_name, trigger, status, shards_total, shards_done, counts, created_at)
+       SELECT plan_id, plan_name, trigger, 'running', shards_total, shards_done, counts, created_at - interval '1 millisecond'
+         FROM runs WHERE id = $1 RETURNING id::text`,
+      [second.id],
+    );
+    const columns = (
+      await db.dataSource.query(
+        `SELECT string_agg(quote_ident(column_name), ', ' ORDER BY ordinal_position) AS c FROM information_schema.columns
+          WHERE table_name = 'failures' AND column_name NOT IN ('id', 'run_id', 'is_regression')`,
+      )
+    )[0].c;
+    await db.dataSource.query(
+      `INSERT INTO failures (run_id, ${columns}) SELECT $2, ${columns} FROM failures WHERE run_id = $1`,
+      [second.id, twin.id],
+    );
+    const found = await db.dataSource.transaction((tx) =>
+      markRegressions(tx, twin.id, { outbox, appUrl: 'http://127.0.0.1' }),
+    );
+    expect(found).toBe(second.regressions);
+    const [queued] = await db.dataSource.query(`SELECT count(*)::int AS n FROM outbox_mail WHERE kind = 'regression'`);
+    expect(queued.n).toBe(1);
   }, 90_000);
 
   it('keeps failures covered by an accepted deviation out of the regressions', async () => {
