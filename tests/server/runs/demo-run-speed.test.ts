@@ -58,7 +58,8 @@ bench('the demo "complex.js nightly" run on one worker', () => {
     // The first run computes the reference values (kept in memory by the executor, as the server
     // keeps them on disk); the second is what a maintainer's nightly costs. Measured on the 2-core
     // machine while six people's tests ran on it (load average 10–13): first 16.4–19.1 s, second
-    // 5.35–6.23 s, of which the shards' own work 0.7 s; issue 11 saw 49 s with pg-boss's polling.
+    // 5.35–6.23 s, of which the shards' own work 0.7 s; at load average 6, first 11.6 s, second
+    // 2.75 s (shards 0.43 s). Issue 11 saw 49 s with pg-boss's polling.
     const first = await runToEnd();
     const second = await runToEnd();
     expect(second.run).toMatchObject({ status: 'completed', shardsTotal: 50, shardsDone: 50 });
