@@ -21,7 +21,7 @@ export interface PgBossShardQueueOptions {
  * The shard queue on pg-boss 10 (its own schema `pgboss` in the same database, which pg-boss
  * creates and migrates itself). A shard's job is retried when its worker dies or fails; the
  * executor makes a retried shard's writes idempotent. A dead worker's shard is found sooner by
- * its stale heartbeat (requeue-stale-shards.ts) than by the job's expiry, which stays long
+ * its lost advisory lock (requeue-stale-shards.ts) than by the job's expiry, which stays long
  * because a shard may rightly run for its whole 120 s time limit.
  *
  * Wake-up: pg-boss 10 only polls, at 0.5 s at the least, so an idle worker would wait up to its
