@@ -5,13 +5,16 @@ import { OVERVIEW_KEY } from './use-overview';
 import { runKey } from './use-run';
 import { RUNS_KEY } from './use-runs';
 
-/** Starts a run of a plan now (`POST /api/runs` answers 202 with the queued run); the run lists and the Overview then show it. */
+/**
+ * Starts a run of a plan now (`POST /api/runs` answers 202 with the queued run, or 200 with
+ * `existing: true` and the plan's run already queued or running); the run lists and the Overview then show it.
+ */
 export function useStartRun() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: async (planId: string) =>
-      (await apiFetch<{ run: RunView }>('/runs', { method: 'POST', body: { planId } })).run,
-    onSuccess: (run) => {
+      apiFetch<{ run: RunView; existing: boolean }>('/runs', { method: 'POST', body: { planId } }),
+    onSuccess: ({ run }) => {
       queryClient.setQueryData(runKey(run.id), run);
       void queryClient.invalidateQueries({ queryKey: [...RUNS_KEY, 'list'] });
       void queryClient.invalidateQueries({ queryKey: OVERVIEW_KEY });

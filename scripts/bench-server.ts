@@ -82,13 +82,13 @@ async function main(): Promise<void> {
         work: async () => undefined,
         stop: async () => undefined,
       });
-      last = (await idle.start(plan.id, 'manual', kwame)).id;
+      last = (await idle.start(plan.id, 'manual', kwame)).run.id;
     } else {
       // 1. End to end, twice: the second run has a previous one to compare with (regressions, mail).
       const timings: number[] = [];
       for (let i = 0; i < 2; i += 1) {
         const began = performance.now();
-        const run = await runs.start(plan.id, 'manual', kwame);
+        const { run } = await runs.start(plan.id, 'manual', kwame);
         for (;;) {
           const view = await runs.get(run.id);
           if (view.status !== 'queued' && view.status !== 'running') break;

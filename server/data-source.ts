@@ -36,6 +36,7 @@ import { FailureTableIndexes1764780000000 } from './migrations/1764780000000-fai
 import { PropertyResults1764790000000 } from './migrations/1764790000000-property-results';
 import { RegressionGroups1764811100000 } from './migrations/1764811100000-regression-groups';
 import { FailureTableRowType1764800000000 } from './migrations/1764800000000-failure-table-row-type';
+import { OneActiveRunHeartbeatsMailOnce1764810000000 } from './migrations/1764810000000-one-active-run-heartbeats-mail-once';
 
 /** Entities and migrations are listed, not globbed, so tsx, jest and tsc builds all find them. */
 export const ENTITIES = [
@@ -72,6 +73,7 @@ export const MIGRATIONS = [
   FailureTableIndexes1764780000000,
   PropertyResults1764790000000,
   FailureTableRowType1764800000000,
+  OneActiveRunHeartbeatsMailOnce1764810000000,
   RegressionGroups1764811100000,
   SuiteVersionTakenOverFrom1764887400000,
 ];

@@ -20,7 +20,10 @@ async function main(): Promise<void> {
 
   const services = await startServices(dataSource, config, { workers: config.workers, deliverMail: true });
   const runs = new RunService(dataSource, services.queue);
-  const scheduler = new PlanScheduler(dataSource, async (planId) => (await runs.start(planId, 'schedule', null)).id);
+  const scheduler = new PlanScheduler(
+    dataSource,
+    async (planId) => (await runs.start(planId, 'schedule', null)).run.id,
+  );
   await scheduler.start();
 
   const origins = [...config.allowedOrigins];

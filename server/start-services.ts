@@ -4,8 +4,10 @@ import { FakeSmtpServer } from './mail/fake-smtp-server';
 import { MailOutbox } from './mail/mail-outbox';
 import { openInstalledTarget } from './targets/open-installed-target';
 import { PgBossShardQueue } from './runs/pg-boss-shard-queue';
+import { requeueStaleShards } from './runs/requeue-stale-shards';
 import { ShardExecutor } from './runs/shard-executor';
 import { describeError } from './database/describe-error';
+import { SHARD_LIVENESS } from './runs/shard-liveness';
 
 /** How often due mail is sent; a regression mail waits at most this long after its run ends. */
 const MAIL_INTERVAL_MS = 5000;
@@ -38,6 +40,23 @@ export async function startServices(
     referenceCacheDir: config.referenceCacheDir,
   });
   for (let i = 0; i < options.workers; i += 1) await queue.work((id) => executor.execute(id));
+  // Every process with workers looks for dead workers' shards; the sweep's UPDATE lets one process take each.
+  let sweeping = false;
+  const sweepTimer =
+    options.workers > 0
+      ? setInterval(() => {
+          if (sweeping) return;
+          sweeping = true;
+          requeueStaleShards(dataSource, queue)
+            .then((ids) => {
+              if (ids.length > 0) console.log(`[sheetkeeper] queued again ${ids.length} shard(s) of a dead worker`);
+            })
+            .catch((err: unknown) => console.error('[sheetkeeper] stale shard sweep failed', err))
+            .finally(() => {
+              sweeping = false;
+            });
+        }, SHARD_LIVENESS.sweepMs)
+      : null;
   let delivering = false;
   const mailTimer = options.deliverMail
     ? setInterval(() => {
@@ -58,6 +77,7 @@ export async function startServices(
     fakeSmtp: smtp !== null,
     stop: async () => {
       if (mailTimer) clearInterval(mailTimer);
+      if (sweepTimer) clearInterval(sweepTimer);
       await queue.stop();
       outbox.close();
       await smtp?.stop();

@@ -1,5 +1,6 @@
 import { useMe } from '../../client/use-me';
 import { MailList } from '../../components/mail/mail-list';
+import { MailQueue } from '../../components/mail/mail-queue';
 import { QueryState } from '../../components/ui/query-state';
 import { ScreenBody } from '../../components/ui/screen-body';
 
@@ -9,9 +10,16 @@ export default function OutboxScreen() {
   return (
     <ScreenBody
       title="Outbox"
-      lead="Every message the local mail server received from Sheetkeeper. Nothing here left this machine."
+      lead="Mail Sheetkeeper has not delivered yet, then every message the local mail server received from Sheetkeeper. Nothing here left this machine."
     >
-      {me.role === 'admin' ? <MailList /> : <QueryState state="error" message="Only admins can see the outbox." />}
+      {me.role === 'admin' ? (
+        <>
+          <MailQueue />
+          <MailList />
+        </>
+      ) : (
+        <QueryState state="error" message="Only admins can see the outbox." />
+      )}
     </ScreenBody>
   );
 }

@@ -1,12 +1,16 @@
 import { useRouter } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
+import { OPENED_EXISTING_PARAM } from '../../client/opened-existing-param';
 import { refusalMessage } from '../../client/refusal-message';
 import { useStartRun } from '../../client/use-start-run';
 import { theme } from '../../constants/theme';
 import { ActionButton } from '../ui/action-button';
 import { SkText } from '../ui/sk-text';
 
-/** "Run now" for a plan: queues a run and opens it; a refusal shows beside the button. */
+/**
+ * "Run now" for a plan: queues a run and opens it; when the plan has a run queued or running
+ * already, opens that one and the run page says so. A refusal shows beside the button.
+ */
 export function StartRunButton({
   planId,
   planName,
@@ -26,7 +30,12 @@ export function StartRunButton({
         accessibilityLabel={`Run ${planName} now`}
         tone={tone}
         busy={start.isPending}
-        onPress={() => start.mutate(planId, { onSuccess: (run) => router.push(`/runs/${run.id}` as never) })}
+        onPress={() =>
+          start.mutate(planId, {
+            onSuccess: ({ run, existing }) =>
+              router.push(`/runs/${run.id}${existing ? `?${OPENED_EXISTING_PARAM}=1` : ''}` as never),
+          })
+        }
       />
       {failure ? (
         <SkText variant="caption" tone="danger" accessibilityRole="alert">

@@ -17,7 +17,7 @@ import { RunMatrix } from './run-matrix';
 import { ScreenBody } from '../ui/screen-body';
 
 /** One run: its header and progress, what it checked, its suite × target matrix and its property checks; live while it runs. */
-export function RunDetail({ id }: { id: string }) {
+export function RunDetail({ id, openedExisting = false }: { id: string; openedExisting?: boolean }) {
   const run = useRun(id);
   const { data: me } = useMe();
   const live = run.data ? isLiveRun(run.data) : undefined;
@@ -63,6 +63,11 @@ export function RunDetail({ id }: { id: string }) {
       lead={`Run ${id.slice(0, 8)} of this plan: each suite × target pair is one shard.`}
     >
       <BackLink />
+      {openedExisting ? (
+        <SkText variant="body" accessibilityRole="alert" testID="opened-existing-run">
+          This plan already had a run in progress, so Run now opened it instead of starting a second one.
+        </SkText>
+      ) : null}
       <RunHeader run={run.data} canCancel={me?.role === 'maintainer' || me?.role === 'admin'} />
       {matrix.data ? (
         <CheckedScopeNote scopes={scopes} pairsNotChecked={notChecked} properties={propertySummary} subject="matrix" />

@@ -1,12 +1,15 @@
-import { Check, Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { Check, Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, Unique } from 'typeorm';
+import { OUTBOX_MAIL_STATUSES, type OutboxMailStatus } from '../../shared/outbox-mail-status';
 
 /**
  * A mail Sheetkeeper wants to send. It stays here until the SMTP server accepts it; a failed
  * attempt schedules the next one with backoff, so no mail is lost while the server is down.
+ * What each status means is in shared/outbox-mail-status.ts; mail-outbox.ts moves between them.
  */
 @Entity({ name: 'outbox_mail' })
 @Index('outbox_mail_due_idx', ['status', 'nextAttemptAt'])
-@Check('outbox_mail_status_known', "status IN ('pending', 'sent')")
+@Unique('outbox_mail_idempotency_key_unique', ['idempotencyKey'])
+@Check('outbox_mail_status_known', `status IN (${OUTBOX_MAIL_STATUSES.map((s) => `'${s}'`).join(', ')})`)
 export class OutboxMail {
   @PrimaryGeneratedColumn('uuid')
   id!: string;
@@ -28,7 +31,15 @@ export class OutboxMail {
   htmlBody!: string;
 
   @Column({ type: 'text', default: 'pending' })
-  status!: 'pending' | 'sent';
+  status!: OutboxMailStatus;
+
+  /** What the mail is the one copy of (e.g. a run's regressions); a second mail with the same key is not queued. */
+  @Column({ type: 'text', name: 'idempotency_key', nullable: true })
+  idempotencyKey!: string | null;
+
+  /** When a deliverer marked it `sending`; a row left `sending` long after this was cut off mid-send. */
+  @Column({ type: 'timestamptz', name: 'claimed_at', nullable: true })
+  claimedAt!: Date | null;
 
   @Column({ type: 'integer', default: 0 })
   attempts!: number;

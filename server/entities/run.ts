@@ -7,6 +7,8 @@ import { User } from './user';
 /** One execution of a plan: suites × targets split into shards that workers take from the queue. */
 @Entity({ name: 'runs' })
 @Index('runs_plan_created_idx', ['plan', 'createdAt'])
+// One queued or running run per plan: "Run now" twice at once makes one run (run-service.ts).
+@Index('runs_one_active_per_plan', ['plan'], { unique: true, where: `status IN ('queued', 'running')` })
 @Check('runs_status_known', "status IN ('queued', 'running', 'completed', 'failed', 'cancelled')")
 @Check('runs_trigger_known', "trigger IN ('schedule', 'manual', 'api')")
 export class Run {

@@ -58,6 +58,10 @@ export class Shard {
   @Column({ type: 'integer', name: 'duration_ms', nullable: true })
   durationMs!: number | null;
 
+  /** When a worker last took it; the worker's advisory lock says it is still alive (shard-liveness.ts). */
+  @Column({ type: 'timestamptz', name: 'claimed_at', nullable: true })
+  claimedAt!: Date | null;
+
   @Column({ type: 'timestamptz', name: 'finished_at', nullable: true })
   finishedAt!: Date | null;
 }

@@ -19,6 +19,8 @@ export class FakeSmtpServer {
   constructor(
     private readonly dataSource: DataSource,
     private readonly host = '127.0.0.1',
+    /** Stores a message, then waits this long before saying OK: a slow relay, for tests of timeouts. */
+    private readonly replyDelayMs = 0,
   ) {}
 
   /** Starts listening; resolves with the port (pass 0 for any free one). */
@@ -43,6 +45,7 @@ export class FakeSmtpServer {
             session.envelope.mailFrom ? session.envelope.mailFrom.address : '',
             session.envelope.rcptTo.map((r) => r.address),
           )
+            .then(() => new Promise((resolve) => setTimeout(resolve, this.replyDelayMs)))
             .then(() => callback())
             .catch((err: unknown) => callback(err instanceof Error ? err : new Error(String(err))));
         });

@@ -5,4 +5,6 @@ export interface NewMail {
   subject: string;
   text: string;
   html: string;
+  /** What this mail is the one copy of: a second mail with the same key is not queued (mail-outbox.ts). */
+  idempotencyKey?: string;
 }

@@ -1,5 +1,7 @@
 import { Router } from 'express';
-import type { DataSource } from 'typeorm';
+import { Not, type DataSource } from 'typeorm';
+import type { OutboxMailView } from '../../shared/outbox-mail-view';
+import { OutboxMail } from '../entities/outbox-mail';
 import { idParams } from '../../shared/schemas/id-params';
 import { outboxListQuery } from '../../shared/schemas/outbox-list-query';
 import type { ReceivedMailView } from '../../shared/received-mail-view';
@@ -16,10 +18,14 @@ const summary = (m: ReceivedMail): ReceivedMailView => ({
   receivedAt: m.receivedAt.toISOString(),
 });
 
-/** What the local mail server received (admins): a page of messages, and one message rendered. */
+/** Mail not yet delivered shows at most this many, newest first: a relay down for a day queues a few dozen. */
+const QUEUE_PAGE = 100;
+
+/** What the local mail server received (admins): a page of messages, and one message rendered; and the mail not yet delivered. */
 export function outboxRouter(dataSource: DataSource): Router {
   const router = Router();
   const mails = dataSource.getRepository(ReceivedMail);
+  const queued = dataSource.getRepository(OutboxMail);
 
   router.get('/', requireRole('admin'), async (req, res) => {
     const { limit, before } = parseInput(outboxListQuery, req.query, 'query');
@@ -34,6 +40,28 @@ export function outboxRouter(dataSource: DataSource): Router {
       .limit(limit)
       .getMany();
     res.json({ messages: rows.map(summary), next: rows.length === limit ? rows[rows.length - 1]!.id : null });
+  });
+
+  /** Mail not (or not surely) delivered: waiting, being sent, unconfirmed or failed, newest first. */
+  router.get('/queue', requireRole('admin'), async (_req, res) => {
+    const rows: OutboxMail[] = await queued.find({
+      where: { status: Not('sent') },
+      order: { createdAt: 'DESC', id: 'DESC' },
+      take: QUEUE_PAGE,
+    });
+    res.json({
+      mails: rows.map((m): OutboxMailView => ({
+        id: m.id,
+        kind: m.kind,
+        subject: m.subject,
+        recipients: m.recipients,
+        status: m.status,
+        attempts: m.attempts,
+        lastError: m.lastError,
+        nextAttemptAt: m.nextAttemptAt.toISOString(),
+        createdAt: m.createdAt.toISOString(),
+      })),
+    });
   });
 
   router.get('/:id', requireRole('admin'), async (req, res) => {

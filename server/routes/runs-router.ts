@@ -21,7 +21,9 @@ export function runsRouter(dataSource: DataSource, runs: RunService): Router {
   });
   router.post('/', runners, async (req, res) => {
     const { planId } = parseInput(runBody, req.body, 'body');
-    res.status(202).json({ run: await runs.start(planId, res.locals.viaToken ? 'api' : 'manual', req.user!) });
+    // 202 for a run queued now; 200 with `existing: true` for the plan's run already queued or running.
+    const { run, existing } = await runs.start(planId, res.locals.viaToken ? 'api' : 'manual', req.user!);
+    res.status(existing ? 200 : 202).json({ run, existing });
   });
   router.get('/:id', anyone, async (req, res) => {
     res.json({ run: await runs.get(parseInput(idParams, req.params, 'params').id) });

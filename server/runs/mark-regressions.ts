@@ -91,6 +91,13 @@ export async function markRegressions(
           [run.id, previous.id],
         )
       : [];
+    // The same regressions against the same baseline are mailed once, whichever run found them
+    // (issue 11: two runs of one plan both mailed the same regression).
+    const [{ digest }] = await tx.query(
+      `SELECT md5(string_agg(${targetKeySql('target_name')} || '|' || point_key, ',' ORDER BY ${targetKeySql('target_name')}, point_key)) AS digest
+         FROM failures WHERE run_id = $1 AND is_regression`,
+      [run.id],
+    );
     await mail.outbox.enqueue(
       regressionMail({
         recipients,
@@ -100,6 +107,7 @@ export async function markRegressions(
         rows,
         total: count,
         versionChanges,
+        idempotencyKey: `regressions:${run.plan?.id ?? run.planName}:${previous?.id ?? 'none'}:${digest}`,
       }),
       tx,
     );

@@ -43,6 +43,8 @@ export function regressionMail(input: {
   rows: RegressionRow[];
   total: number;
   versionChanges: { key: string; from: string; to: string }[];
+  /** Keeps the same regressions from being mailed twice (mark-regressions.ts). */
+  idempotencyKey?: string;
 }): NewMail {
   const { rows, total } = input;
   const link = (id: string) => `${input.appUrl}/failures/${id}`;
@@ -99,5 +101,12 @@ ${shown
 ${more > 0 ? `<p>…and ${more} more: <a href="${escape(`${input.appUrl}/runs/${input.runId}`)}">the whole run</a></p>` : ''}
 <p><small>${escape(scope)}</small></p>
 </body></html>`;
-  return { kind: 'regression', recipients: input.recipients, subject, text, html };
+  return {
+    kind: 'regression',
+    recipients: input.recipients,
+    subject,
+    text,
+    html,
+    idempotencyKey: input.idempotencyKey,
+  };
 }

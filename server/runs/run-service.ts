@@ -24,8 +24,22 @@ export class RunService {
     private readonly queue: ShardQueue,
   ) {}
 
-  async start(planId: string, trigger: RunTrigger, user: User | null): Promise<RunView> {
-    const { run, shardIds } = await this.dataSource.transaction(async (tx) => {
+  /**
+   * Starts a run of the plan, or returns the plan's run that is queued or running already
+   * (`existing: true`): two "Run now" at once, from two sessions or a double click, make one run.
+   * The plan row is locked first, so the second request waits for the first to commit and then
+   * finds its run; the unique index `runs_one_active_per_plan` holds the rule even for a writer
+   * that skips this lock.
+   */
+  async start(planId: string, trigger: RunTrigger, user: User | null): Promise<{ run: RunView; existing: boolean }> {
+    type Started = { existingId: string } | { run: Run; shardIds: string[] };
+    const started = await this.dataSource.transaction(async (tx): Promise<Started> => {
+      const [lockedPlan] = await tx.query(`SELECT id FROM plans WHERE id = $1 FOR NO KEY UPDATE`, [planId]);
+      if (!lockedPlan) throw new HttpError(404, { kind: 'not-found', message: 'No plan with that id.' });
+      const [active] = await tx.query(`SELECT id FROM runs WHERE plan_id = $1 AND status IN ('queued', 'running')`, [
+        planId,
+      ]);
+      if (active) return { existingId: active.id as string };
       const plan = await tx
         .getRepository(Plan)
         .findOne({ where: { id: planId }, relations: { suites: true, targets: true } });
@@ -84,8 +98,9 @@ export class RunService {
       );
       return { run, shardIds: shards.map((s) => s.id) };
     });
-    await this.queue.enqueue(shardIds);
-    return this.get(run.id);
+    if ('existingId' in started) return { run: await this.get(started.existingId), existing: true };
+    await this.queue.enqueue(started.shardIds);
+    return { run: await this.get(started.run.id), existing: false };
   }
 
   async get(id: string): Promise<RunView> {

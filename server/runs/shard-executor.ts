@@ -10,6 +10,7 @@ import { Run } from '../entities/run';
 import { Shard } from '../entities/shard';
 import type { MailOutbox } from '../mail/mail-outbox';
 import { markRegressions } from './mark-regressions';
+import { SHARD_LIVENESS } from './shard-liveness';
 
 /** Rows per INSERT when storing failures: 1,000 rows × ~25 columns stays far below PostgreSQL's 65,535 parameters. */
 const INSERT_CHUNK = 1000;
@@ -53,9 +54,35 @@ export class ShardExecutor {
       .getRepository(Shard)
       .findOne({ where: { id: shardId }, relations: { run: true, suiteVersion: true } });
     if (!shard || shard.status === 'done' || shard.status === 'cancelled' || shard.run.status === 'cancelled') return;
-    await this.dataSource.query(`UPDATE shards SET status = 'running', attempts = attempts + 1 WHERE id = $1`, [
-      shardId,
-    ]);
+    // The advisory lock, on a connection of its own, says this worker is alive for as long as it
+    // holds it (shard-liveness.ts); a worker that cannot take it leaves the shard to the one that has it.
+    const liveness = this.dataSource.createQueryRunner();
+    await liveness.connect();
+    try {
+      const [{ locked }] = await liveness.query(`SELECT pg_try_advisory_lock($1, hashtext($2)) AS locked`, [
+        SHARD_LIVENESS.lockClass,
+        shardId,
+      ]);
+      if (!locked) return;
+      try {
+        await this.claimAndRun(shard);
+      } finally {
+        await liveness.query(`SELECT pg_advisory_unlock($1, hashtext($2))`, [SHARD_LIVENESS.lockClass, shardId]);
+      }
+    } finally {
+      await liveness.release();
+    }
+  }
+
+  private async claimAndRun(shard: Shard): Promise<void> {
+    const shardId = shard.id;
+    // Conditional: a shard finished by another worker since it was read must not turn running again.
+    const [claimed] = await this.dataSource.query(
+      `UPDATE shards SET status = 'running', attempts = attempts + 1, claimed_at = clock_timestamp()
+        WHERE id = $1 AND status IN ('queued', 'running') RETURNING id`,
+      [shardId],
+    );
+    if (!claimed || claimed.length === 0) return;
     await this.dataSource.query(
       `UPDATE runs SET status = 'running', started_at = coalesce(started_at, now()) WHERE id = $1 AND status = 'queued'`,
       [shard.run.id],

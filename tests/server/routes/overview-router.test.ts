@@ -70,11 +70,15 @@ describe('GET /api/overview', () => {
       .post('/api/plans')
       .send({ name: 'overview plan', recipients: [], suites: ['overview-sqrt'], targets: [complexJs, mathjs] });
     planId = plan.body.plan.id;
-    for (const key of ['old', 'previous', 'latest', 'live'] as const)
-      runs[key] = (await kwame.post('/api/runs').send({ planId })).body.run.id;
+    // A plan has one queued or running run at a time, so each run ends before the next starts.
+    const start = async () => (await kwame.post('/api/runs').send({ planId })).body.run.id;
+    runs.old = await start();
     await finish(runs.old, 90, { pass: 100, fail: 9 }, 0);
+    runs.previous = await start();
     await finish(runs.previous, 60, { pass: 110, fail: 2 }, 0);
+    runs.latest = await start();
     await finish(runs.latest, 30, { pass: 105, fail: 7 }, 5);
+    runs.live = await start();
     // The older run's regression must not show: only the latest completed run of a plan counts.
     await failure(runs.old, complexJs, true);
     for (let i = 0; i < 3; i += 1) await failure(runs.latest, complexJs, true);

@@ -188,6 +188,11 @@ const ROUTES: RouteCase[] = [
     expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 },
   },
   {
+    name: 'GET /api/outbox/queue',
+    call: (a) => a.get('/api/outbox/queue'),
+    expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 },
+  },
+  {
     name: 'GET /api/outbox/:id',
     call: async (a) => {
       const [row] = await t.db.dataSource.query(

@@ -6,6 +6,7 @@ import { FakeSmtpServer } from '../../../server/mail/fake-smtp-server';
 import { MailOutbox } from '../../../server/mail/mail-outbox';
 import { PgBossShardQueue } from '../../../server/runs/pg-boss-shard-queue';
 import { PlanService } from '../../../server/plans/plan-service';
+import { markRegressions } from '../../../server/runs/mark-regressions';
 import { RunService } from '../../../server/runs/run-service';
 import { ShardExecutor } from '../../../server/runs/shard-executor';
 import { approvedSuite } from '../../setup/approved-suite';
@@ -93,7 +94,7 @@ describe('a plan run through the queue, with regressions and their mail', () => 
   }
 
   it('runs every suite × target shard and stores the failures it found', async () => {
-    const first = await finished((await runs.start(planId, 'manual', kwame)).id);
+    const first = await finished((await runs.start(planId, 'manual', kwame)).run.id);
     expect(first).toMatchObject({ status: 'completed', shardsTotal: 2, shardsDone: 2, regressions: 0 });
     expect(first.counts.pass).toBeGreaterThan(0);
     const [stored] = await db.dataSource.query(`SELECT count(*)::int AS n FROM failures WHERE run_id = $1`, [first.id]);
@@ -124,7 +125,7 @@ describe('a plan run through the queue, with regressions and their mail', () => 
     await db.dataSource.query(
       `INSERT INTO subscriptions (user_id, target_key) SELECT id, 'fakelib' FROM users WHERE email = 'hanne@sheetkeeper.test'`,
     );
-    const second = await finished((await runs.start(planId, 'manual', kwame)).id);
+    const second = await finished((await runs.start(planId, 'manual', kwame)).run.id);
     expect(second.status).toBe('completed');
     expect(second.regressions).toBeGreaterThan(0);
     const regressions: { suite_slug: string; z: { im: string } }[] = await db.dataSource.query(
@@ -144,6 +145,32 @@ describe('a plan run through the queue, with regressions and their mail', () => 
     expect(mails[0]!.subject).toBe(`[Sheetkeeper] ${second.regressions} regressions in fakelib nightly`);
     expect(mails[0]!.textBody).toContain('fakelib: 1 → 2');
     expect(mails[0]!.htmlBody).toContain('open the case');
+
+    // A second run that found the same regressions against the same baseline (issue 11: two runs
+    // of one plan both mailed a regression): its failures are the second run's, and it started
+    // just before it, so the first run is its baseline too. Completing it queues no second mail.
+    const [twin] = await db.dataSource.query(
+      `INSERT INTO runs (plan_id, plan_name, trigger, status, shards_total, shards_done, counts, created_at)
+       SELECT plan_id, plan_name, trigger, 'running', shards_total, shards_done, counts, created_at - interval '1 millisecond'
+         FROM runs WHERE id = $1 RETURNING id::text`,
+      [second.id],
+    );
+    const columns = (
+      await db.dataSource.query(
+        `SELECT string_agg(quote_ident(column_name), ', ' ORDER BY ordinal_position) AS c FROM information_schema.columns
+          WHERE table_name = 'failures' AND column_name NOT IN ('id', 'run_id', 'is_regression')`,
+      )
+    )[0].c;
+    await db.dataSource.query(
+      `INSERT INTO failures (run_id, ${columns}) SELECT $2, ${columns} FROM failures WHERE run_id = $1`,
+      [second.id, twin.id],
+    );
+    const found = await db.dataSource.transaction((tx) =>
+      markRegressions(tx, twin.id, { outbox, appUrl: 'http://127.0.0.1' }),
+    );
+    expect(found).toBe(second.regressions);
+    const [queued] = await db.dataSource.query(`SELECT count(*)::int AS n FROM outbox_mail WHERE kind = 'regression'`);
+    expect(queued.n).toBe(1);
   }, 90_000);
 
   it('keeps failures covered by an accepted deviation out of the regressions', async () => {
@@ -166,7 +193,7 @@ describe('a plan run through the queue, with regressions and their mail', () => 
       },
       planId,
     );
-    await finished((await runs.start(planId, 'manual', kwame)).id);
+    await finished((await runs.start(planId, 'manual', kwame)).run.id);
     await new PlanService(db.dataSource).save(
       kwame,
       {
@@ -178,7 +205,7 @@ describe('a plan run through the queue, with regressions and their mail', () => 
       },
       planId,
     );
-    const again = await finished((await runs.start(planId, 'manual', kwame)).id);
+    const again = await finished((await runs.start(planId, 'manual', kwame)).run.id);
     const left = await db.dataSource.query(
       `SELECT suite_slug, path_name, z, diagnosis_kind FROM failures WHERE run_id = $1 AND is_regression`,
       [again.id],
@@ -192,7 +219,7 @@ describe('a plan run through the queue, with regressions and their mail', () => 
       work: async () => undefined,
       stop: async () => undefined,
     });
-    const run = await paused.start(planId, 'manual', kwame);
+    const { run } = await paused.start(planId, 'manual', kwame);
     const cancelled = await paused.cancel(run.id);
     expect(cancelled.status).toBe('cancelled');
     const [{ n }] = await db.dataSource.query(

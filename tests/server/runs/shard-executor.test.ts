@@ -55,7 +55,7 @@ describe('the shard executor', () => {
       },
       null,
     );
-    const run = await new RunService(db.dataSource, idleShardQueue()).start(plan.id, 'manual', kwame);
+    const { run } = await new RunService(db.dataSource, idleShardQueue()).start(plan.id, 'manual', kwame);
     const executor = new ShardExecutor(db.dataSource, {
       openTarget: (name) =>
         name === 'hung@1'

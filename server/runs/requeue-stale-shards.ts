@@ -1,0 +1,28 @@
+import type { DataSource } from 'typeorm';
+import type { ShardQueue } from './shard-queue';
+import { SHARD_LIVENESS } from './shard-liveness';
+
+/**
+ * Puts back on the queue every running shard of a live run whose worker's advisory lock is gone
+ * (its worker died; shard-liveness.ts): the UPDATE claims each such shard for exactly one sweeping
+ * process, so two sweepers never queue it twice, and the executor's locked re-check stores a
+ * shard once whatever happens. Returns the shards queued again.
+ */
+export async function requeueStaleShards(dataSource: DataSource, queue: ShardQueue): Promise<string[]> {
+  const rows: { id: string }[] = await dataSource.query(
+    `WITH stale AS (
+       UPDATE shards s SET status = 'queued'
+         FROM runs r
+        WHERE r.id = s.run_id AND r.status IN ('queued', 'running') AND s.status = 'running'
+          AND s.claimed_at < clock_timestamp() - make_interval(secs => $2)
+          AND NOT EXISTS (SELECT 1 FROM pg_locks l
+                           WHERE l.locktype = 'advisory' AND l.granted AND l.database = (SELECT oid FROM pg_database WHERE datname = current_database())
+                             AND l.classid = $1::int::oid AND l.objid = hashtext(s.id::text)::oid AND l.objsubid = 2)
+       RETURNING s.id)
+     SELECT id::text FROM stale`,
+    [SHARD_LIVENESS.lockClass, SHARD_LIVENESS.claimGraceMs / 1000],
+  );
+  const ids = rows.map((r) => r.id);
+  if (ids.length > 0) await queue.enqueue(ids);
+  return ids;
+}
