@@ -94,6 +94,7 @@ const ROUTES: Record<Route, FuzzRoute> = {
   },
   'GET /api/outbox': { roles: ['admin'], query: ['limit', 'before'] },
   'GET /api/outbox/:id': { roles: ['admin'], params: { id: () => UNKNOWN_ID } },
+  'GET /api/outbox/queue': { roles: ['admin'] },
   'GET /api/targets': { roles: ROLES },
   // A real target's findings take seconds on the findings thread: the fuzz names no real target.
   'GET /api/targets/:name/fingerprint': { roles: ROLES, params: { name: () => 'no-such-lib@0.0.0' }, query: ['fn'] },
