@@ -37,4 +37,20 @@ describe('passwords', () => {
     expect(spies.hash).toHaveBeenCalledTimes(1);
     expect(spies.hashSync).not.toHaveBeenCalled();
   });
+
+  it("hashes at cost 11 outside jest, and at bcrypt's minimum of 4 under it", async () => {
+    const { passwords, BCRYPT_COST, PRODUCTION_BCRYPT_COST } = load();
+    expect(PRODUCTION_BCRYPT_COST).toBe(11);
+    expect(BCRYPT_COST).toBe(4);
+    expect(bcrypt.getRounds(await passwords.hash('x'))).toBe(4);
+    const saved = process.env.NODE_ENV;
+    process.env.NODE_ENV = 'production';
+    try {
+      const real = load();
+      expect(real.BCRYPT_COST).toBe(11);
+      expect(bcrypt.getRounds(await real.passwords.hash('x'))).toBe(11);
+    } finally {
+      process.env.NODE_ENV = saved;
+    }
+  });
 });
