@@ -14,7 +14,7 @@ import { openInstalledTarget } from '../targets/open-installed-target';
 import { serveThreadRequests } from '../workers/serve-thread-requests';
 
 /**
- * The body of the findings thread (findings-thread.ts): runs the library code behind the
+ * The body of a findings thread (findings-pool.ts): runs the library code behind the
  * fingerprint, cut map and version matrix, one request at a time per thread, so loading mathjs
  * (~1.1 s a version) or a 201×201 cut map (up to ~0.7 s) never holds up the server's own thread.
  */

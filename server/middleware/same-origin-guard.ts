@@ -25,13 +25,13 @@ export function sameOriginGuard(allowed: readonly string[]) {
   // Read at each request: a server on an OS-chosen port (SHEETKEEPER_PORT=0) learns its own
   // origins only once it listens (server/main.ts adds them to this list then).
   return (req: Request, res: Response, next: NextFunction): void => {
-    const own = new Set(allowed.map((o) => originOf(o) ?? o));
     if (SAFE_METHODS.has(req.method)) return next();
     if (/^Bearer\s/i.test(req.get('authorization') ?? '')) return next();
     const origin = req.get('origin');
     const referer = req.get('referer');
     if (origin === undefined && referer === undefined) return next();
     const claimed = origin !== undefined ? origin : originOf(referer!);
+    const own = new Set(allowed.map((o) => originOf(o) ?? o));
     if (claimed !== null && own.has(claimed)) return next();
     // Headers reach 16 KB; the answer quotes only enough to recognise the page.
     const from = (origin !== undefined ? `Origin ${origin}` : `Referer ${referer}`).slice(0, 200);

@@ -42,6 +42,19 @@ describe('a plan run through the queue, with regressions and their mail', () => 
   let runs: RunService;
   let planId: string;
   let kwame: User;
+  /** The fakelib nightly plan (both fakelib suites) on one fakelib release, made anew or saved over `id`. */
+  const savePlan = (target: string, id: string | null) =>
+    new PlanService(db.dataSource).save(
+      kwame,
+      {
+        name: 'fakelib nightly',
+        description: '',
+        recipients: ['kwame@sheetkeeper.test'],
+        suites: ['run-sqrt', 'run-log'],
+        targets: [target],
+      },
+      id,
+    );
 
   beforeAll(async () => {
     db = await createTestDatabase();
@@ -54,17 +67,7 @@ describe('a plan run through the queue, with regressions and their mail', () => 
     await approvedSuite(db.dataSource, 'run-sqrt', 'sqrt-principal-sz');
     await approvedSuite(db.dataSource, 'run-log', 'log-principal-sz');
     kwame = await db.dataSource.getRepository(User).findOneByOrFail({ email: 'kwame@sheetkeeper.test' });
-    const plan = await new PlanService(db.dataSource).save(
-      kwame,
-      {
-        name: 'fakelib nightly',
-        description: '',
-        recipients: ['kwame@sheetkeeper.test'],
-        suites: ['run-sqrt', 'run-log'],
-        targets: ['fakelib@1'],
-      },
-      null,
-    );
+    const plan = await savePlan('fakelib@1', null);
     planId = plan.id;
     queue = new PgBossShardQueue(db.url, { pollingIntervalSeconds: 0.5 });
     const executor = new ShardExecutor(db.dataSource, {
@@ -110,17 +113,7 @@ describe('a plan run through the queue, with regressions and their mail', () => 
   }, 90_000);
 
   it('reports what version 2 broke as regressions with a version change, in exactly one mail', async () => {
-    await new PlanService(db.dataSource).save(
-      kwame,
-      {
-        name: 'fakelib nightly',
-        description: '',
-        recipients: ['kwame@sheetkeeper.test'],
-        suites: ['run-sqrt', 'run-log'],
-        targets: ['fakelib@2'],
-      },
-      planId,
-    );
+    await savePlan('fakelib@2', planId);
     // Hanne is not on the plan, but subscribes to the library.
     await db.dataSource.query(
       `INSERT INTO subscriptions (user_id, target_key) SELECT id, 'fakelib' FROM users WHERE email = 'hanne@sheetkeeper.test'`,
@@ -182,29 +175,9 @@ describe('a plan run through the queue, with regressions and their mail', () => 
       `INSERT INTO deviations (classification, scope, target_key, suite_slug, reason, expires_at, failure_id, created_by) VALUES ('accepted', 'suite', 'fakelib', 'run-sqrt', 'known upstream', now() + interval '30 days', $1, $2)`,
       [failure.id, kwame.id],
     );
-    await new PlanService(db.dataSource).save(
-      kwame,
-      {
-        name: 'fakelib nightly',
-        description: '',
-        recipients: ['kwame@sheetkeeper.test'],
-        suites: ['run-sqrt', 'run-log'],
-        targets: ['fakelib@1'],
-      },
-      planId,
-    );
+    await savePlan('fakelib@1', planId);
     await finished((await runs.start(planId, 'manual', kwame)).run.id);
-    await new PlanService(db.dataSource).save(
-      kwame,
-      {
-        name: 'fakelib nightly',
-        description: '',
-        recipients: ['kwame@sheetkeeper.test'],
-        suites: ['run-sqrt', 'run-log'],
-        targets: ['fakelib@2'],
-      },
-      planId,
-    );
+    await savePlan('fakelib@2', planId);
     const again = await finished((await runs.start(planId, 'manual', kwame)).run.id);
     const left = await db.dataSource.query(
       `SELECT suite_slug, path_name, z, diagnosis_kind FROM failures WHERE run_id = $1 AND is_regression`,
