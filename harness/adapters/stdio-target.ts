@@ -195,6 +195,9 @@ export function stdioTarget(options: StdioTargetOptions): StdioTarget {
       const proc = child;
       if (!proc) return;
       child = null;
+      // A batch still waiting is answered now: its timer would otherwise outlive the target
+      // (up to the whole time limit) and keep the process that closed it from exiting.
+      pending?.onExit('the target was closed before the program answered');
       if (proc.exitCode !== null || proc.signalCode !== null) return;
       await new Promise<void>((resolve) => {
         const timer = setTimeout(() => proc.kill('SIGKILL'), 1000);

@@ -150,6 +150,20 @@ describe('stdioTarget', () => {
     ]);
   });
 
+  it('answers a batch still waiting at close with an error at once, so no time limit outlives the target', async () => {
+    // The limit is a minute: before, close() left the pending batch to its timer, which kept
+    // `sheetkeeper run` alive for the rest of the limit after its report was written.
+    target = misbehaving(60_000);
+    await target.supports('log');
+    const hung = target.evaluate('log', [[[1, 0]]]);
+    await new Promise((resolve) => setTimeout(resolve, 100));
+    const started = Date.now();
+    await target.close();
+    expect(await hung).toEqual([{ error: 'the target was closed before the program answered' }]);
+    expect(Date.now() - started).toBeLessThan(5000);
+    expect(await target.evaluate('sqrt', [[[9, 0]]])).toEqual([{ value: [9, 0] }]);
+  }, 20_000);
+
   it('ends the program on close', async () => {
     target = misbehaving();
     await target.supports('sqrt');
