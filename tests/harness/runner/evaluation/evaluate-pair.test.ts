@@ -3,12 +3,12 @@ import type { TargetDescriptor } from '../../../../harness/adapters/target-descr
 import { buildPath } from '../../../../harness/paths/build-path';
 import { evaluatePair } from '../../../../harness/runner/evaluation/evaluate-pair';
 import { toPathSpec } from '../../../../harness/runner/evaluation/to-path-spec';
-import { ReferenceCache } from '../../../../harness/runner/reference-cache/reference-cache';
+import { seededReferenceCache } from '../../../setup/seeded-reference-cache';
 import type { Suite } from '../../../../shared/schemas/suite-schema';
 import { loadDemoSuite } from '../support/load-demo-suite';
 import { referenceTarget } from '../support/reference-target';
 
-const cache = new ReferenceCache(null);
+const cache = seededReferenceCache();
 const descriptorOf = (open: () => Target): TargetDescriptor => ({
   name: 'oracle@1',
   library: 'oracle',

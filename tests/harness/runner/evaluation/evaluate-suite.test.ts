@@ -4,12 +4,12 @@ import type { PointFinding, SuiteTargetResult } from '../../../../shared/run-res
 import type { ComplexPair } from '../../../../harness/adapters/complex-pair';
 import type { Target } from '../../../../harness/adapters/target';
 import { evaluateSuite } from '../../../../harness/runner/evaluation/evaluate-suite';
-import { ReferenceCache } from '../../../../harness/runner/reference-cache/reference-cache';
+import { seededReferenceCache } from '../../../setup/seeded-reference-cache';
 import { loadDemoSuite } from '../support/load-demo-suite';
 import { makeSuite } from '../support/make-suite';
 import { referenceTarget } from '../support/reference-target';
 
-const cache = new ReferenceCache(null);
+const cache = seededReferenceCache();
 const findings = (r: SuiteTargetResult): PointFinding[] => r.paths.flatMap((p) => p.findings);
 const diagnosis = (f: PointFinding): Diagnosis | null => (f.outcome.kind === 'fail' ? f.outcome.diagnosis : null);
 const ROTATE: ComplexPair = [Math.cos((2 * Math.PI) / 3), Math.sin((2 * Math.PI) / 3)];

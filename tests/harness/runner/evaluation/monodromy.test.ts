@@ -1,6 +1,6 @@
 import type { ComplexPair } from '../../../../harness/adapters/complex-pair';
 import { evaluateSuite } from '../../../../harness/runner/evaluation/evaluate-suite';
-import { ReferenceCache } from '../../../../harness/runner/reference-cache/reference-cache';
+import { seededReferenceCache } from '../../../setup/seeded-reference-cache';
 import { makeSuite } from '../support/make-suite';
 import { referenceTarget } from '../support/reference-target';
 import { sqrtBranch } from '../support/sqrt-branch';
@@ -12,7 +12,7 @@ const suite = makeSuite({
   tolerances: { values: { relative: 1e-14 }, monodromy: { relative: 1e-12 } },
   paths: [{ kind: 'circle', name: 'unit circle', center: { re: '0', im: '0' }, radius: '1', samples: 65 }],
 });
-const cache = new ReferenceCache(null);
+const cache = seededReferenceCache();
 const below = ([, im]: ComplexPair) => im < 0 || Object.is(im, -0);
 
 async function monodromyOf(fault?: (op: string, args: ComplexPair[], v: [number, number]) => [number, number]) {

@@ -1,4 +1,3 @@
-import { rmSync } from 'node:fs';
 import path from 'node:path';
 import type { DiagnosisKind } from '../../../../shared/diagnosis';
 import type { RunResult } from '../../../../shared/run-result';
@@ -6,10 +5,9 @@ import { discoverTargets } from '../../../../harness/adapters/discover-targets';
 import { buildPlan } from '../../../../harness/runner/plan/build-plan';
 import { loadSuites } from '../../../../harness/runner/plan/load-suites';
 import { mutantTarget, type Mutation } from '../../../../harness/runner/evaluation/mutant-target';
-import { ReferenceCache } from '../../../../harness/runner/reference-cache/reference-cache';
 import { runPlan } from '../../../../harness/runner/plan/run-plan';
 import type { TargetDescriptor } from '../../../../harness/adapters/target-descriptor';
-import { seededReferenceCacheDir } from '../../../setup/seeded-reference-cache-dir';
+import { seededReferenceCache } from '../../../setup/seeded-reference-cache';
 
 /**
  * The self-check (issue item 12): faults planted in a good library must each be caught by the
@@ -22,9 +20,7 @@ const loaded = loadSuites([path.join(ROOT, 'suites', 'demo')], path.join(ROOT, '
 if (!loaded.ok) throw new Error('the demo catalogue does not load');
 const suites = loaded.suites;
 const cmath = discoverTargets().find((t) => t.library === 'cmath');
-const cacheDir = seededReferenceCacheDir();
-const cache = new ReferenceCache(cacheDir);
-afterAll(() => rmSync(cacheDir, { recursive: true, force: true }));
+const cache = seededReferenceCache();
 
 interface Caught {
   suite: string;

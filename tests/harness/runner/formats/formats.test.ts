@@ -3,11 +3,13 @@ import { buildPlan } from '../../../../harness/runner/plan/build-plan';
 import { formatJson } from '../../../../harness/runner/formats/format-json';
 import { formatJunit } from '../../../../harness/runner/formats/format-junit';
 import { formatTable } from '../../../../harness/runner/formats/format-table';
-import { ReferenceCache } from '../../../../harness/runner/reference-cache/reference-cache';
+import { seededReferenceCache } from '../../../setup/seeded-reference-cache';
 import { runPlan } from '../../../../harness/runner/plan/run-plan';
 import type { TargetDescriptor } from '../../../../harness/adapters/target-descriptor';
 import { loadDemoSuite } from '../support/load-demo-suite';
 import { referenceTarget } from '../support/reference-target';
+
+const cache = seededReferenceCache();
 
 const NASTY = 'a<b>&"c\'\u0001\u001b[31m';
 
@@ -32,7 +34,7 @@ describe('output formats', () => {
         [loadDemoSuite('exp-principal-sz'), loadDemoSuite('log-principal-sz'), loadDemoSuite('sqrt-principal-sz')],
         [nasty],
       ),
-      { cache: new ReferenceCache(null) },
+      { cache },
     );
   });
 

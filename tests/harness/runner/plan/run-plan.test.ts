@@ -1,12 +1,10 @@
-import { rmSync } from 'node:fs';
 import path from 'node:path';
 import { discoverTargets } from '../../../../harness/adapters/discover-targets';
 import { stdioTarget, type StdioTarget } from '../../../../harness/adapters/stdio-target';
 import { buildPlan } from '../../../../harness/runner/plan/build-plan';
-import { ReferenceCache } from '../../../../harness/runner/reference-cache/reference-cache';
 import { runPlan, type RunEvent } from '../../../../harness/runner/plan/run-plan';
 import type { TargetDescriptor } from '../../../../harness/adapters/target-descriptor';
-import { seededReferenceCacheDir } from '../../../setup/seeded-reference-cache-dir';
+import { seededReferenceCache } from '../../../setup/seeded-reference-cache';
 import { loadDemoSuite } from '../support/load-demo-suite';
 import { referenceTarget } from '../support/reference-target';
 
@@ -43,9 +41,8 @@ describe('runPlan', () => {
   // not the reference engine, so under `npm test` it starts from the run's seeded values. The
   // workers once had no folder (`cacheDir: null`) and each computed the demo suites' references
   // anew: the worker test took 14.6 s and the property test 5.4 s of the file's 27 s.
-  const cacheDir = seededReferenceCacheDir();
-  const cache = new ReferenceCache(cacheDir);
-  afterAll(() => rmSync(cacheDir, { recursive: true, force: true }));
+  const cache = seededReferenceCache();
+  const cacheDir = cache.dir;
 
   it('splits suites × targets into slices, reports progress, and joins the slices into one result per pair', async () => {
     const suites = [loadDemoSuite('sqrt-principal-sz'), loadDemoSuite('log-principal-ccw')];
