@@ -13,12 +13,6 @@ const DIR = path.join(__dirname, '..', '..', '..', 'test-results');
 const MAX_EXTRA_HEIGHT = 5000;
 
 /**
- * Saves the current screen at the phone and the wide size: test-results/<name>-<w>x<h>.png.
- * The app scrolls inside its own frame (a ScrollView), so a full-page shot alone would show
- * only the first screenful: the window is made taller by what the frame hides, the whole
- * screen is taken, and the window goes back to its size.
- */
-/**
  * Resizes the window and waits two frames: crossing the wide breakpoint swaps the app's frame,
  * which mounts the screen again, and an element found before that swap is detached under the
  * caller (seen once in four runs: "Element is not attached to the DOM" on the suite preview).
@@ -28,6 +22,15 @@ async function resize(page: Page, size: { width: number; height: number }): Prom
   await page.evaluate(() => new Promise((done) => requestAnimationFrame(() => requestAnimationFrame(done))));
 }
 
+/**
+ * Saves the current screen at the phone and the wide size: test-results/<name>-<w>x<h>.jpg.
+ * JPEG at quality 85 rather than PNG: Chromium's PNG encoder spent ~12 s of CPU on the run's 78
+ * pictures (144 megapixels, the tall ones up to 1440 × 5900), measured as the whole e2e run's CPU
+ * with PNG, JPEG and no pictures; the pictures are for people to look at, and text stays legible.
+ * The app scrolls inside its own frame (a ScrollView), so a full-page shot alone would show
+ * only the first screenful: the window is made taller by what the frame hides, the whole
+ * screen is taken, and the window goes back to its size.
+ */
 export async function saveScreenshots(page: Page, name: string, ready: () => Promise<unknown>): Promise<void> {
   mkdirSync(DIR, { recursive: true });
   const original = page.viewportSize();
@@ -46,7 +49,12 @@ export async function saveScreenshots(page: Page, name: string, ready: () => Pro
       await resize(page, { width: size.width, height: size.height + Math.min(hidden, MAX_EXTRA_HEIGHT) });
       await ready();
     }
-    await page.screenshot({ path: path.join(DIR, `${name}-${size.width}x${size.height}.png`), fullPage: true });
+    await page.screenshot({
+      path: path.join(DIR, `${name}-${size.width}x${size.height}.jpg`),
+      fullPage: true,
+      type: 'jpeg',
+      quality: 85,
+    });
   }
   if (original) await page.setViewportSize(original);
 }
