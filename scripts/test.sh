@@ -25,7 +25,10 @@ E2E_SMTP_PORT="${SHEETKEEPER_E2E_SMTP_PORT:-$(free_port)}"
 # code; the node tests that run demo suites end to end start from a copy of it
 # (tests/setup/seeded-reference-cache-dir.ts) instead of computing the same values again.
 REFERENCE_CACHE="$OUT/reference-cache"
-e2e_env=(env SHEETKEEPER_DB="$E2E_DB" SHEETKEEPER_PORT="$E2E_PORT" SHEETKEEPER_SMTP_PORT="$E2E_SMTP_PORT"
+# NODE_ENV=test gives the e2e seed's demo users and the e2e server's decoy hashes bcrypt's minimum
+# cost, as under jest (server/auth/passwords.ts): the journeys sign in ~35 times, and at cost 11
+# bcrypt was 6 s of the e2e server's 21 s of main-thread CPU.
+e2e_env=(env NODE_ENV=test SHEETKEEPER_DB="$E2E_DB" SHEETKEEPER_PORT="$E2E_PORT" SHEETKEEPER_SMTP_PORT="$E2E_SMTP_PORT"
   SHEETKEEPER_REFERENCE_CACHE="$REFERENCE_CACHE")
 # A fresh e2e database, migrated and seeded with the e2e ports (so the links in the demo
 # regression mail point at the e2e server).

@@ -7,11 +7,12 @@ import bcrypt from 'bcryptjs';
 export const PRODUCTION_BCRYPT_COST = 11;
 
 /**
- * The cost new hashes get. Under jest (NODE_ENV=test, which jest sets and nothing else here does)
- * it is bcrypt's minimum, 4, as is common practice for test suites: the node tests sign in and
- * fail sign-ins thousands of times, and at cost 11 bcrypt was 7.7 s of the fuzz's ~40 s of CPU.
- * A hash carries its own cost, so verifying works the same at either; the end-to-end server and
- * every real process use cost 11.
+ * The cost new hashes get. Under test (NODE_ENV=test: jest sets it, and scripts/test.sh sets it
+ * for the end-to-end seed and server; nothing else here does) it is bcrypt's minimum, 4, as is
+ * common practice for test suites: the node tests sign in and fail sign-ins thousands of times
+ * (at cost 11 bcrypt was 7.7 s of the fuzz's ~40 s of CPU), and the end-to-end journeys ~35 times
+ * (6 s of the e2e server's 21 s). A hash carries its own cost, so verifying works the same at
+ * either; `npm start` and every real process use cost 11.
  */
 export const BCRYPT_COST = process.env.NODE_ENV === 'test' ? 4 : PRODUCTION_BCRYPT_COST;
 
