@@ -6,7 +6,7 @@ import { FixedTables } from '../real/fixed-tables';
 import { realAtan2 } from '../real/real-atan2';
 import { realLog } from '../real/real-log';
 import type { ContinuationPath, ExactPoint, PathPiece, Point } from './continuation-path';
-import type { CutLayout, ExactNu } from './cut-layout';
+import type { Crossing, CutLayout, ExactNu } from './cut-layout';
 import type { FactoredFunction, Singularity } from './factored-function';
 import { LayoutError } from './layout-error';
 
@@ -127,6 +127,7 @@ export function continueBranch(input: ContinueInput): ContinueResult {
   }
 
   const crossings = layout ? layout.crossings([...leadIn, ...pieces]) : [];
+  const scale = path.scale();
   const f0 = initialValue(input, first);
   const values = ats.map((t) => {
     const i = grid.findIndex((n) => n.t !== null && n.t.compare(t) === 0);
@@ -134,7 +135,7 @@ export function continueBranch(input: ContinueInput): ContinueResult {
     const delta = deltas[i] as BigFloat;
     let f = f0.mul(exp.evaluate(nuTimes(input.nu, logModulusRatio(node, first), delta), BITS).toComplex());
     const td = toDouble(t);
-    for (const c of crossings) if (c.t < td) f = f.mul(jump(c.sigma, c.flow)).truncate(BITS);
+    for (const c of crossings) if (crossedBefore(c, td, node.z, scale)) f = f.mul(jump(c.sigma, c.flow)).truncate(BITS);
     return { t, z: node.z, f: f.truncate(BITS) };
   });
   let monodromy: BigComplex | null = null;
@@ -144,6 +145,27 @@ export function continueBranch(input: ContinueInput): ContinueResult {
     monodromy = exp.evaluate(nuTimes(input.nu, BigFloat.ZERO, loop), BITS).toComplex();
   }
   return { values, monodromy };
+}
+
+/** Crossings this near a value's t (in t) are decided from the exact point, not from the doubles. */
+const CROSSING_WINDOW = 1e-9;
+
+/**
+ * Whether the path has crossed the cut edge of `c` by its point z at t. The crossing's t comes from
+ * the path in doubles, where an arc's angles are rounded: from 1/8 turn over 3/8 turn, 2π/8 + 2π·3/8
+ * lands past π, so an arc ending exactly on the cut at −1 seemed to cross it just before its end. Near
+ * t, the side of the line the point z (computed from the exact angle at working precision) lies on
+ * decides instead: on the line (within 2^−160 of the path's size, the working precision's noise) it is
+ * on the cut and keeps the value from before it; on the σ side it has crossed.
+ */
+function crossedBefore(c: Crossing, td: number, z: BigComplex, scale: number): boolean {
+  if (Math.abs(c.t - td) > CROSSING_WINDOW) return c.t < td;
+  const [fx, fy] = c.line.from.map((v) => BigFloat.fromDouble(v)) as [BigFloat, BigFloat];
+  const [dx, dy] = c.line.dir.map((v) => BigFloat.fromDouble(v)) as [BigFloat, BigFloat];
+  const side = dx.mul(z.im.sub(fy)).sub(dy.mul(z.re.sub(fx)));
+  const noise = Math.log2(Math.hypot(...c.line.dir) * Math.max(1, scale)) - 160;
+  if (side.isZero() || side.exponent() < noise) return false;
+  return side.signbit() === c.sigma < 0;
 }
 
 function describe(s: Singularity): string {

@@ -20,6 +20,8 @@ export interface Crossing {
   t: number;
   sigma: 1 | -1;
   flow: ExactNu;
+  /** The edge's line, oriented as σ is measured: after the crossing the path is on its σ side. */
+  line: { from: Point; dir: Point };
 }
 
 interface Edge {
@@ -164,7 +166,7 @@ export class CutLayout {
       for (const piece of pieces) {
         for (const { t, tangent } of intersections(piece, e)) {
           const c = cross(d, tangent);
-          if (c !== 0) out.push({ t, sigma: c > 0 ? 1 : -1, flow });
+          if (c !== 0) out.push({ t, sigma: c > 0 ? 1 : -1, flow, line: { from: e.from, dir: d } });
         }
       }
     }

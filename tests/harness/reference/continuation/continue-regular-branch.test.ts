@@ -1,6 +1,7 @@
 import { parseSubject } from '../../../../harness/expressions/parse-subject';
 import type { ContinuationRequest } from '../../../../harness/reference/continuation/continuation-request';
 import { continueRegularBranch } from '../../../../harness/reference/continuation/continue-regular-branch';
+import { parseExact } from '../../../../harness/reference/continuation/parse-exact';
 import type { ExactAngle } from '../../../../harness/reference/continuation/exact-angle';
 import { FactoredFunction } from '../../../../harness/reference/continuation/factored-function';
 import { Rational } from '../../../../harness/reference/numbers/rational';
@@ -59,6 +60,66 @@ describe('continueRegularBranch (the typed continuation API)', () => {
       [Rational.ONE, Rational.ZERO],
       [r(to), Rational.ZERO],
     ],
+  });
+
+  /**
+   * √z (k = 0 at z0 = 1) on the plane cut along (−∞, 0], along the unit circle from `start` turns,
+   * `turns` turns in the given direction, at its end.
+   */
+  function atArcEnd(start: Rational, turns: Rational, ccw: boolean) {
+    const request: ContinuationRequest = {
+      ...sqrtRequest(
+        {
+          kind: 'circle',
+          center: [Rational.ZERO, Rational.ZERO],
+          radius: Rational.ONE,
+          startAngle: { kind: 'turns', turns: start },
+          turns,
+          ccw,
+        },
+        [Rational.ONE],
+      ),
+      cuts: [
+        {
+          points: [
+            [Rational.ZERO, Rational.ZERO],
+            [r(-1n), Rational.ZERO],
+          ],
+          toInfinity: true,
+        },
+      ],
+    };
+    const result = continueRegularBranch(request);
+    if (result.kind !== 'continued') throw new Error(result.reason);
+    return result.values[0]!;
+  }
+
+  // An arc whose exact end is −1, on the cut: the point keeps the value of the side it arrives from.
+  // ISO/IEC 9899:2011 G.6.4.2: csqrt(−1 + i0) = +i (the upper side), csqrt(−1 − i0) = −i (the lower).
+  // In doubles, 2π·(1/8) + 2π·(3/8) lands past π, which used to count as a crossing just before t = 1.
+  it.each([
+    ['1/8', '3/8', true, '1'],
+    ['1/6', '1/3', true, '1'],
+    ['1/4', '1/4', true, '1'],
+    ['0', '1/2', true, '1'],
+    ['-1/8', '3/8', false, '-1'],
+    ['-1/6', '1/3', false, '-1'],
+    ['0', '1/2', false, '-1'],
+  ])(
+    'ends an arc from %s turn over %s turn (counter-clockwise: %s) exactly on the cut at −1, on the side it arrives from (√ = %si)',
+    (start, turns, ccw, im) => {
+      const { z, f } = atArcEnd(parseExact(start, 'start'), parseExact(turns, 'turns'), ccw);
+      expect([z.re.toDecimal(40), z.im.toDecimal(40)]).toEqual(['-1', '0']);
+      expect([f.re.toDecimal(40), f.im.toDecimal(40)]).toEqual(['0', im]);
+    },
+  );
+
+  it('still counts a crossing of the cut that lies strictly inside the arc', () => {
+    // From 1/8 turn over 1/2 turn counter-clockwise: through −1 at t = 3/4, ending at e^{5πi/4}, below
+    // the cut, where the branch of the cut plane is the principal root e^{−3πi/8} (DLMF 4.2.7, 4.2(iv)).
+    const { f } = atArcEnd(r(1n, 8n), r(1n, 2n), true);
+    expect(f.re.toDecimal(30)).toBe('0.38268343236508977172845998403'); // mpmath, 60 digits: cos(3π/8)
+    expect(f.im.toDecimal(30)).toBe('-0.923879532511286756128183189397'); // mpmath, 60 digits: −sin(3π/8)
   });
 
   it('refuses a t outside [0, 1], naming it, instead of throwing', () => {
