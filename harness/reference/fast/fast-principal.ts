@@ -1,4 +1,4 @@
-import { type DD, dd } from './double-double';
+import { dd } from './double-double';
 import { fastReal } from './fast-real';
 
 /**
@@ -23,8 +23,6 @@ const RELATIVE_BOUND = 2 ** -70;
 const RANGE_LOW = 2 ** -400;
 const RANGE_HIGH = 2 ** 400;
 
-type Pair = [DD, DD];
-
 const scratch = new Float64Array(1);
 const words = new Uint32Array(scratch.buffer);
 const HIGH = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1 ? 1 : 0;
@@ -45,15 +43,14 @@ function halfGaps(x: number): void {
   halfDown = powerOfTwo ? halfUp / 2 : halfUp;
 }
 
-/** hi when every value within 2^−70 relative of hi + lo rounds to hi; else null. */
-function settle(v: DD): number | null {
-  const [hi, lo] = v;
-  if (!Number.isFinite(hi) || hi === 0) return null;
+/** hi when every value within 2^−70 relative of hi + lo rounds to hi; else NaN. */
+function settle(hi: number, lo: number): number {
+  if (!Number.isFinite(hi) || hi === 0) return NaN;
   const e = Math.abs(hi) * RELATIVE_BOUND;
   halfGaps(hi);
   const towardUp = hi > 0 ? lo + e : -(lo - e);
   const towardDown = hi > 0 ? -(lo - e) : lo + e;
-  return towardUp < halfUp && towardDown < halfDown ? hi : null;
+  return towardUp < halfUp && towardDown < halfDown ? hi : NaN;
 }
 
 function inRange(v: number): boolean {
@@ -61,80 +58,178 @@ function inRange(v: number): boolean {
   return a >= RANGE_LOW && a <= RANGE_HIGH;
 }
 
-const ONE: DD = [1, 0];
+/** The value being built: [re hi, re lo, im hi, im lo]; a NaN hi means declined. */
+const result = new Float64Array(4);
+/** The two square roots of Kahan's formulas, laid out as `result`. */
+const s1 = new Float64Array(4);
+const s2 = new Float64Array(4);
+const sc = new Float64Array(4);
 
-/** Principal √ of a + bi (a, b double-double, b ≠ 0). */
-function csqrt(a: DD, b: DD): Pair {
-  const modulus = dd.sqrt(dd.add(dd.mul(a, a), dd.mul(b, b)));
-  const t = dd.sqrt(dd.scale(dd.add(dd.abs(a), modulus), 0.5));
-  const other = dd.div(dd.abs(b), dd.scale(t, 2));
-  if (a[0] >= 0) return [t, b[0] < 0 ? dd.neg(other) : other];
-  return [other, b[0] < 0 ? dd.neg(t) : t];
+function put(out: Float64Array, reH: number, reL: number, imH: number, imL: number): void {
+  out[0] = reH;
+  out[1] = reL;
+  out[2] = imH;
+  out[3] = imL;
 }
 
-function asin(x: number, y: number): Pair | null {
-  const s1 = csqrt(dd.twoSum(1, -x), [-y, 0]);
-  const s2 = csqrt(dd.twoSum(1, x), [y, 0]);
-  const r = dd.sub(dd.mul(s1[0], s2[0]), dd.mul(s1[1], s2[1]));
-  const v = dd.sub(dd.mul(s1[0], s2[1]), dd.mul(s1[1], s2[0]));
-  const im = fastReal.asinh(v);
-  return im ? [fastReal.atan2([x, 0], r), im] : null;
+/** Principal √ of (ah + al) + bi (b a double ≠ 0) into out. */
+function csqrt(ah: number, al: number, b: number, out: Float64Array): void {
+  const a2h = dd.mul(ah, al, ah, al);
+  const a2l = dd.lo;
+  const b2h = dd.twoProd(b, b);
+  const nh = dd.add(a2h, a2l, b2h, dd.lo);
+  const mh = dd.sqrt(nh, dd.lo);
+  const ml = dd.lo;
+  const sh = ah < 0 ? dd.add(-ah, -al, mh, ml) : dd.add(ah, al, mh, ml);
+  const th = dd.sqrt(sh / 2, dd.lo / 2);
+  const tl = dd.lo;
+  const oh = dd.div(b < 0 ? -b : b, 0, 2 * th, 2 * tl);
+  const ol = dd.lo;
+  if (ah >= 0) put(out, th, tl, b < 0 ? -oh : oh, b < 0 ? -ol : ol);
+  else put(out, oh, ol, b < 0 ? -th : th, b < 0 ? -tl : tl);
 }
 
-function acos(x: number, y: number): Pair | null {
-  const s1 = csqrt(dd.twoSum(1, -x), [-y, 0]);
-  const s2 = csqrt(dd.twoSum(1, x), [y, 0]);
-  const im = fastReal.asinh(dd.sub(dd.mul(s2[0], s1[1]), dd.mul(s2[1], s1[0])));
-  return im ? [dd.scale(fastReal.atan2(s1[0], s2[0]), 2), im] : null;
+/** a·b + sign·c·d for double-doubles given as (hi, lo) pairs. */
+function mulAdd(
+  ah: number,
+  al: number,
+  bh: number,
+  bl: number,
+  ch: number,
+  cl: number,
+  dh: number,
+  dl: number,
+  sign: number,
+): number {
+  const xh = dd.mul(ah, al, bh, bl);
+  const xl = dd.lo;
+  const yh = dd.mul(ch, cl, dh, dl);
+  return dd.add(xh, xl, sign * yh, sign * dd.lo);
 }
 
-function acosh(x: number, y: number): Pair | null {
-  const s1 = csqrt(dd.twoSum(x, -1), [y, 0]);
-  const s2 = csqrt(dd.twoSum(x, 1), [y, 0]);
-  const re = fastReal.asinh(dd.add(dd.mul(s1[0], s2[0]), dd.mul(s1[1], s2[1])));
-  return re ? [re, dd.scale(fastReal.atan2(s1[1], s2[0]), 2)] : null;
+/** s1 = √(1 − z) and s2 = √(1 + z) (Kahan's), for asin and acos. */
+function kahanRoots(x: number, y: number): void {
+  const oh = dd.twoSum(1, -x);
+  csqrt(oh, dd.lo, -y, s1);
+  const ph = dd.twoSum(1, x);
+  csqrt(ph, dd.lo, y, s2);
 }
 
-function atanh(x: number, y: number): Pair | null {
+/** asin z = atan2(x, Re(s1·s2)) + i·asinh(Im(conj(s1)·s2)). */
+function asin(x: number, y: number): void {
+  kahanRoots(x, y);
+  const rh = mulAdd(s1[0]!, s1[1]!, s2[0]!, s2[1]!, s1[2]!, s1[3]!, s2[2]!, s2[3]!, -1);
+  const rl = dd.lo;
+  const vh = mulAdd(s1[0]!, s1[1]!, s2[2]!, s2[3]!, s1[2]!, s1[3]!, s2[0]!, s2[1]!, -1);
+  const imH = fastReal.asinh(vh, dd.lo);
+  const imL = dd.lo;
+  const reH = fastReal.atan2(x, 0, rh, rl);
+  put(result, reH, dd.lo, imH, imL);
+}
+
+/** acos z = 2·atan2(Re s1, Re s2) + i·asinh(Im(conj(s2)·s1)). */
+function acos(x: number, y: number): void {
+  kahanRoots(x, y);
+  const vh = mulAdd(s2[0]!, s2[1]!, s1[2]!, s1[3]!, s2[2]!, s2[3]!, s1[0]!, s1[1]!, -1);
+  const imH = fastReal.asinh(vh, dd.lo);
+  const imL = dd.lo;
+  const reH = fastReal.atan2(s1[0]!, s1[1]!, s2[0]!, s2[1]!);
+  put(result, 2 * reH, 2 * dd.lo, imH, imL);
+}
+
+/** acosh z = asinh(Re(conj(s1)·s2)) + 2i·atan2(Im s1, Re s2), s1 = √(z − 1), s2 = √(z + 1). */
+function acosh(x: number, y: number): void {
+  const mh = dd.twoSum(x, -1);
+  csqrt(mh, dd.lo, y, s1);
+  const ph = dd.twoSum(x, 1);
+  csqrt(ph, dd.lo, y, s2);
+  const uh = mulAdd(s1[0]!, s1[1]!, s2[0]!, s2[1]!, s1[2]!, s1[3]!, s2[2]!, s2[3]!, 1);
+  const reH = fastReal.asinh(uh, dd.lo);
+  const reL = dd.lo;
+  const imH = fastReal.atan2(s1[2]!, s1[3]!, s2[0]!, s2[1]!);
+  put(result, reH, reL, 2 * imH, 2 * dd.lo);
+}
+
+/**
+ * atanh z = ¼ log1p(4x/((1 − x)² + y²)) + ½i·atan2(2y, 1 − x² − y²), for x ≥ 0 (atanh is odd).
+ * `sign` −1 negates both parts, for x < 0 and for atan.
+ */
+function atanh(x: number, y: number, sign: number): void {
   if (x < 0) {
-    const r = atanh(-x, -y);
-    return r ? [dd.neg(r[0]), dd.neg(r[1])] : null;
+    atanh(-x, -y, -sign);
+    return;
   }
-  const oneMinus = dd.twoSum(1, -x);
-  const y2 = dd.twoProd(y, y);
-  const den = dd.add(dd.mul(oneMinus, oneMinus), y2);
-  const x2 = dd.twoProd(x, x);
+  const omh = dd.twoSum(1, -x);
+  const oml = dd.lo;
+  const y2h = dd.twoProd(y, y);
+  const y2l = dd.lo;
+  const o2h = dd.mul(omh, oml, omh, oml);
+  const denH = dd.add(o2h, dd.lo, y2h, y2l);
+  const denL = dd.lo;
+  const x2h = dd.twoProd(x, x);
+  const x2l = dd.lo;
   // 1 − x² − y² from exact squares: its error is 2^−106 of the larger term, so decline when it cancels to below 2^−30 of that.
-  const across = dd.sub(dd.sub(ONE, x2), y2);
-  if (Math.abs(across[0]) < 2 ** -30 * Math.max(1, x2[0] + y2[0])) return null;
-  const re = fastReal.log1p(dd.div(dd.scale([x, 0], 4), den));
-  return re ? [dd.scale(re, 0.25), dd.scale(fastReal.atan2([2 * y, 0], across), 0.5)] : null;
+  const ah = dd.add(1, 0, -x2h, -x2l);
+  const acrossH = dd.add(ah, dd.lo, -y2h, -y2l);
+  const acrossL = dd.lo;
+  if (Math.abs(acrossH) < 2 ** -30 * Math.max(1, x2h + y2h)) {
+    result[0] = NaN;
+    return;
+  }
+  const qh = dd.div(4 * x, 0, denH, denL);
+  const reH = fastReal.log1p(qh, dd.lo);
+  const reL = dd.lo;
+  const imH = fastReal.atan2(2 * y, 0, acrossH, acrossL);
+  const k = sign / 2;
+  put(result, (k / 2) * reH, (k / 2) * reL, k * imH, k * dd.lo);
 }
 
-const FUNCTIONS: Record<string, (x: number, y: number) => Pair | null> = {
-  sqrt: (x, y) => csqrt([x, 0], [y, 0]),
-  log(x, y) {
-    const s = dd.add(dd.twoProd(x, x), dd.twoProd(y, y));
-    if (Math.abs(s[0] - 1) < 2 ** -30) return null;
-    const re = fastReal.log(s);
-    return re ? [dd.scale(re, 0.5), fastReal.atan2([y, 0], [x, 0])] : null;
-  },
-  exp(x, y) {
-    const m = fastReal.exp([x, 0]);
-    const sc = fastReal.sinCos([y, 0]);
-    return m && sc ? [dd.mul(m, sc[1]), dd.mul(m, sc[0])] : null;
-  },
+function log(x: number, y: number): void {
+  const x2h = dd.twoProd(x, x);
+  const x2l = dd.lo;
+  const y2h = dd.twoProd(y, y);
+  const nh = dd.add(x2h, x2l, y2h, dd.lo);
+  if (Math.abs(nh - 1) < 2 ** -30) {
+    result[0] = NaN;
+    return;
+  }
+  const reH = fastReal.log(nh, dd.lo);
+  const reL = dd.lo;
+  const imH = fastReal.atan2(y, 0, x, 0);
+  put(result, reH / 2, reL / 2, imH, dd.lo);
+}
+
+function exp(x: number, y: number): void {
+  const mh = fastReal.exp(x);
+  const ml = dd.lo;
+  if (!fastReal.sinCos(y, sc)) {
+    result[0] = NaN;
+    return;
+  }
+  const reH = dd.mul(mh, ml, sc[2]!, sc[3]!);
+  const reL = dd.lo;
+  const imH = dd.mul(mh, ml, sc[0]!, sc[1]!);
+  put(result, reH, reL, imH, dd.lo);
+}
+
+/** Each function leaves its value in `result`, or NaN in result[0] when it declines. */
+const FUNCTIONS: Record<string, (x: number, y: number) => void> = {
+  sqrt: (x, y) => csqrt(x, 0, y, result),
+  log,
+  exp,
   asin,
   acos,
   acosh,
-  atanh,
+  atanh: (x, y) => atanh(x, y, 1),
+  // asinh z = i·asin(−iz): from asin(y − ix) = a + bi, asinh z = −b + ai.
   asinh(x, y) {
-    const r = asin(y, -x);
-    return r ? [dd.neg(r[1]), r[0]] : null;
+    asin(y, -x);
+    put(result, -result[2]!, -result[3]!, result[0]!, result[1]!);
   },
+  // atan z = −i·atanh(iz): from atanh(−y + ix) = a + bi, atan z = b − ai.
   atan(x, y) {
-    const r = atanh(-y, x);
-    return r ? [r[1], dd.neg(r[0])] : null;
+    atanh(-y, x, 1);
+    put(result, result[2]!, result[3]!, -result[0]!, -result[1]!);
   },
 };
 
@@ -142,9 +237,8 @@ const FUNCTIONS: Record<string, (x: number, y: number) => Pair | null> = {
 export function fastPrincipal(fn: string, x: number, y: number): [number, number] | null {
   const f = FUNCTIONS[fn];
   if (!f || !inRange(x) || !inRange(y)) return null;
-  const r = f(x, y);
-  if (!r) return null;
-  const re = settle(r[0]);
-  const im = settle(r[1]);
-  return re === null || im === null ? null : [re, im];
+  f(x, y);
+  const re = settle(result[0]!, result[1]!);
+  const im = settle(result[2]!, result[3]!);
+  return re !== re || im !== im ? null : [re, im];
 }

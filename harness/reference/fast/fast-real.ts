@@ -1,33 +1,50 @@
 import { BigFloat } from '../numbers/big-float';
 import { FixedTables } from '../real/fixed-tables';
-import { type DD, dd } from './double-double';
+import { dd } from './double-double';
 
 /**
  * Real kernels in double-double for the fast tier, mirroring the bigint kernels' reductions
  * (tables at j/64, series in |d| ≤ 1/128) with the same tables, converted once from the bigint
- * engine. Each returns a relative error below ~2^−96 for the inputs it accepts, or null where it
+ * engine. Each takes and returns double-doubles as `dd` does (the result's hi returned, its lo in
+ * `dd.lo`), with a relative error below ~2^−96 for the inputs it accepts, or returns NaN where it
  * cannot promise that (the caller then falls back to the bigint engine):
  * - log: x within 2^−30 of 1 only through log1p of an accurate x − 1;
  * - exp: |x| ≤ 708 (beyond, the result is not a normal double anyway);
  * - sinCos: |x| ≤ 2^20 and x not within 2^−30 of a multiple of π/2.
+ *
+ * Series: a term below 2^−48 of the series' first term is summed in plain doubles, whose
+ * rounding then costs below 2^−100 of the sum; only the leading terms take double-double steps.
+ * The term counts are the fewest that reach 2^−100 at |d| = 1/128 (log and atan: 8 terms of
+ * t² ≤ 2^−14; exp: 12; sin and cos: 7), against 9–13 before. With the scalar operations these
+ * took a warm call on the bench's mix from 1.20 µs to 0.5 µs (see fast-principal.ts).
  */
 const F = 192;
 const T = FixedTables.at(F);
-const toDD = (v: bigint): DD => {
-  const b = BigFloat.fromBigInt(v, -F);
-  const hi = b.toDouble();
-  return [hi, b.sub(BigFloat.fromDouble(hi)).toDouble()];
-};
-const LOG = T.logTable.map(toDD);
-const ATAN = T.atanTable.map(toDD);
-const SIN = T.sinTable.map(toDD);
-const COS = T.cosTable.map(toDD);
-const EXP = T.expTable.map(toDD);
-const INV_ODD = T.inverseOdd.slice(0, 12).map(toDD);
-const INV_FACT = T.inverseFactorial.slice(0, 20).map(toDD);
-const LN2 = toDD(FixedTables.ln2(F));
-const PI = toDD(FixedTables.pi(F));
-const HALF_PI: DD = [PI[0] / 2, PI[1] / 2];
+
+/** A table of double-doubles, interleaved: entry i is (t[2i], t[2i + 1]). */
+function table(values: bigint[]): Float64Array {
+  const out = new Float64Array(2 * values.length);
+  values.forEach((v, i) => {
+    const b = BigFloat.fromBigInt(v, -F);
+    const hi = b.toDouble();
+    out[2 * i] = hi;
+    out[2 * i + 1] = b.sub(BigFloat.fromDouble(hi)).toDouble();
+  });
+  return out;
+}
+
+const LOG = table(T.logTable);
+const ATAN = table(T.atanTable);
+const SIN = table(T.sinTable);
+const COS = table(T.cosTable);
+const EXP = table(T.expTable);
+const INV_ODD = table(T.inverseOdd.slice(0, 12));
+const INV_FACT = table(T.inverseFactorial.slice(0, 20));
+const CONSTANTS = table([FixedTables.ln2(F), FixedTables.pi(F)]);
+const LN2_HI = CONSTANTS[0] as number;
+const LN2_LO = CONSTANTS[1] as number;
+const PI_HI = CONSTANTS[2] as number;
+const PI_LO = CONSTANTS[3] as number;
 const PIO2_BITS = FixedTables.pi(F + 64) >> 1n;
 const P1 = BigFloat.fromBigInt(PIO2_BITS, -(F + 64)).toDouble();
 const P2 = BigFloat.fromBigInt(PIO2_BITS, -(F + 64))
@@ -38,23 +55,32 @@ const P3 = BigFloat.fromBigInt(PIO2_BITS, -(F + 64))
   .sub(BigFloat.fromDouble(P2))
   .toDouble();
 const TWO_M30 = 2 ** -30;
+const SPLIT = 134217729;
 
 /**
- * Σ (±w)^i · c_i by Horner's rule, c from a table. Written out on scalars because it is the
- * hot loop of every kernel: allocating a pair per step cost ~40% of a complex asin here.
- * Each step is a double-double multiply (Dekker product) and a double-double add of like
- * magnitude, each within ~2^−104 relative.
+ * Σ_{i=0..n} c_i·(±w)^i by Horner's rule, c_i = table[offset + step·i]: the terms from `first`
+ * up in plain doubles, then `first` double-double steps, each a Dekker product and an accurate
+ * add written out on scalars (this is the hot loop of every kernel).
  */
-function horner(w: DD, table: DD[], n: number, step: number, offset: number, alternating: boolean): DD {
-  const xh = alternating ? -w[0] : w[0];
-  const xl = alternating ? -w[1] : w[1];
-  const last = table[offset + step * n] as DD;
-  let sh = last[0];
-  let sl = last[1];
+function series(
+  wh: number,
+  wl: number,
+  c: Float64Array,
+  n: number,
+  step: number,
+  offset: number,
+  alternating: boolean,
+  first: number,
+): number {
+  const xh = alternating ? -wh : wh;
+  const xl = alternating ? -wl : wl;
+  let sh = c[2 * (offset + step * n)] as number;
+  for (let i = n - 1; i >= first; i--) sh = (c[2 * (offset + step * i)] as number) + xh * sh;
+  let sl = 0;
   let t = SPLIT * xh;
   const xa = t - (t - xh);
   const xb = xh - xa;
-  for (let i = n - 1; i >= 0; i--) {
+  for (let i = first - 1; i >= 0; i--) {
     const p = xh * sh;
     t = SPLIT * sh;
     const sa = t - (t - sh);
@@ -62,125 +88,219 @@ function horner(w: DD, table: DD[], n: number, step: number, offset: number, alt
     const e = xa * sa - p + xa * sb + xb * sa + xb * sb + (xh * sl + xl * sh);
     const mh = p + e;
     const ml = e - (mh - p);
-    const c = table[offset + step * i] as DD;
-    const s1 = c[0] + mh;
-    const bb = s1 - c[0];
-    const s2 = c[0] - (s1 - bb) + (mh - bb) + (c[1] + ml);
+    const k = 2 * (offset + step * i);
+    const ch = c[k] as number;
+    const s1 = ch + mh;
+    const bb = s1 - ch;
+    const s2 = ch - (s1 - bb) + (mh - bb) + ((c[k + 1] as number) + ml);
     sh = s1 + s2;
     sl = s2 - (sh - s1);
   }
-  return [sh, sl];
+  dd.lo = sl;
+  return sh;
 }
 
-const SPLIT = 134217729;
-
-/** ln(1 + u) relative to u for |u| ≤ 1/64: 2t·Σ t^{2i}/(2i+1), t = u/(2 + u), t² ≤ 2^−14 (8 terms reach 2^−112). */
-function log1pSmall(u: DD): DD {
-  const t = dd.div(u, dd.add([2, 0], u));
-  return dd.scale(dd.mul(t, horner(dd.mul(t, t), INV_ODD, 8, 1, 0, false)), 2);
+/** ln(1 + u) for |u| ≤ 1/128: 2t·Σ t^{2i}/(2i+1), t = u/(2 + u), t² ≤ 2^−16 (7 terms reach 2^−115). */
+function log1pSmall(uh: number, ul: number): number {
+  const dh = dd.add(2, 0, uh, ul);
+  const th = dd.div(uh, ul, dh, dd.lo);
+  const tl = dd.lo;
+  const t2h = dd.mul(th, tl, th, tl);
+  const sh = series(t2h, dd.lo, INV_ODD, 6, 1, 0, false, 3);
+  const h = dd.mul(th, tl, sh, dd.lo);
+  dd.lo *= 2;
+  return 2 * h;
 }
 
-function log(a: DD): DD | null {
-  if (!(a[0] > 0) || !Number.isFinite(a[0])) return null;
-  let e = Math.floor(Math.log2(a[0]));
-  let f = dd.scale(a, 2 ** -e);
-  if (f[0] >= 2) {
-    f = dd.scale(f, 0.5);
+/** 2^k for −1022 ≤ k ≤ 1023, indexed k + 1022: `2 ** k` (Math.pow) cost ~15% of a complex log here. */
+const POW2 = Float64Array.from({ length: 2046 }, (_, i) => 2 ** (i - 1022));
+const scratch = new Float64Array(1);
+const words = new Uint32Array(scratch.buffer);
+const HIGH = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1 ? 1 : 0;
+
+function log(ah: number, al: number): number {
+  if (!(ah >= 2 ** -1000) || !(ah <= 2 ** 1000)) return NaN;
+  // The exponent field of a normal double: 2^e ≤ ah < 2^(e+1), read without Math.log2.
+  scratch[0] = ah;
+  let e = (((words[HIGH] as number) >>> 20) & 0x7ff) - 1023;
+  let s = POW2[1022 - e] as number;
+  let fh = ah * s;
+  if (fh > Math.SQRT2) {
     e += 1;
-  } else if (f[0] < 1) {
-    f = dd.scale(f, 2);
-    e -= 1;
+    s /= 2;
+    fh /= 2;
   }
-  if (f[0] > Math.SQRT2) {
-    f = dd.scale(f, 0.5);
-    e += 1;
+  const fl = al * s;
+  const j = Math.round((fh - 1) * 64);
+  if (e === 0 && j === 0) {
+    const uh = dd.add(fh, fl, -1, 0);
+    return log1pSmall(uh, dd.lo);
   }
-  const j = Math.round((f[0] - 1) * 64);
-  if (e === 0 && j === 0) return log1pSmall(dd.sub(f, [1, 0]));
   const c = 1 + j / 64;
-  const u = dd.div(dd.sub(f, [c, 0]), [c, 0]);
-  let sum = dd.add(LOG[j + 32] as DD, log1pSmall(u));
-  if (e !== 0) sum = dd.add(dd.mulDouble(LN2, e), sum);
-  return sum;
+  const dh = dd.add(fh, fl, -c, 0);
+  const uh = dd.div(dh, dd.lo, c, 0);
+  const lh = log1pSmall(uh, dd.lo);
+  let h = dd.add(LOG[2 * (j + 32)] as number, LOG[2 * (j + 32) + 1] as number, lh, dd.lo);
+  if (e !== 0) {
+    const l = dd.lo;
+    const kh = dd.mulDouble(LN2_HI, LN2_LO, e);
+    h = dd.add(kh, dd.lo, h, l);
+  }
+  return h;
 }
 
 /** ln(1 + w) for w ≥ 0 given accurately (relative). */
-function log1p(w: DD): DD | null {
-  if (w[0] < 1 / 128) return log1pSmall(w);
-  return log(dd.add([1, 0], w));
+function log1p(wh: number, wl: number): number {
+  if (wh < 1 / 128) return log1pSmall(wh, wl);
+  const h = dd.add(1, 0, wh, wl);
+  return log(h, dd.lo);
 }
 
-function exp(a: DD): DD | null {
-  if (!(Math.abs(a[0]) <= 708)) return null;
-  const k = Math.round(a[0] / LN2[0]);
-  const r = dd.sub(a, dd.mulDouble(LN2, k));
-  const j = Math.max(-32, Math.min(32, Math.round(r[0] * 64)));
-  const d = dd.sub(r, [j / 64, 0]);
-  const s = horner(d, INV_FACT, 12, 1, 0, false);
-  return dd.scale(dd.mul(EXP[j + 32] as DD, s), 2 ** k);
+/** e^x for a double x. */
+function exp(x: number): number {
+  if (!(Math.abs(x) <= 708)) return NaN;
+  const k = Math.round(x / LN2_HI);
+  const kh = dd.mulDouble(LN2_HI, LN2_LO, k);
+  const rh = dd.add(x, 0, -kh, -dd.lo);
+  const rl = dd.lo;
+  const j = Math.max(-32, Math.min(32, Math.round(rh * 64)));
+  const dh = dd.add(rh, rl, -j / 64, 0);
+  const sh = series(dh, dd.lo, INV_FACT, 11, 1, 0, false, 6);
+  const h = dd.mul(EXP[2 * (j + 32)] as number, EXP[2 * (j + 32) + 1] as number, sh, dd.lo);
+  const scale = POW2[k + 1022] as number;
+  dd.lo *= scale;
+  return h * scale;
 }
 
-function sinCos(a: DD): [DD, DD] | null {
-  let r = a;
+/**
+ * sin x and cos x for a double x into out = [sin hi, sin lo, cos hi, cos lo]; false (out
+ * untouched) where the reduction could not promise relative accuracy.
+ */
+function sinCos(x: number, out: Float64Array): boolean {
+  let rh = x;
+  let rl = 0;
   let q = 0;
-  if (Math.abs(a[0]) > 0.78) {
-    if (!(Math.abs(a[0]) <= 2 ** 20)) return null;
-    const k = Math.round(a[0] / P1);
-    r = dd.sub(dd.sub(dd.sub(a, dd.twoProd(k, P1)), dd.twoProd(k, P2)), [k * P3, 0]);
-    if (Math.abs(r[0]) < TWO_M30) return null;
+  if (Math.abs(x) > 0.78) {
+    if (!(Math.abs(x) <= 2 ** 20)) return false;
+    const k = Math.round(x / P1);
+    let h = dd.twoProd(k, P1);
+    rh = dd.add(x, 0, -h, -dd.lo);
+    rl = dd.lo;
+    h = dd.twoProd(k, P2);
+    rh = dd.add(rh, rl, -h, -dd.lo);
+    rl = dd.lo;
+    rh = dd.add(rh, rl, -k * P3, 0);
+    rl = dd.lo;
+    if (Math.abs(rh) < TWO_M30) return false;
     q = ((k % 4) + 4) % 4;
   }
-  const j = Math.round(r[0] * 64);
-  const d = dd.sub(r, [j / 64, 0]);
-  const d2 = dd.mul(d, d);
-  const sd = dd.mul(d, horner(d2, INV_FACT, 7, 2, 1, true));
-  const cd = horner(d2, INV_FACT, 7, 2, 0, true);
-  let s = sd;
-  let c = cd;
+  const j = Math.round(rh * 64);
+  const dh = dd.add(rh, rl, -j / 64, 0);
+  const dl = dd.lo;
+  const d2h = dd.mul(dh, dl, dh, dl);
+  const d2l = dd.lo;
+  const fh = series(d2h, d2l, INV_FACT, 5, 2, 1, true, 3);
+  const sdh = dd.mul(dh, dl, fh, dd.lo);
+  const sdl = dd.lo;
+  const cdh = series(d2h, d2l, INV_FACT, 5, 2, 0, true, 3);
+  const cdl = dd.lo;
+  let sh = sdh;
+  let sl = sdl;
+  let ch = cdh;
+  let cl = cdl;
   if (j !== 0) {
-    const sj = j < 0 ? dd.neg(SIN[-j] as DD) : (SIN[j] as DD);
-    const cj = COS[Math.abs(j)] as DD;
-    s = dd.add(dd.mul(sj, cd), dd.mul(cj, sd));
-    c = dd.sub(dd.mul(cj, cd), dd.mul(sj, sd));
+    const a = Math.abs(j);
+    const sign = j < 0 ? -1 : 1;
+    const sjh = sign * (SIN[2 * a] as number);
+    const sjl = sign * (SIN[2 * a + 1] as number);
+    const cjh = COS[2 * a] as number;
+    const cjl = COS[2 * a + 1] as number;
+    let ph = dd.mul(sjh, sjl, cdh, cdl);
+    let pl = dd.lo;
+    let qh = dd.mul(cjh, cjl, sdh, sdl);
+    sh = dd.add(ph, pl, qh, dd.lo);
+    sl = dd.lo;
+    ph = dd.mul(cjh, cjl, cdh, cdl);
+    pl = dd.lo;
+    qh = dd.mul(sjh, sjl, sdh, sdl);
+    ch = dd.add(ph, pl, -qh, -dd.lo);
+    cl = dd.lo;
   }
-  if (q === 0) return [s, c];
-  if (q === 1) return [c, dd.neg(s)];
-  if (q === 2) return [dd.neg(s), dd.neg(c)];
-  return [dd.neg(c), s];
+  if (q === 0) set(out, sh, sl, ch, cl);
+  else if (q === 1) set(out, ch, cl, -sh, -sl);
+  else if (q === 2) set(out, -sh, -sl, -ch, -cl);
+  else set(out, -ch, -cl, sh, sl);
+  return true;
+}
+
+function set(out: Float64Array, a: number, b: number, c: number, d: number): void {
+  out[0] = a;
+  out[1] = b;
+  out[2] = c;
+  out[3] = d;
 }
 
 /** atan t for 0 < t ≤ 1. */
-function atanUnit(t: DD): DD {
-  const j = Math.round(t[0] * 64);
-  if (j === 0) return dd.mul(t, horner(dd.mul(t, t), INV_ODD, 9, 1, 0, true));
+function atanUnit(th: number, tl: number): number {
+  const j = Math.round(th * 64);
+  if (j === 0) {
+    const t2h = dd.mul(th, tl, th, tl);
+    const sh = series(t2h, dd.lo, INV_ODD, 6, 1, 0, true, 4);
+    return dd.mul(th, tl, sh, dd.lo);
+  }
   const c = j / 64;
-  const d = dd.div(dd.sub(t, [c, 0]), dd.add([1, 0], dd.mulDouble(t, c)));
-  return dd.add(ATAN[j] as DD, dd.mul(d, horner(dd.mul(d, d), INV_ODD, 9, 1, 0, true)));
+  const nh = dd.add(th, tl, -c, 0);
+  const nl = dd.lo;
+  const mh = dd.mulDouble(th, tl, c);
+  const den = dd.add(1, 0, mh, dd.lo);
+  const dh = dd.div(nh, nl, den, dd.lo);
+  const dl = dd.lo;
+  const d2h = dd.mul(dh, dl, dh, dl);
+  const sh = series(d2h, dd.lo, INV_ODD, 6, 1, 0, true, 4);
+  const ph = dd.mul(dh, dl, sh, dd.lo);
+  return dd.add(ATAN[2 * j] as number, ATAN[2 * j + 1] as number, ph, dd.lo);
 }
 
 /** atan2(y, x) for non-zero y and x. */
-function atan2(y: DD, x: DD): DD {
-  const ay = dd.abs(y);
-  const ax = dd.abs(x);
-  let r: DD;
-  if (ay[0] <= ax[0]) {
-    const a = atanUnit(dd.div(ay, ax));
-    r = x[0] > 0 ? a : dd.sub(PI, a);
+function atan2(yh: number, yl: number, xh: number, xl: number): number {
+  const ayh = yh < 0 ? -yh : yh;
+  const ayl = yh < 0 ? -yl : yl;
+  const axh = xh < 0 ? -xh : xh;
+  const axl = xh < 0 ? -xl : xl;
+  let h: number;
+  if (ayh <= axh) {
+    const qh = dd.div(ayh, ayl, axh, axl);
+    const ah = atanUnit(qh, dd.lo);
+    h = xh > 0 ? ah : dd.add(PI_HI, PI_LO, -ah, -dd.lo);
   } else {
-    const a = atanUnit(dd.div(ax, ay));
-    r = x[0] > 0 ? dd.sub(HALF_PI, a) : dd.add(HALF_PI, a);
+    const qh = dd.div(axh, axl, ayh, ayl);
+    const ah = atanUnit(qh, dd.lo);
+    h = xh > 0 ? dd.add(PI_HI / 2, PI_LO / 2, -ah, -dd.lo) : dd.add(PI_HI / 2, PI_LO / 2, ah, dd.lo);
   }
-  return y[0] < 0 ? dd.neg(r) : r;
+  if (yh < 0) {
+    dd.lo = -dd.lo;
+    return -h;
+  }
+  return h;
 }
 
 /** asinh v for v ≠ 0: sign(v) · ln(1 + |v| + v²/(1 + √(1 + v²))). */
-function asinh(v: DD): DD | null {
-  const a = dd.abs(v);
-  const a2 = dd.mul(a, a);
-  const w = dd.add(a, dd.div(a2, dd.add([1, 0], dd.sqrt(dd.add([1, 0], a2)))));
-  const r = log1p(w);
-  if (!r) return null;
-  return v[0] < 0 ? dd.neg(r) : r;
+function asinh(vh: number, vl: number): number {
+  const ah = vh < 0 ? -vh : vh;
+  const al = vh < 0 ? -vl : vl;
+  const a2h = dd.mul(ah, al, ah, al);
+  const a2l = dd.lo;
+  const ph = dd.add(1, 0, a2h, a2l);
+  const rh = dd.sqrt(ph, dd.lo);
+  const qh = dd.add(1, 0, rh, dd.lo);
+  const fh = dd.div(a2h, a2l, qh, dd.lo);
+  const wh = dd.add(ah, al, fh, dd.lo);
+  const h = log1p(wh, dd.lo);
+  if (vh < 0) {
+    dd.lo = -dd.lo;
+    return -h;
+  }
+  return h;
 }
 
-export const fastReal = { log, log1p, exp, sinCos, atan2, asinh, HALF_PI, PI };
+export const fastReal = { log, log1p, exp, sinCos, atan2, asinh };
