@@ -169,8 +169,8 @@ function atanh(x: number, y: number, sign: number): void {
   const x2h = dd.twoProd(x, x);
   const x2l = dd.lo;
   // 1 − x² − y² from exact squares: its error is 2^−106 of the larger term, so decline when it cancels to below 2^−30 of that.
-  const ah = dd.add(1, 0, -x2h, -x2l);
-  const acrossH = dd.add(ah, dd.lo, -y2h, -y2l);
+  const ah = dd.addCancelling(1, 0, -x2h, -x2l);
+  const acrossH = dd.addCancelling(ah, dd.lo, -y2h, -y2l);
   const acrossL = dd.lo;
   if (Math.abs(acrossH) < 2 ** -30 * Math.max(1, x2h + y2h)) {
     result[0] = NaN;

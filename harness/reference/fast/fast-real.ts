@@ -194,12 +194,12 @@ function sinCos(x: number, out: Float64Array): boolean {
     if (!(Math.abs(x) <= 2 ** 20)) return false;
     const k = Math.round(x / P1);
     let h = dd.twoProd(k, P1);
-    rh = dd.add(x, 0, -h, -dd.lo);
+    rh = dd.addCancelling(x, 0, -h, -dd.lo);
     rl = dd.lo;
     h = dd.twoProd(k, P2);
-    rh = dd.add(rh, rl, -h, -dd.lo);
+    rh = dd.addCancelling(rh, rl, -h, -dd.lo);
     rl = dd.lo;
-    rh = dd.add(rh, rl, -k * P3, 0);
+    rh = dd.addCancelling(rh, rl, -k * P3, 0);
     rl = dd.lo;
     if (Math.abs(rh) < TWO_M30) return false;
     q = ((k % 4) + 4) % 4;
