@@ -19,6 +19,10 @@ export function bitLength(m: bigint): number {
   }
   scratch[0] = n;
   const bits = (((words[HIGH] as number) >>> 20) & 0x7ff) - 1022;
-  if (bits > 53 && m < 1n << BigInt(bits - 1)) return bits - 1;
+  // Rounding can only carry into a new bit when it lands on a power of two (fraction bits all
+  // zero); only then is the bigint compared. Comparing every time (a bigint shift each call) made
+  // this 6% of the 40-digit bench.
+  if (bits > 53 && ((words[HIGH] as number) & 0xfffff) === 0 && words[1 - HIGH] === 0 && m < 1n << BigInt(bits - 1))
+    return bits - 1;
   return bits;
 }
