@@ -1,4 +1,6 @@
+import fc from 'fast-check';
 import { BigFloat } from '../../../../harness/reference/numbers/big-float';
+import { bitLength } from '../../../../harness/reference/numbers/bit-length';
 import { formatDouble } from '../../../../harness/reference/numbers/format-double';
 import { parseDouble } from '../../../../harness/reference/numbers/parse-double';
 import { parseNumber } from '../../../../harness/reference/numbers/parse-number';
@@ -63,6 +65,48 @@ describe('BigFloat', () => {
         .compare(BigFloat.of(false, 1n, -138)),
     ).toBeLessThan(0);
     expect(BigFloat.fromDouble(6.25).sqrt(60).toDouble()).toBe(2.5);
+  });
+
+  // Law: the root r = m·2^e that sqrt(bits) returns for n is the floor of √n at its last bit,
+  // r² ≤ n < (r + 2^e)², with at least `bits` bits; for every size of n, and at the squares of
+  // 2^k ± 1 and of all-ones roots, where an estimate one off shows. Seed printed on failure.
+  it('truncates square roots exactly: r² ≤ n < (r + ulp)² for integers of 1 to 1,400 bits', () => {
+    const SEED = 20261205;
+    const near = fc.tuple(fc.integer({ min: 1, max: 700 }), fc.integer({ min: -1, max: 1 })).map(([k, d]) => {
+      const root = (1n << BigInt(k)) + BigInt(d);
+      return [root * root + BigInt(d), root * root - 1n, root * root];
+    });
+    const any = fc.bigInt({ min: 1n, max: 1n << 1400n }).map((n) => [n]);
+    fc.assert(
+      fc.property(fc.oneof(near, any), fc.integer({ min: 1, max: 800 }), (ns, bits) => {
+        for (const n of ns) {
+          if (n <= 0n) continue;
+          const r = BigFloat.fromBigInt(n).sqrt(bits);
+          expect(r.m.toString(2).length).toBeGreaterThanOrEqual(bits);
+          const shift = BigInt(-2 * r.e);
+          const square = r.m * r.m;
+          const next = (r.m + 1n) * (r.m + 1n);
+          // e ≤ 0 here (bits ≥ 1 and the root keeps them), so compare n·2^(−2e) with the squares.
+          expect(r.e).toBeLessThanOrEqual(0);
+          expect(square <= n << shift && n << shift < next).toBe(true);
+        }
+      }),
+      { seed: SEED, numRuns: 600 },
+    );
+  });
+
+  // Law: bitLength(m) is the length of m's binary digits; Number(m) rounding up to a power of
+  // two (m = 2^k − 1 for k > 53) is the case the exponent alone gets wrong.
+  it('counts the bits of a bigint, also just below and at powers of two', () => {
+    for (let k = 1; k <= 1100; k++) {
+      for (const m of [(1n << BigInt(k)) - 1n, 1n << BigInt(k), (1n << BigInt(k)) + 1n]) {
+        expect([k, bitLength(m)]).toEqual([k, m.toString(2).length]);
+      }
+    }
+    fc.assert(
+      fc.property(fc.bigInt({ min: 1n, max: 1n << 2000n }), (m) => bitLength(m) === m.toString(2).length),
+      { seed: 20261205, numRuns: 2000 },
+    );
   });
 });
 
