@@ -7,10 +7,12 @@
  * "doubles" mode is mp.prec = 53 and complex(f(z)) — mpmath's cheapest way to a double,
  * which is not even guaranteed correctly rounded, so the ratio is, if anything, unkind to us.
  * Its "strings" mode is mp.dps = 40 and nstr(part, 40). Both sides convert the input from the
- * same doubles and produce both parts. Each side makes one untimed pass, then REPEATS timed passes
- * of which the fastest counts. Bounded: fixed counts, and Python is killed after 300 s.
+ * same doubles and produce both parts. Each side makes one untimed pass, then ROUNDS rounds of a
+ * timed pass of ours and one of mpmath's; each side's fastest counts. Bounded: fixed counts, and
+ * each Python process is killed after 120 s.
  */
 import { spawnSync } from 'node:child_process';
+import os from 'node:os';
 import { BigComplex, principalDouble, principalValue } from '../harness';
 
 const N = 10_000;
@@ -18,12 +20,14 @@ const SEED = 12345;
 const FUNCTIONS = ['sqrt', 'exp', 'log', 'asin', 'acos', 'atan', 'asinh', 'acosh', 'atanh'];
 const TARGET_DOUBLES = 30;
 /**
- * Timed passes per mode and side; the fastest is kept, since other work on the machine only ever
- * adds time. Seven, not three: with other engineers' jobs on the two cores, mpmath's best of three
- * ranged 39,000–58,000 doubles/s between runs a minute apart (ratios 25–36 for the same engine);
- * a pass of both modes costs mpmath ~0.45 s and us ~0.13 s, so the extra passes add ~2.5 s to the run.
+ * Rounds of timed passes; the fastest pass of each mode and side is kept, since other work on the
+ * machine only ever adds time. Each round times one pass of ours and then one of mpmath (a fresh
+ * Python process: one untimed pass, one timed, per mode), so both sides sample the same stretch of
+ * a shared machine's load: timing all of ours first and all of mpmath's after, mpmath's best of
+ * three ranged 39,000–58,000 doubles/s between runs a minute apart (ratios 18–39 for one engine).
+ * A round costs mpmath ~1.2 s with Python's start-up, us ~0.15 s.
  */
-const REPEATS = 7;
+const ROUNDS = 5;
 const TARGET_STRINGS = 2;
 
 function seeded(seed: number): () => number {
@@ -76,42 +80,65 @@ def strings_pass():
         v = f(mpc(x, y))
         mpmath.nstr(v.real, 40); mpmath.nstr(v.imag, 40)
     return time.perf_counter() - t
-repeats = int(sys.argv[1])
 mp.prec = 53
 doubles_pass()
-doubles = min(doubles_pass() for _ in range(repeats))
+doubles = doubles_pass()
 mp.dps = 40
 strings_pass()
-strings = min(strings_pass() for _ in range(repeats))
+strings = strings_pass()
 print(json.dumps({"doubles": doubles, "strings": strings, "backend": mpmath.libmp.BACKEND, "version": mpmath.__version__}))
 `;
 
-function main(): void {
-  // One untimed pass over the same points first, on both sides: V8 compiles the hot paths and
-  // fills the reduction tables; mpmath caches its constants at each precision.
-  ours('doubles', N);
-  ours('strings', N);
-  const best = (mode: 'doubles' | 'strings') => Math.min(...Array.from({ length: REPEATS }, () => ours(mode, N)));
-  const oursDoubles = best('doubles');
-  const oursStrings = best('strings');
-  const run = spawnSync('/usr/bin/python3', ['-c', PYTHON, String(REPEATS)], {
+interface MpmathPass {
+  doubles: number;
+  strings: number;
+  backend: string;
+  version: string;
+}
+
+/** One Python process: an untimed and a timed pass per mode; null (and a message) when it fails or overruns. */
+function mpmathPass(): MpmathPass | null {
+  const run = spawnSync('/usr/bin/python3', ['-c', PYTHON], {
     input: JSON.stringify(points.map((p) => [p.fn, String(p.x), String(p.y)])),
     encoding: 'utf8',
-    timeout: 300_000,
+    timeout: 120_000,
   });
   if (run.status !== 0) {
     process.stderr.write(`mpmath run failed: ${run.stderr || run.error?.message}\n`);
-    process.exitCode = 1;
-    return;
+    return null;
   }
-  const mp = JSON.parse(run.stdout) as { doubles: number; strings: number; backend: string; version: string };
+  return JSON.parse(run.stdout) as MpmathPass;
+}
+
+function main(): void {
+  // One untimed pass over the same points first: V8 compiles the hot paths and fills the
+  // reduction tables (mpmath's untimed pass is in each of its processes).
+  ours('doubles', N);
+  ours('strings', N);
+  const load = os.loadavg()[0] as number;
+  let oursDoubles = Infinity;
+  let oursStrings = Infinity;
+  let mp: MpmathPass | null = null;
+  for (let round = 0; round < ROUNDS; round++) {
+    oursDoubles = Math.min(oursDoubles, ours('doubles', N));
+    oursStrings = Math.min(oursStrings, ours('strings', N));
+    const pass = mpmathPass();
+    if (!pass) {
+      process.exitCode = 1;
+      return;
+    }
+    mp = mp
+      ? { ...pass, doubles: Math.min(mp.doubles, pass.doubles), strings: Math.min(mp.strings, pass.strings) }
+      : pass;
+  }
+  if (!mp) return;
   const rate = (seconds: number) => Math.round(N / seconds);
   const rows = [
     ['correctly rounded doubles', rate(oursDoubles), rate(mp.doubles), mp.doubles / oursDoubles, TARGET_DOUBLES],
     ['40-digit strings', rate(oursStrings), rate(mp.strings), mp.strings / oursStrings, TARGET_STRINGS],
   ] as const;
   process.stdout.write(
-    `reference engine vs mpmath ${mp.version} (${mp.backend}), ${N} seeded points (seed ${SEED}), best of ${REPEATS}, ${FUNCTIONS.join(', ')}\n`,
+    `reference engine vs mpmath ${mp.version} (${mp.backend}), ${N} seeded points (seed ${SEED}), best of ${ROUNDS} interleaved rounds, load average ${load.toFixed(2)} → ${(os.loadavg()[0] as number).toFixed(2)}, ${FUNCTIONS.join(', ')}\n`,
   );
   process.stdout.write('mode                         ours (pts/s)   mpmath (pts/s)   ratio   target\n');
   for (const [mode, a, b, ratio, target] of rows) {
