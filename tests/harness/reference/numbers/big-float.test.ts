@@ -1,3 +1,4 @@
+import { Decimal } from 'decimal.js';
 import fc from 'fast-check';
 import { BigFloat } from '../../../../harness/reference/numbers/big-float';
 import { bitLength } from '../../../../harness/reference/numbers/bit-length';
@@ -92,6 +93,27 @@ describe('BigFloat', () => {
         }
       }),
       { seed: SEED, numRuns: 600 },
+    );
+  });
+
+  // Law: toDecimal(d) is the exact value m·2^e rounded half-up to d significant digits, the same
+  // number decimal.js (an independent decimal library, at 2,000 digits) gives for it.
+  it('prints d significant digits of the exact value, rounded half-up, at every scale', () => {
+    const Exact = Decimal.clone({ precision: 2000 });
+    fc.assert(
+      fc.property(
+        fc.bigInt({ min: 1n, max: 1n << 300n }),
+        fc.integer({ min: -1200, max: 1000 }),
+        fc.boolean(),
+        fc.integer({ min: 1, max: 60 }),
+        (m, e, neg, digits) => {
+          const value = BigFloat.of(neg, m, e);
+          const exact = new Exact(m.toString()).times(new Exact(2).pow(e)).times(neg ? -1 : 1);
+          const expected = exact.toSignificantDigits(digits, Decimal.ROUND_HALF_UP);
+          return new Exact(value.toDecimal(digits)).eq(expected);
+        },
+      ),
+      { seed: 20261205, numRuns: 3000 },
     );
   });
 
