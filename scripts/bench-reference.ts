@@ -14,10 +14,10 @@
 import { spawnSync } from 'node:child_process';
 import os from 'node:os';
 import { BigComplex, principalDouble, principalValue } from '../harness';
+import { benchReferencePoints } from './bench-reference-points';
 
 const N = 10_000;
 const SEED = 12345;
-const FUNCTIONS = ['sqrt', 'exp', 'log', 'asin', 'acos', 'atan', 'asinh', 'acosh', 'atanh'];
 const TARGET_DOUBLES = 30;
 /**
  * Rounds of timed passes; the fastest pass of each mode and side is kept, since other work on the
@@ -30,20 +30,7 @@ const TARGET_DOUBLES = 30;
 const ROUNDS = 5;
 const TARGET_STRINGS = 2;
 
-function seeded(seed: number): () => number {
-  let s = seed;
-  return () => {
-    s = (s * 16807) % 2147483647;
-    return s / 2147483647;
-  };
-}
-
-const random = seeded(SEED);
-const points = Array.from({ length: N }, (_, i) => ({
-  fn: FUNCTIONS[i % FUNCTIONS.length] as string,
-  x: (random() - 0.5) * 8,
-  y: (random() - 0.5) * 8,
-}));
+const points = benchReferencePoints(N, SEED);
 
 function ours(mode: 'doubles' | 'strings', count: number): number {
   const start = process.hrtime.bigint();
@@ -138,7 +125,7 @@ function main(): void {
     ['40-digit strings', rate(oursStrings), rate(mp.strings), mp.strings / oursStrings, TARGET_STRINGS],
   ] as const;
   process.stdout.write(
-    `reference engine vs mpmath ${mp.version} (${mp.backend}), ${N} seeded points (seed ${SEED}), best of ${ROUNDS} interleaved rounds, load average ${load.toFixed(2)} → ${(os.loadavg()[0] as number).toFixed(2)}, ${FUNCTIONS.join(', ')}\n`,
+    `reference engine vs mpmath ${mp.version} (${mp.backend}), ${N} seeded points (seed ${SEED}), best of ${ROUNDS} interleaved rounds, load average ${load.toFixed(2)} → ${(os.loadavg()[0] as number).toFixed(2)}, ${[...new Set(points.map((p) => p.fn))].join(', ')}\n`,
   );
   process.stdout.write('mode                         ours (pts/s)   mpmath (pts/s)   ratio   target\n');
   for (const [mode, a, b, ratio, target] of rows) {
