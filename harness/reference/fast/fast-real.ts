@@ -6,17 +6,18 @@ import { dd } from './double-double';
  * Real kernels in double-double for the fast tier, mirroring the bigint kernels' reductions
  * (tables at j/64, series in |d| ≤ 1/128) with the same tables, converted once from the bigint
  * engine. Each takes and returns double-doubles as `dd` does (the result's hi returned, its lo in
- * `D.lo`), with a relative error below ~2^−96 for the inputs it accepts, or returns NaN where it
+ * `dd.lo`), with a relative error below ~2^−96 for the inputs it accepts, or returns NaN where it
  * cannot promise that (the caller then falls back to the bigint engine):
- * - log: x within 2^−30 of 1 only through log1p of an accurate x − 1;
+ * - log: an argument in [2^−1000, 2^1000] (its f − 1 near 1 is exact in its high part);
  * - exp: |x| ≤ 708 (beyond, the result is not a normal double anyway);
  * - sinCos: |x| ≤ 2^20 and x not within 2^−30 of a multiple of π/2.
  *
- * Series: a term below 2^−48 of the series' first term is summed in plain doubles, whose
- * rounding then costs below 2^−100 of the sum; only the leading terms take double-double steps.
- * The term counts are the fewest that reach 2^−100 at |d| = 1/128 (log and atan: 8 terms of
- * t² ≤ 2^−14; exp: 12; sin and cos: 7), against 9–13 before. With the scalar operations these
- * took a warm call on the bench's mix from 1.20 µs to 0.5 µs (see fast-principal.ts).
+ * Series: the terms from the first below 2^−44 of the leading one are summed in plain doubles,
+ * whose rounding then costs below 2^−97 of the sum; only the leading terms take double-double
+ * steps (3 for log, atan, sin and cos, 6 for exp). The term counts are the fewest whose first
+ * omitted term is below 2^−100 at |d| = 1/128 (log and atan: 7 terms in t² ≤ 2^−14; exp: 12;
+ * sin and cos: 6), against 9–13 before. With the scalar operations of double-double.ts, a warm
+ * call on the bench's mix went from 1.20 µs to ~0.6 µs (figures in fast-principal.ts).
  */
 /**
  * The operations and kernels as module constants: reached through the import's binding, each
@@ -268,7 +269,7 @@ function atanRatio(ah: number, al: number, bh: number, bl: number): number {
     const th = D.div(ah, al, bh, bl);
     const tl = D.lo;
     const t2h = D.mul(th, tl, th, tl);
-    const sh = series(t2h, D.lo, INV_ODD, 6, 1, 0, true, 4);
+    const sh = series(t2h, D.lo, INV_ODD, 6, 1, 0, true, 3);
     return D.mul(th, tl, sh, D.lo);
   }
   const c = j / 64;
@@ -280,7 +281,7 @@ function atanRatio(ah: number, al: number, bh: number, bl: number): number {
   const dh = D.div(nh, nl, mh, D.lo);
   const dl = D.lo;
   const d2h = D.mul(dh, dl, dh, dl);
-  const sh = series(d2h, D.lo, INV_ODD, 6, 1, 0, true, 4);
+  const sh = series(d2h, D.lo, INV_ODD, 6, 1, 0, true, 3);
   const ph = D.mul(dh, dl, sh, D.lo);
   return D.add(ATAN[2 * j] as number, ATAN[2 * j + 1] as number, ph, D.lo);
 }
