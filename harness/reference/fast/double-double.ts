@@ -101,6 +101,14 @@ export const dd = {
     return h;
   },
 
+  /** Two double-doubles a and b into out as [ah, al, bh, bl]: how the fast tier hands over a complex value or a sine and cosine. */
+  storePair(out: Float64Array, ah: number, al: number, bh: number, bl: number): void {
+    out[0] = ah;
+    out[1] = al;
+    out[2] = bh;
+    out[3] = bl;
+  },
+
   /** √(ah + al), one Newton correction of the double root; 0 for a non-positive argument. */
   sqrt(ah: number, al: number): number {
     if (ah <= 0) {

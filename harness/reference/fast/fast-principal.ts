@@ -73,13 +73,6 @@ const s1 = new Float64Array(4);
 const s2 = new Float64Array(4);
 const sc = new Float64Array(4);
 
-function put(out: Float64Array, reH: number, reL: number, imH: number, imL: number): void {
-  out[0] = reH;
-  out[1] = reL;
-  out[2] = imH;
-  out[3] = imL;
-}
-
 /** Principal √ of (ah + al) + bi (b a double ≠ 0) into out. */
 function csqrt(ah: number, al: number, b: number, out: Float64Array): void {
   const a2h = D.mul(ah, al, ah, al);
@@ -93,8 +86,8 @@ function csqrt(ah: number, al: number, b: number, out: Float64Array): void {
   const tl = D.lo;
   const oh = D.div(b < 0 ? -b : b, 0, 2 * th, 2 * tl);
   const ol = D.lo;
-  if (ah >= 0) put(out, th, tl, b < 0 ? -oh : oh, b < 0 ? -ol : ol);
-  else put(out, oh, ol, b < 0 ? -th : th, b < 0 ? -tl : tl);
+  if (ah >= 0) D.storePair(out, th, tl, b < 0 ? -oh : oh, b < 0 ? -ol : ol);
+  else D.storePair(out, oh, ol, b < 0 ? -th : th, b < 0 ? -tl : tl);
 }
 
 /** a·b + sign·c·d for double-doubles given as (hi, lo) pairs. */
@@ -132,7 +125,7 @@ function asin(x: number, y: number): void {
   const imH = R.asinh(vh, D.lo);
   const imL = D.lo;
   const reH = R.atan2(x, 0, rh, rl);
-  put(result, reH, D.lo, imH, imL);
+  D.storePair(result, reH, D.lo, imH, imL);
 }
 
 /** acos z = 2·atan2(Re s1, Re s2) + i·asinh(Im(conj(s2)·s1)). */
@@ -142,7 +135,7 @@ function acos(x: number, y: number): void {
   const imH = R.asinh(vh, D.lo);
   const imL = D.lo;
   const reH = R.atan2(s1[0]!, s1[1]!, s2[0]!, s2[1]!);
-  put(result, 2 * reH, 2 * D.lo, imH, imL);
+  D.storePair(result, 2 * reH, 2 * D.lo, imH, imL);
 }
 
 /** acosh z = asinh(Re(conj(s1)·s2)) + 2i·atan2(Im s1, Re s2), s1 = √(z − 1), s2 = √(z + 1). */
@@ -155,7 +148,7 @@ function acosh(x: number, y: number): void {
   const reH = R.asinh(uh, D.lo);
   const reL = D.lo;
   const imH = R.atan2(s1[2]!, s1[3]!, s2[0]!, s2[1]!);
-  put(result, reH, reL, 2 * imH, 2 * D.lo);
+  D.storePair(result, reH, reL, 2 * imH, 2 * D.lo);
 }
 
 /**
@@ -189,7 +182,7 @@ function atanh(x: number, y: number, sign: number): void {
   const reL = D.lo;
   const imH = R.atan2(2 * y, 0, acrossH, acrossL);
   const k = sign / 2;
-  put(result, (k / 2) * reH, (k / 2) * reL, k * imH, k * D.lo);
+  D.storePair(result, (k / 2) * reH, (k / 2) * reL, k * imH, k * D.lo);
 }
 
 function log(x: number, y: number): void {
@@ -204,7 +197,7 @@ function log(x: number, y: number): void {
   const reH = R.log(nh, D.lo);
   const reL = D.lo;
   const imH = R.atan2(y, 0, x, 0);
-  put(result, reH / 2, reL / 2, imH, D.lo);
+  D.storePair(result, reH / 2, reL / 2, imH, D.lo);
 }
 
 function exp(x: number, y: number): void {
@@ -217,7 +210,7 @@ function exp(x: number, y: number): void {
   const reH = D.mul(mh, ml, sc[2]!, sc[3]!);
   const reL = D.lo;
   const imH = D.mul(mh, ml, sc[0]!, sc[1]!);
-  put(result, reH, reL, imH, D.lo);
+  D.storePair(result, reH, reL, imH, D.lo);
 }
 
 /** Each function leaves its value in `result`, or NaN in result[0] when it declines. */
@@ -232,12 +225,12 @@ const FUNCTIONS: Record<string, (x: number, y: number) => void> = {
   // asinh z = i·asin(−iz): from asin(y − ix) = a + bi, asinh z = −b + ai.
   asinh(x, y) {
     asin(y, -x);
-    put(result, -result[2]!, -result[3]!, result[0]!, result[1]!);
+    D.storePair(result, -result[2]!, -result[3]!, result[0]!, result[1]!);
   },
   // atan z = −i·atanh(iz): from atanh(−y + ix) = a + bi, atan z = b − ai.
   atan(x, y) {
     atanh(-y, x, 1);
-    put(result, result[2]!, result[3]!, -result[0]!, -result[1]!);
+    D.storePair(result, result[2]!, result[3]!, -result[0]!, -result[1]!);
   },
 };
 

@@ -244,18 +244,11 @@ function sinCos(x: number, out: Float64Array): boolean {
     ch = D.add(ph, pl, -qh, -D.lo);
     cl = D.lo;
   }
-  if (q === 0) set(out, sh, sl, ch, cl);
-  else if (q === 1) set(out, ch, cl, -sh, -sl);
-  else if (q === 2) set(out, -sh, -sl, -ch, -cl);
-  else set(out, -ch, -cl, sh, sl);
+  if (q === 0) D.storePair(out, sh, sl, ch, cl);
+  else if (q === 1) D.storePair(out, ch, cl, -sh, -sl);
+  else if (q === 2) D.storePair(out, -sh, -sl, -ch, -cl);
+  else D.storePair(out, -ch, -cl, sh, sl);
   return true;
-}
-
-function set(out: Float64Array, a: number, b: number, c: number, d: number): void {
-  out[0] = a;
-  out[1] = b;
-  out[2] = c;
-  out[3] = d;
 }
 
 /**
