@@ -1,6 +1,10 @@
 import type { SuitePath } from '../../../../shared/schemas/suite-path-schema';
 import { suitePathSchema } from '../../../../shared/schemas/suite-path-schema';
 import { continuationPathOf } from '../../../../harness/runner/expectations/continuation-path-of';
+import { parseSubject } from '../../../../harness/expressions/parse-subject';
+import { continueRegularBranch } from '../../../../harness/reference/continuation/continue-regular-branch';
+import { FactoredFunction } from '../../../../harness/reference/continuation/factored-function';
+import { Rational } from '../../../../harness/reference/numbers/rational';
 
 const circle = (start_angle: string, turns = '1'): SuitePath =>
   suitePathSchema.parse({
@@ -22,6 +26,48 @@ describe('continuationPathOf', () => {
   ])('passes a start angle of %s to the engine as exactly %s turn', (angle, turns) => {
     const spec = continuationPathOf(circle(angle));
     expect(spec?.kind === 'circle' && spec.startAngle.kind === 'turns' && spec.startAngle.turns.toString()).toBe(turns);
+  });
+
+  it('carries "pi/4" and 3/8 turn from the suite to the engine exactly: the arc ends on the cut at −1, from above', () => {
+    // √z, k = 0 at z0 = 1, on the plane cut along (−∞, 0]. In doubles π/4 + 3π/4 lands past π, below
+    // the cut; exactly, the arc ends on it and keeps the upper side's value, csqrt(−1 + i0) = +i
+    // (ISO/IEC 9899:2011 G.6.4.2).
+    const path = suitePathSchema.parse({
+      kind: 'circle',
+      name: 'c',
+      center: { re: '0', im: '0' },
+      radius: '1',
+      start_angle: 'pi/4',
+      turns: '3/8',
+      samples: 9,
+    });
+    const spec = continuationPathOf(path);
+    if (!spec) throw new Error('no path');
+    const result = continueRegularBranch({
+      g: FactoredFunction.fromSubject(parseSubject('z')),
+      nu: { re: new Rational(1n, 2n), im: Rational.ZERO },
+      z0: [Rational.ONE, Rational.ZERO],
+      start: { kind: 'sheet', k: 0 },
+      path: spec,
+      at: [Rational.ONE],
+      cuts: [
+        {
+          points: [
+            [Rational.ZERO, Rational.ZERO],
+            [new Rational(-1n), Rational.ZERO],
+          ],
+          toInfinity: true,
+        },
+      ],
+    });
+    if (result.kind !== 'continued') throw new Error(result.reason);
+    const { z, f } = result.values[0]!;
+    expect([z.re.toDecimal(40), z.im.toDecimal(40), f.re.toDecimal(40), f.im.toDecimal(40)]).toEqual([
+      '-1',
+      '0',
+      '0',
+      '1',
+    ]);
   });
 
   it('passes a start angle in radians as those exact radians, and the centre and turns as written', () => {
