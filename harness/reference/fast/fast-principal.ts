@@ -18,6 +18,15 @@ import { fastReal } from './fast-real';
  * Writing the Horner loop (then add, subtract and multiply) on scalars, one allocation per
  * operation instead of up to four, took the per-function times of a first run from 0.9–6.1 µs
  * to 0.9–3.2 µs; a warm call on the bench's mix measured ~1.7 µs.
+ *
+ * Issue 12 (doubles ≥ 30× mpmath): profiled with node --cpu-prof on the bench's points, the time
+ * was in the double-double operations themselves (addition, products, the pair each returned) and
+ * the series. Scalar operations (double-double.ts) took a warm mixed call from 1.20 to 0.77 µs;
+ * small series terms in plain doubles, log and atan with one division each, the one-two-sum
+ * addition and module constants for the operations, to ~0.6 µs. Warm single-function loops,
+ * CPU time at load average ~4: sqrt 0.15, exp 0.45, log 0.39, atan and atanh 0.46, asin, acos,
+ * asinh, acosh 0.63–0.69 µs. The remaining ~0.1 µs of the mixed call over their mean is the
+ * bench's alternation of nine functions (a switch instead of the table below measured the same).
  */
 /**
  * The operations and kernels as module constants: reached through the import's binding, each
