@@ -7,8 +7,8 @@
  * "doubles" mode is mp.prec = 53 and complex(f(z)) — mpmath's cheapest way to a double,
  * which is not even guaranteed correctly rounded, so the ratio is, if anything, unkind to us.
  * Its "strings" mode is mp.dps = 40 and nstr(part, 40). Both sides convert the input from the
- * same doubles and produce both parts. Each side makes one untimed pass, then ROUNDS rounds of a
- * timed pass of ours and one of mpmath's; each side's fastest counts. Bounded: fixed counts, and
+ * same doubles and produce both parts. Each side makes one untimed pass, then ROUNDS rounds of
+ * PASSES timed passes of ours and as many of mpmath's; each side's fastest counts. Bounded: fixed counts, and
  * each Python process is killed after 120 s.
  */
 import { spawnSync } from 'node:child_process';
@@ -21,13 +21,17 @@ const SEED = 12345;
 const TARGET_DOUBLES = 30;
 /**
  * Rounds of timed passes; the fastest pass of each mode and side is kept, since other work on the
- * machine only ever adds time. Each round times one pass of ours and then one of mpmath (a fresh
- * Python process: one untimed pass, one timed, per mode), so both sides sample the same stretch of
- * a shared machine's load: timing all of ours first and all of mpmath's after, mpmath's best of
+ * machine only ever adds time. Each round times passes of ours and then of mpmath (a fresh Python
+ * process, which first makes an untimed pass per mode), so both sides sample the same stretch of a
+ * shared machine's load: timing all of ours first and all of mpmath's after, mpmath's best of
  * three ranged 39,000–58,000 doubles/s between runs a minute apart (ratios 18–39 for one engine).
- * A round costs mpmath ~1.2 s with Python's start-up, us ~0.15 s.
+ * Each round times PASSES passes per mode on each side: our doubles pass is ~6 ms, short enough
+ * for one preemption on the shared cores to cost it a third (1.22–1.68 million/s between runs with
+ * one pass a round, against mpmath's steady ~58,500/s over its 170 ms pass). A round costs mpmath
+ * ~1.6 s with Python's start-up, us ~0.4 s; the bench takes ~12 s in all.
  */
 const ROUNDS = 5;
+const PASSES = 3;
 const TARGET_STRINGS = 2;
 
 const points = benchReferencePoints(N, SEED);
@@ -68,11 +72,12 @@ def strings_pass():
         mpmath.nstr(v.real, 40); mpmath.nstr(v.imag, 40)
     return time.perf_counter() - t
 mp.prec = 53
+passes = int(sys.argv[1])
 doubles_pass()
-doubles = doubles_pass()
+doubles = min(doubles_pass() for _ in range(passes))
 mp.dps = 40
 strings_pass()
-strings = strings_pass()
+strings = min(strings_pass() for _ in range(passes))
 print(json.dumps({"doubles": doubles, "strings": strings, "backend": mpmath.libmp.BACKEND, "version": mpmath.__version__}))
 `;
 
@@ -83,9 +88,9 @@ interface MpmathPass {
   version: string;
 }
 
-/** One Python process: an untimed and a timed pass per mode; null (and a message) when it fails or overruns. */
+/** One Python process: an untimed pass and PASSES timed ones per mode; null (and a message) when it fails or overruns. */
 function mpmathPass(): MpmathPass | null {
-  const run = spawnSync('/usr/bin/python3', ['-c', PYTHON], {
+  const run = spawnSync('/usr/bin/python3', ['-c', PYTHON, String(PASSES)], {
     input: JSON.stringify(points.map((p) => [p.fn, String(p.x), String(p.y)])),
     encoding: 'utf8',
     timeout: 120_000,
@@ -107,8 +112,8 @@ function main(): void {
   let oursStrings = Infinity;
   let mp: MpmathPass | null = null;
   for (let round = 0; round < ROUNDS; round++) {
-    oursDoubles = Math.min(oursDoubles, ours('doubles', N));
-    oursStrings = Math.min(oursStrings, ours('strings', N));
+    for (let i = 0; i < PASSES; i++) oursDoubles = Math.min(oursDoubles, ours('doubles', N));
+    for (let i = 0; i < PASSES; i++) oursStrings = Math.min(oursStrings, ours('strings', N));
     const pass = mpmathPass();
     if (!pass) {
       process.exitCode = 1;
@@ -125,7 +130,7 @@ function main(): void {
     ['40-digit strings', rate(oursStrings), rate(mp.strings), mp.strings / oursStrings, TARGET_STRINGS],
   ] as const;
   process.stdout.write(
-    `reference engine vs mpmath ${mp.version} (${mp.backend}), ${N} seeded points (seed ${SEED}), best of ${ROUNDS} interleaved rounds, load average ${load.toFixed(2)} → ${(os.loadavg()[0] as number).toFixed(2)}, ${[...new Set(points.map((p) => p.fn))].join(', ')}\n`,
+    `reference engine vs mpmath ${mp.version} (${mp.backend}), ${N} seeded points (seed ${SEED}), best of ${ROUNDS} interleaved rounds × ${PASSES} passes, load average ${load.toFixed(2)} → ${(os.loadavg()[0] as number).toFixed(2)}, ${[...new Set(points.map((p) => p.fn))].join(', ')}\n`,
   );
   process.stdout.write('mode                         ours (pts/s)   mpmath (pts/s)   ratio   target\n');
   for (const [mode, a, b, ratio, target] of rows) {
