@@ -32,7 +32,9 @@ const LOG2_10 = Math.log2(10);
  * Why bigints rather than decimal.js: a naive decimal.js complex log at 34 digits cost ~0.8 ms,
  * 25× slower than mpmath (docs/conventions.md). This engine, with table-reduced series on bigint fixed point,
  * produced 40-digit strings at 34,000–75,000 points/s on the bench's 9-function mix, 1.3–2.9× mpmath
- * at 40 digits over six runs on a loaded 2-core machine. For doubles alone see principalDouble.
+ * at 40 digits over six runs on a loaded 2-core machine; 88,000–90,000 points/s, 2.15–2.23×, over three
+ * runs of the interleaved bench at load average 4–5.6, once integerSqrt, bitLength and toDecimal
+ * had been sped up without changing a bit. For doubles alone see principalDouble.
  */
 export function principalValue(request: PrincipalRequest, needs: PrincipalNeeds): PrincipalResult {
   const wantBits = needs.digits > 0 ? Math.ceil(needs.digits * LOG2_10) + 4 : 0;
