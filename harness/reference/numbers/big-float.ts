@@ -240,6 +240,9 @@ export class BigFloat {
     if (this.m === 0n) return this.neg ? -0 : 0;
     const top = this.e + bitLength(this.m);
     if (top > 1025) return this.neg ? -Infinity : Infinity;
+    // Below half the least subnormal (|x| < 2^−1075) the rounding is a signed zero; shifting out
+    // the bits as below would build a 2^(−e)-bit integer for e^x's stand-in 2^(−2^42).
+    if (top < -1075) return this.neg ? -0 : 0;
     const lsb = Math.max(top - 53, -1074);
     let q: bigint;
     if (lsb <= this.e) {
@@ -284,8 +287,15 @@ export class BigFloat {
 }
 
 const LOG10_OF_2 = Math.log10(2);
+/**
+ * Powers of ten up to this one are kept; larger ones are computed each time. Keeping every power
+ * up to 10^n cost O(n²) bits: a value near 1e−184000 (pow(z, 2049) at |z| ≈ 1e−90) ran the
+ * process out of memory.
+ */
+const CACHED_POWERS = 400;
 const powers10: bigint[] = [1n];
 function POW10(n: number): bigint {
+  if (n > CACHED_POWERS) return 10n ** BigInt(n);
   for (let i = powers10.length; i <= n; i++) powers10.push((powers10[i - 1] as bigint) * 10n);
   return powers10[n] as bigint;
 }
