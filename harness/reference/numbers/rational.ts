@@ -31,7 +31,11 @@ export class Rational {
 
   /** The exact rational value of a finite double. */
   static fromDouble(x: number): Rational {
-    const b = BigFloat.fromDouble(x);
+    return Rational.fromBigFloat(BigFloat.fromDouble(x));
+  }
+
+  /** The exact rational value of a finite BigFloat. */
+  static fromBigFloat(b: BigFloat): Rational {
     if (!b.isFinite()) throw new RangeError('not a finite number');
     const m = b.neg ? -b.m : b.m;
     return b.e >= 0 ? new Rational(m << BigInt(b.e)) : new Rational(m, 1n << BigInt(-b.e));
