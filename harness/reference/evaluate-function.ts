@@ -59,10 +59,21 @@ function evaluateReciprocal(
   const rounding = bits + RECIPROCAL_GUARD;
   const w = applyConvention(base.reciprocal(rounding), fn.inner.cuts, convention);
   const a = evaluatePlain(fn.inner, w, bits);
-  if (!base.isFinite() || base.isZero()) return a;
+  if (!base.isFinite() || base.isZero() || isExactReciprocal(base, w)) return a;
   const extra = reciprocalError(w, rounding, fn.derivative);
   const widen = (err: number) => (err === -Infinity ? err : Math.max(err, extra) + 1);
   return new Approximation(a.re, a.im, widen(a.reErr), widen(a.imErr));
+}
+
+/**
+ * Whether w is exactly 1/z (z·w = 1, formed exactly): then g(w) is f(z) with no rounding to
+ * account for. It is at z = ±2^k and ±i·2^k, among them the branch points ±1 and ±i of the
+ * reciprocal functions, where the bound below is infinite: acsch(i) = −iπ/2 escalated to the
+ * precision cap (16,384 bits) before.
+ */
+function isExactReciprocal(z: BigComplex, w: BigComplex): boolean {
+  const p = z.mul(w);
+  return p.im.isZero() && p.re.compare(BigFloat.ONE) === 0;
 }
 
 /**

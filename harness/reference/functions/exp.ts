@@ -22,6 +22,10 @@ export const exp: CatalogueFunction = {
   evaluate(z, bits) {
     const w = bits + 8;
     const m = realExp(z.re, w);
+    // e^(x ± 0i) is real: its imaginary part is exactly e^x · sin(±0) = ±0, even where e^x
+    // overflows binary64 (G.6.3.1 gives cexp(+∞ ± i0) = +∞ ± i0; the finite case follows by
+    // conjugate symmetry and e^x > 0). Forming e^x · sin(0) would give ∞ · 0 = NaN there.
+    if (z.im.isZero()) return new Approximation(m, z.im, m.exponent() - bits, -Infinity);
     const [s, c] = realSinCos(z.im, w);
     return Approximation.relative(m.mul(c), m.mul(s), bits);
   },

@@ -2,6 +2,7 @@ import { Approximation } from '../complex/approximation';
 import { BigComplex } from '../complex/big-complex';
 import type { PowerExponent } from '../complex/power-exponent';
 import { BigFloat } from '../numbers/big-float';
+import { bitLength } from '../numbers/bit-length';
 import { Rational } from '../numbers/rational';
 import { FixedTables } from '../real/fixed-tables';
 import { realExp } from '../real/real-exp';
@@ -36,17 +37,18 @@ export function pow(z: BigComplex, w: PowerExponent, bits: number): Approximatio
   if (exponent && exponent.isInteger() && abs(exponent.num) <= MAX_EXACT_INTEGER && z.isFinite()) {
     return integerPower(z, Number(exponent.num), bits);
   }
-  const wc = w.kind === 'complex' ? w.value : null;
-  if (!z.isFinite() || (wc && !wc.isFinite())) return formal(z, w, bits);
-  if (z.isZero()) return zeroBase(z, exponent ? exponent.compare(Rational.ZERO) : realSign(wc as BigComplex), bits);
-  const approxLog = Math.abs(Math.log(Math.hypot(z.re.toDouble(), z.im.toDouble()) || Number.MIN_VALUE)) + 4;
-  const wr = exponent ? exponent : null;
-  const wMag = wr
-    ? Math.abs(Number(wr.num) / Number(wr.den)) || 1
-    : Math.hypot((wc as BigComplex).re.toDouble(), (wc as BigComplex).im.toDouble());
-  const scale = Math.max(0, Math.ceil(Math.log2(wMag * approxLog + 1)));
+  if (!z.isFinite() || (w.kind === 'complex' && !w.value.isFinite())) return formal(z, w, bits);
+  if (z.isZero()) return zeroBase(z, exponent ? exponent.compare(Rational.ZERO) : realSign(w), bits);
+  // How many bits |w · Log z| has before the point, from exponents alone: a double's hypot or
+  // log overflowed at |z| near 2^1024 and at a p/q with a long numerator ("The number Infinity
+  // cannot be converted to a BigInt"). |Log z| ≤ (|top| + 1)·ln 2 + π for 2^(top−1) ≤ |z| < 2^(top+1).
+  const top = Math.max(z.re.exponent(), z.im.exponent());
+  const logBits = Math.log2((Math.abs(top) + 1) * Math.LN2 + 4);
+  const scale = Math.max(0, Math.ceil(exponentBits(w, exponent) + logBits) + 1);
   const F = bits + 24 + scale;
   const L = log.evaluate(z, F);
+  const wr = exponent;
+  const wc = wr ? null : complexParts(w, F + 8);
   let Pr: BigFloat;
   let Pi: BigFloat;
   if (wr) {
@@ -54,21 +56,27 @@ export function pow(z: BigComplex, w: PowerExponent, bits: number): Approximatio
     Pr = r.mul(L.re).truncate(F + 8);
     Pi = r.mul(L.im).truncate(F + 8);
   } else {
-    const c = wc as BigComplex;
-    Pr = c.re
+    const [cr, ci] = wc as [BigFloat, BigFloat];
+    Pr = cr
       .mul(L.re)
-      .sub(c.im.mul(L.im))
+      .sub(ci.mul(L.im))
       .truncate(F + 8);
-    Pi = c.re
+    Pi = cr
       .mul(L.im)
-      .add(c.im.mul(L.re))
+      .add(ci.mul(L.re))
       .truncate(F + 8);
   }
   const M = realExp(Pr, F);
-  const quarterTurns = wr ? axisQuarterTurns(z) : null;
-  if (wr && quarterTurns !== null) {
-    const [s, c] = exactAngle(wr.mul(new Rational(BigInt(quarterTurns), 2n)), wr, z, F);
-    return Approximation.relative(M.mul(c), M.mul(s), bits);
+  const eighthTurns = specialAngle(z);
+  if (eighthTurns !== null && (wr || (eighthTurns !== 0 && isUnitAxisPoint(z)))) {
+    // arg z^w = Re w · arg z, a rational multiple of π: exactly so when w is real, and when z is
+    // ±1 or ±i (ln|z| = 0, so Im(w · Log z) = Re w · arg z); see exactAngle.
+    const re = wr ?? realPart(w);
+    const [s, c] = exactAngle(re.mul(new Rational(BigInt(eighthTurns), 4n)), re, z, F);
+    const err = wr ? null : M.exponent() + scale + 4 - F;
+    if (err === null) return Approximation.relative(M.mul(c), M.mul(s), bits);
+    const [pr, pi] = [M.mul(c), M.mul(s)];
+    return new Approximation(pr, pi, pr.isZero() ? -Infinity : err, pi.isZero() ? -Infinity : err);
   }
   const [s, c] = realSinCos(Pi, F);
   const err = M.exponent() + scale + 4 - F;
@@ -83,21 +91,61 @@ function abs(n: bigint): bigint {
 
 function asRational(w: PowerExponent): Rational | null {
   if (w.kind === 'rational') return w.value;
+  if (w.kind === 'gaussian') return w.im.isZero() ? w.re : null;
   const { re, im } = w.value;
-  if (im.isZero() && re.isFinite()) return Rational.fromDouble(re.toDouble());
+  if (im.isZero() && re.isFinite()) return Rational.fromBigFloat(re);
   return null;
 }
 
-function realSign(w: BigComplex): number {
-  if (w.re.isZero()) return w.im.isZero() ? 0 : NaN;
-  return w.re.signbit() ? -1 : 1;
+/** Re w exactly, for a complex w with finite parts. */
+function realPart(w: PowerExponent): Rational {
+  if (w.kind === 'rational') return w.value;
+  return w.kind === 'gaussian' ? w.re : Rational.fromBigFloat(w.value.re);
 }
 
-/** arg z / (π/2) when z is on an axis: 0 for x > 0, ±1 for ±iy, ±2 for x < 0 (sign of y). */
-function axisQuarterTurns(z: BigComplex): number | null {
-  if (z.im.isZero()) return z.re.signbit() ? (z.im.signbit() ? -2 : 2) : 0;
-  if (z.re.isZero()) return z.im.signbit() ? -1 : 1;
-  return null;
+/** The parts of a complex w: a double's exactly, a non-binary rational's to `bits` bits. */
+function complexParts(w: PowerExponent, bits: number): [BigFloat, BigFloat] {
+  if (w.kind === 'complex') return [w.value.re, w.value.im];
+  if (w.kind === 'gaussian') return [w.re.toBigFloat(bits), w.im.toBigFloat(bits)];
+  return [w.value.toBigFloat(bits), BigFloat.ZERO];
+}
+
+/** An upper bound on log2 |w| (0 for w = 0), from bit lengths, never overflowing. */
+function exponentBits(w: PowerExponent, exponent: Rational | null): number {
+  const ratioBits = (r: Rational) => (r.isZero() ? 0 : bitLength(abs(r.num)) - bitLength(r.den) + 1);
+  if (exponent) return Math.max(0, ratioBits(exponent));
+  if (w.kind === 'gaussian') return Math.max(0, ratioBits(w.re), ratioBits(w.im)) + 1;
+  if (w.kind === 'complex') return Math.max(0, w.value.re.exponent(), w.value.im.exponent()) + 1;
+  return 0;
+}
+
+function realSign(w: PowerExponent): number {
+  if (w.kind === 'rational') return w.value.compare(Rational.ZERO);
+  if (w.kind === 'gaussian') return w.re.isZero() ? (w.im.isZero() ? 0 : NaN) : w.re.compare(Rational.ZERO);
+  if (w.value.re.isZero()) return w.value.im.isZero() ? 0 : NaN;
+  return w.value.re.signbit() ? -1 : 1;
+}
+
+/**
+ * arg z / (π/4) when it is a whole number: z on an axis (0 for x > 0, ±2 for ±iy, ±4 for x < 0,
+ * the sign of y) or on a diagonal |x| = |y| (±1, ±3). Off these, arg z is an irrational multiple
+ * of π for a z with binary-fraction parts (tan(arg z) = y/x is rational, and the only rational
+ * values tan takes at rational multiples of π are 0 and ±1: Niven, Irrational Numbers, 1956,
+ * cor. 3.12, from memory).
+ */
+function specialAngle(z: BigComplex): number | null {
+  const down = z.im.signbit();
+  if (z.im.isZero()) return z.re.signbit() ? (down ? -4 : 4) : 0;
+  if (z.re.isZero()) return down ? -2 : 2;
+  if (z.re.compareAbs(z.im) !== 0) return null;
+  const turns = z.re.signbit() ? 3 : 1;
+  return down ? -turns : turns;
+}
+
+/** z = ±1 or ±i, where ln|z| = 0 exactly. */
+function isUnitAxisPoint(z: BigComplex): boolean {
+  const one = (x: BigFloat) => x.compareAbs(BigFloat.ONE) === 0;
+  return (z.im.isZero() && one(z.re)) || (z.re.isZero() && one(z.im));
 }
 
 /** [sin, cos] of θ = turns·π for rational `turns`, exact where θ is a multiple of π/2. */
@@ -146,6 +194,7 @@ function zeroBase(z: BigComplex, sign: number, bits: number): Approximation {
 function formal(z: BigComplex, w: PowerExponent, bits: number): Approximation {
   const L = log.special(z)?.toApproximation(bits) ?? log.evaluate(z, bits);
   const l = new BigComplex(L.re, L.im);
-  const P = w.kind === 'complex' ? w.value.mul(l) : l.mulReal(w.value.toBigFloat(bits + 8));
+  const [wr, wi] = complexParts(w, bits + 8);
+  const P = w.kind === 'rational' ? l.mulReal(wr) : new BigComplex(wr, wi).mul(l);
   return exp.special(P)?.toApproximation(bits) ?? exp.evaluate(P, bits);
 }
