@@ -1,9 +1,10 @@
 """Answers batches of requests from Python's cmath and mpmath (Debian's python3-mpmath).
 
 Reads one JSON document on stdin: {"source": "cmath"|"cmath-formula"|"mpmath", "dps": 60, "points": [...]},
-each point {"fn", "z": [re, im] as float.hex strings, "w"?: [re, im] hex | "p/q", "n"?: int}.
+each point {"fn", "z": [re, im] as float.hex strings, "w"?: [re, im] hex or p/q | "p/q", "n"?: int}.
 Writes one JSON document: a list of results, each {"re", "im"} as float.hex (cmath) or as
-decimal strings with dps digits plus "re_double"/"im_double" float.hex (mpmath), or
+decimal strings with dps digits plus "re_double"/"im_double" (mpmath's float()) and
+"re_rounded"/"im_rounded" (correctly rounded from the exact binary value) as float.hex (mpmath), or
 {"raises": "ValueError"} when cmath raises instead of returning a value.
 """
 import cmath
@@ -42,6 +43,35 @@ def run_cmath_formula(points):
     return out
 
 
+def parse_exact(text, mpf):
+    """A wire number for mpmath: p/q as that ratio at the working precision, else a double."""
+    if "/" in text:
+        q = Fraction(text)
+        return mpf(q.numerator) / q.denominator
+    return mpf(parse_float(text))
+
+
+def correctly_rounded(x):
+    """The binary64 nearest to the mpf x, ties to even, with gradual underflow and overflow.
+
+    float(mpf) rounds to 53 bits and then lets ldexp round again in the subnormal range (twice
+    rounded), so the rounding is done here from x's exact binary value instead."""
+    sign, man, exp, bc = x._mpf_
+    if man == 0:
+        return 0.0
+    top = exp + bc
+    if top > 1025:
+        return -float("inf") if sign else float("inf")
+    if top < -1075:
+        return -0.0 if sign else 0.0
+    value = Fraction(man) * (Fraction(2) ** exp)
+    try:
+        f = float(value)
+    except OverflowError:
+        f = float("inf")
+    return -f if sign else f
+
+
 def run_mpmath(points, dps):
     import mpmath
     from mpmath import mp, mpc, mpf
@@ -58,10 +88,9 @@ def run_mpmath(points, dps):
         if fn == "pow":
             w = p["w"]
             if isinstance(w, str):
-                q = Fraction(w)
-                arg = mpf(q.numerator) / q.denominator
+                arg = parse_exact(w, mpf)
             else:
-                arg = mpc(mpf(parse_float(w[0])), mpf(parse_float(w[1])))
+                arg = mpc(parse_exact(w[0], mpf), parse_exact(w[1], mpf))
             v = mpmath.power(z, arg)
         elif fn == "nthroot":
             v = mpmath.root(z, int(p["n"]))
@@ -73,6 +102,8 @@ def run_mpmath(points, dps):
             "im": mpmath.nstr(v.imag, dps, min_fixed=1, max_fixed=0),
             "re_double": float(v.real).hex(),
             "im_double": float(v.imag).hex(),
+            "re_rounded": correctly_rounded(v.real).hex(),
+            "im_rounded": correctly_rounded(v.imag).hex(),
         })
     return out
 

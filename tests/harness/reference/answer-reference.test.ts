@@ -1,4 +1,7 @@
 import { answerReference } from '../../../harness/reference/answer-reference';
+import { formatDouble } from '../../../harness/reference/numbers/format-double';
+import { askPython, type OraclePoint } from '../../external/python-oracle';
+import { unhex } from '../../external/unhex';
 
 describe('answerReference', () => {
   it.each(['sin', 'toString', 'constructor', '__proto__', 'hasOwnProperty'])(
@@ -15,5 +18,122 @@ describe('answerReference', () => {
       value: { re: '0', im: '-2' },
       double: { re: '0', im: '-2' },
     });
+  });
+});
+
+const MAX = '1.7976931348623157e308';
+
+/** Milliseconds one answer takes, warm: the second of two runs (the first fills the tables). */
+function warmMs(request: unknown): number {
+  answerReference(request);
+  const t = performance.now();
+  answerReference(request);
+  return performance.now() - t;
+}
+
+function doubleOf(request: unknown): [string, string] {
+  const a = answerReference(request);
+  if ('error' in a) throw new Error(a.error);
+  return [a.double.re, a.double.im];
+}
+
+describe('answerReference at the edges of issue 12', () => {
+  // mpmath, 60 digits (720 working digits, Debian python3-mpmath through /usr/bin/python3), each part
+  // rounded to binary64 from mpmath's exact binary value by tests/external/python/oracle.py.
+  const points: OraclePoint[] = [
+    { fn: 'pow', z: ['-1e300', '0'], w: '1/3' },
+    { fn: 'cbrt', z: [MAX, MAX] },
+    { fn: 'pow', z: ['-1', '0'], w: ['1/2', '1'] },
+    { fn: 'pow', z: ['2.5', '-3'], w: ['1/3', '1/7'] },
+    { fn: 'pow', z: ['-1e300', '1e-300'], w: ['-2/3', '0.5'] },
+  ];
+  let mpmath: { re_rounded: string; im_rounded: string }[] = [];
+  beforeAll(() => {
+    mpmath = askPython('mpmath', points);
+  });
+  const expected = (i: number) => [unhex(mpmath[i]!.re_rounded), unhex(mpmath[i]!.im_rounded)].map(formatDouble);
+
+  it('answers pow(−1e300, 1/3) with the same bits whether w is written "1/3" or {"re": "1/3", "im": "0"}', () => {
+    const z = { re: '-1e300', im: '0' };
+    const ratio = doubleOf({ fn: 'pow', z, w: '1/3' });
+    // The issue's exact answer 5e99 + 8.660254037844387e99i, which mpmath confirms.
+    expect(ratio).toEqual(['5e+99', '8.660254037844387e+99']);
+    expect(ratio).toEqual(expected(0));
+    expect(doubleOf({ fn: 'pow', z, w: { re: '1/3', im: '0' } })).toEqual(ratio);
+    expect(doubleOf({ fn: 'pow', z, w: { re: '1/3', im: '-0' } })).toEqual(ratio);
+  });
+
+  it('keeps both parts of a complex w written as ratios exact', () => {
+    expect(doubleOf({ fn: 'pow', z: { re: '2.5', im: '-3' }, w: { re: '1/3', im: '1/7' } })).toEqual(expected(3));
+    expect(doubleOf({ fn: 'pow', z: { re: '-1e300', im: '1e-300' }, w: { re: '-2/3', im: '0.5' } })).toEqual(
+      expected(4),
+    );
+  });
+
+  it('takes a ratio with a power-of-two denominator in z exactly and refuses any other, naming the field', () => {
+    expect(doubleOf({ fn: 'sqrt', z: { re: '-9/4', im: '0' } })).toEqual(
+      doubleOf({ fn: 'sqrt', z: { re: '-2.25', im: '0' } }),
+    );
+    const refused = answerReference({ fn: 'sqrt', z: { re: '1', im: '1/3' } });
+    expect(refused).toEqual({ error: expect.stringMatching(/^z\.im "1\/3" has no exact binary value/) });
+  });
+
+  it.each(['cbrt', 'pow'])('answers %s at z = MAX + MAX·i with the finite cube root', (fn) => {
+    const request = { fn, z: { re: MAX, im: MAX }, ...(fn === 'pow' ? { w: '1/3' } : {}) };
+    // The issue's value 6.119096431615017e102 + 1.6396069472594085e102i, which mpmath confirms.
+    expect(doubleOf(request)).toEqual(['6.119096431615017e+102', '1.6396069472594085e+102']);
+    expect(doubleOf(request)).toEqual(expected(1));
+  });
+
+  it('answers exp(1e300 + 0i) with +inf + 0i and names the overflow', () => {
+    // ISO/IEC 9899:2011 G.6.3.1: cexp(conj z) = conj(cexp z), and e^x is real for real x, so the
+    // imaginary part is exactly ±0 with the sign of Im z; IEEE 754-2019 §7.4: a finite value
+    // beyond the largest double rounds to +∞ (to nearest) and signals overflow.
+    expect(answerReference({ fn: 'exp', z: { re: '1e300', im: '0' } })).toEqual({
+      value: { re: 'inf', im: '0' },
+      double: { re: 'inf', im: '0' },
+      flags: ['overflow'],
+    });
+    expect(doubleOf({ fn: 'exp', z: { re: '1e300', im: '-0' } })).toEqual(['inf', '-0']);
+  });
+
+  it('rounds e^x below the subnormals to +0 and to a subnormal, naming the underflow', () => {
+    // IEEE 754-2019 §7.5: a tiny, inexact result signals underflow; e^−1000 ≈ 5.1e−435 rounds to
+    // +0 and e^−745 ≈ 4.9e−324 to the least subnormal (value from memory: 2^−1074 ≈ 4.94e−324).
+    expect(answerReference({ fn: 'exp', z: { re: '-1000', im: '0' } })).toMatchObject({
+      double: { re: '0', im: '0' },
+      flags: ['underflow'],
+    });
+    expect(answerReference({ fn: 'exp', z: { re: '-745', im: '0' } })).toMatchObject({
+      double: { re: '5e-324', im: '0' },
+      flags: ['underflow'],
+    });
+    expect(answerReference({ fn: 'exp', z: { re: '-1e300', im: '2' } })).toMatchObject({
+      double: { re: '-0', im: '0' },
+      flags: ['underflow'],
+    });
+  });
+
+  it('answers pow(1, ½ + i) = 1 exactly and pow(−1, ½ + i) with an exactly zero real part, each within 50 ms', () => {
+    expect(answerReference({ fn: 'pow', z: { re: '1', im: '0' }, w: { re: '1/2', im: '1' } })).toEqual({
+      value: { re: '1', im: '0' },
+      double: { re: '1', im: '0' },
+    });
+    // (−1)^(½+i) = e^(iπ(½+i)) = e^−π · i: the real part is exactly 0 (our rule: +0, see pow's TSDoc).
+    const minusOne = { fn: 'pow', z: { re: '-1', im: '0' }, w: { re: '0.5', im: '1' } };
+    expect(answerReference(minusOne)).not.toHaveProperty('warning');
+    expect(doubleOf(minusOne)).toEqual(['0', expected(2)[1]]);
+    expect(warmMs(minusOne)).toBeLessThan(50);
+    expect(warmMs({ fn: 'pow', z: { re: '1', im: '0' }, w: { re: '0.5', im: '1' } })).toBeLessThan(50);
+  });
+
+  it('settles acsch at its branch points ±i, where 1/z is exact, without escalating', () => {
+    // DLMF 4.37.17 (acsch z = asinh(1/z)), at z = i: asinh(−i) = −iπ/2 (value from memory).
+    const a = answerReference({ fn: 'acsch', z: { re: '0', im: '1' } });
+    expect(a).toEqual({
+      value: { re: '0', im: '-1.570796326794896619231321691639751442099' },
+      double: { re: '0', im: '-1.5707963267948966' },
+    });
+    expect(warmMs({ fn: 'acsch', z: { re: '0', im: '1' } })).toBeLessThan(50);
   });
 });
