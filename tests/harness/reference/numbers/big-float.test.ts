@@ -1,3 +1,4 @@
+import { spawnSync } from 'node:child_process';
 import { Decimal } from 'decimal.js';
 import fc from 'fast-check';
 import { BigFloat } from '../../../../harness/reference/numbers/big-float';
@@ -180,5 +181,56 @@ describe('ulpDistance', () => {
     expect(ulpDistance(Number.MAX_VALUE, Infinity)).toBe(1);
     expect(ulpDistance(NaN, 1)).toBe(Infinity);
     expect(ulpDistance(NaN, NaN)).toBe(0);
+  });
+});
+
+describe('BigFloat.toDecimal far beyond the doubles', () => {
+  // Python's decimal module (Debian's /usr/bin/python3), 80 digits, ROUND_HALF_UP to 40: m·2^e
+  // there is exact to 80 digits, so its 40 are the true value's.
+  const cases: [bigint, number][] = [
+    [12345678901234567n, 3000],
+    [98765432123456789n, -5000],
+    [3n, 100000],
+    [7n, -954000],
+    [(1n << 200n) + 1n, -60000],
+    [9007199254740991n, 1100000],
+  ];
+  it('prints the same 40 digits as an exact decimal computation, and quickly', () => {
+    const script = [
+      'import sys, json',
+      'from decimal import Decimal, getcontext, ROUND_HALF_UP',
+      'getcontext().prec = 80',
+      'getcontext().Emax = 10**9; getcontext().Emin = -10**9',
+      'out = []',
+      'for m, e in json.load(sys.stdin):',
+      '    v = Decimal(m) * (Decimal(2) ** e)',
+      "    out.append('{:.39e}'.format(v.quantize(Decimal(1).scaleb(v.adjusted() - 39), rounding=ROUND_HALF_UP)))",
+      'print(json.dumps(out))',
+    ].join('\n');
+    const run = spawnSync('/usr/bin/python3', ['-c', script], {
+      input: JSON.stringify(cases.map(([m, e]) => [m.toString(), e])),
+      encoding: 'utf8',
+    });
+    const expected = JSON.parse(run.stdout) as string[];
+    cases.forEach(([m, e], i) => {
+      const t = performance.now();
+      const ours = BigFloat.of(false, m, e).toDecimal(40);
+      expect(performance.now() - t).toBeLessThan(50);
+      // Same digits (ours drops trailing zeros) and the same power of ten.
+      const [digits, power] = (expected[i] as string).split('e');
+      const [ourDigits, ourPower] = ours.split('e');
+      expect(ourDigits).toBe((digits as string).replace(/\.?0+$/, ''));
+      expect(Number(ourPower)).toBe(Number(power));
+    });
+  });
+});
+
+describe('BigFloat.toDouble below the subnormals', () => {
+  it('rounds to a signed zero below half the least subnormal and to it at three quarters of it', () => {
+    // IEEE 754-2019 §4.3.1 roundTiesToEven with gradual underflow: 2^−1075 is the midpoint between
+    // +0 and 2^−1074 and goes to +0 (even); 3·2^−1076 goes to 2^−1074.
+    expect(Object.is(BigFloat.of(true, 1n, -(2 ** 42)).toDouble(), -0)).toBe(true);
+    expect(Object.is(BigFloat.of(false, 1n, -1075).toDouble(), 0)).toBe(true);
+    expect(BigFloat.of(false, 3n, -1076).toDouble()).toBe(Number.MIN_VALUE);
   });
 });
