@@ -2,6 +2,7 @@ import { Approximation } from '../complex/approximation';
 import { BigComplex } from '../complex/big-complex';
 import type { PowerExponent } from '../complex/power-exponent';
 import { BigFloat } from '../numbers/big-float';
+import { exactPowerMagnitude } from '../complex/exact-power-magnitude';
 import { bitLength } from '../numbers/bit-length';
 import { Rational } from '../numbers/rational';
 import { FixedTables } from '../real/fixed-tables';
@@ -66,8 +67,12 @@ export function pow(z: BigComplex, w: PowerExponent, bits: number): Approximatio
       .add(ci.mul(L.re))
       .truncate(F + 8);
   }
-  const M = realExp(Pr, F);
   const eighthTurns = specialAngle(z);
+  if (wr && eighthTurns !== null && eighthTurns % 2 === 0) {
+    const exact = exactPowerMagnitude((z.im.isZero() ? z.re : z.im).abs(), wr);
+    if (exact) return exactMagnitudePower(exact, wr.mul(new Rational(BigInt(eighthTurns), 4n)), wr, z, F);
+  }
+  const M = realExp(Pr, F);
   if (eighthTurns !== null && (wr || (eighthTurns !== 0 && isUnitAxisPoint(z)))) {
     // arg z^w = Re w · arg z, a rational multiple of π: exactly so when w is real, and when z is
     // ±1 or ±i (ln|z| = 0, so Im(w · Log z) = Re w · arg z); see exactAngle.
@@ -164,6 +169,30 @@ function exactAngle(turns: Rational, w: Rational, z: BigComplex, F: number): [Bi
   const G = F + 16 + Math.max(0, turns.num.toString(2).length - turns.den.toString(2).length);
   const theta = BigFloat.fromBigInt(turns.num * FixedTables.pi(G)).div(BigFloat.fromBigInt(turns.den << BigInt(G)), G);
   return realSinCos(theta, F);
+}
+
+/**
+ * M·(cos θ + i sin θ) with M exact and θ = turns·π: a part is exact where its trigonometric
+ * factor is rational, which at a rational multiple of π means 0, ±1 or ±½ (Niven's theorem,
+ * from memory): cos at multiples of π/3, sin at odd multiples of π/6, both at multiples of π/2.
+ * (−8)^(1/3) = 1 + √3·i has an exact real part.
+ */
+function exactMagnitudePower(M: BigFloat, turns: Rational, w: Rational, z: BigComplex, F: number): Approximation {
+  const [s, c] = exactAngle(turns, w, z, F);
+  const halfTurns = turns.mul(new Rational(2n));
+  const half = (k: bigint, table: number[]) =>
+    BigFloat.fromBigInt(BigInt(table[Number(((k % 12n) + 12n) % 12n)] as number), -1);
+  if (halfTurns.isInteger()) return new Approximation(M.mul(c), M.mul(s), -Infinity, -Infinity);
+  const thirds = turns.mul(new Rational(3n));
+  const sixths = turns.mul(new Rational(6n));
+  // Twice cos(jπ/3), indexed by 2j mod 12, and twice sin(jπ/6) for odd j, indexed by j mod 12.
+  const cosine = thirds.isInteger() ? half(thirds.num * 2n, [2, 0, 1, 0, -1, 0, -2, 0, -1, 0, 1, 0]) : null;
+  const sine =
+    sixths.isInteger() && (sixths.num & 1n) === 1n ? half(sixths.num, [0, 1, 0, 2, 0, 1, 0, -1, 0, -2, 0, -1]) : null;
+  const re = M.mul(cosine ?? c);
+  const im = M.mul(sine ?? s);
+  const err = (part: BigFloat, exact: boolean) => (exact || part.isZero() ? -Infinity : part.exponent() - F + 2);
+  return new Approximation(re, im, err(re, cosine !== null), err(im, sine !== null));
 }
 
 function integerPower(z: BigComplex, n: number, bits: number): Approximation {

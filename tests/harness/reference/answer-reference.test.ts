@@ -127,6 +127,25 @@ describe('answerReference at the edges of issue 12', () => {
     expect(warmMs({ fn: 'pow', z: { re: '1', im: '0' }, w: { re: '0.5', im: '1' } })).toBeLessThan(50);
   });
 
+  it('answers an exact power that is a midpoint between two doubles by ties-to-even, within 50 ms', () => {
+    // (262143²)^(3/2) = 262143³ = 18014192351838207 (exact integer arithmetic), odd and between
+    // 2^53 and 2^54, so halfway between the doubles …206 and …208; IEEE 754-2019 §4.3.1
+    // roundTiesToEven picks …208, whose significand is even.
+    const s = 262143n;
+    const request = { fn: 'pow', z: { re: String(s * s), im: '0' }, w: '3/2' };
+    expect(String(s ** 3n)).toBe('18014192351838207');
+    expect(answerReference(request)).toEqual({
+      value: { re: '18014192351838207', im: '0' },
+      double: { re: '18014192351838208', im: '0' },
+    });
+    expect(warmMs(request)).toBeLessThan(50);
+    // (−8)^(1/3) = 2·e^(iπ/3) = 1 + √3·i (DLMF 4.2.26): the real part is exactly 1.
+    const cube = answerReference({ fn: 'pow', z: { re: '-8', im: '0' }, w: '1/3', digits: 60 });
+    expect(cube).toMatchObject({ value: { re: '1' }, double: { re: '1', im: '1.7320508075688772' } });
+    // 2^−1074 is the least subnormal exactly: tiny but exact, so no underflow (IEEE 754-2019 §7.5).
+    expect(answerReference({ fn: 'pow', z: { re: '2', im: '0' }, w: '-1074' })).not.toHaveProperty('flags');
+  });
+
   it('settles acsch at its branch points ±i, where 1/z is exact, without escalating', () => {
     // DLMF 4.37.17 (acsch z = asinh(1/z)), at z = i: asinh(−i) = −iπ/2 (value from memory).
     const a = answerReference({ fn: 'acsch', z: { re: '0', im: '1' } });
