@@ -39,6 +39,7 @@ export { versionMatrix } from './matrix/version-matrix';
 export { BigComplex } from './reference/complex/big-complex';
 export { principalDouble } from './reference/principal-double';
 export { principalValue } from './reference/principal-value';
+export { answerReference } from './reference/answer-reference';
 export { ulpsApart } from './checks/ulps-apart';
 
 // The function catalogue, for the demo-suite generator.

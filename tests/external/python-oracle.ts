@@ -11,6 +11,8 @@ export interface OraclePoint {
   n?: number;
   /** For source "cmath-formula": the subject written as a Python expression over z. */
   formula?: string;
+  /** For mpmath: working digits for this point, when 660 past `dps` is not enough. */
+  work_dps?: number;
 }
 
 /** Sends one batch of points to tests/external/python/oracle.py and returns its answers, in order. */

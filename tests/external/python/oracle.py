@@ -83,6 +83,9 @@ def run_mpmath(points, dps):
     names = {"pow": "power", "nthroot": "root"}
     out = []
     for p in points:
+        # A point may ask for more working digits: a part of 1/z as small as 1e-904 beside 1
+        # (asech at z = -1.57e308 + 6.4e-288i) is lost at 720, and its sign picks the side of a cut.
+        mp.dps = p.get("work_dps", dps + 660)
         z = mpc(mpf(parse_float(p["z"][0])), mpf(parse_float(p["z"][1])))
         fn = p["fn"]
         if fn == "pow":
