@@ -29,9 +29,23 @@ const MAX_EXACT_INTEGER = 1024;
  * 0^w = +0 ± 0i (the sign of Im z) for Re w > 0, +∞ + 0i for Re w < 0, NaN + iNaN for
  * Re w = 0 ≠ Im w; with an infinite or NaN operand, cexp(w·clog z) evaluated formally.
  *
- * Exact zero parts: when z lies on an axis and w is real, arg z^w = w·kπ/2 is a rational
- * multiple of π, and a part that is exactly zero ((−4)^(1/2) = 0 + 2i) is made exactly
- * zero instead of being approached forever by the rounding loop.
+ * Exact parts, proved rather than approached forever by the rounding loop:
+ * - Angles. When z lies on an axis or a diagonal and w is real, arg z^w = w·kπ/4 is a rational
+ *   multiple of π; so is it for any complex w at z = ±1, ±i (ln|z| = 0, arg z^w = Re w·kπ/2).
+ *   A part whose cos or sin is 0 there is an exact zero: (−4)^(1/2) = 0 + 2i, and
+ *   (−1)^(½+i) = 0 + e^−π·i, which escalated to the 16,384-bit cap before. Its sign, our rule
+ *   (cpow has no Annex G table): +0, the sign cos and sin take at those angles; at angle ±0
+ *   (z on the positive real axis) the zero is the IEEE product sign of w and Im z, as w·Log z
+ *   computed in IEEE arithmetic gives.
+ * - Magnitudes. On an axis with w = p/q, |z|^w is exact when |z| is a q-th power of a binary
+ *   fraction ({@link exactPowerMagnitude}); with the angle's cos or sin in {0, ±½, ±1} that part
+ *   is exact too: (262143²)^(3/2) = 262143³, a midpoint between two doubles, rounds to even.
+ * - Bounds. For real w and a small angle each part is bounded relative to itself, so a tiny
+ *   part beside a large one (1 − 4.2e−724i) settles at the first precision.
+ *
+ * Range: every finite z and w. The working precision is sized from exponents (|z| up to 2^1024,
+ * a p/q of any length), and e^(Re w·Log z) beyond binary64 saturates (see realExp) so the parts
+ * round to ±∞ or a signed zero as IEEE 754 says.
  */
 export function pow(z: BigComplex, w: PowerExponent, bits: number): Approximation {
   const exponent = asRational(w);

@@ -2,6 +2,9 @@ import { answerReference } from '../../../harness/reference/answer-reference';
 import { formatDouble } from '../../../harness/reference/numbers/format-double';
 import { askPython, type OraclePoint } from '../../external/python-oracle';
 import { unhex } from '../../external/unhex';
+import { FUNCTION_ARITY } from '../../../shared/function-arity';
+import { compareWithMpmath } from '../../../scripts/reference-sweep/compare-with-mpmath';
+import type { SweepInput } from '../../../scripts/reference-sweep/sweep-inputs';
 
 describe('answerReference', () => {
   it.each(['sin', 'toString', 'constructor', '__proto__', 'hasOwnProperty'])(
@@ -155,4 +158,97 @@ describe('answerReference at the edges of issue 12', () => {
     });
     expect(warmMs({ fn: 'acsch', z: { re: '0', im: '1' } })).toBeLessThan(50);
   });
+});
+
+const TINY = '5e-324';
+const NORMAL_MIN = '2.2250738585072014e-308';
+
+/** The request fields after z that each catalogue function needs. */
+function argumentsOf(fn: string): { w?: string; n?: number } {
+  if (fn === 'pow') return { w: '-2/5' };
+  return fn === 'nthroot' ? { n: 3 } : {};
+}
+
+describe('every catalogue function at the ends of binary64', () => {
+  const zs: [string, string][] = [
+    [MAX, MAX],
+    [`-${MAX}`, MAX],
+    [MAX, `-${TINY}`],
+    [TINY, TINY],
+    [`-${TINY}`, NORMAL_MIN],
+    ['1e-310', `-${MAX}`],
+  ];
+  const inputs: SweepInput[] = Object.keys(FUNCTION_ARITY).flatMap((fn) =>
+    zs.map(([re, im]) => ({
+      fn,
+      z: { re, im },
+      convention: 'signed-zero' as const,
+      category: 'ends',
+      ...argumentsOf(fn),
+    })),
+  );
+  const answers = inputs.map(({ category: _category, ...request }) => answerReference(request));
+
+  it('answers each without an error, a NaN or an undecided rounding', () => {
+    const bad = answers
+      .map((a, i) => ({ a, z: inputs[i]!.z, fn: inputs[i]!.fn }))
+      .filter(({ a }) => {
+        return 'error' in a || a.double.re === 'nan' || a.double.im === 'nan' || a.warning !== undefined;
+      });
+    expect(bad).toEqual([]);
+  });
+
+  it('agrees bit for bit with mpmath', () => {
+    // mpmath, 60 digits on 720 + 2·(orders of magnitude between the parts) working digits.
+    const agreement = compareWithMpmath(inputs, answers, inputs.length);
+    expect(agreement).toMatchObject({ compared: inputs.length, disagreements: [] });
+  });
+});
+
+describe('exact zeros on the real axis', () => {
+  // Where a function maps a stretch of the real axis to itself its value there is real: the
+  // imaginary part is exactly a zero, and f(x − 0i) = conj f(x + 0i) gives the two zeros opposite
+  // signs (ISO/IEC 9899:2011 G.6 states conjugate symmetry for cexp, clog, csqrt and the inverse
+  // functions; DLMF 4.2, 4.23, 4.37 for the reciprocal ones and for z^w with real w).
+  const real: [string, string[]][] = [
+    ['sqrt', ['2', '1e300', TINY]],
+    ['log', ['2', '1e300', TINY]],
+    ['exp', ['1e300', '-1e300', '709.5', '-745.5', '3']],
+    ['cbrt', ['8', '1e-300']],
+    ['nthroot', ['8', MAX]],
+    ['pow', ['2', '1e-300']],
+    ['asin', ['0.5', '-0.75', '1e-300']],
+    ['acos', ['0.5', '-0.75']],
+    ['atan', ['3', '-1e300', TINY]],
+    ['asinh', ['3', '-1e300', TINY]],
+    ['acosh', ['1.5', '1e300']],
+    ['atanh', ['0.5', '-0.75', '1e-300']],
+    ['acot', ['3', '-1e-300']],
+    ['asec', ['2', '-1e300']],
+    ['acsc', ['2', '-1e300']],
+    ['acoth', ['2', '-3']],
+    ['asech', ['0.5', '1e-300']],
+    ['acsch', ['3', '-1e-300']],
+  ];
+  const cases = real.flatMap(([fn, xs]) => xs.map((x) => ({ fn, x })));
+  let mpmath: { re_rounded: string; im_rounded: string }[] = [];
+  beforeAll(() => {
+    const points: OraclePoint[] = cases.map(({ fn, x }) => ({ fn, z: [x, '0'], ...argumentsOf(fn) }));
+    mpmath = askPython('mpmath', points);
+  });
+
+  it.each(cases.map((c, i) => [c.fn, c.x, i] as const))(
+    'answers %s(%s ± 0i) with an exact zero imaginary part of the sign of Im z, promptly',
+    (fn, x, i) => {
+      const upper = { fn, z: { re: x, im: '0' }, ...argumentsOf(fn) };
+      const lower = { ...upper, z: { re: x, im: '-0' } };
+      const [re, im] = doubleOf(upper);
+      const [reLower, imLower] = doubleOf(lower);
+      expect([re, reLower]).toEqual([formatDouble(unhex(mpmath[i]!.re_rounded)), re]);
+      expect(['0', '-0']).toContain(im);
+      expect(imLower).toBe(im === '0' ? '-0' : '0');
+      expect(answerReference(upper)).not.toHaveProperty('warning');
+      expect(warmMs(upper)).toBeLessThan(50);
+    },
+  );
 });
