@@ -6,6 +6,7 @@ import { exactPowerMagnitude } from '../complex/exact-power-magnitude';
 import { bitLength } from '../numbers/bit-length';
 import { Rational } from '../numbers/rational';
 import { FixedTables } from '../real/fixed-tables';
+import { realAtan2 } from '../real/real-atan2';
 import { realExp } from '../real/real-exp';
 import { realSinCos } from '../real/real-sin-cos';
 import { exp } from './exp';
@@ -66,10 +67,18 @@ export function pow(z: BigComplex, w: PowerExponent, bits: number): Approximatio
   const wc = wr ? null : complexParts(w, F + 8);
   let Pr: BigFloat;
   let Pi: BigFloat;
+  let relativeAngle = false;
   if (wr) {
     const r = wr.toBigFloat(F + 8);
     Pr = r.mul(L.re).truncate(F + 8);
-    Pi = r.mul(L.im).truncate(F + 8);
+    // Arg z = q·π/2 + rest: w·q/2 turns of π are reduced mod 2 exactly, and only w·rest is
+    // rounded. (−8.6e−309 − 1.8e171i)^−MAX has w·Arg z = an even multiple of π + 8.5e−172: taken
+    // whole, the angle's error swamped that and the rounding loop climbed to 2,272 bits.
+    const [q, rest] = quarterTurns(z, F + 8);
+    const turns = modTwo(wr.mul(new Rational(BigInt(q), 2n)));
+    const spin = r.mul(rest).truncate(F + 8);
+    relativeAngle = turns.isZero();
+    Pi = relativeAngle ? spin : piTimes(turns, F + 8).add(spin).truncate(F + 8);
   } else {
     const [cr, ci] = wc as [BigFloat, BigFloat];
     Pr = cr
@@ -100,12 +109,12 @@ export function pow(z: BigComplex, w: PowerExponent, bits: number): Approximatio
   const [s, c] = realSinCos(Pi, F);
   const re = M.mul(c);
   const im = M.mul(s);
-  // For real w and |Im P| < 1/2, Im P = w·Arg z is a product of relatively accurate factors, so
+  // For real w, no whole turns left and |Im P| < 1/2, Im P = w·rest is a product of relatively accurate factors, so
   // sin and cos of it, and both parts, are relatively accurate too (|P| < 2^scale bounds what
   // Re P's error costs M): each part's bound is relative to itself. Otherwise the angle's error is
   // absolute and bounds both parts by |M|. Bounding a tiny part by |M| had pow(8.1e307 + 1.5e−108i,
   // −2.2e−308), whose imaginary part is 4.2e−724, go to 4,096 bits and build tables for 1.5 s.
-  const relative = wr !== null && Pi.exponent() < -1;
+  const relative = relativeAngle && Pi.exponent() < -1;
   const err = (part: BigFloat) => (part.isZero() ? -Infinity : (relative ? part : M).exponent() + scale + 4 - F);
   return new Approximation(re, im, err(re), err(im));
 }
@@ -187,8 +196,34 @@ function exactAngle(turns: Rational, w: Rational, z: BigComplex, F: number): [Bi
     return [sines[q] as BigFloat, cosines[q] as BigFloat];
   }
   const G = F + 16 + Math.max(0, turns.num.toString(2).length - turns.den.toString(2).length);
-  const theta = BigFloat.fromBigInt(turns.num * FixedTables.pi(G)).div(BigFloat.fromBigInt(turns.den << BigInt(G)), G);
-  return realSinCos(theta, F);
+  return realSinCos(piTimes(turns, G), F);
+}
+
+/** turns·π with relative error below 2^−bits. */
+function piTimes(turns: Rational, bits: number): BigFloat {
+  return BigFloat.fromBigInt(turns.num * FixedTables.pi(bits)).div(BigFloat.fromBigInt(turns.den << BigInt(bits)), bits);
+}
+
+/** t mod 2, in [0, 2). */
+function modTwo(t: Rational): Rational {
+  const period = 2n * t.den;
+  return new Rational(((t.num % period) + period) % period, t.den);
+}
+
+/**
+ * Arg z = q·π/2 + rest for a non-zero finite z, with q in {−2, −1, 0, 1, 2} and |rest| ≤ π/4
+ * to `bits` bits relative: rest is the argument of z turned by −q quarter turns (exactly, by
+ * swapping and negating parts), so a z near an axis keeps its small angle whole. Zero signs
+ * follow atan2: q = ±2 for x < 0 takes the sign of y, as Arg does on the cut.
+ */
+function quarterTurns(z: BigComplex, bits: number): [number, BigFloat] {
+  const { re: x, im: y } = z;
+  if (x.compareAbs(y) >= 0) {
+    if (!x.signbit()) return [0, realAtan2(y, x, bits)];
+    return [y.signbit() ? -2 : 2, realAtan2(y.negate(), x.negate(), bits)];
+  }
+  if (!y.signbit()) return [1, realAtan2(x.negate(), y, bits)];
+  return [-1, realAtan2(x, y.negate(), bits)];
 }
 
 /**

@@ -26,12 +26,20 @@ describe('answerReference', () => {
 
 const MAX = '1.7976931348623157e308';
 
-/** Milliseconds one answer takes, warm: the second of two runs (the first fills the tables). */
+/**
+ * Milliseconds one answer takes, warm: the fastest of three runs after one that fills the tables.
+ * Other work on the shared 2-core machine only ever adds time (one of these once read 51 ms
+ * while jest ran 15 files on two workers).
+ */
 function warmMs(request: unknown): number {
   answerReference(request);
-  const t = performance.now();
-  answerReference(request);
-  return performance.now() - t;
+  let best = Infinity;
+  for (let run = 0; run < 3; run++) {
+    const t = performance.now();
+    answerReference(request);
+    best = Math.min(best, performance.now() - t);
+  }
+  return best;
 }
 
 function doubleOf(request: unknown): [string, string] {

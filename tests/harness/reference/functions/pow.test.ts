@@ -1,3 +1,4 @@
+import { Decimal as DecimalJs } from 'decimal.js';
 import { BigComplex } from '../../../../harness/reference/complex/big-complex';
 import { pow } from '../../../../harness/reference/functions/pow';
 import { Rational } from '../../../../harness/reference/numbers/rational';
@@ -6,6 +7,7 @@ import { unhex } from '../../../external/unhex';
 
 /** The working precision principalValue starts at for the double and 40 digits: ⌈40·log2 10⌉ + 4 + 8. */
 const FIRST_BITS = 145;
+const Decimal = DecimalJs.clone({ precision: 60 });
 const WANT_BITS = 137;
 
 describe('pow', () => {
@@ -25,5 +27,30 @@ describe('pow', () => {
     // The first 30 significant digits and the power of ten (the last digits differ by rounding).
     expect([ours.slice(0, 32), ours.split('e')[1]]).toEqual([theirs.slice(0, 32), theirs.split('e')[1]]);
     expect(Object.is(a.im.toDouble(), unhex(m!.im_rounded))).toBe(true);
+  });
+
+  it('settles at the first working precision when w·Arg z is whole turns of π plus a tiny angle', () => {
+    // z = −8.644005954005547e−309 − 1.8194185087661534e171i, w = −MAX: Arg z = −π/2 − 4.75e−480,
+    // and −MAX·(−π/2) is an even multiple of π, so z^w is real up to a factor of 2^−568 in its
+    // imaginary part. Reducing the angle whole, the rounding loop needed 1,160 bits.
+    const z = BigComplex.fromDoubles(-8.644005954005547e-309, -1.8194185087661534e171);
+    const w = Rational.fromDouble(-Number.MAX_VALUE);
+    const a = pow(z, { kind: 'rational', value: w }, FIRST_BITS);
+    expect(a.decided(true, WANT_BITS)).toBe(true);
+    // mpmath, 60 digits on 720 working digits: the same angle. |z^w| is far below every double
+    // (ours is realExp's stand-in there), so compare Im/Re = tan(8.5e−172) to 25 digits.
+    const [m] = askPython<{ re: string; im: string }>('mpmath', [
+      { fn: 'pow', z: ['-8.644005954005547e-309', '-1.8194185087661534e171'], w: `${w.num}/${w.den}` },
+    ]);
+    const split = (t: string): [DecimalJs, bigint] => {
+      const [mantissa, exponent] = t.split('e') as [string, string];
+      return [new Decimal(mantissa), BigInt(exponent)];
+    };
+    const [mr, er] = split(m!.re);
+    const [mi, ei] = split(m!.im);
+    const theirs = mi.div(mr).times(new Decimal(10).pow(Number(ei - er)));
+    const ours = new Decimal(a.im.div(a.re, 200).toDecimal(40));
+    expect(ours.minus(theirs).abs().lte(theirs.abs().times(1e-25))).toBe(true);
+    expect(theirs.toExponential(3)).toMatch(/e-172$/);
   });
 });
