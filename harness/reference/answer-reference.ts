@@ -6,6 +6,7 @@ import { BigComplex } from './complex/big-complex';
 import type { PowerExponent } from './complex/power-exponent';
 import { describeRequestError } from './describe-request-error';
 import { BigFloat } from './numbers/big-float';
+import { bitLength } from './numbers/bit-length';
 import { formatDouble } from './numbers/format-double';
 import { parseDouble } from './numbers/parse-double';
 import { parseNumber } from './numbers/parse-number';
@@ -13,6 +14,7 @@ import { Rational } from './numbers/rational';
 import { principalValue } from './principal-value';
 
 const RATIO = /^\s*[+-]?\d+\/\d+\s*$/;
+const HEX = /^\s*[+-]?0x/i;
 const DEFAULT_DIGITS = 40;
 /**
  * Beyond 2^±2^20 (about 10^±315,653) a part's digits are not printed: the "value" part is then its
@@ -20,6 +22,8 @@ const DEFAULT_DIGITS = 40;
  * of 2^(2^42), the stand-in for e^x with |x| > 2^40, would need a 2^42-bit integer.
  */
 const PRINTABLE_EXPONENT = 2 ** 20;
+/** A w past 2^1024, beyond every double, is refused. */
+const MAX_EXPONENT_BITS = 1024;
 /** |x| < 2^−1022, below the smallest normal double, is exponent() ≤ −1022. */
 const SMALLEST_NORMAL_EXPONENT = -1022;
 
@@ -33,9 +37,9 @@ class FieldError extends Error {}
  *
  * What a number means here:
  * - z is a library's input. A decimal names the nearest binary64 (ties to even), as a library
- *   parsing it would get; a hex float and a ratio p/q whose q is a power of two are taken exactly,
- *   whatever their length. A ratio with any other q has no exact binary value and is refused,
- *   naming the field, rather than rounded.
+ *   parsing it would get; a ratio p/q or a hex float is taken exactly, and must therefore be a
+ *   double ("-9/4", "0x1p-1074"): one that is not ("1/3", "0x1p+999999") is refused, naming the
+ *   field, rather than rounded.
  * - w describes the mathematics: a ratio p/q is that exact rational, in "w": "1/3" and in
  *   "w": {"re": "1/3", "im": "0"} alike (a zero imaginary part, of either sign, makes w real),
  *   so both spellings give the same bits. A decimal w, like a decimal z, names its double.
@@ -48,9 +52,11 @@ export function answerReference(input: unknown): ReferenceAnswer {
     const z = new BigComplex(basePart(req.z.re, 'z.re'), basePart(req.z.im, 'z.im'));
     let w: PowerExponent | undefined;
     if (typeof req.w === 'string') {
-      w = RATIO.test(req.w)
-        ? { kind: 'rational', value: exactRatio(req.w) }
-        : { kind: 'complex', value: BigComplex.fromDoubles(parseDouble(req.w), 0) };
+      const part = exponentPart(req.w, 'w');
+      w =
+        part instanceof BigFloat
+          ? { kind: 'complex', value: new BigComplex(part, BigFloat.ZERO) }
+          : { kind: 'rational', value: part };
     } else if (req.w) {
       w = complexExponent(req.w.re, req.w.im);
     }
@@ -78,20 +84,27 @@ export function answerReference(input: unknown): ReferenceAnswer {
   }
 }
 
-/** A part of z: a decimal's nearest double, a hex float or a binary ratio exactly, else refused. */
+/**
+ * A part of z: a decimal's nearest double; a ratio or a hex float exactly, when it is a double,
+ * else refused naming the field. z is a library's input, and a value no double holds (1/3,
+ * 0x1p+999999) would be neither what a library receives nor within the range the engine is
+ * checked over.
+ */
 function basePart(text: string, field: string): BigFloat {
-  if (!RATIO.test(text)) return BigFloat.fromDouble(parseDouble(text));
+  if (!RATIO.test(text) && !HEX.test(text)) return BigFloat.fromDouble(parseDouble(text));
   const exact = binaryFraction(text, exactRatio(text));
-  if (exact) return exact;
+  if (exact && BigFloat.fromDouble(exact.toDouble()).compare(exact) === 0 && Number.isFinite(exact.toDouble())) {
+    return exact;
+  }
   throw new FieldError(
-    `${field} "${text.trim()}" has no exact binary value: z is taken exactly, and p/q is only exact when q is a power of two; write a decimal for the nearest double`,
+    `${field} "${text.trim()}" is not exactly a double: z is a library's input, taken exactly when written as p/q or a hex float, so it must be one; write a decimal for the nearest double`,
   );
 }
 
 /** A complex w: real when its imaginary part is zero; its ratios kept exact. */
 function complexExponent(reText: string, imText: string): PowerExponent {
-  const re = exponentPart(reText);
-  const im = exponentPart(imText);
+  const re = exponentPart(reText, 'w.re');
+  const im = exponentPart(imText, 'w.im');
   const isZero = (p: BigFloat | Rational) => (p instanceof BigFloat ? p.isZero() : p.isZero());
   if (isZero(im) && !(re instanceof BigFloat)) return { kind: 'rational', value: re };
   if (re instanceof BigFloat && im instanceof BigFloat) return { kind: 'complex', value: new BigComplex(re, im) };
@@ -99,10 +112,17 @@ function complexExponent(reText: string, imText: string): PowerExponent {
   return { kind: 'gaussian', re: rational(re), im: rational(im) };
 }
 
-/** A part of w: a double, a binary ratio as a BigFloat (exact), or any other ratio as a Rational. */
-function exponentPart(text: string): BigFloat | Rational {
-  if (!RATIO.test(text)) return BigFloat.fromDouble(parseDouble(text));
+/**
+ * A part of w: a decimal's double; a hex float or a binary ratio exactly as a BigFloat; any other
+ * ratio exactly as a Rational. Refused past 2^1024 in magnitude, beyond every double: the working
+ * precision grows with log2 |w| (0x1p+999999 would ask for a million bits).
+ */
+function exponentPart(text: string, field: string): BigFloat | Rational {
+  if (!RATIO.test(text) && !HEX.test(text)) return BigFloat.fromDouble(parseDouble(text));
   const ratio = exactRatio(text);
+  if (bitLength(abs(ratio.num)) - bitLength(ratio.den) > MAX_EXPONENT_BITS) {
+    throw new FieldError(`${field} "${text.trim()}" is larger than any double: write at most about 1.8e308`);
+  }
   return binaryFraction(text, ratio) ?? ratio;
 }
 
@@ -113,6 +133,7 @@ function binaryFraction(text: string, r: Rational): BigFloat | null {
   return r.toBigFloat(0);
 }
 
+/** The exact value of a ratio or a hex float. */
 function exactRatio(text: string): Rational {
   const p = parseNumber(text);
   if (p.kind !== 'exact') throw new FieldError(`"${text}" is not a ratio`);
@@ -145,4 +166,8 @@ function raisedFlags(a: Approximation, double: [number, number]): ReferenceFlag[
     }
   }
   return [...flags].sort();
+}
+
+function abs(n: bigint): bigint {
+  return n < 0n ? -n : n;
 }

@@ -74,6 +74,17 @@ describe('answerReference at the edges of issue 12', () => {
     expect(doubleOf({ fn: 'pow', z, w: { re: '1/3', im: '-0' } })).toEqual(ratio);
   });
 
+  it('takes a hex float in w exactly and refuses one beyond every double, naming the field', () => {
+    const z = { re: '2', im: '1' };
+    expect(doubleOf({ fn: 'pow', z, w: '0x1.8p1' })).toEqual(doubleOf({ fn: 'pow', z, w: '3' }));
+    expect(answerReference({ fn: 'pow', z, w: '0x1p+999999' })).toEqual({
+      error: expect.stringMatching(/^w "0x1p\+999999" is larger than any double/),
+    });
+    expect(answerReference({ fn: 'pow', z, w: { re: '1', im: '0x1p+2000' } })).toEqual({
+      error: expect.stringMatching(/^w\.im "0x1p\+2000" is larger than any double/),
+    });
+  });
+
   it('keeps both parts of a complex w written as ratios exact', () => {
     expect(doubleOf({ fn: 'pow', z: { re: '2.5', im: '-3' }, w: { re: '1/3', im: '1/7' } })).toEqual(expected(3));
     expect(doubleOf({ fn: 'pow', z: { re: '-1e300', im: '1e-300' }, w: { re: '-2/3', im: '0.5' } })).toEqual(
@@ -81,12 +92,21 @@ describe('answerReference at the edges of issue 12', () => {
     );
   });
 
-  it('takes a ratio with a power-of-two denominator in z exactly and refuses any other, naming the field', () => {
+  it('takes a ratio or hex float in z exactly when it is a double and refuses it otherwise, naming the field', () => {
     expect(doubleOf({ fn: 'sqrt', z: { re: '-9/4', im: '0' } })).toEqual(
       doubleOf({ fn: 'sqrt', z: { re: '-2.25', im: '0' } }),
     );
     const refused = answerReference({ fn: 'sqrt', z: { re: '1', im: '1/3' } });
-    expect(refused).toEqual({ error: expect.stringMatching(/^z\.im "1\/3" has no exact binary value/) });
+    expect(refused).toEqual({ error: expect.stringMatching(/^z\.im "1\/3" is not exactly a double/) });
+    expect(answerReference({ fn: 'sqrt', z: { re: '0x1p+999999', im: '0' } })).toEqual({
+      error: expect.stringMatching(/^z\.re "0x1p\+999999" is not exactly a double/),
+    });
+    expect(answerReference({ fn: 'sqrt', z: { re: '0x1.00000000000000000001p0', im: '0' } })).toEqual({
+      error: expect.stringMatching(/^z\.re .* is not exactly a double/),
+    });
+    expect(doubleOf({ fn: 'sqrt', z: { re: '0x1p-1074', im: '-0/4' } })).toEqual(
+      doubleOf({ fn: 'sqrt', z: { re: '5e-324', im: '-0' } }),
+    );
   });
 
   it.each(['cbrt', 'pow'])('answers %s at z = MAX + MAX·i with the finite cube root', (fn) => {
