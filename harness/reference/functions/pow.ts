@@ -78,7 +78,11 @@ export function pow(z: BigComplex, w: PowerExponent, bits: number): Approximatio
     const turns = modTwo(wr.mul(new Rational(BigInt(q), 2n)));
     const spin = r.mul(rest).truncate(F + 8);
     relativeAngle = turns.isZero();
-    Pi = relativeAngle ? spin : piTimes(turns, F + 8).add(spin).truncate(F + 8);
+    Pi = relativeAngle
+      ? spin
+      : piTimes(turns, F + 8)
+          .add(spin)
+          .truncate(F + 8);
   } else {
     const [cr, ci] = wc as [BigFloat, BigFloat];
     Pr = cr
@@ -201,7 +205,10 @@ function exactAngle(turns: Rational, w: Rational, z: BigComplex, F: number): [Bi
 
 /** turns·π with relative error below 2^−bits. */
 function piTimes(turns: Rational, bits: number): BigFloat {
-  return BigFloat.fromBigInt(turns.num * FixedTables.pi(bits)).div(BigFloat.fromBigInt(turns.den << BigInt(bits)), bits);
+  return BigFloat.fromBigInt(turns.num * FixedTables.pi(bits)).div(
+    BigFloat.fromBigInt(turns.den << BigInt(bits)),
+    bits,
+  );
 }
 
 /** t mod 2, in [0, 2). */
