@@ -53,4 +53,20 @@ describe('pow', () => {
     expect(ours.minus(theirs).abs().lte(theirs.abs().times(1e-25))).toBe(true);
     expect(theirs.toExponential(3)).toMatch(/e-172$/);
   });
+
+  it('settles at the first working precision when w·Arg z is whole quarter turns plus a tiny angle', () => {
+    // nthroot(z, 2) = z^(1/2) at z = −1.580157016298496e308 − 2.923296446697851e−297i: Arg z is
+    // −π plus 1.85e−605, half of it three quarter turns plus 9.2e−606, so the real part is about
+    // 1.2e−451 beside an imaginary part near −1.26e154.
+    const z = BigComplex.fromDoubles(-1.580157016298496e308, -2.923296446697851e-297);
+    const a = pow(z, { kind: 'rational', value: new Rational(1n, 2n) }, FIRST_BITS);
+    expect(a.decided(true, WANT_BITS)).toBe(true);
+    // mpmath, 60 digits on 720 + 2·605 working digits (Debian python3-mpmath), each part rounded
+    // by the oracle from mpmath's binary value: the real part underflows to +0.
+    const [m] = askPython<{ re_rounded: string; im_rounded: string; re: string }>('mpmath', [
+      { fn: 'pow', z: ['-1.580157016298496e308', '-2.923296446697851e-297'], w: '1/2', work_dps: 1930 },
+    ]);
+    expect([a.re.toDouble(), a.im.toDouble()]).toEqual([unhex(m!.re_rounded), unhex(m!.im_rounded)]);
+    expect(a.re.toDecimal(25).slice(0, 20)).toBe(m!.re.slice(0, 20));
+  });
 });
