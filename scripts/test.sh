@@ -42,7 +42,7 @@ prepare_e2e_database() {
 # needs anything from them: all five run side by side, each into its own log, shown whole once
 # it ends.
 log "type check, lint, format check, the web export and the e2e database, side by side"
-start_step typecheck npx tsc --noEmit -p tsconfig.json
+start_step typecheck npm run --silent typecheck
 start_step lint npx eslint --max-warnings 0 --cache --cache-strategy content --cache-location "$ROOT/.data/eslint-cache" .
 start_step format npx prettier --check --log-level warn .
 start_step web-export ensure_web_export
