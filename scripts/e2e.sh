@@ -3,8 +3,7 @@
 # export of this invocation's own, so several can run side by side while screens are built.
 # `npm test` stays the one command that runs everything.
 source "$(dirname "$0")/lib.sh"
-ensure_node_modules
-ensure_postgres
+ensure_node_modules_and_postgres
 ensure_chromium
 tag="e2e_$$"
 DB="sheetkeeper_$tag"

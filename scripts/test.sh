@@ -5,8 +5,7 @@
 source "$(dirname "$0")/lib.sh"
 began=$(date +%s)
 
-ensure_node_modules
-ensure_postgres
+ensure_node_modules_and_postgres
 ensure_python_references
 ensure_chromium
 
