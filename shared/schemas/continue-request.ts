@@ -2,16 +2,20 @@ import { z } from 'zod';
 import { textSchema } from './text-schema';
 import { complexString, numberString } from './complex-string';
 import { objectError } from './object-error';
+import { angleString } from './suite-path-schema';
 
 const circlePath = z.strictObject(
   {
     kind: z.literal('circle'),
     center: complexString,
     radius: numberString,
-    start_angle: numberString.default('0'),
+    // As in a suite's circle: radians, or an exact multiple of π ("pi/2"); turns as a number or a
+    // number string ("1/3" is exactly a third of a turn), read exactly as written.
+    start_angle: angleString.default('0'),
     turns: z
-      .number({ error: 'must be a number' })
-      .refine((n) => n !== 0 && Math.abs(n) <= 64, { error: 'must be non-zero and at most 64' })
+      .union([z.number({ error: 'must be a number' }), numberString], {
+        error: 'must be a number or a number string such as "1/3"',
+      })
       .default(1),
     direction: z.enum(['ccw', 'cw'], { error: 'must be ccw or cw' }).default('ccw'),
   },

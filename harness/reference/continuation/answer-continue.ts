@@ -7,6 +7,8 @@ import { describeRequestError } from '../describe-request-error';
 import type { ExactPoint } from './continuation-path';
 import type { ContinuationRequest } from './continuation-request';
 import { continueRegularBranch } from './continue-regular-branch';
+import { exactTurns } from '../../paths/exact-turns';
+import type { ExactAngle } from './exact-angle';
 import { FactoredFunction } from './factored-function';
 import { parseExact } from './parse-exact';
 import type { WireComplex } from '../../../shared/wire-complex';
@@ -42,6 +44,25 @@ export function answerContinue(input: unknown): Record<string, unknown> {
   };
 }
 
+/** A start angle as in a suite's circle: an exact multiple of π in turns, else radians. */
+function startAngle(text: string): ExactAngle {
+  const turns = exactTurns(text, 'path.start_angle');
+  return turns ? { kind: 'turns', turns } : { kind: 'radians', radians: parseExact(text, 'path.start_angle') };
+}
+
+/**
+ * The circle's turns exactly as written: a string through the exact parser, a JSON number through
+ * its shortest decimal text (0.1 is one tenth of a turn, not the double nearest it).
+ */
+function circleTurns(written: number | string): Rational {
+  const turns = parseExact(typeof written === 'number' ? String(written) : written, 'path.turns');
+  const size = turns.compare(Rational.ZERO) < 0 ? turns.negate() : turns;
+  if (turns.isZero() || size.compare(new Rational(64n)) > 0) {
+    throw new RangeError('path.turns must be non-zero and at most 64');
+  }
+  return turns;
+}
+
 /** The JSON request read exactly into the typed request; a number that is not finite is refused naming its field. */
 function toRequest(req: ContinueRequest): ContinuationRequest {
   const point = (c: WireComplex, name: string): ExactPoint => [
@@ -64,8 +85,8 @@ function toRequest(req: ContinueRequest): ContinuationRequest {
             kind: 'circle',
             center: point(req.path.center, 'path.center'),
             radius: parseExact(req.path.radius, 'path.radius'),
-            startAngle: { kind: 'radians', radians: parseExact(req.path.start_angle, 'path.start_angle') },
-            turns: Rational.fromDouble(req.path.turns),
+            startAngle: startAngle(req.path.start_angle),
+            turns: circleTurns(req.path.turns),
             ccw: req.path.direction === 'ccw',
           }
         : { kind: 'polyline', points: req.path.points.map((p, i) => point(p, `path.points.${i}`)) },

@@ -249,3 +249,29 @@ describe('answer shape', () => {
     expect(answer.values[2]?.f).toEqual(c(1));
   });
 });
+
+describe('exact angles and turns in a continue request', () => {
+  // A suite's circle already takes "pi/2" and "1/3" exactly; the CLI's request reads them the
+  // same way. cos and sin of π/2 + 2π/3 = 7π/6 are −√3/2 and −1/2 (common practice).
+  it('starts a circle at exactly i for start_angle "pi/2" and ends a third of a turn on at exactly −1/2 imaginary', () => {
+    const answer = run({
+      g: 'z',
+      nu: '1/2',
+      z0: c(0, 1),
+      k: 0,
+      path: circle(c(0), '1', '1/3' as never, 'ccw', 'pi/2'),
+      at: ['0', '1'],
+    });
+    expect(answer.values[0]!.z).toEqual({ re: '0', im: '1' });
+    expect(answer.values[1]!.z.im).toBe('-0.5');
+  });
+
+  it('reads turns written as a JSON number as the decimal written, and refuses zero turns naming the field', () => {
+    const quarter = run({ g: 'z', nu: '1/2', z0: c(1), k: 0, path: circle(c(0), '1', 0.25), at: ['1'] });
+    // A quarter turn from 1 ends at exactly i.
+    expect(quarter.values[0]!.z).toEqual({ re: '0', im: '1' });
+    expect(answerContinue({ g: 'z', nu: '1/2', z0: c(1), k: 0, path: circle(c(0), '1', 0), at: ['1'] })).toEqual({
+      error: 'path.turns must be non-zero and at most 64',
+    });
+  });
+});
