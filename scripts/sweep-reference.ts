@@ -21,12 +21,12 @@ console.log(`seed ${seed}: ${figures.count} inputs in ${(figures.wallMs / 1000).
 console.log(`error answers ${figures.errors}, NaN parts ${figures.nans}, undecided roundings ${figures.undecided}`);
 for (const p of figures.problems.slice(0, 20))
   console.log(`  ${p.rule}: ${JSON.stringify(p.input)} -> ${JSON.stringify(p.answer)}`);
-console.log(`slowest values (warm; bound ${VALUE_BOUND_MS} ms):`);
+console.log(`slowest values (CPU ms, warm; bound ${VALUE_BOUND_MS} ms):`);
 for (const s of figures.slowest) {
   console.log(`  ${s.warmMs.toFixed(1)} ms (first ${s.firstMs.toFixed(1)} ms) ${JSON.stringify(s.input)}`);
 }
 const first = figures.slowestFirst;
-if (first) console.log(`slowest first answer: ${first.firstMs.toFixed(1)} ms ${JSON.stringify(first.input)}`);
+if (first) console.log(`slowest first answer: ${first.firstMs.toFixed(1)} ms of CPU ${JSON.stringify(first.input)}`);
 const t = performance.now();
 const agreement = compareWithMpmath(inputs, figures.answers, sample);
 console.log(
