@@ -93,9 +93,8 @@ export function answerReference(input: unknown): ReferenceAnswer {
 function basePart(text: string, field: string): BigFloat {
   if (!RATIO.test(text) && !HEX.test(text)) return BigFloat.fromDouble(parseDouble(text));
   const exact = binaryFraction(text, exactRatio(text));
-  if (exact && BigFloat.fromDouble(exact.toDouble()).compare(exact) === 0 && Number.isFinite(exact.toDouble())) {
-    return exact;
-  }
+  const double = exact?.toDouble() ?? NaN;
+  if (exact && Number.isFinite(double) && BigFloat.fromDouble(double).compare(exact) === 0) return exact;
   throw new FieldError(
     `${field} "${text.trim()}" is not exactly a double: z is a library's input, taken exactly when written as p/q or a hex float, so it must be one; write a decimal for the nearest double`,
   );
@@ -105,8 +104,7 @@ function basePart(text: string, field: string): BigFloat {
 function complexExponent(reText: string, imText: string): PowerExponent {
   const re = exponentPart(reText, 'w.re');
   const im = exponentPart(imText, 'w.im');
-  const isZero = (p: BigFloat | Rational) => (p instanceof BigFloat ? p.isZero() : p.isZero());
-  if (isZero(im) && !(re instanceof BigFloat)) return { kind: 'rational', value: re };
+  if (im.isZero() && !(re instanceof BigFloat)) return { kind: 'rational', value: re };
   if (re instanceof BigFloat && im instanceof BigFloat) return { kind: 'complex', value: new BigComplex(re, im) };
   const rational = (p: BigFloat | Rational) => (p instanceof BigFloat ? Rational.fromBigFloat(p) : p);
   return { kind: 'gaussian', re: rational(re), im: rational(im) };

@@ -1,5 +1,6 @@
 import { answerReference } from '../../harness';
 import type { ReferenceAnswer } from '../../shared/reference-answer';
+import { cpuMilliseconds } from './cpu-milliseconds';
 import type { SweepInput } from './sweep-inputs';
 
 /** One answer of the sweep that broke a rule, with the request that produced it. */
@@ -66,14 +67,14 @@ export function runSweep(inputs: readonly SweepInput[]): SweepFigures {
   const start = performance.now();
   for (const input of inputs) {
     const request = { fn: input.fn, z: input.z, w: input.w, n: input.n, convention: input.convention };
-    let t = cpuMs();
-    const answer = answerReference(request);
-    const firstMs = cpuMs() - t;
+    let answer!: ReferenceAnswer;
+    const firstMs = cpuMilliseconds(() => (answer = answerReference(request)));
     let warmMs = firstMs;
     for (let again = 0; again < WARM_RUNS && warmMs > VALUE_BOUND_MS; again++) {
-      t = cpuMs();
-      answerReference(request);
-      warmMs = Math.min(warmMs, cpuMs() - t);
+      warmMs = Math.min(
+        warmMs,
+        cpuMilliseconds(() => answerReference(request)),
+      );
     }
     figures.answers.push(answer);
     const rule = problemOf(answer);
@@ -100,14 +101,4 @@ function problemOf(answer: ReferenceAnswer): SweepProblem['rule'] | null {
   if (answer.double.re === 'nan' || answer.double.im === 'nan') return 'NaN for a finite value';
   if (answer.warning !== undefined) return 'rounding left undecided';
   return null;
-}
-
-/**
- * The process's CPU time in milliseconds. A value's time is CPU time, not the clock's: the jest
- * slice runs beside two other jest workers and the e2e run on two cores, where the clock read
- * a 16 ms computation as 54.8 ms; on a quiet machine the two agree for this single-threaded work.
- */
-function cpuMs(): number {
-  const used = process.cpuUsage();
-  return (used.user + used.system) / 1000;
 }

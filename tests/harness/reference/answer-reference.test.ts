@@ -1,5 +1,5 @@
 import { answerReference } from '../../../harness/reference/answer-reference';
-import { cpuMilliseconds } from '../../setup/cpu-milliseconds';
+import { cpuMilliseconds } from '../../../scripts/reference-sweep/cpu-milliseconds';
 import { formatDouble } from '../../../harness/reference/numbers/format-double';
 import { askPython, type OraclePoint } from '../../external/python-oracle';
 import { unhex } from '../../external/unhex';

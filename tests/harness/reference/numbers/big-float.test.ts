@@ -6,7 +6,7 @@ import { bitLength } from '../../../../harness/reference/numbers/bit-length';
 import { formatDouble } from '../../../../harness/reference/numbers/format-double';
 import { parseDouble } from '../../../../harness/reference/numbers/parse-double';
 import { parseNumber } from '../../../../harness/reference/numbers/parse-number';
-import { cpuMilliseconds } from '../../../setup/cpu-milliseconds';
+import { cpuMilliseconds } from '../../../../scripts/reference-sweep/cpu-milliseconds';
 import { Rational } from '../../../../harness/reference/numbers/rational';
 import { ulpDistance } from '../../../../harness/reference/numbers/ulp-distance';
 

@@ -1,6 +1,6 @@
 import { spawnSync } from 'node:child_process';
 import { FixedTables } from '../../../../harness/reference/real/fixed-tables';
-import { cpuMilliseconds } from '../../../setup/cpu-milliseconds';
+import { cpuMilliseconds } from '../../../../scripts/reference-sweep/cpu-milliseconds';
 
 /** floor(f(j/64) · 2^F) for j = −32…32 (ln(1 + x)) and 0…64 (atan x), from mpmath at F + 64 bits. */
 function mpmathTables(F: number): { log: string[]; atan: string[] } {
