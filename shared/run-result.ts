@@ -1,5 +1,6 @@
 import type { TargetIdentity } from './target-identity';
 import type { DiagnosisKind } from './diagnosis';
+import type { DiagnosisClass } from './diagnosis-class';
 import type { PointOutcome } from './point-outcome';
 import type { WireComplex } from './wire-complex';
 
@@ -9,6 +10,23 @@ export interface OutcomeCounts {
   fail: number;
   error: number;
   skipped: number;
+  /** Points the target's entry cannot express (a −0 through plain numbers): counted apart, never failures. */
+  notApplicable: number;
+}
+
+/** Failing points by class (diagnosis-class.ts): a point with any branch label is a branch finding, else an accuracy finding. */
+export type ClassCounts = Record<DiagnosisClass, number>;
+
+/**
+ * One step of a composed subject at one point, as the library computed it and as the reference
+ * does from the same input: `text` is the step as written ("pow(z, 13)"); `left` says the
+ * library's value is no longer the reference's (beyond the tolerance, or a zero of the other sign).
+ */
+export interface StepValue {
+  text: string;
+  library: WireComplex | null;
+  reference: WireComplex | null;
+  left: boolean;
 }
 
 /**
@@ -36,6 +54,15 @@ export interface PointFinding {
   rule: string;
   /** Copy-paste code in the target's language that computes `actual`. */
   reproducer: string;
+  /** A composed subject's intermediate values, in evaluation order (absent for a single call). */
+  steps?: StepValue[];
+  /** The index in `steps` of the step that first left the reference (absent: none did, or no steps). */
+  firstLeftStep?: number;
+  /**
+   * Where conventions disagree about the value (acsc, asec, acsch, acoth at 0), the rule that makes
+   * the expected value: a choice, not a fact every library must share.
+   */
+  choice?: string;
 }
 
 /**
@@ -57,7 +84,9 @@ export interface PathResult {
   kind: 'circle' | 'segment' | 'polyline' | 'straddle' | 'grid';
   points: number;
   counts: OutcomeCounts;
+  /** Labels counted: a point with two labels counts under both. */
   byDiagnosis: Partial<Record<DiagnosisKind, number>>;
+  byClass: ClassCounts;
   /** Jumps along a continuous path (circle, segment, polyline): mid-step values of t. */
   jumps: { expected: number[]; library: number[] } | null;
   /** For a closed path of a regular branch; null where it does not apply. */
@@ -101,6 +130,7 @@ export interface SuiteTargetResult {
   checked: CheckedScope;
   counts: OutcomeCounts;
   byDiagnosis: Partial<Record<DiagnosisKind, number>>;
+  byClass: ClassCounts;
   paths: PathResult[];
   properties: PropertyOutcomeSummary[] | null;
   /** Errors of the pair as a whole (no single point): a target that hung past the time limit, crashed, or a suite that could not be evaluated. */
@@ -122,6 +152,7 @@ export interface RunResult {
   plan: { suites: { id: string; version: number }[]; targets: string[]; slices: number };
   counts: OutcomeCounts;
   byDiagnosis: Partial<Record<DiagnosisKind, number>>;
+  byClass: ClassCounts;
   results: SuiteTargetResult[];
   reference: { computed: number; cached: number };
 }

@@ -8,6 +8,7 @@ export type DiagnosisTone =
   | 'misplaced-cut'
   | 'inaccurate'
   | 'not-finite'
+  | 'disagreement'
   | 'unexplained'
   | 'error'
   | 'skipped';
@@ -43,6 +44,12 @@ export const DIAGNOSIS_STYLES: Record<DiagnosisTone, { word: string; glyph: stri
       glyph: '∞',
       color: '#5B6B2E',
       explain: 'an infinite or NaN part where the reference is finite, or the reverse',
+    },
+    disagreement: {
+      word: 'disagreement',
+      glyph: '≶',
+      color: '#7B3F00',
+      explain: 'another subject or entry of the same library gives a different value here',
     },
     unexplained: {
       word: 'unexplained',

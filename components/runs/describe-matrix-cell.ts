@@ -34,7 +34,7 @@ export function describeMatrixCell(cell: RunMatrixCell): MatrixCellWords {
       hasRows: false,
     };
   }
-  const counts = cell.counts ?? { pass: 0, fail: 0, error: 0, skipped: 0 };
+  const counts = cell.counts ?? { pass: 0, fail: 0, error: 0, skipped: 0, notApplicable: 0 };
   const judged = counts.pass + counts.fail;
   const hasRows = counts.fail + counts.error + counts.skipped > 0;
   if (cell.status === 'cancelled' && !cell.counts) {

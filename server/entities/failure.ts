@@ -76,9 +76,9 @@ export class Failure {
   @Column({ type: 'jsonb', nullable: true })
   actual!: WireComplex | null;
 
-  /** fail, error or skipped (a passing point is never stored here). */
+  /** fail, error or skipped (a passing point is never stored here; a not-applicable one is only counted). */
   @Column({ type: 'text', name: 'outcome_kind' })
-  outcomeKind!: 'fail' | 'error' | 'skipped';
+  outcomeKind!: 'fail' | 'error' | 'skipped' | 'not-applicable';
 
   @Column({ type: 'text', name: 'diagnosis_kind', nullable: true })
   diagnosisKind!: DiagnosisKind | null;

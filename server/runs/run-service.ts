@@ -74,7 +74,7 @@ export class RunService {
           status: 'queued',
           shardsTotal: versions.length * targets.length,
           shardsDone: 0,
-          counts: { pass: 0, fail: 0, error: 0, skipped: 0 },
+          counts: { pass: 0, fail: 0, error: 0, skipped: 0, notApplicable: 0 },
           regressions: null,
         }),
       );

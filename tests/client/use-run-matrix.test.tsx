@@ -15,7 +15,7 @@ const RUN: RunView = {
   ...RUNNING_RUN,
   shardsTotal: 2,
   shardsDone: 0,
-  counts: { pass: 0, fail: 0, error: 0, skipped: 0 },
+  counts: { pass: 0, fail: 0, error: 0, skipped: 0, notApplicable: 0 },
 };
 
 const cell = (suite: string, done: boolean): RunMatrixCell => ({
@@ -23,7 +23,7 @@ const cell = (suite: string, done: boolean): RunMatrixCell => ({
   target: 'complex.js@2.4.3',
   status: done ? 'done' : 'running',
   outcome: done ? 'fail' : null,
-  counts: done ? { pass: 10, fail: 2, error: 0, skipped: 0 } : null,
+  counts: done ? { pass: 10, fail: 2, error: 0, skipped: 0, notApplicable: 0 } : null,
   byDiagnosis: done ? { 'zero-sign': 2 } : null,
   checked: null,
   errors: [],

@@ -9,7 +9,7 @@ export const RUNNING_RUN: RunView = {
   status: 'running',
   shardsTotal: 4,
   shardsDone: 1,
-  counts: { pass: 100, fail: 0, error: 0, skipped: 0 },
+  counts: { pass: 100, fail: 0, error: 0, skipped: 0, notApplicable: 0 },
   regressions: null,
   requestedBy: 'Kwame Asante',
   createdAt: '2026-03-01T02:30:00Z',

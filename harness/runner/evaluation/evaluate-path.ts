@@ -2,6 +2,7 @@ import type { PathResult } from '../../../shared/run-result';
 import { checkPoints } from './check-points';
 import { compareAlongPath } from './compare-along-path';
 import { diagnoseFailures } from './diagnose-failures';
+import { emptyClassCounts } from './empty-class-counts';
 import { emptyCounts } from './empty-counts';
 import { errorText } from './error-text';
 import { evaluateProgram } from './evaluate-program';
@@ -31,6 +32,7 @@ export async function evaluatePath(evaluation: PathEvaluation): Promise<PathResu
     findingsOmitted: 0,
     skipped: [],
     byDiagnosis: {},
+    byClass: emptyClassCounts(),
   };
   if (points instanceof Error) {
     out.error = `the path cannot be built: ${points.message}`;

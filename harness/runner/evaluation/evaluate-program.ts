@@ -18,7 +18,10 @@ export async function evaluateProgram(
   re: Float64Array,
   im: Float64Array,
   signal?: AbortSignal,
+  /** The target's entry to build the input with (docs/suite-format.md); absent: the target's default. */
+  entry?: string,
 ): Promise<ValueColumn> {
+  void entry;
   const n = re.length;
   const errors = new Map<number, string>();
   const columns: (ValueColumn | ComplexPair)[] = [];
@@ -83,7 +86,8 @@ export async function evaluateProgram(
       re: new Float64Array(n).fill((last as ComplexPair)[0]),
       im: new Float64Array(n).fill((last as ComplexPair)[1]),
       errors,
+      steps: columns,
     };
   }
-  return last === undefined ? result : (last as ValueColumn);
+  return { ...(last === undefined ? result : (last as ValueColumn)), steps: columns };
 }

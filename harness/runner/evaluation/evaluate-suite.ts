@@ -7,6 +7,7 @@ import type { Target } from '../../adapters/target';
 import { parseSubject } from '../../expressions/parse-subject';
 import { buildPath } from '../../paths/build-path';
 import type { PathPoint } from '../../paths/path-point';
+import { emptyClassCounts } from './empty-class-counts';
 import { emptyCounts } from './empty-counts';
 import { errorText } from './error-text';
 import { evaluatePath } from './evaluate-path';
@@ -78,6 +79,7 @@ export async function evaluateSuite(
     },
     counts: emptyCounts(),
     byDiagnosis: {},
+    byClass: emptyClassCounts(),
     paths: [],
     properties: null,
     errors: [],
@@ -133,8 +135,9 @@ export async function evaluateSuite(
         name: path.name,
         kind: path.kind,
         points: n,
-        counts: { pass: 0, fail: 0, error: 0, skipped: n },
+        counts: { pass: 0, fail: 0, error: 0, skipped: n, notApplicable: 0 },
         byDiagnosis: {},
+        byClass: emptyClassCounts(),
         jumps: null,
         monodromy: null,
         findings: [],
@@ -162,6 +165,8 @@ export async function evaluateSuite(
   }
   for (const p of result.paths) {
     for (const key of Object.keys(result.counts) as (keyof OutcomeCounts)[]) result.counts[key] += p.counts[key];
+    result.byClass.branch += p.byClass.branch;
+    result.byClass.accuracy += p.byClass.accuracy;
     if (p.error) result.errors.push(`${p.name}: ${p.error}`);
   }
   result.byDiagnosis = countDiagnoses(result.paths);

@@ -1,4 +1,6 @@
 import type { Diagnosis } from '../../../shared/diagnosis';
+import { diagnosisClass } from '../../../shared/diagnosis-class';
+import { outcomeLabels } from '../../../shared/outcome-labels';
 import type { PointOutcome } from '../../../shared/point-outcome';
 import type { PointFinding } from '../../../shared/run-result';
 import type { ComplexPair } from '../../adapters/complex-pair';
@@ -18,7 +20,9 @@ export function listFindings(run: PathRun): void {
   for (const i of run.failing) {
     const o = outcomes[i] as Extract<PointOutcome, { kind: 'fail' }>;
     o.diagnosis = run.diagnoses[i] as Diagnosis;
-    out.byDiagnosis[o.diagnosis.kind] = (out.byDiagnosis[o.diagnosis.kind] ?? 0) + 1;
+    const labels = outcomeLabels(o);
+    for (const label of labels) out.byDiagnosis[label.kind] = (out.byDiagnosis[label.kind] ?? 0) + 1;
+    out.byClass[labels.some((l) => diagnosisClass(l.kind) === 'branch') ? 'branch' : 'accuracy'] += 1;
   }
   const expectedAt = (i: number): [number, number] => [expected.re[i] as number, expected.im[i] as number];
   const listed = [...run.failing, ...run.errored].sort((a, b) => a - b);

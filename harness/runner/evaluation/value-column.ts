@@ -6,4 +6,10 @@ export interface ValueColumn {
   re: Float64Array;
   im: Float64Array;
   errors: Map<number, string>;
+  /**
+   * For a subject's value: every step's values in program order (subject-program.ts), a column
+   * for each operation and the constant itself for a constant, so a composed subject's
+   * intermediate values can be shown. Absent on other columns.
+   */
+  steps?: (ValueColumn | [number, number])[];
 }

@@ -13,6 +13,8 @@ export function describeOutcome(o: PointOutcome): string {
       return `skipped: ${o.reason}`;
     case 'error':
       return `error: ${o.message}`;
+    case 'not-applicable':
+      return `not applicable: ${o.reason}`;
     case 'fail': {
       const d = o.diagnosis;
       switch (d.kind) {
@@ -28,6 +30,8 @@ export function describeOutcome(o: PointOutcome): string {
           return `inaccurate, ${[`${num(d.ulps)} ulps`, describeWorstPart(d, 'short')].filter(Boolean).join(' ')}, relative error ${num(d.relativeError)}`;
         case 'not-finite':
           return 'not-finite';
+        case 'disagreement':
+          return `disagreement with ${d.with}`;
         case 'unexplained':
           return `unexplained, relative error ${num(d.relativeError)}`;
       }

@@ -1,4 +1,5 @@
 import { NOTHING_CHECKED, pairStatus } from '../evaluation/pair-status';
+import { emptyClassCounts } from '../evaluation/empty-class-counts';
 import type { DiagnosisKind } from '../../../shared/diagnosis';
 import type { OutcomeCounts, SuiteTargetResult } from '../../../shared/run-result';
 
@@ -18,8 +19,9 @@ export function mergePairResults(
   const merged: SuiteTargetResult = {
     ...first,
     checked: { ...first.checked, paths: totalPaths, points: totalPoints },
-    counts: { pass: 0, fail: 0, error: 0, skipped: 0 },
+    counts: { pass: 0, fail: 0, error: 0, skipped: 0, notApplicable: 0 },
     byDiagnosis: {},
+    byClass: emptyClassCounts(),
     paths: [],
     errors: [],
     durationMs: 0,
@@ -31,6 +33,8 @@ export function mergePairResults(
     for (const k of Object.keys(merged.counts) as (keyof OutcomeCounts)[]) merged.counts[k] += result.counts[k];
     for (const [kind, n] of Object.entries(result.byDiagnosis))
       merged.byDiagnosis[kind as DiagnosisKind] = (merged.byDiagnosis[kind as DiagnosisKind] ?? 0) + (n ?? 0);
+    merged.byClass.branch += result.byClass.branch;
+    merged.byClass.accuracy += result.byClass.accuracy;
     merged.errors.push(...result.errors);
     merged.durationMs += result.durationMs;
     merged.reference.computed += result.reference.computed;

@@ -2,6 +2,7 @@ import { describeTolerance } from '../../../shared/describe-tolerance';
 import type { PathResult, SuiteTargetResult } from '../../../shared/run-result';
 import type { Suite } from '../../../shared/schemas/suite-schema';
 import type { TargetIdentity } from '../../../shared/target-identity';
+import { emptyClassCounts } from '../evaluation/empty-class-counts';
 import { propertiesNotRun } from '../evaluation/properties-not-run';
 
 /**
@@ -26,8 +27,15 @@ export function sliceFailure(
       name: path?.name ?? `path ${p}`,
       kind: path?.kind ?? 'segment',
       points: n,
-      counts: { pass: 0, fail: 0, error: kind === 'error' ? n : 0, skipped: kind === 'cancelled' ? n : 0 },
+      counts: {
+        pass: 0,
+        fail: 0,
+        error: kind === 'error' ? n : 0,
+        skipped: kind === 'cancelled' ? n : 0,
+        notApplicable: 0,
+      },
       byDiagnosis: {},
+      byClass: emptyClassCounts(),
       jumps: null,
       monodromy: null,
       findings: [],
@@ -49,8 +57,15 @@ export function sliceFailure(
       points,
       properties: propertiesNotRun(suite),
     },
-    counts: { pass: 0, fail: 0, error: kind === 'error' ? points : 0, skipped: kind === 'cancelled' ? points : 0 },
+    counts: {
+      pass: 0,
+      fail: 0,
+      error: kind === 'error' ? points : 0,
+      skipped: kind === 'cancelled' ? points : 0,
+      notApplicable: 0,
+    },
     byDiagnosis: {},
+    byClass: emptyClassCounts(),
     paths: pathResults,
     properties: null,
     errors: kind === 'error' ? [reason] : [],

@@ -38,7 +38,7 @@ function misplacedJump(): FailurePathView {
     cutsNote: null,
     branchPoints: [],
     jumps: { expected: [0.53125], library: [0.28125] },
-    counts: { pass: 13, fail: 4, error: 0, skipped: 0 },
+    counts: { pass: 13, fail: 4, error: 0, skipped: 0, notApplicable: 0 },
     note: '',
     reference: { cached: 12, computed: 0 },
   };

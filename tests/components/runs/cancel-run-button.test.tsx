@@ -13,7 +13,7 @@ const RUN: RunView = {
   status: 'running',
   shardsTotal: 8,
   shardsDone: 3,
-  counts: { pass: 300, fail: 0, error: 0, skipped: 0 },
+  counts: { pass: 300, fail: 0, error: 0, skipped: 0, notApplicable: 0 },
   regressions: null,
   requestedBy: 'Kwame Asante',
   createdAt: '2026-03-01T02:30:00Z',

@@ -20,7 +20,7 @@ const cell = (over: Partial<RunMatrixCell>): RunMatrixCell => ({
   target: 'complex.js@2.4.3',
   status: 'done',
   outcome: 'pass',
-  counts: { pass: 120, fail: 0, error: 0, skipped: 0 },
+  counts: { pass: 120, fail: 0, error: 0, skipped: 0, notApplicable: 0 },
   byDiagnosis: {},
   checked: scope,
   errors: [],
@@ -32,7 +32,7 @@ const CELLS: RunMatrixCell[] = [
   cell({
     target: 'complex.js@2.4.2',
     outcome: 'fail',
-    counts: { pass: 117, fail: 3, error: 0, skipped: 4 },
+    counts: { pass: 117, fail: 3, error: 0, skipped: 4, notApplicable: 0 },
     byDiagnosis: { 'other-sheet': 2, 'cut-side': 1 },
   }),
   cell({
@@ -48,7 +48,7 @@ const CELLS: RunMatrixCell[] = [
     suite: 'log-principal-sz',
     target: 'complex.js@2.4.2',
     outcome: 'error',
-    counts: { pass: 80, fail: 0, error: 2, skipped: 0 },
+    counts: { pass: 80, fail: 0, error: 2, skipped: 0, notApplicable: 0 },
     byDiagnosis: {},
     errors: ['path "circle r=2" threw: RangeError'],
   }),
@@ -102,7 +102,7 @@ describe.each([
     const skipped = cell({
       suite: 'cbrt-principal-sz',
       outcome: 'error',
-      counts: { pass: 0, fail: 0, error: 0, skipped: 154 },
+      counts: { pass: 0, fail: 0, error: 0, skipped: 154, notApplicable: 0 },
       byDiagnosis: {},
       errors: ['nothing was checked: every point was skipped (see the reasons per path)'],
     });

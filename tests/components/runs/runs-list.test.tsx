@@ -24,7 +24,7 @@ const run = (n: number, over: Partial<RunView> = {}): RunView => ({
   status: 'completed',
   shardsTotal: 4,
   shardsDone: 4,
-  counts: { pass: 480, fail: 3, error: 0, skipped: 0 },
+  counts: { pass: 480, fail: 3, error: 0, skipped: 0, notApplicable: 0 },
   regressions: 2,
   requestedBy: null,
   createdAt: '2026-03-01T02:30:00Z',
@@ -72,7 +72,7 @@ describe('RunsList', () => {
         shardsDone: 1,
         finishedAt: null,
         regressions: null,
-        counts: { pass: 120, fail: 0, error: 0, skipped: 0 },
+        counts: { pass: 120, fail: 0, error: 0, skipped: 0, notApplicable: 0 },
         startedAt: new Date(Date.now() - 42_000).toISOString(),
       }),
     ]);

@@ -35,7 +35,7 @@ describe('GET /api/overview', () => {
       `UPDATE runs SET status = $2, counts = $3, regressions = $4, shards_done = shards_total,
               created_at = now() - make_interval(mins => $5), started_at = now() - make_interval(mins => $5), finished_at = now() - make_interval(mins => $5 - 1)
         WHERE id = $1`,
-      [runId, status, JSON.stringify({ ...counts, error: 0, skipped: 0 }), regressions, minutes],
+      [runId, status, JSON.stringify({ ...counts, error: 0, skipped: 0, notApplicable: 0 }), regressions, minutes],
     );
   };
 
@@ -97,11 +97,11 @@ describe('GET /api/overview', () => {
       id: runs.latest,
       status: 'completed',
       regressions: 5,
-      counts: { pass: 105, fail: 7, error: 0, skipped: 0 },
+      counts: { pass: 105, fail: 7, error: 0, skipped: 0, notApplicable: 0 },
     });
     expect(mine.previous).toEqual({
       id: runs.previous,
-      counts: { pass: 110, fail: 2, error: 0, skipped: 0 },
+      counts: { pass: 110, fail: 2, error: 0, skipped: 0, notApplicable: 0 },
       finishedAt: expect.any(String),
     });
     expect(view.inProgress.map((r) => r.id)).toContain(runs.live);

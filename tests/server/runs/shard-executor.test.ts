@@ -86,7 +86,7 @@ describe('the shard executor', () => {
     for (const name of ['ghost@1', 'hung@1']) {
       expect(byName[name]!.outcome).toBe('error');
       expect(byName[name]!.checked).toMatchObject({ tolerance: '4 ulps per part', paths: 3, points: 154 });
-      expect(byName[name]!.counts).toEqual({ pass: 0, fail: 0, error: 154, skipped: 0 });
+      expect(byName[name]!.counts).toEqual({ pass: 0, fail: 0, error: 154, skipped: 0, notApplicable: 0 });
       expect(byName[name]!.checked.properties).toEqual(
         expect.objectContaining({ run: false, note: 'listed in the suite but not run by this run' }),
       );

@@ -87,7 +87,7 @@ describe('evaluatePair', () => {
       descriptorOf(() => offSheet),
       { cache, properties: { seed: null } },
     );
-    expect(result.counts).toEqual({ pass: result.checked.points, fail: 0, error: 0, skipped: 0 });
+    expect(result.counts).toEqual({ pass: result.checked.points, fail: 0, error: 0, skipped: 0, notApplicable: 0 });
     expect(result.properties?.find((p) => p.law === 'range')?.kind).toBe('failed');
     expect(result.status).toBe('fail');
   });
@@ -110,7 +110,7 @@ describe('evaluatePair', () => {
       'oracle@1 did not finish within the time limit of 300 ms; the evaluation was stopped and the target restarted',
     ]);
     expect(result.checked.points).toBe(154);
-    expect(result.counts).toEqual({ pass: 0, fail: 0, error: 154, skipped: 0 });
+    expect(result.counts).toEqual({ pass: 0, fail: 0, error: 154, skipped: 0, notApplicable: 0 });
     expect(result.checked.tolerance).toBe('4 ulps per part');
     expect(result.checked.paths).toBe(sqrt.paths.length);
     expect(target.closed).toBe(true);
@@ -146,7 +146,7 @@ describe('evaluatePair', () => {
       },
     );
     expect(result.status).toBe('cancelled');
-    expect(result.counts).toEqual({ pass: 0, fail: 0, error: 0, skipped: 154 });
+    expect(result.counts).toEqual({ pass: 0, fail: 0, error: 0, skipped: 154, notApplicable: 0 });
     expect(result.paths[0]!.skipped).toEqual([{ reason: 'cancelled: the reviewer stopped it', count: 40 }]);
     expect(target.closed).toBe(true);
     expect(open).toBeNull();

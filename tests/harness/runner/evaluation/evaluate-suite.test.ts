@@ -21,7 +21,7 @@ describe('evaluateSuite', () => {
       expect({ id, status: r.status, counts: r.counts }).toEqual({
         id,
         status: 'pass',
-        counts: { pass: r.checked.points, fail: 0, error: 0, skipped: 0 },
+        counts: { pass: r.checked.points, fail: 0, error: 0, skipped: 0, notApplicable: 0 },
       });
     }
   });
@@ -149,7 +149,7 @@ describe('evaluateSuite', () => {
   it('skips every point, with the reason, when the target lacks an operation of the subject', async () => {
     const noCbrt: Target = { ...referenceTarget(), supports: async (op) => op !== 'cbrt' };
     const r = await evaluateSuite(loadDemoSuite('cbrt-principal-sz'), noCbrt, { cache });
-    expect(r.counts).toEqual({ pass: 0, fail: 0, error: 0, skipped: r.checked.points });
+    expect(r.counts).toEqual({ pass: 0, fail: 0, error: 0, skipped: r.checked.points, notApplicable: 0 });
     expect(r.paths[0]!.skipped).toEqual([{ reason: 'oracle@1 has no cbrt', count: r.paths[0]!.points }]);
     // Nothing checked is not a pass: a green result for a library without the function would mislead.
     expect(r.status).toBe('error');
