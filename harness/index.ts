@@ -45,3 +45,11 @@ export { ulpsApart } from './checks/ulps-apart';
 // The function catalogue, for the demo-suite generator.
 export { CATALOGUE_ENTRIES } from './catalogue/catalogue-entries';
 export type { DemoCut, DemoPrincipalFunction } from './catalogue/demo-principal-function';
+
+// The verdict audit (scripts/verdict-audit): a subject's library values and the catalogue's cuts.
+export { subjectProgram } from './runner/evaluation/subject-program';
+export { evaluateProgram } from './runner/evaluation/evaluate-program';
+export { pathInputs } from './runner/evaluation/path-inputs';
+export { catalogue } from './reference/catalogue';
+export { formatHexDouble } from './checks/format-hex-double';
+export type { Rational } from './reference/numbers/rational';

@@ -12,6 +12,8 @@ import json
 import sys
 from fractions import Fraction
 
+from oracle_rounding import correctly_rounded
+
 
 def parse_float(text):
     return float.fromhex(text) if "0x" in text.lower() else float(text)
@@ -49,27 +51,6 @@ def parse_exact(text, mpf):
         q = Fraction(text)
         return mpf(q.numerator) / q.denominator
     return mpf(parse_float(text))
-
-
-def correctly_rounded(x):
-    """The binary64 nearest to the mpf x, ties to even, with gradual underflow and overflow.
-
-    float(mpf) rounds to 53 bits and then lets ldexp round again in the subnormal range (twice
-    rounded), so the rounding is done here from x's exact binary value instead."""
-    sign, man, exp, bc = x._mpf_
-    if man == 0:
-        return 0.0
-    top = exp + bc
-    if top > 1025:
-        return -float("inf") if sign else float("inf")
-    if top < -1075:
-        return -0.0 if sign else 0.0
-    value = Fraction(man) * (Fraction(2) ** exp)
-    try:
-        f = float(value)
-    except OverflowError:
-        f = float("inf")
-    return -f if sign else f
 
 
 def run_mpmath(points, dps):

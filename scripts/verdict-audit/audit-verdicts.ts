@@ -1,0 +1,213 @@
+import { spawnSync } from 'node:child_process';
+import { readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
+import { suiteSchema, type Suite } from '../../shared/schemas/suite-schema';
+import {
+  buildPath,
+  catalogue,
+  discoverTargets,
+  evaluateProgram,
+  evaluateSuite,
+  formatHexDouble,
+  parseSubject,
+  pathInputs,
+  ReferenceCache,
+  subjectProgram,
+  suiteCacheKey,
+  suiteExpectation,
+  toPathSpec,
+  type Rational,
+  type SubjectExpr,
+} from '../../harness';
+import { seededRandom } from '../../tests/external/seeded-random';
+import { independentVerdict, type AuditPoint, type IndependentValue } from './independent-verdict';
+
+/** Debian's interpreter, which sees python3-mpmath (docs/conventions.md). */
+const DEBIAN_PYTHON = '/usr/bin/python3';
+
+/** A cut for JSON: ±Infinity as strings (JSON has no infinities). */
+const wireCut = ({ axis, from, to }: { axis: 'real' | 'imaginary'; from: number; to: number }) => ({
+  axis,
+  from: String(from),
+  to: String(to),
+});
+
+/** A constant sub-expression ("0.5 + 2i") as exact rationals, or null when it depends on z. */
+function constantOf(e: SubjectExpr): { re: Rational; im: Rational } | null {
+  if (e.kind === 'const') return { re: e.re, im: e.im };
+  if (e.kind === 'neg') {
+    const a = constantOf(e.a);
+    return a && { re: a.re.negate(), im: a.im.negate() };
+  }
+  if (e.kind === 'add' || e.kind === 'sub' || e.kind === 'mul') {
+    const [a, b] = [constantOf(e.a), constantOf(e.b)];
+    if (!a || !b) return null;
+    if (e.kind === 'add') return { re: a.re.add(b.re), im: a.im.add(b.im) };
+    if (e.kind === 'sub') return { re: a.re.sub(b.re), im: a.im.sub(b.im) };
+    return { re: a.re.mul(b.re).sub(a.im.mul(b.im)), im: a.re.mul(b.im).add(a.im.mul(b.re)) };
+  }
+  return null;
+}
+
+/** What the reference engine's catalogue says about a single call, for mpmath's side: the function, its exponent, its cuts. */
+function callOf(expr: SubjectExpr): Omit<AuditPoint, 'z' | 'convention'> | null {
+  const powerCuts = (fn: string) => {
+    const ref = catalogue[fn];
+    return ref?.kind === 'power' ? ref.cuts.map(wireCut) : [];
+  };
+  if (expr.kind === 'nthroot' && expr.arg.kind === 'z')
+    return { fn: 'nthroot', n: expr.n, cuts: powerCuts('nthroot'), inner: null };
+  if (expr.kind === 'power' && expr.base.kind === 'z')
+    return { fn: 'pow', w: expr.exponent.toString(), cuts: powerCuts('pow'), inner: null };
+  if (expr.kind === 'complexPower' && expr.base.kind === 'z') {
+    const w = constantOf(expr.exponent);
+    if (!w) return null;
+    return { fn: 'pow', w: [w.re.toString(), w.im.toString()], cuts: powerCuts('pow'), inner: null };
+  }
+  if (expr.kind === 'call' && expr.arg.kind === 'z') {
+    const ref = catalogue[expr.fn];
+    if (!ref) return null;
+    if (ref.kind === 'plain') return { fn: expr.fn, cuts: ref.fn.cuts.map(wireCut), inner: null };
+    if (ref.kind === 'reciprocal')
+      return {
+        fn: expr.fn,
+        cuts: [],
+        inner: { fn: ref.fn.inner.name, cuts: ref.fn.inner.cuts.map(wireCut) },
+      };
+    return { fn: expr.fn, cuts: powerCuts(expr.fn), inner: null };
+  }
+  return null;
+}
+
+function parseArgs(argv: string[]): {
+  target: string;
+  suites: string;
+  sample: number;
+  seed: number;
+  out: string | null;
+} {
+  const get = (flag: string) => {
+    const i = argv.indexOf(flag);
+    return i >= 0 ? argv[i + 1] : undefined;
+  };
+  return {
+    target: get('--target') ?? 'complex.js@2.4.3',
+    suites: get('--suites') ?? 'suites/demo',
+    sample: Number(get('--sample') ?? 200),
+    seed: Number(get('--seed') ?? 20261205),
+    out: get('--out') ?? null,
+  };
+}
+
+/**
+ * The verdict audit: runs every principal-branch suite of a folder against one target, draws a
+ * seeded sample of passing and failing points, recomputes each with mpmath alone
+ * (scripts/verdict-audit/independent_values.py) and judges the library's value again with the
+ * suite's tolerance and convention (independent-verdict.ts). A pass that mpmath fails is a false
+ * pass; a failure that mpmath passes is a false fail. Regular-branch suites are counted and left out:
+ * their expected values need a continuation, which mpmath does not give.
+ *
+ *   node --import tsx scripts/verdict-audit/audit-verdicts.ts [--target complex.js@2.4.3] [--suites suites/demo] [--sample 200] [--seed N] [--out file.json]
+ */
+async function main(): Promise<void> {
+  const args = parseArgs(process.argv.slice(2));
+  const descriptor = discoverTargets().find((d) => d.name === args.target);
+  if (!descriptor) throw new Error(`no installed target "${args.target}"`);
+  const target = descriptor.open();
+  const files = readdirSync(args.suites)
+    .filter((f) => f.endsWith('.json'))
+    .sort();
+  const passes: AuditPoint[] = [];
+  const fails: AuditPoint[] = [];
+  const leftOut: string[] = [];
+  const cache = new ReferenceCache(null);
+  for (const file of files) {
+    const suite: Suite = suiteSchema.parse(JSON.parse(readFileSync(path.join(args.suites, file), 'utf8')));
+    const expr = parseSubject(suite.subject);
+    const call = callOf(expr);
+    if (suite.branch.kind !== 'principal' || !call) {
+      leftOut.push(suite.id);
+      continue;
+    }
+    const result = await evaluateSuite(suite, target, { cache, maxFindings: 1_000_000 });
+    const expectation = suiteExpectation(suite, expr, cache, suiteCacheKey(suite));
+    const program = subjectProgram(expr);
+    for (const [k, spec] of suite.paths.entries()) {
+      const pathResult = result.paths[k];
+      if (!pathResult || pathResult.error) continue;
+      const points = buildPath(toPathSpec(spec));
+      const expected = expectation.expected(spec, points);
+      const inputs = pathInputs(points);
+      const actual = await evaluateProgram(program, target, inputs.re, inputs.im);
+      const failing = new Map(pathResult.findings.map((f) => [f.index, f]));
+      for (let i = 0; i < points.length; i++) {
+        if (expected.skipped.has(i) || actual.errors.has(i)) continue;
+        const finding = failing.get(i);
+        if (finding && finding.outcome.kind !== 'fail') continue;
+        const point: AuditPoint = {
+          ...call,
+          suite: suite.id,
+          path: spec.name,
+          index: i,
+          convention: suite.convention,
+          tolerance: suite.tolerances.values,
+          z: [formatHexDouble(inputs.re[i] as number), formatHexDouble(inputs.im[i] as number)],
+          actual: [formatHexDouble(actual.re[i] as number), formatHexDouble(actual.im[i] as number)],
+          harness: finding ? 'fail' : 'pass',
+          labels:
+            finding && finding.outcome.kind === 'fail'
+              ? (finding.outcome.labels ?? [finding.outcome.diagnosis]).map((d) => d.kind)
+              : [],
+        };
+        (finding ? fails : passes).push(point);
+      }
+    }
+  }
+  await target.close();
+  const random = seededRandom(args.seed);
+  const draw = (from: AuditPoint[], n: number): AuditPoint[] => {
+    const pool = [...from];
+    const out: AuditPoint[] = [];
+    while (out.length < n && pool.length > 0)
+      out.push(pool.splice(Math.floor(random() * pool.length), 1)[0] as AuditPoint);
+    return out;
+  };
+  // Drawn with spares: a point mpmath gives no value at (a pole, or 0 of acsc where conventions
+  // disagree) is counted as unchecked and the next drawn point takes its place.
+  const spare = Math.ceil(args.sample / 4);
+  const sample = [...draw(passes, args.sample + spare), ...draw(fails, args.sample + spare)];
+  const run = spawnSync(DEBIAN_PYTHON, [path.join(__dirname, 'independent_values.py')], {
+    input: JSON.stringify({ points: sample }),
+    encoding: 'utf8',
+    maxBuffer: 1 << 28,
+  });
+  if (run.status !== 0) throw new Error(`independent_values.py failed: ${run.stderr}`);
+  const values = JSON.parse(run.stdout) as IndependentValue[];
+  const judged = sample.map((p, k) => ({
+    point: p,
+    mpmath: values[k] as IndependentValue,
+    verdict: independentVerdict(p, values[k] as IndependentValue),
+  }));
+  const unchecked = judged.filter((j) => j.verdict === 'unchecked');
+  const kept = (side: 'pass' | 'fail') =>
+    judged.filter((j) => j.point.harness === side && j.verdict !== 'unchecked').slice(0, args.sample);
+  const checked = [...kept('pass'), ...kept('fail')];
+  const falsePasses = checked.filter((j) => j.point.harness === 'pass' && j.verdict === 'fail');
+  const falseFails = checked.filter((j) => j.point.harness === 'fail' && j.verdict === 'pass');
+  const summary = {
+    target: args.target,
+    seed: args.seed,
+    suitesLeftOut: leftOut,
+    population: { passes: passes.length, failures: fails.length },
+    checked: { passes: kept('pass').length, failures: kept('fail').length },
+    uncheckedAmongDrawn: unchecked.length,
+    falsePasses: falsePasses.length,
+    falseFails: falseFails.length,
+  };
+  console.log(JSON.stringify(summary, null, 2));
+  for (const j of [...falsePasses, ...falseFails, ...unchecked].slice(0, 20))
+    console.log(JSON.stringify({ ...j.point, mpmath: j.mpmath, verdict: j.verdict }));
+  if (args.out) writeFileSync(args.out, JSON.stringify({ summary, checked, unchecked }, null, 1));
+}
+
+void main();

@@ -1,0 +1,105 @@
+import { spawnSync } from 'node:child_process';
+import path from 'node:path';
+import {
+  independentVerdict,
+  type AuditPoint,
+  type IndependentValue,
+} from '../../../scripts/verdict-audit/independent-verdict';
+
+const SCRIPT = path.join(__dirname, '..', '..', '..', 'scripts', 'verdict-audit', 'independent_values.py');
+const NEGATIVE_REAL_AXIS = [{ axis: 'real' as const, from: '-Infinity', to: '0' }];
+
+function mpmathValues(points: AuditPoint[]): IndependentValue[] {
+  const run = spawnSync('/usr/bin/python3', [SCRIPT], { input: JSON.stringify({ points }), encoding: 'utf8' });
+  if (run.status !== 0) throw new Error(run.stderr);
+  return JSON.parse(run.stdout) as IndependentValue[];
+}
+
+const sqrtAt = (z: [string, string], convention: AuditPoint['convention']): AuditPoint => ({
+  fn: 'sqrt',
+  cuts: NEGATIVE_REAL_AXIS,
+  inner: null,
+  convention,
+  z,
+});
+
+describe('the verdict audit’s independent values (mpmath alone)', () => {
+  it('reads a signed zero as the limit from its side: sqrt(−4 ∓ 0i) = +0 ∓ 2i', () => {
+    // ISO/IEC 9899:2011 G.6.4.2: csqrt(conj(z)) = conj(csqrt(z)), csqrt(−4 + 0i) = +0 + 2i.
+    const [below, above] = mpmathValues([
+      sqrtAt(['-0x1p+2', '-0x0p+0'], 'signed-zero'),
+      sqrtAt(['-0x1p+2', '0x0p+0'], 'signed-zero'),
+    ]);
+    expect(below).toEqual({ re: '0x0.0p+0', im: '-0x1.0000000000000p+1' });
+    expect(above).toEqual({ re: '0x0.0p+0', im: '0x1.0000000000000p+1' });
+  });
+
+  it('takes the upper side of the negative real axis under counter-clockwise continuity, whatever the zero’s sign', () => {
+    // Kahan 1987, "Branch cuts for complex elementary functions": the cut (−∞, 0] is met from above.
+    const [value] = mpmathValues([sqrtAt(['-0x1p+2', '-0x0p+0'], 'counter-clockwise')]);
+    expect(value).toEqual({ re: '0x0.0p+0', im: '0x1.0000000000000p+1' });
+  });
+
+  it('takes acos’s lower side at 1/z for asec on (0, 1) under counter-clockwise continuity', () => {
+    // asec z = acos(1/z) (DLMF 4.23.8); Python's cmath.acos(2 − 0j) = 0 + 0x1.5124271980434p+0 i (run on
+    // Debian's python3), which is within one ulp of the correctly rounded value.
+    const [value] = mpmathValues([
+      {
+        fn: 'asec',
+        cuts: [],
+        inner: {
+          fn: 'acos',
+          cuts: [
+            { axis: 'real', from: '-Infinity', to: '-1' },
+            { axis: 'real', from: '1', to: 'Infinity' },
+          ],
+        },
+        convention: 'counter-clockwise',
+        z: ['0x1p-1', '0x0p+0'],
+      },
+    ]);
+    expect(value).toEqual({ re: '0x0.0p+0', im: expect.stringMatching(/^0x1\.512427198043[45]p\+0$/) });
+  });
+
+  it('says where mpmath has no value instead of guessing: acsc at 0', () => {
+    const [value] = mpmathValues([
+      {
+        fn: 'acsc',
+        cuts: [],
+        inner: { fn: 'asin', cuts: [] },
+        convention: 'signed-zero',
+        z: ['0x0p+0', '0x0p+0'],
+      },
+    ]);
+    expect(value).toHaveProperty('unchecked');
+  });
+});
+
+describe('independentVerdict', () => {
+  const point = (actual: [string, string], tolerance: AuditPoint['tolerance']): AuditPoint => ({
+    ...sqrtAt(['-0x1p+2', '-0x0p+0'], 'signed-zero'),
+    actual,
+    tolerance,
+  });
+  const reference: IndependentValue = { re: '0x0.0p+0', im: '-0x1.0000000000000p+1' };
+
+  it('fails a zero of the other sign under the signed-zero convention', () => {
+    expect(independentVerdict(point(['-0x0p+0', '-0x1p+1'], { ulps: 4 }), reference)).toBe('fail');
+    expect(independentVerdict(point(['0x0p+0', '-0x1p+1'], { ulps: 4 }), reference)).toBe('pass');
+  });
+
+  it('holds each part to the ulps and the whole value to the relative bound', () => {
+    // −2 moved 5 doubles: 5 ulps, relative error 5·2^−52 ≈ 1.1e−15.
+    const moved = point(['0x0p+0', '-0x1.0000000000005p+1'], { ulps: 4 });
+    expect(independentVerdict(moved, reference)).toBe('fail');
+    expect(independentVerdict({ ...moved, tolerance: { ulps: 5 } }, reference)).toBe('pass');
+    expect(independentVerdict({ ...moved, tolerance: { relative: 1e-15 } }, reference)).toBe('fail');
+    expect(independentVerdict({ ...moved, tolerance: { relative: 2e-15 } }, reference)).toBe('pass');
+  });
+
+  it('passes an infinity only against the same infinity', () => {
+    const inf: IndependentValue = { re: 'inf', im: '0x0.0p+0' };
+    expect(independentVerdict(point(['inf', '0x0p+0'], { ulps: 4 }), inf)).toBe('pass');
+    expect(independentVerdict(point(['-inf', '0x0p+0'], { ulps: 4 }), inf)).toBe('fail');
+  });
+});
