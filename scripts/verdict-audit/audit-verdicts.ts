@@ -32,6 +32,23 @@ const wireCut = ({ axis, from, to }: { axis: 'real' | 'imaginary'; from: number;
   to: String(to),
 });
 
+/** A regular branch for mpmath's side: g as written, ν, z0, f0 or k, and the cuts' polylines. */
+function regularOf(branch: Extract<Suite['branch'], { kind: 'regular' }>): Omit<AuditPoint, 'z' | 'convention'> {
+  const pair = (c: { re: string; im: string }): [string, string] => [c.re, c.im];
+  return {
+    fn: 'regular',
+    cuts: [],
+    inner: null,
+    regular: {
+      g: branch.g,
+      nu: typeof branch.nu === 'string' ? [branch.nu, '0'] : pair(branch.nu),
+      z0: pair(branch.z0),
+      ...(branch.f0 ? { f0: pair(branch.f0) } : { k: branch.k ?? 0 }),
+      cuts: branch.cuts.map((c) => ({ points: c.points.map(pair), to_infinity: c.to_infinity })),
+    },
+  };
+}
+
 /** A constant sub-expression ("0.5 + 2i") as exact rationals, or null when it depends on z. */
 function constantOf(e: SubjectExpr): { re: Rational; im: Rational } | null {
   if (e.kind === 'const') return { re: e.re, im: e.im };
@@ -100,12 +117,12 @@ function parseArgs(argv: string[]): {
 }
 
 /**
- * The verdict audit: runs every principal-branch suite of a folder against one target, draws a
- * seeded sample of passing and failing points, recomputes each with mpmath alone
- * (scripts/verdict-audit/independent_values.py) and judges the library's value again with the
- * suite's tolerance and convention (independent-verdict.ts). A pass that mpmath fails is a false
- * pass; a failure that mpmath passes is a false fail. Regular-branch suites are counted and left out:
- * their expected values need a continuation, which mpmath does not give.
+ * The verdict audit: runs every suite of a folder against one target, draws a seeded sample of
+ * passing and failing points, recomputes each expected value with mpmath alone
+ * (scripts/verdict-audit/independent_values.py: principal values as one-sided limits, regular
+ * branches continued from z0 along two paths that avoid the cuts) and judges the library's value
+ * again with the suite's tolerance and convention (independent-verdict.ts). A pass that mpmath
+ * fails is a false pass; a failure that mpmath passes is a false fail.
  *
  *   node --import tsx scripts/verdict-audit/audit-verdicts.ts [--target complex.js@2.4.3] [--suites suites/demo] [--sample 200] [--seed N] [--out file.json]
  */
@@ -124,8 +141,8 @@ async function main(): Promise<void> {
   for (const file of files) {
     const suite: Suite = suiteSchema.parse(JSON.parse(readFileSync(path.join(args.suites, file), 'utf8')));
     const expr = parseSubject(suite.subject);
-    const call = callOf(expr);
-    if (suite.branch.kind !== 'principal' || !call) {
+    const call = suite.branch.kind === 'principal' ? callOf(expr) : regularOf(suite.branch);
+    if (!call) {
       leftOut.push(suite.id);
       continue;
     }
@@ -150,6 +167,8 @@ async function main(): Promise<void> {
           path: spec.name,
           index: i,
           convention: suite.convention,
+          // A regular branch fixes values, not the signs of zero parts (the harness's regular expectation agrees).
+          zeroSigns: suite.branch.kind === 'principal' && suite.convention === 'signed-zero',
           tolerance: suite.tolerances.values,
           z: [formatHexDouble(inputs.re[i] as number), formatHexDouble(inputs.im[i] as number)],
           actual: [formatHexDouble(actual.re[i] as number), formatHexDouble(actual.im[i] as number)],

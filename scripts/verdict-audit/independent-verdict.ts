@@ -11,6 +11,17 @@ export interface AuditPoint {
   cuts: { axis: 'real' | 'imaginary'; from: string; to: string }[];
   inner: { fn: string; cuts: { axis: 'real' | 'imaginary'; from: string; to: string }[] } | null;
   convention: 'signed-zero' | 'counter-clockwise';
+  /** Whether a zero part must carry the reference's sign (signed-zero principal suites). */
+  zeroSigns?: boolean;
+  /** For a regular-branch suite: g(z)^ν continued from z0 (independent_values.py). */
+  regular?: {
+    g: string;
+    nu: [string, string];
+    z0: [string, string];
+    f0?: [string, string];
+    k?: number;
+    cuts: { points: [string, string][]; to_infinity: boolean }[];
+  };
   tolerance?: Tolerance;
   z: [string, string];
   actual?: [string, string];
@@ -56,7 +67,8 @@ function ulpsBetween(a: number, b: number): number {
 /**
  * The library's value judged again against mpmath's, with the suite's tolerance and convention,
  * by code written apart from the harness: NaN only against NaN, an infinity only against the
- * same one; under signed zeros a zero part must carry mpmath's limit sign; then ulps per part
+ * same one; where zero signs count (`zeroSigns`, by default under the signed-zero convention) a
+ * zero part must carry mpmath's limit sign; then ulps per part
  * (`ulps`) or the normwise relative error |a − e| / |e| (`relative`), or either when both are given.
  */
 export function independentVerdict(p: AuditPoint, mpmath: IndependentValue): 'pass' | 'fail' | 'unchecked' {
@@ -68,7 +80,8 @@ export function independentVerdict(p: AuditPoint, mpmath: IndependentValue): 'pa
     if (Number.isNaN(y) || !Number.isFinite(y)) {
       if (!Object.is(x, y)) return 'fail';
     } else if (!Number.isFinite(x)) return 'fail';
-    if (p.convention === 'signed-zero' && x === 0 && y === 0 && Object.is(x, -0) !== Object.is(y, -0)) return 'fail';
+    if ((p.zeroSigns ?? p.convention === 'signed-zero') && x === 0 && y === 0 && Object.is(x, -0) !== Object.is(y, -0))
+      return 'fail';
   }
   const tol = p.tolerance as { ulps?: number; relative?: number };
   const ulps = Math.max(ulpsBetween(a[0], e[0]), ulpsBetween(a[1], e[1]));

@@ -95,6 +95,8 @@ def displaced(p, x, y, scale):
 
 def one(p):
     try:
+        if p.get("regular"):
+            return regular(p)
         return checked(p)
     except (ZeroDivisionError, ValueError) as e:
         return {"unchecked": f"mpmath has no value here ({type(e).__name__})"}
@@ -129,6 +131,113 @@ def limit(at):
         else:
             out.append(correctly_rounded(b).hex())
     return {"re": out[0], "im": out[1]}
+
+
+def g_function(text):
+    """g(z) from its written form ("z^2 - 1", "(z - 1) / (z + 1)"): numbers become exact mpf, ^ a power."""
+    import re
+
+    if not re.fullmatch(r"[\sz0-9.eE+\-*/^()i,xp]*", text):
+        raise ValueError("g uses more than z, numbers, + - * / ^, i and exp")
+    code = re.sub(r"(?<![A-Za-z])(\d+(?:\.\d+)?(?:[eE][+-]?\d+)?)", lambda m: f"mpf('{m.group(1)}')", text)
+    code = re.sub(r"(?<![A-Za-z])i(?![A-Za-z])", "I", code).replace("^", "**")
+    return lambda z: mpc(eval(code, {"__builtins__": {}}, {"z": z, "mpf": mpf, "I": mpc(0, 1), "exp": mpmath.exp}))
+
+
+def cut_segments(cuts, reach):
+    """Each cut as segments; a cut continued to infinity gets its last segment stretched past `reach`."""
+    out = []
+    for cut in cuts:
+        pts = [mpc(parse_exact(a), parse_exact(b)) for a, b in cut["points"]]
+        if cut.get("to_infinity"):
+            d = pts[-1] - pts[-2]
+            pts.append(pts[-1] + d / abs(d) * reach * 1000)
+        out.extend(zip(pts, pts[1:]))
+    return out
+
+
+def orient(a, b, c):
+    return (b.real - a.real) * (c.imag - a.imag) - (b.imag - a.imag) * (c.real - a.real)
+
+
+def crosses(a, b, c, d):
+    """Whether segments ab and cd meet, touching included (exact at the working precision for doubles)."""
+    o1, o2, o3, o4 = orient(a, b, c), orient(a, b, d), orient(c, d, a), orient(c, d, b)
+    if ((o1 > 0 and o2 < 0) or (o1 < 0 and o2 > 0)) and ((o3 > 0 and o4 < 0) or (o3 < 0 and o4 > 0)):
+        return True
+    on = lambda p, q, r, o: o == 0 and min(p.real, q.real) <= r.real <= max(p.real, q.real) and min(p.imag, q.imag) <= r.imag <= max(p.imag, q.imag)
+    return on(a, b, c, o1) or on(a, b, d, o2) or on(c, d, a, o3) or on(c, d, b, o4)
+
+
+def distance(e, a, b):
+    """The distance from e to the segment ab."""
+    d = b - a
+    if d == 0:
+        return abs(e - a)
+    t = max(0, min(1, ((e - a) * mpmath.conj(d)).real / abs(d) ** 2))
+    return abs(a + d * t - e)
+
+
+def arg_change(g, a, b, depth=0):
+    """The continuous change of arg g along the segment ab, by steps that each turn less than 0.5 rad."""
+    steps = 64
+    total = mpf(0)
+    prev = g(a)
+    for k in range(1, steps + 1):
+        z = a + (b - a) * k / steps
+        cur = g(z)
+        turn = mpmath.arg(cur / prev)
+        if abs(turn) > 0.5:
+            if depth > 12:
+                raise ValueError("arg g turns too fast along the path (a zero or pole of g on it)")
+            turn = arg_change(g, a + (b - a) * (k - 1) / steps, z, depth + 1)
+        total += turn
+        prev = cur
+    return total
+
+
+def regular(p):
+    """g(z)^ν continued from z0 along paths that avoid the cuts: f = f0 · exp(ν (ln|g(z)/g(z0)| + iΔarg g)).
+
+    The paths are z0 → z straight, or z0 → w → z through waypoints w on a circle around everything;
+    the first two that cross no cut must give the same value, else the point is unchecked."""
+    r = p["regular"]
+    g = g_function(r["g"])
+    z = mpc(mpf(parse_float(p["z"][0])), mpf(parse_float(p["z"][1])))
+    z0 = mpc(parse_exact(r["z0"][0]), parse_exact(r["z0"][1]))
+    nu = mpc(parse_exact(r["nu"][0]), parse_exact(r["nu"][1]))
+    pts = [z, z0] + [mpc(parse_exact(a), parse_exact(b)) for c in r["cuts"] for a, b in c["points"]]
+    reach = 4 * max(1, *[abs(q) for q in pts])
+    segments = cut_segments(r["cuts"], reach)
+    if any(crosses(z, z, c, d) for c, d in segments):
+        return {"unchecked": "on a regular branch's cut (its sides are checked by the straddle's neighbours)"}
+    if g(z) == 0:
+        return {"unchecked": "a zero of g: a branch point"}
+    ends = [q for c, d in segments for q in (c, d)]
+    waypoints = [None] + [reach * mpmath.expj(mpmath.pi * k / 8) for k in range(16)]
+    values = []
+    for w in waypoints:
+        route = [z0, z] if w is None else [z0, w, z]
+        legs = list(zip(route, route[1:]))
+        if any(crosses(a, b, c, d) for a, b in legs for c, d in segments):
+            continue
+        # Keep away from the branch points (the cuts' ends): passing one at 1e-300 would need the
+        # arg of g followed through hundreds of halvings.
+        if any(distance(e, a, b) < min(reach / 1000, abs(z - e) / 2, abs(z0 - e) / 2) for a, b in legs for e in ends):
+            continue
+        turn = sum((arg_change(g, a, b) for a, b in legs), mpf(0))
+        if "f0" in r:
+            f0 = mpc(parse_exact(r["f0"][0]), parse_exact(r["f0"][1]))
+        else:
+            f0 = mpmath.exp(nu * mpmath.log(g(z0))) * mpmath.expj(2 * mpmath.pi * nu * int(r["k"]))
+        values.append(f0 * mpmath.exp(nu * (mpmath.log(abs(g(z) / g(z0))) + mpc(0, 1) * turn)))
+        if len(values) == 2:
+            break
+    if len(values) < 2:
+        return {"unchecked": "fewer than two paths from z0 avoid the cuts"}
+    if abs(values[0] - values[1]) > abs(values[0]) * mpf("1e-40"):
+        return {"unchecked": "two paths that avoid the cuts give different values"}
+    return rounded(values[0])
 
 
 def rounded(v):

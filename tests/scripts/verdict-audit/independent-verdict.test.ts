@@ -103,3 +103,38 @@ describe('independentVerdict', () => {
     expect(independentVerdict(point(['-inf', '0x0p+0'], { ulps: 4 }), inf)).toBe('fail');
   });
 });
+
+describe('the verdict audit’s regular branches (mpmath alone)', () => {
+  it('continues √(z² − 1) from √3 at 2 to i√2 at i, off the cut [−1, 1]', () => {
+    // The branch with f(2) = √3 behaves like z at ∞, so on the imaginary axis f(iy) = i√(y² + 1)
+    // (worked by hand from f = |g/g(z0)|^ν e^{iνΔarg g} f0 along the arc from 2 to i).
+    const [value] = mpmathValues([
+      {
+        fn: 'regular',
+        cuts: [],
+        inner: null,
+        convention: 'signed-zero',
+        regular: {
+          g: 'z^2 - 1',
+          nu: ['1/2', '0'],
+          z0: ['2', '0'],
+          k: 0,
+          cuts: [
+            {
+              points: [
+                ['-1', '0'],
+                ['1', '0'],
+              ],
+              to_infinity: false,
+            },
+          ],
+        },
+        z: ['0x0p+0', '0x1p+0'],
+      },
+    ]);
+    const { re, im } = value as { re: string; im: string };
+    // Re f(i) is 0: mpmath at 720 digits leaves at most round-off far below the least double.
+    expect(re).toMatch(/^-?0x(0\.0p\+0|1\.[0-9a-f]+p-(2\d{3}|1\d{3}))$/);
+    expect(im).toBe('0x1.6a09e667f3bcdp+0'); // √2 correctly rounded (common knowledge: 1.4142135623730951)
+  });
+});
