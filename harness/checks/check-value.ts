@@ -3,13 +3,15 @@ import { comparePart } from './compare-part';
 import type { ComplexDouble } from './complex-double';
 import { relativeError } from './relative-error';
 import type { ValueCheck } from './value-check';
+import { withinTolerance } from './within-tolerance';
 
 /**
  * Compares a library value with the correctly rounded reference. A NaN part passes only
  * against NaN, an infinity only against the same infinity. With `zeroSigns` (the signed-zero
  * convention) a zero part must also carry the reference's sign; under counter-clockwise
  * continuity the sign of a zero result is not part of the contract. Finite parts are then held
- * to the tolerance: ulps per part, or the normwise relative error of the whole value.
+ * to the tolerance: ulps per part, the normwise relative error of the whole value, or either
+ * (withinTolerance).
  */
 export function checkValue(
   actual: ComplexDouble,
@@ -25,7 +27,7 @@ export function checkValue(
   const finitenessDiffers = re.finitenessDiffers || im.finitenessDiffers;
   const ulps = Math.max(re.ulps, im.ulps);
   const relErr = relativeError(actual, expected);
-  const within = 'ulps' in tolerance ? ulps <= tolerance.ulps : relErr <= tolerance.relative;
+  const within = withinTolerance(tolerance, ulps, relErr);
   return {
     pass: !finitenessDiffers && zeroSignDiffers.length === 0 && within,
     ulps,

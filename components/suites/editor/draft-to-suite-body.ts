@@ -54,7 +54,7 @@ function pathBody(p: PathDraft): Record<string, unknown> {
 }
 
 function tolerance(t: ToleranceDraft) {
-  return { [t.kind]: num(t.value) };
+  return t.kind === 'either' ? { ulps: num(t.value), relative: num(t.relative ?? '') } : { [t.kind]: num(t.value) };
 }
 
 function propertyBody(p: PropertyDraft): Record<string, unknown> {

@@ -40,9 +40,11 @@ export interface PathDraft {
   grid: Record<string, unknown> | null;
 }
 
+/** A tolerance as typed: `value` is the ulps or the relative bound; `either` holds both, ulps in `value` and the relative bound in `relative`. */
 export interface ToleranceDraft {
-  kind: 'ulps' | 'relative';
+  kind: 'ulps' | 'relative' | 'either';
   value: string;
+  relative?: string;
 }
 
 export interface PropertyDraft {

@@ -6,7 +6,11 @@ import { emptySuiteDraft } from './empty-suite-draft';
 import type { PathDraft, PropertyDraft, SuiteDraft, ToleranceDraft } from './suite-draft';
 
 const toleranceDraft = (t: Tolerance): ToleranceDraft =>
-  'ulps' in t ? { kind: 'ulps', value: String(t.ulps) } : { kind: 'relative', value: String(t.relative) };
+  'ulps' in t && 'relative' in t
+    ? { kind: 'either', value: String(t.ulps), relative: String(t.relative) }
+    : 'ulps' in t
+      ? { kind: 'ulps', value: String(t.ulps) }
+      : { kind: 'relative', value: String(t.relative) };
 
 /** A stored suite as the form holds it, to edit it (a new draft version where the latest is approved). */
 export function suiteToDraft(s: Suite): SuiteDraft {

@@ -6,7 +6,7 @@ import { FormTextInput } from '../../ui/form-text-input';
 import { RuleLines } from '../../ui/rule-lines';
 import type { ToleranceDraft } from './suite-draft';
 
-/** One tolerance: ulps per component or relative error of the whole value. */
+/** One tolerance: ulps per component, relative error of the whole value, or either bound (a value within one passes). */
 export function ToleranceEditor({
   label,
   value,
@@ -27,18 +27,29 @@ export function ToleranceEditor({
         options={[
           { value: 'ulps', text: 'ulps per part' },
           { value: 'relative', text: 'relative error' },
+          { value: 'either', text: 'either bound' },
         ]}
         value={value.kind}
         onChange={(kind) => onChange({ ...value, kind })}
       />
       <FormTextInput
         label={`${label} tolerance`}
-        visibleLabel={value.kind === 'ulps' ? 'At most (ulps)' : 'At most (relative)'}
+        visibleLabel={value.kind === 'relative' ? 'At most (relative)' : 'At most (ulps per part)'}
         value={value.value}
         onChangeText={(v) => onChange({ ...value, value: v })}
-        rules={rules(`${field}.${value.kind}`)}
+        rules={rules(`${field}.${value.kind === 'either' ? 'ulps' : value.kind}`)}
         mono
       />
+      {value.kind === 'either' ? (
+        <FormTextInput
+          label={`${label} relative tolerance`}
+          visibleLabel="Or at most (relative)"
+          value={value.relative ?? ''}
+          onChangeText={(v) => onChange({ ...value, relative: v })}
+          rules={rules(`${field}.relative`)}
+          mono
+        />
+      ) : null}
       <RuleLines rules={rules(field).map((r) => `${label} tolerance ${r}`)} />
     </View>
   );

@@ -55,8 +55,10 @@ export function checkPoints(run: PathRun): void {
     ) {
       // Finite, zero signs right: ulps without BigInt, and the outcome of a failure without checkValue.
       const u = Math.max(ulpsApart(ar, er), ulpsApart(ai, ei));
+      // Within the ulps bound passes without the relative error; otherwise the normwise bound
+      // (alone, or as the other half of an either-bound tolerance) decides.
       const rel = tolUlps >= 0 && u <= tolUlps ? 0 : relativeError([ar, ai], [er, ei]);
-      if (tolUlps >= 0 ? u <= tolUlps : rel <= tolRel) {
+      if ((tolUlps >= 0 && u <= tolUlps) || (tolRel >= 0 && rel <= tolRel)) {
         out.counts.pass++;
         continue;
       }
