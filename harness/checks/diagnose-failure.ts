@@ -1,8 +1,11 @@
 import type { Diagnosis } from '../../shared/diagnosis';
+import type { Tolerance } from '../../shared/schemas/tolerance-schema';
 import type { ComplexDouble } from './complex-double';
 import type { FailureContext } from './failure-context';
+import { measureInaccuracy } from './measure-inaccuracy';
 import { relativeError } from './relative-error';
-import { worstPart } from './worst-part';
+import { ulpsApart } from './ulps-apart';
+import { withinTolerance } from './within-tolerance';
 
 /**
  * Two values are "the same" for diagnosis when they agree to 1e-6: a diagnosis says which
@@ -21,37 +24,52 @@ const sameSigned = (a: ComplexDouble, b: ComplexDouble) =>
   signsOfZeros(a).every((s, i) => s === null || signsOfZeros(b)[i] === null || s === signsOfZeros(b)[i]);
 
 /**
- * Chooses the diagnosis of a failing point (docs/vocabulary.md), in this order: a non-finite part;
- * the value the reference gives with an input zero flipped; a right value with a wrong output
- * zero sign; the other side of the cut or another sheet, whichever is nearer when both match
- * to 1e-6; and then the nearest of all these
- * candidates — the expected value itself meaning `inaccurate` — if any is within 10 %.
- * `misplaced-cut` is decided along a path (findMisplacedCuts), not here.
+ * The accuracy label of a value against the correctly rounded value it is on, when it is outside
+ * the tolerance (a zero of the wrong sign counts as equal here: its sign is a label of its own).
  */
-export function diagnoseFailure(ctx: FailureContext): Diagnosis {
-  const { actual, expected, check } = ctx;
-  if (check.finitenessDiffers) return { kind: 'not-finite' };
+function accuracy(actual: ComplexDouble, on: ComplexDouble, tolerance: Tolerance): Diagnosis[] {
+  const ulps = Math.max(ulpsApart(actual[0], on[0]), ulpsApart(actual[1], on[1]));
+  return withinTolerance(tolerance, ulps, relativeError(actual, on)) ? [] : [measureInaccuracy(actual, on)];
+}
+
+/**
+ * Every label of a failing point (docs/vocabulary.md), the leading one first, branch labels before
+ * the accuracy label. The leading label is chosen in this order: a non-finite part; the value the
+ * reference gives with an input zero flipped; a right value with a wrong output zero sign (one
+ * label per part); the other side of the cut or another sheet, whichever is nearer when both
+ * match to 1e-6; and then the nearest of all these candidates — the expected value itself
+ * meaning `inaccurate` — if any is within 10 %. A value with a zero sign wrong (input or output)
+ * is also measured against the value it is on and labelled `inaccurate` when outside the
+ * tolerance there: a wrong −0 must not hide a part 1e5 ulps off. A value on the other side or
+ * sheet is not measured again: those alternatives are not always correctly rounded (a
+ * straddle's mirror point, a sheet turned in doubles), and an accuracy label against them would
+ * be a guess. `misplaced-cut` is decided along a path (findMisplacedCuts), not here.
+ */
+export function diagnoseFailure(ctx: FailureContext): Diagnosis[] {
+  const { actual, expected, check, tolerance } = ctx;
+  if (check.finitenessDiffers) return [{ kind: 'not-finite' }];
   if (ctx.flippedZero && sameSigned(actual, ctx.flippedZero.value) && !sameSigned(actual, expected)) {
-    return { kind: 'zero-sign', part: ctx.flippedZero.part, of: 'input' };
+    return [
+      { kind: 'zero-sign', part: ctx.flippedZero.part, of: 'input' },
+      ...accuracy(actual, ctx.flippedZero.value, tolerance),
+    ];
   }
-  if (check.zeroSignDiffers.length > 0 && relativeError(actual, expected) <= SAME) {
-    return { kind: 'zero-sign', part: check.zeroSignDiffers[0]!, of: 'output' };
-  }
-  const candidates: { diagnosis: Diagnosis; distance: number }[] = [
+  const outputZeros: Diagnosis[] = check.zeroSignDiffers.map((part) => ({ kind: 'zero-sign', part, of: 'output' }));
+  if (outputZeros.length > 0 && relativeError(actual, expected) <= SAME)
+    return [...outputZeros, ...accuracy(actual, expected, tolerance)];
+  const candidates: { diagnosis: Diagnosis[]; distance: number }[] = [
     {
-      diagnosis: {
-        kind: 'inaccurate',
-        ulps: check.ulps,
-        relativeError: check.relativeError,
-        ...worstPart(actual, expected),
-      },
+      diagnosis: [...outputZeros, ...accuracy(actual, expected, tolerance)],
       distance: relativeError(actual, expected),
     },
   ];
   if (ctx.otherSide)
-    candidates.push({ diagnosis: { kind: 'cut-side' }, distance: relativeError(actual, ctx.otherSide) });
+    candidates.push({ diagnosis: [{ kind: 'cut-side' }], distance: relativeError(actual, ctx.otherSide) });
   for (const sheet of ctx.otherSheets ?? [])
-    candidates.push({ diagnosis: { kind: 'other-sheet', k: sheet.k }, distance: relativeError(actual, sheet.value) });
+    candidates.push({
+      diagnosis: [{ kind: 'other-sheet', k: sheet.k }],
+      distance: relativeError(actual, sheet.value),
+    });
   // Near a cut several alternatives can be within 1e-6 of each other (at 1e-9 from the cut of
   // acot, the other side's limit and v + π differ by 1e-9): the nearest is the better account.
   // Alternatives that both match to round-off (on the cut of ∛, the other side's limit is the
@@ -65,7 +83,10 @@ export function diagnoseFailure(ctx: FailureContext): Diagnosis {
     );
   if (exact) return exact.diagnosis;
   const nearest = candidates.reduce((best, c) => (c.distance < best.distance ? c : best));
+  // Never no label: a failure this check would pass (a relative error rounded at the bound) is
+  // measured all the same.
+  if (nearest.diagnosis.length === 0) return [measureInaccuracy(actual, expected)];
   return nearest.distance <= RECOGNISABLE
     ? nearest.diagnosis
-    : { kind: 'unexplained', relativeError: check.relativeError };
+    : [{ kind: 'unexplained', relativeError: check.relativeError }];
 }

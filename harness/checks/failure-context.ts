@@ -1,3 +1,4 @@
+import type { Tolerance } from '../../shared/schemas/tolerance-schema';
 import type { ComplexDouble } from './complex-double';
 import type { ValueCheck } from './value-check';
 
@@ -6,6 +7,8 @@ export interface FailureContext {
   actual: ComplexDouble;
   expected: ComplexDouble;
   check: ValueCheck;
+  /** The suite's value tolerance: a label of accuracy is added only outside it. */
+  tolerance: Tolerance;
   /** The reference at the same input with one zero part's sign flipped (inputs with a zero part, signed-zero convention). */
   flippedZero?: { part: 're' | 'im'; value: ComplexDouble };
   /** The reference's limit from the other side of the cut the point lies on or next to. */

@@ -17,7 +17,7 @@ const CONTINUOUS = new Set(['circle', 'segment', 'polyline']);
  */
 export function compareAlongPath(run: PathRun): void {
   if (!CONTINUOUS.has(run.path.kind)) return;
-  const { out, expected, actual, diagnoses } = run;
+  const { out, expected, actual, labels } = run;
   const n = run.points.length;
   const t = run.inputs.t;
   const hasSkips = expected.skipped.size > 0;
@@ -46,8 +46,8 @@ export function compareAlongPath(run: PathRun): void {
   };
   out.jumps = { expected: where(ej), library: where(aj) };
   if (run.failing.length > 0) {
-    const redone = findMisplacedCuts(t, [], [], diagnoses, { expected: ej, actual: aj });
-    redone.forEach((d, i) => (diagnoses[i] = d));
+    const redone = findMisplacedCuts(t, [], [], labels, { expected: ej, actual: aj });
+    redone.forEach((d, i) => (labels[i] = d));
   }
   try {
     const mono = run.expectation.monodromy(run.path);

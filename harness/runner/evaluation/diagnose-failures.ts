@@ -2,14 +2,14 @@ import type { PointOutcome } from '../../../shared/point-outcome';
 import { checkValue } from '../../checks/check-value';
 import type { ComplexDouble } from '../../checks/complex-double';
 import { diagnoseFailure } from '../../checks/diagnose-failure';
-import { worstPart } from '../../checks/worst-part';
+import { measureInaccuracy } from '../../checks/measure-inaccuracy';
 import { errorText } from './error-text';
 import type { PathRun } from './path-run';
 
 /** A failure this close to the expected value (relative) can only be inaccurate: see below. */
 const MERELY_INACCURATE = 1e-9;
 
-/** Diagnoses each failure against the alternatives the expectation computes, into `run.diagnoses`. */
+/** Labels each failure against the alternatives the expectation computes, into `run.labels` (diagnoseFailure). */
 export function diagnoseFailures(run: PathRun): void {
   const { re, im } = run.inputs;
   const ere = run.expected.re;
@@ -35,7 +35,7 @@ export function diagnoseFailures(run: PathRun): void {
       ere[i] !== 0 &&
       eim[i] !== 0
     ) {
-      run.diagnoses[i] = { kind: 'inaccurate', ulps: o.ulps, relativeError: o.relativeError, ...worstPart(act, exp) };
+      run.labels[i] = [measureInaccuracy(act, exp)];
       continue;
     }
     let alt;
@@ -56,10 +56,11 @@ export function diagnoseFailures(run: PathRun): void {
       act.every(Number.isFinite) && exp.every(Number.isFinite) && !act.some((x) => x === 0)
         ? check
         : checkValue(act, exp, tol, run.expectation.zeroSigns);
-    run.diagnoses[i] = diagnoseFailure({
+    run.labels[i] = diagnoseFailure({
       actual: act,
       expected: exp,
       check: full,
+      tolerance: tol,
       flippedZero: alt.flippedZero,
       otherSide: alt.otherSide,
       otherSheets: alt.otherSheets,

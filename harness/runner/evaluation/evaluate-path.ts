@@ -65,7 +65,7 @@ export async function evaluatePath(evaluation: PathEvaluation): Promise<PathResu
     outcomes: new Array(n).fill(null),
     failing: [],
     errored: [],
-    diagnoses: new Array(n).fill(null),
+    labels: new Array(n).fill(null),
     alternatives: new Map(),
   };
   checkPoints(run);

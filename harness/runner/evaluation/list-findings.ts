@@ -11,7 +11,7 @@ import { reproducer } from './reproducer';
 import { wireDouble } from './wire-double';
 
 /**
- * Puts each failure's diagnosis on its outcome and counts it, then lists the failing and erring
+ * Puts each failure's labels on its outcome (the leading one as its diagnosis) and counts them, then lists the failing and erring
  * points in index order, up to `maxFindings`, each with its input's exact bits, both values, the
  * rule that fixes the expected value, the one-sided limits on a cut and a reproducer.
  */
@@ -19,7 +19,13 @@ export function listFindings(run: PathRun): void {
   const { out, outcomes, expected, actual, expectation, path, points } = run;
   for (const i of run.failing) {
     const o = outcomes[i] as Extract<PointOutcome, { kind: 'fail' }>;
-    o.diagnosis = run.diagnoses[i] as Diagnosis;
+    // Branch labels lead, accuracy follows (point-outcome.ts), whoever added them.
+    const own = run.labels[i] as Diagnosis[];
+    o.labels = [
+      ...own.filter((l) => diagnosisClass(l.kind) === 'branch'),
+      ...own.filter((l) => diagnosisClass(l.kind) !== 'branch'),
+    ];
+    o.diagnosis = o.labels[0] as Diagnosis;
     const labels = outcomeLabels(o);
     for (const label of labels) out.byDiagnosis[label.kind] = (out.byDiagnosis[label.kind] ?? 0) + 1;
     out.byClass[labels.some((l) => diagnosisClass(l.kind) === 'branch') ? 'branch' : 'accuracy'] += 1;

@@ -21,7 +21,8 @@ export interface PathRun extends PathEvaluation {
   outcomes: (PointOutcome | null)[];
   failing: number[];
   errored: number[];
-  diagnoses: (Diagnosis | null)[];
+  /** Each failing point's labels, the leading one first (diagnoseFailure, findMisplacedCuts); null elsewhere. */
+  labels: (Diagnosis[] | null)[];
   /** The alternatives computed for a failure's diagnosis, by point. */
   alternatives: Map<number, PointAlternatives>;
 }

@@ -8,12 +8,19 @@ const rotate = (v: ComplexDouble, angle: number): ComplexDouble => [
   v[0] * Math.cos(angle) - v[1] * Math.sin(angle),
   v[0] * Math.sin(angle) + v[1] * Math.cos(angle),
 ];
-const diagnose = (
+const labelsOf = (
   actual: ComplexDouble,
   expected: ComplexDouble,
-  extra: Omit<Parameters<typeof diagnoseFailure>[0], 'actual' | 'expected' | 'check'> = {},
+  extra: Omit<Parameters<typeof diagnoseFailure>[0], 'actual' | 'expected' | 'check' | 'tolerance'> = {},
   zeroSigns = true,
-) => diagnoseFailure({ actual, expected, check: checkValue(actual, expected, TOL, zeroSigns), ...extra });
+) =>
+  diagnoseFailure({ actual, expected, check: checkValue(actual, expected, TOL, zeroSigns), tolerance: TOL, ...extra });
+/** The leading label, for points that have one label. */
+const diagnose = (...args: Parameters<typeof labelsOf>) => {
+  const labels = labelsOf(...args);
+  expect(labels).toHaveLength(1);
+  return labels[0]!;
+};
 
 describe('diagnoseFailure', () => {
   it('calls 0 + 2i for sqrt(−4 − 0i) an ignored −0 of the input', () => {
@@ -76,6 +83,60 @@ describe('diagnoseFailure', () => {
       expect(d.ulps).toBeGreaterThan(1e18);
       expect(d.relativeError).toBeLessThan(1e-16);
     }
+  });
+
+  it('reports a part lost to cancellation with its absolute error and |value|, not only its ulps', () => {
+    // The same asech point: the real part is 1e−21 beside |value| ≈ 1.5708, far below 2^−26 of it.
+    const expected = referenceDouble('asech', [1000001, 1e-9]);
+    const d = diagnose([-5.551115123125783e-17, expected[1]], expected);
+    expect(d).toMatchObject({ kind: 'inaccurate', cancellation: { part: 're' } });
+    if (d.kind !== 'inaccurate' || !d.cancellation) throw new Error('no cancellation');
+    expect(d.cancellation.absoluteError).toBeCloseTo(5.551115123125783e-17 + 9.99998000003500056e-22, 30);
+    expect(d.cancellation.magnitude).toBeCloseTo(1.5707953267958966, 15);
+    expect(d.parts).toEqual({
+      re: { ulps: d.ulps, absolute: d.cancellation.absoluteError },
+      im: { ulps: 0, absolute: 0 },
+    });
+  });
+
+  it('gives each part its ulps and absolute error, and no cancellation when both parts are of a size', () => {
+    const expected = referenceDouble('asin', [0.3, 0.2]);
+    const actual: ComplexDouble = [expected[0] + 8 * 2 ** -54, expected[1]];
+    const d = diagnose(actual, expected);
+    expect(d).toMatchObject({
+      kind: 'inaccurate',
+      part: 're',
+      parts: { re: { ulps: 8 }, im: { ulps: 0, absolute: 0 } },
+    });
+    expect(d).not.toHaveProperty('cancellation');
+  });
+
+  it('labels a right value with a wrong output zero sign and a real part 104,212 ulps off both zero-sign and inaccurate', () => {
+    // ISO/IEC 9899:2011 G.6.4.2: csqrt(4 + 0i) = 2 + 0i. One ulp of 2 is 2^−51.
+    const expected = referenceDouble('sqrt', [4, 0]);
+    const labels = labelsOf([2 + 104212 * 2 ** -51, -0], expected);
+    expect(labels).toEqual([
+      { kind: 'zero-sign', part: 'im', of: 'output' },
+      expect.objectContaining({ kind: 'inaccurate', ulps: 104212, part: 're' }),
+    ]);
+  });
+
+  it('labels the flipped-zero value of sqrt(−4 − 0i) 1,000 ulps off zero-sign of the input and inaccurate against that value', () => {
+    // ISO/IEC 9899:2011 G.6.4.2: csqrt(−4 ± 0i) = +0 ± 2i. One ulp of 2 is 2^−51.
+    const expected = referenceDouble('sqrt', [-4, -0]);
+    const flipped = referenceDouble('sqrt', [-4, 0]);
+    const labels = labelsOf([0, 2 + 1000 * 2 ** -51], expected, { flippedZero: { part: 'im', value: flipped } });
+    expect(labels).toEqual([
+      { kind: 'zero-sign', part: 'im', of: 'input' },
+      expect.objectContaining({ kind: 'inaccurate', ulps: 1000, part: 'im' }),
+    ]);
+  });
+
+  it('adds no accuracy label to a zero-sign finding within the tolerance', () => {
+    // ISO/IEC 9899:2011 G.6.4.2: csqrt(4 + 0i) = 2 + 0i; 3 ulps are within the suite's 4.
+    expect(labelsOf([2 + 3 * 2 ** -51, -0], referenceDouble('sqrt', [4, 0]))).toEqual([
+      { kind: 'zero-sign', part: 'im', of: 'output' },
+    ]);
   });
 
   it('names the imaginary part when it is the one further off', () => {
