@@ -41,6 +41,7 @@ export { principalDouble } from './reference/principal-double';
 export { principalValue } from './reference/principal-value';
 export { answerReference } from './reference/answer-reference';
 export { ulpsApart } from './checks/ulps-apart';
+export { relativeError } from './checks/relative-error';
 
 // The function catalogue, for the demo-suite generator.
 export { CATALOGUE_ENTRIES } from './catalogue/catalogue-entries';

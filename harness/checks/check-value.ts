@@ -1,6 +1,7 @@
 import type { Tolerance } from '../../shared/schemas/tolerance-schema';
 import { comparePart } from './compare-part';
 import type { ComplexDouble } from './complex-double';
+import { oppositeSign } from './opposite-sign';
 import { relativeError } from './relative-error';
 import type { ValueCheck } from './value-check';
 import { withinTolerance } from './within-tolerance';
@@ -27,7 +28,7 @@ export function checkValue(
   const finitenessDiffers = re.finitenessDiffers || im.finitenessDiffers;
   const ulps = Math.max(re.ulps, im.ulps);
   const relErr = relativeError(actual, expected);
-  const within = withinTolerance(tolerance, ulps, relErr);
+  const within = withinTolerance(tolerance, ulps, relErr, oppositeSign(actual[0], actual[1], expected[0], expected[1]));
   return {
     pass: !finitenessDiffers && zeroSignDiffers.length === 0 && within,
     ulps,

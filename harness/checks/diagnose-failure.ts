@@ -3,6 +3,7 @@ import type { Tolerance } from '../../shared/schemas/tolerance-schema';
 import type { ComplexDouble } from './complex-double';
 import type { FailureContext } from './failure-context';
 import { measureInaccuracy } from './measure-inaccuracy';
+import { oppositeSign } from './opposite-sign';
 import { relativeError } from './relative-error';
 import { ulpsApart } from './ulps-apart';
 import { withinTolerance } from './within-tolerance';
@@ -29,7 +30,9 @@ const sameSigned = (a: ComplexDouble, b: ComplexDouble) =>
  */
 function accuracy(actual: ComplexDouble, on: ComplexDouble, tolerance: Tolerance): Diagnosis[] {
   const ulps = Math.max(ulpsApart(actual[0], on[0]), ulpsApart(actual[1], on[1]));
-  return withinTolerance(tolerance, ulps, relativeError(actual, on)) ? [] : [measureInaccuracy(actual, on)];
+  return withinTolerance(tolerance, ulps, relativeError(actual, on), oppositeSign(actual[0], actual[1], on[0], on[1]))
+    ? []
+    : [measureInaccuracy(actual, on)];
 }
 
 /**

@@ -3,6 +3,7 @@ import type { Convention } from '../../shared/schemas/convention-schema';
 import type { SuiteInput } from '../../shared/schemas/suite-schema';
 import type { SuitePathInput } from '../../shared/schemas/suite-path-schema';
 import type { DemoCut, DemoPrincipalFunction } from '../../harness';
+import { DEMO_VALUE_TOLERANCE } from './demo-value-tolerance';
 
 const c = (p: [string, string]) => ({ re: p[0], im: p[1] });
 
@@ -66,7 +67,7 @@ export function principalSuite(fn: DemoPrincipalFunction, convention: Convention
     branch: { kind: 'principal' },
     convention,
     paths,
-    tolerances: { values: { ulps: 4 }, properties: { ulps: 16 } },
+    tolerances: { values: DEMO_VALUE_TOLERANCE, properties: { ulps: 16 } },
     properties: fn.laws.map((law) => ({ ...law, runs: 300, seed: seedOf(`${id}/${law.law}`) })),
   };
 }

@@ -12,8 +12,9 @@ const relative = z.number().positive({ error: 'must be positive' }).max(1, { err
  * each part to that many ulps of the reference's part; `{relative}` holds the whole value to a
  * normwise relative error |actual − expected| / |expected|; `{ulps, relative}` passes a value
  * within either bound — the normwise bound forgives a tiny part lost to cancellation beside a
- * large one (a few eps of the whole value are 1e18 ulps of a 1e-21 part), the ulps bound
- * forgives one-ulp errors of subnormal results (a relative error near 1 there).
+ * large one (a few eps of the whole value are 1e18 ulps of a 1e-21 part) unless that part has
+ * the opposite sign, the ulps bound forgives one-ulp errors of subnormal results (a relative
+ * error near 1 there). harness/checks/within-tolerance.ts applies it.
  */
 export const toleranceSchema = z.union(
   [
@@ -21,7 +22,9 @@ export const toleranceSchema = z.union(
     z.strictObject({ relative }, { error: objectError }),
     z.strictObject({ ulps, relative }, { error: objectError }),
   ],
-  { error: 'must be {"ulps": n}, {"relative": x} or {"ulps": n, "relative": x}' },
+  // zod names the broken rule of a one-bound tolerance; of a two-bound one it reports the union,
+  // so the message states every rule.
+  { error: 'must be {"ulps": n} with 0 ≤ n ≤ 2^52, {"relative": x} with 0 < x ≤ 1, or both' },
 );
 
 export type Tolerance = z.infer<typeof toleranceSchema>;

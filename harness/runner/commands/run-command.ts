@@ -9,19 +9,24 @@ import { formatTable } from '../formats/format-table';
 import { loadSuites } from '../plan/load-suites';
 import { resolveTargets } from '../plan/resolve-targets';
 import { runPlan } from '../plan/run-plan';
+import { describeCounts } from '../formats/describe-counts';
 import { parseRunArgs } from './parse-run-args';
+import { runExitCode } from './run-exit-code';
 
 const PROJECT_ROOT = path.resolve(__dirname, '..', '..', '..');
 /** Below this many points, starting worker threads (~1 s each to load tsx and the engine) costs more than it saves. */
 const WORKER_THRESHOLD = 50_000;
 
-const USAGE =
-  'usage: sheetkeeper run --suite FILE|ID|FOLDER --target NAME@VERSION [--format table|json|junit] [--out FILE] [--seed N] [--workers N|auto] [--slice-time-limit MS] [--cache DIR | --no-cache] [--max-findings N] [--progress]';
+const USAGE = [
+  'usage: sheetkeeper run --suite FILE|ID|FOLDER --target NAME@VERSION [--format table|json|junit] [--out FILE] [--seed N] [--workers N|auto] [--slice-time-limit MS] [--cache DIR | --no-cache] [--max-findings N] [--progress]',
+  'exit: 0 pass; 1 branch findings, errors or failed checks; 2 bad input; 3 accuracy findings only',
+].join('\n');
 
 /**
  * `sheetkeeper run` (docs/suite-format.md): loads and validates the suites, resolves the targets, runs
  * the plan and writes the result as a table, JSON or JUnit XML (to --out or stdout). Exit 0
- * when nothing failed, 1 when a point failed, errored or the run was cancelled (Ctrl-C), 2 for
+ * when nothing failed, 3 when the only failures are accuracy findings, 1 for a branch finding, an
+ * error, a failed monodromy or property check or a cancelled run (Ctrl-C) (runExitCode), 2 for
  * bad input: unknown flags, suites or targets, and invalid suite files (each issue printed as
  * `suite: field rule`).
  */
@@ -75,10 +80,10 @@ export async function runCommand(argv: string[]): Promise<number> {
     mkdirSync(path.dirname(path.resolve(args.out)), { recursive: true });
     writeFileSync(args.out, text);
     process.stderr.write(
-      `sheetkeeper run: ${result.status}; ${result.counts.pass} pass, ${result.counts.fail} fail, ${result.counts.error} error, ${result.counts.skipped} skipped; written to ${args.out}\n`,
+      `sheetkeeper run: ${result.status}; ${describeCounts(result.counts, result.byClass, result.byDiagnosis, ', ')}; written to ${args.out}\n`,
     );
   } else {
     process.stdout.write(text);
   }
-  return result.status === 'pass' ? 0 : 1;
+  return runExitCode(result);
 }

@@ -1,4 +1,5 @@
 import { checkValue } from '../../checks/check-value';
+import { oppositeSign } from '../../checks/opposite-sign';
 import { relativeError } from '../../checks/relative-error';
 import { ulpsApart } from '../../checks/ulps-apart';
 import type { PathRun } from './path-run';
@@ -56,9 +57,13 @@ export function checkPoints(run: PathRun): void {
       // Finite, zero signs right: ulps without BigInt, and the outcome of a failure without checkValue.
       const u = Math.max(ulpsApart(ar, er), ulpsApart(ai, ei));
       // Within the ulps bound passes without the relative error; otherwise the normwise bound
-      // (alone, or as the other half of an either-bound tolerance) decides.
+      // decides (withinTolerance: as the other half of an either-bound tolerance it does not
+      // forgive a part of the opposite sign).
       const rel = tolUlps >= 0 && u <= tolUlps ? 0 : relativeError([ar, ai], [er, ei]);
-      if ((tolUlps >= 0 && u <= tolUlps) || (tolRel >= 0 && rel <= tolRel)) {
+      if (
+        (tolUlps >= 0 && u <= tolUlps) ||
+        (tolRel >= 0 && rel <= tolRel && !(tolUlps >= 0 && oppositeSign(ar, ai, er, ei)))
+      ) {
         out.counts.pass++;
         continue;
       }

@@ -1,6 +1,6 @@
 import type { Diagnosis } from '../../../shared/diagnosis';
-import { diagnosisClass } from '../../../shared/diagnosis-class';
-import { outcomeLabels } from '../../../shared/outcome-labels';
+import { diagnosisClass, type DiagnosisClass } from '../../../shared/diagnosis-class';
+import { outcomeClass } from '../../../shared/outcome-class';
 import type { PointOutcome } from '../../../shared/point-outcome';
 import type { PointFinding } from '../../../shared/run-result';
 import type { ComplexPair } from '../../adapters/complex-pair';
@@ -11,8 +11,9 @@ import { reproducer } from './reproducer';
 import { wireDouble } from './wire-double';
 
 /**
- * Puts each failure's labels on its outcome (the leading one as its diagnosis) and counts them, then lists the failing and erring
- * points in index order, up to `maxFindings`, each with its input's exact bits, both values, the
+ * Puts each failure's labels on its outcome (the leading one as its diagnosis) and counts them,
+ * then lists the failing and erring points, branch findings first and in index order within each
+ * class, up to `maxFindings`, each with its input's exact bits, both values, the
  * rule that fixes the expected value, the one-sided limits on a cut and a reproducer.
  */
 export function listFindings(run: PathRun): void {
@@ -26,12 +27,17 @@ export function listFindings(run: PathRun): void {
       ...own.filter((l) => diagnosisClass(l.kind) !== 'branch'),
     ];
     o.diagnosis = o.labels[0] as Diagnosis;
-    const labels = outcomeLabels(o);
-    for (const label of labels) out.byDiagnosis[label.kind] = (out.byDiagnosis[label.kind] ?? 0) + 1;
-    out.byClass[labels.some((l) => diagnosisClass(l.kind) === 'branch') ? 'branch' : 'accuracy'] += 1;
+    for (const label of o.labels) out.byDiagnosis[label.kind] = (out.byDiagnosis[label.kind] ?? 0) + 1;
+    out.byClass[outcomeClass(o) as DiagnosisClass] += 1;
   }
   const expectedAt = (i: number): [number, number] => [expected.re[i] as number, expected.im[i] as number];
-  const listed = [...run.failing, ...run.errored].sort((a, b) => a - b);
+  // Branch findings first, then errors, then accuracy findings, each in index order: when a path
+  // has more failures than maxFindings, the ones cut off are accuracy findings, never a sign flip.
+  const rank = (i: number) => {
+    const cls = outcomeClass(outcomes[i] as PointOutcome);
+    return cls === 'branch' ? 0 : cls === 'accuracy' ? 2 : 1;
+  };
+  const listed = [...run.failing, ...run.errored].sort((a, b) => rank(a) - rank(b) || a - b);
   for (const i of listed.slice(0, run.maxFindings)) {
     const p = points[i] as PathPoint;
     const z: ComplexPair = [p.z.re, p.z.im];

@@ -1,5 +1,8 @@
+import { outcomeClass } from '../../../shared/outcome-class';
 import type { PathResult, PointFinding, RunResult, SuiteTargetResult } from '../../../shared/run-result';
 import type { WireComplex } from '../../../shared/wire-complex';
+import { describeCounts } from './describe-counts';
+import { describeLabelCounts } from './describe-label-counts';
 import { describeOutcome } from './describe-outcome';
 import { formatComplexText } from '../../../shared/format-complex-text';
 
@@ -19,7 +22,7 @@ const seconds = (ms: number) => (ms / 1000).toFixed(3);
 
 function findingText(f: PointFinding): string {
   const lines = [
-    `point ${f.index} (t = ${f.t}${f.label ? `, ${f.label}` : ''}): ${describeOutcome(f.outcome)}`,
+    `point ${f.index} (t = ${f.t}${f.label ? `, ${f.label}` : ''}): ${outcomeClass(f.outcome) ? `[${outcomeClass(f.outcome)}] ` : ''}${describeOutcome(f.outcome)}`,
     `  z        = ${c(f.z)}   [${f.zHex.re}, ${f.zHex.im}]`,
     `  expected = ${c(f.expected)}`,
     `  actual   = ${c(f.actual)}`,
@@ -41,9 +44,7 @@ function testcase(r: SuiteTargetResult, p: PathResult): string {
     p.monodromy && !p.monodromy.pass
       ? `monodromy: expected ${c(p.monodromy.expected)}, library ${c(p.monodromy.library)}${p.monodromy.note ? ` (${p.monodromy.note})` : ''}`
       : '';
-  const diag = Object.entries(p.byDiagnosis)
-    .map(([k, n]) => `${k} ${n}`)
-    .join(', ');
+  const diag = describeLabelCounts(p.byDiagnosis);
   if (p.error || p.counts.error > 0) {
     const body = [p.error ?? '', ...p.findings.filter((f) => f.outcome.kind === 'error').map(findingText)]
       .filter(Boolean)
@@ -58,8 +59,11 @@ function testcase(r: SuiteTargetResult, p: PathResult): string {
     ]
       .filter(Boolean)
       .join('\n\n');
-    const type = Object.keys(p.byDiagnosis)[0] ?? 'monodromy';
-    return `${open}\n      <failure message="${attr(`${p.counts.fail} of ${p.points} points failed${diag ? `: ${diag}` : ''}${mono ? `; ${mono}` : ''}`)}" type="${attr(type)}">${text(body)}</failure>\n    </testcase>`;
+    // A CI reader tells the two apart by the type: "branch" when any point is on the wrong
+    // branch (or the monodromy is wrong), "accuracy" when every failure is on the right branch.
+    const type = p.byClass.branch > 0 || mono ? 'branch' : 'accuracy';
+    const failed = `${p.counts.fail} of ${p.points} points failed (${p.byClass.branch} branch, ${p.byClass.accuracy} accuracy)`;
+    return `${open}\n      <failure message="${attr(`${failed}${diag ? `: ${diag}` : ''}${mono ? `; ${mono}` : ''}`)}" type="${type}">${text(body)}</failure>\n    </testcase>`;
   }
   if (p.counts.pass === 0 && p.counts.skipped > 0) {
     return `${open}\n      <skipped message="${attr(p.skipped.map((s) => `${s.count} skipped: ${s.reason}`).join('; '))}"/>\n    </testcase>`;
@@ -82,7 +86,8 @@ function propertyCases(r: SuiteTargetResult): string[] {
  * The run as JUnit XML for CI: one <testsuite> per suite × target (its properties say what was
  * checked, under which convention, and that a pass is not a certification), one <testcase> per
  * path (and per property check when they ran), failing paths listing each failing point with its
- * diagnosis, exact input bits, limits, rule and reproducer. Text is escaped and characters XML
+ * class and every label, exact input bits, limits, rule and reproducer, branch findings first
+ * (listFindings orders them). A failing path's type is "branch" or "accuracy". Text is escaped and characters XML
  * cannot hold are dropped, so the document is well-formed whatever a library printed.
  */
 export function formatJunit(result: RunResult): string {
@@ -109,7 +114,7 @@ export function formatJunit(result: RunResult): string {
       ['tolerance', r.checked.tolerance],
       [
         'checked',
-        `${r.checked.paths} path(s), ${r.checked.points} point(s): ${r.counts.pass} pass, ${r.counts.fail} fail, ${r.counts.error} error, ${r.counts.skipped} skipped`,
+        `${r.checked.paths} path(s), ${r.checked.points} point(s): ${describeCounts(r.counts, r.byClass, r.byDiagnosis, ', ')}`,
       ],
       [
         'properties',

@@ -1,20 +1,26 @@
-import type { RunResult, SuiteTargetResult } from '../../../shared/run-result';
+import { outcomeClass } from '../../../shared/outcome-class';
+import type { PointFinding, RunResult, SuiteTargetResult } from '../../../shared/run-result';
 import type { WireComplex } from '../../../shared/wire-complex';
+import { describeCounts } from './describe-counts';
 import { describeOutcome } from './describe-outcome';
 import { formatComplexText } from '../../../shared/format-complex-text';
 
 const c = (w: WireComplex | null): string => formatComplexText(w);
-const counts = (r: { pass: number; fail: number; error: number; skipped: number }) =>
-  `${r.pass} pass · ${r.fail} fail · ${r.error} error · ${r.skipped} skipped`;
-const diagnoses = (d: Record<string, number | undefined>) => {
-  const parts = Object.entries(d).map(([k, n]) => `${k} ${n}`);
-  return parts.length ? ` [${parts.join(', ')}]` : '';
-};
+/** The groups findings are listed in: branch findings lead, then points that could not be evaluated, then accuracy. */
+const GROUPS = [
+  { key: 'branch', title: 'branch findings' },
+  { key: 'error', title: 'errors' },
+  { key: 'accuracy', title: 'accuracy findings' },
+] as const;
+const groupOf = (f: PointFinding) => outcomeClass(f.outcome) ?? 'error';
+/** Pairs with branch findings first, then the others in plan order. */
+const branchFirst = <T extends { byClass: { branch: number } }>(list: readonly T[]): T[] =>
+  [...list].sort((a, b) => Number(b.byClass.branch > 0) - Number(a.byClass.branch > 0));
 
 function pair(r: SuiteTargetResult, maxRows: number): string[] {
   const lines: string[] = [];
   lines.push(
-    `${r.status.toUpperCase().padEnd(9)} ${r.suite.id} v${r.suite.version} × ${r.target.name} — ${counts(r.counts)}${diagnoses(r.byDiagnosis)}`,
+    `${r.status.toUpperCase().padEnd(9)} ${r.suite.id} v${r.suite.version} × ${r.target.name} — ${describeCounts(r.counts, r.byClass, r.byDiagnosis)}`,
   );
   lines.push(
     `          checked: ${r.checked.branch}; tolerance ${r.checked.tolerance}; ${r.checked.paths} path(s), ${r.checked.points} point(s); properties: ${r.checked.properties.listed.length ? `${r.checked.properties.listed.join(', ')} (${r.checked.properties.note})` : 'none listed'}`,
@@ -24,21 +30,26 @@ function pair(r: SuiteTargetResult, maxRows: number): string[] {
     if (o.kind === 'failed') lines.push(`          property FAILED: ${o.title} — ${o.reason ?? ''}`);
     else if (o.kind === 'not-checked') lines.push(`          property not checked: ${o.title} — ${o.reason ?? ''}`);
   }
-  let shown = 0;
-  for (const p of r.paths) {
+  for (const p of branchFirst(r.paths)) {
     const mono = p.monodromy
       ? `; monodromy ${p.monodromy.pass ? 'ok' : 'FAILS'}: expected ${c(p.monodromy.expected)}, library ${c(p.monodromy.library)}${p.monodromy.note ? ` (${p.monodromy.note})` : ''}`
       : '';
     const skips = p.skipped.map((s) => `; ${s.count} skipped: ${s.reason}`).join('');
     if (p.counts.fail + p.counts.error === 0 && !mono.includes('FAILS') && !skips) continue;
     lines.push(
-      `          path "${p.name}" (${p.kind}, ${p.points} points): ${counts(p.counts)}${diagnoses(p.byDiagnosis)}${mono}${skips}`,
+      `          path "${p.name}" (${p.kind}, ${p.points} points): ${describeCounts(p.counts, p.byClass, p.byDiagnosis)}${mono}${skips}`,
     );
-    for (const f of p.findings) {
-      if (shown >= maxRows) break;
+  }
+  const findings = r.paths.flatMap((p) => p.findings);
+  let shown = 0;
+  for (const group of GROUPS) {
+    const rows = findings.filter((f) => groupOf(f) === group.key);
+    if (rows.length === 0 || shown >= maxRows) continue;
+    lines.push(`          ${group.title}:`);
+    for (const f of rows.slice(0, maxRows - shown)) {
       shown++;
       lines.push(
-        `            ${(f.label ?? `t = ${f.t}`).padEnd(22)} z = ${c(f.z)}  expected ${c(f.expected)}  got ${c(f.actual)}  → ${describeOutcome(f.outcome)}`,
+        `            ${`"${f.path}" ${f.label ?? `t = ${f.t}`}`.padEnd(30)} z = ${c(f.z)}  expected ${c(f.expected)}  got ${c(f.actual)}  → ${describeOutcome(f.outcome)}`,
       );
     }
   }
@@ -51,17 +62,19 @@ function pair(r: SuiteTargetResult, maxRows: number): string[] {
 }
 
 /**
- * The run for a person: one block per suite × target with its status, counts and diagnoses,
- * what was checked, and the first failing points (z, expected, got, diagnosis). Every table
- * ends by saying that a pass is not a certification.
+ * The run for a person: one block per suite × target with its status, counts (failures split into
+ * branch and accuracy findings) and labels, what was checked, and the first failing points (z,
+ * expected, got, every label), branch findings first: pairs and paths with branch findings lead,
+ * and each pair lists its branch findings, then errors, then accuracy findings. Every table ends
+ * by saying that a pass is not a certification.
  */
 export function formatTable(result: RunResult, maxRows = 12): string {
   const lines = [
     `sheetkeeper run: ${result.plan.suites.length} suite(s) × ${result.plan.targets.length} target(s), ${result.plan.slices} slice(s); status ${result.status.toUpperCase()}`,
-    `points: ${counts(result.counts)}${diagnoses(result.byDiagnosis)}; reference values computed ${result.reference.computed}, from the cache ${result.reference.cached}`,
+    `points: ${describeCounts(result.counts, result.byClass, result.byDiagnosis)}; reference values computed ${result.reference.computed}, from the cache ${result.reference.cached}`,
     '',
   ];
-  for (const r of result.results) lines.push(...pair(r, maxRows), '');
+  for (const r of branchFirst(result.results)) lines.push(...pair(r, maxRows), '');
   lines.push(result.disclaimer);
   return `${lines.join('\n')}\n`;
 }

@@ -55,4 +55,37 @@ describe('checkValue', () => {
     expect(relativeError([0, 0], [0, 0])).toBe(0);
     expect(relativeError([Infinity, 0], [Infinity, 0])).toBe(0);
   });
+
+  describe('with both bounds, {ulps, relative}', () => {
+    const EITHER = { ulps: 4, relative: 4 * Number.EPSILON };
+    // mpmath, 60 digits: asech(1000001 + 1e−9i) = 9.99998000003500056e−22 − 1.5707953267958966i.
+    const asech = referenceDouble('asech', [1000001, 1e-9]);
+
+    it('passes a tiny part lost to cancellation with the right sign on the normwise bound', () => {
+      const v: [number, number] = [5.551115123125783e-17, asech[1]];
+      expect(checkValue(v, asech, { ulps: 4 }, true).pass).toBe(false);
+      expect(checkValue(v, asech, EITHER, true).pass).toBe(true);
+    });
+
+    it('does not forgive a tiny part of the opposite sign, which the normwise bound alone would', () => {
+      // complex.js 2.4.3 returned −5.551115123125783e−17 for this real part in the demo runs.
+      const v: [number, number] = [-5.551115123125783e-17, asech[1]];
+      expect(relativeError(v, asech)).toBeLessThan(4 * Number.EPSILON);
+      expect(checkValue(v, asech, EITHER, true).pass).toBe(false);
+      expect(checkValue(v, asech, { relative: 4 * Number.EPSILON }, true).pass).toBe(true);
+    });
+
+    it('passes a subnormal result 2 ulps off on the ulps bound though its relative error is 2/3', () => {
+      const e: [number, number] = [1.5e-323, 1e-310];
+      const v: [number, number] = [up(e[0], 2), e[1]];
+      expect(relativeError([v[0], 0], [e[0], 0])).toBeCloseTo(2 / 3, 5);
+      expect(checkValue(v, e, EITHER, true).pass).toBe(true);
+      expect(checkValue(v, e, { relative: 4 * Number.EPSILON }, true).pass).toBe(false);
+    });
+
+    it('fails a value outside both bounds', () => {
+      const v: [number, number] = [asech[0], asech[1] * (1 + 1e-14)];
+      expect(checkValue(v, asech, EITHER, true).pass).toBe(false);
+    });
+  });
 });

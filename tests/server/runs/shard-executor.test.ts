@@ -82,10 +82,14 @@ describe('the shard executor', () => {
 
   it("stores an error result that carries the suite's tolerance text and what was to be checked, like a result of its own", () => {
     const byName = Object.fromEntries(rows.map((r) => [r.target_name, r]));
-    expect(byName['fine@1']!.checked.tolerance).toBe('4 ulps per part');
+    expect(byName['fine@1']!.checked.tolerance).toBe('4 ulps per part or relative error 8.881784197001252e-16 (4 eps)');
     for (const name of ['ghost@1', 'hung@1']) {
       expect(byName[name]!.outcome).toBe('error');
-      expect(byName[name]!.checked).toMatchObject({ tolerance: '4 ulps per part', paths: 3, points: 154 });
+      expect(byName[name]!.checked).toMatchObject({
+        tolerance: '4 ulps per part or relative error 8.881784197001252e-16 (4 eps)',
+        paths: 3,
+        points: 154,
+      });
       expect(byName[name]!.counts).toEqual({ pass: 0, fail: 0, error: 154, skipped: 0, notApplicable: 0 });
       expect(byName[name]!.checked.properties).toEqual(
         expect.objectContaining({ run: false, note: 'listed in the suite but not run by this run' }),

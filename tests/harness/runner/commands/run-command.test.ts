@@ -28,7 +28,7 @@ describe('sheetkeeper run', () => {
     expect(r.status).toBe(0);
     expect(r.stdout).toMatch(/^PASS +sqrt-principal-sz v1 × cmath@[\d.]+ — 154 pass · 0 fail/m);
     expect(r.stdout).toContain(
-      'checked: principal branch of every function, signed-zero; tolerance 4 ulps per part; 3 path(s), 154 point(s); properties: conjugate-symmetry, root-power, range (3 property check(s) run)',
+      'checked: principal branch of every function, signed-zero; tolerance 4 ulps per part or relative error 8.881784197001252e-16 (4 eps); 3 path(s), 154 point(s); properties: conjugate-symmetry, root-power, range (3 property check(s) run)',
     );
     expect(r.stdout).toContain('it is not a certification');
   }, 120_000);
@@ -106,9 +106,46 @@ describe('sheetkeeper run', () => {
       expect(s.properties.property.find((p) => p.name === 'disclaimer')!.value).toMatch(/not a certification/);
     }
     const straddle = suites[0]!.testcase[0]!.failure!;
-    expect(straddle.type).toBe('zero-sign');
+    // A CI reader sees the class in the type and every label of each point in the text.
+    expect(straddle.type).toBe('branch');
+    expect(straddle['#text']).toContain('[branch] zero-sign (input im)');
     expect(straddle['#text']).toContain('z        = -1 - 0i   [-0x1p+0, -0x0p+0]');
     expect(straddle['#text']).toContain('const z = c(-1, -0);');
+  }, 120_000);
+
+  it('exits 3 when every failure is an accuracy finding, and says so in its summary line', () => {
+    // Python's cmath follows Annex G (common practice, documented by Python), so held to 0 ulps
+    // its exp misses by an ulp here and there on the right branch, and nowhere else.
+    const file = path.join(dir, 'exp-exact.json');
+    writeFileSync(
+      file,
+      JSON.stringify({
+        id: 'exp-exact',
+        version: 1,
+        title: 'exp held to 0 ulps',
+        subject: 'exp(z)',
+        branch: { kind: 'principal' },
+        convention: 'signed-zero',
+        paths: [
+          {
+            kind: 'circle',
+            name: 'wide circle',
+            center: { re: '0', im: '0' },
+            radius: '3',
+            start_angle: 'pi/8',
+            turns: '1',
+            direction: 'ccw',
+            samples: 49,
+          },
+        ],
+        tolerances: { values: { ulps: 0 } },
+      }),
+    );
+    const r = run(['--suite', file, '--target', 'cmath', '--format', 'json', '--out', path.join(dir, 'exact.json')]);
+    expect(r.status).toBe(3);
+    expect(r.stderr).toMatch(
+      /^sheetkeeper run: fail; \d+ pass, (\d+) fail \(0 branch, \1 accuracy\), 0 error, 0 skipped \[accuracy: inaccurate \1\]; written to /,
+    );
   }, 120_000);
 
   it('exits 2 for bad input: an unknown suite or target, a flag it does not know, an invalid suite file', () => {

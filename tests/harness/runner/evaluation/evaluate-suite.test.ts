@@ -1,3 +1,4 @@
+import { discoverTargets } from '../../../../harness/adapters/discover-targets';
 import { NOTHING_CHECKED } from '../../../../harness/runner/evaluation/pair-status';
 import type { Diagnosis } from '../../../../shared/diagnosis';
 import type { PointFinding, SuiteTargetResult } from '../../../../shared/run-result';
@@ -146,6 +147,59 @@ describe('evaluateSuite', () => {
     expect(r.status).toBe('error');
   });
 
+  it('gives complex.js 2.4.3’s acsc(−0 − 0.001i) every label: zero sign of the input, and 104,212 ulps off in im', async () => {
+    // mpmath, 40 digits: acsc(±0 − 0.001i) = asin(1000i) = ±0 + 7.600902709541988590…i (DLMF 4.23.7);
+    // complex.js returns +0 + 7.6009027094494295i: the −0 ignored, and the imaginary part 9.3e−11 off.
+    const descriptor = discoverTargets().find((d) => d.name === 'complex.js@2.4.3')!;
+    const target = await descriptor.open();
+    try {
+      const r = await evaluateSuite(loadDemoSuite('acsc-principal-sz'), target, { cache });
+      const f = findings(r).find((x) => x.z.re === '-0' && x.z.im === '-0.001')!;
+      expect(f.expected).toEqual({ re: '-0', im: '7.600902709541988' });
+      expect(f.outcome.kind === 'fail' && f.outcome.labels).toEqual([
+        { kind: 'zero-sign', part: 're', of: 'input' },
+        expect.objectContaining({
+          kind: 'inaccurate',
+          ulps: 104212,
+          part: 'im',
+          parts: { re: { ulps: 0, absolute: 0 }, im: { ulps: 104212, absolute: expect.closeTo(9.26e-11, 12) } },
+        }),
+      ]);
+      expect(diagnosis(f)).toEqual({ kind: 'zero-sign', part: 're', of: 'input' });
+      // Counted once as a branch finding, and under both labels.
+      expect(r.byClass.branch + r.byClass.accuracy).toBe(r.counts.fail);
+      expect(r.byDiagnosis['inaccurate']).toBeGreaterThanOrEqual(1);
+    } finally {
+      await target.close();
+    }
+  });
+
+  it('lists branch findings before accuracy findings on a path, and counts the classes', async () => {
+    // The lower half of a circle answered on the other side's sheet (−√z, a branch finding), the
+    // upper half 1e-13 off (an accuracy finding); index order would list the accuracy ones first.
+    const suite = makeSuite({
+      subject: 'sqrt(z)',
+      paths: [
+        {
+          kind: 'grid',
+          name: 'box',
+          min: { re: '0.5', im: '0.5' },
+          max: { re: '0.9', im: '0.6' },
+          columns: 5,
+          rows: 2,
+        },
+      ],
+    });
+    const target = referenceTarget('two-faults@1', (_op, [z], v) =>
+      z![1] < 0.55 ? [v[0] * (1 + 1e-13), v[1]] : [-v[0], -v[1]],
+    );
+    const r = await evaluateSuite(suite, target, { cache });
+    expect(r.byClass).toEqual({ branch: 5, accuracy: 5 });
+    const kinds = findings(r).map((f) => diagnosis(f)?.kind);
+    expect(kinds.slice(0, 5).every((k) => k !== 'inaccurate')).toBe(true);
+    expect(kinds.slice(5)).toEqual(Array(5).fill('inaccurate'));
+  });
+
   it('skips every point, with the reason, when the target lacks an operation of the subject', async () => {
     const noCbrt: Target = { ...referenceTarget(), supports: async (op) => op !== 'cbrt' };
     const r = await evaluateSuite(loadDemoSuite('cbrt-principal-sz'), noCbrt, { cache });
@@ -169,7 +223,7 @@ describe('evaluateSuite', () => {
     expect(r.checked).toEqual({
       convention: 'signed-zero',
       branch: 'principal branch of every function, signed-zero',
-      tolerance: '4 ulps per part',
+      tolerance: '4 ulps per part or relative error 8.881784197001252e-16 (4 eps)',
       paths: 3,
       points: 154,
       properties: {

@@ -64,6 +64,7 @@ describe('output formats', () => {
     expect(notFinite.outcome).toEqual({
       kind: 'fail',
       diagnosis: { kind: 'not-finite' },
+      labels: [{ kind: 'not-finite' }],
       ulps: 'inf',
       relativeError: 'inf',
     });
@@ -74,7 +75,7 @@ describe('output formats', () => {
   it('the table names each pair, its counts and diagnoses, the first failures, and ends with the disclaimer', () => {
     const table = formatTable(result);
     expect(table).toContain('FAIL      exp-principal-sz v1 × oracle');
-    expect(table).toContain('[not-finite 49]');
+    expect(table).toContain('49 fail (49 branch, 0 accuracy) · 0 error · 0 skipped [branch: not-finite 49]');
     expect(table).toContain('ERROR     log-principal-sz v1');
     expect(table).toContain('PASS      sqrt-principal-sz v1');
     expect(table.trimEnd().endsWith(result.disclaimer)).toBe(true);
@@ -83,5 +84,35 @@ describe('output formats', () => {
     const values = [...table.matchAll(/(?:z =|expected|got) (\S+ [+−] \S+i)/g)].map((m) => m[1]);
     expect(values.some((v) => v!.startsWith('−'))).toBe(true);
     for (const v of values) expect(v).toMatch(new RegExp(`^−?${part} [+−] ${part}·?i$`));
+  });
+
+  it('reads an accuracy finding apart from a branch finding: JUnit failure type, table group, every label', async () => {
+    // sqrt 1e-13 off above the real axis (right branch, an accuracy finding) and −√z below it
+    // with a zero sign flipped on the axis (branch findings).
+    const twoFaults: TargetDescriptor = {
+      name: 'two-faults@1',
+      library: 'two-faults',
+      version: '1',
+      settings: {},
+      open: () =>
+        referenceTarget('two-faults@1', (op, [z], v) =>
+          op !== 'sqrt' ? v : z![1] > 0 ? [v[0] * (1 + 1e-13), v[1]] : z![1] < 0 ? [-v[0], -v[1]] : [v[0], -v[1]],
+        ),
+    };
+    const twoFaultsResult = await runPlan(buildPlan([loadDemoSuite('sqrt-principal-sz')], [twoFaults]), { cache });
+    const pair = twoFaultsResult.results[0]!;
+    expect(pair.byClass.branch).toBeGreaterThan(0);
+    expect(pair.byClass.accuracy).toBeGreaterThan(0);
+    const doc = new XMLParser({ ignoreAttributes: false, attributeNamePrefix: '' }).parse(formatJunit(twoFaultsResult));
+    const cases = doc.testsuites.testsuite.testcase as { name: string; failure?: { type: string; message: string } }[];
+    const types = new Set(cases.filter((c) => c.failure).map((c) => c.failure!.type));
+    expect([...types].every((t) => t === 'branch' || t === 'accuracy' || t === 'property')).toBe(true);
+    expect(types.has('branch')).toBe(true);
+    const table = formatTable(twoFaultsResult, 1000);
+    const branchAt = table.indexOf('branch findings:');
+    const accuracyAt = table.indexOf('accuracy findings:');
+    expect(branchAt).toBeGreaterThan(0);
+    expect(accuracyAt).toBeGreaterThan(branchAt);
+    expect(table.slice(accuracyAt)).toMatch(/→ inaccurate, \d+ ulps in re, relative error/);
   });
 });

@@ -1,0 +1,33 @@
+import { describeWorstPart } from '../../../shared/describe-worst-part';
+import type { Diagnosis } from '../../../shared/diagnosis';
+
+const num = (x: number): string =>
+  Number.isFinite(x) ? (Number.isInteger(x) ? String(x) : x.toPrecision(3)) : String(x);
+
+/**
+ * One label in words: "zero-sign (input im)", "other-sheet k = 1", "inaccurate, 7 ulps in re,
+ * relative error 1.6e-16". A part lost to cancellation is given as its absolute error beside the
+ * size of the whole value, not as its ulps (1e18 ulps of a 1e−21 part say nothing).
+ */
+export function describeLabel(d: Diagnosis): string {
+  switch (d.kind) {
+    case 'other-sheet':
+      return `other-sheet k = ${d.k}`;
+    case 'cut-side':
+      return 'cut-side (the other side’s limit)';
+    case 'zero-sign':
+      return `zero-sign (${d.of} ${d.part})`;
+    case 'misplaced-cut':
+      return `misplaced-cut (library jumps at t ≈ ${d.libraryJumpAt === null ? 'nowhere' : num(d.libraryJumpAt)}, expected ${d.expectedJumpAt === null ? 'none' : `at t ≈ ${num(d.expectedJumpAt)}`})`;
+    case 'inaccurate':
+      if (d.cancellation)
+        return `inaccurate, ${d.cancellation.part} lost to cancellation: absolute error ${num(d.cancellation.absoluteError)} beside |value| ${num(d.cancellation.magnitude)}${d.signDiffers ? ', opposite sign' : ''}, relative error ${num(d.relativeError)}`;
+      return `inaccurate, ${[`${num(d.ulps)} ulps`, describeWorstPart(d, 'short')].filter(Boolean).join(' ')}, relative error ${num(d.relativeError)}`;
+    case 'not-finite':
+      return 'not-finite';
+    case 'disagreement':
+      return `disagreement with ${d.with}`;
+    case 'unexplained':
+      return `unexplained, relative error ${num(d.relativeError)}`;
+  }
+}
