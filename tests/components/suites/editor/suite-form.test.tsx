@@ -1,5 +1,8 @@
 import { act, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { emptySuiteDraft } from '../../../../components/suites/editor/empty-suite-draft';
+import { suiteToDraft } from '../../../../components/suites/editor/suite-to-draft';
+import { validateSuite } from '../../../../shared/validate-suite';
+import sqrtDemo from '../../../../suites/demo/sqrt-principal-sz.json';
 import type { SuiteDraft } from '../../../../components/suites/editor/suite-draft';
 import { SuiteForm } from '../../../../components/suites/editor/suite-form';
 import { mockFetch } from '../../../setup/mock-fetch';
@@ -227,6 +230,29 @@ describe('SuiteForm', () => {
       ['POST', '/api/suites'],
       ['POST', '/api/suites/cube-root-of-z-z-minus-1/submit'],
     ]);
+  });
+
+  it('keeps a tolerance with both bounds through an edit: ulps per part or relative error', async () => {
+    const checked = validateSuite(sqrtDemo, 'sqrt-principal-sz.json');
+    if (!checked.ok) throw new Error('the demo suite does not validate');
+    const calls = mockFetch(201, savedVersion);
+    renderWithClient(
+      <SuiteForm
+        initial={{ ...suiteToDraft(checked.suite), id: 'sqrt-copy' }}
+        editing={null}
+        draftKey={DRAFT_KEY}
+        onDone={jest.fn()}
+      />,
+    );
+    await toolsLoaded();
+    expect((screen.getByLabelText('Values relative tolerance') as HTMLInputElement).value).toBe(
+      '8.881784197001252e-16',
+    );
+    type('Values relative tolerance', '1e-15');
+    await press('Save draft');
+    await waitFor(() => expect(calls).toHaveLength(1));
+    const body = JSON.parse(String(calls[0]!.init.body)) as { tolerances: { values: unknown } };
+    expect(body.tolerances.values).toEqual({ ulps: 4, relative: 1e-15 });
   });
 
   it('keeps unsaved typing on this device and offers it back when the form opens again', async () => {
