@@ -117,29 +117,12 @@ describe('sheetkeeper run', () => {
     // Python's cmath follows Annex G (common practice, documented by Python), so held to 0 ulps
     // its exp misses by an ulp here and there on the right branch, and nowhere else.
     const file = path.join(dir, 'exp-exact.json');
+    const demo = JSON.parse(
+      readFileSync(path.join(__dirname, '../../../../suites/demo/exp-principal-sz.json'), 'utf8'),
+    );
     writeFileSync(
       file,
-      JSON.stringify({
-        id: 'exp-exact',
-        version: 1,
-        title: 'exp held to 0 ulps',
-        subject: 'exp(z)',
-        branch: { kind: 'principal' },
-        convention: 'signed-zero',
-        paths: [
-          {
-            kind: 'circle',
-            name: 'wide circle',
-            center: { re: '0', im: '0' },
-            radius: '3',
-            start_angle: 'pi/8',
-            turns: '1',
-            direction: 'ccw',
-            samples: 49,
-          },
-        ],
-        tolerances: { values: { ulps: 0 } },
-      }),
+      JSON.stringify({ ...demo, id: 'exp-exact', tolerances: { values: { ulps: 0 } }, properties: [] }),
     );
     const r = run(['--suite', file, '--target', 'cmath', '--format', 'json', '--out', path.join(dir, 'exact.json')]);
     expect(r.status).toBe(3);
