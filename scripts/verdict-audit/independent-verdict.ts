@@ -69,7 +69,8 @@ function ulpsBetween(a: number, b: number): number {
  * by code written apart from the harness: NaN only against NaN, an infinity only against the
  * same one; where zero signs count (`zeroSigns`, by default under the signed-zero convention) a
  * zero part must carry mpmath's limit sign; then ulps per part
- * (`ulps`) or the normwise relative error |a − e| / |e| (`relative`), or either when both are given.
+ * (`ulps`) or the normwise relative error |a − e| / |e| (`relative`), or either when both are given,
+ * the relative one then only where no non-zero part has the opposite sign to mpmath's.
  */
 export function independentVerdict(p: AuditPoint, mpmath: IndependentValue): 'pass' | 'fail' | 'unchecked' {
   if ('unchecked' in mpmath || !p.actual || !p.tolerance) return 'unchecked';
@@ -88,6 +89,9 @@ export function independentVerdict(p: AuditPoint, mpmath: IndependentValue): 'pa
   const size = Math.hypot(e[0], e[1]);
   const relative = size === 0 ? Math.hypot(a[0] - e[0], a[1] - e[1]) : Math.hypot(a[0] - e[0], a[1] - e[1]) / size;
   const byUlps = tol.ulps !== undefined && ulps <= tol.ulps;
-  const byRelative = tol.relative !== undefined && relative <= tol.relative;
+  // With both bounds, the relative one does not forgive a non-zero part whose sign is opposite
+  // to mpmath's (docs/suite-format.md "Tolerances").
+  const flipped = [0, 1].some((k) => (a[k] as number) * Math.sign(e[k] as number) < 0);
+  const byRelative = tol.relative !== undefined && relative <= tol.relative && !(tol.ulps !== undefined && flipped);
   return byUlps || byRelative ? 'pass' : 'fail';
 }

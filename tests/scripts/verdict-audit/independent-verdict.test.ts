@@ -97,6 +97,15 @@ describe('independentVerdict', () => {
     expect(independentVerdict({ ...moved, tolerance: { relative: 2e-15 } }, reference)).toBe('pass');
   });
 
+  it('with both bounds, passes on either, but not a tiny part of the opposite sign on the relative one', () => {
+    // A real part of ∓2^−54 beside −2i: 2^−55 relative either way, 1e18 ulps from +0 apart.
+    const both = { ulps: 4, relative: 4 * Number.EPSILON };
+    const tiny: IndependentValue = { re: '0x1p-54', im: '-0x1.0000000000000p+1' };
+    expect(independentVerdict(point(['0x1.8p-54', '-0x1p+1'], both), tiny)).toBe('pass');
+    expect(independentVerdict(point(['-0x1p-54', '-0x1p+1'], both), tiny)).toBe('fail');
+    expect(independentVerdict(point(['-0x1p-54', '-0x1p+1'], { relative: 4 * Number.EPSILON }), tiny)).toBe('pass');
+  });
+
   it('passes an infinity only against the same infinity', () => {
     const inf: IndependentValue = { re: 'inf', im: '0x0.0p+0' };
     expect(independentVerdict(point(['inf', '0x0p+0'], { ulps: 4 }), inf)).toBe('pass');
