@@ -72,6 +72,11 @@ describe('output formats', () => {
     expect(back.results[2]).toEqual(JSON.parse(JSON.stringify(result.results[2])));
   });
 
+  it('JSON lists the branch labels of every byDiagnosis before inaccurate', () => {
+    const back = JSON.parse(formatJson({ ...result, byDiagnosis: { inaccurate: 3, 'zero-sign': 1, 'cut-side': 2 } }));
+    expect(Object.keys(back.byDiagnosis)).toEqual(['cut-side', 'zero-sign', 'inaccurate']);
+  });
+
   it('the table names each pair, its counts and diagnoses, the first failures, and ends with the disclaimer', () => {
     const table = formatTable(result);
     expect(table).toContain('FAIL      exp-principal-sz v1 × oracle');
