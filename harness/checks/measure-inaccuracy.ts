@@ -18,9 +18,13 @@ const CANCELLATION = 2 ** -26;
 
 /**
  * The `inaccurate` label of a finite value against the value it should equal (the expected one,
- * or the reference at the flipped zero it matches): the larger per-part ulp distance, the
- * normwise relative error, the worst part and whether its sign differs, both parts' ulps and
- * absolute errors, and `cancellation` when the worst part is tiny beside the whole value.
+ * or the reference at the flipped zero it matches): the normwise relative error, both parts'
+ * ulps and absolute errors, and the part that carries the error with its ulps and whether its
+ * sign differs. That part is the one further off in ulps, unless it is lost to cancellation and
+ * the other part is further off absolutely: complex.js's acos(1000001 + 1e−300i) has a real part
+ * 0 for 1e−306 (2.9e16 ulps, 1e−306 absolute) and an imaginary part 8.6e−6 off (4.8e9 ulps); the
+ * imaginary part is the story. `cancellation` is set when the part told is lost to cancellation
+ * (asech(1000001 + 1e−9i): real part −5.6e−17 for 1e−21, the imaginary part exact).
  */
 export function measureInaccuracy(
   actual: ComplexDouble,
@@ -31,17 +35,20 @@ export function measureInaccuracy(
     absolute: Math.abs(actual[i] - reference[i]),
   });
   const parts = { re: part(0), im: part(1) };
-  const worst = worstPart(actual, reference);
   const magnitude = Math.hypot(reference[0], reference[1]);
-  const worstValue = Math.abs(worst.part === 're' ? reference[0] : reference[1]);
+  const cancelled = (p: 're' | 'im') => Math.abs(p === 're' ? reference[0] : reference[1]) < magnitude * CANCELLATION;
+  const byUlps = worstPart(actual, reference).part;
+  const other = byUlps === 're' ? 'im' : 're';
+  const told = cancelled(byUlps) && parts[other].absolute > parts[byUlps].absolute ? other : byUlps;
+  const i = told === 're' ? 0 : 1;
+  const [a, e] = [actual[i], reference[i]];
   return {
     kind: 'inaccurate',
-    ulps: Math.max(parts.re.ulps, parts.im.ulps),
+    ulps: parts[told].ulps,
     relativeError: relativeError(actual, reference),
-    ...worst,
+    part: told,
+    signDiffers: a !== 0 && e !== 0 && Math.sign(a) !== Math.sign(e),
     parts,
-    ...(worstValue < magnitude * CANCELLATION
-      ? { cancellation: { part: worst.part, absoluteError: parts[worst.part].absolute, magnitude } }
-      : {}),
+    ...(cancelled(told) ? { cancellation: { part: told, absoluteError: parts[told].absolute, magnitude } } : {}),
   };
 }

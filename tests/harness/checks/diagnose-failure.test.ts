@@ -99,6 +99,17 @@ describe('diagnoseFailure', () => {
     });
   });
 
+  it('tells the part further off absolutely when the part further off in ulps is lost to cancellation', () => {
+    // mpmath, 40 digits: acos(1000001 + 1e−300i) = 9.99999000001500e−307 − 14.508658738523469…i.
+    // complex.js 2.4.3 answered 0 − 14.50865012405984i there in our demo runs: its real part is
+    // 2.9e16 ulps off but 1e−306 absolutely, its imaginary part 4.8e9 ulps and 8.6e−6 off.
+    const expected = referenceDouble('acos', [1000001, 1e-300]);
+    const d = diagnose([0, -14.50865012405984], expected);
+    expect(d).toMatchObject({ kind: 'inaccurate', part: 'im', ulps: 4849511899, signDiffers: false });
+    expect(d).not.toHaveProperty('cancellation');
+    if (d.kind === 'inaccurate') expect(d.parts!.re.ulps).toBeGreaterThan(1e16);
+  });
+
   it('gives each part its ulps and absolute error, and no cancellation when both parts are of a size', () => {
     const expected = referenceDouble('asin', [0.3, 0.2]);
     const actual: ComplexDouble = [expected[0] + 8 * 2 ** -54, expected[1]];
