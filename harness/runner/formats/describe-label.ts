@@ -20,8 +20,11 @@ export function describeLabel(d: Diagnosis): string {
     case 'misplaced-cut':
       return `misplaced-cut (library jumps at t ≈ ${d.libraryJumpAt === null ? 'nowhere' : num(d.libraryJumpAt)}, expected ${d.expectedJumpAt === null ? 'none' : `at t ≈ ${num(d.expectedJumpAt)}`})`;
     case 'inaccurate':
-      if (d.cancellation)
-        return `inaccurate, ${d.cancellation.part} lost to cancellation: absolute error ${num(d.cancellation.absoluteError)} beside |value| ${num(d.cancellation.magnitude)}${d.signDiffers ? ', opposite sign' : ''}, relative error ${num(d.relativeError)}`;
+      if (d.cancellation) {
+        const otherPart = d.cancellation.part === 're' ? 'im' : 're';
+        const otherUlps = d.parts?.[otherPart].ulps ?? 0;
+        return `inaccurate, ${d.cancellation.part} lost to cancellation: absolute error ${num(d.cancellation.absoluteError)} beside |value| ${num(d.cancellation.magnitude)}${d.signDiffers ? ', opposite sign' : ''}${otherUlps > 0 ? `; ${otherPart} ${num(otherUlps)} ulps` : ''}, relative error ${num(d.relativeError)}`;
+      }
       return `inaccurate, ${[`${num(d.ulps)} ulps`, describeWorstPart(d, 'short')].filter(Boolean).join(' ')}, relative error ${num(d.relativeError)}`;
     case 'not-finite':
       return 'not-finite';

@@ -110,6 +110,24 @@ describe('diagnoseFailure', () => {
     if (d.kind === 'inaccurate') expect(d.parts!.re.ulps).toBeGreaterThan(1e16);
   });
 
+  it('tells a tiny part of the opposite sign even when the other part is further off absolutely', () => {
+    // acosh(0.5 + 1e−300i): Im = acos(0.5) = π/3 = 1.0471975511965977…, Re = 1e−300/√(1 − 0.25) =
+    // 1.1547e−300 to first order (the derivative of acosh is (z² − 1)^(−1/2); mpmath at 40 digits
+    // loses this real part to cancellation itself). complex.js 2.4.3 answered
+    // −5.551115123125783e−17 + 1.0471975511965976i in our demo runs: the imaginary part 1 ulp
+    // (2.2e−16) off, further than the real part's 5.6e−17, but the real part has the wrong sign.
+    const expected = referenceDouble('acosh', [0.5, 1e-300]);
+    expect(expected[0]).toBeCloseTo(1e-300 / Math.sqrt(0.75), 310);
+    const d = diagnose([-5.551115123125783e-17, 1.0471975511965976], expected);
+    expect(d).toMatchObject({
+      kind: 'inaccurate',
+      part: 're',
+      signDiffers: true,
+      cancellation: { part: 're', absoluteError: 5.551115123125783e-17 },
+      parts: { im: { ulps: 1 } },
+    });
+  });
+
   it('gives each part its ulps and absolute error, and no cancellation when both parts are of a size', () => {
     const expected = referenceDouble('asin', [0.3, 0.2]);
     const actual: ComplexDouble = [expected[0] + 8 * 2 ** -54, expected[1]];
