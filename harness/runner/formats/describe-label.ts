@@ -3,6 +3,7 @@ import type { Diagnosis } from '../../../shared/diagnosis';
 
 const num = (x: number): string =>
   Number.isFinite(x) ? (Number.isInteger(x) ? String(x) : x.toPrecision(3)) : String(x);
+const ulps = (n: number): string => `${num(n)} ${n === 1 ? 'ulp' : 'ulps'}`;
 
 /**
  * One label in words: "zero-sign (input im)", "other-sheet k = 1", "inaccurate, 7 ulps in re,
@@ -23,9 +24,9 @@ export function describeLabel(d: Diagnosis): string {
       if (d.cancellation) {
         const otherPart = d.cancellation.part === 're' ? 'im' : 're';
         const otherUlps = d.parts?.[otherPart].ulps ?? 0;
-        return `inaccurate, ${d.cancellation.part} lost to cancellation: absolute error ${num(d.cancellation.absoluteError)} beside |value| ${num(d.cancellation.magnitude)}${d.signDiffers ? ', opposite sign' : ''}${otherUlps > 0 ? `; ${otherPart} ${num(otherUlps)} ulps` : ''}, relative error ${num(d.relativeError)}`;
+        return `inaccurate, ${d.cancellation.part} lost to cancellation: absolute error ${num(d.cancellation.absoluteError)} beside |value| ${num(d.cancellation.magnitude)}${d.signDiffers ? ', opposite sign' : ''}${otherUlps > 0 ? `; ${otherPart} ${ulps(otherUlps)}` : ''}, relative error ${num(d.relativeError)}`;
       }
-      return `inaccurate, ${[`${num(d.ulps)} ulps`, describeWorstPart(d, 'short')].filter(Boolean).join(' ')}, relative error ${num(d.relativeError)}`;
+      return `inaccurate, ${[ulps(d.ulps), describeWorstPart(d, 'short')].filter(Boolean).join(' ')}, relative error ${num(d.relativeError)}`;
     case 'not-finite':
       return 'not-finite';
     case 'disagreement':
