@@ -30,12 +30,14 @@ export type Diagnosis =
    */
   | { kind: 'misplaced-cut'; libraryJumpAt: number | null; expectedJumpAt: number | null; confirmed?: boolean }
   /**
-   * Right branch and signs, but further from the reference than the tolerance allows. `ulps` is
-   * the larger of the two parts' distances, in `part`; `signDiffers` says that part has the
-   * opposite sign. `parts` gives each part's ulps and absolute error. `cancellation`: the worst
-   * part is tiny beside the whole value (a part lost to cancellation), so its ulps say little;
-   * the absolute error and the size of the whole value |reference| say what was lost. Older
-   * stored diagnoses lack the optional fields.
+   * Right branch and signs, but further from the reference than the tolerance allows. `part` is
+   * the part that carries the error and `ulps` its distance: the larger of the two, unless that
+   * one is tiny with its sign right and the other is further off absolutely
+   * (harness/checks/measure-inaccuracy.ts); `signDiffers` says that part has the opposite sign.
+   * `parts` gives each part's ulps and absolute error. `cancellation`: that part is tiny beside
+   * the whole value (a part lost to cancellation), so its ulps say little; the absolute error and
+   * the size of the whole value |reference| say what was lost. Older stored diagnoses lack the
+   * optional fields.
    */
   | {
       kind: 'inaccurate';
