@@ -35,5 +35,7 @@ export type PropertyOutcome =
       counterexample: ComplexString[];
       reason: string;
       values: NamedValue[];
+      /** For a law that equates two values, the names of its left and right sides among `values`. */
+      sides?: [string, string];
     }
   | { kind: 'not-checked'; law: PropertyCheck['law']; title: string; seed: number; reason: string };

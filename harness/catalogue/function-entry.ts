@@ -1,3 +1,4 @@
+import type { ComplexPair } from '../adapters/complex-pair';
 import type { FunctionName } from '../../shared/function-arity';
 import type { FunctionRule } from '../checks/function-rule';
 import type { RangeCondition } from '../properties/range-condition';
@@ -23,6 +24,14 @@ export interface FunctionEntry {
    * (exp; powers and roots, whose range follows from the exponent: powerRange).
    */
   range: readonly RangeCondition[] | null;
+  /**
+   * |z·f′(z)|: how far f moves when z moves by a relative amount (the first-order sensitivity
+   * of a backward-stable evaluation, f(z(1 + δ)) ≈ f(z) + δ·z·f′(z)), from the function's
+   * derivative in DLMF. A symmetry law allows each library value this much, times the
+   * tolerance, on top of the value's own rounding. Infinite at a branch point; null for pow
+   * and nthroot, whose sensitivity depends on the exponent (|w|·|f|).
+   */
+  sensitivity: ((z: ComplexPair) => number) | null;
   /** How its other values lie, for diagnosing a value on another sheet. */
   sheets: FunctionSheets;
   /** How the convention fingerprint calls it on its cuts; empty for a function without cuts. */

@@ -60,6 +60,7 @@ export async function checkProperty(
   const counterexample = (details.counterexample?.[0] ?? []) as ComplexPair[];
   let reason: string;
   let values: Extract<PropertyOutcome, { kind: 'failed' }>['values'] = [];
+  let sides: [string, string] | undefined;
   if (details.counterexample === null) {
     // fast-check gives up without a counterexample when nearly every drawn point is excluded.
     reason = `no verdict: ${details.numSkips} of the drawn points were excluded by the law (too many to reach ${check.runs} runs)`;
@@ -68,6 +69,7 @@ export async function checkProperty(
       const finding = await law.check(ctx, counterexample);
       reason = finding?.reason ?? 'failed when drawn, held when checked again (the library is not deterministic)';
       values = (finding?.values ?? []).map((v) => ({ name: v.name, value: wire(v.value) }));
+      sides = finding?.sides;
     } catch (e) {
       // A target that throws instead of answering an error result; fast-check shrank on the throw.
       reason = `the check threw: ${e instanceof Error ? e.message : String(e)}`;
@@ -82,5 +84,6 @@ export async function checkProperty(
     counterexample: counterexample.map(wire),
     reason,
     values,
+    ...(sides ? { sides } : {}),
   };
 }

@@ -5,12 +5,22 @@ const MIN_NORMAL = 2 ** -1022;
 
 /**
  * Whether a composed value `got` is close enough to `want` for a law: |got − want| ≤
- * bound·|want| + scale·2^−1022 (the absolute term is for subnormal results). Infinities must
- * match exactly, NaN matches nothing.
+ * bound·|want| + scale·2^−1022 + absolute (the 2^−1022 term is for subnormal results; `absolute`
+ * is what the input's sensitivity allows, subject-sensitivity.ts). Infinities must match
+ * exactly, NaN matches nothing.
  */
-export function composedClose(got: ComplexPair, want: ComplexPair, bound: number, scale: number): boolean {
+export function composedClose(
+  got: ComplexPair,
+  want: ComplexPair,
+  bound: number,
+  scale: number,
+  absolute = 0,
+): boolean {
   if (![...got, ...want].every(Number.isFinite)) {
     return got[0] === want[0] && got[1] === want[1];
   }
-  return Math.hypot(got[0] - want[0], got[1] - want[1]) <= bound * Math.hypot(want[0], want[1]) + scale * MIN_NORMAL;
+  return (
+    Math.hypot(got[0] - want[0], got[1] - want[1]) <=
+    bound * Math.hypot(want[0], want[1]) + scale * MIN_NORMAL + absolute
+  );
 }

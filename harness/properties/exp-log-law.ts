@@ -1,4 +1,5 @@
 import { composedClose } from './composed-close';
+import { gapText } from './gap-text';
 import { evaluateOnTarget } from './evaluate-on-target';
 import { lawTolerance } from './law-tolerance';
 import { libraryValues } from './library-values';
@@ -31,14 +32,16 @@ export const expLogLaw: PropertyLaw = {
     if ('finding' in e) return e.finding;
     const [back, gz] = [e.values[0]!, g.values[0]!];
     const size = Number.isFinite(logZ[0]) && Number.isFinite(logZ[1]) ? Math.max(1, Math.hypot(...logZ)) : 1;
-    if (composedClose(back, gz, size * lawTolerance(ctx.tolerance), 1)) return null;
+    const bound = size * lawTolerance(ctx.tolerance);
+    if (composedClose(back, gz, bound, 1)) return null;
     return {
-      reason: 'exp(log z) differs from z',
+      reason: `exp(log z) differs from z ${gapText(back, gz, 'z', bound)}`,
       values: [
         { name: 'log z', value: logZ },
         { name: 'exp(log z)', value: back },
         { name: 'z', value: gz },
       ],
+      sides: ['exp(log z)', 'z'],
     };
   },
 };

@@ -1,6 +1,7 @@
 import type { ComplexPair } from '../adapters/complex-pair';
 import { Rational } from '../reference/numbers/rational';
 import { composedClose } from './composed-close';
+import { gapText } from './gap-text';
 import { evaluateOnTarget } from './evaluate-on-target';
 import { lawTolerance } from './law-tolerance';
 import { libraryValues } from './library-values';
@@ -57,14 +58,16 @@ export const rootPowerLaw: PropertyLaw = {
       ctx.expr.kind === 'power' && (gz[0] !== 0 || gz[1] !== 0)
         ? powerMismatch(ctx.expr.exponent, root.n) * (Math.abs(Math.log(Math.hypot(...gz))) + Math.PI)
         : 0;
-    if (composedClose(power, gz, root.n * lawTolerance(ctx.tolerance) + exponentError, root.n)) return null;
+    const bound = root.n * lawTolerance(ctx.tolerance) + exponentError;
+    if (composedClose(power, gz, bound, root.n)) return null;
     return {
-      reason: `f(z)^${root.n} differs from g(z)`,
+      reason: `f(z)^${root.n} differs from g(z) ${gapText(power, gz, 'g(z)', bound)}`,
       values: [
         { name: 'f(z)', value: fz },
         { name: `f(z)^${root.n}`, value: power },
         { name: 'g(z)', value: gz },
       ],
+      sides: [`f(z)^${root.n}`, 'g(z)'],
     };
   },
 };

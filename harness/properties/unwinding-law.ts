@@ -60,24 +60,22 @@ export const unwindingLaw: PropertyLaw = {
       im = upper ? Math.abs(im) : -Math.abs(im);
     }
     const expected: ComplexPair = [sum[0], im];
-    if (![...lp, ...expected].every(Number.isFinite))
-      return {
-        reason: 'a logarithm is not finite',
-        values: [
-          { name: 'log(z1*z2)', value: lp },
-          { name: 'expected', value: expected },
-        ],
-      };
-    if (Math.hypot(lp[0] - expected[0], lp[1] - expected[1]) <= tol) return null;
+    const right = `log z1 + log z2 - 2*pi*i*(${k})`;
+    const values = [
+      { name: 'z1*z2', value: p },
+      { name: 'log z1', value: l1 },
+      { name: 'log z2', value: l2 },
+      { name: 'log(z1*z2)', value: lp },
+      { name: right, value: expected },
+    ];
+    const sides: [string, string] = ['log(z1*z2)', right];
+    if (![...lp, ...expected].every(Number.isFinite)) return { reason: 'a logarithm is not finite', values, sides };
+    const gap = Math.hypot(lp[0] - expected[0], lp[1] - expected[1]);
+    if (gap <= tol) return null;
     return {
-      reason: `log(z1*z2) differs from log z1 + log z2 - 2*pi*i*K with K = ${k}`,
-      values: [
-        { name: 'z1*z2', value: p },
-        { name: 'log z1', value: l1 },
-        { name: 'log z2', value: l2 },
-        { name: 'log(z1*z2)', value: lp },
-        { name: 'expected', value: expected },
-      ],
+      reason: `log(z1*z2) differs from log z1 + log z2 - 2*pi*i*K with K = ${k} by ${gap.toPrecision(3)}, over the ${tol.toPrecision(3)} allowed`,
+      values,
+      sides,
     };
   },
 };

@@ -1,6 +1,7 @@
 import { acos } from '../../reference/functions/acos';
 import { DEMO_SHAPES } from '../demo-shapes';
 import type { FunctionEntry } from '../function-entry';
+import { oneMinusSquareSize } from '../one-minus-square-size';
 import { principalRangePart } from '../principal-range-part';
 
 /** acos in the function catalogue; its branch policy is stated in harness/reference/functions/acos.ts. */
@@ -13,6 +14,8 @@ export const acosEntry: FunctionEntry = {
     counterClockwise: 'Kahan 1987: (−∞, −1] belongs to the upper side, [1, ∞) to the lower',
   },
   range: [principalRangePart('re', 0, Math.PI)],
+  // DLMF 4.24.2: d/dz arccos z = −(1 − z²)^(−½) (equation numbers from memory, not checked against the DLMF text).
+  sensitivity: (z) => Math.hypot(...z) / Math.sqrt(oneMinusSquareSize(z)),
   sheets: { kind: 'additive', family: 'acos' },
   fingerprint: [{ label: 'acos', op: 'acos', extra: [] }],
   demo: [

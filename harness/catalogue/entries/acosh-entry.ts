@@ -1,6 +1,7 @@
 import { acosh } from '../../reference/functions/acosh';
 import { DEMO_SHAPES } from '../demo-shapes';
 import type { FunctionEntry } from '../function-entry';
+import { oneMinusSquareSize } from '../one-minus-square-size';
 import { principalRangePart } from '../principal-range-part';
 
 /** acosh in the function catalogue; its branch policy is stated in harness/reference/functions/acosh.ts. */
@@ -14,6 +15,8 @@ export const acoshEntry: FunctionEntry = {
     counterClockwise: 'Kahan 1987: the cut (−∞, 1] belongs to the upper side',
   },
   range: [principalRangePart('re', 0, Infinity), principalRangePart('im', -Math.PI, Math.PI, true)],
+  // DLMF 4.38.2: d/dz arccosh z = (z² − 1)^(−½) (equation numbers from memory, not checked against the DLMF text).
+  sensitivity: (z) => Math.hypot(...z) / Math.sqrt(oneMinusSquareSize(z)),
   sheets: { kind: 'additive', family: 'acosh' },
   fingerprint: [{ label: 'acosh', op: 'acosh', extra: [] }],
   demo: [

@@ -1,6 +1,7 @@
 import { acot } from '../../reference/functions/acot';
 import { DEMO_SHAPES } from '../demo-shapes';
 import type { FunctionEntry } from '../function-entry';
+import { onePlusSquareSize } from '../one-plus-square-size';
 import { principalRangePart } from '../principal-range-part';
 
 const HALF_PI = Math.PI / 2;
@@ -16,6 +17,8 @@ export const acotEntry: FunctionEntry = {
     counterClockwise: 'inherited from atan at 1/z (Kahan 1987): (0, i] left, [−i, 0) right',
   },
   range: [principalRangePart('re', -HALF_PI, HALF_PI)],
+  // DLMF 4.24.6: d/dz arccot z = −1/(1 + z²) (equation numbers from memory, not checked against the DLMF text).
+  sensitivity: (z) => Math.hypot(...z) / onePlusSquareSize(z),
   sheets: { kind: 'additive', family: 'atan' },
   fingerprint: [{ label: 'acot', op: 'acot', extra: [] }],
   demo: [

@@ -1,6 +1,7 @@
 import { acoth } from '../../reference/functions/acoth';
 import { DEMO_SHAPES } from '../demo-shapes';
 import type { FunctionEntry } from '../function-entry';
+import { oneMinusSquareSize } from '../one-minus-square-size';
 import { principalRangePart } from '../principal-range-part';
 
 const HALF_PI = Math.PI / 2;
@@ -16,6 +17,8 @@ export const acothEntry: FunctionEntry = {
     counterClockwise: 'inherited from atanh at 1/z (Kahan 1987): [−1, 0) lower, (0, 1] upper',
   },
   range: [principalRangePart('im', -HALF_PI, HALF_PI)],
+  // DLMF 4.38.6: d/dz arccoth z = 1/(1 − z²) (equation numbers from memory, not checked against the DLMF text).
+  sensitivity: (z) => Math.hypot(...z) / oneMinusSquareSize(z),
   sheets: { kind: 'additive', family: 'atanh' },
   fingerprint: [{ label: 'acoth', op: 'acoth', extra: [] }],
   demo: [

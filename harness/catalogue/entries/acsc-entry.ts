@@ -1,6 +1,7 @@
 import { acsc } from '../../reference/functions/acsc';
 import { DEMO_SHAPES } from '../demo-shapes';
 import type { FunctionEntry } from '../function-entry';
+import { oneMinusSquareSize } from '../one-minus-square-size';
 import { principalRangePart } from '../principal-range-part';
 
 const HALF_PI = Math.PI / 2;
@@ -16,6 +17,8 @@ export const acscEntry: FunctionEntry = {
     counterClockwise: 'inherited from asin at 1/z (Kahan 1987): [−1, 0) lower, (0, 1] upper',
   },
   range: [principalRangePart('re', -HALF_PI, HALF_PI)],
+  // DLMF 4.24.4: d/dz arccsc z = −1/(z(z² − 1)^½), so |z·f′| = |z² − 1|^(−½) (equation numbers from memory, not checked against the DLMF text).
+  sensitivity: (z) => 1 / Math.sqrt(oneMinusSquareSize(z)),
   sheets: { kind: 'additive', family: 'asin' },
   fingerprint: [{ label: 'acsc', op: 'acsc', extra: [] }],
   demo: [

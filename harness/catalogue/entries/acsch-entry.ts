@@ -1,6 +1,7 @@
 import { acsch } from '../../reference/functions/acsch';
 import { DEMO_SHAPES } from '../demo-shapes';
 import type { FunctionEntry } from '../function-entry';
+import { onePlusSquareSize } from '../one-plus-square-size';
 import { principalRangePart } from '../principal-range-part';
 
 const HALF_PI = Math.PI / 2;
@@ -16,6 +17,8 @@ export const acschEntry: FunctionEntry = {
     counterClockwise: 'inherited from asinh at 1/z (Kahan 1987): [−i, 0) right, (0, i] left',
   },
   range: [principalRangePart('im', -HALF_PI, HALF_PI)],
+  // DLMF 4.38.4: d/dz arccsch z = ∓1/(z(1 + z²)^½), so |z·f′| = |1 + z²|^(−½) (equation numbers from memory, not checked against the DLMF text).
+  sensitivity: (z) => 1 / Math.sqrt(onePlusSquareSize(z)),
   sheets: { kind: 'additive', family: 'asinh' },
   fingerprint: [{ label: 'acsch', op: 'acsch', extra: [] }],
   demo: [

@@ -1,6 +1,7 @@
 import { asec } from '../../reference/functions/asec';
 import { DEMO_SHAPES } from '../demo-shapes';
 import type { FunctionEntry } from '../function-entry';
+import { oneMinusSquareSize } from '../one-minus-square-size';
 import { principalRangePart } from '../principal-range-part';
 
 /** asec in the function catalogue; its branch policy is stated in harness/reference/functions/asec.ts. */
@@ -14,6 +15,8 @@ export const asecEntry: FunctionEntry = {
     counterClockwise: 'inherited from acos at 1/z (Kahan 1987): [−1, 0) lower, (0, 1] upper',
   },
   range: [principalRangePart('re', 0, Math.PI)],
+  // DLMF 4.24.5: d/dz arcsec z = 1/(z(z² − 1)^½), so |z·f′| = |z² − 1|^(−½) (equation numbers from memory, not checked against the DLMF text).
+  sensitivity: (z) => 1 / Math.sqrt(oneMinusSquareSize(z)),
   sheets: { kind: 'additive', family: 'acos' },
   fingerprint: [{ label: 'asec', op: 'asec', extra: [] }],
   demo: [

@@ -1,6 +1,7 @@
 import { asech } from '../../reference/functions/asech';
 import { DEMO_SHAPES } from '../demo-shapes';
 import type { FunctionEntry } from '../function-entry';
+import { oneMinusSquareSize } from '../one-minus-square-size';
 import { principalRangePart } from '../principal-range-part';
 
 /** asech in the function catalogue; its branch policy is stated in harness/reference/functions/asech.ts. */
@@ -14,6 +15,8 @@ export const asechEntry: FunctionEntry = {
     counterClockwise: 'inherited from acosh at 1/z (Kahan 1987): both pieces lower',
   },
   range: [principalRangePart('re', 0, Infinity), principalRangePart('im', -Math.PI, Math.PI)],
+  // DLMF 4.38.5: d/dz arcsech z = ∓1/(z(1 − z²)^½), so |z·f′| = |1 − z²|^(−½) (equation numbers from memory, not checked against the DLMF text).
+  sensitivity: (z) => 1 / Math.sqrt(oneMinusSquareSize(z)),
   sheets: { kind: 'additive', family: 'acosh' },
   fingerprint: [{ label: 'asech', op: 'asech', extra: [] }],
   demo: [

@@ -1,6 +1,7 @@
 import { asin } from '../../reference/functions/asin';
 import { DEMO_SHAPES } from '../demo-shapes';
 import type { FunctionEntry } from '../function-entry';
+import { oneMinusSquareSize } from '../one-minus-square-size';
 import { principalRangePart } from '../principal-range-part';
 
 const HALF_PI = Math.PI / 2;
@@ -16,6 +17,8 @@ export const asinEntry: FunctionEntry = {
     counterClockwise: 'Kahan 1987: (−∞, −1] belongs to the upper side, [1, ∞) to the lower',
   },
   range: [principalRangePart('re', -HALF_PI, HALF_PI)],
+  // DLMF 4.24.1: d/dz arcsin z = (1 − z²)^(−½) (equation numbers from memory, not checked against the DLMF text).
+  sensitivity: (z) => Math.hypot(...z) / Math.sqrt(oneMinusSquareSize(z)),
   sheets: { kind: 'additive', family: 'asin' },
   fingerprint: [{ label: 'asin', op: 'asin', extra: [] }],
   demo: [

@@ -1,6 +1,7 @@
 import { asinh } from '../../reference/functions/asinh';
 import { DEMO_SHAPES } from '../demo-shapes';
 import type { FunctionEntry } from '../function-entry';
+import { onePlusSquareSize } from '../one-plus-square-size';
 import { principalRangePart } from '../principal-range-part';
 
 const HALF_PI = Math.PI / 2;
@@ -16,6 +17,8 @@ export const asinhEntry: FunctionEntry = {
     counterClockwise: 'Kahan 1987: [i, i∞) belongs to the right side, (−i∞, −i] to the left',
   },
   range: [principalRangePart('im', -HALF_PI, HALF_PI)],
+  // DLMF 4.38.1: d/dz arcsinh z = (1 + z²)^(−½) (equation numbers from memory, not checked against the DLMF text).
+  sensitivity: (z) => Math.hypot(...z) / Math.sqrt(onePlusSquareSize(z)),
   sheets: { kind: 'additive', family: 'asinh' },
   fingerprint: [{ label: 'asinh', op: 'asinh', extra: [] }],
   demo: [

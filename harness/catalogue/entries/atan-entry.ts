@@ -1,6 +1,7 @@
 import { atan } from '../../reference/functions/atan';
 import { DEMO_SHAPES } from '../demo-shapes';
 import type { FunctionEntry } from '../function-entry';
+import { onePlusSquareSize } from '../one-plus-square-size';
 import { principalRangePart } from '../principal-range-part';
 
 const HALF_PI = Math.PI / 2;
@@ -16,6 +17,8 @@ export const atanEntry: FunctionEntry = {
     counterClockwise: 'Kahan 1987: [i, i∞) belongs to the right side, (−i∞, −i] to the left',
   },
   range: [principalRangePart('re', -HALF_PI, HALF_PI)],
+  // DLMF 4.24.3: d/dz arctan z = 1/(1 + z²) (equation numbers from memory, not checked against the DLMF text).
+  sensitivity: (z) => Math.hypot(...z) / onePlusSquareSize(z),
   sheets: { kind: 'additive', family: 'atan' },
   fingerprint: [{ label: 'atan', op: 'atan', extra: [] }],
   demo: [

@@ -1,6 +1,7 @@
 import { atanh } from '../../reference/functions/atanh';
 import { DEMO_SHAPES } from '../demo-shapes';
 import type { FunctionEntry } from '../function-entry';
+import { oneMinusSquareSize } from '../one-minus-square-size';
 import { principalRangePart } from '../principal-range-part';
 
 const HALF_PI = Math.PI / 2;
@@ -16,6 +17,8 @@ export const atanhEntry: FunctionEntry = {
     counterClockwise: 'Kahan 1987: (−∞, −1] belongs to the upper side, [1, ∞) to the lower',
   },
   range: [principalRangePart('im', -HALF_PI, HALF_PI)],
+  // DLMF 4.38.3: d/dz arctanh z = 1/(1 − z²) (equation numbers from memory, not checked against the DLMF text).
+  sensitivity: (z) => Math.hypot(...z) / oneMinusSquareSize(z),
   sheets: { kind: 'additive', family: 'atanh' },
   fingerprint: [{ label: 'atanh', op: 'atanh', extra: [] }],
   demo: [

@@ -19,6 +19,8 @@ export const cbrtEntry: FunctionEntry = {
     counterClockwise: 'Kahan 1987: the cut (−∞, 0] belongs to the upper side',
   },
   range: null,
+  // d/dz z^⅓ = z^(−⅔)/3, so |z·f′| = |z|^⅓/3.
+  sensitivity: ([x, y]) => Math.cbrt(Math.hypot(x, y)) / 3,
   sheets: { kind: 'root', degree: 3 },
   fingerprint: [
     { label: 'cbrt', op: 'cbrt', extra: [] },

@@ -12,6 +12,8 @@ export const expEntry: FunctionEntry = {
     counterClockwise: 'no cut',
   },
   range: null,
+  // d/dz e^z = e^z, so |z·f′| = |z|·e^(Re z).
+  sensitivity: ([x, y]) => Math.hypot(x, y) * Math.exp(x),
   sheets: { kind: 'none' },
   fingerprint: [],
   demo: [

@@ -13,6 +13,8 @@ export const logEntry: FunctionEntry = {
     counterClockwise: 'Kahan 1987: the cut (−∞, 0] belongs to the upper side, Log(−1) = iπ',
   },
   range: [principalRangePart('im', -Math.PI, Math.PI, true)],
+  // d/dz ln z = 1/z (DLMF 4.10, equation number from memory), so |z·f′| = 1.
+  sensitivity: () => 1,
   sheets: { kind: 'additive', family: 'log' },
   fingerprint: [{ label: 'log', op: 'log', extra: [] }],
   demo: [

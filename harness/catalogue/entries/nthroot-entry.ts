@@ -19,6 +19,8 @@ export const nthrootEntry: FunctionEntry = {
     counterClockwise: 'Kahan 1987: the cut (−∞, 0] belongs to the upper side',
   },
   range: null,
+  // it depends on the degree n: |z·f′| = |f|/n, which the law takes from the subject.
+  sensitivity: null,
   sheets: { kind: 'exponent' },
   fingerprint: [{ label: 'nthroot(z, 3)', op: 'nthroot', extra: [[3, 0]] }],
   demo: [

@@ -20,6 +20,8 @@ export const powEntry: FunctionEntry = {
     counterClockwise: 'Kahan 1987: the cut (−∞, 0] belongs to the upper side',
   },
   range: null,
+  // it depends on the exponent w: |z·f′| = |w|·|f|, which the law takes from the subject.
+  sensitivity: null,
   sheets: { kind: 'exponent' },
   fingerprint: [],
   demo: [

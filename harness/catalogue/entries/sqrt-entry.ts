@@ -16,6 +16,8 @@ export const sqrtEntry: FunctionEntry = {
     counterClockwise: 'Kahan 1987: the cut (−∞, 0] belongs to the upper side, √(−4) = 2i',
   },
   range: [principalRangePart('arg', -HALF_PI, HALF_PI, true)],
+  // d/dz √z = 1/(2√z), so |z·f′| = √|z|/2.
+  sensitivity: ([x, y]) => Math.sqrt(Math.hypot(x, y)) / 2,
   sheets: { kind: 'root', degree: 2 },
   fingerprint: [
     { label: 'sqrt', op: 'sqrt', extra: [] },

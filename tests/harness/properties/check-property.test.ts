@@ -93,7 +93,8 @@ describe('checkProperty', () => {
       // The mutant differs from Annex G only where a zero imaginary part meets the cut (−∞, 0].
       expect(re < 0 && im === 0).toBe(true);
       expect(o.kind === 'failed' && o.path.length > 0 && o.seed === 1330520191).toBe(true);
-      expect(o.kind === 'failed' && o.values.map((v) => v.name)).toEqual(['left', 'right']);
+      expect(o.kind === 'failed' && o.values.map((v) => v.name)).toEqual(['f(conj z)', 'conj f(z)']);
+      expect(o.kind === 'failed' && o.sides).toEqual(['f(conj z)', 'conj f(z)']);
     });
 
     it('holds for a sqrt that ignores zero signs under counter-clockwise, where the law says nothing on the cut, seed 1573653495', async () => {
@@ -107,6 +108,71 @@ describe('checkProperty', () => {
       );
       expect(o).toMatchObject({ kind: 'held' });
       expect(o.kind === 'held' && o.excluded).toBeGreaterThan(0);
+    });
+
+    // Measured on complex.js 2.4.3: acos(−1.000000000000005 ± 5e−324i) has imaginary parts 1.0106459225e−7 and
+    // 1.0106459236e−7 beside a real part π, 8,388,607 ulps apart in that part and 3.5e−17 of |f|.
+    it('holds for an acos off by a quarter ulp of |f| in a tiny imaginary part on one side of the cut, seed 1595614399', async () => {
+      const quarterUlpUp = referenceTarget('counter-clockwise', {
+        acos: ([z], ref) => {
+          const [re, im] = ref('acos', [z!]);
+          return z![1] > 0 ? [re, im + 2 ** -54 * Math.hypot(re, im)] : [re, im];
+        },
+      });
+      const o = await run(
+        'acos(z)',
+        'counter-clockwise',
+        { law: 'conjugate-symmetry', region: NEAR_CUTS, runs: 300, seed: 1595614399 },
+        quarterUlpUp,
+      );
+      expect({ kind: o.kind, reason: 'reason' in o ? o.reason : '' }).toEqual({ kind: 'held', reason: '' });
+    });
+
+    // Backward error: f at z(1 + 2^−50) is what a library 4 ulps off in its input gives; next to the branch
+    // point i, |z·f′(z)|/|f| = |z|/(|1 + z²|·|atan z|) reaches 1e11 (DLMF 4.24.3: d/dz arctan z = 1/(1 + z²)).
+    it('holds for an atan evaluated 4 ulps away from z above the real axis, next to its branch point i, seed 1330520191', async () => {
+      const perturbed = referenceTarget('counter-clockwise', {
+        atan: ([z], ref) =>
+          z![1] > 0 ? ref('atan', [[z![0] * (1 + 2 ** -50), z![1] * (1 + 2 ** -50)]]) : ref('atan', [z!]),
+      });
+      const o = await run(
+        'atan(z)',
+        'counter-clockwise',
+        {
+          law: 'conjugate-symmetry',
+          region: { kind: 'disc', center: { re: '0', im: '1' }, radius: '1e-9' },
+          runs: 300,
+          seed: 1330520191,
+        },
+        perturbed,
+      );
+      expect({ kind: o.kind, reason: 'reason' in o ? o.reason : '' }).toEqual({ kind: 'held', reason: '' });
+    });
+
+    // DLMF 4.23(ii): acos is continuous off its cuts and real on (−1, 1), so just above (−∞, −1) its imaginary
+    // part is negative, below positive. Within t/2 of the branch point −1 (t = 16·2^−52) a flipped imaginary part is
+    // smaller than the sensitivity allowance 2t·|z·f′(z)|; only the rule that parts may not change sign sees it.
+    it('fails for an acos on the wrong side of its cut within 1.5e-15 of the branch point -1, seed 20261205', async () => {
+      const wrongSide = referenceTarget('counter-clockwise', {
+        acos: ([z], ref) => {
+          const [re, im] = ref('acos', [z!]);
+          return z![0] < -1 && z![1] > 0 ? [re, -im] : [re, im];
+        },
+      });
+      const o = await run(
+        'acos(z)',
+        'counter-clockwise',
+        {
+          law: 'conjugate-symmetry',
+          region: { kind: 'disc', center: { re: '-1', im: '0' }, radius: '1.5e-15' },
+          runs: 40,
+          seed: 20261205,
+        },
+        wrongSide,
+      );
+      const [re] = point(o);
+      expect(re).toBeLessThan(-1);
+      expect(o).toMatchObject({ kind: 'failed', reason: expect.stringContaining('sign of im differs') });
     });
 
     it('is not checked for a subject with a non-real constant, since (conj z)^w = conj(z^conj(w))', async () => {
