@@ -2,6 +2,7 @@ import type { TargetIdentity } from './target-identity';
 import type { DiagnosisKind } from './diagnosis';
 import type { DiagnosisClass } from './diagnosis-class';
 import type { PointOutcome } from './point-outcome';
+import type { PropertyOutcome } from './property-outcome';
 import type { WireComplex } from './wire-complex';
 
 /** How many points of a path, a suite × target pair or a run came out each way. */
@@ -100,15 +101,6 @@ export interface PathResult {
   error?: string;
 }
 
-/** The minimal shape of a property outcome (shared/property-outcome.ts of the properties work). */
-export interface PropertyOutcomeSummary {
-  kind: string;
-  law: string;
-  title: string;
-  seed: number;
-  reason?: string;
-}
-
 /** What a suite × target result covered, stated in every output format. */
 export interface CheckedScope {
   convention: string;
@@ -132,7 +124,7 @@ export interface SuiteTargetResult {
   byDiagnosis: Partial<Record<DiagnosisKind, number>>;
   byClass: ClassCounts;
   paths: PathResult[];
-  properties: PropertyOutcomeSummary[] | null;
+  properties: PropertyOutcome[] | null;
   /** Errors of the pair as a whole (no single point): a target that hung past the time limit, crashed, or a suite that could not be evaluated. */
   errors: string[];
   durationMs: number;

@@ -5,7 +5,7 @@ import type { PropertyOutcome } from '../../shared/property-outcome';
 import type { RunPropertyRow } from '../../shared/run-property-row';
 import { SkText } from '../ui/sk-text';
 import { OUTCOME_TONE } from './outcome-tone';
-import { formatComplexText } from '../../shared/format-complex-text';
+import { propertyFailureParts } from '../../shared/property-failure-parts';
 
 const KIND = {
   held: { glyph: '✓', word: 'held', tone: 'pass' },
@@ -17,7 +17,8 @@ const plural = (n: number, word: string) => `${n.toLocaleString('en-GB')} ${word
 
 /**
  * The property checks of a run, grouped by suite × target: the law, its title, the pinned seed,
- * and for a failure the shrunk counterexample, the library's values and fast-check's replay path.
+ * and for a failure the shrunk counterexample, the library's values with the law's two sides marked
+ * and fast-check's replay path (shared/property-failure-parts.ts, as in the CLI's outputs).
  * Pairs with a failure or an unchecked law come first and open; a pair whose every law held is
  * one folded line (a 50-pair run would otherwise list every held law in full).
  */
@@ -103,32 +104,35 @@ function PropertyCheckCard({ pair, outcome }: { pair: string; outcome: PropertyO
           {outcome.reason}
         </SkText>
       ) : null}
-      {outcome.kind === 'failed' ? (
-        <View style={styles.failure}>
-          <SkText variant="caption" style={styles.detail}>
-            {outcome.reason}
-          </SkText>
-          <SkText variant="smallLabel" tone="inkFaint" style={styles.label}>
-            Counterexample (after {outcome.shrinks} shrinks, {outcome.runs} runs)
-          </SkText>
-          {outcome.counterexample.map((z, i) => (
-            <SkText variant="mono" key={i} selectable>
-              {outcome.counterexample.length > 1 ? `z${i + 1}` : 'z'} = {formatComplexText(z)}
-            </SkText>
-          ))}
-          {outcome.values.map((v) => (
-            <SkText variant="mono" key={v.name} selectable>
-              {v.name} = {formatComplexText(v.value)}
-            </SkText>
-          ))}
-          <SkText variant="smallLabel" tone="inkFaint" style={styles.label}>
-            Replay with fast-check: seed {outcome.seed}, path
+      {outcome.kind === 'failed' ? <PropertyFailure outcome={outcome} /> : null}
+    </View>
+  );
+}
+
+/** A failed law: why, the shrunk counterexample, each library value with the law's sides marked, and the replay. */
+function PropertyFailure({ outcome }: { outcome: Extract<PropertyOutcome, { kind: 'failed' }> }) {
+  const parts = propertyFailureParts(outcome);
+  return (
+    <View style={styles.failure}>
+      <SkText variant="caption" style={styles.detail}>
+        {outcome.reason}
+      </SkText>
+      <SkText variant="mono" selectable style={styles.label}>
+        {parts.counterexample}
+      </SkText>
+      {parts.values.map((v) => (
+        <View key={v.name} style={styles.valueRow}>
+          <SkText variant="smallLabel" tone="inkFaint" style={styles.side}>
+            {v.side ?? ''}
           </SkText>
           <SkText variant="mono" selectable>
-            {outcome.path}
+            {v.name} = {v.text}
           </SkText>
         </View>
-      ) : null}
+      ))}
+      <SkText variant="mono" selectable style={styles.label}>
+        {parts.replay}
+      </SkText>
     </View>
   );
 }
@@ -163,4 +167,6 @@ const styles = StyleSheet.create({
   detail: { lineHeight: 20 },
   failure: { gap: 2, marginTop: theme.space(1) },
   label: { marginTop: theme.space(1) },
+  valueRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', columnGap: theme.space(2) },
+  side: { minWidth: 72 },
 });

@@ -122,7 +122,8 @@ export function symmetryLaw(symmetry: Symmetry): PropertyLaw {
           Math.sign(left[i]!) * Math.sign(right[i]!) < 0 &&
           Math.abs(left[i]! - right[i]!) > 2 * t * Math.hypot(...right) + 2 * MIN_NORMAL,
       );
-      if (flipped.length > 0) return fail(`the sign of ${flipped.join(' and ')} differs, beyond rounding`);
+      if (flipped.length > 0)
+        return fail(`the ${flipped.join(' and ')} parts of the sides have opposite signs, by more than rounding`);
       const sensitivity = subjectSensitivity(ctx.expr, z!, fz);
       if (composedClose(left, right, 2 * t, 2, 2 * t * sensitivity)) return null;
       const allowed = 2 * t * (Math.hypot(...right) + sensitivity);

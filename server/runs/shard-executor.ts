@@ -1,6 +1,5 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { evaluatePair, ReferenceCache, type Target } from '../../harness';
-import type { PropertyOutcome } from '../../shared/property-outcome';
 import { FAILURE_ROW_FIELDS } from '../../shared/failure-row-fields';
 import type { PointFinding, SuiteTargetResult } from '../../shared/run-result';
 import { Failure } from '../entities/failure';
@@ -191,7 +190,7 @@ async function storeResult(tx: EntityManager, shard: Shard, result: SuiteTargetR
   }
   if (result.properties && result.properties.length > 0) {
     await tx.getRepository(PropertyResult).insert(
-      (result.properties as PropertyOutcome[]).map((o) => ({
+      result.properties.map((o) => ({
         run: { id: shard.run.id },
         shard: { id: shard.id },
         law: o.law,

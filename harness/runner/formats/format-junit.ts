@@ -5,6 +5,7 @@ import { describeCounts } from './describe-counts';
 import { describeLabelCounts } from './describe-label-counts';
 import { describeOutcome } from './describe-outcome';
 import { formatComplexText } from '../../../shared/format-complex-text';
+import { propertyFailureLines } from '../../../shared/property-failure-lines';
 
 // XML 1.0 allows tab, LF, CR and the ranges below; anything else (other control characters) is dropped.
 const INVALID_XML = /[^\t\n\r\u0020-\uD7FF\uE000-\uFFFD\u{10000}-\u{10FFFF}]/gu;
@@ -75,9 +76,8 @@ function propertyCases(r: SuiteTargetResult): string[] {
   return (r.properties ?? []).map((o) => {
     const open = `    <testcase classname="${attr(`${r.suite.id}@${r.suite.version}.${r.target.name}.properties`)}" name="${attr(`${o.title} (seed ${o.seed})`)}" time="0">`;
     if (o.kind === 'failed')
-      return `${open}\n      <failure message="${attr(o.reason ?? 'failed')}" type="property">${text(JSON.stringify(o, null, 2))}</failure>\n    </testcase>`;
-    if (o.kind === 'not-checked')
-      return `${open}\n      <skipped message="${attr(o.reason ?? 'not checked')}"/>\n    </testcase>`;
+      return `${open}\n      <failure message="${attr(o.reason)}" type="property">${text([o.title, o.reason, ...propertyFailureLines(o, { ascii: true })].join('\n'))}</failure>\n    </testcase>`;
+    if (o.kind === 'not-checked') return `${open}\n      <skipped message="${attr(o.reason)}"/>\n    </testcase>`;
     return `${open}</testcase>`;
   });
 }

@@ -4,6 +4,7 @@ import type { WireComplex } from '../../../shared/wire-complex';
 import { describeCounts } from './describe-counts';
 import { describeOutcome } from './describe-outcome';
 import { formatComplexText } from '../../../shared/format-complex-text';
+import { propertyFailureLines } from '../../../shared/property-failure-lines';
 
 const c = (w: WireComplex | null): string => formatComplexText(w);
 /** The groups findings are listed in: branch findings lead, then points that could not be evaluated, then accuracy. */
@@ -27,8 +28,12 @@ function pair(r: SuiteTargetResult, maxRows: number): string[] {
   );
   for (const e of r.errors) lines.push(`          error: ${e}`);
   for (const o of r.properties ?? []) {
-    if (o.kind === 'failed') lines.push(`          property FAILED: ${o.title} — ${o.reason ?? ''}`);
-    else if (o.kind === 'not-checked') lines.push(`          property not checked: ${o.title} — ${o.reason ?? ''}`);
+    if (o.kind === 'failed')
+      lines.push(
+        `          property FAILED: ${o.title} — ${o.reason}`,
+        ...propertyFailureLines(o).map((l) => `            ${l}`),
+      );
+    else if (o.kind === 'not-checked') lines.push(`          property not checked: ${o.title} — ${o.reason}`);
   }
   for (const p of branchFirst(r.paths)) {
     const mono = p.monodromy

@@ -34,7 +34,11 @@ const rows: RunPropertyRow[] = [
       shrinks: 3,
       counterexample: [{ re: '-1', im: '-0' }],
       reason: 'the imaginary parts differ in sign',
-      values: [{ name: 'log(conj z)', value: { re: '0', im: '3.141592653589793' } }],
+      values: [
+        { name: 'f(conj z)', value: { re: '0', im: '3.141592653589793' } },
+        { name: 'conj f(z)', value: { re: '0', im: '-3.141592653589793' } },
+      ],
+      sides: ['f(conj z)', 'conj f(z)'],
     },
   },
   {
@@ -64,11 +68,18 @@ describe('PropertyChecks', () => {
     ]);
   });
 
-  it('shows a failing pair open, with its counterexample, seed and replay path', () => {
+  it('shows a failing pair open, with its counterexample, both sides of the law, seed and replay path', () => {
     render(<PropertyChecks rows={rows} />);
     const failed = screen.getByTestId('property-log-principal-sz × complex.js@2.4.3-conjugate-symmetry');
-    expect(within(failed).getByText('z = −1 − 0i')).toBeTruthy();
-    expect(within(failed).getByText('12:0:0')).toBeTruthy();
+    expect(within(failed).getByText('counterexample (shrunk 3 times, after 13 runs): z = −1 − 0i')).toBeTruthy();
+    const sides = within(failed)
+      .getAllByText(/side$/)
+      .map((el) => `${el.textContent} ${el.nextSibling?.textContent}`);
+    expect(sides).toEqual([
+      'left side f(conj z) = 0 + 3.141592653589793i',
+      'right side conj f(z) = 0 − 3.141592653589793i',
+    ]);
+    expect(within(failed).getByText('replay with fast-check: seed 7, path "12:0:0"')).toBeTruthy();
     expect(within(failed).getByText('seed 7')).toBeTruthy();
     // Its held law stays visible beside the failure: the pair is open as a whole.
     expect(screen.getByTestId('property-log-principal-sz × complex.js@2.4.3-exp-log')).toBeTruthy();
