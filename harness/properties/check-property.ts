@@ -27,7 +27,7 @@ export async function checkProperty(
   target: Target,
 ): Promise<PropertyOutcome> {
   const law = PROPERTY_LAW_CHECKS[check.law];
-  const title = propertyTitle(check, subject.text, subject.convention);
+  const title = propertyTitle(check, subject.text, subject.convention, subject.tolerance);
   const base = { law: check.law, title, seed: check.seed };
   const ctx: LawContext = {
     target,

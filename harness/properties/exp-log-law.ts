@@ -18,6 +18,7 @@ export const expLogLaw: PropertyLaw = {
   formula: 'exp(log z) = z',
   source:
     "DLMF 4.2(iii) and 4.2.6: exp inverts every branch of log (the identity's equation number was not checked against the DLMF text)",
+  allowance: '|exp(log z) - z| <= t max(1, |log z|) |z|',
   arity: 1,
   ops: () => ['exp'],
   notApplicable: (ctx) => (logOf(ctx.expr) ? null : 'the subject is not a logarithm log(g)'),

@@ -4,10 +4,11 @@ import type { Tolerance } from '../../shared/schemas/tolerance-schema';
 const ULP_OF_ONE = 2 ** -52;
 
 /**
- * A suite's property tolerance as a relative error for laws that compose several operations
- * (a root raised to its power, exp of log, a sum of logs): n ulps is read as n·2^−52 relative,
- * since a per-part ulp count means nothing for a part that cancels; a relative tolerance is
- * used as written; with both, the looser. The law scales it by its own condition number.
+ * t, the normwise relative error one library value is allowed in a property law, from the
+ * suite's property tolerance: n ulps is read as n·2^−52 relative (a per-part ulp count means
+ * nothing for a part far below the other, or one that cancels); a relative tolerance is used as
+ * written; with both, the looser. Each law scales t by the condition of what it composes (its
+ * `allowance`).
  */
 export function lawTolerance(tolerance: Tolerance): number {
   // Either bound passes (tolerance-schema.ts), so the looser of the two applies.

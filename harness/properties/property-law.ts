@@ -10,6 +10,11 @@ import type { LawFinding } from './law-finding';
 export interface PropertyLaw {
   formula: string;
   source: string;
+  /**
+   * What the law allows, in terms of t, the tolerance of one library value (law-tolerance.ts):
+   * each law scales it by the condition of the operations it composes. It goes into the title.
+   */
+  allowance: string;
   arity: 1 | 2;
   /** The library operations the law uses besides the subject's own. */
   ops(ctx: LawContext): string[];

@@ -50,6 +50,7 @@ function partOf([re, im]: ComplexPair, part: RangeCondition['part']): number | n
 export const rangeLaw: PropertyLaw = {
   formula: 'f(z) in the principal range of f',
   source: 'DLMF 4.2(i), 4.23(ii), 4.37(ii); half-open edges per Kahan (1987) under counter-clockwise',
+  allowance: 'each edge e of the range widened by t(|e| + 1)',
   arity: 1,
   ops: () => [],
   notApplicable: (ctx) =>

@@ -31,6 +31,8 @@ function powerMismatch(exponent: Rational, n: number): number {
 export const rootPowerLaw: PropertyLaw = {
   formula: 'f(z)^n = g(z)',
   source: 'definition of the n-th root, DLMF 4.2(iv)',
+  allowance:
+    '|f(z)^n - g(z)| <= (n t + |n w - 1|(|log g(z)| + pi)) |g(z)|, w the exponent 1/n as a double (1 for a named root)',
   arity: 1,
   ops: () => ['mul'],
   notApplicable: (ctx) => {

@@ -67,6 +67,8 @@ export function symmetryLaw(symmetry: Symmetry): PropertyLaw {
   return {
     formula: symmetry.formula,
     source: symmetry.source,
+    allowance:
+      "|left - right| <= 2t(|f(z)| + |z f'(z)|), and no part of opposite signs on the two sides beyond 2t|f(z)|; zero signs exact under signed-zero",
     arity: 1,
     ops: () => [],
     notApplicable: (ctx) =>

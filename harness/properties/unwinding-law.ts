@@ -32,6 +32,7 @@ export const unwindingLaw: PropertyLaw = {
   formula: 'log(z1*z2) = log z1 + log z2 - 2*pi*i*K(log z1 + log z2)',
   source:
     'Corless & Jeffrey 1996, the unwinding number K(w) = ceil((Im w - pi)/(2 pi)) (formula not checked against the paper)',
+  allowance: '|log(z1*z2) - (log z1 + log z2 - 2*pi*i*K)| <= t(|log z1| + |log z2| + pi)',
   arity: 2,
   ops: () => [],
   notApplicable: (ctx) =>

@@ -79,6 +79,10 @@ describe('checkProperty', () => {
       expect(o).toMatchObject({ kind: 'held' });
       expect(o.title).toContain('f(conj z) = conj f(z)');
       expect(o.title).toContain('seed 1330520191');
+      // The title says what the law allows and with which t, so a reader of any output can judge a verdict.
+      expect(o.title).toContain(
+        "t = 16 ulps (3.55e-15) per library value, allowing |left - right| <= 2t(|f(z)| + |z f'(z)|)",
+      );
     });
 
     it('fails for a sqrt that ignores zero signs under signed-zero, shrinking to a point on the cut, seed 1330520191', async () => {
