@@ -67,6 +67,16 @@ export function principalSuite(fn: DemoPrincipalFunction, convention: Convention
     branch: { kind: 'principal' },
     convention,
     paths,
+    // properties: t = 16 ulps, read as 16·2^−52 normwise for each library value in a law
+    // (harness/properties/law-tolerance.ts). The laws test structure (sides, signs, identities);
+    // accuracy is the value checks' job, against the correctly rounded reference. 16 eps is four
+    // times what a value within DEMO_VALUE_TOLERANCE (4 ulps per part, or 4 eps normwise) can be
+    // off normwise, so a value that passes its value check never fails a law by accuracy alone,
+    // and it is far below what a wrong side or sign moves a value. Careful implementations
+    // publish bounds of a few ulps per part for these functions (Hull, Fairgrieve and Tang, ACM
+    // TOMS 23(3), 1997, for casin and cacos: figure from memory). Each law then scales t by the
+    // condition of what it composes: its `allowance`, which every check's title states
+    // (complex.js 2.4.3 against the demo: docs/property-results.md).
     tolerances: { values: DEMO_VALUE_TOLERANCE, properties: { ulps: 16 } },
     properties: fn.laws.map((law) => ({ ...law, runs: 300, seed: seedOf(`${id}/${law.law}`) })),
   };
