@@ -12,6 +12,7 @@ import { referenceTarget } from '../support/reference-target';
 const check = (input: Record<string, unknown>): PropertyCheck => propertyCheckSchema.parse(input);
 const NEAR_CUTS = { kind: 'near-cuts', distance: '1e-6' };
 const DISC = { kind: 'disc', center: { re: '0', im: '0' }, radius: '4' };
+const discAround = (re: string, im: string, radius: string) => ({ kind: 'disc', center: { re, im }, radius });
 
 async function run(
   subject: string,
@@ -142,12 +143,7 @@ describe('checkProperty', () => {
       const o = await run(
         'atan(z)',
         'counter-clockwise',
-        {
-          law: 'conjugate-symmetry',
-          region: { kind: 'disc', center: { re: '0', im: '1' }, radius: '1e-9' },
-          runs: 300,
-          seed: 1330520191,
-        },
+        { law: 'conjugate-symmetry', region: discAround('0', '1', '1e-9'), runs: 300, seed: 1330520191 },
         perturbed,
       );
       expect({ kind: o.kind, reason: 'reason' in o ? o.reason : '' }).toEqual({ kind: 'held', reason: '' });
@@ -166,12 +162,7 @@ describe('checkProperty', () => {
       const o = await run(
         'acos(z)',
         'counter-clockwise',
-        {
-          law: 'conjugate-symmetry',
-          region: { kind: 'disc', center: { re: '-1', im: '0' }, radius: '1.5e-15' },
-          runs: 40,
-          seed: 20261205,
-        },
+        { law: 'conjugate-symmetry', region: discAround('-1', '0', '1.5e-15'), runs: 40, seed: 20261205 },
         wrongSide,
       );
       const [re] = point(o);
