@@ -53,4 +53,5 @@ export { evaluateProgram } from './runner/evaluation/evaluate-program';
 export { pathInputs } from './runner/evaluation/path-inputs';
 export { catalogue } from './reference/catalogue';
 export { formatHexDouble } from './checks/format-hex-double';
+export { parseDouble } from './reference/numbers/parse-double';
 export type { Rational } from './reference/numbers/rational';

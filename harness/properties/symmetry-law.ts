@@ -100,9 +100,11 @@ export function symmetryLaw(symmetry: Symmetry): PropertyLaw {
       });
       const parts = [comparePart(left[0], right[0]), comparePart(left[1], right[1])] as const;
       const signs = (['re', 'im'] as const).filter((_, i) => parts[i]!.zeroSignDiffers);
+      // An infinity or NaN that differs says more than a zero sign, so it is named first.
+      if (parts.some((p) => p.finitenessDiffers))
+        return fail('a part is infinite or NaN on one side and not the same on the other');
       if (ctx.convention === 'signed-zero' && signs.length > 0)
         return fail(`zero sign of ${signs.join(' and ')} differs`);
-      if (parts.some((p) => p.finitenessDiffers)) return fail('one side is not finite');
       if (![...left, ...right].every(Number.isFinite)) return null;
       // Both sides are library values, and z ↦ z̄, z ↦ −z and the value maps are exact. A
       // backward-stable library is within t·(|f| + |z·f′(z)|) of f at z (its rounding, and the

@@ -12,7 +12,7 @@ mpmath has no signed zeros, so a point with a zero part is evaluated as a one-si
 - counter-clockwise continuity (Kahan 1987): a point on a cut takes the limit from the cut's
   side Kahan's rule names (see ccw_side); zero signs are not part of that convention.
 A reciprocal function under counter-clockwise continuity takes g's side at 1/z.
-The limit is read at two displacements, δ = 1e-250 and 1e-300 times (1 + |z|): a part that
+The limit is read at two displacements, δ = 1e-250 and 1e-300 times |z| (1 at z = 0): a part that
 shrinks by more than 1e20 between them vanishes in the limit and becomes a zero with its sign.
 Only where the cuts lie comes from the project's catalogue; the sides are derived here;
 the values are mpmath's own functions (DLMF 4.2, 4.23, 4.37 principal branches).
@@ -51,7 +51,7 @@ def value(p, z, scale=None):
         for cut in inner["cuts"]:
             if on_cut(cut, x, y):
                 sx, sy = ccw_side(cut)
-                w = mpc(x + sx * scale * (1 + abs(w)), y + sy * scale * (1 + abs(w)))
+                w = mpc(x + sx * scale * (abs(w) or 1), y + sy * scale * (abs(w) or 1))
         return mpc(getattr(mpmath, inner["fn"])(w))
     if fn == "pow":
         w = p["w"]
@@ -115,7 +115,9 @@ def checked(p):
         return {"unchecked": "on a finite cut, where the counter-clockwise rule names no single side"}
     if x != 0 and y != 0:
         return rounded(exact)
-    size = 1 + abs(mpc(x, y))
+    # Relative to |z|: 1e-250 * (1 + |z|) moved log(-5e-324 - 0i) to -5e-324 - 1e-250i, whose logarithm
+    # is -690.78 - 1.57i, not the limit -744.44 - 3.14i.
+    size = abs(mpc(x, y)) or 1
     return limit(lambda scale: value(p, displaced(p, x, y, scale * size)))
 
 

@@ -1,5 +1,6 @@
 import { spawnSync } from 'node:child_process';
 import path from 'node:path';
+import { parseDouble } from '../../../harness/reference/numbers/parse-double';
 import {
   independentVerdict,
   type AuditPoint,
@@ -32,6 +33,29 @@ describe('the verdict audit’s independent values (mpmath alone)', () => {
     ]);
     expect(below).toEqual({ re: '0x0.0p+0', im: '-0x1.0000000000000p+1' });
     expect(above).toEqual({ re: '0x0.0p+0', im: '0x1.0000000000000p+1' });
+  });
+
+  it('reads a signed zero beside a subnormal part as the limit from its side: log(−5e−324 ∓ 0i) = ln(5e−324) ∓ πi', () => {
+    // ISO/IEC 9899:2011 G.6.3.2: clog(−x ± 0i) = ln x ± iπ for x > 0. A displacement of 1e−250 (not relative
+    // to |z|) moved this point to −5e−324 − 1e−250i, whose logarithm is −690.78 − 1.57i.
+    const [below, above] = mpmathValues([
+      {
+        fn: 'log',
+        cuts: NEGATIVE_REAL_AXIS,
+        inner: null,
+        convention: 'signed-zero',
+        z: ['-0x0.0000000000001p-1022', '-0x0p+0'],
+      },
+      {
+        fn: 'log',
+        cuts: NEGATIVE_REAL_AXIS,
+        inner: null,
+        convention: 'signed-zero',
+        z: ['-0x0.0000000000001p-1022', '0x0p+0'],
+      },
+    ]) as { re: string; im: string }[];
+    expect([parseDouble(below!.re), parseDouble(below!.im)]).toEqual([-744.4400719213812, -Math.PI]);
+    expect([parseDouble(above!.re), parseDouble(above!.im)]).toEqual([-744.4400719213812, Math.PI]);
   });
 
   it('takes the upper side of the negative real axis under counter-clockwise continuity, whatever the zero’s sign', () => {
