@@ -27,7 +27,10 @@ describe('a failed property check in the outputs', () => {
           op === 'sqrt' && z![0] < 0 && Object.is(z![1], -0) ? [v[0], -v[1]] : v,
         ),
     };
-    result = await runPlan(buildPlan([loadDemoSuite('sqrt-principal-sz')], [ignoresMinusZero]), {
+    // Only the law under test: the suite's other laws cost the reference engine seconds here.
+    const demo = loadDemoSuite('sqrt-principal-sz');
+    const suite = { ...demo, properties: demo.properties.filter((p) => p.law === 'conjugate-symmetry') };
+    result = await runPlan(buildPlan([suite], [ignoresMinusZero]), {
       cache,
       properties: true,
     });
