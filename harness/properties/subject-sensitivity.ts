@@ -13,7 +13,12 @@ const approx = (r: Rational): number => Number(r.num) / Number(r.den);
  */
 export function subjectSensitivity(expr: SubjectExpr, z: ComplexPair, fz: ComplexPair): number {
   const size = Math.hypot(...fz);
-  if (expr.kind === 'call' && expr.arg.kind === 'z') return catalogueEntry(expr.fn)?.sensitivity?.(z) ?? 0;
+  if (expr.kind === 'call' && expr.arg.kind === 'z') {
+    const s = catalogueEntry(expr.fn)?.sensitivity?.(z) ?? 0;
+    // ∞/∞ where |z| and |1 ± z²| both overflow (asin at 1.7e308(1 + i)): there the inverse
+    // functions are well conditioned (|z·f′| → 1 or 0), and 0 leaves the value its rounding only.
+    return Number.isNaN(s) ? 0 : s;
+  }
   if (expr.kind === 'nthroot' && expr.arg.kind === 'z') return size / Math.abs(expr.n);
   if (expr.kind === 'power' && expr.base.kind === 'z') return Math.abs(approx(expr.exponent)) * size;
   if (expr.kind === 'complexPower' && expr.base.kind === 'z' && expr.exponent.kind === 'const')
