@@ -2,7 +2,7 @@ import { formatComplexText } from './format-complex-text';
 import type { PropertyOutcome } from './property-outcome';
 
 /** One library value of a failed law: which side of the law it is (if either), its name and its text. */
-export interface PropertyFailureValue {
+interface PropertyFailureValue {
   side: 'left side' | 'right side' | null;
   name: string;
   text: string;
