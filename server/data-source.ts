@@ -23,6 +23,7 @@ import { DATABASE_CONNECT_TIMEOUT_MS } from './database/database-connect-timeout
 import { logPoolError } from './database/log-pool-error';
 import { RedactingQueryLogger } from './database/redacting-query-logger';
 import { SuiteVersionTakenOverFrom1764887400000 } from './migrations/1764887400000-suite-version-taken-over-from';
+import { FailureLabelsAndClasses1764900000000 } from './migrations/1764900000000-failure-labels-and-classes';
 import { UsersSessionsSignInLimits1764626400000 } from './migrations/1764626400000-users-sessions-sign-in-limits';
 import { SuitesAndVersions1764700000000 } from './migrations/1764700000000-suites-and-versions';
 import { MailOutboxAndReceivedMail1764710000000 } from './migrations/1764710000000-mail-outbox-and-received-mail';
@@ -76,6 +77,7 @@ export const MIGRATIONS = [
   OneActiveRunHeartbeatsMailOnce1764810000000,
   RegressionGroups1764811100000,
   SuiteVersionTakenOverFrom1764887400000,
+  FailureLabelsAndClasses1764900000000,
 ];
 
 export function createDataSource(url: string): DataSource {

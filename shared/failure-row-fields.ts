@@ -1,5 +1,8 @@
 import type { Diagnosis, DiagnosisKind } from './diagnosis';
-import type { PointFinding } from './run-result';
+import type { DiagnosisClass } from './diagnosis-class';
+import { outcomeLabels } from './outcome-labels';
+import { pointClass } from './point-class';
+import type { PointFinding, StepValue } from './run-result';
 import type { WireComplex } from './wire-complex';
 
 /** Carries a field's TypeScript type in the list; it has no value at run time. */
@@ -221,6 +224,27 @@ export const FAILURE_ROW_FIELDS = [
     value: typed<boolean>(),
     csv: [['regression', (r: { isRegression: boolean }) => (r.isRegression ? 'yes' : 'no'), 'text']],
   },
+  /** Every label of the point, the leading one (`diagnosis`) first; one label for rows stored before there were several. */
+  {
+    key: 'labels',
+    column: 'labels',
+    columnType: 'jsonb',
+    shown: 'row',
+    value: typed<Diagnosis[]>(),
+    fromFinding: (f: PointFinding) => outcomeLabels(f.outcome),
+    csv: [['labels', (r: { labels: Diagnosis[] }) => r.labels.map((l) => l.kind).join(' + '), 'text']],
+  },
+  /** branch or accuracy (point-class.ts); null for an error or a skipped point. Pages list branch findings first. */
+  {
+    key: 'findingClass',
+    column: 'finding_class',
+    columnType: 'text',
+    nullable: true,
+    shown: 'row',
+    value: typed<DiagnosisClass | null>(),
+    fromFinding: (f: PointFinding) => pointClass(outcomeLabels(f.outcome)),
+    csv: [['class', (r: { findingClass: DiagnosisClass | null }) => r.findingClass ?? '', 'text']],
+  },
   /** The standard clause or rule that fixes the expected value here. */
   {
     key: 'rule',
@@ -249,5 +273,37 @@ export const FAILURE_ROW_FIELDS = [
     shown: 'detail',
     value: typed<{ sides: [string, string]; values: [WireComplex, WireComplex] } | null>(),
     fromFinding: (f: PointFinding) => f.limits ?? null,
+  },
+  /** A composed subject's intermediate values, library beside reference, in evaluation order. */
+  {
+    key: 'steps',
+    column: 'steps',
+    columnType: 'jsonb',
+    nullable: true,
+    shown: 'detail',
+    value: typed<StepValue[] | null>(),
+    fromFinding: (f: PointFinding) => f.steps ?? null,
+  },
+  /** The index in `steps` of the first step whose library value left the reference's. */
+  {
+    key: 'firstLeftStep',
+    column: 'first_left_step',
+    columnType: 'integer',
+    nullable: true,
+    shown: 'detail',
+    value: typed<number | null>(),
+    fromFinding: (f: PointFinding) => f.firstLeftStep ?? null,
+    csv: [['first_left_step', (r: { firstLeftStep?: number | null }) => r.firstLeftStep ?? '', 'number']],
+  },
+  /** Where conventions disagree about the value, the rule that makes the expected one: a choice, not a fact. */
+  {
+    key: 'choice',
+    column: 'choice',
+    columnType: 'text',
+    nullable: true,
+    shown: 'detail',
+    value: typed<string | null>(),
+    fromFinding: (f: PointFinding) => f.choice ?? null,
+    csv: [['choice', (r: { choice?: string | null }) => r.choice ?? '', 'text']],
   },
 ] as const;

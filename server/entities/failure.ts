@@ -1,5 +1,7 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import type { Diagnosis, DiagnosisKind } from '../../shared/diagnosis';
+import type { DiagnosisClass } from '../../shared/diagnosis-class';
+import type { StepValue } from '../../shared/run-result';
 import type { WireComplex } from '../../shared/wire-complex';
 import { Run } from './run';
 import { Shard } from './shard';
@@ -15,8 +17,9 @@ import { Shard } from './shard';
 @Index('failures_run_diagnosis_idx', ['run', 'diagnosisKind', 'id'])
 @Index('failures_run_suite_idx', ['run', 'suiteSlug', 'id'])
 // Expression and partial indexes TypeORM cannot describe: kept by the migration, skipped by the schema comparison.
-@Index('failures_run_ulps_idx', { synchronize: false })
-@Index('failures_run_diagnosis_ulps_idx', { synchronize: false })
+@Index('failures_run_rank_idx', { synchronize: false })
+@Index('failures_run_rank_ulps_idx', { synchronize: false })
+@Index('failures_labels_idx', { synchronize: false })
 @Index('failures_run_new_idx', { synchronize: false })
 export class Failure {
   @PrimaryGeneratedColumn('identity', { type: 'bigint', generatedIdentity: 'ALWAYS' })
@@ -86,6 +89,14 @@ export class Failure {
   @Column({ type: 'jsonb', nullable: true })
   diagnosis!: Diagnosis | null;
 
+  /** Every label of the point, the leading one (`diagnosis`) first; empty for an error or a skipped point. */
+  @Column({ type: 'jsonb', default: () => `'[]'` })
+  labels!: Diagnosis[];
+
+  /** branch when any label is a branch finding, else accuracy (shared/point-class.ts); null for an error or a skipped point. */
+  @Column({ type: 'text', name: 'finding_class', nullable: true })
+  findingClass!: DiagnosisClass | null;
+
   @Column({ type: 'double precision', nullable: true })
   ulps!: number | null;
 
@@ -100,6 +111,18 @@ export class Failure {
 
   @Column({ type: 'jsonb', nullable: true })
   limits!: { sides: [string, string]; values: [WireComplex, WireComplex] } | null;
+
+  /** A composed subject's intermediate values, library beside reference. */
+  @Column({ type: 'jsonb', nullable: true })
+  steps!: StepValue[] | null;
+
+  /** The index in `steps` of the first step whose library value left the reference's. */
+  @Column({ type: 'integer', name: 'first_left_step', nullable: true })
+  firstLeftStep!: number | null;
+
+  /** Where conventions disagree about the value, the rule that makes the expected one. */
+  @Column({ type: 'text', nullable: true })
+  choice!: string | null;
 
   /** Set when the run completes: this point passed in the previous completed run of the plan. */
   @Column({ type: 'boolean', name: 'is_regression', default: false })

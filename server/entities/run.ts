@@ -1,5 +1,5 @@
 import { Check, Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
-import type { OutcomeCounts } from '../../shared/run-result';
+import type { ClassCounts, OutcomeCounts } from '../../shared/run-result';
 import type { RunStatus, RunTrigger } from '../../shared/run-status';
 import { Plan } from './plan';
 import { User } from './user';
@@ -41,6 +41,10 @@ export class Run {
 
   @Column({ type: 'jsonb' })
   counts!: OutcomeCounts;
+
+  /** Failing points by class, branch and accuracy (shared/run-result.ts ClassCounts). */
+  @Column({ type: 'jsonb', name: 'by_class', default: () => `'{"branch": 0, "accuracy": 0}'` })
+  byClass!: ClassCounts;
 
   /** Failures new since the previous completed run of the plan, per the regression rule; set when the run completes. */
   @Column({ type: 'integer', nullable: true })

@@ -1,6 +1,6 @@
 import { Check, Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import type { DiagnosisKind } from '../../shared/diagnosis';
-import type { CheckedScope, OutcomeCounts } from '../../shared/run-result';
+import type { CheckedScope, ClassCounts, OutcomeCounts } from '../../shared/run-result';
 import { Run } from './run';
 import { SuiteVersion } from './suite-version';
 
@@ -45,6 +45,10 @@ export class Shard {
 
   @Column({ type: 'jsonb', nullable: true })
   counts!: OutcomeCounts | null;
+
+  /** Failing points by class once done. */
+  @Column({ type: 'jsonb', name: 'by_class', nullable: true })
+  byClass!: ClassCounts | null;
 
   @Column({ type: 'jsonb', name: 'by_diagnosis', nullable: true })
   byDiagnosis!: Partial<Record<DiagnosisKind, number>> | null;

@@ -2,7 +2,7 @@ import { createHash } from 'node:crypto';
 import type { Pool } from 'pg';
 import type { DataSource } from 'typeorm';
 import type { FailureQuery } from '../../shared/schemas/failure-query';
-import { FAILURE_ROW, failureSearchSql } from '../sql/failure-search-sql';
+import { FAILURE_ROW, failureSearchSql, RANK } from '../sql/failure-search-sql';
 
 /**
  * One page of the failure table as the response body `{"failures": [...], "next": ...}`,
@@ -15,11 +15,11 @@ import { FAILURE_ROW, failureSearchSql } from '../sql/failure-search-sql';
 export async function failurePageJson(dataSource: DataSource, q: FailureQuery): Promise<string> {
   const { where, order, params } = failureSearchSql(q);
   const byUlps = q.sort === 'ulps';
-  const pageOrder = byUlps ? 'p._u DESC, p._id ASC' : 'p._id ASC';
-  const lastFirst = byUlps ? 'p._u ASC, p._id DESC' : 'p._id DESC';
-  const cursor = byUlps ? `p._id::text || ':' || p._u::text` : 'p._id::text';
+  const pageOrder = byUlps ? 'p._r ASC, p._u DESC, p._id ASC' : 'p._r ASC, p._id ASC';
+  const lastFirst = byUlps ? 'p._r DESC, p._u ASC, p._id DESC' : 'p._r DESC, p._id DESC';
+  const cursor = `p._id::text || ':' || p._r::text${byUlps ? ` || ':' || p._u::text` : ''}`;
   const text = `WITH p AS (
-       SELECT f.id AS _id, coalesce(f.ulps, 0) AS _u, ${FAILURE_ROW} AS r
+       SELECT f.id AS _id, ${RANK} AS _r, coalesce(f.ulps, 0) AS _u, ${FAILURE_ROW} AS r
          FROM failures f ${where} ORDER BY ${order} LIMIT $${params.length})
      SELECT json_build_object(
               'failures', coalesce(json_agg(p.r ORDER BY ${pageOrder}), '[]'::json),

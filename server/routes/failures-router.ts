@@ -86,7 +86,7 @@ export function failuresRouter(dataSource: DataSource, options: { referenceCache
     const id = parseInput(failureIdParams, req.params, 'params').id;
     const [row] = await dataSource.query(`SELECT point_key, target_name FROM failures WHERE id = $1`, [id]);
     if (!row) throw new HttpError(404, { kind: 'not-found', message: 'No failure with that number.' });
-    const { rows } = await searchFailures(dataSource, { sort: 'id', limit: 1, after: String(BigInt(id) - 1n) }, true);
+    const { rows } = await searchFailures(dataSource, { sort: 'id', limit: 1 }, true, id);
     const history = await dataSource.query(
       `SELECT f.id::text AS "id", f.run_id AS "runId", r.created_at AS "runAt", f.target_name AS "targetName", f.target_version AS "targetVersion",
               f.diagnosis_kind AS "diagnosisKind", f.is_regression AS "isRegression"

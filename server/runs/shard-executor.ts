@@ -1,7 +1,8 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { evaluatePair, ReferenceCache, type Target } from '../../harness';
 import { FAILURE_ROW_FIELDS } from '../../shared/failure-row-fields';
-import type { PointFinding, SuiteTargetResult } from '../../shared/run-result';
+import type { DiagnosisClass } from '../../shared/diagnosis-class';
+import type { OutcomeCounts, PointFinding, SuiteTargetResult } from '../../shared/run-result';
 import { Failure } from '../entities/failure';
 import { PathSummary } from '../entities/path-summary';
 import { PropertyResult } from '../entities/property-result';
@@ -11,7 +12,7 @@ import type { MailOutbox } from '../mail/mail-outbox';
 import { markRegressions } from './mark-regressions';
 import { SHARD_LIVENESS } from './shard-liveness';
 
-/** Rows per INSERT when storing failures: 1,000 rows × ~25 columns stays far below PostgreSQL's 65,535 parameters. */
+/** Rows per INSERT when storing failures: 1,000 rows × ~30 columns stays far below PostgreSQL's 65,535 parameters. */
 const INSERT_CHUNK = 1000;
 
 export interface ShardExecutorOptions {
@@ -100,9 +101,13 @@ export class ShardExecutor {
       await storeResult(tx, shard, result);
       const run = await tx.getRepository(Run).findOneOrFail({ where: { id: shard.run.id } });
       const counts = { ...run.counts };
-      for (const k of ['pass', 'fail', 'error', 'skipped'] as const) counts[k] += result.counts[k];
+      for (const k of Object.keys(result.counts) as (keyof OutcomeCounts)[])
+        counts[k] = (counts[k] ?? 0) + result.counts[k];
+      const byClass = { ...run.byClass };
+      for (const k of Object.keys(result.byClass) as DiagnosisClass[])
+        byClass[k] = (byClass[k] ?? 0) + result.byClass[k];
       const shardsDone = run.shardsDone + 1;
-      await tx.getRepository(Run).update(run.id, { counts, shardsDone });
+      await tx.getRepository(Run).update(run.id, { counts, byClass, shardsDone });
       if (shardsDone === run.shardsTotal && run.status !== 'cancelled') {
         await markRegressions(tx, run.id, { outbox: this.options.outbox, appUrl: this.options.appUrl });
       }
@@ -205,6 +210,7 @@ async function storeResult(tx: EntityManager, shard: Shard, result: SuiteTargetR
     status: 'done',
     outcome,
     counts: result.counts,
+    byClass: result.byClass,
     byDiagnosis: result.byDiagnosis,
     checked: result.checked,
     errors: result.errors,

@@ -1,6 +1,11 @@
 import { FAILURE_ROW_FIELDS } from '../../shared/failure-row-fields';
 import type { FailureQuery } from '../../shared/schemas/failure-query';
+import { DIAGNOSIS_CLASSES } from '../../shared/diagnosis-classes';
 import { coveredByDeviationSql } from './covered-by-deviation-sql';
+import { findingRankSql } from './finding-rank-sql';
+
+/** A failure's place in the class order (branch first), as the page order and the rank indexes write it. */
+export const RANK = findingRankSql('f.finding_class');
 
 /** A page row's fields in the order of the composite type `failure_table_row`, with the SQL that reads each. */
 const ROW_FIELDS = FAILURE_ROW_FIELDS.filter((f) => f.shown === 'row');
@@ -17,17 +22,20 @@ export const FAILURE_COLUMNS = ROW_FIELDS.map((f) => `${sqlOf(f)} AS "${f.key}"`
 export const FAILURE_ROW = `ROW(${ROW_FIELDS.map((f) => ('nonFiniteAsNull' in f ? `CASE WHEN ${sqlOf(f)} IN ('NaN', 'Infinity', '-Infinity') THEN NULL ELSE ${sqlOf(f)} END` : sqlOf(f))).join(', ')})::failure_table_row`;
 
 /**
- * The WHERE, ORDER BY and parameters of one page of the failure table: filters become one
+ * The WHERE, ORDER BY and parameters of one page of the failure table, branch findings first:
+ * filters become one
  * parameterised WHERE over indexed columns, and pages are keyed (never OFFSET), so page 1,000
- * costs what page 1 does. The LIMIT is the last parameter. Failures are aliased `f`.
+ * costs what page 1 does. The LIMIT is the last parameter. Failures are aliased `f`. `only`: one
+ * failure by its number (the detail view).
  */
-export function failureSearchSql(q: FailureQuery): { where: string; order: string; params: unknown[] } {
+export function failureSearchSql(q: FailureQuery, only?: string): { where: string; order: string; params: unknown[] } {
   const where: string[] = [];
   const params: unknown[] = [];
   const add = (sql: string, value: unknown) => {
     params.push(value);
     where.push(sql.replace('?', `$${params.length}`));
   };
+  if (only !== undefined) add('id = ?', only);
   if (q.run) add('run_id = ?', q.run);
   if (q.suite) add('suite_slug = ?', q.suite);
   if (q.target) add('target_name = ?', q.target);
@@ -38,22 +46,31 @@ export function failureSearchSql(q: FailureQuery): { where: string; order: strin
       `%${q.fn}(%`,
     );
   if (q.diagnosis === 'error' || q.diagnosis === 'skipped') add('outcome_kind = ?', q.diagnosis);
-  else if (q.diagnosis) add('diagnosis_kind = ?', q.diagnosis);
+  // Any label, not only the leading one: containment, through the GIN index failures_labels_idx.
+  else if (q.diagnosis) add(`labels @> jsonb_build_array(jsonb_build_object('kind', ?::text))`, q.diagnosis);
+  // The class as its rank: the same expression as the page order, so one index serves both.
+  if (q.class) add(`${RANK} = ?`, DIAGNOSIS_CLASSES.indexOf(q.class));
   if (q.status === 'new') where.push('is_regression');
   if (q.status === 'known') where.push(`NOT is_regression AND NOT ${coveredByDeviationSql('f')}`);
   if (q.status === 'accepted') where.push(coveredByDeviationSql('f'));
-  // Qualified: the select list names its text copy of the id "id" too, and ORDER BY would sort that as text.
-  let order = 'f.id ASC';
+  // Branch findings first, then accuracy findings, then errors and skipped points; keyed pages
+  // carry the last row's rank. Qualified: the select list names its text copy of the id "id"
+  // too, and ORDER BY would sort that as text.
+  let order = `${RANK} ASC, f.id ASC`;
+  const [afterId, afterRank, afterUlps] = q.after?.split(':') ?? [];
   if (q.sort === 'ulps') {
-    order = 'coalesce(f.ulps, 0) DESC, f.id ASC';
+    order = `${RANK} ASC, coalesce(f.ulps, 0) DESC, f.id ASC`;
     if (q.after) {
-      const [id, ulps] = q.after.split(':');
-      params.push(Number(ulps ?? 0), id);
+      params.push(Number(afterRank), Number(afterUlps ?? 0), afterId);
+      const [r, u, id] = [params.length - 2, params.length - 1, params.length].map((n) => `$${n}`);
       where.push(
-        `(coalesce(ulps, 0) < $${params.length - 1} OR (coalesce(ulps, 0) = $${params.length - 1} AND id > $${params.length}))`,
+        `(${RANK} > ${r} OR (${RANK} = ${r} AND (coalesce(ulps, 0) < ${u} OR (coalesce(ulps, 0) = ${u} AND id > ${id}))))`,
       );
     }
-  } else if (q.after) add('id > ?', q.after.split(':')[0]);
+  } else if (q.after) {
+    params.push(Number(afterRank), afterId);
+    where.push(`(${RANK}, id) > ($${params.length - 1}, $${params.length})`);
+  }
   params.push(q.limit);
   return { where: where.length ? `WHERE ${where.join(' AND ')}` : '', order, params };
 }

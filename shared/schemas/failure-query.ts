@@ -3,20 +3,27 @@ import { textSchema } from './text-schema';
 import { failureNumberSchema } from './failure-number-schema';
 import { queryObject } from './query-object';
 import { DIAGNOSIS_KINDS } from '../diagnosis-kinds';
+import { DIAGNOSIS_CLASSES } from '../diagnosis-classes';
 
 const text = textSchema().trim().min(1).max(120);
 
-/** A page cursor as the server writes it: a failure number, and after sorting by ulps `:<ulps>`, a finite number. */
+/**
+ * A page cursor as the server writes it: a failure number and its place in the class order
+ * (`<id>:<rank>`, rank 0 for branch findings, 1 for accuracy, 2 for errors and skipped points),
+ * and after sorting by ulps `:<ulps>`, a finite number.
+ */
 function isCursor(cursor: string): boolean {
-  const [id, ulps] = cursor.split(':');
+  const [id, , ulps] = cursor.split(':');
   return failureNumberSchema.safeParse(id).success && (ulps === undefined || Number.isFinite(Number(ulps)));
 }
 
 /**
- * Filters of the failure table. `status`: `new` = a regression (passed in the previous run of
+ * Filters of the failure table. `diagnosis` matches a point with that label among any of its
+ * labels (not only the leading one); `class` matches branch or accuracy findings. Every page
+ * lists branch findings first, then accuracy findings, then errors and skipped points. `status`: `new` = a regression (passed in the previous run of
  * the plan), `known` = failed before too and not accepted, `accepted` = covered by an unexpired
- * accepted deviation. Pages are keyed by the last row's id (`after`), or
- * by (ulps, id) when sorted by ulps.
+ * accepted deviation. Pages are keyed by the last row's (rank, id) (`after`), or
+ * by (rank, ulps, id) when sorted by ulps.
  */
 export const failureQuery = queryObject({
   run: z.uuid({ error: 'must be a run id' }).optional(),
@@ -31,13 +38,17 @@ export const failureQuery = queryObject({
       error: `must be one of ${[...DIAGNOSIS_KINDS, 'error', 'skipped'].join(', ')}`,
     })
     .optional(),
+  class: z.enum(DIAGNOSIS_CLASSES, { error: `must be one of ${DIAGNOSIS_CLASSES.join(', ')}` }).optional(),
   convention: z
     .enum(['signed-zero', 'counter-clockwise'], { error: 'must be signed-zero or counter-clockwise' })
     .optional(),
   status: z.enum(['new', 'known', 'accepted'], { error: 'must be new, known or accepted' }).optional(),
   sort: z.enum(['id', 'ulps'], { error: 'must be id or ulps' }).default('id'),
   after: textSchema()
-    .regex(/^\d+(:[\d.e+-]+)?$/, { error: 'must be a cursor from a previous page', abort: true })
+    .regex(new RegExp(`^\\d+:[0-${DIAGNOSIS_CLASSES.length}](:[\\d.e+-]+)?$`), {
+      error: 'must be a cursor from a previous page',
+      abort: true,
+    })
     .refine(isCursor, { error: 'must be a cursor from a previous page' })
     .optional(),
   limit: z.coerce

@@ -4,6 +4,8 @@ import type { FailureView } from '../../shared/failure-view';
 export function failureRows(n: number, from = 1): FailureView[] {
   return Array.from({ length: n }, (_, k) => {
     const i = from + k;
+    const diagnosis: FailureView['diagnosis'] & object =
+      i % 2 ? { kind: 'zero-sign', part: 'im', of: 'input' } : { kind: 'cut-side' };
     return {
       id: String(i),
       runId: '11111111-1111-4111-8111-111111111111',
@@ -20,10 +22,12 @@ export function failureRows(n: number, from = 1): FailureView[] {
       expected: { re: '0', im: '-2' },
       actual: { re: '0', im: '2' },
       outcomeKind: 'fail',
-      diagnosis: i % 2 ? { kind: 'zero-sign', part: 'im', of: 'input' } : { kind: 'cut-side' },
+      diagnosis,
       ulps: i % 2 ? null : 1e18,
       relativeError: 2,
       isRegression: i === 1,
+      labels: [diagnosis],
+      findingClass: 'branch',
     };
   });
 }

@@ -45,9 +45,10 @@ describe('FAILURE_ROW_FIELDS against the migrations', () => {
       `SELECT row_to_json(${FAILURE_ROW})::text AS json
          FROM (VALUES (1::bigint, gen_random_uuid(), 's', 1, 't', 'c', 'p', 0, 0.5::float8, NULL::text,
                        '{}'::jsonb, '{}'::jsonb, NULL::jsonb, NULL::jsonb, 'fail', NULL::jsonb,
-                       'Infinity'::float8, 'NaN'::float8, true))
+                       'Infinity'::float8, 'NaN'::float8, true, '[]'::jsonb, 'branch'))
            AS v(id, run_id, suite_slug, suite_version, target_name, convention, path_name, point_index, t, label,
-                z, z_hex, expected, actual, outcome_kind, diagnosis, ulps, relative_error, is_regression)`,
+                z, z_hex, expected, actual, outcome_kind, diagnosis, ulps, relative_error, is_regression, labels,
+                finding_class)`,
     );
     const parsed = JSON.parse(row.json) as Record<string, unknown>;
     expect(Object.keys(parsed)).toEqual(FAILURE_ROW_FIELDS.filter((f) => f.shown === 'row').map((f) => f.key));

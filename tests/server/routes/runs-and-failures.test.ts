@@ -25,16 +25,19 @@ describe('runs and the failure table', () => {
     const run = await kwame.post('/api/runs').send({ planId: plan.body.plan.id });
     expect(run.status).toBe(202);
     runId = run.body.run.id;
-    // 120 synthetic failing points over two diagnoses, to exercise filters and keyed pages.
+    // 120 synthetic failing points: every third a branch finding (zero-sign, and every sixth
+    // inaccurate too, as a second label), the rest accuracy findings; for filters and keyed pages.
     const [shard] = await t.db.dataSource.query(`SELECT id, suite_slug FROM shards WHERE run_id = $1 LIMIT 1`, [runId]);
     for (let i = 0; i < 120; i += 1) {
-      const diagnosis =
+      const inaccurate = { kind: 'inaccurate', ulps: i, relativeError: i * 1e-16 };
+      const labels =
         i % 3 === 0
-          ? { kind: 'zero-sign', part: 'im', of: 'input' }
-          : { kind: 'inaccurate', ulps: i, relativeError: i * 1e-16 };
+          ? [{ kind: 'zero-sign', part: 'im', of: 'input' }, ...(i % 6 === 0 ? [inaccurate] : [])]
+          : [inaccurate];
+      const diagnosis = labels[0]!;
       await t.db.dataSource.query(
-        `INSERT INTO failures (run_id, shard_id, suite_slug, suite_version, target_name, target_library, target_version, convention, path_name, point_index, t, z, z_hex, point_key, expected, actual, outcome_kind, diagnosis_kind, diagnosis, ulps, rule, reproducer, is_regression)
-         VALUES ($1, $2, 'runs-sqrt', 1, 'complex.js@2.4.3', 'complex.js', '2.4.3', 'signed-zero', 'p', $3, $4, '{"re":"-4","im":"-0"}', '{"re":"-0x1p+2","im":"-0x0p+0"}', $5, '{"re":"0","im":"-2"}', '{"re":"0","im":"2"}', 'fail', $6, $7, $8, 'ISO/IEC 9899:2011 G.6.4.2', 'x', $9)`,
+        `INSERT INTO failures (run_id, shard_id, suite_slug, suite_version, target_name, target_library, target_version, convention, path_name, point_index, t, z, z_hex, point_key, expected, actual, outcome_kind, diagnosis_kind, diagnosis, labels, finding_class, ulps, rule, reproducer, is_regression)
+         VALUES ($1, $2, 'runs-sqrt', 1, 'complex.js@2.4.3', 'complex.js', '2.4.3', 'signed-zero', 'p', $3, $4, '{"re":"-4","im":"-0"}', '{"re":"-0x1p+2","im":"-0x0p+0"}', $5, '{"re":"0","im":"-2"}', '{"re":"0","im":"2"}', 'fail', $6, $7, $8, $9, $10, 'ISO/IEC 9899:2011 G.6.4.2', 'x', $11)`,
         [
           runId,
           shard.id,
@@ -43,6 +46,8 @@ describe('runs and the failure table', () => {
           `k${i}`,
           diagnosis.kind,
           JSON.stringify(diagnosis),
+          JSON.stringify(labels),
+          i % 3 === 0 ? 'branch' : 'accuracy',
           diagnosis.kind === 'inaccurate' ? i : null,
           i % 10 === 0,
         ],
@@ -69,6 +74,7 @@ describe('runs and the failure table', () => {
   it('filters by diagnosis and by new, and pages without repeating a row', async () => {
     const zero = (await kwame.get(`/api/failures?run=${runId}&diagnosis=zero-sign&limit=500`)).body.failures;
     expect(zero).toHaveLength(40);
+    expect(zero[0].labels[0]).toEqual({ kind: 'zero-sign', part: 'im', of: 'input' });
     expect((await kwame.get(`/api/failures?run=${runId}&status=new&limit=500`)).body.failures).toHaveLength(12);
     const seen = new Set<string>();
     let after: string | null = null;
@@ -82,13 +88,44 @@ describe('runs and the failure table', () => {
     expect(seen.size).toBe(120);
   });
 
+  it('filters by any label of a point, not only the leading one', async () => {
+    const inaccurate = (await kwame.get(`/api/failures?run=${runId}&diagnosis=inaccurate&limit=500`)).body.failures;
+    // 80 points labelled inaccurate alone, and 20 zero-sign points whose second label is inaccurate.
+    expect(inaccurate).toHaveLength(100);
+    expect(inaccurate.filter((f: { diagnosis: { kind: string } }) => f.diagnosis.kind === 'zero-sign')).toHaveLength(
+      20,
+    );
+  });
+
+  it('filters by class and lists branch findings before accuracy findings on every page', async () => {
+    const branch = (await kwame.get(`/api/failures?run=${runId}&class=branch&limit=500`)).body.failures;
+    expect(branch).toHaveLength(40);
+    expect(new Set(branch.map((f: { findingClass: string }) => f.findingClass))).toEqual(new Set(['branch']));
+    expect((await kwame.get(`/api/failures?run=${runId}&class=accuracy&limit=500`)).body.failures).toHaveLength(80);
+    for (const sort of ['id', 'ulps']) {
+      const classes: string[] = [];
+      let after: string | null = null;
+      do {
+        const page: { body: { failures: { findingClass: string }[]; next: string | null } } = await kwame.get(
+          `/api/failures?run=${runId}&sort=${sort}&limit=17${after ? `&after=${after}` : ''}`,
+        );
+        classes.push(...page.body.failures.map((f) => f.findingClass));
+        after = page.body.next;
+      } while (after);
+      expect(classes).toEqual([...Array(40).fill('branch'), ...Array(80).fill('accuracy')]);
+    }
+  });
+
   it('answers every page with the rows and cursor the row reader gives, key for key', async () => {
     const queries = [
       { limit: 50 },
-      { limit: 50, after: '30' },
+      { limit: 50, after: '30:0' },
+      { limit: 50, after: '31:1' },
+      { limit: 7, class: 'branch' as const },
       { limit: 7, diagnosis: 'zero-sign' as const },
       { limit: 25, sort: 'ulps' as const },
-      { limit: 25, sort: 'ulps' as const, after: '100:0' },
+      { limit: 25, sort: 'ulps' as const, after: '100:1:100' },
+      { limit: 25, sort: 'ulps' as const, after: '99:0:0' },
       { limit: 500, status: 'new' as const },
       { limit: 500, status: 'accepted' as const },
     ];
@@ -127,10 +164,9 @@ describe('runs and the failure table', () => {
   });
 
   it('sorts by ulps, largest first, across pages', async () => {
-    const first = (await kwame.get(`/api/failures?run=${runId}&diagnosis=inaccurate&sort=ulps&limit=30`)).body;
-    const second = (
-      await kwame.get(`/api/failures?run=${runId}&diagnosis=inaccurate&sort=ulps&limit=30&after=${first.next}`)
-    ).body;
+    const first = (await kwame.get(`/api/failures?run=${runId}&class=accuracy&sort=ulps&limit=30`)).body;
+    const second = (await kwame.get(`/api/failures?run=${runId}&class=accuracy&sort=ulps&limit=30&after=${first.next}`))
+      .body;
     const ulps = [...first.failures, ...second.failures].map((f: { ulps: number }) => f.ulps);
     expect(ulps).toHaveLength(60);
     expect([...ulps].sort((a, b) => b - a)).toEqual(ulps);
@@ -142,7 +178,7 @@ describe('runs and the failure table', () => {
     expect(res.headers['content-type']).toMatch(/text\/csv/);
     const lines = res.text.trim().split('\n');
     expect(lines[0]).toBe(
-      'run,suite,target,convention,path,t,z_re,z_im,z_hex_re,z_hex_im,expected_re,expected_im,actual_re,actual_im,outcome,diagnosis,ulps,relative_error,regression,rule',
+      'run,suite,target,convention,path,t,z_re,z_im,z_hex_re,z_hex_im,expected_re,expected_im,actual_re,actual_im,outcome,diagnosis,ulps,relative_error,regression,labels,class,rule,first_left_step,choice',
     );
     expect(lines).toHaveLength(41);
     const cells = lines[1]!.split(',');
@@ -150,6 +186,7 @@ describe('runs and the failure table', () => {
     expect(cells[1]).toMatch(/^[a-z0-9-]+@\d+$/);
     expect(cells.slice(14, 16)).toEqual(['fail', 'zero-sign']);
     expect(cells[18]).toMatch(/^(yes|no)$/);
+    expect(cells.slice(19, 21)).toEqual(['zero-sign + inaccurate', 'branch']);
   });
 
   it('shows one failure with the history of its point', async () => {
@@ -163,6 +200,12 @@ describe('runs and the failure table', () => {
     const res = await kwame.get(`/api/failures?diagnosis=wrong&limit=9999`);
     expect(res.status).toBe(400);
     expect(res.body.issues.map((i: { field: string }) => i.field).sort()).toEqual(['query.diagnosis', 'query.limit']);
+    const bad = await kwame.get(`/api/failures?class=sheet&after=30`);
+    expect(bad.status).toBe(400);
+    expect(bad.body.issues).toEqual([
+      { field: 'query.class', rule: 'must be one of branch, accuracy' },
+      { field: 'query.after', rule: 'must be a cursor from a previous page' },
+    ]);
   });
 
   it('cancels the run', async () => {

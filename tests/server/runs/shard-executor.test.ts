@@ -1,6 +1,8 @@
 import { complexJsTarget } from '../../../harness/adapters/complex-js-target';
 import type { Target } from '../../../harness/adapters/target';
 import { User } from '../../../server/entities/user';
+import type { Diagnosis } from '../../../shared/diagnosis';
+import { pointClass } from '../../../shared/point-class';
 import type { MailOutbox } from '../../../server/mail/mail-outbox';
 import { PlanService } from '../../../server/plans/plan-service';
 import { RunService } from '../../../server/runs/run-service';
@@ -35,6 +37,7 @@ describe('the shard executor', () => {
   let db: TestDatabase;
   let rows: ShardRow[];
   let errorPaths: number;
+  let runId: string;
   const closed: string[] = [];
 
   beforeAll(async () => {
@@ -56,6 +59,7 @@ describe('the shard executor', () => {
       null,
     );
     const { run } = await new RunService(db.dataSource, idleShardQueue()).start(plan.id, 'manual', kwame);
+    runId = run.id;
     const executor = new ShardExecutor(db.dataSource, {
       openTarget: (name) =>
         name === 'hung@1'
@@ -110,6 +114,31 @@ describe('the shard executor', () => {
       'hung@1 did not finish within the time limit of 500 ms; the evaluation was stopped and the target restarted',
     ]);
     expect(closed).toEqual(['hung@1']);
+  });
+
+  it('stores every label and the class of each failure, and counts failures by class on the shard and the run', async () => {
+    const failures: { labels: Diagnosis[]; diagnosis: Diagnosis; finding_class: string }[] = await db.dataSource.query(
+      `SELECT labels, diagnosis, finding_class FROM failures WHERE run_id = $1 AND outcome_kind = 'fail'`,
+      [runId],
+    );
+    // complex.js 2.4.3 ignores the sign of a zero on sqrt's cut: the fixture is only useful if some points fail.
+    expect(failures.length).toBeGreaterThan(0);
+    for (const f of failures) {
+      expect(f.labels[0]).toEqual(f.diagnosis);
+      expect(f.finding_class).toBe(pointClass(f.labels));
+    }
+    const expected = {
+      branch: failures.filter((f) => f.finding_class === 'branch').length,
+      accuracy: failures.filter((f) => f.finding_class === 'accuracy').length,
+    };
+    const [shard] = await db.dataSource.query(
+      `SELECT by_class FROM shards WHERE run_id = $1 AND target_name = 'fine@1'`,
+      [runId],
+    );
+    expect(shard.by_class).toEqual(expected);
+    const [run] = await db.dataSource.query(`SELECT counts, by_class FROM runs WHERE id = $1`, [runId]);
+    expect(run.by_class).toEqual(expected);
+    expect(run.counts).toMatchObject({ fail: failures.length, notApplicable: 0 });
   });
 
   it("runs the suite's property checks after the values", () => {
