@@ -1,8 +1,8 @@
 import type { DiagnosisKind } from './diagnosis';
-import type { CheckedScope, OutcomeCounts } from './run-result';
+import type { CheckedScope, ClassCounts, OutcomeCounts } from './run-result';
 
 /**
- * One suite × target cell of a run's matrix (`GET /api/runs/:id/matrix`). `counts`, `byDiagnosis`
+ * One suite × target cell of a run's matrix (`GET /api/runs/:id/matrix`). `counts`, `byClass`, `byDiagnosis`
  * and `checked` stay null until the shard is done; `outcome` is null until then too.
  */
 export interface RunMatrixCell {
@@ -11,6 +11,8 @@ export interface RunMatrixCell {
   status: 'queued' | 'running' | 'done' | 'cancelled';
   outcome: 'pass' | 'fail' | 'error' | null;
   counts: OutcomeCounts | null;
+  /** Failing points by class, branch first (null until done, as `counts`). */
+  byClass: ClassCounts | null;
   byDiagnosis: Partial<Record<DiagnosisKind, number>> | null;
   checked: CheckedScope | null;
   /** Shard-level errors: a target that hung or crashed, a suite that could not be evaluated. */

@@ -1,4 +1,4 @@
-import type { OutcomeCounts } from './run-result';
+import type { ClassCounts, OutcomeCounts } from './run-result';
 import type { RunStatus, RunTrigger } from './run-status';
 
 /** A run as lists and the progress bar show it. */
@@ -11,6 +11,8 @@ export interface RunView {
   shardsTotal: number;
   shardsDone: number;
   counts: OutcomeCounts;
+  /** Failing points by class: branch findings (wrong sheet, side, zero sign, jump…) apart from accuracy ones. */
+  byClass: ClassCounts;
   regressions: number | null;
   requestedBy: string | null;
   createdAt: string;

@@ -47,7 +47,7 @@ export const DIAGNOSIS_STYLES: Record<DiagnosisTone, { word: string; glyph: stri
     },
     disagreement: {
       word: 'disagreement',
-      glyph: '≶',
+      glyph: '↔',
       color: '#7B3F00',
       explain: 'another subject or entry of the same library gives a different value here',
     },

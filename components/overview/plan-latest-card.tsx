@@ -46,7 +46,7 @@ export function PlanLatestCard({
           <SkText variant="caption" style={styles.meta}>
             Finished {formatWhen(run.finishedAt ?? run.createdAt, now)} · took {runDuration(run, now)}
           </SkText>
-          <OutcomeCounts counts={run.counts} compact />
+          <OutcomeCounts counts={run.counts} byClass={run.byClass} compact />
           <SkText variant="smallLabel" style={[styles.regressions, run.regressions ? styles.danger : null]}>
             {run.regressions === null
               ? 'Regressions not compared (the run did not complete).'

@@ -1,4 +1,6 @@
 import type { DiagnosisKind } from '../../shared/diagnosis';
+import { diagnosisClass } from '../../shared/diagnosis-class';
+import { DIAGNOSIS_CLASSES } from '../../shared/diagnosis-classes';
 import { DIAGNOSIS_KINDS } from '../../shared/diagnosis-kinds';
 import type { RunMatrixCell } from '../../shared/run-matrix-cell';
 import { OUTCOME_GLYPH } from './outcome-glyph';
@@ -6,7 +8,7 @@ import type { Tone } from './outcome-tone';
 
 export interface MatrixCellWords {
   tone: Tone;
-  /** The first line, glyph first: "✓ 120", "❌ 3 · 2 other-sheet", "◊ error". */
+  /** The first line, glyph first: "✓ 120", "❌ 42 · 2 branch · 40 accuracy", "◊ error". */
   headline: string;
   /** Further lines: other diagnoses, passes beside failures, skips, "nothing was checked", the first error. */
   details: string[];
@@ -20,7 +22,8 @@ const n = (x: number) => x.toLocaleString('en-GB');
 
 /**
  * A matrix cell in words and glyphs, so it reads without its colour: the outcome and its counts,
- * the failures by diagnosis (largest first), and for an error whether anything was checked at all.
+ * the failures by class (branch first) and by diagnosis (branch labels first, then the largest),
+ * points not applicable to the target's entry, and for an error whether anything was checked at all.
  */
 export function describeMatrixCell(cell: RunMatrixCell): MatrixCellWords {
   const pair = `${cell.suite} on ${cell.target}`;
@@ -46,9 +49,12 @@ export function describeMatrixCell(cell: RunMatrixCell): MatrixCellWords {
       hasRows: false,
     };
   }
+  // Branch labels first, then by count: 40 inaccurate points must not push 2 zero-sign ones out of sight.
+  const rank = (kind: DiagnosisKind) => DIAGNOSIS_CLASSES.indexOf(diagnosisClass(kind));
   const diagnoses = DIAGNOSIS_KINDS.map((kind) => [kind, cell.byDiagnosis?.[kind] ?? 0] as [DiagnosisKind, number])
     .filter(([, count]) => count > 0)
-    .sort((a, b) => b[1] - a[1]);
+    .sort((a, b) => rank(a[0]) - rank(b[0]) || b[1] - a[1]);
+  const classes = DIAGNOSIS_CLASSES.map((c) => [c, cell.byClass?.[c] ?? 0] as const).filter(([, count]) => count > 0);
   const details: string[] = [];
   const said: string[] = [];
   let headline: string;
@@ -72,10 +78,20 @@ export function describeMatrixCell(cell: RunMatrixCell): MatrixCellWords {
     }
   } else if (counts.fail > 0) {
     tone = 'fail';
-    const [top, ...rest] = diagnoses;
-    headline = `${OUTCOME_GLYPH.fail} ${n(counts.fail)}${top ? ` · ${n(top[1])} ${top[0]}` : ''}`;
-    said.push(`${n(counts.fail)} failed`, ...diagnoses.map(([kind, count]) => `${n(count)} ${kind}`));
-    for (const [kind, count] of rest) details.push(`${n(count)} ${kind}`);
+    if (classes.length > 0) {
+      headline = `${OUTCOME_GLYPH.fail} ${n(counts.fail)}${classes.map(([c, count]) => ` · ${n(count)} ${c}`).join('')}`;
+      said.push(
+        `${n(counts.fail)} failed: ${classes.map(([c, count]) => `${n(count)} ${c} finding${count === 1 ? '' : 's'}`).join(', ')}`,
+        ...diagnoses.map(([kind, count]) => `${n(count)} ${kind}`),
+      );
+      for (const [kind, count] of diagnoses) details.push(`${n(count)} ${kind}`);
+    } else {
+      // A cell stored before failures were counted by class: the leading diagnosis stands in.
+      const [top, ...rest] = diagnoses;
+      headline = `${OUTCOME_GLYPH.fail} ${n(counts.fail)}${top ? ` · ${n(top[1])} ${top[0]}` : ''}`;
+      said.push(`${n(counts.fail)} failed`, ...diagnoses.map(([kind, count]) => `${n(count)} ${kind}`));
+      for (const [kind, count] of rest) details.push(`${n(count)} ${kind}`);
+    }
     details.push(`${OUTCOME_GLYPH.pass} ${n(counts.pass)} passed`);
     said.push(`${n(counts.pass)} passed`);
     if (counts.error > 0) {
@@ -94,6 +110,10 @@ export function describeMatrixCell(cell: RunMatrixCell): MatrixCellWords {
   if (counts.skipped > 0) {
     details.push(`${OUTCOME_GLYPH.skipped} ${n(counts.skipped)} skipped`);
     said.push(`${n(counts.skipped)} skipped`);
+  }
+  if (counts.notApplicable > 0) {
+    details.push(`${OUTCOME_GLYPH.notApplicable} ${n(counts.notApplicable)} not applicable`);
+    said.push(`${n(counts.notApplicable)} not applicable to the entry`);
   }
   const firstError = cell.errors[0];
   if (firstError) details.push(firstError);

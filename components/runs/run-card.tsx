@@ -34,7 +34,7 @@ export function RunCard({ run, now }: { run: RunView; now?: number }) {
         {triggerWords(run.trigger, run.requestedBy)} · {formatWhen(run.createdAt, now)} · {runDuration(run, now)}
       </SkText>
       {live ? <ProgressBar done={run.shardsDone} total={run.shardsTotal} /> : null}
-      <OutcomeCounts counts={run.counts} compact />
+      <OutcomeCounts counts={run.counts} byClass={run.byClass} compact />
       {run.regressions ? (
         <SkText variant="smallLabel" tone="danger">
           ↓ {run.regressions} regression{run.regressions === 1 ? '' : 's'} since the previous run

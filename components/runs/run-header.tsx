@@ -48,7 +48,7 @@ export function RunHeader({ run, canCancel }: { run: RunView; canCancel: boolean
           <ProgressBar done={run.shardsDone} total={run.shardsTotal} />
         </View>
       ) : null}
-      <OutcomeCounts counts={run.counts} all />
+      <OutcomeCounts counts={run.counts} byClass={run.byClass} all />
       {live && canCancel ? <CancelRunButton runId={run.id} /> : null}
     </View>
   );

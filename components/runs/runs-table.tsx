@@ -69,7 +69,7 @@ export function RunsTable({ runs, now }: { runs: RunView[]; now?: number }) {
             </SkText>
             <View style={[styles.counts, styles.countsCell]}>
               {isLiveRun(run) ? <ProgressBar done={run.shardsDone} total={run.shardsTotal} /> : null}
-              <OutcomeCounts counts={run.counts} compact />
+              <OutcomeCounts counts={run.counts} byClass={run.byClass} compact />
             </View>
           </Pressable>
         </Link>

@@ -36,7 +36,7 @@ export function runsRouter(dataSource: DataSource, runs: RunService): Router {
     const { id } = parseInput(idParams, req.params, 'params');
     await runs.get(id);
     const cells: RunMatrixCell[] = await dataSource.query(
-      `SELECT suite_slug AS "suite", target_name AS "target", status, outcome, counts, by_diagnosis AS "byDiagnosis", checked, errors
+      `SELECT suite_slug AS "suite", target_name AS "target", status, outcome, counts, by_class AS "byClass", by_diagnosis AS "byDiagnosis", checked, errors
          FROM shards WHERE run_id = $1 ORDER BY suite_slug, target_name`,
       [id],
     );

@@ -12,6 +12,7 @@ export function toRunView(run: Run): RunView {
     shardsTotal: run.shardsTotal,
     shardsDone: run.shardsDone,
     counts: run.counts,
+    byClass: run.byClass,
     regressions: run.regressions,
     requestedBy: run.requestedBy?.displayName ?? null,
     createdAt: run.createdAt.toISOString(),

@@ -24,6 +24,7 @@ const cell = (suite: string, done: boolean): RunMatrixCell => ({
   status: done ? 'done' : 'running',
   outcome: done ? 'fail' : null,
   counts: done ? { pass: 10, fail: 2, error: 0, skipped: 0, notApplicable: 0 } : null,
+  byClass: done ? { branch: 2, accuracy: 0 } : null,
   byDiagnosis: done ? { 'zero-sign': 2 } : null,
   checked: null,
   errors: [],

@@ -10,6 +10,7 @@ export const RUNNING_RUN: RunView = {
   shardsTotal: 4,
   shardsDone: 1,
   counts: { pass: 100, fail: 0, error: 0, skipped: 0, notApplicable: 0 },
+  byClass: { branch: 0, accuracy: 0 },
   regressions: null,
   requestedBy: 'Kwame Asante',
   createdAt: '2026-03-01T02:30:00Z',

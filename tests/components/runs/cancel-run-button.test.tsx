@@ -14,6 +14,7 @@ const RUN: RunView = {
   shardsTotal: 8,
   shardsDone: 3,
   counts: { pass: 300, fail: 0, error: 0, skipped: 0, notApplicable: 0 },
+  byClass: { branch: 0, accuracy: 0 },
   regressions: null,
   requestedBy: 'Kwame Asante',
   createdAt: '2026-03-01T02:30:00Z',

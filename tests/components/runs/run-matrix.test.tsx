@@ -21,6 +21,7 @@ const cell = (over: Partial<RunMatrixCell>): RunMatrixCell => ({
   status: 'done',
   outcome: 'pass',
   counts: { pass: 120, fail: 0, error: 0, skipped: 0, notApplicable: 0 },
+  byClass: { branch: 0, accuracy: 0 },
   byDiagnosis: {},
   checked: scope,
   errors: [],
@@ -33,6 +34,7 @@ const CELLS: RunMatrixCell[] = [
     target: 'complex.js@2.4.2',
     outcome: 'fail',
     counts: { pass: 117, fail: 3, error: 0, skipped: 4, notApplicable: 0 },
+    byClass: { branch: 3, accuracy: 0 },
     byDiagnosis: { 'other-sheet': 2, 'cut-side': 1 },
   }),
   cell({
@@ -40,6 +42,7 @@ const CELLS: RunMatrixCell[] = [
     target: 'complex.js@2.4.3',
     outcome: 'error',
     counts: null,
+    byClass: null,
     byDiagnosis: null,
     checked: null,
     errors: ['The target did not answer within 30 s.'],
@@ -58,6 +61,7 @@ const CELLS: RunMatrixCell[] = [
     status: 'running',
     outcome: null,
     counts: null,
+    byClass: null,
     byDiagnosis: null,
     checked: null,
   }),
@@ -76,14 +80,35 @@ describe.each([
     render(<RunMatrix runId={RUN} cells={CELLS} />);
     expect(within(cellOf('sqrt-principal-sz', 'complex.js@2.4.3')).getByText('✓ 120')).toBeTruthy();
     const failing = cellOf('sqrt-principal-sz', 'complex.js@2.4.2');
-    expect(within(failing).getByText('❌ 3 · 2 other-sheet')).toBeTruthy();
+    expect(within(failing).getByText('❌ 3 · 3 branch')).toBeTruthy();
+    expect(within(failing).getByText('2 other-sheet')).toBeTruthy();
     expect(within(failing).getByText('1 cut-side')).toBeTruthy();
     expect(within(failing).getByText('✓ 117 passed')).toBeTruthy();
     expect(within(failing).getByText('− 4 skipped')).toBeTruthy();
     expect(failing.getAttribute('aria-label')).toBe(
-      'sqrt-principal-sz on complex.js@2.4.2: 3 failed, 2 other-sheet, 1 cut-side, 117 passed, 4 skipped. Open these failures',
+      'sqrt-principal-sz on complex.js@2.4.2: 3 failed: 3 branch findings, 2 other-sheet, 1 cut-side, 117 passed, 4 skipped. Open these failures',
     );
     expect(within(cellOf('acos-principal-sz', 'complex.js@2.4.3')).getByText('↻ running')).toBeTruthy();
+  });
+
+  it('leads with branch findings even where accuracy findings are many more, and counts points not applicable to the entry', () => {
+    const mixed = cell({
+      suite: 'asin-principal-sz',
+      outcome: 'fail',
+      counts: { pass: 100, fail: 42, error: 0, skipped: 0, notApplicable: 6 },
+      byClass: { branch: 2, accuracy: 40 },
+      byDiagnosis: { inaccurate: 40, 'zero-sign': 2 },
+    });
+    render(<RunMatrix runId={RUN} cells={[mixed]} />);
+    const only = cellOf('asin-principal-sz', 'complex.js@2.4.3');
+    expect(within(only).getByText('❌ 42 · 2 branch · 40 accuracy')).toBeTruthy();
+    const lines = within(only)
+      .getAllByText(/zero-sign|inaccurate|not applicable/)
+      .map((e) => e.textContent);
+    expect(lines).toEqual(['2 zero-sign', '40 inaccurate', '– 6 not applicable']);
+    expect(only.getAttribute('aria-label')).toBe(
+      'asin-principal-sz on complex.js@2.4.3: 42 failed: 2 branch findings, 40 accuracy findings, 2 zero-sign, 40 inaccurate, 100 passed, 6 not applicable to the entry. Open these failures',
+    );
   });
 
   it('says "nothing was checked" for an error cell that checked no point, with the error', () => {

@@ -25,6 +25,7 @@ const run = (n: number, over: Partial<RunView> = {}): RunView => ({
   shardsTotal: 4,
   shardsDone: 4,
   counts: { pass: 480, fail: 3, error: 0, skipped: 0, notApplicable: 0 },
+  byClass: { branch: 3, accuracy: 0 },
   regressions: 2,
   requestedBy: null,
   createdAt: '2026-03-01T02:30:00Z',
@@ -81,7 +82,7 @@ describe('RunsList', () => {
     expect(within(first).getByText('complex.js nightly')).toBeTruthy();
     expect(within(first).getByText('❌ completed with failures')).toBeTruthy();
     expect(within(first).getByText(/^scheduled · .* · 3 min 5 s$/)).toBeTruthy();
-    expect(within(first).getByText('❌ 3 failed')).toBeTruthy();
+    expect(within(first).getByText('❌ 3 branch findings')).toBeTruthy();
     expect(within(first).getByText('↓ 2 regressions since the previous run')).toBeTruthy();
     const live = screen.getByTestId(`run-${run(2).id}`);
     expect(within(live).getByText('↻ running')).toBeTruthy();
