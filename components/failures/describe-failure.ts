@@ -1,11 +1,8 @@
 import type { FailureView } from '../../shared/failure-view';
 import type { DiagnosisTone } from './diagnosis-styles';
-import { describeWorstPart } from '../../shared/describe-worst-part';
-import { formatUlps } from '../../shared/format-ulps';
+import { describeLabel } from '../../shared/describe-label';
 
-const fmtT = (t: number | null) => (t === null ? 'nowhere' : `t ≈ ${Number(t.toPrecision(3))}`);
-
-/** The tone of a failure (its diagnosis, or error/skipped) and the diagnosis's own numbers in words. */
+/** The tone of a failure (its leading label, or error/skipped) and that label's own numbers in words. */
 export function describeFailure(f: Pick<FailureView, 'diagnosis' | 'outcomeKind' | 'ulps'>): {
   tone: DiagnosisTone;
   detail: string | undefined;
@@ -16,19 +13,5 @@ export function describeFailure(f: Pick<FailureView, 'diagnosis' | 'outcomeKind'
       tone: f.outcomeKind === 'skipped' ? 'skipped' : f.outcomeKind === 'error' ? 'error' : 'unexplained',
       detail: undefined,
     };
-  switch (d.kind) {
-    case 'other-sheet':
-      return { tone: d.kind, detail: `k = ${d.k}` };
-    case 'zero-sign':
-      return { tone: d.kind, detail: `${d.part === 're' ? 'real' : 'imaginary'} part of the ${d.of}` };
-    case 'misplaced-cut':
-      return { tone: d.kind, detail: `library jumps ${fmtT(d.libraryJumpAt)}, expected ${fmtT(d.expectedJumpAt)}` };
-    case 'inaccurate':
-      return {
-        tone: d.kind,
-        detail: [`${formatUlps(d.ulps)} ulps`, describeWorstPart(d, 'short')].filter(Boolean).join(' '),
-      };
-    default:
-      return { tone: d.kind, detail: undefined };
-  }
+  return { tone: d.kind, detail: describeLabel(d, 'short') || undefined };
 }

@@ -2,7 +2,10 @@ import type { EntityManager } from 'typeorm';
 import { Run } from '../entities/run';
 import { coveredByDeviationSql } from '../sql/covered-by-deviation-sql';
 import type { MailOutbox } from '../mail/mail-outbox';
+import type { ClassCounts } from '../../shared/run-result';
+import { findingRankSql } from '../sql/finding-rank-sql';
 import { regressionMail } from './regression-mail';
+import { REGRESSION_MAIL_ROWS } from './regression-mail-rows';
 import type { RegressionRow } from './regression-row';
 import { targetKeySql } from '../sql/target-key-sql';
 import { writeRegressionGroups } from './write-regression-groups';
@@ -11,7 +14,7 @@ import { writeRegressionGroups } from './write-regression-groups';
  * Completes a run: marks as regressions the failing points that passed in the previous
  * completed run of the same plan — the same suite, path and input bits, on the same target
  * up to its version, on a path that run evaluated without a path error, and not covered by an
- * unexpired accepted deviation — and queues one mail to the plan's recipients and the
+ * unexpired accepted deviation — and queues one mail, branch regressions first, to the plan's recipients and the
  * subscribers of the libraries that regressed, when there are any. Runs inside the caller's transaction.
  */
 export async function markRegressions(
@@ -66,8 +69,10 @@ export async function markRegressions(
   if (count > 0 && recipients.length > 0) {
     const rows: RegressionRow[] = (
       await tx.query(
-        `SELECT id::text, suite_slug, target_name, path_name, z, z_hex, expected, actual, diagnosis, rule, reproducer
-           FROM failures WHERE run_id = $1 AND is_regression ORDER BY suite_slug, target_name, path_name, point_index LIMIT 50`,
+        `SELECT id::text, suite_slug, target_name, path_name, z, z_hex, expected, actual, diagnosis, labels, finding_class,
+                rule, reproducer, steps, first_left_step, choice
+           FROM failures f WHERE run_id = $1 AND is_regression
+          ORDER BY ${findingRankSql('f.finding_class')}, suite_slug, target_name, path_name, point_index LIMIT ${REGRESSION_MAIL_ROWS}`,
         [run.id],
       )
     ).map((r: Record<string, unknown>) => ({
@@ -80,9 +85,20 @@ export async function markRegressions(
       expected: r.expected,
       actual: r.actual,
       diagnosis: r.diagnosis,
+      labels: r.labels,
+      findingClass: r.finding_class,
       rule: r.rule,
       reproducer: r.reproducer,
+      steps: r.steps,
+      firstLeftStep: r.first_left_step,
+      choice: r.choice,
     })) as RegressionRow[];
+    const [byClass]: ClassCounts[] = await tx.query(
+      `SELECT count(*) FILTER (WHERE finding_class = 'branch')::int AS branch,
+              count(*) FILTER (WHERE finding_class = 'accuracy')::int AS accuracy
+         FROM failures WHERE run_id = $1 AND is_regression`,
+      [run.id],
+    );
     const versionChanges: { key: string; from: string; to: string }[] = previous
       ? await tx.query(
           `SELECT DISTINCT ${targetKeySql('s.target_name')} AS key, p.target_version AS "from", s.target_version AS "to"
@@ -106,6 +122,7 @@ export async function markRegressions(
         appUrl: mail.appUrl,
         rows,
         total: count,
+        byClass: byClass!,
         versionChanges,
         idempotencyKey: `regressions:${run.plan?.id ?? run.planName}:${previous?.id ?? 'none'}:${digest}`,
       }),

@@ -1,37 +1,42 @@
-import { describeWorstPart } from '../../shared/describe-worst-part';
-import type { Diagnosis } from '../../shared/diagnosis';
-import { formatUlps } from '../../shared/format-ulps';
+import { describeLabel } from '../../shared/describe-label';
+import type { DiagnosisClass } from '../../shared/diagnosis-class';
+import { DIAGNOSIS_CLASSES } from '../../shared/diagnosis-classes';
+import type { ClassCounts } from '../../shared/run-result';
 import type { WireComplex } from '../../shared/wire-complex';
 import type { NewMail } from '../mail/new-mail';
 import type { RegressionRow } from './regression-row';
 import { formatComplexText } from '../../shared/format-complex-text';
-
-/** At most this many rows in one mail; the rest are counted and linked. */
-const MAX_ROWS = 50;
+import { REGRESSION_MAIL_ROWS } from './regression-mail-rows';
 
 const c = (v: WireComplex | null) => formatComplexText(v);
 const escape = (s: string) =>
   s.replace(/[&<>"']/g, (ch) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[ch]!);
-const describe = (d: Diagnosis | null): string => {
-  if (!d) return 'error';
-  switch (d.kind) {
-    case 'other-sheet':
-      return `other sheet (k = ${d.k})`;
-    case 'zero-sign':
-      return `ignored zero sign (${d.of} ${d.part})`;
-    case 'inaccurate':
-      return `inaccurate (${[`${formatUlps(d.ulps)} ulps`, describeWorstPart(d, 'long')].filter(Boolean).join(' ')}; relative error of the whole value ${d.relativeError.toPrecision(2)})`;
-    case 'misplaced-cut':
-      return 'misplaced cut';
-    default:
-      return d.kind;
-  }
+const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
+/** Every label of a row in words, the leading one first; "error" for a row without one. */
+const labelsOf = (r: RegressionRow): string[] => {
+  const labels = r.labels.length > 0 ? r.labels : r.diagnosis ? [r.diagnosis] : [];
+  return labels.length > 0 ? labels.map((l) => describeLabel(l, 'long')) : ['error'];
+};
+const choiceOf = (choice: string) => `${choice} (a convention choice: libraries may differ here and still be right)`;
+/** A composed subject's steps, one line each, the first that left the reference marked. */
+const stepLines = (r: RegressionRow): string[] =>
+  (r.steps ?? []).map(
+    (s, i) =>
+      `${i + 1}. ${s.text}: library ${c(s.library)}, reference ${c(s.reference)}${i === r.firstLeftStep ? '  ← first step that left the reference' : ''}`,
+  );
+const HEADING: Record<DiagnosisClass, string> = {
+  branch:
+    'Branch regressions: wrong sheet, side of a cut or zero sign, a misplaced jump, a value not finite, or a disagreement',
+  accuracy: 'Accuracy regressions: right branch and signs, further from the exact value than the tolerance allows',
 };
 
 /**
- * The regression mail of a run: one row per regression with input bits, expected and actual
- * values, the diagnosis, the rule and a reproducer, and a link to each case; plain text and HTML
- * with the same content. It says what a regression is and that it covers only what was checked.
+ * The regression mail of a run. It opens with the regressions counted by class, says plainly
+ * when they are accuracy only, and lists branch regressions first, under a heading per class (an
+ * acosh value 12 ulps off used to come before the real sign flips): one block per regression with
+ * input bits, expected and actual values, every label, a convention choice, a composed subject's
+ * steps with the first that left the reference, the rule, a reproducer and a link to the case;
+ * plain text and HTML with the same content. It says what a regression is and that it covers only what was checked.
  * In HTML each regression is a block of label–value rows, two columns wide, so the mail reads on
  * a phone without scrolling sideways (eight columns side by side did not).
  */
@@ -40,54 +45,92 @@ export function regressionMail(input: {
   planName: string;
   runId: string;
   appUrl: string;
+  /** The regressions to list, branch ones first (mark-regressions.ts reads them in that order). */
   rows: RegressionRow[];
   total: number;
+  /** Every regression of the run by class, listed or not. */
+  byClass: ClassCounts;
   versionChanges: { key: string; from: string; to: string }[];
   /** Keeps the same regressions from being mailed twice (mark-regressions.ts). */
   idempotencyKey?: string;
 }): NewMail {
-  const { rows, total } = input;
+  const { total, byClass } = input;
   const link = (id: string) => `${input.appUrl}/failures/${id}`;
-  const subject = `[Sheetkeeper] ${total} regression${total === 1 ? '' : 's'} in ${input.planName}`;
-  const lead = `${total} point${total === 1 ? '' : 's'} passed in the previous completed run of "${input.planName}" and fail now.`;
+  const accuracyOnly = byClass.branch === 0 && byClass.accuracy > 0;
+  const subject = `[Sheetkeeper] ${plural(total, 'regression')} in ${input.planName}: ${
+    accuracyOnly ? 'accuracy only' : `${byClass.branch} branch, ${byClass.accuracy} accuracy`
+  }`;
+  const lead = `${plural(total, 'point')} passed in the previous completed run of "${input.planName}" and ${total === 1 ? 'fails' : 'fail'} now: ${plural(byClass.branch, 'branch finding')} and ${plural(byClass.accuracy, 'accuracy finding')}.`;
+  const classLine = accuracyOnly
+    ? `These regressions are accuracy only: every value is on the expected branch with the expected zero signs, and only further from the exact value than the tolerance allows.`
+    : byClass.branch > 0
+      ? `Branch findings are listed first: a value on another sheet, on the wrong side of a cut, with the wrong zero sign, jumping where it should not, not finite, or disagreeing with another way of computing it.`
+      : '';
   const changes = input.versionChanges.map((v) => `${v.key}: ${v.from} → ${v.to}`);
+  const changesLine = changes.length
+    ? `Version changes since then: ${changes.join('; ')}.`
+    : 'No library version changed since then.';
   const scope =
     'A regression is judged only at the points, paths and conventions the suites check; points outside them were not looked at.';
-  const shown = rows.slice(0, MAX_ROWS);
+  const shown = [...input.rows.slice(0, REGRESSION_MAIL_ROWS)].sort(
+    (a, b) => rankOf(a.findingClass) - rankOf(b.findingClass),
+  );
+  const groups = [...DIAGNOSIS_CLASSES, null]
+    .map((k) => ({ k, rows: shown.filter((r) => r.findingClass === k) }))
+    .filter((g) => g.rows.length > 0);
   const more = total - shown.length;
   const text = [
     lead,
-    changes.length ? `Version changes since then: ${changes.join('; ')}.` : 'No library version changed since then.',
+    ...(classLine ? [classLine] : []),
+    changesLine,
     '',
-    ...shown.flatMap((r) => [
-      `${r.suiteSlug} × ${r.targetName} — ${r.pathName}`,
-      `  input     z = ${c(r.z)}   bits ${r.zHex.re}, ${r.zHex.im}`,
-      `  expected  ${c(r.expected)}`,
-      `  actual    ${c(r.actual)}`,
-      `  diagnosis ${describe(r.diagnosis)}`,
-      `  rule      ${r.rule}`,
-      `  reproduce ${r.reproducer.split('\n').join('\n            ')}`,
-      `  case      ${link(r.id)}`,
-      '',
+    ...groups.flatMap((g) => [
+      ...(g.k ? [`${HEADING[g.k]} (${byClass[g.k]})`, ''] : []),
+      ...g.rows.flatMap((r) => {
+        const [first, ...others] = labelsOf(r);
+        const steps = stepLines(r);
+        return [
+          `${r.suiteSlug} × ${r.targetName} — ${r.pathName}`,
+          `  input     z = ${c(r.z)}   bits ${r.zHex.re}, ${r.zHex.im}`,
+          `  expected  ${c(r.expected)}`,
+          `  actual    ${c(r.actual)}`,
+          `  diagnosis ${first}`,
+          ...others.map((l) => `  also      ${l}`),
+          ...(r.choice ? [`  choice    ${choiceOf(r.choice)}`] : []),
+          ...steps.map((l, i) => `${i === 0 ? '  steps     ' : '            '}${l}`),
+          `  rule      ${r.rule}`,
+          `  reproduce ${r.reproducer.split('\n').join('\n            ')}`,
+          `  case      ${link(r.id)}`,
+          '',
+        ];
+      }),
     ]),
     more > 0 ? `…and ${more} more: ${input.appUrl}/runs/${input.runId}` : '',
     scope,
   ].join('\n');
+  const line = (label: string, value: string) =>
+    `<tr><th align="left" valign="top" style="width: 6.5em; font-weight: normal; color: #4D5A68">${label}</th><td style="word-break: break-word">${value}</td></tr>`;
   const html = `<!doctype html><html><body style="font-family: sans-serif">
 <p>${escape(lead)}</p>
-<p>${escape(changes.length ? `Version changes since then: ${changes.join('; ')}.` : 'No library version changed since then.')}</p>
-<table cellpadding="6" style="border-collapse: collapse; width: 100%; max-width: 720px" border="1">
+${classLine ? `<p><strong>${escape(classLine)}</strong></p>\n` : ''}<p>${escape(changesLine)}</p>
+${groups
+  .map(
+    (
+      g,
+    ) => `${g.k ? `<h3 style="font-size: 1em">${escape(`${HEADING[g.k]} (${byClass[g.k]})`)}</h3>\n` : ''}<table cellpadding="6" style="border-collapse: collapse; width: 100%; max-width: 720px" border="1">
 <tbody>
-${shown
+${g.rows
   .map((r) => {
-    const line = (label: string, value: string) =>
-      `<tr><th align="left" valign="top" style="width: 6.5em; font-weight: normal; color: #4D5A68">${label}</th><td style="word-break: break-word">${value}</td></tr>`;
+    const [first, ...others] = labelsOf(r);
+    const steps = stepLines(r);
     return [
       `<tr><th colspan="2" align="left" style="background: #F4F1EA">${escape(`${r.suiteSlug} × ${r.targetName}`)} — ${escape(r.pathName)}</th></tr>`,
       line('Input', `<code>z = ${escape(c(r.z))}</code><br><code>bits ${escape(`${r.zHex.re}, ${r.zHex.im}`)}</code>`),
       line('Expected', `<code>${escape(c(r.expected))}</code>`),
       line('Actual', `<code>${escape(c(r.actual))}</code>`),
-      line('Diagnosis', escape(describe(r.diagnosis))),
+      line('Diagnosis', [first!, ...others].map(escape).join('<br>')),
+      ...(r.choice ? [line('Choice', escape(choiceOf(r.choice)))] : []),
+      ...(steps.length ? [line('Steps', steps.map(escape).join('<br>'))] : []),
       line('Rule', escape(r.rule)),
       line(
         'Reproducer',
@@ -97,7 +140,9 @@ ${shown
     ].join('\n');
   })
   .join('\n')}
-</tbody></table>
+</tbody></table>`,
+  )
+  .join('\n')}
 ${more > 0 ? `<p>…and ${more} more: <a href="${escape(`${input.appUrl}/runs/${input.runId}`)}">the whole run</a></p>` : ''}
 <p><small>${escape(scope)}</small></p>
 </body></html>`;
@@ -109,4 +154,9 @@ ${more > 0 ? `<p>…and ${more} more: <a href="${escape(`${input.appUrl}/runs/${
     html,
     idempotencyKey: input.idempotencyKey,
   };
+}
+
+/** A row's place in the class order; rows without a class (none are mailed today) last. */
+function rankOf(k: DiagnosisClass | null): number {
+  return k === null ? DIAGNOSIS_CLASSES.length : DIAGNOSIS_CLASSES.indexOf(k);
 }

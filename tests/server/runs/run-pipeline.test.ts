@@ -135,7 +135,16 @@ describe('a plan run through the queue, with regressions and their mail', () => 
     const mails = await db.dataSource.getRepository(ReceivedMail).find();
     expect(mails).toHaveLength(1);
     expect([...mails[0]!.envelopeTo].sort()).toEqual(['hanne@sheetkeeper.test', 'kwame@sheetkeeper.test']);
-    expect(mails[0]!.subject).toBe(`[Sheetkeeper] ${second.regressions} regressions in fakelib nightly`);
+    const [byClass] = await db.dataSource.query(
+      `SELECT count(*) FILTER (WHERE finding_class = 'branch')::int AS branch,
+              count(*) FILTER (WHERE finding_class = 'accuracy')::int AS accuracy
+         FROM failures WHERE run_id = $1 AND is_regression`,
+      [second.id],
+    );
+    expect(byClass.branch + byClass.accuracy).toBe(second.regressions);
+    expect(mails[0]!.subject).toBe(
+      `[Sheetkeeper] ${second.regressions} regressions in fakelib nightly: ${byClass.branch} branch, ${byClass.accuracy} accuracy`,
+    );
     expect(mails[0]!.textBody).toContain('fakelib: 1 → 2');
     expect(mails[0]!.htmlBody).toContain('open the case');
 

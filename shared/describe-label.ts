@@ -1,0 +1,68 @@
+import type { Diagnosis } from './diagnosis';
+import { describeWorstPart } from './describe-worst-part';
+import { formatComplexText } from './format-complex-text';
+import { formatUlps } from './format-ulps';
+
+const PART = { re: 'real', im: 'imaginary' } as const;
+const num = (x: number) => x.toPrecision(2);
+const at = (t: number | null) => (t === null ? 'nowhere' : `t ≈ ${Number(t.toPrecision(3))}`);
+
+/** What an inaccurate value lost, in words: per part, and for a part lost to cancellation its absolute error beside |value|. */
+function inaccuracy(d: Extract<Diagnosis, { kind: 'inaccurate' }>, style: 'short' | 'long'): string {
+  const c = d.cancellation;
+  if (c) {
+    // A tiny part beside a large value: its ulps say little (4.4e18 for a part that should be 0), the absolute error says what was lost.
+    const lost =
+      style === 'short'
+        ? `${c.part} lost to cancellation: error ${num(c.absoluteError)} beside |value| ${num(c.magnitude)}`
+        : `the ${PART[c.part]} part is lost to cancellation: it is ${num(c.absoluteError)} off, beside a value of size |value| = ${num(c.magnitude)}`;
+    return style === 'short' ? lost : `${lost}; relative error of the whole value ${num(d.relativeError)}`;
+  }
+  const worst = [`${formatUlps(d.ulps)} ulps`, describeWorstPart(d, style)].filter(Boolean).join(' ');
+  const parts = d.parts;
+  if (style === 'short')
+    return parts ? `${worst} (re ${formatUlps(parts.re.ulps)}, im ${formatUlps(parts.im.ulps)})` : worst;
+  const perPart = parts
+    ? `; per part: real ${formatUlps(parts.re.ulps)} ulps, imaginary ${formatUlps(parts.im.ulps)} ulps`
+    : '';
+  return `${worst}${perPart}; relative error of the whole value ${num(d.relativeError)}`;
+}
+
+/**
+ * One label of a failing point in words, the same in the app, the mail and the CSV's readers:
+ * `short` is the detail beside the label's chip ("k = 1", "9 ulps in im"), `long` the whole
+ * label for mail ("other sheet (k = 1)"), which names the label itself.
+ */
+export function describeLabel(d: Diagnosis, style: 'short' | 'long'): string {
+  const long = (name: string, detail: string) => (detail ? `${name} (${detail})` : name);
+  switch (d.kind) {
+    case 'other-sheet':
+      return style === 'short' ? `k = ${d.k}` : long('other sheet', `k = ${d.k}`);
+    case 'cut-side':
+      return style === 'short' ? '' : long('cut side', 'the limit from the other side of the cut');
+    case 'zero-sign': {
+      const where = `${PART[d.part]} part of the ${d.of}`;
+      return style === 'short' ? where : long('ignored zero sign', where);
+    }
+    case 'misplaced-cut': {
+      const where = `library jumps ${at(d.libraryJumpAt)}, expected ${at(d.expectedJumpAt)}${d.confirmed ? '; confirmed by refining between samples' : ''}`;
+      return style === 'short' ? where : long('misplaced cut', where);
+    }
+    case 'inaccurate':
+      return style === 'short' ? inaccuracy(d, 'short') : long('inaccurate', inaccuracy(d, 'long'));
+    case 'not-finite':
+      return style === 'short'
+        ? ''
+        : long('not finite', 'an infinite or NaN part where the reference is finite, or the reverse');
+    case 'disagreement': {
+      const whose = d.otherMatchesReference
+        ? 'that value matches the reference, this one does not'
+        : 'neither matches the reference';
+      return style === 'short'
+        ? `with ${d.with}`
+        : long('disagreement', `${d.with} gives ${formatComplexText(d.other)} here; ${whose}`);
+    }
+    case 'unexplained':
+      return style === 'short' ? '' : long('unexplained', `relative error ${num(d.relativeError)}`);
+  }
+}
