@@ -1,7 +1,7 @@
 import { failureQuery } from '../shared/schemas/failure-query';
 import type { FailureFilters } from './failure-filters';
 
-const KEYS = ['run', 'suite', 'target', 'fn', 'diagnosis', 'convention', 'status', 'sort'] as const;
+const KEYS = ['run', 'suite', 'target', 'fn', 'class', 'diagnosis', 'convention', 'status', 'sort'] as const;
 
 /**
  * The filters a link or the address bar carries (`/failures?run=…&suite=…`), read with the

@@ -8,7 +8,11 @@ import { SkText } from '../ui/sk-text';
 import { CasePictures } from './case-pictures';
 import { ClassifyForm } from './classify-form';
 import { describeFailure } from './describe-failure';
+import { AccuracyParts } from './accuracy-parts';
 import { DiagnosisLabel } from './diagnosis-label';
+import { DisagreementValues } from './disagreement-values';
+import { LabelChips } from './label-chips';
+import { StepsTable } from './steps-table';
 import { DIAGNOSIS_STYLES } from './diagnosis-styles';
 import { FailureHistory } from './failure-history';
 import { QueryState } from '../ui/query-state';
@@ -16,8 +20,10 @@ import { ReproducerBox } from './reproducer-box';
 import { ValueBits } from './value-bits';
 
 /**
- * One failing case: where on the plane it failed and what the path did around it, the values
- * with their exact bits and both one-sided limits, the rule that fixes the expected value, a
+ * One failing case: every label of the point, where on the plane it failed and what the path did
+ * around it, the values with their exact bits and both one-sided limits, how far off an
+ * inaccurate value is per part, both values of a disagreement, a composed subject's steps, a
+ * convention choice, the rule that fixes the expected value, a
  * reproducer, the point's history, and a verdict for those who may give one.
  */
 export function CaseDetail({ id }: { id: string }) {
@@ -28,7 +34,10 @@ export function CaseDetail({ id }: { id: string }) {
   if (detail.isError)
     return <QueryState state="error" message={detail.error.message} onRetry={() => void detail.refetch()} />;
   const { failure: f, history } = detail.data;
-  const { tone, detail: words } = describeFailure(f);
+  const { tone } = describeFailure(f);
+  const labels = f.labels.length > 0 ? f.labels : f.diagnosis ? [f.diagnosis] : [];
+  const inaccurate = labels.find((l) => l.kind === 'inaccurate');
+  const disagreement = labels.find((l) => l.kind === 'disagreement');
   const role = me.data?.role;
   const mayClassify = role === 'reviewer' || role === 'admin' || role === 'maintainer';
 
@@ -37,6 +46,37 @@ export function CaseDetail({ id }: { id: string }) {
       <Section title="Values">
         <ValueBits failure={f} />
       </Section>
+      {inaccurate ? (
+        <Section title="How far off">
+          <AccuracyParts label={inaccurate} />
+        </Section>
+      ) : null}
+      {disagreement ? (
+        <Section title="Two ways, two values">
+          <DisagreementValues
+            label={disagreement}
+            subject="this suite's subject"
+            actual={f.actual}
+            expected={f.expected}
+          />
+        </Section>
+      ) : null}
+      {f.steps && f.steps.length > 0 ? (
+        <Section title="Step by step">
+          <StepsTable steps={f.steps} firstLeft={f.firstLeftStep ?? null} />
+        </Section>
+      ) : null}
+      {f.choice ? (
+        <Section title="A convention choice">
+          <SkText variant="body" testID="choice">
+            {f.choice}
+          </SkText>
+          <SkText variant="caption" style={styles.small}>
+            Conventions disagree about the value at this point. The expected value follows the rule above; a library
+            that documents another rule here is making a different choice, not an error in its arithmetic.
+          </SkText>
+        </Section>
+      ) : null}
       <Section title="Rule">
         <Text style={styles.rule}>{f.rule ?? '—'}</Text>
         <SkText variant="caption" style={styles.small}>
@@ -68,7 +108,12 @@ export function CaseDetail({ id }: { id: string }) {
   return (
     <View style={styles.root}>
       <View style={styles.head}>
-        <DiagnosisLabel tone={tone} detail={words} />
+        {labels.length > 0 ? <LabelChips labels={labels} details /> : <DiagnosisLabel tone={tone} />}
+        {labels.length > 1 ? (
+          <SkText variant="caption" style={styles.small}>
+            {labels.length} labels apply to this point; the first leads, branch labels before accuracy.
+          </SkText>
+        ) : null}
         <Text style={styles.where}>
           {f.suiteSlug} v{f.suiteVersion} · {f.targetName} · {f.convention}
         </Text>

@@ -5,10 +5,11 @@ import { SkText } from '../ui/sk-text';
 import { describeFailure } from './describe-failure';
 import { formatComplexText } from '../../shared/format-complex-text';
 import { DiagnosisLabel } from './diagnosis-label';
+import { LabelChips } from './label-chips';
 import { DIAGNOSIS_STYLES } from './diagnosis-styles';
 import { LinkCard } from '../ui/link-card';
 
-/** One failure on a phone: the diagnosis first, then where it happened and the values, the whole card a link to the case. */
+/** One failure on a phone: every label first (the leading one first), then where it happened and the values, the whole card a link to the case. */
 export function FailureCard({ failure: f }: { failure: FailureView }) {
   const { tone, detail } = describeFailure(f);
   return (
@@ -18,7 +19,11 @@ export function FailureCard({ failure: f }: { failure: FailureView }) {
       testID={`failure-card-${f.id}`}
     >
       <View style={styles.top}>
-        <DiagnosisLabel tone={tone} detail={detail} />
+        {f.labels.length > 0 ? (
+          <LabelChips labels={f.labels} details />
+        ) : (
+          <DiagnosisLabel tone={tone} detail={detail} />
+        )}
         <SkText variant="smallLabel">
           #{f.id}
           {f.isRegression ? ' · ↑ new' : ''}

@@ -6,6 +6,7 @@ import { SkText } from '../ui/sk-text';
 import { describeFailure } from './describe-failure';
 import { formatComplexText } from '../../shared/format-complex-text';
 import { DiagnosisLabel } from './diagnosis-label';
+import { LabelChips } from './label-chips';
 import { formatUlps } from '../../shared/format-ulps';
 
 export type FailureColumnId =
@@ -51,6 +52,7 @@ export const FAILURE_COLUMNS: {
     flex: 1.8,
     fixed: true,
     cell: (f) => {
+      if (f.labels.length > 0) return <LabelChips labels={f.labels} />;
       const { tone } = describeFailure(f);
       return <DiagnosisLabel tone={tone} />;
     },

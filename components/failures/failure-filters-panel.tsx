@@ -8,6 +8,7 @@ import { ActionButton } from '../ui/action-button';
 import { ChipGroup } from '../ui/chip-group';
 import { DisclosureToggle } from '../ui/disclosure-toggle';
 import { SkText } from '../ui/sk-text';
+import { CLASS_WORDS } from '../runs/class-words';
 import { DIAGNOSIS_STYLES } from './diagnosis-styles';
 import { TextField } from '../ui/text-field';
 
@@ -133,6 +134,15 @@ export function FailureFiltersPanel({
               />
             ) : null}
           </View>
+          <ChipGroup
+            label="Class"
+            value={filters.class}
+            onChange={(v) => set('class', v)}
+            options={[
+              { value: undefined, text: 'any' },
+              ...CLASS_WORDS.map((c) => ({ value: c.key, text: c.findings(2), glyph: c.glyph })),
+            ]}
+          />
           <ChipGroup
             label="Diagnosis"
             value={filters.diagnosis}

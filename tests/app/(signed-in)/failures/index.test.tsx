@@ -44,6 +44,16 @@ describe('the Failures screen', () => {
     expect(mockPush).toHaveBeenLastCalledWith({ pathname: '/failures', params: { run: RUN } });
   });
 
+  it('filters by class of finding, from a chip and from a link', async () => {
+    mockParams = { run: RUN, class: 'branch' };
+    const calls = mockFetchRoutes(() => ({ body: { failures: failureRows(2), next: null } }));
+    renderWithClient(<FailuresScreen />);
+    await screen.findByRole('table');
+    expect(calls[0]!.url).toBe(`/api/failures?run=${RUN}&class=branch&limit=50`);
+    fireEvent.click(screen.getByRole('radio', { name: 'Class: accuracy findings' }));
+    expect(mockPush).toHaveBeenCalledWith({ pathname: '/failures', params: { run: RUN, class: 'accuracy' } });
+  });
+
   it('drops a parameter the server would refuse and says so, applying the rest', async () => {
     mockParams = { run: 'nonsense', diagnosis: 'zero-sign' };
     const calls = mockFetchRoutes(() => ({ body: { failures: failureRows(1), next: null } }));
