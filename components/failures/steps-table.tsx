@@ -19,7 +19,7 @@ export function StepsTable({ steps, firstLeft }: { steps: readonly StepValue[]; 
       {firstLeft !== null && steps[firstLeft] ? (
         <SkText variant="body">
           The value first left the reference at step {firstLeft + 1},{' '}
-          <Text style={styles.mono}>{steps[firstLeft]!.text}</Text>; the steps after it start from the library's value.
+          <Text style={styles.mono}>{steps[firstLeft]!.text}</Text>; the steps after it start from the library’s value.
         </SkText>
       ) : (
         <SkText variant="body">Every step matched the reference; only the last comparison failed.</SkText>
