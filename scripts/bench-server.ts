@@ -124,11 +124,16 @@ async function main(): Promise<void> {
     // indexes on the shared machine), never row by row. Every 50th point is a regression, so the
     // overview of a subscriber counts 20,000 of them.
     await dataSource.query(
-      `INSERT INTO failures (run_id, shard_id, suite_slug, suite_version, target_name, target_library, target_version, convention, path_name, point_index, t, z, z_hex, point_key, outcome_kind, diagnosis_kind, diagnosis, ulps, rule, reproducer, is_regression)
+      `INSERT INTO failures (run_id, shard_id, suite_slug, suite_version, target_name, target_library, target_version, convention, path_name, point_index, t, z, z_hex, point_key, outcome_kind, diagnosis_kind, diagnosis, labels, finding_class, ulps, rule, reproducer, is_regression)
        SELECT $1, $2, 'bench-' || (g % 40), 1, 'complex.js@2.4.3', 'complex.js', '2.4.3', 'signed-zero', 'path ' || (g % 7), g, (g % 1000) / 1000.0,
               '{"re":"-4","im":"-0"}', '{"re":"-0x1p+2","im":"-0x0p+0"}', 'bench|' || g,
-              'fail', (ARRAY['other-sheet','cut-side','zero-sign','inaccurate'])[1 + g % 4], '{"kind":"inaccurate","ulps":5,"relativeError":1e-15}', g % 97, 'rule', 'x', g % 50 = 0
-         FROM generate_series(1, $3) AS g`,
+              'fail', k, jsonb_build_object('kind', k),
+              -- every 8th zero-sign point is inaccurate too, as a second label
+              CASE WHEN k = 'zero-sign' AND g % 8 = 2
+                   THEN jsonb_build_array(jsonb_build_object('kind', k), '{"kind":"inaccurate","ulps":5,"relativeError":1e-15}'::jsonb)
+                   ELSE jsonb_build_array(jsonb_build_object('kind', k)) END,
+              CASE WHEN k = 'inaccurate' THEN 'accuracy' ELSE 'branch' END, g % 97, 'rule', 'x', g % 50 = 0
+         FROM generate_series(1, $3) AS g, LATERAL (SELECT (ARRAY['other-sheet','cut-side','zero-sign','inaccurate'])[1 + g % 4] AS k) AS kind`,
       [shard.run_id, shard.id, FAILURE_ROWS],
     );
     // The run that carries them is its plan's latest completed run, as after a real nightly run.
@@ -165,7 +170,8 @@ async function main(): Promise<void> {
       `run=${last}&status=new&limit=50`,
       `run=${last}&suite=bench-7&limit=50`,
       `run=${last}&diagnosis=inaccurate&sort=ulps&limit=50`,
-      `run=${last}&limit=50&after=500000`,
+      `run=${last}&class=accuracy&sort=ulps&limit=50`,
+      `run=${last}&limit=50&after=500000:0`,
     ].map((q) => `/api/failures?${q}`);
     if (process.env.BENCH_EXPLAIN) {
       for (const path of ['/api/overview', ...failurePages]) {

@@ -19,7 +19,9 @@ import { Shard } from './shard';
 // Expression and partial indexes TypeORM cannot describe: kept by the migration, skipped by the schema comparison.
 @Index('failures_run_rank_idx', { synchronize: false })
 @Index('failures_run_rank_ulps_idx', { synchronize: false })
-@Index('failures_labels_idx', { synchronize: false })
+@Index('failures_run_kind_rank_idx', { synchronize: false })
+@Index('failures_run_kind_rank_ulps_idx', { synchronize: false })
+@Index('failures_later_labels_idx', { synchronize: false })
 @Index('failures_run_new_idx', { synchronize: false })
 export class Failure {
   @PrimaryGeneratedColumn('identity', { type: 'bigint', generatedIdentity: 'ALWAYS' })

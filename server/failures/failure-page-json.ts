@@ -13,14 +13,14 @@ import { FAILURE_ROW, failureSearchSql, RANK } from '../sql/failure-search-sql';
  * `searchFailures` gives (a test compares them).
  */
 export async function failurePageJson(dataSource: DataSource, q: FailureQuery): Promise<string> {
-  const { where, order, params } = failureSearchSql(q);
+  const { from, order, params } = failureSearchSql(q);
   const byUlps = q.sort === 'ulps';
   const pageOrder = byUlps ? 'p._r ASC, p._u DESC, p._id ASC' : 'p._r ASC, p._id ASC';
   const lastFirst = byUlps ? 'p._r DESC, p._u ASC, p._id DESC' : 'p._r DESC, p._id DESC';
   const cursor = `p._id::text || ':' || p._r::text${byUlps ? ` || ':' || p._u::text` : ''}`;
   const text = `WITH p AS (
        SELECT f.id AS _id, ${RANK} AS _r, coalesce(f.ulps, 0) AS _u, ${FAILURE_ROW} AS r
-         FROM failures f ${where} ORDER BY ${order} LIMIT $${params.length})
+         FROM ${from} ORDER BY ${order} LIMIT $${params.length})
      SELECT json_build_object(
               'failures', coalesce(json_agg(p.r ORDER BY ${pageOrder}), '[]'::json),
               'next', CASE WHEN count(*) = $${params.length} THEN (array_agg(${cursor} ORDER BY ${lastFirst}))[1] END

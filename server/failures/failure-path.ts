@@ -131,6 +131,7 @@ export async function failurePath(
     fail: stored.filter((s) => s.outcome_kind === 'fail').length,
     error: stored.filter((s) => s.outcome_kind === 'error').length,
     skipped: stored.filter((s) => s.outcome_kind === 'skipped').length,
+    notApplicable: 0,
   };
   const tol = suite.tolerances.values;
   return {

@@ -18,9 +18,9 @@ export async function searchFailures(
   detail = false,
   only?: string,
 ): Promise<{ rows: FailureRow[]; next: string | null }> {
-  const { where, order, params } = failureSearchSql(q, only);
+  const { from, order, params } = failureSearchSql(q, only);
   const rows: (FailureRow & { _rank: number })[] = await dataSource.query(
-    `SELECT ${FAILURE_COLUMNS}${detail ? DETAIL_COLUMNS : ''}, ${RANK} AS _rank FROM failures f ${where} ORDER BY ${order} LIMIT $${params.length}`,
+    `SELECT ${FAILURE_COLUMNS}${detail ? DETAIL_COLUMNS : ''}, ${RANK} AS _rank FROM ${from} ORDER BY ${order} LIMIT $${params.length}`,
     params,
   );
   const last = rows[rows.length - 1];

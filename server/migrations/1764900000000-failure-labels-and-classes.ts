@@ -12,8 +12,9 @@ import type { MigrationInterface, QueryRunner } from 'typeorm';
  * Pages list branch findings first: the old (run, ulps) index gives way to (run, class rank,
  * ulps) and a (run, class rank, id) one, the rank being the expression `findingRankSql` writes
  * (server/sql/finding-rank-sql.ts; the planner uses an expression index only for the same
- * expression). Labels are searched by containment (`labels @> '[{"kind": …}]'`) through a GIN
- * index, so any label, not only the leading one, can be filtered on.
+ * expression), and the same two after the leading kind, for a label filter's points whose leading
+ * label it is. Its points that carry it further down are found through a GIN index on the labels
+ * after the first (`labels - 0`), which holds only those (failure-search-sql.ts says why).
  */
 export class FailureLabelsAndClasses1764900000000 implements MigrationInterface {
   name = 'FailureLabelsAndClasses1764900000000';
@@ -42,7 +43,15 @@ export class FailureLabelsAndClasses1764900000000 implements MigrationInterface 
       `CREATE INDEX failures_run_rank_ulps_idx ON failures
          (run_id, (CASE finding_class WHEN 'branch' THEN 0 WHEN 'accuracy' THEN 1 ELSE 2 END), (coalesce(ulps, 0)) DESC, id)`,
     );
-    await q.query(`CREATE INDEX failures_labels_idx ON failures USING gin (labels jsonb_path_ops)`);
+    await q.query(
+      `CREATE INDEX failures_run_kind_rank_idx ON failures
+         (run_id, diagnosis_kind, (CASE finding_class WHEN 'branch' THEN 0 WHEN 'accuracy' THEN 1 ELSE 2 END), id)`,
+    );
+    await q.query(
+      `CREATE INDEX failures_run_kind_rank_ulps_idx ON failures
+         (run_id, diagnosis_kind, (CASE finding_class WHEN 'branch' THEN 0 WHEN 'accuracy' THEN 1 ELSE 2 END), (coalesce(ulps, 0)) DESC, id)`,
+    );
+    await q.query(`CREATE INDEX failures_later_labels_idx ON failures USING gin ((labels - 0) jsonb_path_ops)`);
     await q.query(`ALTER TYPE failure_table_row ADD ATTRIBUTE "labels" jsonb, ADD ATTRIBUTE "findingClass" text`);
 
     for (const table of ['runs', 'shards', 'path_summaries'])
@@ -70,7 +79,9 @@ export class FailureLabelsAndClasses1764900000000 implements MigrationInterface 
     for (const table of ['runs', 'shards', 'path_summaries'])
       await q.query(`UPDATE ${table} SET counts = counts - 'notApplicable' WHERE counts IS NOT NULL`);
     await q.query(`ALTER TYPE failure_table_row DROP ATTRIBUTE "findingClass", DROP ATTRIBUTE "labels"`);
-    await q.query(`DROP INDEX failures_labels_idx`);
+    await q.query(`DROP INDEX failures_later_labels_idx`);
+    await q.query(`DROP INDEX failures_run_kind_rank_ulps_idx`);
+    await q.query(`DROP INDEX failures_run_kind_rank_idx`);
     await q.query(`DROP INDEX failures_run_rank_ulps_idx`);
     await q.query(`DROP INDEX failures_run_rank_idx`);
     await q.query(`CREATE INDEX failures_run_ulps_idx ON failures (run_id, (coalesce(ulps, 0)) DESC, id)`);

@@ -2,13 +2,13 @@ import { failureSearchSql } from '../../../server/sql/failure-search-sql';
 import { createTestDatabase, type TestDatabase } from '../../setup/test-database';
 
 /** The plan's text for one page query, with sequential scans priced out so only a usable index can win. */
-async function planOf(db: TestDatabase, q: Parameters<typeof failureSearchSql>[0]): Promise<string> {
-  const { where, order, params } = failureSearchSql(q);
+async function planOf(db: TestDatabase, q: Parameters<typeof failureSearchSql>[0], bitmaps = false): Promise<string> {
+  const { from, order, params } = failureSearchSql(q);
   return db.dataSource.transaction(async (tx) => {
     await tx.query('SET LOCAL enable_seqscan = off');
-    await tx.query('SET LOCAL enable_bitmapscan = off');
+    if (!bitmaps) await tx.query('SET LOCAL enable_bitmapscan = off');
     const rows: { 'QUERY PLAN': string }[] = await tx.query(
-      `EXPLAIN SELECT f.id FROM failures f ${where} ORDER BY ${order} LIMIT $${params.length}`,
+      `EXPLAIN SELECT f.id FROM ${from} ORDER BY ${order} LIMIT $${params.length}`,
       params,
     );
     return rows.map((r) => r['QUERY PLAN']).join('\n');
@@ -33,5 +33,12 @@ describe('findingRankSql and the rank indexes', () => {
     expect(byUlps).not.toMatch(/Sort/);
     const branch = await planOf(db, { run, class: 'branch', sort: 'id', limit: 50 });
     expect(branch).toMatch(/failures_run_rank_idx/);
+  });
+
+  it('reads the points a label filter leads from the leading-kind index, in page order', async () => {
+    const byUlps = await planOf(db, { run, diagnosis: 'inaccurate', sort: 'ulps', limit: 50 }, true);
+    expect(byUlps).toMatch(/Index (Only )?Scan using failures_run_kind_rank_ulps_idx/);
+    const byId = await planOf(db, { run, diagnosis: 'zero-sign', sort: 'id', limit: 50 }, true);
+    expect(byId).toMatch(/Index (Only )?Scan using failures_run_kind_rank_idx/);
   });
 });
