@@ -34,6 +34,25 @@ describe('FailureBrowser', () => {
     expect(screen.queryByRole('table')).toBeNull();
   });
 
+  it('shows every label of a point on its card, the leading one first', async () => {
+    setScreenWidth(390);
+    const [first, ...rest] = failureRows(2, 1);
+    // A zero-sign point whose real part is also far off (the "zero-sign hid a real part 104,212 ulps off").
+    const inaccurate = { kind: 'inaccurate', ulps: 104212, relativeError: 2.3e-11, part: 're' } as const;
+    mockFetchRoutes(() => ({
+      body: { failures: [{ ...first!, labels: [first!.diagnosis!, inaccurate] }, ...rest], next: null },
+    }));
+    renderWithClient(<FailureBrowser filters={{}} onChange={jest.fn()} />);
+    const card = await screen.findByTestId('failure-card-1');
+    const chips = within(card)
+      .getAllByLabelText(/^diagnosis /)
+      .map((e) => e.getAttribute('aria-label'));
+    expect(chips).toEqual([
+      'diagnosis zero sign, imaginary part of the input',
+      'diagnosis inaccurate, 104212 ulps in re',
+    ]);
+  });
+
   it('loads the next page with the cursor the first page gave, and stops when there is none', async () => {
     setScreenWidth(390);
     const calls = twoPages();
