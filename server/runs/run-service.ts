@@ -75,6 +75,7 @@ export class RunService {
           shardsTotal: versions.length * targets.length,
           shardsDone: 0,
           counts: { pass: 0, fail: 0, error: 0, skipped: 0, notApplicable: 0 },
+          byClass: { branch: 0, accuracy: 0 },
           regressions: null,
         }),
       );

@@ -65,6 +65,8 @@ describe('runs and the failure table', () => {
       shardsTotal: 2,
       shardsDone: 0,
       requestedBy: 'Kwame Asante',
+      counts: { pass: 0, fail: 0, error: 0, skipped: 0, notApplicable: 0 },
+      byClass: { branch: 0, accuracy: 0 },
     });
     const matrix = (await kwame.get(`/api/runs/${runId}/matrix`)).body.cells;
     expect(matrix).toHaveLength(2);
