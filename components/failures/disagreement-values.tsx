@@ -1,7 +1,7 @@
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { Diagnosis } from '../../shared/diagnosis';
-import { formatComplexText } from '../../shared/format-complex-text';
+import { ValueRow } from './value-row';
 import type { WireComplex } from '../../shared/wire-complex';
 import { SkText } from '../ui/sk-text';
 
@@ -35,12 +35,7 @@ export function DisagreementValues({
           : 'Neither matches the reference.'}
       </SkText>
       {rows.map((r) => (
-        <View key={r.name} style={styles.row}>
-          <Text style={styles.name}>{r.name}</Text>
-          <Text style={styles.value} selectable>
-            {formatComplexText(r.value)}
-          </Text>
-        </View>
+        <ValueRow key={r.name} name={r.name} value={r.value} code={r.name === d.with} />
       ))}
     </View>
   );
@@ -48,7 +43,4 @@ export function DisagreementValues({
 
 const styles = StyleSheet.create({
   root: { gap: theme.space(2) },
-  row: { gap: 2, borderBottomWidth: 1, borderBottomColor: theme.color.rule, paddingBottom: theme.space(2) },
-  name: { fontFamily: theme.font.medium, fontSize: 12, color: theme.color.inkFaint, letterSpacing: 0.6 },
-  value: { fontFamily: theme.font.mono, fontSize: 15, color: theme.color.ink },
 });

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { formatHexDouble } from '../../harness/web';
 import { theme } from '../../constants/theme';
 import type { FailureView } from '../../shared/failure-view';
@@ -7,7 +7,7 @@ import type { WireComplex } from '../../shared/wire-complex';
 import { parseWireNumber } from '../../shared/parse-wire-number';
 import { DisclosureToggle } from '../ui/disclosure-toggle';
 import { SkText } from '../ui/sk-text';
-import { formatComplexText } from '../../shared/format-complex-text';
+import { ValueRow } from './value-row';
 
 const hexOf = (c: WireComplex): WireComplex => ({
   re: formatHexDouble(parseWireNumber(c.re)),
@@ -32,13 +32,9 @@ export function ValueBits({ failure: f }: { failure: FailureView }) {
   return (
     <View style={styles.root}>
       {rows.map((r) => (
-        <View key={r.name} style={styles.row}>
-          <Text style={styles.name}>{r.name}</Text>
-          <Text style={styles.value} selectable>
-            {formatComplexText(r.value)}
-          </Text>
+        <ValueRow key={r.name} name={r.name} value={r.value}>
           {bits && r.value ? <HexLine hex={r.hex ?? hexOf(r.value)} /> : null}
-        </View>
+        </ValueRow>
       ))}
       {f.limits ? null : <SkText variant="caption">Not on a cut: there is one limit, the value itself.</SkText>}
       <DisclosureToggle
@@ -66,15 +62,6 @@ function HexLine({ hex }: { hex: WireComplex }) {
 
 const styles = StyleSheet.create({
   root: { gap: theme.space(3) },
-  row: { gap: 2, borderBottomWidth: 1, borderBottomColor: theme.color.rule, paddingBottom: theme.space(2) },
-  name: {
-    fontFamily: theme.font.medium,
-    fontSize: 12,
-    color: theme.color.inkFaint,
-    textTransform: 'uppercase',
-    letterSpacing: 0.6,
-  },
-  value: { fontFamily: theme.font.mono, fontSize: 15, color: theme.color.ink },
   hex: { backgroundColor: theme.color.paper, padding: theme.space(2), borderRadius: 4 },
   toggle: { alignSelf: 'flex-start' },
 });
