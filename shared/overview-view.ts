@@ -21,6 +21,8 @@ export interface SubscribedRegression {
   planName: string;
   finishedAt: string;
   count: number;
+  /** How many of `count` are branch findings; the rest are accuracy findings. */
+  branch: number;
 }
 
 /** Everything the Overview screen shows, in one answer (`GET /api/overview`). */

@@ -2,7 +2,9 @@ import { Link } from 'expo-router';
 import type { ReactNode } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { theme } from '../../constants/theme';
-import type { OverviewView, WaitingSuite } from '../../shared/overview-view';
+import type { DiagnosisClass } from '../../shared/diagnosis-class';
+import type { OverviewView, SubscribedRegression, WaitingSuite } from '../../shared/overview-view';
+import { CLASS_WORDS } from '../runs/class-words';
 import type { Role } from '../../shared/roles';
 import { formatWhen } from '../runs/format-when';
 import { SkText } from '../ui/sk-text';
@@ -118,10 +120,11 @@ export function NeedsMePanel({ needsMe, role, now }: { needsMe: NeedsMe; role: R
           <Row
             key={`${r.runId}-${r.targetKey}`}
             href={`/failures?${new URLSearchParams({ run: r.runId, status: 'new' }).toString()}`}
-            label={`${r.count} regressions on ${r.targetKey} in ${r.planName}`}
+            label={`${r.count} regressions on ${r.targetKey} in ${r.planName}: ${CLASS_WORDS.map((c) => `${countOf(r, c.key)} ${c.findings(countOf(r, c.key))}`).join(', ')}`}
           >
             <SkText variant="label" style={styles.danger}>
-              ❌ {r.count} regression{r.count === 1 ? '' : 's'} on {r.targetKey}
+              ❌ {r.count} regression{r.count === 1 ? '' : 's'} on {r.targetKey}:{' '}
+              {r.branch === 0 ? 'accuracy only' : CLASS_WORDS.map((c) => `${countOf(r, c.key)} ${c.key}`).join(', ')}
             </SkText>
             <SkText variant="caption">
               {r.planName}, finished {formatWhen(r.finishedAt, now)}
@@ -132,6 +135,9 @@ export function NeedsMePanel({ needsMe, role, now }: { needsMe: NeedsMe; role: R
     </View>
   );
 }
+
+/** A regression count's branch or accuracy part (the overview sends the branch part and the whole). */
+const countOf = (r: SubscribedRegression, c: DiagnosisClass) => (c === 'branch' ? r.branch : r.count - r.branch);
 
 const styles = StyleSheet.create({
   panel: {

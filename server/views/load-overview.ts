@@ -3,6 +3,7 @@ import type { OutcomeCounts } from '../../shared/run-result';
 import type { OverviewView, SubscribedRegression, WaitingSuite } from '../../shared/overview-view';
 import { Run } from '../entities/run';
 import type { User } from '../entities/user';
+import { branchKindSql } from '../sql/branch-kind-sql';
 import { coveredByDeviationSql } from '../sql/covered-by-deviation-sql';
 import { targetKeySql } from '../sql/target-key-sql';
 import type { OverviewMemo } from './overview-memo';
@@ -140,7 +141,8 @@ async function loadRegressions(dataSource: DataSource, subscriptions: string[]):
                             WHERE plan_id IS NOT NULL AND status = 'completed' ORDER BY plan_id, created_at DESC),
            open_groups AS (SELECT g.* FROM latest l JOIN regression_groups g ON g.run_id = l.id
                             WHERE g.target_key = ANY($1) AND NOT ${coveredByDeviationSql('g', GROUP_MATCH)}),
-           point_covered AS (SELECT o.run_id, o.target_key, count(*)::int AS n
+           point_covered AS (SELECT o.run_id, o.target_key, count(*)::int AS n,
+                                    count(*) FILTER (WHERE ${branchKindSql('f.diagnosis_kind')})::int AS b
                                FROM failures f
                                JOIN open_groups o ON o.run_id = f.run_id AND o.target_key = ${targetKeySql('f.target_name')}
                                 AND o.suite_slug = f.suite_slug AND o.path_name = f.path_name
@@ -148,9 +150,11 @@ async function loadRegressions(dataSource: DataSource, subscriptions: string[]):
                               WHERE f.point_key IN (SELECT d.point_key FROM deviations d WHERE d.scope = 'point')
                                 AND f.is_regression AND ${coveredByDeviationSql('f')}
                               GROUP BY 1, 2),
-           totals AS (SELECT run_id, target_key, sum(count)::int AS n FROM open_groups GROUP BY 1, 2)
+           totals AS (SELECT run_id, target_key, sum(count)::int AS n,
+                             coalesce(sum(count) FILTER (WHERE ${branchKindSql('diagnosis_kind')}), 0)::int AS b
+                        FROM open_groups GROUP BY 1, 2)
            SELECT t.target_key AS "targetKey", l.id AS "runId", l.plan_name AS "planName", l.finished_at AS "finishedAt",
-                  t.n - coalesce(p.n, 0) AS count
+                  t.n - coalesce(p.n, 0) AS count, t.b - coalesce(p.b, 0) AS branch
              FROM totals t JOIN latest l ON l.id = t.run_id
              LEFT JOIN point_covered p ON p.run_id = t.run_id AND p.target_key = t.target_key
             WHERE t.n - coalesce(p.n, 0) > 0

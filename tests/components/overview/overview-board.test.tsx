@@ -87,6 +87,7 @@ const OVERVIEW: OverviewView = {
         planName: 'complex.js nightly',
         finishedAt: hoursAgo(2.9),
         count: 5,
+        branch: 2,
       },
     ],
   },
@@ -148,8 +149,11 @@ describe('OverviewBoard', () => {
       '/review/atanh-near-one',
     );
     expect(within(panel).getByText('atanh next to ±1 · v2')).toBeTruthy();
-    const regression = within(panel).getByRole('link', { name: '5 regressions on complex.js in complex.js nightly' });
+    const regression = within(panel).getByRole('link', {
+      name: '5 regressions on complex.js in complex.js nightly: 2 branch findings, 3 accuracy findings',
+    });
     expect(regression.getAttribute('href')).toBe('/failures?run=aaaaaaaa-0000-4000-8000-000000000001&status=new');
+    expect(within(regression).getByText('❌ 5 regressions on complex.js: 2 branch, 3 accuracy')).toBeTruthy();
     expect(within(panel).queryByText(/Your suites sent back/)).toBeNull();
   });
 

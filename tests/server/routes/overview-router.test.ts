@@ -148,6 +148,7 @@ describe('GET /api/overview', () => {
         planName: 'overview plan',
         finishedAt: expect.any(String),
         count: 3,
+        branch: 3,
       },
     ]);
     // Kwame subscribes to nothing: no regressions are his to see here.

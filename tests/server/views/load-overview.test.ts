@@ -34,7 +34,7 @@ describe('loadOverview over many regressions', () => {
       `INSERT INTO failures (run_id, shard_id, suite_slug, suite_version, target_name, target_library, target_version, convention, path_name, point_index, t, z, z_hex, point_key, outcome_kind, diagnosis_kind, rule, reproducer, is_regression)
        SELECT $1, $2, 'many-' || (g % 3), 1, $3, 'complex.js', '1', 'signed-zero', 'path ' || (g % 5), g, 0,
               '{"re":"-4","im":"-0"}', '{"re":"-0x1p+2","im":"-0x0p+0"}', 'many|' || g, 'fail',
-              CASE WHEN g % 11 = 0 THEN NULL ELSE (ARRAY['other-sheet','cut-side','zero-sign'])[1 + g % 3] END, 'r', 'x', g % 4 <> 0
+              CASE WHEN g % 11 = 0 THEN NULL ELSE (ARRAY['other-sheet','cut-side','zero-sign','inaccurate'])[1 + g % 4] END, 'r', 'x', g % 4 <> 0
          FROM generate_series(1, $4) AS g`,
       [runId, shard.id, target, (REGRESSIONS * 4) / 3],
     );
@@ -80,15 +80,18 @@ describe('loadOverview over many regressions', () => {
   afterAll(() => t.stop());
 
   it('counts exactly the regressions no current accepted deviation covers, as counting the failures one by one does', async () => {
-    const [{ n: expected }] = await t.db.dataSource.query(
-      `SELECT count(*)::int AS n FROM failures f
+    const [{ n: expected, b: branch }] = await t.db.dataSource.query(
+      `SELECT count(*)::int AS n, count(*) FILTER (WHERE f.diagnosis_kind IS DISTINCT FROM 'inaccurate')::int AS b FROM failures f
         WHERE f.run_id = $1 AND f.is_regression AND ${targetKeySql('f.target_name')} = 'complex.js' AND NOT ${coveredByDeviationSql('f')}`,
       [runId],
     );
     const view = await loadOverview(t.db.dataSource, maintainer);
     expect(expected).toBeGreaterThan(REGRESSIONS / 3);
+    // Both classes are present, so the split is tested, not only the total.
+    expect(branch).toBeGreaterThan(0);
+    expect(branch).toBeLessThan(expected);
     expect(view.needsMe.regressions).toEqual([
-      expect.objectContaining({ targetKey: 'complex.js', runId, count: expected }),
+      expect.objectContaining({ targetKey: 'complex.js', runId, count: expected, branch }),
     ]);
   });
 
