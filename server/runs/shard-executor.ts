@@ -157,22 +157,25 @@ const columnsOfFinding = (f: PointFinding) =>
 
 async function storeResult(tx: EntityManager, shard: Shard, result: SuiteTargetResult): Promise<void> {
   const body = shard.suiteVersion.body;
+  // A point the target's entry cannot express is counted (counts.notApplicable), never stored as a failure.
   const rows = result.paths.flatMap((path) =>
-    path.findings.map((f) =>
-      tx.getRepository(Failure).create({
-        run: { id: shard.run.id },
-        shard: { id: shard.id },
-        suiteSlug: shard.suiteSlug,
-        suiteVersion: body.version,
-        targetName: shard.targetName,
-        targetLibrary: shard.targetLibrary,
-        targetVersion: shard.targetVersion,
-        convention: body.convention,
-        pathName: path.name,
-        ...columnsOfFinding(f),
-        pointKey: `${shard.suiteSlug}|${path.name}|${f.zHex.re}|${f.zHex.im}`,
-      }),
-    ),
+    path.findings
+      .filter((f) => f.outcome.kind !== 'not-applicable')
+      .map((f) =>
+        tx.getRepository(Failure).create({
+          run: { id: shard.run.id },
+          shard: { id: shard.id },
+          suiteSlug: shard.suiteSlug,
+          suiteVersion: body.version,
+          targetName: shard.targetName,
+          targetLibrary: shard.targetLibrary,
+          targetVersion: shard.targetVersion,
+          convention: body.convention,
+          pathName: path.name,
+          ...columnsOfFinding(f),
+          pointKey: `${shard.suiteSlug}|${path.name}|${f.zHex.re}|${f.zHex.im}`,
+        }),
+      ),
   );
   for (let i = 0; i < rows.length; i += INSERT_CHUNK)
     await tx.getRepository(Failure).insert(rows.slice(i, i + INSERT_CHUNK));
