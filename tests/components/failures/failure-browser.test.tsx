@@ -13,8 +13,8 @@ const RUN = '11111111-1111-4111-8111-111111111111';
 function twoPages() {
   return mockFetchRoutes((url) => {
     const u = new URL(url, 'http://x');
-    if (u.searchParams.get('after') === '3') return { body: { failures: failureRows(3, 4), next: null } };
-    return { body: { failures: failureRows(3, 1), next: '3' } };
+    if (u.searchParams.get('after') === '3:0') return { body: { failures: failureRows(3, 4), next: null } };
+    return { body: { failures: failureRows(3, 1), next: '3:0' } };
   });
 }
 
@@ -61,7 +61,7 @@ describe('FailureBrowser', () => {
     expect(calls[0]!.url).toBe(`/api/failures?run=${RUN}&diagnosis=zero-sign&limit=50`);
     await act(() => fireEvent.click(screen.getByRole('button', { name: 'Load more' })));
     await screen.findByText('6 failures shown, all loaded');
-    expect(calls[1]!.url).toBe(`/api/failures?run=${RUN}&diagnosis=zero-sign&after=3&limit=50`);
+    expect(calls[1]!.url).toBe(`/api/failures?run=${RUN}&diagnosis=zero-sign&after=3%3A0&limit=50`);
     expect(screen.getByTestId('failure-card-6')).toBeTruthy();
     expect(screen.queryByRole('button', { name: 'Load more' })).toBeNull();
   });
