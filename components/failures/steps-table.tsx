@@ -15,47 +15,49 @@ export function StepsTable({ steps, firstLeft }: { steps: readonly StepValue[]; 
   const verdict = (s: StepValue, i: number) =>
     i === firstLeft ? '← first step that left the reference' : s.left ? 'off the reference' : 'matches the reference';
   return (
-    <View style={styles.root} role="table" aria-label="Steps of the subject">
+    <View style={styles.root}>
       {firstLeft !== null && steps[firstLeft] ? (
         <SkText variant="body">
           The value first left the reference at step {firstLeft + 1},{' '}
           <Text style={styles.mono}>{steps[firstLeft]!.text}</Text>; the steps after it start from the library’s value.
         </SkText>
       ) : (
-        <SkText variant="body">Every step matched the reference; only the last comparison failed.</SkText>
+        <SkText variant="body">No step left the reference beyond the tolerance on its own.</SkText>
       )}
-      {wide ? (
-        <View style={[styles.row, styles.head]} role="row">
-          {['Step', 'Library', 'Reference', ''].map((h, i) => (
-            <Text key={i} style={[styles.cell, styles.headText]} role="columnheader">
-              {h}
+      <View role="table" aria-label="Steps of the subject">
+        {wide ? (
+          <View style={[styles.row, styles.head]} role="row">
+            {['Step', 'Library', 'Reference', ''].map((h, i) => (
+              <Text key={i} style={[styles.cell, styles.headText]} role="columnheader">
+                {h}
+              </Text>
+            ))}
+          </View>
+        ) : null}
+        {steps.map((s, i) => (
+          <View
+            key={i}
+            style={[wide ? styles.row : styles.block, i === firstLeft ? styles.first : null]}
+            role="row"
+            testID={`step-${i}`}
+          >
+            <Text role="cell" style={[styles.cell, styles.mono]}>
+              {i + 1}. {s.text}
             </Text>
-          ))}
-        </View>
-      ) : null}
-      {steps.map((s, i) => (
-        <View
-          key={i}
-          style={[wide ? styles.row : styles.block, i === firstLeft ? styles.first : null]}
-          role="row"
-          testID={`step-${i}`}
-        >
-          <Text role="cell" style={[styles.cell, styles.mono]}>
-            {i + 1}. {s.text}
-          </Text>
-          <Text role="cell" style={[styles.cell, styles.mono]}>
-            {wide ? '' : 'library   '}
-            {formatComplexText(s.library)}
-          </Text>
-          <Text role="cell" style={[styles.cell, styles.mono]}>
-            {wide ? '' : 'reference '}
-            {formatComplexText(s.reference)}
-          </Text>
-          <Text role="cell" style={[styles.cell, i === firstLeft ? styles.firstText : styles.note]}>
-            {verdict(s, i)}
-          </Text>
-        </View>
-      ))}
+            <Text role="cell" style={[styles.cell, styles.mono]}>
+              {wide ? '' : 'library   '}
+              {formatComplexText(s.library)}
+            </Text>
+            <Text role="cell" style={[styles.cell, styles.mono]}>
+              {wide ? '' : 'reference '}
+              {formatComplexText(s.reference)}
+            </Text>
+            <Text role="cell" style={[styles.cell, i === firstLeft ? styles.firstText : styles.note]}>
+              {verdict(s, i)}
+            </Text>
+          </View>
+        ))}
+      </View>
     </View>
   );
 }
