@@ -1,9 +1,9 @@
-import { diagnosisClass, type DiagnosisClass } from './diagnosis-class';
+import type { DiagnosisClass } from './diagnosis-class';
 import { outcomeLabels } from './outcome-labels';
 import type { PointOutcome } from './point-outcome';
+import { pointClass } from './point-class';
 
-/** The class of a failing point: branch when any of its labels is a branch label, else accuracy; null for other outcomes. */
+/** The class of a point's outcome (point-class.ts from its labels); null for an outcome that is not a failure. */
 export function outcomeClass(outcome: PointOutcome): DiagnosisClass | null {
-  if (outcome.kind !== 'fail') return null;
-  return outcomeLabels(outcome).some((l) => diagnosisClass(l.kind) === 'branch') ? 'branch' : 'accuracy';
+  return outcome.kind === 'fail' ? pointClass(outcomeLabels(outcome)) : null;
 }
