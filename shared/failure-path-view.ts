@@ -37,7 +37,7 @@ export interface FailurePathView {
   suite: { slug: string; version: number; subject: string; branch: 'principal' | 'regular'; convention: string };
   target: string;
   path: { name: string; kind: string; points: number };
-  /** How the x axis of the plots along the path is read: t for circle, segment and polyline; point number for straddle and grid. */
+  /** How the x axis of the plots along the path is read: t for circle, segment and polyline; point number for straddle, grid and a list of points. */
   axis: 't' | 'index';
   tolerance: { ulps: number | null; relative: number | null };
   points: FailurePathPoint[];

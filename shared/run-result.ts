@@ -3,6 +3,7 @@ import type { DiagnosisKind } from './diagnosis';
 import type { DiagnosisClass } from './diagnosis-class';
 import type { PointOutcome } from './point-outcome';
 import type { PropertyOutcome } from './property-outcome';
+import type { SuitePath } from './schemas/suite-path-schema';
 import type { WireComplex } from './wire-complex';
 
 /** How many points of a path, a suite × target pair or a run came out each way. */
@@ -82,7 +83,7 @@ export interface MonodromyCheck {
 
 export interface PathResult {
   name: string;
-  kind: 'circle' | 'segment' | 'polyline' | 'straddle' | 'grid';
+  kind: SuitePath['kind'];
   points: number;
   counts: OutcomeCounts;
   /** Labels counted: a point with two labels counts under both. */

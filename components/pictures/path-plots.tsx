@@ -109,7 +109,7 @@ export function PathPlots({ view }: { view: FailurePathView }) {
       .join('; ');
 
   const argWords = !continuous
-    ? `These points are not a continuous path (a ${view.path.kind} goes back and forth across the cut), so the argument is compared point by point: ${
+    ? `These points are not a continuous path (${view.path.kind === 'points' ? 'a list of points has nothing between them' : `a ${view.path.kind} goes back and forth across the cut`}), so the argument is compared point by point: ${
         wrongArg.length
           ? `the library's value has another argument at ${wrongArg.length} point${wrongArg.length === 1 ? '' : 's'} (${wrongArg
               .slice(0, 8)

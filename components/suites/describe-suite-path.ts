@@ -12,6 +12,8 @@ export function describeSuitePath(p: SuitePath): string {
       return `segment from ${formatComplexText(p.from)} to ${formatComplexText(p.to)}, ${sampled(p)}`;
     case 'polyline':
       return `polyline through ${p.points.map((z) => formatComplexText(z)).join(' → ')}, ${sampled(p)}`;
+    case 'points':
+      return `${p.points.length === 1 ? 'the point' : `${p.points.length} points`} ${p.points.map((z) => formatComplexText(z)).join(', ')}, each once`;
     case 'straddle':
       return `straddles the ${p.cut.kind === 'segment' ? `segment ${formatComplexText(p.cut.from)} to ${formatComplexText(p.cut.to)}` : `ray from ${formatComplexText(p.cut.from)} through ${formatComplexText(p.cut.through)}`} at ${p.along.join(', ')}, offsets ${p.offsets.join(', ')} on both sides and ±0 on it`;
     case 'grid':

@@ -2,6 +2,7 @@ import { circlePath } from './circle-path';
 import { gridPath } from './grid-path';
 import type { PathPoint } from './path-point';
 import type { PathSpec } from './path-spec';
+import { pointsPath } from './points-path';
 import { polylinePath } from './polyline-path';
 import { segmentPath } from './segment-path';
 import { straddlePath } from './straddle-path';
@@ -17,6 +18,8 @@ export function buildPath(spec: PathSpec): PathPoint[] {
       return polylinePath(spec);
     case 'straddle':
       return straddlePath(spec);
+    case 'points':
+      return pointsPath(spec);
     case 'grid':
       return gridPath(spec);
     default:

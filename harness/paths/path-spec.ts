@@ -42,6 +42,8 @@ export type PathSpec =
       /** Distances from the cut, each put on both sides; default 1e-3, 1e-9, 1e-300, 5e-324. */
       offsets?: GeometryNumber[];
     }
+  /** Exactly these points, once each, in order: t is the index over (count − 1), 0 for a single point. */
+  | { kind: 'points'; points: GeometryPoint[] }
   | {
       kind: 'grid';
       min: GeometryPoint;

@@ -16,7 +16,7 @@ interface Point {
 
 /** What a suite looks like on the plane: its sampled paths, its cuts and its branch points. */
 export interface SuitePictureData {
-  /** Circles, segments and polylines as lines (`line`); straddles as separate points (`points`). */
+  /** Circles, segments and polylines as lines (`line`); straddles and lists of points as separate points (`points`). */
   paths: { name: string; draw: 'line' | 'points'; points: Point[] }[];
   cuts: { points: Point[]; toInfinity: boolean }[];
   branchPoints: Point[];
@@ -50,12 +50,19 @@ export function suitePicture(data: unknown): SuitePictureData {
       return;
     }
     const drawn =
-      path.kind !== 'straddle' && path.samples !== undefined && path.samples > MAX_DRAWN_SAMPLES
+      path.kind !== 'straddle' &&
+      path.kind !== 'points' &&
+      path.samples !== undefined &&
+      path.samples > MAX_DRAWN_SAMPLES
         ? { ...path, samples: MAX_DRAWN_SAMPLES }
         : path;
     try {
       const points = buildPath(toPathSpec(drawn)).map((p) => ({ re: p.z.re, im: p.z.im }));
-      out.paths.push({ name: path.name, draw: path.kind === 'straddle' ? 'points' : 'line', points });
+      out.paths.push({
+        name: path.name,
+        draw: path.kind === 'straddle' || path.kind === 'points' ? 'points' : 'line',
+        points,
+      });
     } catch (e) {
       out.notes.push(`${label} (${path.name}) cannot be drawn: ${e instanceof Error ? e.message : String(e)}.`);
     }

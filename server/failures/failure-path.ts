@@ -146,7 +146,7 @@ export async function failurePath(
     },
     target: row.target_name,
     path: { name: path.name, kind: path.kind, points: points.length },
-    axis: path.kind === 'straddle' || path.kind === 'grid' ? 'index' : 't',
+    axis: path.kind === 'straddle' || path.kind === 'grid' || path.kind === 'points' ? 'index' : 't',
     tolerance: { ulps: 'ulps' in tol ? tol.ulps : null, relative: 'relative' in tol ? tol.relative : null },
     points: out,
     cuts,

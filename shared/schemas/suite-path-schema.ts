@@ -91,6 +91,23 @@ const straddle = z.strictObject(
   { error: objectError },
 );
 
+/**
+ * Exactly these points, each evaluated once, in the order written: a list, not a path, so no
+ * continuity check (jumps, misplaced cuts, monodromy) applies to it. 1000 points is far more than
+ * a hand-written list needs; a sweep is a segment, polyline or grid.
+ */
+const points = z.strictObject(
+  {
+    kind: z.literal('points'),
+    name,
+    points: z
+      .array(complexString)
+      .min(1, { error: 'needs at least one point' })
+      .max(1000, { error: 'must have at most 1000 points' }),
+  },
+  { error: objectError },
+);
+
 const grid = z.strictObject(
   {
     kind: z.literal('grid'),
@@ -105,8 +122,8 @@ const grid = z.strictObject(
 );
 
 /** One path of a suite, docs/vocabulary.md. Numbers are strings (docs/suite-format.md); t runs over [0, 1]. */
-export const suitePathSchema = z.discriminatedUnion('kind', [circle, segment, polyline, straddle, grid], {
-  error: 'kind must be circle, segment, polyline, straddle or grid',
+export const suitePathSchema = z.discriminatedUnion('kind', [circle, segment, polyline, straddle, points, grid], {
+  error: 'kind must be circle, segment, polyline, straddle, points or grid',
 });
 
 export type SuitePath = z.infer<typeof suitePathSchema>;

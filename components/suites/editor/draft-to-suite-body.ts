@@ -37,6 +37,8 @@ function pathBody(p: PathDraft): Record<string, unknown> {
       return { kind: 'segment', name: p.name, from: p.from, to: p.to, ...sampling(p) };
     case 'polyline':
       return { kind: 'polyline', name: p.name, points: p.points, ...sampling(p) };
+    case 'points':
+      return { kind: 'points', name: p.name, points: p.points };
     case 'straddle':
       return {
         kind: 'straddle',

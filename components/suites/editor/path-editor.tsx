@@ -16,6 +16,7 @@ const KINDS = [
   { value: 'segment', text: 'segment' },
   { value: 'polyline', text: 'polyline' },
   { value: 'straddle', text: 'straddle' },
+  { value: 'points', text: 'points' },
 ] as const;
 
 /** One path of the suite form; the fields follow the kind, and every rule sits under its field. */
@@ -118,7 +119,13 @@ export function PathEditor({
           />
         </View>
       ) : null}
-      {path.kind === 'polyline' ? (
+      {path.kind === 'points' ? (
+        <SkText variant="caption">
+          Exactly these points, each evaluated once in this order. A list is not a path: jumps and monodromy are not
+          checked on it.
+        </SkText>
+      ) : null}
+      {path.kind === 'polyline' || path.kind === 'points' ? (
         <>
           <RuleLines rules={rules(`${f}.points`).map((r) => `${n} points ${r}`)} />
           <PointListEditor

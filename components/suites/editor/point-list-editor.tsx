@@ -16,7 +16,7 @@ interface Props {
   field: string;
 }
 
-/** A polyline's points: each one editable and removable, and one more added after the last. */
+/** A polyline's or a list's points: each one editable and removable, and one more added after the last. */
 export function PointListEditor({ label, points, onChange, rules, field }: Props) {
   const set = (k: number, p: ComplexDraft) => onChange(points.map((q, j) => (j === k ? p : q)));
   return (

@@ -1,4 +1,5 @@
 import type { Convention } from '../../../shared/schemas/convention-schema';
+import type { SuitePath } from '../../../shared/schemas/suite-path-schema';
 import type { PROPERTY_LAWS } from '../../../shared/schemas/property-check-schema';
 
 /** A complex number as typed: two strings, kept exactly as written. */
@@ -17,7 +18,7 @@ export interface CutDraft {
  * loses nothing; lists (along, at, offsets) are comma-separated text.
  */
 export interface PathDraft {
-  kind: 'circle' | 'segment' | 'polyline' | 'straddle' | 'grid';
+  kind: SuitePath['kind'];
   name: string;
   center: ComplexDraft;
   radius: string;

@@ -40,6 +40,8 @@ export function suiteToDraft(s: Suite): SuiteDraft {
           return { ...d, from: p.from, to: p.to, ...sampling(p) };
         case 'polyline':
           return { ...d, points: p.points, ...sampling(p) };
+        case 'points':
+          return { ...d, points: p.points };
         case 'straddle':
           return {
             ...d,

@@ -8,7 +8,7 @@ import type { PathSpec } from '../../paths/path-spec';
  */
 export function toPathSpec(path: SuitePath): PathSpec {
   const sampling =
-    path.kind === 'straddle' || path.kind === 'grid'
+    path.kind === 'straddle' || path.kind === 'grid' || path.kind === 'points'
       ? null
       : path.at !== undefined
         ? { at: path.at }
@@ -30,6 +30,8 @@ export function toPathSpec(path: SuitePath): PathSpec {
       return { kind: 'polyline', points: path.points, ...(sampling as { samples: number }) };
     case 'straddle':
       return { kind: 'straddle', cut: path.cut, along: path.along, offsets: path.offsets };
+    case 'points':
+      return { kind: 'points', points: path.points };
     case 'grid':
       return {
         kind: 'grid',

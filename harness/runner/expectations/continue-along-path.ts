@@ -1,10 +1,13 @@
 import type { SuitePath } from '../../../shared/schemas/suite-path-schema';
 import type { PathPoint } from '../../paths/path-point';
+import type { PathSpec } from '../../paths/path-spec';
+import { polylineLayout } from '../../paths/polyline-layout';
 import { sampleParameters } from '../../paths/sample-parameters';
 import type { Point } from '../../reference/continuation/continuation-path';
 import { continueRegularBranch } from '../../reference/continuation/continue-regular-branch';
 import { parseExact } from '../../reference/continuation/parse-exact';
-import type { Rational } from '../../reference/numbers/rational';
+import { Rational } from '../../reference/numbers/rational';
+import { toPathSpec } from '../evaluation/to-path-spec';
 import { continuationPathOf } from './continuation-path-of';
 import type { RegularBranch } from './regular-branch';
 import { REGULAR_TUNING } from './regular-tuning';
@@ -36,7 +39,12 @@ export function continueAlongPath(
   return values;
 }
 
-/** The values of t of a continuous path, exactly as written or as the i/(n − 1) of its samples; null for other kinds. */
+/**
+ * The values of t of a continuous path, exactly as written or as the i/(n − 1) of its samples,
+ * with a polyline's vertices among them as the path builder puts them (polyline-layout.ts): a
+ * vertex's t is the double fraction of arc length, taken exactly, whose point lies within an ulp
+ * of the vertex, enough to pick the sheet there. Null for other kinds.
+ */
 function continuousAt(path: SuitePath): Rational[] | null {
   if (path.kind !== 'circle' && path.kind !== 'segment' && path.kind !== 'polyline') return null;
   const texts =
@@ -44,5 +52,10 @@ function continuousAt(path: SuitePath): Rational[] | null {
     (path.samples === 1
       ? ['0']
       : sampleParameters({ samples: path.samples as number }).map((_, i) => `${i}/${(path.samples as number) - 1}`));
-  return texts.map((t, i) => parseExact(t, `${path.name}: at.${i}`));
+  const written = texts.map((t, i) => parseExact(t, `${path.name}: at.${i}`));
+  if (path.kind !== 'polyline') return written;
+  const spec = toPathSpec(path) as Extract<PathSpec, { kind: 'polyline' }>;
+  return polylineLayout(spec).parameters.map((p) =>
+    p.sample !== null ? (written[p.sample] as Rational) : Rational.fromDouble(p.t),
+  );
 }

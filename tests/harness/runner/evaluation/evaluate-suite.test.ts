@@ -218,6 +218,40 @@ describe('evaluateSuite', () => {
     expect(around.jumps!.expected).toEqual(around.jumps!.library);
   });
 
+  it('evaluates a list of points once each and looks for no jumps or monodromy on it', async () => {
+    // ISO/IEC 9899:2011 G.6.4.2: csqrt(−4 + 0i) = +0 + 2i and csqrt(−4 − 0i) = +0 − 2i; the two
+    // values are far apart, but nothing lies between two listed points, so that is no jump.
+    const suite = makeSuite({
+      subject: 'sqrt(z)',
+      paths: [
+        {
+          kind: 'points',
+          name: 'both zeros at -4',
+          points: [
+            { re: '-4', im: '0' },
+            { re: '-4', im: '-0' },
+            { re: '-1', im: '-0' },
+          ],
+        },
+      ],
+    });
+    let calls = 0;
+    const counting = referenceTarget('counting@1', (_op, _args, v) => {
+      calls++;
+      return v;
+    });
+    const r = await evaluateSuite(suite, counting, { cache });
+    const path = r.paths[0]!;
+    expect({ kind: path.kind, points: path.points, counts: path.counts, calls }).toEqual({
+      kind: 'points',
+      points: 3,
+      counts: { pass: 3, fail: 0, error: 0, skipped: 0, notApplicable: 0 },
+      calls: 3,
+    });
+    expect(path.jumps).toBeNull();
+    expect(path.monodromy).toBeNull();
+  });
+
   it('states what was checked', async () => {
     const r = await evaluateSuite(loadDemoSuite('sqrt-principal-sz'), referenceTarget(), { cache });
     expect(r.checked).toEqual({
