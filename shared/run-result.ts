@@ -20,6 +20,21 @@ export interface OutcomeCounts {
 export type ClassCounts = Record<DiagnosisClass, number>;
 
 /**
+ * How one counterpart of a suite (another subject, or another entry) fared along one path:
+ * `compared` points had a value both ways, `disagreed` of them differ (each carries the
+ * `disagreement` label); `oneSided` counts the points where only one way gave a value, by reason,
+ * so they are said to be so instead of disagreeing.
+ */
+export interface AgreementSummary {
+  with: string;
+  compared: number;
+  disagreed: number;
+  oneSided: { reason: string; count: number }[];
+  /** Why the counterpart's own reference is missing, when it is (then no disagreement can say which value left it). */
+  note?: string;
+}
+
+/**
  * One step of a composed subject at one point, as the library computed it and as the reference
  * does from the same input: `text` is the step as written ("pow(z, 13)"); `left` says the
  * library's value is no longer the reference's (beyond the tolerance, or a zero of the other sign).
@@ -89,6 +104,8 @@ export interface PathResult {
   /** Labels counted: a point with two labels counts under both. */
   byDiagnosis: Partial<Record<DiagnosisKind, number>>;
   byClass: ClassCounts;
+  /** The suite's counterparts along this path (absent when it has none). */
+  agreements?: AgreementSummary[];
   /** Jumps along a continuous path (circle, segment, polyline): mid-step values of t. */
   jumps: { expected: number[]; library: number[] } | null;
   /** For a closed path of a regular branch; null where it does not apply. */

@@ -10,13 +10,23 @@ import type { TargetIdentity } from '../../shared/target-identity';
  */
 export interface Target extends TargetIdentity {
   supports(op: string): Promise<boolean>;
-  evaluate(op: string, calls: ComplexPair[][]): Promise<CallResult[]>;
+  /**
+   * `entry`: the target's entry to build the arguments with (docs/suite-format.md); absent, its
+   * default. Passed only when a suite or a counterpart names one.
+   */
+  evaluate(op: string, calls: ComplexPair[][], entry?: string): Promise<CallResult[]>;
   /**
    * Optional: the same calls column-wise, `n` points, skipping the indices in `skip` (they keep
    * their error). Same values and errors as `evaluate`; an in-process library answers this way
    * without an array per call, which keeps the runner's check loop near a bare loop's speed.
    */
-  evaluateColumns?(op: string, args: ColumnArg[], n: number, skip: ReadonlyMap<number, string>): Promise<ColumnResult>;
+  evaluateColumns?(
+    op: string,
+    args: ColumnArg[],
+    n: number,
+    skip: ReadonlyMap<number, string>,
+    entry?: string,
+  ): Promise<ColumnResult>;
   /** Releases what the target holds (a child process); safe to call twice. */
   close(): Promise<void>;
 }

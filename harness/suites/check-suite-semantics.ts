@@ -9,19 +9,28 @@ import type { Suite } from '../../shared/schemas/suite-schema';
 import type { SuiteIssue } from '../../shared/suite-issue';
 
 /**
- * What the schema cannot see: the subject (and g) must parse under the subject whitelist,
+ * What the schema cannot see: the subject (and g, and each counterpart's subject) must parse
+ * under the subject whitelist,
  * and a regular branch's cut layout must be valid for g and ν — every branch point on a cut,
  * every cut-free loop with monodromy 1. Returns the problems in the shared issue form,
  * naming the suite, the field and the rule (e.g. the uncut branch point or the failing loop).
  */
-export function checkSuiteSemantics(suite: Pick<Suite, 'id' | 'subject' | 'branch'>): SuiteIssue[] {
+export function checkSuiteSemantics(
+  suite: Pick<Suite, 'id' | 'subject' | 'branch'> & Partial<Pick<Suite, 'counterparts'>>,
+): SuiteIssue[] {
   const issues: SuiteIssue[] = [];
   const say = (field: string, rule: string) => issues.push({ suite: suite.id, field, rule });
-  try {
-    parseSubject(suite.subject);
-  } catch (e) {
-    if (!(e instanceof SubjectError)) throw e;
-    say('subject', e.message);
+  const subjects: [string, string][] = [['subject', suite.subject]];
+  (suite.counterparts ?? []).forEach((c, i) => {
+    if (c.subject !== undefined) subjects.push([`counterparts.${i}.subject`, c.subject]);
+  });
+  for (const [field, text] of subjects) {
+    try {
+      parseSubject(text);
+    } catch (e) {
+      if (!(e instanceof SubjectError)) throw e;
+      say(field, e.message);
+    }
   }
   const branch = suite.branch;
   if (branch.kind !== 'regular') return issues;

@@ -1,9 +1,10 @@
 import type { SuiteInput } from '../../shared/schemas/suite-schema';
+import { DEMO_AGREEMENT_SUITES } from './demo-agreement-suites';
 import { DEMO_PRINCIPAL_FUNCTIONS } from './demo-principal-functions';
 import { DEMO_REGULAR_SUITES } from './demo-regular-suites';
 import { principalSuite } from './principal-suite';
 
-/** The whole demo catalogue: every catalogue function under both conventions, then the regular branches. */
+/** The whole demo catalogue: every catalogue function under both conventions, then the regular branches, then the agreement checks. */
 export function demoCatalogue(): SuiteInput[] {
   return [
     ...DEMO_PRINCIPAL_FUNCTIONS.flatMap((fn) => [
@@ -11,5 +12,6 @@ export function demoCatalogue(): SuiteInput[] {
       principalSuite(fn, 'counter-clockwise'),
     ]),
     ...DEMO_REGULAR_SUITES,
+    ...DEMO_AGREEMENT_SUITES,
   ];
 }

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { textSchema } from './text-schema';
 import { branchSpecSchema } from './branch-spec-schema';
 import { conventionSchema } from './convention-schema';
+import { counterpartSchema } from './counterpart-schema';
 import { objectError } from './object-error';
 import { propertyCheckSchema } from './property-check-schema';
 import { suitePathSchema } from './suite-path-schema';
@@ -9,7 +10,8 @@ import { toleranceSchema } from './tolerance-schema';
 
 /**
  * A suite (docs/vocabulary.md): a subject, what it should equal, the convention on the cuts, the
- * paths to evaluate it along, tolerances per check and property checks. Results always name
+ * paths to evaluate it along, tolerances per check, property checks and counterparts (other ways
+ * to compute the subject that must agree with it). Results always name
  * the suite's id and version. The same schema validates suite files, the suite form and the API.
  */
 export const suiteSchema = z
@@ -45,6 +47,8 @@ export const suiteSchema = z
         { error: objectError },
       ),
       properties: z.array(propertyCheckSchema).max(20, { error: 'must have at most 20 property checks' }).default([]),
+      /** Other ways to compute the subject that must agree with it at every point (counterpart-schema.ts). */
+      counterparts: z.array(counterpartSchema).max(4, { error: 'must have at most 4 counterparts' }).default([]),
     },
     { error: objectError },
   )

@@ -1,4 +1,5 @@
 import type { PathResult } from '../../../shared/run-result';
+import { checkAgreement } from './check-agreement';
 import { checkPoints } from './check-points';
 import { compareAlongPath } from './compare-along-path';
 import { diagnoseFailures } from './diagnose-failures';
@@ -16,7 +17,8 @@ import type { PathRun } from './path-run';
  * One path of a suite against one target, in named steps: the expected values (expectedColumnOf)
  * and the library's (evaluateProgram) at every point; checkPoints compares them; diagnoseFailures
  * explains each failure; compareAlongPath finds jumps, misplaced cuts and the monodromy along a
- * continuous path; listFindings writes the failures out. A path that cannot be built is an error,
+ * continuous path; checkAgreement compares the suite's counterparts; listFindings writes the
+ * failures out. A path that cannot be built is an error,
  * and every point is skipped when the target lacks an operation of the subject.
  */
 export async function evaluatePath(evaluation: PathEvaluation): Promise<PathResult> {
@@ -71,6 +73,7 @@ export async function evaluatePath(evaluation: PathEvaluation): Promise<PathResu
   checkPoints(run);
   diagnoseFailures(run);
   compareAlongPath(run);
+  await checkAgreement(run);
   listFindings(run);
   out.skipped = [...run.skipReasons].map(([reason, count]) => ({ reason, count }));
   return out;

@@ -21,7 +21,6 @@ export async function evaluateProgram(
   /** The target's entry to build the input with (docs/suite-format.md); absent: the target's default. */
   entry?: string,
 ): Promise<ValueColumn> {
-  void entry;
   const n = re.length;
   const errors = new Map<number, string>();
   const columns: (ValueColumn | ComplexPair)[] = [];
@@ -40,7 +39,10 @@ export async function evaluateProgram(
     const args = step.args.map((i) => columns[i] as ValueColumn | ComplexPair);
     if (target.evaluateColumns && !signal?.aborted) {
       // In-process libraries answer column-wise: no array per call (bench:harness).
-      const answer = await target.evaluateColumns(step.op, args, n, errors);
+      const answer =
+        entry === undefined
+          ? await target.evaluateColumns(step.op, args, n, errors)
+          : await target.evaluateColumns(step.op, args, n, errors, entry);
       for (const [i, message] of answer.errors) if (!errors.has(i)) errors.set(i, `${step.op}: ${message}`);
       const col: ValueColumn = { re: answer.re, im: answer.im, errors };
       columns.push(col);
@@ -64,7 +66,8 @@ export async function evaluateProgram(
         where.push(i);
       }
       if (calls.length === 0) continue;
-      const answers = await target.evaluate(step.op, calls);
+      const answers =
+        entry === undefined ? await target.evaluate(step.op, calls) : await target.evaluate(step.op, calls, entry);
       for (let k = 0; k < where.length; k++) {
         const i = where[k] as number;
         const a = answers[k];

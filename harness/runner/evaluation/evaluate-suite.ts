@@ -13,6 +13,8 @@ import { errorText } from './error-text';
 import { evaluatePath } from './evaluate-path';
 import type { Expectation } from '../expectations/expectation';
 import { pairStatus } from './pair-status';
+import { prepareCounterparts } from './prepare-counterparts';
+import type { SuiteCounterpart } from './suite-counterpart';
 import { ReferenceCache } from '../reference-cache/reference-cache';
 import { suiteExpectation } from '../expectations/suite-expectation';
 import { subjectProgram, type SubjectProgram } from './subject-program';
@@ -104,6 +106,15 @@ export async function evaluateSuite(
   }
   const unsupported: string[] = [];
   for (const op of program.ops) if (!(await target.supports(op))) unsupported.push(op);
+  let counterparts: SuiteCounterpart[];
+  try {
+    counterparts = await prepareCounterparts(suite, target, cache);
+  } catch (e) {
+    result.errors.push(`the suite's counterparts cannot be evaluated: ${errorText(e)}`);
+    result.status = 'error';
+    result.durationMs = Date.now() - started;
+    return result;
+  }
 
   const paths = selected.map((i) => suite.paths[i] as SuitePath);
   const built = paths.map((path) => {
@@ -156,6 +167,7 @@ export async function evaluateSuite(
       path,
       points,
       unsupported,
+      counterparts,
       maxFindings,
       signal: options.signal,
     });

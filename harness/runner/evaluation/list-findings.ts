@@ -60,7 +60,13 @@ export function listFindings(run: PathRun): void {
       actual: actual.errors.has(i) ? null : wireDouble([actual.re[i] as number, actual.im[i] as number]),
       outcome: outcomes[i] as PointOutcome,
       rule: alt?.rule ?? '',
-      reproducer: reproducer(run.program, run.target, z, run.suite.subject),
+      reproducer: [
+        reproducer(run.program, run.target, z, run.suite.subject),
+        // The other way of each disagreement, so both values can be reproduced side by side.
+        ...run.counterparts
+          .filter((c) => run.labels[i]?.some((l) => l.kind === 'disagreement' && l.with === c.with))
+          .map((c) => reproducer(c.program, run.target, z, c.with)),
+      ].join('\n\n'),
     };
     if (alt?.limits)
       finding.limits = {

@@ -5,6 +5,7 @@ import type { PathPoint } from '../../paths/path-point';
 import type { Expectation } from '../expectations/expectation';
 import type { ReferenceCache } from '../reference-cache/reference-cache';
 import type { SubjectProgram } from './subject-program';
+import type { SuiteCounterpart } from './suite-counterpart';
 
 /** What evaluating one path of a suite against one target needs. */
 export interface PathEvaluation {
@@ -20,6 +21,8 @@ export interface PathEvaluation {
   points: PathPoint[] | Error;
   /** Operations of the subject the target does not have: every point is then skipped. */
   unsupported: string[];
+  /** The suite's counterparts against this target (prepare-counterparts.ts); empty when it has none. */
+  counterparts: SuiteCounterpart[];
   /** Failing points listed in full (all are counted). */
   maxFindings: number;
   signal?: AbortSignal;

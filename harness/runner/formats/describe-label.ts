@@ -1,3 +1,4 @@
+import { formatComplexText } from '../../../shared/format-complex-text';
 import { describeWorstPart } from '../../../shared/describe-worst-part';
 import type { Diagnosis } from '../../../shared/diagnosis';
 
@@ -30,7 +31,7 @@ export function describeLabel(d: Diagnosis): string {
     case 'not-finite':
       return 'not-finite';
     case 'disagreement':
-      return `disagreement with ${d.with}`;
+      return `disagreement with ${d.with}, which gives ${formatComplexText(d.other)}${d.otherMatchesReference ? ', the reference value' : ''}`;
     case 'unexplained':
       return `unexplained, relative error ${num(d.relativeError)}`;
   }

@@ -40,9 +40,20 @@ function pair(r: SuiteTargetResult, maxRows: number): string[] {
       ? `; monodromy ${p.monodromy.pass ? 'ok' : 'FAILS'}: expected ${c(p.monodromy.expected)}, library ${c(p.monodromy.library)}${p.monodromy.note ? ` (${p.monodromy.note})` : ''}`
       : '';
     const skips = p.skipped.map((s) => `; ${s.count} skipped: ${s.reason}`).join('');
-    if (p.counts.fail + p.counts.error === 0 && !mono.includes('FAILS') && !skips) continue;
+    const agree = (p.agreements ?? [])
+      .map(
+        (a) =>
+          `; ${a.compared - a.disagreed} of ${a.compared} agree with ${a.with}` +
+          a.oneSided.map((s) => `, ${s.count} ${s.reason}`).join('') +
+          (a.note ? ` (${a.note})` : ''),
+      )
+      .join('');
+    const oneSided = (p.agreements ?? []).some((a) => a.oneSided.length > 0 || a.note);
+    if (p.counts.fail + p.counts.error === 0 && !mono.includes('FAILS') && !skips && !oneSided) continue;
+    // A list of points has nothing between them: say that no continuity check ran on it.
+    const list = p.kind === 'points' ? ', a list: no jumps or monodromy looked for' : '';
     lines.push(
-      `          path "${p.name}" (${p.kind}, ${p.points} points): ${describeCounts(p.counts, p.byClass, p.byDiagnosis)}${mono}${skips}`,
+      `          path "${p.name}" (${p.kind}, ${p.points} points${list}): ${describeCounts(p.counts, p.byClass, p.byDiagnosis)}${mono}${skips}${agree}`,
     );
   }
   const findings = r.paths.flatMap((p) => p.findings);

@@ -26,6 +26,13 @@ describe('checkSuiteSemantics', () => {
     expect(issue!.rule).toMatch(/gamma/);
   });
 
+  it("names a counterpart's subject outside the whitelist under its own field", () => {
+    const suite = { ...load('sqrt-principal-sz'), counterparts: [{ subject: 'z^(1/2)' }, { subject: 'zeta(z)' }] };
+    const issues = checkSuiteSemantics(suite);
+    expect(issues.map((i) => i.field)).toEqual(['counterparts.1.subject']);
+    expect(issues[0]!.rule).toMatch(/zeta/);
+  });
+
   it('refuses a layout that leaves a branch point of √(z²−1) without a cut', () => {
     // √(z²−1) has branch points ±1 (ν·m = ½ ∉ ℤ): a single ray from +1 leaves −1 uncut.
     const base = load('sqrt-z2-minus-1-finite-cut');
