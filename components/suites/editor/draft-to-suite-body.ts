@@ -107,5 +107,10 @@ export function draftToSuiteBody(d: SuiteDraft): Record<string, unknown> {
       ...(d.tolerances.properties ? { properties: tolerance(d.tolerances.properties) } : {}),
     },
     properties: d.properties.map(propertyBody),
+    // A blank field is left out, so the schema names the rule when both are blank.
+    counterparts: d.counterparts.map((c) => ({
+      ...(c.subject.trim() === '' ? {} : { subject: c.subject }),
+      ...(c.entry.trim() === '' ? {} : { entry: c.entry.trim() }),
+    })),
   };
 }

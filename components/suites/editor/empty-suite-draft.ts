@@ -22,5 +22,6 @@ export function emptySuiteDraft(): SuiteDraft {
     paths: [emptyPathDraft('circle of radius 2')],
     tolerances: { values: { kind: 'ulps', value: '2' }, monodromy: null, properties: null },
     properties: [],
+    counterparts: [],
   };
 }

@@ -41,6 +41,12 @@ export interface PathDraft {
   grid: Record<string, unknown> | null;
 }
 
+/** A counterpart as typed: blank subject or entry means the suite's own subject or the target's default entry. */
+export interface CounterpartDraft {
+  subject: string;
+  entry: string;
+}
+
 /** A tolerance as typed: `value` is the ulps or the relative bound; `either` holds both, ulps in `value` and the relative bound in `relative`. */
 export interface ToleranceDraft {
   kind: 'ulps' | 'relative' | 'either';
@@ -81,4 +87,5 @@ export interface SuiteDraft {
   paths: PathDraft[];
   tolerances: { values: ToleranceDraft; monodromy: ToleranceDraft | null; properties: ToleranceDraft | null };
   properties: PropertyDraft[];
+  counterparts: CounterpartDraft[];
 }

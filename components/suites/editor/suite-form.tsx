@@ -23,6 +23,7 @@ import { FormTextInput } from '../../ui/form-text-input';
 import { KeptDraftNotice } from './kept-draft-notice';
 import { PathEditor } from './path-editor';
 import { PropertyEditor } from './property-editor';
+import { CounterpartEditor } from './counterpart-editor';
 import { RuleLines } from '../../ui/rule-lines';
 import { SmallButton } from '../../ui/small-button';
 import type { SuiteDraft } from './suite-draft';
@@ -408,6 +409,44 @@ export function SuiteForm({ initial, editing, draftKey, onDone }: Props) {
             update(`properties.${draft.properties.length}`, (d) => ({
               ...d,
               properties: [...d.properties, emptyPropertyDraft()],
+            }))
+          }
+        />
+      </TitledPanel>
+
+      <TitledPanel
+        title="Counterparts"
+        lead="Other ways to compute the subject through the same library, which must give the same value at every point: another subject (z^(1/2) beside sqrt(z)), another entry of the target, or both. A point where they differ is a disagreement."
+      >
+        <RuleLines rules={rules('counterparts').map((r) => `Counterparts ${r}`)} />
+        {draft.counterparts.length === 0 ? (
+          <SkText variant="caption" tone="inkFaint">
+            No counterparts.
+          </SkText>
+        ) : null}
+        {draft.counterparts.map((c, i) => (
+          <CounterpartEditor
+            key={i}
+            value={c}
+            index={i}
+            rules={rules}
+            onChange={(next) =>
+              update(`counterparts.${i}`, (d) => ({
+                ...d,
+                counterparts: d.counterparts.map((q, j) => (j === i ? next : q)),
+              }))
+            }
+            onRemove={() =>
+              update('counterparts', (d) => ({ ...d, counterparts: d.counterparts.filter((_, j) => j !== i) }))
+            }
+          />
+        ))}
+        <SmallButton
+          label="+ Add a counterpart"
+          onPress={() =>
+            update(`counterparts.${draft.counterparts.length}`, (d) => ({
+              ...d,
+              counterparts: [...d.counterparts, { subject: '', entry: '' }],
             }))
           }
         />

@@ -73,6 +73,7 @@ export function suiteToDraft(s: Suite): SuiteDraft {
       if (p.region.kind === 'box') return { ...d, min: p.region.min, max: p.region.max };
       return { ...d, distance: p.region.distance };
     }),
+    counterparts: s.counterparts.map((c) => ({ subject: c.subject ?? '', entry: c.entry ?? '' })),
   };
   if (s.branch.kind === 'regular') {
     const b = s.branch;

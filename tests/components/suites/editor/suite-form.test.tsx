@@ -255,6 +255,56 @@ describe('SuiteForm', () => {
     expect(body.tolerances.values).toEqual({ ulps: 4, relative: 1e-15 });
   });
 
+  it('writes a list of points, draws it in the picture, and saves it with a counterpart', async () => {
+    const calls = mockFetch(201, savedVersion);
+    const onDone = jest.fn();
+    renderWithClient(
+      <SuiteForm
+        initial={{ ...emptySuiteDraft(), id: 'sqrt-against-half-power', title: 'sqrt and z^(1/2)', subject: 'sqrt(z)' }}
+        editing={null}
+        draftKey={DRAFT_KEY}
+        onDone={onDone}
+      />,
+    );
+    await toolsLoaded();
+    await act(() => fireEvent.click(screen.getByRole('radio', { name: 'Path 1 kind: points' })));
+    expect(screen.getByText(/A list is not a path: jumps and monodromy are not checked on it/)).toBeTruthy();
+    type('Path 1 point 1, real part', '-4');
+    type('Path 1 point 1, imaginary part', '-0');
+    type('Path 1 point 2, real part', '-4');
+    type('Path 1 point 2, imaginary part', '0');
+    await press('Add a path 1 point');
+    // Three points, drawn as points (the same suitePicture the runner's path builder feeds).
+    await waitFor(() => expect(screen.getByTestId('suite-preview-summary').textContent).toMatch(/1 path \(3 points\)/));
+    type('Path 1 point 3, real part', 'minus one');
+    await press('Save draft');
+    await waitFor(() =>
+      expect(within(fieldOf('Path 1 point 3, real part')).getByText(/re must be a decimal, a hex float/)).toBeTruthy(),
+    );
+    expect(calls).toHaveLength(0);
+    type('Path 1 point 3, real part', '-1');
+
+    await press('+ Add a counterpart');
+    await press('Save draft');
+    await waitFor(() =>
+      expect(within(fieldOf('Counterpart 1 subject')).getByText(/give a subject, an entry or both/)).toBeTruthy(),
+    );
+    type('Counterpart 1 subject', 'z^(1/2)');
+    await press('Save draft');
+    await waitFor(() => expect(onDone).toHaveBeenCalled());
+    const body = JSON.parse(String(calls[0]!.init.body));
+    expect(body.paths[0]).toEqual({
+      kind: 'points',
+      name: 'circle of radius 2',
+      points: [
+        { re: '-4', im: '-0' },
+        { re: '-4', im: '0' },
+        { re: '-1', im: '0' },
+      ],
+    });
+    expect(body.counterparts).toEqual([{ subject: 'z^(1/2)' }]);
+  });
+
   it('keeps unsaved typing on this device and offers it back when the form opens again', async () => {
     mockFetch(201, savedVersion);
     const first = renderWithClient(

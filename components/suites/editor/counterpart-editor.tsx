@@ -1,0 +1,66 @@
+import { StyleSheet, View } from 'react-native';
+import { theme } from '../../../constants/theme';
+import { SkText } from '../../ui/sk-text';
+import type { FieldRules } from './field-rules';
+import { FormTextInput } from '../../ui/form-text-input';
+import { RuleLines } from '../../ui/rule-lines';
+import { SmallButton } from '../../ui/small-button';
+import type { CounterpartDraft } from './suite-draft';
+
+/** One counterpart: another subject, another entry of the target, or both, that must agree with the suite's subject. */
+export function CounterpartEditor({
+  value,
+  index,
+  onChange,
+  onRemove,
+  rules,
+}: {
+  value: CounterpartDraft;
+  index: number;
+  onChange: (c: CounterpartDraft) => void;
+  onRemove: () => void;
+  rules: FieldRules;
+}) {
+  const f = `counterparts.${index}`;
+  const n = `Counterpart ${index + 1}`;
+  return (
+    <View style={styles.box} accessibilityLabel={n}>
+      <View style={styles.head}>
+        <SkText variant="label">{n}</SkText>
+        <SmallButton
+          label="Remove counterpart"
+          accessibilityLabel={`Remove counterpart ${index + 1}`}
+          onPress={onRemove}
+          danger
+        />
+      </View>
+      <RuleLines rules={rules(f).map((r) => `${n} ${r}`)} />
+      <View style={styles.row}>
+        <FormTextInput
+          label={`${n} subject`}
+          visibleLabel="Subject"
+          hint="blank for the suite's own subject, e.g. z^(1/2) beside sqrt(z)"
+          value={value.subject}
+          onChangeText={(subject) => onChange({ ...value, subject })}
+          rules={rules(`${f}.subject`)}
+          mono
+        />
+        <FormTextInput
+          label={`${n} entry`}
+          visibleLabel="Entry"
+          hint="blank for the target's default way of building numbers"
+          value={value.entry}
+          onChangeText={(entry) => onChange({ ...value, entry })}
+          rules={rules(`${f}.entry`)}
+          mono
+        />
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  box: { gap: theme.space(3), borderTopWidth: 1, borderTopColor: theme.color.rule, paddingTop: theme.space(3) },
+  head: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between' },
+  row: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
+});
