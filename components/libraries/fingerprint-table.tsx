@@ -5,6 +5,7 @@ import type { ConventionFingerprint } from '../../shared/convention-fingerprint'
 import { ColumnHead } from '../ui/column-head';
 import { SkText } from '../ui/sk-text';
 import { ConventionLabel } from './convention-label';
+import { FingerprintDisagreementDetail } from './fingerprint-disagreement-detail';
 import { CONVENTION_STYLES, type Behaviour } from './convention-styles';
 import { formatComplexText } from '../../shared/format-complex-text';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
@@ -111,7 +112,9 @@ function CutRow({
   onOpenCutMap?: (fn: string) => void;
 }) {
   const [open, setOpen] = useState(false);
+  const [shown, setShown] = useState<string | null>(null);
   const name = `${entry.function} on ${entry.cut}`;
+  const disagreement = entry.disagreements?.find((d) => d.with === shown) ?? null;
   return (
     <View style={wide ? styles.rowBox : styles.card} testID={`fingerprint-${entry.function}-${entry.cut}`}>
       <View style={wide ? styles.row : styles.cardBody}>
@@ -136,6 +139,26 @@ function CutRow({
               {entry.disagreesWith.length ? `; disagrees with ${entry.disagreesWith.join(', ')} on the same cut` : ''}
             </SkText>
           ) : null}
+          {entry.disagreements?.length ? (
+            // Each function it disagrees with leads to a point where the two part ways (older fingerprints carry none).
+            <View style={styles.actions}>
+              {entry.disagreements.map((d) => (
+                <Pressable
+                  key={d.with}
+                  accessibilityRole="link"
+                  accessibilityLabel={`Where ${entry.function} and ${d.with} part ways`}
+                  aria-expanded={shown === d.with}
+                  onPress={() => setShown(shown === d.with ? null : d.with)}
+                  style={styles.linkButton}
+                >
+                  <SkText variant="smallLabel" tone="accent">
+                    {shown === d.with ? '↑' : '↓'} Where it parts with {d.with}
+                  </SkText>
+                </Pressable>
+              ))}
+            </View>
+          ) : null}
+          {disagreement ? <FingerprintDisagreementDetail cut={entry.cut} d={disagreement} /> : null}
         </View>
         <View style={[wide ? styles.evidenceCol : null, styles.evidenceCell]}>
           <SkText variant="caption" style={styles.small}>

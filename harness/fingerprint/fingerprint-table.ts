@@ -1,4 +1,5 @@
 import type { ConventionFingerprint } from '../../shared/convention-fingerprint';
+import { formatComplexText } from '../../shared/format-complex-text';
 
 /**
  * A fingerprint as a plain-text table: one row per (function, cut) with the behaviour, the
@@ -28,6 +29,19 @@ export function fingerprintTable(fp: ConventionFingerprint): string {
     line(header),
     line(widths.map((w) => '-'.repeat(w))),
     ...rows.map(line),
+    // Where each pair sharing a cut parts ways, so the "disagrees with" column can be checked at one point.
+    ...fp.cuts.flatMap((c) =>
+      (c.disagreements ?? []).map(
+        (d) =>
+          `${c.function} and ${d.with} on ${c.cut}: ` +
+          d.sides
+            .map(
+              (s) =>
+                `at ${formatComplexText(s.at, { ascii: true })} ${s.function} gives ${formatComplexText(s.value, { ascii: true })} (${s.follows ?? 'neither convention'})`,
+            )
+            .join(', '),
+      ),
+    ),
     ...(fp.missing.length > 0
       ? ['', `not fingerprinted (the target has no such operation): ${fp.missing.join(', ')}`]
       : []),

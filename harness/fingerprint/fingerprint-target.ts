@@ -1,4 +1,8 @@
-import type { ConventionFingerprint } from '../../shared/convention-fingerprint';
+import type {
+  ConventionFingerprint,
+  FingerprintDisagreement,
+  FingerprintSide,
+} from '../../shared/convention-fingerprint';
 import { formatComplexText } from '../../shared/format-complex-text';
 import type { ComplexPair } from '../adapters/complex-pair';
 import type { Target } from '../adapters/target';
@@ -63,6 +67,7 @@ export async function fingerprintTarget(
 ): Promise<ConventionFingerprint> {
   const missing: string[] = [];
   const cuts: CutEntry[] = [];
+  const functionOf = new Map<CutEntry, FingerprintFunction>();
   let points = 0;
   for (const fn of functions) {
     if (!(await target.supports(fn.op))) {
@@ -125,14 +130,30 @@ export async function fingerprintTarget(
       const verdicts = new Set(probes.map((p) => p.verdict));
       const alone: CutEntry['alone'] =
         verdicts.size === 1 ? [...verdicts][0]! : verdicts.size === 0 ? 'neither' : 'inconsistent';
-      cuts.push({ function: fn.label, cut: cut.label, behaviour: alone, alone, disagreesWith: [], probes });
+      const entry: CutEntry = {
+        function: fn.label,
+        cut: cut.label,
+        behaviour: alone,
+        alone,
+        disagreesWith: [],
+        probes,
+      };
+      functionOf.set(entry, fn);
+      cuts.push(entry);
     }
   }
   for (const entry of cuts) {
     if (entry.alone !== 'signed-zero' && entry.alone !== 'counter-clockwise') continue;
     const other = entry.alone === 'signed-zero' ? 'counter-clockwise' : 'signed-zero';
-    entry.disagreesWith = cuts.filter((e) => e.cut === entry.cut && e.alone === other).map((e) => e.function);
-    if (entry.disagreesWith.length > 0) entry.behaviour = 'inconsistent';
+    const others = cuts.filter((e) => e.cut === entry.cut && e.alone === other);
+    entry.disagreesWith = others.map((e) => e.function);
+    if (others.length > 0) {
+      entry.behaviour = 'inconsistent';
+      entry.disagreements = others.flatMap((o) => {
+        const d = disagreementPoint(entry, o, functionOf);
+        return d ? [d] : [];
+      });
+    }
   }
   return {
     target: target.name,
@@ -144,4 +165,47 @@ export async function fingerprintTarget(
     missing,
     cuts,
   };
+}
+
+/**
+ * Where `entry` and `other` (same cut, opposite conventions) part ways: the first place both voted
+ * their own convention at; for each function, its value there at the zero sign where its two
+ * conventions give different values (the side counter-clockwise continuity leaves open, which is
+ * not the same side for every function on a cut: log's is below (−∞, 0], asech's above), with
+ * both of its references.
+ */
+function disagreementPoint(
+  entry: CutEntry,
+  other: CutEntry,
+  functionOf: ReadonlyMap<CutEntry, FingerprintFunction>,
+): FingerprintDisagreement | null {
+  const fn = functionOf.get(entry);
+  const otherFn = functionOf.get(other);
+  if (!fn || !otherFn) return null;
+  const place = entry.probes.find(
+    (p) =>
+      p.verdict === entry.alone &&
+      other.probes.some((q) => q.verdict === other.alone && q.at.re === p.at.re && q.at.im === p.at.im),
+  );
+  if (!place) return null;
+  const otherPlace = other.probes.find((q) => q.at.re === place.at.re && q.at.im === place.at.im) as Probe;
+  const plus: ComplexPair = [Number(place.at.re), Number(place.at.im)];
+  // The across part is the zero one (probes are written with +0 there); its −0 twin is the other side.
+  const minus: ComplexPair = plus[1] === 0 ? [plus[0], -0] : [-0, plus[1]];
+  const side = (f: FingerprintFunction, probe: Probe): FingerprintSide => {
+    const ref = (z: ComplexPair, c: 'signed-zero' | 'counter-clockwise') => referenceValue(f.op, [z, ...f.extra], c);
+    const atPlus = !same(ref(plus, 'signed-zero'), ref(plus, 'counter-clockwise'));
+    const z = atPlus ? plus : minus;
+    const value = atPlus ? probe.plusZero : probe.minusZero;
+    const [sz, ccw] = [ref(z, 'signed-zero'), ref(z, 'counter-clockwise')];
+    const v: ComplexPair | null = value ? [Number(value.re), Number(value.im)] : null;
+    return {
+      function: f.label,
+      at: wire(z),
+      value,
+      reference: { 'signed-zero': wire(sz), 'counter-clockwise': wire(ccw) },
+      follows: same(v, sz) ? 'signed-zero' : same(v, ccw) ? 'counter-clockwise' : null,
+    };
+  };
+  return { with: other.function, at: place.at, sides: [side(fn, place), side(otherFn, otherPlace)] };
 }

@@ -17,6 +17,35 @@ const FINGERPRINT: ConventionFingerprint = {
       behaviour: 'inconsistent',
       alone: 'counter-clockwise',
       disagreesWith: ['log'],
+      // As the harness carries it (fingerprint-target.ts): ISO/IEC 9899:2011 G.6.4.2 and G.6.3.2 values at −0.5 − 0i.
+      disagreements: [
+        {
+          with: 'log',
+          at: r('-0.5', '0'),
+          sides: [
+            {
+              function: 'sqrt',
+              at: r('-0.5', '-0'),
+              value: r('0', '0.7071067811865476'),
+              reference: {
+                'signed-zero': r('0', '-0.7071067811865476'),
+                'counter-clockwise': r('0', '0.7071067811865476'),
+              },
+              follows: 'counter-clockwise',
+            },
+            {
+              function: 'log',
+              at: r('-0.5', '-0'),
+              value: r('-0.6931471805599453', '-3.141592653589793'),
+              reference: {
+                'signed-zero': r('-0.6931471805599453', '-3.141592653589793'),
+                'counter-clockwise': r('-0.6931471805599453', '3.141592653589793'),
+              },
+              follows: 'signed-zero',
+            },
+          ],
+        },
+      ],
       probes: [
         {
           at: r('-0.5', '0'),
@@ -125,6 +154,24 @@ describe('FingerprintTable', () => {
     expect(scope).toContain('(cbrt, nthroot(z, 3))');
     expect(scope).toContain('not a certification');
     expect(screen.getByTestId('fingerprint-summary').textContent).toContain('4 function–cut pairs of 4 functions');
+  });
+
+  it('leads from "disagrees with" to a point where the two functions part ways, with both values and both references', () => {
+    render(<FingerprintTable fingerprint={FINGERPRINT} />);
+    expect(screen.queryByTestId('fingerprint-disagreement-sqrt-log')).toBeNull();
+    const link = screen.getByRole('link', { name: 'Where sqrt and log part ways' });
+    fireEvent.click(link);
+    const detail = screen.getByTestId('fingerprint-disagreement-sqrt-log').textContent!;
+    expect(detail).toContain('Near z = −0.5 ± 0i on (-inf, 0], sqrt and log follow different conventions');
+    expect(detail).toContain('sqrt(−0.5 − 0i) gives 0 + 0.7071067811865476i: ↺ the counter-clockwise value');
+    expect(detail).toContain('log(−0.5 − 0i) gives −0.6931471805599453 − 3.141592653589793i: ± the signed zero value');
+    expect(detail).toContain(
+      'reference: signed zero 0 − 0.7071067811865476i, counter-clockwise 0 + 0.7071067811865476i',
+    );
+    // log's row has no detail to lead to (a fingerprint made before carries none): its words stay plain.
+    expect(screen.queryByRole('link', { name: 'Where log and sqrt part ways' })).toBeNull();
+    fireEvent.click(link);
+    expect(screen.queryByTestId('fingerprint-disagreement-sqrt-log')).toBeNull();
   });
 
   it("opens a function's cut map", () => {

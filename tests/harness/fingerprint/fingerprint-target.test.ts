@@ -3,6 +3,7 @@ import type { ComplexPair } from '../../../harness/adapters/complex-pair';
 import { discoverTargets } from '../../../harness/adapters/discover-targets';
 import { FINGERPRINT_FUNCTIONS } from '../../../harness/fingerprint/fingerprint-functions';
 import { fingerprintTarget } from '../../../harness/fingerprint/fingerprint-target';
+import { referenceCall } from '../support/reference-call';
 import { referenceTarget } from '../support/reference-target';
 
 const only = (...labels: string[]) => FINGERPRINT_FUNCTIONS.filter((f) => labels.includes(f.label));
@@ -64,6 +65,52 @@ describe('fingerprintTarget', () => {
       ['pow(z, 1/2)', 'inconsistent', 'signed-zero', ['sqrt']],
       ['log', 'inconsistent', 'signed-zero', ['sqrt']],
     ]);
+  });
+
+  it('carries, for each function it disagrees with, a point where the two part ways with both values and both references', async () => {
+    // ISO/IEC 9899:2011 G.6.4.2: csqrt(−0.5 − 0i) = +0 − i√0.5; Kahan's counter-clockwise rule closes
+    // (−∞, 0] from above, so there the value is +i√0.5 whatever the zero's sign. G.6.3.2:
+    // clog(−0.5 − 0i) = ln 0.5 − iπ, and the counter-clockwise log there is ln 0.5 + iπ.
+    const mutant = referenceTarget('signed-zero', { sqrt: ignoringZeroSigns('sqrt') });
+    const fp = await fingerprintTarget(mutant, only('sqrt', 'log'));
+    const r = Math.sqrt(0.5).toString();
+    const ln = Math.log(0.5).toString();
+    const pi = Math.PI.toString();
+    expect(fp.cuts[0]!.disagreements).toEqual([
+      {
+        with: 'log',
+        at: { re: '-0.5', im: '0' },
+        sides: [
+          {
+            function: 'sqrt',
+            at: { re: '-0.5', im: '-0' },
+            value: { re: '0', im: r },
+            reference: { 'signed-zero': { re: '0', im: `-${r}` }, 'counter-clockwise': { re: '0', im: r } },
+            follows: 'counter-clockwise',
+          },
+          {
+            function: 'log',
+            at: { re: '-0.5', im: '-0' },
+            value: { re: ln, im: `-${pi}` },
+            reference: { 'signed-zero': { re: ln, im: `-${pi}` }, 'counter-clockwise': { re: ln, im: pi } },
+            follows: 'signed-zero',
+          },
+        ],
+      },
+    ]);
+    expect(fp.cuts[1]!.disagreements?.[0]?.with).toBe('sqrt');
+  });
+
+  it('shows each function at the zero sign where its own conventions differ, which is not the same side for every function on a cut', async () => {
+    // Kahan's rule closes (−∞, 0] from above for log (clog(−0.5 − 0i) = ln 0.5 − iπ is where Annex G
+    // departs from it) and from below for asech, so each side is shown at its own zero sign.
+    const mutant = referenceTarget('signed-zero', {
+      asech: (args) => referenceCall('asech', args, 'counter-clockwise'),
+    });
+    const fp = await fingerprintTarget(mutant, only('log', 'asech'));
+    const [mine, theirs] = fp.cuts.find((c) => c.function === 'asech')!.disagreements![0]!.sides;
+    expect([mine.function, mine.at, mine.follows]).toEqual(['asech', { re: '-0.5', im: '0' }, 'counter-clockwise']);
+    expect([theirs.function, theirs.at, theirs.follows]).toEqual(['log', { re: '-0.5', im: '-0' }, 'signed-zero']);
   });
 
   it('calls a log that reads the zero sign backwards neither, saying the sides are swapped', async () => {

@@ -48,6 +48,18 @@ describe('GET /api/targets/:name/fingerprint', () => {
     const [sqrt, log] = fp.cuts;
     expect(sqrt).toMatchObject({ alone: 'counter-clockwise', behaviour: 'inconsistent', disagreesWith: ['log'] });
     expect(log).toMatchObject({ alone: 'signed-zero', behaviour: 'inconsistent', disagreesWith: ['sqrt'] });
+    // The app's "disagrees with" line leads to a point where the two part ways: at −0.5 − 0i complex.js's
+    // sqrt gives +0.707…i (counter-clockwise) and its log ln 0.5 − iπ (ISO/IEC 9899:2011 G.6.3.2).
+    expect(sqrt!.disagreements).toEqual([
+      expect.objectContaining({
+        with: 'log',
+        at: { re: '-0.5', im: '0' },
+        sides: [
+          expect.objectContaining({ function: 'sqrt', at: { re: '-0.5', im: '-0' }, follows: 'counter-clockwise' }),
+          expect.objectContaining({ function: 'log', follows: 'signed-zero' }),
+        ],
+      }),
+    ]);
   });
 
   it('reaches a target whose name has a slash when the name is percent-encoded', async () => {
