@@ -113,4 +113,15 @@ describe('PathPlots', () => {
     expect(screen.queryByText('reference jump')).toBeNull();
     expect(screen.getAllByText('point number along the path')).toHaveLength(2);
   });
+
+  it('says a list of points has nothing between its points, so no jumps are looked for on it', () => {
+    const view = misplacedJump();
+    view.axis = 'index';
+    view.path = { name: 'both zeros at -4', kind: 'points', points: 17 };
+    render(<PathPlots view={view} />);
+    expect(screen.getByTestId('jump-words').textContent).toBe(
+      "These points are not a continuous path (a list of points has nothing between them), so the argument is compared point by point: the library's value has another argument at 4 points (5, 6, 7, 8).",
+    );
+    expect(screen.queryByText('reference jump')).toBeNull();
+  });
 });
