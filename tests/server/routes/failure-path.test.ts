@@ -44,6 +44,8 @@ describe('the path of a failing case', () => {
     await approvedSuite(t.db.dataSource, 'path-finite-cut', 'sqrt-z2-minus-1-finite-cut');
     runIds.sqrt = await runOf('path-sqrt');
     runIds.finite = await runOf('path-finite-cut');
+    await approvedSuite(t.db.dataSource, 'path-agree', 'sqrt-agrees-with-half-power');
+    runIds.agree = await runOf('path-agree');
   }, 120_000);
   afterAll(() => t.stop());
 
@@ -84,6 +86,19 @@ describe('the path of a failing case', () => {
       },
     ]);
     expect(view.branchPoints).toEqual([{ re: 0, im: 0 }]);
+  });
+
+  it('draws a list of points point by point, numbered, with no jumps looked for', async () => {
+    const failures = (await kwame.get(`/api/failures?run=${runIds.agree}&limit=500`)).body.failures;
+    const onList = failures.find((f: { pathName: string }) => f.pathName === 'on the cut with either zero');
+    expect(onList).toBeDefined();
+    const view = (await kwame.get(`/api/failures/${onList.id}/path`)).body as FailurePathView;
+    expect(view.path).toEqual({ name: 'on the cut with either zero', kind: 'points', points: 8 });
+    expect(view.axis).toBe('index');
+    // Exactly the eight points written, once each, in order: −4 + 0i and −4 − 0i are two points, not a
+    // segment (the view's numbers are JSON numbers, which carry no zero sign).
+    expect(view.points.map((p) => p.z.re)).toEqual([-4, -4, -1, -1, -0.25, -1e300, 4, 4]);
+    expect(view.points.map((p) => p.index)).toEqual([0, 1, 2, 3, 4, 5, 6, 7]);
   });
 
   it('puts the library value of a zero-sign failure on the other side of the cut from the expected one', async () => {
