@@ -1,10 +1,8 @@
 import { StyleSheet, View } from 'react-native';
 import { theme } from '../../../constants/theme';
-import { SkText } from '../../ui/sk-text';
 import type { FieldRules } from './field-rules';
 import { FormTextInput } from '../../ui/form-text-input';
-import { RuleLines } from '../../ui/rule-lines';
-import { SmallButton } from '../../ui/small-button';
+import { EditorItemHead } from './editor-item-head';
 import type { CounterpartDraft } from './suite-draft';
 
 /** One counterpart: another subject, another entry of the target, or both, that must agree with the suite's subject. */
@@ -25,16 +23,13 @@ export function CounterpartEditor({
   const n = `Counterpart ${index + 1}`;
   return (
     <View style={styles.box} accessibilityLabel={n}>
-      <View style={styles.head}>
-        <SkText variant="label">{n}</SkText>
-        <SmallButton
-          label="Remove counterpart"
-          accessibilityLabel={`Remove counterpart ${index + 1}`}
-          onPress={onRemove}
-          danger
-        />
-      </View>
-      <RuleLines rules={rules(f).map((r) => `${n} ${r}`)} />
+      <EditorItemHead
+        title={n}
+        removeText="Remove counterpart"
+        removeLabel={`Remove counterpart ${index + 1}`}
+        onRemove={onRemove}
+        rules={rules(f)}
+      />
       <View style={styles.row}>
         <FormTextInput
           label={`${n} subject`}
@@ -61,6 +56,5 @@ export function CounterpartEditor({
 
 const styles = StyleSheet.create({
   box: { gap: theme.space(3), borderTopWidth: 1, borderTopColor: theme.color.rule, paddingTop: theme.space(3) },
-  head: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between' },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
 });

@@ -3,12 +3,12 @@ import { theme } from '../../../constants/theme';
 import { ChipGroup } from '../../ui/chip-group';
 import { SkText } from '../../ui/sk-text';
 import { ComplexInput } from './complex-input';
+import { EditorItemHead } from './editor-item-head';
 import { complexRules } from './complex-rules';
 import type { FieldRules } from './field-rules';
 import { FormTextInput } from '../../ui/form-text-input';
 import { PointListEditor } from './point-list-editor';
 import { RuleLines } from '../../ui/rule-lines';
-import { SmallButton } from '../../ui/small-button';
 import type { PathDraft } from './suite-draft';
 
 const KINDS = [
@@ -38,11 +38,13 @@ export function PathEditor({
   const set = (patch: Partial<PathDraft>) => onChange({ ...path, ...patch });
   return (
     <View style={styles.path} accessibilityLabel={n}>
-      <View style={styles.head}>
-        <SkText variant="label">{n}</SkText>
-        <SmallButton label="Remove path" accessibilityLabel={`Remove path ${index + 1}`} onPress={onRemove} danger />
-      </View>
-      <RuleLines rules={rules(f).map((r) => `${n} ${r}`)} />
+      <EditorItemHead
+        title={n}
+        removeText="Remove path"
+        removeLabel={`Remove path ${index + 1}`}
+        onRemove={onRemove}
+        rules={rules(f)}
+      />
       <FormTextInput
         label={`${n} name`}
         visibleLabel="Name"
@@ -227,6 +229,5 @@ export function PathEditor({
 
 const styles = StyleSheet.create({
   path: { gap: theme.space(3), borderTopWidth: 1, borderTopColor: theme.color.rule, paddingTop: theme.space(3) },
-  head: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between' },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
 });

@@ -2,13 +2,12 @@ import { StyleSheet, View } from 'react-native';
 import { theme } from '../../../constants/theme';
 import { PROPERTY_LAWS } from '../../../shared/schemas/property-check-schema';
 import { ChipGroup } from '../../ui/chip-group';
-import { SkText } from '../../ui/sk-text';
 import { ComplexInput } from './complex-input';
+import { EditorItemHead } from './editor-item-head';
 import { complexRules } from './complex-rules';
 import type { FieldRules } from './field-rules';
 import { FormTextInput } from '../../ui/form-text-input';
 import { RuleLines } from '../../ui/rule-lines';
-import { SmallButton } from '../../ui/small-button';
 import type { PropertyDraft } from './suite-draft';
 
 /** One property check: a law, the region its random points come from, runs and a pinned seed. */
@@ -30,16 +29,13 @@ export function PropertyEditor({
   const set = (patch: Partial<PropertyDraft>) => onChange({ ...value, ...patch });
   return (
     <View style={styles.box} accessibilityLabel={n}>
-      <View style={styles.head}>
-        <SkText variant="label">{n}</SkText>
-        <SmallButton
-          label="Remove check"
-          accessibilityLabel={`Remove property ${index + 1}`}
-          onPress={onRemove}
-          danger
-        />
-      </View>
-      <RuleLines rules={rules(f).map((r) => `${n} ${r}`)} />
+      <EditorItemHead
+        title={n}
+        removeText="Remove check"
+        removeLabel={`Remove property ${index + 1}`}
+        onRemove={onRemove}
+        rules={rules(f)}
+      />
       <ChipGroup
         label={`${n} law`}
         options={PROPERTY_LAWS.map((law) => ({ value: law, text: law }))}
@@ -137,6 +133,5 @@ export function PropertyEditor({
 
 const styles = StyleSheet.create({
   box: { gap: theme.space(3), borderTopWidth: 1, borderTopColor: theme.color.rule, paddingTop: theme.space(3) },
-  head: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between' },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
 });

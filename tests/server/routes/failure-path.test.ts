@@ -97,7 +97,7 @@ describe('the path of a failing case', () => {
     expect(view.axis).toBe('index');
     // Exactly the eight points written, once each, in order: −4 + 0i and −4 − 0i are two points, not a
     // segment (the view's numbers are JSON numbers, which carry no zero sign).
-    expect(view.points.map((p) => p.z.re)).toEqual([-4, -4, -1, -1, -0.25, -1e300, 4, 4]);
+    expect(view.points.map((p) => p.z?.re)).toEqual([-4, -4, -1, -1, -0.25, -1e300, 4, 4]);
     expect(view.points.map((p) => p.index)).toEqual([0, 1, 2, 3, 4, 5, 6, 7]);
   });
 
