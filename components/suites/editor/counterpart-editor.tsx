@@ -1,35 +1,22 @@
 import { StyleSheet, View } from 'react-native';
 import { theme } from '../../../constants/theme';
-import type { FieldRules } from './field-rules';
+import type { ItemEditorProps } from './item-editor-props';
 import { FormTextInput } from '../../ui/form-text-input';
-import { EditorItemHead } from './editor-item-head';
+import { EditorItem } from './editor-item';
 import type { CounterpartDraft } from './suite-draft';
 
 /** One counterpart: another subject, another entry of the target, or both, that must agree with the suite's subject. */
-export function CounterpartEditor({
-  value,
-  index,
-  onChange,
-  onRemove,
-  rules,
-}: {
-  value: CounterpartDraft;
-  index: number;
-  onChange: (c: CounterpartDraft) => void;
-  onRemove: () => void;
-  rules: FieldRules;
-}) {
+export function CounterpartEditor({ value, index, onChange, onRemove, rules }: ItemEditorProps<CounterpartDraft>) {
   const f = `counterparts.${index}`;
   const n = `Counterpart ${index + 1}`;
   return (
-    <View style={styles.box} accessibilityLabel={n}>
-      <EditorItemHead
-        title={n}
-        removeText="Remove counterpart"
-        removeLabel={`Remove counterpart ${index + 1}`}
-        onRemove={onRemove}
-        rules={rules(f)}
-      />
+    <EditorItem
+      title={n}
+      removeText="Remove counterpart"
+      removeLabel={`Remove counterpart ${index + 1}`}
+      onRemove={onRemove}
+      rules={rules(f)}
+    >
       <View style={styles.row}>
         <FormTextInput
           label={`${n} subject`}
@@ -50,11 +37,10 @@ export function CounterpartEditor({
           mono
         />
       </View>
-    </View>
+    </EditorItem>
   );
 }
 
 const styles = StyleSheet.create({
-  box: { gap: theme.space(3), borderTopWidth: 1, borderTopColor: theme.color.rule, paddingTop: theme.space(3) },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
 });

@@ -3,7 +3,7 @@ import { theme } from '../../../constants/theme';
 import { ChipGroup } from '../../ui/chip-group';
 import { SkText } from '../../ui/sk-text';
 import { ComplexInput } from './complex-input';
-import { EditorItemHead } from './editor-item-head';
+import { EditorItem } from './editor-item';
 import { complexRules } from './complex-rules';
 import type { FieldRules } from './field-rules';
 import { FormTextInput } from '../../ui/form-text-input';
@@ -37,14 +37,13 @@ export function PathEditor({
   const n = `Path ${index + 1}`;
   const set = (patch: Partial<PathDraft>) => onChange({ ...path, ...patch });
   return (
-    <View style={styles.path} accessibilityLabel={n}>
-      <EditorItemHead
-        title={n}
-        removeText="Remove path"
-        removeLabel={`Remove path ${index + 1}`}
-        onRemove={onRemove}
-        rules={rules(f)}
-      />
+    <EditorItem
+      title={n}
+      removeText="Remove path"
+      removeLabel={`Remove path ${index + 1}`}
+      onRemove={onRemove}
+      rules={rules(f)}
+    >
       <FormTextInput
         label={`${n} name`}
         visibleLabel="Name"
@@ -223,11 +222,10 @@ export function PathEditor({
           )}
         </>
       ) : null}
-    </View>
+    </EditorItem>
   );
 }
 
 const styles = StyleSheet.create({
-  path: { gap: theme.space(3), borderTopWidth: 1, borderTopColor: theme.color.rule, paddingTop: theme.space(3) },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
 });

@@ -3,39 +3,26 @@ import { theme } from '../../../constants/theme';
 import { PROPERTY_LAWS } from '../../../shared/schemas/property-check-schema';
 import { ChipGroup } from '../../ui/chip-group';
 import { ComplexInput } from './complex-input';
-import { EditorItemHead } from './editor-item-head';
+import { EditorItem } from './editor-item';
 import { complexRules } from './complex-rules';
-import type { FieldRules } from './field-rules';
+import type { ItemEditorProps } from './item-editor-props';
 import { FormTextInput } from '../../ui/form-text-input';
 import { RuleLines } from '../../ui/rule-lines';
 import type { PropertyDraft } from './suite-draft';
 
 /** One property check: a law, the region its random points come from, runs and a pinned seed. */
-export function PropertyEditor({
-  value,
-  index,
-  onChange,
-  onRemove,
-  rules,
-}: {
-  value: PropertyDraft;
-  index: number;
-  onChange: (p: PropertyDraft) => void;
-  onRemove: () => void;
-  rules: FieldRules;
-}) {
+export function PropertyEditor({ value, index, onChange, onRemove, rules }: ItemEditorProps<PropertyDraft>) {
   const f = `properties.${index}`;
   const n = `Property ${index + 1}`;
   const set = (patch: Partial<PropertyDraft>) => onChange({ ...value, ...patch });
   return (
-    <View style={styles.box} accessibilityLabel={n}>
-      <EditorItemHead
-        title={n}
-        removeText="Remove check"
-        removeLabel={`Remove property ${index + 1}`}
-        onRemove={onRemove}
-        rules={rules(f)}
-      />
+    <EditorItem
+      title={n}
+      removeText="Remove check"
+      removeLabel={`Remove property ${index + 1}`}
+      onRemove={onRemove}
+      rules={rules(f)}
+    >
       <ChipGroup
         label={`${n} law`}
         options={PROPERTY_LAWS.map((law) => ({ value: law, text: law }))}
@@ -127,11 +114,10 @@ export function PropertyEditor({
           mono
         />
       </View>
-    </View>
+    </EditorItem>
   );
 }
 
 const styles = StyleSheet.create({
-  box: { gap: theme.space(3), borderTopWidth: 1, borderTopColor: theme.color.rule, paddingTop: theme.space(3) },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(3) },
 });
