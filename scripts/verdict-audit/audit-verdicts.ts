@@ -1,6 +1,7 @@
 import { readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { suiteSchema, type Suite } from '../../shared/schemas/suite-schema';
+import { outcomeLabels } from '../../shared/outcome-labels';
 import {
   buildPath,
   discoverTargets,
@@ -102,6 +103,8 @@ async function main(): Promise<void> {
         if (expected.skipped.has(i) || actual.errors.has(i)) continue;
         const finding = failing.get(i);
         if (finding && finding.outcome.kind !== 'fail') continue;
+        // A point failed only by disagreeing with a counterpart is a verdict on the other value, not this one.
+        if (finding && outcomeLabels(finding.outcome).every((d) => d.kind === 'disagreement')) continue;
         const point: AuditPoint = {
           ...call,
           suite: suite.id,
@@ -114,10 +117,7 @@ async function main(): Promise<void> {
           z: [formatHexDouble(inputs.re[i] as number), formatHexDouble(inputs.im[i] as number)],
           actual: [formatHexDouble(actual.re[i] as number), formatHexDouble(actual.im[i] as number)],
           harness: finding ? 'fail' : 'pass',
-          labels:
-            finding && finding.outcome.kind === 'fail'
-              ? (finding.outcome.labels ?? [finding.outcome.diagnosis]).map((d) => d.kind)
-              : [],
+          labels: finding ? outcomeLabels(finding.outcome).map((d) => d.kind) : [],
         };
         (finding ? fails : passes).push(point);
       }
