@@ -18,7 +18,8 @@ function flatten(value: unknown, prefix: string, out: Map<string, string>): void
 
 /**
  * Field-by-field differences between two suite bodies (the version number aside): every leaf
- * value that changed, appeared or disappeared, in the order of the newer body.
+ * value that changed, appeared or disappeared, in the order of the newer body. A list that appears
+ * empty is no change: a version stored before a field with an empty default existed lacks it.
  */
 export function diffSuiteBodies(before: unknown, after: unknown): SuiteBodyChange[] {
   const a = new Map<string, string>();
@@ -29,6 +30,8 @@ export function diffSuiteBodies(before: unknown, after: unknown): SuiteBodyChang
   for (const [field, value] of b) {
     if (field === 'version') continue;
     const old = a.get(field);
+    // An empty list where the older body had nothing is a default the schema gained since (counterparts: []), not an edit.
+    if (old === undefined && value === '[]') continue;
     if (old === undefined) changes.push({ field, change: 'added', before: null, after: value });
     else if (old !== value) changes.push({ field, change: 'changed', before: old, after: value });
   }

@@ -94,6 +94,13 @@ describe('diffSuiteBodies', () => {
     expect(changes.some((c) => c.field.startsWith('branch'))).toBe(false);
   });
 
+  it('counts an empty list the older version predates as no change, and a list that gains items as added', () => {
+    expect(diffSuiteBodies(body(), body({ version: 2, counterparts: [] }))).toEqual([]);
+    expect(diffSuiteBodies(body(), body({ version: 2, counterparts: [{ subject: 'z^(1/2)' }] }))).toEqual([
+      { field: 'counterparts.0.subject', change: 'added', before: null, after: 'z^(1/2)' },
+    ]);
+  });
+
   it('finds nothing between equal bodies', () => {
     expect(diffSuiteBodies(body(), body({ version: 7 }))).toEqual([]);
   });
