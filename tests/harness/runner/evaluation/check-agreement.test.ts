@@ -10,9 +10,9 @@ import { referenceTarget } from '../support/reference-target';
 
 const cache = seededReferenceCache();
 
-// ISO/IEC 9899:2011 G.6.4.2: csqrt(−4 − 0i) = +0 − 2i and csqrt(−4 + 0i) = +0 + 2i. cpow(z, 0.5)
-// is exp(0.5·log z) (G.6.4.1 note; DLMF 4.2.26), and clog(−4 − 0i) = ln 4 − iπ (G.6.3.2), so the
-// principal z^(1/2) has the same values on both sides of the cut.
+// ISO/IEC 9899:2011 G.6.4.2: csqrt(−4 − 0i) = +0 − 2i and csqrt(−4 + 0i) = +0 + 2i. The principal
+// z^w is exp(w·Log z) (DLMF 4.2.26) and clog(−4 − 0i) = ln 4 − iπ (G.6.3.2), so the principal
+// z^(1/2) has the same values on both sides of the cut.
 const POINTS: SuiteInput['paths'] = [
   {
     kind: 'points',
