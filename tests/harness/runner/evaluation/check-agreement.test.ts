@@ -86,6 +86,18 @@ describe('agreement checks', () => {
     ]);
   });
 
+  it('does not call two values that each pass against the reference a disagreement, though they are further apart than the tolerance', async () => {
+    // sqrt(4) = 2 exactly; this library's pow gives 2 + 3 ulps and its sqrt 2 − 3 ulps: 6 ulps apart, each 3 from 2.
+    const ulpAbove2 = 2 ** -51;
+    const ulpBelow2 = 2 ** -52;
+    const apart = referenceTarget('both-close@1', (op, _args, v) =>
+      v[0] === 2 ? [op === 'pow' ? 2 + 3 * ulpAbove2 : op === 'sqrt' ? 2 - 3 * ulpBelow2 : v[0], v[1]] : v,
+    );
+    const r = await evaluateSuite(sqrtAgainstPow, apart, { cache });
+    expect(r.counts.fail).toBe(0);
+    expect(r.paths[0]!.agreements![0]).toMatchObject({ compared: 3, disagreed: 0 });
+  });
+
   it('compares one subject through two entries of the target', async () => {
     // A small target with an entry that builds its numbers from parts that lose a −0 (as a
     // constructor from plain numbers may); the default entry keeps the bits.
