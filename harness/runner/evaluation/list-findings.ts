@@ -62,11 +62,11 @@ export function listFindings(run: PathRun): void {
       rule: alt?.rule ?? '',
       reproducer: [
         reproducer(run.program, run.target, z, run.suite.subject),
-        // The other way of each disagreement, so both values can be reproduced side by side.
+        // The other way of each disagreement, so both values can be reproduced; each snippet runs on its own.
         ...run.counterparts
           .filter((c) => run.labels[i]?.some((l) => l.kind === 'disagreement' && l.with === c.with))
           .map((c) => reproducer(c.program, run.target, z, c.with)),
-      ].join('\n\n'),
+      ].join('\n\n--- the other way, on its own ---\n\n'),
     };
     if (alt?.limits)
       finding.limits = {
