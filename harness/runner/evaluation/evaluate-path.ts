@@ -10,13 +10,15 @@ import { evaluateProgram } from './evaluate-program';
 import { expectedColumnOf } from './expected-column-of';
 import { listFindings } from './list-findings';
 import { pathInputs } from './path-inputs';
+import { traceSteps } from './trace-steps';
 import type { PathEvaluation } from './path-evaluation';
 import type { PathRun } from './path-run';
 
 /**
  * One path of a suite against one target, in named steps: the expected values (expectedColumnOf)
- * and the library's (evaluateProgram) at every point; checkPoints compares them; diagnoseFailures
- * explains each failure; compareAlongPath finds jumps, misplaced cuts and the monodromy along a
+ * and the library's (evaluateProgram) at every point; checkPoints compares them; traceSteps puts
+ * a composed subject's steps beside the reference's at each failure; diagnoseFailures explains
+ * each failure; compareAlongPath finds jumps, misplaced cuts and the monodromy along a
  * continuous path; checkAgreement compares the suite's counterparts; listFindings writes the
  * failures out. A path that cannot be built is an error,
  * and every point is skipped when the target lacks an operation of the subject.
@@ -69,8 +71,10 @@ export async function evaluatePath(evaluation: PathEvaluation): Promise<PathResu
     errored: [],
     labels: new Array(n).fill(null),
     alternatives: new Map(),
+    traces: new Map(),
   };
   checkPoints(run);
+  traceSteps(run);
   diagnoseFailures(run);
   compareAlongPath(run);
   await checkAgreement(run);

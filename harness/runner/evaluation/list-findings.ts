@@ -13,8 +13,9 @@ import { wireDouble } from './wire-double';
 /**
  * Puts each failure's labels on its outcome (the leading one as its diagnosis) and counts them,
  * then lists the failing and erring points, branch findings first and in index order within each
- * class, up to `maxFindings`, each with its input's exact bits, both values, the
- * rule that fixes the expected value, the one-sided limits on a cut and a reproducer.
+ * class, up to `maxFindings`, each with its input's exact bits, both values, the rule that fixes
+ * the expected value, the one-sided limits on a cut, a reproducer, and a composed subject's steps
+ * and the choice behind the expected value where there is one (trace-steps.ts).
  */
 export function listFindings(run: PathRun): void {
   const { out, outcomes, expected, actual, expectation, path, points } = run;
@@ -67,6 +68,7 @@ export function listFindings(run: PathRun): void {
           .filter((c) => run.labels[i]?.some((l) => l.kind === 'disagreement' && l.with === c.with))
           .map((c) => reproducer(c.program, run.target, z, c.with)),
       ].join('\n\n--- the other way, on its own ---\n\n'),
+      ...run.traces.get(i),
     };
     if (alt?.limits)
       finding.limits = {

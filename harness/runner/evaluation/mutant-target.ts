@@ -13,9 +13,14 @@ import { catalogue } from '../../reference/catalogue';
  * - `add-4-ulps`: each part of the result is moved 4 doubles up;
  * - `swap-cut-side`: on the function's first cut the value from the other side is returned
  *   (the base is called with the zero part across that cut flipped, which is the other side
- *   for a base that honours zero signs, as cmath does).
+ *   for a base that honours zero signs, as cmath does);
+ * - `inexact-intermediate`: pow(z, w) is computed as exp(w·log z) through the base's own exp and
+ *   log, the product rounded in doubles: the rounded w·log z leaves a tiny part of either sign
+ *   where the power is real (pow(−1 + 0i, 13) = −1 − 1.96e−15i, as complex.js 2.4.3 answers), so
+ *   a function applied to that power lands on the other side of its cut.
  */
-export type Mutation = 'flip-input-zero' | 'conjugate' | 'rotate' | 'add-4-ulps' | 'swap-cut-side';
+export type Mutation =
+  'flip-input-zero' | 'conjugate' | 'rotate' | 'add-4-ulps' | 'swap-cut-side' | 'inexact-intermediate';
 
 const ARITHMETIC = new Set(['add', 'sub', 'mul', 'div', 'neg']);
 const ROTATION: ComplexPair = [Math.cos((2 * Math.PI) / 3), Math.sin((2 * Math.PI) / 3)];
@@ -66,6 +71,28 @@ export function mutantTarget(base: Target, mutation: Mutation): Target {
           ]);
         case 'add-4-ulps':
           return mapValues(await base.evaluate(op, calls), ([re, im]) => [up4(re), up4(im)]);
+        case 'inexact-intermediate': {
+          if (op !== 'pow') return base.evaluate(op, calls);
+          const logs = await base.evaluate(
+            'log',
+            calls.map(([z]) => [z as ComplexPair]),
+          );
+          const products = calls.map(([, w], k): ComplexPair => {
+            const l = logs[k];
+            if (!l || !('value' in l)) return [NaN, NaN];
+            const [a, b] = w as ComplexPair;
+            const [c, d] = l.value;
+            return [a * c - b * d, a * d + b * c];
+          });
+          const exps = await base.evaluate(
+            'exp',
+            products.map((p) => [p]),
+          );
+          return exps.map((e, k) => {
+            const l = logs[k];
+            return l && 'error' in l ? l : e;
+          }) as CallResult[];
+        }
         case 'swap-cut-side': {
           const cut = firstCut(op);
           if (!cut) return base.evaluate(op, calls);

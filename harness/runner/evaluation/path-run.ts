@@ -1,6 +1,6 @@
 import type { Diagnosis } from '../../../shared/diagnosis';
 import type { PointOutcome } from '../../../shared/point-outcome';
-import type { PathResult } from '../../../shared/run-result';
+import type { PathResult, PointFinding } from '../../../shared/run-result';
 import type { PathPoint } from '../../paths/path-point';
 import type { ExpectedColumn, PointAlternatives } from '../expectations/expectation';
 import type { PathEvaluation } from './path-evaluation';
@@ -25,4 +25,6 @@ export interface PathRun extends PathEvaluation {
   labels: (Diagnosis[] | null)[];
   /** The alternatives computed for a failure's diagnosis, by point. */
   alternatives: Map<number, PointAlternatives>;
+  /** By failing point: a composed subject's steps beside the reference's, and the choice its expected value rests on (trace-steps.ts). */
+  traces: Map<number, Pick<PointFinding, 'steps' | 'firstLeftStep' | 'choice'>>;
 }

@@ -4,6 +4,7 @@ import type { WireComplex } from '../../../shared/wire-complex';
 import { describeCounts } from './describe-counts';
 import { describeLabelCounts } from './describe-label-counts';
 import { describeOutcome } from './describe-outcome';
+import { describeSteps } from '../../../shared/describe-steps';
 import { formatComplexText } from '../../../shared/format-complex-text';
 import { propertyFailureLines } from '../../../shared/property-failure-lines';
 
@@ -32,7 +33,10 @@ function findingText(f: PointFinding): string {
     lines.push(
       `  limits   : ${f.limits.sides[0]} ${c(f.limits.values[0])}; ${f.limits.sides[1]} ${c(f.limits.values[1])}`,
     );
+  const steps = describeSteps(f, { ascii: true });
+  if (steps) lines.push(`  ${steps}`);
   if (f.rule) lines.push(`  rule     : ${f.rule}`);
+  if (f.choice) lines.push(`  choice   : ${f.choice}`);
   lines.push('  reproducer:', ...f.reproducer.split('\n').map((l) => `    ${l}`));
   return lines.join('\n');
 }

@@ -3,6 +3,7 @@ import type { PointFinding, RunResult, SuiteTargetResult } from '../../../shared
 import type { WireComplex } from '../../../shared/wire-complex';
 import { describeCounts } from './describe-counts';
 import { describeOutcome } from './describe-outcome';
+import { describeSteps } from '../../../shared/describe-steps';
 import { formatComplexText } from '../../../shared/format-complex-text';
 import { propertyFailureLines } from '../../../shared/property-failure-lines';
 
@@ -67,6 +68,9 @@ function pair(r: SuiteTargetResult, maxRows: number): string[] {
       lines.push(
         `            ${`"${f.path}" ${f.label ?? `t = ${f.t}`}`.padEnd(30)} z = ${c(f.z)}  expected ${c(f.expected)}  got ${c(f.actual)}  → ${describeOutcome(f.outcome)}`,
       );
+      const steps = describeSteps(f);
+      if (steps) lines.push(`              ${steps}`);
+      if (f.choice) lines.push(`              expected value is ${f.choice}`);
     }
   }
   const listed = r.paths.reduce((s, p) => s + p.findings.length + p.findingsOmitted, 0);

@@ -1,0 +1,91 @@
+import type { StepValue } from '../../../shared/run-result';
+import { checkValue } from '../../checks/check-value';
+import type { ComplexDouble } from '../../checks/complex-double';
+import { evaluateSubject } from '../../expressions/evaluate-subject';
+import type { SubjectExpr } from '../../expressions/subject-expr';
+import type { Approximation } from '../../reference/complex/approximation';
+import { BigComplex } from '../../reference/complex/big-complex';
+import { reciprocalAtZeroChoice } from '../../reference/functions/reciprocal-at-zero-choice';
+import type { PathRun } from './path-run';
+import type { ProgramStep } from './subject-program';
+import type { ValueColumn } from './value-column';
+import { wireDouble } from './wire-double';
+
+type OpStep = Extract<ProgramStep, { kind: 'op' }>;
+
+const toDouble = (a: Approximation): ComplexDouble => [a.re.toDouble(), a.im.toDouble()];
+
+/**
+ * For each failing point of a principal suite, what the reference says about each step the library
+ * took: a composed subject's intermediate values (the library's, from evaluateProgram's step
+ * columns, beside the reference's value of the same sub-expression at the same input, from the
+ * one walk of evaluate-subject.ts) with the first step that left the reference, and, for any
+ * subject, the choice the expected value rests on where conventions disagree
+ * (reciprocal-at-zero-choice.ts). A step has left when its value fails the suite's value
+ * tolerance against the reference's, or a zero part has the other sign: the sign of an
+ * intermediate zero picks the side of the next function's cut whatever the suite's convention.
+ *
+ * Regular suites get neither: their expected value is a continued branch, not the composition of
+ * principal values, so the steps' principal values would not add up to it.
+ *
+ * Cost: one reference evaluation of the whole subject per failing point, as the expected value
+ * took (the expected value may have come from the cache, these do not).
+ */
+export function traceSteps(run: PathRun): void {
+  if (run.suite.branch.kind !== 'principal' || run.failing.length === 0) return;
+  const steps = run.program.steps;
+  const ops = steps.flatMap((s, k) => (s.kind === 'op' ? [k] : []));
+  const last = steps[steps.length - 1] as ProgramStep;
+  if (ops.length === 0 || last.kind !== 'op') return;
+  const root = last.node;
+  const composed = ops.length > 1;
+  const columns = run.actual.steps ?? [];
+  const tol = run.suite.tolerances.values;
+  const { re, im } = run.inputs;
+  for (const i of run.failing) {
+    const z = BigComplex.fromDoubles(re[i] as number, im[i] as number);
+    if (!composed) {
+      const choice = reciprocalAtZeroChoice(last.op, z);
+      if (choice) run.traces.set(i, { choice });
+      continue;
+    }
+    const nodes = new Map<SubjectExpr, Approximation>();
+    try {
+      evaluateSubject(root, z, run.suite.convention, { double: true, digits: 0 }, nodes);
+    } catch {
+      // The reference has no value here: the point was skipped, not failed; nothing to trace.
+      continue;
+    }
+    const values: StepValue[] = [];
+    let firstLeftStep: number | undefined;
+    let choice: string | null = null;
+    for (const k of ops) {
+      const step = steps[k] as OpStep;
+      const col = columns[k] as ValueColumn | undefined;
+      const ref = nodes.get(step.node);
+      const library: ComplexDouble | null = col ? [col.re[i] as number, col.im[i] as number] : null;
+      const reference = ref ? toDouble(ref) : null;
+      const left = library !== null && reference !== null && !checkValue(library, reference, tol, true).pass;
+      if (left && firstLeftStep === undefined) firstLeftStep = values.length;
+      values.push({
+        text: step.text,
+        library: library && wireDouble(library),
+        reference: reference && wireDouble(reference),
+        left,
+      });
+      const arg = argumentOf(step.node);
+      const argValue = arg && nodes.get(arg);
+      choice ??= argValue ? reciprocalAtZeroChoice(step.op, argValue.toComplex()) : null;
+    }
+    run.traces.set(i, {
+      steps: values,
+      ...(firstLeftStep === undefined ? {} : { firstLeftStep }),
+      ...(choice ? { choice } : {}),
+    });
+  }
+}
+
+/** The argument of a one-argument function call, whose zero is where a reciprocal function's value is a choice. */
+function argumentOf(node: SubjectExpr): SubjectExpr | null {
+  return node.kind === 'call' ? node.arg : null;
+}

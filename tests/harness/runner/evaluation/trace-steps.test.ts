@@ -1,0 +1,84 @@
+import type { Diagnosis } from '../../../../shared/diagnosis';
+import type { PointFinding, SuiteTargetResult } from '../../../../shared/run-result';
+import { evaluateSuite } from '../../../../harness/runner/evaluation/evaluate-suite';
+import { mutantTarget } from '../../../../harness/runner/evaluation/mutant-target';
+import { seededReferenceCache } from '../../../setup/seeded-reference-cache';
+import { makeSuite } from '../support/make-suite';
+import { referenceTarget } from '../support/reference-target';
+
+const cache = seededReferenceCache();
+const findings = (r: SuiteTargetResult): PointFinding[] => r.paths.flatMap((p) => p.findings);
+const diagnosis = (f: PointFinding): Diagnosis | null => (f.outcome.kind === 'fail' ? f.outcome.diagnosis : null);
+
+/** The negative real axis from −1 to −1/2, on its upper (+0) edge. */
+const UPPER_EDGE = {
+  kind: 'segment' as const,
+  name: 'upper edge',
+  from: { re: '-1', im: '0' },
+  to: { re: '-0.5', im: '0' },
+  samples: 3,
+};
+
+// A library whose pow goes through exp(w·log z) with the product rounded, as complex.js 2.4.3
+// does: pow(−1 + 0i, 13) = exp(13·iπ) = −1 − 1.9606728399089416e−15i, where the exact power is
+// (−1)^13 = −1 with the zero imaginary part of (−1 + 0i)^13 (every product of real numbers).
+const viaExpLog = mutantTarget(referenceTarget('exp-log-pow@1'), 'inexact-intermediate');
+
+describe('traceSteps', () => {
+  it('names the step that left the reference and calls log(z^13) on the other side of the cut, not a zero sign of the input', async () => {
+    const suite = makeSuite({ subject: 'log(z^13)', paths: [UPPER_EDGE] });
+    const r = await evaluateSuite(suite, viaExpLog, { cache });
+    const f = findings(r).find((x) => x.z.re === '-1')!;
+    // ISO/IEC 9899:2011 G.6.3.2 and DLMF 4.2.3: log(−1 + 0i) = iπ; the library's −1 − 1.96e−15i
+    // lies below the cut, where log is −iπ: the value is the other side's limit.
+    expect(f.expected).toEqual({ re: '0', im: '3.141592653589793' });
+    expect(diagnosis(f)).toEqual({ kind: 'cut-side' });
+    expect(f.firstLeftStep).toBe(0);
+    expect(f.steps).toEqual([
+      {
+        text: 'pow(z, 13)',
+        library: { re: '-1', im: '-1.9606728399089416e-15' },
+        reference: { re: '-1', im: '0' },
+        left: true,
+      },
+      {
+        text: 'log(pow(z, 13))',
+        // log|z| of the library's power is 1.9e−30, correctly rounded by this library.
+        library: { re: '1.922118992578297e-30', im: '-3.1415926535897913' },
+        reference: { re: '0', im: '3.141592653589793' },
+        left: true,
+      },
+    ]);
+    expect(r.byDiagnosis['zero-sign']).toBeUndefined();
+  });
+
+  it('keeps a zero sign of the input where every step before the last matched the reference', async () => {
+    // log ignores −0: log(−1 − 0i) must be −iπ (ISO/IEC 9899:2011 G.6.3.2, conj symmetry); the
+    // power before it is exact, so the input's zero sign read wrongly is the story.
+    const ignoresMinusZero = referenceTarget('log-ignores-minus-zero@1', (op, [z], v) =>
+      op === 'log' && Object.is(z![1], -0) ? [v[0], -v[1]] : v,
+    );
+    const suite = makeSuite({
+      subject: 'log(z^13)',
+      paths: [{ ...UPPER_EDGE, name: 'lower edge', from: { re: '-1', im: '-0' }, to: { re: '-0.5', im: '-0' } }],
+    });
+    const r = await evaluateSuite(suite, ignoresMinusZero, { cache });
+    const f = findings(r).find((x) => x.z.re === '-1')!;
+    expect(diagnosis(f)).toEqual({ kind: 'zero-sign', part: 'im', of: 'input' });
+    expect(f.firstLeftStep).toBe(1);
+    expect(f.steps?.map((s) => s.left)).toEqual([false, true]);
+  });
+
+  it('lists no steps for a single call', async () => {
+    const suite = makeSuite({ subject: 'z^13', paths: [UPPER_EDGE] });
+    const r = await evaluateSuite(suite, viaExpLog, { cache });
+    expect(findings(r).length).toBeGreaterThan(0);
+    expect(findings(r).every((f) => f.steps === undefined && f.firstLeftStep === undefined)).toBe(true);
+  });
+
+  it('passes a subject whose steps all match the reference, with nothing to trace', async () => {
+    const suite = makeSuite({ subject: 'log(z^13)', paths: [UPPER_EDGE] });
+    const r = await evaluateSuite(suite, referenceTarget(), { cache });
+    expect(r.counts.fail).toBe(0);
+  });
+});
