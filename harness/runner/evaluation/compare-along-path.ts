@@ -2,6 +2,8 @@ import type { Tolerance } from '../../../shared/schemas/tolerance-schema';
 import type { ComplexDouble } from '../../checks/complex-double';
 import { detectJumpsInColumns } from '../../checks/detect-jumps';
 import { findMisplacedCuts } from '../../checks/find-misplaced-cuts';
+import { misplacedCutGroups } from '../../checks/misplaced-cut-groups';
+import { confirmJumps } from './confirm-jumps';
 import { errorText } from './error-text';
 import { monodromyCheck } from './monodromy-check';
 import type { PathRun } from './path-run';
@@ -12,10 +14,11 @@ const CONTINUOUS = new Set(['circle', 'segment', 'polyline']);
 
 /**
  * Along a continuous path: where the expected and the library's values jump (a failure next to a
- * jump of only one of them is re-diagnosed as a misplaced cut), and along a closed path of a
+ * jump of only one of them is re-diagnosed as a misplaced cut once refinement between the two
+ * samples confirms that jump: confirm-jumps.ts, which calls the target again), and along a closed path of a
  * regular branch, the library's monodromy against the branch's. Other paths are left alone.
  */
-export function compareAlongPath(run: PathRun): void {
+export async function compareAlongPath(run: PathRun): Promise<void> {
   if (!CONTINUOUS.has(run.path.kind)) return;
   const { out, expected, actual, labels } = run;
   const n = run.points.length;
@@ -46,7 +49,17 @@ export function compareAlongPath(run: PathRun): void {
   };
   out.jumps = { expected: where(ej), library: where(aj) };
   if (run.failing.length > 0) {
-    const redone = findMisplacedCuts(t, [], [], labels, { expected: ej, actual: aj });
+    const groups = misplacedCutGroups(labels, ej, aj);
+    const confirmed =
+      groups.length === 0
+        ? new Set<number>()
+        : await confirmJumps(
+            run,
+            groups.flatMap((g) => g.steps),
+            { expected: ej, actual: aj },
+            { expected: [xr, xi], library: [yr, yi] },
+          );
+    const redone = findMisplacedCuts(t, [], [], labels, { expected: ej, actual: aj }, confirmed);
     redone.forEach((d, i) => (labels[i] = d));
   }
   try {

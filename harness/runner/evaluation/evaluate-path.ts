@@ -76,7 +76,7 @@ export async function evaluatePath(evaluation: PathEvaluation): Promise<PathResu
   checkPoints(run);
   traceSteps(run);
   diagnoseFailures(run);
-  compareAlongPath(run);
+  await compareAlongPath(run);
   await checkAgreement(run);
   listFindings(run);
   out.skipped = [...run.skipReasons].map(([reason, count]) => ({ reason, count }));

@@ -1,0 +1,59 @@
+import type { Diagnosis } from '../../../../shared/diagnosis';
+import type { SuiteTargetResult } from '../../../../shared/run-result';
+import { evaluateSuite } from '../../../../harness/runner/evaluation/evaluate-suite';
+import { seededReferenceCache } from '../../../setup/seeded-reference-cache';
+import { makeSuite } from '../support/make-suite';
+import { referenceTarget } from '../support/reference-target';
+
+const cache = seededReferenceCache();
+const diagnoses = (r: SuiteTargetResult): Diagnosis[] =>
+  r.paths.flatMap((p) => p.findings.flatMap((f) => (f.outcome.kind === 'fail' ? [f.outcome.diagnosis] : [])));
+
+// The unit circle about 0, 65 samples: the steps are 2π/64 ≈ 0.098 rad apart, and the angle 1 rad
+// falls between samples 10 and 11. √z is continuous there (DLMF 4.2.14: its only cut is (−∞, 0]).
+const suite = makeSuite({
+  subject: 'sqrt(z)',
+  paths: [
+    {
+      kind: 'circle',
+      name: 'unit circle',
+      center: { re: '0', im: '0' },
+      radius: '1',
+      start_angle: '0',
+      turns: '1',
+      direction: 'ccw',
+      samples: 65,
+    },
+  ],
+});
+const angle = (z: readonly number[]): number => Math.atan2(z[1] as number, z[0] as number);
+
+describe('confirmJumps through evaluateSuite', () => {
+  it('keeps the points’ own labels beyond a steep but continuous stretch of the library', async () => {
+    // Adds 0.5 + atan((θ − 1)/1e−6)/π to the real part: a rise of 1 over about 1e−6 rad, continuous.
+    const steep = referenceTarget('steep@1', (op, [z], v) =>
+      op === 'sqrt' ? [v[0] + 0.5 + Math.atan((angle(z!) - 1) / 1e-6) / Math.PI, v[1]] : v,
+    );
+    const r = await evaluateSuite(suite, steep, { cache });
+    const found = diagnoses(r);
+    expect(found.length).toBeGreaterThan(10);
+    expect(r.paths[0]!.jumps!.library.length).toBeGreaterThan(r.paths[0]!.jumps!.expected.length);
+    expect(found.filter((d) => d.kind === 'misplaced-cut')).toEqual([]);
+  });
+
+  it('calls a jump that stays under refinement a confirmed misplaced cut', async () => {
+    // Conjugates √z for 1 < θ < π: the library's cut moved to the ray at angle 1, a jump of 2 sin ½.
+    const moved = referenceTarget('moved-cut@1', (op, [z], v) =>
+      op === 'sqrt' && angle(z!) > 1 && angle(z!) < Math.PI ? [v[0], -v[1]] : v,
+    );
+    const r = await evaluateSuite(suite, moved, { cache });
+    const misplaced = diagnoses(r).filter((d) => d.kind === 'misplaced-cut');
+    expect(misplaced.length).toBeGreaterThan(10);
+    expect(misplaced[0]).toEqual({
+      kind: 'misplaced-cut',
+      libraryJumpAt: expect.closeTo(10.5 / 64, 12),
+      expectedJumpAt: null,
+      confirmed: true,
+    });
+  });
+});
