@@ -35,7 +35,8 @@ export interface SubjectProgram {
 export function subjectProgram(expr: SubjectExpr): SubjectProgram {
   const steps: ProgramStep[] = [{ kind: 'input' }];
   const ops = new Set<string>();
-  const texts: string[] = ['z'];
+  // Each step's text, and whether it reads as one term (a name, a call, a bracket, a number ≥ 0).
+  const texts: StepText[] = [{ text: 'z', term: true }];
   const constant = (value: ComplexPair): number => {
     steps.push({ kind: 'const', value });
     texts.push(constantText(value));
@@ -45,9 +46,9 @@ export function subjectProgram(expr: SubjectExpr): SubjectProgram {
     ops.add(name);
     const text = operationText(
       name,
-      args.map((a) => texts[a] as string),
+      args.map((a) => texts[a] as StepText),
     );
-    steps.push({ kind: 'op', op: name, args, node, text });
+    steps.push({ kind: 'op', op: name, args, node, text: text.text });
     texts.push(text);
     return steps.length - 1;
   };
@@ -90,16 +91,24 @@ export function subjectProgram(expr: SubjectExpr): SubjectProgram {
 
 const INFIX: Readonly<Record<string, string>> = { add: '+', sub: '-', mul: '*', div: '/' };
 
-/** A constant as written in a step: its real part alone when it is real. */
-function constantText([re, im]: ComplexPair): string {
-  if (im === 0 && !Object.is(im, -0)) return String(re);
-  return `(${re} ${im < 0 || Object.is(im, -0) ? '-' : '+'} ${String(Math.abs(im))}i)`;
+interface StepText {
+  text: string;
+  term: boolean;
 }
 
-/** A step as written: arithmetic infix and bracketed, functions and powers as calls. */
-function operationText(op: string, args: string[]): string {
+/** An operand of an operator: bracketed unless it reads as one term. */
+const operand = (t: StepText): string => (t.term ? t.text : `(${t.text})`);
+
+/** A constant as written in a step: its real part alone when it is real, else bracketed. */
+function constantText([re, im]: ComplexPair): StepText {
+  if (im === 0 && !Object.is(im, -0)) return { text: String(re), term: re >= 0 && !Object.is(re, -0) };
+  return { text: `(${re} ${im < 0 || Object.is(im, -0) ? '-' : '+'} ${String(Math.abs(im))}i)`, term: true };
+}
+
+/** A step as written: arithmetic infix with bracketed operands, functions and powers as calls. */
+function operationText(op: string, args: StepText[]): StepText {
   const infix = INFIX[op];
-  if (infix) return `(${args[0]} ${infix} ${args[1]})`;
-  if (op === 'neg') return `-${args[0]}`;
-  return `${op}(${args.join(', ')})`;
+  if (infix) return { text: `${operand(args[0] as StepText)} ${infix} ${operand(args[1] as StepText)}`, term: false };
+  if (op === 'neg') return { text: `-${operand(args[0] as StepText)}`, term: false };
+  return { text: `${op}(${args.map((a) => a.text).join(', ')})`, term: true };
 }
