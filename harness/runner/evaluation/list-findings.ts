@@ -7,6 +7,7 @@ import type { ComplexPair } from '../../adapters/complex-pair';
 import { formatHexDouble } from '../../checks/format-hex-double';
 import type { PathPoint } from '../../paths/path-point';
 import type { PathRun } from './path-run';
+import { listedPoints } from './listed-points';
 import { reproducer } from './reproducer';
 import { wireDouble } from './wire-double';
 
@@ -32,14 +33,7 @@ export function listFindings(run: PathRun): void {
     out.byClass[outcomeClass(o) as DiagnosisClass] += 1;
   }
   const expectedAt = (i: number): [number, number] => [expected.re[i] as number, expected.im[i] as number];
-  // Branch findings first, then errors, then accuracy findings, each in index order: when a path
-  // has more failures than maxFindings, the ones cut off are accuracy findings, never a sign flip.
-  const rank = (i: number) => {
-    const cls = outcomeClass(outcomes[i] as PointOutcome);
-    return cls === 'branch' ? 0 : cls === 'accuracy' ? 2 : 1;
-  };
-  const listed = [...run.failing, ...run.errored].sort((a, b) => rank(a) - rank(b) || a - b);
-  for (const i of listed.slice(0, run.maxFindings)) {
+  for (const i of listedPoints(run)) {
     const p = points[i] as PathPoint;
     const z: ComplexPair = [p.z.re, p.z.im];
     let alt = run.alternatives.get(i);
@@ -84,5 +78,5 @@ export function listFindings(run: PathRun): void {
     }
     out.findings.push(finding);
   }
-  out.findingsOmitted = Math.max(0, listed.length - run.maxFindings);
+  out.findingsOmitted = Math.max(0, run.failing.length + run.errored.length - run.maxFindings);
 }

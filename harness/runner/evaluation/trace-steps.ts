@@ -6,6 +6,7 @@ import type { SubjectExpr } from '../../expressions/subject-expr';
 import type { Approximation } from '../../reference/complex/approximation';
 import { BigComplex } from '../../reference/complex/big-complex';
 import { reciprocalAtZeroChoice } from '../../reference/functions/reciprocal-at-zero-choice';
+import { listedPoints } from './listed-points';
 import type { PathRun } from './path-run';
 import type { ProgramStep } from './subject-program';
 import type { ValueColumn } from './value-column';
@@ -16,7 +17,7 @@ type OpStep = Extract<ProgramStep, { kind: 'op' }>;
 const toDouble = (a: Approximation): ComplexDouble => [a.re.toDouble(), a.im.toDouble()];
 
 /**
- * For each failing point of a principal suite, what the reference says about each step the library
+ * For the failing points of a principal suite, what the reference says about each step the library
  * took: a composed subject's intermediate values (the library's, from evaluateProgram's step
  * columns, beside the reference's value of the same sub-expression at the same input, from the
  * one walk of evaluate-subject.ts) with the first step that left the reference, and, for any
@@ -28,8 +29,10 @@ const toDouble = (a: Approximation): ComplexDouble => [a.re.toDouble(), a.im.toD
  * Regular suites get neither: their expected value is a continued branch, not the composition of
  * principal values, so the steps' principal values would not add up to it.
  *
- * Cost: one reference evaluation of the whole subject per failing point, as the expected value
- * took (the expected value may have come from the cache, these do not).
+ * Cost: one reference evaluation of the whole subject per traced point, as the expected value
+ * took (the expected value may have come from the cache, these do not). Traced are the listed
+ * failures (listed-points.ts) and the failures on an axis under signed zeros, whose label depends
+ * on the steps; the others are counted under their label without steps.
  */
 export function traceSteps(run: PathRun): void {
   if (run.suite.branch.kind !== 'principal' || run.failing.length === 0) return;
@@ -42,7 +45,12 @@ export function traceSteps(run: PathRun): void {
   const columns = run.actual.steps ?? [];
   const tol = run.suite.tolerances.values;
   const { re, im } = run.inputs;
+  // The listed failures, and every failure whose diagnosis could blame the input's zero sign (an
+  // input on an axis under signed zeros: diagnose-failures.ts): not every failure of a long path.
+  const listed = new Set(listedPoints(run));
+  const signedZero = run.suite.convention === 'signed-zero';
   for (const i of run.failing) {
+    if (!listed.has(i) && !(composed && signedZero && (re[i] === 0 || im[i] === 0))) continue;
     const z = BigComplex.fromDoubles(re[i] as number, im[i] as number);
     if (!composed) {
       const choice = reciprocalAtZeroChoice(last.op, z);
