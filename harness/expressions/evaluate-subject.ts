@@ -66,18 +66,13 @@ function walk(
   bits: number,
   nodes?: Map<SubjectExpr, BigComplex>,
 ): BigComplex {
-  const value = node(e, z, convention, bits, nodes);
+  const value = evaluateNode(e, z, convention, bits, nodes);
   nodes?.set(e, value);
   return value;
 }
 
-function node(
-  e: SubjectExpr,
-  z: BigComplex,
-  convention: Convention,
-  bits: number,
-  nodes?: Map<SubjectExpr, BigComplex>,
-): BigComplex {
+/** One node's value, its operands through `walk` (which records each value in `nodes`). */
+const evaluateNode: typeof walk = (e, z, convention, bits, nodes) => {
   const w = bits + 16;
   switch (e.kind) {
     case 'z':
@@ -121,4 +116,4 @@ function node(
     case 'call':
       return evaluateFunction({ fn: e.fn, z: walk(e.arg, z, convention, bits, nodes), convention }, w).toComplex();
   }
-}
+};

@@ -5,6 +5,7 @@ import { reciprocalAtZeroChoice } from '../../../../harness/reference/functions/
 import { seededReferenceCache } from '../../../setup/seeded-reference-cache';
 import { makeSuite } from '../../runner/support/make-suite';
 import { referenceTarget } from '../../runner/support/reference-target';
+import { suiteSegment } from '../../runner/support/suite-segment';
 
 const cache = seededReferenceCache();
 const findings = (r: SuiteTargetResult) => r.paths.flatMap((p) => p.findings);
@@ -13,13 +14,7 @@ const findings = (r: SuiteTargetResult) => r.paths.flatMap((p) => p.findings);
 const likeMpmath = referenceTarget('like-mpmath@1', (op, [z], v) =>
   z![0] === 0 && z![1] === 0 ? (op === 'acoth' ? [0, Math.PI / 2] : op === 'acot' ? [Math.PI / 2, 0] : v) : v,
 );
-const fromZero = {
-  kind: 'segment' as const,
-  name: 'from 0',
-  from: { re: '0', im: '0' },
-  to: { re: '0.5', im: '0' },
-  samples: 2,
-};
+const fromZero = suiteSegment('from 0', ['0', '0'], ['0.5', '0'], 2);
 
 describe('reciprocalAtZeroChoice', () => {
   it('names the rule for each reciprocal function at a zero of either sign, and nothing elsewhere or for other functions', () => {
@@ -51,7 +46,7 @@ describe('reciprocalAtZeroChoice', () => {
   });
 
   it('labels the choice inside a composed subject, where a step calls a reciprocal function at 0', async () => {
-    const shifted = { ...fromZero, from: { re: '1', im: '0' }, to: { re: '1.5', im: '0' } };
+    const shifted = suiteSegment('from 1', ['1', '0'], ['1.5', '0'], 2);
     const r = await evaluateSuite(makeSuite({ subject: 'acot(z - 1)', paths: [shifted] }), likeMpmath, { cache });
     const atOne = findings(r).find((f) => f.z.re === '1')!;
     expect(atOne.choice).toContain('acot z = atan(1/z)');

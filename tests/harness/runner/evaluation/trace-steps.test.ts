@@ -5,19 +5,14 @@ import { mutantTarget } from '../../../../harness/runner/evaluation/mutant-targe
 import { seededReferenceCache } from '../../../setup/seeded-reference-cache';
 import { makeSuite } from '../support/make-suite';
 import { referenceTarget } from '../support/reference-target';
+import { suiteSegment } from '../support/suite-segment';
 
 const cache = seededReferenceCache();
 const findings = (r: SuiteTargetResult): PointFinding[] => r.paths.flatMap((p) => p.findings);
 const diagnosis = (f: PointFinding): Diagnosis | null => (f.outcome.kind === 'fail' ? f.outcome.diagnosis : null);
 
 /** The negative real axis from −1 to −1/2, on its upper (+0) edge. */
-const UPPER_EDGE = {
-  kind: 'segment' as const,
-  name: 'upper edge',
-  from: { re: '-1', im: '0' },
-  to: { re: '-0.5', im: '0' },
-  samples: 3,
-};
+const UPPER_EDGE = suiteSegment('upper edge', ['-1', '0'], ['-0.5', '0'], 3);
 
 // A library whose pow goes through exp(w·log z) with the product rounded, as complex.js 2.4.3
 // does: pow(−1 + 0i, 13) = exp(13·iπ) = −1 − 1.9606728399089416e−15i, where the exact power is
@@ -60,7 +55,7 @@ describe('traceSteps', () => {
     );
     const suite = makeSuite({
       subject: 'log(z^13)',
-      paths: [{ ...UPPER_EDGE, name: 'lower edge', from: { re: '-1', im: '-0' }, to: { re: '-0.5', im: '-0' } }],
+      paths: [suiteSegment('lower edge', ['-1', '-0'], ['-0.5', '-0'], 3)],
     });
     const r = await evaluateSuite(suite, ignoresMinusZero, { cache });
     const f = findings(r).find((x) => x.z.re === '-1')!;
