@@ -20,7 +20,7 @@ export function describeLabel(d: Diagnosis): string {
     case 'zero-sign':
       return `zero-sign (${d.of} ${d.part})`;
     case 'misplaced-cut':
-      return `misplaced-cut (library jumps at t ≈ ${d.libraryJumpAt === null ? 'nowhere' : num(d.libraryJumpAt)}, expected ${d.expectedJumpAt === null ? 'none' : `at t ≈ ${num(d.expectedJumpAt)}`})`;
+      return `misplaced-cut (library jumps at t ≈ ${d.libraryJumpAt === null ? 'nowhere' : num(d.libraryJumpAt)}, expected ${d.expectedJumpAt === null ? 'none' : `at t ≈ ${num(d.expectedJumpAt)}`}${d.confirmed ? '; confirmed by refining between the samples' : ''})`;
     case 'inaccurate':
       if (d.cancellation) {
         const otherPart = d.cancellation.part === 're' ? 'im' : 're';

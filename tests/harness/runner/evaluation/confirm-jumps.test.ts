@@ -1,6 +1,7 @@
 import type { Diagnosis } from '../../../../shared/diagnosis';
 import type { SuiteTargetResult } from '../../../../shared/run-result';
 import { evaluateSuite } from '../../../../harness/runner/evaluation/evaluate-suite';
+import { describeOutcome } from '../../../../harness/runner/formats/describe-outcome';
 import { seededReferenceCache } from '../../../setup/seeded-reference-cache';
 import { makeSuite } from '../support/make-suite';
 import { referenceTarget } from '../support/reference-target';
@@ -55,5 +56,11 @@ describe('confirmJumps through evaluateSuite', () => {
       expectedJumpAt: null,
       confirmed: true,
     });
+    const listed = r.paths[0]!.findings.find(
+      (f) => f.outcome.kind === 'fail' && f.outcome.diagnosis.kind === 'misplaced-cut',
+    )!;
+    expect(describeOutcome(listed.outcome)).toMatch(
+      /^misplaced-cut \(library jumps at t ≈ 0\.164, expected none; confirmed by refining between the samples\)$/,
+    );
   });
 });
