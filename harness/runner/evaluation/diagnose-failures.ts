@@ -56,19 +56,17 @@ export function diagnoseFailures(run: PathRun): void {
       act.every(Number.isFinite) && exp.every(Number.isFinite) && !act.some((x) => x === 0)
         ? check
         : checkValue(act, exp, tol, run.expectation.zeroSigns);
-    // A composed subject whose intermediate value left the reference before the last step: the
-    // final value's likeness to the value at the flipped input is a coincidence of that step (log of
-    // a power that left −2e−15 in its zero part), not the input's zero read wrongly; the final value
-    // is then named by what it is (the other side of a cut, another sheet), and the finding names
-    // the step (trace-steps.ts).
-    const trace = run.traces.get(i);
-    const earlierStepLeft = trace?.firstLeftStep !== undefined && trace.firstLeftStep < (trace.steps?.length ?? 0) - 1;
+    // A composed subject whose step before the last lost an exact zero first (a power that left
+    // −2e−15 where the reference has 0): the final value's likeness to the value at the flipped
+    // input is that step's doing, not the input's zero read wrongly, so the final value is named by
+    // what it is (the other side of a cut, another sheet), and the finding names the step
+    // (trace-steps.ts).
     run.labels[i] = diagnoseFailure({
       actual: act,
       expected: exp,
       check: full,
       tolerance: tol,
-      flippedZero: earlierStepLeft ? undefined : alt.flippedZero,
+      flippedZero: run.zeroLostBefore.has(i) ? undefined : alt.flippedZero,
       otherSide: alt.otherSide,
       otherSheets: alt.otherSheets,
     });

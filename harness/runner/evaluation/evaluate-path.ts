@@ -72,6 +72,7 @@ export async function evaluatePath(evaluation: PathEvaluation): Promise<PathResu
     labels: new Array(n).fill(null),
     alternatives: new Map(),
     traces: new Map(),
+    zeroLostBefore: new Set(),
   };
   checkPoints(run);
   traceSteps(run);

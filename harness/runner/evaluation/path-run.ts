@@ -27,4 +27,6 @@ export interface PathRun extends PathEvaluation {
   alternatives: Map<number, PointAlternatives>;
   /** By failing point: a composed subject's steps beside the reference's, and the choice its expected value rests on (trace-steps.ts). */
   traces: Map<number, Pick<PointFinding, 'steps' | 'firstLeftStep' | 'choice'>>;
+  /** Failing points where a step before the last lost an exact zero of the reference first (trace-steps.ts). */
+  zeroLostBefore: Set<number>;
 }

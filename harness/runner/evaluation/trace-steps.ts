@@ -14,20 +14,34 @@ import { wireDouble } from './wire-double';
 
 type OpStep = Extract<ProgramStep, { kind: 'op' }>;
 
+/**
+ * Complex + − × ÷ and negation: the zero signs of their exact zeros follow the formula a library
+ * uses, not a standard ((−1.5 − 0i)/(0.5 + 0i) is −3 + 0i through a·conj(b)/|b|², as the
+ * reference computes it, and −3 − 0i dividing each part by the real divisor, as complex.js does),
+ * so such a step has not left the reference by a zero's sign alone.
+ */
+const ARITHMETIC = new Set(['add', 'sub', 'mul', 'div', 'neg']);
+
 const toDouble = (a: Approximation): ComplexDouble => [a.re.toDouble(), a.im.toDouble()];
 
 /**
- * For the failing points of a principal suite, what the reference says about each step the library
- * took: a composed subject's intermediate values (the library's, from evaluateProgram's step
- * columns, beside the reference's value of the same sub-expression at the same input, from the
- * one walk of evaluate-subject.ts) with the first step that left the reference, and, for any
- * subject, the choice the expected value rests on where conventions disagree
- * (reciprocal-at-zero-choice.ts). A step has left when its value fails the suite's value
- * tolerance against the reference's, or a zero part has the other sign: the sign of an
- * intermediate zero picks the side of the next function's cut whatever the suite's convention.
+ * For the failing points of a suite, what the reference says about each step the library took:
+ * a composed subject's intermediate values (the library's, from evaluateProgram's step columns,
+ * beside the reference's value of the same sub-expression at the same input, from the one walk of
+ * evaluate-subject.ts) with the first step that left the reference, and, for any subject, the
+ * choice the expected value rests on where conventions disagree (reciprocal-at-zero-choice.ts).
+ * A step has left when its value fails the suite's value tolerance against the reference's, or a
+ * function's zero part has the other sign: the sign of an intermediate zero picks the side of the
+ * next function's cut whatever the suite's convention (arithmetic's zero signs: ARITHMETIC).
  *
- * Regular suites get neither: their expected value is a continued branch, not the composition of
- * principal values, so the steps' principal values would not add up to it.
+ * A point whose first step to leave came before the last and left through a part the reference
+ * has as an exact zero (the library's is not zero, or is a zero of the other sign) goes into
+ * `run.zeroLostBefore`: the zero the input carried was lost by that step, not misread by the
+ * last one (diagnose-failures.ts). A step that returns f at its argument with the zero flipped
+ * (√(−1.8 − 0i) = +1.34i) keeps the input's zero-sign story.
+ *
+ * In a regular suite the inner steps are principal values, as the library computes them, and the
+ * last step's reference is the expected value: the branch continued along the cut plane.
  *
  * Cost: one reference evaluation of the whole subject per traced point, as the expected value
  * took (the expected value may have come from the cache, these do not). Traced are the listed
@@ -35,7 +49,8 @@ const toDouble = (a: Approximation): ComplexDouble => [a.re.toDouble(), a.im.toD
  * on the steps; the others are counted under their label without steps.
  */
 export function traceSteps(run: PathRun): void {
-  if (run.suite.branch.kind !== 'principal' || run.failing.length === 0) return;
+  if (run.failing.length === 0) return;
+  const principal = run.suite.branch.kind === 'principal';
   const steps = run.program.steps;
   const ops = steps.flatMap((s, k) => (s.kind === 'op' ? [k] : []));
   const last = steps[steps.length - 1] as ProgramStep;
@@ -72,9 +87,20 @@ export function traceSteps(run: PathRun): void {
       const col = columns[k] as ValueColumn | undefined;
       const ref = nodes.get(step.node);
       const library: ComplexDouble | null = col ? [col.re[i] as number, col.im[i] as number] : null;
-      const reference = ref ? toDouble(ref) : null;
-      const left = library !== null && reference !== null && !checkValue(library, reference, tol, true).pass;
-      if (left && firstLeftStep === undefined) firstLeftStep = values.length;
+      const reference: ComplexDouble | null =
+        !principal && step === last
+          ? run.expected.skipped.has(i)
+            ? null
+            : [run.expected.re[i] as number, run.expected.im[i] as number]
+          : ref
+            ? toDouble(ref)
+            : null;
+      const arithmetic = ARITHMETIC.has(step.op);
+      const left = library !== null && reference !== null && !checkValue(library, reference, tol, !arithmetic).pass;
+      if (left && firstLeftStep === undefined) {
+        firstLeftStep = values.length;
+        if (step !== last && lostZero(library, reference, arithmetic)) run.zeroLostBefore.add(i);
+      }
       values.push({
         text: step.text,
         library: library && wireDouble(library),
@@ -91,6 +117,13 @@ export function traceSteps(run: PathRun): void {
       ...(choice ? { choice } : {}),
     });
   }
+}
+
+/** A part the reference has as an exact zero is not zero in the library's value, or (for a function) a zero of the other sign. */
+function lostZero(library: ComplexDouble, reference: ComplexDouble, arithmetic: boolean): boolean {
+  return [0, 1].some(
+    (p) => reference[p] === 0 && (arithmetic ? library[p] !== 0 : !Object.is(library[p], reference[p])),
+  );
 }
 
 /** The argument of a one-argument function call, whose zero is where a reciprocal function's value is a choice. */

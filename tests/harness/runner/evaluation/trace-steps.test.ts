@@ -3,6 +3,7 @@ import type { PointFinding, SuiteTargetResult } from '../../../../shared/run-res
 import { evaluateSuite } from '../../../../harness/runner/evaluation/evaluate-suite';
 import { mutantTarget } from '../../../../harness/runner/evaluation/mutant-target';
 import { seededReferenceCache } from '../../../setup/seeded-reference-cache';
+import { loadDemoSuite } from '../support/load-demo-suite';
 import { makeSuite } from '../support/make-suite';
 import { referenceTarget } from '../support/reference-target';
 import { suiteSegment } from '../support/suite-segment';
@@ -62,6 +63,50 @@ describe('traceSteps', () => {
     expect(diagnosis(f)).toEqual({ kind: 'zero-sign', part: 'im', of: 'input' });
     expect(f.firstLeftStep).toBe(1);
     expect(f.steps?.map((s) => s.left)).toEqual([false, true]);
+  });
+
+  it('keeps a zero sign of the input read wrongly by an inner step, and names that step', async () => {
+    // √(−1.8 − 0i) = −1.3416i (ISO/IEC 9899:2011 G.6.4.2: csqrt(conj z) = conj(csqrt z)); a sqrt
+    // that ignores −0 answers +1.3416i from the exact argument z − 1 = −1.8 − 0i: the input's zero
+    // was misread, not lost, and the steps say where.
+    const ignoresMinusZero = referenceTarget('sqrt-ignores-minus-zero@1', (op, [z], v) =>
+      op === 'sqrt' && Object.is(z![1], -0) ? [v[0], -v[1]] : v,
+    );
+    const suite = makeSuite({
+      subject: 'sqrt(z - 1) * 2',
+      paths: [suiteSegment('lower edge', ['-0.8', '-0'], ['-0.4', '-0'], 2)],
+    });
+    const r = await evaluateSuite(suite, ignoresMinusZero, { cache });
+    const f = findings(r).find((x) => x.z.re === '-0.8')!;
+    expect(diagnosis(f)).toEqual({ kind: 'zero-sign', part: 'im', of: 'input' });
+    expect(f.steps?.map((s) => [s.text, s.left])).toEqual([
+      ['z - 1', false],
+      ['sqrt(z - 1)', true],
+      ['sqrt(z - 1) * 2', true],
+    ]);
+    expect(f.firstLeftStep).toBe(1);
+  });
+
+  it('does not call an arithmetic step left by the sign of an exact zero, which follows the formula', async () => {
+    // (−1.5 − 0i)/(0.5 + 0i): −3 + 0i through a·conj(b)/|b|² (the reference), −3 − 0i dividing each
+    // part by a real divisor (complex.js 2.4.3); its sqrt then ignores −0, which is the finding.
+    const likeComplexJs = referenceTarget('divides-parts@1', (op, [a, b], v) => {
+      if (op === 'div' && b![1] === 0) return [a![0] / b![0], a![1] / b![0]];
+      if (op === 'sqrt' && Object.is(a![1], -0)) return [v[0], -v[1]];
+      return v;
+    });
+    // The regular branch of the demo suite takes its lower side at −0.5 − 0i: −i√3.
+    const r = await evaluateSuite(loadDemoSuite('sqrt-of-a-moebius-map-with-a-pole'), likeComplexJs, { cache });
+    const f = findings(r).find((x) => x.path === 'across the cut' && x.z.re === '-0.5')!;
+    expect(f.expected).toEqual({ re: '-0', im: '-1.7320508075688772' });
+    expect(f.steps?.[2]).toEqual({
+      text: '(z - 1) / (z + 1)',
+      library: { re: '-3', im: '-0' },
+      reference: { re: '-3', im: '0' },
+      left: false,
+    });
+    expect(f.firstLeftStep).toBe(3);
+    expect(diagnosis(f)).toEqual({ kind: 'zero-sign', part: 'im', of: 'input' });
   });
 
   it('lists no steps for a single call', async () => {
