@@ -9,7 +9,7 @@ export interface MisplacedCutGroup {
  * Where a misplaced cut may explain failures along a continuous path: within each run of failing
  * points, the steps where the library's values jump and the expected ones do not (or the reverse)
  * are paired in order, and the points between a pair form a group; a mismatch left unpaired reaches
- * to the nearer end of the run. Pairing, rather than taking the whole run, matters when every
+ * to the nearer end of the run, or across the whole run when it lies on the run's edge. Pairing, rather than taking the whole run, matters when every
  * point fails for another reason (a library rotated onto another sheet everywhere) and only one
  * point is also on the wrong side of a cut. The steps are what refinement must confirm
  * (harness/runner/evaluation/confirm-jumps.ts) before the group is called a misplaced cut.
@@ -39,7 +39,15 @@ export function misplacedCutGroups(
     }
     if (mismatched.length % 2 === 1) {
       const m = mismatched[mismatched.length - 1]!;
-      groups.push(end - m <= m + 1 - start ? { from: m + 1, to: end, steps: [m] } : { from: start, to: m, steps: [m] });
+      // The nearer side, unless it is empty: a mismatch on the step entering the run (m = start − 1)
+      // or leaving it (m = end) puts the whole run on one side.
+      const after = end - m;
+      const before = m + 1 - start;
+      groups.push(
+        after > 0 && (after <= before || before === 0)
+          ? { from: m + 1, to: end, steps: [m] }
+          : { from: start, to: m, steps: [m] },
+      );
     }
     start = end + 1;
   }

@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import type { Diagnosis } from '../../../../shared/diagnosis';
 import type { SuiteTargetResult } from '../../../../shared/run-result';
 import { evaluateSuite } from '../../../../harness/runner/evaluation/evaluate-suite';
@@ -61,6 +62,34 @@ describe('confirmJumps through evaluateSuite', () => {
     )!;
     expect(describeOutcome(listed.outcome)).toMatch(
       /^misplaced-cut \(library jumps at t ≈ 0\.164, expected none; confirmed by refining between the samples\)$/,
+    );
+  });
+
+  it('law: a continuous rise of any height 0.5–2 and width 1e-10–1e-2 rad is never a misplaced cut, and a jump of the same height always is (seed 20261205)', async () => {
+    // Widths down to 1e−10 rad: 40 halvings of a 0.098 rad step reach 9e−14 rad, below them.
+    await fc.assert(
+      fc.asyncProperty(
+        fc.double({ min: 0.2, max: 2.8, noNaN: true }),
+        fc.double({ min: -10, max: -2, noNaN: true }),
+        fc.double({ min: 0.5, max: 2, noNaN: true }),
+        async (at, log10Width, height) => {
+          const width = 10 ** log10Width;
+          const rise = referenceTarget('rise@1', (op, [z], v) =>
+            op === 'sqrt' ? [v[0] + height * (0.5 + Math.atan((angle(z!) - at) / width) / Math.PI), v[1]] : v,
+          );
+          const jump = referenceTarget('jump@1', (op, [z], v) =>
+            op === 'sqrt' && angle(z!) > at ? [v[0] + height, v[1]] : v,
+          );
+          const continuous = diagnoses(await evaluateSuite(suite, rise, { cache }));
+          const jumped = diagnoses(await evaluateSuite(suite, jump, { cache }));
+          return (
+            continuous.every((d) => d.kind !== 'misplaced-cut') &&
+            jumped.length > 0 &&
+            jumped.some((d) => d.kind === 'misplaced-cut' && d.confirmed === true)
+          );
+        },
+      ),
+      { seed: 20261205, numRuns: 25 },
     );
   });
 });
