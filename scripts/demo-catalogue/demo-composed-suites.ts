@@ -1,4 +1,5 @@
 import type { SuiteInput } from '../../shared/schemas/suite-schema';
+import { DEMO_VALUE_TOLERANCE } from './demo-value-tolerance';
 
 const z = (re: string, im: string) => ({ re, im });
 
@@ -27,7 +28,7 @@ export const DEMO_COMPOSED_SUITES: SuiteInput[] = [
         samples: 7,
       },
     ],
-    tolerances: { values: { ulps: 4 } },
+    tolerances: { values: DEMO_VALUE_TOLERANCE },
     properties: [],
   },
 ];

@@ -17,10 +17,11 @@ import type { PathRun } from './path-run';
 /**
  * One path of a suite against one target, in named steps: the expected values (expectedColumnOf)
  * and the library's (evaluateProgram) at every point; checkPoints compares them; traceSteps puts
- * a composed subject's steps beside the reference's at each failure; diagnoseFailures explains
- * each failure; compareAlongPath finds jumps, misplaced cuts and the monodromy along a
- * continuous path; checkAgreement compares the suite's counterparts; listFindings writes the
- * failures out. A path that cannot be built is an error,
+ * a composed subject's steps beside the reference's at the failures whose label depends on them,
+ * and (once the labels are final) at the listed ones; diagnoseFailures explains each failure;
+ * compareAlongPath finds jumps, misplaced cuts and the monodromy along a continuous path;
+ * checkAgreement compares the suite's counterparts; listFindings writes the failures out. A path
+ * that cannot be built is an error,
  * and every point is skipped when the target lacks an operation of the subject.
  */
 export async function evaluatePath(evaluation: PathEvaluation): Promise<PathResult> {
@@ -75,10 +76,11 @@ export async function evaluatePath(evaluation: PathEvaluation): Promise<PathResu
     zeroLostBefore: new Set(),
   };
   checkPoints(run);
-  traceSteps(run);
+  traceSteps(run, 'labels');
   diagnoseFailures(run);
   await compareAlongPath(run);
   await checkAgreement(run);
+  traceSteps(run, 'listed');
   listFindings(run);
   out.skipped = [...run.skipReasons].map(([reason, count]) => ({ reason, count }));
   return out;

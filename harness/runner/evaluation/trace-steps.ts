@@ -52,11 +52,13 @@ const toDouble = (a: Approximation): ComplexDouble => [a.re.toDouble(), a.im.toD
  * last step's reference is the expected value: the branch continued along the cut plane.
  *
  * Cost: one reference evaluation of the whole subject per traced point, as the expected value
- * took (the expected value may have come from the cache, these do not). Traced are the listed
- * failures (listed-points.ts) and the failures on an axis under signed zeros, whose label depends
- * on the steps, up to TRACE_LIMIT a path; the others are counted under their label without steps.
+ * took (the expected value may have come from the cache, these do not). Called twice: in phase
+ * `labels`, before the diagnosis, for the failures on an axis under signed zeros, whose label
+ * depends on the steps; in phase `listed`, once the labels are final, for the listed failures
+ * (listed-points.ts), up to TRACE_LIMIT a path in all; the others are counted under their label
+ * without steps.
  */
-export function traceSteps(run: PathRun): void {
+export function traceSteps(run: PathRun, phase: 'labels' | 'listed'): void {
   if (run.failing.length === 0) return;
   const principal = run.suite.branch.kind === 'principal';
   const steps = run.program.steps;
@@ -68,15 +70,17 @@ export function traceSteps(run: PathRun): void {
   const columns = run.actual.steps ?? [];
   const tol = run.suite.tolerances.values;
   const { re, im } = run.inputs;
-  // The listed failures, and every failure whose diagnosis could blame the input's zero sign (an
-  // input on an axis under signed zeros: diagnose-failures.ts): not every failure of a long path.
-  const listed = new Set(listedPoints(run));
   const signedZero = run.suite.convention === 'signed-zero';
   const onAxis = (i: number) => composed && signedZero && (re[i] === 0 || im[i] === 0);
-  // Those whose label depends on the steps first, then the listed ones, at most TRACE_LIMIT.
-  const traced = [...run.failing.filter(onAxis), ...run.failing.filter((i) => listed.has(i) && !onAxis(i))];
-  // A single call only looks for a choice, which costs nothing: no limit.
-  for (const i of composed ? traced.slice(0, TRACE_LIMIT) : traced) {
+  // Before the diagnosis: the failures whose label depends on the steps (diagnose-failures.ts).
+  // Once the labels are final: the listed failures not traced yet (listed-points.ts). Composed
+  // subjects at most TRACE_LIMIT a path; a single call only looks for a choice, which costs nothing.
+  const candidates =
+    phase === 'labels'
+      ? run.failing.filter(onAxis)
+      : listedPoints(run).filter((i) => run.outcomes[i]?.kind === 'fail' && !run.traces.has(i));
+  const room = composed ? Math.max(0, TRACE_LIMIT - run.traces.size) : candidates.length;
+  for (const i of candidates.slice(0, room)) {
     if (run.signal?.aborted) return;
     const z = BigComplex.fromDoubles(re[i] as number, im[i] as number);
     if (!composed) {

@@ -3,7 +3,7 @@ import { misplacedCutGroups } from '../../../harness/checks/misplaced-cut-groups
 
 const bad: Diagnosis = { kind: 'unexplained', relativeError: 1 };
 /** Points 3..6 fail; step i joins points i and i + 1. */
-const failing = [null, null, null, bad, bad, bad, bad, null, null];
+const failing = [null, null, null, [bad], [bad], [bad], [bad], null, null];
 const none = new Array(8).fill(0);
 const jumpAt = (i: number) => none.map((_, k) => (k === i ? 1 : 0));
 
