@@ -5,6 +5,7 @@ import { formatJunit } from '../../../../harness/runner/formats/format-junit';
 import { formatTable } from '../../../../harness/runner/formats/format-table';
 import { seededReferenceCache } from '../../../setup/seeded-reference-cache';
 import { runPlan } from '../../../../harness/runner/plan/run-plan';
+import { mutantTarget } from '../../../../harness/runner/evaluation/mutant-target';
 import type { TargetDescriptor } from '../../../../harness/adapters/target-descriptor';
 import { loadDemoSuite } from '../support/load-demo-suite';
 import { referenceTarget } from '../support/reference-target';
@@ -119,5 +120,38 @@ describe('output formats', () => {
     expect(branchAt).toBeGreaterThan(0);
     expect(accuracyAt).toBeGreaterThan(branchAt);
     expect(table.slice(accuracyAt)).toMatch(/→ inaccurate, \d+ ulps in re, relative error/);
+  });
+});
+
+describe('output formats for a composed subject and a choice', () => {
+  it('the table and JUnit show each step beside the reference, the first to leave, and the choice behind an expected value', async () => {
+    const viaExpLog: TargetDescriptor = {
+      name: 'exp-log-pow@1',
+      library: 'oracle',
+      version: '1',
+      settings: {},
+      open: () => mutantTarget(referenceTarget('exp-log-pow@1'), 'inexact-intermediate'),
+    };
+    // mpmath 1.3 answers acoth(0) = iπ/2; the reference pushes 1/0 through IEEE arithmetic: −iπ/2.
+    const likeMpmath: TargetDescriptor = {
+      name: 'like-mpmath@1',
+      library: 'oracle',
+      version: '1',
+      settings: {},
+      open: () =>
+        referenceTarget('like-mpmath@1', (op, [z], v) =>
+          op === 'acoth' && z![0] === 0 && z![1] === 0 ? [0, Math.PI / 2] : v,
+        ),
+    };
+    const steps = await runPlan(buildPlan([loadDemoSuite('log-of-a-power-principal-steps')], [viaExpLog]), { cache });
+    const choice = await runPlan(buildPlan([loadDemoSuite('acoth-principal-sz')], [likeMpmath]), { cache });
+    const stepLine =
+      'steps: 1. pow(z, 13) = −1 − 1.9606728399089416e-15i (reference −1 + 0i), the first step to leave the reference; 2. log(pow(z, 13))';
+    expect(formatTable(steps, 100)).toContain(stepLine);
+    expect(formatJunit(steps)).toContain(stepLine.replace(/−/g, '-'));
+    expect(formatTable(choice, 100)).toContain(
+      'expected value is a choice: acoth z = atanh(1/z) is defined for z ≠ 0 only',
+    );
+    expect(formatJunit(choice)).toContain('choice   : a choice: acoth z = atanh(1/z)');
   });
 });
