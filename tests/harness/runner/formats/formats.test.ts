@@ -6,6 +6,7 @@ import { formatTable } from '../../../../harness/runner/formats/format-table';
 import { seededReferenceCache } from '../../../setup/seeded-reference-cache';
 import { runPlan } from '../../../../harness/runner/plan/run-plan';
 import { mutantTarget } from '../../../../harness/runner/evaluation/mutant-target';
+import type { Target } from '../../../../harness/adapters/target';
 import type { TargetDescriptor } from '../../../../harness/adapters/target-descriptor';
 import { loadDemoSuite } from '../support/load-demo-suite';
 import { referenceTarget } from '../support/reference-target';
@@ -125,24 +126,18 @@ describe('output formats', () => {
 
 describe('output formats for a composed subject and a choice', () => {
   it('the table and JUnit show each step beside the reference, the first to leave, and the choice behind an expected value', async () => {
-    const viaExpLog: TargetDescriptor = {
-      name: 'exp-log-pow@1',
-      library: 'oracle',
-      version: '1',
-      settings: {},
-      open: () => mutantTarget(referenceTarget('exp-log-pow@1'), 'inexact-intermediate'),
+    // Opened fresh for each pair, as a descriptor opens a library.
+    const oracle = (open: () => Target): TargetDescriptor => {
+      const { name, library, version, settings } = open();
+      return { name, library, version, settings, open };
     };
+    const viaExpLog = oracle(() => mutantTarget(referenceTarget('exp-log-pow@1'), 'inexact-intermediate'));
     // mpmath 1.3 answers acoth(0) = iπ/2; the reference pushes 1/0 through IEEE arithmetic: −iπ/2.
-    const likeMpmath: TargetDescriptor = {
-      name: 'like-mpmath@1',
-      library: 'oracle',
-      version: '1',
-      settings: {},
-      open: () =>
-        referenceTarget('like-mpmath@1', (op, [z], v) =>
-          op === 'acoth' && z![0] === 0 && z![1] === 0 ? [0, Math.PI / 2] : v,
-        ),
-    };
+    const likeMpmath = oracle(() =>
+      referenceTarget('like-mpmath@1', (op, [z], v) =>
+        op === 'acoth' && z![0] === 0 && z![1] === 0 ? [0, Math.PI / 2] : v,
+      ),
+    );
     const steps = await runPlan(buildPlan([loadDemoSuite('log-of-a-power-principal-steps')], [viaExpLog]), { cache });
     const choice = await runPlan(buildPlan([loadDemoSuite('acoth-principal-sz')], [likeMpmath]), { cache });
     const stepLine =
