@@ -32,9 +32,9 @@ interface Bracket {
   libB: [number, number];
   expA: [number, number];
   expB: [number, number];
+  /** The jumping side's change over the whole step. */
   first: number;
   done: boolean;
-  confirmed: boolean;
 }
 
 const change = (p: [number, number], q: [number, number]): number => Math.hypot(q[0] - p[0], q[1] - p[1]);
@@ -89,7 +89,6 @@ export async function confirmJumps(
       expB,
       first,
       done: false,
-      confirmed: false,
     });
   }
   for (let level = 0; level < LEVELS; level++) {
