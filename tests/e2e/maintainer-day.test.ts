@@ -1,3 +1,6 @@
+import { readdirSync } from 'node:fs';
+import path from 'node:path';
+import { DEMO_PLANS } from '../../server/seed/demo-plans';
 import { DEMO_USERS } from '../../server/seed/demo-users';
 import { browserPerTest } from './support/browser-per-test';
 import { goTo } from './support/go-to';
@@ -6,6 +9,13 @@ import { signOut } from './support/sign-out';
 
 const b = browserPerTest();
 const user = (email: string) => DEMO_USERS.find((u) => u.email === email)!;
+// The nightly's shards: each of its demo suites against the two newest complex.js releases.
+const NIGHTLY = DEMO_PLANS.find((p) => p.name === 'complex.js nightly')!;
+const NIGHTLY_SHARDS =
+  2 *
+  readdirSync(path.join(__dirname, '..', '..', 'suites', 'demo'))
+    .map((f) => f.replace(/\.json$/, ''))
+    .filter((id) => NIGHTLY.suites(id)).length;
 
 describe("a maintainer's day, one journey through the screens", () => {
   it('runs the nightly plan from Plans, watches it to the end, follows a failing cell to a case, sees the plane, accepts the deviation; the admin reads the regression mail', async () => {
@@ -17,8 +27,10 @@ describe("a maintainer's day, one journey through the screens", () => {
     await b.page.waitForURL(/\/runs\/[0-9a-f-]{36}$/);
     const runId = new URL(b.page.url()).pathname.split('/').pop()!;
 
-    // Progress while it runs, then the verdict without a reload (50 shards on one worker).
-    await b.page.getByRole('progressbar', { name: /^Progress: \d+ of 50 shards/ }).waitFor();
+    // Progress while it runs, then the verdict without a reload (all its shards on one worker).
+    await b.page
+      .getByRole('progressbar', { name: new RegExp(`^Progress: \\d+ of ${NIGHTLY_SHARDS} shards`) })
+      .waitFor();
     await b.page.getByLabel('status: completed with failures').first().waitFor({ timeout: 150_000 });
     await b.page
       .getByTestId('checked-scope-note')

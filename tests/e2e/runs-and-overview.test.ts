@@ -85,7 +85,7 @@ describe('Overview and runs', () => {
   it('follows a run started through the API live, and cancels it after a confirm step', async () => {
     await signIn(b.page, kwame.email, kwame.password);
     // A plan big enough to be caught running: every approved suite against every installed
-    // complex.js release (~300 shards). The demo nightly's 50 shards end within seconds.
+    // complex.js release (~300 shards). The demo nightly's shards (two per suite) end within seconds.
     const suites = await api<{ body: { suites: { slug: string }[] } }>('/suites?status=approved');
     const targets = await api<{ body: { targets: { name: string; library: string; installed: boolean }[] } }>(
       '/targets',
