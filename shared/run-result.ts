@@ -115,6 +115,10 @@ export interface PathResult {
   findingsOmitted: number;
   /** Why points were skipped (no such operation, no reference value there), with how many each. */
   skipped: { reason: string; count: number }[];
+  /** The entry this path's inputs went in through (shared/target-entry.ts), when it names its own. */
+  entry?: string;
+  /** Why points were not applicable to the entry (counts.notApplicable), with how many each. */
+  notApplicable?: { reason: string; count: number }[];
   /** An error that stopped the whole path (its points count as errors). */
   error?: string;
 }
@@ -126,6 +130,8 @@ export interface CheckedScope {
   tolerance: string;
   paths: number;
   points: number;
+  /** The target's entry the suite's inputs went in through (shared/target-entry.ts); absent in results stored before entries. */
+  entry?: string;
   /** Property laws the suite lists, and whether this run checked them. */
   properties: { listed: string[]; run: boolean; note: string };
 }

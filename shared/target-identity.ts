@@ -1,3 +1,5 @@
+import type { TargetEntry } from './target-entry';
+
 /** What names a target: one installed library at one version with its settings (docs/vocabulary.md). */
 export interface TargetIdentity {
   /** Unique, usable as `--target`: "complex.js@2.4.1", "mathjs@15.2.0/number/predictable", "cmath@3.11.2". */
@@ -5,4 +7,9 @@ export interface TargetIdentity {
   library: string;
   version: string;
   settings: Record<string, string | number | boolean>;
+  /**
+   * The entries the target offers (shared/target-entry.ts), its default first. Absent on identities
+   * stored before entries existed and on results, which name the entry they used instead.
+   */
+  entries?: TargetEntry[];
 }

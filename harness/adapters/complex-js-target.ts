@@ -1,23 +1,26 @@
-import type { ComplexPair } from './complex-pair';
+import { complexJsEntryWays } from './complex-js-entry-ways';
+import { COMPLEX_JS_ENTRIES } from './complex-js-entries';
+import { entryBuilders } from './entry-builders';
 import { evaluateColumns } from './evaluate-columns';
 import { evaluateEach } from './evaluate-each';
 import { OP_ARITY } from './op-arity';
 import type { Target } from './target';
-import { withExactParts } from './with-exact-parts';
 
 interface ComplexJsValue {
   re: number;
   im: number;
   [method: string]: unknown;
 }
-type ComplexJsClass = { new (re: number, im: number): ComplexJsValue; prototype: Record<string, unknown> };
+type ComplexJsClass = Parameters<typeof complexJsEntryWays>[0] & { prototype: Record<string, unknown> };
 
 /**
  * complex.js at one installed version (`alias` is the package name or its npm alias,
  * e.g. "complex.js-2.4.1"). The package is required on first use, not before.
  *
- * Arguments are built with `new Complex(re, im)` and then given their exact parts
- * (with-exact-parts.ts). An operation whose method the version lacks (every
+ * Arguments are built through the entry asked for (complex-js-entries.ts; `new Complex(re, im)`
+ * by default) and never patched afterwards, so a constructor that drops a −0 (complex.js 2.4.1)
+ * is seen as a user of that constructor sees it. An earlier step's value goes to the next
+ * step as the library's own object. An operation whose method the version lacks (every
  * version from 2.0.11 to 2.4.3 lacks cbrt and nthroot) is unsupported and answers
  * an error per call.
  */
@@ -31,38 +34,40 @@ export function complexJsTarget(alias: string, version: string): Target {
     Complex = mod.default ?? mod;
     return Complex;
   };
+  const name = `complex.js@${version}`;
+  const builder = entryBuilders({ name, entries: [...COMPLEX_JS_ENTRIES] }, () => complexJsEntryWays(load()));
   // complex.js names its methods after the catalogue's operations (sqrt, acoth, add, neg, …).
   const has = (op: string): boolean => op in OP_ARITY && typeof load().prototype[op] === 'function';
-  const make = (z: ComplexPair): ComplexJsValue => withExactParts(new (load())(z[0], z[1]), z);
+  const apply = (op: string, values: unknown[]): unknown => {
+    const [z, ...rest] = values as [ComplexJsValue, ...unknown[]];
+    return (z[op] as (...a: unknown[]) => unknown).apply(z, rest);
+  };
   return {
-    name: `complex.js@${version}`,
+    name,
     library: 'complex.js',
     version,
     settings: { package: alias },
+    entries: [...COMPLEX_JS_ENTRIES],
     supports: async (op) => has(op),
-    evaluate: async (op, calls) => {
+    evaluate: async (op, calls, entry) => {
       if (!has(op)) return calls.map(() => ({ error: `complex.js ${version} has no ${op}` }));
-      return evaluateEach(op, calls, (args) => {
-        const [z, ...rest] = args.map(make) as [ComplexJsValue, ...ComplexJsValue[]];
-        return (z[op] as (...a: ComplexJsValue[]) => unknown).apply(z, rest);
-      });
+      const build = builder(entry);
+      return evaluateEach(op, calls, (args) => apply(op, args.map(build)));
     },
-    evaluateColumns: async (op, args, n, skip) => {
+    evaluateColumns: async (op, args, n, skip, entry) => {
+      const build = builder(entry);
       if (!has(op))
-        return evaluateColumns(op, args, n, skip, () => {
+        return evaluateColumns(op, args, n, skip, build, () => {
           throw new Error(`complex.js ${version} has no ${op}`);
         });
       if (args.length === 1) {
         // One argument: no array per call.
-        return evaluateColumns(op, args, n, skip, (pairs) => {
-          const z = make(pairs[0] as ComplexPair);
+        return evaluateColumns(op, args, n, skip, build, (values) => {
+          const z = values[0] as ComplexJsValue;
           return (z[op] as () => unknown).call(z);
         });
       }
-      return evaluateColumns(op, args, n, skip, (pairs) => {
-        const [z, ...rest] = pairs.map(make) as [ComplexJsValue, ...ComplexJsValue[]];
-        return (z[op] as (...a: ComplexJsValue[]) => unknown).apply(z, rest);
-      });
+      return evaluateColumns(op, args, n, skip, build, (values) => apply(op, values));
     },
     close: async () => undefined,
   };

@@ -1,5 +1,6 @@
 import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
+import { CMATH_ENTRIES } from './cmath-entries';
 import { complexJsTarget } from './complex-js-target';
 import { installedVersion } from './installed-version';
 import { jsMathTarget } from './js-math-target';
@@ -55,6 +56,7 @@ export function discoverTargets(root: string = PROJECT_ROOT, python: string = DE
         library: 'cmath',
         version: cmathVersion,
         settings: { protocol: 'stdio', command: `${python} ${path.relative(root, script)}` },
+        entries: [...CMATH_ENTRIES],
         command: python,
         args: [script],
       });
@@ -72,7 +74,7 @@ export function discoverTargets(root: string = PROJECT_ROOT, python: string = DE
   );
 }
 
-/** The naming fields of a target; creating a target object loads nothing. */
+/** The naming fields of a target and its entries; creating a target object loads nothing. */
 function describe(t: TargetIdentity): TargetIdentity {
-  return { name: t.name, library: t.library, version: t.version, settings: t.settings };
+  return { name: t.name, library: t.library, version: t.version, settings: t.settings, entries: t.entries };
 }

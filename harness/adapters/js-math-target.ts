@@ -1,4 +1,7 @@
+import type { TargetEntry } from '../../shared/target-entry';
+import { ENTRY_CARRIES } from './entry-carries';
 import { evaluateEach } from './evaluate-each';
+import { findEntry } from './find-entry';
 import { OP_ARITY } from './op-arity';
 import type { Target } from './target';
 
@@ -21,6 +24,14 @@ const REAL: Readonly<Record<string, (...x: number[]) => number>> = {
   neg: (a) => -(a as number),
 };
 
+/** Math's one entry: a plain number. */
+const NUMBER_ENTRY: TargetEntry = {
+  name: 'number',
+  call: 'a plain number re',
+  default: true,
+  carries: ENTRY_CARRIES.realOnly,
+};
+
 /**
  * JavaScript's `Math` functions (and the real operators) for real-line suites: each
  * argument must have a zero imaginary part, and the result is real with a +0
@@ -29,15 +40,20 @@ const REAL: Readonly<Record<string, (...x: number[]) => number>> = {
 export function jsMathTarget(): Target {
   const version = process.versions.node;
   const has = (op: string): boolean => op in OP_ARITY && op in REAL;
+  const name = `js-math@${version}`;
+  const entries = [NUMBER_ENTRY];
   return {
-    name: `js-math@${version}`,
+    name,
     library: 'JavaScript Math',
     version,
     settings: { runtime: 'node', v8: process.versions.v8 },
+    entries,
     supports: async (op) => has(op),
-    evaluate: async (op, calls) => {
+    evaluate: async (op, calls, entry) => {
       const fn = REAL[op];
       if (!fn || !has(op)) return calls.map(() => ({ error: `Math has no ${op}` }));
+      const found = findEntry({ name, entries }, entry);
+      if (found instanceof Error) return calls.map(() => ({ error: found.message }));
       return evaluateEach(op, calls, (args) => {
         const nonReal = args.find(([, im]) => im !== 0);
         if (nonReal) throw new RangeError(`a real-line target takes real arguments, got imaginary part ${nonReal[1]}`);

@@ -14,7 +14,9 @@ type MathInstance = {
 /**
  * Every way mathjs takes a complex number: math.complex with two numbers, an object
  * and a string, the Complex class, the expression parser (a literal, complex(...) in
- * an expression, variables from a scope), and mixed real/complex arithmetic.
+ * an expression, variables from a scope), mixed real/complex arithmetic, and the plain number
+ * real-line code passes (a value that is not real cannot be a number, and goes in as
+ * math.complex; a suite never sends one through the number entry, shared/target-entry.ts).
  */
 export function mathjsEntryWays(math: MathInstance): Record<string, (z: ComplexPair) => unknown> {
   return {
@@ -27,5 +29,6 @@ export function mathjsEntryWays(math: MathInstance): Record<string, (z: ComplexP
       math.evaluate(`complex(${formatDouble(re)}, ${formatDouble(im)})`),
     'math.evaluate("a + b i", { a: re, b: im })': ([re, im]) => math.evaluate('a + b i', { a: re, b: im }),
     'math.add(re, math.multiply(im, math.i))': ([re, im]) => math.add(re, math.multiply(im, math.i)),
+    're as a plain number': ([re, im]) => (im === 0 ? re : math.complex(re, im)),
   };
 }

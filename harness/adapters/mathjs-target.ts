@@ -1,12 +1,14 @@
 import type { ComplexPair } from './complex-pair';
+import { entryBuilders } from './entry-builders';
 import { evaluateColumns } from './evaluate-columns';
 import { evaluateEach } from './evaluate-each';
 import { OP_ARITY } from './op-arity';
+import { mathjsEntries } from './mathjs-entries';
+import { mathjsEntryWays } from './mathjs-entry-ways';
 import type { Target } from './target';
-import { withExactParts } from './with-exact-parts';
 
 type MathFunction = (...args: unknown[]) => unknown;
-type MathInstance = Record<string, unknown> & { complex(re: number, im: number): { re: number; im: number } };
+type MathInstance = Record<string, unknown> & Parameters<typeof mathjsEntryWays>[0];
 
 /** mathjs's function names where they differ from the catalogue's. */
 const FUNCTION: Readonly<Record<string, string>> = {
@@ -21,13 +23,14 @@ const FUNCTION: Readonly<Record<string, string>> = {
 /**
  * mathjs at one installed version, in its own instance `create(all, { predictable })`.
  *
- * Entry point `complex`: every argument goes in as `math.complex(re, im)` (parts set
- * exactly afterwards, with-exact-parts.ts). Entry point `number`: an argument
- * with a zero imaginary part (either sign) goes in as the plain number re, the way
- * real-line code calls mathjs; others still go in as complex. So the number entry
- * point cannot see the sign of a zero imaginary part, which is the point of testing
- * it: `sqrt(-4)` is 2i with predictable off and NaN with predictable on.
- * nthroot's degree always goes in as a number. Loaded with `require` on first use:
+ * Every argument is built through the entry asked for (mathjs-entries.ts) and never patched
+ * afterwards; `entry` (the end of the target's name) is the default. Entry `complex`:
+ * `math.complex(re, im)`. Entry `number`: the plain number re, the way real-line code calls
+ * mathjs; it cannot carry the sign of a zero imaginary part, which is the point of testing it:
+ * `sqrt(-4)` is 2i with predictable off and NaN with predictable on (a suite's point with an
+ * imaginary part, or a −0 one under signed-zero, is not applicable to it). An earlier step's
+ * value goes to the next step as mathjs returned it (a number or a Complex), as user code would
+ * pass it. nthroot's degree always goes in as a number. Loaded with `require` on first use:
  * `require('mathjs')` costs about a second (docs/conventions.md).
  */
 export function mathjsTarget(
@@ -48,33 +51,36 @@ export function mathjsTarget(
   };
   const functionOf = (op: string): string => FUNCTION[op] ?? op;
   const has = (op: string): boolean => op in OP_ARITY && typeof load()[functionOf(op)] === 'function';
-  const argument = (z: ComplexPair): unknown =>
-    entry === 'number' && z[1] === 0 ? z[0] : withExactParts(load().complex(z[0], z[1]), z);
+  const name = `mathjs@${version}/${entry}${predictable ? '/predictable' : ''}`;
+  const entries = mathjsEntries(entry);
+  const builder = entryBuilders({ name, entries }, () => mathjsEntryWays(load()));
   return {
-    name: `mathjs@${version}/${entry}${predictable ? '/predictable' : ''}`,
+    name,
     library: 'mathjs',
     version,
     settings: { package: alias, entry, predictable, 'complex.js': complexJsVersion },
+    entries,
     supports: async (op) => has(op),
-    evaluate: async (op, calls) => {
+    evaluate: async (op, calls, entryName) => {
       if (!has(op)) return calls.map(() => ({ error: `mathjs ${version} has no ${functionOf(op)}` }));
       const fn = load()[functionOf(op)] as MathFunction;
+      const build = builder(entryName);
       return evaluateEach(op, calls, (args) => {
         const [z, n] = args as [ComplexPair, ComplexPair | undefined];
-        if (op === 'nthroot' && n) return fn(argument(z), n[0]);
-        return fn(...args.map(argument));
+        if (op === 'nthroot' && n) return fn(build(z), n[0]);
+        return fn(...args.map(build));
       });
     },
-    evaluateColumns: async (op, args, n, skip) => {
+    evaluateColumns: async (op, args, n, skip, entryName) => {
+      const build = builder(entryName);
       if (!has(op))
-        return evaluateColumns(op, args, n, skip, () => {
+        return evaluateColumns(op, args, n, skip, build, () => {
           throw new Error(`mathjs ${version} has no ${functionOf(op)}`);
         });
       const fn = load()[functionOf(op)] as MathFunction;
-      return evaluateColumns(op, args, n, skip, (pairs) => {
-        const [z, m] = pairs as [ComplexPair, ComplexPair | undefined];
-        if (op === 'nthroot' && m) return fn(argument(z), m[0]);
-        return fn(...pairs.map(argument));
+      return evaluateColumns(op, args, n, skip, build, (values, pairs) => {
+        if (op === 'nthroot') return fn(values[0], (pairs[1] as ComplexPair)[0]);
+        return fn(...values);
       });
     },
     close: async () => undefined,

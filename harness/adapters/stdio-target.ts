@@ -4,6 +4,7 @@ import { formatDouble } from '../reference/numbers/format-double';
 import { parseDouble } from '../reference/numbers/parse-double';
 import type { CallResult } from './call-result';
 import type { ComplexPair } from './complex-pair';
+import { findEntry } from './find-entry';
 import { OP_ARITY } from './op-arity';
 import type { Target } from './target';
 import type { TargetIdentity } from '../../shared/target-identity';
@@ -24,7 +25,8 @@ export interface StdioTargetOptions extends TargetIdentity {
 
 /** A stdio target, with the raw request for operations beyond the catalogue (`entry-points`). */
 export interface StdioTarget extends Target {
-  request(op: string, args: unknown[]): Promise<Reply>;
+  /** `entry` names the way the program builds the arguments (docs/stdio-protocol.md); absent, its default. */
+  request(op: string, args: unknown[], entry?: string): Promise<Reply>;
   /** The running program's pid, or null when none runs (not started yet, or ended). */
   processId(): number | null;
 }
@@ -92,7 +94,7 @@ export function stdioTarget(options: StdioTargetOptions): StdioTarget {
     proc.kill('SIGKILL');
   };
 
-  const send = (op: string, args: unknown[]): Promise<Reply> =>
+  const send = (op: string, args: unknown[], entry?: string): Promise<Reply> =>
     new Promise<Reply>((resolve) => {
       // A fresh program first has to start: that time is not the library's. Python with cmath
       // starts in ~40 ms on an idle machine, but took over 400 ms with the load at 7.
@@ -128,12 +130,12 @@ export function stdioTarget(options: StdioTargetOptions): StdioTarget {
         },
         onExit: (what) => finish({ error: withStderr(what) }, false),
       };
-      proc.stdin.write(JSON.stringify({ id, op, args }) + '\n');
+      proc.stdin.write(JSON.stringify(entry === undefined ? { id, op, args } : { id, op, args, entry }) + '\n');
     });
 
   // One request at a time, in the order asked.
-  const request = (op: string, args: unknown[]): Promise<Reply> => {
-    const next = queue.then(() => send(op, args));
+  const request = (op: string, args: unknown[], entry?: string): Promise<Reply> => {
+    const next = queue.then(() => send(op, args, entry));
     queue = next.catch(() => undefined);
     return next;
   };
@@ -154,15 +156,20 @@ export function stdioTarget(options: StdioTargetOptions): StdioTarget {
     library: options.library,
     version: options.version,
     settings: options.settings,
+    ...(options.entries ? { entries: options.entries } : {}),
     request,
     processId: () => child?.pid ?? null,
     supports: async (op) => {
       const known = await describe();
       return typeof known !== 'string' && known.has(op) && op in OP_ARITY;
     },
-    evaluate: async (op, calls) => {
+    evaluate: async (op, calls, entry) => {
       const known = await describe();
       if (typeof known === 'string') return calls.map(() => ({ error: known }));
+      // An entry the target declares no such thing as is refused here, naming its entries; one it
+      // declares goes with the request (the default is sent as no entry, which older programs read).
+      const found = findEntry(options, entry);
+      if (found instanceof Error) return calls.map(() => ({ error: found.message }));
       const arity = OP_ARITY[op];
       if (arity === undefined || !known.has(op)) return calls.map(() => ({ error: `${options.library} has no ${op}` }));
       const results: CallResult[] = calls.map((args) =>
@@ -176,7 +183,7 @@ export function stdioTarget(options: StdioTargetOptions): StdioTarget {
         const args = calls[i] as ComplexPair[];
         return arity === 1 ? wirePair(args[0] as ComplexPair) : args.map(wirePair);
       });
-      const answer = await request(op, wire);
+      const answer = await request(op, wire, found.default ? undefined : found.name);
       const batchError =
         'error' in answer ? answer.error : 'error' in answer.reply ? `program: ${String(answer.reply.error)}` : null;
       const items = 'reply' in answer ? answer.reply.results : undefined;

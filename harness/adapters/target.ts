@@ -7,18 +7,17 @@ import type { TargetIdentity } from '../../shared/target-identity';
  * A library under test. `evaluate` takes a batch: one item per call, each the list of
  * that call's arguments (one pair for sqrt, two for pow), and answers one result per
  * item in order. A call the library cannot make gives an error result, never a throw.
+ * `entry` names the way every argument is built (shared/target-entry.ts, one of `entries`);
+ * absent, the target's default. Values are built that way and never patched afterwards.
  */
 export interface Target extends TargetIdentity {
   supports(op: string): Promise<boolean>;
-  /**
-   * `entry`: the target's entry to build the arguments with (docs/suite-format.md); absent, its
-   * default. Passed only when a suite or a counterpart names one.
-   */
   evaluate(op: string, calls: ComplexPair[][], entry?: string): Promise<CallResult[]>;
   /**
    * Optional: the same calls column-wise, `n` points, skipping the indices in `skip` (they keep
    * their error). Same values and errors as `evaluate`; an in-process library answers this way
-   * without an array per call, which keeps the runner's check loop near a bare loop's speed.
+   * without an array per call, which keeps the runner's check loop near a bare loop's speed, and
+   * takes an argument column's own `values` (an earlier step's library values) as they are.
    */
   evaluateColumns?(
     op: string,

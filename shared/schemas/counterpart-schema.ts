@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { entryNameSchema } from './entry-name-schema';
 import { objectError } from './object-error';
 import { textSchema } from './text-schema';
 
@@ -17,10 +18,7 @@ export const counterpartSchema = z
         .min(1, { error: 'must not be empty' })
         .max(400, { error: 'must be at most 400 characters' })
         .optional(),
-      entry: textSchema()
-        .regex(/^[a-z0-9]+([-.][a-z0-9]+)*$/, { error: 'must be an entry name: lower-case words joined by hyphens' })
-        .max(60, { error: 'must be at most 60 characters' })
-        .optional(),
+      entry: entryNameSchema.optional(),
     },
     { error: objectError },
   )

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { textSchema } from './text-schema';
 import { complexString, numberString } from './complex-string';
+import { entryNameSchema } from './entry-name-schema';
 import { objectError } from './object-error';
 
 /** An angle: a number string (radians) or an exact rational multiple of π ("pi", "-pi/2", "3pi/4"). */
@@ -14,6 +15,8 @@ export const angleString = z.union(
 const name = textSchema('is required')
   .min(1, { error: 'is required' })
   .max(80, { error: 'must be at most 80 characters' });
+/** The target's entry this path's inputs go in through; absent, the suite's (docs/suite-format.md). */
+const entry = entryNameSchema.optional();
 const samples = z
   .number({ error: 'must be a whole number' })
   .int({ error: 'must be a whole number' })
@@ -37,6 +40,7 @@ const circle = z
     {
       kind: z.literal('circle'),
       name,
+      entry,
       center: complexString,
       radius: numberString,
       start_angle: angleString.default('0'),
@@ -50,7 +54,7 @@ const circle = z
 
 const segment = z
   .strictObject(
-    { kind: z.literal('segment'), name, from: complexString, to: complexString, ...sampling },
+    { kind: z.literal('segment'), name, entry, from: complexString, to: complexString, ...sampling },
     { error: objectError },
   )
   .refine(oneSampling, ONE_SAMPLING);
@@ -60,6 +64,7 @@ const polyline = z
     {
       kind: z.literal('polyline'),
       name,
+      entry,
       points: z
         .array(complexString)
         .min(2, { error: 'needs at least two points' })
@@ -74,6 +79,7 @@ const straddle = z.strictObject(
   {
     kind: z.literal('straddle'),
     name,
+    entry,
     /** The cut to straddle: a segment, or a ray from `from` through `through` and beyond. */
     cut: z.discriminatedUnion(
       'kind',
@@ -100,6 +106,7 @@ const points = z.strictObject(
   {
     kind: z.literal('points'),
     name,
+    entry,
     points: z
       .array(complexString)
       .min(1, { error: 'needs at least one point' })
@@ -112,6 +119,7 @@ const grid = z.strictObject(
   {
     kind: z.literal('grid'),
     name,
+    entry,
     min: complexString,
     max: complexString,
     columns: z.number().int().min(2).max(2000),

@@ -3,6 +3,7 @@ import { textSchema } from './text-schema';
 import { branchSpecSchema } from './branch-spec-schema';
 import { conventionSchema } from './convention-schema';
 import { counterpartSchema } from './counterpart-schema';
+import { entryNameSchema } from './entry-name-schema';
 import { objectError } from './object-error';
 import { propertyCheckSchema } from './property-check-schema';
 import { suitePathSchema } from './suite-path-schema';
@@ -32,6 +33,11 @@ export const suiteSchema = z
       subject: textSchema('is required')
         .min(1, { error: 'is required' })
         .max(400, { error: 'must be at most 400 characters' }),
+      /**
+       * How the inputs get into the library: one of the target's entries (`sheetkeeper targets`);
+       * absent, the library's documented constructor from two numbers. A path may name its own.
+       */
+      entry: entryNameSchema.optional(),
       branch: branchSpecSchema,
       convention: conventionSchema,
       paths: z

@@ -32,10 +32,29 @@ def write_number(x):
     return repr(x)
 
 
-def read_complex(pair):
+def read_complex(pair, entry="complex"):
+    """Builds the value through the entry the request names (ENTRIES), never patching it."""
     if not isinstance(pair, list) or len(pair) != 2:
         raise ValueError("a complex number is a pair [re, im], got %r" % (pair,))
-    return complex(read_number(pair[0]), read_number(pair[1]))
+    re_, im_ = read_number(pair[0]), read_number(pair[1])
+    if entry == "string":
+        return complex(complex_text(re_, im_))
+    return complex(re_, im_)
+
+
+def complex_text(re_, im_):
+    """z as a person writes it for complex(): "-4.0-0.0j", "nan+infj" (each zero's sign kept as text)."""
+    negative = im_ < 0 or (im_ == 0 and str(im_).startswith("-"))
+    return "%s%s%sj" % (write_number(re_), "-" if negative else "+", write_number(abs(im_)))
+
+
+# The ways a value gets in (docs/stdio-protocol.md, "entries"): the constructor from two
+# numbers is the default; the string form is complex("re±imj").
+EVERYTHING = {"imaginaryPart": True, "realZeroSign": True, "imaginaryZeroSign": True}
+ENTRIES = [
+    {"name": "complex", "call": "complex(re, im)", "default": True, "carries": EVERYTHING},
+    {"name": "string", "call": "complex(\"re±imj\")", "default": False, "carries": EVERYTHING},
+]
 
 
 def write_complex(z):
@@ -70,7 +89,7 @@ def entry_points(pair):
     re_, im_ = read_number(pair[0]), read_number(pair[1])
     ways = {
         "constructor": lambda: complex(re_, im_),
-        "string": lambda: complex(repr(complex(re_, im_))),
+        "string": lambda: complex(complex_text(re_, im_)),
         "mixed-arithmetic": lambda: re_ + im_ * 1j,
         "imaginary-literal-first": lambda: im_ * 1j + re_,
     }
@@ -83,13 +102,13 @@ def entry_points(pair):
     return out
 
 
-def call(op, item):
+def call(op, item, entry):
     try:
         if op in UNARY:
-            return write_complex(UNARY[op](read_complex(item)))
+            return write_complex(UNARY[op](read_complex(item, entry)))
         if not isinstance(item, list) or len(item) != 2:
             raise ValueError("%s takes a list of two pairs" % op)
-        return write_complex(BINARY[op](read_complex(item[0]), read_complex(item[1])))
+        return write_complex(BINARY[op](read_complex(item[0], entry), read_complex(item[1], entry)))
     except (ValueError, OverflowError, ZeroDivisionError) as e:
         return {"error": "%s: %s" % (type(e).__name__, e)}
 
@@ -100,12 +119,21 @@ def answer(request):
         return {"id": rid, "error": "a request is {\"id\", \"op\", \"args\": [...]}"}
     op, args = request["op"], request["args"]
     if op == "describe":
-        return {"id": rid, "library": "cmath", "version": platform.python_version(), "ops": sorted(list(UNARY) + list(BINARY))}
+        return {
+            "id": rid,
+            "library": "cmath",
+            "version": platform.python_version(),
+            "ops": sorted(list(UNARY) + list(BINARY)),
+            "entries": ENTRIES,
+        }
     if op == "entry-points":
         return {"id": rid, "results": [entry_points(item) for item in args]}
     if op not in UNARY and op not in BINARY:
         return {"id": rid, "error": "unsupported op %r" % op}
-    return {"id": rid, "results": [call(op, item) for item in args]}
+    entry = request.get("entry", "complex")
+    if entry not in [e["name"] for e in ENTRIES]:
+        return {"id": rid, "error": "no entry %r; the entries are %s" % (entry, ", ".join(e["name"] for e in ENTRIES))}
+    return {"id": rid, "results": [call(op, item, entry) for item in args]}
 
 
 def main():

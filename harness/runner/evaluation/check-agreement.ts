@@ -34,7 +34,8 @@ export async function checkAgreement(run: PathRun): Promise<void> {
     out.agreements.push(summary);
     const oneSided = new Map<string, number>();
     const say = (reason: string) => oneSided.set(reason, (oneSided.get(reason) ?? 0) + 1);
-    const checked = (i: number) => !expected.skipped.has(i);
+    // Not applicable to the entry: nothing of the suite's own was checked there.
+    const checked = (i: number) => !expected.skipped.has(i) && !run.notApplicable.has(i);
     if (c.unsupported.length > 0) {
       for (let i = 0; i < n; i++)
         if (checked(i) && !actual.errors.has(i))
@@ -42,7 +43,15 @@ export async function checkAgreement(run: PathRun): Promise<void> {
       summary.oneSided = [...oneSided].map(([reason, count]) => ({ reason, count }));
       continue;
     }
-    const other = await evaluateProgram(c.program, run.target, inputs.re, inputs.im, run.signal, c.entry);
+    // A counterpart without an entry of its own goes in through the path's, as the suite's value does.
+    const other = await evaluateProgram(
+      c.program,
+      run.target,
+      inputs.re,
+      inputs.im,
+      run.signal,
+      c.entry ?? run.entry.name,
+    );
     const reference = otherReference(run, c);
     for (let i = 0; i < n; i++) {
       if (!checked(i)) continue;

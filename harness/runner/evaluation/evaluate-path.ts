@@ -1,5 +1,6 @@
 import type { PathResult } from '../../../shared/run-result';
 import { checkAgreement } from './check-agreement';
+import { inexpressibleReason } from '../../adapters/inexpressible-reason';
 import { checkPoints } from './check-points';
 import { compareAlongPath } from './compare-along-path';
 import { diagnoseFailures } from './diagnose-failures';
@@ -58,7 +59,22 @@ export async function evaluatePath(evaluation: PathEvaluation): Promise<PathResu
     out.counts.error = n;
     return out;
   }
-  const actual = await evaluateProgram(evaluation.program, evaluation.target, inputs.re, inputs.im, evaluation.signal);
+  const { entry } = evaluation;
+  if (evaluation.path.entry !== undefined) out.entry = entry.name;
+  const notApplicable = new Map<number, string>();
+  const zeroSigns = evaluation.expectation.zeroSigns;
+  for (let i = 0; i < n; i++) {
+    const reason = inexpressibleReason(entry, [inputs.re[i] as number, inputs.im[i] as number], zeroSigns);
+    if (reason !== null) notApplicable.set(i, reason);
+  }
+  const actual = await evaluateProgram(
+    evaluation.program,
+    evaluation.target,
+    inputs.re,
+    inputs.im,
+    evaluation.signal,
+    entry.name,
+  );
   const run: PathRun = {
     ...evaluation,
     points,
@@ -66,6 +82,7 @@ export async function evaluatePath(evaluation: PathEvaluation): Promise<PathResu
     expected,
     actual,
     out,
+    notApplicable,
     skipReasons: new Map(),
     outcomes: new Array(n).fill(null),
     failing: [],
@@ -83,5 +100,10 @@ export async function evaluatePath(evaluation: PathEvaluation): Promise<PathResu
   traceSteps(run, 'listed');
   listFindings(run);
   out.skipped = [...run.skipReasons].map(([reason, count]) => ({ reason, count }));
+  if (notApplicable.size > 0) {
+    const byReason = new Map<string, number>();
+    for (const reason of notApplicable.values()) byReason.set(reason, (byReason.get(reason) ?? 0) + 1);
+    out.notApplicable = [...byReason].map(([reason, count]) => ({ reason, count }));
+  }
   return out;
 }

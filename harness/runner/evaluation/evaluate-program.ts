@@ -11,6 +11,11 @@ const BATCH = 2048;
  * up to 2048 calls per batch. A call that fails makes that point an error naming the operation;
  * the other points go on. Between batches it checks `signal`: once aborted, the points not yet
  * evaluated get the abort reason as their error and no more calls are made.
+ *
+ * The input is built through `entry` (shared/target-entry.ts) and never patched afterwards. An
+ * in-process library's values stay its own between steps (column-args.ts), as in a user's code;
+ * a stdio library's come back as exact parts and each step builds its arguments again through
+ * the same entry (docs/stdio-protocol.md).
  */
 export async function evaluateProgram(
   program: SubjectProgram,
@@ -39,12 +44,9 @@ export async function evaluateProgram(
     const args = step.args.map((i) => columns[i] as ValueColumn | ComplexPair);
     if (target.evaluateColumns && !signal?.aborted) {
       // In-process libraries answer column-wise: no array per call (bench:harness).
-      const answer =
-        entry === undefined
-          ? await target.evaluateColumns(step.op, args, n, errors)
-          : await target.evaluateColumns(step.op, args, n, errors, entry);
+      const answer = await target.evaluateColumns(step.op, args, n, errors, entry);
       for (const [i, message] of answer.errors) if (!errors.has(i)) errors.set(i, `${step.op}: ${message}`);
-      const col: ValueColumn = { re: answer.re, im: answer.im, errors };
+      const col: ValueColumn = { re: answer.re, im: answer.im, errors, values: answer.values };
       columns.push(col);
       result = col;
       continue;
@@ -66,8 +68,7 @@ export async function evaluateProgram(
         where.push(i);
       }
       if (calls.length === 0) continue;
-      const answers =
-        entry === undefined ? await target.evaluate(step.op, calls) : await target.evaluate(step.op, calls, entry);
+      const answers = await target.evaluate(step.op, calls, entry);
       for (let k = 0; k < where.length; k++) {
         const i = where[k] as number;
         const a = answers[k];

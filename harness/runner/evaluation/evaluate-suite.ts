@@ -3,6 +3,8 @@ import type { DiagnosisKind } from '../../../shared/diagnosis';
 import type { OutcomeCounts, PathResult, SuiteTargetResult } from '../../../shared/run-result';
 import type { Suite } from '../../../shared/schemas/suite-schema';
 import type { SuitePath } from '../../../shared/schemas/suite-path-schema';
+import type { TargetEntry } from '../../../shared/target-entry';
+import { findEntry } from '../../adapters/find-entry';
 import type { Target } from '../../adapters/target';
 import { parseSubject } from '../../expressions/parse-subject';
 import { buildPath } from '../../paths/build-path';
@@ -91,6 +93,24 @@ export async function evaluateSuite(
   let program: SubjectProgram;
   let expectation: Expectation;
   let cacheKey = '';
+  // The entry of each selected path (its own, else the suite's, else the target's default); an
+  // entry the target does not offer makes the pair an error naming it, before any value is computed.
+  const suiteEntry = findEntry(target, suite.entry);
+  const entryOf = new Map<number, TargetEntry>();
+  const missingEntries = new Set<string>();
+  for (const i of selected) {
+    const named = suite.paths[i]?.entry;
+    const found = named === undefined ? suiteEntry : findEntry(target, named);
+    if (found instanceof Error) missingEntries.add(found.message);
+    else entryOf.set(i, found);
+  }
+  if (!(suiteEntry instanceof Error)) result.checked.entry = suiteEntry.name;
+  if (missingEntries.size > 0) {
+    result.errors.push(...[...missingEntries].map((m) => `the suite cannot be evaluated: ${m}`));
+    result.status = 'error';
+    result.durationMs = Date.now() - started;
+    return result;
+  }
   try {
     const expr = parseSubject(suite.subject);
     program = subjectProgram(expr);
@@ -134,6 +154,7 @@ export async function evaluateSuite(
   let done = 0;
   for (let k = 0; k < paths.length; k++) {
     const path = paths[k] as SuitePath;
+    const entry = entryOf.get(selected[k] as number) as TargetEntry;
     const points = built[k] as PathPoint[] | Error;
     if (options.signal?.aborted) {
       // Stopped (cancelled or out of time): the remaining paths are not evaluated.
@@ -162,6 +183,7 @@ export async function evaluateSuite(
       cache,
       cacheKey,
       target,
+      entry,
       program,
       expectation,
       path,

@@ -17,10 +17,18 @@ import { catalogue } from '../../reference/catalogue';
  * - `inexact-intermediate`: pow(z, w) is computed as exp(w·log z) through the base's own exp and
  *   log, the product rounded in doubles: the rounded w·log z leaves a tiny part of either sign
  *   where the power is real (pow(−1 + 0i, 13) = −1 − 1.96e−15i, as complex.js 2.4.3 answers), so
- *   a function applied to that power lands on the other side of its cut.
+ *   a function applied to that power lands on the other side of its cut;
+ * - `drop-negative-zero`: every argument is built as a constructor that turns −0 into +0 would
+ *   build it (complex.js 2.4.1 does, at every entry), for every operation, arithmetic included.
  */
 export type Mutation =
-  'flip-input-zero' | 'conjugate' | 'rotate' | 'add-4-ulps' | 'swap-cut-side' | 'inexact-intermediate';
+  | 'flip-input-zero'
+  | 'conjugate'
+  | 'rotate'
+  | 'add-4-ulps'
+  | 'swap-cut-side'
+  | 'inexact-intermediate'
+  | 'drop-negative-zero';
 
 const ARITHMETIC = new Set(['add', 'sub', 'mul', 'div', 'neg']);
 const ROTATION: ComplexPair = [Math.cos((2 * Math.PI) / 3), Math.sin((2 * Math.PI) / 3)];
@@ -48,10 +56,18 @@ export function mutantTarget(base: Target, mutation: Mutation): Target {
     library: base.library,
     version: base.version,
     settings: { ...base.settings, mutation },
+    ...(base.entries ? { entries: base.entries } : {}),
     supports: (op) => base.supports(op),
     close: () => base.close(),
-    evaluate: async (op, calls) => {
-      if (ARITHMETIC.has(op)) return base.evaluate(op, calls);
+    evaluate: async (op, calls, entry) => {
+      if (mutation === 'drop-negative-zero')
+        // x + 0 is +0 for x = −0 and x itself otherwise: the constructor's own arithmetic that loses the sign.
+        return base.evaluate(
+          op,
+          calls.map((args) => args.map(([re, im]): ComplexPair => [re + 0, im + 0])),
+          entry,
+        );
+      if (ARITHMETIC.has(op)) return base.evaluate(op, calls, entry);
       switch (mutation) {
         case 'flip-input-zero':
           return base.evaluate(
@@ -61,21 +77,23 @@ export function mutantTarget(base: Target, mutation: Mutation): Target {
               const flipped: ComplexPair = im === 0 ? [re, -im] : re === 0 ? [-re, im] : [re, im];
               return [flipped, ...rest];
             }),
+            entry,
           );
         case 'conjugate':
-          return mapValues(await base.evaluate(op, calls), ([re, im]) => [re, -im]);
+          return mapValues(await base.evaluate(op, calls, entry), ([re, im]) => [re, -im]);
         case 'rotate':
-          return mapValues(await base.evaluate(op, calls), ([re, im]) => [
+          return mapValues(await base.evaluate(op, calls, entry), ([re, im]) => [
             re * ROTATION[0] - im * ROTATION[1],
             re * ROTATION[1] + im * ROTATION[0],
           ]);
         case 'add-4-ulps':
-          return mapValues(await base.evaluate(op, calls), ([re, im]) => [up4(re), up4(im)]);
+          return mapValues(await base.evaluate(op, calls, entry), ([re, im]) => [up4(re), up4(im)]);
         case 'inexact-intermediate': {
-          if (op !== 'pow') return base.evaluate(op, calls);
+          if (op !== 'pow') return base.evaluate(op, calls, entry);
           const logs = await base.evaluate(
             'log',
             calls.map(([z]) => [z as ComplexPair]),
+            entry,
           );
           const products = calls.map(([, w], k): ComplexPair => {
             const l = logs[k];
@@ -87,6 +105,7 @@ export function mutantTarget(base: Target, mutation: Mutation): Target {
           const exps = await base.evaluate(
             'exp',
             products.map((p) => [p]),
+            entry,
           );
           return exps.map((e, k) => {
             const l = logs[k];
@@ -95,7 +114,7 @@ export function mutantTarget(base: Target, mutation: Mutation): Target {
         }
         case 'swap-cut-side': {
           const cut = firstCut(op);
-          if (!cut) return base.evaluate(op, calls);
+          if (!cut) return base.evaluate(op, calls, entry);
           return base.evaluate(
             op,
             calls.map(([z, ...rest]) => {
@@ -103,6 +122,7 @@ export function mutantTarget(base: Target, mutation: Mutation): Target {
               if (!onCut(cut, [re, im])) return [[re, im], ...rest];
               return [cut.axis === 'real' ? [re, -im] : [-re, im], ...rest];
             }),
+            entry,
           );
         }
       }

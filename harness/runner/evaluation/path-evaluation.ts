@@ -1,5 +1,6 @@
 import type { SuitePath } from '../../../shared/schemas/suite-path-schema';
 import type { Suite } from '../../../shared/schemas/suite-schema';
+import type { TargetEntry } from '../../../shared/target-entry';
 import type { Target } from '../../adapters/target';
 import type { PathPoint } from '../../paths/path-point';
 import type { Expectation } from '../expectations/expectation';
@@ -14,6 +15,8 @@ export interface PathEvaluation {
   /** The suite's key in the reference cache. */
   cacheKey: string;
   target: Target;
+  /** The entry the path's inputs go in through: the path's, else the suite's, else the target's default. */
+  entry: TargetEntry;
   program: SubjectProgram;
   expectation: Expectation;
   path: SuitePath;

@@ -15,6 +15,8 @@ export interface PathRun extends PathEvaluation {
   actual: ValueColumn;
   /** The result being filled in. */
   out: PathResult;
+  /** Points the entry cannot express (inexpressible-reason.ts), with why: not applicable, never evaluated as failures. */
+  notApplicable: Map<number, string>;
   /** Skipped points by reason. */
   skipReasons: Map<string, number>;
   /** Each point's outcome when it did not simply pass. */

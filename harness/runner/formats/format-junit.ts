@@ -70,8 +70,12 @@ function testcase(r: SuiteTargetResult, p: PathResult): string {
     const failed = `${p.counts.fail} of ${p.points} points failed (${p.byClass.branch} branch, ${p.byClass.accuracy} accuracy)`;
     return `${open}\n      <failure message="${attr(`${failed}${diag ? `: ${diag}` : ''}${mono ? `; ${mono}` : ''}`)}" type="${type}">${text(body)}</failure>\n    </testcase>`;
   }
-  if (p.counts.pass === 0 && p.counts.skipped > 0) {
-    return `${open}\n      <skipped message="${attr(p.skipped.map((s) => `${s.count} skipped: ${s.reason}`).join('; '))}"/>\n    </testcase>`;
+  if (p.counts.pass === 0 && p.counts.skipped + (p.counts.notApplicable ?? 0) > 0) {
+    const why = [
+      ...p.skipped.map((s) => `${s.count} skipped: ${s.reason}`),
+      ...(p.notApplicable ?? []).map((s) => `${s.count} not applicable: ${s.reason}`),
+    ];
+    return `${open}\n      <skipped message="${attr(why.join('; '))}"/>\n    </testcase>`;
   }
   return `${open}</testcase>`;
 }
@@ -104,7 +108,11 @@ export function formatJunit(result: RunResult): string {
     const errors = r.paths.filter((p) => p.error || p.counts.error > 0).length;
     const skipped =
       r.paths.filter(
-        (p) => !(p.error || p.counts.error > 0) && p.counts.fail === 0 && p.counts.pass === 0 && p.counts.skipped > 0,
+        (p) =>
+          !(p.error || p.counts.error > 0) &&
+          p.counts.fail === 0 &&
+          p.counts.pass === 0 &&
+          p.counts.skipped + (p.counts.notApplicable ?? 0) > 0,
       ).length + (r.properties ?? []).filter((o) => o.kind === 'not-checked').length;
     const props = [
       ['suite', r.suite.id],
@@ -116,6 +124,7 @@ export function formatJunit(result: RunResult): string {
       ['convention', r.checked.convention],
       ['branch', r.checked.branch],
       ['tolerance', r.checked.tolerance],
+      ['entry', r.checked.entry ?? 'the target’s default'],
       [
         'checked',
         `${r.checked.paths} path(s), ${r.checked.points} point(s): ${describeCounts(r.counts, r.byClass, r.byDiagnosis, ', ')}`,

@@ -25,7 +25,7 @@ function pair(r: SuiteTargetResult, maxRows: number): string[] {
     `${r.status.toUpperCase().padEnd(9)} ${r.suite.id} v${r.suite.version} × ${r.target.name} — ${describeCounts(r.counts, r.byClass, r.byDiagnosis)}`,
   );
   lines.push(
-    `          checked: ${r.checked.branch}; tolerance ${r.checked.tolerance}; ${r.checked.paths} path(s), ${r.checked.points} point(s); properties: ${r.checked.properties.listed.length ? `${r.checked.properties.listed.join(', ')} (${r.checked.properties.note})` : 'none listed'}`,
+    `          checked: ${r.checked.branch}; ${r.checked.entry ? `entry ${r.checked.entry}; ` : ''}tolerance ${r.checked.tolerance}; ${r.checked.paths} path(s), ${r.checked.points} point(s); properties: ${r.checked.properties.listed.length ? `${r.checked.properties.listed.join(', ')} (${r.checked.properties.note})` : 'none listed'}`,
   );
   for (const e of r.errors) lines.push(`          error: ${e}`);
   for (const o of r.properties ?? []) {
@@ -40,7 +40,11 @@ function pair(r: SuiteTargetResult, maxRows: number): string[] {
     const mono = p.monodromy
       ? `; monodromy ${p.monodromy.pass ? 'ok' : 'FAILS'}: expected ${c(p.monodromy.expected)}, library ${c(p.monodromy.library)}${p.monodromy.note ? ` (${p.monodromy.note})` : ''}`
       : '';
-    const skips = p.skipped.map((s) => `; ${s.count} skipped: ${s.reason}`).join('');
+    const skips = [
+      ...(p.entry ? [`; entry ${p.entry}`] : []),
+      ...p.skipped.map((s) => `; ${s.count} skipped: ${s.reason}`),
+      ...(p.notApplicable ?? []).map((s) => `; ${s.count} not applicable: ${s.reason}`),
+    ].join('');
     const agree = (p.agreements ?? [])
       .map(
         (a) =>

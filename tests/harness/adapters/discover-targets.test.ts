@@ -56,7 +56,7 @@ describe('discoverTargets', () => {
 });
 
 describe('listTargets', () => {
-  it('returns JSON-ready name, library, version and settings for each target', () => {
+  it('returns JSON-ready name, library, version, settings and entries for each target, the default entry first', () => {
     const listed = listTargets();
     expect(JSON.parse(JSON.stringify(listed))).toEqual(listed);
     expect(listed.find((t) => t.name === 'mathjs@15.2.0/number/predictable')).toEqual({
@@ -64,6 +64,17 @@ describe('listTargets', () => {
       library: 'mathjs',
       version: '15.2.0',
       settings: { package: 'mathjs', entry: 'number', predictable: true, 'complex.js': declaredVersion('complex.js') },
+      entries: expect.any(Array),
     });
+    const entries = listed.find((t) => t.name === 'mathjs@15.2.0/number/predictable')?.entries ?? [];
+    expect(entries.map((e) => [e.name, e.default])).toEqual([
+      ['number', true],
+      ['complex', false],
+      ['object', false],
+      ['string', false],
+      ['parser', false],
+    ]);
+    expect(entries[0]?.carries).toEqual({ imaginaryPart: false, realZeroSign: true, imaginaryZeroSign: false });
+    for (const t of listed) expect(t.entries?.filter((e) => e.default).length).toBe(1);
   });
 });

@@ -260,6 +260,7 @@ describe('evaluateSuite', () => {
       tolerance: '4 ulps per part or relative error 8.881784197001252e-16 (4 eps)',
       paths: 3,
       points: 154,
+      entry: 'complex',
       properties: {
         listed: ['conjugate-symmetry', 'root-power', 'range'],
         run: false,

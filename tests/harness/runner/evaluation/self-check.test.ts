@@ -32,6 +32,7 @@ interface Caught {
   ulps?: number;
   /** The step that first left the reference, as written (composed subjects). */
   firstLeft?: string;
+  of?: 'input' | 'output';
 }
 
 async function run(mutation: Mutation | null): Promise<RunResult> {
@@ -63,6 +64,7 @@ beforeAll(async () => {
     'add-4-ulps',
     'swap-cut-side',
     'inexact-intermediate',
+    'drop-negative-zero',
   ] as Mutation[]) {
     const r = await run(m);
     const caught: Caught[] = [];
@@ -82,6 +84,7 @@ beforeAll(async () => {
             ...(d.kind === 'other-sheet' ? { k: d.k } : {}),
             ...(d.kind === 'inaccurate' ? { ulps: d.ulps } : {}),
             ...(f.firstLeftStep === undefined ? {} : { firstLeft: f.steps?.[f.firstLeftStep]?.text }),
+            ...(d.kind === 'zero-sign' ? { of: d.of } : {}),
           });
         }
       }
@@ -148,5 +151,13 @@ const tally = (c: Caught[]) =>
     const c = caughtBy.get('inexact-intermediate')!.filter((x) => x.suite === 'log-of-a-power-principal-steps');
     expect(c.length).toBeGreaterThan(3);
     expect(c.every((x) => x.kind === 'cut-side' && x.firstLeft === 'pow(z, 13)')).toBe(true);
+  });
+
+  it('building values with a constructor that drops −0 is caught as the zero sign of the input under signed zeros', () => {
+    const c = caughtBy.get('drop-negative-zero')!;
+    const sz = c.filter((x) => x.convention === 'signed-zero');
+    expect(sz.length).toBeGreaterThan(50);
+    expect(tally(sz)).toEqual({ 'zero-sign': sz.length });
+    expect(sz.filter((x) => x.of !== 'input')).toEqual([]);
   });
 });
