@@ -56,11 +56,11 @@ export function listFindings(run: PathRun): void {
       outcome: outcomes[i] as PointOutcome,
       rule: alt?.rule ?? '',
       reproducer: [
-        reproducer(run.program, run.target, z, run.suite.subject),
+        reproducer(run.program, run.target, z, run.suite.subject, run.entry.name),
         // The other way of each disagreement, so both values can be reproduced; each snippet runs on its own.
         ...run.counterparts
           .filter((c) => run.labels[i]?.some((l) => l.kind === 'disagreement' && l.with === c.with))
-          .map((c) => reproducer(c.program, run.target, z, c.with)),
+          .map((c) => reproducer(c.program, run.target, z, c.with, c.entry ?? run.entry.name)),
       ].join('\n\n--- the other way, on its own ---\n\n'),
       ...run.traces.get(i),
     };

@@ -1,4 +1,7 @@
 import type { ComplexPair } from '../../adapters/complex-pair';
+import { complexString } from '../../adapters/complex-string';
+import { findEntry } from '../../adapters/find-entry';
+import type { TargetEntry } from '../../../shared/target-entry';
 import type { TargetIdentity } from '../../../shared/target-identity';
 import { formatHexDouble } from '../../checks/format-hex-double';
 import { pointText } from '../formats/point-text';
@@ -31,28 +34,52 @@ const PYTHON_OPERATOR: Readonly<Record<string, string>> = { add: '+', sub: '-', 
  * Code to paste into the target's language that makes exactly the calls the harness made for
  * one point: the input with its exact bits (JavaScript literals read back exactly; Python gets
  * float.fromhex), every step of the subject with the library's own operation, and a print of
- * the result. complex.js and mathjs values get their parts set after construction, as the
- * adapters do, because some versions' constructors drop a −0 (see with-exact-parts.ts).
- * Stdio targets other than cmath get the request lines of the stdio protocol.
+ * the result. Values are built through the entry the harness used (shared/target-entry.ts), the
+ * input and the constants alike, and never patched: a constructor that drops a −0 drops it here
+ * too. Stdio targets other than cmath get the request lines of the stdio protocol.
  */
-export function reproducer(program: SubjectProgram, target: TargetIdentity, z: ComplexPair, subject: string): string {
-  const header = `${target.name}: ${subject} at z = ${pointText(z)}`;
-  if (target.library === 'complex.js') return complexJs(program, target, z, header);
-  if (target.library === 'mathjs') return mathjs(program, target, z, header);
-  if (target.library === 'cmath') return python(program, z, header);
+export function reproducer(
+  program: SubjectProgram,
+  target: TargetIdentity,
+  z: ComplexPair,
+  subject: string,
+  entryName?: string,
+): string {
+  const found = findEntry(target, entryName);
+  const entry = found instanceof Error ? findEntry(target) : found;
+  const header = `${target.name}: ${subject} at z = ${pointText(z)}, built through the ${(entry as TargetEntry).name} entry`;
+  if (target.library === 'complex.js') return complexJs(program, target, z, header, entry as TargetEntry);
+  if (target.library === 'mathjs') return mathjs(program, target, z, header, entry as TargetEntry);
+  if (target.library === 'cmath') return python(program, z, header, entry as TargetEntry);
   if (target.library === 'JavaScript Math') return jsMath(program, z, header);
   return stdio(program, target, z, header);
 }
 
-function complexJs(program: SubjectProgram, target: TargetIdentity, z: ComplexPair, header: string): string {
+/** A JavaScript expression that builds [re, im] the way an entry's `call` says ("new Complex(re, im)", "math.complex({ re, im })"). */
+function jsBuild(entry: TargetEntry, [re, im]: readonly [number, number]): string {
+  const [r, i] = [jsNumber(re), jsNumber(im)];
+  const text = JSON.stringify(complexString([re, im]));
+  // mathjs's number entry takes a value that is not real as math.complex (mathjs-entry-ways.ts).
+  if (entry.call === 're as a plain number' && im !== 0) return `math.complex(${r}, ${i})`;
+  return entry.call
+    .replace('({ re, im })', `({ re: ${r}, im: ${i} })`)
+    .replace('([re, im])', `([${r}, ${i}])`)
+    .replace('(re, im)', `(${r}, ${i})`)
+    .replace('("re±im i")', `(${text})`)
+    .replace('re as a plain number', r);
+}
+
+function complexJs(
+  program: SubjectProgram,
+  target: TargetIdentity,
+  z: ComplexPair,
+  header: string,
+  entry: TargetEntry,
+): string {
   const pkg = String(target.settings.package ?? 'complex.js');
-  const lines = [
-    `// ${header}`,
-    `const Complex = require('${pkg}');`,
-    `const c = (re, im) => Object.assign(new Complex(0, 0), { re, im }); // exact parts, −0 included`,
-  ];
-  const names = stepNames(program, (v) => `c(${jsNumber(v[0])}, ${jsNumber(v[1])})`);
-  lines.push(`const z = c(${jsNumber(z[0])}, ${jsNumber(z[1])});`);
+  const lines = [`// ${header}`, `const Complex = require('${pkg}');`];
+  const names = stepNames(program, (v) => jsBuild(entry, v));
+  lines.push(`const z = ${jsBuild(entry, z)};`);
   program.steps.forEach((step, i) => {
     if (step.kind !== 'op') return;
     const [a, ...rest] = step.args.map((k) => names[k] as string);
@@ -62,30 +89,28 @@ function complexJs(program: SubjectProgram, target: TargetIdentity, z: ComplexPa
   return lines.join('\n');
 }
 
-function mathjs(program: SubjectProgram, target: TargetIdentity, z: ComplexPair, header: string): string {
+function mathjs(
+  program: SubjectProgram,
+  target: TargetIdentity,
+  z: ComplexPair,
+  header: string,
+  entry: TargetEntry,
+): string {
   const pkg = String(target.settings.package ?? 'mathjs');
-  const numberEntry = target.settings.entry === 'number';
   const lines = [
     `// ${header}`,
     `const { create, all } = require('${pkg}');`,
     `const math = create(all, { predictable: ${target.settings.predictable === true} });`,
-    `const c = (re, im) => Object.assign(math.complex(0, 0), { re, im }); // exact parts, −0 included`,
   ];
-  if (numberEntry)
-    lines.push(
-      `// number entry point: a value with a zero imaginary part goes in as a plain number`,
-      `const arg = (v) => (typeof v === 'number' ? v : v.im === 0 ? v.re : v);`,
-    );
-  const wrap = (name: string) => (numberEntry ? `arg(${name})` : name);
-  const names = stepNames(program, (v) => `c(${jsNumber(v[0])}, ${jsNumber(v[1])})`);
-  lines.push(`const z = c(${jsNumber(z[0])}, ${jsNumber(z[1])});`);
+  const names = stepNames(program, (v) => jsBuild(entry, v));
+  lines.push(`const z = ${jsBuild(entry, z)};`);
   program.steps.forEach((step, i) => {
     if (step.kind !== 'op') return;
     const fn = MATHJS_FUNCTION[step.op] ?? step.op;
     const args = step.args.map((k, j) => {
       const s = program.steps[k];
       if (step.op === 'nthroot' && j === 1 && s?.kind === 'const') return jsNumber(s.value[0]);
-      return wrap(names[k] as string);
+      return names[k] as string;
     });
     lines.push(`const s${i} = math.${fn}(${args.join(', ')});`);
   });
@@ -94,10 +119,21 @@ function mathjs(program: SubjectProgram, target: TargetIdentity, z: ComplexPair,
   return lines.join('\n');
 }
 
-function python(program: SubjectProgram, z: ComplexPair, header: string): string {
+/** Python's complex() of the string form, as the cmath adapter builds it ("-4-0j", "inf+nanj"). */
+const pyText = (z: ComplexPair): string =>
+  JSON.stringify(
+    complexString(z)
+      .replace(/Infinity/g, 'inf')
+      .replace(/NaN/g, 'nan')
+      .replace(/i$/, 'j'),
+  );
+
+function python(program: SubjectProgram, z: ComplexPair, header: string, entry: TargetEntry): string {
   const lines = [`# ${header}`, 'import cmath'];
-  const names = stepNames(program, (v) => `complex(${pyNumber(v[0])}, ${pyNumber(v[1])})`);
-  lines.push(`z = complex(${pyNumber(z[0])}, ${pyNumber(z[1])})`);
+  const build = (v: readonly [number, number]): string =>
+    entry.name === 'string' ? `complex(${pyText([v[0], v[1]])})` : `complex(${pyNumber(v[0])}, ${pyNumber(v[1])})`;
+  const names = stepNames(program, build);
+  lines.push(`z = ${build(z)}`);
   program.steps.forEach((step, i) => {
     if (step.kind !== 'op') return;
     const args = step.args.map((k) => names[k] as string);

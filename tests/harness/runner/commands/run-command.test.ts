@@ -174,4 +174,20 @@ describe('sheetkeeper targets', () => {
       predictable: false,
     });
   });
+
+  it('lists each target’s entries, in JSON and under the target in the table, with what a plain number cannot carry', () => {
+    const json = JSON.parse(cli(['targets']).stdout) as { name: string; entries?: { name: string }[] }[];
+    expect(json.find((t) => t.name === 'complex.js@2.4.1')!.entries!.map((e) => e.name)).toEqual([
+      'complex',
+      'object',
+      'array',
+      'string',
+    ]);
+    const table = cli(['targets', '--format', 'table']);
+    expect(table.status).toBe(0);
+    const lines = table.stdout.split('\n');
+    const at = lines.findIndex((l) => l.startsWith('complex.js@2.4.1 '));
+    expect(lines[at + 1]?.trim()).toBe('entry complex  new Complex(re, im) (default)');
+    expect(table.stdout).toMatch(/entry number +a plain number re \(default\); cannot carry an imaginary part/);
+  });
 });

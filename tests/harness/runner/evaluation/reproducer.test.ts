@@ -79,4 +79,34 @@ describe('reproducers', () => {
     },
     60_000,
   );
+
+  it.each([
+    ['complex.js@2.4.1', 'complex'],
+    ['complex.js@2.4.3', 'string'],
+    ['mathjs@15.2.0/complex', 'parser'],
+  ])(
+    '%s through the %s entry: builds the input the way the harness did, so a dropped −0 is dropped in the reproducer too',
+    async (name, entry) => {
+      const descriptor = discoverTargets().find((t) => t.name === name)!;
+      const target = descriptor.open();
+      opened.push(target);
+      const program = subjectProgram(parseSubject('sqrt(z)'));
+      const z: [number, number] = [-4, -0];
+      const got = await evaluateProgram(
+        program,
+        target,
+        Float64Array.of(z[0]),
+        Float64Array.of(z[1]),
+        undefined,
+        entry,
+      );
+      const code = reproducer(program, descriptor, z, 'sqrt(z)', entry);
+      expect(code).toContain(`through the ${entry} entry`);
+      const run = spawnSync(process.execPath, ['-e', code], { encoding: 'utf8', cwd: ROOT });
+      expect(run.stderr).toBe('');
+      const [re, im] = printed(descriptor.library, run.stdout);
+      expect([Object.is(re, got.re[0]), Object.is(im, got.im[0])]).toEqual([true, true]);
+    },
+    60_000,
+  );
 });
