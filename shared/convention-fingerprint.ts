@@ -32,6 +32,8 @@ export interface FingerprintDisagreement {
 
 export interface ConventionFingerprint {
   target: string;
+  /** The entry every value was built through (shared/target-entry.ts); absent on fingerprints made before entries. */
+  entry?: string;
   statement: string;
   /** Functions the target does not have, so not fingerprinted. */
   missing: string[];

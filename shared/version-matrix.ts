@@ -29,6 +29,8 @@ export interface VersionMatrix {
     id: string;
     version: number;
     subject: string;
+    /** The entry the inputs went in through at every version (shared/target-entry.ts); absent on matrices made before entries. */
+    entry?: string;
     statusByVersion: { version: string; status: string; fail: number; pass: number }[];
     changes: {
       path: string;

@@ -1,5 +1,6 @@
 import { fingerprintRequest } from '../../shared/schemas/fingerprint-request';
 import { BadInput } from '../command-support/bad-input';
+import { findEntry } from '../adapters/find-entry';
 import { findTarget } from '../command-support/find-target';
 import { readFlags } from '../command-support/read-flags';
 import { writeOutput } from '../command-support/write-output';
@@ -8,14 +9,14 @@ import { fingerprintTable } from './fingerprint-table';
 import { fingerprintTarget } from './fingerprint-target';
 
 /**
- * `sheetkeeper fingerprint --target NAME@VERSION[,…] [--fn sqrt,log] [--format table|json] [--out FILE]`:
+ * `sheetkeeper fingerprint --target NAME@VERSION[,…] [--fn sqrt,log] [--entry NAME] [--format table|json] [--out FILE]`:
  * which convention each target follows on each cut of each function (one JSON object per
  * target, in an array when several are named; tables one after the other). Exits 0 when every
  * (function, cut) of every target follows one convention and agrees with the functions sharing
  * its cut, 1 when any is `neither` or `inconsistent`, 2 for bad input.
  */
 export async function fingerprintCommand(argv: readonly string[]): Promise<number> {
-  const request = readFlags(argv, ['target', 'fn', 'format', 'out'], fingerprintRequest);
+  const request = readFlags(argv, ['target', 'fn', 'entry', 'format', 'out'], fingerprintRequest);
   const functions = request.fn
     ? request.fn.map((label) => {
         const found = FINGERPRINT_FUNCTIONS.find((f) => f.label === label);
@@ -29,9 +30,11 @@ export async function fingerprintCommand(argv: readonly string[]): Promise<numbe
   const descriptors = request.target.map(findTarget);
   const fingerprints = [];
   for (const descriptor of descriptors) {
+    const entry = request.entry === undefined ? undefined : findEntry(descriptor, request.entry);
+    if (entry instanceof Error) throw new BadInput(`--entry: ${entry.message}`);
     const target = descriptor.open();
     try {
-      fingerprints.push(await fingerprintTarget(target, functions));
+      fingerprints.push(await fingerprintTarget(target, functions, request.entry));
     } finally {
       await target.close();
     }

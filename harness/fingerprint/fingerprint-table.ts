@@ -23,7 +23,7 @@ export function fingerprintTable(fp: ConventionFingerprint): string {
       .join('  ')
       .trimEnd();
   return [
-    `convention fingerprint of ${fp.target}`,
+    `convention fingerprint of ${fp.target}${fp.entry ? `, values built through its ${fp.entry} entry` : ''}`,
     fp.statement,
     '',
     line(header),

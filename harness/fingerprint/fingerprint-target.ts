@@ -5,6 +5,7 @@ import type {
 } from '../../shared/convention-fingerprint';
 import { formatComplexText } from '../../shared/format-complex-text';
 import type { ComplexPair } from '../adapters/complex-pair';
+import { findEntry } from '../adapters/find-entry';
 import type { Target } from '../adapters/target';
 import { relativeError } from '../checks/relative-error';
 import type { PlaneCut } from '../cuts/plane-cut';
@@ -59,12 +60,18 @@ function straddle(cut: PlaneCut): PathPoint[] {
  * `counter-clockwise` when both give Kahan's value, `neither` otherwise — and also when a value
  * just off the cut differs from the principal branch (then the cut is not where the function
  * has it, and what happens on it says nothing about a convention). Functions sharing a cut are
- * then compared.
+ * then compared. Every value is built through one entry (the default: the library's constructor
+ * from two numbers), so a constructor that drops −0 shows here as a user of it meets it.
  */
 export async function fingerprintTarget(
   target: Target,
   functions: readonly FingerprintFunction[] = FINGERPRINT_FUNCTIONS,
+  /** The entry values are built through (shared/target-entry.ts); absent, the target's default. */
+  entryName?: string,
 ): Promise<ConventionFingerprint> {
+  const found = findEntry(target, entryName);
+  if (found instanceof Error) throw found;
+  const entry = found;
   const missing: string[] = [];
   const cuts: CutEntry[] = [];
   const functionOf = new Map<CutEntry, FingerprintFunction>();
@@ -79,6 +86,7 @@ export async function fingerprintTarget(
       const answers = await target.evaluate(
         fn.op,
         path.map((p) => [[p.z.re, p.z.im] as ComplexPair, ...fn.extra]),
+        entry.name,
       );
       points += path.length;
       const value = (i: number): ComplexPair | null => {
@@ -157,8 +165,9 @@ export async function fingerprintTarget(
   }
   return {
     target: target.name,
+    entry: entry.name,
     statement:
-      `Evidence at ${points} points: on each cut at the places listed, exactly on it with +0 and -0 and ${OFF} off it on both sides, ` +
+      `Evidence at ${points} points, every value built through the ${entry.name} entry (${entry.call}): on each cut at the places listed, exactly on it with +0 and -0 and ${OFF} off it on both sides, ` +
       `compared with the reference to a relative ${SAME.toExponential()}. It says which side each zero sign selects there; it is not a check of accuracy ` +
       `and not a certification of the library elsewhere on the cut or off it. Functions sharing a cut are compared only among the ` +
       `${functions.length - missing.length} fingerprinted here.`,

@@ -1,5 +1,6 @@
 import path from 'node:path';
 import { versionMatrixRequest } from '../../shared/schemas/version-matrix-request';
+import { findEntry } from '../adapters/find-entry';
 import { BadInput } from '../command-support/bad-input';
 import { readFlags } from '../command-support/read-flags';
 import { writeOutput } from '../command-support/write-output';
@@ -11,13 +12,14 @@ import { versionMatrixTable } from './version-matrix-table';
 const SUITES = path.resolve(__dirname, '..', '..', 'suites');
 
 /**
- * `sheetkeeper matrix --suite FILE|ID[,…] --library complex.js [--format table|json] [--out FILE]`:
- * the suites over every installed version of the library. Exits 0 when no value changed between
+ * `sheetkeeper matrix --suite FILE|ID[,…] --library complex.js [--entry NAME[,…]] [--format table|json] [--out FILE]`:
+ * the suites over every installed version of the library, at each entry named (each suite's own
+ * by default). Exits 0 when no value changed between
  * versions, 1 when some did, 2 for bad input (a suite that does not load, a library with fewer
  * than two installed versions).
  */
 export async function matrixCommand(argv: readonly string[]): Promise<number> {
-  const request = readFlags(argv, ['suite', 'library', 'format', 'out'], versionMatrixRequest);
+  const request = readFlags(argv, ['suite', 'library', 'entry', 'format', 'out'], versionMatrixRequest);
   const loaded = loadSuites(request.suite, SUITES);
   if (!loaded.ok) throw new BadInput(loaded.issues.map((i) => `${i.suite}: ${i.field} ${i.rule}`).join('; '));
   const targets = libraryVersions(request.library);
@@ -26,7 +28,11 @@ export async function matrixCommand(argv: readonly string[]): Promise<number> {
       `--library: "${request.library}" has ${targets.length} installed version(s); a matrix needs two or more (names as \`sheetkeeper targets\` lists them, without "@version")`,
     );
   }
-  const matrix = await versionMatrix(request.library, loaded.suites, targets);
+  for (const name of request.entry ?? []) {
+    const lacking = targets.map((t) => findEntry(t, name)).find((e) => e instanceof Error);
+    if (lacking) throw new BadInput(`--entry: ${lacking.message}`);
+  }
+  const matrix = await versionMatrix(request.library, loaded.suites, targets, request.entry);
   writeOutput(request.format === 'json' ? JSON.stringify(matrix, null, 2) : versionMatrixTable(matrix), request.out);
   return matrix.suites.some((s) => s.changes.length > 0) ? 1 : 0;
 }

@@ -16,7 +16,7 @@ const outcome = (s: Side) => (s.outcome.kind === 'fail' ? `fail: ${s.outcome.dia
 export function versionMatrixTable(m: VersionMatrix): string {
   const lines = [`version matrix of ${m.library}: ${m.versions.join(', ')}`, m.statement, ''];
   for (const s of m.suites) {
-    lines.push(`${s.id} v${s.version}  ${s.subject}`);
+    lines.push(`${s.id} v${s.version}  ${s.subject}${s.entry ? `  (entry ${s.entry})` : ''}`);
     lines.push(`  status: ${s.statusByVersion.map((v) => `${v.version} ${v.status} (${v.fail} failing)`).join(', ')}`);
     if (s.changes.length === 0) lines.push('  no value changed');
     for (const c of s.changes.slice(0, LISTED)) {

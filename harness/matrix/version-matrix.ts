@@ -1,5 +1,6 @@
 import type { Suite } from '../../shared/schemas/suite-schema';
 import type { VersionMatrix } from '../../shared/version-matrix';
+import { findEntry } from '../adapters/find-entry';
 import type { TargetDescriptor } from '../adapters/target-descriptor';
 import { parseSubject } from '../expressions/parse-subject';
 import { buildPath } from '../paths/build-path';
@@ -19,7 +20,7 @@ const sameValue = (a: Side['value'], b: Side['value']): boolean =>
   a === null || b === null ? a === b : a.re === b.re && a.im === b.im;
 
 /**
- * Runs each suite against each version of one library (`targets`, oldest first) through the
+ * Runs each suite (at each entry asked for) against each version of one library (`targets`, oldest first) through the
  * runner's evaluateSuite, with one reference cache for all versions so every expected value is
  * computed once, and reads the library's value at every point with the runner's own evaluation
  * of the subject. A point changed when its value at one version differs sign-exactly from the
@@ -34,13 +35,19 @@ export async function versionMatrix(
   library: string,
   suites: readonly Suite[],
   targets: readonly TargetDescriptor[],
+  /**
+   * The entries to compare at (shared/target-entry.ts), each suite once per entry; absent, each
+   * suite at its own entry (the library's constructor from two numbers when it names none). A
+   * version that lacks an entry shows an error status there.
+   */
+  atEntries?: readonly string[],
 ): Promise<VersionMatrix> {
   const cache = new ReferenceCache(null);
   const opened = targets.map((d) => d.open());
   const entries: SuiteEntry[] = [];
   let pointCount = 0;
   try {
-    for (const suite of suites) {
+    for (const suite of suites.flatMap((x) => (atEntries ?? [x.entry]).map((entry) => ({ ...x, entry })))) {
       const program = subjectProgram(parseSubject(suite.subject));
       const built = suite.paths.map((p) => {
         try {
@@ -53,6 +60,7 @@ export async function versionMatrix(
         id: suite.id,
         version: suite.version,
         subject: suite.subject,
+        entry: suite.entry ?? findEntry(opened[0] ?? { name: library }).name,
         statusByVersion: [],
         changes: [],
       };
@@ -73,6 +81,8 @@ export async function versionMatrix(
             target,
             Float64Array.from(points, (p) => p.z.re),
             Float64Array.from(points, (p) => p.z.im),
+            undefined,
+            suite.paths[k]?.entry ?? suite.entry,
           );
           const pathResult = result.paths[k];
           const findings = new Map((pathResult?.findings ?? []).map((f) => [f.index, f]));
@@ -130,7 +140,8 @@ export async function versionMatrix(
     library,
     versions: opened.map((t) => t.version),
     statement:
-      `Values of ${pointCount} points (the suites' paths) compared bit for bit between consecutive installed versions. ` +
+      `Values of ${pointCount} points (the suites' paths) compared bit for bit between consecutive installed versions, ` +
+      `each suite at the entry it names (how its inputs are built: "new Complex(re, im)" by default). ` +
       `A version absent here was not installed and not compared; no change means the same values at these points, not the same library.`,
     suites: entries,
   };

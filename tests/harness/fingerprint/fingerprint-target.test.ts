@@ -15,6 +15,29 @@ const ignoringZeroSigns =
     ref(op, [[z![0] || 0, z![1] || 0]]);
 
 describe('fingerprintTarget', () => {
+  it('builds values through the constructor by default, so complex.js 2.4.1 is not certified signed-zero on log where its constructor drops −0', async () => {
+    const open = (name: string) =>
+      discoverTargets()
+        .find((d) => d.name === name)!
+        .open();
+    const [old, fixed] = [open('complex.js@2.4.1'), open('complex.js@2.4.2')];
+    const before = await fingerprintTarget(old, only('log'));
+    const after = await fingerprintTarget(fixed, only('log'));
+    expect(before.entry).toBe('complex');
+    expect(before.statement).toContain('built through the complex entry (new Complex(re, im))');
+    // 2.4.2's log honours −0 on its cut (G.6.3.2); 2.4.1's constructor makes −0 into +0 first, so both
+    // zero signs land above the cut, the side Kahan's counter-clockwise rule keeps.
+    expect(rows(after)).toEqual(['log (-inf, 0]: signed-zero']);
+    expect(rows(before)).toEqual(['log (-inf, 0]: counter-clockwise']);
+    // Through another entry when asked: complex.js's string form loses −0 in 2.4.2 too.
+    const viaString = await fingerprintTarget(fixed, only('log'), 'string');
+    expect(viaString.entry).toBe('string');
+    expect(rows(viaString)).toEqual(['log (-inf, 0]: counter-clockwise']);
+    await expect(fingerprintTarget(fixed, only('log'), 'parser')).rejects.toThrow(
+      'complex.js@2.4.2 has no entry "parser"; its entries are complex, object, array, string',
+    );
+  });
+
   it("classifies Python's cmath as signed-zero on every cut of every function it has", async () => {
     // Python documents that cmath follows C99 Annex G for branch cuts and signed zeros (common practice).
     const descriptor = discoverTargets().find((d) => d.library === 'cmath');

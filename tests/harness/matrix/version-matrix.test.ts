@@ -46,6 +46,46 @@ async function cmathValue(op: string, z: ComplexPair): Promise<ComplexPair> {
 }
 
 describe('versionMatrix', () => {
+  it('shows complex.js 2.4.1 dropping −0 at its constructor entry (no longer "no value changed"), per entry asked for', async () => {
+    // Observed directly first: 2.4.1's constructor gives +0 for −0, 2.4.2's keeps it.
+    const ctor = (alias: string) => require(alias) as new (re: number, im: number) => { im: number };
+    expect(Object.is(new (ctor('complex.js-2.4.1'))(-4, -0).im, -0)).toBe(false);
+    expect(Object.is(new (ctor('complex.js-2.4.2'))(-4, -0).im, -0)).toBe(true);
+    const m = await versionMatrix(
+      'complex.js',
+      [demo('log-through-the-constructor-keeps-minus-zero')],
+      complexJs('2.3.0', '2.4.1', '2.4.2'),
+      ['complex', 'string'],
+    );
+    expect(m.suites.map((s) => s.entry)).toEqual(['complex', 'string']);
+    const [atConstructor, atString] = m.suites;
+    expect(atConstructor!.statusByVersion.map((v) => [v.version, v.fail])).toEqual([
+      ['2.3.0', 0],
+      ['2.4.1', 10],
+      ['2.4.2', 0],
+    ]);
+    // Below the cut: log(x − 0i) = ln|x| − πi (ISO/IEC 9899:2011 G.6.3.2, clog(conj z) = conj(clog z)); 2.4.1 gives + πi.
+    const below = atConstructor!.changes.filter((c) => c.path.startsWith('just below'));
+    expect(below).toHaveLength(8);
+    for (const c of below) {
+      expect(c.firstChangedIn).toBe('2.4.1');
+      expect(c.steps[0]!.after.outcome).toEqual({
+        kind: 'fail',
+        diagnosis: { kind: 'zero-sign', part: 'im', of: 'input' },
+      });
+      expect(Math.sign(parseDouble(c.steps[0]!.after.value!.im))).toBe(1);
+    }
+    expect(atConstructor!.changes.filter((c) => c.path.startsWith('just above'))).toEqual([]);
+    // The straddle's two points exactly on the cut with −0 are the other two of the ten.
+    expect(atConstructor!.changes.filter((c) => c.path === 'across the cut').map((c) => c.label)).toEqual([
+      'on -0',
+      'on -0',
+    ]);
+    // complex.js's string parser loses −0 in every version here: failing throughout, and so no change.
+    expect(atString!.statusByVersion.map((v) => v.fail)).toEqual([10, 10, 10]);
+    expect(atString!.changes).toEqual([]);
+  });
+
   it('finds that complex.js 2.4.1 put atan(+0 + 2i) on the left of its cut and 2.4.2 put it back, with the diagnosis on each side', async () => {
     const m = await versionMatrix('complex.js', [demo('atan-principal-sz')], complexJs('2.3.0', '2.4.1', '2.4.2'));
     const change = m.suites[0]!.changes.find((c) => c.z.re === '0' && c.z.im === '2' && c.label === 'on +0');
