@@ -54,7 +54,7 @@ export function complexJsTarget(alias: string, version: string): Target {
       const build = builder(entry);
       return evaluateEach(op, calls, (args) => apply(op, args.map(build)));
     },
-    evaluateColumns: async (op, args, n, skip, entry) => {
+    evaluateColumns: async (op, args, n, skip, entry, keepValues) => {
       const build = builder(entry);
       if (!has(op))
         return evaluateColumns(op, args, n, skip, build, () => {
@@ -62,12 +62,20 @@ export function complexJsTarget(alias: string, version: string): Target {
         });
       if (args.length === 1) {
         // One argument: no array per call.
-        return evaluateColumns(op, args, n, skip, build, (values) => {
-          const z = values[0] as ComplexJsValue;
-          return (z[op] as () => unknown).call(z);
-        });
+        return evaluateColumns(
+          op,
+          args,
+          n,
+          skip,
+          build,
+          (values) => {
+            const z = values[0] as ComplexJsValue;
+            return (z[op] as () => unknown).call(z);
+          },
+          keepValues,
+        );
       }
-      return evaluateColumns(op, args, n, skip, build, (values) => apply(op, values));
+      return evaluateColumns(op, args, n, skip, build, (values) => apply(op, values), keepValues);
     },
     close: async () => undefined,
   };

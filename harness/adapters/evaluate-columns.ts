@@ -8,7 +8,8 @@ import { OP_ARITY } from './op-arity';
  * argument is built from its parts with `build` (the entry's way in, shared/target-entry.ts), a
  * constant once for the whole column. `call` gets the built arguments (and the parts, for a
  * library that takes one argument as a plain number) and returns the library's value, kept in
- * `values`; a wrong argument count, a throw or a result that is not a number or complex becomes
+ * `values` when `keepValues` says a later step takes it (keeping 100,000 objects alive that no
+ * step reads moves them out of the young generation for nothing); a wrong argument count, a throw or a result that is not a number or complex becomes
  * that point's error, exactly as in evaluateEach.
  */
 export function evaluateColumns(
@@ -18,13 +19,11 @@ export function evaluateColumns(
   skip: ReadonlyMap<number, string>,
   build: (z: ComplexPair) => unknown,
   call: (values: unknown[], pairs: ComplexPair[]) => unknown,
+  keepValues = false,
 ): ColumnResult {
-  const out: ColumnResult = {
-    re: new Float64Array(n),
-    im: new Float64Array(n),
-    errors: new Map(skip),
-    values: new Array<unknown>(n),
-  };
+  const out: ColumnResult = { re: new Float64Array(n), im: new Float64Array(n), errors: new Map(skip) };
+  const kept = keepValues ? new Array<unknown>(n) : null;
+  if (kept) out.values = kept;
   const arity = OP_ARITY[op];
   const fail = (message: string) => {
     for (let i = 0; i < n; i++) if (!out.errors.has(i)) out.errors.set(i, message);
@@ -66,7 +65,7 @@ export function evaluateColumns(
       if (typeof v === 'number') {
         out.re[i] = v;
         out.im[i] = 0;
-        (out.values as unknown[])[i] = v;
+        if (kept) kept[i] = v;
       } else if (
         typeof v === 'object' &&
         v !== null &&
@@ -75,7 +74,7 @@ export function evaluateColumns(
       ) {
         out.re[i] = (v as { re: number }).re;
         out.im[i] = (v as { im: number }).im;
-        (out.values as unknown[])[i] = v;
+        if (kept) kept[i] = v;
       } else {
         out.errors.set(i, `result is not a number or complex: ${String(v)}`);
       }

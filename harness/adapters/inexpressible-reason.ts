@@ -1,5 +1,4 @@
 import type { TargetEntry } from '../../shared/target-entry';
-import type { ComplexPair } from './complex-pair';
 
 /**
  * Why an input cannot go in through an entry (the point is then not applicable to it, never a
@@ -7,7 +6,7 @@ import type { ComplexPair } from './complex-pair';
  * part's sign matters only when the suite's convention tells −0 from +0 (`zeroSigns`), and then
  * −0 needs an entry that carries that sign. +0 is what an entry without an imaginary part means.
  */
-export function inexpressibleReason(entry: TargetEntry, [re, im]: ComplexPair, zeroSigns: boolean): string | null {
+export function inexpressibleReason(entry: TargetEntry, re: number, im: number, zeroSigns: boolean): string | null {
   const { carries } = entry;
   if (!carries.imaginaryPart && im !== 0) return `the ${entry.name} entry (${entry.call}) has no imaginary part`;
   if (zeroSigns && !carries.imaginaryZeroSign && Object.is(im, -0))

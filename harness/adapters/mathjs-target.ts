@@ -71,17 +71,22 @@ export function mathjsTarget(
         return fn(...args.map(build));
       });
     },
-    evaluateColumns: async (op, args, n, skip, entryName) => {
+    evaluateColumns: async (op, args, n, skip, entryName, keepValues) => {
       const build = builder(entryName);
       if (!has(op))
         return evaluateColumns(op, args, n, skip, build, () => {
           throw new Error(`mathjs ${version} has no ${functionOf(op)}`);
         });
       const fn = load()[functionOf(op)] as MathFunction;
-      return evaluateColumns(op, args, n, skip, build, (values, pairs) => {
-        if (op === 'nthroot') return fn(values[0], (pairs[1] as ComplexPair)[0]);
-        return fn(...values);
-      });
+      return evaluateColumns(
+        op,
+        args,
+        n,
+        skip,
+        build,
+        (values, pairs) => (op === 'nthroot' ? fn(values[0], (pairs[1] as ComplexPair)[0]) : fn(...values)),
+        keepValues,
+      );
     },
     close: async () => undefined,
   };

@@ -18,6 +18,7 @@ export interface Target extends TargetIdentity {
    * their error). Same values and errors as `evaluate`; an in-process library answers this way
    * without an array per call, which keeps the runner's check loop near a bare loop's speed, and
    * takes an argument column's own `values` (an earlier step's library values) as they are.
+   * With `keepValues` it answers its own values too, for a later step to take.
    */
   evaluateColumns?(
     op: string,
@@ -25,6 +26,7 @@ export interface Target extends TargetIdentity {
     n: number,
     skip: ReadonlyMap<number, string>,
     entry?: string,
+    keepValues?: boolean,
   ): Promise<ColumnResult>;
   /** Releases what the target holds (a child process); safe to call twice. */
   close(): Promise<void>;

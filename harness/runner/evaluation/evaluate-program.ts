@@ -32,7 +32,9 @@ export async function evaluateProgram(
   const abortMessage = (): string =>
     signal?.reason instanceof Error ? signal.reason.message : String(signal?.reason ?? 'cancelled');
   let result: ValueColumn = { re, im, errors };
-  for (const step of program.steps) {
+  // A step's library values are kept only where a later step takes them as an argument.
+  const takenLater = new Set(program.steps.flatMap((s) => (s.kind === 'op' ? s.args : [])));
+  for (const [index, step] of program.steps.entries()) {
     if (step.kind === 'input') {
       columns.push({ re, im, errors });
       continue;
@@ -44,7 +46,7 @@ export async function evaluateProgram(
     const args = step.args.map((i) => columns[i] as ValueColumn | ComplexPair);
     if (target.evaluateColumns && !signal?.aborted) {
       // In-process libraries answer column-wise: no array per call (bench:harness).
-      const answer = await target.evaluateColumns(step.op, args, n, errors, entry);
+      const answer = await target.evaluateColumns(step.op, args, n, errors, entry, takenLater.has(index));
       for (const [i, message] of answer.errors) if (!errors.has(i)) errors.set(i, `${step.op}: ${message}`);
       const col: ValueColumn = { re: answer.re, im: answer.im, errors, values: answer.values };
       columns.push(col);
