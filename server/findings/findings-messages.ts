@@ -2,7 +2,7 @@ import type { Suite } from '../../shared/schemas/suite-schema';
 
 /** One computation for the findings thread (findings-worker.ts); functions are named by their fingerprint labels. */
 export type FindingsRequest =
-  | { id: number; kind: 'fingerprint'; target: string; functions: string[] }
+  | { id: number; kind: 'fingerprint'; target: string; functions: string[]; entry?: string }
   | {
       id: number;
       kind: 'cut-map';
@@ -11,4 +11,4 @@ export type FindingsRequest =
       box: [number, number, number, number];
       grid: [number, number];
     }
-  | { id: number; kind: 'version-matrix'; library: string; suites: Suite[] };
+  | { id: number; kind: 'version-matrix'; library: string; suites: Suite[]; entries?: string[] };

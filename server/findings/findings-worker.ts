@@ -1,5 +1,6 @@
 import {
   FINGERPRINT_FUNCTIONS,
+  findEntry,
   fingerprintTarget,
   libraryVersions,
   mapCuts,
@@ -41,7 +42,11 @@ async function withTarget<T>(name: string, work: (target: Target) => Promise<T>)
 async function compute(request: FindingsRequest): Promise<unknown> {
   switch (request.kind) {
     case 'fingerprint':
-      return withTarget(request.target, (target) => fingerprintTarget(target, request.functions.map(fn)));
+      return withTarget(request.target, (target) => {
+        const entry = findEntry(target, request.entry);
+        if (entry instanceof Error) throw new InputError([{ field: 'query.entry', rule: entry.message }]);
+        return fingerprintTarget(target, request.functions.map(fn), entry.name);
+      });
     case 'cut-map': {
       const f = fn(request.fn);
       const [re0, im0, re1, im1] = request.box;
@@ -54,7 +59,11 @@ async function compute(request: FindingsRequest): Promise<unknown> {
     case 'version-matrix': {
       let targets = versionsByLibrary.get(request.library);
       if (!targets) versionsByLibrary.set(request.library, (targets = libraryVersions(request.library)));
-      return versionMatrix(request.library, request.suites, targets);
+      for (const name of request.entries ?? []) {
+        const lacking = targets.map((t) => findEntry(t, name)).find((e) => e instanceof Error);
+        if (lacking) throw new InputError([{ field: 'query.entry', rule: lacking.message }]);
+      }
+      return versionMatrix(request.library, request.suites, targets, request.entries);
     }
   }
 }

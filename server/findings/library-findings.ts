@@ -46,6 +46,7 @@ export class LibraryFindings {
   async fingerprint(
     name: string,
     functionLabels: string[] | undefined,
+    entry?: string,
   ): Promise<{ fingerprint: ConventionFingerprint } & ComputedAnswer> {
     const functions = functionLabels
       ? functionLabels.map(
@@ -53,9 +54,9 @@ export class LibraryFindings {
         )
       : FINGERPRINT_FUNCTIONS;
     const labels = functions.map((f) => f.label);
-    const key = `fingerprint|${name}|${labels.join(',')}`;
+    const key = `fingerprint|${name}|${labels.join(',')}|${entry ?? ''}`;
     const { value, ms, fromCache } = await this.kept(key, () =>
-      this.thread.ask({ kind: 'fingerprint', target: name, functions: labels }),
+      this.thread.ask({ kind: 'fingerprint', target: name, functions: labels, ...(entry ? { entry } : {}) }),
     );
     return { fingerprint: value as ConventionFingerprint, computedMs: ms, fromCache };
   }
@@ -74,7 +75,11 @@ export class LibraryFindings {
     return { cutMap: value as CutMap, computedMs: ms, fromCache };
   }
 
-  async versionMatrix(library: string, slugs: string[]): Promise<{ matrix: VersionMatrix } & ComputedAnswer> {
+  async versionMatrix(
+    library: string,
+    slugs: string[],
+    entries?: string[],
+  ): Promise<{ matrix: VersionMatrix } & ComputedAnswer> {
     const targets = this.versionsOf(library);
     if (targets.length === 0)
       throw new HttpError(404, {
@@ -98,9 +103,9 @@ export class LibraryFindings {
     if (absent.length > 0)
       throw new InputError([{ field: 'query.suite', rule: `has no approved version: ${absent.join(', ')}` }]);
     const suites = [...new Set(slugs)].map((s) => bySlug.get(s)!);
-    const key = `matrix|${targets.map((t) => t.name).join(',')}|${suites.map((s) => `${s.id}@${s.version}`).join(',')}`;
+    const key = `matrix|${targets.map((t) => t.name).join(',')}|${suites.map((s) => `${s.id}@${s.version}`).join(',')}|${(entries ?? []).join(',')}`;
     const { value, ms, fromCache } = await this.kept(key, () =>
-      this.thread.ask({ kind: 'version-matrix', library, suites }),
+      this.thread.ask({ kind: 'version-matrix', library, suites, ...(entries ? { entries } : {}) }),
     );
     return { matrix: value as VersionMatrix, computedMs: ms, fromCache };
   }

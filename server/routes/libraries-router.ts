@@ -20,8 +20,8 @@ export function librariesRouter(findings: LibraryFindings): Router {
 
   router.get('/:name/fingerprint', anyone, async (req, res) => {
     const { name } = parseInput(targetNameParams, req.params, 'params');
-    const { fn } = parseInput(fingerprintQuery, req.query, 'query');
-    res.json(await findings.fingerprint(name, fn));
+    const { fn, entry } = parseInput(fingerprintQuery, req.query, 'query');
+    res.json(await findings.fingerprint(name, fn, entry));
   });
 
   router.get('/:name/cut-map', anyone, async (req, res) => {
@@ -31,8 +31,8 @@ export function librariesRouter(findings: LibraryFindings): Router {
 
   router.get('/:name/version-matrix', anyone, async (req, res) => {
     const { name } = parseInput(targetNameParams, req.params, 'params');
-    const { suite } = parseInput(versionMatrixQuery, req.query, 'query');
-    res.json(await findings.versionMatrix(name, suite));
+    const { suite, entry } = parseInput(versionMatrixQuery, req.query, 'query');
+    res.json(await findings.versionMatrix(name, suite, entry));
   });
 
   return router;

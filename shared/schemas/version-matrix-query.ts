@@ -11,7 +11,8 @@ const MAX_SUITES = 8;
 /**
  * Query of `GET /api/targets/:name/version-matrix` (`:name` is a library without the version,
  * "complex.js"): the suites, comma-separated slugs as `sheetkeeper matrix --suite` takes ids; each
- * is compared at its newest approved version.
+ * is compared at its newest approved version; optionally the entries to compare at
+ * (comma-separated, as `sheetkeeper matrix --entry`), each suite at its own by default.
  */
 export const versionMatrixQuery = queryObject({
   suite: versionMatrixRequest.shape.suite
@@ -19,4 +20,5 @@ export const versionMatrixQuery = queryObject({
     .refine((list) => list.every((s) => /^[a-z0-9]+(-[a-z0-9]+)*$/.test(s)), {
       error: 'must be suite slugs (lower-case words joined by hyphens)',
     }),
+  entry: versionMatrixRequest.shape.entry,
 });

@@ -18,6 +18,23 @@ beforeAll(async () => {
 }, 60_000);
 afterAll(() => t.stop());
 
+describe('GET /api/targets', () => {
+  it('lists each installed target’s entries, its default first', async () => {
+    const res = await reader.get('/api/targets');
+    expect(res.status).toBe(200);
+    const byName = new Map(
+      (res.body.targets as { name: string; entries?: { name: string; default: boolean }[] }[]).map((x) => [x.name, x]),
+    );
+    expect(byName.get('complex.js@2.4.1')?.entries?.map((e) => e.name)).toEqual([
+      'complex',
+      'object',
+      'array',
+      'string',
+    ]);
+    expect(byName.get('mathjs@15.2.0/number')?.entries?.[0]).toMatchObject({ name: 'number', default: true });
+  });
+});
+
 describe('GET /api/targets/:name/fingerprint', () => {
   it('says cmath follows Annex G on every cut it has, with the +0 and −0 values at each place', async () => {
     const res = await reader.get(`${at('cmath@3.11.2')}/fingerprint`);
@@ -91,6 +108,26 @@ describe('GET /api/targets/:name/fingerprint', () => {
     const res = await reader.get(`${at('complex.js@2.4.3')}/fingerprint`).query({ format: 'svg' });
     expect(res.status).toBe(400);
     expect(res.body.issues).toEqual([{ field: 'query', rule: 'has unknown parameters: format' }]);
+  });
+
+  it('builds values through the entry asked for, and names the field of an entry the target lacks', async () => {
+    const byDefault = await reader.get(`${at('complex.js@2.4.1')}/fingerprint`).query({ fn: 'log' });
+    expect(byDefault.status).toBe(200);
+    // 2.4.1's constructor turns −0 into +0, so both zero signs land above log's cut.
+    expect(byDefault.body.fingerprint).toMatchObject({ entry: 'complex', cuts: [{ behaviour: 'counter-clockwise' }] });
+    const viaObject = await reader.get(`${at('complex.js@2.4.2')}/fingerprint`).query({ fn: 'log', entry: 'object' });
+    expect(viaObject.body.fingerprint).toMatchObject({ entry: 'object', cuts: [{ behaviour: 'signed-zero' }] });
+    const lacking = await reader.get(`${at('complex.js@2.4.2')}/fingerprint`).query({ fn: 'log', entry: 'parser' });
+    expect(lacking.status).toBe(400);
+    expect(lacking.body.issues).toEqual([
+      {
+        field: 'query.entry',
+        rule: 'complex.js@2.4.2 has no entry "parser"; its entries are complex, object, array, string',
+      },
+    ]);
+    const malformed = await reader.get(`${at('complex.js@2.4.2')}/fingerprint`).query({ entry: 'Pars\u0000er' });
+    expect(malformed.status).toBe(400);
+    expect(malformed.body.issues[0].field).toBe('query.entry');
   });
 
   it('answers 404 for a target that is not installed', async () => {
@@ -181,6 +218,25 @@ describe('GET /api/targets/:name/version-matrix', () => {
       expect(change.steps[0]!.after.version).toBe(change.firstChangedIn);
       expect(change.steps[0]!.before.value).not.toEqual(change.steps[0]!.after.value);
     }
+  }, 30_000);
+
+  it('compares at each entry asked for, and names the field of an entry a version lacks', async () => {
+    const res = await reader
+      .get('/api/targets/complex.js/version-matrix')
+      .query({ suite: 'lib-sqrt', entry: 'complex,string' });
+    expect(res.status).toBe(200);
+    expect((res.body.matrix as VersionMatrix).suites.map((s) => [s.id, s.entry])).toEqual([
+      ['lib-sqrt', 'complex'],
+      ['lib-sqrt', 'string'],
+    ]);
+    const lacking = await reader
+      .get('/api/targets/complex.js/version-matrix')
+      .query({ suite: 'lib-sqrt', entry: 'parser' });
+    expect(lacking.status).toBe(400);
+    expect(lacking.body.issues[0]).toEqual({
+      field: 'query.entry',
+      rule: expect.stringContaining('no entry "parser"'),
+    });
   }, 30_000);
 
   it('refuses more than eight suites at once', async () => {
