@@ -4,6 +4,7 @@ import { theme } from '../../constants/theme';
 import { libraryKey } from '../../shared/library-key';
 import type { TargetView } from '../../shared/target-view';
 import { QueryState } from '../ui/query-state';
+import { entryWords } from './entry-words';
 import { SkText } from '../ui/sk-text';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
@@ -24,7 +25,7 @@ const settingsWords = (s: TargetView['settings']) =>
 
 /**
  * The installed libraries, each with its versions side by side (npm aliases of older releases
- * count as versions of the same library) and its settings; a library with two or more installed
+ * count as versions of the same library), its settings and its entries; a library with two or more installed
  * versions offers its version matrix. One column on a phone, two on a wide screen.
  */
 export function TargetList({ onOpenTarget, onOpenMatrix }: TargetListProps) {
@@ -77,6 +78,7 @@ export function TargetList({ onOpenTarget, onOpenMatrix }: TargetListProps) {
                       {t.version}
                     </SkText>
                     <Text style={styles.settings}>{settingsWords(t.settings) || 'no settings'}</Text>
+                    {entryWords(t.entries) ? <Text style={styles.settings}>{entryWords(t.entries)}</Text> : null}
                     {t.installed ? null : (
                       <Text style={styles.settings}>× not installed any more: nothing can be computed for it</Text>
                     )}

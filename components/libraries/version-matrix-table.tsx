@@ -116,6 +116,7 @@ function SuiteRow({ suite, versions, wide }: { suite: SuiteEntry; versions: stri
             {suite.id} <Text style={styles.faint}>v{suite.version}</Text>
           </SkText>
           <Text style={styles.subject}>{suite.subject}</Text>
+          {suite.entry ? <Text style={styles.subject}>values built through the {suite.entry} entry</Text> : null}
         </View>
         <View style={wide ? styles.cellsWide : styles.cellsPhone}>
           {cells.map(({ v, words, delta }) => (

@@ -69,6 +69,14 @@ describe('VersionMatrixTable', () => {
     expect(screen.getByTestId('matrix-exp-principal-sz').textContent).toContain('No point of this suite changed value');
   });
 
+  it('says which entry the values were built through when the matrix names one', () => {
+    const atEntry = [{ ...SUITES[0]!, entry: 'complex' }];
+    render(<VersionMatrixTable library="complex.js" versions={VERSIONS} suites={atEntry} />);
+    expect(screen.getByTestId('matrix-sqrt-principal-sz').textContent).toContain(
+      'values built through the complex entry',
+    );
+  });
+
   it('says that no change means the same values at these points, not the same library', () => {
     render(<VersionMatrixTable library="complex.js" versions={VERSIONS} suites={[SUITES[1]!]} pending={4} />);
     expect(screen.getByTestId('matrix-summary').textContent).toBe(
