@@ -3,6 +3,7 @@ import path from 'node:path';
 import type { CallResult } from '../../../harness/adapters/call-result';
 import type { ComplexPair } from '../../../harness/adapters/complex-pair';
 import { discoverTargets } from '../../../harness/adapters/discover-targets';
+import { CMATH_ENTRIES } from '../../../harness/adapters/cmath-entries';
 import type { StdioTarget } from '../../../harness/adapters/stdio-target';
 
 const SCRIPT = path.join(__dirname, '..', '..', '..', 'harness', 'adapters', 'python', 'cmath_adapter.py');
@@ -36,6 +37,26 @@ describe('cmath through the stdio protocol', () => {
     expect(cmath.name).toMatch(/^cmath@3\.\d+\.\d+$/);
     const answer = await cmath.request('describe', []);
     expect('reply' in answer && answer.reply.version).toBe(cmath.version);
+  });
+
+  it('lists in describe the entries the harness declares for it, complex(re, im) the default', async () => {
+    const answer = await cmath.request('describe', []);
+    if (!('reply' in answer)) throw new Error(answer.error);
+    expect(answer.reply.entries).toEqual(CMATH_ENTRIES);
+    expect(cmath.entries).toEqual(CMATH_ENTRIES);
+  });
+
+  it('builds the arguments through the entry a request names, and refuses one it lacks, listing its entries', async () => {
+    // complex("-4-0j") keeps the −0 (Python parses each part's sign), so sqrt gives −2i as through complex(re, im).
+    expect(await cmath.evaluate('sqrt', [[[-4, -0]], [[-4, 0]]], 'string')).toEqual([
+      { value: [0, -2] },
+      { value: [0, 2] },
+    ]);
+    expect(await cmath.evaluate('sqrt', [[[-4, -0]]], 'parser')).toEqual([
+      { error: 'cmath@' + cmath.version + ' has no entry "parser"; its entries are complex, string' },
+    ]);
+    const raw = await cmath.request('sqrt', [['-4', '-0']], 'number');
+    expect('reply' in raw && raw.reply.error).toBe("no entry 'number'; the entries are complex, string");
   });
 
   it('returns 0 − 2i for sqrt(−4 − 0i) and 0 + 2i for sqrt(−4 + 0i)', async () => {
