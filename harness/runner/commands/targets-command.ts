@@ -1,5 +1,7 @@
 import type { TargetEntry } from '../../../shared/target-entry';
+import { probeEntryPoints } from '../../adapters/entry-point-probes';
 import { listTargets } from '../../adapters/list-targets';
+import { summarizeEntryPoints } from '../../adapters/summarize-entry-points';
 
 const cannotCarry = (c: TargetEntry['carries']): string => {
   const missing = [
@@ -14,19 +16,34 @@ const cannotCarry = (c: TargetEntry['carries']): string => {
  * `sheetkeeper targets` (docs/suite-format.md): the installed targets, versions, settings and entries,
  * loading no library. JSON by default (as list-targets.ts prints it); `--format table` for a person,
  * with one line per entry under its target: name, how the value is built, what it cannot carry.
+ * `--ways` reports instead, per target and way of building a value (the entries and the other
+ * ways people write, such as mixed real/complex arithmetic), whether ±0 parts arrive intact.
  */
 export async function targetsCommand(argv: string[]): Promise<number> {
+  const ways = argv.includes('--ways');
+  const rest = argv.filter((a) => a !== '--ways');
   const format =
-    argv[0] === '--format'
-      ? argv[1]
-      : argv[0]?.startsWith('--format=')
-        ? argv[0].slice('--format='.length)
-        : argv.length === 0
+    rest[0] === '--format' && rest.length === 2
+      ? rest[1]
+      : rest[0]?.startsWith('--format=') && rest.length === 1
+        ? rest[0].slice('--format='.length)
+        : rest.length === 0
           ? 'json'
           : null;
   if (format !== 'json' && format !== 'table') {
-    process.stderr.write('usage: sheetkeeper targets [--format json|table]\n');
+    process.stderr.write('usage: sheetkeeper targets [--format json|table] [--ways]\n');
     return 2;
+  }
+  if (ways) {
+    // Every way each library takes a value (entries and the others people write), built with
+    // ±0 parts and read back before any function runs: this loads the libraries.
+    const summary = summarizeEntryPoints(await probeEntryPoints());
+    process.stdout.write(
+      format === 'json'
+        ? `${JSON.stringify(summary, null, 2)}\n`
+        : `${summary.map((w) => `${w.target}  ${w.way}: ${w.intact ? 'keeps every zero sign' : `loses ${w.lost.join('; ')}`}`).join('\n')}\n`,
+    );
+    return 0;
   }
   const targets = listTargets();
   if (format === 'json') {

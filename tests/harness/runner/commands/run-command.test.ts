@@ -190,4 +190,14 @@ describe('sheetkeeper targets', () => {
     expect(lines[at + 1]?.trim()).toBe('entry complex  new Complex(re, im) (default)');
     expect(table.stdout).toMatch(/entry number +a plain number re \(default\); cannot carry an imaginary part/);
   });
+
+  it('reports with --ways whether each way of building a value keeps ±0: complex.js 2.4.1’s constructor does not, 2.4.2’s does', () => {
+    const r = cli(['targets', '--ways']);
+    expect(r.status).toBe(0);
+    const ways = JSON.parse(r.stdout) as { target: string; way: string; intact: boolean; lost: string[] }[];
+    const ctor = (target: string) => ways.find((w) => w.target === target && w.way === 'new Complex(re, im)')!;
+    expect(ctor('complex.js@2.4.1')).toMatchObject({ intact: false, lost: expect.arrayContaining(['-4 -0 → -4 0']) });
+    expect(ctor('complex.js@2.4.2')).toMatchObject({ intact: true, lost: [] });
+    expect(ways.some((w) => w.target.startsWith('cmath@') && w.way === 'mixed-arithmetic')).toBe(true);
+  }, 60_000);
 });
