@@ -98,6 +98,34 @@ describe('evaluateSuite with target entries', () => {
     expect(complexJs.counts.pass + complexJs.counts.fail).toBe(5);
   });
 
+  it('counts a point on a real-axis cut through a plain-number entry as not applicable where only the input’s zero sign would pick the side', async () => {
+    // acos(x + 0i) = 0 − i·acosh(x) for x > 1 under signed zeros, and + i·acosh(x) from below
+    // (ISO/IEC 9899:2011 G.6.1.1 with cacos(conj z) = conj(cacos z); from memory, the reference agrees).
+    // mathjs's acos of the plain number 1.5 answers +0.962…i: a side the number did not ask for, since
+    // it has no zero imaginary part to ask with. Through math.complex(1.5, 0) the side is asked for.
+    const suite = makeSuite({
+      subject: 'acos(z)',
+      paths: [
+        { kind: 'segment', name: 'on the cut', from: { re: '1.5', im: '0' }, to: { re: '3', im: '0' }, samples: 4 },
+      ],
+    });
+    const numberEntry = await evaluateSuite(suite, mathjsTarget('mathjs', '15.2.0', 'number', false, '2.4.3'), {
+      cache,
+    });
+    expect(numberEntry.counts).toMatchObject({ fail: 0, notApplicable: 4 });
+    expect(numberEntry.paths[0]?.notApplicable?.[0]?.reason).toBe(
+      'the number entry (re as a plain number) cannot say which side of the cut the point is on: only the sign of its zero imaginary part picks the side',
+    );
+    expect(numberEntry.byDiagnosis).toEqual({});
+    const complexEntry = await evaluateSuite(
+      { ...suite, entry: 'complex' },
+      mathjsTarget('mathjs', '15.2.0', 'number', false, '2.4.3'),
+      { cache },
+    );
+    expect(complexEntry.counts.notApplicable).toBe(0);
+    expect(complexEntry.counts.pass + complexEntry.counts.fail).toBe(4);
+  });
+
   it('passes a composed subject’s intermediate value to the next step as the library’s own object', async () => {
     // Watched on the prototype: the object sqrt returns is the very `this` of the mul that follows,
     // as in a user's `z.sqrt().mul(1)`; no step reads parts out and builds a new value.
