@@ -28,7 +28,7 @@ describe('sheetkeeper run', () => {
     expect(r.status).toBe(0);
     expect(r.stdout).toMatch(/^PASS +sqrt-principal-sz v1 × cmath@[\d.]+ — 154 pass · 0 fail/m);
     expect(r.stdout).toContain(
-      'checked: principal branch of every function, signed-zero; tolerance 4 ulps per part or relative error 8.881784197001252e-16 (4 eps); 3 path(s), 154 point(s); properties: conjugate-symmetry, root-power, range (3 property check(s) run)',
+      'checked: principal branch of every function, signed-zero; entry complex; tolerance 4 ulps per part or relative error 8.881784197001252e-16 (4 eps); 3 path(s), 154 point(s); properties: conjugate-symmetry, root-power, range (3 property check(s) run)',
     );
     expect(r.stdout).toContain('it is not a certification');
   }, 120_000);
@@ -110,7 +110,7 @@ describe('sheetkeeper run', () => {
     expect(straddle.type).toBe('branch');
     expect(straddle['#text']).toContain('[branch] zero-sign (input im)');
     expect(straddle['#text']).toContain('z        = -1 - 0i   [-0x1p+0, -0x0p+0]');
-    expect(straddle['#text']).toContain('const z = c(-1, -0);');
+    expect(straddle['#text']).toContain('const z = new Complex(-1, -0);');
   }, 120_000);
 
   it('exits 3 when every failure is an accuracy finding, and says so in its summary line', () => {
