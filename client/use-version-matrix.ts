@@ -15,16 +15,17 @@ const GROUP = 4;
  * The version matrix of one library over the given suites (their newest approved versions),
  * asked for in groups so the server never runs long on one request. Returns every group's
  * query, the suites in the order given as far as they have arrived, and the versions compared.
+ * `entry` compares every suite with its inputs built through that entry (absent: each suite's own).
  */
-export function useVersionMatrix(library: string, slugs: string[]) {
+export function useVersionMatrix(library: string, slugs: string[], entry?: string) {
   const groups: string[][] = [];
   for (let i = 0; i < slugs.length; i += GROUP) groups.push(slugs.slice(i, i + GROUP));
   const queries = useQueries({
     queries: groups.map((group) => ({
-      queryKey: [...TARGETS_KEY, library, 'version-matrix', group],
+      queryKey: [...TARGETS_KEY, library, 'version-matrix', group, entry ?? '(each suite’s own)'],
       queryFn: () =>
         apiFetch<{ matrix: VersionMatrix } & ComputedAnswer>(
-          `${targetPath(library, 'version-matrix')}?${new URLSearchParams({ suite: group.join(',') }).toString()}`,
+          `${targetPath(library, 'version-matrix')}?${new URLSearchParams({ suite: group.join(','), ...(entry ? { entry } : {}) }).toString()}`,
         ),
       staleTime: Infinity,
     })),

@@ -1,5 +1,9 @@
+import { useState } from 'react';
 import { View } from 'react-native';
 import { useSuites } from '../../client/use-suites';
+import { useTargets } from '../../client/use-targets';
+import { libraryKey } from '../../shared/library-key';
+import { ChipGroup } from '../ui/chip-group';
 import { useVersionMatrix } from '../../client/use-version-matrix';
 import { theme } from '../../constants/theme';
 import { ActionButton } from '../ui/action-button';
@@ -9,15 +13,23 @@ import { VersionMatrixTable } from './version-matrix-table';
 
 /**
  * The version matrix of one library over every suite with an approved version, asked for in
- * groups: rows appear as groups arrive, a failed group says so and can be asked again.
+ * groups: rows appear as groups arrive, a failed group says so and can be asked again. The
+ * inputs go in through each suite's own entry, or through one entry every installed version
+ * offers: a release whose constructor drops −0 shows at the constructor's entry.
  */
 export function LibraryVersionMatrix({ library }: { library: string }) {
+  const [entry, setEntry] = useState<string | undefined>(undefined);
+  const targets = useTargets();
+  const versions = (targets.data ?? []).filter((t) => t.installed && libraryKey(t.name) === library);
+  const common = (versions[0]?.entries ?? []).filter((e) =>
+    versions.every((v) => (v.entries ?? []).some((x) => x.name === e.name)),
+  );
   const suites = useSuites();
   const slugs = (suites.data ?? [])
     .filter((s) => s.approvedVersion !== null)
     .map((s) => s.slug)
     .sort();
-  const matrix = useVersionMatrix(library, slugs);
+  const matrix = useVersionMatrix(library, slugs, entry);
 
   if (suites.isPending) return <QueryState state="loading" />;
   if (suites.isError)
@@ -33,6 +45,17 @@ export function LibraryVersionMatrix({ library }: { library: string }) {
   const firstError = matrix.failed[0]?.error;
   return (
     <View style={{ gap: theme.space(3) }}>
+      {common.length > 1 ? (
+        <ChipGroup
+          label="Inputs built through"
+          options={[
+            { value: undefined, text: 'each suite’s own entry' },
+            ...common.map((e) => ({ value: e.name, text: `${e.name}: ${e.call}` })),
+          ]}
+          value={entry}
+          onChange={setEntry}
+        />
+      ) : null}
       <SkText variant="caption" accessibilityLiveRegion="polite">
         {matrix.done === matrix.groups
           ? `All ${slugs.length} approved suites compared.`
