@@ -19,6 +19,18 @@ describe('validateSuite', () => {
     });
   });
 
+  it('takes an entry on the suite and on a path, and names the field of a malformed one', () => {
+    const suite = base();
+    suite.entry = 'string';
+    suite.paths[0].entry = 'object';
+    const ok = validateSuite(suite, 'x.json');
+    expect(ok.ok && [ok.suite.entry, ok.suite.paths[0]?.entry]).toEqual(['string', 'object']);
+    suite.entry = 'Parser!';
+    suite.paths[0].entry = 'obj\u0000ect';
+    const bad = validateSuite(suite, 'x.json');
+    expect(bad.ok ? [] : bad.issues.map((i) => i.field)).toEqual(['entry', 'paths.0.entry']);
+  });
+
   it('names the file when the id itself is unusable', () => {
     const suite = base();
     suite.id = 'Not An Id';
