@@ -4,9 +4,10 @@ import type { PathRun } from './path-run';
  * Through an entry that cannot carry the sign of a zero imaginary part (a plain number), a point
  * exactly on a cut along the real axis has no side: the library gets `x`, not `x + 0i` or
  * `x − 0i`, and whichever side it answers with is its choice, not a lost sign. A failure there
- * whose diagnosis is the sign of the input's imaginary zero (the library's value is the one the
+ * whose one label is the sign of the input's imaginary zero (the library's value is the one the
  * other sign gives) is therefore not applicable to the entry, with that reason, and leaves the
- * failures. Any other diagnosis there (another sheet, an inaccurate value) stays a failure. Runs
+ * failures. A point with any other label there (another sheet, an inaccurate value) stays a
+ * failure with all its labels. Runs
  * after diagnoseFailures and before compareAlongPath and listFindings, which read `failing`.
  */
 export function excuseUnexpressedSides(run: PathRun): void {
@@ -14,11 +15,12 @@ export function excuseUnexpressedSides(run: PathRun): void {
   const reason = `the ${run.entry.name} entry (${run.entry.call}) cannot say which side of the cut the point is on: only the sign of its zero imaginary part picks the side`;
   const kept: number[] = [];
   for (const i of run.failing) {
-    const d = run.diagnoses[i];
-    if (d?.kind === 'zero-sign' && d.part === 'im' && d.of === 'input') {
+    const labels = run.labels[i] ?? [];
+    const d = labels[0];
+    if (labels.length === 1 && d?.kind === 'zero-sign' && d.part === 'im' && d.of === 'input') {
       run.notApplicable.set(i, reason);
       run.outcomes[i] = { kind: 'not-applicable', reason };
-      run.diagnoses[i] = null;
+      run.labels[i] = null;
       run.out.counts.notApplicable++;
     } else kept.push(i);
   }
