@@ -126,6 +126,22 @@ describe('evaluateSuite with target entries', () => {
     expect(complexEntry.counts.pass + complexEntry.counts.fail).toBe(4);
   });
 
+  it('keeps a point’s other labels through a plain-number entry and drops only the zero sign it could not send', async () => {
+    // mathjs's acsch(−0.001) is 104,212 ulps off in its real part (observed; the issue's example):
+    // that stays a finding, while the input's zero imaginary sign, which a number cannot carry, is no label.
+    const suite = makeSuite({
+      subject: 'acsch(z)',
+      paths: [
+        { kind: 'segment', name: 'near 0', at: ['0'], from: { re: '-0.001', im: '0' }, to: { re: '-1', im: '0' } },
+      ],
+    });
+    const r = await evaluateSuite(suite, mathjsTarget('mathjs', '15.2.0', 'number', false, '2.4.3'), { cache });
+    const f = findings(r)[0];
+    const labels = f?.outcome.kind === 'fail' ? (f.outcome.labels ?? [f.outcome.diagnosis]) : [];
+    expect(labels.map((l) => l.kind)).toEqual(['inaccurate']);
+    expect(r.byDiagnosis).toEqual({ inaccurate: 1 });
+  });
+
   it('passes a composed subject’s intermediate value to the next step as the library’s own object', async () => {
     // Watched on the prototype: the object sqrt returns is the very `this` of the mul that follows,
     // as in a user's `z.sqrt().mul(1)`; no step reads parts out and builds a new value.
