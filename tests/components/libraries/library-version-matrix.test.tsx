@@ -2,17 +2,14 @@ import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { LibraryVersionMatrix } from '../../../components/libraries/library-version-matrix';
 import type { VersionMatrix } from '../../../shared/version-matrix';
 import { fakeApiRoutes } from '../../setup/fake-api-routes';
+import { installedTargetView } from '../../setup/installed-target-view';
 import { renderWithClient } from '../../setup/render-with-client';
 
-const everything = { imaginaryPart: true, realZeroSign: true, imaginaryZeroSign: true };
-const version = (v: string, entries: string[]) => ({
-  name: `complex.js@${v}`,
-  library: 'complex.js',
-  version: v,
-  settings: {},
-  installed: true,
-  entries: entries.map((name, i) => ({ name, call: `${name} way`, default: i === 0, carries: everything })),
-});
+const version = (v: string, entries: string[]) =>
+  installedTargetView(
+    `complex.js@${v}`,
+    entries.map((name): [string, string] => [name, `${name} way`]),
+  );
 
 describe('LibraryVersionMatrix', () => {
   it('offers the entries every installed version has, and compares through the one chosen', async () => {

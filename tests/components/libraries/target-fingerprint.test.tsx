@@ -2,9 +2,9 @@ import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { TargetFingerprint } from '../../../components/libraries/target-fingerprint';
 import type { ConventionFingerprint } from '../../../shared/convention-fingerprint';
 import { fakeApiRoutes } from '../../setup/fake-api-routes';
+import { installedTargetView } from '../../setup/installed-target-view';
 import { renderWithClient } from '../../setup/render-with-client';
 
-const everything = { imaginaryPart: true, realZeroSign: true, imaginaryZeroSign: true };
 const fingerprint = (entry: string, behaviour: 'signed-zero' | 'counter-clockwise'): ConventionFingerprint => ({
   target: 'complex.js@2.4.1',
   entry,
@@ -20,23 +20,16 @@ describe('TargetFingerprint', () => {
         status: 200,
         body: {
           targets: [
-            {
-              name: 'complex.js@2.4.1',
-              library: 'complex.js',
-              version: '2.4.1',
-              settings: {},
-              installed: true,
-              entries: [
-                { name: 'complex', call: 'new Complex(re, im)', default: true, carries: everything },
-                { name: 'object', call: 'new Complex({ re, im })', default: false, carries: everything },
-                {
-                  name: 'number',
-                  call: 'a plain number',
-                  default: false,
-                  carries: { ...everything, imaginaryPart: false, imaginaryZeroSign: false },
-                },
-              ],
-            },
+            installedTargetView('complex.js@2.4.1', [
+              ['complex', 'new Complex(re, im)'],
+              ['object', 'new Complex({ re, im })'],
+              {
+                name: 'number',
+                call: 'a plain number',
+                default: false,
+                carries: { imaginaryPart: false, realZeroSign: true, imaginaryZeroSign: false },
+              },
+            ]),
           ],
         },
       },

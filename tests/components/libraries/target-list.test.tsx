@@ -1,9 +1,8 @@
 import { screen } from '@testing-library/react';
 import { TargetList } from '../../../components/libraries/target-list';
 import { fakeApiRoutes } from '../../setup/fake-api-routes';
+import { installedTargetView } from '../../setup/installed-target-view';
 import { renderWithClient } from '../../setup/render-with-client';
-
-const everything = { imaginaryPart: true, realZeroSign: true, imaginaryZeroSign: true };
 
 describe('TargetList', () => {
   it('lists the entries of an installed target, the default marked, and nothing for one recorded before entries', async () => {
@@ -13,15 +12,11 @@ describe('TargetList', () => {
         body: {
           targets: [
             {
-              name: 'complex.js@2.4.1',
-              library: 'complex.js',
-              version: '2.4.1',
+              ...installedTargetView('complex.js@2.4.1', [
+                ['complex', 'new Complex(re, im)'],
+                ['string', 'new Complex("re±im i")'],
+              ]),
               settings: { package: 'complex.js-2.4.1' },
-              installed: true,
-              entries: [
-                { name: 'complex', call: 'new Complex(re, im)', default: true, carries: everything },
-                { name: 'string', call: 'new Complex("re±im i")', default: false, carries: everything },
-              ],
             },
             { name: 'complex.js@2.0.11', library: 'complex.js', version: '2.0.11', settings: {}, installed: false },
           ],
