@@ -71,7 +71,7 @@ export async function fingerprintTarget(
 ): Promise<ConventionFingerprint> {
   const found = findEntry(target, entryName);
   if (found instanceof Error) throw found;
-  const entry = found;
+  const way = found;
   const missing: string[] = [];
   const cuts: CutEntry[] = [];
   const functionOf = new Map<CutEntry, FingerprintFunction>();
@@ -86,7 +86,7 @@ export async function fingerprintTarget(
       const answers = await target.evaluate(
         fn.op,
         path.map((p) => [[p.z.re, p.z.im] as ComplexPair, ...fn.extra]),
-        entry.name,
+        way.name,
       );
       points += path.length;
       const value = (i: number): ComplexPair | null => {
@@ -165,9 +165,9 @@ export async function fingerprintTarget(
   }
   return {
     target: target.name,
-    entry: entry.name,
+    entry: way.name,
     statement:
-      `Evidence at ${points} points, every value built through the ${entry.name} entry (${entry.call}): on each cut at the places listed, exactly on it with +0 and -0 and ${OFF} off it on both sides, ` +
+      `Evidence at ${points} points, every value built through the ${way.name} entry (${way.call}): on each cut at the places listed, exactly on it with +0 and -0 and ${OFF} off it on both sides, ` +
       `compared with the reference to a relative ${SAME.toExponential()}. It says which side each zero sign selects there; it is not a check of accuracy ` +
       `and not a certification of the library elsewhere on the cut or off it. Functions sharing a cut are compared only among the ` +
       `${functions.length - missing.length} fingerprinted here.`,
