@@ -29,7 +29,7 @@ describe('counterpartSchema', () => {
     expect(rules([{}])).toEqual(['counterparts.0.subject give a subject, an entry or both']);
     expect(rules([{ subject: 'z^(1/2)', name: 'x' }])[0]).toMatch(/^counterparts\.0/);
     expect(rules([{ entry: 'Bad Entry' }])).toEqual([
-      'counterparts.0.entry must be an entry name: lower-case words joined by hyphens',
+      'counterparts.0.entry must be a lower-case word such as "complex" or "string"',
     ]);
     expect(rules([{ subject: 'sqrt(z\u0000)' }])[0]).toMatch(/^counterparts\.0\.subject must not contain the NUL/);
     expect(rules(Array.from({ length: 5 }, () => ({ subject: 'z^(1/2)' })))).toEqual([
