@@ -69,13 +69,16 @@ function jsBuild(entry: TargetEntry, [re, im]: readonly [number, number]): strin
     .replace('re as a plain number', r);
 }
 
-function complexJs(
+/** One library's reproducer: the program at z, its values built through `entry`. */
+type LibraryReproducer = (
   program: SubjectProgram,
   target: TargetIdentity,
   z: ComplexPair,
   header: string,
   entry: TargetEntry,
-): string {
+) => string;
+
+const complexJs: LibraryReproducer = (program, target, z, header, entry) => {
   const pkg = String(target.settings.package ?? 'complex.js');
   const lines = [`// ${header}`, `const Complex = require('${pkg}');`];
   const names = stepNames(program, (v) => jsBuild(entry, v));
@@ -87,15 +90,9 @@ function complexJs(
   });
   lines.push(`console.log(${names[names.length - 1]}.re, ${names[names.length - 1]}.im);`);
   return lines.join('\n');
-}
+};
 
-function mathjs(
-  program: SubjectProgram,
-  target: TargetIdentity,
-  z: ComplexPair,
-  header: string,
-  entry: TargetEntry,
-): string {
+const mathjs: LibraryReproducer = (program, target, z, header, entry) => {
   const pkg = String(target.settings.package ?? 'mathjs');
   const lines = [
     `// ${header}`,
@@ -117,7 +114,7 @@ function mathjs(
   const last = names[names.length - 1];
   lines.push(`console.log(typeof ${last} === 'number' ? [${last}, 0] : [${last}.re, ${last}.im]);`);
   return lines.join('\n');
-}
+};
 
 /** Python's complex() of the string form, as the cmath adapter builds it ("-4-0j", "inf+nanj"). */
 const pyText = (z: ComplexPair): string =>
