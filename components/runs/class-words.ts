@@ -13,7 +13,7 @@ const WORDS: Record<DiagnosisClass, { glyph: string; one: string; many: string; 
     glyph: '≈',
     one: 'accuracy finding',
     many: 'accuracy findings',
-    explain: 'right branch and signs, but further from the exact value than the tolerance allows',
+    explain: 'right sheet and side of every cut, but further from the exact value than the tolerance allows',
   },
 };
 
