@@ -7,8 +7,9 @@ import { FAILURE_COLUMNS, failureSearchSql, RANK } from '../sql/failure-search-s
 export type FailureRow = FailureView;
 
 /** The long text a page of the table does not show; the detail view and the CSV ask for it. */
+// Read back under each field's key, as the row's own columns are (first_left_step → firstLeftStep).
 const DETAIL_COLUMNS = FAILURE_ROW_FIELDS.filter((f) => f.shown === 'detail')
-  .map((f) => `, ${f.column}`)
+  .map((f) => `, ${f.column} AS "${f.key}"`)
   .join('');
 
 /** One page of the failure table as rows, for the CSV export; with `only`, that one failure (its detail view). */

@@ -1,4 +1,5 @@
 import { User } from '../../../server/entities/user';
+import { searchFailures } from '../../../server/failures/failure-search';
 import type { MailOutbox } from '../../../server/mail/mail-outbox';
 import { PlanService } from '../../../server/plans/plan-service';
 import { RunService } from '../../../server/runs/run-service';
@@ -150,6 +151,16 @@ describe('the shard executor storing findings', () => {
         choice: 'acsc(0) is taken as asin(1/z) with 1/(+0) = +∞',
       },
     ]);
+  });
+
+  it('serves a stored finding’s steps, first step that left and choice under the names the app reads', async () => {
+    // The case page reads these keys (shared/failure-row-fields.ts); a column read back under its
+    // SQL name (first_left_step) left the page saying that no step had left.
+    const [first] = await db.dataSource.query(`SELECT id::text FROM failures WHERE run_id = $1 AND point_index = 0`, [
+      runId,
+    ]);
+    const { rows } = await searchFailures(db.dataSource, { sort: 'id', limit: 1 }, true, first.id);
+    expect(rows[0]).toMatchObject({ steps, firstLeftStep: 0, choice: null });
   });
 
   it('counts a point not applicable to the entry on the run and the shard, and stores no failure for it', async () => {
