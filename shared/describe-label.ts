@@ -12,10 +12,13 @@ function inaccuracy(d: Extract<Diagnosis, { kind: 'inaccurate' }>, style: 'short
   const c = d.cancellation;
   if (c) {
     // A tiny part beside a large value: its ulps say little (4.4e18 for a part that should be 0), the absolute error says what was lost.
+    // The sign matters to a reviewer: a tiny part of the wrong sign can put a value outside the
+    // principal range (acosh's Re ≥ 0) though the whole value is within an eps.
+    const flipped = d.signDiffers && d.part === c.part;
     const lost =
       style === 'short'
-        ? `${c.part} lost to cancellation: error ${num(c.absoluteError)} beside |value| ${num(c.magnitude)}`
-        : `the ${PART[c.part]} part is lost to cancellation: it is ${num(c.absoluteError)} off, beside a value of size |value| = ${num(c.magnitude)}`;
+        ? `${c.part} lost to cancellation${flipped ? ', opposite sign' : ''}: error ${num(c.absoluteError)} beside |value| ${num(c.magnitude)}`
+        : `the ${PART[c.part]} part is lost to cancellation${flipped ? ' and has the opposite sign' : ''}: it is ${num(c.absoluteError)} off, beside a value of size |value| = ${num(c.magnitude)}`;
     return style === 'short' ? lost : `${lost}; relative error of the whole value ${num(d.relativeError)}`;
   }
   const worst = [`${formatUlps(d.ulps)} ulps`, describeWorstPart(d, style)].filter(Boolean).join(' ');

@@ -119,7 +119,7 @@ export function CaseDetail({ id }: { id: string }) {
         </Text>
         <SkText variant="caption" style={styles.small}>
           Path {f.pathName}
-          {f.label ? ` · ${f.label}` : ''} · point {f.pointIndex} · t = {Number(f.t.toPrecision(6))}
+          {f.label ? ` · ${f.label}` : ''} · index {f.pointIndex} · t = {Number(f.t.toPrecision(6))}
           {f.isRegression ? ' · ↑ new: this point passed in the previous run of the plan' : ''}
         </SkText>
         <Link href={{ pathname: '/failures', params: { run: f.runId } }} asChild>
