@@ -38,7 +38,12 @@ export const DIAGNOSIS_STYLES: Record<DiagnosisTone, { word: string; glyph: stri
       color: '#9C2F5E',
       explain: 'a jump where none is expected, or none where one is',
     },
-    inaccurate: { word: 'inaccurate', glyph: '≈', color: '#2F5F8A', explain: 'right sheet and side of every cut, error over the tolerance' },
+    inaccurate: {
+      word: 'inaccurate',
+      glyph: '≈',
+      color: '#2F5F8A',
+      explain: 'right sheet and side of every cut, error over the tolerance',
+    },
     'not-finite': {
       word: 'not finite',
       glyph: '∞',

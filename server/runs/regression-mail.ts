@@ -27,7 +27,8 @@ const stepLines = (r: RegressionRow): string[] =>
 const HEADING: Record<DiagnosisClass, string> = {
   branch:
     'Branch regressions: wrong sheet, side of a cut or zero sign, a misplaced jump, a value not finite, or a disagreement',
-  accuracy: 'Accuracy regressions: right sheet and side of every cut, further from the exact value than the tolerance allows',
+  accuracy:
+    'Accuracy regressions: right sheet and side of every cut, further from the exact value than the tolerance allows',
 };
 
 /**
