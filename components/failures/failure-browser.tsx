@@ -50,7 +50,7 @@ export function FailureBrowser({
       <FailureFiltersPanel filters={filters} onChange={onChange} compact={!wide} />
       <View style={styles.toolbar}>
         <ChipGroup
-          label="Order"
+          label="Branch findings first, then"
           value={filters.sort ?? 'id'}
           onChange={(v) => onChange({ ...filters, sort: v === 'ulps' ? 'ulps' : undefined })}
           options={[
