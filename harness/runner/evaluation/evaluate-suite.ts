@@ -1,6 +1,5 @@
 import { describeTolerance } from '../../../shared/describe-tolerance';
-import type { DiagnosisKind } from '../../../shared/diagnosis';
-import type { OutcomeCounts, PathResult, SuiteTargetResult } from '../../../shared/run-result';
+import type { SuiteTargetResult } from '../../../shared/run-result';
 import type { Suite } from '../../../shared/schemas/suite-schema';
 import type { SuitePath } from '../../../shared/schemas/suite-path-schema';
 import type { TargetEntry } from '../../../shared/target-entry';
@@ -9,6 +8,7 @@ import type { Target } from '../../adapters/target';
 import { parseSubject } from '../../expressions/parse-subject';
 import { buildPath } from '../../paths/build-path';
 import type { PathPoint } from '../../paths/path-point';
+import { addTally } from './add-tally';
 import { emptyClassCounts } from './empty-class-counts';
 import { emptyCounts } from './empty-counts';
 import { errorText } from './error-text';
@@ -167,7 +167,7 @@ export async function evaluateSuite(
         name: path.name,
         kind: path.kind,
         points: n,
-        counts: { pass: 0, fail: 0, error: 0, skipped: n, notApplicable: 0 },
+        counts: { ...emptyCounts(), skipped: n },
         byDiagnosis: {},
         byClass: emptyClassCounts(),
         jumps: null,
@@ -198,22 +198,11 @@ export async function evaluateSuite(
     options.onProgress?.(done, total);
   }
   for (const p of result.paths) {
-    for (const key of Object.keys(result.counts) as (keyof OutcomeCounts)[]) result.counts[key] += p.counts[key];
-    result.byClass.branch += p.byClass.branch;
-    result.byClass.accuracy += p.byClass.accuracy;
+    addTally(result, p);
     if (p.error) result.errors.push(`${p.name}: ${p.error}`);
   }
-  result.byDiagnosis = countDiagnoses(result.paths);
   result.status = pairStatus(result, options.signal?.aborted === true);
   result.reference = { computed: cache.computed - computed0, cached: cache.cached - cached0 };
   result.durationMs = Date.now() - started;
   return result;
-}
-
-function countDiagnoses(paths: PathResult[]): Partial<Record<DiagnosisKind, number>> {
-  const out: Partial<Record<DiagnosisKind, number>> = {};
-  for (const p of paths)
-    for (const [kind, n] of Object.entries(p.byDiagnosis))
-      out[kind as DiagnosisKind] = (out[kind as DiagnosisKind] ?? 0) + (n ?? 0);
-  return out;
 }

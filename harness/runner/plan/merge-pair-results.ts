@@ -1,7 +1,8 @@
 import { NOTHING_CHECKED, pairStatus } from '../evaluation/pair-status';
+import { addTally } from '../evaluation/add-tally';
 import { emptyClassCounts } from '../evaluation/empty-class-counts';
-import type { DiagnosisKind } from '../../../shared/diagnosis';
-import type { OutcomeCounts, SuiteTargetResult } from '../../../shared/run-result';
+import { emptyCounts } from '../evaluation/empty-counts';
+import type { SuiteTargetResult } from '../../../shared/run-result';
 
 /**
  * Joins the slice results of one suite × target pair into one result: paths in the suite's
@@ -19,7 +20,7 @@ export function mergePairResults(
   const merged: SuiteTargetResult = {
     ...first,
     checked: { ...first.checked, paths: totalPaths, points: totalPoints },
-    counts: { pass: 0, fail: 0, error: 0, skipped: 0, notApplicable: 0 },
+    counts: emptyCounts(),
     byDiagnosis: {},
     byClass: emptyClassCounts(),
     paths: [],
@@ -30,11 +31,7 @@ export function mergePairResults(
   let cancelled = false;
   for (const { result } of sorted) {
     merged.paths.push(...result.paths);
-    for (const k of Object.keys(merged.counts) as (keyof OutcomeCounts)[]) merged.counts[k] += result.counts[k];
-    for (const [kind, n] of Object.entries(result.byDiagnosis))
-      merged.byDiagnosis[kind as DiagnosisKind] = (merged.byDiagnosis[kind as DiagnosisKind] ?? 0) + (n ?? 0);
-    merged.byClass.branch += result.byClass.branch;
-    merged.byClass.accuracy += result.byClass.accuracy;
+    addTally(merged, result);
     merged.errors.push(...result.errors);
     merged.durationMs += result.durationMs;
     merged.reference.computed += result.reference.computed;

@@ -1,9 +1,10 @@
 import path from 'node:path';
-import type { DiagnosisKind } from '../../../shared/diagnosis';
 import type { OutcomeCounts, RunResult, SuiteTargetResult } from '../../../shared/run-result';
 import type { Suite } from '../../../shared/schemas/suite-schema';
 import type { TargetDescriptor } from '../../adapters/target-descriptor';
+import { addTally } from '../evaluation/add-tally';
 import { emptyClassCounts } from '../evaluation/empty-class-counts';
+import { emptyCounts } from '../evaluation/empty-counts';
 import { DEFAULT_TIME_LIMIT_MS } from '../evaluation/evaluate-pair';
 import { ReferenceCache } from '../reference-cache/reference-cache';
 import { inProcessLane } from './in-process-lane';
@@ -183,16 +184,9 @@ export async function runPlan(plan: Plan, options: RunOptions = {}): Promise<Run
       );
     }
   }
-  const counts: OutcomeCounts = { pass: 0, fail: 0, error: 0, skipped: 0, notApplicable: 0 };
-  const byDiagnosis: Partial<Record<DiagnosisKind, number>> = {};
-  const byClass = emptyClassCounts();
-  for (const r of results) {
-    byClass.branch += r.byClass.branch;
-    byClass.accuracy += r.byClass.accuracy;
-    for (const k of Object.keys(counts) as (keyof OutcomeCounts)[]) counts[k] += r.counts[k];
-    for (const [kind, n] of Object.entries(r.byDiagnosis))
-      byDiagnosis[kind as DiagnosisKind] = (byDiagnosis[kind as DiagnosisKind] ?? 0) + (n ?? 0);
-  }
+  const tally = { counts: emptyCounts(), byDiagnosis: {}, byClass: emptyClassCounts() };
+  for (const r of results) addTally(tally, r);
+  const { counts, byDiagnosis, byClass } = tally;
   const statuses = results.map((r) => r.status);
   return {
     tool: { name: 'sheetkeeper', version: options.toolVersion ?? '0.1.0' },

@@ -3,6 +3,7 @@ import type { PathResult, SuiteTargetResult } from '../../../shared/run-result';
 import type { Suite } from '../../../shared/schemas/suite-schema';
 import type { TargetIdentity } from '../../../shared/target-identity';
 import { emptyClassCounts } from '../evaluation/empty-class-counts';
+import { emptyCounts } from '../evaluation/empty-counts';
 import { propertiesNotRun } from '../evaluation/properties-not-run';
 
 /**
@@ -20,6 +21,8 @@ export function sliceFailure(
   reason: string,
   kind: 'error' | 'cancelled',
 ): SuiteTargetResult {
+  // Every point is an error, or skipped when the run was cancelled.
+  const unchecked = (n: number) => ({ ...emptyCounts(), [kind === 'error' ? 'error' : 'skipped']: n });
   const pathResults: PathResult[] = paths.map((p) => {
     const path = suite.paths[p];
     const n = pathPoints[p] ?? 0;
@@ -27,13 +30,7 @@ export function sliceFailure(
       name: path?.name ?? `path ${p}`,
       kind: path?.kind ?? 'segment',
       points: n,
-      counts: {
-        pass: 0,
-        fail: 0,
-        error: kind === 'error' ? n : 0,
-        skipped: kind === 'cancelled' ? n : 0,
-        notApplicable: 0,
-      },
+      counts: unchecked(n),
       byDiagnosis: {},
       byClass: emptyClassCounts(),
       jumps: null,
@@ -57,13 +54,7 @@ export function sliceFailure(
       points,
       properties: propertiesNotRun(suite),
     },
-    counts: {
-      pass: 0,
-      fail: 0,
-      error: kind === 'error' ? points : 0,
-      skipped: kind === 'cancelled' ? points : 0,
-      notApplicable: 0,
-    },
+    counts: unchecked(points),
     byDiagnosis: {},
     byClass: emptyClassCounts(),
     paths: pathResults,
