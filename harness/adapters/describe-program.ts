@@ -1,0 +1,46 @@
+import path from 'node:path';
+import type { ProgramTargetSource } from '../../shared/target-source';
+import type { TargetEntry } from '../../shared/target-entry';
+import { stdioTarget } from './stdio-target';
+import type { TargetDescriptor } from './target-descriptor';
+
+/**
+ * A `program` target source (shared/target-source.ts) made into a target: the program is started
+ * once to answer `describe` (docs/stdio-protocol.md), which names its library, version and entries,
+ * and closed again; the descriptor then opens a fresh one on first use. `baseDir` is the folder the
+ * source's relative `cwd` is read from. Rejects with a message naming what the program got wrong
+ * (it did not start, did not answer in time, or its answer lacks a library or version).
+ */
+export async function describeProgram(source: ProgramTargetSource, baseDir: string): Promise<TargetDescriptor> {
+  const [command, ...args] = source.command as [string, ...string[]];
+  const cwd = source.cwd === undefined ? baseDir : path.resolve(baseDir, source.cwd);
+  const settings = { protocol: 'stdio', command: source.command.join(' ') };
+  const open = (identity: { name: string; library: string; version: string; entries?: TargetEntry[] }) =>
+    stdioTarget({
+      ...identity,
+      settings,
+      command,
+      args,
+      cwd,
+      ...(source.timeLimitMs !== undefined ? { timeLimitMs: source.timeLimitMs } : {}),
+    });
+  const probe = open({ name: source.name ?? 'program', library: 'program', version: '?' });
+  try {
+    const answer = await probe.request('describe', []);
+    if ('error' in answer) throw new Error(`${settings.command}: describe failed: ${answer.error}`);
+    const { library, version, entries } = answer.reply as { library?: unknown; version?: unknown; entries?: unknown };
+    if (typeof library !== 'string' || library.trim() === '')
+      throw new Error(`${settings.command}: describe answered no "library"`);
+    if (typeof version !== 'string' || version.trim() === '')
+      throw new Error(`${settings.command}: describe answered no "version"`);
+    const identity = {
+      name: source.name ?? `${library}@${version}`,
+      library,
+      version,
+      ...(Array.isArray(entries) ? { entries: entries as TargetEntry[] } : {}),
+    };
+    return { ...identity, settings, open: () => open(identity) };
+  } finally {
+    await probe.close();
+  }
+}
