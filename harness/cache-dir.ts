@@ -1,0 +1,12 @@
+import os from 'node:os';
+import path from 'node:path';
+
+/**
+ * The user's cache folder for what the harness builds or fetches on first use (the compiled C
+ * adapter, under c-adapter/): `SHEETKEEPER_CACHE_DIR` when set, else ~/.cache/sheetkeeper. Read on
+ * every call, so a test or a worker can point it elsewhere through the environment.
+ */
+export function cacheDir(env: NodeJS.ProcessEnv = process.env): string {
+  const chosen = env.SHEETKEEPER_CACHE_DIR?.trim();
+  return chosen ? path.resolve(chosen) : path.join(os.homedir(), '.cache', 'sheetkeeper');
+}
