@@ -6,37 +6,15 @@ cmath follows ISO C Annex G for special values and signed zeros, but raises
 ValueError / OverflowError where C returns a value and signals an exception.
 """
 import cmath
-import json
 import operator
 import platform
-import sys
 
-
-def read_number(text):
-    if not isinstance(text, str):
-        raise ValueError("numbers travel as strings, got %r" % (text,))
-    t = text.strip().lower()
-    if "0x" in t:
-        return float.fromhex(t)
-    return float(t)
-
-
-def write_number(x):
-    if x != x:
-        return "nan"
-    if x == float("inf"):
-        return "inf"
-    if x == float("-inf"):
-        return "-inf"
-    # repr is the shortest string that reads back to the same double; -0.0 stays "-0.0".
-    return repr(x)
+from stdio_protocol import read_number, read_pair, serve, write_number
 
 
 def read_complex(pair, entry="complex"):
     """Builds the value through the entry the request names (ENTRIES), never patching it."""
-    if not isinstance(pair, list) or len(pair) != 2:
-        raise ValueError("a complex number is a pair [re, im], got %r" % (pair,))
-    re_, im_ = read_number(pair[0]), read_number(pair[1])
+    re_, im_ = read_pair(pair)
     if entry == "string":
         return complex(complex_text(re_, im_))
     return complex(re_, im_)
@@ -137,17 +115,7 @@ def answer(request):
 
 
 def main():
-    for line in sys.stdin:
-        if not line.strip():
-            continue
-        try:
-            request = json.loads(line)
-        except ValueError as e:
-            reply = {"id": None, "error": "not JSON: %s" % e}
-        else:
-            reply = answer(request)
-        sys.stdout.write(json.dumps(reply) + "\n")
-        sys.stdout.flush()
+    serve(answer)
 
 
 if __name__ == "__main__":
