@@ -286,3 +286,12 @@ ensure_chromium() {
 ensure_python_references() {
   if ! /usr/bin/python3 -c 'import mpmath, gmpy2' 2>/dev/null; then apt_install python3-mpmath python3-gmpy2; fi
 }
+
+# The C and NumPy targets (docs/c-and-numpy-adapters.md): Debian's gcc with the C library's headers
+# builds the C adapter on first use, and NumPy is Debian's python3-numpy for /usr/bin/python3.
+ensure_adapter_languages() {
+  local missing=()
+  if [ ! -x /usr/bin/gcc ] || [ ! -f /usr/include/complex.h ]; then missing+=(gcc libc6-dev); fi
+  if ! /usr/bin/python3 -c 'import numpy' 2>/dev/null; then missing+=(python3-numpy); fi
+  if [ "${#missing[@]}" -gt 0 ]; then apt_install "${missing[@]}"; fi
+}

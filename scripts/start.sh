@@ -2,6 +2,7 @@
 # `npm start`: everything from a fresh clone to a serving app on 127.0.0.1.
 source "$(dirname "$0")/lib.sh"
 ensure_node_modules_and_postgres
+ensure_adapter_languages
 export SHEETKEEPER_DB="${SHEETKEEPER_DB:-sheetkeeper}"
 ensure_database "$SHEETKEEPER_DB"
 node --import tsx scripts/migrate.ts

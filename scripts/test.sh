@@ -7,6 +7,7 @@ began=$(date +%s)
 
 ensure_node_modules_and_postgres
 ensure_python_references
+ensure_adapter_languages
 ensure_chromium
 
 OUT="$ROOT/.data/test-output"

@@ -1,17 +1,23 @@
 import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
+import { PACKAGE_ROOT } from '../package-root';
+import { cComplexTarget } from './c-complex-target';
 import { CMATH_ENTRIES } from './cmath-entries';
 import { complexJsTarget } from './complex-js-target';
 import { installedVersion } from './installed-version';
 import { jsMathTarget } from './js-math-target';
 import { mathjsTarget } from './mathjs-target';
-import { pythonVersion } from './python-version';
+import { NUMPY_ENTRIES } from './numpy-entries';
+import { pythonVersions } from './python-versions';
 import { stdioTarget } from './stdio-target';
+import { systemLibcVersion } from './system-libc-version';
 import type { TargetIdentity } from '../../shared/target-identity';
 import type { TargetDescriptor } from './target-descriptor';
 
 /** Debian's interpreter (docs/conventions.md): the python3 first on PATH may be another one. */
 const DEBIAN_PYTHON = '/usr/bin/python3';
+/** Debian's gcc, which builds the C adapter on first use (harness/adapters/c-adapter-binary.ts). */
+const DEBIAN_GCC = '/usr/bin/gcc';
 const PROJECT_ROOT = path.resolve(__dirname, '..', '..');
 
 /**
@@ -19,10 +25,16 @@ const PROJECT_ROOT = path.resolve(__dirname, '..', '..');
  * mathjs under their own name and every npm alias of them in package.json's
  * dependencies (versions read from each installed package.json), mathjs four ways
  * (complex and number entry points, predictable off and on), JavaScript's Math, and
- * Python's cmath through the stdio protocol when /usr/bin/python3 runs. Sorted by
- * library, then version (numerically), then name.
+ * through the stdio protocol: Python's cmath when /usr/bin/python3 runs, NumPy when that Python
+ * has it, and the system C library's <complex.h> when gcc is there (listed without compiling:
+ * opening it compiles the adapter if the cache has none). Sorted by library, then version
+ * (numerically), then name.
  */
-export function discoverTargets(root: string = PROJECT_ROOT, python: string = DEBIAN_PYTHON): TargetDescriptor[] {
+export function discoverTargets(
+  root: string = PROJECT_ROOT,
+  python: string = DEBIAN_PYTHON,
+  compiler: string = DEBIAN_GCC,
+): TargetDescriptor[] {
   const manifest = JSON.parse(readFileSync(path.join(root, 'package.json'), 'utf8')) as {
     dependencies?: Record<string, string>;
   };
@@ -47,7 +59,8 @@ export function discoverTargets(root: string = PROJECT_ROOT, python: string = DE
     }
   }
   targets.push({ ...describe(jsMathTarget()), open: jsMathTarget });
-  const cmathVersion = existsSync(python) ? pythonVersion(python) : null;
+  const versions = existsSync(python) ? pythonVersions(python) : null;
+  const cmathVersion = versions?.python;
   if (cmathVersion) {
     const script = path.join(root, 'harness', 'adapters', 'python', 'cmath_adapter.py');
     const open = () =>
@@ -60,6 +73,26 @@ export function discoverTargets(root: string = PROJECT_ROOT, python: string = DE
         command: python,
         args: [script],
       });
+    targets.push({ ...describe(open()), open });
+  }
+  const numpyVersion = versions?.numpy;
+  if (numpyVersion) {
+    const script = path.join(PACKAGE_ROOT, 'harness', 'adapters', 'python', 'numpy_adapter.py');
+    const open = () =>
+      stdioTarget({
+        name: `numpy@${numpyVersion}`,
+        library: 'numpy',
+        version: numpyVersion,
+        settings: { protocol: 'stdio', command: `${python} ${path.relative(PACKAGE_ROOT, script)}` },
+        entries: [...NUMPY_ENTRIES],
+        command: python,
+        args: [script],
+      });
+    targets.push({ ...describe(open()), open });
+  }
+  if (existsSync(compiler)) {
+    const libc = systemLibcVersion();
+    const open = () => cComplexTarget({ ...libc, compiler });
     targets.push({ ...describe(open()), open });
   }
   const numeric = (v: string): number[] => v.split(/[.-]/).map((x) => Number(x) || 0);

@@ -1,6 +1,10 @@
-import { readFileSync } from 'node:fs';
+import { mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
+import os from 'node:os';
 import path from 'node:path';
+import { C_COMPLEX_ENTRIES } from '../../../harness/adapters/c-complex-entries';
 import { discoverTargets } from '../../../harness/adapters/discover-targets';
+import { NUMPY_ENTRIES } from '../../../harness/adapters/numpy-entries';
+import { systemLibcVersion } from '../../../harness/adapters/system-libc-version';
 import { listTargets } from '../../../harness/adapters/list-targets';
 
 const ROOT = path.join(__dirname, '..', '..', '..');
@@ -49,9 +53,34 @@ describe('discoverTargets', () => {
     }
   }, 60_000);
 
-  it('lists only JavaScript Math when no library is installed and Python does not run', () => {
-    const empty = discoverTargets(path.join(__dirname, 'fixtures', 'empty-project'), '/nonexistent/python3');
+  it('lists only JavaScript Math when no library is installed and neither Python nor gcc runs', () => {
+    const empty = discoverTargets(
+      path.join(__dirname, 'fixtures', 'empty-project'),
+      '/nonexistent/python3',
+      '/nonexistent/gcc',
+    );
     expect(empty.map((t) => t.library)).toEqual(['JavaScript Math']);
+  });
+
+  it('lists the system C library when gcc is there without compiling the adapter, and NumPy when Python has it', () => {
+    const cache = mkdtempSync(path.join(os.tmpdir(), 'sheetkeeper-discover-'));
+    const before = process.env.SHEETKEEPER_CACHE_DIR;
+    process.env.SHEETKEEPER_CACHE_DIR = cache;
+    try {
+      const found = discoverTargets();
+      const libc = systemLibcVersion();
+      expect(found.find((t) => t.library === libc.library)).toMatchObject({
+        name: `${libc.library}@${libc.version}`,
+        entries: C_COMPLEX_ENTRIES,
+        settings: { protocol: 'stdio', language: 'C', compiler: '/usr/bin/gcc' },
+      });
+      expect(found.find((t) => t.library === 'numpy')).toMatchObject({ entries: NUMPY_ENTRIES });
+      expect(readdirSync(cache)).toEqual([]);
+    } finally {
+      if (before === undefined) delete process.env.SHEETKEEPER_CACHE_DIR;
+      else process.env.SHEETKEEPER_CACHE_DIR = before;
+      rmSync(cache, { recursive: true, force: true });
+    }
   });
 });
 
