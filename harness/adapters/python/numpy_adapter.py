@@ -97,8 +97,9 @@ def results(op, args, entry):
     out = [{"error": r} if isinstance(r, str) else None for r in read]
     if not good:
         return out
-    columns = [build(entry, [read[i][k] for i in good]) for k in range(len(read[good[0]]))]
+    # Building re + im * 1j computes inf * 0 for an infinite im: that warning is switched off too.
     with np.errstate(all="ignore"):
+        columns = [build(entry, [read[i][k] for i in good]) for k in range(len(read[good[0]]))]
         if op == "echo":
             values = columns[0]
         elif op in UNARY:
