@@ -5,8 +5,8 @@ import { ENTRY_CARRIES } from './entry-carries';
  * NumPy's entries as harness/adapters/python/numpy_adapter.py builds them and lists them in its
  * `describe` answer (a test holds the two equal): the scalar np.complex128(complex(re, im)), the
  * default; a complex128 array of the batch, over which each function runs once; and the array a
- * NumPy user writes as `re + im * 1j`. Python's float × complex is a full complex product in 3.11,
- * so im * 1j is (im·0 − 0, im + 0): the imaginary −0 always becomes +0, a real −0 becomes +0 where
+ * NumPy user writes as `re + im * 1j`. NumPy promotes the float64 array to complex128 before the
+ * product, so im * 1j is (im·0 − 0, im + 0): the imaginary −0 always becomes +0, a real −0 becomes +0 where
  * im ≥ +0, and an infinite or NaN im makes the real part NaN (probed with NumPy 1.24.2,
  * docs/c-and-numpy-adapters.md).
  */
