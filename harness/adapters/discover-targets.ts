@@ -11,6 +11,7 @@ import { NUMPY_ENTRIES } from './numpy-entries';
 import { pythonVersions } from './python-versions';
 import { stdioTarget } from './stdio-target';
 import { systemLibcVersion } from './system-libc-version';
+import type { TargetEntry } from '../../shared/target-entry';
 import type { TargetIdentity } from '../../shared/target-identity';
 import type { TargetDescriptor } from './target-descriptor';
 
@@ -60,31 +61,21 @@ export function discoverTargets(
   }
   targets.push({ ...describe(jsMathTarget()), open: jsMathTarget });
   const versions = existsSync(python) ? pythonVersions(python) : null;
-  const cmathVersion = versions?.python;
-  if (cmathVersion) {
-    const script = path.join(root, 'harness', 'adapters', 'python', 'cmath_adapter.py');
+  // Python's own cmath, then NumPy when that Python has it: one adapter script each.
+  const adapters: [string, string | null | undefined, string, readonly TargetEntry[]][] = [
+    ['cmath', versions?.python, 'cmath_adapter.py', CMATH_ENTRIES],
+    ['numpy', versions?.numpy, 'numpy_adapter.py', NUMPY_ENTRIES],
+  ];
+  for (const [library, version, file, entries] of adapters) {
+    if (!version) continue;
+    const script = path.join(PACKAGE_ROOT, 'harness', 'adapters', 'python', file);
     const open = () =>
       stdioTarget({
-        name: `cmath@${cmathVersion}`,
-        library: 'cmath',
-        version: cmathVersion,
-        settings: { protocol: 'stdio', command: `${python} ${path.relative(root, script)}` },
-        entries: [...CMATH_ENTRIES],
-        command: python,
-        args: [script],
-      });
-    targets.push({ ...describe(open()), open });
-  }
-  const numpyVersion = versions?.numpy;
-  if (numpyVersion) {
-    const script = path.join(PACKAGE_ROOT, 'harness', 'adapters', 'python', 'numpy_adapter.py');
-    const open = () =>
-      stdioTarget({
-        name: `numpy@${numpyVersion}`,
-        library: 'numpy',
-        version: numpyVersion,
+        name: `${library}@${version}`,
+        library,
+        version,
         settings: { protocol: 'stdio', command: `${python} ${path.relative(PACKAGE_ROOT, script)}` },
-        entries: [...NUMPY_ENTRIES],
+        entries: [...entries],
         command: python,
         args: [script],
       });

@@ -123,11 +123,7 @@ def entry_points(pair):
         return {name: write_complex(build(name, [parts])[0]) for name in ENTRY_NAMES}
 
 
-def answer(request):
-    rid = request.get("id") if isinstance(request, dict) else None
-    if not isinstance(request, dict) or not isinstance(request.get("op"), str) or not isinstance(request.get("args"), list):
-        return {"id": rid, "error": "a request is {\"id\", \"op\", \"args\": [...]}"}
-    op, args = request["op"], request["args"]
+def answer(rid, op, args, request):
     if op == "describe":
         return {
             "id": rid,

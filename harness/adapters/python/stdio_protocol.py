@@ -35,8 +35,16 @@ def read_pair(pair):
     return read_number(pair[0]), read_number(pair[1])
 
 
+def reply_to(request, answer):
+    """answer(id, op, args, request) for a request of the protocol's shape, else the error answer naming that shape."""
+    rid = request.get("id") if isinstance(request, dict) else None
+    if not isinstance(request, dict) or not isinstance(request.get("op"), str) or not isinstance(request.get("args"), list):
+        return {"id": rid, "error": "a request is {\"id\", \"op\", \"args\": [...]}"}
+    return answer(rid, request["op"], request["args"], request)
+
+
 def serve(answer):
-    """Answers each non-blank line of stdin with answer(request) as one JSON line, flushed; exits when stdin closes."""
+    """Answers each non-blank line of stdin as one JSON line, flushed (reply_to); exits when stdin closes."""
     for line in sys.stdin:
         if not line.strip():
             continue
@@ -45,6 +53,6 @@ def serve(answer):
         except ValueError as e:
             reply = {"id": None, "error": "not JSON: %s" % e}
         else:
-            reply = answer(request)
+            reply = reply_to(request, answer)
         sys.stdout.write(json.dumps(reply) + "\n")
         sys.stdout.flush()

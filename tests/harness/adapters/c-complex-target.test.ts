@@ -2,18 +2,14 @@ import { spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import type { CallResult } from '../../../harness/adapters/call-result';
 import { cAdapterBinary } from '../../../harness/adapters/c-adapter-binary';
 import { C_COMPLEX_ENTRIES } from '../../../harness/adapters/c-complex-entries';
 import { C_ADAPTER_SOURCE, cComplexTarget } from '../../../harness/adapters/c-complex-target';
 import type { ComplexPair } from '../../../harness/adapters/complex-pair';
 import type { StdioTarget } from '../../../harness/adapters/stdio-target';
+import { C_AND_NUMPY_OPS } from './fixtures/c-and-numpy-ops';
+import { valueOf } from './fixtures/value-of';
 import { systemLibcVersion } from '../../../harness/adapters/system-libc-version';
-
-const value = (r: CallResult | undefined): ComplexPair => {
-  if (!r || !('value' in r)) throw new Error(`expected a value, got ${JSON.stringify(r)}`);
-  return r.value;
-};
 
 // Annex G's rules below are quoted from ISO/IEC 9899:2011 (C11) Annex G; the clause is named beside
 // each. glibc's <complex.h> (2.36) meets every one of them: a deviation would be kept here as a
@@ -40,23 +36,7 @@ describe('the C library through the stdio protocol', () => {
       id: expect.any(Number),
       library: libc.library,
       version: libc.version,
-      ops: [
-        'acos',
-        'acosh',
-        'add',
-        'asin',
-        'asinh',
-        'atan',
-        'atanh',
-        'div',
-        'exp',
-        'log',
-        'mul',
-        'neg',
-        'pow',
-        'sqrt',
-        'sub',
-      ],
+      ops: C_AND_NUMPY_OPS,
       entries: C_COMPLEX_ENTRIES,
     });
     expect(target.name).toBe(`${libc.library}@${libc.version}`);
@@ -151,7 +131,7 @@ describe('the C library through the stdio protocol', () => {
     ];
     for (const [op, z, expected] of cases) {
       const [result] = await target.evaluate(op, [[z]]);
-      expect({ op, z, result: value(result) }).toEqual({ op, z, result: expected });
+      expect({ op, z, result: valueOf(result) }).toEqual({ op, z, result: expected });
     }
   });
 
@@ -164,7 +144,7 @@ describe('the C library through the stdio protocol', () => {
         [1, 1],
       ],
     ]);
-    expect(value(product).some((part) => Math.abs(part) === Infinity)).toBe(true);
+    expect(valueOf(product).some((part) => Math.abs(part) === Infinity)).toBe(true);
     // G.5.1: a nonzero finite number divided by a zero is an infinity.
     const [quotient] = await target.evaluate('div', [
       [
@@ -172,7 +152,7 @@ describe('the C library through the stdio protocol', () => {
         [0, 0],
       ],
     ]);
-    expect(value(quotient).some((part) => Math.abs(part) === Infinity)).toBe(true);
+    expect(valueOf(quotient).some((part) => Math.abs(part) === Infinity)).toBe(true);
     // G.5.1: a finite number divided by an infinity is a zero.
     const [zero] = await target.evaluate('div', [
       [
@@ -180,7 +160,7 @@ describe('the C library through the stdio protocol', () => {
         [Infinity, 0],
       ],
     ]);
-    expect(value(zero).map(Math.abs)).toEqual([0, 0]);
+    expect(valueOf(zero).map(Math.abs)).toEqual([0, 0]);
   });
 
   it('computes cpow(−8, 1/3) near the principal root 1 + √3 i', async () => {
@@ -190,7 +170,7 @@ describe('the C library through the stdio protocol', () => {
         [1 / 3, 0],
       ],
     ]);
-    const [re, im] = value(root);
+    const [re, im] = valueOf(root);
     expect(re).toBeCloseTo(1, 14);
     expect(im).toBeCloseTo(Math.sqrt(3), 14);
   });
