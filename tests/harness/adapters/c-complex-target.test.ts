@@ -8,6 +8,7 @@ import { C_ADAPTER_SOURCE, cComplexTarget } from '../../../harness/adapters/c-co
 import type { ComplexPair } from '../../../harness/adapters/complex-pair';
 import type { StdioTarget } from '../../../harness/adapters/stdio-target';
 import { C_AND_NUMPY_OPS } from './fixtures/c-and-numpy-ops';
+import { ECHO_INPUTS } from './fixtures/echo-inputs';
 import { valueOf } from './fixtures/value-of';
 import { systemLibcVersion } from '../../../harness/adapters/system-libc-version';
 
@@ -45,10 +46,7 @@ describe('the C library through the stdio protocol', () => {
 
   it('echoes −0, subnormals, the largest double, infinities, NaN and hex floats exactly, as shortest decimals', async () => {
     const answer = await target.request('echo', [
-      ['-0', '0x1p-1074'],
-      ['2.2250738585072014e-308', '-0x1.fffffffffffffp+1023'],
-      ['inf', '-inf'],
-      ['nan', '-0x1.8p+1'],
+      ...ECHO_INPUTS,
       ['0.1', '0.3333333333333333'],
       ['1e-5', '123456789012345680000'],
     ]);

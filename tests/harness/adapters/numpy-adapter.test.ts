@@ -5,6 +5,7 @@ import { discoverTargets } from '../../../harness/adapters/discover-targets';
 import { NUMPY_ENTRIES } from '../../../harness/adapters/numpy-entries';
 import type { StdioTarget } from '../../../harness/adapters/stdio-target';
 import { C_AND_NUMPY_OPS } from './fixtures/c-and-numpy-ops';
+import { ECHO_INPUTS } from './fixtures/echo-inputs';
 import { valueOf } from './fixtures/value-of';
 import { askPython } from '../../external/python-oracle';
 import { unhex } from '../../external/unhex';
@@ -34,12 +35,7 @@ describe('NumPy through the stdio protocol', () => {
   });
 
   it('echoes −0, subnormals, infinities, NaN and hex floats exactly through complex128', async () => {
-    const answer = await numpy.request('echo', [
-      ['-0', '0x1p-1074'],
-      ['2.2250738585072014e-308', '-0x1.fffffffffffffp+1023'],
-      ['inf', '-inf'],
-      ['nan', '-0x1.8p+1'],
-    ]);
+    const answer = await numpy.request('echo', ECHO_INPUTS);
     expect('reply' in answer && answer.reply.results).toEqual([
       ['-0.0', '5e-324'],
       ['2.2250738585072014e-308', '-1.7976931348623157e+308'],
