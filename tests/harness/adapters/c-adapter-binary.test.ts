@@ -1,10 +1,12 @@
-import { mkdtempSync, readdirSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { execFile, spawnSync } from 'node:child_process';
+import { mkdtempSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { cAdapterBinary } from '../../../harness/adapters/c-adapter-binary';
 import { C_ADAPTER_SOURCE, cComplexTarget } from '../../../harness/adapters/c-complex-target';
 
 const GCC = '/usr/bin/gcc';
+const BUILDER = path.join(__dirname, 'fixtures', 'build-c-adapter.ts');
 
 describe('cAdapterBinary', () => {
   let folder: string;
@@ -25,15 +27,43 @@ describe('cAdapterBinary', () => {
     expect(readdirSync(folder)).toEqual([path.basename(first)]);
   });
 
-  it('ends with one complete binary and no temporary files when two builds start at once', async () => {
-    // Two builds racing in one process run two gcc processes writing to two temporary names, the
-    // same race as two processes: each renames a complete binary onto the final name.
-    const [a, b] = await Promise.all([
-      cAdapterBinary({ source: C_ADAPTER_SOURCE, compiler: GCC, folder }),
-      cAdapterBinary({ source: C_ADAPTER_SOURCE, compiler: GCC, folder }),
-    ]);
+  it('ends with one complete binary and no temporary files when two processes build it at once', async () => {
+    // Two Node processes, each running gcc to a temporary name and renaming it onto the final one.
+    const build = () =>
+      new Promise<string>((resolve, reject) => {
+        execFile(process.execPath, ['--import', 'tsx', BUILDER, folder], { timeout: 60_000 }, (e, out, err) =>
+          e ? reject(new Error(`${e.message}: ${err}`)) : resolve(out),
+        );
+      });
+    const [a, b] = await Promise.all([build(), build()]);
     expect(a).toBe(b);
     expect(readdirSync(folder)).toEqual([path.basename(a)]);
+    // The binary left is complete: it runs and answers describe.
+    const run = spawnSync(a, [], { input: '{"id": 1, "op": "describe", "args": []}\n', encoding: 'utf8' });
+    expect(JSON.parse(run.stdout)).toMatchObject({ id: 1, library: 'glibc' });
+  }, 60_000);
+
+  it('never hands out a binary still being written: a build started meanwhile waits for a complete one', async () => {
+    // A stand-in compiler that writes its output in two halves 400 ms apart. Written in place, the
+    // second build would find the first half under the final name and run it.
+    const compiler = path.join(folder, 'slow-cc');
+    writeFileSync(
+      compiler,
+      [
+        '#!/bin/sh',
+        'if [ "$1" = --version ]; then echo "slow-cc 1"; exit 0; fi',
+        'while [ "$1" != -o ]; do shift; done',
+        'printf "#!/bin/sh\\n" > "$2"; chmod +x "$2"; sleep 0.4; printf "echo complete\\n" >> "$2"',
+        '',
+      ].join('\n'),
+      { mode: 0o755 },
+    );
+    const cache = path.join(folder, 'cache');
+    const first = cAdapterBinary({ source: C_ADAPTER_SOURCE, compiler, folder: cache });
+    await new Promise((resolve) => setTimeout(resolve, 150));
+    const second = await cAdapterBinary({ source: C_ADAPTER_SOURCE, compiler, folder: cache });
+    expect(readFileSync(second, 'utf8')).toBe('#!/bin/sh\necho complete\n');
+    expect(await first).toBe(second);
   });
 
   it('builds a different binary for a different source', async () => {
