@@ -6,6 +6,8 @@ import { ownOrigins } from './http/own-origins';
 
 export const PROJECT_ROOT = path.resolve(__dirname, '..');
 const DATA_DIR = path.join(PROJECT_ROOT, '.data');
+/** The default of `targetCacheDir`, for an app built without a config (tests). */
+export const DEFAULT_TARGET_CACHE_DIR = path.join(DATA_DIR, 'target-cache');
 
 export interface ServerConfig {
   /** Always a loopback address: Sheetkeeper never listens elsewhere. */
@@ -29,6 +31,12 @@ export interface ServerConfig {
    * case page reads the values its run computed instead of computing them again.
    */
   referenceCacheDir: string;
+  /**
+   * Where npm versions named by target sources are installed and tarballs unpacked, one folder per
+   * package and version (SHEETKEEPER_TARGET_CACHE, default `.data/target-cache`); each worker
+   * machine keeps its own.
+   */
+  targetCacheDir: string;
   /** Origins whose pages may change data (SHEETKEEPER_ORIGINS, default the app URL and this address's loopback names). */
   allowedOrigins: string[];
   /**
@@ -91,6 +99,7 @@ export function loadConfig(): ServerConfig {
     workers: Math.max(0, Number(process.env.SHEETKEEPER_WORKERS ?? 1) || 0),
     appUrl,
     referenceCacheDir: process.env.SHEETKEEPER_REFERENCE_CACHE ?? path.join(DATA_DIR, 'reference-cache'),
+    targetCacheDir: process.env.SHEETKEEPER_TARGET_CACHE ?? DEFAULT_TARGET_CACHE_DIR,
     allowedOrigins: ownOrigins(appUrl, port, process.env.SHEETKEEPER_ORIGINS),
     trustProxy: trustProxyFrom(process.env.SHEETKEEPER_TRUST_PROXY),
   };

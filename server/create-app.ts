@@ -22,6 +22,9 @@ import { suitesRouter } from './routes/suites-router';
 import { targetsRouter } from './routes/targets-router';
 import { librariesRouter } from './routes/libraries-router';
 import { tokensRouter } from './routes/tokens-router';
+import { targetSourcesRouter } from './routes/target-sources-router';
+import { TargetSourceResolver } from './targets/target-source-resolver';
+import { targetSourceOptions } from './targets/target-source-options';
 import { usersRouter } from './routes/users-router';
 import { configurePassport } from './auth/configure-passport';
 import { createPgPool } from './database/create-pg-pool';
@@ -53,10 +56,14 @@ export interface AppOptions {
   trustProxy?: string | number | false;
   /** How long checking one uploaded reference table may take (REFERENCE_TABLE_BUDGET_MS). */
   referenceTableBudgetMs?: number;
+  /** Where admin-added npm versions are installed (config.targetCacheDir; `.data/target-cache` by default). */
+  targetCacheDir?: string;
 }
 
 export interface SheetkeeperApp {
   app: Express;
+  /** Resolves admin-added target sources in the background (the server resumes unfinished ones at start). */
+  targetSources: TargetSourceResolver;
   /** Ends the pool behind sessions and sign-in limits and the findings and reference-table threads (the data source is the caller's). */
   close(): Promise<void>;
 }
@@ -79,6 +86,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   const findings = new LibraryFindings(options.dataSource);
   const referenceTables = new ReferenceTableChecks(options.referenceTableBudgetMs);
   const overviewMemo = new OverviewMemo();
+  const targetSources = new TargetSourceResolver(options.dataSource, targetSourceOptions(options.targetCacheDir));
 
   const app = express();
   app.disable('x-powered-by');
@@ -137,6 +145,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   api.use('/outbox', outboxRouter(options.dataSource));
   api.use('/targets', targetsRouter(options.dataSource));
   api.use('/targets', librariesRouter(findings));
+  api.use('/target-sources', targetSourcesRouter(options.dataSource, targetSources));
   api.use('/plans', plansRouter(options.dataSource));
   api.use('/schedules', schedulesRouter(options.dataSource));
   api.use('/runs', runsRouter(options.dataSource, new RunService(options.dataSource, options.shardQueue)));
@@ -164,7 +173,10 @@ export function createApp(options: AppOptions): SheetkeeperApp {
 
   return {
     app,
+    targetSources,
     close: async () => {
+      // A source being described is bounded by its program's time limit; its row is written before the pool ends.
+      await targetSources.idle();
       await findings.close();
       await referenceTables.close();
       await pool.end();

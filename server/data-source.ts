@@ -13,6 +13,7 @@ import { ScheduleFiring } from './entities/schedule-firing';
 import { Shard } from './entities/shard';
 import { Subscription } from './entities/subscription';
 import { TargetRow } from './entities/target-row';
+import { TargetSourceRow } from './entities/target-source-row';
 import { Upload } from './entities/upload';
 import { ReceivedMail } from './entities/received-mail';
 import { Run } from './entities/run';
@@ -24,6 +25,7 @@ import { logPoolError } from './database/log-pool-error';
 import { RedactingQueryLogger } from './database/redacting-query-logger';
 import { SuiteVersionTakenOverFrom1764887400000 } from './migrations/1764887400000-suite-version-taken-over-from';
 import { FailureLabelsAndClasses1764900000000 } from './migrations/1764900000000-failure-labels-and-classes';
+import { TargetSources1764910000000 } from './migrations/1764910000000-target-sources';
 import { UsersSessionsSignInLimits1764626400000 } from './migrations/1764626400000-users-sessions-sign-in-limits';
 import { SuitesAndVersions1764700000000 } from './migrations/1764700000000-suites-and-versions';
 import { MailOutboxAndReceivedMail1764710000000 } from './migrations/1764710000000-mail-outbox-and-received-mail';
@@ -60,6 +62,7 @@ export const ENTITIES = [
   Upload,
   PropertyResult,
   RegressionGroup,
+  TargetSourceRow,
 ];
 export const MIGRATIONS = [
   UsersSessionsSignInLimits1764626400000,
@@ -78,6 +81,7 @@ export const MIGRATIONS = [
   RegressionGroups1764811100000,
   SuiteVersionTakenOverFrom1764887400000,
   FailureLabelsAndClasses1764900000000,
+  TargetSources1764910000000,
 ];
 
 export function createDataSource(url: string): DataSource {

@@ -27,7 +27,7 @@ async function main(): Promise<void> {
   await scheduler.start();
 
   const origins = [...config.allowedOrigins];
-  const { app, close } = createApp({
+  const { app, close, targetSources } = createApp({
     dataSource,
     databaseUrl: config.databaseUrl,
     sessionSecret: config.sessionSecret,
@@ -37,7 +37,10 @@ async function main(): Promise<void> {
     referenceCacheDir: config.referenceCacheDir,
     allowedOrigins: origins,
     trustProxy: config.trustProxy,
+    targetCacheDir: config.targetCacheDir,
   });
+  const unfinished = await targetSources.resumePending();
+  if (unfinished > 0) console.log(`[sheetkeeper] resolving ${unfinished} added target source(s) left unfinished`);
   const server = app.listen(config.port, config.host, () => {
     const address = server.address();
     const port = typeof address === 'object' && address ? address.port : config.port;

@@ -2,7 +2,8 @@ import type { DataSource } from 'typeorm';
 import type { ServerConfig } from './config';
 import { FakeSmtpServer } from './mail/fake-smtp-server';
 import { MailOutbox } from './mail/mail-outbox';
-import { openInstalledTarget } from './targets/open-installed-target';
+import { availableTargetOpener } from './targets/available-target-opener';
+import { targetSourceOptions } from './targets/target-source-options';
 import { PgBossShardQueue } from './runs/pg-boss-shard-queue';
 import { requeueStaleShards } from './runs/requeue-stale-shards';
 import { ShardExecutor } from './runs/shard-executor';
@@ -34,7 +35,8 @@ export async function startServices(
   const outbox = new MailOutbox(dataSource, { host: config.host, port: smtpPort });
   const queue = new PgBossShardQueue(config.databaseUrl);
   const executor = new ShardExecutor(dataSource, {
-    openTarget: openInstalledTarget,
+    // One opener per process: an added target is resolved once here, on the first shard that needs it.
+    openTarget: availableTargetOpener(dataSource, targetSourceOptions(config.targetCacheDir)),
     outbox,
     appUrl: config.appUrl,
     referenceCacheDir: config.referenceCacheDir,

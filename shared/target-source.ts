@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textSchema } from './schemas/text-schema';
 
 /**
  * Where a target comes from when it is not one of the libraries installed with Sheetkeeper
@@ -18,11 +19,14 @@ import { z } from 'zod';
  * of one version can be told apart.
  */
 
-/** Printable text without NUL or other control characters (a lone surrogate fails zod's string check on the wire). */
+/**
+ * Printable text without NUL or other control characters. Built on textSchema, whose check also
+ * refuses a lone UTF-16 surrogate: JSON carries `"\ud800"` and zod's own string check takes it, but
+ * PostgreSQL's jsonb does not, so a source holding one answered 500 on the Libraries screen's route.
+ */
 const plain = (max: number) =>
-  z
-    .string()
-    .min(1)
+  textSchema()
+    .min(1, 'must not be empty')
     .max(max)
     .refine((s) => !/[\u0000-\u001f\u007f]/.test(s), 'must not contain control characters');
 

@@ -5,11 +5,13 @@ import { ROLES } from '../../shared/roles';
 import type { TargetEntry } from '../../shared/target-entry';
 import { TargetRow } from '../entities/target-row';
 import { requireRole } from '../middleware/require-role';
+import { readyTargetSources } from '../targets/ready-target-sources';
 
 /**
  * The targets this server has seen, installed ones first, each installed one with its entries
  * (shared/target-entry.ts). Entries come from the adapters, not the table: discovery loads no
- * library and is read once per router (~20 ms, Python started once).
+ * library and is read once per router (~20 ms, Python started once); an admin-added target's come
+ * from what its program described, stored with its source.
  */
 export function targetsRouter(dataSource: DataSource): Router {
   const router = Router();
@@ -22,9 +24,12 @@ export function targetsRouter(dataSource: DataSource): Router {
     const targets = await dataSource
       .getRepository(TargetRow)
       .find({ order: { installed: 'DESC', library: 'ASC', name: 'ASC' } });
+    const added = new Map(
+      (await readyTargetSources(dataSource.manager)).flatMap((s) => s.targets.map((t) => [t.name, t.entries] as const)),
+    );
     res.json({
       targets: targets.map(({ name, library, version, settings, installed }) => {
-        const entries = installed ? entriesOf(name) : undefined;
+        const entries = installed ? (entriesOf(name) ?? added.get(name)) : undefined;
         return { name, library, version, settings, installed, ...(entries ? { entries } : {}) };
       }),
     });

@@ -16,8 +16,12 @@ import { SHARD_LIVENESS } from './shard-liveness';
 const INSERT_CHUNK = 1000;
 
 export interface ShardExecutorOptions {
-  /** Opens a target by name; null when it is not installed here. */
-  openTarget: (name: string) => Target | null;
+  /**
+   * Opens a target by name; null when it is not installed here. May resolve first (an admin-added
+   * source installed or described on first use: available-target-opener.ts); a rejection becomes
+   * the shard's error result.
+   */
+  openTarget: (name: string) => Target | null | Promise<Target | null>;
   outbox: MailOutbox;
   /** Base of the links in regression mail. */
   appUrl: string;
@@ -116,6 +120,13 @@ export class ShardExecutor {
 
   private async evaluate(shard: Shard): Promise<SuiteTargetResult> {
     const name = shard.targetName;
+    let opened: Target | null = null;
+    let openFailure: unknown = null;
+    try {
+      opened = await this.options.openTarget(name);
+    } catch (err) {
+      openFailure = err;
+    }
     const { result, target } = await evaluatePair(
       shard.suiteVersion.body,
       {
@@ -124,7 +135,7 @@ export class ShardExecutor {
         version: shard.targetVersion,
         settings: {},
         open: () => {
-          const opened = this.options.openTarget(name);
+          if (openFailure) throw openFailure;
           if (!opened) throw new Error(`target ${name} is not installed on this worker`);
           return opened;
         },

@@ -2,21 +2,25 @@ import type { DataSource } from 'typeorm';
 import { discoverTargets } from '../../harness';
 import type { TargetIdentity } from '../../shared/target-identity';
 import { TargetRow } from '../entities/target-row';
+import { readyTargetSources } from './ready-target-sources';
 
 /**
- * Records the targets installed on this machine (loading no library) and marks the ones
- * no longer found as not installed, so plans keep naming them and say so. Returns the count.
+ * Records the targets installed on this machine (loading no library) and the ones admins added
+ * that resolved (target_sources, read as stored: nothing is installed or started here), and marks
+ * every other one not installed, so plans keep naming them and say so. Returns the count.
  */
 export async function syncTargets(
   dataSource: DataSource,
   found: TargetIdentity[] = discoverTargets(),
 ): Promise<number> {
   const now = new Date();
-  await dataSource.transaction(async (tx) => {
+  return dataSource.transaction(async (tx) => {
+    const added = (await readyTargetSources(tx)).flatMap((s) => s.targets);
+    const all = [...found, ...added];
     await tx.query('UPDATE targets SET installed = false');
-    if (found.length > 0) {
+    if (all.length > 0) {
       await tx.getRepository(TargetRow).upsert(
-        found.map((t) => ({
+        all.map((t) => ({
           name: t.name,
           library: t.library,
           version: t.version,
@@ -27,6 +31,6 @@ export async function syncTargets(
         ['name'],
       );
     }
+    return all.length;
   });
-  return found.length;
 }

@@ -218,6 +218,25 @@ const ROUTES: RouteCase[] = [
     call: (a) => a.get('/api/targets/complex.js/version-matrix?suite=table-plan-suite'),
     expect: signedIn(200),
   },
+  { name: 'GET /api/target-sources', call: (a) => a.get('/api/target-sources'), expect: signedIn(200) },
+  {
+    name: 'POST /api/target-sources',
+    // A program that cannot start: its background resolution fails at once and installs nothing.
+    call: (a, who) => a.post('/api/target-sources').send({ kind: 'program', command: [`/nonexistent/table-${who}`] }),
+    expect: { 'signed-out': 401, admin: 202, maintainer: 403, reviewer: 403, contributor: 403 },
+  },
+  {
+    name: 'DELETE /api/target-sources/:id',
+    call: async (a) => {
+      serial += 1;
+      const [row] = await t.db.dataSource.query(
+        `INSERT INTO target_sources (source, state) VALUES ($1, 'failed') RETURNING id`,
+        [JSON.stringify({ kind: 'program', command: [`/nonexistent/removed-${serial}`] })],
+      );
+      return a.delete(`/api/target-sources/${row.id}`);
+    },
+    expect: { 'signed-out': 401, admin: 204, maintainer: 403, reviewer: 403, contributor: 403 },
+  },
   { name: 'GET /api/plans', call: (a) => a.get('/api/plans'), expect: signedIn(200) },
   { name: 'GET /api/plans/:id', call: async (a) => a.get(`/api/plans/${await freshPlan()}`), expect: signedIn(200) },
   {
