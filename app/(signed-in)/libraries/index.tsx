@@ -1,9 +1,15 @@
 import { router } from 'expo-router';
+import { useMe } from '../../../client/use-me';
 import { ScreenBody } from '../../../components/ui/screen-body';
 import { TargetList } from '../../../components/libraries/target-list';
+import { TargetSourceForm } from '../../../components/libraries/target-source-form';
+import { TargetSourceList } from '../../../components/libraries/target-source-list';
+import { TitledPanel } from '../../../components/ui/titled-panel';
 
-/** Libraries: the installed targets by library, each version with its settings. */
+/** Libraries: the installed targets by library, each version with its settings; then the targets admins added. */
 export default function LibrariesScreen() {
+  const { data: me } = useMe();
+  const admin = me?.role === 'admin';
   return (
     <ScreenBody
       title="Libraries"
@@ -13,6 +19,18 @@ export default function LibrariesScreen() {
         onOpenTarget={(name) => router.push({ pathname: '/libraries/target', params: { name } })}
         onOpenMatrix={(library) => router.push({ pathname: '/libraries/versions', params: { library } })}
       />
+      <TitledPanel
+        title="Added by admins"
+        lead={
+          admin
+            ? 'Add a library version, your working copy or a program in any language. The server gets it ready in the background; once ready, it is listed above and plans can name it.'
+            : 'Library versions, working copies and programs that admins added. Once ready, they are listed above and plans can name them.'
+        }
+        testID="added-targets"
+      >
+        {admin ? <TargetSourceForm /> : null}
+        <TargetSourceList canRemove={admin} />
+      </TitledPanel>
     </ScreenBody>
   );
 }
