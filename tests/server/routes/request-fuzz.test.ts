@@ -172,6 +172,13 @@ const ROUTES: Record<Route, FuzzRoute> = {
   'GET /api/deviations': { roles: ROLES },
   'POST /api/deviations/:id/revoke': { roles: ['reviewer', 'admin'], params: { id: () => UNKNOWN_ID } },
   'GET /api/tokens': { roles: ROLES },
+  'GET /api/target-sources': { roles: ROLES },
+  // A program that cannot start: an accepted add fails in the background at once and starts nothing.
+  'POST /api/target-sources': {
+    roles: ['admin'],
+    body: () => ({ kind: 'program', command: ['/nonexistent/fuzz-adapter', '--serve'], cwd: '/tmp', name: 'fuzz@1' }),
+  },
+  'DELETE /api/target-sources/:id': { roles: ['admin'], params: { id: () => UNKNOWN_ID } },
   'POST /api/tokens': { roles: ROLES, body: () => ({ name: 'fuzz token' }) },
   'POST /api/tokens/:id/revoke': { roles: ROLES, params: { id: () => fixtures.tokenId } },
   'GET /api/subscriptions': { roles: ROLES },
