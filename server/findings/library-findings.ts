@@ -9,6 +9,7 @@ import { FindingsPool } from './findings-pool';
 import { HttpError } from '../http/http-error';
 import { InputError } from '../http/input-error';
 import { ResultCache } from './result-cache';
+import { readyTargetSources } from '../targets/ready-target-sources';
 
 /**
  * Measured here on the installed targets (in process, medians of a few runs, 2 cores):
@@ -54,9 +55,16 @@ export class LibraryFindings {
         )
       : FINGERPRINT_FUNCTIONS;
     const labels = functions.map((f) => f.label);
-    const key = `fingerprint|${name}|${labels.join(',')}|${entry ?? ''}`;
+    const added = await this.addedSource(name);
+    const key = `fingerprint|${name}|${added?.id ?? ''}|${labels.join(',')}|${entry ?? ''}`;
     const { value, ms, fromCache } = await this.kept(key, () =>
-      this.thread.ask({ kind: 'fingerprint', target: name, functions: labels, ...(entry ? { entry } : {}) }),
+      this.thread.ask({
+        kind: 'fingerprint',
+        target: name,
+        functions: labels,
+        ...(entry ? { entry } : {}),
+        ...(added ? { added } : {}),
+      }),
     );
     return { fingerprint: value as ConventionFingerprint, computedMs: ms, fromCache };
   }
@@ -68,9 +76,10 @@ export class LibraryFindings {
     const fn = FINGERPRINT_FUNCTIONS.find((f) => f.label === request.fn) ?? unknownFunction('query.fn', request.fn);
     const box = request.box as [number, number, number, number];
     const grid = request.grid as [number, number];
-    const key = `cut-map|${name}|${fn.label}|${box.join(',')}|${grid[0]}x${grid[1]}`;
+    const added = await this.addedSource(name);
+    const key = `cut-map|${name}|${added?.id ?? ''}|${fn.label}|${box.join(',')}|${grid[0]}x${grid[1]}`;
     const { value, ms, fromCache } = await this.kept(key, () =>
-      this.thread.ask({ kind: 'cut-map', target: name, fn: fn.label, box, grid }),
+      this.thread.ask({ kind: 'cut-map', target: name, fn: fn.label, box, grid, ...(added ? { added } : {}) }),
     );
     return { cutMap: value as CutMap, computedMs: ms, fromCache };
   }
@@ -108,6 +117,18 @@ export class LibraryFindings {
       this.thread.ask({ kind: 'version-matrix', library, suites, ...(entries ? { entries } : {}) }),
     );
     return { matrix: value as VersionMatrix, computedMs: ms, fromCache };
+  }
+
+  /**
+   * The stored source of an admin-added target (docs/libraries-screen.md), which the thread resolves
+   * on first use; its row id is part of the answer's key, so a source removed and added again under
+   * the same name is computed afresh.
+   */
+  private async addedSource(name: string) {
+    const holder = (await readyTargetSources(this.dataSource.manager)).find((s) =>
+      s.targets.some((t) => t.name === name),
+    );
+    return holder ? { id: holder.id, source: holder.source } : undefined;
   }
 
   /** Ends the findings threads. */

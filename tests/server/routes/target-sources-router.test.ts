@@ -58,6 +58,16 @@ describe('target sources', () => {
     expect(added?.entries?.length).toBeGreaterThan(0);
   });
 
+  it("computes an added target's convention fingerprint, resolving it on the findings thread", async () => {
+    const res = await reviewer
+      .get(`/api/targets/${encodeURIComponent('cmath-added@1')}/fingerprint`)
+      .query({ fn: 'sqrt' });
+    expect(res.status).toBe(200);
+    expect(res.body.fingerprint).toMatchObject({ target: 'cmath-added@1', missing: [] });
+    // cmath follows Annex G: sqrt's cut (−∞, 0] is continuous from the side of the zero's sign.
+    expect(res.body.fingerprint.cuts[0]).toMatchObject({ function: 'sqrt', behaviour: 'signed-zero' });
+  });
+
   it('lets only admins add and remove, and every signed-in role read the list', async () => {
     const body = { kind: 'program', command: ['/nonexistent/never-started'] };
     expect((await reviewer.post('/api/target-sources').send(body)).status).toBe(403);
