@@ -109,6 +109,14 @@ describe('target sources', () => {
     expect(await sourceCount()).toBe(before);
   });
 
+  it('refuses a body past the 256 KB limit with 413, and stores nothing', async () => {
+    const before = await sourceCount();
+    const res = await admin.post('/api/target-sources').send({ kind: 'local', path: 'x'.repeat(300_000) });
+    expect(res.status).toBe(413);
+    expect(res.body.kind).toBe('payload-too-large');
+    expect(await sourceCount()).toBe(before);
+  });
+
   it("refuses an add from another origin's page before reading it", async () => {
     const before = await sourceCount();
     const res = await admin
