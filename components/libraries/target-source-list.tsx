@@ -5,6 +5,7 @@ import { useRemoveTargetSource } from '../../client/use-remove-target-source';
 import { useTargetSources } from '../../client/use-target-sources';
 import { theme } from '../../constants/theme';
 import type { TargetSourceView } from '../../shared/target-source-view';
+import { ACTION_ROW_STYLE } from '../ui/action-row-style';
 import { ConfirmAction } from '../ui/confirm-action';
 import { FailureAlert } from '../ui/failure-alert';
 import { QueryState } from '../ui/query-state';
@@ -91,16 +92,7 @@ export function TargetSourceList({ canRemove }: { canRemove: boolean }) {
 
 const styles = StyleSheet.create({
   failure: { marginBottom: theme.space(2) },
-  row: {
-    flexDirection: 'row',
-    flexWrap: 'wrap',
-    alignItems: 'flex-start',
-    justifyContent: 'space-between',
-    gap: theme.space(3),
-    borderTopWidth: 1,
-    borderTopColor: theme.color.rule,
-    paddingVertical: theme.space(3),
-  },
+  row: ACTION_ROW_STYLE,
   words: { flexGrow: 1, flexShrink: 1, flexBasis: 220, gap: 2 },
   // Paths and commands have no spaces to wrap at; on a phone they break anywhere instead of overflowing.
   what: { wordBreak: 'break-all' } as object,

@@ -4,6 +4,7 @@ import { formatDate } from '../../client/format-date';
 import { useRevokeToken } from '../../client/use-revoke-token';
 import { useTokens } from '../../client/use-tokens';
 import { theme } from '../../constants/theme';
+import { ACTION_ROW_STYLE } from '../ui/action-row-style';
 import { ConfirmAction } from '../ui/confirm-action';
 import { QueryState } from '../ui/query-state';
 import { SkText } from '../ui/sk-text';
@@ -63,16 +64,7 @@ export function TokenList() {
 const styles = StyleSheet.create({
   list: { gap: 0 },
   failure: { marginBottom: theme.space(2) },
-  row: {
-    flexDirection: 'row',
-    flexWrap: 'wrap',
-    alignItems: 'flex-start',
-    justifyContent: 'space-between',
-    gap: theme.space(3),
-    borderTopWidth: 1,
-    borderTopColor: theme.color.rule,
-    paddingVertical: theme.space(3),
-  },
+  row: ACTION_ROW_STYLE,
   revoked: { opacity: 0.75 },
   words: { flexGrow: 1, flexShrink: 1, flexBasis: 200, gap: 2 },
   active: { color: theme.color.accent },
