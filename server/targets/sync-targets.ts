@@ -2,6 +2,7 @@ import type { DataSource } from 'typeorm';
 import { discoverTargets } from '../../harness';
 import type { TargetIdentity } from '../../shared/target-identity';
 import { TargetRow } from '../entities/target-row';
+import { installedTargetRows } from './installed-target-rows';
 import { readyTargetSources } from './ready-target-sources';
 
 /**
@@ -19,17 +20,7 @@ export async function syncTargets(
     const all = [...found, ...added];
     await tx.query('UPDATE targets SET installed = false');
     if (all.length > 0) {
-      await tx.getRepository(TargetRow).upsert(
-        all.map((t) => ({
-          name: t.name,
-          library: t.library,
-          version: t.version,
-          settings: t.settings,
-          installed: true,
-          lastSeenAt: now,
-        })),
-        ['name'],
-      );
+      await tx.getRepository(TargetRow).upsert(installedTargetRows(all, now), ['name']);
     }
     return all.length;
   });

@@ -4,6 +4,7 @@ import type { TargetIdentity } from '../../shared/target-identity';
 import { describeError } from '../database/describe-error';
 import { TargetRow } from '../entities/target-row';
 import { TargetSourceRow } from '../entities/target-source-row';
+import { installedTargetRows } from './installed-target-rows';
 import { readyTargetSources } from './ready-target-sources';
 import { storableReason } from './storable-reason';
 import { TARGET_NAMES_LOCK_SQL } from './target-names-lock-sql';
@@ -102,18 +103,7 @@ export class TargetSourceResolver {
       await tx
         .getRepository(TargetSourceRow)
         .update(id, { state: 'ready', targets: identities, error: null, resolvedAt: new Date() });
-      const now = new Date();
-      await tx.getRepository(TargetRow).upsert(
-        identities.map(({ name, library, version, settings }) => ({
-          name,
-          library,
-          version,
-          settings,
-          installed: true,
-          lastSeenAt: now,
-        })),
-        ['name'],
-      );
+      await tx.getRepository(TargetRow).upsert(installedTargetRows(identities, new Date()), ['name']);
     });
   }
 }
