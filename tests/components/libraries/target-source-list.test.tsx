@@ -59,5 +59,9 @@ describe('TargetSourceList', () => {
         '/api/target-sources/22222222-2222-4222-8222-222222222222',
       ]),
     );
+    // Removing reads the list again and only then settles; waiting for that keeps every update inside the test.
+    await waitFor(() =>
+      expect(screen.getByRole('button', { name: 'Remove cmath-copy@1' }).getAttribute('aria-busy')).toBe('false'),
+    );
   });
 });
