@@ -1,25 +1,12 @@
-/** One broken rule of an input: the dotted field path and what the rule says. */
-export interface FieldIssue {
-  field: string;
-  rule: string;
-}
+import type { z } from 'zod';
+import type { apiErrorSchema } from './api-error-schema';
 
 /**
- * Every error body the API sends. `kind` tells the app how to show it; `issues`
- * is present for `invalid-input` only.
+ * Every error body the API sends, derived from its schema (`api-error-schema.ts`, which the
+ * OpenAPI document shows). `kind` tells the app how to show it; `issues` is present for
+ * `invalid-input` only.
  */
-export type ApiError =
-  | { kind: 'invalid-input'; message: string; issues: FieldIssue[] }
-  | { kind: 'signed-out'; message: string }
-  | { kind: 'forbidden'; message: string }
-  | { kind: 'not-found'; message: string }
-  | { kind: 'wrong-credentials'; message: string }
-  | { kind: 'too-many-attempts'; message: string; retryAfterSeconds: number }
-  | { kind: 'conflict'; message: string }
-  | { kind: 'payload-too-large'; message: string }
-  | { kind: 'unsupported-media-type'; message: string }
-  /** The server could not answer now (a library computation stopped after its time limit): try again or ask for less. */
-  | { kind: 'unavailable'; message: string }
-  /** 422: the work asked for passed its time budget and was stopped; the message says what was checked and how to ask for less. */
-  | { kind: 'over-time-budget'; message: string; budgetSeconds: number }
-  | { kind: 'server-error'; message: string };
+export type ApiError = z.infer<typeof apiErrorSchema>;
+
+/** One broken rule of an input: the dotted field path and what the rule says. */
+export type FieldIssue = Extract<ApiError, { kind: 'invalid-input' }>['issues'][number];
