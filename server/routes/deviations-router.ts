@@ -3,9 +3,8 @@ import type { DataSource } from 'typeorm';
 import { ROLES } from '../../shared/roles';
 import { idParams } from '../../shared/schemas/id-params';
 import { Deviation } from '../entities/deviation';
-import { requireRole } from '../middleware/require-role';
 import { HttpError } from '../http/http-error';
-import { parseInput } from '../http/parse-input';
+import { declareRoute } from '../http/declare-route';
 
 const view = (d: Deviation) => ({
   id: d.id,
@@ -28,20 +27,44 @@ const view = (d: Deviation) => ({
 export function deviationsRouter(dataSource: DataSource): Router {
   const router = Router();
   const deviations = dataSource.getRepository(Deviation);
-  router.get('/', requireRole(...ROLES), async (_req, res) => {
-    res.json({
-      deviations: (
-        await deviations.find({ relations: { createdBy: true }, order: { createdAt: 'DESC' }, take: 500 })
-      ).map(view),
-    });
-  });
-  router.post('/:id/revoke', requireRole('reviewer', 'admin'), async (req, res) => {
-    const { id } = parseInput(idParams, req.params, 'params');
-    const found = await deviations.findOne({ where: { id }, relations: { createdBy: true } });
-    if (!found) throw new HttpError(404, { kind: 'not-found', message: 'No verdict with that id.' });
-    if (found.revokedAt) throw new HttpError(409, { kind: 'conflict', message: 'This verdict was revoked already.' });
-    found.revokedAt = new Date();
-    res.json({ deviation: view(await deviations.save(found)) });
-  });
+  declareRoute(
+    router,
+    'get',
+    '/',
+    {
+      summary: "Reviewers' verdicts on failures (deviations), newest first, at most 500",
+      access: ROLES,
+      responses: { 200: 'The verdicts (`deviations`).' },
+    },
+    async (_req, res) => {
+      res.json({
+        deviations: (
+          await deviations.find({ relations: { createdBy: true }, order: { createdAt: 'DESC' }, take: 500 })
+        ).map(view),
+      });
+    },
+  );
+  declareRoute(
+    router,
+    'post',
+    '/:id/revoke',
+    {
+      summary: 'Revoke a verdict',
+      access: ['reviewer', 'admin'],
+      params: idParams,
+      responses: {
+        200: 'The revoked verdict (`deviation`).',
+        404: 'No verdict with that id.',
+        409: 'The verdict was revoked already.',
+      },
+    },
+    async (_req, res, { params: { id } }) => {
+      const found = await deviations.findOne({ where: { id }, relations: { createdBy: true } });
+      if (!found) throw new HttpError(404, { kind: 'not-found', message: 'No verdict with that id.' });
+      if (found.revokedAt) throw new HttpError(409, { kind: 'conflict', message: 'This verdict was revoked already.' });
+      found.revokedAt = new Date();
+      res.json({ deviation: view(await deviations.save(found)) });
+    },
+  );
   return router;
 }

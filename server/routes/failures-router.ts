@@ -7,12 +7,11 @@ import { ROLES } from '../../shared/roles';
 import { classifyBody } from '../../shared/schemas/classify-body';
 import { failureIdParams } from '../../shared/schemas/failure-id-params';
 import { failureQuery } from '../../shared/schemas/failure-query';
-import { requireRole } from '../middleware/require-role';
 import { classifyFailure } from '../failures/classify-failure';
 import { failurePath } from '../failures/failure-path';
 import { HttpError } from '../http/http-error';
 import { InputError } from '../http/input-error';
-import { parseInput } from '../http/parse-input';
+import { declareRoute } from '../http/declare-route';
 import { failurePageJson } from '../failures/failure-page-json';
 import { searchFailures } from '../failures/failure-search';
 import { spreadsheetSafeCell } from '../failures/spreadsheet-safe-cell';
@@ -29,71 +28,127 @@ const CSV_MAX_ROWS = 50_000;
 /** The failure table with filters and keyed pages, its CSV export, one failure with its history, and its path for the pictures. */
 export function failuresRouter(dataSource: DataSource, options: { referenceCacheDir?: string | null } = {}): Router {
   const router = Router();
-  const anyone = requireRole(...ROLES);
+  const noFailure = { 404: 'No failure with that number.' };
 
-  router.get('/', anyone, async (req, res) => {
-    res.type('json').send(await failurePageJson(dataSource, parseInput(failureQuery, req.query, 'query')));
-  });
+  declareRoute(
+    router,
+    'get',
+    '/',
+    {
+      summary: 'A page of the failure table: branch findings first, then accuracy, then errors and skipped points',
+      access: ROLES,
+      query: failureQuery,
+      responses: { 200: 'The rows and the cursor (`after`) of the next page.' },
+    },
+    async (_req, res, { query }) => {
+      res.type('json').send(await failurePageJson(dataSource, query));
+    },
+  );
 
-  router.get('/export.csv', anyone, async (req, res) => {
-    const q = { ...parseInput(failureQuery, req.query, 'query'), limit: CSV_MAX_ROWS };
-    if (!q.run && !q.suite && !q.target)
-      throw new InputError([{ field: 'query', rule: 'needs run, suite or target to export' }]);
-    const { rows } = await searchFailures(dataSource, q, true);
-    const csv = stringify(
-      rows.map((r) =>
-        Object.fromEntries(CSV_CELLS.map(([header, read, kind]) => [header, spreadsheetSafeCell(read(r), kind)])),
-      ),
-      { header: true },
-    );
-    res.type('text/csv').attachment('sheetkeeper-failures.csv').send(csv);
-  });
+  declareRoute(
+    router,
+    'get',
+    '/export.csv',
+    {
+      summary: 'The failure table as CSV (needs run, suite or target; at most 50,000 rows)',
+      access: ROLES,
+      query: failureQuery,
+      responses: { 200: { description: 'The CSV file, one row per failure.', mediaType: 'text/csv' } },
+    },
+    async (_req, res, { query }) => {
+      const q = { ...query, limit: CSV_MAX_ROWS };
+      if (!q.run && !q.suite && !q.target)
+        throw new InputError([{ field: 'query', rule: 'needs run, suite or target to export' }]);
+      const { rows } = await searchFailures(dataSource, q, true);
+      const csv = stringify(
+        rows.map((r) =>
+          Object.fromEntries(CSV_CELLS.map(([header, read, kind]) => [header, spreadsheetSafeCell(read(r), kind)])),
+        ),
+        { header: true },
+      );
+      res.type('text/csv').attachment('sheetkeeper-failures.csv').send(csv);
+    },
+  );
 
   // Maintainers live with their library's deviations, so they may accept one; calling a
   // failure a bug or a convention difference stays a reviewer's (or admin's) judgement.
-  router.post('/:id/classify', requireRole('reviewer', 'admin', 'maintainer'), async (req, res) => {
-    const id = parseInput(failureIdParams, req.params, 'params').id;
-    const body = parseInput(classifyBody, req.body, 'body');
-    if (req.user!.role === 'maintainer' && body.classification !== 'accepted') {
-      throw new HttpError(403, {
-        kind: 'forbidden',
-        message:
-          'A maintainer may accept a deviation; calling a failure a bug or a convention difference needs the role reviewer or admin.',
-      });
-    }
-    const deviation = await classifyFailure(dataSource, req.user!, id, body);
-    res.status(201).json({
-      deviation: {
-        id: deviation.id,
-        classification: deviation.classification,
-        scope: deviation.scope,
-        expiresAt: deviation.expiresAt?.toISOString() ?? null,
+  declareRoute(
+    router,
+    'post',
+    '/:id/classify',
+    {
+      summary: 'Give a failure a verdict (bug, convention difference or accepted) over a scope',
+      access: ['reviewer', 'admin', 'maintainer'],
+      params: failureIdParams,
+      body: classifyBody,
+      responses: {
+        201: 'The verdict (`deviation`).',
+        403: 'A maintainer may only accept a deviation.',
+        ...noFailure,
+        409: 'The failure has no diagnosis (an error or a skipped point), so the diagnosis scope does not apply.',
       },
-    });
-  });
+    },
+    async (req, res, { params: { id }, body }) => {
+      if (req.user!.role === 'maintainer' && body.classification !== 'accepted') {
+        throw new HttpError(403, {
+          kind: 'forbidden',
+          message:
+            'A maintainer may accept a deviation; calling a failure a bug or a convention difference needs the role reviewer or admin.',
+        });
+      }
+      const deviation = await classifyFailure(dataSource, req.user!, id, body);
+      res.status(201).json({
+        deviation: {
+          id: deviation.id,
+          classification: deviation.classification,
+          scope: deviation.scope,
+          expiresAt: deviation.expiresAt?.toISOString() ?? null,
+        },
+      });
+    },
+  );
 
-  router.get('/:id/path', anyone, async (req, res) => {
-    res.json(
-      await failurePath(
-        dataSource,
-        parseInput(failureIdParams, req.params, 'params').id,
-        options.referenceCacheDir ?? null,
-      ),
-    );
-  });
+  declareRoute(
+    router,
+    'get',
+    '/:id/path',
+    {
+      summary: "A failure's path with the library's and the reference's values, for the pictures",
+      access: ROLES,
+      params: failureIdParams,
+      responses: {
+        200: 'The path and its values.',
+        ...noFailure,
+        409: 'The path cannot be built, or has too many points to draw.',
+      },
+    },
+    async (_req, res, { params: { id } }) => {
+      res.json(await failurePath(dataSource, id, options.referenceCacheDir ?? null));
+    },
+  );
 
-  router.get('/:id', anyone, async (req, res) => {
-    const id = parseInput(failureIdParams, req.params, 'params').id;
-    const [row] = await dataSource.query(`SELECT point_key, target_name FROM failures WHERE id = $1`, [id]);
-    if (!row) throw new HttpError(404, { kind: 'not-found', message: 'No failure with that number.' });
-    const { rows } = await searchFailures(dataSource, { sort: 'id', limit: 1 }, true, id);
-    const history = await dataSource.query(
-      `SELECT f.id::text AS "id", f.run_id AS "runId", r.created_at AS "runAt", f.target_name AS "targetName", f.target_version AS "targetVersion",
+  declareRoute(
+    router,
+    'get',
+    '/:id',
+    {
+      summary: 'One failure with its history at the same point across runs',
+      access: ROLES,
+      params: failureIdParams,
+      responses: { 200: 'The failure (`failure`) and up to 100 earlier ones at its point (`history`).', ...noFailure },
+    },
+    async (_req, res, { params: { id } }) => {
+      const [row] = await dataSource.query(`SELECT point_key, target_name FROM failures WHERE id = $1`, [id]);
+      if (!row) throw new HttpError(404, { kind: 'not-found', message: 'No failure with that number.' });
+      const { rows } = await searchFailures(dataSource, { sort: 'id', limit: 1 }, true, id);
+      const history = await dataSource.query(
+        `SELECT f.id::text AS "id", f.run_id AS "runId", r.created_at AS "runAt", f.target_name AS "targetName", f.target_version AS "targetVersion",
               f.diagnosis_kind AS "diagnosisKind", f.is_regression AS "isRegression"
          FROM failures f JOIN runs r ON r.id = f.run_id WHERE f.point_key = $1 ORDER BY r.created_at DESC LIMIT 100`,
-      [row.point_key],
-    );
-    res.json({ failure: rows[0], history });
-  });
+        [row.point_key],
+      );
+      res.json({ failure: rows[0], history });
+    },
+  );
   return router;
 }

@@ -4,9 +4,8 @@ import { cutMapQuery } from '../../shared/schemas/cut-map-query';
 import { fingerprintQuery } from '../../shared/schemas/fingerprint-query';
 import { targetNameParams } from '../../shared/schemas/target-name-params';
 import { versionMatrixQuery } from '../../shared/schemas/version-matrix-query';
-import { requireRole } from '../middleware/require-role';
 import type { LibraryFindings } from '../findings/library-findings';
-import { parseInput } from '../http/parse-input';
+import { declareRoute } from '../http/declare-route';
 
 /**
  * What the harness finds out about installed libraries, mounted beside the targets list under
@@ -16,24 +15,63 @@ import { parseInput } from '../http/parse-input';
  */
 export function librariesRouter(findings: LibraryFindings): Router {
   const router = Router();
-  const anyone = requireRole(...ROLES);
 
-  router.get('/:name/fingerprint', anyone, async (req, res) => {
-    const { name } = parseInput(targetNameParams, req.params, 'params');
-    const { fn, entry } = parseInput(fingerprintQuery, req.query, 'query');
-    res.json(await findings.fingerprint(name, fn, entry));
-  });
+  const errors = {
+    404: 'No installed target (or library) with that name.',
+    503: 'A library computation stopped after its time limit, or too many wait (`unavailable`): try again or ask for less.',
+  };
 
-  router.get('/:name/cut-map', anyone, async (req, res) => {
-    const { name } = parseInput(targetNameParams, req.params, 'params');
-    res.json(await findings.cutMap(name, parseInput(cutMapQuery, req.query, 'query')));
-  });
+  declareRoute(
+    router,
+    'get',
+    '/:name/fingerprint',
+    {
+      summary: "A target's convention fingerprint: which side of each cut and which zero sign it takes",
+      access: ROLES,
+      params: targetNameParams,
+      query: fingerprintQuery,
+      responses: { 200: 'The fingerprint.', ...errors },
+    },
+    async (_req, res, { params: { name }, query: { fn, entry } }) => {
+      res.json(await findings.fingerprint(name, fn, entry));
+    },
+  );
 
-  router.get('/:name/version-matrix', anyone, async (req, res) => {
-    const { name } = parseInput(targetNameParams, req.params, 'params');
-    const { suite, entry } = parseInput(versionMatrixQuery, req.query, 'query');
-    res.json(await findings.versionMatrix(name, suite, entry));
-  });
+  declareRoute(
+    router,
+    'get',
+    '/:name/cut-map',
+    {
+      summary: "Where a target's function jumps, sampled over a window of the plane",
+      access: ROLES,
+      params: targetNameParams,
+      query: cutMapQuery,
+      responses: { 200: 'The cut map.', ...errors },
+    },
+    async (_req, res, { params: { name }, query }) => {
+      res.json(await findings.cutMap(name, query));
+    },
+  );
+
+  declareRoute(
+    router,
+    'get',
+    '/:name/version-matrix',
+    {
+      summary: 'One suite against every installed version of a library (`:name` without its version)',
+      access: ROLES,
+      params: targetNameParams,
+      query: versionMatrixQuery,
+      responses: {
+        200: 'The version matrix.',
+        ...errors,
+        409: 'The library has one installed version; a matrix needs two or more.',
+      },
+    },
+    async (_req, res, { params: { name }, query: { suite, entry } }) => {
+      res.json(await findings.versionMatrix(name, suite, entry));
+    },
+  );
 
   return router;
 }

@@ -3,32 +3,83 @@ import type { DataSource } from 'typeorm';
 import { ROLES } from '../../shared/roles';
 import { idParams } from '../../shared/schemas/id-params';
 import { planBody } from '../../shared/schemas/plan-body';
-import { requireRole } from '../middleware/require-role';
-import { parseInput } from '../http/parse-input';
+import { declareRoute } from '../http/declare-route';
 import { PlanService } from '../plans/plan-service';
 
 /** Plans: everyone reads them; maintainers (and admins) shape them. */
 export function plansRouter(dataSource: DataSource): Router {
   const router = Router();
   const plans = new PlanService(dataSource);
-  const shapers = requireRole('maintainer', 'admin');
+  const shapers = ['maintainer', 'admin'] as const;
 
-  router.get('/', requireRole(...ROLES), async (_req, res) => {
-    res.json({ plans: await plans.list() });
-  });
-  router.get('/:id', requireRole(...ROLES), async (req, res) => {
-    res.json({ plan: await plans.get(parseInput(idParams, req.params, 'params').id) });
-  });
-  router.post('/', shapers, async (req, res) => {
-    res.status(201).json({ plan: await plans.save(req.user!, parseInput(planBody, req.body, 'body'), null) });
-  });
-  router.put('/:id', shapers, async (req, res) => {
-    const { id } = parseInput(idParams, req.params, 'params');
-    res.json({ plan: await plans.save(req.user!, parseInput(planBody, req.body, 'body'), id) });
-  });
-  router.delete('/:id', shapers, async (req, res) => {
-    await plans.remove(parseInput(idParams, req.params, 'params').id);
-    res.status(204).end();
-  });
+  declareRoute(
+    router,
+    'get',
+    '/',
+    { summary: 'Every plan', access: ROLES, responses: { 200: 'The plans (`plans`).' } },
+    async (_req, res) => {
+      res.json({ plans: await plans.list() });
+    },
+  );
+  declareRoute(
+    router,
+    'get',
+    '/:id',
+    {
+      summary: 'One plan',
+      access: ROLES,
+      params: idParams,
+      responses: { 200: 'The plan (`plan`).', 404: 'No plan with that id.' },
+    },
+    async (_req, res, { params }) => {
+      res.json({ plan: await plans.get(params.id) });
+    },
+  );
+  declareRoute(
+    router,
+    'post',
+    '/',
+    {
+      summary: 'Create a plan: suites × targets, and who is mailed about regressions',
+      access: shapers,
+      body: planBody,
+      responses: {
+        201: 'The new plan (`plan`); a name taken or an unknown suite or target is a 400 naming the field.',
+      },
+    },
+    async (req, res, { body }) => {
+      res.status(201).json({ plan: await plans.save(req.user!, body, null) });
+    },
+  );
+  declareRoute(
+    router,
+    'put',
+    '/:id',
+    {
+      summary: 'Replace a plan',
+      access: shapers,
+      params: idParams,
+      body: planBody,
+      responses: { 200: 'The plan (`plan`).', 404: 'No plan with that id.' },
+    },
+    async (req, res, { params, body }) => {
+      res.json({ plan: await plans.save(req.user!, body, params.id) });
+    },
+  );
+  declareRoute(
+    router,
+    'delete',
+    '/:id',
+    {
+      summary: 'Delete a plan',
+      access: shapers,
+      params: idParams,
+      responses: { 204: 'Deleted.', 404: 'No plan with that id.' },
+    },
+    async (_req, res, { params }) => {
+      await plans.remove(params.id);
+      res.status(204).end();
+    },
+  );
   return router;
 }

@@ -6,51 +6,118 @@ import type { RunPropertyRow } from '../../shared/run-property-row';
 import { idParams } from '../../shared/schemas/id-params';
 import { runBody } from '../../shared/schemas/run-body';
 import { runListQuery } from '../../shared/schemas/run-list-query';
-import { requireRole } from '../middleware/require-role';
-import { parseInput } from '../http/parse-input';
+import { declareRoute } from '../http/declare-route';
 import type { RunService } from '../runs/run-service';
 
 /** Runs: everyone reads them and their matrix; maintainers (and admins) start and cancel them. */
 export function runsRouter(dataSource: DataSource, runs: RunService): Router {
   const router = Router();
-  const anyone = requireRole(...ROLES);
-  const runners = requireRole('maintainer', 'admin');
+  const runners = ['maintainer', 'admin'] as const;
+  const noRun = { 404: 'No run with that id.' };
 
-  router.get('/', anyone, async (req, res) => {
-    res.json(await runs.list(parseInput(runListQuery, req.query, 'query')));
-  });
-  router.post('/', runners, async (req, res) => {
-    const { planId } = parseInput(runBody, req.body, 'body');
-    // 202 for a run queued now; 200 with `existing: true` for the plan's run already queued or running.
-    const { run, existing } = await runs.start(planId, res.locals.viaToken ? 'api' : 'manual', req.user!);
-    res.status(existing ? 200 : 202).json({ run, existing });
-  });
-  router.get('/:id', anyone, async (req, res) => {
-    res.json({ run: await runs.get(parseInput(idParams, req.params, 'params').id) });
-  });
-  router.post('/:id/cancel', runners, async (req, res) => {
-    res.json({ run: await runs.cancel(parseInput(idParams, req.params, 'params').id) });
-  });
+  declareRoute(
+    router,
+    'get',
+    '/',
+    {
+      summary: 'A page of runs, newest first, with filters',
+      access: ROLES,
+      query: runListQuery,
+      responses: { 200: 'The runs and the cursor of the next page.' },
+    },
+    async (_req, res, { query }) => {
+      res.json(await runs.list(query));
+    },
+  );
+  declareRoute(
+    router,
+    'post',
+    '/',
+    {
+      summary: "Start a run of a plan (or answer the plan's run already queued or running)",
+      access: runners,
+      body: runBody,
+      responses: {
+        202: 'The run is queued (`run`, `existing: false`).',
+        200: "The plan's run already queued or running (`run`, `existing: true`).",
+        404: 'No plan with that id.',
+        409: 'The plan has nothing to run (no approved suite or no installed target).',
+      },
+    },
+    async (req, res, { body: { planId } }) => {
+      // 202 for a run queued now; 200 with `existing: true` for the plan's run already queued or running.
+      const { run, existing } = await runs.start(planId, res.locals.viaToken ? 'api' : 'manual', req.user!);
+      res.status(existing ? 200 : 202).json({ run, existing });
+    },
+  );
+  declareRoute(
+    router,
+    'get',
+    '/:id',
+    {
+      summary: 'One run with its counts',
+      access: ROLES,
+      params: idParams,
+      responses: { 200: 'The run (`run`).', ...noRun },
+    },
+    async (_req, res, { params }) => {
+      res.json({ run: await runs.get(params.id) });
+    },
+  );
+  declareRoute(
+    router,
+    'post',
+    '/:id/cancel',
+    {
+      summary: 'Cancel a queued or running run; shards not yet done are skipped',
+      access: runners,
+      params: idParams,
+      responses: { 200: 'The cancelled run (`run`).', ...noRun, 409: 'The run has finished already.' },
+    },
+    async (_req, res, { params }) => {
+      res.json({ run: await runs.cancel(params.id) });
+    },
+  );
   /** Suite × target → counts, with what each pair checked. */
-  router.get('/:id/matrix', anyone, async (req, res) => {
-    const { id } = parseInput(idParams, req.params, 'params');
-    await runs.get(id);
-    const cells: RunMatrixCell[] = await dataSource.query(
-      `SELECT suite_slug AS "suite", target_name AS "target", status, outcome, counts, by_class AS "byClass", by_diagnosis AS "byDiagnosis", checked, errors
+  declareRoute(
+    router,
+    'get',
+    '/:id/matrix',
+    {
+      summary: 'A run as suite × target cells with their counts and what each pair checked',
+      access: ROLES,
+      params: idParams,
+      responses: { 200: 'The cells (`cells`).', ...noRun },
+    },
+    async (_req, res, { params: { id } }) => {
+      await runs.get(id);
+      const cells: RunMatrixCell[] = await dataSource.query(
+        `SELECT suite_slug AS "suite", target_name AS "target", status, outcome, counts, by_class AS "byClass", by_diagnosis AS "byDiagnosis", checked, errors
          FROM shards WHERE run_id = $1 ORDER BY suite_slug, target_name`,
-      [id],
-    );
-    res.json({ cells });
-  });
+        [id],
+      );
+      res.json({ cells });
+    },
+  );
   /** The property checks of a run: law, seed, and for failures the replay path and shrunk counterexample. */
-  router.get('/:id/properties', anyone, async (req, res) => {
-    const { id } = parseInput(idParams, req.params, 'params');
-    await runs.get(id);
-    const rows: RunPropertyRow[] = await dataSource.query(
-      `SELECT s.suite_slug AS "suite", s.target_name AS "target", p.outcome FROM property_results p JOIN shards s ON s.id = p.shard_id WHERE p.run_id = $1 ORDER BY s.suite_slug, s.target_name, p.law`,
-      [id],
-    );
-    res.json({ properties: rows });
-  });
+  declareRoute(
+    router,
+    'get',
+    '/:id/properties',
+    {
+      summary: 'The property checks of a run: law, seed, and for failures the replay path and shrunk counterexample',
+      access: ROLES,
+      params: idParams,
+      responses: { 200: 'The property results (`properties`).', ...noRun },
+    },
+    async (_req, res, { params: { id } }) => {
+      await runs.get(id);
+      const rows: RunPropertyRow[] = await dataSource.query(
+        `SELECT s.suite_slug AS "suite", s.target_name AS "target", p.outcome FROM property_results p JOIN shards s ON s.id = p.shard_id WHERE p.run_id = $1 ORDER BY s.suite_slug, s.target_name, p.law`,
+        [id],
+      );
+      res.json({ properties: rows });
+    },
+  );
   return router;
 }

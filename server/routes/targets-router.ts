@@ -4,7 +4,7 @@ import { discoverTargets } from '../../harness';
 import { ROLES } from '../../shared/roles';
 import type { TargetEntry } from '../../shared/target-entry';
 import { TargetRow } from '../entities/target-row';
-import { requireRole } from '../middleware/require-role';
+import { declareRoute } from '../http/declare-route';
 import { readyTargetSources } from '../targets/ready-target-sources';
 
 /**
@@ -20,19 +20,29 @@ export function targetsRouter(dataSource: DataSource): Router {
     entriesByName ??= new Map(discoverTargets().map((t) => [t.name, t.entries ?? []]));
     return entriesByName.get(name);
   };
-  router.get('/', requireRole(...ROLES), async (_req, res) => {
-    const targets = await dataSource
-      .getRepository(TargetRow)
-      .find({ order: { installed: 'DESC', library: 'ASC', name: 'ASC' } });
-    const added = new Map(
-      (await readyTargetSources(dataSource.manager)).flatMap((s) => s.targets.map((t) => [t.name, t.entries] as const)),
-    );
-    res.json({
-      targets: targets.map(({ name, library, version, settings, installed }) => {
-        const entries = installed ? (entriesOf(name) ?? added.get(name)) : undefined;
-        return { name, library, version, settings, installed, ...(entries ? { entries } : {}) };
-      }),
-    });
-  });
+  declareRoute(
+    router,
+    'get',
+    '/',
+    {
+      summary: 'The targets this server has seen, installed ones first, each installed one with its entries',
+      access: ROLES,
+      responses: { 200: 'The targets (`targets`).' },
+    },
+    async (_req, res) => {
+      const targets = await dataSource
+        .getRepository(TargetRow)
+        .find({ order: { installed: 'DESC', library: 'ASC', name: 'ASC' } });
+      const added = new Map(
+        (await readyTargetSources(dataSource.manager)).flatMap((s) => s.targets.map((t) => [t.name, t.entries] as const)),
+      );
+      res.json({
+        targets: targets.map(({ name, library, version, settings, installed }) => {
+          const entries = installed ? (entriesOf(name) ?? added.get(name)) : undefined;
+          return { name, library, version, settings, installed, ...(entries ? { entries } : {}) };
+        }),
+      });
+    },
+  );
   return router;
 }

@@ -6,10 +6,9 @@ import { idParams } from '../../shared/schemas/id-params';
 import { tokenBody } from '../../shared/schemas/token-body';
 import type { TokenView } from '../../shared/token-view';
 import { ApiToken } from '../entities/api-token';
-import { requireRole } from '../middleware/require-role';
 import { hashToken } from '../auth/hash-token';
 import { HttpError } from '../http/http-error';
-import { parseInput } from '../http/parse-input';
+import { declareRoute } from '../http/declare-route';
 
 const view = (t: ApiToken): TokenView => ({
   id: t.id,
@@ -24,43 +23,67 @@ const view = (t: ApiToken): TokenView => ({
 export function tokensRouter(dataSource: DataSource): Router {
   const router = Router();
   const tokens = dataSource.getRepository(ApiToken);
-  const signedInBySession = [
-    requireRole(...ROLES),
-    (_req: unknown, res: { locals: Record<string, unknown> }, next: () => void) => {
-      if (res.locals.viaToken)
-        throw new HttpError(403, {
-          kind: 'forbidden',
-          message: 'Tokens are managed from a signed-in session, not with a token.',
-        });
-      next();
+  declareRoute(
+    router,
+    'get',
+    '/',
+    {
+      summary: 'My API tokens, newest first (never their secrets)',
+      access: ROLES,
+      sessionOnly: true,
+      responses: { 200: 'The tokens (`tokens`).' },
     },
-  ];
-
-  router.get('/', ...signedInBySession, async (req, res) => {
-    res.json({
-      tokens: (await tokens.find({ where: { user: { id: req.user!.id } }, order: { createdAt: 'DESC' } })).map(view),
-    });
-  });
-  router.post('/', ...signedInBySession, async (req, res) => {
-    const { name } = parseInput(tokenBody, req.body, 'body');
-    const secret = `skt_${randomBytes(32).toString('base64url')}`;
-    const saved = await tokens.save({
-      user: req.user!,
-      name,
-      tokenHash: hashToken(secret),
-      prefix: secret.slice(0, 10),
-      lastUsedAt: null,
-      revokedAt: null,
-    });
-    res.status(201).json({ token: view(saved), secret });
-  });
-  router.post('/:id/revoke', ...signedInBySession, async (req, res) => {
-    const { id } = parseInput(idParams, req.params, 'params');
-    const token = await tokens.findOne({ where: { id }, relations: { user: true } });
-    if (!token || (token.user.id !== req.user!.id && req.user!.role !== 'admin'))
-      throw new HttpError(404, { kind: 'not-found', message: 'No token of yours with that id.' });
-    token.revokedAt ??= new Date();
-    res.json({ token: view(await tokens.save(token)) });
-  });
+    async (req, res) => {
+      res.json({
+        tokens: (await tokens.find({ where: { user: { id: req.user!.id } }, order: { createdAt: 'DESC' } })).map(view),
+      });
+    },
+  );
+  declareRoute(
+    router,
+    'post',
+    '/',
+    {
+      summary: 'Create an API token; its secret is in this answer only',
+      access: ROLES,
+      sessionOnly: true,
+      body: tokenBody,
+      responses: { 201: 'The token (`token`) and its secret (`secret`, shown once).' },
+    },
+    async (req, res, { body: { name } }) => {
+      const secret = `skt_${randomBytes(32).toString('base64url')}`;
+      const saved = await tokens.save({
+        user: req.user!,
+        name,
+        tokenHash: hashToken(secret),
+        prefix: secret.slice(0, 10),
+        lastUsedAt: null,
+        revokedAt: null,
+      });
+      res.status(201).json({ token: view(saved), secret });
+    },
+  );
+  declareRoute(
+    router,
+    'post',
+    '/:id/revoke',
+    {
+      summary: "Revoke one of my API tokens (an admin may revoke anyone's)",
+      access: ROLES,
+      sessionOnly: true,
+      params: idParams,
+      responses: {
+        200: 'The revoked token (`token`); revoking twice keeps the first time.',
+        404: 'No token of yours with that id.',
+      },
+    },
+    async (req, res, { params: { id } }) => {
+      const token = await tokens.findOne({ where: { id }, relations: { user: true } });
+      if (!token || (token.user.id !== req.user!.id && req.user!.role !== 'admin'))
+        throw new HttpError(404, { kind: 'not-found', message: 'No token of yours with that id.' });
+      token.revokedAt ??= new Date();
+      res.json({ token: view(await tokens.save(token)) });
+    },
+  );
   return router;
 }
