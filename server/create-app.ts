@@ -12,6 +12,7 @@ import { authRouter } from './routes/auth-router';
 import { deviationsRouter } from './routes/deviations-router';
 import { failuresRouter } from './routes/failures-router';
 import { meRouter } from './routes/me-router';
+import { openApiRouter } from './routes/openapi-router';
 import { outboxRouter } from './routes/outbox-router';
 import { overviewRouter } from './routes/overview-router';
 import { plansRouter } from './routes/plans-router';
@@ -154,6 +155,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   api.use('/tokens', tokensRouter(options.dataSource));
   api.use('/subscriptions', subscriptionsRouter(options.dataSource));
   api.use('/overview', overviewRouter(options.dataSource, overviewMemo));
+  api.use('/openapi.json', openApiRouter(SESSION_COOKIE));
   api.use((_req, res) => {
     res.status(404).json({ kind: 'not-found', message: 'No such API route.' } satisfies ApiError);
   });

@@ -372,6 +372,7 @@ const ROUTES: RouteCase[] = [
     call: (a) => a.put('/api/subscriptions').send({ targetKeys: ['complex.js'] }),
     expect: signedIn(200),
   },
+  { name: 'GET /api/openapi.json', call: (a) => a.get('/api/openapi.json'), expect: all(200) },
   { name: 'GET /api/unknown-route', call: (a) => a.get('/api/unknown-route'), expect: all(404) },
   { name: 'POST /api/auth/sign-out', ownSession: true, call: (a) => a.post('/api/auth/sign-out'), expect: all(204) },
 ];
