@@ -1,10 +1,5 @@
-import type { Role } from './roles';
+import type { z } from 'zod';
+import type { publicUserSchema } from './public-user-schema';
 
-/** A user as the API shows it: never the password hash. */
-export interface PublicUser {
-  id: string;
-  email: string;
-  displayName: string;
-  role: Role;
-  createdAt: string;
-}
+/** A user as the API shows it: never the password hash. Declared by its schema (`public-user-schema.ts`). */
+export type PublicUser = z.infer<typeof publicUserSchema>;

@@ -54,7 +54,7 @@ function standardErrors(method: string, d: Declaration): Record<number, string> 
   if (d.sessionOnly) forbidden.push('the request is signed in with an API token, not the session cookie');
   if (writes)
     forbidden.push("the request came from a page of another origin (its Origin or Referer is not one of the server's)");
-  if (forbidden.length > 0) errors[403] = `Forbidden: ${forbidden.join('; or ')}.`;
+  if (forbidden.length > 0) errors[403] = `Forbidden when ${forbidden.join('; or when ')}.`;
   if (writes) {
     errors[413] = 'The body is too large.';
     errors[415] = 'The body is in an encoding or of a type the route does not take.';

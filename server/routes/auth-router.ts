@@ -1,6 +1,8 @@
 import { Router } from 'express';
 import type { configurePassport } from '../auth/configure-passport';
 import type { ApiError } from '../../shared/api-error';
+import { z } from 'zod';
+import { publicUserSchema } from '../../shared/public-user-schema';
 import { signInBody } from '../../shared/schemas/sign-in-body';
 import type { User } from '../entities/user';
 import { declareRoute } from '../http/declare-route';
@@ -21,7 +23,10 @@ export function authRouter(passport: ReturnType<typeof configurePassport>, limit
       access: 'public',
       body: signInBody,
       responses: {
-        200: 'Signed in (`user`); the session cookie is set with a new session id.',
+        200: {
+          description: 'Signed in; the session cookie is set with a new session id.',
+          schema: z.object({ user: publicUserSchema }),
+        },
         401: 'The e-mail and password do not match an account (`wrong-credentials`).',
         429: 'Too many failed attempts from this client or on this account (`too-many-attempts`, with `Retry-After`).',
       },

@@ -5,6 +5,8 @@ import { ROLES } from '../../shared/roles';
 import { idParams } from '../../shared/schemas/id-params';
 import { tokenBody } from '../../shared/schemas/token-body';
 import type { TokenView } from '../../shared/token-view';
+import { z } from 'zod';
+import { tokenViewSchema } from '../../shared/token-view-schema';
 import { ApiToken } from '../entities/api-token';
 import { hashToken } from '../auth/hash-token';
 import { HttpError } from '../http/http-error';
@@ -31,7 +33,7 @@ export function tokensRouter(dataSource: DataSource): Router {
       summary: 'My API tokens, newest first (never their secrets)',
       access: ROLES,
       sessionOnly: true,
-      responses: { 200: 'The tokens (`tokens`).' },
+      responses: { 200: { description: 'My tokens.', schema: z.object({ tokens: z.array(tokenViewSchema) }) } },
     },
     async (req, res) => {
       res.json({
@@ -48,7 +50,12 @@ export function tokensRouter(dataSource: DataSource): Router {
       access: ROLES,
       sessionOnly: true,
       body: tokenBody,
-      responses: { 201: 'The token (`token`) and its secret (`secret`, shown once).' },
+      responses: {
+        201: {
+          description: 'The token and its secret, shown this once.',
+          schema: z.object({ token: tokenViewSchema, secret: z.string() }),
+        },
+      },
     },
     async (req, res, { body: { name } }) => {
       const secret = `skt_${randomBytes(32).toString('base64url')}`;
@@ -73,7 +80,10 @@ export function tokensRouter(dataSource: DataSource): Router {
       sessionOnly: true,
       params: idParams,
       responses: {
-        200: 'The revoked token (`token`); revoking twice keeps the first time.',
+        200: {
+          description: 'The revoked token; revoking twice keeps the first time.',
+          schema: z.object({ token: tokenViewSchema }),
+        },
         404: 'No token of yours with that id.',
       },
     },

@@ -1,6 +1,8 @@
 import { Router } from 'express';
 import type { DataSource } from 'typeorm';
 import type { ApiError } from '../../shared/api-error';
+import { z } from 'zod';
+import { publicUserSchema } from '../../shared/public-user-schema';
 import { idParams } from '../../shared/schemas/id-params';
 import { roleChangeBody } from '../../shared/schemas/role-change-body';
 import { User } from '../entities/user';
@@ -17,7 +19,11 @@ export function usersRouter(dataSource: DataSource, signedIn: ShortLivedCache<Us
     router,
     'get',
     '/',
-    { summary: 'Every user, oldest first', access: ['admin'], responses: { 200: 'The users (`users`).' } },
+    {
+      summary: 'Every user, oldest first',
+      access: ['admin'],
+      responses: { 200: { description: 'Every user.', schema: z.object({ users: z.array(publicUserSchema) }) } },
+    },
     async (_req, res) => {
       const all = await users.find({ order: { createdAt: 'ASC', email: 'ASC' } });
       res.json({ users: all.map(toPublicUser) });
@@ -34,7 +40,7 @@ export function usersRouter(dataSource: DataSource, signedIn: ShortLivedCache<Us
       params: idParams,
       body: roleChangeBody,
       responses: {
-        200: 'The user with the new role (`user`).',
+        200: { description: 'The user with the new role.', schema: z.object({ user: publicUserSchema }) },
         404: 'No user with that id.',
         409: 'This is the last admin; make someone else admin first.',
       },

@@ -1,5 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import request from 'supertest';
+import { apiErrorSchema } from '../../../shared/api-error-schema';
 import { signInAs } from '../../setup/sign-in-as';
 import { startTestApp, type TestApp } from '../../setup/test-app';
 
@@ -41,6 +42,31 @@ function resolve(doc: Json, ref: string): unknown {
     .split('/')
     .map((p) => p.replace(/~1/g, '/').replace(/~0/g, '~'))
     .reduce<unknown>((at, key) => (at && typeof at === 'object' ? (at as Json)[key] : undefined), doc);
+}
+
+/**
+ * Where `value` leaves its documented JSON schema: an object's fields must be the documented
+ * properties (every required one, no other), an array's items are checked alike, a string is a string.
+ */
+function departures(schema: Json, value: unknown, at: string): string[] {
+  if (schema.type === 'array')
+    return Array.isArray(value)
+      ? value.flatMap((v, i) => departures(schema.items as Json, v, `${at}.${i}`))
+      : [`${at} is not an array`];
+  if (schema.type === 'object') {
+    if (!value || typeof value !== 'object') return [`${at} is not an object`];
+    const properties = (schema.properties ?? {}) as Record<string, Json>;
+    const required = (schema.required ?? []) as string[];
+    return [
+      ...required.filter((k) => !(k in value)).map((k) => `${at}.${k} is missing`),
+      ...Object.keys(value)
+        .filter((k) => !(k in properties))
+        .map((k) => `${at}.${k} is not documented`),
+      ...Object.entries(value).flatMap(([k, v]) => (properties[k] ? departures(properties[k], v, `${at}.${k}`) : [])),
+    ];
+  }
+  if (schema.type === 'string' && typeof value !== 'string') return [`${at} is not a string`];
+  return [];
 }
 
 /** A path parameter value its documented schema accepts. */
@@ -117,6 +143,28 @@ describe('GET /api/openapi.json', () => {
     expect(schemes.apiToken).toMatchObject({ type: 'http', scheme: 'bearer' });
   });
 
+  it('answers with the body its document describes, where the route documents one', async () => {
+    const admin = await signInAs(t.app, 'admin');
+    await admin.post('/api/tokens').send({ name: 'described' });
+    const described = operations(doc).filter(
+      ([key, op]) =>
+        key.startsWith('GET ') &&
+        !key.includes('{') &&
+        ((op.responses as Record<string, Json>)['200']?.content as Json | undefined)?.['application/json'] &&
+        (((op.responses as Record<string, Json>)['200']!.content as Json)['application/json'] as Json).schema,
+    );
+    expect(described.map(([key]) => key).sort()).toEqual(['GET /api/me', 'GET /api/tokens', 'GET /api/users']);
+    for (const [key, op] of described) {
+      const schema = ((((op.responses as Json)['200'] as Json).content as Json)['application/json'] as Json).schema;
+      const res = await admin.get(key.slice('GET '.length));
+      expect({ key, status: res.status, departures: departures(schema as Json, res.body, 'body') }).toEqual({
+        key,
+        status: 200,
+        departures: [],
+      });
+    }
+  });
+
   it("names, for an empty body, exactly the required fields of each route's documented body schema", async () => {
     const admin = await signInAs(t.app, 'admin');
     const withBodies = operations(doc).filter(([, op]) => (op.requestBody as Json | undefined)?.content);
@@ -132,6 +180,7 @@ describe('GET /api/openapi.json', () => {
       });
       const res = await admin[method.toLowerCase() as 'post' | 'put' | 'patch'](path).send({});
       expect({ key, status: res.status, kind: res.body.kind }).toEqual({ key, status: 400, kind: 'invalid-input' });
+      expect({ key, errorBody: apiErrorSchema.safeParse(res.body).success }).toEqual({ key, errorBody: true });
       const fields = (res.body.issues as { field: string }[]).map((i) => i.field);
       expect({ key, paramsAccepted: fields.every((f) => !f.startsWith('params')) }).toEqual({
         key,
