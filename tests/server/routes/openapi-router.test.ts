@@ -121,6 +121,8 @@ describe('GET /api/openapi.json', () => {
       const declared = ((op.parameters ?? []) as Json[]).filter((p) => p.in === 'path').map((p) => p.name);
       expect({ key, params: declared }).toEqual({ key, params: pathParams });
     }
+    const ids = operations(doc).map(([, op]) => op.operationId);
+    expect(new Set(ids).size).toBe(ids.length);
     const all = refs(doc);
     expect(all.length).toBeGreaterThan(0);
     for (const ref of all) expect({ ref, resolves: resolve(doc, ref) !== undefined }).toEqual({ ref, resolves: true });
@@ -163,6 +165,25 @@ describe('GET /api/openapi.json', () => {
         departures: [],
       });
     }
+  });
+
+  it('refuses a value outside a documented query enum with 400 naming that parameter', async () => {
+    const admin = await signInAs(t.app, 'admin');
+    const checked: string[] = [];
+    for (const [key, op] of operations(doc)) {
+      if (!key.startsWith('GET ') || key.includes('{')) continue;
+      for (const p of ((op.parameters ?? []) as Json[]).filter((q) => q.in === 'query' && (q.schema as Json).enum)) {
+        const res = await admin.get(key.slice('GET '.length)).query({ [p.name as string]: 'not-a-listed-value' });
+        const fields = ((res.body.issues ?? []) as { field: string }[]).map((i) => i.field);
+        expect({ key, status: res.status, fields }).toEqual({
+          key,
+          status: 400,
+          fields: [`query.${p.name as string}`],
+        });
+        checked.push(`${key}?${p.name as string}`);
+      }
+    }
+    expect(checked.length).toBeGreaterThanOrEqual(5);
   });
 
   it("names, for an empty body, exactly the required fields of each route's documented body schema", async () => {
