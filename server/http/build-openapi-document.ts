@@ -19,12 +19,13 @@ const WRITING_METHODS = new Set(['post', 'put', 'patch', 'delete']);
 function jsonSchema(schema: z.ZodType, name: string, components: Record<string, JsonSchema>): JsonSchema {
   const { $schema: _dialect, $defs, ...rest } = z.toJSONSchema(schema, { io: 'input', unrepresentable: 'any' });
   const rename = (key: string) => `${name}.${key}`;
-  let text = JSON.stringify(rest);
-  for (const [key, def] of Object.entries($defs ?? {})) {
-    components[rename(key)] = def as JsonSchema;
+  // The definitions refer to each other (and to themselves) as well, so both are rewritten.
+  let text = JSON.stringify({ rest, defs: $defs ?? {} });
+  for (const key of Object.keys($defs ?? {}))
     text = text.split(`"#/$defs/${key}"`).join(`"#/components/schemas/${rename(key)}"`);
-  }
-  return JSON.parse(text) as JsonSchema;
+  const rewritten = JSON.parse(text) as { rest: JsonSchema; defs: Record<string, JsonSchema> };
+  for (const [key, def] of Object.entries(rewritten.defs)) components[rename(key)] = def;
+  return rewritten.rest;
 }
 
 /** Who may call a route, in words, for its description. */
@@ -60,7 +61,7 @@ function standardErrors(method: string, d: Declaration): Record<number, string> 
     errors[415] = 'The body is in an encoding or of a type the route does not take.';
   }
   errors[503] =
-    'The database cannot be reached right now (the answer has `Retry-After: 5`); nothing was read or saved.';
+    'The database cannot be reached right now (the answer says when to try again in `Retry-After`); nothing was read or saved.';
   errors[500] = 'Something went wrong on the server; the log has the details.';
   return errors;
 }
