@@ -15,7 +15,9 @@ type ComplexJsClass = Parameters<typeof complexJsEntryWays>[0] & { prototype: Re
 
 /**
  * complex.js at one installed version (`alias` is the package name or its npm alias,
- * e.g. "complex.js-2.4.1"). The package is required on first use, not before.
+ * e.g. "complex.js-2.4.1", or the absolute path of a package folder for a configured target,
+ * docs/target-sources.md). The package is required on first use, not before. `identity` replaces
+ * the name and settings of a configured target (its source, not an alias, names where it is).
  *
  * Arguments are built through the entry asked for (complex-js-entries.ts; `new Complex(re, im)`
  * by default) and never patched afterwards, so a constructor that drops a −0 (complex.js 2.4.1)
@@ -24,7 +26,11 @@ type ComplexJsClass = Parameters<typeof complexJsEntryWays>[0] & { prototype: Re
  * version from 2.0.11 to 2.4.3 lacks cbrt and nthroot) is unsupported and answers
  * an error per call.
  */
-export function complexJsTarget(alias: string, version: string): Target {
+export function complexJsTarget(
+  alias: string,
+  version: string,
+  identity?: { name: string; settings: Target['settings'] },
+): Target {
   let Complex: ComplexJsClass | undefined;
   const load = (): ComplexJsClass => {
     if (Complex) return Complex;
@@ -34,7 +40,7 @@ export function complexJsTarget(alias: string, version: string): Target {
     Complex = mod.default ?? mod;
     return Complex;
   };
-  const name = `complex.js@${version}`;
+  const name = identity?.name ?? `complex.js@${version}`;
   const builder = entryBuilders({ name, entries: [...COMPLEX_JS_ENTRIES] }, () => complexJsEntryWays(load()));
   // complex.js names its methods after the catalogue's operations (sqrt, acoth, add, neg, …).
   const has = (op: string): boolean => op in OP_ARITY && typeof load().prototype[op] === 'function';
@@ -46,7 +52,7 @@ export function complexJsTarget(alias: string, version: string): Target {
     name,
     library: 'complex.js',
     version,
-    settings: { package: alias },
+    settings: identity?.settings ?? { package: alias },
     entries: [...COMPLEX_JS_ENTRIES],
     supports: async (op) => has(op),
     evaluate: async (op, calls, entry) => {

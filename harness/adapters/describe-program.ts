@@ -1,7 +1,6 @@
-import path from 'node:path';
 import type { ProgramTargetSource } from '../../shared/target-source';
 import type { TargetEntry } from '../../shared/target-entry';
-import { stdioTarget } from './stdio-target';
+import { programTarget } from './program-target';
 import type { TargetDescriptor } from './target-descriptor';
 
 /**
@@ -12,34 +11,23 @@ import type { TargetDescriptor } from './target-descriptor';
  * (it did not start, did not answer in time, or its answer lacks a library or version).
  */
 export async function describeProgram(source: ProgramTargetSource, baseDir: string): Promise<TargetDescriptor> {
-  const [command, ...args] = source.command as [string, ...string[]];
-  const cwd = source.cwd === undefined ? baseDir : path.resolve(baseDir, source.cwd);
-  const settings = { protocol: 'stdio', command: source.command.join(' ') };
-  const open = (identity: { name: string; library: string; version: string; entries?: TargetEntry[] }) =>
-    stdioTarget({
-      ...identity,
-      settings,
-      command,
-      args,
-      cwd,
-      ...(source.timeLimitMs !== undefined ? { timeLimitMs: source.timeLimitMs } : {}),
-    });
-  const probe = open({ name: source.name ?? 'program', library: 'program', version: '?' });
+  const probe = programTarget(source, baseDir, { name: source.name ?? 'program', library: 'program', version: '?' });
+  const command = probe.settings.command;
   try {
     const answer = await probe.request('describe', []);
-    if ('error' in answer) throw new Error(`${settings.command}: describe failed: ${answer.error}`);
+    if ('error' in answer) throw new Error(`${command}: describe failed: ${answer.error}`);
     const { library, version, entries } = answer.reply as { library?: unknown; version?: unknown; entries?: unknown };
     if (typeof library !== 'string' || library.trim() === '')
-      throw new Error(`${settings.command}: describe answered no "library"`);
+      throw new Error(`${command}: describe answered no "library"`);
     if (typeof version !== 'string' || version.trim() === '')
-      throw new Error(`${settings.command}: describe answered no "version"`);
+      throw new Error(`${command}: describe answered no "version"`);
     const identity = {
       name: source.name ?? `${library}@${version}`,
       library,
       version,
       ...(Array.isArray(entries) ? { entries: entries as TargetEntry[] } : {}),
     };
-    return { ...identity, settings, open: () => open(identity) };
+    return { ...identity, settings: probe.settings, open: () => programTarget(source, baseDir, identity) };
   } finally {
     await probe.close();
   }

@@ -21,7 +21,9 @@ const FUNCTION: Readonly<Record<string, string>> = {
 };
 
 /**
- * mathjs at one installed version, in its own instance `create(all, { predictable })`.
+ * mathjs at one installed version, in its own instance `create(all, { predictable })`. `alias` is
+ * the package name, its npm alias or a package folder's absolute path (a configured target, whose
+ * `identity` gives the name before the entry and the settings that say where it comes from).
  *
  * Every argument is built through the entry asked for (mathjs-entries.ts) and never patched
  * afterwards; `entry` (the end of the target's name) is the default. Entry `complex`:
@@ -39,6 +41,7 @@ export function mathjsTarget(
   entry: 'complex' | 'number',
   predictable: boolean,
   complexJsVersion: string,
+  identity?: { base: string; settings: Target['settings'] },
 ): Target {
   let math: MathInstance | undefined;
   const load = (): MathInstance => {
@@ -51,14 +54,14 @@ export function mathjsTarget(
   };
   const functionOf = (op: string): string => FUNCTION[op] ?? op;
   const has = (op: string): boolean => op in OP_ARITY && typeof load()[functionOf(op)] === 'function';
-  const name = `mathjs@${version}/${entry}${predictable ? '/predictable' : ''}`;
+  const name = `${identity?.base ?? `mathjs@${version}`}/${entry}${predictable ? '/predictable' : ''}`;
   const entries = mathjsEntries(entry);
   const builder = entryBuilders({ name, entries }, () => mathjsEntryWays(load()));
   return {
     name,
     library: 'mathjs',
     version,
-    settings: { package: alias, entry, predictable, 'complex.js': complexJsVersion },
+    settings: { ...(identity?.settings ?? { package: alias }), entry, predictable, 'complex.js': complexJsVersion },
     entries,
     supports: async (op) => has(op),
     evaluate: async (op, calls, entryName) => {

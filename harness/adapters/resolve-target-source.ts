@@ -1,5 +1,15 @@
+import { statSync } from 'node:fs';
+import path from 'node:path';
 import type { TargetSource } from '../../shared/target-source';
+import { ADAPTED_LIBRARIES } from '../sources/adapted-libraries';
+import { configuredTarget } from '../sources/configured-target';
+import { fileSha256 } from '../sources/file-sha256';
+import { installIntoCache } from '../sources/install-into-cache';
+import { noAdapterError } from '../sources/no-adapter-error';
+import { packageFolderTargets } from '../sources/package-folder-targets';
+import { tarballManifest } from '../sources/tarball-manifest';
 import { describeProgram } from './describe-program';
+import { discoverTargets } from './discover-targets';
 import type { TargetDescriptor } from './target-descriptor';
 
 export interface ResolveSourceOptions {
@@ -9,16 +19,71 @@ export interface ResolveSourceOptions {
   cacheDir: string;
 }
 
+/** Hex digits of a tarball's SHA-256 in its cache folder's name: 128 bits, no collision by chance. */
+const HASH_DIGITS = 32;
+
+const adapted = (name: string): boolean => (ADAPTED_LIBRARIES as readonly string[]).includes(name);
+
+/** The installed targets of one library version (discover-targets.ts). */
+const installedAs = (library: string, version: string): TargetDescriptor[] =>
+  discoverTargets().filter((t) => t.library === library && t.version === version);
+
 /**
- * The targets one target source names (shared/target-source.ts). A `program` is described by
- * starting it once; an `npm` version missing from the cache is installed there on first use;
- * a `local` folder or tarball is read where it is. Rejects with an Error whose message names the
- * source and what is wrong with it. CONTRACT: npm and local are filled in by the "sources" part.
+ * The targets one target source names (shared/target-source.ts), each openable in a worker thread
+ * too (configured-target.ts). A `program` is described by starting it once. An `npm` version is
+ * installed into `cacheDir/npm/<package>@<version>` on first use (install-into-cache.ts) — unless
+ * it is a version installed with Sheetkeeper and no `name` is given, which is the same code under
+ * the same name: the installed target answers. A `local` folder is loaded where it is; a packed
+ * `.tgz` is installed into `cacheDir/tarballs/<sha-256>`. A local copy whose version is also
+ * installed is named `<library>@<version>+local` unless it has a `name` (a program whose described
+ * name is an installed target's, `<name>+program`), so both can run side by side. Rejects with an Error whose message names the source and what is wrong with it.
  */
 export async function resolveTargetSource(
   source: TargetSource,
   options: ResolveSourceOptions,
 ): Promise<TargetDescriptor[]> {
-  if (source.kind === 'program') return [await describeProgram(source, options.baseDir)];
-  throw new Error(`${source.kind} target sources are not resolved yet`);
+  const baseDir = path.resolve(options.baseDir);
+  const cacheDir = path.resolve(options.cacheDir);
+  if (source.kind === 'program') {
+    const { name, library, version, entries } = await describeProgram(source, baseDir);
+    const taken = source.name === undefined && discoverTargets().some((t) => t.name === name);
+    const identity = { name: taken ? `${name}+program` : name, library, version, ...(entries ? { entries } : {}) };
+    return [configuredTarget({ kind: 'program', source, baseDir, identity })];
+  }
+  if (source.kind === 'npm') {
+    const spec = `${source.package}@${source.version}`;
+    if (!adapted(source.package)) throw noAdapterError(`npm ${spec}`, source.package);
+    if (source.name === undefined) {
+      const installed = installedAs(source.package, source.version);
+      if (installed.length > 0) return installed;
+    }
+    const folder = path.join(cacheDir, 'npm', spec);
+    await installIntoCache(spec, folder);
+    return packageFolderTargets(
+      path.join(folder, 'node_modules', source.package),
+      { source: 'npm', package: spec },
+      (library, version) => source.name ?? `${library}@${version}`,
+    );
+  }
+  const full = path.resolve(baseDir, source.path);
+  const nameFor = (library: string, version: string): string =>
+    source.name ?? (installedAs(library, version).length > 0 ? `${library}@${version}+local` : `${library}@${version}`);
+  let stat;
+  try {
+    stat = statSync(full);
+  } catch {
+    throw new Error(`${full} does not exist (a library's folder or a packed .tgz is needed)`);
+  }
+  if (stat.isDirectory()) return packageFolderTargets(full, { source: 'local', path: full }, nameFor);
+  if (!/\.(tgz|tar\.gz)$/.test(full)) throw new Error(`${full} is neither a folder nor a packed .tgz`);
+  const manifest = await tarballManifest(full);
+  if (!adapted(manifest.name)) throw noAdapterError(full, manifest.name);
+  const hash = (await fileSha256(full)).slice(0, HASH_DIGITS);
+  const folder = path.join(cacheDir, 'tarballs', hash);
+  await installIntoCache(full, folder);
+  return packageFolderTargets(
+    path.join(folder, 'node_modules', manifest.name),
+    { source: 'local', path: full, sha256: hash },
+    nameFor,
+  );
 }
