@@ -3,6 +3,7 @@ import path from 'node:path';
 import { PACKAGE_ROOT } from '../package-root';
 import { cComplexTarget } from './c-complex-target';
 import { CMATH_ENTRIES } from './cmath-entries';
+import { compareVersions } from './compare-versions';
 import { complexJsTarget } from './complex-js-target';
 import { installedVersion } from './installed-version';
 import { jsMathTarget } from './js-math-target';
@@ -86,15 +87,9 @@ export function discoverTargets(
     const open = () => cComplexTarget({ ...libc, compiler });
     targets.push({ ...describe(open()), open });
   }
-  const numeric = (v: string): number[] => v.split(/[.-]/).map((x) => Number(x) || 0);
-  const byVersion = (a: string, b: string): number => {
-    const [x, y] = [numeric(a), numeric(b)];
-    for (let i = 0; i < Math.max(x.length, y.length); i++)
-      if ((x[i] ?? 0) !== (y[i] ?? 0)) return (x[i] ?? 0) - (y[i] ?? 0);
-    return 0;
-  };
   return targets.sort(
-    (a, b) => a.library.localeCompare(b.library) || byVersion(a.version, b.version) || a.name.localeCompare(b.name),
+    (a, b) =>
+      a.library.localeCompare(b.library) || compareVersions(a.version, b.version) || a.name.localeCompare(b.name),
   );
 }
 

@@ -11,4 +11,9 @@ import type { Target } from './target';
 export interface TargetDescriptor extends TargetIdentity {
   open(): Target;
   worker?: { discovered: string } | { module: string; args?: unknown[] };
+  /**
+   * Where a configured target comes from, for people (`sheetkeeper.config.json targets[0]`,
+   * `--npm complex.js@2.5.0`; docs/target-sources.md); absent for the installed targets.
+   */
+  from?: string;
 }

@@ -1,5 +1,6 @@
 import { cutMapRequest } from '../../shared/schemas/cut-map-request';
 import { BadInput } from '../command-support/bad-input';
+import { commandTargets } from '../command-support/command-targets';
 import { findTarget } from '../command-support/find-target';
 import { readFlags } from '../command-support/read-flags';
 import { writeOutput } from '../command-support/write-output';
@@ -10,17 +11,18 @@ import { mapCuts } from './map-cuts';
 
 /**
  * `sheetkeeper cutmap --target NAME@VERSION --fn sqrt [--box re0,im0,re1,im1] [--grid 81x81]
- * [--format json|svg|table] [--out FILE]`: where the function is discontinuous over the box,
+ * [--format json|svg|table] [--out FILE]` (and the target-source flags, command-targets.ts): where the function is discontinuous over the box,
  * against its expected cuts. Exits 0 when they match, 1 when they differ, 2 for bad input.
  */
 export async function cutmapCommand(argv: readonly string[]): Promise<number> {
-  const request = readFlags(argv, ['target', 'fn', 'box', 'grid', 'format', 'out'], cutMapRequest);
+  const { rest, known } = await commandTargets(argv, { targetFlag: '--target' });
+  const request = readFlags(rest, ['target', 'fn', 'box', 'grid', 'format', 'out'], cutMapRequest);
   const fn = FINGERPRINT_FUNCTIONS.find((f) => f.label === request.fn);
   if (!fn)
     throw new BadInput(
       `--fn: unknown function "${request.fn}"; known: ${FINGERPRINT_FUNCTIONS.map((f) => f.label).join(', ')}`,
     );
-  const target = findTarget(request.target).open();
+  const target = findTarget(request.target, known).open();
   try {
     if (!(await target.supports(fn.op))) throw new BadInput(`--fn: ${target.name} has no ${fn.op}`);
     const [re0, im0, re1, im1] = request.box as [number, number, number, number];

@@ -1,3 +1,4 @@
+import { compareVersions } from '../adapters/compare-versions';
 import { discoverTargets } from '../adapters/discover-targets';
 import type { TargetDescriptor } from '../adapters/target-descriptor';
 
@@ -5,10 +6,18 @@ import type { TargetDescriptor } from '../adapters/target-descriptor';
 const withoutVersion = (name: string) => name.replace(/@[^/]*/, '');
 
 /**
- * Every installed version of one library with the same settings, oldest first (discovery
- * sorts by version): `library` is a target name without its version, as in
+ * Every version of one library with the same settings among `known` (the installed targets by
+ * default; a command adds the configured ones), oldest first, an installed version before a
+ * configured copy of the same version: `library` is a target name without its version, as in
  * "complex.js" or "mathjs/number/predictable".
  */
-export function libraryVersions(library: string): TargetDescriptor[] {
-  return discoverTargets().filter((d) => withoutVersion(d.name) === library);
+export function libraryVersions(
+  library: string,
+  known: readonly TargetDescriptor[] = discoverTargets(),
+): TargetDescriptor[] {
+  return known
+    .filter((d) => withoutVersion(d.name) === library)
+    .sort(
+      (a, b) => compareVersions(a.version, b.version) || Number(a.from !== undefined) - Number(b.from !== undefined),
+    );
 }

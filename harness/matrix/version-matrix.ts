@@ -14,6 +14,11 @@ import { toPathSpec } from '../runner/evaluation/to-path-spec';
 type SuiteEntry = VersionMatrix['suites'][number];
 type Side = SuiteEntry['changes'][number]['steps'][number]['before'];
 
+/**
+ * A column's version as its target's name spells it, so a configured working copy of an installed
+ * version ("complex.js@2.4.3+local") is its own column, "2.4.3+local"; a name without "@" shows the version.
+ */
+const versionLabel = (t: { name: string; version: string }): string => /@([^/]+)/.exec(t.name)?.[1] ?? t.version;
 const wire = (re: number, im: number) => ({ re: formatDouble(re), im: formatDouble(im) });
 /** Sign-exact sameness of two values: bit for bit, except that every NaN is the same NaN. */
 const sameValue = (a: Side['value'], b: Side['value']): boolean =>
@@ -69,7 +74,7 @@ export async function versionMatrix(
       for (const target of opened) {
         const result = await evaluateSuite(suite, target, { cache, maxFindings: Number.MAX_SAFE_INTEGER });
         entry.statusByVersion.push({
-          version: target.version,
+          version: versionLabel(target),
           status: result.status,
           fail: result.counts.fail,
           pass: result.counts.pass,
@@ -108,7 +113,7 @@ export async function versionMatrix(
                 reason: 'passed or skipped: this path has skipped points, which the runner counts but does not list',
               };
             else outcome = { kind: 'pass' };
-            sides[k]![i]!.push({ version: target.version, value, outcome });
+            sides[k]![i]!.push({ version: versionLabel(target), value, outcome });
           });
         }
       }
@@ -138,7 +143,7 @@ export async function versionMatrix(
   }
   return {
     library,
-    versions: opened.map((t) => t.version),
+    versions: opened.map(versionLabel),
     statement:
       `Values of ${pointCount} points (the suites' paths) compared bit for bit between consecutive installed versions, ` +
       `each suite at the entry it names (how its inputs are built: "new Complex(re, im)" by default). ` +

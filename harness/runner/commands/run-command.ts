@@ -1,7 +1,8 @@
 import { mkdirSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import { discoverTargets } from '../../adapters/discover-targets';
+import { BadInput } from '../../command-support/bad-input';
+import { commandTargets, type CommandTargets } from '../../command-support/command-targets';
 import { buildPlan } from '../plan/build-plan';
 import { formatJson } from '../formats/format-json';
 import { formatJunit } from '../formats/format-junit';
@@ -19,11 +20,13 @@ const WORKER_THRESHOLD = 50_000;
 
 const USAGE = [
   'usage: sheetkeeper run --suite FILE|ID|FOLDER --target NAME@VERSION [--format table|json|junit] [--out FILE] [--seed N] [--workers N|auto] [--slice-time-limit MS] [--cache DIR | --no-cache] [--max-findings N] [--progress]',
+  '       [--config FILE] [--npm PACKAGE@VERSION] [--local PATH] [--program "COMMAND ARGS"] [--target-cache DIR]: targets beyond the installed ones (docs/target-sources.md); with exactly one of --npm/--local/--program and no --target, that one is the target',
   'exit: 0 pass; 1 branch findings, errors or failed checks; 2 bad input; 3 accuracy findings only',
 ].join('\n');
 
 /**
- * `sheetkeeper run` (docs/suite-format.md): loads and validates the suites, resolves the targets, runs
+ * `sheetkeeper run` (docs/suite-format.md): loads and validates the suites, resolves the targets
+ * (installed, and configured by the project file or the source flags: docs/target-sources.md), runs
  * the plan and writes the result as a table, JSON or JUnit XML (to --out or stdout). Exit 0
  * when nothing failed, 3 when the only failures are accuracy findings, 1 for a branch finding, an
  * error, a failed monodromy or property check or a cancelled run (Ctrl-C) (runExitCode), 2 for
@@ -31,7 +34,15 @@ const USAGE = [
  * `suite: field rule`).
  */
 export async function runCommand(argv: string[]): Promise<number> {
-  const args = parseRunArgs(argv);
+  let known: CommandTargets;
+  try {
+    known = await commandTargets(argv, { targetFlag: '--target' });
+  } catch (e) {
+    if (!(e instanceof BadInput)) throw e;
+    process.stderr.write(`sheetkeeper run: ${e.message}\n`);
+    return 2;
+  }
+  const args = parseRunArgs(known.rest);
   if ('error' in args) {
     process.stderr.write(`sheetkeeper run: ${args.error}\n${USAGE}\n`);
     return 2;
@@ -41,7 +52,7 @@ export async function runCommand(argv: string[]): Promise<number> {
     for (const i of loaded.issues) process.stderr.write(`sheetkeeper run: ${i.suite}: ${i.field} ${i.rule}\n`);
     return 2;
   }
-  const targets = resolveTargets(args.targets, discoverTargets());
+  const targets = resolveTargets(args.targets, known.known);
   if (!targets.ok) {
     process.stderr.write(`sheetkeeper run: ${targets.message}\n`);
     return 2;

@@ -1,6 +1,8 @@
 import type { TargetEntry } from '../../../shared/target-entry';
 import { probeEntryPoints } from '../../adapters/entry-point-probes';
 import { listTargets } from '../../adapters/list-targets';
+import { BadInput } from '../../command-support/bad-input';
+import { commandTargets, type CommandTargets } from '../../command-support/command-targets';
 import { summarizeEntryPoints } from '../../adapters/summarize-entry-points';
 
 const cannotCarry = (c: TargetEntry['carries']): string => {
@@ -13,15 +15,24 @@ const cannotCarry = (c: TargetEntry['carries']): string => {
 };
 
 /**
- * `sheetkeeper targets` (docs/suite-format.md): the installed targets, versions, settings and entries,
- * loading no library. JSON by default (as list-targets.ts prints it); `--format table` for a person,
+ * `sheetkeeper targets` (docs/suite-format.md): the installed targets, then the configured ones
+ * (project file and source flags, docs/target-sources.md; each with `from`, where it was named),
+ * with versions, settings and entries, loading no library (a program source is started once to describe itself). JSON by default (as list-targets.ts prints it); `--format table` for a person,
  * with one line per entry under its target: name, how the value is built, what it cannot carry.
  * `--ways` reports instead, per target and way of building a value (the entries and the other
  * ways people write, such as mixed real/complex arithmetic), whether ±0 parts arrive intact.
  */
 export async function targetsCommand(argv: string[]): Promise<number> {
-  const ways = argv.includes('--ways');
-  const rest = argv.filter((a) => a !== '--ways');
+  let known: CommandTargets;
+  try {
+    known = await commandTargets(argv);
+  } catch (e) {
+    if (!(e instanceof BadInput)) throw e;
+    process.stderr.write(`sheetkeeper targets: ${e.message}\n`);
+    return 2;
+  }
+  const ways = known.rest.includes('--ways');
+  const rest = known.rest.filter((a) => a !== '--ways');
   const format =
     rest[0] === '--format' && rest.length === 2
       ? rest[1]
@@ -31,13 +42,15 @@ export async function targetsCommand(argv: string[]): Promise<number> {
           ? 'json'
           : null;
   if (format !== 'json' && format !== 'table') {
-    process.stderr.write('usage: sheetkeeper targets [--format json|table] [--ways]\n');
+    process.stderr.write(
+      'usage: sheetkeeper targets [--format json|table] [--ways] [--config FILE] [--npm PACKAGE@VERSION] [--local PATH] [--program "COMMAND ARGS"] [--target-cache DIR]\n',
+    );
     return 2;
   }
   if (ways) {
     // Every way each library takes a value (entries and the others people write), built with
     // ±0 parts and read back before any function runs: this loads the libraries.
-    const summary = summarizeEntryPoints(await probeEntryPoints());
+    const summary = summarizeEntryPoints(await probeEntryPoints(known.known));
     process.stdout.write(
       format === 'json'
         ? `${JSON.stringify(summary, null, 2)}\n`
@@ -45,7 +58,7 @@ export async function targetsCommand(argv: string[]): Promise<number> {
     );
     return 0;
   }
-  const targets = listTargets();
+  const targets = listTargets(known.known);
   if (format === 'json') {
     process.stdout.write(`${JSON.stringify(targets, null, 2)}\n`);
     return 0;
@@ -55,6 +68,7 @@ export async function targetsCommand(argv: string[]): Promise<number> {
     `${t.name.padEnd(width)}  ${t.library.padEnd(16)} ${t.version.padEnd(10)} ${Object.entries(t.settings)
       .map(([k, v]) => `${k}=${v}`)
       .join(' ')}`,
+    ...(t.from !== undefined ? [`${''.padEnd(width)}    from ${t.from}`] : []),
     ...(t.entries ?? []).map(
       (e) =>
         `${''.padEnd(width)}    entry ${e.name.padEnd(8)} ${e.call}${e.default ? ' (default)' : ''}${cannotCarry(e.carries)}`,
