@@ -18,7 +18,9 @@ function shorten(stderr: string): string {
   const lines = stderr
     .split('\n')
     .map((l) => l.replace(/^npm (error|ERR!)\s*/, '').trim())
-    .filter((l) => l !== '' && !/complete log of this run|A complete log|\.npm\/_logs\//i.test(l));
+    .filter((l) => l !== '' && !/complete log of this run|A complete log|\.npm\/_logs\//i.test(l))
+    // npm prefixes its ECONNRESET advice with the word "network"; the advice is the useful part.
+    .map((l) => l.replace(/^network\s+/, ''));
   const text = lines.slice(0, MESSAGE_LINES).join('; ');
   return text.length > MESSAGE_CHARS ? `${text.slice(0, MESSAGE_CHARS)}…` : text || 'no message';
 }
