@@ -28,9 +28,9 @@ const sameTarget = (a: TargetDescriptor, b: TargetDescriptor): boolean =>
  */
 export async function commandTargets(
   argv: readonly string[],
-  options: { targetFlag?: string } = {},
+  options: { targetFlag?: string; cwd?: string } = {},
 ): Promise<CommandTargets> {
-  const { rest, sources, cacheDir } = readTargetSources(argv);
+  const { rest, sources, cacheDir } = readTargetSources(argv, options.cwd);
   const installed = discoverTargets();
   const settled = await Promise.allSettled(
     sources.map((s) => resolveTargetSource(s.source, { baseDir: s.baseDir, cacheDir })),

@@ -12,10 +12,16 @@ const CONFIG_MAX_BYTES = 1_048_576;
  * Reads a project's `sheetkeeper.config.json` (shared/sheetkeeper-config.ts): its target sources,
  * each with where it was named (`file targets[i]`) and the file's folder as the base of relative
  * paths, and its `cacheDir` resolved from that folder. Anything wrong is BadInput naming the file,
- * the field and the rule (`sheetkeeper.config.json: targets[1].version: must be an exact version…`).
+ * the field and the rule (`sheetkeeper.config.json: targets[1].version: must be an exact version…`);
+ * the file is named relative to `cwd` when it lies under it.
  */
-export function readConfigFile(file: string): { sources: ConfiguredSource[]; cacheDir?: string } {
-  const shown = path.relative(process.cwd(), file) || file;
+export function readConfigFile(
+  file: string,
+  cwd: string = process.cwd(),
+): { sources: ConfiguredSource[]; cacheDir?: string } {
+  // Shown as given from the working folder when it is under it, else in full.
+  const relative = path.relative(cwd, file);
+  const shown = relative === '' || relative.startsWith('..') ? file : relative;
   let size: number;
   try {
     size = statSync(file).size;

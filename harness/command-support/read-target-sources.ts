@@ -53,7 +53,7 @@ export function readTargetSources(argv: readonly string[], cwd: string = process
     : existsSync(path.join(cwd, DEFAULT_CONFIG))
       ? path.join(cwd, DEFAULT_CONFIG)
       : null;
-  const config = configFile ? readConfigFile(configFile) : { sources: [] };
+  const config = configFile ? readConfigFile(configFile, cwd) : { sources: [] };
   const sources = [...config.sources];
   for (const { flag, value } of given) {
     const candidates =
