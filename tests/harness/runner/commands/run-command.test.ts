@@ -131,6 +131,24 @@ describe('sheetkeeper run', () => {
     );
   }, 120_000);
 
+  it('runs against a library given by --local alone, and exits 2 naming the bad field of a project file', () => {
+    // One source flag and no --target: that source is the target (docs/target-sources.md).
+    const local = run(['--suite', 'sqrt-principal-sz', '--local', 'node_modules/complex.js-2.3.0', '--format', 'json']);
+    expect(local.stderr).toBe('');
+    // complex.js 2.3.0 loses the −0 of sqrt(−4 − 0i) (ISO/IEC 9899:2011 G.6.4.2 wants −2i): branch findings, exit 1.
+    expect(local.status).toBe(1);
+    expect(JSON.parse(local.stdout).results.map((r: { target: { name: string } }) => r.target.name)).toEqual([
+      'complex.js@2.3.0+local',
+    ]);
+    const config = path.join(dir, 'bad.config.json');
+    writeFileSync(config, JSON.stringify({ targets: [{ kind: 'npm', package: 'complex.js', version: '2.x' }] }));
+    const bad = run(['--suite', 'sqrt-principal-sz', '--target', 'complex.js', '--config', config]);
+    expect(bad.status).toBe(2);
+    expect(bad.stderr).toMatch(
+      /^sheetkeeper run: .*bad\.config\.json: targets\[0\]\.version: must be an exact version/,
+    );
+  }, 60_000);
+
   it('exits 2 for bad input: an unknown suite or target, a flag it does not know, an invalid suite file', () => {
     const unknownSuite = run(['--suite', 'no-such-suite', '--target', 'complex.js']);
     expect(unknownSuite.status).toBe(2);
