@@ -52,7 +52,7 @@ export async function resolveTargetSource(
   }
   if (source.kind === 'npm') {
     const spec = `${source.package}@${source.version}`;
-    if (!adapted(source.package)) throw noAdapterError(`npm ${spec}`, source.package);
+    if (!adapted(source.package)) throw noAdapterError(source.package);
     if (source.name === undefined) {
       const installed = installedAs(source.package, source.version);
       if (installed.length > 0) return installed;
@@ -77,7 +77,7 @@ export async function resolveTargetSource(
   if (stat.isDirectory()) return packageFolderTargets(full, { source: 'local', path: full }, nameFor);
   if (!/\.(tgz|tar\.gz)$/.test(full)) throw new Error(`${full} is neither a folder nor a packed .tgz`);
   const manifest = await tarballManifest(full);
-  if (!adapted(manifest.name)) throw noAdapterError(full, manifest.name);
+  if (!adapted(manifest.name)) throw noAdapterError(manifest.name, full);
   const hash = (await fileSha256(full)).slice(0, HASH_DIGITS);
   const folder = path.join(cacheDir, 'tarballs', hash);
   await installIntoCache(full, folder);

@@ -58,5 +58,5 @@ export function packageFolderTargets(
       ),
     );
   }
-  throw noAdapterError(folder, library);
+  throw noAdapterError(library, folder);
 }
