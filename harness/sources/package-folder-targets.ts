@@ -1,10 +1,13 @@
-import { existsSync, readFileSync } from 'node:fs';
+import { existsSync, readFileSync, statSync } from 'node:fs';
 import path from 'node:path';
 import { installedVersion } from '../adapters/installed-version';
 import type { Target } from '../adapters/target';
 import type { TargetDescriptor } from '../adapters/target-descriptor';
 import { configuredTarget } from './configured-target';
 import { noAdapterError } from './no-adapter-error';
+
+/** mathjs's package.json is 6 kB; one past this is not a library's and is not read into memory. */
+const MANIFEST_MAX_BYTES = 1_048_576;
 
 /** The complex.js a mathjs folder loads: Node looks in each folder's node_modules from the package up. */
 function complexJsBeside(folder: string): string {
@@ -30,6 +33,8 @@ export function packageFolderTargets(
 ): TargetDescriptor[] {
   const manifestFile = path.join(folder, 'package.json');
   if (!existsSync(manifestFile)) throw new Error(`${folder} has no package.json (a library's folder is needed)`);
+  if (statSync(manifestFile).size > MANIFEST_MAX_BYTES)
+    throw new Error(`${manifestFile} is over ${MANIFEST_MAX_BYTES} bytes; not a library's package.json`);
   let manifest: { name?: unknown; version?: unknown };
   try {
     manifest = JSON.parse(readFileSync(manifestFile, 'utf8')) as typeof manifest;

@@ -130,34 +130,26 @@ describe('resolveTargetSource', () => {
     NPM_SLOW,
   );
 
-  it(
-    'leaves nothing in the cache and gives npm’s reason when the registry answers 404',
-    async () => {
+  it.each([
+    ['answers 404', 'not-found', '/complex.js', /^npm install complex\.js@2\.3\.0 failed: code E404; 404 Not Found/],
+    [
+      'dies halfway through the tarball',
+      'die-mid-tarball',
+      '/complex.js/-/complex.js-2.3.0.tgz',
+      /^npm install complex\.js@2\.3\.0 failed: code ECONNRESET/,
+    ],
+  ] as const)(
+    'leaves nothing in the cache and gives npm’s reason when the registry %s',
+    async (_, mode, lastRequest, reason) => {
       const cacheDir = fresh('cache');
-      registry.mode = 'not-found';
+      registry.mode = mode;
       await expect(
         resolveTargetSource(
           { kind: 'npm', package: 'complex.js', version: '2.3.0', name: 'x' },
           { baseDir: dir, cacheDir },
         ),
-      ).rejects.toThrow(/^npm install complex\.js@2\.3\.0 failed: .*404/);
-      expect(readdirSync(path.join(cacheDir, 'npm'))).toEqual([]);
-    },
-    NPM_SLOW,
-  );
-
-  it(
-    'leaves nothing in the cache when the registry dies halfway through the tarball',
-    async () => {
-      const cacheDir = fresh('cache');
-      registry.mode = 'die-mid-tarball';
-      await expect(
-        resolveTargetSource(
-          { kind: 'npm', package: 'complex.js', version: '2.3.0', name: 'x' },
-          { baseDir: dir, cacheDir },
-        ),
-      ).rejects.toThrow(/^npm install complex\.js@2\.3\.0 failed: \S/);
-      expect(registry.requests).toContain('/complex.js/-/complex.js-2.3.0.tgz');
+      ).rejects.toThrow(reason);
+      expect(registry.requests.at(-1)).toBe(lastRequest);
       expect(readdirSync(path.join(cacheDir, 'npm'))).toEqual([]);
     },
     NPM_SLOW,
