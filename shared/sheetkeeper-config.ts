@@ -1,12 +1,7 @@
 import { z } from 'zod';
+import { MAX_CONFIGURED_TARGETS } from './max-configured-targets';
 import { textSchema } from './schemas/text-schema';
 import { targetSource } from './target-source';
-
-/**
- * The most target sources one project file names. A plan runs every suite against every target,
- * so a list past this is a mistake (or an attack on the cache folder), not a project.
- */
-const MAX_TARGETS = 64;
 
 /**
  * A project's `sheetkeeper.config.json` (docs/target-sources.md): the targets it names beside the
@@ -16,7 +11,7 @@ const MAX_TARGETS = 64;
  */
 export const sheetkeeperConfig = z.strictObject({
   $schema: textSchema().max(4096).optional(),
-  targets: z.array(targetSource).max(MAX_TARGETS, `may name at most ${MAX_TARGETS} targets`),
+  targets: z.array(targetSource).max(MAX_CONFIGURED_TARGETS, `may name at most ${MAX_CONFIGURED_TARGETS} targets`),
   cacheDir: textSchema()
     .min(1)
     .max(4096)

@@ -14,6 +14,9 @@ export interface CommandTargets {
   configured: TargetDescriptor[];
 }
 
+/** Sources resolved at once (npm installs and program descriptions run side by side, the rest waits). */
+const RESOLVING_AT_ONCE = 4;
+
 const sameTarget = (a: TargetDescriptor, b: TargetDescriptor): boolean =>
   a.name === b.name && JSON.stringify(a.settings) === JSON.stringify(b.settings);
 
@@ -32,9 +35,16 @@ export async function commandTargets(
 ): Promise<CommandTargets> {
   const { rest, sources, cacheDir } = readTargetSources(argv, options.cwd);
   const installed = discoverTargets();
-  const settled = await Promise.allSettled(
-    sources.map((s) => resolveTargetSource(s.source, { baseDir: s.baseDir, cacheDir })),
-  );
+  // A few at a time: each npm install is a process of its own, and 64 at once would swamp the machine.
+  const settled: PromiseSettledResult<TargetDescriptor[]>[] = [];
+  for (let i = 0; i < sources.length; i += RESOLVING_AT_ONCE)
+    settled.push(
+      ...(await Promise.allSettled(
+        sources
+          .slice(i, i + RESOLVING_AT_ONCE)
+          .map((s) => resolveTargetSource(s.source, { baseDir: s.baseDir, cacheDir })),
+      )),
+    );
   const failures = settled.flatMap((r, i) =>
     r.status === 'rejected'
       ? [`${sources[i]!.from}: ${r.reason instanceof Error ? r.reason.message : String(r.reason)}`]

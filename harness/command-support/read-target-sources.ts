@@ -1,5 +1,6 @@
 import { existsSync } from 'node:fs';
 import path from 'node:path';
+import { MAX_CONFIGURED_TARGETS } from '../../shared/max-configured-targets';
 import { targetSource } from '../../shared/target-source';
 import { defaultCacheDir } from '../sources/default-cache-dir';
 import { BadInput } from './bad-input';
@@ -83,6 +84,10 @@ export function readTargetSources(argv: readonly string[], cwd: string = process
       sources.push({ source: parsed.data, from: `${flag} ${text}`, baseDir: cwd, byFlag: true });
     }
   }
+  if (sources.length > MAX_CONFIGURED_TARGETS)
+    throw new BadInput(
+      `${sources.length} target sources given; a command takes at most ${MAX_CONFIGURED_TARGETS} (project file and flags together)`,
+    );
   const cacheFlag = given.filter((g) => g.flag === '--target-cache').at(-1);
   return {
     rest,
