@@ -59,6 +59,10 @@ describe('readTargetSources', () => {
     expect(() => readTargetSources(['--config', 'a.json', '--config=b.json'], cwd)).toThrow(
       '--config may be given once',
     );
+    const many = Array.from({ length: 65 }, (_, i) => `complex.js@2.0.${i}`).join(',');
+    expect(() => readTargetSources(['--npm', many], cwd)).toThrow(
+      '65 target sources given; a command takes at most 64 (project file and flags together)',
+    );
   });
 
   it('reads ./sheetkeeper.config.json when present and no --config is given, its targets before the flags’', () => {
