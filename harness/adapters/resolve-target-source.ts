@@ -17,16 +17,17 @@ export interface ResolveSourceOptions {
   baseDir: string;
   /** Where npm versions and unpacked tarballs are kept, one folder per package and version. */
   cacheDir: string;
+  /**
+   * The installed targets, when the caller has them already: discoverTargets() starts Python to
+   * read its versions (131 ms here), so a command resolving several sources reads them once.
+   */
+  installed?: readonly TargetDescriptor[];
 }
 
 /** Hex digits of a tarball's SHA-256 in its cache folder's name: 128 bits, no collision by chance. */
 const HASH_DIGITS = 32;
 
 const adapted = (name: string): boolean => (ADAPTED_LIBRARIES as readonly string[]).includes(name);
-
-/** The installed targets of one library version (discover-targets.ts). */
-const installedAs = (library: string, version: string): TargetDescriptor[] =>
-  discoverTargets().filter((t) => t.library === library && t.version === version);
 
 /**
  * The targets one target source names (shared/target-source.ts), each openable in a worker thread
@@ -42,11 +43,15 @@ export async function resolveTargetSource(
   source: TargetSource,
   options: ResolveSourceOptions,
 ): Promise<TargetDescriptor[]> {
+  let installed = options.installed;
+  /** The installed targets of one library version (discover-targets.ts), read at most once a call. */
+  const installedAs = (library: string, version: string): TargetDescriptor[] =>
+    (installed ??= discoverTargets()).filter((t) => t.library === library && t.version === version);
   const baseDir = path.resolve(options.baseDir);
   const cacheDir = path.resolve(options.cacheDir);
   if (source.kind === 'program') {
     const { name, library, version, entries } = await describeProgram(source, baseDir);
-    const taken = source.name === undefined && discoverTargets().some((t) => t.name === name);
+    const taken = source.name === undefined && (installed ??= discoverTargets()).some((t) => t.name === name);
     const identity = { name: taken ? `${name}+program` : name, library, version, ...(entries ? { entries } : {}) };
     return [configuredTarget({ kind: 'program', source, baseDir, identity })];
   }

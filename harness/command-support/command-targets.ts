@@ -42,7 +42,7 @@ export async function commandTargets(
       ...(await Promise.allSettled(
         sources
           .slice(i, i + RESOLVING_AT_ONCE)
-          .map((s) => resolveTargetSource(s.source, { baseDir: s.baseDir, cacheDir })),
+          .map((s) => resolveTargetSource(s.source, { baseDir: s.baseDir, cacheDir, installed })),
       )),
     );
   const failures = settled.flatMap((r, i) =>
