@@ -37,7 +37,8 @@ const adapted = (name: string): boolean => (ADAPTED_LIBRARIES as readonly string
  * the same name: the installed target answers. A `local` folder is loaded where it is; a packed
  * `.tgz` is installed into `cacheDir/tarballs/<sha-256>`. A local copy whose version is also
  * installed is named `<library>@<version>+local` unless it has a `name` (a program whose described
- * name is an installed target's, `<name>+program`), so both can run side by side. Rejects with an Error whose message names the source and what is wrong with it.
+ * name is an installed target's, `<name>+program`), so both can run side by side. Rejects with an
+ * Error whose message names the source and what is wrong with it.
  */
 export async function resolveTargetSource(
   source: TargetSource,
@@ -59,8 +60,8 @@ export async function resolveTargetSource(
     const spec = `${source.package}@${source.version}`;
     if (!adapted(source.package)) throw noAdapterError(source.package);
     if (source.name === undefined) {
-      const installed = installedAs(source.package, source.version);
-      if (installed.length > 0) return installed;
+      const release = installedAs(source.package, source.version);
+      if (release.length > 0) return release;
     }
     const folder = path.join(cacheDir, 'npm', spec);
     await installIntoCache(spec, folder);
