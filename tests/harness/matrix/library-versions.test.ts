@@ -1,3 +1,5 @@
+import path from 'node:path';
+import { commandTargets } from '../../../harness/command-support/command-targets';
 import { libraryVersions } from '../../../harness/matrix/library-versions';
 
 describe('libraryVersions', () => {
@@ -16,6 +18,24 @@ describe('libraryVersions', () => {
 
   it('finds nothing for a name with its version or an unknown library', () => {
     expect(libraryVersions('complex.js@2.4.3')).toEqual([]);
-    expect(libraryVersions('numpy')).toEqual([]);
+    // NumPy is a target since the stdio NumPy adapter, so the unknown library is one nobody adapts.
+    expect(libraryVersions('no-such-library')).toEqual([]);
+  });
+
+  it('puts a configured copy among the installed versions, after the release of its own version', async () => {
+    const { known } = await commandTargets([
+      '--local',
+      path.join(__dirname, '..', '..', '..', 'node_modules', 'complex.js-2.3.0'),
+    ]);
+    expect(libraryVersions('complex.js', known).map((d) => d.name)).toEqual([
+      'complex.js@2.0.11',
+      'complex.js@2.1.1',
+      'complex.js@2.2.5',
+      'complex.js@2.3.0',
+      'complex.js@2.3.0+local',
+      'complex.js@2.4.1',
+      'complex.js@2.4.2',
+      'complex.js@2.4.3',
+    ]);
   });
 });
