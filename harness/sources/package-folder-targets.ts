@@ -3,6 +3,7 @@ import path from 'node:path';
 import { installedVersion } from '../adapters/installed-version';
 import type { Target } from '../adapters/target';
 import type { TargetDescriptor } from '../adapters/target-descriptor';
+import { ADAPTED_LIBRARIES } from './adapted-libraries';
 import { configuredTarget } from './configured-target';
 import { noAdapterError } from './no-adapter-error';
 
@@ -44,6 +45,18 @@ export function packageFolderTargets(
   const { name: library, version } = manifest;
   if (typeof library !== 'string' || typeof version !== 'string')
     throw new Error(`${manifestFile} has no "name" and "version"`);
+  if ((ADAPTED_LIBRARIES as readonly string[]).includes(library)) {
+    // Found now, loaded on first use: a working copy whose build output is missing is named here,
+    // before a run, rather than as an error on every point.
+    try {
+      require.resolve(folder);
+    } catch (e) {
+      const why = (e instanceof Error ? e.message : String(e)).split('\n')[0];
+      throw new Error(
+        `${folder}: Node finds no file to load for ${library} ${version} (${why}); is the library built?`,
+      );
+    }
+  }
   if (library === 'complex.js')
     return [configuredTarget({ kind: 'complex.js', folder, version, name: nameFor(library, version), settings })];
   if (library === 'mathjs') {

@@ -182,6 +182,17 @@ describe('resolveTargetSource', () => {
     expect(readdirSync(options.cacheDir)).toEqual([]);
   });
 
+  it('refuses a working copy whose build output is missing, before any run', async () => {
+    const work = path.join(fresh('unbuilt'), 'complex.js');
+    cpSync(COMPLEX_JS_2_3_0, work, { recursive: true });
+    rmSync(path.join(work, 'dist'), { recursive: true });
+    await expect(
+      resolveTargetSource({ kind: 'local', path: work }, { baseDir: dir, cacheDir: fresh('cache') }),
+    ).rejects.toThrow(
+      /complex\.js: Node finds no file to load for complex\.js 2\.3\.0 \(.*\); is the library built\?$/,
+    );
+  });
+
   it(
     'installs a packed .tgz into the cache under its content hash and loads it from there',
     async () => {
