@@ -6,8 +6,6 @@
 // Targets: discovering the installed libraries, and the interfaces that open and evaluate them.
 export { discoverTargets } from './adapters/discover-targets';
 export { resolveTargetSource } from './adapters/resolve-target-source';
-// Where npm versions and tarballs are cached by default (SHEETKEEPER_CACHE_DIR, XDG), for the workers' own installs.
-export { defaultCacheDir } from './sources/default-cache-dir';
 export { findEntry } from './adapters/find-entry';
 export type { Target } from './adapters/target';
 export type { TargetDescriptor } from './adapters/target-descriptor';

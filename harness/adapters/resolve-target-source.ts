@@ -36,9 +36,10 @@ const adapted = (name: string): boolean => (ADAPTED_LIBRARIES as readonly string
  * it is a version installed with Sheetkeeper and no `name` is given, which is the same code under
  * the same name: the installed target answers. A `local` folder is loaded where it is; a packed
  * `.tgz` is installed into `cacheDir/tarballs/<sha-256>`. A local copy whose version is also
- * installed is named `<library>@<version>+local` unless it has a `name` (a program whose described
- * name is an installed target's, `<name>+program`), so both can run side by side. Rejects with an
- * Error whose message names the source and what is wrong with it.
+ * installed is named `<library>@<version>+local` unless it has a `name`, so the working copy and the
+ * release can run side by side (a program keeps the name it describes, `<library>@<version>`: one
+ * that clashes needs a `name`, which the caller asks for). Rejects with an Error whose message names
+ * the source and what is wrong with it.
  */
 export async function resolveTargetSource(
   source: TargetSource,
@@ -52,8 +53,7 @@ export async function resolveTargetSource(
   const cacheDir = path.resolve(options.cacheDir);
   if (source.kind === 'program') {
     const { name, library, version, entries } = await describeProgram(source, baseDir);
-    const taken = source.name === undefined && (installed ??= discoverTargets()).some((t) => t.name === name);
-    const identity = { name: taken ? `${name}+program` : name, library, version, ...(entries ? { entries } : {}) };
+    const identity = { name, library, version, ...(entries ? { entries } : {}) };
     return [configuredTarget({ kind: 'program', source, baseDir, identity })];
   }
   if (source.kind === 'npm') {

@@ -64,7 +64,7 @@ export async function commandTargets(
       const taken = known.find((t) => t.name === d.name);
       if (taken)
         throw new BadInput(
-          `${source.from}: the target name "${d.name}" is already ${taken.from ? `named by ${taken.from}` : 'an installed target'}; give this source a "name"`,
+          `${source.from}: the target name "${d.name}" is already ${taken.from ? `named by ${taken.from}` : 'an installed target'}; give this source a "name"${source.byFlag ? ' (in a project file: a flag cannot carry one)' : ''}`,
         );
       const marked = { ...d, from: source.from };
       configured.push(marked);

@@ -2,7 +2,7 @@ import { existsSync } from 'node:fs';
 import path from 'node:path';
 import { MAX_CONFIGURED_TARGETS } from '../../shared/max-configured-targets';
 import { targetSource } from '../../shared/target-source';
-import { defaultCacheDir } from '../sources/default-cache-dir';
+import { cacheDir as userCacheDir } from '../cache-dir';
 import { BadInput } from './bad-input';
 import type { ConfiguredSource } from './configured-source';
 import { issueField } from './issue-field';
@@ -20,7 +20,7 @@ export interface TargetSourceFlags {
   rest: string[];
   /** The project file's sources first, then the flags' in the order given. */
   sources: ConfiguredSource[];
-  /** Where npm versions and tarballs are cached: `--target-cache`, else the file's `cacheDir`, else defaultCacheDir(). */
+  /** Where npm versions and tarballs are cached: `--target-cache`, else the file's `cacheDir`, else the user's (harness/cache-dir.ts). */
   cacheDir: string;
 }
 
@@ -92,6 +92,6 @@ export function readTargetSources(argv: readonly string[], cwd: string = process
   return {
     rest,
     sources,
-    cacheDir: cacheFlag ? path.resolve(cwd, cacheFlag.value) : (config.cacheDir ?? defaultCacheDir()),
+    cacheDir: cacheFlag ? path.resolve(cwd, cacheFlag.value) : (config.cacheDir ?? userCacheDir()),
   };
 }

@@ -14,6 +14,8 @@ import { loadDemoSuite } from '../runner/support/load-demo-suite';
 const ROOT = path.join(__dirname, '..', '..', '..');
 /** The real complex.js 2.3.0 release, installed in this project under an alias; the fake registry serves it. */
 const COMPLEX_JS_2_3_0 = path.join(ROOT, 'node_modules', 'complex.js-2.3.0');
+/** Python's cmath adapter, run as a program source from the package root. */
+const CMATH_SCRIPT = 'harness/adapters/python/cmath_adapter.py';
 /** npm starts in ~0.5–1 s here and installs this package in ~1–2 s; a loaded machine takes several times that. */
 const NPM_SLOW = 60_000;
 
@@ -229,12 +231,13 @@ describe('resolveTargetSource', () => {
 
   it('describes a program source, opens it in process and again from its worker spec alone', async () => {
     const [target, ...others] = await resolveTargetSource(
-      { kind: 'program', command: ['/usr/bin/python3', 'harness/adapters/python/cmath_adapter.py'] },
+      { kind: 'program', command: ['/usr/bin/python3', CMATH_SCRIPT] },
       { baseDir: ROOT, cacheDir: dir },
     );
     expect(others).toEqual([]);
-    // Its described name is the installed cmath target's, so the program is told apart.
-    expect(target!.name).toMatch(/^cmath@\d+\.\d+\.\d+\+program$/);
+    // The name it describes, even where an installed target has it: the caller asks for a `name` then.
+    expect(target!.name).toMatch(/^cmath@\d+\.\d+\.\d+$/);
+    expect(target!.settings).toEqual({ protocol: 'stdio', command: `/usr/bin/python3 ${CMATH_SCRIPT}` });
     // ISO/IEC 9899:2011 G.6.4.2: csqrt(conj z) = conj csqrt z, so sqrt(−4 − 0i) = 0 − 2i; Python's cmath follows it.
     expect(await sqrtMinusFour(target!.open())).toEqual({ value: [0, -2] });
     const spec = target!.worker as { module: string; args: unknown[] };

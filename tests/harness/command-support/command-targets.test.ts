@@ -53,6 +53,17 @@ describe('commandTargets', () => {
     ).rejects.toThrow(
       `--local ${COMPLEX_JS_2_3_0}/: the target name "complex.js@2.3.0+local" is already named by --local ${COMPLEX_JS_2_3_0}; give this source a "name"`,
     );
+    // The cmath adapter by another command line describes itself by the installed cmath target's name.
+    await expect(
+      commandTargets(['--program', '/usr/bin/python3 -B harness/adapters/python/cmath_adapter.py'], { cwd: ROOT }),
+    ).rejects.toThrow(
+      /^--program \/usr\/bin\/python3 -B harness\/adapters\/python\/cmath_adapter\.py: the target name "cmath@[\d.]+" is already an installed target; give this source a "name" \(in a project file: a flag cannot carry one\)$/,
+    );
+    // By the installed target's own command line it is that target, and adds nothing.
+    const same = await commandTargets(['--program', '/usr/bin/python3 harness/adapters/python/cmath_adapter.py'], {
+      cwd: ROOT,
+    });
+    expect(same.configured).toEqual([]);
     await expect(commandTargets(['--local', 'nowhere'], { cwd: cwd() })).rejects.toThrow(
       /^--local nowhere: .*nowhere does not exist/,
     );

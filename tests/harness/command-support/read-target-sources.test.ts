@@ -83,14 +83,11 @@ describe('readTargetSources', () => {
     expect(readTargetSources(['--target-cache', '/tmp/x'], cwd).cacheDir).toBe('/tmp/x');
   });
 
-  it('caches under SHEETKEEPER_CACHE_DIR, else XDG_CACHE_HOME/sheetkeeper, else ~/.cache/sheetkeeper', () => {
+  it('caches under SHEETKEEPER_CACHE_DIR, else ~/.cache/sheetkeeper, when neither a flag nor a file says', () => {
     const cwd = at('plain');
     process.env.SHEETKEEPER_CACHE_DIR = '/srv/cache';
-    process.env.XDG_CACHE_HOME = '/xdg';
     expect(readTargetSources([], cwd).cacheDir).toBe('/srv/cache');
     delete process.env.SHEETKEEPER_CACHE_DIR;
-    expect(readTargetSources([], cwd).cacheDir).toBe('/xdg/sheetkeeper');
-    delete process.env.XDG_CACHE_HOME;
     expect(readTargetSources([], cwd).cacheDir).toMatch(/\/\.cache\/sheetkeeper$/);
   });
 });
