@@ -57,3 +57,4 @@ export { catalogue } from './reference/catalogue';
 export { formatHexDouble } from './checks/format-hex-double';
 export { parseDouble } from './reference/numbers/parse-double';
 export type { Rational } from './reference/numbers/rational';
+export { cacheDir } from './cache-dir';

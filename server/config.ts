@@ -2,6 +2,7 @@ import { randomBytes } from 'node:crypto';
 import { chmodSync, existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { clusterUrl } from './database/cluster-url';
+import { cacheDir } from '../harness';
 import { ownOrigins } from './http/own-origins';
 
 export const PROJECT_ROOT = path.resolve(__dirname, '..');
@@ -33,8 +34,9 @@ export interface ServerConfig {
   referenceCacheDir: string;
   /**
    * Where npm versions named by target sources are installed and tarballs unpacked, one folder per
-   * package and version (SHEETKEEPER_TARGET_CACHE, default `.data/target-cache`); each worker
-   * machine keeps its own.
+   * package and version: SHEETKEEPER_CACHE_DIR when set (the same folder the CLI and the C adapter's
+   * build use, harness/cache-dir.ts), else `.data/target-cache` beside the checkout; each worker
+   * machine, or each worker process given its own SHEETKEEPER_CACHE_DIR, keeps its own.
    */
   targetCacheDir: string;
   /** Origins whose pages may change data (SHEETKEEPER_ORIGINS, default the app URL and this address's loopback names). */
@@ -99,7 +101,7 @@ export function loadConfig(): ServerConfig {
     workers: Math.max(0, Number(process.env.SHEETKEEPER_WORKERS ?? 1) || 0),
     appUrl,
     referenceCacheDir: process.env.SHEETKEEPER_REFERENCE_CACHE ?? path.join(DATA_DIR, 'reference-cache'),
-    targetCacheDir: process.env.SHEETKEEPER_TARGET_CACHE ?? DEFAULT_TARGET_CACHE_DIR,
+    targetCacheDir: process.env.SHEETKEEPER_CACHE_DIR?.trim() ? cacheDir() : DEFAULT_TARGET_CACHE_DIR,
     allowedOrigins: ownOrigins(appUrl, port, process.env.SHEETKEEPER_ORIGINS),
     trustProxy: trustProxyFrom(process.env.SHEETKEEPER_TRUST_PROXY),
   };
