@@ -16,7 +16,7 @@ import { seedDemoCatalogue } from '../server/seed/seed-demo-catalogue';
 import { FakeSmtpServer } from '../server/mail/fake-smtp-server';
 import { MailOutbox } from '../server/mail/mail-outbox';
 import { openInstalledTarget } from '../server/targets/open-installed-target';
-import { PgBossShardQueue } from '../server/runs/pg-boss-shard-queue';
+import { SqlShardQueue } from '../server/runs/sql-shard-queue';
 import { RunService } from '../server/runs/run-service';
 import { ShardExecutor } from '../server/runs/shard-executor';
 import { syncTargets } from '../server/targets/sync-targets';
@@ -55,7 +55,7 @@ async function main(): Promise<void> {
   const dataSource = createDataSource(url);
   await dataSource.initialize();
   const smtp = new FakeSmtpServer(dataSource);
-  const queue = new PgBossShardQueue(url, { pollingIntervalSeconds: 0.5 });
+  const queue = new SqlShardQueue(url, { pollingIntervalMs: 500 });
   try {
     await dataSource.runMigrations({ transaction: 'each' });
     await seedDemo(dataSource);

@@ -25,6 +25,11 @@ export interface ServerConfig {
   fakeSmtp: boolean;
   /** Shard workers in the server process (SHEETKEEPER_WORKERS, default 1; `npm run worker` adds more). */
   workers: number;
+  /**
+   * Which of this machine's targets its shard workers take (SHEETKEEPER_WORKER_TARGETS: names or
+   * name prefixes, comma-separated; narrow-targets.ts), or null for all of them.
+   */
+  workerTargets: string[] | null;
   /** Base of links in mail (SHEETKEEPER_APP_URL, default the server's own address). */
   appUrl: string;
   /**
@@ -99,12 +104,25 @@ export function loadConfig(): ServerConfig {
     smtpPort: portFrom('SHEETKEEPER_SMTP_PORT', 8525),
     fakeSmtp: process.env.SHEETKEEPER_FAKE_SMTP !== '0',
     workers: Math.max(0, Number(process.env.SHEETKEEPER_WORKERS ?? 1) || 0),
+    workerTargets: workerTargetsFrom(process.env.SHEETKEEPER_WORKER_TARGETS),
     appUrl,
     referenceCacheDir: process.env.SHEETKEEPER_REFERENCE_CACHE ?? path.join(DATA_DIR, 'reference-cache'),
     targetCacheDir: process.env.SHEETKEEPER_CACHE_DIR?.trim() ? cacheDir() : DEFAULT_TARGET_CACHE_DIR,
     allowedOrigins: ownOrigins(appUrl, port, process.env.SHEETKEEPER_ORIGINS),
     trustProxy: trustProxyFrom(process.env.SHEETKEEPER_TRUST_PROXY),
   };
+}
+
+/** Unset: every target. Set: its comma-separated names or prefixes, of which there must be one. */
+function workerTargetsFrom(value: string | undefined): string[] | null {
+  if (value === undefined) return null;
+  const patterns = value
+    .split(',')
+    .map((p) => p.trim())
+    .filter((p) => p !== '');
+  if (patterns.length === 0)
+    throw new Error('SHEETKEEPER_WORKER_TARGETS names no target: give target names or name prefixes, comma-separated');
+  return patterns;
 }
 
 /** Express reads a number as a count of hops and a string as addresses or names ('loopback', '10.0.0.0/8'). */

@@ -20,6 +20,7 @@ import { Run } from './entities/run';
 import { Suite } from './entities/suite';
 import { SuiteVersion } from './entities/suite-version';
 import { User } from './entities/user';
+import { WorkerRow } from './entities/worker-row';
 import { DATABASE_CONNECT_TIMEOUT_MS } from './database/database-connect-timeout-ms';
 import { logPoolError } from './database/log-pool-error';
 import { RedactingQueryLogger } from './database/redacting-query-logger';
@@ -40,6 +41,7 @@ import { PropertyResults1764790000000 } from './migrations/1764790000000-propert
 import { RegressionGroups1764811100000 } from './migrations/1764811100000-regression-groups';
 import { FailureTableRowType1764800000000 } from './migrations/1764800000000-failure-table-row-type';
 import { OneActiveRunHeartbeatsMailOnce1764810000000 } from './migrations/1764810000000-one-active-run-heartbeats-mail-once';
+import { Workers1764920000000 } from './migrations/1764920000000-workers';
 
 /** Entities and migrations are listed, not globbed, so tsx, jest and tsc builds all find them. */
 export const ENTITIES = [
@@ -63,6 +65,7 @@ export const ENTITIES = [
   PropertyResult,
   RegressionGroup,
   TargetSourceRow,
+  WorkerRow,
 ];
 export const MIGRATIONS = [
   UsersSessionsSignInLimits1764626400000,
@@ -82,6 +85,7 @@ export const MIGRATIONS = [
   SuiteVersionTakenOverFrom1764887400000,
   FailureLabelsAndClasses1764900000000,
   TargetSources1764910000000,
+  Workers1764920000000,
 ];
 
 export function createDataSource(url: string): DataSource {

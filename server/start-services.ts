@@ -4,7 +4,10 @@ import { FakeSmtpServer } from './mail/fake-smtp-server';
 import { MailOutbox } from './mail/mail-outbox';
 import { availableTargetOpener } from './targets/available-target-opener';
 import { targetSourceOptions } from './targets/target-source-options';
-import { PgBossShardQueue } from './runs/pg-boss-shard-queue';
+import { SqlShardQueue } from './runs/sql-shard-queue';
+import { WorkerRegistration } from './runs/worker-registration';
+import { availableTargets } from './targets/available-targets';
+import { narrowTargets } from './targets/narrow-targets';
 import { requeueStaleShards } from './runs/requeue-stale-shards';
 import { ShardExecutor } from './runs/shard-executor';
 import { describeError } from './database/describe-error';
@@ -14,7 +17,9 @@ import { SHARD_LIVENESS } from './runs/shard-liveness';
 const MAIL_INTERVAL_MS = 5000;
 
 export interface RunningServices {
-  queue: PgBossShardQueue;
+  queue: SqlShardQueue;
+  /** This process as announced to the others; null without shard workers. */
+  worker: WorkerRegistration | null;
   outbox: MailOutbox;
   smtpPort: number;
   fakeSmtp: boolean;
@@ -23,7 +28,8 @@ export interface RunningServices {
 
 /**
  * What runs beside the HTTP server (and in `npm run worker`): the local mail store when asked
- * for, mail delivery, and `workers` shard workers on the pg-boss queue (0 for none).
+ * for, mail delivery, and `workers` shard workers (0 for none), which announce this process and
+ * take only the shards of the targets it has, narrowed by `config.workerTargets`.
  */
 export async function startServices(
   dataSource: DataSource,
@@ -33,7 +39,24 @@ export async function startServices(
   const smtp = config.fakeSmtp && options.deliverMail ? new FakeSmtpServer(dataSource, config.host) : null;
   const smtpPort = smtp ? await smtp.start(config.smtpPort) : config.smtpPort;
   const outbox = new MailOutbox(dataSource, { host: config.host, port: smtpPort });
-  const queue = new PgBossShardQueue(config.databaseUrl);
+  const worker =
+    options.workers > 0
+      ? await WorkerRegistration.start(dataSource, config.databaseUrl, {
+          findTargets: async () =>
+            narrowTargets(
+              (await availableTargets(dataSource)).map((t) => t.name),
+              config.workerTargets,
+            ),
+        })
+      : null;
+  if (worker) {
+    console.log(
+      worker.targets.length > 0
+        ? `[sheetkeeper] worker ${worker.label} takes shards of ${worker.targets.length} target(s): ${worker.targets.join(', ')}`
+        : `[sheetkeeper] worker ${worker.label} has none of the targets SHEETKEEPER_WORKER_TARGETS names (${config.workerTargets?.join(', ')}): it takes no shards`,
+    );
+  }
+  const queue = new SqlShardQueue(config.databaseUrl, worker ? { worker } : {});
   const executor = new ShardExecutor(dataSource, {
     // One opener per process: an added target is resolved once here, on the first shard that needs it.
     openTarget: availableTargetOpener(dataSource, targetSourceOptions(config.targetCacheDir)),
@@ -74,13 +97,16 @@ export async function startServices(
     : null;
   return {
     queue,
+    worker,
     outbox,
     smtpPort,
     fakeSmtp: smtp !== null,
     stop: async () => {
       if (mailTimer) clearInterval(mailTimer);
       if (sweepTimer) clearInterval(sweepTimer);
+      // Shards in hand first: while they finish, this worker still counts as having their targets.
       await queue.stop();
+      await worker?.stop();
       outbox.close();
       await smtp?.stop();
     },

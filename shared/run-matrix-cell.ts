@@ -15,6 +15,10 @@ export interface RunMatrixCell {
   byClass: ClassCounts | null;
   byDiagnosis: Partial<Record<DiagnosisKind, number>> | null;
   checked: CheckedScope | null;
+  /** The last worker that took the pair ("host:pid"), kept when it is taken again; null until one has. */
+  worker: string | null;
+  /** Queued, and no live worker has its target: it waits, for as long as it takes, until one that has it starts. */
+  noWorkerHasTarget: boolean;
   /** Shard-level errors: a target that hung or crashed, a suite that could not be evaluated. */
   errors: string[];
 }

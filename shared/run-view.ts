@@ -14,6 +14,8 @@ export interface RunView {
   /** Failing points by class: branch findings (wrong sheet, side, zero sign, jump…) apart from accuracy ones. */
   byClass: ClassCounts;
   regressions: number | null;
+  /** Targets of queued pairs that no live worker has: those pairs wait until a worker that has one starts. */
+  waitingFor: string[];
   requestedBy: string | null;
   createdAt: string;
   startedAt: string | null;

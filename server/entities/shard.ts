@@ -3,10 +3,12 @@ import type { DiagnosisKind } from '../../shared/diagnosis';
 import type { CheckedScope, ClassCounts, OutcomeCounts } from '../../shared/run-result';
 import { Run } from './run';
 import { SuiteVersion } from './suite-version';
+import { WorkerRow } from './worker-row';
 
 /** One suite version against one target within a run: the unit a worker takes, retried whole. */
 @Entity({ name: 'shards' })
 @Index('shards_run_idx', ['run'])
+@Index('shards_queued_target_idx', ['targetName'], { where: `status = 'queued'` })
 @Check('shards_status_known', "status IN ('queued', 'running', 'done', 'cancelled')")
 export class Shard {
   @PrimaryGeneratedColumn('uuid')
@@ -65,6 +67,11 @@ export class Shard {
   /** When a worker last took it; the worker's advisory lock says it is still alive (shard-liveness.ts). */
   @Column({ type: 'timestamptz', name: 'claimed_at', nullable: true })
   claimedAt!: Date | null;
+
+  /** The last worker that took it (kept when it is queued again): shown beside the pair on the run page. */
+  @ManyToOne(() => WorkerRow, { nullable: true, onDelete: 'SET NULL' })
+  @JoinColumn({ name: 'worker_id', foreignKeyConstraintName: 'FK_shards_worker' })
+  worker!: WorkerRow | null;
 
   @Column({ type: 'timestamptz', name: 'finished_at', nullable: true })
   finishedAt!: Date | null;

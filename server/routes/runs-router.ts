@@ -8,6 +8,7 @@ import { runBody } from '../../shared/schemas/run-body';
 import { runListQuery } from '../../shared/schemas/run-list-query';
 import { declareRoute } from '../http/declare-route';
 import type { RunService } from '../runs/run-service';
+import { noWorkerHasTargetSql } from '../sql/no-worker-has-target-sql';
 
 /** Runs: everyone reads them and their matrix; maintainers (and admins) start and cancel them. */
 export function runsRouter(dataSource: DataSource, runs: RunService): Router {
@@ -78,13 +79,13 @@ export function runsRouter(dataSource: DataSource, runs: RunService): Router {
       res.json({ run: await runs.cancel(params.id) });
     },
   );
-  /** Suite × target → counts, with what each pair checked. */
+  /** Suite × target → counts, with what each pair checked, the worker that ran it, and whether it waits for one. */
   declareRoute(
     router,
     'get',
     '/:id/matrix',
     {
-      summary: 'A run as suite × target cells with their counts and what each pair checked',
+      summary: 'A run as suite × target cells with their counts, what each pair checked, its worker and whether it waits for one',
       access: ROLES,
       params: idParams,
       responses: { 200: 'The cells (`cells`).', ...noRun },
@@ -92,8 +93,10 @@ export function runsRouter(dataSource: DataSource, runs: RunService): Router {
     async (_req, res, { params: { id } }) => {
       await runs.get(id);
       const cells: RunMatrixCell[] = await dataSource.query(
-        `SELECT suite_slug AS "suite", target_name AS "target", status, outcome, counts, by_class AS "byClass", by_diagnosis AS "byDiagnosis", checked, errors
-         FROM shards WHERE run_id = $1 ORDER BY suite_slug, target_name`,
+        `SELECT s.suite_slug AS "suite", s.target_name AS "target", s.status, s.outcome, s.counts, s.by_class AS "byClass",
+                s.by_diagnosis AS "byDiagnosis", s.checked, s.errors, w.label AS "worker", ${noWorkerHasTargetSql('s')} AS "noWorkerHasTarget"
+           FROM shards s LEFT JOIN workers w ON w.id = s.worker_id
+          WHERE s.run_id = $1 ORDER BY s.suite_slug, s.target_name`,
         [id],
       );
       res.json({ cells });

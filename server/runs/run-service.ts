@@ -10,6 +10,7 @@ import type { User } from '../entities/user';
 import { HttpError } from '../http/http-error';
 import type { ShardQueue } from './shard-queue';
 import { toRunView } from '../views/to-run-view';
+import { waitingTargets } from './waiting-targets';
 
 const RUN_RELATIONS = { plan: true, requestedBy: true } as const;
 
@@ -107,7 +108,7 @@ export class RunService {
   async get(id: string): Promise<RunView> {
     const run = await this.dataSource.getRepository(Run).findOne({ where: { id }, relations: RUN_RELATIONS });
     if (!run) throw new HttpError(404, { kind: 'not-found', message: 'No run with that id.' });
-    return toRunView(run);
+    return toRunView(run, (await waitingTargets(this.dataSource, [run])).get(run.id) ?? []);
   }
 
   /**
@@ -135,7 +136,11 @@ export class RunService {
     }
     const rows = await qb.getMany();
     const page = rows.slice(0, limit);
-    return { runs: page.map(toRunView), next: rows.length > limit ? page[page.length - 1]!.id : null };
+    const waiting = await waitingTargets(this.dataSource, page);
+    return {
+      runs: page.map((r) => toRunView(r, waiting.get(r.id) ?? [])),
+      next: rows.length > limit ? page[page.length - 1]!.id : null,
+    };
   }
 
   /** Cancels a queued or running run: shards not yet done are skipped; a shard in flight stops at its next path. */

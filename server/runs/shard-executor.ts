@@ -81,8 +81,9 @@ export class ShardExecutor {
   private async claimAndRun(shard: Shard): Promise<void> {
     const shardId = shard.id;
     // Conditional: a shard finished by another worker since it was read must not turn running again.
+    // A shard the queue claimed for this worker is running already and counted as an attempt there.
     const [claimed] = await this.dataSource.query(
-      `UPDATE shards SET status = 'running', attempts = attempts + 1, claimed_at = clock_timestamp()
+      `UPDATE shards SET status = 'running', attempts = attempts + (status = 'queued')::int, claimed_at = clock_timestamp()
         WHERE id = $1 AND status IN ('queued', 'running') RETURNING id`,
       [shardId],
     );

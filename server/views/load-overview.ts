@@ -8,6 +8,7 @@ import { coveredByDeviationSql } from '../sql/covered-by-deviation-sql';
 import { targetKeySql } from '../sql/target-key-sql';
 import type { OverviewMemo } from './overview-memo';
 import { toRunView } from './to-run-view';
+import { waitingTargets } from '../runs/waiting-targets';
 
 const RUN_RELATIONS = { plan: true, requestedBy: true } as const;
 
@@ -111,6 +112,7 @@ async function loadRuns(dataSource: DataSource): Promise<Pick<OverviewView, 'pla
     order: { createdAt: 'DESC' },
     take: IN_PROGRESS_LIMIT,
   });
+  const waiting = await waitingTargets(dataSource, inProgress);
 
   return {
     plans: plans.map((p) => {
@@ -119,7 +121,8 @@ async function loadRuns(dataSource: DataSource): Promise<Pick<OverviewView, 'pla
       return {
         planId: p.id,
         planName: p.name,
-        latest: latest ? toRunView(latest) : null,
+        // A finished run's pairs wait for nothing.
+        latest: latest ? toRunView(latest, []) : null,
         previous: previous
           ? {
               id: previous.id,
@@ -129,7 +132,7 @@ async function loadRuns(dataSource: DataSource): Promise<Pick<OverviewView, 'pla
           : null,
       };
     }),
-    inProgress: inProgress.map(toRunView),
+    inProgress: inProgress.map((r) => toRunView(r, waiting.get(r.id) ?? [])),
   };
 }
 

@@ -1,8 +1,8 @@
 import type { RunView } from '../../shared/run-view';
 import type { Run } from '../entities/run';
 
-/** `plan` and `requestedBy` must be loaded. */
-export function toRunView(run: Run): RunView {
+/** `plan` and `requestedBy` must be loaded; `waitingFor` comes from waiting-targets.ts. */
+export function toRunView(run: Run, waitingFor: string[]): RunView {
   return {
     id: run.id,
     planId: run.plan?.id ?? null,
@@ -14,6 +14,7 @@ export function toRunView(run: Run): RunView {
     counts: run.counts,
     byClass: run.byClass,
     regressions: run.regressions,
+    waitingFor,
     requestedBy: run.requestedBy?.displayName ?? null,
     createdAt: run.createdAt.toISOString(),
     startedAt: run.startedAt?.toISOString() ?? null,

@@ -28,6 +28,8 @@ const cell = (suite: string, done: boolean): RunMatrixCell => ({
   byDiagnosis: done ? { 'zero-sign': 2 } : null,
   checked: null,
   errors: [],
+  worker: done ? 'build-7:4121' : null,
+  noWorkerHasTarget: false,
 });
 
 function wrapper({ children }: { children: ReactNode }) {

@@ -12,6 +12,7 @@ export const RUNNING_RUN: RunView = {
   counts: { pass: 100, fail: 0, error: 0, skipped: 0, notApplicable: 0 },
   byClass: { branch: 0, accuracy: 0 },
   regressions: null,
+  waitingFor: [],
   requestedBy: 'Kwame Asante',
   createdAt: '2026-03-01T02:30:00Z',
   startedAt: '2026-03-01T02:30:01Z',

@@ -30,6 +30,7 @@ const run = (over: Partial<RunView>): RunView => ({
   counts: { pass: 480, fail: 7, error: 0, skipped: 0, notApplicable: 0 },
   byClass: { branch: 2, accuracy: 5 },
   regressions: 5,
+  waitingFor: [],
   requestedBy: null,
   createdAt: hoursAgo(3),
   startedAt: hoursAgo(3),

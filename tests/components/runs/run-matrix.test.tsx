@@ -25,6 +25,8 @@ const cell = (over: Partial<RunMatrixCell>): RunMatrixCell => ({
   byDiagnosis: {},
   checked: scope,
   errors: [],
+  worker: null,
+  noWorkerHasTarget: false,
   ...over,
 });
 

@@ -27,6 +27,7 @@ const run = (n: number, over: Partial<RunView> = {}): RunView => ({
   counts: { pass: 480, fail: 3, error: 0, skipped: 0, notApplicable: 0 },
   byClass: { branch: 3, accuracy: 0 },
   regressions: 2,
+  waitingFor: [],
   requestedBy: null,
   createdAt: '2026-03-01T02:30:00Z',
   startedAt: '2026-03-01T02:30:00Z',

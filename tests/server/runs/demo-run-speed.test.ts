@@ -1,6 +1,6 @@
 import { User } from '../../../server/entities/user';
 import type { MailOutbox } from '../../../server/mail/mail-outbox';
-import { PgBossShardQueue } from '../../../server/runs/pg-boss-shard-queue';
+import { SqlShardQueue } from '../../../server/runs/sql-shard-queue';
 import { RunService } from '../../../server/runs/run-service';
 import { ShardExecutor } from '../../../server/runs/shard-executor';
 import { seedDemoCatalogue } from '../../../server/seed/seed-demo-catalogue';
@@ -19,7 +19,7 @@ const bench = process.env.SHEETKEEPER_BENCH ? describe : describe.skip;
 
 bench('the demo "complex.js nightly" run on one worker', () => {
   let db: TestDatabase;
-  let queue: PgBossShardQueue;
+  let queue: SqlShardQueue;
   let runs: RunService;
   let planId: string;
 
@@ -27,7 +27,7 @@ bench('the demo "complex.js nightly" run on one worker', () => {
     db = await createTestDatabase();
     await seedDemoCatalogue(db.dataSource);
     [{ id: planId }] = await db.dataSource.query(`SELECT id FROM plans WHERE name = 'complex.js nightly'`);
-    queue = new PgBossShardQueue(db.url);
+    queue = new SqlShardQueue(db.url);
     const executor = new ShardExecutor(db.dataSource, {
       openTarget: openInstalledTarget,
       outbox: { enqueue: async () => null } as unknown as MailOutbox,

@@ -4,7 +4,7 @@ import { ReceivedMail } from '../../../server/entities/received-mail';
 import { User } from '../../../server/entities/user';
 import { FakeSmtpServer } from '../../../server/mail/fake-smtp-server';
 import { MailOutbox } from '../../../server/mail/mail-outbox';
-import { PgBossShardQueue } from '../../../server/runs/pg-boss-shard-queue';
+import { SqlShardQueue } from '../../../server/runs/sql-shard-queue';
 import { PlanService } from '../../../server/plans/plan-service';
 import { markRegressions } from '../../../server/runs/mark-regressions';
 import { RunService } from '../../../server/runs/run-service';
@@ -38,7 +38,7 @@ describe('a plan run through the queue, with regressions and their mail', () => 
   let db: TestDatabase;
   let smtp: FakeSmtpServer;
   let outbox: MailOutbox;
-  let queue: PgBossShardQueue;
+  let queue: SqlShardQueue;
   let runs: RunService;
   let planId: string;
   let kwame: User;
@@ -69,7 +69,7 @@ describe('a plan run through the queue, with regressions and their mail', () => 
     kwame = await db.dataSource.getRepository(User).findOneByOrFail({ email: 'kwame@sheetkeeper.test' });
     const plan = await savePlan('fakelib@1', null);
     planId = plan.id;
-    queue = new PgBossShardQueue(db.url, { pollingIntervalSeconds: 0.5 });
+    queue = new SqlShardQueue(db.url, { pollingIntervalMs: 500 });
     const executor = new ShardExecutor(db.dataSource, {
       openTarget: (name) => (name.startsWith('fakelib@') ? fakeLibrary(name.endsWith('2') ? '2' : '1') : null),
       outbox,

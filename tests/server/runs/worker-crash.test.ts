@@ -1,7 +1,7 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import path from 'node:path';
 import { User } from '../../../server/entities/user';
-import { PgBossShardQueue } from '../../../server/runs/pg-boss-shard-queue';
+import { SqlShardQueue } from '../../../server/runs/sql-shard-queue';
 import { PlanService } from '../../../server/plans/plan-service';
 import { RunService } from '../../../server/runs/run-service';
 import { SuiteService } from '../../../server/suites/suite-service';
@@ -40,7 +40,7 @@ async function until<T>(what: string, probe: () => Promise<T | null | false>, ti
 
 describe('a worker killed mid-shard', () => {
   let db: TestDatabase;
-  let queue: PgBossShardQueue;
+  let queue: SqlShardQueue;
   let planId: string;
   const workers: ChildProcess[] = [];
 
@@ -79,8 +79,8 @@ describe('a worker killed mid-shard', () => {
       },
       null,
     );
-    // pg-boss's own settings (a 600 s expiry): only the shard's stale heartbeat can bring it back in time.
-    queue = new PgBossShardQueue(db.url);
+    // No expiry at all now: only the shard's lost advisory lock can bring it back (requeue-stale-shards.ts).
+    queue = new SqlShardQueue(db.url);
     planId = plan.id;
   }, 60_000);
 
