@@ -27,6 +27,7 @@ import { targetSourcesRouter } from './routes/target-sources-router';
 import { TargetSourceResolver } from './targets/target-source-resolver';
 import { targetSourceOptions } from './targets/target-source-options';
 import { usersRouter } from './routes/users-router';
+import { workersRouter } from './routes/workers-router';
 import { configurePassport } from './auth/configure-passport';
 import { createPgPool } from './database/create-pg-pool';
 import { LibraryFindings } from './findings/library-findings';
@@ -155,6 +156,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   api.use('/tokens', tokensRouter(options.dataSource));
   api.use('/subscriptions', subscriptionsRouter(options.dataSource));
   api.use('/overview', overviewRouter(options.dataSource, overviewMemo));
+  api.use('/workers', workersRouter(options.dataSource));
   api.use('/openapi.json', openApiRouter(SESSION_COOKIE));
   api.use((_req, res) => {
     res.status(404).json({ kind: 'not-found', message: 'No such API route.' } satisfies ApiError);

@@ -203,6 +203,7 @@ const ROUTES: RouteCase[] = [
     expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 },
   },
   { name: 'GET /api/targets', call: (a) => a.get('/api/targets'), expect: signedIn(200) },
+  { name: 'GET /api/workers', call: (a) => a.get('/api/workers'), expect: signedIn(200) },
   {
     name: 'GET /api/targets/:name/fingerprint',
     call: (a) => a.get(`/api/targets/${encodeURIComponent(targetName)}/fingerprint?fn=sqrt`),
