@@ -5,12 +5,13 @@ import { DIAGNOSIS_KINDS } from '../../shared/diagnosis-kinds';
 import type { RunMatrixCell } from '../../shared/run-matrix-cell';
 import { OUTCOME_GLYPH } from './outcome-glyph';
 import type { Tone } from './outcome-tone';
+import { waitingForWorkerWords } from './waiting-for-worker-words';
 
 export interface MatrixCellWords {
   tone: Tone;
   /** The first line, glyph first: "✓ 120", "❌ 42 · 2 branch · 40 accuracy", "◊ error". */
   headline: string;
-  /** Further lines: other diagnoses, passes beside failures, skips, "nothing was checked", the first error. */
+  /** Further lines: other diagnoses, passes beside failures, skips, "nothing was checked", the first error, the worker. */
   details: string[];
   /** Everything above as one sentence for a screen reader. */
   label: string;
@@ -27,13 +28,25 @@ const n = (x: number) => x.toLocaleString('en-GB');
  */
 export function describeMatrixCell(cell: RunMatrixCell): MatrixCellWords {
   const pair = `${cell.suite} on ${cell.target}`;
+  if (cell.status === 'queued' && cell.noWorkerHasTarget) {
+    const why = waitingForWorkerWords([cell.target]);
+    return {
+      tone: 'live',
+      headline: '… waiting for a worker',
+      details: [why],
+      label: `${pair}: ${why}`,
+      hasRows: false,
+    };
+  }
   if (cell.status === 'queued' || cell.status === 'running') {
     const word = cell.status === 'queued' ? 'queued' : 'running';
+    // A queued pair that has a worker was taken before by one that died: it is queued again.
+    const who = cell.worker ? [cell.status === 'queued' ? `last taken by ${cell.worker}` : `on ${cell.worker}`] : [];
     return {
       tone: 'live',
       headline: `${cell.status === 'queued' ? '…' : '↻'} ${word}`,
-      details: [],
-      label: `${pair}: ${word}`,
+      details: who,
+      label: [`${pair}: ${word}`, ...who].join(', '),
       hasRows: false,
     };
   }
@@ -117,6 +130,10 @@ export function describeMatrixCell(cell: RunMatrixCell): MatrixCellWords {
   }
   const firstError = cell.errors[0];
   if (firstError) details.push(firstError);
+  if (cell.worker) {
+    details.push(`ran on ${cell.worker}`);
+    said.push(`ran on ${cell.worker}`);
+  }
   return {
     tone,
     headline,

@@ -12,6 +12,7 @@ import { SkText } from '../ui/sk-text';
 import { CheckedScopeNote } from './checked-scope-note';
 import { PropertyChecks } from './property-checks';
 import { QueryState } from '../ui/query-state';
+import { LiveWorkersNote } from './live-workers-note';
 import { RunHeader } from './run-header';
 import { RunMatrix } from './run-matrix';
 import { ScreenBody } from '../ui/screen-body';
@@ -69,6 +70,7 @@ export function RunDetail({ id, openedExisting = false }: { id: string; openedEx
         </SkText>
       ) : null}
       <RunHeader run={run.data} canCancel={me?.role === 'maintainer' || me?.role === 'admin'} />
+      {live ? <LiveWorkersNote live={live} /> : null}
       {matrix.data ? (
         <CheckedScopeNote scopes={scopes} pairsNotChecked={notChecked} properties={propertySummary} subject="matrix" />
       ) : null}

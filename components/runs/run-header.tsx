@@ -10,6 +10,7 @@ import { ProgressBar } from './progress-bar';
 import { runDuration } from './run-duration';
 import { RunStatusBadge } from './run-status-badge';
 import { triggerWords } from './trigger-words';
+import { waitingForWorkerWords } from './waiting-for-worker-words';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
 /** The top of a run: its status, who started it and when, how long, its point counts, and progress and cancel while it is live. */
@@ -48,6 +49,11 @@ export function RunHeader({ run, canCancel }: { run: RunView; canCancel: boolean
           <ProgressBar done={run.shardsDone} total={run.shardsTotal} />
         </View>
       ) : null}
+      {live && run.waitingFor.length > 0 ? (
+        <SkText variant="body" style={styles.waiting} accessibilityRole="alert" testID="run-waiting-for-worker">
+          {waitingForWorkerWords(run.waitingFor)}
+        </SkText>
+      ) : null}
       <OutcomeCounts counts={run.counts} byClass={run.byClass} all />
       {live && canCancel ? <CancelRunButton runId={run.id} /> : null}
     </View>
@@ -63,4 +69,5 @@ const styles = StyleSheet.create({
   fact: { flexBasis: 150, flexGrow: 1, gap: 2 },
   label: { textTransform: 'uppercase', letterSpacing: 0.8 },
   danger: { color: theme.color.danger, fontFamily: theme.font.medium },
+  waiting: { fontFamily: theme.font.medium },
 });
