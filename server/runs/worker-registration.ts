@@ -10,6 +10,8 @@ export interface WorkerRegistrationOptions {
   findTargets: () => Promise<string[]>;
   /** Shown on the run page beside each pair this worker ran; "host:pid" by default. */
   label?: string;
+  /** WORKER_LIVENESS.heartbeatMs unless a test needs beats sooner. */
+  heartbeatMs?: number;
 }
 
 /**
@@ -49,7 +51,10 @@ export class WorkerRegistration {
     );
     const registration = new WorkerRegistration(dataSource, connectionString, options, row!.id, label, targets);
     await registration.holdLock();
-    registration.timer = setInterval(() => void registration.beat(), WORKER_LIVENESS.heartbeatMs);
+    registration.timer = setInterval(
+      () => void registration.beat(),
+      options.heartbeatMs ?? WORKER_LIVENESS.heartbeatMs,
+    );
     registration.timer.unref();
     return registration;
   }
