@@ -48,7 +48,7 @@ export interface AppOptions {
   /** The exported web app; when missing, only the API is served. */
   webDir?: string;
   signInLimits?: SignInLimits;
-  /** Where the shards of a started run go (pg-boss in the server). */
+  /** Where the shards of a started run go (the shards table in the server, sql-shard-queue.ts). */
   shardQueue: ShardQueue;
   /** The runs' reference values on disk, read by the case pictures (config.referenceCacheDir). */
   referenceCacheDir?: string | null;

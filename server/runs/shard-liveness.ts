@@ -9,6 +9,7 @@
  * for its whole evaluation (the crash test's asin suite with a 50 × 50 grid: 2.7 s measured, one
  * gap of 2.7 s in a 20 ms interval timer), and a shard may rightly run up to its 120 s time limit,
  * so a timer's beats could not tell a busy worker from a dead one without waiting minutes. The
- * pg-boss expiry (600 s) stays as the last resort: issue 11 saw "running 49/50" for 10 min 25 s.
+ * lock is the only way back since the queue left pg-boss (sql-shard-queue.ts), whose 600 s job
+ * expiry was the last resort before: issue 11 saw "running 49/50" for 10 min 25 s.
  */
 export const SHARD_LIVENESS = { lockClass: 7341, sweepMs: 2000, claimGraceMs: 2000 } as const;

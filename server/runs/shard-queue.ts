@@ -1,4 +1,4 @@
-/** Where shards wait for a worker. The server uses pg-boss; anything with these two calls will do. */
+/** Where shards wait for a worker. The server uses the shards table itself (sql-shard-queue.ts); anything with these calls will do. */
 export interface ShardQueue {
   enqueue(shardIds: string[]): Promise<void>;
   /** Takes shards one at a time and runs `handle` on each until `stop`. */

@@ -18,8 +18,7 @@ import { unrefDelay } from './unref-delay';
  * The largest demo slice takes under 2 s cold (bench:harness); the slowest demo suite as one
  * server shard, values and property checks with no cached reference values, took 10.8 s against
  * complex.js 2.4.3 (pow-complex-principal-ccw; the next, acos-principal-ccw, 4.2 s). The server
- * used to allow 300 s: a hung target now frees its queue worker after 2 minutes, well inside
- * pg-boss's 600 s job expiry.
+ * used to allow 300 s: a hung target now frees its queue worker after 2 minutes.
  */
 export const DEFAULT_TIME_LIMIT_MS = 120_000;
 /** After stopping an evaluation, how long to wait for its target to close and its work to wind down. */
