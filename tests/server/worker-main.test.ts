@@ -11,6 +11,7 @@ import type { WorkerView } from '../../shared/worker-view';
 import { approvedSuite } from '../setup/approved-suite';
 import { signInAs } from '../setup/sign-in-as';
 import { startTestApp, type TestApp } from '../setup/test-app';
+import { until } from '../setup/until';
 
 const ROOT = path.join(__dirname, '..', '..');
 const SUITES = ['machines-sqrt', 'machines-log'];
@@ -24,16 +25,6 @@ const LATE = 'complex.js@2.3.0';
  * on the shared 2-core machine; the limit leaves room for a loaded one and still stops a hang.
  */
 const TEST_LIMIT_MS = 60_000;
-
-async function until<T>(what: string, probe: () => Promise<T | null | false>, timeoutMs: number): Promise<T> {
-  const end = Date.now() + timeoutMs;
-  while (Date.now() < end) {
-    const got = await probe();
-    if (got) return got;
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  throw new Error(`waited ${timeoutMs} ms for ${what}`);
-}
 
 describe('workers on separate machines, each with its own targets and caches', () => {
   let t: TestApp;

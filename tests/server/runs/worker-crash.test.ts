@@ -8,6 +8,7 @@ import { SuiteService } from '../../../server/suites/suite-service';
 import { validateSuite } from '../../../shared/validate-suite';
 import { demoSuiteBody } from '../../setup/demo-suite-body';
 import { createTestDatabase, type TestDatabase } from '../../setup/test-database';
+import { until } from '../../setup/until';
 
 const ROOT = path.join(__dirname, '..', '..', '..');
 const DEMO = [
@@ -26,16 +27,6 @@ function startWorker(db: TestDatabase): ChildProcess {
     env: { ...process.env, DATABASE_URL: db.url, SHEETKEEPER_FAKE_SMTP: '0', SHEETKEEPER_WORKERS: '1' },
     stdio: 'ignore',
   });
-}
-
-async function until<T>(what: string, probe: () => Promise<T | null | false>, timeoutMs: number): Promise<T> {
-  const end = Date.now() + timeoutMs;
-  while (Date.now() < end) {
-    const got = await probe();
-    if (got) return got;
-    await new Promise((r) => setTimeout(r, 50));
-  }
-  throw new Error(`waited ${timeoutMs} ms for ${what}`);
 }
 
 describe('a worker killed mid-shard', () => {
