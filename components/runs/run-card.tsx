@@ -10,9 +10,10 @@ import { runDuration } from './run-duration';
 import { RunStatusBadge } from './run-status-badge';
 import { runVerdict } from './run-verdict';
 import { triggerWords } from './trigger-words';
+import { waitingForWorkerWords } from './waiting-for-worker-words';
 import { LinkCard } from '../ui/link-card';
 
-/** One run as a card (phones, and the Overview): plan, status, who and when, counts; progress while live. Opens the run. */
+/** One run as a card (phones, and the Overview): plan, status, who and when, counts; progress while live, and pairs waiting for a worker. Opens the run. */
 export function RunCard({ run, now }: { run: RunView; now?: number }) {
   const live = isLiveRun(run);
   return (
@@ -34,6 +35,11 @@ export function RunCard({ run, now }: { run: RunView; now?: number }) {
         {triggerWords(run.trigger, run.requestedBy)} · {formatWhen(run.createdAt, now)} · {runDuration(run, now)}
       </SkText>
       {live ? <ProgressBar done={run.shardsDone} total={run.shardsTotal} /> : null}
+      {live && run.waitingFor.length > 0 ? (
+        <SkText variant="caption" testID={`run-${run.id}-waiting`}>
+          {waitingForWorkerWords(run.waitingFor)}
+        </SkText>
+      ) : null}
       <OutcomeCounts counts={run.counts} byClass={run.byClass} compact />
       {run.regressions ? (
         <SkText variant="smallLabel" tone="danger">
