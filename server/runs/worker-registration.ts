@@ -6,12 +6,13 @@ import { describeError } from '../database/describe-error';
 import { WORKER_LIVENESS } from './worker-liveness';
 
 export interface WorkerRegistrationOptions {
-  /** The target names this process takes; asked again on every beat, so a target added meanwhile is announced. */
+  /** The target names this process takes; asked again every `targetsRefreshMs`, so a target added meanwhile is announced. */
   findTargets: () => Promise<string[]>;
   /** Shown on the run page beside each pair this worker ran; "host:pid" by default. */
   label?: string;
-  /** WORKER_LIVENESS.heartbeatMs unless a test needs beats sooner. */
+  /** WORKER_LIVENESS.heartbeatMs and .targetsRefreshMs unless a test needs them sooner. */
   heartbeatMs?: number;
+  targetsRefreshMs?: number;
 }
 
 /**
@@ -23,6 +24,7 @@ export class WorkerRegistration {
   private timer: NodeJS.Timeout | null = null;
   private lockClient: pg.Client | null = null;
   private beating = false;
+  private targetsFoundAt = performance.now();
 
   private constructor(
     private readonly dataSource: DataSource,
@@ -33,7 +35,7 @@ export class WorkerRegistration {
     private current: string[],
   ) {}
 
-  /** The target names announced at the last beat. */
+  /** The target names announced last. */
   get targets(): readonly string[] {
     return this.current;
   }
@@ -90,7 +92,13 @@ export class WorkerRegistration {
     if (this.beating) return;
     this.beating = true;
     try {
-      this.current = await this.options.findTargets();
+      if (
+        performance.now() - this.targetsFoundAt >=
+        (this.options.targetsRefreshMs ?? WORKER_LIVENESS.targetsRefreshMs)
+      ) {
+        this.current = await this.options.findTargets();
+        this.targetsFoundAt = performance.now();
+      }
       await this.dataSource.query(`UPDATE workers SET heartbeat_at = now(), targets = $2 WHERE id = $1`, [
         this.id,
         this.current,

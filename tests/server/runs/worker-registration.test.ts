@@ -54,11 +54,12 @@ describe('WorkerRegistration', () => {
     expect((await row(fresh.id)).live).toBe(true);
   });
 
-  it('announces a target found after it started at its next beat, and beats', async () => {
+  it('announces a target found after it started once it looks for targets again, and beats', async () => {
     let found = ['complex.js@2.4.3'];
     const worker = await WorkerRegistration.start(db.dataSource, db.url, {
       findTargets: async () => found,
       heartbeatMs: 50,
+      targetsRefreshMs: 100,
     });
     try {
       expect(worker.label).toMatch(/^.+:\d+$/);
