@@ -53,7 +53,9 @@ export async function startServices(
     console.log(
       worker.targets.length > 0
         ? `[sheetkeeper] worker ${worker.label} takes shards of ${worker.targets.length} target(s): ${worker.targets.join(', ')}`
-        : `[sheetkeeper] worker ${worker.label} has none of the targets SHEETKEEPER_WORKER_TARGETS names (${config.workerTargets?.join(', ')}): it takes no shards`,
+        : config.workerTargets
+          ? `[sheetkeeper] worker ${worker.label} has none of the targets SHEETKEEPER_WORKER_TARGETS names (${config.workerTargets.join(', ')}): it takes no shards`
+          : `[sheetkeeper] worker ${worker.label} finds no target on this machine: it takes no shards`,
     );
   }
   const queue = new SqlShardQueue(config.databaseUrl, worker ? { worker } : {});
