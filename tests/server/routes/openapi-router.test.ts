@@ -148,6 +148,8 @@ describe('GET /api/openapi.json', () => {
   it('answers with the body its document describes, where the route documents one', async () => {
     const admin = await signInAs(t.app, 'admin');
     await admin.post('/api/tokens').send({ name: 'described' });
+    // A live worker (beat just now), so the worker list has an item to hold to its schema.
+    await t.db.dataSource.query(`INSERT INTO workers (label, targets) VALUES ('described:1', '{complex.js@2.4.3}')`);
     const described = operations(doc).filter(
       ([key, op]) =>
         key.startsWith('GET ') &&
@@ -155,7 +157,12 @@ describe('GET /api/openapi.json', () => {
         ((op.responses as Record<string, Json>)['200']?.content as Json | undefined)?.['application/json'] &&
         (((op.responses as Record<string, Json>)['200']!.content as Json)['application/json'] as Json).schema,
     );
-    expect(described.map(([key]) => key).sort()).toEqual(['GET /api/me', 'GET /api/tokens', 'GET /api/users']);
+    expect(described.map(([key]) => key).sort()).toEqual([
+      'GET /api/me',
+      'GET /api/tokens',
+      'GET /api/users',
+      'GET /api/workers',
+    ]);
     for (const [key, op] of described) {
       const schema = ((((op.responses as Json)['200'] as Json).content as Json)['application/json'] as Json).schema;
       const res = await admin.get(key.slice('GET '.length));
