@@ -184,6 +184,7 @@ const ROUTES: Record<Route, FuzzRoute> = {
   'GET /api/subscriptions': { roles: ROLES },
   'PUT /api/subscriptions': { roles: ROLES, body: () => ({ targetKeys: ['complex.js'] }) },
   'GET /api/overview': { roles: ROLES },
+  'GET /api/workers': { roles: ROLES },
   'GET /api/openapi.json': { roles: ROLES },
 };
 
