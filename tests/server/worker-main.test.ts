@@ -47,8 +47,7 @@ describe('workers on separate machines, each with its own targets and caches', (
         SHEETKEEPER_WORKERS: '1',
         SHEETKEEPER_WORKER_TARGETS: targets,
         SHEETKEEPER_REFERENCE_CACHE: path.join(scratch, name, 'reference'),
-        SHEETKEEPER_TARGET_CACHE: path.join(scratch, name, 'targets'),
-        SHEETKEEPER_CACHE_DIR: path.join(scratch, name, 'builds'),
+        SHEETKEEPER_CACHE_DIR: path.join(scratch, name, 'cache'),
       },
       stdio: ['ignore', 'ignore', 'pipe'],
     });
