@@ -85,7 +85,8 @@ export function runsRouter(dataSource: DataSource, runs: RunService): Router {
     'get',
     '/:id/matrix',
     {
-      summary: 'A run as suite × target cells with their counts, what each pair checked, its worker and whether it waits for one',
+      summary:
+        'A run as suite × target cells with their counts, what each pair checked, its worker and whether it waits for one',
       access: ROLES,
       params: idParams,
       responses: { 200: 'The cells (`cells`).', ...noRun },
