@@ -6,8 +6,7 @@ import { availableTargetOpener } from './targets/available-target-opener';
 import { targetSourceOptions } from './targets/target-source-options';
 import { SqlShardQueue } from './runs/sql-shard-queue';
 import { WorkerRegistration } from './runs/worker-registration';
-import { availableTargets } from './targets/available-targets';
-import { narrowTargets } from './targets/narrow-targets';
+import { announceWorkerTargets } from './targets/announce-worker-targets';
 import { requeueStaleShards } from './runs/requeue-stale-shards';
 import { ShardExecutor } from './runs/shard-executor';
 import { describeError } from './database/describe-error';
@@ -42,11 +41,7 @@ export async function startServices(
   const worker =
     options.workers > 0
       ? await WorkerRegistration.start(dataSource, config.databaseUrl, {
-          findTargets: async () =>
-            narrowTargets(
-              (await availableTargets(dataSource)).map((t) => t.name),
-              config.workerTargets,
-            ),
+          findTargets: () => announceWorkerTargets(dataSource, config.workerTargets),
         })
       : null;
   if (worker) {

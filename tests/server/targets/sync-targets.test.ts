@@ -24,4 +24,18 @@ describe('syncTargets', () => {
       false,
     ]);
   });
+
+  it('keeps a target that only a live worker announces installed, and drops it once that worker has stopped', async () => {
+    await db.dataSource.query(
+      `INSERT INTO targets (name, library, version, settings, installed, last_seen_at) VALUES ('on-a-worker@1', 'w', '1', '{}', true, now())`,
+    );
+    const [{ id }] = await db.dataSource.query(
+      `INSERT INTO workers (label, targets) VALUES ('elsewhere:1', ARRAY['on-a-worker@1']) RETURNING id`,
+    );
+    await syncTargets(db.dataSource, []);
+    expect(await installed('on-a-worker@1')).toBe(true);
+    await db.dataSource.query(`UPDATE workers SET stopped_at = now() WHERE id = $1`, [id]);
+    await syncTargets(db.dataSource, []);
+    expect(await installed('on-a-worker@1')).toBe(false);
+  });
 });
