@@ -34,7 +34,9 @@ export function targetsRouter(dataSource: DataSource): Router {
         .getRepository(TargetRow)
         .find({ order: { installed: 'DESC', library: 'ASC', name: 'ASC' } });
       const added = new Map(
-        (await readyTargetSources(dataSource.manager)).flatMap((s) => s.targets.map((t) => [t.name, t.entries] as const)),
+        (await readyTargetSources(dataSource.manager)).flatMap((s) =>
+          s.targets.map((t) => [t.name, t.entries] as const),
+        ),
       );
       res.json({
         targets: targets.map(({ name, library, version, settings, installed }) => {
