@@ -42,6 +42,8 @@ export function cComplexTarget(options: CComplexTargetOptions): StdioTarget {
       source: path.relative(PACKAGE_ROOT, source) || source,
     },
     entries: [...C_COMPLEX_ENTRIES],
+    // ISO/IEC 9899:2011 Annex G, which <complex.h> implements (G.6: the sign of a zero picks the side of a cut).
+    convention: 'signed-zero' as const,
   };
   let ready: Promise<StdioTarget | Error> | null = null;
   let started: StdioTarget | null = null;

@@ -1,4 +1,5 @@
 import type { ProgramTargetSource } from '../../shared/target-source';
+import { conventionSchema } from '../../shared/schemas/convention-schema';
 import type { TargetEntry } from '../../shared/target-entry';
 import { programTarget } from './program-target';
 import type { TargetDescriptor } from './target-descriptor';
@@ -16,16 +17,27 @@ export async function describeProgram(source: ProgramTargetSource, baseDir: stri
   try {
     const answer = await probe.request('describe', []);
     if ('error' in answer) throw new Error(`${command}: describe failed: ${answer.error}`);
-    const { library, version, entries } = answer.reply as { library?: unknown; version?: unknown; entries?: unknown };
+    const { library, version, entries, convention } = answer.reply as {
+      library?: unknown;
+      version?: unknown;
+      entries?: unknown;
+      convention?: unknown;
+    };
     if (typeof library !== 'string' || library.trim() === '')
       throw new Error(`${command}: describe answered no "library"`);
     if (typeof version !== 'string' || version.trim() === '')
       throw new Error(`${command}: describe answered no "version"`);
+    const declared = convention === undefined ? undefined : conventionSchema.safeParse(convention);
+    if (declared && !declared.success)
+      throw new Error(
+        `${command}: describe answered convention ${JSON.stringify(convention)}; it must be signed-zero or counter-clockwise, or absent`,
+      );
     const identity = {
       name: source.name ?? `${library}@${version}`,
       library,
       version,
       ...(Array.isArray(entries) ? { entries: entries as TargetEntry[] } : {}),
+      ...(declared ? { convention: declared.data } : {}),
     };
     return { ...identity, settings: probe.settings, open: () => programTarget(source, baseDir, identity) };
   } finally {

@@ -11,12 +11,13 @@ import type { TargetDescriptor } from './target-descriptor';
 export function listTargets(
   known: readonly TargetDescriptor[] = discoverTargets(),
 ): (TargetIdentity & { from?: string })[] {
-  return known.map(({ name, library, version, settings, entries, from }) => ({
+  return known.map(({ name, library, version, settings, entries, convention, from }) => ({
     name,
     library,
     version,
     settings,
     ...(entries ? { entries } : {}),
+    ...(convention ? { convention } : {}),
     ...(from !== undefined ? { from } : {}),
   }));
 }

@@ -1,5 +1,6 @@
 import path from 'node:path';
 import type { ProgramTargetSource } from '../../shared/target-source';
+import type { Convention } from '../../shared/schemas/convention-schema';
 import type { TargetEntry } from '../../shared/target-entry';
 import { stdioTarget, type StdioTarget } from './stdio-target';
 
@@ -9,6 +10,8 @@ export interface ProgramIdentity {
   library: string;
   version: string;
   entries?: TargetEntry[];
+  /** The convention its `describe` declared, if any. */
+  convention?: Convention;
 }
 
 /**

@@ -157,6 +157,7 @@ export function stdioTarget(options: StdioTargetOptions): StdioTarget {
     version: options.version,
     settings: options.settings,
     ...(options.entries ? { entries: options.entries } : {}),
+    ...(options.convention ? { convention: options.convention } : {}),
     request,
     processId: () => child?.pid ?? null,
     supports: async (op) => {

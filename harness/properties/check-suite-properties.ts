@@ -8,7 +8,11 @@ import { checkProperty } from './check-property';
 /**
  * Every property check of a suite against one target, in the suite's order. The subject is
  * parsed once; the expected cuts come from the branch spec (subject-cuts.ts); the tolerance is
- * the suite's `properties` tolerance, or its `values` tolerance when it gives none. Once
+ * the suite's `properties` tolerance, or its `values` tolerance when it gives none. A target that
+ * states a convention other than the suite's (TargetIdentity.convention) is held to the laws under
+ * its own convention, which each check's title names: under the suite's, the laws that read the
+ * side of a cut (range, unwinding, symmetries at zero parts) would report the library's documented
+ * convention as failures, as the points do (convention-mismatch-reason.ts). Once
  * `signal` is aborted (the evaluation ran out of time) no further check is started.
  */
 export async function checkSuiteProperties(
@@ -21,7 +25,7 @@ export async function checkSuiteProperties(
     text: suite.subject,
     expr,
     cuts: subjectCuts(expr, suite.branch),
-    convention: suite.convention,
+    convention: target.convention ?? suite.convention,
     tolerance: suite.tolerances.properties ?? suite.tolerances.values,
   };
   const outcomes: PropertyOutcome[] = [];

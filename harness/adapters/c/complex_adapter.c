@@ -368,7 +368,8 @@ static void describe(const value *id) {
     if (i) putchar(',');
     write_string(OPERATIONS[i].op);
   }
-  fputs("],\"entries\":[", stdout);
+  /* ISO/IEC 9899:2011 G.6: the sign of a zero picks the side of a cut. */
+  fputs("],\"convention\":\"signed-zero\",\"entries\":[", stdout);
   for (size_t i = 0; i < ENTRY_COUNT; i++) {
     if (i) putchar(',');
     fputs("{\"name\":", stdout);

@@ -99,6 +99,8 @@ def answer(rid, op, args, request):
             "version": platform.python_version(),
             "ops": sorted(list(UNARY) + list(BINARY)),
             "entries": ENTRIES,
+            # The sign of a zero picks the side of every cut (docs/stdio-protocol.md, "convention").
+            "convention": "signed-zero",
         }
     if op == "entry-points":
         return {"id": rid, "results": [entry_points(item) for item in args]}

@@ -69,6 +69,7 @@ export async function targetsCommand(argv: string[]): Promise<number> {
       .map(([k, v]) => `${k}=${v}`)
       .join(' ')}`,
     ...(t.from !== undefined ? [`${''.padEnd(width)}    from ${t.from}`] : []),
+    ...(t.convention !== undefined ? [`${''.padEnd(width)}    states the ${t.convention} convention on its cuts`] : []),
     ...(t.entries ?? []).map(
       (e) =>
         `${''.padEnd(width)}    entry ${e.name.padEnd(8)} ${e.call}${e.default ? ' (default)' : ''}${cannotCarry(e.carries)}`,

@@ -1,5 +1,6 @@
 import type { PathResult } from '../../../shared/run-result';
 import { checkAgreement } from './check-agreement';
+import { conventionMismatchReason } from '../../adapters/convention-mismatch-reason';
 import { inexpressibleReason } from '../../adapters/inexpressible-reason';
 import { checkPoints } from './check-points';
 import { compareAlongPath } from './compare-along-path';
@@ -73,6 +74,28 @@ export async function evaluatePath(evaluation: PathEvaluation): Promise<PathResu
       const reason = inexpressibleReason(entry, inputs.re[i] as number, inputs.im[i] as number, zeroSigns);
       if (reason !== null) notApplicable.set(i, reason);
     }
+  const { target, targetConvention } = evaluation;
+  if (targetConvention && target.convention) {
+    let theirs;
+    try {
+      theirs = expectedColumnOf({ ...evaluation, ...targetConvention }, points);
+    } catch {
+      theirs = null; // No values under the target's convention: every point keeps the suite's.
+    }
+    const reason = conventionMismatchReason(
+      { name: target.name, convention: target.convention },
+      evaluation.suite.convention,
+    );
+    for (let i = 0; theirs && i < n; i++) {
+      if (notApplicable.has(i) || expected.skipped.has(i) || theirs.skipped.has(i)) continue;
+      const [a, b] = [expected.re[i] as number, expected.im[i] as number];
+      const [c, d] = [theirs.re[i] as number, theirs.im[i] as number];
+      // Equal values (zero signs included when the suite compares them) mean the same under both.
+      const same = (x: number, y: number) =>
+        Object.is(x, y) || (x === y && !zeroSigns) || (Number.isNaN(x) && Number.isNaN(y));
+      if (!same(a, c) || !same(b, d)) notApplicable.set(i, reason);
+    }
+  }
   const actual = await evaluateProgram(
     evaluation.program,
     evaluation.target,

@@ -16,6 +16,7 @@ import { evaluatePath } from './evaluate-path';
 import type { Expectation } from '../expectations/expectation';
 import { pairStatus } from './pair-status';
 import { prepareCounterparts } from './prepare-counterparts';
+import type { PathEvaluation } from './path-evaluation';
 import type { SuiteCounterpart } from './suite-counterpart';
 import { ReferenceCache } from '../reference-cache/reference-cache';
 import { suiteExpectation } from '../expectations/suite-expectation';
@@ -92,6 +93,7 @@ export async function evaluateSuite(
   };
   let program: SubjectProgram;
   let expectation: Expectation;
+  let targetConvention: PathEvaluation['targetConvention'];
   let cacheKey = '';
   // The entry of each selected path (its own, else the suite's, else the target's default); an
   // entry the target does not offer makes the pair an error naming it, before any value is computed.
@@ -118,6 +120,11 @@ export async function evaluateSuite(
     const key = cacheKey;
     expectation = suiteExpectation(suite, expr, cache, key);
     result.checked.branch = expectation.description;
+    if (target.convention !== undefined && target.convention !== suite.convention) {
+      const theirs = { ...suite, convention: target.convention };
+      const theirKey = suiteCacheKey(theirs);
+      targetConvention = { expectation: suiteExpectation(theirs, expr, cache, theirKey), cacheKey: theirKey };
+    }
   } catch (e) {
     result.errors.push(`the suite cannot be evaluated: ${errorText(e)}`);
     result.status = 'error';
@@ -190,6 +197,7 @@ export async function evaluateSuite(
       points,
       unsupported,
       counterparts,
+      ...(targetConvention ? { targetConvention } : {}),
       maxFindings,
       signal: options.signal,
     });

@@ -57,6 +57,7 @@ export function mutantTarget(base: Target, mutation: Mutation): Target {
     version: base.version,
     settings: { ...base.settings, mutation },
     ...(base.entries ? { entries: base.entries } : {}),
+    ...(base.convention ? { convention: base.convention } : {}),
     supports: (op) => base.supports(op),
     close: () => base.close(),
     evaluate: async (op, calls, entry) => {

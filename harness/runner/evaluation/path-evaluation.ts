@@ -26,6 +26,12 @@ export interface PathEvaluation {
   unsupported: string[];
   /** The suite's counterparts against this target (prepare-counterparts.ts); empty when it has none. */
   counterparts: SuiteCounterpart[];
+  /**
+   * When the target states a convention other than the suite's: the suite's expectation under the
+   * target's convention, so the points where the two conventions differ are not applicable
+   * (convention-mismatch-reason.ts). Absent otherwise.
+   */
+  targetConvention?: { expectation: Expectation; cacheKey: string };
   /** Failing points listed in full (all are counted). */
   maxFindings: number;
   signal?: AbortSignal;

@@ -39,7 +39,10 @@ describe('the C library through the stdio protocol', () => {
       version: libc.version,
       ops: C_AND_NUMPY_OPS,
       entries: C_COMPLEX_ENTRIES,
+      // ISO/IEC 9899:2011 G.6: the sign of a zero picks the side of a cut; the target states the same.
+      convention: 'signed-zero',
     });
+    expect(target.convention).toBe('signed-zero');
     expect(target.name).toBe(`${libc.library}@${libc.version}`);
     expect(target.entries).toEqual(C_COMPLEX_ENTRIES);
   });

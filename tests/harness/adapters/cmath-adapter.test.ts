@@ -44,6 +44,8 @@ describe('cmath through the stdio protocol', () => {
     if (!('reply' in answer)) throw new Error(answer.error);
     expect(answer.reply.entries).toEqual(CMATH_ENTRIES);
     expect(cmath.entries).toEqual(CMATH_ENTRIES);
+    // Python's cmath documentation: the sign of a zero picks the side of a cut (from memory).
+    expect([answer.reply.convention, cmath.convention]).toEqual(['signed-zero', 'signed-zero']);
   });
 
   it('builds the arguments through the entry a request names, and refuses one it lacks, listing its entries', async () => {

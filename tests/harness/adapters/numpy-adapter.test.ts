@@ -31,6 +31,8 @@ describe('NumPy through the stdio protocol', () => {
     expect(answer.reply.library).toBe('numpy');
     expect(answer.reply.entries).toEqual(NUMPY_ENTRIES);
     expect(numpy.entries).toEqual(NUMPY_ENTRIES);
+    // NumPy's complex functions are the C library's (docs/c-and-numpy-adapters.md): Annex G's signed zeros.
+    expect([answer.reply.convention, numpy.convention]).toEqual(['signed-zero', 'signed-zero']);
     expect(answer.reply.ops).toEqual(C_AND_NUMPY_OPS);
   });
 
