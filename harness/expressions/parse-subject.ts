@@ -1,16 +1,15 @@
 import type * as MathJs from 'mathjs';
-import { FUNCTION_ARITY } from '../../shared/function-arity';
-import { FUNCTION_NAMES } from '../../shared/function-names';
 import { parseNumber } from '../reference/numbers/parse-number';
 import { Rational } from '../reference/numbers/rational';
+import { mathParse } from './math-parse';
+import { ONE_ARGUMENT_FUNCTIONS } from './one-argument-functions';
+import { parsePlainCall } from './parse-plain-call';
 import { SubjectError } from './subject-error';
 import { SUBJECT_LIMITS } from './subject-limits';
 import type { SubjectExpr } from './subject-expr';
 
 type MathNode = MathJs.MathNode;
 
-/** The catalogue functions of one argument (shared/function-arity.ts); pow and nthroot have their own rules below. */
-const ONE_ARGUMENT: ReadonlySet<string> = new Set(FUNCTION_NAMES.filter((name) => FUNCTION_ARITY[name] === 1));
 const OPERATORS: Record<string, 'add' | 'sub' | 'mul' | 'div'> = {
   add: 'add',
   subtract: 'sub',
@@ -18,31 +17,18 @@ const OPERATORS: Record<string, 'add' | 'sub' | 'mul' | 'div'> = {
   divide: 'div',
 };
 
-let parser: ((text: string) => MathNode) | null = null;
-
-/**
- * mathjs's parser with BigNumber constants, so "0.1" reaches us as the decimal it was written as.
- * Loaded on first use: `require('mathjs')` costs ~1.1 s (docs/conventions.md), which `sheetkeeper reference` never needs.
- */
-function mathParse(text: string): MathNode {
-  if (!parser) {
-    // eslint-disable-next-line @typescript-eslint/no-require-imports -- loaded on first use: mathjs costs ~1.1 s
-    const { all, create } = require('mathjs') as typeof MathJs;
-    const math = create(all as NonNullable<typeof all>, { number: 'BigNumber', precision: 64 });
-    parser = (t) => math.parse(t);
-  }
-  return parser(text);
-}
-
 /**
  * Parses a subject such as `sqrt(z^2 - 1)` or `pow(z, 2/5) * exp(z)` with mathjs's expression
  * parser and keeps it only if every node is on the whitelist. Throws {@link SubjectError}
  * naming the refused construct and the text around it, or the parser's position for a syntax error.
+ * A plain call such as `sqrt(z)` is read without mathjs (parsePlainCall), to the same result.
  */
 export function parseSubject(text: string): SubjectExpr {
   if (text.length > SUBJECT_LIMITS.length) {
     throw new SubjectError(`subject is ${text.length} characters long; the limit is ${SUBJECT_LIMITS.length}`);
   }
+  const plain = parsePlainCall(text);
+  if (plain) return plain;
   let root: MathNode;
   try {
     root = mathParse(text);
@@ -103,7 +89,7 @@ function convert(node: MathNode, depth: number): SubjectExpr {
             `${name} takes ${k} argument${k > 1 ? 's' : ''}, got ${args.length} (at "${node.toString()}")`,
           );
       };
-      if (ONE_ARGUMENT.has(name)) {
+      if (ONE_ARGUMENT_FUNCTIONS.has(name)) {
         arity(1);
         return { kind: 'call', fn: name, arg: convert(args[0] as MathNode, depth + 1) };
       }

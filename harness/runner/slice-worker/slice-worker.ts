@@ -2,7 +2,7 @@ import { parentPort, workerData } from 'node:worker_threads';
 import type { Target } from '../../adapters/target';
 import { discoverTargets } from '../../adapters/discover-targets';
 import type { TargetDescriptor } from '../../adapters/target-descriptor';
-import { parseSubject } from '../../expressions/parse-subject';
+import { mathParse } from '../../expressions/math-parse';
 import { evaluatePair } from '../evaluation/evaluate-pair';
 import { ReferenceCache } from '../reference-cache/reference-cache';
 import type { WorkerReply, WorkerRequest } from './slice-worker-messages';
@@ -78,5 +78,5 @@ port.on('message', (m: WorkerRequest) => {
 });
 
 // Load the subject parser (mathjs, ~1 s) before saying ready, so a slice's time limit measures its work, not start-up.
-parseSubject('z');
+mathParse('z');
 port.postMessage({ type: 'ready' } satisfies WorkerReply);
