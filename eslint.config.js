@@ -75,6 +75,16 @@ module.exports = defineConfig([
     rules: { '@typescript-eslint/no-require-imports': 'off' },
   },
   {
-    ignores: ['dist/**', '.data/**', '.expo/**', 'test-results/**', 'coverage/**', 'node_modules/**', '.scratch/**'],
+    ignores: [
+      'dist/**',
+      'packages/cli/dist/**',
+      'packages/cli/harness/**',
+      '.data/**',
+      '.expo/**',
+      'test-results/**',
+      'coverage/**',
+      'node_modules/**',
+      '.scratch/**',
+    ],
   },
 ]);

@@ -20,7 +20,6 @@ import type { TargetDescriptor } from './target-descriptor';
 const DEBIAN_PYTHON = '/usr/bin/python3';
 /** Debian's gcc, which builds the C adapter on first use (harness/adapters/c-adapter-binary.ts). */
 const DEBIAN_GCC = '/usr/bin/gcc';
-const PROJECT_ROOT = path.resolve(__dirname, '..', '..');
 
 /**
  * The targets installed in the project, without loading any library: complex.js and
@@ -33,7 +32,7 @@ const PROJECT_ROOT = path.resolve(__dirname, '..', '..');
  * (numerically), then name.
  */
 export function discoverTargets(
-  root: string = PROJECT_ROOT,
+  root: string = PACKAGE_ROOT,
   python: string = DEBIAN_PYTHON,
   compiler: string = DEBIAN_GCC,
 ): TargetDescriptor[] {

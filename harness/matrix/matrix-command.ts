@@ -5,12 +5,13 @@ import { BadInput } from '../command-support/bad-input';
 import { commandTargets } from '../command-support/command-targets';
 import { readFlags } from '../command-support/read-flags';
 import { writeOutput } from '../command-support/write-output';
+import { PACKAGE_ROOT } from '../package-root';
 import { loadSuites } from '../runner/plan/load-suites';
 import { libraryVersions } from './library-versions';
 import { versionMatrix } from './version-matrix';
 import { versionMatrixTable } from './version-matrix-table';
 
-const SUITES = path.resolve(__dirname, '..', '..', 'suites');
+const SUITES = path.join(PACKAGE_ROOT, 'suites');
 
 /**
  * `sheetkeeper matrix --suite FILE|ID[,…] --library complex.js [--entry NAME[,…]] [--format table|json] [--out FILE]`:

@@ -3,6 +3,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { BadInput } from '../../command-support/bad-input';
 import { commandTargets, type CommandTargets } from '../../command-support/command-targets';
+import { PACKAGE_ROOT } from '../../package-root';
 import { buildPlan } from '../plan/build-plan';
 import { formatJson } from '../formats/format-json';
 import { formatJunit } from '../formats/format-junit';
@@ -14,7 +15,6 @@ import { describeCounts } from '../formats/describe-counts';
 import { parseRunArgs } from './parse-run-args';
 import { runExitCode } from './run-exit-code';
 
-const PROJECT_ROOT = path.resolve(__dirname, '..', '..', '..');
 /** Below this many points, starting worker threads (~1 s each to load tsx and the engine) costs more than it saves. */
 const WORKER_THRESHOLD = 50_000;
 
@@ -47,7 +47,7 @@ export async function runCommand(argv: string[]): Promise<number> {
     process.stderr.write(`sheetkeeper run: ${args.error}\n${USAGE}\n`);
     return 2;
   }
-  const loaded = loadSuites(args.suites, path.join(PROJECT_ROOT, 'suites'));
+  const loaded = loadSuites(args.suites, path.join(PACKAGE_ROOT, 'suites'));
   if (!loaded.ok) {
     for (const i of loaded.issues) process.stderr.write(`sheetkeeper run: ${i.suite}: ${i.field} ${i.rule}\n`);
     return 2;

@@ -6,6 +6,7 @@ import { addTally } from '../evaluation/add-tally';
 import { emptyClassCounts } from '../evaluation/empty-class-counts';
 import { emptyCounts } from '../evaluation/empty-counts';
 import { DEFAULT_TIME_LIMIT_MS } from '../evaluation/evaluate-pair';
+import { PACKAGE_ROOT } from '../../package-root';
 import { ReferenceCache } from '../reference-cache/reference-cache';
 import { inProcessLane } from './in-process-lane';
 import { mergePairResults } from './merge-pair-results';
@@ -18,7 +19,7 @@ export const DISCLAIMER =
   'A pass means the target agreed with the reference at the points and paths listed, under the stated convention and tolerances; it is not a certification of the library, and other inputs may still fail.';
 
 /** Where the reference cache lives unless told otherwise (the project's ignored data folder). */
-export const DEFAULT_CACHE_DIR = path.resolve(__dirname, '..', '..', '..', '.data', 'reference-cache');
+export const DEFAULT_CACHE_DIR = path.join(PACKAGE_ROOT, '.data', 'reference-cache');
 
 export type RunEvent =
   | { type: 'plan'; slices: number; points: number; suites: number; targets: number }

@@ -1,0 +1,3 @@
+#!/usr/bin/env node
+// The packed CLI: plain CommonJS compiled by `npm run build:cli`, nothing transpiled at run time.
+require('../dist/harness/cli.js');
