@@ -47,6 +47,9 @@ start_step lint npx eslint --max-warnings 0 --cache --cache-strategy content --c
 start_step format npx prettier --check --log-level warn .
 start_step web-export ensure_web_export
 start_step e2e-database prepare_e2e_database
+# The packed CLI installed into an empty folder and run there (scripts/check-cli-package.ts): ~45 s
+# of wall time, most of it npm copying files, ~20 s of CPU; too long for a jest file.
+start_step cli-package node --import tsx scripts/check-cli-package.ts
 finish_step web-export
 finish_step e2e-database
 
@@ -65,7 +68,7 @@ log "end-to-end project against http://127.0.0.1:$E2E_PORT, in the background"
 start_step e2e env SHEETKEEPER_E2E_URL="http://127.0.0.1:$E2E_PORT" SHEETKEEPER_E2E_SMTP_PORT="$E2E_SMTP_PORT" \
   npx jest -c jest.e2e.config.js --ci --json --outputFile="$OUT/e2e.json"
 
-tsc_status=0 lint_status=0 format_status=0
+tsc_status=0 lint_status=0 format_status=0 cli_package_status=0
 finish_step typecheck || tsc_status=$?
 finish_step lint || lint_status=$?
 finish_step format || format_status=$?
@@ -73,9 +76,11 @@ finish_step format || format_status=$?
 log "jest: node and web projects"
 SHEETKEEPER_TEST_REFERENCE_SEED="$REFERENCE_CACHE" npx jest --ci --json --outputFile="$OUT/unit.json" || true
 finish_step e2e || true
+finish_step cli-package || cli_package_status=$?
 kill "$server_pid" 2>/dev/null || true
 
 log "finished in $(( $(date +%s) - began )) s"
 trap - ERR
 node --import tsx scripts/summarize-tests.ts --step "the type check (tsc --noEmit)=$tsc_status" \
-  --step "the lint (npm run lint)=$lint_status" --step "the format check (npm run format:check)=$format_status" "$OUT/unit.json" "$OUT/e2e.json"
+  --step "the lint (npm run lint)=$lint_status" --step "the format check (npm run format:check)=$format_status" \
+  --step "the packed CLI from an empty folder (scripts/check-cli-package.ts)=$cli_package_status" "$OUT/unit.json" "$OUT/e2e.json"
