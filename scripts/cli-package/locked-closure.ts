@@ -1,5 +1,6 @@
 /** One entry of package-lock.json's `packages` map, as far as the closure reads it. */
 interface LockEntry {
+  version?: string;
   dependencies?: Record<string, string>;
   optionalDependencies?: Record<string, string>;
   peerDependencies?: Record<string, string>;
