@@ -12,7 +12,7 @@ const USAGE = `usage: sheetkeeper <command>
 commands:
   reference   principal values: JSON lines {"fn","z","convention",["w"|"n"]} on stdin, one answer per line
   continue    regular branches of g(z)^nu along a path: JSON lines {"g","nu","z0","f0"|"k","path","at"}
-  run         check suites against targets: --suite FILE|ID --target NAME@VERSION [--format table|json|junit] [--out FILE] [--seed N]; exit 0 pass, 1 fail, 2 bad input
+  run         check suites against targets: --suite FILE|ID --target NAME@VERSION [--format table|json|junit|summary] [--out FILE] [--seed N]; exit 0 pass, 1 branch findings or errors, 2 bad input, 3 accuracy findings only
   targets     the installed targets, versions, settings and entries [--format json|table] [--ways: what every way of building a value delivers, −0 included]
   fingerprint which convention a target follows on each cut: --target NAME@VERSION [--fn a,b] [--entry NAME] [--format table|json] [--out FILE]
   cutmap      where a target's function is discontinuous over a box: --target NAME@VERSION --fn sqrt [--box re0,im0,re1,im1] [--grid 81x81] [--format json|svg|table] [--out FILE]

@@ -2,7 +2,7 @@
 export interface RunArgs {
   suites: string[];
   targets: string[];
-  format: 'table' | 'json' | 'junit';
+  format: 'table' | 'json' | 'junit' | 'summary';
   out: string | null;
   seed: number | null;
   workers: number | 'auto';
@@ -27,7 +27,7 @@ const VALUE_FLAGS = new Set([
 ]);
 
 /**
- * Reads `run --suite FILE|ID --target NAME@VERSION --format table|json|junit --out FILE --seed N`
+ * Reads `run --suite FILE|ID --target NAME@VERSION --format table|json|junit|summary --out FILE --seed N`
  * plus `--workers N|auto`, `--slice-time-limit MS`, `--cache DIR`, `--no-cache`, `--max-findings N`
  * and `--progress`. `--suite` and `--target` may repeat (or take comma-separated lists).
  */
@@ -67,8 +67,8 @@ export function parseRunArgs(argv: string[]): RunArgs | { error: string } {
         args.targets.push(...(value as string).split(',').filter(Boolean));
         break;
       case '--format':
-        if (value !== 'table' && value !== 'json' && value !== 'junit')
-          return { error: `--format must be table, json or junit, got "${value}"` };
+        if (value !== 'table' && value !== 'json' && value !== 'junit' && value !== 'summary')
+          return { error: `--format must be table, json, junit or summary, got "${value}"` };
         args.format = value;
         break;
       case '--out':

@@ -7,6 +7,7 @@ import { PACKAGE_ROOT } from '../../package-root';
 import { buildPlan } from '../plan/build-plan';
 import { formatJson } from '../formats/format-json';
 import { formatJunit } from '../formats/format-junit';
+import { formatSummary } from '../formats/format-summary';
 import { formatTable } from '../formats/format-table';
 import { loadSuites } from '../plan/load-suites';
 import { resolveTargets } from '../plan/resolve-targets';
@@ -19,7 +20,7 @@ import { runExitCode } from './run-exit-code';
 const WORKER_THRESHOLD = 50_000;
 
 const USAGE = [
-  'usage: sheetkeeper run --suite FILE|ID|FOLDER --target NAME@VERSION [--format table|json|junit] [--out FILE] [--seed N] [--workers N|auto] [--slice-time-limit MS] [--cache DIR | --no-cache] [--max-findings N] [--progress]',
+  'usage: sheetkeeper run --suite FILE|ID|FOLDER --target NAME@VERSION [--format table|json|junit|summary] [--out FILE] [--seed N] [--workers N|auto] [--slice-time-limit MS] [--cache DIR | --no-cache] [--max-findings N] [--progress]',
   '       [--config FILE] [--npm PACKAGE@VERSION] [--local PATH] [--program "COMMAND ARGS"] [--target-cache DIR]: targets beyond the installed ones (docs/target-sources.md); with exactly one of --npm/--local/--program and no --target, that one is the target',
   'exit: 0 pass; 1 branch findings, errors or failed checks; 2 bad input; 3 accuracy findings only',
 ].join('\n');
@@ -86,7 +87,13 @@ export async function runCommand(argv: string[]): Promise<number> {
   });
   process.off('SIGINT', onSigint);
   const text =
-    args.format === 'json' ? formatJson(result) : args.format === 'junit' ? formatJunit(result) : formatTable(result);
+    args.format === 'json'
+      ? formatJson(result)
+      : args.format === 'junit'
+        ? formatJunit(result)
+        : args.format === 'summary'
+          ? formatSummary(result)
+          : formatTable(result);
   if (args.out) {
     mkdirSync(path.dirname(path.resolve(args.out)), { recursive: true });
     writeFileSync(args.out, text);
