@@ -1,18 +1,20 @@
 /**
  * The packed CLI from an empty folder, as a maintainer gets it (docs/cli-package.md), run by
- * `npm test` as a step of its own beside the static checks (packing and installing took 25–30 s
- * on the shared 2-core machine, too long for a jest file). Builds the package into a temporary
- * folder outside the repository, packs it, installs the tarball into an empty folder with
- * `npm install --offline` (no registry: the dependencies are bundled), and there runs
- * `npx sheetkeeper run` on a principal and a composed demo suite with `--format junit`. Nothing
- * in the repository is within reach of the install: Node resolves modules from the install's own
- * node_modules and the harness finds its files from its own package root. Exits 1 naming the
- * step that failed; prints the tarball and install sizes and each step's time.
+ * `npm test` as a step of its own beside the static checks (~45 s wall on the shared 2-core
+ * machine, most of it npm writing 4,000 files; too long for a jest file). Builds the package into
+ * a temporary folder outside the repository and packs it; runs the shell recipe of
+ * docs/ci-recipes.md (docs/ci/sheetkeeper-check.sh) with it, which installs the tarball with
+ * `npm install --offline` (the dependencies are bundled) into an empty folder, runs a principal and
+ * a composed demo suite there, writes JUnit and prints the summary; then runs `npx sheetkeeper run
+ * --format junit` in that install. Nothing in the repository is within reach: Node resolves modules
+ * from the install's own node_modules and the harness finds its files from its own package root.
+ * Exits 1 naming what failed; prints each step's time, the tarball and the install sizes.
  */
 import { execFileSync, spawnSync } from 'node:child_process';
-import { mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync } from 'node:fs';
+import { mkdtempSync, readdirSync, readFileSync, rmSync, statSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
+import { discoverTargets } from '../harness';
 import { buildCliPackage } from './cli-package/build-cli-package';
 
 const STEP_MS = 180_000;
@@ -56,36 +58,38 @@ try {
         .split('\n')
         .pop() as string,
   );
-  mkdirSync(install);
-  timed('npm install --offline', () =>
-    execFileSync('npm', ['install', '--offline', '--no-audit', '--no-fund', path.join(work, tarball)], {
-      cwd: install,
-      stdio: 'inherit',
+  // JavaScript's Math: the one target every install has; it loses sqrt's zero signs (branch findings).
+  const jsMath = discoverTargets().find((t) => t.library === 'JavaScript Math')?.name as string;
+  const recipe = timed('docs/ci/sheetkeeper-check.sh (npm install --offline, run, summary)', () =>
+    spawnSync('bash', [path.join(__dirname, '..', 'docs', 'ci', 'sheetkeeper-check.sh')], {
+      cwd: work,
+      encoding: 'utf8',
       timeout: STEP_MS,
+      env: {
+        ...process.env,
+        SHEETKEEPER_TARBALL: path.join(work, tarball),
+        SHEETKEEPER_TOOLS: install,
+        SHEETKEEPER_OUT: path.join(work, 'results'),
+        SHEETKEEPER_SUITES: 'sqrt-principal-sz,sqrt-z2-minus-1-finite-cut',
+        SHEETKEEPER_TARGET_FLAGS: `--target ${jsMath}`,
+        SHEETKEEPER_NPM_FLAGS: '--offline',
+      },
     }),
   );
-  const listed = npx(['targets', '--format', 'json']);
-  if (listed.status !== 0) throw new Error(`sheetkeeper targets exited ${listed.status}: ${listed.stderr}`);
-  const jsMath = (JSON.parse(listed.stdout) as { name: string }[]).find((t) => t.name.startsWith('js-math@'));
-  if (!jsMath) throw new Error(`sheetkeeper targets lists no js-math target: ${listed.stdout}`);
-  const run = timed('sheetkeeper run', () =>
-    npx([
-      'run',
-      '--suite',
-      'sqrt-principal-sz,sqrt-z2-minus-1-finite-cut',
-      '--target',
-      jsMath.name,
-      '--format',
-      'junit',
-      '--out',
-      'sheetkeeper.xml',
-    ]),
+  console.log(recipe.stdout.trimEnd());
+  if (recipe.status !== 1)
+    throw new Error(`the recipe exited ${recipe.status}, not 1 (branch findings): ${recipe.stderr}`);
+  if (!/^first branch findings:$/m.test(recipe.stdout) || !recipe.stdout.includes(`× ${jsMath}, "straddle cut 1"`))
+    throw new Error(`the recipe printed no branch findings: ${recipe.stdout}`);
+  const recipeJunit = readFileSync(path.join(work, 'results', 'sheetkeeper.xml'), 'utf8');
+  if (!recipeJunit.includes('sqrt-z2-minus-1-finite-cut')) throw new Error('the recipe wrote no JUnit of both suites');
+  const run = timed('npx sheetkeeper run --format junit', () =>
+    npx(['run', '--suite', 'sqrt-principal-sz', '--target', jsMath, '--format', 'junit', '--out', 'sheetkeeper.xml']),
   );
-  // JavaScript's Math loses sqrt's zero signs: branch findings, exit 1.
   if (run.status !== 1) throw new Error(`sheetkeeper run exited ${run.status}, not 1: ${run.stderr}`);
   const junit = readFileSync(path.join(install, 'sheetkeeper.xml'), 'utf8');
-  if (!junit.startsWith('<?xml') || !/<testsuites[\s>]/.test(junit) || !junit.includes('sqrt-z2-minus-1-finite-cut'))
-    throw new Error(`sheetkeeper.xml is not the JUnit of both suites: ${junit.slice(0, 300)}`);
+  if (!junit.startsWith('<?xml') || !/<testsuites[\s>]/.test(junit) || !junit.includes('sqrt-principal-sz'))
+    throw new Error(`sheetkeeper.xml is not JUnit: ${junit.slice(0, 300)}`);
   console.log(`[cli-package] ${run.stderr.trim()}`);
   console.log(
     `[cli-package] tarball ${(statSync(path.join(work, tarball)).size / 1024 / 1024).toFixed(1)} MB; ` +

@@ -1,5 +1,6 @@
 import { formatComplexText } from '../../../shared/format-complex-text';
 import { outcomeClass } from '../../../shared/outcome-class';
+import { propertyFailureParts } from '../../../shared/property-failure-parts';
 import type { RunResult } from '../../../shared/run-result';
 import { describeCounts } from './describe-counts';
 import { describeOutcome } from './describe-outcome';
@@ -17,8 +18,12 @@ export function formatSummary(result: RunResult, first = 5): string {
   for (const r of result.results) {
     for (const e of r.errors) lines.push(`  error: ${r.suite.id} × ${r.target.name}: ${e}`);
     for (const o of r.properties ?? [])
-      if (o.kind === 'failed')
-        lines.push(`  property FAILED: ${r.suite.id} × ${r.target.name}: ${o.title} — ${o.reason}`);
+      if (o.kind === 'failed') {
+        const parts = propertyFailureParts(o);
+        lines.push(
+          `  property FAILED: ${r.suite.id} × ${r.target.name}: ${o.law} — ${o.reason}; ${parts.counterexample}; ${parts.replay}`,
+        );
+      }
   }
   const branch = result.results.flatMap((r) =>
     r.paths.flatMap((p) => p.findings.filter((f) => outcomeClass(f.outcome) === 'branch').map((f) => ({ r, f }))),
