@@ -21,6 +21,8 @@ const STEP_MS = 180_000;
 const work = mkdtempSync(path.join(os.tmpdir(), 'sheetkeeper-cli-package-'));
 const pkg = path.join(work, 'package');
 const install = path.join(work, 'install');
+// The installed CLI keeps its reference cache under XDG_CACHE_HOME: here, inside the temporary folder.
+const env = { ...process.env, XDG_CACHE_HOME: path.join(work, 'cache') };
 
 function timed<T>(label: string, step: () => T): T {
   const start = Date.now();
@@ -41,6 +43,7 @@ function npx(args: string[]): { status: number | null; stdout: string; stderr: s
     cwd: install,
     encoding: 'utf8',
     timeout: STEP_MS,
+    env,
   });
 }
 
@@ -66,7 +69,7 @@ try {
       encoding: 'utf8',
       timeout: STEP_MS,
       env: {
-        ...process.env,
+        ...env,
         SHEETKEEPER_TARBALL: path.join(work, tarball),
         SHEETKEEPER_TOOLS: install,
         SHEETKEEPER_OUT: path.join(work, 'results'),

@@ -1,3 +1,4 @@
+import os from 'node:os';
 import path from 'node:path';
 import type { OutcomeCounts, RunResult, SuiteTargetResult } from '../../../shared/run-result';
 import type { Suite } from '../../../shared/schemas/suite-schema';
@@ -18,8 +19,14 @@ import { workerLane } from './worker-lane';
 export const DISCLAIMER =
   'A pass means the target agreed with the reference at the points and paths listed, under the stated convention and tolerances; it is not a certification of the library, and other inputs may still fail.';
 
-/** Where the reference cache lives unless told otherwise (the project's ignored data folder). */
-export const DEFAULT_CACHE_DIR = path.join(PACKAGE_ROOT, '.data', 'reference-cache');
+/**
+ * Where the reference cache lives unless told otherwise: from source, the repository's ignored data
+ * folder; for a CLI installed from its package (its root inside a node_modules folder, which may be
+ * read-only, as a global install is), the user's cache folder (XDG_CACHE_HOME, else ~/.cache).
+ */
+export const DEFAULT_CACHE_DIR = PACKAGE_ROOT.split(path.sep).includes('node_modules')
+  ? path.join(process.env.XDG_CACHE_HOME || path.join(os.homedir(), '.cache'), 'sheetkeeper', 'reference-cache')
+  : path.join(PACKAGE_ROOT, '.data', 'reference-cache');
 
 export type RunEvent =
   | { type: 'plan'; slices: number; points: number; suites: number; targets: number }
@@ -37,7 +44,7 @@ export type RunEvent =
   | { type: 'cancelled'; reason: string };
 
 export interface RunOptions {
-  /** The reference cache folder (default .data/reference-cache); null keeps the cache in memory only. */
+  /** The reference cache folder (default DEFAULT_CACHE_DIR); null keeps the cache in memory only. */
   cacheDir?: string | null;
   /** A cache object to use instead (tests count its reference calls); its folder is ignored for workers. */
   cache?: ReferenceCache;

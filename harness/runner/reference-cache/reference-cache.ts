@@ -27,6 +27,8 @@ export interface CacheRecords {
 export class ReferenceCache {
   private tables = new Map<string, PointTable>();
   private pending = new Map<string, number[]>();
+  /** Set when the folder could not be written: later flushes only drop their values. */
+  private unwritable = false;
   computed = 0;
   cached = 0;
   /**
@@ -97,16 +99,32 @@ export class ReferenceCache {
     }
   }
 
-  /** Appends the queued values to their files (no-op without a folder). */
+  /**
+   * Appends the queued values to their files (no-op without a folder). A folder that cannot be
+   * written (a read-only install of the CLI, a file in its place) costs the run nothing but the
+   * saving: one warning says so, and the values stay in memory for the rest of the run.
+   */
   flush(): void {
-    if (!this.dir) {
+    if (!this.dir || this.unwritable) {
       this.pending.clear();
       return;
     }
-    mkdirSync(this.dir, { recursive: true });
+    try {
+      this.write(this.dir);
+    } catch (e) {
+      this.unwritable = true;
+      process.emitWarning(
+        `the reference cache folder ${this.dir} cannot be written (${e instanceof Error ? e.message : String(e)}); this run keeps its reference values in memory only`,
+      );
+    }
+    this.pending.clear();
+  }
+
+  private write(dir: string): void {
+    mkdirSync(dir, { recursive: true });
     for (const [key, list] of this.pending) {
       if (list.length === 0) continue;
-      const file = path.join(this.dir, `${key}.bin`);
+      const file = path.join(dir, `${key}.bin`);
       const fresh = !existsSync(file);
       const body = encode(list);
       if (fresh) {
@@ -118,7 +136,6 @@ export class ReferenceCache {
         appendFileSync(file, body);
       }
     }
-    this.pending.clear();
   }
 }
 

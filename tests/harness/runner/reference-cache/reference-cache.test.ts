@@ -1,4 +1,4 @@
-import { appendFileSync, mkdtempSync, readdirSync, rmSync, statSync } from 'node:fs';
+import { appendFileSync, mkdtempSync, readdirSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { buildPlan } from '../../../../harness/runner/plan/build-plan';
@@ -17,6 +17,37 @@ describe('the reference cache', () => {
     dir = mkdtempSync(path.join(os.tmpdir(), 'sheetkeeper-cache-'));
   });
   afterEach(() => rmSync(dir, { recursive: true, force: true }));
+
+  it('gives a run its result when the cache folder cannot be written, warning once that the values stay in memory', async () => {
+    // A file where the folder should be: ENOTDIR for root too, as EACCES would be for a read-only
+    // install (a global npm install of the CLI) for anyone else.
+    writeFileSync(path.join(dir, 'file'), '');
+    const cacheDir = path.join(dir, 'file', 'reference-cache');
+    const warn = jest.spyOn(process, 'emitWarning').mockImplementation(() => undefined);
+    try {
+      const plan = () =>
+        buildPlan(
+          [loadDemoSuite('sqrt-principal-sz'), loadDemoSuite('log-principal-sz')],
+          [
+            {
+              name: 'oracle@1',
+              library: 'oracle',
+              version: '1',
+              settings: {},
+              open: () => referenceTarget('oracle@1'),
+            },
+          ],
+        );
+      const unwritable = await runPlan(plan(), { cacheDir });
+      const inMemory = await runPlan(plan(), { cacheDir: null });
+      expect(unwritable.status).toBe('pass');
+      expect(unwritable.counts).toEqual(inMemory.counts);
+      expect(warn).toHaveBeenCalledTimes(1);
+      expect(String(warn.mock.calls[0]?.[0])).toContain(`the reference cache folder ${cacheDir} cannot be written`);
+    } finally {
+      warn.mockRestore();
+    }
+  });
 
   it('lets a repeated run compute no reference value, failures and their alternatives included', async () => {
     // A library that ignores −0 fails on the cut, so the second run also needs the alternatives (flipped zero, limits).
