@@ -21,8 +21,8 @@ const STEP_MS = 180_000;
 const work = mkdtempSync(path.join(os.tmpdir(), 'sheetkeeper-cli-package-'));
 const pkg = path.join(work, 'package');
 const install = path.join(work, 'install');
-// The installed CLI keeps its reference cache under XDG_CACHE_HOME: here, inside the temporary folder.
-const env = { ...process.env, XDG_CACHE_HOME: path.join(work, 'cache') };
+// The installed CLI keeps its reference cache in the user's cache folder: here, inside the temporary folder.
+const env = { ...process.env, SHEETKEEPER_CACHE_DIR: path.join(work, 'cache') };
 
 function timed<T>(label: string, step: () => T): T {
   const start = Date.now();

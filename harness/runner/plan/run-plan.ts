@@ -1,4 +1,3 @@
-import os from 'node:os';
 import path from 'node:path';
 import type { OutcomeCounts, RunResult, SuiteTargetResult } from '../../../shared/run-result';
 import type { Suite } from '../../../shared/schemas/suite-schema';
@@ -7,6 +6,7 @@ import { addTally } from '../evaluation/add-tally';
 import { emptyClassCounts } from '../evaluation/empty-class-counts';
 import { emptyCounts } from '../evaluation/empty-counts';
 import { DEFAULT_TIME_LIMIT_MS } from '../evaluation/evaluate-pair';
+import { cacheDir as userCacheDir } from '../../cache-dir';
 import { PACKAGE_ROOT } from '../../package-root';
 import { ReferenceCache } from '../reference-cache/reference-cache';
 import { inProcessLane } from './in-process-lane';
@@ -22,10 +22,10 @@ export const DISCLAIMER =
 /**
  * Where the reference cache lives unless told otherwise: from source, the repository's ignored data
  * folder; for a CLI installed from its package (its root inside a node_modules folder, which may be
- * read-only, as a global install is), the user's cache folder (XDG_CACHE_HOME, else ~/.cache).
+ * read-only, as a global install is), reference-cache/ in the user's cache folder (cache-dir.ts).
  */
 export const DEFAULT_CACHE_DIR = PACKAGE_ROOT.split(path.sep).includes('node_modules')
-  ? path.join(process.env.XDG_CACHE_HOME || path.join(os.homedir(), '.cache'), 'sheetkeeper', 'reference-cache')
+  ? path.join(userCacheDir(), 'reference-cache')
   : path.join(PACKAGE_ROOT, '.data', 'reference-cache');
 
 export type RunEvent =
