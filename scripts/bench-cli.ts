@@ -5,9 +5,11 @@
  * node_modules/.bin/sheetkeeper) ROUNDS times, each paired with `node -e 0` just before it, and
  * prints the median wall time of each, their ratio and the load average. The reference cache is a
  * fresh temporary folder: the first run computes the suite's reference values and is reported on
- * its own; the medians are over the runs after it. BENCH_CLI_SUITE (sqrt-principal-sz),
- * BENCH_CLI_TARGET (cmath when /usr/bin/python3 answers, else JavaScript's Math) and
- * BENCH_CLI_ROUNDS (9) change what is run. Nothing is written outside the temporary folder.
+ * its own; the medians are over the runs after it. The target is a complex.js release given by
+ * path (`--local`, the root's node_modules/complex.js), as a maintainer names a working copy;
+ * BENCH_CLI_TARGET names an installed target instead (cmath@3.11.2: a Python process, and target
+ * discovery starts Python too). BENCH_CLI_SUITE (sqrt-principal-sz) and BENCH_CLI_ROUNDS (9)
+ * change the rest. Nothing is written outside the temporary folder.
  */
 import { spawnSync } from 'node:child_process';
 import { existsSync, mkdtempSync, rmSync } from 'node:fs';
@@ -34,16 +36,13 @@ function wall(command: string, args: string[], codes: number[]): number {
   return ms;
 }
 
-function targetName(): string {
-  if (process.env.BENCH_CLI_TARGET) return process.env.BENCH_CLI_TARGET;
-  const r = spawnSync(process.execPath, [bin, 'targets', '--format', 'json'], { encoding: 'utf8' });
-  const names = (JSON.parse(r.stdout) as { name: string }[]).map((t) => t.name);
-  return names.find((n) => n.startsWith('cmath@')) ?? (names.find((n) => n.startsWith('js-math@')) as string);
-}
+/** The flags that name the target. */
+const targetFlags = process.env.BENCH_CLI_TARGET
+  ? ['--target', process.env.BENCH_CLI_TARGET]
+  : ['--local', path.join(CLI_PACKAGE_DIR, '..', '..', 'node_modules', 'complex.js')];
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)] as number;
 try {
-  const target = targetName();
   // Exit 1 and 3 are findings of the library, not failures of the run.
   const run = () =>
     wall(
@@ -53,8 +52,7 @@ try {
         'run',
         '--suite',
         suite,
-        '--target',
-        target,
+        ...targetFlags,
         '--format',
         'json',
         '--out',
@@ -72,7 +70,7 @@ try {
     cli.push(run());
   }
   const [m, b] = [median(cli), median(bare)];
-  console.log(`sheetkeeper run --suite ${suite} --target ${target} (${bin})`);
+  console.log(`sheetkeeper run --suite ${suite} ${targetFlags.join(' ')} (${bin})`);
   console.log(`  first run (reference values computed): ${cold.toFixed(0)} ms`);
   console.log(`  median of ${rounds}: ${m.toFixed(0)} ms; node -e 0: ${b.toFixed(0)} ms; ratio ${(m / b).toFixed(2)}`);
   console.log(
