@@ -100,8 +100,8 @@ try {
     throw new Error(`sheetkeeper.xml is not the JUnit of complex.js ${version}: ${junit.slice(0, 300)}`);
   console.log(`[cli-package] ${run.stderr.trim()}`);
   console.log(
-    `[cli-package] tarball ${(statSync(path.join(work, tarball)).size / 1024 / 1024).toFixed(1)} MB; ` +
-      `installed node_modules ${(sizeKb(path.join(install, 'node_modules')) / 1024).toFixed(1)} MB`,
+    `[cli-package] tarball ${(statSync(path.join(work, tarball)).size / 1e6).toFixed(1)} MB; ` +
+      `installed node_modules ${(sizeKb(path.join(install, 'node_modules')) / 1024).toFixed(1)} MiB of file contents`,
   );
 } catch (e) {
   console.error(`[cli-package] ${e instanceof Error ? e.message : String(e)}`);
