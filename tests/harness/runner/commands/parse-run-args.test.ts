@@ -18,4 +18,11 @@ describe('parseRunArgs', () => {
     });
     expect(parseRunArgs(['--slice-time-limit'])).toEqual({ error: '--slice-time-limit needs a value' });
   });
+
+  it('takes the summary format for a CI log and names the four formats when given another', () => {
+    expect(parseRunArgs(['--suite', 'a', '--target', 'b', '--format', 'summary'])).toMatchObject({ format: 'summary' });
+    expect(parseRunArgs(['--format', 'xml'])).toEqual({
+      error: '--format must be table, json, junit or summary, got "xml"',
+    });
+  });
 });
