@@ -33,6 +33,8 @@ type Outcome =
  * is terminated. The next slice then starts a fresh worker; start-up is no part of a slice's time.
  */
 export function workerLane(cacheDir: string | null, cache: ReferenceCache): SliceLane {
+  // Code found from code, not a shipped file: the build puts the .cjs entry beside the compiled
+  // modules (docs/cli-package.md), so this path holds from source and compiled alike.
   const entry = path.join(__dirname, '..', 'slice-worker', 'slice-worker-entry.cjs');
   let worker: Worker | null = null;
   const spawn = async (): Promise<Worker> => {
