@@ -1,3 +1,4 @@
+import { adapterCheckCommand } from './adapter-check/adapter-check-command';
 import { answerContinue } from './reference/continuation/answer-continue';
 import { answerReference } from './reference/answer-reference';
 import { cutmapCommand } from './cutmap/cutmap-command';
@@ -17,6 +18,7 @@ commands:
   fingerprint which convention a target follows on each cut: --target NAME@VERSION [--fn a,b] [--entry NAME] [--format table|json] [--out FILE]
   cutmap      where a target's function is discontinuous over a box: --target NAME@VERSION --fn sqrt [--box re0,im0,re1,im1] [--grid 81x81] [--format json|svg|table] [--out FILE]
   matrix      the same suites over every installed version of a library: --suite FILE|ID[,...] --library complex.js [--entry NAME[,...]] [--format table|json] [--out FILE]
+  adapter-check  check a stdio adapter against the protocol: --program "COMMAND ARGS" | --target NAME [--time-limit MS] [--format table|json] [--out FILE]; exit 0 pass, 1 fail, 2 bad input
 
 run, targets, fingerprint, cutmap and matrix also check libraries Sheetkeeper did not install (docs/target-sources.md):
   --config FILE (default ./sheetkeeper.config.json when present), --npm PACKAGE@VERSION, --local FOLDER|FILE.tgz,
@@ -40,6 +42,7 @@ async function main(argv: string[]): Promise<number> {
   if (command === 'fingerprint') return fingerprintCommand(argv.slice(1));
   if (command === 'cutmap') return cutmapCommand(argv.slice(1));
   if (command === 'matrix') return matrixCommand(argv.slice(1));
+  if (command === 'adapter-check') return adapterCheckCommand(argv.slice(1));
   process.stderr.write(command ? `sheetkeeper: unknown command "${command}"\n${USAGE}` : USAGE);
   return 2;
 }

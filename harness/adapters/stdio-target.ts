@@ -6,14 +6,13 @@ import type { CallResult } from './call-result';
 import type { ComplexPair } from './complex-pair';
 import { findEntry } from './find-entry';
 import { OP_ARITY } from './op-arity';
+import { STDIO_TIME_LIMITS } from './stdio-time-limits';
 import type { Target } from './target';
 import type { TargetIdentity } from '../../shared/target-identity';
 
 /** A reply line from the program, parsed, or why the batch failed. */
 type Reply = { reply: Record<string, unknown> } | { error: string };
 
-/** Measured: the cmath adapter answers a 1000-point batch in ~15 ms; 10 s leaves room for slow libraries and loaded machines. */
-const DEFAULT_TIME_LIMIT_MS = 10_000;
 const STDERR_TAIL = 2048;
 
 export interface StdioTargetOptions extends TargetIdentity {
@@ -54,11 +53,8 @@ function readPair(item: unknown): CallResult {
  * that is not the answer to the pending request turns the batch into error results
  * and kills the program; the next batch starts a fresh one.
  */
-/** Extra time for the first request to a freshly started program. */
-const STARTUP_ALLOWANCE_MS = 10_000;
-
 export function stdioTarget(options: StdioTargetOptions): StdioTarget {
-  const timeLimitMs = options.timeLimitMs ?? DEFAULT_TIME_LIMIT_MS;
+  const timeLimitMs = options.timeLimitMs ?? STDIO_TIME_LIMITS.requestMs;
   let child: ChildProcessWithoutNullStreams | null = null;
   let pending: { onLine(line: string): void; onExit(what: string): void } | null = null;
   let stderrTail = '';
@@ -96,9 +92,8 @@ export function stdioTarget(options: StdioTargetOptions): StdioTarget {
 
   const send = (op: string, args: unknown[], entry?: string): Promise<Reply> =>
     new Promise<Reply>((resolve) => {
-      // A fresh program first has to start: that time is not the library's. Python with cmath
-      // starts in ~40 ms on an idle machine, but took over 400 ms with the load at 7.
-      const limit = child ? timeLimitMs : timeLimitMs + STARTUP_ALLOWANCE_MS;
+      // A fresh program first has to start: that time is not the library's.
+      const limit = child ? timeLimitMs : timeLimitMs + STDIO_TIME_LIMITS.startupAllowanceMs;
       const proc = start();
       const id = nextId++;
       let settled = false;

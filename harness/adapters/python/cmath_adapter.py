@@ -80,6 +80,16 @@ def entry_points(pair):
     return out
 
 
+def echo(pair):
+    """Reads a pair as a catalogue operation reads its arguments and writes it back, no function between."""
+    try:
+        if not isinstance(pair, list) or len(pair) != 2:
+            raise ValueError("a complex number is a pair [re, im], got %r" % (pair,))
+        return [write_number(read_number(pair[0])), write_number(read_number(pair[1]))]
+    except ValueError as e:
+        return {"error": "%s: %s" % (type(e).__name__, e)}
+
+
 def call(op, item, entry):
     try:
         if op in UNARY:
@@ -104,6 +114,8 @@ def answer(rid, op, args, request):
         }
     if op == "entry-points":
         return {"id": rid, "results": [entry_points(item) for item in args]}
+    if op == "echo":
+        return {"id": rid, "results": [echo(item) for item in args]}
     if op not in UNARY and op not in BINARY:
         return {"id": rid, "error": "unsupported op %r" % op}
     entry = request.get("entry", "complex")

@@ -1,0 +1,102 @@
+import path from 'node:path';
+import type { ProgramTargetSource } from '../../../shared/target-source';
+import type { AdapterCheckReport } from '../../../harness/adapter-check/adapter-check-report';
+import { ADAPTER_CHECKS } from '../../../harness/adapter-check/adapter-checks';
+import { runAdapterChecks } from '../../../harness/adapter-check/run-adapter-checks';
+
+const ROOT = path.join(__dirname, '..', '..', '..');
+const PYTHON = '/usr/bin/python3';
+const BROKEN = path.join(ROOT, 'tests', 'fixtures', 'adapter-check', 'broken_adapter.py');
+const CMATH = path.join(ROOT, 'harness', 'adapters', 'python', 'cmath_adapter.py');
+
+/** The fixture with one fault switched on; a short time limit so the hang costs 0.3 s. */
+const broken = (...faults: string[]): ProgramTargetSource => ({
+  kind: 'program',
+  command: [PYTHON, BROKEN, ...faults],
+  timeLimitMs: 300,
+});
+
+const failed = (report: AdapterCheckReport) => report.checks.filter((c) => c.status === 'fail').map((c) => c.name);
+const check = (report: AdapterCheckReport, name: keyof typeof ADAPTER_CHECKS) =>
+  report.checks.find((c) => c.name === name)!;
+
+describe('runAdapterChecks', () => {
+  it("passes every check on Python's cmath adapter, the −0 round trip through its echo", async () => {
+    const report = await runAdapterChecks({ kind: 'program', command: [PYTHON, CMATH] }, ROOT);
+    expect(report.checks.map((c) => `${c.name}: ${c.status}`)).toEqual(
+      Object.keys(ADAPTER_CHECKS).map((name) => `${name}: pass`),
+    );
+    expect(report).toMatchObject({ library: 'cmath', failed: 0, notChecked: 0, timeLimitMs: 10_000 });
+    expect(check(report, 'number-round-trip').found).toBe('13 pairs through echo, every bit kept');
+  });
+
+  it('passes every check on the broken fixture with no fault switched on', async () => {
+    const report = await runAdapterChecks(broken(), ROOT);
+    expect(failed(report)).toEqual([]);
+    expect(report.passed).toBe(Object.keys(ADAPTER_CHECKS).length);
+  });
+
+  it('names a dropped −0 in the round trip, value by value, with how to fix it', async () => {
+    const report = await runAdapterChecks(broken('--drop-negative-zero'), ROOT);
+    expect(failed(report)).toEqual(['number-round-trip']);
+    const { found, advice } = check(report, 'number-round-trip');
+    expect(found).toMatch(/^through echo, 4 of 13 pairs changed: /);
+    expect(found).toContain('−0 in both parts: sent ["-0","-0"], expected ["-0","-0"], got ["0.0","0.0"]');
+    expect(found).toContain('−0 in the imaginary part: sent ["0","-0"]');
+    expect(advice).toBe(ADAPTER_CHECKS['number-round-trip'].advice);
+  });
+
+  it('names an answer carrying the wrong id as an answer out of order', async () => {
+    const report = await runAdapterChecks(broken('--wrong-id'), ROOT);
+    expect(failed(report)).toEqual(['ids-echoed']);
+    expect(check(report, 'ids-echoed').found).toMatch(/^answered id 2 while 1 was pending \(describe\); /);
+    expect(check(report, 'ids-echoed').advice).toMatch(/^answers must come in request order, one line per request/);
+  });
+
+  it('names swapped results by the slots that hold each other’s answers', async () => {
+    const report = await runAdapterChecks(broken('--swap-results'), ROOT);
+    // Every check that sends a batch of two or more sees the swap.
+    expect(failed(report)).toEqual(['batch-order', 'batch-of-1000', 'error-in-its-slot', 'number-round-trip']);
+    expect(check(report, 'batch-order').found).toBe(
+      'in a batch of 8 sqrt calls, slot 0 holds the answer to item 1; slot 1 holds the answer to item 0',
+    );
+    expect(check(report, 'batch-of-1000').found).toMatch(/^2 of 1000 slots differ .* \(seed 20261205\); first, slot 0/);
+  });
+
+  it('names a request that hangs, kills the program and goes on with a fresh one', async () => {
+    const began = performance.now();
+    const report = await runAdapterChecks(broken('--hang-on', 'echo'), ROOT);
+    expect(failed(report)).toEqual(['number-round-trip', 'answers-in-time']);
+    expect(check(report, 'answers-in-time').found).toMatch(
+      /^no answer to id \d+ \(echo, 13 items\) within 300 ms; adapter-check killed the program and a fresh one answered the next request \(id \d+, sqrt\)$/,
+    );
+    expect(check(report, 'number-round-trip').found).toMatch(/^echo: no answer to id \d+ \(echo\) within 300 ms$/);
+    // The checks after the hang ran on the fresh program.
+    expect(check(report, 'batch-of-1000').status).toBe('pass');
+    expect(check(report, 'exits-on-stdin-close').status).toBe('pass');
+    // The time limit, not the 10 s default (measured: 0.6–0.9 s in all).
+    expect(performance.now() - began).toBeLessThan(5000);
+  });
+
+  it('names a line written beside an answer', async () => {
+    const report = await runAdapterChecks(broken('--extra-line'), ROOT);
+    expect(check(report, 'one-line-per-request').found).toBe(
+      'wrote 2 lines in answer to id 1 (describe); the extra one: "log: answered"',
+    );
+  });
+
+  it('names a program that keeps running after its stdin closes', async () => {
+    const report = await runAdapterChecks(broken('--linger'), ROOT);
+    expect(failed(report)).toEqual(['exits-on-stdin-close']);
+    expect(check(report, 'exits-on-stdin-close').found).toBe(
+      'the program was still running 1 s after its stdin closed',
+    );
+  });
+
+  it('reports a program that cannot start and checks nothing else', async () => {
+    const report = await runAdapterChecks({ kind: 'program', command: ['/nonexistent/adapter'] }, ROOT);
+    expect(failed(report)).toEqual(['starts']);
+    expect(check(report, 'starts').found).toMatch(/could not run: spawn \/nonexistent\/adapter ENOENT/);
+    expect(report.notChecked).toBe(Object.keys(ADAPTER_CHECKS).length - 1);
+  });
+});
