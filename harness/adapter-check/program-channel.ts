@@ -93,7 +93,7 @@ export class ProgramChannel {
    * Sends one request (an object, given the next id, or a raw line sent as written) and waits for
    * the next line the program writes, the time limit, or its exit; then, given `settleMs`, waits that
    * long for lines nobody asked for. A program may write a stray line with a write of its own after
-   * its answer (Python's print does: two write(2) calls, seen with strace), so it can arrive after
+   * its answer (Python's sys.stdout.write does: one write(2) per call, seen with strace), so it can arrive after
    * the answer; the waits catch it before the next request takes it for its answer.
    */
   async ask(

@@ -41,10 +41,11 @@ export function parseProgramFlag(text: string, timeLimitMs?: number): ProgramTar
   });
   if (!parsed.success) {
     const issue = parsed.error.issues[0]!;
-    const field = issue.path[0] === 'timeLimitMs' ? '--time-limit' : '--program';
-    throw new BadInput(
-      `${field}: ${issue.path[0] === 'command' && words.length === 0 ? 'names no command' : issue.message}`,
-    );
+    if (issue.path[0] === 'timeLimitMs') throw new BadInput(`--time-limit: ${issue.message}`);
+    const word = issue.path[1];
+    if (typeof word === 'number')
+      throw new BadInput(`--program: word ${word + 1} ${words[word] === '' ? 'is empty' : issue.message}`);
+    throw new BadInput(`--program: ${words.length === 0 ? 'names no command' : issue.message}`);
   }
   return parsed.data;
 }
