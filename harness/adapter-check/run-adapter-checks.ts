@@ -170,8 +170,9 @@ export async function runAdapterChecks(source: ProgramTargetSource, baseDir: str
     request: { raw: string } | { op: string; args: unknown[]; entry?: string },
     what: 'op' | 'entry' | null,
   ): Promise<void> {
-    const pid = channel.processId();
     const e = await channel.ask(request, SETTLE_MS);
+    // The program that answered (a fresh one, when a timeout killed the last).
+    const pid = channel.processId();
     const asked =
       what === null
         ? 'a line that is not JSON'

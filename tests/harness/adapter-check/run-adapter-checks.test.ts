@@ -76,6 +76,29 @@ describe('runAdapterChecks', () => {
     expect(performance.now() - began).toBeLessThan(10_000);
   });
 
+  it('names each fault of an adapter that drops −0, answers out of order and hangs, and no check it passes', async () => {
+    const report = await runAdapterChecks(
+      broken('--drop-negative-zero', '--wrong-id', '--swap-results', '--hang-on', 'sheetkeeper-no-such-op'),
+      ROOT,
+    );
+    expect(failed(report)).toEqual([
+      'ids-echoed',
+      'unknown-op',
+      'batch-order',
+      'batch-of-1000',
+      'error-in-its-slot',
+      'number-round-trip',
+      'answers-in-time',
+    ]);
+    expect(check(report, 'ids-echoed').found).toMatch(/^answered id 2 while 1 was pending/);
+    expect(check(report, 'number-round-trip').found).toContain('−0 in both parts: sent ["-0","-0"]');
+    expect(check(report, 'answers-in-time').found).toMatch(
+      /^no answer to id 3 \(sheetkeeper-no-such-op, 0 items\) within 1000 ms; adapter-check killed the program and a fresh one answered/,
+    );
+    // The request after the hang went to a fresh program, which refused the unknown entry and kept running.
+    expect(check(report, 'unknown-entry').status).toBe('pass');
+  });
+
   it('names a line written beside an answer', async () => {
     const report = await runAdapterChecks(broken('--extra-line'), ROOT);
     expect(check(report, 'one-line-per-request').found).toBe(
