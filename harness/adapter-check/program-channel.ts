@@ -6,6 +6,13 @@ import { STDIO_TIME_LIMITS } from '../adapters/stdio-time-limits';
 import type { Exchange } from './exchange';
 
 const STDERR_TAIL = 2048;
+/**
+ * A line this long is not an answer: a 1,000-item batch answers ~50 KB and the harness's largest
+ * slice (20,000 points) ~1 MB, so 16 MB stops a runaway writer long before it fills memory.
+ */
+const MAX_LINE_BYTES = 16 * 1024 * 1024;
+/** Stray lines kept per gap between requests; a report quotes only the first. */
+const MAX_STRAYS = 100;
 /** The harness closes a program's stdin and kills it 1 s later (stdio-target.ts, `close`). */
 const EXIT_GRACE_MS = 1000;
 
@@ -56,19 +63,6 @@ export class ProgramChannel {
     this.child = proc;
     this.queue = [];
     this.tail = '';
-    createInterface({ input: proc.stdout, crlfDelay: Infinity }).on('line', (line) => {
-      if (this.child !== proc || line.trim() === '') return;
-      const waiter = this.waiter;
-      if (waiter) {
-        this.waiter = null;
-        waiter(line);
-      } else this.queue.push(line);
-    });
-    proc.stderr.on('data', (chunk: Buffer) => {
-      this.tail = (this.tail + chunk.toString('utf8')).slice(-STDERR_TAIL);
-    });
-    // A write to a program that has just died fails with EPIPE; the exit handler reports it.
-    proc.stdin.on('error', () => undefined);
     const ended = (what: string): void => {
       if (this.child !== proc) return;
       this.child = null;
@@ -76,6 +70,28 @@ export class ProgramChannel {
       this.waiter = null;
       waiter?.({ exited: what });
     };
+    createInterface({ input: proc.stdout, crlfDelay: Infinity }).on('line', (line) => {
+      if (this.child !== proc || line.trim() === '') return;
+      const waiter = this.waiter;
+      if (waiter) {
+        this.waiter = null;
+        waiter(line);
+      } else if (this.queue.length < MAX_STRAYS) this.queue.push(line);
+    });
+    let unended = 0;
+    proc.stdout.on('data', (chunk: Buffer) => {
+      const newline = chunk.lastIndexOf(10);
+      unended = newline < 0 ? unended + chunk.length : chunk.length - newline - 1;
+      if (unended > MAX_LINE_BYTES) {
+        ended(`wrote more than ${MAX_LINE_BYTES / 1024 / 1024} MB without ending the line`);
+        proc.kill('SIGKILL');
+      }
+    });
+    proc.stderr.on('data', (chunk: Buffer) => {
+      this.tail = (this.tail + chunk.toString('utf8')).slice(-STDERR_TAIL);
+    });
+    // A write to a program that has just died fails with EPIPE; the exit handler reports it.
+    proc.stdin.on('error', () => undefined);
     proc.on('exit', (code, signal) => ended(`exited with ${signal ? `signal ${signal}` : `code ${code}`}`));
     proc.on('error', (e) => ended(`could not run: ${e.message}`));
     return proc;

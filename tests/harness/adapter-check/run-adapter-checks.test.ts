@@ -99,6 +99,15 @@ describe('runAdapterChecks', () => {
     expect(check(report, 'unknown-entry').status).toBe('pass');
   });
 
+  it('kills a program writing a line without end at 16 MB and goes on with a fresh one', async () => {
+    const report = await runAdapterChecks(broken('--endless-line', 'echo'), ROOT);
+    expect(failed(report)).toEqual(['number-round-trip']);
+    expect(check(report, 'number-round-trip').found).toMatch(
+      /^echo: the program wrote more than 16 MB without ending the line instead of answering id \d+ \(echo\)$/,
+    );
+    expect(check(report, 'batch-of-1000').status).toBe('pass');
+  });
+
   it('names a line written beside an answer', async () => {
     const report = await runAdapterChecks(broken('--extra-line'), ROOT);
     expect(check(report, 'one-line-per-request').found).toBe(
