@@ -50,7 +50,8 @@ const describedEntry = z.object({
   carries: z.object({ imaginaryPart: z.boolean(), realZeroSign: z.boolean(), imaginaryZeroSign: z.boolean() }),
 });
 
-const plural = (n: number, word: string): string => `${n.toLocaleString('en')} ${word}${n === 1 ? '' : 's'}`;
+const count = (n: number): string => n.toLocaleString('en');
+const plural = (n: number, word: string): string => `${count(n)} ${word}${n === 1 ? '' : 's'}`;
 
 /**
  * Runs every check of adapter-checks.ts on the stdio program `source` (docs/adapter-check.md) and
@@ -296,7 +297,7 @@ export async function runAdapterChecks(source: ProgramTargetSource, baseDir: str
     const aloneMs = performance.now() - began;
     const e = await channel.ask({ op, args: items });
     const got = read.results(e, items.length, channel.stderrTail());
-    if (typeof got === 'string') return fail('batch-of-1000', `a batch of ${BIG_BATCH} ${op} calls: ${got}`);
+    if (typeof got === 'string') return fail('batch-of-1000', `a batch of ${count(BIG_BATCH)} ${op} calls: ${got}`);
     const slots = got.map(read.slot);
     const differ = slots.flatMap((slot, i) => (read.sameSlot(slot, singles[i]!) ? [] : [i]));
     if (differ.length === 0)
@@ -307,7 +308,7 @@ export async function runAdapterChecks(source: ProgramTargetSource, baseDir: str
     const i = differ[0]!;
     fail(
       'batch-of-1000',
-      `${differ.length} of ${BIG_BATCH} slots differ from the same call sent alone (seed ${BATCH_SEED}); first, slot ${i} (${op} of ${JSON.stringify(items[i])}): ${read.show(slots[i]!)} in the batch, ${read.show(singles[i]!)} alone`,
+      `${count(differ.length)} of ${count(BIG_BATCH)} slots differ from the same call sent alone (seed ${BATCH_SEED}); first, slot ${i} (${op} of ${JSON.stringify(items[i])}): ${read.show(slots[i]!)} in the batch, ${read.show(singles[i]!)} alone`,
     );
   }
 
@@ -321,7 +322,7 @@ export async function runAdapterChecks(source: ProgramTargetSource, baseDir: str
     const { e, got } = wrong[0]!;
     fail(
       'ids-echoed',
-      `answered id ${JSON.stringify(got)} while ${JSON.stringify(e.id)} was pending${e.op ? ` (${e.op})` : ''}; ${wrong.length} of ${channel.exchanges.length} answers carried another id`,
+      `answered id ${JSON.stringify(got)} while ${JSON.stringify(e.id)} was pending${e.op ? ` (${e.op})` : ''}; ${count(wrong.length)} of ${count(channel.exchanges.length)} answers carried another id`,
     );
   }
 

@@ -58,7 +58,9 @@ describe('runAdapterChecks', () => {
     expect(check(report, 'batch-order').found).toBe(
       'in a batch of 8 sqrt calls, slot 0 holds the answer to item 1; slot 1 holds the answer to item 0',
     );
-    expect(check(report, 'batch-of-1000').found).toMatch(/^2 of 1000 slots differ .* \(seed 20261205\); first, slot 0/);
+    expect(check(report, 'batch-of-1000').found).toMatch(
+      /^2 of 1,000 slots differ .* \(seed 20261205\); first, slot 0/,
+    );
   });
 
   it('names a request that hangs, kills the program and goes on with a fresh one', async () => {
@@ -106,6 +108,27 @@ describe('runAdapterChecks', () => {
       /^echo: the program wrote more than 16 MB without ending the line instead of answering id \d+ \(echo\)$/,
     );
     expect(check(report, 'batch-of-1000').status).toBe('pass');
+  });
+
+  it('checks the round trip through neg when the program has no echo, and leaves it unchecked without neg', async () => {
+    const throughNeg = await runAdapterChecks(broken('--without', 'echo'), ROOT);
+    expect(check(throughNeg, 'number-round-trip')).toEqual({
+      name: 'number-round-trip',
+      status: 'pass',
+      found: '13 pairs through neg, every bit kept',
+    });
+    const dropped = await runAdapterChecks(broken('--without', 'echo', '--drop-negative-zero'), ROOT);
+    // −(−0) is +0: a parser that reads "-0" as +0 answers −0, which the sign of each part shows.
+    expect(check(dropped, 'number-round-trip').found).toContain(
+      '−0 in both parts: sent ["-0","-0"], expected ["0","0"], got ["-0.0","-0.0"]',
+    );
+    const neither = await runAdapterChecks(broken('--without', 'echo', '--without', 'neg'), ROOT);
+    expect(check(neither, 'number-round-trip')).toEqual({
+      name: 'number-round-trip',
+      status: 'not-checked',
+      found: `the program has no echo (it answered "unsupported op 'echo'") and describe lists no neg`,
+    });
+    expect(neither).toMatchObject({ failed: 0, notChecked: 1 });
   });
 
   it('names a line written beside an answer', async () => {
