@@ -65,40 +65,20 @@ describe('runAdapterChecks', () => {
 
   it('names a request that hangs, kills the program and goes on with a fresh one', async () => {
     const began = performance.now();
-    const report = await runAdapterChecks(broken('--hang-on', 'echo'), ROOT);
-    expect(failed(report)).toEqual(['number-round-trip', 'answers-in-time']);
-    expect(check(report, 'answers-in-time').found).toMatch(
-      /^no answer to id \d+ \(echo, 13 items\) within 1000 ms; adapter-check killed the program and a fresh one answered the next request \(id \d+, sqrt\)$/,
+    // A program that never answers an op it does not know, the way a read loop with no else branch does.
+    const report = await runAdapterChecks(broken('--hang-on', 'sheetkeeper-no-such-op'), ROOT);
+    expect(failed(report)).toEqual(['unknown-op', 'answers-in-time']);
+    expect(check(report, 'answers-in-time').found).toBe(
+      'no answer to id 3 (sheetkeeper-no-such-op, 0 items) within 1000 ms; adapter-check killed the program and a fresh one answered the next request (id 4, sqrt)',
     );
-    expect(check(report, 'number-round-trip').found).toMatch(/^echo: no answer to id \d+ \(echo\) within 1000 ms$/);
-    // The checks after the hang ran on the fresh program.
-    expect(check(report, 'batch-of-1000').status).toBe('pass');
-    expect(check(report, 'exits-on-stdin-close').status).toBe('pass');
+    expect(check(report, 'unknown-op').found).toBe(
+      'sent the unknown op "sheetkeeper-no-such-op": no answer to id 3 (sheetkeeper-no-such-op) within 1000 ms',
+    );
+    // The checks after the hang ran on the fresh program; its refusal of an unknown entry is its own.
+    expect(check(report, 'unknown-entry').status).toBe('pass');
+    expect(check(report, 'number-round-trip').status).toBe('pass');
     // The time limit given, not the 10 s default (measured: 1.5–1.7 s in all).
     expect(performance.now() - began).toBeLessThan(10_000);
-  });
-
-  it('names each fault of an adapter that drops −0, answers out of order and hangs, and no check it passes', async () => {
-    const report = await runAdapterChecks(
-      broken('--drop-negative-zero', '--wrong-id', '--swap-results', '--hang-on', 'sheetkeeper-no-such-op'),
-      ROOT,
-    );
-    expect(failed(report)).toEqual([
-      'ids-echoed',
-      'unknown-op',
-      'batch-order',
-      'batch-of-1000',
-      'error-in-its-slot',
-      'number-round-trip',
-      'answers-in-time',
-    ]);
-    expect(check(report, 'ids-echoed').found).toMatch(/^answered id 2 while 1 was pending/);
-    expect(check(report, 'number-round-trip').found).toContain('−0 in both parts: sent ["-0","-0"]');
-    expect(check(report, 'answers-in-time').found).toMatch(
-      /^no answer to id 3 \(sheetkeeper-no-such-op, 0 items\) within 1000 ms; adapter-check killed the program and a fresh one answered/,
-    );
-    // The request after the hang went to a fresh program, which refused the unknown entry and kept running.
-    expect(check(report, 'unknown-entry').status).toBe('pass');
   });
 
   it('kills a program writing a line without end at 16 MB and goes on with a fresh one', async () => {
