@@ -17,6 +17,8 @@ type CheckName = keyof typeof ADAPTER_CHECKS;
 /** The seed of the 1,000 items of `batch-of-1000`, printed with any disagreement so it can be replayed. */
 const BATCH_SEED = 20261205;
 const BIG_BATCH = 1000;
+/** Operations of the protocol itself (docs/stdio-protocol.md): answered, and harmless in `ops` (the harness asks only catalogue ones). */
+const PROTOCOL_OPS = ['describe', 'entry-points', 'echo'];
 /** Names no program should know, so the answers to them test the refusal path. */
 const NO_SUCH_OP = 'sheetkeeper-no-such-op';
 const NO_SUCH_ENTRY = 'sheetkeeper-no-such-entry';
@@ -145,7 +147,7 @@ export async function runAdapterChecks(source: ProgramTargetSource, baseDir: str
     if (version === null) problems.push('no "version" string');
     if (!Array.isArray(answer.ops)) problems.push('no "ops" list');
     else if (ops.length !== answer.ops.length) problems.push('"ops" holds something other than strings');
-    const unknown = ops.filter((op) => !(op in OP_ARITY));
+    const unknown = ops.filter((op) => !(op in OP_ARITY) && !PROTOCOL_OPS.includes(op));
     if (unknown.length > 0) problems.push(`ops outside the catalogue: ${unknown.join(', ')}`);
     let entries = '';
     if (answer.entries !== undefined) {

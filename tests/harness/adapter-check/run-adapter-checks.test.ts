@@ -111,6 +111,16 @@ describe('runAdapterChecks', () => {
     expect(neither).toMatchObject({ failed: 0, notChecked: 1 });
   });
 
+  it('names every problem of a describe answer at once', async () => {
+    const report = await runAdapterChecks(broken('--bad-describe'), ROOT);
+    expect(failed(report)).toEqual(['describe']);
+    // echo is a protocol op: listing it is no fault.
+    expect(check(report, 'describe').found).toBe(
+      'describe answered no "library" string; ops outside the catalogue: frobnicate; 2 entries marked default (one must be)',
+    );
+    expect(report.library).toBeNull();
+  });
+
   it('names a line written beside an answer', async () => {
     const report = await runAdapterChecks(broken('--extra-line'), ROOT);
     expect(check(report, 'one-line-per-request').found).toBe(
