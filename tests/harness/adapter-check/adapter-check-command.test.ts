@@ -19,11 +19,17 @@ function cmathName(): string {
 }
 
 describe('adapterCheckCommand', () => {
-  it('checks an installed stdio target named with --target and exits 0 when every check passes', async () => {
+  it('checks an installed stdio target named with --target, under the time limit given, and exits 0 when every check passes', async () => {
     const out = file('cmath.json');
-    expect(await adapterCheckCommand(['--target', cmathName(), '--format', 'json', '--out', out])).toBe(0);
+    const argv = ['--target', cmathName(), '--time-limit', '2000', '--format', 'json', '--out', out];
+    expect(await adapterCheckCommand(argv)).toBe(0);
     const report = JSON.parse(readFileSync(out, 'utf8'));
-    expect(report).toMatchObject({ library: 'cmath', passed: Object.keys(ADAPTER_CHECKS).length, failed: 0 });
+    expect(report).toMatchObject({
+      library: 'cmath',
+      timeLimitMs: 2000,
+      passed: Object.keys(ADAPTER_CHECKS).length,
+      failed: 0,
+    });
   });
 
   it('writes a table naming each failure with why it matters and how to fix it, and exits 1', async () => {
