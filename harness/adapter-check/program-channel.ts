@@ -7,8 +7,9 @@ import type { Exchange } from './exchange';
 
 const STDERR_TAIL = 2048;
 /**
- * A line this long is not an answer: a 1,000-item batch answers ~50 KB and the harness's largest
- * slice (20,000 points) ~1 MB, so 16 MB stops a runaway writer long before it fills memory.
+ * A line this long is not an answer: cmath answers the seeded 1,000-item batch in 50,812 bytes
+ * (measured), so the harness's largest slice (20,000 points) in ~1 MB; 16 MB stops a runaway writer
+ * long before it fills memory.
  */
 const MAX_LINE_BYTES = 16 * 1024 * 1024;
 /** Stray lines kept per gap between requests; a report quotes only the first. */

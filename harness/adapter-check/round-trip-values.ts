@@ -2,6 +2,8 @@
  * The numbers the round-trip check sends (docs/adapter-check.md), each pair named by what it tests.
  * The expected double of every string is the harness's own reading of it (parse-double.ts: nearest
  * double, ties to even, hex floats exact), which is what the stdio protocol asks of a program.
+ * CPython's float() and float.fromhex, correctly rounded, read every one to the same double: the
+ * cmath adapter's run in tests/harness/adapter-check/run-adapter-checks.test.ts passes this check.
  */
 export const ROUND_TRIP_VALUES: readonly { what: string; pair: readonly [string, string] }[] = [
   { what: '−0 in both parts', pair: ['-0', '-0'] },
