@@ -1,4 +1,5 @@
 import { adapterCheckRequest } from '../../shared/schemas/adapter-check-request';
+import type { StdioTarget } from '../adapters/stdio-target';
 import { BadInput } from '../command-support/bad-input';
 import { findTarget } from '../command-support/find-target';
 import { parseProgramFlag } from '../command-support/parse-program-flag';
@@ -20,9 +21,12 @@ export async function adapterCheckCommand(argv: readonly string[]): Promise<numb
   if (request.program !== undefined) source = parseProgramFlag(request.program, timeLimitMs);
   else {
     const descriptor = findTarget(request.target!);
-    if (!descriptor.program)
-      throw new BadInput(`adapter-check checks stdio programs; ${descriptor.name} runs in process`);
-    source = timeLimitMs === undefined ? descriptor.program : { ...descriptor.program, timeLimitMs };
+    // Opening a target starts and loads nothing (discover-targets.ts); a stdio target names its program.
+    const target = descriptor.open();
+    const program = (target as Partial<StdioTarget>).program;
+    await target.close();
+    if (!program) throw new BadInput(`adapter-check checks stdio programs; ${descriptor.name} runs in process`);
+    source = timeLimitMs === undefined ? program : { ...program, timeLimitMs };
   }
   const report = await runAdapterChecks(source, process.cwd());
   writeOutput(request.format === 'json' ? JSON.stringify(report, null, 2) : adapterCheckTable(report), request.out);

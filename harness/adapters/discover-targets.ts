@@ -83,7 +83,7 @@ export function discoverTargets(
         command: python,
         args: [script],
       });
-    targets.push({ ...describe(open()), open, program: { kind: 'program', command: [python, script] } });
+    targets.push({ ...describe(open()), open });
   }
   if (existsSync(compiler)) {
     const libc = systemLibcVersion();

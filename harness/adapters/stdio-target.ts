@@ -9,6 +9,7 @@ import { OP_ARITY } from './op-arity';
 import { STDIO_TIME_LIMITS } from './stdio-time-limits';
 import type { Target } from './target';
 import type { TargetIdentity } from '../../shared/target-identity';
+import type { ProgramTargetSource } from '../../shared/target-source';
 
 /** A reply line from the program, parsed, or why the batch failed. */
 type Reply = { reply: Record<string, unknown> } | { error: string };
@@ -28,6 +29,8 @@ export interface StdioTarget extends Target {
   request(op: string, args: unknown[], entry?: string): Promise<Reply>;
   /** The running program's pid, or null when none runs (not started yet, or ended). */
   processId(): number | null;
+  /** How the program is started, as a program target source, so adapter-check can start it itself. */
+  readonly program: ProgramTargetSource;
 }
 
 const wirePair = ([re, im]: ComplexPair): [string, string] => [formatDouble(re), formatDouble(im)];
@@ -155,6 +158,12 @@ export function stdioTarget(options: StdioTargetOptions): StdioTarget {
     ...(options.convention ? { convention: options.convention } : {}),
     request,
     processId: () => child?.pid ?? null,
+    program: {
+      kind: 'program',
+      command: [options.command, ...options.args],
+      ...(options.cwd === undefined ? {} : { cwd: options.cwd }),
+      ...(options.timeLimitMs === undefined ? {} : { timeLimitMs: options.timeLimitMs }),
+    },
     supports: async (op) => {
       const known = await describe();
       return typeof known !== 'string' && known.has(op) && op in OP_ARITY;

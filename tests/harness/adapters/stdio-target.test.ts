@@ -33,6 +33,16 @@ describe('stdioTarget', () => {
     await target.close();
   });
 
+  it('names the program behind it as a program target source, starting nothing', async () => {
+    target = misbehaving(700);
+    expect(target.program).toEqual({
+      kind: 'program',
+      command: [process.execPath, '--import', 'tsx', FIXTURE],
+      timeLimitMs: 700,
+    });
+    expect(target.processId()).toBeNull();
+  });
+
   it('starts no program before it is first used', async () => {
     target = misbehaving();
     expect(target.processId()).toBeNull();
