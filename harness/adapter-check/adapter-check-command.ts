@@ -21,10 +21,15 @@ export async function adapterCheckCommand(argv: readonly string[]): Promise<numb
   if (request.program !== undefined) source = parseProgramFlag(request.program, timeLimitMs);
   else {
     const descriptor = findTarget(request.target!);
-    // Opening a target starts and loads nothing (discover-targets.ts); a stdio target names its program.
-    const target = descriptor.open();
-    const program = (target as Partial<StdioTarget>).program;
-    await target.close();
+    // Opening a target starts and loads nothing (discover-targets.ts); a stdio target names its program
+    // (the C target builds it first: a compiler error ends the command with its message, exit 2).
+    const target = descriptor.open() as Partial<StdioTarget>;
+    let program;
+    try {
+      program = await target.program?.();
+    } finally {
+      await target.close?.();
+    }
     if (!program) throw new BadInput(`adapter-check checks stdio programs; ${descriptor.name} runs in process`);
     source = timeLimitMs === undefined ? program : { ...program, timeLimitMs };
   }

@@ -59,6 +59,11 @@ export function cComplexTarget(options: CComplexTargetOptions): StdioTarget {
       return target instanceof Error ? { error: target.message } : target.request(op, args, entry);
     },
     processId: () => started?.processId() ?? null,
+    program: async () => {
+      const target = await open();
+      if (target instanceof Error) throw target;
+      return target.program();
+    },
     supports: async (op) => {
       const target = await open();
       return target instanceof Error ? op in OP_ARITY : target.supports(op);

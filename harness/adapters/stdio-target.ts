@@ -29,8 +29,12 @@ export interface StdioTarget extends Target {
   request(op: string, args: unknown[], entry?: string): Promise<Reply>;
   /** The running program's pid, or null when none runs (not started yet, or ended). */
   processId(): number | null;
-  /** How the program is started, as a program target source, so adapter-check can start it itself. */
-  readonly program: ProgramTargetSource;
+  /**
+   * How the program is started, as a program target source, so adapter-check can start it itself.
+   * A promise, as a target may first have to build its program (the C adapter compiles on first use);
+   * rejects when it cannot.
+   */
+  program(): Promise<ProgramTargetSource>;
 }
 
 const wirePair = ([re, im]: ComplexPair): [string, string] => [formatDouble(re), formatDouble(im)];
@@ -158,12 +162,12 @@ export function stdioTarget(options: StdioTargetOptions): StdioTarget {
     ...(options.convention ? { convention: options.convention } : {}),
     request,
     processId: () => child?.pid ?? null,
-    program: {
+    program: async () => ({
       kind: 'program',
       command: [options.command, ...options.args],
       ...(options.cwd === undefined ? {} : { cwd: options.cwd }),
       ...(options.timeLimitMs === undefined ? {} : { timeLimitMs: options.timeLimitMs }),
-    },
+    }),
     supports: async (op) => {
       const known = await describe();
       return typeof known !== 'string' && known.has(op) && op in OP_ARITY;

@@ -83,9 +83,8 @@ def entry_points(pair):
 def echo(pair):
     """Reads a pair as a catalogue operation reads its arguments and writes it back, no function between."""
     try:
-        if not isinstance(pair, list) or len(pair) != 2:
-            raise ValueError("a complex number is a pair [re, im], got %r" % (pair,))
-        return [write_number(read_number(pair[0])), write_number(read_number(pair[1]))]
+        re_, im_ = read_pair(pair)
+        return [write_number(re_), write_number(im_)]
     except ValueError as e:
         return {"error": "%s: %s" % (type(e).__name__, e)}
 

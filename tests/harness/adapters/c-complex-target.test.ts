@@ -47,6 +47,16 @@ describe('the C library through the stdio protocol', () => {
     expect(target.entries).toEqual(C_COMPLEX_ENTRIES);
   });
 
+  it('names its built adapter as the program adapter-check starts', async () => {
+    const program = await target.program();
+    expect(program).toEqual({ kind: 'program', command: [expect.stringContaining(path.join(cache, 'c-adapter'))] });
+    expect(
+      spawnSync(program.command[0]!, [], {
+        input: '{"id": 1, "op": "neg", "args": [["-0", "1"]]}\n',
+      }).stdout.toString(),
+    ).toMatch(/^\{"id": ?1, ?"results": ?\[\["0", ?"-1"\]\]\}\n$/);
+  });
+
   it('echoes −0, subnormals, the largest double, infinities, NaN and hex floats exactly, as shortest decimals', async () => {
     const answer = await target.request('echo', [
       ...ECHO_INPUTS,

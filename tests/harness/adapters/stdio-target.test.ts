@@ -35,7 +35,7 @@ describe('stdioTarget', () => {
 
   it('names the program behind it as a program target source, starting nothing', async () => {
     target = misbehaving(700);
-    expect(target.program).toEqual({
+    expect(await target.program()).toEqual({
       kind: 'program',
       command: [process.execPath, '--import', 'tsx', FIXTURE],
       timeLimitMs: 700,

@@ -25,9 +25,14 @@ describe('parseProgramFlag', () => {
   it('refuses an empty command, an open quote and control characters, naming the flag', () => {
     expect(() => parseProgramFlag('   ')).toThrow(new BadInput('--program: names no command'));
     expect(() => parseProgramFlag("python3 'adapter.py")).toThrow(new BadInput("--program: a ' quote is not closed"));
-    expect(() => parseProgramFlag('python3 "a\u0000b"')).toThrow(
+    expect(() => parseProgramFlag('python3 "a\u0007b"')).toThrow(
       /^--program: word 2 must not contain control characters$/,
     );
+    // NUL and a lone surrogate get the one rule of every stored text (shared/schemas/text-schema.ts).
+    expect(() => parseProgramFlag('python3 "a\u0000b"')).toThrow(
+      /^--program: word 2 must not contain the NUL character/,
+    );
+    expect(() => parseProgramFlag('python3 a\ud800')).toThrow(/^--program: word 2 must not contain the NUL character/);
     expect(() => parseProgramFlag("python3 ''")).toThrow(new BadInput('--program: word 2 is empty'));
     expect(() => parseProgramFlag('python3', 50)).toThrow(/^--time-limit: /);
   });
