@@ -18,7 +18,7 @@ commands:
   fingerprint which convention a target follows on each cut: --target NAME@VERSION [--fn a,b] [--entry NAME] [--format table|json] [--out FILE]
   cutmap      where a target's function is discontinuous over a box: --target NAME@VERSION --fn sqrt [--box re0,im0,re1,im1] [--grid 81x81] [--format json|svg|table] [--out FILE]
   matrix      the same suites over every installed version of a library: --suite FILE|ID[,...] --library complex.js [--entry NAME[,...]] [--format table|json] [--out FILE]
-  adapter-check  check a stdio adapter against the protocol: --program "COMMAND ARGS" | --target NAME [--time-limit MS] [--format table|json] [--out FILE]; exit 0 pass, 1 fail, 2 bad input
+  adapter-check  check a stdio adapter against the protocol: --program "COMMAND ARGS" | --target NAME [--config FILE] [--time-limit MS] [--format table|json] [--out FILE]; exit 0 pass, 1 fail, 2 bad input
 
 run, targets, fingerprint, cutmap and matrix also check libraries Sheetkeeper did not install (docs/target-sources.md):
   --config FILE (default ./sheetkeeper.config.json when present), --npm PACKAGE@VERSION, --local FOLDER|FILE.tgz,

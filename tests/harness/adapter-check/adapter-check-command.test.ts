@@ -1,5 +1,5 @@
 import { spawnSync } from 'node:child_process';
-import { readFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { adapterCheckCommand } from '../../../harness/adapter-check/adapter-check-command';
 import { ADAPTER_CHECKS } from '../../../harness/adapter-check/adapter-checks';
@@ -42,6 +42,31 @@ describe('adapterCheckCommand', () => {
     expect(text).toMatch(/protocol {2}ids-echoed {12}FAIL {4}answered id 2 while 1 was pending \(describe\)/);
     expect(text).toContain(`why and how to fix: ${ADAPTER_CHECKS['ids-echoed'].advice}`);
     expect(text).toMatch(/13 checks: 12 passed, 1 failed, 0 not checked\n$/);
+  });
+
+  it("checks a program the project file names, by its --target name, from the file's folder", async () => {
+    const config = file('sheetkeeper.config.json');
+    const fixtures = path.join(ROOT, 'tests', 'fixtures');
+    writeFileSync(
+      config,
+      JSON.stringify({
+        targets: [
+          {
+            kind: 'program',
+            name: 'mine',
+            command: ['/usr/bin/python3', 'adapter-check/broken_adapter.py', '--swap-results'],
+            // Relative to the project file's folder.
+            cwd: path.relative(path.dirname(config), fixtures),
+          },
+        ],
+      }),
+    );
+    const out = file('mine.json');
+    const argv = ['--config', config, '--target', 'mine', '--time-limit', '1000', '--format', 'json', '--out', out];
+    expect(await adapterCheckCommand(argv)).toBe(1);
+    const report = JSON.parse(readFileSync(out, 'utf8'));
+    expect(report).toMatchObject({ library: 'broken', program: expect.stringContaining('--swap-results') });
+    expect(report.checks.find((c: { name: string }) => c.name === 'batch-order').status).toBe('fail');
   });
 
   it('refuses a JavaScript target, both or neither of --program and --target, and a time limit out of range', async () => {
