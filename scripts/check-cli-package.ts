@@ -1,7 +1,7 @@
 /**
  * The packed CLI from an empty folder, as a maintainer gets it (docs/cli-package.md), run by
- * `npm test` as a step of its own beside the static checks (25–60 s wall on the shared 2-core
- * machine, most of it npm writing 4,000 files; too long for a jest file). Builds the package into
+ * `npm test` as a step of its own beside the static checks (13 s wall on the quiet 2-core
+ * machine, most of it npm writing ~2,000 files; too long for a jest file). Builds the package into
  * a temporary folder outside the repository and packs it; runs the shell recipe of
  * docs/ci-recipes.md (docs/ci/sheetkeeper-check.sh) with it, which installs the tarball with
  * `npm install --offline` (the dependencies are bundled) into an empty folder, runs a principal and
