@@ -29,7 +29,7 @@ PG_PORT="$(choose_pg_port)"
 # scripts and the test set-up use it. The application (server, worker, seed, migrations) connects
 # as PG_APP_USER (password in pg-app-password, URL in .data/pg-url): no SUPERUSER, CREATEDB,
 # CREATEROLE, REPLICATION or BYPASSRLS, and the owner of its own databases only, which is what
-# migrations and pg-boss's own schema need.
+# migrations need.
 PG_USER=sheetkeeper
 PG_APP_USER=sheetkeeper_app
 source "$ROOT/scripts/secret-files.sh"
