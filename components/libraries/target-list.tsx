@@ -5,6 +5,7 @@ import { libraryKey } from '../../shared/library-key';
 import type { TargetView } from '../../shared/target-view';
 import { QueryState } from '../ui/query-state';
 import { entryWords } from './entry-words';
+import { STATED_CONVENTION_WORDS } from './stated-convention-words';
 import { SkText } from '../ui/sk-text';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
@@ -79,6 +80,7 @@ export function TargetList({ onOpenTarget, onOpenMatrix }: TargetListProps) {
                     </SkText>
                     <Text style={styles.settings}>{settingsWords(t.settings) || 'no settings'}</Text>
                     {entryWords(t.entries) ? <Text style={styles.settings}>{entryWords(t.entries)}</Text> : null}
+                    {t.convention ? <Text style={styles.settings}>{STATED_CONVENTION_WORDS[t.convention]}</Text> : null}
                     {t.installed ? null : (
                       <Text style={styles.settings}>× not installed any more: nothing can be computed for it</Text>
                     )}

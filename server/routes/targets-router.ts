@@ -2,23 +2,25 @@ import { Router } from 'express';
 import type { DataSource } from 'typeorm';
 import { discoverTargets } from '../../harness';
 import { ROLES } from '../../shared/roles';
-import type { TargetEntry } from '../../shared/target-entry';
+import type { TargetIdentity } from '../../shared/target-identity';
 import { TargetRow } from '../entities/target-row';
 import { declareRoute } from '../http/declare-route';
 import { readyTargetSources } from '../targets/ready-target-sources';
 
 /**
  * The targets this server has seen, installed ones first, each installed one with its entries
- * (shared/target-entry.ts). Entries come from the adapters, not the table: discovery loads no
+ * (shared/target-entry.ts) and the convention it states on its cuts, if any. Entries come from the adapters, not the table: discovery loads no
  * library and is read once per router (~20 ms, Python started once); an admin-added target's come
  * from what its program described, stored with its source.
  */
 export function targetsRouter(dataSource: DataSource): Router {
   const router = Router();
-  let entriesByName: Map<string, TargetEntry[]> | null = null;
-  const entriesOf = (name: string): TargetEntry[] | undefined => {
-    entriesByName ??= new Map(discoverTargets().map((t) => [t.name, t.entries ?? []]));
-    return entriesByName.get(name);
+  let discovered: Map<string, Pick<TargetIdentity, 'entries' | 'convention'>> | null = null;
+  const discoveredOf = (name: string) => {
+    discovered ??= new Map(
+      discoverTargets().map((t) => [t.name, { entries: t.entries ?? [], convention: t.convention }]),
+    );
+    return discovered.get(name);
   };
   declareRoute(
     router,
@@ -35,13 +37,21 @@ export function targetsRouter(dataSource: DataSource): Router {
         .find({ order: { installed: 'DESC', library: 'ASC', name: 'ASC' } });
       const added = new Map(
         (await readyTargetSources(dataSource.manager)).flatMap((s) =>
-          s.targets.map((t) => [t.name, t.entries] as const),
+          s.targets.map((t) => [t.name, { entries: t.entries, convention: t.convention }] as const),
         ),
       );
       res.json({
         targets: targets.map(({ name, library, version, settings, installed }) => {
-          const entries = installed ? (entriesOf(name) ?? added.get(name)) : undefined;
-          return { name, library, version, settings, installed, ...(entries ? { entries } : {}) };
+          const known = installed ? (discoveredOf(name) ?? added.get(name)) : undefined;
+          return {
+            name,
+            library,
+            version,
+            settings,
+            installed,
+            ...(known?.entries ? { entries: known.entries } : {}),
+            ...(known?.convention ? { convention: known.convention } : {}),
+          };
         }),
       });
     },

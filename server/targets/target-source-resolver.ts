@@ -111,6 +111,6 @@ export class TargetSourceResolver {
 }
 
 /** What is stored of a descriptor: its identity, never its opener. */
-function identityOf({ name, library, version, settings, entries }: TargetDescriptor): TargetIdentity {
-  return { name, library, version, settings, ...(entries ? { entries } : {}) };
+function identityOf({ name, library, version, settings, entries, convention }: TargetDescriptor): TargetIdentity {
+  return { name, library, version, settings, ...(entries ? { entries } : {}), ...(convention ? { convention } : {}) };
 }

@@ -29,5 +29,29 @@ describe('TargetList', () => {
       'Values go in through: complex (new Complex(re, im), the default) · string (new Complex("re±im i"))',
     );
     expect(card.textContent?.match(/Values go in through/g)).toHaveLength(1);
+    expect(card.textContent).not.toContain('States');
+  });
+
+  it('says which convention a target states on its cuts and what that spares it', async () => {
+    fakeApiRoutes({
+      'GET /api/targets': {
+        status: 200,
+        body: {
+          targets: [
+            {
+              ...installedTargetView('glibc@2.36', [['cmplx', 'CMPLX(re, im)']]),
+              library: 'glibc',
+              version: '2.36',
+              convention: 'signed-zero',
+            },
+          ],
+        },
+      },
+    });
+    renderWithClient(<TargetList onOpenTarget={() => undefined} onOpenMatrix={() => undefined} />);
+    const card = await screen.findByTestId('library-glibc');
+    expect(card.textContent).toContain(
+      'States signed zeros on its cuts (ISO C Annex G): counter-clockwise suites skip the points where the two conventions differ.',
+    );
   });
 });

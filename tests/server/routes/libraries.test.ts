@@ -33,6 +33,15 @@ describe('GET /api/targets', () => {
     ]);
     expect(byName.get('mathjs@15.2.0/number')?.entries?.[0]).toMatchObject({ name: 'number', default: true });
   });
+
+  it('gives the convention a target states on its cuts, and none for a library that states none', async () => {
+    const res = await reader.get('/api/targets');
+    const targets = res.body.targets as { name: string; library: string; convention?: string }[];
+    const cmath = targets.find((x) => x.library === 'cmath');
+    // Python's cmath documents that the sign of a zero picks the side of a cut (from memory); the adapter states it.
+    if (cmath) expect(cmath.convention).toBe('signed-zero');
+    expect(targets.find((x) => x.name === 'complex.js@2.4.1')?.convention).toBeUndefined();
+  });
 });
 
 describe('GET /api/targets/:name/fingerprint', () => {
