@@ -67,7 +67,10 @@ export const localTargetSource = z.strictObject({
 export const programTargetSource = z.strictObject({
   kind: z.literal('program'),
   /** The program and its arguments, not through a shell: ["python3", "adapter.py"]. */
-  command: z.array(plain(4096)).min(1).max(64),
+  command: z
+    .array(plain(4096))
+    .min(1, 'must name the program to run, then its arguments')
+    .max(64, 'takes at most 64 words (the program and 63 arguments)'),
   /** Working folder, relative like `local.path`. */
   cwd: plain(4096).optional(),
   /** Per-request time limit in ms (stdio-target.ts's default when absent). */
