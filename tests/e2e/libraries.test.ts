@@ -8,6 +8,7 @@ import { signIn } from './support/sign-in';
 const b = browserPerTest();
 
 const ravi = DEMO_USERS.find((u) => u.email === 'ravi@sheetkeeper.test')!;
+const odile = DEMO_USERS.find((u) => u.role === 'admin')!;
 
 describe('Libraries', () => {
   it("opens a library's fingerprint with its evidence, then the cut maps of two functions", async () => {
@@ -61,6 +62,26 @@ describe('Libraries', () => {
     expect(new URL(b.page.url()).searchParams.get('fn')).toBe('acot');
     await saveScreenshots(b.page, 'library-cut-map-acot', () => verdict.getByText(/× Differs/).waitFor());
   }, 180_000);
+
+  it('lets an admin add a program in another language as a target, which gets ready in the background, then remove it', async () => {
+    await signIn(b.page, odile.email, odile.password);
+    await goTo(b.page, 'Libraries');
+    const form = b.page.getByTestId('target-source-form');
+    await form.getByRole('radio', { name: /Program/ }).click();
+    // An empty command is refused beside its field, by the same schema the server uses.
+    await b.page.getByTestId('target-source-command').fill(' ');
+    await form.getByText('must name the program to run', { exact: false }).waitFor();
+    // Python's cmath adapter under a name of its own (the built-in cmath target has the one it describes).
+    await b.page.getByTestId('target-source-command').fill('/usr/bin/python3 harness/adapters/python/cmath_adapter.py');
+    await b.page.getByTestId('target-source-name').fill('cmath-e2e@1');
+    await form.getByRole('button', { name: 'Add target' }).click();
+    const list = b.page.getByTestId('target-source-list');
+    await list.getByText('Ready to plan: cmath-e2e@1').waitFor({ timeout: 30_000 });
+    await saveScreenshots(b.page, 'libraries-added-target', () => list.getByText('cmath-e2e@1').first().waitFor());
+    await list.getByRole('button', { name: 'Remove cmath-e2e@1' }).click();
+    await b.page.getByRole('button', { name: 'Yes, remove' }).click();
+    await list.getByText('cmath-e2e@1').first().waitFor({ state: 'detached' });
+  }, 90_000);
 
   it('opens the version matrix of complex.js and a changed point', async () => {
     await signIn(b.page, ravi.email, ravi.password);
