@@ -2,16 +2,11 @@ import { spawn, type ChildProcessWithoutNullStreams } from 'node:child_process';
 import path from 'node:path';
 import { createInterface } from 'node:readline';
 import type { ProgramTargetSource } from '../../shared/target-source';
+import { STDIO_MAX_LINE_BYTES } from '../adapters/stdio-max-line-bytes';
 import { STDIO_TIME_LIMITS } from '../adapters/stdio-time-limits';
 import type { Exchange } from './exchange';
 
 const STDERR_TAIL = 2048;
-/**
- * A line this long is not an answer: cmath answers the seeded 1,000-item batch in 50,812 bytes
- * (measured), so the harness's largest slice (20,000 points) in ~1 MB; 16 MB stops a runaway writer
- * long before it fills memory.
- */
-const MAX_LINE_BYTES = 16 * 1024 * 1024;
 /** Stray lines kept per gap between requests; a report quotes only the first. */
 const MAX_STRAYS = 100;
 /** The harness closes a program's stdin and kills it 1 s later (stdio-target.ts, `close`). */
@@ -83,8 +78,8 @@ export class ProgramChannel {
     proc.stdout.on('data', (chunk: Buffer) => {
       const newline = chunk.lastIndexOf(10);
       unended = newline < 0 ? unended + chunk.length : chunk.length - newline - 1;
-      if (unended > MAX_LINE_BYTES) {
-        ended(`wrote more than ${MAX_LINE_BYTES / 1024 / 1024} MB without ending the line`);
+      if (unended > STDIO_MAX_LINE_BYTES) {
+        ended(`wrote more than ${STDIO_MAX_LINE_BYTES / 1024 / 1024} MB without ending the line`);
         proc.kill('SIGKILL');
       }
     });

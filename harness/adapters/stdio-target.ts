@@ -6,6 +6,7 @@ import type { CallResult } from './call-result';
 import type { ComplexPair } from './complex-pair';
 import { findEntry } from './find-entry';
 import { OP_ARITY } from './op-arity';
+import { STDIO_MAX_LINE_BYTES } from './stdio-max-line-bytes';
 import { STDIO_TIME_LIMITS } from './stdio-time-limits';
 import type { Target } from './target';
 import type { TargetIdentity } from '../../shared/target-identity';
@@ -87,6 +88,17 @@ export function stdioTarget(options: StdioTargetOptions): StdioTarget {
       child = null;
       pending?.onExit(what);
     };
+    // A line without end would grow in memory until the time limit: a program that writes more than
+    // STDIO_MAX_LINE_BYTES without a newline is stopped at once and its batch fails, saying so.
+    let unended = 0;
+    proc.stdout.on('data', (chunk: Buffer) => {
+      const newline = chunk.lastIndexOf(10);
+      unended = newline < 0 ? unended + chunk.length : chunk.length - newline - 1;
+      if (unended > STDIO_MAX_LINE_BYTES && child === proc) {
+        ended(`program wrote more than ${STDIO_MAX_LINE_BYTES / 1024 / 1024} MB without ending the line`);
+        proc.kill('SIGKILL');
+      }
+    });
     proc.on('exit', (code, signal) => ended(`program exited with ${signal ? `signal ${signal}` : `code ${code}`}`));
     proc.on('error', (e) => ended(`program could not run: ${e.message}`));
     return proc;

@@ -105,6 +105,16 @@ describe('stdioTarget', () => {
     expect(target.processId()).not.toBe(proc.pid);
   }, 20_000);
 
+  it('stops a program that writes more than 16 MB without ending the line, long before the time limit', async () => {
+    target = misbehaving(60_000);
+    const started = Date.now();
+    expect(await target.evaluate('acosh', [[[2, 0]]])).toEqual([
+      { error: 'program wrote more than 16 MB without ending the line' },
+    ]);
+    expect(Date.now() - started).toBeLessThan(30_000);
+    expect(await target.evaluate('sqrt', [[[9, 0]]])).toEqual([{ value: [9, 0] }]);
+  }, 40_000);
+
   it('turns a line that is not JSON, a wrong id and a short result list into error results', async () => {
     target = misbehaving();
     expect(await target.evaluate('asin', [[[0, 0]]])).toEqual([
