@@ -5,8 +5,9 @@ import { TargetList } from '../../../components/libraries/target-list';
 import { TargetSourceForm } from '../../../components/libraries/target-source-form';
 import { TargetSourceList } from '../../../components/libraries/target-source-list';
 import { TitledPanel } from '../../../components/ui/titled-panel';
+import { WorkerList } from '../../../components/libraries/worker-list';
 
-/** Libraries: the installed targets by library, each version with its settings; then the targets admins added. */
+/** Libraries: the installed targets by library, each version with its settings; then the targets admins added; then the workers running now and their targets. */
 export default function LibrariesScreen() {
   const { data: me } = useMe();
   const admin = me?.role === 'admin';
@@ -30,6 +31,13 @@ export default function LibrariesScreen() {
       >
         {admin ? <TargetSourceForm /> : null}
         <TargetSourceList canRemove={admin} />
+      </TitledPanel>
+      <TitledPanel
+        title="Workers running now"
+        lead="The processes that take shards, on this machine or others, each with the targets it has. A pair waits until a worker that has its target is running."
+        testID="live-workers-panel"
+      >
+        <WorkerList />
       </TitledPanel>
     </ScreenBody>
   );

@@ -1,0 +1,45 @@
+import { StyleSheet, View } from 'react-native';
+import { formatDate } from '../../client/format-date';
+import { useLiveWorkers } from '../../client/use-live-workers';
+import { theme } from '../../constants/theme';
+import { QueryState } from '../ui/query-state';
+import { SkText } from '../ui/sk-text';
+
+/**
+ * The worker processes taking shards now (the server's own and each `npm run worker`, on any
+ * machine), each with the targets it has: a pair whose target none of them has waits for one that
+ * does. Asked again every 5 s while shown.
+ */
+export function WorkerList() {
+  const workers = useLiveWorkers(true);
+  if (workers.isPending) return <QueryState state="loading" />;
+  if (workers.isError)
+    return <QueryState state="error" message={workers.error.message} onRetry={() => void workers.refetch()} />;
+  if (workers.data.length === 0)
+    return <QueryState state="empty" message="No worker is running: runs wait until one starts." />;
+  return (
+    <View testID="worker-list">
+      {workers.data.map((w) => (
+        <View key={w.id} style={styles.row} testID={`worker-${w.label}`}>
+          <SkText variant="label">{w.label}</SkText>
+          <SkText variant="caption">
+            Running since {formatDate(w.startedAt)} · {w.targets.length} target{w.targets.length === 1 ? '' : 's'}
+          </SkText>
+          <SkText variant="mono" style={styles.targets}>
+            {w.targets.length > 0 ? w.targets.join(', ') : 'none: it takes no shards'}
+          </SkText>
+        </View>
+      ))}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  row: {
+    paddingVertical: theme.space(2),
+    borderTopWidth: 1,
+    borderTopColor: theme.color.rule,
+    gap: 2,
+  },
+  targets: { wordBreak: 'break-word' } as object,
+});
