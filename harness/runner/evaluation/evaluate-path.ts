@@ -86,14 +86,17 @@ export async function evaluatePath(evaluation: PathEvaluation): Promise<PathResu
       { name: target.name, convention: target.convention },
       evaluation.suite.convention,
     );
+    // Equal values mean the same under both; a zero's sign counts only where the expectation compares
+    // the value's zero signs (principal signed-zero suites; never a regular branch's).
+    const signs = evaluation.expectation.zeroSigns;
+    const same = (x: number, y: number) => Object.is(x, y) || (x === y && !signs);
     for (let i = 0; theirs && i < n; i++) {
       if (notApplicable.has(i) || expected.skipped.has(i) || theirs.skipped.has(i)) continue;
-      const [a, b] = [expected.re[i] as number, expected.im[i] as number];
-      const [c, d] = [theirs.re[i] as number, theirs.im[i] as number];
-      // Equal values (zero signs included when the suite compares them) mean the same under both.
-      const same = (x: number, y: number) =>
-        Object.is(x, y) || (x === y && !zeroSigns) || (Number.isNaN(x) && Number.isNaN(y));
-      if (!same(a, c) || !same(b, d)) notApplicable.set(i, reason);
+      if (
+        !same(expected.re[i] as number, theirs.re[i] as number) ||
+        !same(expected.im[i] as number, theirs.im[i] as number)
+      )
+        notApplicable.set(i, reason);
     }
   }
   const actual = await evaluateProgram(
