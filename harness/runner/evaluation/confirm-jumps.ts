@@ -118,6 +118,7 @@ export async function confirmJumps(
       Float64Array.from(mids, (m) => m.z.re),
       Float64Array.from(mids, (m) => m.z.im),
       run.signal,
+      run.entry.name,
     );
     splitting.forEach((k, j) => {
       if (expected.skipped.has(j) || library.errors.has(j)) {

@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import type { Diagnosis } from '../../../../shared/diagnosis';
 import type { SuiteTargetResult } from '../../../../shared/run-result';
+import type { Target } from '../../../../harness/adapters/target';
 import { evaluateSuite } from '../../../../harness/runner/evaluation/evaluate-suite';
 import { describeOutcome } from '../../../../harness/runner/formats/describe-outcome';
 import { seededReferenceCache } from '../../../setup/seeded-reference-cache';
@@ -40,6 +41,29 @@ describe('confirmJumps through evaluateSuite', () => {
     const found = diagnoses(r);
     expect(found.length).toBeGreaterThan(10);
     expect(r.paths[0]!.jumps!.library.length).toBeGreaterThan(r.paths[0]!.jumps!.expected.length);
+    expect(found.filter((d) => d.kind === 'misplaced-cut')).toEqual([]);
+  });
+
+  it('refines a jump through the entry the points went in through, not the target’s default', async () => {
+    // The steep but continuous rise of the first test lives only behind the entry "steep"; the
+    // default entry is a perfect √. Midpoints built through the default would make the rise look
+    // like a jump that stays (a false misplaced cut).
+    const steep = referenceTarget('two-ways@1', (op, [z], v) =>
+      op === 'sqrt' ? [v[0] + 0.5 + Math.atan((angle(z!) - 1) / 1e-6) / Math.PI, v[1]] : v,
+    );
+    const plain = referenceTarget('two-ways@1');
+    const carries = { imaginaryPart: true, realZeroSign: true, imaginaryZeroSign: true };
+    const twoWays: Target = {
+      ...plain,
+      entries: [
+        { name: 'plain', call: 'plain(re, im)', default: true, carries },
+        { name: 'steep', call: 'steep(re, im)', default: false, carries },
+      ],
+      evaluate: (op, calls, entry) => (entry === 'steep' ? steep : plain).evaluate(op, calls),
+    };
+    const r = await evaluateSuite({ ...suite, entry: 'steep' }, twoWays, { cache });
+    const found = diagnoses(r);
+    expect(found.length).toBeGreaterThan(10);
     expect(found.filter((d) => d.kind === 'misplaced-cut')).toEqual([]);
   });
 
