@@ -10,10 +10,10 @@ import { jsMathTarget } from './js-math-target';
 import { mathjsTarget } from './mathjs-target';
 import { NUMPY_ENTRIES } from './numpy-entries';
 import { pythonVersions } from './python-versions';
+import { targetIdentityOf } from '../../shared/target-identity-of';
 import { stdioTarget } from './stdio-target';
 import { systemLibcVersion } from './system-libc-version';
 import type { TargetEntry } from '../../shared/target-entry';
-import type { TargetIdentity } from '../../shared/target-identity';
 import type { TargetDescriptor } from './target-descriptor';
 
 /** Debian's interpreter (docs/conventions.md): the python3 first on PATH may be another one. */
@@ -45,7 +45,10 @@ export function discoverTargets(
     if (!installed) continue;
     const { name, version } = installed;
     if (name === 'complex.js') {
-      targets.push({ ...describe(complexJsTarget(alias, version)), open: () => complexJsTarget(alias, version) });
+      targets.push({
+        ...targetIdentityOf(complexJsTarget(alias, version)),
+        open: () => complexJsTarget(alias, version),
+      });
     } else if (name === 'mathjs') {
       // mathjs brings its own complex.js; which one it resolves to is part of the target.
       // Node looks in the package's own node_modules first, then the project's.
@@ -54,12 +57,12 @@ export function discoverTargets(
       for (const entry of ['complex', 'number'] as const) {
         for (const predictable of [false, true]) {
           const open = () => mathjsTarget(alias, version, entry, predictable, complexJs);
-          targets.push({ ...describe(open()), open });
+          targets.push({ ...targetIdentityOf(open()), open });
         }
       }
     }
   }
-  targets.push({ ...describe(jsMathTarget()), open: jsMathTarget });
+  targets.push({ ...targetIdentityOf(jsMathTarget()), open: jsMathTarget });
   const versions = existsSync(python) ? pythonVersions(python) : null;
   // Python's own cmath, then NumPy when that Python has it: one adapter script each.
   const adapters: [string, string | null | undefined, string, readonly TargetEntry[]][] = [
@@ -83,27 +86,15 @@ export function discoverTargets(
         command: python,
         args: [script],
       });
-    targets.push({ ...describe(open()), open });
+    targets.push({ ...targetIdentityOf(open()), open });
   }
   if (existsSync(compiler)) {
     const libc = systemLibcVersion();
     const open = () => cComplexTarget({ ...libc, compiler });
-    targets.push({ ...describe(open()), open });
+    targets.push({ ...targetIdentityOf(open()), open });
   }
   return targets.sort(
     (a, b) =>
       a.library.localeCompare(b.library) || compareVersions(a.version, b.version) || a.name.localeCompare(b.name),
   );
-}
-
-/** The naming fields of a target and its entries; creating a target object loads nothing. */
-function describe(t: TargetIdentity): TargetIdentity {
-  return {
-    name: t.name,
-    library: t.library,
-    version: t.version,
-    settings: t.settings,
-    entries: t.entries,
-    ...(t.convention ? { convention: t.convention } : {}),
-  };
 }

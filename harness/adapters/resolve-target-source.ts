@@ -52,8 +52,8 @@ export async function resolveTargetSource(
   const baseDir = path.resolve(options.baseDir);
   const cacheDir = path.resolve(options.cacheDir);
   if (source.kind === 'program') {
-    const { name, library, version, entries } = await describeProgram(source, baseDir);
-    const identity = { name, library, version, ...(entries ? { entries } : {}) };
+    const { name, library, version, entries, convention } = await describeProgram(source, baseDir);
+    const identity = { name, library, version, ...(entries ? { entries } : {}), ...(convention ? { convention } : {}) };
     return [configuredTarget({ kind: 'program', source, baseDir, identity })];
   }
   if (source.kind === 'npm') {

@@ -1,3 +1,4 @@
+import { targetIdentityOf } from '../../shared/target-identity-of';
 import type { TargetDescriptor } from '../adapters/target-descriptor';
 import type { ConfiguredTargetSpec } from './configured-target-spec';
 import { openTarget } from './open-target';
@@ -10,13 +11,8 @@ const OPEN_TARGET_MODULE = require.resolve('./open-target');
  * this process opens it, and how a worker thread does (`--workers N`), from the same spec.
  */
 export function configuredTarget(spec: ConfiguredTargetSpec): TargetDescriptor {
-  const { name, library, version, settings, entries } = openTarget(spec);
   return {
-    name,
-    library,
-    version,
-    settings,
-    ...(entries ? { entries } : {}),
+    ...targetIdentityOf(openTarget(spec)),
     open: () => openTarget(spec),
     worker: { module: OPEN_TARGET_MODULE, args: [spec] },
   };

@@ -1,6 +1,7 @@
 import type { DataSource } from 'typeorm';
-import { discoverTargets, resolveTargetSource, type TargetDescriptor } from '../../harness';
+import { discoverTargets, resolveTargetSource } from '../../harness';
 import type { TargetIdentity } from '../../shared/target-identity';
+import { targetIdentityOf } from '../../shared/target-identity-of';
 import { describeError } from '../database/describe-error';
 import { TargetRow } from '../entities/target-row';
 import { TargetSourceRow } from '../entities/target-source-row';
@@ -58,7 +59,7 @@ export class TargetSourceResolver {
     if (!row || row.state !== 'resolving') return;
     let identities: TargetIdentity[];
     try {
-      identities = (await this.resolve(row.source, this.options)).map(identityOf);
+      identities = (await this.resolve(row.source, this.options)).map(targetIdentityOf);
       if (identities.length === 0) throw new Error('it names no target');
     } catch (err) {
       await this.fail(id, err instanceof Error ? err.message : String(err));
@@ -111,6 +112,3 @@ export class TargetSourceResolver {
 }
 
 /** What is stored of a descriptor: its identity, never its opener. */
-function identityOf({ name, library, version, settings, entries, convention }: TargetDescriptor): TargetIdentity {
-  return { name, library, version, settings, ...(entries ? { entries } : {}), ...(convention ? { convention } : {}) };
-}

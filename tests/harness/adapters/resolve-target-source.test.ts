@@ -246,6 +246,8 @@ describe('resolveTargetSource', () => {
     );
     expect(reopened.name).toBe(target!.name);
     expect(await sqrtMinusFour(reopened)).toEqual({ value: [0, -2] });
+    // The convention its describe states reaches the descriptor and the reopened target alike.
+    expect([target!.convention, reopened.convention]).toEqual(['signed-zero', 'signed-zero']);
   });
 
   describe('in a worker thread', () => {
