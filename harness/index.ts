@@ -5,6 +5,7 @@
  */
 // Targets: discovering the installed libraries, and the interfaces that open and evaluate them.
 export { discoverTargets } from './adapters/discover-targets';
+export { installedTargets } from './adapters/installed-targets';
 export { resolveTargetSource } from './adapters/resolve-target-source';
 export { findEntry } from './adapters/find-entry';
 export type { Target } from './adapters/target';

@@ -2,7 +2,7 @@ import { formatDouble } from '../reference/numbers/format-double';
 import { parseDouble } from '../reference/numbers/parse-double';
 import { complexJsEntryWays } from './complex-js-entry-ways';
 import type { ComplexPair } from './complex-pair';
-import { discoverTargets } from './discover-targets';
+import { installedTargets } from './installed-targets';
 import type { EntryPointFinding } from './entry-point-finding';
 import { mathjsEntryWays } from './mathjs-entry-ways';
 import { PROBE_INPUTS } from './probe-inputs';
@@ -19,7 +19,7 @@ import type { TargetDescriptor } from './target-descriptor';
  * JavaScript's Math has no complex type and is not probed.
  */
 export async function probeEntryPoints(
-  descriptors: TargetDescriptor[] = discoverTargets(),
+  descriptors: TargetDescriptor[] = installedTargets(),
   inputs: readonly ComplexPair[] = PROBE_INPUTS,
 ): Promise<EntryPointFinding[]> {
   const findings: EntryPointFinding[] = [];

@@ -1,4 +1,4 @@
-import { discoverTargets } from './discover-targets';
+import { installedTargets } from './installed-targets';
 import type { TargetIdentity } from '../../shared/target-identity';
 import type { TargetDescriptor } from './target-descriptor';
 
@@ -9,7 +9,7 @@ import type { TargetDescriptor } from './target-descriptor';
  * `if (command === 'targets') { process.stdout.write(JSON.stringify(listTargets(), null, 2) + '\n'); return 0; }`
  */
 export function listTargets(
-  known: readonly TargetDescriptor[] = discoverTargets(),
+  known: readonly TargetDescriptor[] = installedTargets(),
 ): (TargetIdentity & { from?: string })[] {
   return known.map(({ name, library, version, settings, entries, convention, from }) => ({
     name,

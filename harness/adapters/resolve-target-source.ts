@@ -9,7 +9,7 @@ import { noAdapterError } from '../sources/no-adapter-error';
 import { packageFolderTargets } from '../sources/package-folder-targets';
 import { tarballManifest } from '../sources/tarball-manifest';
 import { describeProgram } from './describe-program';
-import { discoverTargets } from './discover-targets';
+import { installedTargets } from './installed-targets';
 import type { TargetDescriptor } from './target-descriptor';
 
 export interface ResolveSourceOptions {
@@ -18,8 +18,8 @@ export interface ResolveSourceOptions {
   /** Where npm versions and unpacked tarballs are kept, one folder per package and version. */
   cacheDir: string;
   /**
-   * The installed targets, when the caller has them already: discoverTargets() starts Python to
-   * read its versions (131 ms here), so a command resolving several sources reads them once.
+   * The installed targets, when the caller has its own list; absent, installedTargets() (discovered
+   * once per process: discovery starts Python, 131 ms here).
    */
   installed?: readonly TargetDescriptor[];
 }
@@ -46,9 +46,9 @@ export async function resolveTargetSource(
   options: ResolveSourceOptions,
 ): Promise<TargetDescriptor[]> {
   let installed = options.installed;
-  /** The installed targets of one library version (discover-targets.ts), read at most once a call. */
+  /** The installed targets of one library version (installed-targets.ts). */
   const installedAs = (library: string, version: string): TargetDescriptor[] =>
-    (installed ??= discoverTargets()).filter((t) => t.library === library && t.version === version);
+    (installed ??= installedTargets()).filter((t) => t.library === library && t.version === version);
   const baseDir = path.resolve(options.baseDir);
   const cacheDir = path.resolve(options.cacheDir);
   if (source.kind === 'program') {

@@ -1,5 +1,5 @@
 import { defaultVariant } from '../adapters/default-variant';
-import { discoverTargets } from '../adapters/discover-targets';
+import { installedTargets } from '../adapters/installed-targets';
 import { resolveTargetSource } from '../adapters/resolve-target-source';
 import type { TargetDescriptor } from '../adapters/target-descriptor';
 import { BadInput } from './bad-input';
@@ -34,7 +34,7 @@ export async function commandTargets(
   options: { targetFlag?: string; cwd?: string } = {},
 ): Promise<CommandTargets> {
   const { rest, sources, cacheDir } = readTargetSources(argv, options.cwd);
-  const installed = discoverTargets();
+  const installed = installedTargets();
   // A few at a time: each npm install is a process of its own, and 64 at once would swamp the machine.
   const settled: PromiseSettledResult<TargetDescriptor[]>[] = [];
   for (let i = 0; i < sources.length; i += RESOLVING_AT_ONCE)

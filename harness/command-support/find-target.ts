@@ -1,4 +1,4 @@
-import { discoverTargets } from '../adapters/discover-targets';
+import { installedTargets } from '../adapters/installed-targets';
 import { knownTargetsText } from '../adapters/known-targets-text';
 import type { TargetDescriptor } from '../adapters/target-descriptor';
 import { BadInput } from './bad-input';
@@ -8,7 +8,7 @@ import { BadInput } from './bad-input';
  * "cmath@3.11.2", a configured "complex.js@2.4.3+local"), among `known` (the installed ones by default;
  * a command passes the configured ones too, command-targets.ts). An unknown name is BadInput listing both kinds.
  */
-export function findTarget(name: string, known: readonly TargetDescriptor[] = discoverTargets()): TargetDescriptor {
+export function findTarget(name: string, known: readonly TargetDescriptor[] = installedTargets()): TargetDescriptor {
   const found = known.find((d) => d.name === name);
   if (!found) {
     const kinds = known.some((d) => d.from !== undefined) ? 'installed or configured' : 'installed';

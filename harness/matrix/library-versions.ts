@@ -1,5 +1,5 @@
 import { compareVersions } from '../adapters/compare-versions';
-import { discoverTargets } from '../adapters/discover-targets';
+import { installedTargets } from '../adapters/installed-targets';
 import type { TargetDescriptor } from '../adapters/target-descriptor';
 
 /** A target's name without its version: "mathjs@15.2.0/complex" → "mathjs/complex". */
@@ -13,7 +13,7 @@ const withoutVersion = (name: string) => name.replace(/@[^/]*/, '');
  */
 export function libraryVersions(
   library: string,
-  known: readonly TargetDescriptor[] = discoverTargets(),
+  known: readonly TargetDescriptor[] = installedTargets(),
 ): TargetDescriptor[] {
   return known
     .filter((d) => withoutVersion(d.name) === library)

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import type { DataSource } from 'typeorm';
-import { discoverTargets } from '../../harness';
+import { installedTargets } from '../../harness';
 import { ROLES } from '../../shared/roles';
 import type { TargetIdentity } from '../../shared/target-identity';
 import { TargetRow } from '../entities/target-row';
@@ -18,7 +18,7 @@ export function targetsRouter(dataSource: DataSource): Router {
   let discovered: Map<string, Pick<TargetIdentity, 'entries' | 'convention'>> | null = null;
   const discoveredOf = (name: string) => {
     discovered ??= new Map(
-      discoverTargets().map((t) => [t.name, { entries: t.entries ?? [], convention: t.convention }]),
+      installedTargets().map((t) => [t.name, { entries: t.entries ?? [], convention: t.convention }]),
     );
     return discovered.get(name);
   };

@@ -8,10 +8,10 @@
  * next beat takes the lock again. Another class than the shards' lock, so a worker's key never
  * meets a shard's.
  *
- * Its targets are looked for again every `targetsRefreshMs`, not at every beat: finding them
- * (discoverTargets) starts Python and probes the C library, 52–76 ms of wall time with the event
- * loop blocked and 7 ms of this process's CPU, measured on the shared 2-core machine; once a
- * minute keeps that near 0.1 % of the time, and a target an admin adds is announced within a minute.
+ * Its targets are looked for again every `targetsRefreshMs`, not at every beat, so that a target an
+ * admin adds is announced within a minute. Only the admin-added ones can change: the installed ones
+ * are discovered once per process (installed-targets.ts), the same list the worker opens shards from,
+ * so it never announces a target it cannot open.
  */
 export const WORKER_LIVENESS = {
   lockClass: 7342,

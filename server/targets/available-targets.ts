@@ -1,5 +1,5 @@
 import type { DataSource } from 'typeorm';
-import { discoverTargets, type TargetDescriptor } from '../../harness';
+import { installedTargets, type TargetDescriptor } from '../../harness';
 import { readyTargetSources } from './ready-target-sources';
 import { sourceRunsHere } from './source-runs-here';
 import { targetSourceOptions } from './target-source-options';
@@ -27,5 +27,5 @@ export async function availableTargets(
         },
       })),
     );
-  return [...discoverTargets(), ...added];
+  return [...installedTargets(), ...added];
 }

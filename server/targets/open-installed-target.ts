@@ -1,9 +1,10 @@
-import { discoverTargets, type Target, type TargetDescriptor } from '../../harness';
+import { installedTargets, type Target } from '../../harness';
 
-let installed: Map<string, TargetDescriptor> | null = null;
-
-/** Opens an installed target by name (discovered once per process, loading no library until used); null if absent. */
+/** Opens an installed target by name (installed-targets.ts: discovered once per process, loading no library until used); null if absent. */
 export function openInstalledTarget(name: string): Target | null {
-  installed ??= new Map(discoverTargets().map((d) => [d.name, d]));
-  return installed.get(name)?.open() ?? null;
+  return (
+    installedTargets()
+      .find((d) => d.name === name)
+      ?.open() ?? null
+  );
 }

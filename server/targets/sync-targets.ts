@@ -1,5 +1,5 @@
 import type { DataSource } from 'typeorm';
-import { discoverTargets } from '../../harness';
+import { installedTargets } from '../../harness';
 import type { TargetIdentity } from '../../shared/target-identity';
 import { TargetRow } from '../entities/target-row';
 import { liveWorkerSql } from '../sql/live-worker-sql';
@@ -14,7 +14,7 @@ import { readyTargetSources } from './ready-target-sources';
  */
 export async function syncTargets(
   dataSource: DataSource,
-  found: TargetIdentity[] = discoverTargets(),
+  found: TargetIdentity[] = installedTargets(),
 ): Promise<number> {
   const now = new Date();
   return dataSource.transaction(async (tx) => {

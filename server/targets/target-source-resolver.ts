@@ -1,5 +1,5 @@
 import type { DataSource } from 'typeorm';
-import { discoverTargets, resolveTargetSource } from '../../harness';
+import { installedTargets, resolveTargetSource } from '../../harness';
 import type { TargetIdentity } from '../../shared/target-identity';
 import { targetIdentityOf } from '../../shared/target-identity-of';
 import { describeError } from '../database/describe-error';
@@ -82,7 +82,7 @@ export class TargetSourceResolver {
   }
 
   private async record(id: string, identities: TargetIdentity[]): Promise<void> {
-    this.builtIn ??= new Set(discoverTargets().map((d) => d.name));
+    this.builtIn ??= new Set(installedTargets().map((d) => d.name));
     const builtIn = this.builtIn;
     await this.dataSource.transaction(async (tx) => {
       await tx.query(TARGET_NAMES_LOCK_SQL);

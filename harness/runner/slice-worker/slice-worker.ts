@@ -1,6 +1,6 @@
 import { parentPort, workerData } from 'node:worker_threads';
 import type { Target } from '../../adapters/target';
-import { discoverTargets } from '../../adapters/discover-targets';
+import { installedTargets } from '../../adapters/installed-targets';
 import type { TargetDescriptor } from '../../adapters/target-descriptor';
 import { mathParse } from '../../expressions/math-parse';
 import { evaluatePair } from '../evaluation/evaluate-pair';
@@ -23,7 +23,7 @@ let current: AbortController | null = null;
 
 function openTarget(spec: NonNullable<TargetDescriptor['worker']>): Target {
   if ('discovered' in spec) {
-    const found = discoverTargets().find((d) => d.name === spec.discovered);
+    const found = installedTargets().find((d) => d.name === spec.discovered);
     if (!found) throw new Error(`no installed target named ${spec.discovered}`);
     return found.open();
   }
