@@ -92,7 +92,7 @@ export function runsRouter(dataSource: DataSource, runs: RunService): Router {
       responses: { 200: 'The cells (`cells`).', ...noRun },
     },
     async (_req, res, { params: { id } }) => {
-      await runs.get(id);
+      await runs.assertExists(id);
       const cells: RunMatrixCell[] = await dataSource.query(
         `SELECT s.suite_slug AS "suite", s.target_name AS "target", s.status, s.outcome, s.counts, s.by_class AS "byClass",
                 s.by_diagnosis AS "byDiagnosis", s.checked, s.errors, w.label AS "worker", ${noWorkerHasTargetSql('s')} AS "noWorkerHasTarget"
@@ -115,7 +115,7 @@ export function runsRouter(dataSource: DataSource, runs: RunService): Router {
       responses: { 200: 'The property results (`properties`).', ...noRun },
     },
     async (_req, res, { params: { id } }) => {
-      await runs.get(id);
+      await runs.assertExists(id);
       const rows: RunPropertyRow[] = await dataSource.query(
         `SELECT s.suite_slug AS "suite", s.target_name AS "target", p.outcome FROM property_results p JOIN shards s ON s.id = p.shard_id WHERE p.run_id = $1 ORDER BY s.suite_slug, s.target_name, p.law`,
         [id],

@@ -107,8 +107,16 @@ export class RunService {
 
   async get(id: string): Promise<RunView> {
     const run = await this.dataSource.getRepository(Run).findOne({ where: { id }, relations: RUN_RELATIONS });
-    if (!run) throw new HttpError(404, { kind: 'not-found', message: 'No run with that id.' });
+    if (!run) throw noRun();
     return toRunView(run, (await waitingTargets(this.dataSource, [run])).get(run.id) ?? []);
+  }
+
+  /**
+   * Answers 404 unless the run exists: for the run page's matrix and properties, polled every few
+   * seconds while a run is live, which need no view of the run (get's relations and waiting targets).
+   */
+  async assertExists(id: string): Promise<void> {
+    if (!(await this.dataSource.getRepository(Run).existsBy({ id }))) throw noRun();
   }
 
   /**
@@ -148,7 +156,7 @@ export class RunService {
     await this.dataSource.transaction(async (tx) => {
       const [locked] = await tx.query(`SELECT id FROM runs WHERE id = $1 FOR NO KEY UPDATE`, [id]);
       const run = locked ? await tx.getRepository(Run).findOneBy({ id }) : null;
-      if (!run) throw new HttpError(404, { kind: 'not-found', message: 'No run with that id.' });
+      if (!run) throw noRun();
       if (run.status !== 'queued' && run.status !== 'running')
         throw new HttpError(409, { kind: 'conflict', message: `The run is ${run.status} already.` });
       await tx.getRepository(Run).update(id, { status: 'cancelled', finishedAt: new Date() });
@@ -159,3 +167,5 @@ export class RunService {
     return this.get(id);
   }
 }
+
+const noRun = () => new HttpError(404, { kind: 'not-found', message: 'No run with that id.' });
