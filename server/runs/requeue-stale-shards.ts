@@ -1,6 +1,7 @@
 import type { DataSource } from 'typeorm';
 import type { ShardQueue } from './shard-queue';
 import { SHARD_LIVENESS } from './shard-liveness';
+import { advisoryLockHeldSql } from '../sql/advisory-lock-held-sql';
 
 /**
  * Puts back on the queue every running shard of a live run whose worker's advisory lock is gone
@@ -15,9 +16,7 @@ export async function requeueStaleShards(dataSource: DataSource, queue: ShardQue
          FROM runs r
         WHERE r.id = s.run_id AND r.status IN ('queued', 'running') AND s.status = 'running'
           AND s.claimed_at < clock_timestamp() - make_interval(secs => $2)
-          AND NOT EXISTS (SELECT 1 FROM pg_locks l
-                           WHERE l.locktype = 'advisory' AND l.granted AND l.database = (SELECT oid FROM pg_database WHERE datname = current_database())
-                             AND l.classid = $1::int::oid AND l.objid = hashtext(s.id::text)::oid AND l.objsubid = 2)
+          AND NOT ${advisoryLockHeldSql('$1', 's.id::text')}
        RETURNING s.id)
      SELECT id::text FROM stale`,
     [SHARD_LIVENESS.lockClass, SHARD_LIVENESS.claimGraceMs / 1000],

@@ -2,7 +2,7 @@ import type { DataSource } from 'typeorm';
 import { installedTargets } from '../../harness';
 import type { TargetIdentity } from '../../shared/target-identity';
 import { TargetRow } from '../entities/target-row';
-import { liveWorkerSql } from '../sql/live-worker-sql';
+import { liveWorkerTargetsSql } from '../sql/live-worker-targets-sql';
 import { installedTargetRows } from './installed-target-rows';
 import { readyTargetSources } from './ready-target-sources';
 
@@ -23,7 +23,7 @@ export async function syncTargets(
     // A target a live worker announces stays installed although this machine lacks it (announce-worker-targets.ts).
     await tx.query(
       `UPDATE targets SET installed = false
-        WHERE NOT EXISTS (SELECT 1 FROM workers w WHERE targets.name = ANY(w.targets) AND ${liveWorkerSql('w')})`,
+        WHERE name <> ALL(${liveWorkerTargetsSql()})`,
     );
     if (all.length > 0) {
       await tx.getRepository(TargetRow).upsert(installedTargetRows(all, now), ['name']);
