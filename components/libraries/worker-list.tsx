@@ -2,6 +2,7 @@ import { StyleSheet, View } from 'react-native';
 import { formatDate } from '../../client/format-date';
 import { useLiveWorkers } from '../../client/use-live-workers';
 import { theme } from '../../constants/theme';
+import { NO_LIVE_WORKER_WORDS, targetCountWords } from '../runs/describe-live-workers';
 import { QueryState } from '../ui/query-state';
 import { SkText } from '../ui/sk-text';
 
@@ -11,19 +12,18 @@ import { SkText } from '../ui/sk-text';
  * does. Asked again every 5 s while shown.
  */
 export function WorkerList() {
-  const workers = useLiveWorkers(true);
+  const workers = useLiveWorkers();
   if (workers.isPending) return <QueryState state="loading" />;
   if (workers.isError)
     return <QueryState state="error" message={workers.error.message} onRetry={() => void workers.refetch()} />;
-  if (workers.data.length === 0)
-    return <QueryState state="empty" message="No worker is running: runs wait until one starts." />;
+  if (workers.data.length === 0) return <QueryState state="empty" message={NO_LIVE_WORKER_WORDS} />;
   return (
     <View testID="worker-list">
       {workers.data.map((w) => (
         <View key={w.id} style={styles.row} testID={`worker-${w.label}`}>
           <SkText variant="label">{w.label}</SkText>
           <SkText variant="caption">
-            Running since {formatDate(w.startedAt)} · {w.targets.length} target{w.targets.length === 1 ? '' : 's'}
+            Running since {formatDate(w.startedAt)} · {targetCountWords(w.targets.length)}
           </SkText>
           <SkText variant="mono" style={styles.targets}>
             {w.targets.length > 0 ? w.targets.join(', ') : 'none: it takes no shards'}

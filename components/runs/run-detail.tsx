@@ -70,7 +70,7 @@ export function RunDetail({ id, openedExisting = false }: { id: string; openedEx
         </SkText>
       ) : null}
       <RunHeader run={run.data} canCancel={me?.role === 'maintainer' || me?.role === 'admin'} />
-      {live ? <LiveWorkersNote live={live} /> : null}
+      {live ? <LiveWorkersNote /> : null}
       {matrix.data ? (
         <CheckedScopeNote scopes={scopes} pairsNotChecked={notChecked} properties={propertySummary} subject="matrix" />
       ) : null}

@@ -38,6 +38,6 @@ describe('WorkerList', () => {
   it('says that runs wait when no worker is running', async () => {
     fakeApiRoutes({ 'GET /api/workers': { status: 200, body: { workers: [] } } });
     renderWithClient(<WorkerList />);
-    await screen.findByText('No worker is running: runs wait until one starts.');
+    await screen.findByText('No worker is running: queued pairs wait until one starts.');
   });
 });
