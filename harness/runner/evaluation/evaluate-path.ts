@@ -1,6 +1,5 @@
 import type { PathResult } from '../../../shared/run-result';
 import { checkAgreement } from './check-agreement';
-import { conventionMismatchReason } from '../../adapters/convention-mismatch-reason';
 import { inexpressibleReason } from '../../adapters/inexpressible-reason';
 import { checkPoints } from './check-points';
 import { compareAlongPath } from './compare-along-path';
@@ -74,18 +73,15 @@ export async function evaluatePath(evaluation: PathEvaluation): Promise<PathResu
       const reason = inexpressibleReason(entry, inputs.re[i] as number, inputs.im[i] as number, zeroSigns);
       if (reason !== null) notApplicable.set(i, reason);
     }
-  const { target, targetConvention } = evaluation;
-  if (targetConvention && target.convention) {
+  const { targetConvention } = evaluation;
+  if (targetConvention) {
     let theirs;
     try {
       theirs = expectedColumnOf({ ...evaluation, ...targetConvention }, points);
     } catch {
       theirs = null; // No values under the target's convention: every point keeps the suite's.
     }
-    const reason = conventionMismatchReason(
-      { name: target.name, convention: target.convention },
-      evaluation.suite.convention,
-    );
+    const { reason } = targetConvention;
     // Equal values mean the same under both; a zero's sign counts only where the expectation compares
     // the value's zero signs (principal signed-zero suites; never a regular branch's).
     const signs = evaluation.expectation.zeroSigns;

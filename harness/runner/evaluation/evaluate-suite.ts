@@ -23,6 +23,7 @@ import { suiteExpectation } from '../expectations/suite-expectation';
 import { subjectProgram, type SubjectProgram } from './subject-program';
 import { suiteCacheKey } from '../reference-cache/suite-cache-key';
 import { toPathSpec } from './to-path-spec';
+import { conventionMismatchReason } from '../../adapters/convention-mismatch-reason';
 
 export interface EvaluateSuiteOptions {
   /** Reference values by point bits; without one, a private in-memory cache is used. */
@@ -123,7 +124,11 @@ export async function evaluateSuite(
     if (target.convention !== undefined && target.convention !== suite.convention) {
       const theirs = { ...suite, convention: target.convention };
       const theirKey = suiteCacheKey(theirs);
-      targetConvention = { expectation: suiteExpectation(theirs, expr, cache, theirKey), cacheKey: theirKey };
+      targetConvention = {
+        expectation: suiteExpectation(theirs, expr, cache, theirKey),
+        cacheKey: theirKey,
+        reason: conventionMismatchReason({ name: target.name, convention: target.convention }, suite.convention),
+      };
     }
   } catch (e) {
     result.errors.push(`the suite cannot be evaluated: ${errorText(e)}`);

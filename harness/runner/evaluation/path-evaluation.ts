@@ -29,9 +29,9 @@ export interface PathEvaluation {
   /**
    * When the target states a convention other than the suite's: the suite's expectation under the
    * target's convention, so the points where the two conventions differ are not applicable
-   * (convention-mismatch-reason.ts). Absent otherwise.
+   * (convention-mismatch-reason.ts, which words `reason` once for the pair). Absent otherwise.
    */
-  targetConvention?: { expectation: Expectation; cacheKey: string };
+  targetConvention?: { expectation: Expectation; cacheKey: string; reason: string };
   /** Failing points listed in full (all are counted). */
   maxFindings: number;
   signal?: AbortSignal;
