@@ -17,6 +17,18 @@ function filesUnder(dir: string, rel = ''): string[] {
 }
 
 /**
+ * Files of the bundled dependencies that the compiled CLI, which is CommonJS and loads them with
+ * `require`, never reaches: type declarations, source maps, TypeScript sources (zod's src/) and
+ * mathjs's ES-module and type trees (its `require` condition is lib/cjs). Leaving them out halves
+ * the package (tarball 3.9 → 2.0 MB, installed 19.0 → 9.0 MiB), and the test step with it: 22 s →
+ * 13 s wall and 24 → 15 s of CPU on a quiet machine (`node --import tsx scripts/check-cli-package.ts`),
+ * and 78 s wall in a clean-clone `npm test` beside the static checks. scripts/check-cli-package.ts
+ * runs the installed package, so a file left out that is needed fails there.
+ */
+const UNREACHED =
+  /(\.d\.[cm]?ts|\.map)$|[\\/]node_modules[\\/](zod[\\/]src|mathjs[\\/]lib[\\/]esm|mathjs[\\/]types)([\\/]|$)/;
+
+/**
  * Assembles the CLI package in `dest` (docs/cli-package.md): the CLI compiled to CommonJS under
  * dist/ (TypeScript 7's tsc, packages/cli/tsconfig.json), so nothing is transpiled at run time,
  * and what the harness reads at run time, copied by pattern, never by name: every file under
@@ -27,19 +39,6 @@ function filesUnder(dir: string, rel = ''): string[] {
  * root's locked versions go into node_modules/ (package.json says `bundleDependencies`), so the
  * packed tarball installs with no registry at all. Returns the number of harness files copied.
  */
-/**
- * Files of the bundled dependencies that the compiled CLI, which is CommonJS and loads them with
- * `require`, never reaches: type declarations, source maps, TypeScript sources (zod's src/) and
- * mathjs's ES-module and type trees (its `require` condition is lib/cjs). Leaving them out halves
- * the package (tarball 3.9 → 2.0 MB, installed 19.0 → 9.0 MiB), and the test step with it: 22 s →
- * 13 s wall and 24 → 15 s of CPU on a quiet machine (`node --import tsx scripts/check-cli-package.ts`),
- * and 78 s wall in a clean-clone `npm test` beside the static checks. scripts/check-cli-package.ts
- * runs the installed package, so a
- * file left out that is needed fails there.
- */
-const UNREACHED =
-  /(\.d\.[cm]?ts|\.map)$|[\\/]node_modules[\\/](zod[\\/]src|mathjs[\\/]lib[\\/]esm|mathjs[\\/]types)([\\/]|$)/;
-
 export function buildCliPackage(dest: string, options: { bundle: boolean }): number {
   const own = path.resolve(dest) === CLI_PACKAGE_DIR;
   for (const dir of ['dist', 'harness', 'suites', 'node_modules', ...(own ? [] : TEMPLATE)])
