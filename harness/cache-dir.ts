@@ -1,5 +1,6 @@
 import os from 'node:os';
 import path from 'node:path';
+import { cacheDirFromEnv } from './cache-dir-from-env';
 
 /**
  * The user's cache folder for what the harness builds or fetches on first use (the compiled C
@@ -7,6 +8,5 @@ import path from 'node:path';
  * every call, so a test or a worker can point it elsewhere through the environment.
  */
 export function cacheDir(env: NodeJS.ProcessEnv = process.env): string {
-  const chosen = env.SHEETKEEPER_CACHE_DIR?.trim();
-  return chosen ? path.resolve(chosen) : path.join(os.homedir(), '.cache', 'sheetkeeper');
+  return cacheDirFromEnv(env) ?? path.join(os.homedir(), '.cache', 'sheetkeeper');
 }

@@ -59,3 +59,4 @@ export { formatHexDouble } from './checks/format-hex-double';
 export { parseDouble } from './reference/numbers/parse-double';
 export type { Rational } from './reference/numbers/rational';
 export { cacheDir } from './cache-dir';
+export { cacheDirFromEnv } from './cache-dir-from-env';

@@ -2,7 +2,7 @@ import { randomBytes } from 'node:crypto';
 import { chmodSync, existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { clusterUrl } from './database/cluster-url';
-import { cacheDir } from '../harness';
+import { cacheDirFromEnv } from '../harness';
 import { ownOrigins } from './http/own-origins';
 
 export const PROJECT_ROOT = path.resolve(__dirname, '..');
@@ -107,7 +107,7 @@ export function loadConfig(): ServerConfig {
     workerTargets: workerTargetsFrom(process.env.SHEETKEEPER_WORKER_TARGETS),
     appUrl,
     referenceCacheDir: process.env.SHEETKEEPER_REFERENCE_CACHE ?? path.join(DATA_DIR, 'reference-cache'),
-    targetCacheDir: process.env.SHEETKEEPER_CACHE_DIR?.trim() ? cacheDir() : DEFAULT_TARGET_CACHE_DIR,
+    targetCacheDir: cacheDirFromEnv() ?? DEFAULT_TARGET_CACHE_DIR,
     allowedOrigins: ownOrigins(appUrl, port, process.env.SHEETKEEPER_ORIGINS),
     trustProxy: trustProxyFrom(process.env.SHEETKEEPER_TRUST_PROXY),
   };
