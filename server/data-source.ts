@@ -42,6 +42,7 @@ import { RegressionGroups1764811100000 } from './migrations/1764811100000-regres
 import { FailureTableRowType1764800000000 } from './migrations/1764800000000-failure-table-row-type';
 import { OneActiveRunHeartbeatsMailOnce1764810000000 } from './migrations/1764810000000-one-active-run-heartbeats-mail-once';
 import { Workers1764920000000 } from './migrations/1764920000000-workers';
+import { NewestFailuresFirstAndFirstRuns1764960000000 } from './migrations/1764960000000-newest-failures-first-and-first-runs';
 
 /** Entities and migrations are listed, not globbed, so tsx, jest and tsc builds all find them. */
 export const ENTITIES = [
@@ -86,6 +87,7 @@ export const MIGRATIONS = [
   FailureLabelsAndClasses1764900000000,
   TargetSources1764910000000,
   Workers1764920000000,
+  NewestFailuresFirstAndFirstRuns1764960000000,
 ];
 
 export function createDataSource(url: string): DataSource {

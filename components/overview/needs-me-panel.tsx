@@ -3,10 +3,12 @@ import type { ReactNode } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { DiagnosisClass } from '../../shared/diagnosis-class';
-import type { OverviewView, SubscribedRegression, WaitingSuite } from '../../shared/overview-view';
+import { COMPARISON_WORDS } from '../../shared/comparison-words';
+import type { OverviewView, WaitingRegression, WaitingSuite } from '../../shared/overview-view';
 import { CLASS_WORDS } from '../runs/class-words';
 import type { Role } from '../../shared/roles';
 import { formatWhen } from '../runs/format-when';
+import { regressionsHref } from '../runs/regressions-href';
 import { SkText } from '../ui/sk-text';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
@@ -56,7 +58,8 @@ const suiteLine = (s: WaitingSuite) => `${s.title || s.slug} · v${s.version}`;
 
 /**
  * What waits on the signed-in person: suites to review (reviewers, admins), their own suites
- * sent back with changes requested, and regressions on the libraries they subscribe to.
+ * sent back with changes requested, and regressions in the plans that mail them and on the
+ * libraries they subscribe to, each a link to the failure table filtered to them.
  */
 export function NeedsMePanel({ needsMe, role, now }: { needsMe: NeedsMe; role: Role; now?: number }) {
   const showSentBack = role === 'contributor' || needsMe.changesRequested.length > 0;
@@ -107,37 +110,46 @@ export function NeedsMePanel({ needsMe, role, now }: { needsMe: NeedsMe; role: R
           ))}
         </Group>
       ) : null}
-      <Group
-        title="Regressions on your libraries"
-        count={needsMe.regressions.length}
-        empty={
-          needsMe.subscriptions.length
-            ? `No regressions on ${needsMe.subscriptions.join(', ')} in the latest runs.`
-            : 'You subscribe to no library (Settings).'
-        }
-      >
-        {needsMe.regressions.map((r) => (
-          <Row
-            key={`${r.runId}-${r.targetKey}`}
-            href={`/failures?${new URLSearchParams({ run: r.runId, status: 'new' }).toString()}`}
-            label={`${r.count} regressions on ${r.targetKey} in ${r.planName}: ${CLASS_WORDS.map((c) => `${countOf(r, c.key)} ${c.findings(countOf(r, c.key))}`).join(', ')}`}
-          >
-            <SkText variant="label" style={styles.danger}>
-              ❌ {r.count} regression{r.count === 1 ? '' : 's'} on {r.targetKey}:{' '}
-              {r.branch === 0 ? 'accuracy only' : CLASS_WORDS.map((c) => `${countOf(r, c.key)} ${c.key}`).join(', ')}
-            </SkText>
-            <SkText variant="caption">
-              {r.planName}, finished {formatWhen(r.finishedAt, now)}
-            </SkText>
-          </Row>
-        ))}
+      <Group title="Regressions for you" count={needsMe.regressions.length} empty={regressionsEmpty(needsMe)}>
+        {needsMe.regressions.map((r) => {
+          const where = r.targetKey === null ? `in ${r.planName}` : `on ${r.targetKey}`;
+          const split = CLASS_WORDS.map((c) => `${countOf(r, c.key)} ${c.findings(countOf(r, c.key))}`).join(', ');
+          return (
+            <Row
+              key={`${r.runId}-${r.targetKey ?? 'plan'}`}
+              href={regressionsHref(r.runId)}
+              label={`${COMPARISON_WORDS.regressions(r.count)} ${where}: ${split}. Open them in the failure table.`}
+            >
+              <SkText variant="label" style={styles.danger}>
+                {COMPARISON_WORDS.regressions(r.count)} {where}:{' '}
+                {r.branch === 0 ? 'accuracy only' : CLASS_WORDS.map((c) => `${countOf(r, c.key)} ${c.key}`).join(', ')}
+              </SkText>
+              <SkText variant="caption">
+                {r.targetKey === null
+                  ? `You receive this plan's regression mail · finished ${formatWhen(r.finishedAt, now)}`
+                  : `${r.planName}, finished ${formatWhen(r.finishedAt, now)} · you subscribe to ${r.targetKey}`}
+              </SkText>
+            </Row>
+          );
+        })}
       </Group>
     </View>
   );
 }
 
+/** Why nothing is listed: what the caller follows, and where to change it. */
+function regressionsEmpty(needsMe: NeedsMe): string {
+  const followed = [
+    needsMe.mailPlans.length ? `the plans that mail you (${needsMe.mailPlans.join(', ')})` : null,
+    needsMe.subscriptions.length ? `your libraries (${needsMe.subscriptions.join(', ')})` : null,
+  ].filter((p) => p !== null);
+  return followed.length
+    ? `No regressions in the latest completed runs of ${followed.join(' or on ')}.`
+    : 'No plan mails you its regressions and you subscribe to no library (Settings).';
+}
+
 /** A regression count's branch or accuracy part (the overview sends the branch part and the whole). */
-const countOf = (r: SubscribedRegression, c: DiagnosisClass) => (c === 'branch' ? r.branch : r.count - r.branch);
+const countOf = (r: WaitingRegression, c: DiagnosisClass) => (c === 'branch' ? r.branch : r.count - r.branch);
 
 const styles = StyleSheet.create({
   panel: {

@@ -15,8 +15,8 @@ import { FAILURE_ROW, failureSearchSql, RANK } from '../sql/failure-search-sql';
 export async function failurePageJson(dataSource: DataSource, q: FailureQuery): Promise<string> {
   const { from, order, params } = failureSearchSql(q);
   const byUlps = q.sort === 'ulps';
-  const pageOrder = byUlps ? 'p._r ASC, p._u DESC, p._id ASC' : 'p._r ASC, p._id ASC';
-  const lastFirst = byUlps ? 'p._r DESC, p._u ASC, p._id DESC' : 'p._r DESC, p._id DESC';
+  const pageOrder = byUlps ? 'p._r ASC, p._u DESC, p._id ASC' : 'p._r ASC, p._id DESC';
+  const lastFirst = byUlps ? 'p._r DESC, p._u ASC, p._id DESC' : 'p._r DESC, p._id ASC';
   const cursor = `p._id::text || ':' || p._r::text${byUlps ? ` || ':' || p._u::text` : ''}`;
   const text = `WITH p AS (
        SELECT f.id AS _id, ${RANK} AS _r, coalesce(f.ulps, 0) AS _u, ${FAILURE_ROW} AS r

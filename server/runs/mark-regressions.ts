@@ -55,7 +55,11 @@ export async function markRegressions(
     // The Overview's counts (entities/regression-group.ts), written with the marks they count.
     if (count > 0) await writeRegressionGroups(tx, run.id);
   }
-  await tx.getRepository(Run).update(run.id, { status: 'completed', finishedAt: new Date(), regressions: count });
+  // No completed run to compare with (the plan's first to complete): regressions stay null, so
+  // every screen says "first run of this plan to complete" rather than "0 since the previous".
+  await tx
+    .getRepository(Run)
+    .update(run.id, { status: 'completed', finishedAt: new Date(), regressions: previous ? count : null });
   // The plan's recipients, and everyone subscribed to a library that regressed.
   const subscribers: { email: string }[] =
     count > 0

@@ -7,6 +7,9 @@ import { findingRankSql } from './finding-rank-sql';
 /** A failure's place in the class order (branch first), as the page order and the rank indexes write it. */
 export const RANK = findingRankSql('f.finding_class');
 
+/** Newest first as an ascending key: the last column of the rank indexes (migration 1764960000000). */
+export const NEWEST = '(-f.id)';
+
 /** A page row's fields in the order of the composite type `failure_table_row`, with the SQL that reads each. */
 const ROW_FIELDS = FAILURE_ROW_FIELDS.filter((f) => f.shown === 'row');
 const sqlOf = (f: (typeof ROW_FIELDS)[number]): string => ('select' in f ? f.select : f.column);
@@ -62,10 +65,11 @@ export function failureSearchSql(q: FailureQuery, only?: string): { from: string
   if (q.status === 'new') where.push('is_regression');
   if (q.status === 'known') where.push(`NOT is_regression AND NOT ${coveredByDeviationSql('f')}`);
   if (q.status === 'accepted') where.push(coveredByDeviationSql('f'));
-  // Branch findings first, then accuracy findings, then errors and skipped points; keyed pages
-  // carry the last row's rank. Qualified: the select list names its text copy of the id "id"
-  // too, and ORDER BY would sort that as text.
-  let order = `${RANK} ASC, f.id ASC`;
+  // Branch findings first, then accuracy findings, then errors and skipped points, each newest
+  // first; keyed pages carry the last row's rank. Newest first is `-id` ascending, the rank
+  // indexes' last column, so the next page is one row comparison the index answers.
+  // Qualified: the select list names its text copy of the id "id" too, and ORDER BY would sort that as text.
+  let order = `${RANK} ASC, ${NEWEST} ASC`;
   const [afterId, afterRank, afterUlps] = q.after?.split(':') ?? [];
   if (q.sort === 'ulps') {
     order = `${RANK} ASC, coalesce(f.ulps, 0) DESC, f.id ASC`;
@@ -78,7 +82,7 @@ export function failureSearchSql(q: FailureQuery, only?: string): { from: string
     }
   } else if (q.after) {
     params.push(Number(afterRank), afterId);
-    where.push(`(${RANK}, id) > ($${params.length - 1}, $${params.length})`);
+    where.push(`(${RANK}, ${NEWEST}) > ($${params.length - 1}, -$${params.length}::bigint)`);
   }
   const label = q.diagnosis && q.diagnosis !== 'error' && q.diagnosis !== 'skipped' ? q.diagnosis : null;
   let from: string;

@@ -20,7 +20,8 @@ function isCursor(cursor: string): boolean {
 /**
  * Filters of the failure table. `diagnosis` matches a point with that label among any of its
  * labels (not only the leading one); `class` matches branch or accuracy findings. Every page
- * lists branch findings first, then accuracy findings, then errors and skipped points. `status`: `new` = a regression (passed in the previous run of
+ * lists branch findings first, then accuracy findings, then errors and skipped points, each
+ * newest first (`sort=id`, the default) or largest error first (`sort=ulps`). `status`: `new` = a regression (passed in the previous run of
  * the plan), `known` = failed before too and not accepted, `accepted` = covered by an unexpired
  * accepted deviation. Pages are keyed by the last row's (rank, id) (`after`), or
  * by (rank, ulps, id) when sorted by ulps.

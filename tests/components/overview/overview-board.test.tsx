@@ -43,14 +43,18 @@ const OVERVIEW: OverviewView = {
     {
       planId: 'p1',
       planName: 'complex.js nightly',
-      latest: run({}),
-      previous: {
-        id: 'r0',
-        counts: { pass: 485, fail: 2, error: 0, skipped: 0, notApplicable: 0 },
-        finishedAt: hoursAgo(27),
+      completed: run({}),
+      comparison: {
+        previous: { id: 'r0', finishedAt: hoursAgo(27) },
+        common: { pairs: 4, fail: 5, error: 0 },
+        targetsAdded: { keys: [], fail: 0, error: 0 },
+        targetsRemoved: { keys: [], fail: 0, error: 0 },
+        suitesAdded: { slugs: [], fail: 0, error: 0 },
+        suitesRemoved: { slugs: [], fail: 0, error: 0 },
       },
+      newer: null,
     },
-    { planId: 'p2', planName: 'mathjs before release', latest: null, previous: null },
+    { planId: 'p2', planName: 'mathjs before release', completed: null, comparison: null, newer: null },
   ],
   inProgress: [
     run({
@@ -81,6 +85,7 @@ const OVERVIEW: OverviewView = {
     ],
     changesRequested: [],
     subscriptions: ['complex.js'],
+    mailPlans: [],
     regressions: [
       {
         targetKey: 'complex.js',
@@ -117,10 +122,19 @@ describe('OverviewBoard', () => {
       .getAllByText(/findings$/)
       .map((e) => e.textContent);
     expect(counts).toEqual(['❌ 2 branch findings', '≈ 5 accuracy findings']);
-    expect(within(nightly).getByText('❌ 5 regressions: passed in the previous completed run, fail now.')).toBeTruthy();
-    expect(within(nightly).getByText('Since the previous completed run: ↑ 5 more failed.')).toBeTruthy();
+    const regressions = within(nightly).getByRole('link', {
+      name: '↑ 5 regressions since the previous completed run: open them in the failure table',
+    });
+    expect(regressions.getAttribute('href')).toBe('/failures?run=aaaaaaaa-0000-4000-8000-000000000001&status=new');
     expect(
-      within(nightly).getByRole('link', { name: 'Open the latest run of complex.js nightly' }).getAttribute('href'),
+      within(nightly).getByText(
+        'On the 4 suite × target pairs both runs checked, since the previous completed run: ↑ 5 more failed.',
+      ),
+    ).toBeTruthy();
+    expect(
+      within(nightly)
+        .getByRole('link', { name: 'Open the latest completed run of complex.js nightly' })
+        .getAttribute('href'),
     ).toBe('/runs/aaaaaaaa-0000-4000-8000-000000000001');
     expect(within(nightly).getByRole('link', { name: 'Every run of complex.js nightly' }).getAttribute('href')).toBe(
       '/runs?plan=p1',
@@ -151,10 +165,10 @@ describe('OverviewBoard', () => {
     );
     expect(within(panel).getByText('atanh next to ±1 · v2')).toBeTruthy();
     const regression = within(panel).getByRole('link', {
-      name: '5 regressions on complex.js in complex.js nightly: 2 branch findings, 3 accuracy findings',
+      name: '↑ 5 regressions on complex.js: 2 branch findings, 3 accuracy findings. Open them in the failure table.',
     });
     expect(regression.getAttribute('href')).toBe('/failures?run=aaaaaaaa-0000-4000-8000-000000000001&status=new');
-    expect(within(regression).getByText('❌ 5 regressions on complex.js: 2 branch, 3 accuracy')).toBeTruthy();
+    expect(within(regression).getByText('↑ 5 regressions on complex.js: 2 branch, 3 accuracy')).toBeTruthy();
     expect(within(panel).queryByText(/Your suites sent back/)).toBeNull();
   });
 
@@ -177,6 +191,7 @@ describe('OverviewBoard', () => {
             },
           ],
           subscriptions: [],
+          mailPlans: [],
           regressions: [],
         },
       },
@@ -187,7 +202,9 @@ describe('OverviewBoard', () => {
     const sentBack = within(panel).getByRole('link', { name: 'Open log-branch, changes requested' });
     expect(sentBack.getAttribute('href')).toBe('/suites/log-branch');
     expect(within(sentBack).getByText('“Add a straddle at 5e-324.”')).toBeTruthy();
-    expect(within(panel).getByText('✓ You subscribe to no library (Settings).')).toBeTruthy();
+    expect(
+      within(panel).getByText('✓ No plan mails you its regressions and you subscribe to no library (Settings).'),
+    ).toBeTruthy();
   });
 
   it('says so when nothing waits, and shows an error with a retry when the overview cannot be loaded', async () => {
@@ -195,12 +212,22 @@ describe('OverviewBoard', () => {
       overview: {
         plans: [],
         inProgress: [],
-        needsMe: { reviewQueue: null, changesRequested: [], subscriptions: ['mathjs'], regressions: [] },
+        needsMe: {
+          reviewQueue: null,
+          changesRequested: [],
+          subscriptions: ['mathjs'],
+          mailPlans: ['mathjs before release'],
+          regressions: [],
+        },
       },
     });
     const { unmount } = renderWithClient(<OverviewBoard user={user('maintainer')} />);
     expect(await screen.findByText('✓ Nothing is waiting for you')).toBeTruthy();
-    expect(screen.getByText('✓ No regressions on mathjs in the latest runs.')).toBeTruthy();
+    expect(
+      screen.getByText(
+        '✓ No regressions in the latest completed runs of the plans that mail you (mathjs before release) or on your libraries (mathjs).',
+      ),
+    ).toBeTruthy();
     expect(screen.getByText('No plans yet. A maintainer makes one under Plans.')).toBeTruthy();
     unmount();
     mockFetch(500, { kind: 'server-error', message: 'The database is not answering.' });

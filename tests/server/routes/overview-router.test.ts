@@ -90,20 +90,17 @@ describe('GET /api/overview', () => {
   });
   afterAll(() => t.stop());
 
-  it('gives each plan its latest finished run, the completed run before it, and lists a queued run as in progress', async () => {
+  it('gives each plan its latest completed run compared with the completed run before it, and its newer queued run', async () => {
     const view = await overview(kwame);
     const mine = view.plans.find((p) => p.planId === planId)!;
-    expect(mine.latest).toMatchObject({
+    expect(mine.completed).toMatchObject({
       id: runs.latest,
       status: 'completed',
       regressions: 5,
       counts: { pass: 105, fail: 7, error: 0, skipped: 0, notApplicable: 0 },
     });
-    expect(mine.previous).toEqual({
-      id: runs.previous,
-      counts: { pass: 110, fail: 2, error: 0, skipped: 0, notApplicable: 0 },
-      finishedAt: expect.any(String),
-    });
+    expect(mine.comparison?.previous).toEqual({ id: runs.previous, finishedAt: expect.any(String) });
+    expect(mine.newer).toMatchObject({ id: runs.live, status: 'queued' });
     expect(view.inProgress.map((r) => r.id)).toContain(runs.live);
     expect(view.inProgress.map((r) => r.id)).not.toContain(runs.latest);
   });
@@ -116,8 +113,9 @@ describe('GET /api/overview', () => {
     expect(view.plans.find((p) => p.planId === plan.body.plan.id)).toEqual({
       planId: plan.body.plan.id,
       planName: 'overview never ran',
-      latest: null,
-      previous: null,
+      completed: null,
+      comparison: null,
+      newer: null,
     });
     // Plans that ran come first, most recent first; then those that never ran.
     expect(view.plans.findIndex((p) => p.planId === planId)).toBeLessThan(

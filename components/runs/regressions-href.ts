@@ -1,0 +1,4 @@
+/** The failure table filtered to one run's regressions (newest first, as the table always opens). */
+export function regressionsHref(run: string): string {
+  return `/failures?${new URLSearchParams({ run, status: 'new' }).toString()}`;
+}
