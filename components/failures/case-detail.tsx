@@ -1,4 +1,5 @@
 import { Link } from 'expo-router';
+import { COMPARISON_WORDS } from '../../shared/comparison-words';
 import type { ReactNode } from 'react';
 import { Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import { useFailure } from '../../client/use-failure';
@@ -120,7 +121,7 @@ export function CaseDetail({ id }: { id: string }) {
         <SkText variant="caption" style={styles.small}>
           Path {f.pathName}
           {f.label ? ` · ${f.label}` : ''} · index {f.pointIndex} · t = {Number(f.t.toPrecision(6))}
-          {f.isRegression ? ' · ↑ new: this point passed in the previous run of the plan' : ''}
+          {f.isRegression ? ` · ${COMPARISON_WORDS.regressionMark}: ${COMPARISON_WORDS.regressionMeaning}` : ''}
         </SkText>
         <Link href={{ pathname: '/failures', params: { run: f.runId } }} asChild>
           <Pressable

@@ -54,7 +54,7 @@ export function FailureBrowser({
           value={filters.sort ?? 'id'}
           onChange={(v) => onChange({ ...filters, sort: v === 'ulps' ? 'ulps' : undefined })}
           options={[
-            { value: 'id', text: 'oldest first' },
+            { value: 'id', text: 'newest first' },
             { value: 'ulps', text: 'largest error first' },
           ]}
         />

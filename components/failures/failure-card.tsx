@@ -1,4 +1,5 @@
 import { StyleSheet, Text, View } from 'react-native';
+import { COMPARISON_WORDS } from '../../shared/comparison-words';
 import { theme } from '../../constants/theme';
 import type { FailureView } from '../../shared/failure-view';
 import { SkText } from '../ui/sk-text';
@@ -26,7 +27,7 @@ export function FailureCard({ failure: f }: { failure: FailureView }) {
         )}
         <SkText variant="smallLabel">
           #{f.id}
-          {f.isRegression ? ' · ↑ new' : ''}
+          {f.isRegression ? ` · ${COMPARISON_WORDS.regressionMark}` : ''}
         </SkText>
       </View>
       <SkText variant="label" numberOfLines={2}>

@@ -1,4 +1,5 @@
 import type { ReactNode } from 'react';
+import { COMPARISON_WORDS } from '../../shared/comparison-words';
 import { StyleSheet, Text } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { FailureView } from '../../shared/failure-view';
@@ -58,7 +59,12 @@ export const FAILURE_COLUMNS: {
     },
   },
   { id: 'ulps', title: 'Ulps', flex: 0.9, cell: (f) => mono(formatUlps(f.ulps)) },
-  { id: 'new', title: 'New', flex: 0.8, cell: (f) => plain(f.isRegression ? '↑ new' : '—') },
+  {
+    id: 'new',
+    title: 'Regression',
+    flex: 0.9,
+    cell: (f) => plain(f.isRegression ? COMPARISON_WORDS.regressionMark : '—'),
+  },
 ];
 
 const styles = StyleSheet.create({

@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { COMPARISON_WORDS } from '../../shared/comparison-words';
 import { StyleSheet, View } from 'react-native';
 import type { FailureFilters } from '../../client/failure-filters';
 import { theme } from '../../constants/theme';
@@ -163,7 +164,7 @@ export function FailureFiltersPanel({
               onChange={(v) => set('status', v)}
               options={[
                 { value: undefined, text: 'any' },
-                { value: 'new', text: 'new', glyph: '↑' },
+                { value: 'new', text: 'regressions', glyph: COMPARISON_WORDS.more },
                 { value: 'known', text: 'known', glyph: '•' },
                 { value: 'accepted', text: 'accepted', glyph: '✓' },
               ]}

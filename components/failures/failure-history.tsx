@@ -1,4 +1,5 @@
 import { Link } from 'expo-router';
+import { COMPARISON_WORDS } from '../../shared/comparison-words';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { FailureDetailView } from '../../shared/failure-detail-view';
@@ -27,7 +28,9 @@ export function FailureHistory({ history, currentId }: { history: FailureDetailV
               {h.targetName}
             </SkText>
             <DiagnosisLabel tone={h.diagnosisKind ?? 'error'} />
-            <SkText variant="caption">{current ? '• this case' : h.isRegression ? '↑ new in that run' : ''}</SkText>
+            <SkText variant="caption">
+              {current ? '• this case' : h.isRegression ? `${COMPARISON_WORDS.regressionMark} in that run` : ''}
+            </SkText>
           </>
         );
         return current ? (

@@ -1,4 +1,5 @@
 import { StyleSheet, View } from 'react-native';
+import { describeRegressions } from './describe-regressions';
 import { isLiveRun } from '../../client/is-live-run';
 import { theme } from '../../constants/theme';
 import type { RunView } from '../../shared/run-view';
@@ -43,7 +44,7 @@ export function RunCard({ run, now }: { run: RunView; now?: number }) {
       <OutcomeCounts counts={run.counts} byClass={run.byClass} compact />
       {run.regressions ? (
         <SkText variant="smallLabel" tone="danger">
-          ↓ {run.regressions} regression{run.regressions === 1 ? '' : 's'} since the previous run
+          {describeRegressions(run).text}
         </SkText>
       ) : null}
     </LinkCard>

@@ -1,12 +1,15 @@
-import { StyleSheet, View } from 'react-native';
+import { Link } from 'expo-router';
+import { Pressable, StyleSheet, View } from 'react-native';
 import { isLiveRun } from '../../client/is-live-run';
 import { theme } from '../../constants/theme';
 import type { RunView } from '../../shared/run-view';
 import { SkText } from '../ui/sk-text';
 import { CancelRunButton } from './cancel-run-button';
+import { describeRegressions } from './describe-regressions';
 import { formatWhen } from './format-when';
 import { OutcomeCounts } from './outcome-counts';
 import { ProgressBar } from './progress-bar';
+import { regressionsHref } from './regressions-href';
 import { runDuration } from './run-duration';
 import { RunStatusBadge } from './run-status-badge';
 import { triggerWords } from './trigger-words';
@@ -16,18 +19,12 @@ import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 /** The top of a run: its status, who started it and when, how long, its point counts, and progress and cancel while it is live. */
 export function RunHeader({ run, canCancel }: { run: RunView; canCancel: boolean }) {
   const live = isLiveRun(run);
+  const regressions = describeRegressions(run);
   const facts: [string, string][] = [
     ['Started', `${triggerWords(run.trigger, run.requestedBy)}, ${formatWhen(run.createdAt)}`],
     ['Duration', runDuration(run)],
     ['Shards', `${run.shardsDone} of ${run.shardsTotal} done`],
-    [
-      'Regressions',
-      run.regressions === null
-        ? live
-          ? 'counted when the run completes'
-          : 'not compared'
-        : `${run.regressions} since the previous completed run`,
-    ],
+    ['Regressions', regressions.text],
   ];
   return (
     <View style={styles.card}>
@@ -38,9 +35,21 @@ export function RunHeader({ run, canCancel }: { run: RunView; canCancel: boolean
             <SkText variant="smallLabel" tone="inkFaint" style={styles.label}>
               {label}
             </SkText>
-            <SkText variant="body" style={label === 'Regressions' && run.regressions ? styles.danger : null}>
-              {value}
-            </SkText>
+            {label === 'Regressions' && regressions.count > 0 ? (
+              <Link href={regressionsHref(run.id)} asChild>
+                <Pressable
+                  accessibilityRole="link"
+                  accessibilityLabel={`${value}: open them in the failure table`}
+                  style={StyleSheet.flatten(styles.link)}
+                >
+                  <SkText variant="body" style={styles.danger}>
+                    {value} →
+                  </SkText>
+                </Pressable>
+              </Link>
+            ) : (
+              <SkText variant="body">{value}</SkText>
+            )}
           </View>
         ))}
       </View>
@@ -69,5 +78,6 @@ const styles = StyleSheet.create({
   fact: { flexBasis: 150, flexGrow: 1, gap: 2 },
   label: { textTransform: 'uppercase', letterSpacing: 0.8 },
   danger: { color: theme.color.danger, fontFamily: theme.font.medium },
+  link: { minHeight: 44, justifyContent: 'center' },
   waiting: { fontFamily: theme.font.medium },
 });

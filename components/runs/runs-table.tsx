@@ -1,4 +1,5 @@
 import { Link } from 'expo-router';
+import { COMPARISON_WORDS } from '../../shared/comparison-words';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { isLiveRun } from '../../client/is-live-run';
 import { theme } from '../../constants/theme';
@@ -54,7 +55,7 @@ export function RunsTable({ runs, now }: { runs: RunView[]; now?: number }) {
               </SkText>
               {run.regressions ? (
                 <SkText variant="smallLabel" tone="danger">
-                  ↓ {run.regressions} regression{run.regressions === 1 ? '' : 's'}
+                  {COMPARISON_WORDS.regressions(run.regressions)}
                 </SkText>
               ) : null}
             </View>

@@ -29,7 +29,7 @@ describe('FailureBrowser', () => {
     expect(card.getAttribute('href')).toBe('/failures/1');
     expect(within(card).getByText('±')).toBeTruthy();
     expect(within(card).getByText(/zero sign/)).toBeTruthy();
-    expect(within(card).getByText(/↑ new/)).toBeTruthy();
+    expect(within(card).getByText(/↑ regression/)).toBeTruthy();
     expect(within(screen.getByTestId('failure-card-2')).getByText('⇄')).toBeTruthy();
     expect(screen.queryByRole('table')).toBeNull();
   });
@@ -79,7 +79,7 @@ describe('FailureBrowser', () => {
       'z',
       'Diagnosis',
       'Ulps',
-      'New',
+      'Regression',
     ]);
     expect(screen.getByTestId('failure-row-2').getAttribute('href')).toBe('/failures/2');
     expect(within(screen.getByTestId('failure-row-2')).getByText('1.0e+18')).toBeTruthy();
@@ -96,7 +96,7 @@ describe('FailureBrowser', () => {
       'Library',
       'Diagnosis',
       'Ulps',
-      'New',
+      'Regression',
     ]);
     expect(JSON.parse(window.localStorage.getItem('sheetkeeper.failure-table.columns')!)).toEqual([
       'id',
@@ -135,7 +135,7 @@ describe('FailureBrowser', () => {
     const onChange = jest.fn();
     renderWithClient(<FailureBrowser filters={{ suite: 'sqrt-principal-sz' }} onChange={onChange} />);
     await screen.findByRole('table');
-    fireEvent.click(screen.getByRole('radio', { name: 'Status: new' }));
+    fireEvent.click(screen.getByRole('radio', { name: 'Status: regressions' }));
     expect(onChange).toHaveBeenLastCalledWith({ suite: 'sqrt-principal-sz', status: 'new' });
 
     fireEvent.change(screen.getByLabelText('Run id'), { target: { value: 'not-a-run' } });

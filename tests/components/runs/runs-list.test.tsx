@@ -84,7 +84,7 @@ describe('RunsList', () => {
     expect(within(first).getByText('❌ completed with failures')).toBeTruthy();
     expect(within(first).getByText(/^scheduled · .* · 3 min 5 s$/)).toBeTruthy();
     expect(within(first).getByText('❌ 3 branch findings')).toBeTruthy();
-    expect(within(first).getByText('↓ 2 regressions since the previous run')).toBeTruthy();
+    expect(within(first).getByText('↑ 2 regressions since the previous completed run')).toBeTruthy();
     const live = screen.getByTestId(`run-${run(2).id}`);
     expect(within(live).getByText('↻ running')).toBeTruthy();
     expect(within(live).getByText(/^by Kwame Asante · .* · running 4\d s$/)).toBeTruthy();

@@ -40,7 +40,7 @@ describe('the Failures screen', () => {
       pathname: '/failures',
       params: { run: RUN, sort: 'ulps', diagnosis: 'cut-side' },
     });
-    fireEvent.click(screen.getByRole('radio', { name: 'Branch findings first, then: oldest first' }));
+    fireEvent.click(screen.getByRole('radio', { name: 'Branch findings first, then: newest first' }));
     expect(mockPush).toHaveBeenLastCalledWith({ pathname: '/failures', params: { run: RUN } });
   });
 
