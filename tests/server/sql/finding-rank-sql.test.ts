@@ -31,6 +31,11 @@ describe('findingRankSql and the rank indexes', () => {
     const byUlps = await planOf(db, { run, sort: 'ulps', limit: 50 });
     expect(byUlps).toMatch(/Index (Only )?Scan using failures_run_rank_ulps_idx/);
     expect(byUlps).not.toMatch(/Sort/);
+    // The next page, newest first, starts inside the index: the cursor is an index condition, not a filter.
+    const next = await planOf(db, { run, sort: 'id', limit: 50, after: '30:0' });
+    expect(next).toMatch(/Index (Only )?Scan using failures_run_rank_idx/);
+    expect(next).toMatch(/Index Cond: .*ROW\(/);
+    expect(next).not.toMatch(/Sort/);
     const branch = await planOf(db, { run, class: 'branch', sort: 'id', limit: 50 });
     expect(branch).toMatch(/failures_run_rank_idx/);
   });
