@@ -15,10 +15,14 @@ export interface RunComparison {
   previous: { id: string; finishedAt: string | null };
   /** How many suite × target pairs both runs checked, and the change in their failed and error points (latest − previous). */
   common: PairCounts & { pairs: number };
-  /** Target keys only the latest run checked, with the points of their pairs in it. */
-  targetsAdded: PairCounts & { keys: string[] };
-  /** Target keys only the previous run checked, with the points of their pairs in it. */
-  targetsRemoved: PairCounts & { keys: string[] };
+  /**
+   * Targets only the latest run checked, with the points of their pairs in it: a new library by
+   * its key, and a library checked at a different number of versions than before by those
+   * versions (its summed counts would compare two versions with one).
+   */
+  targetsAdded: PairCounts & { targets: string[] };
+  /** Targets only the previous run checked, named as in `targetsAdded`, with the points of their pairs in it. */
+  targetsRemoved: PairCounts & { targets: string[] };
   /** Suites only the latest run checked (on targets both checked), with the points of their pairs in it. */
   suitesAdded: PairCounts & { slugs: string[] };
   /** Suites only the previous run checked (on targets both checked), with the points of their pairs in it. */

@@ -32,13 +32,13 @@ export function describeComparison(c: RunComparison): string[] {
       `On the ${W.plural(c.common.pairs, 'suite × target pair', 'suite × target pairs')} both runs checked, ${W.since}: ${changes.length ? changes.join(', ') : 'no change in failed or error points'}.`,
     );
   const { targetsAdded: ta, targetsRemoved: tr, suitesAdded: sa, suitesRemoved: sr } = c;
-  if (ta.keys.length)
+  if (ta.targets.length)
     lines.push(
-      `${W.plural(ta.keys.length, 'target', 'targets')} added since the previous run (${ta.keys.join(', ')}): ${fromThem(ta, ta.keys.length === 1 ? 'it' : 'them')}`,
+      `${W.plural(ta.targets.length, 'target', 'targets')} added since the previous run (${ta.targets.join(', ')}): ${fromThem(ta, ta.targets.length === 1 ? 'it' : 'them')}`,
     );
-  if (tr.keys.length)
+  if (tr.targets.length)
     lines.push(
-      `${W.plural(tr.keys.length, 'target', 'targets')} no longer checked (${tr.keys.join(', ')}): ${leftOut(tr, tr.keys.length === 1 ? 'it' : 'they')}`,
+      `${W.plural(tr.targets.length, 'target', 'targets')} no longer checked (${tr.targets.join(', ')}): ${leftOut(tr, tr.targets.length === 1 ? 'it' : 'they')}`,
     );
   if (sa.slugs.length)
     lines.push(

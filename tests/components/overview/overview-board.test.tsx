@@ -47,8 +47,8 @@ const OVERVIEW: OverviewView = {
       comparison: {
         previous: { id: 'r0', finishedAt: hoursAgo(27) },
         common: { pairs: 4, fail: 5, error: 0 },
-        targetsAdded: { keys: [], fail: 0, error: 0 },
-        targetsRemoved: { keys: [], fail: 0, error: 0 },
+        targetsAdded: { targets: [], fail: 0, error: 0 },
+        targetsRemoved: { targets: [], fail: 0, error: 0 },
         suitesAdded: { slugs: [], fail: 0, error: 0 },
         suitesRemoved: { slugs: [], fail: 0, error: 0 },
       },

@@ -34,8 +34,8 @@ const CANCELLED = {
 const SAME_PAIRS: RunComparison = {
   previous: { id: 'p', finishedAt: '2026-03-01T02:41:00Z' },
   common: { pairs: 19, fail: 31, error: 0 },
-  targetsAdded: { keys: [], fail: 0, error: 0 },
-  targetsRemoved: { keys: [], fail: 0, error: 0 },
+  targetsAdded: { targets: [], fail: 0, error: 0 },
+  targetsRemoved: { targets: [], fail: 0, error: 0 },
   suitesAdded: { slugs: [], fail: 0, error: 0 },
   suitesRemoved: { slugs: [], fail: 0, error: 0 },
 };
@@ -83,8 +83,8 @@ describe('PlanLatestCard', () => {
     const comparison: RunComparison = {
       ...SAME_PAIRS,
       common: { pairs: 19, fail: -2, error: 0 },
-      targetsAdded: { keys: ['cmath', 'mathjs/complex', 'numpy'], fail: 604, error: 0 },
-      targetsRemoved: { keys: ['math'], fail: 20, error: 1 },
+      targetsAdded: { targets: ['cmath', 'mathjs/complex', 'numpy'], fail: 604, error: 0 },
+      targetsRemoved: { targets: ['math'], fail: 20, error: 1 },
     };
     render(<PlanLatestCard plan={plan({ comparison })} />);
     expect(

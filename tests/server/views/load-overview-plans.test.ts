@@ -118,10 +118,32 @@ describe('loadOverview: plans, comparisons and the regressions waiting on each c
     expect(plan.comparison).toEqual({
       previous: { id: runs.first, finishedAt: expect.any(String) },
       common: { pairs: 1, fail: 2, error: 0 },
-      targetsAdded: { keys: [mathjsKey], fail: 4, error: 0 },
-      targetsRemoved: { keys: [], fail: 0, error: 0 },
+      targetsAdded: { targets: [mathjsKey], fail: 4, error: 0 },
+      targetsRemoved: { targets: [], fail: 0, error: 0 },
       suitesAdded: { slugs: [], fail: 0, error: 0 },
       suitesRemoved: { slugs: [], fail: 0, error: 0 },
+    });
+  });
+
+  it('names the versions of a library checked at a different number of versions, instead of comparing their summed counts', async () => {
+    const ds = t.db.dataSource;
+    const versions: string[] = (
+      await ds.query(`SELECT name FROM targets WHERE library = 'complex.js' AND installed ORDER BY name LIMIT 2`)
+    ).map((r: { name: string }) => r.name);
+    expect(versions).toHaveLength(2);
+    const agent = await signInAs(t.app, 'maintainer');
+    const body = { name: 'upgraded plan', recipients: [], suites: ['plans-sqrt'], targets: [versions[0]] };
+    const id = (await agent.post('/api/plans').send(body)).body.plan.id;
+    const first = (await agent.post('/api/runs').send({ planId: id })).body.run.id;
+    await complete(first, { 'complex.js': ['u1'] });
+    await agent.put(`/api/plans/${id}`).send({ ...body, targets: versions });
+    const second = (await agent.post('/api/runs').send({ planId: id })).body.run.id;
+    await complete(second, { 'complex.js': ['u1', 'u2'] });
+    const plan = (await loadOverview(ds, kwame)).plans.find((p) => p.planId === id)!;
+    expect(plan.comparison).toMatchObject({
+      common: { pairs: 0, fail: 0, error: 0 },
+      targetsAdded: { targets: versions, fail: 4 },
+      targetsRemoved: { targets: [versions[0]], fail: 1 },
     });
   });
 
