@@ -25,8 +25,8 @@ const add = (into: PairCounts, cell: PairCounts, sign = 1) => {
  * markRegressions compared it with), by suite × target key: one query over the runs' shards,
  * then the pairs matched here. A pair only one run checked is counted under the target that
  * made it, or under its suite when both runs checked the target, never in the change. A
- * library checked at a different number of versions (the demo nightly: 2.3.0, then 2.4.1 and
- * 2.4.3) is a change of targets too, named by its versions.
+ * library checked at a different number of versions (the demo nightly: one release,
+ * then the two newest) is a change of targets too, named by its versions.
  */
 export async function loadRunComparisons(
   dataSource: DataSource,
