@@ -64,7 +64,7 @@ export function PlanLatestCard({
       <SkText variant="strong">{plan.planName}</SkText>
       {run && regressions ? (
         <>
-          <SkText variant="smallLabel" tone="inkFaint">
+          <SkText variant="smallLabel" tone="inkSoft">
             Latest completed run
           </SkText>
           <RunStatusBadge run={run} />
