@@ -31,22 +31,19 @@ export function describeComparison(c: RunComparison): string[] {
     lines.push(
       `On the ${W.plural(c.common.pairs, 'suite × target pair', 'suite × target pairs')} both runs checked, ${W.since}: ${changes.length ? changes.join(', ') : 'no change in failed or error points'}.`,
     );
-  const { targetsAdded: ta, targetsRemoved: tr, suitesAdded: sa, suitesRemoved: sr } = c;
-  if (ta.targets.length)
+  const changed: [string, string, string[], PairCounts, boolean][] = [
+    ['target', 'targets', c.targetsAdded.targets, c.targetsAdded, true],
+    ['target', 'targets', c.targetsRemoved.targets, c.targetsRemoved, false],
+    ['suite', 'suites', c.suitesAdded.slugs, c.suitesAdded, true],
+    ['suite', 'suites', c.suitesRemoved.slugs, c.suitesRemoved, false],
+  ];
+  for (const [one, many, names, counts, added] of changed) {
+    if (names.length === 0) continue;
+    const what = `${W.plural(names.length, one, many)} ${added ? 'added since the previous run' : 'no longer checked'} (${names.join(', ')})`;
+    const single = names.length === 1;
     lines.push(
-      `${W.plural(ta.targets.length, 'target', 'targets')} added since the previous run (${ta.targets.join(', ')}): ${fromThem(ta, ta.targets.length === 1 ? 'it' : 'them')}`,
+      `${what}: ${added ? fromThem(counts, single ? 'it' : 'them') : leftOut(counts, single ? 'it' : 'they')}`,
     );
-  if (tr.targets.length)
-    lines.push(
-      `${W.plural(tr.targets.length, 'target', 'targets')} no longer checked (${tr.targets.join(', ')}): ${leftOut(tr, tr.targets.length === 1 ? 'it' : 'they')}`,
-    );
-  if (sa.slugs.length)
-    lines.push(
-      `${W.plural(sa.slugs.length, 'suite', 'suites')} added since the previous run (${sa.slugs.join(', ')}): ${fromThem(sa, sa.slugs.length === 1 ? 'it' : 'them')}`,
-    );
-  if (sr.slugs.length)
-    lines.push(
-      `${W.plural(sr.slugs.length, 'suite', 'suites')} no longer checked (${sr.slugs.join(', ')}): ${leftOut(sr, sr.slugs.length === 1 ? 'it' : 'they')}`,
-    );
+  }
   return lines;
 }

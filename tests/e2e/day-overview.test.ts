@@ -5,6 +5,7 @@ import type { RunView } from '../../shared/run-view';
 import { BASE_URL } from './support/open-browser';
 import { browserPerTest } from './support/browser-per-test';
 import { goTo } from './support/go-to';
+import { pageApi } from './support/page-api';
 import { saveScreenshots } from './support/save-screenshots';
 import { signIn } from './support/sign-in';
 
@@ -14,17 +15,8 @@ const kwame = DEMO_USERS.find((u) => u.email === 'kwame@sheetkeeper.test')!;
 const PLAN = 'complex.js nightly';
 
 /** The API as the signed-in page sees it (same origin, session cookie). */
-const api = <T>(path: string, method = 'GET', body?: unknown): Promise<{ status: number; body: T }> =>
-  // Plain promise chains: the test's compiler may turn async/await into helpers the page does not have.
-  b.page.evaluate(
-    (arg) =>
-      fetch('/api' + arg.path, {
-        method: arg.method,
-        headers: arg.body ? { 'content-type': 'application/json' } : {},
-        body: arg.body ? JSON.stringify(arg.body) : undefined,
-      }).then((res) => res.json().then((json) => ({ status: res.status, body: json }))),
-    { path, method, body },
-  ) as Promise<{ status: number; body: T }>;
+const api = <T>(path: string, method = 'GET', body?: unknown) =>
+  pageApi(b.page)<{ status: number; body: T }>(path, method, body);
 
 describe("A maintainer on a plan's mail list, the morning after regressions (issue 15, points 1, 2 and 8)", () => {
   it('sees the regressions waiting for him and on the plan card past a cancelled run, follows them newest first, and reads the same words everywhere', async () => {

@@ -2,6 +2,7 @@ import { DEMO_USERS } from '../../server/seed/demo-users';
 import { BASE_URL } from './support/open-browser';
 import { browserPerTest } from './support/browser-per-test';
 import { goTo } from './support/go-to';
+import { pageApi } from './support/page-api';
 import { saveScreenshots } from './support/save-screenshots';
 import { signIn } from './support/sign-in';
 
@@ -10,17 +11,7 @@ const b = browserPerTest();
 const kwame = DEMO_USERS.find((u) => u.email === 'kwame@sheetkeeper.test')!;
 
 /** The API as the signed-in page sees it (same origin, session cookie). */
-const api = <T>(path: string, method = 'GET', body?: unknown): Promise<T> =>
-  // Plain promise chains: the test's compiler may turn async/await and destructuring into helpers the page does not have.
-  b.page.evaluate(
-    (arg) =>
-      fetch('/api' + arg.path, {
-        method: arg.method,
-        headers: arg.body ? { 'content-type': 'application/json' } : {},
-        body: arg.body ? JSON.stringify(arg.body) : undefined,
-      }).then((res) => res.json().then((json) => ({ status: res.status, body: json }))),
-    { path, method, body },
-  ) as Promise<T>;
+const api = <T>(path: string, method = 'GET', body?: unknown): Promise<T> => pageApi(b.page)<T>(path, method, body);
 
 describe('Overview and runs', () => {
   it('shows the Overview, the Runs list and a finished run with its matrix and what it checked', async () => {
