@@ -13,7 +13,8 @@ export function overviewRouter(dataSource: DataSource, memo: OverviewMemo): Rout
     'get',
     '/',
     {
-      summary: 'The Overview: plans and runs, the review queue and regressions on my subscriptions',
+      summary:
+        'The Overview: plans and runs, the review queue, and regressions in the plans that mail me and on my subscriptions',
       access: ROLES,
       responses: { 200: 'The overview (`overview`), as the caller sees it.' },
     },

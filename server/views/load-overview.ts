@@ -54,7 +54,7 @@ const toWaiting = (row: Omit<WaitingSuite, 'since'> & { since: Date }): WaitingS
  * the libraries they subscribe to.
  *
  * With `memo` (the router's), the parts that are the same for everyone — the plans and runs,
- * the review queue, and the regressions of one set of subscriptions — are shared for
+ * the review queue, and the regressions of one set of subscriptions and mailing plans — are shared for
  * a second (overview-memo.ts), one computation at a time, and so is each caller's whole
  * answer. Under 50 clients the eight queries of each request queued on the
  * database pool (p95 1,086 ms with the counts of regression_groups, each query 0.5–6 ms alone).
