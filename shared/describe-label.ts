@@ -1,4 +1,5 @@
 import type { Diagnosis } from './diagnosis';
+import { DIAGNOSIS_KIND_NAMES } from './diagnosis-kind-names';
 import { describeWorstPart } from './describe-worst-part';
 import { formatComplexText } from './format-complex-text';
 import { formatUlps } from './format-ulps';
@@ -37,35 +38,34 @@ function inaccuracy(d: Extract<Diagnosis, { kind: 'inaccurate' }>, style: 'short
  * label for mail ("other sheet (k = 1)"), which names the label itself.
  */
 export function describeLabel(d: Diagnosis, style: 'short' | 'long'): string {
-  const long = (name: string, detail: string) => (detail ? `${name} (${detail})` : name);
+  const name = DIAGNOSIS_KIND_NAMES[d.kind].name;
+  const long = (detail: string) => (detail ? `${name} (${detail})` : name);
   switch (d.kind) {
     case 'other-sheet':
-      return style === 'short' ? `k = ${d.k}` : long('other sheet', `k = ${d.k}`);
+      return style === 'short' ? `k = ${d.k}` : long(`k = ${d.k}`);
     case 'cut-side':
-      return style === 'short' ? '' : long('cut side', 'the limit from the other side of the cut');
+      return style === 'short' ? '' : long('the limit from the other side');
     case 'zero-sign': {
       const where = `${PART[d.part]} part of the ${d.of}`;
-      return style === 'short' ? where : long('ignored zero sign', where);
+      return style === 'short' ? where : long(where);
     }
     case 'misplaced-cut': {
       const where = `library jumps ${at(d.libraryJumpAt)}, expected ${at(d.expectedJumpAt)}${d.confirmed ? '; confirmed by refining between samples' : ''}`;
-      return style === 'short' ? where : long('misplaced cut', where);
+      return style === 'short' ? where : long(where);
     }
     case 'inaccurate':
-      return style === 'short' ? inaccuracy(d, 'short') : long('inaccurate', inaccuracy(d, 'long'));
+      return style === 'short' ? inaccuracy(d, 'short') : long(inaccuracy(d, 'long'));
     case 'not-finite':
-      return style === 'short'
-        ? ''
-        : long('not finite', 'an infinite or NaN part where the reference is finite, or the reverse');
+      return style === 'short' ? '' : long('an infinite or NaN part where the reference is finite, or the reverse');
     case 'disagreement': {
       const whose = d.otherMatchesReference
         ? 'that value matches the reference, this one does not'
         : 'neither matches the reference';
       return style === 'short'
         ? `with ${d.with}`
-        : long('disagreement', `${d.with} gives ${formatComplexText(d.other)} here; ${whose}`);
+        : long(`${d.with} gives ${formatComplexText(d.other)} here; ${whose}`);
     }
     case 'unexplained':
-      return style === 'short' ? '' : long('unexplained', `relative error ${num(d.relativeError)}`);
+      return style === 'short' ? '' : long(`relative error ${num(d.relativeError)}`);
   }
 }

@@ -23,7 +23,7 @@ describe('the failure table and a case', () => {
 
     // On a phone the filters fold behind one button; a chip applies at once and lands in the address.
     await b.page.getByRole('button', { name: /^Filters/ }).click();
-    await b.page.getByRole('radio', { name: 'Diagnosis: zero sign' }).click();
+    await b.page.getByRole('radio', { name: 'Diagnosis: ignored zero sign' }).click();
     await b.page.waitForURL(/diagnosis=zero-sign/);
     await b.page.getByRole('button', { name: /^Filters/ }).click();
     const card = b.page.locator('[data-testid^="failure-card-"]').first();

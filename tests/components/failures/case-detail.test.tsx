@@ -74,7 +74,7 @@ describe.each([
     );
     renderWithClient(<CaseDetail id="5" />);
     await screen.findByText('How far off');
-    expect(screen.getByLabelText('diagnosis cut side')).toBeTruthy();
+    expect(screen.getByLabelText('diagnosis wrong side of a cut')).toBeTruthy();
     expect(
       screen.getByLabelText(/^diagnosis inaccurate, im lost to cancellation: error 2.0e-15 beside \|value\| 1.0/),
     ).toBeTruthy();

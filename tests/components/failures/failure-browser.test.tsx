@@ -48,7 +48,7 @@ describe('FailureBrowser', () => {
       .getAllByLabelText(/^diagnosis /)
       .map((e) => e.getAttribute('aria-label'));
     expect(chips).toEqual([
-      'diagnosis zero sign, imaginary part of the input',
+      'diagnosis ignored zero sign, imaginary part of the input',
       'diagnosis inaccurate, 104212 ulps in re',
     ]);
   });

@@ -196,7 +196,7 @@ describe('regressionMail', () => {
     };
     const m = mailOf([composed, twoWays, chosen], { branch: 3, accuracy: 0 });
     for (const part of [m.text, m.html]) {
-      expect(part).toContain('cut side');
+      expect(part).toContain('wrong side of a cut (the limit from the other side)');
       expect(part).toContain(
         'inaccurate (the imaginary part is lost to cancellation: it is 2.0e-15 off, beside a value of size |value| = 1.0; relative error of the whole value 2.0e-15)',
       );

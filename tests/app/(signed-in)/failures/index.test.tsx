@@ -35,7 +35,7 @@ describe('the Failures screen', () => {
     mockFetchRoutes(() => ({ body: { failures: failureRows(2), next: null } }));
     renderWithClient(<FailuresScreen />);
     await screen.findByRole('table');
-    fireEvent.click(screen.getByRole('radio', { name: 'Diagnosis: cut side' }));
+    fireEvent.click(screen.getByRole('radio', { name: 'Diagnosis: wrong side of a cut' }));
     expect(mockPush).toHaveBeenCalledWith({
       pathname: '/failures',
       params: { run: RUN, sort: 'ulps', diagnosis: 'cut-side' },
