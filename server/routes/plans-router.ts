@@ -2,8 +2,10 @@ import { Router } from 'express';
 import type { DataSource } from 'typeorm';
 import { ROLES } from '../../shared/roles';
 import { idParams } from '../../shared/schemas/id-params';
+import { findingsByKindQuery } from '../../shared/schemas/findings-by-kind-query';
 import { planBody } from '../../shared/schemas/plan-body';
 import { declareRoute } from '../http/declare-route';
+import { loadFindingsByKind } from '../plans/load-findings-by-kind';
 import { PlanService } from '../plans/plan-service';
 
 /** Plans: everyone reads them; maintainers (and admins) shape them. */
@@ -33,6 +35,25 @@ export function plansRouter(dataSource: DataSource): Router {
     },
     async (_req, res, { params }) => {
       res.json({ plan: await plans.get(params.id) });
+    },
+  );
+  declareRoute(
+    router,
+    'get',
+    '/:id/findings-by-kind',
+    {
+      summary: "A plan's findings by diagnosis kind across its latest completed runs",
+      access: ROLES,
+      params: idParams,
+      query: findingsByKindQuery,
+      responses: {
+        200: 'The runs oldest first, each with its failing points counted under each of their labels (`runs`, `limit`).',
+        400: '`runs` is not a whole number from 1 to 50.',
+        404: 'No plan with that id.',
+      },
+    },
+    async (_req, res, { params, query }) => {
+      res.json(await loadFindingsByKind(dataSource, params.id, query.runs));
     },
   );
   declareRoute(

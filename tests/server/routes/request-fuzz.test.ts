@@ -110,6 +110,11 @@ const ROUTES: Record<Route, FuzzRoute> = {
   },
   'GET /api/plans': { roles: ROLES },
   'GET /api/plans/:id': { roles: ROLES, params: { id: () => fixtures.planId } },
+  'GET /api/plans/:id/findings-by-kind': {
+    roles: ROLES,
+    params: { id: () => fixtures.planId },
+    query: ['runs'],
+  },
   'POST /api/plans': {
     roles: ['maintainer', 'admin'],
     body: () => ({

@@ -241,6 +241,11 @@ const ROUTES: RouteCase[] = [
   { name: 'GET /api/plans', call: (a) => a.get('/api/plans'), expect: signedIn(200) },
   { name: 'GET /api/plans/:id', call: async (a) => a.get(`/api/plans/${await freshPlan()}`), expect: signedIn(200) },
   {
+    name: 'GET /api/plans/:id/findings-by-kind',
+    call: async (a) => a.get(`/api/plans/${await freshPlan()}/findings-by-kind`),
+    expect: signedIn(200),
+  },
+  {
     name: 'POST /api/plans',
     call: (a, who) =>
       a
