@@ -6,6 +6,7 @@ import type { ClassCounts } from '../../shared/run-result';
 import { findingRankSql } from '../sql/finding-rank-sql';
 import { regressionMail } from './regression-mail';
 import { REGRESSION_MAIL_ROWS } from './regression-mail-rows';
+import type { DiagnosisKind } from '../../shared/diagnosis';
 import type { RegressionRow } from './regression-row';
 import { targetKeySql } from '../sql/target-key-sql';
 import { writeRegressionGroups } from './write-regression-groups';
@@ -74,9 +75,11 @@ export async function markRegressions(
     const rows: RegressionRow[] = (
       await tx.query(
         `SELECT id::text, suite_slug, target_name, path_name, z, z_hex, expected, actual, diagnosis, labels, finding_class,
-                rule, reproducer, steps, first_left_step, choice
+                rule, reproducer, steps, first_left_step, choice,
+                count(*) OVER (PARTITION BY finding_class, suite_slug, target_name)::int AS group_total
            FROM failures f WHERE run_id = $1 AND is_regression
-          ORDER BY ${findingRankSql('f.finding_class')}, suite_slug, target_name, path_name, point_index LIMIT ${REGRESSION_MAIL_ROWS}`,
+          ORDER BY ${findingRankSql('f.finding_class')}, group_total DESC, suite_slug, target_name, path_name, point_index
+          LIMIT ${REGRESSION_MAIL_ROWS}`,
         [run.id],
       )
     ).map((r: Record<string, unknown>) => ({
@@ -96,11 +99,34 @@ export async function markRegressions(
       steps: r.steps,
       firstLeftStep: r.first_left_step,
       choice: r.choice,
+      groupTotal: r.group_total,
     })) as RegressionRow[];
     const [byClass]: ClassCounts[] = await tx.query(
       `SELECT count(*) FILTER (WHERE finding_class = 'branch')::int AS branch,
               count(*) FILTER (WHERE finding_class = 'accuracy')::int AS accuracy
          FROM failures WHERE run_id = $1 AND is_regression`,
+      [run.id],
+    );
+    // Each regression under every kind it carries, the way the failure table's diagnosis filter
+    // matches (the leading kind, or any later label: server/sql/failure-search-sql.ts), so the
+    // mail's count of a kind is the number of rows its link shows.
+    const byKind: Partial<Record<DiagnosisKind, number>> = Object.fromEntries(
+      (
+        await tx.query(
+          `SELECT k.kind, count(*)::int AS n
+             FROM failures f CROSS JOIN LATERAL (
+                    SELECT f.diagnosis_kind AS kind WHERE f.diagnosis_kind IS NOT NULL
+                    UNION SELECT l->>'kind' FROM jsonb_array_elements(f.labels - 0) l) k
+            WHERE f.run_id = $1 AND f.is_regression
+            GROUP BY k.kind`,
+          [run.id],
+        )
+      ).map((r: { kind: DiagnosisKind; n: number }) => [r.kind, r.n]),
+    );
+    // Every target of the run with regressions (a plan names a handful); the summary names the first few.
+    const targets: { name: string; count: number }[] = await tx.query(
+      `SELECT target_name AS name, count(*)::int AS count FROM failures WHERE run_id = $1 AND is_regression
+        GROUP BY target_name ORDER BY count DESC, target_name`,
       [run.id],
     );
     const versionChanges: { key: string; from: string; to: string }[] = previous
@@ -127,6 +153,8 @@ export async function markRegressions(
         rows,
         total: count,
         byClass: byClass!,
+        byKind,
+        targets,
         versionChanges,
         idempotencyKey: `regressions:${run.plan?.id ?? run.planName}:${previous?.id ?? 'none'}:${digest}`,
       }),

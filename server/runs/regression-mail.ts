@@ -1,4 +1,5 @@
 import { describeLabel } from '../../shared/describe-label';
+import type { DiagnosisKind } from '../../shared/diagnosis';
 import type { DiagnosisClass } from '../../shared/diagnosis-class';
 import { DIAGNOSIS_CLASSES } from '../../shared/diagnosis-classes';
 import type { ClassCounts } from '../../shared/run-result';
@@ -7,10 +8,10 @@ import type { NewMail } from '../mail/new-mail';
 import type { RegressionRow } from './regression-row';
 import { formatComplexText } from '../../shared/format-complex-text';
 import { REGRESSION_MAIL_ROWS } from './regression-mail-rows';
+import { escapeHtml as escape } from '../mail/escape-html';
+import { regressionSummary } from './regression-summary';
 
 const c = (v: WireComplex | null) => formatComplexText(v);
-const escape = (s: string) =>
-  s.replace(/[&<>"']/g, (ch) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[ch]!);
 const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 /** Every label of a row in words, the leading one first; "error" for a row without one. */
 const labelsOf = (r: RegressionRow): string[] => {
@@ -33,8 +34,12 @@ const HEADING: Record<DiagnosisClass, string> = {
 
 /**
  * The regression mail of a run. It opens with the regressions counted by class, says plainly
- * when they are accuracy only, and lists branch regressions first, under a heading per class (an
- * acosh value 12 ulps off used to come before the real sign flips): one block per regression with
+ * when they are accuracy only, then a summary (regression-summary.ts: counts by kind, branch
+ * kinds first, each linked to the failure table; the targets most affected; a link to all of
+ * them) before any table. Then it lists branch regressions first, under a heading per class (an
+ * acosh value 12 ulps off used to come before the real sign flips), grouped per suite × target,
+ * the groups with the most regressions first (31 groups in alphabetical order hid the large
+ * ones): one block per regression with
  * input bits, expected and actual values, every label, a convention choice, a composed subject's
  * steps with the first that left the reference, the rule, a reproducer and a link to the case;
  * plain text and HTML with the same content. It says what a regression is and that it covers only what was checked.
@@ -51,6 +56,10 @@ export function regressionMail(input: {
   total: number;
   /** Every regression of the run by class, listed or not. */
   byClass: ClassCounts;
+  /** Every regression of the run under each of its label kinds, listed or not. */
+  byKind: Partial<Record<DiagnosisKind, number>>;
+  /** Targets by number of regressions, most first. */
+  targets: { name: string; count: number }[];
   versionChanges: { key: string; from: string; to: string }[];
   /** Keeps the same regressions from being mailed twice (mark-regressions.ts). */
   idempotencyKey?: string;
@@ -76,35 +85,49 @@ export function regressionMail(input: {
   const shown = [...input.rows.slice(0, REGRESSION_MAIL_ROWS)].sort(
     (a, b) => rankOf(a.findingClass) - rankOf(b.findingClass),
   );
+  const summary = regressionSummary({
+    runId: input.runId,
+    appUrl: input.appUrl,
+    total,
+    byClass,
+    byKind: input.byKind,
+    targets: input.targets,
+  });
   const groups = [...DIAGNOSIS_CLASSES, null]
-    .map((k) => ({ k, rows: shown.filter((r) => r.findingClass === k) }))
-    .filter((g) => g.rows.length > 0);
+    .map((k) => ({ k, pairs: pairsOf(shown.filter((r) => r.findingClass === k)) }))
+    .filter((g) => g.pairs.length > 0);
   const more = total - shown.length;
   const text = [
     lead,
     ...(classLine ? [classLine] : []),
+    '',
+    ...summary.text,
     changesLine,
     '',
     ...groups.flatMap((g) => [
       ...(g.k ? [`${HEADING[g.k]} (${byClass[g.k]})`, ''] : []),
-      ...g.rows.flatMap((r) => {
-        const [first, ...others] = labelsOf(r);
-        const steps = stepLines(r);
-        return [
-          `${r.suiteSlug} × ${r.targetName} — ${r.pathName}`,
-          `  input     z = ${c(r.z)}   bits ${r.zHex.re}, ${r.zHex.im}`,
-          `  expected  ${c(r.expected)}`,
-          `  actual    ${c(r.actual)}`,
-          `  diagnosis ${first}`,
-          ...others.map((l) => `  also      ${l}`),
-          ...(r.choice ? [`  choice    ${choiceOf(r.choice)}`] : []),
-          ...steps.map((l, i) => `${i === 0 ? '  steps     ' : '            '}${l}`),
-          `  rule      ${r.rule}`,
-          `  reproduce ${r.reproducer.split('\n').join('\n            ')}`,
-          `  case      ${link(r.id)}`,
-          '',
-        ];
-      }),
+      ...g.pairs.flatMap((p) => [
+        `${pairTitle(p)}`,
+        '',
+        ...p.rows.flatMap((r) => {
+          const [first, ...others] = labelsOf(r);
+          const steps = stepLines(r);
+          return [
+            `${r.suiteSlug} × ${r.targetName} — ${r.pathName}`,
+            `  input     z = ${c(r.z)}   bits ${r.zHex.re}, ${r.zHex.im}`,
+            `  expected  ${c(r.expected)}`,
+            `  actual    ${c(r.actual)}`,
+            `  diagnosis ${first}`,
+            ...others.map((l) => `  also      ${l}`),
+            ...(r.choice ? [`  choice    ${choiceOf(r.choice)}`] : []),
+            ...steps.map((l, i) => `${i === 0 ? '  steps     ' : '            '}${l}`),
+            `  rule      ${r.rule}`,
+            `  reproduce ${r.reproducer.split('\n').join('\n            ')}`,
+            `  case      ${link(r.id)}`,
+            '',
+          ];
+        }),
+      ]),
     ]),
     more > 0 ? `…and ${more} more: ${input.appUrl}/runs/${input.runId}` : '',
     scope,
@@ -113,14 +136,17 @@ export function regressionMail(input: {
     `<tr><th align="left" valign="top" style="width: 6.5em; font-weight: normal; color: #4D5A68">${label}</th><td style="word-break: break-word">${value}</td></tr>`;
   const html = `<!doctype html><html><body style="font-family: sans-serif">
 <p>${escape(lead)}</p>
-${classLine ? `<p><strong>${escape(classLine)}</strong></p>\n` : ''}<p>${escape(changesLine)}</p>
+${classLine ? `<p><strong>${escape(classLine)}</strong></p>\n` : ''}${summary.html}
+<p>${escape(changesLine)}</p>
 ${groups
   .map(
-    (
-      g,
-    ) => `${g.k ? `<h3 style="font-size: 1em">${escape(`${HEADING[g.k]} (${byClass[g.k]})`)}</h3>\n` : ''}<table cellpadding="6" style="border-collapse: collapse; width: 100%; max-width: 720px" border="1">
+    (g) =>
+      `${g.k ? `<h3 style="font-size: 1em">${escape(`${HEADING[g.k]} (${byClass[g.k]})`)}</h3>\n` : ''}${g.pairs
+        .map(
+          (p) => `<h4 style="font-size: 1em; font-weight: normal">${escape(pairTitle(p))}</h4>
+<table cellpadding="6" style="border-collapse: collapse; width: 100%; max-width: 720px" border="1">
 <tbody>
-${g.rows
+${p.rows
   .map((r) => {
     const [first, ...others] = labelsOf(r);
     const steps = stepLines(r);
@@ -142,6 +168,8 @@ ${g.rows
   })
   .join('\n')}
 </tbody></table>`,
+        )
+        .join('\n')}`,
   )
   .join('\n')}
 ${more > 0 ? `<p>…and ${more} more: <a href="${escape(`${input.appUrl}/runs/${input.runId}`)}">the whole run</a></p>` : ''}
@@ -155,6 +183,24 @@ ${more > 0 ? `<p>…and ${more} more: <a href="${escape(`${input.appUrl}/runs/${
     html,
     idempotencyKey: input.idempotencyKey,
   };
+}
+
+/** The rows of one class split per suite × target, as they come (mark-regressions.ts reads them biggest pair first). */
+function pairsOf(rows: RegressionRow[]): { suite: string; target: string; total: number; rows: RegressionRow[] }[] {
+  const pairs = new Map<string, { suite: string; target: string; total: number; rows: RegressionRow[] }>();
+  for (const r of rows) {
+    const key = `${r.suiteSlug}\u0000${r.targetName}`;
+    const pair = pairs.get(key) ?? { suite: r.suiteSlug, target: r.targetName, total: r.groupTotal, rows: [] };
+    pair.rows.push(r);
+    pairs.set(key, pair);
+  }
+  return [...pairs.values()].sort((a, b) => b.total - a.total);
+}
+
+/** A group's heading: the pair, its regressions in this class, and how many are listed when not all. */
+function pairTitle(p: { suite: string; target: string; total: number; rows: RegressionRow[] }): string {
+  const listed = p.rows.length < p.total ? `, ${p.rows.length} listed here` : '';
+  return `${p.suite} × ${p.target}: ${plural(p.total, 'regression')}${listed}`;
 }
 
 /** A row's place in the class order; rows without a class (none are mailed today) last. */

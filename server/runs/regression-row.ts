@@ -23,4 +23,6 @@ export interface RegressionRow {
   firstLeftStep: number | null;
   /** Where conventions disagree, the rule that makes the expected value. */
   choice: string | null;
+  /** The regressions of its suite × target pair in its class, listed or not: the mail orders its groups by it. */
+  groupTotal: number;
 }

@@ -20,6 +20,7 @@ const row = (id: string): RegressionRow => ({
   steps: null,
   firstLeftStep: null,
   choice: null,
+  groupTotal: 2,
 });
 
 describe('regressionMail', () => {
@@ -31,6 +32,8 @@ describe('regressionMail', () => {
     rows: [row('41'), row('42')],
     total: 2,
     byClass: { branch: 2, accuracy: 0 },
+    byKind: {},
+    targets: [],
     versionChanges: [{ key: 'complex.js', from: '2.3.0', to: '2.4.3' }],
   });
 
@@ -62,6 +65,8 @@ describe('regressionMail', () => {
       rows: [{ ...row('9'), z: { re: '-0', im: '-2' } }],
       total: 1,
       byClass: { branch: 1, accuracy: 0 },
+      byKind: {},
+      targets: [],
       versionChanges: [],
     });
     for (const part of [onAxis.text, onAxis.html]) expect(part).toContain('z = −0 − 2i');
@@ -98,6 +103,8 @@ describe('regressionMail', () => {
       rows: [inaccurate],
       total: 1,
       byClass: { branch: 0, accuracy: 1 },
+      byKind: {},
+      targets: [],
       versionChanges: [],
     });
     for (const part of [m.text, m.html])
@@ -128,6 +135,8 @@ describe('regressionMail', () => {
       rows,
       total: byClass.branch + byClass.accuracy,
       byClass,
+      byKind: {},
+      targets: [],
       versionChanges: [],
     });
 
@@ -212,6 +221,107 @@ describe('regressionMail', () => {
     }
   });
 
+  describe('summary and groups', () => {
+    // Three pairs: two regressions of exp on 2.4.3 (alphabetically first), five of sqrt on 2.4.3, one
+    // accuracy regression of acosh. The sqrt pair has more regressions, so it comes first.
+    const sqrt = (id: string): RegressionRow => ({
+      ...row(id),
+      suiteSlug: 'sqrt-principal-sz',
+      targetName: 'complex.js@2.4.2',
+      diagnosis: { kind: 'cut-side' },
+      labels: [{ kind: 'cut-side' }, { kind: 'zero-sign', part: 'im', of: 'output' }],
+      groupTotal: 5,
+    });
+    const rows = [row('1'), row('2'), sqrt('3'), sqrt('4'), { ...acosh('5'), groupTotal: 1 }];
+    const m = regressionMail({
+      recipients: ['a@b.test'],
+      planName: 'complex.js nightly',
+      runId: '7d3f9a52-1c4e-4b8a-9f10-2a6c5e8d4b31',
+      appUrl: 'http://127.0.0.1:8460',
+      rows,
+      total: 8,
+      byClass: { branch: 7, accuracy: 1 },
+      byKind: { 'cut-side': 5, 'zero-sign': 7, inaccurate: 1 },
+      targets: [
+        { name: 'complex.js@2.4.2', count: 5 },
+        { name: 'complex.js@2.4.3', count: 3 },
+      ],
+      versionChanges: [],
+    });
+    const table = (kind?: string) =>
+      `http://127.0.0.1:8460/failures?run=7d3f9a52-1c4e-4b8a-9f10-2a6c5e8d4b31&status=new${kind ? `&diagnosis=${kind}` : ''}`;
+
+    it('opens with the regressions by kind, branch kinds first in their order, each linked to its filtered table', () => {
+      expect(m.text).toContain(
+        [
+          'Summary by kind (a point with several labels counts under each):',
+          '  Branch findings: 7',
+          `    wrong side of a cut: 5   ${table('cut-side')}`,
+          `    ignored zero sign: 7   ${table('zero-sign')}`,
+          '  Accuracy findings: 1',
+          `    inaccurate: 1   ${table('inaccurate')}`,
+          'Most affected: complex.js@2.4.2 (5), complex.js@2.4.3 (3).',
+          `All 8 in the failure table: ${table()}`,
+        ].join('\n'),
+      );
+      const html = m.html.replace(/&amp;/g, '&');
+      for (const kind of ['cut-side', 'zero-sign', 'inaccurate']) expect(html).toContain(`href="${table(kind)}"`);
+      expect(html).toContain(`<a href="${table()}">All 8 in the failure table</a>`);
+      expect(html).toContain('Most affected: complex.js@2.4.2 (5), complex.js@2.4.3 (3).');
+      expect(html.indexOf('>wrong side of a cut<')).toBeLessThan(html.indexOf('>ignored zero sign<'));
+      expect(html.indexOf('>ignored zero sign<')).toBeLessThan(html.indexOf('>inaccurate<'));
+    });
+
+    it('puts the summary before every table of regressions, in both parts', () => {
+      expect(m.text.indexOf('Summary by kind')).toBeLessThan(m.text.indexOf('Branch regressions'));
+      expect(m.text.indexOf(`All 8 in the failure table`)).toBeLessThan(m.text.indexOf('  input     z ='));
+      expect(m.html.indexOf('>Summary</h2>')).toBeLessThan(m.html.indexOf('border="1"'));
+      expect(m.html.indexOf('All 8 in the failure table')).toBeLessThan(m.html.indexOf('Branch regressions'));
+    });
+
+    it('orders the groups branch first, then by their number of regressions, not alphabetically', () => {
+      for (const part of [m.text, m.html]) {
+        const sqrtGroup = part.indexOf('sqrt-principal-sz × complex.js@2.4.2: 5 regressions, 2 listed here');
+        const expGroup = part.indexOf('exp-principal-sz × complex.js@2.4.3: 2 regressions');
+        const acoshGroup = part.indexOf('acosh-principal-sz × complex.js@2.4.3: 1 regression');
+        expect(sqrtGroup).toBeGreaterThan(0);
+        expect(sqrtGroup).toBeLessThan(expGroup);
+        expect(expGroup).toBeLessThan(acoshGroup);
+        expect(part.indexOf('Accuracy regressions')).toBeLessThan(acoshGroup);
+        expect(part.indexOf('Accuracy regressions')).toBeGreaterThan(expGroup);
+      }
+    });
+
+    it('names one target as affected, and counts the targets past the third', () => {
+      const many = regressionMail({
+        recipients: ['a@b.test'],
+        planName: 'p',
+        runId: 'r',
+        appUrl: 'http://127.0.0.1:8460',
+        rows: [row('1')],
+        total: 10,
+        byClass: { branch: 10, accuracy: 0 },
+        byKind: { 'zero-sign': 10 },
+        targets: ['a@1', 'b@1', 'c@1', 'd@1', 'e@1'].map((name) => ({ name, count: 2 })),
+        versionChanges: [],
+      });
+      expect(many.text).toContain('Most affected: a@1 (2), b@1 (2), c@1 (2) and 2 more targets.');
+      const one = regressionMail({
+        recipients: ['a@b.test'],
+        planName: 'p',
+        runId: 'r',
+        appUrl: 'http://127.0.0.1:8460',
+        rows: [row('1')],
+        total: 1,
+        byClass: { branch: 1, accuracy: 0 },
+        byKind: { 'zero-sign': 1 },
+        targets: [{ name: 'complex.js@2.4.3', count: 1 }],
+        versionChanges: [],
+      });
+      expect(one.text).toContain('Affected: complex.js@2.4.3 (1).');
+    });
+  });
+
   it('escapes what it puts into HTML', () => {
     const html = regressionMail({
       recipients: ['a@b.test'],
@@ -221,6 +331,8 @@ describe('regressionMail', () => {
       rows: [row('1')],
       total: 1,
       byClass: { branch: 1, accuracy: 0 },
+      byKind: {},
+      targets: [],
       versionChanges: [],
     }).html;
     expect(html).not.toContain('<script>');
