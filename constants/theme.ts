@@ -32,22 +32,22 @@ export const theme = {
     nav: '#1F2A36',
     navInk: '#E9E4D8',
     navActive: '#F4F1EA',
-    /**
-     * One ink per diagnosis kind, for its chip's word and for its marks in the findings-by-kind
-     * picture: 5.8–8.1:1 against `panel` and 5.2–7.3:1 against `paper` (marks need 3:1, a chip's
-     * word 4.5:1; tests/constants/theme-kind-contrast.test.ts holds them to 4.5:1).
-     */
-    kind: {
-      'other-sheet': '#A8432E',
-      'cut-side': '#8A5A00',
-      'zero-sign': '#6A4C93',
-      'misplaced-cut': '#9C2F5E',
-      'not-finite': '#5B6B2E',
-      disagreement: '#7B3F00',
-      unexplained: '#4D5A68',
-      inaccurate: '#2F5F8A',
-    } satisfies Record<DiagnosisKind, string>,
   },
+  /**
+   * One ink per diagnosis kind, for its chip's word and for its marks in the findings-by-kind
+   * picture: 5.8–8.1:1 against `color.panel` and 5.2–7.3:1 against `color.paper` (marks need 3:1, a chip's
+   * word 4.5:1; tests/constants/theme-kind-contrast.test.ts holds them to 4.5:1).
+   */
+  kindInk: {
+    'other-sheet': '#A8432E',
+    'cut-side': '#8A5A00',
+    'zero-sign': '#6A4C93',
+    'misplaced-cut': '#9C2F5E',
+    'not-finite': '#5B6B2E',
+    disagreement: '#7B3F00',
+    unexplained: '#4D5A68',
+    inaccurate: '#2F5F8A',
+  } satisfies Record<DiagnosisKind, string>,
   font: {
     regular: withMarks('IBMPlexSans_400Regular'),
     medium: withMarks('IBMPlexSans_500Medium'),

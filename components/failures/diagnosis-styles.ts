@@ -27,7 +27,7 @@ interface DiagnosisStyle {
 const kindStyle = (kind: DiagnosisKind): DiagnosisStyle => ({
   word: DIAGNOSIS_KIND_NAMES[kind].name,
   glyph: GLYPH[kind],
-  color: theme.color.kind[kind],
+  color: theme.kindInk[kind],
   explain: DIAGNOSIS_KIND_NAMES[kind].explain,
 });
 

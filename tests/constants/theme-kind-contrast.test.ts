@@ -17,13 +17,13 @@ const contrast = (a: string, b: string) => {
 
 describe('diagnosis kind inks', () => {
   it.each(DIAGNOSIS_KINDS)('%s has an ink of at least 4.5:1 on the panel and on the paper', (kind) => {
-    const ink = theme.color.kind[kind];
+    const ink = theme.kindInk[kind];
     expect(ink).toMatch(/^#[0-9A-F]{6}$/i);
     expect(contrast(ink, theme.color.panel)).toBeGreaterThanOrEqual(4.5);
     expect(contrast(ink, theme.color.paper)).toBeGreaterThanOrEqual(4.5);
   });
 
   it('gives every kind an ink of its own', () => {
-    expect(new Set(DIAGNOSIS_KINDS.map((k) => theme.color.kind[k])).size).toBe(DIAGNOSIS_KINDS.length);
+    expect(new Set(DIAGNOSIS_KINDS.map((k) => theme.kindInk[k])).size).toBe(DIAGNOSIS_KINDS.length);
   });
 });
