@@ -9,6 +9,7 @@ import type { PlanView } from '../../shared/plan-view';
 import { ActionButton } from '../ui/action-button';
 import { ConfirmAction } from '../ui/confirm-action';
 import { SkText } from '../ui/sk-text';
+import { FindingsByKind } from './findings-by-kind';
 import { PlanForm } from './plan-form';
 import { PlanSchedules } from './plan-schedules';
 import { StartRunButton } from './start-run-button';
@@ -109,6 +110,7 @@ export function PlanDetail({ plan, canEdit }: { plan: PlanView; canEdit: boolean
           clean run is evidence for those checks, not a certificate for the library.
         </SkText>
       </View>
+      <FindingsByKind planId={plan.id} />
       {/* On a phone, running and scheduling come first: the suite list can be long. Keyed, so turning
           the screen moves the panels without remounting them (a schedule being edited keeps its text). */}
       <View style={[styles.layout, wide && styles.layoutWide]}>
