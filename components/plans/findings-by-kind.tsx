@@ -1,5 +1,5 @@
 import { Link } from 'expo-router';
-import { useRef } from 'react';
+import { useRef, useState } from 'react';
 import { Pressable, ScrollView, StyleSheet, useWindowDimensions, View } from 'react-native';
 import { formatDate } from '../../client/format-date';
 import { useFindingsByKind } from '../../client/use-findings-by-kind';
@@ -20,8 +20,12 @@ type RunCounts = FindingsByKindView['runs'][number];
 
 /** How many completed runs the picture shows: twelve columns fit 1440 px beside the kind names. */
 const RUNS = 12;
-/** A column is a touch target wide (theme.touch); on a phone the columns scroll, newest in view. */
+/**
+ * A column shares the width the panel leaves beside the kind names, between a touch target
+ * (theme.touch) and WIDEST; where twelve do not fit (a phone) they scroll, newest in view.
+ */
 const COLUMN = theme.touch;
+const WIDEST = 112;
 /** The tallest bar, in px: a row's largest count. */
 const BAR = 40;
 const CLASS_TITLE = { branch: 'Branch findings', accuracy: 'Accuracy findings' } as const;
@@ -42,9 +46,11 @@ export function FindingsByKind({ planId }: { planId: string }) {
   const wide = useWindowDimensions().width >= theme.wide;
   const query = useFindingsByKind(planId, RUNS);
   const scroller = useRef<ScrollView>(null);
+  const [room, setRoom] = useState(0);
   const runs = query.data?.runs ?? [];
   const occurring = DIAGNOSIS_KINDS.filter((k) => runs.some((r) => r.byKind[k] > 0));
   const absent = DIAGNOSIS_KINDS.filter((k) => !occurring.includes(k));
+  const column = Math.max(COLUMN, Math.min(WIDEST, Math.floor(room / Math.max(1, runs.length))));
   const lead =
     runs.length === 0
       ? undefined
@@ -89,10 +95,11 @@ export function FindingsByKind({ planId }: { planId: string }) {
             horizontal
             ref={scroller}
             style={styles.columns}
+            onLayout={(e) => setRoom(e.nativeEvent.layout.width)}
             onContentSizeChange={() => scroller.current?.scrollToEnd({ animated: false })}
           >
             {runs.map((run) => (
-              <View key={run.id} style={styles.column}>
+              <View key={run.id} style={{ width: column }}>
                 <Link href={`/runs/${run.id}` as never} asChild>
                   <Pressable
                     accessibilityRole="link"
@@ -192,7 +199,6 @@ const styles = StyleSheet.create({
   grid: { flexDirection: 'row' },
   names: { flexShrink: 0 },
   columns: { flexGrow: 1 },
-  column: { width: COLUMN },
   headCell: { height: 44, justifyContent: 'center', alignItems: 'center' },
   classCell: {
     height: 28,

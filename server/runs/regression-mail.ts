@@ -143,7 +143,7 @@ ${groups
     (g) =>
       `${g.k ? `<h3 style="font-size: 1em">${escape(`${HEADING[g.k]} (${byClass[g.k]})`)}</h3>\n` : ''}${g.pairs
         .map(
-          (p) => `<h4 style="font-size: 1em; font-weight: normal">${escape(pairTitle(p))}</h4>
+          (p) => `<h4 style="font-size: 1em; margin-bottom: 0.3em">${escape(pairTitle(p))}</h4>
 <table cellpadding="6" style="border-collapse: collapse; width: 100%; max-width: 720px" border="1">
 <tbody>
 ${p.rows
