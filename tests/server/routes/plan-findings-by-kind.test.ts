@@ -1,11 +1,8 @@
 import request from 'supertest';
-import { User } from '../../../server/entities/user';
-import { PlanService } from '../../../server/plans/plan-service';
 import { DIAGNOSIS_KINDS } from '../../../shared/diagnosis-kinds';
 import type { FindingsByKindView } from '../../../shared/findings-by-kind-view';
 import { approvedSuite } from '../../setup/approved-suite';
-import { conjugatingSqrtTarget } from '../../setup/conjugating-sqrt-target';
-import { inlinePlanRunner } from '../../setup/inline-plan-runner';
+import { conjugatingLibraryRuns } from '../../setup/conjugating-library-runs';
 import { signInAs } from '../../setup/sign-in-as';
 import { startTestApp, type TestApp } from '../../setup/test-app';
 
@@ -18,28 +15,15 @@ describe('GET /api/plans/:id/findings-by-kind', () => {
   beforeAll(async () => {
     t = await startTestApp();
     const ds = t.db.dataSource;
-    await ds.query(
-      `INSERT INTO targets (name, library, version, settings, installed, last_seen_at) VALUES ('kindlib@1', 'kindlib', '1', '{}', true, now()), ('kindlib@2', 'kindlib', '2', '{}', true, now())`,
-    );
     await approvedSuite(ds, 'kinds-sqrt', 'sqrt-principal-sz');
-    const owner = await ds.getRepository(User).findOneByOrFail({ email: 'kwame@sheetkeeper.test' });
-    const plans = new PlanService(ds);
-    const body = (target: string) => ({
+    const plan = await conjugatingLibraryRuns(ds, 'kindlib', {
       name: 'kinds plan',
-      description: '',
       recipients: [],
       suites: ['kinds-sqrt'],
-      targets: [target],
     });
-    planId = (await plans.save(owner, body('kindlib@1'), null)).id;
-    const runner = inlinePlanRunner(ds, owner, (name) =>
-      name.startsWith('kindlib@') ? conjugatingSqrtTarget('kindlib', name.endsWith('2') ? '2' : '1') : null,
-    );
-    for (const target of ['kindlib@1', 'kindlib@2', 'kindlib@2']) {
-      await plans.save(owner, body(target), planId);
-      runIds.push(await runner.run(planId));
-    }
-    runner.close();
+    planId = plan.planId;
+    for (const version of ['1', '2', '2'] as const) runIds.push(await plan.runOn(version));
+    plan.close();
     // A cancelled run is left out: it checked only part of the plan.
     await ds.query(
       `INSERT INTO runs (plan_id, plan_name, trigger, status, shards_total, counts) VALUES ($1, 'kinds plan', 'manual', 'cancelled', 1, $2)`,

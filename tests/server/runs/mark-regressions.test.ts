@@ -1,12 +1,9 @@
 import request from 'supertest';
 import { OutboxMail } from '../../../server/entities/outbox-mail';
-import { User } from '../../../server/entities/user';
-import { PlanService } from '../../../server/plans/plan-service';
 import { DIAGNOSIS_KIND_NAMES } from '../../../shared/diagnosis-kind-names';
 import { DIAGNOSIS_KINDS } from '../../../shared/diagnosis-kinds';
 import { approvedSuite } from '../../setup/approved-suite';
-import { conjugatingSqrtTarget } from '../../setup/conjugating-sqrt-target';
-import { inlinePlanRunner } from '../../setup/inline-plan-runner';
+import { conjugatingLibraryRuns } from '../../setup/conjugating-library-runs';
 import { signInAs } from '../../setup/sign-in-as';
 import { startTestApp, type TestApp } from '../../setup/test-app';
 
@@ -24,29 +21,17 @@ describe('markRegressions: the regression mail summary', () => {
   beforeAll(async () => {
     t = await startTestApp();
     const ds = t.db.dataSource;
-    await ds.query(
-      `INSERT INTO targets (name, library, version, settings, installed, last_seen_at) VALUES ('sumlib@1', 'sumlib', '1', '{}', true, now()), ('sumlib@2', 'sumlib', '2', '{}', true, now())`,
-    );
     await approvedSuite(ds, 'sum-sqrt', 'sqrt-principal-sz');
     // Named to come first alphabetically; it has fewer regressions, so it must come second.
     await approvedSuite(ds, 'a-sqrt-half-power', 'sqrt-agrees-with-half-power');
-    const owner = await ds.getRepository(User).findOneByOrFail({ email: 'kwame@sheetkeeper.test' });
-    const plans = new PlanService(ds);
-    const body = (target: string) => ({
+    const plan = await conjugatingLibraryRuns(ds, 'sumlib', {
       name: 'summary plan',
-      description: '',
       recipients: ['kwame@sheetkeeper.test'],
       suites: ['sum-sqrt', 'a-sqrt-half-power'],
-      targets: [target],
     });
-    const planId = (await plans.save(owner, body('sumlib@1'), null)).id;
-    const runner = inlinePlanRunner(ds, owner, (name) =>
-      name.startsWith('sumlib@') ? conjugatingSqrtTarget('sumlib', name.endsWith('2') ? '2' : '1') : null,
-    );
-    await runner.run(planId);
-    await plans.save(owner, body('sumlib@2'), planId);
-    runId = await runner.run(planId);
-    runner.close();
+    await plan.runOn('1');
+    runId = await plan.runOn('2');
+    plan.close();
     mail = await ds.getRepository(OutboxMail).findOneByOrFail({ kind: 'regression' });
     kwame = await signInAs(t.app, 'maintainer');
   }, 120_000);

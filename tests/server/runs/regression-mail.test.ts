@@ -126,7 +126,11 @@ describe('regressionMail', () => {
       findingClass: 'accuracy',
     };
   };
-  const mailOf = (rows: RegressionRow[], byClass: { branch: number; accuracy: number }) =>
+  const mailOf = (
+    rows: RegressionRow[],
+    byClass: { branch: number; accuracy: number },
+    over: Partial<Parameters<typeof regressionMail>[0]> = {},
+  ) =>
     regressionMail({
       recipients: ['a@b.test'],
       planName: 'complex.js nightly',
@@ -138,6 +142,7 @@ describe('regressionMail', () => {
       byKind: {},
       targets: [],
       versionChanges: [],
+      ...over,
     });
 
   it('leads with the regressions counted by class and lists branch regressions before accuracy ones', () => {
@@ -233,21 +238,18 @@ describe('regressionMail', () => {
       groupTotal: 5,
     });
     const rows = [row('1'), row('2'), sqrt('3'), sqrt('4'), { ...acosh('5'), groupTotal: 1 }];
-    const m = regressionMail({
-      recipients: ['a@b.test'],
-      planName: 'complex.js nightly',
-      runId: '7d3f9a52-1c4e-4b8a-9f10-2a6c5e8d4b31',
-      appUrl: 'http://127.0.0.1:8460',
+    const m = mailOf(
       rows,
-      total: 8,
-      byClass: { branch: 7, accuracy: 1 },
-      byKind: { 'cut-side': 5, 'zero-sign': 7, inaccurate: 1 },
-      targets: [
-        { name: 'complex.js@2.4.2', count: 5 },
-        { name: 'complex.js@2.4.3', count: 3 },
-      ],
-      versionChanges: [],
-    });
+      { branch: 7, accuracy: 1 },
+      {
+        runId: '7d3f9a52-1c4e-4b8a-9f10-2a6c5e8d4b31',
+        byKind: { 'cut-side': 5, 'zero-sign': 7, inaccurate: 1 },
+        targets: [
+          { name: 'complex.js@2.4.2', count: 5 },
+          { name: 'complex.js@2.4.3', count: 3 },
+        ],
+      },
+    );
     const table = (kind?: string) =>
       `http://127.0.0.1:8460/failures?run=7d3f9a52-1c4e-4b8a-9f10-2a6c5e8d4b31&status=new${kind ? `&diagnosis=${kind}` : ''}`;
 
@@ -293,31 +295,23 @@ describe('regressionMail', () => {
     });
 
     it('names one target as affected, and counts the targets past the third', () => {
-      const many = regressionMail({
-        recipients: ['a@b.test'],
-        planName: 'p',
-        runId: 'r',
-        appUrl: 'http://127.0.0.1:8460',
-        rows: [row('1')],
-        total: 10,
-        byClass: { branch: 10, accuracy: 0 },
-        byKind: { 'zero-sign': 10 },
-        targets: ['a@1', 'b@1', 'c@1', 'd@1', 'e@1'].map((name) => ({ name, count: 2 })),
-        versionChanges: [],
-      });
+      const many = mailOf(
+        [row('1')],
+        { branch: 10, accuracy: 0 },
+        {
+          byKind: { 'zero-sign': 10 },
+          targets: ['a@1', 'b@1', 'c@1', 'd@1', 'e@1'].map((name) => ({ name, count: 2 })),
+        },
+      );
       expect(many.text).toContain('Most affected: a@1 (2), b@1 (2), c@1 (2) and 2 more targets.');
-      const one = regressionMail({
-        recipients: ['a@b.test'],
-        planName: 'p',
-        runId: 'r',
-        appUrl: 'http://127.0.0.1:8460',
-        rows: [row('1')],
-        total: 1,
-        byClass: { branch: 1, accuracy: 0 },
-        byKind: { 'zero-sign': 1 },
-        targets: [{ name: 'complex.js@2.4.3', count: 1 }],
-        versionChanges: [],
-      });
+      const one = mailOf(
+        [row('1')],
+        { branch: 1, accuracy: 0 },
+        {
+          byKind: { 'zero-sign': 1 },
+          targets: [{ name: 'complex.js@2.4.3', count: 1 }],
+        },
+      );
       expect(one.text).toContain('Affected: complex.js@2.4.3 (1).');
     });
   });

@@ -1,5 +1,3 @@
-import { complexJsTarget } from '../../../harness/adapters/complex-js-target';
-import type { Target } from '../../../harness/adapters/target';
 import { ReceivedMail } from '../../../server/entities/received-mail';
 import { User } from '../../../server/entities/user';
 import { FakeSmtpServer } from '../../../server/mail/fake-smtp-server';
@@ -10,29 +8,14 @@ import { markRegressions } from '../../../server/runs/mark-regressions';
 import { RunService } from '../../../server/runs/run-service';
 import { ShardExecutor } from '../../../server/runs/shard-executor';
 import { approvedSuite } from '../../setup/approved-suite';
+import { conjugatingSqrtTarget } from '../../setup/conjugating-sqrt-target';
 import { createTestDatabase, type TestDatabase } from '../../setup/test-database';
 
 /**
- * A library under test whose version 2 breaks √z in the upper half-plane (it returns the
- * conjugate), built on complex.js 2.4.3: what it got right in version 1 and wrong in
- * version 2 must come back as regressions, in exactly one mail.
+ * fakelib, whose version 2 breaks √z in the upper half-plane (tests/setup/conjugating-sqrt-target.ts):
+ * what it got right in version 1 and wrong in version 2 must come back as regressions, in exactly one mail.
  */
-function fakeLibrary(version: '1' | '2'): Target {
-  const base = complexJsTarget('complex.js', '2.4.3');
-  return {
-    name: `fakelib@${version}`,
-    library: 'fakelib',
-    version,
-    settings: {},
-    supports: (op) => base.supports(op),
-    close: () => base.close(),
-    evaluate: async (op, calls) => {
-      const results = await base.evaluate(op, calls);
-      if (version === '1' || op !== 'sqrt') return results;
-      return results.map((r, i) => ('value' in r && calls[i]![0]![1] > 0 ? { value: [r.value[0], -r.value[1]] } : r));
-    },
-  };
-}
+const fakeLibrary = (version: '1' | '2') => conjugatingSqrtTarget('fakelib', version);
 
 describe('a plan run through the queue, with regressions and their mail', () => {
   let db: TestDatabase;
