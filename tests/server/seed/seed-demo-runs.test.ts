@@ -30,9 +30,14 @@ describe('seedDemoRuns', () => {
       `SELECT count(*)::int AS failures FROM failures WHERE is_regression AND target_version <> '2.3.0'`,
     );
     expect(failures).toBe(runs[1].regressions);
-    const mail = await db.dataSource.query(`SELECT subject FROM outbox_mail`);
+    const mail = await db.dataSource.query(`SELECT subject, text_body AS text FROM outbox_mail`);
     expect(mail).toHaveLength(1);
     expect(mail[0].subject).toMatch(/regression/);
+    // The demo mail opens with its summary by kind, before any regression is listed.
+    const text: string = mail[0].text;
+    expect(text).toContain(`All ${runs[1].regressions} in the failure table: `);
+    expect(text.indexOf('Summary by kind')).toBeGreaterThan(0);
+    expect(text.indexOf('Summary by kind')).toBeLessThan(text.indexOf('  input     z ='));
     const [plan] = await db.dataSource.query(
       `SELECT array_agg(target_name ORDER BY target_name) AS targets FROM plan_targets pt JOIN plans p ON p.id = pt.plan_id WHERE p.name = 'complex.js nightly'`,
     );
