@@ -1,6 +1,7 @@
 import type { DiagnosisKind } from '../../shared/diagnosis';
 import { diagnosisClass } from '../../shared/diagnosis-class';
 import { DIAGNOSIS_CLASSES } from '../../shared/diagnosis-classes';
+import { DIAGNOSIS_KIND_NAMES } from '../../shared/diagnosis-kind-names';
 import { DIAGNOSIS_KINDS } from '../../shared/diagnosis-kinds';
 import type { RunMatrixCell } from '../../shared/run-matrix-cell';
 import { OUTCOME_GLYPH } from './outcome-glyph';
@@ -95,15 +96,18 @@ export function describeMatrixCell(cell: RunMatrixCell): MatrixCellWords {
       headline = `${OUTCOME_GLYPH.fail} ${n(counts.fail)}${classes.map(([c, count]) => ` · ${n(count)} ${c}`).join('')}`;
       said.push(
         `${n(counts.fail)} failed: ${classes.map(([c, count]) => `${n(count)} ${c} finding${count === 1 ? '' : 's'}`).join(', ')}`,
-        ...diagnoses.map(([kind, count]) => `${n(count)} ${kind}`),
+        ...diagnoses.map(([kind, count]) => `${n(count)} ${DIAGNOSIS_KIND_NAMES[kind].name}`),
       );
-      for (const [kind, count] of diagnoses) details.push(`${n(count)} ${kind}`);
+      for (const [kind, count] of diagnoses) details.push(`${n(count)} ${DIAGNOSIS_KIND_NAMES[kind].name}`);
     } else {
       // A cell stored before failures were counted by class: the leading diagnosis stands in.
       const [top, ...rest] = diagnoses;
       headline = `${OUTCOME_GLYPH.fail} ${n(counts.fail)}${top ? ` · ${n(top[1])} ${top[0]}` : ''}`;
-      said.push(`${n(counts.fail)} failed`, ...diagnoses.map(([kind, count]) => `${n(count)} ${kind}`));
-      for (const [kind, count] of rest) details.push(`${n(count)} ${kind}`);
+      said.push(
+        `${n(counts.fail)} failed`,
+        ...diagnoses.map(([kind, count]) => `${n(count)} ${DIAGNOSIS_KIND_NAMES[kind].name}`),
+      );
+      for (const [kind, count] of rest) details.push(`${n(count)} ${DIAGNOSIS_KIND_NAMES[kind].name}`);
     }
     details.push(`${OUTCOME_GLYPH.pass} ${n(counts.pass)} passed`);
     said.push(`${n(counts.pass)} passed`);

@@ -83,12 +83,12 @@ describe.each([
     expect(within(cellOf('sqrt-principal-sz', 'complex.js@2.4.3')).getByText('✓ 120')).toBeTruthy();
     const failing = cellOf('sqrt-principal-sz', 'complex.js@2.4.2');
     expect(within(failing).getByText('❌ 3 · 3 branch')).toBeTruthy();
-    expect(within(failing).getByText('2 other-sheet')).toBeTruthy();
-    expect(within(failing).getByText('1 cut-side')).toBeTruthy();
+    expect(within(failing).getByText('2 other sheet')).toBeTruthy();
+    expect(within(failing).getByText('1 wrong side of a cut')).toBeTruthy();
     expect(within(failing).getByText('✓ 117 passed')).toBeTruthy();
     expect(within(failing).getByText('− 4 skipped')).toBeTruthy();
     expect(failing.getAttribute('aria-label')).toBe(
-      'sqrt-principal-sz on complex.js@2.4.2: 3 failed: 3 branch findings, 2 other-sheet, 1 cut-side, 117 passed, 4 skipped. Open these failures',
+      'sqrt-principal-sz on complex.js@2.4.2: 3 failed: 3 branch findings, 2 other sheet, 1 wrong side of a cut, 117 passed, 4 skipped. Open these failures',
     );
     expect(within(cellOf('acos-principal-sz', 'complex.js@2.4.3')).getByText('↻ running')).toBeTruthy();
   });
@@ -105,11 +105,11 @@ describe.each([
     const only = cellOf('asin-principal-sz', 'complex.js@2.4.3');
     expect(within(only).getByText('❌ 42 · 2 branch · 40 accuracy')).toBeTruthy();
     const lines = within(only)
-      .getAllByText(/zero-sign|inaccurate|not applicable/)
+      .getAllByText(/ignored zero sign|inaccurate|not applicable/)
       .map((e) => e.textContent);
-    expect(lines).toEqual(['2 zero-sign', '40 inaccurate', '– 6 not applicable']);
+    expect(lines).toEqual(['2 ignored zero sign', '40 inaccurate', '– 6 not applicable']);
     expect(only.getAttribute('aria-label')).toBe(
-      'asin-principal-sz on complex.js@2.4.3: 42 failed: 2 branch findings, 40 accuracy findings, 2 zero-sign, 40 inaccurate, 100 passed, 6 not applicable to the entry. Open these failures',
+      'asin-principal-sz on complex.js@2.4.3: 42 failed: 2 branch findings, 40 accuracy findings, 2 ignored zero sign, 40 inaccurate, 100 passed, 6 not applicable to the entry. Open these failures',
     );
   });
 
