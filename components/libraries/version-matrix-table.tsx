@@ -6,6 +6,7 @@ import { SkText } from '../ui/sk-text';
 import { formatComplexText } from '../../shared/format-complex-text';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 import { NOTE_BOX_STYLE } from '../ui/note-box-style';
+import { DIAGNOSIS_KIND_NAMES } from '../../shared/diagnosis-kind-names';
 
 type SuiteEntry = VersionMatrix['suites'][number];
 type Change = SuiteEntry['changes'][number];
@@ -27,7 +28,7 @@ function outcomeWords(o: Side['outcome']): string {
     case 'pass':
       return '✓ pass';
     case 'fail':
-      return `× ${o.diagnosis.kind}`;
+      return `× ${DIAGNOSIS_KIND_NAMES[o.diagnosis.kind].name}`;
     case 'error':
       return `! error: ${o.message}`;
     case 'skipped':

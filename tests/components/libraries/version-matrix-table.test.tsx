@@ -65,7 +65,7 @@ describe('VersionMatrixTable', () => {
     const row = screen.getByTestId('matrix-sqrt-principal-sz').textContent!;
     expect(row).toContain('straddle (-inf, 0] · point 5 (on -0) · z = −4 − 0i');
     expect(row).toContain('first changed in 2.4.1');
-    expect(row).toContain('2.3.0: 0 + 2i (× zero-sign)→ 2.4.1: 0 − 2i (✓ pass)');
+    expect(row).toContain('2.3.0: 0 + 2i (× ignored zero sign)→ 2.4.1: 0 − 2i (✓ pass)');
     expect(screen.getByTestId('matrix-exp-principal-sz').textContent).toContain('No point of this suite changed value');
   });
 
