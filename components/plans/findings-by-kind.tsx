@@ -147,6 +147,7 @@ function KindName({ kind, runs }: { kind: DiagnosisKind; runs: RunCounts[] }) {
     <View
       style={styles.rowCell}
       accessible
+      accessibilityRole="image"
       accessibilityLabel={`${style.word}, oldest run first: ${runs.map((r) => r.byKind[kind]).join(', ')}`}
     >
       <SkText variant="label" numberOfLines={2} style={{ color: theme.kindInk[kind] }}>
@@ -176,6 +177,7 @@ function KindBar({ kind, run, max }: { kind: DiagnosisKind; run: RunCounts; max:
       <View
         style={styles.rowCell}
         accessible
+        accessibilityRole="image"
         accessibilityLabel={`No ${name} in the run of ${formatDate(run.createdAt)}`}
       >
         {body}

@@ -1,3 +1,4 @@
+import { readFileSync } from 'node:fs';
 import { DEMO_USERS } from '../../server/seed/demo-users';
 import { DIAGNOSIS_KIND_NAMES } from '../../shared/diagnosis-kind-names';
 import { DIAGNOSIS_KINDS } from '../../shared/diagnosis-kinds';
@@ -20,6 +21,22 @@ describe('findings by kind: the plan picture and the regression mail summary', (
     const picture = b.page.getByTestId('findings-by-kind');
     await picture.getByText('Branch findings').waitFor();
     await saveScreenshots(b.page, 'plan-findings-by-kind', () => picture.getByText('Branch findings').waitFor());
+
+    // axe-core over the picture: no serious or critical violation (contrast included). Evaluated
+    // through the debugging protocol, which the app's Content Security Policy does not govern.
+    await b.page.evaluate(readFileSync(require.resolve('axe-core/axe.min.js'), 'utf8'));
+    const violations = await b.page.evaluate(async () => {
+      const axe = (
+        window as unknown as {
+          axe: { run: (c: string) => Promise<{ violations: { id: string; impact: string; nodes: unknown[] }[] }> };
+        }
+      ).axe;
+      const result = await axe.run('[data-testid="findings-by-kind"]');
+      return result.violations
+        .filter((v) => v.impact === 'serious' || v.impact === 'critical')
+        .map((v) => `${v.id} (${v.nodes.length})`);
+    });
+    expect(violations).toEqual([]);
 
     // Every row names its kind with its counts, oldest run first; branch kinds come before accuracy.
     const rows = await picture
