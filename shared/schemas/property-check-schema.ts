@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { complexString, numberString } from './complex-string';
 import { objectError } from './object-error';
+import { regionGeometryIssues } from './region-geometry-issues';
 
 /**
  * The laws a property check can state. Each is a published identity or range condition
@@ -22,16 +23,21 @@ export const PROPERTY_LAWS = [
   'unwinding',
 ] as const;
 
-const region = z.discriminatedUnion(
-  'kind',
-  [
-    z.strictObject({ kind: z.literal('disc'), center: complexString, radius: numberString }, { error: objectError }),
-    z.strictObject({ kind: z.literal('box'), min: complexString, max: complexString }, { error: objectError }),
-    /** Points within `distance` of the subject's expected cuts, on both sides. */
-    z.strictObject({ kind: z.literal('near-cuts'), distance: numberString }, { error: objectError }),
-  ],
-  { error: 'kind must be disc, box or near-cuts' },
-);
+const region = z
+  .discriminatedUnion(
+    'kind',
+    [
+      z.strictObject({ kind: z.literal('disc'), center: complexString, radius: numberString }, { error: objectError }),
+      z.strictObject({ kind: z.literal('box'), min: complexString, max: complexString }, { error: objectError }),
+      /** Points within `distance` of the subject's expected cuts, on both sides. */
+      z.strictObject({ kind: z.literal('near-cuts'), distance: numberString }, { error: objectError }),
+    ],
+    { error: 'kind must be disc, box or near-cuts' },
+  )
+  // A region that holds no point (a disc of radius 0) would check no law: refused beside its field.
+  .superRefine((r, ctx) => {
+    for (const issue of regionGeometryIssues(r)) ctx.addIssue({ code: 'custom', ...issue });
+  });
 
 export const propertyCheckSchema = z
   .strictObject(

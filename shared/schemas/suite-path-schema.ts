@@ -3,6 +3,7 @@ import { textSchema } from './text-schema';
 import { complexString, numberString } from './complex-string';
 import { entryNameSchema } from './entry-name-schema';
 import { objectError } from './object-error';
+import { pathGeometryIssues } from './path-geometry-issues';
 
 /** An angle: a number string (radians) or an exact rational multiple of π ("pi", "-pi/2", "3pi/4"). */
 export const angleString = z.union(
@@ -90,9 +91,16 @@ const straddle = z.strictObject(
       { error: 'must be a segment {from, to} or a ray {from, through}' },
     ),
     /** Along a segment: fractions of its length in [0, 1]; along a ray: distances from its start. */
-    along: z.array(numberString).min(1, { error: 'needs at least one place' }).max(1000),
+    along: z
+      .array(numberString)
+      .min(1, { error: 'needs at least one place' })
+      .max(1000, { error: 'must have at most 1000 places' }),
     /** Distances from the cut, each used on both sides; the points exactly on it come with +0 and −0. */
-    offsets: z.array(numberString).min(1).max(32).default(['1e-3', '1e-9', '1e-300', '5e-324']),
+    offsets: z
+      .array(numberString)
+      .min(1, { error: 'needs at least one offset' })
+      .max(32, { error: 'must have at most 32 offsets' })
+      .default(['1e-3', '1e-9', '1e-300', '5e-324']),
   },
   { error: objectError },
 );
@@ -115,6 +123,12 @@ const points = z.strictObject(
   { error: objectError },
 );
 
+const gridCount = z
+  .number({ error: 'must be a whole number' })
+  .int({ error: 'must be a whole number' })
+  .min(2, { error: 'must be at least 2' })
+  .max(2000, { error: 'must be at most 2000' });
+
 const grid = z.strictObject(
   {
     kind: z.literal('grid'),
@@ -122,17 +136,22 @@ const grid = z.strictObject(
     entry,
     min: complexString,
     max: complexString,
-    columns: z.number().int().min(2).max(2000),
-    rows: z.number().int().min(2).max(2000),
+    columns: gridCount,
+    rows: gridCount,
     both_zero_signs: z.boolean().default(true),
   },
   { error: objectError },
 );
 
 /** One path of a suite, docs/vocabulary.md. Numbers are strings (docs/suite-format.md); t runs over [0, 1]. */
-export const suitePathSchema = z.discriminatedUnion('kind', [circle, segment, polyline, straddle, points, grid], {
-  error: 'kind must be circle, segment, polyline, straddle, points or grid',
-});
+export const suitePathSchema = z
+  .discriminatedUnion('kind', [circle, segment, polyline, straddle, points, grid], {
+    error: 'kind must be circle, segment, polyline, straddle, points or grid',
+  })
+  // A path that would check nothing (a radius of -1, a cut of no length) is refused here, beside its field.
+  .superRefine((path, ctx) => {
+    for (const issue of pathGeometryIssues(path)) ctx.addIssue({ code: 'custom', ...issue });
+  });
 
 export type SuitePath = z.infer<typeof suitePathSchema>;
 /** A path as written in a file or a form, before defaults are filled in. */

@@ -1,0 +1,35 @@
+import { GeometryRules, type GeometryIssue } from './geometry-rules';
+
+type Point = { re: string; im: string };
+type ParsedRegion =
+  | { kind: 'disc'; center: Point; radius: string }
+  | { kind: 'box'; min: Point; max: Point }
+  | { kind: 'near-cuts'; distance: string };
+
+/**
+ * Why a property check's region would hold no point to draw (harness/properties/region-arbitrary.ts
+ * answers such a check with an error instead of a verdict): a disc needs a finite centre and a
+ * radius above 0, a box finite corners with min below and left of max, near-cuts a distance above 0.
+ */
+export function regionGeometryIssues(region: ParsedRegion): GeometryIssue[] {
+  const rules = new GeometryRules();
+  switch (region.kind) {
+    case 'disc':
+      rules.point(['center'], region.center);
+      rules.positive(['radius'], region.radius, 'the disc holds no point');
+      break;
+    case 'box': {
+      const min = rules.point(['min'], region.min);
+      const max = rules.point(['max'], region.max);
+      if (min && max && !(min.re < max.re))
+        rules.say(['max', 're'], 'must be greater than min’s: the box has no width');
+      if (min && max && !(min.im < max.im))
+        rules.say(['max', 'im'], 'must be greater than min’s: the box has no height');
+      break;
+    }
+    case 'near-cuts':
+      rules.positive(['distance'], region.distance, 'no point lies near the cuts');
+      break;
+  }
+  return rules.issues;
+}
