@@ -1,11 +1,13 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { ApiRequestError } from '../../client/api-request-error';
 import { theme } from '../../constants/theme';
+import { fieldLabel } from '../../shared/field-label';
 import { SkText } from '../ui/sk-text';
 
 /**
- * A refused request, in words: the message, and for invalid input every field with its rule
- * (`prefix.` is dropped from field names, e.g. "file." for an uploaded suite).
+ * A refused request, in words: the message, and for invalid input every field with its rule,
+ * the field in the form's words ("Path 1 · samples"; `prefix.` is dropped first, e.g. "file."
+ * for an uploaded suite).
  */
 export function IssueList({ error, prefix = '', testID }: { error: Error | null; prefix?: string; testID?: string }) {
   if (!error) return null;
@@ -18,7 +20,10 @@ export function IssueList({ error, prefix = '', testID }: { error: Error | null;
       {body?.kind === 'invalid-input'
         ? body.issues.map((i, k) => (
             <SkText variant="caption" tone="ink" key={k} style={styles.line}>
-              • <Text style={styles.field}>{i.field.startsWith(prefix) ? i.field.slice(prefix.length) : i.field}</Text>{' '}
+              •{' '}
+              <Text style={styles.field}>
+                {fieldLabel(i.field.startsWith(prefix) ? i.field.slice(prefix.length) : i.field)}
+              </Text>{' '}
               {i.rule}
             </SkText>
           ))
@@ -35,5 +40,5 @@ const styles = StyleSheet.create({
     gap: theme.space(1),
   },
   line: { lineHeight: 20 },
-  field: { fontFamily: theme.font.mono },
+  field: { fontFamily: theme.font.medium },
 });

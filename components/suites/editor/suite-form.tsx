@@ -7,6 +7,7 @@ import { useKeptDraft } from '../../../client/use-kept-draft';
 import { useSuiteTools } from '../../../client/use-suite-tools';
 import { theme } from '../../../constants/theme';
 import type { SuiteIssue } from '../../../shared/suite-issue';
+import { fieldLabel } from '../../../shared/field-label';
 import { validateSuite } from '../../../shared/validate-suite';
 import { ActionButton } from '../../ui/action-button';
 import { ChipGroup } from '../../ui/chip-group';
@@ -460,8 +461,8 @@ export function SuiteForm({ initial, editing, draftKey, onDone }: Props) {
               is lost.
             </SkText>
             {visible.map((i, k) => (
-              <SkText variant="mono" key={k}>
-                • {i.field}: {i.rule}
+              <SkText variant="caption" tone="ink" key={k}>
+                • {fieldLabel(i.field)}: {i.rule}
               </SkText>
             ))}
           </View>

@@ -382,3 +382,29 @@ describe('SuiteForm', () => {
     expect(screen.queryByTestId('kept-draft-notice')).toBeNull();
   });
 });
+
+describe('SuiteForm on a path that checks nothing', () => {
+  it('shows a radius of -1 refused beside the field, sends nothing, and names it "Path 1 · radius"', async () => {
+    const calls = mockFetch(201, savedVersion);
+    renderWithClient(
+      <SuiteForm
+        initial={{ ...emptySuiteDraft(), id: 'sqrt-circle', title: 'Square root on a circle', subject: 'sqrt(z)' }}
+        editing={null}
+        draftKey={DRAFT_KEY}
+        onDone={jest.fn()}
+      />,
+    );
+    await toolsLoaded();
+    type('Path 1 radius', '-1');
+    await waitFor(() =>
+      expect(
+        within(fieldOf('Path 1 radius')).getByText('× Radius must be greater than 0: with -1 the circle has no points'),
+      ).toBeTruthy(),
+    );
+    await press('Save draft');
+    const refusal = await screen.findByTestId('suite-form-refused');
+    expect(refusal.textContent).toContain('Path 1 · radius: must be greater than 0');
+    expect(refusal.textContent).not.toMatch(/paths\.\d/);
+    expect(calls).toHaveLength(0);
+  });
+});
