@@ -7,6 +7,7 @@ import { Suite } from '../entities/suite';
 import { SuiteVersion } from '../entities/suite-version';
 import type { User } from '../entities/user';
 import { HttpError } from '../http/http-error';
+import { refuseBrokenBody } from './refuse-broken-body';
 import { toSuiteVersionView } from '../views/to-suite-version-view';
 
 const RELATIONS = { suite: true, author: true, takenOverFrom: true, reviewer: true } as const;
@@ -170,6 +171,7 @@ export class SuiteService {
           kind: 'forbidden',
           message: 'Only the author (or an admin) can submit this draft.',
         });
+      refuseBrokenBody(latest.body, latest.version, 'submitted');
       await tx.getRepository(SuiteVersion).update(latest.id, { status: 'submitted', submittedAt: new Date() });
       return this.view(tx, latest.id);
     });
@@ -193,6 +195,9 @@ export class SuiteService {
       // (the author) nor the person whose draft that editor took over.
       if (target.author.id === user.id || target.takenOverFrom?.id === user.id)
         throw new HttpError(403, { kind: 'forbidden', message: 'You cannot review a suite version you wrote.' });
+      // A version stored before a rule of the suite format existed (a circle of radius -1) is
+      // checked again: approving it would put a suite that checks nothing into every plan run.
+      if (decision === 'approve') refuseBrokenBody(target.body, version, 'approved');
       await tx.getRepository(SuiteVersion).update(target.id, {
         status: decision === 'approve' ? 'approved' : 'changes-requested',
         reviewer: user,

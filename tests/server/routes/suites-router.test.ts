@@ -306,6 +306,79 @@ describe('reference tables uploaded for a suite', () => {
   });
 });
 
+describe('a suite version that checks nothing', () => {
+  let t: TestApp;
+  let ravi: request.Agent;
+  let hanne: request.Agent;
+  beforeAll(async () => {
+    t = await startTestApp();
+    [ravi, hanne] = await Promise.all([signInAs(t.app, 'contributor'), signInAs(t.app, 'reviewer')]);
+  });
+  afterAll(() => t.stop());
+
+  const withRadius = (radius: string) => {
+    const body = demoSuiteBody('nothing-checked');
+    const paths = body.paths.map((p, i) =>
+      i === 0 ? { kind: 'circle' as const, name: p.name, center: { re: '0', im: '0' }, radius, samples: 16 } : p,
+    );
+    return { ...body, paths };
+  };
+  /** As an older server stored it: the body written straight into the row, past today's rules. */
+  const storeBody = (radius: string) =>
+    t.db.dataSource.query(
+      `UPDATE suite_versions SET body = $1 WHERE suite_id = (SELECT id FROM suites WHERE slug = 'nothing-checked')`,
+      [JSON.stringify(withRadius(radius))],
+    );
+  const status = async () =>
+    (
+      await t.db.dataSource.query(
+        `SELECT v.status FROM suite_versions v JOIN suites s ON s.id = v.suite_id WHERE s.slug = 'nothing-checked'`,
+      )
+    )[0].status;
+
+  it('is refused on upload and from the form, naming the field', async () => {
+    const form = await ravi.post('/api/suites').send(withRadius('-1'));
+    expect(form.status).toBe(400);
+    expect(form.body.issues).toContainEqual({
+      field: 'body.paths.0.radius',
+      rule: 'must be greater than 0: with -1 the circle has no points',
+    });
+    const upload = await ravi
+      .post('/api/suites/upload')
+      .attach('file', Buffer.from(JSON.stringify(withRadius('0'))), 'nothing.json');
+    expect(upload.status).toBe(400);
+    expect(upload.body.issues).toContainEqual({
+      field: 'file.paths.0.radius',
+      rule: 'must be greater than 0: with 0 the circle has no points',
+    });
+  });
+
+  it('stored before the rule, is refused approval and submission with 409 naming "Path 1 · radius", and changes can still be requested', async () => {
+    expect((await ravi.post('/api/suites').send(withRadius('1'))).status).toBe(201);
+    await storeBody('-1');
+    const submit = await ravi.post('/api/suites/nothing-checked/submit');
+    expect(submit.status).toBe(409);
+    expect(submit.body.message).toContain('Path 1 · radius must be greater than 0');
+    expect(await status()).toBe('draft');
+
+    await storeBody('1');
+    expect((await ravi.post('/api/suites/nothing-checked/submit')).status).toBe(200);
+    await storeBody('-1');
+    const approve = await hanne.post('/api/suites/nothing-checked/versions/1/review').send({ decision: 'approve' });
+    expect(approve.status).toBe(409);
+    expect(approve.body).toMatchObject({ kind: 'conflict' });
+    expect(approve.body.message).toBe(
+      "Version 1 cannot be approved: as stored it breaks the suite format's rules (Path 1 · radius must be greater than 0: with -1 the circle has no points). Request changes instead.",
+    );
+    expect(await status()).toBe('submitted');
+    const changes = await hanne
+      .post('/api/suites/nothing-checked/versions/1/review')
+      .send({ decision: 'request-changes', comment: 'Path 1 has a radius of -1: it checks nothing.' });
+    expect(changes.status).toBe(200);
+    expect(await status()).toBe('changes-requested');
+  });
+});
+
 describe('an expensive reference table', () => {
   let t: TestApp;
   // 1.5 s instead of 10 s keeps the test short; the table below needs 9–22 s (0.23–0.55 s a row).
