@@ -9,7 +9,13 @@ import { ChipGroup } from '../ui/chip-group';
 import { FormTextInput } from '../ui/form-text-input';
 import { SkText } from '../ui/sk-text';
 
-/** Approve a submitted version, or request changes saying what to change; the server's refusal (four eyes) is shown as it says it. */
+type Decision = 'approve' | 'request-changes';
+
+/**
+ * Approve a submitted version, or request changes saying what to change. Nothing is chosen at
+ * first: a reviewer decides on purpose, and sending without a choice asks for one. The server's
+ * refusal (four eyes, a stored version that breaks today's rules) is shown as it says it.
+ */
 export function ReviewForm({
   slug,
   version,
@@ -17,15 +23,17 @@ export function ReviewForm({
 }: {
   slug: string;
   version: number;
-  onReviewed: (decision: 'approve' | 'request-changes') => void;
+  onReviewed: (decision: Decision) => void;
 }) {
-  const [decision, setDecision] = useState<'approve' | 'request-changes'>('approve');
+  const [decision, setDecision] = useState<Decision | undefined>(undefined);
   const [comment, setComment] = useState('');
   const [tried, setTried] = useState(false);
   const review = useReviewSuite();
   const parsed = reviewBody.safeParse({ decision, comment });
-  const clientRules =
-    tried && !parsed.success ? parsed.error.issues.filter((i) => i.path[0] === 'comment').map((i) => i.message) : [];
+  const faulted = (field: string) =>
+    tried && !parsed.success ? parsed.error.issues.filter((i) => i.path[0] === field) : [];
+  const clientRules = faulted('comment').map((i) => i.message);
+  const unchosen = faulted('decision').length > 0;
   const error =
     review.error instanceof ApiRequestError
       ? review.error.body
@@ -52,9 +60,20 @@ export function ReviewForm({
         value={decision}
         onChange={setDecision}
       />
+      {unchosen ? (
+        <SkText variant="label" tone="danger" accessibilityRole="alert" testID="review-unchosen">
+          × Choose a decision first: approve, or request changes.
+        </SkText>
+      ) : null}
       <FormTextInput
         label="Comment"
-        hint={decision === 'approve' ? 'optional: what you checked' : 'required: what to change'}
+        hint={
+          decision === 'request-changes'
+            ? 'required: what to change'
+            : decision === 'approve'
+              ? 'optional: what you checked'
+              : 'optional when approving, required when requesting changes'
+        }
         value={comment}
         onChangeText={setComment}
         rules={[...clientRules, ...serverRules]}
@@ -66,7 +85,13 @@ export function ReviewForm({
         </SkText>
       ) : null}
       <ActionButton
-        label={decision === 'approve' ? `Approve version ${version}` : `Request changes to version ${version}`}
+        label={
+          decision === 'approve'
+            ? `Approve version ${version}`
+            : decision === 'request-changes'
+              ? `Request changes to version ${version}`
+              : `Send the decision on version ${version}`
+        }
         onPress={send}
         busy={review.isPending}
       />

@@ -38,7 +38,13 @@ export function SuiteReview({ slug }: { slug: string }) {
           {`◊ ${own ? 'You wrote this version' : `You wrote this draft before ${current.author.displayName} edited it and took it over`}. Four eyes: another reviewer must review it, and the server will refuse your review.`}
         </SkText>
       ) : null}
-      <ReviewForm slug={slug} version={current.version} onReviewed={() => router.replace('/review')} />
+      <ReviewForm
+        slug={slug}
+        version={current.version}
+        onReviewed={() =>
+          router.replace({ pathname: '/review', params: { reviewed: slug, version: String(current.version) } })
+        }
+      />
     </TitledPanel>
   );
   const changes = (
