@@ -6,6 +6,7 @@ import path from 'node:path';
 import type { DataSource } from 'typeorm';
 import type { ApiError } from '../shared/api-error';
 import { errorHandler } from './middleware/error-handler';
+import { webAppRouter } from './http/web-app-router';
 import { sameOriginGuard } from './middleware/same-origin-guard';
 import { tokenAuth } from './middleware/token-auth';
 import { authRouter } from './routes/auth-router';
@@ -166,9 +167,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
 
   const webDir = options.webDir;
   if (webDir && existsSync(path.join(webDir, 'index.html'))) {
-    app.use(express.static(webDir, { index: 'index.html', maxAge: '1h' }));
-    // Expo Router's single-page export: every other path is a client route.
-    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(webDir, 'index.html')));
+    app.use(webAppRouter(webDir));
   } else {
     app.get('/{*splat}', (_req, res) =>
       res.status(503).type('text').send('The web app is not exported yet: run `npm start`.'),
