@@ -13,8 +13,17 @@ import type { WithoutId } from '../workers/without-id';
  * libraries (~60 MB with mathjs loaded).
  */
 export const FINDINGS_THREADS = Math.min(4, Math.max(2, availableParallelism()));
-/** Requests waiting at most: 16 is ~12 s of the longest cut maps on two threads; beyond that a 503 says so at once. */
+/** Requests of one lane waiting at most: 16 is ~12 s of the longest cut maps on two threads; beyond that a 503 says so at once. */
 export const FINDINGS_QUEUE = 16;
+
+/**
+ * Version matrices go in a lane of their own that may hold every thread but one, so a fingerprint
+ * or a cut map always has a thread that no matrix holds. The library screen asks for a matrix in
+ * groups of four suites (use-version-matrix.ts), 11 requests for the demo catalogue at ~0.35–7 s
+ * each; in one first-come queue they took both threads, and a fingerprint asked next waited
+ * 13.9 s behind them (issue 15, point 9).
+ */
+const laneOf = (kind: FindingsRequest['kind']) => (kind === 'version-matrix' ? 'matrix' : 'view');
 
 /**
  * The server's side of the findings threads: fingerprints, cut maps and version matrices on a
@@ -33,10 +42,11 @@ export class FindingsPool {
       entry: path.join(__dirname, 'findings-worker-entry.cjs'),
       size,
       queueLimit,
+      laneLimits: { matrix: Math.max(1, size - 1) },
       full: () =>
         new HttpError(503, {
           kind: 'unavailable',
-          message: `${size + queueLimit} library computations are already running or waiting; try again in a minute.`,
+          message: `${queueLimit} library computations of this kind are already waiting; try again in a minute.`,
         }),
     });
   }
@@ -50,6 +60,7 @@ export class FindingsPool {
           kind: 'unavailable',
           message: `The library took longer than ${this.limitMs / 1000} s; it was stopped. Try a smaller request.`,
         }),
+      laneOf(request.kind),
     );
   }
 

@@ -9,14 +9,24 @@ export interface ThreadPoolOptions {
   entry: string;
   /** Threads at most; each runs one request at a time. */
   size: number;
-  /** Requests waiting for a thread at most; one more is refused with `full()`. */
+  /** Requests of one lane waiting for a thread at most; one more is refused with `full()`. */
   queueLimit: number;
-  /** The answer to a request that finds the queue full (503 naming what is busy). */
+  /** The answer to a request that finds its lane's queue full (503 naming what is busy). */
   full: () => HttpError;
+  /**
+   * Threads each lane may hold at once (a lane not named may hold all `size`). A waiting request
+   * whose lane is at its limit lets the next request of another lane go first, so a lane of long
+   * requests never holds every thread while a short one waits behind it.
+   */
+  laneLimits?: Readonly<Record<string, number>>;
 }
+
+/** The lane of a request that names none. */
+const ANY_LANE = 'any';
 
 type Task = {
   message: object;
+  lane: string;
   limitMs: number;
   overLimit: () => Error;
   resolve: (value: unknown) => void;
@@ -44,12 +54,12 @@ export class ThreadPool<R extends { id: number }> {
 
   constructor(private readonly options: ThreadPoolOptions) {}
 
-  run(request: WithoutId<R>, limitMs: number, overLimit: () => Error): Promise<unknown> {
-    if (this.queue.length >= this.options.queueLimit && !this.idleSlotOrRoom())
-      return Promise.reject(this.options.full());
+  run(request: WithoutId<R>, limitMs: number, overLimit: () => Error, lane = ANY_LANE): Promise<unknown> {
+    const waiting = this.queue.filter((t) => t.lane === lane).length;
+    if (waiting >= this.options.queueLimit && !this.idleSlotOrRoom()) return Promise.reject(this.options.full());
     return new Promise((resolve, reject) => {
       this.closed = false;
-      this.queue.push({ message: request, limitMs, overLimit, resolve, reject });
+      this.queue.push({ message: request, lane, limitMs, overLimit, resolve, reject });
       this.dispatch();
     });
   }
@@ -94,12 +104,23 @@ export class ThreadPool<R extends { id: number }> {
     while (this.queue.length > 0) {
       const slot = this.slots.find((s) => s.ready && !s.task);
       if (!slot) return;
-      const task = this.queue.shift()!;
+      // The oldest request whose lane has a thread to spare; none when every lane waiting is at its limit.
+      const next = this.queue.findIndex((t) => this.running(t.lane) < this.laneLimit(t.lane));
+      if (next < 0) return;
+      const task = this.queue.splice(next, 1)[0]!;
       const id = this.nextId++;
       const timer = setTimeout(() => void this.retire(slot, task.overLimit()), task.limitMs);
       slot.task = { ...task, id, timer };
       slot.worker.postMessage({ ...task.message, id });
     }
+  }
+
+  private running(lane: string): number {
+    return this.slots.filter((s) => s.task?.lane === lane).length;
+  }
+
+  private laneLimit(lane: string): number {
+    return this.options.laneLimits?.[lane] ?? this.options.size;
   }
 
   private spawn(): Slot {
