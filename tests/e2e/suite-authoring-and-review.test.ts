@@ -123,6 +123,7 @@ describe('writing a regular-branch suite and reviewing it', () => {
       .getByText(/first version/)
       .waitFor();
     await page.getByLabel('Comment', { exact: true }).fill('Layout checked: both branch points on the one cut.');
+    await page.getByRole('radio', { name: 'Decision: approve' }).click();
     await page.getByRole('button', { name: 'Approve version 1' }).click();
     await page
       .getByText('Nothing waits for review.')
@@ -153,6 +154,7 @@ describe('writing a regular-branch suite and reviewing it', () => {
     expect(await diff.getByLabel('was 2').count()).toBe(1);
     expect(await diff.getByLabel('now 3').count()).toBe(1);
     await saveScreenshots(page, 'suite-review', () => diff.getByLabel('paths.0.radius changed').waitFor());
+    await page.getByRole('radio', { name: 'Decision: approve' }).click();
     await page.getByRole('button', { name: 'Approve version 2' }).click();
     await page.getByRole('heading', { name: 'Review', exact: true }).waitFor();
     const versions = await page.evaluate((slug) => fetch(`/api/suites/${slug}`).then((r) => r.json()), SLUG);

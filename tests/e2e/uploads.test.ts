@@ -33,8 +33,9 @@ describe('uploads through the file picker', () => {
       text: JSON.stringify({ id: 'Not A Slug', subject: 'sqrt(z' }),
     });
     const issues = b.page.getByTestId('suite-upload-issues');
-    await issues.getByText(/id/).first().waitFor();
-    expect(await issues.textContent()).toMatch(/title/);
+    // Fields are named in the form's words ("Id", "Title"), not as keys (suite upload, fieldLabel).
+    await issues.getByText(/Id/).first().waitFor();
+    expect(await issues.textContent()).toMatch(/Title/);
 
     const demo = JSON.parse(
       readFileSync(path.join(__dirname, '..', '..', 'suites', 'demo', 'sqrt-principal-sz.json'), 'utf8'),
