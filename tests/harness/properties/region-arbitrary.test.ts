@@ -62,7 +62,8 @@ describe('regionArbitrary', () => {
     expect(regionArbitrary(region({ kind: 'near-cuts', distance: '1e-6' }), [])).toMatchObject({
       reason: expect.stringContaining('no cuts'),
     });
-    expect(regionArbitrary(region({ kind: 'disc', center: { re: '0', im: '0' }, radius: '0' }), null)).toMatchObject({
+    // The schema refuses such a disc now (region-geometry-issues.ts); one stored before that still gets a reason.
+    expect(regionArbitrary({ kind: 'disc', center: { re: '0', im: '0' }, radius: '0' }, null)).toMatchObject({
       reason: expect.stringContaining('positive'),
     });
   });
