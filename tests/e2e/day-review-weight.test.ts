@@ -97,7 +97,13 @@ describe('a day of review: suites that check nothing, a deliberate decision, and
     const ask = page.getByTestId('review-unchosen');
     await ask.waitFor();
     expect(await ask.textContent()).toBe('× Choose a decision first: approve, or request changes.');
-    await saveScreenshots(page, 'review-weight-decision-unchosen', () => ask.waitFor());
+    // Crossing the wide breakpoint mounts the screen again (save-screenshots.ts), which forgets the attempt.
+    await saveScreenshots(page, 'review-weight-decision-unchosen', async () => {
+      const send = page.getByRole('button', { name: 'Send the decision on version 1' });
+      await send.waitFor();
+      if (!(await ask.isVisible())) await send.click();
+      await ask.waitFor();
+    });
 
     await page.getByRole('radio', { name: 'Decision: approve' }).click();
     await page.getByLabel('Comment', { exact: true }).fill('One turn of the unit circle, both sides of the cut.');
