@@ -51,6 +51,15 @@ export class GeometryRules {
     return null;
   }
 
+  /** Two corners of a rectangle (a grid, a box): finite, `max` right of and above `min`. */
+  corners(min: Point, max: Point, shape: string): void {
+    const lo = this.point(['min'], min);
+    const hi = this.point(['max'], max);
+    if (!lo || !hi) return;
+    if (!(lo.re < hi.re)) this.say(['max', 're'], `must be greater than min’s: the ${shape} has no width`);
+    if (!(lo.im < hi.im)) this.say(['max', 'im'], `must be greater than min’s: the ${shape} has no height`);
+  }
+
   /** A value of t or a fraction along a segment: between 0 and 1. */
   fraction(path: Field, text: string, what: string): number | null {
     const x = this.finite(path, text);

@@ -96,15 +96,9 @@ export function pathGeometryIssues(path: ParsedPath): GeometryIssue[] {
     case 'points':
       path.points.forEach((p, i) => rules.point(['points', i], p));
       break;
-    case 'grid': {
-      const min = rules.point(['min'], path.min);
-      const max = rules.point(['max'], path.max);
-      if (min && max && !(min.re < max.re))
-        rules.say(['max', 're'], 'must be greater than min’s: the grid has no width');
-      if (min && max && !(min.im < max.im))
-        rules.say(['max', 'im'], 'must be greater than min’s: the grid has no height');
+    case 'grid':
+      rules.corners(path.min, path.max, 'grid');
       break;
-    }
   }
   return rules.issues;
 }

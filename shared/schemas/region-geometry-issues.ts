@@ -18,15 +18,9 @@ export function regionGeometryIssues(region: ParsedRegion): GeometryIssue[] {
       rules.point(['center'], region.center);
       rules.positive(['radius'], region.radius, 'the disc holds no point');
       break;
-    case 'box': {
-      const min = rules.point(['min'], region.min);
-      const max = rules.point(['max'], region.max);
-      if (min && max && !(min.re < max.re))
-        rules.say(['max', 're'], 'must be greater than min’s: the box has no width');
-      if (min && max && !(min.im < max.im))
-        rules.say(['max', 'im'], 'must be greater than min’s: the box has no height');
+    case 'box':
+      rules.corners(region.min, region.max, 'box');
       break;
-    }
     case 'near-cuts':
       rules.positive(['distance'], region.distance, 'no point lies near the cuts');
       break;

@@ -79,6 +79,16 @@ const CHECKS_NOTHING: [string, object, string][] = [
   ['a grid of one column', { kind: 'grid', min: O, max: z('1', '1'), columns: 1, rows: 2 }, 'columns'],
 ];
 
+/** The points the harness builds of a path as written (the schema's defaults filled in), 0 when it throws. */
+function builtPoints(path: object): number {
+  const loose = { name: 'p', direction: 'ccw', start_angle: '0', turns: '1', offsets: ['1e-3'], both_zero_signs: true };
+  try {
+    return buildPath(toPathSpec({ ...loose, ...path } as never)).length;
+  } catch {
+    return 0;
+  }
+}
+
 const suite = (path: object) => ({
   id: 'checks-nothing',
   version: 1,
@@ -99,22 +109,7 @@ describe('paths that check nothing', () => {
 
   it.each(CHECKS_NOTHING)('agrees with the harness, which cannot build %s', (_what, path) => {
     // Sample counts and empty lists are cut off by the schema's own bounds; the rest throw in the builder.
-    const loose = {
-      name: 'p',
-      direction: 'ccw',
-      start_angle: '0',
-      turns: '1',
-      offsets: ['1e-3'],
-      both_zero_signs: true,
-      ...path,
-    };
-    let points: number;
-    try {
-      points = buildPath(toPathSpec(loose as never)).length;
-    } catch {
-      points = 0;
-    }
-    expect(points).toBe(0);
+    expect(builtPoints(path)).toBe(0);
   });
 
   it('accepts exactly the paths the harness builds into at least one point', () => {
@@ -180,22 +175,7 @@ describe('paths that check nothing', () => {
     fc.assert(
       fc.property(path, (written) => {
         const parsed = suitePathSchema.safeParse({ name: 'p', ...written });
-        let built = 0;
-        try {
-          built = buildPath(
-            toPathSpec({
-              name: 'p',
-              direction: 'ccw',
-              start_angle: '0',
-              turns: '1',
-              offsets: ['1e-3'],
-              both_zero_signs: true,
-              ...written,
-            } as never),
-          ).length;
-        } catch {
-          built = 0;
-        }
+        const built = builtPoints(written);
         return parsed.success === built > 0;
       }),
       { seed: SEED, numRuns: 4000, verbose: true },
