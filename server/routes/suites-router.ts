@@ -257,7 +257,7 @@ export function suitesRouter(dataSource: DataSource, tables: ReferenceTableCheck
         200: 'The submitted version (`version`).',
         403: 'Only the author (or an admin) can submit this draft.',
         ...noSuite,
-        409: 'The latest version is not a draft.',
+        409: 'The latest version is not a draft, or as stored it breaks the suite format’s rules (a path that would check nothing).',
       },
     },
     async (req, res, { params: { slug } }) => {
@@ -278,7 +278,7 @@ export function suitesRouter(dataSource: DataSource, tables: ReferenceTableCheck
         200: 'The reviewed version (`version`).',
         403: 'You wrote this version.',
         404: 'No such suite or version.',
-        409: 'The version is not submitted.',
+        409: 'The version is not submitted, or, to approve it, as stored it breaks the suite format’s rules (a path that would check nothing).',
       },
     },
     async (req, res, { params: { slug, version }, body: { decision, comment } }) => {
