@@ -7,6 +7,7 @@ import { SkText } from '../ui/sk-text';
 import { TitledPanel } from '../ui/titled-panel';
 import { QueryState } from '../ui/query-state';
 import { ReviewForm } from './review-form';
+import { StoredRulesWarning } from './stored-rules-warning';
 import { SuiteDiff } from './suite-diff';
 import { SuiteFacts } from '../suites/suite-facts';
 import { SuitePreview } from '../suites/suite-preview';
@@ -38,6 +39,7 @@ export function SuiteReview({ slug }: { slug: string }) {
           {`◊ ${own ? 'You wrote this version' : `You wrote this draft before ${current.author.displayName} edited it and took it over`}. Four eyes: another reviewer must review it, and the server will refuse your review.`}
         </SkText>
       ) : null}
+      <StoredRulesWarning body={current.body} />
       <ReviewForm
         slug={slug}
         version={current.version}
