@@ -91,6 +91,16 @@ describe('the app shell of the server', () => {
     }
   });
 
+  it('answers a revalidation of index.html with 304 while it is unchanged', async () => {
+    const first = await request(t.app).get('/index.html').set('Accept-Encoding', 'gzip');
+    expect(first.headers.etag).toBeDefined();
+    const again = await request(t.app)
+      .get('/index.html')
+      .set('Accept-Encoding', 'gzip')
+      .set('If-None-Match', first.headers.etag!);
+    expect(again.status).toBe(304);
+  });
+
   it('answers 404 for a hashed file that is not in this build, never index.html under its name', async () => {
     const res = await request(t.app).get('/_expo/static/js/web/entry-00000000000000000000000000000000.js');
     expect(res.status).toBe(404);
