@@ -4,14 +4,14 @@ import { formatHexDouble } from '../../harness/web';
 import { theme } from '../../constants/theme';
 import type { FailureView } from '../../shared/failure-view';
 import type { WireComplex } from '../../shared/wire-complex';
-import { parseWireNumber } from '../../shared/parse-wire-number';
+import { wireDouble } from '../../shared/wire-double';
 import { DisclosureToggle } from '../ui/disclosure-toggle';
 import { SkText } from '../ui/sk-text';
 import { ValueRow } from './value-row';
 
 const hexOf = (c: WireComplex): WireComplex => ({
-  re: formatHexDouble(parseWireNumber(c.re)),
-  im: formatHexDouble(parseWireNumber(c.im)),
+  re: formatHexDouble(wireDouble(c.re)),
+  im: formatHexDouble(wireDouble(c.im)),
 });
 
 /**

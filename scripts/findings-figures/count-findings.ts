@@ -3,7 +3,7 @@ import type { DiagnosisKind } from '../../shared/diagnosis';
 import type { DiagnosisClass } from '../../shared/diagnosis-class';
 import { outcomeClass } from '../../shared/outcome-class';
 import { outcomeLabels } from '../../shared/outcome-labels';
-import { parseWireNumber } from '../../shared/parse-wire-number';
+import { wireDouble } from '../../shared/wire-double';
 import type { PointFinding, RunResult } from '../../shared/run-result';
 
 /** 4 eps = 4 · 2^−52: the bound for "noise" a maintainer would not act on. */
@@ -31,7 +31,7 @@ export interface FindingsFigures {
   noiseExamples: string[];
 }
 
-const value = (w: { re: string; im: string }): [number, number] => [parseWireNumber(w.re), parseWireNumber(w.im)];
+const value = (w: { re: string; im: string }): [number, number] => [wireDouble(w.re), wireDouble(w.im)];
 
 /**
  * Counts a run's failures by class and label, and how many are noise: right sheet (within 4 eps

@@ -1,5 +1,5 @@
 import type { ReferenceAnswer } from '../../shared/reference-answer';
-import { parseWireNumber } from '../../shared/parse-wire-number';
+import { wireDouble } from '../../shared/wire-double';
 import { askPython, type OraclePoint } from '../../tests/external/python-oracle';
 import { unhex } from '../../tests/external/unhex';
 import type { SweepInput } from './sweep-inputs';
@@ -48,7 +48,7 @@ export function compareWithMpmath(
     const m = theirs[i] as { re_rounded: string; im_rounded: string };
     const expected: [number, number] = [unhex(m.re_rounded), unhex(m.im_rounded)];
     const ours: [string, string] = 'error' in answer ? ['error', 'error'] : [answer.double.re, answer.double.im];
-    const same = ours.every((part, k) => samePart(parseWireNumber(part), expected[k] as number));
+    const same = ours.every((part, k) => samePart(wireDouble(part), expected[k] as number));
     if (same) result.agreed += 1;
     else if (result.disagreements.length < SHOWN) {
       result.disagreements.push({ input, ours, mpmath: [String(expected[0]), String(expected[1])] });

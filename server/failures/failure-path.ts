@@ -16,7 +16,7 @@ import type { FailurePathPoint, FailurePathView, PlaneXY } from '../../shared/fa
 import type { OutcomeCounts } from '../../shared/run-result';
 import type { WireComplex } from '../../shared/wire-complex';
 import type { Suite } from '../../shared/schemas/suite-schema';
-import { parseWireNumber } from '../../shared/parse-wire-number';
+import { wireDouble } from '../../shared/wire-double';
 import type { SuitePath } from '../../shared/schemas/suite-path-schema';
 import { HttpError } from '../http/http-error';
 
@@ -108,9 +108,7 @@ export async function failurePath(
         actualFrom: expectedArg === null ? 'none' : 'expected-within-tolerance',
         failureId: null,
       };
-    const actualArg = failed.actual
-      ? argOf(parseWireNumber(failed.actual.re), parseWireNumber(failed.actual.im))
-      : null;
+    const actualArg = failed.actual ? argOf(wireDouble(failed.actual.re), wireDouble(failed.actual.im)) : null;
     return {
       index: i,
       t: p.t,
@@ -213,7 +211,7 @@ function expectedCuts(suite: Suite, expr: SubjectExpr): Pick<FailurePathView, 'c
   const ends: PlaneXY[] = [];
   if (suite.branch.kind === 'regular') {
     for (const cut of suite.branch.cuts) {
-      const pts = cut.points.map((p) => ({ re: parseWireNumber(p.re), im: parseWireNumber(p.im) }));
+      const pts = cut.points.map((p) => ({ re: wireDouble(p.re), im: wireDouble(p.im) }));
       cuts.push({ points: pts, toInfinity: cut.to_infinity });
       if (pts[0]) ends.push(pts[0]);
       if (!cut.to_infinity && pts.length > 1) ends.push(pts[pts.length - 1] as PlaneXY);

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { formatComplexText } from '../../shared/format-complex-text';
-import { parseWireNumber } from '../../shared/parse-wire-number';
+import { wireDouble } from '../../shared/wire-double';
 import { formatDouble } from '../../harness/reference/numbers/format-double';
 
 /** Reads "re ± im i" back into its two wire parts, accepting either minus sign and either unit. */
@@ -66,7 +66,7 @@ describe('formatComplexText', () => {
       fc.property(anyDouble, anyDouble, fc.boolean(), (re, im, ascii) => {
         const text = formatComplexText({ re: formatDouble(re), im: formatDouble(im) }, { ascii });
         const [r, i] = readBack(text);
-        return sameDouble(parseWireNumber(r), re) && sameDouble(parseWireNumber(i), im);
+        return sameDouble(wireDouble(r), re) && sameDouble(wireDouble(i), im);
       }),
       { seed: 2212, numRuns: 20_000 },
     );

@@ -136,6 +136,32 @@ describe('the path of a failing case', () => {
     ).toBe(true);
   });
 
+  it('reads cut points written as a ratio or a hex float (docs/suite-format.md) as the numbers they name', async () => {
+    const version = `(SELECT v.id FROM suite_versions v JOIN suites s ON s.id = v.suite_id WHERE s.slug = 'path-finite-cut')`;
+    const [{ body }] = await t.db.dataSource.query(`SELECT body FROM suite_versions WHERE id = ${version}`);
+    const written = structuredClone(body);
+    written.branch.cuts[0].points = [
+      { re: '-2/2', im: '0' },
+      { re: '0x1p0', im: '0/5' },
+    ];
+    await t.db.dataSource.query(`UPDATE suite_versions SET body = $1 WHERE id = ${version}`, [written]);
+    try {
+      const failures = (await kwame.get(`/api/failures?run=${runIds.finite}&limit=5`)).body.failures;
+      const view = (await kwame.get(`/api/failures/${failures[0].id}/path`)).body as FailurePathView;
+      expect(view.cuts).toEqual([
+        {
+          points: [
+            { re: -1, im: 0 },
+            { re: 1, im: 0 },
+          ],
+          toInfinity: false,
+        },
+      ]);
+    } finally {
+      await t.db.dataSource.query(`UPDATE suite_versions SET body = $1 WHERE id = ${version}`, [body]);
+    }
+  });
+
   it('reads the expected values its run kept on disk instead of computing them again', async () => {
     const dir = mkdtempSync(path.join(os.tmpdir(), 'sheetkeeper-reference-'));
     try {
