@@ -28,6 +28,10 @@ import { targetSourcesRouter } from './routes/target-sources-router';
 import { TargetSourceResolver } from './targets/target-source-resolver';
 import { targetSourceOptions } from './targets/target-source-options';
 import { usersRouter } from './routes/users-router';
+import { accountLinksRouter } from './routes/account-links-router';
+import { AccountLinks } from './auth/account-links';
+import { SessionControl } from './auth/session-control';
+import { UserAdmin } from './auth/user-admin';
 import { workersRouter } from './routes/workers-router';
 import { configurePassport } from './auth/configure-passport';
 import { createPgPool } from './database/create-pg-pool';
@@ -57,6 +61,8 @@ export interface AppOptions {
   allowedOrigins: readonly string[];
   /** Express's `trust proxy` (config.trustProxy); off unless a proxy in front sets X-Forwarded-For. */
   trustProxy?: string | number | false;
+  /** Base of the links in mail (config.appUrl); tests get the default server's address. */
+  appUrl?: string;
   /** How long checking one uploaded reference table may take (REFERENCE_TABLE_BUDGET_MS). */
   referenceTableBudgetMs?: number;
   /** Where admin-added npm versions are installed (config.targetCacheDir; `.data/target-cache` by default). */
@@ -73,6 +79,9 @@ export interface SheetkeeperApp {
 
 export const SESSION_COOKIE = 'sheetkeeper.sid';
 
+/** The app's address when none is given: the default server's (config.ts). */
+const DEFAULT_APP_URL = 'http://127.0.0.1:8460';
+
 /**
  * How long this process trusts a session row and a user row it has read (see
  * create-session-store.ts for the measurements). Changes made through this process apply at once.
@@ -84,6 +93,9 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   // Sessions are read on every API request; with 5 connections 50 concurrent readers queued here.
   const pool = createPgPool(options.databaseUrl, 10);
   const userCache = new ShortLivedCache<User>(SIGNED_IN_CACHE_MS);
+  const sessionCache = new ShortLivedCache<string>(SIGNED_IN_CACHE_MS);
+  const sessions = new SessionControl(options.dataSource, sessionCache, userCache);
+  const accountLinks = new AccountLinks(options.dataSource, options.appUrl ?? DEFAULT_APP_URL);
   const passport = configurePassport(options.dataSource, userCache);
   const limiter = new SignInLimiter(pool, options.signInLimits ?? DEFAULT_SIGN_IN_LIMITS);
   const findings = new LibraryFindings(options.dataSource);
@@ -122,7 +134,7 @@ export function createApp(options: AppOptions): SheetkeeperApp {
   api.use(
     session({
       name: SESSION_COOKIE,
-      store: createSessionStore(pool, SIGNED_IN_CACHE_MS),
+      store: createSessionStore(pool, sessionCache),
       secret: options.sessionSecret,
       resave: false,
       saveUninitialized: false,
@@ -143,7 +155,8 @@ export function createApp(options: AppOptions): SheetkeeperApp {
 
   api.use('/auth', authRouter(passport, limiter));
   api.use('/me', meRouter());
-  api.use('/users', usersRouter(options.dataSource, userCache));
+  api.use('/account-links', accountLinksRouter(accountLinks, limiter, sessions));
+  api.use('/users', usersRouter(options.dataSource, new UserAdmin(options.dataSource, sessions), accountLinks));
   api.use('/suites', suitesRouter(options.dataSource, referenceTables));
   api.use('/outbox', outboxRouter(options.dataSource));
   api.use('/targets', targetsRouter(options.dataSource));

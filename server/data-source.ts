@@ -1,5 +1,6 @@
 import 'reflect-metadata';
 import { DataSource } from 'typeorm';
+import { AccountLink } from './entities/account-link';
 import { ApiToken } from './entities/api-token';
 import { Deviation } from './entities/deviation';
 import { Failure } from './entities/failure';
@@ -42,6 +43,7 @@ import { RegressionGroups1764811100000 } from './migrations/1764811100000-regres
 import { FailureTableRowType1764800000000 } from './migrations/1764800000000-failure-table-row-type';
 import { OneActiveRunHeartbeatsMailOnce1764810000000 } from './migrations/1764810000000-one-active-run-heartbeats-mail-once';
 import { Workers1764920000000 } from './migrations/1764920000000-workers';
+import { AccountLinksAndDeactivation1764940000000 } from './migrations/1764940000000-account-links-and-deactivation';
 import { NewestFailuresFirstAndFirstRuns1764960000000 } from './migrations/1764960000000-newest-failures-first-and-first-runs';
 
 /** Entities and migrations are listed, not globbed, so tsx, jest and tsc builds all find them. */
@@ -67,6 +69,7 @@ export const ENTITIES = [
   RegressionGroup,
   TargetSourceRow,
   WorkerRow,
+  AccountLink,
 ];
 export const MIGRATIONS = [
   UsersSessionsSignInLimits1764626400000,
@@ -87,6 +90,7 @@ export const MIGRATIONS = [
   FailureLabelsAndClasses1764900000000,
   TargetSources1764910000000,
   Workers1764920000000,
+  AccountLinksAndDeactivation1764940000000,
   NewestFailuresFirstAndFirstRuns1764960000000,
 ];
 

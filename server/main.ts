@@ -38,6 +38,7 @@ async function main(): Promise<void> {
     allowedOrigins: origins,
     trustProxy: config.trustProxy,
     targetCacheDir: config.targetCacheDir,
+    appUrl: config.appUrl,
   });
   const unfinished = await targetSources.resumePending();
   if (unfinished > 0) console.log(`[sheetkeeper] resolving ${unfinished} added target source(s) left unfinished`);

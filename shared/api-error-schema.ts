@@ -26,6 +26,14 @@ export const apiErrorSchema = z
     plain('forbidden', '403: the role does not allow it, or the request came from a page of another origin.'),
     plain('not-found', '404: no such route or record.'),
     plain('wrong-credentials', '401: the e-mail and password do not match an account.'),
+    plain(
+      'deactivated',
+      '403: the account is deactivated (said only to someone who gave its password, or who holds a link to it); an admin can reactivate it.',
+    ),
+    plain(
+      'link-unusable',
+      '410: the one-time link is unknown, expired, used or replaced by a newer one; the message says which and whom to ask.',
+    ),
     z
       .object({ kind: z.literal('too-many-attempts'), message: z.string(), retryAfterSeconds: z.number() })
       .meta({ description: '429: too many failed sign-ins; try again after `retryAfterSeconds`.' }),

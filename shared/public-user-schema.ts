@@ -8,4 +8,6 @@ export const publicUserSchema = z.object({
   displayName: z.string(),
   role: z.enum(ROLES),
   createdAt: z.string().meta({ description: 'ISO 8601.' }),
+  /** When an admin deactivated the account (it cannot sign in, its sessions and tokens are refused); null while active. */
+  deactivatedAt: z.string().nullable().meta({ description: 'ISO 8601, or null while the account is active.' }),
 });

@@ -2,7 +2,7 @@ import connectPgSimple from 'connect-pg-simple';
 import session from 'express-session';
 import type { Pool } from 'pg';
 import { describeError } from '../database/describe-error';
-import { ShortLivedCache } from './short-lived-cache';
+import type { ShortLivedCache } from './short-lived-cache';
 
 /**
  * Sessions in PostgreSQL (connect-pg-simple), with each session row kept for a moment in
@@ -10,11 +10,11 @@ import { ShortLivedCache } from './short-lived-cache';
  * machine: without the cache every API request spent two of its three queries on the session
  * and the user, and the failure table served 244 requests/s at p95 337 ms.
  * A sign-out or a new session in this process drops its entry at once; one in another server
- * process is seen here within `ttlMs`.
+ * process is seen here within the cache's lifetime. `cache` (session id → the row's JSON) is the
+ * caller's, so ending a user's sessions (session-ender.ts) can clear it.
  */
-export function createSessionStore(pool: Pool, ttlMs: number): session.Store {
+export function createSessionStore(pool: Pool, cache: ShortLivedCache<string>): session.Store {
   const PgStore = connectPgSimple(session);
-  const cache = new ShortLivedCache<string>(ttlMs);
   // No touch: express-session would otherwise UPDATE the session row on every request; a
   // session therefore lasts its cookie's maxAge from sign-in, not from the last request.
   const store = new PgStore({

@@ -21,6 +21,10 @@ export class User {
   @Column({ type: 'text' })
   role!: Role;
 
+  /** Set by an admin: the account cannot sign in, and its sessions and API tokens are refused. */
+  @Column({ type: 'timestamptz', name: 'deactivated_at', nullable: true })
+  deactivatedAt!: Date | null;
+
   @CreateDateColumn({ type: 'timestamptz', name: 'created_at' })
   createdAt!: Date;
 

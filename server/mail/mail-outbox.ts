@@ -3,6 +3,7 @@ import type { DataSource, EntityManager } from 'typeorm';
 import { MAIL_MAX_ATTEMPTS } from '../../shared/mail-max-attempts';
 import { OutboxMail } from '../entities/outbox-mail';
 import { backoffSeconds } from './backoff-seconds';
+import { enqueueMail } from './enqueue-mail';
 import type { NewMail } from './new-mail';
 
 /**
@@ -54,15 +55,9 @@ export class MailOutbox {
     });
   }
 
-  /** Queues a mail; returns its id, or null when a mail with the same idempotency key is queued or sent already. */
-  async enqueue(mail: NewMail, tx: EntityManager = this.dataSource.manager): Promise<string | null> {
-    if (mail.recipients.length === 0) throw new Error('a mail needs at least one recipient');
-    const rows: { id: string }[] = await tx.query(
-      `INSERT INTO outbox_mail (kind, recipients, subject, text_body, html_body, idempotency_key)
-       VALUES ($1, $2, $3, $4, $5, $6) ON CONFLICT (idempotency_key) DO NOTHING RETURNING id::text`,
-      [mail.kind, mail.recipients, mail.subject, mail.text, mail.html, mail.idempotencyKey ?? null],
-    );
-    return rows[0]?.id ?? null;
+  /** Queues a mail (`enqueueMail`); returns its id, or null when a mail with the same idempotency key is queued or sent already. */
+  enqueue(mail: NewMail, tx: EntityManager = this.dataSource.manager): Promise<string | null> {
+    return enqueueMail(tx, mail);
   }
 
   /**

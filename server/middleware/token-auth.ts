@@ -22,6 +22,14 @@ export function tokenAuth(dataSource: DataSource) {
       res.status(401).json({ kind: 'signed-out', message: 'That API token is not valid.' } satisfies ApiError);
       return;
     }
+    // Read with the token on every request (no cache), so a deactivation refuses it at once.
+    if (found.user.deactivatedAt) {
+      res.status(401).json({
+        kind: 'signed-out',
+        message: "That API token's account is deactivated; ask an admin to reactivate it.",
+      } satisfies ApiError);
+      return;
+    }
     await tokens.update(found.id, { lastUsedAt: new Date() });
     req.user = found.user;
     res.locals.viaToken = true;

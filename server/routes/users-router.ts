@@ -1,17 +1,22 @@
 import { Router } from 'express';
-import type { DataSource } from 'typeorm';
-import type { ApiError } from '../../shared/api-error';
 import { z } from 'zod';
 import { publicUserSchema } from '../../shared/public-user-schema';
+import { ROLES } from '../../shared/roles';
 import { idParams } from '../../shared/schemas/id-params';
+import { inviteBody } from '../../shared/schemas/invite-body';
 import { roleChangeBody } from '../../shared/schemas/role-change-body';
+import type { AccountLinks } from '../auth/account-links';
+import type { UserAdmin } from '../auth/user-admin';
 import { User } from '../entities/user';
 import { declareRoute } from '../http/declare-route';
-import type { ShortLivedCache } from '../auth/short-lived-cache';
+import type { DataSource } from 'typeorm';
 import { toPublicUser } from '../views/to-public-user';
 
-/** `signedIn` is the app's cache of signed-in users: a role change drops the user's entry so it applies at once. */
-export function usersRouter(dataSource: DataSource, signedIn: ShortLivedCache<User>): Router {
+const userAnswer = z.object({ user: publicUserSchema });
+const LAST_ADMIN = 'This is the last active admin; make someone else admin first.';
+
+/** The admin's side of accounts: the list, roles, invitations, deactivation and password resets. */
+export function usersRouter(dataSource: DataSource, admin: UserAdmin, links: AccountLinks): Router {
   const router = Router();
   const users = dataSource.getRepository(User);
 
@@ -32,6 +37,29 @@ export function usersRouter(dataSource: DataSource, signedIn: ShortLivedCache<Us
 
   declareRoute(
     router,
+    'post',
+    '/invitations',
+    {
+      summary: 'Invite someone: a one-time link to make their account with a role is mailed to them',
+      access: ['admin'],
+      body: inviteBody,
+      responses: {
+        201: {
+          description: 'The invitation is queued for mail; an older unused one to the address no longer works.',
+          schema: z.object({
+            invitation: z.object({ email: z.string(), role: z.enum(ROLES), expiresAt: z.string() }),
+          }),
+        },
+        409: 'The address has an account already.',
+      },
+    },
+    async (req, res, { body }) => {
+      res.status(201).json({ invitation: await links.invite(req.user!, body.email, body.role) });
+    },
+  );
+
+  declareRoute(
+    router,
     'patch',
     '/:id',
     {
@@ -40,35 +68,69 @@ export function usersRouter(dataSource: DataSource, signedIn: ShortLivedCache<Us
       params: idParams,
       body: roleChangeBody,
       responses: {
-        200: { description: 'The user with the new role.', schema: z.object({ user: publicUserSchema }) },
+        200: { description: 'The user with the new role.', schema: userAnswer },
         404: 'No user with that id.',
-        409: 'This is the last admin; make someone else admin first.',
+        409: LAST_ADMIN,
       },
     },
     async (_req, res, { params: { id }, body: { role } }) => {
-      // Read, check and write in one transaction that locks the admins, so two admins
-      // demoting each other at once cannot leave the team without one.
-      const outcome = await dataSource.transaction(async (tx) => {
-        const repo = tx.getRepository(User);
-        const admins = await repo.find({ where: { role: 'admin' }, lock: { mode: 'pessimistic_write' } });
-        const user = await repo.findOneBy({ id });
-        if (!user)
-          return { status: 404, body: { kind: 'not-found', message: 'No user with that id.' } satisfies ApiError };
-        if (user.role === 'admin' && role !== 'admin' && admins.length <= 1) {
-          return {
-            status: 409,
-            body: {
-              kind: 'conflict',
-              message: 'This is the last admin; make someone else admin first.',
-            } satisfies ApiError,
-          };
-        }
-        user.role = role;
-        return { status: 200, body: { user: toPublicUser(await repo.save(user)) } };
-      });
-      // After the commit, so no request can cache the old role again in between.
-      if (outcome.status === 200) signedIn.delete(id);
-      res.status(outcome.status).json(outcome.body);
+      res.json({ user: toPublicUser(await admin.changeRole(id, role)) });
+    },
+  );
+
+  declareRoute(
+    router,
+    'post',
+    '/:id/deactivate',
+    {
+      summary: 'Deactivate a user: no sign-in, and their sessions and API tokens are refused at once',
+      access: ['admin'],
+      params: idParams,
+      responses: {
+        200: { description: 'The user, deactivated (again, if they were already).', schema: userAnswer },
+        404: 'No user with that id.',
+        409: `Your own account, or the last active admin. ${LAST_ADMIN}`,
+      },
+    },
+    async (req, res, { params: { id } }) => {
+      res.json({ user: toPublicUser(await admin.deactivate(req.user!, id)) });
+    },
+  );
+
+  declareRoute(
+    router,
+    'post',
+    '/:id/reactivate',
+    {
+      summary: 'Reactivate a user: they can sign in again with their password',
+      access: ['admin'],
+      params: idParams,
+      responses: { 200: { description: 'The user, active.', schema: userAnswer }, 404: 'No user with that id.' },
+    },
+    async (_req, res, { params: { id } }) => {
+      res.json({ user: toPublicUser(await admin.reactivate(id)) });
+    },
+  );
+
+  declareRoute(
+    router,
+    'post',
+    '/:id/password-reset',
+    {
+      summary: 'Mail a user a one-time link to choose a new password (their old one works until it is used)',
+      access: ['admin'],
+      params: idParams,
+      responses: {
+        201: {
+          description: 'The link is queued for mail; an older unused reset of the account no longer works.',
+          schema: z.object({ reset: z.object({ email: z.string(), expiresAt: z.string() }) }),
+        },
+        404: 'No user with that id.',
+        409: 'The account is deactivated.',
+      },
+    },
+    async (req, res, { params: { id } }) => {
+      res.status(201).json({ reset: await links.reset(req.user!, id) });
     },
   );
 

@@ -8,5 +8,6 @@ export function toPublicUser(user: User): PublicUser {
     displayName: user.displayName,
     role: user.role,
     createdAt: user.createdAt.toISOString(),
+    deactivatedAt: user.deactivatedAt?.toISOString() ?? null,
   };
 }

@@ -16,6 +16,7 @@ const user = (role: Role): PublicUser => ({
   displayName: 'Some One',
   role,
   createdAt: '2026-01-01T00:00:00Z',
+  deactivatedAt: null,
 });
 const hoursAgo = (h: number) => new Date(Date.now() - h * 3_600_000).toISOString();
 

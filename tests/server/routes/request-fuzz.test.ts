@@ -65,6 +65,19 @@ const ROUTES: Record<Route, FuzzRoute> = {
     params: { id: () => fixtures.userId },
     body: () => ({ role: 'contributor' }),
   },
+  'POST /api/users/invitations': {
+    roles: ['admin'],
+    body: () => ({ email: `fuzz-${(serial += 1)}@example.test`, role: 'reviewer' }),
+  },
+  'POST /api/users/:id/deactivate': { roles: ['admin'], params: { id: () => fixtures.userId } },
+  'POST /api/users/:id/reactivate': { roles: ['admin'], params: { id: () => fixtures.userId } },
+  'POST /api/users/:id/password-reset': { roles: ['admin'], params: { id: () => fixtures.userId } },
+  // A token of the right shape that was never mailed: 410, counted by the sign-in limiter.
+  'POST /api/account-links/lookup': { roles: ROLES, body: () => ({ token: `skl_${'f'.repeat(43)}` }) },
+  'POST /api/account-links/use': {
+    roles: ROLES,
+    body: () => ({ token: `skl_${'f'.repeat(43)}`, password: 'fuzz password 1', displayName: 'Fuzz' }),
+  },
   'GET /api/suites': { roles: ROLES, query: ['status', 'q'] },
   'GET /api/suites/:slug': { roles: ROLES, params: { slug: () => fixtures.slug } },
   'POST /api/suites': { roles: ROLES, body: () => demoSuiteBody('fuzz-new') },
@@ -435,8 +448,8 @@ afterAll(async () => {
 async function send(r: FuzzRequest): Promise<request.Response> {
   const [method, path] = r.path.split(' ') as [string, string];
   const url = r.query ? `${path}?${r.query}` : path;
-  // Sign-in and sign-out change the session, so they go without the role's agent.
-  const caller = r.route.startsWith('POST /api/auth/') ? request(server) : agents.get(r.role)!;
+  // Sign-in, sign-out and using a one-time link change the session, so they go without the role's agent.
+  const caller = /^POST \/api\/(auth|account-links)\//.test(r.route) ? request(server) : agents.get(r.role)!;
   const call = caller[method.toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete'](url);
   if (r.file) return call.attach('file', Buffer.from(r.file.text), r.file.name);
   if (r.body !== undefined) return call.set('Content-Type', 'application/json').send(JSON.stringify(r.body));
@@ -467,8 +480,10 @@ describe('a fuzz of every route', () => {
         // Nothing else writes while the fuzz runs (the test's shard queue runs nothing), so the
         // counts after the previous request are the counts before this one: one query a request.
         const after = await rowCounts();
-        // A failed sign-in is counted by the limiter on purpose (its rows are the lockout).
-        const counted = r.route === 'POST /api/auth/sign-in' && (res.status === 401 || res.status === 429);
+        // A failed sign-in, or a one-time link never mailed, is counted by the limiter on purpose (its rows are the lockout).
+        const counted =
+          (r.route === 'POST /api/auth/sign-in' && (res.status === 401 || res.status === 429)) ||
+          (r.route.startsWith('POST /api/account-links/') && (res.status === 410 || res.status === 429));
         if (res.status >= 400 && !counted)
           expect({ request: r.path, rows: after }).toEqual({ request: r.path, rows: before });
         before = after;

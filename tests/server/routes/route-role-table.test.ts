@@ -79,6 +79,25 @@ async function freshSchedule(): Promise<string> {
 }
 afterAll(() => t.stop());
 
+/** A fresh account made directly in the table (its password is never used), for actions that change it. */
+async function freshUserId(): Promise<string> {
+  serial += 1;
+  const [row] = await t.db.dataSource.query(
+    `INSERT INTO users (email, display_name, password_hash, role) VALUES ($1, 'Table Person', 'x', 'contributor') RETURNING id`,
+    [`table-person-${serial}@example.test`],
+  );
+  return row.id;
+}
+
+/** The token of a fresh invitation, read from its mail (the only place it is in the clear). */
+async function freshInvitationToken(): Promise<string> {
+  serial += 1;
+  const email = `table-invited-${serial}@example.test`;
+  await (await agentFor('admin')).post('/api/users/invitations').send({ email, role: 'reviewer' });
+  const [mail] = await t.db.dataSource.query(`SELECT text_body FROM outbox_mail WHERE $1 = ANY(recipients)`, [email]);
+  return /skl_[A-Za-z0-9_-]{43}/.exec(mail.text_body)![0];
+}
+
 /** A fresh suite by Mei (a contributor), optionally submitted or approved, so each case acts on its own. */
 async function freshSuite(state: 'draft' | 'submitted' | 'approved'): Promise<string> {
   serial += 1;
@@ -130,6 +149,40 @@ const ROUTES: RouteCase[] = [
     name: 'PATCH /api/users/:id',
     call: (a) => a.patch(`/api/users/${contributorId}`).send({ role: 'contributor' }),
     expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 },
+  },
+  {
+    name: 'POST /api/users/invitations',
+    call: (a, who) => a.post('/api/users/invitations').send({ email: `table-${who}@example.test`, role: 'reviewer' }),
+    expect: { 'signed-out': 401, admin: 201, maintainer: 403, reviewer: 403, contributor: 403 },
+  },
+  {
+    name: 'POST /api/users/:id/deactivate',
+    call: async (a) => a.post(`/api/users/${await freshUserId()}/deactivate`),
+    expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 },
+  },
+  {
+    name: 'POST /api/users/:id/reactivate',
+    call: async (a) => a.post(`/api/users/${await freshUserId()}/reactivate`),
+    expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 },
+  },
+  {
+    name: 'POST /api/users/:id/password-reset',
+    call: async (a) => a.post(`/api/users/${await freshUserId()}/password-reset`),
+    expect: { 'signed-out': 401, admin: 201, maintainer: 403, reviewer: 403, contributor: 403 },
+  },
+  {
+    name: 'POST /api/account-links/lookup',
+    call: async (a) => a.post('/api/account-links/lookup').send({ token: await freshInvitationToken() }),
+    expect: all(200),
+  },
+  {
+    name: 'POST /api/account-links/use',
+    ownSession: true,
+    call: async (a) =>
+      a
+        .post('/api/account-links/use')
+        .send({ token: await freshInvitationToken(), password: 'table password 1', displayName: 'Table Person' }),
+    expect: all(200),
   },
   { name: 'GET /api/suites', call: (a) => a.get('/api/suites'), expect: signedIn(200) },
   {

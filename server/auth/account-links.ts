@@ -1,0 +1,207 @@
+import { randomBytes } from 'node:crypto';
+import type { DataSource, EntityManager } from 'typeorm';
+import type { AccountLinkKind } from '../../shared/account-link-kinds';
+import type { AccountLinkView } from '../../shared/account-link-view';
+import type { Role } from '../../shared/roles';
+import { LINK_TOKEN_PREFIX } from '../../shared/schemas/link-token-schema';
+import { AccountLink } from '../entities/account-link';
+import { User } from '../entities/user';
+import { HttpError } from '../http/http-error';
+import { InputError } from '../http/input-error';
+import { accountLinkMail } from '../mail/account-link-mail';
+import { enqueueMail } from '../mail/enqueue-mail';
+import { ACCOUNT_LINK_LIFETIME_HOURS } from './account-link-lifetime-hours';
+import { hashToken } from './hash-token';
+
+/** A link that cannot be used, and whether its token was one we never made (a guess, for the sign-in limiter). */
+export interface UnusableLink {
+  unusable: string;
+  unknown: boolean;
+}
+
+const nameOf = (u: User) => `${u.displayName} (${u.email})`;
+const day = (d: Date) => d.toISOString().slice(0, 10);
+
+/**
+ * One-time links an admin has mailed: invitations (an address and a role; the account is made
+ * when the link is used) and password resets. The token exists in the mail only; the table keeps
+ * its SHA-256. A link works once, until it expires, and only while it is the newest of its kind
+ * for its address; using it signs the person in and ends their other sessions.
+ */
+export class AccountLinks {
+  constructor(
+    private readonly dataSource: DataSource,
+    /** Base of the link in the mail (config.appUrl). */
+    private readonly appUrl: string,
+  ) {}
+
+  /** Mails an invitation to `email` with `role`; an older unused invitation to it stops working. */
+  async invite(admin: User, email: string, role: Role): Promise<{ email: string; role: Role; expiresAt: string }> {
+    return this.dataSource.transaction(async (tx) => {
+      // Serialises invitations to one address, so "the newest one works" has one answer.
+      await tx.query(`SELECT pg_advisory_xact_lock(hashtext('account-link:' || $1))`, [email]);
+      const existing = await tx.getRepository(User).findOneBy({ email });
+      if (existing)
+        throw new HttpError(409, {
+          kind: 'conflict',
+          message: `${email} has an account already (${existing.displayName}); change its role in the list instead.`,
+        });
+      const expiresAt = await this.issue(tx, admin, { kind: 'invitation', email, role, user: null });
+      return { email, role, expiresAt: expiresAt.toISOString() };
+    });
+  }
+
+  /** Mails a password-reset link to the account `userId`; an older unused reset of it stops working. */
+  async reset(admin: User, userId: string): Promise<{ email: string; expiresAt: string }> {
+    return this.dataSource.transaction(async (tx) => {
+      const user = await tx.getRepository(User).findOne({ where: { id: userId }, lock: { mode: 'pessimistic_write' } });
+      if (!user) throw new HttpError(404, { kind: 'not-found', message: 'No user with that id.' });
+      if (user.deactivatedAt)
+        throw new HttpError(409, {
+          kind: 'conflict',
+          message: `${user.displayName}'s account is deactivated; reactivate it before sending a reset.`,
+        });
+      const expiresAt = await this.issue(tx, admin, {
+        kind: 'password-reset',
+        email: user.email,
+        role: user.role,
+        user,
+      });
+      return { email: user.email, expiresAt: expiresAt.toISOString() };
+    });
+  }
+
+  /** What the join page shows for `token`, or why it cannot be used. */
+  async lookUp(token: string): Promise<AccountLinkView | UnusableLink> {
+    const link = await this.dataSource.getRepository(AccountLink).findOne({
+      where: { tokenHash: hashToken(token) },
+      relations: { user: true, createdBy: true },
+    });
+    const refusal = refusalFor(link, new Date());
+    if (refusal) return refusal;
+    return view(link!);
+  }
+
+  /**
+   * Uses `token`: an invitation makes the account (named `displayName`) with its role, a reset
+   * sets the password. Either way the link is spent. `passwordHash` is made by the caller
+   * before, so bcrypt's ~150 ms never runs inside the transaction.
+   */
+  async use(token: string, passwordHash: string, displayName: string | undefined): Promise<User | UnusableLink> {
+    return this.dataSource.transaction(async (tx) => {
+      const links = tx.getRepository(AccountLink);
+      const users = tx.getRepository(User);
+      // Locked, then read again with its relations: two uses of one link at once spend it once.
+      const locked = await links.findOne({
+        where: { tokenHash: hashToken(token) },
+        lock: { mode: 'pessimistic_write' },
+      });
+      const link =
+        locked && (await links.findOne({ where: { id: locked.id }, relations: { user: true, createdBy: true } }));
+      const refusal = refusalFor(link, new Date());
+      if (refusal) return refusal;
+      const now = new Date();
+      let user: User;
+      if (link!.kind === 'invitation') {
+        if (displayName === undefined)
+          throw new InputError([{ field: 'body.displayName', rule: 'is required for an invitation' }]);
+        if (await users.findOneBy({ email: link!.email }))
+          throw new HttpError(409, {
+            kind: 'conflict',
+            message: `${link!.email} has an account already: sign in with it instead.`,
+          });
+        user = await users.save(
+          users.create({ email: link!.email, displayName, role: link!.role, passwordHash, deactivatedAt: null }),
+        );
+      } else {
+        user = link!.user!;
+        user.passwordHash = passwordHash;
+        user = await users.save(user);
+      }
+      await links.update(link!.id, { usedAt: now, user });
+      return user;
+    });
+  }
+
+  /** Stores a new link (its hash), voids the older unused ones it replaces, and queues its mail in `tx`. */
+  private async issue(
+    tx: EntityManager,
+    admin: User,
+    what: { kind: AccountLinkKind; email: string; role: Role; user: User | null },
+  ): Promise<Date> {
+    const token = `${LINK_TOKEN_PREFIX}${randomBytes(32).toString('base64url')}`;
+    const expiresAt = new Date(Date.now() + ACCOUNT_LINK_LIFETIME_HOURS[what.kind] * 3600 * 1000);
+    await tx
+      .getRepository(AccountLink)
+      .createQueryBuilder()
+      .update()
+      .set({ replacedAt: () => 'now()' })
+      .where('kind = :kind AND email = :email AND used_at IS NULL AND replaced_at IS NULL', {
+        kind: what.kind,
+        email: what.email,
+      })
+      .execute();
+    await tx.getRepository(AccountLink).insert({
+      kind: what.kind,
+      tokenHash: hashToken(token),
+      email: what.email,
+      role: what.role,
+      user: what.user,
+      createdBy: admin,
+      expiresAt,
+      usedAt: null,
+      replacedAt: null,
+    });
+    const link = `${this.appUrl}/join?token=${token}`;
+    await enqueueMail(
+      tx,
+      accountLinkMail({ kind: what.kind, to: what.email, sentBy: nameOf(admin), role: what.role, link, expiresAt }),
+    );
+    return expiresAt;
+  }
+}
+
+function view(link: AccountLink): AccountLinkView {
+  return {
+    kind: link.kind,
+    email: link.email,
+    role: link.kind === 'invitation' ? link.role : link.user!.role,
+    displayName: link.kind === 'invitation' ? null : link.user!.displayName,
+    sentBy: nameOf(link.createdBy),
+    expiresAt: link.expiresAt.toISOString(),
+  };
+}
+
+/** Why `link` cannot be used at `now`, in words that say whom to ask; null when it can. */
+function refusalFor(link: AccountLink | null, now: Date): UnusableLink | null {
+  if (!link)
+    return {
+      unknown: true,
+      unusable:
+        'This link is not one Sheetkeeper sent, or only part of it was copied. Open the link from the mail again, or ask an admin of your Sheetkeeper for a new one.',
+    };
+  const what = link.kind === 'invitation' ? 'invitation' : 'password-reset link';
+  const ask = `ask ${nameOf(link.createdBy)} for a new one`;
+  if (link.usedAt)
+    return {
+      unknown: false,
+      unusable:
+        link.kind === 'invitation'
+          ? `This invitation was used on ${day(link.usedAt)}: sign in with the password chosen then, or ${ask}.`
+          : `This password-reset link was used on ${day(link.usedAt)}: sign in with the password chosen then, or ${ask}.`,
+    };
+  // Before "replaced": a deactivation voids the account's links too, and this is the reason to tell.
+  if (link.user?.deactivatedAt)
+    return {
+      unknown: false,
+      unusable: `This account is deactivated, so the link cannot be used: ask ${nameOf(link.createdBy)} to reactivate it.`,
+    };
+  if (link.replacedAt)
+    return {
+      unknown: false,
+      unusable: `This ${what} was replaced by a newer one on ${day(link.replacedAt)}: use the link in the newest mail, or ${ask}.`,
+    };
+  if (link.expiresAt <= now)
+    return { unknown: false, unusable: `This ${what} expired on ${day(link.expiresAt)}: ${ask}.` };
+  return null;
+}
