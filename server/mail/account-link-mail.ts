@@ -1,4 +1,5 @@
 import type { AccountLinkKind } from '../../shared/account-link-kinds';
+import { roleWithArticle } from '../../shared/role-with-article';
 import type { Role } from '../../shared/roles';
 import { escapeHtml } from './escape-html';
 import type { NewMail } from './new-mail';
@@ -22,7 +23,7 @@ export function accountLinkMail(input: AccountLinkMailInput): NewMail {
   const invitation = input.kind === 'invitation';
   const subject = invitation ? `${input.sentBy} invites you to Sheetkeeper` : 'Choose a new Sheetkeeper password';
   const lead = invitation
-    ? `${input.sentBy} invites you to Sheetkeeper as a ${input.role}. Open this link to choose your name and password:`
+    ? `${input.sentBy} invites you to Sheetkeeper as ${roleWithArticle(input.role)}. Open this link to choose your name and password:`
     : `${input.sentBy} started a password reset for your Sheetkeeper account. Open this link to choose a new password:`;
   const after = invitation
     ? 'The link works once.'

@@ -60,4 +60,15 @@ describe('SignInForm', () => {
       password: 'ravi-demo-2026',
     });
   });
+
+  it('says a deactivated account is deactivated, and whom to ask', async () => {
+    const message =
+      'This account is deactivated, so it cannot sign in. Ask an admin of your Sheetkeeper to reactivate it.';
+    mockFetch(403, { kind: 'deactivated', message });
+    renderWithClient(<SignInForm onSignedIn={jest.fn()} />);
+    type('E-mail', 'hanne@sheetkeeper.test');
+    type('Password', 'hanne-demo-2026');
+    await submit();
+    await waitFor(() => expect(screen.getByTestId('sign-in-server-error').textContent).toBe(`× ${message}`));
+  });
 });

@@ -1,0 +1,149 @@
+import { act, fireEvent, screen, waitFor, within } from '@testing-library/react';
+import { UsersList } from '../../../components/settings/users-list';
+import type { PublicUser } from '../../../shared/public-user';
+import { fakeApiRoutes } from '../../setup/fake-api-routes';
+import { renderWithClient } from '../../setup/render-with-client';
+
+const user = (over: Partial<PublicUser>): PublicUser => ({
+  id: '00000000-0000-4000-8000-000000000001',
+  email: 'odile@sheetkeeper.test',
+  displayName: 'Odile Marchetti',
+  role: 'admin',
+  createdAt: '2026-01-01T00:00:00.000Z',
+  deactivatedAt: null,
+  ...over,
+});
+const odile = user({});
+const ravi = user({
+  id: '00000000-0000-4000-8000-000000000002',
+  email: 'ravi@sheetkeeper.test',
+  displayName: 'Ravi Dutta',
+  role: 'contributor',
+});
+const click = (name: string | RegExp, scope: HTMLElement = document.body) =>
+  act(() => fireEvent.click(within(scope).getByRole('button', { name })));
+const row = (email: string) => screen.getByTestId(`user-${email}`);
+
+describe('UsersList', () => {
+  it('asks before a role change, saves only on "yes", and then shows "saved" beside the row', async () => {
+    let stored = ravi;
+    const calls = fakeApiRoutes({
+      'GET /api/users': () => ({ status: 200, body: { users: [odile, stored] } }),
+      [`PATCH /api/users/${ravi.id}`]: (body) => {
+        stored = { ...ravi, role: (body as { role: PublicUser['role'] }).role };
+        return { status: 200, body: { user: stored } };
+      },
+    });
+    renderWithClient(<UsersList me={odile} />);
+    await waitFor(() => screen.getByText('Ravi Dutta'));
+    await act(() => fireEvent.click(within(row('ravi@sheetkeeper.test')).getByRole('radio', { name: 'Role: admin' })));
+    expect(within(row('ravi@sheetkeeper.test')).getByText('Make Ravi Dutta an admin?')).toBeTruthy();
+    expect(calls.filter((c) => c.method === 'PATCH')).toEqual([]);
+    await click('Keep a contributor', row('ravi@sheetkeeper.test'));
+    expect(screen.queryByText('Make Ravi Dutta an admin?')).toBeNull();
+
+    await act(() => fireEvent.click(within(row('ravi@sheetkeeper.test')).getByRole('radio', { name: 'Role: admin' })));
+    await click('Yes, make an admin', row('ravi@sheetkeeper.test'));
+    await waitFor(() => expect(screen.getByTestId('saved-ravi@sheetkeeper.test').textContent).toBe('saved: an admin'));
+    expect(calls.filter((c) => c.method === 'PATCH').map((c) => c.body)).toEqual([{ role: 'admin' }]);
+    expect(
+      within(row('ravi@sheetkeeper.test')).getByRole('radio', { name: 'Role: admin' }).getAttribute('aria-checked'),
+    ).toBe('true');
+  });
+
+  it("shows the server's refusal beside the row it is about and keeps the old role", async () => {
+    fakeApiRoutes({
+      'GET /api/users': { status: 200, body: { users: [odile, ravi] } },
+      [`PATCH /api/users/${odile.id}`]: {
+        status: 409,
+        body: { kind: 'conflict', message: 'This is the last active admin; make someone else admin first.' },
+      },
+    });
+    renderWithClient(<UsersList me={odile} />);
+    await waitFor(() => screen.getByText('Ravi Dutta'));
+    const mine = row('odile@sheetkeeper.test');
+    await act(() => fireEvent.click(within(mine).getByRole('radio', { name: 'Role: maintainer' })));
+    await click('Yes, make a maintainer', mine);
+    await waitFor(() =>
+      expect(within(mine).getByRole('alert').textContent).toBe(
+        '× This is the last active admin; make someone else admin first.',
+      ),
+    );
+    expect(within(row('ravi@sheetkeeper.test')).queryByRole('alert')).toBeNull();
+    expect(within(mine).getByRole('radio', { name: 'Role: admin' }).getAttribute('aria-checked')).toBe('true');
+  });
+
+  it('deactivates only after the confirm step, then says so on the row and offers to reactivate', async () => {
+    let stored = ravi;
+    const calls = fakeApiRoutes({
+      'GET /api/users': () => ({ status: 200, body: { users: [odile, stored] } }),
+      [`POST /api/users/${ravi.id}/deactivate`]: () => {
+        stored = { ...ravi, deactivatedAt: '2026-12-05T08:30:00.000Z' };
+        return { status: 200, body: { user: stored } };
+      },
+    });
+    renderWithClient(<UsersList me={odile} />);
+    await waitFor(() => screen.getByText('Ravi Dutta'));
+    // No one deactivates themselves: the own row has no such button.
+    expect(within(row('odile@sheetkeeper.test')).queryByRole('button', { name: /Deactivate/ })).toBeNull();
+    await click('Deactivate Ravi Dutta');
+    expect(screen.getByText(/They are signed out at once, their API tokens stop working/)).toBeTruthy();
+    expect(calls.filter((c) => c.method === 'POST')).toEqual([]);
+    await click('Yes, deactivate');
+    await waitFor(() => expect(screen.getByTestId('deactivated-ravi@sheetkeeper.test')).toBeTruthy());
+    expect(screen.getByTestId('deactivated-ravi@sheetkeeper.test').textContent).toMatch(
+      /^Deactivated .*: cannot sign in$/,
+    );
+    expect(screen.getByRole('button', { name: 'Reactivate Ravi Dutta' })).toBeTruthy();
+  });
+
+  it('mails a password reset after the confirm step and says where it went', async () => {
+    const calls = fakeApiRoutes({
+      'GET /api/users': { status: 200, body: { users: [odile, ravi] } },
+      [`POST /api/users/${ravi.id}/password-reset`]: {
+        status: 201,
+        body: { reset: { email: 'ravi@sheetkeeper.test', expiresAt: '2026-12-06T08:30:00.000Z' } },
+      },
+    });
+    renderWithClient(<UsersList me={odile} />);
+    await waitFor(() => screen.getByText('Ravi Dutta'));
+    await click('Mail Ravi Dutta a password reset');
+    await click('Yes, mail the link');
+    await waitFor(() =>
+      expect(screen.getByText(/^Reset link mailed to ravi@sheetkeeper\.test; it works until /)).toBeTruthy(),
+    );
+    expect(calls.filter((c) => c.method === 'POST').map((c) => c.path)).toEqual([
+      `/api/users/${ravi.id}/password-reset`,
+    ]);
+  });
+
+  it('invites with the shared schema: a bad address is named beside the field and nothing is sent', async () => {
+    const calls = fakeApiRoutes({
+      'GET /api/users': { status: 200, body: { users: [odile] } },
+      'POST /api/users/invitations': (body) => ({
+        status: 201,
+        body: { invitation: { ...(body as object), expiresAt: '2026-12-12T08:00:00.000Z' } },
+      }),
+    });
+    renderWithClient(<UsersList me={odile} />);
+    await waitFor(() => screen.getByText('Odile Marchetti (you)'));
+    const email = screen.getByLabelText('E-mail of the person to invite');
+    await act(() => fireEvent.change(email, { target: { value: 'not an address' } }));
+    await click('Mail the invitation');
+    expect(screen.getByText('× E-mail of the person to invite must be an e-mail address')).toBeTruthy();
+    expect(calls.filter((c) => c.method === 'POST')).toEqual([]);
+
+    await act(() => fireEvent.change(email, { target: { value: ' Ines@Example.test ' } }));
+    await act(() =>
+      fireEvent.click(within(screen.getByTestId('invite-form')).getByRole('radio', { name: 'Role: reviewer' })),
+    );
+    await click('Mail the invitation');
+    await waitFor(() => expect(screen.getByTestId('invite-sent')).toBeTruthy());
+    expect(calls.filter((c) => c.method === 'POST').map((c) => c.body)).toEqual([
+      { email: 'ines@example.test', role: 'reviewer' },
+    ]);
+    expect(screen.getByTestId('invite-sent').textContent).toMatch(
+      /^Invitation mailed to ines@example\.test as a reviewer\. Its link works once, until .*; the mail is in the Outbox\.$/,
+    );
+  });
+});
