@@ -4,6 +4,7 @@ import { MAIL_MAX_ATTEMPTS } from '../../shared/mail-max-attempts';
 import { OutboxMail } from '../entities/outbox-mail';
 import { backoffSeconds } from './backoff-seconds';
 import { enqueueMail } from './enqueue-mail';
+import { SCRUB_LINK_TOKENS_SQL } from './scrub-link-tokens-sql';
 import type { NewMail } from './new-mail';
 
 /**
@@ -68,7 +69,7 @@ export class MailOutbox {
    */
   async deliverDue(at?: Date, limit = 20): Promise<{ sent: number; failed: number }> {
     await this.dataSource.query(
-      `UPDATE outbox_mail SET status = 'unconfirmed', last_error = $2
+      `UPDATE outbox_mail SET status = 'unconfirmed', last_error = $2, ${SCRUB_LINK_TOKENS_SQL}
         WHERE status = 'sending' AND claimed_at < clock_timestamp() - make_interval(secs => $1)`,
       [
         (this.socketTimeoutMs + CUT_OFF_MARGIN_MS) / 1000,
@@ -96,7 +97,8 @@ export class MailOutbox {
           messageId: `<${mail.id}@sheetkeeper.local>`,
         });
         await this.dataSource.query(
-          `UPDATE outbox_mail SET status = 'sent', sent_at = clock_timestamp(), last_error = NULL WHERE id = $1`,
+          `UPDATE outbox_mail SET status = 'sent', sent_at = clock_timestamp(), last_error = NULL, ${SCRUB_LINK_TOKENS_SQL}
+            WHERE id = $1`,
           [mail.id],
         );
         sent += 1;
@@ -112,17 +114,20 @@ export class MailOutbox {
     const message = err instanceof Error ? err.message : String(err);
     const timeoutType = (err as { timeoutType?: string } | null)?.timeoutType;
     if (timeoutType === 'SOCKET_TIMEOUT') {
-      await this.dataSource.query(`UPDATE outbox_mail SET status = 'unconfirmed', last_error = $2 WHERE id = $1`, [
-        mail.id,
-        `The relay did not answer within ${this.socketTimeoutMs / 1000} s after the connection opened; the mail may have arrived, so it is not sent again.`,
-      ]);
+      await this.dataSource.query(
+        `UPDATE outbox_mail SET status = 'unconfirmed', last_error = $2, ${SCRUB_LINK_TOKENS_SQL} WHERE id = $1`,
+        [
+          mail.id,
+          `The relay did not answer within ${this.socketTimeoutMs / 1000} s after the connection opened; the mail may have arrived, so it is not sent again.`,
+        ],
+      );
       return;
     }
     if (mail.attempts >= MAIL_MAX_ATTEMPTS) {
-      await this.dataSource.query(`UPDATE outbox_mail SET status = 'failed', last_error = $2 WHERE id = $1`, [
-        mail.id,
-        `Not delivered after ${mail.attempts} attempts; the last: ${message}`,
-      ]);
+      await this.dataSource.query(
+        `UPDATE outbox_mail SET status = 'failed', last_error = $2, ${SCRUB_LINK_TOKENS_SQL} WHERE id = $1`,
+        [mail.id, `Not delivered after ${mail.attempts} attempts; the last: ${message}`],
+      );
       return;
     }
     await this.dataSource.query(

@@ -49,6 +49,23 @@ describe('the mail outbox and the local SMTP server', () => {
     expect(mail!.htmlBody).toContain('<b>+2i</b>');
   });
 
+  it("takes a one-time link's token out of the outbox copy once the mail is sent, and the recipient gets it whole", async () => {
+    const token = `skl_${'Ab9-_'.repeat(8)}xyz`;
+    const link = `http://127.0.0.1:8460/join?token=${token}`;
+    const id = await outbox.enqueue({
+      ...MAIL,
+      kind: 'invitation',
+      text: `Open ${link} once.`,
+      html: `<a href="${link}">${link}</a>`,
+    });
+    expect(await outbox.deliverDue()).toEqual({ sent: 1, failed: 0 });
+    const [mail] = await received();
+    expect(mail!.textBody).toBe(`Open ${link} once.`);
+    const kept = await db.dataSource.getRepository(OutboxMail).findOneByOrFail({ id: id! });
+    expect(kept.textBody).toBe('Open http://127.0.0.1:8460/join?token=[link removed after sending] once.');
+    expect(kept.htmlBody).not.toContain(token);
+  });
+
   it('keeps a mail while the SMTP server is down and delivers it once when it is back', async () => {
     await smtp.stop();
     const id = await outbox.enqueue(MAIL);
