@@ -1,0 +1,176 @@
+import type { Page } from 'playwright-core';
+import { DEMO_USERS } from '../../server/seed/demo-users';
+import { browserPerTest } from './support/browser-per-test';
+import { goTo } from './support/go-to';
+import { BASE_URL, openBrowser } from './support/open-browser';
+import { saveScreenshots } from './support/save-screenshots';
+import { signIn } from './support/sign-in';
+import { signOut } from './support/sign-out';
+
+/**
+ * Issue 15, point 10: the admin's day. Odile invites someone, the mail reaches the local mail
+ * store and the Outbox, the link makes the account once; she changes a role with a confirmation
+ * and sees "saved"; she deactivates Mei, whose open session stops at once, reactivates her and
+ * mails her a reset that Mei uses. The e2e database is shared by every journey of `npm test`, so
+ * this one leaves each demo account as it found it (role, active, password).
+ */
+const b = browserPerTest();
+const demo = (email: string) => DEMO_USERS.find((u) => u.email === email)!;
+const odile = demo('odile@sheetkeeper.test');
+const mei = demo('mei@sheetkeeper.test');
+
+/** The server hands queued mail to the local store every 5 s: reloads the Outbox until `name`'s row is there. */
+async function openMail(page: Page, name: RegExp): Promise<string> {
+  await goTo(page, 'Outbox');
+  const row = page.getByRole('link', { name }).first();
+  for (let i = 0; i < 30 && !(await row.isVisible()); i += 1) {
+    await page.waitForTimeout(500);
+    await page.reload();
+    await page
+      .getByTestId('mail-list')
+      .or(page.getByText('No mail received yet', { exact: false }))
+      .waitFor();
+  }
+  await saveScreenshots(page, 'admin-outbox', () => row.waitFor());
+  await row.click();
+  await page.getByRole('tab', { name: 'Plain text' }).click();
+  const text = (await page.getByTestId('mail-text').textContent()) ?? '';
+  const link = /http:\/\/\S+\/join\?token=skl_[A-Za-z0-9_-]{43}/.exec(text)?.[0];
+  if (!link) throw new Error(`no one-time link in the mail: ${text}`);
+  // The mail's links start with the server's SHEETKEEPER_APP_URL, which is the e2e server here.
+  expect(new URL(link).origin).toBe(new URL(BASE_URL).origin);
+  return link;
+}
+
+/**
+ * Puts Ravi's role and Mei's account back through the API as Odile, so a journey that stopped
+ * half-way leaves no demo account changed for the journeys after it.
+ */
+async function restoreDemoAccounts(page: Page): Promise<void> {
+  const api = page.context().request;
+  const origin = { origin: BASE_URL };
+  await api.post(`${BASE_URL}/api/auth/sign-in`, {
+    data: { email: odile.email, password: odile.password },
+    headers: origin,
+  });
+  const { users } = (await (await api.get(`${BASE_URL}/api/users`)).json()) as {
+    users: { id: string; email: string }[];
+  };
+  const idOf = (email: string) => users.find((u) => u.email === email)!.id;
+  await api.patch(`${BASE_URL}/api/users/${idOf('ravi@sheetkeeper.test')}`, {
+    data: { role: 'contributor' },
+    headers: origin,
+  });
+  await api.post(`${BASE_URL}/api/users/${idOf(mei.email)}/reactivate`, { headers: origin });
+}
+
+afterAll(async () => {
+  const other = await openBrowser();
+  try {
+    await restoreDemoAccounts(other.page);
+  } finally {
+    await other.close();
+  }
+});
+
+describe("the admin's day", () => {
+  it('invites someone by mail; the link makes the account with its role once, then says it was used', async () => {
+    const email = `ines-${Date.now()}@example.test`;
+    await signIn(b.page, odile.email, odile.password);
+    await goTo(b.page, 'Users');
+    const form = b.page.getByTestId('invite-form');
+    await form.getByLabel('E-mail of the person to invite').fill(email);
+    await form.getByRole('radio', { name: 'Role: reviewer' }).click();
+    await form.getByRole('button', { name: 'Mail the invitation' }).click();
+    const sent = b.page.getByTestId('invite-sent');
+    await sent.getByText(`Invitation mailed to ${email} as a reviewer`, { exact: false }).waitFor();
+    await saveScreenshots(b.page, 'admin-users-invited', () => sent.waitFor());
+
+    const link = await openMail(b.page, new RegExp(`invites you to Sheetkeeper to ${email.replace(/\./g, '\\.')}`));
+    await signOut(b.page);
+
+    await b.page.goto(link);
+    await b.page.getByText(`invites ${email} to Sheetkeeper as a reviewer`, { exact: false }).waitFor();
+    await saveScreenshots(b.page, 'admin-join', () => b.page.getByLabel('Your name').waitFor());
+    await b.page.getByLabel('Your name').fill('Inès Arbeloa');
+    await b.page.getByLabel('New password').fill('ines-chose-this-1');
+    await b.page.getByLabel('The same password again').fill('ines-chose-this-1');
+    await b.page.getByRole('button', { name: 'Make my account and sign in' }).click();
+    await b.page.getByTestId('home-email').getByText(email).waitFor();
+    await b.page.getByLabel('role reviewer').first().waitFor();
+    await signOut(b.page);
+
+    await b.page.goto(link);
+    await b.page.getByRole('heading', { name: 'This link cannot be used' }).waitFor();
+    expect(await b.page.getByTestId('join-unusable').textContent()).toMatch(
+      /^This invitation was used on \d{4}-\d\d-\d\d: sign in with the password chosen then, or ask Odile Marchetti/,
+    );
+    await saveScreenshots(b.page, 'admin-join-used', () => b.page.getByTestId('join-unusable').waitFor());
+    await signIn(b.page, email, 'ines-chose-this-1');
+  });
+
+  it('changes a role only after a confirmation and shows "saved" beside the row', async () => {
+    await signIn(b.page, odile.email, odile.password);
+    await goTo(b.page, 'Users');
+    const ravi = b.page.getByTestId('user-ravi@sheetkeeper.test');
+    for (const [role, article] of [
+      ['maintainer', 'a maintainer'],
+      ['contributor', 'a contributor'],
+    ] as const) {
+      await ravi.getByRole('radio', { name: `Role: ${role}` }).click();
+      await ravi.getByText(`Make Ravi Dutta ${article}?`).waitFor();
+      if (role === 'maintainer')
+        await saveScreenshots(b.page, 'admin-role-confirm', () => ravi.getByText('Make Ravi Dutta').waitFor());
+      await ravi.getByRole('button', { name: `Yes, make ${article}` }).click();
+      await b.page.getByTestId('saved-ravi@sheetkeeper.test').getByText(`saved: ${article}`).waitFor();
+    }
+    await saveScreenshots(b.page, 'admin-role-saved', () =>
+      b.page.getByTestId('saved-ravi@sheetkeeper.test').waitFor(),
+    );
+  });
+
+  it('deactivates Mei, whose open session stops at once; reactivates her and mails a reset she uses', async () => {
+    const other = await openBrowser();
+    try {
+      await signIn(other.page, mei.email, mei.password);
+      await signIn(b.page, odile.email, odile.password);
+      await goTo(b.page, 'Users');
+      const row = b.page.getByTestId('user-mei@sheetkeeper.test');
+      await row.getByRole('button', { name: 'Deactivate Mei Okonkwo' }).click();
+      await row.getByRole('button', { name: 'Yes, deactivate' }).click();
+      await row.getByText(/^Deactivated .*: cannot sign in$/).waitFor();
+      await saveScreenshots(b.page, 'admin-deactivated', () => row.getByText(/^Deactivated/).waitFor());
+
+      // Her open page is signed out at its next request; her password opens nothing and says why.
+      await other.page.reload();
+      await other.page.getByRole('button', { name: 'Sign in' }).waitFor();
+      await other.page.getByLabel('E-mail').fill(mei.email);
+      await other.page.getByLabel('Password').fill(mei.password);
+      await other.page.getByRole('button', { name: 'Sign in' }).click();
+      await other.page.getByText('× This account is deactivated, so it cannot sign in.', { exact: false }).waitFor();
+      await saveScreenshots(other.page, 'admin-sign-in-deactivated', () =>
+        other.page.getByText('This account is deactivated', { exact: false }).waitFor(),
+      );
+
+      await row.getByRole('button', { name: 'Reactivate Mei Okonkwo' }).click();
+      await row.getByText('saved: active again').waitFor();
+      await row.getByRole('button', { name: 'Mail Mei Okonkwo a password reset' }).click();
+      await row.getByRole('button', { name: 'Yes, mail the link' }).click();
+      await row.getByText('Reset link mailed to mei@sheetkeeper.test', { exact: false }).waitFor();
+      const link = await openMail(b.page, /^Message Choose a new Sheetkeeper password to mei@sheetkeeper\.test$/);
+
+      await other.page.goto(link);
+      await other.page.getByText('Choose a new password for Mei Okonkwo', { exact: false }).waitFor();
+      await saveScreenshots(other.page, 'admin-reset', () => other.page.getByLabel('New password').waitFor());
+      // The demo password again: every other journey on this database signs Mei in with it.
+      await other.page.getByLabel('New password').fill(mei.password);
+      await other.page.getByLabel('The same password again').fill(mei.password);
+      await other.page.getByRole('button', { name: 'Set the password and sign in' }).click();
+      await other.page.getByTestId('home-email').getByText(mei.email).waitFor();
+      await other.page.goto(link);
+      await other.page.getByText(/^This password-reset link was used on/).waitFor();
+    } finally {
+      await other.close();
+    }
+  });
+});
