@@ -1,7 +1,7 @@
-import { StyleSheet, View } from 'react-native';
+import { StyleSheet } from 'react-native';
 import { ApiRequestError } from '../../client/api-request-error';
 import { useAccountLink } from '../../client/use-account-link';
-import { theme } from '../../constants/theme';
+import { CentredCard } from '../ui/centred-card';
 import { QueryState } from '../ui/query-state';
 import { SkText } from '../ui/sk-text';
 import { JoinForm } from './join-form';
@@ -32,14 +32,12 @@ export function JoinScreen({ token, onDone }: { token: string | null; onDone: ()
       );
   else content = <JoinForm token={token} link={link.data} onDone={onDone} />;
   return (
-    <View style={styles.page}>
-      <View style={styles.card}>
-        <SkText variant="title" accessibilityRole="header">
-          {link.isError || token === null ? 'This link cannot be used' : heading}
-        </SkText>
-        {content}
-      </View>
-    </View>
+    <CentredCard maxWidth={480}>
+      <SkText variant="title" accessibilityRole="header">
+        {link.isError || token === null ? 'This link cannot be used' : heading}
+      </SkText>
+      {content}
+    </CentredCard>
   );
 }
 
@@ -52,22 +50,5 @@ function Unusable({ message }: { message: string }) {
 }
 
 const styles = StyleSheet.create({
-  page: {
-    flex: 1,
-    backgroundColor: theme.color.paper,
-    justifyContent: 'center',
-    alignItems: 'center',
-    padding: theme.space(4),
-  },
-  card: {
-    width: '100%',
-    maxWidth: 480,
-    backgroundColor: theme.color.panel,
-    borderWidth: 1,
-    borderColor: theme.color.rule,
-    borderRadius: theme.radius,
-    padding: theme.space(6),
-    gap: theme.space(5),
-  },
   lead: { lineHeight: 24 },
 });
