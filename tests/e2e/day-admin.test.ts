@@ -43,35 +43,30 @@ async function openMail(page: Page, name: RegExp): Promise<string> {
 }
 
 /**
- * Puts Ravi's role and Mei's account back through the API as Odile, so a journey that stopped
- * half-way leaves no demo account changed for the journeys after it.
+ * Puts Ravi's role and Mei's account back through the API as Odile (plain fetch, no browser: the
+ * file's Chromium is closed by then), so a journey that stopped half-way leaves no demo account
+ * changed for the journeys after it.
  */
-async function restoreDemoAccounts(page: Page): Promise<void> {
-  const api = page.context().request;
-  const origin = { origin: BASE_URL };
-  await api.post(`${BASE_URL}/api/auth/sign-in`, {
-    data: { email: odile.email, password: odile.password },
-    headers: origin,
+async function restoreDemoAccounts(): Promise<void> {
+  const signedIn = await fetch(`${BASE_URL}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email: odile.email, password: odile.password }),
   });
-  const { users } = (await (await api.get(`${BASE_URL}/api/users`)).json()) as {
-    users: { id: string; email: string }[];
-  };
+  const cookie = (signedIn.headers.get('set-cookie') ?? '').split(';')[0]!;
+  const call = (method: string, path: string, body?: unknown) =>
+    fetch(`${BASE_URL}/api${path}`, {
+      method,
+      headers: { cookie, 'content-type': 'application/json' },
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
+  const { users } = (await (await call('GET', '/users')).json()) as { users: { id: string; email: string }[] };
   const idOf = (email: string) => users.find((u) => u.email === email)!.id;
-  await api.patch(`${BASE_URL}/api/users/${idOf('ravi@sheetkeeper.test')}`, {
-    data: { role: 'contributor' },
-    headers: origin,
-  });
-  await api.post(`${BASE_URL}/api/users/${idOf(mei.email)}/reactivate`, { headers: origin });
+  await call('PATCH', `/users/${idOf('ravi@sheetkeeper.test')}`, { role: 'contributor' });
+  await call('POST', `/users/${idOf(mei.email)}/reactivate`);
 }
 
-afterAll(async () => {
-  const other = await openBrowser();
-  try {
-    await restoreDemoAccounts(other.page);
-  } finally {
-    await other.close();
-  }
-});
+afterAll(() => restoreDemoAccounts());
 
 describe("the admin's day", () => {
   it('invites someone by mail; the link makes the account with its role once, then says it was used', async () => {
