@@ -7,6 +7,7 @@ import { serverFieldErrors } from '../../client/server-field-errors';
 import { useAcceptLink } from '../../client/use-accept-link';
 import { theme } from '../../constants/theme';
 import type { AccountLinkView } from '../../shared/account-link-view';
+import { PASSWORD_MIN_LENGTH } from '../../shared/password-min-length';
 import { roleWithArticle } from '../../shared/role-with-article';
 import { useLinkBody } from '../../shared/schemas/use-link-body';
 import { ActionButton } from '../ui/action-button';
@@ -65,6 +66,7 @@ export function JoinForm({ token, link, onDone }: { token: string; link: Account
         error={rules.password ?? server.password}
         secureTextEntry
         autoComplete="new-password"
+        placeholder={`at least ${PASSWORD_MIN_LENGTH} characters`}
         testID="join-password"
       />
       <TextField

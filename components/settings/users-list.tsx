@@ -1,6 +1,7 @@
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 import { useUsers } from '../../client/use-users';
 import { theme } from '../../constants/theme';
+import { ACCOUNT_LINK_LIFETIME_HOURS } from '../../shared/account-link-lifetime-hours';
 import type { PublicUser } from '../../shared/public-user';
 import { QueryState } from '../ui/query-state';
 import { ColumnHead } from '../ui/column-head';
@@ -18,7 +19,7 @@ export function UsersList({ me }: { me: PublicUser }) {
     <View style={styles.list}>
       <TitledPanel
         title="Invite someone"
-        lead="They get a mail with a one-time link to choose their name and password; the link works for 7 days."
+        lead={`They get a mail with a one-time link to choose their name and password; the link works for ${ACCOUNT_LINK_LIFETIME_HOURS.invitation / 24} days.`}
       >
         <InviteForm />
       </TitledPanel>

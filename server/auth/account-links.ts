@@ -10,7 +10,7 @@ import { HttpError } from '../http/http-error';
 import { InputError } from '../http/input-error';
 import { accountLinkMail } from '../mail/account-link-mail';
 import { enqueueMail } from '../mail/enqueue-mail';
-import { ACCOUNT_LINK_LIFETIME_HOURS } from './account-link-lifetime-hours';
+import { ACCOUNT_LINK_LIFETIME_HOURS } from '../../shared/account-link-lifetime-hours';
 import { hashToken } from './hash-token';
 
 /** A link that cannot be used, and whether its token was one we never made (a guess, for the sign-in limiter). */

@@ -1,4 +1,4 @@
-import type { AccountLinkKind } from '../../shared/account-link-kinds';
+import type { AccountLinkKind } from './account-link-kinds';
 
 /**
  * How long a mailed link works. An invitation waits for someone who may be away for a week; a
