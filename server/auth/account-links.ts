@@ -105,14 +105,17 @@ export class AccountLinks {
       if (link!.kind === 'invitation') {
         if (displayName === undefined)
           throw new InputError([{ field: 'body.displayName', rule: 'is required for an invitation' }]);
-        if (await users.findOneBy({ email: link!.email }))
-          throw new HttpError(409, {
-            kind: 'conflict',
-            message: `${link!.email} has an account already: sign in with it instead.`,
+        const taken = new HttpError(409, {
+          kind: 'conflict',
+          message: `${link!.email} has an account already: sign in with it instead.`,
+        });
+        if (await users.findOneBy({ email: link!.email })) throw taken;
+        // The unique address is the last word if an account for it was made in the meantime.
+        user = await users
+          .save(users.create({ email: link!.email, displayName, role: link!.role, passwordHash, deactivatedAt: null }))
+          .catch((e: unknown) => {
+            throw (e as { driverError?: { code?: string } }).driverError?.code === '23505' ? taken : e;
           });
-        user = await users.save(
-          users.create({ email: link!.email, displayName, role: link!.role, passwordHash, deactivatedAt: null }),
-        );
       } else {
         user = link!.user!;
         user.passwordHash = passwordHash;

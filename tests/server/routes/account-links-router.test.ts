@@ -110,6 +110,19 @@ describe('one-time links', () => {
     expect(await sql(`SELECT 1 FROM users WHERE email = 'race@example.test'`)).toHaveLength(1);
   });
 
+  it('refuses an invitation whose address got an account in the meantime, and makes no second one', async () => {
+    const token = await invite('meantime@example.test');
+    await sql(
+      `INSERT INTO users (email, display_name, password_hash, role) VALUES ('meantime@example.test', 'Early', 'x', 'reviewer')`,
+    );
+    const res = await use(token);
+    expect(res.status).toBe(409);
+    expect(res.body.message).toBe('meantime@example.test has an account already: sign in with it instead.');
+    expect(await sql(`SELECT display_name FROM users WHERE email = 'meantime@example.test'`)).toEqual([
+      { display_name: 'Early' },
+    ]);
+  });
+
   it('refuses to invite an address that has an account', async () => {
     const res = await admin.post('/api/users/invitations').send({ email: 'Ravi@Sheetkeeper.test', role: 'admin' });
     expect(res.status).toBe(409);
