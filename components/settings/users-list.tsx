@@ -7,6 +7,7 @@ import { QueryState } from '../ui/query-state';
 import { ColumnHead } from '../ui/column-head';
 import { TitledPanel } from '../ui/titled-panel';
 import { InviteForm } from './invite-form';
+import { OpenInvitations } from './open-invitations';
 import { USER_COLUMNS } from './user-columns';
 import { UserRow } from './user-row';
 
@@ -22,6 +23,7 @@ export function UsersList({ me }: { me: PublicUser }) {
         lead={`They get a mail with a one-time link to choose their name and password; the link works for ${ACCOUNT_LINK_LIFETIME_HOURS.invitation / 24} days.`}
       >
         <InviteForm />
+        <OpenInvitations />
       </TitledPanel>
       {users.isPending ? (
         <QueryState state="loading" />

@@ -2,6 +2,7 @@ import { randomBytes } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import type { AccountLinkKind } from '../../shared/account-link-kinds';
 import type { AccountLinkView } from '../../shared/account-link-view';
+import type { InvitationView } from '../../shared/invitation-view';
 import type { Role } from '../../shared/roles';
 import { LINK_TOKEN_PREFIX } from '../../shared/schemas/link-token-schema';
 import { AccountLink } from '../entities/account-link';
@@ -69,6 +70,26 @@ export class AccountLinks {
       });
       return { email: user.email, expiresAt: expiresAt.toISOString() };
     });
+  }
+
+  /** Invitations that can still be used (not used, replaced or expired), newest first. */
+  async openInvitations(): Promise<InvitationView[]> {
+    const open = await this.dataSource
+      .getRepository(AccountLink)
+      .createQueryBuilder('link')
+      .innerJoinAndSelect('link.createdBy', 'admin')
+      .where(
+        `link.kind = 'invitation' AND link.used_at IS NULL AND link.replaced_at IS NULL AND link.expires_at > now()`,
+      )
+      .orderBy('link.created_at', 'DESC')
+      .getMany();
+    return open.map((link) => ({
+      email: link.email,
+      role: link.role,
+      sentBy: nameOf(link.createdBy),
+      sentAt: link.createdAt.toISOString(),
+      expiresAt: link.expiresAt.toISOString(),
+    }));
   }
 
   /** What the join page shows for `token`, or why it cannot be used. */

@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
+import { invitationViewSchema } from '../../shared/invitation-view-schema';
 import { publicUserSchema } from '../../shared/public-user-schema';
 import { ROLES } from '../../shared/roles';
 import { idParams } from '../../shared/schemas/id-params';
@@ -32,6 +33,22 @@ export function usersRouter(dataSource: DataSource, admin: UserAdmin, links: Acc
     async (_req, res) => {
       const all = await users.find({ order: { createdAt: 'ASC', email: 'ASC' } });
       res.json({ users: all.map(toPublicUser) });
+    },
+  );
+
+  declareRoute(
+    router,
+    'get',
+    '/invitations',
+    {
+      summary: 'Invitations that can still be used, newest first',
+      access: ['admin'],
+      responses: {
+        200: { description: 'The open invitations.', schema: z.object({ invitations: z.array(invitationViewSchema) }) },
+      },
+    },
+    async (_req, res) => {
+      res.json({ invitations: await links.openInvitations() });
     },
   );
 

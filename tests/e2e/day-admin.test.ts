@@ -79,6 +79,7 @@ describe("the admin's day", () => {
     await form.getByRole('button', { name: 'Mail the invitation' }).click();
     const sent = b.page.getByTestId('invite-sent');
     await sent.getByText(`Invitation mailed to ${email} as a reviewer`, { exact: false }).waitFor();
+    await b.page.getByTestId('open-invitations').getByText(email).waitFor();
     await saveScreenshots(b.page, 'admin-users-invited', () => sent.waitFor());
 
     const link = await openMail(b.page, new RegExp(`invites you to Sheetkeeper to ${email.replace(/\./g, '\\.')}`));

@@ -117,16 +117,24 @@ describe('UsersList', () => {
     ]);
   });
 
-  it('invites with the shared schema: a bad address is named beside the field and nothing is sent', async () => {
+  it('invites with the shared schema: a bad address is named beside the field and nothing is sent; a sent one is listed as open', async () => {
+    const open: unknown[] = [];
     const calls = fakeApiRoutes({
       'GET /api/users': { status: 200, body: { users: [odile] } },
-      'POST /api/users/invitations': (body) => ({
-        status: 201,
-        body: { invitation: { ...(body as object), expiresAt: '2026-12-12T08:00:00.000Z' } },
-      }),
+      'GET /api/users/invitations': () => ({ status: 200, body: { invitations: open } }),
+      'POST /api/users/invitations': (body) => {
+        const invitation = { ...(body as object), expiresAt: '2026-12-12T08:00:00.000Z' };
+        open.push({
+          ...invitation,
+          sentBy: 'Odile Marchetti (odile@sheetkeeper.test)',
+          sentAt: '2026-12-05T08:00:00.000Z',
+        });
+        return { status: 201, body: { invitation } };
+      },
     });
     renderWithClient(<UsersList me={odile} />);
     await waitFor(() => screen.getByText('Odile Marchetti (you)'));
+    await waitFor(() => screen.getByText('No invitation is waiting to be used.'));
     const email = screen.getByLabelText('E-mail of the person to invite');
     await act(() => fireEvent.change(email, { target: { value: 'not an address' } }));
     await click('Mail the invitation');
@@ -145,5 +153,8 @@ describe('UsersList', () => {
     expect(screen.getByTestId('invite-sent').textContent).toMatch(
       /^Invitation mailed to ines@example\.test as a reviewer\. Its link works once, until .*; the mail is in the Outbox\.$/,
     );
+    // The list of open invitations is read again and shows the new one.
+    await waitFor(() => expect(screen.getByTestId('open-invitations').textContent).toContain('ines@example.test'));
+    expect(screen.getByTestId('open-invitations').textContent).toMatch(/as a reviewer · sent .* by Odile Marchetti/);
   });
 });

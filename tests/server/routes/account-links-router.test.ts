@@ -210,4 +210,19 @@ describe('one-time links', () => {
     expect(locked.status).toBe(429);
     expect(Number(locked.headers['retry-after'])).toBeGreaterThan(0);
   });
+
+  it('lists only the invitations that can still be used, newest first', async () => {
+    const res = await admin.get('/api/users/invitations');
+    expect(res.status).toBe(200);
+    const emails = res.body.invitations.map((i: { email: string }) => i.email);
+    // Used (ines, twice, race, fields), expired (late), made an account meanwhile (meantime: still unused, so listed).
+    expect(emails).toEqual(['meantime@example.test', 'hash-only@example.test']);
+    expect(res.body.invitations[1]).toEqual({
+      email: 'hash-only@example.test',
+      role: 'reviewer',
+      sentBy: 'Odile Marchetti (odile@sheetkeeper.test)',
+      sentAt: expect.any(String),
+      expiresAt: expect.any(String),
+    });
+  });
 });

@@ -65,6 +65,7 @@ const ROUTES: Record<Route, FuzzRoute> = {
     params: { id: () => fixtures.userId },
     body: () => ({ role: 'contributor' }),
   },
+  'GET /api/users/invitations': { roles: ['admin'] },
   'POST /api/users/invitations': {
     roles: ['admin'],
     body: () => ({ email: `fuzz-${(serial += 1)}@example.test`, role: 'reviewer' }),

@@ -151,6 +151,11 @@ const ROUTES: RouteCase[] = [
     expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 },
   },
   {
+    name: 'GET /api/users/invitations',
+    call: (a) => a.get('/api/users/invitations'),
+    expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 },
+  },
+  {
     name: 'POST /api/users/invitations',
     call: (a, who) => a.post('/api/users/invitations').send({ email: `table-${who}@example.test`, role: 'reviewer' }),
     expect: { 'signed-out': 401, admin: 201, maintainer: 403, reviewer: 403, contributor: 403 },
