@@ -148,6 +148,7 @@ describe('GET /api/openapi.json', () => {
   it('answers with the body its document describes, where the route documents one', async () => {
     const admin = await signInAs(t.app, 'admin');
     await admin.post('/api/tokens').send({ name: 'described' });
+    await admin.post('/api/users/invitations').send({ email: 'described@example.test', role: 'reviewer' });
     // A live worker (beat just now), so the worker list has an item to hold to its schema.
     await t.db.dataSource.query(`INSERT INTO workers (label, targets) VALUES ('described:1', '{complex.js@2.4.3}')`);
     const described = operations(doc).filter(
@@ -161,6 +162,7 @@ describe('GET /api/openapi.json', () => {
       'GET /api/me',
       'GET /api/tokens',
       'GET /api/users',
+      'GET /api/users/invitations',
       'GET /api/workers',
     ]);
     for (const [key, op] of described) {
