@@ -1,4 +1,5 @@
-import { StyleSheet } from 'react-native';
+import { Link } from 'expo-router';
+import { Pressable, StyleSheet } from 'react-native';
 import { ApiRequestError } from '../../client/api-request-error';
 import { useAccountLink } from '../../client/use-account-link';
 import { CentredCard } from '../ui/centred-card';
@@ -43,12 +44,22 @@ export function JoinScreen({ token, onDone }: { token: string | null; onDone: ()
 
 function Unusable({ message }: { message: string }) {
   return (
-    <SkText variant="body" style={styles.lead} testID="join-unusable">
-      {message}
-    </SkText>
+    <>
+      <SkText variant="body" style={styles.lead} testID="join-unusable">
+        {message}
+      </SkText>
+      <Link href="/sign-in" asChild>
+        <Pressable accessibilityRole="link" style={styles.signIn}>
+          <SkText variant="label" tone="accent">
+            Go to sign-in
+          </SkText>
+        </Pressable>
+      </Link>
+    </>
   );
 }
 
 const styles = StyleSheet.create({
   lead: { lineHeight: 24 },
+  signIn: { minHeight: 44, justifyContent: 'center', alignSelf: 'flex-start' },
 });

@@ -4,6 +4,8 @@ import type { AccountLinkView } from '../../../shared/account-link-view';
 import { fakeApiRoutes } from '../../setup/fake-api-routes';
 import { renderWithClient } from '../../setup/render-with-client';
 
+jest.mock('expo-router', () => require('../../setup/expo-router-stub'));
+
 const TOKEN = `skl_${'a'.repeat(43)}`;
 const invitation: AccountLinkView = {
   kind: 'invitation',
@@ -75,6 +77,7 @@ describe('JoinScreen', () => {
     await waitFor(() => expect(screen.getByTestId('join-unusable').textContent).toBe(message));
     expect(screen.getByRole('heading').textContent).toBe('This link cannot be used');
     expect(screen.queryByLabelText('New password')).toBeNull();
+    expect(screen.getByRole('link', { name: 'Go to sign-in' }).getAttribute('href')).toBe('/sign-in');
   });
 
   it('explains a page opened without a link and asks nothing of the server', async () => {
