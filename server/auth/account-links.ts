@@ -112,11 +112,14 @@ export class AccountLinks {
     return this.dataSource.transaction(async (tx) => {
       const links = tx.getRepository(AccountLink);
       const users = tx.getRepository(User);
+      const hash = hashToken(token);
+      // Rows are locked users first, then links, the order a deactivation takes them in
+      // (user-admin.ts), so the two never wait on each other: a reset's account is locked before
+      // its link, and a deactivation that comes in between is seen below.
+      const first = await links.findOne({ where: { tokenHash: hash }, relations: { user: true } });
+      if (first?.user) await users.findOne({ where: { id: first.user.id }, lock: { mode: 'pessimistic_write' } });
       // Locked, then read again with its relations: two uses of one link at once spend it once.
-      const locked = await links.findOne({
-        where: { tokenHash: hashToken(token) },
-        lock: { mode: 'pessimistic_write' },
-      });
+      const locked = await links.findOne({ where: { tokenHash: hash }, lock: { mode: 'pessimistic_write' } });
       const link =
         locked && (await links.findOne({ where: { id: locked.id }, relations: { user: true, createdBy: true } }));
       const refusal = refusalFor(link, new Date());
@@ -138,9 +141,9 @@ export class AccountLinks {
             throw (e as { driverError?: { code?: string } }).driverError?.code === '23505' ? taken : e;
           });
       } else {
-        user = link!.user!;
-        user.passwordHash = passwordHash;
-        user = await users.save(user);
+        // Only the hash is written: a save of the whole row could undo a change made meanwhile.
+        await users.update(link!.user!.id, { passwordHash });
+        user = await users.findOneByOrFail({ id: link!.user!.id });
       }
       await links.update(link!.id, { usedAt: now, user });
       return user;
