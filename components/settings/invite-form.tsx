@@ -7,15 +7,14 @@ import { serverFieldErrors } from '../../client/server-field-errors';
 import { useInvite } from '../../client/use-invite';
 import { theme } from '../../constants/theme';
 import { roleWithArticle } from '../../shared/role-with-article';
-import { ROLES, type Role } from '../../shared/roles';
+import type { Role } from '../../shared/roles';
 import { inviteBody } from '../../shared/schemas/invite-body';
 import { ActionButton } from '../ui/action-button';
 import { ChipGroup } from '../ui/chip-group';
 import { FailureAlert } from '../ui/failure-alert';
 import { SkText } from '../ui/sk-text';
 import { TextField } from '../ui/text-field';
-
-const ROLE_OPTIONS = ROLES.map((role) => ({ value: role, text: role }));
+import { ROLE_OPTIONS } from './role-options';
 
 /**
  * Invites someone: an address and a role, checked by the server's own schema; the server mails a

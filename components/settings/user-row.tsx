@@ -8,16 +8,16 @@ import { useSetUserActive } from '../../client/use-set-user-active';
 import { theme } from '../../constants/theme';
 import type { PublicUser } from '../../shared/public-user';
 import { roleWithArticle } from '../../shared/role-with-article';
-import { ROLES, type Role } from '../../shared/roles';
+import type { Role } from '../../shared/roles';
 import { ActionButton } from '../ui/action-button';
 import { ChipGroup } from '../ui/chip-group';
 import { ConfirmAction } from '../ui/confirm-action';
 import { FailureAlert } from '../ui/failure-alert';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 import { SkText } from '../ui/sk-text';
+import { ROLE_OPTIONS } from './role-options';
 import { USER_COLUMNS } from './user-columns';
 
-const ROLE_OPTIONS = ROLES.map((role) => ({ value: role, text: role }));
 const UNREACHABLE = 'The server could not be reached; nothing was changed.';
 
 /**
