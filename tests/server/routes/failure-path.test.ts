@@ -49,8 +49,19 @@ describe('the path of a failing case', () => {
   }, 120_000);
   afterAll(() => t.stop());
 
+  /**
+   * A zero-sign failure of the straddle across sqrt's cut, chosen by its path: the table opens
+   * newest first, so "the first row" names a different path whenever the order changes.
+   */
+  async function zeroSignFailureOnTheStraddle(): Promise<{ id: string; pathName: string }> {
+    const rows: { id: string; pathName: string }[] = (
+      await kwame.get(`/api/failures?run=${runIds.sqrt}&diagnosis=zero-sign&limit=500`)
+    ).body.failures;
+    return rows.find((f) => f.pathName === 'straddle cut 1')!;
+  }
+
   it('returns every point of the path with the stored failures in place and the principal cut of sqrt', async () => {
-    const [failure] = (await kwame.get(`/api/failures?run=${runIds.sqrt}&diagnosis=zero-sign&limit=1`)).body.failures;
+    const failure = await zeroSignFailureOnTheStraddle();
     expect(failure).toBeDefined();
     const res = await kwame.get(`/api/failures/${failure.id}/path`);
     expect(res.status).toBe(200);
@@ -102,7 +113,7 @@ describe('the path of a failing case', () => {
   });
 
   it('puts the library value of a zero-sign failure on the other side of the cut from the expected one', async () => {
-    const [failure] = (await kwame.get(`/api/failures?run=${runIds.sqrt}&diagnosis=zero-sign&limit=1`)).body.failures;
+    const failure = await zeroSignFailureOnTheStraddle();
     const view = (await kwame.get(`/api/failures/${failure.id}/path`)).body as FailurePathView;
     const focus = view.points[view.focusIndex]!;
     // √(−x ∓ 0i) = ±i√x: the arguments are +π/2 and −π/2.
