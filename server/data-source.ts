@@ -43,6 +43,7 @@ import { RegressionGroups1764811100000 } from './migrations/1764811100000-regres
 import { FailureTableRowType1764800000000 } from './migrations/1764800000000-failure-table-row-type';
 import { OneActiveRunHeartbeatsMailOnce1764810000000 } from './migrations/1764810000000-one-active-run-heartbeats-mail-once';
 import { Workers1764920000000 } from './migrations/1764920000000-workers';
+import { DecisionVersions1764930000000 } from './migrations/1764930000000-decision-versions';
 import { AccountLinksAndDeactivation1764940000000 } from './migrations/1764940000000-account-links-and-deactivation';
 import { NewestFailuresFirstAndFirstRuns1764960000000 } from './migrations/1764960000000-newest-failures-first-and-first-runs';
 
@@ -90,6 +91,7 @@ export const MIGRATIONS = [
   FailureLabelsAndClasses1764900000000,
   TargetSources1764910000000,
   Workers1764920000000,
+  DecisionVersions1764930000000,
   AccountLinksAndDeactivation1764940000000,
   NewestFailuresFirstAndFirstRuns1764960000000,
 ];

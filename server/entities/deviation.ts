@@ -1,11 +1,17 @@
 import { Check, Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import type { DecisionVersions } from '../../shared/decision-versions';
 import { User } from './user';
 
-/** A reviewer's verdict on failures of one target (any version) within a scope; `accepted` ones expire. */
+/**
+ * A reviewer's verdict (a decision) on failures of one library within a scope, for the versions
+ * `versions` names counted from `targetVersion`; `accepted` ones expire.
+ */
 @Entity({ name: 'deviations' })
 @Index('deviations_match_idx', ['targetKey', 'suiteSlug'])
 @Check('deviations_classification_known', "classification IN ('bug', 'convention-difference', 'accepted')")
 @Check('deviations_scope_known', "scope IN ('point', 'path', 'suite', 'diagnosis')")
+@Check('deviations_versions_known', "versions IN ('this-version', 'this-and-later', 'every-version')")
+@Check('deviations_versions_have_version', "versions = 'every-version' OR target_version IS NOT NULL")
 export class Deviation {
   @PrimaryGeneratedColumn('uuid')
   id!: string;
@@ -19,6 +25,14 @@ export class Deviation {
   /** The target without its version ("complex.js", "mathjs/number"). */
   @Column({ type: 'text', name: 'target_key' })
   targetKey!: string;
+
+  /** Which versions of the library it covers (shared/decision-versions.ts). */
+  @Column({ type: 'text', default: 'every-version' })
+  versions!: DecisionVersions;
+
+  /** The version it was given on; null only for decisions recorded before versions were stored. */
+  @Column({ type: 'text', name: 'target_version', nullable: true })
+  targetVersion!: string | null;
 
   @Column({ type: 'text', name: 'suite_slug' })
   suiteSlug!: string;

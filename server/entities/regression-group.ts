@@ -20,6 +20,10 @@ export class RegressionGroup {
   @Column({ type: 'text', name: 'target_key' })
   targetKey!: string;
 
+  /** The target's version: a decision may cover some versions of a library only. */
+  @Column({ type: 'text', name: 'target_version' })
+  targetVersion!: string;
+
   @Column({ type: 'text', name: 'suite_slug' })
   suiteSlug!: string;
 

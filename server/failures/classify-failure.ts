@@ -5,7 +5,7 @@ import type { User } from '../entities/user';
 import { HttpError } from '../http/http-error';
 import { targetKeySql } from '../sql/target-key-sql';
 
-/** Records a reviewer's verdict on a failure, scoped from that failure's suite, path, point, diagnosis and target. */
+/** Records a reviewer's verdict on a failure, scoped from that failure's suite, path, point, diagnosis, target and its version. */
 export async function classifyFailure(
   dataSource: DataSource,
   user: User,
@@ -13,7 +13,7 @@ export async function classifyFailure(
   body: ClassifyBody,
 ): Promise<Deviation> {
   const [f] = await dataSource.query(
-    `SELECT id::text, suite_slug, path_name, point_key, diagnosis_kind, ${targetKeySql('target_name')} AS target_key FROM failures WHERE id = $1`,
+    `SELECT id::text, suite_slug, path_name, target_version, point_key, diagnosis_kind, ${targetKeySql('target_name')} AS target_key FROM failures WHERE id = $1`,
     [failureId],
   );
   if (!f) throw new HttpError(404, { kind: 'not-found', message: 'No failure with that number.' });
@@ -25,7 +25,9 @@ export async function classifyFailure(
   return dataSource.getRepository(Deviation).save({
     classification: body.classification,
     scope: body.scope,
+    versions: body.versions,
     targetKey: f.target_key,
+    targetVersion: f.target_version,
     suiteSlug: f.suite_slug,
     pathName: body.scope === 'path' ? f.path_name : null,
     pointKey: body.scope === 'point' ? f.point_key : null,

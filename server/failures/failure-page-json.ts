@@ -2,10 +2,26 @@ import { createHash } from 'node:crypto';
 import type { Pool } from 'pg';
 import type { DataSource } from 'typeorm';
 import type { FailureQuery } from '../../shared/schemas/failure-query';
+import { deviationAppliesSql } from '../sql/deviation-applies-sql';
 import { FAILURE_ROW, failureSearchSql, RANK } from '../sql/failure-search-sql';
+import { failureMatchSql } from '../sql/failure-match-sql';
 
 /**
- * One page of the failure table as the response body `{"failures": [...], "next": ...}`,
+ * The decision in force that covers each row of a page (shared/decision-mark.ts), keyed by failure
+ * number: one lookup per row through deviations_match_idx (library, suite) after the page is chosen,
+ * so the page's order and indexes are as before.
+ */
+const DECISION_MARKS = `(SELECT coalesce(json_object_agg(m.fid, m.mark), '{}'::json) FROM (
+       SELECT f.id::text AS fid, json_build_object('id', d.id, 'classification', d.classification, 'expiresAt',
+                                  to_char(d.expires_at AT TIME ZONE 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"')) AS mark
+         FROM p JOIN failures f ON f.id = p._id
+         JOIN LATERAL (SELECT * FROM deviations d
+                        WHERE d.revoked_at IS NULL AND (d.expires_at IS NULL OR d.expires_at > now())
+                          AND ${deviationAppliesSql('d', failureMatchSql('f'))}
+                        ORDER BY d.classification = 'accepted' DESC, d.created_at DESC LIMIT 1) d ON true) m)`;
+
+/**
+ * One page of the failure table as the response body `{"failures": [...], "next": ..., "decisions": {...}}`,
  * written by PostgreSQL: the server passes the text on without parsing rows into objects and
  * stringifying them again. Measured with `BENCH_TABLE_ONLY=1 npm run bench:server` (50
  * concurrent clients, 1,000,000 failing points, 2-core machine): that parse-and-stringify was
@@ -23,7 +39,8 @@ export async function failurePageJson(dataSource: DataSource, q: FailureQuery): 
          FROM ${from} ORDER BY ${order} LIMIT $${params.length})
      SELECT json_build_object(
               'failures', coalesce(json_agg(p.r ORDER BY ${pageOrder}), '[]'::json),
-              'next', CASE WHEN count(*) = $${params.length} THEN (array_agg(${cursor} ORDER BY ${lastFirst}))[1] END
+              'next', CASE WHEN count(*) = $${params.length} THEN (array_agg(${cursor} ORDER BY ${lastFirst}))[1] END,
+              'decisions', ${DECISION_MARKS}
             )::text AS body
        FROM p`;
   // A named statement on TypeORM's own pool, so each filter shape is parsed and planned once per

@@ -1,29 +1,17 @@
 import { Router } from 'express';
-import type { DataSource } from 'typeorm';
+import type { DataSource, FindOptionsWhere } from 'typeorm';
 import { ROLES } from '../../shared/roles';
+import { decisionListQuery } from '../../shared/schemas/decision-list-query';
 import { idParams } from '../../shared/schemas/id-params';
 import { Deviation } from '../entities/deviation';
 import { HttpError } from '../http/http-error';
 import { declareRoute } from '../http/declare-route';
+import { toDecisionView } from '../views/to-decision-view';
 
-const view = (d: Deviation) => ({
-  id: d.id,
-  classification: d.classification,
-  scope: d.scope,
-  targetKey: d.targetKey,
-  suiteSlug: d.suiteSlug,
-  pathName: d.pathName,
-  pointKey: d.pointKey,
-  diagnosisKind: d.diagnosisKind,
-  reason: d.reason,
-  expiresAt: d.expiresAt?.toISOString() ?? null,
-  failureId: d.failureId,
-  createdBy: d.createdBy.displayName,
-  createdAt: d.createdAt.toISOString(),
-  revokedAt: d.revokedAt?.toISOString() ?? null,
-});
+/** Decisions listed at most; the Decisions screen filters by library and suite past that. */
+const LIST_LIMIT = 500;
 
-/** Reviewers' verdicts: everyone reads them; reviewers (and admins) revoke them. */
+/** Reviewers' verdicts (decisions): everyone reads them; reviewers (and admins) revoke them. */
 export function deviationsRouter(dataSource: DataSource): Router {
   const router = Router();
   const deviations = dataSource.getRepository(Deviation);
@@ -32,16 +20,24 @@ export function deviationsRouter(dataSource: DataSource): Router {
     'get',
     '/',
     {
-      summary: "Reviewers' verdicts on failures (deviations), newest first, at most 500",
+      summary:
+        "Reviewers' verdicts on failures (decisions), newest first, at most 500, with each one's scope, versions and state; filtered by library, suite or id",
       access: ROLES,
-      responses: { 200: 'The verdicts (`deviations`).' },
+      query: decisionListQuery,
+      responses: { 200: 'The verdicts (`deviations`), expired and revoked ones included with their `state`.' },
     },
-    async (_req, res) => {
-      res.json({
-        deviations: (
-          await deviations.find({ relations: { createdBy: true }, order: { createdAt: 'DESC' }, take: 500 })
-        ).map(view),
+    async (_req, res, { query }) => {
+      const where: FindOptionsWhere<Deviation> = {};
+      if (query.library) where.targetKey = query.library;
+      if (query.suite) where.suiteSlug = query.suite;
+      if (query.id) where.id = query.id;
+      const found = await deviations.find({
+        where,
+        relations: { createdBy: true },
+        order: { createdAt: 'DESC' },
+        take: LIST_LIMIT,
       });
+      res.json({ deviations: found.map(toDecisionView) });
     },
   );
   declareRoute(
@@ -63,7 +59,7 @@ export function deviationsRouter(dataSource: DataSource): Router {
       if (!found) throw new HttpError(404, { kind: 'not-found', message: 'No verdict with that id.' });
       if (found.revokedAt) throw new HttpError(409, { kind: 'conflict', message: 'This verdict was revoked already.' });
       found.revokedAt = new Date();
-      res.json({ deviation: view(await deviations.save(found)) });
+      res.json({ deviation: toDecisionView(await deviations.save(found)) });
     },
   );
   return router;

@@ -8,6 +8,9 @@ import { classifyBody } from '../../shared/schemas/classify-body';
 import { failureIdParams } from '../../shared/schemas/failure-id-params';
 import { failureQuery } from '../../shared/schemas/failure-query';
 import { classifyFailure } from '../failures/classify-failure';
+import { decisionsOn } from '../failures/decisions-on';
+import { targetKeySql } from '../sql/target-key-sql';
+import { toDecisionView } from '../views/to-decision-view';
 import { failurePath } from '../failures/failure-path';
 import { HttpError } from '../http/http-error';
 import { InputError } from '../http/input-error';
@@ -77,7 +80,8 @@ export function failuresRouter(dataSource: DataSource, options: { referenceCache
     'post',
     '/:id/classify',
     {
-      summary: 'Give a failure a verdict (bug, convention difference or accepted) over a scope',
+      summary:
+        'Give a failure a verdict (bug, convention difference or accepted) over a scope and the versions of its library it covers',
       access: ['reviewer', 'admin', 'maintainer'],
       params: failureIdParams,
       body: classifyBody,
@@ -96,15 +100,7 @@ export function failuresRouter(dataSource: DataSource, options: { referenceCache
             'A maintainer may accept a deviation; calling a failure a bug or a convention difference needs the role reviewer or admin.',
         });
       }
-      const deviation = await classifyFailure(dataSource, req.user!, id, body);
-      res.status(201).json({
-        deviation: {
-          id: deviation.id,
-          classification: deviation.classification,
-          scope: deviation.scope,
-          expiresAt: deviation.expiresAt?.toISOString() ?? null,
-        },
-      });
+      res.status(201).json({ deviation: toDecisionView(await classifyFailure(dataSource, req.user!, id, body)) });
     },
   );
 
@@ -135,10 +131,16 @@ export function failuresRouter(dataSource: DataSource, options: { referenceCache
       summary: 'One failure with its history at the same point across runs',
       access: ROLES,
       params: failureIdParams,
-      responses: { 200: 'The failure (`failure`) and up to 100 earlier ones at its point (`history`).', ...noFailure },
+      responses: {
+        200: 'The failure (`failure`), its library and version, up to 100 earlier ones at its point (`history`) and the decisions that apply to it, revoked ones left out (`decisions`).',
+        ...noFailure,
+      },
     },
     async (_req, res, { params: { id } }) => {
-      const [row] = await dataSource.query(`SELECT point_key, target_name FROM failures WHERE id = $1`, [id]);
+      const [row] = await dataSource.query(
+        `SELECT point_key, target_name, target_version, ${targetKeySql('target_name')} AS target_key FROM failures WHERE id = $1`,
+        [id],
+      );
       if (!row) throw new HttpError(404, { kind: 'not-found', message: 'No failure with that number.' });
       const { rows } = await searchFailures(dataSource, { sort: 'id', limit: 1 }, true, id);
       const history = await dataSource.query(
@@ -147,7 +149,8 @@ export function failuresRouter(dataSource: DataSource, options: { referenceCache
          FROM failures f JOIN runs r ON r.id = f.run_id WHERE f.point_key = $1 ORDER BY r.created_at DESC LIMIT 100`,
         [row.point_key],
       );
-      res.json({ failure: rows[0], history });
+      const decisions = await decisionsOn(dataSource, id);
+      res.json({ failure: rows[0], targetKey: row.target_key, targetVersion: row.target_version, history, decisions });
     },
   );
   return router;

@@ -7,10 +7,10 @@ import { targetKeySql } from '../sql/target-key-sql';
  */
 export async function writeRegressionGroups(tx: Pick<EntityManager, 'query'>, runId: string): Promise<void> {
   await tx.query(
-    `INSERT INTO regression_groups (run_id, target_key, suite_slug, path_name, diagnosis_kind, count)
-     SELECT run_id, ${targetKeySql('target_name')}, suite_slug, path_name, diagnosis_kind, count(*)::int
+    `INSERT INTO regression_groups (run_id, target_key, target_version, suite_slug, path_name, diagnosis_kind, count)
+     SELECT run_id, ${targetKeySql('target_name')}, target_version, suite_slug, path_name, diagnosis_kind, count(*)::int
        FROM failures WHERE run_id = $1 AND is_regression
-      GROUP BY run_id, 2, suite_slug, path_name, diagnosis_kind`,
+      GROUP BY run_id, 2, target_version, suite_slug, path_name, diagnosis_kind`,
     [runId],
   );
 }

@@ -22,6 +22,7 @@ const RUN_RELATIONS = { plan: true, requestedBy: true } as const;
  */
 const GROUP_MATCH = {
   targetKey: 'g.target_key',
+  targetVersion: 'g.target_version',
   suiteSlug: 'g.suite_slug',
   pathName: 'g.path_name',
   pointKey: null,
@@ -199,6 +200,7 @@ async function loadRegressions(
                                     count(*) FILTER (WHERE ${branchKindSql('f.diagnosis_kind')})::int AS b
                                FROM failures f
                                JOIN open_groups o ON o.run_id = f.run_id AND o.target_key = ${targetKeySql('f.target_name')}
+                                AND o.target_version = f.target_version
                                 AND o.suite_slug = f.suite_slug AND o.path_name = f.path_name
                                 AND o.diagnosis_kind IS NOT DISTINCT FROM f.diagnosis_kind
                               WHERE f.point_key IN (SELECT d.point_key FROM deviations d WHERE d.scope = 'point')

@@ -37,7 +37,7 @@ function caseOf(over: Partial<FailureView>): FailureDetailView {
     reproducer: 'new Complex(-1, 0).pow(13).log()',
     ...over,
   };
-  return { failure: f, history: [] };
+  return { failure: f, targetKey: 'complex.js', targetVersion: '2.4.3', history: [], decisions: [] };
 }
 
 function serve(detail: FailureDetailView) {

@@ -152,7 +152,7 @@ describe('runs and the failure table', () => {
       const query = { sort: 'id' as const, run: runId, ...q };
       const { rows, next } = await searchFailures(t.db.dataSource, query);
       expect(JSON.parse(await failurePageJson(t.db.dataSource, query))).toEqual(
-        JSON.parse(JSON.stringify({ failures: rows, next })),
+        JSON.parse(JSON.stringify({ failures: rows, next, decisions: {} })),
       );
     }
   });
@@ -175,7 +175,7 @@ describe('runs and the failure table', () => {
           [null, null],
         ]);
         const { rows, next } = await searchFailures(t.db.dataSource, query);
-        expect(page).toEqual(JSON.parse(JSON.stringify({ failures: rows, next })));
+        expect(page).toEqual(JSON.parse(JSON.stringify({ failures: rows, next, decisions: {} })));
       }
     } finally {
       await t.db.dataSource.query(`DELETE FROM failures WHERE id = ANY($1)`, [inserted.map((r) => r.id)]);
@@ -299,7 +299,7 @@ describe('verdicts on failures', () => {
     const past = await hanne
       .post(`/api/failures/${first.id}/classify`)
       .send({ classification: 'accepted', reason: 'old news', expiresAt: '2001-01-01T00:00:00Z' });
-    expect(past.body.issues).toEqual([{ field: 'body.expiresAt', rule: 'must lie in the future' }]);
+    expect(past.body.issues).toEqual([{ field: 'body.expiresAt', rule: 'must be a day after today (UTC)' }]);
   });
 
   it('records a bug verdict without an expiry', async () => {

@@ -32,7 +32,7 @@ describe('loadOverview over many regressions', () => {
     const [shard] = await ds.query(`SELECT id FROM shards WHERE run_id = $1 LIMIT 1`, [runId]);
     await ds.query(
       `INSERT INTO failures (run_id, shard_id, suite_slug, suite_version, target_name, target_library, target_version, convention, path_name, point_index, t, z, z_hex, point_key, outcome_kind, diagnosis_kind, rule, reproducer, is_regression)
-       SELECT $1, $2, 'many-' || (g % 3), 1, $3, 'complex.js', '1', 'signed-zero', 'path ' || (g % 5), g, 0,
+       SELECT $1, $2, 'many-' || (g % 3), 1, $3, 'complex.js', (ARRAY['1.0', '1.2'])[1 + g % 2], 'signed-zero', 'path ' || (g % 5), g, 0,
               '{"re":"-4","im":"-0"}', '{"re":"-0x1p+2","im":"-0x0p+0"}', 'many|' || g, 'fail',
               CASE WHEN g % 11 = 0 THEN NULL ELSE (ARRAY['other-sheet','cut-side','zero-sign','inaccurate'])[1 + g % 4] END, 'r', 'x', g % 4 <> 0
          FROM generate_series(1, $4) AS g`,
@@ -45,20 +45,30 @@ describe('loadOverview over many regressions', () => {
     await writeRegressionGroups(ds, runId);
     maintainer = await ds.getRepository(User).findOneByOrFail({ role: 'maintainer' });
     await ds.query(`INSERT INTO subscriptions (user_id, target_key) VALUES ($1, 'complex.js')`, [maintainer.id]);
-    // Deviations of every scope, some accepted and current, some expired, revoked or not accepted.
+    // Deviations of every scope and every versions rule (the failures ran on versions 1.0 and 1.2),
+    // some accepted and current, some expired, revoked or not accepted.
     const deviation = (
       classification: string,
       scope: string,
-      fields: { suite?: string; path?: string; point?: string; diagnosis?: string },
+      fields: {
+        suite?: string;
+        path?: string;
+        point?: string;
+        diagnosis?: string;
+        versions?: string;
+        version?: string;
+      },
       when = `now() + interval '1 day'`,
       revoked = 'NULL',
     ) =>
       ds.query(
-        `INSERT INTO deviations (classification, scope, target_key, suite_slug, path_name, point_key, diagnosis_kind, reason, expires_at, created_by, revoked_at)
-         VALUES ($1, $2, 'complex.js', $3, $4, $5, $6, 'test', ${when}, $7, ${revoked})`,
+        `INSERT INTO deviations (classification, scope, versions, target_key, target_version, suite_slug, path_name, point_key, diagnosis_kind, reason, expires_at, created_by, revoked_at)
+         VALUES ($1, $2, $3, 'complex.js', $4, $5, $6, $7, $8, 'test', ${when}, $9, ${revoked})`,
         [
           classification,
           scope,
+          fields.versions ?? 'every-version',
+          fields.version ?? null,
           fields.suite ?? 'many-0',
           fields.path ?? null,
           fields.point ?? null,
@@ -75,6 +85,26 @@ describe('loadOverview over many regressions', () => {
     await deviation('accepted', 'path', { suite: 'many-2', path: 'path 1' }, `now() - interval '1 day'`);
     await deviation('accepted', 'path', { suite: 'many-2', path: 'path 3' }, `now() + interval '1 day'`, 'now()');
     await deviation('bug', 'suite', { suite: 'many-2' });
+    await deviation('accepted', 'path', { suite: 'many-0', path: 'path 1', versions: 'this-version', version: '1.0' });
+    await deviation('accepted', 'path', {
+      suite: 'many-2',
+      path: 'path 4',
+      versions: 'this-and-later',
+      version: '1.1',
+    });
+    await deviation('accepted', 'diagnosis', {
+      suite: 'many-0',
+      diagnosis: 'zero-sign',
+      versions: 'this-and-later',
+      version: '1.2.1',
+    });
+    for (const g of [14, 15, 16, 17])
+      await deviation('accepted', 'point', {
+        suite: `many-${g % 3}`,
+        point: `many|${g}`,
+        versions: 'this-version',
+        version: '1.2',
+      });
     await ds.query('ANALYZE');
   });
   afterAll(() => t.stop());
