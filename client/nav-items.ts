@@ -17,6 +17,7 @@ export const NAV_ITEMS: NavItem[] = [
   { href: '/runs', label: 'Runs', glyph: '↻', roles: ROLES, primary: true },
   { href: '/failures', label: 'Failures', glyph: '≠', roles: ROLES, primary: true },
   { href: '/suites', label: 'Suites', glyph: '∫', roles: ROLES, primary: true },
+  { href: '/decisions', label: 'Decisions', glyph: '§', roles: ROLES, primary: false },
   { href: '/review', label: 'Review', glyph: '✓', roles: ['reviewer', 'admin'], primary: false },
   { href: '/libraries', label: 'Libraries', glyph: '∂', roles: ROLES, primary: false },
   { href: '/plans', label: 'Plans', glyph: '⇄', roles: ROLES, primary: false },

@@ -1,19 +1,16 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { DecisionView } from '../shared/decision-view';
 import type { ClassifyBody } from '../shared/schemas/classify-body';
 import { apiFetch } from './api-fetch';
+import { DECISIONS_KEY } from './use-decisions';
 import { FAILURES_KEY } from './use-failures';
 import { failureKey } from './use-failure';
 
 export interface ClassifyResult {
-  deviation: {
-    id: string;
-    classification: ClassifyBody['classification'];
-    scope: ClassifyBody['scope'];
-    expiresAt: string | null;
-  };
+  deviation: DecisionView;
 }
 
-/** Records a verdict on a failure; the table's new/known/accepted status changes with it, so those pages are refetched. */
+/** Records a verdict on a failure; the table's new/known/accepted status, its marks and the Decisions list change with it, so those are refetched. */
 export function useClassifyFailure(id: string) {
   const queryClient = useQueryClient();
   return useMutation({
@@ -23,6 +20,7 @@ export function useClassifyFailure(id: string) {
       Promise.all([
         queryClient.invalidateQueries({ queryKey: FAILURES_KEY }),
         queryClient.invalidateQueries({ queryKey: failureKey(id) }),
+        queryClient.invalidateQueries({ queryKey: DECISIONS_KEY }),
       ]),
   });
 }

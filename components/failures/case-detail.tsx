@@ -17,6 +17,7 @@ import { StepsTable } from './steps-table';
 import { DIAGNOSIS_STYLES } from './diagnosis-styles';
 import { FailureHistory } from './failure-history';
 import { QueryState } from '../ui/query-state';
+import { CaseDecisions } from '../decisions/case-decisions';
 import { ReproducerBox } from './reproducer-box';
 import { ValueBits } from './value-bits';
 
@@ -25,7 +26,7 @@ import { ValueBits } from './value-bits';
  * around it, the values with their exact bits and both one-sided limits, how far off an
  * inaccurate value is per part, both values of a disagreement, a composed subject's steps, a
  * convention choice, the rule that fixes the expected value, a
- * reproducer, the point's history, and a verdict for those who may give one.
+ * reproducer, the decisions that cover it, the point's history, and a verdict for those who may give one.
  */
 export function CaseDetail({ id }: { id: string }) {
   const detail = useFailure(id);
@@ -34,7 +35,7 @@ export function CaseDetail({ id }: { id: string }) {
   if (detail.isPending) return <QueryState state="loading" />;
   if (detail.isError)
     return <QueryState state="error" message={detail.error.message} onRetry={() => void detail.refetch()} />;
-  const { failure: f, history } = detail.data;
+  const { failure: f, history, decisions, targetKey, targetVersion } = detail.data;
   const { tone } = describeFailure(f);
   const labels = f.labels.length > 0 ? f.labels : f.diagnosis ? [f.diagnosis] : [];
   const inaccurate = labels.find((l) => l.kind === 'inaccurate');
@@ -95,12 +96,25 @@ export function CaseDetail({ id }: { id: string }) {
           </SkText>
         )}
       </Section>
+      <Section title="Decisions on this failure">
+        <CaseDecisions decisions={decisions} failureId={f.id} />
+      </Section>
       <Section title="History of this point">
         <FailureHistory history={history} currentId={f.id} />
       </Section>
       {mayClassify && role ? (
         <Section title={role === 'maintainer' ? 'Accept a deviation' : 'Verdict'}>
-          <ClassifyForm failureId={f.id} role={role} hasDiagnosis={f.diagnosis !== null} />
+          <ClassifyForm
+            failure={{
+              id: f.id,
+              targetKey,
+              targetVersion,
+              suiteSlug: f.suiteSlug,
+              pathName: f.pathName,
+              diagnosisKind: f.diagnosis?.kind ?? null,
+            }}
+            role={role}
+          />
         </Section>
       ) : null}
     </>

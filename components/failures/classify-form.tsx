@@ -3,20 +3,25 @@ import { StyleSheet, Text, TextInput, View } from 'react-native';
 import { ApiRequestError } from '../../client/api-request-error';
 import { useClassifyFailure } from '../../client/use-classify-failure';
 import { theme } from '../../constants/theme';
+import type { DecisionVersions } from '../../shared/decision-versions';
+import { describeDecisionScope } from '../../shared/describe-decision-scope';
 import type { Role } from '../../shared/roles';
 import { classifyBody, type ClassifyBody } from '../../shared/schemas/classify-body';
+import { CLASSIFICATION_WORDS } from '../decisions/classification-words';
 import { ActionButton } from '../ui/action-button';
 import { ChipGroup } from '../ui/chip-group';
 import { INPUT_BOX_STYLE } from '../ui/input-box-style';
 import { SkText } from '../ui/sk-text';
 import { TextField } from '../ui/text-field';
 
-type Field = 'classification' | 'scope' | 'reason' | 'expiresAt';
+type Field = 'classification' | 'scope' | 'versions' | 'reason' | 'expiresAt';
 
-const VERDICTS: { value: ClassifyBody['classification']; text: string; glyph: string }[] = [
-  { value: 'bug', text: 'bug', glyph: '❌' },
-  { value: 'convention-difference', text: 'convention difference', glyph: '⇄' },
-  { value: 'accepted', text: 'accepted deviation', glyph: '✓' },
+// No glyph on the accepted chip: the chip group marks the chosen chip with ✓, and a ✓ on an
+// unchosen "accepted" chip read as if it were chosen (issue 15).
+const VERDICTS: { value: ClassifyBody['classification']; text: string; glyph?: string }[] = [
+  { value: 'bug', text: CLASSIFICATION_WORDS.bug, glyph: '❌' },
+  { value: 'convention-difference', text: CLASSIFICATION_WORDS['convention-difference'], glyph: '⇄' },
+  { value: 'accepted', text: CLASSIFICATION_WORDS.accepted },
 ];
 const SCOPES: { value: ClassifyBody['scope']; text: string }[] = [
   { value: 'point', text: 'this point' },
@@ -24,41 +29,48 @@ const SCOPES: { value: ClassifyBody['scope']; text: string }[] = [
   { value: 'suite', text: 'this suite' },
   { value: 'diagnosis', text: 'this diagnosis in the suite' },
 ];
+const versionChips = (version: string): { value: DecisionVersions; text: string }[] => [
+  { value: 'this-version', text: `${version} only` },
+  { value: 'this-and-later', text: `${version} and later` },
+  { value: 'every-version', text: 'every version, earlier ones too' },
+];
 
 const FIELD_NAMES: Record<Field, string> = {
   classification: 'Verdict',
   scope: 'Covers',
+  versions: 'Versions',
   reason: 'Reason',
-  expiresAt: 'Expiry',
+  expiresAt: 'Expiry day',
 };
 
-/** A typed day becomes midnight UTC; anything else goes to the schema as typed, so its rule is shown. */
-const expiryOf = (text: string): string | undefined => {
-  const t = text.trim();
-  if (!t) return undefined;
-  return /^\d{4}-\d{2}-\d{2}$/.test(t) ? `${t}T00:00:00Z` : t;
-};
+/** The failure a verdict is given on: what its scope is made of. */
+interface ClassifiedFailure {
+  id: string;
+  targetKey: string;
+  targetVersion: string;
+  suiteSlug: string;
+  pathName: string;
+  diagnosisKind: string | null;
+}
 
 /**
- * A verdict on a failure, for the same target at any version: reviewers and admins call it a
- * bug, a convention difference or an accepted deviation; maintainers may only accept a
- * deviation (the server enforces the same). Checked with the server's schema before sending;
- * the server's rules come back beside the same fields, and nothing typed is lost on a refusal.
+ * A verdict on a failure: reviewers and admins call it a bug, a convention difference or an
+ * accepted deviation; maintainers may only accept a deviation (the server enforces the same).
+ * The form says in one sentence what the verdict will cover (which failures, which library, which
+ * of its versions) before it is saved, in the words the Decisions screen shows it with after.
+ * Checked with the server's schema before sending; the server's rules come back beside the same
+ * fields, and nothing typed is lost on a refusal.
  */
-export function ClassifyForm({
-  failureId,
-  role,
-  hasDiagnosis,
-}: {
-  failureId: string;
-  role: Role;
-  hasDiagnosis: boolean;
-}) {
+export function ClassifyForm({ failure, role }: { failure: ClassifiedFailure; role: Role }) {
+  const failureId = failure.id;
+  const hasDiagnosis = failure.diagnosisKind !== null;
   const maintainer = role === 'maintainer';
   const [classification, setClassification] = useState<ClassifyBody['classification'] | undefined>(
     maintainer ? 'accepted' : undefined,
   );
   const [scope, setScope] = useState<ClassifyBody['scope']>('point');
+  // The narrowest choice first: a wider one is a choice the reader makes with the sentence below in view.
+  const [versions, setVersions] = useState<DecisionVersions>('this-version');
   const [reason, setReason] = useState('');
   const [expires, setExpires] = useState('');
   const [errors, setErrors] = useState<Partial<Record<Field, string>>>({});
@@ -67,7 +79,13 @@ export function ClassifyForm({
 
   const submit = () => {
     setDone(null);
-    const parsed = classifyBody.safeParse({ classification, scope, reason, expiresAt: expiryOf(expires) });
+    const parsed = classifyBody.safeParse({
+      classification,
+      scope,
+      versions,
+      reason,
+      expiresAt: expires.trim() === '' ? undefined : expires,
+    });
     if (!parsed.success) {
       const found: Partial<Record<Field, string>> = {};
       for (const issue of parsed.error.issues) {
@@ -82,7 +100,7 @@ export function ClassifyForm({
       onSuccess: (res) => {
         const d = res.deviation;
         setDone(
-          `✓ Recorded: ${VERDICTS.find((v) => v.value === d.classification)?.text} for ${SCOPES.find((s) => s.value === d.scope)?.text}${d.expiresAt ? `, until ${d.expiresAt.slice(0, 10)}` : ''}.`,
+          `✓ Recorded: ${CLASSIFICATION_WORDS[d.classification]} covering ${describeDecisionScope(d)}${d.expiresAt ? `, until ${d.expiresAt.slice(0, 10)}` : ''}. It is listed on the Decisions screen.`,
         );
         setReason('');
         setExpires('');
@@ -137,6 +155,30 @@ export function ClassifyForm({
         />
         {fieldError('scope')}
       </View>
+      <View>
+        <ChipGroup
+          label={`Versions of ${failure.targetKey}`}
+          groupLabel="Versions"
+          value={versions}
+          onChange={(v) => setVersions(v)}
+          options={versionChips(failure.targetVersion)}
+        />
+        {fieldError('versions')}
+      </View>
+      <SkText variant="body" testID="decision-scope" accessibilityLiveRegion="polite">
+        Saving covers{' '}
+        {describeDecisionScope({
+          scope,
+          versions,
+          targetKey: failure.targetKey,
+          targetVersion: failure.targetVersion,
+          suiteSlug: failure.suiteSlug,
+          pathName: scope === 'path' ? failure.pathName : null,
+          diagnosisKind: scope === 'diagnosis' ? failure.diagnosisKind : null,
+          failureId,
+        })}
+        .
+      </SkText>
       <View style={styles.field}>
         <SkText variant="smallLabel" style={styles.label}>
           Reason
@@ -158,7 +200,9 @@ export function ClassifyForm({
       <View>
         <TextField
           label={
-            classification === 'accepted' ? 'Expires on (YYYY-MM-DD, required)' : 'Expires on (YYYY-MM-DD, optional)'
+            classification === 'accepted'
+              ? 'Expires on (a day like 2027-01-31, required)'
+              : 'Expires on (a day like 2027-01-31, optional)'
           }
           value={expires}
           onChangeText={(t) => {

@@ -4,6 +4,7 @@ import { failureQueryString } from '../../client/failure-query-string';
 import { useFailures } from '../../client/use-failures';
 import { useStoredChoice } from '../../client/use-stored-choice';
 import { theme } from '../../constants/theme';
+import type { DecisionMark } from '../../shared/decision-mark';
 import { ActionButton } from '../ui/action-button';
 import { ChipGroup } from '../ui/chip-group';
 import { SkText } from '../ui/sk-text';
@@ -37,6 +38,10 @@ export function FailureBrowser({
   const failures = useFailures(filters);
   const [columns, setColumns] = useStoredChoice<FailureColumnId>(COLUMNS_STORAGE_KEY, COLUMN_IDS, DEFAULT_COLUMNS);
   const rows = failures.data?.pages.flatMap((p) => p.failures) ?? [];
+  const decisions = Object.assign({}, ...(failures.data?.pages.map((p) => p.decisions) ?? [])) as Record<
+    string,
+    DecisionMark
+  >;
   const exportable = Boolean(filters.run || filters.suite || filters.target);
 
   return (
@@ -98,11 +103,11 @@ export function FailureBrowser({
             {failures.hasNextPage ? ', more to load' : ', all loaded'}
           </SkText>
           {wide ? (
-            <FailureTable failures={rows} columns={columns} />
+            <FailureTable failures={rows} columns={columns} decisions={decisions} />
           ) : (
             <View style={styles.cards}>
               {rows.map((f) => (
-                <FailureCard key={f.id} failure={f} />
+                <FailureCard key={f.id} failure={f} decision={decisions[f.id]} />
               ))}
             </View>
           )}

@@ -1,8 +1,10 @@
 import type { ReactNode } from 'react';
 import { COMPARISON_WORDS } from '../../shared/comparison-words';
-import { StyleSheet, Text } from 'react-native';
+import { StyleSheet, Text, View } from 'react-native';
 import { theme } from '../../constants/theme';
+import type { DecisionMark } from '../../shared/decision-mark';
 import type { FailureView } from '../../shared/failure-view';
+import { DecisionMarker } from '../decisions/decision-marker';
 import { SkText } from '../ui/sk-text';
 import { describeFailure } from './describe-failure';
 import { formatComplexText } from '../../shared/format-complex-text';
@@ -20,13 +22,17 @@ const plain = (text: string) => (
   </SkText>
 );
 
-/** The table's columns in order: title, relative width and how a cell reads. `id` and `diagnosis` cannot be hidden. */
+/**
+ * The table's columns in order: title, relative width and how a cell reads (from the row and the
+ * decision in force on it, if any). `id` and `diagnosis` cannot be hidden; the diagnosis cell
+ * carries the decision's mark, so it shows whichever columns are chosen.
+ */
 export const FAILURE_COLUMNS: {
   id: FailureColumnId;
   title: string;
   flex: number;
   fixed?: true;
-  cell: (f: FailureView) => ReactNode;
+  cell: (f: FailureView, decision: DecisionMark | undefined) => ReactNode;
 }[] = [
   {
     id: 'id',
@@ -52,11 +58,12 @@ export const FAILURE_COLUMNS: {
     title: 'Diagnosis',
     flex: 1.8,
     fixed: true,
-    cell: (f) => {
-      if (f.labels.length > 0) return <LabelChips labels={f.labels} />;
-      const { tone } = describeFailure(f);
-      return <DiagnosisLabel tone={tone} />;
-    },
+    cell: (f, decision) => (
+      <View style={styles.diagnosis}>
+        {f.labels.length > 0 ? <LabelChips labels={f.labels} /> : <DiagnosisLabel tone={describeFailure(f).tone} />}
+        {decision ? <DecisionMarker mark={decision} /> : null}
+      </View>
+    ),
   },
   { id: 'ulps', title: 'Ulps', flex: 0.9, cell: (f) => mono(formatUlps(f.ulps)) },
   {
@@ -70,4 +77,5 @@ export const FAILURE_COLUMNS: {
 const styles = StyleSheet.create({
   mono: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.ink },
   link: { textDecorationLine: 'underline' },
+  diagnosis: { gap: theme.space(1), alignItems: 'flex-start' },
 });

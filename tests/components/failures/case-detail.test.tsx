@@ -3,6 +3,7 @@ import { CaseDetail } from '../../../components/failures/case-detail';
 import type { Diagnosis } from '../../../shared/diagnosis';
 import type { FailureDetailView } from '../../../shared/failure-detail-view';
 import type { FailureView } from '../../../shared/failure-view';
+import { decisionViews } from '../../setup/decision-views';
 import { failureRows } from '../../setup/failure-rows';
 import { mockFetchRoutes } from '../../setup/mock-fetch-routes';
 import { renderWithClient } from '../../setup/render-with-client';
@@ -29,7 +30,7 @@ const disagreement: Diagnosis = {
   otherMatchesReference: false,
 };
 
-function caseOf(over: Partial<FailureView>): FailureDetailView {
+function caseOf(over: Partial<FailureView>, decisions: FailureDetailView['decisions'] = []): FailureDetailView {
   const f: FailureView = {
     ...failureRows(1)[0]!,
     id: '5',
@@ -37,7 +38,7 @@ function caseOf(over: Partial<FailureView>): FailureDetailView {
     reproducer: 'new Complex(-1, 0).pow(13).log()',
     ...over,
   };
-  return { failure: f, targetKey: 'complex.js', targetVersion: '2.4.3', history: [], decisions: [] };
+  return { failure: f, targetKey: 'complex.js', targetVersion: '2.4.3', history: [], decisions };
 }
 
 function serve(detail: FailureDetailView) {
@@ -114,5 +115,25 @@ describe.each([
     expect(screen.getByTestId('choice').textContent).toBe('acsc(0) is taken as asin(1/z) with 1/(+0) = +∞');
     expect(screen.getByText(/making a different choice, not an error in its arithmetic/)).toBeTruthy();
     expect(screen.queryByText('How far off')).toBeNull();
+  });
+
+  it('shows the decisions that cover the failure, by whom and until when, each linked on the Decisions screen', async () => {
+    const [inForce, , expired] = decisionViews();
+    serve(caseOf({}, [inForce!, expired!]));
+    renderWithClient(<CaseDetail id="5" />);
+    await screen.findByText('Decisions on this failure');
+    const shown = screen.getByTestId(`decision-${inForce!.id}`);
+    expect(within(shown).getByText(/in force until 2099-01-31/)).toBeTruthy();
+    expect(within(shown).getByText(/^Decided by Hanne Lindqvist on/)).toBeTruthy();
+    expect(within(screen.getByTestId(`decision-${expired!.id}`)).getByText(/expired on 2026-11-30/)).toBeTruthy();
+    expect(
+      screen.getAllByRole('link', { name: /decision on the Decisions screen$/ }).map((l) => l.getAttribute('href')),
+    ).toEqual([`/decisions?id=${inForce!.id}`, `/decisions?id=${expired!.id}`]);
+  });
+
+  it('says so when no decision covers the failure', async () => {
+    serve(caseOf({}));
+    renderWithClient(<CaseDetail id="5" />);
+    expect(await screen.findByText(/^No decision covers this failure/)).toBeTruthy();
   });
 });

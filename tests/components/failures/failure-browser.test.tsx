@@ -160,4 +160,25 @@ describe('FailureBrowser', () => {
     await screen.findByText('× The database is away.');
     expect(screen.getByRole('button', { name: 'Try again' })).toBeTruthy();
   });
+
+  it.each([
+    ['phone', 390],
+    ['wide screen', 1440],
+  ])('marks a row that a decision in force covers, on a %s', async (_name, width) => {
+    setScreenWidth(width);
+    mockFetchRoutes(() => ({
+      body: {
+        failures: failureRows(2, 1),
+        next: null,
+        decisions: { 1: { id: 'd1', classification: 'accepted', expiresAt: '2099-01-31T00:00:00.000Z' } },
+      },
+    }));
+    renderWithClient(<FailureBrowser filters={{}} onChange={jest.fn()} />);
+    const marked = await screen.findByLabelText('A decision covers this failure: accepted deviation until 2099-01-31');
+    expect(marked.textContent).toBe('Decided: accepted deviation until 2099-01-31');
+    expect(screen.getAllByLabelText(/^A decision covers this failure/)).toHaveLength(1);
+    expect(
+      screen.getByRole('link', { name: /^Failure 1: .*; decided: accepted deviation until 2099-01-31$/ }),
+    ).toBeTruthy();
+  });
 });
