@@ -9,6 +9,7 @@ import { PlanService } from '../plans/plan-service';
 import { RunService } from '../runs/run-service';
 import { ShardExecutor } from '../runs/shard-executor';
 import type { ShardQueue } from '../runs/shard-queue';
+import { seedDemoDecisions } from './seed-demo-decisions';
 
 /** The release the demo team's nightly plan followed before it moved to the two newest ones (invented story). */
 const EARLIER_RELEASE = 'complex.js@2.3.0';
@@ -19,7 +20,8 @@ const PLAN = 'complex.js nightly';
  * a living product: first the plan as it was (complex.js 2.3.0), then as it is (the two newest
  * releases). complex.js 2.4.1 changed zero signs that 2.3.0 had right (exp(3 − 0i), log(1 − 0i),
  * seen with `sheetkeeper matrix`), so the second run has regressions, a version change and a
- * regression mail in the outbox. Shards run here one after another, not through the queue.
+ * regression mail in the outbox, and two decisions on their failures (seed-demo-decisions.ts).
+ * Shards run here one after another, not through the queue.
  * Does nothing when the plan already has a run. Returns the number of runs added.
  */
 export async function seedDemoRuns(
@@ -68,5 +70,6 @@ export async function seedDemoRuns(
     }
   }
   await runOnce();
+  await seedDemoDecisions(dataSource);
   return added + 1;
 }

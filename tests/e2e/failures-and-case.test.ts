@@ -78,11 +78,13 @@ describe('the failure table and a case', () => {
     expect(await b.page.getByRole('radio', { name: 'Verdict: bug' }).count()).toBe(0);
     await b.page.getByRole('button', { name: 'Accept deviation' }).click();
     await b.page.getByText('× Reason must say why (at least 3 characters)').waitFor();
-    await b.page.getByText('× Expiry is required for an accepted deviation').waitFor();
+    await b.page.getByText('× Expiry day is required for an accepted deviation').waitFor();
     await b.page.getByLabel('Reason').fill('complex.js documents that it does not keep the sign of zero.');
     await b.page.getByLabel(/Expires on/).fill('2099-06-30');
     await b.page.getByRole('button', { name: 'Accept deviation' }).click();
-    await b.page.getByText(/✓ Recorded: accepted deviation for this point, until 2099-06-30/).waitFor();
+    await b.page
+      .getByText(/✓ Recorded: accepted deviation covering the point of failure #\d+ .* only, until 2099-06-30/)
+      .waitFor();
     const accepted = await api<{ failures: { id: string }[] }>(`/failures?status=accepted&run=${f.runId}&limit=500`);
     expect(accepted.failures.map((a) => a.id)).toContain(f.id);
   });

@@ -42,6 +42,21 @@ describe('seedDemoRuns', () => {
       `SELECT array_agg(target_name ORDER BY target_name) AS targets FROM plan_targets pt JOIN plans p ON p.id = pt.plan_id WHERE p.name = 'complex.js nightly'`,
     );
     expect(plan.targets).not.toContain('complex.js@2.3.0');
+    // The Decisions screen's story: a bug verdict in force on the newest release, and an
+    // accepted deviation on the earlier one that has expired; neither changes the regressions.
+    const decisions = await db.dataSource.query(
+      `SELECT classification, versions, target_version AS version, expires_at < now() AS expired FROM deviations ORDER BY created_at DESC`,
+    );
+    expect(decisions).toEqual([
+      {
+        classification: 'bug',
+        versions: 'this-and-later',
+        version: expect.not.stringMatching(/^2\.3\.0$/),
+        expired: null,
+      },
+      { classification: 'accepted', versions: 'this-version', version: '2.3.0', expired: true },
+    ]);
     expect(await seedDemoRuns(db.dataSource, options)).toBe(0);
+    expect(await db.dataSource.query(`SELECT count(*)::int AS n FROM deviations`)).toEqual([{ n: 2 }]);
   }, 180_000);
 });
