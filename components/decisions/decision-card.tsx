@@ -58,7 +58,7 @@ export function DecisionCard({
           </Link>
         ) : null}
       </View>
-      {onRevoke && d.state !== 'revoked' ? (
+      {onRevoke && inForce ? (
         <View style={styles.action}>
           <ConfirmAction
             label="Revoke"

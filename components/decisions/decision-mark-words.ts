@@ -1,8 +1,11 @@
 import type { DecisionMark } from '../../shared/decision-mark';
-import { CLASSIFICATION_WORDS } from './classification-words';
 
-/** A row's decision in force in a few words: "accepted deviation until 2027-01-31", "bug (decided)". */
+/**
+ * A row's decision in force in a few words, short enough for the table's diagnosis column:
+ * "accepted until 2027-01-31", "called a bug", "convention difference".
+ */
 export function decisionMarkWords(mark: DecisionMark): string {
-  const words = CLASSIFICATION_WORDS[mark.classification];
-  return mark.expiresAt ? `${words} until ${mark.expiresAt.slice(0, 10)}` : `${words} (decided)`;
+  if (mark.classification === 'accepted')
+    return mark.expiresAt ? `accepted until ${mark.expiresAt.slice(0, 10)}` : 'accepted';
+  return mark.classification === 'bug' ? 'called a bug' : 'convention difference';
 }

@@ -8,7 +8,7 @@ export function DecisionMarker({ mark }: { mark: DecisionMark }) {
   const words = decisionMarkWords(mark);
   return (
     <TagPill
-      text={`Decided: ${words}`}
+      text={words}
       ink={theme.color.inkSoft}
       soft={theme.color.panel}
       edge={theme.color.rule}

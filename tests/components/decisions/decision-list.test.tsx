@@ -65,6 +65,8 @@ describe('DecisionList', () => {
       'Library: complex.js',
       'Library: mathjs/number',
     ]);
+    // An expired decision no longer applies, so there is nothing to revoke.
+    expect(within(screen.getByTestId(`decision-${expired!.id}`)).queryByRole('button', { name: /^Revoke/ })).toBeNull();
     fireEvent.click(screen.getByRole('radio', { name: 'Library: mathjs/number' }));
     expect(onChange).toHaveBeenLastCalledWith({ library: 'mathjs/number', suite: undefined });
     fireEvent.click(screen.getByRole('radio', { name: 'Suite: acos-principal' }));
