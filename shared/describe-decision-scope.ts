@@ -1,18 +1,10 @@
-import type { DecisionVersions } from './decision-versions';
-import type { ClassifyBody } from './schemas/classify-body';
+import type { DecisionView } from './decision-view';
 
 /** What a decision's scope is made of: the form knows it before saving, a stored decision carries it. */
-export interface DecisionScope {
-  scope: ClassifyBody['scope'];
-  versions: DecisionVersions;
-  targetKey: string;
-  targetVersion: string | null;
-  suiteSlug: string;
-  pathName: string | null;
-  diagnosisKind: string | null;
-  /** The failure the decision was given on; names the point of a point-scoped decision. */
-  failureId: string | null;
-}
+export type DecisionScope = Pick<
+  DecisionView,
+  'scope' | 'versions' | 'targetKey' | 'targetVersion' | 'suiteSlug' | 'pathName' | 'diagnosisKind' | 'failureId'
+>;
 
 /** Which failures of the suite, in words. */
 function which(d: DecisionScope): string {

@@ -1,6 +1,6 @@
 import { Link } from 'expo-router';
 import { useState } from 'react';
-import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { Pressable, StyleSheet, View } from 'react-native';
 import { refusalMessage } from '../../client/refusal-message';
 import { useDecisions } from '../../client/use-decisions';
 import { useMe } from '../../client/use-me';
@@ -8,6 +8,7 @@ import { useRevokeDecision } from '../../client/use-revoke-decision';
 import { theme } from '../../constants/theme';
 import type { DecisionListQuery } from '../../shared/schemas/decision-list-query';
 import { ChipGroup } from '../ui/chip-group';
+import { DoneNote } from '../ui/done-note';
 import { FailureAlert } from '../ui/failure-alert';
 import { QueryState } from '../ui/query-state';
 import { SkText } from '../ui/sk-text';
@@ -77,9 +78,7 @@ export function DecisionList({
         </View>
       )}
       {revoked ? (
-        <Text style={styles.done} accessibilityLiveRegion="polite">
-          ✓ Revoked: {revoked} no longer applies. It stays listed below as revoked.
-        </Text>
+        <DoneNote text={`✓ Revoked: ${revoked} no longer applies. It stays listed below as revoked.`} />
       ) : null}
       {failure ? <FailureAlert message={failure} /> : null}
       {shown.data.length === 0 ? (
@@ -121,11 +120,4 @@ const styles = StyleSheet.create({
   root: { gap: theme.space(4) },
   filters: { gap: theme.space(3) },
   back: { minHeight: 44, justifyContent: 'center', alignSelf: 'flex-start' },
-  done: {
-    fontFamily: theme.font.medium,
-    color: theme.color.accent,
-    backgroundColor: theme.color.accentSoft,
-    padding: theme.space(3),
-    borderRadius: theme.radius,
-  },
 });

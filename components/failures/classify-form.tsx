@@ -10,6 +10,7 @@ import { classifyBody, type ClassifyBody } from '../../shared/schemas/classify-b
 import { CLASSIFICATION_WORDS } from '../decisions/classification-words';
 import { ActionButton } from '../ui/action-button';
 import { ChipGroup } from '../ui/chip-group';
+import { DoneNote } from '../ui/done-note';
 import { INPUT_BOX_STYLE } from '../ui/input-box-style';
 import { SkText } from '../ui/sk-text';
 import { TextField } from '../ui/text-field';
@@ -218,11 +219,7 @@ export function ClassifyForm({ failure, role }: { failure: ClassifiedFailure; ro
           × {formError}
         </Text>
       ) : null}
-      {done ? (
-        <Text style={styles.done} accessibilityLiveRegion="polite">
-          {done}
-        </Text>
-      ) : null}
+      {done ? <DoneNote text={done} /> : null}
       <ActionButton
         label={classification === 'accepted' ? 'Accept deviation' : 'Record verdict'}
         busy={classify.isPending}
@@ -244,13 +241,6 @@ const styles = StyleSheet.create({
     fontFamily: theme.font.medium,
     color: theme.color.danger,
     backgroundColor: theme.color.dangerSoft,
-    padding: theme.space(3),
-    borderRadius: theme.radius,
-  },
-  done: {
-    fontFamily: theme.font.medium,
-    color: theme.color.accent,
-    backgroundColor: theme.color.accentSoft,
     padding: theme.space(3),
     borderRadius: theme.radius,
   },
