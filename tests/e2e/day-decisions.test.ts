@@ -2,6 +2,7 @@ import { DEMO_USERS } from '../../server/seed/demo-users';
 import { BASE_URL } from './support/open-browser';
 import { browserPerTest } from './support/browser-per-test';
 import { goTo } from './support/go-to';
+import { pageApi } from './support/page-api';
 import { saveScreenshots } from './support/save-screenshots';
 import { signIn } from './support/sign-in';
 
@@ -10,9 +11,8 @@ const b = browserPerTest();
 const hanne = DEMO_USERS.find((u) => u.email === 'hanne@sheetkeeper.test')!;
 const kwame = DEMO_USERS.find((u) => u.email === 'kwame@sheetkeeper.test')!;
 
-/** The API as the signed-in page sees it (plain promise chains: the page has no babel helpers). */
-const api = <T>(path: string): Promise<T> =>
-  b.page.evaluate((p) => fetch('/api' + p).then((res) => res.json()), path) as Promise<T>;
+/** A GET of the API as the signed-in page sees it: the answer's body. */
+const api = async <T>(path: string): Promise<T> => (await pageApi(b.page)<{ body: T }>(path)).body;
 
 /** The expiry the reviewer gives: far enough ahead that the run of this file never sees it pass. */
 const EXPIRY = '2099-01-31';
