@@ -1,4 +1,10 @@
 import type { DecisionView } from './decision-view';
+import type { DiagnosisKind } from './diagnosis';
+import { DIAGNOSIS_KIND_NAMES } from './diagnosis-kind-names';
+
+/** A stored diagnosis kind in the words the chips use; a kind this version does not know, as stored. */
+const kindName = (kind: string | null): string =>
+  kind === null ? '?' : (DIAGNOSIS_KIND_NAMES[kind as DiagnosisKind]?.name ?? kind);
 
 /** What a decision's scope is made of: the form knows it before saving, a stored decision carries it. */
 export type DecisionScope = Pick<
@@ -14,7 +20,7 @@ function which(d: DecisionScope): string {
     case 'path':
       return `every failure on path “${d.pathName ?? '?'}” of suite ${d.suiteSlug}`;
     case 'diagnosis':
-      return `every failure labelled ${d.diagnosisKind ?? '?'} in suite ${d.suiteSlug}`;
+      return `every failure diagnosed “${kindName(d.diagnosisKind)}” in suite ${d.suiteSlug}`;
     case 'suite':
       return `every failure in suite ${d.suiteSlug}`;
   }

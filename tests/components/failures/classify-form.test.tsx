@@ -143,18 +143,18 @@ describe('ClassifyForm', () => {
     fireEvent.click(screen.getByRole('radio', { name: 'Covers: this diagnosis in the suite' }));
     fireEvent.click(screen.getByRole('radio', { name: 'Versions of complex.js: 2.4.3 and later' }));
     expect(said()).toBe(
-      'Saving covers every failure labelled zero-sign in suite sqrt-principal on complex.js 2.4.3 and every later version.',
+      'Saving covers every failure diagnosed “ignored zero sign” in suite sqrt-principal on complex.js 2.4.3 and every later version.',
     );
     fireEvent.click(screen.getByRole('radio', { name: 'Versions of complex.js: every version, earlier ones too' }));
     expect(said()).toBe(
-      'Saving covers every failure labelled zero-sign in suite sqrt-principal on every version of complex.js, earlier ones and runs already stored included.',
+      'Saving covers every failure diagnosed “ignored zero sign” in suite sqrt-principal on every version of complex.js, earlier ones and runs already stored included.',
     );
     fireEvent.click(screen.getByRole('radio', { name: 'Verdict: bug' }));
     type('Reason', 'reported upstream');
     await press('Record verdict');
     expect(JSON.parse(String(calls[0]!.init.body))).toMatchObject({ scope: 'diagnosis', versions: 'every-version' });
     await screen.findByText(
-      '✓ Recorded: bug covering every failure labelled zero-sign in suite sqrt-principal on every version of complex.js, earlier ones and runs already stored included. It is listed on the Decisions screen.',
+      '✓ Recorded: bug covering every failure diagnosed “ignored zero sign” in suite sqrt-principal on every version of complex.js, earlier ones and runs already stored included. It is listed on the Decisions screen.',
     );
   });
 
