@@ -1,5 +1,6 @@
 import type { DiagnosisKind } from './diagnosis';
 import type { CheckedScope, ClassCounts, OutcomeCounts } from './run-result';
+import type { SkipReason } from './skip-reason';
 
 /**
  * One suite × target cell of a run's matrix (`GET /api/runs/:id/matrix`). `counts`, `byClass`, `byDiagnosis`
@@ -21,4 +22,6 @@ export interface RunMatrixCell {
   noWorkerHasTarget: boolean;
   /** Shard-level errors: a target that hung or crashed, a suite that could not be evaluated. */
   errors: string[];
+  /** Why points were skipped, summed over the pair's paths, most points first (empty until done). */
+  skipReasons: SkipReason[];
 }

@@ -3,6 +3,7 @@ import type { DiagnosisKind } from './diagnosis';
 import type { DiagnosisClass } from './diagnosis-class';
 import type { PointOutcome } from './point-outcome';
 import type { PropertyOutcome } from './property-outcome';
+import type { SkipReason } from './skip-reason';
 import type { SuitePath } from './schemas/suite-path-schema';
 import type { WireComplex } from './wire-complex';
 
@@ -114,7 +115,7 @@ export interface PathResult {
   /** Failing points beyond the detail limit: counted above, not listed. */
   findingsOmitted: number;
   /** Why points were skipped (no such operation, no reference value there), with how many each. */
-  skipped: { reason: string; count: number }[];
+  skipped: SkipReason[];
   /** The entry this path's inputs went in through (shared/target-entry.ts), when it names its own. */
   entry?: string;
   /** Why points were not applicable to the entry (counts.notApplicable), with how many each. */

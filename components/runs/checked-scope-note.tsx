@@ -10,10 +10,10 @@ const CONVENTION_WORDS: Record<string, string> = {
 };
 
 export interface CheckedScopeNoteProps {
-  /** What each finished suite × target pair covered (from the matrix, a result, a suite). */
+  /** What each finished check (one suite against one library version) covered (from the matrix, a result, a suite). */
   scopes: CheckedScope[];
-  /** Pairs of the run that checked nothing: still queued or running, cancelled, or stopped by an error. */
-  pairsNotChecked?: number;
+  /** Checks of the run that checked nothing: still waiting or running, cancelled, or stopped by an error. */
+  checksNotChecked?: number;
   /** Property checks of the run, when known. */
   properties?: { held: number; failed: number; notChecked: number };
   /** What the note is about: "matrix", "table", "result". */
@@ -30,7 +30,7 @@ const plural = (x: number, word: string) => `${n(x)} ${word}${x === 1 ? '' : 's'
  */
 export function CheckedScopeNote({
   scopes,
-  pairsNotChecked = 0,
+  checksNotChecked = 0,
   properties,
   subject = 'matrix',
 }: CheckedScopeNoteProps) {
@@ -39,9 +39,9 @@ export function CheckedScopeNote({
   const principal = scopes.filter((s) => /^principal/i.test(s.branch)).length;
   const regular = scopes.length - principal;
   const branches = [
-    principal ? `principal branches (${plural(principal, 'pair')})` : null,
+    principal ? `principal branches (${plural(principal, 'check')})` : null,
     regular
-      ? `regular branches fixed by a value at a point and continued along the paths (${plural(regular, 'pair')})`
+      ? `regular branches fixed by a value at a point and continued along the paths (${plural(regular, 'check')})`
       : null,
   ].filter((b): b is string => b !== null);
   const tolerances = [...new Set(scopes.map((s) => s.tolerance))];
@@ -52,8 +52,8 @@ export function CheckedScopeNote({
 
   const checked = [
     scopes.length === 0
-      ? 'No suite × target pair has finished, so nothing has been checked yet.'
-      : `${plural(scopes.length, 'suite × target pair')}, ${plural(paths, 'path')}, ${plural(points, 'point')} in all.`,
+      ? 'No check of a suite against a library version has finished, so nothing has been checked yet.'
+      : `${plural(scopes.length, 'check')} of a suite against a library version, ${plural(paths, 'path')}, ${plural(points, 'point')} in all.`,
     conventions.length ? `Conventions: ${conventions.map((c) => CONVENTION_WORDS[c] ?? c).join('; ')}.` : null,
     branches.length ? `Branches: ${branches.join('; ')}.` : null,
     tolerances.length ? `Tolerances: ${tolerances.join('; ')}.` : null,
@@ -64,10 +64,10 @@ export function CheckedScopeNote({
 
   const notChecked = [
     'Any point off these paths, and any other convention, tolerance, library version or entry point.',
-    pairsNotChecked > 0
-      ? `${plural(pairsNotChecked, 'pair')} of this run checked nothing (not finished, cancelled, or stopped by an error).`
+    checksNotChecked > 0
+      ? `${plural(checksNotChecked, 'check')} of this run checked nothing (not finished, cancelled, or stopped by an error).`
       : null,
-    listedNotRun > 0 ? `${plural(listedNotRun, 'pair')} listed property laws that were not run.` : null,
+    listedNotRun > 0 ? `${plural(listedNotRun, 'check')} listed property laws that were not run.` : null,
     'A property that held is evidence at the points drawn, not a proof.',
   ].filter((line): line is string => line !== null);
 

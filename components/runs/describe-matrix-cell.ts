@@ -4,6 +4,8 @@ import { DIAGNOSIS_CLASSES } from '../../shared/diagnosis-classes';
 import { DIAGNOSIS_KIND_NAMES } from '../../shared/diagnosis-kind-names';
 import { DIAGNOSIS_KINDS } from '../../shared/diagnosis-kinds';
 import type { RunMatrixCell } from '../../shared/run-matrix-cell';
+import { targetPageHref } from '../libraries/target-page-href';
+import { failuresHref } from './failures-href';
 import { OUTCOME_GLYPH } from './outcome-glyph';
 import type { Tone } from './outcome-tone';
 import { waitingForWorkerWords } from './waiting-for-worker-words';
@@ -16,8 +18,20 @@ export interface MatrixCellWords {
   details: string[];
   /** Everything above as one sentence for a screen reader. */
   label: string;
-  /** Whether the failure table has rows for this cell (fails, errors or skips). */
-  hasRows: boolean;
+  /**
+   * Where the cell leads: the failure table filtered to the pair when it has rows there (failing
+   * or errored points; skipped points are counted, never stored as rows), else the page that
+   * explains why nothing was checked (the target's functions, when it lacks one); null otherwise.
+   */
+  link: CellLink | null;
+}
+
+export interface CellLink {
+  href: string;
+  /** What the cell shows: "failures →". */
+  words: string;
+  /** What a screen reader hears after the cell's label. */
+  said: string;
 }
 
 const n = (x: number) => x.toLocaleString('en-GB');
@@ -27,7 +41,7 @@ const n = (x: number) => x.toLocaleString('en-GB');
  * the failures by class (branch first) and by diagnosis (branch labels first, then the largest),
  * points not applicable to the target's entry, and for an error whether anything was checked at all.
  */
-export function describeMatrixCell(cell: RunMatrixCell): MatrixCellWords {
+export function describeMatrixCell(cell: RunMatrixCell, runId: string): MatrixCellWords {
   const pair = `${cell.suite} on ${cell.target}`;
   if (cell.status === 'queued' && cell.noWorkerHasTarget) {
     const why = waitingForWorkerWords([cell.target]);
@@ -36,31 +50,37 @@ export function describeMatrixCell(cell: RunMatrixCell): MatrixCellWords {
       headline: '… waiting for a worker',
       details: [why],
       label: `${pair}: ${why}`,
-      hasRows: false,
+      link: null,
     };
   }
   if (cell.status === 'queued' || cell.status === 'running') {
-    const word = cell.status === 'queued' ? 'queued' : 'running';
+    const word = cell.status === 'queued' ? 'waiting its turn' : 'running now';
     // A queued pair that has a worker was taken before by one that died: it is queued again.
-    const who = cell.worker ? [cell.status === 'queued' ? `last taken by ${cell.worker}` : `on ${cell.worker}`] : [];
+    const who = cell.worker
+      ? [cell.status === 'queued' ? `started before on ${cell.worker}, which stopped` : `on ${cell.worker}`]
+      : [];
     return {
       tone: 'live',
       headline: `${cell.status === 'queued' ? '…' : '↻'} ${word}`,
       details: who,
       label: [`${pair}: ${word}`, ...who].join(', '),
-      hasRows: false,
+      link: null,
     };
   }
   const counts = cell.counts ?? { pass: 0, fail: 0, error: 0, skipped: 0, notApplicable: 0 };
   const judged = counts.pass + counts.fail;
-  const hasRows = counts.fail + counts.error + counts.skipped > 0;
+  const hasRows = counts.fail + counts.error > 0;
+  const reasons = cell.skipReasons;
+  // The harness's generic note ("nothing was checked: every point was skipped …") says less than the reasons.
+  const genericNote = (e: string) => e.toLowerCase().startsWith('nothing was checked');
+  const errors = reasons.length > 0 ? cell.errors.filter((e) => !genericNote(e)) : cell.errors;
   if (cell.status === 'cancelled' && !cell.counts) {
     return {
       tone: 'neutral',
       headline: '× cancelled',
       details: ['nothing was checked'],
       label: `${pair}: cancelled before it ran, nothing was checked`,
-      hasRows: false,
+      link: null,
     };
   }
   // Branch labels first, then by count: 40 inaccurate points must not push 2 zero-sign ones out of sight.
@@ -81,8 +101,7 @@ export function describeMatrixCell(cell: RunMatrixCell): MatrixCellWords {
         : `${OUTCOME_GLYPH.error} error`;
     said.push(counts.error > 0 ? `${n(counts.error)} points in error` : 'error');
     if (judged === 0) {
-      // The shard's own error may say it already ("nothing was checked: every point was skipped …").
-      if (!cell.errors[0]?.toLowerCase().startsWith('nothing was checked')) details.push('nothing was checked');
+      if (!errors[0] || !genericNote(errors[0])) details.push('nothing was checked');
       said.push('nothing was checked');
     } else {
       details.push(
@@ -124,7 +143,13 @@ export function describeMatrixCell(cell: RunMatrixCell): MatrixCellWords {
       said.push('cancelled part way');
     }
   }
-  if (counts.skipped > 0) {
+  if (reasons.length > 0) {
+    // Why, not only how many: "complex.js@2.4.3 has no acsch: 40 skipped".
+    for (const r of reasons) {
+      details.push(`${OUTCOME_GLYPH.skipped} ${n(r.count)} skipped: ${r.reason}`);
+      said.push(`${n(r.count)} skipped because ${r.reason}`);
+    }
+  } else if (counts.skipped > 0) {
     details.push(`${OUTCOME_GLYPH.skipped} ${n(counts.skipped)} skipped`);
     said.push(`${n(counts.skipped)} skipped`);
   }
@@ -132,17 +157,27 @@ export function describeMatrixCell(cell: RunMatrixCell): MatrixCellWords {
     details.push(`${OUTCOME_GLYPH.notApplicable} ${n(counts.notApplicable)} not applicable`);
     said.push(`${n(counts.notApplicable)} not applicable to the entry`);
   }
-  const firstError = cell.errors[0];
+  const firstError = errors[0];
   if (firstError) details.push(firstError);
   if (cell.worker) {
     details.push(`ran on ${cell.worker}`);
     said.push(`ran on ${cell.worker}`);
   }
+  const lacks = [...new Set(reasons.flatMap((r) => r.lacks ?? []))];
+  const link: CellLink | null = hasRows
+    ? { href: failuresHref(runId, cell.suite, cell.target), words: 'failures →', said: 'Open these failures' }
+    : lacks.length > 0
+      ? {
+          href: targetPageHref(cell.target),
+          words: `what ${cell.target} has →`,
+          said: `Open the functions ${cell.target} has (it has no ${lacks.join(', ')})`,
+        }
+      : null;
   return {
     tone,
     headline,
     details,
     label: `${pair}: ${said.join(', ')}${firstError ? `. ${firstError}` : ''}`,
-    hasRows,
+    link,
   };
 }

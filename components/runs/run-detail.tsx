@@ -16,8 +16,11 @@ import { LiveWorkersNote } from './live-workers-note';
 import { RunHeader } from './run-header';
 import { RunMatrix } from './run-matrix';
 import { ScreenBody } from '../ui/screen-body';
+import { shortRunId } from '../../shared/short-run-id';
+import { describeMatrixCell } from './describe-matrix-cell';
+import { tallyCells } from './tally-cells';
 
-/** One run: its header and progress, what it checked, its suite × target matrix and its property checks; live while it runs. */
+/** One run: its header and progress, what it checked, its matrix (each suite against each library version) and its property checks; live while it runs. */
 export function RunDetail({ id, openedExisting = false }: { id: string; openedExisting?: boolean }) {
   const run = useRun(id);
   const { data: me } = useMe();
@@ -47,6 +50,7 @@ export function RunDetail({ id, openedExisting = false }: { id: string; openedEx
   }
 
   const cells = matrix.data ?? [];
+  const checks = matrix.data ? tallyCells(cells.map((c) => describeMatrixCell(c, id))) : undefined;
   const scopes = cells.map((c) => c.checked).filter((s): s is CheckedScope => s !== null && s.points > 0);
   const notChecked = cells.length - scopes.length;
   const outcomes = properties.data?.map((p) => p.outcome.kind) ?? [];
@@ -61,7 +65,7 @@ export function RunDetail({ id, openedExisting = false }: { id: string; openedEx
   return (
     <ScreenBody
       title={run.data.planName}
-      lead={`Run ${id.slice(0, 8)} of this plan: each suite × target pair is one shard.`}
+      lead={`Run ${shortRunId(id)} of this plan: ${run.data.shardsTotal} check${run.data.shardsTotal === 1 ? '' : 's'}, each suite against each library version.`}
     >
       <BackLink />
       {openedExisting ? (
@@ -69,21 +73,21 @@ export function RunDetail({ id, openedExisting = false }: { id: string; openedEx
           This plan already had a run in progress, so Run now opened it instead of starting a second one.
         </SkText>
       ) : null}
-      <RunHeader run={run.data} canCancel={me?.role === 'maintainer' || me?.role === 'admin'} />
+      <RunHeader run={run.data} canCancel={me?.role === 'maintainer' || me?.role === 'admin'} checks={checks} />
       {live ? <LiveWorkersNote /> : null}
       {matrix.data ? (
-        <CheckedScopeNote scopes={scopes} pairsNotChecked={notChecked} properties={propertySummary} subject="matrix" />
+        <CheckedScopeNote scopes={scopes} checksNotChecked={notChecked} properties={propertySummary} subject="matrix" />
       ) : null}
 
       <SkText variant="heading" accessibilityRole="header" style={styles.section}>
-        Matrix: suite × target
+        Each suite against each library version
       </SkText>
       {matrix.isPending ? (
         <QueryState state="loading" />
       ) : matrix.isError ? (
         <QueryState state="error" message={matrix.error.message} onRetry={() => void matrix.refetch()} />
       ) : cells.length === 0 ? (
-        <QueryState state="empty" message="This run has no suite × target pairs." />
+        <QueryState state="empty" message="This run has no checks." />
       ) : (
         <RunMatrix runId={id} cells={cells} />
       )}
@@ -101,7 +105,7 @@ export function RunDetail({ id, openedExisting = false }: { id: string; openedEx
           message={
             live
               ? 'No property check has finished yet.'
-              : 'No property checks in this run: its suites list none, or no pair got that far.'
+              : 'No property checks in this run: its suites list none, or no check got that far.'
           }
         />
       ) : (

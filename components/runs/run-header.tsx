@@ -12,18 +12,25 @@ import { ProgressBar } from './progress-bar';
 import { regressionsHref } from './regressions-href';
 import { runDuration } from './run-duration';
 import { RunStatusBadge } from './run-status-badge';
+import type { CellTally } from './tally-cells';
+import { tallyWords } from './tally-words';
 import { triggerWords } from './trigger-words';
 import { waitingForWorkerWords } from './waiting-for-worker-words';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
-/** The top of a run: its status, who started it and when, how long, its point counts, and progress and cancel while it is live. */
-export function RunHeader({ run, canCancel }: { run: RunView; canCancel: boolean }) {
+/**
+ * The top of a run: its status, who started it and when, how long, its checks (suite × library
+ * version) by outcome once its matrix is known, its point counts, and progress and cancel while
+ * it is live. The checks are counted by the matrix's own rule (tally-cells.ts), so a check that
+ * stopped on an error is counted as one here even when it has no point in error.
+ */
+export function RunHeader({ run, canCancel, checks }: { run: RunView; canCancel: boolean; checks?: CellTally }) {
   const live = isLiveRun(run);
   const regressions = describeRegressions(run);
   const facts: [string, string][] = [
     ['Started', `${triggerWords(run.trigger, run.requestedBy)}, ${formatWhen(run.createdAt)}`],
     ['Duration', runDuration(run)],
-    ['Shards', `${run.shardsDone} of ${run.shardsTotal} done`],
+    ['Checks', `${run.shardsDone} of ${run.shardsTotal} done`],
     ['Regressions', regressions.text],
   ];
   return (
@@ -63,7 +70,22 @@ export function RunHeader({ run, canCancel }: { run: RunView; canCancel: boolean
           {waitingForWorkerWords(run.waitingFor)}
         </SkText>
       ) : null}
-      <OutcomeCounts counts={run.counts} byClass={run.byClass} all />
+      {checks ? (
+        <View style={styles.counted}>
+          <SkText variant="smallLabel" tone="inkFaint" style={styles.label}>
+            Checks
+          </SkText>
+          <SkText variant="body" testID="run-check-tally">
+            {tallyWords(checks)}
+          </SkText>
+        </View>
+      ) : null}
+      <View style={styles.counted}>
+        <SkText variant="smallLabel" tone="inkFaint" style={styles.label}>
+          Points
+        </SkText>
+        <OutcomeCounts counts={run.counts} byClass={run.byClass} all />
+      </View>
       {live && canCancel ? <CancelRunButton runId={run.id} /> : null}
     </View>
   );
@@ -76,6 +98,7 @@ const styles = StyleSheet.create({
   },
   facts: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(4) },
   fact: { flexBasis: 150, flexGrow: 1, gap: 2 },
+  counted: { gap: 2 },
   label: { textTransform: 'uppercase', letterSpacing: 0.8 },
   danger: { color: theme.color.danger, fontFamily: theme.font.medium },
   link: { minHeight: 44, justifyContent: 'center' },

@@ -1,30 +1,39 @@
-import { Link } from 'expo-router';
+import { Link, type Href } from 'expo-router';
 import { useState } from 'react';
 import { Pressable, ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { RunMatrixCell } from '../../shared/run-matrix-cell';
 import { SkText } from '../ui/sk-text';
 import { describeMatrixCell, type MatrixCellWords } from './describe-matrix-cell';
-import { failuresHref } from './failures-href';
+import { OUTCOME_GLYPH } from './outcome-glyph';
+import { tallyCells } from './tally-cells';
+import { tallyWords } from './tally-words';
+import { DisclosureToggle } from '../ui/disclosure-toggle';
 import { OUTCOME_TONE } from './outcome-tone';
 import { CHIP_BOX_STYLE } from '../ui/chip-box-style';
 
 const SUITE_COLUMN = 300;
 const TARGET_COLUMN_MIN = 190;
 const byName = (a: string, b: string) => a.localeCompare(b, 'en', { numeric: true });
+const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
 
 /**
- * A run's matrix, suite × target. Each cell says its outcome in glyphs and words (and colour);
- * a cell with failures, errors or skips links to the failure table filtered to that pair. Wide
- * screens get the grid; phones get one card per suite with a row per target.
+ * A run's matrix, suite × library version (a check each). Each cell says its outcome in glyphs
+ * and words (and colour), and leads where its detail is (describe-matrix-cell.ts: the failure
+ * table, or the page that says why nothing was checked). Wide screens get the grid. Phones get
+ * the verdict and what needs a look first: one card per suite with a failing, erroring or
+ * unfinished check, its passing checks one line each, and the suites that passed everywhere
+ * folded into one line that opens them (the demo's largest run was 30,851 px tall as cards with
+ * every check in full: tests/e2e/day-run-page.test.ts measures it).
  */
 export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCell[] }) {
   const wide = useWindowDimensions().width >= theme.wide;
   const [onlyProblems, setOnlyProblems] = useState(false);
+  const [showPassed, setShowPassed] = useState(false);
   const [boxWidth, setBoxWidth] = useState(0);
   const targets = [...new Set(cells.map((c) => c.target))].sort(byName);
   const described = new Map(
-    cells.map((c) => [`${c.suite}\u0000${c.target}`, { cell: c, words: describeMatrixCell(c) }]),
+    cells.map((c) => [`${c.suite}\u0000${c.target}`, { cell: c, words: describeMatrixCell(c, runId) }]),
   );
   const allSuites = [...new Set(cells.map((c) => c.suite))].sort(byName);
   const needsLook = (suite: string) =>
@@ -33,16 +42,9 @@ export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCel
       return d !== undefined && d.words.tone !== 'pass';
     });
   const suites = onlyProblems ? allSuites.filter(needsLook) : allSuites;
+  const tally = tallyCells([...described.values()].map((d) => d.words));
 
-  const tally = { pass: 0, fail: 0, error: 0, other: 0 };
-  for (const { words } of described.values()) {
-    if (words.tone === 'pass') tally.pass += 1;
-    else if (words.tone === 'fail') tally.fail += 1;
-    else if (words.tone === 'error') tally.error += 1;
-    else tally.other += 1;
-  }
-
-  const cellView = (suite: string, target: string, layout: 'grid' | 'row') => {
+  const cellView = (suite: string, target: string, layout: Layout) => {
     const entry = described.get(`${suite}\u0000${target}`);
     if (!entry) {
       return (
@@ -51,7 +53,7 @@ export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCel
           style={layout === 'grid' ? [styles.gridCell, styles.absent] : [styles.rowCell, styles.absent]}
           accessibilityLabel={`${suite} on ${target}: not part of this run`}
         >
-          {layout === 'row' ? (
+          {layout !== 'grid' ? (
             <SkText variant="mono" tone="inkSoft" style={styles.rowTarget}>
               {target}
             </SkText>
@@ -60,31 +62,44 @@ export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCel
         </View>
       );
     }
-    return <MatrixCellView key={target} runId={runId} cell={entry.cell} words={entry.words} layout={layout} />;
+    // On a phone a passing check is one line: its details (worker, counts) are for the wide grid.
+    const shown = layout === 'row' && entry.words.tone === 'pass' ? 'line' : layout;
+    return <MatrixCellView key={target} cell={entry.cell} words={entry.words} layout={shown} />;
   };
+  const suiteCard = (suite: string) => (
+    <View key={suite} style={styles.card}>
+      <SkText variant="mono" accessibilityRole="header">
+        {suite}
+      </SkText>
+      {targets.map((t) => cellView(suite, t, 'row'))}
+    </View>
+  );
 
   // A definite width for the grid: in a horizontal scroller, flexible columns would otherwise size to their longest text.
   const gridWidth = Math.max(boxWidth, SUITE_COLUMN + targets.length * TARGET_COLUMN_MIN);
+  const passedSuites = allSuites.filter((s) => !needsLook(s));
 
   return (
     <View style={styles.box} onLayout={(e) => setBoxWidth(e.nativeEvent.layout.width)}>
-      <SkText variant="caption" style={styles.summary}>
-        {allSuites.length} suite{allSuites.length === 1 ? '' : 's'} × {targets.length} target
-        {targets.length === 1 ? '' : 's'}: ✓ {tally.pass} passed · ❌ {tally.fail} with failures · ◊ {tally.error} error
-        {tally.other ? ` · ${tally.other} not finished or cancelled` : ''}
+      <SkText variant="caption" style={styles.summary} testID="matrix-summary">
+        {`${plural(tally.total, 'check')} (${plural(allSuites.length, 'suite')} × ${plural(targets.length, 'library version')}): ${tallyWords(tally)}`}
       </SkText>
-      <Pressable
-        accessibilityRole="switch"
-        accessibilityLabel="Show only suites that need a look"
-        aria-checked={onlyProblems}
-        onPress={() => setOnlyProblems((v) => !v)}
-        style={[styles.toggle, onlyProblems && styles.toggleOn]}
-      >
-        <SkText variant="caption" tone="ink" style={onlyProblems && styles.toggleTextOn}>
-          {onlyProblems ? '✓ ' : ''}Only suites that need a look
-        </SkText>
-      </Pressable>
-      {suites.length === 0 ? <SkText variant="caption">Every suite passed on every target.</SkText> : null}
+      {wide ? (
+        <Pressable
+          accessibilityRole="switch"
+          accessibilityLabel="Show only suites that need a look"
+          aria-checked={onlyProblems}
+          onPress={() => setOnlyProblems((v) => !v)}
+          style={[styles.toggle, onlyProblems && styles.toggleOn]}
+        >
+          <SkText variant="caption" tone="ink" style={onlyProblems && styles.toggleTextOn}>
+            {onlyProblems ? '✓ ' : ''}Only suites that need a look
+          </SkText>
+        </Pressable>
+      ) : null}
+      {wide && suites.length === 0 ? (
+        <SkText variant="caption">Every suite passed on every library version.</SkText>
+      ) : null}
       {wide ? (
         <ScrollView horizontal contentContainerStyle={styles.gridScroll}>
           <View style={[styles.grid, { width: gridWidth }]} role="table" aria-label="Run matrix">
@@ -95,7 +110,7 @@ export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCel
                 role="columnheader"
                 style={[styles.gridHead, styles.suiteCol]}
               >
-                Suite ↓ · target →
+                Suite ↓ · library version →
               </SkText>
               {targets.map((t) => (
                 <SkText
@@ -124,58 +139,60 @@ export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCel
           </View>
         </ScrollView>
       ) : (
-        suites.map((suite) => (
-          <View key={suite} style={styles.card}>
-            <SkText variant="mono" accessibilityRole="header">
-              {suite}
-            </SkText>
-            {targets.map((t) => cellView(suite, t, 'row'))}
-          </View>
-        ))
+        <>
+          {allSuites.filter(needsLook).map(suiteCard)}
+          {passedSuites.length > 0 ? (
+            <DisclosureToggle
+              open={showPassed}
+              onToggle={() => setShowPassed((v) => !v)}
+              accessibilityLabel={`${showPassed ? 'Hide' : 'Show'} the ${plural(passedSuites.length, 'suite')} that passed on every library version`}
+              style={styles.passedToggle}
+            >
+              <SkText variant="label" tone="ink">
+                {`${OUTCOME_GLYPH.pass} ${plural(passedSuites.length, 'suite')} passed on every library version ${showPassed ? '↑ hide' : '↓ show'}`}
+              </SkText>
+            </DisclosureToggle>
+          ) : null}
+          {showPassed ? passedSuites.map(suiteCard) : null}
+        </>
       )}
     </View>
   );
 }
 
-function MatrixCellView({
-  runId,
-  cell,
-  words,
-  layout,
-}: {
-  runId: string;
-  cell: RunMatrixCell;
-  words: MatrixCellWords;
-  layout: 'grid' | 'row';
-}) {
+type Layout = 'grid' | 'row' | 'line';
+
+function MatrixCellView({ cell, words, layout }: { cell: RunMatrixCell; words: MatrixCellWords; layout: Layout }) {
   const tone = OUTCOME_TONE[words.tone];
   const frame = StyleSheet.flatten([
-    layout === 'grid' ? styles.gridCell : styles.rowCell,
+    layout === 'grid' ? styles.gridCell : layout === 'row' ? styles.rowCell : styles.lineCell,
     { backgroundColor: tone.soft, borderLeftColor: tone.edge },
   ]);
   const content = (
     <>
-      {layout === 'row' ? (
+      {layout !== 'grid' ? (
         <SkText variant="mono" tone="inkSoft" style={styles.rowTarget}>
           {cell.target}
         </SkText>
       ) : null}
       <View style={styles.cellWords}>
         <Text style={[styles.headline, { color: tone.ink }]}>{words.headline}</Text>
-        {words.details.map((line, i) => (
-          <SkText variant="caption" key={i} numberOfLines={3}>
-            {line}
-          </SkText>
-        ))}
-        {words.hasRows ? (
+        {layout !== 'line'
+          ? words.details.map((line, i) => (
+              <SkText variant="caption" key={i} numberOfLines={3}>
+                {line}
+              </SkText>
+            ))
+          : null}
+        {words.link ? (
           <SkText variant="smallLabel" tone="accent">
-            failures →
+            {words.link.words}
           </SkText>
         ) : null}
       </View>
     </>
   );
-  if (!words.hasRows) {
+  if (!words.link) {
     return (
       <View style={frame} accessibilityLabel={words.label} testID={`cell-${cell.suite}-${cell.target}`}>
         {content}
@@ -183,10 +200,10 @@ function MatrixCellView({
     );
   }
   return (
-    <Link href={failuresHref(runId, cell.suite, cell.target)} asChild>
+    <Link href={words.link.href as Href} asChild>
       <Pressable
         accessibilityRole="link"
-        accessibilityLabel={`${words.label}. Open these failures`}
+        accessibilityLabel={`${words.label}. ${words.link.said}`}
         style={frame}
         testID={`cell-${cell.suite}-${cell.target}`}
       >
@@ -239,6 +256,16 @@ const styles = StyleSheet.create({
     borderLeftWidth: 4,
     borderRadius: 4,
   },
+  lineCell: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: theme.space(3),
+    paddingVertical: theme.space(1),
+    paddingHorizontal: theme.space(3),
+    borderLeftWidth: 4,
+    borderRadius: 4,
+  },
+  passedToggle: { backgroundColor: theme.color.panel },
   absent: { backgroundColor: theme.color.paper, borderLeftColor: theme.color.rule },
   rowTarget: { width: 130 },
   cellWords: { flex: 1, gap: 2 },

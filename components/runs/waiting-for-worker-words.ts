@@ -6,5 +6,5 @@
 export function waitingForWorkerWords(targets: readonly string[]): string {
   const names =
     targets.length <= 1 ? (targets[0] ?? '') : `${targets.slice(0, -1).join(', ')} or ${targets[targets.length - 1]}`;
-  return `Waiting for a worker that has ${names}; none is running. These pairs start once such a worker starts (npm run worker on a machine that has ${targets.length === 1 ? 'it' : 'them'}).`;
+  return `Waiting for a worker that has ${names}; none is running. These checks start once such a worker starts (npm run worker on a machine that has ${targets.length === 1 ? 'it' : 'them'}).`;
 }

@@ -1,6 +1,7 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import type { DiagnosisKind } from '../../shared/diagnosis';
 import type { MonodromyCheck, OutcomeCounts } from '../../shared/run-result';
+import type { SkipReason } from '../../shared/skip-reason';
 import { Run } from './run';
 import { Shard } from './shard';
 
@@ -41,7 +42,7 @@ export class PathSummary {
   monodromy!: MonodromyCheck | null;
 
   @Column({ type: 'jsonb' })
-  skipped!: { reason: string; count: number }[];
+  skipped!: SkipReason[];
 
   @Column({ type: 'text', nullable: true })
   error!: string | null;

@@ -9,6 +9,7 @@ import { runListQuery } from '../../shared/schemas/run-list-query';
 import { declareRoute } from '../http/declare-route';
 import type { RunService } from '../runs/run-service';
 import { noWorkerHasTargetSql } from '../sql/no-worker-has-target-sql';
+import { SKIP_REASONS_SQL } from '../sql/skip-reasons-sql';
 
 /** Runs: everyone reads them and their matrix; maintainers (and admins) start and cancel them. */
 export function runsRouter(dataSource: DataSource, runs: RunService): Router {
@@ -95,7 +96,8 @@ export function runsRouter(dataSource: DataSource, runs: RunService): Router {
       await runs.assertExists(id);
       const cells: RunMatrixCell[] = await dataSource.query(
         `SELECT s.suite_slug AS "suite", s.target_name AS "target", s.status, s.outcome, s.counts, s.by_class AS "byClass",
-                s.by_diagnosis AS "byDiagnosis", s.checked, s.errors, w.label AS "worker", ${noWorkerHasTargetSql('s')} AS "noWorkerHasTarget"
+                s.by_diagnosis AS "byDiagnosis", s.checked, s.errors, ${SKIP_REASONS_SQL} AS "skipReasons",
+                w.label AS "worker", ${noWorkerHasTargetSql('s')} AS "noWorkerHasTarget"
            FROM shards s LEFT JOIN workers w ON w.id = s.worker_id
           WHERE s.run_id = $1 ORDER BY s.suite_slug, s.target_name`,
         [id],

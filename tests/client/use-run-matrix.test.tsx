@@ -28,6 +28,7 @@ const cell = (suite: string, done: boolean): RunMatrixCell => ({
   byDiagnosis: done ? { 'zero-sign': 2 } : null,
   checked: null,
   errors: [],
+  skipReasons: [],
   worker: done ? 'build-7:4121' : null,
   noWorkerHasTarget: false,
 });

@@ -48,7 +48,13 @@ export async function evaluatePath(evaluation: PathEvaluation): Promise<PathResu
   const n = points.length;
   if (evaluation.unsupported.length > 0) {
     out.counts.skipped = n;
-    out.skipped = [{ reason: `${evaluation.target.name} has no ${evaluation.unsupported.join(', ')}`, count: n }];
+    out.skipped = [
+      {
+        reason: `${evaluation.target.name} has no ${evaluation.unsupported.join(', ')}`,
+        count: n,
+        lacks: evaluation.unsupported,
+      },
+    ];
     return out;
   }
   const inputs = pathInputs(points);

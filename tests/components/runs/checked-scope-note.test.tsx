@@ -29,13 +29,15 @@ describe('CheckedScopeNote', () => {
         properties={{ held: 3, failed: 1, notChecked: 2 }}
       />,
     );
-    expect(screen.getByText('• 2 suite × target pairs, 5 paths, 1,120 points in all.')).toBeTruthy();
+    expect(
+      screen.getByText('• 2 checks of a suite against a library version, 5 paths, 1,120 points in all.'),
+    ).toBeTruthy();
     expect(
       screen.getByText('• Conventions: signed zero (IEC 60559 / ISO C Annex G); counter-clockwise continuity.'),
     ).toBeTruthy();
     expect(
       screen.getByText(
-        '• Branches: principal branches (1 pair); regular branches fixed by a value at a point and continued along the paths (1 pair).',
+        '• Branches: principal branches (1 check); regular branches fixed by a value at a point and continued along the paths (1 check).',
       ),
     ).toBeTruthy();
     expect(screen.getByText('• Tolerances: 4 ulps; 1e-12 relative.')).toBeTruthy();
@@ -49,24 +51,28 @@ describe('CheckedScopeNote', () => {
     ).toBeTruthy();
   });
 
-  it('counts the pairs that checked nothing and the property laws listed but not run', () => {
+  it('counts the checks that checked nothing and the property laws listed but not run', () => {
     render(
       <CheckedScopeNote
         scopes={[scope({ properties: { listed: ['range'], run: false, note: 'no property for this target' } })]}
-        pairsNotChecked={3}
+        checksNotChecked={3}
         subject="table"
       />,
     );
     expect(
-      screen.getByText('• 3 pairs of this run checked nothing (not finished, cancelled, or stopped by an error).'),
+      screen.getByText('• 3 checks of this run checked nothing (not finished, cancelled, or stopped by an error).'),
     ).toBeTruthy();
-    expect(screen.getByText('• 1 pair listed property laws that were not run.')).toBeTruthy();
+    expect(screen.getByText('• 1 check listed property laws that were not run.')).toBeTruthy();
     expect(screen.getByText('What this table shows, and what it does not')).toBeTruthy();
   });
 
-  it('says nothing has been checked when no pair has finished', () => {
-    render(<CheckedScopeNote scopes={[]} pairsNotChecked={4} />);
-    expect(screen.getByText('• No suite × target pair has finished, so nothing has been checked yet.')).toBeTruthy();
+  it('says nothing has been checked when no check has finished', () => {
+    render(<CheckedScopeNote scopes={[]} checksNotChecked={4} />);
+    expect(
+      screen.getByText(
+        '• No check of a suite against a library version has finished, so nothing has been checked yet.',
+      ),
+    ).toBeTruthy();
     expect(screen.getByText(/evidence for these 0 points/)).toBeTruthy();
   });
 });

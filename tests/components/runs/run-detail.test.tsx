@@ -58,7 +58,7 @@ describe('RunDetail', () => {
     await waitFor(() => expect(screen.getByTestId('live-workers')).toBeTruthy());
     expect(screen.getByTestId('live-workers').textContent).toBe('1 worker: build-7:4121 (1 target)');
     expect(screen.getByTestId('run-waiting-for-worker').textContent).toBe(
-      'Waiting for a worker that has complex.js@2.5.0; none is running. These pairs start once such a worker starts (npm run worker on a machine that has it).',
+      'Waiting for a worker that has complex.js@2.5.0; none is running. These checks start once such a worker starts (npm run worker on a machine that has it).',
     );
   });
 

@@ -25,6 +25,7 @@ const cell = (over: Partial<RunMatrixCell>): RunMatrixCell => ({
   byDiagnosis: {},
   checked: scope,
   errors: [],
+  skipReasons: [],
   worker: null,
   noWorkerHasTarget: false,
   ...over,
@@ -90,7 +91,7 @@ describe.each([
     expect(failing.getAttribute('aria-label')).toBe(
       'sqrt-principal-sz on complex.js@2.4.2: 3 failed: 3 branch findings, 2 other sheet, 1 wrong side of a cut, 117 passed, 4 skipped. Open these failures',
     );
-    expect(within(cellOf('acos-principal-sz', 'complex.js@2.4.3')).getByText('↻ running')).toBeTruthy();
+    expect(within(cellOf('acos-principal-sz', 'complex.js@2.4.3')).getByText('↻ running now')).toBeTruthy();
   });
 
   it('leads with branch findings even where accuracy findings are many more, and counts points not applicable to the entry', () => {
@@ -137,7 +138,26 @@ describe.each([
     const only = cellOf('cbrt-principal-sz', 'complex.js@2.4.3');
     expect(within(only).getAllByText(/nothing was checked/)).toHaveLength(1);
     expect(within(only).getByText('− 154 skipped')).toBeTruthy();
-    expect(only.getAttribute('href')).toBe(`/failures?run=${RUN}&suite=cbrt-principal-sz&target=complex.js%402.4.3`);
+    // Skipped points are counted, never rows of the failure table: a link there would open an empty table.
+    expect(only.getAttribute('href')).toBeNull();
+  });
+
+  it('says why a check whose target lacks the function checked nothing, and leads to the page of that target', () => {
+    const lacking = cell({
+      suite: 'acsch-principal-sz',
+      outcome: 'error',
+      counts: { pass: 0, fail: 0, error: 0, skipped: 154, notApplicable: 0 },
+      byDiagnosis: {},
+      errors: [
+        'nothing was checked: every point was skipped or not applicable to the entry (see the reasons per path)',
+      ],
+      skipReasons: [{ reason: 'complex.js@2.4.3 has no acsch', count: 154, lacks: ['acsch'] }],
+    });
+    render(<RunMatrix runId={RUN} cells={[lacking]} />);
+    const only = cellOf('acsch-principal-sz', 'complex.js@2.4.3');
+    expect(within(only).getByText('− 154 skipped: complex.js@2.4.3 has no acsch')).toBeTruthy();
+    expect(within(only).getByText('what complex.js@2.4.3 has →')).toBeTruthy();
+    expect(only.getAttribute('href')).toBe('/libraries/target?name=complex.js%402.4.3');
   });
 
   it('links a cell with failures or errors to the failure table filtered by run, suite and target; a passing cell is no link', () => {
@@ -152,7 +172,7 @@ describe.each([
     expect(cellOf('log-principal-sz', 'complex.js@2.4.3').getAttribute('href')).toBeNull();
   });
 
-  it('counts the cells by outcome and can hide the suites that passed everywhere', () => {
+  it('counts the checks by outcome, errors by the same rule as the cells', () => {
     render(
       <RunMatrix
         runId={RUN}
@@ -163,26 +183,66 @@ describe.each([
         ]}
       />,
     );
-    expect(
-      screen.getByText(
-        /4 suites × 2 targets: ✓ 4 passed · ❌ 1 with failures · ◊ 2 error · 1 not finished or cancelled/,
-      ),
-    ).toBeTruthy();
-    expect(screen.queryByText('exp-principal-sz')).not.toBeNull();
-    fireEvent.click(screen.getByRole('switch', { name: 'Show only suites that need a look' }));
-    expect(screen.queryByText('exp-principal-sz')).toBeNull();
-    expect(screen.getByText('sqrt-principal-sz')).toBeTruthy();
-    expect(screen.getByRole('switch', { name: 'Show only suites that need a look' }).getAttribute('aria-checked')).toBe(
-      'true',
+    expect(screen.getByTestId('matrix-summary').textContent).toBe(
+      '8 checks (4 suites × 2 library versions): ✓ 4 passed · ❌ 1 with failures · ◊ 2 stopped by an error · 1 not finished or cancelled',
     );
   });
+});
+
+it('can hide the suites that passed everywhere on a wide screen', () => {
+  setScreenWidth(1440);
+  render(
+    <RunMatrix
+      runId={RUN}
+      cells={[
+        ...CELLS,
+        cell({ suite: 'exp-principal-sz' }),
+        cell({ suite: 'exp-principal-sz', target: 'complex.js@2.4.2' }),
+      ]}
+    />,
+  );
+  expect(screen.queryByText('exp-principal-sz')).not.toBeNull();
+  fireEvent.click(screen.getByRole('switch', { name: 'Show only suites that need a look' }));
+  expect(screen.queryByText('exp-principal-sz')).toBeNull();
+  expect(screen.getByText('sqrt-principal-sz')).toBeTruthy();
+  expect(screen.getByRole('switch', { name: 'Show only suites that need a look' }).getAttribute('aria-checked')).toBe(
+    'true',
+  );
+});
+
+it('shows a phone the suites that need a look first, with their passing checks one line each, and folds the rest', () => {
+  setScreenWidth(390);
+  render(
+    <RunMatrix
+      runId={RUN}
+      cells={[
+        ...CELLS,
+        cell({ suite: 'exp-principal-sz' }),
+        cell({ suite: 'exp-principal-sz', target: 'complex.js@2.4.2' }),
+      ]}
+    />,
+  );
+  const headers = screen.getAllByRole('heading').map((h) => h.textContent);
+  expect(headers).toEqual(['acos-principal-sz', 'log-principal-sz', 'sqrt-principal-sz']);
+  // A passing check in a card that needs a look: its outcome only, no detail lines.
+  const passing = cellOf('sqrt-principal-sz', 'complex.js@2.4.3');
+  expect(passing.textContent).toBe('complex.js@2.4.3✓ 120');
+  const fold = screen.getByRole('button', { name: 'Show the 1 suite that passed on every library version' });
+  expect(fold.textContent).toBe('✓ 1 suite passed on every library version ↓ show');
+  fireEvent.click(fold);
+  expect(screen.getByText('exp-principal-sz')).toBeTruthy();
+  expect(
+    screen
+      .getByRole('button', { name: 'Hide the 1 suite that passed on every library version' })
+      .getAttribute('aria-expanded'),
+  ).toBe('true');
 });
 
 it('lays the matrix out as a grid with a column per target on a wide screen, and as cards on a phone', () => {
   setScreenWidth(1440);
   const { unmount } = render(<RunMatrix runId={RUN} cells={CELLS} />);
   expect(screen.getAllByRole('columnheader').map((h) => h.textContent)).toEqual([
-    'Suite ↓ · target →',
+    'Suite ↓ · library version →',
     'complex.js@2.4.2',
     'complex.js@2.4.3',
   ]);

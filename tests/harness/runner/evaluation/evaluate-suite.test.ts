@@ -200,11 +200,13 @@ describe('evaluateSuite', () => {
     expect(kinds.slice(5)).toEqual(Array(5).fill('inaccurate'));
   });
 
-  it('skips every point, with the reason, when the target lacks an operation of the subject', async () => {
+  it('skips every point, with the reason and the operations it lacks, when the target lacks an operation of the subject', async () => {
     const noCbrt: Target = { ...referenceTarget(), supports: async (op) => op !== 'cbrt' };
     const r = await evaluateSuite(loadDemoSuite('cbrt-principal-sz'), noCbrt, { cache });
     expect(r.counts).toEqual({ pass: 0, fail: 0, error: 0, skipped: r.checked.points, notApplicable: 0 });
-    expect(r.paths[0]!.skipped).toEqual([{ reason: 'oracle@1 has no cbrt', count: r.paths[0]!.points }]);
+    expect(r.paths[0]!.skipped).toEqual([
+      { reason: 'oracle@1 has no cbrt', count: r.paths[0]!.points, lacks: ['cbrt'] },
+    ]);
     // Nothing checked is not a pass: a green result for a library without the function would mislead.
     expect(r.status).toBe('error');
     expect(r.errors).toEqual([NOTHING_CHECKED]);

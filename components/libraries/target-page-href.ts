@@ -1,0 +1,4 @@
+/** The app's page of one target (its convention fingerprint and the functions it lacks): `/libraries/target?name=…`. */
+export function targetPageHref(name: string): string {
+  return `/libraries/target?${new URLSearchParams({ name }).toString()}`;
+}
