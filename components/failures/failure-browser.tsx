@@ -15,6 +15,7 @@ import { FAILURE_COLUMNS, type FailureColumnId } from './failure-columns';
 import { FailureFiltersPanel } from './failure-filters-panel';
 import { FailureTable } from './failure-table';
 import { QueryState } from '../ui/query-state';
+import { filterErrors } from './filter-errors';
 
 const COLUMN_IDS = FAILURE_COLUMNS.map((c) => c.id);
 const DEFAULT_COLUMNS: FailureColumnId[] = ['id', 'suite', 'target', 'path', 'z', 'diagnosis', 'ulps', 'new'];
@@ -43,6 +44,8 @@ export function FailureBrowser({
     DecisionMark
   >;
   const exportable = Boolean(filters.run || filters.suite || filters.target);
+  // A filter the server refused (a short run id that names no run, or two): its rule goes beside its field.
+  const refused = filterErrors(failures.error);
 
   return (
     <View style={styles.root}>
@@ -52,7 +55,7 @@ export function FailureBrowser({
           applied.
         </Text>
       ) : null}
-      <FailureFiltersPanel filters={filters} onChange={onChange} compact={!wide} />
+      <FailureFiltersPanel filters={filters} onChange={onChange} compact={!wide} refused={refused} />
       <View style={styles.toolbar}>
         <ChipGroup
           label="Branch findings first, then"
@@ -85,6 +88,8 @@ export function FailureBrowser({
       </SkText>
       {failures.isPending ? (
         <QueryState state="loading" />
+      ) : failures.isError && Object.keys(refused).length > 0 ? (
+        <QueryState state="error" message="No failures shown: change the filter marked above." />
       ) : failures.isError ? (
         <QueryState state="error" message={failures.error.message} onRetry={() => void failures.refetch()} />
       ) : rows.length === 0 ? (

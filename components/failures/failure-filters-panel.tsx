@@ -42,12 +42,17 @@ export function FailureFiltersPanel({
   filters,
   onChange,
   compact,
+  refused = {},
 }: {
   filters: FailureFilters;
   onChange: (next: FailureFilters) => void;
   compact: boolean;
+  /** Rules the server gave for applied filters (filter-errors.ts), shown beside their fields until the field changes. */
+  refused?: Partial<Record<string, string>>;
 }) {
-  const [open, setOpenState] = useState(compact ? (openOnPhone ?? false) : true);
+  const [openState, setOpenState] = useState(compact ? (openOnPhone ?? false) : true);
+  // A refused filter is shown beside its field, so the folded panel opens for it.
+  const open = openState || Object.keys(refused).length > 0;
   const setOpen = (next: boolean) => {
     if (compact) openOnPhone = next;
     setOpenState(next);
@@ -117,7 +122,7 @@ export function FailureFiltersPanel({
                   }}
                   onSubmitEditing={apply}
                   autoCapitalize="none"
-                  error={errors[key]}
+                  error={errors[key] ?? (draft[key].trim() === draftOf(filters)[key] ? refused[key] : undefined)}
                 />
               </View>
             ))}

@@ -6,12 +6,13 @@ import type { FailureView } from '../../shared/failure-view';
 import { ROLES } from '../../shared/roles';
 import { classifyBody } from '../../shared/schemas/classify-body';
 import { failureIdParams } from '../../shared/schemas/failure-id-params';
-import { failureQuery } from '../../shared/schemas/failure-query';
+import { failureQuery, type FailureQuery } from '../../shared/schemas/failure-query';
 import { classifyFailure } from '../failures/classify-failure';
 import { decisionsOn } from '../failures/decisions-on';
 import { targetKeySql } from '../sql/target-key-sql';
 import { toDecisionView } from '../views/to-decision-view';
 import { failurePath } from '../failures/failure-path';
+import { resolveRunPrefix } from '../failures/resolve-run-prefix';
 import { HttpError } from '../http/http-error';
 import { InputError } from '../http/input-error';
 import { declareRoute } from '../http/declare-route';
@@ -32,6 +33,9 @@ const CSV_MAX_ROWS = 50_000;
 export function failuresRouter(dataSource: DataSource, options: { referenceCacheDir?: string | null } = {}): Router {
   const router = Router();
   const noFailure = { 404: 'No failure with that number.' };
+  /** The query with `run` (a short id or any start of one) turned into the one run it names, or a 400 on `query.run`. */
+  const withRunResolved = async (query: FailureQuery): Promise<FailureQuery> =>
+    query.run ? { ...query, run: await resolveRunPrefix(dataSource, query.run, 'query.run') } : query;
 
   declareRoute(
     router,
@@ -44,7 +48,7 @@ export function failuresRouter(dataSource: DataSource, options: { referenceCache
       responses: { 200: 'The rows and the cursor (`after`) of the next page.' },
     },
     async (_req, res, { query }) => {
-      res.type('json').send(await failurePageJson(dataSource, query));
+      res.type('json').send(await failurePageJson(dataSource, await withRunResolved(query)));
     },
   );
 
@@ -59,7 +63,7 @@ export function failuresRouter(dataSource: DataSource, options: { referenceCache
       responses: { 200: { description: 'The CSV file, one row per failure.', mediaType: 'text/csv' } },
     },
     async (_req, res, { query }) => {
-      const q = { ...query, limit: CSV_MAX_ROWS };
+      const q = { ...(await withRunResolved(query)), limit: CSV_MAX_ROWS };
       if (!q.run && !q.suite && !q.target)
         throw new InputError([{ field: 'query', rule: 'needs run, suite or target to export' }]);
       const { rows } = await searchFailures(dataSource, q, true);

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { textSchema } from './text-schema';
 import { failureNumberSchema } from './failure-number-schema';
 import { queryObject } from './query-object';
+import { runIdPrefix } from './run-id-prefix';
 import { DIAGNOSIS_KINDS } from '../diagnosis-kinds';
 import { DIAGNOSIS_CLASSES } from '../diagnosis-classes';
 
@@ -18,7 +19,8 @@ function isCursor(cursor: string): boolean {
 }
 
 /**
- * Filters of the failure table. `diagnosis` matches a point with that label among any of its
+ * Filters of the failure table. `run` may be a run's short id or any longer start of it
+ * (run-id-prefix.ts); the server resolves it to one run or names the field. `diagnosis` matches a point with that label among any of its
  * labels (not only the leading one); `class` matches branch or accuracy findings. Every page
  * lists branch findings first, then accuracy findings, then errors and skipped points, each
  * newest first (`sort=id`, the default) or largest error first (`sort=ulps`). `status`: `new` = a regression (passed in the previous run of
@@ -27,7 +29,7 @@ function isCursor(cursor: string): boolean {
  * by (rank, ulps, id) when sorted by ulps.
  */
 export const failureQuery = queryObject({
-  run: z.uuid({ error: 'must be a run id' }).optional(),
+  run: runIdPrefix.optional(),
   suite: text.optional(),
   target: text.optional(),
   fn: textSchema()

@@ -140,13 +140,43 @@ describe('FailureBrowser', () => {
 
     fireEvent.change(screen.getByLabelText('Run id'), { target: { value: 'not-a-run' } });
     fireEvent.click(screen.getByRole('button', { name: 'Apply filters' }));
-    expect(screen.getByText('× Run id must be a run id')).toBeTruthy();
+    expect(
+      screen.getByText('× Run id must be a run id or its first 8 or more characters, as in "Run 37e7ec6f"'),
+    ).toBeTruthy();
     expect(onChange).toHaveBeenCalledTimes(1);
 
     fireEvent.change(screen.getByLabelText('Run id'), { target: { value: RUN } });
     fireEvent.change(screen.getByLabelText('Function'), { target: { value: 'asin' } });
     fireEvent.click(screen.getByRole('button', { name: 'Apply filters' }));
     expect(onChange).toHaveBeenLastCalledWith({ suite: 'sqrt-principal-sz', run: RUN, fn: 'asin' });
+  });
+
+  it('shows beside the Run id field why the server refused a short run id, on a phone too, with no retry', async () => {
+    setScreenWidth(390);
+    mockFetchRoutes(() => ({
+      status: 400,
+      body: {
+        kind: 'invalid-input',
+        message: 'The request is not valid.',
+        issues: [
+          {
+            field: 'query.run',
+            rule: `is the start of more than one run's id ("37e7ec6f"); type more of the id to tell them apart`,
+          },
+        ],
+      },
+    }));
+    renderWithClient(<FailureBrowser filters={{ run: '37e7ec6f' }} onChange={jest.fn()} />);
+    expect(
+      await screen.findByText(
+        `× Run id is the start of more than one run's id ("37e7ec6f"); type more of the id to tell them apart`,
+      ),
+    ).toBeTruthy();
+    expect(screen.getByText('× No failures shown: change the filter marked above.')).toBeTruthy();
+    expect(screen.queryByRole('button', { name: /retry|try again/i })).toBeNull();
+    // Once the field is changed, the server's rule no longer describes it.
+    fireEvent.change(screen.getByLabelText('Run id'), { target: { value: '37e7ec6f-1a' } });
+    expect(screen.queryByText(/more than one run/)).toBeNull();
   });
 
   it('says so when nothing matches, and shows the error with a retry when the server fails', async () => {
