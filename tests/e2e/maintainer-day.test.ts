@@ -29,7 +29,7 @@ describe("a maintainer's day, one journey through the screens", () => {
 
     // Progress while it runs, then the verdict without a reload (all its shards on one worker).
     await b.page
-      .getByRole('progressbar', { name: new RegExp(`^Progress: \\d+ of ${NIGHTLY_SHARDS} shards`) })
+      .getByRole('progressbar', { name: new RegExp(`^Progress: \\d+ of ${NIGHTLY_SHARDS} checks`) })
       .waitFor();
     await b.page.getByLabel('status: completed with failures').first().waitFor({ timeout: 150_000 });
     await b.page
@@ -38,7 +38,7 @@ describe("a maintainer's day, one journey through the screens", () => {
       .waitFor();
 
     // A failing cell leads to the failure table of that suite and target in this run.
-    const cell = b.page.locator('a[data-testid^="cell-"]').first();
+    const cell = b.page.locator('a[data-testid^="cell-"][href^="/failures"]').first();
     await cell.waitFor();
     await cell.click();
     await b.page.waitForURL(new RegExp(`/failures\\?run=${runId}&suite=[^&]+&target=`));

@@ -45,7 +45,7 @@ describe('Overview and runs', () => {
     await completed.getByText('complex.js nightly').waitFor();
     await completed.click();
 
-    await b.page.getByText('Matrix: suite × target').waitFor();
+    await b.page.getByText('Each suite against each library version').waitFor();
     const note = b.page.getByTestId('checked-scope-note');
     await note.getByText(/points in all/).waitFor();
     await note.getByText(/not a certificate/).waitFor();
@@ -64,13 +64,15 @@ describe('Overview and runs', () => {
       });
       return loaded;
     });
-    const failing = b.page.locator('a[data-testid^="cell-"]').first();
+    const failing = b.page.locator('a[data-testid^="cell-"][href^="/failures"]').first();
     if ((await failing.count()) > 0)
       expect(await failing.getAttribute('href')).toMatch(/^\/failures\?run=[0-9a-f-]{36}&suite=[^&]+&target=[^&]+$/);
     await b.page.getByText('Property checks', { exact: true }).waitFor();
     // One picture of the whole screen (saveScreenshots grows the window to show all of it): shots
     // scrolled to the matrix and to the property checks were the same 1440×5900 picture twice more.
-    await saveScreenshots(b.page, 'run-detail', () => b.page.getByText('Matrix: suite × target').waitFor());
+    await saveScreenshots(b.page, 'run-detail', () =>
+      b.page.getByText('Each suite against each library version').waitFor(),
+    );
   });
 
   it('follows a run started through the API live, and cancels it after a confirm step', async () => {
@@ -107,9 +109,9 @@ describe('Overview and runs', () => {
     await b.page.getByTestId(`run-${run.id}`).click();
     const bar = b.page.getByRole('progressbar', { name: /^Progress:/ });
     await bar.waitFor();
-    expect(await bar.getAttribute('aria-valuetext')).toMatch(new RegExp(`^\\d+ of ${run.shardsTotal} shards$`));
+    expect(await bar.getAttribute('aria-valuetext')).toMatch(new RegExp(`^\\d+ of ${run.shardsTotal} checks$`));
     // The bar moves by itself: some shard finishes without reloading the page.
-    await b.page.getByText(new RegExp(`^[1-9]\\d* of ${run.shardsTotal} shards`)).waitFor({ timeout: 30_000 });
+    await b.page.getByText(new RegExp(`^[1-9]\\d* of ${run.shardsTotal} checks`)).waitFor({ timeout: 30_000 });
     await saveScreenshots(b.page, 'run-detail-in-progress', () => bar.waitFor());
 
     await b.page.getByRole('button', { name: 'Cancel run…' }).click();

@@ -1,0 +1,137 @@
+import type { Page } from 'playwright-core';
+import { DEMO_USERS } from '../../server/seed/demo-users';
+import { shortRunId } from '../../shared/short-run-id';
+import { BASE_URL } from './support/open-browser';
+import { browserPerTest } from './support/browser-per-test';
+import { goTo } from './support/go-to';
+import { saveScreenshots } from './support/save-screenshots';
+import { signIn } from './support/sign-in';
+
+const b = browserPerTest();
+const kwame = DEMO_USERS.find((u) => u.email === 'kwame@sheetkeeper.test')!;
+
+/** complex.js has no cbrt (harness/adapters/complex-js-target.ts asks the package), so that check stops on an error. */
+const TARGET = 'complex.js@2.4.3';
+const SUITES = ['sqrt-principal-sz', 'cbrt-principal-sz'];
+
+/** The API as the signed-in page sees it (same origin, session cookie); plain promise chains for the page's sake. */
+const api = <T>(page: Page, path: string, method = 'GET', body?: unknown): Promise<T> =>
+  page.evaluate(
+    (arg) =>
+      fetch('/api' + arg.path, {
+        method: arg.method,
+        headers: arg.body ? { 'content-type': 'application/json' } : {},
+        body: arg.body ? JSON.stringify(arg.body) : undefined,
+      }).then((res) => res.json().then((json) => ({ status: res.status, body: json }))),
+    { path, method, body },
+  ) as Promise<T>;
+
+/** How tall the screen is, scrolled in full: the app scrolls inside its own frame, not the document. */
+const screenHeight = (page: Page): Promise<number> =>
+  page.evaluate(() =>
+    Math.max(
+      document.documentElement.scrollHeight,
+      ...Array.from(document.querySelectorAll('div'))
+        .filter((el) => /auto|scroll/.test(getComputedStyle(el).overflowY) && el.clientHeight > 200)
+        .map((el) => el.scrollHeight),
+    ),
+  );
+
+describe("the run page through a maintainer's day", () => {
+  it('watches a small run finish and settle without a reload, and follows its error cell to the reason', async () => {
+    await signIn(b.page, kwame.email, kwame.password);
+    const made = await api<{ status: number; body: { plan: { id: string } } }>(b.page, '/plans', 'POST', {
+      name: 'Roots on one release',
+      description: 'Square and cube roots against complex.js 2.4.3, for the run page journey.',
+      recipients: [],
+      suites: SUITES,
+      targets: [TARGET],
+    });
+    expect(made.status).toBe(201);
+    await goTo(b.page, 'Plans');
+    await b.page.getByRole('link', { name: 'Plan Roots on one release' }).click();
+    await b.page.getByRole('button', { name: 'Run Roots on one release now' }).click();
+    await b.page.waitForURL(/\/runs\/[0-9a-f-]{36}$/);
+    const runId = new URL(b.page.url()).pathname.split('/').pop()!;
+    await b.page
+      .getByText(`Run ${shortRunId(runId)} of this plan: 2 checks, each suite against each library version.`)
+      .waitFor();
+
+    // The header's verdict and the matrix agree once the run ends, with no reload in between.
+    await b.page
+      .getByLabel(/^status: completed/)
+      .first()
+      .waitFor({ timeout: 60_000 });
+    await b.page.getByText('2 of 2 done').waitFor();
+    await b.page
+      .getByTestId('run-check-tally')
+      .getByText(/◊ 1 stopped by an error/)
+      .waitFor();
+    await b.page
+      .getByTestId('matrix-summary')
+      .getByText(/◊ 1 stopped by an error/)
+      .waitFor();
+    expect(await b.page.getByText(/waiting its turn|running now/).count()).toBe(0);
+    expect(await b.page.getByText(/of this run checked nothing/).textContent()).toMatch(/^• 1 check of this run/);
+
+    // The error cell says why, and leads to the target's page rather than to an empty failure table.
+    const errorCell = b.page.getByTestId(`cell-cbrt-principal-sz-${TARGET}`);
+    await errorCell.getByText(`has no cbrt`, { exact: false }).waitFor();
+    expect(await errorCell.getAttribute('href')).toBe(`/libraries/target?name=${encodeURIComponent(TARGET)}`);
+    await saveScreenshots(b.page, 'day-run-page-small-run', () => errorCell.waitFor());
+    await errorCell.click();
+    await b.page.waitForURL(/\/libraries\/target\?name=/);
+    await b.page.getByText('Convention fingerprint', { exact: false }).first().waitFor();
+  });
+
+  it('filters the failure table by the short id a run shows, and says beside the field when it names no run', async () => {
+    await signIn(b.page, kwame.email, kwame.password);
+    const runs = await api<{ body: { runs: { id: string; counts: { fail: number } }[] } }>(
+      b.page,
+      '/runs?status=completed&limit=25',
+    );
+    const failing = runs.body.runs.find((r) => r.counts.fail > 0)!;
+    await b.page.goto(`${BASE_URL}/failures?run=${shortRunId(failing.id)}`);
+    await b.page.getByText(/^\d+ failures? shown/).waitFor();
+    expect(await b.page.getByText(/no run|more than one run/).count()).toBe(0);
+
+    await b.page.goto(`${BASE_URL}/failures?run=ffffffff`);
+    await b.page.getByText('× Run id names no run ("ffffffff")').waitFor();
+    await b.page.getByText('× No failures shown: change the filter marked above.').waitFor();
+    await saveScreenshots(b.page, 'day-run-page-run-filter', () =>
+      b.page.getByText('× Run id names no run ("ffffffff")').waitFor(),
+    );
+  });
+
+  it("shows a phone the verdict and the checks that need a look first on the demo's largest run", async () => {
+    await signIn(b.page, kwame.email, kwame.password);
+    const runs = await api<{ body: { runs: { id: string; shardsTotal: number }[] } }>(
+      b.page,
+      '/runs?status=completed&limit=25',
+    );
+    const largest = [...runs.body.runs].sort((x, y) => y.shardsTotal - x.shardsTotal)[0]!;
+    await b.page.setViewportSize({ width: 390, height: 844 });
+    await b.page.goto(`${BASE_URL}/runs/${largest.id}`);
+    const firstCell = b.page.locator('[data-testid^="cell-"]').first();
+    await firstCell.waitFor();
+    await b.page.getByText('Property checks', { exact: true }).waitFor();
+    await b.page.getByTestId('property-summary').waitFor();
+    const height = await screenHeight(b.page);
+    // The figure the report quotes: 30,851 px on the same run before the matrix folded (issue 15).
+    console.log(`run page at 390×844 on the largest demo run (${largest.shardsTotal} checks): ${height} px`);
+    expect(height).toBeLessThan(15_000);
+    // The verdict is in the first screenful.
+    const badge = await b.page
+      .getByLabel(/^status: /)
+      .first()
+      .boundingBox();
+    expect(badge!.y).toBeLessThan(844);
+    const fold = b.page.getByRole('button', { name: /^Show the \d+ suites? that passed on every library version$/ });
+    expect(await fold.count()).toBe(1);
+    await saveScreenshots(b.page, 'day-run-page-largest-run', () => firstCell.waitFor());
+    await fold.click();
+    const hide = b.page.getByRole('button', { name: /^Hide the \d+ suites? that passed/ });
+    await hide.waitFor();
+    expect(await hide.getAttribute('aria-expanded')).toBe('true');
+  });
+});
