@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { PropertyOutcome } from '../../shared/property-outcome';
 import type { RunPropertyRow } from '../../shared/run-property-row';
@@ -20,9 +20,12 @@ const plural = (n: number, word: string) => `${n.toLocaleString('en-GB')} ${word
  * and for a failure the shrunk counterexample, the library's values with the law's two sides marked
  * and fast-check's replay path (shared/property-failure-parts.ts, as in the CLI's outputs).
  * Pairs with a failure or an unchecked law come first and open; a pair whose every law held is
- * one folded line (a 50-pair run would otherwise list every held law in full).
+ * one folded line (a 50-pair run would otherwise list every held law in full). On a phone every
+ * pair starts folded to one line of counts, failures first: a failure's counterexample, values
+ * and replay path are a screenful each, and the demo's largest run listed them all.
  */
 export function PropertyChecks({ rows }: { rows: RunPropertyRow[] }) {
+  const wide = useWindowDimensions().width >= theme.wide;
   const [opened, setOpened] = useState<ReadonlySet<string>>(new Set());
   const groups = new Map<string, RunPropertyRow[]>();
   for (const row of rows) {
@@ -49,21 +52,42 @@ export function PropertyChecks({ rows }: { rows: RunPropertyRow[] }) {
       </SkText>
       {ordered.map(([pair, checks]) => {
         const allHeld = rank(checks) === 2;
-        const open = !allHeld || opened.has(pair);
+        const foldable = allHeld || !wide;
+        const open = !foldable || opened.has(pair);
+        const of = (kind: PropertyOutcome['kind']) => checks.filter((r) => r.outcome.kind === kind).length;
+        const counts = (['failed', 'not-checked', 'held'] as const)
+          .filter((kind) => of(kind) > 0)
+          .map((kind) => ({ kind, text: `${KIND[kind].glyph} ${of(kind)} ${KIND[kind].word}` }));
         return (
           <View key={pair} style={styles.group} testID={`property-pair-${pair}`}>
-            {allHeld ? (
+            {foldable ? (
               <Pressable
                 accessibilityRole="button"
-                accessibilityLabel={`${open ? 'Hide' : 'Show'} the ${plural(checks.length, 'law')} that held for ${pair}`}
+                accessibilityLabel={
+                  allHeld
+                    ? `${open ? 'Hide' : 'Show'} the ${plural(checks.length, 'law')} that held for ${pair}`
+                    : `${open ? 'Hide' : 'Show'} the ${plural(checks.length, 'law')} checked for ${pair}: ${counts.map((c) => c.text.slice(2)).join(', ')}`
+                }
                 aria-expanded={open}
                 onPress={() => toggle(pair)}
                 style={styles.foldRow}
               >
                 <SkText variant="mono">{pair}</SkText>
-                <Text style={[styles.kind, { color: OUTCOME_TONE.pass.ink }]}>
-                  {KIND.held.glyph} all {plural(checks.length, 'law')} held {open ? '↑' : '↓'}
-                </Text>
+                {allHeld ? (
+                  <Text style={[styles.kind, { color: OUTCOME_TONE.pass.ink }]}>
+                    {KIND.held.glyph} all {plural(checks.length, 'law')} held {open ? '↑' : '↓'}
+                  </Text>
+                ) : (
+                  <Text style={styles.kind}>
+                    {counts.map((c, i) => (
+                      <Text key={c.kind} style={{ color: OUTCOME_TONE[KIND[c.kind].tone].ink }}>
+                        {i > 0 ? ' · ' : ''}
+                        {c.text}
+                      </Text>
+                    ))}{' '}
+                    {open ? '↑' : '↓'}
+                  </Text>
+                )}
               </Pressable>
             ) : (
               <SkText variant="mono">{pair}</SkText>

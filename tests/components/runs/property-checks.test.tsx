@@ -1,5 +1,6 @@
 import { act, fireEvent, render, screen, within } from '@testing-library/react';
 import { PropertyChecks } from '../../../components/runs/property-checks';
+import { setScreenWidth } from '../../setup/set-screen-width';
 import type { RunPropertyRow } from '../../../shared/run-property-row';
 
 // Invented rows for the screen only; the laws' own checks are tested under tests/harness.
@@ -55,6 +56,8 @@ const rows: RunPropertyRow[] = [
 ];
 
 describe('PropertyChecks', () => {
+  beforeEach(() => setScreenWidth(1440));
+
   it('counts the checks by outcome and lists pairs with a failure first, then unchecked, then held', () => {
     render(<PropertyChecks rows={rows} />);
     expect(screen.getByTestId('property-summary').textContent).toBe(
@@ -99,5 +102,25 @@ describe('PropertyChecks', () => {
         .getByRole('button', { name: 'Hide the 2 laws that held for sqrt-principal-sz × complex.js@2.4.3' })
         .getAttribute('aria-expanded'),
     ).toBe('true');
+  });
+
+  it('folds every pair on a phone to one line of counts, failures first, and opens one on a tap', async () => {
+    setScreenWidth(390);
+    render(<PropertyChecks rows={rows} />);
+    expect(screen.queryByTestId('property-log-principal-sz × complex.js@2.4.3-conjugate-symmetry')).toBeNull();
+    const folds = screen.getAllByRole('button').map((b) => b.textContent);
+    expect(folds).toEqual([
+      'log-principal-sz × complex.js@2.4.3❌ 1 failed · ✓ 1 held ↓',
+      'acos-principal-sz × complex.js@2.4.3− 1 not checked ↓',
+      'sqrt-principal-sz × complex.js@2.4.3✓ all 2 laws held ↓',
+    ]);
+    await act(() =>
+      fireEvent.click(
+        screen.getByRole('button', {
+          name: 'Show the 2 laws checked for log-principal-sz × complex.js@2.4.3: 1 failed, 1 held',
+        }),
+      ),
+    );
+    expect(screen.getByTestId('property-log-principal-sz × complex.js@2.4.3-conjugate-symmetry')).toBeTruthy();
   });
 });
