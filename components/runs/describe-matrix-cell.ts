@@ -6,6 +6,7 @@ import { DIAGNOSIS_KINDS } from '../../shared/diagnosis-kinds';
 import type { RunMatrixCell } from '../../shared/run-matrix-cell';
 import { targetPageHref } from '../libraries/target-page-href';
 import { failuresHref } from './failures-href';
+import { judgedPoints } from './judged-points';
 import { OUTCOME_GLYPH } from './outcome-glyph';
 import type { Tone } from './outcome-tone';
 import { waitingForWorkerWords } from './waiting-for-worker-words';
@@ -68,7 +69,7 @@ export function describeMatrixCell(cell: RunMatrixCell, runId: string): MatrixCe
     };
   }
   const counts = cell.counts ?? { pass: 0, fail: 0, error: 0, skipped: 0, notApplicable: 0 };
-  const judged = counts.pass + counts.fail;
+  const judged = judgedPoints(cell);
   const hasRows = counts.fail + counts.error > 0;
   const reasons = cell.skipReasons;
   // The harness's generic note ("nothing was checked: every point was skipped …") says less than the reasons.

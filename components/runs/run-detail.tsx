@@ -18,6 +18,7 @@ import { RunMatrix } from './run-matrix';
 import { ScreenBody } from '../ui/screen-body';
 import { shortRunId } from '../../shared/short-run-id';
 import { describeMatrixCell } from './describe-matrix-cell';
+import { judgedPoints } from './judged-points';
 import { tallyCells } from './tally-cells';
 
 /** One run: its header and progress, what it checked, its matrix (each suite against each library version) and its property checks; live while it runs. */
@@ -51,7 +52,10 @@ export function RunDetail({ id, openedExisting = false }: { id: string; openedEx
 
   const cells = matrix.data ?? [];
   const checks = matrix.data ? tallyCells(cells.map((c) => describeMatrixCell(c, id))) : undefined;
-  const scopes = cells.map((c) => c.checked).filter((s): s is CheckedScope => s !== null && s.points > 0);
+  const scopes = cells
+    .filter((c) => judgedPoints(c) > 0)
+    .map((c) => c.checked)
+    .filter((s): s is CheckedScope => s !== null && s.points > 0);
   const notChecked = cells.length - scopes.length;
   const outcomes = properties.data?.map((p) => p.outcome.kind) ?? [];
   const propertySummary = properties.data

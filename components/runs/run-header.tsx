@@ -35,7 +35,7 @@ export function RunHeader({ run, canCancel, checks }: { run: RunView; canCancel:
   ];
   return (
     <View style={styles.card}>
-      <RunStatusBadge run={run} />
+      <RunStatusBadge run={run} checks={checks} />
       <View style={styles.facts}>
         {facts.map(([label, value]) => (
           <View key={label} style={styles.fact}>

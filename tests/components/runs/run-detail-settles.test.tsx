@@ -100,12 +100,12 @@ describe('RunDetail when its run finishes while the page is open', () => {
     });
   });
 
-  it('counts the checks stopped by an error in the header as the matrix does, whatever the point counts say', async () => {
+  it('counts the checks stopped by an error in the header and in what was checked as the matrix does, whatever the point counts and scopes say', async () => {
     const errorCell = (suite: string): RunMatrixCell => ({
       ...cell(suite, true),
       outcome: 'error',
       counts: { pass: 0, fail: 0, error: 0, skipped: 40, notApplicable: 0 },
-      checked: null,
+      // The scope it was to cover stays; none of it was checked.
       skipReasons: [{ reason: `${TARGET} has no acsch`, count: 40, lacks: ['acsch'] }],
     });
     mockFetchRoutes((url) => {
@@ -131,10 +131,18 @@ describe('RunDetail when its run finishes while the page is open', () => {
     });
     jest.useRealTimers();
     renderWithClient(<RunDetail id={RUNNING_RUN.id} />);
-    await waitFor(() => expect(screen.getByTestId('run-check-tally')).toBeTruthy());
+    // Real timers here, and a loaded machine: give the three answers time to arrive.
+    await waitFor(() => expect(screen.getByTestId('run-check-tally')).toBeTruthy(), { timeout: 5_000 });
     expect(screen.getByTestId('run-check-tally').textContent).toBe(
       '✓ 1 passed · ❌ 0 with failures · ◊ 2 stopped by an error',
     );
     expect(screen.getByTestId('matrix-summary').textContent).toContain('◊ 2 stopped by an error');
+    // Not "all checked points passed": two checks checked nothing.
+    expect(screen.getByLabelText('status: completed with errors')).toBeTruthy();
+    // What was checked counts the one check that judged points, and names the two that did not.
+    expect(
+      screen.getByText(/^• 1 check of a suite against a library version, 2 paths, 40 points in all\.$/),
+    ).toBeTruthy();
+    expect(screen.getByText(/^• 2 checks of this run checked nothing/)).toBeTruthy();
   });
 });
