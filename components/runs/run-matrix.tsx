@@ -168,30 +168,50 @@ function MatrixCellView({ cell, words, layout }: { cell: RunMatrixCell; words: M
     layout === 'grid' ? styles.gridCell : layout === 'row' ? styles.rowCell : styles.lineCell,
     { backgroundColor: tone.soft, borderLeftColor: tone.edge },
   ]);
-  const content = (
-    <>
-      {layout !== 'grid' ? (
-        <SkText variant="mono" tone="inkSoft" style={styles.rowTarget}>
-          {cell.target}
-        </SkText>
-      ) : null}
+  const headline = <Text style={[styles.headline, { color: tone.ink }]}>{words.headline}</Text>;
+  const linkWords = words.link ? (
+    <SkText variant="smallLabel" tone="accent">
+      {words.link.words}
+    </SkText>
+  ) : null;
+  const target = (
+    <SkText variant="mono" tone="inkSoft" style={layout === 'line' ? styles.rowTarget : null}>
+      {cell.target}
+    </SkText>
+  );
+  // A phone's row: the target, outcome and link on one line, the details as one paragraph of at
+  // most three lines below (each on its own line, a failing check was ~140 px tall; all of it is
+  // in the label for a screen reader).
+  const content =
+    layout === 'grid' ? (
       <View style={styles.cellWords}>
-        <Text style={[styles.headline, { color: tone.ink }]}>{words.headline}</Text>
-        {layout !== 'line'
-          ? words.details.map((line, i) => (
-              <SkText variant="caption" key={i} numberOfLines={3}>
-                {line}
-              </SkText>
-            ))
-          : null}
-        {words.link ? (
-          <SkText variant="smallLabel" tone="accent">
-            {words.link.words}
+        {headline}
+        {words.details.map((line, i) => (
+          <SkText variant="caption" key={i} numberOfLines={3}>
+            {line}
+          </SkText>
+        ))}
+        {linkWords}
+      </View>
+    ) : layout === 'row' ? (
+      <>
+        <View style={styles.rowHead}>
+          {target}
+          {headline}
+          {linkWords}
+        </View>
+        {words.details.length > 0 ? (
+          <SkText variant="caption" numberOfLines={3}>
+            {words.details.join(' · ')}
           </SkText>
         ) : null}
-      </View>
-    </>
-  );
+      </>
+    ) : (
+      <>
+        {target}
+        {headline}
+      </>
+    );
   if (!words.link) {
     return (
       <View style={frame} accessibilityLabel={words.label} testID={`cell-${cell.suite}-${cell.target}`}>
@@ -249,13 +269,14 @@ const styles = StyleSheet.create({
   },
   rowCell: {
     minHeight: theme.touch,
-    flexDirection: 'row',
-    alignItems: 'center',
-    gap: theme.space(3),
-    padding: theme.space(3),
+    justifyContent: 'center',
+    gap: 2,
+    paddingVertical: theme.space(2),
+    paddingHorizontal: theme.space(3),
     borderLeftWidth: 4,
     borderRadius: 4,
   },
+  rowHead: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', columnGap: theme.space(3) },
   lineCell: {
     flexDirection: 'row',
     alignItems: 'center',
