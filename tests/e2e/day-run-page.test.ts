@@ -4,6 +4,7 @@ import { shortRunId } from '../../shared/short-run-id';
 import { BASE_URL } from './support/open-browser';
 import { browserPerTest } from './support/browser-per-test';
 import { goTo } from './support/go-to';
+import { pageApi } from './support/page-api';
 import { saveScreenshots } from './support/save-screenshots';
 import { signIn } from './support/sign-in';
 
@@ -13,18 +14,6 @@ const kwame = DEMO_USERS.find((u) => u.email === 'kwame@sheetkeeper.test')!;
 /** complex.js has no cbrt (harness/adapters/complex-js-target.ts asks the package), so that check stops on an error. */
 const TARGET = 'complex.js@2.4.3';
 const SUITES = ['sqrt-principal-sz', 'cbrt-principal-sz'];
-
-/** The API as the signed-in page sees it (same origin, session cookie); plain promise chains for the page's sake. */
-const api = <T>(page: Page, path: string, method = 'GET', body?: unknown): Promise<T> =>
-  page.evaluate(
-    (arg) =>
-      fetch('/api' + arg.path, {
-        method: arg.method,
-        headers: arg.body ? { 'content-type': 'application/json' } : {},
-        body: arg.body ? JSON.stringify(arg.body) : undefined,
-      }).then((res) => res.json().then((json) => ({ status: res.status, body: json }))),
-    { path, method, body },
-  ) as Promise<T>;
 
 /** How tall the screen is, scrolled in full: the app scrolls inside its own frame, not the document. */
 const screenHeight = (page: Page): Promise<number> =>
@@ -40,7 +29,7 @@ const screenHeight = (page: Page): Promise<number> =>
 describe("the run page through a maintainer's day", () => {
   it('watches a small run finish and settle without a reload, and follows its error cell to the reason', async () => {
     await signIn(b.page, kwame.email, kwame.password);
-    const made = await api<{ status: number; body: { plan: { id: string } } }>(b.page, '/plans', 'POST', {
+    const made = await pageApi(b.page)<{ status: number; body: { plan: { id: string } } }>('/plans', 'POST', {
       name: 'Roots on one release',
       description: 'Square and cube roots against complex.js 2.4.3, for the run page journey.',
       recipients: [],
@@ -86,8 +75,7 @@ describe("the run page through a maintainer's day", () => {
 
   it('filters the failure table by the short id a run shows, and says beside the field when it names no run', async () => {
     await signIn(b.page, kwame.email, kwame.password);
-    const runs = await api<{ body: { runs: { id: string; counts: { fail: number } }[] } }>(
-      b.page,
+    const runs = await pageApi(b.page)<{ body: { runs: { id: string; counts: { fail: number } }[] } }>(
       '/runs?status=completed&limit=25',
     );
     const failing = runs.body.runs.find((r) => r.counts.fail > 0)!;
@@ -105,8 +93,7 @@ describe("the run page through a maintainer's day", () => {
 
   it("shows a phone the verdict and the checks that need a look first on the demo's largest run", async () => {
     await signIn(b.page, kwame.email, kwame.password);
-    const runs = await api<{ body: { runs: { id: string; shardsTotal: number }[] } }>(
-      b.page,
+    const runs = await pageApi(b.page)<{ body: { runs: { id: string; shardsTotal: number }[] } }>(
       '/runs?status=completed&limit=25',
     );
     const largest = [...runs.body.runs].sort((x, y) => y.shardsTotal - x.shardsTotal)[0]!;

@@ -71,6 +71,13 @@ const CELLS: RunMatrixCell[] = [
   cell({ suite: 'acos-principal-sz', target: 'complex.js@2.4.2' }),
 ];
 
+/** The cells above and a suite that passed on both targets. */
+const WITH_PASSING_SUITE: RunMatrixCell[] = [
+  ...CELLS,
+  cell({ suite: 'exp-principal-sz' }),
+  cell({ suite: 'exp-principal-sz', target: 'complex.js@2.4.2' }),
+];
+
 const cellOf = (suite: string, target: string) => screen.getByTestId(`cell-${suite}-${target}`);
 /** Whether a cell shows `text`: a line of its own on a wide screen, part of one paragraph of details on a phone. */
 const shows = (cell: HTMLElement, text: string) => (cell.textContent ?? '').includes(text);
@@ -194,16 +201,7 @@ describe.each([
 
 it('can hide the suites that passed everywhere on a wide screen', () => {
   setScreenWidth(1440);
-  render(
-    <RunMatrix
-      runId={RUN}
-      cells={[
-        ...CELLS,
-        cell({ suite: 'exp-principal-sz' }),
-        cell({ suite: 'exp-principal-sz', target: 'complex.js@2.4.2' }),
-      ]}
-    />,
-  );
+  render(<RunMatrix runId={RUN} cells={WITH_PASSING_SUITE} />);
   expect(screen.queryByText('exp-principal-sz')).not.toBeNull();
   fireEvent.click(screen.getByRole('switch', { name: 'Show only suites that need a look' }));
   expect(screen.queryByText('exp-principal-sz')).toBeNull();
@@ -215,16 +213,7 @@ it('can hide the suites that passed everywhere on a wide screen', () => {
 
 it('shows a phone the suites that need a look first, with their passing checks one line each, and folds the rest', () => {
   setScreenWidth(390);
-  render(
-    <RunMatrix
-      runId={RUN}
-      cells={[
-        ...CELLS,
-        cell({ suite: 'exp-principal-sz' }),
-        cell({ suite: 'exp-principal-sz', target: 'complex.js@2.4.2' }),
-      ]}
-    />,
-  );
+  render(<RunMatrix runId={RUN} cells={WITH_PASSING_SUITE} />);
   const headers = screen.getAllByRole('heading').map((h) => h.textContent);
   expect(headers).toEqual(['acos-principal-sz', 'log-principal-sz', 'sqrt-principal-sz']);
   // A passing check in a card that needs a look: its outcome only, no detail lines.
