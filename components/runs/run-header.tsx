@@ -73,7 +73,7 @@ export function RunHeader({ run, canCancel, checks }: { run: RunView; canCancel:
       {checks ? (
         <View style={styles.counted}>
           <SkText variant="smallLabel" tone="inkFaint" style={styles.label}>
-            Checks
+            Check outcomes
           </SkText>
           <SkText variant="body" testID="run-check-tally">
             {tallyWords(checks)}
