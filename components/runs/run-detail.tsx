@@ -50,8 +50,14 @@ export function RunDetail({ id, openedExisting = false }: { id: string; openedEx
     );
   }
 
-  const cells = matrix.data ?? [];
-  const checks = matrix.data ? tallyCells(cells.map((c) => describeMatrixCell(c, id))) : undefined;
+  // Cells waiting or running under a finished run are from a poll before its end, and the final
+  // fetch (use-run.ts) is on its way: say so rather than show them under "completed".
+  const finishing =
+    live === false &&
+    matrix.isFetching &&
+    (matrix.data ?? []).some((c) => c.status === 'queued' || c.status === 'running');
+  const cells = finishing ? [] : (matrix.data ?? []);
+  const checks = matrix.data && !finishing ? tallyCells(cells.map((c) => describeMatrixCell(c, id))) : undefined;
   const scopes = cells
     .filter((c) => judgedPoints(c) > 0)
     .map((c) => c.checked)
@@ -79,7 +85,7 @@ export function RunDetail({ id, openedExisting = false }: { id: string; openedEx
       ) : null}
       <RunHeader run={run.data} canCancel={me?.role === 'maintainer' || me?.role === 'admin'} checks={checks} />
       {live ? <LiveWorkersNote /> : null}
-      {matrix.data ? (
+      {matrix.data && !finishing ? (
         <CheckedScopeNote scopes={scopes} checksNotChecked={notChecked} properties={propertySummary} subject="matrix" />
       ) : null}
 
@@ -88,6 +94,10 @@ export function RunDetail({ id, openedExisting = false }: { id: string; openedEx
       </SkText>
       {matrix.isPending ? (
         <QueryState state="loading" />
+      ) : finishing ? (
+        <SkText variant="body" tone="inkSoft" accessibilityLiveRegion="polite" testID="matrix-finishing">
+          Fetching this run&apos;s final results…
+        </SkText>
       ) : matrix.isError ? (
         <QueryState state="error" message={matrix.error.message} onRetry={() => void matrix.refetch()} />
       ) : cells.length === 0 ? (

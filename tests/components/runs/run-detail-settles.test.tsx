@@ -82,6 +82,31 @@ describe('RunDetail when its run finishes while the page is open', () => {
     expect(server.calls).toHaveLength(asked);
   });
 
+  it('never shows cells waiting under a finished run while the final matrix is on its way', async () => {
+    const server = fakeServer();
+    // The final answer of the matrix takes 2 s (a large run on a loaded machine); the run's own answer is quick.
+    const quick = global.fetch;
+    let finished = false;
+    global.fetch = jest.fn(async (url: string | URL | Request, init?: RequestInit) => {
+      if (finished && String(url).endsWith('/matrix')) await new Promise((done) => setTimeout(done, 2_000));
+      return quick(url, init);
+    }) as typeof fetch;
+    renderWithClient(<RunDetail id={RUNNING_RUN.id} />);
+    await waitFor(() => expect(screen.getAllByText(/waiting its turn/).length).toBe(2));
+    server.finish();
+    finished = true;
+    await act(() => jest.advanceTimersByTimeAsync(1_600));
+    await waitFor(() => expect(screen.getByText(/3 of 3 done/)).toBeTruthy());
+    expect(screen.queryAllByText(/waiting its turn/)).toHaveLength(0);
+    expect(screen.queryByText(/checked nothing/)).toBeNull();
+    expect(screen.getByTestId('matrix-finishing').textContent).toBe("Fetching this run's final results…");
+    await act(() => jest.advanceTimersByTimeAsync(2_100));
+    expect(screen.queryByTestId('matrix-finishing')).toBeNull();
+    expect(screen.getByTestId('matrix-summary').textContent).toBe(
+      '3 checks (3 suites × 1 library version): ✓ 3 passed · ❌ 0 with failures · ◊ 0 stopped by an error',
+    );
+  });
+
   it("asks once more for each of the run's other queries when the run is seen to finish", async () => {
     const server = fakeServer();
     renderWithClient(<RunDetail id={RUNNING_RUN.id} />);
