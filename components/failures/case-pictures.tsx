@@ -4,7 +4,6 @@ import { theme } from '../../constants/theme';
 import type { FailurePathView } from '../../shared/failure-path-view';
 import { SkText } from '../ui/sk-text';
 import { DIAGNOSIS_STYLES, type DiagnosisTone } from './diagnosis-styles';
-import { fitPlaneView } from '../pictures/fit-plane-view';
 import { PathPlots } from '../pictures/path-plots';
 import { PlanePicture, type PlanePictureProps } from '../pictures/plane-picture';
 import { QueryState } from '../ui/query-state';
@@ -55,7 +54,7 @@ function planeProps(v: FailurePathView) {
   // the whole path would be one dot per place, so the picture shows this case's place across the cut.
   const near = v.path.kind === 'straddle' && focus ? zs.filter((p) => p.t === focus.t).map((p) => p.z!) : null;
   return {
-    view: near && near.length > 1 ? fitPlaneView(near) : undefined,
+    fitTo: near && near.length > 1 ? near : undefined,
     paths: CONTINUOUS.has(v.path.kind) ? [{ name: v.path.name, points: zs.map((p) => p.z!) }] : [],
     cuts: v.cuts,
     branchPoints: v.branchPoints,

@@ -1,10 +1,15 @@
-import { useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { StyleSheet, Text, View, type LayoutChangeEvent } from 'react-native';
-import Svg, { Circle, G, Line, Path, Polyline, Rect, Text as SvgText } from 'react-native-svg';
+import Svg, { Circle, G, Line, Path, Polyline, Rect } from 'react-native-svg';
 import { theme } from '../../constants/theme';
+import { SmallButton } from '../ui/small-button';
+import { ChartText } from './chart-text';
+import { decadeText } from './decade-text';
+import { describePlaneScale } from './describe-plane-scale';
 import { fitPlaneView, type PlaneView } from './fit-plane-view';
 import { LegendEntry } from './legend-entry';
 import { MARK_STYLES, type MarkTone } from './mark-styles';
+import { zoomPlaneView } from './zoom-plane-view';
 
 export interface PlanePoint {
   re: number;
@@ -34,19 +39,31 @@ export interface PlanePictureProps {
    * and glyph, so the colour is never the only sign of it.
    */
   marks?: { at: PlanePoint; tone: MarkTone; kind?: { word: string; glyph: string; color: string } }[];
-  /** The box to show; fitted to everything drawn when absent. */
+  /** A fixed box of the plane to show (a cut map's sampled box); fitted by `fitPlaneView` when absent. */
   view?: PlaneView;
+  /** The points the fit must keep in view; every path, point set and mark when absent. */
+  fitTo?: PlanePoint[];
   /** Height in px; the width follows the container. */
   height?: number;
   testID?: string;
 }
 
 const PAD = 28;
+/**
+ * Each press zooms by this factor. In by at most 2^30 (past it a double's 52 bits show their
+ * grain), out by at most 2^10 (a ray is drawn 1e4 box units long: fit-plane-view.ts).
+ */
+const ZOOM_STEP = 2;
+const ZOOM_IN_LIMIT = 30;
+const ZOOM_OUT_LIMIT = 10;
 
 /**
- * The complex plane with paths, cuts, branch points and evaluated points. Equal scale on both
- * axes, so angles and circles look like what they are. Each mark tone has a distinct shape and
- * the legend names it, so colour never carries the meaning alone.
+ * The complex plane with paths, cuts, branch points and evaluated points, fitted to the
+ * picture's own points (fit-plane-view.ts: linear, or a log scale of distance from the nearest
+ * branch point or cut where scales differ by orders of magnitude, said under the picture and on
+ * it). Equal scale on both axes, so angles and circles look like what they are. Zoom in, out and
+ * back with the buttons, or with +, − and 0 while the picture has the keyboard focus. Each mark
+ * tone has a distinct shape and the legend names it, so colour never carries the meaning alone.
  */
 export function PlanePicture({
   label,
@@ -57,62 +74,145 @@ export function PlanePicture({
   branchPoints = [],
   marks = [],
   view,
+  fitTo,
   height = 320,
   testID,
 }: PlanePictureProps) {
   const [width, setWidth] = useState(0);
+  const [zoomPower, setZoomPower] = useState(0);
+  const picture = useRef<View>(null);
   const onLayout = (e: LayoutChangeEvent) => setWidth(Math.round(e.nativeEvent.layout.width));
-  const box =
-    view ??
-    fitPlaneView([
+  const zoomBy = (step: number) =>
+    setZoomPower((z) => (step === 0 ? 0 : Math.max(-ZOOM_OUT_LIMIT, Math.min(ZOOM_IN_LIMIT, z + step))));
+  // Keys on the web only: a focused picture takes +, − and 0 (React Native's View has no key events elsewhere).
+  useEffect(() => {
+    const node = picture.current as unknown as {
+      addEventListener?: HTMLElement['addEventListener'];
+      removeEventListener?: HTMLElement['removeEventListener'];
+    } | null;
+    if (!node?.addEventListener) return;
+    const onKey = (e: KeyboardEvent) => {
+      const step =
+        e.key === '+' || e.key === '=' ? 1 : e.key === '-' || e.key === '\u2212' ? -1 : e.key === '0' ? 0 : null;
+      if (step === null) return;
+      e.preventDefault();
+      zoomBy(step);
+    };
+    node.addEventListener('keydown', onKey);
+    return () => node.removeEventListener?.('keydown', onKey);
+  }, []);
+
+  const focus = marks.find((m) => m.tone === 'focus')?.at;
+  const fit = fitPlaneView({
+    points: fitTo ?? [
       ...paths.flatMap((p) => p.points),
       ...pointSets.flatMap((p) => p.points),
-      ...cuts.flatMap((c) => c.points),
-      ...branchPoints,
       ...marks.map((m) => m.at),
-    ]);
+    ],
+    branchPoints,
+    cuts,
+    focus,
+    box: view,
+  });
+  const zoom = ZOOM_STEP ** zoomPower;
+  const box = zoomPlaneView(fit.box, zoom);
   const innerW = Math.max(1, width - 2 * PAD);
   const innerH = Math.max(1, height - 2 * PAD);
-  // Equal scale: the box is widened along one axis to the picture's aspect ratio.
-  const scale = Math.min(innerW / (box.maxRe - box.minRe), innerH / (box.maxIm - box.minIm));
-  const midRe = (box.minRe + box.maxRe) / 2;
-  const midIm = (box.minIm + box.maxIm) / 2;
-  const x = (re: number) => width / 2 + (re - midRe) * scale;
-  const y = (im: number) => height / 2 - (im - midIm) * scale;
+  // Box units per pixel, by division: a box 2e-310 wide has 1e312 px per unit, which is no double.
+  const unit = Math.max((box.maxRe - box.minRe) / innerW, (box.maxIm - box.minIm) / innerH);
+  const x = (v: PlanePoint) => width / 2 + (v.re - (box.minRe + box.maxRe) / 2) / unit;
+  const y = (v: PlanePoint) => height / 2 - (v.im - (box.minIm + box.maxIm) / 2) / unit;
+  const at = (p: PlanePoint) => {
+    const v = fit.project(p);
+    return { cx: x(v), cy: y(v) };
+  };
+  const polyline = (pts: PlanePoint[]) =>
+    pts
+      .map(fit.project)
+      .map((v) => `${x(v)},${y(v)}`)
+      .join(' ');
   const visible = (p: PlanePoint) => Number.isFinite(p.re) && Number.isFinite(p.im);
-  const far = (2 * (width + height)) / scale;
   const legendOf = (m: (typeof marks)[number]) =>
     m.kind ? `${m.kind.glyph} ${MARK_STYLES[m.tone].word}: ${m.kind.word}` : MARK_STYLES[m.tone].word;
   const legendMarks = [...new Map(marks.map((m) => [legendOf(m), m])).values()];
+  const scaleWords = describePlaneScale(fit, box);
+  const log = fit.scale.kind === 'log' ? fit.scale : null;
+  const origin = fit.project({ re: 0, im: 0 });
+  const zoomWords = `zoom ${zoom >= 1 ? `${zoom}×` : `1/${1 / zoom}×`}`;
 
   return (
     <View style={styles.frame} onLayout={onLayout} testID={testID}>
-      <View accessible accessibilityRole="image" accessibilityLabel={label} style={{ height }}>
+      <View
+        ref={picture}
+        accessible
+        focusable
+        accessibilityRole="image"
+        accessibilityLabel={`${label} Scale: ${scaleWords}; ${zoomWords}. Press + or − to zoom, 0 to reset.`}
+        style={{ height }}
+      >
         {width > 0 ? (
           <Svg width={width} height={height}>
             <Rect x={0} y={0} width={width} height={height} fill={theme.color.panel} />
-            <Line x1={0} x2={width} y1={y(0)} y2={y(0)} stroke={theme.color.rule} strokeWidth={1} />
-            <Line x1={x(0)} x2={x(0)} y1={0} y2={height} stroke={theme.color.rule} strokeWidth={1} />
-            <SvgText x={width - 6} y={y(0) - 6} fontSize={11} fill={theme.color.inkFaint} textAnchor="end">
-              Re
-            </SvgText>
-            <SvgText x={x(0) + 6} y={12} fontSize={11} fill={theme.color.inkFaint}>
-              Im
-            </SvgText>
+            {log ? (
+              <G>
+                <Line
+                  x1={0}
+                  x2={width}
+                  y1={y({ re: 0, im: 0 })}
+                  y2={y({ re: 0, im: 0 })}
+                  stroke={theme.color.rule}
+                  strokeWidth={1}
+                />
+                <Line
+                  x1={x({ re: 0, im: 0 })}
+                  x2={x({ re: 0, im: 0 })}
+                  y1={0}
+                  y2={height}
+                  stroke={theme.color.rule}
+                  strokeWidth={1}
+                />
+                {log.rings.map((r) => (
+                  <G key={`ring-${r.exponent}`}>
+                    <Circle
+                      cx={x({ re: 0, im: 0 })}
+                      cy={y({ re: 0, im: 0 })}
+                      r={r.radius / unit}
+                      fill="none"
+                      stroke={theme.color.rule}
+                      strokeWidth={1}
+                      strokeDasharray="2 3"
+                    />
+                    <ChartText
+                      x={x({ re: 0, im: 0 }) + r.radius / unit / Math.SQRT2 + 3}
+                      y={y({ re: 0, im: 0 }) - r.radius / unit / Math.SQRT2 - 3}
+                    >
+                      {decadeText(r.exponent)}
+                    </ChartText>
+                  </G>
+                ))}
+                <ChartText x={8} y={16} fill={theme.color.ink}>
+                  {`distance from ${log.centerIs === 'branch point' ? 'the branch point' : 'the cut'}, log scale`}
+                </ChartText>
+              </G>
+            ) : (
+              <G>
+                <Line x1={0} x2={width} y1={y(origin)} y2={y(origin)} stroke={theme.color.rule} strokeWidth={1} />
+                <Line x1={x(origin)} x2={x(origin)} y1={0} y2={height} stroke={theme.color.rule} strokeWidth={1} />
+                <ChartText x={width - 6} y={y(origin) - 6} textAnchor="end">
+                  Re
+                </ChartText>
+                <ChartText x={x(origin) + 6} y={12}>
+                  Im
+                </ChartText>
+              </G>
+            )}
             {cuts.map((cut, i) => {
-              const pts = cut.points.filter(visible);
+              const pts = fit.cutLine(cut);
               if (pts.length < 2) return null;
-              const ends = [...pts];
-              if (cut.toInfinity) {
-                const a = pts[pts.length - 2]!;
-                const b = pts[pts.length - 1]!;
-                const len = Math.hypot(b.re - a.re, b.im - a.im) || 1;
-                ends.push({ re: b.re + ((b.re - a.re) / len) * far, im: b.im + ((b.im - a.im) / len) * far });
-              }
               return (
                 <Polyline
                   key={`cut-${i}`}
-                  points={ends.map((p) => `${x(p.re)},${y(p.im)}`).join(' ')}
+                  points={pts.map((v) => `${x(v)},${y(v)}`).join(' ')}
                   fill="none"
                   stroke={theme.color.danger}
                   strokeWidth={3}
@@ -127,15 +227,10 @@ export function PlanePicture({
                 <G key={`line-${i}`}>
                   {/* Dots sit on a cut drawn beneath them: no joining line, so the cut's dashes stay visible between them. */}
                   {line.marker === 'cross' && pts.length > 1 ? (
-                    <Polyline
-                      points={pts.map((p) => `${x(p.re)},${y(p.im)}`).join(' ')}
-                      fill="none"
-                      stroke={color}
-                      strokeWidth={1.5}
-                    />
+                    <Polyline points={polyline(pts)} fill="none" stroke={color} strokeWidth={1.5} />
                   ) : null}
                   {pts.map((p, k) => (
-                    <LineMarker key={k} cx={x(p.re)} cy={y(p.im)} marker={line.marker} />
+                    <LineMarker key={k} {...at(p)} marker={line.marker} />
                   ))}
                 </G>
               );
@@ -144,21 +239,16 @@ export function PlanePicture({
               const pts = path.points.filter(visible);
               if (pts.length < 2) return null;
               const mid = Math.floor(pts.length / 2);
-              const a = pts[Math.max(0, mid - 1)]!;
-              const b = pts[mid]!;
-              const angle = (Math.atan2(-(b.im - a.im), b.re - a.re) * 180) / Math.PI;
+              const a = at(pts[Math.max(0, mid - 1)]!);
+              const b = at(pts[mid]!);
+              const angle = (Math.atan2(b.cy - a.cy, b.cx - a.cx) * 180) / Math.PI;
               return (
                 <G key={`path-${i}`}>
-                  <Polyline
-                    points={pts.map((p) => `${x(p.re)},${y(p.im)}`).join(' ')}
-                    fill="none"
-                    stroke={theme.color.ink}
-                    strokeWidth={1.5}
-                  />
+                  <Polyline points={polyline(pts)} fill="none" stroke={theme.color.ink} strokeWidth={1.5} />
                   <Path
                     d="M -6 -5 L 4 0 L -6 5 Z"
                     fill={theme.color.ink}
-                    transform={`translate(${x(b.re)} ${y(b.im)}) rotate(${angle})`}
+                    transform={`translate(${b.cx} ${b.cy}) rotate(${angle})`}
                   />
                 </G>
               );
@@ -166,20 +256,28 @@ export function PlanePicture({
             {pointSets.map((set, i) => (
               <G key={`set-${i}`}>
                 {set.points.filter(visible).map((p, k) => (
-                  <PointDot key={k} cx={x(p.re)} cy={y(p.im)} />
+                  <PointDot key={k} {...at(p)} />
                 ))}
               </G>
             ))}
             {marks
               .filter((m) => visible(m.at))
               .map((m, i) => (
-                <MarkShape key={`mark-${i}`} cx={x(m.at.re)} cy={y(m.at.im)} tone={m.tone} color={m.kind?.color} />
+                <MarkShape key={`mark-${i}`} {...at(m.at)} tone={m.tone} color={m.kind?.color} />
               ))}
             {branchPoints.filter(visible).map((p, i) => (
-              <BranchPointShape key={`bp-${i}`} cx={x(p.re)} cy={y(p.im)} />
+              <BranchPointShape key={`bp-${i}`} {...at(p)} />
             ))}
           </Svg>
         ) : null}
+      </View>
+      <View style={styles.zoom}>
+        <SmallButton label="Zoom in" onPress={() => zoomBy(1)} accessibilityLabel="Zoom in on the picture" />
+        <SmallButton label="Zoom out" onPress={() => zoomBy(-1)} accessibilityLabel="Zoom out of the picture" />
+        <SmallButton label="Reset zoom" onPress={() => zoomBy(0)} accessibilityLabel="Reset the picture's zoom" />
+        <Text style={styles.scale} testID={testID ? `${testID}-zoom` : undefined}>
+          {zoomWords}
+        </Text>
       </View>
       <View style={styles.legend}>
         {cuts.length ? (
@@ -209,7 +307,9 @@ export function PlanePicture({
         {pointSets.length ? (
           <LegendEntry
             text={
-              pointSets.length === 1 ? `points of ${pointSets[0]!.name}` : `points of ${pointSets.length} straddles`
+              pointSets.length === 1
+                ? `points of the straddle “${pointSets[0]!.name}”`
+                : `points of ${pointSets.length} straddles`
             }
           >
             <PointDot cx={9} cy={8} />
@@ -220,9 +320,8 @@ export function PlanePicture({
             <MarkShape cx={9} cy={8} tone={m.tone} color={m.kind?.color} inLegend />
           </LegendEntry>
         ))}
-        <Text style={styles.scale}>
-          Re {fmt(midRe - innerW / 2 / scale)} … {fmt(midRe + innerW / 2 / scale)}, Im {fmt(midIm - innerH / 2 / scale)}{' '}
-          … {fmt(midIm + innerH / 2 / scale)}
+        <Text style={styles.scale} testID={testID ? `${testID}-scale` : undefined}>
+          {scaleWords}
         </Text>
       </View>
     </View>
@@ -289,10 +388,6 @@ function BranchPointShape({ cx, cy }: { cx: number; cy: number }) {
   );
 }
 
-function fmt(v: number): string {
-  return Math.abs(v) >= 1000 || (Math.abs(v) < 0.01 && v !== 0) ? v.toExponential(1) : String(Number(v.toFixed(2)));
-}
-
 const styles = StyleSheet.create({
   frame: {
     borderWidth: 1,
@@ -306,6 +401,16 @@ const styles = StyleSheet.create({
     flexWrap: 'wrap',
     gap: theme.space(3),
     padding: theme.space(3),
+    borderTopWidth: 1,
+    borderTopColor: theme.color.rule,
+  },
+  zoom: {
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    alignItems: 'center',
+    gap: theme.space(2),
+    paddingHorizontal: theme.space(3),
+    paddingTop: theme.space(3),
     borderTopWidth: 1,
     borderTopColor: theme.color.rule,
   },
