@@ -1,11 +1,12 @@
 import { useState, type ReactNode } from 'react';
 import { StyleSheet, View, type LayoutChangeEvent } from 'react-native';
-import Svg, { Circle, G, Line, Path, Polyline, Rect, Text as SvgText } from 'react-native-svg';
+import Svg, { Circle, G, Line, Path, Polyline, Rect } from 'react-native-svg';
 import { theme } from '../../constants/theme';
 import type { FailurePathPoint, FailurePathView } from '../../shared/failure-path-view';
 import { DIAGNOSIS_STYLES } from '../failures/diagnosis-styles';
 import { formatUlps } from '../../shared/format-ulps';
 import { SkText } from '../ui/sk-text';
+import { ChartText } from './chart-text';
 import { LegendEntry } from './legend-entry';
 
 /** Two neighbouring points whose arguments differ by more than this (radians) are a jump, not a slope: a 65-point circle turns ~0.1 rad a step. */
@@ -38,6 +39,12 @@ function jumpsOf(
   }
   return out;
 }
+
+/** "the library jumps at t ≈ 0.281 and 0.75", or "the reference does not jump". */
+const jumpsAt = (who: string, ts: number[]) =>
+  ts.length === 0
+    ? `${who} does not jump`
+    : `${who} jumps at t ≈ ${ts.map(round).join(ts.length === 2 ? ' and ' : ', ')}`;
 
 /** Splits a series into runs with no jump inside, so a line is never drawn across a jump. */
 function pieces(points: FailurePathPoint[], value: (p: FailurePathPoint) => number | null): FailurePathPoint[][] {
@@ -128,9 +135,9 @@ export function PathPlots({ view }: { view: FailurePathView }) {
       {yTicks.map((tick) => (
         <G key={tick.text}>
           <Line x1={M.left} x2={width - M.right} y1={tick.y} y2={tick.y} stroke={theme.color.rule} strokeWidth={1} />
-          <SvgText x={M.left - 6} y={tick.y + 4} fontSize={11} fill={theme.color.inkSoft} textAnchor="end">
+          <ChartText x={M.left - 6} y={tick.y + 4} fontSize={11} fill={theme.color.inkSoft} textAnchor="end">
             {tick.text}
-          </SvgText>
+          </ChartText>
         </G>
       ))}
       <Line x1={M.left} x2={M.left} y1={M.top} y2={M.top + innerH} stroke={theme.color.inkFaint} strokeWidth={1} />
@@ -143,7 +150,7 @@ export function PathPlots({ view }: { view: FailurePathView }) {
         strokeWidth={1}
       />
       {[x0, (x0 + x1) / 2, x1].map((v) => (
-        <SvgText
+        <ChartText
           key={`xt-${v}`}
           x={x(v)}
           y={M.top + innerH + 14}
@@ -152,12 +159,12 @@ export function PathPlots({ view }: { view: FailurePathView }) {
           textAnchor="middle"
         >
           {String(round(v))}
-        </SvgText>
+        </ChartText>
       ))}
-      <SvgText x={M.left + innerW / 2} y={HEIGHT - 8} fontSize={11} fill={theme.color.inkSoft} textAnchor="middle">
+      <ChartText x={M.left + innerW / 2} y={HEIGHT - 8} fontSize={11} fill={theme.color.inkSoft} textAnchor="middle">
         {xLabel}
-      </SvgText>
-      <SvgText
+      </ChartText>
+      <ChartText
         x={12}
         y={M.top + innerH / 2}
         fontSize={11}
@@ -166,7 +173,7 @@ export function PathPlots({ view }: { view: FailurePathView }) {
         transform={`rotate(-90 12 ${M.top + innerH / 2})`}
       >
         {yTitle}
-      </SvgText>
+      </ChartText>
       {focus ? (
         <G>
           <Line
@@ -178,9 +185,9 @@ export function PathPlots({ view }: { view: FailurePathView }) {
             strokeWidth={2}
             strokeDasharray="4 3"
           />
-          <SvgText x={x(xOf(focus, view.axis)) + 4} y={M.top + 10} fontSize={11} fill={theme.color.ink}>
+          <ChartText x={x(xOf(focus, view.axis)) + 4} y={M.top + 10} fontSize={11} fill={theme.color.ink}>
             this case
-          </SvgText>
+          </ChartText>
         </G>
       ) : null}
       {children}
@@ -225,7 +232,7 @@ export function PathPlots({ view }: { view: FailurePathView }) {
                     strokeWidth={1.5}
                     strokeDasharray="6 4"
                   />
-                  <SvgText
+                  <ChartText
                     x={width - M.right - 4}
                     y={yU(tolUlps) - 4}
                     fontSize={11}
@@ -233,7 +240,7 @@ export function PathPlots({ view }: { view: FailurePathView }) {
                     textAnchor="end"
                   >
                     {`tolerance ${tolUlps} ulps`}
-                  </SvgText>
+                  </ChartText>
                 </G>
               ) : null}
               {pts.map((p) => {
@@ -249,14 +256,14 @@ export function PathPlots({ view }: { view: FailurePathView }) {
                 return <Cross key={p.index} cx={cx} cy={cy} color={color} />;
               })}
               {unplaced.length ? (
-                <SvgText
+                <ChartText
                   x={M.left + 4}
                   y={ceiling - 8 < 10 ? ceiling + 14 : ceiling - 8}
                   fontSize={10}
                   fill={theme.color.inkSoft}
                 >
                   ∞ / no ulps (top row)
-                </SvgText>
+                </ChartText>
               ) : null}
             </G>,
             ulpTicks,
@@ -351,9 +358,15 @@ export function PathPlots({ view }: { view: FailurePathView }) {
                     strokeDasharray="2 3"
                   />
                   {labelJumps ? (
-                    <SvgText x={x(j.at)} y={M.top + innerH - 4} fontSize={10} fill={EXPECTED_COLOR} textAnchor="middle">
+                    <ChartText
+                      x={x(j.at)}
+                      y={M.top + innerH - 4}
+                      fontSize={10}
+                      fill={EXPECTED_COLOR}
+                      textAnchor="middle"
+                    >
                       reference jump
-                    </SvgText>
+                    </ChartText>
                   ) : null}
                 </G>
               ))}
@@ -369,9 +382,9 @@ export function PathPlots({ view }: { view: FailurePathView }) {
                     strokeDasharray="2 2"
                   />
                   {labelJumps ? (
-                    <SvgText x={x(j.at)} y={M.top + 24} fontSize={10} fill={LIBRARY_COLOR} textAnchor="middle">
+                    <ChartText x={x(j.at)} y={M.top + 24} fontSize={10} fill={LIBRARY_COLOR} textAnchor="middle">
                       library jump ≠
-                    </SvgText>
+                    </ChartText>
                   ) : null}
                 </G>
               ))}
@@ -400,10 +413,8 @@ export function PathPlots({ view }: { view: FailurePathView }) {
         </SkText>
         {view.jumps ? (
           <SkText variant="caption" tone="ink" style={styles.words}>
-            The run&apos;s own jump check: reference at{' '}
-            {view.jumps.expected.length ? view.jumps.expected.map((t) => `t ≈ ${round(t)}`).join(', ') : 'no t'};
-            library at{' '}
-            {view.jumps.library.length ? view.jumps.library.map((t) => `t ≈ ${round(t)}`).join(', ') : 'no t'}.
+            The run&apos;s own jump check: {jumpsAt('the reference', view.jumps.expected)};{' '}
+            {jumpsAt('the library', view.jumps.library)}.
           </SkText>
         ) : null}
       </View>

@@ -1,5 +1,6 @@
 import { render, screen } from '@testing-library/react';
 import { PathPlots } from '../../../components/pictures/path-plots';
+import { theme } from '../../../constants/theme';
 import type { FailurePathPoint, FailurePathView } from '../../../shared/failure-path-view';
 
 /**
@@ -64,7 +65,28 @@ describe('PathPlots', () => {
     expect(screen.getByTestId('jump-words').textContent).toBe(
       "The reference's argument jumps between t = 0.5 and 0.563; the library's jumps between t = 0.25 and 0.313. The library jumps where the reference does not: between t = 0.25 and 0.313. The library does not jump where the reference does: between t = 0.5 and 0.563.",
     );
-    expect(screen.getByText(/The run's own jump check: reference at t ≈ 0.531; library at t ≈ 0.281/)).toBeTruthy();
+    expect(
+      screen.getByText("The run's own jump check: the reference jumps at t ≈ 0.531; the library jumps at t ≈ 0.281."),
+    ).toBeTruthy();
+  });
+
+  it("says in words that the reference does not jump when the run's jump check found no jump of its own", () => {
+    const view = misplacedJump();
+    view.jumps = { expected: [], library: [0.28125, 0.75] };
+    render(<PathPlots view={view} />);
+    expect(
+      screen.getByText(
+        "The run's own jump check: the reference does not jump; the library jumps at t ≈ 0.281 and 0.75.",
+      ),
+    ).toBeTruthy();
+    expect(screen.queryByText(/no t/)).toBeNull();
+  });
+
+  it('writes its ticks and titles in the app font, not the browser default serif', () => {
+    render(<PathPlots view={misplacedJump()} />);
+    const texts = Array.from(document.querySelectorAll<SVGTextElement>('svg text'));
+    expect(texts.length).toBeGreaterThan(10);
+    for (const t of texts) expect(t.style.fontFamily).toBe(theme.font.regular);
   });
 
   it("draws the library's extra jump at its t and the reference's at its own", () => {
