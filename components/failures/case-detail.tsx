@@ -5,6 +5,7 @@ import { Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-na
 import { useFailure } from '../../client/use-failure';
 import { useMe } from '../../client/use-me';
 import { theme } from '../../constants/theme';
+import { FormulaText } from '../ui/formula-text';
 import { SkText } from '../ui/sk-text';
 import { CasePictures } from './case-pictures';
 import { ClassifyForm } from './classify-form';
@@ -80,7 +81,7 @@ export function CaseDetail({ id }: { id: string }) {
         </Section>
       ) : null}
       <Section title="Rule">
-        <Text style={styles.rule}>{f.rule ?? '—'}</Text>
+        <Text style={styles.rule}>{f.rule ? <FormulaText text={f.rule} size={14} /> : '—'}</Text>
         <SkText variant="caption" style={styles.small}>
           Judged under the {f.convention} convention with suite {f.suiteSlug} v{f.suiteVersion}.{' '}
           {DIAGNOSIS_STYLES[tone].word[0]!.toUpperCase() + DIAGNOSIS_STYLES[tone].word.slice(1)}:{' '}

@@ -2,6 +2,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import { ApiRequestError } from '../../client/api-request-error';
 import { theme } from '../../constants/theme';
 import { fieldLabel } from '../../shared/field-label';
+import { FormulaText } from '../ui/formula-text';
 import { SkText } from '../ui/sk-text';
 
 /**
@@ -24,7 +25,7 @@ export function IssueList({ error, prefix = '', testID }: { error: Error | null;
               <Text style={styles.field}>
                 {fieldLabel(i.field.startsWith(prefix) ? i.field.slice(prefix.length) : i.field)}
               </Text>{' '}
-              {i.rule}
+              <FormulaText text={i.rule} size={theme.size.small} />
             </SkText>
           ))
         : null}

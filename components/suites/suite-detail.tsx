@@ -7,6 +7,7 @@ import { useSubmitSuite } from '../../client/use-submit-suite';
 import { useSuite } from '../../client/use-suite';
 import { theme } from '../../constants/theme';
 import { ActionButton } from '../ui/action-button';
+import { FormulaText } from '../ui/formula-text';
 import { SkText } from '../ui/sk-text';
 import { TitledPanel } from '../ui/titled-panel';
 import { IssueList } from './issue-list';
@@ -91,7 +92,7 @@ export function SuiteDetail({ slug }: { slug: string }) {
       </SkText>
       {body.story ? (
         <SkText variant="body" style={styles.story}>
-          {body.story}
+          <FormulaText text={body.story} size={theme.size.body} />
         </SkText>
       ) : null}
       {actions}

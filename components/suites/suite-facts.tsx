@@ -2,18 +2,30 @@ import { StyleSheet, Text, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import { describeTolerance } from '../../shared/describe-tolerance';
 import type { Suite } from '../../shared/schemas/suite-schema';
+import { FormulaText } from '../ui/formula-text';
 import { SkText } from '../ui/sk-text';
 import { describeSuitePath } from './describe-suite-path';
 import { formatComplexText } from '../../shared/format-complex-text';
 
-function Fact({ label, children, mono = false }: { label: string; children: string; mono?: boolean }) {
+/** One field in words; `formula` sets it as maths (FormulaText), `mono` as code to copy. */
+function Fact({
+  label,
+  children,
+  mono = false,
+  formula = false,
+}: {
+  label: string;
+  children: string;
+  mono?: boolean;
+  formula?: boolean;
+}) {
   return (
     <View style={styles.fact}>
       <SkText variant="smallLabel" tone="inkFaint" style={styles.label}>
         {label}
       </SkText>
       <SkText variant="body" style={[styles.value, mono && styles.mono]}>
-        {children}
+        {formula ? <FormulaText text={children} size={theme.size.body} /> : children}
       </SkText>
     </View>
   );
@@ -31,14 +43,13 @@ export function SuiteFacts({ suite }: { suite: Suite }) {
         <Fact label="Branch">principal branch of every function in the subject</Fact>
       ) : (
         <>
-          <Fact
-            label="Branch"
-            mono
-          >{`regular branch of (${b.g})^${typeof b.nu === 'string' ? b.nu : `(${formatComplexText(b.nu)})`}`}</Fact>
-          <Fact label="Fixed by" mono>
+          <Fact label="Branch" formula>
+            {`regular branch of (${b.g})^{${typeof b.nu === 'string' ? b.nu : formatComplexText(b.nu)}}`}
+          </Fact>
+          <Fact label="Fixed by" formula>
             {b.f0
               ? `f(${formatComplexText(b.z0)}) = ${formatComplexText(b.f0)}`
-              : `value k = ${b.k} at z0 = ${formatComplexText(b.z0)} (principal·e^(2πiνk))`}
+              : `value k = ${b.k} at z0 = ${formatComplexText(b.z0)} (the principal value times e^{2πiνk})`}
           </Fact>
           <Fact label="Cut layout" mono>
             {b.cuts.length === 0

@@ -55,7 +55,7 @@ describe('writing a regular-branch suite and reviewing it', () => {
     const layoutRule = page.getByTestId('cut-layout-rules');
     await layoutRule.waitFor();
     expect(await layoutRule.textContent()).toMatch(
-      /the loop around the cut through \(1, 0\), \(0, 0\) crosses no cut but has monodromy e\^\{2πi·2\/3\} ≠ 1/,
+      /a loop around the cut through \(1, 0\), \(0, 0\) crosses no cut, yet going once around it multiplies the value by e2πi·2\/3, not 1/,
     );
     await page.getByTestId('suite-form-refused').waitFor();
     expect(await page.evaluate((slug) => fetch(`/api/suites/${slug}`).then((r) => r.status), SLUG)).toBe(404);

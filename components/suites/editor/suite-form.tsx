@@ -262,7 +262,7 @@ export function SuiteForm({ initial, editing, draftKey, onDone }: Props) {
             <ChipGroup
               label="Fixed by"
               options={[
-                { value: 'k', text: 'the k-th value principal·e^(2πiνk)' },
+                { value: 'k', text: 'the k-th value (0 is the principal one)' },
                 { value: 'f0', text: 'a value f0 at z0' },
               ]}
               value={draft.fixBy}

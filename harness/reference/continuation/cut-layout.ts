@@ -124,7 +124,7 @@ export class CutLayout {
       if (i < 0) {
         if (branch) {
           throw new LayoutError(
-            `the branch point at ${fmt(s.at)} (${s.order > 0 ? 'zero' : 'pole'} of g of order ${Math.abs(s.order)}, ν·m = ${show(q)}) lies on no cut`,
+            `the branch point at ${fmt(s.at)} lies on no cut: it is a ${s.order > 0 ? 'zero' : 'pole'} of g of order ${Math.abs(s.order)}, and going once around it multiplies the value by ${turnFactor(q)}, so a cut must start or end there`,
           );
         }
         continue;
@@ -205,8 +205,8 @@ export class CutLayout {
       if (find(r) !== find(INFINITY_NODE) && (!total.im.isZero() || !total.re.isInteger())) {
         const members = this.nodes.filter((_, i) => i !== INFINITY_NODE && find(i) === find(r)).map(fmt);
         throw new LayoutError(
-          `the loop around the cut through ${members.join(', ')} crosses no cut but has monodromy e^{2πi·${show(total)}} ≠ 1 ` +
-            `(ν·(Z−P) = ${show(total)} is not an integer): extend that cut to another branch point or to infinity`,
+          `a loop around the cut through ${members.join(', ')} crosses no cut, yet going once around it multiplies the value by ${turnFactor(total)}, not 1: ` +
+            `extend that cut to another branch point or to infinity`,
         );
       }
     }
@@ -219,6 +219,14 @@ function sameFlow(a: ExactNu, b: ExactNu): boolean {
 
 function add(a: ExactNu, b: ExactNu): ExactNu {
   return { re: a.re.add(b.re), im: a.im.add(b.im) };
+}
+
+/**
+ * What one turn around charge q multiplies a value by, as a formula: e^{2πi·q}. Said instead of
+ * "ν·m" or "ν·(Z−P)", which name the sum but not what it does to the value.
+ */
+function turnFactor(q: ExactNu): string {
+  return `e^{2πi·${q.im.isZero() ? show(q) : `(${show(q)})`}}`;
 }
 
 function show(q: ExactNu): string {

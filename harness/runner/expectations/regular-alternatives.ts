@@ -12,7 +12,7 @@ import { sideOnCut } from './side-on-cut';
  * What a failing point's value may be instead, for the diagnosis: the value at the point with
  * its zero part's sign flipped (signed-zero suites), the value from the other side of a cut
  * within 2e-3, both one-sided limits when the point lies on a cut, and the other sheets; with
- * the rule that fixes the expected value, pointing to docs/regular-branches.md.
+ * the rule that fixes the expected value, in words (docs/regular-branches.md says more).
  */
 export function regularAlternatives(
   branch: RegularBranch,
@@ -23,7 +23,8 @@ export function regularAlternatives(
   const pp = points[index] as PathPoint;
   const p: Point = [pp.z.re, pp.z.im];
   const alt: PointAlternatives = {
-    rule: `${branch.description}, continued from z0 to z on the plane cut along the layout (docs/regular-branches.md)`,
+    // Plain words only: this rule is shown on the case page and in every output, where a path into this repository means nothing.
+    rule: `${branch.description}, continued from z0 to z along a path that crosses none of the suite's cuts`,
   };
   const tryValue = (x: Point, kind: number): Point | null => {
     try {

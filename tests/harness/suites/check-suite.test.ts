@@ -56,7 +56,9 @@ describe('checkSuite', () => {
     if (!checked.ok)
       expect(checked.issues[0]).toMatchObject({
         field: 'branch.cuts',
-        rule: expect.stringMatching(/loop around the cut through \(0, 0\), \(1, 0\).*monodromy/),
+        rule: expect.stringMatching(
+          /loop around the cut through \(0, 0\), \(1, 0\) crosses no cut, yet going once around it multiplies/,
+        ),
       });
   });
 

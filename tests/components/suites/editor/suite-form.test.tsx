@@ -70,8 +70,11 @@ describe('SuiteForm', () => {
     await press('Save draft');
     const layoutRules = await screen.findByTestId('cut-layout-rules');
     expect(layoutRules.textContent).toMatch(
-      /the loop around the cut through \(0, 0\), \(1, 0\) crosses no cut but has monodromy e\^\{2πi·2\/3\} ≠ 1/,
+      /a loop around the cut through \(0, 0\), \(1, 0\) crosses no cut, yet going once around it multiplies the value by e2πi·2\/3, not 1/,
     );
+    // The factor is maths: e with 2πi·2/3 raised, never the raw e^{2πi·2/3}.
+    expect(within(layoutRules).getByText('2πi·2/3').style.verticalAlign).toBe('top');
+    expect(layoutRules.textContent).not.toMatch(/\^|ν·\(Z−P\)/);
     expect(screen.getByTestId('suite-form-refused').textContent).toMatch(/Not saved: 1 rule is broken/);
     expect(calls).toHaveLength(0);
 
@@ -122,7 +125,9 @@ describe('SuiteForm', () => {
     await toolsLoaded();
     await press('Remove cut 1');
     const layoutRules = await screen.findByTestId('cut-layout-rules');
-    expect(layoutRules.textContent).toMatch(/branch point at \((0|1), 0\) .* lies on no cut/);
+    expect(layoutRules.textContent).toMatch(
+      /branch point at \((0|1), 0\) lies on no cut: it is a zero of g of order 1/,
+    );
   });
 
   it('shows the server’s rules beside their fields, keeps everything typed, and drops a rule once its field changes', async () => {

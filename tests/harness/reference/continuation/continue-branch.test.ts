@@ -199,7 +199,8 @@ describe('refusals', () => {
 
   it('names a branch point that lies on no cut', () => {
     expect(answerContinue({ ...base, g: 'z^2 - 1', cuts: [{ points: [c(1), c(5)], to_infinity: true }] })).toEqual({
-      error: 'the branch point at (-1, 0) (zero of g of order 1, ν·m = 1/2) lies on no cut',
+      error:
+        'the branch point at (-1, 0) lies on no cut: it is a zero of g of order 1, and going once around it multiplies the value by e^{2πi·1/2}, so a cut must start or end there',
     });
   });
 
@@ -212,7 +213,7 @@ describe('refusals', () => {
     });
     expect(answer).toEqual({
       error:
-        'the loop around the cut through (0, 0), (1, 0) crosses no cut but has monodromy e^{2πi·2/3} ≠ 1 (ν·(Z−P) = 2/3 is not an integer): extend that cut to another branch point or to infinity',
+        'a loop around the cut through (0, 0), (1, 0) crosses no cut, yet going once around it multiplies the value by e^{2πi·2/3}, not 1: extend that cut to another branch point or to infinity',
     });
   });
 

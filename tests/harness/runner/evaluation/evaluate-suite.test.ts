@@ -220,6 +220,16 @@ describe('evaluateSuite', () => {
     expect(around.jumps!.expected).toEqual(around.jumps!.library);
   });
 
+  it('states the rule of a regular branch in plain words, citing no file', async () => {
+    const negated = referenceTarget('negated@1', (op, _args, v) => (op === 'mul' ? [-v[0], -v[1]] : v));
+    const r = await evaluateSuite(loadDemoSuite('sqrt-z2-minus-1-finite-cut'), negated, { cache });
+    const f = findings(r).find((x) => x.outcome.kind === 'fail')!;
+    expect(f.rule).toMatch(
+      /^the regular branch of \(z\^2 - 1\)\^\(1\/2\) with k = 0 at z0 = 2(\.0)? \+ 0i, continued from z0 to z along a path that crosses none of the suite's cuts/,
+    );
+    expect(f.rule).not.toMatch(/\.md|§|DESIGN/);
+  });
+
   it('evaluates a list of points once each and looks for no jumps or monodromy on it', async () => {
     // ISO/IEC 9899:2011 G.6.4.2: csqrt(−4 + 0i) = +0 + 2i and csqrt(−4 − 0i) = +0 − 2i; the two
     // values are far apart, but nothing lies between two listed points, so that is no jump.
