@@ -4,6 +4,7 @@ import type { SuiteInput } from '../../shared/schemas/suite-schema';
 import type { SuitePathInput } from '../../shared/schemas/suite-path-schema';
 import type { DemoCut, DemoPrincipalFunction } from '../../harness';
 import { DEMO_VALUE_TOLERANCE } from './demo-value-tolerance';
+import { principalSuiteTitle } from './principal-suite-title';
 
 const c = (p: [string, string]) => ({ re: p[0], im: p[1] });
 
@@ -61,7 +62,7 @@ export function principalSuite(fn: DemoPrincipalFunction, convention: Convention
   return {
     id,
     version: 1,
-    title: `${fn.title}, principal branch, ${convention === 'signed-zero' ? 'signed zeros (Annex G)' : 'counter-clockwise continuity'}`,
+    title: principalSuiteTitle(fn, convention),
     story: fn.story,
     subject: fn.subject,
     branch: { kind: 'principal' },

@@ -31,7 +31,7 @@ export const cbrtEntry: FunctionEntry = {
     {
       subject: 'cbrt(z)',
       slug: 'cbrt',
-      title: 'Principal cube root',
+      title: 'Cube root',
       cuts: [DEMO_SHAPES.negativeRealAxis],
       branchPoints: [['0', '0']],
       radius: '1',

@@ -20,7 +20,7 @@ export const expEntry: FunctionEntry = {
     {
       subject: 'exp(z)',
       slug: 'exp',
-      title: 'Exponential (no cut)',
+      title: 'Exponential',
       cuts: [],
       branchPoints: [],
       radius: '1',

@@ -21,7 +21,7 @@ export const logEntry: FunctionEntry = {
     {
       subject: 'log(z)',
       slug: 'log',
-      title: 'Principal logarithm',
+      title: 'Logarithm',
       cuts: [DEMO_SHAPES.negativeRealAxis],
       branchPoints: [['0', '0']],
       radius: '1',

@@ -27,7 +27,7 @@ export const nthrootEntry: FunctionEntry = {
     {
       subject: 'nthroot(z, 5)',
       slug: 'nthroot-5',
-      title: 'Principal fifth root',
+      title: 'Fifth root',
       cuts: [DEMO_SHAPES.negativeRealAxis],
       branchPoints: [['0', '0']],
       radius: '1',

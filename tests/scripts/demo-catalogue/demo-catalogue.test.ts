@@ -26,6 +26,16 @@ describe('the demo catalogue in suites/demo', () => {
     );
   });
 
+  it('names a branch in a title only where there is one to choose, and says "principal" at most once', () => {
+    const titles = onDisk.map(({ data }) => (data as { title: string }).title);
+    expect(titles).toContain('Exponential, single-valued (no cut), signed zeros (Annex G)');
+    expect(titles).toContain('Cube root, principal branch, counter-clockwise continuity');
+    for (const title of titles) {
+      expect({ title, principal: (title.match(/principal/gi) ?? []).length <= 1 }).toEqual({ title, principal: true });
+      expect(title).not.toMatch(/no cut\)?, principal branch/);
+    }
+  });
+
   it('holds at least 15 suites, at least 5 of them regular branches', () => {
     const suites = onDisk.map(({ data }) => data as { branch: { kind: string } });
     expect(suites.length).toBeGreaterThanOrEqual(15);
