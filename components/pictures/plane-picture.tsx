@@ -21,7 +21,7 @@ export interface PlanePictureProps {
   label: string;
   /** Sampled paths, drawn as lines in the order given, with an arrow for the direction of travel. */
   paths?: { name: string; points: PlanePoint[] }[];
-  /** Separate sample points (a straddle's points on both sides of a cut), drawn as small hollow dots, not joined. */
+  /** Separate sample points (a straddle's points on both sides of a cut, a list of points), drawn as small hollow dots, not joined. */
   pointSets?: { name: string; points: PlanePoint[] }[];
   /** Expected cuts: polylines, the last segment continued to the edge when `toInfinity`. */
   cuts?: { points: PlanePoint[]; toInfinity: boolean }[];
@@ -308,8 +308,8 @@ export function PlanePicture({
           <LegendEntry
             text={
               pointSets.length === 1
-                ? `points of the straddle “${pointSets[0]!.name}”`
-                : `points of ${pointSets.length} straddles`
+                ? `points of the path “${pointSets[0]!.name}”`
+                : `points of ${pointSets.length} paths`
             }
           >
             <PointDot cx={9} cy={8} />

@@ -45,6 +45,7 @@ export function SuitePreview({
         cuts={picture.cuts}
         branchPoints={picture.branchPoints}
         height={height}
+        testID={testID ? `${testID}-plane` : undefined}
       />
       <SkText variant="caption" style={styles.summary} testID={testID ? `${testID}-summary` : undefined}>
         Drawn: {picture.paths.length} {picture.paths.length === 1 ? 'path' : 'paths'} ({pointCount} points),{' '}

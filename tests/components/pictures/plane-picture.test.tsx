@@ -71,7 +71,7 @@ describe('PlanePicture', () => {
     // Nine points at nine heights, not one dot.
     const dots = Array.from(svg.querySelectorAll('circle')).filter((c) => c.getAttribute('r') === '2.5');
     expect(new Set(dots.map((c) => c.getAttribute('cy'))).size).toBe(9);
-    expect(screen.getByText('points of the straddle “straddle cut 1”')).toBeTruthy();
+    expect(screen.getByText('points of the path “straddle cut 1”')).toBeTruthy();
   });
 
   it.each([1e-3, 1e-310])('draws a circle of radius %p as a circle across the picture', async (radius) => {
