@@ -81,7 +81,9 @@ export function CaseDetail({ id }: { id: string }) {
         </Section>
       ) : null}
       <Section title="Rule">
-        <Text style={styles.rule}>{f.rule ? <FormulaText text={f.rule} size={14} /> : '—'}</Text>
+        <Text style={styles.rule} testID="case-rule">
+          {f.rule ? <FormulaText text={f.rule} size={14} /> : '—'}
+        </Text>
         <SkText variant="caption" style={styles.small}>
           Judged under the {f.convention} convention with suite {f.suiteSlug} v{f.suiteVersion}.{' '}
           {DIAGNOSIS_STYLES[tone].word[0]!.toUpperCase() + DIAGNOSIS_STYLES[tone].word.slice(1)}:{' '}

@@ -83,8 +83,11 @@ describe('the plane picture and the words of a case, as a maintainer', () => {
     // A regular-branch case: its rule is maths, in words, citing no file.
     const regular = await api<{ failures: Row[] }>('/failures?suite=sqrt-z2-minus-1-naive-formula&limit=1');
     await page.goto(`${BASE_URL}/failures/${regular.failures[0]!.id}`);
-    const rule = page.getByText(/^the regular branch of/);
-    await rule.waitFor({ timeout: 30_000 });
+    const rule = page.getByTestId('case-rule');
+    await rule
+      .getByText(/regular branch/)
+      .first()
+      .waitFor({ timeout: 30_000 });
     const ruleText = (await rule.textContent()) ?? '';
     expect(ruleText).toMatch(/^the regular branch of \(z2 − 1\)1\/2 with k = 0 at z0 = /);
     expect(ruleText).toContain("continued from z0 to z along a path that crosses none of the suite's cuts");
@@ -95,7 +98,7 @@ describe('the plane picture and the words of a case, as a maintainer', () => {
         .map((s) => s.textContent),
     );
     expect(raised).toEqual(['2', '1/2']);
-    await saveScreenshots(page, 'case-regular-branch', () => page.getByText(/^the regular branch of/).waitFor());
+    await saveScreenshots(page, 'case-regular-branch', () => page.getByTestId('case-rule').waitFor());
   });
 
   it('draws circles of radius 1e-3 and 1e-310 as circles and keeps a path with one far point apart, in the suite preview', async () => {
@@ -148,7 +151,7 @@ describe('the plane picture and the words of a case, as a maintainer', () => {
     );
     // The two near points stay apart from each other: more than 6 px between them at zoom 1× (seven decades share the radius).
     const near = await page.getByTestId('suite-preview-plane').evaluate((frame) =>
-      Array.from(frame.querySelectorAll('svg circle'))
+      Array.from(frame.querySelector('svg')!.querySelectorAll('circle'))
         .filter((c) => c.getAttribute('r') === '2.5')
         .map((c) => [Number(c.getAttribute('cx')), Number(c.getAttribute('cy'))]),
     );
