@@ -98,7 +98,9 @@ describe('the plane picture and the words of a case, as a maintainer', () => {
         .map((s) => s.textContent),
     );
     expect(raised).toEqual(['2', '1/2']);
-    await saveScreenshots(page, 'case-regular-branch', () => page.getByTestId('case-rule').waitFor());
+    await saveScreenshots(page, 'case-regular-branch', () =>
+      page.getByTestId('case-plane-scale').waitFor({ timeout: 30_000 }),
+    );
   });
 
   it('draws circles of radius 1e-3 and 1e-310 as circles and keeps a path with one far point apart, in the suite preview', async () => {
