@@ -25,7 +25,7 @@ export function IssueList({ error, prefix = '', testID }: { error: Error | null;
               <Text style={styles.field}>
                 {fieldLabel(i.field.startsWith(prefix) ? i.field.slice(prefix.length) : i.field)}
               </Text>{' '}
-              <FormulaText text={i.rule} size={theme.size.small} />
+              <FormulaText text={i.rule} size={theme.size.small} variables={false} />
             </SkText>
           ))
         : null}

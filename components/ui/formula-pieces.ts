@@ -22,9 +22,11 @@ const MINUS = '\u2212';
  * it); a digit run right after a one-letter variable is its index (z0 → z₀); one-letter variables
  * are italic; a hyphen that is a minus (alone between spaces, or before a number or name at the
  * start, after "(", ",", "=" or a space) becomes U+2212, and `*` becomes "·". Words, hyphenated
- * words ("counter-clockwise") and numbers such as 1e-9 are left as they are.
+ * words ("counter-clockwise") and numbers such as 1e-9 are left as they are. With
+ * `variables: false` only the raising is done: text that quotes what someone typed ("with -1
+ * the circle has no points") keeps every character as typed.
  */
-export function formulaPieces(text: string): FormulaPiece[] {
+export function formulaPieces(text: string, { variables = true }: { variables?: boolean } = {}): FormulaPiece[] {
   const out: FormulaPiece[] = [];
   const push = (piece: string, place: FormulaPiece['place'], italic = false) => {
     if (piece === '') return;
@@ -36,6 +38,11 @@ export function formulaPieces(text: string): FormulaPiece[] {
     let i = 0;
     while (i < run.length) {
       const c = run[i]!;
+      if (!variables) {
+        push(c, place);
+        i++;
+        continue;
+      }
       if (LETTER.test(c)) {
         let j = i;
         while (j < run.length && LETTER.test(run[j]!)) j++;

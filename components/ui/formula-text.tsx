@@ -12,15 +12,18 @@ import { formulaPieces } from './formula-pieces';
 export function FormulaText({
   text,
   size = theme.size.body,
+  variables = true,
   style,
   testID,
 }: {
   text: string;
   size?: number;
+  /** false: raise exponents only, leaving letters and signs as typed (rules that quote a field's value). */
+  variables?: boolean;
   style?: StyleProp<TextStyle>;
   testID?: string;
 }) {
-  const pieces = formulaPieces(text);
+  const pieces = formulaPieces(text, { variables });
   if (pieces.every((p) => p.place === 'line' && !p.italic) && !style && !testID)
     return <>{pieces.map((p) => p.text).join('')}</>;
   // 0.72 of the line's size, and never under 9 px, the least IBM Plex stays legible at.

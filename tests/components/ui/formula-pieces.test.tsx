@@ -31,6 +31,15 @@ describe('formulaPieces', () => {
     );
   });
 
+  it('raises exponents only, every other character as typed, when told not to set variables', () => {
+    expect(shown(formulaPieces('with -1 at z0 the value is multiplied by e^{2πi·2/3}', { variables: false }))).toBe(
+      'with -1 at z0 the value is multiplied by e^{2πi·2/3}',
+    );
+    expect(formulaPieces('with -1 at z0', { variables: false })).toEqual([
+      { text: 'with -1 at z0', place: 'line', italic: false },
+    ]);
+  });
+
   it('keeps a lone caret that raises nothing', () => {
     expect(shown(formulaPieces('a ^ b'))).toBe('a ^ b');
   });
