@@ -78,12 +78,16 @@ describe('roles', () => {
     const mei = b.page.getByTestId('user-mei@sheetkeeper.test');
     await mei.waitFor();
     await saveScreenshots(b.page, 'users', () => mei.waitFor());
+    // A role changes only after its confirmation (docs/admin.md), then the row says "saved".
+    await mei.getByRole('radio', { name: 'Role: reviewer' }).click();
+    await mei.getByText('Make Mei Okonkwo a reviewer?').waitFor();
     const [patch] = await Promise.all([
       b.page.waitForResponse((r) => r.url().includes('/api/users/') && r.request().method() === 'PATCH'),
-      mei.getByRole('radio', { name: 'Make Mei Okonkwo reviewer' }).click(),
+      mei.getByRole('button', { name: 'Yes, make a reviewer' }).click(),
     ]);
     expect(patch.status()).toBe(200);
-    await mei.getByRole('radio', { name: 'Make Mei Okonkwo reviewer', checked: true }).waitFor();
+    await b.page.getByTestId('saved-mei@sheetkeeper.test').getByText('saved: a reviewer').waitFor();
+    await mei.getByRole('radio', { name: 'Role: reviewer', checked: true }).waitFor();
     await signOut(b.page);
 
     await signIn(b.page, 'mei@sheetkeeper.test', 'mei-demo-2026');
