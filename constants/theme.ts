@@ -18,8 +18,16 @@ export const theme = {
     panel: '#FFFDF8',
     ink: '#1F2A36',
     inkSoft: '#4D5A68',
-    inkFaint: '#7C8692',
+    /** The faintest text: 4.7:1 on the darkest light ground (dangerSoft); it was #7C8692, 2.9–3.6:1. */
+    inkFaint: '#5B6570',
+    /** Lines that only separate (table rows, panels): decoration, so no contrast minimum applies. */
     rule: '#D9D3C5',
+    /**
+     * The edge of a control a person must find (text boxes, chips, check boxes, the off switch):
+     * 3.6:1 on paper and 4.0:1 on panel, over WCAG 2.x's 3:1 for user-interface components (1.4.11).
+     * It used to be `rule`, 1.47:1 on panel.
+     */
+    control: '#857D6E',
     accent: '#2E6B5E',
     accentInk: '#FFFFFF',
     accentSoft: '#DCEBE6',
@@ -28,10 +36,20 @@ export const theme = {
     /** Errors and other "nothing was judged" states: amber ink (5.9:1 on panel, 5.0:1 on its soft ground) and its soft ground. */
     warn: '#875A08',
     warnSoft: '#F5EAD0',
+    /** The grounds of the suite status labels (draft, submitted, retired) and the ink of "submitted". */
+    draftSoft: '#ECE7DC',
+    submittedInk: '#7A5310',
+    submittedSoft: '#F5E7C8',
+    retiredSoft: '#E9E6E0',
+    /** The ground of a secret shown once (a new API token). */
+    secretSoft: '#FBF3E2',
     focus: '#C58B1B',
     nav: '#1F2A36',
     navInk: '#E9E4D8',
     navActive: '#F4F1EA',
+    /** The active navigation item's ground and the navigation's own rule lines, on `nav`. */
+    navActiveGround: '#34414F',
+    navRule: '#3A4756',
   },
   /**
    * One ink per diagnosis kind, for its chip's word and for its marks in the findings-by-kind

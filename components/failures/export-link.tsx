@@ -43,7 +43,7 @@ const styles = StyleSheet.create({
     textDecorationLine: 'none',
   },
   off: {
-    borderColor: theme.color.rule,
+    borderColor: theme.color.control,
     justifyContent: 'center',
     paddingVertical: theme.space(1),
     lineHeight: undefined,

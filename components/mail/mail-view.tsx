@@ -91,7 +91,7 @@ const styles = StyleSheet.create({
     paddingHorizontal: theme.space(4),
     borderRadius: theme.radius,
     borderWidth: 1,
-    borderColor: theme.color.rule,
+    borderColor: theme.color.control,
     backgroundColor: theme.color.panel,
   },
   tabOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },

@@ -107,5 +107,5 @@ const styles = StyleSheet.create({
   mainCol: { flex: 3, minWidth: 0, gap: theme.space(4) },
   sideCol: { flex: 2, minWidth: 0, gap: theme.space(4) },
   head: { flexDirection: 'row', alignItems: 'center', gap: theme.space(3), flexWrap: 'wrap' },
-  own: { backgroundColor: '#F5E7C8', padding: theme.space(2), borderRadius: theme.radius },
+  own: { backgroundColor: theme.color.submittedSoft, padding: theme.space(2), borderRadius: theme.radius },
 });

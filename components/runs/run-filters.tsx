@@ -101,7 +101,7 @@ const styles = StyleSheet.create({
     paddingHorizontal: theme.space(3),
     borderRadius: theme.radius,
     borderWidth: 1,
-    borderColor: theme.color.rule,
+    borderColor: theme.color.control,
     backgroundColor: theme.color.panel,
   },
   summary: { flex: 1, textAlign: 'right' },

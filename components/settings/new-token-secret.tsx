@@ -57,7 +57,7 @@ const styles = StyleSheet.create({
     borderRadius: theme.radius,
     borderWidth: 2,
     borderColor: theme.color.focus,
-    backgroundColor: '#FBF3E2',
+    backgroundColor: theme.color.secretSoft,
   },
   warning: { lineHeight: 22 },
   secret: {

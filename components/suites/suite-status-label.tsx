@@ -4,8 +4,8 @@ import { TagPill } from '../ui/tag-pill';
 
 /** Each status has a word and a glyph of its own, so the label reads without its colour. */
 const SUITE_STATUS_LOOK: Record<SuiteStatus, { word: string; glyph: string; color: string; background: string }> = {
-  draft: { word: 'draft', glyph: '◊', color: theme.color.inkSoft, background: '#ECE7DC' },
-  submitted: { word: 'submitted', glyph: '↗', color: '#7A5310', background: '#F5E7C8' },
+  draft: { word: 'draft', glyph: '◊', color: theme.color.inkSoft, background: theme.color.draftSoft },
+  submitted: { word: 'submitted', glyph: '↗', color: theme.color.submittedInk, background: theme.color.submittedSoft },
   approved: { word: 'approved', glyph: '✓', color: theme.color.accent, background: theme.color.accentSoft },
   'changes-requested': {
     word: 'changes requested',
@@ -13,7 +13,7 @@ const SUITE_STATUS_LOOK: Record<SuiteStatus, { word: string; glyph: string; colo
     color: theme.color.danger,
     background: theme.color.dangerSoft,
   },
-  retired: { word: 'retired', glyph: '−', color: theme.color.inkFaint, background: '#E9E6E0' },
+  retired: { word: 'retired', glyph: '−', color: theme.color.inkFaint, background: theme.color.retiredSoft },
 };
 
 export function SuiteStatusLabel({ status, version }: { status: SuiteStatus; version?: number }) {

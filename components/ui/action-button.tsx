@@ -51,7 +51,7 @@ const styles = StyleSheet.create({
     gap: theme.space(2),
   },
   primary: { backgroundColor: theme.color.accent },
-  quiet: { backgroundColor: 'transparent', borderWidth: 1, borderColor: theme.color.rule },
+  quiet: { backgroundColor: 'transparent', borderWidth: 1, borderColor: theme.color.control },
   pressed: { opacity: 0.85 },
   inactive: { opacity: 0.6 },
   label: { fontFamily: theme.font.medium, fontSize: theme.size.body },

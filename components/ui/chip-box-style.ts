@@ -7,5 +7,5 @@ export const CHIP_BOX_STYLE = {
   paddingHorizontal: theme.space(3),
   borderRadius: theme.radius,
   borderWidth: 1,
-  borderColor: theme.color.rule,
+  borderColor: theme.color.control,
 } as const;

@@ -39,7 +39,7 @@ const styles = StyleSheet.create({
     justifyContent: 'center',
     paddingHorizontal: theme.space(4),
     borderWidth: 1,
-    borderColor: theme.color.rule,
+    borderColor: theme.color.control,
     borderRadius: theme.radius,
   },
 });

@@ -5,7 +5,7 @@ import { textVariants } from './text-variants';
 export const INPUT_BOX_STYLE = {
   minHeight: theme.touch,
   borderWidth: 1,
-  borderColor: theme.color.rule,
+  borderColor: theme.color.control,
   borderRadius: theme.radius,
   paddingHorizontal: theme.space(3),
   ...textVariants.body,

@@ -49,7 +49,7 @@ const styles = StyleSheet.create({
   disabled: { opacity: 0.6 },
   track: { width: 44, height: 26, borderRadius: 13, padding: 3, justifyContent: 'center' },
   trackOn: { backgroundColor: theme.color.accent },
-  trackOff: { backgroundColor: theme.color.rule },
+  trackOff: { backgroundColor: theme.color.control },
   knob: { width: 20, height: 20, borderRadius: 10, backgroundColor: theme.color.panel },
   knobOn: { alignSelf: 'flex-end' },
   word: { minWidth: 48 },

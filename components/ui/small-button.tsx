@@ -37,7 +37,7 @@ const styles = StyleSheet.create({
     alignItems: 'center',
     borderRadius: theme.radius,
     borderWidth: 1,
-    borderColor: theme.color.rule,
+    borderColor: theme.color.control,
     alignSelf: 'flex-start',
   },
   pressed: { backgroundColor: theme.color.paper },
