@@ -1,7 +1,9 @@
 import { useState } from 'react';
-import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { Pressable, StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
+import { CheckBoxMark } from '../ui/check-box-mark';
 import { DisclosureToggle } from '../ui/disclosure-toggle';
+import { spaceToggles } from '../ui/space-toggles';
 import { SkText } from '../ui/sk-text';
 
 export interface ColumnOption<T extends string> {
@@ -47,9 +49,12 @@ export function ColumnChooser<T extends string>({
                 aria-disabled={o.fixed ? true : undefined}
                 disabled={o.fixed}
                 onPress={() => onChange(on ? shown.filter((s) => s !== o.id) : [...shown, o.id])}
+                {...(o.fixed
+                  ? {}
+                  : spaceToggles(() => onChange(on ? shown.filter((s) => s !== o.id) : [...shown, o.id])))}
                 style={styles.item}
               >
-                <Text style={[styles.box, on && styles.boxOn]}>{on ? '✓' : ' '}</Text>
+                <CheckBoxMark on={on} />
                 <SkText variant="caption" tone="ink">
                   {o.title}
                   {o.fixed ? ' (always)' : ''}
@@ -84,17 +89,4 @@ const styles = StyleSheet.create({
     paddingHorizontal: theme.space(2),
     minWidth: 150,
   },
-  box: {
-    width: 22,
-    height: 22,
-    textAlign: 'center',
-    lineHeight: 20,
-    borderWidth: 1,
-    borderColor: theme.color.inkSoft,
-    borderRadius: 3,
-    fontFamily: theme.font.bold,
-    fontSize: 14,
-    color: theme.color.accentInk,
-  },
-  boxOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
 });

@@ -13,7 +13,9 @@ import { CutMapPicture } from '../pictures/cut-map-picture';
 import { QueryState } from '../ui/query-state';
 import { TextField } from '../ui/text-field';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
-import { CHIP_BOX_STYLE } from '../ui/chip-box-style';
+import { CHOICE_CHIP_STYLE } from '../ui/choice-chip-style';
+import { RadioMark } from '../ui/radio-mark';
+import { useRadioKeys } from '../ui/use-radio-keys';
 
 const DEFAULT_BOX = '-4,-4,4,4';
 const DEFAULT_GRID = '81x81';
@@ -45,6 +47,10 @@ export function CutMapView({ name, fn, onChooseFn }: { name: string; fn: string;
   const map = useCutMap(name, { fn, ...ask });
   const fingerprint = useFingerprint(name);
   const functions = fingerprint.data ? [...new Set(fingerprint.data.fingerprint.cuts.map((c) => c.function))] : [fn];
+  const fnRadio = useRadioKeys(functions.length, functions.indexOf(fn), (index) => {
+    const next = functions[index];
+    if (next !== undefined && next !== fn) onChooseFn(next);
+  });
 
   const serverErrors =
     map.error instanceof ApiRequestError && map.error.body.kind === 'invalid-input'
@@ -71,17 +77,18 @@ export function CutMapView({ name, fn, onChooseFn }: { name: string; fn: string;
         Function
       </SkText>
       <View style={styles.chips} accessibilityRole="radiogroup" accessibilityLabel="Function to map">
-        {functions.map((f) => (
+        {functions.map((f, index) => (
           <Pressable
             key={f}
+            {...fnRadio(index)}
             accessibilityRole="radio"
             accessibilityLabel={`Map ${f}`}
             aria-checked={f === fn}
             onPress={() => onChooseFn(f)}
             style={[styles.chip, f === fn && styles.chipOn]}
           >
+            <RadioMark on={f === fn} inverse={f === fn} />
             <SkText variant="mono" style={f === fn && styles.chipTextOn}>
-              {f === fn ? '✓ ' : ''}
               {f}
             </SkText>
           </Pressable>
@@ -168,9 +175,7 @@ const styles = StyleSheet.create({
   },
   formHead: { letterSpacing: 0.3 },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
-  chip: {
-    ...CHIP_BOX_STYLE,
-  },
+  chip: CHOICE_CHIP_STYLE,
   chipOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
   chipTextOn: { color: theme.color.accentInk },
   result: { gap: theme.space(3) },

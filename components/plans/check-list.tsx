@@ -5,6 +5,8 @@ import { INPUT_BOX_STYLE } from '../ui/input-box-style';
 import { RuleLines } from '../ui/rule-lines';
 import { SkText } from '../ui/sk-text';
 import { CHIP_BOX_STYLE } from '../ui/chip-box-style';
+import { CheckBoxMark } from '../ui/check-box-mark';
+import { spaceToggles } from '../ui/space-toggles';
 
 export interface CheckListItem {
   key: string;
@@ -101,9 +103,10 @@ export function CheckList({ label, items, selected, onChange, error, filterFrom 
               aria-disabled={disabled}
               disabled={disabled}
               onPress={() => toggle(item.key)}
+              {...spaceToggles(() => toggle(item.key))}
               style={[styles.item, wide && styles.itemWide, disabled && styles.itemDisabled]}
             >
-              <View style={[styles.box, on && styles.boxOn]}>{on ? <Text style={styles.tick}>✓</Text> : null}</View>
+              <CheckBoxMark on={on} />
               <View style={styles.words}>
                 <SkText variant="body" numberOfLines={2}>
                   {item.title}
@@ -162,17 +165,6 @@ const styles = StyleSheet.create({
   },
   itemWide: { width: '50%' },
   itemDisabled: { opacity: 0.6 },
-  box: {
-    width: 22,
-    height: 22,
-    borderRadius: 4,
-    borderWidth: 2,
-    borderColor: theme.color.inkFaint,
-    alignItems: 'center',
-    justifyContent: 'center',
-  },
-  boxOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
-  tick: { fontFamily: theme.font.bold, fontSize: 14, lineHeight: 16, color: theme.color.accentInk },
   words: { flex: 1, minWidth: 0 },
   detail: { fontFamily: theme.font.mono, fontSize: 12, color: theme.color.inkSoft },
   blocked: { fontFamily: theme.font.regular, fontSize: 12, color: theme.color.danger },

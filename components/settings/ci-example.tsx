@@ -4,7 +4,9 @@ import { usePlans } from '../../client/use-plans';
 import { theme } from '../../constants/theme';
 import type { Role } from '../../shared/roles';
 import { SkText } from '../ui/sk-text';
-import { CHIP_BOX_STYLE } from '../ui/chip-box-style';
+import { CHOICE_CHIP_STYLE } from '../ui/choice-chip-style';
+import { RadioMark } from '../ui/radio-mark';
+import { useRadioKeys } from '../ui/use-radio-keys';
 
 /** The server's address as this browser reaches it; a placeholder elsewhere. */
 const origin =
@@ -18,6 +20,14 @@ export function CiExample({ role }: { role: Role }) {
   const plans = usePlans();
   const [chosen, setChosen] = useState<string | null>(null);
   const plan = plans.data?.find((p) => p.id === chosen) ?? plans.data?.[0];
+  const planRadio = useRadioKeys(
+    plans.data?.length ?? 0,
+    plans.data?.findIndex((p) => p.id === plan?.id) ?? -1,
+    (index) => {
+      const next = plans.data?.[index];
+      if (next) setChosen(next.id);
+    },
+  );
   const planId = plan?.id ?? '<plan id from the plan’s page>';
   const mayStart = role === 'maintainer' || role === 'admin';
 
@@ -48,17 +58,18 @@ export function CiExample({ role }: { role: Role }) {
       </SkText>
       {plans.data && plans.data.length > 1 ? (
         <View style={styles.chips} accessibilityRole="radiogroup" accessibilityLabel="Plan in the example">
-          {plans.data.map((p) => (
+          {plans.data.map((p, index) => (
             <Pressable
               key={p.id}
+              {...planRadio(index)}
               accessibilityRole="radio"
               aria-checked={p.id === plan?.id}
               accessibilityLabel={`Use plan ${p.name} in the example`}
               onPress={() => setChosen(p.id)}
               style={[styles.chip, p.id === plan?.id && styles.chipOn]}
             >
+              <RadioMark on={p.id === plan?.id} />
               <SkText variant="caption" tone="ink" style={p.id === plan?.id && styles.chipTextOn}>
-                {p.id === plan?.id ? '✓ ' : ''}
                 {p.name}
               </SkText>
             </Pressable>
@@ -80,9 +91,7 @@ const styles = StyleSheet.create({
   text: { lineHeight: 20 },
   inline: { fontFamily: theme.font.mono, color: theme.color.ink },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
-  chip: {
-    ...CHIP_BOX_STYLE,
-  },
+  chip: CHOICE_CHIP_STYLE,
   chipOn: { backgroundColor: theme.color.accentSoft, borderColor: theme.color.accent },
   chipTextOn: { fontFamily: theme.font.medium, color: theme.color.accent },
   code: {

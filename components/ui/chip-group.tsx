@@ -1,11 +1,13 @@
 import { Pressable, StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import { SkText } from './sk-text';
-import { CHIP_BOX_STYLE } from './chip-box-style';
+import { CHOICE_CHIP_STYLE } from './choice-chip-style';
+import { RadioMark } from './radio-mark';
+import { useRadioKeys } from './use-radio-keys';
 
 interface Props<V extends string | undefined> {
   label: string;
-  /** A value may be `undefined` for an "any" chip that clears a filter. */
+  /** A value may be `undefined` for an "any" chip that clears a filter. A glyph keeps its one meaning (constants/glyphs.ts). */
   options: readonly { value: V; text: string; glyph?: string }[];
   value: V;
   onChange: (value: V) => void;
@@ -13,27 +15,40 @@ interface Props<V extends string | undefined> {
   groupLabel?: string;
 }
 
-/** One choice among a few, as large chips: a radio group whose checked chip carries a ✓ as well as the accent. */
+/**
+ * One choice among a few, as large chips: a radio group (one tab stop, arrow keys move and choose,
+ * Space chooses: `useRadioKeys`) whose chosen chip carries a filled ring as well as the accent.
+ */
 export function ChipGroup<V extends string | undefined>({ label, options, value, onChange, groupLabel }: Props<V>) {
+  const radio = useRadioKeys(
+    options.length,
+    options.findIndex((o) => o.value === value),
+    (index) => {
+      const option = options[index];
+      if (option && option.value !== value) onChange(option.value);
+    },
+  );
   return (
     <View style={styles.group}>
       <SkText variant="smallLabel" style={styles.label}>
         {label}
       </SkText>
       <View style={styles.chips} accessibilityRole="radiogroup" accessibilityLabel={groupLabel ?? label}>
-        {options.map((o) => {
+        {options.map((o, index) => {
           const on = o.value === value;
           return (
             <Pressable
               key={o.value ?? '(any)'}
+              {...radio(index)}
               accessibilityRole="radio"
               accessibilityLabel={`${label}: ${o.text}`}
               aria-checked={on}
               onPress={() => onChange(o.value)}
               style={[styles.chip, on && styles.chipOn]}
             >
+              <RadioMark on={on} inverse={on} />
               <SkText variant="caption" tone="ink" style={on && styles.chipTextOn}>
-                {on ? '✓ ' : o.glyph ? `${o.glyph} ` : ''}
+                {o.glyph ? `${o.glyph} ` : ''}
                 {o.text}
               </SkText>
             </Pressable>
@@ -49,10 +64,7 @@ const styles = StyleSheet.create({
   group: { gap: theme.space(1), maxWidth: '100%' },
   label: { letterSpacing: 0.3 },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
-  chip: {
-    ...CHIP_BOX_STYLE,
-    backgroundColor: theme.color.panel,
-  },
+  chip: CHOICE_CHIP_STYLE,
   chipOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
   chipTextOn: { color: theme.color.accentInk, fontFamily: theme.font.medium },
 });

@@ -1,0 +1,67 @@
+import { fireEvent, render, screen } from '@testing-library/react';
+import { useState } from 'react';
+import { ChipGroup } from '../../../components/ui/chip-group';
+
+const OPTIONS = [
+  { value: 'bug', text: 'bug' },
+  { value: 'convention', text: 'convention difference' },
+  { value: 'accepted', text: 'accepted deviation' },
+] as const;
+
+type Verdict = (typeof OPTIONS)[number]['value'];
+
+function Harness({ initial }: { initial: Verdict | undefined }) {
+  const [value, setValue] = useState<Verdict | undefined>(initial);
+  return <ChipGroup label="Verdict" options={OPTIONS} value={value} onChange={setValue} />;
+}
+
+const radios = () => screen.getAllByRole('radio');
+const checked = () => radios().filter((r) => r.getAttribute('aria-checked') === 'true');
+
+describe('ChipGroup', () => {
+  it('is a radio group with one tab stop: the checked chip', () => {
+    render(<Harness initial="convention" />);
+    expect(screen.getByRole('radiogroup', { name: 'Verdict' })).toBeTruthy();
+    expect(radios().map((r) => r.getAttribute('tabindex'))).toEqual(['-1', '0', '-1']);
+    expect(checked().map((r) => r.getAttribute('aria-label'))).toEqual(['Verdict: convention difference']);
+  });
+
+  it('makes the first chip the tab stop when nothing is chosen, and chooses nothing by itself', () => {
+    render(<Harness initial={undefined} />);
+    expect(radios().map((r) => r.getAttribute('tabindex'))).toEqual(['0', '-1', '-1']);
+    expect(checked()).toEqual([]);
+  });
+
+  it('moves and chooses with the arrow keys, wrapping at the ends, and takes focus along', () => {
+    render(<Harness initial="bug" />);
+    fireEvent.keyDown(radios()[0]!, { key: 'ArrowRight' });
+    expect(checked()[0]!.getAttribute('aria-label')).toBe('Verdict: convention difference');
+    expect(document.activeElement).toBe(radios()[1]);
+    fireEvent.keyDown(radios()[1]!, { key: 'ArrowDown' });
+    fireEvent.keyDown(radios()[2]!, { key: 'ArrowRight' });
+    expect(checked()[0]!.getAttribute('aria-label')).toBe('Verdict: bug');
+    fireEvent.keyDown(radios()[0]!, { key: 'ArrowLeft' });
+    expect(checked()[0]!.getAttribute('aria-label')).toBe('Verdict: accepted deviation');
+    expect(document.activeElement).toBe(radios()[2]);
+    expect(radios().map((r) => r.getAttribute('tabindex'))).toEqual(['-1', '-1', '0']);
+  });
+
+  it('goes to the first and last chip with Home and End', () => {
+    render(<Harness initial="convention" />);
+    fireEvent.keyDown(radios()[1]!, { key: 'End' });
+    expect(checked()[0]!.getAttribute('aria-label')).toBe('Verdict: accepted deviation');
+    fireEvent.keyDown(radios()[2]!, { key: 'Home' });
+    expect(checked()[0]!.getAttribute('aria-label')).toBe('Verdict: bug');
+  });
+
+  it('chooses the focused chip with Space', () => {
+    render(<Harness initial={undefined} />);
+    fireEvent.keyDown(radios()[2]!, { key: ' ' });
+    expect(checked().map((r) => r.getAttribute('aria-label'))).toEqual(['Verdict: accepted deviation']);
+  });
+
+  it('shows no ✓ on any chip: the chosen one carries a drawn ring, not a glyph that means "passed"', () => {
+    render(<Harness initial="accepted" />);
+    expect(radios().map((r) => r.textContent)).toEqual(['bug', 'convention difference', 'accepted deviation']);
+  });
+});
