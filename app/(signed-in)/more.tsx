@@ -1,10 +1,11 @@
 import { Link } from 'expo-router';
-import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { Pressable, StyleSheet, View } from 'react-native';
 import { NAV_ITEMS } from '../../client/nav-items';
 import { useMe } from '../../client/use-me';
 import { useSignOut } from '../../client/use-sign-out';
 import { ActionButton } from '../../components/ui/action-button';
 import { RoleBadge } from '../../components/settings/role-badge';
+import { PageTitle } from '../../components/ui/page-title';
 import { ScreenBody } from '../../components/ui/screen-body';
 import { SkText } from '../../components/ui/sk-text';
 import { theme } from '../../constants/theme';
@@ -17,11 +18,11 @@ export default function MoreScreen() {
   const items = NAV_ITEMS.filter((item) => !item.primary && item.roles.includes(user.role));
   return (
     <ScreenBody title="More">
+      <PageTitle title="More" />
       <View style={styles.list}>
         {items.map((item) => (
           <Link key={item.href} href={item.href as never} asChild>
             <Pressable accessibilityRole="link" accessibilityLabel={item.label} style={styles.row}>
-              <Text style={styles.glyph}>{item.glyph}</Text>
               <SkText variant="label" style={styles.label}>
                 {item.label}
               </SkText>
@@ -60,7 +61,6 @@ const styles = StyleSheet.create({
     borderBottomWidth: 1,
     borderBottomColor: theme.color.rule,
   },
-  glyph: { fontFamily: theme.font.regular, fontSize: 20, color: theme.color.accent, width: 24, textAlign: 'center' },
   label: { flex: 1 },
   who: { gap: theme.space(1) },
 });

@@ -81,7 +81,7 @@ function DiagnosisTally({ view }: { view: FailurePathView }) {
   return (
     <View style={styles.tally}>
       <SkText variant="smallLabel" tone="ink">
-        <Text style={{ color: theme.color.accent }}>• </Text>
+        <Text style={{ color: theme.color.accent }}>✓ </Text>
         {passed} passed
       </SkText>
       {[...tally].map(([tone, n]) => (

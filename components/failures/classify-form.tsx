@@ -17,11 +17,11 @@ import { TextField } from '../ui/text-field';
 
 type Field = 'classification' | 'scope' | 'versions' | 'reason' | 'expiresAt';
 
-// No glyph on the accepted chip: the chip group marks the chosen chip with ✓, and a ✓ on an
-// unchosen "accepted" chip read as if it were chosen (issue 15).
-const VERDICTS: { value: ClassifyBody['classification']; text: string; glyph?: string }[] = [
-  { value: 'bug', text: CLASSIFICATION_WORDS.bug, glyph: '❌' },
-  { value: 'convention-difference', text: CLASSIFICATION_WORDS['convention-difference'], glyph: '⇄' },
+// Words alone: a glyph on an unchosen chip read as a state (a ✓ on "accepted" looked chosen), and
+// ⇄ already means the other side of a cut (constants/glyphs.ts).
+const VERDICTS: { value: ClassifyBody['classification']; text: string }[] = [
+  { value: 'bug', text: CLASSIFICATION_WORDS.bug },
+  { value: 'convention-difference', text: CLASSIFICATION_WORDS['convention-difference'] },
   { value: 'accepted', text: CLASSIFICATION_WORDS.accepted },
 ];
 const SCOPES: { value: ClassifyBody['scope']; text: string }[] = [

@@ -33,7 +33,7 @@ export function ColumnChooser<T extends string>({
         style={styles.toggle}
       >
         <SkText variant="smallLabel" tone="ink">
-          {open ? '↑' : '↓'} Columns ({shown.length} of {options.length})
+          Columns ({shown.length} of {options.length})
         </SkText>
       </DisclosureToggle>
       {open ? (

@@ -1,3 +1,4 @@
+import { GLYPHS } from '../../constants/glyphs';
 import { theme } from '../../constants/theme';
 import type { DiagnosisKind } from '../../shared/diagnosis';
 import { DIAGNOSIS_KIND_NAMES } from '../../shared/diagnosis-kind-names';
@@ -6,15 +7,16 @@ import { DIAGNOSIS_KINDS } from '../../shared/diagnosis-kinds';
 /** Every way a failing point can be labelled: a diagnosis kind, or an outcome without one. */
 export type DiagnosisTone = DiagnosisKind | 'error' | 'skipped';
 
+/** Each kind's glyph, by its one meaning in constants/glyphs.ts. */
 const GLYPH: Record<DiagnosisKind, string> = {
-  'other-sheet': '↻',
-  'cut-side': '⇄',
-  'zero-sign': '±',
-  'misplaced-cut': '≠',
-  inaccurate: '≈',
-  'not-finite': '∞',
-  disagreement: '↔',
-  unexplained: '?',
+  'other-sheet': GLYPHS.otherSheet.glyph,
+  'cut-side': GLYPHS.cutSide.glyph,
+  'zero-sign': GLYPHS.signedZero.glyph,
+  'misplaced-cut': GLYPHS.differs.glyph,
+  inaccurate: GLYPHS.inaccurate.glyph,
+  'not-finite': GLYPHS.notFinite.glyph,
+  disagreement: GLYPHS.disagreement.glyph,
+  unexplained: GLYPHS.unexplained.glyph,
 };
 
 interface DiagnosisStyle {
@@ -38,6 +40,6 @@ const kindStyle = (kind: DiagnosisKind): DiagnosisStyle => ({
  */
 export const DIAGNOSIS_STYLES: Record<DiagnosisTone, DiagnosisStyle> = {
   ...(Object.fromEntries(DIAGNOSIS_KINDS.map((k) => [k, kindStyle(k)])) as Record<DiagnosisKind, DiagnosisStyle>),
-  error: { word: 'error', glyph: '×', color: '#7A4E9A', explain: 'the library threw or timed out' },
-  skipped: { word: 'skipped', glyph: '…', color: theme.color.inkFaint, explain: 'not evaluated' },
+  error: { word: 'error', glyph: GLYPHS.error.glyph, color: '#7A4E9A', explain: 'the library threw or timed out' },
+  skipped: { word: 'skipped', glyph: GLYPHS.notInUse.glyph, color: theme.color.inkFaint, explain: 'not evaluated' },
 };

@@ -12,7 +12,7 @@ export function ExportLink({ href, label, disabledReason }: { href: string; labe
     return (
       <View style={[styles.link, styles.off]} aria-disabled>
         <SkText variant="label" tone="inkFaint">
-          ↓ {label}
+          {label}
         </SkText>
         <Text style={styles.reason}>{disabledReason}</Text>
       </View>
@@ -22,7 +22,7 @@ export function ExportLink({ href, label, disabledReason }: { href: string; labe
   const anchor = { href, hrefAttrs: { download: 'sheetkeeper-failures.csv', rel: 'noopener' } } as object;
   return (
     <Text accessibilityRole="link" accessibilityLabel={label} style={styles.link} {...anchor}>
-      ↓ {label}
+      {label}
     </Text>
   );
 }

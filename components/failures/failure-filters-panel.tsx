@@ -103,9 +103,7 @@ export function FailureFiltersPanel({
           accessibilityLabel={`Filters, ${on} on`}
           style={styles.toggle}
         >
-          <SkText variant="label">
-            {open ? '↑' : '↓'} Filters{on ? ` · ${on} on` : ''}
-          </SkText>
+          <SkText variant="label">Filters{on ? ` · ${on} on` : ''}</SkText>
         </DisclosureToggle>
       ) : null}
       {open ? (
@@ -170,7 +168,7 @@ export function FailureFiltersPanel({
               options={[
                 { value: undefined, text: 'any' },
                 { value: 'new', text: 'regressions', glyph: COMPARISON_WORDS.more },
-                { value: 'known', text: 'known', glyph: '•' },
+                { value: 'known', text: 'known' },
                 { value: 'accepted', text: 'accepted', glyph: '✓' },
               ]}
             />

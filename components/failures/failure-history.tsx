@@ -29,7 +29,7 @@ export function FailureHistory({ history, currentId }: { history: FailureDetailV
             </SkText>
             <DiagnosisLabel tone={h.diagnosisKind ?? 'error'} />
             <SkText variant="caption">
-              {current ? '• this case' : h.isRegression ? `${COMPARISON_WORDS.regressionMark} in that run` : ''}
+              {current ? 'this case' : h.isRegression ? `${COMPARISON_WORDS.regressionMark} in that run` : ''}
             </SkText>
           </>
         );

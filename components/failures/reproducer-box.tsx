@@ -35,7 +35,7 @@ export function ReproducerBox({ code }: { code: string }) {
         </Pressable>
         {copied ? (
           <SkText variant="smallLabel" tone={copied === 'yes' ? 'accent' : 'danger'} accessibilityLiveRegion="polite">
-            {copied === 'yes' ? '✓ Copied' : '× Could not copy here: select the code instead'}
+            {copied === 'yes' ? '✓ Copied' : '❌ Could not copy here: select the code instead'}
           </SkText>
         ) : null}
       </View>

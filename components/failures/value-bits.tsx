@@ -44,7 +44,7 @@ export function ValueBits({ failure: f }: { failure: FailureView }) {
         style={styles.toggle}
       >
         <SkText variant="smallLabel" tone="ink">
-          {bits ? '↑ Hide exact bits' : '↓ Show exact bits (C hex floats)'}
+          {bits ? 'Hide exact bits' : 'Show exact bits (C hex floats)'}
         </SkText>
       </DisclosureToggle>
     </View>

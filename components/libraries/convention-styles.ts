@@ -1,3 +1,4 @@
+import { GLYPHS } from '../../constants/glyphs';
 import { theme } from '../../constants/theme';
 import type { ConventionFingerprint } from '../../shared/convention-fingerprint';
 
@@ -10,27 +11,27 @@ export type Behaviour = ConventionFingerprint['cuts'][number]['behaviour'];
  */
 export const CONVENTION_STYLES: Record<Behaviour, { glyph: string; word: string; color: string; meaning: string }> = {
   'signed-zero': {
-    glyph: '±',
+    glyph: GLYPHS.signedZero.glyph,
     word: 'signed zero',
     color: theme.color.accent,
     meaning: 'on the cut, +0 and −0 gave the two one-sided limits (IEC 60559 / ISO C Annex G)',
   },
   'counter-clockwise': {
-    glyph: '↺',
+    glyph: GLYPHS.counterClockwise.glyph,
     word: 'counter-clockwise',
     color: theme.color.accent,
     meaning:
       'on the cut, both zero signs gave the limit from the side counter-clockwise continuity closes; the zero sign was ignored',
   },
   neither: {
-    glyph: '×',
+    glyph: GLYPHS.unexplained.glyph,
     word: 'neither',
     color: theme.color.danger,
     meaning:
       'the values on the cut follow neither convention (sides swapped, the open side closed, the cut elsewhere, or no value)',
   },
   inconsistent: {
-    glyph: '≠',
+    glyph: GLYPHS.differs.glyph,
     word: 'inconsistent',
     color: theme.color.focus,
     meaning: 'places on this cut disagree among themselves, or functions sharing the cut follow different conventions',

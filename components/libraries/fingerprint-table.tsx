@@ -3,13 +3,14 @@ import { Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-na
 import { theme } from '../../constants/theme';
 import type { ConventionFingerprint } from '../../shared/convention-fingerprint';
 import { ColumnHead } from '../ui/column-head';
+import { DisclosureMark } from '../ui/disclosure-mark';
 import { SkText } from '../ui/sk-text';
 import { ConventionLabel } from './convention-label';
 import { FingerprintDisagreementDetail } from './fingerprint-disagreement-detail';
 import { CONVENTION_STYLES, type Behaviour } from './convention-styles';
 import { formatComplexText } from '../../shared/format-complex-text';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
-import { CHIP_BOX_STYLE } from '../ui/chip-box-style';
+import { CHOICE_CHIP_STYLE } from '../ui/choice-chip-style';
 import { NOTE_BOX_STYLE } from '../ui/note-box-style';
 
 type CutEntry = ConventionFingerprint['cuts'][number];
@@ -151,8 +152,9 @@ function CutRow({
                   onPress={() => setShown(shown === d.with ? null : d.with)}
                   style={styles.linkButton}
                 >
+                  <DisclosureMark open={shown === d.with} ink={theme.color.accent} />
                   <SkText variant="smallLabel" tone="accent">
-                    {shown === d.with ? '↑' : '↓'} Where it parts with {d.with}
+                    Where it parts with {d.with}
                   </SkText>
                 </Pressable>
               ))}
@@ -174,7 +176,7 @@ function CutRow({
                 style={styles.linkButton}
               >
                 <SkText variant="smallLabel" tone="accent">
-                  {open ? '↑ Hide' : '↓ Show'} {plural(entry.probes.length, 'place')}
+                  {open ? 'Hide' : 'Show'} {plural(entry.probes.length, 'place')}
                 </SkText>
               </Pressable>
             ) : null}
@@ -251,9 +253,7 @@ const styles = StyleSheet.create({
   evidenceCell: { gap: theme.space(1) },
   small: { lineHeight: 20 },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
-  linkButton: {
-    ...CHIP_BOX_STYLE,
-  },
+  linkButton: CHOICE_CHIP_STYLE,
   probes: { gap: theme.space(2), paddingBottom: theme.space(3) },
   probeGrid: { flexDirection: 'row', flexWrap: 'wrap', columnGap: theme.space(4) },
   probeList: { gap: theme.space(2) },

@@ -19,8 +19,8 @@ const FIRST = 20;
 /** A pair's status at one version in a glyph and words, so the cell reads without colour. */
 function statusWords(s: SuiteEntry['statusByVersion'][number]): { glyph: string; text: string; bad: boolean } {
   if (s.status === 'pass') return { glyph: '✓', text: `pass (${s.pass})`, bad: false };
-  if (s.status === 'fail') return { glyph: '×', text: `${s.fail} failed`, bad: true };
-  return { glyph: '!', text: s.status, bad: true };
+  if (s.status === 'fail') return { glyph: '❌', text: `${s.fail} failed`, bad: true };
+  return { glyph: '◊', text: s.status, bad: true };
 }
 
 function outcomeWords(o: Side['outcome']): string {
@@ -144,7 +144,7 @@ function SuiteRow({ suite, versions, wide }: { suite: SuiteEntry; versions: stri
           style={styles.linkButton}
         >
           <SkText variant="smallLabel" tone="accent">
-            {open ? '↑ Hide' : '↓ Show'} {plural(suite.changes.length, 'changed point')}
+            {open ? 'Hide' : 'Show'} {plural(suite.changes.length, 'changed point')}
           </SkText>
         </Pressable>
       ) : (

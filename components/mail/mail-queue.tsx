@@ -11,7 +11,7 @@ import { SkText } from '../ui/sk-text';
 
 /** Each state in words (never colour alone), and the tone that goes with it. */
 const STATES: Record<Exclude<OutboxMailStatus, 'sent'>, { word: string; tone: 'ink' | 'warn' | 'danger' }> = {
-  pending: { word: '↻ Waiting to send', tone: 'ink' },
+  pending: { word: '… Waiting to send', tone: 'ink' },
   sending: { word: '↻ Being handed to the mail relay', tone: 'ink' },
   unconfirmed: { word: '? May have arrived, not sent again', tone: 'warn' },
   failed: { word: '× Not delivered', tone: 'danger' },

@@ -3,6 +3,7 @@ import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { formatDate } from '../../client/format-date';
 import { theme } from '../../constants/theme';
 import type { ReceivedMailView } from '../../shared/received-mail-view';
+import { RadioMark } from '../ui/radio-mark';
 import { SkText } from '../ui/sk-text';
 import { MailHtmlFrame } from './mail-html-frame';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
@@ -50,8 +51,8 @@ export function MailView({ message }: { message: ReceivedMailView }) {
               onPress={() => setPart(p.key)}
               style={[styles.tab, part === p.key && styles.tabOn, disabled && styles.tabDisabled]}
             >
+              <RadioMark on={part === p.key} inverse={part === p.key} />
               <SkText variant="label" style={part === p.key && styles.tabTextOn}>
-                {part === p.key ? '✓ ' : ''}
                 {p.label}
                 {disabled ? ' (none)' : ''}
               </SkText>
@@ -87,7 +88,9 @@ const styles = StyleSheet.create({
   tabs: { flexDirection: 'row', gap: theme.space(2), flexWrap: 'wrap' },
   tab: {
     minHeight: theme.touch,
-    justifyContent: 'center',
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: theme.space(2),
     paddingHorizontal: theme.space(4),
     borderRadius: theme.radius,
     borderWidth: 1,

@@ -67,7 +67,7 @@ export function NeedsMePanel({ needsMe, role, now }: { needsMe: NeedsMe; role: R
   return (
     <View style={styles.panel} testID="needs-me">
       <SkText variant="heading" accessibilityRole="header">
-        {total > 0 ? `◊ Waiting for you: ${total}` : '✓ Nothing is waiting for you'}
+        {total > 0 ? `Waiting for you: ${total}` : '✓ Nothing is waiting for you'}
       </SkText>
       {needsMe.reviewQueue ? (
         <Group title="Suites to review" count={needsMe.reviewQueue.length} empty="No suite is waiting for review.">
@@ -97,7 +97,7 @@ export function NeedsMePanel({ needsMe, role, now }: { needsMe: NeedsMe; role: R
               href={`/suites/${encodeURIComponent(s.slug)}`}
               label={`Open ${s.slug}, changes requested`}
             >
-              <SkText variant="label">↺ {suiteLine(s)}</SkText>
+              <SkText variant="label">↩ {suiteLine(s)}</SkText>
               <SkText variant="caption">
                 changes requested by {s.reviewerName ?? 'a reviewer'}, {formatWhen(s.since, now)}
               </SkText>

@@ -42,7 +42,7 @@ export function CutMapPicture({ cutMap }: { cutMap: CutMap }) {
       >
         {cutMap.verdict === 'matches'
           ? `✓ Matches: every discontinuity found lies on an expected cut, and every expected cut was seen.`
-          : `× Differs: ${[unexpected.length ? `${unexpected.length} stretch(es) of discontinuity off the expected cuts` : null, unseen.length ? `${unseen.length} expected cut(s) not seen` : null].filter(Boolean).join('; ')}.`}
+          : `≠ Differs: ${[unexpected.length ? `${unexpected.length} stretch(es) of discontinuity off the expected cuts` : null, unseen.length ? `${unseen.length} expected cut(s) not seen` : null].filter(Boolean).join('; ')}.`}
       </SkText>
       <View style={styles.frame} onLayout={(e: LayoutChangeEvent) => setWidth(Math.round(e.nativeEvent.layout.width))}>
         {width > 0 ? (

@@ -64,7 +64,7 @@ export function PlanList() {
                   {schedules.isPending
                     ? 'Schedules loading…'
                     : when
-                      ? `↻ next ${when.when} ${next!.zone} (${when.distance})`
+                      ? `next ${when.when} ${next!.zone} (${when.distance})`
                       : own.length > 0
                         ? '− every schedule paused'
                         : '− no schedule'}

@@ -9,10 +9,11 @@ import { cronPreviewBody } from '../../shared/schemas/schedule-body';
 import { MIN_SCHEDULE_INTERVAL_MINUTES } from '../../shared/min-schedule-interval-minutes';
 import type { ScheduleView } from '../../shared/schedule-view';
 import { FormActions } from '../ui/form-actions';
+import { RadioMark } from '../ui/radio-mark';
 import { SkText } from '../ui/sk-text';
 import { NextRuns } from './next-runs';
 import { TextField } from '../ui/text-field';
-import { CHIP_BOX_STYLE } from '../ui/chip-box-style';
+import { CHOICE_CHIP_STYLE } from '../ui/choice-chip-style';
 
 /** Common shapes to start from; each is plain cron, so what is saved is what is shown. */
 const STARTERS = [
@@ -101,8 +102,8 @@ export function ScheduleEditor({
             onPress={() => setCron(s.cron)}
             style={[styles.chip, cron.trim() === s.cron && styles.chipOn]}
           >
+            <RadioMark on={cron.trim() === s.cron} />
             <SkText variant="caption" tone="ink" style={cron.trim() === s.cron && styles.chipTextOn}>
-              {cron.trim() === s.cron ? '✓ ' : ''}
               {s.label}
             </SkText>
           </Pressable>
@@ -125,8 +126,8 @@ export function ScheduleEditor({
             onPress={() => setTimeZone(zone)}
             style={[styles.chip, timeZone === zone && styles.chipOn]}
           >
+            <RadioMark on={timeZone === zone} />
             <SkText variant="caption" tone="ink" style={timeZone === zone && styles.chipTextOn}>
-              {timeZone === zone ? '✓ ' : ''}
               {zone}
               {zone === deviceZone && zone !== 'UTC' ? ' (this device)' : ''}
             </SkText>
@@ -156,10 +157,7 @@ const styles = StyleSheet.create({
   editor: { gap: theme.space(3) },
   help: { lineHeight: 20 },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
-  chip: {
-    ...CHIP_BOX_STYLE,
-    backgroundColor: theme.color.panel,
-  },
+  chip: CHOICE_CHIP_STYLE,
   chipOn: { backgroundColor: theme.color.accentSoft, borderColor: theme.color.accent },
   chipTextOn: { fontFamily: theme.font.medium, color: theme.color.accent },
   preview: {

@@ -26,7 +26,7 @@ export function StartRunButton({
   return (
     <View style={styles.box}>
       <ActionButton
-        label="↻ Run now"
+        label="Run now"
         accessibilityLabel={`Run ${planName} now`}
         tone={tone}
         busy={start.isPending}

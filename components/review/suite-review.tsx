@@ -36,7 +36,7 @@ export function SuiteReview({ slug }: { slug: string }) {
     <TitledPanel title="Decision">
       {own || takenFromMe ? (
         <SkText variant="caption" tone="ink" style={styles.own}>
-          {`◊ ${own ? 'You wrote this version' : `You wrote this draft before ${current.author.displayName} edited it and took it over`}. Four eyes: another reviewer must review it, and the server will refuse your review.`}
+          {`${own ? 'You wrote this version' : `You wrote this draft before ${current.author.displayName} edited it and took it over`}. Four eyes: another reviewer must review it, and the server will refuse your review.`}
         </SkText>
       ) : null}
       <StoredRulesWarning body={current.body} />

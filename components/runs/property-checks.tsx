@@ -3,6 +3,7 @@ import { Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-na
 import { theme } from '../../constants/theme';
 import type { PropertyOutcome } from '../../shared/property-outcome';
 import type { RunPropertyRow } from '../../shared/run-property-row';
+import { DisclosureMark } from '../ui/disclosure-mark';
 import { SkText } from '../ui/sk-text';
 import { OUTCOME_TONE } from './outcome-tone';
 import { propertyFailureParts } from '../../shared/property-failure-parts';
@@ -75,7 +76,7 @@ export function PropertyChecks({ rows }: { rows: RunPropertyRow[] }) {
                 <SkText variant="mono">{pair}</SkText>
                 {allHeld ? (
                   <Text style={[styles.kind, { color: OUTCOME_TONE.pass.ink }]}>
-                    {KIND.held.glyph} all {plural(checks.length, 'law')} held {open ? '↑' : '↓'}
+                    {KIND.held.glyph} all {plural(checks.length, 'law')} held
                   </Text>
                 ) : (
                   <Text style={styles.kind}>
@@ -84,10 +85,10 @@ export function PropertyChecks({ rows }: { rows: RunPropertyRow[] }) {
                         {i > 0 ? ' · ' : ''}
                         {c.text}
                       </Text>
-                    ))}{' '}
-                    {open ? '↑' : '↓'}
+                    ))}
                   </Text>
                 )}
+                <DisclosureMark open={open} ink={allHeld ? OUTCOME_TONE.pass.ink : undefined} />
               </Pressable>
             ) : (
               <SkText variant="mono">{pair}</SkText>

@@ -4,6 +4,7 @@ import type { RunFilters as Filters } from '../../client/use-runs';
 import { theme } from '../../constants/theme';
 import { RUN_STATUSES, RUN_TRIGGERS, type RunStatus, type RunTrigger } from '../../shared/run-status';
 import { ChipGroup } from '../ui/chip-group';
+import { DisclosureMark } from '../ui/disclosure-mark';
 import { SkText } from '../ui/sk-text';
 
 const STATUS_WORDS: Record<RunStatus, string> = {
@@ -80,7 +81,8 @@ export function RunFilters({
         onPress={() => setOpen((v) => !v)}
         style={styles.toggle}
       >
-        <SkText variant="label">{open ? '↑' : '↓'} Filter runs</SkText>
+        <DisclosureMark open={open} />
+        <SkText variant="label">Filter runs</SkText>
         <SkText variant="caption" style={styles.summary} numberOfLines={2}>
           {on.length ? on.join(' · ') : 'all runs'}
         </SkText>

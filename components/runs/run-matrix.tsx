@@ -3,6 +3,9 @@ import { useState } from 'react';
 import { Pressable, ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { RunMatrixCell } from '../../shared/run-matrix-cell';
+import { CheckBoxMark } from '../ui/check-box-mark';
+import { CHOICE_CHIP_STYLE } from '../ui/choice-chip-style';
+import { spaceToggles } from '../ui/space-toggles';
 import { SkText } from '../ui/sk-text';
 import { describeMatrixCell, type MatrixCellWords } from './describe-matrix-cell';
 import { OUTCOME_GLYPH } from './outcome-glyph';
@@ -10,7 +13,6 @@ import { tallyCells } from './tally-cells';
 import { tallyWords } from './tally-words';
 import { DisclosureToggle } from '../ui/disclosure-toggle';
 import { OUTCOME_TONE } from './outcome-tone';
-import { CHIP_BOX_STYLE } from '../ui/chip-box-style';
 
 const SUITE_COLUMN = 300;
 const TARGET_COLUMN_MIN = 190;
@@ -90,10 +92,12 @@ export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCel
           accessibilityLabel="Show only suites that need a look"
           aria-checked={onlyProblems}
           onPress={() => setOnlyProblems((v) => !v)}
+          {...spaceToggles(() => setOnlyProblems((v) => !v))}
           style={[styles.toggle, onlyProblems && styles.toggleOn]}
         >
+          <CheckBoxMark on={onlyProblems} />
           <SkText variant="caption" tone="ink" style={onlyProblems && styles.toggleTextOn}>
-            {onlyProblems ? '✓ ' : ''}Only suites that need a look
+            Only suites that need a look
           </SkText>
         </Pressable>
       ) : null}
@@ -110,7 +114,7 @@ export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCel
                 role="columnheader"
                 style={[styles.gridHead, styles.suiteCol]}
               >
-                Suite ↓ · library version →
+                Suites in rows, library versions in columns
               </SkText>
               {targets.map((t) => (
                 <SkText
@@ -236,11 +240,7 @@ function MatrixCellView({ cell, words, layout }: { cell: RunMatrixCell; words: M
 const styles = StyleSheet.create({
   box: { gap: theme.space(3) },
   summary: { lineHeight: 20 },
-  toggle: {
-    alignSelf: 'flex-start',
-    ...CHIP_BOX_STYLE,
-    backgroundColor: theme.color.panel,
-  },
+  toggle: { ...CHOICE_CHIP_STYLE, alignSelf: 'flex-start' },
   toggleOn: { backgroundColor: theme.color.accent, borderColor: theme.color.accent },
   toggleTextOn: { color: theme.color.accentInk, fontFamily: theme.font.medium },
   gridScroll: { flexGrow: 1 },

@@ -37,7 +37,6 @@ export function AppFrame({ user, children }: { user: PublicUser; children: React
           isActive(item.href) && (wide ? styles.railItemActive : styles.tabItemActive),
         ])}
       >
-        <Text style={[styles.glyph, isActive(item.href) && styles.activeInk]}>{item.glyph}</Text>
         <Text style={[wide ? styles.railLabel : styles.tabLabel, isActive(item.href) && styles.activeInk]}>
           {item.label}
         </Text>
@@ -53,7 +52,6 @@ export function AppFrame({ user, children }: { user: PublicUser; children: React
       onPress={() => signOut.mutate()}
       style={wide ? styles.railItem : styles.tabItem}
     >
-      <Text style={styles.glyph}>→</Text>
       <Text style={wide ? styles.railLabel : styles.tabLabel}>Sign out</Text>
     </Pressable>
   );
@@ -140,6 +138,5 @@ const styles = StyleSheet.create({
   tabItem: { flex: 1, minHeight: 60, alignItems: 'center', justifyContent: 'center', gap: 2 },
   tabItemActive: { borderTopWidth: 3, borderTopColor: theme.color.focus },
   tabLabel: { fontFamily: theme.font.medium, fontSize: 12, color: theme.color.navInk },
-  glyph: { fontFamily: theme.font.regular, fontSize: 18, color: theme.color.navInk },
   activeInk: { color: theme.color.navActive },
 });

@@ -1,10 +1,11 @@
 import type { ReactNode } from 'react';
 import { Pressable, StyleSheet, type StyleProp, type ViewStyle } from 'react-native';
 import { theme } from '../../constants/theme';
+import { DisclosureMark } from './disclosure-mark';
 
 /**
  * A ruled button that opens and closes a part of the screen below it: one touch target tall, it tells
- * assistive tech whether that part is open. The words (with their ↓ / ↑ arrow) are the caller's.
+ * assistive tech whether that part is open, and draws a chevron that says it to the eye. The words are the caller's.
  */
 export function DisclosureToggle({
   open,
@@ -28,6 +29,7 @@ export function DisclosureToggle({
       onPress={onToggle}
       style={[styles.toggle, style]}
     >
+      <DisclosureMark open={open} />
       {children}
     </Pressable>
   );
@@ -36,7 +38,9 @@ export function DisclosureToggle({
 const styles = StyleSheet.create({
   toggle: {
     minHeight: theme.touch,
-    justifyContent: 'center',
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: theme.space(2),
     paddingHorizontal: theme.space(4),
     borderWidth: 1,
     borderColor: theme.color.control,

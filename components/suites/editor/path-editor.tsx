@@ -1,4 +1,5 @@
 import { StyleSheet, View } from 'react-native';
+import { GLYPHS } from '../../../constants/glyphs';
 import { theme } from '../../../constants/theme';
 import { ChipGroup } from '../../ui/chip-group';
 import { SkText } from '../../ui/sk-text';
@@ -96,8 +97,8 @@ export function PathEditor({
           <ChipGroup
             label={`${n} direction`}
             options={[
-              { value: 'ccw', text: '↺ counter-clockwise' },
-              { value: 'cw', text: '↻ clockwise' },
+              { value: 'ccw', text: 'counter-clockwise', glyph: GLYPHS.counterClockwise.glyph },
+              { value: 'cw', text: 'clockwise' },
             ]}
             value={path.direction}
             onChange={(direction) => set({ direction })}

@@ -55,7 +55,7 @@ describe('MailQueue', () => {
   it('shows a waiting mail with its next attempt out of the cap and the last reason', async () => {
     mockFetch(200, { mails: [mail({ attempts: 2, lastError: 'Greeting never received' })] });
     renderWithClient(<MailQueue />);
-    await waitFor(() => expect(screen.getByText('↻ Waiting to send')).toBeTruthy());
+    await waitFor(() => expect(screen.getByText('… Waiting to send')).toBeTruthy());
     expect(screen.getByText(/^Attempt 3 of 5 at .*Last try: Greeting never received$/)).toBeTruthy();
   });
 

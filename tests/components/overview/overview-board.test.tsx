@@ -160,7 +160,7 @@ describe('OverviewBoard', () => {
     mockFetch(200, { overview: OVERVIEW });
     renderWithClient(<OverviewBoard user={user('reviewer')} />);
     const panel = await screen.findByTestId('needs-me');
-    expect(within(panel).getByText('◊ Waiting for you: 2')).toBeTruthy();
+    expect(within(panel).getByText('Waiting for you: 2')).toBeTruthy();
     expect(within(panel).getByRole('link', { name: 'Review atanh-near-one version 2' }).getAttribute('href')).toBe(
       '/review/atanh-near-one',
     );

@@ -234,7 +234,7 @@ it('lays the matrix out as a grid with a column per target on a wide screen, and
   setScreenWidth(1440);
   const { unmount } = render(<RunMatrix runId={RUN} cells={CELLS} />);
   expect(screen.getAllByRole('columnheader').map((h) => h.textContent)).toEqual([
-    'Suite ↓ · library version →',
+    'Suites in rows, library versions in columns',
     'complex.js@2.4.2',
     'complex.js@2.4.3',
   ]);
