@@ -1,11 +1,13 @@
 import { Link } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
+import { PageTitle } from '../components/ui/page-title';
 import { SkText } from '../components/ui/sk-text';
 import { theme } from '../constants/theme';
 
 export default function NotFoundScreen() {
   return (
     <View style={styles.page}>
+      <PageTitle title="No page here" />
       <SkText variant="title" accessibilityRole="header">
         No page here
       </SkText>

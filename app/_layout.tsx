@@ -5,6 +5,7 @@ import { IBMPlexSans_700Bold } from '@expo-google-fonts/ibm-plex-sans/700Bold';
 import { QueryClientProvider } from '@tanstack/react-query';
 import { useFonts } from 'expo-font';
 import { Slot } from 'expo-router';
+import Head from 'expo-router/head';
 import { useState } from 'react';
 import { View } from 'react-native';
 import { createQueryClient } from '../client/create-query-client';
@@ -24,8 +25,11 @@ export default function RootLayout() {
   });
   if (!fontsLoaded && !fontError) return <View style={{ flex: 1, backgroundColor: theme.color.paper }} />;
   return (
-    <QueryClientProvider client={queryClient}>
-      <Slot />
-    </QueryClientProvider>
+    // Head's titles need its provider above every screen: without it, expo-router's Head (react-helmet-async) has no context on the web.
+    <Head.Provider>
+      <QueryClientProvider client={queryClient}>
+        <Slot />
+      </QueryClientProvider>
+    </Head.Provider>
   );
 }

@@ -1,2 +1,3 @@
 // Screen tests run under jest-expo/web with @testing-library/react.
-export {};
+// expo-router's Head needs a navigator to know its screen is focused; screens under test have none.
+jest.mock('expo-router/head', () => jest.requireActual('./expo-head-stub'));

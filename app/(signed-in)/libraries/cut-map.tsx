@@ -2,6 +2,7 @@ import { router, useLocalSearchParams } from 'expo-router';
 import { CrumbLink } from '../../../components/ui/crumb-link';
 import { CutMapView } from '../../../components/libraries/cut-map-view';
 import { QueryState } from '../../../components/ui/query-state';
+import { PageTitle } from '../../../components/ui/page-title';
 import { ScreenBody } from '../../../components/ui/screen-body';
 
 /** Where one function of a target is really discontinuous over a box, against the expected cuts. */
@@ -16,6 +17,7 @@ export default function CutMapScreen() {
           : undefined
       }
     >
+      <PageTitle title={name && fn ? `Cut map of ${fn} on ${name}` : 'Cut map'} />
       {name ? (
         <CrumbLink label={name} onPress={() => router.navigate({ pathname: '/libraries/target', params: { name } })} />
       ) : null}

@@ -1,6 +1,7 @@
 import { router, useLocalSearchParams } from 'expo-router';
 import { CrumbLink } from '../../../components/ui/crumb-link';
 import { QueryState } from '../../../components/ui/query-state';
+import { PageTitle } from '../../../components/ui/page-title';
 import { ScreenBody } from '../../../components/ui/screen-body';
 import { TargetFingerprint } from '../../../components/libraries/target-fingerprint';
 
@@ -12,6 +13,7 @@ export default function TargetScreen() {
       title={name ? `${name}` : 'Library'}
       lead="Convention fingerprint: on each cut of each function, what this version returns exactly on the cut with +0 and with −0."
     >
+      <PageTitle title={name ?? 'Library'} />
       <CrumbLink label="Libraries" onPress={() => router.navigate('/libraries')} />
       {name ? (
         <TargetFingerprint

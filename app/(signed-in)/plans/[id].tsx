@@ -5,6 +5,7 @@ import { useMe } from '../../../client/use-me';
 import { usePlan } from '../../../client/use-plan';
 import { PlanDetail } from '../../../components/plans/plan-detail';
 import { QueryState } from '../../../components/ui/query-state';
+import { PageTitle } from '../../../components/ui/page-title';
 import { ScreenBody } from '../../../components/ui/screen-body';
 import { SkText } from '../../../components/ui/sk-text';
 
@@ -15,6 +16,7 @@ export default function PlanScreen() {
   if (!me) return null;
   return (
     <ScreenBody title={plan.data?.name ?? 'Plan'}>
+      <PageTitle title={plan.data ? `Plan ${plan.data.name}` : 'Plan'} />
       <Link href={'/plans' as never} asChild>
         <Pressable accessibilityRole="link" accessibilityLabel="All plans" style={StyleSheet.flatten(styles.back)}>
           <SkText variant="label" tone="accent">

@@ -1,3 +1,4 @@
+import { PageTitle } from '../../../components/ui/page-title';
 import { ScreenBody } from '../../../components/ui/screen-body';
 import { SuiteFormScreen } from '../../../components/suites/editor/suite-form-screen';
 
@@ -7,6 +8,7 @@ export default function NewSuiteScreen() {
       title="New suite"
       lead="Every rule shows beside its field as you type; the picture shows what the runner will sample. Saving keeps a draft until you submit it for review."
     >
+      <PageTitle title="New suite" />
       <SuiteFormScreen slug={null} />
     </ScreenBody>
   );

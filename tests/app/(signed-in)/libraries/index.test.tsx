@@ -48,4 +48,11 @@ describe('the Libraries screen', () => {
     expect(screen.queryByTestId('target-source-form')).toBeNull();
     expect(screen.queryByRole('button', { name: /Remove/ })).toBeNull();
   });
+
+  it('names the browser tab after the screen', async () => {
+    document.title = '';
+    showAs('maintainer');
+    await screen.findByTestId('target-source-list');
+    expect(document.title).toBe('Libraries · Sheetkeeper');
+  });
 });
