@@ -1,8 +1,10 @@
+import type { Href } from 'expo-router';
 import type { Role } from '../shared/roles';
 import { ROLES } from '../shared/roles';
 
 export interface NavItem {
-  href: string;
+  /** A route of the app as a plain path (typed routes check it), so the frame can compare it with the current path. */
+  href: Extract<Href, string>;
   label: string;
   roles: readonly Role[];
   /** On a phone, primary items sit in the tab bar; the rest are one tap away under "More". */

@@ -21,7 +21,7 @@ export default function MoreScreen() {
       <PageTitle title="More" />
       <View style={styles.list}>
         {items.map((item) => (
-          <Link key={item.href} href={item.href as never} asChild>
+          <Link key={item.href} href={item.href} asChild>
             <Pressable accessibilityRole="link" accessibilityLabel={item.label} style={styles.row}>
               <SkText variant="label" style={styles.label}>
                 {item.label}

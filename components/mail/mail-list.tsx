@@ -35,7 +35,7 @@ export function MailList() {
         </View>
       ) : null}
       {messages.map((m) => (
-        <Link key={m.id} href={`/outbox/${m.id}` as never} asChild>
+        <Link key={m.id} href={`/outbox/${m.id}`} asChild>
           <Pressable
             accessibilityRole="link"
             accessibilityLabel={`Message ${m.subject || '(no subject)'} to ${m.to.join(', ')}`}

@@ -1,4 +1,4 @@
-import { Link } from 'expo-router';
+import { Link, type Href } from 'expo-router';
 import type { ReactNode } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { theme } from '../../constants/theme';
@@ -14,7 +14,7 @@ import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
 type NeedsMe = OverviewView['needsMe'];
 
-function Row({ href, label, children }: { href: string; label: string; children: ReactNode }) {
+function Row({ href, label, children }: { href: Href; label: string; children: ReactNode }) {
   return (
     <Link href={href} asChild>
       <Pressable accessibilityRole="link" accessibilityLabel={label} style={StyleSheet.flatten(styles.row)}>

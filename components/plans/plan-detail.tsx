@@ -129,7 +129,7 @@ export function PlanDetail({ plan, canEdit }: { plan: PlanView; canEdit: boolean
             question={`Delete “${plan.name}” and its schedules? Past runs stay.`}
             confirmLabel="Yes, delete"
             busy={remove.isPending}
-            onConfirm={() => remove.mutate(plan.id, { onSuccess: () => router.replace('/plans' as never) })}
+            onConfirm={() => remove.mutate(plan.id, { onSuccess: () => router.replace('/plans') })}
           />
           {removeFailure ? (
             <SkText variant="caption" tone="danger" accessibilityRole="alert">

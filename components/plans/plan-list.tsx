@@ -40,7 +40,7 @@ export function PlanList() {
           .sort((a, b) => a.at.localeCompare(b.at))[0];
         const when = next ? formatTimeInZone(next.at, next.zone) : null;
         return (
-          <Link key={plan.id} href={`/plans/${plan.id}` as never} asChild>
+          <Link key={plan.id} href={`/plans/${plan.id}`} asChild>
             <Pressable
               accessibilityRole="link"
               accessibilityLabel={`Plan ${plan.name}`}

@@ -33,7 +33,7 @@ export function StartRunButton({
         onPress={() =>
           start.mutate(planId, {
             onSuccess: ({ run, existing }) =>
-              router.push(`/runs/${run.id}${existing ? `?${OPENED_EXISTING_PARAM}=1` : ''}` as never),
+              router.push(`/runs/${run.id}${existing ? `?${OPENED_EXISTING_PARAM}=1` : ''}`),
           })
         }
       />

@@ -1,3 +1,4 @@
+import type { Href } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { SuiteSummary } from '../../shared/suite-summary';
@@ -6,7 +7,7 @@ import { SuiteStatusLabel } from './suite-status-label';
 import { LinkCard } from '../ui/link-card';
 
 /** One suite in the list: title, subject, its latest version's status, and which version plans use. */
-export function SuiteCard({ suite, href }: { suite: SuiteSummary; href?: string }) {
+export function SuiteCard({ suite, href }: { suite: SuiteSummary; href?: Href }) {
   const inUse =
     suite.approvedVersion === null
       ? 'no approved version: plans do not use it yet'

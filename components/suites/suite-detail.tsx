@@ -1,4 +1,4 @@
-import { Link } from 'expo-router';
+import { Link, type Href } from 'expo-router';
 import { useState } from 'react';
 import { Pressable, StyleSheet, useWindowDimensions, View } from 'react-native';
 import { useMe } from '../../client/use-me';
@@ -18,7 +18,7 @@ import { SuitePreview } from './suite-preview';
 import { SuiteStatusLabel } from './suite-status-label';
 import { VersionHistory } from './version-history';
 
-function LinkButton({ href, label }: { href: string; label: string }) {
+function LinkButton({ href, label }: { href: Href; label: string }) {
   return (
     <Link href={href} asChild>
       <Pressable accessibilityRole="link" accessibilityLabel={label} style={StyleSheet.flatten(styles.linkButton)}>

@@ -16,7 +16,7 @@ export default function OutboxMessageScreen() {
   return (
     <ScreenBody title="Message">
       <PageTitle title={message.data ? `Message: ${message.data.subject}` : 'Message'} />
-      <Link href={'/outbox' as never} asChild>
+      <Link href={'/outbox'} asChild>
         <Pressable accessibilityRole="link" accessibilityLabel="All messages" style={StyleSheet.flatten(styles.back)}>
           <SkText variant="label" tone="accent">
             ← All messages

@@ -17,7 +17,7 @@ export default function PlanScreen() {
   return (
     <ScreenBody title={plan.data?.name ?? 'Plan'}>
       <PageTitle title={plan.data ? `Plan ${plan.data.name}` : 'Plan'} />
-      <Link href={'/plans' as never} asChild>
+      <Link href={'/plans'} asChild>
         <Pressable accessibilityRole="link" accessibilityLabel="All plans" style={StyleSheet.flatten(styles.back)}>
           <SkText variant="label" tone="accent">
             ← All plans

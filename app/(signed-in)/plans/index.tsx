@@ -18,7 +18,7 @@ export default function PlansScreen() {
     >
       <PageTitle title="Plans" />
       {canEditPlans(me.role) ? (
-        <Link href={'/plans/new' as never} asChild>
+        <Link href={'/plans/new'} asChild>
           <Pressable accessibilityRole="link" accessibilityLabel="New plan" style={StyleSheet.flatten(styles.newPlan)}>
             <SkText variant="label" tone="accentInk">
               + New plan

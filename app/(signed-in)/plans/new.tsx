@@ -14,10 +14,7 @@ export default function NewPlanScreen() {
     <ScreenBody title="New plan" lead="Choose approved suites and installed targets; every suite runs on every target.">
       <PageTitle title="New plan" />
       {canEditPlans(me.role) ? (
-        <PlanForm
-          onSaved={(plan) => router.replace(`/plans/${plan.id}` as never)}
-          onCancel={() => router.replace('/plans' as never)}
-        />
+        <PlanForm onSaved={(plan) => router.replace(`/plans/${plan.id}`)} onCancel={() => router.replace('/plans')} />
       ) : (
         <QueryState state="error" message="Only maintainers and admins can make plans." />
       )}
