@@ -33,6 +33,7 @@ export function FailureTable({
       {failures.map((f) => (
         <Link key={f.id} href={`/failures/${f.id}`} asChild>
           <Pressable
+            role="row"
             accessibilityRole="link"
             accessibilityLabel={`Failure ${f.id}: ${DIAGNOSIS_STYLES[describeFailure(f).tone].word} in ${f.suiteSlug} on ${f.targetName}, path ${f.pathName}${decisions[f.id] ? `; decided: ${decisionMarkWords(decisions[f.id]!)}` : ''}`}
             style={StyleSheet.flatten(styles.row)}

@@ -85,7 +85,7 @@ export function CheckList({ label, items, selected, onChange, error, filterFrom 
           </Pressable>
         </View>
       ) : null}
-      <View style={[styles.list, error ? styles.listError : null]} accessibilityRole="list" aria-label={label}>
+      <View style={[styles.list, error ? styles.listError : null]} role="group" aria-label={label}>
         {shown.length === 0 ? (
           <SkText variant="caption" style={styles.none}>
             {items.length === 0 ? 'Nothing to choose from yet.' : 'Nothing matches the filter.'}

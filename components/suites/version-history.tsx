@@ -27,13 +27,13 @@ export function VersionHistory({
   onSelect: (version: number) => void;
 }) {
   return (
-    <View style={styles.list} accessibilityRole="list">
+    <View style={styles.list} role="group" aria-label="Versions">
       {versions.map((v) => (
         <Pressable
           key={v.version}
           accessibilityRole="button"
           accessibilityLabel={`Show version ${v.version}`}
-          aria-selected={v.version === selected}
+          aria-current={v.version === selected ? 'true' : undefined}
           onPress={() => onSelect(v.version)}
           style={[styles.item, v.version === selected && styles.selected]}
           testID={`version-${v.version}`}
