@@ -4,24 +4,18 @@ import { theme } from '../../constants/theme';
 import type { DecisionMark } from '../../shared/decision-mark';
 import type { FailureView } from '../../shared/failure-view';
 import { DecisionMarker } from '../decisions/decision-marker';
-import { decisionMarkWords } from '../decisions/decision-mark-words';
 import { SkText } from '../ui/sk-text';
 import { describeFailure } from './describe-failure';
 import { formatComplexText } from '../../shared/format-complex-text';
 import { DiagnosisLabel } from './diagnosis-label';
 import { LabelChips } from './label-chips';
-import { DIAGNOSIS_STYLES } from './diagnosis-styles';
 import { LinkCard } from '../ui/link-card';
 
 /** One failure on a phone: every label first (the leading one first), the decision in force on it, then where it happened and the values, the whole card a link to the case. */
 export function FailureCard({ failure: f, decision }: { failure: FailureView; decision?: DecisionMark }) {
   const { tone, detail } = describeFailure(f);
   return (
-    <LinkCard
-      href={`/failures/${f.id}`}
-      accessibilityLabel={`Failure ${f.id}: ${DIAGNOSIS_STYLES[tone].word} in ${f.suiteSlug} on ${f.targetName}, path ${f.pathName}${decision ? `; decided: ${decisionMarkWords(decision)}` : ''}`}
-      testID={`failure-card-${f.id}`}
-    >
+    <LinkCard href={`/failures/${f.id}`} testID={`failure-card-${f.id}`}>
       <View style={styles.top}>
         {f.labels.length > 0 ? (
           <LabelChips labels={f.labels} details />

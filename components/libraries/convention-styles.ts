@@ -33,7 +33,7 @@ export const CONVENTION_STYLES: Record<Behaviour, { glyph: string; word: string;
   inconsistent: {
     glyph: GLYPHS.differs.glyph,
     word: 'inconsistent',
-    color: theme.color.focus,
+    color: theme.color.warn,
     meaning: 'places on this cut disagree among themselves, or functions sharing the cut follow different conventions',
   },
 };

@@ -36,11 +36,7 @@ export function MailList() {
       ) : null}
       {messages.map((m) => (
         <Link key={m.id} href={`/outbox/${m.id}`} asChild>
-          <Pressable
-            accessibilityRole="link"
-            accessibilityLabel={`Message ${m.subject || '(no subject)'} to ${m.to.join(', ')}`}
-            style={StyleSheet.flatten(wide ? styles.row : styles.card)}
-          >
+          <Pressable accessibilityRole="link" style={StyleSheet.flatten(wide ? styles.row : styles.card)}>
             {wide ? (
               <>
                 <SkText variant="caption" style={styles.whenCol}>

@@ -9,7 +9,6 @@ import { OutcomeCounts } from './outcome-counts';
 import { ProgressBar } from './progress-bar';
 import { runDuration } from './run-duration';
 import { RunStatusBadge } from './run-status-badge';
-import { runVerdict } from './run-verdict';
 import { triggerWords } from './trigger-words';
 import { waitingForWorkerWords } from './waiting-for-worker-words';
 import { LinkCard } from '../ui/link-card';
@@ -18,11 +17,7 @@ import { LinkCard } from '../ui/link-card';
 export function RunCard({ run, now }: { run: RunView; now?: number }) {
   const live = isLiveRun(run);
   return (
-    <LinkCard
-      href={`/runs/${run.id}`}
-      accessibilityLabel={`Run of ${run.planName}, ${runVerdict(run).word}, ${formatWhen(run.createdAt, now)}`}
-      testID={`run-${run.id}`}
-    >
+    <LinkCard href={`/runs/${run.id}`} testID={`run-${run.id}`}>
       <View style={styles.head}>
         <SkText variant="label" style={styles.plan} numberOfLines={2}>
           {run.planName}

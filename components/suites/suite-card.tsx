@@ -13,12 +13,7 @@ export function SuiteCard({ suite, href }: { suite: SuiteSummary; href?: Href })
       ? 'no approved version: plans do not use it yet'
       : `plans use v${suite.approvedVersion}`;
   return (
-    <LinkCard
-      href={href ?? `/suites/${suite.slug}`}
-      accessibilityLabel={`${suite.title}, version ${suite.latestVersion} ${suite.latestStatus.replace('-', ' ')}`}
-      testID={`suite-${suite.slug}`}
-      style={styles.card}
-    >
+    <LinkCard href={href ?? `/suites/${suite.slug}`} testID={`suite-${suite.slug}`} style={styles.card}>
       <View style={styles.head}>
         <SuiteStatusLabel status={suite.latestStatus} version={suite.latestVersion} />
         <SkText variant="caption" tone="inkFaint">

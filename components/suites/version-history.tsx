@@ -32,7 +32,6 @@ export function VersionHistory({
         <Pressable
           key={v.version}
           accessibilityRole="button"
-          accessibilityLabel={`Show version ${v.version}`}
           aria-current={v.version === selected ? 'true' : undefined}
           onPress={() => onSelect(v.version)}
           style={[styles.item, v.version === selected && styles.selected]}

@@ -67,7 +67,7 @@ describe("a maintainer's day, one journey through the screens", () => {
     await signIn(b.page, odile.email, odile.password);
     await goTo(b.page, 'Outbox');
     await b.page
-      .getByRole('link', { name: /^Message \[Sheetkeeper\] \d+ regressions? in complex\.js nightly/ })
+      .getByRole('link', { name: /\[Sheetkeeper\] \d+ regressions? in complex\.js nightly/ })
       .first()
       .click();
     const inside = b.page.frameLocator('[data-testid="mail-html-frame"]');
