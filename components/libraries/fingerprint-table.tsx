@@ -154,7 +154,7 @@ function CutRow({
                 >
                   <DisclosureMark open={shown === d.with} ink={theme.color.accent} />
                   <SkText variant="smallLabel" tone="accent">
-                    Where it parts with {d.with}
+                    Where {entry.function} and {d.with} part ways
                   </SkText>
                 </Pressable>
               ))}
@@ -170,7 +170,7 @@ function CutRow({
             {entry.probes.length > 0 ? (
               <Pressable
                 accessibilityRole="button"
-                accessibilityLabel={`${open ? 'Hide' : 'Show'} the ${plural(entry.probes.length, 'place')} probed for ${name}`}
+                accessibilityLabel={`${open ? 'Hide' : 'Show'} ${plural(entry.probes.length, 'place')} probed for ${name}`}
                 aria-expanded={open}
                 onPress={() => setOpen(!open)}
                 style={styles.linkButton}

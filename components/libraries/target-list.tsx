@@ -69,7 +69,18 @@ export function TargetList({ onOpenTarget, onOpenMatrix }: TargetListProps) {
                 <Pressable
                   key={t.name}
                   accessibilityRole="link"
-                  accessibilityLabel={`${t.name}: convention fingerprint and cut maps${t.installed ? '' : ' (not installed)'}`}
+                  // The name says where the link goes, then every word the row shows, in order (WCAG 2.5.3:
+                  // a person may name the link by what they read on it).
+                  accessibilityLabel={[
+                    `${t.name}: convention fingerprint and cut maps${t.installed ? '' : ' (not installed)'}.`,
+                    t.version,
+                    settingsWords(t.settings) || 'no settings',
+                    entryWords(t.entries),
+                    t.convention ? STATED_CONVENTION_WORDS[t.convention] : '',
+                    t.installed ? 'Fingerprint' : 'not installed any more: nothing can be computed for it',
+                  ]
+                    .filter(Boolean)
+                    .join(' ')}
                   disabled={!t.installed}
                   onPress={() => onOpenTarget(t.name)}
                   style={({ pressed }) => [styles.version, pressed && styles.pressed]}
@@ -95,12 +106,12 @@ export function TargetList({ onOpenTarget, onOpenMatrix }: TargetListProps) {
               {installed.length >= 2 ? (
                 <Pressable
                   accessibilityRole="link"
-                  accessibilityLabel={`Version matrix of ${key}`}
+                  accessibilityLabel={`Version matrix of ${key}: what changed between these ${installed.length} versions`}
                   onPress={() => onOpenMatrix(key)}
                   style={({ pressed }) => [styles.matrix, pressed && styles.pressed]}
                 >
                   <SkText variant="smallLabel" tone="ink">
-                    ∆ Version matrix: what changed between these {installed.length} versions →
+                    ∆ Version matrix of {key}: what changed between these {installed.length} versions →
                   </SkText>
                 </Pressable>
               ) : (

@@ -138,7 +138,7 @@ function SuiteRow({ suite, versions, wide }: { suite: SuiteEntry; versions: stri
       {suite.changes.length > 0 ? (
         <Pressable
           accessibilityRole="button"
-          accessibilityLabel={`${open ? 'Hide' : 'Show'} the ${plural(suite.changes.length, 'changed point')} of ${suite.id}`}
+          accessibilityLabel={`${open ? 'Hide' : 'Show'} ${plural(suite.changes.length, 'changed point')} of ${suite.id}`}
           aria-expanded={open}
           onPress={() => setOpen(!open)}
           style={styles.linkButton}

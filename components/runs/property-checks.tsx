@@ -65,9 +65,10 @@ export function PropertyChecks({ rows }: { rows: RunPropertyRow[] }) {
               <Pressable
                 accessibilityRole="button"
                 accessibilityLabel={
+                  // The pair and the words the row shows, in order, then what pressing does (WCAG 2.5.3).
                   allHeld
-                    ? `${open ? 'Hide' : 'Show'} the ${plural(checks.length, 'law')} that held for ${pair}`
-                    : `${open ? 'Hide' : 'Show'} the ${plural(checks.length, 'law')} checked for ${pair}: ${counts.map((c) => c.text.slice(2)).join(', ')}`
+                    ? `${pair}: all ${plural(checks.length, 'law')} held; ${open ? 'hide' : 'show'} them`
+                    : `${pair}: ${counts.map((c) => c.text).join(' · ')}; ${open ? 'hide' : 'show'} the ${plural(checks.length, 'law')} checked`
                 }
                 aria-expanded={open}
                 onPress={() => toggle(pair)}

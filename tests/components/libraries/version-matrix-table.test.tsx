@@ -59,7 +59,7 @@ describe('VersionMatrixTable', () => {
 
   it('lists a changed point with its value and outcome on both sides, zero signs kept', () => {
     render(<VersionMatrixTable library="complex.js" versions={VERSIONS} suites={SUITES} />);
-    const toggle = screen.getByRole('button', { name: 'Show the 1 changed point of sqrt-principal-sz' });
+    const toggle = screen.getByRole('button', { name: 'Show 1 changed point of sqrt-principal-sz' });
     expect(toggle.getAttribute('aria-expanded')).toBe('false');
     fireEvent.click(toggle);
     const row = screen.getByTestId('matrix-sqrt-principal-sz').textContent!;

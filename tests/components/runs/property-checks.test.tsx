@@ -92,14 +92,14 @@ describe('PropertyChecks', () => {
     render(<PropertyChecks rows={rows} />);
     expect(screen.queryByTestId('property-sqrt-principal-sz × complex.js@2.4.3-root-power')).toBeNull();
     const fold = screen.getByRole('button', {
-      name: 'Show the 2 laws that held for sqrt-principal-sz × complex.js@2.4.3',
+      name: 'sqrt-principal-sz × complex.js@2.4.3: all 2 laws held; show them',
     });
     expect(fold.textContent).toMatch(/✓ all 2 laws held/);
     await act(() => fireEvent.click(fold));
     expect(screen.getByTestId('property-sqrt-principal-sz × complex.js@2.4.3-root-power')).toBeTruthy();
     expect(
       screen
-        .getByRole('button', { name: 'Hide the 2 laws that held for sqrt-principal-sz × complex.js@2.4.3' })
+        .getByRole('button', { name: 'sqrt-principal-sz × complex.js@2.4.3: all 2 laws held; hide them' })
         .getAttribute('aria-expanded'),
     ).toBe('true');
   });
