@@ -39,11 +39,24 @@ export function PlanList() {
           .map((s) => ({ at: s.nextRuns[0]!, zone: s.timeZone }))
           .sort((a, b) => a.at.localeCompare(b.at))[0];
         const when = next ? formatTimeInZone(next.at, next.zone) : null;
+        const size = `${plan.suites.length} ${plan.suites.length === 1 ? 'suite' : 'suites'} × ${plan.targets.length} ${plan.targets.length === 1 ? 'target' : 'targets'}`;
+        const targets = plan.targets.map((t) => (t.installed ? t.name : `${t.name} (not installed)`)).join(' · ');
+        const schedule = schedules.isPending
+          ? 'Schedules loading…'
+          : when
+            ? `next ${when.when} ${next!.zone} (${when.distance})`
+            : own.length > 0
+              ? '− every schedule paused'
+              : '− no schedule';
+        const recipients = `${plan.recipients.length} ${plan.recipients.length === 1 ? 'recipient' : 'recipients'}`;
         return (
           <Link key={plan.id} href={`/plans/${plan.id}`} asChild>
             <Pressable
               accessibilityRole="link"
-              accessibilityLabel={`Plan ${plan.name}`}
+              // "Plan …", then every word the card shows, in order (WCAG 2.5.3, label in name).
+              accessibilityLabel={[`Plan ${plan.name}.`, plan.description, size, targets, schedule, recipients]
+                .filter(Boolean)
+                .join(' ')}
               style={StyleSheet.flatten([styles.card, { width: columns === 1 ? '100%' : `${100 / columns - 2}%` }])}
             >
               <SkText variant="heading">{plan.name}</SkText>
@@ -53,24 +66,17 @@ export function PlanList() {
                 </SkText>
               ) : null}
               <SkText variant="label" tone="accent">
-                {plan.suites.length} {plan.suites.length === 1 ? 'suite' : 'suites'} × {plan.targets.length}{' '}
-                {plan.targets.length === 1 ? 'target' : 'targets'}
+                {size}
               </SkText>
               <Text style={styles.targets} numberOfLines={2}>
-                {plan.targets.map((t) => (t.installed ? t.name : `${t.name} (not installed)`)).join(' · ')}
+                {targets}
               </Text>
               <View style={styles.foot}>
                 <SkText variant="caption" tone="ink">
-                  {schedules.isPending
-                    ? 'Schedules loading…'
-                    : when
-                      ? `next ${when.when} ${next!.zone} (${when.distance})`
-                      : own.length > 0
-                        ? '− every schedule paused'
-                        : '− no schedule'}
+                  {schedule}
                 </SkText>
                 <SkText variant="caption" tone="inkFaint">
-                  {plan.recipients.length} {plan.recipients.length === 1 ? 'recipient' : 'recipients'}
+                  {recipients}
                 </SkText>
               </View>
             </Pressable>
