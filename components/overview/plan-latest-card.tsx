@@ -1,4 +1,4 @@
-import { Link } from 'expo-router';
+import { Link, type Href } from 'expo-router';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { OverviewView } from '../../shared/overview-view';
@@ -13,7 +13,7 @@ import { RunStatusBadge } from '../runs/run-status-badge';
 import { SkText } from '../ui/sk-text';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
-function CardLink({ href, label, text }: { href: string; label: string; text: string }) {
+function CardLink({ href, label, text }: { href: Href; label: string; text: string }) {
   return (
     <Link href={href} asChild>
       <Pressable accessibilityRole="link" accessibilityLabel={label} style={StyleSheet.flatten(styles.link)}>

@@ -23,3 +23,13 @@ describe('the palette', () => {
     expect(contrastRatio(theme.color[front], theme.color[ground])).toBeGreaterThanOrEqual(minimum);
   });
 });
+
+describe('the inks of the diagnosis kinds', () => {
+  // A kind's word is written in its ink on the same grounds as any text.
+  const grounds = CONTRAST_PAIRS.find((p) => p.what === 'text on the light grounds')!.grounds;
+  const rows = Object.entries(theme.kindInk).flatMap(([kind, ink]) => grounds.map((ground) => ({ kind, ink, ground })));
+
+  it.each(rows)('$kind ($ink) on $ground reaches 4.5:1', ({ ink, ground }) => {
+    expect(contrastRatio(ink, theme.color[ground])).toBeGreaterThanOrEqual(4.5);
+  });
+});
