@@ -27,7 +27,7 @@ describe('NeedsMePanel', () => {
         }}
       />,
     );
-    expect(screen.getByText('◊ Waiting for you: 1')).toBeTruthy();
+    expect(screen.getByText('Waiting for you: 1')).toBeTruthy();
     const link = screen.getByRole('link', {
       name: '↑ 31 regressions in complex.js nightly: 20 branch findings, 11 accuracy findings. Open them in the failure table.',
     });
