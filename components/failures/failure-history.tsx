@@ -4,6 +4,7 @@ import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { FailureDetailView } from '../../shared/failure-detail-view';
 import { SkText } from '../ui/sk-text';
+import { DIAGNOSIS_STYLES } from './diagnosis-styles';
 import { DiagnosisLabel } from './diagnosis-label';
 
 /** The same point (suite, path, input bits) in every run that failed it, newest first, across targets and versions. */
@@ -21,16 +22,16 @@ export function FailureHistory({ history, currentId }: { history: FailureDetailV
       </SkText>
       {history.map((h) => {
         const current = h.id === currentId;
+        const when = `${new Date(h.runAt).toISOString().slice(0, 16).replace('T', ' ')} UTC`;
+        const mark = current ? 'this case' : h.isRegression ? `${COMPARISON_WORDS.regressionMark} in that run` : '';
         const body = (
           <>
-            <Text style={styles.when}>{new Date(h.runAt).toISOString().slice(0, 16).replace('T', ' ')} UTC</Text>
+            <Text style={styles.when}>{when}</Text>
             <SkText variant="smallLabel" tone="ink">
               {h.targetName}
             </SkText>
             <DiagnosisLabel tone={h.diagnosisKind ?? 'error'} />
-            <SkText variant="caption">
-              {current ? 'this case' : h.isRegression ? `${COMPARISON_WORDS.regressionMark} in that run` : ''}
-            </SkText>
+            <SkText variant="caption">{mark}</SkText>
           </>
         );
         return current ? (
@@ -41,7 +42,8 @@ export function FailureHistory({ history, currentId }: { history: FailureDetailV
           <Link key={h.id} href={`/failures/${h.id}`} asChild>
             <Pressable
               accessibilityRole="link"
-              accessibilityLabel={`Failure ${h.id} on ${h.targetName}`}
+              // "Failure …", then the row's words in order (WCAG 2.5.3, label in name).
+              accessibilityLabel={`Failure ${h.id}: ${when} ${h.targetName} ${DIAGNOSIS_STYLES[h.diagnosisKind ?? 'error'].word} ${mark}`.trim()}
               style={StyleSheet.flatten(styles.row)}
             >
               {body}
