@@ -100,12 +100,12 @@ export function PlanLatestCard({
           <View style={styles.links}>
             <CardLink
               href={`/runs/${run.id}`}
-              label={`Open the latest completed run of ${plan.planName}`}
+              label={`Open run: the latest completed run of ${plan.planName}`}
               text="Open run →"
             />
             <CardLink
               href={`/runs?plan=${plan.planId}`}
-              label={`Every run of ${plan.planName}`}
+              label={`All runs of this plan, ${plan.planName}`}
               text="All runs of this plan"
             />
           </View>
@@ -127,7 +127,7 @@ export function PlanLatestCard({
           </SkText>
           <CardLink
             href={`/runs/${plan.newer.id}`}
-            label={`Open the newer ${plan.newer.status} run of ${plan.planName}`}
+            label={`Open the ${plan.newer.status} run: the newer run of ${plan.planName}`}
             text={`Open the ${plan.newer.status} run →`}
           />
         </View>

@@ -134,12 +134,12 @@ describe('OverviewBoard', () => {
     ).toBeTruthy();
     expect(
       within(nightly)
-        .getByRole('link', { name: 'Open the latest completed run of complex.js nightly' })
+        .getByRole('link', { name: 'Open run: the latest completed run of complex.js nightly' })
         .getAttribute('href'),
     ).toBe('/runs/aaaaaaaa-0000-4000-8000-000000000001');
-    expect(within(nightly).getByRole('link', { name: 'Every run of complex.js nightly' }).getAttribute('href')).toBe(
-      '/runs?plan=p1',
-    );
+    expect(
+      within(nightly).getByRole('link', { name: 'All runs of this plan, complex.js nightly' }).getAttribute('href'),
+    ).toBe('/runs?plan=p1');
     expect(
       within(screen.getByTestId('plan-mathjs before release')).getByText(
         '− Not run yet: nothing checked for this plan.',

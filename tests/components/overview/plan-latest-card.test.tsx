@@ -60,7 +60,7 @@ describe('PlanLatestCard', () => {
       'A newer run was cancelled 58 min ago with 2 of 19 suite × target pairs done: a cancelled run is not compared with anything, so its counts are partial and say nothing about regressions.',
     );
     expect(
-      within(newer).getByRole('link', { name: 'Open the newer cancelled run of complex.js nightly' }),
+      within(newer).getByRole('link', { name: 'Open the cancelled run: the newer run of complex.js nightly' }),
     ).toBeTruthy();
     // The cancelled run's counts are never compared with the completed run's.
     expect(screen.queryByText(/fewer failed/)).toBeNull();
