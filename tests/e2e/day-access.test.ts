@@ -128,7 +128,7 @@ describe('every screen, for the role that meets it', () => {
       await b.page.goto(`${BASE_URL}/more`);
       await saveScreenshots(b.page, 'access-more', () => b.page.getByText('maintainer', { exact: true }).waitFor());
     },
-    // Thirteen screens at two sizes: about 35 s measured on the shared 2-core machine (load 8-12).
+    // Fourteen screens at two sizes: thirteen took about 35 s on the shared 2-core machine (load 8-12).
     180_000,
   );
 

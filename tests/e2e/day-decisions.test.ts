@@ -34,11 +34,14 @@ describe('a day of decisions (issue 15, point 4)', () => {
     await b.page.getByText('Decisions on this failure').waitFor({ timeout: 20_000 });
     await b.page.getByText(/^No decision covers this failure/).waitFor();
 
-    // The accepted chip carries ✓ only once chosen.
+    // The accepted chip is marked chosen (a drawn ring) only once chosen, and never carries a ✓.
     const accepted = b.page.getByRole('radio', { name: 'Verdict: accepted deviation' });
     expect(await accepted.textContent()).toBe('accepted deviation');
+    expect(await accepted.getByTestId('chosen-mark').count()).toBe(0);
     await accepted.click();
-    expect(await accepted.textContent()).toBe('✓ accepted deviation');
+    expect(await accepted.getAttribute('aria-checked')).toBe('true');
+    expect(await accepted.textContent()).toBe('accepted deviation');
+    expect(await accepted.getByTestId('chosen-mark').count()).toBe(1);
 
     // The scope in words before saving: which failures, which library, which versions.
     await b.page.getByRole('radio', { name: 'Covers: this path' }).click();

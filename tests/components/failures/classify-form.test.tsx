@@ -1,4 +1,4 @@
-import { act, fireEvent, screen, waitFor } from '@testing-library/react';
+import { act, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { ClassifyForm } from '../../../components/failures/classify-form';
 import { mockFetch } from '../../setup/mock-fetch';
 import { renderWithClient } from '../../setup/render-with-client';
@@ -113,15 +113,16 @@ describe('ClassifyForm', () => {
     expect((screen.getByLabelText('Reason') as HTMLTextAreaElement).value).toBe('follows the counter-clockwise rule');
   });
 
-  it('shows ✓ on the accepted chip only while it is chosen', () => {
+  it('marks the accepted chip as chosen only while it is chosen, with a drawn ring and never a ✓', () => {
     mockFetch(201, {});
     renderWithClient(<ClassifyForm failure={failure()} role="reviewer" />);
     const accepted = () => screen.getByRole('radio', { name: 'Verdict: accepted deviation' });
-    expect(accepted().textContent).toBe('accepted deviation');
+    const ringed = () => within(accepted()).queryByTestId('chosen-mark') !== null;
+    expect([accepted().textContent, ringed()]).toEqual(['accepted deviation', false]);
     fireEvent.click(accepted());
-    expect(accepted().textContent).toBe('✓ accepted deviation');
+    expect([accepted().textContent, ringed()]).toEqual(['accepted deviation', true]);
     fireEvent.click(screen.getByRole('radio', { name: 'Verdict: bug' }));
-    expect(accepted().textContent).toBe('accepted deviation');
+    expect([accepted().textContent, ringed()]).toEqual(['accepted deviation', false]);
   });
 
   it('states which failures, library and versions the verdict covers before saving, and sends what it said', async () => {

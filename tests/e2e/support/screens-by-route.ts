@@ -31,6 +31,7 @@ const installedTarget = async (api: ApiReader) =>
 export const SCREENS_BY_ROUTE: Record<string, ScreenVisit> = {
   'sign-in': { role: null, path: async () => '/sign-in', title: named('Sign in') },
   '+not-found': { role: null, path: async () => '/no-such-screen', title: named('No page here') },
+  join: { role: null, path: async () => '/join', title: named('Join or reset password') },
   '(signed-in)/index': { role: 'maintainer', path: async () => '/', title: named('Overview') },
   '(signed-in)/runs/index': { role: 'maintainer', path: async () => '/runs', title: named('Runs') },
   '(signed-in)/runs/[id]': {
@@ -62,6 +63,7 @@ export const SCREENS_BY_ROUTE: Record<string, ScreenVisit> = {
     path: async (api) => `/review/${(await first<{ slug: string }>(api, '/suites', 'suites')).slug}`,
     title: /^Review: .+ · Sheetkeeper$/,
   },
+  '(signed-in)/decisions/index': { role: 'maintainer', path: async () => '/decisions', title: named('Decisions') },
   '(signed-in)/libraries/index': { role: 'maintainer', path: async () => '/libraries', title: named('Libraries') },
   '(signed-in)/libraries/target': {
     role: 'maintainer',
