@@ -1,3 +1,4 @@
+import type { Href } from 'expo-router';
 import type { DiagnosisKind } from '../../shared/diagnosis';
 import { diagnosisClass } from '../../shared/diagnosis-class';
 import { DIAGNOSIS_CLASSES } from '../../shared/diagnosis-classes';
@@ -28,7 +29,7 @@ export interface MatrixCellWords {
 }
 
 export interface CellLink {
-  href: string;
+  href: Href;
   /** What the cell shows: "failures →". */
   words: string;
   /** What a screen reader hears after the cell's label. */

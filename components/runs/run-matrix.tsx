@@ -1,4 +1,4 @@
-import { Link, type Href } from 'expo-router';
+import { Link } from 'expo-router';
 import { useState } from 'react';
 import { Pressable, ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import { theme } from '../../constants/theme';
@@ -224,7 +224,7 @@ function MatrixCellView({ cell, words, layout }: { cell: RunMatrixCell; words: M
     );
   }
   return (
-    <Link href={words.link.href as Href} asChild>
+    <Link href={words.link.href} asChild>
       <Pressable
         accessibilityRole="link"
         accessibilityLabel={`${words.label}. ${words.link.said}`}

@@ -110,14 +110,14 @@ describe('PropertyChecks', () => {
     expect(screen.queryByTestId('property-log-principal-sz × complex.js@2.4.3-conjugate-symmetry')).toBeNull();
     const folds = screen.getAllByRole('button').map((b) => b.textContent);
     expect(folds).toEqual([
-      'log-principal-sz × complex.js@2.4.3❌ 1 failed · ✓ 1 held ↓',
-      'acos-principal-sz × complex.js@2.4.3− 1 not checked ↓',
-      'sqrt-principal-sz × complex.js@2.4.3✓ all 2 laws held ↓',
+      'log-principal-sz × complex.js@2.4.3❌ 1 failed · ✓ 1 held',
+      'acos-principal-sz × complex.js@2.4.3− 1 not checked',
+      'sqrt-principal-sz × complex.js@2.4.3✓ all 2 laws held',
     ]);
     await act(() =>
       fireEvent.click(
         screen.getByRole('button', {
-          name: 'Show the 2 laws checked for log-principal-sz × complex.js@2.4.3: 1 failed, 1 held',
+          name: 'log-principal-sz × complex.js@2.4.3: ❌ 1 failed · ✓ 1 held; show the 2 laws checked',
         }),
       ),
     );
