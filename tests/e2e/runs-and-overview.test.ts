@@ -45,7 +45,7 @@ describe('Overview and runs', () => {
     await completed.getByText('complex.js nightly').waitFor();
     await completed.click();
 
-    await b.page.getByText('Each suite against each library version').waitFor();
+    await b.page.getByRole('heading', { name: 'Each suite against each library version' }).waitFor();
     const note = b.page.getByTestId('checked-scope-note');
     await note.getByText(/points in all/).waitFor();
     await note.getByText(/not a certificate/).waitFor();
