@@ -17,8 +17,17 @@ export function ReproducerBox({ code }: { code: string }) {
   };
   return (
     <View style={styles.root}>
-      <ScrollView horizontal style={styles.box} contentContainerStyle={styles.inner}>
-        <SkText variant="mono" tone="navInk" style={styles.code} selectable accessibilityLabel="Reproducer code">
+      {/* A region that takes focus, so a keyboard user can scroll a long line sideways (axe-core's
+          scrollable-region-focusable). */}
+      <ScrollView
+        horizontal
+        focusable
+        role="region"
+        aria-label="Reproducer code"
+        style={styles.box}
+        contentContainerStyle={styles.inner}
+      >
+        <SkText variant="mono" tone="navInk" style={styles.code} selectable>
           {code}
         </SkText>
       </ScrollView>

@@ -14,10 +14,11 @@ import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
 type NeedsMe = OverviewView['needsMe'];
 
-function Row({ href, label, children }: { href: Href; label: string; children: ReactNode }) {
+/** A link named by the words it shows (WCAG 2.5.3, label in name); the arrow is decoration. */
+function Row({ href, children }: { href: Href; children: ReactNode }) {
   return (
     <Link href={href} asChild>
-      <Pressable accessibilityRole="link" accessibilityLabel={label} style={StyleSheet.flatten(styles.row)}>
+      <Pressable accessibilityRole="link" style={StyleSheet.flatten(styles.row)}>
         <View style={styles.rowBody}>{children}</View>
         <SkText variant="body" tone="inkFaint">
           →
@@ -72,11 +73,7 @@ export function NeedsMePanel({ needsMe, role, now }: { needsMe: NeedsMe; role: R
       {needsMe.reviewQueue ? (
         <Group title="Suites to review" count={needsMe.reviewQueue.length} empty="No suite is waiting for review.">
           {needsMe.reviewQueue.map((s) => (
-            <Row
-              key={`${s.slug}-${s.version}`}
-              href={`/review/${encodeURIComponent(s.slug)}`}
-              label={`Review ${s.slug} version ${s.version}`}
-            >
+            <Row key={`${s.slug}-${s.version}`} href={`/review/${encodeURIComponent(s.slug)}`}>
               <SkText variant="label">{suiteLine(s)}</SkText>
               <SkText variant="caption">
                 by {s.authorName}, submitted {formatWhen(s.since, now)}
@@ -92,11 +89,7 @@ export function NeedsMePanel({ needsMe, role, now }: { needsMe: NeedsMe; role: R
           empty="None of your suites needs changes."
         >
           {needsMe.changesRequested.map((s) => (
-            <Row
-              key={`${s.slug}-${s.version}`}
-              href={`/suites/${encodeURIComponent(s.slug)}`}
-              label={`Open ${s.slug}, changes requested`}
-            >
+            <Row key={`${s.slug}-${s.version}`} href={`/suites/${encodeURIComponent(s.slug)}`}>
               <SkText variant="label">↩ {suiteLine(s)}</SkText>
               <SkText variant="caption">
                 changes requested by {s.reviewerName ?? 'a reviewer'}, {formatWhen(s.since, now)}
@@ -115,11 +108,7 @@ export function NeedsMePanel({ needsMe, role, now }: { needsMe: NeedsMe; role: R
           const where = r.targetKey === null ? `in ${r.planName}` : `on ${r.targetKey}`;
           const split = CLASS_WORDS.map((c) => `${countOf(r, c.key)} ${c.findings(countOf(r, c.key))}`).join(', ');
           return (
-            <Row
-              key={`${r.runId}-${r.targetKey ?? 'plan'}`}
-              href={regressionsHref(r.runId)}
-              label={`${COMPARISON_WORDS.regressions(r.count)} ${where}: ${split}. Open them in the failure table.`}
-            >
+            <Row key={`${r.runId}-${r.targetKey ?? 'plan'}`} href={regressionsHref(r.runId)}>
               <SkText variant="label" style={styles.danger}>
                 {COMPARISON_WORDS.regressions(r.count)} {where}:{' '}
                 {r.branch === 0 ? 'accuracy only' : CLASS_WORDS.map((c) => `${countOf(r, c.key)} ${c.key}`).join(', ')}

@@ -274,7 +274,7 @@ export function PlanePicture({
       <View style={styles.zoom}>
         <SmallButton label="Zoom in" onPress={() => zoomBy(1)} accessibilityLabel="Zoom in on the picture" />
         <SmallButton label="Zoom out" onPress={() => zoomBy(-1)} accessibilityLabel="Zoom out of the picture" />
-        <SmallButton label="Reset zoom" onPress={() => zoomBy(0)} accessibilityLabel="Reset the picture's zoom" />
+        <SmallButton label="Reset zoom" onPress={() => zoomBy(0)} accessibilityLabel="Reset zoom of the picture" />
         <Text style={styles.scale} testID={testID ? `${testID}-zoom` : undefined}>
           {zoomWords}
         </Text>

@@ -65,7 +65,7 @@ export function CheckList({ label, items, selected, onChange, error, filterFrom 
           />
           <Pressable
             accessibilityRole="button"
-            accessibilityLabel={`Choose every ${label.toLowerCase()} shown`}
+            accessibilityLabel={`All shown: choose all ${label.toLowerCase()} shown`}
             onPress={() => onChange(Array.from(new Set([...selected, ...choosable])))}
             style={styles.tool}
           >

@@ -27,7 +27,7 @@ export function StartRunButton({
     <View style={styles.box}>
       <ActionButton
         label="Run now"
-        accessibilityLabel={`Run ${planName} now`}
+        accessibilityLabel={`Run now: ${planName}`}
         tone={tone}
         busy={start.isPending}
         onPress={() =>

@@ -76,7 +76,6 @@ export function RunFilters({
     <View style={styles.box}>
       <Pressable
         accessibilityRole="button"
-        accessibilityLabel="Filter runs"
         aria-expanded={open}
         onPress={() => setOpen((v) => !v)}
         style={styles.toggle}

@@ -46,10 +46,10 @@ export function RunsTable({ runs, now }: { runs: RunView[]; now?: number }) {
             // Link's asChild merges styles as objects: a flat one (an array breaks on web).
             style={StyleSheet.flatten([styles.row, styles.bodyRow])}
           >
-            <View style={styles.status}>
+            <View role="cell" style={styles.status}>
               <RunStatusBadge run={run} />
             </View>
-            <View style={styles.plan}>
+            <View role="cell" style={styles.plan}>
               <SkText variant="label" numberOfLines={2}>
                 {run.planName}
               </SkText>
@@ -59,16 +59,18 @@ export function RunsTable({ runs, now }: { runs: RunView[]; now?: number }) {
                 </SkText>
               ) : null}
             </View>
-            <View style={styles.who}>
+            <View role="cell" style={styles.who}>
               <SkText variant="caption" tone="ink">
                 {formatWhen(run.createdAt, now)}
               </SkText>
               <SkText variant="caption">{triggerWords(run.trigger, run.requestedBy)}</SkText>
             </View>
-            <SkText variant="caption" tone="ink" style={styles.duration}>
-              {runDuration(run, now)}
-            </SkText>
-            <View style={[styles.counts, styles.countsCell]}>
+            <View role="cell" style={styles.duration}>
+              <SkText variant="caption" tone="ink">
+                {runDuration(run, now)}
+              </SkText>
+            </View>
+            <View role="cell" style={[styles.counts, styles.countsCell]}>
               {isLiveRun(run) ? <ProgressBar done={run.shardsDone} total={run.shardsTotal} /> : null}
               <OutcomeCounts counts={run.counts} byClass={run.byClass} compact />
             </View>

@@ -101,7 +101,7 @@ export function UserRow({ user, isMe, wide }: { user: PublicUser; isMe: boolean;
             />
             <ConfirmAction
               label="Mail a password reset"
-              accessibilityLabel={`Mail ${name} a password reset`}
+              accessibilityLabel={`Mail a password reset to ${name}`}
               question={`Mail ${name} a link to choose a new password? Their password works until they use it.`}
               confirmLabel="Yes, mail the link"
               busy={reset.isPending}

@@ -17,7 +17,7 @@ describe('findings by kind: the plan picture and the regression mail summary', (
     const kwame = demo('maintainer');
     await signIn(b.page, kwame.email, kwame.password);
     await goTo(b.page, 'Plans');
-    await b.page.getByRole('link', { name: 'Plan complex.js nightly' }).click();
+    await b.page.getByRole('link', { name: /^complex\.js nightly/ }).click();
     const picture = b.page.getByTestId('findings-by-kind');
     await picture.getByText('Branch findings').waitFor();
     await saveScreenshots(b.page, 'plan-findings-by-kind', () => picture.getByText('Branch findings').waitFor());
@@ -71,9 +71,7 @@ describe('findings by kind: the plan picture and the regression mail summary', (
     const odile = demo('admin');
     await signIn(b.page, odile.email, odile.password);
     await goTo(b.page, 'Outbox');
-    const mail = b.page
-      .getByRole('link', { name: /^Message \[Sheetkeeper\] \d+ regressions? in complex\.js nightly/ })
-      .first();
+    const mail = b.page.getByRole('link', { name: /^\[Sheetkeeper\] \d+ regressions? in complex\.js nightly/ }).first();
     await mail.waitFor();
     await mail.click();
     const inside = b.page.frameLocator('[data-testid="mail-html-frame"]');

@@ -38,8 +38,8 @@ describe("the run page through a maintainer's day", () => {
     });
     expect(made.status).toBe(201);
     await goTo(b.page, 'Plans');
-    await b.page.getByRole('link', { name: 'Plan Roots on one release' }).click();
-    await b.page.getByRole('button', { name: 'Run Roots on one release now' }).click();
+    await b.page.getByRole('link', { name: /^Roots on one release/ }).click();
+    await b.page.getByRole('button', { name: 'Run now: Roots on one release' }).click();
     await b.page.waitForURL(/\/runs\/[0-9a-f-]{36}$/);
     const runId = new URL(b.page.url()).pathname.split('/').pop()!;
     await b.page

@@ -22,8 +22,8 @@ describe("a maintainer's day, one journey through the screens", () => {
     const kwame = user('kwame@sheetkeeper.test');
     await signIn(b.page, kwame.email, kwame.password);
     await goTo(b.page, 'Plans');
-    await b.page.getByRole('link', { name: 'Plan complex.js nightly' }).click();
-    await b.page.getByRole('button', { name: 'Run complex.js nightly now' }).click();
+    await b.page.getByRole('link', { name: /^complex\.js nightly/ }).click();
+    await b.page.getByRole('button', { name: 'Run now: complex.js nightly' }).click();
     await b.page.waitForURL(/\/runs\/[0-9a-f-]{36}$/);
     const runId = new URL(b.page.url()).pathname.split('/').pop()!;
 

@@ -29,7 +29,7 @@ describe('plans and schedules', () => {
     const kwame = demo('maintainer');
     await signIn(b.page, kwame.email, kwame.password);
     await goTo(b.page, 'Plans');
-    const card = b.page.getByRole('link', { name: 'Plan complex.js nightly' });
+    const card = b.page.getByRole('link', { name: /^complex\.js nightly/ });
     await card.waitFor();
     await saveScreenshots(b.page, 'plans', () => card.waitFor());
     await card.click();
@@ -105,7 +105,7 @@ describe('plans and schedules', () => {
     await b.page.getByText('Checks 1 suite × target pair now: approved suites on installed targets.').waitFor();
     const [started] = await Promise.all([
       b.page.waitForResponse((r) => r.url().endsWith('/api/runs') && r.request().method() === 'POST'),
-      b.page.getByRole('button', { name: 'Run One root on one target now' }).click(),
+      b.page.getByRole('button', { name: 'Run now: One root on one target' }).click(),
     ]);
     expect(started.status()).toBe(202);
     const { run } = await started.json();

@@ -71,7 +71,7 @@ describe('Overview and runs', () => {
     // One picture of the whole screen (saveScreenshots grows the window to show all of it): shots
     // scrolled to the matrix and to the property checks were the same 1440×5900 picture twice more.
     await saveScreenshots(b.page, 'run-detail', () =>
-      b.page.getByText('Each suite against each library version').waitFor(),
+      b.page.getByRole('heading', { name: 'Each suite against each library version' }).waitFor(),
     );
   });
 

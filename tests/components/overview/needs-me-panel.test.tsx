@@ -28,9 +28,7 @@ describe('NeedsMePanel', () => {
       />,
     );
     expect(screen.getByText('Waiting for you: 1')).toBeTruthy();
-    const link = screen.getByRole('link', {
-      name: '↑ 31 regressions in complex.js nightly: 20 branch findings, 11 accuracy findings. Open them in the failure table.',
-    });
+    const link = screen.getByRole('link', { name: /^↑ 31 regressions in complex\.js nightly: 20 branch, 11 accuracy/ });
     expect(link.getAttribute('href')).toBe('/failures?run=c0000000-0000-4000-8000-000000000031&status=new');
     expect(within(link).getByText("You receive this plan's regression mail · finished 6 h ago")).toBeTruthy();
     expect(screen.queryByText(/Nothing is waiting/)).toBeNull();

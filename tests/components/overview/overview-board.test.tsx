@@ -161,12 +161,14 @@ describe('OverviewBoard', () => {
     renderWithClient(<OverviewBoard user={user('reviewer')} />);
     const panel = await screen.findByTestId('needs-me');
     expect(within(panel).getByText('Waiting for you: 2')).toBeTruthy();
-    expect(within(panel).getByRole('link', { name: 'Review atanh-near-one version 2' }).getAttribute('href')).toBe(
-      '/review/atanh-near-one',
-    );
+    expect(
+      within(panel)
+        .getByRole('link', { name: /^atanh next to ±1 · v2/ })
+        .getAttribute('href'),
+    ).toBe('/review/atanh-near-one');
     expect(within(panel).getByText('atanh next to ±1 · v2')).toBeTruthy();
     const regression = within(panel).getByRole('link', {
-      name: '↑ 5 regressions on complex.js: 2 branch findings, 3 accuracy findings. Open them in the failure table.',
+      name: /^↑ 5 regressions on complex\.js: 2 branch, 3 accuracy/,
     });
     expect(regression.getAttribute('href')).toBe('/failures?run=aaaaaaaa-0000-4000-8000-000000000001&status=new');
     expect(within(regression).getByText('↑ 5 regressions on complex.js: 2 branch, 3 accuracy')).toBeTruthy();
@@ -200,7 +202,7 @@ describe('OverviewBoard', () => {
     renderWithClient(<OverviewBoard user={user('contributor')} />);
     const panel = await screen.findByTestId('needs-me');
     expect(within(panel).queryByText(/Suites to review/)).toBeNull();
-    const sentBack = within(panel).getByRole('link', { name: 'Open log-branch, changes requested' });
+    const sentBack = within(panel).getByRole('link', { name: /changes requested by/ });
     expect(sentBack.getAttribute('href')).toBe('/suites/log-branch');
     expect(within(sentBack).getByText('“Add a straddle at 5e-324.”')).toBeTruthy();
     expect(

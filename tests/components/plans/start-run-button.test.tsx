@@ -15,7 +15,7 @@ describe('StartRunButton', () => {
   it('opens the run it started', async () => {
     const calls = mockFetch(202, { run: { ...RUN, status: 'queued' }, existing: false });
     renderWithClient(<StartRunButton planId={RUN.planId!} planName={RUN.planName} />);
-    await act(() => fireEvent.click(screen.getByRole('button', { name: 'Run complex.js nightly now' })));
+    await act(() => fireEvent.click(screen.getByRole('button', { name: 'Run now: complex.js nightly' })));
     await waitFor(() => expect(mockPush).toHaveBeenCalledWith(`/runs/${RUN.id}`));
     expect(calls[0]).toMatchObject({ url: '/api/runs', init: { method: 'POST' } });
   });
@@ -23,7 +23,7 @@ describe('StartRunButton', () => {
   it('opens the run already in progress and marks the address so the run page says so', async () => {
     mockFetch(200, { run: RUN, existing: true });
     renderWithClient(<StartRunButton planId={RUN.planId!} planName={RUN.planName} />);
-    await act(() => fireEvent.click(screen.getByRole('button', { name: 'Run complex.js nightly now' })));
+    await act(() => fireEvent.click(screen.getByRole('button', { name: 'Run now: complex.js nightly' })));
     await waitFor(() => expect(mockPush).toHaveBeenCalledWith(`/runs/${RUN.id}?opened-existing=1`));
   });
 });

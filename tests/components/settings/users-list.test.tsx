@@ -107,7 +107,7 @@ describe('UsersList', () => {
     });
     renderWithClient(<UsersList me={odile} />);
     await waitFor(() => screen.getByText('Ravi Dutta'));
-    await click('Mail Ravi Dutta a password reset');
+    await click('Mail a password reset to Ravi Dutta');
     await click('Yes, mail the link');
     await waitFor(() =>
       expect(screen.getByText(/^Reset link mailed to ravi@sheetkeeper\.test; it works until /)).toBeTruthy(),
