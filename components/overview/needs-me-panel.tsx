@@ -106,7 +106,6 @@ export function NeedsMePanel({ needsMe, role, now }: { needsMe: NeedsMe; role: R
       <Group title="Regressions for you" count={needsMe.regressions.length} empty={regressionsEmpty(needsMe)}>
         {needsMe.regressions.map((r) => {
           const where = r.targetKey === null ? `in ${r.planName}` : `on ${r.targetKey}`;
-          const split = CLASS_WORDS.map((c) => `${countOf(r, c.key)} ${c.findings(countOf(r, c.key))}`).join(', ');
           return (
             <Row key={`${r.runId}-${r.targetKey ?? 'plan'}`} href={regressionsHref(r.runId)}>
               <SkText variant="label" style={styles.danger}>
