@@ -26,7 +26,12 @@ const leftOut = (c: PairCounts, whose: string) =>
 export function describeComparison(c: RunComparison): string[] {
   const lines: string[] = [];
   const changes = [W.change(c.common.fail, 'failed'), W.change(c.common.error, 'in error')].filter((p) => p !== null);
-  if (c.common.pairs === 0) lines.push('The two runs checked no suite × target pair in common: nothing to compare.');
+  // Only failure counts lack a common ground here: regressions are matched point by point per
+  // library, so a run on new versions can still have them, and the line must not say otherwise.
+  if (c.common.pairs === 0)
+    lines.push(
+      'Failure counts are not compared: the two runs checked no suite × target pair in common (regressions are matched point by point, per library).',
+    );
   else
     lines.push(
       `On the ${W.plural(c.common.pairs, 'suite × target pair', 'suite × target pairs')} both runs checked, ${W.since}: ${changes.length ? changes.join(', ') : 'no change in failed or error points'}.`,
