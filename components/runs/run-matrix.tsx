@@ -7,6 +7,7 @@ import { CheckBoxMark } from '../ui/check-box-mark';
 import { CHOICE_CHIP_STYLE } from '../ui/choice-chip-style';
 import { spaceToggles } from '../ui/space-toggles';
 import { SkText } from '../ui/sk-text';
+import { ScreenReaderWords } from '../ui/screen-reader-words';
 import { describeMatrixCell, type MatrixCellWords } from './describe-matrix-cell';
 import { OUTCOME_GLYPH } from './outcome-glyph';
 import { tallyCells } from './tally-cells';
@@ -225,12 +226,8 @@ function MatrixCellView({ cell, words, layout }: { cell: RunMatrixCell; words: M
   }
   return (
     <Link href={words.link.href} asChild>
-      <Pressable
-        accessibilityRole="link"
-        accessibilityLabel={`${words.label}. ${words.link.said}`}
-        style={frame}
-        testID={`cell-${cell.suite}-${cell.target}`}
-      >
+      <Pressable accessibilityRole="link" style={frame} testID={`cell-${cell.suite}-${cell.target}`}>
+        <ScreenReaderWords>{`${words.label}. ${words.link.said}. `}</ScreenReaderWords>
         {content}
       </Pressable>
     </Link>

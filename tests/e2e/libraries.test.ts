@@ -57,10 +57,10 @@ describe('Libraries', () => {
     await b.page.getByRole('radio', { name: 'Map acot', exact: true }).click();
     await b.page.getByRole('button', { name: 'Map this box' }).click();
     await verdict
-      .getByText(/× Differs: \d+ stretch\(es\) of discontinuity off the expected cuts/)
+      .getByText(/≠ Differs: \d+ stretch\(es\) of discontinuity off the expected cuts/)
       .waitFor({ timeout: 30_000 });
     expect(new URL(b.page.url()).searchParams.get('fn')).toBe('acot');
-    await saveScreenshots(b.page, 'library-cut-map-acot', () => verdict.getByText(/× Differs/).waitFor());
+    await saveScreenshots(b.page, 'library-cut-map-acot', () => verdict.getByText(/≠ Differs/).waitFor());
   }, 180_000);
 
   it('lets an admin add a program in another language as a target, which gets ready in the background, then remove it', async () => {
