@@ -46,7 +46,8 @@ export function OutcomeCounts({
   const items = [
     ...failures,
     item('pass', 'passed', 'pass'),
-    item('error', 'error', 'error'),
+    // "in error", not "error": beside "6 stopped by an error" (checks) a bare "0 error" read as a contradiction.
+    item('error', 'in error', 'error'),
     item('skipped', 'skipped', 'neutral'),
     item('notApplicable', 'not applicable', 'neutral'),
   ];

@@ -22,7 +22,7 @@ describe('OutcomeCounts', () => {
     expect(screen.getAllByText(/\d/).map((e) => e.textContent)).toEqual([
       '❌ 1,073 failed',
       '✓ 6,774 passed',
-      '◊ 0 error',
+      '◊ 0 in error',
       '− 788 skipped',
       '– 0 not applicable',
     ]);
