@@ -9,4 +9,6 @@ module.exports = {
   setupFilesAfterEnv: ['<rootDir>/tests/e2e/support/close-browser-after-file.ts'],
   testTimeout: 60000,
   maxWorkers: 1,
+  // One file at a time, journeys that read the seeded state first (the file says why).
+  testSequencer: '<rootDir>/tests/setup/e2e-sequencer.js',
 };
