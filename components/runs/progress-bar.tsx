@@ -3,10 +3,11 @@ import { theme } from '../../constants/theme';
 import { SkText } from '../ui/sk-text';
 
 /**
- * A run's progress: a bar and the words "n of m shards" (the bar alone would say nothing to a
- * screen reader or in grey print). `label` names what is counted.
+ * A run's progress: a bar and the words "n of m checks" (the bar alone would say nothing to a
+ * screen reader or in grey print). `label` names what is counted; a run counts checks, each suite
+ * against one library version, the word every run screen uses ("shard" is the queue's word).
  */
-export function ProgressBar({ done, total, label = 'shards' }: { done: number; total: number; label?: string }) {
+export function ProgressBar({ done, total, label = 'checks' }: { done: number; total: number; label?: string }) {
   const fraction = total > 0 ? Math.min(1, Math.max(0, done / total)) : 0;
   const words = `${done.toLocaleString('en-GB')} of ${total.toLocaleString('en-GB')} ${label}`;
   return (

@@ -62,7 +62,7 @@ export function RunHeader({ run, canCancel, checks }: { run: RunView; canCancel:
       </View>
       {live ? (
         <View accessibilityLiveRegion="polite">
-          <ProgressBar done={run.shardsDone} total={run.shardsTotal} label="checks" />
+          <ProgressBar done={run.shardsDone} total={run.shardsTotal} />
         </View>
       ) : null}
       {live && run.waitingFor.length > 0 ? (

@@ -151,7 +151,7 @@ describe('OverviewBoard', () => {
     mockFetch(200, { overview: OVERVIEW });
     renderWithClient(<OverviewBoard user={user('maintainer')} />);
     const live = await screen.findByTestId('run-aaaaaaaa-0000-4000-8000-000000000002');
-    expect(within(live).getByText('1 of 4 shards · 25%')).toBeTruthy();
+    expect(within(live).getByText('1 of 4 checks · 25%')).toBeTruthy();
     expect(within(live).getByText('↻ running')).toBeTruthy();
     expect(screen.getByRole('heading', { name: /In progress/ }).textContent).toBe('↻ In progress (1)');
   });

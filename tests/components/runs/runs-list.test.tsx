@@ -88,7 +88,7 @@ describe('RunsList', () => {
     const live = screen.getByTestId(`run-${run(2).id}`);
     expect(within(live).getByText('↻ running')).toBeTruthy();
     expect(within(live).getByText(/^by Kwame Asante · .* · running 4\d s$/)).toBeTruthy();
-    expect(within(live).getByText('1 of 4 shards · 25%')).toBeTruthy();
+    expect(within(live).getByText('1 of 4 checks · 25%')).toBeTruthy();
     expect(first.getAttribute('href')).toBe(`/runs/${run(1).id}`);
   });
 
