@@ -1,6 +1,7 @@
+import { PLAN_ROLES } from '../shared/plan-roles';
 import type { Role } from '../shared/roles';
 
-/** Plans and schedules are shaped by maintainers and admins (the server's `requireRole` says the same). */
+/** Whether this role shapes plans and schedules and starts or cancels runs (the server grants the same, from `PLAN_ROLES`). */
 export function canEditPlans(role: Role): boolean {
-  return role === 'maintainer' || role === 'admin';
+  return (PLAN_ROLES as readonly Role[]).includes(role);
 }

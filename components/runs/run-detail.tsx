@@ -1,6 +1,7 @@
 import { Link } from 'expo-router';
 import { Pressable, StyleSheet } from 'react-native';
 import { ApiRequestError } from '../../client/api-request-error';
+import { canEditPlans } from '../../client/can-edit-plans';
 import { isLiveRun } from '../../client/is-live-run';
 import { useMe } from '../../client/use-me';
 import { useRun } from '../../client/use-run';
@@ -83,7 +84,7 @@ export function RunDetail({ id, openedExisting = false }: { id: string; openedEx
           This plan already had a run in progress, so Run now opened it instead of starting a second one.
         </SkText>
       ) : null}
-      <RunHeader run={run.data} canCancel={me?.role === 'maintainer' || me?.role === 'admin'} checks={checks} />
+      <RunHeader run={run.data} canCancel={me ? canEditPlans(me.role) : false} checks={checks} />
       {live ? <LiveWorkersNote /> : null}
       {matrix.data && !finishing ? (
         <CheckedScopeNote scopes={scopes} checksNotChecked={notChecked} properties={propertySummary} subject="matrix" />

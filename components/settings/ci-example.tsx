@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { Platform, Pressable, StyleSheet, Text, View } from 'react-native';
+import { canEditPlans } from '../../client/can-edit-plans';
 import { usePlans } from '../../client/use-plans';
 import { theme } from '../../constants/theme';
 import type { Role } from '../../shared/roles';
@@ -29,7 +30,7 @@ export function CiExample({ role }: { role: Role }) {
     },
   );
   const planId = plan?.id ?? '<plan id from the plan’s page>';
-  const mayStart = role === 'maintainer' || role === 'admin';
+  const mayStart = canEditPlans(role);
 
   const curl = [
     `# Start a run of “${plan?.name ?? 'a plan'}”.`,

@@ -7,12 +7,12 @@ import { planBody } from '../../shared/schemas/plan-body';
 import { declareRoute } from '../http/declare-route';
 import { loadFindingsByKind } from '../plans/load-findings-by-kind';
 import { PlanService } from '../plans/plan-service';
+import { PLAN_ROLES } from '../../shared/plan-roles';
 
 /** Plans: everyone reads them; maintainers (and admins) shape them. */
 export function plansRouter(dataSource: DataSource): Router {
   const router = Router();
   const plans = new PlanService(dataSource);
-  const shapers = ['maintainer', 'admin'] as const;
 
   declareRoute(
     router,
@@ -62,7 +62,7 @@ export function plansRouter(dataSource: DataSource): Router {
     '/',
     {
       summary: 'Create a plan: suites × targets, and who is mailed about regressions',
-      access: shapers,
+      access: PLAN_ROLES,
       body: planBody,
       responses: {
         201: 'The new plan (`plan`); a name taken or an unknown suite or target is a 400 naming the field.',
@@ -78,7 +78,7 @@ export function plansRouter(dataSource: DataSource): Router {
     '/:id',
     {
       summary: 'Replace a plan',
-      access: shapers,
+      access: PLAN_ROLES,
       params: idParams,
       body: planBody,
       responses: { 200: 'The plan (`plan`).', 404: 'No plan with that id.' },
@@ -93,7 +93,7 @@ export function plansRouter(dataSource: DataSource): Router {
     '/:id',
     {
       summary: 'Delete a plan',
-      access: shapers,
+      access: PLAN_ROLES,
       params: idParams,
       responses: { 204: 'Deleted.', 404: 'No plan with that id.' },
     },

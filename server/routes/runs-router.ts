@@ -10,11 +10,11 @@ import { declareRoute } from '../http/declare-route';
 import type { RunService } from '../runs/run-service';
 import { noWorkerHasTargetSql } from '../sql/no-worker-has-target-sql';
 import { SKIP_REASONS_SQL } from '../sql/skip-reasons-sql';
+import { PLAN_ROLES } from '../../shared/plan-roles';
 
 /** Runs: everyone reads them and their matrix; maintainers (and admins) start and cancel them. */
 export function runsRouter(dataSource: DataSource, runs: RunService): Router {
   const router = Router();
-  const runners = ['maintainer', 'admin'] as const;
   const noRun = { 404: 'No run with that id.' };
 
   declareRoute(
@@ -37,7 +37,7 @@ export function runsRouter(dataSource: DataSource, runs: RunService): Router {
     '/',
     {
       summary: "Start a run of a plan (or answer the plan's run already queued or running)",
-      access: runners,
+      access: PLAN_ROLES,
       body: runBody,
       responses: {
         202: 'The run is queued (`run`, `existing: false`).',
@@ -72,7 +72,7 @@ export function runsRouter(dataSource: DataSource, runs: RunService): Router {
     '/:id/cancel',
     {
       summary: 'Cancel a queued or running run; shards not yet done are skipped',
-      access: runners,
+      access: PLAN_ROLES,
       params: idParams,
       responses: { 200: 'The cancelled run (`run`).', ...noRun, 409: 'The run has finished already.' },
     },

@@ -7,12 +7,12 @@ import { declareRoute } from '../http/declare-route';
 import { checkScheduleInterval } from '../plans/check-schedule-interval';
 import { nextCronRuns } from '../plans/next-cron-runs';
 import { ScheduleService } from '../plans/schedule-service';
+import { PLAN_ROLES } from '../../shared/plan-roles';
 
 /** Schedules: everyone reads them; maintainers (and admins) edit them. `preview` answers the next three times of an expression. */
 export function schedulesRouter(dataSource: DataSource): Router {
   const router = Router();
   const schedules = new ScheduleService(dataSource);
-  const editors = ['maintainer', 'admin'] as const;
 
   declareRoute(
     router,
@@ -46,7 +46,7 @@ export function schedulesRouter(dataSource: DataSource): Router {
     '/',
     {
       summary: 'Schedule a plan',
-      access: editors,
+      access: PLAN_ROLES,
       body: scheduleBody,
       responses: { 201: 'The new schedule (`schedule`).' },
     },
@@ -60,7 +60,7 @@ export function schedulesRouter(dataSource: DataSource): Router {
     '/:id',
     {
       summary: 'Change a schedule (its expression, time zone or whether it is on)',
-      access: editors,
+      access: PLAN_ROLES,
       params: idParams,
       body: schedulePatchBody,
       responses: { 200: 'The schedule (`schedule`).', 404: 'No schedule with that id.' },
@@ -75,7 +75,7 @@ export function schedulesRouter(dataSource: DataSource): Router {
     '/:id',
     {
       summary: 'Delete a schedule',
-      access: editors,
+      access: PLAN_ROLES,
       params: idParams,
       responses: { 204: 'Deleted.', 404: 'No schedule with that id.' },
     },
