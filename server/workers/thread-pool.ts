@@ -56,7 +56,10 @@ export class ThreadPool<R extends { id: number }> {
 
   run(request: WithoutId<R>, limitMs: number, overLimit: () => Error, lane = ANY_LANE): Promise<unknown> {
     const waiting = this.queue.filter((t) => t.lane === lane).length;
-    if (waiting >= this.options.queueLimit && !this.idleSlotOrRoom()) return Promise.reject(this.options.full());
+    // A request can start at once only if its lane is under its limit as well as a thread being free:
+    // an idle thread kept for the other lanes is no room for this one, and must not unbound its queue.
+    const canStart = this.running(lane) < this.laneLimit(lane) && this.idleSlotOrRoom();
+    if (waiting >= this.options.queueLimit && !canStart) return Promise.reject(this.options.full());
     return new Promise((resolve, reject) => {
       this.closed = false;
       this.queue.push({ message: request, lane, limitMs, overLimit, resolve, reject });

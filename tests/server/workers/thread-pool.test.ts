@@ -46,6 +46,23 @@ describe('ThreadPool', () => {
     }
   });
 
+  it('refuses a request whose lane is at its limit and whose queue is full, though a thread kept for other lanes is idle', async () => {
+    const pool = new ThreadPool<Busy>({ entry, size: 2, queueLimit: 1, full, laneLimits: { slow: 1 } });
+    try {
+      await Promise.all([1, 2].map(() => pool.run({ ms: 1 }, 20_000, overLimit)));
+      const running = pool.run({ ms: 300 }, 20_000, overLimit, 'slow');
+      const queued = pool.run({ ms: 1 }, 20_000, overLimit, 'slow');
+      expect(pool.busy).toBe(1);
+      expect(pool.waiting).toBe(1);
+      await expect(pool.run({ ms: 1 }, 20_000, overLimit, 'slow')).rejects.toMatchObject({ status: 503 });
+      // The idle thread still serves another lane at once.
+      await expect(pool.run({ ms: 1 }, 20_000, overLimit, 'quick')).resolves.toBeDefined();
+      await expect(Promise.all([running, queued])).resolves.toHaveLength(2);
+    } finally {
+      await pool.close();
+    }
+  });
+
   it('stops a request over its time limit with the caller’s answer and serves the next on a fresh thread', async () => {
     const pool = new ThreadPool<Busy>({ entry, size: 1, queueLimit: 4, full });
     try {
