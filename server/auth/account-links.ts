@@ -212,10 +212,7 @@ function refusalFor(link: AccountLink | null, now: Date): UnusableLink | null {
   if (link.usedAt)
     return {
       unknown: false,
-      unusable:
-        link.kind === 'invitation'
-          ? `This invitation was used on ${day(link.usedAt)}: sign in with the password chosen then, or ${ask}.`
-          : `This password-reset link was used on ${day(link.usedAt)}: sign in with the password chosen then, or ${ask}.`,
+      unusable: `This ${what} was used on ${day(link.usedAt)}: sign in with the password chosen then, or ${ask}.`,
     };
   // Before "replaced": a deactivation voids the account's links too, and this is the reason to tell.
   if (link.user?.deactivatedAt)

@@ -11,7 +11,7 @@ import type { ShortLivedCache } from './short-lived-cache';
  * and the user, and the failure table served 244 requests/s at p95 337 ms.
  * A sign-out or a new session in this process drops its entry at once; one in another server
  * process is seen here within the cache's lifetime. `cache` (session id → the row's JSON) is the
- * caller's, so ending a user's sessions (session-ender.ts) can clear it.
+ * caller's, so ending a user's sessions (session-control.ts) can clear it.
  */
 export function createSessionStore(pool: Pool, cache: ShortLivedCache<string>): session.Store {
   const PgStore = connectPgSimple(session);

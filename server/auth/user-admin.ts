@@ -1,15 +1,10 @@
 import type { DataSource, EntityManager } from 'typeorm';
-import type { ApiError } from '../../shared/api-error';
 import type { Role } from '../../shared/roles';
 import { AccountLink } from '../entities/account-link';
 import { User } from '../entities/user';
 import { HttpError } from '../http/http-error';
+import { LAST_ADMIN_ERROR } from './last-admin-error';
 import type { SessionControl } from './session-control';
-
-const LAST_ADMIN: ApiError = {
-  kind: 'conflict',
-  message: 'This is the last active admin; make someone else admin first.',
-};
 
 /**
  * What an admin changes about an account: its role, and whether it is active. Each change reads,
@@ -26,7 +21,7 @@ export class UserAdmin {
   async changeRole(id: string, role: Role): Promise<User> {
     const user = await this.dataSource.transaction(async (tx) => {
       const { user, activeAdmins } = await lockedWithAdmins(tx, id);
-      if (isActiveAdmin(user) && role !== 'admin' && activeAdmins <= 1) throw new HttpError(409, LAST_ADMIN);
+      if (isActiveAdmin(user) && role !== 'admin' && activeAdmins <= 1) throw new HttpError(409, LAST_ADMIN_ERROR);
       user.role = role;
       return tx.getRepository(User).save(user);
     });
@@ -45,7 +40,7 @@ export class UserAdmin {
     const user = await this.dataSource.transaction(async (tx) => {
       const { user, activeAdmins } = await lockedWithAdmins(tx, id);
       if (user.deactivatedAt) return user;
-      if (isActiveAdmin(user) && activeAdmins <= 1) throw new HttpError(409, LAST_ADMIN);
+      if (isActiveAdmin(user) && activeAdmins <= 1) throw new HttpError(409, LAST_ADMIN_ERROR);
       user.deactivatedAt = new Date();
       // Its unused reset links die with it; reactivating does not bring them back.
       await tx

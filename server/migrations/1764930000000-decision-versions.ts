@@ -1,5 +1,4 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
-import { targetKeySql } from '../sql/target-key-sql';
 
 /**
  * Issue 15: a decision says which versions of its library it covers (`versions`, counted from
@@ -43,10 +42,12 @@ export class DecisionVersions1764930000000 implements MigrationInterface {
   /** Counts every run's regression groups again from its marked failures, with or without the version. */
   private async regroup(q: QueryRunner, byVersion: boolean): Promise<void> {
     const version = byVersion ? ', target_version' : '';
+    // The target key (the name without its version) written out, not taken from server/sql: a
+    // migration must keep doing what it did when a later change touches the application's helper.
     await q.query(`DELETE FROM regression_groups`);
     await q.query(
       `INSERT INTO regression_groups (run_id, target_key, suite_slug, path_name, diagnosis_kind${version}, count)
-       SELECT run_id, ${targetKeySql('target_name')}, suite_slug, path_name, diagnosis_kind${version}, count(*)::int
+       SELECT run_id, regexp_replace(target_name, '@[^/]+', ''), suite_slug, path_name, diagnosis_kind${version}, count(*)::int
          FROM failures WHERE is_regression
         GROUP BY run_id, 2, suite_slug, path_name, diagnosis_kind${version}`,
     );

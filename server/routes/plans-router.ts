@@ -13,6 +13,7 @@ import { PLAN_ROLES } from '../../shared/plan-roles';
 export function plansRouter(dataSource: DataSource): Router {
   const router = Router();
   const plans = new PlanService(dataSource);
+  const noPlan = { 404: 'No plan with that id.' };
 
   declareRoute(
     router,
@@ -31,7 +32,7 @@ export function plansRouter(dataSource: DataSource): Router {
       summary: 'One plan',
       access: ROLES,
       params: idParams,
-      responses: { 200: 'The plan (`plan`).', 404: 'No plan with that id.' },
+      responses: { 200: 'The plan (`plan`).', ...noPlan },
     },
     async (_req, res, { params }) => {
       res.json({ plan: await plans.get(params.id) });
@@ -49,7 +50,7 @@ export function plansRouter(dataSource: DataSource): Router {
       responses: {
         200: 'The runs oldest first, each with its failing points counted under each of their labels (`runs`, `limit`).',
         400: '`runs` is not a whole number from 1 to 50.',
-        404: 'No plan with that id.',
+        ...noPlan,
       },
     },
     async (_req, res, { params, query }) => {
@@ -81,7 +82,7 @@ export function plansRouter(dataSource: DataSource): Router {
       access: PLAN_ROLES,
       params: idParams,
       body: planBody,
-      responses: { 200: 'The plan (`plan`).', 404: 'No plan with that id.' },
+      responses: { 200: 'The plan (`plan`).', ...noPlan },
     },
     async (req, res, { params, body }) => {
       res.json({ plan: await plans.save(req.user!, body, params.id) });
@@ -95,7 +96,7 @@ export function plansRouter(dataSource: DataSource): Router {
       summary: 'Delete a plan',
       access: PLAN_ROLES,
       params: idParams,
-      responses: { 204: 'Deleted.', 404: 'No plan with that id.' },
+      responses: { 204: 'Deleted.', ...noPlan },
     },
     async (_req, res, { params }) => {
       await plans.remove(params.id);

@@ -9,19 +9,12 @@ import { readyTargetSources } from '../targets/ready-target-sources';
 
 /**
  * The targets this server has seen, installed ones first, each installed one with its entries
- * (shared/target-entry.ts) and the convention it states on its cuts, if any. Entries come from the adapters, not the table: discovery loads no
- * library and is read once per router (~20 ms, Python started once); an admin-added target's come
- * from what its program described, stored with its source.
+ * (shared/target-entry.ts) and the convention it states on its cuts, if any. Entries come from the adapters, not the table:
+ * `installedTargets()` discovers them once per process (it loads no library); an admin-added
+ * target's come from what its program described, stored with its source.
  */
 export function targetsRouter(dataSource: DataSource): Router {
   const router = Router();
-  let discovered: Map<string, Pick<TargetIdentity, 'entries' | 'convention'>> | null = null;
-  const discoveredOf = (name: string) => {
-    discovered ??= new Map(
-      installedTargets().map((t) => [t.name, { entries: t.entries ?? [], convention: t.convention }]),
-    );
-    return discovered.get(name);
-  };
   declareRoute(
     router,
     'get',
@@ -35,6 +28,9 @@ export function targetsRouter(dataSource: DataSource): Router {
       const targets = await dataSource
         .getRepository(TargetRow)
         .find({ order: { installed: 'DESC', library: 'ASC', name: 'ASC' } });
+      const discovered = new Map<string, Pick<TargetIdentity, 'entries' | 'convention'>>(
+        installedTargets().map((t) => [t.name, { entries: t.entries ?? [], convention: t.convention }]),
+      );
       const added = new Map(
         (await readyTargetSources(dataSource.manager)).flatMap((s) =>
           s.targets.map((t) => [t.name, { entries: t.entries, convention: t.convention }] as const),
@@ -42,7 +38,7 @@ export function targetsRouter(dataSource: DataSource): Router {
       );
       res.json({
         targets: targets.map(({ name, library, version, settings, installed }) => {
-          const known = installed ? (discoveredOf(name) ?? added.get(name)) : undefined;
+          const known = installed ? (discovered.get(name) ?? added.get(name)) : undefined;
           return {
             name,
             library,

@@ -7,6 +7,7 @@ import { idParams } from '../../shared/schemas/id-params';
 import { inviteBody } from '../../shared/schemas/invite-body';
 import { roleChangeBody } from '../../shared/schemas/role-change-body';
 import type { AccountLinks } from '../auth/account-links';
+import { LAST_ADMIN_ERROR } from '../auth/last-admin-error';
 import type { UserAdmin } from '../auth/user-admin';
 import { User } from '../entities/user';
 import { declareRoute } from '../http/declare-route';
@@ -14,7 +15,6 @@ import type { DataSource } from 'typeorm';
 import { toPublicUser } from '../views/to-public-user';
 
 const userAnswer = z.object({ user: publicUserSchema });
-const LAST_ADMIN = 'This is the last active admin; make someone else admin first.';
 
 /** The admin's side of accounts: the list, roles, invitations, deactivation and password resets. */
 export function usersRouter(dataSource: DataSource, admin: UserAdmin, links: AccountLinks): Router {
@@ -87,7 +87,7 @@ export function usersRouter(dataSource: DataSource, admin: UserAdmin, links: Acc
       responses: {
         200: { description: 'The user with the new role.', schema: userAnswer },
         404: 'No user with that id.',
-        409: LAST_ADMIN,
+        409: LAST_ADMIN_ERROR.message,
       },
     },
     async (_req, res, { params: { id }, body: { role } }) => {
@@ -106,7 +106,7 @@ export function usersRouter(dataSource: DataSource, admin: UserAdmin, links: Acc
       responses: {
         200: { description: 'The user, deactivated (again, if they were already).', schema: userAnswer },
         404: 'No user with that id.',
-        409: `Your own account, or the last active admin. ${LAST_ADMIN}`,
+        409: `Your own account, or the last active admin. ${LAST_ADMIN_ERROR.message}`,
       },
     },
     async (req, res, { params: { id } }) => {
