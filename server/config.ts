@@ -7,8 +7,12 @@ import { ownOrigins } from './http/own-origins';
 
 export const PROJECT_ROOT = path.resolve(__dirname, '..');
 const DATA_DIR = path.join(PROJECT_ROOT, '.data');
-/** The default of `targetCacheDir`, for an app built without a config (tests). */
-export const DEFAULT_TARGET_CACHE_DIR = path.join(DATA_DIR, 'target-cache');
+/**
+ * Where this process installs added npm targets: `SHEETKEEPER_CACHE_DIR` (the harness's one reader
+ * of it), else the project's .data/target-cache. Read by the config and by the findings threads,
+ * which build no config, so both install into the same folder.
+ */
+export const targetCacheDir = (): string => cacheDirFromEnv() ?? path.join(DATA_DIR, 'target-cache');
 
 export interface ServerConfig {
   /** Always a loopback address: Sheetkeeper never listens elsewhere. */
@@ -107,7 +111,7 @@ export function loadConfig(): ServerConfig {
     workerTargets: workerTargetsFrom(process.env.SHEETKEEPER_WORKER_TARGETS),
     appUrl,
     referenceCacheDir: process.env.SHEETKEEPER_REFERENCE_CACHE ?? path.join(DATA_DIR, 'reference-cache'),
-    targetCacheDir: cacheDirFromEnv() ?? DEFAULT_TARGET_CACHE_DIR,
+    targetCacheDir: targetCacheDir(),
     allowedOrigins: ownOrigins(appUrl, port, process.env.SHEETKEEPER_ORIGINS),
     trustProxy: trustProxyFrom(process.env.SHEETKEEPER_TRUST_PROXY),
   };

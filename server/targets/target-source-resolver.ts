@@ -23,7 +23,6 @@ type ResolveOptions = Parameters<typeof resolveTargetSource>[1];
  */
 export class TargetSourceResolver {
   private chain: Promise<void> = Promise.resolve();
-  private builtIn: Set<string> | null = null;
 
   constructor(
     private readonly dataSource: DataSource,
@@ -82,8 +81,8 @@ export class TargetSourceResolver {
   }
 
   private async record(id: string, identities: TargetIdentity[]): Promise<void> {
-    this.builtIn ??= new Set(installedTargets().map((d) => d.name));
-    const builtIn = this.builtIn;
+    // installedTargets() is discovered once per process; the set is cheap to build per source.
+    const builtIn = new Set(installedTargets().map((d) => d.name));
     await this.dataSource.transaction(async (tx) => {
       await tx.query(TARGET_NAMES_LOCK_SQL);
       const current = await tx

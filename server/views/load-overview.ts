@@ -158,7 +158,9 @@ async function loadRuns(dataSource: DataSource): Promise<Pick<OverviewView, 'pla
     order: { createdAt: 'DESC' },
     take: IN_PROGRESS_LIMIT,
   });
-  const waiting = await waitingTargets(dataSource, inProgress);
+  // A plan's newer run may be live but older than the newest IN_PROGRESS_LIMIT: it waits as well.
+  const newerRuns = plans.flatMap((p) => (p.newer && byId.get(p.newer)) || []);
+  const waiting = await waitingTargets(dataSource, [...inProgress, ...newerRuns]);
 
   return {
     plans: plans.map((p) => {
