@@ -1,6 +1,5 @@
 import { useMe } from '../../client/use-me';
 import { OverviewBoard } from '../../components/overview/overview-board';
-import { PageTitle } from '../../components/ui/page-title';
 import { ScreenBody } from '../../components/ui/screen-body';
 
 /** The Overview: what waits on me, what is running, and how each plan's latest run went. */
@@ -9,7 +8,6 @@ export default function OverviewScreen() {
   if (!user) return null;
   return (
     <ScreenBody title="Overview" lead={`Hello, ${user.displayName}.`}>
-      <PageTitle title="Overview" />
       <OverviewBoard user={user} />
     </ScreenBody>
   );

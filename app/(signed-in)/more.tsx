@@ -5,7 +5,6 @@ import { useMe } from '../../client/use-me';
 import { useSignOut } from '../../client/use-sign-out';
 import { ActionButton } from '../../components/ui/action-button';
 import { RoleBadge } from '../../components/settings/role-badge';
-import { PageTitle } from '../../components/ui/page-title';
 import { ScreenBody } from '../../components/ui/screen-body';
 import { SkText } from '../../components/ui/sk-text';
 import { theme } from '../../constants/theme';
@@ -18,7 +17,6 @@ export default function MoreScreen() {
   const items = NAV_ITEMS.filter((item) => !item.primary && item.roles.includes(user.role));
   return (
     <ScreenBody title="More">
-      <PageTitle title="More" />
       <View style={styles.list}>
         {items.map((item) => (
           <Link key={item.href} href={item.href} asChild>

@@ -2,7 +2,6 @@ import { useMe } from '../../client/use-me';
 import { MailList } from '../../components/mail/mail-list';
 import { MailQueue } from '../../components/mail/mail-queue';
 import { QueryState } from '../../components/ui/query-state';
-import { PageTitle } from '../../components/ui/page-title';
 import { ScreenBody } from '../../components/ui/screen-body';
 
 export default function OutboxScreen() {
@@ -13,7 +12,6 @@ export default function OutboxScreen() {
       title="Outbox"
       lead="Mail Sheetkeeper has not delivered yet, then every message the local mail server received from Sheetkeeper. Nothing here left this machine."
     >
-      <PageTitle title="Outbox" />
       {me.role === 'admin' ? (
         <>
           <MailQueue />

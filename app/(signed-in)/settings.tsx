@@ -2,7 +2,6 @@ import { StyleSheet, useWindowDimensions, View } from 'react-native';
 import { useMe } from '../../client/use-me';
 import { CiExample } from '../../components/settings/ci-example';
 import { NewTokenForm } from '../../components/settings/new-token-form';
-import { PageTitle } from '../../components/ui/page-title';
 import { ScreenBody } from '../../components/ui/screen-body';
 import { SubscriptionList } from '../../components/settings/subscription-list';
 import { TitledPanel } from '../../components/ui/titled-panel';
@@ -15,7 +14,6 @@ export default function SettingsScreen() {
   if (!me) return null;
   return (
     <ScreenBody title="Settings" lead={`Your mail and your API tokens, ${me.displayName}.`}>
-      <PageTitle title="Settings" />
       <View style={[styles.columns, wide && styles.columnsWide]}>
         <View style={[styles.column, wide && styles.half]}>
           <TitledPanel

@@ -1,6 +1,5 @@
 import { useMe } from '../../client/use-me';
 import { QueryState } from '../../components/ui/query-state';
-import { PageTitle } from '../../components/ui/page-title';
 import { ScreenBody } from '../../components/ui/screen-body';
 import { UsersList } from '../../components/settings/users-list';
 
@@ -9,7 +8,6 @@ export default function UsersScreen() {
   if (!me) return null;
   return (
     <ScreenBody title="Users" lead="Everyone who can sign in, and the role that decides what they may do.">
-      <PageTitle title="Users" />
       {me.role === 'admin' ? <UsersList me={me} /> : <QueryState state="error" message="Only admins can see users." />}
     </ScreenBody>
   );

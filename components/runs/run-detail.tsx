@@ -32,7 +32,7 @@ export function RunDetail({ id, openedExisting = false }: { id: string; openedEx
 
   if (run.isPending) {
     return (
-      <ScreenBody title="Run">
+      <ScreenBody title="Run" pageTitle={`Run ${shortRunId(id)}`}>
         <QueryState state="loading" />
       </ScreenBody>
     );
@@ -40,7 +40,7 @@ export function RunDetail({ id, openedExisting = false }: { id: string; openedEx
   if (run.isError) {
     const missing = run.error instanceof ApiRequestError && (run.error.status === 404 || run.error.status === 400);
     return (
-      <ScreenBody title="Run">
+      <ScreenBody title="Run" pageTitle={`Run ${shortRunId(id)}`}>
         <BackLink />
         <QueryState
           state="error"
@@ -76,6 +76,7 @@ export function RunDetail({ id, openedExisting = false }: { id: string; openedEx
   return (
     <ScreenBody
       title={run.data.planName}
+      pageTitle={`Run ${shortRunId(id)} of ${run.data.planName}`}
       lead={`Run ${shortRunId(id)} of this plan: ${run.data.shardsTotal} check${run.data.shardsTotal === 1 ? '' : 's'}, each suite against each library version.`}
     >
       <BackLink />

@@ -1,12 +1,27 @@
 import type { ReactNode } from 'react';
 import { ScrollView, StyleSheet, View } from 'react-native';
 import { theme } from '../../constants/theme';
+import { PageTitle } from './page-title';
 import { SkText } from './sk-text';
 
-/** The scrolling body of a screen: a title, an optional lead line, the content. */
-export function ScreenBody({ title, lead, children }: { title: string; lead?: string; children: ReactNode }) {
+/**
+ * The scrolling body of a screen: a title, an optional lead line, the content. The title also
+ * names the browser tab, unless `pageTitle` says it otherwise (a plan's page is "Plan <name>").
+ */
+export function ScreenBody({
+  title,
+  pageTitle,
+  lead,
+  children,
+}: {
+  title: string;
+  pageTitle?: string;
+  lead?: string;
+  children: ReactNode;
+}) {
   return (
     <ScrollView style={styles.scroll} contentContainerStyle={styles.content}>
+      <PageTitle title={pageTitle ?? title} />
       <View style={styles.column}>
         <SkText variant="title" accessibilityRole="header">
           {title}

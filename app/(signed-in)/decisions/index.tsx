@@ -1,6 +1,5 @@
 import { router, useLocalSearchParams } from 'expo-router';
 import { DecisionList } from '../../../components/decisions/decision-list';
-import { PageTitle } from '../../../components/ui/page-title';
 import { ScreenBody } from '../../../components/ui/screen-body';
 import { decisionListQuery, type DecisionListQuery } from '../../../shared/schemas/decision-list-query';
 
@@ -22,7 +21,6 @@ export default function DecisionsScreen() {
       title="Decisions"
       lead="Every verdict given on a failure: accepted deviations, bugs and convention differences, with what each covers, until when, and who decided. Expired and revoked ones stay listed."
     >
-      <PageTitle title="Decisions" />
       <DecisionList
         filters={filters}
         onChange={(next) =>

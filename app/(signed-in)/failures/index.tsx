@@ -2,7 +2,6 @@ import { router, useLocalSearchParams } from 'expo-router';
 import type { FailureFilters } from '../../../client/failure-filters';
 import { filtersFromParams } from '../../../client/filters-from-params';
 import { FailureBrowser } from '../../../components/failures/failure-browser';
-import { PageTitle } from '../../../components/ui/page-title';
 import { ScreenBody } from '../../../components/ui/screen-body';
 
 /** The failure table; its filters live in the address, so `/failures?run=…&suite=…` opens filtered and the back button undoes a filter. */
@@ -15,7 +14,6 @@ export default function FailuresScreen() {
       title="Failures"
       lead="Every point that did not pass, with why. Open one to see where on the plane it failed."
     >
-      <PageTitle title="Failures" />
       <FailureBrowser filters={filters} onChange={onChange} dropped={dropped} />
     </ScreenBody>
   );

@@ -2,7 +2,6 @@ import { router, useLocalSearchParams } from 'expo-router';
 import { CrumbLink } from '../../../components/ui/crumb-link';
 import { CutMapView } from '../../../components/libraries/cut-map-view';
 import { QueryState } from '../../../components/ui/query-state';
-import { PageTitle } from '../../../components/ui/page-title';
 import { ScreenBody } from '../../../components/ui/screen-body';
 
 /** Where one function of a target is really discontinuous over a box, against the expected cuts. */
@@ -10,6 +9,7 @@ export default function CutMapScreen() {
   const { name, fn } = useLocalSearchParams<{ name?: string; fn?: string }>();
   return (
     <ScreenBody
+      pageTitle={name && fn ? `Cut map of ${fn} on ${name}` : 'Cut map'}
       title={name && fn ? `Cut map of ${fn}` : 'Cut map'}
       lead={
         name
@@ -17,7 +17,6 @@ export default function CutMapScreen() {
           : undefined
       }
     >
-      <PageTitle title={name && fn ? `Cut map of ${fn} on ${name}` : 'Cut map'} />
       {name ? (
         <CrumbLink label={name} onPress={() => router.navigate({ pathname: '/libraries/target', params: { name } })} />
       ) : null}

@@ -1,6 +1,5 @@
 import { router } from 'expo-router';
 import { useMe } from '../../../client/use-me';
-import { PageTitle } from '../../../components/ui/page-title';
 import { ScreenBody } from '../../../components/ui/screen-body';
 import { TargetList } from '../../../components/libraries/target-list';
 import { TargetSourceForm } from '../../../components/libraries/target-source-form';
@@ -17,7 +16,6 @@ export default function LibrariesScreen() {
       title="Libraries"
       lead="The libraries installed on this server, every version side by side with its settings. Open a version for the convention it appears to follow on each cut and where its cuts really are; open a library's version matrix for what changed between releases."
     >
-      <PageTitle title="Libraries" />
       <TargetList
         onOpenTarget={(name) => router.push({ pathname: '/libraries/target', params: { name } })}
         onOpenMatrix={(library) => router.push({ pathname: '/libraries/versions', params: { library } })}

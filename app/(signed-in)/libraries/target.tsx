@@ -1,7 +1,6 @@
 import { router, useLocalSearchParams } from 'expo-router';
 import { CrumbLink } from '../../../components/ui/crumb-link';
 import { QueryState } from '../../../components/ui/query-state';
-import { PageTitle } from '../../../components/ui/page-title';
 import { ScreenBody } from '../../../components/ui/screen-body';
 import { TargetFingerprint } from '../../../components/libraries/target-fingerprint';
 
@@ -10,10 +9,10 @@ export default function TargetScreen() {
   const { name } = useLocalSearchParams<{ name?: string }>();
   return (
     <ScreenBody
+      pageTitle={name ?? 'Library'}
       title={name ? `${name}` : 'Library'}
       lead="Convention fingerprint: on each cut of each function, what this version returns exactly on the cut with +0 and with −0."
     >
-      <PageTitle title={name ?? 'Library'} />
       <CrumbLink label="Libraries" onPress={() => router.navigate('/libraries')} />
       {name ? (
         <TargetFingerprint

@@ -2,7 +2,6 @@ import { router, useLocalSearchParams } from 'expo-router';
 import { CrumbLink } from '../../../components/ui/crumb-link';
 import { LibraryVersionMatrix } from '../../../components/libraries/library-version-matrix';
 import { QueryState } from '../../../components/ui/query-state';
-import { PageTitle } from '../../../components/ui/page-title';
 import { ScreenBody } from '../../../components/ui/screen-body';
 
 /** The version matrix of one library: which values changed in which installed version. */
@@ -13,7 +12,6 @@ export default function VersionsScreen() {
       title={library ? `${library}: version matrix` : 'Version matrix'}
       lead="Every approved suite run on every installed version of this library, oldest first, and each point whose value changed from one version to the next."
     >
-      <PageTitle title={library ? `${library}: version matrix` : 'Version matrix'} />
       <CrumbLink label="Libraries" onPress={() => router.navigate('/libraries')} />
       {library ? (
         <LibraryVersionMatrix library={library} />

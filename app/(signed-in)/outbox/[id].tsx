@@ -4,7 +4,6 @@ import { useMe } from '../../../client/use-me';
 import { useOutboxMessage } from '../../../client/use-outbox-message';
 import { MailView } from '../../../components/mail/mail-view';
 import { QueryState } from '../../../components/ui/query-state';
-import { PageTitle } from '../../../components/ui/page-title';
 import { ScreenBody } from '../../../components/ui/screen-body';
 import { SkText } from '../../../components/ui/sk-text';
 
@@ -14,8 +13,7 @@ export default function OutboxMessageScreen() {
   const message = useOutboxMessage(String(id));
   if (!me) return null;
   return (
-    <ScreenBody title="Message">
-      <PageTitle title={message.data ? `Message: ${message.data.subject}` : 'Message'} />
+    <ScreenBody pageTitle={message.data ? `Message: ${message.data.subject}` : 'Message'} title="Message">
       <Link href={'/outbox'} asChild>
         <Pressable accessibilityRole="link" accessibilityLabel="All messages" style={StyleSheet.flatten(styles.back)}>
           <SkText variant="label" tone="accent">

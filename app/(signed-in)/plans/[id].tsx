@@ -5,7 +5,6 @@ import { useMe } from '../../../client/use-me';
 import { usePlan } from '../../../client/use-plan';
 import { PlanDetail } from '../../../components/plans/plan-detail';
 import { QueryState } from '../../../components/ui/query-state';
-import { PageTitle } from '../../../components/ui/page-title';
 import { ScreenBody } from '../../../components/ui/screen-body';
 import { SkText } from '../../../components/ui/sk-text';
 
@@ -15,8 +14,7 @@ export default function PlanScreen() {
   const plan = usePlan(String(id));
   if (!me) return null;
   return (
-    <ScreenBody title={plan.data?.name ?? 'Plan'}>
-      <PageTitle title={plan.data ? `Plan ${plan.data.name}` : 'Plan'} />
+    <ScreenBody pageTitle={plan.data ? `Plan ${plan.data.name}` : 'Plan'} title={plan.data?.name ?? 'Plan'}>
       <Link href={'/plans'} asChild>
         <Pressable accessibilityRole="link" accessibilityLabel="All plans" style={StyleSheet.flatten(styles.back)}>
           <SkText variant="label" tone="accent">

@@ -3,7 +3,6 @@ import { Pressable, StyleSheet } from 'react-native';
 import { canEditPlans } from '../../../client/can-edit-plans';
 import { useMe } from '../../../client/use-me';
 import { PlanList } from '../../../components/plans/plan-list';
-import { PageTitle } from '../../../components/ui/page-title';
 import { ScreenBody } from '../../../components/ui/screen-body';
 import { SkText } from '../../../components/ui/sk-text';
 import { theme } from '../../../constants/theme';
@@ -16,7 +15,6 @@ export default function PlansScreen() {
       title="Plans"
       lead="Which suites run against which library versions, when, and who hears about regressions."
     >
-      <PageTitle title="Plans" />
       {canEditPlans(me.role) ? (
         <Link href={'/plans/new'} asChild>
           <Pressable accessibilityRole="link" accessibilityLabel="New plan" style={StyleSheet.flatten(styles.newPlan)}>

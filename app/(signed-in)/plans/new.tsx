@@ -3,7 +3,6 @@ import { canEditPlans } from '../../../client/can-edit-plans';
 import { useMe } from '../../../client/use-me';
 import { PlanForm } from '../../../components/plans/plan-form';
 import { QueryState } from '../../../components/ui/query-state';
-import { PageTitle } from '../../../components/ui/page-title';
 import { ScreenBody } from '../../../components/ui/screen-body';
 
 export default function NewPlanScreen() {
@@ -12,7 +11,6 @@ export default function NewPlanScreen() {
   if (!me) return null;
   return (
     <ScreenBody title="New plan" lead="Choose approved suites and installed targets; every suite runs on every target.">
-      <PageTitle title="New plan" />
       {canEditPlans(me.role) ? (
         <PlanForm onSaved={(plan) => router.replace(`/plans/${plan.id}`)} onCancel={() => router.replace('/plans')} />
       ) : (

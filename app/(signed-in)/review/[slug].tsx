@@ -1,5 +1,4 @@
 import { useLocalSearchParams } from 'expo-router';
-import { PageTitle } from '../../../components/ui/page-title';
 import { ScreenBody } from '../../../components/ui/screen-body';
 import { SuiteReview } from '../../../components/review/suite-review';
 import { useSuite } from '../../../client/use-suite';
@@ -9,7 +8,6 @@ export default function ReviewSuiteScreen() {
   const suite = useSuite(slug);
   return (
     <ScreenBody title={`Review: ${suite.data?.[0]?.body.title ?? slug}`}>
-      <PageTitle title={`Review: ${suite.data?.[0]?.body.title ?? slug}`} />
       <SuiteReview slug={slug} />
     </ScreenBody>
   );

@@ -2,7 +2,6 @@ import { useLocalSearchParams } from 'expo-router';
 import { useMe } from '../../../client/use-me';
 import { QueryState } from '../../../components/ui/query-state';
 import { ReviewQueue } from '../../../components/review/review-queue';
-import { PageTitle } from '../../../components/ui/page-title';
 import { ScreenBody } from '../../../components/ui/screen-body';
 
 export default function ReviewScreen() {
@@ -17,7 +16,6 @@ export default function ReviewScreen() {
       title="Review"
       lead="Submitted suite versions. Approving one lets plans run it; nobody reviews a version they wrote."
     >
-      <PageTitle title="Review" />
       {me.role === 'reviewer' || me.role === 'admin' ? (
         <ReviewQueue reviewed={decided} />
       ) : (

@@ -1,7 +1,6 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { runFiltersFromParams } from '../../../client/run-filters-from-params';
 import { RunsList } from '../../../components/runs/runs-list';
-import { PageTitle } from '../../../components/ui/page-title';
 import { ScreenBody } from '../../../components/ui/screen-body';
 
 /** Every run, newest first; the filters live in the address so a filtered list can be shared. */
@@ -14,7 +13,6 @@ export default function RunsScreen() {
       title="Runs"
       lead="Each run executes a plan: every approved suite against every installed target of the plan, one shard per pair."
     >
-      <PageTitle title="Runs" />
       <RunsList
         filters={filters}
         onFiltersChange={(next) => router.setParams({ plan: next.plan, status: next.status, trigger: next.trigger })}

@@ -1,4 +1,3 @@
-import { PageTitle } from '../../../components/ui/page-title';
 import { ScreenBody } from '../../../components/ui/screen-body';
 import { SuitesList } from '../../../components/suites/suites-list';
 
@@ -8,7 +7,6 @@ export default function SuitesScreen() {
       title="Suites"
       lead="Expected branch values along paths around branch points. Plans run each suite's newest approved version."
     >
-      <PageTitle title="Suites" />
       <SuitesList />
     </ScreenBody>
   );

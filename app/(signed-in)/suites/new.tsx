@@ -1,4 +1,3 @@
-import { PageTitle } from '../../../components/ui/page-title';
 import { ScreenBody } from '../../../components/ui/screen-body';
 import { SuiteFormScreen } from '../../../components/suites/editor/suite-form-screen';
 
@@ -8,7 +7,6 @@ export default function NewSuiteScreen() {
       title="New suite"
       lead="Every rule shows beside its field as you type; the picture shows what the runner will sample. Saving keeps a draft until you submit it for review."
     >
-      <PageTitle title="New suite" />
       <SuiteFormScreen slug={null} />
     </ScreenBody>
   );

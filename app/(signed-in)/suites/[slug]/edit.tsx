@@ -1,5 +1,4 @@
 import { useLocalSearchParams } from 'expo-router';
-import { PageTitle } from '../../../../components/ui/page-title';
 import { ScreenBody } from '../../../../components/ui/screen-body';
 import { SuiteFormScreen } from '../../../../components/suites/editor/suite-form-screen';
 
@@ -10,7 +9,6 @@ export default function EditSuiteScreen() {
       title={`Edit ${slug}`}
       lead="Editing an approved suite starts a new draft version; the approved one stays in use until the new one is approved."
     >
-      <PageTitle title={`Edit ${slug}`} />
       <SuiteFormScreen slug={slug} />
     </ScreenBody>
   );
