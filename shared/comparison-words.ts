@@ -1,4 +1,4 @@
-const plural = (n: number, one: string, many: string) => `${n.toLocaleString('en-GB')} ${n === 1 ? one : many}`;
+import { plural } from './plural';
 
 /**
  * The words and the one direction every screen (Overview, runs list, run page, failure table)

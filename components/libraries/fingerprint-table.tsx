@@ -12,11 +12,11 @@ import { formatComplexText } from '../../shared/format-complex-text';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 import { CHOICE_CHIP_STYLE } from '../ui/choice-chip-style';
 import { NOTE_BOX_STYLE } from '../ui/note-box-style';
+import { plural } from '../../shared/plural';
 
 type CutEntry = ConventionFingerprint['cuts'][number];
 type Probe = CutEntry['probes'][number];
 
-const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
 const BEHAVIOURS: Behaviour[] = ['signed-zero', 'counter-clockwise', 'neither', 'inconsistent'];
 
 /** Where a probe sits, with both zero signs: "−0.5 ± 0i" on a cut along the real axis, "±0 + 2i" on one along the imaginary axis. */

@@ -7,12 +7,12 @@ import { formatComplexText } from '../../shared/format-complex-text';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 import { NOTE_BOX_STYLE } from '../ui/note-box-style';
 import { DIAGNOSIS_KIND_NAMES } from '../../shared/diagnosis-kind-names';
+import { plural } from '../../shared/plural';
 
 type SuiteEntry = VersionMatrix['suites'][number];
 type Change = SuiteEntry['changes'][number];
 type Side = Change['steps'][number]['before'];
 
-const plural = (n: number, word: string) => `${n.toLocaleString('en-GB')} ${word}${n === 1 ? '' : 's'}`;
 /** Changes listed before "show all": a suite whose every point moved lists hundreds. */
 const FIRST = 20;
 

@@ -15,6 +15,7 @@ import { DIAGNOSIS_STYLES } from '../failures/diagnosis-styles';
 import { QueryState } from '../ui/query-state';
 import { SkText } from '../ui/sk-text';
 import { TitledPanel } from '../ui/titled-panel';
+import { plural } from '../../shared/plural';
 
 type RunCounts = FindingsByKindView['runs'][number];
 
@@ -33,7 +34,6 @@ const CLASS_TITLE = { branch: 'Branch findings', accuracy: 'Accuracy findings' }
 const day = (iso: string) => new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short' }).format(new Date(iso));
 const time = (iso: string) =>
   new Intl.DateTimeFormat('en-GB', { hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(new Date(iso));
-const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 
 /**
  * A plan's findings by diagnosis kind across its latest completed runs: one row per kind that

@@ -3,6 +3,7 @@ import { theme } from '../../constants/theme';
 import type { CheckedScope } from '../../shared/run-result';
 import { SkText } from '../ui/sk-text';
 import { NOTE_BOX_STYLE } from '../ui/note-box-style';
+import { plural } from '../../shared/plural';
 
 const CONVENTION_WORDS: Record<string, string> = {
   'signed-zero': 'signed zero (IEC 60559 / ISO C Annex G)',
@@ -21,7 +22,6 @@ export interface CheckedScopeNoteProps {
 }
 
 const n = (x: number) => x.toLocaleString('en-GB');
-const plural = (x: number, word: string) => `${n(x)} ${word}${x === 1 ? '' : 's'}`;
 
 /**
  * What a result does and does not show: the conventions, branches, paths, points and property

@@ -1,6 +1,5 @@
 import type { WorkerView } from '../../shared/worker-view';
-
-const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
+import { plural } from '../../shared/plural';
 
 /** What the run page and the Libraries screen say when no worker is running. */
 export const NO_LIVE_WORKER_WORDS = 'No worker is running: queued pairs wait until one starts.';

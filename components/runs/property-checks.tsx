@@ -7,14 +7,13 @@ import { DisclosureMark } from '../ui/disclosure-mark';
 import { SkText } from '../ui/sk-text';
 import { OUTCOME_TONE } from './outcome-tone';
 import { propertyFailureParts } from '../../shared/property-failure-parts';
+import { plural } from '../../shared/plural';
 
 const KIND = {
   held: { glyph: '✓', word: 'held', tone: 'pass' },
   failed: { glyph: '❌', word: 'failed', tone: 'fail' },
   'not-checked': { glyph: '−', word: 'not checked', tone: 'neutral' },
 } as const satisfies Record<PropertyOutcome['kind'], { glyph: string; word: string; tone: keyof typeof OUTCOME_TONE }>;
-
-const plural = (n: number, word: string) => `${n.toLocaleString('en-GB')} ${word}${n === 1 ? '' : 's'}`;
 
 /**
  * The property checks of a run, grouped by suite × target: the law, its title, the pinned seed,

@@ -14,11 +14,11 @@ import { tallyCells } from './tally-cells';
 import { tallyWords } from './tally-words';
 import { DisclosureToggle } from '../ui/disclosure-toggle';
 import { OUTCOME_TONE } from './outcome-tone';
+import { plural } from '../../shared/plural';
 
 const SUITE_COLUMN = 300;
 const TARGET_COLUMN_MIN = 190;
 const byName = (a: string, b: string) => a.localeCompare(b, 'en', { numeric: true });
-const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
 
 /**
  * A run's matrix, suite × library version (a check each). Each cell says its outcome in glyphs

@@ -10,9 +10,9 @@ import { formatComplexText } from '../../shared/format-complex-text';
 import { REGRESSION_MAIL_ROWS } from './regression-mail-rows';
 import { escapeHtml as escape } from '../mail/escape-html';
 import { regressionSummary } from './regression-summary';
+import { plural } from '../../shared/plural';
 
 const c = (v: WireComplex | null) => formatComplexText(v);
-const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 /** Every label of a row in words, the leading one first; "error" for a row without one. */
 const labelsOf = (r: RegressionRow): string[] => {
   const labels = r.labels.length > 0 ? r.labels : r.diagnosis ? [r.diagnosis] : [];
