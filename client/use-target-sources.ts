@@ -1,5 +1,5 @@
 import { useQuery, useQueryClient } from '@tanstack/react-query';
-import { useEffect } from 'react';
+import { useEffect, useRef } from 'react';
 import type { TargetSourceView } from '../shared/target-source-view';
 import { apiFetch } from './api-fetch';
 import { TARGETS_KEY } from './use-targets';
@@ -20,12 +20,18 @@ export function useTargetSources() {
     queryFn: async () => (await apiFetch<{ sources: TargetSourceView[] }>('/target-sources')).sources,
     refetchInterval: (q) => (q.state.data?.some((s) => s.state === 'resolving') ? RESOLVING_POLL_MS : false),
   });
-  const readyIds = (query.data ?? [])
-    .filter((s) => s.state === 'ready')
-    .map((s) => s.id)
-    .join(' ');
+  // Only a source that becomes ready after the first answer adds targets the list has not read;
+  // the list alone is read again (exact: the per-target fingerprints and cut maps share its prefix).
+  const seenReady = useRef<Set<string> | null>(null);
+  const readyIds = (query.data ?? []).filter((s) => s.state === 'ready').map((s) => s.id);
+  const readyKey = readyIds.join(' ');
   useEffect(() => {
-    if (readyIds !== '') void queryClient.invalidateQueries({ queryKey: TARGETS_KEY });
-  }, [readyIds, queryClient]);
+    if (!query.data) return;
+    const ready = new Set(readyKey ? readyKey.split(' ') : []);
+    const before = seenReady.current;
+    seenReady.current = ready;
+    if (before && [...ready].some((id) => !before.has(id)))
+      void queryClient.invalidateQueries({ queryKey: TARGETS_KEY, exact: true });
+  }, [readyKey, query.data, queryClient]);
   return query;
 }
