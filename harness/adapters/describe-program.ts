@@ -1,17 +1,16 @@
 import type { ProgramTargetSource } from '../../shared/target-source';
 import { conventionSchema } from '../../shared/schemas/convention-schema';
 import type { TargetEntry } from '../../shared/target-entry';
-import { programTarget } from './program-target';
-import type { TargetDescriptor } from './target-descriptor';
+import { programTarget, type ProgramIdentity } from './program-target';
 
 /**
- * A `program` target source (shared/target-source.ts) made into a target: the program is started
- * once to answer `describe` (docs/stdio-protocol.md), which names its library, version and entries,
- * and closed again; the descriptor then opens a fresh one on first use. `baseDir` is the folder the
+ * What a `program` target source (shared/target-source.ts) is: the program is started once to
+ * answer `describe` (docs/stdio-protocol.md), which names its library, version and entries, and
+ * closed again; resolveTargetSource makes the identity a target that opens a fresh one on first use. `baseDir` is the folder the
  * source's relative `cwd` is read from. Rejects with a message naming what the program got wrong
  * (it did not start, did not answer in time, or its answer lacks a library or version).
  */
-export async function describeProgram(source: ProgramTargetSource, baseDir: string): Promise<TargetDescriptor> {
+export async function describeProgram(source: ProgramTargetSource, baseDir: string): Promise<ProgramIdentity> {
   const probe = programTarget(source, baseDir, { name: source.name ?? 'program', library: 'program', version: '?' });
   const command = probe.settings.command;
   try {
@@ -32,14 +31,13 @@ export async function describeProgram(source: ProgramTargetSource, baseDir: stri
       throw new Error(
         `${command}: describe answered convention ${JSON.stringify(convention)}; it must be signed-zero or counter-clockwise, or absent`,
       );
-    const identity = {
+    return {
       name: source.name ?? `${library}@${version}`,
       library,
       version,
       ...(Array.isArray(entries) ? { entries: entries as TargetEntry[] } : {}),
       ...(declared ? { convention: declared.data } : {}),
     };
-    return { ...identity, settings: probe.settings, open: () => programTarget(source, baseDir, identity) };
   } finally {
     await probe.close();
   }

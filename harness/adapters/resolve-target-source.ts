@@ -52,9 +52,7 @@ export async function resolveTargetSource(
   const baseDir = path.resolve(options.baseDir);
   const cacheDir = path.resolve(options.cacheDir);
   if (source.kind === 'program') {
-    const { name, library, version, entries, convention } = await describeProgram(source, baseDir);
-    const identity = { name, library, version, ...(entries ? { entries } : {}), ...(convention ? { convention } : {}) };
-    return [configuredTarget({ kind: 'program', source, baseDir, identity })];
+    return [configuredTarget({ kind: 'program', source, baseDir, identity: await describeProgram(source, baseDir) })];
   }
   if (source.kind === 'npm') {
     const spec = `${source.package}@${source.version}`;
