@@ -9,7 +9,7 @@ import { FindingsPool } from './findings-pool';
 import { HttpError } from '../http/http-error';
 import { InputError } from '../http/input-error';
 import { ResultCache } from './result-cache';
-import { readyTargetSources } from '../targets/ready-target-sources';
+import { readyTargetSourceOf } from '../targets/ready-target-source-of';
 
 /**
  * Measured here on the installed targets (in process, medians of a few runs, 2 cores):
@@ -125,9 +125,7 @@ export class LibraryFindings {
    * the same name is computed afresh.
    */
   private async addedSource(name: string) {
-    const holder = (await readyTargetSources(this.dataSource.manager)).find((s) =>
-      s.targets.some((t) => t.name === name),
-    );
+    const holder = await readyTargetSourceOf(this.dataSource.manager, name);
     return holder ? { id: holder.id, source: holder.source } : undefined;
   }
 

@@ -2,7 +2,7 @@ import type { DataSource } from 'typeorm';
 import type { resolveTargetSource, Target } from '../../harness';
 import { AddedTargetDescriptors } from './added-target-descriptors';
 import { openInstalledTarget } from './open-installed-target';
-import { readyTargetSources } from './ready-target-sources';
+import { readyTargetSourceOf } from './ready-target-source-of';
 
 /**
  * The shard executor's `openTarget` for a worker process: a target installed with Sheetkeeper
@@ -21,7 +21,7 @@ export function availableTargetOpener(
   return async (name) => {
     const installed = openInstalledTarget(name);
     if (installed) return installed;
-    const holder = (await readyTargetSources(dataSource.manager)).find((s) => s.targets.some((t) => t.name === name));
+    const holder = await readyTargetSourceOf(dataSource.manager, name);
     return holder ? added.open(holder.id, holder.source, name) : null;
   };
 }

@@ -10,8 +10,8 @@ export interface ReadyTargetSource {
 
 /**
  * The admin-added target sources that resolved (docs/libraries-screen.md), oldest first, with the
- * targets each names. The one read of them for the target sync, the targets list, the worker's
- * available targets and its opener. Loads no library and starts no program.
+ * targets each names. The read of them all for the target sync, the targets list and the worker's
+ * available targets (ready-target-source-of.ts reads the one that names a target). Loads no library and starts no program.
  */
 export async function readyTargetSources(manager: EntityManager): Promise<ReadyTargetSource[]> {
   return manager.query(
