@@ -100,7 +100,7 @@ export function FindingsByKind({ planId }: { planId: string }) {
           >
             {runs.map((run) => (
               <View key={run.id} style={{ width: column }}>
-                <Link href={`/runs/${run.id}` as never} asChild>
+                <Link href={`/runs/${run.id}`} asChild>
                   <Pressable
                     accessibilityRole="link"
                     accessibilityLabel={`Run of ${day(run.createdAt)} ${time(run.createdAt)}: ${plural(run.failed, 'failing point')}`}
@@ -182,7 +182,7 @@ function KindBar({ kind, run, max }: { kind: DiagnosisKind; run: RunCounts; max:
       </View>
     );
   return (
-    <Link href={failuresPath({ run: run.id, diagnosis: kind }) as never} asChild>
+    <Link href={failuresPath({ run: run.id, diagnosis: kind })} asChild>
       <Pressable
         accessibilityRole="link"
         accessibilityLabel={`${n} ${name} in the run of ${formatDate(run.createdAt)}: open these failures`}
