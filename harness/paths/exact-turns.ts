@@ -1,5 +1,5 @@
 import { Rational } from '../reference/numbers/rational';
-import { PI_MULTIPLE } from './pi-multiple';
+import { PI_MULTIPLE } from '../../shared/schemas/pi-multiple';
 
 /**
  * An angle written as a rational multiple of π ("pi/2", "-3pi/4", "0.5*pi") as an exact number

@@ -1,5 +1,5 @@
 import { geometryNumber } from './geometry-number';
-import { PI_MULTIPLE } from './pi-multiple';
+import { PI_MULTIPLE } from '../../shared/schemas/pi-multiple';
 
 /**
  * An angle as a fraction of a full turn. A rational multiple of π written "pi",

@@ -1,4 +1,5 @@
 import { GeometryRules, type GeometryIssue } from './geometry-rules';
+import { PI_MULTIPLE } from './pi-multiple';
 
 type Point = { re: string; im: string };
 /** A path as the schema has parsed its fields (defaults filled in), before this check. */
@@ -14,8 +15,6 @@ type ParsedPath =
     }
   | { kind: 'points'; points: Point[] }
   | { kind: 'grid'; min: Point; max: Point };
-
-const PI_MULTIPLE = /^\s*[+-]?(\d+(?:\.\d+)?)?\s*\*?\s*pi(?:\s*\/\s*(\d+))?\s*$/i;
 
 /**
  * Why a path would check nothing (docs/suite-format.md, "Paths that check nothing"): every rule
@@ -33,10 +32,10 @@ export function pathGeometryIssues(path: ParsedPath): GeometryIssue[] {
       rules.point(['center'], path.center);
       rules.positive(['radius'], path.radius, 'the circle has no points');
       rules.positive(['turns'], path.turns, 'the circle goes nowhere');
-      const pi = PI_MULTIPLE.exec(path.start_angle);
+      const pi = PI_MULTIPLE.exec(path.start_angle.trim());
       if (!pi) rules.finite(['start_angle'], path.start_angle);
-      else if (pi[2] !== undefined && Number(pi[2]) === 0) rules.say(['start_angle'], 'must not divide by 0');
-      else if (!Number.isFinite(Number(pi[1] ?? '1'))) rules.say(['start_angle'], 'must be a finite multiple of pi');
+      else if (pi[3] !== undefined && Number(pi[3]) === 0) rules.say(['start_angle'], 'must not divide by 0');
+      else if (!Number.isFinite(Number(pi[2] ?? '1'))) rules.say(['start_angle'], 'must be a finite multiple of pi');
       at(path.at);
       break;
     }
