@@ -414,9 +414,11 @@ describe('an expensive reference table', () => {
       await new Promise((r) => setTimeout(r, 100));
     }
     const res = await upload;
-    // On the request thread one /api/me waited 12 s behind such a table.
+    // On the request thread one /api/me waited 12 s behind such a table. Off it, the slowest wait
+    // was 3–10 ms when quiet (three runs) and 118 ms once under a full test run, so the bound is a second:
+    // ten times the loaded figure, a twelfth of the blocked one.
     expect(waits.length).toBeGreaterThanOrEqual(3);
-    expect(Math.max(...waits)).toBeLessThan(100);
+    expect(Math.max(...waits)).toBeLessThan(1000);
     expect(res.status).toBe(422);
     expect(res.body).toMatchObject({ kind: 'over-time-budget', budgetSeconds: BUDGET_MS / 1000 });
     expect(res.body.message).toContain('40 rows');

@@ -134,8 +134,9 @@ describe('loadOverview over many regressions', () => {
       times.push(performance.now() - started);
     }
     times.sort((a, b) => a - b);
-    // Measured on the shared 2-core machine: median 13 ms (7–19) from the counts; counting the
-    // 60,000 regressed failures one by one took 650–1,110 ms (median 805).
-    expect(times[3]).toBeLessThan(40);
+    // Measured on the shared 2-core machine: median 13 ms (7–19) from the counts when quiet, 41 ms
+    // in CI while other jobs shared the cores; counting the 60,000 regressed failures one by one
+    // took 650–1,110 ms (median 805). The bound sits between the two with a margin of three each way.
+    expect(times[3]).toBeLessThan(200);
   });
 });
