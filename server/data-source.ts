@@ -46,6 +46,7 @@ import { Workers1764920000000 } from './migrations/1764920000000-workers';
 import { DecisionVersions1764930000000 } from './migrations/1764930000000-decision-versions';
 import { AccountLinksAndDeactivation1764940000000 } from './migrations/1764940000000-account-links-and-deactivation';
 import { NewestFailuresFirstAndFirstRuns1764960000000 } from './migrations/1764960000000-newest-failures-first-and-first-runs';
+import { UlpsTiesNewestFirst1764970000000 } from './migrations/1764970000000-ulps-ties-newest-first';
 
 /** Entities and migrations are listed, not globbed, so tsx, jest and tsc builds all find them. */
 export const ENTITIES = [
@@ -94,6 +95,7 @@ export const MIGRATIONS = [
   DecisionVersions1764930000000,
   AccountLinksAndDeactivation1764940000000,
   NewestFailuresFirstAndFirstRuns1764960000000,
+  UlpsTiesNewestFirst1764970000000,
 ];
 
 export function createDataSource(url: string): DataSource {

@@ -33,8 +33,10 @@ const DECISION_MARKS = `(SELECT coalesce(json_object_agg(m.fid, m.mark), '{}'::j
 export async function failurePageJson(dataSource: DataSource, q: FailureQuery): Promise<string> {
   const { from, order, params } = failureSearchSql(q);
   const byUlps = q.sort === 'ulps';
-  const pageOrder = byUlps ? 'p._r ASC, p._u DESC, p._id ASC' : 'p._r ASC, p._id DESC';
-  const lastFirst = byUlps ? 'p._r DESC, p._u ASC, p._id DESC' : 'p._r DESC, p._id ASC';
+  // The page order of failureSearchSql, and its reverse to find the cursor's row: newest first
+  // within a class, and within equal errors when sorted by ulps.
+  const pageOrder = byUlps ? 'p._r ASC, p._u DESC, p._id DESC' : 'p._r ASC, p._id DESC';
+  const lastFirst = byUlps ? 'p._r DESC, p._u ASC, p._id ASC' : 'p._r DESC, p._id ASC';
   const cursor = `p._id::text || ':' || p._r::text${byUlps ? ` || ':' || p._u::text` : ''}`;
   const text = `WITH p AS (
        SELECT f.id AS _id, ${RANK} AS _r, coalesce(f.ulps, 0) AS _u, ${FAILURE_ROW} AS r

@@ -72,12 +72,13 @@ export function failureSearchSql(q: FailureQuery, only?: string): { from: string
   let order = `${RANK} ASC, ${NEWEST} ASC`;
   const [afterId, afterRank, afterUlps] = q.after?.split(':') ?? [];
   if (q.sort === 'ulps') {
-    order = `${RANK} ASC, coalesce(f.ulps, 0) DESC, f.id ASC`;
+    // Equal errors newest first too (migration 1764970000000): every branch finding ties at 0.
+    order = `${RANK} ASC, coalesce(f.ulps, 0) DESC, ${NEWEST} ASC`;
     if (q.after) {
       params.push(Number(afterRank), Number(afterUlps ?? 0), afterId);
       const [r, u, id] = [params.length - 2, params.length - 1, params.length].map((n) => `$${n}`);
       where.push(
-        `(${RANK} > ${r} OR (${RANK} = ${r} AND (coalesce(ulps, 0) < ${u} OR (coalesce(ulps, 0) = ${u} AND id > ${id}))))`,
+        `(${RANK} > ${r} OR (${RANK} = ${r} AND (coalesce(ulps, 0) < ${u} OR (coalesce(ulps, 0) = ${u} AND (-id) > -${id}::bigint))))`,
       );
     }
   } else if (q.after) {

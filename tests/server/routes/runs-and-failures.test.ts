@@ -135,6 +135,27 @@ describe('runs and the failure table', () => {
     }
   });
 
+  it('lists equal errors newest first when sorted by ulps, across keyed pages', async () => {
+    const rows: { id: string; findingClass: string; ulps: number | null }[] = [];
+    let after: string | null = null;
+    do {
+      const page: { body: { failures: typeof rows; next: string | null } } = await kwame.get(
+        `/api/failures?run=${runId}&sort=ulps&limit=17${after ? `&after=${after}` : ''}`,
+      );
+      rows.push(...page.body.failures);
+      after = page.body.next;
+    } while (after);
+    expect(rows).toHaveLength(120);
+    const ties = new Map<string, number[]>();
+    for (const f of rows) {
+      const key = `${f.findingClass} ${f.ulps ?? 0}`;
+      ties.set(key, [...(ties.get(key) ?? []), Number(f.id)]);
+    }
+    // Branch findings carry no ulps, so all 40 tie at 0: the case the order must settle.
+    expect(ties.get('branch 0')).toHaveLength(40);
+    for (const ids of ties.values()) expect(ids).toEqual([...ids].sort((a, b) => b - a));
+  });
+
   it('answers every page with the rows and cursor the row reader gives, key for key', async () => {
     const queries = [
       { limit: 50 },
