@@ -6,6 +6,7 @@ import { theme } from '../../constants/theme';
 import { DIAGNOSIS_KINDS } from '../../shared/diagnosis-kinds';
 import { failureQuery } from '../../shared/schemas/failure-query';
 import { ActionButton } from '../ui/action-button';
+import { carriedFocus } from '../ui/carried-focus';
 import { ChipGroup } from '../ui/chip-group';
 import { DisclosureToggle } from '../ui/disclosure-toggle';
 import { SkText } from '../ui/sk-text';
@@ -119,6 +120,7 @@ export function FailureFiltersPanel({
                     if (errors[key]) setErrors({ ...errors, [key]: undefined });
                   }}
                   onSubmitEditing={apply}
+                  carriesFocus
                   autoCapitalize="none"
                   error={errors[key] ?? (draft[key].trim() === draftOf(filters)[key] ? refused[key] : undefined)}
                 />
@@ -126,13 +128,15 @@ export function FailureFiltersPanel({
             ))}
           </View>
           <View style={styles.actions}>
-            <ActionButton label="Apply filters" onPress={apply} />
+            <ActionButton label="Apply filters" onPress={apply} carriesFocus />
             {on > 0 ? (
               <ActionButton
                 label="Clear all"
                 tone="quiet"
                 onPress={() => {
                   setErrors({});
+                  // "Clear all" is gone from the screen the change mounts: focus lands on "Apply filters".
+                  carriedFocus.carry('Apply filters');
                   onChange(filters.sort ? { sort: filters.sort } : {});
                 }}
               />

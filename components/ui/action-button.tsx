@@ -1,4 +1,6 @@
-import { ActivityIndicator, Pressable, StyleSheet, Text } from 'react-native';
+import { useEffect, useRef } from 'react';
+import { ActivityIndicator, Pressable, StyleSheet, Text, type View } from 'react-native';
+import { carriedFocus } from './carried-focus';
 import { theme } from '../../constants/theme';
 
 interface Props {
@@ -8,6 +10,8 @@ interface Props {
   disabled?: boolean;
   tone?: 'primary' | 'quiet';
   accessibilityLabel?: string;
+  /** A press mounts a new screen with this button on it, which then takes the focus (`carriedFocus`). */
+  carriesFocus?: boolean;
 }
 
 export function ActionButton({
@@ -17,16 +21,28 @@ export function ActionButton({
   disabled = false,
   tone = 'primary',
   accessibilityLabel,
+  carriesFocus = false,
 }: Props) {
   const inactive = disabled || busy;
+  const name = accessibilityLabel ?? label;
+  const node = useRef<View>(null);
+  useEffect(() => {
+    if (carriesFocus && carriedFocus.take(name)) node.current?.focus();
+    // Once, on mount: only a screen mounted by this button's press takes the focus it carried.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, []);
   return (
     <Pressable
+      ref={node}
       accessibilityRole="button"
-      accessibilityLabel={accessibilityLabel ?? label}
+      accessibilityLabel={name}
       aria-disabled={inactive}
       aria-busy={busy}
       disabled={inactive}
-      onPress={onPress}
+      onPress={() => {
+        if (carriesFocus) carriedFocus.carry(name);
+        onPress();
+      }}
       style={({ pressed }) => [
         styles.base,
         tone === 'primary' ? styles.primary : styles.quiet,

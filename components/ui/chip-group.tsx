@@ -4,6 +4,7 @@ import { SkText } from './sk-text';
 import { CHOICE_CHIP_STYLE } from './choice-chip-style';
 import { RadioMark } from './radio-mark';
 import { useRadioKeys } from './use-radio-keys';
+import { carriedFocus } from './carried-focus';
 
 interface Props<V extends string | undefined> {
   label: string;
@@ -20,6 +21,7 @@ interface Props<V extends string | undefined> {
  * Space chooses: `useRadioKeys`) whose chosen chip carries a filled ring as well as the accent.
  */
 export function ChipGroup<V extends string | undefined>({ label, options, value, onChange, groupLabel }: Props<V>) {
+  const names = options.map((o) => `${label}: ${o.text}`);
   const radio = useRadioKeys(
     options.length,
     options.findIndex((o) => o.value === value),
@@ -27,6 +29,7 @@ export function ChipGroup<V extends string | undefined>({ label, options, value,
       const option = options[index];
       if (option && option.value !== value) onChange(option.value);
     },
+    names,
   );
   return (
     <View style={styles.group}>
@@ -41,9 +44,12 @@ export function ChipGroup<V extends string | undefined>({ label, options, value,
               key={o.value ?? '(any)'}
               {...radio(index)}
               accessibilityRole="radio"
-              accessibilityLabel={`${label}: ${o.text}`}
+              accessibilityLabel={names[index]}
               aria-checked={on}
-              onPress={() => onChange(o.value)}
+              onPress={() => {
+                carriedFocus.carry(names[index]!);
+                onChange(o.value);
+              }}
               style={[styles.chip, on && styles.chipOn]}
             >
               <RadioMark on={on} inverse={on} />

@@ -1,4 +1,6 @@
+import { useEffect, useRef } from 'react';
 import { StyleSheet, TextInput, View, type TextInputProps } from 'react-native';
+import { carriedFocus } from './carried-focus';
 import { theme } from '../../constants/theme';
 import { INPUT_BOX_STYLE } from './input-box-style';
 import { RuleLines } from './rule-lines';
@@ -22,15 +24,34 @@ interface Props extends Pick<
   testID?: string;
   /** Monospaced input, for expressions and identifiers. */
   mono?: boolean;
+  /** Submitting (Enter) mounts a new screen with this field on it, which then takes the focus (`carriedFocus`). */
+  carriesFocus?: boolean;
 }
 
-export function TextField({ label, value, onChangeText, error, testID, mono = false, ...inputProps }: Props) {
+export function TextField({
+  label,
+  value,
+  onChangeText,
+  error,
+  testID,
+  mono = false,
+  carriesFocus = false,
+  onSubmitEditing,
+  ...inputProps
+}: Props) {
+  const input = useRef<TextInput>(null);
+  useEffect(() => {
+    if (carriesFocus && carriedFocus.take(label)) input.current?.focus();
+    // Once, on mount: only a screen mounted by this field's submit takes the focus it carried.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, []);
   return (
     <View style={styles.field}>
       <SkText variant="smallLabel" style={styles.label}>
         {label}
       </SkText>
       <TextInput
+        ref={input}
         accessibilityLabel={label}
         aria-invalid={error ? true : undefined}
         value={value}
@@ -44,6 +65,13 @@ export function TextField({ label, value, onChangeText, error, testID, mono = fa
         testID={testID}
         autoCorrect={false}
         placeholderTextColor={theme.color.inkFaint}
+        onSubmitEditing={
+          onSubmitEditing &&
+          ((event) => {
+            if (carriesFocus) carriedFocus.carry(label);
+            onSubmitEditing(event);
+          })
+        }
         {...inputProps}
       />
       <RuleLines rules={error ? [`${label} ${error}`] : []} />

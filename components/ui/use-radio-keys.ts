@@ -1,4 +1,5 @@
-import { useRef } from 'react';
+import { useEffect, useRef } from 'react';
+import { carriedFocus } from './carried-focus';
 import type { View } from 'react-native';
 
 /** The keys of the WAI-ARIA radio group pattern and where each moves: a step, or the first or last option. */
@@ -23,10 +24,30 @@ interface KeyEvent {
  * arrow keys move to the next or previous option, wrapping, and choose it; Home and End go to the
  * ends; Space chooses the focused option. Returns the props of the option at an index: spread them
  * on its Pressable. react-native-web lets Space press only a `button`, so a `radio` handles it here.
+ *
+ * `names`, the options' accessible names, let focus follow a choice onto the screen it mounts
+ * (`carriedFocus`): a choice that changes the address pushes a new screen, and there the checked
+ * option takes focus, so the arrow keys go on moving through the group.
  */
-export function useRadioKeys(count: number, checked: number, choose: (index: number) => void) {
+export function useRadioKeys(
+  count: number,
+  checked: number,
+  choose: (index: number) => void,
+  names?: readonly string[],
+) {
   const nodes = useRef<(View | null)[]>([]);
   const stop = checked >= 0 && checked < count ? checked : 0;
+  const chooseCarrying = (index: number) => {
+    const name = names?.[index];
+    if (name) carriedFocus.carry(name);
+    choose(index);
+  };
+  useEffect(() => {
+    const name = names?.[stop];
+    if (name && carriedFocus.take(name)) nodes.current[stop]?.focus();
+    // Once, on mount: only a screen mounted by a choice takes the focus that choice carried.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, []);
   return (index: number) => ({
     ref: (node: View | null) => {
       nodes.current[index] = node;
@@ -35,14 +56,14 @@ export function useRadioKeys(count: number, checked: number, choose: (index: num
     onKeyDown: (event: KeyEvent) => {
       if (event.key === ' ' || event.key === 'Spacebar') {
         event.preventDefault();
-        choose(index);
+        chooseCarrying(index);
         return;
       }
       const move = MOVES[event.key];
       if (move === undefined || count === 0) return;
       event.preventDefault();
       const next = move === 'first' ? 0 : move === 'last' ? count - 1 : (index + move + count) % count;
-      choose(next);
+      chooseCarrying(next);
       nodes.current[next]?.focus();
     },
   });

@@ -219,17 +219,47 @@ describe('the keyboard, on the failure table with its filters', () => {
     expect(stops.filter((s) => / Diagnosis: /.test(s))).toHaveLength(1);
 
     // Choosing a filter opens the table at a new address (so Back undoes it), and the screen mounts
-    // again: the arrow moves the choice, and focus starts over at the top of the page.
+    // again: the focus follows the choice onto the new screen, so the arrow keys go on moving
+    // through the group instead of dropping the focus to the page after one step.
     const radios = diagnosis.getByRole('radio');
+    const names = await radios.evaluateAll((all) => all.map((r) => r.getAttribute('aria-label')));
     await radios.first().focus();
     expect(await radios.first().getAttribute('aria-checked')).toBe('true');
-    await b.page.keyboard.press('ArrowRight');
-    await b.page.waitForFunction(
-      () =>
-        document.querySelectorAll('[aria-label="Diagnosis"] [role="radio"]')[1]?.getAttribute('aria-checked') ===
-        'true',
-    );
-    expect(new URL(b.page.url()).searchParams.get('diagnosis')).not.toBeNull();
+    const focusedChoice = () =>
+      b.page.evaluate(() => {
+        const el = document.activeElement;
+        return el?.getAttribute('role') === 'radio' && el.getAttribute('aria-checked') === 'true'
+          ? el.getAttribute('aria-label')
+          : (el?.getAttribute('aria-label') ?? el?.tagName ?? null);
+      });
+    const chosen: (string | null)[] = [];
+    for (const step of [1, 2]) {
+      await b.page.keyboard.press('ArrowRight');
+      await b.page
+        .waitForFunction(
+          (name) =>
+            new URLSearchParams(location.search).has('diagnosis') &&
+            document.activeElement?.getAttribute('aria-label') === name,
+          names[step],
+          { timeout: 10_000 },
+        )
+        .catch(() => undefined);
+      expect(await focusedChoice()).toBe(names[step]);
+      chosen.push(new URL(b.page.url()).searchParams.get('diagnosis'));
+    }
+    // Each step chose a diagnosis of its own: the second arrow moved on from the first's choice.
+    expect(new Set(chosen.filter(Boolean)).size).toBe(2);
+    // Typing a filter and pressing Enter keeps the focus in that field on the new screen.
+    const suite = b.page.getByLabel('Suite', { exact: true });
+    await suite.fill('sqrt-principal-sz');
+    await suite.press('Enter');
+    await b.page.waitForURL(/suite=sqrt-principal-sz/);
+    await b.page
+      .waitForFunction(() => document.activeElement?.getAttribute('aria-label') === 'Suite', undefined, {
+        timeout: 10_000,
+      })
+      .catch(() => undefined);
+    expect(await focusedChoice()).toBe('Suite');
   });
 });
 

@@ -1,4 +1,4 @@
-import { fireEvent, render, screen } from '@testing-library/react';
+import { act, fireEvent, render, screen } from '@testing-library/react';
 import { useState } from 'react';
 import { ChipGroup } from '../../../components/ui/chip-group';
 
@@ -9,6 +9,12 @@ const OPTIONS = [
 ] as const;
 
 type Verdict = (typeof OPTIONS)[number]['value'];
+
+/** A group whose every choice mounts it afresh, as a filter kept in the address does (a new screen per change). */
+function Remounting({ initial }: { initial: Verdict | undefined }) {
+  const [value, setValue] = useState<Verdict | undefined>(initial);
+  return <ChipGroup key={value ?? '(none)'} label="Verdict" options={OPTIONS} value={value} onChange={setValue} />;
+}
 
 function Harness({ initial }: { initial: Verdict | undefined }) {
   const [value, setValue] = useState<Verdict | undefined>(initial);
@@ -58,6 +64,26 @@ describe('ChipGroup', () => {
     render(<Harness initial={undefined} />);
     fireEvent.keyDown(radios()[2]!, { key: ' ' });
     expect(checked().map((r) => r.getAttribute('aria-label'))).toEqual(['Verdict: accepted deviation']);
+  });
+
+  it('keeps the focus on the chosen chip when the choice mounts the group afresh, so the arrow keys go on', () => {
+    render(<Remounting initial="bug" />);
+    const first = radios()[0]!;
+    act(() => first.focus());
+    fireEvent.keyDown(first, { key: 'ArrowRight' });
+    // A new node: the group was mounted again, and its checked chip took the focus the choice carried.
+    expect(radios()[1]).not.toBe(first);
+    expect(document.activeElement).toBe(radios()[1]);
+    fireEvent.keyDown(radios()[1]!, { key: 'ArrowRight' });
+    expect(checked()[0]!.getAttribute('aria-label')).toBe('Verdict: accepted deviation');
+    expect(document.activeElement).toBe(radios()[2]);
+  });
+
+  it('keeps the focus on a chip chosen by a press when the choice mounts the group afresh', () => {
+    render(<Remounting initial={undefined} />);
+    fireEvent.click(radios()[2]!);
+    expect(checked()[0]!.getAttribute('aria-label')).toBe('Verdict: accepted deviation');
+    expect(document.activeElement).toBe(radios()[2]);
   });
 
   it('shows no ✓ on any chip: the chosen one carries a drawn ring, not a glyph that means "passed"', () => {
