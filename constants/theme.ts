@@ -33,7 +33,10 @@ export const theme = {
     accentSoft: '#DCEBE6',
     danger: '#A8432E',
     dangerSoft: '#F6E1DA',
-    /** Errors and other "nothing was judged" states: amber ink (5.9:1 on panel, 5.0:1 on its soft ground) and its soft ground. */
+    /**
+     * Errors and other "nothing was judged" states: amber ink (5.9:1 on panel, 5.0:1 on its soft ground)
+     * and its soft ground. A point in error is drawn and labelled in it too (pictures, diagnosis chips).
+     */
     warn: '#875A08',
     warnSoft: '#F5EAD0',
     /** The grounds of the suite status labels (draft, submitted, retired) and the ink of "submitted". */
@@ -41,6 +44,8 @@ export const theme = {
     submittedInk: '#7A5310',
     submittedSoft: '#F5E7C8',
     retiredSoft: '#E9E6E0',
+    /** The ground a received HTML mail is shown on: white, as mail clients show the mail it was written for. */
+    mailGround: '#FFFFFF',
     /** The ground of a secret shown once (a new API token). */
     secretSoft: '#FBF3E2',
     focus: '#C58B1B',

@@ -36,10 +36,15 @@ const kindStyle = (kind: DiagnosisKind): DiagnosisStyle => ({
 /**
  * A word, a glyph and a colour per diagnosis, so the table, the cards and the pictures read the
  * same way without colour. A kind's word and meaning are shared/diagnosis-kind-names.ts, its ink
- * theme.color.kind. Every glyph exists in IBM Plex Sans.
+ * theme.kindInk; an error's ink is theme.color.warn, as on every screen. Every glyph exists in IBM Plex Sans.
  */
 export const DIAGNOSIS_STYLES: Record<DiagnosisTone, DiagnosisStyle> = {
   ...(Object.fromEntries(DIAGNOSIS_KINDS.map((k) => [k, kindStyle(k)])) as Record<DiagnosisKind, DiagnosisStyle>),
-  error: { word: 'error', glyph: GLYPHS.error.glyph, color: '#7A4E9A', explain: 'the library threw or timed out' },
+  error: {
+    word: 'error',
+    glyph: GLYPHS.error.glyph,
+    color: theme.color.warn,
+    explain: 'the library threw or timed out',
+  },
   skipped: { word: 'skipped', glyph: GLYPHS.notInUse.glyph, color: theme.color.inkFaint, explain: 'not evaluated' },
 };

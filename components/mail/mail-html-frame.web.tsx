@@ -1,3 +1,5 @@
+import { theme } from '../../constants/theme';
+
 /**
  * A received message's HTML in a frame with every sandbox restriction on (`sandbox=""`): the
  * document gets an opaque origin, so no script runs, no form posts, no link navigates the app,
@@ -16,9 +18,9 @@ export function MailHtmlFrame({ html, title }: { html: string; title: string }) 
         width: '100%',
         height: '70vh',
         minHeight: 360,
-        border: '1px solid #D9D3C5',
+        border: `1px solid ${theme.color.rule}`,
         borderRadius: 6,
-        backgroundColor: '#FFFFFF',
+        backgroundColor: theme.color.mailGround,
       }}
     />
   );

@@ -9,7 +9,7 @@ export type MarkTone = 'pass' | 'fail' | 'error' | 'skipped' | 'focus';
 export const MARK_STYLES: Record<MarkTone, { color: string; word: string }> = {
   pass: { color: theme.color.accent, word: 'passed' },
   fail: { color: theme.color.danger, word: 'failed' },
-  error: { color: '#7A4E9A', word: 'error' },
+  error: { color: theme.color.warn, word: 'error' },
   skipped: { color: theme.color.inkFaint, word: 'skipped' },
   focus: { color: theme.color.focus, word: 'this case' },
 };
