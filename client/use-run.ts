@@ -2,6 +2,7 @@ import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { useEffect, useRef } from 'react';
 import type { RunView } from '../shared/run-view';
 import { apiFetch } from './api-fetch';
+import { findingsByKindKey } from './findings-by-kind-key';
 import { isLiveRun } from './is-live-run';
 import { RUNS_KEY } from './use-runs';
 
@@ -25,13 +26,16 @@ export function useRun(id: string) {
     refetchInterval: (q) => (q.state.data && isLiveRun(q.state.data) ? LIVE_INTERVAL : false),
   });
   const live = query.data ? isLiveRun(query.data) : undefined;
+  const planId = query.data?.planId;
   const wasLive = useRef(live);
   useEffect(() => {
     if (wasLive.current === true && live === false) {
       const key = runKey(id);
       void queryClient.invalidateQueries({ queryKey: key, predicate: (q) => q.queryKey.length > key.length });
+      // The plan's findings picture counts completed runs: the plan page shows this one when opened next.
+      if (planId) void queryClient.invalidateQueries({ queryKey: findingsByKindKey(planId) });
     }
     wasLive.current = live;
-  }, [id, live, queryClient]);
+  }, [id, live, planId, queryClient]);
   return query;
 }

@@ -2,6 +2,7 @@ import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { act, renderHook, waitFor } from '@testing-library/react';
 import type { ReactNode } from 'react';
 import { useOverview } from '../../client/use-overview';
+import { findingsByKindKey } from '../../client/findings-by-kind-key';
 import { useRun } from '../../client/use-run';
 import { mockFetchRoutes } from '../setup/mock-fetch-routes';
 import { RUNNING_RUN } from '../setup/running-run';
@@ -44,6 +45,28 @@ describe('live queries', () => {
     const asked = calls.length;
     await act(() => jest.advanceTimersByTimeAsync(30_000));
     expect(calls).toHaveLength(asked);
+  });
+
+  it("marks the plan's findings picture stale when the run is seen to finish, and not before", async () => {
+    movingRun();
+    const client = new QueryClient({ defaultOptions: { queries: { retry: false, gcTime: Infinity } } });
+    const own = ({ children }: { children: ReactNode }) => (
+      <QueryClientProvider client={client}>{children}</QueryClientProvider>
+    );
+    const picture = [...findingsByKindKey(RUN.planId!), 8];
+    const other = [...findingsByKindKey('another-plan'), 8];
+    client.setQueryData(picture, { runs: [] });
+    client.setQueryData(other, { runs: [] });
+    const stale = (key: readonly unknown[]) => client.getQueryState(key)?.isInvalidated;
+    const { result } = renderHook(() => useRun(RUN.id), { wrapper: own });
+    await waitFor(() => expect(result.current.data?.shardsDone).toBe(1));
+    await act(() => jest.advanceTimersByTimeAsync(1_600));
+    expect(stale(picture)).toBe(false);
+    await act(() => jest.advanceTimersByTimeAsync(1_600));
+    await act(() => jest.advanceTimersByTimeAsync(1_600));
+    expect(result.current.data?.status).toBe('completed');
+    expect(stale(picture)).toBe(true);
+    expect(stale(other)).toBe(false);
   });
 
   it('keeps the Overview fresh while a run is in progress, and only then', async () => {
