@@ -1,5 +1,5 @@
 import { Link } from 'expo-router';
-import { useState } from 'react';
+import { Fragment, useState } from 'react';
 import { Pressable, ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { RunMatrixCell } from '../../shared/run-matrix-cell';
@@ -186,17 +186,26 @@ function MatrixCellView({ cell, words, layout }: { cell: RunMatrixCell; words: M
   );
   // A phone's row: the target, outcome and link on one line, the details as one paragraph of at
   // most three lines below (each on its own line, a failing check was ~140 px tall; all of it is
-  // in the label for a screen reader).
+  // in the label for a screen reader). A grid cell is the same at its column's width: the outcome
+  // and link on one line, the details one flowing paragraph whose parts stay their own words
+  // (a line per detail made the demo's largest run 135 px a suite, 3,266 px for 27 suites).
   const content =
     layout === 'grid' ? (
       <View style={styles.cellWords}>
-        {headline}
-        {words.details.map((line, i) => (
-          <SkText variant="caption" key={i} numberOfLines={3}>
-            {line}
+        <View style={styles.cellHead}>
+          {headline}
+          {linkWords}
+        </View>
+        {words.details.length > 0 ? (
+          <SkText variant="caption">
+            {words.details.map((line, i) => (
+              <Fragment key={i}>
+                {i > 0 ? ' · ' : null}
+                <Text>{line}</Text>
+              </Fragment>
+            ))}
           </SkText>
-        ))}
-        {linkWords}
+        ) : null}
       </View>
     ) : layout === 'row' ? (
       <>
@@ -259,7 +268,8 @@ const styles = StyleSheet.create({
   gridCell: {
     flex: 1,
     minHeight: theme.touch,
-    padding: theme.space(2),
+    paddingVertical: theme.space(1),
+    paddingHorizontal: theme.space(2),
     borderLeftWidth: 4,
     borderRadius: 4,
     justifyContent: 'center',
@@ -272,6 +282,13 @@ const styles = StyleSheet.create({
     paddingHorizontal: theme.space(3),
     borderLeftWidth: 4,
     borderRadius: 4,
+  },
+  cellHead: {
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    alignItems: 'baseline',
+    justifyContent: 'space-between',
+    columnGap: theme.space(3),
   },
   rowHead: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', columnGap: theme.space(3) },
   lineCell: {

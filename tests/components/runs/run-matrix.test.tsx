@@ -256,3 +256,22 @@ it('lays the matrix out as a grid with a column per target on a wide screen, and
     ),
   ).toBeTruthy();
 });
+
+it("gives a wide screen's cell its outcome and link on one line and its details as one paragraph of their own words", () => {
+  setScreenWidth(1440);
+  render(<RunMatrix runId={RUN} cells={CELLS} />);
+  const failing = cellOf('sqrt-principal-sz', 'complex.js@2.4.2');
+  const outcomeLine = within(failing).getByText('❌ 3 · 3 branch').parentElement!;
+  expect(within(outcomeLine).getByText('failures →')).toBeTruthy();
+  const paragraph = within(failing).getByText('2 other sheet').parentElement!;
+  expect(paragraph.textContent).toBe('2 other sheet · 1 wrong side of a cut · ✓ 117 passed · − 4 skipped');
+});
+
+it('shows every failing and errored check of a wide matrix without a tap, beside the suites that passed', () => {
+  setScreenWidth(1440);
+  render(<RunMatrix runId={RUN} cells={WITH_PASSING_SUITE} />);
+  const needing = WITH_PASSING_SUITE.filter((c) => c.outcome === 'fail' || c.outcome === 'error');
+  expect(needing).toHaveLength(3);
+  for (const c of needing) expect(cellOf(c.suite, c.target)).toBeTruthy();
+  expect(screen.queryAllByRole('button')).toHaveLength(0);
+});
