@@ -8,6 +8,7 @@ import { SkText } from '../ui/sk-text';
 import { OUTCOME_TONE } from './outcome-tone';
 import { propertyFailureParts } from '../../shared/property-failure-parts';
 import { plural } from '../../shared/plural';
+import { groupPropertyChecks, type PropertyGroup } from './group-property-checks';
 
 const KIND = {
   held: { glyph: '✓', word: 'held', tone: 'pass' },
@@ -19,22 +20,19 @@ const KIND = {
  * The property checks of a run, grouped by suite × target: the law, its title, the pinned seed,
  * and for a failure the shrunk counterexample, the library's values with the law's two sides marked
  * and fast-check's replay path (shared/property-failure-parts.ts, as in the CLI's outputs).
- * Pairs with a failure or an unchecked law come first and open; a pair whose every law held is
- * one folded line (a 50-pair run would otherwise list every held law in full). On a phone every
- * pair starts folded to one line of counts, failures first: a failure's counterexample, values
- * and replay path are a screenful each, and the demo's largest run listed them all.
+ * Targets of a suite whose outcomes are identical share one group (group-property-checks.ts).
+ * Groups with a failure or an unchecked law come first and open; a group whose every law held is
+ * one folded line (a 50-pair run would otherwise list every held law in full), and on a wide
+ * screen those lines share a row. On a phone every group starts folded to one line of counts,
+ * failures first: a failure's counterexample, values and replay path are a screenful each, and
+ * the demo's largest run listed them all. On a wide screen a law's card puts what was found
+ * beside the law's statement rather than under it (tests/e2e/day-run-page.test.ts measures it).
  */
 export function PropertyChecks({ rows }: { rows: RunPropertyRow[] }) {
   const wide = useWindowDimensions().width >= theme.wide;
   const [opened, setOpened] = useState<ReadonlySet<string>>(new Set());
-  const groups = new Map<string, RunPropertyRow[]>();
-  for (const row of rows) {
-    const key = `${row.suite} × ${row.target}`;
-    groups.set(key, [...(groups.get(key) ?? []), row]);
-  }
-  const rank = (checks: RunPropertyRow[]) =>
-    checks.some((r) => r.outcome.kind === 'failed') ? 0 : checks.some((r) => r.outcome.kind === 'not-checked') ? 1 : 2;
-  const ordered = [...groups.entries()].sort(([a, ra], [b, rb]) => rank(ra) - rank(rb) || a.localeCompare(b));
+  const groups = groupPropertyChecks(rows);
+  const pairs = new Set(rows.map((r) => `${r.suite}\u0000${r.target}`)).size;
   const count = (kind: PropertyOutcome['kind']) => rows.filter((r) => r.outcome.kind === kind).length;
   const toggle = (pair: string) =>
     setOpened((now) => {
@@ -44,70 +42,80 @@ export function PropertyChecks({ rows }: { rows: RunPropertyRow[] }) {
       return next;
     });
 
+  const groupView = ({ pair, targets, checks, rank }: PropertyGroup) => {
+    const allHeld = rank === 2;
+    const foldable = allHeld || !wide;
+    const open = !foldable || opened.has(pair);
+    const of = (kind: PropertyOutcome['kind']) => checks.filter((r) => r.kind === kind).length;
+    // Merged targets: the counts are each one's, and the row says so.
+    const each = targets.length > 1 ? (targets.length === 2 ? ' on both' : ` on all ${targets.length}`) : '';
+    const counts = (['failed', 'not-checked', 'held'] as const)
+      .filter((kind) => of(kind) > 0)
+      .map((kind) => ({ kind, text: `${KIND[kind].glyph} ${of(kind)} ${KIND[kind].word}` }));
+    return (
+      <View key={pair} style={[styles.group, wide && allHeld && styles.heldGroup]} testID={`property-pair-${pair}`}>
+        {foldable ? (
+          <Pressable
+            accessibilityRole="button"
+            accessibilityLabel={
+              // The pair and the words the row shows, in order, then what pressing does (WCAG 2.5.3).
+              allHeld
+                ? `${pair}: all ${plural(checks.length, 'law')} held${each}; ${open ? 'hide' : 'show'} them`
+                : `${pair}: ${counts.map((c) => c.text).join(' · ')}${each}; ${open ? 'hide' : 'show'} the ${plural(checks.length, 'law')} checked`
+            }
+            aria-expanded={open}
+            onPress={() => toggle(pair)}
+            style={styles.foldRow}
+          >
+            <SkText variant="mono">{pair}</SkText>
+            {allHeld ? (
+              <Text style={[styles.kind, { color: OUTCOME_TONE.pass.ink }]}>
+                {KIND.held.glyph} all {plural(checks.length, 'law')} held{each}
+              </Text>
+            ) : (
+              <Text style={styles.kind}>
+                {counts.map((c, i) => (
+                  <Text key={c.kind} style={{ color: OUTCOME_TONE[KIND[c.kind].tone].ink }}>
+                    {i > 0 ? ' · ' : ''}
+                    {c.text}
+                  </Text>
+                ))}
+                {each}
+              </Text>
+            )}
+            <DisclosureMark open={open} ink={allHeld ? OUTCOME_TONE.pass.ink : undefined} />
+          </Pressable>
+        ) : (
+          <SkText variant="mono">
+            {pair}
+            {each ? ` (the same${each})` : ''}
+          </SkText>
+        )}
+        {open
+          ? checks.map((outcome) => <PropertyCheckCard key={outcome.law} pair={pair} outcome={outcome} wide={wide} />)
+          : null}
+      </View>
+    );
+  };
+  const held = groups.filter((g) => g.rank === 2);
+
   return (
     <View style={styles.list}>
       <SkText variant="label" testID="property-summary">
-        {plural(rows.length, 'check')} over {plural(groups.size, 'pair')}: {count('failed')} failed,{' '}
-        {count('not-checked')} not checked, {count('held')} held.
+        {plural(rows.length, 'check')} over {plural(pairs, 'pair')}: {count('failed')} failed, {count('not-checked')}{' '}
+        not checked, {count('held')} held.
       </SkText>
-      {ordered.map(([pair, checks]) => {
-        const allHeld = rank(checks) === 2;
-        const foldable = allHeld || !wide;
-        const open = !foldable || opened.has(pair);
-        const of = (kind: PropertyOutcome['kind']) => checks.filter((r) => r.outcome.kind === kind).length;
-        const counts = (['failed', 'not-checked', 'held'] as const)
-          .filter((kind) => of(kind) > 0)
-          .map((kind) => ({ kind, text: `${KIND[kind].glyph} ${of(kind)} ${KIND[kind].word}` }));
-        return (
-          <View key={pair} style={styles.group} testID={`property-pair-${pair}`}>
-            {foldable ? (
-              <Pressable
-                accessibilityRole="button"
-                accessibilityLabel={
-                  // The pair and the words the row shows, in order, then what pressing does (WCAG 2.5.3).
-                  allHeld
-                    ? `${pair}: all ${plural(checks.length, 'law')} held; ${open ? 'hide' : 'show'} them`
-                    : `${pair}: ${counts.map((c) => c.text).join(' · ')}; ${open ? 'hide' : 'show'} the ${plural(checks.length, 'law')} checked`
-                }
-                aria-expanded={open}
-                onPress={() => toggle(pair)}
-                style={styles.foldRow}
-              >
-                <SkText variant="mono">{pair}</SkText>
-                {allHeld ? (
-                  <Text style={[styles.kind, { color: OUTCOME_TONE.pass.ink }]}>
-                    {KIND.held.glyph} all {plural(checks.length, 'law')} held
-                  </Text>
-                ) : (
-                  <Text style={styles.kind}>
-                    {counts.map((c, i) => (
-                      <Text key={c.kind} style={{ color: OUTCOME_TONE[KIND[c.kind].tone].ink }}>
-                        {i > 0 ? ' · ' : ''}
-                        {c.text}
-                      </Text>
-                    ))}
-                  </Text>
-                )}
-                <DisclosureMark open={open} ink={allHeld ? OUTCOME_TONE.pass.ink : undefined} />
-              </Pressable>
-            ) : (
-              <SkText variant="mono">{pair}</SkText>
-            )}
-            {open
-              ? checks.map(({ outcome }) => <PropertyCheckCard key={outcome.law} pair={pair} outcome={outcome} />)
-              : null}
-          </View>
-        );
-      })}
+      {groups.filter((g) => g.rank < 2).map(groupView)}
+      {wide && held.length > 0 ? <View style={styles.heldRow}>{held.map(groupView)}</View> : held.map(groupView)}
     </View>
   );
 }
 
-function PropertyCheckCard({ pair, outcome }: { pair: string; outcome: PropertyOutcome }) {
+function PropertyCheckCard({ pair, outcome, wide }: { pair: string; outcome: PropertyOutcome; wide: boolean }) {
   const kind = KIND[outcome.kind];
   const tone = OUTCOME_TONE[kind.tone];
-  return (
-    <View style={[styles.check, { borderLeftColor: tone.edge }]} testID={`property-${pair}-${outcome.law}`}>
+  const statement = (
+    <View style={wide ? styles.column : styles.stack}>
       <View style={styles.checkHead}>
         <Text style={[styles.kind, { color: tone.ink }]}>
           {kind.glyph} {kind.word}
@@ -117,19 +125,40 @@ function PropertyCheckCard({ pair, outcome }: { pair: string; outcome: PropertyO
           seed {outcome.seed}
         </SkText>
       </View>
-      <SkText variant="body">{outcome.title}</SkText>
-      {outcome.kind === 'held' ? (
-        <SkText variant="caption" style={styles.detail}>
-          {outcome.runs.toLocaleString('en-GB')} points drawn
-          {outcome.excluded ? `, ${outcome.excluded} where the law makes no claim` : ''}. {outcome.statement}
-        </SkText>
-      ) : null}
-      {outcome.kind === 'not-checked' ? (
-        <SkText variant="caption" style={styles.detail}>
-          {outcome.reason}
-        </SkText>
-      ) : null}
-      {outcome.kind === 'failed' ? <PropertyFailure outcome={outcome} /> : null}
+      {/* A law that held or was not checked is one line of its statement on a wide screen (the
+          whole sentence stays in the page for a screen reader and a copy): its evidence is beside
+          it, and a failure's card is the one to read in full. */}
+      <SkText
+        variant={wide ? 'caption' : 'body'}
+        style={wide ? styles.detail : null}
+        numberOfLines={wide && outcome.kind !== 'failed' ? 1 : undefined}
+      >
+        {outcome.title}
+      </SkText>
+    </View>
+  );
+  const found =
+    outcome.kind === 'held' ? (
+      <SkText variant="caption" style={styles.detail}>
+        {outcome.runs.toLocaleString('en-GB')} points drawn
+        {outcome.excluded ? `, ${outcome.excluded} where the law makes no claim` : ''}. {outcome.statement}
+      </SkText>
+    ) : outcome.kind === 'not-checked' ? (
+      <SkText variant="caption" style={styles.detail}>
+        {outcome.reason}
+      </SkText>
+    ) : (
+      <PropertyFailure outcome={outcome} />
+    );
+  // A wide card puts what was found beside the law's statement: one above the other, a failing
+  // law's card was ~230 px tall at 1440 px, most of its width empty beside the counterexample.
+  return (
+    <View
+      style={[styles.check, wide && styles.checkWide, { borderLeftColor: tone.edge }]}
+      testID={`property-${pair}-${outcome.law}`}
+    >
+      {statement}
+      <View style={wide ? styles.column : styles.stack}>{found}</View>
     </View>
   );
 }
@@ -139,10 +168,10 @@ function PropertyFailure({ outcome }: { outcome: Extract<PropertyOutcome, { kind
   const parts = propertyFailureParts(outcome);
   return (
     <View style={styles.failure}>
-      <SkText variant="caption" style={styles.detail}>
+      <SkText variant="caption" style={styles.reason}>
         {outcome.reason}
       </SkText>
-      <SkText variant="mono" selectable style={styles.label}>
+      <SkText variant="mono" selectable>
         {parts.counterexample}
       </SkText>
       {parts.values.map((v) => (
@@ -155,7 +184,7 @@ function PropertyFailure({ outcome }: { outcome: Extract<PropertyOutcome, { kind
           </SkText>
         </View>
       ))}
-      <SkText variant="mono" selectable style={styles.label}>
+      <SkText variant="mono" selectable>
         {parts.replay}
       </SkText>
     </View>
@@ -187,11 +216,16 @@ const styles = StyleSheet.create({
     padding: theme.space(3),
     gap: theme.space(1),
   },
+  checkWide: { flexDirection: 'row', columnGap: theme.space(4) },
+  column: { flex: 1, flexBasis: 0, gap: theme.space(1) },
+  stack: { gap: theme.space(1) },
+  heldRow: { flexDirection: 'row', flexWrap: 'wrap', gap: theme.space(2) },
+  heldGroup: { flexBasis: 420, flexGrow: 1 },
+  reason: { lineHeight: 20, fontFamily: theme.font.medium },
   checkHead: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', columnGap: theme.space(3) },
   kind: { fontFamily: theme.font.medium, fontSize: theme.size.small },
   detail: { lineHeight: 20 },
-  failure: { gap: 2, marginTop: theme.space(1) },
-  label: { marginTop: theme.space(1) },
+  failure: { gap: theme.space(1) },
   valueRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', columnGap: theme.space(2) },
   side: { minWidth: 72 },
 });

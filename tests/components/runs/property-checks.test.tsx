@@ -124,3 +124,44 @@ describe('PropertyChecks', () => {
     expect(screen.getByTestId('property-log-principal-sz × complex.js@2.4.3-conjugate-symmetry')).toBeTruthy();
   });
 });
+
+describe('PropertyChecks over several library versions', () => {
+  const onBoth = (target: string): RunPropertyRow[] =>
+    rows.filter((r) => r.suite !== 'acos-principal-sz').map((r) => ({ ...r, target }));
+  const twice = [...onBoth('complex.js@2.4.2'), ...onBoth('complex.js@2.4.3')];
+
+  it('shows a suite whose laws came out the same on both versions once, naming both, and still counts each pair', () => {
+    setScreenWidth(1440);
+    render(<PropertyChecks rows={twice} />);
+    expect(screen.getByTestId('property-summary').textContent).toBe(
+      '8 checks over 4 pairs: 2 failed, 0 not checked, 6 held.',
+    );
+    expect(screen.getAllByTestId(/^property-pair-/).map((el) => el.getAttribute('data-testid'))).toEqual([
+      'property-pair-log-principal-sz × complex.js@2.4.2 and complex.js@2.4.3',
+      'property-pair-sqrt-principal-sz × complex.js@2.4.2 and complex.js@2.4.3',
+    ]);
+    expect(
+      screen.getByText('log-principal-sz × complex.js@2.4.2 and complex.js@2.4.3 (the same on both)'),
+    ).toBeTruthy();
+    expect(
+      screen.getByRole('button', {
+        name: 'sqrt-principal-sz × complex.js@2.4.2 and complex.js@2.4.3: all 2 laws held on both; show them',
+      }).textContent,
+    ).toMatch(/✓ all 2 laws held on both/);
+  });
+
+  it('keeps the versions apart where one outcome differs, down to the counterexample', () => {
+    setScreenWidth(390);
+    const differ = twice.map((r) =>
+      r.target === 'complex.js@2.4.3' && r.outcome.kind === 'failed'
+        ? { ...r, outcome: { ...r.outcome, counterexample: [{ re: '-2', im: '-0' }] } }
+        : r,
+    );
+    render(<PropertyChecks rows={differ} />);
+    expect(screen.getAllByRole('button').map((b) => b.textContent)).toEqual([
+      'log-principal-sz × complex.js@2.4.2❌ 1 failed · ✓ 1 held',
+      'log-principal-sz × complex.js@2.4.3❌ 1 failed · ✓ 1 held',
+      'sqrt-principal-sz × complex.js@2.4.2 and complex.js@2.4.3✓ all 2 laws held on both',
+    ]);
+  });
+});
