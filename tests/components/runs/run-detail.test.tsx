@@ -68,4 +68,13 @@ describe('RunDetail', () => {
     await waitFor(() => expect(screen.getByTestId('live-workers')).toBeTruthy());
     expect(screen.queryByTestId('run-waiting-for-worker')).toBeNull();
   });
+
+  it("leads with the run's short id and leaves what a check is to the matrix heading, which says it once", async () => {
+    mockFetchRoutes(answer);
+    renderWithClient(<RunDetail id={RUNNING_RUN.id} />);
+    await waitFor(() => expect(screen.getByText(`Run ${RUNNING_RUN.id.slice(0, 8)} of this plan.`)).toBeTruthy());
+    expect(screen.getAllByText(/each suite against each library version/i).map((el) => el.textContent)).toEqual([
+      'Each suite against each library version',
+    ]);
+  });
 });
