@@ -42,9 +42,9 @@ describe("the run page through a maintainer's day", () => {
     await b.page.getByRole('button', { name: 'Run now: Roots on one release' }).click();
     await b.page.waitForURL(/\/runs\/[0-9a-f-]{36}$/);
     const runId = new URL(b.page.url()).pathname.split('/').pop()!;
-    await b.page
-      .getByText(`Run ${shortRunId(runId)} of this plan: 2 checks, each suite against each library version.`)
-      .waitFor();
+    // The lead names the run by the short id the failure table's Run filter takes; what a check is
+    // is the matrix heading's to say (it once said both, "2 checks, each suite against each library version").
+    await b.page.getByText(`Run ${shortRunId(runId)} of this plan.`, { exact: true }).waitFor();
 
     // The header's verdict and the matrix agree once the run ends, with no reload in between.
     await b.page
@@ -121,5 +121,42 @@ describe("the run page through a maintainer's day", () => {
     const hide = b.page.getByRole('button', { name: /^Hide the \d+ suites? that passed/ });
     await hide.waitFor();
     expect(await hide.getAttribute('aria-expanded')).toBe('true');
+  });
+
+  it("shows a wide screen every failed and stopped check and every failed law of the demo's largest run without a tap", async () => {
+    await signIn(b.page, kwame.email, kwame.password);
+    const api = pageApi(b.page);
+    const runs = await api<{ body: { runs: { id: string; shardsTotal: number }[] } }>(
+      '/runs?status=completed&limit=25',
+    );
+    const largest = [...runs.body.runs].sort((x, y) => y.shardsTotal - x.shardsTotal)[0]!;
+    const matrix = await api<{ body: { cells: { suite: string; target: string; outcome: string | null }[] } }>(
+      `/runs/${largest.id}/matrix`,
+    );
+    await b.page.setViewportSize({ width: 1440, height: 900 });
+    await b.page.goto(`${BASE_URL}/runs/${largest.id}`);
+    await b.page.locator('[data-testid^="cell-"]').first().waitFor();
+    await b.page.getByTestId('property-summary').waitFor();
+    const height = await screenHeight(b.page);
+    // 19,472 px on the same run before the wide matrix and property checks were made compact
+    // (every detail a line, every law's statement above its evidence, each library version apart).
+    console.log(`run page at 1440×900 on the largest demo run (${largest.shardsTotal} checks): ${height} px`);
+    expect(height).toBeLessThan(12_000);
+    const needing = matrix.body.cells.filter((c) => c.outcome === 'fail' || c.outcome === 'error');
+    expect(needing.length).toBeGreaterThan(0);
+    for (const c of needing) expect(await b.page.getByTestId(`cell-${c.suite}-${c.target}`).isVisible()).toBe(true);
+    // Only groups whose every law held fold on a wide screen: each failed law is open as the page
+    // loads, once per suite where its library versions failed it alike.
+    const laws = await api<{ body: { properties: { suite: string; outcome: { kind: string; law: string } }[] } }>(
+      `/runs/${largest.id}/properties`,
+    );
+    const failed = new Set(
+      laws.body.properties.filter((p) => p.outcome.kind === 'failed').map((p) => `${p.suite} ${p.outcome.law}`),
+    );
+    expect(failed.size).toBeGreaterThan(0);
+    const shown = b.page.getByText('❌ failed', { exact: true });
+    expect(await shown.count()).toBeGreaterThanOrEqual(failed.size);
+    expect(await shown.last().isVisible()).toBe(true);
+    expect(await b.page.getByRole('button', { name: /failed|not checked/ }).count()).toBe(0);
   });
 });
