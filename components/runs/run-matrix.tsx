@@ -81,6 +81,7 @@ export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCel
   // A definite width for the grid: in a horizontal scroller, flexible columns would otherwise size to their longest text.
   const gridWidth = Math.max(boxWidth, SUITE_COLUMN + targets.length * TARGET_COLUMN_MIN);
   const passedSuites = allSuites.filter((s) => !needsLook(s));
+  const passedFoldWords = `${plural(passedSuites.length, 'suite')} passed on every library version: ${showPassed ? 'hide' : 'show'} ${passedSuites.length === 1 ? 'it' : 'them'}`;
 
   return (
     <View style={styles.box} onLayout={(e) => setBoxWidth(e.nativeEvent.layout.width)}>
@@ -150,11 +151,13 @@ export function RunMatrix({ runId, cells }: { runId: string; cells: RunMatrixCel
             <DisclosureToggle
               open={showPassed}
               onToggle={() => setShowPassed((v) => !v)}
-              accessibilityLabel={`${showPassed ? 'Hide' : 'Show'} the ${plural(passedSuites.length, 'suite')} that passed on every library version`}
+              // The name holds the visible words (glyph aside), and the chevron says open or closed:
+              // ↑ and ↓ are counts that went up or down (constants/glyphs.ts), not show and hide.
+              accessibilityLabel={passedFoldWords}
               style={styles.passedToggle}
             >
               <SkText variant="label" tone="ink">
-                {`${OUTCOME_GLYPH.pass} ${plural(passedSuites.length, 'suite')} passed on every library version ${showPassed ? '↑ hide' : '↓ show'}`}
+                {`${OUTCOME_GLYPH.pass} ${passedFoldWords}`}
               </SkText>
             </DisclosureToggle>
           ) : null}

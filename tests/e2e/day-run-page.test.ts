@@ -114,11 +114,11 @@ describe("the run page through a maintainer's day", () => {
       .first()
       .boundingBox();
     expect(badge!.y).toBeLessThan(844);
-    const fold = b.page.getByRole('button', { name: /^Show the \d+ suites? that passed on every library version$/ });
+    const fold = b.page.getByRole('button', { name: /^\d+ suites? passed on every library version: show (it|them)$/ });
     expect(await fold.count()).toBe(1);
     await saveScreenshots(b.page, 'day-run-page-largest-run', () => firstCell.waitFor());
     await fold.click();
-    const hide = b.page.getByRole('button', { name: /^Hide the \d+ suites? that passed/ });
+    const hide = b.page.getByRole('button', { name: /^\d+ suites? passed on every library version: hide (it|them)$/ });
     await hide.waitFor();
     expect(await hide.getAttribute('aria-expanded')).toBe('true');
   });
