@@ -2,6 +2,7 @@ import { randomBytes } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import type { AccountLinkKind } from '../../shared/account-link-kinds';
 import type { AccountLinkView } from '../../shared/account-link-view';
+import type { CancelledInvitation } from '../../shared/cancelled-invitation';
 import type { InvitationView } from '../../shared/invitation-view';
 import type { Role } from '../../shared/roles';
 import { LINK_TOKEN_PREFIX } from '../../shared/schemas/link-token-schema';
@@ -72,18 +73,52 @@ export class AccountLinks {
     });
   }
 
-  /** Invitations that can still be used (not used, replaced or expired), newest first. */
+  /**
+   * Withdraws the unused invitation `id`: its link stops working at once (the row is locked, so a
+   * use at the same moment either makes the account first, and this answers 409, or finds the
+   * link withdrawn). Withdrawing it again answers the first withdrawal's date, so two admins who
+   * both press it both see it withdrawn. A used, replaced or expired invitation is 409 with the
+   * reason: its link already does not work, or made an account that only deactivation stops.
+   */
+  async cancelInvitation(id: string): Promise<CancelledInvitation> {
+    return this.dataSource.transaction(async (tx) => {
+      const links = tx.getRepository(AccountLink);
+      const link = await links.findOne({ where: { id, kind: 'invitation' }, lock: { mode: 'pessimistic_write' } });
+      if (!link) throw new HttpError(404, { kind: 'not-found', message: 'No invitation with that id.' });
+      const conflict = (message: string) => new HttpError(409, { kind: 'conflict', message });
+      if (link.usedAt)
+        throw conflict(
+          `The invitation to ${link.email} was used on ${day(link.usedAt)} and made an account; deactivate that account instead.`,
+        );
+      if (!link.cancelledAt) {
+        if (link.replacedAt)
+          throw conflict(
+            `The invitation to ${link.email} was replaced by a newer one on ${day(link.replacedAt)}; cancel the newer one instead.`,
+          );
+        if (link.expiresAt <= new Date())
+          throw conflict(
+            `The invitation to ${link.email} expired on ${day(link.expiresAt)}; its link no longer works, so there is nothing to cancel.`,
+          );
+        link.cancelledAt = new Date();
+        await links.update(link.id, { cancelledAt: link.cancelledAt });
+      }
+      return { id: link.id, email: link.email, cancelledAt: link.cancelledAt.toISOString() };
+    });
+  }
+
+  /** Invitations that can still be used (not used, replaced, withdrawn or expired), newest first. */
   async openInvitations(): Promise<InvitationView[]> {
     const open = await this.dataSource
       .getRepository(AccountLink)
       .createQueryBuilder('link')
       .innerJoinAndSelect('link.createdBy', 'admin')
       .where(
-        `link.kind = 'invitation' AND link.used_at IS NULL AND link.replaced_at IS NULL AND link.expires_at > now()`,
+        `link.kind = 'invitation' AND link.used_at IS NULL AND link.replaced_at IS NULL AND link.cancelled_at IS NULL AND link.expires_at > now()`,
       )
       .orderBy('link.created_at', 'DESC')
       .getMany();
     return open.map((link) => ({
+      id: link.id,
       email: link.email,
       role: link.role,
       sentBy: nameOf(link.createdBy),
@@ -163,7 +198,8 @@ export class AccountLinks {
       .createQueryBuilder()
       .update()
       .set({ replacedAt: () => 'now()' })
-      .where('kind = :kind AND email = :email AND used_at IS NULL AND replaced_at IS NULL', {
+      // A withdrawn invitation stays withdrawn: its join page keeps saying so after a new one is sent.
+      .where('kind = :kind AND email = :email AND used_at IS NULL AND replaced_at IS NULL AND cancelled_at IS NULL', {
         kind: what.kind,
         email: what.email,
       })
@@ -178,6 +214,7 @@ export class AccountLinks {
       expiresAt,
       usedAt: null,
       replacedAt: null,
+      cancelledAt: null,
     });
     const link = `${this.appUrl}/join?token=${token}`;
     await enqueueMail(
@@ -219,6 +256,12 @@ function refusalFor(link: AccountLink | null, now: Date): UnusableLink | null {
     return {
       unknown: false,
       unusable: `This account is deactivated, so the link cannot be used: ask ${nameOf(link.createdBy)} to reactivate it.`,
+    };
+  // Said as plainly as "expired": nothing about who withdrew it or why reaches the link's holder.
+  if (link.cancelledAt)
+    return {
+      unknown: false,
+      unusable: `This ${what} was withdrawn on ${day(link.cancelledAt)}: ${ask}.`,
     };
   if (link.replacedAt)
     return {

@@ -8,7 +8,7 @@ import { User } from './user';
  * password reset (an account). Only the token's SHA-256 is kept: the token is 32 random bytes, so
  * a fast hash is as safe as a slow one, and a copy of this table opens no account. A link works
  * once, until `expires_at`, and not after a newer link of its kind for the same address
- * (`replaced_at`).
+ * (`replaced_at`) or, for an invitation, after an admin withdrew it (`cancelled_at`).
  */
 @Entity({ name: 'account_links' })
 @Index('account_links_hash_unique', ['tokenHash'], { unique: true })
@@ -16,6 +16,7 @@ import { User } from './user';
 @Check('account_links_kind_known', `kind IN (${ACCOUNT_LINK_KINDS.map((k) => `'${k}'`).join(', ')})`)
 @Check('account_links_email_lower', 'email = lower(email)')
 @Check('account_links_role_known', "role IN ('admin', 'maintainer', 'reviewer', 'contributor')")
+@Check('account_links_cancel_invitation', "cancelled_at IS NULL OR kind = 'invitation'")
 export class AccountLink {
   @PrimaryGeneratedColumn('uuid')
   id!: string;
@@ -55,4 +56,8 @@ export class AccountLink {
   /** When a newer link of the same kind to the same address (or a deactivation) made this one void. */
   @Column({ type: 'timestamptz', name: 'replaced_at', nullable: true })
   replacedAt!: Date | null;
+
+  /** When an admin withdrew this invitation before it was used (invitations only). */
+  @Column({ type: 'timestamptz', name: 'cancelled_at', nullable: true })
+  cancelledAt!: Date | null;
 }

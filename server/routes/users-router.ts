@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
+import { cancelledInvitationSchema } from '../../shared/cancelled-invitation-schema';
 import { invitationViewSchema } from '../../shared/invitation-view-schema';
 import { publicUserSchema } from '../../shared/public-user-schema';
 import { ROLES } from '../../shared/roles';
@@ -16,7 +17,7 @@ import { toPublicUser } from '../views/to-public-user';
 
 const userAnswer = z.object({ user: publicUserSchema });
 
-/** The admin's side of accounts: the list, roles, invitations, deactivation and password resets. */
+/** The admin's side of accounts: the list, roles, invitations (sent and withdrawn), deactivation and password resets. */
 export function usersRouter(dataSource: DataSource, admin: UserAdmin, links: AccountLinks): Router {
   const router = Router();
   const users = dataSource.getRepository(User);
@@ -72,6 +73,28 @@ export function usersRouter(dataSource: DataSource, admin: UserAdmin, links: Acc
     },
     async (req, res, { body }) => {
       res.status(201).json({ invitation: await links.invite(req.user!, body.email, body.role) });
+    },
+  );
+
+  declareRoute(
+    router,
+    'post',
+    '/invitations/:id/cancel',
+    {
+      summary: 'Withdraw an invitation before it is used: its link stops working at once',
+      access: ['admin'],
+      params: idParams,
+      responses: {
+        200: {
+          description: 'The invitation is withdrawn (again, if it already was: the first date is kept).',
+          schema: z.object({ invitation: cancelledInvitationSchema }),
+        },
+        404: 'No invitation with that id.',
+        409: 'The invitation was used (its account is deactivated instead), replaced by a newer one, or has expired.',
+      },
+    },
+    async (_req, res, { params: { id } }) => {
+      res.json({ invitation: await links.cancelInvitation(id) });
     },
   );
 

@@ -218,11 +218,147 @@ describe('one-time links', () => {
     // Used (ines, twice, race, fields), expired (late), made an account meanwhile (meantime: still unused, so listed).
     expect(emails).toEqual(['meantime@example.test', 'hash-only@example.test']);
     expect(res.body.invitations[1]).toEqual({
+      id: expect.any(String),
       email: 'hash-only@example.test',
       role: 'reviewer',
       sentBy: 'Odile Marchetti (odile@sheetkeeper.test)',
       sentAt: expect.any(String),
       expiresAt: expect.any(String),
+    });
+  });
+
+  describe('withdrawing an invitation', () => {
+    const DAY = String.raw`\d{4}-\d\d-\d\d`;
+    /** The id the Users screen holds for the open invitation to `email`. */
+    const openIdOf = async (email: string): Promise<string> => {
+      const res = await admin.get('/api/users/invitations');
+      const found = res.body.invitations.find((i: { email: string }) => i.email === email);
+      if (!found) throw new Error(`no open invitation to ${email}`);
+      return found.id;
+    };
+    const cancel = (id: string, caller: request.Agent | ReturnType<typeof request> = admin) =>
+      caller.post(`/api/users/invitations/${id}/cancel`);
+    const lookUp = (token: string) => request(t.app).post('/api/account-links/lookup').send({ token });
+    // The limiter test above locked this client out of the link routes for 15 minutes.
+    beforeAll(() => sql(`DELETE FROM sign_in_limits`));
+
+    it('stops the link at once: the join page says it was withdrawn and whom to ask, and no account can be made', async () => {
+      const token = await invite('withdrawn@example.test');
+      expect((await lookUp(token)).status).toBe(200);
+      const id = await openIdOf('withdrawn@example.test');
+      const res = await cancel(id);
+      expect(res.status).toBe(200);
+      expect(res.body.invitation).toEqual({ id, email: 'withdrawn@example.test', cancelledAt: expect.any(String) });
+
+      const looked = await lookUp(token);
+      expect(looked.status).toBe(410);
+      expect(looked.body).toEqual({
+        kind: 'link-unusable',
+        message: expect.stringMatching(
+          new RegExp(
+            `^This invitation was withdrawn on ${DAY}: ask Odile Marchetti \\(odile@sheetkeeper\\.test\\) for a new one\\.$`,
+          ),
+        ),
+      });
+      const used = await use(token);
+      expect(used.status).toBe(410);
+      expect(used.body.message).toBe(looked.body.message);
+      expect(await sql(`SELECT 1 FROM users WHERE email = 'withdrawn@example.test'`)).toEqual([]);
+      const open = (await admin.get('/api/users/invitations')).body.invitations.map((i: { email: string }) => i.email);
+      expect(open).not.toContain('withdrawn@example.test');
+    });
+
+    it('answers a second withdrawal with the date of the first', async () => {
+      await invite('withdrawn-twice@example.test');
+      const id = await openIdOf('withdrawn-twice@example.test');
+      const first = await cancel(id);
+      const second = await cancel(id);
+      expect(second.status).toBe(200);
+      expect(second.body.invitation.cancelledAt).toBe(first.body.invitation.cancelledAt);
+    });
+
+    it('refuses to withdraw a used invitation (409) and leaves its account signed up', async () => {
+      const token = await invite('joined-first@example.test');
+      const id = await openIdOf('joined-first@example.test');
+      expect((await use(token)).status).toBe(200);
+      const res = await cancel(id);
+      expect(res.status).toBe(409);
+      expect(res.body.message).toMatch(
+        new RegExp(`^The invitation to joined-first@example\\.test was used on ${DAY} and made an account; deactivate`),
+      );
+      expect(await sql(`SELECT deactivated_at FROM users WHERE email = 'joined-first@example.test'`)).toEqual([
+        { deactivated_at: null },
+      ]);
+      expect(await sql(`SELECT cancelled_at FROM account_links WHERE id = $1`, [id])).toEqual([{ cancelled_at: null }]);
+    });
+
+    it('refuses a replaced or an expired invitation (409) with the reason', async () => {
+      await invite('replaced-then@example.test');
+      const older = await openIdOf('replaced-then@example.test');
+      await invite('replaced-then@example.test');
+      const replaced = await cancel(older);
+      expect(replaced.status).toBe(409);
+      expect(replaced.body.message).toMatch(/replaced by a newer one on .*; cancel the newer one instead\.$/);
+
+      await invite('expired-then@example.test');
+      const id = await openIdOf('expired-then@example.test');
+      await sql(`UPDATE account_links SET expires_at = now() - interval '1 second' WHERE id = $1`, [id]);
+      const expired = await cancel(id);
+      expect(expired.status).toBe(409);
+      expect(expired.body.message).toMatch(/expired on .*; its link no longer works, so there is nothing to cancel\.$/);
+    });
+
+    it("answers 404 for an id that is no invitation: unknown, or a password reset's", async () => {
+      expect((await cancel('00000000-0000-4000-8000-000000000000')).status).toBe(404);
+      const meiId = await idOf('mei@sheetkeeper.test');
+      expect((await admin.post(`/api/users/${meiId}/password-reset`)).status).toBe(201);
+      const [reset] = await sql<{ id: string }>(
+        `SELECT id FROM account_links WHERE kind = 'password-reset' AND user_id = $1 ORDER BY created_at DESC LIMIT 1`,
+        [meiId],
+      );
+      const res = await cancel(reset!.id);
+      expect(res.status).toBe(404);
+      expect(res.body).toEqual({ kind: 'not-found', message: 'No invitation with that id.' });
+      const malformed = await cancel('not-a-uuid');
+      expect(malformed.status).toBe(400);
+      expect(malformed.body.issues).toEqual([{ field: 'params.id', rule: 'must be a UUID' }]);
+    });
+
+    it('lets only an admin withdraw (403 for the other roles, 401 signed out), and the link still works after a refusal', async () => {
+      const token = await invite('kept@example.test');
+      const id = await openIdOf('kept@example.test');
+      for (const role of ['maintainer', 'reviewer', 'contributor'] as const) {
+        const res = await cancel(id, await signInAs(t.app, role));
+        expect({ role, status: res.status }).toEqual({ role, status: 403 });
+      }
+      expect((await cancel(id, request(t.app))).status).toBe(401);
+      expect(await sql(`SELECT cancelled_at FROM account_links WHERE id = $1`, [id])).toEqual([{ cancelled_at: null }]);
+      expect((await lookUp(token)).status).toBe(200);
+    });
+
+    it('keeps a withdrawn link withdrawn when a new invitation goes to the same address, which works', async () => {
+      const withdrawn = await invite('second-chance@example.test', 'maintainer');
+      await cancel(await openIdOf('second-chance@example.test'));
+      const fresh = await invite('second-chance@example.test', 'contributor');
+      expect((await lookUp(withdrawn)).body.message).toMatch(/^This invitation was withdrawn on /);
+      const joined = await use(fresh);
+      expect(joined.status).toBe(200);
+      expect(joined.body.user.role).toBe('contributor');
+    });
+
+    it('either makes the account or withdraws the link when both happen at the same moment, never both', async () => {
+      for (let i = 0; i < 5; i += 1) {
+        const email = `race-withdraw-${i}@example.test`;
+        const token = await invite(email);
+        const id = await openIdOf(email);
+        const [joined, withdrawn] = await Promise.all([use(token), cancel(id)]);
+        const accounts = await sql(`SELECT 1 FROM users WHERE email = $1`, [email]);
+        const outcome = { joined: joined.status, withdrawn: withdrawn.status, accounts: accounts.length };
+        expect([
+          { joined: 200, withdrawn: 409, accounts: 1 },
+          { joined: 410, withdrawn: 200, accounts: 0 },
+        ]).toContainEqual(outcome);
+      }
     });
   });
 });

@@ -45,6 +45,7 @@ const fixtures = {
   scheduleId: '',
   tokenId: '',
   userId: '',
+  invitationId: '',
   target: '',
 };
 /** Numbers plan names, which are unique: a repeated name is a 409 that logs the failed query. */
@@ -70,6 +71,7 @@ const ROUTES: Record<Route, FuzzRoute> = {
     roles: ['admin'],
     body: () => ({ email: `fuzz-${(serial += 1)}@example.test`, role: 'reviewer' }),
   },
+  'POST /api/users/invitations/:id/cancel': { roles: ['admin'], params: { id: () => fixtures.invitationId } },
   'POST /api/users/:id/deactivate': { roles: ['admin'], params: { id: () => fixtures.userId } },
   'POST /api/users/:id/reactivate': { roles: ['admin'], params: { id: () => fixtures.userId } },
   'POST /api/users/:id/password-reset': { roles: ['admin'], params: { id: () => fixtures.userId } },
@@ -437,6 +439,10 @@ beforeAll(async () => {
     await admin.post('/api/schedules').send({ planId: fixtures.planId, cron: '0 3 * * *', timeZone: 'UTC' })
   ).body.schedule.id;
   fixtures.tokenId = (await admin.post('/api/tokens').send({ name: 'fuzz fixture' })).body.token.id;
+  await admin.post('/api/users/invitations').send({ email: 'fuzz-withdrawn@example.test', role: 'reviewer' });
+  fixtures.invitationId = (
+    await db.query(`SELECT id FROM account_links WHERE email = 'fuzz-withdrawn@example.test'`)
+  )[0].id;
   const tables: { name: string }[] = await db.query(
     `SELECT tablename AS name FROM pg_tables WHERE schemaname = 'public' ORDER BY tablename`,
   );

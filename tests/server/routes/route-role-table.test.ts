@@ -98,6 +98,15 @@ async function freshInvitationToken(): Promise<string> {
   return /skl_[A-Za-z0-9_-]{43}/.exec(mail.text_body)![0];
 }
 
+/** The id of a fresh open invitation, as the Users screen lists it. */
+async function freshInvitationId(): Promise<string> {
+  serial += 1;
+  const email = `table-withdrawn-${serial}@example.test`;
+  await (await agentFor('admin')).post('/api/users/invitations').send({ email, role: 'reviewer' });
+  const [link] = await t.db.dataSource.query(`SELECT id FROM account_links WHERE email = $1`, [email]);
+  return link.id;
+}
+
 /** A fresh suite by Mei (a contributor), optionally submitted or approved, so each case acts on its own. */
 async function freshSuite(state: 'draft' | 'submitted' | 'approved'): Promise<string> {
   serial += 1;
@@ -159,6 +168,11 @@ const ROUTES: RouteCase[] = [
     name: 'POST /api/users/invitations',
     call: (a, who) => a.post('/api/users/invitations').send({ email: `table-${who}@example.test`, role: 'reviewer' }),
     expect: { 'signed-out': 401, admin: 201, maintainer: 403, reviewer: 403, contributor: 403 },
+  },
+  {
+    name: 'POST /api/users/invitations/:id/cancel',
+    call: async (a) => a.post(`/api/users/invitations/${await freshInvitationId()}/cancel`),
+    expect: { 'signed-out': 401, admin: 200, maintainer: 403, reviewer: 403, contributor: 403 },
   },
   {
     name: 'POST /api/users/:id/deactivate',
