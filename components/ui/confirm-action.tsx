@@ -13,12 +13,22 @@ interface Props {
   question: string;
   /** The button that does it, e.g. "Yes, revoke". */
   confirmLabel: string;
+  /** The button that does nothing; "Cancel" unless the action is itself a cancelling, e.g. "Keep the invitation". */
+  keepLabel?: string;
   onConfirm: () => void;
   busy?: boolean;
 }
 
 /** A destructive action in two steps on the spot, so one stray tap never deletes or revokes. */
-export function ConfirmAction({ label, accessibilityLabel, question, confirmLabel, onConfirm, busy = false }: Props) {
+export function ConfirmAction({
+  label,
+  accessibilityLabel,
+  question,
+  confirmLabel,
+  keepLabel = 'Cancel',
+  onConfirm,
+  busy = false,
+}: Props) {
   const [asking, setAsking] = useState(false);
   if (!asking)
     return (
@@ -43,7 +53,7 @@ export function ConfirmAction({ label, accessibilityLabel, question, confirmLabe
             onConfirm();
           }}
         />
-        <ActionButton label="Cancel" tone="quiet" onPress={() => setAsking(false)} />
+        <ActionButton label={keepLabel} tone="quiet" onPress={() => setAsking(false)} />
       </View>
     </View>
   );

@@ -125,6 +125,7 @@ describe('UsersList', () => {
       'POST /api/users/invitations': (body) => {
         const invitation = { ...(body as object), expiresAt: '2026-12-12T08:00:00.000Z' };
         open.push({
+          id: '00000000-0000-4000-8000-0000000000a0',
           ...invitation,
           sentBy: 'Odile Marchetti (odile@sheetkeeper.test)',
           sentAt: '2026-12-05T08:00:00.000Z',
@@ -156,5 +157,87 @@ describe('UsersList', () => {
     // The list of open invitations is read again and shows the new one.
     await waitFor(() => expect(screen.getByTestId('open-invitations').textContent).toContain('ines@example.test'));
     expect(screen.getByTestId('open-invitations').textContent).toMatch(/as a reviewer · sent .* by Odile Marchetti/);
+  });
+
+  describe('cancelling an invitation', () => {
+    const waiting = (email: string, id: string) => ({
+      id,
+      email,
+      role: 'reviewer',
+      sentBy: 'Odile Marchetti (odile@sheetkeeper.test)',
+      sentAt: '2026-12-05T08:00:00.000Z',
+      expiresAt: '2026-12-12T08:00:00.000Z',
+    });
+    const wrong = waiting('wrong@example.test', '00000000-0000-4000-8000-0000000000a1');
+    const right = waiting('right@example.test', '00000000-0000-4000-8000-0000000000a2');
+
+    it('cancels only after a question naming the address; the row leaves the list and a line says the link no longer works', async () => {
+      let open = [wrong, right];
+      const calls = fakeApiRoutes({
+        'GET /api/users': { status: 200, body: { users: [odile] } },
+        'GET /api/users/invitations': () => ({ status: 200, body: { invitations: open } }),
+        [`POST /api/users/invitations/${wrong.id}/cancel`]: () => {
+          open = [right];
+          return {
+            status: 200,
+            body: { invitation: { id: wrong.id, email: wrong.email, cancelledAt: '2026-12-05T09:00:00.000Z' } },
+          };
+        },
+      });
+      renderWithClient(<UsersList me={odile} />);
+      await waitFor(() => screen.getByTestId('invitation-wrong@example.test'));
+      const item = screen.getByTestId('invitation-wrong@example.test');
+      await click('Cancel invitation to wrong@example.test', item);
+      expect(
+        within(item).getByText(
+          'Cancel the invitation to wrong@example.test? Its link stops working at once; you can invite the address again later.',
+        ),
+      ).toBeTruthy();
+      // "Cancel" would be ambiguous beside "Cancel invitation": the way back says what it keeps.
+      await click('Keep the invitation', item);
+      expect(calls.filter((c) => c.method === 'POST')).toEqual([]);
+      expect(within(item).getByRole('button', { name: 'Cancel invitation to wrong@example.test' })).toBeTruthy();
+
+      await click('Cancel invitation to wrong@example.test', item);
+      await click('Yes, cancel it', item);
+      await waitFor(() => expect(screen.queryByTestId('invitation-wrong@example.test')).toBeNull());
+      expect(screen.getByTestId('invitation-cancelled').textContent).toBe(
+        'Invitation to wrong@example.test cancelled: its link no longer works.',
+      );
+      expect(screen.getByTestId('invitation-right@example.test')).toBeTruthy();
+      expect(calls.filter((c) => c.method === 'POST').map((c) => c.path)).toEqual([
+        `/api/users/invitations/${wrong.id}/cancel`,
+      ]);
+    });
+
+    it("says the server's refusal when the invitation was used meanwhile, and lists what is really open", async () => {
+      let open = [wrong];
+      fakeApiRoutes({
+        'GET /api/users': { status: 200, body: { users: [odile] } },
+        'GET /api/users/invitations': () => ({ status: 200, body: { invitations: open } }),
+        [`POST /api/users/invitations/${wrong.id}/cancel`]: () => {
+          open = [];
+          return {
+            status: 409,
+            body: {
+              kind: 'conflict',
+              message:
+                'The invitation to wrong@example.test was used on 2026-12-05 and made an account; deactivate that account instead.',
+            },
+          };
+        },
+      });
+      renderWithClient(<UsersList me={odile} />);
+      await waitFor(() => screen.getByTestId('invitation-wrong@example.test'));
+      await click('Cancel invitation to wrong@example.test');
+      await click('Yes, cancel it');
+      await waitFor(() =>
+        expect(screen.getByRole('alert').textContent).toBe(
+          '× The invitation to wrong@example.test was used on 2026-12-05 and made an account; deactivate that account instead.',
+        ),
+      );
+      await waitFor(() => screen.getByText('No invitation is waiting to be used.'));
+      expect(screen.queryByTestId('invitation-cancelled')).toBeNull();
+    });
   });
 });
