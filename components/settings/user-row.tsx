@@ -55,6 +55,8 @@ export function UserRow({ user, isMe, wide }: { user: PublicUser; isMe: boolean;
         <ChipGroup
           label="Role"
           groupLabel={`Role of ${name}`}
+          // The ROLE column heading names the chips of every row on a wide screen; a phone's card has no heading.
+          labelHidden={wide}
           options={ROLE_OPTIONS}
           value={user.role}
           onChange={(role) => {

@@ -14,13 +14,25 @@ interface Props<V extends string | undefined> {
   onChange: (value: V) => void;
   /** The radio group's accessible name, when it should differ from the visible label. */
   groupLabel?: string;
+  /**
+   * Draws no label above the chips, where a column heading already names them on every row (the
+   * users table on a wide screen). The accessible names keep it: the group's and each chip's.
+   */
+  labelHidden?: boolean;
 }
 
 /**
  * One choice among a few, as large chips: a radio group (one tab stop, arrow keys move and choose,
  * Space chooses: `useRadioKeys`) whose chosen chip carries a filled ring as well as the accent.
  */
-export function ChipGroup<V extends string | undefined>({ label, options, value, onChange, groupLabel }: Props<V>) {
+export function ChipGroup<V extends string | undefined>({
+  label,
+  options,
+  value,
+  onChange,
+  groupLabel,
+  labelHidden = false,
+}: Props<V>) {
   const names = options.map((o) => `${label}: ${o.text}`);
   const radio = useRadioKeys(
     options.length,
@@ -33,9 +45,11 @@ export function ChipGroup<V extends string | undefined>({ label, options, value,
   );
   return (
     <View style={styles.group}>
-      <SkText variant="smallLabel" style={styles.label}>
-        {label}
-      </SkText>
+      {labelHidden ? null : (
+        <SkText variant="smallLabel" style={styles.label}>
+          {label}
+        </SkText>
+      )}
       <View style={styles.chips} accessibilityRole="radiogroup" accessibilityLabel={groupLabel ?? label}>
         {options.map((o, index) => {
           const on = o.value === value;

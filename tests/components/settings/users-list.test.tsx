@@ -3,6 +3,7 @@ import { UsersList } from '../../../components/settings/users-list';
 import type { PublicUser } from '../../../shared/public-user';
 import { fakeApiRoutes } from '../../setup/fake-api-routes';
 import { renderWithClient } from '../../setup/render-with-client';
+import { setScreenWidth } from '../../setup/set-screen-width';
 
 const user = (over: Partial<PublicUser>): PublicUser => ({
   id: '00000000-0000-4000-8000-000000000001',
@@ -157,6 +158,34 @@ describe('UsersList', () => {
     // The list of open invitations is read again and shows the new one.
     await waitFor(() => expect(screen.getByTestId('open-invitations').textContent).toContain('ines@example.test'));
     expect(screen.getByTestId('open-invitations').textContent).toMatch(/as a reviewer · sent .* by Odile Marchetti/);
+  });
+
+  describe('the role column', () => {
+    afterEach(() => setScreenWidth(0));
+    /** The visible words "Role" on the screen, outside the invitation form (which has its own field label). */
+    const roleLabels = () => screen.getAllByText('Role').filter((e) => !screen.getByTestId('invite-form').contains(e));
+
+    it('is named once, by its column heading, on a wide screen; each role group still says whose role it is', async () => {
+      setScreenWidth(1440);
+      fakeApiRoutes({ 'GET /api/users': { status: 200, body: { users: [odile, ravi] } } });
+      renderWithClient(<UsersList me={odile} />);
+      await waitFor(() => screen.getByText('Ravi Dutta'));
+      expect(roleLabels()).toHaveLength(1);
+      expect(within(row('ravi@sheetkeeper.test')).queryByText('Role')).toBeNull();
+      expect(screen.getByRole('radiogroup', { name: 'Role of Ravi Dutta' })).toBeTruthy();
+      expect(within(row('ravi@sheetkeeper.test')).getByRole('radio', { name: 'Role: contributor' })).toBeTruthy();
+    });
+
+    it('keeps "Role" on each card of a phone, where no column heading names the chips', async () => {
+      setScreenWidth(390);
+      fakeApiRoutes({ 'GET /api/users': { status: 200, body: { users: [odile, ravi] } } });
+      renderWithClient(<UsersList me={odile} />);
+      await waitFor(() => screen.getByText('Ravi Dutta'));
+      expect(within(row('ravi@sheetkeeper.test')).getByText('Role')).toBeTruthy();
+      expect(within(row('odile@sheetkeeper.test')).getByText('Role')).toBeTruthy();
+      expect(roleLabels()).toHaveLength(2);
+      expect(screen.getByRole('radiogroup', { name: 'Role of Odile Marchetti' })).toBeTruthy();
+    });
   });
 
   describe('cancelling an invitation', () => {
