@@ -45,15 +45,17 @@ export function OpenInvitations() {
                   {formatDate(i.expiresAt)}
                 </SkText>
               </View>
-              <ConfirmAction
-                label="Cancel invitation"
-                accessibilityLabel={`Cancel invitation to ${i.email}`}
-                question={`Cancel the invitation to ${i.email}? Its link stops working at once; you can invite the address again later.`}
-                confirmLabel="Yes, cancel it"
-                keepLabel="Keep the invitation"
-                busy={cancel.isPending && cancel.variables === i.id}
-                onConfirm={() => cancel.mutate(i.id)}
-              />
+              <View style={styles.action}>
+                <ConfirmAction
+                  label="Cancel invitation"
+                  accessibilityLabel={`Cancel invitation to ${i.email}`}
+                  question={`Cancel the invitation to ${i.email}? Its link stops working at once; you can invite the address again later.`}
+                  confirmLabel="Yes, cancel it"
+                  keepLabel="Keep the invitation"
+                  busy={cancel.isPending && cancel.variables === i.id}
+                  onConfirm={() => cancel.mutate(i.id)}
+                />
+              </View>
             </View>
           ))}
         </View>
@@ -76,4 +78,6 @@ const styles = StyleSheet.create({
   },
   // Beside the button on a wide screen; above it on a phone, where the two do not fit on a line.
   words: { gap: 2, flexGrow: 1, flexShrink: 1, flexBasis: 280 },
+  // Never wider than the list: the question's words wrap instead of running off a phone's edge.
+  action: { maxWidth: '100%' },
 });
