@@ -1,11 +1,14 @@
+import { useMutationState } from '@tanstack/react-query';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { firstRulePerField } from '../../client/first-rule-per-field';
 import { formatDate } from '../../client/format-date';
 import { refusalMessage } from '../../client/refusal-message';
 import { serverFieldErrors } from '../../client/server-field-errors';
+import { CANCEL_INVITATION_KEY } from '../../client/use-cancel-invitation';
 import { useInvite } from '../../client/use-invite';
 import { theme } from '../../constants/theme';
+import type { CancelledInvitation } from '../../shared/cancelled-invitation';
 import { roleWithArticle } from '../../shared/role-with-article';
 import type { Role } from '../../shared/roles';
 import { inviteBody } from '../../shared/schemas/invite-body';
@@ -32,7 +35,17 @@ export function InviteForm() {
     invite.error && !Object.keys(server).length
       ? refusalMessage(invite.error, 'The server could not be reached; no invitation was sent.')
       : null;
+  // Addresses whose invitation was withdrawn, and when: "its link works once, until …" would no
+  // longer be true of an invitation withdrawn after it was sent (the list below says it was).
+  const withdrawals = useMutationState({
+    filters: { mutationKey: CANCEL_INVITATION_KEY, status: 'success' },
+    select: (m) => ({
+      email: (m.state.data as { invitation: CancelledInvitation } | undefined)?.invitation.email,
+      at: m.state.submittedAt,
+    }),
+  });
   const sent = invite.data?.invitation;
+  const withdrawnSince = sent && withdrawals.some((w) => w.email === sent.email && w.at >= invite.submittedAt);
 
   const submit = () => {
     setSubmitted(true);
@@ -69,7 +82,7 @@ export function InviteForm() {
         onChange={setRole}
       />
       {refused ? <FailureAlert message={refused} glyph="×" /> : null}
-      {sent ? (
+      {sent && !withdrawnSince ? (
         <SkText variant="label" tone="accent" accessibilityLiveRegion="polite" testID="invite-sent">
           Invitation mailed to {sent.email} as {roleWithArticle(sent.role)}. Its link works once, until{' '}
           {formatDate(sent.expiresAt)}; the mail is in the Outbox.

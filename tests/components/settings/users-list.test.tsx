@@ -239,6 +239,48 @@ describe('UsersList', () => {
       ]);
     });
 
+    it('stops saying "its link works … until" under the form once the invitation just sent is cancelled', async () => {
+      const sent = waiting('oops@example.test', '00000000-0000-4000-8000-0000000000a3');
+      let open: unknown[] = [];
+      fakeApiRoutes({
+        'GET /api/users': { status: 200, body: { users: [odile] } },
+        'GET /api/users/invitations': () => ({ status: 200, body: { invitations: open } }),
+        'POST /api/users/invitations': () => {
+          open = [sent];
+          return {
+            status: 201,
+            body: { invitation: { email: sent.email, role: 'reviewer', expiresAt: sent.expiresAt } },
+          };
+        },
+        [`POST /api/users/invitations/${sent.id}/cancel`]: () => {
+          open = [];
+          return {
+            status: 200,
+            body: { invitation: { id: sent.id, email: sent.email, cancelledAt: '2026-12-05T09:00:00.000Z' } },
+          };
+        },
+      });
+      renderWithClient(<UsersList me={odile} />);
+      await waitFor(() => screen.getByText('No invitation is waiting to be used.'));
+      await act(() =>
+        fireEvent.change(screen.getByLabelText('E-mail of the person to invite'), { target: { value: sent.email } }),
+      );
+      await click('Mail the invitation');
+      await waitFor(() => screen.getByTestId('invitation-oops@example.test'));
+      expect(screen.getByTestId('invite-sent').textContent).toMatch(/^Invitation mailed to oops@example\.test/);
+      await click('Cancel invitation to oops@example.test');
+      await click('Yes, cancel it');
+      await waitFor(() => screen.getByTestId('invitation-cancelled'));
+      expect(screen.queryByTestId('invite-sent')).toBeNull();
+
+      // A new invitation to the same address is said again.
+      await act(() =>
+        fireEvent.change(screen.getByLabelText('E-mail of the person to invite'), { target: { value: sent.email } }),
+      );
+      await click('Mail the invitation');
+      await waitFor(() => expect(screen.getByTestId('invite-sent').textContent).toMatch(/^Invitation mailed to oops/));
+    });
+
     it("says the server's refusal when the invitation was used meanwhile, and lists what is really open", async () => {
       let open = [wrong];
       fakeApiRoutes({
