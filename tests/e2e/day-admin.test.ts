@@ -9,7 +9,8 @@ import { signOut } from './support/sign-out';
 
 /**
  * Issue 15, point 10: the admin's day. Odile invites someone, the mail reaches the local mail
- * store and the Outbox, the link makes the account once; she changes a role with a confirmation
+ * store and the Outbox, the link makes the account once; she cancels an invitation sent with the
+ * wrong role, whose link then says it was withdrawn; she changes a role with a confirmation
  * and sees "saved"; she deactivates Mei, whose open session stops at once, reactivates her and
  * mails her a reset that Mei uses. The e2e database is shared by every journey of `npm test`, so
  * this one leaves each demo account as it found it (role, active, password).
@@ -109,6 +110,48 @@ describe("the admin's day", () => {
     await signIn(b.page, email, 'ines-chose-this-1');
   });
 
+  it('cancels an invitation before it is used: the row leaves the list and the link says it was withdrawn', async () => {
+    const email = `wrong-${Date.now()}@example.test`;
+    await signIn(b.page, odile.email, odile.password);
+    await goTo(b.page, 'Users');
+    const form = b.page.getByTestId('invite-form');
+    await form.getByLabel('E-mail of the person to invite').fill(email);
+    await form.getByRole('radio', { name: 'Role: admin' }).click();
+    await form.getByRole('button', { name: 'Mail the invitation' }).click();
+    await b.page
+      .getByTestId('invite-sent')
+      .getByText(`Invitation mailed to ${email} as an admin`, { exact: false })
+      .waitFor();
+    const link = await openMail(b.page, new RegExp(`invites you to Sheetkeeper.*${email.replace(/\./g, '\\.')}`, 'i'));
+
+    await goTo(b.page, 'Users');
+    const invitation = b.page.getByTestId(`invitation-${email}`);
+    await invitation.getByRole('button', { name: `Cancel invitation to ${email}` }).click();
+    const question = invitation.getByText(`Cancel the invitation to ${email}? Its link stops working at once`, {
+      exact: false,
+    });
+    await question.waitFor();
+    // The question wraps inside the phone's list instead of running past its edge (it ran to ~560 px).
+    const item = (await invitation.boundingBox())!;
+    const asked = (await question.boundingBox())!;
+    expect(asked.x + asked.width).toBeLessThanOrEqual(item.x + item.width + 1);
+    await saveScreenshots(b.page, 'admin-invitation-cancel-asked', () => question.waitFor());
+    await invitation.getByRole('button', { name: 'Yes, cancel it' }).click();
+    const cancelled = b.page.getByTestId('invitation-cancelled');
+    await cancelled.getByText(`Invitation to ${email} cancelled: its link no longer works.`).waitFor();
+    await invitation.waitFor({ state: 'detached' });
+    await saveScreenshots(b.page, 'admin-invitation-cancelled', () => cancelled.waitFor());
+    await signOut(b.page);
+
+    await b.page.goto(link);
+    await b.page.getByRole('heading', { name: 'This link cannot be used' }).waitFor();
+    expect(await b.page.getByTestId('join-unusable').textContent()).toMatch(
+      /^This invitation was withdrawn on \d{4}-\d\d-\d\d: ask Odile Marchetti \(odile@sheetkeeper\.test\) for a new one\.$/,
+    );
+    expect(await b.page.getByLabel('Your name').count()).toBe(0);
+    await saveScreenshots(b.page, 'admin-join-withdrawn', () => b.page.getByTestId('join-unusable').waitFor());
+  });
+
   it('changes a role only after a confirmation and shows "saved" beside the row', async () => {
     await signIn(b.page, odile.email, odile.password);
     await goTo(b.page, 'Users');
@@ -127,6 +170,24 @@ describe("the admin's day", () => {
     await saveScreenshots(b.page, 'admin-role-saved', () =>
       b.page.getByTestId('saved-ravi@sheetkeeper.test').waitFor(),
     );
+    // On a wide screen the ROLE column heading names the chips; no row repeats a "Role" label.
+    await b.page.setViewportSize({ width: 1440, height: 900 });
+    await b.page.getByText('Name and e-mail', { exact: true }).waitFor();
+    await ravi.getByRole('radio', { name: 'Role: contributor' }).waitFor();
+    expect(
+      await b.page
+        .getByTestId(/^user-/)
+        .getByText('Role', { exact: true })
+        .count(),
+    ).toBe(0);
+    await b.page.getByRole('radiogroup', { name: 'Role of Ravi Dutta' }).waitFor();
+    // …and its four chips fit on one line (at flex 5 of 13 "contributor" went to a second line on every row).
+    const tops = await Promise.all(
+      ['admin', 'maintainer', 'reviewer', 'contributor'].map(
+        async (role) => (await ravi.getByRole('radio', { name: `Role: ${role}` }).boundingBox())!.y,
+      ),
+    );
+    expect(new Set(tops).size).toBe(1);
   });
 
   it('deactivates Mei, whose open session stops at once; reactivates her and mails a reset she uses', async () => {
