@@ -1,5 +1,7 @@
-import type { Page } from 'playwright-core';
+import type { Locator, Page } from 'playwright-core';
 import { DEMO_USERS } from '../../server/seed/demo-users';
+import { roleWithArticle } from '../../shared/role-with-article';
+import type { Role } from '../../shared/roles';
 import { browserPerTest } from './support/browser-per-test';
 import { goTo } from './support/go-to';
 import { BASE_URL, openBrowser } from './support/open-browser';
@@ -43,6 +45,22 @@ async function openMail(page: Page, name: RegExp, screenshot = false): Promise<s
   return link;
 }
 
+/** Signs Odile in and sends an invitation from the Users screen's form; answers the line that says it was mailed. */
+async function inviteAsOdile(page: Page, email: string, role: Role): Promise<Locator> {
+  await signIn(page, odile.email, odile.password);
+  await goTo(page, 'Users');
+  const form = page.getByTestId('invite-form');
+  await form.getByLabel('E-mail of the person to invite').fill(email);
+  await form.getByRole('radio', { name: `Role: ${role}` }).click();
+  await form.getByRole('button', { name: 'Mail the invitation' }).click();
+  const sent = page.getByTestId('invite-sent');
+  await sent.getByText(`Invitation mailed to ${email} as ${roleWithArticle(role)}`, { exact: false }).waitFor();
+  return sent;
+}
+
+/** The Outbox row of the invitation mailed to `email`. */
+const invitationMail = (email: string) => new RegExp(`invites you to Sheetkeeper.*${email.replace(/\./g, '\\.')}`, 'i');
+
 /**
  * Puts Ravi's role and Mei's account back through the API as Odile (plain fetch, no browser: the
  * file's Chromium is closed by then), so a journey that stopped half-way leaves no demo account
@@ -72,22 +90,11 @@ afterAll(() => restoreDemoAccounts());
 describe("the admin's day", () => {
   it('invites someone by mail; the link makes the account with its role once, then says it was used', async () => {
     const email = `ines-${Date.now()}@example.test`;
-    await signIn(b.page, odile.email, odile.password);
-    await goTo(b.page, 'Users');
-    const form = b.page.getByTestId('invite-form');
-    await form.getByLabel('E-mail of the person to invite').fill(email);
-    await form.getByRole('radio', { name: 'Role: reviewer' }).click();
-    await form.getByRole('button', { name: 'Mail the invitation' }).click();
-    const sent = b.page.getByTestId('invite-sent');
-    await sent.getByText(`Invitation mailed to ${email} as a reviewer`, { exact: false }).waitFor();
+    const sent = await inviteAsOdile(b.page, email, 'reviewer');
     await b.page.getByTestId('open-invitations').getByText(email).waitFor();
     await saveScreenshots(b.page, 'admin-users-invited', () => sent.waitFor());
 
-    const link = await openMail(
-      b.page,
-      new RegExp(`invites you to Sheetkeeper.*${email.replace(/\./g, '\\.')}`, 'i'),
-      true,
-    );
+    const link = await openMail(b.page, invitationMail(email), true);
     await signOut(b.page);
 
     await b.page.goto(link);
@@ -112,17 +119,8 @@ describe("the admin's day", () => {
 
   it('cancels an invitation before it is used: the row leaves the list and the link says it was withdrawn', async () => {
     const email = `wrong-${Date.now()}@example.test`;
-    await signIn(b.page, odile.email, odile.password);
-    await goTo(b.page, 'Users');
-    const form = b.page.getByTestId('invite-form');
-    await form.getByLabel('E-mail of the person to invite').fill(email);
-    await form.getByRole('radio', { name: 'Role: admin' }).click();
-    await form.getByRole('button', { name: 'Mail the invitation' }).click();
-    await b.page
-      .getByTestId('invite-sent')
-      .getByText(`Invitation mailed to ${email} as an admin`, { exact: false })
-      .waitFor();
-    const link = await openMail(b.page, new RegExp(`invites you to Sheetkeeper.*${email.replace(/\./g, '\\.')}`, 'i'));
+    await inviteAsOdile(b.page, email, 'admin');
+    const link = await openMail(b.page, invitationMail(email));
 
     await goTo(b.page, 'Users');
     const invitation = b.page.getByTestId(`invitation-${email}`);
