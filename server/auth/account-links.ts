@@ -46,7 +46,10 @@ export class AccountLinks {
       if (existing)
         throw new HttpError(409, {
           kind: 'conflict',
-          message: `${email} has an account already (${existing.displayName}); change its role in the list instead.`,
+          // A deactivated colleague is brought back by Reactivate, not by changing a role they cannot use.
+          message: existing.deactivatedAt
+            ? `${email} has an account already (${existing.displayName}), deactivated: reactivate it in the list instead; their role and password come back with it.`
+            : `${email} has an account already (${existing.displayName}); change its role in the list instead.`,
         });
       const expiresAt = await this.issue(tx, admin, { kind: 'invitation', email, role, user: null });
       return { email, role, expiresAt: expiresAt.toISOString() };

@@ -130,6 +130,17 @@ describe('one-time links', () => {
     expect(await sql(`SELECT 1 FROM account_links WHERE email = 'ravi@sheetkeeper.test'`)).toEqual([]);
   });
 
+  it('points to Reactivate when the invited address has a deactivated account', async () => {
+    const meiId = await idOf('mei@sheetkeeper.test');
+    expect((await admin.post(`/api/users/${meiId}/deactivate`)).status).toBe(200);
+    const res = await admin.post('/api/users/invitations').send({ email: 'mei@sheetkeeper.test', role: 'reviewer' });
+    expect((await admin.post(`/api/users/${meiId}/reactivate`)).status).toBe(200);
+    expect(res.status).toBe(409);
+    expect(res.body.message).toBe(
+      'mei@sheetkeeper.test has an account already (Mei Okonkwo), deactivated: reactivate it in the list instead; their role and password come back with it.',
+    );
+  });
+
   it('names the field of a bad invitation, a short password and a missing name', async () => {
     const bad = await admin.post('/api/users/invitations').send({ email: 'not an address', role: 'owner' });
     expect(bad.status).toBe(400);
