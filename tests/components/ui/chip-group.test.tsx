@@ -32,6 +32,30 @@ describe('ChipGroup', () => {
     expect(checked().map((r) => r.getAttribute('aria-label'))).toEqual(['Verdict: convention difference']);
   });
 
+  it('draws its label above the chips, or none when a column heading names them, and keeps the names either way', () => {
+    const { rerender } = render(
+      <ChipGroup label="Verdict" groupLabel="Verdict of failure 7" options={OPTIONS} value="bug" onChange={() => {}} />,
+    );
+    expect(screen.getByText('Verdict')).toBeTruthy();
+    rerender(
+      <ChipGroup
+        label="Verdict"
+        groupLabel="Verdict of failure 7"
+        options={OPTIONS}
+        value="bug"
+        onChange={() => {}}
+        labelHidden
+      />,
+    );
+    expect(screen.queryByText('Verdict')).toBeNull();
+    expect(screen.getByRole('radiogroup', { name: 'Verdict of failure 7' })).toBeTruthy();
+    expect(radios().map((r) => r.getAttribute('aria-label'))).toEqual([
+      'Verdict: bug',
+      'Verdict: convention difference',
+      'Verdict: accepted deviation',
+    ]);
+  });
+
   it('makes the first chip the tab stop when nothing is chosen, and chooses nothing by itself', () => {
     render(<Harness initial={undefined} />);
     expect(radios().map((r) => r.getAttribute('tabindex'))).toEqual(['0', '-1', '-1']);
