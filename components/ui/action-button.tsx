@@ -12,6 +12,8 @@ interface Props {
   accessibilityLabel?: string;
   /** A press mounts a new screen with this button on it, which then takes the focus (`carriedFocus`). */
   carriesFocus?: boolean;
+  /** Takes the focus when it appears: it replaced the control that had it (an ask-first question's buttons). */
+  focusOnMount?: boolean;
 }
 
 export function ActionButton({
@@ -22,12 +24,13 @@ export function ActionButton({
   tone = 'primary',
   accessibilityLabel,
   carriesFocus = false,
+  focusOnMount = false,
 }: Props) {
   const inactive = disabled || busy;
   const name = accessibilityLabel ?? label;
   const node = useRef<View>(null);
   useEffect(() => {
-    if (carriesFocus && carriedFocus.take(name)) node.current?.focus();
+    if (focusOnMount || (carriesFocus && carriedFocus.take(name))) node.current?.focus();
     // Once, on mount: only a screen mounted by this button's press takes the focus it carried.
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, []);

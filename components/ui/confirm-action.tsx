@@ -19,7 +19,12 @@ interface Props {
   busy?: boolean;
 }
 
-/** A destructive action in two steps on the spot, so one stray tap never deletes or revokes. */
+/**
+ * A destructive action in two steps on the spot, so one stray tap never deletes or revokes. The
+ * question replaces the button that asked, so the focus moves with it: onto the way back (the
+ * harmless answer, so a second Enter does nothing it would regret), and onto the asking button
+ * again when the way back is taken. The question is also a polite live region, read when it appears.
+ */
 export function ConfirmAction({
   label,
   accessibilityLabel,
@@ -30,6 +35,8 @@ export function ConfirmAction({
   busy = false,
 }: Props) {
   const [asking, setAsking] = useState(false);
+  // Whether the person came back from the question: only then does the asking button take the focus.
+  const [keptBack, setKeptBack] = useState(false);
   if (!asking)
     return (
       <ActionButton
@@ -38,6 +45,7 @@ export function ConfirmAction({
         tone="quiet"
         onPress={() => setAsking(true)}
         busy={busy}
+        focusOnMount={keptBack}
       />
     );
   return (
@@ -53,7 +61,15 @@ export function ConfirmAction({
             onConfirm();
           }}
         />
-        <ActionButton label={keepLabel} tone="quiet" onPress={() => setAsking(false)} />
+        <ActionButton
+          label={keepLabel}
+          tone="quiet"
+          focusOnMount
+          onPress={() => {
+            setKeptBack(true);
+            setAsking(false);
+          }}
+        />
       </View>
     </View>
   );
