@@ -47,6 +47,7 @@ import { DecisionVersions1764930000000 } from './migrations/1764930000000-decisi
 import { AccountLinksAndDeactivation1764940000000 } from './migrations/1764940000000-account-links-and-deactivation';
 import { NewestFailuresFirstAndFirstRuns1764960000000 } from './migrations/1764960000000-newest-failures-first-and-first-runs';
 import { UlpsTiesNewestFirst1764970000000 } from './migrations/1764970000000-ulps-ties-newest-first';
+import { ChecksStoppedByError1764980000000 } from './migrations/1764980000000-checks-stopped-by-error';
 import { InvitationCancelledAt1764990000000 } from './migrations/1764990000000-invitation-cancelled-at';
 
 /** Entities and migrations are listed, not globbed, so tsx, jest and tsc builds all find them. */
@@ -97,6 +98,7 @@ export const MIGRATIONS = [
   AccountLinksAndDeactivation1764940000000,
   NewestFailuresFirstAndFirstRuns1764960000000,
   UlpsTiesNewestFirst1764970000000,
+  ChecksStoppedByError1764980000000,
   InvitationCancelledAt1764990000000,
 ];
 

@@ -13,6 +13,11 @@ export interface RunView {
   counts: OutcomeCounts;
   /** Failing points by class: branch findings (wrong sheet, side, zero sign, jump…) apart from accuracy ones. */
   byClass: ClassCounts;
+  /**
+   * Checks (one suite against one library version) stopped by an error, the run matrix's error
+   * cells: an error outcome, or nothing judged (shared/check-stopped-by-error.ts). Every verdict reads it.
+   */
+  checksStopped: number;
   regressions: number | null;
   /** Targets of queued pairs that no live worker has: those pairs wait until a worker that has one starts. */
   waitingFor: string[];

@@ -4,6 +4,7 @@ import type { CheckedScope } from '../../shared/run-result';
 import { SkText } from '../ui/sk-text';
 import { NOTE_BOX_STYLE } from '../ui/note-box-style';
 import { plural } from '../../shared/plural';
+import { STOPPED_BY_ERROR } from './stopped-by-error';
 
 const CONVENTION_WORDS: Record<string, string> = {
   'signed-zero': 'signed zero (IEC 60559 / ISO C Annex G)',
@@ -65,7 +66,7 @@ export function CheckedScopeNote({
   const notChecked = [
     'Any point off these paths, and any other convention, tolerance, library version or entry point.',
     checksNotChecked > 0
-      ? `${plural(checksNotChecked, 'check')} of this run checked nothing (not finished, cancelled, or stopped by an error).`
+      ? `${plural(checksNotChecked, 'check')} of this run checked nothing (not finished, cancelled, or ${STOPPED_BY_ERROR}).`
       : null,
     listedNotRun > 0 ? `${plural(listedNotRun, 'check')} listed property laws that were not run.` : null,
     'A property that held is evidence at the points drawn, not a proof.',

@@ -7,7 +7,8 @@ import { DIAGNOSIS_KINDS } from '../../shared/diagnosis-kinds';
 import type { RunMatrixCell } from '../../shared/run-matrix-cell';
 import { targetPageHref } from '../libraries/target-page-href';
 import { failuresHref } from './failures-href';
-import { judgedPoints } from './judged-points';
+import { checkStoppedByError } from '../../shared/check-stopped-by-error';
+import { judgedPoints } from '../../shared/judged-points';
 import { OUTCOME_GLYPH } from './outcome-glyph';
 import type { Tone } from './outcome-tone';
 import { waitingForWorkerWords } from './waiting-for-worker-words';
@@ -95,7 +96,7 @@ export function describeMatrixCell(cell: RunMatrixCell, runId: string): MatrixCe
   const said: string[] = [];
   let headline: string;
   let tone: Tone;
-  if (cell.outcome === 'error' || (cell.status === 'done' && judged === 0)) {
+  if (checkStoppedByError(cell)) {
     tone = 'error';
     headline =
       counts.error > 0

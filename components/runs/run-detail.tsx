@@ -19,7 +19,7 @@ import { RunMatrix } from './run-matrix';
 import { ScreenBody } from '../ui/screen-body';
 import { shortRunId } from '../../shared/short-run-id';
 import { describeMatrixCell } from './describe-matrix-cell';
-import { judgedPoints } from './judged-points';
+import { judgedPoints } from '../../shared/judged-points';
 import { tallyCells } from './tally-cells';
 
 /** One run: its header and progress, what it checked, its matrix (each suite against each library version) and its property checks; live while it runs. */

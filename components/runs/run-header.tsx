@@ -19,10 +19,11 @@ import { waitingForWorkerWords } from './waiting-for-worker-words';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
 
 /**
- * The top of a run: its status, who started it and when, how long, its checks (suite × library
- * version) by outcome once its matrix is known, its point counts, and progress and cancel while
- * it is live. The checks are counted by the matrix's own rule (tally-cells.ts), so a check that
- * stopped on an error is counted as one here even when it has no point in error.
+ * The top of a run: its verdict (from the run view alone, as every list shows it), who started it
+ * and when, how long, its checks (suite × library version) by outcome once its matrix is known,
+ * its point counts, and progress and cancel while it is live. The checks are counted by the
+ * matrix's own rule (tally-cells.ts), the rule the run's stored `checksStopped` is counted by, so
+ * the tally's stopped checks and the verdict's agree.
  */
 export function RunHeader({ run, canCancel, checks }: { run: RunView; canCancel: boolean; checks?: CellTally }) {
   const live = isLiveRun(run);
@@ -35,7 +36,7 @@ export function RunHeader({ run, canCancel, checks }: { run: RunView; canCancel:
   ];
   return (
     <View style={styles.card}>
-      <RunStatusBadge run={run} checks={checks} />
+      <RunStatusBadge run={run} />
       <View style={styles.facts}>
         {facts.map(([label, value]) => (
           <View key={label} style={styles.fact}>

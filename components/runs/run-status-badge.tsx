@@ -1,26 +1,36 @@
+import { StyleSheet, View } from 'react-native';
+import { theme } from '../../constants/theme';
 import type { RunView } from '../../shared/run-view';
+import { SkText } from '../ui/sk-text';
+import { TagPill } from '../ui/tag-pill';
 import { OUTCOME_TONE } from './outcome-tone';
 import { runVerdict } from './run-verdict';
-import type { CellTally } from './tally-cells';
-import { TagPill } from '../ui/tag-pill';
 
-/** A run's state as glyph, words and colour together, so it reads without the colour; `checks` as runVerdict takes them. */
-export function RunStatusBadge({
-  run,
-  checks,
-}: {
-  run: Pick<RunView, 'status' | 'counts'>;
-  checks?: Pick<CellTally, 'error'>;
-}) {
-  const verdict = runVerdict(run, checks);
+/**
+ * A run's verdict as glyph, words and colour together, so it reads without the colour, and under
+ * it the checks stopped by an error in words: the same on every screen that shows a run.
+ */
+export function RunStatusBadge({ run }: { run: Pick<RunView, 'status' | 'counts' | 'checksStopped'> }) {
+  const verdict = runVerdict(run);
   const tone = OUTCOME_TONE[verdict.tone];
   return (
-    <TagPill
-      text={`${verdict.glyph} ${verdict.word}`}
-      ink={tone.ink}
-      soft={tone.soft}
-      edge={tone.edge}
-      accessibilityLabel={`status: ${verdict.word}`}
-    />
+    <View style={styles.badge}>
+      <TagPill
+        text={`${verdict.glyph} ${verdict.word}`}
+        ink={tone.ink}
+        soft={tone.soft}
+        edge={tone.edge}
+        accessibilityLabel={`status: ${verdict.word}`}
+      />
+      {verdict.stopped ? (
+        <SkText variant="caption" tone="ink" testID="run-checks-stopped">
+          {verdict.stopped}
+        </SkText>
+      ) : null}
+    </View>
   );
 }
+
+const styles = StyleSheet.create({
+  badge: { alignItems: 'flex-start', gap: theme.space(1) },
+});

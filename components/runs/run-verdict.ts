@@ -1,18 +1,34 @@
+import { plural } from '../../shared/plural';
 import type { RunView } from '../../shared/run-view';
 import type { Tone } from './outcome-tone';
-import type { CellTally } from './tally-cells';
+import { STOPPED_BY_ERROR } from './stopped-by-error';
+
+export interface RunVerdict {
+  glyph: string;
+  word: string;
+  tone: Tone;
+  /** How many checks were stopped by an error, in words ("2 checks stopped by an error"); null when none. */
+  stopped: string | null;
+  /** The word and the stopped checks in one phrase, for a screen reader. */
+  said: string;
+}
 
 /**
- * A run's state in a glyph, words and a tone. A completed run is judged by its points: any
- * failure makes it "completed with failures" even when most points passed. Given its checks
- * (the run page knows them from its matrix), a check stopped by an error with no point in
- * error (every point skipped: the library lacks the function) makes it "completed with errors"
- * too, rather than "all checked points passed".
+ * A run's state in a glyph, words and a tone: the one judge of a run, for every screen that shows
+ * one (runs list, cards, the Overview, the run page), from the run view alone. A completed run is
+ * judged by its points and its checks: any failure makes it "completed with failures" even when
+ * most points passed; a point in error, or a check stopped by an error (`checksStopped`, the run
+ * matrix's error cells: a library that lacks the function has every point of that check skipped),
+ * makes it "completed with errors", never "all checked points passed". Stopped checks are counted
+ * in words whatever the state, so a red or grey verdict does not hide them either.
  */
-export function runVerdict(
-  run: Pick<RunView, 'status' | 'counts'>,
-  checks?: Pick<CellTally, 'error'>,
-): { glyph: string; word: string; tone: Tone } {
+export function runVerdict(run: Pick<RunView, 'status' | 'counts' | 'checksStopped'>): RunVerdict {
+  const state = judge(run);
+  const stopped = run.checksStopped > 0 ? `${plural(run.checksStopped, 'check')} ${STOPPED_BY_ERROR}` : null;
+  return { ...state, stopped, said: stopped ? `${state.word}, ${stopped}` : state.word };
+}
+
+function judge(run: Pick<RunView, 'status' | 'counts' | 'checksStopped'>): { glyph: string; word: string; tone: Tone } {
   switch (run.status) {
     case 'queued':
       return { glyph: '…', word: 'queued', tone: 'live' };
@@ -24,7 +40,7 @@ export function runVerdict(
       return { glyph: '◊', word: 'run failed', tone: 'error' };
     case 'completed':
       if (run.counts.fail > 0) return { glyph: '❌', word: 'completed with failures', tone: 'fail' };
-      if (run.counts.error > 0 || (checks?.error ?? 0) > 0)
+      if (run.counts.error > 0 || run.checksStopped > 0)
         return { glyph: '◊', word: 'completed with errors', tone: 'error' };
       if (run.counts.pass === 0) return { glyph: '◊', word: 'completed, nothing passed', tone: 'error' };
       return { glyph: '✓', word: 'all checked points passed', tone: 'pass' };

@@ -41,7 +41,7 @@ export function RunsTable({ runs, now }: { runs: RunView[]; now?: number }) {
           <Pressable
             role="row"
             accessibilityRole="link"
-            accessibilityLabel={`Run of ${run.planName}, ${runVerdict(run).word}, ${formatWhen(run.createdAt, now)}`}
+            accessibilityLabel={`Run of ${run.planName}, ${runVerdict(run).said}, ${formatWhen(run.createdAt, now)}`}
             testID={`run-${run.id}`}
             // Link's asChild merges styles as objects: a flat one (an array breaks on web).
             style={StyleSheet.flatten([styles.row, styles.bodyRow])}

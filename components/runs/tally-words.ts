@@ -1,4 +1,5 @@
 import { OUTCOME_GLYPH } from './outcome-glyph';
+import { STOPPED_BY_ERROR } from './stopped-by-error';
 import type { CellTally } from './tally-cells';
 
 /** A tally of checks in words, each count with its glyph: "✓ 9 passed · ❌ 2 with failures · ◊ 8 stopped by an error". */
@@ -6,7 +7,7 @@ export function tallyWords(t: CellTally): string {
   return [
     `${OUTCOME_GLYPH.pass} ${t.pass} passed`,
     `${OUTCOME_GLYPH.fail} ${t.fail} with failures`,
-    `${OUTCOME_GLYPH.error} ${t.error} stopped by an error`,
+    `${OUTCOME_GLYPH.error} ${t.error} ${STOPPED_BY_ERROR}`,
     ...(t.other ? [`${t.other} not finished or cancelled`] : []),
   ].join(' · ');
 }

@@ -46,6 +46,13 @@ export class Run {
   @Column({ type: 'jsonb', name: 'by_class', default: () => `'{"branch": 0, "accuracy": 0}'` })
   byClass!: ClassCounts;
 
+  /**
+   * Checks (shards) stopped by an error, by shared/check-stopped-by-error.ts: counted by the shard
+   * executor as each shard is stored, so a list of runs judges them without reading their shards.
+   */
+  @Column({ type: 'integer', name: 'checks_stopped', default: 0 })
+  checksStopped!: number;
+
   /** Failures new since the previous completed run of the plan, per the regression rule; set when the run completes. */
   @Column({ type: 'integer', nullable: true })
   regressions!: number | null;

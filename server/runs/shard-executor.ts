@@ -1,5 +1,6 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { evaluatePair, ReferenceCache, type Target } from '../../harness';
+import { checkStoppedByError } from '../../shared/check-stopped-by-error';
 import { FAILURE_ROW_FIELDS } from '../../shared/failure-row-fields';
 import type { DiagnosisClass } from '../../shared/diagnosis-class';
 import type { OutcomeCounts, PointFinding, SuiteTargetResult } from '../../shared/run-result';
@@ -103,7 +104,7 @@ export class ShardExecutor {
         .getRepository(Shard)
         .findOne({ where: { id: shardId }, lock: { mode: 'pessimistic_write' } });
       if (!locked || locked.status === 'done' || locked.status === 'cancelled') return;
-      await storeResult(tx, shard, result);
+      const outcome = await storeResult(tx, shard, result);
       const run = await tx.getRepository(Run).findOneOrFail({ where: { id: shard.run.id } });
       const counts = { ...run.counts };
       for (const k of Object.keys(result.counts) as (keyof OutcomeCounts)[])
@@ -112,7 +113,10 @@ export class ShardExecutor {
       for (const k of Object.keys(result.byClass) as DiagnosisClass[])
         byClass[k] = (byClass[k] ?? 0) + result.byClass[k];
       const shardsDone = run.shardsDone + 1;
-      await tx.getRepository(Run).update(run.id, { counts, byClass, shardsDone });
+      // Counted by the matrix's own rule, so every list judges the run as its page does.
+      const checksStopped =
+        run.checksStopped + (checkStoppedByError({ status: 'done', outcome, counts: result.counts }) ? 1 : 0);
+      await tx.getRepository(Run).update(run.id, { counts, byClass, shardsDone, checksStopped });
       if (shardsDone === run.shardsTotal && run.status !== 'cancelled') {
         await markRegressions(tx, run.id, { outbox: this.options.outbox, appUrl: this.options.appUrl });
       }
@@ -167,7 +171,12 @@ const columnsOfFinding = (f: PointFinding) =>
     [D in FindingField as D['key']]: ReturnType<D['fromFinding']>;
   };
 
-async function storeResult(tx: EntityManager, shard: Shard, result: SuiteTargetResult): Promise<void> {
+/** Stores the shard's rows and marks it done; returns the outcome it was stored with. */
+async function storeResult(
+  tx: EntityManager,
+  shard: Shard,
+  result: SuiteTargetResult,
+): Promise<NonNullable<Shard['outcome']>> {
   const body = shard.suiteVersion.body;
   // A point the target's entry cannot express is counted (counts.notApplicable), never stored as a failure.
   const rows = result.paths.flatMap((path) =>
@@ -232,4 +241,5 @@ async function storeResult(tx: EntityManager, shard: Shard, result: SuiteTargetR
     durationMs: result.durationMs,
     finishedAt: new Date(),
   });
+  return outcome;
 }

@@ -13,6 +13,7 @@ export function toRunView(run: Run, waitingFor: string[]): RunView {
     shardsDone: run.shardsDone,
     counts: run.counts,
     byClass: run.byClass,
+    checksStopped: run.checksStopped,
     regressions: run.regressions,
     waitingFor,
     requestedBy: run.requestedBy?.displayName ?? null,

@@ -11,6 +11,7 @@ export const RUNNING_RUN: RunView = {
   shardsDone: 1,
   counts: { pass: 100, fail: 0, error: 0, skipped: 0, notApplicable: 0 },
   byClass: { branch: 0, accuracy: 0 },
+  checksStopped: 0,
   regressions: null,
   waitingFor: [],
   requestedBy: 'Kwame Asante',

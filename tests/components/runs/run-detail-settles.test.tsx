@@ -150,6 +150,8 @@ describe('RunDetail when its run finishes while the page is open', () => {
             shardsTotal: 3,
             shardsDone: 3,
             counts: { pass: 40, fail: 0, error: 0, skipped: 80, notApplicable: 0 },
+            // As the server counts them when each shard is stored (shard-executor.ts).
+            checksStopped: 2,
           },
         },
       };
@@ -164,6 +166,7 @@ describe('RunDetail when its run finishes while the page is open', () => {
     expect(screen.getByTestId('matrix-summary').textContent).toContain('◊ 2 stopped by an error');
     // Not "all checked points passed": two checks checked nothing.
     expect(screen.getByLabelText('status: completed with errors')).toBeTruthy();
+    expect(screen.getByTestId('run-checks-stopped').textContent).toBe('2 checks stopped by an error');
     // What was checked counts the one check that judged points, and names the two that did not.
     expect(
       screen.getByText(/^• 1 check of a suite against a library version, 2 paths, 40 points in all\.$/),

@@ -21,6 +21,13 @@ describe('RunHeader', () => {
     expect(link.getAttribute('href')).toBe(`/failures?run=${RUNNING_RUN.id}&status=new`);
   });
 
+  it('judges the run by its stored count of stopped checks before its matrix is known, as the runs list does', () => {
+    render(<RunHeader run={{ ...COMPLETED, checksStopped: 2 }} canCancel={false} />);
+    expect(screen.getByText('◊ completed with errors')).toBeTruthy();
+    expect(screen.getByText('2 checks stopped by an error')).toBeTruthy();
+    expect(screen.queryByTestId('run-check-tally')).toBeNull();
+  });
+
   it('says a cancelled run is not compared', () => {
     render(<RunHeader run={{ ...COMPLETED, status: 'cancelled', regressions: null }} canCancel={false} />);
     expect(screen.getByText('not compared: the run was cancelled before every pair was checked')).toBeTruthy();

@@ -26,6 +26,7 @@ const run = (n: number, over: Partial<RunView> = {}): RunView => ({
   shardsDone: 4,
   counts: { pass: 480, fail: 3, error: 0, skipped: 0, notApplicable: 0 },
   byClass: { branch: 3, accuracy: 0 },
+  checksStopped: 0,
   regressions: 2,
   waitingFor: [],
   requestedBy: null,
@@ -91,6 +92,33 @@ describe('RunsList', () => {
     expect(within(live).getByText('1 of 4 checks · 25%')).toBeTruthy();
     expect(first.getAttribute('href')).toBe(`/runs/${run(1).id}`);
   });
+
+  it.each([390, 1440])(
+    'at %i px, says a run whose points all passed but two checks stopped by an error completed with errors, and how many',
+    async (width) => {
+      setScreenWidth(width);
+      const stopped = run(3, {
+        counts: { pass: 480, fail: 0, error: 0, skipped: 308, notApplicable: 0 },
+        byClass: { branch: 0, accuracy: 0 },
+        checksStopped: 2,
+        regressions: null,
+      });
+      api([stopped, run(4, { counts: stopped.counts, byClass: stopped.byClass, regressions: null })]);
+      renderWithClient(<Harness />);
+      const row = await screen.findByTestId(`run-${stopped.id}`);
+      expect(within(row).getByText('◊ completed with errors')).toBeTruthy();
+      expect(within(row).getByText('2 checks stopped by an error')).toBeTruthy();
+      expect(within(row).queryByText(/all checked points passed/)).toBeNull();
+      // The same points with every check judged is the green run.
+      const clean = screen.getByTestId(`run-${run(4).id}`);
+      expect(within(clean).getByText('✓ all checked points passed')).toBeTruthy();
+      expect(within(clean).queryByText(/stopped by an error/)).toBeNull();
+      if (width >= 1024)
+        expect(row.getAttribute('aria-label')).toMatch(
+          /^Run of complex.js nightly, completed with errors, 2 checks stopped by an error, /,
+        );
+    },
+  );
 
   it('asks the API again with each filter chosen, and marks the chosen chip with a filled ring', async () => {
     const calls = api([
