@@ -11,13 +11,14 @@ import { ConfirmAction } from '../ui/confirm-action';
 import { SkText } from '../ui/sk-text';
 import { FindingsByKind } from './findings-by-kind';
 import { PlanForm } from './plan-form';
+import { PlanLatestRun } from './plan-latest-run';
 import { PlanSchedules } from './plan-schedules';
 import { StartRunButton } from './start-run-button';
 import { TitledPanel } from '../ui/titled-panel';
 
 /**
- * One plan: what a run of it checks (suites × targets), who hears about it, its schedules, and
- * for editors Run now, edit and delete. Says plainly what a run does and does not establish.
+ * One plan: what a run of it checks (suites × targets), its latest run and verdict, who hears
+ * about it, its schedules, and for editors Run now, edit and delete. Says plainly what a run does and does not establish.
  */
 export function PlanDetail({ plan, canEdit }: { plan: PlanView; canEdit: boolean }) {
   const wide = useWindowDimensions().width >= theme.wide;
@@ -77,6 +78,7 @@ export function PlanDetail({ plan, canEdit }: { plan: PlanView; canEdit: boolean
           <StartRunButton planId={plan.id} planName={plan.name} />
         </TitledPanel>
       ) : null}
+      <PlanLatestRun planId={plan.id} planName={plan.name} />
       <PlanSchedules planId={plan.id} canEdit={canEdit} />
       <TitledPanel title="Regression mail">
         {plan.recipients.length === 0 ? (
