@@ -35,7 +35,7 @@ export function RunHeader({ run, canCancel, checks }: { run: RunView; canCancel:
     ['Regressions', regressions.text],
   ];
   return (
-    <View style={styles.card}>
+    <View style={styles.card} testID="run-header">
       <RunStatusBadge run={run} />
       <View style={styles.facts}>
         {facts.map(([label, value]) => (

@@ -74,6 +74,57 @@ describe("the run page through a maintainer's day", () => {
     await b.page.getByText('Convention fingerprint', { exact: false }).first().waitFor();
   });
 
+  it('sees one verdict for a run whose library lacks a function: on the run page, the runs list, the Overview and the plan page', async () => {
+    await signIn(b.page, kwame.email, kwame.password);
+    // exp-principal-ccw passes every point on complex.js 2.4.3; its cbrt check checks nothing. By
+    // its points alone the run read "✓ all checked points passed" on the runs list and the Overview.
+    const api = pageApi(b.page);
+    const made = await api<{ status: number; body: { plan: { id: string } } }>('/plans', 'POST', {
+      name: 'Exponential and cube root',
+      description: 'One suite that passes and one whose function the library lacks, for the verdict journey.',
+      recipients: [],
+      suites: ['exp-principal-ccw', 'cbrt-principal-sz'],
+      targets: [TARGET],
+    });
+    expect(made.status).toBe(201);
+    const planId = made.body.plan.id;
+    const started = await api<{ body: { run: { id: string } } }>('/runs', 'POST', { planId });
+    const runId = started.body.run.id;
+    const sameVerdict = async (where: ReturnType<Page['getByTestId']>) => {
+      await where.getByText('◊ completed with errors', { exact: true }).waitFor();
+      await where.getByText('1 check stopped by an error', { exact: true }).waitFor();
+      expect(await where.getByText(/all checked points passed/).count()).toBe(0);
+    };
+
+    await b.page.goto(`${BASE_URL}/runs/${runId}`);
+    await b.page.getByLabel('status: completed with errors').waitFor({ timeout: 60_000 });
+    await sameVerdict(b.page.getByTestId('run-header'));
+    await b.page
+      .getByTestId('run-check-tally')
+      .getByText(/◊ 1 stopped by an error/)
+      .waitFor();
+
+    await goTo(b.page, 'Runs');
+    await sameVerdict(b.page.getByTestId(`run-${runId}`));
+    await b.page.setViewportSize({ width: 1440, height: 900 });
+    // The wide screen's table row (role row, a link to the run) in place of the phone's card.
+    const row = b.page.getByRole('row', { name: /^Run of Exponential and cube root, / });
+    await sameVerdict(row);
+    expect(await row.getAttribute('aria-label')).toMatch(
+      /^Run of Exponential and cube root, completed with errors, 1 check stopped by an error, /,
+    );
+    await saveScreenshots(b.page, 'day-run-page-verdict-runs-list', () => b.page.getByTestId(`run-${runId}`).waitFor());
+
+    await goTo(b.page, 'Overview');
+    await sameVerdict(b.page.getByTestId('plan-Exponential and cube root'));
+    await saveScreenshots(b.page, 'day-run-page-verdict-overview', () =>
+      b.page.getByTestId('plan-Exponential and cube root').waitFor(),
+    );
+
+    await b.page.goto(`${BASE_URL}/plans/${planId}`);
+    await sameVerdict(b.page.getByTestId('plan-latest-run'));
+  });
+
   it('filters the failure table by the short id a run shows, and says beside the field when it names no run', async () => {
     await signIn(b.page, kwame.email, kwame.password);
     const runs = await pageApi(b.page)<{ body: { runs: { id: string; counts: { fail: number } }[] } }>(
