@@ -1,11 +1,11 @@
 import type request from 'supertest';
 import { complexJsTarget } from '../../../harness/adapters/complex-js-target';
-import type { MailOutbox } from '../../../server/mail/mail-outbox';
-import { ShardExecutor } from '../../../server/runs/shard-executor';
 import type { RunMatrixCell } from '../../../shared/run-matrix-cell';
 import { approvedSuite } from '../../setup/approved-suite';
+import { executeRunShards } from '../../setup/execute-run-shards';
 import { signInAs } from '../../setup/sign-in-as';
 import { startTestApp, type TestApp } from '../../setup/test-app';
+import { withoutOperation } from '../../setup/without-operation';
 
 describe('GET /api/runs/:id/matrix', () => {
   let t: TestApp;
@@ -23,18 +23,11 @@ describe('GET /api/runs/:id/matrix', () => {
       .post('/api/plans')
       .send({ name: 'matrix plan', recipients: [], suites: ['matrix-sqrt'], targets: ['fine@1', 'nosqrt@1'] });
     runId = (await kwame.post('/api/runs').send({ planId: plan.body.plan.id })).body.run.id;
-    const base = () => complexJsTarget('complex.js', '2.4.3');
-    const executor = new ShardExecutor(t.db.dataSource, {
-      // A library without sqrt: every point of every path is skipped for that reason.
-      openTarget: (name) =>
-        name === 'nosqrt@1'
-          ? { ...base(), name, supports: async (op: string) => op !== 'sqrt' && (await base().supports(op)) }
-          : { ...base(), name },
-      outbox: { enqueue: async () => undefined } as unknown as MailOutbox,
-      appUrl: 'http://127.0.0.1',
-    });
-    for (const { id } of await t.db.dataSource.query(`SELECT id FROM shards WHERE run_id = $1`, [runId]))
-      await executor.execute(id);
+    const base = (name: string) => ({ ...complexJsTarget('complex.js', '2.4.3'), name });
+    // A library without sqrt: every point of every path is skipped for that reason.
+    await executeRunShards(t.db.dataSource, runId, (name) =>
+      name === 'nosqrt@1' ? withoutOperation(base(name), 'sqrt') : base(name),
+    );
   }, 60_000);
   afterAll(() => t.stop());
 

@@ -2,16 +2,16 @@ import type request from 'supertest';
 import { tallyCells } from '../../../components/runs/tally-cells';
 import { describeMatrixCell } from '../../../components/runs/describe-matrix-cell';
 import { runVerdict } from '../../../components/runs/run-verdict';
-import type { MailOutbox } from '../../../server/mail/mail-outbox';
 import { ChecksStoppedByError1764980000000 } from '../../../server/migrations/1764980000000-checks-stopped-by-error';
-import { ShardExecutor } from '../../../server/runs/shard-executor';
 import type { OverviewView } from '../../../shared/overview-view';
 import type { RunMatrixCell } from '../../../shared/run-matrix-cell';
 import type { RunView } from '../../../shared/run-view';
 import { referenceTarget } from '../../harness/support/reference-target';
 import { approvedSuite } from '../../setup/approved-suite';
+import { executeRunShards } from '../../setup/execute-run-shards';
 import { signInAs } from '../../setup/sign-in-as';
 import { startTestApp, type TestApp } from '../../setup/test-app';
+import { withoutOperation } from '../../setup/without-operation';
 
 /**
  * A run in which two libraries lack the suite's function (every point of those checks skipped,
@@ -44,16 +44,9 @@ describe('checks stopped by an error, counted as shards are stored', () => {
     // The reference engine as the library, so the check that has sqrt passes every point: by its
     // points alone the run would read "all checked points passed".
     const base = (name: string) => referenceTarget('signed-zero', {}, name);
-    const executor = new ShardExecutor(t.db.dataSource, {
-      openTarget: (name) =>
-        name.startsWith('nosqrt')
-          ? { ...base(name), supports: async (op: string) => op !== 'sqrt' && (await base(name).supports(op)) }
-          : base(name),
-      outbox: { enqueue: async () => undefined } as unknown as MailOutbox,
-      appUrl: 'http://127.0.0.1',
-    });
-    for (const { id } of await t.db.dataSource.query(`SELECT id FROM shards WHERE run_id = $1`, [runId]))
-      await executor.execute(id);
+    await executeRunShards(t.db.dataSource, runId, (name) =>
+      name.startsWith('nosqrt') ? withoutOperation(base(name), 'sqrt') : base(name),
+    );
   }, 60_000);
   afterAll(() => t.stop());
 
