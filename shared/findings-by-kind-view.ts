@@ -12,6 +12,8 @@ export interface FindingsByKindView {
     createdAt: string;
     finishedAt: string | null;
     failed: number;
+    /** Checks of the run stopped by an error (the run view's `checksStopped`): they checked nothing, so count nothing here. */
+    checksStopped: number;
     /** Every kind, 0 where the run has none. */
     byKind: Record<DiagnosisKind, number>;
   }[];

@@ -12,6 +12,7 @@ import { DIAGNOSIS_KINDS } from '../../shared/diagnosis-kinds';
 import { failuresPath } from '../../shared/failures-path';
 import type { FindingsByKindView } from '../../shared/findings-by-kind-view';
 import { DIAGNOSIS_STYLES } from '../failures/diagnosis-styles';
+import { STOPPED_BY_ERROR } from '../runs/stopped-by-error';
 import { QueryState } from '../ui/query-state';
 import { SkText } from '../ui/sk-text';
 import { TitledPanel } from '../ui/titled-panel';
@@ -50,6 +51,7 @@ export function FindingsByKind({ planId }: { planId: string }) {
   const runs = query.data?.runs ?? [];
   const occurring = DIAGNOSIS_KINDS.filter((k) => runs.some((r) => r.byKind[k] > 0));
   const absent = DIAGNOSIS_KINDS.filter((k) => !occurring.includes(k));
+  const stopped = runs.filter((r) => r.checksStopped > 0);
   const column = Math.max(COLUMN, Math.min(WIDEST, Math.floor(room / Math.max(1, runs.length))));
   const lead =
     runs.length === 0
@@ -103,7 +105,7 @@ export function FindingsByKind({ planId }: { planId: string }) {
                 <Link href={`/runs/${run.id}`} asChild>
                   <Pressable
                     accessibilityRole="link"
-                    accessibilityLabel={`Run of ${day(run.createdAt)} ${time(run.createdAt)}: ${plural(run.failed, 'failing point')}`}
+                    accessibilityLabel={`Run of ${day(run.createdAt)} ${time(run.createdAt)}: ${plural(run.failed, 'failing point')}${run.checksStopped > 0 ? `, ${stoppedWords(run)}` : ''}`}
                     style={styles.headCell}
                   >
                     {/* One text of two lines, so what shows is within the link's name (WCAG 2.5.3). */}
@@ -129,6 +131,12 @@ export function FindingsByKind({ planId }: { planId: string }) {
           </ScrollView>
         </View>
       ) : null}
+      {stopped.length > 0 ? (
+        <SkText variant="caption" testID="findings-by-kind-stopped">
+          Not counted here, as they checked nothing:{' '}
+          {stopped.map((r) => `${stoppedWords(r)} in the run of ${day(r.createdAt)} ${time(r.createdAt)}`).join('; ')}.
+        </SkText>
+      ) : null}
       {runs.length > 0 && occurring.length > 0 && absent.length > 0 ? (
         <SkText variant="caption">
           None in these runs: {absent.map((k) => DIAGNOSIS_KIND_NAMES[k].name).join(', ')}.
@@ -137,6 +145,9 @@ export function FindingsByKind({ planId }: { planId: string }) {
     </TitledPanel>
   );
 }
+
+/** A run's checks stopped by an error in the words of every run verdict: "2 checks stopped by an error". */
+const stoppedWords = (run: RunCounts) => `${plural(run.checksStopped, 'check')} ${STOPPED_BY_ERROR}`;
 
 /** A row's name: the kind's glyph and word, and its counts in words for a screen reader. */
 function KindName({ kind, runs }: { kind: DiagnosisKind; runs: RunCounts[] }) {

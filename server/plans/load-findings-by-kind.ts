@@ -22,16 +22,17 @@ export async function loadFindingsByKind(
     createdAt: Date;
     finishedAt: Date | null;
     failed: number;
+    checksStopped: number;
     byKind: Record<string, number>;
   }[] = await dataSource.query(
     `SELECT r.id::text AS id, r.created_at AS "createdAt", r.finished_at AS "finishedAt",
-              coalesce((r.counts->>'fail')::int, 0) AS failed,
+              coalesce((r.counts->>'fail')::int, 0) AS failed, r.checks_stopped AS "checksStopped",
               coalesce((SELECT jsonb_object_agg(k.kind, k.n)
                           FROM (SELECT d.key AS kind, sum(d.value::int)::int AS n
                                   FROM shards s CROSS JOIN LATERAL jsonb_each_text(s.by_diagnosis) d
                                  WHERE s.run_id = r.id AND jsonb_typeof(s.by_diagnosis) = 'object'
                                  GROUP BY d.key) k), '{}'::jsonb) AS "byKind"
-         FROM (SELECT id, created_at, finished_at, counts FROM runs
+         FROM (SELECT id, created_at, finished_at, counts, checks_stopped FROM runs
                 WHERE plan_id = $1 AND status = 'completed'
                 ORDER BY created_at DESC LIMIT $2) r
         ORDER BY r.created_at ASC, r.id ASC`,
@@ -47,6 +48,7 @@ export async function loadFindingsByKind(
       createdAt: r.createdAt.toISOString(),
       finishedAt: r.finishedAt?.toISOString() ?? null,
       failed: r.failed,
+      checksStopped: r.checksStopped,
       byKind: Object.fromEntries(DIAGNOSIS_KINDS.map((k) => [k, r.byKind[k] ?? 0])) as Record<DiagnosisKind, number>,
     })),
     limit,

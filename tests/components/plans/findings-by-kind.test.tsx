@@ -23,6 +23,7 @@ const VIEW: FindingsByKindView = {
       createdAt: '2026-12-03T02:30:00Z',
       finishedAt: '2026-12-03T02:31:00Z',
       failed: 20,
+      checksStopped: 0,
       byKind: counts({ inaccurate: 20 }),
     },
     {
@@ -30,6 +31,7 @@ const VIEW: FindingsByKindView = {
       createdAt: '2026-12-04T02:30:00Z',
       finishedAt: '2026-12-04T02:31:00Z',
       failed: 52,
+      checksStopped: 0,
       byKind: counts({ 'zero-sign': 31, 'cut-side': 2, inaccurate: 20 }),
     },
   ],
@@ -99,6 +101,27 @@ describe.each([390, 1440])('FindingsByKind at %i px', (width) => {
     expect(fill.style.height).toBe('40px');
     const toRgb = (hex: string) => `rgb(${[1, 3, 5].map((i) => parseInt(hex.slice(i, i + 2), 16)).join(', ')})`;
     expect(fill.style.backgroundColor).toBe(toRgb(theme.kindInk['cut-side']));
+  });
+
+  it('names the checks stopped by an error in each run as counting nothing, in the words of the run verdict', async () => {
+    const second = { ...VIEW.runs[1]!, checksStopped: 2 };
+    mockFetch(200, { ...VIEW, runs: [VIEW.runs[0], second] });
+    renderWithClient(<FindingsByKind planId={PLAN} />);
+    const note = await screen.findByTestId('findings-by-kind-stopped');
+    expect(note.textContent).toMatch(
+      /^Not counted here, as they checked nothing: 2 checks stopped by an error in the run of 4 Dec \d\d:\d\d\.$/,
+    );
+    expect(
+      screen.getByRole('link', { name: /^Run of 4 Dec \d\d:\d\d: 52 failing points, 2 checks stopped by an error$/ }),
+    ).toBeTruthy();
+    expect(screen.getByRole('link', { name: /^Run of 3 Dec \d\d:\d\d: 20 failing points$/ })).toBeTruthy();
+  });
+
+  it('says no findings beside the checks that checked nothing, never alone', async () => {
+    mockFetch(200, { runs: [{ ...VIEW.runs[0]!, failed: 0, checksStopped: 1, byKind: counts({}) }], limit: 12 });
+    renderWithClient(<FindingsByKind planId={PLAN} />);
+    expect(await screen.findByText('No findings in its completed run.')).toBeTruthy();
+    expect(screen.getByTestId('findings-by-kind-stopped').textContent).toMatch(/: 1 check stopped by an error in /);
   });
 
   it('says plainly when the plan has no completed run, or no findings', async () => {

@@ -57,6 +57,8 @@ describe('GET /api/plans/:id/findings-by-kind', () => {
         [run.id],
       );
       expect(run.failed).toBe(failed.n);
+      const [stored] = await t.db.dataSource.query(`SELECT checks_stopped AS n FROM runs WHERE id = $1`, [run.id]);
+      expect(run.checksStopped).toBe(stored.n);
     }
   }, 60_000);
 
