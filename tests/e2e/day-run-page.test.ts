@@ -123,6 +123,13 @@ describe("the run page through a maintainer's day", () => {
 
     await b.page.goto(`${BASE_URL}/plans/${planId}`);
     await sameVerdict(b.page.getByTestId('plan-latest-run'));
+    // The findings picture's "No findings" stands beside the check that checked nothing.
+    await b.page.getByText('No findings in its completed run.').waitFor();
+    await b.page
+      .getByTestId('findings-by-kind-stopped')
+      .getByText(/: 1 check stopped by an error in the run of /)
+      .waitFor();
+    await saveScreenshots(b.page, 'day-run-page-verdict-plan', () => b.page.getByTestId('plan-latest-run').waitFor());
   });
 
   it('filters the failure table by the short id a run shows, and says beside the field when it names no run', async () => {
