@@ -14,4 +14,18 @@ describe('SuiteFacts', () => {
     expect(fixedBy.textContent).toMatch(/^Fixed byvalue k = 0 at z0 = 2 \+ 0i \(the principal value times e2πiνk\)$/);
     expect(fixedBy.textContent).not.toContain('^');
   });
+
+  it('names each formula by its spoken form, not by the flat "(z2 − 1)1/2" of its raised pieces', () => {
+    render(<SuiteFacts suite={suiteSchema.parse(finiteCut)} />);
+    expect(
+      screen.getByRole('math', {
+        name: 'regular branch of open bracket z squared minus 1 close bracket to the power one half',
+      }),
+    ).toBeTruthy();
+    expect(
+      screen.getByRole('math', {
+        name: 'value k equals 0 at z sub 0 equals 2 plus 0 i (the principal value times e to the power 2 pi i nu k end exponent)',
+      }),
+    ).toBeTruthy();
+  });
 });
