@@ -6,6 +6,7 @@ import type { FailurePathPoint, FailurePathView } from '../../shared/failure-pat
 import { DIAGNOSIS_STYLES } from '../failures/diagnosis-styles';
 import { formatUlps } from '../../shared/format-ulps';
 import { SkText } from '../ui/sk-text';
+import { formulaSpeech } from '../ui/formula-speech';
 import { ChartText } from './chart-text';
 import { LegendEntry } from './legend-entry';
 
@@ -217,7 +218,9 @@ export function PathPlots({ view }: { view: FailurePathView }) {
         <View
           accessible
           accessibilityRole="image"
-          accessibilityLabel={`Error in ulps along the path ${view.path.name}: ${pts.filter((p) => p.outcome !== 'pass').length} points over the tolerance, the worst ${formatUlps(finiteUlps.length ? Math.max(...finiteUlps) : null)} ulps.`}
+          accessibilityLabel={formulaSpeech(
+            `Error in ulps along the path ${view.path.name}: ${pts.filter((p) => p.outcome !== 'pass').length} points over the tolerance, the worst ${formatUlps(finiteUlps.length ? Math.max(...finiteUlps) : null)} ulps. Up: ulps on a log scale from 0 to ${ulpTicks[ulpTicks.length - 1]!.text}; across: ${xLabel}.`,
+          )}
         >
           {frame(
             <G>
@@ -299,7 +302,9 @@ export function PathPlots({ view }: { view: FailurePathView }) {
         <View
           accessible
           accessibilityRole="image"
-          accessibilityLabel={`Argument of the expected and the library's value along the path ${view.path.name}. ${argWords}`}
+          accessibilityLabel={formulaSpeech(
+            `Argument of the expected and the library's value along the path ${view.path.name}, up from −π to π, across ${xLabel}. ${argWords}`,
+          )}
         >
           {frame(
             <G>

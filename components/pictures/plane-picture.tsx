@@ -3,6 +3,7 @@ import { StyleSheet, Text, View, type LayoutChangeEvent } from 'react-native';
 import Svg, { Circle, G, Line, Path, Polyline, Rect } from 'react-native-svg';
 import { theme } from '../../constants/theme';
 import { SmallButton } from '../ui/small-button';
+import { formulaSpeech } from '../ui/formula-speech';
 import { ChartText } from './chart-text';
 import { decadeText } from './decade-text';
 import { describePlaneScale } from './describe-plane-scale';
@@ -147,7 +148,9 @@ export function PlanePicture({
         accessible
         focusable
         accessibilityRole="image"
-        accessibilityLabel={`${label} Scale: ${scaleWords}; ${zoomWords}. Press + or − to zoom, 0 to reset.`}
+        accessibilityLabel={formulaSpeech(
+          `${label} Scale: ${scaleWords}; ${zoomWords}. Press + or − to zoom, 0 to reset.`,
+        )}
         style={{ height }}
       >
         {width > 0 ? (

@@ -91,7 +91,9 @@ describe('PathPlots', () => {
 
   it("draws the library's extra jump at its t and the reference's at its own", () => {
     render(<PathPlots view={misplacedJump()} />);
-    const arg = screen.getByRole('img', { name: /Argument of the expected and the library's value/ });
+    const arg = screen.getByRole('img', {
+      name: /^Argument of the expected and the library's value along the path unit circle, up from minus pi to pi, across t along the path/,
+    });
     const svg = arg.querySelector('svg')!;
     const label = (text: string) => Array.from(svg.querySelectorAll('text')).find((el) => el.textContent === text)!;
     expect(Number(label('library jump ≠').getAttribute('x'))).toBeCloseTo(xOfT(svg, 0.28125), 6);
@@ -114,10 +116,12 @@ describe('PathPlots', () => {
     expect(screen.queryByText('library jump ≠')).toBeNull();
   });
 
-  it('plots failing points above the tolerance line on the ulps scale and names the worst in its label', () => {
+  it('plots failing points above the tolerance line on the ulps scale and names the worst and the axes in its label, numbers said in words', () => {
     render(<PathPlots view={misplacedJump()} />);
     const ulps = screen.getByRole('img', {
-      name: 'Error in ulps along the path unit circle: 4 points over the tolerance, the worst 3.0e+15 ulps.',
+      name:
+        'Error in ulps along the path unit circle: 4 points over the tolerance, the worst 3.0 times 10 to the power 15 ulps.' +
+        ' Up: ulps on a log scale from 0 to 1 times 10 to the power 16; across: t along the path (0 equals start, 1 equals end).',
     });
     const svg = ulps.querySelector('svg')!;
     expect(Array.from(svg.querySelectorAll('text')).some((el) => el.textContent === 'tolerance 4 ulps')).toBe(true);

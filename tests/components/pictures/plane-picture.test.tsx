@@ -74,6 +74,26 @@ describe('PlanePicture', () => {
     expect(screen.getByText('points of the path “straddle cut 1”')).toBeTruthy();
   });
 
+  it('says its scale and its ring labels in words to a screen reader: "1e−300" is "1 times 10 to the power minus 300"', async () => {
+    const svg = await drawn(
+      <PlanePicture
+        label="A straddle."
+        pointSets={[{ name: 'straddle cut 1', points: straddle }]}
+        cuts={[SQRT_CUT]}
+        branchPoints={[{ re: 0, im: 0 }]}
+        height={340}
+        testID="plane"
+      />,
+    );
+    const name = screen.getByRole('img').getAttribute('aria-label')!;
+    expect(name).toMatch(
+      /^A straddle\. Scale: distance from minus 0\.5 on the cut, log scale \(rings at [^)]*1 times 10 to the power minus 300[^)]*\); directions from it are true; zoom 1 times\. Press plus or minus to zoom, 0 to reset\.$/,
+    );
+    expect(name).not.toMatch(/1e|−/);
+    const ring = Array.from(svg.querySelectorAll('text')).find((t) => t.textContent === '1e−300')!;
+    expect(ring.getAttribute('aria-label')).toBe('1 times 10 to the power minus 300');
+  });
+
   it.each([1e-3, 1e-310])('draws a circle of radius %p as a circle across the picture', async (radius) => {
     const svg = await drawn(
       <PlanePicture
