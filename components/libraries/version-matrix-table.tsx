@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import type { VersionMatrix } from '../../shared/version-matrix';
+import { FormulaText } from '../ui/formula-text';
 import { SkText } from '../ui/sk-text';
 import { formatComplexText } from '../../shared/format-complex-text';
 import { PANEL_BOX_STYLE } from '../ui/panel-box-style';
@@ -116,7 +117,7 @@ function SuiteRow({ suite, versions, wide }: { suite: SuiteEntry; versions: stri
           <SkText variant="mono">
             {suite.id} <Text style={styles.faint}>v{suite.version}</Text>
           </SkText>
-          <Text style={styles.subject}>{suite.subject}</Text>
+          <FormulaText text={suite.subject} typed style={styles.subject} />
           {suite.entry ? <Text style={styles.subject}>values built through the {suite.entry} entry</Text> : null}
         </View>
         <View style={wide ? styles.cellsWide : styles.cellsPhone}>

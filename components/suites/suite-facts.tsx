@@ -7,17 +7,22 @@ import { SkText } from '../ui/sk-text';
 import { describeSuitePath } from './describe-suite-path';
 import { formatComplexText } from '../../shared/format-complex-text';
 
-/** One field in words; `formula` sets it as maths (FormulaText), `mono` as code to copy. */
+/**
+ * One field in words; `formula` sets it as maths (FormulaText), `mono` as code to copy, `typed`
+ * as a formula shown as typed and said as maths (a subject).
+ */
 function Fact({
   label,
   children,
   mono = false,
   formula = false,
+  typed = false,
 }: {
   label: string;
   children: string;
   mono?: boolean;
   formula?: boolean;
+  typed?: boolean;
 }) {
   return (
     <View style={styles.fact}>
@@ -25,7 +30,7 @@ function Fact({
         {label}
       </SkText>
       <SkText variant="body" style={[styles.value, mono && styles.mono]}>
-        {formula ? <FormulaText text={children} size={theme.size.body} /> : children}
+        {formula || typed ? <FormulaText text={children} size={theme.size.body} typed={typed} /> : children}
       </SkText>
     </View>
   );
@@ -36,7 +41,7 @@ export function SuiteFacts({ suite }: { suite: Suite }) {
   const b = suite.branch;
   return (
     <View style={styles.box}>
-      <Fact label="Subject" mono>
+      <Fact label="Subject" mono typed>
         {suite.subject}
       </Fact>
       {b.kind === 'principal' ? (

@@ -85,6 +85,13 @@ export function readFormula(text: string, { variables = true }: { variables?: bo
         i = j;
         continue;
       }
+      // A digit-led run with two Latin letters or more is a name as written (a run id 37e7ec6f, a hex float 0x1p-3), not 37·10⁷…
+      const name = DIGIT.test(c) ? /^[0-9][0-9A-Za-z]*/.exec(run.slice(i))![0] : '';
+      if ((name.match(/[A-Za-z]/g) ?? []).length >= 2) {
+        add('word', name);
+        i += name.length;
+        continue;
+      }
       const number = DIGIT.test(c) ? NUMBER.exec(run.slice(i)) : null;
       if (number) {
         add('number', number[0]);

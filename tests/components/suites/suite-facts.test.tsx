@@ -24,6 +24,11 @@ describe('SuiteFacts', () => {
     ).toBeTruthy();
     expect(
       screen.getByRole('math', {
+        name: 'the square root of open bracket z minus 1 close bracket times the square root of open bracket z plus 1 close bracket',
+      }).textContent,
+    ).toBe('sqrt(z - 1) * sqrt(z + 1)');
+    expect(
+      screen.getByRole('math', {
         name: 'value k equals 0 at z sub 0 equals 2 plus 0 i (the principal value times e to the power 2 pi i nu k end exponent)',
       }),
     ).toBeTruthy();

@@ -67,9 +67,12 @@ describe('formulaSpeech', () => {
     );
   });
 
-  it('leaves words and sentences without maths as they are', () => {
+  it('leaves words, sentences without maths, run ids and hex floats as they are', () => {
     expect(formulaSpeech('signed zero (IEC 60559 / Annex G): a well-known rule')).toBe(
       'signed zero (IEC 60559 / Annex G): a well-known rule',
+    );
+    expect(formulaSpeech('a run id, as in "Run 37e7ec6f", or 0x1p-3')).toBe(
+      'a run id, as in "Run 37e7ec6f", or 0x1p-3',
     );
   });
 

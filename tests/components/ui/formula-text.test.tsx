@@ -25,6 +25,13 @@ describe('FormulaText, to a screen reader', () => {
     ).toBeTruthy();
   });
 
+  it('shows a typed subject exactly as typed, to copy, and names it by its spoken form', () => {
+    const { container } = render(<FormulaText text="pow(z,z)*pow(z,-z)-1" typed />);
+    expect(container.textContent).toBe('pow(z,z)*pow(z,-z)-1');
+    const formula = screen.getByRole('math', { name: 'z to the power z times z to the power minus z minus 1' });
+    expect(formula.querySelector('[aria-hidden="true"]')?.textContent).toBe('pow(z,z)*pow(z,-z)-1');
+  });
+
   it('stays plain text where there is nothing to set or to say otherwise', () => {
     const { container } = render(<FormulaText text="principal branch of every function" />);
     expect(screen.queryByRole('math')).toBeNull();
