@@ -8,7 +8,7 @@ const Sequencer = require('@jest/test-sequencer').default;
 const path = require('node:path');
 
 /** Files that read the seeded state, in the order they run. */
-const SEEDED_STATE_FIRST = ['day-overview.test.ts'];
+const SEEDED_STATE_FIRST = ['day-overview.test.ts', 'day-formula-speech.test.ts'];
 
 class SeededStateFirstSequencer extends Sequencer {
   sort(tests) {

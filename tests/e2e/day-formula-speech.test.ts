@@ -1,0 +1,61 @@
+import { DEMO_USERS } from '../../server/seed/demo-users';
+import { BASE_URL } from './support/open-browser';
+import { browserPerTest } from './support/browser-per-test';
+import { goTo } from './support/go-to';
+import { saveScreenshots } from './support/save-screenshots';
+import { signIn } from './support/sign-in';
+
+const b = browserPerTest();
+const kwame = DEMO_USERS.find((u) => u.email === 'kwame@sheetkeeper.test')!;
+
+/** The API as the signed-in page sees it (plain promise chains: the page has no babel helpers). */
+const api = <T>(path: string): Promise<T> =>
+  b.page.evaluate((p) => fetch('/api' + p).then((res) => res.json()), path) as Promise<T>;
+
+describe('formulas as a screen reader hears them, in Chromium’s accessibility tree', () => {
+  it('names a case’s rule and a suite’s branch, subject and story by their spoken forms, never the flat text of raised pieces', async () => {
+    const { page } = b;
+    await signIn(page, kwame.email, kwame.password);
+    await goTo(page, 'Failures');
+    await page.getByText(/failures? shown/).waitFor({ timeout: 20_000 });
+
+    // A regular-branch case: the rule is one math element, named in words.
+    const regular = await api<{ failures: { id: string }[] }>('/failures?suite=sqrt-z2-minus-1-naive-formula&limit=1');
+    await page.goto(`${BASE_URL}/failures/${regular.failures[0]!.id}`);
+    const rule = page.getByTestId('case-rule');
+    await rule.getByRole('math').waitFor({ timeout: 30_000 });
+    const ruleTree = await rule.ariaSnapshot();
+    expect(ruleTree).toMatch(
+      /- math "the regular branch of open bracket z squared minus 1 close bracket to the power one half with k equals 0 at z sub 0 equals [^"]*, continued from z sub 0 to z along a path that crosses none of the suite's cuts/,
+    );
+    // Nothing of the set pieces is read beside the name.
+    expect(ruleTree).not.toMatch(/z2|1\/2|\^/);
+
+    // A suite page: branch, subject and story.
+    await page.goto(`${BASE_URL}/suites/sqrt-z2-minus-1-finite-cut`);
+    const branch = page.getByRole('math', {
+      name: 'regular branch of open bracket z squared minus 1 close bracket to the power one half',
+      exact: true,
+    });
+    await branch.waitFor({ timeout: 30_000 });
+    await page
+      .getByRole('math', {
+        name: 'the square root of open bracket z minus 1 close bracket times the square root of open bracket z plus 1 close bracket',
+        exact: true,
+      })
+      .waitFor();
+    await page
+      .getByRole('math', {
+        name: /the square root of open bracket z squared minus 1 close bracket approximately equals z/,
+      })
+      .waitFor();
+    const pageTree = await page.locator('body').ariaSnapshot();
+    expect(pageTree).not.toMatch(/\(z2 − 1\)1\/2|e2πiνk/);
+    // The plane picture says its scale with words for its signs.
+    const picture = await page.getByRole('img', { name: /^Plane picture of / }).getAttribute('aria-label');
+    expect(picture).toMatch(/Press plus or minus to zoom/);
+    expect(picture).not.toMatch(/−/);
+
+    await saveScreenshots(page, 'suite-formula-speech', () => branch.waitFor());
+  });
+});
