@@ -2,6 +2,7 @@ import { StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import { theme } from '../../constants/theme';
 import { formatComplexText } from '../../shared/format-complex-text';
 import type { StepValue } from '../../shared/run-result';
+import { FormulaText } from '../ui/formula-text';
 import { SkText } from '../ui/sk-text';
 
 /**
@@ -19,7 +20,8 @@ export function StepsTable({ steps, firstLeft }: { steps: readonly StepValue[]; 
       {firstLeft !== null && steps[firstLeft] ? (
         <SkText variant="body">
           The value first left the reference at step {firstLeft + 1},{' '}
-          <Text style={styles.mono}>{steps[firstLeft]!.text}</Text>; the steps after it start from the library’s value.
+          <FormulaText text={steps[firstLeft]!.text} typed style={styles.mono} />; the steps after it start from the
+          library’s value.
         </SkText>
       ) : (
         <SkText variant="body">No step left the reference beyond the tolerance on its own.</SkText>
@@ -42,7 +44,7 @@ export function StepsTable({ steps, firstLeft }: { steps: readonly StepValue[]; 
             testID={`step-${i}`}
           >
             <Text role="cell" style={[styles.cell, styles.mono]}>
-              {i + 1}. {s.text}
+              {i + 1}. <FormulaText text={s.text} typed />
             </Text>
             <Text role="cell" style={[styles.cell, styles.mono]}>
               {wide ? '' : 'library   '}

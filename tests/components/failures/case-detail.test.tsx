@@ -92,6 +92,10 @@ describe.each([
     expect(screen.getByTestId('step-0').textContent).toContain('← first step that left the reference');
     expect(screen.getByTestId('step-0').textContent).toContain('−1 − 1.96e-15i');
     expect(screen.getByTestId('step-1').textContent).toContain('off the reference');
+    // Each step is shown as typed and said as maths.
+    expect(within(screen.getByTestId('step-1')).getByRole('math').getAttribute('aria-label')).toBe(
+      'log of open bracket z to the power 13 close bracket',
+    );
     expect(screen.getByText(/The value first left the reference at step 1/)).toBeTruthy();
   });
 
