@@ -16,16 +16,16 @@ const api = <T>(path: string): Promise<T> =>
   b.page.evaluate((p) => fetch('/api' + p).then((res) => res.json()), path) as Promise<T>;
 
 /**
- * axe-core's violations of any impact inside the page's math elements (evaluated through the
- * DevTools protocol: the Content-Security-Policy refuses an inline script). day-access.test.ts
- * checks whole screens; this names the formulas' own faults, an ARIA attribute a math element may
- * not carry among them.
+ * axe-core's violations of any impact inside the page's math elements and pictures (evaluated
+ * through the DevTools protocol: the Content-Security-Policy refuses an inline script).
+ * day-access.test.ts checks whole screens; this names the formulas' own faults, an ARIA attribute
+ * a math element or a chart's text may not carry among them.
  */
-async function mathViolations(page: Page): Promise<string[]> {
+async function formulaViolations(page: Page): Promise<string[]> {
   await page.evaluate(readFileSync(require.resolve('axe-core/axe.min.js'), 'utf8'));
   return page.evaluate(async () => {
     const { axe } = window as unknown as { axe: { run: (context: object, options: object) => Promise<AxeResults> } };
-    const results = await axe.run({ include: [['[role="math"]']] }, { resultTypes: ['violations'] });
+    const results = await axe.run({ include: [['[role="math"]'], ['[role="img"]']] }, { resultTypes: ['violations'] });
     return results.violations.map((v) => `${v.id} (${v.impact}): ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`);
   });
 }
@@ -48,7 +48,7 @@ describe('formulas as a screen reader hears them, in Chromium’s accessibility 
     );
     // Nothing of the set pieces is read beside the name.
     expect(ruleTree).not.toMatch(/z2|1\/2|\^/);
-    expect(await mathViolations(page)).toEqual([]);
+    expect(await formulaViolations(page)).toEqual([]);
 
     // A suite page: branch, subject and story.
     await page.goto(`${BASE_URL}/suites/sqrt-z2-minus-1-finite-cut`);
@@ -74,7 +74,7 @@ describe('formulas as a screen reader hears them, in Chromium’s accessibility 
     const picture = await page.getByRole('img', { name: /^Plane picture of / }).getAttribute('aria-label');
     expect(picture).toMatch(/Press plus or minus to zoom/);
     expect(picture).not.toMatch(/−/);
-    expect(await mathViolations(page)).toEqual([]);
+    expect(await formulaViolations(page)).toEqual([]);
 
     await saveScreenshots(page, 'suite-formula-speech', () => branch.waitFor());
   });
