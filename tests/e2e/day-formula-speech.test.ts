@@ -5,15 +5,12 @@ import { DEMO_USERS } from '../../server/seed/demo-users';
 import { BASE_URL } from './support/open-browser';
 import { browserPerTest } from './support/browser-per-test';
 import { goTo } from './support/go-to';
+import { pageApi } from './support/page-api';
 import { saveScreenshots } from './support/save-screenshots';
 import { signIn } from './support/sign-in';
 
 const b = browserPerTest();
 const kwame = DEMO_USERS.find((u) => u.email === 'kwame@sheetkeeper.test')!;
-
-/** The API as the signed-in page sees it (plain promise chains: the page has no babel helpers). */
-const api = <T>(path: string): Promise<T> =>
-  b.page.evaluate((p) => fetch('/api' + p).then((res) => res.json()), path) as Promise<T>;
 
 /**
  * axe-core's violations of any impact inside the page's math elements and pictures (evaluated
@@ -38,8 +35,10 @@ describe('formulas as a screen reader hears them, in Chromium’s accessibility 
     await page.getByText(/failures? shown/).waitFor({ timeout: 20_000 });
 
     // A regular-branch case: the rule is one math element, named in words.
-    const regular = await api<{ failures: { id: string }[] }>('/failures?suite=sqrt-z2-minus-1-naive-formula&limit=1');
-    await page.goto(`${BASE_URL}/failures/${regular.failures[0]!.id}`);
+    const regular = await pageApi(page)<{ body: { failures: { id: string }[] } }>(
+      '/failures?suite=sqrt-z2-minus-1-naive-formula&limit=1',
+    );
+    await page.goto(`${BASE_URL}/failures/${regular.body.failures[0]!.id}`);
     const rule = page.getByTestId('case-rule');
     await rule.getByRole('math').waitFor({ timeout: 30_000 });
     const ruleTree = await rule.ariaSnapshot();

@@ -47,19 +47,23 @@ async function drawn(ui: React.ReactElement): Promise<SVGElement> {
   });
 }
 
+/** The straddle at −0.5 beside the square root's cut and branch point, one point marked as the case. */
+const drawnStraddle = () =>
+  drawn(
+    <PlanePicture
+      label="A straddle."
+      pointSets={[{ name: 'straddle cut 1', points: straddle }]}
+      cuts={[SQRT_CUT]}
+      branchPoints={[{ re: 0, im: 0 }]}
+      marks={[{ at: straddle[1]!, tone: 'focus' }]}
+      height={340}
+      testID="plane"
+    />,
+  );
+
 describe('PlanePicture', () => {
   it('shows a straddle on the square root cut at −0.5 on a log scale from the cut, with the branch point 0 drawn inside', async () => {
-    const svg = await drawn(
-      <PlanePicture
-        label="A straddle."
-        pointSets={[{ name: 'straddle cut 1', points: straddle }]}
-        cuts={[SQRT_CUT]}
-        branchPoints={[{ re: 0, im: 0 }]}
-        marks={[{ at: straddle[1]!, tone: 'focus' }]}
-        height={340}
-        testID="plane"
-      />,
-    );
+    const svg = await drawnStraddle();
     expect(screen.getByTestId('plane-scale').textContent).toMatch(
       /^distance from −0\.5 on the cut, log scale \(rings at [^)]*1e−300[^)]*\); directions from it are true$/,
     );
@@ -75,16 +79,7 @@ describe('PlanePicture', () => {
   });
 
   it('says its scale and its ring labels in words to a screen reader: "1e−300" is "1 times 10 to the power minus 300"', async () => {
-    const svg = await drawn(
-      <PlanePicture
-        label="A straddle."
-        pointSets={[{ name: 'straddle cut 1', points: straddle }]}
-        cuts={[SQRT_CUT]}
-        branchPoints={[{ re: 0, im: 0 }]}
-        height={340}
-        testID="plane"
-      />,
-    );
+    const svg = await drawnStraddle();
     const name = screen.getByRole('img').getAttribute('aria-label')!;
     expect(name).toMatch(
       /^A straddle\. Scale: distance from minus 0\.5 on the cut, log scale \(rings at [^)]*1 times 10 to the power minus 300[^)]*\); directions from it are true; zoom 1 times\. Press plus or minus to zoom, 0 to reset\.$/,

@@ -21,14 +21,17 @@ describe('formulaPieces', () => {
     ['log(z^13) at x^13', 'log(*z*^{13}) at *x*^{13}'],
     ['pow(z, 2/5) * exp(z)', 'pow(*z*, 2/5) · exp(*z*)'],
     ['e^{±4π}', 'e^{±4π}'],
+    ['pow(z,z)*pow(z,-z)-1', 'pow(*z*,*z*)·pow(*z*,−*z*)−1'],
+    ['(1 − z²)^½ + iz', '(1 − *z*²)^{½} + iz'],
   ])('sets %s as maths', (text, expected) => {
     expect(shown(formulaPieces(text))).toBe(expected);
   });
 
-  it('leaves words, hyphenated words and exponent notation as they are', () => {
+  it('leaves words, hyphenated words, exponent notation and run ids as they are', () => {
     expect(shown(formulaPieces('counter-clockwise continuity at 1e-9, a well-known rule'))).toBe(
       'counter-clockwise continuity at 1e-9, a well-known rule',
     );
+    expect(shown(formulaPieces('as in "Run 37e7ec6f" or 0x1p-3'))).toBe('as in "Run 37e7ec6f" or 0x1p-3');
   });
 
   it('raises exponents only, every other character as typed, when told not to set variables', () => {
