@@ -27,6 +27,16 @@ async function formulaViolations(page: Page): Promise<string[]> {
   });
 }
 
+/** Chromium's own accessibility tree (DevTools' Accessibility domain): the names of its math nodes, and every name read. */
+async function chromiumTree(page: Page): Promise<{ math: string[]; read: string[] }> {
+  const cdp = await page.context().newCDPSession(page);
+  const { nodes } = await cdp.send('Accessibility.getFullAXTree');
+  await cdp.detach();
+  const shown = nodes.filter((n) => !n.ignored);
+  const name = (n: (typeof nodes)[number]) => String(n.name?.value ?? '');
+  return { math: shown.filter((n) => n.role?.value === 'math').map(name), read: shown.map(name) };
+}
+
 describe('formulas as a screen reader hears them, in Chromium’s accessibility tree', () => {
   it('names a case’s rule and a suite’s branch, subject and story by their spoken forms, never the flat text of raised pieces', async () => {
     const { page } = b;
@@ -69,6 +79,11 @@ describe('formulas as a screen reader hears them, in Chromium’s accessibility 
       .waitFor();
     const pageTree = await page.locator('body').ariaSnapshot();
     expect(pageTree).not.toMatch(/\(z2 − 1\)1\/2|e2πiνk/);
+    const chromium = await chromiumTree(page);
+    expect(chromium.math).toContain(
+      'regular branch of open bracket z squared minus 1 close bracket to the power one half',
+    );
+    expect(chromium.read.filter((n) => /\(z2 − 1\)1\/2|e2πiνk/.test(n))).toEqual([]);
     // The plane picture says its scale with words for its signs.
     const picture = await page.getByRole('img', { name: /^Plane picture of / }).getAttribute('aria-label');
     expect(picture).toMatch(/Press plus or minus to zoom/);
