@@ -48,6 +48,7 @@ import { AccountLinksAndDeactivation1764940000000 } from './migrations/176494000
 import { NewestFailuresFirstAndFirstRuns1764960000000 } from './migrations/1764960000000-newest-failures-first-and-first-runs';
 import { UlpsTiesNewestFirst1764970000000 } from './migrations/1764970000000-ulps-ties-newest-first';
 import { ChecksStoppedByError1764980000000 } from './migrations/1764980000000-checks-stopped-by-error';
+import { ChecksFailed1765000000000 } from './migrations/1765000000000-checks-failed';
 import { InvitationCancelledAt1764990000000 } from './migrations/1764990000000-invitation-cancelled-at';
 
 /** Entities and migrations are listed, not globbed, so tsx, jest and tsc builds all find them. */
@@ -100,6 +101,7 @@ export const MIGRATIONS = [
   UlpsTiesNewestFirst1764970000000,
   ChecksStoppedByError1764980000000,
   InvitationCancelledAt1764990000000,
+  ChecksFailed1765000000000,
 ];
 
 export function createDataSource(url: string): DataSource {

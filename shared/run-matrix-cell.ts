@@ -24,4 +24,12 @@ export interface RunMatrixCell {
   errors: string[];
   /** Why points were skipped, summed over the pair's paths, most points first (empty until done). */
   skipReasons: SkipReason[];
+  /**
+   * Checks beyond the points that failed: property laws (the run's property checks say which and
+   * where) and the names of paths whose monodromy check failed (the value continued once around
+   * the path is not the expected multiple of the start value). A pair can fail on these alone,
+   * with every point passed: its outcome is then `fail`, and its cell must not read as passed.
+   */
+  lawsFailed: number;
+  loopsFailed: string[];
 }

@@ -18,6 +18,12 @@ export interface RunView {
    * cells: an error outcome, or nothing judged (shared/check-stopped-by-error.ts). Every verdict reads it.
    */
   checksStopped: number;
+  /**
+   * Checks whose outcome is a failure: a failing point, a failed property law or a failed
+   * monodromy check. With no failing point, only laws and monodromy checks failed, and the
+   * verdict must say so rather than "all checked points passed".
+   */
+  checksFailed: number;
   regressions: number | null;
   /** Targets of queued pairs that no live worker has: those pairs wait until a worker that has one starts. */
   waitingFor: string[];

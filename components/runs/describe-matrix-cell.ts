@@ -4,6 +4,7 @@ import { diagnosisClass } from '../../shared/diagnosis-class';
 import { DIAGNOSIS_CLASSES } from '../../shared/diagnosis-classes';
 import { DIAGNOSIS_KIND_NAMES } from '../../shared/diagnosis-kind-names';
 import { DIAGNOSIS_KINDS } from '../../shared/diagnosis-kinds';
+import { plural } from '../../shared/plural';
 import type { RunMatrixCell } from '../../shared/run-matrix-cell';
 import { targetPageHref } from '../libraries/target-page-href';
 import { failuresHref } from './failures-href';
@@ -38,6 +39,12 @@ export interface CellLink {
 }
 
 const n = (x: number) => x.toLocaleString('en-GB');
+
+/** The checks beyond the points that failed, in words: "1 property law failed", "2 monodromy checks failed". */
+const beyondPointsWords = (cell: Pick<RunMatrixCell, 'lawsFailed' | 'loopsFailed'>): string[] => [
+  ...(cell.lawsFailed > 0 ? [`${plural(cell.lawsFailed, 'property law')} failed`] : []),
+  ...(cell.loopsFailed.length > 0 ? [`${plural(cell.loopsFailed.length, 'monodromy check')} failed`] : []),
+];
 
 /**
  * A matrix cell in words and glyphs, so it reads without its colour: the outcome and its counts,
@@ -94,6 +101,7 @@ export function describeMatrixCell(cell: RunMatrixCell, runId: string): MatrixCe
   const classes = DIAGNOSIS_CLASSES.map((c) => [c, cell.byClass?.[c] ?? 0] as const).filter(([, count]) => count > 0);
   const details: string[] = [];
   const said: string[] = [];
+  const beyond = beyondPointsWords(cell);
   let headline: string;
   let tone: Tone;
   if (checkStoppedByError(cell)) {
@@ -137,6 +145,12 @@ export function describeMatrixCell(cell: RunMatrixCell, runId: string): MatrixCe
       details.push(`${OUTCOME_GLYPH.error} ${n(counts.error)} error`);
       said.push(`${n(counts.error)} in error`);
     }
+  } else if (beyond.length > 0) {
+    // Every point passed, but a law or a monodromy check did not: the pair failed, and says on what.
+    tone = 'fail';
+    headline = `${OUTCOME_GLYPH.fail} ${beyond.join(' · ')}`;
+    details.push(`${OUTCOME_GLYPH.pass} ${n(counts.pass)} points passed`);
+    said.push(...beyond, `${n(counts.pass)} points passed`);
   } else {
     tone = cell.status === 'cancelled' ? 'neutral' : 'pass';
     headline = `${OUTCOME_GLYPH.pass} ${n(counts.pass)}`;
@@ -145,6 +159,14 @@ export function describeMatrixCell(cell: RunMatrixCell, runId: string): MatrixCe
       details.push('× cancelled part way');
       said.push('cancelled part way');
     }
+  }
+  if (counts.fail > 0 && beyond.length > 0 && !checkStoppedByError(cell)) {
+    details.push(...beyond);
+    said.push(...beyond);
+  }
+  for (const path of cell.loopsFailed) {
+    details.push(`monodromy around “${path}” failed`);
+    said.push(`the monodromy check around ${path} failed`);
   }
   if (reasons.length > 0) {
     // Why, not only how many: "complex.js@2.4.3 has no acsch: 40 skipped".

@@ -8,9 +8,14 @@ import { runVerdict } from './run-verdict';
 
 /**
  * A run's verdict as glyph, words and colour together, so it reads without the colour, and under
- * it the checks stopped by an error in words: the same on every screen that shows a run.
+ * it in words the checks that failed with every point passed and the checks stopped by an error:
+ * the same on every screen that shows a run.
  */
-export function RunStatusBadge({ run }: { run: Pick<RunView, 'status' | 'counts' | 'checksStopped'> }) {
+export function RunStatusBadge({
+  run,
+}: {
+  run: Pick<RunView, 'status' | 'counts' | 'checksStopped' | 'checksFailed'>;
+}) {
   const verdict = runVerdict(run);
   const tone = OUTCOME_TONE[verdict.tone];
   return (
@@ -22,6 +27,11 @@ export function RunStatusBadge({ run }: { run: Pick<RunView, 'status' | 'counts'
         edge={tone.edge}
         accessibilityLabel={`status: ${verdict.word}`}
       />
+      {verdict.beyondPoints ? (
+        <SkText variant="caption" tone="ink" testID="run-checks-beyond-points">
+          {verdict.beyondPoints}
+        </SkText>
+      ) : null}
       {verdict.stopped ? (
         <SkText variant="caption" tone="ink" testID="run-checks-stopped">
           {verdict.stopped}

@@ -53,6 +53,13 @@ export class Run {
   @Column({ type: 'integer', name: 'checks_stopped', default: 0 })
   checksStopped!: number;
 
+  /**
+   * Checks (shards) whose outcome is `fail`: a failing point, a failed property law or a failed
+   * monodromy check. Counted by the shard executor as each shard is stored (migration 1765000000000).
+   */
+  @Column({ type: 'integer', name: 'checks_failed', default: 0 })
+  checksFailed!: number;
+
   /** Failures new since the previous completed run of the plan, per the regression rule; set when the run completes. */
   @Column({ type: 'integer', nullable: true })
   regressions!: number | null;

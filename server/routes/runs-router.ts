@@ -97,8 +97,14 @@ export function runsRouter(dataSource: DataSource, runs: RunService): Router {
       const cells: RunMatrixCell[] = await dataSource.query(
         `SELECT s.suite_slug AS "suite", s.target_name AS "target", s.status, s.outcome, s.counts, s.by_class AS "byClass",
                 s.by_diagnosis AS "byDiagnosis", s.checked, s.errors, ${SKIP_REASONS_SQL} AS "skipReasons",
-                w.label AS "worker", ${noWorkerHasTargetSql('s')} AS "noWorkerHasTarget"
+                w.label AS "worker", ${noWorkerHasTargetSql('s')} AS "noWorkerHasTarget",
+                coalesce(laws.failed, 0) AS "lawsFailed", coalesce(loops.failed, '{}') AS "loopsFailed"
            FROM shards s LEFT JOIN workers w ON w.id = s.worker_id
+           -- Grouped once per run through the run_id indexes, not looked up cell by cell.
+           LEFT JOIN (SELECT shard_id, count(*)::int AS failed FROM property_results
+                       WHERE run_id = $1 AND outcome->>'kind' = 'failed' GROUP BY shard_id) laws ON laws.shard_id = s.id
+           LEFT JOIN (SELECT shard_id, array_agg(path_name ORDER BY path_name) AS failed FROM path_summaries
+                       WHERE run_id = $1 AND (monodromy->>'pass')::boolean = false GROUP BY shard_id) loops ON loops.shard_id = s.id
           WHERE s.run_id = $1 ORDER BY s.suite_slug, s.target_name`,
         [id],
       );

@@ -78,6 +78,7 @@ export class RunService {
           counts: { pass: 0, fail: 0, error: 0, skipped: 0, notApplicable: 0 },
           byClass: { branch: 0, accuracy: 0 },
           checksStopped: 0,
+          checksFailed: 0,
           regressions: null,
         }),
       );

@@ -116,7 +116,8 @@ export class ShardExecutor {
       // Counted by the matrix's own rule, so every list judges the run as its page does.
       const checksStopped =
         run.checksStopped + (checkStoppedByError({ status: 'done', outcome, counts: result.counts }) ? 1 : 0);
-      await tx.getRepository(Run).update(run.id, { counts, byClass, shardsDone, checksStopped });
+      const checksFailed = run.checksFailed + (outcome === 'fail' ? 1 : 0);
+      await tx.getRepository(Run).update(run.id, { counts, byClass, shardsDone, checksStopped, checksFailed });
       if (shardsDone === run.shardsTotal && run.status !== 'cancelled') {
         await markRegressions(tx, run.id, { outbox: this.options.outbox, appUrl: this.options.appUrl });
       }

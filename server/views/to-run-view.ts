@@ -14,6 +14,7 @@ export function toRunView(run: Run, waitingFor: string[]): RunView {
     counts: run.counts,
     byClass: run.byClass,
     checksStopped: run.checksStopped,
+    checksFailed: run.checksFailed,
     regressions: run.regressions,
     waitingFor,
     requestedBy: run.requestedBy?.displayName ?? null,

@@ -31,6 +31,8 @@ const cell = (suite: string, done: boolean): RunMatrixCell => ({
   skipReasons: [],
   worker: done ? 'build-7:4121' : null,
   noWorkerHasTarget: false,
+  lawsFailed: 0,
+  loopsFailed: [],
 });
 
 function wrapper({ children }: { children: ReactNode }) {

@@ -12,6 +12,7 @@ export const RUNNING_RUN: RunView = {
   counts: { pass: 100, fail: 0, error: 0, skipped: 0, notApplicable: 0 },
   byClass: { branch: 0, accuracy: 0 },
   checksStopped: 0,
+  checksFailed: 0,
   regressions: null,
   waitingFor: [],
   requestedBy: 'Kwame Asante',

@@ -31,6 +31,7 @@ const run = (over: Partial<RunView>): RunView => ({
   counts: { pass: 480, fail: 7, error: 0, skipped: 0, notApplicable: 0 },
   byClass: { branch: 2, accuracy: 5 },
   checksStopped: 0,
+  checksFailed: 0,
   regressions: 5,
   waitingFor: [],
   requestedBy: null,

@@ -16,6 +16,7 @@ const STOPPED: RunView = {
   shardsDone: 4,
   counts: { pass: 480, fail: 0, error: 0, skipped: 308, notApplicable: 0 },
   checksStopped: 2,
+  checksFailed: 0,
   finishedAt: '2026-03-01T02:41:00Z',
 };
 

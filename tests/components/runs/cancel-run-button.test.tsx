@@ -16,6 +16,7 @@ const RUN: RunView = {
   counts: { pass: 300, fail: 0, error: 0, skipped: 0, notApplicable: 0 },
   byClass: { branch: 0, accuracy: 0 },
   checksStopped: 0,
+  checksFailed: 0,
   regressions: null,
   waitingFor: [],
   requestedBy: 'Kwame Asante',

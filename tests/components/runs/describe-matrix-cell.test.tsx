@@ -16,6 +16,8 @@ const cell = (over: Partial<RunMatrixCell>): RunMatrixCell => ({
   skipReasons: [],
   worker: null,
   noWorkerHasTarget: false,
+  lawsFailed: 0,
+  loopsFailed: [],
   ...over,
 });
 
@@ -121,5 +123,53 @@ describe('describeMatrixCell and an error cell', () => {
       RUN,
     );
     expect(words.link?.href).toBe(`/failures?run=${RUN}&suite=acsch-principal-sz&target=complex.js%402.5.0`);
+  });
+});
+
+describe('describeMatrixCell and the checks beyond the points', () => {
+  const allPointsPassed = (over: Partial<RunMatrixCell>) =>
+    cell({
+      suite: 'log-principal-sz',
+      target: 'complex.js@2.3.0',
+      status: 'done',
+      outcome: 'fail',
+      counts: { pass: 154, fail: 0, error: 0, skipped: 0, notApplicable: 0 },
+      byClass: { branch: 0, accuracy: 0 },
+      byDiagnosis: {},
+      ...over,
+    });
+
+  it('never shows a pair as passed when a property law failed with every point passed', () => {
+    // The demo's log-principal-sz on complex.js@2.3.0: every point passed, exp(log z) = z did not.
+    const words = describeMatrixCell(allPointsPassed({ lawsFailed: 1 }), RUN);
+    expect(words.tone).toBe('fail');
+    expect(words.headline).toBe('❌ 1 property law failed');
+    expect(words.details).toEqual(['✓ 154 points passed']);
+    expect(words.label).toBe('log-principal-sz on complex.js@2.3.0: 1 property law failed, 154 points passed');
+    // No row of the failure table holds a law: the property checks below say which and where.
+    expect(words.link).toBeNull();
+  });
+
+  it('names each path whose monodromy check failed', () => {
+    const words = describeMatrixCell(allPointsPassed({ loopsFailed: ['around branch point 1'] }), RUN);
+    expect(words.tone).toBe('fail');
+    expect(words.headline).toBe('❌ 1 monodromy check failed');
+    expect(words.details).toEqual(['✓ 154 points passed', 'monodromy around “around branch point 1” failed']);
+    expect(words.label).toContain('the monodromy check around around branch point 1 failed');
+  });
+
+  it('adds failed laws beside failing points', () => {
+    const words = describeMatrixCell(
+      allPointsPassed({
+        counts: { pass: 150, fail: 4, error: 0, skipped: 0, notApplicable: 0 },
+        byClass: { branch: 4, accuracy: 0 },
+        byDiagnosis: { 'zero-sign': 4 },
+        lawsFailed: 2,
+      }),
+      RUN,
+    );
+    expect(words.headline).toBe('❌ 4 · 4 branch');
+    expect(words.details).toContain('2 property laws failed');
+    expect(words.link?.href).toBe(`/failures?run=${RUN}&suite=log-principal-sz&target=complex.js%402.3.0`);
   });
 });

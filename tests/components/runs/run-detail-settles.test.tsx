@@ -33,6 +33,8 @@ const cell = (suite: string, done: boolean): RunMatrixCell => ({
   errors: [],
   worker: done ? 'build-7:4121' : null,
   noWorkerHasTarget: false,
+  lawsFailed: 0,
+  loopsFailed: [],
 });
 
 /**
@@ -152,6 +154,7 @@ describe('RunDetail when its run finishes while the page is open', () => {
             counts: { pass: 40, fail: 0, error: 0, skipped: 80, notApplicable: 0 },
             // As the server counts them when each shard is stored (shard-executor.ts).
             checksStopped: 2,
+            checksFailed: 0,
           },
         },
       };

@@ -28,6 +28,8 @@ const cell = (over: Partial<RunMatrixCell>): RunMatrixCell => ({
   skipReasons: [],
   worker: null,
   noWorkerHasTarget: false,
+  lawsFailed: 0,
+  loopsFailed: [],
   ...over,
 });
 

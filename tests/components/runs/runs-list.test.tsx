@@ -27,6 +27,7 @@ const run = (n: number, over: Partial<RunView> = {}): RunView => ({
   counts: { pass: 480, fail: 3, error: 0, skipped: 0, notApplicable: 0 },
   byClass: { branch: 3, accuracy: 0 },
   checksStopped: 0,
+  checksFailed: 0,
   regressions: 2,
   waitingFor: [],
   requestedBy: null,
@@ -101,6 +102,7 @@ describe('RunsList', () => {
         counts: { pass: 480, fail: 0, error: 0, skipped: 308, notApplicable: 0 },
         byClass: { branch: 0, accuracy: 0 },
         checksStopped: 2,
+        checksFailed: 0,
         regressions: null,
       });
       api([stopped, run(4, { counts: stopped.counts, byClass: stopped.byClass, regressions: null })]);
