@@ -1,14 +1,13 @@
 import type request from 'supertest';
+import type { ComplexPair } from '../../../harness/adapters/complex-pair';
 import { describeMatrixCell } from '../../../components/runs/describe-matrix-cell';
 import { runVerdict } from '../../../components/runs/run-verdict';
 import { tallyCells } from '../../../components/runs/tally-cells';
 import { ChecksFailed1765000000000 } from '../../../server/migrations/1765000000000-checks-failed';
-import type { OverviewView } from '../../../shared/overview-view';
-import type { RunMatrixCell } from '../../../shared/run-matrix-cell';
-import type { RunView } from '../../../shared/run-view';
 import { referenceTarget } from '../../harness/support/reference-target';
 import { approvedSuite } from '../../setup/approved-suite';
 import { executeRunShards } from '../../setup/execute-run-shards';
+import { runEverywhere } from '../../setup/run-everywhere';
 import { signInAs } from '../../setup/sign-in-as';
 import { startTestApp, type TestApp } from '../../setup/test-app';
 
@@ -42,11 +41,11 @@ describe('checks that fail on a law with every point passed, counted as shards a
     planId = plan.body.plan.id;
     runId = (await kwame.post('/api/runs').send({ planId })).body.run.id;
     const wrongNearZero = {
-      sqrt: (args: [number, number][], reference: (op: string, a: [number, number][]) => [number, number]) => {
+      sqrt: (args: ComplexPair[], reference: (op: string, a: ComplexPair[]) => ComplexPair): ComplexPair => {
         const [re, im] = reference('sqrt', args);
         const [zr, zi] = args[0]!;
         const small = Math.hypot(zr, zi) < 0.25 && (zr !== 0 || zi !== 0);
-        return small ? ([re * 1.5, im * 1.5] as [number, number]) : [re, im];
+        return small ? [re * 1.5, im * 1.5] : [re, im];
       },
     };
     await executeRunShards(t.db.dataSource, runId, (name) =>
@@ -57,14 +56,7 @@ describe('checks that fail on a law with every point passed, counted as shards a
   }, 60_000);
   afterAll(() => t.stop());
 
-  const views = async () => {
-    const listed = (await kwame.get(`/api/runs?plan=${planId}`)).body.runs as RunView[];
-    const one = (await kwame.get(`/api/runs/${runId}`)).body.run as RunView;
-    const overview = (await kwame.get('/api/overview')).body.overview as OverviewView;
-    const card = overview.plans.find((p) => p.planId === planId)!.completed!;
-    const cells = (await kwame.get(`/api/runs/${runId}/matrix`)).body.cells as RunMatrixCell[];
-    return { listed: listed.find((r) => r.id === runId)!, one, card, cells };
-  };
+  const views = () => runEverywhere(kwame, planId, runId);
 
   it('fails the pair on its law alone: every point passed, the outcome is fail, and the cell says which', async () => {
     const { cells } = await views();

@@ -3,12 +3,10 @@ import { tallyCells } from '../../../components/runs/tally-cells';
 import { describeMatrixCell } from '../../../components/runs/describe-matrix-cell';
 import { runVerdict } from '../../../components/runs/run-verdict';
 import { ChecksStoppedByError1764980000000 } from '../../../server/migrations/1764980000000-checks-stopped-by-error';
-import type { OverviewView } from '../../../shared/overview-view';
-import type { RunMatrixCell } from '../../../shared/run-matrix-cell';
-import type { RunView } from '../../../shared/run-view';
 import { referenceTarget } from '../../harness/support/reference-target';
 import { approvedSuite } from '../../setup/approved-suite';
 import { executeRunShards } from '../../setup/execute-run-shards';
+import { runEverywhere } from '../../setup/run-everywhere';
 import { signInAs } from '../../setup/sign-in-as';
 import { startTestApp, type TestApp } from '../../setup/test-app';
 import { withoutOperation } from '../../setup/without-operation';
@@ -50,14 +48,7 @@ describe('checks stopped by an error, counted as shards are stored', () => {
   }, 60_000);
   afterAll(() => t.stop());
 
-  const views = async () => {
-    const listed = (await kwame.get(`/api/runs?plan=${planId}`)).body.runs as RunView[];
-    const one = (await kwame.get(`/api/runs/${runId}`)).body.run as RunView;
-    const overview = (await kwame.get('/api/overview')).body.overview as OverviewView;
-    const card = overview.plans.find((p) => p.planId === planId)!.completed!;
-    const cells = (await kwame.get(`/api/runs/${runId}/matrix`)).body.cells as RunMatrixCell[];
-    return { listed: listed.find((r) => r.id === runId)!, one, card, cells };
-  };
+  const views = () => runEverywhere(kwame, planId, runId);
 
   it('stores the matrix’s count of stopped checks on the run, and the list, run view and Overview judge by it alike', async () => {
     const { listed, one, card, cells } = await views();
