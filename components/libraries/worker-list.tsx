@@ -26,7 +26,7 @@ export function WorkerList() {
             Running since {formatDate(w.startedAt)} · {targetCountWords(w.targets.length)}
           </SkText>
           <SkText variant="mono" style={styles.targets}>
-            {w.targets.length > 0 ? w.targets.join(', ') : 'none: it takes no shards'}
+            {w.targets.length > 0 ? w.targets.join(', ') : 'none: it runs no checks'}
           </SkText>
         </View>
       ))}

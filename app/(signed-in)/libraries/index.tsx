@@ -34,7 +34,7 @@ export default function LibrariesScreen() {
       </TitledPanel>
       <TitledPanel
         title="Workers running now"
-        lead="The processes that take shards, on this machine or others, each with the targets it has. A pair waits until a worker that has its target is running."
+        lead="The processes that run checks, on this machine or others, each with the targets it has. A check waits until a worker that has its target is running."
         testID="live-workers-panel"
       >
         <WorkerList />

@@ -11,7 +11,7 @@ export default function RunsScreen() {
   return (
     <ScreenBody
       title="Runs"
-      lead="Each run executes a plan: every approved suite against every installed target of the plan, one shard per pair."
+      lead="Each run executes a plan: every approved suite against every installed target of the plan, each pair one check."
     >
       <RunsList
         filters={filters}

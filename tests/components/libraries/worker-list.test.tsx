@@ -32,7 +32,7 @@ describe('WorkerList', () => {
     const a = await screen.findByTestId('worker-ci-a:101');
     expect(a.textContent).toContain('2 targets');
     expect(a.textContent).toContain('complex.js@2.4.2, glibc@2.36');
-    expect((await screen.findByTestId('worker-ci-b:202')).textContent).toContain('none: it takes no shards');
+    expect((await screen.findByTestId('worker-ci-b:202')).textContent).toContain('none: it runs no checks');
   });
 
   it('says that runs wait when no worker is running', async () => {
