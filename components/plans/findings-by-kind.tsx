@@ -12,7 +12,7 @@ import { DIAGNOSIS_KINDS } from '../../shared/diagnosis-kinds';
 import { failuresPath } from '../../shared/failures-path';
 import type { FindingsByKindView } from '../../shared/findings-by-kind-view';
 import { DIAGNOSIS_STYLES } from '../failures/diagnosis-styles';
-import { STOPPED_BY_ERROR } from '../runs/stopped-by-error';
+import { STOPPED_BY_ERROR } from '../../shared/stopped-by-error';
 import { QueryState } from '../ui/query-state';
 import { SkText } from '../ui/sk-text';
 import { TitledPanel } from '../ui/titled-panel';

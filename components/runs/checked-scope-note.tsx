@@ -4,7 +4,7 @@ import type { CheckedScope } from '../../shared/run-result';
 import { SkText } from '../ui/sk-text';
 import { NOTE_BOX_STYLE } from '../ui/note-box-style';
 import { plural } from '../../shared/plural';
-import { STOPPED_BY_ERROR } from './stopped-by-error';
+import { STOPPED_BY_ERROR } from '../../shared/stopped-by-error';
 
 const CONVENTION_WORDS: Record<string, string> = {
   'signed-zero': 'signed zero (IEC 60559 / ISO C Annex G)',

@@ -1,7 +1,7 @@
 import { plural } from '../../shared/plural';
 import type { RunView } from '../../shared/run-view';
 import type { Tone } from './outcome-tone';
-import { STOPPED_BY_ERROR } from './stopped-by-error';
+import { STOPPED_BY_ERROR } from '../../shared/stopped-by-error';
 
 export interface RunVerdict {
   glyph: string;

@@ -1,5 +1,5 @@
 import { OUTCOME_GLYPH } from './outcome-glyph';
-import { STOPPED_BY_ERROR } from './stopped-by-error';
+import { STOPPED_BY_ERROR } from '../../shared/stopped-by-error';
 import type { CellTally } from './tally-cells';
 
 /** A tally of checks in words, each count with its glyph: "✓ 9 passed · ❌ 2 with failures · ◊ 8 stopped by an error". */

@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
 import { Run } from '../entities/run';
 import { coveredByDeviationSql } from '../sql/covered-by-deviation-sql';
@@ -10,6 +11,7 @@ import type { DiagnosisKind } from '../../shared/diagnosis';
 import type { RegressionRow } from './regression-row';
 import { targetKeySql } from '../sql/target-key-sql';
 import { writeRegressionGroups } from './write-regression-groups';
+import { newlyStoppedChecks } from './newly-stopped-checks';
 
 /**
  * Completes a run: marks as regressions the failing points that passed in the previous
@@ -56,22 +58,26 @@ export async function markRegressions(
     // The Overview's counts (entities/regression-group.ts), written with the marks they count.
     if (count > 0) await writeRegressionGroups(tx, run.id);
   }
+  // Checks judged last time and stopped by an error now regress no point, yet are news: mailed too.
+  const stopped = previous ? await newlyStoppedChecks(tx, run.id, previous.id) : [];
+  const stoppedKeys = [...new Set(stopped.map((c) => c.targetKey))];
   // No completed run to compare with (the plan's first to complete): regressions stay null, so
   // every screen says "first run of this plan to complete" rather than "0 since the previous".
   await tx
     .getRepository(Run)
     .update(run.id, { status: 'completed', finishedAt: new Date(), regressions: previous ? count : null });
-  // The plan's recipients, and everyone subscribed to a library that regressed.
+  // The plan's recipients, and everyone subscribed to a library that regressed or whose check stopped.
   const subscribers: { email: string }[] =
-    count > 0
+    count > 0 || stopped.length > 0
       ? await tx.query(
           `SELECT DISTINCT u.email FROM subscriptions s JOIN users u ON u.id = s.user_id
-            WHERE s.target_key IN (SELECT DISTINCT ${targetKeySql('target_name')} FROM failures WHERE run_id = $1 AND is_regression)`,
-          [run.id],
+            WHERE s.target_key IN (SELECT DISTINCT ${targetKeySql('target_name')} FROM failures WHERE run_id = $1 AND is_regression)
+               OR s.target_key = ANY($2::text[])`,
+          [run.id, stoppedKeys],
         )
       : [];
   const recipients = [...new Set([...(run.plan?.recipients ?? []), ...subscribers.map((s) => s.email)])];
-  if (count > 0 && recipients.length > 0) {
+  if ((count > 0 || stopped.length > 0) && recipients.length > 0) {
     const rows: RegressionRow[] = (
       await tx.query(
         `SELECT id::text, suite_slug, target_name, path_name, z, z_hex, expected, actual, diagnosis, labels, finding_class,
@@ -156,7 +162,15 @@ export async function markRegressions(
         byKind,
         targets,
         versionChanges,
-        idempotencyKey: `regressions:${run.plan?.id ?? run.planName}:${previous?.id ?? 'none'}:${digest}`,
+        stopped,
+        // The stopped checks are part of what is news, so a second run with the same ones is not mailed again.
+        idempotencyKey: `regressions:${run.plan?.id ?? run.planName}:${previous?.id ?? 'none'}:${digest}${
+          stopped.length > 0
+            ? `:stopped:${createHash('md5')
+                .update(stopped.map((c) => `${c.suite}|${c.targetKey}`).join(','))
+                .digest('hex')}`
+            : ''
+        }`,
       }),
       tx,
     );

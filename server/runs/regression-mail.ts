@@ -11,6 +11,8 @@ import { REGRESSION_MAIL_ROWS } from './regression-mail-rows';
 import { escapeHtml as escape } from '../mail/escape-html';
 import { regressionSummary } from './regression-summary';
 import { plural } from '../../shared/plural';
+import { STOPPED_BY_ERROR } from '../../shared/stopped-by-error';
+import type { StoppedCheck } from './newly-stopped-checks';
 
 const c = (v: WireComplex | null) => formatComplexText(v);
 /** Every label of a row in words, the leading one first; "error" for a row without one. */
@@ -43,6 +45,9 @@ const HEADING: Record<DiagnosisClass, string> = {
  * input bits, expected and actual values, every label, a convention choice, a composed subject's
  * steps with the first that left the reference, the rule, a reproducer and a link to the case;
  * plain text and HTML with the same content. It says what a regression is and that it covers only what was checked.
+ * Checks that judged points in the previous run and were stopped by an error in this one are listed
+ * after the summary, each with its reason; a run with such checks and no regression gets this mail too,
+ * its subject and lead saying so (a library that lost a function regresses no point and was silent).
  * In HTML each regression is a block of label–value rows, two columns wide, so the mail reads on
  * a phone without scrolling sideways (eight columns side by side did not).
  */
@@ -61,16 +66,29 @@ export function regressionMail(input: {
   /** Targets by number of regressions, most first. */
   targets: { name: string; count: number }[];
   versionChanges: { key: string; from: string; to: string }[];
+  /** Checks judged in the previous completed run and stopped by an error in this one (newly-stopped-checks.ts). */
+  stopped?: StoppedCheck[];
   /** Keeps the same regressions from being mailed twice (mark-regressions.ts). */
   idempotencyKey?: string;
 }): NewMail {
   const { total, byClass } = input;
+  const stopped = input.stopped ?? [];
   const link = (id: string) => `${input.appUrl}/failures/${id}`;
+  const runLink = `${input.appUrl}/runs/${input.runId}`;
   const accuracyOnly = byClass.branch === 0 && byClass.accuracy > 0;
-  const subject = `[Sheetkeeper] ${plural(total, 'regression')} in ${input.planName}: ${
-    accuracyOnly ? 'accuracy only' : `${byClass.branch} branch, ${byClass.accuracy} accuracy`
-  }`;
-  const lead = `${plural(total, 'point')} passed in the previous completed run of "${input.planName}" and ${total === 1 ? 'fails' : 'fail'} now: ${plural(byClass.branch, 'branch finding')} and ${plural(byClass.accuracy, 'accuracy finding')}.`;
+  const stoppedWords = `${plural(stopped.length, 'check')} ${STOPPED_BY_ERROR}`;
+  const subject =
+    total > 0
+      ? `[Sheetkeeper] ${plural(total, 'regression')} in ${input.planName}: ${
+          accuracyOnly ? 'accuracy only' : `${byClass.branch} branch, ${byClass.accuracy} accuracy`
+        }${stopped.length > 0 ? `; ${stoppedWords}` : ''}`
+      : `[Sheetkeeper] ${stoppedWords} in ${input.planName}: checked last time, nothing judged now`;
+  const lead =
+    total > 0
+      ? `${plural(total, 'point')} passed in the previous completed run of "${input.planName}" and ${total === 1 ? 'fails' : 'fail'} now: ${plural(byClass.branch, 'branch finding')} and ${plural(byClass.accuracy, 'accuracy finding')}.`
+      : `No point that passed in the previous completed run of "${input.planName}" fails now, but ${stoppedWords} that judged points then: this run checked nothing of ${stopped.length === 1 ? 'it' : 'them'}, so ${stopped.length === 1 ? 'it' : 'they'} could not regress either.`;
+  const stoppedHeading = `Checks that ran last time and were ${STOPPED_BY_ERROR} now (${stopped.length})`;
+  const stoppedLines = stopped.map((c) => `${c.suite} × ${c.target}: ${c.reason}`);
   const classLine = accuracyOnly
     ? `These regressions are accuracy only: every value is on the expected branch with the expected zero signs, and only further from the exact value than the tolerance allows.`
     : byClass.branch > 0
@@ -101,7 +119,8 @@ export function regressionMail(input: {
     lead,
     ...(classLine ? [classLine] : []),
     '',
-    ...summary.text,
+    ...(total > 0 ? summary.text : []),
+    ...(stopped.length > 0 ? [stoppedHeading, ...stoppedLines.map((l) => `  ${l}`), `  the run: ${runLink}`, ''] : []),
     changesLine,
     '',
     ...groups.flatMap((g) => [
@@ -129,14 +148,20 @@ export function regressionMail(input: {
         }),
       ]),
     ]),
-    more > 0 ? `…and ${more} more: ${input.appUrl}/runs/${input.runId}` : '',
+    more > 0 ? `…and ${more} more: ${runLink}` : '',
     scope,
   ].join('\n');
   const line = (label: string, value: string) =>
     `<tr><th align="left" valign="top" style="width: 6.5em; font-weight: normal; color: #4D5A68">${label}</th><td style="word-break: break-word">${value}</td></tr>`;
   const html = `<!doctype html><html><body style="font-family: sans-serif">
 <p>${escape(lead)}</p>
-${classLine ? `<p><strong>${escape(classLine)}</strong></p>\n` : ''}${summary.html}
+${classLine ? `<p><strong>${escape(classLine)}</strong></p>\n` : ''}${total > 0 ? summary.html : ''}${
+    stopped.length > 0
+      ? `<h3 style="font-size: 1em">${escape(stoppedHeading)}</h3>
+<ul>${stoppedLines.map((l) => `<li>${escape(l)}</li>`).join('')}</ul>
+<p><a href="${escape(runLink)}">the run</a></p>\n`
+      : ''
+  }
 <p>${escape(changesLine)}</p>
 ${groups
   .map(
@@ -172,7 +197,7 @@ ${p.rows
         .join('\n')}`,
   )
   .join('\n')}
-${more > 0 ? `<p>…and ${more} more: <a href="${escape(`${input.appUrl}/runs/${input.runId}`)}">the whole run</a></p>` : ''}
+${more > 0 ? `<p>…and ${more} more: <a href="${escape(runLink)}">the whole run</a></p>` : ''}
 <p><small>${escape(scope)}</small></p>
 </body></html>`;
   return {
