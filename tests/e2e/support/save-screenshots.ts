@@ -56,5 +56,11 @@ export async function saveScreenshots(page: Page, name: string, ready: () => Pro
       quality: 85,
     });
   }
-  if (original) await page.setViewportSize(original);
+  // Back to the caller's size the same way, and settled: going back from wide to a phone crosses the
+  // breakpoint too, and a field filled before the frame swap finished was filled in the old frame
+  // (seen once in five clean-clone runs: day-review-weight's "Path 1 radius" kept -1 after fill('1')).
+  if (original) {
+    await resize(page, original);
+    await ready();
+  }
 }
