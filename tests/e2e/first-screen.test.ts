@@ -1,6 +1,7 @@
 import { mkdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { DEMO_USERS } from '../../server/seed/demo-users';
+import type { Request } from 'playwright-core';
 import { BASE_URL, openBrowser, type OpenBrowser } from './support/open-browser';
 
 /**
@@ -71,7 +72,7 @@ async function signInFresh(b: OpenBrowser): Promise<void> {
   // Transferred bytes are the encoded body (gzip on the wire), read from the request's sizes
   // once the response finished; response.body() would give the decompressed bytes.
   const transfers: Promise<{ url: string; type: string; encoded: number; decoded: number }>[] = [];
-  b.page.on('requestfinished', (request) => {
+  const onFinished = (request: Request) => {
     const type = request.resourceType();
     if (type !== 'script' && type !== 'font' && type !== 'stylesheet' && type !== 'document') return;
     transfers.push(
@@ -82,7 +83,8 @@ async function signInFresh(b: OpenBrowser): Promise<void> {
         decoded: (await (await request.response())?.body().catch(() => Buffer.alloc(0)))?.length ?? 0,
       })),
     );
-  });
+  };
+  b.page.on('requestfinished', onFinished);
   const kwame = DEMO_USERS.find((u) => u.email === 'kwame@sheetkeeper.test')!;
   const began = Date.now();
   await b.page.goto(`${BASE_URL}/sign-in`);
@@ -93,6 +95,9 @@ async function signInFresh(b: OpenBrowser): Promise<void> {
   await b.page.locator('[data-testid^="plan-"]').first().waitFor();
   const signedInScreenMs = Date.now() - clicked;
   const loadAndSignInMs = Date.now() - began;
+  // Measured up to the first plan card. A request that finished later would be read after the
+  // context closed, and its rejected promise, awaited by no one, would fail the file after its tests.
+  b.page.off('requestfinished', onFinished);
   const files = await Promise.all(transfers);
   const transferred = files.reduce((sum, f) => sum + f.encoded, 0);
   const uncompressed = files.reduce((sum, f) => sum + f.decoded, 0);
