@@ -1,6 +1,7 @@
-import { useEffect, useRef } from 'react';
+import { useRef } from 'react';
 import { ActivityIndicator, Pressable, StyleSheet, Text, type View } from 'react-native';
 import { carriedFocus } from './carried-focus';
+import { useMountFocus } from './use-mount-focus';
 import { theme } from '../../constants/theme';
 
 interface Props {
@@ -29,11 +30,7 @@ export function ActionButton({
   const inactive = disabled || busy;
   const name = accessibilityLabel ?? label;
   const node = useRef<View>(null);
-  useEffect(() => {
-    if (focusOnMount || (carriesFocus && carriedFocus.take(name))) node.current?.focus();
-    // Once, on mount: only a screen mounted by this button's press takes the focus it carried.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, []);
+  useMountFocus(() => (focusOnMount || (carriesFocus && carriedFocus.take(name)) ? node.current : null));
   return (
     <Pressable
       ref={node}

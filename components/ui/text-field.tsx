@@ -1,6 +1,7 @@
-import { useEffect, useRef } from 'react';
+import { useRef } from 'react';
 import { StyleSheet, TextInput, View, type TextInputProps } from 'react-native';
 import { carriedFocus } from './carried-focus';
+import { useMountFocus } from './use-mount-focus';
 import { theme } from '../../constants/theme';
 import { INPUT_BOX_STYLE } from './input-box-style';
 import { RuleLines } from './rule-lines';
@@ -40,11 +41,7 @@ export function TextField({
   ...inputProps
 }: Props) {
   const input = useRef<TextInput>(null);
-  useEffect(() => {
-    if (carriesFocus && carriedFocus.take(label)) input.current?.focus();
-    // Once, on mount: only a screen mounted by this field's submit takes the focus it carried.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, []);
+  useMountFocus(() => (carriesFocus && carriedFocus.take(label) ? input.current : null));
   return (
     <View style={styles.field}>
       <SkText variant="smallLabel" style={styles.label}>

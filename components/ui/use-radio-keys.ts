@@ -1,5 +1,6 @@
-import { useEffect, useRef } from 'react';
+import { useRef } from 'react';
 import { carriedFocus } from './carried-focus';
+import { useMountFocus } from './use-mount-focus';
 import type { View } from 'react-native';
 
 /** The keys of the WAI-ARIA radio group pattern and where each moves: a step, or the first or last option. */
@@ -42,12 +43,11 @@ export function useRadioKeys(
     if (name) carriedFocus.carry(name);
     choose(index);
   };
-  useEffect(() => {
+  // The checked option of a group that a choice mounted afresh takes the focus that choice carried.
+  useMountFocus(() => {
     const name = names?.[stop];
-    if (name && carriedFocus.take(name)) nodes.current[stop]?.focus();
-    // Once, on mount: only a screen mounted by a choice takes the focus that choice carried.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, []);
+    return name && carriedFocus.take(name) ? nodes.current[stop] : null;
+  });
   return (index: number) => ({
     ref: (node: View | null) => {
       nodes.current[index] = node;
