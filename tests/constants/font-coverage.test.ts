@@ -1,5 +1,6 @@
-import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import path from 'node:path';
+import { sourceFiles } from '../setup/source-files';
 
 const ROOT = path.join(__dirname, '..', '..');
 
@@ -32,13 +33,6 @@ function mappedCodePoints(file: string): Set<number> {
   return points;
 }
 
-function sourceFiles(dir: string): string[] {
-  return readdirSync(dir).flatMap((name) => {
-    const full = path.join(dir, name);
-    return statSync(full).isDirectory() ? sourceFiles(full) : /\.(tsx?|ts)$/.test(name) ? [full] : [];
-  });
-}
-
 describe('the shipped fonts', () => {
   // Common practice: a character missing from the font falls back to whatever the device has,
   // or shows as an empty box. Everything the app can show must be in IBM Plex Sans or Mono.
@@ -57,14 +51,11 @@ describe('the shipped fonts', () => {
 
   it('cover every character in the text of the screens and components (comments aside)', () => {
     const missing: string[] = [];
-    for (const file of ['app', 'components', 'client', 'constants'].flatMap((d) => sourceFiles(path.join(ROOT, d)))) {
-      const code = readFileSync(file, 'utf8')
-        .replace(/\/\*[\s\S]*?\*\//g, '')
-        .replace(/(^|[^:'"`])\/\/.*$/gm, '$1');
+    for (const { file, code } of sourceFiles(['app', 'components', 'client', 'constants'])) {
       for (const ch of new Set(code)) {
         const cp = ch.codePointAt(0)!;
         if (cp > 0x7e && !covered.has(cp))
-          missing.push(`${path.relative(ROOT, file)}: ${ch} U+${cp.toString(16).toUpperCase().padStart(4, '0')}`);
+          missing.push(`${file}: ${ch} U+${cp.toString(16).toUpperCase().padStart(4, '0')}`);
       }
     }
     expect(missing).toEqual([]);

@@ -1,15 +1,5 @@
-import { readdirSync, readFileSync, statSync } from 'node:fs';
-import path from 'node:path';
 import { GLYPHS } from '../../constants/glyphs';
-
-const ROOT = path.join(__dirname, '..', '..');
-
-function sourceFiles(dir: string): string[] {
-  return readdirSync(dir).flatMap((name) => {
-    const full = path.join(dir, name);
-    return statSync(full).isDirectory() ? sourceFiles(full) : /\.tsx?$/.test(name) ? [full] : [];
-  });
-}
+import { sourceFiles } from '../setup/source-files';
 
 /**
  * A character a reader takes as a sign: a symbol outside ASCII (Unicode category S: arrows, marks,
@@ -28,14 +18,9 @@ describe('the glyphs', () => {
   it('declare every sign the screens, components and client show (comments aside)', () => {
     const declared = new Set<string>(Object.values(GLYPHS).map((g) => g.glyph));
     const undeclared: string[] = [];
-    for (const file of ['app', 'components', 'client'].flatMap((d) => sourceFiles(path.join(ROOT, d)))) {
-      const code = readFileSync(file, 'utf8')
-        .replace(/\/\*[\s\S]*?\*\//g, '')
-        .replace(/(^|[^:'"`])\/\/.*$/gm, '$1');
+    for (const { file, code } of sourceFiles(['app', 'components', 'client']))
       for (const ch of new Set(code))
-        if (ch.codePointAt(0)! > 0x7e && SIGN.test(ch) && !declared.has(ch))
-          undeclared.push(`${path.relative(ROOT, file)}: ${ch}`);
-    }
+        if (ch.codePointAt(0)! > 0x7e && SIGN.test(ch) && !declared.has(ch)) undeclared.push(`${file}: ${ch}`);
     expect(undeclared).toEqual([]);
   });
 });
