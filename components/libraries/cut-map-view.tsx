@@ -84,7 +84,6 @@ export function CutMapView({ name, fn, onChooseFn }: { name: string; fn: string;
             accessibilityRole="radio"
             accessibilityLabel={`Map ${f}`}
             aria-checked={f === fn}
-            onPress={() => onChooseFn(f)}
             style={[styles.chip, f === fn && styles.chipOn]}
           >
             <RadioMark on={f === fn} inverse={f === fn} />

@@ -66,7 +66,6 @@ export function CiExample({ role }: { role: Role }) {
               accessibilityRole="radio"
               aria-checked={p.id === plan?.id}
               accessibilityLabel={`Use plan ${p.name} in the example`}
-              onPress={() => setChosen(p.id)}
               style={[styles.chip, p.id === plan?.id && styles.chipOn]}
             >
               <RadioMark on={p.id === plan?.id} />

@@ -4,7 +4,6 @@ import { SkText } from './sk-text';
 import { CHOICE_CHIP_STYLE } from './choice-chip-style';
 import { RadioMark } from './radio-mark';
 import { useRadioKeys } from './use-radio-keys';
-import { carriedFocus } from './carried-focus';
 
 interface Props<V extends string | undefined> {
   label: string;
@@ -60,10 +59,6 @@ export function ChipGroup<V extends string | undefined>({
               accessibilityRole="radio"
               accessibilityLabel={names[index]}
               aria-checked={on}
-              onPress={() => {
-                carriedFocus.carry(names[index]!);
-                onChange(o.value);
-              }}
               style={[styles.chip, on && styles.chipOn]}
             >
               <RadioMark on={on} inverse={on} />

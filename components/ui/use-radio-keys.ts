@@ -53,6 +53,8 @@ export function useRadioKeys(
       nodes.current[index] = node;
     },
     tabIndex: index === stop ? (0 as const) : (-1 as const),
+    /** A press chooses as Space does, carrying the focus the same way. */
+    onPress: () => chooseCarrying(index),
     onKeyDown: (event: KeyEvent) => {
       if (event.key === ' ' || event.key === 'Spacebar') {
         event.preventDefault();
